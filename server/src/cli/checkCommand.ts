@@ -1,0 +1,30 @@
+/** `sublevel check <files or folders…>`: diagnostics for CI. Exit 1 when any error is found. */
+import { analyze } from '../eval/analyze';
+import { toDiagnosticResult } from '../eval/evaluate';
+import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
+import { collectSetupFiles, readSetupFile } from './files';
+import type { CliIO } from './io';
+
+export function runCheck(args: ParsedArgs, io: CliIO): number {
+  rejectUnknownOptions(args, ['format']);
+  const format = stringOption(args, 'format', ['text', 'json']) ?? 'text';
+  if (args.positionals.length === 0) throw new UsageError('check needs at least one file or folder');
+  const files = collectSetupFiles(args.positionals);
+  let errors = 0;
+  const report: { file: string; diagnostics: ReturnType<typeof toDiagnosticResult>[] }[] = [];
+  for (const file of files) {
+    const { problems } = analyze(readSetupFile(file));
+    errors += problems.filter((p) => p.severity === 'error').length;
+    const diagnostics = problems.map(toDiagnosticResult);
+    report.push({ file, diagnostics });
+    if (format === 'text') {
+      for (const d of diagnostics) io.out(`${file}:${d.line}:${d.column} ${d.severity} ${d.code} ${d.message}`);
+    }
+  }
+  if (format === 'json') io.out(JSON.stringify({ format: 'sublevel-check', version: 1, files: report }, null, 2));
+  else {
+    const total = report.reduce((n, r) => n + r.diagnostics.length, 0);
+    io.err(`${files.length} file${files.length === 1 ? '' : 's'} checked: ${errors} error${errors === 1 ? '' : 's'}, ${total - errors} other finding${total - errors === 1 ? '' : 's'}`);
+  }
+  return errors > 0 ? 1 : 0;
+}

@@ -1,0 +1,77 @@
+/** The human-readable report printed by `sublevel eval`. */
+import { ATOMIC_MASS_UNIT } from '../physics/constants';
+import { fieldText, frequencyText, lengthText, trimNumber } from '../eval/quantityText';
+import type { EvaluationResult, LevelResult } from '../eval/resultTypes';
+import { table } from './table';
+
+export function textReport(file: string, r: EvaluationResult): string[] {
+  const out: string[] = [];
+  out.push(`Sublevel evaluation of ${file}`);
+  out.push(`constants: ${r.constants}; g_s = ${r.settings.g_s === 2 ? '2 (textbook)' : '|g_e| (CODATA)'}; energies are E/h`);
+  for (const s of r.species) {
+    out.push('');
+    out.push(`species ${s.name}${s.builtin ? ' (built-in data)' : ' (defined in this file)'}`);
+    const mass = s.mass_kg ? `${trimNumber(s.mass_kg.value / ATOMIC_MASS_UNIT, 9)} u` : 'not given';
+    out.push(`  mass ${mass}   I = ${fraction(s.I)}   g_I = ${trimNumber(s.g_I.value, 8)}  [${s.g_I.source}]`);
+    for (const l of r.levels.filter((x) => x.species === s.name)) out.push(...levelReport(l));
+  }
+  if (r.magnets.length > 0) {
+    out.push('');
+    out.push('magnets');
+    out.push(
+      ...table(
+        ['name', 'field', 'gradient', 'length'],
+        r.magnets.map((m) => [
+          m.name,
+          m.field_T !== undefined ? fieldText(m.field_T) : '—',
+          m.gradient_T_per_m !== undefined ? `${trimNumber(m.gradient_T_per_m, 5)} T/m` : '—',
+          m.length_m !== undefined ? lengthText(m.length_m) : '—',
+        ]),
+      ).map((l) => '  ' + l),
+    );
+  }
+  if (r.lines.length > 0) {
+    out.push('');
+    out.push('lines');
+    for (const l of r.lines) out.push(`  ${l.name}: ${l.lower ?? '?'} -> ${l.upper ?? '?'}${l.species ? ` (${l.species})` : ''}`);
+  }
+  const counts = (sev: string): number => r.diagnostics.filter((d) => d.severity === sev).length;
+  out.push('');
+  out.push(`diagnostics: ${counts('error')} errors, ${counts('warning')} warnings, ${counts('info') + counts('hint')} notes`);
+  for (const d of r.diagnostics) out.push(`  ${d.line}:${d.column} ${d.severity} ${d.code} ${d.message}`);
+  return out;
+}
+
+function levelReport(l: LevelResult): string[] {
+  const out: string[] = [];
+  out.push('');
+  const config = l.designation.configuration ? `${l.designation.configuration} ` : '';
+  out.push(`  level ${l.level}: ${config}${l.designation.unicode}   S = ${fraction(l.S)}, L = ${l.L}, J = ${l.J_text}, ${l.sublevel_count} sublevels`);
+  const g = l.g_J;
+  const measured = g.measured ? `   measured ${trimNumber(g.measured.value, 8)} [${g.measured.source}]` : '';
+  out.push(`    g_J (Landé) = ${trimNumber(g.lande, 9)}  (= ${g.lande_fraction} with g_s = 2)${measured}`);
+  out.push(`    g_J used = ${trimNumber(g.used, 9)}  [${g.used_source}]`);
+  if (l.hyperfine) {
+    const h = l.hyperfine;
+    const consts = [`A = ${frequencyText(h.A_Hz.value, 10)} [${h.A_Hz.source}]`];
+    if (h.B_Hz) consts.push(`B = ${frequencyText(h.B_Hz.value, 8)} [${h.B_Hz.source}]`);
+    if (h.C_Hz) consts.push(`C = ${frequencyText(h.C_Hz.value, 6)} [${h.C_Hz.source}]`);
+    for (const c of consts) out.push(`    ${c}`);
+    out.push(
+      ...table(
+        ['F', 'zero-field shift', 'g_F'],
+        h.levels.map((f) => [f.F_text, frequencyText(f.shift_Hz, 10), trimNumber(f.g_F, 8)]),
+      ).map((x) => '      ' + x),
+    );
+    for (const iv of h.intervals) out.push(`    interval F=${fraction(iv.F_lower)} → F=${fraction(iv.F_upper)}: ${frequencyText(iv.interval_Hz, 12)}`);
+  }
+  for (const f of l.at_fields) {
+    out.push(`    at ${f.source.kind} ${f.source.name} = ${fieldText(f.field_T)} (weak-field, linear):`);
+    out.push(...table(['sublevel', 'energy'], f.linear.map((s) => [s.label, frequencyText(s.energy_Hz, 9)])).map((x) => '      ' + x));
+  }
+  return out;
+}
+
+function fraction(x: number): string {
+  return Number.isInteger(x) ? String(x) : `${Math.round(2 * x)}/2`;
+}

@@ -1,0 +1,78 @@
+/**
+ * Model + physics → results. Pure: the same model always gives the same result, so callers
+ * (language server, CLI) may cache it per document version.
+ */
+import type { Problem } from '../format/ast';
+import { CONSTANTS_SOURCE } from '../physics/constants';
+import type { SetupModel } from '../model/types';
+import { evaluateLevel, type WorkingField } from './levelEvaluation';
+import {
+  EVALUATION_FORMAT,
+  EVALUATION_VERSION,
+  type DiagnosticResult,
+  type EvaluationResult,
+  type LevelResult,
+} from './resultTypes';
+
+export function workingFields(model: SetupModel): WorkingField[] {
+  const out: WorkingField[] = [];
+  for (const f of model.fields) if (f.tesla) out.push({ source: { kind: 'field', name: f.name }, tesla: f.tesla.value });
+  for (const m of model.magnets) if (m.fieldT) out.push({ source: { kind: 'magnet', name: m.name }, tesla: m.fieldT.value });
+  return out;
+}
+
+export function evaluate(model: SetupModel, problems: Problem[]): EvaluationResult {
+  const fields = workingFields(model);
+  const levels: LevelResult[] = [];
+  for (const s of model.species) {
+    for (const l of s.levels) {
+      const r = evaluateLevel(l, model.settings, fields);
+      if (r) levels.push(r);
+    }
+  }
+  return {
+    format: EVALUATION_FORMAT,
+    version: EVALUATION_VERSION,
+    constants: CONSTANTS_SOURCE,
+    conventions: {
+      energy: 'energies are frequencies E/h in Hz',
+      g_I: 'H = mu_B B (g_J J_z + g_I I_z); g_I in units of mu_B, negative for a positive nuclear moment',
+      energy_zero: "each level's centre of gravity (hyperfine-free energy)",
+    },
+    settings: { g_s: model.settings.gS, reduced_mass: model.settings.reducedMass },
+    species: model.species.map((s) => ({
+      name: s.name,
+      builtin: !!s.builtin,
+      ...(s.massKg ? { mass_kg: { value: s.massKg.value, source: s.massKg.source } } : {}),
+      I: s.twoI.value / 2,
+      g_I: { value: s.gI.value, source: s.gI.source },
+      levels: s.levels.map((l) => l.name),
+    })),
+    levels,
+    fields: model.fields.map((f) => ({ name: f.name, ...(f.tesla ? { field_T: f.tesla.value } : {}) })),
+    magnets: model.magnets.map((m) => ({
+      name: m.name,
+      ...(m.fieldT ? { field_T: m.fieldT.value } : {}),
+      ...(m.gradientTPerM ? { gradient_T_per_m: m.gradientTPerM.value } : {}),
+      ...(m.lengthM ? { length_m: m.lengthM.value } : {}),
+    })),
+    lines: model.lines.map((l) => ({
+      name: l.name,
+      ...(l.lower ? { species: l.lower.species.name, lower: l.lower.name } : {}),
+      ...(l.upper ? { upper: l.upper.name } : {}),
+    })),
+    diagnostics: problems.map(toDiagnosticResult),
+  };
+}
+
+export function toDiagnosticResult(p: Problem): DiagnosticResult {
+  return {
+    code: p.code,
+    severity: p.severity,
+    message: p.message,
+    line: p.range.start.line + 1,
+    column: p.range.start.character + 1,
+    end_line: p.range.end.line + 1,
+    end_column: p.range.end.character + 1,
+  };
+}

@@ -1,0 +1,116 @@
+/** Everything v1 of the core computes for one level: g-factors, F levels, linear sublevels. */
+import { ELECTRON_GS } from '../physics/constants';
+import { hyperfineGF, landeGJ, landeGJFraction, orbitalGFactor } from '../physics/gFactors';
+import { hyperfineLevels } from '../physics/hyperfineZeroField';
+import { linearSublevels } from '../physics/linearZeeman';
+import { allowedJ, formatTermSymbol } from '../physics/termSymbol';
+import type { LevelModel, SettingsModel, Valued } from '../model/types';
+import { halfText, signedHalfText } from './halves';
+import type { FieldPointResult, GFactorResult, HyperfineResult, LevelResult, SourcedNumber, SublevelResult } from './resultTypes';
+
+export interface WorkingField {
+  source: { kind: 'field' | 'magnet'; name: string };
+  tesla: number;
+}
+
+export function evaluateLevel(level: LevelModel, settings: SettingsModel, fields: WorkingField[]): LevelResult | undefined {
+  const term = level.term;
+  if (!level.valid || !term || term.twoJ === null) return undefined;
+  const twoJ = term.twoJ;
+  const twoI = level.species.twoI.value;
+  const gJ = gFactor(level, settings);
+  const hyperfine = twoI > 0 ? hyperfineOf(level, gJ.used, twoJ, twoI) : undefined;
+  return {
+    species: level.species.name,
+    level: level.name,
+    designation: {
+      text: level.designationText,
+      ascii: formatTermSymbol(term, 'ascii'),
+      unicode: formatTermSymbol(term, 'unicode'),
+      configuration: level.configuration?.text ?? null,
+      parity: level.configuration?.parity ?? term.parityMark,
+    },
+    S: term.twoS / 2,
+    L: term.L,
+    J: twoJ / 2,
+    J_text: halfText(twoJ),
+    allowed_J: allowedJ(term.twoS, term.L).map(halfText),
+    I: twoI / 2,
+    g_I: sourced(level.species.gI),
+    g_J: gJ,
+    ...(hyperfine ? { hyperfine } : {}),
+    sublevel_count: (twoJ + 1) * (twoI + 1),
+    ...(level.energyHz ? { energy_Hz: sourced(level.energyHz) } : {}),
+    at_fields: fields.map((f) => linearAt(f, gJ.used, twoJ, twoI, hyperfine)),
+  };
+}
+
+function gFactor(level: LevelModel, settings: SettingsModel): GFactorResult {
+  const term = level.term!;
+  const twoJ = term.twoJ!;
+  const gS = settings.gS === 2 ? 2 : ELECTRON_GS;
+  const gL = settings.reducedMass && level.species.massKg ? orbitalGFactor(level.species.massKg.value) : 1;
+  const lande = twoJ === 0 ? 0 : landeGJ(term.twoS, term.L, twoJ, { gS, gL });
+  const frac = twoJ === 0 ? { num: 0, den: 1 } : landeGJFraction(term.twoS, term.L, twoJ);
+  const measured = level.gJMeasured;
+  return {
+    used: measured ? measured.value : lande,
+    used_source: measured ? measured.source : `Landé formula (LS coupling, g_s = ${settings.gS === 2 ? '2' : '|g_e| CODATA 2022'})`,
+    lande,
+    lande_fraction: frac.den === 1 ? String(frac.num) : `${frac.num}/${frac.den}`,
+    g_s: gS,
+    g_L: gL,
+    ...(measured ? { measured: sourced(measured) } : {}),
+  };
+}
+
+function hyperfineOf(level: LevelModel, gJ: number, twoJ: number, twoI: number): HyperfineResult | undefined {
+  if (!level.A) return undefined;
+  const A = level.A.value;
+  const B = twoI >= 2 && twoJ >= 2 ? level.B?.value ?? 0 : 0;
+  const C = twoI >= 3 && twoJ >= 3 ? level.C?.value ?? 0 : 0;
+  const gI = level.species.gI.value;
+  const levels = hyperfineLevels(twoJ, twoI, A, B, C).map((h) => ({
+    F: h.twoF / 2,
+    F_text: halfText(h.twoF),
+    shift_Hz: h.shift,
+    g_F: h.twoF === 0 ? 0 : hyperfineGF(gJ, gI, twoJ, twoI, h.twoF),
+  }));
+  const intervals = levels.slice(1).map((u, i) => ({ F_lower: levels[i]!.F, F_upper: u.F, interval_Hz: u.shift_Hz - levels[i]!.shift_Hz }));
+  return {
+    A_Hz: sourced(level.A),
+    ...(level.B ? { B_Hz: sourced(level.B) } : {}),
+    ...(level.C ? { C_Hz: sourced(level.C) } : {}),
+    levels,
+    intervals,
+  };
+}
+
+function linearAt(f: WorkingField, gJ: number, twoJ: number, twoI: number, hf: HyperfineResult | undefined): FieldPointResult {
+  const linear: SublevelResult[] = [];
+  if (twoI === 0 || !hf) {
+    // No resolved hyperfine structure: J sublevels (with I > 0 and no A, the nucleus only adds degeneracy).
+    for (const s of linearSublevels(gJ, twoJ, f.tesla)) {
+      linear.push({ label: `m_J=${signedHalfText(s.twoM)}`, J: twoJ / 2, m: s.twoM / 2, m_text: signedHalfText(s.twoM), energy_Hz: s.energyHz });
+    }
+  } else {
+    for (const F of hf.levels) {
+      const twoF = Math.round(2 * F.F);
+      for (const s of linearSublevels(F.g_F, twoF, f.tesla)) {
+        linear.push({
+          label: `F=${F.F_text}, m_F=${signedHalfText(s.twoM)}`,
+          F: F.F,
+          m: s.twoM / 2,
+          m_text: signedHalfText(s.twoM),
+          energy_Hz: F.shift_Hz + s.energyHz,
+        });
+      }
+    }
+  }
+  linear.sort((a, b) => a.energy_Hz - b.energy_Hz);
+  return { source: f.source, field_T: f.tesla, linear };
+}
+
+function sourced(v: Valued<number>): SourcedNumber {
+  return { value: v.value, source: v.source, ...(v.uncertainty !== undefined ? { uncertainty: v.uncertainty } : {}) };
+}

@@ -1,0 +1,131 @@
+/**
+ * The evaluation result. It is also the CLI's JSON document (`sublevel eval --format json`),
+ * so names carry SI units (`energy_Hz`, `field_T`) and the shape is versioned:
+ * docs/schema/evaluation.schema.json describes it. Bump EVALUATION_VERSION on any breaking change.
+ */
+import type { Problem } from '../format/ast';
+
+export const EVALUATION_FORMAT = 'sublevel-evaluation';
+export const EVALUATION_VERSION = 1;
+
+export interface SourcedNumber {
+  value: number;
+  source: string;
+  uncertainty?: number;
+}
+
+export interface GFactorResult {
+  /** The g_J used for sublevel energies: the measured one if known, otherwise the LS (Landé) value. */
+  used: number;
+  used_source: string;
+  /** Landé g_J with the file's g_s choice (default CODATA |g_e|) and g_L. */
+  lande: number;
+  /** Landé g_J with g_s = 2 and g_L = 1, exactly, as a fraction "4/3". */
+  lande_fraction: string;
+  g_s: number;
+  g_L: number;
+  measured?: SourcedNumber;
+}
+
+export interface HyperfineLevelResult {
+  F: number;
+  F_text: string;
+  /** Zero-field energy of the F level relative to the level's centre of gravity. */
+  shift_Hz: number;
+  g_F: number;
+}
+
+export interface HyperfineResult {
+  A_Hz: SourcedNumber;
+  B_Hz?: SourcedNumber;
+  C_Hz?: SourcedNumber;
+  levels: HyperfineLevelResult[];
+  /** Adjacent F intervals, E(F_upper) − E(F_lower), in order of F. */
+  intervals: { F_lower: number; F_upper: number; interval_Hz: number }[];
+}
+
+export interface SublevelResult {
+  /** Label in the low-field basis, e.g. "F=2, m_F=+1" or "m_J=-1/2". */
+  label: string;
+  F?: number;
+  J?: number;
+  m: number;
+  m_text: string;
+  /** Energy relative to the level's centre of gravity, E/h. */
+  energy_Hz: number;
+}
+
+export interface FieldPointResult {
+  /** The field block or magnet this field comes from. */
+  source: { kind: 'field' | 'magnet'; name: string };
+  field_T: number;
+  /** Weak-field (linear) energies: zero-field hyperfine shift + g m μ_B B. */
+  linear: SublevelResult[];
+}
+
+export interface LevelResult {
+  species: string;
+  level: string;
+  designation: { text: string; ascii: string; unicode: string; configuration: string | null; parity: 'even' | 'odd' | null };
+  S: number;
+  L: number;
+  J: number;
+  J_text: string;
+  /** J values allowed by L and S, as text. */
+  allowed_J: string[];
+  I: number;
+  g_I: SourcedNumber;
+  g_J: GFactorResult;
+  hyperfine?: HyperfineResult;
+  sublevel_count: number;
+  energy_Hz?: SourcedNumber;
+  at_fields: FieldPointResult[];
+}
+
+export interface SpeciesResult {
+  name: string;
+  builtin: boolean;
+  mass_kg?: SourcedNumber;
+  I: number;
+  g_I: SourcedNumber;
+  levels: string[];
+}
+
+export interface MagnetResult {
+  name: string;
+  field_T?: number;
+  gradient_T_per_m?: number;
+  length_m?: number;
+}
+
+export interface LineResult {
+  name: string;
+  species?: string;
+  lower?: string;
+  upper?: string;
+}
+
+export interface DiagnosticResult {
+  code: string;
+  severity: Problem['severity'];
+  message: string;
+  /** 1-based line and column, as editors show them. */
+  line: number;
+  column: number;
+  end_line: number;
+  end_column: number;
+}
+
+export interface EvaluationResult {
+  format: typeof EVALUATION_FORMAT;
+  version: typeof EVALUATION_VERSION;
+  constants: string;
+  conventions: { energy: string; g_I: string; energy_zero: string };
+  settings: { g_s: 'exact' | 2; reduced_mass: boolean };
+  species: SpeciesResult[];
+  levels: LevelResult[];
+  fields: { name: string; field_T?: number }[];
+  magnets: MagnetResult[];
+  lines: LineResult[];
+  diagnostics: DiagnosticResult[];
+}

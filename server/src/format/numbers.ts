@@ -1,0 +1,81 @@
+/**
+ * Numbers as the format writes them: `401.75`, `-3.06`, `1.2e-3`, `+2`, exact fractions `3/2`,
+ * and the uncertainty notation `0.35(2)` (digits in parentheses apply to the last digits shown,
+ * so 0.35(2) = 0.35 ± 0.02 and 1.2345(67)e-3 = (1.2345 ± 0.0067)·10⁻³). `12.3(1.2)` (uncertainty
+ * written with its own decimal point) means 12.3 ± 1.2.
+ */
+import type { ParsedNumber } from './ast';
+
+/** sign, mantissa, optional (uncertainty), optional exponent — anchored at the start only. */
+const DECIMAL_PREFIX = /^([+-]?)(\d+(?:\.\d*)?|\.\d+)(?:\((\d+(?:\.\d+)?)\))?(?:[eE]([+-]?\d+))?/;
+const FRACTION = /^([+-]?)(\d+)\/(\d+)$/;
+
+export type NumberReading =
+  | { ok: true; number: ParsedNumber }
+  /** Shaped like a number but unusable (division by zero, out of range). */
+  | { ok: false; reason: string };
+
+function gcd(a: number, b: number): number {
+  while (b) [a, b] = [b, a % b];
+  return a;
+}
+
+function decimalsOf(mantissa: string): number {
+  const dot = mantissa.indexOf('.');
+  return dot < 0 ? 0 : mantissa.length - dot - 1;
+}
+
+function fromDecimalMatch(m: RegExpExecArray): NumberReading {
+  const [, sign = '', mantissa = '', unc, exp] = m;
+  const value = Number(`${sign}${mantissa}${exp !== undefined ? `e${exp}` : ''}`) + 0; // +0 turns -0 into 0
+  if (!Number.isFinite(value)) return { ok: false, reason: 'is too large to represent' };
+  const number: ParsedNumber = { value };
+  if (unc !== undefined) {
+    const power = exp !== undefined ? Number(exp) : 0;
+    const uncertainty = unc.includes('.')
+      ? Number(`${unc}e${power}`)
+      : Number(`${unc}e${power - decimalsOf(mantissa)}`);
+    if (!Number.isFinite(uncertainty)) return { ok: false, reason: 'has an uncertainty too large to represent' };
+    number.uncertainty = uncertainty;
+  } else if (exp === undefined && !mantissa.includes('.') && Number.isSafeInteger(value)) {
+    number.fraction = { num: value, den: 1 };
+  }
+  return { ok: true, number };
+}
+
+/**
+ * Reads a whole string as a number. Returns undefined when the text is not shaped like a
+ * number at all (then it is a word, or a number glued to a unit).
+ */
+export function readNumber(text: string): NumberReading | undefined {
+  const f = FRACTION.exec(text);
+  if (f) {
+    const [, sign = '', numText = '', denText = ''] = f;
+    const num = Number(numText);
+    const den = Number(denText);
+    if (den === 0) return { ok: false, reason: 'divides by zero' };
+    if (!Number.isSafeInteger(num) || !Number.isSafeInteger(den)) return { ok: false, reason: 'is too large to be exact' };
+    const g = gcd(num, den) || 1;
+    const n = (sign === '-' ? -num : num) / g + 0;
+    const d = den / g;
+    return { ok: true, number: { value: n / d, fraction: { num: n, den: d } } };
+  }
+  const m = DECIMAL_PREFIX.exec(text);
+  if (!m || m[0].length !== text.length) return undefined;
+  return fromDecimalMatch(m);
+}
+
+/**
+ * The longest number at the start of `text` (no fractions), e.g. `720` in `720K`.
+ * `length` is how many characters it took.
+ */
+export function readNumberPrefix(text: string): { reading: NumberReading; length: number } | undefined {
+  const m = DECIMAL_PREFIX.exec(text);
+  if (!m) return undefined;
+  return { reading: fromDecimalMatch(m), length: m[0].length };
+}
+
+/** True when the text starts like a number (optional sign, then a digit or `.digit`). */
+export function startsLikeNumber(text: string): boolean {
+  return /^[+-]?(\d|\.\d)/.test(text);
+}

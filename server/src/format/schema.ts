@@ -1,0 +1,34 @@
+/**
+ * Which statements and setting keys the format allows where. Keys are case-sensitive
+ * (`A` is the hyperfine constant; `a` is a typo that gets a suggestion).
+ */
+import type { BlockKind } from './ast';
+
+export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 'beam', 'line', 'settings'];
+
+export const LEVEL_WORD = 'level';
+
+/** Keys a level takes, on its own line or on the lines after it. */
+export const LEVEL_KEYS: readonly string[] = ['A', 'B', 'C', 'g_J', 'energy'];
+
+/** Keys each block takes on the lines after its header. */
+export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
+  species: ['mass', 'I', 'g_I', 'mu_I'],
+  field: [],
+  magnet: ['field', 'gradient', 'length'],
+  beam: ['species', 'level', 'source', 'slits', 'magnet', 'drift', 'detector'],
+  line: [],
+  settings: ['g_s', 'reduced_mass'],
+};
+
+/** Plain words that appear inside values; never mistaken for misspelt units. */
+export const VALUE_WORDS: readonly string[] = ['oven', 'jet', 'speed', 'spread', 'apart', 'exact', 'on', 'off'];
+
+export function isBlockWord(word: string): word is BlockKind {
+  return (BLOCK_WORDS as readonly string[]).includes(word);
+}
+
+/** The block kinds whose bodies accept `key`, e.g. `mass` → ['species']. */
+export function blocksWithKey(key: string): BlockKind[] {
+  return BLOCK_WORDS.filter((kind) => BLOCK_KEYS[kind].includes(key));
+}

@@ -1,0 +1,334 @@
+/**
+ * Quantities: unit text is split by Sublevel's own grammar (unitGrammar.ts), each name is looked
+ * up in our table, and the size and dimension of each name come from a private mathjs instance
+ * (so the program-wide mathjs is not changed). Document text is never handed to mathjs' parser.
+ *
+ * Frequency-like values (level energies, hyperfine constants) are returned in Hz:
+ * f = E/h for energies and f = c·σ for wave numbers, with the exact SI values of h and c.
+ */
+// mathjs ships as an ES module; with `module: Node16` tsc flags importing it from CommonJS (TS1479)
+// although the types resolve and both vitest and the esbuild bundle load it fine.
+// @ts-ignore TS1479 (not @ts-expect-error: the error goes away under `module: node20`)
+import { all, create } from 'mathjs';
+import type { Problem, Range, ValuePart } from './ast';
+import { makeProblem } from './codes';
+import { didYouMeanText, suggestNames } from './didYouMean';
+import { readNumberPrefix } from './numbers';
+import { canonicalUnitName, isOffsetUnit, parseUnitSyntax } from './unitGrammar';
+import {
+  ATOMIC_MASS_UNIT,
+  BOHR_MAGNETON,
+  ELEMENTARY_CHARGE,
+  NUCLEAR_MAGNETON,
+  PLANCK_H,
+  SPEED_OF_LIGHT,
+} from '../physics/constants';
+
+export type Dimension =
+  | 'flux-density'
+  | 'gradient'
+  | 'length'
+  | 'temperature'
+  | 'speed'
+  | 'frequency-like' /* Hz, 1/m, J, eV */
+  | 'mass'
+  | 'moment'
+  | 'dimensionless'
+  | 'time';
+
+export interface QuantityReading {
+  /** The value in SI units (Hz for frequency-like, J/T for moments, a plain fraction for %). */
+  si?: number;
+  /** The `0.35(2)` uncertainty converted to the same SI unit. */
+  siUncertainty?: number;
+  problem?: Problem;
+}
+
+const math = create(all);
+math.createUnit(
+  {
+    // mathjs' own eV predates the 2019 SI; the exact elementary charge replaces it.
+    eV: { definition: `${ELEMENTARY_CHARGE} J`, prefixes: 'short' },
+    electronvolt: { definition: `${ELEMENTARY_CHARGE} J`, prefixes: 'long' },
+  },
+  { override: true },
+);
+math.createUnit({
+  G: { definition: '1e-4 T', prefixes: 'short' }, // gauss (CGS): 1 G = 1e-4 T exactly
+  gauss: { definition: '1e-4 T', prefixes: 'long' },
+  u: { definition: `${ATOMIC_MASS_UNIT} kg` },
+  Da: { definition: `${ATOMIC_MASS_UNIT} kg` },
+  muN: { definition: `${NUCLEAR_MAGNETON} J/T` },
+  muB: { definition: `${BOHR_MAGNETON} J/T` },
+  percent: { definition: '0.01' },
+});
+
+/** A unit reduced to an SI factor and a dimension vector (mathjs' base dimensions). */
+interface UnitValue {
+  factor: number;
+  dims: number[];
+  /** Set for an offset unit standing alone (degC). */
+  offsetUnit?: string;
+}
+
+type UnitEvaluation =
+  | { ok: true; value: UnitValue }
+  | { ok: false; code: 'unit-unknown' | 'unit-malformed'; message: string; start: number; end: number; suggestions?: string[] };
+
+const MAX_POWER = 12;
+const cache = new Map<string, UnitEvaluation>();
+const CACHE_LIMIT = 1000;
+
+function knownCanonical(name: string): string | undefined {
+  const canonical = canonicalUnitName(name);
+  return canonical !== undefined && math.Unit.isValuelessUnit(canonical) ? canonical : undefined;
+}
+
+/** True when the whole text is a unit Sublevel reads, e.g. `T/m`, `cm^-1`, `%`. */
+export function isUnitText(text: string): boolean {
+  return evaluateUnit(text).ok;
+}
+
+function evaluateUncached(text: string): UnitEvaluation {
+  const syntax = parseUnitSyntax(text);
+  if (!syntax.ok) return { ok: false, code: 'unit-malformed', message: syntax.message, start: syntax.start, end: syntax.end };
+  const dims = new Array<number>(math.Unit.BASE_DIMENSIONS.length).fill(0);
+  let factor = 1;
+  for (const term of syntax.terms) {
+    const canonical = knownCanonical(term.name);
+    if (canonical === undefined) {
+      const suggestions = suggestUnitNames(term.name);
+      return {
+        ok: false,
+        code: 'unit-unknown',
+        message: `unknown unit '${clip(term.name)}'${didYouMeanText(suggestions)}`,
+        start: term.start,
+        end: term.end,
+        suggestions,
+      };
+    }
+    if (Math.abs(term.power) > MAX_POWER) {
+      return { ok: false, code: 'unit-malformed', message: `the power ${term.power} is too large`, start: term.start, end: text.length };
+    }
+    if (isOffsetUnit(canonical)) {
+      if (syntax.terms.length !== 1 || term.power !== 1) {
+        return { ok: false, code: 'unit-malformed', message: `${term.name} cannot be combined with other units or powers; use K`, start: term.start, end: term.end };
+      }
+      const one = math.unit(1, canonical);
+      return { ok: true, value: { factor: 1, dims: [...one.dimensions], offsetUnit: canonical } };
+    }
+    const one = math.unit(1, canonical);
+    factor *= Math.pow(one.value, term.power);
+    one.dimensions.forEach((d, i) => (dims[i] = (dims[i] ?? 0) + d * term.power));
+  }
+  return { ok: true, value: { factor, dims } };
+}
+
+function evaluateUnit(text: string): UnitEvaluation {
+  let hit = cache.get(text);
+  if (!hit) {
+    hit = evaluateUncached(text);
+    if (cache.size >= CACHE_LIMIT) cache.clear();
+    cache.set(text, hit);
+  }
+  return hit;
+}
+
+/** Dimension vector of a unit from our table; for building the reference list below. */
+function dimsOf(text: string): number[] {
+  const e = evaluateUnit(text);
+  if (!e.ok) throw new Error(`internal unit table error: ${text}`);
+  return e.value.dims;
+}
+
+function sameDims(a: number[], b: number[]): boolean {
+  return a.length === b.length && a.every((x, i) => x === b[i]);
+}
+
+/** How a frequency-like unit converts to Hz. */
+type FrequencyBase = 'Hz' | 'per-m' | 'J';
+
+interface DimensionInfo {
+  label: string;
+  examples: string[];
+  /** Reference units with the right dimension. */
+  accepts: string[];
+}
+
+const DIMENSIONS: Record<Dimension, DimensionInfo> = {
+  'flux-density': { label: 'flux density', examples: ['T', 'mT', 'G'], accepts: ['T'] },
+  gradient: { label: 'gradient', examples: ['T/m', 'G/cm'], accepts: ['T/m'] },
+  length: { label: 'length', examples: ['m', 'cm', 'mm', 'um'], accepts: ['m'] },
+  temperature: { label: 'temperature', examples: ['K', 'degC'], accepts: ['K'] },
+  speed: { label: 'speed', examples: ['m/s', 'km/s'], accepts: ['m/s'] },
+  'frequency-like': { label: 'frequency', examples: ['MHz', 'GHz', 'cm^-1', 'eV'], accepts: ['Hz', '1/m', 'J'] },
+  mass: { label: 'mass', examples: ['u', 'Da', 'kg'], accepts: ['kg'] },
+  moment: { label: 'magnetic moment', examples: ['muN', 'muB', 'J/T'], accepts: ['J/T'] },
+  dimensionless: { label: 'fraction', examples: ['%'], accepts: ['%'] },
+  time: { label: 'time', examples: ['s', 'ms', 'us'], accepts: ['s'] },
+};
+
+const ACCEPTED_DIMS: Record<Dimension, number[][]> = Object.fromEntries(
+  (Object.keys(DIMENSIONS) as Dimension[]).map((d) => [d, DIMENSIONS[d].accepts.map(dimsOf)]),
+) as Record<Dimension, number[][]>;
+
+const FREQUENCY_BASES: [FrequencyBase, number[]][] = [
+  ['Hz', dimsOf('Hz')],
+  ['per-m', dimsOf('1/m')],
+  ['J', dimsOf('J')],
+];
+
+/** Unit names offered for completion and used for "did you mean", likeliest first. */
+const COMMON_UNITS: readonly string[] = [
+  'T', 'mT', 'uT', 'G', 'mG', 'kG', 'T/m', 'G/cm', 'T/cm', 'mT/m',
+  'm', 'cm', 'mm', 'um', 'nm', 'km',
+  'K', 'mK', 'degC',
+  'm/s', 'km/s',
+  'Hz', 'kHz', 'MHz', 'GHz', 'THz', 'cm^-1', '1/cm', 'eV', 'meV', 'ueV', 'J',
+  'u', 'Da', 'kg', 'g',
+  'muN', 'muB', 'J/T',
+  '%',
+  's', 'ms', 'us', 'ns',
+  'tesla', 'gauss', 'kelvin', 'meter', 'metre', 'second', 'hertz', 'joule',
+];
+const SINGLE_NAMES = COMMON_UNITS.filter((u) => /^[\p{L}%]+$/u.test(u));
+
+export function unitNames(): string[] {
+  return [...COMMON_UNITS];
+}
+
+export function dimensionExamples(d: Dimension): string[] {
+  return [...DIMENSIONS[d].examples];
+}
+
+/** Known unit names close to a misspelt one (`Mhz` → `MHz`). */
+export function suggestUnitNames(name: string): string[] {
+  return suggestNames(name, SINGLE_NAMES);
+}
+
+/**
+ * True when a word standing after a number is probably a misspelt unit rather than a word
+ * of the value (so `401.75 Mhz` is read as a quantity whose unit is then reported as unknown).
+ */
+export function looksLikeMisspeltUnit(word: string): boolean {
+  if (word.length > 16) return false;
+  const syntax = parseUnitSyntax(word);
+  if (!syntax.ok) return false;
+  if (syntax.terms.length > 1 || word.includes('^') || word.startsWith('1/')) return true;
+  const lower = word.toLowerCase();
+  if (SINGLE_NAMES.some((u) => u.toLowerCase() === lower)) return true;
+  return word.length >= 3 && suggestUnitNames(word).some((u) => Math.abs(u.length - word.length) <= 1);
+}
+
+function orList(items: readonly string[]): string {
+  if (items.length <= 1) return items.join('');
+  return `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}`;
+}
+
+function clip(text: string): string {
+  return text.length > 40 ? `${text.slice(0, 37)}…` : text;
+}
+
+/** A range inside a one-line span, by offsets into its text. */
+function subRange(range: Range, start: number, end: number): Range {
+  return {
+    start: { line: range.start.line, character: range.start.character + start },
+    end: { line: range.start.line, character: range.start.character + end },
+  };
+}
+
+/** SI value of `value` written in a unit, or a problem with the right dimension named. */
+function toSI(value: number, unit: UnitValue, d: Dimension): number | undefined {
+  if (unit.offsetUnit) return d === 'temperature' ? math.unit(value, unit.offsetUnit).toNumber('K') : undefined;
+  if (!ACCEPTED_DIMS[d].some((ref) => sameDims(ref, unit.dims))) return undefined;
+  const si = value * unit.factor;
+  if (d !== 'frequency-like') return si;
+  const base = FREQUENCY_BASES.find(([, dims]) => sameDims(dims, unit.dims))?.[0];
+  if (base === 'per-m') return si * SPEED_OF_LIGHT;
+  if (base === 'J') return si / PLANCK_H;
+  return si;
+}
+
+/**
+ * Reads one value part as a quantity of the expected dimension, in SI.
+ * `what` names the setting in messages (default: the dimension, e.g. "gradient").
+ */
+export function readQuantity(part: ValuePart, expected: Dimension, what?: string): QuantityReading {
+  const info = DIMENSIONS[expected];
+  const label = what ?? info.label;
+  const examples = orList(info.examples);
+  if (part.kind === 'number') {
+    if (expected === 'dimensionless') {
+      return { si: part.number.value, ...(part.number.uncertainty !== undefined ? { siUncertainty: part.number.uncertainty } : {}) };
+    }
+    return {
+      problem: makeProblem('unit-missing', `${label} needs a unit such as ${examples}`, part.range, {
+        data: { suggestions: info.examples.map((u) => `${part.text} ${u}`) },
+      }),
+    };
+  }
+  if (part.kind === 'word') {
+    const prefix = readNumberPrefix(part.text);
+    if (prefix && prefix.reading.ok && prefix.length < part.text.length) {
+      // A number glued to something that is not a unit we know, e.g. `401.75Mhz`.
+      const unitText = part.text.slice(prefix.length);
+      const e = evaluateUnit(unitText);
+      if (!e.ok) {
+        return {
+          problem: makeProblem(e.code, e.message, subRange(part.range, prefix.length + e.start, prefix.length + e.end), {
+            data: { suggestions: e.suggestions ?? [] },
+          }),
+        };
+      }
+    }
+    return {
+      problem: makeProblem('unit-not-a-quantity', `${label} needs a number with a unit such as ${examples}, got '${clip(part.text)}'`, part.range),
+    };
+  }
+  const e = evaluateUnit(part.unit.text);
+  if (!e.ok) {
+    return {
+      problem: makeProblem(e.code, e.message, subRange(part.unit.range, e.start, e.end), {
+        data: { suggestions: e.suggestions ?? [] },
+      }),
+    };
+  }
+  if (expected === 'dimensionless' && part.unit.text !== '%') {
+    return {
+      problem: makeProblem('unit-wrong-dimension', `${label} needs a plain number or %, got ${clip(part.unit.text)}`, part.unit.range),
+    };
+  }
+  const si = toSI(part.number.value, e.value, expected);
+  if (si === undefined) {
+    return {
+      problem: makeProblem('unit-wrong-dimension', `${label} needs ${examples}, got ${clip(part.unit.text)}`, part.unit.range, {
+        data: { suggestions: [...info.examples] },
+      }),
+    };
+  }
+  if (!Number.isFinite(si)) {
+    return { problem: makeProblem('syntax-bad-number', `${clip(part.text)} is too large to represent`, part.range) };
+  }
+  const reading: QuantityReading = { si };
+  if (part.number.uncertainty !== undefined) {
+    // Offset units (degC) only shift, so the uncertainty scales by 1; others scale linearly.
+    const scale = e.value.offsetUnit ? 1 : Math.abs(toSI(1, e.value, expected) ?? Number.NaN);
+    reading.siUncertainty = part.number.uncertainty * scale;
+  }
+  return reading;
+}
+
+/**
+ * Converts an SI value (Hz for frequency-like, K for temperature, a fraction for dimensionless)
+ * into another unit for display, e.g. convertSI(0.18, 'gradient', 'G/cm') = 18.
+ * Undefined when the unit is unknown or of another dimension.
+ */
+export function convertSI(valueSI: number, d: Dimension, unitText: string): number | undefined {
+  if (d === 'dimensionless' && unitText === '') return valueSI;
+  const e = evaluateUnit(unitText);
+  if (!e.ok) return undefined;
+  if (e.value.offsetUnit) return d === 'temperature' ? math.unit(valueSI, 'K').toNumber(e.value.offsetUnit) : undefined;
+  const perUnit = toSI(1, e.value, d);
+  if (perUnit === undefined || perUnit === 0) return undefined;
+  return valueSI / perUnit;
+}

@@ -1,0 +1,123 @@
+/**
+ * A setting's value: tokens → comma-separated groups of parts (numbers, quantities, words).
+ * A quantity is a number with a unit glued on (`720K`) or in the next word (`0.45 T`). A word
+ * after a number that is not a unit stays a word (`oven 720 K`, `50 um apart 40 cm`).
+ */
+import type { ParsedNumber, Problem, Range, Spanned, ValuePart } from './ast';
+import { makeProblem } from './codes';
+import { readNumber, readNumberPrefix } from './numbers';
+import type { Token } from './scanner';
+import { VALUE_WORDS } from './schema';
+import { isUnitText, looksLikeMisspeltUnit } from './units';
+
+/** Turns absolute offsets on one line into spans. */
+export interface LineSpans {
+  text: string;
+  line: number;
+  lineStart: number;
+}
+
+export function spanOf(ls: LineSpans, start: number, end: number): Spanned {
+  return { text: ls.text.slice(start, end), range: rangeOn(ls, start, end) };
+}
+
+export function rangeOn(ls: LineSpans, start: number, end: number): Range {
+  return {
+    start: { line: ls.line, character: start - ls.lineStart },
+    end: { line: ls.line, character: end - ls.lineStart },
+  };
+}
+
+type Classified =
+  | { kind: 'number'; number: ParsedNumber }
+  | { kind: 'quantity'; number: ParsedNumber; unitStart: number }
+  | { kind: 'word' };
+
+/** What one atom is on its own; reports numbers that cannot be used. */
+function classifyAtom(atom: Token, ls: LineSpans, problems: Problem[]): Classified {
+  const whole = readNumber(atom.text);
+  if (whole) {
+    if (whole.ok) return { kind: 'number', number: whole.number };
+    problems.push(makeProblem('syntax-bad-number', `the number ${clip(atom.text)} ${whole.reason}`, rangeOn(ls, atom.start, atom.end)));
+    return { kind: 'word' };
+  }
+  const prefix = readNumberPrefix(atom.text);
+  if (prefix && isUnitText(atom.text.slice(prefix.length))) {
+    if (prefix.reading.ok) return { kind: 'quantity', number: prefix.reading.number, unitStart: atom.start + prefix.length };
+    problems.push(makeProblem('syntax-bad-number', `the number in ${clip(atom.text)} ${prefix.reading.reason}`, rangeOn(ls, atom.start, atom.end)));
+  }
+  return { kind: 'word' };
+}
+
+function isUnitAfterNumber(word: string): boolean {
+  if (VALUE_WORDS.includes(word)) return false;
+  return isUnitText(word) || looksLikeMisspeltUnit(word);
+}
+
+/** Parts of one comma-free run of atoms. */
+function readGroup(atoms: Token[], ls: LineSpans, problems: Problem[]): ValuePart[] {
+  const parts: ValuePart[] = [];
+  for (let i = 0; i < atoms.length; i++) {
+    const atom = atoms[i]!;
+    const c = classifyAtom(atom, ls, problems);
+    if (c.kind === 'quantity') {
+      parts.push({ kind: 'quantity', number: c.number, unit: spanOf(ls, c.unitStart, atom.end), ...spanOf(ls, atom.start, atom.end) });
+      continue;
+    }
+    if (c.kind === 'word') {
+      parts.push({ kind: 'word', ...spanOf(ls, atom.start, atom.end) });
+      continue;
+    }
+    const next = atoms[i + 1];
+    if (next && isUnitAfterNumber(next.text)) {
+      parts.push({ kind: 'quantity', number: c.number, unit: spanOf(ls, next.start, next.end), ...spanOf(ls, atom.start, next.end) });
+      i++;
+      continue;
+    }
+    parts.push({ kind: 'number', number: c.number, ...spanOf(ls, atom.start, atom.end) });
+  }
+  return parts;
+}
+
+/**
+ * Groups of parts from the value's tokens. Tokens that cannot be in a value (`=`, `:`, `->`)
+ * are reported and left out; an empty item between commas is reported.
+ */
+export function readValueGroups(tokens: Token[], ls: LineSpans, problems: Problem[]): ValuePart[][] {
+  if (tokens.length === 0) return [];
+  const groups: ValuePart[][] = [];
+  let atoms: Token[] = [];
+  let itemStart = tokens[0]!.start;
+  let reportedComma = -1;
+  const closeItem = (end: number, commaAfter: boolean): void => {
+    if (atoms.length === 0) {
+      if (commaAfter) reportedComma = end;
+      const where = commaAfter ? rangeOn(ls, end, end + 1) : rangeOn(ls, itemStart - 1, itemStart);
+      problems.push(makeProblem('syntax-empty-item', 'empty item in a comma-separated list', where));
+    } else {
+      groups.push(readGroup(atoms, ls, problems));
+    }
+    atoms = [];
+  };
+  for (const t of tokens) {
+    if (t.kind === 'atom') atoms.push(t);
+    else if (t.kind === 'comma') {
+      closeItem(t.start, true);
+      itemStart = t.end;
+    } else {
+      problems.push(makeProblem('syntax-unexpected-text', `unexpected '${t.text}' in a value`, rangeOn(ls, t.start, t.end)));
+    }
+  }
+  const last = tokens[tokens.length - 1]!;
+  if (last.kind === 'comma') {
+    // Not twice for the same comma (`80 um,,`).
+    if (reportedComma !== last.start) problems.push(makeProblem('syntax-empty-item', 'the list ends with a comma', rangeOn(ls, last.start, last.end)));
+  } else if (atoms.length > 0 || groups.length > 0) {
+    closeItem(last.end, false);
+  }
+  return groups;
+}
+
+function clip(text: string): string {
+  return text.length > 40 ? `${text.slice(0, 37)}…` : text;
+}

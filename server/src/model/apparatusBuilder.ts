@@ -1,0 +1,220 @@
+/** Builds fields, magnets and beams: the experiment's hardware. */
+import type { BlockNode, SettingNode, ValuePart } from '../format/ast';
+import type { Dimension } from '../format/units';
+import { NameIndex, resolveLevel } from './nameIndex';
+import type { ProblemList } from './problems';
+import { readPartQuantity, readSettingQuantity, singlePart } from './settingReaders';
+import type { BeamModel, BeamSource, FieldModel, MagnetModel, NameUse, SpeciesModel, Valued } from './types';
+
+export function buildField(node: BlockNode, problems: ProblemList): FieldModel | undefined {
+  if (!node.name) {
+    problems.add('name-missing', 'a field needs a name, as in `field bias = 3.2 G`', node.keyword.range);
+    return undefined;
+  }
+  const field: FieldModel = { name: node.name.text, node, nameRange: node.name.range };
+  if (!node.headerSetting) {
+    problems.add('field-needs-value', `field '${field.name}' needs a value, as in \`field ${field.name} = 3.2 G\``, node.headerRange);
+    return field;
+  }
+  const t = readSettingQuantity(node.headerSetting, 'flux-density', problems, 'magnetic flux density, e.g. 3.2 G or 0.45 T');
+  if (t) field.tesla = t;
+  return field;
+}
+
+export function buildMagnet(node: BlockNode, problems: ProblemList): MagnetModel | undefined {
+  if (!node.name) {
+    problems.add('name-missing', 'a magnet needs a name, as in `magnet selector`', node.keyword.range);
+    return undefined;
+  }
+  const magnet: MagnetModel = { name: node.name.text, node, nameRange: node.name.range };
+  for (const s of node.settings) {
+    switch (s.key.text) {
+      case 'field': {
+        const v = readSettingQuantity(s, 'flux-density', problems, 'field at the beam, e.g. 0.45 T');
+        if (v) magnet.fieldT = v;
+        break;
+      }
+      case 'gradient': {
+        const v = readSettingQuantity(s, 'gradient', problems, 'field gradient, e.g. 180 T/m');
+        if (v) magnet.gradientTPerM = v;
+        break;
+      }
+      case 'length': {
+        const v = positive(s, readSettingQuantity(s, 'length', problems, 'magnet length, e.g. 8 cm'), problems);
+        if (v) magnet.lengthM = v;
+        break;
+      }
+      default:
+        break;
+    }
+  }
+  const missing = (['field', 'gradient', 'length'] as const).filter((k) => !node.settings.some((s) => s.key.text === k));
+  if (missing.length > 0) {
+    problems.add('magnet-incomplete', `magnet '${magnet.name}' has no ${missing.join(', ')}; deflections need all three`, node.name.range, {
+      data: { missing },
+    });
+  }
+  return magnet;
+}
+
+export function buildBeam(
+  node: BlockNode,
+  index: { species: NameIndex<SpeciesModel>; magnets: NameIndex<MagnetModel> },
+  uses: NameUse[],
+  problems: ProblemList,
+  ordinal: number,
+): BeamModel {
+  const name = node.name?.text ?? `beam${ordinal + 1}`;
+  const beam: BeamModel = { name, node, nameRange: node.name?.range ?? node.keyword.range };
+  const levelSetting = node.settings.find((s) => s.key.text === 'level');
+  for (const s of node.settings) {
+    switch (s.key.text) {
+      case 'species': {
+        const part = singlePart(s, problems, 'species name');
+        if (part) {
+          const sp = index.species.resolve(part, problems);
+          if (sp) beam.species = sp;
+        }
+        break;
+      }
+      case 'magnet': {
+        const part = singlePart(s, problems, 'magnet name');
+        if (part) {
+          const m = index.magnets.resolve(part, problems);
+          if (m) beam.magnet = m;
+        }
+        break;
+      }
+      case 'source': {
+        const src = readSource(s, problems);
+        if (src) beam.source = src;
+        break;
+      }
+      case 'slits': {
+        const sl = readSlits(s, problems);
+        if (sl) beam.slits = sl;
+        break;
+      }
+      case 'drift': {
+        const v = positive(s, readSettingQuantity(s, 'length', problems, 'distance from magnet exit to detector'), problems);
+        if (v) beam.driftM = v;
+        break;
+      }
+      case 'detector': {
+        const v = positive(s, readSettingQuantity(s, 'length', problems, 'detector width or resolution'), problems);
+        if (v) beam.detectorM = v;
+        break;
+      }
+      default:
+        break;
+    }
+  }
+  if (levelSetting) {
+    const part = singlePart(levelSetting, problems, 'level name');
+    if (part) {
+      const [q, n] = splitQualified(part);
+      const lv = resolveLevel(q ? { qualifier: q, name: n } : { name: n }, index.species, beam.species, uses, problems);
+      if (lv) {
+        beam.level = lv;
+        beam.species ??= lv.species;
+      }
+    }
+  }
+  const needed = ['level', 'source', 'magnet', 'drift'].filter((k) => !node.settings.some((s) => s.key.text === k));
+  if (needed.length > 0) {
+    problems.add('beam-incomplete', `beam '${name}' has no ${needed.join(', ')}; the detector pattern needs ${needed.length > 1 ? 'them' : 'it'}`, beam.nameRange, {
+      data: { missing: needed },
+    });
+  }
+  return beam;
+}
+
+/** `Na23.ground` written as one word → qualifier and name spans. */
+function splitQualified(part: ValuePart): [ValuePart | undefined, ValuePart] {
+  const dot = part.text.indexOf('.');
+  if (dot <= 0 || dot === part.text.length - 1) return [undefined, part];
+  const { line, character } = part.range.start;
+  const q = { kind: 'word' as const, text: part.text.slice(0, dot), range: { start: { line, character }, end: { line, character: character + dot } } };
+  const n = {
+    kind: 'word' as const,
+    text: part.text.slice(dot + 1),
+    range: { start: { line, character: character + dot + 1 }, end: part.range.end },
+  };
+  return [q, n];
+}
+
+function positive(s: SettingNode, v: Valued<number> | undefined, problems: ProblemList): Valued<number> | undefined {
+  if (v && v.value <= 0) {
+    problems.add('value-out-of-range', `${s.key.text} must be greater than zero, got ${s.valueText.text}`, v.range ?? s.valueText.range);
+    return undefined;
+  }
+  return v;
+}
+
+const SOURCE_FORMS = 'oven <temperature>, jet <speed> spread <percent>, or speed <speed>';
+
+function readSource(s: SettingNode, problems: ProblemList): Valued<BeamSource> | undefined {
+  const parts = s.groups.flat();
+  const bad = (msg: string): undefined => {
+    problems.add('beam-source-malformed', msg, s.valueText.range, { data: { suggestions: ['oven 450 K', 'jet 1500 m/s spread 10 %', 'speed 800 m/s'] } });
+    return undefined;
+  };
+  const kind = parts[0];
+  if (!kind || kind.kind !== 'word') return bad(`source must be ${SOURCE_FORMS}`);
+  const q = (i: number, d: Dimension, what: string): number | undefined => {
+    const p = parts[i];
+    if (!p) {
+      bad(`source '${kind.text}' needs ${what}`);
+      return undefined;
+    }
+    return readPartQuantity(p, d, problems, 'source')?.value;
+  };
+  const done = (value: BeamSource): Valued<BeamSource> => ({ value, source: 'this file', range: s.valueText.range });
+  switch (kind.text) {
+    case 'oven': {
+      const t = q(1, 'temperature', 'a temperature, e.g. oven 450 K');
+      if (t === undefined) return undefined;
+      if (t <= 0) return bad(`an oven temperature must be above absolute zero, got ${parts[1]!.text}`);
+      return done({ kind: 'oven', temperatureK: t });
+    }
+    case 'jet': {
+      const v = q(1, 'speed', 'a mean speed, e.g. jet 1500 m/s spread 10 %');
+      if (v === undefined) return undefined;
+      if (v <= 0) return bad(`a jet speed must be positive, got ${parts[1]!.text}`);
+      if (parts[2]?.text !== 'spread') return bad('a jet needs its speed spread: jet <speed> spread <percent>');
+      const spread = q(3, 'dimensionless', 'a relative spread, e.g. spread 10 %');
+      if (spread === undefined) return undefined;
+      if (spread <= 0 || spread >= 1) return bad(`a jet's relative speed spread must be between 0 and 100 %, got ${parts[3]!.text}`);
+      return done({ kind: 'jet', speedMPerS: v, spreadFraction: spread });
+    }
+    case 'speed': {
+      const v = q(1, 'speed', 'a speed, e.g. speed 800 m/s');
+      if (v === undefined) return undefined;
+      if (v <= 0) return bad(`a beam speed must be positive, got ${parts[1]!.text}`);
+      return done({ kind: 'speed', speedMPerS: v });
+    }
+    default:
+      return bad(`unknown source '${kind.text}'; write ${SOURCE_FORMS}`);
+  }
+}
+
+function readSlits(s: SettingNode, problems: ProblemList): BeamModel['slits'] {
+  const [g1, g2] = s.groups;
+  const form = 'slits = <width>, <width> apart <distance>, e.g. slits = 80 um, 50 um apart 40 cm';
+  const bad = (): undefined => {
+    problems.add('beam-slits-malformed', `write ${form}`, s.valueText.range);
+    return undefined;
+  };
+  if (!g1 || !g2 || s.groups.length !== 2 || g1.length !== 1 || g2.length !== 3 || g2[1]!.text !== 'apart') return bad();
+  const first = readPartQuantity(g1[0]!, 'length', problems, 'slits');
+  const second = readPartQuantity(g2[0]!, 'length', problems, 'slits');
+  const sep = readPartQuantity(g2[2]!, 'length', problems, 'slits');
+  if (!first || !second || !sep) return undefined;
+  for (const [v, part] of [[first, g1[0]!], [second, g2[0]!], [sep, g2[2]!]] as const) {
+    if (v.value <= 0) {
+      problems.add('value-out-of-range', `slit widths and their distance must be greater than zero, got ${part.text}`, part.range);
+      return undefined;
+    }
+  }
+  return { value: { firstM: first.value, secondM: second.value, separationM: sep.value }, source: 'this file', range: s.valueText.range };
+}

@@ -1,0 +1,115 @@
+/**
+ * Builds a LevelModel from a `level` statement: interprets the designation (configuration and
+ * term symbol), reads A, B, C, g_J and energy, and merges matching built-in data.
+ */
+import type { LevelNode, SettingNode } from '../format/ast';
+import { parseLevelDesignation } from '../physics/configuration';
+import type { BuiltinLevel } from '../physics/species';
+import type { ProblemList } from './problems';
+import { subRange } from './ranges';
+import { readSettingNumber, readSettingQuantity } from './settingReaders';
+import type { LevelModel, SpeciesModel, Valued } from './types';
+
+export function buildLevel(node: LevelNode, species: SpeciesModel, problems: ProblemList): LevelModel | undefined {
+  if (!node.name) {
+    problems.add('name-missing', 'a level needs a name, as in `level ground: 2S1/2`', node.keyword.range);
+    return undefined;
+  }
+  const level: LevelModel = {
+    name: node.name.text,
+    node,
+    nameRange: node.name.range,
+    species,
+    designationText: node.designation?.text ?? '',
+    configuration: null,
+    term: null,
+    valid: false,
+  };
+  readDesignation(level, problems);
+  for (const s of node.settings) readLevelSetting(level, s, problems);
+  mergeBuiltin(level);
+  return level;
+}
+
+function readDesignation(level: LevelModel, problems: ProblemList): void {
+  const d = level.node.designation;
+  if (!d || d.text.trim() === '') {
+    problems.add('level-needs-term', `level '${level.name}' needs a term symbol after the colon, such as 2S1/2 or 3p 2P°3/2`, level.node.name?.range ?? level.node.range);
+    return;
+  }
+  const parsed = parseLevelDesignation(d.text);
+  level.configuration = parsed.configuration;
+  level.term = parsed.term;
+  for (const issue of parsed.issues) {
+    problems.addWith(issue.code, issue.severity, issue.message, subRange(d, issue.start, issue.end), {
+      ...(issue.suggestions ? { data: { suggestions: issue.suggestions } } : {}),
+    });
+  }
+  const hasError = parsed.issues.some((i) => i.severity === 'error');
+  if (parsed.term && parsed.term.twoJ === null && !hasError) {
+    problems.add('level-needs-j', `term ${parsed.term.text} has no J; write the level's J, e.g. ${parsed.term.text}${jHint(parsed.term.twoS, parsed.term.L)}`, d.range);
+  }
+  level.valid = !!parsed.term && parsed.term.twoJ !== null && !hasError;
+}
+
+function jHint(twoS: number, L: number): string {
+  const twoJ = Math.abs(2 * L - twoS);
+  return twoJ % 2 === 0 ? String(twoJ / 2) : `${twoJ}/2`;
+}
+
+function readLevelSetting(level: LevelModel, s: SettingNode, problems: ProblemList): void {
+  switch (s.key.text) {
+    case 'A':
+      level.A = readSettingQuantity(s, 'frequency-like', problems, 'magnetic-dipole hyperfine constant, e.g. 401.75 MHz');
+      break;
+    case 'B':
+      level.B = readSettingQuantity(s, 'frequency-like', problems, 'electric-quadrupole hyperfine constant, e.g. -0.22 MHz');
+      break;
+    case 'C':
+      level.C = readSettingQuantity(s, 'frequency-like', problems, 'magnetic-octupole hyperfine constant, e.g. 0.56 kHz');
+      break;
+    case 'g_J':
+      level.gJMeasured = readSettingNumber(s, problems, 'measured Landé g_J, e.g. 1.3341');
+      break;
+    case 'energy':
+      level.energyHz = readSettingQuantity(s, 'frequency-like', problems, 'energy above the ground level, e.g. 16973.37 cm^-1');
+      break;
+    default:
+      // Unknown keys are reported by the parser's schema check.
+      break;
+  }
+}
+
+/** Take A, B, C, g_J and energy from the built-in level with the same term, unless the file gives them. */
+function mergeBuiltin(level: LevelModel): void {
+  const builtin = level.species.builtin;
+  if (!builtin || !level.term || !level.valid) return;
+  const match = findBuiltinLevel(builtin.levels, level);
+  if (!match) return;
+  level.builtinKey = match.key;
+  level.A ??= fromBuiltin(match.A);
+  level.B ??= fromBuiltin(match.B);
+  level.C ??= fromBuiltin(match.C);
+  level.gJMeasured ??= fromBuiltin(match.gJ);
+  level.energyHz ??= fromBuiltin(match.energyHz);
+}
+
+function fromBuiltin(v: { value: number; source: string } | undefined): Valued<number> | undefined {
+  return v ? { value: v.value, source: v.source } : undefined;
+}
+
+function findBuiltinLevel(levels: readonly BuiltinLevel[], level: LevelModel): BuiltinLevel | undefined {
+  const t = level.term!;
+  const sameTerm = levels.filter((b) => {
+    const p = parseLevelDesignation(b.designation);
+    return p.term && p.term.twoS === t.twoS && p.term.L === t.L && p.term.twoJ === t.twoJ
+      && (!level.configuration || !p.configuration || sameConfiguration(p.configuration.text, level.configuration.text));
+  });
+  return sameTerm[0];
+}
+
+function sameConfiguration(a: string, b: string): boolean {
+  const norm = (s: string): string => s.replace(/[\s.]+/g, ' ').trim().split(' ').filter((x) => !/^\[/.test(x)).slice(-1).join(' ');
+  // Compare the outermost subshell: '5p' vs '[Kr] 5p' vs '4d10 5p' all name the same level.
+  return norm(a) === norm(b);
+}

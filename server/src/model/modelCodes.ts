@@ -1,0 +1,45 @@
+/**
+ * Problem codes raised while building the model and checking the physics.
+ * Stable ids: quick fixes and tests switch on them, so never rename one.
+ */
+import type { ProblemSeverity } from '../format/ast';
+
+interface RuleInfo {
+  severity: ProblemSeverity;
+  summary: string;
+}
+
+export const MODEL_RULES = {
+  'value-missing': { severity: 'error', summary: 'A setting has no value.' },
+  'value-extra': { severity: 'warning', summary: 'A setting has more items than it uses.' },
+  'value-not-number': { severity: 'error', summary: 'A setting needs a plain number.' },
+  'value-not-allowed': { severity: 'error', summary: 'A setting takes one of a fixed set of words.' },
+  'value-out-of-range': { severity: 'error', summary: 'A value is negative or zero where it cannot be.' },
+  'spin-not-half-integer': { severity: 'error', summary: 'An angular momentum that is not a multiple of 1/2.' },
+  'spin-negative': { severity: 'error', summary: 'A negative angular momentum.' },
+  'spin-too-large': { severity: 'error', summary: 'An angular momentum beyond what the engine handles.' },
+  'name-missing': { severity: 'error', summary: 'A block or level has no name.' },
+  'name-duplicate': { severity: 'error', summary: 'Two things of one kind share a name.' },
+  'name-unknown': { severity: 'error', summary: 'A reference to a name that is not defined.' },
+  'name-ambiguous': { severity: 'error', summary: 'A level name used by several species, written without its species.' },
+  'species-needs-mass': { severity: 'error', summary: 'A species defined by hand has no mass.' },
+  'species-needs-nuclear-g': { severity: 'warning', summary: 'A nucleus with spin but no g_I or mu_I; g_I is taken as 0.' },
+  'species-g-conflict': { severity: 'warning', summary: 'g_I and mu_I are both given and disagree.' },
+  'species-mass-number': { severity: 'warning', summary: 'A mass far from the species\u2019 mass number.' },
+  'level-needs-term': { severity: 'error', summary: 'A level has no term symbol.' },
+  'level-needs-j': { severity: 'error', summary: 'A level term without J.' },
+  'hyperfine-without-nucleus': { severity: 'warning', summary: 'A hyperfine constant on a species with no nuclear spin.' },
+  'quadrupole-cannot-act': { severity: 'warning', summary: 'B needs I \u2265 1 and J \u2265 1 to act.' },
+  'octupole-cannot-act': { severity: 'warning', summary: 'C needs I \u2265 3/2 and J \u2265 3/2 to act.' },
+  'gj-measured-differs': { severity: 'info', summary: 'A measured g_J differs from the LS-coupling value.' },
+  'field-needs-value': { severity: 'error', summary: 'A field block without a value.' },
+  'magnet-incomplete': { severity: 'warning', summary: 'A magnet lacks a field, gradient or length.' },
+  'beam-incomplete': { severity: 'warning', summary: 'A beam lacks a setting it needs.' },
+  'beam-source-malformed': { severity: 'error', summary: 'A beam source that is not oven/jet/speed with its values.' },
+  'beam-slits-malformed': { severity: 'error', summary: 'Slits not written as width, width apart length.' },
+  'line-incomplete': { severity: 'error', summary: 'A line without both levels.' },
+  'line-across-species': { severity: 'error', summary: 'A line between levels of different species.' },
+  'line-same-level': { severity: 'error', summary: 'A line from a level to itself.' },
+} as const satisfies Record<string, RuleInfo>;
+
+export type ModelCode = keyof typeof MODEL_RULES;

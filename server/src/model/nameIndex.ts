@@ -1,0 +1,107 @@
+/**
+ * Declarations of named things and the lookup of references to them, with
+ * "did you mean" suggestions for names that are not found.
+ */
+import type { Range, Spanned } from '../format/ast';
+import { suggestNames } from '../format/didYouMean';
+import type { ProblemList } from './problems';
+import type { LevelModel, NameUse, SpeciesModel } from './types';
+
+export type NamedKind = NameUse['kind'];
+
+export class NameIndex<T extends { name: string; nameRange: Range }> {
+  private readonly byName = new Map<string, T>();
+
+  constructor(private readonly kind: NamedKind, private readonly uses: NameUse[]) {}
+
+  /** Declare; a second declaration of the same name is reported and not indexed. */
+  declare(item: T, problems: ProblemList): boolean {
+    this.uses.push({ kind: this.kind, name: item.name, range: item.nameRange, isDeclaration: true });
+    const first = this.byName.get(item.name);
+    if (first) {
+      problems.add('name-duplicate', `there is already a ${this.kind} named '${item.name}'`, item.nameRange, {
+        related: [{ message: `first ${this.kind} '${item.name}' is here`, range: first.nameRange }],
+      });
+      return false;
+    }
+    this.byName.set(item.name, item);
+    return true;
+  }
+
+  get(name: string): T | undefined {
+    return this.byName.get(name);
+  }
+
+  all(): T[] {
+    return [...this.byName.values()];
+  }
+
+  /** Resolve a reference, recording the use; unknown names get a problem with suggestions. */
+  resolve(ref: Spanned, problems: ProblemList): T | undefined {
+    const found = this.byName.get(ref.text);
+    this.uses.push({
+      kind: this.kind,
+      name: ref.text,
+      range: ref.range,
+      isDeclaration: false,
+      ...(found ? { target: { kind: this.kind, name: found.name, range: found.nameRange } } : {}),
+    });
+    if (!found) reportUnknown(this.kind, ref, [...this.byName.keys()], problems);
+    return found;
+  }
+}
+
+export function reportUnknown(kind: NamedKind, ref: Spanned, candidates: string[], problems: ProblemList): void {
+  const suggestions = suggestNames(ref.text, candidates);
+  const hint = suggestions.length > 0 ? ` — did you mean ${suggestions.map((s) => `'${s}'`).join(' or ')}?` : '';
+  const none = candidates.length === 0 ? ` (no ${kind} is defined in this file)` : '';
+  problems.add('name-unknown', `no ${kind} named '${ref.text}'${hint}${none}`, ref.range, { data: { suggestions } });
+}
+
+/**
+ * Resolve a level reference: `name` searches every species (must be unique unless a species
+ * is implied by context), `Species.name` searches one species.
+ */
+export function resolveLevel(
+  ref: { qualifier?: Spanned; name: Spanned },
+  species: NameIndex<SpeciesModel>,
+  context: SpeciesModel | undefined,
+  uses: NameUse[],
+  problems: ProblemList,
+): LevelModel | undefined {
+  let pool: SpeciesModel[];
+  if (ref.qualifier) {
+    const s = species.resolve(ref.qualifier, problems);
+    if (!s) return undefined;
+    pool = [s];
+  } else if (context) {
+    pool = [context];
+  } else {
+    pool = species.all();
+  }
+  const matches = pool.flatMap((s) => s.levels.filter((l) => l.name === ref.name.text));
+  if (matches.length > 1) {
+    problems.add(
+      'name-ambiguous',
+      `level '${ref.name.text}' exists in ${matches.map((m) => m.species.name).join(' and ')}; write it as ${matches
+        .map((m) => `'${m.species.name}.${m.name}'`)
+        .join(' or ')}`,
+      ref.name.range,
+      { data: { suggestions: matches.map((m) => `${m.species.name}.${m.name}`) } },
+    );
+    uses.push({ kind: 'level', name: ref.name.text, range: ref.name.range, isDeclaration: false });
+    return undefined;
+  }
+  const found = matches[0];
+  uses.push({
+    kind: 'level',
+    name: ref.name.text,
+    range: ref.name.range,
+    isDeclaration: false,
+    ...(found ? { target: { kind: 'level', name: found.name, range: found.nameRange } } : {}),
+  });
+  if (!found) {
+    reportUnknown('level', ref.name, pool.flatMap((s) => s.levels.map((l) => l.name)), problems);
+  }
+  return found;
+}

@@ -1,0 +1,117 @@
+/**
+ * Readers that turn one `key = value` setting into an SI number, an exact spin or a word,
+ * reporting a plain-words problem at the value's range when the value does not fit.
+ */
+import type { ParsedNumber, SettingNode, ValuePart } from '../format/ast';
+import { readQuantity, type Dimension } from '../format/units';
+import type { ProblemList } from './problems';
+import type { Valued } from './types';
+
+const FILE_SOURCE = 'this file';
+
+/** The value's single part, or a problem when the value is empty or has extra items. */
+export function singlePart(setting: SettingNode, problems: ProblemList, what: string): ValuePart | undefined {
+  const parts = setting.groups.flat();
+  if (parts.length === 0) {
+    problems.add('value-missing', `${setting.key.text} needs a value (${what})`, setting.range);
+    return undefined;
+  }
+  if (parts.length > 1 || setting.groups.length > 1) {
+    const extra = parts[1] ?? parts[0]!;
+    problems.add('value-extra', `${setting.key.text} takes one value (${what}); the rest of the line is not used`, {
+      start: extra.range.start,
+      end: setting.valueText.range.end,
+    });
+  }
+  return parts[0];
+}
+
+/** A quantity of the given dimension, converted to SI. */
+export function readSettingQuantity(
+  setting: SettingNode,
+  dimension: Dimension,
+  problems: ProblemList,
+  what: string,
+): Valued<number> | undefined {
+  const part = singlePart(setting, problems, what);
+  if (!part) return undefined;
+  return readPartQuantity(part, dimension, problems, setting.key.text);
+}
+
+export function readPartQuantity(
+  part: ValuePart,
+  dimension: Dimension,
+  problems: ProblemList,
+  _key: string,
+): Valued<number> | undefined {
+  const result = readQuantity(part, dimension);
+  if (result.problem) {
+    problems.push({ ...result.problem });
+    return undefined;
+  }
+  if (result.si === undefined || !Number.isFinite(result.si)) return undefined;
+  const number = part.kind === 'word' ? undefined : part.number;
+  const scale = number && number.value !== 0 ? result.si / number.value : undefined;
+  const uncertainty = number?.uncertainty !== undefined && scale !== undefined ? Math.abs(number.uncertainty * scale) : undefined;
+  return { value: result.si, source: FILE_SOURCE, range: part.range, ...(uncertainty !== undefined ? { uncertainty } : {}) };
+}
+
+/** A plain number (no unit). */
+export function readSettingNumber(setting: SettingNode, problems: ProblemList, what: string): Valued<number> | undefined {
+  const part = singlePart(setting, problems, what);
+  if (!part) return undefined;
+  if (part.kind !== 'number') {
+    const got = part.kind === 'quantity' ? `a quantity with unit ${part.unit.text}` : `'${part.text}'`;
+    problems.add('value-not-number', `${setting.key.text} needs a plain number (${what}), got ${got}`, part.range);
+    return undefined;
+  }
+  return withUncertainty(part.number, part.range);
+}
+
+/**
+ * An angular momentum written exactly: 0, 1/2, 1, 3/2, … Returns twice the value.
+ * Decimals such as 1.5 are accepted when they are exact half-integers.
+ */
+export function readSettingSpin(setting: SettingNode, problems: ProblemList, what: string): Valued<number> | undefined {
+  const part = singlePart(setting, problems, what);
+  if (!part) return undefined;
+  if (part.kind !== 'number') {
+    problems.add('value-not-number', `${setting.key.text} needs a spin such as 0, 1/2, 1 or 3/2 (${what}), got '${part.text}'`, part.range);
+    return undefined;
+  }
+  const twice = 2 * part.number.value;
+  if (!Number.isFinite(twice) || Math.abs(twice - Math.round(twice)) > 1e-9) {
+    problems.add('spin-not-half-integer', `${setting.key.text} must be a whole or half-whole number such as 1 or 3/2, got ${part.text}`, part.range);
+    return undefined;
+  }
+  if (twice < 0) {
+    problems.add('spin-negative', `${setting.key.text} cannot be negative, got ${part.text}`, part.range);
+    return undefined;
+  }
+  if (twice > 40) {
+    problems.add('spin-too-large', `${setting.key.text} = ${part.text} is larger than any nuclear spin Sublevel handles (20)`, part.range);
+    return undefined;
+  }
+  return { value: Math.round(twice), source: FILE_SOURCE, range: part.range };
+}
+
+/** One word out of a fixed set. */
+export function readSettingWord<T extends string>(
+  setting: SettingNode,
+  allowed: readonly T[],
+  problems: ProblemList,
+): T | undefined {
+  const part = singlePart(setting, problems, allowed.join(' or '));
+  if (!part) return undefined;
+  const found = allowed.find((a) => a === part.text);
+  if (!found) {
+    problems.add('value-not-allowed', `${setting.key.text} must be ${allowed.map((a) => `'${a}'`).join(' or ')}, got '${part.text}'`, part.range, {
+      data: { suggestions: [...allowed] },
+    });
+  }
+  return found;
+}
+
+function withUncertainty(n: ParsedNumber, range: SettingNode['range']): Valued<number> {
+  return { value: n.value, source: FILE_SOURCE, range, ...(n.uncertainty !== undefined ? { uncertainty: n.uncertainty } : {}) };
+}

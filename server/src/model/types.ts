@@ -1,0 +1,124 @@
+/**
+ * The semantic model: the syntax tree with names resolved, units converted to SI,
+ * term symbols interpreted and built-in species data merged in.
+ * Every value remembers where it came from (the file or a published source).
+ */
+import type { BlockNode, LevelNode, Problem, Range, SettingNode, SetupDocument } from '../format/ast';
+import type { Configuration } from '../physics/configuration';
+import type { TermSymbol } from '../physics/termSymbol';
+import type { BuiltinSpecies } from '../physics/species';
+
+/** A value and its origin: `file` (with the setting's range) or a citation of a published source. */
+export interface Valued<T> {
+  value: T;
+  source: string;
+  /** Where the file sets it; absent for built-in values. */
+  range?: Range;
+  /** Standard uncertainty, when the file wrote e.g. `0.35(2)`. */
+  uncertainty?: number;
+}
+
+export interface SpeciesModel {
+  name: string;
+  node: BlockNode;
+  nameRange: Range;
+  builtin?: BuiltinSpecies;
+  massKg?: Valued<number>;
+  /** Twice the nuclear spin. */
+  twoI: Valued<number>;
+  /** Nuclear g-factor in units of μ_B (H = μ_B B (g_J J_z + g_I I_z)). */
+  gI: Valued<number>;
+  levels: LevelModel[];
+}
+
+export interface LevelModel {
+  name: string;
+  node: LevelNode;
+  nameRange: Range;
+  species: SpeciesModel;
+  designationText: string;
+  configuration: Configuration | null;
+  term: TermSymbol | null;
+  /** Set when the term is complete and valid (has a J allowed by L and S). */
+  valid: boolean;
+  A?: Valued<number>;
+  B?: Valued<number>;
+  C?: Valued<number>;
+  gJMeasured?: Valued<number>;
+  energyHz?: Valued<number>;
+  /** The built-in level whose data were merged in, if any. */
+  builtinKey?: string;
+}
+
+export interface FieldModel {
+  name: string;
+  node: BlockNode;
+  nameRange: Range;
+  tesla?: Valued<number>;
+}
+
+export interface MagnetModel {
+  name: string;
+  node: BlockNode;
+  nameRange: Range;
+  fieldT?: Valued<number>;
+  gradientTPerM?: Valued<number>;
+  lengthM?: Valued<number>;
+}
+
+export type BeamSource =
+  | { kind: 'oven'; temperatureK: number }
+  | { kind: 'jet'; speedMPerS: number; spreadFraction: number }
+  | { kind: 'speed'; speedMPerS: number };
+
+export interface BeamModel {
+  name: string;
+  node: BlockNode;
+  nameRange: Range;
+  species?: SpeciesModel;
+  level?: LevelModel;
+  magnet?: MagnetModel;
+  source?: Valued<BeamSource>;
+  slits?: Valued<{ firstM: number; secondM: number; separationM: number }>;
+  driftM?: Valued<number>;
+  detectorM?: Valued<number>;
+}
+
+export interface LineModel {
+  name: string;
+  node: BlockNode;
+  nameRange: Range;
+  lower?: LevelModel;
+  upper?: LevelModel;
+}
+
+export interface SettingsModel {
+  /** Electron spin g-factor for Landé formulas: CODATA |g_e| or exactly 2. */
+  gS: 'exact' | 2;
+  reducedMass: boolean;
+}
+
+/** A place in the file that names something, for go-to-definition, references and rename. */
+export interface NameUse {
+  kind: 'species' | 'level' | 'field' | 'magnet' | 'beam' | 'line';
+  name: string;
+  range: Range;
+  /** The declaration it resolves to, if any. */
+  target?: { kind: NameUse['kind']; name: string; range: Range };
+  isDeclaration: boolean;
+}
+
+export interface SetupModel {
+  doc: SetupDocument;
+  species: SpeciesModel[];
+  fields: FieldModel[];
+  magnets: MagnetModel[];
+  beams: BeamModel[];
+  lines: LineModel[];
+  settings: SettingsModel;
+  names: NameUse[];
+  /** Problems found while building the model (the parser's own are in doc.problems). */
+  problems: Problem[];
+}
+
+export type { BlockNode, LevelNode, SettingNode };

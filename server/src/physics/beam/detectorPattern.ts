@@ -1,0 +1,253 @@
+/**
+ * The summed detector pattern: for each sublevel the distribution of deflections
+ * over speeds, convolved with the two-slit image (two boxes) and the detector
+ * aperture (a third box), weighted by population; then peaks, their members and a
+ * resolvability verdict per neighbouring pair. Never throws: problems are issues.
+ */
+import { convolveBox } from './boxConvolve';
+import { deflectionCoefficient } from './deflection';
+import { depositDeflections, type BinGrid } from './depositDeflections';
+import { groupByPeakPosition } from './groupSublevels';
+import { pairDips, type PairVerdict } from './pairDips';
+import { resolveOptions, type PatternOptions } from './patternOptions';
+import { patternSpan } from './patternSpan';
+import { localMaxima, peakShape, sampleAt, type LocalMaximum } from './peakShape';
+import { slitImage, type SlitImage } from './slitImage';
+import { speedLawFor } from './speedLawFor';
+import { beamIssue, hasBeamError, type BeamGeometry, type BeamIssue, type BeamSublevel, type SpeedDistribution } from './types';
+import { validateGeometry } from './validateGeometry';
+import { validateSource } from './validateSource';
+import { validateSublevels } from './validateSublevels';
+
+export interface PatternInput extends PatternOptions {
+  massKg: number;
+  geometry: BeamGeometry;
+  source: SpeedDistribution;
+  sublevels: readonly BeamSublevel[];
+}
+
+export interface SublevelDeflection {
+  label: string;
+  /** Population normalised over all sublevels. */
+  weight: number;
+  /** k in z = k/v², m³/s². */
+  coefficientM3PerS2: number;
+  /** Flux-averaged deflection k⟨1/v²⟩, m. */
+  meanDeflectionM: number;
+  /** Maximum of this sublevel's own (image- and aperture-broadened) profile, m. */
+  peakM: number;
+}
+
+export interface PatternPeak {
+  positionM: number;
+  /** FWHM of the peak's own profile (its members only), m; null if it runs off the grid. */
+  fwhmM: number | null;
+  /** Maximum of the peak's own profile, per metre. */
+  height: number;
+  /** The summed pattern at positionM, per metre. */
+  totalHeight: number;
+  members: string[];
+  memberIndices: number[];
+}
+
+export interface SpeedSummary {
+  meanSpeed: number;
+  rmsSpread: number;
+  mostProbableSpeed: number;
+  meanInverseSquare: number;
+}
+
+export interface DetectorPattern {
+  /** Bin centres, m from the undeflected axis. */
+  positionsM: Float64Array;
+  binM: number;
+  /**
+   * Summed pattern: flux fraction per metre of detector position, averaged over the
+   * aperture (× detector width = fraction of atoms a detector centred there receives).
+   */
+  total: Float64Array;
+  /** Population-weighted contributions, same units; they add up to `total`. */
+  perSublevel: Float64Array[];
+  sublevels: SublevelDeflection[];
+  /** Population-weighted flux fraction that falls outside the grid (mostly the slow tail). */
+  offGridFraction: number;
+  image: SlitImage | null;
+  speed: SpeedSummary | null;
+  /** One entry per group of sublevels, sorted by position. */
+  peaks: PatternPeak[];
+  /** Verdict for each pair of neighbouring peaks. */
+  pairs: PairVerdict[];
+  allResolved: boolean;
+  /** Local maxima of the summed pattern (what a scan shows). */
+  maxima: LocalMaximum[];
+  /** Fraction of the atoms entering a detector at geometry.detectorOffsetM (when given). */
+  detectorFraction?: number;
+  issues: BeamIssue[];
+}
+
+function emptyPattern(issues: BeamIssue[]): DetectorPattern {
+  return {
+    positionsM: new Float64Array(0),
+    binM: 0,
+    total: new Float64Array(0),
+    perSublevel: [],
+    sublevels: [],
+    offGridFraction: 0,
+    image: null,
+    speed: null,
+    peaks: [],
+    pairs: [],
+    allResolved: false,
+    maxima: [],
+    issues,
+  };
+}
+
+export function detectorPattern(input: PatternInput): DetectorPattern {
+  return computePattern(input);
+}
+
+/** As detectorPattern, optionally with the grouping of sublevels fixed by the caller (used by the solvers). */
+export function computePattern(input: PatternInput, fixedGroups?: number[][]): DetectorPattern {
+  const { options, issues: optionIssues } = resolveOptions(input);
+  const issues = [
+    ...optionIssues,
+    ...validateGeometry(input.geometry),
+    ...validateSource(input.source, input.massKg),
+    ...validateSublevels(input.sublevels),
+  ];
+  if (hasBeamError(issues)) return emptyPattern(issues);
+
+  const { geometry, massKg, sublevels } = input;
+  const law = speedLawFor(input.source, massKg, options.speedPanels);
+  const image = slitImage(geometry);
+  const popSum = sublevels.reduce((s, x) => s + x.population, 0);
+  const weights = sublevels.map((s) => s.population / popSum);
+  const ks = sublevels.map((s) => deflectionCoefficient(s.momentJT, massKg, geometry));
+  const active = ks.filter((_, i) => weights[i] > 0);
+  const span = options.spanM ?? patternSpan(active, law, image.halfSupportM, options.tailFraction);
+  const n = options.bins;
+  const grid: BinGrid = { startM: span.startM, binM: (span.endM - span.startM) / n, bins: n };
+  const { startM, binM } = grid;
+
+  const positionsM = new Float64Array(n);
+  for (let j = 0; j < n; j++) positionsM[j] = startM + (j + 0.5) * binM;
+  const total = new Float64Array(n);
+  const perSublevel: Float64Array[] = [];
+  const work = new Float64Array(n);
+  const work2 = new Float64Array(n);
+  const prefix = new Float64Array(n + 1);
+  let offGrid = 0;
+  const summaries: SublevelDeflection[] = [];
+  const ownPeaks: number[] = [];
+  for (let i = 0; i < sublevels.length; i++) {
+    const out = new Float64Array(n);
+    perSublevel.push(out);
+    const meanDeflectionM = ks[i] * law.meanInverseSquare;
+    if (weights[i] === 0) {
+      summaries.push({ label: sublevels[i].label, weight: 0, coefficientM3PerS2: ks[i], meanDeflectionM, peakM: NaN });
+      ownPeaks.push(NaN);
+      continue;
+    }
+    work.fill(0);
+    offGrid += weights[i] * depositDeflections(work, grid, ks[i], law);
+    convolveBox(work, binM, image.boxAM, work2, prefix);
+    convolveBox(work2, binM, image.boxBM, work, prefix);
+    convolveBox(work, binM, image.detectorM, work2, prefix);
+    const scale = weights[i] / binM;
+    for (let j = 0; j < n; j++) {
+      const v = work2[j] * scale;
+      out[j] = v;
+      total[j] += v;
+    }
+    const own = peakShape(out, startM, binM);
+    const peakM = own ? own.positionM : NaN;
+    ownPeaks.push(peakM);
+    summaries.push({ label: sublevels[i].label, weight: weights[i], coefficientM3PerS2: ks[i], meanDeflectionM, peakM });
+  }
+
+  const activeIdx = weights.map((w, i) => (w > 0 && Number.isFinite(ownPeaks[i]) ? i : -1)).filter((i) => i >= 0);
+  const groups = fixedGroups
+    ? fixedGroups.map((g) => g.filter((i) => activeIdx.includes(i))).filter((g) => g.length > 0)
+    : groupByPeakPosition(ownPeaks, activeIdx, options.mergeFraction * image.kernelFwhmM);
+  const peaks: PatternPeak[] = [];
+  const profile = new Float64Array(n);
+  for (const g of groups) {
+    profile.fill(0);
+    for (const i of g) {
+      const p = perSublevel[i];
+      for (let j = 0; j < n; j++) profile[j] += p[j];
+    }
+    const shape = peakShape(profile, startM, binM);
+    if (!shape) continue;
+    peaks.push({
+      positionM: shape.positionM,
+      fwhmM: shape.fwhmM,
+      height: shape.height,
+      totalHeight: sampleAt(total, startM, binM, shape.positionM),
+      members: g.map((i) => sublevels[i].label),
+      memberIndices: [...g],
+    });
+  }
+  peaks.sort((a, b) => a.positionM - b.positionM);
+  const pairs = pairDips(
+    total,
+    startM,
+    binM,
+    peaks.map((p) => p.positionM),
+    options.dipCriterion,
+  );
+  const result: DetectorPattern = {
+    positionsM,
+    binM,
+    total,
+    perSublevel,
+    sublevels: summaries,
+    offGridFraction: offGrid,
+    image,
+    speed: {
+      meanSpeed: law.meanSpeed,
+      rmsSpread: law.rmsSpread,
+      mostProbableSpeed: law.mostProbableSpeed,
+      meanInverseSquare: law.meanInverseSquare,
+    },
+    peaks,
+    pairs,
+    allResolved: pairs.every((p) => p.resolved),
+    maxima: localMaxima(total, startM, binM, options.minRelativeProminence),
+    issues,
+  };
+  addDetectorChecks(result, geometry, startM, binM);
+  if (offGrid > 0.05) {
+    issues.push(
+      beamIssue(
+        'warning',
+        'beam-pattern-off-grid',
+        `${(100 * offGrid).toFixed(1)} % of the atoms land outside the computed range; widen the span or lower the tail fraction.`,
+      ),
+    );
+  }
+  return result;
+}
+
+function addDetectorChecks(result: DetectorPattern, geometry: BeamGeometry, startM: number, binM: number): void {
+  if (geometry.detectorOffsetM === undefined) return;
+  const x = geometry.detectorOffsetM;
+  const density = sampleAt(result.total, startM, binM, x);
+  const w = geometry.detectorWidthM;
+  result.detectorFraction = w > 0 ? density * w : 0;
+  let highest = 0;
+  for (const v of result.total) highest = Math.max(highest, v);
+  if (!(density > 1e-9 * highest)) {
+    result.issues.push(
+      beamIssue(
+        'warning',
+        'beam-misses-detector',
+        `No atoms reach a detector centred at ${x} m: the beam lands between ${(startM + binM / 2).toPrecision(4)} m and ${(
+          startM +
+          (result.total.length - 0.5) * binM
+        ).toPrecision(4)} m.`,
+      ),
+    );
+  }
+}

@@ -1,0 +1,93 @@
+/**
+ * Blocks of a hyperfine level in the uncoupled basis |m_J, m_I>:
+ *   H/h = A I·J
+ *       + B [3(I·J)² + 3/2 (I·J) − I(I+1)J(J+1)] / [2I(2I−1) J(2J−1)]
+ *       + C [10(I·J)³ + 20(I·J)² + 2(I·J)(I(I+1)+J(J+1)+3−3I(I+1)J(J+1)) − 5I(I+1)J(J+1)]
+ *           / [I(I−1)(2I−1) J(J−1)(2J−1)]
+ *       + (μ_B B/h)(g_J J_z + g_I I_z).
+ * Powers of I·J are exact inside a block because I·J conserves m_F.
+ */
+import { BOHR_MAGNETON_HZ_PER_T } from '../constants';
+import { orderHighLabels, orderLowLabels } from './adiabaticOrder';
+import { blockProjections, dotProductBlock, multiplySquare } from './couplingMatrix';
+import { couplings, jj1 } from './halfIntegers';
+import { fLabel, jiLabel } from './labelText';
+import { landeGF } from './landeFactors';
+import type { LevelBlock, LevelModel, RankedHigh, RankedLow } from './levelModel';
+import type { CleanHyperfine } from './validateSpec';
+import { hyperfineZeroFieldHz, octupoleActs, quadrupoleActs } from './zeroFieldLevels';
+
+function zeroFieldMatrix(s: CleanHyperfine, x: Float64Array, n: number): Float64Array {
+  const h = new Float64Array(n * n);
+  for (let k = 0; k < n * n; k++) h[k] = s.A * x[k];
+  const needSquare = (s.B !== 0 && quadrupoleActs(s.twoJ, s.twoI)) || (s.C !== 0 && octupoleActs(s.twoJ, s.twoI));
+  if (!needSquare) return h;
+  const ii = jj1(s.twoI);
+  const j2 = jj1(s.twoJ);
+  const I = s.twoI / 2;
+  const J = s.twoJ / 2;
+  const x2 = multiplySquare(x, x, n);
+  if (s.B !== 0 && quadrupoleActs(s.twoJ, s.twoI)) {
+    const c = s.B / (2 * I * (2 * I - 1) * J * (2 * J - 1));
+    for (let k = 0; k < n * n; k++) h[k] += c * (3 * x2[k] + 1.5 * x[k]);
+    for (let k = 0; k < n; k++) h[k * n + k] -= c * ii * j2;
+  }
+  if (s.C !== 0 && octupoleActs(s.twoJ, s.twoI)) {
+    const x3 = multiplySquare(x2, x, n);
+    const c = s.C / (I * (I - 1) * (2 * I - 1) * J * (J - 1) * (2 * J - 1));
+    const lin = 2 * (ii + j2 + 3 - 3 * ii * j2);
+    for (let k = 0; k < n * n; k++) h[k] += c * (10 * x3[k] + 20 * x2[k] + lin * x[k]);
+    for (let k = 0; k < n; k++) h[k * n + k] -= c * 5 * ii * j2;
+  }
+  return h;
+}
+
+export function buildHyperfineModel(s: CleanHyperfine): LevelModel {
+  const mu = BOHR_MAGNETON_HZ_PER_T;
+  const fValues = couplings(s.twoJ, s.twoI);
+  const zf = new Map<number, number>();
+  for (const twoF of fValues) zf.set(twoF, hyperfineZeroFieldHz(s.twoJ, s.twoI, twoF, s.A, s.B, s.C));
+  const zfList = [...zf.values()];
+  const spread = Math.max(...zfList) - Math.min(...zfList);
+  const energyScale = Math.max(spread, Math.abs(s.A), Math.abs(s.B), Math.abs(s.C), 1e-300);
+  const slopeScale = mu * (Math.abs(s.gJ) * s.twoJ + Math.abs(s.gI) * s.twoI + 1e-300);
+
+  const blocks: LevelBlock[] = [];
+  const twoMax = s.twoJ + s.twoI;
+  for (let twoM = -twoMax; twoM <= twoMax; twoM += 2) {
+    const mJs = blockProjections(s.twoJ, s.twoI, twoM);
+    const n = mJs.length;
+    const x = dotProductBlock(s.twoJ, s.twoI, mJs, twoM);
+    const h0 = zeroFieldMatrix(s, x, n);
+    const zeeman = new Float64Array(n);
+    const basis = mJs.map((mJ) => jiLabel(mJ, twoM - mJ));
+    const highCands: RankedHigh[] = [];
+    for (let k = 0; k < n; k++) {
+      zeeman[k] = (mu * (s.gJ * mJs[k] + s.gI * (twoM - mJs[k]))) / 2;
+      highCands.push({ label: basis[k], diagonalHz: h0[k * n + k], slopeHzPerT: zeeman[k] });
+    }
+    const lowCands: RankedLow[] = fValues
+      .filter((twoF) => twoF >= Math.abs(twoM))
+      .map((twoF) => ({
+        label: fLabel(twoF, twoM),
+        zeroFieldHz: zf.get(twoF) as number,
+        slopeHzPerT: (mu * landeGF(twoF, s.twoJ, s.twoI, s.gJ, s.gI) * twoM) / 2,
+      }));
+    blocks.push({
+      twoM,
+      size: n,
+      basis,
+      h0,
+      zeeman,
+      low: [orderLowLabels(lowCands, 1, energyScale, slopeScale), orderLowLabels(lowCands, -1, energyScale, slopeScale)],
+      high: [orderHighLabels(highCands, 1, energyScale, slopeScale), orderHighLabels(highCands, -1, energyScale, slopeScale)],
+    });
+  }
+  return {
+    spec: s,
+    blocks,
+    dimension: (s.twoJ + 1) * (s.twoI + 1),
+    largestBlock: Math.min(s.twoJ, s.twoI) + 1,
+    zeroFieldSpreadHz: spread,
+  };
+}

@@ -1,0 +1,37 @@
+/**
+ * The any-field Zeeman engine: exact diagonalisation of one level's
+ * fine/hyperfine + Zeeman Hamiltonian, block by block in the conserved m,
+ * with adiabatic labels, moments, curvatures, sweeps, crossings, regime
+ * detection and closed-form cross-checks. See docs/engine.md.
+ */
+export type {
+  CoupledFLabel,
+  CoupledJLabel,
+  EngineIssue,
+  FineTermSpec,
+  HighFieldLabel,
+  HyperfineLevelSpec,
+  IssueSeverity,
+  LevelCrossing,
+  LevelSpec,
+  LowFieldLabel,
+  RegimeResult,
+  RegimeVerdict,
+  SolveResult,
+  SublevelState,
+  SweepOptions,
+  SweepResult,
+  SweptState,
+  UncoupledJILabel,
+  UncoupledLSLabel,
+} from './types';
+export { solveLevel } from './solveLevel';
+export { sweepLevel } from './sweepLevel';
+export { regime } from './regime';
+export { breitRabi, breitRabiEnergy, linearZeeman, paschenBackLimit } from './closedForms';
+export type { LinearEnergy, StrongFieldEnergy } from './closedForms';
+export { hyperfineZeroFieldHz, fineZeroFieldHz, quadrupoleActs, octupoleActs } from './zeroFieldLevels';
+export { landeGF, landeGJ } from './landeFactors';
+export { validateSpec } from './validateSpec';
+export { symmetricEigen } from './symmetricEigen';
+export * as engineLimits from './limits';

@@ -1,0 +1,129 @@
+/**
+ * Which regime a field puts a level in, and where the simple formulas stop
+ * being good enough.
+ *
+ * x = |g_a − g_b| μ_B |B| / (h ΔE), with ΔE the zero-field spread of the
+ * level's structure (hyperfine: E(F_max) − E(F_min) spread, g_a − g_b = g_J − g_I;
+ * fine: spread of the J levels, g_S − g_L). For J = 1/2 this is the
+ * Breit–Rabi x.
+ *
+ * linearLimitT: the lowest field where the linear formula E(F) + g_F m_F μ_B B
+ * misses some sublevel by more than `fraction` × the largest linear Zeeman
+ * shift in the level (max |g_F m_F| μ_B B).
+ * strongLimitT: the field above which the strong-field formula (diagonal of
+ * the couplings + Zeeman) is within `fraction` × ΔE for every sublevel.
+ * Verdict: weak at or below linearLimitT, strong at or above strongLimitT,
+ * intermediate between.
+ */
+import { BOHR_MAGNETON_HZ_PER_T } from '../constants';
+import { makeWorkspace, solveBlockAt } from './blockSolver';
+import { buildLevelModel } from './buildModel';
+import { issue } from './issues';
+import type { LevelModel } from './levelModel';
+import { MAX_SWEEP_WORK } from './limits';
+import type { EngineIssue, LevelSpec, RegimeResult, RegimeVerdict } from './types';
+import { checkField } from './validateSpec';
+
+/** Scan from 1e-9 to 1e6 times the characteristic field, ten steps per decade. */
+const SCAN_LO = -90;
+const SCAN_HI = 60;
+
+interface FormulaErrors {
+  linear: number;
+  strong: number;
+}
+
+/** Largest misses of the two simple formulas at a positive field (NaN if the solver fails). */
+function formulaErrors(model: LevelModel, fieldT: number, ws: ReturnType<typeof makeWorkspace>): FormulaErrors {
+  let linear = 0;
+  let strong = 0;
+  for (const block of model.blocks) {
+    if (!solveBlockAt(block, fieldT, ws)) return { linear: Number.NaN, strong: Number.NaN };
+    for (let k = 0; k < block.size; k++) {
+      const low = block.low[0][k];
+      const high = block.high[0][k];
+      linear = Math.max(linear, Math.abs(ws.values[k] - (low.zeroFieldHz + low.slopeHzPerT * fieldT)));
+      strong = Math.max(strong, Math.abs(ws.values[k] - (high.diagonalHz + high.slopeHzPerT * fieldT)));
+    }
+  }
+  return { linear, strong };
+}
+
+/** Bisect on log B between a field where `fails` is `atLo` and one where it is not. */
+function bisectLog(lo: number, hi: number, fails: (b: number) => boolean, atLo: boolean): number {
+  for (let it = 0; it < 60 && hi / lo > 1 + 1e-9; it++) {
+    const mid = Math.sqrt(lo * hi);
+    if (fails(mid) === atLo) lo = mid;
+    else hi = mid;
+  }
+  return Math.sqrt(lo * hi);
+}
+
+function characteristicField(model: LevelModel, gDiff: number): number {
+  const spread = model.zeroFieldSpreadHz;
+  if (spread > 0 && gDiff > 0) return spread / (gDiff * BOHR_MAGNETON_HZ_PER_T);
+  return 1;
+}
+
+function verdictFor(b: number, linearLimitT: number, strongLimitT: number): RegimeVerdict {
+  if (b <= linearLimitT) return 'weak field (linear)';
+  if (b >= strongLimitT) return 'strong field (Paschen–Back / decoupled)';
+  return 'intermediate';
+}
+
+export function regime(spec: LevelSpec, fieldT: number, fraction = 0.01): RegimeResult {
+  const { model, issues } = buildLevelModel(spec);
+  const empty = (msgs: EngineIssue[]): RegimeResult => ({
+    x: Number.NaN,
+    verdict: 'intermediate',
+    linearLimitT: Number.NaN,
+    strongLimitT: Number.NaN,
+    zeroFieldSpreadHz: Number.NaN,
+    fraction,
+    issues: msgs,
+  });
+  if (!model) return empty(issues);
+  if (!checkField(fieldT, 'field', issues)) return empty(issues);
+  if (!(fraction > 0 && fraction < 1)) {
+    issues.push(issue('error', 'bad-fraction', 'The accuracy fraction must be between 0 and 1 (for example 0.01 for 1 %).'));
+    return empty(issues);
+  }
+  const s = model.spec;
+  const gDiff = s.kind === 'hyperfine' ? Math.abs(s.gJ - s.gI) : Math.abs(s.gS - s.gL);
+  const spread = model.zeroFieldSpreadHz;
+  const b = Math.abs(fieldT);
+  const x = spread > 0 ? (gDiff * BOHR_MAGNETON_HZ_PER_T * b) / spread : b === 0 ? 0 : Number.POSITIVE_INFINITY;
+
+  let cubes = 0;
+  for (const blk of model.blocks) cubes += blk.size ** 3;
+  if (cubes * (SCAN_HI - SCAN_LO + 120) > MAX_SWEEP_WORK) {
+    issues.push(issue('info', 'regime-limits-skipped', 'The level is too large to search for the regime limits; only x is given.'));
+    const v: RegimeVerdict = x < 0.01 ? 'weak field (linear)' : x > 100 ? 'strong field (Paschen–Back / decoupled)' : 'intermediate';
+    return { x, verdict: v, linearLimitT: Number.NaN, strongLimitT: Number.NaN, zeroFieldSpreadHz: spread, fraction, issues };
+  }
+
+  let maxSlope = 0;
+  for (const blk of model.blocks) for (const low of blk.low[0]) maxSlope = Math.max(maxSlope, Math.abs(low.slopeHzPerT));
+  const ws = makeWorkspace(model.largestBlock);
+  const linearFails = (f: number): boolean => !(formulaErrors(model, f, ws).linear <= fraction * maxSlope * f);
+  const strongFails = (f: number): boolean => !(formulaErrors(model, f, ws).strong <= fraction * spread);
+
+  const bc = characteristicField(model, gDiff);
+  const at = (k: number): number => bc * 10 ** (k / 10);
+
+  let linearLimitT = Number.POSITIVE_INFINITY;
+  for (let k = SCAN_LO; k <= SCAN_HI; k++) {
+    if (linearFails(at(k))) {
+      linearLimitT = k === SCAN_LO ? 0 : bisectLog(at(k - 1), at(k), linearFails, false);
+      break;
+    }
+  }
+  let strongLimitT = 0;
+  for (let k = SCAN_HI; k >= SCAN_LO; k--) {
+    if (strongFails(at(k))) {
+      strongLimitT = k === SCAN_HI ? Number.POSITIVE_INFINITY : bisectLog(at(k), at(k + 1), strongFails, true);
+      break;
+    }
+  }
+  return { x, verdict: verdictFor(b, linearLimitT, strongLimitT), linearLimitT, strongLimitT, zeroFieldSpreadHz: spread, fraction, issues };
+}

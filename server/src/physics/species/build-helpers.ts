@@ -1,0 +1,46 @@
+/**
+ * Small constructors that keep the data files terse while making every value carry its
+ * source, and that record how derived numbers were obtained.
+ */
+import { nuclearGFromMoment, publishedEnergyToHz } from './conversions';
+import type { PublishedEnergy, PublishedEnergyUnit, Sourced } from './types';
+
+/** Wraps a value with its citation. */
+export function sourced<T>(value: T, source: string): Sourced<T> {
+  return { value, source };
+}
+
+/** A frequency published in MHz, stored in Hz. */
+export function mhz(value: number, source: string): Sourced<number> {
+  return sourced(value * 1e6, source);
+}
+
+/** A lifetime published in ns, stored in s. */
+export function ns(value: number, source: string): Sourced<number> {
+  return sourced(value * 1e-9, source);
+}
+
+/** Energy fields of a level from a published frequency or wavenumber. */
+export function energy(
+  value: number,
+  unit: PublishedEnergyUnit,
+  source: string,
+): { energyHz: Sourced<number>; energyPublished: PublishedEnergy } {
+  return {
+    energyHz: sourced(publishedEnergyToHz(value, unit), `${source} [${value} ${unit}, converted to Hz]`),
+    energyPublished: { value, unit, source },
+  };
+}
+
+/** The ground level's energy, zero by definition of the scale. */
+export const GROUND_ENERGY: Sourced<number> = sourced(0, 'definition: energies are measured from the ground level');
+
+/** g_I derived from μ_I when no atomic compilation lists it (no shielding correction). */
+export function derivedNuclearG(mu: Sourced<number>, twoI: number): Sourced<number> {
+  const value = nuclearGFromMoment(mu.value, twoI) ?? Number.NaN;
+  return sourced(
+    value,
+    `derived: g_I = −(μ_I/μ_N)(μ_N/μ_B)/I with μ_I from ${mu.source} and CODATA 2022 magnetons; ` +
+      'bare-nucleus value, diamagnetic shielding not applied',
+  );
+}

@@ -1,0 +1,53 @@
+/** Caesium-133: 6s ground level (defines the SI second) and the 6p D-line levels. */
+import { CAESIUM_HYPERFINE_HZ } from '../constants';
+import { energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
+import { NIST_MASSES, SI_SECOND, STECK_CS } from './sources';
+import type { BuiltinSpecies } from './types';
+
+export const CAESIUM_133: BuiltinSpecies = {
+  id: 'Cs133',
+  aliases: ['133Cs', 'Cs-133', '¹³³Cs', 'cesium-133', 'caesium-133', 'Cs', 'cesium', 'caesium'],
+  element: 'Cs',
+  Z: 55,
+  massNumber: 133,
+  massU: sourced(132.905451961, NIST_MASSES),
+  twoI: sourced(7, STECK_CS),
+  muI: sourced(
+    2.5778,
+    'IAEA nuclear moments table INDC(NDS)-0794 (Stone 2019), shielding re-evaluated — value read from a public transcription, attribution from memory',
+  ),
+  gI: sourced(-0.00039885395, STECK_CS),
+  levels: [
+    {
+      key: 'ground',
+      designation: '6s 2S1/2',
+      // ΔW = A(I + 1/2) = 4A is exact by definition of the second.
+      A: sourced(CAESIUM_HYPERFINE_HZ / 4, `derived: A = ΔW/4 from the ${SI_SECOND}`),
+      gJ: sourced(2.00254032, STECK_CS),
+      energyHz: GROUND_ENERGY,
+    },
+    {
+      key: 'P1/2',
+      designation: '6p 2P°1/2',
+      A: mhz(291.9201, STECK_CS),
+      gJ: sourced(0.6659, STECK_CS),
+      ...energy(335.116048807, 'THz', STECK_CS),
+      vacuumWavelengthNm: sourced(894.59295986, STECK_CS),
+      lifetimeS: ns(34.894, STECK_CS),
+    },
+    {
+      key: 'P3/2',
+      designation: '6p 2P°3/2',
+      A: mhz(50.28827, STECK_CS),
+      B: mhz(-0.4934, STECK_CS),
+      C: sourced(560, STECK_CS),
+      gJ: sourced(
+        1.33408749,
+        'precision measurement of the excited-state Landé g-factor of the Cs D2 line in 3 T and 7 T fields, g_J = 1.334 087 49(52)',
+      ),
+      ...energy(351.7257185, 'THz', STECK_CS),
+      vacuumWavelengthNm: sourced(852.34727582, STECK_CS),
+      lifetimeS: ns(30.473, STECK_CS),
+    },
+  ],
+};

@@ -1,0 +1,89 @@
+/** Rubidium-85 and -87: 5s ground level and the 5p D-line levels. */
+import { energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
+import { IAEA_MOMENTS, NIST_MASSES, STECK_RB85, STECK_RB87 } from './sources';
+import type { BuiltinSpecies } from './types';
+
+export const RUBIDIUM_85: BuiltinSpecies = {
+  id: 'Rb85',
+  aliases: ['85Rb', 'Rb-85', '⁸⁵Rb', 'rubidium-85'],
+  element: 'Rb',
+  Z: 37,
+  massNumber: 85,
+  massU: sourced(84.9117897379, NIST_MASSES),
+  twoI: sourced(5, STECK_RB85),
+  muI: sourced(1.3530562, IAEA_MOMENTS),
+  gI: sourced(-0.00029364, STECK_RB85),
+  levels: [
+    {
+      key: 'ground',
+      designation: '5s 2S1/2',
+      A: mhz(1011.910813, STECK_RB85),
+      gJ: sourced(2.00233113, STECK_RB85),
+      energyHz: GROUND_ENERGY,
+    },
+    {
+      key: 'P1/2',
+      designation: '5p 2P°1/2',
+      A: mhz(120.527, STECK_RB85),
+      gJ: sourced(0.666, STECK_RB85),
+      ...energy(377.10738569, 'THz', STECK_RB85),
+      vacuumWavelengthNm: sourced(794.979014933, STECK_RB85),
+      lifetimeS: ns(27.679, STECK_RB85),
+    },
+    {
+      key: 'P3/2',
+      designation: '5p 2P°3/2',
+      A: mhz(25.002, STECK_RB85),
+      B: mhz(25.79, STECK_RB85),
+      gJ: sourced(1.3362, STECK_RB85),
+      ...energy(384.230406373, 'THz', STECK_RB85),
+      vacuumWavelengthNm: sourced(780.241368271, STECK_RB85),
+      lifetimeS: ns(26.2348, STECK_RB85),
+    },
+  ],
+  notes: 'Ground splitting check value 3 035 732 440(3) Hz (1976 measurement, public hyperfine-splitting table).',
+};
+
+export const RUBIDIUM_87: BuiltinSpecies = {
+  id: 'Rb87',
+  aliases: ['87Rb', 'Rb-87', '⁸⁷Rb', 'rubidium-87'],
+  element: 'Rb',
+  Z: 37,
+  massNumber: 87,
+  massU: sourced(86.909180531, NIST_MASSES),
+  twoI: sourced(3, STECK_RB87),
+  muI: sourced(2.751292, IAEA_MOMENTS),
+  gI: sourced(-0.0009951414, STECK_RB87),
+  levels: [
+    {
+      key: 'ground',
+      designation: '5s 2S1/2',
+      A: mhz(3417.341305452145, STECK_RB87),
+      gJ: sourced(2.00233113, STECK_RB87),
+      energyHz: GROUND_ENERGY,
+    },
+    {
+      key: 'P1/2',
+      designation: '5p 2P°1/2',
+      A: mhz(
+        408.328,
+        'Steck, "Rubidium 87 D Line Data" rev. 2.2+ — from memory; agrees with 408.340(19) MHz measured in arXiv:1611.02406',
+      ),
+      gJ: sourced(0.666, STECK_RB87),
+      ...energy(377.10746338, 'THz', STECK_RB87),
+      vacuumWavelengthNm: sourced(794.978851156, `${STECK_RB87} — from memory`),
+      lifetimeS: ns(27.679, STECK_RB87),
+    },
+    {
+      key: 'P3/2',
+      designation: '5p 2P°3/2',
+      A: mhz(84.7185, STECK_RB87),
+      B: mhz(12.4965, STECK_RB87),
+      gJ: sourced(1.3362, STECK_RB87),
+      ...energy(384.2304844685, 'THz', STECK_RB87),
+      vacuumWavelengthNm: sourced(780.241209686, STECK_RB87),
+      lifetimeS: ns(26.2348, STECK_RB87),
+    },
+  ],
+  notes: 'Ground splitting check value 6 834 682 610.904 Hz (2003 fountain measurement, public hyperfine-splitting table).',
+};
