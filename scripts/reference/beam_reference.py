@@ -38,13 +38,17 @@ def jet_flux(v, u, alpha):
     return v**3 * np.exp(-(((v - u) / alpha) ** 2))
 
 
-def law_moments(f, lo, hi, peak_guess):
+def law_moments(f, lo, hi, peak_guess, want_mode=True):
     pts = [peak_guess]
     norm = integrate.quad(f, lo, hi, points=pts, epsabs=0, epsrel=1e-13, limit=500)[0]
     m1 = integrate.quad(lambda v: v * f(v), lo, hi, points=pts, epsabs=0, epsrel=1e-13, limit=500)[0] / norm
     c2 = integrate.quad(lambda v: (v - m1) ** 2 * f(v), lo, hi, points=pts, epsabs=0, epsrel=1e-13, limit=500)[0] / norm
     inv2 = integrate.quad(lambda v: f(v) / v**2, lo, hi, points=pts, epsabs=0, epsrel=1e-13, limit=500)[0] / norm
-    mp = optimize.minimize_scalar(lambda v: -f(v), bracket=(0.5 * peak_guess, peak_guess, 1.5 * peak_guess), tol=1e-12).x
+    mp = None
+    if want_mode:
+        # the flux densities here are unimodal on (lo, hi)
+        mp = optimize.minimize_scalar(lambda v: -f(v) / f(peak_guess), bounds=(max(lo, 1e-6 * hi), hi), method="bounded",
+                                      options={"xatol": 1e-12 * hi, "maxiter": 2000}).x
     return norm, m1, math.sqrt(c2), inv2, mp
 
 
@@ -73,7 +77,7 @@ def jet_shape_ratio(s):
     """rms/mean of w^3 exp(-(w - s)^2) for speed ratio s."""
     f = lambda w: jet_flux(w, s, 1.0)
     lo = max(0.0, s - 12)
-    _, mean, rms, _, _ = law_moments(f, lo, s + 12, max(s, 1.0))
+    _, mean, rms, _, _ = law_moments(f, lo, s + 12, max(s, 1.0), want_mode=False)
     return rms / mean
 
 
@@ -81,7 +85,7 @@ def jet_case(mean_speed, rel_spread):
     s = optimize.brentq(lambda x: jet_shape_ratio(x) - rel_spread, 1e-6, 4 / rel_spread + 20, xtol=1e-13, rtol=1e-14)
     f1 = lambda w: jet_flux(w, s, 1.0)
     lo = max(0.0, s - 12)
-    _, mean_w, _, _, _ = law_moments(f1, lo, s + 12, max(s, 1.0))
+    _, mean_w, _, _, _ = law_moments(f1, lo, s + 12, max(s, 1.0), want_mode=False)
     alpha = mean_speed / mean_w
     u = s * alpha
     f = lambda v: jet_flux(v, u, alpha)
@@ -115,7 +119,7 @@ def kernel(x, a, b, w):
     if w == 0:
         return float(trapezoid(x, a, b))
     pts = [p for p in (-(a + b) / 2, -abs(a - b) / 2, abs(a - b) / 2, (a + b) / 2) if x - w / 2 < p < x + w / 2]
-    val = integrate.quad(lambda y: trapezoid(y, a, b), x - w / 2, x + w / 2, points=pts or None, epsabs=0, epsrel=1e-12)[0]
+    val = integrate.quad(lambda y: trapezoid(y, a, b), x - w / 2, x + w / 2, points=pts or None, epsabs=1e-15, epsrel=1e-12)[0]
     return val / w
 
 

@@ -22,6 +22,7 @@ import mpmath
 import numpy as np
 import scipy
 import scipy.constants as sc
+from scipy.optimize import brentq
 
 TWO_J, TWO_I = 3, 7
 A_HZ, B_HZ = 50.28827e6, -0.4934e6
@@ -29,6 +30,7 @@ G_J, G_I = 1.3340, -0.00039885395
 MU_B_HZ_PER_T = sc.physical_constants["Bohr magneton"][0] / sc.h
 FIELDS_T = [0.0, 1e-4, 2e-3, 0.01, 0.037, 0.1, 0.25, 0.5, 1.0]
 CURVATURE_FIELDS_T = [0.0, 2e-3, 0.1, 1.0]
+CROSSING_SCAN = (0.0, 1.0, 20001)  # from, to (tesla), points
 
 
 def spin_matrices(two_j):
@@ -56,6 +58,35 @@ def hamiltonian_parts():
     two_mj = np.repeat(np.round(2 * mj).astype(int), TWO_I + 1)
     two_mi = np.tile(np.round(2 * mi).astype(int), TWO_J + 1)
     return h0, z, two_mj, two_mi
+
+
+def find_crossings(h0, zdiag, two_m):
+    """Crossings between levels of different m blocks: sign changes of E_a - E_b on a
+    fine grid (block eigenvalues from numpy.linalg.eigvalsh), refined with scipy brentq."""
+    blocks = {m: np.where(two_m == m)[0] for m in sorted(set(two_m.tolist()))}
+
+    def block_eigs(m, b):
+        idx = blocks[m]
+        return np.linalg.eigvalsh(h0[np.ix_(idx, idx)] + b * np.diag(zdiag[idx]))
+
+    grid = np.linspace(*CROSSING_SCAN)
+    tables = {m: np.array([block_eigs(m, b) for b in grid]) for m in blocks}
+    levels = [(m, r) for m in blocks for r in range(len(blocks[m]))]
+    scale = max(np.abs(t).max() for t in tables.values())
+    found = []
+    for i, (ma, ra) in enumerate(levels):
+        for mb, rb in levels[i + 1 :]:
+            if ma == mb:
+                continue
+            d = tables[ma][:, ra] - tables[mb][:, rb]
+            sign = np.where(np.abs(d) <= 1e-10 * scale, 0, np.sign(d))
+            nz = np.nonzero(sign)[0]
+            for k0, k1 in zip(nz[:-1], nz[1:]):
+                if sign[k0] != sign[k1]:
+                    f = lambda b: block_eigs(ma, b)[ra] - block_eigs(mb, b)[rb]
+                    root = brentq(f, grid[k0], grid[k1], xtol=1e-16, rtol=1e-15)
+                    found.append({"twoMA": int(ma), "rankA": ra, "twoMB": int(mb), "rankB": rb, "fieldT": root})
+    return sorted(found, key=lambda c: c["fieldT"])
 
 
 def main():
@@ -110,6 +141,8 @@ def main():
                     {"fieldT": b, "twoM": int(m), "rank": rank, "energyHz": float(mid[rank]), "d2EdB2": float(d2)}
                 )
 
+    crossings = find_crossings(h0, zdiag, two_m)
+
     out = {
         "generator": "scripts/reference/engine_cs6p32.py",
         "libraries": {"numpy": np.__version__, "scipy": scipy.__version__, "mpmath": mpmath.__version__},
@@ -126,12 +159,14 @@ def main():
         "muBOverHHzPerT": MU_B_HZ_PER_T,
         "results": results,
         "curvature": curvature,
+        "crossingScan": {"fromT": CROSSING_SCAN[0], "toT": CROSSING_SCAN[1], "points": CROSSING_SCAN[2]},
+        "crossings": crossings,
     }
     path = os.path.join("tests", "reference", "engine_cs6p32.json")
     with open(path, "w", encoding="utf-8") as f:
         json.dump(out, f, indent=1)
         f.write("\n")
-    print(f"wrote {path}: {len(results)} fields, {len(curvature)} curvature values")
+    print(f"wrote {path}: {len(results)} fields, {len(curvature)} curvature values, {len(crossings)} crossings")
 
 
 if __name__ == "__main__":

@@ -43,7 +43,8 @@ function allowedEdits(length: number): number {
 
 /**
  * Up to `max` candidates close to `word`, best first; ties keep the candidates' order, so
- * callers list the likelier candidates first. The word itself is never suggested.
+ * callers list the likelier candidates first. When some candidates differ from the word only
+ * in case, only those are returned. The word itself is never suggested.
  */
 export function suggestNames(word: string, candidates: readonly string[], max = 3): string[] {
   if (word.length === 0 || word.length > MAX_WORD) return [];
@@ -59,7 +60,9 @@ export function suggestNames(word: string, candidates: readonly string[], max = 
     if (d <= limit && d < name.length) scored.push({ name, score: d, order });
   });
   scored.sort((x, y) => x.score - y.score || x.order - y.order);
-  return scored.slice(0, max).map((s) => s.name);
+  // A match that differs only in case beats every real typo.
+  const best = scored[0]?.score === 0 ? scored.filter((s) => s.score === 0) : scored;
+  return best.slice(0, max).map((s) => s.name);
 }
 
 /** ` — did you mean 'x' or 'y'?` or '' when there are no suggestions. */

@@ -6,9 +6,6 @@
  * Frequency-like values (level energies, hyperfine constants) are returned in Hz:
  * f = E/h for energies and f = c·σ for wave numbers, with the exact SI values of h and c.
  */
-// mathjs ships as an ES module; with `module: Node16` tsc flags importing it from CommonJS (TS1479)
-// although the types resolve and both vitest and the esbuild bundle load it fine.
-// @ts-ignore TS1479 (not @ts-expect-error: the error goes away under `module: node20`)
 import { all, create } from 'mathjs';
 import type { Problem, Range, ValuePart } from './ast';
 import { makeProblem } from './codes';
@@ -213,7 +210,8 @@ export function suggestUnitNames(name: string): string[] {
 export function looksLikeMisspeltUnit(word: string): boolean {
   if (word.length > 16) return false;
   const syntax = parseUnitSyntax(word);
-  if (!syntax.ok) return false;
+  // A broken compound such as `T//m` or `cm^` is still meant as a unit.
+  if (!syntax.ok) return /^[\p{L}%°][\p{L}\d_%°·*/^⁻⁺⁰-⁹+-]*$/u.test(word) && /[/^*·]/.test(word);
   if (syntax.terms.length > 1 || word.includes('^') || word.startsWith('1/')) return true;
   const lower = word.toLowerCase();
   if (SINGLE_NAMES.some((u) => u.toLowerCase() === lower)) return true;
@@ -276,7 +274,7 @@ export function readQuantity(part: ValuePart, expected: Dimension, what?: string
       if (!e.ok) {
         return {
           problem: makeProblem(e.code, e.message, subRange(part.range, prefix.length + e.start, prefix.length + e.end), {
-            data: { suggestions: e.suggestions ?? [] },
+            data: { suggestions: [...(e.suggestions ?? [])] },
           }),
         };
       }
@@ -289,7 +287,7 @@ export function readQuantity(part: ValuePart, expected: Dimension, what?: string
   if (!e.ok) {
     return {
       problem: makeProblem(e.code, e.message, subRange(part.unit.range, e.start, e.end), {
-        data: { suggestions: e.suggestions ?? [] },
+        data: { suggestions: [...(e.suggestions ?? [])] },
       }),
     };
   }

@@ -50,9 +50,7 @@ export function readPartQuantity(
     return undefined;
   }
   if (result.si === undefined || !Number.isFinite(result.si)) return undefined;
-  const number = part.kind === 'word' ? undefined : part.number;
-  const scale = number && number.value !== 0 ? result.si / number.value : undefined;
-  const uncertainty = number?.uncertainty !== undefined && scale !== undefined ? Math.abs(number.uncertainty * scale) : undefined;
+  const uncertainty = result.siUncertainty;
   return { value: result.si, source: FILE_SOURCE, range: part.range, ...(uncertainty !== undefined ? { uncertainty } : {}) };
 }
 

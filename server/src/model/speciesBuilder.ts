@@ -89,7 +89,7 @@ function applyNuclearG(
 }
 
 function checkHandDefined(species: SpeciesModel, node: BlockNode, problems: ProblemList): void {
-  if (species.builtin || species.massKg) return;
+  if (species.builtin || species.massKg || node.settings.some((s) => s.key.text === 'mass')) return;
   const suggestions = suggestNames(species.name, speciesNames());
   const hint = suggestions.length > 0 ? ` If you meant a built-in species: ${suggestions.map((s) => `'${s}'`).join(' or ')}?` : '';
   problems.add(

@@ -1,49 +1,39 @@
 /**
  * Bins the deflections z = k/v² of one sublevel over the speed law. Bin masses come
- * from the law's cumulative fraction (exact for the oven), and each bin's mass is
- * placed at the bin's exact centroid (from ∫ f/v²) shared linearly between the two
- * nearest bin centres, so the first moment of the binned distribution is exact.
+ * from the law's cumulative fraction (exact for the oven) and each bin keeps the exact
+ * centroid of its atoms (from ∫ f/v²), so nothing is lost but the spread inside a bin.
  * Returns the flux fraction that falls outside the grid.
  */
 import type { SpeedLaw } from './speedLaw';
 
-export interface BinGrid {
-  /** Left edge of bin 0, m. */
-  startM: number;
-  /** Bin width, m. */
-  binM: number;
-  bins: number;
+/** Binned point masses: mass[j] sits at centroid[j], inside bin j. */
+export interface BinnedMasses {
+  mass: Float64Array;
+  centroid: Float64Array;
 }
 
-/** Adds mass at position z shared between the two nearest bin centres. */
-export function depositPoint(out: Float64Array, grid: BinGrid, z: number, mass: number): void {
-  const t = (z - grid.startM) / grid.binM - 0.5;
-  const n = grid.bins;
-  if (t <= 0) {
-    out[0] += mass;
-    return;
+/** Index of the bin containing x (edges ascending; x inside [edges[0], edges[n]]). */
+export function binOf(edges: Float64Array, x: number): number {
+  let lo = 0;
+  let hi = edges.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (edges[mid] <= x) lo = mid;
+    else hi = mid;
   }
-  if (t >= n - 1) {
-    out[n - 1] += mass;
-    return;
-  }
-  const i = Math.floor(t);
-  const f = t - i;
-  out[i] += mass * (1 - f);
-  out[i + 1] += mass * f;
+  return lo;
 }
 
-/**
- * Deposits one sublevel (deflection coefficient k, m³/s²) with unit total flux into
- * `out` (masses per bin). Returns the fraction beyond the grid edges.
- */
-export function depositDeflections(out: Float64Array, grid: BinGrid, k: number, law: SpeedLaw): number {
-  const { startM, binM, bins } = grid;
-  const endM = startM + bins * binM;
+export function depositDeflections(out: BinnedMasses, edges: Float64Array, k: number, law: SpeedLaw): number {
+  const bins = edges.length - 1;
+  out.mass.fill(0);
+  for (let j = 0; j < bins; j++) out.centroid[j] = 0.5 * (edges[j] + edges[j + 1]);
   if (k === 0 || law.singleSpeed !== undefined) {
     const z = law.singleSpeed !== undefined ? k / (law.singleSpeed * law.singleSpeed) : 0;
-    if (z < startM || z > endM) return 1;
-    depositPoint(out, grid, z, 1);
+    if (!(z >= edges[0] && z <= edges[bins])) return 1;
+    const j = binOf(edges, z);
+    out.mass[j] = 1;
+    out.centroid[j] = z;
     return 0;
   }
   const invTotal = law.meanInverseSquare;
@@ -69,19 +59,18 @@ export function depositDeflections(out: Float64Array, grid: BinGrid, k: number, 
       prevM = k * law.inverseSquareBelow(v);
     }
   };
-  atEdge(startM);
+  atEdge(edges[0]);
   const below = prevP;
   for (let j = 0; j < bins; j++) {
     const p0 = prevP;
     const m0 = prevM;
-    const left = startM + j * binM;
-    atEdge(left + binM);
+    atEdge(edges[j + 1]);
     const mass = prevP - p0;
     if (!(mass > 0)) continue;
-    let centroid = (prevM - m0) / mass;
-    // Round-off in tiny bins can push the centroid out of its bin.
-    if (!(centroid >= left && centroid <= left + binM)) centroid = left + 0.5 * binM;
-    depositPoint(out, grid, centroid, mass);
+    out.mass[j] = mass;
+    const c = (prevM - m0) / mass;
+    // Round-off in nearly empty bins can push the centroid out of its bin: keep the bin centre then.
+    if (c >= edges[j] && c <= edges[j + 1]) out.centroid[j] = c;
   }
   return below + (1 - prevP);
 }

@@ -4,16 +4,17 @@
  * aperture (a third box), weighted by population; then peaks, their members and a
  * resolvability verdict per neighbouring pair. Never throws: problems are issues.
  */
-import { convolveBox } from './boxConvolve';
+import { boxOperator, convolveBox, shareToCentres } from './boxConvolve';
 import { deflectionCoefficient } from './deflection';
-import { depositDeflections, type BinGrid } from './depositDeflections';
+import { depositDeflections, type BinnedMasses } from './depositDeflections';
+import { detectorGrid } from './detectorGrid';
 import { groupByPeakPosition } from './groupSublevels';
 import { pairDips, type PairVerdict } from './pairDips';
 import { resolveOptions, type PatternOptions } from './patternOptions';
-import { patternSpan } from './patternSpan';
 import { localMaxima, peakShape, sampleAt, type LocalMaximum } from './peakShape';
 import { slitImage, type SlitImage } from './slitImage';
 import { speedLawFor } from './speedLawFor';
+import { gridScaleM, inverseSquareRange, sublevelExtent } from './sublevelExtent';
 import { beamIssue, hasBeamError, type BeamGeometry, type BeamIssue, type BeamSublevel, type SpeedDistribution } from './types';
 import { validateGeometry } from './validateGeometry';
 import { validateSource } from './validateSource';
@@ -58,12 +59,14 @@ export interface SpeedSummary {
 }
 
 export interface DetectorPattern {
-  /** Bin centres, m from the undeflected axis. */
+  /** Bin centres, m from the undeflected axis (bins widen away from the axis for spread-out beams). */
   positionsM: Float64Array;
-  binM: number;
+  /** Bin edges, n + 1 values, m. */
+  edgesM: Float64Array;
   /**
-   * Summed pattern: flux fraction per metre of detector position, averaged over the
-   * aperture (× detector width = fraction of atoms a detector centred there receives).
+   * Summed pattern at the bin centres: flux fraction per metre of detector position,
+   * averaged over the aperture (× detector width = fraction of atoms a detector centred
+   * there receives). Bin j holds total[j] × (edges[j+1] − edges[j]) of the flux.
    */
   total: Float64Array;
   /** Population-weighted contributions, same units; they add up to `total`. */
@@ -88,7 +91,7 @@ export interface DetectorPattern {
 function emptyPattern(issues: BeamIssue[]): DetectorPattern {
   return {
     positionsM: new Float64Array(0),
-    binM: 0,
+    edgesM: new Float64Array(0),
     total: new Float64Array(0),
     perSublevel: [],
     sublevels: [],
@@ -124,19 +127,28 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
   const popSum = sublevels.reduce((s, x) => s + x.population, 0);
   const weights = sublevels.map((s) => s.population / popSum);
   const ks = sublevels.map((s) => deflectionCoefficient(s.momentJT, massKg, geometry));
-  const active = ks.filter((_, i) => weights[i] > 0);
-  const span = options.spanM ?? patternSpan(active, law, image.halfSupportM, options.tailFraction);
+  const range = inverseSquareRange(law, options.tailFraction);
+  const extents = ks.map((k) => sublevelExtent(k, range, image.halfSupportM));
+  let span = options.spanM;
+  if (!span) {
+    span = { startM: Infinity, endM: -Infinity };
+    extents.forEach((e, i) => {
+      if (weights[i] === 0) return;
+      span!.startM = Math.min(span!.startM, e.startM);
+      span!.endM = Math.max(span!.endM, e.endM);
+    });
+  }
   const n = options.bins;
-  const grid: BinGrid = { startM: span.startM, binM: (span.endM - span.startM) / n, bins: n };
-  const { startM, binM } = grid;
+  const landing = extents.filter((_, i) => weights[i] > 0);
+  const { edgesM, centresM } = detectorGrid(span.startM, span.endM, n, landing, gridScaleM(image.kernelFwhmM, law));
 
-  const positionsM = new Float64Array(n);
-  for (let j = 0; j < n; j++) positionsM[j] = startM + (j + 0.5) * binM;
   const total = new Float64Array(n);
   const perSublevel: Float64Array[] = [];
-  const work = new Float64Array(n);
-  const work2 = new Float64Array(n);
-  const prefix = new Float64Array(n + 1);
+  const stageA: BinnedMasses = { mass: new Float64Array(n), centroid: new Float64Array(n) };
+  const flat = new Float64Array(n);
+  const slitA = boxOperator(edgesM, image.boxAM);
+  const slitB = boxOperator(edgesM, image.boxBM);
+  const aperture = boxOperator(edgesM, image.detectorM);
   let offGrid = 0;
   const summaries: SublevelDeflection[] = [];
   const ownPeaks: number[] = [];
@@ -149,18 +161,24 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
       ownPeaks.push(NaN);
       continue;
     }
-    work.fill(0);
-    offGrid += weights[i] * depositDeflections(work, grid, ks[i], law);
-    convolveBox(work, binM, image.boxAM, work2, prefix);
-    convolveBox(work2, binM, image.boxBM, work, prefix);
-    convolveBox(work, binM, image.detectorM, work2, prefix);
-    const scale = weights[i] / binM;
+    // Deflections → slit box a → slit box b → detector aperture; masses re-centred between stages.
+    depositDeflections(stageA, edgesM, ks[i], law);
+    shareToCentres(stageA, edgesM, flat);
+    convolveBox(flat, slitA, stageA);
+    shareToCentres(stageA, edgesM, flat);
+    convolveBox(flat, slitB, stageA);
+    shareToCentres(stageA, edgesM, flat);
+    convolveBox(flat, aperture, stageA);
+    out.set(stageA.mass);
+    let inside = 0;
     for (let j = 0; j < n; j++) {
-      const v = work2[j] * scale;
+      inside += out[j];
+      const v = (out[j] * weights[i]) / (edgesM[j + 1] - edgesM[j]);
       out[j] = v;
       total[j] += v;
     }
-    const own = peakShape(out, startM, binM);
+    offGrid += weights[i] * Math.max(0, 1 - inside);
+    const own = peakShape(out, centresM);
     const peakM = own ? own.positionM : NaN;
     ownPeaks.push(peakM);
     summaries.push({ label: sublevels[i].label, weight: weights[i], coefficientM3PerS2: ks[i], meanDeflectionM, peakM });
@@ -178,13 +196,13 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
       const p = perSublevel[i];
       for (let j = 0; j < n; j++) profile[j] += p[j];
     }
-    const shape = peakShape(profile, startM, binM);
+    const shape = peakShape(profile, centresM);
     if (!shape) continue;
     peaks.push({
       positionM: shape.positionM,
       fwhmM: shape.fwhmM,
       height: shape.height,
-      totalHeight: sampleAt(total, startM, binM, shape.positionM),
+      totalHeight: sampleAt(total, centresM, edgesM, shape.positionM),
       members: g.map((i) => sublevels[i].label),
       memberIndices: [...g],
     });
@@ -192,14 +210,14 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
   peaks.sort((a, b) => a.positionM - b.positionM);
   const pairs = pairDips(
     total,
-    startM,
-    binM,
+    centresM,
+    edgesM,
     peaks.map((p) => p.positionM),
     options.dipCriterion,
   );
   const result: DetectorPattern = {
-    positionsM,
-    binM,
+    positionsM: centresM,
+    edgesM,
     total,
     perSublevel,
     sublevels: summaries,
@@ -214,10 +232,10 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
     peaks,
     pairs,
     allResolved: pairs.every((p) => p.resolved),
-    maxima: localMaxima(total, startM, binM, options.minRelativeProminence),
+    maxima: localMaxima(total, centresM, options.minRelativeProminence),
     issues,
   };
-  addDetectorChecks(result, geometry, startM, binM);
+  addDetectorChecks(result, geometry);
   if (offGrid > 0.05) {
     issues.push(
       beamIssue(
@@ -230,10 +248,11 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
   return result;
 }
 
-function addDetectorChecks(result: DetectorPattern, geometry: BeamGeometry, startM: number, binM: number): void {
+function addDetectorChecks(result: DetectorPattern, geometry: BeamGeometry): void {
   if (geometry.detectorOffsetM === undefined) return;
   const x = geometry.detectorOffsetM;
-  const density = sampleAt(result.total, startM, binM, x);
+  const { edgesM } = result;
+  const density = sampleAt(result.total, result.positionsM, edgesM, x);
   const w = geometry.detectorWidthM;
   result.detectorFraction = w > 0 ? density * w : 0;
   let highest = 0;
@@ -243,10 +262,9 @@ function addDetectorChecks(result: DetectorPattern, geometry: BeamGeometry, star
       beamIssue(
         'warning',
         'beam-misses-detector',
-        `No atoms reach a detector centred at ${x} m: the beam lands between ${(startM + binM / 2).toPrecision(4)} m and ${(
-          startM +
-          (result.total.length - 0.5) * binM
-        ).toPrecision(4)} m.`,
+        `No atoms reach a detector centred at ${x} m: the computed pattern lies between ${edgesM[0].toPrecision(4)} m and ${edgesM[
+          edgesM.length - 1
+        ].toPrecision(4)} m.`,
       ),
     );
   }

@@ -6,7 +6,7 @@
  * dip between two diffraction-limited lines at the Rayleigh
  * spacing is 8/π² ≈ 0.81 of the maxima, from memory).
  */
-import { sampleAt } from './peakShape';
+import { centreBelow, sampleAt } from './peakShape';
 
 export const DEFAULT_DIP_CRITERION = 0.8;
 
@@ -21,8 +21,8 @@ export interface PairVerdict {
 
 export function pairDips(
   total: Float64Array,
-  startM: number,
-  binM: number,
+  centresM: Float64Array,
+  edgesM: Float64Array,
   peakPositionsM: readonly number[],
   criterion: number,
 ): PairVerdict[] {
@@ -30,12 +30,12 @@ export function pairDips(
   for (let p = 0; p + 1 < peakPositionsM.length; p++) {
     const xl = peakPositionsM[p];
     const xr = peakPositionsM[p + 1];
-    const hl = sampleAt(total, startM, binM, xl);
-    const hr = sampleAt(total, startM, binM, xr);
+    const hl = sampleAt(total, centresM, edgesM, xl);
+    const hr = sampleAt(total, centresM, edgesM, xr);
     const smaller = Math.min(hl, hr);
     let low = smaller;
-    const first = Math.max(0, Math.ceil((xl - startM) / binM - 0.5));
-    const last = Math.min(total.length - 1, Math.floor((xr - startM) / binM - 0.5));
+    const first = centreBelow(centresM, xl) + 1;
+    const last = centreBelow(centresM, xr);
     for (let j = first; j <= last; j++) low = Math.min(low, total[j]);
     const dipRatio = smaller > 0 ? low / smaller : 1;
     out.push({ left: p, right: p + 1, dipRatio, resolved: dipRatio <= criterion });

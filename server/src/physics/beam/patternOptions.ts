@@ -6,7 +6,7 @@ import { beamIssue, type BeamIssue } from './types';
 export interface PatternOptions {
   /** Number of bins of the detector-position grid (default 4096). */
   bins?: number;
-  /** Panels of the jet's cumulative speed table (default 256; the oven and single speed are exact). */
+  /** Panels of the jet's cumulative speed table (default 1024; the oven and single speed are exact). */
   speedPanels?: number;
   /** Flux fraction of the slow tail allowed beyond the grid, per sublevel (default 1e-3). */
   tailFraction?: number;

@@ -6,7 +6,7 @@ import type { SpeedLaw } from './speedLaw';
 import type { SpeedDistribution } from './types';
 
 /** Default panels of the jet's cumulative table ("speed grid"). */
-export const DEFAULT_SPEED_PANELS = 256;
+export const DEFAULT_SPEED_PANELS = 1024;
 
 export function speedLawFor(source: SpeedDistribution, massKg: number, speedPanels = DEFAULT_SPEED_PANELS): SpeedLaw {
   switch (source.kind) {

@@ -2,12 +2,13 @@
  * Crossings between sublevels of different blocks over a sweep. Inside a
  * block levels never cross, so only pairs from different blocks are scanned:
  * a sign change of E_a − E_b between neighbouring points brackets a crossing,
- * which is then refined by bisection on the exact engine (only the two blocks
- * are re-solved). Differences within 1e-10 of the sweep's energy scale count
+ * which is then refined on the exact engine (only the two blocks are
+ * re-solved; Illinois regula falsi, see bracketedRoot.ts). Differences within 1e-10 of the sweep's energy scale count
  * as zero, so round-off at exact degeneracies (B = 0) makes no false crossing.
  * A touching without a sign change is not reported.
  */
 import { makeWorkspace, solveBlockAt } from './blockSolver';
+import { bracketedRoot } from './bracketedRoot';
 import { issue } from './issues';
 import type { LevelModel } from './levelModel';
 import { MAX_CROSSINGS, MAX_CROSSING_SCAN } from './limits';
@@ -20,33 +21,18 @@ export interface StateSlot {
   energyHz: Float64Array;
 }
 
-function sideOf(d: number, tol: number): number {
-  return d > tol ? 1 : d < -tol ? -1 : 0;
-}
-
 /** Energy of rank `rank` of block `b` at `fieldT`; NaN if the solver fails. */
 function energyAt(model: LevelModel, b: number, rank: number, fieldT: number, ws: ReturnType<typeof makeWorkspace>): number {
   return solveBlockAt(model.blocks[b], fieldT, ws) ? ws.values[rank] : Number.NaN;
 }
 
-function bisect(model: LevelModel, a: StateSlot, b: StateSlot, lo: number, hi: number, sLo: number): LevelCrossing | null {
+/** Refine a bracketed crossing of a and b between fields lo and hi (differences dLo, dHi there). */
+function refine(model: LevelModel, a: StateSlot, b: StateSlot, lo: number, hi: number, dLo: number, dHi: number, tol: number): LevelCrossing | null {
   const ws = makeWorkspace(model.largestBlock);
-  let ea = 0;
-  for (let it = 0; it < 200; it++) {
-    const mid = 0.5 * (lo + hi);
-    if (mid === lo || mid === hi) break;
-    ea = energyAt(model, a.block, a.rank, mid, ws);
-    const d = ea - energyAt(model, b.block, b.rank, mid, ws);
-    if (!Number.isFinite(d)) return null;
-    if (d === 0) {
-      lo = mid;
-      hi = mid;
-      break;
-    }
-    if (Math.sign(d) === sLo) lo = mid;
-    else hi = mid;
-  }
-  const field = 0.5 * (lo + hi);
+  const diff = (f: number): number => energyAt(model, a.block, a.rank, f, ws) - energyAt(model, b.block, b.rank, f, ws);
+  // Stop once the difference is at the round-off level of the energies (1e-15 of the scale).
+  const field = bracketedRoot(diff, lo, hi, dLo, dHi, tol * 1e-5);
+  if (!Number.isFinite(field)) return null;
   return { stateA: -1, stateB: -1, fieldT: field, energyHz: energyAt(model, a.block, a.rank, field, ws) };
 }
 
@@ -70,23 +56,28 @@ export function findCrossings(
   let scale = 0;
   for (const s of slots) for (let p = 0; p < points; p++) scale = Math.max(scale, Math.abs(s.energyHz[p]));
   const tol = 1e-10 * scale + 1e-300;
+  // Energy range of each state: pairs whose ranges do not overlap cannot cross.
+  const lo = slots.map((s) => s.energyHz.reduce((m, x) => Math.min(m, x), Infinity) - tol);
+  const hi = slots.map((s) => s.energyHz.reduce((m, x) => Math.max(m, x), -Infinity) + tol);
   const out: LevelCrossing[] = [];
   for (let i = 0; i < slots.length; i++) {
     for (let j = i + 1; j < slots.length; j++) {
       const a = slots[i];
       const b = slots[j];
-      if (a.block === b.block) continue;
+      if (a.block === b.block || hi[i] < lo[j] || hi[j] < lo[i]) continue;
       let lastSide = 0;
       let lastIndex = -1;
       for (let p = 0; p < points; p++) {
-        const side = sideOf(a.energyHz[p] - b.energyHz[p], tol);
+        const d = a.energyHz[p] - b.energyHz[p];
+        const side = d > tol ? 1 : d < -tol ? -1 : 0;
         if (side === 0) continue;
         if (lastSide !== 0 && side !== lastSide) {
           if (out.length >= MAX_CROSSINGS) {
             issues.push(issue('warning', 'too-many-crossings', `Only the first ${MAX_CROSSINGS} level crossings are reported.`));
             return out.sort((x, y) => x.fieldT - y.fieldT);
           }
-          const c = bisect(model, a, b, fieldsT[lastIndex], fieldsT[p], lastSide);
+          const dLo = a.energyHz[lastIndex] - b.energyHz[lastIndex];
+          const c = refine(model, a, b, fieldsT[lastIndex], fieldsT[p], dLo, d, tol);
           if (c) out.push({ ...c, stateA: i, stateB: j });
         }
         lastSide = side;

@@ -116,6 +116,12 @@ export function householderQlInPlace(
   w1: Float64Array,
   w2: Float64Array,
 ): boolean {
+  // Work on A / max|a_ij| so sums of squares can neither overflow nor underflow.
+  let big = 0;
+  for (let i = 0; i < n * n; i++) big = Math.max(big, Math.abs(a[i]));
+  if (!(big < Number.POSITIVE_INFINITY)) return false;
+  const scale = big > 0 && 1 / big < Number.POSITIVE_INFINITY ? big : 1;
+  for (let i = 0; i < n * n; i++) a[i] /= scale;
   tridiagonalise(a, n, d, e, vectors, w1, w2);
   let norm = 0;
   for (let i = 0; i < n; i++) norm = Math.max(norm, Math.abs(d[i]) + (i > 0 ? Math.abs(e[i - 1]) : 0) + (i < n - 1 ? Math.abs(e[i]) : 0));
@@ -123,7 +129,10 @@ export function householderQlInPlace(
   const floor = 1e-300 + EPS * 1e-3 * norm;
   let m = n - 1;
   for (let iter = 0; m > 0; iter++) {
-    if (iter > 30 * n) return false;
+    if (iter > 30 * n) {
+      for (let i = 0; i < n; i++) d[i] *= scale;
+      return false;
+    }
     // Deflate converged eigenvalues at the bottom.
     while (m > 0 && Math.abs(e[m - 1]) <= EPS * (Math.abs(d[m - 1]) + Math.abs(d[m])) + floor) {
       e[m - 1] = 0;
@@ -135,5 +144,6 @@ export function householderQlInPlace(
     if (l > 0) e[l - 1] = 0;
     chaseBulge(d, e, vectors, n, l, m);
   }
+  for (let i = 0; i < n; i++) d[i] *= scale;
   return true;
 }

@@ -8,13 +8,18 @@
  *
  * Off-diagonal elements are only ever mixed with other off-diagonal elements,
  * so they fall to zero without a round-off floor; the loop stops when their
- * squared sum is below (1e-16 · ‖A‖_F)².
+ * squared sum is below (1e-16 · ‖A‖_F)² (norms of the scaled matrix A/max|a_ij|).
  */
 
-/** Squared sum of the strict upper triangle. */
-function offNorm2(a: Float64Array, n: number): number {
+/** Squared sum of the strict upper triangle, after scaling by `inv` (keeps squares in range). */
+function offNorm2(a: Float64Array, n: number, inv: number): number {
   let off = 0;
-  for (let p = 0; p < n - 1; p++) for (let q = p + 1; q < n; q++) off += a[p * n + q] * a[p * n + q];
+  for (let p = 0; p < n - 1; p++) {
+    for (let q = p + 1; q < n; q++) {
+      const x = a[p * n + q] * inv;
+      off += x * x;
+    }
+  }
   return off;
 }
 
@@ -29,27 +34,43 @@ export function jacobiInPlace(a: Float64Array, n: number, vectors: Float64Array,
   for (let i = 0; i < n * n; i++) vectors[i] = 0;
   for (let i = 0; i < n; i++) vectors[i * n + i] = 1;
   if (n === 1) return Number.isFinite(a[0]);
+  let big = 0;
+  for (let i = 0; i < n; i++) for (let j = i; j < n; j++) big = Math.max(big, Math.abs(a[i * n + j]));
+  if (!(big < Number.POSITIVE_INFINITY)) return false; // NaN or infinite entries
+  if (big === 0) return true;
+  // Norms are taken of A / max|a_ij| so that neither huge nor tiny entries overflow or underflow.
+  const inv = 1 / big < Number.POSITIVE_INFINITY ? 1 / big : 1;
   let frob = 0;
   for (let i = 0; i < n; i++) {
-    frob += a[i * n + i] * a[i * n + i];
-    for (let j = i + 1; j < n; j++) frob += 2 * a[i * n + j] * a[i * n + j];
+    const d = a[i * n + i] * inv;
+    frob += d * d;
+    for (let j = i + 1; j < n; j++) {
+      const x = a[i * n + j] * inv;
+      frob += 2 * x * x;
+    }
   }
-  if (!Number.isFinite(frob)) return false;
   const tol = 1e-32 * frob;
   for (let sweep = 0; sweep < maxSweeps; sweep++) {
-    if (offNorm2(a, n) <= tol) return true;
+    if (offNorm2(a, n, inv) <= tol) return true;
     for (let p = 0; p < n - 1; p++) {
       for (let q = p + 1; q < n; q++) {
         const apq = a[p * n + q];
         if (apq === 0) continue;
         const app = a[p * n + p];
         const aqq = a[q * n + q];
-        // Rotation angle that zeroes a_pq; t = tan φ is the smaller root of t² + 2θt − 1 = 0.
-        const theta = (aqq - app) / (2 * apq);
-        const t =
-          Math.abs(theta) > 1e150
-            ? 0.5 / theta
-            : (theta >= 0 ? 1 : -1) / (Math.abs(theta) + Math.sqrt(theta * theta + 1));
+        // Rotation that zeroes a_pq: t = tan φ is the smaller root of t² + 2θt − 1 = 0 with
+        // θ = (a_qq − a_pp)/(2 a_pq), written as t = 2a_pq / (d + sign(d) sqrt(d² + 4a_pq²)), d = a_qq − a_pp,
+        // which saves a division; overflow or underflow of d² + 4a_pq² falls back to the θ form.
+        const d = aqq - app;
+        const g = 2 * apq;
+        const r = Math.sqrt(d * d + g * g);
+        let t: number;
+        if (r > 0 && r < Number.POSITIVE_INFINITY) {
+          t = g / (d >= 0 ? d + r : d - r);
+        } else {
+          const theta = d / g;
+          t = Math.abs(theta) > 1e150 ? 0.5 / theta : (theta >= 0 ? 1 : -1) / (Math.abs(theta) + Math.sqrt(theta * theta + 1));
+        }
         const c = 1 / Math.sqrt(t * t + 1);
         const s = t * c;
         a[p * n + p] = app - t * apq;
@@ -83,5 +104,5 @@ export function jacobiInPlace(a: Float64Array, n: number, vectors: Float64Array,
       }
     }
   }
-  return offNorm2(a, n) <= tol;
+  return offNorm2(a, n, inv) <= tol;
 }

@@ -93,6 +93,11 @@ export function regime(spec: LevelSpec, fieldT: number, fraction = 0.01): Regime
   const spread = model.zeroFieldSpreadHz;
   const b = Math.abs(fieldT);
   const x = spread > 0 ? (gDiff * BOHR_MAGNETON_HZ_PER_T * b) / spread : b === 0 ? 0 : Number.POSITIVE_INFINITY;
+  if (spread === 0) {
+    issues.push(
+      issue('info', 'no-zero-field-structure', 'This level has no zero-field splitting, so x is not finite; the limits below say whether the simple formulas hold.'),
+    );
+  }
 
   let cubes = 0;
   for (const blk of model.blocks) cubes += blk.size ** 3;

@@ -55,18 +55,19 @@ function runSweep(model: LevelModel, fieldsT: Float64Array, curvature: boolean, 
   const curv = new Float64Array(model.largestBlock);
   const slots: SweepSlot[] = [];
   let skipped = 0;
+  // One allocation for every output array (views into it), so a sweep makes no garbage per state.
+  const perState = curvature ? 3 : 2;
+  const store = new Float64Array(model.dimension * points * perState);
+  let next = 0;
+  const take = (): Float64Array => store.subarray(points * next, points * ++next);
   for (let b = 0; b < model.blocks.length; b++) {
     const block = model.blocks[b];
     const n = block.size;
     const first = slots.length;
     for (let k = 0; k < n; k++) {
-      slots.push({
-        block: b,
-        rank: k,
-        energyHz: new Float64Array(points),
-        moment: new Float64Array(points),
-        ...(curvature ? { curvature: new Float64Array(points) } : {}),
-      });
+      const slot: SweepSlot = { block: b, rank: k, energyHz: take(), moment: take() };
+      if (curvature) slot.curvature = take();
+      slots.push(slot);
     }
     for (let p = 0; p < points; p++) {
       if (!solveBlockAt(block, fieldsT[p], ws)) {

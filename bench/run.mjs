@@ -1,0 +1,54 @@
+// Benchmark runner (`npm run bench`). Each benchmark is a TypeScript entry
+// bundled with esbuild into .bench-tmp/ and run in its own Node process, so
+// one benchmark's JIT state cannot colour another's timings.
+// Add a benchmark by appending to BENCHMARKS; `node bench/run.mjs eigen` runs
+// only the named ones. Benchmarks print their own figures; none is a pass/fail test.
+import { spawnSync } from 'node:child_process';
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+import * as esbuild from 'esbuild';
+
+const BENCHMARKS = [
+  { name: 'eigen', entry: 'bench/eigen.bench.ts', about: 'eigen-solver choice: Jacobi vs own Householder+QR vs ml-matrix' },
+  { name: 'engine', entry: 'bench/engine.bench.ts', about: 'Cs 6P3/2 2001-point sweep against NumPy (loop and blocked)' },
+];
+
+const TMP = '.bench-tmp';
+
+async function bundle(entry, name) {
+  const outfile = path.join(TMP, `${name}.cjs`);
+  await esbuild.build({
+    entryPoints: [entry],
+    outfile,
+    bundle: true,
+    platform: 'node',
+    target: 'node20',
+    format: 'cjs',
+    logLevel: 'warning',
+  });
+  return outfile;
+}
+
+async function main() {
+  const wanted = process.argv.slice(2);
+  const unknown = wanted.filter((w) => !BENCHMARKS.some((b) => b.name === w));
+  if (unknown.length > 0) {
+    console.error(`Unknown benchmark(s): ${unknown.join(', ')}. Known: ${BENCHMARKS.map((b) => b.name).join(', ')}`);
+    process.exit(2);
+  }
+  const chosen = wanted.length > 0 ? BENCHMARKS.filter((b) => wanted.includes(b.name)) : BENCHMARKS;
+  mkdirSync(TMP, { recursive: true });
+  let failed = 0;
+  for (const b of chosen) {
+    console.log(`\n=== ${b.name}: ${b.about}`);
+    const file = await bundle(b.entry, b.name);
+    const run = spawnSync(process.execPath, [file], { stdio: 'inherit' });
+    if (run.status !== 0) {
+      failed++;
+      console.error(`benchmark ${b.name} exited with status ${run.status}`);
+    }
+  }
+  process.exit(failed > 0 ? 1 : 0);
+}
+
+await main();

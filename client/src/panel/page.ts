@@ -1,0 +1,169 @@
+/// <reference lib="dom" />
+/**
+ * The diagram panel's page script (bundled for the browser). It shows the SVG the extension
+ * sends, switches views, exports through the extension, and shows hover read-outs built from
+ * the diagram's data-* attributes. Incoming messages are untrusted and validated; no string
+ * ever reaches innerHTML.
+ */
+import { isView, parseHostMessage, type PageMessage, type ShowMessage, type View } from './messages';
+import { pointerValue, readoutFor, type DataRecord } from './readout';
+import { importSvg } from './svgImport';
+
+interface VsCodeApi {
+  postMessage(message: PageMessage): void;
+  getState(): unknown;
+  setState(state: unknown): void;
+}
+declare function acquireVsCodeApi(): VsCodeApi;
+
+interface SavedState {
+  view: View;
+}
+
+const vscode = acquireVsCodeApi();
+const host = document.getElementById('sl-host') as HTMLElement;
+const readout = document.getElementById('sl-readout') as HTMLElement;
+const tabs = Array.from(document.querySelectorAll<HTMLButtonElement>('button[data-view]'));
+const exportButtons = Array.from(document.querySelectorAll<HTMLButtonElement>('button[data-export]'));
+const latest = new Map<View, ShowMessage>();
+
+const saved = vscode.getState() as Partial<SavedState> | undefined;
+let current: View = saved && isView(saved.view) ? saved.view : 'levels';
+
+function placeholder(textContent: string): HTMLElement {
+  const p = document.createElement('p');
+  p.className = 'sl-placeholder';
+  p.textContent = textContent;
+  return p;
+}
+
+function showCurrent(): void {
+  hideReadout();
+  const msg = latest.get(current);
+  const svg = msg ? importSvg(document, msg.svg) : undefined;
+  if (msg && svg) {
+    svg.classList.add('sl-svg');
+    host.replaceChildren(svg);
+    document.title = msg.title;
+  } else if (msg) {
+    host.replaceChildren(placeholder('This diagram could not be displayed (the drawing was not valid SVG).'));
+  } else {
+    host.replaceChildren(placeholder('Waiting for the diagram…'));
+  }
+  for (const b of exportButtons) {
+    b.disabled = !svg || (b.dataset.export === 'csv' && !msg?.csv);
+  }
+}
+
+function selectView(view: View, announce: boolean): void {
+  current = view;
+  for (const t of tabs) {
+    const on = t.dataset.view === view;
+    t.setAttribute('aria-selected', String(on));
+    t.tabIndex = on ? 0 : -1;
+    if (on) host.setAttribute('aria-labelledby', t.id);
+  }
+  vscode.setState({ view } satisfies SavedState);
+  showCurrent();
+  if (announce) vscode.postMessage({ type: 'view', view });
+}
+
+// --- hover and focus read-outs -------------------------------------------------------
+
+function hideReadout(): void {
+  readout.hidden = true;
+  readout.replaceChildren();
+}
+
+function fillReadout(target: Element | null, pointerText: string | undefined): boolean {
+  const data = target instanceof SVGElement || target instanceof HTMLElement ? (target.dataset as DataRecord) : undefined;
+  const r = data ? readoutFor(data) : undefined;
+  if (!r && !pointerText) return false;
+  const nodes: HTMLElement[] = [];
+  if (r && r.heading) {
+    const h = document.createElement('strong');
+    h.className = 'sl-readout-heading';
+    h.textContent = r.heading;
+    nodes.push(h);
+  }
+  for (const line of r?.lines ?? []) {
+    const d = document.createElement('div');
+    d.textContent = line;
+    nodes.push(d);
+  }
+  if (pointerText) {
+    const d = document.createElement('div');
+    d.className = 'sl-readout-pointer';
+    d.textContent = pointerText;
+    nodes.push(d);
+  }
+  readout.replaceChildren(...nodes);
+  readout.hidden = false;
+  return true;
+}
+
+function placeReadout(clientX: number, clientY: number): void {
+  const pad = 14;
+  const w = readout.offsetWidth;
+  const h = readout.offsetHeight;
+  const left = clientX + pad + w > window.innerWidth ? Math.max(0, clientX - pad - w) : clientX + pad;
+  const top = clientY + pad + h > window.innerHeight ? Math.max(0, clientY - pad - h) : clientY + pad;
+  // CSSOM property writes are not inline style markup, so the CSP allows them.
+  readout.style.left = `${left}px`;
+  readout.style.top = `${top}px`;
+}
+
+function userX(svg: SVGSVGElement, clientX: number, clientY: number): number {
+  const ctm = svg.getScreenCTM();
+  return ctm ? new DOMPoint(clientX, clientY).matrixTransform(ctm.inverse()).x : NaN;
+}
+
+host.addEventListener('pointermove', (e) => {
+  const svg = host.querySelector('svg');
+  const target = e.target instanceof Element ? e.target.closest('[data-kind]') : null;
+  const pointerText = svg ? pointerValue(svg.dataset as DataRecord, userX(svg, e.clientX, e.clientY)) : undefined;
+  if (!target && !pointerText) return hideReadout();
+  if (fillReadout(target, pointerText)) placeReadout(e.clientX, e.clientY);
+});
+host.addEventListener('pointerleave', hideReadout);
+host.addEventListener('focusin', (e) => {
+  const target = e.target instanceof Element ? e.target.closest('[data-kind]') : null;
+  if (!target) return;
+  const box = target.getBoundingClientRect();
+  if (fillReadout(target, undefined)) placeReadout(box.right, box.bottom);
+});
+host.addEventListener('focusout', hideReadout);
+
+// --- controls ---------------------------------------------------------------------------
+
+for (const t of tabs) {
+  t.addEventListener('click', () => {
+    const v = t.dataset.view;
+    if (isView(v) && v !== current) selectView(v, true);
+  });
+  t.addEventListener('keydown', (e) => {
+    const step = e.key === 'ArrowRight' ? 1 : e.key === 'ArrowLeft' ? -1 : 0;
+    if (step === 0) return;
+    const next = tabs[(tabs.indexOf(t) + step + tabs.length) % tabs.length];
+    next.focus();
+    const v = next.dataset.view;
+    if (isView(v)) selectView(v, true);
+  });
+}
+
+for (const b of exportButtons) {
+  b.addEventListener('click', () => {
+    const format = b.dataset.export;
+    if (format === 'svg' || format === 'csv') vscode.postMessage({ type: 'export', format, view: current });
+  });
+}
+
+window.addEventListener('message', (e: MessageEvent<unknown>) => {
+  const msg = parseHostMessage(e.data);
+  if (!msg) return;
+  latest.set(msg.view, msg);
+  if (msg.view === current) showCurrent();
+});
+
+selectView(current, false);
+vscode.postMessage({ type: 'ready', view: current });

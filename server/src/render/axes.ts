@@ -1,0 +1,72 @@
+/**
+ * Axes drawn from a linear scale whose domain is in SI units; ticks are chosen and labelled
+ * in the display unit so that tick values are round numbers in what the reader sees.
+ */
+import { scaleLinear, type ScaleLinear } from 'd3-scale';
+import type { Palette } from './palette';
+import { el, px, text } from './svgText';
+import type { DisplayUnit } from './units';
+
+export interface PlotBox {
+  left: number;
+  right: number;
+  top: number;
+  bottom: number;
+}
+
+export type Scale = ScaleLinear<number, number>;
+
+function displayScale(scale: Scale, unit: DisplayUnit): Scale {
+  return scaleLinear()
+    .domain(scale.domain().map((d) => d / unit.factor))
+    .range(scale.range());
+}
+
+/** Horizontal axis along the bottom of `box`, with vertical grid lines. */
+export function bottomAxis(scale: Scale, unit: DisplayUnit, name: string, box: PlotBox, pal: Palette): string {
+  const shown = displayScale(scale, unit);
+  const count = Math.max(2, Math.round((box.right - box.left) / 90));
+  const ticks = shown.ticks(count);
+  const fmt = shown.tickFormat(count);
+  const parts: string[] = [];
+  const grid = ticks.map((t) => `M${px(shown(t))},${px(box.top)}V${px(box.bottom)}`).join('');
+  if (grid) parts.push(el('path', { class: 'sl-grid', d: grid, stroke: pal.grid, 'stroke-width': 1, fill: 'none' }));
+  parts.push(el('path', { class: 'sl-axis-line', d: `M${px(box.left)},${px(box.bottom)}H${px(box.right)}`, stroke: pal.axis, fill: 'none' }));
+  const marks = ticks.map((t) => `M${px(shown(t))},${px(box.bottom)}v5`).join('');
+  if (marks) parts.push(el('path', { d: marks, stroke: pal.axis, fill: 'none' }));
+  for (const t of ticks) {
+    parts.push(el('text', { x: shown(t), y: box.bottom + 18, 'text-anchor': 'middle', fill: pal.muted, 'data-tick': fmt(t) }, text(fmt(t))));
+  }
+  parts.push(
+    el('text', { class: 'sl-axis-title', x: (box.left + box.right) / 2, y: box.bottom + 38, 'text-anchor': 'middle', fill: pal.text },
+      text(`${name} (${unit.symbol})`)),
+  );
+  return el('g', { class: 'sl-axis sl-axis-x', 'font-size': 11 }, parts);
+}
+
+/**
+ * Vertical axis at `axisX` (which may sit left of the plot when a label lane lies between),
+ * with horizontal grid lines from the axis across the plot.
+ */
+export function leftAxis(scale: Scale, unit: DisplayUnit | undefined, name: string, box: PlotBox, axisX: number, pal: Palette): string {
+  const shown = unit ? displayScale(scale, unit) : scale;
+  const count = Math.max(2, Math.round((box.bottom - box.top) / 55));
+  const ticks = shown.ticks(count);
+  const fmt = shown.tickFormat(count);
+  const parts: string[] = [];
+  const grid = ticks.map((t) => `M${px(axisX)},${px(shown(t))}H${px(box.right)}`).join('');
+  if (grid) parts.push(el('path', { class: 'sl-grid', d: grid, stroke: pal.grid, 'stroke-width': 1, fill: 'none' }));
+  parts.push(el('path', { class: 'sl-axis-line', d: `M${px(axisX)},${px(box.top)}V${px(box.bottom)}`, stroke: pal.axis, fill: 'none' }));
+  const marks = ticks.map((t) => `M${px(axisX)},${px(shown(t))}h-5`).join('');
+  if (marks) parts.push(el('path', { d: marks, stroke: pal.axis, fill: 'none' }));
+  for (const t of ticks) {
+    parts.push(el('text', { x: axisX - 8, y: shown(t) + 4, 'text-anchor': 'end', fill: pal.muted, 'data-tick': fmt(t) }, text(fmt(t))));
+  }
+  const title = unit ? `${name} (${unit.symbol})` : name;
+  const cy = (box.top + box.bottom) / 2;
+  parts.push(
+    el('text', { class: 'sl-axis-title', x: 16, y: cy, transform: `rotate(-90 16 ${px(cy)})`, 'text-anchor': 'middle', fill: pal.text },
+      text(title)),
+  );
+  return el('g', { class: 'sl-axis sl-axis-y', 'font-size': 11 }, parts);
+}

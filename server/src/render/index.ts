@@ -1,0 +1,19 @@
+/** Diagram rendering: plain view data in, SVG (or CSV) text out. No DOM, no I/O. */
+export type {
+  FieldUnit,
+  LevelCrossing,
+  LevelCurve,
+  LevelsViewData,
+  LineComponent,
+  LinesViewData,
+  PatternPart,
+  PatternPeak,
+  PatternViewData,
+  Polarization,
+  RenderTheme,
+} from './viewData';
+export { renderLevels } from './levels';
+export { renderPattern } from './pattern';
+export { renderLines } from './lines';
+export { levelsCsv, linesCsv, patternCsv } from './csv';
+export { escapeXml } from './svgText';

@@ -1,0 +1,65 @@
+/**
+ * Display units for axes and read-outs: SI values are divided by a power of 1000 so tick
+ * labels stay short ("6.8" on a GHz axis instead of "6 834 682 610").
+ */
+import { format } from 'd3-format';
+import type { FieldUnit } from './viewData';
+
+export interface DisplayUnit {
+  /** SI value ÷ factor = displayed number. */
+  factor: number;
+  symbol: string;
+}
+
+const PREFIXES: readonly [number, string][] = [
+  [1e12, 'T'], [1e9, 'G'], [1e6, 'M'], [1e3, 'k'], [1, ''], [1e-3, 'm'], [1e-6, 'µ'], [1e-9, 'n'],
+];
+
+/** The engineering unit (power of 1000) that puts `maxAbs` between 1 and 1000. */
+export function engineeringUnit(maxAbs: number, base: string): DisplayUnit {
+  if (!(maxAbs > 0) || !Number.isFinite(maxAbs)) return { factor: 1, symbol: base };
+  for (const [factor, prefix] of PREFIXES) {
+    if (maxAbs >= factor * 0.9995) return { factor, symbol: prefix + base };
+  }
+  const [factor, prefix] = PREFIXES[PREFIXES.length - 1];
+  return { factor, symbol: prefix + base };
+}
+
+/** A frequency unit: the caller's choice when given (named if it is a power of 1000), else from the data. */
+export function frequencyUnit(maxAbsHz: number, givenHz?: number): DisplayUnit {
+  if (givenHz !== undefined && Number.isFinite(givenHz) && givenHz > 0) {
+    const named = PREFIXES.find(([f]) => Math.abs(f / givenHz - 1) < 1e-9);
+    if (named) return { factor: named[0], symbol: named[1] + 'Hz' };
+    return { factor: givenHz, symbol: `${format('~g')(givenHz)} Hz` };
+  }
+  return engineeringUnit(maxAbsHz, 'Hz');
+}
+
+export function fieldDisplayUnit(unit: FieldUnit): DisplayUnit {
+  switch (unit) {
+    case 'G':
+      return { factor: 1e-4, symbol: 'G' };
+    case 'mT':
+      return { factor: 1e-3, symbol: 'mT' };
+    default:
+      return { factor: 1, symbol: 'T' };
+  }
+}
+
+const fourFigures = format('.4~s');
+
+/** A value with an SI prefix and unit for titles and read-outs: 6.835e9, 'Hz' → "6.835 GHz". */
+export function formatSI(value: number, unit: string): string {
+  if (!Number.isFinite(value)) return `— ${unit}`;
+  if (value === 0) return `0 ${unit}`;
+  const s = fourFigures(value);
+  // d3 appends the prefix letter directly; split it off so a space separates number and unit.
+  const m = /^(.*?)([yzafpnµmkMGTPEZY]?)$/.exec(s);
+  return m ? `${m[1]} ${m[2]}${unit}` : `${s} ${unit}`;
+}
+
+/** A value in a fixed display unit with 4 significant figures: 0.45 T, 4500 G. */
+export function formatIn(value: number, unit: DisplayUnit): string {
+  if (!Number.isFinite(value)) return `— ${unit.symbol}`;
+  return `${format('.4~g')(value / unit.factor)} ${unit.symbol}`;
+}

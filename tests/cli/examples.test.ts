@@ -1,0 +1,64 @@
+import { describe, expect, it } from 'vitest';
+import { cli } from './runCli';
+
+describe('sublevel check on the bundled examples', () => {
+  it('reports exactly the planted mistakes in examples/mistakes.sublevel', () => {
+    const r = cli('check', 'examples/mistakes.sublevel');
+    expect(r.code).toBe(1);
+    const found = r.out.split('\n').map((l) => l.replace(/^examples\/mistakes\.sublevel:/, '').split(' ').slice(0, 3).join(' '));
+    expect(found).toEqual([
+      '5:31 warning quadrupole-cannot-act',
+      '6:23 error term-j-out-of-range',
+      '7:19 error term-j-parity-of-spin',
+      '11:17 error unit-wrong-dimension',
+      '14:1 error syntax-unknown-statement',
+      '16:20 error name-unknown',
+    ]);
+    expect(r.out).toContain("did you mean 'magnet'");
+    expect(r.out).toContain("did you mean 'upper'");
+    expect(r.out).toContain('gradient needs T/m or G/cm, got T');
+  });
+
+  it('finds the demo setups clean (no errors, no warnings)', () => {
+    for (const f of ['lithium-beam', 'rubidium-bias', 'handmade-species']) {
+      const r = cli('check', `examples/${f}.sublevel`);
+      expect(r.out, f).toBe('');
+      expect(r.code, f).toBe(0);
+    }
+  });
+
+  it('searches folders recursively and exits 1 because of the mistakes file', () => {
+    const r = cli('check', 'examples');
+    expect(r.code).toBe(1);
+    expect(r.err).toMatch(/^4 files checked: 5 errors, 1 other finding/);
+  });
+
+  it('writes check results as JSON', () => {
+    const r = cli('check', 'examples/mistakes.sublevel', '--format', 'json');
+    const doc = JSON.parse(r.out);
+    expect(doc.format).toBe('sublevel-check');
+    expect(doc.files[0].diagnostics).toHaveLength(6);
+    expect(doc.files[0].diagnostics[0]).toMatchObject({ code: 'quadrupole-cannot-act', line: 5, column: 31 });
+  });
+});
+
+describe('CLI usage errors exit with 2', () => {
+  it.each([
+    [['frobnicate'], /unknown command 'frobnicate'/],
+    [['check'], /at least one file/],
+    [['check', 'no/such/file.sublevel'], /no such file or folder/],
+    [['eval', 'examples/rubidium-bias.sublevel', '--format', 'xml'], /--format must be text or json/],
+    [['eval', 'examples/rubidium-bias.sublevel', '--bogus'], /unknown option --bogus/],
+    [['eval'], /exactly one setup file/],
+  ])('%j', (argv, message) => {
+    const r = cli(...argv);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(message);
+  });
+
+  it('prints help with exit 0', () => {
+    const r = cli('help');
+    expect(r.code).toBe(0);
+    expect(r.out).toContain('usage: sublevel');
+  });
+});

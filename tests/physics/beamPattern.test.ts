@@ -1,0 +1,196 @@
+import { describe, expect, it } from 'vitest';
+import { detectorPattern, kernelDensity, type BeamGeometry, type DetectorPattern } from '../../server/src/physics/beam';
+import { sampleAt } from '../../server/src/physics/beam/peakShape';
+import { ATOMIC_MASS_UNIT, BOHR_MAGNETON, ELECTRON_GS } from '../../server/src/physics/constants';
+import { beamRef, type PatternRef } from './beamReference';
+
+const at = (p: DetectorPattern, x: number): number => sampleAt(p.total, p.positionsM, p.edgesM, x);
+const width = (p: DetectorPattern, j: number): number => p.edgesM[j + 1] - p.edgesM[j];
+
+function refPattern(c: PatternRef, extra: { spanM?: { startM: number; endM: number } } = {}): DetectorPattern {
+  return detectorPattern({
+    massKg: c.mass_u * ATOMIC_MASS_UNIT,
+    geometry: c.geometry,
+    source: c.source,
+    sublevels: [{ label: 'only', momentJT: c.moment_JT, population: 1 }],
+    ...extra,
+  });
+}
+
+describe('detector pattern vs SciPy nested quad of ∫ p(z) K(x − z) dz', () => {
+  for (const c of beamRef.patterns) {
+    it(`${c.name}: profile samples within 1e-3 of the peak height (4096 bins)`, () => {
+      const p = refPattern(c);
+      expect(p.issues).toEqual([]);
+      for (const [x, y] of c.samples) {
+        expect(Math.abs(at(p, x) - y)).toBeLessThan(1e-3 * c.peak_height_per_m);
+      }
+    });
+    it(`${c.name}: peak position within 1e-3 FWHM, FWHM and height within 1e-3`, () => {
+      const p = refPattern(c);
+      expect(p.peaks).toHaveLength(1);
+      const pk = p.peaks[0];
+      expect(Math.abs(pk.positionM - c.peak_position_m)).toBeLessThan(1e-3 * c.fwhm_m);
+      expect(Math.abs((pk.fwhmM ?? NaN) / c.fwhm_m - 1)).toBeLessThan(1e-3);
+      expect(Math.abs(pk.height / c.peak_height_per_m - 1)).toBeLessThan(1e-3);
+    });
+  }
+});
+
+describe('detector pattern vs a seeded NumPy Monte-Carlo of the same beam (4·10⁶ atoms)', () => {
+  for (const c of beamRef.patterns) {
+    const mc = c.monte_carlo;
+    const p = refPattern(c, { spanM: { startM: mc.span_m[0], endM: mc.span_m[1] } });
+    let mass = 0;
+    let first = 0;
+    const cum: number[] = [];
+    for (let j = 0; j < p.total.length; j++) {
+      mass += p.total[j] * width(p, j);
+      first += p.total[j] * width(p, j) * p.positionsM[j];
+      cum.push(mass);
+    }
+    const quantile = (q: number): number => {
+      const t = q * mass;
+      const j = cum.findIndex((v) => v >= t);
+      const before = j > 0 ? cum[j - 1] : 0;
+      return p.edgesM[j] + ((t - before) / (cum[j] - before)) * width(p, j);
+    };
+    // Tolerance: 4 Monte-Carlo standard errors (from 16 batches) plus a floor for the grid.
+    it(`${c.name}: fraction in range, mean and quantiles`, () => {
+      expect(Math.abs(mass - mc.fraction_inside)).toBeLessThan(4 * mc.fraction_inside_se + 1e-6);
+      expect(Math.abs(first / mass - mc.mean_inside_m)).toBeLessThan(4 * mc.mean_inside_se_m);
+      mc.quantile_levels.forEach((q, i) => {
+        expect(Math.abs(quantile(q) - mc.quantiles_m[i])).toBeLessThan(4 * mc.quantiles_se_m[i]);
+      });
+    });
+  }
+});
+
+// Facts of the trade: a uniform gradient pushes each sublevel by a force proportional to its moment.
+const geometry: BeamGeometry = {
+  slit1M: 50e-6,
+  slit2M: 50e-6,
+  slitSeparationM: 0.6,
+  magnetLengthM: 0.12,
+  driftM: 0.5,
+  detectorWidthM: 15e-6,
+  gradientTPerM: 150,
+};
+const mass = 39 * ATOMIC_MASS_UNIT; // invented scenario
+const oven = { kind: 'effusive' as const, temperatureK: 550 };
+const single = { kind: 'single' as const, speed: 700 };
+
+describe('facts of the trade', () => {
+  it('a sublevel with zero moment is not deflected: its pattern is the undeflected instrument kernel', () => {
+    const p = detectorPattern({ massKg: mass, geometry, source: oven, sublevels: [{ label: '0', momentJT: 0, population: 1 }] });
+    expect(p.peaks).toHaveLength(1);
+    expect(Math.abs(p.peaks[0].positionM)).toBeLessThan(1e-3 * p.image!.kernelFwhmM);
+    expect(p.sublevels[0].meanDeflectionM).toBe(0);
+    // Shape equals the analytic kernel (trapezoid ⊗ aperture), to the grid's resolution.
+    const img = p.image!;
+    const peak = kernelDensity(0, img.boxAM, img.boxBM, img.detectorM);
+    for (const x of [-80e-6, -40e-6, 0, 25e-6, 60e-6]) {
+      const want = kernelDensity(x, img.boxAM, img.boxBM, img.detectorM);
+      expect(Math.abs(at(p, x) - want)).toBeLessThan(2e-3 * peak);
+    }
+  });
+
+  it('L = 0, S = 1/2, no nuclear spin (μ = ∓ g_s μ_B/2) gives two symmetric peaks', () => {
+    const mu = (ELECTRON_GS * BOHR_MAGNETON) / 2;
+    const p = detectorPattern({
+      massKg: mass,
+      geometry,
+      source: oven,
+      sublevels: [
+        { label: 'm_s=+1/2', momentJT: -mu, population: 1 },
+        { label: 'm_s=-1/2', momentJT: mu, population: 1 },
+      ],
+    });
+    expect(p.peaks.map((k) => k.members)).toEqual([['m_s=+1/2'], ['m_s=-1/2']]);
+    expect(p.peaks[0].positionM).toBeLessThan(0);
+    expect(Math.abs(p.peaks[0].positionM + p.peaks[1].positionM)).toBeLessThan(1e-9 * p.peaks[1].positionM);
+    expect(Math.abs(p.peaks[0].height / p.peaks[1].height - 1)).toBeLessThan(1e-9);
+    expect(p.maxima).toHaveLength(2);
+    expect(p.allResolved).toBe(true);
+  });
+
+  it('moments −μ, 0, +μ give three equally spaced peaks with the middle one undeflected (single speed)', () => {
+    const mu = BOHR_MAGNETON;
+    const p = detectorPattern({
+      massKg: mass,
+      geometry,
+      source: single,
+      sublevels: [
+        { label: 'm=-1', momentJT: -mu, population: 1 },
+        { label: 'm=0', momentJT: 0, population: 1 },
+        { label: 'm=+1', momentJT: mu, population: 1 },
+      ],
+    });
+    const [a, b, c] = p.peaks.map((k) => k.positionM);
+    const z = (mu * geometry.gradientTPerM * (0.5 * 0.12 ** 2 + 0.12 * 0.5)) / mass / 700 ** 2; // z = a(L1²/2 + L1 L2)/v²
+    expect(p.peaks.map((k) => k.members)).toEqual([['m=-1'], ['m=0'], ['m=+1']]);
+    const tol = 1e-3 * p.image!.kernelFwhmM;
+    expect(Math.abs(b)).toBeLessThan(tol);
+    expect(Math.abs(c - z)).toBeLessThan(tol);
+    expect(Math.abs(a + z)).toBeLessThan(tol);
+    expect(Math.abs(c - b - (b - a))).toBeLessThan(tol);
+  });
+
+  it('deflections scale linearly with the moment (mean deflections exactly; single-speed peaks to the grid)', () => {
+    const mu = 0.7 * BOHR_MAGNETON;
+    const p = detectorPattern({
+      massKg: mass,
+      geometry,
+      source: oven,
+      sublevels: [1, 2, 3].map((f) => ({ label: `${f}μ`, momentJT: f * mu, population: 1 })),
+    });
+    const means = p.sublevels.map((s) => s.meanDeflectionM);
+    expect(means[1] / means[0]).toBeCloseTo(2, 13);
+    expect(means[2] / means[0]).toBeCloseTo(3, 13);
+    // The oven's most probable deflection scales too: peak positions of well-separated sublevels.
+    const q = detectorPattern({
+      massKg: mass,
+      geometry: { ...geometry, gradientTPerM: 2000 },
+      source: single,
+      sublevels: [1, 2, 3].map((f) => ({ label: `${f}μ`, momentJT: f * mu, population: 1 })),
+    });
+    const pos = q.peaks.map((k) => k.positionM);
+    expect(Math.abs(pos[1] / pos[0] - 2)).toBeLessThan(1e-3);
+    expect(Math.abs(pos[2] / pos[0] - 3)).toBeLessThan(1e-3);
+  });
+
+  it('populations weight the peaks and the per-sublevel contributions add up to the total', () => {
+    const mu = BOHR_MAGNETON;
+    const p = detectorPattern({
+      massKg: mass,
+      geometry,
+      source: single,
+      sublevels: [
+        { label: 'a', momentJT: -mu, population: 3 },
+        { label: 'b', momentJT: mu, population: 1 },
+      ],
+    });
+    expect(p.peaks[0].height / p.peaks[1].height).toBeCloseTo(3, 9);
+    let worst = 0;
+    for (let j = 0; j < p.total.length; j++) worst = Math.max(worst, Math.abs(p.perSublevel[0][j] + p.perSublevel[1][j] - p.total[j]));
+    expect(worst).toBe(0);
+    // Unit total flux: Σ total·bin = 1 − off-grid fraction (single speed: nothing off grid).
+    const area = p.total.reduce((s, v, j) => s + v * width(p, j), 0);
+    expect(area).toBeCloseTo(1, 12);
+  });
+
+  it('sublevels with nearly equal moments merge into one peak that lists both', () => {
+    const mu = BOHR_MAGNETON;
+    const p = detectorPattern({
+      massKg: mass,
+      geometry,
+      source: single,
+      sublevels: [
+        { label: 'x', momentJT: mu, population: 1 },
+        { label: 'y', momentJT: mu * (1 + 1e-4), population: 1 },
+        { label: 'z', momentJT: -mu, population: 1 },
+      ],
+    });
+    expect(p.peaks.map((k) => k.members)).toEqual([['z'], ['x', 'y']]);
+  });
+});
