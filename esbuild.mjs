@@ -20,4 +20,16 @@ await Promise.all([
     outfile: 'dist/cli.js',
     banner: { js: '#!/usr/bin/env node' },
   }),
+  // The diagram panel's page script and stylesheet, loaded by the webview (no Node APIs there).
+  esbuild.build({
+    entryPoints: ['client/src/panel/page.ts'],
+    bundle: true,
+    platform: 'browser',
+    format: 'iife',
+    target: 'chrome114',
+    sourcemap: true,
+    outfile: 'dist/panel/page.js',
+    logLevel: 'warning',
+  }),
+  esbuild.build({ entryPoints: ['client/src/panel/panel.css'], bundle: true, outfile: 'dist/panel/panel.css', logLevel: 'warning' }),
 ]);

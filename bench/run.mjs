@@ -1,8 +1,11 @@
 // Benchmark runner (`npm run bench`). Each benchmark is a TypeScript entry
 // bundled with esbuild into .bench-tmp/ and run in its own Node process, so
 // one benchmark's JIT state cannot colour another's timings.
-// Add a benchmark by appending to BENCHMARKS; `node bench/run.mjs eigen` runs
-// only the named ones. Benchmarks print their own figures; none is a pass/fail test.
+// Add a benchmark by appending to BENCHMARKS. An entry either runs itself when
+// loaded (no `call`), or exports a function named by `call` that returns (or
+// resolves to) { name?, lines: string[] }, which the runner prints.
+// `node bench/run.mjs eigen` runs only the named ones. Benchmarks print their
+// own figures; none is a pass/fail test.
 import { spawnSync } from 'node:child_process';
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
@@ -11,6 +14,7 @@ import * as esbuild from 'esbuild';
 const BENCHMARKS = [
   { name: 'eigen', entry: 'bench/eigen.bench.ts', about: 'eigen-solver choice: Jacobi vs own Householder+QR vs ml-matrix' },
   { name: 'engine', entry: 'bench/engine.bench.ts', about: 'Cs 6P3/2 2001-point sweep against NumPy (loop and blocked)' },
+  { name: 'beam', entry: 'bench/beam.bench.ts', call: 'runBeamBench', about: 'detector pattern of 16 sublevels' },
 ];
 
 const TMP = '.bench-tmp';
@@ -29,6 +33,14 @@ async function bundle(entry, name) {
   return outfile;
 }
 
+/** A one-line Node script that calls an exported benchmark function and prints its lines. */
+function callerScript(file, fn) {
+  return `Promise.resolve(require(${JSON.stringify(file)})[${JSON.stringify(fn)}]()).then((r) => {
+    if (r && r.name) console.log(r.name);
+    for (const line of (r && r.lines) || []) console.log(line);
+  }).catch((e) => { console.error(e); process.exit(1); });`;
+}
+
 async function main() {
   const wanted = process.argv.slice(2);
   const unknown = wanted.filter((w) => !BENCHMARKS.some((b) => b.name === w));
@@ -42,7 +54,8 @@ async function main() {
   for (const b of chosen) {
     console.log(`\n=== ${b.name}: ${b.about}`);
     const file = await bundle(b.entry, b.name);
-    const run = spawnSync(process.execPath, [file], { stdio: 'inherit' });
+    const args = b.call ? ['-e', callerScript(path.resolve(file), b.call)] : [file];
+    const run = spawnSync(process.execPath, args, { stdio: 'inherit' });
     if (run.status !== 0) {
       failed++;
       console.error(`benchmark ${b.name} exited with status ${run.status}`);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { detectorPattern, kernelDensity, type BeamGeometry, type DetectorPattern } from '../../server/src/physics/beam';
 import { sampleAt } from '../../server/src/physics/beam/peakShape';
-import { ATOMIC_MASS_UNIT, BOHR_MAGNETON, ELECTRON_GS } from '../../server/src/physics/constants';
+import { ATOMIC_MASS_UNIT, BOHR_MAGNETON, BOLTZMANN_K, ELECTRON_GS } from '../../server/src/physics/constants';
 import { beamRef, type PatternRef } from './beamReference';
 
 const at = (p: DetectorPattern, x: number): number => sampleAt(p.total, p.positionsM, p.edgesM, x);
@@ -19,20 +19,21 @@ function refPattern(c: PatternRef, extra: { spanM?: { startM: number; endM: numb
 
 describe('detector pattern vs SciPy nested quad of ∫ p(z) K(x − z) dz', () => {
   for (const c of beamRef.patterns) {
-    it(`${c.name}: profile samples within 1e-3 of the peak height (4096 bins)`, () => {
+    // Grid error at 4096 bins is ~1e-5 (docs/beam.md); 1e-4 leaves room for the quadrature's own error.
+    it(`${c.name}: profile samples within 1e-4 of the peak height (4096 bins)`, () => {
       const p = refPattern(c);
       expect(p.issues).toEqual([]);
       for (const [x, y] of c.samples) {
-        expect(Math.abs(at(p, x) - y)).toBeLessThan(1e-3 * c.peak_height_per_m);
+        expect(Math.abs(at(p, x) - y)).toBeLessThan(1e-4 * c.peak_height_per_m);
       }
     });
-    it(`${c.name}: peak position within 1e-3 FWHM, FWHM and height within 1e-3`, () => {
+    it(`${c.name}: peak position within 2e-4 FWHM, FWHM and height within 1e-4`, () => {
       const p = refPattern(c);
       expect(p.peaks).toHaveLength(1);
       const pk = p.peaks[0];
-      expect(Math.abs(pk.positionM - c.peak_position_m)).toBeLessThan(1e-3 * c.fwhm_m);
-      expect(Math.abs((pk.fwhmM ?? NaN) / c.fwhm_m - 1)).toBeLessThan(1e-3);
-      expect(Math.abs(pk.height / c.peak_height_per_m - 1)).toBeLessThan(1e-3);
+      expect(Math.abs(pk.positionM - c.peak_position_m)).toBeLessThan(2e-4 * c.fwhm_m);
+      expect(Math.abs((pk.fwhmM ?? NaN) / c.fwhm_m - 1)).toBeLessThan(1e-4);
+      expect(Math.abs(pk.height / c.peak_height_per_m - 1)).toBeLessThan(1e-4);
     });
   }
 });
@@ -66,6 +67,34 @@ describe('detector pattern vs a seeded NumPy Monte-Carlo of the same beam (4·10
   }
 });
 
+describe('pattern first moment vs the closed form ⟨z⟩ = μ (∂B/∂z)(L1²/2 + L1 L2)/(2kT)', () => {
+  it('oven beam with a 1e-9 slow-tail cut: mean of the binned pattern within 1e-4', () => {
+    // The cut removes atoms slower than x_c·α with x_c⁴/2 ≈ 1e-9; they carry 1 − e^{−x_c²} ≈ 4.5e-5 of ⟨1/v²⟩
+    // (closed form of the truncated oven integral), so 1e-4 is the honest tolerance.
+    const c = beamRef.patterns[0];
+    const p = detectorPattern({
+      massKg: c.mass_u * ATOMIC_MASS_UNIT,
+      geometry: c.geometry,
+      source: c.source,
+      sublevels: [{ label: 'only', momentJT: c.moment_JT, population: 1 }],
+      tailFraction: 1e-9,
+    });
+    let m0 = 0;
+    let m1 = 0;
+    for (let j = 0; j < p.total.length; j++) {
+      m0 += p.total[j] * width(p, j);
+      m1 += p.total[j] * width(p, j) * p.positionsM[j];
+    }
+    const g = c.geometry;
+    const lever = 0.5 * g.magnetLengthM ** 2 + g.magnetLengthM * g.driftM;
+    const T = (c.source as { temperatureK: number }).temperatureK;
+    const expected = (c.moment_JT * g.gradientTPerM * lever) / (2 * BOLTZMANN_K * T);
+    expect(Math.abs(m1 / expected - 1)).toBeLessThan(1e-4);
+    expect(Math.abs(p.sublevels[0].meanDeflectionM / expected - 1)).toBeLessThan(1e-14);
+    expect(m0).toBeGreaterThan(1 - 2e-9);
+  });
+});
+
 // Facts of the trade: a uniform gradient pushes each sublevel by a force proportional to its moment.
 const geometry: BeamGeometry = {
   slit1M: 50e-6,
@@ -91,7 +120,7 @@ describe('facts of the trade', () => {
     const peak = kernelDensity(0, img.boxAM, img.boxBM, img.detectorM);
     for (const x of [-80e-6, -40e-6, 0, 25e-6, 60e-6]) {
       const want = kernelDensity(x, img.boxAM, img.boxBM, img.detectorM);
-      expect(Math.abs(at(p, x) - want)).toBeLessThan(2e-3 * peak);
+      expect(Math.abs(at(p, x) - want)).toBeLessThan(1e-5 * peak);
     }
   });
 

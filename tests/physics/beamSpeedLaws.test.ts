@@ -31,7 +31,7 @@ describe('oven (flux-weighted effusive) speed law', () => {
     const m = ref.mass_u * ATOMIC_MASS_UNIT;
     const T = ref.temperature_K;
     const law = effusiveLaw(T, m);
-    it(`${ref.mass_u} u at ${T} K: closed forms (molecular-beam texts, e.g. Ramsey, Molecular Beams)`, () => {
+    it(`${ref.mass_u} u at ${T} K: closed forms (standard molecular-beam textbook results, from memory; re-derived in docs/beam.md)`, () => {
       // ⟨1/v²⟩ = M/(2kT) and most probable flux speed √(3kT/M): closed forms of the v³ e^{−Mv²/2kT} law.
       expect(rel(law.meanInverseSquare, m / (2 * BOLTZMANN_K * T))).toBeLessThan(1e-15);
       expect(rel(law.mostProbableSpeed, Math.sqrt((3 * BOLTZMANN_K * T) / m))).toBeLessThan(1e-15);

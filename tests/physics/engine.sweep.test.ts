@@ -148,7 +148,7 @@ describe('invalid input and caps come back as issues, never as exceptions', () =
           const failed = r.issues.some((i) => i.severity === 'error');
           if (!failed) {
             const s0 = spec as unknown as Record<string, number>;
-            const dim = s0.kind === 'hyperfine' ? (s0.twoJ + 1) * (s0.twoI + 1) : (2 * s0.L + 1) * (s0.twoS + 1) * ((s0.twoI ?? 0) + 1);
+            const dim = q.kind === 'hyperfine' ? (s0.twoJ + 1) * (s0.twoI + 1) : (2 * s0.L + 1) * (s0.twoS + 1) * ((s0.twoI ?? 0) + 1);
             expect(r.states.length).toBe(dim);
             for (const s of r.states) expect(Number.isFinite(s.energyHz) && Number.isFinite(s.momentJT)).toBe(true);
           } else {

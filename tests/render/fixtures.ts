@@ -47,7 +47,6 @@ export function levelsFixture(): LevelsViewData {
     curves,
     markerT: 0.12,
     markerLabel: 'bias coil',
-    crossings: [{ fieldT: 0.2142, energyHz: 1.2e9, a: 'F=2, m_F=-2', b: 'F=2, m_F=-1' }],
   };
 }
 

@@ -85,7 +85,7 @@ describe('renderLevels geometry', () => {
   it('puts a dot on every curve at the working field, at the interpolated energy', () => {
     const states = all(svg, (n) => n.attrs['data-kind'] === 'state');
     expect(states).toHaveLength(data.curves.length);
-    const k = data.fieldsT.findIndex((b) => Math.abs(b - 0.12) < 1e-12); // 0.12 T is a sample (k = 48)
+    const k = Array.from(data.fieldsT).findIndex((b) => Math.abs(b - 0.12) < 1e-12); // 0.12 T is a sample (k = 48)
     expect(k).toBe(48);
     states.forEach((s, i) => {
       const e = data.curves[i].energyHz[k];

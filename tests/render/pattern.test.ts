@@ -56,7 +56,7 @@ describe('renderPattern', () => {
     expect(svg.attrs['data-x-unit']).toBe('mm');
     const [y0, y1] = svg.attrs['data-y-domain'].split(',').map(Number);
     expect(y0).toBeLessThanOrEqual(0);
-    expect(y1).toBeGreaterThanOrEqual(Math.max(...data.total));
+    expect(y1).toBeGreaterThanOrEqual(Math.max(...Array.from(data.total)));
   });
 
   it('titles every data element, escapes labels, is deterministic', () => {

@@ -24,13 +24,17 @@ function escapeHtml(s: string): string {
   return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
 }
 
-/** A CSP source list must not be able to open a new directive or close the attribute. */
-function cspToken(s: string): string {
-  return s.replace(/[;,"'\s<>]+/g, ' ').trim();
+/**
+ * Keeps only origin-like source expressions (scheme://host…) from the webview's cspSource, so
+ * it can neither open a new directive nor widen the policy with `*` or keywords.
+ */
+function cspSources(s: string): string {
+  const kept = s.split(/\s+/).filter((t) => /^[a-z][a-z0-9+.-]*:\/\/[^\s;,'"<>]+$/i.test(t));
+  return kept.length > 0 ? kept.join(' ') : "'none'";
 }
 
 export function contentSecurityPolicy(cspSource: string, nonce: string): string {
-  const src = cspToken(cspSource);
+  const src = cspSources(cspSource);
   const n = nonce.replace(/[^A-Za-z0-9+/=_-]/g, '');
   return `default-src 'none'; img-src ${src} data:; style-src ${src}; script-src 'nonce-${n}';`;
 }

@@ -24,6 +24,17 @@ export function formatEngineering(v: number, unit: string, digits = 6): string {
   return `${shown} ${prefix}${unit}`;
 }
 
+const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '+': '', 0: '⁰', 1: '¹', 2: '²', 3: '³', 4: '⁴', 5: '⁵', 6: '⁶', 7: '⁷', 8: '⁸', 9: '⁹' };
+
+/** 9.2740e-24, 'J/T' → "9.274×10⁻²⁴ J/T": for quantities with no customary SI prefix. */
+export function formatScientific(v: number, unit: string, digits = 4): string {
+  if (!Number.isFinite(v)) return `— ${unit}`;
+  const [mantissa, exponent] = v.toExponential(digits - 1).split('e');
+  const m = Number(mantissa).toString().replace('-', '−');
+  if (Number(exponent) === 0) return `${m} ${unit}`;
+  return `${m}×10${Array.from(exponent).map((c) => SUPERSCRIPT[c] ?? c).join('')} ${unit}`;
+}
+
 function num(s: string | undefined): number {
   return s === undefined || s === '' ? NaN : Number(s);
 }
@@ -53,9 +64,9 @@ export function readoutFor(data: DataRecord): Readout {
   const mub = num(data.momentMub);
   const mjt = num(data.momentJt);
   if (Number.isFinite(mub)) {
-    lines.push(`μ = ${mub.toFixed(4).replace('-', '−')} μB (${formatEngineering(mjt, 'J/T', 4)})`);
+    lines.push(`μ = ${mub.toFixed(4).replace('-', '−')} μB (${formatScientific(mjt, 'J/T')})`);
   } else if (Number.isFinite(mjt)) {
-    lines.push(`μ = ${formatEngineering(mjt, 'J/T', 4)}`);
+    lines.push(`μ = ${formatScientific(mjt, 'J/T')}`);
   }
   if (data.trend && TREND[data.trend]) lines.push(TREND[data.trend]);
   const offset = num(data.offsetHz);

@@ -36,6 +36,8 @@ function sanitize(root: Element): void {
 
 /** The diagram as a node of `target`, or undefined when the text is not a well-formed SVG document. */
 export function importSvg(target: Document, svgText: string): SVGSVGElement | undefined {
+  // Cheap shape check first: text that is plainly not an SVG document never reaches the parser.
+  if (!/^\s*(<\?xml[^>]*\?>\s*)?<svg[\s>]/.test(svgText) || !/<\/svg>\s*$/.test(svgText)) return undefined;
   const parsed = new DOMParser().parseFromString(svgText, 'image/svg+xml');
   const root = parsed.documentElement;
   if (!root || root.namespaceURI !== SVG_NS || root.localName !== 'svg') return undefined;

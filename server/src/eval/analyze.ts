@@ -6,7 +6,9 @@ import type { Problem, SetupDocument } from '../format/ast';
 import { parseSetup } from '../format/parser';
 import { buildModel } from '../model/buildModel';
 import type { SetupModel } from '../model/types';
-import { evaluate } from './evaluate';
+import { evaluate, sortProblems } from './evaluate';
+
+export { sortProblems };
 import type { EvaluationResult } from './resultTypes';
 
 export interface Analysis {
@@ -27,8 +29,7 @@ export function analyze(text: string): Analysis {
   }
   try {
     const model = buildModel(doc);
-    const problems = sortProblems([...doc.problems, ...model.problems]);
-    const result = evaluate(model, problems);
+    const { result, problems } = evaluate(model, [...doc.problems, ...model.problems]);
     return { doc, model, result, problems };
   } catch (e) {
     return { doc, problems: sortProblems([...doc.problems, internalError(e)]) };
@@ -43,10 +44,4 @@ function internalError(e: unknown): Problem {
     message: `Sublevel failed on this file (${detail}); please report it with the file attached`,
     range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } },
   };
-}
-
-export function sortProblems(problems: Problem[]): Problem[] {
-  return [...problems].sort(
-    (a, b) => a.range.start.line - b.range.start.line || a.range.start.character - b.range.start.character,
-  );
 }

@@ -5,7 +5,8 @@
 import type { Problem } from '../format/ast';
 import { CONSTANTS_SOURCE } from '../physics/constants';
 import type { SetupModel } from '../model/types';
-import { evaluateLevel, type WorkingField } from './levelEvaluation';
+import { EVAL_RULES } from './evalCodes';
+import { evaluateLevel, type EvaluationNote, type WorkingField } from './levelEvaluation';
 import {
   EVALUATION_FORMAT,
   EVALUATION_VERSION,
@@ -16,21 +17,31 @@ import {
 
 export function workingFields(model: SetupModel): WorkingField[] {
   const out: WorkingField[] = [];
-  for (const f of model.fields) if (f.tesla) out.push({ source: { kind: 'field', name: f.name }, tesla: f.tesla.value });
-  for (const m of model.magnets) if (m.fieldT) out.push({ source: { kind: 'magnet', name: m.name }, tesla: m.fieldT.value });
+  for (const f of model.fields) {
+    if (f.tesla) out.push({ source: { kind: 'field', name: f.name }, tesla: f.tesla.value, range: f.tesla.range ?? f.nameRange });
+  }
+  for (const m of model.magnets) {
+    if (m.fieldT) out.push({ source: { kind: 'magnet', name: m.name }, tesla: m.fieldT.value, range: m.fieldT.range ?? m.nameRange });
+  }
   return out;
 }
 
-export function evaluate(model: SetupModel, problems: Problem[]): EvaluationResult {
+/**
+ * Evaluates the model. `earlier` are the problems of the parser and model; the returned
+ * `problems` add what the evaluation found, and `result.diagnostics` lists them all in order.
+ */
+export function evaluate(model: SetupModel, earlier: Problem[]): { result: EvaluationResult; problems: Problem[] } {
   const fields = workingFields(model);
   const levels: LevelResult[] = [];
+  const notes: EvaluationNote[] = [];
   for (const s of model.species) {
     for (const l of s.levels) {
-      const r = evaluateLevel(l, model.settings, fields);
+      const r = evaluateLevel(l, model.settings, fields, notes);
       if (r) levels.push(r);
     }
   }
-  return {
+  const problems = sortProblems([...earlier, ...notes.map(noteToProblem)]);
+  const result: EvaluationResult = {
     format: EVALUATION_FORMAT,
     version: EVALUATION_VERSION,
     constants: CONSTANTS_SOURCE,
@@ -63,6 +74,17 @@ export function evaluate(model: SetupModel, problems: Problem[]): EvaluationResu
     })),
     diagnostics: problems.map(toDiagnosticResult),
   };
+  return { result, problems };
+}
+
+function noteToProblem(n: EvaluationNote): Problem {
+  return { code: n.code, severity: EVAL_RULES[n.code].severity, message: n.message, range: n.range };
+}
+
+export function sortProblems(problems: Problem[]): Problem[] {
+  return [...problems].sort(
+    (a, b) => a.range.start.line - b.range.start.line || a.range.start.character - b.range.start.character,
+  );
 }
 
 export function toDiagnosticResult(p: Problem): DiagnosticResult {

@@ -4,16 +4,29 @@ import { hyperfineGF, landeGJ, landeGJFraction, orbitalGFactor } from '../physic
 import { hyperfineLevels } from '../physics/hyperfineZeroField';
 import { linearSublevels } from '../physics/linearZeeman';
 import { allowedJ, formatTermSymbol } from '../physics/termSymbol';
+import type { Range } from '../format/ast';
 import type { LevelModel, SettingsModel, Valued } from '../model/types';
+import { exactAtField } from './exactAtField';
 import { halfText, signedHalfText } from './halves';
+import { hyperfineSpec } from './levelSpec';
+import { fieldText } from './quantityText';
 import type { FieldPointResult, GFactorResult, HyperfineResult, LevelResult, SourcedNumber, SublevelResult } from './resultTypes';
 
 export interface WorkingField {
   source: { kind: 'field' | 'magnet'; name: string };
   tesla: number;
+  /** Where the file sets this field, for diagnostics about it. */
+  range: Range;
 }
 
-export function evaluateLevel(level: LevelModel, settings: SettingsModel, fields: WorkingField[]): LevelResult | undefined {
+/** Something the evaluation wants to tell the user about a level at a field. */
+export interface EvaluationNote {
+  code: 'zeeman-not-linear' | 'zeeman-strong-field' | 'level-too-large';
+  message: string;
+  range: Range;
+}
+
+export function evaluateLevel(level: LevelModel, settings: SettingsModel, fields: WorkingField[], notes: EvaluationNote[]): LevelResult | undefined {
   const term = level.term;
   if (!level.valid || !term || term.twoJ === null) return undefined;
   const twoJ = term.twoJ;
@@ -41,7 +54,7 @@ export function evaluateLevel(level: LevelModel, settings: SettingsModel, fields
     ...(hyperfine ? { hyperfine } : {}),
     sublevel_count: (twoJ + 1) * (twoI + 1),
     ...(level.energyHz ? { energy_Hz: sourced(level.energyHz) } : {}),
-    at_fields: fields.map((f) => linearAt(f, gJ.used, twoJ, twoI, hyperfine)),
+    at_fields: fields.map((f) => ({ ...linearAt(f, gJ.used, twoJ, twoI, hyperfine), ...exactAt(level, gJ.used, f, notes) })),
   };
 }
 
@@ -86,7 +99,27 @@ function hyperfineOf(level: LevelModel, gJ: number, twoJ: number, twoI: number):
   };
 }
 
-function linearAt(f: WorkingField, gJ: number, twoJ: number, twoI: number, hf: HyperfineResult | undefined): FieldPointResult {
+function exactAt(level: LevelModel, gJ: number, f: WorkingField, notes: EvaluationNote[]): Pick<FieldPointResult, 'exact' | 'regime'> {
+  const spec = hyperfineSpec(level, gJ);
+  if (!spec) return { exact: [] };
+  const r = exactAtField(spec, f.tesla);
+  for (const e of r.errors) notes.push({ code: 'level-too-large', message: `level '${level.name}': ${e}`, range: level.nameRange });
+  const where = `at ${f.source.kind} ${f.source.name} (${fieldText(f.tesla)})`;
+  const what = `level ${level.species.name}.${level.name}`;
+  if (r.regime?.verdict === 'intermediate') {
+    const limit = r.regime.linear_limit_T !== null ? `; the linear formula holds to 1 % only below ${fieldText(r.regime.linear_limit_T)}` : '';
+    notes.push({ code: 'zeeman-not-linear', message: `${what} is in the intermediate regime ${where}${limit}. Sublevel energies come from exact diagonalisation.`, range: f.range });
+  } else if (r.regime?.verdict.startsWith('strong')) {
+    notes.push({
+      code: 'zeeman-strong-field',
+      message: `${what} is in the strong-field (decoupled) regime ${where}: labels |F, m_F> or |J, m_J> no longer describe the states; read the |m_J, m_I> labels.`,
+      range: f.range,
+    });
+  }
+  return { exact: r.exact, ...(r.regime ? { regime: r.regime } : {}) };
+}
+
+function linearAt(f: WorkingField, gJ: number, twoJ: number, twoI: number, hf: HyperfineResult | undefined): Omit<FieldPointResult, 'exact' | 'regime'> {
   const linear: SublevelResult[] = [];
   if (twoI === 0 || !hf) {
     // No resolved hyperfine structure: J sublevels (with I > 0 and no A, the nucleus only adds degeneracy).

@@ -55,12 +55,43 @@ export interface SublevelResult {
   energy_Hz: number;
 }
 
+/** One eigenstate of the level at the field, from exact diagonalisation. */
+export interface ExactSublevelResult {
+  /** Adiabatic low-field label, e.g. "|F=2, m_F=+1>". */
+  low_label: string;
+  /** Adiabatic high-field label, e.g. "|m_J=+1/2, m_I=+1/2>". */
+  high_label: string;
+  /** Total magnetic quantum number (the only good one at every field). */
+  m: number;
+  m_text: string;
+  energy_Hz: number;
+  /** μ = −∂E/∂B (Hellmann–Feynman), J/T. */
+  moment_J_per_T: number;
+  moment_bohr: number;
+  /** ∂²(E/h)/∂B², Hz/T². */
+  d2E_dB2_Hz_per_T2: number;
+}
+
+export interface RegimeResultJson {
+  /** Zeeman energy over zero-field structure (see docs/engine.md); null when the level has no zero-field structure. */
+  x: number | null;
+  verdict: string;
+  /** Field above which the linear formula misses some sublevel by more than `fraction` of the Zeeman spread. */
+  linear_limit_T: number | null;
+  /** Field above which the strong-field formula is within `fraction` of the zero-field spread. */
+  strong_limit_T: number | null;
+  fraction: number;
+}
+
 export interface FieldPointResult {
   /** The field block or magnet this field comes from. */
   source: { kind: 'field' | 'magnet'; name: string };
   field_T: number;
   /** Weak-field (linear) energies: zero-field hyperfine shift + g m μ_B B. */
   linear: SublevelResult[];
+  /** Exact energies at this field, sorted by energy. */
+  exact: ExactSublevelResult[];
+  regime?: RegimeResultJson;
 }
 
 export interface LevelResult {

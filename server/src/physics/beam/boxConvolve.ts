@@ -2,52 +2,45 @@
  * Convolution of a binned distribution with a unit-area box of width w, on any
  * ascending bin edges, in O(n).
  *
- * Input: bin masses read as a density that is constant inside each bin (no jitter
- * when bins change width). Output: each bin's exact mass and exact centroid of the
- * convolved density. With S(t) the input mass left of t, bin j receives
+ * Bin masses are read as a density that is constant inside each bin (so no jitter
+ * appears where bins change width), and each output bin receives the exact mass of
+ * the convolved density. With S(t) the input mass left of t, bin j receives
  *   (1/w) [∫_{E_j+w/2}^{E_{j+1}+w/2} S − ∫_{E_j−w/2}^{E_{j+1}−w/2} S],
- * and its first moment about the bin centre follows from ∫ (t − mid) S(t) dt over the
- * same shifted ranges. Both are summed piece by piece over the input bins a range
- * covers, so no large numbers cancel.
+ * each integral summed piece by piece over the input bins the shifted range covers,
+ * so no large numbers cancel. Placing the output mass at the bin centre shifts the
+ * mean by about (Δu)²/6 of itself on the sinh grid (detectorGrid.ts), below 1e-5.
  */
 import type { BinnedMasses } from './depositDeflections';
+import { scratchFloat64, scratchInt32 } from './scratchBuffers';
 
 /**
  * How the shifted ranges [E_j + s, E_{j+1} + s] cut across the input bins. It depends
  * only on the grid and the shift, so it is built once per pattern and reused for every
  * sublevel. Piece p of output bin j lies in input bin k[p] (k = n: right of the grid,
- * where S is the total mass), starts `off` after that bin's left edge, and carries the
- * polynomial weights of ∫ S and ∫ (t − mid) S over the piece.
+ * where S is the total mass); `w` holds, with stride 3, the piece's offset from that
+ * bin's left edge, its length and half its squared length.
  */
 interface ShiftPlan {
   /** Pieces of output bin j are start[j] … start[j+1] − 1. */
   start: Int32Array;
   k: Int32Array;
-  off: Float64Array;
-  /** len, len²/2, ((b² − a²)/2), ((b³ − a³)/3 − a(b² − a²)/2) with a, b the piece ends about mid. */
-  w1: Float64Array;
-  w2: Float64Array;
-  m1: Float64Array;
-  m2: Float64Array;
+  w: Float64Array;
 }
 
-function planShift(edges: Float64Array, shift: number): ShiftPlan {
+function planShift(edges: Float64Array, shift: number, name: string): ShiftPlan {
   const n = edges.length - 1;
-  const ks: number[] = [];
-  const offs: number[] = [];
-  const w1: number[] = [];
-  const w2: number[] = [];
-  const m1: number[] = [];
-  const m2: number[] = [];
-  const start = new Int32Array(n + 1);
+  // Every piece ends at a range end or an input edge: at most 2n + 2 pieces.
+  const cap = 2 * n + 2;
+  const ks = scratchInt32(`${name}.k`, cap);
+  const w = scratchFloat64(`${name}.w`, 3 * cap);
+  const start = scratchInt32(`${name}.start`, n + 1);
+  let count = 0;
   let k = 0;
   while (k < n && edges[k + 1] <= edges[0] + shift) k++;
   for (let j = 0; j < n; j++) {
-    start[j] = ks.length;
-    const y1 = edges[j] + shift;
+    start[j] = count;
     const y2 = edges[j + 1] + shift;
-    const mid = 0.5 * (y1 + y2);
-    let u = y1;
+    let u = edges[j] + shift;
     while (u < y2) {
       let v: number;
       let kk: number;
@@ -63,29 +56,19 @@ function planShift(edges: Float64Array, shift: number): ShiftPlan {
       }
       if (kk >= 0 && v > u) {
         const len = v - u;
-        const a = u - mid;
-        const b = v - mid;
-        ks.push(kk);
-        offs.push(kk < n ? u - edges[kk] : 0);
-        w1.push(len);
-        w2.push(0.5 * len * len);
-        m1.push(0.5 * (b * b - a * a));
-        m2.push((b * b * b - a * a * a) / 3 - (a * (b * b - a * a)) / 2);
+        const q = 3 * count;
+        ks[count] = kk;
+        w[q] = kk < n ? u - edges[kk] : 0;
+        w[q + 1] = len;
+        w[q + 2] = 0.5 * len * len;
+        count++;
       }
       u = v;
       if (k < n && u >= edges[k + 1]) k++;
     }
   }
-  start[n] = ks.length;
-  return {
-    start,
-    k: Int32Array.from(ks),
-    off: Float64Array.from(offs),
-    w1: Float64Array.from(w1),
-    w2: Float64Array.from(w2),
-    m1: Float64Array.from(m1),
-    m2: Float64Array.from(m2),
-  };
+  start[n] = count;
+  return { start, k: ks, w };
 }
 
 /** A box convolution prepared for one grid and width. */
@@ -94,50 +77,55 @@ export interface BoxOperator {
   edges: Float64Array;
   plus?: ShiftPlan;
   minus?: ShiftPlan;
-  /** Scratch: prefix masses (n + 1), densities (n), shifted integrals. */
+  /** Scratch: prefix masses (n + 1) and densities (n + 1). */
   prefix: Float64Array;
   density: Float64Array;
-  areaPlus: Float64Array;
-  areaMinus: Float64Array;
-  momentPlus: Float64Array;
-  momentMinus: Float64Array;
+  /** 1 / bin width, n values. */
+  inverseWidth: Float64Array;
 }
 
-export function boxOperator(edges: Float64Array, widthM: number): BoxOperator {
+/** `name` keys the reusable work arrays: operators alive at the same time need different names. */
+export function boxOperator(edges: Float64Array, widthM: number, name: string): BoxOperator {
   const n = edges.length - 1;
+  const inverseWidth = scratchFloat64(`${name}.inverseWidth`, n);
+  for (let j = 0; j < n; j++) inverseWidth[j] = 1 / (edges[j + 1] - edges[j]);
   const op: BoxOperator = {
     widthM,
     edges,
-    prefix: new Float64Array(n + 1),
-    density: new Float64Array(n + 1),
-    areaPlus: new Float64Array(n),
-    areaMinus: new Float64Array(n),
-    momentPlus: new Float64Array(n),
-    momentMinus: new Float64Array(n),
+    prefix: scratchFloat64('box.prefix', n + 1),
+    density: scratchFloat64('box.density', n + 1),
+    inverseWidth,
   };
   if (widthM > 0) {
-    op.plus = planShift(edges, widthM / 2);
-    op.minus = planShift(edges, -widthM / 2);
+    op.plus = planShift(edges, widthM / 2, `${name}.plus`);
+    op.minus = planShift(edges, -widthM / 2, `${name}.minus`);
   }
   return op;
 }
 
-function applyPlan(plan: ShiftPlan, prefix: Float64Array, density: Float64Array, area: Float64Array, moment: Float64Array): void {
-  const { start, k, off, w1, w2, m1, m2 } = plan;
-  const n = area.length;
-  for (let j = 0; j < n; j++) {
-    let ar = 0;
-    let mo = 0;
-    for (let p = start[j], e = start[j + 1]; p < e; p++) {
-      const kk = k[p];
-      const rho = density[kk];
-      const s0 = prefix[kk] + rho * off[p];
-      ar += s0 * w1[p] + rho * w2[p];
-      mo += s0 * m1[p] + rho * m2[p];
-    }
-    area[j] = ar;
-    moment[j] = mo;
+/** ∫ S over output bin j's shifted range. */
+function shiftedArea(plan: ShiftPlan, prefix: Float64Array, density: Float64Array, j: number): number {
+  const { start, k, w } = plan;
+  let area = 0;
+  const e = start[j + 1];
+  for (let p = start[j], q = 3 * p; p < e; p++, q += 3) {
+    const kk = k[p];
+    const rho = density[kk];
+    area += (prefix[kk] + rho * w[q]) * w[q + 1] + rho * w[q + 2];
   }
+  return area;
+}
+
+/** Index of the bin containing x, clamped to [0, n − 1]. */
+function clampedBin(edges: Float64Array, x: number): number {
+  let lo = 0;
+  let hi = edges.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (edges[mid] <= x) lo = mid;
+    else hi = mid;
+  }
+  return lo;
 }
 
 /**
@@ -164,38 +152,45 @@ export function shareToCentres(src: BinnedMasses, edges: Float64Array, out: Floa
   }
 }
 
-/** Convolves bin-constant masses with the operator's box; writes masses and centroids. */
-export function convolveBox(mass: Float64Array, op: BoxOperator, out: BinnedMasses): void {
+/** Convolves bin-constant masses with the operator's box (out must not alias mass). */
+export function convolveBox(mass: Float64Array, op: BoxOperator, out: Float64Array): void {
   const edges = op.edges;
   const n = edges.length - 1;
   const widthM = op.widthM;
   if (!op.plus || !op.minus) {
-    out.mass.set(mass);
-    for (let j = 0; j < n; j++) out.centroid[j] = 0.5 * (edges[j] + edges[j + 1]);
+    out.set(mass);
     return;
   }
-  const { prefix, density } = op;
-  prefix[0] = 0;
-  for (let j = 0; j < n; j++) {
-    prefix[j + 1] = prefix[j] + mass[j];
-    density[j] = mass[j] / (edges[j + 1] - edges[j]);
+  let first = 0;
+  while (first < n && mass[first] === 0) first++;
+  if (first === n) {
+    out.fill(0);
+    return;
   }
+  let last = n - 1;
+  while (mass[last] === 0) last--;
+  // Only bins within w/2 of the occupied range receive mass; their shifted ranges reach
+  // input bins within w of it, so S and the density are needed only there (and at n).
+  const j0 = clampedBin(edges, edges[first] - widthM / 2);
+  const j1 = clampedBin(edges, edges[last + 1] + widthM / 2) + 1;
+  const k0 = Math.max(0, clampedBin(edges, edges[first] - widthM) - 1);
+  const k1 = Math.min(n, clampedBin(edges, edges[last + 1] + widthM) + 2);
+  const { prefix, density, inverseWidth } = op;
+  let below = 0;
+  for (let k = k0; k < k1; k++) {
+    const m = k >= first && k <= last ? mass[k] : 0;
+    prefix[k] = below;
+    density[k] = m * inverseWidth[k];
+    below += m;
+  }
+  prefix[n] = below;
   density[n] = 0; // right of the grid S stays at the total
-  applyPlan(op.plus, prefix, density, op.areaPlus, op.momentPlus);
-  applyPlan(op.minus, prefix, density, op.areaMinus, op.momentMinus);
-  for (let j = 0; j < n; j++) {
-    const lo = edges[j];
-    const hi = edges[j + 1];
-    const c = 0.5 * (lo + hi);
-    const m = (op.areaPlus[j] - op.areaMinus[j]) / widthM;
-    if (m > 0) {
-      out.mass[j] = m;
-      // ∫ (x − c) g dx = (1/w)[∫ (t − mid₊) S − ∫ (t − mid₋) S] since x − c = t − mid for t = x ± w/2.
-      const x = c + (op.momentPlus[j] - op.momentMinus[j]) / (widthM * m);
-      out.centroid[j] = x >= lo && x <= hi ? x : c;
-    } else {
-      out.mass[j] = 0;
-      out.centroid[j] = c;
-    }
+  out.fill(0, 0, j0);
+  out.fill(0, j1);
+  const { plus, minus } = op;
+  const scale = 1 / widthM;
+  for (let j = j0; j < j1; j++) {
+    const m = (shiftedArea(plus, prefix, density, j) - shiftedArea(minus, prefix, density, j)) * scale;
+    out[j] = m > 0 ? m : 0;
   }
 }

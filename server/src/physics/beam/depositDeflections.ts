@@ -6,7 +6,7 @@
  */
 import type { SpeedLaw } from './speedLaw';
 
-/** Binned point masses: mass[j] sits at centroid[j], inside bin j. */
+/** Binned point masses: mass[j] sits at centroid[j], inside bin j (centroid is meaningful only where mass ≠ 0). */
 export interface BinnedMasses {
   mass: Float64Array;
   centroid: Float64Array;
@@ -26,8 +26,7 @@ export function binOf(edges: Float64Array, x: number): number {
 
 export function depositDeflections(out: BinnedMasses, edges: Float64Array, k: number, law: SpeedLaw): number {
   const bins = edges.length - 1;
-  out.mass.fill(0);
-  for (let j = 0; j < bins; j++) out.centroid[j] = 0.5 * (edges[j] + edges[j + 1]);
+  out.mass.fill(0); // centroids are written wherever a mass is
   if (k === 0 || law.singleSpeed !== undefined) {
     const z = law.singleSpeed !== undefined ? k / (law.singleSpeed * law.singleSpeed) : 0;
     if (!(z >= edges[0] && z <= edges[bins])) return 1;
@@ -69,8 +68,8 @@ export function depositDeflections(out: BinnedMasses, edges: Float64Array, k: nu
     if (!(mass > 0)) continue;
     out.mass[j] = mass;
     const c = (prevM - m0) / mass;
-    // Round-off in nearly empty bins can push the centroid out of its bin: keep the bin centre then.
-    if (c >= edges[j] && c <= edges[j + 1]) out.centroid[j] = c;
+    // Round-off in nearly empty bins can push the centroid out of its bin: use the bin centre then.
+    out.centroid[j] = c >= edges[j] && c <= edges[j + 1] ? c : 0.5 * (edges[j] + edges[j + 1]);
   }
   return below + (1 - prevP);
 }

@@ -8,6 +8,7 @@ import { boxOperator, convolveBox, shareToCentres } from './boxConvolve';
 import { deflectionCoefficient } from './deflection';
 import { depositDeflections, type BinnedMasses } from './depositDeflections';
 import { detectorGrid } from './detectorGrid';
+import { scratchFloat64 } from './scratchBuffers';
 import { groupByPeakPosition } from './groupSublevels';
 import { pairDips, type PairVerdict } from './pairDips';
 import { resolveOptions, type PatternOptions } from './patternOptions';
@@ -69,7 +70,10 @@ export interface DetectorPattern {
    * there receives). Bin j holds total[j] × (edges[j+1] − edges[j]) of the flux.
    */
   total: Float64Array;
-  /** Population-weighted contributions, same units; they add up to `total`. */
+  /**
+   * Population-weighted contributions, same units; they add up to `total`. These and
+   * `total` are views into one buffer: copy them (slice) before transferring a buffer.
+   */
   perSublevel: Float64Array[];
   sublevels: SublevelDeflection[];
   /** Population-weighted flux fraction that falls outside the grid (mostly the slow tail). */
@@ -142,18 +146,22 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
   const landing = extents.filter((_, i) => weights[i] > 0);
   const { edgesM, centresM } = detectorGrid(span.startM, span.endM, n, landing, gridScaleM(image.kernelFwhmM, law));
 
-  const total = new Float64Array(n);
+  // One allocation for the total and every sublevel's contribution (views into one block).
+  const block = new Float64Array((sublevels.length + 1) * n);
+  const total = block.subarray(0, n);
   const perSublevel: Float64Array[] = [];
-  const stageA: BinnedMasses = { mass: new Float64Array(n), centroid: new Float64Array(n) };
-  const flat = new Float64Array(n);
-  const slitA = boxOperator(edgesM, image.boxAM);
-  const slitB = boxOperator(edgesM, image.boxBM);
-  const aperture = boxOperator(edgesM, image.detectorM);
+  const inverseWidth = scratchFloat64('pattern.inverseWidth', n);
+  for (let j = 0; j < n; j++) inverseWidth[j] = 1 / (edgesM[j + 1] - edgesM[j]);
+  const stageA: BinnedMasses = { mass: scratchFloat64('pattern.mass', n), centroid: scratchFloat64('pattern.centroid', n) };
+  const flat = scratchFloat64('pattern.flat', n);
+  const slitA = boxOperator(edgesM, image.boxAM, 'slitA');
+  const slitB = boxOperator(edgesM, image.boxBM, 'slitB');
+  const aperture = boxOperator(edgesM, image.detectorM, 'aperture');
   let offGrid = 0;
   const summaries: SublevelDeflection[] = [];
   const ownPeaks: number[] = [];
   for (let i = 0; i < sublevels.length; i++) {
-    const out = new Float64Array(n);
+    const out = block.subarray((i + 1) * n, (i + 2) * n);
     perSublevel.push(out);
     const meanDeflectionM = ks[i] * law.meanInverseSquare;
     if (weights[i] === 0) {
@@ -161,19 +169,16 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
       ownPeaks.push(NaN);
       continue;
     }
-    // Deflections → slit box a → slit box b → detector aperture; masses re-centred between stages.
+    // Deflections (exact bin masses and centroids, shared onto bin centres) → slit box a → slit box b → aperture.
     depositDeflections(stageA, edgesM, ks[i], law);
     shareToCentres(stageA, edgesM, flat);
-    convolveBox(flat, slitA, stageA);
-    shareToCentres(stageA, edgesM, flat);
-    convolveBox(flat, slitB, stageA);
-    shareToCentres(stageA, edgesM, flat);
-    convolveBox(flat, aperture, stageA);
-    out.set(stageA.mass);
+    convolveBox(flat, slitA, out);
+    convolveBox(out, slitB, flat);
+    convolveBox(flat, aperture, out);
     let inside = 0;
     for (let j = 0; j < n; j++) {
       inside += out[j];
-      const v = (out[j] * weights[i]) / (edgesM[j + 1] - edgesM[j]);
+      const v = out[j] * weights[i] * inverseWidth[j];
       out[j] = v;
       total[j] += v;
     }
@@ -189,7 +194,7 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
     ? fixedGroups.map((g) => g.filter((i) => activeIdx.includes(i))).filter((g) => g.length > 0)
     : groupByPeakPosition(ownPeaks, activeIdx, options.mergeFraction * image.kernelFwhmM);
   const peaks: PatternPeak[] = [];
-  const profile = new Float64Array(n);
+  const profile = scratchFloat64('pattern.profile', n);
   for (const g of groups) {
     profile.fill(0);
     for (const i of g) {

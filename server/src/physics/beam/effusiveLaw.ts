@@ -8,26 +8,47 @@
 import { BOLTZMANN_K } from '../constants';
 import type { SpeedLaw } from './speedLaw';
 
-/** 1 − (1 + y) e^{−y} without cancellation for small y (series Σ_{n≥2} (−1)^n (n−1) yⁿ / n!). */
-function slowerFractionOfSquare(y: number): number {
-  if (y < 0.02) {
-    let term = (y * y) / 2; // n = 2
-    let sum = term;
-    for (let n = 3; n <= 12; n++) {
-      term *= (-y * (n - 1)) / ((n - 2) * n);
-      sum += term;
-    }
-    return sum;
+/** Σ_{n≥2} (−1)^n (n−1) yⁿ / n! = 1 − (1 + y) e^{−y}, for small y where the direct form cancels. */
+function slowerFractionSeries(y: number): number {
+  let term = (y * y) / 2; // n = 2
+  let sum = term;
+  for (let n = 3; n <= 12; n++) {
+    term *= (-y * (n - 1)) / ((n - 2) * n);
+    sum += term;
   }
-  return -Math.expm1(-y) - y * Math.exp(-y);
+  return sum;
 }
 
 export function effusiveLaw(temperatureK: number, massKg: number): SpeedLaw {
   const alpha2 = (2 * BOLTZMANN_K * temperatureK) / massKg;
   const alpha = Math.sqrt(alpha2);
+  // The pattern code asks for both cumulative integrals at the same speed: share the exponentials.
+  let lastY = NaN;
+  let expNeg = 1; // e^{−y}
+  let oneMinusExp = 0; // 1 − e^{−y}
+  const prepare = (y: number): void => {
+    if (y !== lastY) {
+      lastY = y;
+      expNeg = Math.exp(-y);
+      // 1 − e^{−y} loses digits only for small y; expm1 is needed there alone.
+      oneMinusExp = y < 0.5 ? -Math.expm1(-y) : 1 - expNeg;
+    }
+  };
   return {
-    slowerFraction: (v) => (v <= 0 ? 0 : v === Infinity ? 1 : slowerFractionOfSquare((v * v) / alpha2)),
-    inverseSquareBelow: (v) => (v <= 0 ? 0 : v === Infinity ? 1 / alpha2 : -Math.expm1((-v * v) / alpha2) / alpha2),
+    slowerFraction: (v) => {
+      if (v <= 0) return 0;
+      if (v === Infinity) return 1;
+      const y = (v * v) / alpha2;
+      if (y < 0.02) return slowerFractionSeries(y);
+      prepare(y);
+      return oneMinusExp - y * expNeg;
+    },
+    inverseSquareBelow: (v) => {
+      if (v <= 0) return 0;
+      if (v === Infinity) return 1 / alpha2;
+      prepare((v * v) / alpha2);
+      return oneMinusExp / alpha2;
+    },
     meanInverseSquare: 1 / alpha2,
     meanSpeed: ((3 * Math.sqrt(Math.PI)) / 4) * alpha,
     rmsSpread: alpha * Math.sqrt(2 - (9 * Math.PI) / 16),

@@ -126,8 +126,10 @@ export function localMaxima(profile: Float64Array, centresM: Float64Array, minRe
     // i..k is higher than both neighbours.
     let leftMin = y;
     for (let j = i - 1; j >= 0 && profile[j] <= y; j--) leftMin = Math.min(leftMin, profile[j]);
+    // Ties: a later sample of equal height counts as higher ground, so of several equal
+    // maxima (a flat top with round-off ripples) only the last keeps its prominence.
     let rightMin = y;
-    for (let j = k + 1; j < n && profile[j] <= y; j++) rightMin = Math.min(rightMin, profile[j]);
+    for (let j = k + 1; j < n && profile[j] < y; j++) rightMin = Math.min(rightMin, profile[j]);
     const prominence = y - Math.max(leftMin, rightMin);
     if (y > 0 && prominence >= minRelativeProminence * globalMax) {
       out.push({ positionM: 0.5 * (centresM[i] + centresM[k]), height: y, prominence });

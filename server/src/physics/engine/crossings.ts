@@ -3,9 +3,10 @@
  * block levels never cross, so only pairs from different blocks are scanned:
  * a sign change of E_a − E_b between neighbouring points brackets a crossing,
  * which is then refined on the exact engine (only the two blocks are
- * re-solved; Illinois regula falsi, see bracketedRoot.ts). Differences within 1e-10 of the sweep's energy scale count
- * as zero, so round-off at exact degeneracies (B = 0) makes no false crossing.
- * A touching without a sign change is not reported.
+ * re-solved; Illinois regula falsi, see bracketedRoot.ts). Differences within
+ * 1e-10 of the sweep's energy scale count as zero, so round-off at exact
+ * degeneracies (B = 0) makes no false crossing. A touching without a sign
+ * change is not reported.
  */
 import { makeWorkspace, solveBlockAt } from './blockSolver';
 import { bracketedRoot } from './bracketedRoot';
@@ -27,7 +28,16 @@ function energyAt(model: LevelModel, b: number, rank: number, fieldT: number, ws
 }
 
 /** Refine a bracketed crossing of a and b between fields lo and hi (differences dLo, dHi there). */
-function refine(model: LevelModel, a: StateSlot, b: StateSlot, lo: number, hi: number, dLo: number, dHi: number, tol: number): LevelCrossing | null {
+function refine(
+  model: LevelModel,
+  a: StateSlot,
+  b: StateSlot,
+  lo: number,
+  hi: number,
+  dLo: number,
+  dHi: number,
+  tol: number,
+): LevelCrossing | null {
   const ws = makeWorkspace(model.largestBlock);
   const diff = (f: number): number => energyAt(model, a.block, a.rank, f, ws) - energyAt(model, b.block, b.rank, f, ws);
   // Stop once the difference is at the round-off level of the energies (1e-15 of the scale).

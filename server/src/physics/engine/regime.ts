@@ -13,7 +13,7 @@
  * strongLimitT: the field above which the strong-field formula (diagonal of
  * the couplings + Zeeman) is within `fraction` × ΔE for every sublevel.
  * Verdict: weak at or below linearLimitT, strong at or above strongLimitT,
- * intermediate between.
+ * intermediate between. Limits: log-spaced scan, then bisection in log B to 1e-7.
  */
 import { BOHR_MAGNETON_HZ_PER_T } from '../constants';
 import { makeWorkspace, solveBlockAt } from './blockSolver';
@@ -24,9 +24,10 @@ import { MAX_SWEEP_WORK } from './limits';
 import type { EngineIssue, LevelSpec, RegimeResult, RegimeVerdict } from './types';
 import { checkField } from './validateSpec';
 
-/** Scan from 1e-9 to 1e6 times the characteristic field, ten steps per decade. */
-const SCAN_LO = -90;
-const SCAN_HI = 60;
+/** Scan from 1e-9 to 1e6 times the characteristic field, four steps per decade. */
+const STEPS_PER_DECADE = 4;
+const SCAN_LO = -9 * STEPS_PER_DECADE;
+const SCAN_HI = 6 * STEPS_PER_DECADE;
 
 interface FormulaErrors {
   linear: number;
@@ -51,7 +52,7 @@ function formulaErrors(model: LevelModel, fieldT: number, ws: ReturnType<typeof 
 
 /** Bisect on log B between a field where `fails` is `atLo` and one where it is not. */
 function bisectLog(lo: number, hi: number, fails: (b: number) => boolean, atLo: boolean): number {
-  for (let it = 0; it < 60 && hi / lo > 1 + 1e-9; it++) {
+  for (let it = 0; it < 60 && hi / lo > 1 + 1e-7; it++) {
     const mid = Math.sqrt(lo * hi);
     if (fails(mid) === atLo) lo = mid;
     else hi = mid;
@@ -101,7 +102,7 @@ export function regime(spec: LevelSpec, fieldT: number, fraction = 0.01): Regime
 
   let cubes = 0;
   for (const blk of model.blocks) cubes += blk.size ** 3;
-  if (cubes * (SCAN_HI - SCAN_LO + 120) > MAX_SWEEP_WORK) {
+  if (cubes * (SCAN_HI - SCAN_LO + 60) > MAX_SWEEP_WORK) {
     issues.push(issue('info', 'regime-limits-skipped', 'The level is too large to search for the regime limits; only x is given.'));
     const v: RegimeVerdict = x < 0.01 ? 'weak field (linear)' : x > 100 ? 'strong field (Paschen–Back / decoupled)' : 'intermediate';
     return { x, verdict: v, linearLimitT: Number.NaN, strongLimitT: Number.NaN, zeroFieldSpreadHz: spread, fraction, issues };
@@ -114,7 +115,7 @@ export function regime(spec: LevelSpec, fieldT: number, fraction = 0.01): Regime
   const strongFails = (f: number): boolean => !(formulaErrors(model, f, ws).strong <= fraction * spread);
 
   const bc = characteristicField(model, gDiff);
-  const at = (k: number): number => bc * 10 ** (k / 10);
+  const at = (k: number): number => bc * 10 ** (k / STEPS_PER_DECADE);
 
   let linearLimitT = Number.POSITIVE_INFINITY;
   for (let k = SCAN_LO; k <= SCAN_HI; k++) {

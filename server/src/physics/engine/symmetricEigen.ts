@@ -8,7 +8,7 @@ import { householderQlInPlace } from './householderQl';
 import { jacobiInPlace } from './jacobiEigen';
 import { sortEigenPairs } from './sortEigenPairs';
 
-export const JACOBI_MAX_ORDER = 6;
+export const JACOBI_MAX_ORDER = 8;
 
 /**
  * Eigenpairs of the symmetric matrix `a` (destroyed), sorted ascending:

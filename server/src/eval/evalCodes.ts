@@ -1,0 +1,8 @@
+/** Problem codes raised by the evaluation (physics at the file's fields). Stable ids. */
+import type { ProblemSeverity } from '../format/ast';
+
+export const EVAL_RULES = {
+  'zeeman-not-linear': { severity: 'info', summary: 'A level is past the linear (weak-field) regime at a working field.' },
+  'zeeman-strong-field': { severity: 'info', summary: 'A level is in the strong-field regime; low-field labels mislead.' },
+  'level-too-large': { severity: 'error', summary: 'A level has more sublevels than the engine handles.' },
+} as const satisfies Record<string, { severity: ProblemSeverity; summary: string }>;

@@ -1,0 +1,52 @@
+/**
+ * Exact sublevels of one level at one working field, from the any-field engine, with the regime
+ * verdict that tells whether the weak-field (linear) picture still holds.
+ */
+import { regime, solveLevel, type LevelSpec, type SublevelState } from '../physics/engine';
+import { BOHR_MAGNETON } from '../physics/constants';
+import { signedHalfText } from './halves';
+import type { ExactSublevelResult, RegimeResultJson } from './resultTypes';
+
+export interface ExactAtField {
+  exact: ExactSublevelResult[];
+  regime?: RegimeResultJson;
+  /** Engine errors (size caps and the like), in plain words. */
+  errors: string[];
+}
+
+export function exactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
+  const solved = solveLevel(spec, fieldT);
+  const errors = solved.issues.filter((i) => i.severity === 'error').map((i) => i.message);
+  if (errors.length > 0) return { exact: [], errors };
+  // A level without zero-field structure has exactly linear energies in this single-level model: no regime to judge.
+  if (!hasZeroFieldStructure(spec)) return { exact: solved.states.map(toJson), errors: [] };
+  const r = regime(spec, fieldT);
+  const regimeJson: RegimeResultJson | undefined = r.issues.some((i) => i.severity === 'error')
+    ? undefined
+    : {
+        x: Number.isFinite(r.x) ? r.x : null,
+        verdict: r.verdict,
+        linear_limit_T: Number.isFinite(r.linearLimitT) ? r.linearLimitT : null,
+        strong_limit_T: Number.isFinite(r.strongLimitT) ? r.strongLimitT : null,
+        fraction: r.fraction,
+      };
+  return { exact: solved.states.map(toJson), ...(regimeJson ? { regime: regimeJson } : {}), errors: [] };
+}
+
+function hasZeroFieldStructure(spec: LevelSpec): boolean {
+  if (spec.kind === 'fine') return spec.zeta !== 0 && spec.L > 0 && spec.twoS > 0;
+  return spec.twoI > 0 && spec.twoJ > 0 && (spec.A !== 0 || (spec.B ?? 0) !== 0 || (spec.C ?? 0) !== 0);
+}
+
+function toJson(s: SublevelState): ExactSublevelResult {
+  return {
+    low_label: s.low.text,
+    high_label: s.high.text,
+    m: s.twoM / 2,
+    m_text: signedHalfText(s.twoM),
+    energy_Hz: s.energyHz,
+    moment_J_per_T: s.momentJT,
+    moment_bohr: s.momentJT / BOHR_MAGNETON,
+    d2E_dB2_Hz_per_T2: s.d2EdB2,
+  };
+}

@@ -1,0 +1,45 @@
+/**
+ * Fixes from a problem's `data.suggestions`: each suggestion replaces the problem's range
+ * (allowed J values, allowed terms, did-you-mean names, keywords and units, built-in species).
+ */
+import type { CodeAction } from 'vscode-languageserver-types';
+import { type FixContext, quickFix } from './types';
+
+function title(code: string, s: string): string {
+  switch (code) {
+    case 'term-j-out-of-range':
+    case 'term-j-parity-of-spin':
+      return `Change J to ${s}`;
+    case 'term-not-in-configuration':
+      return `Change the term to ${s}`;
+    case 'term-parity-mismatch':
+      return s === '' ? 'Remove the odd-parity mark' : `Replace the parity mark with '${s}'`;
+    case 'level-missing-term':
+      return `Write '${s}'`;
+    case 'name-unknown':
+    case 'name-ambiguous':
+    case 'syntax-unknown-statement':
+    case 'syntax-unknown-key':
+    case 'unit-unknown':
+      return `Change to '${s}'`;
+    case 'unit-missing':
+      return `Add a unit: ${s}`;
+    case 'unit-wrong-dimension':
+      return `Change the unit to ${s}`;
+    case 'species-needs-mass':
+      return `Use the built-in species ${s}`;
+    case 'beam-source-malformed':
+      return `Write source = ${s}`;
+    default:
+      return s === '' ? 'Remove it' : `Replace with '${s}'`;
+  }
+}
+
+export function suggestionFixes(ctx: FixContext): CodeAction[] {
+  const raw = ctx.problem.data?.suggestions;
+  if (!Array.isArray(raw)) return [];
+  const suggestions = raw.filter((s): s is string => typeof s === 'string').slice(0, 24);
+  const range = ctx.problem.range;
+  if (range.start.line !== range.end.line) return [];
+  return suggestions.map((s) => quickFix(ctx, title(ctx.problem.code, s), [{ range, newText: s }], suggestions.length === 1));
+}

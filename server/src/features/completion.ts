@@ -1,0 +1,183 @@
+/**
+ * Completion: block words, `level` and setting keys at the start of a line; built-in species
+ * after `species`; term symbols the configuration before the cursor allows; units of the
+ * dimension a setting expects after a number; level, species and magnet names where a
+ * reference goes; the fixed words of `source`, `slits` and `settings`.
+ */
+import { type CompletionItem, CompletionItemKind, type Position } from 'vscode-languageserver-types';
+import type { Analysis } from '../eval/analyze';
+import type { BlockKind, BlockNode } from '../format/ast';
+import { readNumber, readNumberPrefix, startsLikeNumber } from '../format/numbers';
+import { BLOCK_KEYS, BLOCK_WORDS, isBlockWord, LEVEL_KEYS, LEVEL_WORD } from '../format/schema';
+import type { Token } from '../format/scanner';
+import type { LevelModel, SetupModel } from '../model/types';
+import { parseLevelDesignation } from '../physics/configuration';
+import { speciesNames } from '../physics/species';
+import { item, unitItems, wordItems } from './completion/items';
+import { lineContext, type LineContext } from './completion/lineContext';
+import { builtinDesignationItems, termItems } from './completion/termItems';
+import { speciesOfBlock } from './shared/modelLookup';
+import { expectedDimension } from './shared/units';
+
+const BLOCK_WORD_DETAIL: Record<BlockKind, string> = {
+  species: 'species <name> — an atom, built-in or your own',
+  field: 'field <name> = <flux density>',
+  magnet: 'magnet <name> — field, gradient, length',
+  beam: 'beam <name> — species, level, source, slits, magnet, drift, detector',
+  line: 'line <name>: <lower> -> <upper>',
+  settings: 'settings — g_s, reduced_mass',
+};
+
+function statementStart(c: LineContext): CompletionItem[] {
+  const out: CompletionItem[] = [];
+  const block = c.enclosing;
+  let order = 0;
+  if (block) {
+    for (const key of BLOCK_KEYS[block.kind]) out.push(item(key, CompletionItemKind.Property, c.replace, { insert: `${key} = `, detail: `${block.kind} setting`, order: order++ }));
+    if (block.kind === 'species') {
+      out.push(item(LEVEL_WORD, CompletionItemKind.Keyword, c.replace, { insert: 'level ${1:name}: ${2}', snippet: true, detail: 'level <name>: [configuration] <term>', order: order++ }));
+      const hasLevelAbove = block.levels.some((l) => l.range.start.line < c.position.line);
+      if (hasLevelAbove) for (const key of LEVEL_KEYS) out.push(item(key, CompletionItemKind.Property, c.replace, { insert: `${key} = `, detail: 'setting of the level above', order: order++ }));
+    }
+  }
+  for (const w of BLOCK_WORDS) out.push(item(w, CompletionItemKind.Keyword, c.replace, { insert: `${w} `, detail: BLOCK_WORD_DETAIL[w], order: order++ }));
+  return out;
+}
+
+/** Level names, qualified with their species when the bare name is not unique. */
+function levelNameItems(model: SetupModel | undefined, c: LineContext, only?: LevelModel['species']): CompletionItem[] {
+  if (!model) return [];
+  const all = model.species.flatMap((s) => s.levels);
+  const count = new Map<string, number>();
+  for (const l of all) count.set(l.name, (count.get(l.name) ?? 0) + 1);
+  return all
+    .filter((l) => !only || l.species === only)
+    .map((l, i) => {
+      const label = !only && (count.get(l.name) ?? 0) > 1 ? `${l.species.name}.${l.name}` : l.name;
+      return item(label, CompletionItemKind.EnumMember, c.replace, { detail: `${l.species.name}: ${l.designationText}`, order: i });
+    });
+}
+
+function isNumber(t: Token | undefined): boolean {
+  return !!t && t.kind === 'atom' && readNumber(t.text)?.ok === true;
+}
+
+/** Units after a number, or glued to it (`0.45m|` completes the `m`). */
+function unitsAfterNumber(c: LineContext, valueTokens: Token[], dimension: ReturnType<typeof expectedDimension>): CompletionItem[] | undefined {
+  if (!dimension) return undefined;
+  const previous = valueTokens[valueTokens.length - 1];
+  if (!c.typing && isNumber(previous)) return unitItems(dimension, c.replace);
+  if (c.typing && isNumber(previous) && !startsLikeNumber(c.typing.text)) return unitItems(dimension, c.replace);
+  if (c.typing && startsLikeNumber(c.typing.text)) {
+    const p = readNumberPrefix(c.typing.text);
+    if (p && p.length < c.typing.text.length) {
+      const start = { line: c.position.line, character: c.typing.start + p.length };
+      return unitItems(dimension, { start, end: c.replace.end });
+    }
+  }
+  return undefined;
+}
+
+function valueCompletions(c: LineContext, model: SetupModel | undefined, block: BlockNode, key: string, inLevel: boolean, valueTokens: Token[]): CompletionItem[] {
+  const words = valueTokens.filter((t) => t.kind === 'atom');
+  const previousWord = [...words].reverse().find((t) => !startsLikeNumber(t.text))?.text;
+  const dimension = expectedDimension({ blockKind: block.kind, key, inLevel, ...(previousWord ? { previousWord } : {}) });
+  const units = unitsAfterNumber(c, valueTokens, dimension);
+  if (units) return units;
+  if (inLevel) {
+    // After a complete value on a level line, the next thing is another level key.
+    if (valueTokens.length > 0 && !c.typing?.text.match(/^[+-]?\d/)) {
+      return LEVEL_KEYS.filter((k) => k !== key).map((k, i) => item(k, CompletionItemKind.Property, c.replace, { insert: `${k} = `, order: i }));
+    }
+    return [];
+  }
+  const empty = words.length === 0;
+  switch (`${block.kind}.${key}`) {
+    case 'beam.species':
+      return empty ? (model?.species ?? []).map((s, i) => item(s.name, CompletionItemKind.Module, c.replace, { order: i })) : [];
+    case 'beam.level': {
+      if (!empty) return [];
+      const beam = model?.beams.find((b) => b.node === block);
+      return levelNameItems(model, c, beam?.species);
+    }
+    case 'beam.magnet':
+      return empty ? (model?.magnets ?? []).map((m, i) => item(m.name, CompletionItemKind.Variable, c.replace, { order: i })) : [];
+    case 'beam.source':
+      if (empty) return wordItems(['oven', 'jet', 'speed'], c.replace, 'oven <temperature> | jet <speed> spread <percent> | speed <speed>');
+      if (words[0]?.text === 'jet' && words.length >= 2 && !words.some((w) => w.text === 'spread')) return wordItems(['spread'], c.replace);
+      return [];
+    case 'beam.slits':
+      return valueTokens.some((t) => t.kind === 'comma') && !words.some((w) => w.text === 'apart') && words.length >= 2 ? wordItems(['apart'], c.replace) : [];
+    case 'settings.g_s':
+      return empty ? wordItems(['exact', '2'], c.replace, 'exact: CODATA |g_e|; 2: textbook fractions') : [];
+    case 'settings.reduced_mass':
+      return empty ? wordItems(['on', 'off'], c.replace) : [];
+    default:
+      return [];
+  }
+}
+
+/** `level <name>: <configuration> |` → terms; after the term → the level's keys. */
+function levelLineCompletions(c: LineContext, model: SetupModel | undefined, block: BlockNode): CompletionItem[] {
+  const colon = c.before.findIndex((t) => t.kind === 'colon');
+  if (colon < 0) return [];
+  const designation = c.prefix.slice(c.before[colon]!.end, c.typing ? c.typing.start : c.prefix.length).trim();
+  const written = designation === '' ? undefined : parseLevelDesignation(designation);
+  if (written?.term && written.term.twoJ !== null && !written.issues.some((i) => i.severity === 'error')) {
+    return LEVEL_KEYS.map((k, i) => item(k, CompletionItemKind.Property, c.replace, { insert: `${k} = `, order: i }));
+  }
+  if (designation === '') {
+    return builtinDesignationItems(speciesOfBlock(model, block)?.builtin, c.replace);
+  }
+  return termItems(designation, c.replace);
+}
+
+function headerCompletions(c: LineContext, model: SetupModel | undefined): CompletionItem[] | undefined {
+  const first = c.before[0];
+  if (!first || first.kind !== 'atom' || !isBlockWord(first.text)) return undefined;
+  const second = c.before[1];
+  if (second && (second.kind === 'equals' || second.kind === 'colon') && c.enclosing && BLOCK_KEYS[c.enclosing.kind].includes(first.text)) return undefined;
+  switch (first.text) {
+    case 'species':
+      return c.before.length === 1 ? speciesNames().map((n, i) => item(n, CompletionItemKind.Module, c.replace, { detail: 'built-in species', order: i })) : [];
+    case 'line': {
+      const arrow = c.before.findIndex((t) => t.kind === 'arrow');
+      const colon = c.before.findIndex((t) => t.kind === 'colon');
+      if (arrow >= 0 && arrow === c.before.length - 1) {
+        const fromText = c.before[arrow - 1]?.text;
+        const from = model?.species.flatMap((s) => s.levels).find((l) => l.name === fromText || `${l.species.name}.${l.name}` === fromText);
+        return levelNameItems(model, c, from?.species);
+      }
+      if (colon >= 0 && colon === c.before.length - 1) return levelNameItems(model, c);
+      return [];
+    }
+    case 'field': {
+      const eq = c.before.findIndex((t) => t.kind === 'equals');
+      if (eq < 0) return [];
+      return unitsAfterNumber(c, c.before.slice(eq + 1), 'flux-density') ?? [];
+    }
+    default:
+      return [];
+  }
+}
+
+export function completion(analysis: Analysis, position: Position): CompletionItem[] {
+  const c = lineContext(analysis.doc, position);
+  if (c.inComment) return [];
+  const model = analysis.model;
+  if (c.before.length === 0) return statementStart(c);
+  const header = headerCompletions(c, model);
+  if (header) return header;
+  const block = c.enclosing;
+  if (!block) return [];
+  const first = c.before[0]!;
+  if (first.kind === 'atom' && first.text === LEVEL_WORD && block.kind === 'species') {
+    const eq = c.before.map((t) => t.kind).lastIndexOf('equals');
+    if (eq < 1) return levelLineCompletions(c, model, block);
+  }
+  const eq = c.before.map((t) => t.kind).lastIndexOf('equals');
+  if (eq < 1) return [];
+  const key = c.before[eq - 1]!.text;
+  const inLevel = block.kind === 'species' && LEVEL_KEYS.includes(key);
+  return valueCompletions(c, model, block, key, inLevel, c.before.slice(eq + 1));
+}

@@ -1,0 +1,111 @@
+/**
+ * Formatting that only ever changes whitespace, as minimal edits:
+ *   - block contents indented by two spaces, block headers at the left margin; a comment line
+ *     takes the indentation of the next statement;
+ *   - one space on each side of `=`;
+ *   - no trailing whitespace (and no blanks on empty lines).
+ * A trailing comment keeps its column when the code before it shrinks or grows, so aligned
+ * comments stay aligned. Comments and values are never moved across each other, rewritten or
+ * dropped, and formatting a formatted text changes nothing.
+ */
+import type { Range, TextEdit } from 'vscode-languageserver-types';
+import type { Analysis } from '../eval/analyze';
+import type { SetupDocument } from '../format/ast';
+import { lineText } from '../format/positions';
+import { isBlockWord } from '../format/schema';
+import { scanLine } from '../format/scanner';
+
+export const INDENT = '  ';
+
+interface Item {
+  start: number;
+  end: number;
+  kind: 'atom' | 'equals' | 'colon' | 'comma' | 'arrow' | 'comment';
+}
+
+interface ScannedLineItems {
+  text: string;
+  items: Item[];
+}
+
+function scan(doc: SetupDocument, line: number): ScannedLineItems {
+  const text = lineText(doc, line);
+  const s = scanLine(text, line, 0, text.length);
+  const items: Item[] = s.tokens.map((t) => ({ start: t.start, end: t.end, kind: t.kind }));
+  if (s.comment) items.push({ start: s.comment.start, end: s.comment.start + s.comment.text.trimEnd().length, kind: 'comment' });
+  return { text, items };
+}
+
+/** Lines that open a block, including a misspelt block word the parser reported as such. */
+function headerLines(analysis: Analysis): Set<number> {
+  const lines = new Set(analysis.doc.blocks.map((b) => b.headerRange.start.line));
+  for (const p of analysis.problems) {
+    const s = p.data?.suggestions;
+    if (p.code === 'syntax-unknown-statement' && Array.isArray(s) && typeof s[0] === 'string' && isBlockWord(s[0])) lines.add(p.range.start.line);
+  }
+  return lines;
+}
+
+/** Wanted indentation (in spaces) of every line that has something on it; -1 for empty lines. */
+function indentation(analysis: Analysis, scanned: ScannedLineItems[]): number[] {
+  const headers = headerLines(analysis);
+  const out = new Array<number>(scanned.length).fill(-1);
+  let inBody = false;
+  const codeIndent = new Array<number>(scanned.length).fill(-1);
+  scanned.forEach((s, n) => {
+    const code = s.items.some((i) => i.kind !== 'comment');
+    if (!code) return;
+    if (headers.has(n)) {
+      codeIndent[n] = 0;
+      inBody = true;
+    } else codeIndent[n] = inBody ? INDENT.length : 0;
+  });
+  let next = 0;
+  for (let n = scanned.length - 1; n >= 0; n--) {
+    if (codeIndent[n]! >= 0) {
+      next = codeIndent[n]!;
+      out[n] = next;
+    } else if (scanned[n]!.items.length > 0) out[n] = next;
+  }
+  return out;
+}
+
+/** Edits for one line: each whitespace run that should differ is replaced on its own. */
+function lineEdits(line: number, s: ScannedLineItems, indent: number, out: TextEdit[]): void {
+  const { text, items } = s;
+  const edit = (from: number, to: number, newText: string): void => {
+    if (text.slice(from, to) !== newText) out.push({ range: { start: { line, character: from }, end: { line, character: to } }, newText });
+  };
+  if (items.length === 0) {
+    if (text.length > 0) edit(0, text.length, '');
+    return;
+  }
+  const first = items[0]!;
+  edit(0, first.start, ' '.repeat(indent));
+  // Where the code now ends, relative to where it ended, so a trailing comment can keep its column.
+  let shift = indent - first.start;
+  for (let i = 1; i < items.length; i++) {
+    const prev = items[i - 1]!;
+    const cur = items[i]!;
+    const gap = text.slice(prev.end, cur.start);
+    let wanted = gap;
+    if (cur.kind === 'equals' || prev.kind === 'equals') wanted = ' ';
+    else if (cur.kind === 'comment' && gap.length > 0 && shift !== 0) wanted = ' '.repeat(Math.max(1, gap.length - shift));
+    edit(prev.end, cur.start, wanted);
+    shift += wanted.length - gap.length;
+  }
+  const last = items[items.length - 1]!;
+  edit(last.end, text.length, '');
+}
+
+export function formatting(analysis: Analysis, range?: Range): TextEdit[] {
+  const doc = analysis.doc;
+  const lineCount = doc.lineStarts.length;
+  const scanned = Array.from({ length: lineCount }, (_, n) => scan(doc, n));
+  const indents = indentation(analysis, scanned);
+  const from = range ? Math.max(0, range.start.line) : 0;
+  const to = range ? Math.min(lineCount - 1, range.end.line) : lineCount - 1;
+  const out: TextEdit[] = [];
+  for (let n = from; n <= to; n++) lineEdits(n, scanned[n]!, Math.max(0, indents[n]!), out);
+  return out;
+}

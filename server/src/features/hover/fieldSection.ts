@@ -1,0 +1,54 @@
+/**
+ * A working field (a `field` block or a magnet's field): its value in other units, the
+ * Zeeman scale μ_B·B/h, and each level's sublevels at that field.
+ */
+import type { EvaluationResult } from '../../eval/resultTypes';
+import { frequencyText } from '../../eval/quantityText';
+import { BOHR_MAGNETON_HZ_PER_T } from '../../physics/constants';
+import { md, mdTitle } from '../shared/markdown';
+import { levelAtField } from '../shared/results';
+import { valueInUnits } from '../shared/units';
+import type { HoverOptions } from './context';
+import { sublevelTable } from './sublevelTable';
+
+/** μ_B·B/h: the frequency by which a g·m = 1 sublevel moves at this field. */
+export function zeemanScaleHz(tesla: number): number {
+  return BOHR_MAGNETON_HZ_PER_T * tesla;
+}
+
+export function fieldValueLines(tesla: number): string[] {
+  return [`= ${valueInUnits(tesla, 'flux-density').join(' = ')}`, `Zeeman scale μ_B·B/h = ${frequencyText(zeemanScaleHz(tesla))}`];
+}
+
+/** Tables of every evaluated level at the field from `source`, up to the options' limits. */
+export function levelsAtFieldSection(
+  result: EvaluationResult | undefined,
+  source: { kind: 'field' | 'magnet'; name: string },
+  options: HoverOptions,
+): string | undefined {
+  if (!result) return undefined;
+  const parts: string[] = [];
+  let shown = 0;
+  let hidden = 0;
+  for (const level of result.levels) {
+    const point = levelAtField(level, source);
+    if (!point) continue;
+    if (shown >= options.levelTables) {
+      hidden++;
+      continue;
+    }
+    shown++;
+    parts.push(`${mdTitle(`${md(level.species)} ${md(level.level)}`)} (${md(level.designation.unicode)}) at this field`, sublevelTable(point, options.sublevelRows));
+  }
+  if (hidden > 0) parts.push(`… and ${hidden} more level${hidden === 1 ? '' : 's'} (hover a level for its own tables)`);
+  return parts.length > 0 ? parts.join('\n\n') : undefined;
+}
+
+export function fieldSection(name: string, tesla: number | undefined, ctx: { result: EvaluationResult | undefined; options: HoverOptions }): string {
+  const head = `${mdTitle(`field ${md(name)}`)}`;
+  if (tesla === undefined) return `${head}  \nno valid value yet`;
+  const body = [`${head}  \n${fieldValueLines(tesla).join('  \n')}`];
+  const tables = levelsAtFieldSection(ctx.result, { kind: 'field', name }, ctx.options);
+  if (tables) body.push(tables);
+  return body.join('\n\n');
+}

@@ -1,0 +1,33 @@
+/** A level's zero-field hyperfine structure: F levels with their energy and g_F, and the splittings. */
+import type { LevelResult, SourcedNumber } from '../../eval/resultTypes';
+import { halfText } from '../../eval/halves';
+import { frequencyText, trimNumber } from '../../eval/quantityText';
+import { md, mdTable, mdTitle } from '../shared/markdown';
+
+function constantText(name: string, c: SourcedNumber | undefined): string | undefined {
+  if (!c) return undefined;
+  const unc = c.uncertainty !== undefined ? ` ± ${frequencyText(c.uncertainty, 3)}` : '';
+  return `${name} = ${frequencyText(c.value)}${unc} (${md(c.source)})`;
+}
+
+export function hyperfineSection(r: LevelResult): string | undefined {
+  const twoI = Math.round(2 * r.I);
+  if (twoI === 0) return undefined;
+  const hf = r.hyperfine;
+  if (!hf) {
+    return `${mdTitle('Hyperfine structure')}  \nno A for this level, so F levels are not resolved: each m_J sublevel is ${twoI + 1}-fold degenerate in m_I (I = ${halfText(twoI)})`;
+  }
+  const constants = [constantText('A', hf.A_Hz), constantText('B', hf.B_Hz), constantText('C', hf.C_Hz)].filter((x): x is string => !!x);
+  const table = mdTable(
+    ['F', 'E/h at zero field', 'g_F'],
+    hf.levels.map((l) => [l.F_text, frequencyText(l.shift_Hz), trimNumber(l.g_F, 6)]),
+  );
+  const splits = hf.intervals.map((i) => `F = ${halfText(Math.round(2 * i.F_lower))} ↔ ${halfText(Math.round(2 * i.F_upper))}: ${frequencyText(i.interval_Hz)}`);
+  return [
+    `${mdTitle('Hyperfine structure')} (I = ${halfText(twoI)}, J = ${r.J_text})  \n${constants.join('  \n')}`,
+    table,
+    splits.length > 0 ? `Splittings: ${splits.join('; ')}` : '',
+  ]
+    .filter((s) => s !== '')
+    .join('\n\n');
+}

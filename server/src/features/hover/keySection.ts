@@ -1,0 +1,48 @@
+/** One line on what a setting key or block word means and which units it takes. */
+import type { BlockKind } from '../../format/ast';
+import { mdTitle } from '../shared/markdown';
+
+const BLOCK_WORDS: Record<BlockKind, string> = {
+  species: 'an atom or ion: a built-in name (mass, spin and level data from published sources) or your own name with its own data',
+  field: 'a named working field; every level is evaluated at it',
+  magnet: 'a state-selecting magnet: the field at the beam, its gradient and its length',
+  beam: 'an atomic beam: species, level, source, slits, magnet, drift and detector',
+  line: 'an electric-dipole line between two levels of one species',
+  settings: 'file-wide choices: g_s (exact or 2) and reduced_mass (on or off)',
+};
+
+const LEVEL_KEYS: Record<string, string> = {
+  A: 'magnetic-dipole hyperfine constant — a frequency (MHz), wave number (cm^-1) or energy (eV)',
+  B: 'electric-quadrupole hyperfine constant — acts only when I ≥ 1 and J ≥ 1',
+  C: 'magnetic-octupole hyperfine constant — acts only when I ≥ 3/2 and J ≥ 3/2',
+  g_J: 'measured g_J; it replaces the Landé value in the energies, and the Landé value is still shown',
+  energy: 'the level energy above the ground level, used for line frequencies',
+};
+
+const BLOCK_KEYS: Record<string, string> = {
+  'species.mass': 'atomic mass — u, Da or kg',
+  'species.I': 'nuclear spin, written exactly: 0, 1/2, 1, 3/2, …',
+  'species.g_I': 'nuclear g-factor in units of μ_B (negative for a positive nuclear moment)',
+  'species.mu_I': 'nuclear magnetic moment — muN (or J/T); g_I is derived from it',
+  'magnet.field': 'flux density at the beam — T, mT or G',
+  'magnet.gradient': 'field gradient across the beam — T/m or G/cm',
+  'magnet.length': 'length of the magnet along the beam',
+  'beam.species': 'which species flies (a species block of this file)',
+  'beam.level': 'which level the atoms are in (a level name, or Species.level)',
+  'beam.source': 'oven <temperature>, jet <speed> spread <percent>, or speed <speed>',
+  'beam.slits': '<width>, <width> apart <distance>',
+  'beam.magnet': 'the magnet the beam passes (a magnet block of this file)',
+  'beam.drift': 'distance from the magnet exit to the detector',
+  'beam.detector': 'detector width or resolution',
+  'settings.g_s': 'electron spin g-factor in the Landé formula: exact (CODATA) or 2 (textbook fractions)',
+  'settings.reduced_mass': 'on: g_L = 1 − m_e/M instead of 1',
+};
+
+export function blockWordSection(kind: BlockKind): string {
+  return `${mdTitle(kind)} — ${BLOCK_WORDS[kind]}`;
+}
+
+export function keySection(blockKind: BlockKind, key: string, inLevel: boolean): string | undefined {
+  const text = inLevel || (blockKind === 'species' && key in LEVEL_KEYS) ? LEVEL_KEYS[key] : BLOCK_KEYS[`${blockKind}.${key}`];
+  return text ? `${mdTitle(key)} — ${text}` : undefined;
+}

@@ -1,0 +1,34 @@
+/**
+ * A magnet: field, gradient and length in other units, the Zeeman scale at its field, the
+ * force scale μ_B·∂B/∂z, and the levels' sublevels at its field. Beam results add a section
+ * here when the evaluation carries them.
+ */
+import type { EvaluationResult, MagnetResult } from '../../eval/resultTypes';
+import { trimNumber } from '../../eval/quantityText';
+import { BOHR_MAGNETON } from '../../physics/constants';
+import { md, mdTitle } from '../shared/markdown';
+import { valueInUnits } from '../shared/units';
+import type { HoverOptions } from './context';
+import { fieldValueLines, levelsAtFieldSection } from './fieldSection';
+
+/** Force on a moment of one Bohr magneton in this gradient, in newtons. */
+export function bohrForceN(gradientTPerM: number): number {
+  return BOHR_MAGNETON * gradientTPerM;
+}
+
+export function magnetSection(m: MagnetResult, ctx: { result: EvaluationResult | undefined; options: HoverOptions }): string {
+  const lines = [mdTitle(`magnet ${md(m.name)}`)];
+  if (m.field_T !== undefined) lines.push(`field ${fieldValueLines(m.field_T).join('; ')}`);
+  else lines.push('field: not given');
+  if (m.gradient_T_per_m !== undefined) {
+    lines.push(`gradient = ${valueInUnits(m.gradient_T_per_m, 'gradient').join(' = ')}; force on 1 μ_B: ${trimNumber(bohrForceN(m.gradient_T_per_m), 5)} N`);
+  } else lines.push('gradient: not given');
+  if (m.length_m !== undefined) lines.push(`length = ${valueInUnits(m.length_m, 'length').join(' = ')}`);
+  else lines.push('length: not given');
+  const parts = [lines.join('  \n')];
+  if (m.field_T !== undefined) {
+    const tables = levelsAtFieldSection(ctx.result, { kind: 'magnet', name: m.name }, ctx.options);
+    if (tables) parts.push(tables);
+  }
+  return parts.join('\n\n');
+}

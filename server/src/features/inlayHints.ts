@@ -1,0 +1,93 @@
+/**
+ * Inline values after the statements that produce numbers: g_J after a level's term, the
+ * hyperfine splitting after a level with A, the Zeeman scale μ_B·B/h after a field, the force
+ * on one Bohr magneton after a gradient, and the frequency and wavelength after a line.
+ * Only blocks that meet the requested range are looked at.
+ */
+import { type InlayHint, InlayHintKind, type Position, type Range } from 'vscode-languageserver-types';
+import type { Analysis } from '../eval/analyze';
+import { frequencyText, trimNumber } from '../eval/quantityText';
+import type { BlockNode, LevelNode } from '../format/ast';
+import { comparePositions } from '../format/positions';
+import type { SetupModel } from '../model/types';
+import { zeemanScaleHz } from './hover/fieldSection';
+import { lineFrequency } from './hover/lineSection';
+import { bohrForceN } from './hover/magnetSection';
+import { lastStartingAtOrBefore } from './shared/locate';
+import { fieldOfBlock, levelOfNode, lineOfBlock, magnetOfBlock } from './shared/modelLookup';
+import { levelResult } from './shared/results';
+
+function hint(position: Position, label: string, tooltip?: string): InlayHint {
+  return { position, label, kind: InlayHintKind.Parameter, paddingLeft: true, ...(tooltip ? { tooltip } : {}) };
+}
+
+function inRange(p: Position, range: Range): boolean {
+  return comparePositions(range.start, p) <= 0 && comparePositions(p, range.end) <= 0;
+}
+
+function levelHints(analysis: Analysis, block: BlockNode, node: LevelNode, out: InlayHint[]): void {
+  const level = levelOfNode(analysis.model, block, node);
+  if (!level || !level.valid || !node.designation) return;
+  const r = levelResult(analysis.result, level.species.name, level.name);
+  if (!r) return;
+  const g = r.g_J;
+  out.push(hint(node.designation.range.end, `g_J ${trimNumber(g.used, 6)}`, g.measured ? `measured g_J (${g.used_source}); Landé ${trimNumber(g.lande, 7)}` : `Landé g_J, exactly ${g.lande_fraction} with g_s = 2`));
+  const hf = r.hyperfine;
+  if (!hf || hf.intervals.length === 0) return;
+  const a = node.settings.find((s) => s.key.text === 'A');
+  const at = a ? a.range.end : node.designation.range.end;
+  const label = hf.intervals.length === 1 ? `ΔE_hfs ${frequencyText(hf.intervals[0]!.interval_Hz, 6)}` : `ΔE_hfs ${hf.intervals.map((i) => frequencyText(i.interval_Hz, 4)).join(', ')}`;
+  const tip = hf.intervals.map((i) => `F=${i.F_lower} ↔ ${i.F_upper}: ${frequencyText(i.interval_Hz)}`).join('\n');
+  if (a) out.push(hint(at, label, tip));
+  else out[out.length - 1] = { ...out[out.length - 1]!, label: `${out[out.length - 1]!.label as string}, ${label}`, tooltip: tip };
+}
+
+function blockHints(analysis: Analysis, model: SetupModel, block: BlockNode, out: InlayHint[]): void {
+  switch (block.kind) {
+    case 'species':
+      for (const l of block.levels) levelHints(analysis, block, l, out);
+      break;
+    case 'field': {
+      const f = fieldOfBlock(model, block);
+      const s = block.headerSetting;
+      if (f?.tesla && s) out.push(hint(s.range.end, `μ_B·B/h ${frequencyText(zeemanScaleHz(f.tesla.value), 5)}`, 'Zeeman scale: shift of a sublevel with g·m = 1'));
+      break;
+    }
+    case 'magnet': {
+      const m = magnetOfBlock(model, block);
+      if (!m) break;
+      const fieldSetting = block.settings.find((s) => s.key.text === 'field');
+      if (m.fieldT && fieldSetting) out.push(hint(fieldSetting.range.end, `μ_B·B/h ${frequencyText(zeemanScaleHz(m.fieldT.value), 5)}`, 'Zeeman scale: shift of a sublevel with g·m = 1'));
+      const gradSetting = block.settings.find((s) => s.key.text === 'gradient');
+      if (m.gradientTPerM && gradSetting) out.push(hint(gradSetting.range.end, `μ_B·b ${trimNumber(bohrForceN(m.gradientTPerM.value), 4)} N`, 'force on a moment of one Bohr magneton'));
+      break;
+    }
+    case 'line': {
+      const line = lineOfBlock(model, block);
+      if (!line?.lower || !line.upper || !block.link?.to) break;
+      const f = lineFrequency(
+        levelResult(analysis.result, line.lower.species.name, line.lower.name),
+        levelResult(analysis.result, line.upper.species.name, line.upper.name),
+      );
+      if (f) out.push(hint(block.link.to.range.end, `${frequencyText(f.hz, 7)}, λ_vac ${trimNumber(f.vacuumNm, 7)} nm`, 'from the two level energies'));
+      break;
+    }
+    default:
+      break;
+  }
+}
+
+export function inlayHints(analysis: Analysis, range: Range): InlayHint[] {
+  const model = analysis.model;
+  if (!model) return [];
+  const blocks = analysis.doc.blocks;
+  const first = Math.max(0, lastStartingAtOrBefore(blocks, range.start.line, (b) => b.headerRange.start.line));
+  const out: InlayHint[] = [];
+  for (let i = first; i < blocks.length; i++) {
+    const block = blocks[i]!;
+    if (block.headerRange.start.line > range.end.line) break;
+    if (block.range.end.line < range.start.line) continue;
+    blockHints(analysis, model, block, out);
+  }
+  return out.filter((h) => inRange(h.position, range));
+}

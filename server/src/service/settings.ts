@@ -1,0 +1,35 @@
+/**
+ * The user's settings for one document (section `sublevel` of the editor's configuration),
+ * read defensively: anything missing or of the wrong type falls back to the default.
+ * The contributed schema is client/contributes.configuration.json.
+ */
+import { DEFAULT_HOVER_OPTIONS, type HoverOptions } from '../features/hover/context';
+
+export interface EditorSettings {
+  inlayHints: { enabled: boolean };
+  hover: HoverOptions;
+}
+
+export const DEFAULT_SETTINGS: EditorSettings = { inlayHints: { enabled: true }, hover: DEFAULT_HOVER_OPTIONS };
+
+function object(x: unknown): Record<string, unknown> {
+  return typeof x === 'object' && x !== null ? (x as Record<string, unknown>) : {};
+}
+
+function count(x: unknown, fallback: number, max: number): number {
+  return typeof x === 'number' && Number.isInteger(x) && x >= 0 ? Math.min(x, max) : fallback;
+}
+
+/** Settings from the `sublevel` section as the client sends it. */
+export function readSettings(section: unknown): EditorSettings {
+  const s = object(section);
+  const inlay = object(s.inlayHints);
+  const hover = object(s.hover);
+  return {
+    inlayHints: { enabled: typeof inlay.enabled === 'boolean' ? inlay.enabled : DEFAULT_SETTINGS.inlayHints.enabled },
+    hover: {
+      sublevelRows: count(hover.sublevelRows, DEFAULT_HOVER_OPTIONS.sublevelRows, 500),
+      levelTables: count(hover.levelTables, DEFAULT_HOVER_OPTIONS.levelTables, 50),
+    },
+  };
+}

@@ -1,0 +1,254 @@
+import type { CodeAction } from 'vscode-languageserver-types';
+import { describe, expect, it } from 'vitest';
+import { codeActions } from '../../server/src/features/codeActions';
+import { diagnostics } from '../../server/src/features/diagnostics';
+import { applyEdits, editsOf, staged, URI } from './helpers';
+
+interface Case {
+  name: string;
+  text: string;
+  code: string;
+  titles: string[];
+  /** Title of the fix to apply, and the text after it. */
+  apply?: { title: string; result: string };
+}
+
+function fixesFor(text: string, code: string): CodeAction[] {
+  const analysis = staged(text);
+  const diags = diagnostics(analysis, URI).filter((d) => d.code === code);
+  expect(diags.length, `a '${code}' diagnostic in ${JSON.stringify(text)}`).toBeGreaterThan(0);
+  return codeActions(analysis, URI, { range: diags[0]!.range, diagnostics: diags.slice(0, 1), only: ['quickfix'] });
+}
+
+const CASES: Case[] = [
+  {
+    // J runs from |L − S| to L + S (textbook): for ²P, J = 1/2 or 3/2.
+    name: 'impossible J: the allowed J values',
+    text: 'species Na23\n  level upper: 3p 2P°5/2  # comment stays\n',
+    code: 'term-j-out-of-range',
+    titles: ['Change J to 1/2', 'Change J to 3/2'],
+    apply: { title: 'Change J to 3/2', result: 'species Na23\n  level upper: 3p 2P°3/2  # comment stays\n' },
+  },
+  {
+    name: 'J of the wrong kind for the multiplicity',
+    text: 'species Na23\n  level other: 3P3/2\n',
+    code: 'term-j-parity-of-spin',
+    titles: ['Change J to 0', 'Change J to 1', 'Change J to 2'],
+    apply: { title: 'Change J to 2', result: 'species Na23\n  level other: 3P2\n' },
+  },
+  {
+    name: 'a term symbol with no J: add one it allows',
+    text: 'species Demo\n  mass = 40 u\n  level x: 2P\n',
+    code: 'level-needs-j',
+    titles: ['Add J = 1/2', 'Add J = 3/2'],
+    apply: { title: 'Add J = 1/2', result: 'species Demo\n  mass = 40 u\n  level x: 2P1/2\n' },
+  },
+  {
+    name: 'a misspelt level name: did you mean',
+    text: 'species Na23\n  level ground: 3s 2S1/2\n  level upper: 3p 2P°3/2\nline D2: ground -> uper\n',
+    code: 'name-unknown',
+    titles: ["Change to 'upper'"],
+    apply: { title: "Change to 'upper'", result: 'species Na23\n  level ground: 3s 2S1/2\n  level upper: 3p 2P°3/2\nline D2: ground -> upper\n' },
+  },
+  {
+    name: 'a misspelt block word',
+    text: 'magent spare\n',
+    code: 'syntax-unknown-statement',
+    titles: ["Change to 'magnet'"],
+    apply: { title: "Change to 'magnet'", result: 'magnet spare\n' },
+  },
+  {
+    name: 'a misspelt key',
+    text: 'magnet m\n  gradiant = 180 T/m\n',
+    code: 'syntax-unknown-key',
+    titles: ["Change to 'gradient'"],
+    apply: { title: "Change to 'gradient'", result: 'magnet m\n  gradient = 180 T/m\n' },
+  },
+  {
+    name: 'a misspelt unit',
+    text: 'species Na23\n  level g: 3s 2S1/2  A = 885.8 Mhz\n',
+    code: 'unit-unknown',
+    titles: ["Change to 'MHz'"],
+    apply: { title: "Change to 'MHz'", result: 'species Na23\n  level g: 3s 2S1/2  A = 885.8 MHz\n' },
+  },
+  {
+    name: 'a unit of the wrong dimension',
+    text: 'magnet m\n  gradient = 50 T\n',
+    code: 'unit-wrong-dimension',
+    titles: ['Change the unit to T/m', 'Change the unit to G/cm'],
+    apply: { title: 'Change the unit to T/m', result: 'magnet m\n  gradient = 50 T/m\n' },
+  },
+  {
+    name: 'a quadrupole constant that cannot act on J = 1/2, on the level line',
+    text: 'species Na23\n  level ground: 3s 2S1/2  B = 2 MHz          # a note\n',
+    code: 'quadrupole-cannot-act',
+    titles: ['Remove B (it cannot act here)'],
+    apply: { title: 'Remove B (it cannot act here)', result: 'species Na23\n  level ground: 3s 2S1/2          # a note\n' },
+  },
+  {
+    name: 'a quadrupole constant on its own line: the line goes',
+    text: 'species Na23\n  level ground: 3s 2S1/2\n    B = 2 MHz\nfield f = 1 G\n',
+    code: 'quadrupole-cannot-act',
+    titles: ['Remove B (it cannot act here)'],
+    apply: { title: 'Remove B (it cannot act here)', result: 'species Na23\n  level ground: 3s 2S1/2\nfield f = 1 G\n' },
+  },
+  {
+    name: 'an octupole constant that cannot act (I = 3/2 but J = 1/2)',
+    text: 'species Na23\n  level ground: 3s 2S1/2  A = 885 MHz  C = 1 kHz\n',
+    code: 'octupole-cannot-act',
+    titles: ['Remove C (it cannot act here)'],
+    apply: { title: 'Remove C (it cannot act here)', result: 'species Na23\n  level ground: 3s 2S1/2  A = 885 MHz\n' },
+  },
+  {
+    name: 'a hyperfine constant without a nucleus',
+    text: 'species Demo\n  mass = 40 u\n  level g: 2S1/2\n  A = 3 MHz  # no spin\n',
+    code: 'hyperfine-without-nucleus',
+    titles: ['Remove A (it cannot act here)'],
+    apply: { title: 'Remove A (it cannot act here)', result: 'species Demo\n  mass = 40 u\n  level g: 2S1/2\n  # no spin\n' },
+  },
+  {
+    name: 'a colon written for `=`',
+    text: 'magnet m\n  gradient: 180 T/m\n',
+    code: 'syntax-missing-equals',
+    titles: ["Write '=' instead of ':'"],
+    apply: { title: "Write '=' instead of ':'", result: 'magnet m\n  gradient= 180 T/m\n' },
+  },
+  {
+    name: 'a setting without `=`',
+    text: 'magnet m\n  gradient 180 T/m\n',
+    code: 'syntax-missing-equals',
+    titles: ["Add '=' after the key"],
+    apply: { title: "Add '=' after the key", result: 'magnet m\n  gradient = 180 T/m\n' },
+  },
+  {
+    name: 'a field header without `=`',
+    text: 'field bias 3.2 G\n',
+    code: 'syntax-missing-equals',
+    titles: ["Add '=' before the value"],
+    apply: { title: "Add '=' before the value", result: 'field bias = 3.2 G\n' },
+  },
+  {
+    name: 'a level without its colon',
+    text: 'species Na23\n  level ground 3s 2S1/2\n',
+    code: 'syntax-missing-colon',
+    titles: ["Add ':' after the name"],
+    apply: { title: "Add ':' after the name", result: 'species Na23\n  level ground: 3s 2S1/2\n' },
+  },
+  {
+    name: 'a line without its arrow',
+    text: 'species Na23\n  level g: 3s 2S1/2\n  level e: 3p 2P°3/2\nline D2: g e\n',
+    code: 'syntax-missing-arrow',
+    titles: ["Add '->' between the levels"],
+    apply: { title: "Add '->' between the levels", result: 'species Na23\n  level g: 3s 2S1/2\n  level e: 3p 2P°3/2\nline D2: g -> e\n' },
+  },
+  {
+    name: 'a setting with more than it uses',
+    text: 'magnet m\n  length = 8 cm 9 cm   # x\n',
+    code: 'value-extra',
+    titles: ['Remove the unused rest of the value'],
+    apply: { title: 'Remove the unused rest of the value', result: 'magnet m\n  length = 8 cm   # x\n' },
+  },
+  {
+    name: 'a word not allowed for a setting',
+    text: 'settings\n  g_s = exakt\n',
+    code: 'value-not-allowed',
+    titles: ["Replace with 'exact'", "Replace with '2'"],
+    apply: { title: "Replace with 'exact'", result: 'settings\n  g_s = exact\n' },
+  },
+  {
+    name: 'a species by hand that looks like a built-in one',
+    text: 'species Rb78\n',
+    code: 'species-needs-mass',
+    titles: ['Use the built-in species Rb87'],
+    apply: { title: 'Use the built-in species Rb87', result: 'species Rb87\n' },
+  },
+  {
+    name: 'a number without a unit',
+    text: 'magnet m\n  length = 8\n',
+    code: 'unit-missing',
+    titles: ['Add a unit: 8 m', 'Add a unit: 8 cm', 'Add a unit: 8 mm', 'Add a unit: 8 um'],
+    apply: { title: 'Add a unit: 8 cm', result: 'magnet m\n  length = 8 cm\n' },
+  },
+];
+
+describe('quick fixes', () => {
+  for (const c of CASES) {
+    it(c.name, () => {
+      const fixes = fixesFor(c.text, c.code);
+      expect(fixes.map((f) => f.title)).toEqual(c.titles);
+      for (const f of fixes) expect(f.diagnostics?.[0]?.code).toBe(c.code);
+      if (c.apply) {
+        const fix = fixes.find((f) => f.title === c.apply!.title)!;
+        expect(applyEdits(c.text, editsOf(fix.edit))).toBe(c.apply.result);
+      }
+    });
+  }
+
+  it('marks a single fix as preferred', () => {
+    expect(fixesFor('magnet m\n  gradiant = 180 T/m\n', 'syntax-unknown-key')[0]!.isPreferred).toBe(true);
+    expect(fixesFor('species Na23\n  level upper: 3p 2P°5/2\n', 'term-j-out-of-range')[0]!.isPreferred).toBeUndefined();
+  });
+
+  it('uses the analysis data when the client dropped Diagnostic.data', () => {
+    const text = 'magnet m\n  gradiant = 180 T/m\n';
+    const analysis = staged(text);
+    const d = diagnostics(analysis, URI).find((x) => x.code === 'syntax-unknown-key')!;
+    delete d.data;
+    const fixes = codeActions(analysis, URI, { range: d.range, diagnostics: [d] });
+    expect(fixes.map((f) => f.title)).toContain("Change to 'gradient'");
+  });
+
+  it('ignores diagnostics of other tools and stale ones', () => {
+    const analysis = staged('magnet m\n  gradiant = 180 T/m\n');
+    const d = diagnostics(analysis, URI).find((x) => x.code === 'syntax-unknown-key')!;
+    expect(codeActions(analysis, URI, { range: d.range, diagnostics: [{ ...d, source: 'other' }], only: ['quickfix'] })).toEqual([]);
+    const moved = { ...d, range: { start: { line: 0, character: 0 }, end: { line: 0, character: 1 } } };
+    expect(codeActions(analysis, URI, { range: moved.range, diagnostics: [moved], only: ['quickfix'] })).toEqual([]);
+  });
+});
+
+describe('convert-unit refactoring', () => {
+  function conversions(text: string, line: number, character: number): { title: string; result: string }[] {
+    const analysis = staged(text);
+    const at = { line, character };
+    return codeActions(analysis, URI, { range: { start: at, end: at }, diagnostics: [], only: ['refactor'] }).map((a) => ({
+      title: a.title,
+      result: applyEdits(text, editsOf(a.edit)),
+    }));
+  }
+
+  it('rewrites a flux density in other units (1 G = 1e-4 T exactly)', () => {
+    const got = conversions('magnet m\n  field = 0.45 T  # x\n', 1, 12);
+    expect(got.map((g) => g.result.split('\n')[1])).toEqual([
+      '  field = 450 mT  # x',
+      '  field = 450000 uT  # x',
+      '  field = 4500 G  # x',
+      '  field = 4500000 mG  # x',
+    ]);
+    expect(got[2]!.title).toBe('Convert to G: 4500 G');
+  });
+
+  it('keeps every written digit when the factor is not a power of ten', () => {
+    // 1 cm^-1 ↔ 29.9792458 GHz (exact SI c): 401.752043 MHz → 0.0134011… cm^-1, which converts back to 401.752043 MHz.
+    const got = conversions('species Li7\n  level g: 2s 2S1/2  A = 401.752043 MHz\n', 1, 27);
+    const wave = got.find((g) => g.title.startsWith('Convert to cm⁻¹'))!;
+    const written = Number(/A = (\S+) cm\^-1/.exec(wave.result)![1]);
+    expect(written * 29.9792458e9).toBeCloseTo(401.752043e6, 0);
+    expect(got.find((g) => g.title.startsWith('Convert to GHz'))!.result).toContain('A = 0.401752043 GHz');
+  });
+
+  it('converts temperatures with their offset (0 °C = 273.15 K)', () => {
+    const got = conversions('beam b\n  source = oven 720 K\n', 1, 17);
+    expect(got.map((g) => g.result.split('\n')[1])).toEqual(['  source = oven 446.85 degC']);
+  });
+
+  it('keeps a glued unit glued', () => {
+    const got = conversions('beam b\n  drift = 35cm\n', 1, 12);
+    expect(got.map((g) => g.result.split('\n')[1])).toContain('  drift = 0.35m');
+  });
+
+  it('offers nothing for numbers with an uncertainty or without a unit', () => {
+    expect(conversions('magnet m\n  field = 0.35(2) T\n', 1, 12)).toEqual([]);
+    expect(conversions('species X\n  g_I = 0.5\n', 1, 10)).toEqual([]);
+  });
+});

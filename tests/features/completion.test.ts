@@ -1,0 +1,128 @@
+import type { CompletionItem } from 'vscode-languageserver-types';
+import { describe, expect, it } from 'vitest';
+import { completion } from '../../server/src/features/completion';
+import { applyEdits, atCursor } from './helpers';
+
+interface Case {
+  name: string;
+  text: string;
+  has?: string[];
+  hasNot?: string[];
+  /** Exact label list, when the whole list matters. */
+  exactly?: string[];
+}
+
+const CASES: Case[] = [
+  { name: 'block words at the top of a file', text: '|', exactly: ['species', 'field', 'magnet', 'beam', 'line', 'settings'] },
+  { name: 'magnet keys inside a magnet', text: 'magnet m\n  |', has: ['field', 'gradient', 'length', 'species', 'beam'], hasNot: ['A', 'mass'] },
+  { name: 'species keys and `level` in a species', text: 'species Na23\n  |', has: ['mass', 'I', 'g_I', 'mu_I', 'level'], hasNot: ['A'] },
+  { name: 'level keys once a level is above', text: 'species Na23\n  level g: 3s 2S1/2\n  |', has: ['A', 'B', 'C', 'g_J', 'energy', 'level'] },
+  { name: 'beam keys', text: 'beam b\n  so|', has: ['species', 'level', 'source', 'slits', 'magnet', 'drift', 'detector'] },
+  { name: 'built-in species after `species`', text: 'species R|', has: ['Rb87', 'Rb85', 'Na23', 'Cs133'] },
+  { name: 'flux-density units after a field value', text: 'field f = 3.2 |', has: ['T', 'mT', 'G'], hasNot: ['T/m', 'cm', 'MHz'] },
+  { name: 'gradient units after a gradient', text: 'magnet m\n  gradient = 180 |', has: ['T/m', 'G/cm'], hasNot: ['T', 'm'] },
+  { name: 'length units after a length', text: 'magnet m\n  length = 8 c|', has: ['cm', 'mm', 'um', 'm'], hasNot: ['T'] },
+  { name: 'frequency-like units after A', text: 'species Na23\n  level g: 3s 2S1/2  A = 885.8 |', has: ['MHz', 'GHz', 'cm^-1', 'eV'], hasNot: ['T'] },
+  { name: 'temperature units after an oven', text: 'beam b\n  source = oven 720 |', has: ['K', 'degC'], hasNot: ['m/s'] },
+  { name: 'speed units after a jet', text: 'beam b\n  source = jet 1500 |', has: ['m/s', 'km/s'], hasNot: ['K'] },
+  { name: 'source kinds', text: 'beam b\n  source = |', exactly: ['oven', 'jet', 'speed'] },
+  { name: '`spread` after a jet speed', text: 'beam b\n  source = jet 1500 m/s |', exactly: ['spread'] },
+  { name: '`apart` after two slit widths', text: 'beam b\n  slits = 80 um, 50 um |', exactly: ['apart'] },
+  { name: 'g_s choices', text: 'settings\n  g_s = |', exactly: ['exact', '2'] },
+  { name: 'reduced_mass choices', text: 'settings\n  reduced_mass = |', exactly: ['on', 'off'] },
+  {
+    name: 'level names in a line',
+    text: 'species Na23\n  level g: 3s 2S1/2\n  level e: 3p 2P°3/2\nline D2: |',
+    exactly: ['g', 'e'],
+  },
+  {
+    name: 'level names after the arrow stay in the species of the first level',
+    text: 'species Na23\n  level g: 3s 2S1/2\n  level e: 3p 2P°3/2\nspecies K39\n  level k: 4s 2S1/2\nline D2: g -> |',
+    exactly: ['g', 'e'],
+  },
+  {
+    name: 'a level name used by two species is offered qualified',
+    text: 'species Na23\n  level g: 3s 2S1/2\nspecies K39\n  level g: 4s 2S1/2\nline x: |',
+    exactly: ['Na23.g', 'K39.g'],
+  },
+  { name: 'magnets in a beam', text: 'magnet a\nmagnet b\nbeam x\n  magnet = |', exactly: ['a', 'b'] },
+  { name: 'species in a beam', text: 'species Na23\nbeam x\n  species = |', exactly: ['Na23'] },
+  {
+    name: 'levels of the beam species',
+    text: 'species Na23\n  level g: 3s 2S1/2\nspecies K39\n  level k: 4s 2S1/2\nbeam x\n  species = K39\n  level = |',
+    exactly: ['k'],
+  },
+  {
+    name: 'built-in levels of the species after the colon',
+    text: 'species Rb87\n  level g: |',
+    has: ['5s 2S1/2', '5p 2P°1/2', '5p 2P°3/2'],
+  },
+  {
+    // Terms of p² (Pauli): ¹S, ³P, ¹D (textbook, e.g. any atomic physics text on LS coupling);
+    // levels ³P₀,₁,₂, ¹D₂, ¹S₀. Parity of p²: even (no mark).
+    name: 'terms the configuration allows: p²',
+    text: 'species Demo\n  level x: 2p2 |',
+    exactly: ['1S0', '1D2', '3P0', '3P1', '3P2'],
+  },
+  {
+    // One p electron: ²P₁/₂, ²P₃/₂, odd parity.
+    name: 'terms of an odd configuration carry the parity mark',
+    text: 'species Demo\n  level x: 3p |',
+    exactly: ['2P°1/2', '2P°3/2'],
+  },
+  {
+    // Terms of d³ include ²D twice (textbook Pauli table): listed once per J with "occurs 2×".
+    name: 'a partly typed term is replaced',
+    text: 'species Demo\n  level x: 3d3 4F|',
+    has: ['4F3/2', '4F9/2', '2D3/2'],
+  },
+  { name: 'level keys after a complete term', text: 'species Na23\n  level g: 3s 2S1/2 |', exactly: ['A', 'B', 'C', 'g_J', 'energy'] },
+  { name: 'nothing in a comment', text: 'species Na23  # |', exactly: [] },
+  { name: 'nothing for a name the user chooses', text: 'magnet |', exactly: [] },
+];
+
+function labels(items: CompletionItem[]): string[] {
+  return items.map((i) => i.label);
+}
+
+describe('completion', () => {
+  for (const c of CASES) {
+    it(c.name, () => {
+      const { analysis, position } = atCursor(c.text);
+      const got = labels(completion(analysis, position));
+      if (c.exactly) expect(got).toEqual(c.exactly);
+      for (const l of c.has ?? []) expect(got).toContain(l);
+      for (const l of c.hasNot ?? []) expect(got).not.toContain(l);
+    });
+  }
+
+  it("marks the Hund's-rules ground level of the configuration", () => {
+    // Hund's rules, p² less than half full: ³P₀ is the ground level (textbook; e.g. carbon 2p² ³P₀).
+    const { analysis, position } = atCursor('species Demo\n  level x: 2p2 |');
+    const ground = completion(analysis, position).find((i) => i.preselect);
+    expect(ground?.label).toBe('3P0');
+    expect(ground?.detail).toContain("ground level by Hund's rules");
+  });
+
+  it('inserts a setting with its `=` and replaces the word being typed', () => {
+    const { text, analysis, position } = atCursor('magnet m\n  gra|');
+    const item = completion(analysis, position).find((i) => i.label === 'gradient')!;
+    const edit = item.textEdit as { range: import('vscode-languageserver-types').Range; newText: string };
+    expect(applyEdits(text, [edit])).toBe('magnet m\n  gradient = ');
+  });
+
+  it('completes a unit glued to its number without touching the number', () => {
+    const { text, analysis, position } = atCursor('magnet m\n  length = 8c|');
+    const item = completion(analysis, position).find((i) => i.label === 'cm')!;
+    const edit = item.textEdit as { range: import('vscode-languageserver-types').Range; newText: string };
+    expect(applyEdits(text, [edit])).toBe('magnet m\n  length = 8cm');
+  });
+
+  it('gives the g_J fraction of each offered term', () => {
+    // Landé with g_s = 2: ²P₃/₂ → 4/3, ²P₁/₂ → 2/3 (textbook).
+    const { analysis, position } = atCursor('species Demo\n  level x: 3p |');
+    const details = completion(analysis, position).map((i) => i.detail);
+    expect(details[0]).toContain('g_J = 2/3');
+    expect(details[1]).toContain('g_J = 4/3');
+  });
+});

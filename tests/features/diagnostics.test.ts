@@ -1,0 +1,39 @@
+import { readFileSync } from 'fs';
+import { DiagnosticSeverity, DiagnosticTag } from 'vscode-languageserver-types';
+import { describe, expect, it } from 'vitest';
+import { diagnostics } from '../../server/src/features/diagnostics';
+import { staged, URI } from './helpers';
+
+describe('diagnostics', () => {
+  it('carry the stable code, severity, message, range, data and source', () => {
+    const ds = diagnostics(staged(readFileSync('examples/mistakes.sublevel', 'utf8')), URI);
+    expect(ds.map((d) => `${d.range.start.line + 1}:${d.range.start.character + 1} ${String(d.code)}`)).toEqual([
+      '5:31 quadrupole-cannot-act',
+      '6:23 term-j-out-of-range',
+      '7:19 term-j-parity-of-spin',
+      '11:17 unit-wrong-dimension',
+      '14:1 syntax-unknown-statement',
+      '16:20 name-unknown',
+    ]);
+    const [quadrupole, j] = ds;
+    expect(quadrupole!.severity).toBe(DiagnosticSeverity.Warning);
+    expect(quadrupole!.tags).toEqual([DiagnosticTag.Unnecessary]);
+    expect(quadrupole!.data).toEqual({ removeSetting: 'B' });
+    expect(j!.severity).toBe(DiagnosticSeverity.Error);
+    expect(j!.message).toContain('J = 5/2 is impossible');
+    expect(j!.data).toEqual({ suggestions: ['1/2', '3/2'] });
+    for (const d of ds) expect(d.source).toBe('sublevel');
+  });
+
+  it('point related places at the same document', () => {
+    const ds = diagnostics(staged('magnet a\nmagnet a\n'), URI);
+    const dup = ds.find((d) => d.code === 'name-duplicate')!;
+    expect(dup.relatedInformation).toEqual([
+      { location: { uri: URI, range: { start: { line: 0, character: 7 }, end: { line: 0, character: 8 } } }, message: "first magnet 'a' is here" },
+    ]);
+  });
+
+  it('are empty for a clean file', () => {
+    expect(diagnostics(staged(readFileSync('examples/rubidium-bias.sublevel', 'utf8')), URI)).toEqual([]);
+  });
+});

@@ -1,0 +1,154 @@
+import { describe, expect, it } from 'vitest';
+import { hover } from '../../server/src/features/hover';
+import { atCursor, hoverText, plain } from './helpers';
+
+interface Case {
+  name: string;
+  text: string;
+  /** Fragments the plain hover text must contain. */
+  has: string[];
+  hasNot?: string[];
+}
+
+const LI = 'species Li7\n  level ground: 2s 2S1/2\n  level upper:  2p 2P°3/2  A = -3.055 MHz  B = -0.221 MHz\n';
+
+const CASES: Case[] = [
+  {
+    name: 'term symbol: Landé g_J with CODATA g_s, the exact fraction, allowed J, sublevels, parity',
+    // Landé formula (textbook) with g_s = |g_e| = 2.00231930436092 (CODATA 2022), g_L = 1:
+    // 2P3/2: g_J = 2/3 + g_s/3 = 1.3341064; exactly 4/3 with g_s = 2.
+    text: 'species Demo\n  mass = 40 u\n  level p: 3p 2P°3/|2\n',
+    has: ['²P°₃/₂', '3p', 'odd parity', 'g_J = 1.334106', 'exactly 4/3 with g_s = 2', 'allows J = 1/2, 3/2', '4 sublevels (2J+1)'],
+  },
+  {
+    name: 'term with a nucleus counts (2J+1)(2I+1) sublevels',
+    // Li-7 has I = 3/2 (built-in table, IAEA nuclear moments table).
+    text: `species Li7\n  level g: 2s 2S1|/2\n`,
+    has: ['8 sublevels: (2J+1)(2I+1) = 2 × 4 with I = 3/2', 'even parity', 'exactly 2 with g_s = 2'],
+  },
+  {
+    name: 'level name: hyperfine F levels, g_F and the splitting',
+    // Li-7 2s A = 401.752 MHz (Arimondo, Inguscio & Violino 1977) → ΔE(F=1↔2) = 2A = 803.504 MHz.
+    text: `species Li7\n  level gro|und: 2s 2S1/2\n`,
+    has: ['Hyperfine structure', 'A = 401.752 MHz', 'F = 1 ↔ 2: 803.504', '| F | E/h at zero field | g_F |'],
+  },
+  {
+    name: 'sodium ground splitting from the built-in A',
+    // Steck, Sodium D Line Data: ground-state splitting 1.771 626 128 8 GHz = 2A.
+    text: 'species Na23\n  level |g: 3s 2S1/2\n',
+    has: ['F = 1 ↔ 2: 1.771626 GHz'],
+  },
+  {
+    name: 'a nucleus without A: m_J sublevels with (2I+1)-fold degeneracy',
+    text: 'species Demo\n  mass = 40 u\n  I = 1\n  g_I = 0.0001\n  level |x: 3d 2D5/2\n',
+    has: ['no A for this level', '3-fold degenerate'],
+  },
+  {
+    name: 'impossible J: the J values the term allows',
+    text: 'species Na23\n  level upper: 3p 2P°5|/2\n',
+    has: ['not valid yet', '2P (S = 1/2, L = 1) allows J = 1/2, 3/2'],
+  },
+  {
+    name: 'field: other units, Zeeman scale and the sublevel table',
+    // 1 G = 1e-4 T (definition of the gauss). μ_B/h = 13.996 244 171 GHz/T (CODATA 2022) → 5 G: 6.998122 MHz.
+    text: `${LI}field bi|as = 5 G\n`,
+    has: ['field bias', '= 500 µT = 5 G', 'μ_B·B/h = 6.998122 MHz', 'Li7 ground', 'F=2, m_F=+2'],
+  },
+  {
+    name: 'field value: the quantity in other units and the field',
+    text: `${LI}field bias = 5| G\n`,
+    has: ['5 G = 500 µT', 'Zeeman scale'],
+  },
+  {
+    name: 'magnet: field, gradient and length in other units; force on one Bohr magneton',
+    // 180 T/m = 18 000 G/cm (1 G = 1e-4 T, 1 cm = 1e-2 m); μ_B·180 T/m = 1.6693e-21 N (μ_B from CODATA 2022).
+    text: `${LI}magnet sel|ector\n  field = 0.45 T\n  gradient = 180 T/m\n  length = 8 cm\n`,
+    has: ['magnet selector', '450 mT = 4.5 kG', '180 T/m = 18000 G/cm', '1.6693e-21 N', 'length = 0.08 m = 8 cm', 'Li7 upper'],
+  },
+  {
+    name: 'magnet without settings says what is missing',
+    text: 'magnet emp|ty\n',
+    has: ['field: not given', 'gradient: not given', 'length: not given'],
+  },
+  {
+    name: 'line: its levels, ΔJ, frequency and vacuum wavelength from the level energies',
+    // Steck, Sodium D Line Data: D2 at 508.848 716 2 THz, vacuum wavelength 589.158 326 4 nm.
+    text: 'species Na23\n  level g: 3s 2S1/2\n  level e: 3p 2P°3/2\nline D|2: g -> e\n',
+    has: ['line D2 in Na23', 'lower: g — 3s 2S1/2 (J = 1/2, even)', 'upper: e — 3p 2P°3/2 (J = 3/2, odd)', 'ΔJ = +1', 'ν = 508.848716 THz', '589.15833 nm'],
+  },
+  {
+    name: 'a reference in a line hovers the level it names',
+    text: 'species Na23\n  level g: 3s 2S1/2\n  level e: 3p 2P°3/2\nline D2: g -> |e\n',
+    has: ['level e of Na23', '²P°₃/₂'],
+  },
+  {
+    name: 'a reference in a beam hovers the magnet it names',
+    text: 'magnet sel\n  field = 1 T\nbeam b\n  magnet = s|el\n',
+    has: ['magnet sel', 'field = 1 T'],
+  },
+  {
+    name: 'species: built-in data with sources',
+    text: 'species Rb8|7\n',
+    has: ['built-in data (Rb87)', 'I = 3/2', 'g_I = ', 'μ_I = ', 'built-in levels: 5s 2S1/2'],
+  },
+  {
+    name: 'wave number in frequency and energy',
+    // 1 cm^-1 = c·100 m^-1 = 29.979 245 8 GHz (exact SI); h·29.9792458 GHz = 123.984 198 µeV (exact SI h and e).
+    text: 'species Demo\n  mass = 40 u\n  level x: 3s 2S1/2  energy = 1 cm^|-1\n',
+    has: ['29.97925 GHz', '123.9842 µeV'],
+  },
+  {
+    name: 'temperature in kelvin and degrees Celsius',
+    // 0 °C = 273.15 K (SI definition).
+    text: 'beam b\n  source = oven 720 |K\n',
+    has: ['720 K = 446.85 °C'],
+  },
+  {
+    name: 'setting key: what it means',
+    text: 'magnet m\n  gra|dient = 180 T/m\n',
+    has: ['gradient — field gradient across the beam'],
+  },
+  {
+    name: 'block word: what the block is for',
+    text: 'mag|net m\n',
+    has: ['magnet — a state-selecting magnet'],
+  },
+];
+
+describe('hover', () => {
+  for (const c of CASES) {
+    it(c.name, () => {
+      const { analysis, position } = atCursor(c.text);
+      const md = hoverText(hover(analysis, position));
+      const text = plain(md);
+      for (const fragment of c.has) expect(text, `hover text:\n${text}`).toContain(fragment);
+      for (const fragment of c.hasNot ?? []) expect(text).not.toContain(fragment);
+    });
+  }
+
+  it('escapes Markdown in names: no link, emphasis or HTML survives', () => {
+    const { analysis, position } = atCursor('species *x*\n  mass = 40 u\n  level |[a](x)<b>: 2S1/2\n');
+    const md = hoverText(hover(analysis, position));
+    expect(md).toContain('\\[a\\]\\(x\\)\\<b\\>');
+    expect(md).toContain('\\*x\\*');
+    expect(md).not.toMatch(/[^\\]\[a\]/);
+  });
+
+  it('gives nothing on blank space and in comments', () => {
+    for (const t of ['species Li7\n|\n', 'species Li7  # a co|mment\n', '|']) {
+      const { analysis, position } = atCursor(t);
+      expect(hover(analysis, position)).toBeNull();
+    }
+  });
+
+  it('ranges the hover to the word under the cursor', () => {
+    const { analysis, position } = atCursor('field bias = 5| G\n');
+    expect(hover(analysis, position)?.range).toEqual({ start: { line: 0, character: 13 }, end: { line: 0, character: 16 } });
+  });
+
+  it('limits the sublevel table to the configured number of rows', () => {
+    const { analysis, position } = atCursor('species Cs133\n  level g: 6s 2S1/2\nfield f|ield = 1 G\n');
+    const text = plain(hoverText(hover(analysis, position, { sublevelRows: 3, levelTables: 4 })));
+    expect(text).toContain('… and 13 more sublevels');
+  });
+});

@@ -1,0 +1,52 @@
+import { describe, expect, it } from 'vitest';
+import { inlayHints } from '../../server/src/features/inlayHints';
+import { staged } from './helpers';
+
+const TEXT = [
+  'species Rb87',
+  '  level ground: 5s 2S1/2',
+  '  level p: 5p 2P°3/2  A = 84.7185 MHz',
+  'field bias = 1 G',
+  'magnet m',
+  '  field = 0.5 T',
+  '  gradient = 100 T/m',
+  '  length = 5 cm',
+  'line D2: ground -> p',
+  '',
+].join('\n');
+
+const ALL = { start: { line: 0, character: 0 }, end: { line: 100, character: 0 } };
+
+function labels(range = ALL): string[] {
+  return inlayHints(staged(TEXT), range).map((h) => `${h.position.line}:${h.position.character} ${String(h.label)}`);
+}
+
+describe('inlay hints', () => {
+  it('puts the numbers after the statements that produce them', () => {
+    expect(labels()).toEqual([
+      // Steck, Rubidium 87 D Line Data: g_J(5S1/2) = 2.002 331 13; ground splitting 6.834 682 610 904 GHz = 2A
+      // (A = 3.417 341 305 452 145 GHz in the built-in table).
+      '1:24 g_J 2.00233, ΔE_hfs 6.83468 GHz',
+      // Landé with CODATA g_s for 2P3/2 is 1.3341; the built-in measured g_J (Steck) is 1.3362.
+      '2:20 g_J 1.3362',
+      // Steck: 5P3/2 intervals 72.2180, 156.9470 and 266.6500 MHz (from A = 84.7185 MHz and B = 12.4965 MHz).
+      '2:37 ΔE_hfs 72.22 MHz, 156.9 MHz, 266.7 MHz',
+      // μ_B/h = 13.996 244 171 GHz/T (CODATA 2022): 1 G → 1.3996 MHz, 0.5 T → 6.9981 GHz.
+      '3:16 μ_B·B/h 1.3996 MHz',
+      '5:15 μ_B·B/h 6.9981 GHz',
+      // μ_B · 100 T/m = 9.274e-22 N.
+      '6:20 μ_B·b 9.274e-22 N',
+      // Steck: D2 at 384.230 484 468 5 THz, vacuum wavelength 780.241 209 686 nm.
+      '8:20 384.2305 THz, λ_vac 780.2412 nm',
+    ]);
+  });
+
+  it('computes only the requested range', () => {
+    expect(labels({ start: { line: 3, character: 0 }, end: { line: 5, character: 100 } })).toEqual(['3:16 μ_B·B/h 1.3996 MHz', '5:15 μ_B·B/h 6.9981 GHz']);
+    expect(labels({ start: { line: 9, character: 0 }, end: { line: 9, character: 0 } })).toEqual([]);
+  });
+
+  it('gives no hints for an invalid level', () => {
+    expect(inlayHints(staged('species Na23\n  level x: 3p 2P°5/2\n'), ALL)).toEqual([]);
+  });
+});

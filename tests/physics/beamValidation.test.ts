@@ -1,0 +1,94 @@
+import { describe, expect, it } from 'vitest';
+import { BEAM_CAUTIONS, detectorPattern, MAX_HALF_ANGLE_RAD, validateGeometry, type BeamGeometry, type PatternInput } from '../../server/src/physics/beam';
+import { ATOMIC_MASS_UNIT, BOHR_MAGNETON } from '../../server/src/physics/constants';
+
+const geometry: BeamGeometry = {
+  slit1M: 50e-6,
+  slit2M: 50e-6,
+  slitSeparationM: 0.6,
+  magnetLengthM: 0.12,
+  driftM: 0.5,
+  detectorWidthM: 15e-6,
+  gradientTPerM: 150,
+};
+const input: PatternInput = {
+  massKg: 39 * ATOMIC_MASS_UNIT,
+  geometry,
+  source: { kind: 'effusive', temperatureK: 500 },
+  sublevels: [{ label: 'a', momentJT: BOHR_MAGNETON, population: 1 }],
+};
+const codes = (p: PatternInput): string[] => detectorPattern(p).issues.map((i) => i.code);
+
+describe('input checks come back as issues, never exceptions', () => {
+  it('a clean input has no issues', () => {
+    expect(codes(input)).toEqual([]);
+  });
+  it.each([
+    ['slit1M', 0],
+    ['slit2M', -1e-6],
+    ['slitSeparationM', 0],
+    ['magnetLengthM', -0.1],
+    ['driftM', -0.1],
+    ['detectorWidthM', -1e-6],
+    ['slit1M', Number.NaN],
+  ] as const)('%s = %s is an invalid length', (key, value) => {
+    const p = detectorPattern({ ...input, geometry: { ...geometry, [key]: value } });
+    expect(p.issues.map((i) => i.code)).toContain('beam-length-invalid');
+    expect(p.total).toHaveLength(0);
+  });
+  it('a gradient with no magnet length', () => {
+    expect(codes({ ...input, geometry: { ...geometry, magnetLengthM: 0 } })).toEqual(['beam-gradient-without-magnet']);
+  });
+  it('slits too wide for their separation (half-angle bound)', () => {
+    // (w1 + w2)/2d = (0.07 + 0.07)/1.2 = 0.117 rad > 0.1 rad.
+    expect(MAX_HALF_ANGLE_RAD).toBe(0.1);
+    expect(validateGeometry({ ...geometry, slit1M: 0.07, slit2M: 0.07 }).map((i) => i.code)).toEqual(['beam-slits-too-wide']);
+    expect(validateGeometry({ ...geometry, slit1M: 0.05, slit2M: 0.05 })).toEqual([]); // 0.083 rad is allowed
+  });
+  it('temperature, speeds, spread and mass', () => {
+    expect(codes({ ...input, source: { kind: 'effusive', temperatureK: 0 } })).toEqual(['beam-temperature-invalid']);
+    expect(codes({ ...input, source: { kind: 'single', speed: -3 } })).toEqual(['beam-speed-invalid']);
+    expect(codes({ ...input, source: { kind: 'jet', meanSpeed: 0, relativeSpread: 0.1 } })).toEqual(['beam-speed-invalid']);
+    expect(codes({ ...input, source: { kind: 'jet', meanSpeed: 500, relativeSpread: 0 } })).toEqual(['beam-spread-invalid']);
+    expect(codes({ ...input, massKg: 0 })).toEqual(['beam-mass-invalid']);
+  });
+  it('sublevels: none, bad moment, negative or all-zero populations', () => {
+    expect(codes({ ...input, sublevels: [] })).toEqual(['beam-no-sublevels']);
+    expect(codes({ ...input, sublevels: [{ label: 'x', momentJT: Infinity, population: 1 }] })).toEqual(['beam-moment-invalid']);
+    expect(codes({ ...input, sublevels: [{ label: 'x', momentJT: 1e-23, population: -1 }] })).toEqual(['beam-population-invalid']);
+    expect(codes({ ...input, sublevels: [{ label: 'x', momentJT: 1e-23, population: 0 }] })).toEqual(['beam-population-empty']);
+  });
+  it('options out of range', () => {
+    expect(codes({ ...input, bins: 3 })).toEqual(['beam-option-invalid']);
+    expect(codes({ ...input, dipCriterion: 1.5 })).toEqual(['beam-option-invalid']);
+    expect(codes({ ...input, spanM: { startM: 1, endM: 0 } })).toEqual(['beam-option-invalid']);
+  });
+  it('zero gradient and a point detector are notes, not errors', () => {
+    const p = detectorPattern({ ...input, geometry: { ...geometry, gradientTPerM: 0, detectorWidthM: 0 } });
+    expect(p.issues.map((i) => `${i.severity}:${i.code}`)).toEqual(['info:beam-point-detector', 'info:beam-no-gradient']);
+    expect(p.peaks).toHaveLength(1);
+  });
+  it('a detector placed where no atoms arrive is reported; one on the beam receives a fraction', () => {
+    const miss = detectorPattern({ ...input, geometry: { ...geometry, detectorOffsetM: -0.05 } });
+    expect(miss.issues.map((i) => i.code)).toEqual(['beam-misses-detector']);
+    expect(miss.detectorFraction).toBe(0);
+    const hit = detectorPattern({ ...input, geometry: { ...geometry, detectorOffsetM: 0.004 } });
+    expect(hit.issues).toEqual([]);
+    expect(hit.detectorFraction).toBeGreaterThan(0);
+    expect(hit.detectorFraction).toBeLessThan(1);
+  });
+  it('a wide oven tail beyond the grid is reported when it exceeds 5 %', () => {
+    const p = detectorPattern({ ...input, spanM: { startM: -0.001, endM: 0.002 } });
+    expect(p.offGridFraction).toBeGreaterThan(0.05);
+    expect(p.issues.map((i) => i.code)).toEqual(['beam-pattern-off-grid']);
+  });
+});
+
+describe('safety cautions', () => {
+  it('cover magnets, hot ovens, vacuum and alkali metals, and defer to the lab rules', () => {
+    const text = BEAM_CAUTIONS.join(' ').toLowerCase();
+    for (const word of ['pacemaker', 'oven', 'vacuum', 'alkali']) expect(text).toContain(word);
+    for (const c of BEAM_CAUTIONS) expect(c.toLowerCase()).toMatch(/lab/);
+    expect(Object.isFrozen(BEAM_CAUTIONS)).toBe(true);
+  });
+});
