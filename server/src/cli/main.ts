@@ -4,6 +4,7 @@
 import { parseArgs, UsageError } from './args';
 import { runCheck } from './checkCommand';
 import { runEval } from './evalCommand';
+import { runSweep } from './sweepCommand';
 import { type CliIO, processIO } from './io';
 
 const USAGE = `usage: sublevel <command> [options]
@@ -11,6 +12,8 @@ const USAGE = `usage: sublevel <command> [options]
 commands:
   check <files or folders...> [--format text|json]   report problems; exit 1 if any error
   eval <file> [--format text|json]                    every computed quantity
+  sweep <file> --level NAME --to FIELD [--from FIELD] [--points N] [--format csv|json] [--out FILE]
+                                                      exact sublevel energies over a field range
   help                                                this text`;
 
 export function runCli(argv: string[], io: CliIO): number {
@@ -21,6 +24,8 @@ export function runCli(argv: string[], io: CliIO): number {
         return runCheck(args, io);
       case 'eval':
         return runEval(args, io);
+      case 'sweep':
+        return runSweep(args, io);
       case 'help':
       case undefined:
         io.out(USAGE);

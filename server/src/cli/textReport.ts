@@ -66,8 +66,24 @@ function levelReport(l: LevelResult): string[] {
     for (const iv of h.intervals) out.push(`    interval F=${fraction(iv.F_lower)} → F=${fraction(iv.F_upper)}: ${frequencyText(iv.interval_Hz, 12)}`);
   }
   for (const f of l.at_fields) {
-    out.push(`    at ${f.source.kind} ${f.source.name} = ${fieldText(f.field_T)} (weak-field, linear):`);
-    out.push(...table(['sublevel', 'energy'], f.linear.map((s) => [s.label, frequencyText(s.energy_Hz, 9)])).map((x) => '      ' + x));
+    const regime = f.regime ? `; ${f.regime.verdict}${f.regime.x !== null ? `, x = ${trimNumber(f.regime.x, 3)}` : ''}` : '';
+    out.push(`    at ${f.source.kind} ${f.source.name} = ${fieldText(f.field_T)}${regime}:`);
+    if (f.exact.length === 0) {
+      out.push(...table(['sublevel', 'linear energy'], f.linear.map((s) => [s.label, frequencyText(s.energy_Hz, 9)])).map((x) => '      ' + x));
+      continue;
+    }
+    out.push(
+      ...table(
+        ['low-field label', 'high-field label', 'energy (exact)', 'linear formula', 'moment/μ_B'],
+        f.exact.map((s) => [
+          s.low_label,
+          s.high_label,
+          frequencyText(s.energy_Hz, 10),
+          s.linear_energy_Hz !== undefined ? frequencyText(s.linear_energy_Hz, 10) : '—',
+          trimNumber(s.moment_bohr, 6),
+        ]),
+      ).map((x) => '      ' + x),
+    );
   }
   return out;
 }

@@ -42,6 +42,7 @@ function toJson(s: SublevelState): ExactSublevelResult {
   return {
     low_label: s.low.text,
     high_label: s.high.text,
+    ...(s.low.scheme === 'F' ? { F: s.low.twoF / 2 } : { J: s.low.twoJ / 2 }),
     m: s.twoM / 2,
     m_text: signedHalfText(s.twoM),
     energy_Hz: s.energyHz,

@@ -54,7 +54,7 @@ export function evaluateLevel(level: LevelModel, settings: SettingsModel, fields
     ...(hyperfine ? { hyperfine } : {}),
     sublevel_count: (twoJ + 1) * (twoI + 1),
     ...(level.energyHz ? { energy_Hz: sourced(level.energyHz) } : {}),
-    at_fields: fields.map((f) => ({ ...linearAt(f, gJ.used, twoJ, twoI, hyperfine), ...exactAt(level, gJ.used, f, notes) })),
+    at_fields: fields.map((f) => pairLinear({ ...linearAt(f, gJ.used, twoJ, twoI, hyperfine), ...exactAt(level, gJ.used, f, notes) })),
   };
 }
 
@@ -97,6 +97,17 @@ function hyperfineOf(level: LevelModel, gJ: number, twoJ: number, twoI: number):
     levels,
     intervals,
   };
+}
+
+/** Attach to each exact state the linear energy of the state with the same low-field quantum numbers. */
+function pairLinear(p: FieldPointResult): FieldPointResult {
+  const key = (F: number | undefined, J: number | undefined, m: number): string => `${F ?? ''}|${J ?? ''}|${m}`;
+  const linear = new Map(p.linear.map((s) => [key(s.F, s.J, s.m), s.energy_Hz]));
+  for (const s of p.exact) {
+    const e = linear.get(key(s.F, s.J, s.m));
+    if (e !== undefined) s.linear_energy_Hz = e;
+  }
+  return p;
 }
 
 function exactAt(level: LevelModel, gJ: number, f: WorkingField, notes: EvaluationNote[]): Pick<FieldPointResult, 'exact' | 'regime'> {

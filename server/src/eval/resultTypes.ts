@@ -61,6 +61,9 @@ export interface ExactSublevelResult {
   low_label: string;
   /** Adiabatic high-field label, e.g. "|m_J=+1/2, m_I=+1/2>". */
   high_label: string;
+  /** F (or J) of the low-field label. */
+  F?: number;
+  J?: number;
   /** Total magnetic quantum number (the only good one at every field). */
   m: number;
   m_text: string;
@@ -70,6 +73,8 @@ export interface ExactSublevelResult {
   moment_bohr: number;
   /** ∂²(E/h)/∂B², Hz/T². */
   d2E_dB2_Hz_per_T2: number;
+  /** The weak-field (linear) energy of the state with the same low-field label, for comparison. */
+  linear_energy_Hz?: number;
 }
 
 export interface RegimeResultJson {

@@ -1,0 +1,119 @@
+/**
+ * `sublevel sweep <file> --level NAME --from 0 --to 0.1T --points 2001 [--format csv|json] [--out FILE]`:
+ * exact sublevel energies of one level over a field range, for plots and analysis code.
+ */
+import * as fs from 'fs';
+import { analyze } from '../eval/analyze';
+import { hyperfineSpec } from '../eval/levelSpec';
+import { readQuantityArgument } from '../format/quantityArgument';
+import { suggestNames } from '../format/didYouMean';
+import { sweepLevel, type SweepResult } from '../physics/engine';
+import type { LevelModel, SetupModel } from '../model/types';
+import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
+import { readSetupFile } from './files';
+import type { CliIO } from './io';
+
+/** Largest number of points the CLI accepts in one sweep (the engine has its own, larger caps). */
+export const MAX_CLI_POINTS = 200_001;
+
+export function runSweep(args: ParsedArgs, io: CliIO): number {
+  rejectUnknownOptions(args, ['level', 'from', 'to', 'points', 'format', 'out']);
+  if (args.positionals.length !== 1) throw new UsageError('sweep needs exactly one setup file');
+  const file = args.positionals[0]!;
+  const format = stringOption(args, 'format', ['csv', 'json']) ?? 'csv';
+  const fromT = fieldOption(args, 'from', 0);
+  const toT = fieldOption(args, 'to');
+  const points = pointsOption(args);
+  if (fromT === toT) throw new UsageError('--from and --to are the same field; give a range');
+
+  const analysis = analyze(readSetupFile(file));
+  if (!analysis.model || !analysis.result) throw new UsageError(`${file} could not be read`);
+  const level = findLevel(analysis.model, stringOption(args, 'level'));
+  const gJ = analysis.result.levels.find((l) => l.species === level.species.name && l.level === level.name)?.g_J.used;
+  const spec = gJ !== undefined ? hyperfineSpec(level, gJ) : undefined;
+  if (!spec) throw new UsageError(`level '${level.name}' has problems to fix first (run: sublevel check ${file})`);
+
+  const sweep = sweepLevel(spec, fromT, toT, points);
+  const errors = sweep.issues.filter((i) => i.severity === 'error');
+  if (errors.length > 0) {
+    for (const e of errors) io.err(`sublevel: ${e.message}`);
+    return 1;
+  }
+  const text = format === 'csv' ? sweepCsv(sweep) : JSON.stringify(sweepJson(file, level, sweep), null, 1);
+  const out = stringOption(args, 'out');
+  if (out) {
+    fs.writeFileSync(out, text + '\n');
+    io.err(`wrote ${sweep.states.length} sublevels × ${points} fields to ${out}`);
+  } else io.out(text);
+  return 0;
+}
+
+function fieldOption(args: ParsedArgs, name: string, fallback?: number): number {
+  const text = stringOption(args, name);
+  if (text === undefined) {
+    if (fallback !== undefined) return fallback;
+    throw new UsageError(`sweep needs --${name}, e.g. --${name} 0.1T`);
+  }
+  const r = readQuantityArgument(text, 'flux-density', `--${name}`);
+  if (r.si === undefined) throw new UsageError(r.message ?? `--${name}: cannot read '${text}'`);
+  return r.si;
+}
+
+function pointsOption(args: ParsedArgs): number {
+  const text = stringOption(args, 'points') ?? '2001';
+  const n = Number(text);
+  if (!Number.isInteger(n) || n < 2) throw new UsageError(`--points must be a whole number of at least 2, got '${text}'`);
+  if (n > MAX_CLI_POINTS) throw new UsageError(`--points ${n} is more than the ${MAX_CLI_POINTS} a sweep may have`);
+  return n;
+}
+
+function findLevel(model: SetupModel, name: string | undefined): LevelModel {
+  const all = model.species.flatMap((s) => s.levels);
+  const qualified = (l: LevelModel): string => `${l.species.name}.${l.name}`;
+  if (name === undefined) {
+    if (all.length === 1) return all[0]!;
+    throw new UsageError(`sweep needs --level, one of: ${all.map(qualified).join(', ') || '(no levels in the file)'}`);
+  }
+  const matches = all.filter((l) => l.name === name || qualified(l) === name);
+  if (matches.length === 1) return matches[0]!;
+  if (matches.length > 1) throw new UsageError(`level '${name}' is in several species; write one of ${matches.map(qualified).join(', ')}`);
+  const hint = suggestNames(name, all.map((l) => l.name));
+  throw new UsageError(`no level named '${name}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : ''}`);
+}
+
+/** CSV: field_T, then one energy column per state (low-field label → high-field label), Hz. */
+export function sweepCsv(s: SweepResult): string {
+  const quote = (t: string): string => `"${t.replace(/"/g, '""')}"`;
+  const header = ['field_T', ...s.states.map((st) => quote(`E_Hz ${st.low.text} -> ${st.high.text}`))].join(',');
+  const rows: string[] = [header];
+  for (let i = 0; i < s.fieldsT.length; i++) {
+    const cells = [String(s.fieldsT[i])];
+    for (const st of s.states) cells.push(String(st.energyHz[i]));
+    rows.push(cells.join(','));
+  }
+  return rows.join('\n');
+}
+
+function sweepJson(file: string, level: LevelModel, s: SweepResult) {
+  return {
+    format: 'sublevel-sweep',
+    version: 1,
+    file,
+    species: level.species.name,
+    level: level.name,
+    field_T: Array.from(s.fieldsT),
+    states: s.states.map((st) => ({
+      low_label: st.low.text,
+      high_label: st.high.text,
+      m: st.twoM / 2,
+      energy_Hz: Array.from(st.energyHz),
+      moment_J_per_T: Array.from(st.momentJT),
+    })),
+    crossings: s.crossings.map((c) => ({
+      a: s.states[c.stateA]!.low.text,
+      b: s.states[c.stateB]!.low.text,
+      field_T: c.fieldT,
+      energy_Hz: c.energyHz,
+    })),
+  };
+}

@@ -1,0 +1,43 @@
+import { describe, expect, it } from 'vitest';
+import { cli } from './runCli';
+
+const RB = 'examples/rubidium-bias.sublevel';
+
+describe('sublevel sweep', () => {
+  it('writes CSV with one labelled column per state; the zero-field row holds the hyperfine levels', () => {
+    const r = cli('sweep', RB, '--level', 'ground', '--to', '1000 G', '--points', '11');
+    expect(r.code).toBe(0);
+    const rows = r.out.split('\n');
+    expect(rows).toHaveLength(12);
+    const header = rows[0]!.split('","');
+    expect(header).toHaveLength(8);
+    expect(rows[0]).toContain('F=2, m_F=+2 -> m_J=+1/2, m_I=+3/2');
+    const zero = rows[1]!.split(',').map(Number);
+    expect(zero[0]).toBe(0);
+    // 87Rb ground splitting 6 834 682 610.904 Hz (published measurement): F=2 minus F=1 at zero field.
+    expect(Math.max(...zero.slice(1)) - Math.min(...zero.slice(1))).toBeCloseTo(6834682610.904, 2);
+    expect(Number(rows[11]!.split(',')[0])).toBeCloseTo(0.1, 15);
+  });
+
+  it('gives JSON with moments and reads units the way the format does', () => {
+    const r = cli('sweep', RB, '--level', 'Rb87.ground', '--from', '-5 mT', '--to', '50 G', '--points', '3', '--format', 'json');
+    const doc = JSON.parse(r.out);
+    expect(doc.format).toBe('sublevel-sweep');
+    expect(doc.field_T).toEqual([-0.005, 0, 0.005]);
+    expect(doc.states[0].moment_J_per_T).toHaveLength(3);
+  });
+
+  it.each([
+    [['--level', 'grund', '--to', '0.1 T'], /did you mean 'ground'/],
+    [['--level', 'ground', '--to', '0.1'], /--to needs a unit/],
+    [['--level', 'ground', '--to', '0.1 T/m'], /--to needs/],
+    [['--level', 'ground', '--to', '0 T'], /same field/],
+    [['--level', 'ground', '--to', '1 T', '--points', '1'], /at least 2/],
+    [['--level', 'ground', '--to', '1 T', '--points', '1e9'], /more than/],
+    [['--to', '1 T'], /needs --level, one of: Rb87.ground, Rb87.p32/],
+  ])('rejects %j with a usage error', (opts, message) => {
+    const r = cli('sweep', RB, ...opts);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(message);
+  });
+});
