@@ -1,5 +1,6 @@
 // `npm start`: runs the CLI on the bundled demo setups, as a newcomer would.
 import { spawnSync } from 'node:child_process';
+import { mkdirSync } from 'node:fs';
 
 const cli = ['dist/cli.js'];
 function run(title, args, expectedStatus) {
@@ -15,4 +16,10 @@ run('Check the demo setups (clean files exit 0)', ['check', 'examples/lithium-be
 run('Evaluate the lithium beam demo', ['eval', 'examples/lithium-beam.sublevel'], 0);
 run('Evaluate the rubidium bias-field demo', ['eval', 'examples/rubidium-bias.sublevel'], 0);
 run('A file with planted mistakes (exit 1 is expected)', ['check', 'examples/mistakes.sublevel'], 1);
-console.log('\ndemo finished: see README.md for the format and the CLI.');
+mkdirSync('demo-output', { recursive: true });
+run('Sublevel energies of Li7 ground against field (SVG)', ['render', 'examples/lithium-beam.sublevel', '--view', 'levels', '--out', 'demo-output/li7-levels.svg'], 0);
+run('Predicted detector pattern of the lithium beam (SVG)', ['render', 'examples/lithium-beam.sublevel', '--view', 'pattern', '--out', 'demo-output/li7-pattern.svg'], 0);
+run('The same pattern as CSV for analysis code', ['profile', 'examples/lithium-beam.sublevel', '--out', 'demo-output/li7-pattern.csv'], 0);
+run('Rb87 ground sublevels from 0 to 0.2 T as CSV', ['sweep', 'examples/rubidium-bias.sublevel', '--level', 'ground', '--to', '0.2 T', '--points', '2001', '--out', 'demo-output/rb87-ground-sweep.csv'], 0);
+run('Rb87 ground diagram with the probe field marked (SVG)', ['render', 'examples/rubidium-bias.sublevel', '--level', 'ground', '--field', 'probe', '--out', 'demo-output/rb87-levels.svg'], 0);
+console.log('\ndemo finished: diagrams and CSV files are in demo-output/; see README.md for the format and the CLI.');

@@ -2,7 +2,7 @@ import type { CodeAction } from 'vscode-languageserver-types';
 import { describe, expect, it } from 'vitest';
 import { codeActions } from '../../server/src/features/codeActions';
 import { diagnostics } from '../../server/src/features/diagnostics';
-import { applyEdits, editsOf, staged, URI } from './helpers';
+import { applyEdits, editsOf, analysisOf, URI } from './helpers';
 
 interface Case {
   name: string;
@@ -14,7 +14,7 @@ interface Case {
 }
 
 function fixesFor(text: string, code: string): CodeAction[] {
-  const analysis = staged(text);
+  const analysis = analysisOf(text);
   const diags = diagnostics(analysis, URI).filter((d) => d.code === code);
   expect(diags.length, `a '${code}' diagnostic in ${JSON.stringify(text)}`).toBeGreaterThan(0);
   return codeActions(analysis, URI, { range: diags[0]!.range, diagnostics: diags.slice(0, 1), only: ['quickfix'] });
@@ -191,7 +191,7 @@ describe('quick fixes', () => {
 
   it('uses the analysis data when the client dropped Diagnostic.data', () => {
     const text = 'magnet m\n  gradiant = 180 T/m\n';
-    const analysis = staged(text);
+    const analysis = analysisOf(text);
     const d = diagnostics(analysis, URI).find((x) => x.code === 'syntax-unknown-key')!;
     delete d.data;
     const fixes = codeActions(analysis, URI, { range: d.range, diagnostics: [d] });
@@ -199,7 +199,7 @@ describe('quick fixes', () => {
   });
 
   it('ignores diagnostics of other tools and stale ones', () => {
-    const analysis = staged('magnet m\n  gradiant = 180 T/m\n');
+    const analysis = analysisOf('magnet m\n  gradiant = 180 T/m\n');
     const d = diagnostics(analysis, URI).find((x) => x.code === 'syntax-unknown-key')!;
     expect(codeActions(analysis, URI, { range: d.range, diagnostics: [{ ...d, source: 'other' }], only: ['quickfix'] })).toEqual([]);
     const moved = { ...d, range: { start: { line: 0, character: 0 }, end: { line: 0, character: 1 } } };
@@ -209,7 +209,7 @@ describe('quick fixes', () => {
 
 describe('convert-unit refactoring', () => {
   function conversions(text: string, line: number, character: number): { title: string; result: string }[] {
-    const analysis = staged(text);
+    const analysis = analysisOf(text);
     const at = { line, character };
     return codeActions(analysis, URI, { range: { start: at, end: at }, diagnostics: [], only: ['refactor'] }).map((a) => ({
       title: a.title,

@@ -2,11 +2,11 @@ import { readFileSync } from 'fs';
 import { DiagnosticSeverity, DiagnosticTag } from 'vscode-languageserver-types';
 import { describe, expect, it } from 'vitest';
 import { diagnostics } from '../../server/src/features/diagnostics';
-import { staged, URI } from './helpers';
+import { analysisOf, URI } from './helpers';
 
 describe('diagnostics', () => {
   it('carry the stable code, severity, message, range, data and source', () => {
-    const ds = diagnostics(staged(readFileSync('examples/mistakes.sublevel', 'utf8')), URI);
+    const ds = diagnostics(analysisOf(readFileSync('examples/mistakes.sublevel', 'utf8')), URI);
     expect(ds.map((d) => `${d.range.start.line + 1}:${d.range.start.character + 1} ${String(d.code)}`)).toEqual([
       '5:31 quadrupole-cannot-act',
       '6:23 term-j-out-of-range',
@@ -26,7 +26,7 @@ describe('diagnostics', () => {
   });
 
   it('point related places at the same document', () => {
-    const ds = diagnostics(staged('magnet a\nmagnet a\n'), URI);
+    const ds = diagnostics(analysisOf('magnet a\nmagnet a\n'), URI);
     const dup = ds.find((d) => d.code === 'name-duplicate')!;
     expect(dup.relatedInformation).toEqual([
       { location: { uri: URI, range: { start: { line: 0, character: 7 }, end: { line: 0, character: 8 } } }, message: "first magnet 'a' is here" },
@@ -34,6 +34,6 @@ describe('diagnostics', () => {
   });
 
   it('are empty for a clean file', () => {
-    expect(diagnostics(staged(readFileSync('examples/rubidium-bias.sublevel', 'utf8')), URI)).toEqual([]);
+    expect(diagnostics(analysisOf(readFileSync('examples/rubidium-bias.sublevel', 'utf8')), URI)).toEqual([]);
   });
 });

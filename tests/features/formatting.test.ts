@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { formatting } from '../../server/src/features/formatting';
-import { applyEdits, staged } from './helpers';
+import { applyEdits, analysisOf } from './helpers';
 
 function format(text: string): string {
-  return applyEdits(text, formatting(staged(text)));
+  return applyEdits(text, formatting(analysisOf(text)));
 }
 
 const CASES: { name: string; input: string; output: string }[] = [
@@ -53,12 +53,12 @@ describe('formatting', () => {
   for (const c of CASES) {
     it(c.name, () => {
       expect(format(c.input)).toBe(c.output);
-      expect(formatting(staged(c.output))).toEqual([]);
+      expect(formatting(analysisOf(c.output))).toEqual([]);
     });
   }
 
   it('returns one small edit per whitespace run, not a whole-document replacement', () => {
-    const edits = formatting(staged('magnet m\n  field=1 T\n'));
+    const edits = formatting(analysisOf('magnet m\n  field=1 T\n'));
     expect(edits).toEqual([
       { range: { start: { line: 1, character: 7 }, end: { line: 1, character: 7 } }, newText: ' ' },
       { range: { start: { line: 1, character: 8 }, end: { line: 1, character: 8 } }, newText: ' ' },
@@ -67,7 +67,7 @@ describe('formatting', () => {
 
   it('formats only the lines of a range request', () => {
     const text = 'magnet m\n field=1 T\n length=8 cm\n';
-    const edits = formatting(staged(text), { start: { line: 2, character: 0 }, end: { line: 2, character: 3 } });
+    const edits = formatting(analysisOf(text), { start: { line: 2, character: 0 }, end: { line: 2, character: 3 } });
     expect(applyEdits(text, edits)).toBe('magnet m\n field=1 T\n  length = 8 cm\n');
   });
 

@@ -5,11 +5,10 @@
 import type { Hover, Position, TextEdit, WorkspaceEdit } from 'vscode-languageserver-types';
 import { analyze, type Analysis } from '../../server/src/eval/analyze';
 import { computeLineStarts, positionToOffset } from '../../server/src/format/positions';
-import { analyzeStaged } from '../../server/src/service/stagedAnalysis';
 
 export const URI = 'file:///test.sublevel';
 
-/** The text without its `|` marker, the marker's position, and the staged analysis the server would use. */
+/** The text without its `|` marker, the marker's position, and the full analysis of the text. */
 export function atCursor(marked: string): { text: string; position: Position; analysis: Analysis } {
   const at = marked.indexOf('|');
   if (at < 0) throw new Error(`no | cursor marker in ${JSON.stringify(marked)}`);
@@ -17,11 +16,12 @@ export function atCursor(marked: string): { text: string; position: Position; an
   const lineStarts = computeLineStarts(text);
   let line = 0;
   while (line + 1 < lineStarts.length && lineStarts[line + 1]! <= at) line++;
-  return { text, position: { line, character: at - lineStarts[line]! }, analysis: analyzeStaged(text) };
+  return { text, position: { line, character: at - lineStarts[line]! }, analysis: analyze(text) };
 }
 
-export function staged(text: string): Analysis {
-  return analyzeStaged(text);
+/** The full pipeline's analysis (parse, model, evaluation), as features see it once evaluated. */
+export function analysisOf(text: string): Analysis {
+  return analyze(text);
 }
 
 export { analyze };

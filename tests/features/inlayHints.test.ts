@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { inlayHints } from '../../server/src/features/inlayHints';
-import { staged } from './helpers';
+import { analysisOf } from './helpers';
 
 const TEXT = [
   'species Rb87',
@@ -18,7 +18,7 @@ const TEXT = [
 const ALL = { start: { line: 0, character: 0 }, end: { line: 100, character: 0 } };
 
 function labels(range = ALL): string[] {
-  return inlayHints(staged(TEXT), range).map((h) => `${h.position.line}:${h.position.character} ${String(h.label)}`);
+  return inlayHints(analysisOf(TEXT), range).map((h) => `${h.position.line}:${h.position.character} ${String(h.label)}`);
 }
 
 describe('inlay hints', () => {
@@ -47,6 +47,6 @@ describe('inlay hints', () => {
   });
 
   it('gives no hints for an invalid level', () => {
-    expect(inlayHints(staged('species Na23\n  level x: 3p 2P°5/2\n'), ALL)).toEqual([]);
+    expect(inlayHints(analysisOf('species Na23\n  level x: 3p 2P°5/2\n'), ALL)).toEqual([]);
   });
 });

@@ -1,10 +1,15 @@
 import { describe, expect, it } from 'vitest';
+import type { Evaluator } from '../../server/src/service/evaluator';
+import { inProcessEvaluator } from '../../server/src/service/evaluator';
 import { LanguageService } from '../../server/src/service/languageService';
 import { DEFAULT_SETTINGS, readSettings } from '../../server/src/service/settings';
 
 function doc(text: string, version = 1) {
   return { uri: 'file:///a.sublevel', version, getText: () => text };
 }
+
+/** Li-7 2p 2P3/2 at 5 G: the hyperfine structure is only a few MHz wide, so the evaluation notes the intermediate regime. */
+const LI = 'species Li7\n  level upper: 2p 2P°3/2\nfield bias = 5 G\n';
 
 describe('language service', () => {
   it('reuses one analysis per document version', () => {
@@ -19,24 +24,65 @@ describe('language service', () => {
     expect(svc.isAnalysed(doc('', 2))).toBe(false);
   });
 
-  it('logs a failing feature and answers empty instead of throwing', () => {
+  it('gives parse and model diagnostics at once and the evaluation’s after it ran', async () => {
+    const svc = new LanguageService();
+    const d = doc(LI);
+    const first = svc.diagnostics(d);
+    expect(first.complete).toBe(false);
+    expect(first.items.map((i) => i.code)).toEqual([]);
+    await svc.evaluate(d);
+    const second = svc.diagnostics(d);
+    expect(second.complete).toBe(true);
+    expect(second.items.map((i) => i.code)).toEqual(['zeeman-not-linear']);
+  });
+
+  it('carries the evaluation’s diagnostics over to the next version until its own evaluation', async () => {
+    const svc = new LanguageService();
+    await svc.evaluate(doc(LI, 1));
+    const next = svc.diagnostics(doc(`# a new first line\n${LI}`, 2));
+    expect(next.complete).toBe(false);
+    expect(next.items.map((i) => `${i.range.start.line} ${String(i.code)}`)).toEqual(['3 zeeman-not-linear']);
+  });
+
+  it('evaluates only the newest version of a document', async () => {
+    const texts: string[] = [];
+    const counting: Evaluator = { evaluate: (t) => (texts.push(t), inProcessEvaluator().evaluate(t)), dispose: () => undefined };
+    const svc = new LanguageService(() => undefined, counting);
+    const a = svc.evaluate(doc('field f = 1 G\n', 1));
+    svc.analysis(doc('field f = 2 G\n', 2));
+    const b = svc.evaluate(doc('field f = 3 G\n', 3));
+    await Promise.all([a, b]);
+    expect(texts).toEqual(['field f = 1 G\n', 'field f = 3 G\n']);
+  });
+
+  it('answers a hover without the evaluation when it fails, and logs', async () => {
+    const logged: string[] = [];
+    const failing: Evaluator = { evaluate: () => Promise.reject(new Error('worker gone')), dispose: () => undefined };
+    const svc = new LanguageService((m) => logged.push(m), failing);
+    const h = await svc.hover(doc('species Li7\n  level g: 2s 2S1/2\n'), { line: 1, character: 10 });
+    expect(JSON.stringify(h)).toContain('not valid yet'); // no result: the term section says so
+    expect(logged.join('\n')).toContain('worker gone');
+  });
+
+  it('logs a failing feature and answers empty instead of throwing', async () => {
     const logged: string[] = [];
     const svc = new LanguageService((m) => logged.push(m));
     const broken = { uri: 'file:///b.sublevel', version: 1, getText: (): string => { throw new Error('disk on fire'); } };
-    expect(svc.hover(broken, { line: 0, character: 0 })).toBeNull();
+    expect(await svc.hover(broken, { line: 0, character: 0 })).toBeNull();
     expect(svc.completion(broken, { line: 0, character: 0 })).toEqual([]);
     expect(svc.semanticTokens(broken)).toEqual({ data: [] });
-    expect(logged).toHaveLength(3);
+    expect(svc.diagnostics(broken)).toEqual({ items: [], complete: true });
+    expect(logged).toHaveLength(4);
     expect(logged[0]).toContain('hover failed on file:///b.sublevel');
     expect(logged[0]).toContain('disk on fire');
   });
 
-  it('switches inlay hints off by setting', () => {
+  it('switches inlay hints off by setting', async () => {
     const svc = new LanguageService();
     const d = doc('field f = 1 G\n');
     const all = { start: { line: 0, character: 0 }, end: { line: 1, character: 0 } };
-    expect(svc.inlayHints(d, all)).toHaveLength(1);
-    expect(svc.inlayHints(d, all, readSettings({ inlayHints: { enabled: false } }))).toEqual([]);
+    expect(await svc.inlayHints(d, all)).toHaveLength(1);
+    expect(await svc.inlayHints(d, all, readSettings({ inlayHints: { enabled: false } }))).toEqual([]);
   });
 
   it('reads settings defensively', () => {

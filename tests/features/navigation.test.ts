@@ -4,7 +4,7 @@ import { documentSymbols } from '../../server/src/features/documentSymbols';
 import { foldingRanges } from '../../server/src/features/foldingRanges';
 import { references } from '../../server/src/features/references';
 import { prepareRename, rename } from '../../server/src/features/rename';
-import { applyEdits, atCursor, editsOf, staged, URI } from './helpers';
+import { applyEdits, atCursor, editsOf, analysisOf, URI } from './helpers';
 
 const SETUP = [
   'species Na23',
@@ -113,7 +113,7 @@ describe('rename', () => {
 
 describe('outline and folding', () => {
   it('lists blocks with levels and settings as children', () => {
-    const symbols = documentSymbols(staged(SETUP));
+    const symbols = documentSymbols(analysisOf(SETUP));
     expect(symbols.map((s) => `${s.name}:${s.kind}`)).toEqual(['Na23:3', 'K39:3', 'sel:19', 'b:23', 'D2:24']);
     expect(symbols[0]!.children!.map((c) => `${c.name} ${c.detail}`)).toEqual(['ground 3s 2S1/2', 'upper 3p 2P°3/2']);
     expect(symbols[3]!.children!.map((c) => c.name)).toEqual(['species', 'level', 'magnet']);
@@ -125,7 +125,7 @@ describe('outline and folding', () => {
 
   it('folds blocks, multi-line levels and comment runs', () => {
     const text = '# one\n# two\nspecies Na23\n  level g: 3s 2S1/2\n    A = 885 MHz\n# lone\nfield f = 1 G\n';
-    expect(foldingRanges(staged(text))).toEqual([
+    expect(foldingRanges(analysisOf(text))).toEqual([
       { startLine: 0, endLine: 1, kind: 'comment' },
       { startLine: 2, endLine: 4 },
       { startLine: 3, endLine: 4 },

@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { semanticTokens } from '../../server/src/features/semanticTokens';
 import { SEMANTIC_TOKENS_LEGEND } from '../../server/src/features/semanticTokensLegend';
-import { staged } from './helpers';
+import { analysisOf } from './helpers';
 
 /** Decodes the relative encoding into `line:char text type[+modifiers]` strings. */
 function decode(text: string, range?: Parameters<typeof semanticTokens>[1]): string[] {
-  const { data } = semanticTokens(staged(text), range);
+  const { data } = semanticTokens(analysisOf(text), range);
   const lines = text.split('\n');
   const out: string[] = [];
   let line = 0;

@@ -4,6 +4,8 @@
 import { parseArgs, UsageError } from './args';
 import { runCheck } from './checkCommand';
 import { runEval } from './evalCommand';
+import { runProfile } from './profileCommand';
+import { runRender } from './renderCommand';
 import { runSweep } from './sweepCommand';
 import { type CliIO, processIO } from './io';
 
@@ -14,6 +16,9 @@ commands:
   eval <file> [--format text|json]                    every computed quantity
   sweep <file> --level NAME --to FIELD [--from FIELD] [--points N] [--format csv|json] [--out FILE]
                                                       exact sublevel energies over a field range
+  profile <file> [--beam NAME] [--out FILE.csv]       the predicted detector pattern (position, total, each sublevel)
+  render <file> [--view levels|pattern] [--level NAME] [--field NAME] [--beam NAME] [--out FILE.svg]
+                                                      a diagram as SVG
   help                                                this text`;
 
 export function runCli(argv: string[], io: CliIO): number {
@@ -26,6 +31,10 @@ export function runCli(argv: string[], io: CliIO): number {
         return runEval(args, io);
       case 'sweep':
         return runSweep(args, io);
+      case 'profile':
+        return runProfile(args, io);
+      case 'render':
+        return runRender(args, io);
       case 'help':
       case undefined:
         io.out(USAGE);
@@ -45,5 +54,10 @@ export function runCli(argv: string[], io: CliIO): number {
 }
 
 if (require.main === module) {
+  // A closed pipe (`sublevel profile f | head`) is a normal way to stop reading, not an error.
+  process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+    if (e.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+    throw e;
+  });
   process.exitCode = runCli(process.argv.slice(2), processIO);
 }

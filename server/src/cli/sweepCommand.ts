@@ -2,7 +2,7 @@
  * `sublevel sweep <file> --level NAME --from 0 --to 0.1T --points 2001 [--format csv|json] [--out FILE]`:
  * exact sublevel energies of one level over a field range, for plots and analysis code.
  */
-import * as fs from 'fs';
+import { writeOutputFile } from './output';
 import { analyze } from '../eval/analyze';
 import { hyperfineSpec } from '../eval/levelSpec';
 import { readQuantityArgument } from '../format/quantityArgument';
@@ -42,7 +42,7 @@ export function runSweep(args: ParsedArgs, io: CliIO): number {
   const text = format === 'csv' ? sweepCsv(sweep) : JSON.stringify(sweepJson(file, level, sweep), null, 1);
   const out = stringOption(args, 'out');
   if (out) {
-    fs.writeFileSync(out, text + '\n');
+    writeOutputFile(out, text + '\n');
     io.err(`wrote ${sweep.states.length} sublevels × ${points} fields to ${out}`);
   } else io.out(text);
   return 0;

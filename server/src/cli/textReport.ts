@@ -1,7 +1,7 @@
 /** The human-readable report printed by `sublevel eval`. */
 import { ATOMIC_MASS_UNIT } from '../physics/constants';
 import { fieldText, frequencyText, lengthText, trimNumber } from '../eval/quantityText';
-import type { EvaluationResult, LevelResult } from '../eval/resultTypes';
+import type { BeamResult, EvaluationResult, LevelResult } from '../eval/resultTypes';
 import { table } from './table';
 
 export function textReport(file: string, r: EvaluationResult): string[] {
@@ -30,6 +30,7 @@ export function textReport(file: string, r: EvaluationResult): string[] {
       ).map((l) => '  ' + l),
     );
   }
+  for (const b of r.beams) out.push(...beamReport(b));
   if (r.lines.length > 0) {
     out.push('');
     out.push('lines');
@@ -85,6 +86,43 @@ function levelReport(l: LevelResult): string[] {
       ).map((x) => '      ' + x),
     );
   }
+  return out;
+}
+
+function beamReport(b: BeamResult): string[] {
+  const out = ['', `beam ${b.name}: ${b.species ?? '?'} ${b.level ?? '?'} through magnet ${b.magnet ?? '?'}`];
+  if (!b.computed) {
+    out.push('  not computed: the beam lacks a setting it needs (see diagnostics)');
+    return out;
+  }
+  if (b.speeds) {
+    out.push(`  speeds: most probable ${trimNumber(b.speeds.most_probable_m_per_s, 4)} m/s, mean ${trimNumber(b.speeds.mean_m_per_s, 4)} m/s, rms spread ${trimNumber(b.speeds.rms_spread_m_per_s, 3)} m/s`);
+  }
+  out.push(
+    ...table(
+      ['sublevel', 'high-field label', 'moment/μ_B', 'mean deflection', 'own peak at'],
+      b.sublevels.map((s) => [s.label, s.high_label, trimNumber(s.moment_bohr, 6), lengthText(s.mean_deflection_m), lengthText(s.peak_m)]),
+    ).map((x) => '  ' + x),
+  );
+  out.push('  peaks on the detector:');
+  out.push(
+    ...table(
+      ['position', 'FWHM', 'sublevels'],
+      b.peaks.map((p) => [lengthText(p.position_m), p.fwhm_m === null ? 'off grid' : lengthText(p.fwhm_m), p.members.join('; ')]),
+    ).map((x) => '    ' + x),
+  );
+  for (const p of b.pairs) {
+    out.push(`  peaks ${p.left + 1} and ${p.right + 1}: dip ${trimNumber(p.dip_ratio * 100, 3)} % of the smaller peak → ${p.resolved ? 'resolved' : 'NOT resolved'} (criterion ≤ ${b.criterion_dip_ratio * 100} %)`);
+  }
+  if (b.resolving_gradient_T_per_m !== undefined) {
+    out.push(
+      b.resolving_gradient_T_per_m === null
+        ? '  no gradient up to 100× the present one resolves every pair'
+        : `  smallest gradient that resolves every pair: ${trimNumber(Math.abs(b.resolving_gradient_T_per_m), 4)} T/m`,
+    );
+  }
+  out.push('  cautions:');
+  for (const c of b.cautions) out.push(`    - ${c}`);
   return out;
 }
 

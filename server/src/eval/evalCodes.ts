@@ -4,5 +4,7 @@ import type { ProblemSeverity } from '../format/ast';
 export const EVAL_RULES = {
   'zeeman-not-linear': { severity: 'info', summary: 'A level is past the linear (weak-field) regime at a working field.' },
   'zeeman-strong-field': { severity: 'info', summary: 'A level is in the strong-field regime; low-field labels mislead.' },
+  'beam-unresolved': { severity: 'warning', summary: 'Neighbouring peaks of a beam would merge on the detector.' },
+  'beam-geometry': { severity: 'error', summary: 'The beam engine cannot use the geometry or source as written.' },
   'level-too-large': { severity: 'error', summary: 'A level has more sublevels than the engine handles.' },
 } as const satisfies Record<string, { severity: ProblemSeverity; summary: string }>;

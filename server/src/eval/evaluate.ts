@@ -4,7 +4,9 @@
  */
 import type { Problem } from '../format/ast';
 import { CONSTANTS_SOURCE } from '../physics/constants';
-import type { SetupModel } from '../model/types';
+import type { LevelModel, SetupModel } from '../model/types';
+import { beamDiagnostics } from './beamDiagnostics';
+import { evaluateBeam } from './beamEvaluation';
 import { EVAL_RULES } from './evalCodes';
 import { evaluateLevel, type EvaluationNote, type WorkingField } from './levelEvaluation';
 import {
@@ -40,7 +42,15 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
       if (r) levels.push(r);
     }
   }
-  const problems = sortProblems([...earlier, ...notes.map(noteToProblem)]);
+  const gJByLevel = new Map(levels.map((l) => [`${l.species}.${l.level}`, l.g_J.used]));
+  const gJOf = (l: LevelModel): number | undefined => gJByLevel.get(`${l.species.name}.${l.name}`);
+  const beamProblems: Problem[] = [];
+  const beams = model.beams.map((b) => {
+    const e = evaluateBeam(b, gJOf);
+    beamProblems.push(...beamDiagnostics(b, e));
+    return e.result;
+  });
+  const problems = sortProblems([...earlier, ...notes.map(noteToProblem), ...beamProblems]);
   const result: EvaluationResult = {
     format: EVALUATION_FORMAT,
     version: EVALUATION_VERSION,
@@ -67,6 +77,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
       ...(m.gradientTPerM ? { gradient_T_per_m: m.gradientTPerM.value } : {}),
       ...(m.lengthM ? { length_m: m.lengthM.value } : {}),
     })),
+    beams,
     lines: model.lines.map((l) => ({
       name: l.name,
       ...(l.lower ? { species: l.lower.species.name, lower: l.lower.name } : {}),

@@ -134,6 +134,42 @@ export interface MagnetResult {
   length_m?: number;
 }
 
+export interface BeamSublevelResult {
+  /** Low-field label of the state at the magnet's field. */
+  label: string;
+  high_label: string;
+  /** μ = −∂E/∂B at the magnet's field (exact), J/T. */
+  moment_J_per_T: number;
+  moment_bohr: number;
+  /** Population, normalised over the sublevels. */
+  population: number;
+  /** Flux-averaged deflection at the detector, m (positive along +z for a positive moment and gradient). */
+  mean_deflection_m: number;
+  /** Maximum of this sublevel's own profile, m. */
+  peak_m: number;
+}
+
+export interface BeamResult {
+  name: string;
+  species?: string;
+  level?: string;
+  magnet?: string;
+  /** False when the beam lacks something it needs; the diagnostics say what. */
+  computed: boolean;
+  speeds?: { mean_m_per_s: number; most_probable_m_per_s: number; rms_spread_m_per_s: number; mean_inverse_square_s2_per_m2: number };
+  sublevels: BeamSublevelResult[];
+  peaks: { position_m: number; fwhm_m: number | null; height_per_m: number; members: string[] }[];
+  /** Neighbouring peaks: resolved when the minimum between them is at most `criterion_dip_ratio` of the smaller peak. */
+  pairs: { left: number; right: number; dip_ratio: number; resolved: boolean }[];
+  criterion_dip_ratio: number;
+  all_resolved?: boolean;
+  /** Smallest gradient that resolves every pair (null: none up to 100× the file's gradient); only when unresolved. */
+  resolving_gradient_T_per_m?: number | null;
+  /** Flux fraction that falls outside the computed pattern (slow tail). */
+  off_grid_fraction?: number;
+  cautions: string[];
+}
+
 export interface LineResult {
   name: string;
   species?: string;
@@ -162,6 +198,7 @@ export interface EvaluationResult {
   levels: LevelResult[];
   fields: { name: string; field_T?: number }[];
   magnets: MagnetResult[];
+  beams: BeamResult[];
   lines: LineResult[];
   diagnostics: DiagnosticResult[];
 }

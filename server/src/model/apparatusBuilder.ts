@@ -120,7 +120,7 @@ export function buildBeam(
       }
     }
   }
-  const needed = ['level', 'source', 'magnet', 'drift'].filter((k) => !node.settings.some((s) => s.key.text === k));
+  const needed = ['level', 'source', 'slits', 'magnet', 'drift'].filter((k) => !node.settings.some((s) => s.key.text === k));
   if (needed.length > 0) {
     problems.add('beam-incomplete', `beam '${name}' has no ${needed.join(', ')}; the detector pattern needs ${needed.length > 1 ? 'them' : 'it'}`, beam.nameRange, {
       data: { missing: needed },

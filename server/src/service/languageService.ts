@@ -1,6 +1,7 @@
 /**
- * The language service: one cached analysis per document version and every editor feature
- * as a call that never throws (a failure is logged and gives the feature's empty answer).
+ * The language service: per document version, a fast analysis (parse and model) that every
+ * keystroke pays for, and an evaluation that runs apart (see documentStore.ts). Every editor
+ * feature is a call that never throws: a failure is logged and gives the feature's empty answer.
  * Knows nothing of the protocol connection; server.ts wires it up.
  */
 import type {
@@ -22,7 +23,7 @@ import type { Analysis } from '../eval/analyze';
 import { codeActions, type CodeActionRequest } from '../features/codeActions';
 import { completion } from '../features/completion';
 import { definition } from '../features/definition';
-import { diagnostics } from '../features/diagnostics';
+import { toDiagnostic } from '../features/diagnostics';
 import { documentSymbols } from '../features/documentSymbols';
 import { foldingRanges } from '../features/foldingRanges';
 import { formatting } from '../features/formatting';
@@ -31,63 +32,93 @@ import { inlayHints } from '../features/inlayHints';
 import { references } from '../features/references';
 import { prepareRename, rename, type RenameRefusal } from '../features/rename';
 import { semanticTokens } from '../features/semanticTokens';
-import { AnalysisCache } from './documentCache';
+import { DocumentStore, type DocumentSnapshot } from './documentStore';
+import { type Evaluator, inProcessEvaluator } from './evaluator';
 import { DEFAULT_SETTINGS, type EditorSettings } from './settings';
 
-/** What the service needs of a document: a TextDocument fits. */
-export interface DocumentSnapshot {
-  readonly uri: string;
-  readonly version: number;
-  getText(): string;
-}
+export type { DocumentSnapshot } from './documentStore';
 
 export type Log = (message: string) => void;
 
-export class LanguageService {
-  private readonly cache: AnalysisCache;
+/** How long a hover or inlay-hint request waits for the evaluation before answering without it. */
+export const EVALUATION_WAIT_MS = 2000;
 
-  constructor(private readonly log: Log = () => undefined) {
-    this.cache = new AnalysisCache(log);
+function describe(e: unknown): string {
+  return e instanceof Error ? (e.stack ?? e.message) : String(e);
+}
+
+export class LanguageService {
+  private readonly store: DocumentStore;
+
+  constructor(
+    private readonly log: Log = () => undefined,
+    private readonly evaluator: Evaluator = inProcessEvaluator(),
+  ) {
+    this.store = new DocumentStore(evaluator, log);
   }
 
   private guard<T>(feature: string, doc: DocumentSnapshot, empty: T, run: (a: Analysis) => T): T {
     try {
-      return run(this.analysis(doc));
+      return run(this.store.analysis(doc));
     } catch (e) {
-      this.log(`sublevel: ${feature} failed on ${doc.uri} (version ${doc.version}): ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
+      this.log(`sublevel: ${feature} failed on ${doc.uri} (version ${doc.version}): ${describe(e)}`);
       return empty;
     }
   }
 
+  private async guardEvaluated<T>(feature: string, doc: DocumentSnapshot, empty: T, run: (a: Analysis) => T): Promise<T> {
+    try {
+      return run(await this.store.evaluatedWithin(doc, EVALUATION_WAIT_MS));
+    } catch (e) {
+      this.log(`sublevel: ${feature} failed on ${doc.uri} (version ${doc.version}): ${describe(e)}`);
+      return empty;
+    }
+  }
+
+  /** Parse and model of this version (with the evaluation once it has run). */
   analysis(doc: DocumentSnapshot): Analysis {
-    return this.cache.get(doc.uri, doc.version, doc.getText());
+    return this.store.analysis(doc);
   }
 
   /** True when this version is analysed already (a request for it will not parse). */
   isAnalysed(doc: DocumentSnapshot): boolean {
-    return this.cache.peek(doc.uri, doc.version) !== undefined;
+    return this.store.has(doc);
   }
 
-  /** Computes the evaluation ahead of the first hover or inlay-hint request. */
-  warm(doc: DocumentSnapshot): void {
-    this.guard('evaluation', doc, undefined, (a) => void a.result);
+  /** Starts (or joins) the evaluation of this version; resolves when it is in. Never rejects. */
+  evaluate(doc: DocumentSnapshot): Promise<Analysis> {
+    return this.store.evaluate(doc);
   }
 
   forget(uri: string): void {
-    this.cache.drop(uri);
+    this.store.forget(uri);
   }
 
-  diagnostics(doc: DocumentSnapshot): Diagnostic[] {
-    return this.guard('diagnostics', doc, [], (a) => diagnostics(a, doc.uri));
+  dispose(): void {
+    this.evaluator.dispose();
   }
 
-  hover(doc: DocumentSnapshot, pos: Position, settings: EditorSettings = DEFAULT_SETTINGS): Hover | null {
-    return this.guard('hover', doc, null, (a) => hover(a, pos, settings.hover));
+  /**
+   * Diagnostics to show now. `complete` is false while the evaluation of this version has not
+   * run: the items are then the parser's and model's, with the last evaluation's carried over.
+   */
+  diagnostics(doc: DocumentSnapshot): { items: Diagnostic[]; complete: boolean } {
+    try {
+      const { problems, complete } = this.store.problems(doc);
+      return { items: problems.map((p) => toDiagnostic(p, doc.uri)), complete };
+    } catch (e) {
+      this.log(`sublevel: diagnostics failed on ${doc.uri} (version ${doc.version}): ${describe(e)}`);
+      return { items: [], complete: true };
+    }
   }
 
-  inlayHints(doc: DocumentSnapshot, range: Range, settings: EditorSettings = DEFAULT_SETTINGS): InlayHint[] {
-    if (!settings.inlayHints.enabled) return [];
-    return this.guard('inlay hints', doc, [], (a) => inlayHints(a, range));
+  hover(doc: DocumentSnapshot, pos: Position, settings: EditorSettings = DEFAULT_SETTINGS): Promise<Hover | null> {
+    return this.guardEvaluated('hover', doc, null, (a) => hover(a, pos, settings.hover));
+  }
+
+  inlayHints(doc: DocumentSnapshot, range: Range, settings: EditorSettings = DEFAULT_SETTINGS): Promise<InlayHint[]> {
+    if (!settings.inlayHints.enabled) return Promise.resolve([]);
+    return this.guardEvaluated('inlay hints', doc, [], (a) => inlayHints(a, range));
   }
 
   codeActions(doc: DocumentSnapshot, request: CodeActionRequest): CodeAction[] {

@@ -1,0 +1,42 @@
+/** Picking a level, field or beam of an analysed file by name for the CLI, with did-you-mean. */
+import { suggestNames } from '../format/didYouMean';
+import type { Analysis } from '../eval/analyze';
+import { workingFields } from '../eval/evaluate';
+import type { WorkingField } from '../eval/levelEvaluation';
+import type { BeamModel, LevelModel, SetupModel } from '../model/types';
+import { UsageError } from './args';
+
+export function gJLookup(a: Analysis): (l: LevelModel) => number | undefined {
+  const byName = new Map((a.result?.levels ?? []).map((l) => [`${l.species}.${l.level}`, l.g_J.used]));
+  return (l) => byName.get(`${l.species.name}.${l.name}`);
+}
+
+function pick<T>(kind: string, items: T[], nameOf: (t: T) => string[], wanted: string | undefined, fallback?: T): T {
+  if (wanted === undefined) {
+    if (fallback !== undefined) return fallback;
+    if (items.length === 1) return items[0]!;
+    const all = items.map((t) => nameOf(t)[0]!).join(', ');
+    throw new UsageError(items.length === 0 ? `the file has no ${kind}` : `say which ${kind} with --${kind}: ${all}`);
+  }
+  const matches = items.filter((t) => nameOf(t).includes(wanted));
+  if (matches.length === 1) return matches[0]!;
+  if (matches.length > 1) throw new UsageError(`${kind} '${wanted}' is ambiguous; write one of ${matches.map((m) => nameOf(m)[0]).join(', ')}`);
+  const hint = suggestNames(wanted, items.flatMap(nameOf));
+  throw new UsageError(`no ${kind} named '${wanted}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : ''}`);
+}
+
+export function selectLevel(model: SetupModel, wanted: string | undefined, fallback?: LevelModel): LevelModel {
+  const all = model.species.flatMap((s) => s.levels);
+  return pick('level', all, (l) => [`${l.species.name}.${l.name}`, l.name], wanted, fallback);
+}
+
+export function selectBeam(model: SetupModel, wanted: string | undefined): BeamModel {
+  return pick('beam', model.beams, (b) => [b.name], wanted);
+}
+
+/** A named field or magnet of the file, or the first working field when none is named. */
+export function selectField(model: SetupModel, wanted: string | undefined): WorkingField | undefined {
+  const fields = workingFields(model);
+  if (wanted === undefined) return fields[0];
+  return pick('field', fields, (f) => [f.source.name], wanted);
+}

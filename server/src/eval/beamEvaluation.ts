@@ -1,0 +1,71 @@
+/**
+ * Beam results: deflection of every sublevel, the detector pattern's peaks, a resolvability
+ * verdict per neighbouring pair, and — when peaks merge — the smallest gradient that separates them.
+ */
+import { BEAM_CAUTIONS, DEFAULT_DIP_CRITERION, detectorPattern, smallestResolvingGradient, type DetectorPattern } from '../physics/beam';
+import { BOHR_MAGNETON } from '../physics/constants';
+import type { BeamModel, LevelModel } from '../model/types';
+import { beamInputs } from './beamInput';
+import type { BeamResult } from './resultTypes';
+
+/** The inverse solver looks for a resolving gradient up to this many times the file's gradient. */
+const GRADIENT_SEARCH_FACTOR = 100;
+
+export interface BeamEvaluation {
+  result: BeamResult;
+  pattern?: DetectorPattern;
+  /** Problems the beam engine reported, in plain words. */
+  issues: { severity: 'error' | 'warning' | 'info'; code: string; message: string }[];
+}
+
+export function evaluateBeam(beam: BeamModel, gJOf: (l: LevelModel) => number | undefined): BeamEvaluation {
+  const base: BeamResult = {
+    name: beam.name,
+    ...(beam.species ? { species: beam.species.name } : {}),
+    ...(beam.level ? { level: beam.level.name } : {}),
+    ...(beam.magnet ? { magnet: beam.magnet.name } : {}),
+    computed: false,
+    criterion_dip_ratio: DEFAULT_DIP_CRITERION,
+    sublevels: [],
+    peaks: [],
+    pairs: [],
+    cautions: [...BEAM_CAUTIONS],
+  };
+  const inputs = beamInputs(beam, gJOf);
+  if (!inputs) return { result: base, issues: [] };
+  const pattern = detectorPattern(inputs.input);
+  const issues = pattern.issues.map((i) => ({ ...i }));
+  if (issues.some((i) => i.severity === 'error')) return { result: base, issues };
+
+  const result: BeamResult = {
+    ...base,
+    computed: true,
+    speeds: pattern.speed
+      ? {
+          mean_m_per_s: pattern.speed.meanSpeed,
+          most_probable_m_per_s: pattern.speed.mostProbableSpeed,
+          rms_spread_m_per_s: pattern.speed.rmsSpread,
+          mean_inverse_square_s2_per_m2: pattern.speed.meanInverseSquare,
+        }
+      : undefined,
+    sublevels: pattern.sublevels.map((s, i) => ({
+      label: s.label,
+      high_label: inputs.highLabels[i] ?? '',
+      moment_J_per_T: inputs.input.sublevels[i]!.momentJT,
+      moment_bohr: inputs.input.sublevels[i]!.momentJT / BOHR_MAGNETON,
+      population: s.weight,
+      mean_deflection_m: s.meanDeflectionM,
+      peak_m: s.peakM,
+    })),
+    peaks: pattern.peaks.map((p) => ({ position_m: p.positionM, fwhm_m: p.fwhmM, height_per_m: p.height, members: p.members })),
+    pairs: pattern.pairs.map((p) => ({ left: p.left, right: p.right, dip_ratio: p.dipRatio, resolved: p.resolved })),
+    all_resolved: pattern.allResolved,
+    off_grid_fraction: pattern.offGridFraction,
+  };
+  if (!pattern.allResolved && pattern.peaks.length > 1) {
+    const g = inputs.input.geometry.gradientTPerM;
+    const search = smallestResolvingGradient(inputs.input, { upperBound: Math.abs(g) * GRADIENT_SEARCH_FACTOR });
+    result.resolving_gradient_T_per_m = search.value ?? null;
+  }
+  return { result, pattern, issues };
+}

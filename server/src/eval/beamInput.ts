@@ -1,0 +1,52 @@
+/**
+ * From a beam in the model to the beam engine's input: geometry in SI, the speed law, and each
+ * sublevel's exact magnetic moment at the magnet's field.
+ */
+import type { BeamGeometry, PatternInput, SpeedDistribution } from '../physics/beam';
+import { solveLevel } from '../physics/engine';
+import type { BeamModel, LevelModel } from '../model/types';
+import { hyperfineSpec } from './levelSpec';
+
+export interface BeamInputs {
+  input: PatternInput;
+  /** High-field label of each sublevel, same order as input.sublevels. */
+  highLabels: string[];
+}
+
+/** Undefined when the beam lacks something it needs (the model has reported what). */
+export function beamInputs(beam: BeamModel, gJOf: (l: LevelModel) => number | undefined): BeamInputs | undefined {
+  const { level, magnet, source, slits, driftM } = beam;
+  const massKg = beam.species?.massKg?.value;
+  if (!level || !magnet || !source || !slits || !driftM || massKg === undefined) return undefined;
+  if (!magnet.fieldT || !magnet.gradientTPerM || !magnet.lengthM) return undefined;
+  const gJ = gJOf(level);
+  const spec = gJ !== undefined ? hyperfineSpec(level, gJ) : undefined;
+  if (!spec) return undefined;
+  const solved = solveLevel(spec, magnet.fieldT.value);
+  if (solved.states.length === 0) return undefined;
+  const geometry: BeamGeometry = {
+    slit1M: slits.value.firstM,
+    slit2M: slits.value.secondM,
+    slitSeparationM: slits.value.separationM,
+    magnetLengthM: magnet.lengthM.value,
+    driftM: driftM.value,
+    detectorWidthM: beam.detectorM?.value ?? 0,
+    gradientTPerM: magnet.gradientTPerM.value,
+  };
+  const src = source.value;
+  const speed: SpeedDistribution =
+    src.kind === 'oven'
+      ? { kind: 'effusive', temperatureK: src.temperatureK }
+      : src.kind === 'jet'
+        ? { kind: 'jet', meanSpeed: src.speedMPerS, relativeSpread: src.spreadFraction }
+        : { kind: 'single', speed: src.speedMPerS };
+  return {
+    input: {
+      massKg,
+      geometry,
+      source: speed,
+      sublevels: solved.states.map((s) => ({ label: s.low.text, momentJT: s.momentJT, population: 1 })),
+    },
+    highLabels: solved.states.map((s) => s.high.text),
+  };
+}

@@ -1,0 +1,151 @@
+/**
+ * One state per open document: the fast analysis of its current version, the evaluation of
+ * that version once it has run (results and the evaluation's own problems merged in), and
+ * meanwhile the previous evaluation's problems carried over. Evaluations of one document run
+ * one after another and only for its newest version.
+ */
+import type { Analysis } from '../eval/analyze';
+import { sortProblems } from '../eval/analyze';
+import type { Problem } from '../format/ast';
+import { carryOver, splitLines } from './carryOver';
+import type { Evaluator } from './evaluator';
+import { analyzeFast } from './fastAnalysis';
+
+export interface DocumentSnapshot {
+  readonly uri: string;
+  readonly version: number;
+  getText(): string;
+}
+
+interface VersionState {
+  version: number;
+  text: string;
+  lines: string[];
+  /** Parse and model; `result` and the evaluation's problems are merged in when it arrives. */
+  analysis: Analysis;
+  evaluated: boolean;
+  /** The previous version's evaluation problems, moved onto this version's lines. */
+  carried: Problem[];
+  /** Which evaluation `carried` comes from. */
+  carriedFrom?: DocumentEntry['lastEvaluated'];
+  evaluation?: Promise<Analysis>;
+}
+
+interface DocumentEntry {
+  current: VersionState;
+  /** The last version whose evaluation arrived: its lines and the problems only the evaluation found. */
+  lastEvaluated?: { lines: string[]; problems: Problem[] };
+  /** The evaluation running for this document, if any (evaluations of one document do not overlap). */
+  running?: Promise<unknown>;
+}
+
+function key(p: Problem): string {
+  const r = p.range;
+  return `${p.code}|${r.start.line}:${r.start.character}-${r.end.line}:${r.end.character}|${p.message}`;
+}
+
+export class DocumentStore {
+  private readonly docs = new Map<string, DocumentEntry>();
+
+  constructor(
+    private readonly evaluator: Evaluator,
+    private readonly log: (message: string) => void,
+  ) {}
+
+  private state(doc: DocumentSnapshot): VersionState {
+    const entry = this.docs.get(doc.uri);
+    if (entry && entry.current.version === doc.version) return entry.current;
+    const text = doc.getText();
+    const lines = splitLines(text);
+    const last = entry?.lastEvaluated;
+    const state: VersionState = {
+      version: doc.version,
+      text,
+      lines,
+      analysis: analyzeFast(text),
+      evaluated: false,
+      carried: last ? carryOver(last.lines, lines, last.problems) : [],
+      ...(last ? { carriedFrom: last } : {}),
+    };
+    if (entry) entry.current = state;
+    else this.docs.set(doc.uri, { current: state });
+    return state;
+  }
+
+  /** Parse and model of this version (with the evaluation's result once it has run). */
+  analysis(doc: DocumentSnapshot): Analysis {
+    return this.state(doc).analysis;
+  }
+
+  has(doc: DocumentSnapshot): boolean {
+    return this.docs.get(doc.uri)?.current.version === doc.version;
+  }
+
+  isEvaluated(doc: DocumentSnapshot): boolean {
+    const entry = this.docs.get(doc.uri);
+    return entry?.current.version === doc.version && entry.current.evaluated;
+  }
+
+  /** The problems to show now: all of them once evaluated, otherwise parse and model plus the carried-over ones. */
+  problems(doc: DocumentSnapshot): { problems: Problem[]; complete: boolean } {
+    const s = this.state(doc);
+    if (s.evaluated) return { problems: s.analysis.problems, complete: true };
+    const last = this.docs.get(doc.uri)?.lastEvaluated;
+    if (last && last !== s.carriedFrom) {
+      s.carried = carryOver(last.lines, s.lines, last.problems);
+      s.carriedFrom = last;
+    }
+    return { problems: s.carried.length > 0 ? sortProblems([...s.analysis.problems, ...s.carried]) : s.analysis.problems, complete: false };
+  }
+
+  /** The analysis with its evaluation, starting the evaluation if needed. Never rejects. */
+  evaluate(doc: DocumentSnapshot): Promise<Analysis> {
+    const s = this.state(doc);
+    if (s.evaluation) return s.evaluation;
+    const entry = this.docs.get(doc.uri)!;
+    const previous = entry.running ?? Promise.resolve();
+    const run = previous.then(async () => {
+      // A newer version came while waiting: this one is not worth evaluating.
+      if (entry.current !== s) return s.analysis;
+      try {
+        const outcome = await this.evaluator.evaluate(s.text);
+        this.attach(entry, s, outcome.result, outcome.problems);
+      } catch (e) {
+        this.log(`sublevel: evaluation failed for ${doc.uri} (version ${s.version}): ${e instanceof Error ? e.message : String(e)}`);
+        s.evaluated = true; // do not retry this version: parse and model problems stand
+      }
+      return s.analysis;
+    });
+    entry.running = run;
+    s.evaluation = run;
+    return run;
+  }
+
+  private attach(entry: DocumentEntry, s: VersionState, result: Analysis['result'], problems: Problem[]): void {
+    const fast = new Set(s.analysis.problems.map(key));
+    const evaluationOnly = problems.filter((p) => !fast.has(key(p)));
+    s.analysis.result = result;
+    s.analysis.problems = problems;
+    s.evaluated = true;
+    entry.lastEvaluated = { lines: s.lines, problems: evaluationOnly };
+  }
+
+  /** The evaluated analysis, or the fast one if the evaluation does not arrive within `waitMs`. */
+  async evaluatedWithin(doc: DocumentSnapshot, waitMs: number): Promise<Analysis> {
+    const s = this.state(doc);
+    if (s.evaluated) return s.analysis;
+    let timer: NodeJS.Timeout | undefined;
+    const late = new Promise<Analysis>((resolve) => {
+      timer = setTimeout(() => resolve(s.analysis), waitMs);
+    });
+    try {
+      return await Promise.race([this.evaluate(doc), late]);
+    } finally {
+      clearTimeout(timer);
+    }
+  }
+
+  forget(uri: string): void {
+    this.docs.delete(uri);
+  }
+}

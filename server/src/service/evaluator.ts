@@ -1,0 +1,31 @@
+/**
+ * Who runs the evaluation (the slow, physics part of the pipeline) for the language service:
+ * in this thread (tests, and the fallback) or in a worker thread (the server, so that a long
+ * evaluation never holds up a keystroke and a runaway one can be stopped).
+ */
+import type { Problem } from '../format/ast';
+import { analyze } from '../eval/analyze';
+import type { EvaluationResult } from '../eval/resultTypes';
+
+/** What the full pipeline gives for a text: its result and every problem of every stage. */
+export interface EvaluationOutcome {
+  result?: EvaluationResult;
+  problems: Problem[];
+}
+
+export interface Evaluator {
+  evaluate(text: string): Promise<EvaluationOutcome>;
+  dispose(): void;
+}
+
+export function evaluateText(text: string): EvaluationOutcome {
+  const a = analyze(text);
+  return { ...(a.result ? { result: a.result } : {}), problems: a.problems };
+}
+
+export function inProcessEvaluator(): Evaluator {
+  return {
+    evaluate: (text) => new Promise((resolve) => resolve(evaluateText(text))),
+    dispose: () => undefined,
+  };
+}

@@ -1,0 +1,104 @@
+/**
+ * Runs evaluations in a worker thread, one at a time. A job that takes longer than the time
+ * limit stops the worker (its job fails); the next job starts a fresh one. A worker that
+ * cannot start makes the evaluator fall back to this thread.
+ */
+import { Worker } from 'worker_threads';
+import { type EvaluationOutcome, type Evaluator, evaluateText } from './evaluator';
+import type { EvaluationReply, EvaluationRequest } from './evaluatorThread';
+
+/** `workerData.role` that tells a bundle started as a worker to serve evaluations. */
+export const EVALUATOR_ROLE = 'sublevel-evaluator';
+
+interface Job {
+  id: number;
+  text: string;
+  resolve: (o: EvaluationOutcome) => void;
+  reject: (e: Error) => void;
+}
+
+export class WorkerEvaluator implements Evaluator {
+  private worker: Worker | undefined;
+  private readonly queue: Job[] = [];
+  private current: Job | undefined;
+  private timer: NodeJS.Timeout | undefined;
+  private nextId = 1;
+  private broken = false;
+
+  constructor(
+    /** The script to run in the worker: the server bundle itself. */
+    private readonly script: string,
+    private readonly log: (message: string) => void,
+    private readonly timeLimitMs = 30_000,
+  ) {}
+
+  evaluate(text: string): Promise<EvaluationOutcome> {
+    if (this.broken) return new Promise((resolve) => resolve(evaluateText(text)));
+    return new Promise((resolve, reject) => {
+      this.queue.push({ id: this.nextId++, text, resolve, reject });
+      this.pump();
+    });
+  }
+
+  dispose(): void {
+    clearTimeout(this.timer);
+    void this.worker?.terminate();
+    this.worker = undefined;
+    for (const job of [...(this.current ? [this.current] : []), ...this.queue.splice(0)]) job.reject(new Error('evaluator stopped'));
+    this.current = undefined;
+  }
+
+  private start(): Worker | undefined {
+    try {
+      const w = new Worker(this.script, { workerData: { role: EVALUATOR_ROLE } });
+      w.on('message', (reply: EvaluationReply) => this.finish(reply));
+      w.on('error', (e) => this.fail(w, `the evaluation worker failed: ${e.stack ?? e.message}`));
+      w.on('exit', (code) => {
+        if (this.worker === w) this.fail(w, `the evaluation worker stopped (exit code ${code})`);
+      });
+      w.unref();
+      return w;
+    } catch (e) {
+      this.log(`sublevel: cannot start the evaluation worker, evaluating in the server thread instead: ${String(e)}`);
+      this.broken = true;
+      return undefined;
+    }
+  }
+
+  private pump(): void {
+    if (this.current || this.queue.length === 0) return;
+    this.worker ??= this.start();
+    if (!this.worker) {
+      for (const job of this.queue.splice(0)) job.resolve(evaluateText(job.text));
+      return;
+    }
+    const job = this.queue.shift()!;
+    this.current = job;
+    const request: EvaluationRequest = { id: job.id, text: job.text };
+    this.worker.postMessage(request);
+    this.timer = setTimeout(() => this.fail(this.worker, `an evaluation took longer than ${this.timeLimitMs / 1000} s and was stopped`), this.timeLimitMs);
+  }
+
+  private finish(reply: EvaluationReply): void {
+    const job = this.current;
+    if (!job || job.id !== reply.id) return;
+    clearTimeout(this.timer);
+    this.current = undefined;
+    if (reply.ok) job.resolve(reply.outcome);
+    else job.reject(new Error(reply.error));
+    this.pump();
+  }
+
+  /** Stops a worker that failed or overran; its job fails, later jobs go to a new worker. */
+  private fail(w: Worker | undefined, message: string): void {
+    if (!w || this.worker !== w) return;
+    clearTimeout(this.timer);
+    this.worker = undefined;
+    void w.terminate();
+    this.log(`sublevel: ${message}`);
+    const job = this.current;
+    this.current = undefined;
+    job?.reject(new Error(message));
+    this.pump();
+  }
+}

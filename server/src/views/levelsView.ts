@@ -1,0 +1,66 @@
+/**
+ * Levels diagram data for one level: an exact sweep from zero field to a field that shows the
+ * change of regime, with the file's working field marked.
+ */
+import { regime, sweepLevel, type SweepResult } from '../physics/engine';
+import { BOHR_MAGNETON_HZ_PER_T } from '../physics/constants';
+import type { LevelModel } from '../model/types';
+import { hyperfineSpec } from '../eval/levelSpec';
+import type { WorkingField } from '../eval/levelEvaluation';
+import type { FieldUnit, LevelsViewData } from '../render';
+
+export const LEVELS_VIEW_POINTS = 401;
+
+export interface LevelsView {
+  data: LevelsViewData;
+  sweep: SweepResult;
+}
+
+/** Upper end of the plotted field range: well past x = 1 and past the working field. */
+export function levelsViewRangeT(level: LevelModel, gJ: number, marker: number | undefined): number {
+  const spec = hyperfineSpec(level, gJ);
+  if (!spec) return 1;
+  const r = regime(spec, marker ?? 1e-4);
+  const spread = r.zeroFieldSpreadHz;
+  const crossover = spread > 0 ? spread / (Math.max(Math.abs(spec.gJ - spec.gI), 1e-3) * BOHR_MAGNETON_HZ_PER_T) : 0;
+  const fromMarker = marker !== undefined ? Math.abs(marker) * 1.25 : 0;
+  const upper = Math.max(fromMarker, 3 * crossover);
+  return upper > 0 ? upper : 1;
+}
+
+export function levelsView(level: LevelModel, gJ: number, marker?: WorkingField, toT?: number): LevelsView | undefined {
+  const spec = hyperfineSpec(level, gJ);
+  if (!spec) return undefined;
+  const upper = toT ?? levelsViewRangeT(level, gJ, marker?.tesla);
+  const sweep = sweepLevel(spec, 0, upper, LEVELS_VIEW_POINTS);
+  if (sweep.issues.some((i) => i.severity === 'error')) return undefined;
+  const data: LevelsViewData = {
+    title: `${level.species.name} ${level.name}: ${level.designationText} — sublevel energies`,
+    fieldUnit: unitFor(upper),
+    fieldsT: sweep.fieldsT,
+    curves: sweep.states.map((s, i) => ({
+      id: `s${i}`,
+      lowLabel: s.low.text,
+      highLabel: s.high.text,
+      energyHz: s.energyHz,
+      momentJT: s.momentJT,
+    })),
+    crossings: sweep.crossings.map((c) => ({
+      fieldT: c.fieldT,
+      energyHz: c.energyHz,
+      a: sweep.states[c.stateA]!.low.text,
+      b: sweep.states[c.stateB]!.low.text,
+    })),
+  };
+  if (marker) {
+    data.markerT = marker.tesla;
+    data.markerLabel = `${marker.source.kind} ${marker.source.name}`;
+  }
+  return { data, sweep };
+}
+
+function unitFor(upperT: number): FieldUnit {
+  if (upperT < 0.01) return 'G';
+  if (upperT < 1) return 'mT';
+  return 'T';
+}
