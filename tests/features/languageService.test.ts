@@ -52,15 +52,15 @@ describe('language service', () => {
     svc.analysis(doc('field f = 2 G\n', 2));
     const b = svc.evaluate(doc('field f = 3 G\n', 3));
     await Promise.all([a, b]);
-    expect(texts).toEqual(['field f = 1 G\n', 'field f = 3 G\n']);
+    expect(texts).toEqual(['field f = 3 G\n']);
   });
 
   it('answers a hover without the evaluation when it fails, and logs', async () => {
     const logged: string[] = [];
     const failing: Evaluator = { evaluate: () => Promise.reject(new Error('worker gone')), dispose: () => undefined };
     const svc = new LanguageService((m) => logged.push(m), failing);
-    const h = await svc.hover(doc('species Li7\n  level g: 2s 2S1/2\n'), { line: 1, character: 10 });
-    expect(JSON.stringify(h)).toContain('not valid yet'); // no result: the term section says so
+    const h = await svc.hover(doc('species Li7\n  level g: 2s 2S1/2\n'), { line: 1, character: 8 });
+    expect(JSON.stringify(h)).toContain('appear once the evaluation has run');
     expect(logged.join('\n')).toContain('worker gone');
   });
 

@@ -279,6 +279,13 @@ describe('bad input comes back as issues', () => {
     expect(nan.issues.some((i) => i.severity === 'error' && i.code === 'bad-field')).toBe(true);
   });
 
+  it('an upper level given below the lower one is warned about, not refused', () => {
+    const r = electricDipoleLine(NA_3S, NA_3P32, 0.1, { lowerEnergyHz: 5e14, upperEnergyHz: 1e14 });
+    expect(r.issues.map((i) => i.code)).toEqual(['line-upper-below-lower']);
+    expect(r.components.length).toBe(6);
+    expect(r.lineCentreHz).toBe(-4e14);
+  });
+
   it('term data given with the line adds the selection-rule findings', () => {
     const r = electricDipoleLine(NA_3S, NA_3P32, 0.1, {
       terms: { lower: { twoS: 1, L: 0, twoJ: 1, configuration: '3s' }, upper: { twoS: 1, L: 1, twoJ: 3, configuration: '3p' } },

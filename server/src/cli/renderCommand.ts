@@ -28,8 +28,7 @@ export function runRender(args: ParsedArgs, io: CliIO): number {
   if (view === 'levels') {
     const firstBeamLevel = model.beams.find((b) => b.level)?.level;
     const level = selectLevel(model, stringOption(args, 'level'), stringOption(args, 'level') ? undefined : firstBeamLevel ?? model.species[0]?.levels[0]);
-    const gJ = gJOf(level);
-    const v = gJ !== undefined ? levelsView(level, gJ, selectField(model, stringOption(args, 'field'))) : undefined;
+    const v = levelsView(level, gJOf(level), model.settings, selectField(model, stringOption(args, 'field')));
     if (!v) throw new UsageError(`level '${level.name}' has problems to fix first (run: sublevel check ${file})`);
     svg = renderLevels(v.data, { kind: 'export' });
   } else {

@@ -4,7 +4,7 @@
  */
 import { writeOutputFile } from './output';
 import { analyze } from '../eval/analyze';
-import { hyperfineSpec } from '../eval/levelSpec';
+import { engineSpec } from '../eval/levelSpec';
 import { readQuantityArgument } from '../format/quantityArgument';
 import { suggestNames } from '../format/didYouMean';
 import { sweepLevel, type SweepResult } from '../physics/engine';
@@ -30,7 +30,7 @@ export function runSweep(args: ParsedArgs, io: CliIO): number {
   if (!analysis.model || !analysis.result) throw new UsageError(`${file} could not be read`);
   const level = findLevel(analysis.model, stringOption(args, 'level'));
   const gJ = analysis.result.levels.find((l) => l.species === level.species.name && l.level === level.name)?.g_J.used;
-  const spec = gJ !== undefined ? hyperfineSpec(level, gJ) : undefined;
+  const spec = engineSpec(level, gJ, analysis.model.settings);
   if (!spec) throw new UsageError(`level '${level.name}' has problems to fix first (run: sublevel check ${file})`);
 
   const sweep = sweepLevel(spec, fromT, toT, points);

@@ -1,7 +1,7 @@
 /** The human-readable report printed by `sublevel eval`. */
 import { ATOMIC_MASS_UNIT } from '../physics/constants';
 import { fieldText, frequencyText, lengthText, trimNumber } from '../eval/quantityText';
-import type { BeamResult, EvaluationResult, LevelResult } from '../eval/resultTypes';
+import type { BeamResult, EvaluationResult, LevelResult, TermResult } from '../eval/resultTypes';
 import { table } from './table';
 
 export function textReport(file: string, r: EvaluationResult): string[] {
@@ -14,6 +14,7 @@ export function textReport(file: string, r: EvaluationResult): string[] {
     const mass = s.mass_kg ? `${trimNumber(s.mass_kg.value / ATOMIC_MASS_UNIT, 9)} u` : 'not given';
     out.push(`  mass ${mass}   I = ${fraction(s.I)}   g_I = ${trimNumber(s.g_I.value, 8)}  [${s.g_I.source}]`);
     for (const l of r.levels.filter((x) => x.species === s.name)) out.push(...levelReport(l));
+    for (const t of r.terms.filter((x) => x.species === s.name)) out.push(...termReport(t));
   }
   if (r.magnets.length > 0) {
     out.push('');
@@ -83,6 +84,22 @@ function levelReport(l: LevelResult): string[] {
           s.linear_energy_Hz !== undefined ? frequencyText(s.linear_energy_Hz, 10) : '—',
           trimNumber(s.moment_bohr, 6),
         ]),
+      ).map((x) => '      ' + x),
+    );
+  }
+  return out;
+}
+
+function termReport(t: TermResult): string[] {
+  const out = ['', `  term ${t.level}: ${t.designation.configuration ? t.designation.configuration + ' ' : ''}${t.designation.unicode}   S = ${fraction(t.S)}, L = ${t.L}, fine structure ζ = ${frequencyText(t.zeta_Hz.value, 8)} [${t.zeta_Hz.source}]`];
+  out.push(...table(['J', 'zero-field shift', 'g_J'], t.fine_levels.map((f) => [f.J_text, frequencyText(f.shift_Hz, 10), trimNumber(f.g_J, 8)])).map((x) => '      ' + x));
+  for (const f of t.at_fields) {
+    const regime = f.regime ? `; ${f.regime.verdict}${f.regime.x !== null ? `, x = ${trimNumber(f.regime.x, 3)}` : ''}` : '';
+    out.push(`    at ${f.source.kind} ${f.source.name} = ${fieldText(f.field_T)}${regime}:`);
+    out.push(
+      ...table(
+        ['low-field label', 'high-field label', 'energy (exact)', 'moment/μ_B'],
+        f.exact.map((s) => [s.low_label, s.high_label, frequencyText(s.energy_Hz, 10), trimNumber(s.moment_bohr, 6)]),
       ).map((x) => '      ' + x),
     );
   }

@@ -7,6 +7,7 @@ import { CONSTANTS_SOURCE } from '../physics/constants';
 import type { LevelModel, SetupModel } from '../model/types';
 import { beamDiagnostics } from './beamDiagnostics';
 import { evaluateBeam } from './beamEvaluation';
+import { evaluateTerm } from './termEvaluation';
 import { EVAL_RULES } from './evalCodes';
 import { evaluateLevel, type EvaluationNote, type WorkingField } from './levelEvaluation';
 import {
@@ -15,6 +16,7 @@ import {
   type DiagnosticResult,
   type EvaluationResult,
   type LevelResult,
+  type TermResult,
 } from './resultTypes';
 
 export function workingFields(model: SetupModel): WorkingField[] {
@@ -36,8 +38,14 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   const fields = workingFields(model);
   const levels: LevelResult[] = [];
   const notes: EvaluationNote[] = [];
+  const terms: TermResult[] = [];
   for (const s of model.species) {
     for (const l of s.levels) {
+      if (l.kind === 'term') {
+        const t = evaluateTerm(l, model.settings, fields, notes);
+        if (t) terms.push(t);
+        continue;
+      }
       const r = evaluateLevel(l, model.settings, fields, notes);
       if (r) levels.push(r);
     }
@@ -70,6 +78,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
       levels: s.levels.map((l) => l.name),
     })),
     levels,
+    terms,
     fields: model.fields.map((f) => ({ name: f.name, ...(f.tesla ? { field_T: f.tesla.value } : {}) })),
     magnets: model.magnets.map((m) => ({
       name: m.name,

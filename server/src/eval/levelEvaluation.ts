@@ -9,7 +9,7 @@ import type { LevelModel, SettingsModel, Valued } from '../model/types';
 import { exactAtField } from './exactAtField';
 import { halfText, signedHalfText } from './halves';
 import { hyperfineSpec } from './levelSpec';
-import { fieldText } from './quantityText';
+import { regimeNotes } from './regimeNotes';
 import type { FieldPointResult, GFactorResult, HyperfineResult, LevelResult, SourcedNumber, SublevelResult } from './resultTypes';
 
 export interface WorkingField {
@@ -28,7 +28,7 @@ export interface EvaluationNote {
 
 export function evaluateLevel(level: LevelModel, settings: SettingsModel, fields: WorkingField[], notes: EvaluationNote[]): LevelResult | undefined {
   const term = level.term;
-  if (!level.valid || !term || term.twoJ === null) return undefined;
+  if (!level.valid || level.kind !== 'level' || !term || term.twoJ === null) return undefined;
   const twoJ = term.twoJ;
   const twoI = level.species.twoI.value;
   const gJ = gFactor(level, settings);
@@ -114,19 +114,7 @@ function exactAt(level: LevelModel, gJ: number, f: WorkingField, notes: Evaluati
   const spec = hyperfineSpec(level, gJ);
   if (!spec) return { exact: [] };
   const r = exactAtField(spec, f.tesla);
-  for (const e of r.errors) notes.push({ code: 'level-too-large', message: `level '${level.name}': ${e}`, range: level.nameRange });
-  const where = `at ${f.source.kind} ${f.source.name} (${fieldText(f.tesla)})`;
-  const what = `level ${level.species.name}.${level.name}`;
-  if (r.regime?.verdict === 'intermediate') {
-    const limit = r.regime.linear_limit_T !== null ? `; the linear formula holds to 1 % only below ${fieldText(r.regime.linear_limit_T)}` : '';
-    notes.push({ code: 'zeeman-not-linear', message: `${what} is in the intermediate regime ${where}${limit}. Sublevel energies come from exact diagonalisation.`, range: f.range });
-  } else if (r.regime?.verdict.startsWith('strong')) {
-    notes.push({
-      code: 'zeeman-strong-field',
-      message: `${what} is in the strong-field (decoupled) regime ${where}: labels |F, m_F> or |J, m_J> no longer describe the states; read the |m_J, m_I> labels.`,
-      range: f.range,
-    });
-  }
+  notes.push(...regimeNotes(level, f, r));
   return { exact: r.exact, ...(r.regime ? { regime: r.regime } : {}) };
 }
 

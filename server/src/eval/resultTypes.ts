@@ -118,6 +118,21 @@ export interface LevelResult {
   at_fields: FieldPointResult[];
 }
 
+/** A whole LS term with its fine structure (a level written without J, with zeta). */
+export interface TermResult {
+  species: string;
+  level: string;
+  designation: { text: string; unicode: string; configuration: string | null };
+  S: number;
+  L: number;
+  zeta_Hz: SourcedNumber;
+  g_s: number;
+  g_L: number;
+  /** J levels at zero field: E_J = ζ/2 [J(J+1) − L(L+1) − S(S+1)], relative to the term's centre of gravity. */
+  fine_levels: { J: number; J_text: string; shift_Hz: number; g_J: number }[];
+  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; exact: ExactSublevelResult[]; regime?: RegimeResultJson }[];
+}
+
 export interface SpeciesResult {
   name: string;
   builtin: boolean;
@@ -196,6 +211,7 @@ export interface EvaluationResult {
   settings: { g_s: 'exact' | 2; reduced_mass: boolean };
   species: SpeciesResult[];
   levels: LevelResult[];
+  terms: TermResult[];
   fields: { name: string; field_T?: number }[];
   magnets: MagnetResult[];
   beams: BeamResult[];

@@ -62,7 +62,7 @@ function declaredSections(d: Declared, ctx: HoverContext): string[] {
     case 'magnet':
       return magnetSectionFor(d.item.name, ctx);
     case 'beam':
-      return [beamSection(d.item)];
+      return [beamSection(d.item, ctx.analysis.result?.beams.find((b) => b.name === d.item.name), ctx.options.sublevelRows)];
     case 'line':
       return [lineSection(d.item, ctx.analysis.result)];
     default:
@@ -87,7 +87,7 @@ function blockSections(block: BlockNode, ctx: HoverContext): string[] {
     }
     case 'beam': {
       const b = beamOfBlock(model, block);
-      return b ? [beamSection(b)] : [];
+      return b ? declaredSections({ kind: 'beam', item: b }, ctx) : [];
     }
     case 'line': {
       const l = lineOfBlock(model, block);

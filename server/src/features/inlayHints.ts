@@ -1,7 +1,8 @@
 /**
  * Inline values after the statements that produce numbers: g_J after a level's term, the
  * hyperfine splitting after a level with A, the Zeeman scale μ_B·B/h after a field, the force
- * on one Bohr magneton after a gradient, and the frequency and wavelength after a line.
+ * on one Bohr magneton after a gradient, the peaks and their resolution after a beam, and the
+ * frequency and wavelength after a line.
  * Only blocks that meet the requested range are looked at.
  */
 import { type InlayHint, InlayHintKind, type Position, type Range } from 'vscode-languageserver-types';
@@ -10,11 +11,12 @@ import { frequencyText, trimNumber } from '../eval/quantityText';
 import type { BlockNode, LevelNode } from '../format/ast';
 import { comparePositions } from '../format/positions';
 import type { SetupModel } from '../model/types';
+import { beamVerdict } from './hover/beamSection';
 import { zeemanScaleHz } from './hover/fieldSection';
 import { lineFrequency } from './hover/lineSection';
 import { bohrForceN } from './hover/magnetSection';
 import { lastStartingAtOrBefore } from './shared/locate';
-import { fieldOfBlock, levelOfNode, lineOfBlock, magnetOfBlock } from './shared/modelLookup';
+import { beamOfBlock, fieldOfBlock, levelOfNode, lineOfBlock, magnetOfBlock } from './shared/modelLookup';
 import { levelResult } from './shared/results';
 
 function hint(position: Position, label: string, tooltip?: string): InlayHint {
@@ -60,6 +62,13 @@ function blockHints(analysis: Analysis, model: SetupModel, block: BlockNode, out
       if (m.fieldT && fieldSetting) out.push(hint(fieldSetting.range.end, `μ_B·B/h ${frequencyText(zeemanScaleHz(m.fieldT.value), 5)}`, 'Zeeman scale: shift of a sublevel with g·m = 1'));
       const gradSetting = block.settings.find((s) => s.key.text === 'gradient');
       if (m.gradientTPerM && gradSetting) out.push(hint(gradSetting.range.end, `μ_B·b ${trimNumber(bohrForceN(m.gradientTPerM.value), 4)} N`, 'force on a moment of one Bohr magneton'));
+      break;
+    }
+    case 'beam': {
+      const beam = beamOfBlock(model, block);
+      const r = beam && analysis.result?.beams.find((b) => b.name === beam.name);
+      const verdict = r && beamVerdict(r);
+      if (verdict) out.push(hint(block.headerRange.end, verdict, 'peaks at the detector, from the beam evaluation'));
       break;
     }
     case 'line': {

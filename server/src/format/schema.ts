@@ -9,7 +9,7 @@ export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 
 export const LEVEL_WORD = 'level';
 
 /** Keys a level takes, on its own line or on the lines after it. */
-export const LEVEL_KEYS: readonly string[] = ['A', 'B', 'C', 'g_J', 'energy'];
+export const LEVEL_KEYS: readonly string[] = ['A', 'B', 'C', 'g_J', 'energy', 'zeta'];
 
 /** Keys each block takes on the lines after its header. */
 export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {

@@ -23,10 +23,11 @@ export function buildLevel(node: LevelNode, species: SpeciesModel, problems: Pro
     designationText: node.designation?.text ?? '',
     configuration: null,
     term: null,
+    kind: 'level',
     valid: false,
   };
-  readDesignation(level, problems);
   for (const s of node.settings) readLevelSetting(level, s, problems);
+  readDesignation(level, problems);
   mergeBuiltin(level);
   return level;
 }
@@ -46,10 +47,22 @@ function readDesignation(level: LevelModel, problems: ProblemList): void {
     });
   }
   const hasError = parsed.issues.some((i) => i.severity === 'error');
-  if (parsed.term && parsed.term.twoJ === null && !hasError) {
-    problems.add('level-needs-j', `term ${parsed.term.text} has no J; write the level's J, e.g. ${parsed.term.text}${jHint(parsed.term.twoS, parsed.term.L)}`, d.range);
+  const noJ = !!parsed.term && parsed.term.twoJ === null;
+  if (noJ && level.zeta) {
+    level.kind = 'term';
+  } else if (noJ && !hasError) {
+    problems.add(
+      'level-needs-j',
+      `term ${parsed.term!.text} has no J; write the level's J, e.g. ${parsed.term!.text}${jHint(parsed.term!.twoS, parsed.term!.L)}, or give the term's spin–orbit constant zeta to treat all its J levels together`,
+      d.range,
+    );
   }
-  level.valid = !!parsed.term && parsed.term.twoJ !== null && !hasError;
+  if (!noJ && level.zeta?.range) {
+    problems.add('zeta-needs-term', `zeta describes a whole term: write the term without J (e.g. ${parsed.term?.text.replace(/[0-9/₀-₉⁄]+$/, '')}) to compute all its J levels, or remove zeta`, level.zeta.range, {
+      data: { removeSetting: 'zeta' },
+    });
+  }
+  level.valid = !!parsed.term && !hasError && (parsed.term.twoJ !== null || level.kind === 'term');
 }
 
 function jHint(twoS: number, L: number): string {
@@ -70,6 +83,9 @@ function readLevelSetting(level: LevelModel, s: SettingNode, problems: ProblemLi
       break;
     case 'g_J':
       level.gJMeasured = readSettingNumber(s, problems, 'measured Landé g_J, e.g. 1.3341');
+      break;
+    case 'zeta':
+      level.zeta = readSettingQuantity(s, 'frequency-like', problems, 'spin–orbit constant ζ of the term, e.g. 6.70 GHz');
       break;
     case 'energy':
       level.energyHz = readSettingQuantity(s, 'frequency-like', problems, 'energy above the ground level, e.g. 16973.37 cm^-1');

@@ -12,6 +12,16 @@ const GJ_NOTICE_FRACTION = 0.01;
 
 export function checkLevelPhysics(level: LevelModel, settings: SettingsModel, problems: ProblemList): void {
   const term = level.term;
+  if (level.kind === 'term' && level.valid) {
+    for (const [key, v] of [['A', level.A], ['B', level.B], ['C', level.C], ['g_J', level.gJMeasured]] as const) {
+      if (v?.range) {
+        problems.add('term-hyperfine-unsupported', `${key} is not used for a whole term (a term without J); give it on a J level instead`, v.range, {
+          data: { removeSetting: key },
+        });
+      }
+    }
+    return;
+  }
   if (!term || term.twoJ === null || !level.valid) return;
   const twoI = level.species.twoI.value;
   const twoJ = term.twoJ;

@@ -39,8 +39,15 @@ export interface LevelModel {
   designationText: string;
   configuration: Configuration | null;
   term: TermSymbol | null;
-  /** Set when the term is complete and valid (has a J allowed by L and S). */
+  /**
+   * `level`: a J level (term symbol with J). `term`: a whole LS term without J whose fine
+   * structure ζ L·S is part of the problem (needs `zeta`).
+   */
+  kind: 'level' | 'term';
+  /** Set when the designation is usable: a valid J level, or a term with its ζ. */
   valid: boolean;
+  /** Spin–orbit constant ζ of a term (E_J = ζ/2 [J(J+1) − L(L+1) − S(S+1)]), Hz. */
+  zeta?: Valued<number>;
   A?: Valued<number>;
   B?: Valued<number>;
   C?: Valued<number>;

@@ -2,10 +2,10 @@
  * Levels diagram data for one level: an exact sweep from zero field to a field that shows the
  * change of regime, with the file's working field marked.
  */
-import { regime, sweepLevel, type SweepResult } from '../physics/engine';
+import { regime, sweepLevel, type LevelSpec, type SweepResult } from '../physics/engine';
 import { BOHR_MAGNETON_HZ_PER_T } from '../physics/constants';
-import type { LevelModel } from '../model/types';
-import { hyperfineSpec } from '../eval/levelSpec';
+import type { LevelModel, SettingsModel } from '../model/types';
+import { engineSpec } from '../eval/levelSpec';
 import type { WorkingField } from '../eval/levelEvaluation';
 import type { FieldUnit, LevelsViewData } from '../render';
 
@@ -17,21 +17,26 @@ export interface LevelsView {
 }
 
 /** Upper end of the plotted field range: well past x = 1 and past the working field. */
-export function levelsViewRangeT(level: LevelModel, gJ: number, marker: number | undefined): number {
-  const spec = hyperfineSpec(level, gJ);
-  if (!spec) return 1;
+export function levelsViewRangeT(spec: LevelSpec, marker: number | undefined): number {
   const r = regime(spec, marker ?? 1e-4);
   const spread = r.zeroFieldSpreadHz;
-  const crossover = spread > 0 ? spread / (Math.max(Math.abs(spec.gJ - spec.gI), 1e-3) * BOHR_MAGNETON_HZ_PER_T) : 0;
+  const gDiff = spec.kind === 'hyperfine' ? Math.abs(spec.gJ - spec.gI) : Math.abs(spec.gS - spec.gL);
+  const crossover = spread > 0 ? spread / (Math.max(gDiff, 1e-3) * BOHR_MAGNETON_HZ_PER_T) : 0;
   const fromMarker = marker !== undefined ? Math.abs(marker) * 1.25 : 0;
   const upper = Math.max(fromMarker, 3 * crossover);
   return upper > 0 ? upper : 1;
 }
 
-export function levelsView(level: LevelModel, gJ: number, marker?: WorkingField, toT?: number): LevelsView | undefined {
-  const spec = hyperfineSpec(level, gJ);
+export function levelsView(
+  level: LevelModel,
+  gJ: number | undefined,
+  settings: SettingsModel,
+  marker?: WorkingField,
+  toT?: number,
+): LevelsView | undefined {
+  const spec = engineSpec(level, gJ, settings);
   if (!spec) return undefined;
-  const upper = toT ?? levelsViewRangeT(level, gJ, marker?.tesla);
+  const upper = toT ?? levelsViewRangeT(spec, marker?.tesla);
   const sweep = sweepLevel(spec, 0, upper, LEVELS_VIEW_POINTS);
   if (sweep.issues.some((i) => i.severity === 'error')) return undefined;
   const data: LevelsViewData = {

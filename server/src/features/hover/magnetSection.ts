@@ -9,6 +9,7 @@ import { BOHR_MAGNETON } from '../../physics/constants';
 import { md, mdTitle } from '../shared/markdown';
 import { valueInUnits } from '../shared/units';
 import type { HoverOptions } from './context';
+import { beamVerdict } from './beamSection';
 import { fieldValueLines, levelsAtFieldSection } from './fieldSection';
 
 /** Force on a moment of one Bohr magneton in this gradient, in newtons. */
@@ -26,6 +27,11 @@ export function magnetSection(m: MagnetResult, ctx: { result: EvaluationResult |
   if (m.length_m !== undefined) lines.push(`length = ${valueInUnits(m.length_m, 'length').join(' = ')}`);
   else lines.push('length: not given');
   const parts = [lines.join('  \n')];
+  const beams = (ctx.result?.beams ?? []).filter((b) => b.magnet === m.name);
+  for (const b of beams) {
+    const verdict = beamVerdict(b);
+    parts.push(`beam ${md(b.name)}: ${verdict ?? 'not computed (see its diagnostics)'}`);
+  }
   if (m.field_T !== undefined) {
     const tables = levelsAtFieldSection(ctx.result, { kind: 'magnet', name: m.name }, ctx.options);
     if (tables) parts.push(tables);

@@ -1,11 +1,41 @@
-/** The sublevels of one level at one field, as a Markdown table (lowest energy first). */
+/**
+ * The sublevels of one level at one field as a Markdown table, lowest energy first: the exact
+ * energy from diagonalisation, the weak-field (linear) value beside it, and the magnetic
+ * moment; with the regime the level is in at that field. Falls back to the linear energies
+ * when the evaluation has no exact ones.
+ */
 import type { FieldPointResult } from '../../eval/resultTypes';
-import { frequencyText } from '../../eval/quantityText';
-import { mdTable } from '../shared/markdown';
+import { fieldText, frequencyText, trimNumber } from '../../eval/quantityText';
+import { md, mdTable } from '../shared/markdown';
+
+export function regimeLine(point: FieldPointResult): string | undefined {
+  const r = point.regime;
+  if (!r) return undefined;
+  const limits: string[] = [];
+  if (r.linear_limit_T !== null) limits.push(`linear formula within ${trimNumber(r.fraction * 100, 3)} % below ${fieldText(r.linear_limit_T)}`);
+  if (r.strong_limit_T !== null) limits.push(`strong-field formula within it above ${fieldText(r.strong_limit_T)}`);
+  return `regime: ${md(r.verdict)}${limits.length > 0 ? ` — ${limits.join('; ')}` : ''}`;
+}
 
 export function sublevelTable(point: FieldPointResult, maxRows: number): string {
-  const rows = point.linear.slice(0, Math.max(0, maxRows)).map((s) => [s.label.replace(/_/g, '\\_'), frequencyText(s.energy_Hz)]);
-  const more = point.linear.length - rows.length;
-  const table = rows.length > 0 ? mdTable(['sublevel', 'E/h (weak-field formula)'], rows) : '';
-  return [table, more > 0 ? `… and ${more} more sublevel${more === 1 ? '' : 's'}` : ''].filter((s) => s !== '').join('\n\n');
+  const rows = Math.max(0, maxRows);
+  let table = '';
+  let total = 0;
+  if (point.exact.length > 0) {
+    total = point.exact.length;
+    table = mdTable(
+      ['state (low-field label)', 'E/h exact', 'E/h linear formula', 'μ/μ_B'],
+      point.exact
+        .slice(0, rows)
+        .map((s) => [md(s.low_label), frequencyText(s.energy_Hz), s.linear_energy_Hz !== undefined ? frequencyText(s.linear_energy_Hz) : '—', trimNumber(s.moment_bohr, 4)]),
+    );
+  } else if (point.linear.length > 0) {
+    total = point.linear.length;
+    table = mdTable(['sublevel', 'E/h (linear formula)'], point.linear.slice(0, rows).map((s) => [md(s.label), frequencyText(s.energy_Hz)]));
+  }
+  const more = total - Math.min(rows, total);
+  const regime = regimeLine(point);
+  return [regime ?? '', rows > 0 ? table : '', more > 0 ? `… and ${more} more sublevel${more === 1 ? '' : 's'}` : '']
+    .filter((s) => s !== '')
+    .join('\n\n');
 }

@@ -16,7 +16,7 @@ function parityText(parity: 'even' | 'odd' | null): string {
 }
 
 export function termSection(level: LevelModel, r: LevelResult | undefined): string {
-  if (!r) return invalidTermSection(level);
+  if (!r) return level.valid ? unevaluatedTermSection(level) : invalidTermSection(level);
   const head = [`${mdTitle(md(r.designation.unicode))}`];
   if (r.designation.configuration) head.push(`— ${md(r.designation.configuration)}`);
   head.push(`— ${parityText(r.designation.parity)}`);
@@ -38,6 +38,23 @@ export function termSection(level: LevelModel, r: LevelResult | undefined): stri
       : `${r.sublevel_count} sublevels: (2J+1)(2I+1) = ${jCount} × ${twoI + 1} with I = ${halfText(twoI)}`,
   );
   return lines.join('  \n');
+}
+
+/** A valid term whose evaluation is not available (still running, or failed): what the model knows. */
+function unevaluatedTermSection(level: LevelModel): string {
+  const term = level.term!;
+  const twoJ = term.twoJ ?? 0;
+  const twoI = level.species.twoI.value;
+  const parity = level.configuration?.parity ?? term.parityMark;
+  const head = [mdTitle(md(formatTermSymbol(term, 'unicode')))];
+  if (level.configuration) head.push(`— ${md(level.configuration.text)}`);
+  head.push(`— ${parityText(parity)}`);
+  return [
+    head.join(' '),
+    `J = ${halfText(twoJ)}; ${md(formatTermLabel(term.twoS, term.L))} allows J = ${allowedJ(term.twoS, term.L).map(halfText).join(', ')}`,
+    `${(twoJ + 1) * (twoI + 1)} sublevels`,
+    'g-factors and energies appear once the evaluation has run',
+  ].join('  \n');
 }
 
 /** S and L read from a term that failed validation, e.g. `2P5/2` → S = 1/2, L = 1. */
