@@ -1,0 +1,59 @@
+/**
+ * One diagram of an analysed document, as SVG and CSV: what the editor panel shows and what
+ * `sublevel render` writes. The level or beam is the one the cursor is in, else the first one.
+ */
+import type { Analysis } from '../eval/analyze';
+import { evaluateBeam } from '../eval/beamEvaluation';
+import { workingFields } from '../eval/evaluate';
+import type { BeamModel, LevelModel, SetupModel } from '../model/types';
+import { levelsCsv, patternCsv, renderLevels, renderPattern, type RenderTheme } from '../render';
+import { levelsView } from './levelsView';
+import { patternView } from './patternView';
+
+export type DiagramView = 'levels' | 'pattern' | 'lines';
+
+export interface DiagramRequest {
+  view: DiagramView;
+  /** 0-based line of the cursor, to pick the level or beam being edited. */
+  line?: number;
+  theme: RenderTheme['kind'];
+}
+
+export type DiagramAnswer = { ok: true; title: string; svg: string; csv: string } | { ok: false; message: string };
+
+export function diagramFor(analysis: Analysis, req: DiagramRequest): DiagramAnswer {
+  const model = analysis.model;
+  if (!model) return { ok: false, message: 'The file could not be read; see the Problems view.' };
+  const theme: RenderTheme = { kind: req.theme };
+  const gJOf = (l: LevelModel): number | undefined =>
+    analysis.result?.levels.find((r) => r.species === l.species.name && r.level === l.name)?.g_J.used;
+  if (req.view === 'levels') {
+    const level = levelAt(model, req.line);
+    if (!level) return { ok: false, message: 'No level to draw: add a species with a level, e.g. `level ground: 2S1/2`.' };
+    const marker = workingFields(model)[0];
+    const v = levelsView(level, gJOf(level), model.settings, marker);
+    if (!v) return { ok: false, message: `Level '${level.name}' has problems to fix before it can be drawn.` };
+    return { ok: true, title: v.data.title, svg: renderLevels(v.data, theme), csv: levelsCsv(v.data) };
+  }
+  if (req.view === 'pattern') {
+    const beam = beamAt(model, req.line);
+    if (!beam) return { ok: false, message: 'No beam to draw: add a `beam` block with level, source, slits, magnet and drift.' };
+    const v = patternView(beam.name, evaluateBeam(beam, gJOf));
+    if (!v) return { ok: false, message: `Beam '${beam.name}' cannot be computed yet; see the Problems view.` };
+    return { ok: true, title: v.title, svg: renderPattern(v, theme), csv: patternCsv(v) };
+  }
+  return { ok: false, message: 'Line components are not computed yet.' };
+}
+
+function contains(range: { start: { line: number }; end: { line: number } }, line: number | undefined): boolean {
+  return line !== undefined && range.start.line <= line && line <= range.end.line;
+}
+
+function levelAt(model: SetupModel, line: number | undefined): LevelModel | undefined {
+  const all = model.species.flatMap((s) => s.levels);
+  return all.find((l) => contains(l.node.range, line)) ?? model.beams.find((b) => contains(b.node.range, line))?.level ?? model.beams[0]?.level ?? all[0];
+}
+
+function beamAt(model: SetupModel, line: number | undefined): BeamModel | undefined {
+  return model.beams.find((b) => contains(b.node.range, line)) ?? model.beams[0];
+}
