@@ -19,6 +19,7 @@ run('A file with planted mistakes (exit 1 is expected)', ['check', 'examples/mis
 mkdirSync('demo-output', { recursive: true });
 run('Sublevel energies of Li7 ground against field (SVG)', ['render', 'examples/lithium-beam.sublevel', '--view', 'levels', '--out', 'demo-output/li7-levels.svg'], 0);
 run('Predicted detector pattern of the lithium beam (SVG)', ['render', 'examples/lithium-beam.sublevel', '--view', 'pattern', '--out', 'demo-output/li7-pattern.svg'], 0);
+run('Zeeman components of the Rb87 D2 line at the trap field (SVG)', ['render', 'examples/rubidium-bias.sublevel', '--view', 'lines', '--out', 'demo-output/rb87-d2-lines.svg'], 0);
 run('The same pattern as CSV for analysis code', ['profile', 'examples/lithium-beam.sublevel', '--out', 'demo-output/li7-pattern.csv'], 0);
 run('Rb87 ground sublevels from 0 to 0.2 T as CSV', ['sweep', 'examples/rubidium-bias.sublevel', '--level', 'ground', '--to', '0.2 T', '--points', '2001', '--out', 'demo-output/rb87-ground-sweep.csv'], 0);
 run('Rb87 ground diagram with the probe field marked (SVG)', ['render', 'examples/rubidium-bias.sublevel', '--level', 'ground', '--field', 'probe', '--out', 'demo-output/rb87-levels.svg'], 0);

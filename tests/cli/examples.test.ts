@@ -10,9 +10,11 @@ describe('sublevel check on the bundled examples', () => {
       '5:31 warning quadrupole-cannot-act',
       '6:23 error term-j-out-of-range',
       '7:19 error term-j-parity-of-spin',
-      '11:17 error unit-wrong-dimension',
-      '14:1 error syntax-unknown-statement',
-      '16:20 error name-unknown',
+      '12:17 error unit-wrong-dimension',
+      '15:1 error syntax-unknown-statement',
+      '17:20 error name-unknown',
+      '18:1 error line-parity-unchanged',
+      '18:1 warning line-l-zero-zero',
     ]);
     expect(r.out).toContain("did you mean 'magnet'");
     expect(r.out).toContain("did you mean 'upper'");
@@ -30,14 +32,14 @@ describe('sublevel check on the bundled examples', () => {
   it('searches folders recursively and exits 1 because of the mistakes file', () => {
     const r = cli('check', 'examples');
     expect(r.code).toBe(1);
-    expect(r.err).toMatch(/^4 files checked: 5 errors, \d+ other findings/);
+    expect(r.err).toMatch(/^4 files checked: 6 errors, \d+ other findings/);
   });
 
   it('writes check results as JSON', () => {
     const r = cli('check', 'examples/mistakes.sublevel', '--format', 'json');
     const doc = JSON.parse(r.out);
     expect(doc.format).toBe('sublevel-check');
-    expect(doc.files[0].diagnostics.filter((d: { severity: string }) => d.severity !== 'info')).toHaveLength(6);
+    expect(doc.files[0].diagnostics.filter((d: { severity: string }) => d.severity !== 'info')).toHaveLength(8);
     expect(doc.files[0].diagnostics[0]).toMatchObject({ code: 'quadrupole-cannot-act', line: 5, column: 31 });
   });
 });

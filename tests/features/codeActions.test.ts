@@ -107,6 +107,13 @@ const CASES: Case[] = [
     apply: { title: 'Remove A (it cannot act here)', result: 'species Demo\n  mass = 40 u\n  level g: 2S1/2\n  # no spin\n' },
   },
   {
+    name: 'zeta on a level that has a J: remove it (any problem naming a setting to remove)',
+    text: 'species Li7\n  level p: 2p 2P°3/2  zeta = 6.7 GHz\n',
+    code: 'zeta-needs-term',
+    titles: ['Remove zeta'],
+    apply: { title: 'Remove zeta', result: 'species Li7\n  level p: 2p 2P°3/2\n' },
+  },
+  {
     name: 'a colon written for `=`',
     text: 'magnet m\n  gradient: 180 T/m\n',
     code: 'syntax-missing-equals',

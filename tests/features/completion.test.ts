@@ -1,6 +1,7 @@
 import type { CompletionItem } from 'vscode-languageserver-types';
 import { describe, expect, it } from 'vitest';
 import { completion } from '../../server/src/features/completion';
+import { LEVEL_KEYS } from '../../server/src/format/schema';
 import { applyEdits, atCursor } from './helpers';
 
 interface Case {
@@ -76,7 +77,7 @@ const CASES: Case[] = [
     text: 'species Demo\n  level x: 3d3 4F|',
     has: ['4F3/2', '4F9/2', '2D3/2'],
   },
-  { name: 'level keys after a complete term', text: 'species Na23\n  level g: 3s 2S1/2 |', exactly: ['A', 'B', 'C', 'g_J', 'energy'] },
+  { name: 'level keys after a complete term', text: 'species Na23\n  level g: 3s 2S1/2 |', exactly: [...LEVEL_KEYS] },
   { name: 'nothing in a comment', text: 'species Na23  # |', exactly: [] },
   { name: 'nothing for a name the user chooses', text: 'magnet |', exactly: [] },
 ];

@@ -1,4 +1,3 @@
-import { readFileSync } from 'fs';
 import { DiagnosticSeverity, DiagnosticTag } from 'vscode-languageserver-types';
 import { describe, expect, it } from 'vitest';
 import { diagnostics } from '../../server/src/features/diagnostics';
@@ -6,23 +5,33 @@ import { analysisOf, URI } from './helpers';
 
 describe('diagnostics', () => {
   it('carry the stable code, severity, message, range, data and source', () => {
-    const ds = diagnostics(analysisOf(readFileSync('examples/mistakes.sublevel', 'utf8')), URI);
+    const text = [
+      'species Na23',
+      '  level ground: 3s 2S1/2  B = 2 MHz',
+      '  level upper:  3p 2P°5/2',
+      'magnet m',
+      '  field = 0.2 T',
+      '  gradient = 50 T',
+      '  length = 5 cm',
+      'magent spare',
+      '',
+    ].join('\n');
+    const ds = diagnostics(analysisOf(text), URI);
     expect(ds.map((d) => `${d.range.start.line + 1}:${d.range.start.character + 1} ${String(d.code)}`)).toEqual([
-      '5:31 quadrupole-cannot-act',
-      '6:23 term-j-out-of-range',
-      '7:19 term-j-parity-of-spin',
-      '10:14 zeeman-not-linear',
-      '11:17 unit-wrong-dimension',
-      '14:1 syntax-unknown-statement',
-      '16:20 name-unknown',
+      '2:31 quadrupole-cannot-act',
+      '3:23 term-j-out-of-range',
+      '5:11 zeeman-not-linear',
+      '6:17 unit-wrong-dimension',
+      '8:1 syntax-unknown-statement',
     ]);
-    const [quadrupole, j] = ds;
+    const [quadrupole, j, regime] = ds;
     expect(quadrupole!.severity).toBe(DiagnosticSeverity.Warning);
     expect(quadrupole!.tags).toEqual([DiagnosticTag.Unnecessary]);
     expect(quadrupole!.data).toEqual({ removeSetting: 'B' });
     expect(j!.severity).toBe(DiagnosticSeverity.Error);
     expect(j!.message).toContain('J = 5/2 is impossible');
     expect(j!.data).toEqual({ suggestions: ['1/2', '3/2'] });
+    expect(regime!.severity).toBe(DiagnosticSeverity.Information);
     for (const d of ds) expect(d.source).toBe('sublevel');
   });
 

@@ -152,3 +152,17 @@ describe('hover', () => {
     expect(text).toContain('… and 13 more sublevels');
   });
 });
+
+describe('hover on a whole term with fine structure', () => {
+  it('shows its J levels with the Landé interval rule and g_J', () => {
+    // Landé interval rule (textbook): E_J = ζ/2 [J(J+1) − L(L+1) − S(S+1)]; for ²P the 1/2 ↔ 3/2 interval is 3ζ/2.
+    // ζ = 6.70 GHz → E(1/2) = −ζ = −6.7 GHz, E(3/2) = ζ/2 = 3.35 GHz, interval 10.05 GHz.
+    // Landé g_J with g_s = |g_e| (CODATA 2022), g_L = 1: ²P₁/₂ = 4/3 − g_s/3 = 0.6658936, ²P₃/₂ = 2/3 + g_s/3 = 1.3341064.
+    const { analysis, position } = atCursor('species Li7\n  level p|: 2p 2P°  zeta = 6.70 GHz\n');
+    const text = plain(hoverText(hover(analysis, position)));
+    expect(text).toContain('²P° term');
+    expect(text).toContain('J = 1/2 ↔ 3/2: 10.05 GHz');
+    expect(text).toContain('| 1/2 | -6.7 GHz | 0.6658936 |');
+    expect(text).toContain('| 3/2 | 3.35 GHz | 1.334106 |');
+  });
+});

@@ -25,9 +25,9 @@ function pick<T>(kind: string, items: T[], nameOf: (t: T) => string[], wanted: s
   throw new UsageError(`no ${kind} named '${wanted}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : ''}`);
 }
 
-export function selectLevel(model: SetupModel, wanted: string | undefined, fallback?: LevelModel): LevelModel {
+export function selectLevel(model: SetupModel, wanted: string): LevelModel {
   const all = model.species.flatMap((s) => s.levels);
-  return pick('level', all, (l) => [`${l.species.name}.${l.name}`, l.name], wanted, fallback);
+  return pick('level', all, (l) => [`${l.species.name}.${l.name}`, l.name], wanted);
 }
 
 export function selectBeam(model: SetupModel, wanted: string | undefined): BeamModel {

@@ -1,7 +1,7 @@
 /** The human-readable report printed by `sublevel eval`. */
 import { ATOMIC_MASS_UNIT } from '../physics/constants';
 import { fieldText, frequencyText, lengthText, trimNumber } from '../eval/quantityText';
-import type { BeamResult, EvaluationResult, LevelResult, TermResult } from '../eval/resultTypes';
+import type { BeamResult, EvaluationResult, LevelResult, LineResult, TermResult } from '../eval/resultTypes';
 import { table } from './table';
 
 export function textReport(file: string, r: EvaluationResult): string[] {
@@ -32,11 +32,7 @@ export function textReport(file: string, r: EvaluationResult): string[] {
     );
   }
   for (const b of r.beams) out.push(...beamReport(b));
-  if (r.lines.length > 0) {
-    out.push('');
-    out.push('lines');
-    for (const l of r.lines) out.push(`  ${l.name}: ${l.lower ?? '?'} -> ${l.upper ?? '?'}${l.species ? ` (${l.species})` : ''}`);
-  }
+  for (const l of r.lines) out.push(...lineReport(l));
   const counts = (sev: string): number => r.diagnostics.filter((d) => d.severity === sev).length;
   out.push('');
   out.push(`diagnostics: ${counts('error')} errors, ${counts('warning')} warnings, ${counts('info') + counts('hint')} notes`);
@@ -103,6 +99,26 @@ function termReport(t: TermResult): string[] {
       ).map((x) => '      ' + x),
     );
   }
+  return out;
+}
+
+function lineReport(l: LineResult): string[] {
+  const out = ['', `line ${l.name}: ${l.lower ?? '?'} -> ${l.upper ?? '?'}${l.species ? ` (${l.species})` : ''}`];
+  if (l.g_eff !== undefined) out.push(`  effective Landé factor g_eff = ${trimNumber(l.g_eff, 7)}`);
+  if (l.line_centre_Hz !== undefined) out.push(`  line centre ${frequencyText(l.line_centre_Hz, 13)} (vacuum wavelength ${trimNumber(299792458 / l.line_centre_Hz * 1e9, 9)} nm)`);
+  const at = l.at_fields[0];
+  if (!at) {
+    out.push('  no components: see the diagnostics');
+    return out;
+  }
+  out.push(`  ${at.components.length} Zeeman components at ${at.source.kind} ${at.source.name} = ${fieldText(at.field_T)} (strength = branching fraction of the upper sublevel):`);
+  out.push(
+    ...table(
+      ['offset', 'pol.', 'strength', 'lower', 'upper'],
+      at.components.map((c) => [frequencyText(c.offset_Hz, 9), c.polarization, trimNumber(c.strength, 5), c.lower_label, c.upper_label]),
+    ).map((x) => '    ' + x),
+  );
+  if (l.at_fields.length > 1) out.push(`  (components at the other working fields: sublevel eval --format json)`);
   return out;
 }
 

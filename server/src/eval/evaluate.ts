@@ -8,6 +8,7 @@ import type { LevelModel, SetupModel } from '../model/types';
 import { beamDiagnostics } from './beamDiagnostics';
 import { evaluateBeam } from './beamEvaluation';
 import { evaluateTerm } from './termEvaluation';
+import { evaluateLine } from './lineEvaluation';
 import { EVAL_RULES } from './evalCodes';
 import { evaluateLevel, type EvaluationNote, type WorkingField } from './levelEvaluation';
 import {
@@ -58,7 +59,9 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     beamProblems.push(...beamDiagnostics(b, e));
     return e.result;
   });
-  const problems = sortProblems([...earlier, ...notes.map(noteToProblem), ...beamProblems]);
+  const lineProblems: Problem[] = [];
+  const lines = model.lines.map((l) => evaluateLine(l, fields, gJOf, lineProblems));
+  const problems = sortProblems([...earlier, ...notes.map(noteToProblem), ...beamProblems, ...lineProblems]);
   const result: EvaluationResult = {
     format: EVALUATION_FORMAT,
     version: EVALUATION_VERSION,
@@ -87,11 +90,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
       ...(m.lengthM ? { length_m: m.lengthM.value } : {}),
     })),
     beams,
-    lines: model.lines.map((l) => ({
-      name: l.name,
-      ...(l.lower ? { species: l.lower.species.name, lower: l.lower.name } : {}),
-      ...(l.upper ? { upper: l.upper.name } : {}),
-    })),
+    lines,
     diagnostics: problems.map(toDiagnosticResult),
   };
   return { result, problems };

@@ -185,11 +185,34 @@ export interface BeamResult {
   cautions: string[];
 }
 
+export interface LineComponentResult {
+  /** E_upper − E_lower relative to the zero-field, hyperfine-free line centre, Hz. */
+  offset_Hz: number;
+  /** Absolute frequency, when both levels' energies are known. */
+  absolute_Hz?: number;
+  /** Branching fraction of the upper sublevel into this lower sublevel (they sum to 1 per upper sublevel). */
+  strength: number;
+  /** π: Δm = 0; σ+: m_upper = m_lower + 1; σ−: m_upper = m_lower − 1. */
+  polarization: 'pi' | 'sigma+' | 'sigma-';
+  lower_label: string;
+  upper_label: string;
+  /** Relative intensity seen along the field (σ only). */
+  along_field: number;
+  /** Relative intensity seen across the field (π 1, σ 1/2). */
+  across_field: number;
+}
+
 export interface LineResult {
   name: string;
   species?: string;
   lower?: string;
   upper?: string;
+  /** ½(g_u + g_l) + ¼(g_u − g_l)[J_u(J_u+1) − J_l(J_l+1)]. */
+  g_eff?: number;
+  /** Upper minus lower level energy, when both are known. */
+  line_centre_Hz?: number;
+  /** Components at each working field (at zero field when the file has none). */
+  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; components: LineComponentResult[] }[];
 }
 
 export interface DiagnosticResult {

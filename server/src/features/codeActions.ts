@@ -13,7 +13,10 @@ import { suggestionFixes } from './codeActions/suggestionFixes';
 import type { FixBuilder, FixContext } from './codeActions/types';
 import { sameRange } from './shared/names';
 
-/** Fix builders per problem code; codes not listed get fixes from `data.suggestions` if they have any. */
+/**
+ * Fix builders per problem code. Codes not listed get a removal when their data names a
+ * setting to remove (`data.removeSetting`), else fixes from `data.suggestions` if they have any.
+ */
 const FIXES: Readonly<Record<string, FixBuilder>> = {
   'quadrupole-cannot-act': removeSettingFix,
   'octupole-cannot-act': removeSettingFix,
@@ -49,7 +52,7 @@ export function codeActions(analysis: Analysis, uri: string, request: CodeAction
       const problem = problemFor(analysis, diagnostic);
       if (!problem) continue;
       const ctx: FixContext = { analysis, uri, diagnostic, problem };
-      const builder = FIXES[problem.code] ?? suggestionFixes;
+      const builder = FIXES[problem.code] ?? (typeof problem.data?.removeSetting === 'string' ? removeSettingFix : suggestionFixes);
       out.push(...builder(ctx));
     }
   }

@@ -10,6 +10,7 @@ import type { LevelModel } from '../model/types';
 import { beamSection } from './hover/beamSection';
 import { DEFAULT_HOVER_OPTIONS, type HoverContext, type HoverOptions } from './hover/context';
 import { fieldSection } from './hover/fieldSection';
+import { fineStructureSection } from './hover/fineStructureSection';
 import { hyperfineSection } from './hover/hyperfineSection';
 import { blockWordSection, keySection } from './hover/keySection';
 import { lineSection } from './hover/lineSection';
@@ -30,12 +31,17 @@ import {
   type Declared,
 } from './shared/modelLookup';
 import { nameAt } from './shared/names';
-import { levelResult } from './shared/results';
+import { levelResult, termResult } from './shared/results';
 
 export type { HoverOptions } from './hover/context';
 export { DEFAULT_HOVER_OPTIONS } from './hover/context';
 
 function levelSections(level: LevelModel, ctx: HoverContext, withHyperfine = true): string[] {
+  if (level.kind === 'term') {
+    const t = termResult(ctx.analysis.result, level.species.name, level.name);
+    const title = `*level ${md(level.name)} of ${md(level.species.name)}*`;
+    return [`${title}\n\n${t ? fineStructureSection(t) : termSection(level, undefined)}`];
+  }
   const r = levelResult(ctx.analysis.result, level.species.name, level.name);
   const out = [`*level ${md(level.name)} of ${md(level.species.name)}*\n\n${termSection(level, r)}`];
   if (r && withHyperfine) {

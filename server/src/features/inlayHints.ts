@@ -17,7 +17,7 @@ import { lineFrequency } from './hover/lineSection';
 import { bohrForceN } from './hover/magnetSection';
 import { lastStartingAtOrBefore } from './shared/locate';
 import { beamOfBlock, fieldOfBlock, levelOfNode, lineOfBlock, magnetOfBlock } from './shared/modelLookup';
-import { levelResult } from './shared/results';
+import { levelResult, termResult } from './shared/results';
 
 function hint(position: Position, label: string, tooltip?: string): InlayHint {
   return { position, label, kind: InlayHintKind.Parameter, paddingLeft: true, ...(tooltip ? { tooltip } : {}) };
@@ -30,6 +30,14 @@ function inRange(p: Position, range: Range): boolean {
 function levelHints(analysis: Analysis, block: BlockNode, node: LevelNode, out: InlayHint[]): void {
   const level = levelOfNode(analysis.model, block, node);
   if (!level || !level.valid || !node.designation) return;
+  if (level.kind === 'term') {
+    const t = termResult(analysis.result, level.species.name, level.name);
+    if (!t || t.fine_levels.length < 2) return;
+    const gaps = t.fine_levels.slice(1).map((u, i) => frequencyText(u.shift_Hz - t.fine_levels[i]!.shift_Hz, 4));
+    const tip = t.fine_levels.map((l) => `J = ${l.J_text}: ${frequencyText(l.shift_Hz)}, g_J ${trimNumber(l.g_J, 6)}`).join('\n');
+    out.push(hint(node.designation.range.end, `J ${t.fine_levels.map((l) => l.J_text).join(', ')}: ΔE_fs ${gaps.join(', ')}`, tip));
+    return;
+  }
   const r = levelResult(analysis.result, level.species.name, level.name);
   if (!r) return;
   const g = r.g_J;

@@ -6,7 +6,9 @@ import type { Analysis } from '../eval/analyze';
 import { evaluateBeam } from '../eval/beamEvaluation';
 import { workingFields } from '../eval/evaluate';
 import type { BeamModel, LevelModel, SetupModel } from '../model/types';
-import { levelsCsv, patternCsv, renderLevels, renderPattern, type RenderTheme } from '../render';
+import type { WorkingField } from '../eval/levelEvaluation';
+import { levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, type RenderTheme } from '../render';
+import { linesView } from './linesView';
 import { levelsView } from './levelsView';
 import { patternView } from './patternView';
 
@@ -14,9 +16,14 @@ export type DiagramView = 'levels' | 'pattern' | 'lines';
 
 export interface DiagramRequest {
   view: DiagramView;
-  /** 0-based line of the cursor, to pick the level or beam being edited. */
+  /** 0-based line of the cursor, to pick the level, beam or line being edited. */
   line?: number;
   theme: RenderTheme['kind'];
+  /** Explicit choices (the CLI's --level, --field, --beam, --line); they win over the cursor. */
+  level?: LevelModel;
+  marker?: WorkingField;
+  beam?: BeamModel;
+  lineName?: string;
 }
 
 export type DiagramAnswer = { ok: true; title: string; svg: string; csv: string } | { ok: false; message: string };
@@ -28,22 +35,29 @@ export function diagramFor(analysis: Analysis, req: DiagramRequest): DiagramAnsw
   const gJOf = (l: LevelModel): number | undefined =>
     analysis.result?.levels.find((r) => r.species === l.species.name && r.level === l.name)?.g_J.used;
   if (req.view === 'levels') {
-    const level = levelAt(model, req.line);
+    const level = req.level ?? levelAt(model, req.line);
     if (!level) return { ok: false, message: 'No level to draw: add a species with a level, e.g. `level ground: 2S1/2`.' };
-    const marker = workingFields(model)[0];
+    const marker = req.marker ?? workingFields(model)[0];
     const v = levelsView(level, gJOf(level), model.settings, marker);
     if (!v) return { ok: false, message: `Level '${level.name}' has problems to fix before it can be drawn.` };
     return { ok: true, title: v.data.title, svg: renderLevels(v.data, theme), csv: levelsCsv(v.data) };
   }
   if (req.view === 'pattern') {
-    const beam = beamAt(model, req.line);
+    const beam = req.beam ?? beamAt(model, req.line);
     if (!beam) return { ok: false, message: 'No beam to draw: add a `beam` block with level, source, slits, magnet and drift.' };
     const v = patternView(beam.name, evaluateBeam(beam, gJOf));
     if (!v) return { ok: false, message: `Beam '${beam.name}' cannot be computed yet; see the Problems view.` };
     return { ok: true, title: v.title, svg: renderPattern(v, theme), csv: patternCsv(v) };
   }
-  return { ok: false, message: 'Line components are not computed yet.' };
+  const lines = analysis.result?.lines ?? [];
+  const line = lines.find((l) => l.name === req.lineName) ?? lines.find((l) => contains(model.lines.find((m) => m.name === l.name)?.node.range ?? NOWHERE, req.line)) ?? lines[0];
+  if (!line) return { ok: false, message: 'No line to draw: add one, e.g. `line D2: ground -> upper`.' };
+  const v = linesView(line);
+  if (!v) return { ok: false, message: `Line '${line.name}' has no components to draw; see the Problems view.` };
+  return { ok: true, title: v.title, svg: renderLines(v, theme), csv: linesCsv(v) };
 }
+
+const NOWHERE = { start: { line: -1 }, end: { line: -1 } };
 
 function contains(range: { start: { line: number }; end: { line: number } }, line: number | undefined): boolean {
   return line !== undefined && range.start.line <= line && line <= range.end.line;

@@ -45,7 +45,8 @@ export function removeSettingFix(ctx: FixContext): CodeAction[] {
   const s = settingFor(doc, ctx.problem.range, key);
   if (!s || s.range.start.line !== s.range.end.line) return [];
   const edit = removeOnLine(doc, s.range.start.line, s.range.start.character, s.range.end.character);
-  return [quickFix(ctx, `Remove ${key} (it cannot act here)`, [edit], true)];
+  const cannotAct = ctx.problem.code.endsWith('-cannot-act') || ctx.problem.code === 'hyperfine-without-nucleus';
+  return [quickFix(ctx, cannotAct ? `Remove ${key} (it cannot act here)` : `Remove ${key}`, [edit], true)];
 }
 
 /** `value-extra`: drop the part of the value the setting does not use. */

@@ -30,7 +30,8 @@ export function levelsAtFieldSection(
   const parts: string[] = [];
   let shown = 0;
   let hidden = 0;
-  for (const level of result.levels) {
+  const entries = [...result.levels, ...(result.terms ?? [])];
+  for (const level of entries) {
     const point = levelAtField(level, source);
     if (!point) continue;
     if (shown >= options.levelTables) {

@@ -17,6 +17,7 @@ const LEVEL_KEYS: Record<string, string> = {
   C: 'magnetic-octupole hyperfine constant — acts only when I ≥ 3/2 and J ≥ 3/2',
   g_J: 'measured g_J; it replaces the Landé value in the energies, and the Landé value is still shown',
   energy: 'the level energy above the ground level, used for line frequencies',
+  zeta: 'spin–orbit constant ζ of a term written without J; all its J levels are then computed together, from weak field to Paschen–Back',
 };
 
 const BLOCK_KEYS: Record<string, string> = {

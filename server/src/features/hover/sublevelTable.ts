@@ -4,11 +4,11 @@
  * moment; with the regime the level is in at that field. Falls back to the linear energies
  * when the evaluation has no exact ones.
  */
-import type { FieldPointResult } from '../../eval/resultTypes';
 import { fieldText, frequencyText, trimNumber } from '../../eval/quantityText';
 import { md, mdTable } from '../shared/markdown';
+import type { SublevelsAtField } from '../shared/results';
 
-export function regimeLine(point: FieldPointResult): string | undefined {
+export function regimeLine(point: SublevelsAtField): string | undefined {
   const r = point.regime;
   if (!r) return undefined;
   const limits: string[] = [];
@@ -17,7 +17,7 @@ export function regimeLine(point: FieldPointResult): string | undefined {
   return `regime: ${md(r.verdict)}${limits.length > 0 ? ` — ${limits.join('; ')}` : ''}`;
 }
 
-export function sublevelTable(point: FieldPointResult, maxRows: number): string {
+export function sublevelTable(point: SublevelsAtField, maxRows: number): string {
   const rows = Math.max(0, maxRows);
   let table = '';
   let total = 0;
@@ -29,7 +29,7 @@ export function sublevelTable(point: FieldPointResult, maxRows: number): string 
         .slice(0, rows)
         .map((s) => [md(s.low_label), frequencyText(s.energy_Hz), s.linear_energy_Hz !== undefined ? frequencyText(s.linear_energy_Hz) : '—', trimNumber(s.moment_bohr, 4)]),
     );
-  } else if (point.linear.length > 0) {
+  } else if (point.linear && point.linear.length > 0) {
     total = point.linear.length;
     table = mdTable(['sublevel', 'E/h (linear formula)'], point.linear.slice(0, rows).map((s) => [md(s.label), frequencyText(s.energy_Hz)]));
   }

@@ -43,6 +43,13 @@ export function termSection(level: LevelModel, r: LevelResult | undefined): stri
 /** A valid term whose evaluation is not available (still running, or failed): what the model knows. */
 function unevaluatedTermSection(level: LevelModel): string {
   const term = level.term!;
+  if (term.twoJ === null) {
+    return [
+      mdTitle(`${md(formatTermSymbol(term, 'unicode'))} term`),
+      `${md(formatTermLabel(term.twoS, term.L))} (S = ${halfText(term.twoS)}, L = ${term.L}) has J = ${allowedJ(term.twoS, term.L).map(halfText).join(', ')}`,
+      'its J levels appear once the evaluation has run',
+    ].join('  \n');
+  }
   const twoJ = term.twoJ ?? 0;
   const twoI = level.species.twoI.value;
   const parity = level.configuration?.parity ?? term.parityMark;

@@ -1,5 +1,5 @@
 /** Lookups from the model to the evaluation result (by species and level name). */
-import type { EvaluationResult, FieldPointResult, LevelResult } from '../../eval/resultTypes';
+import type { EvaluationResult, FieldPointResult, LevelResult, TermResult } from '../../eval/resultTypes';
 
 const levelIndex = new WeakMap<EvaluationResult, Map<string, LevelResult>>();
 
@@ -17,7 +17,24 @@ export function levelResult(result: EvaluationResult | undefined, species: strin
   return index.get(key(species, level));
 }
 
-/** A level's sublevels at one working field (a `field` block or a magnet). */
-export function levelAtField(level: LevelResult, source: { kind: 'field' | 'magnet'; name: string }): FieldPointResult | undefined {
-  return level.at_fields.find((f) => f.source.kind === source.kind && f.source.name === source.name);
+/** What a sublevel table needs of one level (or whole term) at one field. */
+export type SublevelsAtField = Pick<FieldPointResult, 'source' | 'field_T' | 'exact' | 'regime'> & { linear?: FieldPointResult['linear'] };
+
+/** A level's (or whole term's) sublevels at one working field (a `field` block or a magnet). */
+export function levelAtField(level: LevelResult | TermResult, source: { kind: 'field' | 'magnet'; name: string }): SublevelsAtField | undefined {
+  const points: SublevelsAtField[] = level.at_fields;
+  return points.find((f) => f.source.kind === source.kind && f.source.name === source.name);
+}
+
+const termIndex = new WeakMap<EvaluationResult, Map<string, TermResult>>();
+
+/** The fine-structure result of a level written as a whole term (no J, with zeta). */
+export function termResult(result: EvaluationResult | undefined, species: string, level: string): TermResult | undefined {
+  if (!result) return undefined;
+  let index = termIndex.get(result);
+  if (!index) {
+    index = new Map((result.terms ?? []).map((t) => [key(t.species, t.level), t]));
+    termIndex.set(result, index);
+  }
+  return index.get(key(species, level));
 }

@@ -1,0 +1,73 @@
+/**
+ * An optical (electric-dipole) line between two levels: selection rules, the effective Landé
+ * factor, and every Zeeman component at each working field from the exact eigenstates.
+ */
+import type { Problem } from '../format/ast';
+import { electricDipoleLine, selectionRules, stickSpectrum, type LineTerm, type Polarization } from '../physics/transitions';
+import type { LevelModel, LineModel } from '../model/types';
+import type { WorkingField } from './levelEvaluation';
+import { hyperfineSpec } from './levelSpec';
+import type { LineComponentResult, LineResult } from './resultTypes';
+
+const POLARIZATION_NAME: Record<Polarization, LineComponentResult['polarization']> = { π: 'pi', 'σ+': 'sigma+', 'σ−': 'sigma-' };
+
+export function evaluateLine(
+  line: LineModel,
+  fields: WorkingField[],
+  gJOf: (l: LevelModel) => number | undefined,
+  problems: Problem[],
+): LineResult {
+  const { lower, upper } = line;
+  const result: LineResult = {
+    name: line.name,
+    ...(lower ? { species: lower.species.name, lower: lower.name } : {}),
+    ...(upper ? { upper: upper.name } : {}),
+    at_fields: [],
+  };
+  if (!lower || !upper || lower.species !== upper.species || lower === upper) return result;
+  const lt = lineTerm(lower);
+  const ut = lineTerm(upper);
+  if (!lt || !ut) return result;
+  const rules = selectionRules(lt, ut);
+  for (const i of rules) {
+    if (i.severity === 'info') continue;
+    problems.push({ code: i.code, severity: i.severity, message: `line '${line.name}': ${i.message}`, range: line.node.headerRange });
+  }
+  if (rules.some((i) => i.severity === 'error')) return result;
+  const gl = gJOf(lower);
+  const gu = gJOf(upper);
+  const ls = gl !== undefined ? hyperfineSpec(lower, gl) : undefined;
+  const us = gu !== undefined ? hyperfineSpec(upper, gu) : undefined;
+  if (!ls || !us || ls.twoI !== us.twoI) return result;
+  const energies =
+    lower.energyHz && upper.energyHz ? { lowerEnergyHz: lower.energyHz.value, upperEnergyHz: upper.energyHz.value } : {};
+  const at = fields.length > 0 ? fields : [{ source: { kind: 'field' as const, name: 'zero' }, tesla: 0, range: line.nameRange }];
+  for (const f of at) {
+    const r = electricDipoleLine(ls, us, f.tesla, energies);
+    if (r.issues.some((i) => i.severity === 'error')) continue;
+    if (result.g_eff === undefined && r.gEff) result.g_eff = r.gEff.formula;
+    if (r.lineCentreHz !== null) result.line_centre_Hz = r.lineCentreHz;
+    result.at_fields.push({
+      source: f.source,
+      field_T: f.tesla,
+      components: stickSpectrum(r.components).map((c, k) => ({
+        offset_Hz: c.offsetHz,
+        ...(r.components[k]!.absoluteHz !== null ? { absolute_Hz: r.components[k]!.absoluteHz! } : {}),
+        strength: c.strength,
+        polarization: POLARIZATION_NAME[c.polarization],
+        lower_label: c.lowerLabel,
+        upper_label: c.upperLabel,
+        along_field: c.alongField,
+        across_field: c.acrossField,
+      })),
+    });
+  }
+  return result;
+}
+
+function lineTerm(level: LevelModel): LineTerm | undefined {
+  const t = level.term;
+  if (!level.valid || level.kind !== 'level' || !t || t.twoJ === null) return undefined;
+  const parity = level.configuration?.parity ?? t.parityMark ?? undefined;
+  return { twoS: t.twoS, L: t.L, twoJ: t.twoJ, ...(parity ? { parity } : {}) };
+}

@@ -1,0 +1,19 @@
+/** Line-components diagram data: the stick spectrum of one line at one working field. */
+import type { LineResult } from '../eval/resultTypes';
+import type { LinesViewData } from '../render';
+import { fieldText } from '../eval/quantityText';
+
+export function linesView(line: LineResult, fieldIndex = 0): LinesViewData | undefined {
+  const at = line.at_fields[fieldIndex];
+  if (!at || at.components.length === 0) return undefined;
+  const where = at.source.name === 'zero' && at.field_T === 0 ? 'zero field' : `${at.source.kind} ${at.source.name}, ${fieldText(at.field_T)}`;
+  return {
+    title: `line ${line.name}: ${line.lower ?? '?'} → ${line.upper ?? '?'} at ${where}`,
+    components: at.components.map((c) => ({
+      offsetHz: c.offset_Hz,
+      strength: c.strength,
+      polarization: c.polarization,
+      label: `${c.lower_label} → ${c.upper_label}`,
+    })),
+  };
+}

@@ -1,0 +1,178 @@
+/**
+ * Property tests: no feature crashes or hangs on any text at any position; formatting only
+ * changes whitespace, keeps every comment and value, and is idempotent; a quick fix only
+ * touches the line(s) of its diagnostic. Case counts are bounded here; FUZZ_RUNS raises them.
+ */
+import fc from 'fast-check';
+import { readdirSync, readFileSync } from 'fs';
+import type { Position, Range } from 'vscode-languageserver-types';
+import { describe, expect, it } from 'vitest';
+import { analyze, type Analysis } from '../../server/src/eval/analyze';
+import { codeActions } from '../../server/src/features/codeActions';
+import { completion } from '../../server/src/features/completion';
+import { definition } from '../../server/src/features/definition';
+import { diagnostics } from '../../server/src/features/diagnostics';
+import { documentSymbols } from '../../server/src/features/documentSymbols';
+import { foldingRanges } from '../../server/src/features/foldingRanges';
+import { formatting } from '../../server/src/features/formatting';
+import { hover } from '../../server/src/features/hover';
+import { inlayHints } from '../../server/src/features/inlayHints';
+import { references } from '../../server/src/features/references';
+import { prepareRename, rename } from '../../server/src/features/rename';
+import { semanticTokens } from '../../server/src/features/semanticTokens';
+import { computeLineStarts, positionToOffset } from '../../server/src/format/positions';
+import { analyzeFast } from '../../server/src/service/fastAnalysis';
+import { applyEdits, editsOf, URI } from './helpers';
+
+const RUNS = Number(process.env.FUZZ_RUNS ?? 60);
+/** A feature call on a small document taking this long means something loops. */
+const HANG_MS = 5000;
+
+const EXAMPLES = readdirSync('examples')
+  .filter((f) => f.endsWith('.sublevel'))
+  .map((f) => readFileSync(`examples/${f}`, 'utf8'));
+
+/** Pieces a typing user puts together, right or wrong. */
+const PIECES = [
+  'species', 'level', 'field', 'magnet', 'beam', 'line', 'settings', 'Na23', 'Rb87', 'Li7', 'Cs133', 'Demo',
+  'ground', 'upper', 'sel', ':', '=', '->', ',', '#', '# note', 'A', 'B', 'C', 'g_J', 'zeta', 'energy', 'mass', 'I', 'g_I', 'mu_I',
+  'gradient', 'length', 'source', 'slits', 'drift', 'detector', 'oven', 'jet', 'speed', 'spread', 'apart', 'g_s', 'reduced_mass',
+  '3s', '3p', '2p2', '4f7', '[Ne]', '2S1/2', '2P°3/2', '²P₃/₂', '3P2', '2P5/2', '2P', '6H°15/2', '0.45', '-3.06', '1/2', '3/2',
+  '1e-3', '0.35(2)', 'T', 'G', 'mT', 'T/m', 'G/cm', 'cm', 'um', 'MHz', 'GHz', 'cm^-1', 'K', 'degC', 'm/s', '%', 'u', 'muN', 'Mhz',
+  '720K', '8cm', 'exact', 'on', '\t', '  ', '\n', '\n  ', '\r\n', '→', '°', 'é', '\u00a0', '|', '*', '[x](y)',
+];
+
+const pieced = fc.array(fc.constantFrom(...PIECES), { maxLength: 60 }).map((parts) => parts.join(' '));
+
+/** Example files with a few random insertions, deletions, duplications and replacements. */
+const mutated = fc
+  .tuple(fc.constantFrom(...EXAMPLES), fc.array(fc.tuple(fc.nat(), fc.nat(12), fc.string({ maxLength: 6 }), fc.nat(3)), { maxLength: 6 }))
+  .map(([seed, edits]) => {
+    let t = seed;
+    for (const [pos, len, ins, kind] of edits) {
+      const p = pos % (t.length + 1);
+      if (kind === 0) t = t.slice(0, p) + ins + t.slice(p);
+      else if (kind === 1) t = t.slice(0, p) + t.slice(p + len);
+      else if (kind === 2) t = t.slice(0, p) + t.slice(p, p + len) + t.slice(p);
+      else t = t.slice(0, p) + ins.replace(/./g, (c) => String.fromCharCode((c.charCodeAt(0) * 7) % 0x3000)) + t.slice(p + len);
+    }
+    return t;
+  });
+
+const anyText = fc.oneof(pieced, mutated, fc.string({ unit: 'binary', maxLength: 300 }));
+
+/** Positions to probe: some at random (also past line ends), the start and the end. */
+function positions(text: string, seeds: number[]): Position[] {
+  const lines = text.split(/\r\n|\r|\n/);
+  const out: Position[] = [{ line: 0, character: 0 }, { line: lines.length - 1, character: lines[lines.length - 1]!.length }];
+  for (const s of seeds) {
+    const line = s % (lines.length + 1);
+    out.push({ line, character: (s >> 4) % ((lines[line]?.length ?? 0) + 3) });
+  }
+  return out;
+}
+
+function rangeInside(inner: Range, outer: Range): boolean {
+  const le = (a: Position, b: Position): boolean => a.line < b.line || (a.line === b.line && a.character <= b.character);
+  return le(outer.start, inner.start) && le(inner.end, outer.end);
+}
+
+function everyFeature(a: Analysis, pos: Position): void {
+  const at: Range = { start: pos, end: pos };
+  hover(a, pos);
+  completion(a, pos);
+  definition(a, URI, pos);
+  references(a, URI, pos, true);
+  prepareRename(a, pos);
+  const r = rename(a, URI, pos, 'renamed');
+  if (r && 'changes' in r) applyEdits(a.doc.text, editsOf(r));
+  const actions = codeActions(a, URI, { range: at, diagnostics: diagnostics(a, URI).filter((d) => d.range.start.line === pos.line) });
+  for (const action of actions) applyEdits(a.doc.text, editsOf(action.edit));
+  semanticTokens(a, { start: { line: pos.line, character: 0 }, end: { line: pos.line + 2, character: 0 } });
+  inlayHints(a, { start: { line: Math.max(0, pos.line - 2), character: 0 }, end: { line: pos.line + 2, character: 0 } });
+  formatting(a, at);
+}
+
+describe('no feature crashes or hangs', () => {
+  it('on random and mutated documents at any position', () => {
+    fc.assert(
+      fc.property(anyText, fc.array(fc.nat(), { minLength: 3, maxLength: 8 }), (text, seeds) => {
+        const started = Date.now();
+        const a = analyze(text);
+        for (const pos of positions(text, seeds)) everyFeature(a, pos);
+        const symbols = documentSymbols(a);
+        for (const s of symbols) expect(rangeInside(s.selectionRange, s.range)).toBe(true);
+        for (const f of foldingRanges(a)) expect(f.endLine).toBeGreaterThan(f.startLine);
+        const { data } = semanticTokens(a);
+        expect(data.length % 5).toBe(0);
+        for (let i = 0; i < data.length; i += 5) expect(data[i + 2]).toBeGreaterThan(0);
+        inlayHints(a, { start: { line: 0, character: 0 }, end: { line: 1e6, character: 0 } });
+        expect(Date.now() - started).toBeLessThan(HANG_MS);
+      }),
+      { numRuns: RUNS },
+    );
+  });
+});
+
+/** Non-blank runs of the text, in order: what formatting must keep exactly. */
+function words(text: string): string[] {
+  return text.split(/\s+/).filter((w) => w !== '');
+}
+
+describe('formatting', () => {
+  it('changes only whitespace, keeps every comment and value, and is idempotent', () => {
+    fc.assert(
+      fc.property(anyText, (text) => {
+        const edits = formatting(analyzeFast(text));
+        const index = { text, lineStarts: computeLineStarts(text) };
+        for (const e of edits) {
+          const old = text.slice(positionToOffset(index, e.range.start), positionToOffset(index, e.range.end));
+          expect(old.trim(), 'an edit replaces only blanks').toBe('');
+          expect(e.newText.trim(), 'an edit writes only blanks').toBe('');
+          expect(e.range.start.line, 'edits stay on one line').toBe(e.range.end.line);
+        }
+        const once = applyEdits(text, edits);
+        expect(words(once)).toEqual(words(text));
+        expect(once.split(/\r\n|\r|\n/).length).toBe(text.split(/\r\n|\r|\n/).length);
+        expect(formatting(analyzeFast(once))).toEqual([]);
+      }),
+      { numRuns: RUNS * 4 },
+    );
+  });
+
+  it('is idempotent on every example file', () => {
+    for (const text of EXAMPLES) {
+      const once = applyEdits(text, formatting(analyzeFast(text)));
+      expect(words(once)).toEqual(words(text));
+      expect(formatting(analyzeFast(once))).toEqual([]);
+    }
+  });
+});
+
+describe('quick fixes', () => {
+  it('never touch text outside their diagnostic’s lines', () => {
+    fc.assert(
+      fc.property(fc.oneof(pieced, mutated), (text) => {
+        const a = analyze(text);
+        const lineStarts = computeLineStarts(text);
+        const index = { text, lineStarts };
+        for (const d of diagnostics(a, URI)) {
+          const from = lineStarts[d.range.start.line] ?? text.length;
+          const to = lineStarts[d.range.end.line + 1] ?? text.length;
+          for (const action of codeActions(a, URI, { range: d.range, diagnostics: [d], only: ['quickfix'] })) {
+            const edits = editsOf(action.edit);
+            expect(edits.length).toBeGreaterThan(0);
+            for (const e of edits) {
+              expect(positionToOffset(index, e.range.start)).toBeGreaterThanOrEqual(from);
+              expect(positionToOffset(index, e.range.end)).toBeLessThanOrEqual(to);
+            }
+            const fixed = applyEdits(text, edits);
+            expect(fixed.slice(0, from)).toBe(text.slice(0, from));
+            expect(fixed.slice(fixed.length - (text.length - to))).toBe(text.slice(to));
+          }
+        }
+      }),
+      { numRuns: RUNS },
+    );
+  });
+});
