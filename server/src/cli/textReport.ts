@@ -1,7 +1,15 @@
 /** The human-readable report printed by `sublevel eval`. */
 import { ATOMIC_MASS_UNIT } from '../physics/constants';
 import { fieldText, frequencyText, lengthText, trimNumber } from '../eval/quantityText';
-import type { BeamResult, EvaluationResult, LevelResult, LineResult, TermResult } from '../eval/resultTypes';
+import type {
+  BeamResult,
+  EvaluationResult,
+  LevelResult,
+  LineResult,
+  MagneticTransitionResult,
+  ResonanceResult,
+  TermResult,
+} from '../eval/resultTypes';
 import { table } from './table';
 
 export function textReport(file: string, r: EvaluationResult): string[] {
@@ -33,6 +41,7 @@ export function textReport(file: string, r: EvaluationResult): string[] {
   }
   for (const b of r.beams) out.push(...beamReport(b));
   for (const l of r.lines) out.push(...lineReport(l));
+  for (const x of r.resonances) out.push(...resonanceReport(x));
   const counts = (sev: string): number => r.diagnostics.filter((d) => d.severity === sev).length;
   out.push('');
   out.push(`diagnostics: ${counts('error')} errors, ${counts('warning')} warnings, ${counts('info') + counts('hint')} notes`);
@@ -119,6 +128,33 @@ function lineReport(l: LineResult): string[] {
     ).map((x) => '    ' + x),
   );
   if (l.at_fields.length > 1) out.push(`  (components at the other working fields: sublevel eval --format json)`);
+  return out;
+}
+
+function resonanceReport(x: ResonanceResult): string[] {
+  const out = ['', `resonance ${x.name}: level ${x.level ?? '?'}${x.species ? ` (${x.species})` : ''}, searched ${fieldText(x.range_T[0])} … ${fieldText(x.range_T[1])}`];
+  const row = (t: MagneticTransitionResult): string[] => [
+    `${t.lower_label} ↔ ${t.upper_label}`,
+    t.kind,
+    frequencyText(t.frequency_Hz, 12),
+    `${trimNumber(t.df_dB_Hz_per_T / 1e4, 7)} Hz/G`,
+    `${trimNumber(t.d2f_dB2_Hz_per_T2 / 1e8, 7)} Hz/G²`,
+  ];
+  for (const f of x.at_fields) {
+    out.push(`  at ${f.source.kind} ${f.source.name} = ${fieldText(f.field_T)}:`);
+    out.push(...table(['transition', 'kind', 'frequency', 'df/dB', 'd²f/dB²'], f.transitions.map(row)).map((l) => '    ' + l));
+  }
+  if (x.field_insensitive) {
+    out.push(
+      x.field_insensitive.length === 0
+        ? '  no field-insensitive point in the range'
+        : `  field-insensitive (df/dB = 0) at: ${x.field_insensitive.map((p) => `${fieldText(p.field_T, 8)} (f = ${frequencyText(p.frequency_Hz, 12)})`).join(', ')}`,
+    );
+  }
+  if (x.resonances) {
+    out.push(x.resonances.length === 0 ? '  not resonant anywhere in the range' : '  resonant at:');
+    out.push(...x.resonances.map((r) => `    ${fieldText(r.field_T, 8)}: ${r.transition.lower_label} ↔ ${r.transition.upper_label} (${r.transition.kind})`));
+  }
   return out;
 }
 

@@ -6,5 +6,7 @@ export const EVAL_RULES = {
   'zeeman-strong-field': { severity: 'info', summary: 'A level is in the strong-field regime; low-field labels mislead.' },
   'beam-unresolved': { severity: 'warning', summary: 'Neighbouring peaks of a beam would merge on the detector.' },
   'beam-geometry': { severity: 'error', summary: 'The beam engine cannot use the geometry or source as written.' },
+  'resonance-unreachable': { severity: 'warning', summary: 'No transition reaches the given frequency in the field range.' },
+  'resonance-no-such-pair': { severity: 'error', summary: 'The named sublevels have no magnetic-dipole or two-photon transition.' },
   'level-too-large': { severity: 'error', summary: 'A level has more sublevels than the engine handles.' },
 } as const satisfies Record<string, { severity: ProblemSeverity; summary: string }>;

@@ -9,6 +9,7 @@ import { beamDiagnostics } from './beamDiagnostics';
 import { evaluateBeam } from './beamEvaluation';
 import { evaluateTerm } from './termEvaluation';
 import { evaluateLine } from './lineEvaluation';
+import { evaluateResonance } from './resonanceEvaluation';
 import { EVAL_RULES } from './evalCodes';
 import { evaluateLevel, type EvaluationNote, type WorkingField } from './levelEvaluation';
 import {
@@ -61,6 +62,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   });
   const lineProblems: Problem[] = [];
   const lines = model.lines.map((l) => evaluateLine(l, fields, gJOf, lineProblems));
+  const resonances = model.resonances.map((r) => evaluateResonance(r, fields, model.settings, gJOf, lineProblems));
   const problems = sortProblems([...earlier, ...notes.map(noteToProblem), ...beamProblems, ...lineProblems]);
   const result: EvaluationResult = {
     format: EVALUATION_FORMAT,
@@ -91,6 +93,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     })),
     beams,
     lines,
+    resonances,
     diagnostics: problems.map(toDiagnosticResult),
   };
   return { result, problems };

@@ -215,6 +215,33 @@ export interface LineResult {
   at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; components: LineComponentResult[] }[];
 }
 
+export interface MagneticTransitionResult {
+  lower_label: string;
+  upper_label: string;
+  /** pi: Δm = 0; sigma±: Δm = ±1 (RF field perpendicular to B); two-photon: Δm = ±2. */
+  kind: 'pi' | 'sigma+' | 'sigma-' | 'two-photon';
+  frequency_Hz: number;
+  df_dB_Hz_per_T: number;
+  d2f_dB2_Hz_per_T2: number;
+  /** |<u| g_J J_q + g_I I_q |l>|²; null for two-photon transitions. */
+  strength: number | null;
+  /** Rabi frequency per tesla of RF amplitude; null for two-photon transitions. */
+  rabi_Hz_per_T: number | null;
+}
+
+export interface ResonanceResult {
+  name: string;
+  species?: string;
+  level?: string;
+  /** The field range searched for resonances and field-insensitive points. */
+  range_T: [number, number];
+  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; transitions: MagneticTransitionResult[] }[];
+  /** Fields where df/dB = 0 for the chosen pair. */
+  field_insensitive?: { field_T: number; frequency_Hz: number; d2f_dB2_Hz_per_T2: number }[];
+  /** Fields where a transition (of the chosen pair, if any) is at the given frequency. */
+  resonances?: { field_T: number; transition: MagneticTransitionResult }[];
+}
+
 export interface DiagnosticResult {
   code: string;
   severity: Problem['severity'];
@@ -239,5 +266,6 @@ export interface EvaluationResult {
   magnets: MagnetResult[];
   beams: BeamResult[];
   lines: LineResult[];
+  resonances: ResonanceResult[];
   diagnostics: DiagnosticResult[];
 }

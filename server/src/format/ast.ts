@@ -66,7 +66,7 @@ export interface LevelNode {
   range: Range;
 }
 
-export type BlockKind = 'species' | 'field' | 'magnet' | 'beam' | 'line' | 'settings';
+export type BlockKind = 'species' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'settings';
 
 export interface BlockNode {
   kind: BlockKind;

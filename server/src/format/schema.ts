@@ -4,7 +4,7 @@
  */
 import type { BlockKind } from './ast';
 
-export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 'beam', 'line', 'settings'];
+export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 'beam', 'line', 'resonance', 'settings'];
 
 export const LEVEL_WORD = 'level';
 
@@ -18,6 +18,7 @@ export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
   magnet: ['field', 'gradient', 'length'],
   beam: ['species', 'level', 'source', 'slits', 'magnet', 'drift', 'detector'],
   line: [],
+  resonance: ['level', 'lower', 'upper', 'frequency', 'range', 'two_photon'],
   settings: ['g_s', 'reduced_mass'],
 };
 

@@ -10,7 +10,8 @@ import { NameIndex } from './nameIndex';
 import { ProblemList } from './problems';
 import { applySettings, DEFAULT_SETTINGS } from './settingsBuilder';
 import { buildSpecies } from './speciesBuilder';
-import type { BeamModel, FieldModel, LineModel, MagnetModel, NameUse, SetupModel, SpeciesModel } from './types';
+import { buildResonance } from './resonanceBuilder';
+import type { BeamModel, FieldModel, LineModel, MagnetModel, NameUse, ResonanceModel, SetupModel, SpeciesModel } from './types';
 
 export function buildModel(doc: SetupDocument): SetupModel {
   const problems = new ProblemList();
@@ -21,6 +22,7 @@ export function buildModel(doc: SetupDocument): SetupModel {
   const magnets = new NameIndex<MagnetModel>('magnet', names);
   const beams = new NameIndex<BeamModel>('beam', names);
   const lines = new NameIndex<LineModel>('line', names);
+  const resonances = new NameIndex<ResonanceModel>('resonance', names);
 
   for (const block of doc.blocks) {
     switch (block.kind) {
@@ -56,6 +58,9 @@ export function buildModel(doc: SetupDocument): SetupModel {
     } else if (block.kind === 'line') {
       const l = buildLine(block, species, names, problems);
       if (l) lines.declare(l, problems);
+    } else if (block.kind === 'resonance') {
+      const r = buildResonance(block, species, names, problems);
+      if (r) resonances.declare(r, problems);
     }
   }
   const model: SetupModel = {
@@ -65,6 +70,7 @@ export function buildModel(doc: SetupDocument): SetupModel {
     magnets: magnets.all(),
     beams: [...beams.all(), ...beamsWithoutName],
     lines: lines.all(),
+    resonances: resonances.all(),
     settings,
     names,
     problems: problems.items,

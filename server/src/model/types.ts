@@ -99,6 +99,27 @@ export interface LineModel {
   upper?: LevelModel;
 }
 
+/** A sublevel named by its low-field quantum numbers: F and m_F (or J and m_J for a term), twice their values. */
+export interface SublevelName {
+  twoF: number;
+  twoM: number;
+  range: Range;
+}
+
+/** Questions about RF/microwave (magnetic-dipole) transitions within one level. */
+export interface ResonanceModel {
+  name: string;
+  node: BlockNode;
+  nameRange: Range;
+  level?: LevelModel;
+  lower?: SublevelName;
+  upper?: SublevelName;
+  frequencyHz?: Valued<number>;
+  /** Field range for resonance and field-insensitive searches. */
+  rangeT: { fromT: number; toT: number; range?: Range };
+  twoPhoton: boolean;
+}
+
 export interface SettingsModel {
   /** Electron spin g-factor for Landé formulas: CODATA |g_e| or exactly 2. */
   gS: 'exact' | 2;
@@ -107,7 +128,7 @@ export interface SettingsModel {
 
 /** A place in the file that names something, for go-to-definition, references and rename. */
 export interface NameUse {
-  kind: 'species' | 'level' | 'field' | 'magnet' | 'beam' | 'line';
+  kind: 'species' | 'level' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance';
   name: string;
   range: Range;
   /** The declaration it resolves to, if any. */
@@ -122,6 +143,7 @@ export interface SetupModel {
   magnets: MagnetModel[];
   beams: BeamModel[];
   lines: LineModel[];
+  resonances: ResonanceModel[];
   settings: SettingsModel;
   names: NameUse[];
   /** Problems found while building the model (the parser's own are in doc.problems). */

@@ -1,0 +1,89 @@
+/** Builds `resonance` blocks: which level, which pair of sublevels, which frequency, over which field range. */
+import type { BlockNode, SettingNode } from '../format/ast';
+import { resolveLevel, type NameIndex } from './nameIndex';
+import type { ProblemList } from './problems';
+import { readPartQuantity, readSettingQuantity, readSettingWord, singlePart } from './settingReaders';
+import type { NameUse, ResonanceModel, SpeciesModel, SublevelName } from './types';
+
+/** Default search range when the file gives none: wide enough for electron-spin resonance at X band. */
+export const DEFAULT_RESONANCE_RANGE_T = { fromT: 0, toT: 1 };
+
+export function buildResonance(node: BlockNode, species: NameIndex<SpeciesModel>, uses: NameUse[], problems: ProblemList): ResonanceModel | undefined {
+  if (!node.name) {
+    problems.add('name-missing', 'a resonance needs a name, as in `resonance clock`', node.keyword.range);
+    return undefined;
+  }
+  const r: ResonanceModel = { name: node.name.text, node, nameRange: node.name.range, rangeT: { ...DEFAULT_RESONANCE_RANGE_T }, twoPhoton: false };
+  for (const s of node.settings) {
+    switch (s.key.text) {
+      case 'level': {
+        const part = singlePart(s, problems, 'level name');
+        if (!part) break;
+        const dot = part.text.indexOf('.');
+        const name = dot > 0 ? { text: part.text.slice(dot + 1), range: part.range } : part;
+        const qualifier = dot > 0 ? { text: part.text.slice(0, dot), range: part.range } : undefined;
+        const lv = resolveLevel(qualifier ? { qualifier, name } : { name }, species, undefined, uses, problems);
+        if (lv) r.level = lv;
+        break;
+      }
+      case 'lower':
+      case 'upper': {
+        const n = readSublevelName(s, problems);
+        if (n) r[s.key.text] = n;
+        break;
+      }
+      case 'frequency': {
+        const f = readSettingQuantity(s, 'frequency-like', problems, 'a transition frequency, e.g. 6.8347 GHz');
+        if (f && f.value <= 0) problems.add('value-out-of-range', `frequency must be positive, got ${s.valueText.text}`, s.valueText.range);
+        else if (f) r.frequencyHz = f;
+        break;
+      }
+      case 'range': {
+        const parts = s.groups.flat();
+        if (parts.length !== 2) {
+          problems.add('resonance-range-malformed', 'write range = <from field>, <to field>, e.g. range = 0 G, 10 G', s.valueText.range);
+          break;
+        }
+        const a = readPartQuantity(parts[0]!, 'flux-density', problems, 'range');
+        const b = readPartQuantity(parts[1]!, 'flux-density', problems, 'range');
+        if (!a || !b) break;
+        if (a.value === b.value) {
+          problems.add('resonance-range-malformed', 'the range starts and ends at the same field; give two different fields', s.valueText.range);
+          break;
+        }
+        r.rangeT = { fromT: Math.min(a.value, b.value), toT: Math.max(a.value, b.value), range: s.valueText.range };
+        break;
+      }
+      case 'two_photon': {
+        const w = readSettingWord(s, ['on', 'off'] as const, problems);
+        if (w) r.twoPhoton = w === 'on';
+        break;
+      }
+      default:
+        break;
+    }
+  }
+  if (!r.level) problems.add('resonance-incomplete', `resonance '${r.name}' needs a level: level = <name>`, node.name.range);
+  if ((r.lower === undefined) !== (r.upper === undefined)) {
+    problems.add('resonance-incomplete', `resonance '${r.name}' names one sublevel of its pair; give both lower and upper`, node.name.range);
+  }
+  return r;
+}
+
+/** `lower = 1 -1` (F and m_F; J and m_J for a term), also written `1, -1`. */
+function readSublevelName(s: SettingNode, problems: ProblemList): SublevelName | undefined {
+  const parts = s.groups.flat();
+  const bad = (): undefined => {
+    problems.add('resonance-sublevel-malformed', `write ${s.key.text} = <F> <m_F>, e.g. ${s.key.text} = 2 +1 (F and m_F of the low-field label)`, s.valueText.range);
+    return undefined;
+  };
+  if (parts.length !== 2) return bad();
+  const twice = parts.map((p) => (p.kind === 'number' ? 2 * p.number.value : NaN));
+  if (twice.some((t) => !Number.isFinite(t) || Math.abs(t - Math.round(t)) > 1e-9)) return bad();
+  const [twoF, twoM] = twice.map(Math.round) as [number, number];
+  if (twoF < 0 || Math.abs(twoM) > twoF || (twoF - twoM) % 2 !== 0) {
+    problems.add('resonance-sublevel-malformed', `m must run from −F to F in whole steps; got F = ${parts[0]!.text}, m = ${parts[1]!.text}`, s.valueText.range);
+    return undefined;
+  }
+  return { twoF, twoM, range: s.valueText.range };
+}
