@@ -1,14 +1,15 @@
 /**
- * VS Code entry point: starts the Sublevel language server over IPC for `.sublevel` files.
- * All checking and physics happen in the server; this file only wires the client up.
+ * VS Code entry point: starts the Sublevel language server over IPC for `.sublevel` files and
+ * registers the diagram panel. All checking and physics happen in the server.
  */
 import * as path from 'path';
-import type { ExtensionContext } from 'vscode';
-import { LanguageClient, LanguageClientOptions, ServerOptions, TransportKind } from 'vscode-languageclient/node';
+import * as vscode from 'vscode';
+import { LanguageClient, type LanguageClientOptions, type ServerOptions, TransportKind } from 'vscode-languageclient/node';
+import { DiagramPanel, PANEL_VIEW_TYPE } from './host/diagramPanel';
 
 let client: LanguageClient | undefined;
 
-export async function activate(context: ExtensionContext): Promise<void> {
+export async function activate(context: vscode.ExtensionContext): Promise<void> {
   const serverModule = context.asAbsolutePath(path.join('dist', 'server.js'));
   const serverOptions: ServerOptions = {
     run: { module: serverModule, transport: TransportKind.ipc },
@@ -16,9 +17,17 @@ export async function activate(context: ExtensionContext): Promise<void> {
   };
   const clientOptions: LanguageClientOptions = {
     documentSelector: [{ language: 'sublevel' }],
+    synchronize: { configurationSection: 'sublevel' },
   };
-  client = new LanguageClient('sublevel', 'Sublevel', serverOptions, clientOptions);
-  await client.start();
+  const c = new LanguageClient('sublevel', 'Sublevel', serverOptions, clientOptions);
+  client = c;
+  context.subscriptions.push(
+    vscode.commands.registerCommand('sublevel.showDiagrams', () => DiagramPanel.show(context, c)),
+    vscode.window.registerWebviewPanelSerializer(PANEL_VIEW_TYPE, {
+      deserializeWebviewPanel: async (panel, state) => DiagramPanel.restore(panel, context, c, state),
+    }),
+  );
+  await c.start();
 }
 
 export async function deactivate(): Promise<void> {

@@ -1,0 +1,207 @@
+/**
+ * Editor benchmark on a generated 2,000-line setup:
+ *   - edit → fresh diagnostics (median; goal < 16 ms): the fast phase every keystroke pays
+ *     (parse, model, carry-over of the last evaluation's problems, LSP conversion), measured in
+ *     the language service and over JSON-RPC against the built server (pull request);
+ *   - the evaluation of the whole file (runs in the server's worker thread, off the keystroke path);
+ *   - hover latency (p95; goal < 5 ms) on an evaluated version, in the service and over JSON-RPC;
+ *   - cold start (spawn `node dist/server.js --stdio` → `initialize` answer; goal < 300 ms).
+ * Needs dist/server.js for the protocol figures (`npm run bench` builds it).
+ */
+import { spawn } from 'node:child_process';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import {
+  createProtocolConnection,
+  type ProtocolConnection,
+  StreamMessageReader,
+  StreamMessageWriter,
+} from 'vscode-languageserver-protocol/node';
+import { evaluateText, inProcessEvaluator } from '../server/src/service/evaluator';
+import { LanguageService } from '../server/src/service/languageService';
+
+const LINES = 2000;
+const EDITS = 60;
+const HOVERS = 1000;
+const PROTOCOL_EDITS = 30;
+const PROTOCOL_HOVERS = 200;
+const COLD_STARTS = 5;
+const URI = 'file:///bench/generated.sublevel';
+
+/** A plausible large setup: many species with levels, some fields and magnets, beams and lines. */
+export function generateSetup(lines: number): string {
+  const out: string[] = ['# Generated setup for the editor benchmark (invented numbers).', ''];
+  for (let i = 0; out.length < lines; i++) {
+    out.push(
+      `species Demo${i}                       # hand-made species ${i}`,
+      `  mass = ${(40 + (i % 150) + 0.913).toFixed(3)} u`,
+      '  I    = 3/2',
+      '  g_I  = -0.000995',
+      `  level g${i}: 5s 2S1/2  A = ${(3417.34 + i).toFixed(2)} MHz`,
+      `  level p${i}: 5p 2P°3/2  A = 84.72 MHz  B = 12.5 MHz`,
+      `  level d${i}: 4d 2D5/2`,
+    );
+    if (i % 10 === 0) out.push(`field f${i} = ${(i % 50) + 1} G`);
+    if (i % 20 === 0) {
+      out.push(`magnet m${i}`, '  field    = 0.4 T', '  gradient = 120 T/m', '  length   = 6 cm');
+      out.push(`beam b${i}`, `  species  = Demo${i}`, `  level    = g${i}`, '  source   = oven 450 K', '  slits    = 80 um, 50 um apart 40 cm', `  magnet   = m${i}`, '  drift    = 30 cm', '  detector = 25 um');
+    }
+    out.push(`line L${i}: g${i} -> p${i}`, '');
+  }
+  return out.slice(0, lines).join('\n');
+}
+
+/** The text with the number on one `mass` line changed: a typical keystroke. */
+function edited(text: string, k: number): string {
+  const lines = text.split('\n');
+  const massLines = lines.flatMap((l, i) => (l.startsWith('  mass = ') ? [i] : []));
+  const at = massLines[(k * 7919) % massLines.length]!;
+  lines[at] = `  mass = ${(40 + (k % 97) + 0.5).toFixed(3)} u`;
+  return lines.join('\n');
+}
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.floor(s.length / 2)]!;
+}
+
+function p95(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.min(s.length - 1, Math.floor(0.95 * s.length))]!;
+}
+
+function ms(t0: bigint): number {
+  return Number(process.hrtime.bigint() - t0) / 1e6;
+}
+
+/** Positions on words of the text (names, keys, values, terms), spread over the file. */
+function hoverPositions(text: string, count: number): { line: number; character: number }[] {
+  const lines = text.split('\n');
+  const out: { line: number; character: number }[] = [];
+  for (let k = 0; out.length < count; k++) {
+    const line = (k * 104729) % lines.length;
+    const words = [...lines[line]!.matchAll(/[^\s=:#,]+/g)];
+    if (words.length === 0) continue;
+    const w = words[k % words.length]!;
+    out.push({ line, character: (w.index ?? 0) + 1 });
+  }
+  return out;
+}
+
+async function serviceFigures(text: string): Promise<string[]> {
+  const svc = new LanguageService(() => undefined, inProcessEvaluator());
+  const doc = (version: number, t: string) => ({ uri: URI, version, getText: () => t });
+  for (let i = 0; i < 5; i++) svc.diagnostics(doc(-1 - i, edited(text, i))); // JIT warm-up
+
+  const evalTimes: number[] = [];
+  for (let i = 0; i < 3; i++) {
+    const t0 = process.hrtime.bigint();
+    evaluateText(text);
+    evalTimes.push(ms(t0));
+  }
+
+  await svc.evaluate(doc(1, text)); // so that later versions carry its problems over
+  const diag: number[] = [];
+  let items = 0;
+  for (let k = 0; k < EDITS; k++) {
+    const d = doc(2 + k, edited(text, k));
+    const t0 = process.hrtime.bigint();
+    items = svc.diagnostics(d).items.length;
+    diag.push(ms(t0));
+  }
+
+  const last = doc(1000, text);
+  await svc.evaluate(last);
+  const positions = hoverPositions(text, HOVERS);
+  for (const p of positions.slice(0, 50)) await svc.hover(last, p); // warm-up
+  const hov: number[] = [];
+  for (const p of positions) {
+    const t0 = process.hrtime.bigint();
+    await svc.hover(last, p);
+    hov.push(ms(t0));
+  }
+  return [
+    `language service (in process), ${LINES} lines:`,
+    `  edit → fresh diagnostics (parse + model + carry-over, ${items} items): median ${median(diag).toFixed(2)} ms, p95 ${p95(diag).toFixed(2)} ms (goal < 16 ms: ${median(diag) < 16 ? 'met' : 'MISSED'})`,
+    `  evaluation of the whole file (worker thread, off the keystroke path): median ${median(evalTimes).toFixed(0)} ms`,
+    `  hover on an evaluated version: median ${median(hov).toFixed(3)} ms, p95 ${p95(hov).toFixed(3)} ms (goal < 5 ms: ${p95(hov) < 5 ? 'met' : 'MISSED'})`,
+  ];
+}
+
+interface Started {
+  connection: ProtocolConnection;
+  exited: Promise<void>;
+  kill: () => void;
+  initializeMs: number;
+}
+
+async function startServer(server: string, capabilities: object): Promise<Started> {
+  const t0 = process.hrtime.bigint();
+  const child = spawn(process.execPath, [server, '--stdio'], { stdio: ['pipe', 'pipe', 'ignore'] });
+  const connection = createProtocolConnection(new StreamMessageReader(child.stdout!), new StreamMessageWriter(child.stdin!));
+  connection.onRequest(() => null);
+  connection.onNotification(() => undefined);
+  connection.listen();
+  await connection.sendRequest('initialize', { processId: process.pid, rootUri: null, capabilities, workspaceFolders: null });
+  const initializeMs = ms(t0);
+  await connection.sendNotification('initialized', {});
+  const exited = new Promise<void>((resolve) => child.on('exit', () => resolve()));
+  return { connection, exited, kill: () => child.kill(), initializeMs };
+}
+
+async function stop(s: Started): Promise<void> {
+  await s.connection.sendRequest('shutdown');
+  await s.connection.sendNotification('exit');
+  await Promise.race([s.exited, new Promise((r) => setTimeout(r, 2000))]);
+  s.kill();
+  s.connection.dispose();
+}
+
+async function protocolFigures(text: string): Promise<string[]> {
+  const server = path.resolve('dist/server.js');
+  if (!existsSync(server)) return ['protocol figures skipped: dist/server.js is missing (run `node esbuild.mjs`)'];
+  const cold: number[] = [];
+  for (let i = 0; i < COLD_STARTS; i++) {
+    const s = await startServer(server, {});
+    cold.push(s.initializeMs);
+    await stop(s);
+  }
+
+  const s = await startServer(server, { textDocument: { diagnostic: {} } });
+  const c = s.connection;
+  await c.sendNotification('textDocument/didOpen', { textDocument: { uri: URI, languageId: 'sublevel', version: 1, text } });
+  await c.sendRequest('textDocument/diagnostic', { textDocument: { uri: URI } }); // loads the service
+  const diag: number[] = [];
+  let current = text;
+  for (let k = 0; k < PROTOCOL_EDITS; k++) {
+    current = edited(text, k);
+    const t0 = process.hrtime.bigint();
+    await c.sendNotification('textDocument/didChange', { textDocument: { uri: URI, version: 2 + k }, contentChanges: [{ text: current }] });
+    await c.sendRequest('textDocument/diagnostic', { textDocument: { uri: URI } });
+    diag.push(ms(t0));
+  }
+  // The first hover on a version waits for its evaluation; time it, then the warm ones.
+  const t0 = process.hrtime.bigint();
+  await c.sendRequest('textDocument/hover', { textDocument: { uri: URI }, position: { line: 4, character: 9 } });
+  const firstHover = ms(t0);
+  const hov: number[] = [];
+  for (const p of hoverPositions(current, PROTOCOL_HOVERS)) {
+    const h0 = process.hrtime.bigint();
+    await c.sendRequest('textDocument/hover', { textDocument: { uri: URI }, position: p });
+    hov.push(ms(h0));
+  }
+  await stop(s);
+  return [
+    'built server over JSON-RPC (stdio):',
+    `  cold start (spawn → initialize answer): median ${median(cold).toFixed(0)} ms, min ${Math.min(...cold).toFixed(0)} ms (goal < 300 ms: ${median(cold) < 300 ? 'met' : 'MISSED'})`,
+    `  edit → fresh diagnostics (didChange + pull, whole text sent): median ${median(diag).toFixed(2)} ms, p95 ${p95(diag).toFixed(2)} ms`,
+    `  first hover after an edit (waits for the worker's evaluation): ${firstHover.toFixed(0)} ms`,
+    `  hover on an evaluated version: median ${median(hov).toFixed(2)} ms, p95 ${p95(hov).toFixed(2)} ms`,
+  ];
+}
+
+export async function runEditorBench(): Promise<{ name: string; lines: string[] }> {
+  const text = generateSetup(LINES);
+  const lines = [...(await serviceFigures(text)), ...(await protocolFigures(text))];
+  return { name: `editor: ${LINES}-line generated setup`, lines };
+}
