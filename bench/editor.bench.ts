@@ -14,6 +14,7 @@ import path from 'node:path';
 import {
   createProtocolConnection,
   type ProtocolConnection,
+  ShutdownRequest,
   StreamMessageReader,
   StreamMessageWriter,
 } from 'vscode-languageserver-protocol/node';
@@ -150,7 +151,7 @@ async function startServer(server: string, capabilities: object): Promise<Starte
 }
 
 async function stop(s: Started): Promise<void> {
-  await s.connection.sendRequest('shutdown');
+  await s.connection.sendRequest(ShutdownRequest.type);
   await s.connection.sendNotification('exit');
   await Promise.race([s.exited, new Promise((r) => setTimeout(r, 2000))]);
   s.kill();

@@ -12,6 +12,7 @@ import {
   type InitializeResult,
   type ProtocolConnection,
   type PublishDiagnosticsParams,
+  ShutdownRequest,
   StreamMessageReader,
   StreamMessageWriter,
 } from 'vscode-languageserver-protocol/node';
@@ -102,7 +103,7 @@ export async function startClient(capabilities: ClientCapabilities, answers: Rec
       });
     },
     async stop() {
-      await connection.sendRequest('shutdown');
+      await connection.sendRequest(ShutdownRequest.type);
       await connection.sendNotification('exit');
       const code = await exited;
       connection.dispose();

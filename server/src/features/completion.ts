@@ -25,6 +25,7 @@ const BLOCK_WORD_DETAIL: Record<BlockKind, string> = {
   magnet: 'magnet <name> — field, gradient, length',
   beam: 'beam <name> — species, level, source, slits, magnet, drift, detector',
   line: 'line <name>: <lower> -> <upper>',
+  resonance: 'resonance <name> — RF/microwave transitions of a level: level, lower, upper, frequency, range',
   settings: 'settings — g_s, reduced_mass',
 };
 
@@ -100,6 +101,10 @@ function valueCompletions(c: LineContext, model: SetupModel | undefined, block: 
       const beam = model?.beams.find((b) => b.node === block);
       return levelNameItems(model, c, beam?.species);
     }
+    case 'resonance.level':
+      return empty ? levelNameItems(model, c) : [];
+    case 'resonance.two_photon':
+      return empty ? wordItems(['on', 'off'], c.replace) : [];
     case 'beam.magnet':
       return empty ? (model?.magnets ?? []).map((m, i) => item(m.name, CompletionItemKind.Variable, c.replace, { order: i })) : [];
     case 'beam.source':

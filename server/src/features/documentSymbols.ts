@@ -9,6 +9,7 @@ const KIND: Record<BlockKind, SymbolKind> = {
   magnet: SymbolKind.Object,
   beam: SymbolKind.Struct,
   line: SymbolKind.Event,
+  resonance: SymbolKind.Function,
   settings: SymbolKind.Module,
 };
 

@@ -27,6 +27,7 @@ const NAME_TYPE: Record<NameUse['kind'], TokenType> = {
   magnet: 'variable',
   beam: 'variable',
   line: 'variable',
+  resonance: 'variable',
 };
 
 class Collector {

@@ -8,6 +8,7 @@ const BLOCK_WORDS: Record<BlockKind, string> = {
   magnet: 'a state-selecting magnet: the field at the beam, its gradient and its length',
   beam: 'an atomic beam: species, level, source, slits, magnet, drift and detector',
   line: 'an electric-dipole line between two levels of one species',
+  resonance: 'magnetic-dipole (RF/microwave) transitions between the sublevels of one level: frequencies, field sensitivity, field-insensitive points and resonance fields',
   settings: 'file-wide choices: g_s (exact or 2) and reduced_mass (on or off)',
 };
 
@@ -35,6 +36,12 @@ const BLOCK_KEYS: Record<string, string> = {
   'beam.magnet': 'the magnet the beam passes (a magnet block of this file)',
   'beam.drift': 'distance from the magnet exit to the detector',
   'beam.detector': 'detector width or resolution',
+  'resonance.level': 'the level whose sublevels the RF or microwave field couples',
+  'resonance.lower': 'the lower sublevel by its low-field label, F and m_F: e.g. 1 -1',
+  'resonance.upper': 'the upper sublevel by its low-field label, F and m_F: e.g. 2 +1',
+  'resonance.frequency': 'a source frequency: the fields where a transition is resonant with it are found',
+  'resonance.range': 'the field range searched: <from>, <to>, e.g. 0 G, 10 G',
+  'resonance.two_photon': 'on: also two-photon transitions (Δm = ±2)',
   'settings.g_s': 'electron spin g-factor in the Landé formula: exact (CODATA) or 2 (textbook fractions)',
   'settings.reduced_mass': 'on: g_L = 1 − m_e/M instead of 1',
 };

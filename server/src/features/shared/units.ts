@@ -80,6 +80,8 @@ export function expectedDimension(c: ValueContext): Dimension | undefined {
       return 'flux-density';
     case 'magnet':
       return c.key === 'field' ? 'flux-density' : c.key === 'gradient' ? 'gradient' : c.key === 'length' ? 'length' : undefined;
+    case 'resonance':
+      return c.key === 'frequency' ? 'frequency-like' : c.key === 'range' ? 'flux-density' : undefined;
     case 'beam':
       if (['drift', 'detector', 'slits'].includes(c.key)) return 'length';
       if (c.key === 'source') {
