@@ -11,13 +11,8 @@
 import { spawn } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
-import {
-  createProtocolConnection,
-  type ProtocolConnection,
-  ShutdownRequest,
-  StreamMessageReader,
-  StreamMessageWriter,
-} from 'vscode-languageserver-protocol/node';
+import { createMessageConnection, type MessageConnection, StreamMessageReader, StreamMessageWriter } from 'vscode-jsonrpc/node';
+import { ShutdownRequest } from 'vscode-languageserver-protocol';
 import { evaluateText, inProcessEvaluator } from '../server/src/service/evaluator';
 import { LanguageService } from '../server/src/service/languageService';
 
@@ -42,8 +37,8 @@ export function generateSetup(lines: number): string {
       `  level p${i}: 5p 2P°3/2  A = 84.72 MHz  B = 12.5 MHz`,
       `  level d${i}: 4d 2D5/2`,
     );
-    if (i % 10 === 0) out.push(`field f${i} = ${(i % 50) + 1} G`);
-    if (i % 20 === 0) {
+    if (i % 40 === 0) out.push(`field f${i} = ${[0.5, 3, 10, 50][(i / 40) % 4]} G`);
+    if (i % 40 === 20) {
       out.push(`magnet m${i}`, '  field    = 0.4 T', '  gradient = 120 T/m', '  length   = 6 cm');
       out.push(`beam b${i}`, `  species  = Demo${i}`, `  level    = g${i}`, '  source   = oven 450 K', '  slits    = 80 um, 50 um apart 40 cm', `  magnet   = m${i}`, '  drift    = 30 cm', '  detector = 25 um');
     }
@@ -130,7 +125,7 @@ async function serviceFigures(text: string): Promise<string[]> {
 }
 
 interface Started {
-  connection: ProtocolConnection;
+  connection: MessageConnection;
   exited: Promise<void>;
   kill: () => void;
   initializeMs: number;
@@ -139,7 +134,7 @@ interface Started {
 async function startServer(server: string, capabilities: object): Promise<Started> {
   const t0 = process.hrtime.bigint();
   const child = spawn(process.execPath, [server, '--stdio'], { stdio: ['pipe', 'pipe', 'ignore'] });
-  const connection = createProtocolConnection(new StreamMessageReader(child.stdout!), new StreamMessageWriter(child.stdin!));
+  const connection = createMessageConnection(new StreamMessageReader(child.stdout!), new StreamMessageWriter(child.stdin!));
   connection.onRequest(() => null);
   connection.onNotification(() => undefined);
   connection.listen();

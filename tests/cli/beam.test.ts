@@ -55,6 +55,7 @@ describe('beam results through the setup file', () => {
     expect(beam.all_resolved).toBe(false);
     const p = a.problems.find((x) => x.code === 'beam-unresolved')!;
     expect(p.range.start.line).toBe(6); // the magnet's gradient setting
+    expect(p.message).toMatch(/a gradient of at least .* or a magnet of at least/);
     const g = p.data!.resolvingGradientTPerM as number;
     expect(g).toBeGreaterThan(0.5);
     // Feeding the suggested gradient back in resolves the pattern.
@@ -66,7 +67,20 @@ describe('beam results through the setup file', () => {
     const wide = geometry.replace('slits = 30 um, 30 um apart 50 cm', 'slits = 5 cm, 5 cm apart 10 cm');
     const { a, beam } = beamOf('species X\n  mass = 52 u\n  level g: 3S1\n' + wide);
     expect(beam.computed).toBe(false);
-    expect(a.problems.map((p) => p.code)).toContain('beam-geometry');
+    expect(a.problems.map((p) => p.code)).toContain('beam-slits-too-wide');
+  });
+
+  it('populations select sublevels (e.g. after optical pumping): only the listed ones reach the detector', () => {
+    const { beam } = beamOf('species X\n  mass = 52 u\n  level g: 3S1\n' + geometry + '  populations = 1 +1 1\n');
+    for (const s of beam.sublevels) expect(s.population, s.label).toBe(s.label.endsWith('m_J=+1') ? 1 : 0);
+    expect(beam.peaks).toHaveLength(1);
+  });
+
+  it('a detector placed off the beam reports the fraction it collects and warns when it misses', () => {
+    const far = geometry.replace('detector = 10 um', 'detector = 10 um at 1 m');
+    const { a, beam } = beamOf('species X\n  mass = 40 u\n  level g: 2S1/2\n' + far);
+    expect(beam.detector_fraction).toBeLessThan(1e-6);
+    expect(a.problems.map((p) => p.code)).toContain('beam-misses-detector');
   });
 });
 

@@ -199,7 +199,7 @@ describe('quick fixes', () => {
   it('uses the analysis data when the client dropped Diagnostic.data', () => {
     const text = 'magnet m\n  gradiant = 180 T/m\n';
     const analysis = analysisOf(text);
-    const d = diagnostics(analysis, URI).find((x) => x.code === 'syntax-unknown-key')!;
+    const d = { ...diagnostics(analysis, URI).find((x) => x.code === 'syntax-unknown-key')! };
     delete d.data;
     const fixes = codeActions(analysis, URI, { range: d.range, diagnostics: [d] });
     expect(fixes.map((f) => f.title)).toContain("Change to 'gradient'");

@@ -1,7 +1,7 @@
 import type { CompletionItem } from 'vscode-languageserver-types';
 import { describe, expect, it } from 'vitest';
 import { completion } from '../../server/src/features/completion';
-import { LEVEL_KEYS } from '../../server/src/format/schema';
+import { BLOCK_WORDS, LEVEL_KEYS } from '../../server/src/format/schema';
 import { applyEdits, atCursor } from './helpers';
 
 interface Case {
@@ -14,7 +14,7 @@ interface Case {
 }
 
 const CASES: Case[] = [
-  { name: 'block words at the top of a file', text: '|', exactly: ['species', 'field', 'magnet', 'beam', 'line', 'settings'] },
+  { name: 'block words at the top of a file', text: '|', exactly: [...BLOCK_WORDS] },
   { name: 'magnet keys inside a magnet', text: 'magnet m\n  |', has: ['field', 'gradient', 'length', 'species', 'beam'], hasNot: ['A', 'mass'] },
   { name: 'species keys and `level` in a species', text: 'species Na23\n  |', has: ['mass', 'I', 'g_I', 'mu_I', 'level'], hasNot: ['A'] },
   { name: 'level keys once a level is above', text: 'species Na23\n  level g: 3s 2S1/2\n  |', has: ['A', 'B', 'C', 'g_J', 'energy', 'level'] },

@@ -166,3 +166,25 @@ describe('hover on a whole term with fine structure', () => {
     expect(text).toContain('| 3/2 | 3.35 GHz | 1.334106 |');
   });
 });
+
+describe('hover on lines and resonances', () => {
+  const RB = 'species Rb87\n  level ground: 5s 2S1/2\n  level p32: 5p 2P°3/2\nfield trap = 3.23 G\n';
+
+  it('lists a line’s Zeeman components, strongest first, with g_eff', () => {
+    // Stretched D2 components (F=2, m_F=±2 → F'=3, m_F=±3) have branching fraction 1 (textbook angular momentum).
+    const { analysis, position } = atCursor(`${RB}line D|2: ground -> p32\n`);
+    const text = plain(hoverText(hover(analysis, position)));
+    expect(text).toContain('effective Landé factor g_eff = 1.16967');
+    expect(text).toContain('68 components at field trap (3.23 G), strongest first');
+    expect(text).toMatch(/\| σ[−+] \| F=2, m_F=[-+]2 → F=3, m_F=[-+]3 \| \S+ GHz \| 1 \|/);
+  });
+
+  it('shows the field-insensitive point of a two-photon pair', () => {
+    // Rb-87 ground-state two-photon pair |1,−1> ↔ |2,+1>: field-insensitive at 3.228917(3) G
+    // (published trapped-atom clock measurement, Phys. Rev. A 66, 053616 (2002); from memory).
+    const { analysis, position } = atCursor(`${RB}resonance cl|ock\n  level = ground\n  lower = 1 -1\n  upper = 2 +1\n  range = 0 G, 10 G\n`);
+    const text = plain(hoverText(hover(analysis, position)));
+    expect(text).toMatch(/field-insensitive point: 3\.2289\d* G at 6\.83467\d* GHz/);
+    expect(text).toContain('2-photon | F=1, m_F=-1 → F=2, m_F=+1');
+  });
+});

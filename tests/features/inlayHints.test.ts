@@ -36,8 +36,9 @@ describe('inlay hints', () => {
       '5:15 μ_B·B/h 6.9981 GHz',
       // μ_B · 100 T/m = 9.274e-22 N.
       '6:20 μ_B·b 9.274e-22 N',
-      // Steck: D2 at 384.230 484 468 5 THz, vacuum wavelength 780.241 209 686 nm.
-      '8:20 384.2305 THz, λ_vac 780.2412 nm',
+      // Steck: D2 at 384.230 484 468 5 THz, vacuum wavelength 780.241 209 686 nm. g_eff from the textbook formula
+      // ½(g_u + g_l) + ¼(g_u − g_l)[J_u(J_u+1) − J_l(J_l+1)] with Steck's g_J(5S1/2) = 2.00233113, g_J(5P3/2) = 1.3362: 1.16967.
+      '8:20 384.2305 THz, λ_vac 780.2412 nm, g_eff 1.17',
     ]);
   });
 

@@ -240,12 +240,12 @@ describe('stick spectrum and dipole emission pattern', () => {
       offsetHz: r.components[0].offsetHz,
       strength: r.components[0].strength,
       polarization: 'σ−',
-      lowerLabel: 'F=1/2, m_F=+1/2',
-      upperLabel: 'F=3/2, m_F=-1/2',
+      lowerLabel: 'J=1/2, m_J=+1/2',
+      upperLabel: 'J=3/2, m_J=-1/2',
       alongField: r.components[0].alongField,
       acrossField: r.components[0].acrossField,
     });
-    expect(high[0].lowerLabel).toBe('m_J=+1/2, m_I=0');
+    expect(high[0].lowerLabel).toBe('m_J=+1/2'); // no nucleus: J labels, no m_I
   });
 
   it('π ∝ sin²θ and σ ∝ (1+cos²θ)/2 both integrate to 8π/3 over the sphere (textbook dipole pattern)', () => {

@@ -5,17 +5,8 @@
 import { type ChildProcess, execFileSync, spawn } from 'child_process';
 import { existsSync, readdirSync, statSync } from 'fs';
 import path from 'path';
-import {
-  type ClientCapabilities,
-  createProtocolConnection,
-  type Diagnostic,
-  type InitializeResult,
-  type ProtocolConnection,
-  type PublishDiagnosticsParams,
-  ShutdownRequest,
-  StreamMessageReader,
-  StreamMessageWriter,
-} from 'vscode-languageserver-protocol/node';
+import { createMessageConnection, type MessageConnection, StreamMessageReader, StreamMessageWriter } from 'vscode-jsonrpc/node';
+import { type ClientCapabilities, type Diagnostic, type InitializeResult, type PublishDiagnosticsParams, ShutdownRequest } from 'vscode-languageserver-protocol';
 
 export const SERVER = path.resolve('dist/server.js');
 
@@ -35,7 +26,7 @@ export function ensureBuilt(): void {
 }
 
 export interface TestClient {
-  connection: ProtocolConnection;
+  connection: MessageConnection;
   process: ChildProcess;
   initialize: InitializeResult;
   /** Diagnostics pushed by the server, latest per URI. */
@@ -52,7 +43,7 @@ export async function startClient(capabilities: ClientCapabilities, answers: Rec
   const child = spawn(process.execPath, [SERVER, '--stdio'], { stdio: ['pipe', 'pipe', 'pipe'] });
   const stderr: string[] = [];
   child.stderr!.on('data', (b: Buffer) => stderr.push(b.toString()));
-  const connection = createProtocolConnection(new StreamMessageReader(child.stdout!), new StreamMessageWriter(child.stdin!));
+  const connection = createMessageConnection(new StreamMessageReader(child.stdout!), new StreamMessageWriter(child.stdin!));
   const pushed = new Map<string, PublishDiagnosticsParams>();
   const listeners = new Set<() => void>();
   const requests: string[] = [];

@@ -1,16 +1,19 @@
-/** Diagnostics from a beam's evaluation: engine problems and unresolvable peaks (with the gradient that would resolve them). */
+/**
+ * Diagnostics from a beam's evaluation: the beam engine's own problems (its stable codes, e.g.
+ * `beam-slits-too-wide`, `beam-misses-detector`) and unresolvable peaks with what would resolve them.
+ */
 import type { Problem } from '../format/ast';
 import type { BeamModel } from '../model/types';
 import type { BeamEvaluation } from './beamEvaluation';
 import { EVAL_RULES } from './evalCodes';
-import { trimNumber } from './quantityText';
+import { lengthText, trimNumber } from './quantityText';
 
 export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
   const out: Problem[] = [];
-  const where = beam.slits?.range ?? beam.nameRange;
   for (const i of e.issues) {
     if (i.severity === 'info') continue;
-    out.push({ code: 'beam-geometry', severity: i.severity, message: `beam '${beam.name}': ${i.message}`, range: where, data: { engineCode: i.code } });
+    const where = i.code.includes('detector') ? beam.detectorM?.range : i.code.includes('slit') ? beam.slits?.range : undefined;
+    out.push({ code: i.code, severity: i.severity, message: `beam '${beam.name}': ${i.message}`, range: where ?? beam.nameRange });
   }
   const r = e.result;
   if (!r.computed || r.all_resolved !== false) return out;
@@ -18,10 +21,14 @@ export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
   const names = merged.map((p) => `${peakName(r.peaks[p.left]?.members)} and ${peakName(r.peaks[p.right]?.members)}`);
   const gradient = beam.magnet?.gradientTPerM;
   const fix = r.resolving_gradient_T_per_m;
+  const options: string[] = [];
+  if (typeof fix === 'number') options.push(`a gradient of at least ${trimNumber(Math.abs(fix), 3)} T/m`);
+  if (typeof r.resolving_magnet_length_m === 'number') options.push(`a magnet of at least ${lengthText(r.resolving_magnet_length_m, 3)}`);
+  if (typeof r.resolving_drift_m === 'number') options.push(`a drift of at least ${lengthText(r.resolving_drift_m, 3)}`);
   const advice =
-    typeof fix === 'number'
-      ? ` A gradient of at least ${trimNumber(Math.abs(fix), 3)} T/m would resolve them.`
-      : ' No gradient up to 100 times the present one resolves them; change the slits, the source or the drift.';
+    options.length > 0
+      ? ` Any one of ${options.join(', or ')} would resolve them.`
+      : ' No gradient, magnet length or drift up to 100 times the present one resolves them; narrow the slits or change the source.';
   const related = [{ message: `beam '${beam.name}' uses this magnet`, range: beam.nameRange }];
   out.push({
     code: 'beam-unresolved',

@@ -2,14 +2,22 @@
  * Beam results: deflection of every sublevel, the detector pattern's peaks, a resolvability
  * verdict per neighbouring pair, and — when peaks merge — the smallest gradient that separates them.
  */
-import { BEAM_CAUTIONS, DEFAULT_DIP_CRITERION, detectorPattern, smallestResolvingGradient, type DetectorPattern } from '../physics/beam';
+import {
+  BEAM_CAUTIONS,
+  DEFAULT_DIP_CRITERION,
+  detectorPattern,
+  smallestResolvingDrift,
+  smallestResolvingGradient,
+  smallestResolvingMagnetLength,
+  type DetectorPattern,
+} from '../physics/beam';
 import { BOHR_MAGNETON } from '../physics/constants';
 import type { BeamModel, LevelModel } from '../model/types';
 import { beamInputs } from './beamInput';
 import type { BeamResult } from './resultTypes';
 
-/** The inverse solver looks for a resolving gradient up to this many times the file's gradient. */
-const GRADIENT_SEARCH_FACTOR = 100;
+/** The inverse solvers look for a resolving value up to this many times the file's value. */
+const SEARCH_FACTOR = 100;
 
 export interface BeamEvaluation {
   result: BeamResult;
@@ -62,10 +70,15 @@ export function evaluateBeam(beam: BeamModel, gJOf: (l: LevelModel) => number | 
     all_resolved: pattern.allResolved,
     off_grid_fraction: pattern.offGridFraction,
   };
+  if (pattern.detectorFraction !== undefined) result.detector_fraction = pattern.detectorFraction;
   if (!pattern.allResolved && pattern.peaks.length > 1) {
-    const g = inputs.input.geometry.gradientTPerM;
-    const search = smallestResolvingGradient(inputs.input, { upperBound: Math.abs(g) * GRADIENT_SEARCH_FACTOR });
-    result.resolving_gradient_T_per_m = search.value ?? null;
+    const geo = inputs.input.geometry;
+    const g = smallestResolvingGradient(inputs.input, { upperBound: Math.abs(geo.gradientTPerM) * SEARCH_FACTOR });
+    result.resolving_gradient_T_per_m = g.value ?? null;
+    const l = smallestResolvingMagnetLength(inputs.input, { upperBound: geo.magnetLengthM * SEARCH_FACTOR });
+    result.resolving_magnet_length_m = l.value ?? null;
+    const d = smallestResolvingDrift(inputs.input, { upperBound: Math.max(geo.driftM, geo.magnetLengthM) * SEARCH_FACTOR, lowerBound: 0 });
+    result.resolving_drift_m = d.value ?? null;
   }
   return { result, pattern, issues };
 }

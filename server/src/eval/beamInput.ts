@@ -3,7 +3,7 @@
  * sublevel's exact magnetic moment at the magnet's field.
  */
 import type { BeamGeometry, PatternInput, SpeedDistribution } from '../physics/beam';
-import { solveLevel } from '../physics/engine';
+import { solveLevel, type SublevelState } from '../physics/engine';
 import type { BeamModel, LevelModel } from '../model/types';
 import { hyperfineSpec } from './levelSpec';
 
@@ -32,6 +32,7 @@ export function beamInputs(beam: BeamModel, gJOf: (l: LevelModel) => number | un
     driftM: driftM.value,
     detectorWidthM: beam.detectorM?.value ?? 0,
     gradientTPerM: magnet.gradientTPerM.value,
+    ...(beam.detectorOffsetM ? { detectorOffsetM: beam.detectorOffsetM.value } : {}),
   };
   const src = source.value;
   const speed: SpeedDistribution =
@@ -45,8 +46,16 @@ export function beamInputs(beam: BeamModel, gJOf: (l: LevelModel) => number | un
       massKg,
       geometry,
       source: speed,
-      sublevels: solved.states.map((s) => ({ label: s.low.text, momentJT: s.momentJT, population: 1 })),
+      sublevels: solved.states.map((s) => ({ label: s.low.text, momentJT: s.momentJT, population: populationOf(beam, s) })),
     },
     highLabels: solved.states.map((s) => s.high.text),
   };
+}
+
+/** The file's population for a state, matched on its low-field label (F, m_F or J, m_J); 1 when the file sets none. */
+function populationOf(beam: BeamModel, s: SublevelState): number {
+  if (!beam.populations) return 1;
+  const [twoF, twoM] = s.low.scheme === 'F' ? [s.low.twoF, s.low.twoMF] : [s.low.twoJ, s.low.twoMJ];
+  const hit = beam.populations.find((p) => p.twoF === twoF && (p.twoM === undefined || p.twoM === twoM));
+  return hit ? hit.weight : 0;
 }

@@ -16,10 +16,11 @@ export interface ExactAtField {
 
 export function exactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
   const solved = solveLevel(spec, fieldT);
+  const noNucleus = spec.kind === 'hyperfine' && spec.twoI === 0;
   const errors = solved.issues.filter((i) => i.severity === 'error').map((i) => i.message);
   if (errors.length > 0) return { exact: [], errors };
   // A level without zero-field structure has exactly linear energies in this single-level model: no regime to judge.
-  if (!hasZeroFieldStructure(spec)) return { exact: solved.states.map(toJson), errors: [] };
+  if (!hasZeroFieldStructure(spec)) return { exact: solved.states.map((s) => toJson(s, noNucleus)), errors: [] };
   const r = regime(spec, fieldT);
   const regimeJson: RegimeResultJson | undefined = r.issues.some((i) => i.severity === 'error')
     ? undefined
@@ -30,7 +31,7 @@ export function exactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
         strong_limit_T: Number.isFinite(r.strongLimitT) ? r.strongLimitT : null,
         fraction: r.fraction,
       };
-  return { exact: solved.states.map(toJson), ...(regimeJson ? { regime: regimeJson } : {}), errors: [] };
+  return { exact: solved.states.map((s) => toJson(s, noNucleus)), ...(regimeJson ? { regime: regimeJson } : {}), errors: [] };
 }
 
 function hasZeroFieldStructure(spec: LevelSpec): boolean {
@@ -38,11 +39,11 @@ function hasZeroFieldStructure(spec: LevelSpec): boolean {
   return spec.twoI > 0 && spec.twoJ > 0 && (spec.A !== 0 || (spec.B ?? 0) !== 0 || (spec.C ?? 0) !== 0);
 }
 
-function toJson(s: SublevelState): ExactSublevelResult {
+function toJson(s: SublevelState, noNucleus: boolean): ExactSublevelResult {
   return {
     low_label: s.low.text,
     high_label: s.high.text,
-    ...(s.low.scheme === 'F' ? { F: s.low.twoF / 2 } : { J: s.low.twoJ / 2 }),
+    ...(s.low.scheme === 'F' && !noNucleus ? { F: s.low.twoF / 2 } : { J: (s.low.scheme === 'F' ? s.low.twoF : s.low.twoJ) / 2 }),
     m: s.twoM / 2,
     m_text: signedHalfText(s.twoM),
     energy_Hz: s.energyHz,

@@ -180,6 +180,12 @@ export interface BeamResult {
   all_resolved?: boolean;
   /** Smallest gradient that resolves every pair (null: none up to 100× the file's gradient); only when unresolved. */
   resolving_gradient_T_per_m?: number | null;
+  /** Smallest magnet length (same gradient) that resolves every pair; null: none up to 100× the file's. */
+  resolving_magnet_length_m?: number | null;
+  /** Smallest drift that resolves every pair; null: none up to 100× the file's. */
+  resolving_drift_m?: number | null;
+  /** Fraction of the atoms entering a detector placed at the file's offset (`detector = w at x`). */
+  detector_fraction?: number;
   /** Flux fraction that falls outside the computed pattern (slow tail). */
   off_grid_fraction?: number;
   cautions: string[];

@@ -18,7 +18,18 @@ function isUnnecessary(code: string): boolean {
   return code.endsWith('-cannot-act') || code === 'hyperfine-without-nucleus' || code === 'value-extra' || code === 'syntax-duplicate-setting';
 }
 
+/** Conversions already made, per problem object: a problem carried over unchanged keeps its diagnostic. */
+const converted = new WeakMap<Problem, { uri: string; diagnostic: Diagnostic }>();
+
 export function toDiagnostic(p: Problem, uri: string): Diagnostic {
+  const hit = converted.get(p);
+  if (hit && hit.uri === uri) return hit.diagnostic;
+  const d = convert(p, uri);
+  converted.set(p, { uri, diagnostic: d });
+  return d;
+}
+
+function convert(p: Problem, uri: string): Diagnostic {
   const d: Diagnostic = {
     range: p.range,
     severity: SEVERITY[p.severity] ?? DiagnosticSeverity.Error,

@@ -16,6 +16,7 @@ import { blockWordSection, keySection } from './hover/keySection';
 import { lineSection } from './hover/lineSection';
 import { magnetSection } from './hover/magnetSection';
 import { quantitySection } from './hover/quantitySection';
+import { resonanceSection } from './hover/resonanceSection';
 import { speciesSection } from './hover/speciesSection';
 import { termSection } from './hover/termSection';
 import { locate, type Target } from './shared/locate';
@@ -27,6 +28,7 @@ import {
   levelOfNode,
   lineOfBlock,
   magnetOfBlock,
+  resonanceOfBlock,
   speciesOfBlock,
   type Declared,
 } from './shared/modelLookup';
@@ -70,7 +72,11 @@ function declaredSections(d: Declared, ctx: HoverContext): string[] {
     case 'beam':
       return [beamSection(d.item, ctx.analysis.result?.beams.find((b) => b.name === d.item.name), ctx.options.sublevelRows)];
     case 'line':
-      return [lineSection(d.item, ctx.analysis.result)];
+      return [lineSection(d.item, ctx.analysis.result, ctx.options.sublevelRows)];
+    case 'resonance': {
+      const r = ctx.analysis.result?.resonances.find((x) => x.name === d.item.name);
+      return r ? [resonanceSection(r, ctx.options.sublevelRows)] : [];
+    }
     default:
       return [];
   }
@@ -97,7 +103,11 @@ function blockSections(block: BlockNode, ctx: HoverContext): string[] {
     }
     case 'line': {
       const l = lineOfBlock(model, block);
-      return l ? [lineSection(l, ctx.analysis.result)] : [];
+      return l ? declaredSections({ kind: 'line', item: l }, ctx) : [];
+    }
+    case 'resonance': {
+      const r = resonanceOfBlock(model, block);
+      return r ? declaredSections({ kind: 'resonance', item: r }, ctx) : [];
     }
     default:
       return [];

@@ -82,11 +82,17 @@ function blockHints(analysis: Analysis, model: SetupModel, block: BlockNode, out
     case 'line': {
       const line = lineOfBlock(model, block);
       if (!line?.lower || !line.upper || !block.link?.to) break;
+      const r = analysis.result?.lines.find((l) => l.name === line.name);
       const f = lineFrequency(
+        r,
         levelResult(analysis.result, line.lower.species.name, line.lower.name),
         levelResult(analysis.result, line.upper.species.name, line.upper.name),
       );
-      if (f) out.push(hint(block.link.to.range.end, `${frequencyText(f.hz, 7)}, λ_vac ${trimNumber(f.vacuumNm, 7)} nm`, 'from the two level energies'));
+      const parts = [
+        ...(f ? [`${frequencyText(f.hz, 7)}`, `λ_vac ${trimNumber(f.vacuumNm, 7)} nm`] : []),
+        ...(r?.g_eff !== undefined ? [`g_eff ${trimNumber(r.g_eff, 4)}`] : []),
+      ];
+      if (parts.length > 0) out.push(hint(block.link.to.range.end, parts.join(', '), 'line centre from the level energies; effective Landé factor of the line'));
       break;
     }
     default:

@@ -16,14 +16,14 @@ export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
   species: ['mass', 'I', 'g_I', 'mu_I'],
   field: [],
   magnet: ['field', 'gradient', 'length'],
-  beam: ['species', 'level', 'source', 'slits', 'magnet', 'drift', 'detector'],
+  beam: ['species', 'level', 'source', 'slits', 'magnet', 'drift', 'detector', 'populations'],
   line: [],
   resonance: ['level', 'lower', 'upper', 'frequency', 'range', 'two_photon'],
   settings: ['g_s', 'reduced_mass'],
 };
 
 /** Plain words that appear inside values; never mistaken for misspelt units. */
-export const VALUE_WORDS: readonly string[] = ['oven', 'jet', 'speed', 'spread', 'apart', 'exact', 'on', 'off'];
+export const VALUE_WORDS: readonly string[] = ['oven', 'jet', 'speed', 'spread', 'apart', 'at', 'exact', 'on', 'off'];
 
 export function isBlockWord(word: string): word is BlockKind {
   return (BLOCK_WORDS as readonly string[]).includes(word);

@@ -100,9 +100,12 @@ export function buildBeam(
         if (v) beam.driftM = v;
         break;
       }
-      case 'detector': {
-        const v = positive(s, readSettingQuantity(s, 'length', problems, 'detector width or resolution'), problems);
-        if (v) beam.detectorM = v;
+      case 'detector':
+        readDetector(s, beam, problems);
+        break;
+      case 'populations': {
+        const p = readPopulations(s, problems);
+        if (p) beam.populations = p;
         break;
       }
       default:
@@ -217,4 +220,45 @@ function readSlits(s: SettingNode, problems: ProblemList): BeamModel['slits'] {
     }
   }
   return { value: { firstM: first.value, secondM: second.value, separationM: sep.value }, source: 'this file', range: s.valueText.range };
+}
+
+/** `detector = <width>` or `detector = <width> at <offset from the axis>`. */
+function readDetector(s: SettingNode, beam: BeamModel, problems: ProblemList): void {
+  const parts = s.groups.flat();
+  if (s.groups.length !== 1 || (parts.length !== 1 && (parts.length !== 3 || parts[1]!.text !== 'at'))) {
+    problems.add('beam-detector-malformed', 'write detector = <width>, or detector = <width> at <offset>, e.g. detector = 25 um at 1.2 mm', s.valueText.range);
+    return;
+  }
+  const width = readPartQuantity(parts[0]!, 'length', problems, 'detector');
+  if (width && width.value <= 0) {
+    problems.add('value-out-of-range', `the detector width must be greater than zero, got ${parts[0]!.text}`, parts[0]!.range);
+  } else if (width) beam.detectorM = width;
+  if (parts.length === 3) {
+    const offset = readPartQuantity(parts[2]!, 'length', problems, 'detector');
+    if (offset) beam.detectorOffsetM = offset;
+  }
+}
+
+/** `populations = F m weight, ...` or `F weight` for a whole F manifold. */
+function readPopulations(s: SettingNode, problems: ProblemList): BeamModel['populations'] {
+  const out: NonNullable<BeamModel['populations']> = [];
+  for (const g of s.groups) {
+    const range = g.length > 0 ? { start: g[0]!.range.start, end: g[g.length - 1]!.range.end } : s.valueText.range;
+    const nums = g.map((p) => (p.kind === 'number' ? p.number.value : NaN));
+    const twice = (x: number): number | undefined => (Number.isFinite(x) && Math.abs(2 * x - Math.round(2 * x)) < 1e-9 ? Math.round(2 * x) : undefined);
+    const ok = (g.length === 2 || g.length === 3) && nums.every(Number.isFinite);
+    const twoF = ok ? twice(nums[0]!) : undefined;
+    const twoM = ok && g.length === 3 ? twice(nums[1]!) : undefined;
+    const weight = nums[nums.length - 1]!;
+    if (!ok || twoF === undefined || twoF < 0 || (g.length === 3 && (twoM === undefined || Math.abs(twoM) > twoF || (twoF - twoM) % 2 !== 0)) || !(weight >= 0)) {
+      problems.add('beam-populations-malformed', 'write populations = <F> <m_F> <weight>, … (or <F> <weight> for every m_F of F), e.g. populations = 2 +2 1, 2 +1 0.1', range);
+      return undefined;
+    }
+    out.push({ twoF, ...(twoM !== undefined ? { twoM } : {}), weight, range });
+  }
+  if (out.length > 0 && out.every((p) => p.weight === 0)) {
+    problems.add('beam-populations-malformed', 'every listed population is 0, so no atoms reach the detector', s.valueText.range);
+    return undefined;
+  }
+  return out.length > 0 ? out : undefined;
 }

@@ -42,6 +42,8 @@ export const MODEL_RULES = {
   'resonance-incomplete': { severity: 'error', summary: 'A resonance block lacks its level or half of its pair.' },
   'resonance-sublevel-malformed': { severity: 'error', summary: 'A sublevel not written as F and m_F.' },
   'resonance-range-malformed': { severity: 'error', summary: 'A field range not written as two fields.' },
+  'beam-detector-malformed': { severity: 'error', summary: 'A detector not written as width [at offset].' },
+  'beam-populations-malformed': { severity: 'error', summary: 'Populations not written as F m weight groups.' },
   'line-incomplete': { severity: 'error', summary: 'A line without both levels.' },
   'line-across-species': { severity: 'error', summary: 'A line between levels of different species.' },
   'line-same-level': { severity: 'error', summary: 'A line from a level to itself.' },

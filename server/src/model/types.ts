@@ -89,6 +89,13 @@ export interface BeamModel {
   slits?: Valued<{ firstM: number; secondM: number; separationM: number }>;
   driftM?: Valued<number>;
   detectorM?: Valued<number>;
+  /** Centre of a fixed detector from the undeflected axis (`detector = 25 um at 1.2 mm`). */
+  detectorOffsetM?: Valued<number>;
+  /**
+   * Relative populations by low-field label (`populations = 2 +2 1, 2 +1 0.2`: F, m_F, weight;
+   * `2 1` gives every m_F of F = 2 the weight 1). Sublevels not listed get 0. Absent: all equal.
+   */
+  populations?: { twoF: number; twoM?: number; weight: number; range: Range }[];
 }
 
 export interface LineModel {

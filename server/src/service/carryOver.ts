@@ -2,7 +2,8 @@
  * Moves the evaluation's problems of an earlier version onto a new version while the new
  * evaluation runs, so that they do not blink out at every keystroke. Lines before the first
  * changed line keep their number, lines after the last changed line shift by the change in
- * line count, and problems on changed lines are dropped.
+ * line count, and problems on changed lines are dropped. A problem that does not move is
+ * passed on as the same object, so a keystroke that keeps the line count copies nothing.
  */
 import type { Problem } from '../format/ast';
 
@@ -24,6 +25,10 @@ export function carryOver(before: readonly string[], after: readonly string[], p
     const start = map(p.range.start.line);
     const end = map(p.range.end.line);
     if (start === undefined || end === undefined || end - start !== p.range.end.line - p.range.start.line) continue;
+    if (start === p.range.start.line && !p.related?.some((r) => map(r.range.start.line) !== r.range.start.line || map(r.range.end.line) !== r.range.end.line)) {
+      out.push(p);
+      continue;
+    }
     const moved: Problem = {
       ...p,
       range: { start: { line: start, character: p.range.start.character }, end: { line: end, character: p.range.end.character } },

@@ -1,33 +1,53 @@
 /**
- * A line: its two levels (term, J, g_J), ΔJ and the parities, and — when both levels have an
- * energy — the line frequency and vacuum wavelength. Line components join here when the
- * evaluation carries them.
+ * A line: its two levels (term, J, g_J), ΔJ, the effective Landé factor, the line centre with
+ * its vacuum wavelength, and the Zeeman components at each working field (strongest first).
  */
-import type { EvaluationResult, LevelResult } from '../../eval/resultTypes';
-import { frequencyText, trimNumber } from '../../eval/quantityText';
+import type { EvaluationResult, LevelResult, LineResult } from '../../eval/resultTypes';
+import { fieldText, frequencyText, trimNumber } from '../../eval/quantityText';
 import type { LineModel } from '../../model/types';
 import { SPEED_OF_LIGHT } from '../../physics/constants';
-import { md, mdTitle } from '../shared/markdown';
+import { md, mdTable, mdTitle } from '../shared/markdown';
 import { levelResult } from '../shared/results';
 
 function levelLine(role: string, name: string | undefined, r: LevelResult | undefined): string {
   if (!name) return `${role}: not resolved`;
-  if (!r) return `${role}: ${md(name)} (no valid term yet)`;
+  if (!r) return `${role}: ${md(name)} (no valid J level yet)`;
   const parity = r.designation.parity ? `, ${r.designation.parity}` : '';
   return `${role}: ${md(r.level)} — ${md(r.designation.text)} (J = ${r.J_text}${parity}), g_J = ${trimNumber(r.g_J.used, 6)}`;
 }
 
-/** ν = (E_upper − E_lower)/h and λ = c/ν, or undefined without both energies. */
-export function lineFrequency(lower: LevelResult | undefined, upper: LevelResult | undefined): { hz: number; vacuumNm: number } | undefined {
-  if (!lower?.energy_Hz || !upper?.energy_Hz) return undefined;
-  const hz = upper.energy_Hz.value - lower.energy_Hz.value;
-  if (!(Math.abs(hz) > 0)) return undefined;
+/** The line frequency and vacuum wavelength: from the evaluation's line centre, else from the two level energies. */
+export function lineFrequency(
+  line: LineResult | undefined,
+  lower: LevelResult | undefined,
+  upper: LevelResult | undefined,
+): { hz: number; vacuumNm: number } | undefined {
+  const hz = line?.line_centre_Hz ?? (lower?.energy_Hz && upper?.energy_Hz ? upper.energy_Hz.value - lower.energy_Hz.value : undefined);
+  if (hz === undefined || !(Math.abs(hz) > 0)) return undefined;
   return { hz, vacuumNm: (SPEED_OF_LIGHT / Math.abs(hz)) * 1e9 };
 }
 
-export function lineSection(line: LineModel, result: EvaluationResult | undefined): string {
+const POLARIZATION: Record<string, string> = { pi: 'π', 'sigma+': 'σ+', 'sigma-': 'σ−' };
+
+function componentsSection(r: LineResult, maxRows: number): string[] {
+  const out: string[] = [];
+  for (const at of r.at_fields) {
+    if (at.components.length === 0) continue;
+    const sorted = [...at.components].sort((a, b) => b.strength - a.strength);
+    const rows = sorted.slice(0, maxRows).map((c) => [POLARIZATION[c.polarization] ?? md(c.polarization), `${md(c.lower_label)} → ${md(c.upper_label)}`, frequencyText(c.offset_Hz), trimNumber(c.strength, 3)]);
+    const more = sorted.length - rows.length;
+    out.push(
+      `${mdTitle(`${sorted.length} components`)} at ${md(at.source.kind)} ${md(at.source.name)} (${fieldText(at.field_T)}), strongest first`,
+      mdTable(['pol.', 'lower → upper', 'offset from centre', 'strength'], rows) + (more > 0 ? `\n\n… and ${more} more` : ''),
+    );
+  }
+  return out;
+}
+
+export function lineSection(line: LineModel, result: EvaluationResult | undefined, maxRows = 24): string {
   const lower = line.lower ? levelResult(result, line.lower.species.name, line.lower.name) : undefined;
   const upper = line.upper ? levelResult(result, line.upper.species.name, line.upper.name) : undefined;
+  const r = result?.lines.find((l) => l.name === line.name);
   const species = line.lower?.species.name ?? line.upper?.species.name;
   const lines = [`${mdTitle(`line ${md(line.name)}`)}${species ? ` in ${md(species)}` : ''}`];
   lines.push(levelLine('lower', line.lower?.name, lower), levelLine('upper', line.upper?.name, upper));
@@ -36,7 +56,8 @@ export function lineSection(line: LineModel, result: EvaluationResult | undefine
     const dJ = dTwoJ === 0 ? '0' : `${dTwoJ > 0 ? '+' : '−'}${Math.abs(dTwoJ) % 2 === 0 ? Math.abs(dTwoJ) / 2 : `${Math.abs(dTwoJ)}/2`}`;
     lines.push(`ΔJ = ${dJ}`);
   }
-  const f = lineFrequency(lower, upper);
-  if (f) lines.push(`ν = ${frequencyText(f.hz, 9)}, vacuum wavelength ${trimNumber(f.vacuumNm, 8)} nm (from the two level energies)`);
-  return lines.join('  \n');
+  if (r?.g_eff !== undefined) lines.push(`effective Landé factor g_eff = ${trimNumber(r.g_eff, 6)}`);
+  const f = lineFrequency(r, lower, upper);
+  if (f) lines.push(`ν = ${frequencyText(f.hz, 9)}, vacuum wavelength ${trimNumber(f.vacuumNm, 8)} nm`);
+  return [lines.join('  \n'), ...(r ? componentsSection(r, maxRows) : [])].join('\n\n');
 }

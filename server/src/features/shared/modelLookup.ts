@@ -1,6 +1,6 @@
 /** From syntax nodes and name declarations to the model objects built from them. */
 import type { BlockNode, LevelNode, Range } from '../../format/ast';
-import type { BeamModel, FieldModel, LevelModel, LineModel, MagnetModel, NameUse, SetupModel, SpeciesModel } from '../../model/types';
+import type { BeamModel, FieldModel, LevelModel, LineModel, MagnetModel, NameUse, ResonanceModel, SetupModel, SpeciesModel } from '../../model/types';
 import { sameRange } from './names';
 
 export function speciesOfBlock(model: SetupModel | undefined, block: BlockNode): SpeciesModel | undefined {
@@ -27,13 +27,18 @@ export function lineOfBlock(model: SetupModel | undefined, block: BlockNode): Li
   return model?.lines.find((l) => l.node === block);
 }
 
+export function resonanceOfBlock(model: SetupModel | undefined, block: BlockNode): ResonanceModel | undefined {
+  return model?.resonances.find((r) => r.node === block);
+}
+
 export type Declared =
   | { kind: 'species'; item: SpeciesModel }
   | { kind: 'level'; item: LevelModel }
   | { kind: 'field'; item: FieldModel }
   | { kind: 'magnet'; item: MagnetModel }
   | { kind: 'beam'; item: BeamModel }
-  | { kind: 'line'; item: LineModel };
+  | { kind: 'line'; item: LineModel }
+  | { kind: 'resonance'; item: ResonanceModel };
 
 /** The model object declared at `range` with this kind of name. */
 export function declaredAt(model: SetupModel, kind: NameUse['kind'], range: Range): Declared | undefined {
@@ -61,6 +66,10 @@ export function declaredAt(model: SetupModel, kind: NameUse['kind'], range: Rang
     }
     case 'line': {
       const item = at(model.lines);
+      return item && { kind, item };
+    }
+    case 'resonance': {
+      const item = at(model.resonances);
       return item && { kind, item };
     }
     default:

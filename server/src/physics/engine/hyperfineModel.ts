@@ -60,7 +60,7 @@ export function buildHyperfineModel(s: CleanHyperfine): LevelModel {
     const x = dotProductBlock(s.twoJ, s.twoI, mJs, twoM);
     const h0 = zeroFieldMatrix(s, x, n);
     const zeeman = new Float64Array(n);
-    const basis = mJs.map((mJ) => jiLabel(mJ, twoM - mJ));
+    const basis = mJs.map((mJ) => jiLabel(mJ, twoM - mJ, s.twoI === 0));
     const highCands: RankedHigh[] = [];
     for (let k = 0; k < n; k++) {
       zeeman[k] = (mu * (s.gJ * mJs[k] + s.gI * (twoM - mJs[k]))) / 2;
@@ -69,7 +69,7 @@ export function buildHyperfineModel(s: CleanHyperfine): LevelModel {
     const lowCands: RankedLow[] = fValues
       .filter((twoF) => twoF >= Math.abs(twoM))
       .map((twoF) => ({
-        label: fLabel(twoF, twoM),
+        label: fLabel(twoF, twoM, s.twoI === 0),
         zeroFieldHz: zf.get(twoF) as number,
         slopeHzPerT: (mu * landeGF(twoF, s.twoJ, s.twoI, s.gJ, s.gI) * twoM) / 2,
       }));

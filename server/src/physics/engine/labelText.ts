@@ -2,8 +2,10 @@
 import { halfText } from './halfIntegers';
 import type { CoupledFLabel, CoupledJLabel, UncoupledJILabel, UncoupledLSLabel } from './types';
 
-export function fLabel(twoF: number, twoMF: number): CoupledFLabel {
-  return { scheme: 'F', twoF, twoMF, text: `F=${halfText(twoF)}, m_F=${halfText(twoMF, true)}` };
+/** With no nucleus (I = 0) F is J, and the text says so. */
+export function fLabel(twoF: number, twoMF: number, noNucleus = false): CoupledFLabel {
+  const text = noNucleus ? `J=${halfText(twoF)}, m_J=${halfText(twoMF, true)}` : `F=${halfText(twoF)}, m_F=${halfText(twoMF, true)}`;
+  return { scheme: 'F', twoF, twoMF, text };
 }
 
 export function jLabel(twoJ: number, twoMJ: number, twoMI: number | null): CoupledJLabel {
@@ -11,8 +13,9 @@ export function jLabel(twoJ: number, twoMJ: number, twoMI: number | null): Coupl
   return { scheme: 'J', twoJ, twoMJ, twoMI, text: `J=${halfText(twoJ)}, m_J=${halfText(twoMJ, true)}${nuc}` };
 }
 
-export function jiLabel(twoMJ: number, twoMI: number): UncoupledJILabel {
-  return { scheme: 'mJ,mI', twoMJ, twoMI, text: `m_J=${halfText(twoMJ, true)}, m_I=${halfText(twoMI, true)}` };
+export function jiLabel(twoMJ: number, twoMI: number, noNucleus = false): UncoupledJILabel {
+  const text = noNucleus ? `m_J=${halfText(twoMJ, true)}` : `m_J=${halfText(twoMJ, true)}, m_I=${halfText(twoMI, true)}`;
+  return { scheme: 'mJ,mI', twoMJ, twoMI, text };
 }
 
 export function lsLabel(twoML: number, twoMS: number, twoMI: number | null): UncoupledLSLabel {
