@@ -32,7 +32,7 @@ if ! dpkg -s libkrb5-dev >/dev/null 2>&1; then
   fi
   log "installing Debian's libkrb5-dev"
   export DEBIAN_FRONTEND=noninteractive
-  apt-get update -qq
+  apt-get update -qq >&2
   apt-get install -y -qq --no-install-recommends libkrb5-dev >&2
 fi
 
@@ -47,7 +47,7 @@ npm install --prefix "$HOME_DIR/node" --no-save --no-audit --no-fund --loglevel=
 export PATH="$NODE_DIR/bin:$PATH"
 export npm_config_nodedir="$NODE_DIR"
 log "installing code-server $CODE_SERVER_VERSION with $(node --version) (builds native modules; takes minutes)"
-npm install --prefix "$HOME_DIR/code-server" --no-save --no-audit --no-fund --loglevel=error --unsafe-perm \
+npm install --prefix "$HOME_DIR/code-server" --no-save --no-audit --no-fund --loglevel=error \
   "code-server@$CODE_SERVER_VERSION" >&2
 
 # A launcher that always runs code-server on its own Node, whatever is first on PATH.
@@ -56,7 +56,10 @@ cat > "$LAUNCHER" <<LAUNCH
 exec "$NODE_DIR/bin/node" "$CS_DIR/out/node/entry.js" "\$@"
 LAUNCH
 chmod +x "$LAUNCHER"
-"$LAUNCHER" --version >&2
+# Check it runs; its own files go to a throwaway folder, not the user's config and data folders.
+check_dir=$(mktemp -d)
+XDG_CONFIG_HOME="$check_dir" XDG_DATA_HOME="$check_dir" "$LAUNCHER" --config /dev/null --version >&2
+rm -rf "$check_dir"
 echo "$WANT" > "$STAMP"
 log "done"
 echo "$LAUNCHER"
