@@ -33,7 +33,6 @@ if (!isMainThread && (workerData as { role?: string } | null)?.role === EVALUATO
 }
 
 function startLanguageServer(): void {
-
   const connection = createConnection(ProposedFeatures.all);
   const documents = new TextDocuments(TextDocument);
   const log = (message: string): void => connection.console.error(message);
@@ -163,17 +162,25 @@ function startLanguageServer(): void {
   const pushTimers = new Map<string, NodeJS.Timeout>();
   const evaluationTimers = new Map<string, NodeJS.Timeout>();
 
+  /** Versions whose evaluation is waiting for a pause in typing, by document. */
+  const evaluationPending = new Map<string, number>();
+
   function scheduleEvaluation(doc: TextDocument): void {
+    // A repeated pull of the same version must not push its evaluation further away.
+    if (evaluationPending.get(doc.uri) === doc.version) return;
     clearTimeout(evaluationTimers.get(doc.uri));
+    evaluationPending.set(doc.uri, doc.version);
     evaluationTimers.set(
       doc.uri,
       setTimeout(() => {
         evaluationTimers.delete(doc.uri);
+        evaluationPending.delete(doc.uri);
         const current = documents.get(doc.uri);
         if (!service || !current || current.version !== doc.version) return;
         void service.evaluate(current).then(() => {
           const now = documents.get(doc.uri);
           if (!now || now.version !== doc.version) return;
+          if (client.inlayHintRefresh) void connection.languages.inlayHint.refresh().catch(() => undefined);
           if (client.pullDiagnostics) {
             if (client.diagnosticRefresh) void connection.languages.diagnostics.refresh().catch(() => undefined);
           } else schedulePush(doc.uri, 0);
@@ -214,6 +221,7 @@ function startLanguageServer(): void {
     clearTimeout(evaluationTimers.get(uri));
     pushTimers.delete(uri);
     evaluationTimers.delete(uri);
+    evaluationPending.delete(uri);
     settingsByUri.delete(uri);
     service?.forget(uri);
     if (!client.pullDiagnostics) void connection.sendDiagnostics({ uri, diagnostics: [] });
@@ -273,6 +281,16 @@ function startLanguageServer(): void {
   connection.languages.semanticTokens.onRange((p, token) =>
     run('semantic tokens', p.textDocument.uri, token, { data: [] }, (svc, doc) => svc.semanticTokens(doc, p.range)),
   );
+
+  // The diagram panel (client/src/host/diagramPanel.ts) asks for the SVG and CSV of one view.
+  connection.onRequest('sublevel/diagram', (p: { uri?: unknown; view?: unknown; line?: unknown; theme?: unknown } | null, token) => {
+    const uri = typeof p?.uri === 'string' ? p.uri : '';
+    const view = p?.view === 'pattern' || p?.view === 'lines' ? p.view : 'levels';
+    const theme = p?.theme === 'export' ? 'export' : 'panel';
+    const line = typeof p?.line === 'number' && Number.isInteger(p.line) && p.line >= 0 ? p.line : undefined;
+    const closed = { ok: false as const, message: 'Open the .sublevel file in an editor to see its diagrams.' };
+    return run('diagram', uri, token, closed, (svc, doc) => svc.diagram(doc, { view, theme, ...(line !== undefined ? { line } : {}) }));
+  });
 
   connection.onDocumentFormatting((p, token) => run('formatting', p.textDocument.uri, token, [], (svc, doc) => svc.formatting(doc)));
   connection.onDocumentRangeFormatting((p, token) => run('formatting', p.textDocument.uri, token, [], (svc, doc) => svc.formatting(doc, p.range)));

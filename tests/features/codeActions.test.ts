@@ -1,6 +1,12 @@
 import type { CodeAction } from 'vscode-languageserver-types';
 import { describe, expect, it } from 'vitest';
+import { readdirSync, readFileSync } from 'fs';
 import { codeActions } from '../../server/src/features/codeActions';
+import { significantDigits } from '../../server/src/features/codeActions/convertUnit';
+import { locate } from '../../server/src/features/shared/locate';
+import { dimensionOfUnit } from '../../server/src/features/shared/units';
+import { analyzeFast } from '../../server/src/service/fastAnalysis';
+import { readQuantity } from '../../server/src/format/units';
 import { diagnostics } from '../../server/src/features/diagnostics';
 import { applyEdits, editsOf, analysisOf, URI } from './helpers';
 
@@ -257,5 +263,34 @@ describe('convert-unit refactoring', () => {
   it('offers nothing for numbers with an uncertainty or without a unit', () => {
     expect(conversions('magnet m\n  field = 0.35(2) T\n', 1, 12)).toEqual([]);
     expect(conversions('species X\n  g_I = 0.5\n', 1, 10)).toEqual([]);
+  });
+});
+
+describe('convert-unit refactoring on every quantity of the example files', () => {
+  it('gives text that reads back as the same value, to the precision written', () => {
+    let checked = 0;
+    for (const f of readdirSync('examples').filter((x) => x.endsWith('.sublevel'))) {
+      const text = readFileSync(`examples/${f}`, 'utf8');
+      const analysis = analysisOf(text);
+      const parts = analysis.doc.blocks.flatMap((b) => [...(b.headerSetting ? [b.headerSetting] : []), ...b.settings, ...b.levels.flatMap((l) => l.settings)]).flatMap((s) => s.groups.flat());
+      for (const part of parts) {
+        if (part.kind !== 'quantity' || part.number.uncertainty !== undefined) continue;
+        const d = dimensionOfUnit(part.unit.text);
+        if (!d) continue;
+        const before = readQuantity(part, d).si!;
+        const actions = codeActions(analysis, URI, { range: { start: part.range.start, end: part.range.start }, diagnostics: [], only: ['refactor'] });
+        for (const a of actions) {
+          const edit = editsOf(a.edit)[0]!;
+          const t = locate(analyzeFast(applyEdits(text, [edit])).doc, part.range.start);
+          const written = t?.kind === 'value' ? t.part : undefined;
+          expect(written?.kind, `${part.text} → ${edit.newText}`).toBe('quantity');
+          const after = readQuantity(written!, d).si!;
+          const digits = significantDigits(part.text.slice(0, part.text.length - part.unit.text.length).trim());
+          expect(Math.abs(after - before), `${part.text} → ${edit.newText}`).toBeLessThanOrEqual(Math.abs(before) * 10 ** (1 - digits) + 1e-9 * Math.abs(before));
+          checked++;
+        }
+      }
+    }
+    expect(checked).toBeGreaterThan(20);
   });
 });

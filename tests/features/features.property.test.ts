@@ -106,7 +106,21 @@ describe('no feature crashes or hangs', () => {
         for (const f of foldingRanges(a)) expect(f.endLine).toBeGreaterThan(f.startLine);
         const { data } = semanticTokens(a);
         expect(data.length % 5).toBe(0);
-        for (let i = 0; i < data.length; i += 5) expect(data[i + 2]).toBeGreaterThan(0);
+        // Decoded tokens are in order, do not overlap and stay inside their line.
+        const lines = text.split(/\r\n|\r|\n/);
+        let line = 0;
+        let end = 0;
+        let start = 0;
+        for (let i = 0; i < data.length; i += 5) {
+          const [dl, dc, len] = [data[i]!, data[i + 1]!, data[i + 2]!];
+          if (dl > 0) end = 0;
+          line += dl;
+          start = dl > 0 ? dc : start + dc;
+          expect(len).toBeGreaterThan(0);
+          expect(start).toBeGreaterThanOrEqual(end);
+          expect(start + len).toBeLessThanOrEqual(lines[line]!.length);
+          end = start + len;
+        }
         inlayHints(a, { start: { line: 0, character: 0 }, end: { line: 1e6, character: 0 } });
         expect(Date.now() - started).toBeLessThan(HANG_MS);
       }),

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { hover } from '../../server/src/features/hover';
+import { ATOMIC_MASS_UNIT } from '../../server/src/physics/constants';
 import { atCursor, hoverText, plain } from './helpers';
 
 interface Case {
@@ -186,5 +187,24 @@ describe('hover on lines and resonances', () => {
     const text = plain(hoverText(hover(analysis, position)));
     expect(text).toMatch(/field-insensitive point: 3\.2289\d* G at 6\.83467\d* GHz/);
     expect(text).toContain('2-photon | F=1, m_F=-1 → F=2, m_F=+1');
+  });
+});
+
+describe('hover on a beam', () => {
+  it('shows the deflection of each sublevel and the verdict', () => {
+    const text =
+      'species Li7\n  level ground: 2s 2S1/2\nmagnet sel\n  field = 1 T\n  gradient = 100 T/m\n  length = 10 cm\n' +
+      'beam b|\n  species = Li7\n  level = ground\n  source = speed 1000 m/s\n  slits = 10 um, 10 um apart 50 cm\n  magnet = sel\n  drift = 50 cm\n  detector = 10 um\n';
+    const { analysis, position } = atCursor(text);
+    const shown = plain(hoverText(hover(analysis, position)));
+    expect(shown).toContain('source: single speed 1000 m/s');
+    expect(shown).toMatch(/At the detector: 4 peaks, not all resolved; resolved from a gradient of \d+ T\/m/);
+    // Single speed, hard-edged magnet (textbook kinematics): z = μ b / (m v²) · (L²/2 + L·D), with the moment the
+    // evaluation reports for |F=1, m_F=+1> and the Li-7 mass 7.016003437 u (built-in, NIST masses; u from CODATA 2022).
+    const s = analysis.result!.beams[0]!.sublevels[0]!;
+    const z = ((s.moment_J_per_T * 100) / (7.016003437 * ATOMIC_MASS_UNIT * 1000 ** 2)) * (0.1 ** 2 / 2 + 0.1 * 0.5);
+    expect(s.mean_deflection_m / z).toBeCloseTo(1, 6);
+    expect(shown).toContain(`| F=1, m_F=+1 | 1.003 | 0.125 | ${(z * 1000).toPrecision(3)} mm |`);
+    expect(shown).toContain('Strong magnets');
   });
 });

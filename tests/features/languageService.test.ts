@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Evaluator } from '../../server/src/service/evaluator';
-import { inProcessEvaluator } from '../../server/src/service/evaluator';
+import { inProcessEvaluator, SUPERSEDED } from '../../server/src/service/evaluator';
 import { LanguageService } from '../../server/src/service/languageService';
 import { DEFAULT_SETTINGS, readSettings } from '../../server/src/service/settings';
 
@@ -53,6 +53,28 @@ describe('language service', () => {
     const b = svc.evaluate(doc('field f = 3 G\n', 3));
     await Promise.all([a, b]);
     expect(texts).toEqual(['field f = 3 G\n']);
+  });
+
+  it('asks the evaluator to give up on an older version when a newer one wants evaluating', async () => {
+    const texts: string[] = [];
+    const patient: Evaluator = {
+      evaluate: (t, signal) => {
+        texts.push(t);
+        if (t.includes('1 G')) return new Promise((_, reject) => signal?.addEventListener('abort', () => reject(new Error(SUPERSEDED))));
+        return inProcessEvaluator().evaluate(t);
+      },
+      dispose: () => undefined,
+    };
+    const logged: string[] = [];
+    const svc = new LanguageService((m) => logged.push(m), patient);
+    const old = svc.evaluate(doc('field f = 1 G\n', 1));
+    await new Promise((r) => setTimeout(r, 10)); // the old evaluation is running
+    const next = await svc.evaluate(doc('field f = 2 G\n', 2));
+    await old;
+    expect(texts).toEqual(['field f = 1 G\n', 'field f = 2 G\n']);
+    expect(next.result?.fields[0]?.field_T).toBe(2e-4);
+    expect(svc.diagnostics(doc('field f = 2 G\n', 2)).complete).toBe(true);
+    expect(logged).toEqual([]);
   });
 
   it('answers a hover without the evaluation when it fails, and logs', async () => {

@@ -98,6 +98,15 @@ describe('the built server over JSON-RPC, diagnostics pushed', () => {
     ).rejects.toThrow("Li7 already has a level named 'upper'");
   });
 
+  it('draws the diagram the panel asks for', async () => {
+    const r = (await client.connection.sendRequest('sublevel/diagram', { uri: URI, view: 'levels', line: 1, theme: 'panel' })) as { ok: boolean; svg?: string; csv?: string };
+    expect(r.ok).toBe(true);
+    expect(r.svg).toMatch(/^<svg/);
+    expect(r.csv?.split('\n').length).toBeGreaterThan(2);
+    const closed = (await client.connection.sendRequest('sublevel/diagram', { uri: 'file:///closed.sublevel', view: 'levels', theme: 'panel' })) as { ok: boolean };
+    expect(closed.ok).toBe(false);
+  });
+
   it('follows edits and clears diagnostics on close', async () => {
     await client.connection.sendNotification('textDocument/didChange', {
       textDocument: { uri: URI, version: 2 },

@@ -8,7 +8,7 @@ import type { Analysis } from '../eval/analyze';
 import { sortProblems } from '../eval/analyze';
 import type { Problem } from '../format/ast';
 import { carryOver, splitLines } from './carryOver';
-import type { Evaluator } from './evaluator';
+import { type Evaluator, SUPERSEDED } from './evaluator';
 import { analyzeFast } from './fastAnalysis';
 
 export interface DocumentSnapshot {
@@ -37,6 +37,8 @@ interface DocumentEntry {
   lastEvaluated?: { lines: string[]; problems: Problem[] };
   /** The evaluation running for this document, if any (evaluations of one document do not overlap). */
   running?: Promise<unknown>;
+  /** Aborts the running evaluation when a newer version wants one. */
+  abort?: AbortController;
 }
 
 function key(p: Problem): string {
@@ -103,20 +105,26 @@ export class DocumentStore {
     const s = this.state(doc);
     if (s.evaluation) return s.evaluation;
     const entry = this.docs.get(doc.uri)!;
+    entry.abort?.abort();
+    const abort = new AbortController();
+    entry.abort = abort;
     const previous = entry.running ?? Promise.resolve();
     const run = previous.then(async () => {
       // A newer version came while waiting: this one is not worth evaluating.
       if (entry.current !== s) return s.analysis;
       try {
-        const outcome = await this.evaluator.evaluate(s.text);
+        const outcome = await this.evaluator.evaluate(s.text, abort.signal);
         this.attach(entry, s, outcome.result, outcome.problems);
       } catch (e) {
-        this.log(`sublevel: evaluation failed for ${doc.uri} (version ${s.version}): ${e instanceof Error ? e.message : String(e)}`);
+        const message = e instanceof Error ? e.message : String(e);
+        if (message === SUPERSEDED) return s.analysis;
+        this.log(`sublevel: evaluation failed for ${doc.uri} (version ${s.version}): ${message}`);
         s.evaluated = true; // do not retry this version: parse and model problems stand
       }
       return s.analysis;
     });
-    entry.running = run;
+    // Later evaluations wait for this one; hold no result here, so that old versions can be freed.
+    entry.running = run.then(() => undefined);
     s.evaluation = run;
     return run;
   }

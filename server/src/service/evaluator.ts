@@ -14,9 +14,13 @@ export interface EvaluationOutcome {
 }
 
 export interface Evaluator {
-  evaluate(text: string): Promise<EvaluationOutcome>;
+  /** `signal` says the result is no longer wanted (a newer version came); an evaluator may then give up early. */
+  evaluate(text: string, signal?: AbortSignal): Promise<EvaluationOutcome>;
   dispose(): void;
 }
+
+/** The rejection of an evaluation given up because a newer version superseded it. */
+export const SUPERSEDED = 'superseded by a newer version';
 
 export function evaluateText(text: string): EvaluationOutcome {
   const a = analyze(text);

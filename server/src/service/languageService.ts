@@ -32,6 +32,7 @@ import { inlayHints } from '../features/inlayHints';
 import { references } from '../features/references';
 import { prepareRename, rename, type RenameRefusal } from '../features/rename';
 import { semanticTokens } from '../features/semanticTokens';
+import { diagramFor, type DiagramAnswer, type DiagramView } from '../views/diagram';
 import { DocumentStore, type DocumentSnapshot } from './documentStore';
 import { type Evaluator, inProcessEvaluator } from './evaluator';
 import { DEFAULT_SETTINGS, type EditorSettings } from './settings';
@@ -40,8 +41,11 @@ export type { DocumentSnapshot } from './documentStore';
 
 export type Log = (message: string) => void;
 
-/** How long a hover or inlay-hint request waits for the evaluation before answering without it. */
-export const EVALUATION_WAIT_MS = 2000;
+/**
+ * How long a hover or inlay-hint request waits for the evaluation before answering with what
+ * parse and model know (the server asks the client to refresh inlay hints once it is in).
+ */
+export const EVALUATION_WAIT_MS = 750;
 
 function describe(e: unknown): string {
   return e instanceof Error ? (e.stack ?? e.message) : String(e);
@@ -155,6 +159,12 @@ export class LanguageService {
 
   semanticTokens(doc: DocumentSnapshot, range?: Range): SemanticTokens {
     return this.guard('semantic tokens', doc, { data: [] }, (a) => semanticTokens(a, range));
+  }
+
+  /** The diagram panel's picture of this version (evaluated first, as hovers are). */
+  async diagram(doc: DocumentSnapshot, req: { view: DiagramView; line?: number; theme: 'panel' | 'export' }): Promise<DiagramAnswer> {
+    const failed: DiagramAnswer = { ok: false, message: 'Sublevel could not draw this file; the server log says why.' };
+    return this.guardEvaluated('diagram', doc, failed, (a) => diagramFor(a, req));
   }
 
   formatting(doc: DocumentSnapshot, range?: Range): TextEdit[] {

@@ -1,20 +1,26 @@
 /**
  * Runs evaluations in a worker thread, one at a time. A job that takes longer than the time
- * limit stops the worker (its job fails); the next job starts a fresh one. A worker that
- * cannot start makes the evaluator fall back to this thread.
+ * limit stops the worker (its job fails); the next job starts a fresh one. A job that is no
+ * longer wanted is dropped from the queue, or, if it has already run for a while, stopped with
+ * its worker, so a long evaluation of an old version does not hold up the new one. A worker
+ * that cannot start makes the evaluator fall back to this thread.
  */
 import { Worker } from 'worker_threads';
-import { type EvaluationOutcome, type Evaluator, evaluateText } from './evaluator';
+import { type EvaluationOutcome, type Evaluator, evaluateText, SUPERSEDED } from './evaluator';
 import type { EvaluationReply, EvaluationRequest } from './evaluatorThread';
 
 /** `workerData.role` that tells a bundle started as a worker to serve evaluations. */
 export const EVALUATOR_ROLE = 'sublevel-evaluator';
+
+/** A superseded job that has run this long is stopped with its worker; a fresh worker starts in about this time. */
+const ABANDON_AFTER_MS = 400;
 
 interface Job {
   id: number;
   text: string;
   resolve: (o: EvaluationOutcome) => void;
   reject: (e: Error) => void;
+  startedAt?: number;
 }
 
 export class WorkerEvaluator implements Evaluator {
@@ -32,12 +38,24 @@ export class WorkerEvaluator implements Evaluator {
     private readonly timeLimitMs = 30_000,
   ) {}
 
-  evaluate(text: string): Promise<EvaluationOutcome> {
+  evaluate(text: string, signal?: AbortSignal): Promise<EvaluationOutcome> {
     if (this.broken) return new Promise((resolve) => resolve(evaluateText(text)));
     return new Promise((resolve, reject) => {
-      this.queue.push({ id: this.nextId++, text, resolve, reject });
+      const job: Job = { id: this.nextId++, text, resolve, reject };
+      signal?.addEventListener('abort', () => this.supersede(job), { once: true });
+      this.queue.push(job);
       this.pump();
     });
+  }
+
+  private supersede(job: Job): void {
+    const queued = this.queue.indexOf(job);
+    if (queued >= 0) {
+      this.queue.splice(queued, 1);
+      job.reject(new Error(SUPERSEDED));
+      return;
+    }
+    if (this.current === job && job.startedAt !== undefined && Date.now() - job.startedAt >= ABANDON_AFTER_MS) this.stop(this.worker, SUPERSEDED, false);
   }
 
   dispose(): void {
@@ -50,7 +68,9 @@ export class WorkerEvaluator implements Evaluator {
 
   private start(): Worker | undefined {
     try {
-      const w = new Worker(this.script, { workerData: { role: EVALUATOR_ROLE } });
+      // Young generation of 3 × 64 MB semi-spaces, as the server process gets (client/src/extension.ts):
+      // the evaluation allocates many short-lived objects.
+      const w = new Worker(this.script, { workerData: { role: EVALUATOR_ROLE }, resourceLimits: { maxYoungGenerationSizeMb: 192 } });
       w.on('message', (reply: EvaluationReply) => this.finish(reply));
       w.on('error', (e) => this.fail(w, `the evaluation worker failed: ${e.stack ?? e.message}`));
       w.on('exit', (code) => {
@@ -73,6 +93,7 @@ export class WorkerEvaluator implements Evaluator {
       return;
     }
     const job = this.queue.shift()!;
+    job.startedAt = Date.now();
     this.current = job;
     const request: EvaluationRequest = { id: job.id, text: job.text };
     this.worker.postMessage(request);
@@ -91,11 +112,15 @@ export class WorkerEvaluator implements Evaluator {
 
   /** Stops a worker that failed or overran; its job fails, later jobs go to a new worker. */
   private fail(w: Worker | undefined, message: string): void {
+    this.stop(w, message, true);
+  }
+
+  private stop(w: Worker | undefined, message: string, report: boolean): void {
     if (!w || this.worker !== w) return;
     clearTimeout(this.timer);
     this.worker = undefined;
     void w.terminate();
-    this.log(`sublevel: ${message}`);
+    if (report) this.log(`sublevel: ${message}`);
     const job = this.current;
     this.current = undefined;
     job?.reject(new Error(message));

@@ -5,7 +5,7 @@
 import { type CodeAction, CodeActionKind, type Range } from 'vscode-languageserver-types';
 import type { Analysis } from '../../eval/analyze';
 import type { ValuePart } from '../../format/ast';
-import { convertSI, readQuantity } from '../../format/units';
+import { convertSI, type Dimension, readQuantity } from '../../format/units';
 import { locate } from '../shared/locate';
 import { convertTargets, dimensionOfUnit, displayUnit } from '../shared/units';
 
@@ -55,13 +55,7 @@ export function unitConversions(part: ValuePart, uri: string): CodeAction[] {
     if (unit === part.unit.text || displayUnit(unit) === part.unit.text) continue;
     const value = convertSI(si, d, unit);
     if (value === undefined || !Number.isFinite(value)) continue;
-    const back = (v: number): number | undefined => {
-      const vSI = convertSI(1, d, unit);
-      if (vSI === undefined || vSI === 0) return undefined;
-      // v in `unit` → SI → the original unit.
-      return convertSI(v / vSI, d, part.unit.text);
-    };
-    const text = `${roundTripText(value, part.number.value, digits, d === 'temperature' ? (v) => convertSI(toKelvin(v, unit), d, part.unit.text) : back)}${glued ? '' : ' '}${unit}`;
+    const text = `${roundTripText(value, part.number.value, digits, (v) => backToWritten(v, unit, part.unit.text, d))}${glued ? '' : ' '}${unit}`;
     out.push({
       title: `Convert to ${displayUnit(unit)}: ${text}`,
       kind: CodeActionKind.RefactorRewrite,
@@ -71,9 +65,13 @@ export function unitConversions(part: ValuePart, uri: string): CodeAction[] {
   return out;
 }
 
-/** Temperatures have an offset, so `back` cannot scale: convert a value in `unit` to kelvin directly. */
-function toKelvin(v: number, unit: string): number {
-  return unit === 'degC' ? v + 273.15 : v;
+/** A value `v` written in `unit`, converted to the unit the user wrote (`written`). */
+function backToWritten(v: number, unit: string, written: string, d: Dimension): number | undefined {
+  // Temperatures have an offset (0 °C = 273.15 K, SI definition), so they cannot be scaled.
+  if (d === 'temperature') return convertSI(unit === 'degC' ? v + 273.15 : v, d, written);
+  const perUnit = convertSI(1, d, unit);
+  if (perUnit === undefined || perUnit === 0) return undefined;
+  return convertSI(v / perUnit, d, written);
 }
 
 export function convertUnitActions(analysis: Analysis, uri: string, range: Range): CodeAction[] {

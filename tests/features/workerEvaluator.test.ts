@@ -1,0 +1,81 @@
+import { mkdtempSync, writeFileSync } from 'fs';
+import { tmpdir } from 'os';
+import path from 'path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { SUPERSEDED } from '../../server/src/service/evaluator';
+import { WorkerEvaluator } from '../../server/src/service/workerEvaluator';
+
+/** Tiny worker scripts standing in for the server bundle: one answers, one never does, one dies. */
+const dir = mkdtempSync(path.join(tmpdir(), 'sublevel-worker-'));
+function script(name: string, body: string): string {
+  const file = path.join(dir, name);
+  writeFileSync(file, `const { parentPort } = require('worker_threads');\n${body}\n`);
+  return file;
+}
+const echo = script('echo.js', "parentPort.on('message', (m) => parentPort.postMessage({ id: m.id, ok: true, outcome: { problems: [{ code: 'echo', severity: 'info', message: m.text, range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } } }] } }));");
+const hang = script('hang.js', "parentPort.on('message', () => { for (;;) {} });");
+const slow = script(
+  'slow.js',
+  "parentPort.on('message', (m) => { Atomics.wait(new Int32Array(new SharedArrayBuffer(4)), 0, 0, Number(m.text)); parentPort.postMessage({ id: m.id, ok: true, outcome: { problems: [] } }); });",
+);
+const failing = script('failing.js', "parentPort.on('message', (m) => parentPort.postMessage({ id: m.id, ok: false, error: 'no physics today' }));");
+
+const evaluators: WorkerEvaluator[] = [];
+function make(file: string, limitMs = 30_000): { ev: WorkerEvaluator; logged: string[] } {
+  const logged: string[] = [];
+  const ev = new WorkerEvaluator(file, (m) => logged.push(m), limitMs);
+  evaluators.push(ev);
+  return { ev, logged };
+}
+afterAll(() => evaluators.forEach((e) => e.dispose()));
+
+describe('the worker evaluator', () => {
+  it('runs jobs in a worker, one after another, each with its own answer', async () => {
+    const { ev } = make(echo);
+    const [a, b] = await Promise.all([ev.evaluate('first'), ev.evaluate('second')]);
+    expect(a.problems[0]!.message).toBe('first');
+    expect(b.problems[0]!.message).toBe('second');
+  });
+
+  it('stops a job that overruns its time limit and carries on with a fresh worker', async () => {
+    const { ev, logged } = make(hang, 300);
+    await expect(ev.evaluate('x')).rejects.toThrow('longer than 0.3 s');
+    expect(logged.join('\n')).toContain('was stopped');
+    await expect(ev.evaluate('y')).rejects.toThrow('longer than 0.3 s'); // a new worker took the job
+  });
+
+  it('passes a failed evaluation on as a rejection', async () => {
+    const { ev } = make(failing);
+    await expect(ev.evaluate('x')).rejects.toThrow('no physics today');
+  });
+
+  it('drops a queued job that is no longer wanted', async () => {
+    const { ev } = make(slow);
+    const first = ev.evaluate('300');
+    const abort = new AbortController();
+    const second = ev.evaluate('300', abort.signal);
+    abort.abort();
+    await expect(second).rejects.toThrow(SUPERSEDED);
+    await expect(first).resolves.toEqual({ problems: [] });
+  });
+
+  it('stops a long job that is no longer wanted, and the next job gets a fresh worker', async () => {
+    const { ev, logged } = make(slow);
+    const abort = new AbortController();
+    const started = Date.now();
+    const old = ev.evaluate('5000', abort.signal);
+    await new Promise((r) => setTimeout(r, 600));
+    abort.abort();
+    await expect(old).rejects.toThrow(SUPERSEDED);
+    expect(Date.now() - started).toBeLessThan(3000);
+    await expect(ev.evaluate('10')).resolves.toEqual({ problems: [] });
+    expect(logged).toEqual([]); // giving up on an old version is not worth a log line
+  });
+
+  it('rejects pending jobs when disposed', async () => {
+    const { ev } = make(hang, 10_000);
+    const job = ev.evaluate('x');
+    ev.dispose();
+    await expect(job).rejects.toThrow('evaluator stopped');
+  });
+});
