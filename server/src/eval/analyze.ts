@@ -5,11 +5,18 @@
 import type { Problem, SetupDocument } from '../format/ast';
 import { parseSetup } from '../format/parser';
 import { buildModel } from '../model/buildModel';
+import { recordSources, type SetupSources, type SourceSnapshot } from '../model/sources';
 import type { SetupModel } from '../model/types';
 import { evaluate, sortProblems } from './evaluate';
 
 export { sortProblems };
 import type { EvaluationResult } from './resultTypes';
+
+/**
+ * Where the text lives and how to read the files its `use` statements name (see
+ * model/sources.ts). Without it, `use` statements cannot be followed and say so.
+ */
+export type AnalyzeOptions = SetupSources;
 
 export interface Analysis {
   doc: SetupDocument;
@@ -17,22 +24,26 @@ export interface Analysis {
   result?: EvaluationResult;
   /** Every problem from every stage, in document order. */
   problems: Problem[];
+  /** The document's location and every file read for its `use` statements, when a reader was given. */
+  sources?: SourceSnapshot;
 }
 
-export function analyze(text: string): Analysis {
+export function analyze(text: string, options?: AnalyzeOptions): Analysis {
   let doc: SetupDocument;
   try {
     doc = parseSetup(text);
   } catch (e) {
-    const empty: SetupDocument = { text, lineStarts: [0], blocks: [], comments: [], problems: [] };
+    const empty: SetupDocument = { text, lineStarts: [0], blocks: [], uses: [], comments: [], problems: [] };
     return { doc: empty, problems: [internalError(e)] };
   }
+  const recording = options ? recordSources(options) : undefined;
+  const withSources = <T extends object>(a: T): T & { sources?: SourceSnapshot } => (recording ? { ...a, sources: recording.snapshot() } : a);
   try {
-    const model = buildModel(doc);
+    const model = buildModel(doc, recording?.sources);
     const { result, problems } = evaluate(model, [...doc.problems, ...model.problems]);
-    return { doc, model, result, problems };
+    return withSources({ doc, model, result, problems });
   } catch (e) {
-    return { doc, problems: sortProblems([...doc.problems, internalError(e)]) };
+    return withSources({ doc, problems: sortProblems([...doc.problems, internalError(e)]) });
   }
 }
 

@@ -43,13 +43,16 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   const terms: TermResult[] = [];
   for (const s of model.species) {
     for (const l of s.levels) {
+      const first = notes.length;
       if (l.kind === 'term') {
         const t = evaluateTerm(l, model.settings, fields, notes);
         if (t) terms.push(t);
-        continue;
+      } else {
+        const r = evaluateLevel(l, model.settings, fields, notes);
+        if (r) levels.push(r);
       }
-      const r = evaluateLevel(l, model.settings, fields, notes);
-      if (r) levels.push(r);
+      // A level from a used file has its ranges in that file: its notes go on the `use` path here.
+      if (s.origin) for (let i = first; i < notes.length; i++) if (notes[i]!.range === l.nameRange) notes[i] = { ...notes[i]!, range: s.origin.useRange };
     }
   }
   const gJByLevel = new Map(levels.map((l) => [`${l.species}.${l.level}`, l.g_J.used]));
@@ -81,6 +84,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
       I: s.twoI.value / 2,
       g_I: { value: s.gI.value, source: s.gI.source },
       levels: s.levels.map((l) => l.name),
+      ...(s.origin ? { defined_in: s.origin.path } : {}),
     })),
     levels,
     terms,

@@ -140,6 +140,8 @@ export interface SpeciesResult {
   I: number;
   g_I: SourcedNumber;
   levels: string[];
+  /** The file that declares it, when it comes through `use` (relative to the evaluated file). */
+  defined_in?: string;
 }
 
 export interface MagnetResult {

@@ -8,7 +8,7 @@ import { type CompletionItem, CompletionItemKind, type Position } from 'vscode-l
 import type { Analysis } from '../eval/analyze';
 import type { BlockKind, BlockNode } from '../format/ast';
 import { readNumber, readNumberPrefix, startsLikeNumber } from '../format/numbers';
-import { BLOCK_KEYS, BLOCK_WORDS, isBlockWord, LEVEL_KEYS, LEVEL_WORD } from '../format/schema';
+import { BLOCK_KEYS, BLOCK_WORDS, isBlockWord, LEVEL_KEYS, LEVEL_WORD, USE_WORD } from '../format/schema';
 import type { Token } from '../format/scanner';
 import type { LevelModel, SetupModel } from '../model/types';
 import { parseLevelDesignation } from '../physics/configuration';
@@ -42,6 +42,7 @@ function statementStart(c: LineContext): CompletionItem[] {
     }
   }
   for (const w of BLOCK_WORDS) out.push(item(w, CompletionItemKind.Keyword, c.replace, { insert: `${w} `, detail: BLOCK_WORD_DETAIL[w], order: order++ }));
+  out.push(item(USE_WORD, CompletionItemKind.Keyword, c.replace, { insert: 'use "${1:file.sublevel}"', snippet: true, detail: 'use "<path>" — the species of another setup file', order: order++ }));
   return out;
 }
 

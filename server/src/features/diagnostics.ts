@@ -1,6 +1,6 @@
 /**
  * Problems → LSP diagnostics: the stable code, the plain message, the exact range, related
- * places (same document), and the problem's `data` so that quick fixes can use it.
+ * places (in this document, or in a used file), and the problem's `data` so that quick fixes can use it.
  */
 import { type Diagnostic, DiagnosticSeverity, DiagnosticTag } from 'vscode-languageserver-types';
 import type { Analysis } from '../eval/analyze';
@@ -38,7 +38,7 @@ function convert(p: Problem, uri: string): Diagnostic {
     message: p.message,
   };
   if (p.related && p.related.length > 0) {
-    d.relatedInformation = p.related.map((r) => ({ location: { uri, range: r.range }, message: r.message }));
+    d.relatedInformation = p.related.map((r) => ({ location: { uri: r.uri ?? uri, range: r.range }, message: r.message }));
   }
   if (p.data) d.data = p.data;
   if (isUnnecessary(p.code)) d.tags = [DiagnosticTag.Unnecessary];

@@ -1,6 +1,6 @@
 /**
  * Formatting that only ever changes whitespace, as minimal edits:
- *   - block contents indented by two spaces, block headers at the left margin; a comment line
+ *   - block contents indented by two spaces, block headers and `use` lines at the left margin; a comment line
  *     takes the indentation of the next statement;
  *   - one space on each side of `=`;
  *   - no trailing whitespace (and no blanks on empty lines).
@@ -20,7 +20,7 @@ export const INDENT = '  ';
 interface Item {
   start: number;
   end: number;
-  kind: 'atom' | 'equals' | 'colon' | 'comma' | 'arrow' | 'comment';
+  kind: 'atom' | 'equals' | 'colon' | 'comma' | 'arrow' | 'string' | 'comment';
 }
 
 interface ScannedLineItems {
@@ -49,6 +49,8 @@ function headerLines(analysis: Analysis): Set<number> {
 /** Wanted indentation (in spaces) of every line that has something on it; -1 for empty lines. */
 function indentation(analysis: Analysis, scanned: ScannedLineItems[]): number[] {
   const headers = headerLines(analysis);
+  // A `use` statement sits at the margin and ends the block before it.
+  const uses = new Set(analysis.doc.uses.map((u) => u.range.start.line));
   const out = new Array<number>(scanned.length).fill(-1);
   let inBody = false;
   const codeIndent = new Array<number>(scanned.length).fill(-1);
@@ -58,6 +60,9 @@ function indentation(analysis: Analysis, scanned: ScannedLineItems[]): number[] 
     if (headers.has(n)) {
       codeIndent[n] = 0;
       inBody = true;
+    } else if (uses.has(n)) {
+      codeIndent[n] = 0;
+      inBody = false;
     } else codeIndent[n] = inBody ? INDENT.length : 0;
   });
   let next = 0;

@@ -1,6 +1,6 @@
 /**
  * Hover: finds what is under the cursor and joins the sections that describe it (one section
- * builder per kind of thing in hover/). To show a new kind of result, add a section builder
+ * builder per kind of thing in hover/). A species or level from a used file says where it is defined. To show a new kind of result, add a section builder
  * and call it from `sectionsFor`.
  */
 import { type Hover, MarkupKind, type Position, type Range } from 'vscode-languageserver-types';
@@ -19,7 +19,8 @@ import { quantitySection } from './hover/quantitySection';
 import { resonanceSection } from './hover/resonanceSection';
 import { speciesSection } from './hover/speciesSection';
 import { termSection } from './hover/termSection';
-import { locate, type Target } from './shared/locate';
+import { useSection } from './hover/useSection';
+import { locate, type Target, useAt } from './shared/locate';
 import { md } from './shared/markdown';
 import {
   beamOfBlock,
@@ -39,13 +40,14 @@ export type { HoverOptions } from './hover/context';
 export { DEFAULT_HOVER_OPTIONS } from './hover/context';
 
 function levelSections(level: LevelModel, ctx: HoverContext, withHyperfine = true): string[] {
+  const origin = level.species.origin;
+  const title = `*level ${md(level.name)} of ${md(level.species.name)}*${origin ? ` — defined in ${md(origin.path)}` : ''}`;
   if (level.kind === 'term') {
     const t = termResult(ctx.analysis.result, level.species.name, level.name);
-    const title = `*level ${md(level.name)} of ${md(level.species.name)}*`;
     return [`${title}\n\n${t ? fineStructureSection(t) : termSection(level, undefined)}`];
   }
   const r = levelResult(ctx.analysis.result, level.species.name, level.name);
-  const out = [`*level ${md(level.name)} of ${md(level.species.name)}*\n\n${termSection(level, r)}`];
+  const out = [`${title}\n\n${termSection(level, r)}`];
   if (r && withHyperfine) {
     const hf = hyperfineSection(r);
     if (hf) out.push(hf);
@@ -119,7 +121,7 @@ function referenceSections(ctx: HoverContext, pos: Position): string[] | undefin
   if (!model) return undefined;
   const use = nameAt(model, pos);
   if (!use || use.isDeclaration || !use.target) return undefined;
-  const d = declaredAt(model, use.target.kind, use.target.range);
+  const d = declaredAt(model, use.target.kind, use.target.range, use.target.uri);
   return d ? declaredSections(d, ctx) : undefined;
 }
 
@@ -198,6 +200,11 @@ function targetRange(t: Target): Range | undefined {
 }
 
 export function hover(analysis: Analysis, pos: Position, options: HoverOptions = DEFAULT_HOVER_OPTIONS): Hover | null {
+  const statement = useAt(analysis.doc, pos);
+  if (statement) {
+    const used = analysis.model?.uses.find((u) => u.node === statement);
+    return used ? { contents: { kind: MarkupKind.Markdown, value: useSection(used) }, range: statement.range } : null;
+  }
   const target = locate(analysis.doc, pos);
   if (!target || target.kind === 'comment') return null;
   const sections = sectionsFor(target, { analysis, options }, pos).filter((s) => s.trim() !== '');

@@ -2,7 +2,7 @@
  * Rename a species, level, field, magnet, beam or line everywhere it is named. Refused, with
  * the reason, where the result would change the physics or not read back the same: a
  * built-in species name (its data would come or go), a name another thing of the same kind
- * already has, or text that is not a single name.
+ * already has, text that is not a single name, or a name declared in a used file.
  */
 import type { Position, Range, WorkspaceEdit } from 'vscode-languageserver-types';
 import type { Analysis } from '../eval/analyze';
@@ -22,6 +22,11 @@ function renamable(model: SetupModel, pos: Position): { use: NameUse; decl: NonN
   if (!use) return null;
   const decl = declarationOf(use);
   if (!decl) return { error: `'${use.name}' does not name anything defined in this file, so there is nothing to rename` };
+  if (decl.uri !== undefined) {
+    const from = declaredAt(model, decl.kind, decl.range, decl.uri);
+    const where = from?.kind === 'species' ? from.item.origin?.path : from?.kind === 'level' ? from.item.species.origin?.path : undefined;
+    return { error: `'${decl.name}' is declared in ${where ?? 'another file'}: rename it there` };
+  }
   if (decl.kind === 'species' && findSpecies(decl.name)) {
     return { error: `'${decl.name}' is a built-in species: renaming it would drop its built-in data` };
   }
@@ -41,7 +46,9 @@ function clash(model: SetupModel, decl: NonNullable<ReturnType<typeof declaratio
     if (d.item.species.levels.some((l) => l !== d.item && l.name === newName)) return `${d.item.species.name} already has a level named '${newName}'`;
     return undefined;
   }
-  const taken = model.names.some((u) => u.isDeclaration && u.kind === decl.kind && u.name === newName);
+  const taken =
+    model.names.some((u) => u.isDeclaration && u.kind === decl.kind && u.name === newName) ||
+    (decl.kind === 'species' && model.species.some((s) => s.origin !== undefined && s.name === newName));
   return taken ? `there is already a ${decl.kind} named '${newName}'` : undefined;
 }
 

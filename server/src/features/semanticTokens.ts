@@ -1,11 +1,12 @@
 /**
  * Semantic tokens: block words and value words, names by what they name (declarations marked,
  * built-in species marked as library), setting keys, numbers, units, term designations,
- * operators and comments. A range request encodes only the lines it asks for.
+ * operators and comments, the `use` keyword and its quoted path. A range request encodes only the lines it asks for.
  */
 import type { Range, SemanticTokens } from 'vscode-languageserver-types';
 import type { Analysis } from '../eval/analyze';
-import type { BlockNode, SettingNode, Spanned, ValuePart } from '../format/ast';
+import type { BlockNode, SettingNode, SetupDocument, Spanned, ValuePart } from '../format/ast';
+import { lineText } from '../format/positions';
 import { VALUE_WORDS } from '../format/schema';
 import type { NameUse, SetupModel } from '../model/types';
 import { findSpecies } from '../physics/species';
@@ -93,6 +94,14 @@ function blockTokens(c: Collector, model: SetupModel | undefined, b: BlockNode):
   }
 }
 
+/** A `use` path's range widened over the quotes around it. */
+function withQuotes(doc: SetupDocument, r: Range): Range {
+  const line = lineText(doc, r.start.line);
+  const start = line[r.start.character - 1] === '"' ? r.start.character - 1 : r.start.character;
+  const end = line[r.end.character] === '"' ? r.end.character + 1 : r.end.character;
+  return { start: { line: r.start.line, character: start }, end: { line: r.end.line, character: end } };
+}
+
 function encode(toks: Tok[]): SemanticTokens {
   toks.sort((a, b) => a.line - b.line || a.start - b.start);
   const data: number[] = [];
@@ -118,6 +127,11 @@ export function semanticTokens(analysis: Analysis, range?: Range): SemanticToken
   for (const b of analysis.doc.blocks) {
     if (b.range.end.line < from || b.range.start.line > to) continue;
     blockTokens(c, analysis.model, b);
+  }
+  for (const u of analysis.doc.uses) {
+    if (u.range.end.line < from || u.range.start.line > to) continue;
+    c.span(u.keyword, 'keyword');
+    if (u.path) c.add(withQuotes(analysis.doc, u.path.range), 'string');
   }
   for (const cm of analysis.doc.comments) c.add(cm.range, 'comment');
   return encode(c.toks.filter((t) => t.line >= from && t.line <= to));

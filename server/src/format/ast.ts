@@ -84,6 +84,19 @@ export interface BlockNode {
   range: Range;
 }
 
+/**
+ * `use "<relative path>"`: the species of another setup file are available here by name.
+ * Top level only; the line ends the block before it.
+ */
+export interface UseNode {
+  kind: 'use';
+  keyword: Spanned;
+  /** The path as written, without its quotes; the range covers the text between them. Absent when none is written. */
+  path?: Spanned;
+  /** The whole statement. */
+  range: Range;
+}
+
 export interface CommentNode extends Spanned {
   /** True when the comment is the only thing on its line. */
   ownLine: boolean;
@@ -98,7 +111,8 @@ export interface Problem {
   severity: ProblemSeverity;
   message: string;
   range: Range;
-  related?: { message: string; range: Range }[];
+  /** Other places involved; `uri` is set when the place is in another file (a used file). */
+  related?: { message: string; range: Range; uri?: string }[];
   /** Data a quick fix needs, e.g. replacement suggestions. */
   data?: { suggestions?: string[]; [key: string]: unknown };
 }
@@ -108,6 +122,8 @@ export interface SetupDocument {
   /** Offsets of the start of each line, for position <-> offset conversion. */
   lineStarts: number[];
   blocks: BlockNode[];
+  /** The `use` statements, in order. */
+  uses: UseNode[];
   comments: CommentNode[];
   problems: Problem[];
 }

@@ -45,6 +45,11 @@ export const RULES: Record<string, RuleInfo> = {
     summary: 'A number that cannot be used (division by zero, out of range).',
     stage: 'syntax',
   },
+  'syntax-use-path': {
+    severity: 'error',
+    summary: 'A `use` statement without a path in double quotes.',
+    stage: 'syntax',
+  },
   'syntax-internal-error': {
     severity: 'error',
     summary: 'The parser failed; never expected, tested against random input.',

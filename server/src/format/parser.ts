@@ -3,13 +3,13 @@
  * statement; a line that cannot be read is reported and skipped and the next line is read as
  * usual. See docs/format.md for the format.
  */
-import type { BlockKind, BlockNode, LevelNode, NameRef, Position, Problem, SettingNode, SetupDocument, Spanned } from './ast';
+import type { BlockKind, BlockNode, LevelNode, NameRef, Position, Problem, SettingNode, SetupDocument, Spanned, UseNode } from './ast';
 import { makeProblem } from './codes';
 import { didYouMeanText, suggestNames } from './didYouMean';
 import { startsLikeNumber } from './numbers';
 import { computeLineStarts } from './positions';
 import { scanText, type ScannedLine, type Token } from './scanner';
-import { BLOCK_KEYS, BLOCK_WORDS, blocksWithKey, isBlockWord, LEVEL_KEYS, LEVEL_WORD } from './schema';
+import { BLOCK_KEYS, BLOCK_WORDS, blocksWithKey, isBlockWord, LEVEL_KEYS, LEVEL_WORD, USE_WORD } from './schema';
 import { rangeOn, readValueGroups, spanOf, type LineSpans } from './values';
 
 /** Parses a whole document. Never throws. */
@@ -23,6 +23,7 @@ export function parseSetup(text: string): SetupDocument {
       text,
       lineStarts: computeLineStarts(text),
       blocks: [],
+      uses: [],
       comments: [],
       problems: [makeProblem('syntax-internal-error', `the parser failed on this text: ${String(e)}`, { start: at, end: at })],
     };
@@ -54,6 +55,7 @@ interface PendingSetting {
 
 class SetupParser {
   private readonly blocks: BlockNode[] = [];
+  private readonly uses: UseNode[] = [];
   private readonly comments: SetupDocument['comments'] = [];
   private readonly problems: Problem[] = [];
   private current: BlockNode | undefined;
@@ -74,7 +76,7 @@ class SetupParser {
       .map((p, i) => ({ p, i }))
       .sort((a, b) => a.p.range.start.line - b.p.range.start.line || a.p.range.start.character - b.p.range.start.character || a.i - b.i)
       .map((x) => x.p);
-    return { text: this.text, lineStarts: scanned.lineStarts, blocks: this.blocks, comments: this.comments, problems };
+    return { text: this.text, lineStarts: scanned.lineStarts, blocks: this.blocks, uses: this.uses, comments: this.comments, problems };
   }
 
   // ---- lines -------------------------------------------------------------------------------
@@ -92,6 +94,10 @@ class SetupParser {
     const followedBySetting = t1?.kind === 'equals' || (t1?.kind === 'colon' && this.keyAllowedHere(word));
     if (isBlockWord(word) && !followedBySetting) {
       this.openBlock(word, tokens);
+      return;
+    }
+    if (word === USE_WORD && !followedBySetting) {
+      this.readUse(tokens);
       return;
     }
     if (word === LEVEL_WORD && !followedBySetting) this.readLevel(tokens);
@@ -224,6 +230,38 @@ class SetupParser {
     return ref;
   }
 
+  // ---- use ---------------------------------------------------------------------------------
+
+  /** `use "<path>"`: a top-level statement, so it ends the block before it. */
+  private readUse(tokens: Token[]): void {
+    const kw = tokens[0]!;
+    this.current = undefined;
+    this.level = undefined;
+    this.orphan = false;
+    this.levelOrphan = false;
+    const node: UseNode = { kind: 'use', keyword: this.span(kw), range: rangeOn(this.ls, kw.start, tokens[tokens.length - 1]!.end) };
+    this.uses.push(node);
+    const how = 'write `use "folder/file.sublevel"`, with the path in double quotes';
+    const p = tokens[1];
+    if (!p || (p.kind !== 'string' && p.kind !== 'atom')) {
+      const at = p ?? kw;
+      this.report('syntax-use-path', `\`use\` needs the path of a setup file: ${how}`, at.start, at.end);
+      this.unexpected(tokens.slice(2), 'a `use` statement takes one path');
+      return;
+    }
+    if (p.kind === 'atom') {
+      this.report('syntax-use-path', `put the path in double quotes: use "${clip(p.text)}"`, p.start, p.end, { data: { suggestions: [`"${p.text}"`] } });
+      node.path = this.span(p);
+    } else {
+      const closed = p.text.length >= 2 && p.text.endsWith('"');
+      const innerEnd = closed ? p.end - 1 : p.end;
+      if (!closed) this.report('syntax-use-path', `the path has no closing quote: ${how}`, p.start, p.end, { data: { suggestions: [`${p.text}"`] } });
+      if (innerEnd > p.start + 1) node.path = spanOf(this.ls, p.start + 1, innerEnd);
+      else if (closed) this.report('syntax-use-path', `the path is empty: ${how}`, p.start, p.end);
+    }
+    this.unexpected(tokens.slice(2), 'a `use` statement takes one path');
+  }
+
   // ---- levels ------------------------------------------------------------------------------
 
   /** `level <name>: <designation> [settings]` */
@@ -274,9 +312,10 @@ class SetupParser {
     return block.kind === 'species' && this.level !== undefined && LEVEL_KEYS.includes(key);
   }
 
-  private statementCandidates(): string[] {
+  /** Words a line may start with here; `use` only when a quoted path follows, as it would in a misspelt `use` line. */
+  private statementCandidates(beforeString: boolean): string[] {
     const keys = this.current ? [...BLOCK_KEYS[this.current.kind], ...(this.current.kind === 'species' ? LEVEL_KEYS : [])] : [];
-    return [...BLOCK_WORDS, LEVEL_WORD, ...keys];
+    return [...(beforeString ? [USE_WORD] : []), ...BLOCK_WORDS, LEVEL_WORD, ...keys];
   }
 
   private readSettingsLine(tokens: Token[]): void {
@@ -289,7 +328,7 @@ class SetupParser {
       if (t0.kind === 'atom' && this.keyAllowedHere(t0.text)) {
         this.readSettingWithoutEquals(head);
       } else if (t0.kind === 'atom') {
-        const suggestions = suggestNames(t0.text, this.statementCandidates());
+        const suggestions = suggestNames(t0.text, this.statementCandidates(tokens[1]?.kind === 'string'));
         const meantKeyword = suggestions.some((s) => isBlockWord(s) || s === LEVEL_WORD);
         if (starts.length === 0 || meantKeyword) {
           this.unknownStatement(t0, tokens, suggestions);

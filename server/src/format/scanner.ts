@@ -1,14 +1,18 @@
 /**
- * Splits a document into lines and each line into tokens. The format has no quoting, so the
- * scanner is a plain left-to-right pass: `#` always starts a comment, `=`, `:`, `,` and the
- * arrow (`->` or `→`) are single tokens, and every other run of non-blank characters is an
+ * Splits a document into lines and each line into tokens, in a plain left-to-right pass: `#`
+ * starts a comment, `=`, `:`, `,` and the arrow (`->` or `→`) are single tokens, a token that
+ * starts with `"` is a quoted string up to the next `"` on the line (the path of a `use`
+ * statement; it may hold blanks and `#`), and every other run of non-blank characters is an
  * "atom" (a word, number, quantity, unit or term symbol; later stages decide which).
  */
 import { computeLineStarts } from './positions';
 
-export type TokenKind = 'atom' | 'equals' | 'colon' | 'comma' | 'arrow';
+export type TokenKind = 'atom' | 'equals' | 'colon' | 'comma' | 'arrow' | 'string';
 
-/** A token; offsets are absolute (into the whole document), end exclusive. */
+/**
+ * A token; offsets are absolute (into the whole document), end exclusive. A `string` token's
+ * text includes its quotes; one without a closing quote runs to the comment or the line's end.
+ */
 export interface Token {
   kind: TokenKind;
   text: string;
@@ -60,6 +64,17 @@ function startsArrow(text: string, i: number): boolean {
   return text.charCodeAt(i) === 45 /* - */ && text.charCodeAt(i + 1) === 62; /* > */
 }
 
+/** End (exclusive) of the quoted string that starts at `i`. */
+function stringEnd(text: string, i: number, end: number): number {
+  const close = text.indexOf('"', i + 1);
+  if (close >= 0 && close < end) return close + 1;
+  // Unterminated: up to a comment or the line's end, without trailing blanks.
+  const hash = text.indexOf('#', i + 1);
+  let stop = hash >= 0 && hash < end ? hash : end;
+  while (stop > i + 1 && isBlank(text.charCodeAt(stop - 1))) stop--;
+  return stop;
+}
+
 /** Tokens of text[start, end), which must not contain a line break. */
 export function scanLine(text: string, line: number, start: number, end: number): ScannedLine {
   const tokens: Token[] = [];
@@ -79,6 +94,12 @@ export function scanLine(text: string, line: number, start: number, end: number)
     if (startsArrow(text, i)) {
       tokens.push({ kind: 'arrow', text: '->', start: i, end: i + 2 });
       i += 2;
+      continue;
+    }
+    if (ch === '"') {
+      const stop = stringEnd(text, i, end);
+      tokens.push({ kind: 'string', text: text.slice(i, stop), start: i, end: stop });
+      i = stop;
       continue;
     }
     const single = singleTokenKind(ch);

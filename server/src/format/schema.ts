@@ -8,6 +8,9 @@ export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 
 
 export const LEVEL_WORD = 'level';
 
+/** `use "<path>"` at the top level: the species of another setup file become available. */
+export const USE_WORD = 'use';
+
 /** Keys a level takes, on its own line or on the lines after it. */
 export const LEVEL_KEYS: readonly string[] = ['A', 'B', 'C', 'g_J', 'energy', 'zeta'];
 

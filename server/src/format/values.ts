@@ -100,7 +100,8 @@ export function readValueGroups(tokens: Token[], ls: LineSpans, problems: Proble
     atoms = [];
   };
   for (const t of tokens) {
-    if (t.kind === 'atom') atoms.push(t);
+    // A quoted string has no meaning in a value; it is read as one word, as it was before quoting existed.
+    if (t.kind === 'atom' || t.kind === 'string') atoms.push(t);
     else if (t.kind === 'comma') {
       closeItem(t.start, true);
       itemStart = t.end;

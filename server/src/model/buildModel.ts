@@ -1,20 +1,29 @@
 /**
  * Syntax tree → semantic model. Declarations are collected first (species and their levels,
- * fields, magnets), then references (beams, lines) are resolved, so order in the file does not matter.
+ * fields, magnets, and the species of used files), then references (beams, lines) are
+ * resolved, so order in the file does not matter.
  */
-import type { SetupDocument } from '../format/ast';
+import type { Range, SetupDocument } from '../format/ast';
 import { buildBeam, buildField, buildMagnet } from './apparatusBuilder';
 import { checkLevelPhysics } from './levelChecks';
 import { buildLine } from './lineBuilder';
+import { locationKey } from './locations';
 import { NameIndex } from './nameIndex';
 import { ProblemList } from './problems';
 import { applySettings, DEFAULT_SETTINGS } from './settingsBuilder';
 import { buildSpecies } from './speciesBuilder';
 import { buildResonance } from './resonanceBuilder';
-import type { BeamModel, FieldModel, LineModel, MagnetModel, NameUse, ResonanceModel, SetupModel, SpeciesModel } from './types';
+import type { SetupSources } from './sources';
+import type { BeamModel, FieldModel, LineModel, MagnetModel, NameUse, ResonanceModel, SetupModel, SpeciesModel, UsedFileModel } from './types';
+import { resolveUses, rootUseContext, type UseContext } from './useResolver';
 
-export function buildModel(doc: SetupDocument): SetupModel {
+/**
+ * `sources` says where the text lives and how to read the files its `use` statements name;
+ * without it a `use` cannot be followed (and says so). `context` is for used files.
+ */
+export function buildModel(doc: SetupDocument, sources: SetupSources = {}, context?: UseContext): SetupModel {
   const problems = new ProblemList();
+  const used = doc.uses.length > 0 ? resolveUses(doc, sources, context ?? rootUseContext(sources.uri), buildModel, problems) : [];
   const names: NameUse[] = [];
   const settings = { ...DEFAULT_SETTINGS };
   const species = new NameIndex<SpeciesModel>('species', names);
@@ -48,6 +57,7 @@ export function buildModel(doc: SetupDocument): SetupModel {
         break;
     }
   }
+  adoptUsedSpecies(used, species, problems);
   let beamOrdinal = 0;
   const beamsWithoutName: BeamModel[] = [];
   for (const block of doc.blocks) {
@@ -65,6 +75,7 @@ export function buildModel(doc: SetupDocument): SetupModel {
   }
   const model: SetupModel = {
     doc,
+    uses: used,
     species: species.all(),
     fields: fields.all(),
     magnets: magnets.all(),
@@ -75,6 +86,41 @@ export function buildModel(doc: SetupDocument): SetupModel {
     names,
     problems: problems.items,
   };
-  for (const s of model.species) for (const l of s.levels) checkLevelPhysics(l, model.settings, problems);
+  // A used file's levels are checked in that file.
+  for (const s of model.species) if (!s.origin) for (const l of s.levels) checkLevelPhysics(l, model.settings, problems);
   return model;
+}
+
+/**
+ * The species of used files join this file's, by name. A name this file declares itself, or
+ * that an earlier `use` brought in from another declaration, is a duplicate; the same
+ * declaration reached twice (two used files that use one file) is not.
+ */
+function adoptUsedSpecies(used: UsedFileModel[], species: NameIndex<SpeciesModel>, problems: ProblemList): void {
+  for (const u of used) {
+    const kept: SpeciesModel[] = [];
+    for (const s of u.species) {
+      const origin = s.origin!;
+      const there = { message: `'${s.name}' is declared in ${origin.path}`, range: s.nameRange, uri: origin.uri };
+      const first = species.adopt(s);
+      if (!first) {
+        kept.push(s);
+        continue;
+      }
+      if (!first.origin) {
+        problems.add('name-duplicate', `species '${s.name}' is also declared in ${origin.path} (used on line ${origin.useRange.start.line + 1}); the one here is used`, first.nameRange, {
+          related: [there],
+        });
+      } else if (locationKey(first.origin.uri) !== locationKey(origin.uri) || !sameRange(first.nameRange, s.nameRange)) {
+        problems.add('name-duplicate', `${origin.path} brings a species named '${s.name}' that ${first.origin.path} brings already`, origin.useRange, {
+          related: [there, { message: `'${s.name}' is first declared in ${first.origin.path}`, range: first.nameRange, uri: first.origin.uri }],
+        });
+      }
+    }
+    u.species = kept;
+  }
+}
+
+function sameRange(a: Range, b: Range): boolean {
+  return a.start.line === b.start.line && a.start.character === b.start.character && a.end.line === b.end.line && a.end.character === b.end.character;
 }

@@ -47,6 +47,10 @@ export const MODEL_RULES = {
   'line-incomplete': { severity: 'error', summary: 'A line without both levels.' },
   'line-across-species': { severity: 'error', summary: 'A line between levels of different species.' },
   'line-same-level': { severity: 'error', summary: 'A line from a level to itself.' },
+  'use-file-missing': { severity: 'error', summary: 'A `use` path that leads to no readable file.' },
+  'use-has-errors': { severity: 'warning', summary: 'A used file has errors of its own (reported in that file).' },
+  'use-cycle': { severity: 'error', summary: 'Files that use each other in a circle.' },
+  'use-too-deep': { severity: 'error', summary: 'A chain of `use` statements deeper than the limit.' },
 } as const satisfies Record<string, RuleInfo>;
 
 export type ModelCode = keyof typeof MODEL_RULES;

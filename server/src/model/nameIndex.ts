@@ -5,11 +5,11 @@
 import type { Range, Spanned } from '../format/ast';
 import { suggestNames } from '../format/didYouMean';
 import type { ProblemList } from './problems';
-import type { LevelModel, NameUse, SpeciesModel } from './types';
+import type { LevelModel, NameUse, SpeciesModel, SpeciesOrigin } from './types';
 
 export type NamedKind = NameUse['kind'];
 
-export class NameIndex<T extends { name: string; nameRange: Range }> {
+export class NameIndex<T extends { name: string; nameRange: Range; origin?: SpeciesOrigin }> {
   private readonly byName = new Map<string, T>();
 
   constructor(private readonly kind: NamedKind, private readonly uses: NameUse[]) {}
@@ -28,6 +28,17 @@ export class NameIndex<T extends { name: string; nameRange: Range }> {
     return true;
   }
 
+  /**
+   * Take in a declaration made in another file (no name use is recorded: its range is not in
+   * this file). Gives the item already holding the name, if any, and then does not index it.
+   */
+  adopt(item: T): T | undefined {
+    const first = this.byName.get(item.name);
+    if (first) return first;
+    this.byName.set(item.name, item);
+    return undefined;
+  }
+
   get(name: string): T | undefined {
     return this.byName.get(name);
   }
@@ -44,7 +55,7 @@ export class NameIndex<T extends { name: string; nameRange: Range }> {
       name: ref.text,
       range: ref.range,
       isDeclaration: false,
-      ...(found ? { target: { kind: this.kind, name: found.name, range: found.nameRange } } : {}),
+      ...(found ? { target: { kind: this.kind, name: found.name, range: found.nameRange, ...(found.origin ? { uri: found.origin.uri } : {}) } } : {}),
     });
     if (!found) reportUnknown(this.kind, ref, [...this.byName.keys()], problems);
     return found;
@@ -98,7 +109,7 @@ export function resolveLevel(
     name: ref.name.text,
     range: ref.name.range,
     isDeclaration: false,
-    ...(found ? { target: { kind: 'level', name: found.name, range: found.nameRange } } : {}),
+    ...(found ? { target: { kind: 'level', name: found.name, range: found.nameRange, ...(found.species.origin ? { uri: found.species.origin.uri } : {}) } } : {}),
   });
   if (!found) {
     reportUnknown('level', ref.name, pool.flatMap((s) => s.levels.map((l) => l.name)), problems);

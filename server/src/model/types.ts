@@ -3,7 +3,7 @@
  * term symbols interpreted and built-in species data merged in.
  * Every value remembers where it came from (the file or a published source).
  */
-import type { BlockNode, LevelNode, Problem, Range, SettingNode, SetupDocument } from '../format/ast';
+import type { BlockNode, LevelNode, Problem, Range, SettingNode, SetupDocument, UseNode } from '../format/ast';
 import type { Configuration } from '../physics/configuration';
 import type { TermSymbol } from '../physics/termSymbol';
 import type { BuiltinSpecies } from '../physics/species';
@@ -18,10 +18,25 @@ export interface Valued<T> {
   uncertainty?: number;
 }
 
+/**
+ * Where a species brought in by `use` is declared. Its `node`, `nameRange` and every range of
+ * its levels and values are ranges in that file, not in the file being analysed.
+ */
+export interface SpeciesOrigin {
+  /** The file that declares it: a URI or a path, of the same kind as the analysed file's own `uri`. */
+  uri: string;
+  /** That file as the analysed file reaches it: the path its `use` statement writes, or relative to its folder when it comes through another used file. */
+  path: string;
+  /** The path of the `use` statement in the analysed file that brings it in. */
+  useRange: Range;
+}
+
 export interface SpeciesModel {
   name: string;
   node: BlockNode;
   nameRange: Range;
+  /** Set when the species comes from another file through `use`. */
+  origin?: SpeciesOrigin;
   builtin?: BuiltinSpecies;
   massKg?: Valued<number>;
   /** Twice the nuclear spin. */
@@ -138,13 +153,26 @@ export interface NameUse {
   kind: 'species' | 'level' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance';
   name: string;
   range: Range;
-  /** The declaration it resolves to, if any. */
-  target?: { kind: NameUse['kind']; name: string; range: Range };
+  /** The declaration it resolves to, if any; `uri` is set when it is declared in another file (through `use`). */
+  target?: { kind: NameUse['kind']; name: string; range: Range; uri?: string };
   isDeclaration: boolean;
+}
+
+/** One `use` statement and what it brought in. */
+export interface UsedFileModel {
+  node: UseNode;
+  /** Where the path leads (a URI or a path), when it could be worked out. */
+  location?: string;
+  /** True when the file was read and parsed. */
+  loaded: boolean;
+  /** The species it made available here (a species also declared here, or by an earlier `use`, is left out). */
+  species: SpeciesModel[];
 }
 
 export interface SetupModel {
   doc: SetupDocument;
+  /** The `use` statements, in order, with what each brought in. */
+  uses: UsedFileModel[];
   species: SpeciesModel[];
   fields: FieldModel[];
   magnets: MagnetModel[];

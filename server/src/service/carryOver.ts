@@ -25,7 +25,9 @@ export function carryOver(before: readonly string[], after: readonly string[], p
     const start = map(p.range.start.line);
     const end = map(p.range.end.line);
     if (start === undefined || end === undefined || end - start !== p.range.end.line - p.range.start.line) continue;
-    if (start === p.range.start.line && !p.related?.some((r) => map(r.range.start.line) !== r.range.start.line || map(r.range.end.line) !== r.range.end.line)) {
+    // Related places in another file (r.uri) do not move with this file's lines.
+    const stays = (r: NonNullable<Problem['related']>[number]): boolean => r.uri !== undefined || (map(r.range.start.line) === r.range.start.line && map(r.range.end.line) === r.range.end.line);
+    if (start === p.range.start.line && (p.related ?? []).every(stays)) {
       out.push(p);
       continue;
     }
@@ -35,6 +37,7 @@ export function carryOver(before: readonly string[], after: readonly string[], p
     };
     if (p.related) {
       const related = p.related.flatMap((r) => {
+        if (r.uri !== undefined) return [r];
         const s = map(r.range.start.line);
         const e = map(r.range.end.line);
         return s === undefined || e === undefined ? [] : [{ ...r, range: { start: { ...r.range.start, line: s }, end: { ...r.range.end, line: e } } }];

@@ -2,14 +2,17 @@
  * One state per open document: the fast analysis of its current version, the evaluation of
  * that version once it has run (results and the evaluation's own problems merged in), and
  * meanwhile the previous evaluation's problems carried over. Evaluations of one document run
- * one after another and only for its newest version.
+ * one after another and only for its newest version. A document that uses other files is
+ * analysed again, at the same version, when one of them changes (`filesChanged`).
  */
-import type { Analysis } from '../eval/analyze';
+import type { Analysis, AnalyzeOptions } from '../eval/analyze';
 import { sortProblems } from '../eval/analyze';
 import type { Problem } from '../format/ast';
+import { folderOf, locationKey } from '../model/locations';
 import { carryOver, splitLines } from './carryOver';
 import { type Evaluator, SUPERSEDED } from './evaluator';
 import { analyzeFast } from './fastAnalysis';
+import type { WorkspaceFiles } from './workspaceFiles';
 
 export interface DocumentSnapshot {
   readonly uri: string;
@@ -19,6 +22,10 @@ export interface DocumentSnapshot {
 
 interface VersionState {
   version: number;
+  /** How many times this version was analysed again because a file it uses changed. */
+  revision: number;
+  /** Set when a file this state read has changed: the next request analyses the version again. */
+  stale?: boolean;
   text: string;
   lines: string[];
   /** Parse and model; `result` and the evaluation's problems are merged in when it arrives. */
@@ -52,19 +59,27 @@ export class DocumentStore {
   constructor(
     private readonly evaluator: Evaluator,
     private readonly log: (message: string) => void,
+    /** Reads the files `use` statements name; without it a `use` cannot be followed. */
+    private readonly files?: WorkspaceFiles,
   ) {}
+
+  private options(uri: string): AnalyzeOptions | undefined {
+    const files = this.files;
+    return files ? { uri, readFile: (l) => files.readFile(l), listFolder: (l) => files.listFolder(l) } : undefined;
+  }
 
   private state(doc: DocumentSnapshot): VersionState {
     const entry = this.docs.get(doc.uri);
-    if (entry && entry.current.version === doc.version) return entry.current;
+    if (entry && entry.current.version === doc.version && !entry.current.stale) return entry.current;
     const text = doc.getText();
     const lines = splitLines(text);
     const last = entry?.lastEvaluated;
     const state: VersionState = {
       version: doc.version,
+      revision: entry && entry.current.version === doc.version ? entry.current.revision + 1 : 0,
       text,
       lines,
-      analysis: analyzeFast(text),
+      analysis: analyzeFast(text, this.options(doc.uri)),
       evaluated: false,
       carried: last ? carryOver(last.lines, lines, last.problems) : [],
       ...(last ? { carriedFrom: last } : {}),
@@ -80,12 +95,41 @@ export class DocumentStore {
   }
 
   has(doc: DocumentSnapshot): boolean {
-    return this.docs.get(doc.uri)?.current.version === doc.version;
+    const current = this.docs.get(doc.uri)?.current;
+    return current?.version === doc.version && !current.stale;
   }
 
   isEvaluated(doc: DocumentSnapshot): boolean {
-    const entry = this.docs.get(doc.uri);
-    return entry?.current.version === doc.version && entry.current.evaluated;
+    const current = this.docs.get(doc.uri)?.current;
+    return current?.version === doc.version && !current.stale && current.evaluated;
+  }
+
+  /** Which analysis of this version the current one is: 0 first, then one more each time a used file changed. */
+  revision(doc: DocumentSnapshot): number {
+    return this.state(doc).revision;
+  }
+
+  /**
+   * Files that changed (open documents edited, opened or closed; files changed on disk): every
+   * other document that read one of them, or listed its folder, is analysed again on its next
+   * request. Gives those documents' URIs.
+   */
+  filesChanged(locations: readonly string[]): string[] {
+    const changed = new Set(locations.map(locationKey));
+    const folders = new Set(locations.map((l) => folderOf(l)).filter((f): f is string => f !== undefined).map(locationKey));
+    const out: string[] = [];
+    for (const [uri, entry] of this.docs) {
+      if (changed.has(locationKey(uri))) continue;
+      const sources = entry.current.analysis.sources;
+      if (!sources) continue;
+      const reads = Object.keys(sources.files).some((l) => changed.has(locationKey(l)));
+      const lists = Object.keys(sources.folders).some((f) => folders.has(locationKey(f)));
+      if (reads || lists) {
+        entry.current.stale = true;
+        out.push(uri);
+      }
+    }
+    return out;
   }
 
   /** The problems to show now: all of them once evaluated, otherwise parse and model plus the carried-over ones. */
@@ -113,7 +157,7 @@ export class DocumentStore {
       // A newer version came while waiting: this one is not worth evaluating.
       if (entry.current !== s) return s.analysis;
       try {
-        const outcome = await this.evaluator.evaluate(s.text, abort.signal);
+        const outcome = await this.evaluator.evaluate(s.text, abort.signal, s.analysis.sources);
         this.attach(entry, s, outcome.result, outcome.problems);
       } catch (e) {
         const message = e instanceof Error ? e.message : String(e);

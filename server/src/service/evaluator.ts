@@ -6,6 +6,7 @@
 import type { Problem } from '../format/ast';
 import { analyze } from '../eval/analyze';
 import type { EvaluationResult } from '../eval/resultTypes';
+import { replaySources, type SourceSnapshot } from '../model/sources';
 
 /** What the full pipeline gives for a text: its result and every problem of every stage. */
 export interface EvaluationOutcome {
@@ -14,22 +15,26 @@ export interface EvaluationOutcome {
 }
 
 export interface Evaluator {
-  /** `signal` says the result is no longer wanted (a newer version came); an evaluator may then give up early. */
-  evaluate(text: string, signal?: AbortSignal): Promise<EvaluationOutcome>;
+  /**
+   * `signal` says the result is no longer wanted (a newer version came); an evaluator may then
+   * give up early. `sources` are the document's location and the used files' texts as the fast
+   * analysis read them, so that both see the same files.
+   */
+  evaluate(text: string, signal?: AbortSignal, sources?: SourceSnapshot): Promise<EvaluationOutcome>;
   dispose(): void;
 }
 
 /** The rejection of an evaluation given up because a newer version superseded it. */
 export const SUPERSEDED = 'superseded by a newer version';
 
-export function evaluateText(text: string): EvaluationOutcome {
-  const a = analyze(text);
+export function evaluateText(text: string, sources?: SourceSnapshot): EvaluationOutcome {
+  const a = analyze(text, sources ? replaySources(sources) : undefined);
   return { ...(a.result ? { result: a.result } : {}), problems: a.problems };
 }
 
 export function inProcessEvaluator(): Evaluator {
   return {
-    evaluate: (text) => new Promise((resolve) => resolve(evaluateText(text))),
+    evaluate: (text, _signal, sources) => new Promise((resolve) => resolve(evaluateText(text, sources))),
     dispose: () => undefined,
   };
 }

@@ -5,10 +5,11 @@
  * `eval/analyze.ts`.
  */
 import type { Problem, SetupDocument } from '../format/ast';
-import { sortProblems, type Analysis } from '../eval/analyze';
+import { sortProblems, type Analysis, type AnalyzeOptions } from '../eval/analyze';
 import { parseSetup } from '../format/parser';
 import { computeLineStarts } from '../format/positions';
 import { buildModel } from '../model/buildModel';
+import { recordSources } from '../model/sources';
 
 function internalError(e: unknown): Problem {
   const detail = e instanceof Error ? e.message : String(e);
@@ -21,17 +22,20 @@ function internalError(e: unknown): Problem {
   };
 }
 
-export function analyzeFast(text: string): Analysis {
+/** `options` as for `analyze`: the document's location and a reader for the files it uses. */
+export function analyzeFast(text: string, options?: AnalyzeOptions): Analysis {
   let doc: SetupDocument;
   try {
     doc = parseSetup(text);
   } catch (e) {
-    return { doc: { text, lineStarts: computeLineStarts(text), blocks: [], comments: [], problems: [] }, problems: [internalError(e)] };
+    return { doc: { text, lineStarts: computeLineStarts(text), blocks: [], uses: [], comments: [], problems: [] }, problems: [internalError(e)] };
   }
+  const recording = options ? recordSources(options) : undefined;
+  const withSources = (a: Analysis): Analysis => (recording ? { ...a, sources: recording.snapshot() } : a);
   try {
-    const model = buildModel(doc);
-    return { doc, model, problems: sortProblems([...doc.problems, ...model.problems]) };
+    const model = buildModel(doc, recording?.sources);
+    return withSources({ doc, model, problems: sortProblems([...doc.problems, ...model.problems]) });
   } catch (e) {
-    return { doc, problems: sortProblems([...doc.problems, internalError(e)]) };
+    return withSources({ doc, problems: sortProblems([...doc.problems, internalError(e)]) });
   }
 }

@@ -36,6 +36,7 @@ import { diagramFor, type DiagramAnswer, type DiagramView } from '../views/diagr
 import { DocumentStore, type DocumentSnapshot } from './documentStore';
 import { type Evaluator, inProcessEvaluator } from './evaluator';
 import { DEFAULT_SETTINGS, type EditorSettings } from './settings';
+import type { WorkspaceFiles } from './workspaceFiles';
 
 export type { DocumentSnapshot } from './documentStore';
 
@@ -57,8 +58,10 @@ export class LanguageService {
   constructor(
     private readonly log: Log = () => undefined,
     private readonly evaluator: Evaluator = inProcessEvaluator(),
+    /** Reads the files that `use` statements name (open documents first, then the disk, in the server). */
+    private readonly files?: WorkspaceFiles,
   ) {
-    this.store = new DocumentStore(evaluator, log);
+    this.store = new DocumentStore(evaluator, log, files);
   }
 
   private guard<T>(feature: string, doc: DocumentSnapshot, empty: T, run: (a: Analysis) => T): T {
@@ -96,6 +99,29 @@ export class LanguageService {
 
   forget(uri: string): void {
     this.store.forget(uri);
+  }
+
+  /**
+   * Files changed (an open document edited, opened or closed, or a file changed on disk): the
+   * open documents that use one of them are analysed again. Gives their URIs, so that their
+   * diagnostics can be sent again.
+   */
+  filesChanged(locations: readonly string[]): string[] {
+    try {
+      return this.store.filesChanged(locations);
+    } catch (e) {
+      this.log(`sublevel: tracking used files failed: ${describe(e)}`);
+      return [];
+    }
+  }
+
+  /** 0 for the first analysis of this version, then one more each time a file it uses changed (for diagnostic result ids). */
+  revision(doc: DocumentSnapshot): number {
+    try {
+      return this.store.revision(doc);
+    } catch {
+      return 0;
+    }
   }
 
   dispose(): void {

@@ -6,6 +6,7 @@
  * that cannot start makes the evaluator fall back to this thread.
  */
 import { Worker } from 'worker_threads';
+import type { SourceSnapshot } from '../model/sources';
 import { type EvaluationOutcome, type Evaluator, evaluateText, SUPERSEDED } from './evaluator';
 import type { EvaluationReply, EvaluationRequest } from './evaluatorThread';
 
@@ -18,6 +19,7 @@ const ABANDON_AFTER_MS = 400;
 interface Job {
   id: number;
   text: string;
+  sources?: SourceSnapshot;
   resolve: (o: EvaluationOutcome) => void;
   reject: (e: Error) => void;
   startedAt?: number;
@@ -38,10 +40,10 @@ export class WorkerEvaluator implements Evaluator {
     private readonly timeLimitMs = 30_000,
   ) {}
 
-  evaluate(text: string, signal?: AbortSignal): Promise<EvaluationOutcome> {
-    if (this.broken) return new Promise((resolve) => resolve(evaluateText(text)));
+  evaluate(text: string, signal?: AbortSignal, sources?: SourceSnapshot): Promise<EvaluationOutcome> {
+    if (this.broken) return new Promise((resolve) => resolve(evaluateText(text, sources)));
     return new Promise((resolve, reject) => {
-      const job: Job = { id: this.nextId++, text, resolve, reject };
+      const job: Job = { id: this.nextId++, text, ...(sources ? { sources } : {}), resolve, reject };
       signal?.addEventListener('abort', () => this.supersede(job), { once: true });
       this.queue.push(job);
       this.pump();
@@ -89,13 +91,13 @@ export class WorkerEvaluator implements Evaluator {
     if (this.current || this.queue.length === 0) return;
     this.worker ??= this.start();
     if (!this.worker) {
-      for (const job of this.queue.splice(0)) job.resolve(evaluateText(job.text));
+      for (const job of this.queue.splice(0)) job.resolve(evaluateText(job.text, job.sources));
       return;
     }
     const job = this.queue.shift()!;
     job.startedAt = Date.now();
     this.current = job;
-    const request: EvaluationRequest = { id: job.id, text: job.text };
+    const request: EvaluationRequest = { id: job.id, text: job.text, ...(job.sources ? { sources: job.sources } : {}) };
     this.worker.postMessage(request);
     this.timer = setTimeout(() => this.fail(this.worker, `an evaluation took longer than ${this.timeLimitMs / 1000} s and was stopped`), this.timeLimitMs);
   }

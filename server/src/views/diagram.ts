@@ -65,7 +65,8 @@ function contains(range: { start: { line: number }; end: { line: number } }, lin
 
 function levelAt(model: SetupModel, line: number | undefined): LevelModel | undefined {
   const all = model.species.flatMap((s) => s.levels);
-  return all.find((l) => contains(l.node.range, line)) ?? model.beams.find((b) => contains(b.node.range, line))?.level ?? model.beams[0]?.level ?? all[0];
+  // A level from a used file has its range in that file, so only this file's levels can be under the cursor.
+  return all.find((l) => !l.species.origin && contains(l.node.range, line)) ?? model.beams.find((b) => contains(b.node.range, line))?.level ?? model.beams[0]?.level ?? all[0];
 }
 
 function beamAt(model: SetupModel, line: number | undefined): BeamModel | undefined {

@@ -21,7 +21,10 @@ function title(code: string, s: string): string {
     case 'syntax-unknown-statement':
     case 'syntax-unknown-key':
     case 'unit-unknown':
+    case 'use-file-missing':
       return `Change to '${s}'`;
+    case 'syntax-use-path':
+      return `Write ${s}`;
     case 'unit-missing':
       return `Add a unit: ${s}`;
     case 'unit-wrong-dimension':

@@ -6,7 +6,9 @@ import { ATOMIC_MASS_UNIT } from '../../physics/constants';
 import { md, mdTitle } from '../shared/markdown';
 
 export function speciesSection(s: SpeciesModel): string {
-  const lines = [`${mdTitle(`species ${md(s.name)}`)} — ${s.builtin ? `built-in data (${md(s.builtin.id)})` : 'defined in this file'}`];
+  const data = s.builtin ? `built-in data (${md(s.builtin.id)})` : undefined;
+  const where = s.origin ? `defined in ${md(s.origin.path)}${data ? `, ${data}` : ''}` : (data ?? 'defined in this file');
+  const lines = [`${mdTitle(`species ${md(s.name)}`)} — ${where}`];
   if (s.massKg) lines.push(`mass = ${trimNumber(s.massKg.value / ATOMIC_MASS_UNIT, 10)} u (${md(s.massKg.source)})`);
   else lines.push('mass: not given');
   lines.push(`I = ${halfText(s.twoI.value)} (${md(s.twoI.source)})`);

@@ -3,7 +3,7 @@
  * a setting key or value part, a line's level reference, or a comment. Blocks are found by
  * binary search on their lines, so a lookup in a long file stays cheap.
  */
-import type { BlockNode, CommentNode, LevelNode, NameRef, Position, SettingNode, SetupDocument, ValuePart } from '../../format/ast';
+import type { BlockNode, CommentNode, LevelNode, NameRef, Position, SettingNode, SetupDocument, UseNode, ValuePart } from '../../format/ast';
 import { rangeContains } from '../../format/positions';
 
 export type Target =
@@ -93,4 +93,9 @@ export function locate(doc: SetupDocument, pos: Position): Target | undefined {
     if (t) return t;
   }
   return comment ? { kind: 'comment', comment } : undefined;
+}
+
+/** The `use` statement on `pos`, if any (they are few: a plain scan). */
+export function useAt(doc: SetupDocument, pos: Position): UseNode | undefined {
+  return doc.uses.find((u) => rangeContains(u.range, pos));
 }

@@ -40,16 +40,19 @@ export type Declared =
   | { kind: 'line'; item: LineModel }
   | { kind: 'resonance'; item: ResonanceModel };
 
-/** The model object declared at `range` with this kind of name. */
-export function declaredAt(model: SetupModel, kind: NameUse['kind'], range: Range): Declared | undefined {
+/** The model object declared at `range` with this kind of name; `uri` when it is declared in another file (through `use`). */
+export function declaredAt(model: SetupModel, kind: NameUse['kind'], range: Range, uri?: string): Declared | undefined {
   const at = <T extends { nameRange: Range }>(items: T[]): T | undefined => items.find((x) => sameRange(x.nameRange, range));
+  // Only species and their levels come from other files; a range alone could match one in either file.
+  const fromHere = (s: SpeciesModel): boolean => s.origin?.uri === uri;
+  if (uri !== undefined && kind !== 'species' && kind !== 'level') return undefined;
   switch (kind) {
     case 'species': {
-      const item = at(model.species);
+      const item = at(model.species.filter(fromHere));
       return item && { kind, item };
     }
     case 'level': {
-      const item = at(model.species.flatMap((s) => s.levels));
+      const item = at(model.species.filter(fromHere).flatMap((s) => s.levels));
       return item && { kind, item };
     }
     case 'field': {

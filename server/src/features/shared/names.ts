@@ -37,8 +37,11 @@ export function sameRange(a: Range, b: Range): boolean {
   );
 }
 
-/** The declaration a use stands for: itself when it is one, its target when it resolved, else undefined. */
-export function declarationOf(use: NameUse): { kind: NameUse['kind']; name: string; range: Range } | undefined {
+/**
+ * The declaration a use stands for: itself when it is one, its target when it resolved, else
+ * undefined. `uri` is set when the declaration is in another file (through `use`).
+ */
+export function declarationOf(use: NameUse): { kind: NameUse['kind']; name: string; range: Range; uri?: string } | undefined {
   if (use.isDeclaration) return { kind: use.kind, name: use.name, range: use.range };
   return use.target;
 }
@@ -49,6 +52,6 @@ export function usesOfSameThing(model: SetupModel, use: NameUse): NameUse[] {
   if (!decl) return [];
   return model.names.filter((u) => {
     const d = declarationOf(u);
-    return d !== undefined && d.kind === decl.kind && sameRange(d.range, decl.range);
+    return d !== undefined && d.kind === decl.kind && d.uri === decl.uri && sameRange(d.range, decl.range);
   });
 }
