@@ -16,7 +16,7 @@ export function runProfile(args: ParsedArgs, io: CliIO): number {
   const analysis = analyze(readSetupFile(file));
   if (!analysis.model) throw new UsageError(`${file} could not be read`);
   const beam = selectBeam(analysis.model, stringOption(args, 'beam'));
-  const v = patternView(beam.name, evaluateBeam(beam, gJLookup(analysis)));
+  const v = patternView(beam.name, evaluateBeam(beam, gJLookup(analysis)), false);
   if (!v) throw new UsageError(`beam '${beam.name}' cannot be computed yet (run: sublevel check ${file})`);
   const csv = patternCsv(v);
   const out = stringOption(args, 'out');

@@ -2,7 +2,8 @@
  * Completion: block words, `level` and setting keys at the start of a line; built-in species
  * after `species`; term symbols the configuration before the cursor allows; units of the
  * dimension a setting expects after a number; level, species and magnet names where a
- * reference goes; the fixed words of `source`, `slits` and `settings`.
+ * reference goes; the fixed words of `source`, `slits` and `settings`; `use` and the setup
+ * files beside the document in its path.
  */
 import { type CompletionItem, CompletionItemKind, type Position } from 'vscode-languageserver-types';
 import type { Analysis } from '../eval/analyze';
@@ -14,6 +15,7 @@ import type { LevelModel, SetupModel } from '../model/types';
 import { parseLevelDesignation } from '../physics/configuration';
 import { speciesNames } from '../physics/species';
 import { item, unitItems, wordItems } from './completion/items';
+import { type FolderLister, usePathCompletions } from './completion/usePaths';
 import { lineContext, type LineContext } from './completion/lineContext';
 import { builtinDesignationItems, termItems } from './completion/termItems';
 import { speciesOfBlock } from './shared/modelLookup';
@@ -167,8 +169,14 @@ function headerCompletions(c: LineContext, model: SetupModel | undefined): Compl
   }
 }
 
-export function completion(analysis: Analysis, position: Position): CompletionItem[] {
+/**
+ * `folder` lists the setup files beside the document, for the path of a `use` statement; the
+ * language service passes it (features do no I/O).
+ */
+export function completion(analysis: Analysis, position: Position, folder?: FolderLister): CompletionItem[] {
   const c = lineContext(analysis.doc, position);
+  const path = usePathCompletions(c, folder);
+  if (path) return path;
   if (c.inComment) return [];
   const model = analysis.model;
   if (c.before.length === 0) return statementStart(c);

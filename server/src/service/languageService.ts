@@ -156,7 +156,9 @@ export class LanguageService {
   }
 
   completion(doc: DocumentSnapshot, pos: Position): CompletionItem[] {
-    return this.guard('completion', doc, [], (a) => completion(a, pos));
+    const files = this.files;
+    const folder = files ? { uri: doc.uri, listFolder: (l: string) => files.listFolder(l) } : undefined;
+    return this.guard('completion', doc, [], (a) => completion(a, pos, folder));
   }
 
   documentSymbols(doc: DocumentSnapshot): DocumentSymbol[] {

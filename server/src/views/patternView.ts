@@ -5,11 +5,12 @@ import type { PatternViewData } from '../render';
 /** Bins whose total is below this fraction of the maximum are trimmed from the ends of the view. */
 const VIEW_FLOOR = 0.01;
 
-export function patternView(beamName: string, e: BeamEvaluation): PatternViewData | undefined {
+/** `trim` (for drawing) cuts the far tails; the CSV export keeps the whole computed grid. */
+export function patternView(beamName: string, e: BeamEvaluation, trim = true): PatternViewData | undefined {
   const p = e.pattern;
   if (!p || !e.result.computed) return undefined;
   const unresolved = p.pairs.filter((x) => !x.resolved).length;
-  const [from, to] = visibleRange(p.total, p.positionsM);
+  const [from, to] = trim ? visibleRange(p.total, p.positionsM) : [0, p.total.length];
   const cut = (a: Float64Array): Float64Array => a.subarray(from, to);
   return {
     title: `beam ${beamName}: ${e.result.species ?? ''} ${e.result.level ?? ''} on the detector`,
