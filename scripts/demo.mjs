@@ -12,7 +12,7 @@ function run(title, args, expectedStatus) {
   }
 }
 
-run('Check the demo setups (clean files exit 0)', ['check', 'examples/lithium-beam.sublevel', 'examples/rubidium-bias.sublevel', 'examples/handmade-species.sublevel'], 0);
+run('Check the demo setups (clean files exit 0)', ['check', 'examples/lithium-beam.sublevel', 'examples/rubidium-bias.sublevel', 'examples/handmade-species.sublevel', 'examples/shared-species-demo.sublevel'], 0);
 run('Evaluate the lithium beam demo', ['eval', 'examples/lithium-beam.sublevel'], 0);
 run('Evaluate the rubidium bias-field demo', ['eval', 'examples/rubidium-bias.sublevel'], 0);
 run('A file with planted mistakes (exit 1 is expected)', ['check', 'examples/mistakes.sublevel'], 1);

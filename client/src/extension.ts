@@ -18,9 +18,12 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
     run: { module: serverModule, transport: TransportKind.ipc, options: { execArgv: heap } },
     debug: { module: serverModule, transport: TransportKind.ipc, options: { execArgv: [...heap, '--nolazy', '--inspect=6021'] } },
   };
+  // Setup files changed on disk re-check the open files that `use` them.
+  const watcher = vscode.workspace.createFileSystemWatcher('**/*.sublevel');
+  context.subscriptions.push(watcher);
   const clientOptions: LanguageClientOptions = {
     documentSelector: [{ language: 'sublevel' }],
-    synchronize: { configurationSection: 'sublevel' },
+    synchronize: { configurationSection: 'sublevel', fileEvents: watcher },
   };
   const c = new LanguageClient('sublevel', 'Sublevel', serverOptions, clientOptions);
   client = c;

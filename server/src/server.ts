@@ -3,6 +3,9 @@
  * Nothing here parses or computes. The service and the physics behind it are loaded after the
  * `initialize` answer has gone out, so the editor sees a started server at once. The same
  * bundle, started as a worker thread, runs evaluations for the service (workerEvaluator.ts).
+ * Files named by `use` are read from the open documents first, then from the disk; a change to
+ * one (an edit, opening or closing it, or the client's file watcher) re-checks the documents
+ * that use it.
  */
 import {
   type CancellationToken,
@@ -52,13 +55,14 @@ function startLanguageServer(): void {
 
   function loadService(): Promise<LanguageService> {
     serviceLoading ??= (async () => {
-      const [svc, settings, worker] = await Promise.all([
+      const [svc, settings, worker, files] = await Promise.all([
         import('./service/languageService'),
         import('./service/settings'),
         import('./service/workerEvaluator'),
+        import('./service/workspaceFiles'),
       ]);
       readSettings = settings.readSettings;
-      service = new svc.LanguageService(log, new worker.WorkerEvaluator(__filename, log));
+      service = new svc.LanguageService(log, new worker.WorkerEvaluator(__filename, log), files.editorFiles(() => documents.all()));
       return service;
     })();
     return serviceLoading;
@@ -127,7 +131,7 @@ function startLanguageServer(): void {
       capabilities: {
         textDocumentSync: TextDocumentSyncKind.Incremental,
         hoverProvider: true,
-        completionProvider: { triggerCharacters: [' ', ':', '=', '>'] },
+        completionProvider: { triggerCharacters: [' ', ':', '=', '>', '"', '/'] },
         definitionProvider: true,
         referencesProvider: true,
         renameProvider: caps.textDocument?.rename?.prepareSupport ? { prepareProvider: true } : true,
@@ -209,11 +213,32 @@ function startLanguageServer(): void {
     );
   }
 
+  // ---- files used by other documents ----------------------------------------------------------
+
+  let refreshTimer: NodeJS.Timeout | undefined;
+
+  /** Re-checks the open documents that use one of these files (their diagnostics go out again). */
+  function filesChanged(locations: string[]): void {
+    if (!service || locations.length === 0) return; // nothing analysed yet, so nothing depends on them
+    const dependents = service.filesChanged(locations);
+    if (dependents.length === 0) return;
+    if (!client.pullDiagnostics) {
+      for (const uri of dependents) schedulePush(uri, PUSH_DEBOUNCE_MS);
+    } else if (client.diagnosticRefresh) {
+      clearTimeout(refreshTimer);
+      refreshTimer = setTimeout(() => void connection.languages.diagnostics.refresh().catch(() => undefined), PUSH_DEBOUNCE_MS);
+    }
+  }
+
+  connection.onDidChangeWatchedFiles((p) => filesChanged(p.changes.map((c) => c.uri)));
+
   documents.onDidOpen((e) => {
     if (!client.pullDiagnostics) schedulePush(e.document.uri, 0);
   });
   documents.onDidChangeContent((e) => {
     if (!client.pullDiagnostics) schedulePush(e.document.uri, PUSH_DEBOUNCE_MS);
+    // Also on open: the open text may differ from the disk's.
+    filesChanged([e.document.uri]);
   });
   documents.onDidClose((e) => {
     const uri = e.document.uri;
@@ -225,6 +250,8 @@ function startLanguageServer(): void {
     settingsByUri.delete(uri);
     service?.forget(uri);
     if (!client.pullDiagnostics) void connection.sendDiagnostics({ uri, diagnostics: [] });
+    // Documents that use it read it from the disk now.
+    filesChanged([uri]);
   });
 
   connection.languages.diagnostics.on(async (params, token): Promise<DocumentDiagnosticReport> => {
@@ -232,8 +259,9 @@ function startLanguageServer(): void {
     const empty: DocumentDiagnosticReport = { kind: 'full', items: [] };
     return run('diagnostics', uri, token, empty, (svc, doc): DocumentDiagnosticReport => {
       const { items, complete } = svc.diagnostics(doc);
-      // The id says which version and whether the evaluation's problems are in.
-      const resultId = `${doc.version}${complete ? '' : '-partial'}`;
+      // The id says which version (and which analysis of it, when a used file changed) and whether the evaluation's problems are in.
+      const revision = svc.revision(doc);
+      const resultId = `${doc.version}${revision > 0 ? `.${revision}` : ''}${complete ? '' : '-partial'}`;
       if (!complete) scheduleEvaluation(doc);
       return params.previousResultId === resultId ? { kind: 'unchanged', resultId } : { kind: 'full', resultId, items };
     });

@@ -14,7 +14,7 @@ interface Case {
 }
 
 const CASES: Case[] = [
-  { name: 'block words at the top of a file', text: '|', exactly: [...BLOCK_WORDS] },
+  { name: 'block words and `use` at the top of a file', text: '|', exactly: [...BLOCK_WORDS, 'use'] },
   { name: 'magnet keys inside a magnet', text: 'magnet m\n  |', has: ['field', 'gradient', 'length', 'species', 'beam'], hasNot: ['A', 'mass'] },
   { name: 'species keys and `level` in a species', text: 'species Na23\n  |', has: ['mass', 'I', 'g_I', 'mu_I', 'level'], hasNot: ['A'] },
   { name: 'level keys once a level is above', text: 'species Na23\n  level g: 3s 2S1/2\n  |', has: ['A', 'B', 'C', 'g_J', 'energy', 'level'] },

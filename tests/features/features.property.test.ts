@@ -40,7 +40,7 @@ const PIECES = [
   'gradient', 'length', 'source', 'slits', 'drift', 'detector', 'oven', 'jet', 'speed', 'spread', 'apart', 'g_s', 'reduced_mass',
   '3s', '3p', '2p2', '4f7', '[Ne]', '2S1/2', '2P°3/2', '²P₃/₂', '3P2', '2P5/2', '2P', '6H°15/2', '0.45', '-3.06', '1/2', '3/2',
   '1e-3', '0.35(2)', 'T', 'G', 'mT', 'T/m', 'G/cm', 'cm', 'um', 'MHz', 'GHz', 'cm^-1', 'K', 'degC', 'm/s', '%', 'u', 'muN', 'Mhz',
-  '720K', '8cm', 'exact', 'on', '\t', '  ', '\n', '\n  ', '\r\n', '→', '°', 'é', '\u00a0', '|', '*', '[x](y)',
+  '720K', '8cm', 'exact', 'on', '\t', '  ', '\n', '\n  ', '\r\n', '→', '°', 'é', '\u00a0', '|', '*', '[x](y)', 'use', '"shared/a b.sublevel"', '"', '"x.sublevel',
 ];
 
 const pieced = fc.array(fc.constantFrom(...PIECES), { maxLength: 60 }).map((parts) => parts.join(' '));

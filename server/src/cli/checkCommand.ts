@@ -1,19 +1,34 @@
-/** `sublevel check <files or folders…>`: diagnostics for CI. Exit 1 when any error is found. */
+/**
+ * `sublevel check <files or folders…>`: diagnostics for CI. Exit 1 when any error is found.
+ * Each file is checked with the files its `use` statements name; a used file's errors are
+ * reported once, in that file: when it is checked in the same run, the warning at the `use`
+ * line that summarises them is left out.
+ */
+import * as path from 'path';
+import type { Problem } from '../format/ast';
 import { analyze } from '../eval/analyze';
 import { toDiagnosticResult } from '../eval/evaluate';
+import { diskSources } from '../service/workspaceFiles';
 import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
 import { collectSetupFiles, readSetupFile } from './files';
 import type { CliIO } from './io';
+
+/** A `use-has-errors` warning about a file that this run reports itself. */
+function reportedElsewhere(p: Problem, checked: ReadonlySet<string>): boolean {
+  const location = p.data?.['location'];
+  return p.code === 'use-has-errors' && typeof location === 'string' && checked.has(path.resolve(location));
+}
 
 export function runCheck(args: ParsedArgs, io: CliIO): number {
   rejectUnknownOptions(args, ['format']);
   const format = stringOption(args, 'format', ['text', 'json']) ?? 'text';
   if (args.positionals.length === 0) throw new UsageError('check needs at least one file or folder');
   const files = collectSetupFiles(args.positionals);
+  const checked = new Set(files.map((f) => path.resolve(f)));
   let errors = 0;
   const report: { file: string; diagnostics: ReturnType<typeof toDiagnosticResult>[] }[] = [];
   for (const file of files) {
-    const { problems } = analyze(readSetupFile(file));
+    const problems = analyze(readSetupFile(file), diskSources(file)).problems.filter((p) => !reportedElsewhere(p, checked));
     errors += problems.filter((p) => p.severity === 'error').length;
     const diagnostics = problems.map(toDiagnosticResult);
     report.push({ file, diagnostics });

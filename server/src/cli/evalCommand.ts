@@ -2,6 +2,7 @@
 import { analyze } from '../eval/analyze';
 import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
 import { readSetupFile } from './files';
+import { diskSources } from '../service/workspaceFiles';
 import type { CliIO } from './io';
 import { textReport } from './textReport';
 
@@ -10,7 +11,7 @@ export function runEval(args: ParsedArgs, io: CliIO): number {
   const format = stringOption(args, 'format', ['text', 'json']) ?? 'text';
   if (args.positionals.length !== 1) throw new UsageError('eval needs exactly one setup file');
   const file = args.positionals[0]!;
-  const analysis = analyze(readSetupFile(file));
+  const analysis = analyze(readSetupFile(file), diskSources(file));
   const errors = analysis.problems.filter((p) => p.severity === 'error').length;
   if (!analysis.result) {
     for (const p of analysis.problems) io.err(`${file}:${p.range.start.line + 1}:${p.range.start.character + 1} ${p.severity} ${p.code} ${p.message}`);

@@ -6,6 +6,7 @@ import { patternCsv } from '../render';
 import { patternView } from '../views/patternView';
 import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
 import { readSetupFile } from './files';
+import { diskSources } from '../service/workspaceFiles';
 import type { CliIO } from './io';
 import { gJLookup, selectBeam } from './selectors';
 
@@ -13,7 +14,7 @@ export function runProfile(args: ParsedArgs, io: CliIO): number {
   rejectUnknownOptions(args, ['beam', 'out']);
   if (args.positionals.length !== 1) throw new UsageError('profile needs exactly one setup file');
   const file = args.positionals[0]!;
-  const analysis = analyze(readSetupFile(file));
+  const analysis = analyze(readSetupFile(file), diskSources(file));
   if (!analysis.model) throw new UsageError(`${file} could not be read`);
   const beam = selectBeam(analysis.model, stringOption(args, 'beam'));
   const v = patternView(beam.name, evaluateBeam(beam, gJLookup(analysis)), false);

@@ -7,6 +7,7 @@ import { suggestNames } from '../format/didYouMean';
 import { diagramFor, type DiagramRequest, type DiagramView } from '../views/diagram';
 import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
 import { readSetupFile } from './files';
+import { diskSources } from '../service/workspaceFiles';
 import type { CliIO } from './io';
 import { writeOutputFile } from './output';
 import { selectBeam, selectField, selectLevel } from './selectors';
@@ -19,7 +20,7 @@ export function runRender(args: ParsedArgs, io: CliIO): number {
   const file = args.positionals[0]!;
   const view = (stringOption(args, 'view', RENDER_VIEWS) ?? 'levels') as DiagramView;
   const format = stringOption(args, 'format', ['svg', 'csv']) ?? 'svg';
-  const analysis = analyze(readSetupFile(file));
+  const analysis = analyze(readSetupFile(file), diskSources(file));
   const model = analysis.model;
   if (!model) throw new UsageError(`${file} could not be read`);
   const req: DiagramRequest = { view, theme: 'export' };

@@ -11,6 +11,7 @@ import { sweepLevel, type SweepResult } from '../physics/engine';
 import type { LevelModel, SetupModel } from '../model/types';
 import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
 import { readSetupFile } from './files';
+import { diskSources } from '../service/workspaceFiles';
 import type { CliIO } from './io';
 
 /** Largest number of points the CLI accepts in one sweep (the engine has its own, larger caps). */
@@ -26,7 +27,7 @@ export function runSweep(args: ParsedArgs, io: CliIO): number {
   const points = pointsOption(args);
   if (fromT === toT) throw new UsageError('--from and --to are the same field; give a range');
 
-  const analysis = analyze(readSetupFile(file));
+  const analysis = analyze(readSetupFile(file), diskSources(file));
   if (!analysis.model || !analysis.result) throw new UsageError(`${file} could not be read`);
   const level = findLevel(analysis.model, stringOption(args, 'level'));
   const gJ = analysis.result.levels.find((l) => l.species === level.species.name && l.level === level.name)?.g_J.used;

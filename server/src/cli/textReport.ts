@@ -18,7 +18,8 @@ export function textReport(file: string, r: EvaluationResult): string[] {
   out.push(`constants: ${r.constants}; g_s = ${r.settings.g_s === 2 ? '2 (textbook)' : '|g_e| (CODATA)'}; energies are E/h`);
   for (const s of r.species) {
     out.push('');
-    out.push(`species ${s.name}${s.builtin ? ' (built-in data)' : ' (defined in this file)'}`);
+    const where = s.defined_in !== undefined ? `defined in ${s.defined_in}${s.builtin ? ', built-in data' : ''}` : s.builtin ? 'built-in data' : 'defined in this file';
+    out.push(`species ${s.name} (${where})`);
     const mass = s.mass_kg ? `${trimNumber(s.mass_kg.value / ATOMIC_MASS_UNIT, 9)} u` : 'not given';
     out.push(`  mass ${mass}   I = ${fraction(s.I)}   g_I = ${trimNumber(s.g_I.value, 8)}  [${s.g_I.source}]`);
     for (const l of r.levels.filter((x) => x.species === s.name)) out.push(...levelReport(l));

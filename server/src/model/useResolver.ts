@@ -28,7 +28,7 @@ export interface UseContext {
 export type ModelBuilder = (doc: SetupDocument, sources: SetupSources, context: UseContext) => SetupModel;
 
 export function rootUseContext(uri: string | undefined): UseContext {
-  return { stack: uri !== undefined ? [locationKey(uri)] : [], names: uri !== undefined ? [baseName(uri)] : ['this file'], cache: new Map() };
+  return uri !== undefined ? { stack: [locationKey(uri)], names: [baseName(uri)], cache: new Map() } : { stack: [], names: [], cache: new Map() };
 }
 
 const SETUP_EXTENSION = '.sublevel';
@@ -114,15 +114,18 @@ function resolveOne(node: UseNode, sources: SetupSources, context: UseContext, b
   }
   out.loaded = true;
   reportErrorsOf(used, node, written, location, context, problems);
-  const direct = written;
   out.species = used.model.species.map((s) => {
     const declaredIn = s.origin?.uri ?? location;
-    return adoptCopy(s, { uri: declaredIn, path: s.origin ? relativeName(sources.uri, declaredIn) : direct, useRange: p.range });
+    return adoptCopy(s, { uri: declaredIn, path: s.origin ? relativeName(sources.uri, declaredIn) : written, useRange: p.range });
   });
   return out;
 }
 
-/** One warning for a used file with errors (and an error when it leads back round to this file). */
+/**
+ * One warning for a used file with errors (and an error when it leads back round to this
+ * file). A used file that is clean itself but uses a file with errors says so too (from its own
+ * warning), so that a problem deep down a chain is not silent at the top.
+ */
 function reportErrorsOf(
   used: { doc: SetupDocument; model: SetupModel },
   node: UseNode,
@@ -141,10 +144,18 @@ function reportErrorsOf(
     });
     errors = errors.filter((x) => x !== circle);
   }
-  if (errors.length === 0) return;
-  errors.sort((a, b) => a.range.start.line - b.range.start.line || a.range.start.character - b.range.start.character);
-  const first = errors[0]!;
-  problems.add('use-has-errors', `${written} has ${plural(errors.length, 'error')}; first: line ${first.range.start.line + 1}: ${first.message}`, node.range, {
+  const byPlace = (a: Problem, b: Problem): number => a.range.start.line - b.range.start.line || a.range.start.character - b.range.start.character;
+  const nested = used.model.problems.filter((x) => x.code === 'use-has-errors').sort(byPlace);
+  let message: string;
+  let first: Problem;
+  if (errors.length > 0) {
+    first = errors.sort(byPlace)[0]!;
+    message = `${written} has ${plural(errors.length, 'error')}; first: line ${first.range.start.line + 1}: ${first.message}`;
+  } else if (nested.length > 0) {
+    first = nested[0]!;
+    message = `${written} uses a file with errors: line ${first.range.start.line + 1}: ${first.message}`;
+  } else return;
+  problems.add('use-has-errors', message, node.range, {
     related: [{ message: first.message, range: first.range, uri: location }],
     data: { location },
   });

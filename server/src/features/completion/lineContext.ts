@@ -19,7 +19,7 @@ export interface LineContext {
   typing?: Token;
   /** What a completion replaces: the word being typed, or an empty range at the cursor. */
   replace: Range;
-  /** The block a statement on this line belongs to (the last header above the line). */
+  /** The block a statement on this line belongs to (the last header above the line, unless a `use` line came after it). */
   enclosing?: BlockNode;
   /** True when the cursor is inside a comment. */
   inComment: boolean;
@@ -34,7 +34,9 @@ export function lineContext(doc: SetupDocument, position: Position): LineContext
   const typing = last && last.kind === 'atom' && last.end === prefix.length ? last : undefined;
   const before = typing ? tokens.slice(0, -1) : tokens;
   const start = typing ? typing.start : prefix.length;
-  const enclosing = position.line > 0 ? blockBefore(doc, position.line - 1) : undefined;
+  const above = position.line > 0 ? blockBefore(doc, position.line - 1) : undefined;
+  // A `use` line between the header and the cursor has ended that block.
+  const enclosing = above && !doc.uses.some((u) => u.range.start.line > above.headerRange.start.line && u.range.start.line < position.line) ? above : undefined;
   return {
     doc,
     position,

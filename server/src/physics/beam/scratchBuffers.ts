@@ -6,6 +6,7 @@
  */
 const float64 = new Map<string, Float64Array>();
 const int32 = new Map<string, Int32Array>();
+const uint8 = new Map<string, Uint8Array>();
 
 export function scratchFloat64(name: string, length: number): Float64Array {
   const hit = float64.get(name);
@@ -20,5 +21,13 @@ export function scratchInt32(name: string, length: number): Int32Array {
   if (hit && hit.length >= length) return hit.length === length ? hit : hit.subarray(0, length);
   const fresh = new Int32Array(length);
   int32.set(name, fresh);
+  return fresh;
+}
+
+export function scratchUint8(name: string, length: number): Uint8Array {
+  const hit = uint8.get(name);
+  if (hit && hit.length >= length) return hit.length === length ? hit : hit.subarray(0, length);
+  const fresh = new Uint8Array(length);
+  uint8.set(name, fresh);
   return fresh;
 }

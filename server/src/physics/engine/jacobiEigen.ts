@@ -1,9 +1,9 @@
 /**
  * Jacobi diagonalisation of a real symmetric matrix (row-major Float64Array,
- * order n; only the upper triangle is read and kept up to date). Chosen for
- * the small m blocks of this engine: no allocation, accurate to a few ulps of
- * the matrix norm, and on the block orders met here faster than both the own
- * Householder + QR route and ml-matrix (bench/eigen.bench.ts, docs/engine.md).
+ * order n; only the upper triangle is read). Chosen for the small m blocks of
+ * this engine: no allocation, accurate to a few ulps of the matrix norm, and
+ * on the block orders met here faster than both the own Householder + QR route
+ * and ml-matrix (bench/eigen.bench.ts, docs/engine.md).
  *
  * Pivots are visited in a round-robin ("tournament") order: each round is a
  * set of disjoint planes, so all angles of a round are computed from the same
@@ -15,6 +15,14 @@
  * negligible against the gap of its two diagonal entries, which on the
  * engine's blocks saves the third sweep a norm-only rule needs. Together these
  * took the Cs 6P3/2 sweep's eigen-work from about 7.1 to 6.0 ms.
+ *
+ * The upper triangle is mirrored into the lower one first and both are kept
+ * up to date: a rotation then touches rows p, q and columns p, q in one plain
+ * loop over r, instead of three loops over the three places where (r, p) and
+ * (r, q) sit in an upper-triangle-only layout. The arithmetic is the same
+ * operation for operation (results are bit-identical); on 2 × 2 … 4 × 4 blocks
+ * the loop overhead was the cost, and this cut the sweep's eigen-work by
+ * about a fifth (docs/engine.md).
  */
 
 /** Round-robin schedules by order: triples (p, q, round) with p < q, flattened; built on first use. */
@@ -68,36 +76,33 @@ function rotationTangent(app: number, aqq: number, apq: number): number {
   return Math.abs(theta) > 1e150 ? 0.5 / theta : (theta >= 0 ? 1 : -1) / (Math.abs(theta) + Math.sqrt(theta * theta + 1));
 }
 
-/** Apply the rotation (c, s) in plane (p, q), p < q, to the upper triangle of a and to the vectors. */
+/**
+ * Apply the rotation (c, s) in plane (p, q), p < q, to the full symmetric a
+ * (both triangles) and to the vectors. Rows and columns r ≠ p, q mix pairwise;
+ * the (p, q) plane itself gets its closed form (a_pq becomes exactly zero).
+ */
 function rotate(a: Float64Array, n: number, vectors: Float64Array, p: number, q: number, t: number, c: number, s: number): void {
-  const apq = a[p * n + q];
-  a[p * n + p] -= t * apq;
-  a[q * n + q] += t * apq;
-  a[p * n + q] = 0;
-  // Element (r, p) and (r, q) live in the upper triangle at different places for r < p, p < r < q, r > q.
-  for (let r = 0; r < p; r++) {
-    const arp = a[r * n + p];
-    const arq = a[r * n + q];
-    a[r * n + p] = c * arp - s * arq;
-    a[r * n + q] = s * arp + c * arq;
-  }
-  for (let r = p + 1; r < q; r++) {
-    const arp = a[p * n + r];
-    const arq = a[r * n + q];
-    a[p * n + r] = c * arp - s * arq;
-    a[r * n + q] = s * arp + c * arq;
-  }
-  for (let r = q + 1; r < n; r++) {
-    const arp = a[p * n + r];
-    const arq = a[q * n + r];
-    a[p * n + r] = c * arp - s * arq;
-    a[q * n + r] = s * arp + c * arq;
-  }
-  for (let r = 0; r < n; r++) {
-    const vrp = vectors[r * n + p];
-    const vrq = vectors[r * n + q];
-    vectors[r * n + p] = c * vrp - s * vrq;
-    vectors[r * n + q] = s * vrp + c * vrq;
+  const pn = p * n;
+  const qn = q * n;
+  const apq = a[pn + q];
+  a[pn + p] -= t * apq;
+  a[qn + q] += t * apq;
+  a[pn + q] = 0;
+  a[qn + p] = 0;
+  for (let r = 0, rn = 0; r < n; r++, rn += n) {
+    const vrp = vectors[rn + p];
+    const vrq = vectors[rn + q];
+    vectors[rn + p] = c * vrp - s * vrq;
+    vectors[rn + q] = s * vrp + c * vrq;
+    if (r === p || r === q) continue;
+    const arp = a[rn + p];
+    const arq = a[rn + q];
+    const np = c * arp - s * arq;
+    const nq = s * arp + c * arq;
+    a[rn + p] = np;
+    a[rn + q] = nq;
+    a[pn + r] = np;
+    a[qn + r] = nq;
   }
 }
 
@@ -107,10 +112,11 @@ const roundC = new Float64Array(128);
 const roundS = new Float64Array(128);
 
 /**
- * Diagonalise `a` in place. On return the diagonal of `a` holds the
- * eigenvalues (unsorted) and column k of `vectors` the k-th eigenvector; the
- * strict lower triangle of `a` is left stale. Returns false if the matrix
- * holds non-finite numbers or did not converge.
+ * Diagonalise `a` in place (only its upper triangle is read). On return the
+ * diagonal of `a` holds the eigenvalues (unsorted), the rest the small
+ * remaining off-diagonal elements (both triangles), and column k of `vectors`
+ * the k-th eigenvector. Returns false if the matrix holds non-finite numbers
+ * or did not converge.
  */
 export function jacobiInPlace(a: Float64Array, n: number, vectors: Float64Array, maxSweeps = 60): boolean {
   // Plain loops: TypedArray.fill/set carry a call overhead that matters for 2 × 2 … 4 × 4 blocks.
@@ -118,7 +124,13 @@ export function jacobiInPlace(a: Float64Array, n: number, vectors: Float64Array,
   for (let i = 0; i < n; i++) vectors[i * n + i] = 1;
   if (n === 1) return Number.isFinite(a[0]);
   let big = 0;
-  for (let i = 0; i < n; i++) for (let j = i; j < n; j++) big = Math.max(big, Math.abs(a[i * n + j]));
+  for (let i = 0; i < n; i++) {
+    for (let j = i; j < n; j++) {
+      const x = a[i * n + j];
+      a[j * n + i] = x; // mirror: rotate() keeps both triangles
+      big = Math.max(big, Math.abs(x));
+    }
+  }
   if (!(big < Number.POSITIVE_INFINITY)) return false; // NaN or infinite entries
   if (big === 0) return true;
   // Absolute floor for off-diagonal elements: 1e-17 of the largest entry (no squares, so

@@ -5,7 +5,7 @@
  * which is exact because levels of one block never cross.
  */
 import { PLANCK_H } from '../constants';
-import { curvaturesOf, makeWorkspace, slopesOf, solveBlockAt } from './blockSolver';
+import { curvaturesOf, makeWorkspace, solveBlockAt } from './blockSolver';
 import { buildLevelModel } from './buildModel';
 import { findCrossings, type StateSlot } from './crossings';
 import { issue } from './issues';
@@ -47,40 +47,55 @@ interface SweepSlot extends StateSlot {
   curvature?: Float64Array;
 }
 
+/** Row r (`points` values) of the sweep's output store. */
+function storeRow(store: Float64Array, points: number, r: number): Float64Array {
+  return store.subarray(r * points, (r + 1) * points);
+}
+
 /** Solve every block at every field of `fieldsT`, filling the swept states in block order. */
 function runSweep(model: LevelModel, fieldsT: Float64Array, curvature: boolean, issues: EngineIssue[]): SweepSlot[] | null {
   const points = fieldsT.length;
   const ws = makeWorkspace(model.largestBlock);
-  const slope = new Float64Array(model.largestBlock);
   const curv = new Float64Array(model.largestBlock);
   const slots: SweepSlot[] = [];
   let skipped = 0;
   // One allocation for every output array (views into it), so a sweep makes no garbage per state.
+  // State s owns rows perState·s (energy), +1 (moment) and +2 (curvature) of `store`.
   const perState = curvature ? 3 : 2;
   const store = new Float64Array(model.dimension * points * perState);
-  let next = 0;
-  const take = (): Float64Array => store.subarray(points * next, points * ++next);
+  const values = ws.values;
+  const vectors = ws.vectors;
   for (let b = 0; b < model.blocks.length; b++) {
     const block = model.blocks[b];
     const n = block.size;
+    const z = block.zeeman;
     const first = slots.length;
     for (let k = 0; k < n; k++) {
-      const slot: SweepSlot = { block: b, rank: k, energyHz: take(), moment: take() };
-      if (curvature) slot.curvature = take();
+      const r = perState * (first + k);
+      const slot: SweepSlot = { block: b, rank: k, energyHz: storeRow(store, points, r), moment: storeRow(store, points, r + 1) };
+      if (curvature) slot.curvature = storeRow(store, points, r + 2);
       slots.push(slot);
     }
+    // The point loop writes into `store` by index (state k of the block at base + k·stride + p):
+    // on 1 × 1 … 4 × 4 blocks per-state object and view look-ups cost as much as the moments.
+    const stride = perState * points;
+    const base = perState * first * points;
     for (let p = 0; p < points; p++) {
       if (!solveBlockAt(block, fieldsT[p], ws)) {
         issues.push(issue('error', 'solver-failed', 'The eigen-solver did not converge during the sweep.'));
         return null;
       }
-      slopesOf(block, ws, slope);
       if (curvature) skipped += curvaturesOf(block, ws, curv);
-      for (let k = 0; k < n; k++) {
-        const s = slots[first + k];
-        s.energyHz[p] = ws.values[k];
-        s.moment[p] = -slope[k] * PLANCK_H;
-        if (s.curvature) s.curvature[p] = curv[k];
+      for (let k = 0, at = base + p; k < n; k++, at += stride) {
+        // Hellmann–Feynman dE_k/dB = Σ_i v_ik² z_i (slopesOf, inlined), then μ = −h dE/dB.
+        let slope = 0;
+        for (let i = 0; i < n; i++) {
+          const c = vectors[i * n + k];
+          slope += c * c * z[i];
+        }
+        store[at] = values[k];
+        store[at + points] = -slope * PLANCK_H;
+        if (curvature) store[at + 2 * points] = curv[k];
       }
     }
   }
