@@ -24,6 +24,7 @@ import { computeLineStarts, positionToOffset } from '../../server/src/format/pos
 import { scanText } from '../../server/src/format/scanner';
 import { analyzeFast } from '../../server/src/service/fastAnalysis';
 import { applyEdits, editsOf, URI } from './helpers';
+import { mutatedText } from '../mutatedExamples';
 
 const RUNS = Number(process.env.FUZZ_RUNS ?? 60);
 /** A feature call on a small document taking this long means something loops. */
@@ -45,20 +46,7 @@ const PIECES = [
 
 const pieced = fc.array(fc.constantFrom(...PIECES), { maxLength: 60 }).map((parts) => parts.join(' '));
 
-/** Example files with a few random insertions, deletions, duplications and replacements. */
-const mutated = fc
-  .tuple(fc.constantFrom(...EXAMPLES), fc.array(fc.tuple(fc.nat(), fc.nat(12), fc.string({ maxLength: 6 }), fc.nat(3)), { maxLength: 6 }))
-  .map(([seed, edits]) => {
-    let t = seed;
-    for (const [pos, len, ins, kind] of edits) {
-      const p = pos % (t.length + 1);
-      if (kind === 0) t = t.slice(0, p) + ins + t.slice(p);
-      else if (kind === 1) t = t.slice(0, p) + t.slice(p + len);
-      else if (kind === 2) t = t.slice(0, p) + t.slice(p, p + len) + t.slice(p);
-      else t = t.slice(0, p) + ins.replace(/./g, (c) => String.fromCharCode((c.charCodeAt(0) * 7) % 0x3000)) + t.slice(p + len);
-    }
-    return t;
-  });
+const mutated = mutatedText(EXAMPLES, 6);
 
 const anyText = fc.oneof(pieced, mutated, fc.string({ unit: 'binary', maxLength: 300 }));
 
