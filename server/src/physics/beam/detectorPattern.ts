@@ -4,7 +4,7 @@
  * aperture (a third box), weighted by population; then peaks, their members and a
  * resolvability verdict per neighbouring pair. Never throws: problems are issues.
  */
-import { boxOperator, convolveBox, shareToCentres } from './boxConvolve';
+import { boxOperator, convolveBox, shareToCentres, type BinRange } from './boxConvolve';
 import { deflectionCoefficient } from './deflection';
 import { depositDeflections, type BinnedMasses } from './depositDeflections';
 import { detectorGrid } from './detectorGrid';
@@ -110,6 +110,26 @@ function emptyPattern(issues: BeamIssue[]): DetectorPattern {
   };
 }
 
+// The per-bin loops live in small functions of their own: the optimiser compiles them
+// on their own, so they stay fast even while the long computePattern runs in
+// unoptimised code (where every intermediate double is a garbage object).
+
+/** Turns a sublevel's bin masses into weighted densities and adds them to total; returns the mass on the grid. */
+function weighInto(out: Float64Array, total: Float64Array, weight: number, inverseWidth: Float64Array, range: BinRange): number {
+  let inside = 0;
+  for (let j = range.from; j < range.to; j++) {
+    inside += out[j];
+    const v = out[j] * weight * inverseWidth[j];
+    out[j] = v;
+    total[j] += v;
+  }
+  return inside;
+}
+
+function addInto(sum: Float64Array, part: Float64Array, range: BinRange): void {
+  for (let j = range.from; j < range.to; j++) sum[j] += part[j];
+}
+
 export function detectorPattern(input: PatternInput): DetectorPattern {
   return computePattern(input);
 }
@@ -160,11 +180,17 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
   let offGrid = 0;
   const summaries: SublevelDeflection[] = [];
   const ownPeaks: number[] = [];
+  // Bins where each sublevel's contribution may be nonzero (the rest of it stays 0): the
+  // loops below run over these only. An oven sublevel fills about a third of the grid.
+  const supports: BinRange[] = [];
   for (let i = 0; i < sublevels.length; i++) {
     const out = block.subarray((i + 1) * n, (i + 2) * n);
     perSublevel.push(out);
     const meanDeflectionM = ks[i] * law.meanInverseSquare;
+    const support: BinRange = { from: 0, to: n };
+    supports.push(support);
     if (weights[i] === 0) {
+      support.to = 0;
       summaries.push({ label: sublevels[i].label, weight: 0, coefficientM3PerS2: ks[i], meanDeflectionM, peakM: NaN });
       ownPeaks.push(NaN);
       continue;
@@ -172,18 +198,12 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
     // Deflections (exact bin masses and centroids, shared onto bin centres) → slit box a → slit box b → aperture.
     depositDeflections(stageA, edgesM, ks[i], law);
     shareToCentres(stageA, edgesM, flat);
-    convolveBox(flat, slitA, out);
-    convolveBox(out, slitB, flat);
-    convolveBox(flat, aperture, out);
-    let inside = 0;
-    for (let j = 0; j < n; j++) {
-      inside += out[j];
-      const v = out[j] * weights[i] * inverseWidth[j];
-      out[j] = v;
-      total[j] += v;
-    }
+    convolveBox(flat, slitA, out, support);
+    convolveBox(out, slitB, flat, support);
+    convolveBox(flat, aperture, out, support);
+    const inside = weighInto(out, total, weights[i], inverseWidth, support);
     offGrid += weights[i] * Math.max(0, 1 - inside);
-    const own = peakShape(out, centresM);
+    const own = peakShape(out, centresM, support.from, support.to);
     const peakM = own ? own.positionM : NaN;
     ownPeaks.push(peakM);
     summaries.push({ label: sublevels[i].label, weight: weights[i], coefficientM3PerS2: ks[i], meanDeflectionM, peakM });
@@ -197,11 +217,14 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
   const profile = scratchFloat64('pattern.profile', n);
   for (const g of groups) {
     profile.fill(0);
+    let from = n;
+    let to = 0;
     for (const i of g) {
-      const p = perSublevel[i];
-      for (let j = 0; j < n; j++) profile[j] += p[j];
+      addInto(profile, perSublevel[i], supports[i]);
+      from = Math.min(from, supports[i].from);
+      to = Math.max(to, supports[i].to);
     }
-    const shape = peakShape(profile, centresM);
+    const shape = peakShape(profile, centresM, from, to);
     if (!shape) continue;
     peaks.push({
       positionM: shape.positionM,

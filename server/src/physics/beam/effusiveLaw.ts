@@ -23,15 +23,16 @@ export function effusiveLaw(temperatureK: number, massKg: number): SpeedLaw {
   const alpha2 = (2 * BOLTZMANN_K * temperatureK) / massKg;
   const alpha = Math.sqrt(alpha2);
   // The pattern code asks for both cumulative integrals at the same speed: share the exponentials.
-  let lastY = NaN;
-  let expNeg = 1; // e^{−y}
-  let oneMinusExp = 0; // 1 − e^{−y}
+  // memo = [y, e^{−y}, 1 − e^{−y}], in a typed array because doubles assigned to captured
+  // variables are boxed (a small garbage object) on every write.
+  const memo = Float64Array.of(NaN, 1, 0);
   const prepare = (y: number): void => {
-    if (y !== lastY) {
-      lastY = y;
-      expNeg = Math.exp(-y);
+    if (y !== memo[0]) {
+      memo[0] = y;
+      const expNeg = Math.exp(-y);
+      memo[1] = expNeg;
       // 1 − e^{−y} loses digits only for small y; expm1 is needed there alone.
-      oneMinusExp = y < 0.5 ? -Math.expm1(-y) : 1 - expNeg;
+      memo[2] = y < 0.5 ? -Math.expm1(-y) : 1 - expNeg;
     }
   };
   return {
@@ -41,13 +42,29 @@ export function effusiveLaw(temperatureK: number, massKg: number): SpeedLaw {
       const y = (v * v) / alpha2;
       if (y < 0.02) return slowerFractionSeries(y);
       prepare(y);
-      return oneMinusExp - y * expNeg;
+      return memo[2] - y * memo[1];
     },
     inverseSquareBelow: (v) => {
       if (v <= 0) return 0;
       if (v === Infinity) return 1 / alpha2;
       prepare((v * v) / alpha2);
-      return oneMinusExp / alpha2;
+      return memo[2] / alpha2;
+    },
+    cumulativeBelow: (v, into) => {
+      // As the two functions above, computed together (same operations, same values).
+      if (v <= 0) {
+        into[0] = 0;
+        into[1] = 0;
+      } else if (v === Infinity) {
+        into[0] = 1;
+        into[1] = 1 / alpha2;
+      } else {
+        const y = (v * v) / alpha2;
+        const expNeg = Math.exp(-y);
+        const oneMinusExp = y < 0.5 ? -Math.expm1(-y) : 1 - expNeg;
+        into[0] = y < 0.02 ? slowerFractionSeries(y) : oneMinusExp - y * expNeg;
+        into[1] = oneMinusExp / alpha2;
+      }
     },
     meanInverseSquare: 1 / alpha2,
     meanSpeed: ((3 * Math.sqrt(Math.PI)) / 4) * alpha,

@@ -143,6 +143,10 @@ function tabulate(s: number, alpha: number, m: ShapeMoments, panels: number): Sp
   return {
     slowerFraction: (v) => read(cum, slopeCum, v / alpha, total) / total,
     inverseSquareBelow: (v) => read(cumInv, slopeInv, v / alpha, totalInv) / (total * alpha2),
+    cumulativeBelow: (v, into) => {
+      into[0] = read(cum, slopeCum, v / alpha, total) / total;
+      into[1] = read(cumInv, slopeInv, v / alpha, totalInv) / (total * alpha2);
+    },
     meanInverseSquare: totalInv / (total * alpha2),
     meanSpeed: m.mean * alpha,
     rmsSpread: m.rms * alpha,

@@ -47,10 +47,12 @@ function crossings(profile: Float64Array, centresM: Float64Array, i: number, lev
   };
 }
 
-export function peakShape(profile: Float64Array, centresM: Float64Array): PeakShape | null {
+/** `from`, `to`: the profile is known to be zero outside [from, to) (the maximum is looked for there only). */
+export function peakShape(profile: Float64Array, centresM: Float64Array, from = 0, to = profile.length): PeakShape | null {
   const n = profile.length;
-  let i = 0;
-  for (let j = 1; j < n; j++) if (profile[j] > profile[i]) i = j;
+  let i = Math.max(0, Math.min(from, n - 1));
+  const end = Math.min(to, n);
+  for (let j = i + 1; j < end; j++) if (profile[j] > profile[i]) i = j;
   const top = profile[i];
   if (!(top > 0)) return null;
   let position = centresM[i];

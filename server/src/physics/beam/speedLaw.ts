@@ -7,6 +7,13 @@ export interface SpeedLaw {
   slowerFraction(v: number): number;
   /** ∫₀^v f(u)/u² du: the part of ⟨1/v²⟩ contributed by atoms slower than v, s²/m². */
   inverseSquareBelow(v: number): number;
+  /**
+   * Both of the above at one speed: into[0] = slowerFraction(v), into[1] =
+   * inverseSquareBelow(v), the same values. For the pattern's per-bin-edge loop: one
+   * call, shared work, and no boxed doubles (a double returned from a call that the
+   * optimiser does not inline is a small garbage object).
+   */
+  cumulativeBelow(v: number, into: Float64Array): void;
   /** ⟨1/v²⟩ over the whole flux, s²/m²; deflection = (coefficient) × this on average. */
   meanInverseSquare: number;
   /** Flux-weighted mean speed ⟨v⟩, m/s. */

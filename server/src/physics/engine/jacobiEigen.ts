@@ -5,27 +5,28 @@
  * on the block orders met here faster than both the own Householder + QR route
  * and ml-matrix (bench/eigen.bench.ts, docs/engine.md).
  *
- * Pivots are visited in a round-robin ("tournament") order: each round is a
- * set of disjoint planes, so all angles of a round are computed from the same
- * matrix before any rotation is applied (no dependency chain between them).
- * Small angles (most rotations after the first sweep) use a short series
- * instead of square roots. Off-diagonal elements are only ever mixed with
- * other off-diagonal elements, so they fall to zero without a round-off
- * floor; the stopping rule (see `converged`) asks each of them to be
+ * Pivots are visited in a round-robin ("tournament") order, each round a set
+ * of disjoint planes. Small angles (most rotations after the first sweep) use
+ * a short series instead of square roots. Off-diagonal elements are only ever
+ * mixed with other off-diagonal elements, so they fall to zero without a
+ * round-off floor; the stopping rule (see `converged`) asks each of them to be
  * negligible against the gap of its two diagonal entries, which on the
  * engine's blocks saves the third sweep a norm-only rule needs. Together these
  * took the Cs 6P3/2 sweep's eigen-work from about 7.1 to 6.0 ms.
  *
- * The upper triangle is mirrored into the lower one first and both are kept
- * up to date: a rotation then touches rows p, q and columns p, q in one plain
- * loop over r, instead of three loops over the three places where (r, p) and
- * (r, q) sit in an upper-triangle-only layout. The arithmetic is the same
- * operation for operation (results are bit-identical); on 2 × 2 … 4 × 4 blocks
- * the loop overhead was the cost, and this cut the sweep's eigen-work by
- * about a fifth (docs/engine.md).
+ * Layout and order, tuned later (same operations on the same numbers, so the
+ * results are bit-identical; together about a fifth off the eigen-work):
+ * - the upper triangle is mirrored into the lower one and both are kept up to
+ *   date, so a rotation updates rows and columns p, q in one plain loop over r
+ *   instead of three loops over where (r, p) and (r, q) sit in an upper-only
+ *   layout — on 2 × 2 … 4 × 4 blocks the loop overhead was the cost;
+ * - each rotation is applied as soon as its angle is known. An earlier version
+ *   computed a whole round's angles first; a rotation in plane (p, q) never
+ *   touches the three entries a disjoint plane's angle reads, so the numbers
+ *   are the same, without the scratch arrays and the second pass.
  */
 
-/** Round-robin schedules by order: triples (p, q, round) with p < q, flattened; built on first use. */
+/** Round-robin schedules by order: pairs (p, q) with p < q, round after round, flattened; built on first use. */
 const SCHEDULES: (Int32Array | undefined)[] = new Array(257);
 
 function roundRobin(n: number): Int32Array {
@@ -38,7 +39,7 @@ function roundRobin(n: number): Int32Array {
     for (let k = 0; k < m / 2; k++) {
       const a = players[k];
       const b = players[m - 1 - k];
-      if (a < n && b < n) pairs.push(Math.min(a, b), Math.max(a, b), round);
+      if (a < n && b < n) pairs.push(Math.min(a, b), Math.max(a, b));
     }
     players.splice(1, 0, players.pop() as number); // keep player 0, rotate the rest
   }
@@ -106,11 +107,6 @@ function rotate(a: Float64Array, n: number, vectors: Float64Array, p: number, q:
   }
 }
 
-// Rotation parameters of one round (at most n/2 planes); module scratch, the solver is not re-entrant.
-const roundT = new Float64Array(128);
-const roundC = new Float64Array(128);
-const roundS = new Float64Array(128);
-
 /**
  * Diagonalise `a` in place (only its upper triangle is read). On return the
  * diagonal of `a` holds the eigenvalues (unsorted), the rest the small
@@ -151,46 +147,30 @@ export function jacobiInPlace(a: Float64Array, n: number, vectors: Float64Array,
       }
       continue;
     }
-    for (let start = 0; start < schedule.length; ) {
-      // One round: angles first (independent planes), then the rotations.
-      const round = schedule[start + 2];
-      let end = start;
-      let k = 0;
-      for (; end < schedule.length && schedule[end + 2] === round; end += 3, k++) {
-        const p = schedule[end];
-        const q = schedule[end + 1];
-        const apq = a[p * n + q];
-        if (apq === 0) {
-          roundT[k] = 0;
-          continue;
-        }
-        const app = a[p * n + p];
-        const aqq = a[q * n + q];
-        const d = aqq - app;
-        let t: number;
-        let c: number;
-        if (Math.abs(apq) < 1e-3 * Math.abs(d)) {
-          // Small angle (most rotations after the first sweep): with ε = a_pq/d the series
-          // t = ε(1 − ε² + 2ε⁴) and cos φ = 1 − t²/2 + 3t⁴/8 leave out terms of relative size
-          // 5ε⁶ and 5t⁶/16, below 1e-17 for |ε| < 1e-3: exact in double precision, no square root.
-          const e = apq / d;
-          const e2 = e * e;
-          t = e * (1 - e2 + 2 * e2 * e2);
-          const t2 = t * t;
-          c = 1 - 0.5 * t2 + 0.375 * t2 * t2;
-        } else {
-          t = rotationTangent(app, aqq, apq);
-          c = 1 / Math.sqrt(t * t + 1);
-        }
-        roundT[k] = t;
-        roundC[k] = c;
-        roundS[k] = t * c;
+    for (let i = 0; i < schedule.length; i += 2) {
+      const p = schedule[i];
+      const q = schedule[i + 1];
+      const apq = a[p * n + q];
+      if (apq === 0) continue;
+      const app = a[p * n + p];
+      const aqq = a[q * n + q];
+      const d = aqq - app;
+      let t: number;
+      let c: number;
+      if (Math.abs(apq) < 1e-3 * Math.abs(d)) {
+        // Small angle (most rotations after the first sweep): with ε = a_pq/d the series
+        // t = ε(1 − ε² + 2ε⁴) and cos φ = 1 − t²/2 + 3t⁴/8 leave out terms of relative size
+        // 5ε⁶ and 5t⁶/16, below 1e-17 for |ε| < 1e-3: exact in double precision, no square root.
+        const e = apq / d;
+        const e2 = e * e;
+        t = e * (1 - e2 + 2 * e2 * e2);
+        const t2 = t * t;
+        c = 1 - 0.5 * t2 + 0.375 * t2 * t2;
+      } else {
+        t = rotationTangent(app, aqq, apq);
+        c = 1 / Math.sqrt(t * t + 1);
       }
-      k = 0;
-      for (let i = start; i < end; i += 3, k++) {
-        if (roundT[k] !== 0) rotate(a, n, vectors, schedule[i], schedule[i + 1], roundT[k], roundC[k], roundS[k]);
-      }
-      start = end;
+      if (t !== 0) rotate(a, n, vectors, p, q, t, c, t * c);
     }
   }
   return converged(a, n, floor);
