@@ -23,6 +23,7 @@ const REQUIRED = [
   'extension/LICENSE.txt',
   'extension/dist/client.js',
   'extension/dist/server.js',
+  'extension/dist/service.js',
   'extension/dist/panel/page.js',
   'extension/dist/panel/panel.css',
   'extension/language-configuration.json',

@@ -21,6 +21,7 @@ import {
   TextDocumentSyncKind,
 } from 'vscode-languageserver/node';
 import { TextDocument } from 'vscode-languageserver-textdocument';
+import * as path from 'path';
 import { isMainThread, workerData } from 'worker_threads';
 import { SEMANTIC_TOKENS_LEGEND } from './features/semanticTokensLegend';
 import type { LanguageService } from './service/languageService';
@@ -29,8 +30,18 @@ import type { EditorSettings } from './service/settings';
 /** Same value as EVALUATOR_ROLE in service/workerEvaluator.ts (not imported: that would load the service here). */
 const EVALUATOR_ROLE = 'sublevel-evaluator';
 
+type ServiceModule = typeof import('./service/serviceEntry');
+
+/**
+ * The analysis side is its own bundle, `service.js` beside this one (esbuild.mjs), required only
+ * when first needed: a path built at run time keeps esbuild from folding it into this bundle.
+ */
+function loadServiceModule(): ServiceModule {
+  return require(path.join(__dirname, 'service.js')) as ServiceModule;
+}
+
 if (!isMainThread && (workerData as { role?: string } | null)?.role === EVALUATOR_ROLE) {
-  void import('./service/evaluatorThread').then((m) => m.serveEvaluations());
+  loadServiceModule().serveEvaluations();
 } else {
   startLanguageServer();
 }
@@ -55,14 +66,11 @@ function startLanguageServer(): void {
 
   function loadService(): Promise<LanguageService> {
     serviceLoading ??= (async () => {
-      const [svc, settings, worker, files] = await Promise.all([
-        import('./service/languageService'),
-        import('./service/settings'),
-        import('./service/workerEvaluator'),
-        import('./service/workspaceFiles'),
-      ]);
-      readSettings = settings.readSettings;
-      service = new svc.LanguageService(log, new worker.WorkerEvaluator(__filename, log), files.editorFiles(() => documents.all()));
+      // After the current turn, so an `initialize` answer already queued goes out first.
+      await new Promise<void>((resolve) => setImmediate(resolve));
+      const m = loadServiceModule();
+      readSettings = m.readSettings;
+      service = new m.LanguageService(log, new m.WorkerEvaluator(__filename, log), m.editorFiles(() => documents.all()));
       return service;
     })();
     return serviceLoading;

@@ -54,18 +54,18 @@ function isUnitAfterNumber(word: string): boolean {
   return isUnitText(word) || looksLikeMisspeltUnit(word);
 }
 
-/** Parts of one comma-free run of atoms. */
+/** Parts of one comma-free run of atoms (an atom's text is the document's text at its span, so it is used as is). */
 function readGroup(atoms: Token[], ls: LineSpans, problems: Problem[]): ValuePart[] {
   const parts: ValuePart[] = [];
   for (let i = 0; i < atoms.length; i++) {
     const atom = atoms[i]!;
     const c = classifyAtom(atom, ls, problems);
     if (c.kind === 'quantity') {
-      parts.push({ kind: 'quantity', number: c.number, unit: spanOf(ls, c.unitStart, atom.end), ...spanOf(ls, atom.start, atom.end) });
+      parts.push({ kind: 'quantity', number: c.number, unit: spanOf(ls, c.unitStart, atom.end), text: atom.text, range: rangeOn(ls, atom.start, atom.end) });
       continue;
     }
     if (c.kind === 'word') {
-      parts.push({ kind: 'word', ...spanOf(ls, atom.start, atom.end) });
+      parts.push({ kind: 'word', text: atom.text, range: rangeOn(ls, atom.start, atom.end) });
       continue;
     }
     const next = atoms[i + 1];
@@ -74,7 +74,7 @@ function readGroup(atoms: Token[], ls: LineSpans, problems: Problem[]): ValuePar
       i++;
       continue;
     }
-    parts.push({ kind: 'number', number: c.number, ...spanOf(ls, atom.start, atom.end) });
+    parts.push({ kind: 'number', number: c.number, text: atom.text, range: rangeOn(ls, atom.start, atom.end) });
   }
   return parts;
 }

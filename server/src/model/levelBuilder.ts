@@ -32,13 +32,33 @@ export function buildLevel(node: LevelNode, species: SpeciesModel, problems: Pro
   return level;
 }
 
+type ParsedDesignation = ReturnType<typeof parseLevelDesignation>;
+
+/**
+ * Parsed designations by text. A big file repeats a few designations many times, and every
+ * keystroke builds the model again; the parse is pure and its result is only read, so one
+ * result serves every level written the same way. Emptied when it grows past the limit.
+ */
+const designations = new Map<string, ParsedDesignation>();
+const MAX_DESIGNATIONS = 4096;
+
+function designationOf(text: string): ParsedDesignation {
+  let parsed = designations.get(text);
+  if (!parsed) {
+    if (designations.size >= MAX_DESIGNATIONS) designations.clear();
+    parsed = parseLevelDesignation(text);
+    designations.set(text, parsed);
+  }
+  return parsed;
+}
+
 function readDesignation(level: LevelModel, problems: ProblemList): void {
   const d = level.node.designation;
   if (!d || d.text.trim() === '') {
     problems.add('level-needs-term', `level '${level.name}' needs a term symbol after the colon, such as 2S1/2 or 3p 2P°3/2`, level.node.name?.range ?? level.node.range);
     return;
   }
-  const parsed = parseLevelDesignation(d.text);
+  const parsed = designationOf(d.text);
   level.configuration = parsed.configuration;
   level.term = parsed.term;
   for (const issue of parsed.issues) {

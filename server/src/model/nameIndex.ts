@@ -11,6 +11,9 @@ export type NamedKind = NameUse['kind'];
 
 export class NameIndex<T extends { name: string; nameRange: Range; origin?: SpeciesOrigin }> {
   private readonly byName = new Map<string, T>();
+  /** Grows with every indexed item, so `derived` knows when to rebuild. */
+  private revision = 0;
+  private memo: { revision: number; value: unknown } | undefined;
 
   constructor(private readonly kind: NamedKind, private readonly uses: NameUse[]) {}
 
@@ -25,6 +28,7 @@ export class NameIndex<T extends { name: string; nameRange: Range; origin?: Spec
       return false;
     }
     this.byName.set(item.name, item);
+    this.revision++;
     return true;
   }
 
@@ -36,7 +40,14 @@ export class NameIndex<T extends { name: string; nameRange: Range; origin?: Spec
     const first = this.byName.get(item.name);
     if (first) return first;
     this.byName.set(item.name, item);
+    this.revision++;
     return undefined;
+  }
+
+  /** A value computed from the indexed items, kept until another item is indexed (one per index). */
+  derived<V>(build: (items: T[]) => V): V {
+    if (this.memo?.revision !== this.revision) this.memo = { revision: this.revision, value: build(this.all()) };
+    return this.memo.value as V;
   }
 
   get(name: string): T | undefined {
@@ -90,7 +101,7 @@ export function resolveLevel(
   } else {
     pool = species.all();
   }
-  const matches = pool.flatMap((s) => s.levels.filter((l) => l.name === ref.name.text));
+  const matches = ref.qualifier || context ? pool.flatMap((s) => s.levels.filter((l) => l.name === ref.name.text)) : (levelsByName(species).get(ref.name.text) ?? []);
   if (matches.length > 1) {
     problems.add(
       'name-ambiguous',
@@ -115,4 +126,23 @@ export function resolveLevel(
     reportUnknown('level', ref.name, pool.flatMap((s) => s.levels.map((l) => l.name)), problems);
   }
   return found;
+}
+
+/**
+ * Level name → its levels in every species (species order, then level order). Built once per
+ * species index (again only if a species was added since), so an unqualified level reference
+ * costs a lookup instead of a scan of every level of every species.
+ */
+function levelsByName(species: NameIndex<SpeciesModel>): Map<string, LevelModel[]> {
+  return species.derived((all) => {
+    const map = new Map<string, LevelModel[]>();
+    for (const s of all) {
+      for (const l of s.levels) {
+        const list = map.get(l.name);
+        if (list) list.push(l);
+        else map.set(l.name, [l]);
+      }
+    }
+    return map;
+  });
 }
