@@ -8,7 +8,8 @@ import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from 
 import { readSetupFile } from './files';
 import { diskSources } from '../service/workspaceFiles';
 import type { CliIO } from './io';
-import { gJLookup, selectBeam } from './selectors';
+import { selectBeam } from './selectors';
+import { gJLookup } from '../eval/gJLookup';
 
 export function runProfile(args: ParsedArgs, io: CliIO): number {
   rejectUnknownOptions(args, ['beam', 'out']);
@@ -17,7 +18,7 @@ export function runProfile(args: ParsedArgs, io: CliIO): number {
   const analysis = analyze(readSetupFile(file), diskSources(file));
   if (!analysis.model) throw new UsageError(`${file} could not be read`);
   const beam = selectBeam(analysis.model, stringOption(args, 'beam'));
-  const v = patternView(beam.name, evaluateBeam(beam, gJLookup(analysis)), false);
+  const v = patternView(beam.name, evaluateBeam(beam, gJLookup(analysis.result?.levels ?? []), false), false);
   if (!v) throw new UsageError(`beam '${beam.name}' cannot be computed yet (run: sublevel check ${file})`);
   const csv = patternCsv(v);
   const out = stringOption(args, 'out');

@@ -1,15 +1,9 @@
 /** Picking a level, field or beam of an analysed file by name for the CLI, with did-you-mean. */
 import { suggestNames } from '../format/didYouMean';
-import type { Analysis } from '../eval/analyze';
 import { workingFields } from '../eval/evaluate';
 import type { WorkingField } from '../eval/levelEvaluation';
 import type { BeamModel, LevelModel, SetupModel } from '../model/types';
 import { UsageError } from './args';
-
-export function gJLookup(a: Analysis): (l: LevelModel) => number | undefined {
-  const byName = new Map((a.result?.levels ?? []).map((l) => [`${l.species}.${l.level}`, l.g_J.used]));
-  return (l) => byName.get(`${l.species.name}.${l.name}`);
-}
 
 function pick<T>(kind: string, items: T[], nameOf: (t: T) => string[], wanted: string | undefined, fallback?: T): T {
   if (wanted === undefined) {

@@ -1,5 +1,6 @@
 /** The human-readable report printed by `sublevel eval`. */
 import { ATOMIC_MASS_UNIT } from '../physics/constants';
+import { halfText } from '../eval/halves';
 import { fieldText, frequencyText, lengthText, trimNumber } from '../eval/quantityText';
 import type {
   BeamResult,
@@ -196,6 +197,7 @@ function beamReport(b: BeamResult): string[] {
   return out;
 }
 
+/** A quantum number given as a number (1.5) in the result, written as text (3/2). */
 function fraction(x: number): string {
-  return Number.isInteger(x) ? String(x) : `${Math.round(2 * x)}/2`;
+  return halfText(Math.round(2 * x));
 }

@@ -2,6 +2,7 @@
  * Beam results: deflection of every sublevel, the detector pattern's peaks, a resolvability
  * verdict per neighbouring pair, and — when peaks merge — the smallest gradient that separates them.
  */
+import type { GJLookup } from './gJLookup';
 import {
   BEAM_CAUTIONS,
   DEFAULT_DIP_CRITERION,
@@ -12,7 +13,7 @@ import {
   type DetectorPattern,
 } from '../physics/beam';
 import { BOHR_MAGNETON } from '../physics/constants';
-import type { BeamModel, LevelModel } from '../model/types';
+import type { BeamModel } from '../model/types';
 import { beamInputs } from './beamInput';
 import type { BeamResult } from './resultTypes';
 
@@ -26,7 +27,11 @@ export interface BeamEvaluation {
   issues: { severity: 'error' | 'warning' | 'info'; code: string; message: string }[];
 }
 
-export function evaluateBeam(beam: BeamModel, gJOf: (l: LevelModel) => number | undefined): BeamEvaluation {
+/**
+ * `searchResolving` runs the inverse solvers when peaks merge (dozens of patterns); drawing or
+ * exporting the pattern does not need them.
+ */
+export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = true): BeamEvaluation {
   const base: BeamResult = {
     name: beam.name,
     ...(beam.species ? { species: beam.species.name } : {}),
@@ -71,7 +76,7 @@ export function evaluateBeam(beam: BeamModel, gJOf: (l: LevelModel) => number | 
     off_grid_fraction: pattern.offGridFraction,
   };
   if (pattern.detectorFraction !== undefined) result.detector_fraction = pattern.detectorFraction;
-  if (!pattern.allResolved && pattern.peaks.length > 1) {
+  if (searchResolving && !pattern.allResolved && pattern.peaks.length > 1) {
     const geo = inputs.input.geometry;
     const g = smallestResolvingGradient(inputs.input, { upperBound: Math.abs(geo.gradientTPerM) * SEARCH_FACTOR });
     result.resolving_gradient_T_per_m = g.value ?? null;

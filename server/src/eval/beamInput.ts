@@ -2,9 +2,10 @@
  * From a beam in the model to the beam engine's input: geometry in SI, the speed law, and each
  * sublevel's exact magnetic moment at the magnet's field.
  */
+import type { GJLookup } from './gJLookup';
 import type { BeamGeometry, PatternInput, SpeedDistribution } from '../physics/beam';
 import { solveLevel, type SublevelState } from '../physics/engine';
-import type { BeamModel, LevelModel } from '../model/types';
+import type { BeamModel } from '../model/types';
 import { hyperfineSpec } from './levelSpec';
 
 export interface BeamInputs {
@@ -14,7 +15,7 @@ export interface BeamInputs {
 }
 
 /** Undefined when the beam lacks something it needs (the model has reported what). */
-export function beamInputs(beam: BeamModel, gJOf: (l: LevelModel) => number | undefined): BeamInputs | undefined {
+export function beamInputs(beam: BeamModel, gJOf: GJLookup): BeamInputs | undefined {
   const { level, magnet, source, slits, driftM } = beam;
   const massKg = beam.species?.massKg?.value;
   if (!level || !magnet || !source || !slits || !driftM || massKg === undefined) return undefined;

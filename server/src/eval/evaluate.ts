@@ -4,9 +4,10 @@
  */
 import type { Problem } from '../format/ast';
 import { CONSTANTS_SOURCE } from '../physics/constants';
-import type { LevelModel, SetupModel } from '../model/types';
+import type { SetupModel } from '../model/types';
 import { beamDiagnostics } from './beamDiagnostics';
 import { evaluateBeam } from './beamEvaluation';
+import { gJLookup } from './gJLookup';
 import { evaluateTerm } from './termEvaluation';
 import { evaluateLine } from './lineEvaluation';
 import { evaluateResonance } from './resonanceEvaluation';
@@ -55,8 +56,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
       if (s.origin) for (let i = first; i < notes.length; i++) if (notes[i]!.range === l.nameRange) notes[i] = { ...notes[i]!, range: s.origin.useRange };
     }
   }
-  const gJByLevel = new Map(levels.map((l) => [`${l.species}.${l.level}`, l.g_J.used]));
-  const gJOf = (l: LevelModel): number | undefined => gJByLevel.get(`${l.species.name}.${l.name}`);
+  const gJOf = gJLookup(levels);
   const beamProblems: Problem[] = [];
   const beams = model.beams.map((b) => {
     const e = evaluateBeam(b, gJOf);

@@ -2,19 +2,19 @@
  * An optical (electric-dipole) line between two levels: selection rules, the effective Landé
  * factor, and every Zeeman component at each working field from the exact eigenstates.
  */
+import type { GJLookup } from './gJLookup';
 import type { Problem } from '../format/ast';
-import { electricDipoleLine, selectionRules, stickSpectrum, type LineTerm, type Polarization } from '../physics/transitions';
+import { electricDipoleLine, selectionRules, stickSpectrum, type LineTerm } from '../physics/transitions';
+import { polarizationName } from './polarizationName';
 import type { LevelModel, LineModel } from '../model/types';
 import type { WorkingField } from './levelEvaluation';
 import { hyperfineSpec } from './levelSpec';
-import type { LineComponentResult, LineResult } from './resultTypes';
-
-const POLARIZATION_NAME: Record<Polarization, LineComponentResult['polarization']> = { π: 'pi', 'σ+': 'sigma+', 'σ−': 'sigma-' };
+import type { LineResult } from './resultTypes';
 
 export function evaluateLine(
   line: LineModel,
   fields: WorkingField[],
-  gJOf: (l: LevelModel) => number | undefined,
+  gJOf: GJLookup,
   problems: Problem[],
 ): LineResult {
   const { lower, upper } = line;
@@ -54,7 +54,7 @@ export function evaluateLine(
         offset_Hz: c.offsetHz,
         ...(r.components[k]!.absoluteHz !== null ? { absolute_Hz: r.components[k]!.absoluteHz! } : {}),
         strength: c.strength,
-        polarization: POLARIZATION_NAME[c.polarization],
+        polarization: polarizationName(c.polarization),
         lower_label: c.lowerLabel,
         upper_label: c.upperLabel,
         along_field: c.alongField,

@@ -3,6 +3,7 @@
  * field with their field sensitivity, the fields where a given frequency is resonant, and the
  * field-insensitive points of a chosen pair.
  */
+import type { GJLookup } from './gJLookup';
 import type { Problem } from '../format/ast';
 import {
   fieldInsensitivePoints,
@@ -12,9 +13,10 @@ import {
   type SublevelPair,
   type SublevelRef,
 } from '../physics/transitions';
-import type { LevelModel, ResonanceModel, SettingsModel, SublevelName } from '../model/types';
+import type { ResonanceModel, SettingsModel, SublevelName } from '../model/types';
 import type { WorkingField } from './levelEvaluation';
 import { engineSpec } from './levelSpec';
+import { polarizationName } from './polarizationName';
 import { fieldText, frequencyText } from './quantityText';
 import type { MagneticTransitionResult, ResonanceResult } from './resultTypes';
 
@@ -25,7 +27,7 @@ export function evaluateResonance(
   r: ResonanceModel,
   fields: WorkingField[],
   settings: SettingsModel,
-  gJOf: (l: LevelModel) => number | undefined,
+  gJOf: GJLookup,
   problems: Problem[],
 ): ResonanceResult {
   const result: ResonanceResult = {
@@ -95,7 +97,7 @@ function toJson(t: MagneticTransition): MagneticTransitionResult {
   return {
     lower_label: t.lower.low.text,
     upper_label: t.upper.low.text,
-    kind: t.kind === 'π' ? 'pi' : t.kind === 'σ+' ? 'sigma+' : t.kind === 'σ−' ? 'sigma-' : 'two-photon',
+    kind: polarizationName(t.kind),
     frequency_Hz: t.frequencyHz,
     df_dB_Hz_per_T: t.dfdB,
     d2f_dB2_Hz_per_T2: t.d2fdB2,

@@ -4,6 +4,7 @@
  */
 import type { Analysis } from '../eval/analyze';
 import { evaluateBeam } from '../eval/beamEvaluation';
+import { gJLookup } from '../eval/gJLookup';
 import { workingFields } from '../eval/evaluate';
 import type { BeamModel, LevelModel, SetupModel } from '../model/types';
 import type { WorkingField } from '../eval/levelEvaluation';
@@ -32,8 +33,7 @@ export function diagramFor(analysis: Analysis, req: DiagramRequest): DiagramAnsw
   const model = analysis.model;
   if (!model) return { ok: false, message: 'The file could not be read; see the Problems view.' };
   const theme: RenderTheme = { kind: req.theme };
-  const gJOf = (l: LevelModel): number | undefined =>
-    analysis.result?.levels.find((r) => r.species === l.species.name && r.level === l.name)?.g_J.used;
+  const gJOf = gJLookup(analysis.result?.levels ?? []);
   if (req.view === 'levels') {
     const level = req.level ?? levelAt(model, req.line);
     if (!level) return { ok: false, message: 'No level to draw: add a species with a level, e.g. `level ground: 2S1/2`.' };
@@ -45,7 +45,7 @@ export function diagramFor(analysis: Analysis, req: DiagramRequest): DiagramAnsw
   if (req.view === 'pattern') {
     const beam = req.beam ?? beamAt(model, req.line);
     if (!beam) return { ok: false, message: 'No beam to draw: add a `beam` block with level, source, slits, magnet and drift.' };
-    const v = patternView(beam.name, evaluateBeam(beam, gJOf));
+    const v = patternView(beam.name, evaluateBeam(beam, gJOf, false));
     if (!v) return { ok: false, message: `Beam '${beam.name}' cannot be computed yet; see the Problems view.` };
     return { ok: true, title: v.title, svg: renderPattern(v, theme), csv: patternCsv(v) };
   }

@@ -3,6 +3,7 @@
  * frequencies) to Hz, and the nuclear g-factor from the nuclear moment.
  */
 import { BOHR_MAGNETON, NUCLEAR_MAGNETON, SPEED_OF_LIGHT } from '../constants';
+import { nuclearGFromMoment as gFromMoment } from '../gFactors';
 import type { PublishedEnergyUnit } from './types';
 
 /** Hz per unit of each published energy unit (cm⁻¹ uses c in cm/s, exact). */
@@ -33,7 +34,7 @@ export const NUCLEAR_TO_BOHR_MAGNETON = NUCLEAR_MAGNETON / BOHR_MAGNETON;
  */
 export function nuclearGFromMoment(muOverMuN: number, twoI: number): number | undefined {
   if (!Number.isFinite(muOverMuN) || !Number.isInteger(twoI) || twoI <= 0) return undefined;
-  return -(muOverMuN * NUCLEAR_TO_BOHR_MAGNETON) / (twoI / 2);
+  return gFromMoment(muOverMuN, twoI);
 }
 
 /** Inverse of `nuclearGFromMoment`: μ_I/μ_N from g_I (μ_B units). */
