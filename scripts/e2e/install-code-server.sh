@@ -25,6 +25,9 @@ fi
 
 log() { echo "install-code-server: $*" >&2; }
 
+# The inner installs must not inherit the outer npm's settings (see clean-npm-env.sh).
+source "$(dirname "${BASH_SOURCE[0]}")/clean-npm-env.sh"
+
 # code-server's native modules (the kerberos addon) build against Debian's Kerberos headers.
 if ! dpkg -s libkrb5-dev >/dev/null 2>&1; then
   if [[ "$(id -u)" != 0 ]] || ! command -v apt-get >/dev/null; then
