@@ -38,7 +38,7 @@ describe('sublevel sweep', () => {
     [['--level', 'ground', '--to', '1 T', '--points', '0x10'], /decimal digits, got '0x10'/],
     [['--level', 'ground', '--to', '1e30 T'], /outside the fields Sublevel computes \(\|B\| up to 1e5 T\)/],
     [['--level', 'ground', '--to', '1 T', '--from', '-2e5 T'], /--from -2e5 T is outside/],
-    [['--level', 'ground', '--to', '1e400 T'], /outside the fields/],
+    [['--level', 'ground', '--to', '1e400 T'], /the number 1e400 is too large/],
     [['--to', '1 T'], /needs --level, one of: Rb87.ground, Rb87.p32/],
   ])('rejects %j with a usage error', (opts, message) => {
     const r = cli('sweep', RB, ...opts);

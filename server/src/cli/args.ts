@@ -41,9 +41,9 @@ function nodeOptions(spec: CommandSpec): NodeOptions {
   return out;
 }
 
-/** The option name in one of util.parseArgs's error messages (`'--to'`, `'-x'`, `'--to <value>'`). */
+/** The option name in one of util.parseArgs's error messages (`'--to'`, `'-x'`, `'--to <value>'`, `'-h, --help'`). */
 function optionIn(message: string): string {
-  return /'(-{1,2}[^' ]*)/.exec(message)?.[1] ?? 'an option';
+  return /'(?:-\w, )?(-{1,2}[^' ]*)/.exec(message)?.[1] ?? 'an option';
 }
 
 function translate(spec: CommandSpec, e: Error & { code?: string }): UsageError {

@@ -49,7 +49,7 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   const field = selectField(model, stringOption(args, 'field'));
   if (field) req.marker = field;
   if (view === 'pattern') {
-    if (model.beams.length === 0) throw new FileProblemError(file, [cliProblem('nothing-to-compute', 'the file has no beam to draw; add a `beam` block with level, source, slits, magnet and drift')]);
+    if (model.beams.length === 0) throw new FileProblemError(file, [cliProblem('nothing-to-compute', 'No beam to draw: add a `beam` block with level, source, slits, magnet and drift')]);
     req.beam = selectBeam(model, stringOption(args, 'beam'));
   }
   const line = stringOption(args, 'line');
