@@ -18,7 +18,7 @@ function fullDisk(room: number): CliFileSystem {
   let left = room;
   return {
     ...nodeFileSystem,
-    writeSync: ((fd: number, buf: Uint8Array, offset = 0, length = buf.length - offset) => {
+    writeSync: ((fd: number, buf: Uint8Array, offset: number, length: number) => {
       if (left <= 0) throw Object.assign(new Error('ENOSPC: no space left on device, write'), { code: 'ENOSPC' });
       const n = Math.min(left, length);
       left -= n;

@@ -177,3 +177,50 @@ describe('paths that cannot be read are problems of their own; the run goes on',
     expect(r.err).toBe(`${path.join(dir, 'a.sublevel')}:1:1 error file-unreadable cannot read it: input/output error (EIO)`);
   });
 });
+
+describe('limits of the search and the reader', () => {
+  let dir = '';
+  beforeAll(() => {
+    dir = mkdtempSync(path.join(tmpdir(), 'sublevel-limits-'));
+  });
+  afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+  it('a file over 16 MiB is not read (a sparse file, so the test is quick)', () => {
+    const big = path.join(dir, 'big.sublevel');
+    writeFileSync(big, '');
+    fs.truncateSync(big, 16 * 1024 * 1024 + 1);
+    const r = cli('check', big);
+    expect(r.code).toBe(1);
+    expect(r.out).toBe(`${big}:1:1 error file-too-large the file has 16777217 bytes, more than the 16777216 bytes (16 MiB) a setup file may have`);
+    rmSync(big);
+  });
+
+  it('folders nested deeper than 64 levels are reported, not searched', () => {
+    let deep = path.join(dir, 'nest');
+    const top = deep;
+    for (let i = 0; i < 65; i++) deep = path.join(deep, 'd');
+    mkdirSync(deep, { recursive: true });
+    writeFileSync(path.join(deep, 'x.sublevel'), BROKEN);
+    const r = cli('check', top);
+    expect(r.code).toBe(1);
+    expect(r.out.split(' ').slice(1, 3).join(' ')).toBe('error folder-too-deep');
+    expect(r.out).toContain('more than 64 folders deep; not searched');
+    expect(r.out.split('\n')).toHaveLength(1);
+  });
+
+  it('NUL and invalid UTF-8 in a checked file are diagnostics with line and column, in text and JSON', () => {
+    const bad = path.join(dir, 'bytes.sublevel');
+    writeFileSync(bad, Buffer.concat([Buffer.from(CLEAN + 'field b = 1 T # '), Buffer.from([0xe9]), Buffer.from(' \u0000\n')]));
+    const r = cli('check', bad);
+    expect(r.out.split('\n').map((l) => l.slice(bad.length + 1).split(' ').slice(0, 3).join(' '))).toEqual([
+      '4:17 error text-invalid-encoding',
+      '4:19 error text-nul-character',
+    ]);
+    expect(r.code).toBe(1);
+    const doc = JSON.parse(cli('eval', bad, '--format', 'json').out) as { diagnostics: { code: string; line: number; column: number }[] };
+    expect(doc.diagnostics.filter((d) => d.code.startsWith('text-')).map((d) => [d.code, d.line, d.column])).toEqual([
+      ['text-invalid-encoding', 4, 17],
+      ['text-nul-character', 4, 19],
+    ]);
+  });
+});
