@@ -35,3 +35,8 @@ export function reportErrors(file: string, a: Analysis, ctx: CliContext): number
   for (const p of errors) ctx.io.err(diagnosticLine(file, p));
   return errors.length;
 }
+
+/** Before a "cannot compute" problem: the file's errors, and the words that point to them. */
+export function listErrorsFirst(file: string, a: Analysis, ctx: CliContext): string {
+  return reportErrors(file, a, ctx) > 0 ? ' (the errors are listed above)' : '';
+}

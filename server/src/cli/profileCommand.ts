@@ -4,7 +4,7 @@ import { gJLookup } from '../eval/gJLookup';
 import { patternCsv } from '../render';
 import { patternView } from '../views/patternView';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
-import { analyzeFile, reportErrors } from './analyzeFile';
+import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
 import { cliProblem, FileProblemError } from './fileProblems';
 import type { CliContext } from './io';
 import { writeOutputFile } from './output';
@@ -34,7 +34,7 @@ export function runProfile(args: ParsedArgs, ctx: CliContext): number {
   const beam = selectBeam(model, wanted);
   const v = patternView(beam.name, evaluateBeam(beam, gJLookup(analysis.result?.levels ?? []), false), false);
   if (!v) {
-    const listed = reportErrors(file, analysis, ctx) > 0 ? ' (the errors are listed above)' : '';
+    const listed = listErrorsFirst(file, analysis, ctx);
     throw new FileProblemError(file, [cliProblem('nothing-to-compute', `beam '${beam.name}' cannot be computed: it lacks a setting or has an error${listed}`, beam.nameRange)]);
   }
   const csv = patternCsv(v);

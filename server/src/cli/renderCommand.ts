@@ -5,7 +5,7 @@
 import { suggestNames } from '../format/didYouMean';
 import { diagramFor, type DiagramRequest, type DiagramView } from '../views/diagram';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
-import { analyzeFile, reportErrors } from './analyzeFile';
+import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
 import { cliProblem, FileProblemError } from './fileProblems';
 import type { CliContext } from './io';
 import { writeOutputFile } from './output';
@@ -63,7 +63,7 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   }
   const d = diagramFor(analysis, req);
   if (!d.ok) {
-    const listed = reportErrors(file, analysis, ctx) > 0 ? ' (the errors are listed above)' : '';
+    const listed = listErrorsFirst(file, analysis, ctx);
     throw new FileProblemError(file, [cliProblem('nothing-to-compute', `${commandLineWording(d.message)}${listed}`)]);
   }
   const text = format === 'svg' ? d.svg : d.csv;

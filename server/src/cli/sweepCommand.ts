@@ -7,7 +7,7 @@ import { suggestNames } from '../format/didYouMean';
 import { sweepLevel, type SweepResult } from '../physics/engine';
 import type { LevelModel, SetupModel } from '../model/types';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
-import { analyzeFile, reportErrors } from './analyzeFile';
+import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
 import { jsonText } from './escape';
 import { readFieldOption, MAX_CLI_FIELD_T } from './fieldOption';
 import { cliProblem, FileProblemError } from './fileProblems';
@@ -48,17 +48,17 @@ export function runSweep(args: ParsedArgs, ctx: CliContext): number {
   const level = findLevel(file, analysis.model, stringOption(args, 'level'));
   const gJ = analysis.result.levels.find((l) => l.species === level.species.name && l.level === level.name)?.g_J.used;
   const spec = engineSpec(level, gJ, analysis.model.settings);
+  // Where the level is written, when it is in this file (a used file's ranges are in that file).
+  const at = level.species.origin ? undefined : level.nameRange;
   if (!spec) {
-    const listed = reportErrors(file, analysis, ctx) > 0 ? ' (the errors are listed above)' : '';
-    const at = level.species.origin ? undefined : level.nameRange;
+    const listed = listErrorsFirst(file, analysis, ctx);
     throw new FileProblemError(file, [cliProblem('nothing-to-compute', `level '${level.name}' has problems to fix before it can be swept${listed}`, at)]);
   }
 
   const sweep = sweepLevel(spec, fromT, toT, points);
   const errors = sweep.issues.filter((i) => i.severity === 'error');
   if (errors.length > 0) {
-    for (const e of errors) ctx.io.err(`sublevel: ${e.message}`);
-    return 1;
+    throw new FileProblemError(file, errors.map((e) => ({ ...cliProblem('nothing-to-compute', e.message, at), code: e.code })));
   }
   const text = format === 'csv' ? sweepCsv(sweep) : jsonText(sweepJson(file, level, sweep), 1);
   if (out) {
