@@ -152,6 +152,18 @@ describe('paths that cannot be read are problems of their own; the run goes on',
     ]);
   });
 
+  it('a subfolder whose status cannot be read (EACCES on stat) is reported, not skipped', () => {
+    const noStat: CliFileSystem = {
+      ...nodeFileSystem,
+      statSync: ((p: fs.PathLike, o?: unknown) => {
+        if (String(p).endsWith('locked')) throw denied('stat', String(p));
+        return (nodeFileSystem.statSync as (p: fs.PathLike, o?: unknown) => unknown)(p, o);
+      }) as CliFileSystem['statSync'],
+    };
+    const r = cliOn(noStat, 'check', dir);
+    expect(lines(r.out, dir)).toContain('locked:1:1 error folder-unreadable cannot search this folder: permission denied (EACCES)');
+  });
+
   it('a folder named *.sublevel is searched, not read; named as a file for eval it is a file problem (exit 1)', () => {
     const r = cli('eval', path.join(dir, 'folder.sublevel'));
     expect(r.code).toBe(1);

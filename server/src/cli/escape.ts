@@ -5,12 +5,10 @@
  * is. Every text the CLI prints or writes passes through `escapeControls`; JSON goes through
  * `jsonText`, whose escapes keep it valid JSON.
  */
+import { INVISIBLE_CLASS } from '../format/controlCharacters';
 
-/**
- * C0 controls except tab and line feed, DEL, C1 controls, the bidi embedding/override/isolate
- * marks (and the Arabic letter mark), and the Unicode line/paragraph separators.
- */
-const UNSAFE = /[\u0000-\u0008\u000b-\u001f\u007f-\u009f\u061c\u200e\u200f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g;
+/** The characters the parser reports as invisible, and CR (a bare CR returns the cursor to the line's start). */
+const UNSAFE = new RegExp(`[${INVISIBLE_CLASS}\\r]`, 'g');
 
 function hex(code: number, width: number): string {
   return code.toString(16).padStart(width, '0');

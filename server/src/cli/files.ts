@@ -32,18 +32,25 @@ const keyOf = (s: { dev: number; ino: number }): string => `${s.dev}:${s.ino}`;
 
 export function findSetupFiles(inputs: string[], fsys: CliFileSystem): FoundPath[] {
   const search: Search = { fsys, out: [], seen: new Map() };
-  for (const input of inputs) visit(search, input, 0, true);
+  for (const input of inputs) visit(search, input, 0, true, false);
   return search.out;
 }
 
-/** One path: a folder to search, a file to check, or a problem. `named`: given on the command line. */
-function visit(s: Search, p: string, depth: number, named: boolean): void {
+/**
+ * One path: a folder to search, a file to check, or a problem. `named`: given on the command
+ * line; `folder`: listed as a folder by its parent.
+ */
+function visit(s: Search, p: string, depth: number, named: boolean, folder: boolean): void {
   const isSetupName = named || p.endsWith(SETUP_EXTENSION);
   let stat;
   try {
     stat = s.fsys.statSync(p);
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
+    if (folder) {
+      s.out.push({ path: p, problem: cliProblem('folder-unreadable', `cannot search this folder: ${reasonOf(e)}`) });
+      return;
+    }
     if (!isSetupName) return; // a broken link that is not named as a setup is none of ours
     if (code === 'ENOENT' || code === 'ELOOP') {
       const isLink = isSymbolicLink(s, p);
@@ -78,18 +85,18 @@ function searchFolder(s: Search, dir: string, depth: number): void {
     s.out.push({ path: dir, problem: cliProblem('folder-too-deep', `more than ${MAX_FOLDER_DEPTH} folders deep; not searched`) });
     return;
   }
-  let entries: { name: string; link: boolean }[];
+  let entries: { name: string; link: boolean; folder: boolean }[];
   try {
-    entries = s.fsys.readdirSync(dir, { withFileTypes: true }).map((e) => ({ name: String(e.name), link: e.isSymbolicLink() }));
+    entries = s.fsys.readdirSync(dir, { withFileTypes: true }).map((e) => ({ name: String(e.name), link: e.isSymbolicLink(), folder: e.isDirectory() }));
   } catch (e) {
     s.out.push({ path: dir, problem: cliProblem('folder-unreadable', `cannot search this folder: ${reasonOf(e)}`) });
     return;
   }
   // Links last, so a file is checked under its own name and a link to it in the same folder is the repeat.
   entries.sort((a, b) => Number(a.link) - Number(b.link) || a.name.localeCompare(b.name));
-  for (const { name } of entries) {
+  for (const { name, folder } of entries) {
     if (name === 'node_modules' || name.startsWith('.')) continue;
-    visit(s, path.join(dir, name), depth + 1, false);
+    visit(s, path.join(dir, name), depth + 1, false, folder);
   }
 }
 

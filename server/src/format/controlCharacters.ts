@@ -12,8 +12,15 @@ const CONTROL = 2;
 const BIDI = 3;
 const CODES = ['', 'text-nul-character', 'text-control-character', 'text-bidi-control'] as const;
 
+/**
+ * Invisible characters that act on a terminal or on display order, as a regular-expression class
+ * body: C0 controls except tab, LF and CR; DEL and C1; U+2028/U+2029; the bidi controls. The CLI
+ * escapes the same set (and CR) in what it prints.
+ */
+export const INVISIBLE_CLASS = '\\u0000-\\u0008\\u000b\\u000c\\u000e-\\u001f\\u007f-\\u009f\\u2028\\u2029\\u061c\\u200e\\u200f\\u202a-\\u202e\\u2066-\\u2069';
+
 /** The same set as kindOf, for finding the first one fast. */
-const SUSPECT = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f\u061c\u200e\u200f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g;
+const SUSPECT = new RegExp(`[${INVISIBLE_CLASS}]`, 'g');
 
 /** 0 for an ordinary character, else the kind; a plain loop, since a binary file can hold millions of them. */
 function kindOf(c: number): number {
