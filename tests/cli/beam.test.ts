@@ -101,7 +101,9 @@ describe('sublevel profile and render', () => {
     const bad = cli('render', 'examples/lithium-beam.sublevel', '--level', 'groud');
     expect(bad.code).toBe(2);
     expect(bad.err).toContain("did you mean 'ground'");
-    expect(cli('render', 'examples/rubidium-bias.sublevel', '--view', 'pattern').err).toContain('the file has no beam');
+    const none = cli('render', 'examples/rubidium-bias.sublevel', '--view', 'pattern');
+    expect(none.code).toBe(1);
+    expect(none.err).toContain('examples/rubidium-bias.sublevel:1:1 error nothing-to-compute No beam to draw');
   });
 
   it('the demo beam file states the cautions in its report', () => {

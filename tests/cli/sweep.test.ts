@@ -33,7 +33,12 @@ describe('sublevel sweep', () => {
     [['--level', 'ground', '--to', '0.1 T/m'], /--to needs/],
     [['--level', 'ground', '--to', '0 T'], /same field/],
     [['--level', 'ground', '--to', '1 T', '--points', '1'], /at least 2/],
-    [['--level', 'ground', '--to', '1 T', '--points', '1e9'], /more than/],
+    [['--level', 'ground', '--to', '1 T', '--points', '1000000000'], /more than the 200001/],
+    [['--level', 'ground', '--to', '1 T', '--points', '1e3'], /decimal digits, got '1e3'/],
+    [['--level', 'ground', '--to', '1 T', '--points', '0x10'], /decimal digits, got '0x10'/],
+    [['--level', 'ground', '--to', '1e30 T'], /outside the fields Sublevel computes \(\|B\| up to 1e5 T\)/],
+    [['--level', 'ground', '--to', '1 T', '--from', '-2e5 T'], /--from -2e5 T is outside/],
+    [['--level', 'ground', '--to', '1e400 T'], /the number 1e400 is too large/],
     [['--to', '1 T'], /needs --level, one of: Rb87.ground, Rb87.p32/],
   ])('rejects %j with a usage error', (opts, message) => {
     const r = cli('sweep', RB, ...opts);

@@ -2,16 +2,34 @@
  * `sublevel check <files or folders…>`: diagnostics for CI. Exit 1 when any error is found.
  * Each file is checked with the files its `use` statements name; a used file's errors are
  * reported once, in that file: when it is checked in the same run, the warning at the `use`
- * line that summarises them is left out.
+ * line that summarises them is left out. A path that cannot be read or searched is a problem
+ * of that path, and the run goes on.
  */
 import * as path from 'path';
 import type { Problem } from '../format/ast';
 import { analyze } from '../eval/analyze';
 import { toDiagnosticResult } from '../eval/evaluate';
 import { diskSources } from '../service/workspaceFiles';
-import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
-import { collectSetupFiles, readSetupFile } from './files';
-import type { CliIO } from './io';
+import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
+import { withReaderProblems } from './analyzeFile';
+import { jsonText } from './escape';
+import { diagnosticLine } from './fileProblems';
+import { findSetupFiles } from './files';
+import type { CliContext } from './io';
+import { readSetup } from './readSetup';
+
+const FORMATS = ['text', 'json'] as const;
+
+export const checkSpec: CommandSpec = {
+  name: 'check',
+  operands: '<files or folders...>',
+  summary: 'report every problem in setup files (folders are searched recursively for *.sublevel); exit 1 if any error',
+  options: { format: { value: 'FORMAT', choices: FORMATS, help: 'text: one file:line:col line per problem (default); json: one document' } },
+  notes: [
+    'Symbolic links to files and folders are followed; each file and folder is visited once (loops end with a note).',
+    'A path that cannot be read or searched is reported as an error of that path; the other paths are still checked.',
+  ],
+};
 
 /** A `use-has-errors` warning about a file that this run reports itself. */
 function reportedElsewhere(p: Problem, checked: ReadonlySet<string>): boolean {
@@ -19,27 +37,34 @@ function reportedElsewhere(p: Problem, checked: ReadonlySet<string>): boolean {
   return p.code === 'use-has-errors' && typeof location === 'string' && checked.has(path.resolve(location));
 }
 
-export function runCheck(args: ParsedArgs, io: CliIO): number {
-  rejectUnknownOptions(args, ['format']);
-  const format = stringOption(args, 'format', ['text', 'json']) ?? 'text';
+function problemsOf(file: string, ctx: CliContext, checked: ReadonlySet<string>): { problems: Problem[]; read: boolean } {
+  const read = readSetup(file, ctx.fsys);
+  if (!read.ok) return { problems: [read.problem], read: false };
+  const a = withReaderProblems(analyze(read.text, diskSources(file)), read.problems);
+  return { problems: a.problems.filter((p) => !reportedElsewhere(p, checked)), read: true };
+}
+
+export function runCheck(args: ParsedArgs, ctx: CliContext): number {
+  const format = stringOption(args, 'format', FORMATS) ?? 'text';
   if (args.positionals.length === 0) throw new UsageError('check needs at least one file or folder');
-  const files = collectSetupFiles(args.positionals);
-  const checked = new Set(files.map((f) => path.resolve(f)));
+  const found = findSetupFiles(args.positionals, ctx.fsys);
+  const checked = new Set(found.filter((f) => !f.problem).map((f) => path.resolve(f.path)));
   let errors = 0;
+  let files = 0;
   const report: { file: string; diagnostics: ReturnType<typeof toDiagnosticResult>[] }[] = [];
-  for (const file of files) {
-    const problems = analyze(readSetupFile(file), diskSources(file)).problems.filter((p) => !reportedElsewhere(p, checked));
+  for (const f of found) {
+    const { problems, read } = f.problem ? { problems: [f.problem], read: false } : problemsOf(f.path, ctx, checked);
+    if (read) files++;
     errors += problems.filter((p) => p.severity === 'error').length;
-    const diagnostics = problems.map(toDiagnosticResult);
-    report.push({ file, diagnostics });
-    if (format === 'text') {
-      for (const d of diagnostics) io.out(`${file}:${d.line}:${d.column} ${d.severity} ${d.code} ${d.message}`);
-    }
+    report.push({ file: f.path, diagnostics: problems.map(toDiagnosticResult) });
+    if (format === 'text') for (const p of problems) ctx.io.out(diagnosticLine(f.path, p));
   }
-  if (format === 'json') io.out(JSON.stringify({ format: 'sublevel-check', version: 1, files: report }, null, 2));
+  if (format === 'json') ctx.io.out(jsonText({ format: 'sublevel-check', version: 1, files: report }));
   else {
     const total = report.reduce((n, r) => n + r.diagnostics.length, 0);
-    io.err(`${files.length} file${files.length === 1 ? '' : 's'} checked: ${errors} error${errors === 1 ? '' : 's'}, ${total - errors} other finding${total - errors === 1 ? '' : 's'}`);
+    const unread = report.length - files;
+    const notRead = unread > 0 ? ` (${unread} other path${unread === 1 ? '' : 's'} not read)` : '';
+    ctx.io.err(`${files} file${files === 1 ? '' : 's'} checked${notRead}: ${errors} error${errors === 1 ? '' : 's'}, ${total - errors} other finding${total - errors === 1 ? '' : 's'}`);
   }
   return errors > 0 ? 1 : 0;
 }

@@ -1,23 +1,30 @@
 /** `sublevel eval <file>`: every computed quantity, as a readable report or the versioned JSON document. */
-import { analyze } from '../eval/analyze';
-import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
-import { readSetupFile } from './files';
-import { diskSources } from '../service/workspaceFiles';
-import type { CliIO } from './io';
+import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
+import { analyzeFile, errorCount } from './analyzeFile';
+import { jsonText } from './escape';
+import { diagnosticLine } from './fileProblems';
+import type { CliContext } from './io';
 import { textReport } from './textReport';
 
-export function runEval(args: ParsedArgs, io: CliIO): number {
-  rejectUnknownOptions(args, ['format']);
-  const format = stringOption(args, 'format', ['text', 'json']) ?? 'text';
+const FORMATS = ['text', 'json'] as const;
+
+export const evalSpec: CommandSpec = {
+  name: 'eval',
+  operands: '<file>',
+  summary: 'every computed quantity of one setup file: g-factors, sublevels, beams, lines, resonances',
+  options: { format: { value: 'FORMAT', choices: FORMATS, help: 'text: a readable report (default); json: the versioned document (docs/schema)' } },
+};
+
+export function runEval(args: ParsedArgs, ctx: CliContext): number {
+  const format = stringOption(args, 'format', FORMATS) ?? 'text';
   if (args.positionals.length !== 1) throw new UsageError('eval needs exactly one setup file');
   const file = args.positionals[0]!;
-  const analysis = analyze(readSetupFile(file), diskSources(file));
-  const errors = analysis.problems.filter((p) => p.severity === 'error').length;
+  const analysis = analyzeFile(file, ctx);
   if (!analysis.result) {
-    for (const p of analysis.problems) io.err(`${file}:${p.range.start.line + 1}:${p.range.start.character + 1} ${p.severity} ${p.code} ${p.message}`);
+    for (const p of analysis.problems) ctx.io.err(diagnosticLine(file, p));
     return 1;
   }
-  if (format === 'json') io.out(JSON.stringify(analysis.result, null, 2));
-  else for (const line of textReport(file, analysis.result)) io.out(line);
-  return errors > 0 ? 1 : 0;
+  if (format === 'json') ctx.io.out(jsonText(analysis.result));
+  else for (const line of textReport(file, analysis.result)) ctx.io.out(line);
+  return errorCount(analysis) > 0 ? 1 : 0;
 }

@@ -1,54 +1,90 @@
 /**
- * The `sublevel` command. Exit codes: 0 clean, 1 when a setup has errors, 2 on usage errors.
+ * The `sublevel` command. Exit codes (the same for every command, see EXIT_CODES_TEXT):
+ * 0 no errors, 1 an error in a setup file or a file that cannot be read, 2 usage error or
+ * --out not written, 3 internal error.
  */
-import { parseArgs, UsageError } from './args';
-import { runCheck } from './checkCommand';
-import { runEval } from './evalCommand';
-import { runProfile } from './profileCommand';
-import { runRender } from './renderCommand';
-import { runSweep } from './sweepCommand';
-import { type CliIO, processIO } from './io';
+import { version } from '../../../package.json';
+import { type CommandSpec, type ParsedArgs, parseCommandArgs, UsageError } from './args';
+import { checkSpec, runCheck } from './checkCommand';
+import { evalSpec, runEval } from './evalCommand';
+import { diagnosticLine, FileProblemError } from './fileProblems';
+import type { CliFileSystem } from './fileSystem';
+import { commandHelp, overviewHelp, usageHint } from './help';
+import { type CliContext, cliContext, type CliIO, processIO } from './io';
+import { OutputError } from './output';
+import { profileSpec, runProfile } from './profileCommand';
+import { renderSpec, runRender } from './renderCommand';
+import { runSweep, sweepSpec } from './sweepCommand';
+import { suggestNames } from '../format/didYouMean';
 
-const USAGE = `usage: sublevel <command> [options]
+interface Command {
+  spec: CommandSpec;
+  run(args: ParsedArgs, ctx: CliContext): number;
+}
 
-commands:
-  check <files or folders...> [--format text|json]   report problems; exit 1 if any error
-  eval <file> [--format text|json]                    every computed quantity
-  sweep <file> --level NAME --to FIELD [--from FIELD] [--points N] [--format csv|json] [--out FILE]
-                                                      exact sublevel energies over a field range
-  profile <file> [--beam NAME] [--out FILE.csv]       the predicted detector pattern (position, total, each sublevel)
-  render <file> [--view levels|pattern|lines] [--level NAME] [--field NAME] [--beam NAME] [--line NAME]
-         [--format svg|csv] [--out FILE]              a diagram as SVG, or its numbers as CSV
-  help                                                this text`;
+const COMMANDS: readonly Command[] = [
+  { spec: checkSpec, run: runCheck },
+  { spec: evalSpec, run: runEval },
+  { spec: sweepSpec, run: runSweep },
+  { spec: profileSpec, run: runProfile },
+  { spec: renderSpec, run: runRender },
+];
 
-export function runCli(argv: string[], io: CliIO): number {
+const SPECS = COMMANDS.map((c) => c.spec);
+
+function findCommand(name: string): Command {
+  const c = COMMANDS.find((x) => x.spec.name === name);
+  if (c) return c;
+  const hint = suggestNames(name, [...SPECS.map((s) => s.name), 'help']);
+  throw new UsageError(`unknown command '${name}'${hint.length ? ` — did you mean '${hint[0]}'?` : ''}`);
+}
+
+function runWords(argv: string[], ctx: CliContext): number {
+  const [first, ...rest] = argv;
+  if (first === undefined) {
+    ctx.io.err(overviewHelp(SPECS));
+    return 2;
+  }
+  if (first === '--version' || first === '-V') {
+    if (rest.length > 0) throw new UsageError(`${first} takes nothing after it`);
+    ctx.io.out(`sublevel ${version}`);
+    return 0;
+  }
+  if (first === '--help' || first === '-h' || first === 'help') {
+    if (rest.length > 1) throw new UsageError('help takes at most one command name');
+    ctx.io.out(rest[0] === undefined ? overviewHelp(SPECS) : commandHelp(findCommand(rest[0]).spec));
+    return 0;
+  }
+  if (first.startsWith('-')) throw new UsageError(`a command comes first, before options such as ${first}`);
+  const command = findCommand(first);
+  const args = parseCommandArgs(command.spec, rest);
+  if (args.options.has('help')) {
+    ctx.io.out(commandHelp(command.spec));
+    return 0;
+  }
+  return command.run(args, ctx);
+}
+
+export function runCli(argv: string[], io: CliIO, fsys?: CliFileSystem): number {
+  const ctx = cliContext(io, fsys);
   try {
-    const args = parseArgs(argv);
-    switch (args.command) {
-      case 'check':
-        return runCheck(args, io);
-      case 'eval':
-        return runEval(args, io);
-      case 'sweep':
-        return runSweep(args, io);
-      case 'profile':
-        return runProfile(args, io);
-      case 'render':
-        return runRender(args, io);
-      case 'help':
-      case undefined:
-        io.out(USAGE);
-        return args.command === 'help' ? 0 : 2;
-      default:
-        throw new UsageError(`unknown command '${args.command}'`);
-    }
+    return runWords(argv, ctx);
   } catch (e) {
+    if (e instanceof FileProblemError) {
+      for (const p of e.problems) ctx.io.err(diagnosticLine(e.file, p));
+      return 1;
+    }
     if (e instanceof UsageError) {
-      io.err(`sublevel: ${e.message}`);
-      io.err(USAGE);
+      ctx.io.err(`sublevel: ${e.message}`);
+      const name = argv[0];
+      ctx.io.err(usageHint(name !== undefined && COMMANDS.some((c) => c.spec.name === name) ? name : undefined));
       return 2;
     }
-    io.err(`sublevel: internal error: ${(e as Error).stack ?? String(e)}`);
+    if (e instanceof OutputError) {
+      ctx.io.err(`sublevel: ${e.message}`);
+      return 2;
+    }
+    ctx.io.err(`sublevel: internal error (please report it with the command and the file): ${(e as Error).stack ?? String(e)}`);
     return 3;
   }
 }

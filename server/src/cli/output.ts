@@ -1,11 +1,64 @@
-/** Writing a command's result to --out, with a plain message instead of a stack trace when it fails. */
-import * as fs from 'fs';
-import { UsageError } from './args';
+/**
+ * Writing a command's result to --out without ever leaving a cut-off file: the text goes to a
+ * temporary file in the same folder, is flushed to the disk (fsync), and then renamed over the
+ * target in one step. If anything fails (a full disk, a read-only folder) the temporary file is
+ * removed, the old file is left as it was, and the message says so.
+ */
+import { randomBytes } from 'crypto';
+import * as path from 'path';
+import { escapeControls } from './escape';
+import { type CliFileSystem, reasonOf } from './fileSystem';
 
-export function writeOutputFile(path: string, text: string): void {
+/** --out could not be written: exit 2 with one line, without the usage text. */
+export class OutputError extends Error {}
+
+export function writeOutputFile(target: string, text: string, fsys: CliFileSystem): void {
+  let existing: { mode: number } | undefined;
+  let final = target;
   try {
-    fs.writeFileSync(path, text);
+    const stat = fsys.statSync(target);
+    if (stat.isDirectory()) throw new OutputError(`cannot write ${target}: it is a folder`);
+    existing = { mode: stat.mode & 0o7777 };
+    // Through a symbolic link, replace the file it points to, not the link.
+    final = fsys.realpathSync(target);
   } catch (e) {
-    throw new UsageError(`cannot write ${path}: ${(e as Error).message}`);
+    if (e instanceof OutputError) throw e;
+    // No such file yet (or not visible): it is created.
+  }
+  const tmp = path.join(path.dirname(final), `.${path.basename(final)}.${process.pid}-${randomBytes(4).toString('hex')}.tmp`);
+  let fd: number | undefined;
+  try {
+    fd = fsys.openSync(tmp, 'wx', existing?.mode ?? 0o666);
+    const bytes = Buffer.from(escapeControls(text), 'utf8');
+    for (let done = 0; done < bytes.length; ) done += fsys.writeSync(fd, bytes, done, bytes.length - done);
+    fsys.fsyncSync(fd);
+    fsys.closeSync(fd);
+    fd = undefined;
+    fsys.renameSync(tmp, final);
+  } catch (e) {
+    if (fd !== undefined) ignoreFailure(() => fsys.closeSync(fd!));
+    ignoreFailure(() => fsys.unlinkSync(tmp));
+    throw new OutputError(`cannot write ${target}: ${reasonOf(e)}; ${existing ? 'the old file is unchanged' : 'no file was written'}`);
+  }
+  syncFolder(path.dirname(final), fsys);
+}
+
+/** Makes the rename itself durable where the platform allows it; a failure here loses no data. */
+function syncFolder(dir: string, fsys: CliFileSystem): void {
+  ignoreFailure(() => {
+    const fd = fsys.openSync(dir, 'r');
+    try {
+      fsys.fsyncSync(fd);
+    } finally {
+      fsys.closeSync(fd);
+    }
+  });
+}
+
+function ignoreFailure(f: () => void): void {
+  try {
+    f();
+  } catch {
+    // see the callers
   }
 }

@@ -1,30 +1,46 @@
 /** `sublevel profile <file> [--beam NAME] [--out FILE.csv]`: the predicted detector pattern as CSV. */
-import { writeOutputFile } from './output';
-import { analyze } from '../eval/analyze';
 import { evaluateBeam } from '../eval/beamEvaluation';
+import { gJLookup } from '../eval/gJLookup';
 import { patternCsv } from '../render';
 import { patternView } from '../views/patternView';
-import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
-import { readSetupFile } from './files';
-import { diskSources } from '../service/workspaceFiles';
-import type { CliIO } from './io';
+import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
+import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
+import { cliProblem, FileProblemError } from './fileProblems';
+import type { CliContext } from './io';
+import { writeOutputFile } from './output';
 import { selectBeam } from './selectors';
-import { gJLookup } from '../eval/gJLookup';
 
-export function runProfile(args: ParsedArgs, io: CliIO): number {
-  rejectUnknownOptions(args, ['beam', 'out']);
+export const profileSpec: CommandSpec = {
+  name: 'profile',
+  operands: '<file>',
+  summary: 'the predicted detector pattern as CSV: position, total, one column per sublevel',
+  options: {
+    beam: { value: 'NAME', help: 'the beam, when the file has more than one' },
+    out: { value: 'FILE', help: 'write the CSV to FILE (atomically: the old file stays if writing fails) instead of stdout' },
+  },
+};
+
+export function runProfile(args: ParsedArgs, ctx: CliContext): number {
   if (args.positionals.length !== 1) throw new UsageError('profile needs exactly one setup file');
   const file = args.positionals[0]!;
-  const analysis = analyze(readSetupFile(file), diskSources(file));
-  if (!analysis.model) throw new UsageError(`${file} could not be read`);
-  const beam = selectBeam(analysis.model, stringOption(args, 'beam'));
-  const v = patternView(beam.name, evaluateBeam(beam, gJLookup(analysis.result?.levels ?? []), false), false);
-  if (!v) throw new UsageError(`beam '${beam.name}' cannot be computed yet (run: sublevel check ${file})`);
-  const csv = patternCsv(v);
+  const wanted = stringOption(args, 'beam');
   const out = stringOption(args, 'out');
+  const analysis = analyzeFile(file, ctx);
+  const model = analysis.model;
+  if (!model) throw new FileProblemError(file, analysis.problems);
+  if (model.beams.length === 0) {
+    throw new FileProblemError(file, [cliProblem('nothing-to-compute', 'the file has no beam; profile needs a `beam` block with level, source, slits, magnet and drift')]);
+  }
+  const beam = selectBeam(model, wanted);
+  const v = patternView(beam.name, evaluateBeam(beam, gJLookup(analysis.result?.levels ?? []), false), false);
+  if (!v) {
+    const listed = listErrorsFirst(file, analysis, ctx);
+    throw new FileProblemError(file, [cliProblem('nothing-to-compute', `beam '${beam.name}' cannot be computed: it lacks a setting or has an error${listed}`, beam.nameRange)]);
+  }
+  const csv = patternCsv(v);
   if (out) {
-    writeOutputFile(out, csv);
-    io.err(`wrote the detector pattern (${v.positionsM.length} positions) to ${out}`);
-  } else io.out(csv.trimEnd());
-  return 0;
+    writeOutputFile(out, csv, ctx.fsys);
+    ctx.io.err(`wrote the detector pattern (${v.positionsM.length} positions) to ${out}`);
+  } else ctx.io.out(csv.trimEnd());
+  return reportErrors(file, analysis, ctx) > 0 ? 1 : 0;
 }

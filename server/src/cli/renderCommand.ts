@@ -2,33 +2,56 @@
  * `sublevel render <file> [--view levels|pattern|lines] [--level NAME] [--field NAME] [--beam NAME] [--line NAME] [--format svg|csv] [--out FILE]`:
  * the same diagrams the editor panel shows, as standalone SVG for reports (light palette), or the numbers behind them as CSV.
  */
-import { analyze } from '../eval/analyze';
 import { suggestNames } from '../format/didYouMean';
 import { diagramFor, type DiagramRequest, type DiagramView } from '../views/diagram';
-import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
-import { readSetupFile } from './files';
-import { diskSources } from '../service/workspaceFiles';
-import type { CliIO } from './io';
+import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
+import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
+import { cliProblem, FileProblemError } from './fileProblems';
+import type { CliContext } from './io';
 import { writeOutputFile } from './output';
 import { selectBeam, selectField, selectLevel } from './selectors';
 
 export const RENDER_VIEWS = ['levels', 'pattern', 'lines'] as const;
+const FORMATS = ['svg', 'csv'] as const;
 
-export function runRender(args: ParsedArgs, io: CliIO): number {
-  rejectUnknownOptions(args, ['view', 'level', 'field', 'beam', 'line', 'format', 'out']);
+export const renderSpec: CommandSpec = {
+  name: 'render',
+  operands: '<file>',
+  summary: 'a diagram as SVG (light palette, for reports), or the numbers behind it as CSV',
+  options: {
+    view: { value: 'VIEW', choices: RENDER_VIEWS, help: 'levels: sublevel energies against field (default); pattern: detector pattern; lines: line components' },
+    level: { value: 'NAME', help: 'the level to draw (levels view); default: the first beam\'s level, else the first level' },
+    field: { value: 'NAME', help: 'the field or magnet to mark; default: the first one' },
+    beam: { value: 'NAME', help: 'the beam (pattern view), when the file has more than one' },
+    line: { value: 'NAME', help: 'the line (lines view); default: the first one' },
+    format: { value: 'FORMAT', choices: FORMATS, help: 'svg (default) or csv' },
+    out: { value: 'FILE', help: 'write to FILE (atomically: the old file stays if writing fails) instead of stdout' },
+  },
+};
+
+/** The panel's wording points at the editor; on the command line the file's errors are printed instead. */
+function commandLineWording(message: string): string {
+  return message.replace(/;? ?see the Problems view\.?$/, '').replace(/\.$/, '');
+}
+
+export function runRender(args: ParsedArgs, ctx: CliContext): number {
   if (args.positionals.length !== 1) throw new UsageError('render needs exactly one setup file');
   const file = args.positionals[0]!;
   const view = (stringOption(args, 'view', RENDER_VIEWS) ?? 'levels') as DiagramView;
-  const format = stringOption(args, 'format', ['svg', 'csv']) ?? 'svg';
-  const analysis = analyze(readSetupFile(file), diskSources(file));
+  const format = stringOption(args, 'format', FORMATS) ?? 'svg';
+  const out = stringOption(args, 'out');
+  const analysis = analyzeFile(file, ctx);
   const model = analysis.model;
-  if (!model) throw new UsageError(`${file} could not be read`);
+  if (!model) throw new FileProblemError(file, analysis.problems);
   const req: DiagramRequest = { view, theme: 'export' };
   const level = stringOption(args, 'level');
   if (level !== undefined) req.level = selectLevel(model, level);
   const field = selectField(model, stringOption(args, 'field'));
   if (field) req.marker = field;
-  if (view === 'pattern') req.beam = selectBeam(model, stringOption(args, 'beam'));
+  if (view === 'pattern') {
+    if (model.beams.length === 0) throw new FileProblemError(file, [cliProblem('nothing-to-compute', 'No beam to draw: add a `beam` block with level, source, slits, magnet and drift')]);
+    req.beam = selectBeam(model, stringOption(args, 'beam'));
+  }
   const line = stringOption(args, 'line');
   if (line !== undefined) {
     const names = model.lines.map((l) => l.name);
@@ -39,12 +62,14 @@ export function runRender(args: ParsedArgs, io: CliIO): number {
     req.lineName = line;
   }
   const d = diagramFor(analysis, req);
-  if (!d.ok) throw new UsageError(d.message);
+  if (!d.ok) {
+    const listed = listErrorsFirst(file, analysis, ctx);
+    throw new FileProblemError(file, [cliProblem('nothing-to-compute', `${commandLineWording(d.message)}${listed}`)]);
+  }
   const text = format === 'svg' ? d.svg : d.csv;
-  const out = stringOption(args, 'out');
   if (out) {
-    writeOutputFile(out, text);
-    io.err(`wrote the ${view} diagram${format === 'csv' ? ' data' : ''} to ${out}`);
-  } else io.out(text);
-  return 0;
+    writeOutputFile(out, text, ctx.fsys);
+    ctx.io.err(`wrote the ${view} diagram${format === 'csv' ? ' data' : ''} to ${out}`);
+  } else ctx.io.out(text);
+  return reportErrors(file, analysis, ctx) > 0 ? 1 : 0;
 }

@@ -2,51 +2,70 @@
  * `sublevel sweep <file> --level NAME --from 0 --to 0.1T --points 2001 [--format csv|json] [--out FILE]`:
  * exact sublevel energies of one level over a field range, for plots and analysis code.
  */
-import { writeOutputFile } from './output';
-import { analyze } from '../eval/analyze';
 import { engineSpec } from '../eval/levelSpec';
-import { readQuantityArgument } from '../format/quantityArgument';
 import { suggestNames } from '../format/didYouMean';
 import { sweepLevel, type SweepResult } from '../physics/engine';
 import type { LevelModel, SetupModel } from '../model/types';
-import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
-import { readSetupFile } from './files';
-import { diskSources } from '../service/workspaceFiles';
-import type { CliIO } from './io';
+import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
+import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
+import { jsonText } from './escape';
+import { readFieldOption, MAX_CLI_FIELD_T } from './fieldOption';
+import { cliProblem, FileProblemError } from './fileProblems';
+import type { CliContext } from './io';
+import { writeOutputFile } from './output';
 
 /** Largest number of points the CLI accepts in one sweep (the engine has its own, larger caps). */
 export const MAX_CLI_POINTS = 200_001;
+const FORMATS = ['csv', 'json'] as const;
 
-export function runSweep(args: ParsedArgs, io: CliIO): number {
-  rejectUnknownOptions(args, ['level', 'from', 'to', 'points', 'format', 'out']);
+export const sweepSpec: CommandSpec = {
+  name: 'sweep',
+  operands: '<file>',
+  summary: 'exact sublevel energies of one level over a field range',
+  options: {
+    level: { value: 'NAME', help: 'the level (species.level when the name is in several species); needed when the file has more than one' },
+    from: { value: 'FIELD', help: 'first field, e.g. 0 or -50G (default 0)' },
+    to: { value: 'FIELD', help: 'last field, e.g. 0.1T or "500 G" (required)' },
+    points: { value: 'N', help: `number of fields, a whole number from 2 to ${MAX_CLI_POINTS} in decimal digits (default 2001)` },
+    format: { value: 'FORMAT', choices: FORMATS, help: 'csv: field_T then one energy column per state (default); json' },
+    out: { value: 'FILE', help: 'write to FILE (atomically: the old file stays if writing fails) instead of stdout' },
+  },
+  notes: [`Fields use the file's units (T, mT, G, ...); |B| may be at most ${MAX_CLI_FIELD_T.toExponential().replace('+', '')} T.`],
+};
+
+export function runSweep(args: ParsedArgs, ctx: CliContext): number {
   if (args.positionals.length !== 1) throw new UsageError('sweep needs exactly one setup file');
   const file = args.positionals[0]!;
-  const format = stringOption(args, 'format', ['csv', 'json']) ?? 'csv';
+  const format = stringOption(args, 'format', FORMATS) ?? 'csv';
   const fromT = fieldOption(args, 'from', 0);
   const toT = fieldOption(args, 'to');
   const points = pointsOption(args);
+  const out = stringOption(args, 'out');
   if (fromT === toT) throw new UsageError('--from and --to are the same field; give a range');
 
-  const analysis = analyze(readSetupFile(file), diskSources(file));
-  if (!analysis.model || !analysis.result) throw new UsageError(`${file} could not be read`);
-  const level = findLevel(analysis.model, stringOption(args, 'level'));
+  const analysis = analyzeFile(file, ctx);
+  if (!analysis.model || !analysis.result) throw new FileProblemError(file, analysis.problems);
+  const level = findLevel(file, analysis.model, stringOption(args, 'level'));
   const gJ = analysis.result.levels.find((l) => l.species === level.species.name && l.level === level.name)?.g_J.used;
   const spec = engineSpec(level, gJ, analysis.model.settings);
-  if (!spec) throw new UsageError(`level '${level.name}' has problems to fix first (run: sublevel check ${file})`);
+  // Where the level is written, when it is in this file (a used file's ranges are in that file).
+  const at = level.species.origin ? undefined : level.nameRange;
+  if (!spec) {
+    const listed = listErrorsFirst(file, analysis, ctx);
+    throw new FileProblemError(file, [cliProblem('nothing-to-compute', `level '${level.name}' has problems to fix before it can be swept${listed}`, at)]);
+  }
 
   const sweep = sweepLevel(spec, fromT, toT, points);
   const errors = sweep.issues.filter((i) => i.severity === 'error');
   if (errors.length > 0) {
-    for (const e of errors) io.err(`sublevel: ${e.message}`);
-    return 1;
+    throw new FileProblemError(file, errors.map((e) => ({ ...cliProblem('nothing-to-compute', e.message, at), code: e.code })));
   }
-  const text = format === 'csv' ? sweepCsv(sweep) : JSON.stringify(sweepJson(file, level, sweep), null, 1);
-  const out = stringOption(args, 'out');
+  const text = format === 'csv' ? sweepCsv(sweep) : jsonText(sweepJson(file, level, sweep), 1);
   if (out) {
-    writeOutputFile(out, text + '\n');
-    io.err(`wrote ${sweep.states.length} sublevels × ${points} fields to ${out}`);
-  } else io.out(text);
-  return 0;
+    writeOutputFile(out, text + '\n', ctx.fsys);
+    ctx.io.err(`wrote ${sweep.states.length} sublevels × ${points} fields to ${out}`);
+  } else ctx.io.out(text);
+  return reportErrors(file, analysis, ctx) > 0 ? 1 : 0;
 }
 
 function fieldOption(args: ParsedArgs, name: string, fallback?: number): number {
@@ -55,25 +74,25 @@ function fieldOption(args: ParsedArgs, name: string, fallback?: number): number 
     if (fallback !== undefined) return fallback;
     throw new UsageError(`sweep needs --${name}, e.g. --${name} 0.1T`);
   }
-  const r = readQuantityArgument(text, 'flux-density', `--${name}`);
-  if (r.si === undefined) throw new UsageError(r.message ?? `--${name}: cannot read '${text}'`);
-  return r.si;
+  return readFieldOption(name, text);
 }
 
 function pointsOption(args: ParsedArgs): number {
   const text = stringOption(args, 'points') ?? '2001';
-  const n = Number(text);
-  if (!Number.isInteger(n) || n < 2) throw new UsageError(`--points must be a whole number of at least 2, got '${text}'`);
+  // Decimal digits only: Number() would read 0x10 as 16, 1e3 as 1000 and ' 5' as 5.
+  const n = /^[0-9]+$/.test(text) ? Number(text) : NaN;
+  if (!Number.isInteger(n) || n < 2) throw new UsageError(`--points must be a whole number of at least 2 in decimal digits, got '${text}'`);
   if (n > MAX_CLI_POINTS) throw new UsageError(`--points ${n} is more than the ${MAX_CLI_POINTS} a sweep may have`);
   return n;
 }
 
-function findLevel(model: SetupModel, name: string | undefined): LevelModel {
+function findLevel(file: string, model: SetupModel, name: string | undefined): LevelModel {
   const all = model.species.flatMap((s) => s.levels);
   const qualified = (l: LevelModel): string => `${l.species.name}.${l.name}`;
   if (name === undefined) {
     if (all.length === 1) return all[0]!;
-    throw new UsageError(`sweep needs --level, one of: ${all.map(qualified).join(', ') || '(no levels in the file)'}`);
+    if (all.length === 0) throw new FileProblemError(file, [cliProblem('nothing-to-compute', 'the file has no level to sweep; add a species with a level, e.g. `level ground: 2S1/2`')]);
+    throw new UsageError(`sweep needs --level, one of: ${all.map(qualified).join(', ')}`);
   }
   const matches = all.filter((l) => l.name === name || qualified(l) === name);
   if (matches.length === 1) return matches[0]!;

@@ -56,6 +56,28 @@ export const RULES: Record<string, RuleInfo> = {
     stage: 'syntax',
   },
 
+  // Characters: the decoder (invalid UTF-8, from the CLI's reader) and the parser (control characters).
+  'text-invalid-encoding': {
+    severity: 'error',
+    summary: 'Bytes that are not valid UTF-8; they are read as U+FFFD and the first one is reported.',
+    stage: 'syntax',
+  },
+  'text-nul-character': {
+    severity: 'error',
+    summary: 'A NUL character: the file looks binary or damaged. One report per line.',
+    stage: 'syntax',
+  },
+  'text-control-character': {
+    severity: 'warning',
+    summary: 'A control character other than tab and line breaks (e.g. an escape code). One report per line.',
+    stage: 'syntax',
+  },
+  'text-bidi-control': {
+    severity: 'warning',
+    summary: 'A bidirectional control character: the line may display in a different order than it is read.',
+    stage: 'syntax',
+  },
+
   // Units: the unit reader (called by the model for each value it reads).
   'unit-missing': { severity: 'error', summary: 'A bare number where a quantity with a unit is needed.', stage: 'unit' },
   'unit-unknown': { severity: 'error', summary: 'A unit name Sublevel does not know.', stage: 'unit' },

@@ -5,6 +5,7 @@
  */
 import type { BlockKind, BlockNode, LevelNode, NameRef, Position, Problem, SettingNode, SetupDocument, Spanned, UseNode } from './ast';
 import { makeProblem } from './codes';
+import { controlCharacterProblems } from './controlCharacters';
 import { didYouMeanText, suggestNames } from './didYouMean';
 import { startsLikeNumber } from './numbers';
 import { computeLineStarts } from './positions';
@@ -72,6 +73,7 @@ class SetupParser {
   run(): SetupDocument {
     const scanned = scanText(this.text);
     for (const line of scanned.lines) this.readLine(line);
+    this.problems.push(...controlCharacterProblems(this.text, scanned.lineStarts));
     const problems = this.problems
       .map((p, i) => ({ p, i }))
       .sort((a, b) => a.p.range.start.line - b.p.range.start.line || a.p.range.start.character - b.p.range.start.character || a.i - b.i)
