@@ -1,4 +1,5 @@
 /** `sublevel eval <file>`: every computed quantity, as a readable report or the versioned JSON document. */
+import { finiteJsonText } from '../eval/machineText';
 import { analyze } from '../eval/analyze';
 import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
 import { readSetupFile } from './files';
@@ -17,7 +18,7 @@ export function runEval(args: ParsedArgs, io: CliIO): number {
     for (const p of analysis.problems) io.err(`${file}:${p.range.start.line + 1}:${p.range.start.character + 1} ${p.severity} ${p.code} ${p.message}`);
     return 1;
   }
-  if (format === 'json') io.out(JSON.stringify(analysis.result, null, 2));
+  if (format === 'json') io.out(finiteJsonText(analysis.result, 2));
   else for (const line of textReport(file, analysis.result)) io.out(line);
   return errors > 0 ? 1 : 0;
 }

@@ -2,6 +2,7 @@
  * `sublevel sweep <file> --level NAME --from 0 --to 0.1T --points 2001 [--format csv|json] [--out FILE]`:
  * exact sublevel energies of one level over a field range, for plots and analysis code.
  */
+import { csvNumber, finiteJsonText } from '../eval/machineText';
 import { writeOutputFile } from './output';
 import { analyze } from '../eval/analyze';
 import { engineSpec } from '../eval/levelSpec';
@@ -40,7 +41,7 @@ export function runSweep(args: ParsedArgs, io: CliIO): number {
     for (const e of errors) io.err(`sublevel: ${e.message}`);
     return 1;
   }
-  const text = format === 'csv' ? sweepCsv(sweep) : JSON.stringify(sweepJson(file, level, sweep), null, 1);
+  const text = format === 'csv' ? sweepCsv(sweep) : finiteJsonText(sweepJson(file, level, sweep), 1);
   const out = stringOption(args, 'out');
   if (out) {
     writeOutputFile(out, text + '\n');
@@ -88,8 +89,8 @@ export function sweepCsv(s: SweepResult): string {
   const header = ['field_T', ...s.states.map((st) => quote(`E_Hz ${st.low.text} -> ${st.high.text}`))].join(',');
   const rows: string[] = [header];
   for (let i = 0; i < s.fieldsT.length; i++) {
-    const cells = [String(s.fieldsT[i])];
-    for (const st of s.states) cells.push(String(st.energyHz[i]));
+    const cells = [csvNumber(s.fieldsT[i])];
+    for (const st of s.states) cells.push(csvNumber(st.energyHz[i]));
     rows.push(cells.join(','));
   }
   return rows.join('\n');

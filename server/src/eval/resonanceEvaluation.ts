@@ -34,6 +34,7 @@ export function evaluateResonance(
     name: r.name,
     ...(r.level ? { species: r.level.species.name, level: r.level.name } : {}),
     range_T: [r.rangeT.fromT, r.rangeT.toT],
+    ...(r.rangeT.fromUnit && r.rangeT.toUnit ? { range_units: [r.rangeT.fromUnit, r.rangeT.toUnit] as [string, string] } : {}),
     at_fields: [],
   };
   const level = r.level;
