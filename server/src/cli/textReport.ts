@@ -1,7 +1,8 @@
 /** The human-readable report printed by `sublevel eval`. */
 import { ATOMIC_MASS_UNIT, SPEED_OF_LIGHT } from '../physics/constants';
 import { halfText } from '../eval/halves';
-import { curvatureText, frequencyText, gradientText, lengthText, type NoiseFloor, percentText, sensitivityText, speedText, trimNumber } from '../eval/quantityText';
+import { curvatureText, frequencyText, gradientText, lengthText, percentText, sensitivityText, speedText, trimNumber } from '../eval/quantityText';
+import { beamPositionNoise, DIP_NOISE, SENSITIVITY_NOISE } from '../eval/noiseFloors';
 import { polarizationSymbol } from '../eval/polarizationName';
 import { fieldInUnit, inWrittenUnit, workingFieldUnit } from '../eval/writtenUnit';
 import type {
@@ -149,7 +150,7 @@ function resonanceReport(x: ResonanceResult, atFieldText: AtFieldText): string[]
     `${t.lower_label} ↔ ${t.upper_label}`,
     polarizationSymbol(t.kind),
     frequencyText(t.frequency_Hz, 12),
-    sensitivityText(t.df_dB_Hz_per_T, 7, { scale: t.frequency_Hz * 1e4 }),
+    sensitivityText(t.df_dB_Hz_per_T, 7, SENSITIVITY_NOISE),
     curvatureText(t.d2f_dB2_Hz_per_T2, 7),
   ];
   for (const f of x.at_fields) {
@@ -179,7 +180,7 @@ function beamReport(b: BeamResult): string[] {
   if (b.speeds) {
     out.push(`  speeds: most probable ${speedText(b.speeds.most_probable_m_per_s)}, mean ${speedText(b.speeds.mean_m_per_s)}, rms spread ${speedText(b.speeds.rms_spread_m_per_s, 3)}`);
   }
-  const noise = beamNoise(b);
+  const noise = beamPositionNoise(b);
   out.push(
     ...table(
       ['sublevel', 'high-field label', 'moment/μ_B', 'mean deflection', 'own peak at'],
@@ -210,18 +211,6 @@ function beamReport(b: BeamResult): string[] {
 
 type FieldSource = { kind: 'field' | 'magnet'; name: string };
 type AtFieldText = (f: { source: FieldSource; field_T: number }) => string;
-
-/** A dip below a millionth of the smaller peak is the numerical floor of the pattern, not a number to read. */
-const DIP_NOISE: NoiseFloor = { scale: 1, relative: 1e-6 };
-
-/**
- * The precision of positions on the detector: the pattern is sampled and refined on a grid far
- * coarser than a millionth of its own extent, so anything smaller is rounding (common practice).
- */
-function beamNoise(b: BeamResult): NoiseFloor {
-  const extent = Math.max(0, ...b.peaks.flatMap((p) => [Math.abs(p.position_m), p.fwhm_m ?? 0]), ...b.sublevels.map((s) => Math.abs(s.mean_deflection_m)).filter(Number.isFinite));
-  return { scale: extent, relative: 1e-6 };
-}
 
 /** A quantum number given as a number (1.5) in the result, written as text (3/2). */
 function fraction(x: number): string {

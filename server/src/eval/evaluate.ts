@@ -25,10 +25,10 @@ import {
 export function workingFields(model: SetupModel): WorkingField[] {
   const out: WorkingField[] = [];
   for (const f of model.fields) {
-    if (f.tesla) out.push({ source: { kind: 'field', name: f.name }, tesla: f.tesla.value, range: f.tesla.range ?? f.nameRange });
+    if (f.tesla) out.push({ source: { kind: 'field', name: f.name }, tesla: f.tesla.value, range: f.tesla.range ?? f.nameRange, ...(f.tesla.unit ? { unit: f.tesla.unit } : {}) });
   }
   for (const m of model.magnets) {
-    if (m.fieldT) out.push({ source: { kind: 'magnet', name: m.name }, tesla: m.fieldT.value, range: m.fieldT.range ?? m.nameRange });
+    if (m.fieldT) out.push({ source: { kind: 'magnet', name: m.name }, tesla: m.fieldT.value, range: m.fieldT.range ?? m.nameRange, ...(m.fieldT.unit ? { unit: m.fieldT.unit } : {}) });
   }
   return out;
 }
