@@ -88,6 +88,27 @@ describe('eval text report', () => {
     expect(li).not.toMatch(/\de-\d+ %/);
   });
 
+  it('prints the undeflected peak of an m_J = 0 sublevel as 0, not as rounding noise', () => {
+    // Invented scenario: Sr88 3P1 without a nucleus; m_J = 0 has no moment, so it is not deflected.
+    const t = report(`species Sr88
+  level t: 5s 5p 3P°1
+magnet sel
+  field = 0.3 T
+  gradient = 100 T/m
+  length = 5 cm
+beam b
+  level = t
+  source = speed 500 m/s
+  slits = 20 um, 20 um apart 30 cm
+  magnet = sel
+  drift = 40 cm
+  detector = 10 um
+`).text;
+    expect(t).toMatch(/J=1, m_J=0 +m_J=0 +0 +0 µm +0 µm/);
+    expect(t).toMatch(/^ +0 µm +50 µm +J=1, m_J=0$/m);
+    expect(t).not.toMatch(/\de-\d+ (nm|µm)/);
+  });
+
   it('shows configurations space-separated with the ° parity mark', () => {
     const t = report('species Li7\n  level g: 1s2.2s 2S1/2\n  level e: 1s2.2p 2Po3/2\n').text;
     expect(t).toContain('level g: 1s2 2s ²S₁/₂');
