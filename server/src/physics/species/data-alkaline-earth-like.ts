@@ -28,10 +28,10 @@ export const STRONTIUM_87: BuiltinSpecies = {
   gI: derivedNuclearG(SR87_MU, 9),
   levels: [
     { key: 'ground', designation: '5s2 1S0', energyHz: GROUND_ENERGY },
-    { key: '3P0', designation: '5s5p 3P°0', ...energy(429228004229873.082, 'Hz', SR87_CLOCK) },
+    { key: '3P0', designation: '5s 5p 3P°0', ...energy(429228004229873.082, 'Hz', SR87_CLOCK) },
     {
       key: '3P1',
-      designation: '5s5p 3P°1',
+      designation: '5s 5p 3P°1',
       A: mhz(-260.084, SR87_3P1_MEMORY),
       B: mhz(-35.658, SR87_3P1_MEMORY),
       ...energy(434829121311, 'kHz', `${SR88_3P1} (88Sr value; the ~−60 MHz isotope shift is not applied)`),
@@ -39,7 +39,7 @@ export const STRONTIUM_87: BuiltinSpecies = {
     },
     {
       key: '3P2',
-      designation: '5s5p 3P°2',
+      designation: '5s 5p 3P°2',
       A: mhz(212.765, SR87_3P2),
       B: mhz(67.215, SR87_3P2),
       ...energy(14898.545, 'cm-1', NIST_ASD_MEMORY),
@@ -58,8 +58,8 @@ export const STRONTIUM_88: BuiltinSpecies = {
   twoI: sourced(0, 'even–even nucleus, I = 0 (IAEA nuclear moments table lists no moment)'),
   levels: [
     { key: 'ground', designation: '5s2 1S0', energyHz: GROUND_ENERGY },
-    { key: '3P0', designation: '5s5p 3P°0', ...energy(429228066418012, 'Hz', `${CIPM_2009}: 88Sr 1S0–3P0`) },
-    { key: '3P1', designation: '5s5p 3P°1', ...energy(434829121311, 'kHz', SR88_3P1), lifetimeS: TAU_SR_3P1 },
+    { key: '3P0', designation: '5s 5p 3P°0', ...energy(429228066418012, 'Hz', `${CIPM_2009}: 88Sr 1S0–3P0`) },
+    { key: '3P1', designation: '5s 5p 3P°1', ...energy(434829121311, 'kHz', SR88_3P1), lifetimeS: TAU_SR_3P1 },
   ],
 };
 
@@ -75,10 +75,10 @@ export const YTTERBIUM_171: BuiltinSpecies = {
   gI: derivedNuclearG(YB171_MU, 1),
   levels: [
     { key: 'ground', designation: '4f14 6s2 1S0', energyHz: GROUND_ENERGY },
-    { key: '3P0', designation: '4f14 6s6p 3P°0', ...energy(518295836590864, 'Hz', `${CIPM_2009}: 171Yb 1S0–3P0`) },
+    { key: '3P0', designation: '4f14 6s 6p 3P°0', ...energy(518295836590864, 'Hz', `${CIPM_2009}: 171Yb 1S0–3P0`) },
     {
       key: '3P1',
-      designation: '4f14 6s6p 3P°1',
+      designation: '4f14 6s 6p 3P°1',
       A: mhz(3957.19, '171Yb 6s6p 3P1 hyperfine constant — from memory'),
       ...energy(YB_3P1_CM, 'cm-1', `${NIST_ASD_MEMORY} (natural-Yb value)`),
       lifetimeS: sourced(870e-9, 'Yb 6s6p 3P1 lifetime ≈ 870 ns — from memory'),
@@ -97,7 +97,7 @@ export const YTTERBIUM_174: BuiltinSpecies = {
   twoI: sourced(0, 'even–even nucleus, I = 0 (IAEA nuclear moments table lists no moment)'),
   levels: [
     { key: 'ground', designation: '4f14 6s2 1S0', energyHz: GROUND_ENERGY },
-    { key: '3P1', designation: '4f14 6s6p 3P°1', ...energy(YB_3P1_CM, 'cm-1', `${NIST_ASD_MEMORY} (natural-Yb value)`) },
+    { key: '3P1', designation: '4f14 6s 6p 3P°1', ...energy(YB_3P1_CM, 'cm-1', `${NIST_ASD_MEMORY} (natural-Yb value)`) },
   ],
 };
 
@@ -113,7 +113,7 @@ export const CALCIUM_40: BuiltinSpecies = {
     { key: 'ground', designation: '4s2 1S0', energyHz: GROUND_ENERGY },
     {
       key: '3P1',
-      designation: '4s4p 3P°1',
+      designation: '4s 4p 3P°1',
       ...energy(455986240494.15, 'kHz', 'CIPM recommended frequency of the 40Ca 1S0–3P1 line (657 nm) — from memory'),
     },
   ],

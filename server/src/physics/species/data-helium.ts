@@ -1,6 +1,6 @@
 /**
- * Helium-4 and helium-3 with their metastable 1s2s 3S1 level (the working "ground" of
- * metastable-helium beams) and, for 4He, the 1s2p 3P_J levels of the 1083 nm line.
+ * Helium-4 and helium-3 with their metastable 1s 2s 3S1 level (the working "ground" of
+ * metastable-helium beams) and, for 4He, the 1s 2p 3P_J levels of the 1083 nm line.
  */
 import { publishedEnergyToHz } from './conversions';
 import { derivedNuclearG, energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
@@ -28,7 +28,7 @@ function tripletP(twoJ: 0 | 2 | 4): Sourced<number> {
   const offset = twoJ === 4 ? p2 : twoJ === 2 ? p1 : p0;
   return sourced(
     METASTABLE_HZ + CENTROID_HZ + (offset - centroid),
-    `derived: 1s2s 3S1 energy (${NIST_ASD_MEMORY}) + ${CENTROID_SOURCE} + ${FS_SOURCE}`,
+    `derived: 1s 2s 3S1 energy (${NIST_ASD_MEMORY}) + ${CENTROID_SOURCE} + ${FS_SOURCE}`,
   );
 }
 
@@ -38,14 +38,14 @@ const HE4_LEVELS: BuiltinLevel[] = [
   { key: 'ground', designation: '1s2 1S0', energyHz: GROUND_ENERGY },
   {
     key: 'metastable',
-    designation: '1s2s 3S1',
+    designation: '1s 2s 3S1',
     gJ: sourced(2.002237, 'He 2³S1 g-factor from bound-state theory and atomic-beam g-ratio measurements — from memory'),
     ...energy(METASTABLE_CM, 'cm-1', NIST_ASD_MEMORY),
     lifetimeS: sourced(7870, 'He 2³S1 lifetime 7870(510) s — from memory'),
   },
-  { key: '3P2', designation: '1s2p 3P°2', energyHz: tripletP(4), lifetimeS: TAU_2P },
-  { key: '3P1', designation: '1s2p 3P°1', energyHz: tripletP(2), lifetimeS: TAU_2P },
-  { key: '3P0', designation: '1s2p 3P°0', energyHz: tripletP(0), lifetimeS: TAU_2P },
+  { key: '3P2', designation: '1s 2p 3P°2', energyHz: tripletP(4), lifetimeS: TAU_2P },
+  { key: '3P1', designation: '1s 2p 3P°1', energyHz: tripletP(2), lifetimeS: TAU_2P },
+  { key: '3P0', designation: '1s 2p 3P°0', energyHz: tripletP(0), lifetimeS: TAU_2P },
 ];
 
 export const HELIUM_4: BuiltinSpecies = {
@@ -57,7 +57,7 @@ export const HELIUM_4: BuiltinSpecies = {
   massU: sourced(4.00260325413, NIST_MASSES),
   twoI: sourced(0, 'even–even nucleus, I = 0 (IAEA nuclear moments table lists no moment)'),
   levels: HE4_LEVELS,
-  notes: 'Use level "metastable" (1s2s 3S1, J = 1) for metastable-helium beams and traps.',
+  notes: 'Use level "metastable" (1s 2s 3S1, J = 1) for metastable-helium beams and traps.',
 };
 
 const HE3_MU = sourced(
@@ -79,7 +79,7 @@ export const HELIUM_3: BuiltinSpecies = {
     { key: 'ground', designation: '1s2 1S0', energyHz: GROUND_ENERGY },
     {
       key: 'metastable',
-      designation: '1s2s 3S1',
+      designation: '1s 2s 3S1',
       // Interval F=1/2 − F=3/2 equals (3/2)|A| for J = 1, I = 1/2; inverted because μ < 0.
       A: mhz(-6739.701177 / 1.5, 'derived: A = −ΔW/(J + 1/2) from the 3He 2³S1 hyperfine interval 6739.701177(16) MHz (Rosner & Pipkin 1970) — from memory'),
       gJ: sourced(2.002237, 'He 2³S1 g-factor (4He value) — from memory'),
