@@ -53,7 +53,24 @@ const CASES: Case[] = [
     name: 'field: other units, Zeeman scale and the sublevel table',
     // 1 G = 1e-4 T (definition of the gauss). μ_B/h = 13.996 244 171 GHz/T (CODATA 2022) → 5 G: 6.998122 MHz.
     text: `${LI}field bi|as = 5 G\n`,
-    has: ['field bias', '= 500 µT = 5 G', 'μ_B·B/h = 6.998122 MHz', 'Li7 ground', 'F=2, m_F=+2'],
+    has: ['field bias', '= 5 G = 500 µT', 'μ_B·B/h = 6.998122 MHz', 'Li7 ground', 'F=2, m_F=+2'],
+  },
+  {
+    name: 'unit echo: a field is shown first in the unit written (250 G = 25 mT by the definition of the gauss)',
+    text: `${LI}field bi|as = 250 G\n`,
+    has: ['= 250 G = 25 mT'],
+    hasNot: ['= 25 mT = 250 G'],
+  },
+  {
+    name: 'unit echo: a magnet written in kG and G/cm keeps those units (50 G/cm = 0.5 T/m)',
+    text: `${LI}magnet sel|ector\n  field = 2 kG\n  gradient = 50 G/cm\n  length = 80 mm\n`,
+    has: ['field = 2 kG = 200 mT', 'gradient = 50 G/cm = 500 mT/m', 'length = 80 mm = 0.08 m'],
+  },
+  {
+    name: 'a dotted configuration and an o parity mark are shown space-separated with °',
+    text: 'species Li7\n  level g: 1s2.2s 2S1/2\n  level e: 1s2.2p 2Po3/2\nline D|2: g -> e\n',
+    has: ['lower: g — 1s2 2s ²S₁/₂', 'upper: e — 1s2 2p ²P°₃/₂'],
+    hasNot: ['1s2.2s', '2Po3/2'],
   },
   {
     name: 'field value: the quantity in other units and the field',
@@ -64,7 +81,7 @@ const CASES: Case[] = [
     name: 'magnet: field, gradient and length in other units; force on one Bohr magneton',
     // 180 T/m = 18 000 G/cm (1 G = 1e-4 T, 1 cm = 1e-2 m); μ_B·180 T/m = 1.6693e-21 N (μ_B from CODATA 2022).
     text: `${LI}magnet sel|ector\n  field = 0.45 T\n  gradient = 180 T/m\n  length = 8 cm\n`,
-    has: ['magnet selector', '450 mT = 4.5 kG', '180 T/m = 18000 G/cm', '1.6693e-21 N', 'length = 0.08 m = 8 cm', 'Li7 upper'],
+    has: ['magnet selector', 'field = 0.45 T = 4.5 kG', '180 T/m = 18000 G/cm', '1.6693e-21 N', 'length = 8 cm = 0.08 m', 'Li7 upper'],
   },
   {
     name: 'magnet without settings says what is missing',
@@ -75,7 +92,7 @@ const CASES: Case[] = [
     name: 'line: its levels, ΔJ, frequency and vacuum wavelength from the level energies',
     // Steck, Sodium D Line Data: D2 at 508.848 716 2 THz, vacuum wavelength 589.158 326 4 nm.
     text: 'species Na23\n  level g: 3s 2S1/2\n  level e: 3p 2P°3/2\nline D|2: g -> e\n',
-    has: ['line D2 in Na23', 'lower: g — 3s 2S1/2 (J = 1/2, even)', 'upper: e — 3p 2P°3/2 (J = 3/2, odd)', 'ΔJ = +1', 'ν = 508.848716 THz', '589.15833 nm'],
+    has: ['line D2 in Na23', 'lower: g — 3s ²S₁/₂ (J = 1/2, even)', 'upper: e — 3p ²P°₃/₂ (J = 3/2, odd)', 'ΔJ = +1', 'ν = 508.848716 THz', '589.15833 nm'],
   },
   {
     name: 'a reference in a line hovers the level it names',
@@ -186,7 +203,7 @@ describe('hover on lines and resonances', () => {
     const { analysis, position } = atCursor(`${RB}resonance cl|ock\n  level = ground\n  lower = 1 -1\n  upper = 2 +1\n  range = 0 G, 10 G\n`);
     const text = plain(hoverText(hover(analysis, position)));
     expect(text).toMatch(/field-insensitive point: 3\.2289\d* G at 6\.83467\d* GHz/);
-    expect(text).toContain('2-photon | F=1, m_F=-1 → F=2, m_F=+1');
+    expect(text).toContain('two-photon | F=1, m_F=-1 → F=2, m_F=+1');
   });
 });
 

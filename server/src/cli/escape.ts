@@ -5,6 +5,7 @@
  * is. Every text the CLI prints or writes passes through `escapeControls`; JSON goes through
  * `jsonText`, whose escapes keep it valid JSON.
  */
+import { finiteJsonText } from '../eval/machineText';
 import { INVISIBLE_CLASS } from '../format/controlCharacters';
 
 /** The characters the parser reports as invisible, and CR (a bare CR returns the cursor to the line's start). */
@@ -28,5 +29,5 @@ export function escapeControls(text: string): string {
  * the same character, so the document is unchanged for a JSON reader.
  */
 export function jsonText(value: unknown, indent: number = 2): string {
-  return JSON.stringify(value, null, indent).replace(UNSAFE, (c) => `\\u${hex(c.charCodeAt(0), 4)}`);
+  return finiteJsonText(value, indent).replace(UNSAFE, (c) => `\\u${hex(c.charCodeAt(0), 4)}`);
 }

@@ -2,6 +2,7 @@
  * `sublevel sweep <file> --level NAME --from 0 --to 0.1T --points 2001 [--format csv|json] [--out FILE]`:
  * exact sublevel energies of one level over a field range, for plots and analysis code.
  */
+import { csvNumber } from '../eval/machineText';
 import { engineSpec } from '../eval/levelSpec';
 import { suggestNames } from '../format/didYouMean';
 import { sweepLevel, type SweepResult } from '../physics/engine';
@@ -107,8 +108,8 @@ export function sweepCsv(s: SweepResult): string {
   const header = ['field_T', ...s.states.map((st) => quote(`E_Hz ${st.low.text} -> ${st.high.text}`))].join(',');
   const rows: string[] = [header];
   for (let i = 0; i < s.fieldsT.length; i++) {
-    const cells = [String(s.fieldsT[i])];
-    for (const st of s.states) cells.push(String(st.energyHz[i]));
+    const cells = [csvNumber(s.fieldsT[i])];
+    for (const st of s.states) cells.push(csvNumber(st.energyHz[i]));
     rows.push(cells.join(','));
   }
   return rows.join('\n');

@@ -1,7 +1,10 @@
 /** The human-readable report printed by `sublevel eval`. */
-import { ATOMIC_MASS_UNIT } from '../physics/constants';
+import { ATOMIC_MASS_UNIT, SPEED_OF_LIGHT } from '../physics/constants';
 import { halfText } from '../eval/halves';
-import { fieldText, frequencyText, lengthText, trimNumber } from '../eval/quantityText';
+import { curvatureText, frequencyText, gradientText, lengthText, percentText, sensitivityText, speedText, trimNumber } from '../eval/quantityText';
+import { beamPositionNoise, DIP_NOISE, SENSITIVITY_NOISE } from '../eval/noiseFloors';
+import { polarizationSymbol } from '../eval/polarizationName';
+import { fieldInUnit, inWrittenUnit, workingFieldUnit } from '../eval/writtenUnit';
 import type {
   BeamResult,
   EvaluationResult,
@@ -15,6 +18,7 @@ import { table } from './table';
 
 export function textReport(file: string, r: EvaluationResult): string[] {
   const out: string[] = [];
+  const atFieldText = (f: { source: FieldSource; field_T: number }): string => `${f.source.kind} ${f.source.name} = ${fieldInUnit(f.field_T, { unit: workingFieldUnit(r, f.source) })}`;
   out.push(`Sublevel evaluation of ${file}`);
   out.push(`constants: ${r.constants}; g_s = ${r.settings.g_s === 2 ? '2 (textbook)' : '|g_e| (CODATA)'}; energies are E/h`);
   for (const s of r.species) {
@@ -23,8 +27,8 @@ export function textReport(file: string, r: EvaluationResult): string[] {
     out.push(`species ${s.name} (${where})`);
     const mass = s.mass_kg ? `${trimNumber(s.mass_kg.value / ATOMIC_MASS_UNIT, 9)} u` : 'not given';
     out.push(`  mass ${mass}   I = ${fraction(s.I)}   g_I = ${trimNumber(s.g_I.value, 8)}  [${s.g_I.source}]`);
-    for (const l of r.levels.filter((x) => x.species === s.name)) out.push(...levelReport(l));
-    for (const t of r.terms.filter((x) => x.species === s.name)) out.push(...termReport(t));
+    for (const l of r.levels.filter((x) => x.species === s.name)) out.push(...levelReport(l, atFieldText));
+    for (const t of r.terms.filter((x) => x.species === s.name)) out.push(...termReport(t, atFieldText));
   }
   if (r.magnets.length > 0) {
     out.push('');
@@ -34,16 +38,16 @@ export function textReport(file: string, r: EvaluationResult): string[] {
         ['name', 'field', 'gradient', 'length'],
         r.magnets.map((m) => [
           m.name,
-          m.field_T !== undefined ? fieldText(m.field_T) : '—',
-          m.gradient_T_per_m !== undefined ? `${trimNumber(m.gradient_T_per_m, 5)} T/m` : '—',
-          m.length_m !== undefined ? lengthText(m.length_m) : '—',
+          m.field_T !== undefined ? fieldInUnit(m.field_T, { unit: m.field_unit }) : '—',
+          inWrittenUnit(m.gradient_T_per_m, 'gradient', m.gradient_unit) ?? gradientText(m.gradient_T_per_m),
+          inWrittenUnit(m.length_m, 'length', m.length_unit) ?? lengthText(m.length_m),
         ]),
       ).map((l) => '  ' + l),
     );
   }
   for (const b of r.beams) out.push(...beamReport(b));
-  for (const l of r.lines) out.push(...lineReport(l));
-  for (const x of r.resonances) out.push(...resonanceReport(x));
+  for (const l of r.lines) out.push(...lineReport(l, atFieldText));
+  for (const x of r.resonances) out.push(...resonanceReport(x, atFieldText));
   const counts = (sev: string): number => r.diagnostics.filter((d) => d.severity === sev).length;
   out.push('');
   out.push(`diagnostics: ${counts('error')} errors, ${counts('warning')} warnings, ${counts('info') + counts('hint')} notes`);
@@ -51,7 +55,7 @@ export function textReport(file: string, r: EvaluationResult): string[] {
   return out;
 }
 
-function levelReport(l: LevelResult): string[] {
+function levelReport(l: LevelResult, atFieldText: AtFieldText): string[] {
   const out: string[] = [];
   out.push('');
   const config = l.designation.configuration ? `${l.designation.configuration} ` : '';
@@ -76,7 +80,7 @@ function levelReport(l: LevelResult): string[] {
   }
   for (const f of l.at_fields) {
     const regime = f.regime ? `; ${f.regime.verdict}${f.regime.x !== null ? `, x = ${trimNumber(f.regime.x, 3)}` : ''}` : '';
-    out.push(`    at ${f.source.kind} ${f.source.name} = ${fieldText(f.field_T)}${regime}:`);
+    out.push(`    at ${atFieldText(f)}${regime}:`);
     if (f.exact.length === 0) {
       out.push(...table(['sublevel', 'linear energy'], f.linear.map((s) => [s.label, frequencyText(s.energy_Hz, 9)])).map((x) => '      ' + x));
       continue;
@@ -97,12 +101,12 @@ function levelReport(l: LevelResult): string[] {
   return out;
 }
 
-function termReport(t: TermResult): string[] {
+function termReport(t: TermResult, atFieldText: AtFieldText): string[] {
   const out = ['', `  term ${t.level}: ${t.designation.configuration ? t.designation.configuration + ' ' : ''}${t.designation.unicode}   S = ${fraction(t.S)}, L = ${t.L}, fine structure ζ = ${frequencyText(t.zeta_Hz.value, 8)} [${t.zeta_Hz.source}]`];
   out.push(...table(['J', 'zero-field shift', 'g_J'], t.fine_levels.map((f) => [f.J_text, frequencyText(f.shift_Hz, 10), trimNumber(f.g_J, 8)])).map((x) => '      ' + x));
   for (const f of t.at_fields) {
     const regime = f.regime ? `; ${f.regime.verdict}${f.regime.x !== null ? `, x = ${trimNumber(f.regime.x, 3)}` : ''}` : '';
-    out.push(`    at ${f.source.kind} ${f.source.name} = ${fieldText(f.field_T)}${regime}:`);
+    out.push(`    at ${atFieldText(f)}${regime}:`);
     out.push(
       ...table(
         ['low-field label', 'high-field label', 'energy (exact)', 'moment/μ_B'],
@@ -113,49 +117,56 @@ function termReport(t: TermResult): string[] {
   return out;
 }
 
-function lineReport(l: LineResult): string[] {
+function lineReport(l: LineResult, atFieldText: AtFieldText): string[] {
   const out = ['', `line ${l.name}: ${l.lower ?? '?'} -> ${l.upper ?? '?'}${l.species ? ` (${l.species})` : ''}`];
   if (l.g_eff !== undefined) out.push(`  effective Landé factor g_eff = ${trimNumber(l.g_eff, 7)}`);
-  if (l.line_centre_Hz !== undefined) out.push(`  line centre ${frequencyText(l.line_centre_Hz, 13)} (vacuum wavelength ${trimNumber(299792458 / l.line_centre_Hz * 1e9, 9)} nm)`);
+  if (l.line_centre_Hz !== undefined) {
+    // A wavelength only for a positive frequency: a negative one means the levels are the other way round.
+    const wavelength = l.line_centre_Hz > 0 ? ` (vacuum wavelength ${trimNumber((SPEED_OF_LIGHT / l.line_centre_Hz) * 1e9, 9)} nm)` : '';
+    out.push(`  line centre ${frequencyText(l.line_centre_Hz, 13)}${wavelength}`);
+  }
   const at = l.at_fields[0];
   if (!at) {
     out.push('  no components: see the diagnostics');
     return out;
   }
-  out.push(`  ${at.components.length} Zeeman components at ${at.source.kind} ${at.source.name} = ${fieldText(at.field_T)} (strength = branching fraction of the upper sublevel):`);
+  out.push(`  ${at.components.length} Zeeman components at ${atFieldText(at)} (strength = branching fraction of the upper sublevel):`);
   out.push(
     ...table(
       ['offset', 'pol.', 'strength', 'lower', 'upper'],
-      at.components.map((c) => [frequencyText(c.offset_Hz, 9), c.polarization, trimNumber(c.strength, 5), c.lower_label, c.upper_label]),
+      at.components.map((c) => [frequencyText(c.offset_Hz, 9), polarizationSymbol(c.polarization), trimNumber(c.strength, 5), c.lower_label, c.upper_label]),
     ).map((x) => '    ' + x),
   );
   if (l.at_fields.length > 1) out.push(`  (components at the other working fields: sublevel eval --format json)`);
   return out;
 }
 
-function resonanceReport(x: ResonanceResult): string[] {
-  const out = ['', `resonance ${x.name}: level ${x.level ?? '?'}${x.species ? ` (${x.species})` : ''}, searched ${fieldText(x.range_T[0])} … ${fieldText(x.range_T[1])}`];
+function resonanceReport(x: ResonanceResult, atFieldText: AtFieldText): string[] {
+  const [fromUnit, toUnit] = x.range_units ?? [];
+  // Fields found in the range are shown in the unit family the range was written in.
+  const found = (t: number): string => fieldInUnit(t, { family: toUnit, digits: 8 });
+  const out = ['', `resonance ${x.name}: level ${x.level ?? '?'}${x.species ? ` (${x.species})` : ''}, searched ${fieldInUnit(x.range_T[0], { unit: fromUnit })} … ${fieldInUnit(x.range_T[1], { unit: toUnit })}`];
   const row = (t: MagneticTransitionResult): string[] => [
     `${t.lower_label} ↔ ${t.upper_label}`,
-    t.kind,
+    polarizationSymbol(t.kind),
     frequencyText(t.frequency_Hz, 12),
-    `${trimNumber(t.df_dB_Hz_per_T / 1e4, 7)} Hz/G`,
-    `${trimNumber(t.d2f_dB2_Hz_per_T2 / 1e8, 7)} Hz/G²`,
+    sensitivityText(t.df_dB_Hz_per_T, 7, SENSITIVITY_NOISE),
+    curvatureText(t.d2f_dB2_Hz_per_T2, 7),
   ];
   for (const f of x.at_fields) {
-    out.push(`  at ${f.source.kind} ${f.source.name} = ${fieldText(f.field_T)}:`);
+    out.push(`  at ${atFieldText(f)}:`);
     out.push(...table(['transition', 'kind', 'frequency', 'df/dB', 'd²f/dB²'], f.transitions.map(row)).map((l) => '    ' + l));
   }
   if (x.field_insensitive) {
     out.push(
       x.field_insensitive.length === 0
         ? '  no field-insensitive point in the range'
-        : `  field-insensitive (df/dB = 0) at: ${x.field_insensitive.map((p) => `${fieldText(p.field_T, 8)} (f = ${frequencyText(p.frequency_Hz, 12)})`).join(', ')}`,
+        : `  field-insensitive (df/dB = 0) at: ${x.field_insensitive.map((p) => `${found(p.field_T)} (f = ${frequencyText(p.frequency_Hz, 12)})`).join(', ')}`,
     );
   }
   if (x.resonances) {
     out.push(x.resonances.length === 0 ? '  not resonant anywhere in the range' : '  resonant at:');
-    out.push(...x.resonances.map((r) => `    ${fieldText(r.field_T, 8)}: ${r.transition.lower_label} ↔ ${r.transition.upper_label} (${r.transition.kind})`));
+    out.push(...x.resonances.map((r) => `    ${found(r.field_T)}: ${r.transition.lower_label} ↔ ${r.transition.upper_label} (${polarizationSymbol(r.transition.kind)})`));
   }
   return out;
 }
@@ -167,35 +178,39 @@ function beamReport(b: BeamResult): string[] {
     return out;
   }
   if (b.speeds) {
-    out.push(`  speeds: most probable ${trimNumber(b.speeds.most_probable_m_per_s, 4)} m/s, mean ${trimNumber(b.speeds.mean_m_per_s, 4)} m/s, rms spread ${trimNumber(b.speeds.rms_spread_m_per_s, 3)} m/s`);
+    out.push(`  speeds: most probable ${speedText(b.speeds.most_probable_m_per_s)}, mean ${speedText(b.speeds.mean_m_per_s)}, rms spread ${speedText(b.speeds.rms_spread_m_per_s, 3)}`);
   }
+  const noise = beamPositionNoise(b);
   out.push(
     ...table(
       ['sublevel', 'high-field label', 'moment/μ_B', 'mean deflection', 'own peak at'],
-      b.sublevels.map((s) => [s.label, s.high_label, trimNumber(s.moment_bohr, 6), lengthText(s.mean_deflection_m), lengthText(s.peak_m)]),
+      b.sublevels.map((s) => [s.label, s.high_label, trimNumber(s.moment_bohr, 6), lengthText(s.mean_deflection_m, 4, noise), s.peak_m === undefined ? 'not populated' : lengthText(s.peak_m, 4, noise)]),
     ).map((x) => '  ' + x),
   );
   out.push('  peaks on the detector:');
   out.push(
     ...table(
       ['position', 'FWHM', 'sublevels'],
-      b.peaks.map((p) => [lengthText(p.position_m), p.fwhm_m === null ? 'off grid' : lengthText(p.fwhm_m), p.members.join('; ')]),
+      b.peaks.map((p) => [lengthText(p.position_m, 4, noise), p.fwhm_m === null ? 'off grid' : lengthText(p.fwhm_m), p.members.join('; ')]),
     ).map((x) => '    ' + x),
   );
   for (const p of b.pairs) {
-    out.push(`  peaks ${p.left + 1} and ${p.right + 1}: dip ${trimNumber(p.dip_ratio * 100, 3)} % of the smaller peak → ${p.resolved ? 'resolved' : 'NOT resolved'} (criterion ≤ ${b.criterion_dip_ratio * 100} %)`);
+    out.push(`  peaks ${p.left + 1} and ${p.right + 1}: dip ${percentText(p.dip_ratio, 3, DIP_NOISE)} of the smaller peak → ${p.resolved ? 'resolved' : 'NOT resolved'} (criterion ≤ ${percentText(b.criterion_dip_ratio)})`);
   }
   if (b.resolving_gradient_T_per_m !== undefined) {
     out.push(
       b.resolving_gradient_T_per_m === null
         ? '  no gradient up to 100× the present one resolves every pair'
-        : `  smallest gradient that resolves every pair: ${trimNumber(Math.abs(b.resolving_gradient_T_per_m), 4)} T/m`,
+        : `  smallest gradient that resolves every pair: ${gradientText(Math.abs(b.resolving_gradient_T_per_m), 4)}`,
     );
   }
   out.push('  cautions:');
   for (const c of b.cautions) out.push(`    - ${c}`);
   return out;
 }
+
+type FieldSource = { kind: 'field' | 'magnet'; name: string };
+type AtFieldText = (f: { source: FieldSource; field_T: number }) => string;
 
 /** A quantum number given as a number (1.5) in the result, written as text (3/2). */
 function fraction(x: number): string {

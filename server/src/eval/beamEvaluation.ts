@@ -68,7 +68,8 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
       moment_bohr: inputs.input.sublevels[i]!.momentJT / BOHR_MAGNETON,
       population: s.weight,
       mean_deflection_m: s.meanDeflectionM,
-      peak_m: s.peakM,
+      // An unpopulated sublevel has no profile and so no peak: the field is left out.
+      ...(Number.isFinite(s.peakM) ? { peak_m: s.peakM } : {}),
     })),
     peaks: pattern.peaks.map((p) => ({ position_m: p.positionM, fwhm_m: p.fwhmM, height_per_m: p.height, members: p.members })),
     pairs: pattern.pairs.map((p) => ({ left: p.left, right: p.right, dip_ratio: p.dipRatio, resolved: p.resolved })),

@@ -25,10 +25,10 @@ import {
 export function workingFields(model: SetupModel): WorkingField[] {
   const out: WorkingField[] = [];
   for (const f of model.fields) {
-    if (f.tesla) out.push({ source: { kind: 'field', name: f.name }, tesla: f.tesla.value, range: f.tesla.range ?? f.nameRange });
+    if (f.tesla) out.push({ source: { kind: 'field', name: f.name }, tesla: f.tesla.value, range: f.tesla.range ?? f.nameRange, ...(f.tesla.unit ? { unit: f.tesla.unit } : {}) });
   }
   for (const m of model.magnets) {
-    if (m.fieldT) out.push({ source: { kind: 'magnet', name: m.name }, tesla: m.fieldT.value, range: m.fieldT.range ?? m.nameRange });
+    if (m.fieldT) out.push({ source: { kind: 'magnet', name: m.name }, tesla: m.fieldT.value, range: m.fieldT.range ?? m.nameRange, ...(m.fieldT.unit ? { unit: m.fieldT.unit } : {}) });
   }
   return out;
 }
@@ -88,12 +88,12 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     })),
     levels,
     terms,
-    fields: model.fields.map((f) => ({ name: f.name, ...(f.tesla ? { field_T: f.tesla.value } : {}) })),
+    fields: model.fields.map((f) => ({ name: f.name, ...(f.tesla ? { field_T: f.tesla.value, ...unitOf('field_unit', f.tesla) } : {}) })),
     magnets: model.magnets.map((m) => ({
       name: m.name,
-      ...(m.fieldT ? { field_T: m.fieldT.value } : {}),
-      ...(m.gradientTPerM ? { gradient_T_per_m: m.gradientTPerM.value } : {}),
-      ...(m.lengthM ? { length_m: m.lengthM.value } : {}),
+      ...(m.fieldT ? { field_T: m.fieldT.value, ...unitOf('field_unit', m.fieldT) } : {}),
+      ...(m.gradientTPerM ? { gradient_T_per_m: m.gradientTPerM.value, ...unitOf('gradient_unit', m.gradientTPerM) } : {}),
+      ...(m.lengthM ? { length_m: m.lengthM.value, ...unitOf('length_unit', m.lengthM) } : {}),
     })),
     beams,
     lines,
@@ -123,4 +123,9 @@ export function toDiagnosticResult(p: Problem): DiagnosticResult {
     end_line: p.range.end.line + 1,
     end_column: p.range.end.character + 1,
   };
+}
+
+/** `{ [key]: unit }` when the file wrote a unit for the value (the unit echo of reports). */
+function unitOf<K extends string>(key: K, v: { unit?: string }): Partial<Record<K, string>> {
+  return v.unit !== undefined ? ({ [key]: v.unit } as Record<K, string>) : {};
 }

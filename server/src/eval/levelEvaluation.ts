@@ -1,4 +1,5 @@
 /** Everything v1 of the core computes for one level: g-factors, F levels, linear sublevels. */
+import { configurationText } from './designationText';
 import { ELECTRON_GS } from '../physics/constants';
 import { hyperfineGF, landeGJ, landeGJFraction, orbitalGFactor } from '../physics/gFactors';
 import { hyperfineLevels } from '../physics/hyperfineZeroField';
@@ -17,6 +18,8 @@ export interface WorkingField {
   tesla: number;
   /** Where the file sets this field, for diagnostics about it. */
   range: Range;
+  /** The unit the file wrote it in, so messages show it back in that unit. */
+  unit?: string;
 }
 
 /** Something the evaluation wants to tell the user about a level at a field. */
@@ -40,7 +43,7 @@ export function evaluateLevel(level: LevelModel, settings: SettingsModel, fields
       text: level.designationText,
       ascii: formatTermSymbol(term, 'ascii'),
       unicode: formatTermSymbol(term, 'unicode'),
-      configuration: level.configuration?.text ?? null,
+      configuration: configurationText(level.configuration),
       parity: level.configuration?.parity ?? term.parityMark,
     },
     S: term.twoS / 2,

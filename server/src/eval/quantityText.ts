@@ -1,47 +1,147 @@
-/** Human-readable numbers with units, for tables, hovers and inlay hints. */
+/**
+ * The one formatter for numbers with units: text reports, hovers, inlay hints and diagrams all
+ * print quantities through here, so a value reads the same everywhere. It never prints NaN or
+ * Infinity (a missing value is MISSING), never "-0", and prints values below the computation's
+ * own precision as 0 when the caller says what that precision is.
+ */
 
-const FREQ_UNITS: [number, string][] = [
-  [1e12, 'THz'],
-  [1e9, 'GHz'],
-  [1e6, 'MHz'],
-  [1e3, 'kHz'],
-  [1, 'Hz'],
-];
+/** How a value that is not there (NaN, ±Infinity, undefined) is written in text. */
+export const MISSING = '—';
 
-/** A frequency with a unit chosen so the number is between 1 and 1000; `digits` significant digits. */
-export function frequencyText(hz: number, digits = 7): string {
-  if (!Number.isFinite(hz)) return String(hz);
-  if (hz === 0) return '0 Hz';
-  const a = Math.abs(hz);
-  const [scale, unit] = FREQ_UNITS.find(([s]) => a >= s) ?? [1, 'Hz'];
-  return `${trimNumber(hz / scale, digits)} ${unit}`;
+/** What makes a value noise: below `relative` × `scale` in magnitude it prints as 0. */
+export interface NoiseFloor {
+  /** The size of the numbers this value sits among (a peak spacing, a slit width, a level's splitting). */
+  scale: number;
+  /** The computation's relative precision; default 1e-9 (double precision after a few thousand operations). */
+  relative?: number;
 }
 
-/** A flux density in T, mT or µT, or G when asked. */
-export function fieldText(tesla: number, digits = 6): string {
-  const a = Math.abs(tesla);
-  if (a === 0) return '0 T';
-  if (a >= 0.1) return `${trimNumber(tesla, digits)} T`;
-  if (a >= 1e-4) return `${trimNumber(tesla * 1e4, digits)} G`;
-  return `${trimNumber(tesla * 1e4 * 1e3, digits)} mG`;
+export interface QuantityStyle {
+  /** Significant digits. */
+  digits?: number;
+  noise?: NoiseFloor;
 }
 
-export function lengthText(m: number, digits = 4): string {
-  const a = Math.abs(m);
-  if (a === 0) return '0 m';
-  if (a >= 1) return `${trimNumber(m, digits)} m`;
-  if (a >= 1e-2) return `${trimNumber(m * 100, digits)} cm`;
-  if (a >= 1e-3) return `${trimNumber(m * 1e3, digits)} mm`;
-  if (a >= 1e-6) return `${trimNumber(m * 1e6, digits)} µm`;
-  return `${trimNumber(m * 1e9, digits)} nm`;
+export const DEFAULT_RELATIVE_PRECISION = 1e-9;
+
+/** The absolute floor below which a value is noise, or 0 when no floor applies. */
+export function noiseLimit(noise: NoiseFloor | undefined): number {
+  if (!noise || !Number.isFinite(noise.scale)) return 0;
+  return Math.abs(noise.scale) * (noise.relative ?? DEFAULT_RELATIVE_PRECISION);
+}
+
+/** The value with noise and negative zero removed; undefined when it is not a finite number. */
+export function cleanValue(x: number | null | undefined, noise?: NoiseFloor): number | undefined {
+  if (x === null || x === undefined || !Number.isFinite(x)) return undefined;
+  if (x === 0 || Math.abs(x) < noiseLimit(noise)) return 0;
+  return x;
 }
 
 /** `digits` significant digits without trailing zeros; exponent form for very large or small numbers. */
-export function trimNumber(x: number, digits = 6): string {
-  if (!Number.isFinite(x)) return String(x);
-  if (x === 0) return '0';
-  const a = Math.abs(x);
-  if (a >= 1e9 || a < 1e-5) return x.toExponential(Math.max(0, digits - 1)).replace(/\.?0+e/, 'e');
-  const s = x.toPrecision(digits);
-  return s.includes('.') && !s.includes('e') ? s.replace(/\.?0+$/, '') : s;
+export function trimNumber(x: number | null | undefined, digits = 6, noise?: NoiseFloor): string {
+  const v = cleanValue(x, noise);
+  if (v === undefined) return MISSING;
+  if (v === 0) return '0';
+  const a = Math.abs(v);
+  if (a >= 1e9 || a < 1e-5) return v.toExponential(Math.max(0, digits - 1)).replace(/\.?0+e/, 'e').replace('e+', 'e');
+  const s = v.toPrecision(digits);
+  if (s.includes('e')) return String(Number(s));
+  return s.includes('.') ? s.replace(/\.?0+$/, '') : s;
+}
+
+/** SI prefixes by power of ten. */
+const PREFIX: Readonly<Record<number, string>> = { 12: 'T', 9: 'G', 6: 'M', 3: 'k', 0: '', [-3]: 'm', [-6]: 'µ', [-9]: 'n' };
+
+/**
+ * The prefixes each unit may take, largest first, and the unit it prefixes. A derived unit is
+ * prefixed on its first factor (Hz/G → MHz/G). Units not listed are printed unprefixed.
+ */
+const PREFIXES_OF: Readonly<Record<string, readonly number[]>> = {
+  Hz: [12, 9, 6, 3, 0, -3, -6],
+  'Hz/G': [9, 6, 3, 0, -3, -6],
+  'Hz/T': [12, 9, 6, 3, 0, -3],
+  'Hz/G²': [6, 3, 0, -3, -6],
+  'Hz/T²': [12, 9, 6, 3, 0, -3],
+  m: [0, -3, -6, -9],
+  'm/s': [3, 0, -3],
+  'T/m': [0, -3],
+  T: [0, -3, -6, -9],
+  N: [],
+  'J/T': [],
+};
+
+/**
+ * A value in `unit` with the SI prefix that puts the number between 1 and 1000 (2133537 Hz/G →
+ * "2.133537 MHz/G"). `unit` is the unit the value is given in, without prefix.
+ */
+export function prefixedText(value: number | null | undefined, unit: string, style: QuantityStyle = {}): string {
+  const digits = style.digits ?? 6;
+  const v = cleanValue(value, style.noise);
+  if (v === undefined) return MISSING;
+  const powers = PREFIXES_OF[unit] ?? [];
+  if (powers.length === 0) return `${trimNumber(v, digits)} ${unit}`;
+  const sized = v === 0 ? Math.abs(style.noise?.scale ?? 1) || 1 : Math.abs(v);
+  let i = powers.findIndex((p) => sized >= 10 ** p);
+  if (i < 0) i = powers.length - 1;
+  // Rounding can carry to 1000 (999.99996 kHz → "1000 kHz"): then take the next prefix up.
+  if (i > 0 && Math.abs(Number((v / 10 ** powers[i]!).toPrecision(digits))) >= 1000) i--;
+  const p = powers[i]!;
+  return `${trimNumber(v === 0 ? 0 : v / 10 ** p, digits)} ${PREFIX[p]}${unit}`;
+}
+
+/** A frequency with a unit chosen so the number is between 1 and 1000; `digits` significant digits. */
+export function frequencyText(hz: number | null | undefined, digits = 7, noise?: NoiseFloor): string {
+  return prefixedText(hz, 'Hz', { digits, noise });
+}
+
+/** A field sensitivity df/dB given in Hz/T, shown per gauss with a prefix (2.1335 MHz/G). */
+export function sensitivityText(hzPerT: number | null | undefined, digits = 7, noise?: NoiseFloor): string {
+  return prefixedText(hzPerT === null || hzPerT === undefined ? hzPerT : hzPerT * 1e-4, 'Hz/G', { digits, noise: noise && { ...noise, scale: noise.scale * 1e-4 } });
+}
+
+/** A field curvature d²f/dB² given in Hz/T², shown per gauss squared with a prefix. */
+export function curvatureText(hzPerT2: number | null | undefined, digits = 7, noise?: NoiseFloor): string {
+  return prefixedText(hzPerT2 === null || hzPerT2 === undefined ? hzPerT2 : hzPerT2 * 1e-8, 'Hz/G²', { digits, noise: noise && { ...noise, scale: noise.scale * 1e-8 } });
+}
+
+/** A flux density in T, or G / mG below 0.1 T (the lab habit for bias fields). */
+export function fieldText(tesla: number | null | undefined, digits = 6, noise?: NoiseFloor): string {
+  const v = cleanValue(tesla, noise);
+  if (v === undefined) return MISSING;
+  const a = Math.abs(v);
+  if (a === 0) return '0 T';
+  if (a >= 0.1) return `${trimNumber(v, digits)} T`;
+  if (a >= 1e-4) return `${trimNumber(v * 1e4, digits)} G`;
+  return `${trimNumber(v * 1e4 * 1e3, digits)} mG`;
+}
+
+/** A length in m, cm, mm, µm or nm. */
+export function lengthText(m: number | null | undefined, digits = 4, noise?: NoiseFloor): string {
+  const v = cleanValue(m, noise);
+  if (v === undefined) return MISSING;
+  const a = v === 0 ? Math.abs(noise?.scale ?? 0) : Math.abs(v);
+  const shown = (scale: number, unit: string): string => `${trimNumber(v / scale, digits)} ${unit}`;
+  if (a === 0) return '0 m';
+  if (a >= 1) return shown(1, 'm');
+  if (a >= 1e-2) return shown(1e-2, 'cm');
+  if (a >= 1e-3) return shown(1e-3, 'mm');
+  if (a >= 1e-6) return shown(1e-6, 'µm');
+  return shown(1e-9, 'nm');
+}
+
+/** A field gradient in T/m (or mT/m when small). */
+export function gradientText(tPerM: number | null | undefined, digits = 5, noise?: NoiseFloor): string {
+  return prefixedText(tPerM, 'T/m', { digits, noise });
+}
+
+/** A speed in m/s. */
+export function speedText(mPerS: number | null | undefined, digits = 4): string {
+  const v = cleanValue(mPerS);
+  return v === undefined ? MISSING : `${trimNumber(v, digits)} m/s`;
+}
+
+/** A fraction as per cent. */
+export function percentText(fraction: number | null | undefined, digits = 3, noise?: NoiseFloor): string {
+  const v = cleanValue(fraction, noise);
+  return v === undefined ? MISSING : `${trimNumber(v * 100, digits)} %`;
 }

@@ -2,16 +2,16 @@
 import type { LevelModel } from '../model/types';
 import type { ExactAtField } from './exactAtField';
 import type { EvaluationNote, WorkingField } from './levelEvaluation';
-import { fieldText } from './quantityText';
+import { fieldInUnit } from './writtenUnit';
 
 export function regimeNotes(level: LevelModel, f: WorkingField, r: ExactAtField): EvaluationNote[] {
   const notes: EvaluationNote[] = r.errors.map((e) => ({ code: 'level-too-large', message: `level '${level.name}': ${e}`, range: level.nameRange }));
-  const where = `at ${f.source.kind} ${f.source.name} (${fieldText(f.tesla)})`;
+  const where = `at ${f.source.kind} ${f.source.name} (${fieldInUnit(f.tesla, { unit: f.unit })})`;
   const what = `level ${level.species.name}.${level.name}`;
   const lowLabels = level.kind === 'term' ? '|J, m_J>' : '|F, m_F>';
   const highLabels = level.kind === 'term' ? '|m_L, m_S>' : '|m_J, m_I>';
   if (r.regime?.verdict === 'intermediate') {
-    const limit = r.regime.linear_limit_T !== null ? `; the linear formula holds to 1 % only below ${fieldText(r.regime.linear_limit_T)}` : '';
+    const limit = r.regime.linear_limit_T !== null ? `; the linear formula holds to 1 % only below ${fieldInUnit(r.regime.linear_limit_T, { family: f.unit })}` : '';
     notes.push({ code: 'zeeman-not-linear', message: `${what} is in the intermediate regime ${where}${limit}. Sublevel energies come from exact diagonalisation.`, range: f.range });
   } else if (r.regime?.verdict.startsWith('strong')) {
     notes.push({

@@ -17,7 +17,8 @@ import type { ResonanceModel, SettingsModel, SublevelName } from '../model/types
 import type { WorkingField } from './levelEvaluation';
 import { engineSpec } from './levelSpec';
 import { polarizationName } from './polarizationName';
-import { fieldText, frequencyText } from './quantityText';
+import { frequencyText } from './quantityText';
+import { fieldInUnit } from './writtenUnit';
 import type { MagneticTransitionResult, ResonanceResult } from './resultTypes';
 
 /** Field points scanned for roots over the search range. */
@@ -34,6 +35,7 @@ export function evaluateResonance(
     name: r.name,
     ...(r.level ? { species: r.level.species.name, level: r.level.name } : {}),
     range_T: [r.rangeT.fromT, r.rangeT.toT],
+    ...(r.rangeT.fromUnit && r.rangeT.toUnit ? { range_units: [r.rangeT.fromUnit, r.rangeT.toUnit] as [string, string] } : {}),
     at_fields: [],
   };
   const level = r.level;
@@ -70,7 +72,7 @@ export function evaluateResonance(
       problems.push({
         code: 'resonance-unreachable',
         severity: 'warning',
-        message: `resonance '${r.name}': no ${pair ? 'transition of this pair' : `transition of level ${level.name}`} is at ${frequencyText(r.frequencyHz.value, 8)} between ${fieldText(r.rangeT.fromT)} and ${fieldText(r.rangeT.toT)}`,
+        message: `resonance '${r.name}': no ${pair ? 'transition of this pair' : `transition of level ${level.name}`} is at ${frequencyText(r.frequencyHz.value, 8)} between ${fieldInUnit(r.rangeT.fromT, { unit: r.rangeT.fromUnit })} and ${fieldInUnit(r.rangeT.toT, { unit: r.rangeT.toUnit })}`,
         range: r.frequencyHz.range ?? r.nameRange,
       });
     }

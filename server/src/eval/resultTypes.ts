@@ -149,6 +149,10 @@ export interface MagnetResult {
   field_T?: number;
   gradient_T_per_m?: number;
   length_m?: number;
+  /** The units the file wrote the settings in (reports show them back in these units). */
+  field_unit?: string;
+  gradient_unit?: string;
+  length_unit?: string;
 }
 
 export interface BeamSublevelResult {
@@ -162,8 +166,8 @@ export interface BeamSublevelResult {
   population: number;
   /** Flux-averaged deflection at the detector, m (positive along +z for a positive moment and gradient). */
   mean_deflection_m: number;
-  /** Maximum of this sublevel's own profile, m. */
-  peak_m: number;
+  /** Maximum of this sublevel's own profile, m; absent for a sublevel with population 0. */
+  peak_m?: number;
 }
 
 export interface BeamResult {
@@ -243,6 +247,8 @@ export interface ResonanceResult {
   level?: string;
   /** The field range searched for resonances and field-insensitive points. */
   range_T: [number, number];
+  /** The units the file wrote the range in. */
+  range_units?: [string, string];
   at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; transitions: MagneticTransitionResult[] }[];
   /** Fields where df/dB = 0 for the chosen pair. */
   field_insensitive?: { field_T: number; frequency_Hz: number; d2f_dB2_Hz_per_T2: number }[];
@@ -270,7 +276,8 @@ export interface EvaluationResult {
   species: SpeciesResult[];
   levels: LevelResult[];
   terms: TermResult[];
-  fields: { name: string; field_T?: number }[];
+  /** `field_unit`: the unit the file wrote the field in (reports show it back in that unit). */
+  fields: { name: string; field_T?: number; field_unit?: string }[];
   magnets: MagnetResult[];
   beams: BeamResult[];
   lines: LineResult[];

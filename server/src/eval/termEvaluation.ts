@@ -2,6 +2,7 @@
  * A whole LS term with fine structure: its J levels at zero field (Landé interval rule) and the
  * exact sublevels at every working field, from weak field to Paschen–Back.
  */
+import { configurationText } from './designationText';
 import { allowedJ, formatTermSymbol } from '../physics/termSymbol';
 import { fineZeroFieldHz } from '../physics/engine';
 import { landeGJ } from '../physics/gFactors';
@@ -20,7 +21,7 @@ export function evaluateTerm(level: LevelModel, settings: SettingsModel, fields:
   return {
     species: level.species.name,
     level: level.name,
-    designation: { text: level.designationText, unicode: formatTermSymbol(term, 'unicode'), configuration: level.configuration?.text ?? null },
+    designation: { text: level.designationText, unicode: formatTermSymbol(term, 'unicode'), configuration: configurationText(level.configuration) },
     S: term.twoS / 2,
     L: term.L,
     zeta_Hz: { value: level.zeta.value, source: level.zeta.source },

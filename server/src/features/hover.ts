@@ -68,7 +68,7 @@ function declaredSections(d: Declared, ctx: HoverContext): string[] {
     case 'level':
       return levelSections(d.item, ctx);
     case 'field':
-      return [fieldSection(d.item.name, d.item.tesla?.value, { result: ctx.analysis.result, options: ctx.options })];
+      return [fieldSection(d.item.name, d.item.tesla?.value, { result: ctx.analysis.result, options: ctx.options }, d.item.tesla?.unit)];
     case 'magnet':
       return magnetSectionFor(d.item.name, ctx);
     case 'beam':
@@ -77,7 +77,7 @@ function declaredSections(d: Declared, ctx: HoverContext): string[] {
       return [lineSection(d.item, ctx.analysis.result, ctx.options.sublevelRows)];
     case 'resonance': {
       const r = ctx.analysis.result?.resonances.find((x) => x.name === d.item.name);
-      return r ? [resonanceSection(r, ctx.options.sublevelRows)] : [];
+      return r ? [resonanceSection(r, ctx.options.sublevelRows, ctx.analysis.result)] : [];
     }
     default:
       return [];

@@ -7,7 +7,7 @@
  */
 import { type InlayHint, InlayHintKind, type Position, type Range } from 'vscode-languageserver-types';
 import type { Analysis } from '../eval/analyze';
-import { frequencyText, trimNumber } from '../eval/quantityText';
+import { frequencyText, prefixedText, trimNumber } from '../eval/quantityText';
 import type { BlockNode, LevelNode } from '../format/ast';
 import { comparePositions } from '../format/positions';
 import type { SetupModel } from '../model/types';
@@ -69,7 +69,7 @@ function blockHints(analysis: Analysis, model: SetupModel, block: BlockNode, out
       const fieldSetting = block.settings.find((s) => s.key.text === 'field');
       if (m.fieldT && fieldSetting) out.push(hint(fieldSetting.range.end, `μ_B·B/h ${frequencyText(zeemanScaleHz(m.fieldT.value), 5)}`, 'Zeeman scale: shift of a sublevel with g·m = 1'));
       const gradSetting = block.settings.find((s) => s.key.text === 'gradient');
-      if (m.gradientTPerM && gradSetting) out.push(hint(gradSetting.range.end, `μ_B·b ${trimNumber(bohrForceN(m.gradientTPerM.value), 4)} N`, 'force on a moment of one Bohr magneton'));
+      if (m.gradientTPerM && gradSetting) out.push(hint(gradSetting.range.end, `μ_B·b ${prefixedText(bohrForceN(m.gradientTPerM.value), 'N', { digits: 4 })}`, 'force on a moment of one Bohr magneton'));
       break;
     }
     case 'beam': {

@@ -51,7 +51,8 @@ export function buildResonance(node: BlockNode, species: NameIndex<SpeciesModel>
           problems.add('resonance-range-malformed', 'the range starts and ends at the same field; give two different fields', s.valueText.range);
           break;
         }
-        r.rangeT = { fromT: Math.min(a.value, b.value), toT: Math.max(a.value, b.value), range: s.valueText.range };
+        const [from, to] = a.value < b.value ? [a, b] : [b, a];
+        r.rangeT = { fromT: from.value, toT: to.value, range: s.valueText.range, ...(from.unit ? { fromUnit: from.unit } : {}), ...(to.unit ? { toUnit: to.unit } : {}) };
         break;
       }
       case 'two_photon': {

@@ -51,7 +51,8 @@ export function readPartQuantity(
   }
   if (result.si === undefined || !Number.isFinite(result.si)) return undefined;
   const uncertainty = result.siUncertainty;
-  return { value: result.si, source: FILE_SOURCE, range: part.range, ...(uncertainty !== undefined ? { uncertainty } : {}) };
+  const unit = part.kind === 'quantity' ? part.unit.text : undefined;
+  return { value: result.si, source: FILE_SOURCE, range: part.range, ...(uncertainty !== undefined ? { uncertainty } : {}), ...(unit !== undefined ? { unit } : {}) };
 }
 
 /** A plain number (no unit). */

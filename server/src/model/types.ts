@@ -16,6 +16,8 @@ export interface Valued<T> {
   range?: Range;
   /** Standard uncertainty, when the file wrote e.g. `0.35(2)`. */
   uncertainty?: number;
+  /** The unit the file wrote (`mT` in `25 mT`), so reports can show the value back in it. */
+  unit?: string;
 }
 
 /**
@@ -138,7 +140,7 @@ export interface ResonanceModel {
   upper?: SublevelName;
   frequencyHz?: Valued<number>;
   /** Field range for resonance and field-insensitive searches. */
-  rangeT: { fromT: number; toT: number; range?: Range };
+  rangeT: { fromT: number; toT: number; range?: Range; fromUnit?: string; toUnit?: string };
   twoPhoton: boolean;
 }
 

@@ -3,8 +3,10 @@
  * when the evaluation computed it, the deflection of each sublevel at the detector, the peaks,
  * and whether neighbouring peaks are resolved.
  */
+import { levelDesignationText } from '../../eval/designationText';
 import type { BeamResult } from '../../eval/resultTypes';
-import { lengthText, trimNumber } from '../../eval/quantityText';
+import { gradientText, lengthText, speedText, trimNumber } from '../../eval/quantityText';
+import { beamPositionNoise } from '../../eval/noiseFloors';
 import type { BeamModel } from '../../model/types';
 import { md, mdTable, mdTitle } from '../shared/markdown';
 import { valueInUnits } from '../shared/units';
@@ -26,13 +28,13 @@ function sourceText(b: BeamModel): string {
 
 function inputs(b: BeamModel): string {
   const lines = [mdTitle(`beam ${md(b.name)}`)];
-  lines.push(`species: ${b.species ? md(b.species.name) : 'not given'}; level: ${b.level ? `${md(b.level.name)} (${md(b.level.designationText)})` : 'not given'}`);
+  lines.push(`species: ${b.species ? md(b.species.name) : 'not given'}; level: ${b.level ? `${md(b.level.name)} (${md(levelDesignationText(b.level))})` : 'not given'}`);
   lines.push(`source: ${sourceText(b)}`);
   const sl = b.slits?.value;
   if (sl) lines.push(`slits: ${lengthText(sl.firstM)} and ${lengthText(sl.secondM)}, ${lengthText(sl.separationM)} apart`);
   lines.push(`magnet: ${b.magnet ? md(b.magnet.name) : 'not given'}`);
-  if (b.driftM) lines.push(`drift = ${valueInUnits(b.driftM.value, 'length').join(' = ')}`);
-  if (b.detectorM) lines.push(`detector = ${valueInUnits(b.detectorM.value, 'length').join(' = ')}`);
+  if (b.driftM) lines.push(`drift = ${valueInUnits(b.driftM.value, 'length', b.driftM.unit).join(' = ')}`);
+  if (b.detectorM) lines.push(`detector = ${valueInUnits(b.detectorM.value, 'length', b.detectorM.unit).join(' = ')}`);
   return lines.join('  \n');
 }
 
@@ -47,7 +49,7 @@ export function beamVerdict(r: BeamResult): string | undefined {
       ? ''
       : r.resolving_gradient_T_per_m === null
         ? '; no gradient up to 100× this one resolves them'
-        : `; resolved from a gradient of ${trimNumber(r.resolving_gradient_T_per_m, 3)} T/m`;
+        : `; resolved from a gradient of ${gradientText(Math.abs(r.resolving_gradient_T_per_m), 3)}`;
   return `${peaks}, not all resolved${need}`;
 }
 
@@ -56,18 +58,19 @@ function results(r: BeamResult, maxRows: number): string | undefined {
   const parts: string[] = [];
   const verdict = beamVerdict(r);
   if (verdict) parts.push(`${mdTitle('At the detector')}: ${verdict}`);
-  if (r.speeds) parts.push(`mean speed ${trimNumber(r.speeds.mean_m_per_s, 4)} m/s, most probable ${trimNumber(r.speeds.most_probable_m_per_s, 4)} m/s`);
+  if (r.speeds) parts.push(`mean speed ${speedText(r.speeds.mean_m_per_s)}, most probable ${speedText(r.speeds.most_probable_m_per_s)}`);
+  const noise = beamPositionNoise(r);
   if (r.sublevels.length > 0) {
     parts.push(
       mdTable(
         ['sublevel', 'μ/μ_B', 'population', 'mean deflection'],
-        r.sublevels.slice(0, maxRows).map((s) => [md(s.label), trimNumber(s.moment_bohr, 4), trimNumber(s.population, 3), lengthText(s.mean_deflection_m)]),
+        r.sublevels.slice(0, maxRows).map((s) => [md(s.label), trimNumber(s.moment_bohr, 4), trimNumber(s.population, 3), lengthText(s.mean_deflection_m, 4, noise)]),
       ),
     );
   }
   if (r.peaks.length > 0) {
     parts.push(
-      `peaks: ${r.peaks.map((p) => `${lengthText(p.position_m)}${p.fwhm_m !== null ? ` (FWHM ${lengthText(p.fwhm_m)})` : ''}`).join('; ')}`,
+      `peaks: ${r.peaks.map((p) => `${lengthText(p.position_m, 4, noise)}${p.fwhm_m !== null ? ` (FWHM ${lengthText(p.fwhm_m)})` : ''}`).join('; ')}`,
     );
   }
   for (const c of r.cautions) parts.push(`⚠ ${md(c)}`);

@@ -16,8 +16,9 @@ export function zeemanScaleHz(tesla: number): number {
   return BOHR_MAGNETON_HZ_PER_T * tesla;
 }
 
-export function fieldValueLines(tesla: number): string[] {
-  return [`= ${valueInUnits(tesla, 'flux-density').join(' = ')}`, `Zeeman scale μ_B·B/h = ${frequencyText(zeemanScaleHz(tesla))}`];
+/** The field in the unit the file wrote (`unit`) and in the other unit family, and its Zeeman scale. */
+export function fieldValueLines(tesla: number, unit?: string): string[] {
+  return [`= ${valueInUnits(tesla, 'flux-density', unit).join(' = ')}`, `Zeeman scale μ_B·B/h = ${frequencyText(zeemanScaleHz(tesla))}`];
 }
 
 /** Tables of every evaluated level at the field from `source`, up to the options' limits. */
@@ -45,10 +46,15 @@ export function levelsAtFieldSection(
   return parts.length > 0 ? parts.join('\n\n') : undefined;
 }
 
-export function fieldSection(name: string, tesla: number | undefined, ctx: { result: EvaluationResult | undefined; options: HoverOptions }): string {
+export function fieldSection(
+  name: string,
+  tesla: number | undefined,
+  ctx: { result: EvaluationResult | undefined; options: HoverOptions },
+  unit?: string,
+): string {
   const head = `${mdTitle(`field ${md(name)}`)}`;
   if (tesla === undefined) return `${head}  \nno valid value yet`;
-  const body = [`${head}  \n${fieldValueLines(tesla).join('  \n')}`];
+  const body = [`${head}  \n${fieldValueLines(tesla, unit).join('  \n')}`];
   const tables = levelsAtFieldSection(ctx.result, { kind: 'field', name }, ctx.options);
   if (tables) body.push(tables);
   return body.join('\n\n');

@@ -3,7 +3,9 @@
  * its vacuum wavelength, and the Zeeman components at each working field (strongest first).
  */
 import type { EvaluationResult, LevelResult, LineResult } from '../../eval/resultTypes';
-import { fieldText, frequencyText, trimNumber } from '../../eval/quantityText';
+import { frequencyText, trimNumber } from '../../eval/quantityText';
+import { polarizationSymbol } from '../../eval/polarizationName';
+import { fieldInUnit, workingFieldUnit } from '../../eval/writtenUnit';
 import type { LineModel } from '../../model/types';
 import { SPEED_OF_LIGHT } from '../../physics/constants';
 import { md, mdTable, mdTitle } from '../shared/markdown';
@@ -13,7 +15,8 @@ function levelLine(role: string, name: string | undefined, r: LevelResult | unde
   if (!name) return `${role}: not resolved`;
   if (!r) return `${role}: ${md(name)} (no valid J level yet)`;
   const parity = r.designation.parity ? `, ${r.designation.parity}` : '';
-  return `${role}: ${md(r.level)} — ${md(r.designation.text)} (J = ${r.J_text}${parity}), g_J = ${trimNumber(r.g_J.used, 6)}`;
+  const shown = [r.designation.configuration, r.designation.unicode].filter((x) => x).join(' ');
+  return `${role}: ${md(r.level)} — ${md(shown)} (J = ${r.J_text}${parity}), g_J = ${trimNumber(r.g_J.used, 6)}`;
 }
 
 /** The line frequency and vacuum wavelength: from the evaluation's line centre, else from the two level energies. */
@@ -27,17 +30,15 @@ export function lineFrequency(
   return { hz, vacuumNm: (SPEED_OF_LIGHT / Math.abs(hz)) * 1e9 };
 }
 
-const POLARIZATION: Record<string, string> = { pi: 'π', 'sigma+': 'σ+', 'sigma-': 'σ−' };
-
-function componentsSection(r: LineResult, maxRows: number): string[] {
+function componentsSection(r: LineResult, maxRows: number, result: EvaluationResult | undefined): string[] {
   const out: string[] = [];
   for (const at of r.at_fields) {
     if (at.components.length === 0) continue;
     const sorted = [...at.components].sort((a, b) => b.strength - a.strength);
-    const rows = sorted.slice(0, maxRows).map((c) => [POLARIZATION[c.polarization] ?? md(c.polarization), `${md(c.lower_label)} → ${md(c.upper_label)}`, frequencyText(c.offset_Hz), trimNumber(c.strength, 3)]);
+    const rows = sorted.slice(0, maxRows).map((c) => [md(polarizationSymbol(c.polarization)), `${md(c.lower_label)} → ${md(c.upper_label)}`, frequencyText(c.offset_Hz), trimNumber(c.strength, 3)]);
     const more = sorted.length - rows.length;
     out.push(
-      `${mdTitle(`${sorted.length} components`)} at ${md(at.source.kind)} ${md(at.source.name)} (${fieldText(at.field_T)}), strongest first`,
+      `${mdTitle(`${sorted.length} components`)} at ${md(at.source.kind)} ${md(at.source.name)} (${fieldInUnit(at.field_T, { unit: result && workingFieldUnit(result, at.source) })}), strongest first`,
       mdTable(['pol.', 'lower → upper', 'offset from centre', 'strength'], rows) + (more > 0 ? `\n\n… and ${more} more` : ''),
     );
   }
@@ -59,5 +60,5 @@ export function lineSection(line: LineModel, result: EvaluationResult | undefine
   if (r?.g_eff !== undefined) lines.push(`effective Landé factor g_eff = ${trimNumber(r.g_eff, 6)}`);
   const f = lineFrequency(r, lower, upper);
   if (f) lines.push(`ν = ${frequencyText(f.hz, 9)}, vacuum wavelength ${trimNumber(f.vacuumNm, 8)} nm`);
-  return [lines.join('  \n'), ...(r ? componentsSection(r, maxRows) : [])].join('\n\n');
+  return [lines.join('  \n'), ...(r ? componentsSection(r, maxRows, result) : [])].join('\n\n');
 }

@@ -4,7 +4,7 @@
  * here when the evaluation carries them.
  */
 import type { EvaluationResult, MagnetResult } from '../../eval/resultTypes';
-import { trimNumber } from '../../eval/quantityText';
+import { prefixedText } from '../../eval/quantityText';
 import { BOHR_MAGNETON } from '../../physics/constants';
 import { md, mdTitle } from '../shared/markdown';
 import { valueInUnits } from '../shared/units';
@@ -19,12 +19,12 @@ export function bohrForceN(gradientTPerM: number): number {
 
 export function magnetSection(m: MagnetResult, ctx: { result: EvaluationResult | undefined; options: HoverOptions }): string {
   const lines = [mdTitle(`magnet ${md(m.name)}`)];
-  if (m.field_T !== undefined) lines.push(`field ${fieldValueLines(m.field_T).join('; ')}`);
+  if (m.field_T !== undefined) lines.push(`field ${fieldValueLines(m.field_T, m.field_unit).join('; ')}`);
   else lines.push('field: not given');
   if (m.gradient_T_per_m !== undefined) {
-    lines.push(`gradient = ${valueInUnits(m.gradient_T_per_m, 'gradient').join(' = ')}; force on 1 μ_B: ${trimNumber(bohrForceN(m.gradient_T_per_m), 5)} N`);
+    lines.push(`gradient = ${valueInUnits(m.gradient_T_per_m, 'gradient', m.gradient_unit).join(' = ')}; force on 1 μ_B: ${prefixedText(bohrForceN(m.gradient_T_per_m), 'N', { digits: 5 })}`);
   } else lines.push('gradient: not given');
-  if (m.length_m !== undefined) lines.push(`length = ${valueInUnits(m.length_m, 'length').join(' = ')}`);
+  if (m.length_m !== undefined) lines.push(`length = ${valueInUnits(m.length_m, 'length', m.length_unit).join(' = ')}`);
   else lines.push('length: not given');
   const parts = [lines.join('  \n')];
   const beams = (ctx.result?.beams ?? []).filter((b) => b.magnet === m.name);

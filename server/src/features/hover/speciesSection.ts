@@ -1,4 +1,5 @@
 /** A species: built-in or by hand, mass, nuclear spin, g_I, and its levels, each number with its source. */
+import { levelDesignationText } from '../../eval/designationText';
 import { halfText } from '../../eval/halves';
 import { trimNumber } from '../../eval/quantityText';
 import type { SpeciesModel } from '../../model/types';
@@ -14,7 +15,7 @@ export function speciesSection(s: SpeciesModel): string {
   lines.push(`I = ${halfText(s.twoI.value)} (${md(s.twoI.source)})`);
   if (s.twoI.value > 0) lines.push(`g_I = ${trimNumber(s.gI.value, 8)} in units of μ_B (${md(s.gI.source)})`);
   if (s.builtin?.muI) lines.push(`μ_I = ${trimNumber(s.builtin.muI.value, 8)} μ_N (${md(s.builtin.muI.source)})`);
-  if (s.levels.length > 0) lines.push(`levels here: ${s.levels.map((l) => `${md(l.name)} (${md(l.designationText)})`).join(', ')}`);
+  if (s.levels.length > 0) lines.push(`levels here: ${s.levels.map((l) => `${md(l.name)} (${md(levelDesignationText(l))})`).join(', ')}`);
   if (s.builtin && s.builtin.levels.length > 0) {
     lines.push(`built-in levels: ${s.builtin.levels.map((l) => md(l.designation)).join(', ')}`);
   }

@@ -3,6 +3,7 @@
  * J values the term allows, the number of sublevels, and the parity. When the term is invalid
  * (no result), what can still be read from the text: the allowed J for its S and L.
  */
+import { configurationText } from '../../eval/designationText';
 import type { LevelResult } from '../../eval/resultTypes';
 import { halfText } from '../../eval/halves';
 import { trimNumber } from '../../eval/quantityText';
@@ -54,7 +55,7 @@ function unevaluatedTermSection(level: LevelModel): string {
   const twoI = level.species.twoI.value;
   const parity = level.configuration?.parity ?? term.parityMark;
   const head = [mdTitle(md(formatTermSymbol(term, 'unicode')))];
-  if (level.configuration) head.push(`— ${md(level.configuration.text)}`);
+  if (level.configuration) head.push(`— ${md(configurationText(level.configuration) ?? '')}`);
   head.push(`— ${parityText(parity)}`);
   return [
     head.join(' '),

@@ -5,15 +5,9 @@
 import type { BlockKind } from '../../format/ast';
 import { convertSI, type Dimension } from '../../format/units';
 import { trimNumber } from '../../eval/quantityText';
+import { displayUnit, inWrittenUnit } from '../../eval/writtenUnit';
 
-/** Display spellings for ASCII unit texts. */
-const DISPLAY: Readonly<Record<string, string>> = {
-  uT: 'µT', um: 'µm', ueV: 'µeV', uG: 'µG', us: 'µs', 'cm^-1': 'cm⁻¹', degC: '°C', muN: 'μ_N', muB: 'μ_B',
-};
-
-export function displayUnit(unit: string): string {
-  return DISPLAY[unit] ?? unit;
-}
+export { displayUnit };
 
 /**
  * Unit families per dimension, largest unit first. A hover shows one value per family in the
@@ -107,10 +101,16 @@ function bestInFamily(si: number, d: Dimension, family: readonly string[]): stri
   return chosen ? `${trimNumber(chosen.value, 7)} ${displayUnit(chosen.unit)}` : undefined;
 }
 
-/** The SI value written once per unit family, e.g. ['0.45 T', '4.5 kG']. */
-export function valueInUnits(si: number, d: Dimension): string[] {
-  const out: string[] = [];
+/**
+ * The SI value written once per unit family, e.g. ['0.45 T', '4.5 kG']; with `written` (the unit
+ * the file used) that form comes first and its family's other form is left out.
+ */
+export function valueInUnits(si: number, d: Dimension, written?: string): string[] {
+  const echoed = inWrittenUnit(si, d, written);
+  const out: string[] = echoed ? [echoed] : [];
+  const writtenFamily = written === undefined ? undefined : FAMILIES[d].find((f) => f.includes(written));
   for (const family of FAMILIES[d]) {
+    if (echoed && family === writtenFamily) continue;
     const text = bestInFamily(si, d, family);
     if (text && !out.includes(text)) out.push(text);
   }

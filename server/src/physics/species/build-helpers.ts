@@ -3,6 +3,7 @@
  * source, and that record how derived numbers were obtained.
  */
 import { nuclearGFromMoment, publishedEnergyToHz } from './conversions';
+import { FROM_MEMORY } from './sources';
 import type { PublishedEnergy, PublishedEnergyUnit, Sourced } from './types';
 
 /** Wraps a value with its citation. */
@@ -27,7 +28,8 @@ export function energy(
   source: string,
 ): { energyHz: Sourced<number>; energyPublished: PublishedEnergy } {
   return {
-    energyHz: sourced(publishedEnergyToHz(value, unit), `${source} [${value} ${unit}, converted to Hz]`),
+    // A recalled value stays just "from memory"; the exact unit conversion adds nothing to cite.
+    energyHz: sourced(publishedEnergyToHz(value, unit), source === FROM_MEMORY ? FROM_MEMORY : `${source} [${value} ${unit}, converted to Hz]`),
     energyPublished: { value, unit, source },
   };
 }
@@ -40,7 +42,7 @@ export function derivedNuclearG(mu: Sourced<number>, twoI: number): Sourced<numb
   const value = nuclearGFromMoment(mu.value, twoI) ?? Number.NaN;
   return sourced(
     value,
-    `derived: g_I = −(μ_I/μ_N)(μ_N/μ_B)/I with μ_I from ${mu.source} and CODATA 2022 magnetons; ` +
+    `derived: g_I = −(μ_I/μ_N)(μ_N/μ_B)/I with μ_I ${mu.source === FROM_MEMORY ? FROM_MEMORY : `from ${mu.source}`} and CODATA 2022 magnetons; ` +
       'bare-nucleus value, diamagnetic shielding not applied',
   );
 }

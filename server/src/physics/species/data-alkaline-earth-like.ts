@@ -4,14 +4,16 @@
  */
 import { derivedNuclearG, energy, GROUND_ENERGY, mhz, sourced } from './build-helpers';
 import { IAEA_MOMENTS_MEMORY, NIST_ASD_MEMORY, NIST_MASSES } from './sources';
+import { FROM_MEMORY } from './sources';
 import type { BuiltinSpecies } from './types';
 
-const SR88_3P1 = 'Ferrari et al., PRL 91, 243002 (2003): 88Sr 1S0–3P1 434 829 121 311(10) kHz';
-const SR87_CLOCK = 'Nemitz et al. (NICT, 2020): 87Sr clock transition 429 228 004 229 873.082(76) Hz';
+// 88Sr 1S0–3P1 frequency; the 87Sr level uses it too (the ~−60 MHz isotope shift is not applied).
+const SR88_3P1 = FROM_MEMORY;
+const SR87_CLOCK = FROM_MEMORY;
 const CIPM_2009 = 'CIPM Recommendation 2 (2009), recommended standard frequencies';
-const SR87_3P2 = 'atomic-beam magnetic resonance on the 87Sr 3P2 metastable state: A = 212.765(1) MHz, B = 67.215(15) MHz';
-const SR87_3P1_MEMORY = '87Sr 5s5p 3P1 hyperfine constants (Heider & Brink, PRA 16, 1371 (1977)) — from memory';
-const TAU_SR_3P1 = sourced(21.28e-6, 'Sr 5s5p 3P1 lifetime 21.28 µs — from memory');
+const SR87_3P2 = FROM_MEMORY;
+const SR87_3P1_MEMORY = FROM_MEMORY;
+const TAU_SR_3P1 = sourced(21.28e-6, FROM_MEMORY);
 const SR87_MU = sourced(-1.093603, IAEA_MOMENTS_MEMORY);
 const YB171_MU = sourced(0.49367, IAEA_MOMENTS_MEMORY);
 const YB_3P1_CM = 17992.007;
@@ -28,24 +30,24 @@ export const STRONTIUM_87: BuiltinSpecies = {
   gI: derivedNuclearG(SR87_MU, 9),
   levels: [
     { key: 'ground', designation: '5s2 1S0', energyHz: GROUND_ENERGY },
-    { key: '3P0', designation: '5s5p 3P°0', ...energy(429228004229873.082, 'Hz', SR87_CLOCK) },
+    { key: '3P0', designation: '5s 5p 3P°0', ...energy(429228004229873.082, 'Hz', SR87_CLOCK) },
     {
       key: '3P1',
-      designation: '5s5p 3P°1',
+      designation: '5s 5p 3P°1',
       A: mhz(-260.084, SR87_3P1_MEMORY),
       B: mhz(-35.658, SR87_3P1_MEMORY),
-      ...energy(434829121311, 'kHz', `${SR88_3P1} (88Sr value; the ~−60 MHz isotope shift is not applied)`),
+      ...energy(434829121311, 'kHz', SR88_3P1),
       lifetimeS: TAU_SR_3P1,
     },
     {
       key: '3P2',
-      designation: '5s5p 3P°2',
+      designation: '5s 5p 3P°2',
       A: mhz(212.765, SR87_3P2),
       B: mhz(67.215, SR87_3P2),
       ...energy(14898.545, 'cm-1', NIST_ASD_MEMORY),
     },
   ],
-  notes: 'Clock isotope with I = 9/2; the 1S0 ground level has only the nuclear Zeeman effect.',
+  notes: 'Clock isotope with I = 9/2; the 1S0 ground level has only the nuclear Zeeman effect. The 3P1 energy is the 88Sr value (the ~−60 MHz isotope shift is not applied).',
 };
 
 export const STRONTIUM_88: BuiltinSpecies = {
@@ -58,8 +60,8 @@ export const STRONTIUM_88: BuiltinSpecies = {
   twoI: sourced(0, 'even–even nucleus, I = 0 (IAEA nuclear moments table lists no moment)'),
   levels: [
     { key: 'ground', designation: '5s2 1S0', energyHz: GROUND_ENERGY },
-    { key: '3P0', designation: '5s5p 3P°0', ...energy(429228066418012, 'Hz', `${CIPM_2009}: 88Sr 1S0–3P0`) },
-    { key: '3P1', designation: '5s5p 3P°1', ...energy(434829121311, 'kHz', SR88_3P1), lifetimeS: TAU_SR_3P1 },
+    { key: '3P0', designation: '5s 5p 3P°0', ...energy(429228066418012, 'Hz', `${CIPM_2009}: 88Sr 1S0–3P0`) },
+    { key: '3P1', designation: '5s 5p 3P°1', ...energy(434829121311, 'kHz', SR88_3P1), lifetimeS: TAU_SR_3P1 },
   ],
 };
 
@@ -75,13 +77,13 @@ export const YTTERBIUM_171: BuiltinSpecies = {
   gI: derivedNuclearG(YB171_MU, 1),
   levels: [
     { key: 'ground', designation: '4f14 6s2 1S0', energyHz: GROUND_ENERGY },
-    { key: '3P0', designation: '4f14 6s6p 3P°0', ...energy(518295836590864, 'Hz', `${CIPM_2009}: 171Yb 1S0–3P0`) },
+    { key: '3P0', designation: '4f14 6s 6p 3P°0', ...energy(518295836590864, 'Hz', `${CIPM_2009}: 171Yb 1S0–3P0`) },
     {
       key: '3P1',
-      designation: '4f14 6s6p 3P°1',
-      A: mhz(3957.19, '171Yb 6s6p 3P1 hyperfine constant — from memory'),
-      ...energy(YB_3P1_CM, 'cm-1', `${NIST_ASD_MEMORY} (natural-Yb value)`),
-      lifetimeS: sourced(870e-9, 'Yb 6s6p 3P1 lifetime ≈ 870 ns — from memory'),
+      designation: '4f14 6s 6p 3P°1',
+      A: mhz(3957.19, FROM_MEMORY),
+      ...energy(YB_3P1_CM, 'cm-1', NIST_ASD_MEMORY),
+      lifetimeS: sourced(870e-9, FROM_MEMORY),
     },
   ],
   notes: 'Clock and qubit isotope with I = 1/2; no quadrupole structure.',
@@ -97,7 +99,7 @@ export const YTTERBIUM_174: BuiltinSpecies = {
   twoI: sourced(0, 'even–even nucleus, I = 0 (IAEA nuclear moments table lists no moment)'),
   levels: [
     { key: 'ground', designation: '4f14 6s2 1S0', energyHz: GROUND_ENERGY },
-    { key: '3P1', designation: '4f14 6s6p 3P°1', ...energy(YB_3P1_CM, 'cm-1', `${NIST_ASD_MEMORY} (natural-Yb value)`) },
+    { key: '3P1', designation: '4f14 6s 6p 3P°1', ...energy(YB_3P1_CM, 'cm-1', NIST_ASD_MEMORY) },
   ],
 };
 
@@ -113,8 +115,8 @@ export const CALCIUM_40: BuiltinSpecies = {
     { key: 'ground', designation: '4s2 1S0', energyHz: GROUND_ENERGY },
     {
       key: '3P1',
-      designation: '4s4p 3P°1',
-      ...energy(455986240494.15, 'kHz', 'CIPM recommended frequency of the 40Ca 1S0–3P1 line (657 nm) — from memory'),
+      designation: '4s 4p 3P°1',
+      ...energy(455986240494.15, 'kHz', FROM_MEMORY),
     },
   ],
 };

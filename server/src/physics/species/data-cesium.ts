@@ -2,6 +2,7 @@
 import { CAESIUM_HYPERFINE_HZ } from '../constants';
 import { energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
 import { NIST_MASSES, SI_SECOND, STECK_CS } from './sources';
+import { FROM_MEMORY } from './sources';
 import type { BuiltinSpecies } from './types';
 
 export const CAESIUM_133: BuiltinSpecies = {
@@ -14,7 +15,7 @@ export const CAESIUM_133: BuiltinSpecies = {
   twoI: sourced(7, STECK_CS),
   muI: sourced(
     2.5778,
-    'IAEA nuclear moments table INDC(NDS)-0794 (Stone 2019), shielding re-evaluated — value as quoted from that table; citation details from memory',
+    FROM_MEMORY,
   ),
   gI: sourced(-0.00039885395, STECK_CS),
   levels: [
@@ -43,7 +44,7 @@ export const CAESIUM_133: BuiltinSpecies = {
       C: sourced(560, STECK_CS),
       gJ: sourced(
         1.33408749,
-        'precision measurement of the excited-state Landé g-factor of the Cs D2 line in 3 T and 7 T fields, g_J = 1.334 087 49(52)',
+        FROM_MEMORY,
       ),
       ...energy(351.7257185, 'THz', STECK_CS),
       vacuumWavelengthNm: sourced(852.34727582, STECK_CS),

@@ -1,10 +1,11 @@
 /** Chromium-52 (bosonic, I = 0) and chromium-53 (I = 3/2): 7S3 ground level and the 425 nm 7P°4 level. */
 import { derivedNuclearG, energy, GROUND_ENERGY, mhz, sourced } from './build-helpers';
 import { IAEA_MOMENTS_MEMORY, NIST_ASD_MEMORY, NIST_MASSES } from './sources';
+import { FROM_MEMORY } from './sources';
 import type { BuiltinSpecies } from './types';
 
 const CR53_HFS =
-  'atomic-beam magnetic-resonance hyperfine measurements in 75As, 31P and 53Cr: A = −82.5994(16) MHz, B = +0.008(12) MHz';
+  FROM_MEMORY;
 const CR53_MU = sourced(-0.47454, IAEA_MOMENTS_MEMORY);
 
 export const CHROMIUM_52: BuiltinSpecies = {

@@ -1,19 +1,17 @@
 /**
- * Helium-4 and helium-3 with their metastable 1s2s 3S1 level (the working "ground" of
- * metastable-helium beams) and, for 4He, the 1s2p 3P_J levels of the 1083 nm line.
+ * Helium-4 and helium-3 with their metastable 1s 2s 3S1 level (the working "ground" of
+ * metastable-helium beams) and, for 4He, the 1s 2p 3P_J levels of the 1083 nm line.
  */
 import { publishedEnergyToHz } from './conversions';
 import { derivedNuclearG, energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
 import { NIST_ASD_MEMORY, NIST_MASSES } from './sources';
+import { FROM_MEMORY } from './sources';
 import type { BuiltinLevel, BuiltinSpecies, Sourced } from './types';
 
 const METASTABLE_CM = 159855.9743297;
 const METASTABLE_HZ = publishedEnergyToHz(METASTABLE_CM, 'cm-1');
 
-const CENTROID_SOURCE =
-  '2³S1–2³P centroid 276 736 495 624.6(2.4) kHz (Cancio Pastor et al., PRL 92, 023001 (2004))';
-const FS_SOURCE =
-  '2³P fine structure P0–P1 29 616 952.7(1.0) kHz, P1–P2 2 291 167.7(11.0) kHz (Giusfredi et al., Can. J. Phys. 83, 301 (2005))';
+// 2³S1–2³P centroid and 2³P fine-structure intervals, recalled (sources not confirmed as a compilation).
 const CENTROID_HZ = 276736495624.6e3;
 const P0_P1_HZ = 29616952.7e3;
 const P1_P2_HZ = 2291167.7e3;
@@ -28,24 +26,24 @@ function tripletP(twoJ: 0 | 2 | 4): Sourced<number> {
   const offset = twoJ === 4 ? p2 : twoJ === 2 ? p1 : p0;
   return sourced(
     METASTABLE_HZ + CENTROID_HZ + (offset - centroid),
-    `derived: 1s2s 3S1 energy (${NIST_ASD_MEMORY}) + ${CENTROID_SOURCE} + ${FS_SOURCE}`,
+    FROM_MEMORY,
   );
 }
 
-const TAU_2P = ns(97.9, 'He 2³P radiative lifetime — from memory');
+const TAU_2P = ns(97.9, FROM_MEMORY);
 
 const HE4_LEVELS: BuiltinLevel[] = [
   { key: 'ground', designation: '1s2 1S0', energyHz: GROUND_ENERGY },
   {
     key: 'metastable',
-    designation: '1s2s 3S1',
-    gJ: sourced(2.002237, 'He 2³S1 g-factor from bound-state theory and atomic-beam g-ratio measurements — from memory'),
+    designation: '1s 2s 3S1',
+    gJ: sourced(2.002237, FROM_MEMORY),
     ...energy(METASTABLE_CM, 'cm-1', NIST_ASD_MEMORY),
-    lifetimeS: sourced(7870, 'He 2³S1 lifetime 7870(510) s — from memory'),
+    lifetimeS: sourced(7870, FROM_MEMORY),
   },
-  { key: '3P2', designation: '1s2p 3P°2', energyHz: tripletP(4), lifetimeS: TAU_2P },
-  { key: '3P1', designation: '1s2p 3P°1', energyHz: tripletP(2), lifetimeS: TAU_2P },
-  { key: '3P0', designation: '1s2p 3P°0', energyHz: tripletP(0), lifetimeS: TAU_2P },
+  { key: '3P2', designation: '1s 2p 3P°2', energyHz: tripletP(4), lifetimeS: TAU_2P },
+  { key: '3P1', designation: '1s 2p 3P°1', energyHz: tripletP(2), lifetimeS: TAU_2P },
+  { key: '3P0', designation: '1s 2p 3P°0', energyHz: tripletP(0), lifetimeS: TAU_2P },
 ];
 
 export const HELIUM_4: BuiltinSpecies = {
@@ -57,12 +55,12 @@ export const HELIUM_4: BuiltinSpecies = {
   massU: sourced(4.00260325413, NIST_MASSES),
   twoI: sourced(0, 'even–even nucleus, I = 0 (IAEA nuclear moments table lists no moment)'),
   levels: HE4_LEVELS,
-  notes: 'Use level "metastable" (1s2s 3S1, J = 1) for metastable-helium beams and traps.',
+  notes: 'Use level "metastable" (1s 2s 3S1, J = 1) for metastable-helium beams and traps.',
 };
 
 const HE3_MU = sourced(
   -4.2552506997 / 2,
-  'derived: μ = g·I from the bare 3He nuclear g-factor −4.2552506997(35) measured in a Penning trap (Schneider et al., Nature 2022 — journal reference from memory)',
+  FROM_MEMORY,
 );
 
 export const HELIUM_3: BuiltinSpecies = {
@@ -79,10 +77,11 @@ export const HELIUM_3: BuiltinSpecies = {
     { key: 'ground', designation: '1s2 1S0', energyHz: GROUND_ENERGY },
     {
       key: 'metastable',
-      designation: '1s2s 3S1',
+      designation: '1s 2s 3S1',
       // Interval F=1/2 − F=3/2 equals (3/2)|A| for J = 1, I = 1/2; inverted because μ < 0.
-      A: mhz(-6739.701177 / 1.5, 'derived: A = −ΔW/(J + 1/2) from the 3He 2³S1 hyperfine interval 6739.701177(16) MHz (Rosner & Pipkin 1970) — from memory'),
-      gJ: sourced(2.002237, 'He 2³S1 g-factor (4He value) — from memory'),
+      // A = −ΔW/(J + 1/2) with the 2³S1 interval ΔW = 6739.701177 MHz (recalled).
+      A: mhz(-6739.701177 / 1.5, FROM_MEMORY),
+      gJ: sourced(2.002237, FROM_MEMORY),
     },
   ],
   notes: 'The metastable level energy is not tabulated for 3He (isotope shift of several GHz from 4He).',

@@ -1,12 +1,12 @@
 /** Hydrogen and deuterium: ground hyperfine masers/beams and the n = 2 levels. */
 import { derivedNuclearG, energy, GROUND_ENERGY, ns, sourced } from './build-helpers';
-import { IAEA_MOMENTS, MICROWAVE_SPLITTINGS, NIST_ASD_MEMORY, NIST_MASSES } from './sources';
+import { FROM_MEMORY, IAEA_MOMENTS, NIST_ASD_MEMORY, NIST_MASSES } from './sources';
 import type { BuiltinSpecies } from './types';
 
 const H_MU = sourced(2.792847351, IAEA_MOMENTS);
 const D_MU = sourced(0.857438231, IAEA_MOMENTS);
 /** Bound-electron g of H(1s): g_e(1 − α²/3) (Breit); the α² term is 1.775e-5 relative. */
-const H_GJ = sourced(2.0022838, 'derived from memory: g_e(1 − α²/3) bound-state (Breit) correction, CODATA g_e and α');
+const H_GJ = sourced(2.0022838, FROM_MEMORY);
 
 export const HYDROGEN: BuiltinSpecies = {
   id: 'H',
@@ -22,27 +22,27 @@ export const HYDROGEN: BuiltinSpecies = {
     {
       key: 'ground',
       designation: '1s 2S1/2',
-      A: sourced(1420405751.768, `${MICROWAVE_SPLITTINGS}: H 1s hyperfine 1 420 405 751.768(2) Hz`),
+      A: sourced(1420405751.768, FROM_MEMORY),
       gJ: H_GJ,
       energyHz: GROUND_ENERGY,
     },
     {
       key: 'metastable',
       designation: '2s 2S1/2',
-      A: sourced(177556834.3, 'Kolachevsky et al., optical measurement of the H 2S hyperfine interval, 177 556 834.3(6.7) Hz (2009)'),
+      A: sourced(177556834.3, FROM_MEMORY),
       ...energy(82258.9543992821, 'cm-1', NIST_ASD_MEMORY),
     },
     {
       key: 'P1/2',
       designation: '2p 2P°1/2',
       ...energy(82258.9191133, 'cm-1', NIST_ASD_MEMORY),
-      lifetimeS: ns(1.596, 'H 2p radiative lifetime — from memory'),
+      lifetimeS: ns(1.596, FROM_MEMORY),
     },
     {
       key: 'P3/2',
       designation: '2p 2P°3/2',
       ...energy(82259.2850014, 'cm-1', NIST_ASD_MEMORY),
-      lifetimeS: ns(1.596, 'H 2p radiative lifetime — from memory'),
+      lifetimeS: ns(1.596, FROM_MEMORY),
     },
   ],
   notes:
@@ -68,7 +68,7 @@ export const DEUTERIUM: BuiltinSpecies = {
       // The splitting ΔW = A(I + 1/2) = 3A/2 is what was measured.
       A: sourced(
         327384352.5222 / 1.5,
-        `derived: A = ΔW/(I + 1/2) from ${MICROWAVE_SPLITTINGS}: D 1s hyperfine 327 384 352.5222(17) Hz`,
+        FROM_MEMORY,
       ),
       gJ: H_GJ,
       energyHz: GROUND_ENERGY,

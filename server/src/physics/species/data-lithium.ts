@@ -1,13 +1,13 @@
 /** Lithium-6 and lithium-7: 2s ground level and the 2p D-line levels. */
 import { energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
-import { ARIMONDO, ARIMONDO_MEMORY, GEHM_LI6, IAEA_MOMENTS, MICROWAVE_SPLITTINGS, NIST_MASSES } from './sources';
+import { ARIMONDO, ARIMONDO_MEMORY, FROM_MEMORY, GEHM_LI6, IAEA_MOMENTS, NIST_MASSES } from './sources';
 import type { BuiltinSpecies } from './types';
 
 const LI_GJ_GROUND = sourced(2.0023010, ARIMONDO);
-const LI_GJ_P12 = sourced(0.6668, `${GEHM_LI6} — from memory`);
-const LI_GJ_P32 = sourced(1.335, `${GEHM_LI6} — from memory`);
+const LI_GJ_P12 = sourced(0.6668, FROM_MEMORY);
+const LI_GJ_P32 = sourced(1.335, FROM_MEMORY);
 const LI7_LINES =
-  '6,7Li D-line frequency-comb measurements (Sansonetti et al., PRL 107, 023001 (2011)); rounded to 1 MHz; citation details from memory';
+  FROM_MEMORY;
 
 export const LITHIUM_6: BuiltinSpecies = {
   id: 'Li6',
@@ -47,7 +47,7 @@ export const LITHIUM_6: BuiltinSpecies = {
       lifetimeS: ns(27.102, GEHM_LI6),
     },
   ],
-  notes: `Ground splitting check value 228.2052590(30) MHz: ${MICROWAVE_SPLITTINGS}.`,
+  notes: 'Ground splitting check value 228.2052590(30) MHz (from memory).',
 };
 
 export const LITHIUM_7: BuiltinSpecies = {
@@ -72,7 +72,8 @@ export const LITHIUM_7: BuiltinSpecies = {
       key: 'P1/2',
       designation: '2p 2P°1/2',
       // Interval F=2–F=1 equals 2A for I = 3/2, J = 1/2.
-      A: mhz(91.873 / 2, 'derived: A = interval/2 from the 7Li 2P1/2 hyperfine interval 91.873(5) MHz (Huang, NTHU PhD thesis, 2018)'),
+      // A = interval/2 with the 2P1/2 hyperfine interval 91.873 MHz (recalled).
+      A: mhz(91.873 / 2, FROM_MEMORY),
       gJ: LI_GJ_P12,
       ...energy(446.800132, 'THz', LI7_LINES),
     },
@@ -85,5 +86,5 @@ export const LITHIUM_7: BuiltinSpecies = {
       ...energy(446.810184, 'THz', LI7_LINES),
     },
   ],
-  notes: `Ground splitting check value 803.5040866(10) MHz: ${MICROWAVE_SPLITTINGS}.`,
+  notes: 'Ground splitting check value 803.5040866(10) MHz (from memory).',
 };

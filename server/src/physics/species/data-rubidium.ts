@@ -1,6 +1,7 @@
 /** Rubidium-85 and -87: 5s ground level and the 5p D-line levels. */
 import { energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
 import { IAEA_MOMENTS, NIST_MASSES, STECK_RB85, STECK_RB87 } from './sources';
+import { FROM_MEMORY } from './sources';
 import type { BuiltinSpecies } from './types';
 
 export const RUBIDIUM_85: BuiltinSpecies = {
@@ -67,11 +68,11 @@ export const RUBIDIUM_87: BuiltinSpecies = {
       designation: '5p 2P°1/2',
       A: mhz(
         408.328,
-        'Steck, "Rubidium 87 D Line Data" rev. 2.2+ — from memory; agrees with 408.340(19) MHz measured in arXiv:1611.02406',
+        FROM_MEMORY,
       ),
       gJ: sourced(0.666, STECK_RB87),
       ...energy(377.10746338, 'THz', STECK_RB87),
-      vacuumWavelengthNm: sourced(794.978851156, `${STECK_RB87} — from memory`),
+      vacuumWavelengthNm: sourced(794.978851156, FROM_MEMORY),
       lifetimeS: ns(27.679, STECK_RB87),
     },
     {

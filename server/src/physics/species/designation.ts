@@ -1,6 +1,6 @@
 /**
- * Minimal reader for the designations stored in this table ('5p 2P°3/2', '1s2s 3S1',
- * '4f14 6s6p 3P°1'). It exists to check the table's own strings; user-typed term symbols
+ * Minimal reader for the designations stored in this table ('5p 2P°3/2', '1s 2s 3S1',
+ * '4f14 6s 6p 3P°1'). It exists to check the table's own strings; user-typed term symbols
  * are handled by the term-symbol module.
  */
 

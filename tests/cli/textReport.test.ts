@@ -1,0 +1,118 @@
+/** The eval text report: unit echo, prefixes on derived units, π/σ spelling, no NaN or noise. */
+import Ajv2020 from 'ajv/dist/2020';
+import { readFileSync } from 'fs';
+import { describe, expect, it } from 'vitest';
+import { analyze } from '../../server/src/eval/analyze';
+import { finiteJsonText } from '../../server/src/eval/machineText';
+import { textReport } from '../../server/src/cli/textReport';
+
+const validate = new Ajv2020({ allErrors: true, strict: true }).compile(JSON.parse(readFileSync('docs/schema/evaluation.schema.json', 'utf8')));
+
+// An invented scenario: a sodium beam with only F = 1 populated, fields written in mT, kG and G/cm.
+const SETUP = `species Na23
+  level ground: 3s 2S1/2
+  level upper: 3p 2P°3/2
+field bias = 25 mT
+magnet sel
+  field = 2 kG
+  gradient = 50 G/cm
+  length = 10 cm
+beam b
+  level = ground
+  source = oven 600 K
+  slits = 50 um, 50 um apart 30 cm
+  magnet = sel
+  drift = 40 cm
+  detector = 20 um
+  populations = 1 1
+resonance r
+  level = ground
+  lower = 1 -1
+  upper = 2 -1
+  range = 0 mT, 20 mT
+line D2: ground -> upper
+`;
+
+function report(text: string): { text: string; json: string } {
+  const a = analyze(text);
+  if (!a.result) throw new Error('no result');
+  return { text: textReport('t.sublevel', a.result).join('\n'), json: finiteJsonText(a.result, 2) };
+}
+
+describe('eval text report', () => {
+  const { text, json } = report(SETUP);
+
+  it('shows quantities in the units the file wrote them in', () => {
+    expect(text).toContain('at field bias = 25 mT');
+    expect(text).toContain('at magnet sel = 2 kG');
+    expect(text).toMatch(/sel +2 kG +50 G\/cm +10 cm/);
+    expect(text).toContain('searched 0 mT … 20 mT');
+    expect(text).toContain('in the intermediate regime at field bias (25 mT)');
+    expect(text).not.toContain('250 G');
+  });
+
+  it('gives field sensitivities an SI prefix', () => {
+    // The slopes are the engine's (checked in tests/physics); this checks how they are written:
+    // −3.354704e9 Hz/T = −335.4704 kHz/G and 2.666337e10 Hz/T = 2.666337 MHz/G (1 G = 1e-4 T).
+    expect(text).toMatch(/-335\.\d+ kHz\/G/);
+    expect(text).toMatch(/2\.666\d+ MHz\/G/);
+    expect(text).not.toMatch(/\d{5,} Hz\/G/);
+  });
+
+  it('writes polarisations as π, σ+, σ− and never in ASCII', () => {
+    expect(text).toMatch(/ σ[+−] /);
+    expect(text).toMatch(/ π /);
+    expect(text).not.toMatch(/sigma|\bpi\b/);
+  });
+
+  it('has no NaN, Infinity or missing peak written as a number; an unpopulated sublevel says so', () => {
+    expect(text).not.toMatch(/NaN|Infinity/);
+    expect(text).toMatch(/F=2, m_F=\+2 .* not populated/);
+    expect(json).not.toMatch(/NaN|Infinity|null/);
+  });
+
+  it('the JSON leaves the peak of an unpopulated sublevel out and stays valid', () => {
+    const doc = JSON.parse(json);
+    expect(validate(doc), JSON.stringify(validate.errors)).toBe(true);
+    const unpopulated = doc.beams[0].sublevels.filter((s: { population: number }) => s.population === 0);
+    expect(unpopulated.length).toBe(5);
+    for (const s of unpopulated) expect(s).not.toHaveProperty('peak_m');
+    expect(doc.fields[0].field_unit).toBe('mT');
+    expect(doc.magnets[0]).toMatchObject({ field_unit: 'kG', gradient_unit: 'G/cm', length_unit: 'cm' });
+    expect(doc.resonances[0].range_units).toEqual(['mT', 'mT']);
+  });
+
+  it('prints the dip between well-separated peaks as 0 %, not as rounding noise', () => {
+    const li = report(readFileSync('examples/lithium-beam.sublevel', 'utf8')).text;
+    expect(li).toContain('dip 0 % of the smaller peak → resolved (criterion ≤ 80 %)');
+    expect(li).not.toMatch(/\de-\d+ %/);
+  });
+
+  it('prints the undeflected peak of an m_J = 0 sublevel as 0, not as rounding noise', () => {
+    // Invented scenario: Sr88 3P1 without a nucleus; m_J = 0 has no moment, so it is not deflected.
+    const t = report(`species Sr88
+  level t: 5s 5p 3P°1
+magnet sel
+  field = 0.3 T
+  gradient = 100 T/m
+  length = 5 cm
+beam b
+  level = t
+  source = speed 500 m/s
+  slits = 20 um, 20 um apart 30 cm
+  magnet = sel
+  drift = 40 cm
+  detector = 10 um
+`).text;
+    expect(t).toMatch(/J=1, m_J=0 +m_J=0 +0 +0 µm +0 µm/);
+    expect(t).toMatch(/^ +0 µm +50 µm +J=1, m_J=0$/m);
+    expect(t).not.toMatch(/\de-\d+ (nm|µm)/);
+  });
+
+  it('shows configurations space-separated with the ° parity mark', () => {
+    const t = report('species Li7\n  level g: 1s2.2s 2S1/2\n  level e: 1s2.2p 2Po3/2\n').text;
+    expect(t).toContain('level g: 1s2 2s ²S₁/₂');
+    expect(t).toContain('level e: 1s2 2p ²P°₃/₂');
+    expect(t).not.toContain('1s2.2');
+  });
+});
