@@ -45,6 +45,7 @@ function toJson(s: SublevelState, noNucleus: boolean): ExactSublevelResult {
     high_label: s.high.text,
     ...(s.low.scheme === 'F' && !noNucleus ? { F: s.low.twoF / 2 } : { J: (s.low.scheme === 'F' ? s.low.twoF : s.low.twoJ) / 2 }),
     m: s.twoM / 2,
+    ...(s.low.scheme === 'J' && s.low.twoMI !== null ? { m_I: s.low.twoMI / 2 } : {}),
     m_text: signedHalfText(s.twoM),
     energy_Hz: s.energyHz,
     moment_J_per_T: s.momentJT,

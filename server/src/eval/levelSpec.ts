@@ -11,9 +11,8 @@ import type { LevelModel, SettingsModel } from '../model/types';
 export function hyperfineSpec(level: LevelModel, gJ: number): HyperfineLevelSpec | undefined {
   const twoJ = level.term?.twoJ;
   if (!level.valid || twoJ === null || twoJ === undefined) return undefined;
-  // Without hyperfine constants the nucleus is a spectator: leave it out, so the level is its J sublevels.
-  const hasHyperfine = level.A !== undefined || level.B !== undefined || level.C !== undefined;
-  const twoI = hasHyperfine ? level.species.twoI.value : 0;
+  // The nucleus stays even without hyperfine constants: its g_I I_z term splits the level (J = 0 odd isotopes).
+  const twoI = level.species.twoI.value;
   const spec: HyperfineLevelSpec = {
     kind: 'hyperfine',
     twoJ,

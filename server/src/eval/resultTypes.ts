@@ -50,6 +50,8 @@ export interface SublevelResult {
   F?: number;
   J?: number;
   m: number;
+  /** m_I of a level whose nucleus has no hyperfine coupling (labels |J, m_J, m_I>). */
+  m_I?: number;
   m_text: string;
   /** Energy relative to the level's centre of gravity, E/h. */
   energy_Hz: number;
@@ -66,6 +68,8 @@ export interface ExactSublevelResult {
   J?: number;
   /** Total magnetic quantum number (the only good one at every field). */
   m: number;
+  /** m_I of a level whose nucleus has no hyperfine coupling (then m_J and m_I are both good). */
+  m_I?: number;
   m_text: string;
   energy_Hz: number;
   /** μ = −∂E/∂B (Hellmann–Feynman), J/T. */
