@@ -11,7 +11,6 @@ import { lengthText, trimNumber } from './quantityText';
 export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
   const out: Problem[] = [];
   for (const i of e.issues) {
-    if (i.severity === 'info') continue;
     const where = i.code.includes('detector') ? beam.detectorM?.range : i.code.includes('slit') ? beam.slits?.range : undefined;
     out.push({ code: i.code, severity: i.severity, message: `beam '${beam.name}': ${i.message}`, range: where ?? beam.nameRange });
   }

@@ -66,7 +66,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   const lineProblems: Problem[] = [];
   const lines = model.lines.map((l) => evaluateLine(l, fields, gJOf, lineProblems));
   const resonances = model.resonances.map((r) => evaluateResonance(r, fields, model.settings, gJOf, lineProblems));
-  const problems = sortProblems([...earlier, ...notes.map(noteToProblem), ...beamProblems, ...lineProblems]);
+  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems]);
   const result: EvaluationResult = {
     format: EVALUATION_FORMAT,
     version: EVALUATION_VERSION,
@@ -101,6 +101,17 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     diagnostics: problems.map(toDiagnosticResult),
   };
   return { result, problems };
+}
+
+/** A note that is the same at every field (same text, same place) is said once. */
+function onceEach(notes: EvaluationNote[]): EvaluationNote[] {
+  const seen = new Set<string>();
+  return notes.filter((n) => {
+    const key = `${n.code}|${n.message}|${n.range.start.line}:${n.range.start.character}`;
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
 }
 
 function noteToProblem(n: EvaluationNote): Problem {

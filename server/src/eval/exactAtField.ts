@@ -10,14 +10,14 @@ import type { ExactSublevelResult, RegimeResultJson } from './resultTypes';
 export interface ExactAtField {
   exact: ExactSublevelResult[];
   regime?: RegimeResultJson;
-  /** Engine errors (size caps and the like), in plain words. */
-  errors: string[];
+  /** Engine errors (size caps, a solver failure), with their engine codes. */
+  errors: { code: string; message: string }[];
 }
 
 export function exactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
   const solved = solveLevel(spec, fieldT);
   const noNucleus = spec.kind === 'hyperfine' && spec.twoI === 0;
-  const errors = solved.issues.filter((i) => i.severity === 'error').map((i) => i.message);
+  const errors = solved.issues.filter((i) => i.severity === 'error').map((i) => ({ code: i.code, message: i.message }));
   if (errors.length > 0) return { exact: [], errors };
   // A level without zero-field structure has exactly linear energies in this single-level model: no regime to judge.
   if (!hasZeroFieldStructure(spec)) return { exact: solved.states.map((s) => toJson(s, noNucleus)), errors: [] };

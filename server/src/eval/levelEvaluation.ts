@@ -21,7 +21,7 @@ export interface WorkingField {
 
 /** Something the evaluation wants to tell the user about a level at a field. */
 export interface EvaluationNote {
-  code: 'zeeman-not-linear' | 'zeeman-strong-field' | 'level-too-large';
+  code: 'zeeman-not-linear' | 'zeeman-strong-field' | 'level-too-large' | 'level-not-computed';
   message: string;
   range: Range;
 }

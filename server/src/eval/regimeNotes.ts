@@ -5,7 +5,12 @@ import type { EvaluationNote, WorkingField } from './levelEvaluation';
 import { fieldText } from './quantityText';
 
 export function regimeNotes(level: LevelModel, f: WorkingField, r: ExactAtField): EvaluationNote[] {
-  const notes: EvaluationNote[] = r.errors.map((e) => ({ code: 'level-too-large', message: `level '${level.name}': ${e}`, range: level.nameRange }));
+  // Size caps do not depend on the field: the same note at every field is merged into one by the caller.
+  const notes: EvaluationNote[] = r.errors.map((e) =>
+    e.code === 'basis-too-large' || e.code === 'block-too-large'
+      ? { code: 'level-too-large', message: `level '${level.name}': ${e.message}`, range: level.nameRange }
+      : { code: 'level-not-computed', message: `level '${level.name}' could not be computed at ${f.source.kind} ${f.source.name} (${fieldText(f.tesla)}): ${e.message}`, range: f.range },
+  );
   const where = `at ${f.source.kind} ${f.source.name} (${fieldText(f.tesla)})`;
   const what = `level ${level.species.name}.${level.name}`;
   const lowLabels = level.kind === 'term' ? '|J, m_J>' : '|F, m_F>';

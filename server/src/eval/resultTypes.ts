@@ -221,7 +221,9 @@ export interface LineResult {
   upper?: string;
   /** ½(g_u + g_l) + ¼(g_u − g_l)[J_u(J_u+1) − J_l(J_l+1)]. */
   g_eff?: number;
-  /** Upper minus lower level energy, when both are known. */
+  /** The file writes the upper level first (an emission line); `lower`/`upper` are the levels by energy. */
+  written_as_emission?: boolean;
+  /** Upper minus lower level energy (always > 0), when both are known and differ. */
   line_centre_Hz?: number;
   /** Components at each working field (at zero field when the file has none). */
   at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; components: LineComponentResult[] }[];

@@ -28,7 +28,8 @@ export function checkLevelPhysics(level: LevelModel, settings: SettingsModel, pr
   const fromFile = (v: { range?: unknown } | undefined): boolean => !!v && v.range !== undefined;
 
   for (const [key, v] of [['A', level.A], ['B', level.B], ['C', level.C]] as const) {
-    if (twoI === 0 && fromFile(v)) {
+    // A rejected I already has its own error; "I = 0" would be a second, wrong message.
+    if (twoI === 0 && fromFile(v) && !level.species.spinRejected) {
       problems.add('hyperfine-without-nucleus', `${key} has no effect: species '${level.species.name}' has no nuclear spin (I = 0)`, v!.range!, {
         data: { removeSetting: key },
       });
