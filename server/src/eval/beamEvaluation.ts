@@ -4,7 +4,7 @@
  */
 import type { GJLookup } from './gJLookup';
 import {
-  BEAM_CAUTIONS,
+  beamCautions,
   DEFAULT_DIP_CRITERION,
   detectorPattern,
   smallestResolvingDrift,
@@ -42,7 +42,11 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
     sublevels: [],
     peaks: [],
     pairs: [],
-    cautions: [...BEAM_CAUTIONS],
+    cautions: beamCautions({
+      ...(beam.magnet?.fieldT ? { magnetFieldT: beam.magnet.fieldT.value } : {}),
+      ...(beam.source?.value.kind === 'oven' ? { ovenTemperatureK: beam.source.value.temperatureK } : {}),
+      ...(beam.species?.builtin ? { element: beam.species.builtin.element } : {}),
+    }),
   };
   const inputs = beamInputs(beam, gJOf);
   if (!inputs) return { result: base, issues: [] };

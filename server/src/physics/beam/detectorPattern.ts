@@ -13,6 +13,7 @@ import { groupByPeakPosition } from './groupSublevels';
 import { pairDips, type PairVerdict } from './pairDips';
 import { resolveOptions, type PatternOptions } from './patternOptions';
 import { localMaxima, peakShape, sampleAt, type LocalMaximum } from './peakShape';
+import { refinePeak } from './peakRefine';
 import { slitImage, type SlitImage } from './slitImage';
 import { speedLawFor } from './speedLawFor';
 import { gridScaleM, inverseSquareRange, sublevelExtent } from './sublevelExtent';
@@ -204,7 +205,7 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
     const inside = weighInto(out, total, weights[i], inverseWidth, support);
     offGrid += weights[i] * Math.max(0, 1 - inside);
     const own = peakShape(out, centresM, support.from, support.to);
-    const peakM = own ? own.positionM : NaN;
+    const peakM = own ? refinePeak(own.positionM, searchWidth(edgesM, own.index), [{ k: ks[i], weight: 1 }], law, image) : NaN;
     ownPeaks.push(peakM);
     summaries.push({ label: sublevels[i].label, weight: weights[i], coefficientM3PerS2: ks[i], meanDeflectionM, peakM });
   }
@@ -226,11 +227,13 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
     }
     const shape = peakShape(profile, centresM, from, to);
     if (!shape) continue;
+    const members = g.map((i) => ({ k: ks[i], weight: weights[i] }));
+    const positionM = refinePeak(shape.positionM, searchWidth(edgesM, shape.index), members, law, image);
     peaks.push({
-      positionM: shape.positionM,
+      positionM,
       fwhmM: shape.fwhmM,
       height: shape.height,
-      totalHeight: sampleAt(total, centresM, edgesM, shape.positionM),
+      totalHeight: sampleAt(total, centresM, edgesM, positionM),
       members: g.map((i) => sublevels[i].label),
       memberIndices: [...g],
     });
@@ -274,6 +277,14 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
     );
   }
   return result;
+}
+
+/** Half-width of the refinement's search around grid bin i: three of the widest neighbouring bins. */
+function searchWidth(edgesM: Float64Array, i: number): number {
+  const n = edgesM.length - 1;
+  let widest = 0;
+  for (let j = Math.max(0, i - 1); j <= Math.min(n - 1, i + 1); j++) widest = Math.max(widest, edgesM[j + 1] - edgesM[j]);
+  return 3 * widest;
 }
 
 function addDetectorChecks(result: DetectorPattern, geometry: BeamGeometry): void {
