@@ -172,7 +172,7 @@ function beamReport(b: BeamResult): string[] {
   out.push(
     ...table(
       ['sublevel', 'high-field label', 'moment/μ_B', 'mean deflection', 'own peak at'],
-      b.sublevels.map((s) => [s.label, s.high_label, trimNumber(s.moment_bohr, 6), lengthText(s.mean_deflection_m), lengthText(s.peak_m)]),
+      b.sublevels.map((s) => [s.label, s.high_label, trimNumber(s.moment_bohr, 6), lengthText(s.mean_deflection_m), s.peak_m === null ? 'no atoms' : lengthText(s.peak_m)]),
     ).map((x) => '  ' + x),
   );
   out.push('  peaks on the detector:');
@@ -185,13 +185,7 @@ function beamReport(b: BeamResult): string[] {
   for (const p of b.pairs) {
     out.push(`  peaks ${p.left + 1} and ${p.right + 1}: dip ${trimNumber(p.dip_ratio * 100, 3)} % of the smaller peak → ${p.resolved ? 'resolved' : 'NOT resolved'} (criterion ≤ ${b.criterion_dip_ratio * 100} %)`);
   }
-  if (b.resolving_gradient_T_per_m !== undefined) {
-    out.push(
-      b.resolving_gradient_T_per_m === null
-        ? '  no gradient up to 100× the present one resolves every pair'
-        : `  smallest gradient that resolves every pair: ${trimNumber(Math.abs(b.resolving_gradient_T_per_m), 4)} T/m`,
-    );
-  }
+  if (b.resolving_advice) out.push(`  ${b.resolving_advice}`);
   out.push('  cautions:');
   for (const c of b.cautions) out.push(`    - ${c}`);
   return out;

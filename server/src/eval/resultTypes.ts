@@ -167,7 +167,8 @@ export interface BeamSublevelResult {
   /** Flux-averaged deflection at the detector, m (positive along +z for a positive moment and gradient). */
   mean_deflection_m: number;
   /** Maximum of this sublevel's own profile, m. */
-  peak_m: number;
+  /** Maximum of this sublevel's own profile; null when it has no atoms (population 0). */
+  peak_m: number | null;
 }
 
 export interface BeamResult {
@@ -190,6 +191,8 @@ export interface BeamResult {
   resolving_magnet_length_m?: number | null;
   /** Smallest drift that resolves every pair; null: none up to 100× the file's. */
   resolving_drift_m?: number | null;
+  /** What would resolve the merged peaks, in words: the same sentence as the beam-unresolved diagnostic. */
+  resolving_advice?: string;
   /** Fraction of the atoms entering a detector placed at the file's offset (`detector = w at x`). */
   detector_fraction?: number;
   /** Flux fraction that falls outside the computed pattern (slow tail). */

@@ -42,13 +42,7 @@ export function beamVerdict(r: BeamResult): string | undefined {
   const peaks = `${r.peaks.length} peak${r.peaks.length === 1 ? '' : 's'}`;
   if (r.all_resolved === undefined) return peaks;
   if (r.all_resolved) return `${peaks}, all resolved`;
-  const need =
-    r.resolving_gradient_T_per_m === undefined
-      ? ''
-      : r.resolving_gradient_T_per_m === null
-        ? '; no gradient up to 100× this one resolves them'
-        : `; resolved from a gradient of ${trimNumber(r.resolving_gradient_T_per_m, 3)} T/m`;
-  return `${peaks}, not all resolved${need}`;
+  return `${peaks}, not all resolved${r.resolving_advice ? `. ${r.resolving_advice}` : ''}`;
 }
 
 function results(r: BeamResult, maxRows: number): string | undefined {
