@@ -135,8 +135,11 @@ export function detectorPattern(input: PatternInput): DetectorPattern {
   return computePattern(input);
 }
 
-/** As detectorPattern, optionally with the grouping of sublevels fixed by the caller (used by the solvers). */
-export function computePattern(input: PatternInput, fixedGroups?: number[][]): DetectorPattern {
+/**
+ * As detectorPattern, optionally with the grouping of sublevels fixed by the caller (used by the
+ * solvers, which judge dips and need no off-grid peak positions: `refine` false skips that step).
+ */
+export function computePattern(input: PatternInput, fixedGroups?: number[][], refine = true): DetectorPattern {
   const { options, issues: optionIssues } = resolveOptions(input);
   const issues = [
     ...optionIssues,
@@ -205,7 +208,7 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
     const inside = weighInto(out, total, weights[i], inverseWidth, support);
     offGrid += weights[i] * Math.max(0, 1 - inside);
     const own = peakShape(out, centresM, support.from, support.to);
-    const peakM = own ? refinePeak(own.positionM, searchWidth(edgesM, own.index), [{ k: ks[i], weight: 1 }], law, image) : NaN;
+    const peakM = !own ? NaN : refine ? refinePeak(own.positionM, binWidth(edgesM, own.index), [{ k: ks[i], weight: 1 }], law, image) : own.positionM;
     ownPeaks.push(peakM);
     summaries.push({ label: sublevels[i].label, weight: weights[i], coefficientM3PerS2: ks[i], meanDeflectionM, peakM });
   }
@@ -228,7 +231,7 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
     const shape = peakShape(profile, centresM, from, to);
     if (!shape) continue;
     const members = g.map((i) => ({ k: ks[i], weight: weights[i] }));
-    const positionM = refinePeak(shape.positionM, searchWidth(edgesM, shape.index), members, law, image);
+    const positionM = refine ? refinePeak(shape.positionM, binWidth(edgesM, shape.index), members, law, image) : shape.positionM;
     peaks.push({
       positionM,
       fwhmM: shape.fwhmM,
@@ -279,12 +282,9 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
   return result;
 }
 
-/** Half-width of the refinement's search around grid bin i: three of the widest neighbouring bins. */
-function searchWidth(edgesM: Float64Array, i: number): number {
-  const n = edgesM.length - 1;
-  let widest = 0;
-  for (let j = Math.max(0, i - 1); j <= Math.min(n - 1, i + 1); j++) widest = Math.max(widest, edgesM[j + 1] - edgesM[j]);
-  return 3 * widest;
+/** Width of grid bin i: the refinement's first step. */
+function binWidth(edgesM: Float64Array, i: number): number {
+  return edgesM[i + 1] - edgesM[i];
 }
 
 function addDetectorChecks(result: DetectorPattern, geometry: BeamGeometry): void {
