@@ -7,8 +7,8 @@
  * (both from the speed law's cumulative integrals, exact for the oven)
  *   P_i(x) = (1/(a b w)) Σ_{s,t = ±1} s t ∫_{x + sa/2 + tb/2 − w/2}^{x + sa/2 + tb/2 + w/2} H(z) dz,
  * and (1/(a b)) Σ s t H(x + sa/2 + tb/2) for a point detector (w = 0). The integrals are
- * Gauss–Legendre over spans of the detector width, where H is smooth. Three-point parabolas on
- * P, each ten times finer, then move the grid's estimate to the mode (docs/beam.md §4 gives the measured accuracy).
+ * Gauss–Legendre over spans of the detector width, where H is smooth. A golden-section search
+ * around the grid's estimate then finds the mode (docs/beam.md §4 gives the measured accuracy).
  */
 import { cumulativeAt } from './depositDeflections';
 import { gaussLegendre } from './gaussLegendre';
@@ -64,10 +64,10 @@ export function exactProfile(x: number, members: readonly RefineMember[], law: S
 }
 
 /**
- * The mode of the members' exact profile near `guessM` (the grid's estimate; `stepM` about one
- * bin): successive three-point parabolas on the exact profile, each step ten times finer, stopping
- * when a step moves less than its own width. The guess itself when the refinement cannot improve
- * on it (a single-speed beam's flat top has no unique mode; slits of zero width have no box form).
+ * The mode of the members' exact profile within `guessM` ± 1.5 `stepM` (the grid's estimate and
+ * about one bin), by golden-section search down to 1e-6 of that bracket. The guess itself when
+ * the refinement cannot improve on it (a single-speed beam's flat top has no unique mode; slits
+ * of zero width have no box form; a maximum on the bracket's edge means the guess was not at the top).
  */
 export function refinePeak(guessM: number, stepM: number, members: readonly RefineMember[], law: SpeedLaw, image: SlitImage): number {
   if (members.every((m) => m.k === 0)) return 0; // the kernel is symmetric about the axis
@@ -75,28 +75,31 @@ export function refinePeak(guessM: number, stepM: number, members: readonly Refi
   // The kernel is symmetric: a peak deflected to −z is the mirror image of one at +z, computed the same way.
   if (members.every((m) => m.k <= 0)) return -refinePeak(-guessM, stepM, members.map((m) => ({ k: -m.k, weight: m.weight })), law, image);
   const f = (x: number): number => exactProfile(x, members, law, image);
-  let x = guessM;
-  let h = stepM;
-  let fx = f(x);
-  for (let i = 0; i < MAX_STEPS; i++) {
-    const fl = f(x - h);
-    const fr = f(x + h);
-    const curvature = fl - 2 * fx + fr;
-    if (!(curvature < 0)) break; // not a rounded top at this scale: keep what we have
-    const shift = (h * (fl - fr)) / (2 * curvature);
-    if (!(Math.abs(shift) <= 2 * h)) break; // the vertex is not near: the guess was not at the top
-    const next = x + shift;
-    const fn = f(next);
-    if (!(fn >= fx)) break;
-    x = next;
-    fx = fn;
-    if (Math.abs(shift) < h) h = Math.max(Math.abs(shift), h / 10);
-    if (h < MIN_STEP * stepM) break;
+  const half = 1.5 * stepM;
+  let lo = guessM - half;
+  let hi = guessM + half;
+  let x1 = hi - GOLDEN * (hi - lo);
+  let x2 = lo + GOLDEN * (hi - lo);
+  let f1 = f(x1);
+  let f2 = f(x2);
+  while (hi - lo > 1e-6 * half) {
+    if (f1 < f2) {
+      lo = x1;
+      x1 = x2;
+      f1 = f2;
+      x2 = lo + GOLDEN * (hi - lo);
+      f2 = f(x2);
+    } else {
+      hi = x2;
+      x2 = x1;
+      f2 = f1;
+      x1 = hi - GOLDEN * (hi - lo);
+      f1 = f(x1);
+    }
   }
-  return x;
+  const x = 0.5 * (lo + hi);
+  const onEdge = Math.min(x - (guessM - half), guessM + half - x) < 1e-5 * half;
+  return Number.isFinite(x) && !onEdge && f(x) >= f(guessM) ? x : guessM;
 }
 
-/** Parabola steps at most (each shrinks the step about tenfold). */
-const MAX_STEPS = 8;
-/** Smallest step relative to one bin: below it the profile's round-off dominates its curvature. */
-const MIN_STEP = 1e-3;
+const GOLDEN = (Math.sqrt(5) - 1) / 2;
