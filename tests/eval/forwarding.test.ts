@@ -41,6 +41,7 @@ vi.mock('../../server/src/eval/exactAtField', async (importOriginal) => {
       ...e.exactAtField(...a),
       exact: [],
       errors: [{ code: 'basis-too-large', message: 'planted size cap' }],
+      notices: [{ code: 'planted-level', severity: 'warning', message: 'planted notice' }],
     }),
   };
 });
@@ -82,5 +83,7 @@ describe('findings of the physics layer', () => {
     }
     // A size cap does not depend on the field: one note per level, not one per field.
     expect(codes.filter((x) => x === 'level-too-large')).toHaveLength(2);
+    // The level engine's own warnings and notes too, under their own codes, once per level.
+    expect(codes.filter((x) => x === 'planted-level')).toHaveLength(2);
   });
 });

@@ -35,6 +35,14 @@ describe('nuclear Zeeman effect of a level without hyperfine constants', () => {
     expect(top.linear_energy_Hz).toBeCloseTo(top.energy_Hz, 6);
   });
 
+  it('A on a J = 0 level is flagged where it is written and leaves the nuclear splitting alone', () => {
+    const r = analyze('species Sr87\n  level ground: 5s2 1S0 A = 100 MHz\nfield bias = 1 T\n').result!;
+    expect(r.diagnostics.map((d) => `${d.line}:${d.column} ${d.code}`)).toEqual(['2:29 dipole-cannot-act']);
+    const e = r.levels[0]!.at_fields[0]!.exact.map((s) => s.energy_Hz);
+    expect(e).toHaveLength(10);
+    expect((e[9]! - e[0]!) / (9 * (1.093603 * MU_N_HZ_PER_T) / 4.5)).toBeCloseTo(1, 9);
+  });
+
   it('87Sr 3P0 (clock level, J = 0) has the same nuclear splitting', () => {
     const l = level('species Sr87\n  level clock: 5s.5p 3P°0\nfield bias = 10 G\n', 'clock');
     const e = exactEnergies(l);

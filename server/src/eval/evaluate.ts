@@ -115,7 +115,8 @@ function onceEach(notes: EvaluationNote[]): EvaluationNote[] {
 }
 
 function noteToProblem(n: EvaluationNote): Problem {
-  return { code: n.code, severity: EVAL_RULES[n.code].severity, message: n.message, range: n.range };
+  const rule = (EVAL_RULES as Record<string, { severity: Problem['severity'] }>)[n.code];
+  return { code: n.code, severity: rule?.severity ?? n.severity ?? 'info', message: n.message, range: n.range };
 }
 
 export function sortProblems(problems: Problem[]): Problem[] {

@@ -6,6 +6,7 @@ import { linearSublevels } from '../physics/linearZeeman';
 import { allowedJ, formatTermSymbol } from '../physics/termSymbol';
 import type { Range } from '../format/ast';
 import type { LevelModel, SettingsModel, Valued } from '../model/types';
+import type { EVAL_RULES } from './evalCodes';
 import { exactAtField } from './exactAtField';
 import { halfText, signedHalfText } from './halves';
 import { hyperfineSpec } from './levelSpec';
@@ -21,7 +22,9 @@ export interface WorkingField {
 
 /** Something the evaluation wants to tell the user about a level at a field. */
 export interface EvaluationNote {
-  code: 'zeeman-not-linear' | 'zeeman-strong-field' | 'level-too-large' | 'level-not-computed';
+  /** An evaluation code, or an engine code passed on as it is (then `severity` is given). */
+  code: keyof typeof EVAL_RULES | (string & {});
+  severity?: 'error' | 'warning' | 'info';
   message: string;
   range: Range;
 }
@@ -78,7 +81,7 @@ function gFactor(level: LevelModel, settings: SettingsModel): GFactorResult {
 }
 
 function hyperfineOf(level: LevelModel, gJ: number, twoJ: number, twoI: number): HyperfineResult | undefined {
-  if (!level.A) return undefined;
+  if (!level.A || twoJ === 0) return undefined; // A cannot act at J = 0 (the model says so)
   const A = level.A.value;
   const B = twoI >= 2 && twoJ >= 2 ? level.B?.value ?? 0 : 0;
   const C = twoI >= 3 && twoJ >= 3 ? level.C?.value ?? 0 : 0;

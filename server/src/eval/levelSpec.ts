@@ -19,7 +19,8 @@ export function hyperfineSpec(level: LevelModel, gJ: number): HyperfineLevelSpec
     twoI,
     gJ,
     gI: twoI > 0 ? level.species.gI.value : 0,
-    A: twoI > 0 ? level.A?.value ?? 0 : 0,
+    // A cannot act at J = 0 (the model says so): leave it out like B and C below.
+    A: twoI > 0 && twoJ > 0 ? level.A?.value ?? 0 : 0,
   };
   if (twoI >= 2 && twoJ >= 2 && level.B) spec.B = level.B.value;
   if (twoI >= 3 && twoJ >= 3 && level.C) spec.C = level.C.value;

@@ -11,6 +11,8 @@ export function regimeNotes(level: LevelModel, f: WorkingField, r: ExactAtField)
       ? { code: 'level-too-large', message: `level '${level.name}': ${e.message}`, range: level.nameRange }
       : { code: 'level-not-computed', message: `level '${level.name}' could not be computed at ${f.source.kind} ${f.source.name} (${fieldText(f.tesla)}): ${e.message}`, range: f.range },
   );
+  // Everything else the engine says reaches the diagnostics under its own code (said once by the caller).
+  for (const n of r.notices) notes.push({ code: n.code, severity: n.severity, message: `level '${level.name}': ${n.message}`, range: level.nameRange });
   const where = `at ${f.source.kind} ${f.source.name} (${fieldText(f.tesla)})`;
   const what = `level ${level.species.name}.${level.name}`;
   const lowLabels = level.kind === 'term' ? '|J, m_J>' : '|F, m_F>';

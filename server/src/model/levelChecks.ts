@@ -35,6 +35,11 @@ export function checkLevelPhysics(level: LevelModel, settings: SettingsModel, pr
       });
     }
   }
+  if (level.A && fromFile(level.A) && twoI > 0 && twoJ === 0) {
+    problems.add('dipole-cannot-act', `A cannot act here: with J = 0 there is no electronic angular momentum for the nucleus to couple to (this level has ${describe(twoI, twoJ)}); the nuclear Zeeman effect is computed without it`, level.A.range!, {
+      data: { removeSetting: 'A' },
+    });
+  }
   if (level.B && fromFile(level.B) && twoI > 0 && (twoI < 2 || twoJ < 2)) {
     problems.add('quadrupole-cannot-act', `B cannot act here: a quadrupole needs I ≥ 1 and J ≥ 1, and this level has ${describe(twoI, twoJ)}`, level.B.range!, {
       data: { removeSetting: 'B' },

@@ -31,6 +31,7 @@ export const MODEL_RULES = {
   'zeta-needs-term': { severity: 'warning', summary: 'zeta given for a level with J; it applies to a whole term.' },
   'term-hyperfine-unsupported': { severity: 'warning', summary: 'Hyperfine constants on a whole term are not used.' },
   'hyperfine-without-nucleus': { severity: 'warning', summary: 'A hyperfine constant on a species with no nuclear spin.' },
+  'dipole-cannot-act': { severity: 'warning', summary: 'A needs J \u2265 1/2 to act (a J = 0 level has no hyperfine structure).' },
   'quadrupole-cannot-act': { severity: 'warning', summary: 'B needs I \u2265 1 and J \u2265 1 to act.' },
   'octupole-cannot-act': { severity: 'warning', summary: 'C needs I \u2265 3/2 and J \u2265 3/2 to act.' },
   'gj-measured-differs': { severity: 'info', summary: 'A measured g_J differs from the LS-coupling value.' },
