@@ -137,7 +137,8 @@ describe('facts of the trade', () => {
     });
     expect(p.peaks.map((k) => k.members)).toEqual([['m_s=+1/2'], ['m_s=-1/2']]);
     expect(p.peaks[0].positionM).toBeLessThan(0);
-    expect(Math.abs(p.peaks[0].positionM + p.peaks[1].positionM)).toBeLessThan(1e-9 * p.peaks[1].positionM);
+    // Refined positions carry the exact profile's round-off (up to ~1e-6 relative near its top), not the grid's symmetry.
+    expect(Math.abs(p.peaks[0].positionM + p.peaks[1].positionM)).toBeLessThan(1e-6 * p.peaks[1].positionM);
     expect(Math.abs(p.peaks[0].height / p.peaks[1].height - 1)).toBeLessThan(1e-9);
     expect(p.maxima).toHaveLength(2);
     expect(p.allResolved).toBe(true);

@@ -184,7 +184,7 @@ function beamReport(b: BeamResult): string[] {
   out.push(
     ...table(
       ['sublevel', 'high-field label', 'moment/μ_B', 'mean deflection', 'own peak at'],
-      b.sublevels.map((s) => [s.label, s.high_label, trimNumber(s.moment_bohr, 6), lengthText(s.mean_deflection_m, 4, noise), s.peak_m === undefined ? 'not populated' : lengthText(s.peak_m, 4, noise)]),
+      b.sublevels.map((s) => [s.label, s.high_label, trimNumber(s.moment_bohr, 6), lengthText(s.mean_deflection_m, 4, noise), s.peak_m === null ? 'no atoms' : lengthText(s.peak_m, 4, noise)]),
     ).map((x) => '  ' + x),
   );
   out.push('  peaks on the detector:');
@@ -197,13 +197,7 @@ function beamReport(b: BeamResult): string[] {
   for (const p of b.pairs) {
     out.push(`  peaks ${p.left + 1} and ${p.right + 1}: dip ${percentText(p.dip_ratio, 3, DIP_NOISE)} of the smaller peak → ${p.resolved ? 'resolved' : 'NOT resolved'} (criterion ≤ ${percentText(b.criterion_dip_ratio)})`);
   }
-  if (b.resolving_gradient_T_per_m !== undefined) {
-    out.push(
-      b.resolving_gradient_T_per_m === null
-        ? '  no gradient up to 100× the present one resolves every pair'
-        : `  smallest gradient that resolves every pair: ${gradientText(Math.abs(b.resolving_gradient_T_per_m), 4)}`,
-    );
-  }
+  if (b.resolving_advice) out.push(`  ${b.resolving_advice}`);
   out.push('  cautions:');
   for (const c of b.cautions) out.push(`    - ${c}`);
   return out;

@@ -6,12 +6,10 @@ import type { Problem } from '../format/ast';
 import type { BeamModel } from '../model/types';
 import type { BeamEvaluation } from './beamEvaluation';
 import { EVAL_RULES } from './evalCodes';
-import { lengthText, trimNumber } from './quantityText';
 
 export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
   const out: Problem[] = [];
   for (const i of e.issues) {
-    if (i.severity === 'info') continue;
     const where = i.code.includes('detector') ? beam.detectorM?.range : i.code.includes('slit') ? beam.slits?.range : undefined;
     out.push({ code: i.code, severity: i.severity, message: `beam '${beam.name}': ${i.message}`, range: where ?? beam.nameRange });
   }
@@ -21,14 +19,7 @@ export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
   const names = merged.map((p) => `${peakName(r.peaks[p.left]?.members)} and ${peakName(r.peaks[p.right]?.members)}`);
   const gradient = beam.magnet?.gradientTPerM;
   const fix = r.resolving_gradient_T_per_m;
-  const options: string[] = [];
-  if (typeof fix === 'number') options.push(`a gradient of at least ${trimNumber(Math.abs(fix), 3)} T/m`);
-  if (typeof r.resolving_magnet_length_m === 'number') options.push(`a magnet of at least ${lengthText(r.resolving_magnet_length_m, 3)}`);
-  if (typeof r.resolving_drift_m === 'number') options.push(`a drift of at least ${lengthText(r.resolving_drift_m, 3)}`);
-  const advice =
-    options.length > 0
-      ? ` Any one of ${options.join(', or ')} would resolve them.`
-      : ' No gradient, magnet length or drift up to 100 times the present one resolves them; narrow the slits or change the source.';
+  const advice = r.resolving_advice ? ` ${r.resolving_advice}` : '';
   const related = [{ message: `beam '${beam.name}' uses this magnet`, range: beam.nameRange }];
   out.push({
     code: 'beam-unresolved',

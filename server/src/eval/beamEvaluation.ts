@@ -4,7 +4,7 @@
  */
 import type { GJLookup } from './gJLookup';
 import {
-  BEAM_CAUTIONS,
+  beamCautions,
   DEFAULT_DIP_CRITERION,
   detectorPattern,
   smallestResolvingDrift,
@@ -15,6 +15,7 @@ import {
 import { BOHR_MAGNETON } from '../physics/constants';
 import type { BeamModel } from '../model/types';
 import { beamInputs } from './beamInput';
+import { resolvingAdvice } from './resolvingAdvice';
 import type { BeamResult } from './resultTypes';
 
 /** The inverse solvers look for a resolving value up to this many times the file's value. */
@@ -42,7 +43,11 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
     sublevels: [],
     peaks: [],
     pairs: [],
-    cautions: [...BEAM_CAUTIONS],
+    cautions: beamCautions({
+      ...(beam.magnet?.fieldT ? { magnetFieldT: beam.magnet.fieldT.value } : {}),
+      ...(beam.source?.value.kind === 'oven' ? { ovenTemperatureK: beam.source.value.temperatureK } : {}),
+      ...(beam.species?.builtin ? { element: beam.species.builtin.element } : {}),
+    }),
   };
   const inputs = beamInputs(beam, gJOf);
   if (!inputs) return { result: base, issues: [] };
@@ -68,8 +73,8 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
       moment_bohr: inputs.input.sublevels[i]!.momentJT / BOHR_MAGNETON,
       population: s.weight,
       mean_deflection_m: s.meanDeflectionM,
-      // An unpopulated sublevel has no profile and so no peak: the field is left out.
-      ...(Number.isFinite(s.peakM) ? { peak_m: s.peakM } : {}),
+      // An unpopulated sublevel sends no atoms, so it has no peak.
+      peak_m: Number.isFinite(s.peakM) ? s.peakM : null,
     })),
     peaks: pattern.peaks.map((p) => ({ position_m: p.positionM, fwhm_m: p.fwhmM, height_per_m: p.height, members: p.members })),
     pairs: pattern.pairs.map((p) => ({ left: p.left, right: p.right, dip_ratio: p.dipRatio, resolved: p.resolved })),
@@ -85,6 +90,8 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
     result.resolving_magnet_length_m = l.value ?? null;
     const d = smallestResolvingDrift(inputs.input, { upperBound: Math.max(geo.driftM, geo.magnetLengthM) * SEARCH_FACTOR, lowerBound: 0 });
     result.resolving_drift_m = d.value ?? null;
+    const advice = resolvingAdvice(result);
+    if (advice) result.resolving_advice = advice;
   }
   return { result, pattern, issues };
 }

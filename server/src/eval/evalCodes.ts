@@ -10,4 +10,5 @@ export const EVAL_RULES = {
   'resonance-unreachable': { severity: 'warning', summary: 'No transition reaches the given frequency in the field range.' },
   'resonance-no-such-pair': { severity: 'error', summary: 'The named sublevels have no magnetic-dipole or two-photon transition.' },
   'level-too-large': { severity: 'error', summary: 'A level has more sublevels than the engine handles.' },
+  'level-not-computed': { severity: 'error', summary: 'The eigen-solver failed for a level at one working field.' },
 } as const satisfies Record<string, { severity: ProblemSeverity; summary: string }>;

@@ -66,7 +66,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   const lineProblems: Problem[] = [];
   const lines = model.lines.map((l) => evaluateLine(l, fields, gJOf, lineProblems));
   const resonances = model.resonances.map((r) => evaluateResonance(r, fields, model.settings, gJOf, lineProblems));
-  const problems = sortProblems([...earlier, ...notes.map(noteToProblem), ...beamProblems, ...lineProblems]);
+  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems]);
   const result: EvaluationResult = {
     format: EVALUATION_FORMAT,
     version: EVALUATION_VERSION,
@@ -103,8 +103,20 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   return { result, problems };
 }
 
+/** A note that is the same at every field (same text, same place) is said once. */
+function onceEach(notes: EvaluationNote[]): EvaluationNote[] {
+  const seen = new Set<string>();
+  return notes.filter((n) => {
+    const key = `${n.code}|${n.message}|${n.range.start.line}:${n.range.start.character}`;
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
+}
+
 function noteToProblem(n: EvaluationNote): Problem {
-  return { code: n.code, severity: EVAL_RULES[n.code].severity, message: n.message, range: n.range };
+  const rule = (EVAL_RULES as Record<string, { severity: Problem['severity'] }>)[n.code];
+  return { code: n.code, severity: rule?.severity ?? n.severity ?? 'info', message: n.message, range: n.range };
 }
 
 export function sortProblems(problems: Problem[]): Problem[] {

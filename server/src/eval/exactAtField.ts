@@ -10,17 +10,20 @@ import type { ExactSublevelResult, RegimeResultJson } from './resultTypes';
 export interface ExactAtField {
   exact: ExactSublevelResult[];
   regime?: RegimeResultJson;
-  /** Engine errors (size caps and the like), in plain words. */
-  errors: string[];
+  /** Engine errors (size caps, a solver failure), with their engine codes. */
+  errors: { code: string; message: string }[];
+  /** The engine's warnings and notes (e.g. degenerate states), with their engine codes. */
+  notices: { code: string; severity: 'warning' | 'info'; message: string }[];
 }
 
 export function exactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
   const solved = solveLevel(spec, fieldT);
   const noNucleus = spec.kind === 'hyperfine' && spec.twoI === 0;
-  const errors = solved.issues.filter((i) => i.severity === 'error').map((i) => i.message);
-  if (errors.length > 0) return { exact: [], errors };
+  const errors = solved.issues.filter((i) => i.severity === 'error').map((i) => ({ code: i.code, message: i.message }));
+  const notices = solved.issues.flatMap((i) => (i.severity === 'error' ? [] : [{ code: i.code, severity: i.severity, message: i.message }]));
+  if (errors.length > 0) return { exact: [], errors, notices };
   // A level without zero-field structure has exactly linear energies in this single-level model: no regime to judge.
-  if (!hasZeroFieldStructure(spec)) return { exact: solved.states.map((s) => toJson(s, noNucleus)), errors: [] };
+  if (!hasZeroFieldStructure(spec)) return { exact: solved.states.map((s) => toJson(s, noNucleus)), errors: [], notices };
   const r = regime(spec, fieldT);
   const regimeJson: RegimeResultJson | undefined = r.issues.some((i) => i.severity === 'error')
     ? undefined
@@ -31,7 +34,7 @@ export function exactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
         strong_limit_T: Number.isFinite(r.strongLimitT) ? r.strongLimitT : null,
         fraction: r.fraction,
       };
-  return { exact: solved.states.map((s) => toJson(s, noNucleus)), ...(regimeJson ? { regime: regimeJson } : {}), errors: [] };
+  return { exact: solved.states.map((s) => toJson(s, noNucleus)), ...(regimeJson ? { regime: regimeJson } : {}), errors: [], notices };
 }
 
 function hasZeroFieldStructure(spec: LevelSpec): boolean {
@@ -45,6 +48,7 @@ function toJson(s: SublevelState, noNucleus: boolean): ExactSublevelResult {
     high_label: s.high.text,
     ...(s.low.scheme === 'F' && !noNucleus ? { F: s.low.twoF / 2 } : { J: (s.low.scheme === 'F' ? s.low.twoF : s.low.twoJ) / 2 }),
     m: s.twoM / 2,
+    ...(s.low.scheme === 'J' && s.low.twoMI !== null ? { m_I: s.low.twoMI / 2 } : {}),
     m_text: signedHalfText(s.twoM),
     energy_Hz: s.energyHz,
     moment_J_per_T: s.momentJT,

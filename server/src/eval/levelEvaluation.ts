@@ -7,11 +7,12 @@ import { linearSublevels } from '../physics/linearZeeman';
 import { allowedJ, formatTermSymbol } from '../physics/termSymbol';
 import type { Range } from '../format/ast';
 import type { LevelModel, SettingsModel, Valued } from '../model/types';
+import type { EVAL_RULES } from './evalCodes';
 import { exactAtField } from './exactAtField';
 import { halfText, signedHalfText } from './halves';
 import { hyperfineSpec } from './levelSpec';
 import { regimeNotes } from './regimeNotes';
-import type { FieldPointResult, GFactorResult, HyperfineResult, LevelResult, SourcedNumber, SublevelResult } from './resultTypes';
+import type { ExactSublevelResult, FieldPointResult, GFactorResult, HyperfineResult, LevelResult, SourcedNumber, SublevelResult } from './resultTypes';
 
 export interface WorkingField {
   source: { kind: 'field' | 'magnet'; name: string };
@@ -24,7 +25,9 @@ export interface WorkingField {
 
 /** Something the evaluation wants to tell the user about a level at a field. */
 export interface EvaluationNote {
-  code: 'zeeman-not-linear' | 'zeeman-strong-field' | 'level-too-large';
+  /** An evaluation code, or an engine code passed on as it is (then `severity` is given). */
+  code: keyof typeof EVAL_RULES | (string & {});
+  severity?: 'error' | 'warning' | 'info';
   message: string;
   range: Range;
 }
@@ -57,7 +60,7 @@ export function evaluateLevel(level: LevelModel, settings: SettingsModel, fields
     ...(hyperfine ? { hyperfine } : {}),
     sublevel_count: (twoJ + 1) * (twoI + 1),
     ...(level.energyHz ? { energy_Hz: sourced(level.energyHz) } : {}),
-    at_fields: fields.map((f) => pairLinear({ ...linearAt(f, gJ.used, twoJ, twoI, hyperfine), ...exactAt(level, gJ.used, f, notes) })),
+    at_fields: fields.map((f) => pairLinear({ ...linearAt(f, gJ.used, level.species.gI.value, twoJ, twoI, hyperfine), ...exactAt(level, gJ.used, f, notes) })),
   };
 }
 
@@ -81,7 +84,7 @@ function gFactor(level: LevelModel, settings: SettingsModel): GFactorResult {
 }
 
 function hyperfineOf(level: LevelModel, gJ: number, twoJ: number, twoI: number): HyperfineResult | undefined {
-  if (!level.A) return undefined;
+  if (!level.A || twoJ === 0) return undefined; // A cannot act at J = 0 (the model says so)
   const A = level.A.value;
   const B = twoI >= 2 && twoJ >= 2 ? level.B?.value ?? 0 : 0;
   const C = twoI >= 3 && twoJ >= 3 ? level.C?.value ?? 0 : 0;
@@ -104,10 +107,10 @@ function hyperfineOf(level: LevelModel, gJ: number, twoJ: number, twoI: number):
 
 /** Attach to each exact state the linear energy of the state with the same low-field quantum numbers. */
 function pairLinear(p: FieldPointResult): FieldPointResult {
-  const key = (F: number | undefined, J: number | undefined, m: number): string => `${F ?? ''}|${J ?? ''}|${m}`;
-  const linear = new Map(p.linear.map((s) => [key(s.F, s.J, s.m), s.energy_Hz]));
+  const key = (s: SublevelResult | ExactSublevelResult): string => `${s.F ?? ''}|${s.J ?? ''}|${s.m}|${s.m_I ?? ''}`;
+  const linear = new Map(p.linear.map((s) => [key(s), s.energy_Hz]));
   for (const s of p.exact) {
-    const e = linear.get(key(s.F, s.J, s.m));
+    const e = linear.get(key(s));
     if (e !== undefined) s.linear_energy_Hz = e;
   }
   return p;
@@ -121,13 +124,14 @@ function exactAt(level: LevelModel, gJ: number, f: WorkingField, notes: Evaluati
   return { exact: r.exact, ...(r.regime ? { regime: r.regime } : {}) };
 }
 
-function linearAt(f: WorkingField, gJ: number, twoJ: number, twoI: number, hf: HyperfineResult | undefined): Omit<FieldPointResult, 'exact' | 'regime'> {
+function linearAt(f: WorkingField, gJ: number, gI: number, twoJ: number, twoI: number, hf: HyperfineResult | undefined): Omit<FieldPointResult, 'exact' | 'regime'> {
   const linear: SublevelResult[] = [];
-  if (twoI === 0 || !hf) {
-    // No resolved hyperfine structure: J sublevels (with I > 0 and no A, the nucleus only adds degeneracy).
+  if (twoI === 0) {
     for (const s of linearSublevels(gJ, twoJ, f.tesla)) {
       linear.push({ label: `m_J=${signedHalfText(s.twoM)}`, J: twoJ / 2, m: s.twoM / 2, m_text: signedHalfText(s.twoM), energy_Hz: s.energyHz });
     }
+  } else if (!hf) {
+    linear.push(...uncoupledLinear(gJ, gI, twoJ, twoI, f.tesla));
   } else {
     for (const F of hf.levels) {
       const twoF = Math.round(2 * F.F);
@@ -148,4 +152,22 @@ function linearAt(f: WorkingField, gJ: number, twoJ: number, twoI: number, hf: H
 
 function sourced(v: Valued<number>): SourcedNumber {
   return { value: v.value, source: v.source, ...(v.uncertainty !== undefined ? { uncertainty: v.uncertainty } : {}) };
+}
+
+/**
+ * A nucleus without hyperfine constants: E/h = (μ_B B/h)(g_J m_J + g_I m_I) for every (m_J, m_I).
+ * For J = 0 the states are |F = I, m_F = m_I>, labelled like the exact engine does.
+ */
+function uncoupledLinear(gJ: number, gI: number, twoJ: number, twoI: number, fieldT: number): SublevelResult[] {
+  const out: SublevelResult[] = [];
+  for (const j of linearSublevels(gJ, twoJ, fieldT)) {
+    for (const n of linearSublevels(gI, twoI, fieldT)) {
+      const twoM = j.twoM + n.twoM;
+      const energy_Hz = j.energyHz + n.energyHz + 0;
+      const m = { m: twoM / 2, m_text: signedHalfText(twoM), energy_Hz };
+      if (twoJ === 0) out.push({ label: `F=${halfText(twoI)}, m_F=${signedHalfText(n.twoM)}`, F: twoI / 2, ...m });
+      else out.push({ label: `m_J=${signedHalfText(j.twoM)}, m_I=${signedHalfText(n.twoM)}`, J: twoJ / 2, m_I: n.twoM / 2, ...m });
+    }
+  }
+  return out;
 }

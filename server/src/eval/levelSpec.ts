@@ -11,16 +11,16 @@ import type { LevelModel, SettingsModel } from '../model/types';
 export function hyperfineSpec(level: LevelModel, gJ: number): HyperfineLevelSpec | undefined {
   const twoJ = level.term?.twoJ;
   if (!level.valid || twoJ === null || twoJ === undefined) return undefined;
-  // Without hyperfine constants the nucleus is a spectator: leave it out, so the level is its J sublevels.
-  const hasHyperfine = level.A !== undefined || level.B !== undefined || level.C !== undefined;
-  const twoI = hasHyperfine ? level.species.twoI.value : 0;
+  // The nucleus stays even without hyperfine constants: its g_I I_z term splits the level (J = 0 odd isotopes).
+  const twoI = level.species.twoI.value;
   const spec: HyperfineLevelSpec = {
     kind: 'hyperfine',
     twoJ,
     twoI,
     gJ,
     gI: twoI > 0 ? level.species.gI.value : 0,
-    A: twoI > 0 ? level.A?.value ?? 0 : 0,
+    // A cannot act at J = 0 (the model says so): leave it out like B and C below.
+    A: twoI > 0 && twoJ > 0 ? level.A?.value ?? 0 : 0,
   };
   if (twoI >= 2 && twoJ >= 2 && level.B) spec.B = level.B.value;
   if (twoI >= 3 && twoJ >= 3 && level.C) spec.C = level.C.value;

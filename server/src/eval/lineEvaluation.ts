@@ -8,6 +8,7 @@ import { electricDipoleLine, selectionRules, stickSpectrum, type LineTerm } from
 import { polarizationName } from './polarizationName';
 import type { LevelModel, LineModel } from '../model/types';
 import type { WorkingField } from './levelEvaluation';
+import { forwardIssues } from './forwardIssues';
 import { hyperfineSpec } from './levelSpec';
 import type { LineResult } from './resultTypes';
 
@@ -22,28 +23,31 @@ export function evaluateLine(
     name: line.name,
     ...(lower ? { species: lower.species.name, lower: lower.name } : {}),
     ...(upper ? { upper: upper.name } : {}),
+    ...(line.emission ? { written_as_emission: true } : {}),
     at_fields: [],
   };
   if (!lower || !upper || lower.species !== upper.species || lower === upper) return result;
   const lt = lineTerm(lower);
   const ut = lineTerm(upper);
   if (!lt || !ut) return result;
+  const report = forwardIssues(`line '${line.name}'`, line.node.headerRange, problems);
   const rules = selectionRules(lt, ut);
-  for (const i of rules) {
-    if (i.severity === 'info') continue;
-    problems.push({ code: i.code, severity: i.severity, message: `line '${line.name}': ${i.message}`, range: line.node.headerRange });
-  }
+  report(rules);
   if (rules.some((i) => i.severity === 'error')) return result;
   const gl = gJOf(lower);
   const gu = gJOf(upper);
   const ls = gl !== undefined ? hyperfineSpec(lower, gl) : undefined;
   const us = gu !== undefined ? hyperfineSpec(upper, gu) : undefined;
   if (!ls || !us || ls.twoI !== us.twoI) return result;
+  // Equal energies give no centre (the model says so); the offsets are still meaningful.
   const energies =
-    lower.energyHz && upper.energyHz ? { lowerEnergyHz: lower.energyHz.value, upperEnergyHz: upper.energyHz.value } : {};
+    lower.energyHz && upper.energyHz && upper.energyHz.value !== lower.energyHz.value
+      ? { lowerEnergyHz: lower.energyHz.value, upperEnergyHz: upper.energyHz.value }
+      : {};
   const at = fields.length > 0 ? fields : [{ source: { kind: 'field' as const, name: 'zero' }, tesla: 0, range: line.nameRange }];
   for (const f of at) {
     const r = electricDipoleLine(ls, us, f.tesla, energies);
+    report(r.issues);
     if (r.issues.some((i) => i.severity === 'error')) continue;
     if (result.g_eff === undefined && r.gEff) result.g_eff = r.gEff.formula;
     if (r.lineCentreHz !== null) result.line_centre_Hz = r.lineCentreHz;

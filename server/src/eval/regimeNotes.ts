@@ -5,7 +5,14 @@ import type { EvaluationNote, WorkingField } from './levelEvaluation';
 import { fieldInUnit } from './writtenUnit';
 
 export function regimeNotes(level: LevelModel, f: WorkingField, r: ExactAtField): EvaluationNote[] {
-  const notes: EvaluationNote[] = r.errors.map((e) => ({ code: 'level-too-large', message: `level '${level.name}': ${e}`, range: level.nameRange }));
+  // Size caps do not depend on the field: the same note at every field is merged into one by the caller.
+  const notes: EvaluationNote[] = r.errors.map((e) =>
+    e.code === 'basis-too-large' || e.code === 'block-too-large'
+      ? { code: 'level-too-large', message: `level '${level.name}': ${e.message}`, range: level.nameRange }
+      : { code: 'level-not-computed', message: `level '${level.name}' could not be computed at ${f.source.kind} ${f.source.name} (${fieldInUnit(f.tesla, { unit: f.unit })}): ${e.message}`, range: f.range },
+  );
+  // Everything else the engine says reaches the diagnostics under its own code (said once by the caller).
+  for (const n of r.notices) notes.push({ code: n.code, severity: n.severity, message: `level '${level.name}': ${n.message}`, range: level.nameRange });
   const where = `at ${f.source.kind} ${f.source.name} (${fieldInUnit(f.tesla, { unit: f.unit })})`;
   const what = `level ${level.species.name}.${level.name}`;
   const lowLabels = level.kind === 'term' ? '|J, m_J>' : '|F, m_F>';

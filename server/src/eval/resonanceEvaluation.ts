@@ -15,6 +15,7 @@ import {
 } from '../physics/transitions';
 import type { ResonanceModel, SettingsModel, SublevelName } from '../model/types';
 import type { WorkingField } from './levelEvaluation';
+import { forwardIssues } from './forwardIssues';
 import { engineSpec } from './levelSpec';
 import { polarizationName } from './polarizationName';
 import { frequencyText } from './quantityText';
@@ -45,9 +46,12 @@ export function evaluateResonance(
   const pair: SublevelPair | undefined = r.lower && r.upper ? { lower: ref(r.lower, term), upper: ref(r.upper, term) } : undefined;
   const inPair = (t: MagneticTransition): boolean => !pair || samePair(t, r.lower!, r.upper!, term);
   const range = { fromT: r.rangeT.fromT, toT: r.rangeT.toT, points: SCAN_POINTS };
+  // 'no-resonance' and 'pair-not-found' are said below in this block's own words.
+  const report = forwardIssues(`resonance '${r.name}'`, r.nameRange, problems, ['no-resonance', 'pair-not-found']);
 
   for (const f of fields) {
     const m = magneticTransitions(spec, f.tesla, { twoPhoton: r.twoPhoton || !!pair });
+    report(m.issues);
     result.at_fields.push({ source: f.source, field_T: f.tesla, transitions: m.transitions.filter(inPair).map(toJson) });
   }
   if (pair) {
@@ -62,11 +66,13 @@ export function evaluateResonance(
       });
     } else {
       const fi = fieldInsensitivePoints(spec, pair, range);
+      report(fi.issues);
       result.field_insensitive = fi.points.map((p) => ({ field_T: p.fieldT, frequency_Hz: Math.abs(p.frequencyHz), d2f_dB2_Hz_per_T2: p.d2fdB2 }));
     }
   }
   if (r.frequencyHz) {
     const found = resonanceFields(spec, r.frequencyHz.value, range, { ...(pair ? { pair } : {}), twoPhoton: r.twoPhoton || !!pair });
+    report(found.issues);
     result.resonances = found.resonances.map((x) => ({ field_T: x.fieldT, transition: toJson(x.transition) }));
     if (result.resonances.length === 0) {
       problems.push({

@@ -50,6 +50,8 @@ export interface SublevelResult {
   F?: number;
   J?: number;
   m: number;
+  /** m_I of a level whose nucleus has no hyperfine coupling (labels |J, m_J, m_I>). */
+  m_I?: number;
   m_text: string;
   /** Energy relative to the level's centre of gravity, E/h. */
   energy_Hz: number;
@@ -66,6 +68,8 @@ export interface ExactSublevelResult {
   J?: number;
   /** Total magnetic quantum number (the only good one at every field). */
   m: number;
+  /** m_I of a level whose nucleus has no hyperfine coupling (then m_J and m_I are both good). */
+  m_I?: number;
   m_text: string;
   energy_Hz: number;
   /** μ = −∂E/∂B (Hellmann–Feynman), J/T. */
@@ -166,8 +170,8 @@ export interface BeamSublevelResult {
   population: number;
   /** Flux-averaged deflection at the detector, m (positive along +z for a positive moment and gradient). */
   mean_deflection_m: number;
-  /** Maximum of this sublevel's own profile, m; absent for a sublevel with population 0. */
-  peak_m?: number;
+  /** Maximum of this sublevel's own profile; null when it has no atoms (population 0). */
+  peak_m: number | null;
 }
 
 export interface BeamResult {
@@ -190,6 +194,8 @@ export interface BeamResult {
   resolving_magnet_length_m?: number | null;
   /** Smallest drift that resolves every pair; null: none up to 100× the file's. */
   resolving_drift_m?: number | null;
+  /** What would resolve the merged peaks, in words: the same sentence as the beam-unresolved diagnostic. */
+  resolving_advice?: string;
   /** Fraction of the atoms entering a detector placed at the file's offset (`detector = w at x`). */
   detector_fraction?: number;
   /** Flux fraction that falls outside the computed pattern (slow tail). */
@@ -221,7 +227,9 @@ export interface LineResult {
   upper?: string;
   /** ½(g_u + g_l) + ¼(g_u − g_l)[J_u(J_u+1) − J_l(J_l+1)]. */
   g_eff?: number;
-  /** Upper minus lower level energy, when both are known. */
+  /** The file writes the upper level first (an emission line); `lower`/`upper` are the levels by energy. */
+  written_as_emission?: boolean;
+  /** Upper minus lower level energy (always > 0), when both are known and differ. */
   line_centre_Hz?: number;
   /** Components at each working field (at zero field when the file has none). */
   at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; components: LineComponentResult[] }[];

@@ -1,6 +1,7 @@
 /** Builds fields, magnets and beams: the experiment's hardware. */
 import type { BlockNode, SettingNode, ValuePart } from '../format/ast';
 import type { Dimension } from '../format/units';
+import { physicalField } from './fieldRange';
 import { NameIndex, resolveLevel } from './nameIndex';
 import type { ProblemList } from './problems';
 import { readPartQuantity, readSettingQuantity, singlePart } from './settingReaders';
@@ -16,7 +17,8 @@ export function buildField(node: BlockNode, problems: ProblemList): FieldModel |
     problems.add('field-needs-value', `field '${field.name}' needs a value, as in \`field ${field.name} = 3.2 G\``, node.headerRange);
     return field;
   }
-  const t = readSettingQuantity(node.headerSetting, 'flux-density', problems, 'magnetic flux density, e.g. 3.2 G or 0.45 T');
+  const hs = node.headerSetting;
+  const t = physicalField(readSettingQuantity(hs, 'flux-density', problems, 'magnetic flux density, e.g. 3.2 G or 0.45 T'), hs.valueText.text, hs.valueText.range, problems);
   if (t) field.tesla = t;
   return field;
 }
@@ -30,7 +32,7 @@ export function buildMagnet(node: BlockNode, problems: ProblemList): MagnetModel
   for (const s of node.settings) {
     switch (s.key.text) {
       case 'field': {
-        const v = readSettingQuantity(s, 'flux-density', problems, 'field at the beam, e.g. 0.45 T');
+        const v = physicalField(readSettingQuantity(s, 'flux-density', problems, 'field at the beam, e.g. 0.45 T'), s.valueText.text, s.valueText.range, problems);
         if (v) magnet.fieldT = v;
         break;
       }

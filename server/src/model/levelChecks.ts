@@ -28,11 +28,17 @@ export function checkLevelPhysics(level: LevelModel, settings: SettingsModel, pr
   const fromFile = (v: { range?: unknown } | undefined): boolean => !!v && v.range !== undefined;
 
   for (const [key, v] of [['A', level.A], ['B', level.B], ['C', level.C]] as const) {
-    if (twoI === 0 && fromFile(v)) {
+    // A rejected I already has its own error; "I = 0" would be a second, wrong message.
+    if (twoI === 0 && fromFile(v) && !level.species.spinRejected) {
       problems.add('hyperfine-without-nucleus', `${key} has no effect: species '${level.species.name}' has no nuclear spin (I = 0)`, v!.range!, {
         data: { removeSetting: key },
       });
     }
+  }
+  if (level.A && fromFile(level.A) && twoI > 0 && twoJ === 0) {
+    problems.add('dipole-cannot-act', `A cannot act here: with J = 0 there is no electronic angular momentum for the nucleus to couple to (this level has ${describe(twoI, twoJ)}); the nuclear Zeeman effect is computed without it`, level.A.range!, {
+      data: { removeSetting: 'A' },
+    });
   }
   if (level.B && fromFile(level.B) && twoI > 0 && (twoI < 2 || twoJ < 2)) {
     problems.add('quadrupole-cannot-act', `B cannot act here: a quadrupole needs I ≥ 1 and J ≥ 1, and this level has ${describe(twoI, twoJ)}`, level.B.range!, {

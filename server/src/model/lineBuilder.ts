@@ -2,7 +2,7 @@
 import type { BlockNode } from '../format/ast';
 import { resolveLevel, type NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
-import type { LineModel, NameUse, SpeciesModel } from './types';
+import type { LevelModel, LineModel, NameUse, SpeciesModel } from './types';
 
 export function buildLine(node: BlockNode, species: NameIndex<SpeciesModel>, uses: NameUse[], problems: ProblemList): LineModel | undefined {
   if (!node.name) {
@@ -18,12 +18,56 @@ export function buildLine(node: BlockNode, species: NameIndex<SpeciesModel>, use
   const upper = link?.to ? resolveLevel(link.to, species, lower?.species, uses, problems) : undefined;
   if (lower) line.lower = lower;
   if (upper) line.upper = upper;
+  for (const [level, ref] of [[lower, link?.from], [upper, link?.to]] as const) {
+    if (level?.kind === 'term' && ref) {
+      problems.add(
+        'line-to-whole-term',
+        `line '${line.name}': '${level.name}' is a whole term (given with zeta, no J), and lines are computed only between J levels; write the J level instead, e.g. \`level ${level.name}32: ${level.term ? termWithJ(level.term.twoS, level.term.L) : '2P3/2'}\`, and draw the line to it`,
+        ref.range,
+      );
+    }
+  }
   if (lower && upper) {
     if (lower.species !== upper.species) {
       problems.add('line-across-species', `line '${line.name}' joins ${lower.species.name} and ${upper.species.name}; a line joins two levels of one species`, node.headerRange);
     } else if (lower === upper) {
       problems.add('line-same-level', `line '${line.name}' goes from level '${lower.name}' to itself`, link!.to!.range);
+    } else {
+      orderByEnergy(line, lower, upper, problems);
     }
   }
   return line;
+}
+
+/**
+ * Either order is a normal way to write a line: written upper level first, it is an emission
+ * line, computed with the levels the right way round (the file keeps its order).
+ */
+function orderByEnergy(line: LineModel, first: LevelModel, second: LevelModel, problems: ProblemList): void {
+  const e1 = first.energyHz?.value;
+  const e2 = second.energyHz?.value;
+  if (e1 === undefined || e2 === undefined) return;
+  if (e1 === e2) {
+    problems.add(
+      'line-levels-same-energy',
+      `line '${line.name}': levels '${first.name}' and '${second.name}' are given the same energy, so the line has no centre frequency; only the Zeeman offsets are computed`,
+      line.node.headerRange,
+    );
+  } else if (e2 < e1) {
+    line.lower = second;
+    line.upper = first;
+    line.emission = true;
+    problems.add(
+      'line-written-as-emission',
+      `line '${line.name}' is written from the upper level '${first.name}' to the lower level '${second.name}' (emission); it is computed as the same line with '${second.name}' as its lower level, at a positive frequency`,
+      line.node.headerRange,
+    );
+  }
+}
+
+/** A J level of the term for the advice text: the highest J. */
+function termWithJ(twoS: number, L: number): string {
+  const letter = 'SPDFGHIKLMNOQRTUV'[L] ?? '?';
+  const twoJ = 2 * L + twoS;
+  return `${twoS + 1}${letter}${twoJ % 2 === 0 ? twoJ / 2 : `${twoJ}/2`}`;
 }

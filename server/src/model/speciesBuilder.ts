@@ -43,6 +43,7 @@ export function buildSpecies(node: BlockNode, uses: NameUse[], problems: Problem
       case 'I': {
         const spin = readSettingSpin(s, problems, 'nuclear spin');
         if (spin) species.twoI = spin;
+        else species.spinRejected = true;
         break;
       }
       case 'g_I':

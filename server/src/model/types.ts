@@ -43,6 +43,8 @@ export interface SpeciesModel {
   massKg?: Valued<number>;
   /** Twice the nuclear spin. */
   twoI: Valued<number>;
+  /** The file's `I` was rejected (its own problem says why): I is unknown, not 0. */
+  spinRejected?: boolean;
   /** Nuclear g-factor in units of μ_B (H = μ_B B (g_J J_z + g_I I_z)). */
   gI: Valued<number>;
   levels: LevelModel[];
@@ -119,8 +121,11 @@ export interface LineModel {
   name: string;
   node: BlockNode;
   nameRange: Range;
+  /** The lower and upper level by energy (when both energies are known), whatever order the file writes. */
   lower?: LevelModel;
   upper?: LevelModel;
+  /** The file writes the upper level first (an emission line); lower/upper above are already swapped. */
+  emission?: boolean;
 }
 
 /** A sublevel named by its low-field quantum numbers: F and m_F (or J and m_J for a term), twice their values. */

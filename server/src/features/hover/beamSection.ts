@@ -5,7 +5,7 @@
  */
 import { levelDesignationText } from '../../eval/designationText';
 import type { BeamResult } from '../../eval/resultTypes';
-import { gradientText, lengthText, speedText, trimNumber } from '../../eval/quantityText';
+import { lengthText, speedText, trimNumber } from '../../eval/quantityText';
 import { beamPositionNoise } from '../../eval/noiseFloors';
 import type { BeamModel } from '../../model/types';
 import { md, mdTable, mdTitle } from '../shared/markdown';
@@ -44,13 +44,7 @@ export function beamVerdict(r: BeamResult): string | undefined {
   const peaks = `${r.peaks.length} peak${r.peaks.length === 1 ? '' : 's'}`;
   if (r.all_resolved === undefined) return peaks;
   if (r.all_resolved) return `${peaks}, all resolved`;
-  const need =
-    r.resolving_gradient_T_per_m === undefined
-      ? ''
-      : r.resolving_gradient_T_per_m === null
-        ? '; no gradient up to 100× this one resolves them'
-        : `; resolved from a gradient of ${gradientText(Math.abs(r.resolving_gradient_T_per_m), 3)}`;
-  return `${peaks}, not all resolved${need}`;
+  return `${peaks}, not all resolved${r.resolving_advice ? `. ${r.resolving_advice}` : ''}`;
 }
 
 function results(r: BeamResult, maxRows: number): string | undefined {

@@ -15,7 +15,8 @@ export function hyperfineSection(r: LevelResult): string | undefined {
   if (twoI === 0) return undefined;
   const hf = r.hyperfine;
   if (!hf) {
-    return `${mdTitle('Hyperfine structure')}  \nno A for this level, so F levels are not resolved: each m_J sublevel is ${twoI + 1}-fold degenerate in m_I (I = ${halfText(twoI)})`;
+    const split = r.J === 0 ? `its ${twoI + 1} sublevels m_I are split only by the nuclear Zeeman term g_I m_I μ_B B` : `in a field each m_J sublevel splits into ${twoI + 1} by the nuclear Zeeman term g_I m_I μ_B B`;
+    return `${mdTitle('Hyperfine structure')}  \nno hyperfine constants for this level (I = ${halfText(twoI)}), so J and I stay uncoupled: ${split}`;
   }
   const constants = [constantText('A', hf.A_Hz), constantText('B', hf.B_Hz), constantText('C', hf.C_Hz)].filter((x): x is string => !!x);
   const table = mdTable(

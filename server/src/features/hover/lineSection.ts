@@ -25,7 +25,8 @@ export function lineFrequency(
   lower: LevelResult | undefined,
   upper: LevelResult | undefined,
 ): { hz: number; vacuumNm: number } | undefined {
-  const hz = line?.line_centre_Hz ?? (lower?.energy_Hz && upper?.energy_Hz ? upper.energy_Hz.value - lower.energy_Hz.value : undefined);
+  const fromLevels = lower?.energy_Hz && upper?.energy_Hz ? Math.abs(upper.energy_Hz.value - lower.energy_Hz.value) : undefined;
+  const hz = line?.line_centre_Hz ?? fromLevels;
   if (hz === undefined || !(Math.abs(hz) > 0)) return undefined;
   return { hz, vacuumNm: (SPEED_OF_LIGHT / Math.abs(hz)) * 1e9 };
 }

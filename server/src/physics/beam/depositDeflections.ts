@@ -31,7 +31,7 @@ export function binOf(edges: Float64Array, x: number): number {
  * inline, are boxed on every write — about 2 MB of garbage per pattern (a scavenge per
  * pattern, up to a sixth of the run time, depending on the optimiser's mood).
  */
-function cumulativeAt(e: number, k: number, law: SpeedLaw, at: Float64Array): void {
+export function cumulativeAt(e: number, k: number, law: SpeedLaw, at: Float64Array): void {
   const invTotal = law.meanInverseSquare;
   if (k > 0) {
     if (e <= 0) {

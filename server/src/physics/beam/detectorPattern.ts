@@ -13,6 +13,7 @@ import { groupByPeakPosition } from './groupSublevels';
 import { pairDips, type PairVerdict } from './pairDips';
 import { resolveOptions, type PatternOptions } from './patternOptions';
 import { localMaxima, peakShape, sampleAt, type LocalMaximum } from './peakShape';
+import { refinePeak } from './peakRefine';
 import { slitImage, type SlitImage } from './slitImage';
 import { speedLawFor } from './speedLawFor';
 import { gridScaleM, inverseSquareRange, sublevelExtent } from './sublevelExtent';
@@ -134,8 +135,11 @@ export function detectorPattern(input: PatternInput): DetectorPattern {
   return computePattern(input);
 }
 
-/** As detectorPattern, optionally with the grouping of sublevels fixed by the caller (used by the solvers). */
-export function computePattern(input: PatternInput, fixedGroups?: number[][]): DetectorPattern {
+/**
+ * As detectorPattern, optionally with the grouping of sublevels fixed by the caller (used by the
+ * solvers, which judge dips and need no off-grid peak positions: `refine` false skips that step).
+ */
+export function computePattern(input: PatternInput, fixedGroups?: number[][], refine = true): DetectorPattern {
   const { options, issues: optionIssues } = resolveOptions(input);
   const issues = [
     ...optionIssues,
@@ -204,7 +208,7 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
     const inside = weighInto(out, total, weights[i], inverseWidth, support);
     offGrid += weights[i] * Math.max(0, 1 - inside);
     const own = peakShape(out, centresM, support.from, support.to);
-    const peakM = own ? own.positionM : NaN;
+    const peakM = !own ? NaN : refine ? refinePeak(own.positionM, binWidth(edgesM, own.index), [{ k: ks[i], weight: 1 }], law, image) : own.positionM;
     ownPeaks.push(peakM);
     summaries.push({ label: sublevels[i].label, weight: weights[i], coefficientM3PerS2: ks[i], meanDeflectionM, peakM });
   }
@@ -226,11 +230,13 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
     }
     const shape = peakShape(profile, centresM, from, to);
     if (!shape) continue;
+    const members = g.map((i) => ({ k: ks[i], weight: weights[i] }));
+    const positionM = refine ? refinePeak(shape.positionM, binWidth(edgesM, shape.index), members, law, image) : shape.positionM;
     peaks.push({
-      positionM: shape.positionM,
+      positionM,
       fwhmM: shape.fwhmM,
       height: shape.height,
-      totalHeight: sampleAt(total, centresM, edgesM, shape.positionM),
+      totalHeight: sampleAt(total, centresM, edgesM, positionM),
       members: g.map((i) => sublevels[i].label),
       memberIndices: [...g],
     });
@@ -274,6 +280,11 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][]): D
     );
   }
   return result;
+}
+
+/** Width of grid bin i: the refinement's first step. */
+function binWidth(edgesM: Float64Array, i: number): number {
+  return edgesM[i + 1] - edgesM[i];
 }
 
 function addDetectorChecks(result: DetectorPattern, geometry: BeamGeometry): void {

@@ -27,4 +27,4 @@ export { validateGeometry, MAX_HALF_ANGLE_RAD } from './validateGeometry';
 export { validateSource } from './validateSource';
 export { validateSublevels } from './validateSublevels';
 export { EFFUSIVE_RELATIVE_SPREAD } from './jetLaw';
-export { BEAM_CAUTIONS } from './cautions';
+export { beamCautions, type CautionSetup } from './cautions';

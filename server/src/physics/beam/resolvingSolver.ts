@@ -67,7 +67,7 @@ export function smallestResolvingValue(
     result.issues.push(beamIssue('error', 'beam-option-invalid', 'The scan needs at least 2 points and a tolerance in (0, 1).'));
     return result;
   }
-  const top = computePattern(withParameter(input, parameter, upper));
+  const top = computePattern(withParameter(input, parameter, upper), undefined, false);
   result.evaluations++;
   if (hasBeamError(top.issues)) {
     result.issues.push(...top.issues);
@@ -88,7 +88,7 @@ export function smallestResolvingValue(
   }
   const resolvedAt = (value: number): DetectorPattern => {
     result.evaluations++;
-    return computePattern(withParameter(input, parameter, value), groups);
+    return computePattern(withParameter(input, parameter, value), groups, false);
   };
   if (!top.allResolved) {
     result.dipRatios = top.pairs.map((p) => p.dipRatio);

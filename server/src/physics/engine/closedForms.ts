@@ -10,6 +10,7 @@ import { issue } from './issues';
 import { fLabel, jiLabel, jLabel, lsLabel } from './labelText';
 import { landeGF, landeGJ } from './landeFactors';
 import type { CoupledFLabel, EngineIssue, HighFieldLabel, HyperfineLevelSpec, LevelSpec, LowFieldLabel } from './types';
+import { nucleusUncoupled } from './uncoupledNucleus';
 import { validateSpec } from './validateSpec';
 import { fineZeroFieldHz, hyperfineZeroFieldHz } from './zeroFieldLevels';
 
@@ -34,7 +35,16 @@ export function linearZeeman(spec: LevelSpec, fieldT: number): { states: LinearE
   if (!s) return { states: [], issues };
   const mu = BOHR_MAGNETON_HZ_PER_T;
   const states: LinearEnergy[] = [];
-  if (s.kind === 'hyperfine') {
+  if (s.kind === 'hyperfine' && nucleusUncoupled(s)) {
+    // No hyperfine coupling: the uncoupled states are the weak-field states too.
+    for (const twoMI of projections(s.twoI)) {
+      for (const twoMJ of projections(s.twoJ)) {
+        const slope = ((s.gJ * twoMJ + s.gI * twoMI) * mu) / 2;
+        const low = s.twoJ === 0 ? fLabel(s.twoI, twoMI) : jLabel(s.twoJ, twoMJ, twoMI);
+        states.push({ low, energyHz: slope * fieldT, slopeHzPerT: slope });
+      }
+    }
+  } else if (s.kind === 'hyperfine') {
     for (const twoF of couplings(s.twoJ, s.twoI)) {
       const e0 = hyperfineZeroFieldHz(s.twoJ, s.twoI, twoF, s.A, s.B, s.C);
       const g = landeGF(twoF, s.twoJ, s.twoI, s.gJ, s.gI);

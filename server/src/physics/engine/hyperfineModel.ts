@@ -11,11 +11,12 @@ import { BOHR_MAGNETON_HZ_PER_T } from '../constants';
 import { orderHighLabels, orderLowLabels } from './adiabaticOrder';
 import { blockProjections, dotProductBlock, multiplySquare } from './couplingMatrix';
 import { couplings, jj1 } from './halfIntegers';
-import { fLabel, jiLabel } from './labelText';
+import { fLabel, jiLabel, jLabel } from './labelText';
 import { landeGF } from './landeFactors';
 import type { LevelBlock, LevelModel, RankedHigh, RankedLow } from './levelModel';
 import type { CleanHyperfine } from './validateSpec';
 import { hyperfineZeroFieldHz, octupoleActs, quadrupoleActs } from './zeroFieldLevels';
+import { nucleusUncoupled } from './uncoupledNucleus';
 
 function zeroFieldMatrix(s: CleanHyperfine, x: Float64Array, n: number): Float64Array {
   const h = new Float64Array(n * n);
@@ -42,7 +43,37 @@ function zeroFieldMatrix(s: CleanHyperfine, x: Float64Array, n: number): Float64
   return h;
 }
 
+/**
+ * Without hyperfine coupling m_J and m_I are conserved separately: one 1 × 1 block per
+ * (m_J, m_I), so states of equal total m may cross freely (reported as crossings).
+ */
+function uncoupledModel(s: CleanHyperfine): LevelModel {
+  const mu = BOHR_MAGNETON_HZ_PER_T;
+  const blocks: LevelBlock[] = [];
+  for (let twoMI = -s.twoI; twoMI <= s.twoI; twoMI += 2) {
+    for (let twoMJ = -s.twoJ; twoMJ <= s.twoJ; twoMJ += 2) {
+      const slope = (mu * (s.gJ * twoMJ + s.gI * twoMI)) / 2;
+      // J = 0: the state is exactly |F = I, m_F = m_I>, so the usual F label is kept.
+      const label = s.twoJ === 0 ? fLabel(s.twoI, twoMI) : jLabel(s.twoJ, twoMJ, twoMI);
+      const low: RankedLow[] = [{ label, zeroFieldHz: 0, slopeHzPerT: slope }];
+      const high: RankedHigh[] = [{ label: jiLabel(twoMJ, twoMI), diagonalHz: 0, slopeHzPerT: slope }];
+      blocks.push({
+        twoM: twoMJ + twoMI,
+        size: 1,
+        basis: [high[0]!.label],
+        h0: new Float64Array(1),
+        zeeman: Float64Array.of(slope),
+        low: [low, low],
+        high: [high, high],
+      });
+    }
+  }
+  blocks.sort((a, b) => a.twoM - b.twoM);
+  return { spec: s, blocks, dimension: (s.twoJ + 1) * (s.twoI + 1), largestBlock: 1, zeroFieldSpreadHz: 0 };
+}
+
 export function buildHyperfineModel(s: CleanHyperfine): LevelModel {
+  if (nucleusUncoupled(s)) return uncoupledModel(s);
   const mu = BOHR_MAGNETON_HZ_PER_T;
   const fValues = couplings(s.twoJ, s.twoI);
   const zf = new Map<number, number>();

@@ -1,0 +1,105 @@
+/**
+ * Peak positions off the grid: the binned profile puts a peak only to ~1e-4 of its FWHM, so
+ * the position is refined on the exact profile of the peak's sublevels,
+ *   P(x) = Σ_i w_i (ρ_i ⊗ box_a ⊗ box_b ⊗ box_w)(x),
+ * ρ_i the density of the deflection z = k_i/v². Each box turns a function into a divided
+ * difference of its antiderivative, so with H(e) = ∫_{−∞}^{e} P(z ≤ u) du = e P(z ≤ e) − E[z; z ≤ e]
+ * (both from the speed law's cumulative integrals, exact for the oven)
+ *   P_i(x) = (1/(a b w)) Σ_{s,t = ±1} s t ∫_{x + sa/2 + tb/2 − w/2}^{x + sa/2 + tb/2 + w/2} H(z) dz,
+ * and (1/(a b)) Σ s t H(x + sa/2 + tb/2) for a point detector (w = 0). The integrals are
+ * Gauss–Legendre over spans of the detector width, where H is smooth. A golden-section search
+ * around the grid's estimate then finds the mode (docs/beam.md §4 gives the measured accuracy).
+ */
+import { cumulativeAt } from './depositDeflections';
+import { gaussLegendre } from './gaussLegendre';
+import type { SlitImage } from './slitImage';
+import type { SpeedLaw } from './speedLaw';
+
+export interface RefineMember {
+  /** k in z = k/v², m³/s². */
+  k: number;
+  /** Population weight. */
+  weight: number;
+}
+
+/** Gauss–Legendre nodes per detector width (H is smooth on that scale: its scale is the deflection spread). */
+const NODES = 8;
+const at = new Float64Array(2);
+
+/** ∫_{−∞}^{e} P(z ≤ u) du for one sublevel. */
+function antiderivative(e: number, k: number, law: SpeedLaw): number {
+  if (k === 0) return Math.max(e, 0);
+  cumulativeAt(e, k, law, at);
+  return e * at[0] - at[1];
+}
+
+/** ∫_lo^hi H(z) dz by Gauss–Legendre, split at 0 where H of an undeflected part has its kink. */
+function integral(lo: number, hi: number, k: number, law: SpeedLaw): number {
+  if (lo < 0 && hi > 0) return integral(lo, 0, k, law) + integral(0, hi, k, law);
+  const { nodes, weights } = gaussLegendre(NODES);
+  const mid = 0.5 * (lo + hi);
+  const half = 0.5 * (hi - lo);
+  let s = 0;
+  for (let j = 0; j < NODES; j++) s += weights[j] * antiderivative(mid + half * nodes[j], k, law);
+  return s * half;
+}
+
+/** The exact (unbinned) profile of the members at x, per metre, weights as given. */
+export function exactProfile(x: number, members: readonly RefineMember[], law: SpeedLaw, image: SlitImage): number {
+  const a = image.boxAM;
+  const b = image.boxBM;
+  const w = image.detectorM;
+  let total = 0;
+  for (const m of members) {
+    let sum = 0;
+    for (const s of [-1, 1]) {
+      for (const t of [-1, 1]) {
+        const c = x + (s * a) / 2 + (t * b) / 2;
+        sum += s * t * (w > 0 ? integral(c - w / 2, c + w / 2, m.k, law) / w : antiderivative(c, m.k, law));
+      }
+    }
+    total += (m.weight * sum) / (a * b);
+  }
+  return total;
+}
+
+/**
+ * The mode of the members' exact profile within `guessM` ± 1.5 `stepM` (the grid's estimate and
+ * about one bin), by golden-section search down to 1e-6 of that bracket. The guess itself when
+ * the refinement cannot improve on it (a single-speed beam's flat top has no unique mode; slits
+ * of zero width have no box form; a maximum on the bracket's edge means the guess was not at the top).
+ */
+export function refinePeak(guessM: number, stepM: number, members: readonly RefineMember[], law: SpeedLaw, image: SlitImage): number {
+  if (members.every((m) => m.k === 0)) return 0; // the kernel is symmetric about the axis
+  if (law.singleSpeed !== undefined || !(image.boxAM > 0 && image.boxBM > 0) || !(stepM > 0)) return guessM;
+  // The kernel is symmetric: a peak deflected to −z is the mirror image of one at +z, computed the same way.
+  if (members.every((m) => m.k <= 0)) return -refinePeak(-guessM, stepM, members.map((m) => ({ k: -m.k, weight: m.weight })), law, image);
+  const f = (x: number): number => exactProfile(x, members, law, image);
+  const half = 1.5 * stepM;
+  let lo = guessM - half;
+  let hi = guessM + half;
+  let x1 = hi - GOLDEN * (hi - lo);
+  let x2 = lo + GOLDEN * (hi - lo);
+  let f1 = f(x1);
+  let f2 = f(x2);
+  while (hi - lo > 1e-6 * half) {
+    if (f1 < f2) {
+      lo = x1;
+      x1 = x2;
+      f1 = f2;
+      x2 = lo + GOLDEN * (hi - lo);
+      f2 = f(x2);
+    } else {
+      hi = x2;
+      x2 = x1;
+      f2 = f1;
+      x1 = hi - GOLDEN * (hi - lo);
+      f1 = f(x1);
+    }
+  }
+  const x = 0.5 * (lo + hi);
+  const onEdge = Math.min(x - (guessM - half), guessM + half - x) < 1e-5 * half;
+  return Number.isFinite(x) && !onEdge && f(x) >= f(guessM) ? x : guessM;
+}
+
+const GOLDEN = (Math.sqrt(5) - 1) / 2;

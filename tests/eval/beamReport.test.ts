@@ -1,0 +1,38 @@
+import { describe, expect, it } from 'vitest';
+import { analyze } from '../../server/src/eval/analyze';
+import { textReport } from '../../server/src/cli/textReport';
+
+const SETUP = `species X
+  mass = 52 u
+  level g: 3S1
+magnet m
+  field = 0.5 T
+  gradient = 0.5 T/m
+  length = 10 cm
+beam b
+  level = g
+  source = oven 500 K
+  slits = 30 um, 30 um apart 50 cm
+  magnet = m
+  drift = 40 cm
+  detector = 10 um
+`;
+
+describe('beam results say the same thing everywhere', () => {
+  it('the resolving suggestions of the diagnostic, the JSON and the text report are one sentence', () => {
+    const a = analyze(SETUP);
+    const beam = a.result!.beams[0]!;
+    const advice = beam.resolving_advice!;
+    expect(advice).toMatch(/^Any one of a gradient of at least [\d.]+ T\/m, or a magnet of at least .+ would resolve them\.$/);
+    const diag = a.result!.diagnostics.find((d) => d.code === 'beam-unresolved')!;
+    expect(diag.message.endsWith(advice)).toBe(true);
+    expect(textReport('x.sublevel', a.result!).join('\n')).toContain(advice);
+  });
+
+  it('an unpopulated sublevel has no peak (null), never NaN', () => {
+    const a = analyze(SETUP.replace('gradient = 0.5 T/m', 'gradient = 100 T/m') + '  populations = 1 +1 1\n');
+    const subs = a.result!.beams[0]!.sublevels;
+    expect(subs.filter((s) => s.population === 0).map((s) => s.peak_m)).toEqual([null, null]);
+    expect(JSON.stringify(a.result)).not.toMatch(/NaN|Infinity/);
+  });
+});
