@@ -10,4 +10,7 @@ export const EVAL_RULES = {
   'resonance-unreachable': { severity: 'warning', summary: 'No transition reaches the given frequency in the field range.' },
   'resonance-no-such-pair': { severity: 'error', summary: 'The named sublevels have no magnetic-dipole or two-photon transition.' },
   'level-too-large': { severity: 'error', summary: 'A level has more sublevels than the engine handles.' },
+  'document-too-large': { severity: 'error', summary: 'A file longer than the document cap; it is not checked.' },
+  'too-many-statements': { severity: 'error', summary: 'A file with more statements than the cap; it is not checked.' },
+  'evaluation-cut-short': { severity: 'warning', summary: 'The evaluation was stopped (time limit or failure); its findings are missing.' },
 } as const satisfies Record<string, { severity: ProblemSeverity; summary: string }>;
