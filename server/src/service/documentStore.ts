@@ -154,6 +154,12 @@ export class DocumentStore {
     return out;
   }
 
+  /** Every document is analysed again on its next request (what `use` may read has changed). Gives their URIs. */
+  invalidateAll(): string[] {
+    for (const entry of this.docs.values()) entry.current.stale = true;
+    return [...this.docs.keys()];
+  }
+
   /** The problems to show now: all of them once evaluated, otherwise parse and model plus the carried-over ones. */
   problems(doc: DocumentSnapshot): { problems: Problem[]; complete: boolean } {
     const s = this.state(doc);

@@ -118,6 +118,11 @@ export class LanguageService {
     }
   }
 
+  /** The workspace folders changed, so what `use` may read did: every document is analysed again. Gives their URIs. */
+  rootsChanged(): string[] {
+    return this.store.invalidateAll();
+  }
+
   /** 0 for the first analysis of this version, then one more each time a file it uses changed (for diagnostic result ids). */
   revision(doc: DocumentSnapshot): number {
     try {
