@@ -10,7 +10,7 @@ import { analyze } from '../eval/analyze';
 import { toDiagnosticResult } from '../eval/evaluate';
 import { diskSources } from '../service/workspaceFiles';
 import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
-import { collectSetupFiles, readSetupFile } from './files';
+import { collectSetupFiles, readSetupFile, rootOption } from './files';
 import type { CliIO } from './io';
 
 /** A `use-has-errors` warning about a file that this run reports itself. */
@@ -20,15 +20,21 @@ function reportedElsewhere(p: Problem, checked: ReadonlySet<string>): boolean {
 }
 
 export function runCheck(args: ParsedArgs, io: CliIO): number {
-  rejectUnknownOptions(args, ['format']);
+  rejectUnknownOptions(args, ['format', 'root']);
   const format = stringOption(args, 'format', ['text', 'json']) ?? 'text';
   if (args.positionals.length === 0) throw new UsageError('check needs at least one file or folder');
-  const files = collectSetupFiles(args.positionals);
+  const root = rootOption(stringOption(args, 'root'));
+  // `use` reads below --root, else below the folder given (for a folder) or the file's own folder.
+  const rootOf = new Map<string, string | undefined>();
+  for (const input of args.positionals) {
+    for (const f of collectSetupFiles([input])) if (!rootOf.has(f)) rootOf.set(f, root ?? (f === input ? undefined : input));
+  }
+  const files = [...rootOf.keys()];
   const checked = new Set(files.map((f) => path.resolve(f)));
   let errors = 0;
   const report: { file: string; diagnostics: ReturnType<typeof toDiagnosticResult>[] }[] = [];
   for (const file of files) {
-    const problems = analyze(readSetupFile(file), diskSources(file)).problems.filter((p) => !reportedElsewhere(p, checked));
+    const problems = analyze(readSetupFile(file), diskSources(file, rootOf.get(file))).problems.filter((p) => !reportedElsewhere(p, checked));
     errors += problems.filter((p) => p.severity === 'error').length;
     const diagnostics = problems.map(toDiagnosticResult);
     report.push({ file, diagnostics });

@@ -32,6 +32,19 @@ function walk(dir: string): string[] {
   return out;
 }
 
+/** `--root DIR`: the folder `use` may read from, checked to be one; undefined when not given. */
+export function rootOption(value: string | undefined): string | undefined {
+  if (value === undefined) return undefined;
+  let folder = false;
+  try {
+    folder = fs.statSync(value).isDirectory();
+  } catch {
+    folder = false;
+  }
+  if (!folder) throw new UsageError(`--root must be a folder: ${value}`);
+  return path.resolve(value);
+}
+
 export function readSetupFile(file: string): string {
   try {
     return fs.readFileSync(file, 'utf8');

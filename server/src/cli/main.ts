@@ -19,7 +19,10 @@ commands:
   profile <file> [--beam NAME] [--out FILE.csv]       the predicted detector pattern (position, total, each sublevel)
   render <file> [--view levels|pattern|lines] [--level NAME] [--field NAME] [--beam NAME] [--line NAME]
          [--format svg|csv] [--out FILE]              a diagram as SVG, or its numbers as CSV
-  help                                                this text`;
+  help                                                this text
+
+--root DIR (check, eval, sweep, profile, render): the folder whose .sublevel files \`use\` may read
+  (default: the checked file's folder; for check <folder>, that folder)`;
 
 export function runCli(argv: string[], io: CliIO): number {
   try {

@@ -5,17 +5,17 @@ import { evaluateBeam } from '../eval/beamEvaluation';
 import { patternCsv } from '../render';
 import { patternView } from '../views/patternView';
 import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
-import { readSetupFile } from './files';
+import { readSetupFile, rootOption } from './files';
 import { diskSources } from '../service/workspaceFiles';
 import type { CliIO } from './io';
 import { selectBeam } from './selectors';
 import { gJLookup } from '../eval/gJLookup';
 
 export function runProfile(args: ParsedArgs, io: CliIO): number {
-  rejectUnknownOptions(args, ['beam', 'out']);
+  rejectUnknownOptions(args, ['beam', 'out', 'root']);
   if (args.positionals.length !== 1) throw new UsageError('profile needs exactly one setup file');
   const file = args.positionals[0]!;
-  const analysis = analyze(readSetupFile(file), diskSources(file));
+  const analysis = analyze(readSetupFile(file), diskSources(file, rootOption(stringOption(args, 'root'))));
   if (!analysis.model) throw new UsageError(`${file} could not be read`);
   const beam = selectBeam(analysis.model, stringOption(args, 'beam'));
   const v = patternView(beam.name, evaluateBeam(beam, gJLookup(analysis.result?.levels ?? []), false), false);

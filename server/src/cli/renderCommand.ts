@@ -6,7 +6,7 @@ import { analyze } from '../eval/analyze';
 import { suggestNames } from '../format/didYouMean';
 import { diagramFor, type DiagramRequest, type DiagramView } from '../views/diagram';
 import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
-import { readSetupFile } from './files';
+import { readSetupFile, rootOption } from './files';
 import { diskSources } from '../service/workspaceFiles';
 import type { CliIO } from './io';
 import { writeOutputFile } from './output';
@@ -15,12 +15,12 @@ import { selectBeam, selectField, selectLevel } from './selectors';
 export const RENDER_VIEWS = ['levels', 'pattern', 'lines'] as const;
 
 export function runRender(args: ParsedArgs, io: CliIO): number {
-  rejectUnknownOptions(args, ['view', 'level', 'field', 'beam', 'line', 'format', 'out']);
+  rejectUnknownOptions(args, ['view', 'level', 'field', 'beam', 'line', 'format', 'out', 'root']);
   if (args.positionals.length !== 1) throw new UsageError('render needs exactly one setup file');
   const file = args.positionals[0]!;
   const view = (stringOption(args, 'view', RENDER_VIEWS) ?? 'levels') as DiagramView;
   const format = stringOption(args, 'format', ['svg', 'csv']) ?? 'svg';
-  const analysis = analyze(readSetupFile(file), diskSources(file));
+  const analysis = analyze(readSetupFile(file), diskSources(file, rootOption(stringOption(args, 'root'))));
   const model = analysis.model;
   if (!model) throw new UsageError(`${file} could not be read`);
   const req: DiagramRequest = { view, theme: 'export' };

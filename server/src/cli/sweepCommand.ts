@@ -10,7 +10,7 @@ import { suggestNames } from '../format/didYouMean';
 import { sweepLevel, type SweepResult } from '../physics/engine';
 import type { LevelModel, SetupModel } from '../model/types';
 import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
-import { readSetupFile } from './files';
+import { readSetupFile, rootOption } from './files';
 import { diskSources } from '../service/workspaceFiles';
 import type { CliIO } from './io';
 
@@ -18,7 +18,7 @@ import type { CliIO } from './io';
 export const MAX_CLI_POINTS = 200_001;
 
 export function runSweep(args: ParsedArgs, io: CliIO): number {
-  rejectUnknownOptions(args, ['level', 'from', 'to', 'points', 'format', 'out']);
+  rejectUnknownOptions(args, ['level', 'from', 'to', 'points', 'format', 'out', 'root']);
   if (args.positionals.length !== 1) throw new UsageError('sweep needs exactly one setup file');
   const file = args.positionals[0]!;
   const format = stringOption(args, 'format', ['csv', 'json']) ?? 'csv';
@@ -27,7 +27,7 @@ export function runSweep(args: ParsedArgs, io: CliIO): number {
   const points = pointsOption(args);
   if (fromT === toT) throw new UsageError('--from and --to are the same field; give a range');
 
-  const analysis = analyze(readSetupFile(file), diskSources(file));
+  const analysis = analyze(readSetupFile(file), diskSources(file, rootOption(stringOption(args, 'root'))));
   if (!analysis.model || !analysis.result) throw new UsageError(`${file} could not be read`);
   const level = findLevel(analysis.model, stringOption(args, 'level'));
   const gJ = analysis.result.levels.find((l) => l.species === level.species.name && l.level === level.name)?.g_J.used;

@@ -4,27 +4,8 @@
  * input costs a length check and a line count instead of minutes and all the memory.
  */
 import type { Problem, SetupDocument } from '../format/ast';
-import { MAX_DOCUMENT_CHARS, MAX_STATEMENTS } from '../model/limits';
+import { countStatements, MAX_DOCUMENT_CHARS, MAX_STATEMENTS } from '../model/limits';
 import { EVAL_RULES } from './evalCodes';
-
-/** Lines that hold a statement: neither blank nor only a comment. Stops counting past `limit`. */
-export function countStatements(text: string, limit: number): number {
-  let count = 0;
-  let lineHasCode = false;
-  let inComment = false;
-  for (let i = 0; i < text.length; i++) {
-    const c = text.charCodeAt(i);
-    if (c === 10 || c === 13) {
-      if (lineHasCode && ++count > limit) return count;
-      lineHasCode = false;
-      inComment = false;
-    } else if (!lineHasCode && !inComment) {
-      if (c === 35 /* # */) inComment = true;
-      else if (c !== 32 && c !== 9) lineHasCode = true;
-    }
-  }
-  return lineHasCode ? count + 1 : count;
-}
 
 function problem(code: 'document-too-large' | 'too-many-statements', message: string): Problem {
   const at = { line: 0, character: 0 };

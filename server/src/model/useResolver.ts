@@ -9,7 +9,7 @@ import type { Problem, SetupDocument, UseNode } from '../format/ast';
 import { suggestNames } from '../format/didYouMean';
 import { parseSetup } from '../format/parser';
 import { baseName, folderOf, locationKey, relativeName, resolveLocation } from './locations';
-import { MAX_USE_DEPTH, MAX_USED_FILE_BYTES } from './limits';
+import { countStatements, MAX_STATEMENTS, MAX_USE_DEPTH, MAX_USED_FILE_BYTES } from './limits';
 import type { ProblemList } from './problems';
 import { refuseUse, rootsOf, SETUP_EXTENSION } from './useConfinement';
 import type { SetupSources } from './sources';
@@ -108,6 +108,10 @@ function resolveOne(node: UseNode, sources: SetupSources, context: UseContext, b
     if (typeof text === 'object' || (text !== undefined && text.length > MAX_USED_FILE_BYTES)) {
       const size = typeof text === 'object' ? `${text.bytes} bytes` : `${text.length} characters`;
       problems.add('use-file-too-large', `${written} is not read: it has ${size}, more than the ${MAX_USED_FILE_BYTES} a used file may have`, p.range);
+      return out;
+    }
+    if (text !== undefined && countStatements(text, MAX_STATEMENTS) > MAX_STATEMENTS) {
+      problems.add('use-file-too-large', `${written} is not used: it has more than ${MAX_STATEMENTS} statements, the most a setup file may have`, p.range);
       return out;
     }
     if (text === undefined) {
