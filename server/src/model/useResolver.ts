@@ -32,6 +32,24 @@ export function rootUseContext(uri: string | undefined): UseContext {
   return uri !== undefined ? { stack: [locationKey(uri)], names: [baseName(uri)], cache: new Map() } : { stack: [], names: [], cache: new Map() };
 }
 
+/**
+ * Used files parsed by earlier analyses, by location: a keystroke in a document that uses a large
+ * file should not parse that file again. An entry is reused only for the very same text (the
+ * readers give back the same string while a file is unchanged), and the parse is pure.
+ */
+const parsedFiles = new Map<string, { text: string; doc: SetupDocument }>();
+const MAX_PARSED_FILES = 32;
+
+function parseUsed(key: string, text: string): SetupDocument {
+  const kept = parsedFiles.get(key);
+  if (kept && kept.text === text) return kept.doc;
+  const doc = parseSetup(text);
+  parsedFiles.delete(key);
+  if (parsedFiles.size >= MAX_PARSED_FILES) parsedFiles.delete(parsedFiles.keys().next().value!);
+  parsedFiles.set(key, { text, doc });
+  return doc;
+}
+
 function plural(n: number, word: string): string {
   return `${n} ${word}${n === 1 ? '' : 's'}`;
 }
@@ -120,7 +138,7 @@ function resolveOne(node: UseNode, sources: SetupSources, context: UseContext, b
       problems.add('use-file-missing', `cannot read ${written}: no such file${hint}`, p.range, { data: { suggestions } });
       return out;
     }
-    const usedDoc = parseSetup(text);
+    const usedDoc = parseUsed(key, text);
     const inner: UseContext = { stack: [...context.stack, key], names: [...context.names, baseName(location)], cache: context.cache };
     // The roots stay those of the analysed file: a used file does not widen or narrow them.
     used = { doc: usedDoc, model: build(usedDoc, { ...sources, uri: location, roots: rootsOf(sources) }, inner) };

@@ -6,6 +6,7 @@
  * that cannot start makes the evaluator fall back to this thread.
  */
 import { Worker } from 'worker_threads';
+import { EVALUATION_TIME_LIMIT_MS } from '../model/limits';
 import type { SourceSnapshot } from '../model/sources';
 import { type EvaluationOutcome, type Evaluator, evaluateText, SUPERSEDED } from './evaluator';
 import type { EvaluationReply, EvaluationRequest } from './evaluatorThread';
@@ -38,7 +39,7 @@ export class WorkerEvaluator implements Evaluator {
     /** The script to run in the worker: the server bundle itself. */
     private readonly script: string,
     private readonly log: (message: string) => void,
-    private readonly timeLimitMs = 30_000,
+    private readonly timeLimitMs = EVALUATION_TIME_LIMIT_MS,
   ) {}
 
   evaluate(text: string, signal?: AbortSignal, sources?: SourceSnapshot): Promise<EvaluationOutcome> {
