@@ -65,7 +65,12 @@ export function recordSources(inner: SetupSources): RecordingSources {
   const resolveReal = inner.realLocation;
   if (resolveReal) sources.realLocation = remembered(real, resolveReal);
   const list = inner.listFolder;
-  if (list) sources.listFolder = remembered(folders, (l) => { const names = list(l); return names ? [...names] : undefined; });
+  if (list) {
+    sources.listFolder = remembered(folders, (l) => {
+      const names = list(l);
+      return names ? [...names] : undefined;
+    });
+  }
   return {
     sources,
     snapshot: () => ({ ...fixed, files: { ...files }, ...(resolveReal ? { real: { ...real } } : {}), folders: { ...folders } }),
