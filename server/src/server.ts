@@ -23,9 +23,11 @@ import {
 import { TextDocument } from 'vscode-languageserver-textdocument';
 import * as path from 'path';
 import { isMainThread, workerData } from 'worker_threads';
+import { coalescedRequest } from './coalescedRequest';
 import { SEMANTIC_TOKENS_LEGEND } from './features/semanticTokensLegend';
 import type { LanguageService } from './service/languageService';
 import type { EditorSettings } from './service/settings';
+import { guardedStdio } from './stdioTransport';
 
 /** Same value as EVALUATOR_ROLE in service/workerEvaluator.ts (not imported: that would load the service here). */
 const EVALUATOR_ROLE = 'sublevel-evaluator';
@@ -47,7 +49,12 @@ if (!isMainThread && (workerData as { role?: string } | null)?.role === EVALUATO
 }
 
 function startLanguageServer(): void {
-  const connection = createConnection(ProposedFeatures.all);
+  let shutdownReceived = false;
+  const stdio = guardedStdio(() => shutdownReceived);
+  const connection = stdio ? createConnection(ProposedFeatures.all, stdio[0], stdio[1]) : createConnection(ProposedFeatures.all);
+  connection.onShutdown(() => {
+    shutdownReceived = true;
+  });
   const documents = new TextDocuments(TextDocument);
   const log = (message: string): void => connection.console.error(message);
 
@@ -56,7 +63,14 @@ function startLanguageServer(): void {
   /** Pause after the last change before the evaluation (in the worker) starts. */
   const EVALUATION_DELAY_MS = 120;
 
-  const client = { pullDiagnostics: false, diagnosticRefresh: false, configuration: false, dynamicConfiguration: false, inlayHintRefresh: false };
+  const client = { workspaceFolders: false, pullDiagnostics: false, diagnosticRefresh: false, configuration: false, dynamicConfiguration: false, inlayHintRefresh: false };
+
+  /** The workspace folders (URIs): `use` reads only below them (a file outside them: below its own folder). */
+  let workspaceFolders: string[] = [];
+
+  /** Asks the client to pull diagnostics (or inlay hints) again: one request per pause, never a pile. */
+  const refreshDiagnostics = coalescedRequest(() => connection.languages.diagnostics.refresh(), PUSH_DEBOUNCE_MS);
+  const refreshInlayHints = coalescedRequest(() => connection.languages.inlayHint.refresh(), PUSH_DEBOUNCE_MS);
 
   // ---- the service, loaded lazily --------------------------------------------------------------
 
@@ -70,7 +84,7 @@ function startLanguageServer(): void {
       await new Promise<void>((resolve) => setImmediate(resolve));
       const m = loadServiceModule();
       readSettings = m.readSettings;
-      service = new m.LanguageService(log, new m.WorkerEvaluator(__filename, log), m.editorFiles(() => documents.all()));
+      service = new m.LanguageService(log, new m.WorkerEvaluator(__filename, log), m.editorFiles(() => documents.all(), () => workspaceFolders));
       return service;
     })();
     return serviceLoading;
@@ -100,7 +114,7 @@ function startLanguageServer(): void {
     const settings = (change.settings as { sublevel?: unknown } | null)?.sublevel;
     if (settings !== undefined) globalSettings = settings;
     settingsByUri.clear();
-    if (client.inlayHintRefresh) void connection.languages.inlayHint.refresh().catch(() => undefined);
+    if (client.inlayHintRefresh) refreshInlayHints();
   });
 
   // ---- request plumbing -----------------------------------------------------------------------
@@ -135,8 +149,11 @@ function startLanguageServer(): void {
     client.dynamicConfiguration = !!caps.workspace?.didChangeConfiguration?.dynamicRegistration;
     client.inlayHintRefresh = !!caps.workspace?.inlayHint?.refreshSupport;
     client.diagnosticRefresh = !!caps.workspace?.diagnostics?.refreshSupport;
+    client.workspaceFolders = !!caps.workspace?.workspaceFolders;
+    workspaceFolders = params.workspaceFolders?.map((f) => f.uri) ?? (params.rootUri ? [params.rootUri] : []);
     return {
       capabilities: {
+        workspace: { workspaceFolders: { supported: true, changeNotifications: client.workspaceFolders } },
         textDocumentSync: TextDocumentSyncKind.Incremental,
         hoverProvider: true,
         completionProvider: { triggerCharacters: [' ', ':', '=', '>', '"', '/'] },
@@ -159,6 +176,14 @@ function startLanguageServer(): void {
   });
 
   connection.onInitialized(() => {
+    if (client.workspaceFolders) {
+      connection.workspace.onDidChangeWorkspaceFolders((e) => {
+        const removed = new Set(e.removed.map((f) => f.uri));
+        workspaceFolders = [...workspaceFolders.filter((f) => !removed.has(f)), ...e.added.map((f) => f.uri)];
+        // What `use` may read has changed: every open document is checked again.
+        if (service) recheck(service.rootsChanged());
+      });
+    }
     if (client.dynamicConfiguration) {
       void connection.client.register(DidChangeConfigurationNotification.type, { section: 'sublevel' }).catch(() => undefined);
     }
@@ -192,9 +217,9 @@ function startLanguageServer(): void {
         void service.evaluate(current).then(() => {
           const now = documents.get(doc.uri);
           if (!now || now.version !== doc.version) return;
-          if (client.inlayHintRefresh) void connection.languages.inlayHint.refresh().catch(() => undefined);
+          if (client.inlayHintRefresh) refreshInlayHints();
           if (client.pullDiagnostics) {
-            if (client.diagnosticRefresh) void connection.languages.diagnostics.refresh().catch(() => undefined);
+            if (client.diagnosticRefresh) refreshDiagnostics();
           } else schedulePush(doc.uri, 0);
         });
       }, EVALUATION_DELAY_MS),
@@ -223,19 +248,18 @@ function startLanguageServer(): void {
 
   // ---- files used by other documents ----------------------------------------------------------
 
-  let refreshTimer: NodeJS.Timeout | undefined;
-
   /** Re-checks the open documents that use one of these files (their diagnostics go out again). */
   function filesChanged(locations: string[]): void {
     if (!service || locations.length === 0) return; // nothing analysed yet, so nothing depends on them
-    const dependents = service.filesChanged(locations);
+    recheck(service.filesChanged(locations));
+  }
+
+  /** Sends the diagnostics of these documents again (pushed, or the client is asked to pull). */
+  function recheck(dependents: string[]): void {
     if (dependents.length === 0) return;
     if (!client.pullDiagnostics) {
       for (const uri of dependents) schedulePush(uri, PUSH_DEBOUNCE_MS);
-    } else if (client.diagnosticRefresh) {
-      clearTimeout(refreshTimer);
-      refreshTimer = setTimeout(() => void connection.languages.diagnostics.refresh().catch(() => undefined), PUSH_DEBOUNCE_MS);
-    }
+    } else if (client.diagnosticRefresh) refreshDiagnostics();
   }
 
   connection.onDidChangeWatchedFiles((p) => filesChanged(p.changes.map((c) => c.uri)));

@@ -48,7 +48,20 @@ const pieced = fc.array(fc.constantFrom(...PIECES), { maxLength: 60 }).map((part
 
 const mutated = mutatedText(EXAMPLES, 6);
 
-const anyText = fc.oneof(pieced, mutated, fc.string({ unit: 'binary', maxLength: 300 }));
+/**
+ * The same texts with every line ended by any style (LF, CRLF, lone CR) and blank or
+ * spaces-only lines put in: a lone CR before a spaces-only line once made formatting merge lines.
+ */
+const LINE_ENDS = ['\n', '\r\n', '\r'];
+const BLANKS = ['', ' ', '   ', '\t', ' \t '];
+const anyLineEnds = fc
+  .tuple(fc.oneof(pieced, mutated), fc.array(fc.nat(), { minLength: 1, maxLength: 64 }))
+  .map(([text, seeds]) => {
+    const lines = text.split(/\r\n|\r|\n/).flatMap((l, i) => (seeds[i % seeds.length]! % 3 === 0 ? [l, BLANKS[seeds[i % seeds.length]! % BLANKS.length]!] : [l]));
+    return lines.map((l, i) => l + (i < lines.length - 1 ? LINE_ENDS[(seeds[(i * 7) % seeds.length]! >> 2) % 3]! : '')).join('');
+  });
+
+const anyText = fc.oneof(pieced, mutated, anyLineEnds, fc.string({ unit: 'binary', maxLength: 300 }));
 
 /** Positions to probe: some at random (also past line ends), the start and the end. */
 function positions(text: string, seeds: number[]): Position[] {

@@ -43,6 +43,21 @@ const CASES: { name: string; input: string; output: string }[] = [
     output: 'magnet m\r\n  field = 1 T\r\n',
   },
   {
+    name: 'a blank line after a lone CR and before an LF keeps one space, so the two line breaks do not merge into one CRLF',
+    input: 'magnet m\r   \n  field = 1 T\n',
+    output: 'magnet m\r \n  field = 1 T\n',
+  },
+  {
+    name: 'lone CR line ends are kept, blank lines between them emptied',
+    input: 'magnet m \r   \r field=1 T\r',
+    output: 'magnet m\r\r  field = 1 T\r',
+  },
+  {
+    name: 'mixed line ends are kept line by line',
+    input: 'magnet m\r\n  \r field=1 T \n\t\r\n length=8 cm\r',
+    output: 'magnet m\r\n\r  field = 1 T\n\r\n  length = 8 cm\r',
+  },
+  {
     name: 'several settings on a level line: each = gets one space, the gaps between them stay',
     input: 'species Li7\n  level u:  2p 2P°3/2  A=-3.06 MHz  B  = -0.22 MHz\n',
     output: 'species Li7\n  level u:  2p 2P°3/2  A = -3.06 MHz  B = -0.22 MHz\n',

@@ -72,6 +72,20 @@ describe('the worker evaluator', () => {
     expect(logged).toEqual([]); // giving up on an old version is not worth a log line
   });
 
+  it('stops a job superseded in its first moments too, so the newest version is not held up', async () => {
+    const { ev } = make(slow);
+    const abort = new AbortController();
+    const started = Date.now();
+    const old = ev.evaluate('5000', abort.signal);
+    await new Promise((r) => setTimeout(r, 50));
+    abort.abort();
+    const newest = ev.evaluate('10');
+    await expect(old).rejects.toThrow(SUPERSEDED);
+    await expect(newest).resolves.toEqual({ problems: [] });
+    // 0.4 s of grace for the old job plus a fresh worker's start, far from the old job's 5 s.
+    expect(Date.now() - started).toBeLessThan(2500);
+  });
+
   it('rejects pending jobs when disposed', async () => {
     const { ev } = make(hang, 10_000);
     const job = ev.evaluate('x');

@@ -146,7 +146,9 @@ describe('what goes wrong with use', () => {
 
   it('names a circle even when the analysed text has no location of its own', () => {
     const { uri: _none, ...reader } = memorySources('', { '/ws/c.sublevel': 'use "c.sublevel"' });
-    const a = analyze('use "/ws/c.sublevel"', reader);
+    // Without a location of its own, the text may read only below the roots it is given.
+    expect(analyze('use "/ws/c.sublevel"', reader).problems.map((p) => p.code)).toEqual(['use-outside-root']);
+    const a = analyze('use "/ws/c.sublevel"', { ...reader, roots: ['/ws'] });
     expect(a.problems.map((p) => p.code)).toEqual(['use-has-errors']);
     expect(a.problems[0]!.message).toContain('leads back to this file (c.sublevel → c.sublevel)');
   });
@@ -185,5 +187,77 @@ describe('what goes wrong with use', () => {
     });
     expect(problems(a)).toEqual([]);
     expect(a.model!.species.map((s) => s.name)).toEqual(['K39']);
+  });
+});
+
+describe('what use may read', () => {
+  const SECRET = 'root:x:0:0:very-secret-token';
+  /** A reader that holds files outside the workspace too, so that only the confinement keeps them out. */
+  const everywhere = (extra: Record<string, string> = {}) => ({
+    'file:///ws/ok.sublevel': ALKALIS,
+    'file:///etc/passwd': SECRET,
+    'file:///etc/x.sublevel': SECRET,
+    'file:///ws/notes.txt': SECRET,
+    ...extra,
+  });
+
+  const cases: { name: string; use: string; code: string; roots?: string[] }[] = [
+    { name: 'an absolute path outside the workspace', use: '/etc/passwd', code: 'use-not-setup-file' },
+    { name: 'a URI outside the workspace', use: 'file:///etc/passwd', code: 'use-not-setup-file' },
+    { name: 'a setup file outside the workspace', use: '/etc/x.sublevel', code: 'use-outside-root' },
+    { name: 'a climb out of the workspace', use: '../../../etc/x.sublevel', code: 'use-outside-root' },
+    { name: 'an escaped climb in a URI', use: 'file:///ws/..%2F..%2Fetc/x.sublevel', code: 'use-outside-root' },
+    { name: 'a file of another kind inside the workspace', use: 'notes.txt', code: 'use-not-setup-file' },
+    { name: 'a process file', use: '/proc/self/environ', code: 'use-not-setup-file' },
+    { name: 'a setup file in a folder that is not a root', use: '/ws/ok.sublevel', code: 'use-outside-root', roots: ['file:///other/'] },
+  ];
+  for (const c of cases) {
+    it(`refuses ${c.name}, naming the path and quoting nothing of the file`, () => {
+      const reader = { ...memorySources(ROOT, everywhere()), ...(c.roots ? { roots: c.roots } : {}) };
+      const read: string[] = [];
+      const a = analyze(`use "${c.use}"`, { ...reader, readFile: (l) => (read.push(l), reader.readFile!(l)) });
+      expect(a.problems.map((p) => p.code)).toEqual([c.code]);
+      expect(a.problems[0]!.severity).toBe('error');
+      expect(a.problems[0]!.message).toContain(c.use);
+      expect(JSON.stringify(a)).not.toContain('secret');
+      expect(read).toEqual([]); // refused before it is opened
+    });
+  }
+
+  it('reads a setup file below the root, in a subfolder too', () => {
+    expect(problems(run('use "ok.sublevel"', { 'ok.sublevel': ALKALIS }))).toEqual([]);
+    expect(problems(run('use "a/b.sublevel"', { 'a/b.sublevel': ALKALIS }))).toEqual([]);
+  });
+
+  it('keeps the analysed file’s roots for the files it uses (a used file cannot climb further out)', () => {
+    const a = run('use "sub/a.sublevel"', { 'sub/a.sublevel': 'use "../../etc/x.sublevel"' });
+    expect(a.problems.map((p) => p.code)).toEqual(['use-has-errors']);
+    expect(a.problems[0]!.message).toContain('is outside');
+  });
+
+  it('refuses a link that leads outside the root', () => {
+    const reader = memorySources(ROOT, everywhere({ 'file:///ws/link.sublevel': SECRET }));
+    const realLocation = (l: string): string | undefined => (l === 'file:///ws/link.sublevel' ? 'file:///etc/x.sublevel' : l);
+    const a = analyze('use "link.sublevel"', { ...reader, realLocation });
+    expect(a.problems.map((p) => `${p.code} ${p.message}`)).toEqual([
+      'use-outside-root link.sublevel is not read: it is a link that leads outside file:///ws/; `use` reads only files inside it',
+    ]);
+    // A link inside the root that stays inside is fine.
+    const inside = analyze('use "link.sublevel"', { ...memorySources(ROOT, { 'file:///ws/link.sublevel': ALKALIS }), realLocation: (l) => l.replace('link', 'real') });
+    expect(inside.problems.filter((p) => p.severity === 'error')).toEqual([]);
+  });
+
+  it('does not read a used file over the cap, and says how large it is', () => {
+    const big = `species K39\n${'# filler\n'.repeat(120_000)}`;
+    const a = run('use "big.sublevel"', { 'big.sublevel': big });
+    expect(a.problems.map((p) => `${p.code} ${p.message}`)).toEqual([
+      `use-file-too-large big.sublevel is not read: it has ${big.length} characters, more than the 500000 a used file may have`,
+    ]);
+    const many = run('use "many.sublevel"', { 'many.sublevel': `species K39\n${'  level x: 4s 2S1/2\n'.repeat(2_000)}` });
+    expect(many.problems.map((p) => `${p.code} ${p.message}`)).toEqual([
+      'use-file-too-large many.sublevel is not used: it has more than 2000 statements, the most a setup file may have',
+    ]);
+    const onDisk = analyze('use "huge.sublevel"', { ...memorySources(ROOT, {}), readFile: () => ({ tooLarge: true, bytes: 15_000_000 }) });
+    expect(onDisk.problems[0]!.message).toBe('huge.sublevel is not read: it has 15000000 bytes, more than the 500000 a used file may have');
   });
 });

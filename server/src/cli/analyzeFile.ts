@@ -7,11 +7,14 @@ import { diagnosticLine, FileProblemError } from './fileProblems';
 import type { CliContext } from './io';
 import { readSetup } from './readSetup';
 
-/** The analysis of a file; a file that cannot be read is a FileProblemError (exit 1). */
-export function analyzeFile(file: string, ctx: CliContext): Analysis {
+/**
+ * The analysis of a file; a file that cannot be read is a FileProblemError (exit 1). `use` may
+ * read setup files below `root` (default: the file's own folder).
+ */
+export function analyzeFile(file: string, ctx: CliContext, root?: string): Analysis {
   const read = readSetup(file, ctx.fsys);
   if (!read.ok) throw new FileProblemError(file, [read.problem]);
-  return withReaderProblems(analyze(read.text, diskSources(file)), read.problems);
+  return withReaderProblems(analyze(read.text, diskSources(file, root)), read.problems);
 }
 
 /** Adds what the reader found (invalid UTF-8) to every place the analysis reports problems. */

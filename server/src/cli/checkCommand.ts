@@ -14,7 +14,7 @@ import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './a
 import { withReaderProblems } from './analyzeFile';
 import { jsonText } from './escape';
 import { diagnosticLine } from './fileProblems';
-import { findSetupFiles } from './files';
+import { findSetupFiles, type FoundPath, ROOT_OPTION, rootOption } from './files';
 import type { CliContext } from './io';
 import { readSetup } from './readSetup';
 
@@ -24,7 +24,7 @@ export const checkSpec: CommandSpec = {
   name: 'check',
   operands: '<files or folders...>',
   summary: 'report every problem in setup files (folders are searched recursively for *.sublevel); exit 1 if any error',
-  options: { format: { value: 'FORMAT', choices: FORMATS, help: 'text: one file:line:col line per problem (default); json: one document' } },
+  options: { format: { value: 'FORMAT', choices: FORMATS, help: 'text: one file:line:col line per problem (default); json: one document' }, ...ROOT_OPTION },
   notes: [
     'Symbolic links to files and folders are followed; each file and folder is visited once (loops end with a note).',
     'A path that cannot be read or searched is reported as an error of that path; the other paths are still checked.',
@@ -37,23 +37,26 @@ function reportedElsewhere(p: Problem, checked: ReadonlySet<string>): boolean {
   return p.code === 'use-has-errors' && typeof location === 'string' && checked.has(path.resolve(location));
 }
 
-function problemsOf(file: string, ctx: CliContext, checked: ReadonlySet<string>): { problems: Problem[]; read: boolean } {
+function problemsOf(file: string, root: string | undefined, ctx: CliContext, checked: ReadonlySet<string>): { problems: Problem[]; read: boolean } {
   const read = readSetup(file, ctx.fsys);
   if (!read.ok) return { problems: [read.problem], read: false };
-  const a = withReaderProblems(analyze(read.text, diskSources(file)), read.problems);
+  const a = withReaderProblems(analyze(read.text, diskSources(file, root)), read.problems);
   return { problems: a.problems.filter((p) => !reportedElsewhere(p, checked)), read: true };
 }
 
 export function runCheck(args: ParsedArgs, ctx: CliContext): number {
   const format = stringOption(args, 'format', FORMATS) ?? 'text';
   if (args.positionals.length === 0) throw new UsageError('check needs at least one file or folder');
+  const root = rootOption(stringOption(args, 'root'), ctx.fsys);
   const found = findSetupFiles(args.positionals, ctx.fsys);
+  // `use` reads below --root, else below the folder named on the command line, else the file's own folder.
+  const rootOf = (f: FoundPath): string | undefined => root ?? (f.input === f.path ? undefined : f.input);
   const checked = new Set(found.filter((f) => !f.problem).map((f) => path.resolve(f.path)));
   let errors = 0;
   let files = 0;
   const report: { file: string; diagnostics: ReturnType<typeof toDiagnosticResult>[] }[] = [];
   for (const f of found) {
-    const { problems, read } = f.problem ? { problems: [f.problem], read: false } : problemsOf(f.path, ctx, checked);
+    const { problems, read } = f.problem ? { problems: [f.problem], read: false } : problemsOf(f.path, rootOf(f), ctx, checked);
     if (read) files++;
     errors += problems.filter((p) => p.severity === 'error').length;
     report.push({ file: f.path, diagnostics: problems.map(toDiagnosticResult) });

@@ -1,5 +1,6 @@
 /** `sublevel eval <file>`: every computed quantity, as a readable report or the versioned JSON document. */
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
+import { ROOT_OPTION, rootOption } from './files';
 import { analyzeFile, errorCount } from './analyzeFile';
 import { jsonText } from './escape';
 import { diagnosticLine } from './fileProblems';
@@ -12,14 +13,14 @@ export const evalSpec: CommandSpec = {
   name: 'eval',
   operands: '<file>',
   summary: 'every computed quantity of one setup file: g-factors, sublevels, beams, lines, resonances',
-  options: { format: { value: 'FORMAT', choices: FORMATS, help: 'text: a readable report (default); json: the versioned document (docs/schema)' } },
+  options: { format: { value: 'FORMAT', choices: FORMATS, help: 'text: a readable report (default); json: the versioned document (docs/schema)' }, ...ROOT_OPTION },
 };
 
 export function runEval(args: ParsedArgs, ctx: CliContext): number {
   const format = stringOption(args, 'format', FORMATS) ?? 'text';
   if (args.positionals.length !== 1) throw new UsageError('eval needs exactly one setup file');
   const file = args.positionals[0]!;
-  const analysis = analyzeFile(file, ctx);
+  const analysis = analyzeFile(file, ctx, rootOption(stringOption(args, 'root'), ctx.fsys));
   if (!analysis.result) {
     for (const p of analysis.problems) ctx.io.err(diagnosticLine(file, p));
     return 1;

@@ -8,6 +8,7 @@
  */
 import * as path from 'path';
 import type { Problem } from '../format/ast';
+import { UsageError } from './args';
 import { cliProblem } from './fileProblems';
 import { type CliFileSystem, reasonOf } from './fileSystem';
 
@@ -19,11 +20,13 @@ export const MAX_FOLDER_DEPTH = 64;
 export interface FoundPath {
   path: string;
   problem?: Problem;
+  /** The command-line path it was found under (itself, or a folder that holds it). */
+  input: string;
 }
 
 interface Search {
   fsys: CliFileSystem;
-  out: FoundPath[];
+  out: Omit<FoundPath, 'input'>[];
   /** device:inode of every folder searched and file found → the path it was found under. */
   seen: Map<string, string>;
 }
@@ -32,9 +35,32 @@ const keyOf = (s: { dev: number; ino: number }): string => `${s.dev}:${s.ino}`;
 
 export function findSetupFiles(inputs: string[], fsys: CliFileSystem): FoundPath[] {
   const search: Search = { fsys, out: [], seen: new Map() };
-  for (const input of inputs) visit(search, input, 0, true, false);
-  return search.out;
+  const found: FoundPath[] = [];
+  for (const input of inputs) {
+    search.out = [];
+    visit(search, input, 0, true, false);
+    for (const f of search.out) found.push({ ...f, input });
+  }
+  return found;
 }
+
+/** `--root DIR`: the folder whose setup files `use` may read; undefined when not given. */
+export function rootOption(value: string | undefined, fsys: CliFileSystem): string | undefined {
+  if (value === undefined) return undefined;
+  let folder = false;
+  try {
+    folder = fsys.statSync(value).isDirectory();
+  } catch {
+    folder = false;
+  }
+  if (!folder) throw new UsageError(`--root must be a folder: ${value}`);
+  return path.resolve(value);
+}
+
+/** The option, shared by every command that reads a setup file. */
+export const ROOT_OPTION = {
+  root: { value: 'DIR', help: "the folder whose .sublevel files `use` may read (default: the file's own folder; for check <folder>, that folder)" },
+} as const;
 
 /**
  * One path: a folder to search, a file to check, or a problem. `named`: given on the command

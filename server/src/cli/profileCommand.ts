@@ -4,6 +4,7 @@ import { gJLookup } from '../eval/gJLookup';
 import { patternCsv } from '../render';
 import { patternView } from '../views/patternView';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
+import { ROOT_OPTION, rootOption } from './files';
 import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
 import { cliProblem, FileProblemError } from './fileProblems';
 import type { CliContext } from './io';
@@ -15,6 +16,7 @@ export const profileSpec: CommandSpec = {
   operands: '<file>',
   summary: 'the predicted detector pattern as CSV: position, total, one column per sublevel',
   options: {
+    ...ROOT_OPTION,
     beam: { value: 'NAME', help: 'the beam, when the file has more than one' },
     out: { value: 'FILE', help: 'write the CSV to FILE (atomically: the old file stays if writing fails) instead of stdout' },
   },
@@ -25,7 +27,7 @@ export function runProfile(args: ParsedArgs, ctx: CliContext): number {
   const file = args.positionals[0]!;
   const wanted = stringOption(args, 'beam');
   const out = stringOption(args, 'out');
-  const analysis = analyzeFile(file, ctx);
+  const analysis = analyzeFile(file, ctx, rootOption(stringOption(args, 'root'), ctx.fsys));
   const model = analysis.model;
   if (!model) throw new FileProblemError(file, analysis.problems);
   if (model.beams.length === 0) {

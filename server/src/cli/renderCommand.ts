@@ -5,6 +5,7 @@
 import { suggestNames } from '../format/didYouMean';
 import { diagramFor, type DiagramRequest, type DiagramView } from '../views/diagram';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
+import { ROOT_OPTION, rootOption } from './files';
 import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
 import { cliProblem, FileProblemError } from './fileProblems';
 import type { CliContext } from './io';
@@ -19,6 +20,7 @@ export const renderSpec: CommandSpec = {
   operands: '<file>',
   summary: 'a diagram as SVG (light palette, for reports), or the numbers behind it as CSV',
   options: {
+    ...ROOT_OPTION,
     view: { value: 'VIEW', choices: RENDER_VIEWS, help: 'levels: sublevel energies against field (default); pattern: detector pattern; lines: line components' },
     level: { value: 'NAME', help: 'the level to draw (levels view); default: the first beam\'s level, else the first level' },
     field: { value: 'NAME', help: 'the field or magnet to mark; default: the first one' },
@@ -40,7 +42,7 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   const view = (stringOption(args, 'view', RENDER_VIEWS) ?? 'levels') as DiagramView;
   const format = stringOption(args, 'format', FORMATS) ?? 'svg';
   const out = stringOption(args, 'out');
-  const analysis = analyzeFile(file, ctx);
+  const analysis = analyzeFile(file, ctx, rootOption(stringOption(args, 'root'), ctx.fsys));
   const model = analysis.model;
   if (!model) throw new FileProblemError(file, analysis.problems);
   const req: DiagramRequest = { view, theme: 'export' };

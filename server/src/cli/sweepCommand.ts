@@ -8,6 +8,7 @@ import { suggestNames } from '../format/didYouMean';
 import { sweepLevel, type SweepResult } from '../physics/engine';
 import type { LevelModel, SetupModel } from '../model/types';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
+import { ROOT_OPTION, rootOption } from './files';
 import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
 import { jsonText } from './escape';
 import { readFieldOption, MAX_CLI_FIELD_T } from './fieldOption';
@@ -24,6 +25,7 @@ export const sweepSpec: CommandSpec = {
   operands: '<file>',
   summary: 'exact sublevel energies of one level over a field range',
   options: {
+    ...ROOT_OPTION,
     level: { value: 'NAME', help: 'the level (species.level when the name is in several species); needed when the file has more than one' },
     from: { value: 'FIELD', help: 'first field, e.g. 0 or -50G (default 0)' },
     to: { value: 'FIELD', help: 'last field, e.g. 0.1T or "500 G" (required)' },
@@ -44,7 +46,7 @@ export function runSweep(args: ParsedArgs, ctx: CliContext): number {
   const out = stringOption(args, 'out');
   if (fromT === toT) throw new UsageError('--from and --to are the same field; give a range');
 
-  const analysis = analyzeFile(file, ctx);
+  const analysis = analyzeFile(file, ctx, rootOption(stringOption(args, 'root'), ctx.fsys));
   if (!analysis.model || !analysis.result) throw new FileProblemError(file, analysis.problems);
   const level = findLevel(file, analysis.model, stringOption(args, 'level'));
   const gJ = analysis.result.levels.find((l) => l.species === level.species.name && l.level === level.name)?.g_J.used;

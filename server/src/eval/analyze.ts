@@ -8,6 +8,7 @@ import { buildModel } from '../model/buildModel';
 import { recordSources, type SetupSources, type SourceSnapshot } from '../model/sources';
 import type { SetupModel } from '../model/types';
 import { evaluate, sortProblems } from './evaluate';
+import { overCap, unparsedDocument } from './inputLimits';
 
 export { sortProblems };
 import type { EvaluationResult } from './resultTypes';
@@ -26,15 +27,24 @@ export interface Analysis {
   problems: Problem[];
   /** The document's location and every file read for its `use` statements, when a reader was given. */
   sources?: SourceSnapshot;
+  /** Set when the text is over a cap (model/limits.ts) and was not analysed: `problems` says why. */
+  refused?: true;
+}
+
+/** The analysis of a text over a document cap, or undefined when it is within them. */
+export function refusedAnalysis(text: string): Analysis | undefined {
+  const p = overCap(text);
+  return p ? { doc: unparsedDocument(text), problems: [p], refused: true } : undefined;
 }
 
 export function analyze(text: string, options?: AnalyzeOptions): Analysis {
+  const refused = refusedAnalysis(text);
+  if (refused) return refused;
   let doc: SetupDocument;
   try {
     doc = parseSetup(text);
   } catch (e) {
-    const empty: SetupDocument = { text, lineStarts: [0], blocks: [], uses: [], comments: [], problems: [] };
-    return { doc: empty, problems: [internalError(e)] };
+    return { doc: unparsedDocument(text), problems: [internalError(e)] };
   }
   const recording = options ? recordSources(options) : undefined;
   const withSources = <T extends object>(a: T): T & { sources?: SourceSnapshot } => (recording ? { ...a, sources: recording.snapshot() } : a);

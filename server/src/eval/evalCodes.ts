@@ -11,4 +11,7 @@ export const EVAL_RULES = {
   'resonance-no-such-pair': { severity: 'error', summary: 'The named sublevels have no magnetic-dipole or two-photon transition.' },
   'level-too-large': { severity: 'error', summary: 'A level has more sublevels than the engine handles.' },
   'level-not-computed': { severity: 'error', summary: 'The eigen-solver failed for a level at one working field.' },
+  'document-too-large': { severity: 'error', summary: 'A file longer than the document cap; it is not checked.' },
+  'too-many-statements': { severity: 'error', summary: 'A file with more statements than the cap; it is not checked.' },
+  'evaluation-cut-short': { severity: 'warning', summary: 'The evaluation was stopped (time limit or failure); its findings are missing.' },
 } as const satisfies Record<string, { severity: ProblemSeverity; summary: string }>;

@@ -3,7 +3,8 @@
  *   - block contents indented by two spaces, block headers and `use` lines at the left margin; a comment line
  *     takes the indentation of the next statement;
  *   - one space on each side of `=`;
- *   - no trailing whitespace (and no blanks on empty lines).
+ *   - no trailing whitespace (and no blanks on empty lines, except one space on a blank line
+ *     between a lone CR and an LF, which would otherwise merge into one CRLF line break).
  * A trailing comment keeps its column when the code before it shrinks or grows, so aligned
  * comments stay aligned. Comments and values are never moved across each other, rewritten or
  * dropped, and formatting a formatted text changes nothing.
@@ -11,7 +12,7 @@
 import type { Range, TextEdit } from 'vscode-languageserver-types';
 import type { Analysis } from '../eval/analyze';
 import type { SetupDocument } from '../format/ast';
-import { lineText } from '../format/positions';
+import { lineEndOffset, lineText } from '../format/positions';
 import { isBlockWord } from '../format/schema';
 import { scanLine } from '../format/scanner';
 
@@ -75,14 +76,25 @@ function indentation(analysis: Analysis, scanned: ScannedLineItems[]): number[] 
   return out;
 }
 
+/**
+ * True when emptying this line would join its line breaks into one: it follows a lone CR and
+ * ends with LF, so `\r` + `\n` would become a single CRLF and two lines would merge.
+ */
+function emptyingMergesBreaks(doc: SetupDocument, line: number): boolean {
+  if (line === 0) return false;
+  const start = doc.lineStarts[line]!;
+  return doc.text.charCodeAt(start - 1) === 13 && doc.text.charCodeAt(lineEndOffset(doc, line)) === 10;
+}
+
 /** Edits for one line: each whitespace run that should differ is replaced on its own. */
-function lineEdits(line: number, s: ScannedLineItems, indent: number, out: TextEdit[]): void {
+function lineEdits(line: number, s: ScannedLineItems, indent: number, keepOneBlank: boolean, out: TextEdit[]): void {
   const { text, items } = s;
   const edit = (from: number, to: number, newText: string): void => {
     if (text.slice(from, to) !== newText) out.push({ range: { start: { line, character: from }, end: { line, character: to } }, newText });
   };
   if (items.length === 0) {
-    if (text.length > 0) edit(0, text.length, '');
+    // A blank line between a lone CR and an LF keeps one space, so that it stays a line.
+    if (text.length > 0) edit(0, text.length, keepOneBlank ? ' ' : '');
     return;
   }
   const first = items[0]!;
@@ -111,6 +123,6 @@ export function formatting(analysis: Analysis, range?: Range): TextEdit[] {
   const from = range ? Math.max(0, range.start.line) : 0;
   const to = range ? Math.min(lineCount - 1, range.end.line) : lineCount - 1;
   const out: TextEdit[] = [];
-  for (let n = from; n <= to; n++) lineEdits(n, scanned[n]!, Math.max(0, indents[n]!), out);
+  for (let n = from; n <= to; n++) lineEdits(n, scanned[n]!, Math.max(0, indents[n]!), emptyingMergesBreaks(doc, n), out);
   return out;
 }

@@ -56,6 +56,9 @@ export const MODEL_RULES = {
   'use-has-errors': { severity: 'warning', summary: 'A used file has errors of its own (reported in that file).' },
   'use-cycle': { severity: 'error', summary: 'Files that use each other in a circle.' },
   'use-too-deep': { severity: 'error', summary: 'A chain of `use` statements deeper than the limit.' },
+  'use-not-setup-file': { severity: 'error', summary: 'A `use` path that does not name a .sublevel file (it is not read).' },
+  'use-outside-root': { severity: 'error', summary: 'A `use` path outside the workspace folder or root (it is not read).' },
+  'use-file-too-large': { severity: 'error', summary: 'A used file larger than the cap for used files (it is not read).' },
 } as const satisfies Record<string, RuleInfo>;
 
 export type ModelCode = keyof typeof MODEL_RULES;

@@ -6,11 +6,27 @@
  * and so that the language server knows which files a document depends on.
  */
 
+/** A reader's answer for a file larger than MAX_USED_FILE_BYTES (model/limits.ts): it was not read. */
+export interface FileTooLarge {
+  tooLarge: true;
+  bytes: number;
+}
+
+/** The text of a file, or why there is none: too large, or unreadable (undefined). */
+export type FileAnswer = string | FileTooLarge | undefined;
+
 export interface SetupSources {
   /** Where the analysed text lives: a URI (`file:///…`) or an absolute path. Relative `use` paths start from its folder. */
   uri?: string;
+  /**
+   * The folders `use` may read from (the workspace folders, or a CLI `--root`), as locations of
+   * the same kind as `uri`. Without them, the folder of `uri` is the only one.
+   */
+  roots?: readonly string[];
   /** The text of the file at a location (a URI or a path, as `uri` is); undefined when it cannot be read. */
-  readFile?: (location: string) => string | undefined;
+  readFile?: (location: string) => FileAnswer;
+  /** Where a location really leads, symbolic links followed (undefined when it does not exist); optional, the disk readers give it. */
+  realLocation?: (location: string) => string | undefined;
   /** The names of the entries of a folder, for "did you mean" on a missing file; optional. */
   listFolder?: (location: string) => readonly string[] | undefined;
 }
@@ -18,7 +34,9 @@ export interface SetupSources {
 /** Every answer a reader gave during one analysis; plain data, so it can be posted to a worker. */
 export interface SourceSnapshot {
   uri?: string;
-  files: Record<string, string | null>;
+  roots?: string[];
+  files: Record<string, string | FileTooLarge | null>;
+  real?: Record<string, string | null>;
   folders: Record<string, string[] | null>;
 }
 
@@ -27,37 +45,47 @@ export interface RecordingSources {
   snapshot(): SourceSnapshot;
 }
 
+/** Answers of `ask`, each asked once and kept in `kept` (null for undefined). */
+function remembered<A>(kept: Record<string, A | null>, ask: (location: string) => A | undefined): (location: string) => A | undefined {
+  return (location) => {
+    if (!Object.prototype.hasOwnProperty.call(kept, location)) kept[location] = ask(location) ?? null;
+    return kept[location] ?? undefined;
+  };
+}
+
 /** Wraps a reader so that every location it is asked for, and its answer, is kept. */
 export function recordSources(inner: SetupSources): RecordingSources {
-  const files: Record<string, string | null> = {};
+  const files: Record<string, string | FileTooLarge | null> = {};
+  const real: Record<string, string | null> = {};
   const folders: Record<string, string[] | null> = {};
-  const sources: SetupSources = { ...(inner.uri !== undefined ? { uri: inner.uri } : {}) };
+  const fixed = { ...(inner.uri !== undefined ? { uri: inner.uri } : {}), ...(inner.roots ? { roots: [...inner.roots] } : {}) };
+  const sources: SetupSources = { ...fixed };
   const read = inner.readFile;
-  if (read) {
-    sources.readFile = (location) => {
-      if (!Object.prototype.hasOwnProperty.call(files, location)) files[location] = read(location) ?? null;
-      return files[location] ?? undefined;
-    };
-  }
+  if (read) sources.readFile = remembered(files, read);
+  const resolveReal = inner.realLocation;
+  if (resolveReal) sources.realLocation = remembered(real, resolveReal);
   const list = inner.listFolder;
   if (list) {
-    sources.listFolder = (location) => {
-      if (!Object.prototype.hasOwnProperty.call(folders, location)) {
-        const names = list(location);
-        folders[location] = names ? [...names] : null;
-      }
-      return folders[location] ?? undefined;
-    };
+    sources.listFolder = remembered(folders, (l) => {
+      const names = list(l);
+      return names ? [...names] : undefined;
+    });
   }
-  return { sources, snapshot: () => ({ ...(inner.uri !== undefined ? { uri: inner.uri } : {}), files: { ...files }, folders: { ...folders } }) };
+  return {
+    sources,
+    snapshot: () => ({ ...fixed, files: { ...files }, ...(resolveReal ? { real: { ...real } } : {}), folders: { ...folders } }),
+  };
 }
 
 /** A reader that gives back exactly what a snapshot recorded (and nothing else). */
 export function replaySources(snapshot: SourceSnapshot): SetupSources {
   const own = (o: object, k: string): boolean => Object.prototype.hasOwnProperty.call(o, k);
+  const real = snapshot.real;
   return {
     ...(snapshot.uri !== undefined ? { uri: snapshot.uri } : {}),
+    ...(snapshot.roots ? { roots: snapshot.roots } : {}),
     readFile: (location) => (own(snapshot.files, location) ? (snapshot.files[location] ?? undefined) : undefined),
+    ...(real ? { realLocation: (location: string) => (own(real, location) ? (real[location] ?? undefined) : undefined) } : {}),
     listFolder: (location) => (own(snapshot.folders, location) ? (snapshot.folders[location] ?? undefined) : undefined),
   };
 }

@@ -9,12 +9,13 @@ import type { Problem, SetupDocument, UseNode } from '../format/ast';
 import { suggestNames } from '../format/didYouMean';
 import { parseSetup } from '../format/parser';
 import { baseName, folderOf, locationKey, relativeName, resolveLocation } from './locations';
+import { countStatements, MAX_STATEMENTS, MAX_USE_DEPTH, MAX_USED_FILE_BYTES } from './limits';
 import type { ProblemList } from './problems';
+import { refuseUse, rootsOf, SETUP_EXTENSION } from './useConfinement';
 import type { SetupSources } from './sources';
 import type { SetupModel, SpeciesModel, SpeciesOrigin, UsedFileModel } from './types';
 
-/** How many files deep `use` statements are followed (this file is depth 0). */
-export const MAX_USE_DEPTH = 8;
+export { MAX_USE_DEPTH };
 
 /** What one analysis shares across its used files: the chain being read, and the files read so far. */
 export interface UseContext {
@@ -31,7 +32,23 @@ export function rootUseContext(uri: string | undefined): UseContext {
   return uri !== undefined ? { stack: [locationKey(uri)], names: [baseName(uri)], cache: new Map() } : { stack: [], names: [], cache: new Map() };
 }
 
-const SETUP_EXTENSION = '.sublevel';
+/**
+ * Used files parsed by earlier analyses, by location: a keystroke in a document that uses a large
+ * file should not parse that file again. An entry is reused only for the very same text (the
+ * readers give back the same string while a file is unchanged), and the parse is pure.
+ */
+const parsedFiles = new Map<string, { text: string; doc: SetupDocument }>();
+const MAX_PARSED_FILES = 32;
+
+function parseUsed(key: string, text: string): SetupDocument {
+  const kept = parsedFiles.get(key);
+  if (kept && kept.text === text) return kept.doc;
+  const doc = parseSetup(text);
+  parsedFiles.delete(key);
+  if (parsedFiles.size >= MAX_PARSED_FILES) parsedFiles.delete(parsedFiles.keys().next().value!);
+  parsedFiles.set(key, { text, doc });
+  return doc;
+}
 
 function plural(n: number, word: string): string {
   return `${n} ${word}${n === 1 ? '' : 's'}`;
@@ -98,18 +115,33 @@ function resolveOne(node: UseNode, sources: SetupSources, context: UseContext, b
     problems.add('use-too-deep', `${written} is not read: \`use\` is followed at most ${MAX_USE_DEPTH} files deep`, p.range);
     return out;
   }
+  const refusal = refuseUse(location, written, sources);
+  if (refusal) {
+    problems.add(refusal.code, refusal.message, p.range);
+    return out;
+  }
   let used = context.cache.get(key);
   if (!used) {
     const text = sources.readFile(location);
+    if (typeof text === 'object' || (text !== undefined && text.length > MAX_USED_FILE_BYTES)) {
+      const size = typeof text === 'object' ? `${text.bytes} bytes` : `${text.length} characters`;
+      problems.add('use-file-too-large', `${written} is not read: it has ${size}, more than the ${MAX_USED_FILE_BYTES} a used file may have`, p.range);
+      return out;
+    }
+    if (text !== undefined && countStatements(text, MAX_STATEMENTS) > MAX_STATEMENTS) {
+      problems.add('use-file-too-large', `${written} is not used: it has more than ${MAX_STATEMENTS} statements, the most a setup file may have`, p.range);
+      return out;
+    }
     if (text === undefined) {
       const suggestions = siblingSuggestions(sources, location, written);
       const hint = suggestions.length > 0 ? ` — did you mean ${suggestions.map((s) => `'${s}'`).join(' or ')}?` : '';
       problems.add('use-file-missing', `cannot read ${written}: no such file${hint}`, p.range, { data: { suggestions } });
       return out;
     }
-    const usedDoc = parseSetup(text);
+    const usedDoc = parseUsed(key, text);
     const inner: UseContext = { stack: [...context.stack, key], names: [...context.names, baseName(location)], cache: context.cache };
-    used = { doc: usedDoc, model: build(usedDoc, { ...sources, uri: location }, inner) };
+    // The roots stay those of the analysed file: a used file does not widen or narrow them.
+    used = { doc: usedDoc, model: build(usedDoc, { ...sources, uri: location, roots: rootsOf(sources) }, inner) };
     context.cache.set(key, used);
   }
   out.loaded = true;

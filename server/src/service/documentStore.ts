@@ -7,6 +7,7 @@
  */
 import type { Analysis, AnalyzeOptions } from '../eval/analyze';
 import { sortProblems } from '../eval/analyze';
+import { EVAL_RULES } from '../eval/evalCodes';
 import type { Problem } from '../format/ast';
 import { folderOf, locationKey } from '../model/locations';
 import { carryOver, splitLines } from './carryOver';
@@ -53,6 +54,17 @@ function key(p: Problem): string {
   return `${p.code}|${r.start.line}:${r.start.character}-${r.end.line}:${r.end.character}|${p.message}`;
 }
 
+/** The diagnostic that tells the user the evaluation of this version did not finish, and why. */
+function cutShort(reason: string): Problem {
+  const at = { line: 0, character: 0 };
+  return {
+    code: 'evaluation-cut-short',
+    severity: EVAL_RULES['evaluation-cut-short'].severity,
+    message: `the evaluation of this file stopped before it finished (${reason.split('\n')[0]}); sublevel energies, beams, lines and resonances are not checked and hovers show only what the file says`,
+    range: { start: at, end: at },
+  };
+}
+
 export class DocumentStore {
   private readonly docs = new Map<string, DocumentEntry>();
 
@@ -65,22 +77,32 @@ export class DocumentStore {
 
   private options(uri: string): AnalyzeOptions | undefined {
     const files = this.files;
-    return files ? { uri, readFile: (l) => files.readFile(l), listFolder: (l) => files.listFolder(l) } : undefined;
+    if (!files) return undefined;
+    const roots = files.rootsFor?.(uri);
+    return {
+      uri,
+      ...(roots ? { roots } : {}),
+      readFile: (l) => files.readFile(l),
+      ...(files.realLocation ? { realLocation: (l: string) => files.realLocation!(l) } : {}),
+      listFolder: (l) => files.listFolder(l),
+    };
   }
 
   private state(doc: DocumentSnapshot): VersionState {
     const entry = this.docs.get(doc.uri);
     if (entry && entry.current.version === doc.version && !entry.current.stale) return entry.current;
     const text = doc.getText();
-    const lines = splitLines(text);
-    const last = entry?.lastEvaluated;
+    const analysis = analyzeFast(text, this.options(doc.uri));
+    // A text over a cap is not split into lines or evaluated: its one problem is all there is.
+    const lines = analysis.refused ? [] : splitLines(text);
+    const last = analysis.refused ? undefined : entry?.lastEvaluated;
     const state: VersionState = {
       version: doc.version,
       revision: entry && entry.current.version === doc.version ? entry.current.revision + 1 : 0,
       text,
       lines,
-      analysis: analyzeFast(text, this.options(doc.uri)),
-      evaluated: false,
+      analysis,
+      evaluated: analysis.refused === true,
       carried: last ? carryOver(last.lines, lines, last.problems) : [],
       ...(last ? { carriedFrom: last } : {}),
     };
@@ -132,6 +154,12 @@ export class DocumentStore {
     return out;
   }
 
+  /** Every document is analysed again on its next request (what `use` may read has changed). Gives their URIs. */
+  invalidateAll(): string[] {
+    for (const entry of this.docs.values()) entry.current.stale = true;
+    return [...this.docs.keys()];
+  }
+
   /** The problems to show now: all of them once evaluated, otherwise parse and model plus the carried-over ones. */
   problems(doc: DocumentSnapshot): { problems: Problem[]; complete: boolean } {
     const s = this.state(doc);
@@ -163,7 +191,9 @@ export class DocumentStore {
         const message = e instanceof Error ? e.message : String(e);
         if (message === SUPERSEDED) return s.analysis;
         this.log(`sublevel: evaluation failed for ${doc.uri} (version ${s.version}): ${message}`);
-        s.evaluated = true; // do not retry this version: parse and model problems stand
+        // Do not retry this version: parse and model problems stand, and one more says what is missing.
+        s.analysis.problems = sortProblems([...s.analysis.problems, cutShort(message)]);
+        s.evaluated = true;
       }
       return s.analysis;
     });

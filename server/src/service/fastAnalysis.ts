@@ -5,7 +5,7 @@
  * `eval/analyze.ts`.
  */
 import type { Problem, SetupDocument } from '../format/ast';
-import { sortProblems, type Analysis, type AnalyzeOptions } from '../eval/analyze';
+import { refusedAnalysis, sortProblems, type Analysis, type AnalyzeOptions } from '../eval/analyze';
 import { parseSetup } from '../format/parser';
 import { computeLineStarts } from '../format/positions';
 import { buildModel } from '../model/buildModel';
@@ -24,6 +24,8 @@ function internalError(e: unknown): Problem {
 
 /** `options` as for `analyze`: the document's location and a reader for the files it uses. */
 export function analyzeFast(text: string, options?: AnalyzeOptions): Analysis {
+  const refused = refusedAnalysis(text);
+  if (refused) return refused;
   let doc: SetupDocument;
   try {
     doc = parseSetup(text);

@@ -66,7 +66,9 @@ export class LanguageService {
 
   private guard<T>(feature: string, doc: DocumentSnapshot, empty: T, run: (a: Analysis) => T): T {
     try {
-      return run(this.store.analysis(doc));
+      const a = this.store.analysis(doc);
+      // A text over a cap was not analysed: features have nothing to work on (its diagnostic says why).
+      return a.refused ? empty : run(a);
     } catch (e) {
       this.log(`sublevel: ${feature} failed on ${doc.uri} (version ${doc.version}): ${describe(e)}`);
       return empty;
@@ -75,7 +77,8 @@ export class LanguageService {
 
   private async guardEvaluated<T>(feature: string, doc: DocumentSnapshot, empty: T, run: (a: Analysis) => T): Promise<T> {
     try {
-      return run(await this.store.evaluatedWithin(doc, EVALUATION_WAIT_MS));
+      const a = await this.store.evaluatedWithin(doc, EVALUATION_WAIT_MS);
+      return a.refused ? empty : run(a);
     } catch (e) {
       this.log(`sublevel: ${feature} failed on ${doc.uri} (version ${doc.version}): ${describe(e)}`);
       return empty;
@@ -113,6 +116,11 @@ export class LanguageService {
       this.log(`sublevel: tracking used files failed: ${describe(e)}`);
       return [];
     }
+  }
+
+  /** The workspace folders changed, so what `use` may read did: every document is analysed again. Gives their URIs. */
+  rootsChanged(): string[] {
+    return this.store.invalidateAll();
   }
 
   /** 0 for the first analysis of this version, then one more each time a file it uses changed (for diagnostic result ids). */
@@ -192,6 +200,8 @@ export class LanguageService {
   /** The diagram panel's picture of this version (evaluated first, as hovers are). */
   async diagram(doc: DocumentSnapshot, req: { view: DiagramView; line?: number; theme: 'panel' | 'export' }): Promise<DiagramAnswer> {
     const failed: DiagramAnswer = { ok: false, message: 'Sublevel could not draw this file; the server log says why.' };
+    const fast = this.store.analysis(doc); // never throws (analyzeFast catches)
+    if (fast.refused) return { ok: false, message: `Sublevel did not draw this file: ${fast.problems[0]?.message ?? 'it is over a size cap'}.` };
     return this.guardEvaluated('diagram', doc, failed, (a) => diagramFor(a, req));
   }
 

@@ -1,11 +1,12 @@
 /**
  * Runs evaluations in a worker thread, one at a time. A job that takes longer than the time
  * limit stops the worker (its job fails); the next job starts a fresh one. A job that is no
- * longer wanted is dropped from the queue, or, if it has already run for a while, stopped with
+ * longer wanted is dropped from the queue, or, once it has run ABANDON_AFTER_MS, stopped with
  * its worker, so a long evaluation of an old version does not hold up the new one. A worker
  * that cannot start makes the evaluator fall back to this thread.
  */
 import { Worker } from 'worker_threads';
+import { EVALUATION_TIME_LIMIT_MS } from '../model/limits';
 import type { SourceSnapshot } from '../model/sources';
 import { type EvaluationOutcome, type Evaluator, evaluateText, SUPERSEDED } from './evaluator';
 import type { EvaluationReply, EvaluationRequest } from './evaluatorThread';
@@ -30,6 +31,7 @@ export class WorkerEvaluator implements Evaluator {
   private readonly queue: Job[] = [];
   private current: Job | undefined;
   private timer: NodeJS.Timeout | undefined;
+  private abandonTimer: NodeJS.Timeout | undefined;
   private nextId = 1;
   private broken = false;
 
@@ -37,7 +39,7 @@ export class WorkerEvaluator implements Evaluator {
     /** The script to run in the worker: the server bundle itself. */
     private readonly script: string,
     private readonly log: (message: string) => void,
-    private readonly timeLimitMs = 30_000,
+    private readonly timeLimitMs = EVALUATION_TIME_LIMIT_MS,
   ) {}
 
   evaluate(text: string, signal?: AbortSignal, sources?: SourceSnapshot): Promise<EvaluationOutcome> {
@@ -57,11 +59,22 @@ export class WorkerEvaluator implements Evaluator {
       job.reject(new Error(SUPERSEDED));
       return;
     }
-    if (this.current === job && job.startedAt !== undefined && Date.now() - job.startedAt >= ABANDON_AFTER_MS) this.stop(this.worker, SUPERSEDED, false);
+    if (this.current !== job || job.startedAt === undefined) return;
+    // Superseded early: it may still finish soon, so it gets until ABANDON_AFTER_MS after its start
+    // (checked again then, not only now: otherwise it would run to the time limit).
+    const wait = job.startedAt + ABANDON_AFTER_MS - Date.now();
+    if (wait <= 0) this.stop(this.worker, SUPERSEDED, false);
+    else {
+      clearTimeout(this.abandonTimer);
+      this.abandonTimer = setTimeout(() => {
+        if (this.current === job) this.stop(this.worker, SUPERSEDED, false);
+      }, wait);
+    }
   }
 
   dispose(): void {
     clearTimeout(this.timer);
+    clearTimeout(this.abandonTimer);
     void this.worker?.terminate();
     this.worker = undefined;
     for (const job of [...(this.current ? [this.current] : []), ...this.queue.splice(0)]) job.reject(new Error('evaluator stopped'));
@@ -106,6 +119,7 @@ export class WorkerEvaluator implements Evaluator {
     const job = this.current;
     if (!job || job.id !== reply.id) return;
     clearTimeout(this.timer);
+    clearTimeout(this.abandonTimer);
     this.current = undefined;
     if (reply.ok) job.resolve(reply.outcome);
     else job.reject(new Error(reply.error));
@@ -120,6 +134,7 @@ export class WorkerEvaluator implements Evaluator {
   private stop(w: Worker | undefined, message: string, report: boolean): void {
     if (!w || this.worker !== w) return;
     clearTimeout(this.timer);
+    clearTimeout(this.abandonTimer);
     this.worker = undefined;
     void w.terminate();
     if (report) this.log(`sublevel: ${message}`);
