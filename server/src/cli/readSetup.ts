@@ -6,11 +6,16 @@
 import { constants } from 'fs';
 import type { Problem } from '../format/ast';
 import { decodeSetupBytes } from '../format/textDecoding';
+import { MAX_DOCUMENT_CHARS } from '../model/limits';
 import { cliProblem } from './fileProblems';
 import { type CliFileSystem, reasonOf } from './fileSystem';
 
-/** A setup file larger than this is not read: it is not a setup (the same bound as for used files). */
-export const MAX_SETUP_BYTES = 16 * 1024 * 1024;
+/**
+ * A file larger than this is not even read. UTF-8 spends at most 3 bytes per UTF-16 unit, so a
+ * file of more than 3 × MAX_DOCUMENT_CHARS bytes is over the document cap whatever it holds;
+ * one below it is read and the document cap (`document-too-large`) decides.
+ */
+export const MAX_SETUP_BYTES = 3 * MAX_DOCUMENT_CHARS;
 
 export type SetupRead = { ok: true; text: string; problems: Problem[] } | { ok: false; problem: Problem };
 
@@ -57,5 +62,5 @@ export function readSetup(file: string, fsys: CliFileSystem): SetupRead {
 }
 
 function tooLarge(bytes: number): Problem {
-  return cliProblem('file-too-large', `the file has ${bytes} bytes, more than the ${MAX_SETUP_BYTES} bytes (16 MiB) a setup file may have`);
+  return cliProblem('file-too-large', `this file is not read: it has ${bytes} bytes, more than the ${MAX_SETUP_BYTES} a setup file of at most ${MAX_DOCUMENT_CHARS} characters can have`);
 }
