@@ -4,6 +4,7 @@ import { analyze } from '../eval/analyze';
 import { evaluateBeam } from '../eval/beamEvaluation';
 import { patternCsv } from '../render';
 import { patternView } from '../views/patternView';
+import { beamAbout } from '../views/diagram';
 import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
 import { readSetupFile } from './files';
 import { diskSources } from '../service/workspaceFiles';
@@ -18,9 +19,9 @@ export function runProfile(args: ParsedArgs, io: CliIO): number {
   const analysis = analyze(readSetupFile(file), diskSources(file));
   if (!analysis.model) throw new UsageError(`${file} could not be read`);
   const beam = selectBeam(analysis.model, stringOption(args, 'beam'));
-  const v = patternView(beam.name, evaluateBeam(beam, gJLookup(analysis.result?.levels ?? []), false), false);
+  const v = patternView(beam.name, evaluateBeam(beam, gJLookup(analysis.result?.levels ?? []), false));
   if (!v) throw new UsageError(`beam '${beam.name}' cannot be computed yet (run: sublevel check ${file})`);
-  const csv = patternCsv(v);
+  const csv = patternCsv(v, beamAbout(beam, file), 'profile');
   const out = stringOption(args, 'out');
   if (out) {
     writeOutputFile(out, csv);

@@ -1,10 +1,13 @@
 /**
- * `sublevel render <file> [--view levels|pattern|lines] [--level NAME] [--field NAME] [--beam NAME] [--line NAME] [--format svg|csv] [--out FILE]`:
+ * `sublevel render <file> [--view levels|pattern|lines] [--level NAME] [--field NAME] [--beam NAME] [--line NAME]
+ *  [--from B] [--to B] [--unit G|mT|T] [--format svg|csv] [--out FILE]`:
  * the same diagrams the editor panel shows, as standalone SVG for reports (light palette), or the numbers behind them as CSV.
  */
 import { analyze } from '../eval/analyze';
 import { suggestNames } from '../format/didYouMean';
 import { diagramFor, type DiagramRequest, type DiagramView } from '../views/diagram';
+import type { FieldUnit } from '../render';
+import { readQuantityArgument } from '../format/quantityArgument';
 import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
 import { readSetupFile } from './files';
 import { diskSources } from '../service/workspaceFiles';
@@ -15,7 +18,7 @@ import { selectBeam, selectField, selectLevel } from './selectors';
 export const RENDER_VIEWS = ['levels', 'pattern', 'lines'] as const;
 
 export function runRender(args: ParsedArgs, io: CliIO): number {
-  rejectUnknownOptions(args, ['view', 'level', 'field', 'beam', 'line', 'format', 'out']);
+  rejectUnknownOptions(args, ['view', 'level', 'field', 'beam', 'line', 'from', 'to', 'unit', 'format', 'out']);
   if (args.positionals.length !== 1) throw new UsageError('render needs exactly one setup file');
   const file = args.positionals[0]!;
   const view = (stringOption(args, 'view', RENDER_VIEWS) ?? 'levels') as DiagramView;
@@ -23,7 +26,14 @@ export function runRender(args: ParsedArgs, io: CliIO): number {
   const analysis = analyze(readSetupFile(file), diskSources(file));
   const model = analysis.model;
   if (!model) throw new UsageError(`${file} could not be read`);
-  const req: DiagramRequest = { view, theme: 'export' };
+  const req: DiagramRequest = { view, theme: 'export', source: file };
+  const fromText = stringOption(args, 'from');
+  const toText = stringOption(args, 'to');
+  if (fromText !== undefined) req.fromT = fieldArgument(fromText, 'from');
+  if (toText !== undefined) req.toT = fieldArgument(toText, 'to');
+  if (req.fromT !== undefined && req.toT !== undefined && !(req.toT > req.fromT)) throw new UsageError('--to must be a larger field than --from');
+  const unit = stringOption(args, 'unit', ['G', 'mT', 'T']);
+  if (unit !== undefined) req.fieldUnit = unit as FieldUnit;
   const level = stringOption(args, 'level');
   if (level !== undefined) req.level = selectLevel(model, level);
   const field = selectField(model, stringOption(args, 'field'));
@@ -47,4 +57,10 @@ export function runRender(args: ParsedArgs, io: CliIO): number {
     io.err(`wrote the ${view} diagram${format === 'csv' ? ' data' : ''} to ${out}`);
   } else io.out(text);
   return 0;
+}
+
+function fieldArgument(text: string, name: string): number {
+  const r = readQuantityArgument(text, 'flux-density', `--${name}`);
+  if (r.si === undefined) throw new UsageError(r.message ?? `--${name}: cannot read '${text}'`);
+  return r.si;
 }

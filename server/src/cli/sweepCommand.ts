@@ -11,6 +11,7 @@ import { sweepLevel, type SweepResult } from '../physics/engine';
 import type { LevelModel, SetupModel } from '../model/types';
 import { type ParsedArgs, rejectUnknownOptions, stringOption, UsageError } from './args';
 import { readSetupFile } from './files';
+import { stateTableCsv } from '../render/csv';
 import { diskSources } from '../service/workspaceFiles';
 import type { CliIO } from './io';
 
@@ -40,7 +41,7 @@ export function runSweep(args: ParsedArgs, io: CliIO): number {
     for (const e of errors) io.err(`sublevel: ${e.message}`);
     return 1;
   }
-  const text = format === 'csv' ? sweepCsv(sweep) : JSON.stringify(sweepJson(file, level, sweep), null, 1);
+  const text = format === 'csv' ? sweepCsv(sweep, file, level) : JSON.stringify(sweepJson(file, level, sweep), null, 1);
   const out = stringOption(args, 'out');
   if (out) {
     writeOutputFile(out, text + '\n');
@@ -82,17 +83,10 @@ function findLevel(model: SetupModel, name: string | undefined): LevelModel {
   throw new UsageError(`no level named '${name}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : ''}`);
 }
 
-/** CSV: field_T, then one energy column per state (low-field label → high-field label), Hz. */
-export function sweepCsv(s: SweepResult): string {
-  const quote = (t: string): string => `"${t.replace(/"/g, '""')}"`;
-  const header = ['field_T', ...s.states.map((st) => quote(`E_Hz ${st.low.text} -> ${st.high.text}`))].join(',');
-  const rows: string[] = [header];
-  for (let i = 0; i < s.fieldsT.length; i++) {
-    const cells = [String(s.fieldsT[i])];
-    for (const st of s.states) cells.push(String(st.energyHz[i]));
-    rows.push(cells.join(','));
-  }
-  return rows.join('\n');
+/** CSV in the project's convention (docs/csv.md): field_T, energies and moments of every state, states in the documented order. */
+export function sweepCsv(s: SweepResult, file: string, level: LevelModel): string {
+  const states = s.states.map((st) => ({ lowLabel: st.low.text, highLabel: st.high.text, energyHz: st.energyHz, momentJT: st.momentJT }));
+  return stateTableCsv({ kind: 'sweep', about: [['file', file], ['level', `${level.species.name}.${level.name}`]] }, s.fieldsT, states).trimEnd();
 }
 
 function sweepJson(file: string, level: LevelModel, s: SweepResult) {

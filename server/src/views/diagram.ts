@@ -8,8 +8,8 @@ import { gJLookup } from '../eval/gJLookup';
 import { workingFields } from '../eval/evaluate';
 import type { BeamModel, LevelModel, SetupModel } from '../model/types';
 import type { WorkingField } from '../eval/levelEvaluation';
-import { levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, type RenderTheme } from '../render';
-import { linesView } from './linesView';
+import { levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, type FieldUnit, type RenderTheme } from '../render';
+import { lineFieldIndex, linesView } from './linesView';
 import { levelsView } from './levelsView';
 import { patternView } from './patternView';
 
@@ -25,6 +25,12 @@ export interface DiagramRequest {
   marker?: WorkingField;
   beam?: BeamModel;
   lineName?: string;
+  /** Levels view: field range and axis unit chosen by the user (CLI --from/--to/--unit, panel range control). */
+  fromT?: number;
+  toT?: number;
+  fieldUnit?: FieldUnit;
+  /** The setup file's name, for the CSV header line. */
+  source?: string;
 }
 
 export type DiagramAnswer = { ok: true; title: string; svg: string; csv: string } | { ok: false; message: string };
@@ -37,24 +43,34 @@ export function diagramFor(analysis: Analysis, req: DiagramRequest): DiagramAnsw
   if (req.view === 'levels') {
     const level = req.level ?? levelAt(model, req.line);
     if (!level) return { ok: false, message: 'No level to draw: add a species with a level, e.g. `level ground: 2S1/2`.' };
-    const marker = req.marker ?? workingFields(model)[0];
-    const v = levelsView(level, gJOf(level), model.settings, marker);
-    if (!v) return { ok: false, message: `Level '${level.name}' has problems to fix before it can be drawn.` };
-    return { ok: true, title: v.data.title, svg: renderLevels(v.data, theme), csv: levelsCsv(v.data) };
+    const fields = workingFields(model);
+    const marker = req.marker ?? fields[0];
+    const v = levelsView(level, gJOf(level), model.settings, marker, { fromT: req.fromT, toT: req.toT, fieldUnit: req.fieldUnit, fieldMarks: fields });
+    if (!v) return { ok: false, message: `Level '${level.name}' has problems to fix before it can be drawn (or the field range is empty).` };
+    const about: [string, string][] = [['file', req.source ?? ''], ['level', `${level.species.name}.${level.name}`]];
+    return { ok: true, title: v.data.title, svg: renderLevels(v.data, theme), csv: levelsCsv(v.data, about) };
   }
   if (req.view === 'pattern') {
     const beam = req.beam ?? beamAt(model, req.line);
     if (!beam) return { ok: false, message: 'No beam to draw: add a `beam` block with level, source, slits, magnet and drift.' };
     const v = patternView(beam.name, evaluateBeam(beam, gJOf, false));
     if (!v) return { ok: false, message: `Beam '${beam.name}' cannot be computed yet; see the Problems view.` };
-    return { ok: true, title: v.title, svg: renderPattern(v, theme), csv: patternCsv(v) };
+    return { ok: true, title: v.title, svg: renderPattern(v, theme), csv: patternCsv(v, beamAbout(beam, req.source)) };
   }
   const lines = analysis.result?.lines ?? [];
   const line = lines.find((l) => l.name === req.lineName) ?? lines.find((l) => contains(model.lines.find((m) => m.name === l.name)?.node.range ?? NOWHERE, req.line)) ?? lines[0];
   if (!line) return { ok: false, message: 'No line to draw: add one, e.g. `line D2: ground -> upper`.' };
-  const v = linesView(line);
+  const v = linesView(line, lineFieldIndex(line, req.marker?.source.name));
   if (!v) return { ok: false, message: `Line '${line.name}' has no components to draw; see the Problems view.` };
-  return { ok: true, title: v.title, svg: renderLines(v, theme), csv: linesCsv(v) };
+  return { ok: true, title: v.title, svg: renderLines(v, theme), csv: linesCsv(v, [['file', req.source ?? ''], ['line', line.name]]) };
+}
+
+/** The CSV header facts of a beam: which beam, level and magnet (with its field). */
+export function beamAbout(beam: BeamModel, source: string | undefined): [string, string][] {
+  const about: [string, string][] = [['file', source ?? ''], ['beam', beam.name]];
+  if (beam.level) about.push(['level', `${beam.level.species.name}.${beam.level.name}`]);
+  if (beam.magnet) about.push(['field', `magnet ${beam.magnet.name}${beam.magnet.fieldT ? ` ${beam.magnet.fieldT.value} T` : ''}`]);
+  return about;
 }
 
 const NOWHERE = { start: { line: -1 }, end: { line: -1 } };
