@@ -31,9 +31,9 @@ function displayScale(scale: Scale, unit: DisplayUnit): Scale {
 }
 
 /** Horizontal axis along the bottom of `box`, with vertical grid lines. */
-export function bottomAxis(scale: Scale, unit: DisplayUnit, name: string, box: PlotBox, pal: Palette): string {
+export function bottomAxis(scale: Scale, unit: DisplayUnit, name: string, box: PlotBox, pal: Palette, pxPerTick = 90): string {
   const shown = displayScale(scale, unit);
-  const count = Math.max(2, Math.round((box.right - box.left) / 90));
+  const count = Math.max(2, Math.round((box.right - box.left) / pxPerTick));
   const ticks = shown.ticks(count);
   const fmt = shown.tickFormat(count);
   const parts: string[] = [];
@@ -50,6 +50,24 @@ export function bottomAxis(scale: Scale, unit: DisplayUnit, name: string, box: P
       text(`${name} (${unit.symbol})`)),
   );
   return el('g', { class: 'sl-axis sl-axis-x', 'font-size': 11 }, parts);
+}
+
+/** A second horizontal scale along the top of `box` (e.g. the same offsets in units of μB·B/h); its unit sits at the right end. */
+export function topAxis(scale: Scale, unit: DisplayUnit, box: PlotBox, pal: Palette, pxPerTick = 90): string {
+  if (!(unit.factor > 0) || !Number.isFinite(unit.factor)) return '';
+  const shown = displayScale(scale, unit);
+  const count = Math.max(2, Math.round((box.right - box.left) / pxPerTick));
+  const labelled = tickLabels(shown, count);
+  const parts: string[] = [
+    el('path', { class: 'sl-axis-line', d: `M${px(box.left)},${px(box.top)}H${px(box.right)}`, stroke: pal.axis, fill: 'none' }),
+  ];
+  const marks = labelled.map((k) => `M${px(shown(k.t))},${px(box.top)}v-4`).join('');
+  if (marks) parts.push(el('path', { d: marks, stroke: pal.axis, fill: 'none' }));
+  for (const { t, label } of labelled) {
+    parts.push(el('text', { x: shown(t), y: box.top - 7, 'text-anchor': 'middle', fill: pal.muted, 'data-tick': label }, text(label)));
+  }
+  parts.push(el('text', { class: 'sl-axis-title', x: box.right, y: box.top - 18, 'text-anchor': 'end', fill: pal.muted, 'font-size': 9 }, text(unit.symbol)));
+  return el('g', { class: 'sl-axis sl-axis-top', 'font-size': 10 }, parts);
 }
 
 /**
