@@ -57,7 +57,7 @@ export function sortedStates<T extends StateSeries>(states: readonly T[]): T[] {
   const first = (s: T): number => s.energyHz[0] ?? NaN;
   const last = (s: T): number => s.energyHz[s.energyHz.length - 1] ?? NaN;
   const key = (v: number): number => (Number.isFinite(v) ? v : Infinity);
-  const tie = (a: number, b: number): boolean => Math.abs(a - b) <= 1e-9 * Math.max(1, Math.abs(a), Math.abs(b));
+  const tie = (a: number, b: number): boolean => a === b || (Number.isFinite(a - b) && Math.abs(a - b) <= 1e-9 * Math.max(1, Math.abs(a), Math.abs(b)));
   return states
     .map((s, i) => ({ s, i }))
     .sort((a, b) => {
