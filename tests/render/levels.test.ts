@@ -86,7 +86,7 @@ describe('renderLevels geometry', () => {
   it('grows the figure instead of merging names when there are many states', () => {
     const many: LevelsViewData = {
       ...data,
-      curves: Array.from({ length: 40 }, (_, i) => ({ id: `s${i}`, lowLabel: `F=9, m_F=${i - 20}`, highLabel: `h${i}`, energyHz: data.fieldsT.map((b) => (i - 20) * 1e9 * b) })),
+      curves: Array.from({ length: 40 }, (_, i) => ({ id: `s${i}`, lowLabel: `F=9, m_F=${i - 20}`, highLabel: `h${i}`, energyHz: Array.from(data.fieldsT, (b) => (i - 20) * 1e9 * b) })),
     };
     const s = parseSvg(renderLevels(many, exportTheme));
     for (const side of ['sl-end-low', 'sl-end-high']) {

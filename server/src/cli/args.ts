@@ -9,7 +9,7 @@ export interface ParsedArgs {
 export class UsageError extends Error {}
 
 /** Options that take a value; everything else starting with `--` is a flag. */
-const VALUE_OPTIONS = new Set(['format', 'level', 'from', 'to', 'points', 'out', 'view', 'species', 'field', 'beam', 'line', 'unit']);
+const VALUE_OPTIONS = new Set(['format', 'level', 'from', 'to', 'points', 'out', 'view', 'species', 'field', 'beam', 'line', 'unit', 'resonance']);
 
 export function parseArgs(argv: string[]): ParsedArgs {
   const positionals: string[] = [];

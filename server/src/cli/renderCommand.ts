@@ -1,5 +1,5 @@
 /**
- * `sublevel render <file> [--view levels|pattern|lines] [--level NAME] [--field NAME] [--beam NAME] [--line NAME]
+ * `sublevel render <file> [--view levels|pattern|lines|resonance] [--level NAME] [--field NAME] [--beam NAME] [--line NAME] [--resonance NAME]
  *  [--from B] [--to B] [--unit G|mT|T] [--format svg|csv] [--out FILE]`:
  * the same diagrams the editor panel shows, as standalone SVG for reports (light palette), or the numbers behind them as CSV.
  */
@@ -15,10 +15,10 @@ import type { CliIO } from './io';
 import { writeOutputFile } from './output';
 import { selectBeam, selectField, selectLevel } from './selectors';
 
-export const RENDER_VIEWS = ['levels', 'pattern', 'lines'] as const;
+export const RENDER_VIEWS = ['levels', 'pattern', 'lines', 'resonance'] as const;
 
 export function runRender(args: ParsedArgs, io: CliIO): number {
-  rejectUnknownOptions(args, ['view', 'level', 'field', 'beam', 'line', 'from', 'to', 'unit', 'format', 'out']);
+  rejectUnknownOptions(args, ['view', 'level', 'field', 'beam', 'line', 'resonance', 'from', 'to', 'unit', 'format', 'out']);
   if (args.positionals.length !== 1) throw new UsageError('render needs exactly one setup file');
   const file = args.positionals[0]!;
   const view = (stringOption(args, 'view', RENDER_VIEWS) ?? 'levels') as DiagramView;
@@ -47,6 +47,15 @@ export function runRender(args: ParsedArgs, io: CliIO): number {
       throw new UsageError(`no line named '${line}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : ''}`);
     }
     req.lineName = line;
+  }
+  const resonance = stringOption(args, 'resonance');
+  if (resonance !== undefined) {
+    const names = model.resonances.map((r) => r.name);
+    if (!names.includes(resonance)) {
+      const hint = suggestNames(resonance, names);
+      throw new UsageError(`no resonance named '${resonance}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : ''}`);
+    }
+    req.resonanceName = resonance;
   }
   const d = diagramFor(analysis, req);
   if (!d.ok) throw new UsageError(d.message);

@@ -45,10 +45,13 @@ export function bottomAxis(scale: Scale, unit: DisplayUnit, name: string, box: P
   for (const t of ticks) {
     parts.push(el('text', { x: shown(t), y: box.bottom + 18, 'text-anchor': 'middle', fill: pal.muted, 'data-tick': fmt(t) }, text(fmt(t))));
   }
-  parts.push(
-    el('text', { class: 'sl-axis-title', x: (box.left + box.right) / 2, y: box.bottom + 38, 'text-anchor': 'middle', fill: pal.text },
-      text(`${name} (${unit.symbol})`)),
-  );
+  // An empty name leaves the title to another axis (stacked plots share one field axis title).
+  if (name) {
+    parts.push(
+      el('text', { class: 'sl-axis-title', x: (box.left + box.right) / 2, y: box.bottom + 38, 'text-anchor': 'middle', fill: pal.text },
+        text(`${name} (${unit.symbol})`)),
+    );
+  }
   return el('g', { class: 'sl-axis sl-axis-x', 'font-size': 11 }, parts);
 }
 

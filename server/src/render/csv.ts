@@ -5,7 +5,7 @@
  * states sorted in one documented order, full double precision, and text cells quoted when
  * needed and defused against spreadsheet formula injection (labels come from users' files).
  */
-import type { LevelsViewData, LinesViewData, PatternViewData } from './viewData';
+import type { LevelsViewData, LinesViewData, PatternViewData, ResonanceViewData } from './viewData';
 
 /** What a table is about; written as `# sublevel <kind>: key=value; …` on the first line. */
 export interface CsvContext {
@@ -110,4 +110,11 @@ export function linesCsv(d: LinesViewData, about: CsvContext['about'] = []): str
     ['offset_Hz', 'strength', 'polarization', 'transition'],
     sorted.map((c) => [numCell(c.offsetHz), numCell(c.strength), textCell(c.polarization), textCell(c.label.replace(/ → /g, ' -> '))]),
   );
+}
+
+/** The transition frequency and its field slope at each field. */
+export function resonanceCsv(d: ResonanceViewData, about: CsvContext['about'] = []): string {
+  const body: string[][] = [];
+  for (let k = 0; k < d.fieldsT.length; k++) body.push([numCell(d.fieldsT[k]), numCell(d.frequencyHz[k]), numCell(d.slopeHzPerT[k])]);
+  return csvTable({ kind: 'resonance', about: [...about, ['transition', d.pairLabel.replace(/ → /g, ' -> ')]] }, ['field_T', 'frequency_Hz', 'df_dB_Hz_per_T'], body);
 }

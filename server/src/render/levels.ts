@@ -12,6 +12,7 @@ import { BOHR_MAGNETON } from '../physics/constants';
 import { bottomAxis, leftAxis, type PlotBox } from './axes';
 import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
 import { laneHeightFor, placeLabels, truncateLabel, type LabelAnchor, type PlacedLabel } from './labelLayout';
+import { fieldMarksIn, layoutMarkRows, MARK_ROW } from './fieldMarks';
 import { legendRows, type LegendEntry } from './legend';
 import { markerPath } from './markers';
 import { FALLING_DASH, paletteFor, type Palette } from './palette';
@@ -75,7 +76,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const runs = d.curves.map((c) => slopeRuns(fields, c.energyHz));
 
   // Every named field inside the sweep, the chosen one first; labels stack in rows above the plot.
-  const marks = fieldMarksIn(d, inSweep);
+  const marks = fieldMarksIn(d.fieldUnit, inSweep, d.markerT, d.markerLabel, d.fieldMarks);
 
   const legend: LegendEntry[] = [];
   const present = new Set(runs.flatMap((r) => r.map((x) => x.trend)));
@@ -358,37 +359,3 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   );
 }
 
-const MARK_ROW = 14;
-
-interface FieldMark {
-  fieldT: number;
-  label: string;
-  text: string;
-  chosen: boolean;
-}
-
-/** The chosen field and every other named field inside the sweep, each once. */
-function fieldMarksIn(d: LevelsViewData, inSweep: (b: number | undefined) => b is number): FieldMark[] {
-  const unit = fieldDisplayUnit(d.fieldUnit);
-  const out: FieldMark[] = [];
-  const add = (fieldT: number, label: string, chosen: boolean): void => {
-    if (!inSweep(fieldT) || out.some((m) => m.fieldT === fieldT && m.label === label)) return;
-    out.push({ fieldT, label, chosen, text: label ? `${label} · ${formatIn(fieldT, unit)}` : `B = ${formatIn(fieldT, unit)}` });
-  };
-  if (d.markerT !== undefined) add(d.markerT, d.markerLabel ?? '', true);
-  for (const m of d.fieldMarks ?? []) add(m.fieldT, m.label, false);
-  return out;
-}
-
-/** Row of each mark's label above the plot: the lowest row where it overlaps no label already placed. */
-function layoutMarkRows(marks: FieldMark[], left: number, right: number, x: (b: number) => number): number[] {
-  const placed: { row: number; a: number; b: number }[] = [];
-  return marks.map((m) => {
-    const half = estimateTextWidth(m.text) / 2 + 4;
-    const c = Math.min(right - half, Math.max(left + half, x(m.fieldT)));
-    let row = 0;
-    while (placed.some((p) => p.row === row && c + half > p.a && c - half < p.b)) row++;
-    placed.push({ row, a: c - half, b: c + half });
-    return row;
-  });
-}

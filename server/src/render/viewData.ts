@@ -93,3 +93,23 @@ export interface LinesViewData {
 
 /** `panel`: colours follow the editor theme through CSS variables; `export`: fixed light palette for files. */
 export type RenderTheme = { kind: 'panel' } | { kind: 'export' };
+
+/** One RF/microwave transition of a level against field: what a resonance or clock experiment tunes. */
+export interface ResonanceViewData {
+  title: string;
+  fieldUnit: FieldUnit;
+  /** Fields in tesla, ascending. */
+  fieldsT: ArrayLike<number>;
+  /** Transition frequency f = (E_upper − E_lower)/h at each field, Hz. */
+  frequencyHz: ArrayLike<number>;
+  /** df/dB at each field, Hz/T (from the exact moments of both states). */
+  slopeHzPerT: ArrayLike<number>;
+  /** "F=1, m_F=-1 → F=2, m_F=+1". */
+  pairLabel: string;
+  /** Fields where df/dB = 0, as the evaluation found them. */
+  insensitive: { fieldT: number; frequencyHz: number }[];
+  /** Fields where the transition is at the file's frequency. */
+  resonances: { fieldT: number; frequencyHz: number }[];
+  /** Named fields of the file, drawn as rules when inside the range. */
+  fieldMarks: { fieldT: number; label: string }[];
+}

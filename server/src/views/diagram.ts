@@ -8,12 +8,13 @@ import { gJLookup } from '../eval/gJLookup';
 import { workingFields } from '../eval/evaluate';
 import type { BeamModel, LevelModel, SetupModel } from '../model/types';
 import type { WorkingField } from '../eval/levelEvaluation';
-import { levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, type FieldUnit, type RenderTheme } from '../render';
+import { levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, renderResonance, resonanceCsv, type FieldUnit, type RenderTheme } from '../render';
+import { resonanceView } from './resonanceView';
 import { lineFieldIndex, linesView } from './linesView';
 import { levelsView } from './levelsView';
 import { patternView } from './patternView';
 
-export type DiagramView = 'levels' | 'pattern' | 'lines';
+export type DiagramView = 'levels' | 'pattern' | 'lines' | 'resonance';
 
 export interface DiagramRequest {
   view: DiagramView;
@@ -25,6 +26,7 @@ export interface DiagramRequest {
   marker?: WorkingField;
   beam?: BeamModel;
   lineName?: string;
+  resonanceName?: string;
   /** Levels view: field range and axis unit chosen by the user (CLI --from/--to/--unit, panel range control). */
   fromT?: number;
   toT?: number;
@@ -56,6 +58,16 @@ export function diagramFor(analysis: Analysis, req: DiagramRequest): DiagramAnsw
     const v = patternView(beam.name, evaluateBeam(beam, gJOf, false));
     if (!v) return { ok: false, message: `Beam '${beam.name}' cannot be computed yet; see the Problems view.` };
     return { ok: true, title: v.title, svg: renderPattern(v, theme), csv: patternCsv(v, beamAbout(beam, req.source)) };
+  }
+  if (req.view === 'resonance') {
+    const models = model.resonances;
+    const r = models.find((m) => m.name === req.resonanceName) ?? models.find((m) => contains(m.node.range, req.line)) ?? models[0];
+    const result = r && analysis.result?.resonances.find((x) => x.name === r.name);
+    if (!r || !result) return { ok: false, message: 'No resonance to draw: add one, e.g. `resonance clock` with level, lower, upper and range.' };
+    const v = resonanceView(r, result, r.level ? gJOf(r.level) : undefined, model.settings, workingFields(model));
+    if ('problem' in v) return { ok: false, message: v.problem };
+    const about: [string, string][] = [['file', req.source ?? ''], ['resonance', r.name]];
+    return { ok: true, title: v.title, svg: renderResonance(v, theme), csv: resonanceCsv(v, about) };
   }
   const lines = analysis.result?.lines ?? [];
   const line = lines.find((l) => l.name === req.lineName) ?? lines.find((l) => contains(model.lines.find((m) => m.name === l.name)?.node.range ?? NOWHERE, req.line)) ?? lines[0];

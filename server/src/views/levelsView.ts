@@ -76,7 +76,7 @@ export function levelsView(
   return { data, sweep };
 }
 
-function unitFor(upperT: number): FieldUnit {
+export function unitFor(upperT: number): FieldUnit {
   if (upperT < 0.01) return 'G';
   if (upperT < 1) return 'mT';
   return 'T';
