@@ -17,8 +17,9 @@ commands:
   sweep <file> --level NAME --to FIELD [--from FIELD] [--points N] [--format csv|json] [--out FILE]
                                                       exact sublevel energies over a field range
   profile <file> [--beam NAME] [--out FILE.csv]       the predicted detector pattern (position, total, each sublevel)
-  render <file> [--view levels|pattern|lines] [--level NAME] [--field NAME] [--beam NAME] [--line NAME]
-         [--format svg|csv] [--out FILE]              a diagram as SVG, or its numbers as CSV
+  render <file> [--view levels|pattern|lines|resonance] [--level NAME] [--field NAME] [--beam NAME] [--line NAME]
+         [--resonance NAME] [--from FIELD] [--to FIELD] [--unit G|mT|T]
+         [--format svg|csv|png] [--out FILE]          a diagram as SVG or PNG, or its numbers as CSV
   help                                                this text`;
 
 export function runCli(argv: string[], io: CliIO): number {

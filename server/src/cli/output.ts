@@ -2,7 +2,7 @@
 import * as fs from 'fs';
 import { UsageError } from './args';
 
-export function writeOutputFile(path: string, text: string): void {
+export function writeOutputFile(path: string, text: string | Uint8Array): void {
   try {
     fs.writeFileSync(path, text);
   } catch (e) {

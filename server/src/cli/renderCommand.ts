@@ -1,7 +1,8 @@
 /**
  * `sublevel render <file> [--view levels|pattern|lines|resonance] [--level NAME] [--field NAME] [--beam NAME] [--line NAME] [--resonance NAME]
- *  [--from B] [--to B] [--unit G|mT|T] [--format svg|csv] [--out FILE]`:
- * the same diagrams the editor panel shows, as standalone SVG for reports (light palette), or the numbers behind them as CSV.
+ *  [--from B] [--to B] [--unit G|mT|T] [--format svg|csv|png] [--out FILE]`:
+ * the same diagrams the editor panel shows, as standalone SVG for reports (light palette), as PNG at print resolution,
+ * or the numbers behind them as CSV.
  */
 import { analyze } from '../eval/analyze';
 import { suggestNames } from '../format/didYouMean';
@@ -13,6 +14,7 @@ import { readSetupFile } from './files';
 import { diskSources } from '../service/workspaceFiles';
 import type { CliIO } from './io';
 import { writeOutputFile } from './output';
+import { PNG_SCALE, svgToPng } from './pngExport';
 import { selectBeam, selectField, selectLevel } from './selectors';
 
 export const RENDER_VIEWS = ['levels', 'pattern', 'lines', 'resonance'] as const;
@@ -22,7 +24,7 @@ export function runRender(args: ParsedArgs, io: CliIO): number {
   if (args.positionals.length !== 1) throw new UsageError('render needs exactly one setup file');
   const file = args.positionals[0]!;
   const view = (stringOption(args, 'view', RENDER_VIEWS) ?? 'levels') as DiagramView;
-  const format = stringOption(args, 'format', ['svg', 'csv']) ?? 'svg';
+  const format = stringOption(args, 'format', ['svg', 'csv', 'png']) ?? 'svg';
   const analysis = analyze(readSetupFile(file), diskSources(file));
   const model = analysis.model;
   if (!model) throw new UsageError(`${file} could not be read`);
@@ -59,8 +61,14 @@ export function runRender(args: ParsedArgs, io: CliIO): number {
   }
   const d = diagramFor(analysis, req);
   if (!d.ok) throw new UsageError(d.message);
-  const text = format === 'svg' ? d.svg : d.csv;
   const out = stringOption(args, 'out');
+  if (format === 'png') {
+    if (!out) throw new UsageError('--format png writes a file: add --out FILE.png');
+    writeOutputFile(out, svgToPng(d.svg));
+    io.err(`wrote the ${view} diagram to ${out} (${PNG_SCALE}× scale)`);
+    return 0;
+  }
+  const text = format === 'svg' ? d.svg : d.csv;
   if (out) {
     writeOutputFile(out, text);
     io.err(`wrote the ${view} diagram${format === 'csv' ? ' data' : ''} to ${out}`);

@@ -198,13 +198,17 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
 
   // Every counted peak gets a marker and its number; its position is printed too where there is room (taller first).
   const order = peaks.map((_, i) => i).sort((a, b) => peaks[b].height - peaks[a].height || a - b);
-  const taken: [number, number][] = [];
+  // Every number keeps its own span; a position is added where the longer label overlaps no other label.
+  const spans: [number, number][] = peaks.map((p, i) => {
+    const half = estimateTextWidth(String(i + 1), 10) / 2 + 3;
+    return [x(p.positionM) - half, x(p.positionM) + half];
+  });
   const withPosition = new Set<number>();
   for (const i of order) {
     const cx = x(peaks[i].positionM);
     const half = estimateTextWidth(`${i + 1}: ${positionLabel(peaks[i].positionM, unit)}`, 10) / 2 + 3;
-    if (taken.every(([a, b]) => cx + half < a || cx - half > b)) {
-      taken.push([cx - half, cx + half]);
+    if (spans.every(([a, b], j) => j === i || cx + half < a || cx - half > b)) {
+      spans[i] = [cx - half, cx + half];
       withPosition.add(i);
     }
   }
