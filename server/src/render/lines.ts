@@ -164,13 +164,13 @@ function groupedPanels(
   const half = Math.max(...groups.map((g) => Math.max(g.highHz - g.centreHz, g.centreHz - g.lowHz))) * 1.15 || 2 * z;
   const unit = engineeringUnit(half, 'Hz');
   const zUnit: DisplayUnit = { factor: z, symbol: 'μB·B/h' };
-  const height = HEIGHT + 47;
+  const height = HEIGHT + 61;
   const top = 48 + legendSvg.height + 16 + 53;
   const left = 64;
   const right = WIDTH - 20;
   const n = groups.length;
   const w = (right - left - PANEL_GAP * (n - 1)) / n;
-  const bottom = height - 56;
+  const bottom = height - 70;
   const y = scaleLinear().domain(yDomain).range([bottom, top]).nice();
   const ctx: StickContext = { ...base, y, unit };
   const body: string[] = [legendSvg.svg];
@@ -186,7 +186,7 @@ function groupedPanels(
       titleEl(`Group ${gi + 1} of ${n}: ${g.components.length} components centred at Δf = ${signed(g.centreHz, formatSI(g.centreHz, 'Hz'))}`),
       el('text', { class: 'sl-panel-heading', x: (box.left + box.right) / 2, y: top - 30 - stagger, 'text-anchor': 'middle', 'font-size': 11, 'font-weight': 600, fill: pal.text }, text(heading)),
       bottomAxis(x, unit, 'offset', box, pal, Math.min(60, w / 3)),
-      topAxis(x, zUnit, box, pal, Math.min(50, w / 3)),
+      topAxis(x, zUnit, box, pal, Math.min(50, w / 2)),
       el('path', { class: 'sl-frame', d: `M${px(box.left)},${px(box.top)}V${px(box.bottom)}M${px(box.right)},${px(box.top)}V${px(box.bottom)}`, stroke: pal.grid, fill: 'none' }),
       el('g', { class: 'sl-components' }, g.components.map((c) => stick(c, k++, x(c.offsetHz - g.centreHz), ctx))),
     ];
