@@ -101,14 +101,14 @@ describe.skipIf(!HAVE_CHROMIUM)('figures in the browser (demo and worst cases)',
       return {
         width: Number(svg.getAttribute('width')),
         height: Number(svg.getAttribute('height')),
-        texts: [...svg.querySelectorAll('text')]
+        texts: Array.from(svg.querySelectorAll('text'))
           .filter((t) => (t.textContent ?? '').trim() !== '')
           .map((t) => {
             const b = t.getBoundingClientRect();
             const g = t.closest('[data-kind], .sl-axis, .sl-legend, .sl-peak-table, .sl-panel-heading');
             return { text: t.textContent ?? '', x: b.x, y: b.y, w: b.width, h: b.height, group: g?.getAttribute('class') ?? '' };
           }),
-        peaks: [...svg.querySelectorAll('[data-kind="peak"] .sl-peak-mark')].map((p) => {
+        peaks: Array.from(svg.querySelectorAll('[data-kind="peak"] .sl-peak-mark')).map((p) => {
           const b = p.getBoundingClientRect();
           return { x: b.x + b.width / 2, y: b.y + b.height };
         }),

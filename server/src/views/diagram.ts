@@ -31,15 +31,24 @@ export interface DiagramRequest {
   fromT?: number;
   toT?: number;
   fieldUnit?: FieldUnit;
+  /** A named field chosen in the panel (the CLI resolves --field itself and passes `marker`). */
+  fieldName?: string;
   /** The setup file's name, for the CSV header line. */
   source?: string;
 }
 
-export type DiagramAnswer = { ok: true; title: string; svg: string; csv: string } | { ok: false; message: string };
+export type DiagramAnswer = { ok: true; title: string; svg: string; csv: string; fields?: string[] } | { ok: false; message: string };
 
-export function diagramFor(analysis: Analysis, req: DiagramRequest): DiagramAnswer {
+export function diagramFor(analysis: Analysis, request: DiagramRequest): DiagramAnswer {
   const model = analysis.model;
   if (!model) return { ok: false, message: 'The file could not be read; see the Problems view.' };
+  const named = workingFields(model);
+  const req: DiagramRequest = { ...request, marker: request.marker ?? named.find((f) => f.source.name === request.fieldName) };
+  const answer = drawn(analysis, model, req);
+  return answer.ok ? { ...answer, fields: named.map((f) => f.source.name) } : answer;
+}
+
+function drawn(analysis: Analysis, model: SetupModel, req: DiagramRequest): DiagramAnswer {
   const theme: RenderTheme = { kind: req.theme };
   const gJOf = gJLookup(analysis.result?.levels ?? []);
   if (req.view === 'levels') {
