@@ -81,7 +81,11 @@ function drawn(analysis: Analysis, model: SetupModel, req: DiagramRequest): Diag
   const lines = analysis.result?.lines ?? [];
   const line = lines.find((l) => l.name === req.lineName) ?? lines.find((l) => contains(model.lines.find((m) => m.name === l.name)?.node.range ?? NOWHERE, req.line)) ?? lines[0];
   if (!line) return { ok: false, message: 'No line to draw: add one, e.g. `line D2: ground -> upper`.' };
-  const v = linesView(line, lineFieldIndex(line, req.marker?.source.name));
+  const fieldName = req.marker?.source.name;
+  if (fieldName !== undefined && !line.at_fields.some((f) => f.source.name === fieldName)) {
+    return { ok: false, message: `Line '${line.name}' was not computed at field '${fieldName}'.` };
+  }
+  const v = linesView(line, lineFieldIndex(line, fieldName));
   if (!v) return { ok: false, message: `Line '${line.name}' has no components to draw; see the Problems view.` };
   return { ok: true, title: v.title, svg: renderLines(v, theme), csv: linesCsv(v, [['file', req.source ?? ''], ['line', line.name]]) };
 }
