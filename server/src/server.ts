@@ -28,6 +28,8 @@ import { SEMANTIC_TOKENS_LEGEND } from './features/semanticTokensLegend';
 import type { LanguageService } from './service/languageService';
 import type { EditorSettings } from './service/settings';
 import { guardedStdio } from './stdioTransport';
+import type { DiagramView } from './views/diagram';
+import type { FieldUnit } from './render/viewData';
 
 /** Same value as EVALUATOR_ROLE in service/workerEvaluator.ts (not imported: that would load the service here). */
 const EVALUATOR_ROLE = 'sublevel-evaluator';
@@ -343,13 +345,20 @@ function startLanguageServer(): void {
   );
 
   // The diagram panel (client/src/host/diagramPanel.ts) asks for the SVG and CSV of one view.
-  connection.onRequest('sublevel/diagram', (p: { uri?: unknown; view?: unknown; line?: unknown; theme?: unknown } | null, token) => {
+  connection.onRequest('sublevel/diagram', (p: { uri?: unknown; view?: unknown; line?: unknown; theme?: unknown; field?: unknown; fromT?: unknown; toT?: unknown; unit?: unknown } | null, token) => {
     const uri = typeof p?.uri === 'string' ? p.uri : '';
-    const view = p?.view === 'pattern' || p?.view === 'lines' ? p.view : 'levels';
+    const view: DiagramView = p?.view === 'pattern' || p?.view === 'lines' || p?.view === 'resonance' ? p.view : 'levels';
+    const finite = (v: unknown): number | undefined => (typeof v === 'number' && Number.isFinite(v) ? v : undefined);
+    const choices = {
+      ...(typeof p?.field === 'string' ? { fieldName: p.field } : {}),
+      ...(finite(p?.fromT) !== undefined ? { fromT: finite(p?.fromT) } : {}),
+      ...(finite(p?.toT) !== undefined ? { toT: finite(p?.toT) } : {}),
+      ...(p?.unit === 'G' || p?.unit === 'mT' || p?.unit === 'T' ? { fieldUnit: p.unit as FieldUnit } : {}),
+    };
     const theme = p?.theme === 'export' ? 'export' : 'panel';
     const line = typeof p?.line === 'number' && Number.isInteger(p.line) && p.line >= 0 ? p.line : undefined;
     const closed = { ok: false as const, message: 'Open the .sublevel file in an editor to see its diagrams.' };
-    return run('diagram', uri, token, closed, (svc, doc) => svc.diagram(doc, { view, theme, ...(line !== undefined ? { line } : {}) }));
+    return run('diagram', uri, token, closed, (svc, doc) => svc.diagram(doc, { view, theme, ...choices, ...(line !== undefined ? { line } : {}) }));
   });
 
   connection.onDocumentFormatting((p, token) => run('formatting', p.textDocument.uri, token, [], (svc, doc) => svc.formatting(doc)));

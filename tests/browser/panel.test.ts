@@ -191,6 +191,30 @@ describe('diagram panel page (browser)', () => {
       { type: 'export', format: 'csv', view: 'levels' },
     ]);
 
+    // PNG: the button asks the extension, which sends the export SVG back to be drawn on a canvas
+    // (a data: image, allowed by the CSP); the page answers with the PNG at 3 pixels per unit.
+    await page.click('button[data-export="png"]');
+    expect((await posted(page)).at(-1)).toEqual({ type: 'export', format: 'png', view: 'levels' });
+    const exportSvg = renderLevels(data, { kind: 'export' });
+    await page.evaluate((svg) => window.postMessage({ type: 'rasterise', view: 'levels', svg, scale: 3 }, '*'), exportSvg);
+    await page.waitForFunction(() => (window as unknown as { __posted: { type: string }[] }).__posted.some((m) => m.type === 'png'));
+    const png = (await posted(page)).find((m) => (m as { type: string }).type === 'png') as { view: string; data: string };
+    expect(png.view).toBe('levels');
+    const bytes = Buffer.from(png.data, 'base64');
+    expect(bytes.subarray(1, 4).toString('latin1')).toBe('PNG');
+    const svgWidth = Number(/width="(\d+)"/.exec(exportSvg)![1]);
+    expect(bytes.readUInt32BE(16)).toBe(svgWidth * 3);
+
+    // Field and range choices: the named fields the extension sent are offered; Apply posts the choice.
+    await page.evaluate((m) => window.postMessage(m, '*'), { ...show, fields: ['trap', 'probe'] });
+    await page.waitForFunction(() => document.querySelectorAll('#sl-field option').length === 3);
+    await page.selectOption('#sl-field', 'probe');
+    await page.fill('#sl-from', '0');
+    await page.fill('#sl-to', '150');
+    await page.selectOption('#sl-unit', 'G');
+    await page.click('#sl-options button[type="submit"]');
+    expect((await posted(page)).at(-1)).toEqual({ type: 'options', view: 'levels', field: 'probe', from: 0, to: 150, unit: 'G' });
+
     expect(errors).toEqual([]);
 
     // Untrusted messages: wrong shapes are ignored; hostile SVG content is stripped. (Parsing it
@@ -229,8 +253,13 @@ describe('diagram panel page (browser)', () => {
     expect(await page.locator('button[data-export="csv"]').isDisabled()).toBe(true); // no CSV sent
     await page.reload();
     await page.waitForFunction(() => (window as unknown as { __posted: unknown[] }).__posted.length > 0);
-    expect(await posted(page)).toEqual([{ type: 'ready', view: 'pattern' }]);
+    // The view and the field and range choices are restored and sent again.
+    expect(await posted(page)).toEqual([
+      { type: 'ready', view: 'pattern' },
+      { type: 'options', view: 'pattern', field: 'probe', from: 0, to: 150, unit: 'G' },
+    ]);
     expect(await page.locator('#sl-tab-pattern').getAttribute('aria-selected')).toBe('true');
+    expect(await page.inputValue('#sl-to')).toBe('150');
     expect(errors.filter((e) => !/Content Security Policy/.test(e))).toEqual([]);
 
     // The CSP blocks scripts without the nonce.

@@ -11,7 +11,7 @@ describe('message validation', () => {
   it('accepts exactly the show message shape', () => {
     expect(parseHostMessage(ok)).toEqual(ok);
     expect(parseHostMessage({ ...ok, csv: 'a,b\n', extra: 1 })).toEqual({ ...ok, csv: 'a,b\n' });
-    expect(parseHostMessage({ ...ok, title: 'x'.repeat(1000) })?.title).toHaveLength(400);
+    expect((parseHostMessage({ ...ok, title: 'x'.repeat(1000) }) as { title: string }).title).toHaveLength(400);
   });
 
   it('rejects anything else', () => {
@@ -23,7 +23,15 @@ describe('message validation', () => {
   it('checks page messages for the extension host', () => {
     expect(parsePageMessage({ type: 'export', format: 'csv', view: 'lines' })).toEqual({ type: 'export', format: 'csv', view: 'lines' });
     expect(parsePageMessage({ type: 'ready', view: 'pattern', junk: true })).toEqual({ type: 'ready', view: 'pattern' });
-    expect(parsePageMessage({ type: 'export', format: 'png', view: 'lines' })).toBeUndefined();
+    expect(parsePageMessage({ type: 'export', format: 'png', view: 'lines' })).toEqual({ type: 'export', format: 'png', view: 'lines' });
+    expect(parsePageMessage({ type: 'export', format: 'gif', view: 'lines' })).toBeUndefined();
+    expect(parsePageMessage({ type: 'options', view: 'levels', field: 'bias', from: 0, to: 120, unit: 'G', junk: 1 })).toEqual({ type: 'options', view: 'levels', field: 'bias', from: 0, to: 120, unit: 'G' });
+    expect(parsePageMessage({ type: 'options', view: 'levels', from: Infinity, unit: 'kG' })).toEqual({ type: 'options', view: 'levels' });
+    expect(parsePageMessage({ type: 'png', view: 'pattern', data: 'iVBORw0KGgo=' })).toEqual({ type: 'png', view: 'pattern', data: 'iVBORw0KGgo=' });
+    expect(parsePageMessage({ type: 'png', view: 'pattern', data: '<script>' })).toBeUndefined();
+    expect(parseHostMessage({ type: 'rasterise', view: 'resonance', svg: '<svg/>', scale: 3 })).toEqual({ type: 'rasterise', view: 'resonance', svg: '<svg/>', scale: 3 });
+    expect(parseHostMessage({ type: 'rasterise', view: 'resonance', svg: '<svg/>', scale: 100 })).toBeUndefined();
+    expect(parseHostMessage({ ...ok, fields: ['trap', 3, 'probe'] })).toEqual({ ...ok, fields: ['trap', 'probe'] });
     expect(parsePageMessage({ type: 'view' })).toBeUndefined();
   });
 });
@@ -89,10 +97,13 @@ describe('panel HTML', () => {
     expect(html).not.toMatch(/\son\w+=/);
   });
 
-  it('offers the three views and both exports', () => {
-    expect(html.match(/role="tab"/g)).toHaveLength(3);
+  it('offers the four views, three exports and the field and range choices', () => {
+    expect(html.match(/role="tab"/g)).toHaveLength(4);
+    expect(html).toContain('data-view="resonance"');
     expect(html).toContain('data-export="svg"');
     expect(html).toContain('data-export="csv"');
+    expect(html).toContain('data-export="png"');
+    for (const id of ['sl-field', 'sl-from', 'sl-to', 'sl-unit']) expect(html).toContain(`id="${id}"`);
     expect(html).toContain('id="sl-host"');
     expect(html).toContain('id="sl-readout"');
   });

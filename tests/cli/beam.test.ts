@@ -89,7 +89,8 @@ describe('sublevel profile and render', () => {
     const r = cli('profile', 'examples/lithium-beam.sublevel');
     expect(r.code).toBe(0);
     const rows = r.out.split('\n');
-    expect(rows[0]).toMatch(/^position \(m\),total,"F=1, m_F=\+1"/);
+    expect(rows[0]).toBe('# sublevel profile: file=examples/lithium-beam.sublevel; beam=main; level=Li7.ground; field=magnet selector 0.45 T');
+    expect(rows[1]).toMatch(/^position_m,total_per_m,"share_per_m\[F=1, m_F=\+1\]"/);
     const cells = rows[Math.floor(rows.length / 2)]!.split(',').map(Number);
     const sum = cells.slice(2).reduce((s, x) => s + x, 0);
     expect(sum).toBeCloseTo(cells[1]!, 6);

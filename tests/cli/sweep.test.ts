@@ -8,15 +8,23 @@ describe('sublevel sweep', () => {
     const r = cli('sweep', RB, '--level', 'ground', '--to', '1000 G', '--points', '11');
     expect(r.code).toBe(0);
     const rows = r.out.split('\n');
-    expect(rows).toHaveLength(12);
-    const header = rows[0]!.split('","');
-    expect(header).toHaveLength(8);
-    expect(rows[0]).toContain('F=2, m_F=+2 -> m_J=+1/2, m_I=+3/2');
-    const zero = rows[1]!.split(',').map(Number);
+    expect(rows).toHaveLength(13);
+    expect(rows[0]).toBe(`# sublevel sweep: file=${RB}; level=Rb87.ground`);
+    // field_T, then 8 energies and 8 moments, states sorted by zero-field energy (F=1 first), ties by energy at the top field.
+    const header = rows[1]!.split('","');
+    expect(header).toHaveLength(16);
+    expect(header[0]).toBe('field_T,"energy_Hz[F=1, m_F=+1 -> m_J=-1/2, m_I=+3/2]');
+    expect(rows[1]).toContain('"energy_Hz[F=2, m_F=+2 -> m_J=+1/2, m_I=+3/2]"');
+    expect(rows[1]).toContain('"moment_J_per_T[F=2, m_F=+2 -> m_J=+1/2, m_I=+3/2]"');
+    const zero = rows[2]!.split(',').slice(0, 9).map(Number);
     expect(zero[0]).toBe(0);
     // 87Rb ground splitting 6 834 682 610.904 Hz (published measurement): F=2 minus F=1 at zero field.
     expect(Math.max(...zero.slice(1)) - Math.min(...zero.slice(1))).toBeCloseTo(6834682610.904, 2);
-    expect(Number(rows[11]!.split(',')[0])).toBeCloseTo(0.1, 15);
+    expect(Number(rows[12]!.split(',')[0])).toBeCloseTo(0.1, 15);
+    // The stretched state's moment is field-independent: −(g_J/2 + g_I·3/2)·μ_B with g_J = 2.00233113 and
+    // g_I = −0.0009951414 (alkali D-line data compilation) and CODATA 2022 μ_B = 9.2740100657e-24 J/T.
+    const top = rows[12]!.split(',').map(Number);
+    expect(top[16]! / -9.270976100e-24).toBeCloseTo(1, 7);
   });
 
   it('gives JSON with moments and reads units the way the format does', () => {

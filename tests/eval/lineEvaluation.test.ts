@@ -55,7 +55,17 @@ describe('line components through the setup file', () => {
     const svg = cli('render', 'examples/rubidium-bias.sublevel', '--view', 'lines').out;
     expect(svg).toMatch(/^<svg/);
     const csv = cli('render', 'examples/rubidium-bias.sublevel', '--view', 'lines', '--format', 'csv').out.trim().split('\n');
-    expect(csv[0]).toBe('offset (Hz),strength,polarization,label');
-    expect(csv).toHaveLength(1 + 68);
+    expect(csv[0]).toBe('# sublevel lines: file=examples/rubidium-bias.sublevel; line=D2; field=field trap 0.000323 T');
+    expect(csv[1]).toBe('offset_Hz,strength,polarization,transition');
+    expect(csv).toHaveLength(2 + 68);
+    const offsets = csv.slice(2).map((r) => Number(r.split(',')[0]));
+    expect(offsets).toEqual([...offsets].sort((a, b) => a - b));
+    // --field picks the field the components are computed at: the two CSVs differ and say so.
+    const probe = cli('render', 'examples/rubidium-bias.sublevel', '--view', 'lines', '--field', 'probe', '--format', 'csv').out.split('\n');
+    expect(probe[0]).toBe('# sublevel lines: file=examples/rubidium-bias.sublevel; line=D2; field=field probe 0.012 T');
+    expect(probe.slice(2)).not.toEqual(csv.slice(2));
+    const svgProbe = cli('render', 'examples/rubidium-bias.sublevel', '--view', 'lines', '--field', 'probe').out;
+    expect(svgProbe).not.toBe(svg);
+    expect(svgProbe).toContain('at field probe, 120 G');
   });
 });

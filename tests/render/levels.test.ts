@@ -8,6 +8,7 @@ import { describe, expect, it } from 'vitest';
 import { renderLevels } from '../../server/src/render';
 import type { LevelsViewData } from '../../server/src/render';
 import { levelsFixture } from './fixtures';
+import { paletteFor } from '../../server/src/render/palette';
 import { all, axisMap, byClass, parseSvg, pathPoints, textOf, type Node } from './svgTree';
 
 const TOL = 0.05;
@@ -18,10 +19,11 @@ function curveGroups(svg: Node): Node[] {
   return all(svg, (n) => n.attrs['data-kind'] === 'curve');
 }
 
+/** The whole curve: its slope segments joined (neighbouring segments share their end point). */
 function curvePath(g: Node): { x: number; y: number }[] {
-  const p = g.children.find((c) => c.name === 'path');
-  if (!p) throw new Error('curve without path');
-  return pathPoints(p.attrs.d);
+  const segs = g.children.filter((c) => c.name === 'path' && c.attrs.class?.startsWith('sl-seg'));
+  if (segs.length === 0) throw new Error('curve without path');
+  return segs.flatMap((p, i) => pathPoints(p.attrs.d).slice(i === 0 ? 0 : 1));
 }
 
 describe('renderLevels geometry', () => {
@@ -67,12 +69,35 @@ describe('renderLevels geometry', () => {
     });
   });
 
-  it('labels the high-field ends with the high-field names and shares one label for degenerate low-field ends', () => {
+  it('names every state at both ends, never merging degenerate low-field ends', () => {
     const high = byClass(svg, 'sl-end-high')[0].children.map((g) => g.attrs['data-label']);
-    expect(new Set(high)).toEqual(new Set(data.curves.map((c) => c.highLabel)));
-    // At B = 0 the five F=2 states (and the three F=1 states) coincide.
-    const low = byClass(svg, 'sl-end-low')[0].children.map((g) => g.attrs['data-label']).sort();
-    expect(low).toEqual(['F=1 · 3 states', 'F=2 · 5 states']);
+    expect(high.sort()).toEqual(data.curves.map((c) => c.highLabel).sort());
+    // At B = 0 the five F=2 states (and the three F=1 states) coincide; each still has its own name.
+    const lowGroups = byClass(svg, 'sl-end-low')[0].children;
+    expect(lowGroups.map((g) => g.attrs['data-label']).sort()).toEqual(data.curves.map((c) => c.lowLabel).sort());
+    for (const side of ['sl-end-low', 'sl-end-high']) expect(textOf(byClass(svg, side)[0])).not.toMatch(/states| \+\d/);
+    // Fanned out in the order the curves leave the common point, so leaders do not cross:
+    // the F=2 names from top to bottom follow the energies a little way in.
+    const labelY = (g: Node) => Number(all(g, (n) => n.name === 'text')[0].attrs.y);
+    const f2 = lowGroups.filter((g) => g.attrs['data-label'].startsWith('F=2')).sort((a, b) => labelY(a) - labelY(b));
+    expect(f2.map((g) => g.attrs['data-label'])).toEqual(['F=2, m_F=2', 'F=2, m_F=1', 'F=2, m_F=0', 'F=2, m_F=-1', 'F=2, m_F=-2']);
+  });
+
+  it('grows the figure instead of merging names when there are many states', () => {
+    const many: LevelsViewData = {
+      ...data,
+      curves: Array.from({ length: 40 }, (_, i) => ({ id: `s${i}`, lowLabel: `F=9, m_F=${i - 20}`, highLabel: `h${i}`, energyHz: Array.from(data.fieldsT, (b) => (i - 20) * 1e9 * b) })),
+    };
+    const s = parseSvg(renderLevels(many, exportTheme));
+    for (const side of ['sl-end-low', 'sl-end-high']) {
+      const texts = all(byClass(s, side)[0], (n) => n.name === 'text');
+      expect(texts).toHaveLength(40);
+      const ys = texts.map((t) => Number(t.attrs.y)).sort((a, b) => a - b);
+      for (let i = 1; i < ys.length; i++) expect(ys[i] - ys[i - 1]).toBeGreaterThanOrEqual(13 - TOL);
+      // Inside the frame.
+      expect(ys[0]).toBeGreaterThan(0);
+      expect(ys[ys.length - 1]).toBeLessThan(Number(s.attrs.height));
+    }
   });
 
   it('keeps end labels at least one label height apart and inside the plot', () => {
@@ -97,12 +122,62 @@ describe('renderLevels geometry', () => {
     });
   });
 
-  it('colours by trend: F=2, m_F=2 rises and F=1, m_F=1 falls at 120 mT', () => {
+  it('styles by trend: F=2, m_F=2 rises all along; F=1, m_F=1 falls', () => {
     const byId = new Map(curveGroups(svg).map((g) => [g.attrs['data-id'], g]));
-    expect(byId.get('F2m4')?.attrs['data-trend']).toBe('rising');
-    expect(byId.get('F1m2')?.attrs['data-trend']).toBe('falling');
-    expect(byId.get('F1m2')?.attrs['stroke-dasharray']).toBe('7 3');
-    expect(byId.get('F2m4')?.attrs['stroke-dasharray']).toBeUndefined();
+    const segs = (id: string) => byId.get(id)!.children.filter((c) => c.attrs.class?.startsWith('sl-seg'));
+    expect(segs('F2m4').map((g) => g.attrs['data-trend'])).toEqual(['rising']);
+    expect(segs('F2m4')[0].attrs['stroke-dasharray']).toBeUndefined();
+    expect(segs('F1m2').map((g) => g.attrs['data-trend'])).toEqual(['falling']);
+    expect(segs('F1m2')[0].attrs['stroke-dasharray']).toBe('7 3');
+  });
+
+  it('styles each stretch of a curve by its own slope, whatever the chosen field', () => {
+    // E = (B − 0.5)²: falls below 0.5 T, rises above — a state that turns over.
+    const fieldsT = Array.from({ length: 101 }, (_, k) => k / 100);
+    const turn: LevelsViewData = { title: 'turn', fieldUnit: 'T', fieldsT, curves: [{ id: 't', lowLabel: 't', highLabel: 't', energyHz: fieldsT.map((b) => 1e12 * (b - 0.5) ** 2) }] };
+    const kinds = (markerT: number) => {
+      const s = parseSvg(renderLevels({ ...turn, markerT }, exportTheme));
+      return curveGroups(s)[0].children.filter((c) => c.attrs.class?.startsWith('sl-seg')).map((g) => `${g.attrs['data-trend']} ${g.attrs['data-from-t']}-${g.attrs['data-to-t']} ${g.attrs.stroke}`);
+    };
+    const at02 = kinds(0.2);
+    expect(at02.map((k) => k.split(' ')[0])).toEqual(['falling', 'rising']);
+    expect(at02[0]).toMatch(/^falling 0-0\.5 /);
+    expect(at02[1]).toMatch(/^rising 0\.5-1 /);
+    expect(at02[0].split(' ')[2]).not.toBe(at02[1].split(' ')[2]);
+    // The chosen field changes the dots, never the curve styles.
+    expect(kinds(0.9)).toEqual(at02);
+  });
+
+  it('marks every named field with its own labelled rule, labels not overlapping', () => {
+    const d: LevelsViewData = {
+      ...data,
+      fieldMarks: [
+        { fieldT: 0.12, label: 'field bias coil' },
+        { fieldT: 0.121, label: 'field probe' },
+        { fieldT: 0.125, label: 'magnet sorter' },
+        { fieldT: 2, label: 'field far' },
+      ],
+    };
+    const s = parseSvg(renderLevels(d, exportTheme));
+    const marks = all(s, (n) => n.attrs['data-kind'] === 'marker');
+    expect(marks.map((m) => m.attrs['data-field-t'])).toEqual(['0.12', '0.12', '0.121', '0.125']);
+    const x = axisMap(s, 'sl-axis-x');
+    const boxes = marks.map((m) => {
+      const t = all(m, (n) => n.name === 'text')[0];
+      const w = textOf(t).length * 6.3;
+      const cx = Number(t.attrs.x);
+      return { a: cx - w / 2, b: cx + w / 2, y: Number(t.attrs.y) };
+    });
+    for (let i = 0; i < boxes.length; i++) {
+      for (let j = i + 1; j < boxes.length; j++) {
+        const overlap = boxes[i].y === boxes[j].y && boxes[i].a < boxes[j].b && boxes[j].a < boxes[i].b;
+        expect(overlap, `labels ${i} and ${j}`).toBe(false);
+      }
+    }
+    const rule = pathPoints(byClass(marks[3], 'sl-marker-rule')[0].attrs.d)[0];
+    expect(Math.abs(rule.x - x(125))).toBeLessThan(TOL);
+    // A named field outside the sweep is said in the description, not silently dropped.
+    expect(textOf(byClass(s, 'sl-heading')[0].parent!.children.find((c) => c.name === 'desc')!)).toContain('outside the sweep: field far');
   });
 
   it('has axis domains that contain all data', () => {
@@ -186,13 +261,16 @@ describe('renderLevels text safety, theme and determinism', () => {
   it('uses theme variables in the panel and fixed colours in exports', () => {
     const panel = renderLevels(levelsFixture(), panelTheme);
     const file = renderLevels(levelsFixture(), exportTheme);
-    expect(panel).toMatch(/stroke="var\(--vscode-charts-red, #[0-9a-f]{6}\)"/);
+    expect(panel).toMatch(/fill="var\(--vscode-editor-foreground, #[0-9a-f]{6}\)"/);
+    // Series hues are the project's own in both (they pass contrast on light and dark themes).
+    expect(panel).toContain(`stroke="${paletteFor(exportTheme).rising}"`);
+    expect(panel).not.toContain('charts-');
     expect(file).not.toContain('var(');
     expect(file).toContain('class="sl-bg"');
     expect(panel).not.toContain('class="sl-bg"');
-    // Hover copies of the curves only in the panel.
-    expect(panel).toContain('<use href="#');
-    expect(file).not.toContain('<use');
+    // Wide invisible hover copies of the curves only in the panel.
+    expect(panel).toContain('class="sl-hit"');
+    expect(file).not.toContain('sl-hit');
   });
 
   it('never throws on empty or broken input', () => {

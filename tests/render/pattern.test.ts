@@ -11,7 +11,8 @@ describe('renderPattern', () => {
   const data = patternFixture();
   const svg = parseSvg(renderPattern(data, theme));
   const xOf = axisMap(svg, 'sl-axis-x'); // mm
-  const yOf = axisMap(svg, 'sl-axis-y'); // relative signal
+  const yOf0 = axisMap(svg, 'sl-axis-y'); // % of atoms per mm
+  const yOf = (perM: number) => yOf0(perM / 10);
 
   it('sets each peak marker over its position, just above its height', () => {
     const peaks = all(svg, (n) => n.attrs['data-kind'] === 'peak');

@@ -7,17 +7,21 @@ import * as vscode from 'vscode';
 import type { LanguageClient } from 'vscode-languageclient/node';
 import { makeNonce } from '../panel/nonce';
 import { panelHtml } from '../panel/panelHtml';
-import { parsePageMessage, type View } from '../panel/messages';
+import { isView, parsePageMessage, type FieldUnitName, type View, type ViewOptions } from '../panel/messages';
 import { DIAGRAM_REQUEST, type DiagramParams, type DiagramResult } from './diagramProtocol';
 import { messageSvg } from './messageSvg';
 
 export const PANEL_VIEW_TYPE = 'sublevel.diagrams';
 /** Redraw this long after the last keystroke. */
 const REDRAW_DELAY_MS = 100;
+/** Device pixels per SVG unit for PNG (a 760-unit figure becomes 2280 px, about 300 dpi at 19 cm). */
+const PNG_SCALE = 3;
+const UNIT_TESLA: Record<FieldUnitName, number> = { G: 1e-4, mT: 1e-3, T: 1 };
 
 export class DiagramPanel {
   private static current: DiagramPanel | undefined;
   private view: View = 'levels';
+  private options: ViewOptions = {};
   private document: vscode.TextDocument | undefined;
   private timer: NodeJS.Timeout | undefined;
   private readonly disposables: vscode.Disposable[] = [];
@@ -35,7 +39,7 @@ export class DiagramPanel {
     panel.webview.options = webviewOptions(context);
     const saved = state as { view?: unknown } | undefined;
     const d = new DiagramPanel(panel, context, client);
-    if (saved && (saved.view === 'levels' || saved.view === 'pattern' || saved.view === 'lines')) d.view = saved.view;
+    if (saved && isView(saved.view)) d.view = saved.view;
     DiagramPanel.current = d;
   }
 
@@ -74,8 +78,12 @@ export class DiagramPanel {
     const m = parsePageMessage(raw);
     if (!m) return;
     this.view = m.view;
-    if (m.type === 'export') void this.export(m.format);
-    else this.schedule(0);
+    if (m.type === 'export') void (m.format === 'png' ? this.exportPng() : this.export(m.format));
+    else if (m.type === 'png') void this.savePng(m.data);
+    else {
+      if (m.type === 'options') this.options = { field: m.field, from: m.from, to: m.to, unit: m.unit };
+      this.schedule(0);
+    }
   }
 
   private schedule(delay = REDRAW_DELAY_MS): void {
@@ -87,7 +95,18 @@ export class DiagramPanel {
     const doc = this.document;
     if (!doc) return { ok: false, message: 'Open a .sublevel file to see its diagrams.' };
     const editor = vscode.window.visibleTextEditors.find((e) => e.document === doc);
-    const params: DiagramParams = { uri: doc.uri.toString(), view: this.view, theme, ...(editor ? { line: editor.selection.active.line } : {}) };
+    const o = this.options;
+    const toTesla = (v: number | undefined): number | undefined => (v === undefined ? undefined : v * UNIT_TESLA[o.unit ?? 'mT']);
+    const params: DiagramParams = {
+      uri: doc.uri.toString(),
+      view: this.view,
+      theme,
+      ...(editor ? { line: editor.selection.active.line } : {}),
+      ...(o.field ? { field: o.field } : {}),
+      ...(o.from !== undefined ? { fromT: toTesla(o.from) } : {}),
+      ...(o.to !== undefined ? { toT: toTesla(o.to) } : {}),
+      ...(o.unit ? { unit: o.unit } : {}),
+    };
     try {
       return await this.client.sendRequest<DiagramResult>(DIAGRAM_REQUEST, params);
     } catch (e) {
@@ -98,7 +117,7 @@ export class DiagramPanel {
   private async redraw(): Promise<void> {
     const r = await this.request('panel');
     const title = r.ok ? r.title : 'Sublevel diagrams';
-    void this.panel.webview.postMessage({ type: 'show', view: this.view, svg: r.ok ? r.svg : messageSvg(r.message), title, ...(r.ok ? { csv: r.csv } : {}) });
+    void this.panel.webview.postMessage({ type: 'show', view: this.view, svg: r.ok ? r.svg : messageSvg(r.message), title, ...(r.ok ? { csv: r.csv, fields: r.fields ?? [] } : {}) });
   }
 
   private async export(format: 'svg' | 'csv'): Promise<void> {
@@ -114,6 +133,23 @@ export class DiagramPanel {
     });
     if (!target) return;
     await vscode.workspace.fs.writeFile(target, new TextEncoder().encode(format === 'svg' ? r.svg : r.csv));
+  }
+
+  /** PNG goes through the page: it draws the export SVG on a canvas and sends the pixels back. */
+  private async exportPng(): Promise<void> {
+    const r = await this.request('export');
+    if (!r.ok) {
+      void vscode.window.showWarningMessage(r.message);
+      return;
+    }
+    void this.panel.webview.postMessage({ type: 'rasterise', view: this.view, svg: r.svg, scale: PNG_SCALE });
+  }
+
+  private async savePng(base64: string): Promise<void> {
+    const base = this.document ? this.document.uri.path.replace(/\.sublevel$/, '') : 'sublevel';
+    const target = await vscode.window.showSaveDialog({ defaultUri: vscode.Uri.file(`${base}-${this.view}.png`), filters: { 'PNG image': ['png'] } });
+    if (!target) return;
+    await vscode.workspace.fs.writeFile(target, Buffer.from(base64, 'base64'));
   }
 
   private dispose(): void {

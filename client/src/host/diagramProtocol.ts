@@ -3,10 +3,15 @@ export const DIAGRAM_REQUEST = 'sublevel/diagram';
 
 export interface DiagramParams {
   uri: string;
-  view: 'levels' | 'pattern' | 'lines';
+  view: 'levels' | 'pattern' | 'lines' | 'resonance';
   /** 0-based cursor line, to pick the level, beam or line being edited. */
   line?: number;
   theme: 'panel' | 'export';
+  /** The panel's choices: the named field to draw at, and the levels view's range (tesla) and axis unit. */
+  field?: string;
+  fromT?: number;
+  toT?: number;
+  unit?: 'G' | 'mT' | 'T';
 }
 
-export type DiagramResult = { ok: true; title: string; svg: string; csv: string } | { ok: false; message: string };
+export type DiagramResult = { ok: true; title: string; svg: string; csv: string; fields?: string[] } | { ok: false; message: string };

@@ -5,7 +5,7 @@
  * the diagram's data-* attributes. Incoming messages are untrusted and validated; no string
  * ever reaches innerHTML.
  */
-import { isView, parseHostMessage, type PageMessage, type ShowMessage, type View } from './messages';
+import { FIELD_UNITS, isView, parseHostMessage, type FieldUnitName, type PageMessage, type ShowMessage, type View, type ViewOptions } from './messages';
 import { pointerValue, readoutFor, type DataRecord } from './readout';
 import { importSvg } from './svgImport';
 
@@ -18,6 +18,7 @@ declare function acquireVsCodeApi(): VsCodeApi;
 
 interface SavedState {
   view: View;
+  options?: ViewOptions;
 }
 
 const vscode = acquireVsCodeApi();
@@ -26,9 +27,16 @@ const readout = document.getElementById('sl-readout') as HTMLElement;
 const tabs = Array.from(document.querySelectorAll<HTMLButtonElement>('button[data-view]'));
 const exportButtons = Array.from(document.querySelectorAll<HTMLButtonElement>('button[data-export]'));
 const latest = new Map<View, ShowMessage>();
+const optionsForm = document.getElementById('sl-options') as HTMLFormElement;
+const fieldSelect = document.getElementById('sl-field') as HTMLSelectElement;
+const rangeBox = document.getElementById('sl-range') as HTMLElement;
+const fromInput = document.getElementById('sl-from') as HTMLInputElement;
+const toInput = document.getElementById('sl-to') as HTMLInputElement;
+const unitSelect = document.getElementById('sl-unit') as HTMLSelectElement;
 
 const saved = vscode.getState() as Partial<SavedState> | undefined;
 let current: View = saved && isView(saved.view) ? saved.view : 'levels';
+let options: ViewOptions = saved?.options && typeof saved.options === 'object' ? saved.options : {};
 
 function placeholder(textContent: string): HTMLElement {
   const p = document.createElement('p');
@@ -53,6 +61,56 @@ function showCurrent(): void {
   for (const b of exportButtons) {
     b.disabled = !svg || (b.dataset.export === 'csv' && !msg?.csv);
   }
+  showFieldChoices(msg?.fields ?? []);
+  // The range applies to the energy diagram; the resonance view takes its range from the file.
+  rangeBox.hidden = current !== 'levels';
+}
+
+function showFieldChoices(names: string[]): void {
+  const first = fieldSelect.options[0]!;
+  const choices = names.map((n) => {
+    const o = document.createElement('option');
+    o.value = n;
+    o.textContent = n;
+    return o;
+  });
+  fieldSelect.replaceChildren(first, ...choices);
+  fieldSelect.value = options.field && names.includes(options.field) ? options.field : '';
+}
+
+function readOptions(): ViewOptions {
+  const o: ViewOptions = {};
+  if (fieldSelect.value) o.field = fieldSelect.value;
+  const from = fromInput.value === '' ? NaN : Number(fromInput.value);
+  const to = toInput.value === '' ? NaN : Number(toInput.value);
+  if (Number.isFinite(from)) o.from = from;
+  if (Number.isFinite(to)) o.to = to;
+  const unit = unitSelect.value;
+  if ((FIELD_UNITS as readonly string[]).includes(unit)) o.unit = unit as FieldUnitName;
+  return o;
+}
+
+/** Draws the export SVG on a canvas (an image from a data: URL, which the CSP allows) and returns PNG as base64. */
+function rasterise(svgText: string, scale: number): Promise<string> {
+  return new Promise((resolve, reject) => {
+    const size = /<svg\b[^>]*\swidth="([\d.]+)"[^>]*\sheight="([\d.]+)"/.exec(svgText);
+    const width = Number(size?.[1]);
+    const height = Number(size?.[2]);
+    if (!(width > 0 && height > 0)) return reject(new Error('no size'));
+    const img = new Image();
+    img.onload = () => {
+      const canvas = document.createElement('canvas');
+      canvas.width = Math.round(width * scale);
+      canvas.height = Math.round(height * scale);
+      const ctx = canvas.getContext('2d');
+      if (!ctx) return reject(new Error('no canvas'));
+      ctx.scale(scale, scale);
+      ctx.drawImage(img, 0, 0, width, height);
+      resolve(canvas.toDataURL('image/png').replace(/^data:image\/png;base64,/, ''));
+    };
+    img.onerror = () => reject(new Error('the SVG could not be drawn'));
+    img.src = `data:image/svg+xml;charset=utf-8,${encodeURIComponent(svgText)}`;
+  });
 }
 
 function selectView(view: View, announce: boolean): void {
@@ -63,7 +121,7 @@ function selectView(view: View, announce: boolean): void {
     t.tabIndex = on ? 0 : -1;
     if (on) host.setAttribute('aria-labelledby', t.id);
   }
-  vscode.setState({ view } satisfies SavedState);
+  vscode.setState({ view, options } satisfies SavedState);
   showCurrent();
   if (announce) vscode.postMessage({ type: 'view', view });
 }
@@ -154,16 +212,35 @@ for (const t of tabs) {
 for (const b of exportButtons) {
   b.addEventListener('click', () => {
     const format = b.dataset.export;
-    if (format === 'svg' || format === 'csv') vscode.postMessage({ type: 'export', format, view: current });
+    if (format === 'svg' || format === 'csv' || format === 'png') vscode.postMessage({ type: 'export', format, view: current });
   });
 }
+
+optionsForm.addEventListener('submit', (e) => {
+  e.preventDefault();
+  options = readOptions();
+  vscode.setState({ view: current, options } satisfies SavedState);
+  vscode.postMessage({ type: 'options', view: current, ...options });
+});
 
 window.addEventListener('message', (e: MessageEvent<unknown>) => {
   const msg = parseHostMessage(e.data);
   if (!msg) return;
+  if (msg.type === 'rasterise') {
+    rasterise(msg.svg, msg.scale).then(
+      (data) => vscode.postMessage({ type: 'png', view: msg.view, data }),
+      () => undefined,
+    );
+    return;
+  }
   latest.set(msg.view, msg);
   if (msg.view === current) showCurrent();
 });
 
+if (options.field) fieldSelect.value = options.field;
+if (options.from !== undefined) fromInput.value = String(options.from);
+if (options.to !== undefined) toInput.value = String(options.to);
+if (options.unit) unitSelect.value = options.unit;
 selectView(current, false);
 vscode.postMessage({ type: 'ready', view: current });
+if (Object.keys(options).length > 0) vscode.postMessage({ type: 'options', view: current, ...options });

@@ -18,6 +18,7 @@ const VIEW_NAMES: Record<View, string> = {
   levels: 'Energies vs field',
   pattern: 'Detector pattern',
   lines: 'Line components',
+  resonance: 'Resonance vs field',
 };
 
 function escapeHtml(s: string): string {
@@ -63,8 +64,18 @@ ${tabs}
     <div class="sl-actions" role="group" aria-label="Export">
       <button type="button" data-export="svg" disabled>Save SVG</button>
       <button type="button" data-export="csv" disabled>Save CSV</button>
+      <button type="button" data-export="png" disabled>Save PNG</button>
     </div>
   </header>
+  <form class="sl-options" id="sl-options" aria-label="Field and range">
+    <label>Field <select id="sl-field"><option value="">first named field</option></select></label>
+    <span class="sl-range" id="sl-range">
+      <label>From <input id="sl-from" type="number" step="any" inputmode="decimal" size="6"></label>
+      <label>to <input id="sl-to" type="number" step="any" inputmode="decimal" size="6"></label>
+      <label>unit <select id="sl-unit"><option>G</option><option selected>mT</option><option>T</option></select></label>
+    </span>
+    <button type="submit">Apply</button>
+  </form>
   <main>
     <div id="sl-host" class="sl-host" role="tabpanel" aria-labelledby="sl-tab-levels" aria-live="polite">
       <p class="sl-placeholder">Waiting for a .sublevel file…</p>

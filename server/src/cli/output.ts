@@ -12,7 +12,8 @@ import { type CliFileSystem, reasonOf } from './fileSystem';
 /** --out could not be written: exit 2 with one line, without the usage text. */
 export class OutputError extends Error {}
 
-export function writeOutputFile(target: string, text: string, fsys: CliFileSystem): void {
+/** Text is written with control characters escaped; bytes (a PNG) as they are. */
+export function writeOutputFile(target: string, text: string | Uint8Array, fsys: CliFileSystem): void {
   let existing: { mode: number } | undefined;
   let final = target;
   try {
@@ -29,7 +30,7 @@ export function writeOutputFile(target: string, text: string, fsys: CliFileSyste
   let fd: number | undefined;
   try {
     fd = fsys.openSync(tmp, 'wx', existing?.mode ?? 0o666);
-    const bytes = Buffer.from(escapeControls(text), 'utf8');
+    const bytes = typeof text === 'string' ? Buffer.from(escapeControls(text), 'utf8') : text;
     for (let done = 0; done < bytes.length; ) done += fsys.writeSync(fd, bytes, done, bytes.length - done);
     fsys.fsyncSync(fd);
     fsys.closeSync(fd);

@@ -2,6 +2,7 @@
 import { evaluateBeam } from '../eval/beamEvaluation';
 import { gJLookup } from '../eval/gJLookup';
 import { patternCsv } from '../render';
+import { beamAbout } from '../views/diagram';
 import { patternView } from '../views/patternView';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
 import { ROOT_OPTION, rootOption } from './files';
@@ -34,12 +35,12 @@ export function runProfile(args: ParsedArgs, ctx: CliContext): number {
     throw new FileProblemError(file, [cliProblem('nothing-to-compute', 'the file has no beam; profile needs a `beam` block with level, source, slits, magnet and drift')]);
   }
   const beam = selectBeam(model, wanted);
-  const v = patternView(beam.name, evaluateBeam(beam, gJLookup(analysis.result?.levels ?? []), false), false);
+  const v = patternView(beam.name, evaluateBeam(beam, gJLookup(analysis.result?.levels ?? []), false));
   if (!v) {
     const listed = listErrorsFirst(file, analysis, ctx);
     throw new FileProblemError(file, [cliProblem('nothing-to-compute', `beam '${beam.name}' cannot be computed: it lacks a setting or has an error${listed}`, beam.nameRange)]);
   }
-  const csv = patternCsv(v);
+  const csv = patternCsv(v, beamAbout(beam, file), 'profile');
   if (out) {
     writeOutputFile(out, csv, ctx.fsys);
     ctx.io.err(`wrote the detector pattern (${v.positionsM.length} positions) to ${out}`);

@@ -1,6 +1,7 @@
 /**
- * `sublevel render <file> [--view levels|pattern|lines] [--level NAME] [--field NAME] [--beam NAME] [--line NAME] [--format svg|csv] [--out FILE]`:
- * the same diagrams the editor panel shows, as standalone SVG for reports (light palette), or the numbers behind them as CSV.
+ * `sublevel render <file> [--view levels|pattern|lines|resonance] [selectors…] [--from B] [--to B] [--unit G|mT|T] [--format svg|csv|png] [--out FILE]`:
+ * the same diagrams the editor panel shows, as standalone SVG for reports (light palette), as PNG at print resolution,
+ * or the numbers behind them as CSV.
  */
 import { suggestNames } from '../format/didYouMean';
 import { diagramFor, type DiagramRequest, type DiagramView } from '../views/diagram';
@@ -10,23 +11,31 @@ import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
 import { cliProblem, FileProblemError } from './fileProblems';
 import type { CliContext } from './io';
 import { writeOutputFile } from './output';
+import { PNG_SCALE, svgToPng } from './pngExport';
+import { readFieldOption } from './fieldOption';
+import type { FieldUnit } from '../render';
 import { selectBeam, selectField, selectLevel } from './selectors';
 
-export const RENDER_VIEWS = ['levels', 'pattern', 'lines'] as const;
-const FORMATS = ['svg', 'csv'] as const;
+export const RENDER_VIEWS = ['levels', 'pattern', 'lines', 'resonance'] as const;
+const FORMATS = ['svg', 'csv', 'png'] as const;
+const FIELD_UNITS = ['G', 'mT', 'T'] as const;
 
 export const renderSpec: CommandSpec = {
   name: 'render',
   operands: '<file>',
-  summary: 'a diagram as SVG (light palette, for reports), or the numbers behind it as CSV',
+  summary: 'a diagram as SVG (light palette, for reports) or PNG (print resolution), or the numbers behind it as CSV',
   options: {
     ...ROOT_OPTION,
-    view: { value: 'VIEW', choices: RENDER_VIEWS, help: 'levels: sublevel energies against field (default); pattern: detector pattern; lines: line components' },
+    view: { value: 'VIEW', choices: RENDER_VIEWS, help: 'levels: sublevel energies against field (default); pattern: detector pattern; lines: line components; resonance: a transition frequency against field' },
     level: { value: 'NAME', help: 'the level to draw (levels view); default: the first beam\'s level, else the first level' },
     field: { value: 'NAME', help: 'the field or magnet to mark; default: the first one' },
     beam: { value: 'NAME', help: 'the beam (pattern view), when the file has more than one' },
     line: { value: 'NAME', help: 'the line (lines view); default: the first one' },
-    format: { value: 'FORMAT', choices: FORMATS, help: 'svg (default) or csv' },
+    resonance: { value: 'NAME', help: 'the resonance (resonance view); default: the first one' },
+    from: { value: 'FIELD', help: 'start of the field axis (levels and resonance views), e.g. 0 or 10G' },
+    to: { value: 'FIELD', help: 'end of the field axis, e.g. 50G or 0.1T' },
+    unit: { value: 'UNIT', choices: FIELD_UNITS, help: 'unit of the field axis: G, mT or T' },
+    format: { value: 'FORMAT', choices: FORMATS, help: 'svg (default), csv, or png (needs --out and the system Chromium)' },
     out: { value: 'FILE', help: 'write to FILE (atomically: the old file stays if writing fails) instead of stdout' },
   },
 };
@@ -45,7 +54,15 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   const analysis = analyzeFile(file, ctx, rootOption(stringOption(args, 'root'), ctx.fsys));
   const model = analysis.model;
   if (!model) throw new FileProblemError(file, analysis.problems);
-  const req: DiagramRequest = { view, theme: 'export' };
+  const req: DiagramRequest = { view, theme: 'export', source: file };
+  const fromText = stringOption(args, 'from');
+  const toText = stringOption(args, 'to');
+  if (fromText !== undefined) req.fromT = readFieldOption('from', fromText);
+  if (toText !== undefined) req.toT = readFieldOption('to', toText);
+  if (req.fromT !== undefined && req.toT !== undefined && !(req.toT > req.fromT)) throw new UsageError('--to must be a larger field than --from');
+  const unit = stringOption(args, 'unit', FIELD_UNITS);
+  if (unit !== undefined) req.fieldUnit = unit as FieldUnit;
+  if (format === 'png' && !out) throw new UsageError('--format png writes a file: add --out FILE.png');
   const level = stringOption(args, 'level');
   if (level !== undefined) req.level = selectLevel(model, level);
   const field = selectField(model, stringOption(args, 'field'));
@@ -63,10 +80,24 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
     }
     req.lineName = line;
   }
+  const resonance = stringOption(args, 'resonance');
+  if (resonance !== undefined) {
+    const names = model.resonances.map((r) => r.name);
+    if (!names.includes(resonance)) {
+      const hint = suggestNames(resonance, names);
+      throw new UsageError(`no resonance named '${resonance}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : ''}`);
+    }
+    req.resonanceName = resonance;
+  }
   const d = diagramFor(analysis, req);
   if (!d.ok) {
     const listed = listErrorsFirst(file, analysis, ctx);
     throw new FileProblemError(file, [cliProblem('nothing-to-compute', `${commandLineWording(d.message)}${listed}`)]);
+  }
+  if (format === 'png') {
+    writeOutputFile(out!, svgToPng(d.svg), ctx.fsys);
+    ctx.io.err(`wrote the ${view} diagram to ${out} (${PNG_SCALE}× scale)`);
+    return reportErrors(file, analysis, ctx) > 0 ? 1 : 0;
   }
   const text = format === 'svg' ? d.svg : d.csv;
   if (out) {

@@ -2,7 +2,7 @@
  * `sublevel sweep <file> --level NAME --from 0 --to 0.1T --points 2001 [--format csv|json] [--out FILE]`:
  * exact sublevel energies of one level over a field range, for plots and analysis code.
  */
-import { csvNumber } from '../eval/machineText';
+import { stateTableCsv } from '../render/csv';
 import { engineSpec } from '../eval/levelSpec';
 import { suggestNames } from '../format/didYouMean';
 import { sweepLevel, type SweepResult } from '../physics/engine';
@@ -30,7 +30,7 @@ export const sweepSpec: CommandSpec = {
     from: { value: 'FIELD', help: 'first field, e.g. 0 or -50G (default 0)' },
     to: { value: 'FIELD', help: 'last field, e.g. 0.1T or "500 G" (required)' },
     points: { value: 'N', help: `number of fields, a whole number from 2 to ${MAX_CLI_POINTS} in decimal digits (default 2001)` },
-    format: { value: 'FORMAT', choices: FORMATS, help: 'csv: field_T then one energy column per state (default); json' },
+    format: { value: 'FORMAT', choices: FORMATS, help: 'csv: field_T, then energy and moment columns per state (default; docs/csv.md); json' },
     out: { value: 'FILE', help: 'write to FILE (atomically: the old file stays if writing fails) instead of stdout' },
   },
   notes: [`Fields use the file's units (T, mT, G, ...); |B| may be at most ${MAX_CLI_FIELD_T.toExponential().replace('+', '')} T.`],
@@ -63,7 +63,7 @@ export function runSweep(args: ParsedArgs, ctx: CliContext): number {
   if (errors.length > 0) {
     throw new FileProblemError(file, errors.map((e) => ({ ...cliProblem('nothing-to-compute', e.message, at), code: e.code })));
   }
-  const text = format === 'csv' ? sweepCsv(sweep) : jsonText(sweepJson(file, level, sweep), 1);
+  const text = format === 'csv' ? sweepCsv(sweep, file, level) : jsonText(sweepJson(file, level, sweep), 1);
   if (out) {
     writeOutputFile(out, text + '\n', ctx.fsys);
     ctx.io.err(`wrote ${sweep.states.length} sublevels × ${points} fields to ${out}`);
@@ -104,17 +104,10 @@ function findLevel(file: string, model: SetupModel, name: string | undefined): L
   throw new UsageError(`no level named '${name}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : ''}`);
 }
 
-/** CSV: field_T, then one energy column per state (low-field label → high-field label), Hz. */
-export function sweepCsv(s: SweepResult): string {
-  const quote = (t: string): string => `"${t.replace(/"/g, '""')}"`;
-  const header = ['field_T', ...s.states.map((st) => quote(`E_Hz ${st.low.text} -> ${st.high.text}`))].join(',');
-  const rows: string[] = [header];
-  for (let i = 0; i < s.fieldsT.length; i++) {
-    const cells = [csvNumber(s.fieldsT[i])];
-    for (const st of s.states) cells.push(csvNumber(st.energyHz[i]));
-    rows.push(cells.join(','));
-  }
-  return rows.join('\n');
+/** CSV in the project's convention (docs/csv.md): field_T, energies and moments of every state, states in the documented order. */
+export function sweepCsv(s: SweepResult, file: string, level: LevelModel): string {
+  const states = s.states.map((st) => ({ lowLabel: st.low.text, highLabel: st.high.text, energyHz: st.energyHz, momentJT: st.momentJT }));
+  return stateTableCsv({ kind: 'sweep', about: [['file', file], ['level', `${level.species.name}.${level.name}`]] }, s.fieldsT, states).trimEnd();
 }
 
 function sweepJson(file: string, level: LevelModel, s: SweepResult) {

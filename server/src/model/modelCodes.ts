@@ -36,7 +36,7 @@ export const MODEL_RULES = {
   'octupole-cannot-act': { severity: 'warning', summary: 'C needs I \u2265 3/2 and J \u2265 3/2 to act.' },
   'gj-measured-differs': { severity: 'info', summary: 'A measured g_J differs from the LS-coupling value.' },
   'field-needs-value': { severity: 'error', summary: 'A field block without a value.' },
-  'field-beyond-physical': { severity: 'error', summary: 'A field far stronger than any that exists (above 1e12 T).' },
+  'field-beyond-physical': { severity: 'error', summary: 'A field above 1e5 T, beyond what the Hamiltonian describes (near the atomic unit of field).' },
   'magnet-incomplete': { severity: 'warning', summary: 'A magnet lacks a field, gradient or length.' },
   'beam-incomplete': { severity: 'warning', summary: 'A beam lacks a setting it needs.' },
   'beam-source-malformed': { severity: 'error', summary: 'A beam source that is not oven/jet/speed with its values.' },

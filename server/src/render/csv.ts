@@ -1,9 +1,18 @@
 /**
- * The numbers behind each diagram as CSV for analysis code: SI units named in the header,
- * full double precision, text cells quoted when needed and defused against spreadsheet
- * formula injection (labels come from users' files).
+ * The numbers behind each diagram, and the sweep and profile exports, as CSV in one convention
+ * (docs/csv.md): a first comment line that says what the table is, `quantity_unit` column names
+ * in SI (`field_T`, `energy_Hz[state]`, `moment_J_per_T[state]`, `position_m`, `offset_Hz`),
+ * states sorted in one documented order, full double precision, and text cells quoted when
+ * needed and defused against spreadsheet formula injection (labels come from users' files).
  */
-import type { LevelsViewData, LinesViewData, PatternViewData } from './viewData';
+import type { LevelsViewData, LinesViewData, PatternViewData, ResonanceViewData } from './viewData';
+
+/** What a table is about; written as `# sublevel <kind>: key=value; …` on the first line. */
+export interface CsvContext {
+  kind: 'levels' | 'sweep' | 'pattern' | 'profile' | 'lines' | 'resonance';
+  /** key/value pairs in order, e.g. ['file', 'a.sublevel'], ['level', 'Rb87.ground'], ['field', 'trap 3.23e-4 T']. */
+  about: [string, string | undefined][];
+}
 
 function textCell(s: string): string {
   let v = String(s);
@@ -15,39 +24,97 @@ function numCell(v: number | undefined): string {
   return v === undefined || !Number.isFinite(v) ? '' : String(v);
 }
 
-function rows(header: string[], body: string[][]): string {
-  return [header.map(textCell).join(','), ...body.map((r) => r.join(','))].join('\n') + '\n';
+/** The comment line: newlines and semicolons inside values would break it, so they become spaces and commas. */
+export function csvCommentLine(c: CsvContext): string {
+  const pairs = c.about
+    .filter((p): p is [string, string] => p[1] !== undefined && p[1] !== '')
+    .map(([k, v]) => `${k}=${v.replace(/[\r\n]+/g, ' ').replace(/;/g, ',')}`);
+  return `# sublevel ${c.kind}${pairs.length ? ': ' + pairs.join('; ') : ''}`;
 }
 
-export function levelsCsv(d: LevelsViewData): string {
-  const header = ['B (T)'];
-  for (const c of d.curves) header.push(`E/h ${c.lowLabel} / ${c.highLabel} (Hz)`);
-  const withMoment = d.curves.filter((c) => c.momentJT);
-  for (const c of withMoment) header.push(`mu ${c.lowLabel} / ${c.highLabel} (J/T)`);
+export function csvTable(c: CsvContext, header: string[], body: string[][]): string {
+  return [csvCommentLine(c), header.map(textCell).join(','), ...body.map((r) => r.join(','))].join('\n') + '\n';
+}
+
+/** A state as it is named in column headers: its low-field label, and where it goes at high field. */
+export function stateColumn(quantity: string, low: string, high: string): string {
+  return low === high ? `${quantity}[${low}]` : `${quantity}[${low} -> ${high}]`;
+}
+
+export interface StateSeries {
+  lowLabel: string;
+  highLabel: string;
+  energyHz: ArrayLike<number>;
+  momentJT?: ArrayLike<number>;
+}
+
+/**
+ * The documented state order: by energy at the first field of the table (lowest first), ties
+ * (degenerate states at zero field) broken by energy at the last field. Stable, so the order
+ * does not depend on how the engine happened to list its blocks.
+ */
+export function sortedStates<T extends StateSeries>(states: readonly T[]): T[] {
+  const first = (s: T): number => s.energyHz[0] ?? NaN;
+  const last = (s: T): number => s.energyHz[s.energyHz.length - 1] ?? NaN;
+  const key = (v: number): number => (Number.isFinite(v) ? v : Infinity);
+  const tie = (a: number, b: number): boolean => a === b || (Number.isFinite(a - b) && Math.abs(a - b) <= 1e-9 * Math.max(1, Math.abs(a), Math.abs(b)));
+  return states
+    .map((s, i) => ({ s, i }))
+    .sort((a, b) => {
+      const fa = key(first(a.s));
+      const fb = key(first(b.s));
+      if (!tie(fa, fb)) return fa - fb;
+      return key(last(a.s)) - key(last(b.s)) || a.i - b.i;
+    })
+    .map((x) => x.s);
+}
+
+/** Energies and moments of every state at each field: one row per field. */
+export function stateTableCsv(c: CsvContext, fieldsT: ArrayLike<number>, states: readonly StateSeries[]): string {
+  const sorted = sortedStates(states);
+  const withMoment = sorted.filter((s) => s.momentJT);
+  const header = [
+    'field_T',
+    ...sorted.map((s) => stateColumn('energy_Hz', s.lowLabel, s.highLabel)),
+    ...withMoment.map((s) => stateColumn('moment_J_per_T', s.lowLabel, s.highLabel)),
+  ];
   const body: string[][] = [];
-  for (let k = 0; k < d.fieldsT.length; k++) {
-    body.push([
-      numCell(d.fieldsT[k]),
-      ...d.curves.map((c) => numCell(c.energyHz[k])),
-      ...withMoment.map((c) => numCell(c.momentJT?.[k])),
-    ]);
+  for (let k = 0; k < fieldsT.length; k++) {
+    body.push([numCell(fieldsT[k]), ...sorted.map((s) => numCell(s.energyHz[k])), ...withMoment.map((s) => numCell(s.momentJT?.[k]))]);
   }
-  return rows(header, body);
+  return csvTable(c, header, body);
 }
 
-export function patternCsv(d: PatternViewData): string {
-  const header = ['position (m)', 'total', ...d.parts.map((p) => p.label)];
+export function levelsCsv(d: LevelsViewData, about: CsvContext['about'] = []): string {
+  const field = d.markerT !== undefined ? `${d.markerLabel ? d.markerLabel + ' ' : ''}${d.markerT} T` : undefined;
+  return stateTableCsv({ kind: 'levels', about: [...about, ['field', field]] }, d.fieldsT, d.curves);
+}
+
+/** Positions and the summed and per-sublevel shares (fraction of all atoms per metre); sublevels in the beam report's order. */
+export function patternCsv(d: PatternViewData, about: CsvContext['about'] = [], kind: 'pattern' | 'profile' = 'pattern'): string {
+  const header = ['position_m', 'total_per_m', ...d.parts.map((p) => `share_per_m[${p.label}]`)];
   const body: string[][] = [];
   for (let k = 0; k < d.positionsM.length; k++) {
     body.push([numCell(d.positionsM[k]), numCell(d.total[k]), ...d.parts.map((p) => numCell(p.values[k]))]);
   }
-  return rows(header, body);
+  return csvTable({ kind, about }, header, body);
 }
 
-export function linesCsv(d: LinesViewData): string {
-  const header = ['offset (Hz)', 'strength', 'polarization', 'label'];
-  return rows(
-    header,
-    d.components.map((c) => [numCell(c.offsetHz), numCell(c.strength), textCell(c.polarization), textCell(c.label)]),
+/** Components sorted by offset (then polarisation π, σ+, σ−), at the field the comment line names. */
+export function linesCsv(d: LinesViewData, about: CsvContext['about'] = []): string {
+  const rank = { pi: 0, 'sigma+': 1, 'sigma-': 2 } as const;
+  const sorted = [...d.components].sort((a, b) => a.offsetHz - b.offsetHz || rank[a.polarization] - rank[b.polarization]);
+  const field = d.fieldT !== undefined ? `${d.fieldName ? d.fieldName + ' ' : ''}${d.fieldT} T` : undefined;
+  return csvTable(
+    { kind: 'lines', about: [...about, ['field', field]] },
+    ['offset_Hz', 'strength', 'polarization', 'transition'],
+    sorted.map((c) => [numCell(c.offsetHz), numCell(c.strength), textCell(c.polarization), textCell(c.label.replace(/ → /g, ' -> '))]),
   );
+}
+
+/** The transition frequency and its field slope at each field. */
+export function resonanceCsv(d: ResonanceViewData, about: CsvContext['about'] = []): string {
+  const body: string[][] = [];
+  for (let k = 0; k < d.fieldsT.length; k++) body.push([numCell(d.fieldsT[k]), numCell(d.frequencyHz[k]), numCell(d.slopeHzPerT[k])]);
+  return csvTable({ kind: 'resonance', about: [...about, ['transition', d.pairLabel.replace(/ → /g, ' -> ')]] }, ['field_T', 'frequency_Hz', 'df_dB_Hz_per_T'], body);
 }

@@ -10,10 +10,12 @@ export type {
   PatternPeak,
   PatternViewData,
   Polarization,
+  ResonanceViewData,
   RenderTheme,
 } from './viewData';
 export { renderLevels } from './levels';
 export { renderPattern } from './pattern';
 export { renderLines } from './lines';
-export { levelsCsv, linesCsv, patternCsv } from './csv';
+export { renderResonance } from './resonance';
+export { levelsCsv, linesCsv, patternCsv, resonanceCsv } from './csv';
 export { escapeXml } from './svgText';

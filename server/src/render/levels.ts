@@ -1,36 +1,31 @@
 /**
- * Sublevel energies against field. Curves are coloured by their trend at the working field
- * (energy rising with B: the state seeks low field; falling: it seeks high field), because
- * that is what decides which states a magnet focuses or a trap holds. State names sit in
- * lanes left and right of the plot, joined to the curve ends by short leaders.
+ * Sublevel energies against field. Each stretch of a curve is styled by its own local slope
+ * (energy rising with B: the state seeks low field there; falling: it seeks high field), because
+ * that decides which states a magnet focuses or a trap holds at that field, and a state can turn
+ * over along the axis. Every named field of the file is a labelled rule. Every state is named
+ * at both ends, in lanes left and right of the plot joined to the curve ends by short leaders;
+ * the figure grows taller rather than merge names.
  */
 import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
-import { BOHR_MAGNETON, BOHR_MAGNETON_HZ_PER_T } from '../physics/constants';
+import { BOHR_MAGNETON } from '../physics/constants';
 import { bottomAxis, leftAxis, type PlotBox } from './axes';
 import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
-import { placeLabels, truncateLabel, type LabelAnchor, type PlacedLabel } from './labelLayout';
+import { laneHeightFor, placeLabels, truncateLabel, type LabelAnchor, type PlacedLabel } from './labelLayout';
+import { fieldMarksIn, layoutMarkRows, MARK_ROW } from './fieldMarks';
 import { legendRows, type LegendEntry } from './legend';
 import { markerPath } from './markers';
 import { FALLING_DASH, paletteFor, type Palette } from './palette';
 import { arrayValues, finiteExtent, slopeAt, valueAt } from './sampled';
+import { slopeRuns, trendOf, type Trend } from './slopeRuns';
 import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
 import { fieldDisplayUnit, formatIn, formatSI, frequencyUnit } from './units';
 import type { LevelCurve, LevelsViewData, RenderTheme } from './viewData';
 
-type Trend = 'rising' | 'falling' | 'flat';
-
-// A slope below a thousandth of a Bohr magneton (in Hz/T) counts as field-insensitive (common practice for display).
-const FLAT_SLOPE_HZ_PER_T = 1e-3 * BOHR_MAGNETON_HZ_PER_T;
 const LABEL_SPACING = 13;
 const LABEL_MAX_CHARS = 24;
 const AXIS_X = 60;
 const MIN_PLOT_WIDTH = 320;
-
-function trendOf(slopeHzPerT: number): Trend {
-  if (!Number.isFinite(slopeHzPerT) || Math.abs(slopeHzPerT) < FLAT_SLOPE_HZ_PER_T) return 'flat';
-  return slopeHzPerT > 0 ? 'rising' : 'falling';
-}
 
 function trendStyle(t: Trend, pal: Palette): { colour: string; dash?: string } {
   if (t === 'rising') return { colour: pal.rising };
@@ -44,7 +39,7 @@ function stateName(c: LevelCurve): string {
 
 function laneWidth(labels: PlacedLabel[]): number {
   const widest = Math.max(0, ...labels.map((l) => estimateTextWidth(truncateLabel(l.text, LABEL_MAX_CHARS))));
-  return Math.min(175, Math.max(48, widest + 20));
+  return Math.min(181, Math.max(48, widest + 26));
 }
 
 export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
@@ -71,25 +66,38 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   e1 += ePad;
 
   const width0 = 760;
-  const height = 480;
   const legendTop = 46;
 
-  // Where the working field sits, and each curve's trend there (mid-sweep when no field is given).
-  const marker = d.markerT !== undefined && Number.isFinite(d.markerT) && d.markerT >= f0 && d.markerT <= f1 ? d.markerT : undefined;
+  // Where the working field sits, and each curve's trend there (mid-sweep when no field is given) for dots and read-outs.
+  const inSweep = (b: number | undefined): b is number => b !== undefined && Number.isFinite(b) && b >= f0 && b <= f1;
+  const marker = inSweep(d.markerT) ? d.markerT : undefined;
   const refField = marker ?? (fieldExtent[0] + fieldExtent[1]) / 2;
   const trends = d.curves.map((c) => trendOf(slopeAt(fields, c.energyHz, refField)));
+  const runs = d.curves.map((c) => slopeRuns(fields, c.energyHz));
+
+  // Every named field inside the sweep, the chosen one first; labels stack in rows above the plot.
+  const marks = fieldMarksIn(d.fieldUnit, inSweep, d.markerT, d.markerLabel, d.fieldMarks);
 
   const legend: LegendEntry[] = [];
-  const present = new Set(trends);
+  const present = new Set(runs.flatMap((r) => r.map((x) => x.trend)));
   if (present.has('rising')) legend.push({ label: 'low-field seeker (E rises with B)', colour: pal.rising, line: { width: 2 } });
   if (present.has('falling')) legend.push({ label: 'high-field seeker (E falls with B)', colour: pal.falling, line: { width: 2, dash: FALLING_DASH } });
   if (present.has('flat')) legend.push({ label: 'field-insensitive', colour: pal.flat, line: { width: 2, dash: '2 3' } });
-  if (marker !== undefined) legend.push({ label: 'working field', colour: pal.marker, line: { width: 1.5, vertical: true } });
+  if (marker !== undefined) legend.push({ label: 'chosen field', colour: pal.marker, line: { width: 1.5, vertical: true } });
+  if (marks.some((m) => !m.chosen)) legend.push({ label: 'other named field', colour: pal.muted, line: { width: 1, dash: '4 3', vertical: true } });
   const crossings = (d.crossings ?? []).filter((c) => Number.isFinite(c.fieldT) && Number.isFinite(c.energyHz) && c.fieldT >= f0 && c.fieldT <= f1);
   if (crossings.length > 0) legend.push({ label: 'crossing', colour: pal.text, marker: 'diamond' });
   const legendSvg = legendRows(legend, AXIS_X, legendTop, width0 - AXIS_X - 16, pal);
 
-  const box: PlotBox = { left: 0, right: 0, top: legendTop + legendSvg.height + 18, bottom: height - 56 };
+  // Rows are first laid out on a narrower stand-in axis (the lanes are not sized yet), which never needs fewer rows.
+  const narrow = scaleLinear().domain([f0, f1]).range([AXIS_X + 180, width0 - 180]);
+  const markRows = layoutMarkRows(marks, AXIS_X + 180, width0 - 180, narrow);
+  const rowCount = Math.max(1, ...markRows.map((r) => r + 1));
+  const top = legendTop + legendSvg.height + 6 + rowCount * MARK_ROW;
+  // Tall enough that every state has its own name in each lane.
+  const plotHeight = Math.max(480 - 56 - top, laneHeightFor(d.curves.length, LABEL_SPACING) + 8);
+  const height = top + plotHeight + 56;
+  const box: PlotBox = { left: 0, right: 0, top, bottom: top + plotHeight };
   const y = scaleLinear().domain([e0, e1]).range([box.bottom, box.top]).nice();
 
   const endAnchors = (side: 'low' | 'high'): LabelAnchor[] =>
@@ -99,7 +107,9 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
       const step = side === 'low' ? 1 : -1;
       while (k >= 0 && k < n && !(Number.isFinite(c.energyHz[k]) && Number.isFinite(fields[k]))) k += step;
       const ok = k >= 0 && k < n;
-      return { index, y: ok ? y(c.energyHz[k]) : NaN, label: side === 'low' ? c.lowLabel : c.highLabel };
+      // Coincident ends fan out in the order their curves take a little way in, so leaders do not cross.
+      const along = Math.min(n - 1, Math.max(0, k + step * Math.max(1, Math.round(n / 25))));
+      return { index, y: ok ? y(c.energyHz[k]) : NaN, tie: y(c.energyHz[along]), label: side === 'low' ? c.lowLabel : c.highLabel };
     });
   const lowAnchors = endAnchors('low');
   const highAnchors = endAnchors('high');
@@ -111,6 +121,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   box.left = AXIS_X + leftLane;
   box.right = width - 12 - rightLane;
   const x = scaleLinear().domain([f0, f1]).range([box.left, box.right]);
+  const rows = layoutMarkRows(marks, box.left, box.right, x).map((r) => Math.min(r, rowCount - 1));
 
   const body: string[] = [legendSvg.svg];
   body.push(bottomAxis(x, fUnit, 'B', box, pal));
@@ -120,24 +131,41 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const interactive = theme.kind === 'panel';
   const curveSvg: string[] = [];
   d.curves.forEach((c, i) => {
-    const n = Math.min(fields.length, c.energyHz.length);
-    const idx = Array.from({ length: n }, (_, k) => k);
-    const path = line<number>()
-      .defined((k) => Number.isFinite(fields[k]) && Number.isFinite(c.energyHz[k]))
-      .x((k) => x(fields[k]))
-      .y((k) => y(c.energyHz[k]))
-      .digits(2)(idx);
-    if (!path) return;
-    const style = trendStyle(trends[i], pal);
+    const segments = runs[i].map((r) => {
+      const idx = Array.from({ length: r.to - r.from + 1 }, (_, k) => r.from + k);
+      const path = line<number>().x((k) => x(fields[k])).y((k) => y(c.energyHz[k])).digits(2)(idx) ?? '';
+      const style = trendStyle(r.trend, pal);
+      return { r, path, style };
+    }).filter((g) => g.path);
+    if (segments.length === 0) return;
     const eRef = valueAt(fields, c.energyHz, refField);
     const muRef = c.momentJT ? valueAt(fields, c.momentJT, refField) : NaN;
     const name = stateName(c);
     const pathId = `${idBase}-c${i}`;
     const summary = [`${name}`, `E/h = ${formatSI(eRef, 'Hz')} at B = ${formatIn(refField, fUnit)}`];
     if (Number.isFinite(muRef)) summary.push(`μ = ${(muRef / BOHR_MAGNETON).toFixed(4)} μB`);
-    const children = [titleEl(summary.join('; ')), el('path', { id: pathId, d: path })];
-    // A wide invisible copy of the curve makes a thin line easy to point at in the panel.
-    if (interactive) children.push(el('use', { href: `#${pathId}`, class: 'sl-hit', 'stroke-width': 10, 'stroke-opacity': 0, 'stroke-dasharray': 'none' }));
+    const kinds = segments.map((g) => `${g.r.trend} ${formatIn(fields[g.r.from], fUnit)}–${formatIn(fields[g.r.to], fUnit)}`);
+    if (segments.length > 1) summary.push(`changes kind: ${kinds.join(', ')}`);
+    const children = [titleEl(summary.join('; '))];
+    segments.forEach((g, k) => {
+      children.push(
+        el('path', {
+          id: k === 0 ? pathId : undefined,
+          class: `sl-seg sl-${g.r.trend}`,
+          'data-trend': g.r.trend,
+          'data-from-t': dataNum(fields[g.r.from]),
+          'data-to-t': dataNum(fields[g.r.to]),
+          d: g.path,
+          stroke: g.style.colour,
+          'stroke-dasharray': g.style.dash,
+        }),
+      );
+    });
+    // A wide invisible copy of the whole curve makes a thin line easy to point at in the panel.
+    if (interactive) {
+      const whole = segments.map((g) => g.path).join('');
+      children.push(el('path', { class: 'sl-hit', d: whole, stroke: 'transparent', 'stroke-width': 10, 'stroke-opacity': 0, 'stroke-dasharray': 'none' }));
+    }
     curveSvg.push(
       el(
         'g',
@@ -149,14 +177,13 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
           'data-low': c.lowLabel,
           'data-high': c.highLabel,
           'data-trend': trends[i],
+          'data-trends': [...new Set(segments.map((g) => g.r.trend))].join(' '),
           'data-field-t': dataNum(refField),
           'data-energy-hz': dataNum(eRef),
           'data-moment-jt': Number.isFinite(muRef) ? dataNum(muRef) : undefined,
           'data-moment-mub': Number.isFinite(muRef) ? dataNum(muRef / BOHR_MAGNETON) : undefined,
           fill: 'none',
-          stroke: style.colour,
           'stroke-width': 1.8,
-          'stroke-dasharray': style.dash,
           'stroke-linejoin': 'round',
         },
         children,
@@ -238,11 +265,37 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   }
 
   // Working field: a rule across the plot, its label above, and a dot on every curve.
+  body.push(
+    el(
+      'g',
+      { class: 'sl-field-marks' },
+      marks.map((m, i) => {
+        const mx = x(m.fieldT);
+        const half = estimateTextWidth(m.text) / 2;
+        const tx = Math.min(box.right - half, Math.max(box.left + half, mx));
+        const ty = box.top - 8 - rows[i] * MARK_ROW;
+        const colour = m.chosen ? pal.marker : pal.muted;
+        return el(
+          'g',
+          { class: m.chosen ? 'sl-marker' : 'sl-field-mark', 'data-kind': 'marker', 'data-label': m.text, 'data-field-t': dataNum(m.fieldT), 'data-chosen': String(m.chosen) },
+          [
+            titleEl(`${m.chosen ? 'Chosen field' : 'Named field'} ${formatIn(m.fieldT, fUnit)}${m.label ? ` (${m.label})` : ''}`),
+            el('path', {
+              class: 'sl-marker-rule',
+              d: `M${px(mx)},${px(ty + 3)}V${px(box.bottom)}`,
+              stroke: colour,
+              'stroke-width': m.chosen ? 1.5 : 1,
+              'stroke-dasharray': m.chosen ? undefined : '4 3',
+              fill: 'none',
+            }),
+            el('text', { x: tx, y: ty, 'text-anchor': 'middle', 'font-size': 11, fill: colour, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text(m.text)),
+          ],
+        );
+      }),
+    ),
+  );
   if (marker !== undefined) {
     const mx = x(marker);
-    const label = d.markerLabel ? `${d.markerLabel} · ${formatIn(marker, fUnit)}` : `B = ${formatIn(marker, fUnit)}`;
-    const half = estimateTextWidth(label) / 2;
-    const tx = Math.min(box.right - half, Math.max(box.left + half, mx));
     const dots = d.curves.map((c, i) => {
       const e = valueAt(fields, c.energyHz, marker);
       if (!Number.isFinite(e)) return '';
@@ -269,18 +322,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
         ],
       );
     });
-    body.push(
-      el(
-        'g',
-        { class: 'sl-marker', 'data-kind': 'marker', 'data-label': label, 'data-field-t': dataNum(marker) },
-        [
-          titleEl(`Working field ${formatIn(marker, fUnit)}${d.markerLabel ? ` (${d.markerLabel})` : ''}`),
-          el('path', { class: 'sl-marker-rule', d: `M${px(mx)},${px(box.top - 4)}V${px(box.bottom)}`, stroke: pal.marker, 'stroke-width': 1.5, fill: 'none' }),
-          el('text', { x: tx, y: box.top - 8, 'text-anchor': 'middle', 'font-size': 11, fill: pal.marker }, text(label)),
-        ],
-      ),
-      el('g', { class: 'sl-states' }, dots),
-    );
+    body.push(el('g', { class: 'sl-states' }, dots));
   }
 
   const descParts = [
@@ -288,8 +330,11 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
     `against field B from ${formatIn(fieldExtent[0], fUnit)} to ${formatIn(fieldExtent[1], fUnit)}`,
     `${d.curves.length} states`,
   ];
-  if (marker !== undefined) descParts.push(`working field ${formatIn(marker, fUnit)}`);
-  else if (d.markerT !== undefined) descParts.push(`working field ${formatIn(d.markerT, fUnit)} lies outside the sweep`);
+  if (marker !== undefined) descParts.push(`chosen field ${formatIn(marker, fUnit)}`);
+  else if (d.markerT !== undefined) descParts.push(`chosen field ${formatIn(d.markerT, fUnit)} lies outside the sweep`);
+  if (marks.length > 0) descParts.push(`named fields marked: ${marks.map((m) => m.text).join(', ')}`);
+  const outside = (d.fieldMarks ?? []).filter((m) => !inSweep(m.fieldT));
+  if (outside.length > 0) descParts.push(`outside the sweep: ${outside.map((m) => `${m.label} ${formatIn(m.fieldT, fUnit)}`).join(', ')}`);
 
   return svgDocument(
     {
@@ -313,3 +358,4 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
     body,
   );
 }
+

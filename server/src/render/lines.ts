@@ -1,18 +1,23 @@
 /**
  * Line components as a stick spectrum against frequency offset. Polarisation is carried three
  * ways at once — colour, line style (π solid, σ+ dashed, σ− dotted) and the cap marker
- * (π circle, σ+ upward triangle, σ− downward triangle) — so it survives greyscale printing.
+ * (π circle, σ+ upward triangle, σ− downward triangle) — so it survives greyscale printing;
+ * the cap's size follows the strength, so weak components do not look like strong ones. When
+ * the field is low enough that hyperfine groups lie far apart compared with their Zeeman
+ * structure, each group gets a panel of its own, on one common scale, with offsets from the
+ * group's centre in Hz and in units of μ_B·B/h.
  */
 import { scaleLinear } from 'd3-scale';
-import { bottomAxis, leftAxis, type PlotBox } from './axes';
-import { emptyDiagram, svgDocument } from './frame';
+import { bottomAxis, leftAxis, topAxis, type PlotBox, type Scale } from './axes';
+import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
+import { lineGroups, zeemanUnitHz, type LineGroup } from './lineGroups';
 import { legendRows, type LegendEntry } from './legend';
 import { markerPath, type MarkerShape } from './markers';
-import { paletteFor, POLARIZATION_DASH, POLARIZATION_NAME } from './palette';
+import { paletteFor, POLARIZATION_DASH, POLARIZATION_NAME, type Palette } from './palette';
 import { finiteExtent } from './sampled';
-import { dataNum, el, px, shortHash, titleEl } from './svgText';
-import { formatIn, frequencyUnit } from './units';
-import type { LinesViewData, Polarization, RenderTheme } from './viewData';
+import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
+import { engineeringUnit, formatIn, formatSI, frequencyUnit, type DisplayUnit } from './units';
+import type { LineComponent, LinesViewData, Polarization, RenderTheme } from './viewData';
 
 const WIDTH = 760;
 const HEIGHT = 420;
@@ -21,6 +26,52 @@ export const POLARIZATION_MARKER: Record<Polarization, MarkerShape> = { pi: 'cir
 
 function signed(v: number, text: string): string {
   return v > 0 ? `+${text}` : text;
+}
+
+/** Cap radius from 2 (vanishing strength) to 6 (the strongest component), by the square root so area follows strength. */
+function capRadius(strength: number, strongest: number): number {
+  return 2 + 4 * Math.sqrt(Math.max(0, strength) / (strongest || 1));
+}
+
+interface StickContext {
+  idBase: string;
+  pal: Palette;
+  interactive: boolean;
+  y: Scale;
+  strongest: number;
+  unit: DisplayUnit;
+}
+
+function stick(c: LineComponent, i: number, cx: number, ctx: StickContext): string {
+  const { pal, y } = ctx;
+  const base = y(0);
+  const top = y(c.strength);
+  const colour = pal.polarization[c.polarization];
+  const name = POLARIZATION_NAME[c.polarization];
+  const where = signed(c.offsetHz, formatIn(c.offsetHz, ctx.unit));
+  const pathId = `${ctx.idBase}-k${i}`;
+  const children = [
+    titleEl(`${name} ${c.label}: Δf = ${where}, strength ${dataNum(c.strength)}`),
+    el('path', { id: pathId, d: `M${px(cx)},${px(base)}V${px(top)}`, fill: 'none', 'stroke-linecap': 'butt' }),
+    el('path', { class: 'sl-cap', d: markerPath(POLARIZATION_MARKER[c.polarization], cx, top, capRadius(c.strength, ctx.strongest)), fill: colour, stroke: pal.halo, 'stroke-width': 0.8, 'stroke-dasharray': 'none' }),
+  ];
+  if (ctx.interactive) children.push(el('use', { href: `#${pathId}`, class: 'sl-hit', 'stroke-width': 9, 'stroke-opacity': 0, 'stroke-dasharray': 'none' }));
+  return el(
+    'g',
+    {
+      class: `sl-component sl-pol-${c.polarization === 'pi' ? 'pi' : c.polarization === 'sigma+' ? 'plus' : 'minus'}`,
+      'data-kind': 'component',
+      'data-label': c.label,
+      'data-polarization': name,
+      'data-offset-hz': dataNum(c.offsetHz),
+      'data-strength': dataNum(c.strength),
+      stroke: colour,
+      'stroke-width': 2.4,
+      'stroke-dasharray': POLARIZATION_DASH[c.polarization],
+      tabindex: '0',
+    },
+    children,
+  );
 }
 
 export function renderLines(d: LinesViewData, theme: RenderTheme): string {
@@ -33,12 +84,6 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
   const sExtent = finiteExtent(comps.map((c) => c.strength));
   if (!fExtent || !sExtent) return emptyDiagram('lines', idBase, d.title, 'No line components to draw.', pal);
 
-  const unit = frequencyUnit(Math.max(Math.abs(fExtent[0]), Math.abs(fExtent[1])), d.unitHz);
-  const span = fExtent[1] - fExtent[0];
-  const pad = span > 0 ? span * 0.08 : Math.max(Math.abs(fExtent[0]) * 0.1, unit.factor);
-  const f0 = fExtent[0] - pad;
-  const f1 = fExtent[1] + pad;
-
   const present = new Set(comps.map((c) => c.polarization));
   const legend: LegendEntry[] = POLARIZATIONS.filter((p) => present.has(p)).map((p) => ({
     label: `${POLARIZATION_NAME[p]} (Δm = ${p === 'pi' ? '0' : p === 'sigma+' ? '+1' : '−1'})`,
@@ -46,15 +91,25 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
     line: { width: 2, dash: POLARIZATION_DASH[p] },
     marker: POLARIZATION_MARKER[p],
   }));
+  legend.push({ label: 'marker size: strength', colour: pal.muted, marker: 'circle' });
   const legendSvg = legendRows(legend, 64, 48, WIDTH - 80, pal);
+  const groups = d.unitHz === undefined ? lineGroups(comps, d.fieldT) : [];
+  const counts = POLARIZATIONS.filter((p) => present.has(p)).map((p) => `${comps.filter((c) => c.polarization === p).length} ${POLARIZATION_NAME[p]}`);
+  const yDomain = [Math.min(0, sExtent[0]), Math.max(sExtent[1], 0) * 1.12 || 1];
+  const interactive = theme.kind === 'panel';
+  const strongest = sExtent[1];
+
+  if (groups.length > 1) return groupedPanels(d, comps, groups, legendSvg, counts, yDomain, { idBase, pal, interactive, strongest });
+
+  const unit = frequencyUnit(Math.max(Math.abs(fExtent[0]), Math.abs(fExtent[1])), d.unitHz);
+  const span = fExtent[1] - fExtent[0];
+  const pad = span > 0 ? span * 0.08 : Math.max(Math.abs(fExtent[0]) * 0.1, unit.factor);
+  const f0 = fExtent[0] - pad;
+  const f1 = fExtent[1] + pad;
 
   const box: PlotBox = { left: 64, right: WIDTH - 20, top: 48 + legendSvg.height + 16, bottom: HEIGHT - 56 };
   const x = scaleLinear().domain([f0, f1]).range([box.left, box.right]);
-  const y = scaleLinear()
-    .domain([Math.min(0, sExtent[0]), Math.max(sExtent[1], 0) * 1.12 || 1])
-    .range([box.bottom, box.top])
-    .nice();
-  const interactive = theme.kind === 'panel';
+  const y = scaleLinear().domain(yDomain).range([box.bottom, box.top]).nice();
 
   const body: string[] = [legendSvg.svg];
   body.push(bottomAxis(x, unit, 'Δf', box, pal));
@@ -64,41 +119,9 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
       el('path', { class: 'sl-zero', d: `M${px(x(0))},${px(box.top)}V${px(box.bottom)}`, stroke: pal.muted, 'stroke-width': 1, 'stroke-dasharray': '2 4', fill: 'none' }),
     );
   }
+  const ctx: StickContext = { idBase, pal, interactive, y, strongest, unit };
+  body.push(el('g', { class: 'sl-components' }, comps.map((c, i) => stick(c, i, x(c.offsetHz), ctx))));
 
-  const base = y(0);
-  const sticks = comps.map((c, i) => {
-    const cx = x(c.offsetHz);
-    const top = y(c.strength);
-    const colour = pal.polarization[c.polarization];
-    const name = POLARIZATION_NAME[c.polarization];
-    const where = signed(c.offsetHz, formatIn(c.offsetHz, unit));
-    const pathId = `${idBase}-k${i}`;
-    const children = [
-      titleEl(`${name} ${c.label}: Δf = ${where}, strength ${dataNum(c.strength)}`),
-      el('path', { id: pathId, d: `M${px(cx)},${px(base)}V${px(top)}`, fill: 'none', 'stroke-linecap': 'butt' }),
-      el('path', { class: 'sl-cap', d: markerPath(POLARIZATION_MARKER[c.polarization], cx, top, 5), fill: colour, stroke: pal.halo, 'stroke-width': 0.8, 'stroke-dasharray': 'none' }),
-    ];
-    if (interactive) children.push(el('use', { href: `#${pathId}`, class: 'sl-hit', 'stroke-width': 9, 'stroke-opacity': 0, 'stroke-dasharray': 'none' }));
-    return el(
-      'g',
-      {
-        class: `sl-component sl-pol-${c.polarization === 'pi' ? 'pi' : c.polarization === 'sigma+' ? 'plus' : 'minus'}`,
-        'data-kind': 'component',
-        'data-label': c.label,
-        'data-polarization': name,
-        'data-offset-hz': dataNum(c.offsetHz),
-        'data-strength': dataNum(c.strength),
-        stroke: colour,
-        'stroke-width': 2.4,
-        'stroke-dasharray': POLARIZATION_DASH[c.polarization],
-        tabindex: '0',
-      },
-      children,
-    );
-  });
-  body.push(el('g', { class: 'sl-components' }, sticks));
-
-  const counts = POLARIZATIONS.filter((p) => present.has(p)).map((p) => `${comps.filter((c) => c.polarization === p).length} ${POLARIZATION_NAME[p]}`);
   const desc = `Stick spectrum of ${comps.length} line components (${counts.join(', ')}) from Δf = ${formatIn(fExtent[0], unit)} to ${formatIn(fExtent[1], unit)}.`;
   return svgDocument(
     {
@@ -117,7 +140,75 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
         'data-x-range': `${px(box.left)},${px(box.right)}`,
         'data-y-domain': `${dataNum(y.domain()[0])},${dataNum(y.domain()[1])}`,
         'data-y-range': `${px(box.bottom)},${px(box.top)}`,
+        'data-panels': '1',
       },
+    },
+    body,
+  );
+}
+
+const PANEL_GAP = 24;
+
+/** One panel per group, all on the same scale, offsets from each group's centre. */
+function groupedPanels(
+  d: LinesViewData,
+  comps: LineComponent[],
+  groups: LineGroup[],
+  legendSvg: { svg: string; height: number },
+  counts: string[],
+  yDomain: number[],
+  base: Omit<StickContext, 'y' | 'unit'>,
+): string {
+  const { pal, idBase } = base;
+  const z = zeemanUnitHz(d.fieldT);
+  const half = Math.max(...groups.map((g) => Math.max(g.highHz - g.centreHz, g.centreHz - g.lowHz))) * 1.15 || 2 * z;
+  const unit = engineeringUnit(half, 'Hz');
+  const zUnit: DisplayUnit = { factor: z, symbol: 'μB·B/h' };
+  const height = HEIGHT + 61;
+  const top = 48 + legendSvg.height + 16 + 53;
+  const left = 64;
+  const right = WIDTH - 20;
+  const n = groups.length;
+  const w = (right - left - PANEL_GAP * (n - 1)) / n;
+  const bottom = height - 70;
+  const y = scaleLinear().domain(yDomain).range([bottom, top]).nice();
+  const ctx: StickContext = { ...base, y, unit };
+  const body: string[] = [legendSvg.svg];
+  body.push(leftAxis(y, undefined, 'relative strength', { left, right: left + w, top, bottom }, left, pal));
+  let k = 0;
+  groups.forEach((g, gi) => {
+    const box: PlotBox = { left: left + gi * (w + PANEL_GAP), right: left + gi * (w + PANEL_GAP) + w, top, bottom };
+    const x = scaleLinear().domain([-half, half]).range([box.left, box.right]);
+    const heading = signed(g.centreHz, formatSI(g.centreHz, 'Hz'));
+    // Headings of narrow panels alternate between two rows so that they never overlap.
+    const stagger = estimateTextWidth(heading, 11) + 6 > w + PANEL_GAP && gi % 2 === 1 ? 13 : 0;
+    const parts: string[] = [
+      titleEl(`Group ${gi + 1} of ${n}: ${g.components.length} components centred at Δf = ${signed(g.centreHz, formatSI(g.centreHz, 'Hz'))}`),
+      el('text', { class: 'sl-panel-heading', x: (box.left + box.right) / 2, y: top - 30 - stagger, 'text-anchor': 'middle', 'font-size': 11, 'font-weight': 600, fill: pal.text }, text(heading)),
+      bottomAxis(x, unit, 'offset', box, pal, Math.min(60, w / 3)),
+      topAxis(x, zUnit, box, pal, Math.min(50, w / 2)),
+      el('path', { class: 'sl-frame', d: `M${px(box.left)},${px(box.top)}V${px(box.bottom)}M${px(box.right)},${px(box.top)}V${px(box.bottom)}`, stroke: pal.grid, fill: 'none' }),
+      el('g', { class: 'sl-components' }, g.components.map((c) => stick(c, k++, x(c.offsetHz - g.centreHz), ctx))),
+    ];
+    body.push(
+      el('g', { class: 'sl-panel', 'data-kind': 'group', 'data-label': heading, 'data-centre-hz': dataNum(g.centreHz), 'data-x-domain': `${dataNum(-half)},${dataNum(half)}`, 'data-x-range': `${px(box.left)},${px(box.right)}` }, parts),
+    );
+  });
+  const unitNote = `top scale: offset in μB·B/h = ${formatSI(z, 'Hz')} (B = ${formatSI(d.fieldT ?? 0, 'T')})`;
+  body.push(el('text', { class: 'sl-note', x: right, y: height - 8, 'text-anchor': 'end', 'font-size': 10, fill: pal.muted }, text(unitNote)));
+  const desc = `Stick spectrum of ${comps.length} line components (${counts.join(', ')}) in ${n} groups, one panel each on a common scale of ±${formatIn(half, unit)} about the group centre: ${groups
+    .map((g) => signed(g.centreHz, formatSI(g.centreHz, 'Hz')))
+    .join(', ')}; ${unitNote}.`;
+  return svgDocument(
+    {
+      view: 'lines',
+      idBase,
+      width: WIDTH,
+      height,
+      title: d.title,
+      desc,
+      pal,
+      rootData: { 'data-panels': String(n), 'data-x-unit': unit.symbol, 'data-y-domain': `${dataNum(y.domain()[0])},${dataNum(y.domain()[1])}`, 'data-y-range': `${px(bottom)},${px(top)}` },
     },
     body,
   );

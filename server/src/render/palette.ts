@@ -1,8 +1,9 @@
 /**
- * Colours and line styles. The panel palette names VS Code theme variables (each with a
- * fallback) so the diagram follows the editor's colour theme; the export palette is a fixed
- * light scheme for files. Every series also differs by dash pattern or marker shape, so the
- * diagrams stay readable in greyscale and for colour-blind readers.
+ * Colours and line styles, all in this one file. Series colours are the project's own, the
+ * same in the panel and in exported files; the panel takes text, grid and background from
+ * VS Code theme variables (each with a fallback) so it follows the editor's theme. Every
+ * series also differs by dash pattern or marker shape, so the diagrams stay readable in
+ * greyscale and for colour-blind readers.
  */
 import type { Polarization, RenderTheme } from './viewData';
 
@@ -30,17 +31,28 @@ export interface Palette {
   fontFamily: string;
 }
 
-// Fixed colours chosen for contrast on a light background and for mutual distinctness
-// under the common forms of colour blindness (blue/orange/reddish-purple/bluish-green axis).
+// Sublevel's own hues, designed by scripts/palette/design_palette.py: every one has at least
+// 3:1 contrast against both light and dark editor backgrounds (so one set serves every theme),
+// and they stay apart under simulated protanopia, deuteranopia and tritanopia
+// (tests/render/palette.test.ts re-checks both). Neutrals are plain greys.
 const INK = '#1d232b';
 const GREY = '#5e6670';
-const BLUE = '#2166ac';
-const ORANGE = '#d7832a';
-const VERMILION = '#c0461d';
-const TEAL = '#23917a';
-const PURPLE = '#7b4fa6';
-const MAGENTA = '#b03a8c';
-const OLIVE = '#8c7d12';
+/** Mid grey for field-insensitive curves: ≥ 3:1 on light and dark backgrounds alike. */
+const MID_GREY = '#868b92';
+const SKY = '#2295de';
+const AMBER = '#d9731b';
+const SAGE = '#8a935d';
+const FUCHSIA = '#cd03ac';
+const IRIS = '#784ff2';
+const SCARLET = '#d92132';
+const MAUVE = '#9a5d7b';
+const ORCHID = '#d959ac';
+const LEAF = '#3b9150';
+
+/** Every hue of the palette by role, for the checks in the tests. */
+export const HUES = { SKY, AMBER, SAGE, FUCHSIA, IRIS, SCARLET, MAUVE, ORCHID, LEAF, MID_GREY } as const;
+
+const SERIES = [SKY, AMBER, SAGE, FUCHSIA, IRIS, SCARLET, MAUVE, ORCHID] as const;
 
 const EXPORT: Palette = {
   background: '#fbfbf8',
@@ -49,51 +61,31 @@ const EXPORT: Palette = {
   muted: GREY,
   grid: '#dfe2e6',
   axis: '#6d747c',
-  marker: PURPLE,
-  rising: VERMILION,
-  falling: BLUE,
-  flat: GREY,
+  marker: IRIS,
+  rising: AMBER,
+  falling: SKY,
+  flat: MID_GREY,
   total: INK,
-  totalFill: BLUE,
-  series: [BLUE, ORANGE, TEAL, MAGENTA, OLIVE, VERMILION, PURPLE, GREY],
-  polarization: { pi: BLUE, 'sigma+': ORANGE, 'sigma-': MAGENTA },
-  good: '#2d7a3e',
-  bad: VERMILION,
+  totalFill: SKY,
+  series: SERIES,
+  polarization: { pi: SKY, 'sigma+': AMBER, 'sigma-': FUCHSIA },
+  good: LEAF,
+  bad: SCARLET,
   fontFamily: 'system-ui, sans-serif',
 };
 
 const v = (name: string, fallback: string): string => `var(--vscode-${name}, ${fallback})`;
 
+/** The panel keeps the series hues (they read on light and dark themes) and takes text and rules from the editor theme. */
 const PANEL: Palette = {
+  ...EXPORT,
   background: 'none',
   halo: v('editor-background', EXPORT.background),
   text: v('editor-foreground', INK),
   muted: v('descriptionForeground', GREY),
   grid: v('editorIndentGuide-background1', EXPORT.grid),
   axis: v('editorLineNumber-foreground', EXPORT.axis),
-  marker: v('charts-purple', PURPLE),
-  rising: v('charts-red', VERMILION),
-  falling: v('charts-blue', BLUE),
-  flat: v('descriptionForeground', GREY),
   total: v('editor-foreground', INK),
-  totalFill: v('charts-blue', BLUE),
-  series: [
-    v('charts-blue', BLUE),
-    v('charts-orange', ORANGE),
-    v('charts-green', TEAL),
-    v('charts-purple', MAGENTA),
-    v('charts-yellow', OLIVE),
-    v('charts-red', VERMILION),
-    v('terminal-ansiMagenta', PURPLE),
-    v('descriptionForeground', GREY),
-  ],
-  polarization: {
-    pi: v('charts-blue', BLUE),
-    'sigma+': v('charts-orange', ORANGE),
-    'sigma-': v('charts-purple', MAGENTA),
-  },
-  good: v('testing-iconPassed', EXPORT.good),
-  bad: v('errorForeground', VERMILION),
   fontFamily: v('font-family', EXPORT.fontFamily),
 };
 

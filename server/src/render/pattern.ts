@@ -1,9 +1,12 @@
 /**
  * The predicted detector pattern: the summed profile as a shaded line, each sublevel's share
- * as a thinner line (colour and dash both cycle), a marker over every peak and the
- * resolvability verdict as a badge that differs by shape as well as colour.
+ * as a thinner line (colour and dash both cycle), a numbered marker over every peak the beam
+ * report counts, a peak table under the axis, and the resolvability verdict as a badge that
+ * differs by shape as well as colour. Nothing is trimmed away: the window always holds every
+ * counted peak, and the height axis turns logarithmic when peak heights differ by orders of
+ * magnitude.
  */
-import { scaleLinear } from 'd3-scale';
+import { scaleLinear, scaleLog } from 'd3-scale';
 import { area, line } from 'd3-shape';
 import { bottomAxis, leftAxis, type PlotBox } from './axes';
 import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
@@ -11,13 +14,15 @@ import { truncateLabel } from './labelLayout';
 import { LEGEND_ROW_HEIGHT, LEGEND_SAMPLE_WIDTH, legendColumn, type LegendEntry } from './legend';
 import { markerPath } from './markers';
 import { paletteFor, SERIES_DASHES, type Palette } from './palette';
-import { arrayValues, finiteExtent } from './sampled';
+import { needsLogAxis, patternWindow } from './patternWindow';
 import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
+import type { Scale } from './axes';
 import { engineeringUnit, formatIn, type DisplayUnit } from './units';
 import type { PatternViewData, RenderTheme } from './viewData';
 
 const WIDTH = 760;
-const HEIGHT = 460;
+const BASE_HEIGHT = 460;
+const TABLE_ROW = 14;
 const LEGEND_MAX_CHARS = 22;
 
 /** Colour i mod 8 with a dash that shifts every 8 series, so the first 32 pairs are all distinct. */
@@ -26,10 +31,10 @@ export function seriesStyle(i: number, pal: Palette): { colour: string; dash?: s
   return { colour: pal.series[i % n], dash: SERIES_DASHES[(i + Math.floor(i / n)) % SERIES_DASHES.length] };
 }
 
-function peakOfSeries(xs: ArrayLike<number>, ys: ArrayLike<number>): { x: number; y: number } {
+function peakOfSeries(xs: ArrayLike<number>, ys: ArrayLike<number>, from: number, to: number): { x: number; y: number } {
   let best = { x: NaN, y: -Infinity };
-  const n = Math.min(xs.length, ys.length);
-  for (let i = 0; i < n; i++) if (Number.isFinite(xs[i]) && ys[i] > best.y) best = { x: xs[i], y: ys[i] };
+  const n = Math.min(xs.length, ys.length, to);
+  for (let i = from; i < n; i++) if (Number.isFinite(xs[i]) && ys[i] > best.y) best = { x: xs[i], y: ys[i] };
   return best;
 }
 
@@ -55,59 +60,88 @@ function verdictBadge(resolved: boolean, message: string, x0: number, y0: number
   );
 }
 
+// Positions closer to the axis than this are rounding noise of a symmetric pattern, printed as 0.
+const ZERO_POSITION_M = 1e-12;
+
 function positionLabel(v: number, unit: DisplayUnit): string {
-  return formatIn(v, unit);
+  return formatIn(Math.abs(v) < ZERO_POSITION_M ? 0 : v, unit);
+}
+
+/** The height axis shows the share of all atoms per millimetre of detector, in per cent (data are per metre). */
+export const PATTERN_Y_UNIT: DisplayUnit = { factor: 10, symbol: '% of atoms per mm' };
+
+/** "1 at −2.1 mm (m_F=−1)" entries wrapped into rows that fit `maxWidth`. */
+function peakTableRows(entries: string[], maxWidth: number): string[] {
+  const rows: string[] = [];
+  let cur = 'Peaks:';
+  for (const e of entries) {
+    const next = cur === 'Peaks:' ? `${cur} ${e}` : `${cur} · ${e}`;
+    if (estimateTextWidth(next) > maxWidth && cur !== 'Peaks:') {
+      rows.push(cur);
+      cur = `  ${e}`;
+    } else cur = next;
+  }
+  rows.push(cur);
+  return rows;
 }
 
 export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
   const pal = paletteFor(theme);
   const idBase = `sl-p${shortHash(`${d.title}|${d.parts.length}|${d.positionsM.length}`)}`;
   const xs = d.positionsM;
-  const xExtent = finiteExtent(arrayValues(xs));
-  const yExtent = finiteExtent([
-    ...arrayValues(d.total, xs.length),
-    ...d.parts.flatMap((p) => [...arrayValues(p.values, xs.length)]),
-    ...d.peaks.map((p) => p.height),
-  ]);
-  if (!xExtent || !yExtent) return emptyDiagram('pattern', idBase, d.title, 'No detector profile to draw.', pal);
+  const peaks = d.peaks.filter((p) => Number.isFinite(p.positionM) && Number.isFinite(p.height));
+  const win = patternWindow(xs, d.total, peaks);
+  if (!win) return emptyDiagram('pattern', idBase, d.title, 'No detector profile to draw.', pal);
+  const { from, to } = win;
+  let { x0, x1 } = win;
+  let yMax = 0;
+  for (let k = from; k < to; k++) if (Number.isFinite(d.total[k])) yMax = Math.max(yMax, d.total[k]);
+  for (const p of peaks) yMax = Math.max(yMax, p.height);
 
-  const unit = engineeringUnit(Math.max(Math.abs(xExtent[0]), Math.abs(xExtent[1])), 'm');
-  let [x0, x1] = xExtent;
+  const unit = engineeringUnit(Math.max(Math.abs(x0), Math.abs(x1)), 'm');
   if (x0 === x1) {
     const pad = Math.abs(x0) * 0.1 || 1e-6;
     x0 -= pad;
     x1 += pad;
   }
-  const yTop = Math.max(yExtent[1], 0) * 1.1 || 1;
-  const yLow = Math.min(yExtent[0], 0);
 
   const legend: LegendEntry[] = [{ label: 'total', colour: pal.total, line: { width: 2.2 }, area: pal.totalFill }];
   d.parts.forEach((p, i) => {
     const s = seriesStyle(i, pal);
     legend.push({ label: truncateLabel(p.label, LEGEND_MAX_CHARS), colour: s.colour, line: { width: 1.4, dash: s.dash } });
   });
-  if (d.peaks.length > 0) legend.push({ label: 'peak', colour: pal.text, marker: 'down' });
+  if (peaks.length > 0) legend.push({ label: 'counted peak', colour: pal.text, marker: 'down' });
   const legendW = Math.min(200, Math.max(...legend.map((e) => estimateTextWidth(e.label))) + LEGEND_SAMPLE_WIDTH + 20);
 
-  const box: PlotBox = { left: 64, right: WIDTH - 16 - legendW, top: 78, bottom: HEIGHT - 56 };
+  const tableEntries = peaks.map((p, i) => `${i + 1} at ${positionLabel(p.positionM, unit)}${p.members.length ? ` (${p.members.join(', ')})` : ''}`);
+  const tableRows = peaks.length > 0 ? peakTableRows(tableEntries, WIDTH - 32) : [];
+  const height = BASE_HEIGHT + tableRows.length * TABLE_ROW;
+  const box: PlotBox = { left: 64, right: WIDTH - 16 - legendW, top: 78, bottom: BASE_HEIGHT - 56 };
   const x = scaleLinear().domain([x0, x1]).range([box.left, box.right]);
-  const y = scaleLinear().domain([yLow, yTop]).range([box.bottom, box.top]).nice();
+
+  // A log axis when the counted peaks differ by orders of magnitude; its floor sits well below the lowest peak.
+  const logAxis = needsLogAxis(peaks);
+  const minPeak = Math.min(...peaks.map((p) => p.height).filter((h) => h > 0));
+  const floor = logAxis ? minPeak / 20 : 0;
+  const y: Scale = logAxis
+    ? scaleLog().domain([floor, yMax * 1.8]).range([box.bottom, box.top]).clamp(true)
+    : scaleLinear().domain([0, yMax * 1.15 || 1]).range([box.bottom, box.top]).nice();
+  const yv = (v: number): number => y(logAxis ? Math.max(v, floor) : v);
   const interactive = theme.kind === 'panel';
 
   const body: string[] = [verdictBadge(d.verdict.resolved, d.verdict.text, 16, 48, WIDTH - 32, pal)];
   body.push(bottomAxis(x, unit, 'position on detector', box, pal));
-  body.push(leftAxis(y, undefined, 'signal (relative)', box, box.left, pal));
+  body.push(leftAxis(y, PATTERN_Y_UNIT, logAxis ? 'atoms, log scale' : 'atoms', box, box.left, pal));
   const maxRows = Math.floor((box.bottom - box.top) / LEGEND_ROW_HEIGHT);
   body.push(legendColumn(legend, box.right + 16, box.top + 6, maxRows, pal));
 
-  const idx = Array.from({ length: xs.length }, (_, k) => k);
+  const idx = Array.from({ length: to - from }, (_, k) => from + k);
   const seriesPath = (ys: ArrayLike<number>): string =>
     line<number>()
       .defined((k) => k < ys.length && Number.isFinite(xs[k]) && Number.isFinite(ys[k]))
       .x((k) => x(xs[k]))
-      .y((k) => y(ys[k]))
+      .y((k) => yv(ys[k]))
       .digits(2)(idx) ?? '';
-
   const dataGroup = (
     cls: string,
     kind: string,
@@ -121,7 +155,7 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
   ): string => {
     const d3path = seriesPath(ys);
     if (!d3path) return '';
-    const peak = peakOfSeries(xs, ys);
+    const peak = peakOfSeries(xs, ys, from, to);
     const pathId = `${idBase}-${id}`;
     const children = [
       titleEl(`${label}: maximum ${dataNum(peak.y)} at ${positionLabel(peak.x, unit)}`),
@@ -155,50 +189,65 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
   const fill = area<number>()
     .defined((k) => k < d.total.length && Number.isFinite(xs[k]) && Number.isFinite(d.total[k]))
     .x((k) => x(xs[k]))
-    .y0(y(0))
-    .y1((k) => y(d.total[k]))
+    .y0(box.bottom)
+    .y1((k) => yv(d.total[k]))
     .digits(2)(idx);
   const totalArea = fill ? [el('path', { class: 'sl-total-area', d: fill, fill: pal.totalFill, 'fill-opacity': 0.14, stroke: 'none' })] : [];
   body.push(dataGroup('sl-total', 'total', 'total', 'total', d.total, pal.total, 2.2, undefined, totalArea));
   body.push(el('g', { class: 'sl-parts' }, parts));
 
-  // Peak markers; position labels only where they do not collide, taller peaks first.
-  const peaks = d.peaks.filter((p) => Number.isFinite(p.positionM) && Number.isFinite(p.height) && p.positionM >= x0 && p.positionM <= x1);
+  // Every counted peak gets a marker and its number; its position is printed too where there is room (taller first).
   const order = peaks.map((_, i) => i).sort((a, b) => peaks[b].height - peaks[a].height || a - b);
-  const taken: [number, number][] = [];
-  const labelled = new Set<number>();
+  // Every number keeps its own span; a position is added where the longer label overlaps no other label.
+  const spans: [number, number][] = peaks.map((p, i) => {
+    const half = estimateTextWidth(String(i + 1), 10) / 2 + 3;
+    return [x(p.positionM) - half, x(p.positionM) + half];
+  });
+  const withPosition = new Set<number>();
   for (const i of order) {
     const cx = x(peaks[i].positionM);
-    const half = estimateTextWidth(positionLabel(peaks[i].positionM, unit), 10) / 2 + 3;
-    if (taken.every(([a, b]) => cx + half < a || cx - half > b)) {
-      taken.push([cx - half, cx + half]);
-      labelled.add(i);
+    const half = estimateTextWidth(`${i + 1}: ${positionLabel(peaks[i].positionM, unit)}`, 10) / 2 + 3;
+    if (spans.every(([a, b], j) => j === i || cx + half < a || cx - half > b)) {
+      spans[i] = [cx - half, cx + half];
+      withPosition.add(i);
     }
   }
+  // Numbers of close peaks climb in steps so that they never overlap.
+  const numberRise: number[] = [];
+  peaks.forEach((p, i) => {
+    const cx = x(p.positionM);
+    let rise = 0;
+    for (let j = 0; j < i; j++) {
+      if (Math.abs(x(peaks[j].positionM) - cx) < 16 && Math.abs(yv(peaks[j].height) - numberRise[j] - (yv(p.height) - rise)) < 12) rise = numberRise[j] + 12;
+    }
+    numberRise.push(rise);
+  });
   body.push(
     el(
       'g',
       { class: 'sl-peaks' },
       peaks.map((p, i) => {
         const cx = x(p.positionM);
-        const cy = y(p.height) - 3;
+        const cy = Math.max(box.top + 14, yv(p.height) - 3);
         const where = positionLabel(p.positionM, unit);
         const members = p.members.join(', ');
+        const label = withPosition.has(i) ? `${i + 1}: ${where}` : `${i + 1}`;
+        const fwhm = p.fwhmM && Number.isFinite(p.fwhmM) ? `, FWHM ${positionLabel(p.fwhmM, unit)}` : '';
         const children = [
-          titleEl(`Peak at ${where}, height ${dataNum(p.height)}${members ? `; states: ${members}` : ''}`),
+          titleEl(`Peak ${i + 1} at ${where}${fwhm}, ${formatIn(p.height, PATTERN_Y_UNIT)}${members ? `; states: ${members}` : ''}`),
           el('path', { class: 'sl-peak-mark', d: markerPath('down', cx, cy - 5, 5), fill: pal.text, stroke: pal.halo, 'stroke-width': 1 }),
+          el('text', { class: 'sl-peak-label', x: cx, y: cy - 14 - numberRise[i], 'text-anchor': 'middle', 'font-size': 10, fill: pal.text, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text(label)),
         ];
-        if (labelled.has(i)) {
-          children.push(el('text', { x: cx, y: cy - 14, 'text-anchor': 'middle', 'font-size': 10, fill: pal.text, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text(where)));
-        }
         return el(
           'g',
           {
             class: 'sl-peak',
             'data-kind': 'peak',
-            'data-label': `peak at ${where}`,
+            'data-number': String(i + 1),
+            'data-label': `peak ${i + 1} at ${where}`,
             'data-position-m': dataNum(p.positionM),
             'data-height': dataNum(p.height),
+            'data-fwhm-m': p.fwhmM && Number.isFinite(p.fwhmM) ? dataNum(p.fwhmM) : undefined,
             'data-members': members,
             tabindex: '0',
           },
@@ -207,11 +256,21 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
       }),
     ),
   );
+  if (tableRows.length > 0) {
+    body.push(
+      el(
+        'g',
+        { class: 'sl-peak-table', 'font-size': 11 },
+        tableRows.map((r, i) => el('text', { x: 16, y: BASE_HEIGHT - 6 + i * TABLE_ROW, fill: pal.text }, text(r))),
+      ),
+    );
+  }
 
   const desc = [
-    `Detector profile across ${positionLabel(xExtent[0], unit)} to ${positionLabel(xExtent[1], unit)}`,
+    `Detector profile across ${positionLabel(x0, unit)} to ${positionLabel(x1, unit)}`,
     `${d.parts.length} sublevel contributions`,
-    `${peaks.length} peaks`,
+    `${peaks.length} ${peaks.length === 1 ? 'peak' : 'peaks'}${tableEntries.length ? ` (${tableEntries.join('; ')})` : ''}`,
+    `height axis ${logAxis ? 'logarithmic' : 'linear'} in ${PATTERN_Y_UNIT.symbol}`,
     `${d.verdict.resolved ? 'resolved' : 'not resolved'}: ${d.verdict.text}`,
   ];
   return svgDocument(
@@ -219,7 +278,7 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
       view: 'pattern',
       idBase,
       width: WIDTH,
-      height: HEIGHT,
+      height,
       title: d.title,
       desc: desc.join('; ') + '.',
       pal,
@@ -229,8 +288,10 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
         'data-x-factor': dataNum(unit.factor),
         'data-x-domain': `${dataNum(x0)},${dataNum(x1)}`,
         'data-x-range': `${px(box.left)},${px(box.right)}`,
+        'data-y-scale': logAxis ? 'log' : 'linear',
         'data-y-domain': `${dataNum(y.domain()[0])},${dataNum(y.domain()[1])}`,
         'data-y-range': `${px(box.bottom)},${px(box.top)}`,
+        'data-peak-count': String(peaks.length),
       },
     },
     body,

@@ -33,9 +33,11 @@ export interface LevelsViewData {
   /** Unit of the energy axis in Hz (1e9 draws GHz); chosen from the data when absent. */
   energyUnitHz?: number;
   curves: LevelCurve[];
-  /** The working field of the setup file, drawn as a vertical rule. */
+  /** The chosen working field of the setup file: a vertical rule with a dot on every curve. */
   markerT?: number;
   markerLabel?: string;
+  /** Every named field and magnet field of the file, each drawn as a labelled rule when inside the sweep. */
+  fieldMarks?: { fieldT: number; label: string }[];
   crossings?: LevelCrossing[];
 }
 
@@ -48,17 +50,22 @@ export interface PatternPart {
 
 export interface PatternPeak {
   positionM: number;
+  /** The summed profile at the peak, same scale as `total`. */
   height: number;
+  /** Full width at half maximum of the peak's own profile, m, when known (it sets how much of the axis the peak needs). */
+  fwhmM?: number | null;
   /** Labels of the sublevels that land in this peak. */
   members: string[];
 }
 
 export interface PatternViewData {
   title: string;
-  /** Positions across the detector plane in metres, ascending. */
+  /** Positions across the detector plane in metres, ascending: the whole computed grid, never trimmed. */
   positionsM: ArrayLike<number>;
+  /** Summed profile: fraction of all atoms per metre of detector position (it integrates to 1 less what falls off the grid). */
   total: ArrayLike<number>;
   parts: PatternPart[];
+  /** The peaks the beam report counts, in order of position; the figure marks every one. */
   peaks: PatternPeak[];
   verdict: { resolved: boolean; text: string };
 }
@@ -77,9 +84,32 @@ export interface LineComponent {
 export interface LinesViewData {
   title: string;
   components: LineComponent[];
+  /** The field the components were computed at, and its name in the file. */
+  fieldT?: number;
+  fieldName?: string;
   /** Unit of the offset axis in Hz (1e6 draws MHz); chosen from the data when absent. */
   unitHz?: number;
 }
 
 /** `panel`: colours follow the editor theme through CSS variables; `export`: fixed light palette for files. */
 export type RenderTheme = { kind: 'panel' } | { kind: 'export' };
+
+/** One RF/microwave transition of a level against field: what a resonance or clock experiment tunes. */
+export interface ResonanceViewData {
+  title: string;
+  fieldUnit: FieldUnit;
+  /** Fields in tesla, ascending. */
+  fieldsT: ArrayLike<number>;
+  /** Transition frequency f = (E_upper − E_lower)/h at each field, Hz. */
+  frequencyHz: ArrayLike<number>;
+  /** df/dB at each field, Hz/T (from the exact moments of both states). */
+  slopeHzPerT: ArrayLike<number>;
+  /** "F=1, m_F=-1 → F=2, m_F=+1". */
+  pairLabel: string;
+  /** Fields where df/dB = 0, as the evaluation found them. */
+  insensitive: { fieldT: number; frequencyHz: number }[];
+  /** Fields where the transition is at the file's frequency. */
+  resonances: { fieldT: number; frequencyHz: number }[];
+  /** Named fields of the file, drawn as rules when inside the range. */
+  fieldMarks: { fieldT: number; label: string }[];
+}

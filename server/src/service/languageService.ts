@@ -32,7 +32,7 @@ import { inlayHints } from '../features/inlayHints';
 import { references } from '../features/references';
 import { prepareRename, rename, type RenameRefusal } from '../features/rename';
 import { semanticTokens } from '../features/semanticTokens';
-import { diagramFor, type DiagramAnswer, type DiagramView } from '../views/diagram';
+import { diagramFor, type DiagramAnswer, type DiagramRequest } from '../views/diagram';
 import { DocumentStore, type DocumentSnapshot } from './documentStore';
 import { type Evaluator, inProcessEvaluator } from './evaluator';
 import { DEFAULT_SETTINGS, type EditorSettings } from './settings';
@@ -198,7 +198,7 @@ export class LanguageService {
   }
 
   /** The diagram panel's picture of this version (evaluated first, as hovers are). */
-  async diagram(doc: DocumentSnapshot, req: { view: DiagramView; line?: number; theme: 'panel' | 'export' }): Promise<DiagramAnswer> {
+  async diagram(doc: DocumentSnapshot, req: Pick<DiagramRequest, 'view' | 'line' | 'theme' | 'fieldName' | 'fromT' | 'toT' | 'fieldUnit'>): Promise<DiagramAnswer> {
     const failed: DiagramAnswer = { ok: false, message: 'Sublevel could not draw this file; the server log says why.' };
     const fast = this.store.analysis(doc); // never throws (analyzeFast catches)
     if (fast.refused) return { ok: false, message: `Sublevel did not draw this file: ${fast.problems[0]?.message ?? 'it is over a size cap'}.` };

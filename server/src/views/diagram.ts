@@ -8,12 +8,13 @@ import { gJLookup } from '../eval/gJLookup';
 import { workingFields } from '../eval/evaluate';
 import type { BeamModel, LevelModel, SetupModel } from '../model/types';
 import type { WorkingField } from '../eval/levelEvaluation';
-import { levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, type RenderTheme } from '../render';
-import { linesView } from './linesView';
+import { levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, renderResonance, resonanceCsv, type FieldUnit, type RenderTheme } from '../render';
+import { resonanceView } from './resonanceView';
+import { lineFieldIndex, linesView } from './linesView';
 import { levelsView } from './levelsView';
 import { patternView } from './patternView';
 
-export type DiagramView = 'levels' | 'pattern' | 'lines';
+export type DiagramView = 'levels' | 'pattern' | 'lines' | 'resonance';
 
 export interface DiagramRequest {
   view: DiagramView;
@@ -25,36 +26,76 @@ export interface DiagramRequest {
   marker?: WorkingField;
   beam?: BeamModel;
   lineName?: string;
+  resonanceName?: string;
+  /** Levels view: field range and axis unit chosen by the user (CLI --from/--to/--unit, panel range control). */
+  fromT?: number;
+  toT?: number;
+  fieldUnit?: FieldUnit;
+  /** A named field chosen in the panel (the CLI resolves --field itself and passes `marker`). */
+  fieldName?: string;
+  /** The setup file's name, for the CSV header line. */
+  source?: string;
 }
 
-export type DiagramAnswer = { ok: true; title: string; svg: string; csv: string } | { ok: false; message: string };
+export type DiagramAnswer = { ok: true; title: string; svg: string; csv: string; fields?: string[] } | { ok: false; message: string };
 
-export function diagramFor(analysis: Analysis, req: DiagramRequest): DiagramAnswer {
+export function diagramFor(analysis: Analysis, request: DiagramRequest): DiagramAnswer {
   const model = analysis.model;
   if (!model) return { ok: false, message: 'The file could not be read; see the Problems view.' };
+  const named = workingFields(model);
+  const req: DiagramRequest = { ...request, marker: request.marker ?? named.find((f) => f.source.name === request.fieldName) };
+  const answer = drawn(analysis, model, req);
+  return answer.ok ? { ...answer, fields: named.map((f) => f.source.name) } : answer;
+}
+
+function drawn(analysis: Analysis, model: SetupModel, req: DiagramRequest): DiagramAnswer {
   const theme: RenderTheme = { kind: req.theme };
   const gJOf = gJLookup(analysis.result?.levels ?? []);
   if (req.view === 'levels') {
     const level = req.level ?? levelAt(model, req.line);
     if (!level) return { ok: false, message: 'No level to draw: add a species with a level, e.g. `level ground: 2S1/2`.' };
-    const marker = req.marker ?? workingFields(model)[0];
-    const v = levelsView(level, gJOf(level), model.settings, marker);
-    if (!v) return { ok: false, message: `Level '${level.name}' has problems to fix before it can be drawn.` };
-    return { ok: true, title: v.data.title, svg: renderLevels(v.data, theme), csv: levelsCsv(v.data) };
+    const fields = workingFields(model);
+    const marker = req.marker ?? fields[0];
+    const v = levelsView(level, gJOf(level), model.settings, marker, { fromT: req.fromT, toT: req.toT, fieldUnit: req.fieldUnit, fieldMarks: fields });
+    if (!v) return { ok: false, message: `Level '${level.name}' has problems to fix before it can be drawn (or the field range is empty).` };
+    const about: [string, string][] = [['file', req.source ?? ''], ['level', `${level.species.name}.${level.name}`]];
+    return { ok: true, title: v.data.title, svg: renderLevels(v.data, theme), csv: levelsCsv(v.data, about) };
   }
   if (req.view === 'pattern') {
     const beam = req.beam ?? beamAt(model, req.line);
     if (!beam) return { ok: false, message: 'No beam to draw: add a `beam` block with level, source, slits, magnet and drift.' };
     const v = patternView(beam.name, evaluateBeam(beam, gJOf, false));
     if (!v) return { ok: false, message: `Beam '${beam.name}' cannot be computed yet; see the Problems view.` };
-    return { ok: true, title: v.title, svg: renderPattern(v, theme), csv: patternCsv(v) };
+    return { ok: true, title: v.title, svg: renderPattern(v, theme), csv: patternCsv(v, beamAbout(beam, req.source)) };
+  }
+  if (req.view === 'resonance') {
+    const models = model.resonances;
+    const r = models.find((m) => m.name === req.resonanceName) ?? models.find((m) => contains(m.node.range, req.line)) ?? models[0];
+    const result = r && analysis.result?.resonances.find((x) => x.name === r.name);
+    if (!r || !result) return { ok: false, message: 'No resonance to draw: add one, e.g. `resonance clock` with level, lower, upper and range.' };
+    const v = resonanceView(r, result, r.level ? gJOf(r.level) : undefined, model.settings, workingFields(model));
+    if ('problem' in v) return { ok: false, message: v.problem };
+    const about: [string, string][] = [['file', req.source ?? ''], ['resonance', r.name]];
+    return { ok: true, title: v.title, svg: renderResonance(v, theme), csv: resonanceCsv(v, about) };
   }
   const lines = analysis.result?.lines ?? [];
   const line = lines.find((l) => l.name === req.lineName) ?? lines.find((l) => contains(model.lines.find((m) => m.name === l.name)?.node.range ?? NOWHERE, req.line)) ?? lines[0];
   if (!line) return { ok: false, message: 'No line to draw: add one, e.g. `line D2: ground -> upper`.' };
-  const v = linesView(line);
+  const fieldName = req.marker?.source.name;
+  if (fieldName !== undefined && !line.at_fields.some((f) => f.source.name === fieldName)) {
+    return { ok: false, message: `Line '${line.name}' was not computed at field '${fieldName}'.` };
+  }
+  const v = linesView(line, lineFieldIndex(line, fieldName));
   if (!v) return { ok: false, message: `Line '${line.name}' has no components to draw; see the Problems view.` };
-  return { ok: true, title: v.title, svg: renderLines(v, theme), csv: linesCsv(v) };
+  return { ok: true, title: v.title, svg: renderLines(v, theme), csv: linesCsv(v, [['file', req.source ?? ''], ['line', line.name]]) };
+}
+
+/** The CSV header facts of a beam: which beam, level and magnet (with its field). */
+export function beamAbout(beam: BeamModel, source: string | undefined): [string, string][] {
+  const about: [string, string][] = [['file', source ?? ''], ['beam', beam.name]];
+  if (beam.level) about.push(['level', `${beam.level.species.name}.${beam.level.name}`]);
+  if (beam.magnet) about.push(['field', `magnet ${beam.magnet.name}${beam.magnet.fieldT ? ` ${beam.magnet.fieldT.value} T` : ''}`]);
+  return about;
 }
 
 const NOWHERE = { start: { line: -1 }, end: { line: -1 } };

@@ -27,21 +27,32 @@ export function levelsViewRangeT(spec: LevelSpec, marker: number | undefined): n
   return upper > 0 ? upper : 1;
 }
 
+/** What the caller may choose: the field range and the unit of the field axis (the CLI's --from/--to/--unit, the panel's range control). */
+export interface LevelsViewOptions {
+  fromT?: number;
+  toT?: number;
+  fieldUnit?: FieldUnit;
+  /** Every named field of the file, marked on the figure. */
+  fieldMarks?: WorkingField[];
+}
+
 export function levelsView(
   level: LevelModel,
   gJ: number | undefined,
   settings: SettingsModel,
   marker?: WorkingField,
-  toT?: number,
+  options: LevelsViewOptions = {},
 ): LevelsView | undefined {
   const spec = engineSpec(level, gJ, settings);
   if (!spec) return undefined;
-  const upper = toT ?? levelsViewRangeT(spec, marker?.tesla);
-  const sweep = sweepLevel(spec, 0, upper, LEVELS_VIEW_POINTS);
+  const lower = options.fromT ?? 0;
+  const upper = options.toT ?? Math.max(levelsViewRangeT(spec, marker?.tesla), lower > 0 ? lower * 2 : 0);
+  if (!(upper > lower)) return undefined;
+  const sweep = sweepLevel(spec, lower, upper, LEVELS_VIEW_POINTS);
   if (sweep.issues.some((i) => i.severity === 'error')) return undefined;
   const data: LevelsViewData = {
     title: `${level.species.name} ${level.name}: ${level.designationText} — sublevel energies`,
-    fieldUnit: unitFor(upper),
+    fieldUnit: options.fieldUnit ?? unitFor(upper),
     fieldsT: sweep.fieldsT,
     curves: sweep.states.map((s, i) => ({
       id: `s${i}`,
@@ -61,10 +72,11 @@ export function levelsView(
     data.markerT = marker.tesla;
     data.markerLabel = `${marker.source.kind} ${marker.source.name}`;
   }
+  if (options.fieldMarks) data.fieldMarks = options.fieldMarks.map((f) => ({ fieldT: f.tesla, label: `${f.source.kind} ${f.source.name}` }));
   return { data, sweep };
 }
 
-function unitFor(upperT: number): FieldUnit {
+export function unitFor(upperT: number): FieldUnit {
   if (upperT < 0.01) return 'G';
   if (upperT < 1) return 'mT';
   return 'T';

@@ -3,12 +3,20 @@ import type { LineResult } from '../eval/resultTypes';
 import type { LinesViewData } from '../render';
 import { fieldText } from '../eval/quantityText';
 
+/** The index of the named field among the line's computed fields, else the first. */
+export function lineFieldIndex(line: LineResult, fieldName: string | undefined): number {
+  const i = fieldName === undefined ? -1 : line.at_fields.findIndex((f) => f.source.name === fieldName);
+  return i >= 0 ? i : 0;
+}
+
 export function linesView(line: LineResult, fieldIndex = 0): LinesViewData | undefined {
   const at = line.at_fields[fieldIndex];
   if (!at || at.components.length === 0) return undefined;
   const where = at.source.name === 'zero' && at.field_T === 0 ? 'zero field' : `${at.source.kind} ${at.source.name}, ${fieldText(at.field_T)}`;
   return {
     title: `line ${line.name}: ${line.lower ?? '?'} → ${line.upper ?? '?'} at ${where}`,
+    fieldT: at.field_T,
+    fieldName: `${at.source.kind} ${at.source.name}`,
     components: at.components.map((c) => ({
       offsetHz: c.offset_Hz,
       strength: c.strength,

@@ -1,0 +1,62 @@
+/** `sublevel render` options for figures: field range and unit, the resonance view, PNG. */
+import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { cli } from './runCli';
+
+const RB = 'examples/rubidium-bias.sublevel';
+
+describe('sublevel render options', () => {
+  it('--from/--to/--unit set the levels range and axis unit; both ends appear in the CSV', () => {
+    const r = cli('render', RB, '--from', '10 G', '--to', '150 G', '--unit', 'G');
+    expect(r.code).toBe(0);
+    expect(r.out).toContain('data-x-unit="G"');
+    expect(r.out).toContain('data-x-domain="0.001,0.015"');
+    const csv = cli('render', RB, '--from', '10 G', '--to', '150 G', '--format', 'csv').out.trim().split('\n');
+    expect(Number(csv[2]!.split(',')[0])).toBeCloseTo(0.001, 15);
+    expect(Number(csv[csv.length - 1]!.split(',')[0])).toBeCloseTo(0.015, 15);
+    // Every named field inside the range is marked (trap 3.23 G is below 10 G: said, not drawn).
+    expect(r.out.match(/data-kind="marker"/g)).toHaveLength(1);
+    expect(r.out).toContain('outside the sweep: field trap');
+  });
+
+  it.each([
+    [['--unit', 'kG'], /--unit/],
+    [['--from', '2 T', '--to', '1 T'], /--to must be a larger field/],
+    [['--to', '3 m'], /--to/],
+    [['--view', 'resonance', '--resonance', 'clok'], /did you mean 'clock'/],
+    [['--format', 'png'], /--out FILE.png/],
+  ])('rejects %j with a usage error', (opts, message) => {
+    const r = cli('render', RB, ...opts);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(message);
+  });
+
+  it('draws the resonance view with the evaluation’s field-insensitive point', () => {
+    const json = JSON.parse(cli('eval', RB, '--format', 'json').out);
+    const fi = json.resonances.find((x: { name: string }) => x.name === 'clock').field_insensitive[0].field_T;
+    const svg = cli('render', RB, '--view', 'resonance', '--resonance', 'clock').out;
+    expect(svg).toContain(`data-kind="insensitive" data-field-t="${Number(fi.toPrecision(12))}"`);
+    const csv = cli('render', RB, '--view', 'resonance', '--format', 'csv').out.split('\n');
+    expect(csv[0]).toBe(`# sublevel resonance: file=${RB}; resonance=clock; transition=F=1, m_F=-1 -> F=2, m_F=+1`);
+    expect(csv[1]).toBe('field_T,frequency_Hz,df_dB_Hz_per_T');
+    // At zero field the pair's frequency is the ground splitting, 6 834 682 610.904 Hz (published measurement).
+    expect(Number(csv[2]!.split(',')[1])).toBeCloseTo(6834682610.904, 2);
+  });
+
+  it.skipIf(!existsSync('/usr/bin/chromium'))('writes PNG at three pixels per SVG unit', () => {
+    const dir = mkdtempSync(path.join(os.tmpdir(), 'sublevel-png-test-'));
+    try {
+      const out = path.join(dir, 'levels.png');
+      const r = cli('render', RB, '--format', 'png', '--out', out);
+      expect(r.code).toBe(0);
+      const png = readFileSync(out);
+      expect(png.subarray(1, 4).toString('latin1')).toBe('PNG');
+      const width = Number(/width="(\d+)"/.exec(cli('render', RB).out)![1]);
+      expect(png.readUInt32BE(16)).toBe(3 * width);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  }, 120_000);
+});
