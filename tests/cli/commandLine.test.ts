@@ -65,7 +65,8 @@ describe('options', () => {
   it('a negative field may follow its option as a separate word', () => {
     const r = cli('sweep', RB, '--level', 'ground', '--from', '-5 mT', '--to', '5mT', '--points', '3');
     expect(r.code).toBe(0);
-    expect(r.out.split('\n').slice(1).map((l) => Number(l.split(',')[0]))).toEqual([-0.005, 0, 0.005]);
+    // Lines: the '# sublevel sweep' comment, the header, then one row per field (docs/csv.md).
+    expect(r.out.split('\n').slice(2).map((l) => Number(l.split(',')[0]))).toEqual([-0.005, 0, 0.005]);
   });
 
   it('a word after -- is a file even if it starts with a dash', () => {
