@@ -117,4 +117,17 @@ beam b
     expect(t).toContain('level e: 1s2 2p ²P°₃/₂');
     expect(t).not.toContain('1s2.2');
   });
+
+  it('a line without components points at the finding that says why, by code and place', () => {
+    const { text } = report('species Li7\n  level g: 2s 2S1/2\n  level t: 2p 2P zeta = 6.7 GHz\nfield f = 100 G\nline L: g -> t\n');
+    expect(text).toContain('  no components: see warning line-to-whole-term at 5:14');
+    expect(text).toMatch(/\n  5:14 warning line-to-whole-term /);
+    expect(text).toContain('diagnostics: 0 errors, 1 warning, 1 note');
+  });
+
+  it('an emission line is headed lower -> upper and says how it was written', () => {
+    const { text } = report('species Na23\n  level g: 3s 2S1/2\n  level p: 3p 2P°3/2\nline L: p -> g\n');
+    expect(text).toContain('line L: g -> p (Na23) (written as emission, upper level first)');
+    expect(text).toMatch(/line centre 508\.848\d* THz \(vacuum wavelength 589\.15\d* nm\)/);
+  });
 });

@@ -7,6 +7,7 @@ import { polarizationSymbol } from '../eval/polarizationName';
 import { fieldInUnit, inWrittenUnit, workingFieldUnit } from '../eval/writtenUnit';
 import type {
   BeamResult,
+  DiagnosticResult,
   EvaluationResult,
   LevelResult,
   LineResult,
@@ -46,11 +47,12 @@ export function textReport(file: string, r: EvaluationResult): string[] {
     );
   }
   for (const b of r.beams) out.push(...beamReport(b));
-  for (const l of r.lines) out.push(...lineReport(l, atFieldText));
+  for (const l of r.lines) out.push(...lineReport(l, atFieldText, r.diagnostics));
   for (const x of r.resonances) out.push(...resonanceReport(x, atFieldText));
   const counts = (sev: string): number => r.diagnostics.filter((d) => d.severity === sev).length;
   out.push('');
-  out.push(`diagnostics: ${counts('error')} errors, ${counts('warning')} warnings, ${counts('info') + counts('hint')} notes`);
+  const plural = (n: number, word: string): string => `${n} ${word}${n === 1 ? '' : 's'}`;
+  out.push(`diagnostics: ${plural(counts('error'), 'error')}, ${plural(counts('warning'), 'warning')}, ${plural(counts('info') + counts('hint'), 'note')}`);
   for (const d of r.diagnostics) out.push(`  ${d.line}:${d.column} ${d.severity} ${d.code} ${d.message}`);
   return out;
 }
@@ -117,8 +119,9 @@ function termReport(t: TermResult, atFieldText: AtFieldText): string[] {
   return out;
 }
 
-function lineReport(l: LineResult, atFieldText: AtFieldText): string[] {
-  const out = ['', `line ${l.name}: ${l.lower ?? '?'} -> ${l.upper ?? '?'}${l.species ? ` (${l.species})` : ''}`];
+function lineReport(l: LineResult, atFieldText: AtFieldText, diagnostics: readonly DiagnosticResult[]): string[] {
+  const written = l.written_as_emission ? ' (written as emission, upper level first)' : '';
+  const out = ['', `line ${l.name}: ${l.lower ?? '?'} -> ${l.upper ?? '?'}${l.species ? ` (${l.species})` : ''}${written}`];
   if (l.g_eff !== undefined) out.push(`  effective Landé factor g_eff = ${trimNumber(l.g_eff, 7)}`);
   if (l.line_centre_Hz !== undefined) {
     // A wavelength only for a positive frequency: a negative one means the levels are the other way round.
@@ -127,7 +130,9 @@ function lineReport(l: LineResult, atFieldText: AtFieldText): string[] {
   }
   const at = l.at_fields[0];
   if (!at) {
-    out.push('  no components: see the diagnostics');
+    // Point only at findings that exist: the ones about this line, by place and code.
+    const why = diagnostics.filter((d) => d.severity !== 'info' && d.severity !== 'hint' && d.message.includes(`line '${l.name}'`));
+    out.push(why.length > 0 ? `  no components: see ${why.map((d) => `${d.severity} ${d.code} at ${d.line}:${d.column}`).join(', ')}` : '  no components were computed');
     return out;
   }
   out.push(`  ${at.components.length} Zeeman components at ${atFieldText(at)} (strength = branching fraction of the upper sublevel):`);
