@@ -62,6 +62,15 @@ describe('options', () => {
     expect(r.err).not.toContain('commands:');
   });
 
+  it('a bare 0 is a field without a unit (as README writes it); any other bare number needs one', () => {
+    const r = cli('sweep', RB, '--level', 'ground', '--from', '0', '--to', '5mT', '--points', '2');
+    expect(r.code).toBe(0);
+    expect(r.out.split('\n').slice(2).map((l) => Number(l.split(',')[0]))).toEqual([0, 0.005]);
+    const bad = cli('sweep', RB, '--level', 'ground', '--from', '2', '--to', '5mT');
+    expect(bad.code).toBe(2);
+    expect(bad.err).toContain('--from needs a unit');
+  });
+
   it('a negative field may follow its option as a separate word', () => {
     const r = cli('sweep', RB, '--level', 'ground', '--from', '-5 mT', '--to', '5mT', '--points', '3');
     expect(r.code).toBe(0);

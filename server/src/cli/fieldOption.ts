@@ -7,6 +7,8 @@ import { UsageError } from './args';
 export const MAX_CLI_FIELD_T = MAX_FIELD_T;
 
 export function readFieldOption(name: string, text: string): number {
+  // Zero is zero in every unit: `--from 0` needs none (as the help and README write it).
+  if (/^\s*[+-]?(?:0+(?:\.0*)?|\.0+)\s*$/.test(text)) return 0;
   const r = readQuantityArgument(text, 'flux-density', `--${name}`);
   if (r.si === undefined) throw new UsageError(r.message ?? `--${name}: cannot read '${text}'`);
   if (!Number.isFinite(r.si) || Math.abs(r.si) > MAX_CLI_FIELD_T) {

@@ -2,6 +2,7 @@
  * Levels diagram data for one level: an exact sweep from zero field to a field that shows the
  * change of regime, with the file's working field marked.
  */
+import { levelDesignationText } from '../eval/designationText';
 import { regime, sweepLevel, type LevelSpec, type SweepResult } from '../physics/engine';
 import { BOHR_MAGNETON_HZ_PER_T } from '../physics/constants';
 import type { LevelModel, SettingsModel } from '../model/types';
@@ -51,7 +52,7 @@ export function levelsView(
   const sweep = sweepLevel(spec, lower, upper, LEVELS_VIEW_POINTS);
   if (sweep.issues.some((i) => i.severity === 'error')) return undefined;
   const data: LevelsViewData = {
-    title: `${level.species.name} ${level.name}: ${level.designationText} — sublevel energies`,
+    title: `${level.species.name} ${level.name}: ${levelDesignationText(level)} — sublevel energies`,
     fieldUnit: options.fieldUnit ?? unitFor(upper),
     fieldsT: sweep.fieldsT,
     curves: sweep.states.map((s, i) => ({
