@@ -21,6 +21,12 @@ describe('sublevel render options', () => {
     expect(r.out).toContain('outside the sweep: field trap');
   });
 
+  it('without --unit the field axis follows the unit family the file wrote its field in', () => {
+    // rubidium-bias writes gauss; marking the 120 G probe puts the range above 0.01 T, where the size alone chose mT.
+    expect(cli('render', RB).out).toContain('data-x-unit="G"');
+    expect(cli('render', RB, '--field', 'probe').out).toContain('data-x-unit="G"');
+  });
+
   it.each([
     [['--unit', 'kG'], /--unit/],
     [['--from', '2 T', '--to', '1 T'], /--to must be a larger field/],

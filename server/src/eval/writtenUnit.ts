@@ -25,7 +25,7 @@ export function inWrittenUnit(si: number | null | undefined, dimension: Dimensio
 }
 
 /** True for the gauss family (G, mG, kG, gauss); the tesla family otherwise. */
-function isGaussUnit(unit: string): boolean {
+export function isGaussUnit(unit: string): boolean {
   return /^(?:[mkuµμ]?G|(?:milli|kilo|micro)?gauss)$/.test(unit);
 }
 

@@ -3,6 +3,7 @@
  * change of regime, with the file's working field marked.
  */
 import { levelDesignationText } from '../eval/designationText';
+import { isGaussUnit } from '../eval/writtenUnit';
 import { regime, sweepLevel, type LevelSpec, type SweepResult } from '../physics/engine';
 import { BOHR_MAGNETON_HZ_PER_T } from '../physics/constants';
 import type { LevelModel, SettingsModel } from '../model/types';
@@ -53,7 +54,7 @@ export function levelsView(
   if (sweep.issues.some((i) => i.severity === 'error')) return undefined;
   const data: LevelsViewData = {
     title: `${level.species.name} ${level.name}: ${levelDesignationText(level)} — sublevel energies`,
-    fieldUnit: options.fieldUnit ?? unitFor(upper),
+    fieldUnit: options.fieldUnit ?? unitFor(upper, marker?.unit),
     fieldsT: sweep.fieldsT,
     curves: sweep.states.map((s, i) => ({
       id: `s${i}`,
@@ -77,7 +78,13 @@ export function levelsView(
   return { data, sweep };
 }
 
-export function unitFor(upperT: number): FieldUnit {
+/**
+ * The field axis's unit: the family the file wrote its field in (a lab that writes gauss reads
+ * gauss), else by the size of the range.
+ */
+export function unitFor(upperT: number, writtenUnit?: string): FieldUnit {
+  if (writtenUnit !== undefined && isGaussUnit(writtenUnit)) return 'G';
+  if (writtenUnit === 'mT' && upperT < 1) return 'mT';
   if (upperT < 0.01) return 'G';
   if (upperT < 1) return 'mT';
   return 'T';
