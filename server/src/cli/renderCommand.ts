@@ -3,7 +3,6 @@
  * the same diagrams the editor panel shows, as standalone SVG for reports (light palette), as PNG at print resolution,
  * or the numbers behind them as CSV.
  */
-import { suggestNames } from '../format/didYouMean';
 import { diagramFor, type DiagramRequest, type DiagramView } from '../views/diagram';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
 import { ROOT_OPTION, rootOption } from './files';
@@ -14,7 +13,7 @@ import { writeOutputFile } from './output';
 import { PNG_SCALE, svgToPng } from './pngExport';
 import { readFieldOption } from './fieldOption';
 import type { FieldUnit } from '../render';
-import { selectBeam, selectField, selectLevel } from './selectors';
+import { selectBeam, selectField, selectLevel, selectName } from './selectors';
 
 export const RENDER_VIEWS = ['levels', 'pattern', 'lines', 'resonance'] as const;
 const FORMATS = ['svg', 'csv', 'png'] as const;
@@ -71,24 +70,10 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
     if (model.beams.length === 0) throw new FileProblemError(file, [cliProblem('nothing-to-compute', 'No beam to draw: add a `beam` block with level, source, slits, magnet and drift')]);
     req.beam = selectBeam(model, stringOption(args, 'beam'));
   }
-  const line = stringOption(args, 'line');
-  if (line !== undefined) {
-    const names = model.lines.map((l) => l.name);
-    if (!names.includes(line)) {
-      const hint = suggestNames(line, names);
-      throw new UsageError(`no line named '${line}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : ''}`);
-    }
-    req.lineName = line;
-  }
-  const resonance = stringOption(args, 'resonance');
-  if (resonance !== undefined) {
-    const names = model.resonances.map((r) => r.name);
-    if (!names.includes(resonance)) {
-      const hint = suggestNames(resonance, names);
-      throw new UsageError(`no resonance named '${resonance}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : ''}`);
-    }
-    req.resonanceName = resonance;
-  }
+  const line = selectName('line', model.lines.map((l) => l.name), stringOption(args, 'line'));
+  if (line !== undefined) req.lineName = line;
+  const resonance = selectName('resonance', model.resonances.map((r) => r.name), stringOption(args, 'resonance'));
+  if (resonance !== undefined) req.resonanceName = resonance;
   const d = diagramFor(analysis, req);
   if (!d.ok) {
     const listed = listErrorsFirst(file, analysis, ctx);

@@ -34,3 +34,8 @@ export function selectField(model: SetupModel, wanted: string | undefined): Work
   if (wanted === undefined) return fields[0];
   return pick('field', fields, (f) => [f.source.name], wanted);
 }
+
+/** The name of a line (or resonance) of the file, checked; undefined when none is asked for. */
+export function selectName(kind: 'line' | 'resonance', names: string[], wanted: string | undefined): string | undefined {
+  return wanted === undefined ? undefined : pick(kind, names, (n) => [n], wanted);
+}
