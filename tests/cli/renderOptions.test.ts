@@ -21,6 +21,12 @@ describe('sublevel render options', () => {
     expect(r.out).toContain('outside the sweep: field trap');
   });
 
+  it('the lines figure states its field in the unit the file wrote', () => {
+    const svg = cli('render', RB, '--view', 'lines').out;
+    expect(svg).toContain('at field trap, 3.23 G');
+    expect(svg).toContain('(B = 3.23 G)');
+  });
+
   it('without --unit the field axis follows the unit family the file wrote its field in', () => {
     // rubidium-bias writes gauss; marking the 120 G probe puts the range above 0.01 T, where the size alone chose mT.
     expect(cli('render', RB).out).toContain('data-x-unit="G"');

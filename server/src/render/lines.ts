@@ -194,7 +194,7 @@ function groupedPanels(
       el('g', { class: 'sl-panel', 'data-kind': 'group', 'data-label': heading, 'data-centre-hz': dataNum(g.centreHz), 'data-x-domain': `${dataNum(-half)},${dataNum(half)}`, 'data-x-range': `${px(box.left)},${px(box.right)}` }, parts),
     );
   });
-  const unitNote = `top scale: offset in μB·B/h = ${formatSI(z, 'Hz')} (B = ${formatSI(d.fieldT ?? 0, 'T')})`;
+  const unitNote = `top scale: offset in μB·B/h = ${formatSI(z, 'Hz')} (B = ${d.fieldText ?? formatSI(d.fieldT ?? 0, 'T')})`;
   body.push(el('text', { class: 'sl-note', x: right, y: height - 8, 'text-anchor': 'end', 'font-size': 10, fill: pal.muted }, text(unitNote)));
   const desc = `Stick spectrum of ${comps.length} line components (${counts.join(', ')}) in ${n} groups, one panel each on a common scale of ±${formatIn(half, unit)} about the group centre: ${groups
     .map((g) => signed(g.centreHz, formatSI(g.centreHz, 'Hz')))

@@ -3,6 +3,7 @@
  * labels stay short ("6.8" on a GHz axis instead of "6 834 682 610").
  */
 import { format } from 'd3-format';
+import { prefixedText, trimNumber } from '../eval/quantityText';
 import type { FieldUnit } from './viewData';
 
 export interface DisplayUnit {
@@ -46,20 +47,19 @@ export function fieldDisplayUnit(unit: FieldUnit): DisplayUnit {
   }
 }
 
-const fourFigures = format('.4~s');
+/** Figures set numbers with the true minus sign (U+2212); the numbers themselves come from the one formatter. */
+function figureMinus(text: string): string {
+  return text.replace(/(^|[\s(])-(?=\d)/g, '$1−');
+}
 
 /** A value with an SI prefix and unit for titles and read-outs: 6.835e9, 'Hz' → "6.835 GHz". */
 export function formatSI(value: number, unit: string): string {
   if (!Number.isFinite(value)) return `— ${unit}`;
-  if (value === 0) return `0 ${unit}`;
-  const s = fourFigures(value);
-  // d3 appends the prefix letter directly; split it off so a space separates number and unit.
-  const m = /^(.*?)([yzafpnµmkMGTPEZY]?)$/.exec(s);
-  return m ? `${m[1]} ${m[2]}${unit}` : `${s} ${unit}`;
+  return figureMinus(prefixedText(value, unit, { digits: 4 }));
 }
 
 /** A value in a fixed display unit with 4 significant figures: 0.45 T, 4500 G. */
 export function formatIn(value: number, unit: DisplayUnit): string {
   if (!Number.isFinite(value)) return `— ${unit.symbol}`;
-  return `${format('.4~g')(value / unit.factor)} ${unit.symbol}`;
+  return `${figureMinus(trimNumber(value / unit.factor, 4))} ${unit.symbol}`;
 }

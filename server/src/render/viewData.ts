@@ -87,6 +87,8 @@ export interface LinesViewData {
   /** The field the components were computed at, and its name in the file. */
   fieldT?: number;
   fieldName?: string;
+  /** The field as the file wrote it (`3.23 G`), for the figure's notes. */
+  fieldText?: string;
   /** Unit of the offset axis in Hz (1e6 draws MHz); chosen from the data when absent. */
   unitHz?: number;
 }

@@ -85,7 +85,9 @@ function drawn(analysis: Analysis, model: SetupModel, req: DiagramRequest): Diag
   if (fieldName !== undefined && !line.at_fields.some((f) => f.source.name === fieldName)) {
     return { ok: false, message: `Line '${line.name}' was not computed at field '${fieldName}'.` };
   }
-  const v = linesView(line, lineFieldIndex(line, fieldName));
+  const index = lineFieldIndex(line, fieldName);
+  const written = workingFields(model).find((f) => f.source.name === line.at_fields[index]?.source.name)?.unit;
+  const v = linesView(line, index, written);
   if (!v) return { ok: false, message: `Line '${line.name}' has no components to draw; see the Problems view.` };
   return { ok: true, title: v.title, svg: renderLines(v, theme), csv: linesCsv(v, [['file', req.source ?? ''], ['line', line.name]]) };
 }

@@ -1,7 +1,7 @@
 /** Line-components diagram data: the stick spectrum of one line at one working field. */
 import type { LineResult } from '../eval/resultTypes';
 import type { LinesViewData } from '../render';
-import { fieldText } from '../eval/quantityText';
+import { fieldInUnit } from '../eval/writtenUnit';
 
 /** The index of the named field among the line's computed fields, else the first. */
 export function lineFieldIndex(line: LineResult, fieldName: string | undefined): number {
@@ -9,13 +9,16 @@ export function lineFieldIndex(line: LineResult, fieldName: string | undefined):
   return i >= 0 ? i : 0;
 }
 
-export function linesView(line: LineResult, fieldIndex = 0): LinesViewData | undefined {
+/** `writtenUnit`: the unit the file wrote the field in, so the figure says `3.23 G` back. */
+export function linesView(line: LineResult, fieldIndex = 0, writtenUnit?: string): LinesViewData | undefined {
   const at = line.at_fields[fieldIndex];
   if (!at || at.components.length === 0) return undefined;
-  const where = at.source.name === 'zero' && at.field_T === 0 ? 'zero field' : `${at.source.kind} ${at.source.name}, ${fieldText(at.field_T)}`;
+  const field = fieldInUnit(at.field_T, { unit: writtenUnit });
+  const where = at.source.name === 'zero' && at.field_T === 0 ? 'zero field' : `${at.source.kind} ${at.source.name}, ${field}`;
   return {
     title: `line ${line.name}: ${line.lower ?? '?'} → ${line.upper ?? '?'} at ${where}`,
     fieldT: at.field_T,
+    fieldText: field,
     fieldName: `${at.source.kind} ${at.source.name}`,
     components: at.components.map((c) => ({
       offsetHz: c.offset_Hz,
