@@ -115,9 +115,19 @@ export class Workbench {
 
   /** Quick Fix menu (Ctrl+.) at the cursor: picks the entry whose label contains `label`. */
   async applyQuickFix(label: string): Promise<void> {
-    await this.page.keyboard.press('Control+.');
     const entry = this.page.locator('.action-widget .monaco-list-row', { hasText: label }).first();
-    await entry.waitFor();
+    // The menu lists what the server had when it opened: before the diagnostics for this line have
+    // arrived it is empty and closes, so ask again (as a person would) until the fix is there.
+    for (let attempt = 1; ; attempt++) {
+      await this.page.keyboard.press('Control+.');
+      try {
+        await entry.waitFor({ timeout: 5_000 });
+        break;
+      } catch (e) {
+        if (attempt >= 5) throw e;
+        await this.page.keyboard.press('Escape');
+      }
+    }
     await entry.click();
     await entry.waitFor({ state: 'hidden' });
   }
