@@ -56,6 +56,9 @@ export function resolvingOptions(input: PatternInput, present: DetectorPattern):
   if (groups.length < 2 || present.allResolved) return out;
   const geo = input.geometry;
   const sign = geo.gradientTPerM < 0 ? -1 : 1;
+  const keep = (parameter: AdviceParameter, pick: Trial | undefined, value = pick?.value): void => {
+    if (pick && value !== undefined) out.options.push({ parameter, value, worstDipRatio: worstDip(pick.pattern), resolvesAll: pick.pattern.allResolved });
+  };
   const at = (change: Partial<PatternInput['geometry']>, source?: SpeedDistribution): DetectorPattern =>
     computePattern({ ...input, geometry: { ...geo, ...change }, ...(source ? { source } : {}) }, groups, false);
 
@@ -75,15 +78,14 @@ export function resolvingOptions(input: PatternInput, present: DetectorPattern):
         return;
       }
     }
-    out.options.push({ parameter, value: scale * pick.value, worstDipRatio: worstDip(pick.pattern), resolvesAll: pick.pattern.allResolved });
+    keep(parameter, pick, scale * pick.value);
   };
   grown('gradient', Math.abs(geo.gradientTPerM));
   grown('magnetLength', geo.magnetLengthM);
   grown('drift', geo.driftM > 0 ? geo.driftM : geo.magnetLengthM / 10);
 
   const narrowed = (parameter: 'slits' | 'detector', change: (f: number) => Partial<PatternInput['geometry']>): void => {
-    const pick = choose(scan(NARROWING, (f) => at(change(f))), presentWorst);
-    if (pick) out.options.push({ parameter, value: pick.value, worstDipRatio: worstDip(pick.pattern), resolvesAll: pick.pattern.allResolved });
+    keep(parameter, choose(scan(NARROWING, (f) => at(change(f))), presentWorst));
   };
   narrowed('slits', (f) => ({ slit1M: geo.slit1M * f, slit2M: geo.slit2M * f }));
   if (geo.detectorWidthM > 0) narrowed('detector', (f) => ({ detectorWidthM: geo.detectorWidthM * f }));
@@ -92,8 +94,7 @@ export function resolvingOptions(input: PatternInput, present: DetectorPattern):
   const mean = present.speed?.meanSpeed;
   if (spread !== undefined && mean !== undefined && mean > 0) {
     const values = SPREADS.filter((s) => s < spread * 0.9);
-    const pick = choose(scan(values, (s) => at({}, { kind: 'jet', meanSpeed: mean, relativeSpread: s })), presentWorst);
-    if (pick) out.options.push({ parameter: 'speedSpread', value: pick.value, worstDipRatio: worstDip(pick.pattern), resolvesAll: pick.pattern.allResolved });
+    keep('speedSpread', choose(scan(values, (s) => at({}, { kind: 'jet', meanSpeed: mean, relativeSpread: s })), presentWorst));
   }
   return out;
 }
