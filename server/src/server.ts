@@ -117,6 +117,8 @@ function startLanguageServer(): void {
     if (settings !== undefined) globalSettings = settings;
     settingsByUri.clear();
     if (client.inlayHintRefresh) refreshInlayHints();
+    // The regime-notes setting changes what the diagnostics show.
+    recheck(documents.all().map((d) => d.uri));
   });
 
   // ---- request plumbing -----------------------------------------------------------------------
@@ -232,7 +234,7 @@ function startLanguageServer(): void {
     const svc = await loadService();
     const doc = documents.get(uri);
     if (!doc) return;
-    const { items, complete } = svc.diagnostics(doc);
+    const { items, complete } = svc.diagnostics(doc, await settingsFor(uri));
     await connection.sendDiagnostics({ uri, version: doc.version, diagnostics: items });
     if (!complete) scheduleEvaluation(doc);
   }
@@ -291,11 +293,12 @@ function startLanguageServer(): void {
   connection.languages.diagnostics.on(async (params, token): Promise<DocumentDiagnosticReport> => {
     const uri = params.textDocument.uri;
     const empty: DocumentDiagnosticReport = { kind: 'full', items: [] };
-    return run('diagnostics', uri, token, empty, (svc, doc): DocumentDiagnosticReport => {
-      const { items, complete } = svc.diagnostics(doc);
+    return run('diagnostics', uri, token, empty, async (svc, doc, settings): Promise<DocumentDiagnosticReport> => {
+      const shown = await settings();
+      const { items, complete } = svc.diagnostics(doc, shown);
       // The id says which version (and which analysis of it, when a used file changed) and whether the evaluation's problems are in.
       const revision = svc.revision(doc);
-      const resultId = `${doc.version}${revision > 0 ? `.${revision}` : ''}${complete ? '' : '-partial'}`;
+      const resultId = `${doc.version}${revision > 0 ? `.${revision}` : ''}${complete ? '' : '-partial'}${shown.regimeNotes.enabled ? '' : '-quiet'}`;
       if (!complete) scheduleEvaluation(doc);
       return params.previousResultId === resultId ? { kind: 'unchanged', resultId } : { kind: 'full', resultId, items };
     });

@@ -49,13 +49,13 @@ describe('beam results through the setup file', () => {
     expect(c! - b!).toBeCloseTo(b! - a!, 6);
   });
 
-  it('flags unresolvable peaks at the gradient and offers the smallest gradient that resolves them', () => {
+  it('flags unresolvable peaks at the gradient and offers the smallest gradient that resolves them, with its dip', () => {
     const weak = geometry.replace('gradient = 100 T/m', 'gradient = 0.5 T/m');
     const { a, beam } = beamOf('species X\n  mass = 52 u\n  level g: 3S1\n' + weak);
     expect(beam.all_resolved).toBe(false);
     const p = a.problems.find((x) => x.code === 'beam-unresolved')!;
     expect(p.range.start.line).toBe(6); // the magnet's gradient setting
-    expect(p.message).toMatch(/a gradient of at least .* or a magnet of at least/);
+    expect(p.message).toMatch(/a gradient of [\d.]+ T\/m gives \d+ % and resolves every pair; a magnet of .* gives/);
     const g = p.data!.resolvingGradientTPerM as number;
     expect(g).toBeGreaterThan(0.5);
     // Feeding the suggested gradient back in resolves the pattern.

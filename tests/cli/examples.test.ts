@@ -41,7 +41,12 @@ describe('sublevel check on the bundled examples', () => {
     const doc = JSON.parse(r.out);
     expect(doc.format).toBe('sublevel-check');
     expect(doc.files[0].diagnostics.filter((d: { severity: string }) => d.severity !== 'info')).toHaveLength(8);
-    expect(doc.files[0].diagnostics[0]).toMatchObject({ code: 'quadrupole-cannot-act', line: 5, column: 31 });
+    // One regime note for the level (on its name), then the quadrupole on the same line.
+    expect(doc.files[0].diagnostics.slice(0, 2)).toMatchObject([
+      { code: 'zeeman-not-linear', line: 5, column: 9 },
+      { code: 'quadrupole-cannot-act', line: 5, column: 31 },
+    ]);
+    expect(doc.files[0].diagnostics.filter((d: { code: string }) => d.code.startsWith('zeeman-'))).toHaveLength(1);
   });
 });
 

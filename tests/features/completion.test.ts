@@ -2,6 +2,7 @@ import type { CompletionItem } from 'vscode-languageserver-types';
 import { describe, expect, it } from 'vitest';
 import { completion } from '../../server/src/features/completion';
 import { BLOCK_WORDS, LEVEL_KEYS } from '../../server/src/format/schema';
+import { BUILTIN_SPECIES } from '../../server/src/physics/species';
 import { applyEdits, atCursor } from './helpers';
 
 interface Case {
@@ -20,6 +21,9 @@ const CASES: Case[] = [
   { name: 'level keys once a level is above', text: 'species Na23\n  level g: 3s 2S1/2\n  |', has: ['A', 'B', 'C', 'g_J', 'energy', 'level'] },
   { name: 'beam keys', text: 'beam b\n  so|', has: ['species', 'level', 'source', 'slits', 'magnet', 'drift', 'detector'] },
   { name: 'built-in species after `species`', text: 'species R|', has: ['Rb87', 'Rb85', 'Na23', 'Cs133'] },
+  { name: 'built-in species under their canonical names only', text: 'species |', has: ['H', 'D', 'Rb87', 'Yb174'], hasNot: ['H-1', '¹H', 'protium', 'rubidium-87', '87Rb'] },
+  { name: '`field` once inside a magnet (as its key)', text: 'magnet m\n  |', has: ['field', 'gradient', 'magnet', 'beam'] },
+  { name: 'the level after `->` is not the one before it', text: 'species Na23\n  level g: 3s 2S1/2\n  level e: 3p 2P°3/2\nline D1: e -> |', exactly: ['g'] },
   { name: 'flux-density units after a field value', text: 'field f = 3.2 |', has: ['T', 'mT', 'G'], hasNot: ['T/m', 'cm', 'MHz'] },
   { name: 'gradient units after a gradient', text: 'magnet m\n  gradient = 180 |', has: ['T/m', 'G/cm'], hasNot: ['T', 'm'] },
   { name: 'length units after a length', text: 'magnet m\n  length = 8 c|', has: ['cm', 'mm', 'um', 'm'], hasNot: ['T'] },
@@ -37,9 +41,9 @@ const CASES: Case[] = [
     exactly: ['g', 'e'],
   },
   {
-    name: 'level names after the arrow stay in the species of the first level',
+    name: 'level names after the arrow stay in the species of the first level, without the first level',
     text: 'species Na23\n  level g: 3s 2S1/2\n  level e: 3p 2P°3/2\nspecies K39\n  level k: 4s 2S1/2\nline D2: g -> |',
-    exactly: ['g', 'e'],
+    exactly: ['e'],
   },
   {
     name: 'a level name used by two species is offered qualified',
@@ -96,6 +100,26 @@ describe('completion', () => {
       for (const l of c.hasNot ?? []) expect(got).not.toContain(l);
     });
   }
+
+  it('lists each built-in species once, canonical name first, with mass, I and ground level as detail', () => {
+    const { analysis, position } = atCursor('species |');
+    const items = completion(analysis, position);
+    expect(items.map((i) => i.label)).toEqual(BUILTIN_SPECIES.map((s) => s.id));
+    const rb87 = items.find((i) => i.label === 'Rb87')!;
+    // Rb-87: atomic mass 86.909180 u (atomic mass evaluation, from memory), I = 3/2, ground 5s ²S₁/₂.
+    expect(rb87.detail).toMatch(/^86\.90918\d* u · I = 3\/2 · ground 5s 2S1\/2$/);
+    // The other spellings only feed the filter.
+    expect(rb87.filterText).toContain('rubidium-87');
+    expect(rb87.filterText).toContain('87Rb');
+    expect(items.find((i) => i.label === 'H')!.filterText).toContain('protium');
+  });
+
+  it('offers `field` once in a magnet block', () => {
+    const { analysis, position } = atCursor('magnet m\n  |');
+    const fields = completion(analysis, position).filter((i) => i.label === 'field');
+    expect(fields).toHaveLength(1);
+    expect(fields[0]!.detail).toBe('magnet setting');
+  });
 
   it("marks the Hund's-rules ground level of the configuration", () => {
     // Hund's rules, p² less than half full: ³P₀ is the ground level (textbook; e.g. carbon 2p² ³P₀).

@@ -18,13 +18,13 @@ describe('diagnostics', () => {
     ].join('\n');
     const ds = diagnostics(analysisOf(text), URI);
     expect(ds.map((d) => `${d.range.start.line + 1}:${d.range.start.character + 1} ${String(d.code)}`)).toEqual([
+      '2:9 zeeman-not-linear',
       '2:31 quadrupole-cannot-act',
       '3:23 term-j-out-of-range',
-      '5:11 zeeman-not-linear',
       '6:17 unit-wrong-dimension',
       '8:1 syntax-unknown-statement',
     ]);
-    const [quadrupole, j, regime] = ds;
+    const [regime, quadrupole, j] = ds;
     expect(quadrupole!.severity).toBe(DiagnosticSeverity.Warning);
     expect(quadrupole!.tags).toEqual([DiagnosticTag.Unnecessary]);
     expect(quadrupole!.data).toEqual({ removeSetting: 'B' });
@@ -32,6 +32,8 @@ describe('diagnostics', () => {
     expect(j!.message).toContain('J = 5/2 is impossible');
     expect(j!.data).toEqual({ suggestions: ['1/2', '3/2'] });
     expect(regime!.severity).toBe(DiagnosticSeverity.Information);
+    // The field that puts the level past the linear regime is pointed at.
+    expect(regime!.relatedInformation?.map((r) => r.location.range.start.line + 1)).toEqual([5]);
     for (const d of ds) expect(d.source).toBe('sublevel');
   });
 

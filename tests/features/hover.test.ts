@@ -215,7 +215,7 @@ describe('hover on a beam', () => {
     const { analysis, position } = atCursor(text);
     const shown = plain(hoverText(hover(analysis, position)));
     expect(shown).toContain('source: single speed 1000 m/s');
-    expect(shown).toMatch(/At the detector: 4 peaks, not all resolved\. Any one of a gradient of at least \d+ T\/m/);
+    expect(shown).toMatch(/At the detector: 4 peaks, not all resolved\. Worst dip now \d+ % \(resolved at ≤ 80 %\); computed on this setup: a gradient of \d+ T\/m gives \d+ % and resolves every pair/);
     // Single speed, hard-edged magnet (textbook kinematics): z = μ b / (m v²) · (L²/2 + L·D), with the moment the
     // evaluation reports for |F=1, m_F=+1> and the Li-7 mass 7.016003437 u (built-in, NIST masses; u from CODATA 2022).
     const s = analysis.result!.beams[0]!.sublevels[0]!;

@@ -36,12 +36,21 @@ describe('language service', () => {
     expect(second.items.map((i) => i.code)).toEqual(['zeeman-not-linear']);
   });
 
+  it('hides the regime notes when the setting says so, and only them', async () => {
+    const svc = new LanguageService();
+    const d = doc(`${LI}magent spare\n`);
+    await svc.evaluate(d);
+    expect(svc.diagnostics(d).items.map((i) => i.code)).toEqual(['zeeman-not-linear', 'syntax-unknown-statement']);
+    const quiet = readSettings({ regimeNotes: { enabled: false } });
+    expect(svc.diagnostics(d, quiet).items.map((i) => i.code)).toEqual(['syntax-unknown-statement']);
+  });
+
   it('carries the evaluation’s diagnostics over to the next version until its own evaluation', async () => {
     const svc = new LanguageService();
     await svc.evaluate(doc(LI, 1));
     const next = svc.diagnostics(doc(`# a new first line\n${LI}`, 2));
     expect(next.complete).toBe(false);
-    expect(next.items.map((i) => `${i.range.start.line} ${String(i.code)}`)).toEqual(['3 zeeman-not-linear']);
+    expect(next.items.map((i) => `${i.range.start.line} ${String(i.code)}`)).toEqual(['2 zeeman-not-linear']);
   });
 
   it('evaluates only the newest version of a document', async () => {
@@ -112,7 +121,9 @@ describe('language service', () => {
     expect(readSettings({ inlayHints: { enabled: 'yes' }, hover: { sublevelRows: -3, levelTables: 2 } })).toEqual({
       inlayHints: { enabled: true },
       hover: { sublevelRows: DEFAULT_SETTINGS.hover.sublevelRows, levelTables: 2 },
+      regimeNotes: { enabled: true },
     });
+    expect(readSettings({ regimeNotes: { enabled: false } }).regimeNotes.enabled).toBe(false);
     expect(readSettings({ hover: { sublevelRows: 1e9 } }).hover.sublevelRows).toBe(500);
   });
 });

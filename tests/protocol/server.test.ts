@@ -128,6 +128,31 @@ describe('the built server over JSON-RPC, diagnostics pushed', () => {
   });
 });
 
+describe('the built server over JSON-RPC, regime notes switched off', () => {
+  let client: TestClient;
+  beforeAll(async () => {
+    client = await startClient(
+      { textDocument: { diagnostic: { dynamicRegistration: false } }, workspace: { diagnostics: { refreshSupport: true }, configuration: true } },
+      { 'workspace/configuration': () => [{ regimeNotes: { enabled: false } }] },
+    );
+    await open(client, URI, TEXT);
+  }, 60_000);
+  afterAll(async () => {
+    if (client && client.process.exitCode === null) client.process.kill();
+  });
+
+  it('leaves the regime note out of the full diagnostics, and keeps the others', async () => {
+    const pull = (): Promise<DocumentDiagnosticReport> =>
+      client.connection.sendRequest('textDocument/diagnostic', { textDocument: { uri: URI } }) as Promise<DocumentDiagnosticReport>;
+    await pull();
+    const deadline = Date.now() + 20_000;
+    while (!client.requests.includes('workspace/diagnostic/refresh') && Date.now() < deadline) await new Promise((r) => setTimeout(r, 50));
+    const full = await pull();
+    expect(full).toMatchObject({ kind: 'full', resultId: '1-quiet' });
+    if (full.kind === 'full') expect(codes(full.items)).toEqual(['name-unknown', 'quadrupole-cannot-act']);
+  });
+});
+
 describe('the built server over JSON-RPC, diagnostics pulled', () => {
   let client: TestClient;
   beforeAll(async () => {

@@ -1,25 +1,30 @@
 /**
  * Beam results: deflection of every sublevel, the detector pattern's peaks, a resolvability
- * verdict per neighbouring pair, and — when peaks merge — the smallest gradient that separates them.
+ * verdict per neighbouring pair, and — when peaks merge — the changes computed to separate them.
  */
 import type { GJLookup } from './gJLookup';
 import {
   beamCautions,
   DEFAULT_DIP_CRITERION,
   detectorPattern,
-  smallestResolvingDrift,
-  smallestResolvingGradient,
-  smallestResolvingMagnetLength,
+  resolvingOptions,
+  type AdviceParameter,
   type DetectorPattern,
 } from '../physics/beam';
 import { BOHR_MAGNETON } from '../physics/constants';
 import type { BeamModel } from '../model/types';
 import { beamInputs } from './beamInput';
 import { resolvingAdvice } from './resolvingAdvice';
-import type { BeamResult } from './resultTypes';
+import type { BeamResult, ResolvingChange } from './resultTypes';
 
-/** The inverse solvers look for a resolving value up to this many times the file's value. */
-const SEARCH_FACTOR = 100;
+const CHANGE_NAME: Record<AdviceParameter, ResolvingChange> = {
+  gradient: 'gradient',
+  magnetLength: 'magnet_length',
+  drift: 'drift',
+  slits: 'slits',
+  detector: 'detector',
+  speedSpread: 'speed_spread',
+};
 
 export interface BeamEvaluation {
   result: BeamResult;
@@ -83,14 +88,15 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
   };
   if (pattern.detectorFraction !== undefined) result.detector_fraction = pattern.detectorFraction;
   if (searchResolving && !pattern.allResolved && pattern.peaks.length > 1) {
-    const geo = inputs.input.geometry;
-    const g = smallestResolvingGradient(inputs.input, { upperBound: Math.abs(geo.gradientTPerM) * SEARCH_FACTOR });
-    result.resolving_gradient_T_per_m = g.value ?? null;
-    const l = smallestResolvingMagnetLength(inputs.input, { upperBound: geo.magnetLengthM * SEARCH_FACTOR });
-    result.resolving_magnet_length_m = l.value ?? null;
-    const d = smallestResolvingDrift(inputs.input, { upperBound: Math.max(geo.driftM, geo.magnetLengthM) * SEARCH_FACTOR, lowerBound: 0 });
-    result.resolving_drift_m = d.value ?? null;
-    const advice = resolvingAdvice(result);
+    const found = resolvingOptions(inputs.input, pattern);
+    const options = found.options.map((o) => ({ change: CHANGE_NAME[o.parameter], value: o.value, worst_dip_ratio: o.worstDipRatio, resolves_all: o.resolvesAll }));
+    const resolving = (change: ResolvingChange): number | null => options.find((o) => o.change === change && o.resolves_all)?.value ?? null;
+    result.resolving_gradient_T_per_m = resolving('gradient');
+    result.resolving_magnet_length_m = resolving('magnet_length');
+    result.resolving_drift_m = resolving('drift');
+    result.worst_dip_ratio = found.presentWorstDipRatio;
+    result.resolving_options = options;
+    const advice = resolvingAdvice(result, inputs.input.geometry);
     if (advice) result.resolving_advice = advice;
   }
   return { result, pattern, issues };

@@ -116,7 +116,7 @@ function onceEach(notes: EvaluationNote[]): EvaluationNote[] {
 
 function noteToProblem(n: EvaluationNote): Problem {
   const rule = (EVAL_RULES as Record<string, { severity: Problem['severity'] }>)[n.code];
-  return { code: n.code, severity: rule?.severity ?? n.severity ?? 'info', message: n.message, range: n.range };
+  return { code: n.code, severity: rule?.severity ?? n.severity ?? 'info', message: n.message, range: n.range, ...(n.related ? { related: n.related } : {}) };
 }
 
 export function sortProblems(problems: Problem[]): Problem[] {

@@ -11,7 +11,7 @@ import type { EVAL_RULES } from './evalCodes';
 import { exactAtField } from './exactAtField';
 import { halfText, signedHalfText } from './halves';
 import { hyperfineSpec } from './levelSpec';
-import { regimeNotes } from './regimeNotes';
+import { engineNotes, regimeNote, type FieldPoint } from './regimeNotes';
 import type { ExactSublevelResult, FieldPointResult, GFactorResult, HyperfineResult, LevelResult, SourcedNumber, SublevelResult } from './resultTypes';
 
 export interface WorkingField {
@@ -30,6 +30,7 @@ export interface EvaluationNote {
   severity?: 'error' | 'warning' | 'info';
   message: string;
   range: Range;
+  related?: { message: string; range: Range }[];
 }
 
 export function evaluateLevel(level: LevelModel, settings: SettingsModel, fields: WorkingField[], notes: EvaluationNote[]): LevelResult | undefined {
@@ -39,6 +40,10 @@ export function evaluateLevel(level: LevelModel, settings: SettingsModel, fields
   const twoI = level.species.twoI.value;
   const gJ = gFactor(level, settings);
   const hyperfine = twoI > 0 ? hyperfineOf(level, gJ.used, twoJ, twoI) : undefined;
+  const points: FieldPoint[] = [];
+  const atFields = fields.map((f) => pairLinear({ ...linearAt(f, gJ.used, level.species.gI.value, twoJ, twoI, hyperfine), ...exactAt(level, gJ.used, f, notes, points) }));
+  const note = regimeNote(level, points);
+  if (note) notes.push(note);
   return {
     species: level.species.name,
     level: level.name,
@@ -60,7 +65,7 @@ export function evaluateLevel(level: LevelModel, settings: SettingsModel, fields
     ...(hyperfine ? { hyperfine } : {}),
     sublevel_count: (twoJ + 1) * (twoI + 1),
     ...(level.energyHz ? { energy_Hz: sourced(level.energyHz) } : {}),
-    at_fields: fields.map((f) => pairLinear({ ...linearAt(f, gJ.used, level.species.gI.value, twoJ, twoI, hyperfine), ...exactAt(level, gJ.used, f, notes) })),
+    at_fields: atFields,
   };
 }
 
@@ -116,11 +121,12 @@ function pairLinear(p: FieldPointResult): FieldPointResult {
   return p;
 }
 
-function exactAt(level: LevelModel, gJ: number, f: WorkingField, notes: EvaluationNote[]): Pick<FieldPointResult, 'exact' | 'regime'> {
+function exactAt(level: LevelModel, gJ: number, f: WorkingField, notes: EvaluationNote[], points: FieldPoint[]): Pick<FieldPointResult, 'exact' | 'regime'> {
   const spec = hyperfineSpec(level, gJ);
   if (!spec) return { exact: [] };
   const r = exactAtField(spec, f.tesla);
-  notes.push(...regimeNotes(level, f, r));
+  notes.push(...engineNotes(level, { f, r }));
+  points.push({ f, r });
   return { exact: r.exact, ...(r.regime ? { regime: r.regime } : {}) };
 }
 

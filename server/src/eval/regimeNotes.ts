@@ -1,31 +1,70 @@
-/** Notes for a level whose working field is past the weak-field (linear) regime, and for engine errors. */
+/**
+ * Notes about a level at its working fields: the engine's own errors and notices (per field,
+ * merged by the caller when equal), and one regime note per level that lists every field past
+ * the weak-field (linear) regime, with the thresholds to 3 significant digits — a file with
+ * several fields used to get one six-digit note per level and field.
+ */
 import type { LevelModel } from '../model/types';
 import type { ExactAtField } from './exactAtField';
 import type { EvaluationNote, WorkingField } from './levelEvaluation';
 import { fieldInUnit } from './writtenUnit';
 
-export function regimeNotes(level: LevelModel, f: WorkingField, r: ExactAtField): EvaluationNote[] {
+/** A level's exact result at one working field. */
+export interface FieldPoint {
+  f: WorkingField;
+  r: ExactAtField;
+}
+
+/** Thresholds are a rough boundary (1 % criterion): 3 significant digits say all there is. */
+const THRESHOLD_DIGITS = 3;
+
+export function engineNotes(level: LevelModel, { f, r }: FieldPoint): EvaluationNote[] {
   // Size caps do not depend on the field: the same note at every field is merged into one by the caller.
   const notes: EvaluationNote[] = r.errors.map((e) =>
     e.code === 'basis-too-large' || e.code === 'block-too-large'
       ? { code: 'level-too-large', message: `level '${level.name}': ${e.message}`, range: level.nameRange }
-      : { code: 'level-not-computed', message: `level '${level.name}' could not be computed at ${f.source.kind} ${f.source.name} (${fieldInUnit(f.tesla, { unit: f.unit })}): ${e.message}`, range: f.range },
+      : { code: 'level-not-computed', message: `level '${level.name}' could not be computed at ${fieldName(f)}: ${e.message}`, range: f.range },
   );
   // Everything else the engine says reaches the diagnostics under its own code (said once by the caller).
   for (const n of r.notices) notes.push({ code: n.code, severity: n.severity, message: `level '${level.name}': ${n.message}`, range: level.nameRange });
-  const where = `at ${f.source.kind} ${f.source.name} (${fieldInUnit(f.tesla, { unit: f.unit })})`;
-  const what = `level ${level.species.name}.${level.name}`;
-  const lowLabels = level.kind === 'term' ? '|J, m_J>' : '|F, m_F>';
-  const highLabels = level.kind === 'term' ? '|m_L, m_S>' : '|m_J, m_I>';
-  if (r.regime?.verdict === 'intermediate') {
-    const limit = r.regime.linear_limit_T !== null ? `; the linear formula holds to 1 % only below ${fieldInUnit(r.regime.linear_limit_T, { family: f.unit })}` : '';
-    notes.push({ code: 'zeeman-not-linear', message: `${what} is in the intermediate regime ${where}${limit}. Sublevel energies come from exact diagonalisation.`, range: f.range });
-  } else if (r.regime?.verdict.startsWith('strong')) {
-    notes.push({
-      code: 'zeeman-strong-field',
-      message: `${what} is in the strong-field (decoupled) regime ${where}: labels ${lowLabels} no longer describe the states; read the ${highLabels} labels.`,
-      range: f.range,
-    });
-  }
   return notes;
+}
+
+/** One note for the level, or none when every field is in the weak-field regime. */
+export function regimeNote(level: LevelModel, points: readonly FieldPoint[]): EvaluationNote | undefined {
+  const strong = points.filter((p) => p.r.regime?.verdict.startsWith('strong'));
+  const middle = points.filter((p) => p.r.regime?.verdict === 'intermediate');
+  if (strong.length === 0 && middle.length === 0) return undefined;
+  // The limits belong to the level, not the field; each is said in the unit family of the fields it is about.
+  const limit = (group: readonly FieldPoint[], key: 'strong_limit_T' | 'linear_limit_T'): string | undefined => {
+    const t = group[0]!.r.regime?.[key];
+    return t === null || t === undefined || !Number.isFinite(t) ? undefined : fieldInUnit(t, { family: group[0]!.f.unit, digits: THRESHOLD_DIGITS });
+  };
+  const parts: string[] = [];
+  if (strong.length > 0) {
+    const low = level.kind === 'term' ? '|J, m_J>' : '|F, m_F>';
+    const high = level.kind === 'term' ? '|m_L, m_S>' : '|m_J, m_I>';
+    const above = limit(strong, 'strong_limit_T');
+    parts.push(`in the strong-field (decoupled) regime at ${fieldList(strong)}${above ? ` (above ${above})` : ''}: labels ${low} no longer describe the states; read the ${high} labels`);
+  }
+  if (middle.length > 0) {
+    const below = limit(middle, 'linear_limit_T');
+    parts.push(`in the intermediate regime at ${fieldList(middle)}${below ? ` (the linear formula holds to 1 % only below ${below})` : ''}; energies come from exact diagonalisation`);
+  }
+  const fields = [...strong, ...middle];
+  return {
+    code: strong.length > 0 ? 'zeeman-strong-field' : 'zeeman-not-linear',
+    message: `level ${level.species.name}.${level.name} is ${parts.join('; and ')}.`,
+    range: level.nameRange,
+    related: fields.map((p) => ({ message: `${fieldName(p.f)} is set here`, range: p.f.range })),
+  };
+}
+
+function fieldName(f: WorkingField): string {
+  return `${f.source.kind} ${f.source.name} (${fieldInUnit(f.tesla, { unit: f.unit })})`;
+}
+
+function fieldList(points: readonly FieldPoint[]): string {
+  const names = points.map((p) => fieldName(p.f));
+  return names.length <= 1 ? names.join('') : `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}`;
 }

@@ -1,18 +1,40 @@
 /**
  * What would resolve merged beam peaks, in one sentence shared by the diagnostic, the text
- * report, the hover and the JSON, so every place gives the same suggestions.
+ * report, the hover and the JSON, so every place gives the same suggestions. Every change named
+ * was computed on this setup (physics/beam/resolvingOptions.ts) and is shown with the dip it gives.
  */
-import { gradientText, lengthText } from './quantityText';
+import type { BeamGeometry } from '../physics/beam';
+import { gradientText, lengthText, percentText } from './quantityText';
 import type { BeamResult } from './resultTypes';
 
+type Option = NonNullable<BeamResult['resolving_options']>[number];
+
 /** The sentence, or undefined when the peaks are resolved or the search did not run. */
-export function resolvingAdvice(r: BeamResult): string | undefined {
-  if (!r.computed || r.all_resolved !== false || r.resolving_gradient_T_per_m === undefined) return undefined;
-  const options: string[] = [];
-  if (typeof r.resolving_gradient_T_per_m === 'number') options.push(`a gradient of at least ${gradientText(Math.abs(r.resolving_gradient_T_per_m), 3)}`);
-  if (typeof r.resolving_magnet_length_m === 'number') options.push(`a magnet of at least ${lengthText(r.resolving_magnet_length_m, 3)}`);
-  if (typeof r.resolving_drift_m === 'number') options.push(`a drift of at least ${lengthText(r.resolving_drift_m, 3)}`);
-  return options.length > 0
-    ? `Any one of ${options.join(', or ')} would resolve them.`
-    : 'No gradient, magnet length or drift up to 100 times the present one resolves them; narrow the slits or change the source.';
+export function resolvingAdvice(r: BeamResult, geometry: BeamGeometry): string | undefined {
+  if (!r.computed || r.all_resolved !== false || r.resolving_options === undefined || r.worst_dip_ratio === undefined) return undefined;
+  const now = percentText(r.worst_dip_ratio, 2);
+  if (r.resolving_options.length === 0) {
+    return `The worst dip is ${now}; no gradient, magnet length or drift up to 100 times the present one, no narrower slits or detector and no narrower speed spread deepens it.`;
+  }
+  const parts = r.resolving_options.map((o) => `${changeText(o, geometry)} ${o.change === 'slits' ? 'give' : 'gives'} ${percentText(o.worst_dip_ratio, 2)}${o.resolves_all ? ' and resolves every pair' : ''}`);
+  return `Worst dip now ${now} (resolved at ≤ ${percentText(r.criterion_dip_ratio, 2)}); computed on this setup: ${parts.join('; ')}.`;
+}
+
+function changeText(o: Option, g: BeamGeometry): string {
+  switch (o.change) {
+    case 'gradient':
+      return `a gradient of ${gradientText(Math.abs(o.value), 3)}`;
+    case 'magnet_length':
+      return `a magnet of ${lengthText(o.value, 3)}`;
+    case 'drift':
+      return `a drift of ${lengthText(o.value, 3)}`;
+    case 'slits': {
+      const [a, b] = [lengthText(g.slit1M * o.value, 2), lengthText(g.slit2M * o.value, 2)];
+      return a === b ? `slits of ${a}` : `slits of ${a} and ${b}`;
+    }
+    case 'detector':
+      return `a detector of ${lengthText(g.detectorWidthM * o.value, 2)}`;
+    case 'speed_spread':
+      return `a velocity-selected source with an rms speed spread of ${percentText(o.value, 2)} of the mean`;
+  }
 }

@@ -174,6 +174,8 @@ export interface BeamSublevelResult {
   peak_m: number | null;
 }
 
+export type ResolvingChange = 'gradient' | 'magnet_length' | 'drift' | 'slits' | 'detector' | 'speed_spread';
+
 export interface BeamResult {
   name: string;
   species?: string;
@@ -194,6 +196,14 @@ export interface BeamResult {
   resolving_magnet_length_m?: number | null;
   /** Smallest drift that resolves every pair; null: none up to 100× the file's. */
   resolving_drift_m?: number | null;
+  /** Worst dip ratio of the setup as it is (only when unresolved). */
+  worst_dip_ratio?: number;
+  /**
+   * Changes computed to deepen the worst dip, each with the dip it gives (only those that improve it).
+   * `value`: T/m for the gradient, m for magnet length and drift, the factor on both slit widths or
+   * the detector width, the relative rms spread of a velocity-selected source at the same mean speed.
+   */
+  resolving_options?: { change: ResolvingChange; value: number; worst_dip_ratio: number; resolves_all: boolean }[];
   /** What would resolve the merged peaks, in words: the same sentence as the beam-unresolved diagnostic. */
   resolving_advice?: string;
   /** Fraction of the atoms entering a detector placed at the file's offset (`detector = w at x`). */

@@ -10,7 +10,7 @@ import type { LevelModel, SettingsModel } from '../model/types';
 import { exactAtField } from './exactAtField';
 import { halfText } from './halves';
 import type { EvaluationNote, WorkingField } from './levelEvaluation';
-import { regimeNotes } from './regimeNotes';
+import { engineNotes, regimeNote, type FieldPoint } from './regimeNotes';
 import { fineSpec } from './levelSpec';
 import type { TermResult } from './resultTypes';
 
@@ -18,6 +18,15 @@ export function evaluateTerm(level: LevelModel, settings: SettingsModel, fields:
   const spec = fineSpec(level, settings);
   const term = level.term;
   if (!spec || !term || !level.zeta) return undefined;
+  const points: FieldPoint[] = [];
+  const atFields = fields.map((f) => {
+    const r = exactAtField(spec, f.tesla);
+    notes.push(...engineNotes(level, { f, r }));
+    points.push({ f, r });
+    return { source: f.source, field_T: f.tesla, exact: r.exact, ...(r.regime ? { regime: r.regime } : {}) };
+  });
+  const note = regimeNote(level, points);
+  if (note) notes.push(note);
   return {
     species: level.species.name,
     level: level.name,
@@ -33,10 +42,6 @@ export function evaluateTerm(level: LevelModel, settings: SettingsModel, fields:
       shift_Hz: fineZeroFieldHz(term.L, term.twoS, twoJ, spec.zeta),
       g_J: twoJ === 0 ? 0 : landeGJ(term.twoS, term.L, twoJ, { gS: spec.gS, gL: spec.gL }),
     })),
-    at_fields: fields.map((f) => {
-      const r = exactAtField(spec, f.tesla);
-      notes.push(...regimeNotes(level, f, r));
-      return { source: f.source, field_T: f.tesla, exact: r.exact, ...(r.regime ? { regime: r.regime } : {}) };
-    }),
+    at_fields: atFields,
   };
 }

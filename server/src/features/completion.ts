@@ -13,8 +13,8 @@ import { BLOCK_KEYS, BLOCK_WORDS, isBlockWord, LEVEL_KEYS, LEVEL_WORD, USE_WORD 
 import type { Token } from '../format/scanner';
 import type { LevelModel, SetupModel } from '../model/types';
 import { parseLevelDesignation } from '../physics/configuration';
-import { speciesNames } from '../physics/species';
 import { item, unitItems, wordItems } from './completion/items';
+import { builtinSpeciesItems } from './completion/speciesItems';
 import { type FolderLister, usePathCompletions } from './completion/usePaths';
 import { lineContext, type LineContext } from './completion/lineContext';
 import { builtinDesignationItems, termItems } from './completion/termItems';
@@ -43,19 +43,21 @@ function statementStart(c: LineContext): CompletionItem[] {
       if (hasLevelAbove) for (const key of LEVEL_KEYS) out.push(item(key, CompletionItemKind.Property, c.replace, { insert: `${key} = `, detail: 'setting of the level above', order: order++ }));
     }
   }
-  for (const w of BLOCK_WORDS) out.push(item(w, CompletionItemKind.Keyword, c.replace, { insert: `${w} `, detail: BLOCK_WORD_DETAIL[w], order: order++ }));
+  // A block word spelt like a key of this block (`field` in a magnet) is offered once, as the key.
+  const keys = new Set(out.map((i) => i.label));
+  for (const w of BLOCK_WORDS) if (!keys.has(w)) out.push(item(w, CompletionItemKind.Keyword, c.replace, { insert: `${w} `, detail: BLOCK_WORD_DETAIL[w], order: order++ }));
   out.push(item(USE_WORD, CompletionItemKind.Keyword, c.replace, { insert: 'use "${1:file.sublevel}"', snippet: true, detail: 'use "<path>" — the species of another setup file', order: order++ }));
   return out;
 }
 
-/** Level names, qualified with their species when the bare name is not unique. */
-function levelNameItems(model: SetupModel | undefined, c: LineContext, only?: LevelModel['species']): CompletionItem[] {
+/** Level names, qualified with their species when the bare name is not unique; `except` is left out (a line's other end). */
+function levelNameItems(model: SetupModel | undefined, c: LineContext, only?: LevelModel['species'], except?: LevelModel): CompletionItem[] {
   if (!model) return [];
   const all = model.species.flatMap((s) => s.levels);
   const count = new Map<string, number>();
   for (const l of all) count.set(l.name, (count.get(l.name) ?? 0) + 1);
   return all
-    .filter((l) => !only || l.species === only)
+    .filter((l) => (!only || l.species === only) && l !== except)
     .map((l, i) => {
       const label = !only && (count.get(l.name) ?? 0) > 1 ? `${l.species.name}.${l.name}` : l.name;
       return item(label, CompletionItemKind.EnumMember, c.replace, { detail: `${l.species.name}: ${l.designationText}`, order: i });
@@ -147,14 +149,14 @@ function headerCompletions(c: LineContext, model: SetupModel | undefined): Compl
   if (second && (second.kind === 'equals' || second.kind === 'colon') && c.enclosing && BLOCK_KEYS[c.enclosing.kind].includes(first.text)) return undefined;
   switch (first.text) {
     case 'species':
-      return c.before.length === 1 ? speciesNames().map((n, i) => item(n, CompletionItemKind.Module, c.replace, { detail: 'built-in species', order: i })) : [];
+      return c.before.length === 1 ? builtinSpeciesItems(c.replace) : [];
     case 'line': {
       const arrow = c.before.findIndex((t) => t.kind === 'arrow');
       const colon = c.before.findIndex((t) => t.kind === 'colon');
       if (arrow >= 0 && arrow === c.before.length - 1) {
         const fromText = c.before[arrow - 1]?.text;
         const from = model?.species.flatMap((s) => s.levels).find((l) => l.name === fromText || `${l.species.name}.${l.name}` === fromText);
-        return levelNameItems(model, c, from?.species);
+        return levelNameItems(model, c, from?.species, from);
       }
       if (colon >= 0 && colon === c.before.length - 1) return levelNameItems(model, c);
       return [];

@@ -35,7 +35,7 @@ import { semanticTokens } from '../features/semanticTokens';
 import { diagramFor, type DiagramAnswer, type DiagramRequest } from '../views/diagram';
 import { DocumentStore, type DocumentSnapshot } from './documentStore';
 import { type Evaluator, inProcessEvaluator } from './evaluator';
-import { DEFAULT_SETTINGS, type EditorSettings } from './settings';
+import { DEFAULT_SETTINGS, REGIME_NOTE_CODES, type EditorSettings } from './settings';
 import type { WorkspaceFiles } from './workspaceFiles';
 
 export type { DocumentSnapshot } from './documentStore';
@@ -140,10 +140,11 @@ export class LanguageService {
    * Diagnostics to show now. `complete` is false while the evaluation of this version has not
    * run: the items are then the parser's and model's, with the last evaluation's carried over.
    */
-  diagnostics(doc: DocumentSnapshot): { items: Diagnostic[]; complete: boolean } {
+  diagnostics(doc: DocumentSnapshot, settings: EditorSettings = DEFAULT_SETTINGS): { items: Diagnostic[]; complete: boolean } {
     try {
       const { problems, complete } = this.store.problems(doc);
-      return { items: problems.map((p) => toDiagnostic(p, doc.uri)), complete };
+      const shown = settings.regimeNotes.enabled ? problems : problems.filter((p) => !REGIME_NOTE_CODES.has(p.code));
+      return { items: shown.map((p) => toDiagnostic(p, doc.uri)), complete };
     } catch (e) {
       this.log(`sublevel: diagnostics failed on ${doc.uri} (version ${doc.version}): ${describe(e)}`);
       return { items: [], complete: true };

@@ -8,9 +8,14 @@ import { DEFAULT_HOVER_OPTIONS, type HoverOptions } from '../features/hover/cont
 export interface EditorSettings {
   inlayHints: { enabled: boolean };
   hover: HoverOptions;
+  /** Notes that a level has left the weak-field regime (the CLI always reports them). */
+  regimeNotes: { enabled: boolean };
 }
 
-export const DEFAULT_SETTINGS: EditorSettings = { inlayHints: { enabled: true }, hover: DEFAULT_HOVER_OPTIONS };
+export const DEFAULT_SETTINGS: EditorSettings = { inlayHints: { enabled: true }, hover: DEFAULT_HOVER_OPTIONS, regimeNotes: { enabled: true } };
+
+/** The codes `regimeNotes.enabled: false` hides in the editor. */
+export const REGIME_NOTE_CODES: ReadonlySet<string> = new Set(['zeeman-not-linear', 'zeeman-strong-field']);
 
 function object(x: unknown): Record<string, unknown> {
   return typeof x === 'object' && x !== null ? (x as Record<string, unknown>) : {};
@@ -25,11 +30,13 @@ export function readSettings(section: unknown): EditorSettings {
   const s = object(section);
   const inlay = object(s.inlayHints);
   const hover = object(s.hover);
+  const regime = object(s.regimeNotes);
   return {
     inlayHints: { enabled: typeof inlay.enabled === 'boolean' ? inlay.enabled : DEFAULT_SETTINGS.inlayHints.enabled },
     hover: {
       sublevelRows: count(hover.sublevelRows, DEFAULT_HOVER_OPTIONS.sublevelRows, 500),
       levelTables: count(hover.levelTables, DEFAULT_HOVER_OPTIONS.levelTables, 50),
     },
+    regimeNotes: { enabled: typeof regime.enabled === 'boolean' ? regime.enabled : DEFAULT_SETTINGS.regimeNotes.enabled },
   };
 }

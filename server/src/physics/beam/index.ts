@@ -23,6 +23,7 @@ export {
   type ResolveSearchResult,
   type ResolvingParameter,
 } from './resolvingSolver';
+export { resolvingOptions, worstDip, VISIBLE_IMPROVEMENT, type AdviceParameter, type ResolvingOption, type ResolvingOptions } from './resolvingOptions';
 export { validateGeometry, MAX_HALF_ANGLE_RAD } from './validateGeometry';
 export { validateSource } from './validateSource';
 export { validateSublevels } from './validateSublevels';

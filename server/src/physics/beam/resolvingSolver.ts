@@ -21,6 +21,8 @@ export interface ResolveSearchOptions {
   scanPoints?: number;
   /** Relative width of the final bracket (default 1e-4). */
   relativeTolerance?: number;
+  /** Sublevel groups that make the peaks (default: as the pattern at the upper bound groups them). */
+  groups?: number[][];
 }
 
 export interface ResolveSearchResult {
@@ -67,13 +69,13 @@ export function smallestResolvingValue(
     result.issues.push(beamIssue('error', 'beam-option-invalid', 'The scan needs at least 2 points and a tolerance in (0, 1).'));
     return result;
   }
-  const top = computePattern(withParameter(input, parameter, upper), undefined, false);
+  const top = computePattern(withParameter(input, parameter, upper), opts.groups, false);
   result.evaluations++;
   if (hasBeamError(top.issues)) {
     result.issues.push(...top.issues);
     return result;
   }
-  const groups = top.peaks.map((p) => p.memberIndices);
+  const groups = opts.groups ?? top.peaks.map((p) => p.memberIndices);
   result.peaks = top.peaks.map((p) => p.members);
   if (groups.length < 2) {
     result.dipRatios = [];

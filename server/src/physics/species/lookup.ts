@@ -23,11 +23,15 @@ const ELEMENT_NAMES: Readonly<Record<string, readonly string[]>> = {
   Cr: ['chromium'], Rb: ['rubidium'], Sr: ['strontium'], Cs: ['cesium', 'caesium'], Yb: ['ytterbium'],
 };
 
-/** Every accepted spelling of one species, normalized: id, listed aliases, and symbol/name with mass number both ways. */
-function matchKeys(s: BuiltinSpecies): string[] {
+/** Every accepted spelling of one species: id, listed aliases, and symbol/name with mass number both ways. */
+export function speciesSpellings(s: BuiltinSpecies): string[] {
   const forms = [s.id, ...s.aliases, `${s.element}${s.massNumber}`, `${s.massNumber}${s.element}`];
   for (const name of ELEMENT_NAMES[s.element] ?? []) forms.push(`${name}${s.massNumber}`, `${s.massNumber}${name}`);
-  return forms.map(normalizeSpeciesName);
+  return [...new Set(forms)];
+}
+
+function matchKeys(s: BuiltinSpecies): string[] {
+  return speciesSpellings(s).map(normalizeSpeciesName);
 }
 
 const INDEX: ReadonlyMap<string, BuiltinSpecies> = (() => {

@@ -1,0 +1,131 @@
+/**
+ * Which changes to an unresolved setup actually deepen the dips, each one computed: the
+ * pattern is recomputed with the change (peaks fixed as the present pattern groups them, so
+ * every option is judged on the same pairs) and kept only when its worst dip ratio is lower
+ * than the present one by a visible margin. This is what keeps advice honest: when the
+ * overlap comes from the speed spread (peaks broadened ∝ 1/v², as wide as they are far
+ * apart), narrower slits or a stronger magnet change nothing, and only a narrower speed
+ * spread helps — the computation shows it instead of a rule of thumb.
+ */
+import { computePattern, type DetectorPattern, type PatternInput } from './detectorPattern';
+import { EFFUSIVE_RELATIVE_SPREAD } from './jetLaw';
+import { smallestResolvingValue } from './resolvingSolver';
+import { hasBeamError, type SpeedDistribution } from './types';
+
+export type AdviceParameter = 'gradient' | 'magnetLength' | 'drift' | 'slits' | 'detector' | 'speedSpread';
+
+export interface ResolvingOption {
+  parameter: AdviceParameter;
+  /**
+   * The changed value: T/m for the gradient (sign of the input), m for magnet length and drift,
+   * the factor both slit widths (or the detector width) are multiplied by, and the relative rms
+   * speed spread for a velocity-selected source at the same mean speed.
+   */
+  value: number;
+  /** Worst dip ratio of the neighbouring pairs with the change. */
+  worstDipRatio: number;
+  /** Every pair passes the dip criterion with the change. */
+  resolvesAll: boolean;
+}
+
+export interface ResolvingOptions {
+  /** Worst dip ratio of the setup as it is. */
+  presentWorstDipRatio: number;
+  /** Changes that improve the worst dip, in the order gradient, magnet, drift, slits, detector, speed spread. */
+  options: ResolvingOption[];
+}
+
+/** An option must lower the worst dip ratio by at least this much (2 points of a per-cent display). */
+export const VISIBLE_IMPROVEMENT = 0.02;
+/** Options whose dip is within this of the best one tried count as equally good; the smallest change wins. */
+const SATURATION_MARGIN = 0.02;
+
+const GROWTH = [1.5, 2, 3, 5, 10, 20, 50, 100];
+const NARROWING = [0.7, 0.5, 0.3, 0.2, 0.1];
+const SPREADS = [0.2, 0.1, 0.05, 0.02];
+
+interface Trial {
+  value: number;
+  pattern: DetectorPattern;
+}
+
+export function resolvingOptions(input: PatternInput, present: DetectorPattern): ResolvingOptions {
+  const groups = present.peaks.map((p) => p.memberIndices);
+  const presentWorst = worstDip(present);
+  const out: ResolvingOptions = { presentWorstDipRatio: presentWorst, options: [] };
+  if (groups.length < 2 || present.allResolved) return out;
+  const geo = input.geometry;
+  const sign = geo.gradientTPerM < 0 ? -1 : 1;
+  const keep = (parameter: AdviceParameter, pick: Trial | undefined, value = pick?.value): void => {
+    if (pick && value !== undefined) out.options.push({ parameter, value, worstDipRatio: worstDip(pick.pattern), resolvesAll: pick.pattern.allResolved });
+  };
+  const at = (change: Partial<PatternInput['geometry']>, source?: SpeedDistribution): DetectorPattern =>
+    computePattern({ ...input, geometry: { ...geo, ...change }, ...(source ? { source } : {}) }, groups, false);
+
+  const grown = (parameter: 'gradient' | 'magnetLength' | 'drift', base: number): void => {
+    const key = parameter === 'gradient' ? 'gradientTPerM' : parameter === 'magnetLength' ? 'magnetLengthM' : 'driftM';
+    const scale = parameter === 'gradient' ? sign : 1;
+    const trials = scan(GROWTH.map((f) => f * base), (v) => at({ [key]: scale * v }));
+    const pick = choose(trials, presentWorst);
+    if (!pick) return;
+    const hitIndex = trials.indexOf(pick);
+    if (pick.pattern.allResolved) {
+      // Narrow the step below the first resolving value down to the smallest resolving value.
+      const below = hitIndex > 0 ? trials[hitIndex - 1]!.value : parameter === 'drift' && geo.driftM === 0 ? 0 : base;
+      const exact = smallestResolvingValue(input, parameter, { upperBound: pick.value, lowerBound: below, scanPoints: 2, relativeTolerance: 1e-3, groups });
+      if (exact.value !== undefined) {
+        out.options.push({ parameter, value: exact.value, worstDipRatio: Math.max(...exact.dipRatios), resolvesAll: true });
+        return;
+      }
+    }
+    keep(parameter, pick, scale * pick.value);
+  };
+  grown('gradient', Math.abs(geo.gradientTPerM));
+  grown('magnetLength', geo.magnetLengthM);
+  grown('drift', geo.driftM > 0 ? geo.driftM : geo.magnetLengthM / 10);
+
+  const narrowed = (parameter: 'slits' | 'detector', change: (f: number) => Partial<PatternInput['geometry']>): void => {
+    keep(parameter, choose(scan(NARROWING, (f) => at(change(f))), presentWorst));
+  };
+  narrowed('slits', (f) => ({ slit1M: geo.slit1M * f, slit2M: geo.slit2M * f }));
+  if (geo.detectorWidthM > 0) narrowed('detector', (f) => ({ detectorWidthM: geo.detectorWidthM * f }));
+
+  const spread = presentSpread(input.source);
+  const mean = present.speed?.meanSpeed;
+  if (spread !== undefined && mean !== undefined && mean > 0) {
+    const values = SPREADS.filter((s) => s < spread * 0.9);
+    keep('speedSpread', choose(scan(values, (s) => at({}, { kind: 'jet', meanSpeed: mean, relativeSpread: s })), presentWorst));
+  }
+  return out;
+}
+
+function presentSpread(source: SpeedDistribution): number | undefined {
+  if (source.kind === 'effusive') return EFFUSIVE_RELATIVE_SPREAD;
+  return source.kind === 'jet' ? source.relativeSpread : undefined;
+}
+
+/** Patterns for the values in order of growing change; stops at the first that resolves every pair. */
+function scan(values: readonly number[], pattern: (v: number) => DetectorPattern): Trial[] {
+  const trials: Trial[] = [];
+  for (const value of values) {
+    const p = pattern(value);
+    if (hasBeamError(p.issues) || p.pairs.length === 0) continue;
+    trials.push({ value, pattern: p });
+    if (p.allResolved) break;
+  }
+  return trials;
+}
+
+/** The smallest change that resolves everything, else the smallest whose dip is near the best tried; only if it visibly improves. */
+function choose(trials: readonly Trial[], presentWorst: number): Trial | undefined {
+  const resolving = trials.find((t) => t.pattern.allResolved);
+  if (resolving) return resolving;
+  if (trials.length === 0) return undefined;
+  const best = Math.min(...trials.map((t) => worstDip(t.pattern)));
+  if (presentWorst - best < VISIBLE_IMPROVEMENT) return undefined;
+  return trials.find((t) => worstDip(t.pattern) <= best + SATURATION_MARGIN);
+}
+
+export function worstDip(p: DetectorPattern): number {
+  return p.pairs.length === 0 ? 0 : Math.max(...p.pairs.map((q) => q.dipRatio));
+}

@@ -1,0 +1,99 @@
+/**
+ * Every change the beam advice names is applied to the file's text and re-evaluated: it must
+ * really deepen the worst dip, to the value the advice states. The J = 2 oven beam is the case
+ * where the overlap of m_J = ±1 and ±2 comes from the speed spread (profiles ∝ 1/v², as wide as
+ * they are apart), so narrower slits cannot help and must not be advised.
+ */
+import { describe, expect, it } from 'vitest';
+import { analyze } from '../../server/src/eval/analyze';
+import type { BeamResult } from '../../server/src/eval/resultTypes';
+
+const setup = (level: string, gradient: string) => `species X
+  mass = 52 u
+  level g: ${level}
+magnet m
+  field = 0.5 T
+  gradient = ${gradient}
+  length = 10 cm
+beam b
+  level = g
+  source = oven 500 K
+  slits = 30 um, 30 um apart 50 cm
+  magnet = m
+  drift = 40 cm
+  detector = 10 um
+`;
+/** Overlap from the slit image: a stronger magnet separates the peaks. */
+const SLIT_LIMITED = setup('3S1', '0.5 T/m');
+/** Overlap from the speed spread: J = 2, peaks at 1 and 2 units of deflection, each as broad as 1/v². */
+const SPEED_LIMITED = setup('3P2', '100 T/m');
+
+function beamOf(text: string): BeamResult {
+  return analyze(text).result!.beams[0]!;
+}
+
+function worst(b: BeamResult): number {
+  return Math.max(...b.pairs.map((p) => p.dip_ratio));
+}
+
+/** The file with one advised change written into it. */
+function applied(text: string, change: string, value: number, meanSpeed: number): string {
+  const edits: Record<string, [RegExp, string]> = {
+    gradient: [/gradient = .*/, `gradient = ${value} T/m`],
+    magnet_length: [/length = .*/, `length = ${value} m`],
+    drift: [/drift = .*/, `drift = ${value} m`],
+    slits: [/slits = .*/, `slits = ${30 * value} um, ${30 * value} um apart 50 cm`],
+    detector: [/detector = .*/, `detector = ${10 * value} um`],
+    speed_spread: [/source = .*/, `source = jet ${meanSpeed} m/s spread ${value * 100} %`],
+  };
+  const [pattern, line] = edits[change]!;
+  return text.replace(pattern, line);
+}
+
+describe('beam advice names only changes that deepen the dip', () => {
+  for (const [name, text] of [
+    ['slit-limited J = 1 beam', SLIT_LIMITED],
+    ['speed-limited J = 2 beam', SPEED_LIMITED],
+  ] as const) {
+    it(`${name}: each advised change, written into the file, gives the dip it states`, () => {
+      const b = beamOf(text);
+      expect(b.all_resolved).toBe(false);
+      const now = worst(b);
+      expect(b.worst_dip_ratio).toBeCloseTo(now, 10);
+      expect(b.resolving_options!.length).toBeGreaterThan(0);
+      for (const o of b.resolving_options!) {
+        const changed = beamOf(applied(text, o.change, o.value, b.speeds!.mean_m_per_s));
+        expect(changed.computed, o.change).toBe(true);
+        const dip = worst(changed);
+        expect(dip, o.change).toBeLessThan(now - 0.015);
+        expect(Math.abs(dip - o.worst_dip_ratio), o.change).toBeLessThan(0.02);
+        if (o.resolves_all) expect(dip, o.change).toBeLessThanOrEqual(b.criterion_dip_ratio + 0.01);
+      }
+    });
+  }
+
+  it('slit-limited: the gradient that resolves is found, and said with its dip', () => {
+    const b = beamOf(SLIT_LIMITED);
+    const g = b.resolving_options!.find((o) => o.change === 'gradient')!;
+    expect(g.resolves_all).toBe(true);
+    expect(b.resolving_gradient_T_per_m).toBe(g.value);
+    // The m_J = 0 peak sits between ±1 (g_J ≈ 2): a few T/m separate 30 µm slit images over 50 cm.
+    expect(g.value).toBeGreaterThan(0.5);
+    expect(g.value).toBeLessThan(50);
+    expect(b.resolving_advice).toMatch(/^Worst dip now 100 % \(resolved at ≤ 80 %\); computed on this setup: a gradient of [\d.]+ T\/m gives 8\d % and resolves every pair/);
+  });
+
+  it('speed-limited J = 2: narrower slits do not help (computed) and are not advised; a narrower speed spread is', () => {
+    const b = beamOf(SPEED_LIMITED);
+    const now = worst(b);
+    expect(now).toBeGreaterThan(0.95);
+    const tenTimesNarrower = beamOf(SPEED_LIMITED.replace(/slits = .*/, 'slits = 3 um, 3 um apart 50 cm'));
+    expect(worst(tenTimesNarrower)).toBeGreaterThan(now - 0.02);
+    const changes = b.resolving_options!.map((o) => o.change);
+    expect(changes).not.toContain('slits');
+    expect(changes).not.toContain('gradient');
+    expect(changes).toContain('speed_spread');
+    expect(b.resolving_advice).not.toMatch(/slit/);
+    expect(b.resolving_advice).toMatch(/velocity-selected source with an rms speed spread of 10 % of the mean gives \d+ % and resolves every pair/);
+  });
+});
