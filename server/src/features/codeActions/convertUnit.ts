@@ -77,5 +77,13 @@ function backToWritten(v: number, unit: string, written: string, d: Dimension): 
 export function convertUnitActions(analysis: Analysis, uri: string, range: Range): CodeAction[] {
   const t = locate(analysis.doc, range.start);
   if (!t || t.kind !== 'value' || !t.part) return [];
-  return unitConversions(t.part, uri);
+  // A unit the setting cannot take is fixed, not converted: a conversion would keep the wrong kind.
+  const part = t.part;
+  if (analysis.problems.some((p) => p.code.startsWith('unit-') && within(p.range, part.range))) return [];
+  return unitConversions(part, uri);
+}
+
+function within(inner: Range, outer: Range): boolean {
+  const le = (a: Range['start'], b: Range['start']): boolean => a.line < b.line || (a.line === b.line && a.character <= b.character);
+  return le(outer.start, inner.start) && le(inner.end, outer.end);
 }
