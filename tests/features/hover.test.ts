@@ -47,7 +47,20 @@ const CASES: Case[] = [
   {
     name: 'impossible J: the J values the term allows',
     text: 'species Na23\n  level upper: 3p 2P°5|/2\n',
-    has: ['not valid yet', '2P (S = 1/2, L = 1) allows J = 1/2, 3/2'],
+    has: ['the term is not valid: ', 'nothing is computed for this level yet', '2P (S = 1/2, L = 1) allows J = 1/2, 3/2'],
+  },
+  {
+    name: 'a wrong configuration is named as the wrong part, not the term',
+    text: 'species Na23\n  level upper: 3s3 3p 2P°3|/2\n',
+    has: ['the configuration is not valid: 3s holds at most 2 electrons'],
+    hasNot: ['the term is not valid'],
+  },
+  {
+    name: 'the run-together form of the built-in designation is a valid level (4f14 6s6p)',
+    // Yb 4f14 6s6p 3P°1: g_J = 3/2 in LS coupling with g_s = 2 (Landé formula, textbook).
+    text: 'species Yb174\n  level meta: 4f14 6s6p 3P°|1\n',
+    has: ['³P°₁', 'odd parity', 'exactly 3/2 with g_s = 2'],
+    hasNot: ['not valid'],
   },
   {
     name: 'field: other units, Zeeman scale and the sublevel table',
