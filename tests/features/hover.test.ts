@@ -292,7 +292,17 @@ describe('hover on a beam', () => {
     const s = analysis.result!.beams[0]!.sublevels[0]!;
     const z = ((s.moment_J_per_T * 100) / (7.016003437 * ATOMIC_MASS_UNIT * 1000 ** 2)) * (0.1 ** 2 / 2 + 0.1 * 0.5);
     expect(s.mean_deflection_m / z).toBeCloseTo(1, 6);
-    expect(shown).toContain(`| F=1, m_F=+1 | 1.003 | 0.125 | ${(z * 1000).toPrecision(3)} mm |`);
-    expect(shown).toContain('Strong magnet (');
+    // At 1 T the Li-7 ground level (hyperfine 803.5 MHz ≪ μ_B·B/h ≈ 14 GHz) is decoupled: its
+    // |F=1, m_F=+1> is |m_J=-1/2, m_I=+3/2> (adiabatic connection, m_F = m_J + m_I).
+    expect(shown).toContain(`| m_J=-1/2, m_I=+3/2 | 1.003 | 0.125 | ${(z * 1000).toPrecision(3)} mm |`);
+    expect(shown).toContain('| sublevel (strong-field label) |');
+    // Each peak names its sublevels.
+    expect(shown).toMatch(/\| 4\.39 mm \| \S+ µm \| m_J=-1\/2, m_I=\+3\/2 \|/);
+    // The cautions in one line that fits the setup (no oven here, so no hot-oven caution).
+    const caution = shown.split('\n').filter((l) => l.startsWith('⚠'));
+    expect(caution).toEqual(["⚠ Strong magnet (1 T at the beam) · Alkali metal (Li) · Vacuum: follow your lab's safety rules (full cautions in the eval report)"]);
+    // The detector width in a unit read at a glance, not 0.00001 m.
+    expect(shown).toMatch(/detector = 10 µm\s*\n/);
+    expect(shown).not.toContain('0.00001 m');
   });
 });
