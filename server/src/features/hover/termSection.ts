@@ -61,7 +61,7 @@ function unevaluatedTermSection(level: LevelModel): string {
   return [
     head.join(' '),
     `J = ${halfText(twoJ)}; ${md(formatTermLabel(term.twoS, term.L))} allows J = ${allowedJ(term.twoS, term.L).map(halfText).join(', ')}`,
-    `${(twoJ + 1) * (twoI + 1)} sublevels`,
+    `${(twoJ + 1) * (twoI + 1)} sublevel${(twoJ + 1) * (twoI + 1) === 1 ? '' : 's'}`,
     'g-factors and energies appear once the evaluation has run',
   ].join('  \n');
 }
