@@ -112,6 +112,13 @@ const CASES: Case[] = [
     preferred: null,
   },
   {
+    name: 'a misspelt key whose one suggestion is already set: offered, not preferred (it would duplicate it)',
+    text: 'magnet m\n  field = 1 T\n  gradient = 10 T/m\n  length = 5 cm\n  lenght = 6 cm\n',
+    code: 'syntax-unknown-key',
+    titles: ["Change to 'length'"],
+    preferred: null,
+  },
+  {
     name: 'a misspelt species: the canonical name, preferred (not the long alias)',
     text: 'species Rubidum87\n  level g: 5s 2S1/2\n',
     code: 'species-needs-mass',

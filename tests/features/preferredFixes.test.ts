@@ -11,6 +11,7 @@ import { codeActions } from '../../server/src/features/codeActions';
 import { diagnostics } from '../../server/src/features/diagnostics';
 import { analyzeFast } from '../../server/src/service/fastAnalysis';
 import { applyEdits, editsOf, URI } from './helpers';
+import { mutatedText } from '../mutatedExamples';
 
 const RUNS = Number(process.env.FUZZ_RUNS ?? 60);
 
@@ -36,8 +37,9 @@ function codeCounts(list: readonly Diagnostic[]): Map<string, number> {
 
 /**
  * Failures of "the fix removes its diagnostic and adds none", as readable lines. No new error may
- * appear anywhere. A warning may appear on the repaired line itself, where text that could not be
- * read is read now (a block word repaired to `magnet` makes an empty magnet).
+ * appear anywhere, nor any new problem on the text the fix wrote. A warning may appear elsewhere on
+ * the repaired line, where text that could not be read is read now (a block word repaired to
+ * `magnet` makes an empty magnet, whose name is then reported incomplete).
  */
 function checkEveryPreferredFix(text: string): string[] {
   const before = diagnosticsOf(text).list;
@@ -58,6 +60,15 @@ function checkEveryPreferredFix(text: string): string[] {
     const elsewhereBefore = before.filter((x) => x.range.start.line !== d.range.start.line).length;
     const elsewhereAfter = after.filter((x) => x.range.start.line !== d.range.start.line);
     if (elsewhereAfter.length > elsewhereBefore) failures.push(`'${fix.title}' for ${code} added problems on other lines: ${elsewhereAfter.map((x) => x.code).join(', ')}`);
+    // What the fix wrote must not itself be a new problem (a key renamed into a duplicate).
+    const old = new Set(before.map((x) => `${String(x.code)} ${x.message}`));
+    for (const e of editsOf(fix.edit)) {
+      if (e.newText.includes('\n')) continue;
+      const from = e.range.start.character;
+      const to = from + e.newText.length;
+      const onIt = after.filter((x) => x.range.start.line === e.range.start.line && x.range.start.character < to && x.range.end.character > from);
+      for (const x of onIt) if (!old.has(`${String(x.code)} ${x.message}`)) failures.push(`'${fix.title}' wrote text with a new problem: ${String(x.code)} ${x.message}`);
+    }
   }
   return failures;
 }
@@ -128,6 +139,18 @@ describe('preferred quick fixes', () => {
       fc.property(fc.uniqueArray(fc.nat(PLANTS.length - 1), { minLength: 1, maxLength: 4 }), (picks) => {
         let text = CLEAN;
         for (const k of picks) text = text.replace(PLANTS[k]![0], PLANTS[k]![1]);
+        expect(checkEveryPreferredFix(text)).toEqual([]);
+      }),
+      { numRuns: RUNS },
+    );
+  });
+
+  it('on example files with the random edits a typing user makes', () => {
+    const examples = readdirSync('examples')
+      .filter((f) => f.endsWith('.sublevel'))
+      .map((f) => readFileSync(`examples/${f}`, 'utf8'));
+    fc.assert(
+      fc.property(mutatedText(examples, 3), (text) => {
         expect(checkEveryPreferredFix(text)).toEqual([]);
       }),
       { numRuns: RUNS },

@@ -1,7 +1,7 @@
 /**
  * A preferred fix is the one an editor applies without asking ("fix all", one keystroke), so it
  * must be right: it is kept preferred only when re-reading the edited text (parse + model, as on
- * a keystroke) shows its problem gone and no new error. `6s7 6p` → `6s2 6p` would trade one
+ * a keystroke) shows its problem gone, no new error, and no new problem on other lines. `6s7 6p` → `6s2 6p` would trade one
  * error for another (3P cannot arise from 6s2 6p), so that fix stays offered but not preferred.
  */
 import type { CodeAction, TextEdit } from 'vscode-languageserver-types';
@@ -46,7 +46,7 @@ function count(problems: readonly Problem[], pick: (p: Problem) => boolean): Map
   return out;
 }
 
-/** Does applying `fix` remove one `problem.code` and add no error of any code? */
+/** Does applying `fix` remove one `problem.code`, add no error, and add no problem on other lines? */
 export function fixHolds(doc: SetupDocument, problem: Problem, fix: CodeAction): boolean {
   const edits = fix.edit?.changes ? Object.values(fix.edit.changes).flat() : [];
   const text = applied(doc, edits);
@@ -58,7 +58,22 @@ export function fixHolds(doc: SetupDocument, problem: Problem, fix: CodeAction):
   if ((count(after, sameCode).get(problem.code) ?? 0) >= (count(before, sameCode).get(problem.code) ?? 0)) return false;
   const errorsBefore = count(before, (p) => p.severity === 'error');
   for (const [code, n] of count(after, (p) => p.severity === 'error')) if (n > (errorsBefore.get(code) ?? 0)) return false;
-  return true;
+  // Off the repaired line nothing may multiply ('selectort' → 'detector' where a detector is
+  // already set would add a duplicate); on it, text read for the first time may bring a warning.
+  const line = problem.range.start.line;
+  const offLine = (list: readonly Problem[]): number => list.filter((p) => p.range.start.line !== line).length;
+  if (offLine(after) > offLine(before)) return false;
+  // Nor may the text the fix wrote carry a problem it did not have ('lenght' → a second 'length').
+  const seen = new Set(before.map((p) => `${p.code}\u0000${p.message}`));
+  return !after.some((p) => !seen.has(`${p.code}\u0000${p.message}`) && edits.some((e) => touchesWritten(p, e)));
+}
+
+/** Does a problem of the edited text start inside what a one-line edit wrote? */
+function touchesWritten(p: Problem, e: TextEdit): boolean {
+  if (e.newText.includes('\n') || p.range.start.line !== e.range.start.line) return false;
+  const from = e.range.start.character;
+  const to = from + e.newText.length;
+  return p.range.start.character < to && p.range.end.character > from;
 }
 
 /** The same fixes, with `isPreferred` dropped from any that does not hold. */
