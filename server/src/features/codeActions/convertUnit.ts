@@ -7,6 +7,7 @@ import type { Analysis } from '../../eval/analyze';
 import type { ValuePart } from '../../format/ast';
 import { convertSI, type Dimension, readQuantity } from '../../format/units';
 import { locate } from '../shared/locate';
+import { containsRange } from '../shared/names';
 import { convertTargets, dimensionOfUnit, displayUnit } from '../shared/units';
 
 /** Significant digits written in a decimal mantissa (`0.0450` → 3, `180` → 3, `8` → 1). */
@@ -79,11 +80,6 @@ export function convertUnitActions(analysis: Analysis, uri: string, range: Range
   if (!t || t.kind !== 'value' || !t.part) return [];
   // A unit the setting cannot take is fixed, not converted: a conversion would keep the wrong kind.
   const part = t.part;
-  if (analysis.problems.some((p) => p.code.startsWith('unit-') && within(p.range, part.range))) return [];
+  if (analysis.problems.some((p) => p.code.startsWith('unit-') && containsRange(part.range, p.range))) return [];
   return unitConversions(part, uri);
-}
-
-function within(inner: Range, outer: Range): boolean {
-  const le = (a: Range['start'], b: Range['start']): boolean => a.line < b.line || (a.line === b.line && a.character <= b.character);
-  return le(outer.start, inner.start) && le(inner.end, outer.end);
 }

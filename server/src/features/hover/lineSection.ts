@@ -10,6 +10,7 @@ import { fieldInUnit, workingFieldUnit } from '../../eval/writtenUnit';
 import type { LineModel } from '../../model/types';
 import { SPEED_OF_LIGHT } from '../../physics/constants';
 import { md, mdTable, mdTitle } from '../shared/markdown';
+import { sameFieldGroups, sourcesText } from './sameField';
 import { levelResult } from '../shared/results';
 import { type LabelScheme, labelsAt, schemeWords } from './regimeLabels';
 
@@ -40,27 +41,9 @@ function labelNote(lower: { name: string; scheme: LabelScheme }, upper: { name: 
   return `labels: ${md(lower.name)} ${schemeWords(lower.scheme)}; ${md(upper.name)} ${schemeWords(upper.scheme)}`;
 }
 
-type FieldComponents = LineResult['at_fields'][number];
-
-/** Working fields of equal value give the same components: one table names them all. */
-function sameFieldGroups(atFields: readonly FieldComponents[]): FieldComponents[][] {
-  const groups: FieldComponents[][] = [];
-  for (const at of atFields) {
-    if (at.components.length === 0) continue;
-    const g = groups.find((x) => x[0]!.field_T === at.field_T && x[0]!.components.length === at.components.length);
-    if (g) g.push(at);
-    else groups.push([at]);
-  }
-  return groups;
-}
-
-function sourcesText(group: readonly FieldComponents[]): string {
-  return group.map((at) => `${md(at.source.kind)} ${md(at.source.name)}`).join(' and ');
-}
-
 function componentsSection(r: LineResult, lower: LevelResult | undefined, upper: LevelResult | undefined, maxRows: number, result: EvaluationResult | undefined): string[] {
   const out: string[] = [];
-  for (const group of sameFieldGroups(r.at_fields)) {
+  for (const group of sameFieldGroups(r.at_fields, (at) => at.components.length)) {
     const at = group[0]!;
     const lo = labelsAt(lower, at.source);
     const up = labelsAt(upper, at.source);
@@ -71,7 +54,7 @@ function componentsSection(r: LineResult, lower: LevelResult | undefined, upper:
     const note = labelNote({ name: lower?.level ?? 'lower', scheme: lo.scheme }, { name: upper?.level ?? 'upper', scheme: up.scheme });
     const labels = note ? `  \n${note}` : '';
     out.push(
-      `${mdTitle(count)} at ${sourcesText(group)} (${fieldInUnit(at.field_T, { unit: result && workingFieldUnit(result, at.source) })}), strongest first${labels}`,
+      `${mdTitle(count)} at ${sourcesText(group, md)} (${fieldInUnit(at.field_T, { unit: result && workingFieldUnit(result, at.source) })}), strongest first${labels}`,
       mdTable(['pol.', 'lower → upper', 'offset from centre', 'strength'], rows) + (more > 0 ? `\n\n… and ${more} more` : ''),
     );
   }

@@ -10,6 +10,7 @@ import { SENSITIVITY_NOISE } from '../../eval/noiseFloors';
 import { polarizationSymbol } from '../../eval/polarizationName';
 import { fieldInUnit, workingFieldUnit } from '../../eval/writtenUnit';
 import { md, mdTable, mdTitle } from '../shared/markdown';
+import { sameFieldGroups, sourcesText } from './sameField';
 import { levelResult } from '../shared/results';
 import { labelsAt, schemeWords } from './regimeLabels';
 
@@ -19,20 +20,6 @@ function transitionRow(t: MagneticTransitionResult, label: (low: string) => stri
 
 function plural(n: number, word: string): string {
   return `${n} ${word}${n === 1 ? '' : 's'}`;
-}
-
-type FieldTransitions = ResonanceResult['at_fields'][number];
-
-/** Working fields of equal value have the same transitions: one table names them all. */
-function sameFieldGroups(atFields: readonly FieldTransitions[]): FieldTransitions[][] {
-  const groups: FieldTransitions[][] = [];
-  for (const at of atFields) {
-    if (at.transitions.length === 0) continue;
-    const g = groups.find((x) => x[0]!.field_T === at.field_T && x[0]!.transitions.length === at.transitions.length);
-    if (g) g.push(at);
-    else groups.push([at]);
-  }
-  return groups;
 }
 
 export function resonanceSection(r: ResonanceResult, maxRows: number, result?: Pick<EvaluationResult, 'fields' | 'magnets' | 'levels'>): string {
@@ -55,12 +42,12 @@ export function resonanceSection(r: ResonanceResult, maxRows: number, result?: P
   const title = `${mdTitle(`resonance ${md(r.name)}`)}${r.level ? ` of ${md(r.species ?? '')} ${md(r.level)}` : ''}`;
   const parts = [[title, ...answers, searched].join('  \n')];
   const level = r.species && r.level ? levelResult(result, r.species, r.level) : undefined;
-  for (const group of sameFieldGroups(r.at_fields)) {
+  for (const group of sameFieldGroups(r.at_fields, (at) => at.transitions.length)) {
     const at = group[0]!;
     const { scheme, label } = labelsAt(level, at.source);
     const rows = at.transitions.slice(0, maxRows).map((t) => transitionRow(t, label));
     const more = at.transitions.length - rows.length;
-    const where = group.map((g) => `${md(g.source.kind)} ${md(g.source.name)}`).join(' and ');
+    const where = sourcesText(group, md);
     parts.push(
       `${mdTitle(plural(at.transitions.length, 'transition'))} at ${where} (${fieldInUnit(at.field_T, { unit: result && workingFieldUnit(result, at.source) })})${scheme === 'low' ? '' : `  \nlabels: ${schemeWords(scheme)}`}`,
       mdTable(['kind', 'lower → upper', 'frequency', 'df/dB'], rows) + (more > 0 ? `\n\n… and ${more} more` : ''),
