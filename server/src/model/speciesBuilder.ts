@@ -3,7 +3,7 @@
  * overridden by the file's settings; a species defined by hand otherwise.
  */
 import type { BlockNode } from '../format/ast';
-import { editDistance } from '../format/didYouMean';
+import { allowedEdits, editDistance } from '../format/didYouMean';
 import { ATOMIC_MASS_UNIT, NUCLEAR_MAGNETON } from '../physics/constants';
 import { nuclearGFromMoment } from '../physics/gFactors';
 import { findSpecies, normalizeSpeciesName, speciesSpellings } from '../physics/species';
@@ -105,7 +105,7 @@ function checkHandDefined(species: SpeciesModel, node: BlockNode, problems: Prob
 function nearSpecies(name: string, max = 3): { id: string; distance: number }[] {
   const key = normalizeSpeciesName(name);
   if (key === '' || key.length > 64) return [];
-  const limit = key.length <= 2 ? 0 : key.length <= 4 ? 1 : key.length <= 8 ? 2 : 3;
+  const limit = allowedEdits(key.length);
   const best = new Map<string, number>();
   for (const [form, id] of speciesSpellings()) {
     const d = editDistance(key, form, limit);
