@@ -4,7 +4,9 @@
  * '3p 2P°3/2', '4f7 6s2 8S7/2', '2P3/2').
  *
  * Subshells are separated by spaces or dots; the occupancy follows the letter as ASCII
- * digits (optionally after '^') or superscript digits, and defaults to 1. A noble-gas core in
+ * digits (optionally after '^') or superscript digits, and defaults to 1. Subshells may run
+ * together when that is unambiguous: '6s6p' is 6s 6p (one digit between two letters can only be
+ * the next n); '1s22s' is an error whose fix is the one split that fits, '1s2 2s'. A noble-gas core in
  * brackets may come first. Offsets in issues and subshells are UTF-16 offsets into the text
  * passed in. Nothing here throws; the configuration is non-null exactly when no issue of
  * severity 'error' was found.
