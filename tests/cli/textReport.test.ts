@@ -51,6 +51,14 @@ describe('eval text report', () => {
     expect(text).not.toContain('250 G');
   });
 
+  it('counts one sublevel in the singular', () => {
+    // A J = 0 level without nuclear spin has 2J + 1 = 1 sublevel.
+    const a = analyze('species Demo\n  mass = 40 u\n  level g: 1S0\n');
+    const text = textReport('t.sublevel', a.result!).join('\n');
+    expect(text).toContain(', 1 sublevel');
+    expect(text).not.toContain('1 sublevels');
+  });
+
   it('gives field sensitivities an SI prefix', () => {
     // The slopes are the engine's (checked in tests/physics); this checks how they are written:
     // −3.354704e9 Hz/T = −335.4704 kHz/G and 2.666337e10 Hz/T = 2.666337 MHz/G (1 G = 1e-4 T).

@@ -17,6 +17,8 @@ interface Case {
   titles: string[];
   /** Title of the fix to apply, and the text after it. */
   apply?: { title: string; result: string };
+  /** Title of the one fix marked preferred (null: none is). */
+  preferred?: string | null;
 }
 
 function fixesFor(text: string, code: string): CodeAction[] {
@@ -83,6 +85,63 @@ const CASES: Case[] = [
     code: 'unit-wrong-dimension',
     titles: ['Change the unit to T/m', 'Change the unit to G/cm'],
     apply: { title: 'Change the unit to T/m', result: 'magnet m\n  gradient = 50 T/m\n' },
+    preferred: 'Change the unit to T/m',
+  },
+  {
+    // SI prefixes: G = giga, so `Gs` is 1e9 s; the gauss it was meant as comes first.
+    name: "'Gs' is read as gigaseconds: the gauss is the preferred fix",
+    text: 'field bias = 3.2 Gs\n',
+    code: 'unit-wrong-dimension',
+    titles: ['Change the unit to G', 'Change the unit to T', 'Change the unit to mT'],
+    apply: { title: 'Change the unit to G', result: 'field bias = 3.2 G\n' },
+    preferred: 'Change the unit to G',
+  },
+  {
+    name: 'a field unit for a gradient: the same unit per length is nearest',
+    text: 'magnet m\n  gradient = 180 mT\n',
+    code: 'unit-wrong-dimension',
+    titles: ['Change the unit to mT/m', 'Change the unit to T/m', 'Change the unit to G/cm'],
+    apply: { title: 'Change the unit to mT/m', result: 'magnet m\n  gradient = 180 mT/m\n' },
+    preferred: 'Change the unit to mT/m',
+  },
+  {
+    name: 'a unit far from every right one: no fix is preferred',
+    text: 'magnet m\n  gradient = 180 K\n',
+    code: 'unit-wrong-dimension',
+    titles: ['Change the unit to T/m', 'Change the unit to G/cm'],
+    preferred: null,
+  },
+  {
+    name: 'a misspelt key whose one suggestion is already set: offered, not preferred (it would duplicate it)',
+    text: 'magnet m\n  field = 1 T\n  gradient = 10 T/m\n  length = 5 cm\n  lenght = 6 cm\n',
+    code: 'syntax-unknown-key',
+    titles: ["Change to 'length'"],
+    preferred: null,
+  },
+  {
+    name: 'a misspelt species: the canonical name, preferred (not the long alias)',
+    text: 'species Rubidum87\n  level g: 5s 2S1/2\n',
+    code: 'species-needs-mass',
+    titles: ['Use the built-in species Rb87', 'Use the built-in species Rb85'],
+    apply: { title: 'Use the built-in species Rb87', result: 'species Rb87\n  level g: 5s 2S1/2\n' },
+    preferred: 'Use the built-in species Rb87',
+  },
+  {
+    name: 'subshells run together with an occupancy: the split that fits',
+    text: 'species Na23\n  level g: 1s22s 2S1/2\n',
+    code: 'config-malformed',
+    titles: ["Write '1s2 2s'"],
+    apply: { title: "Write '1s2 2s'", result: 'species Na23\n  level g: 1s2 2s 2S1/2\n' },
+    preferred: "Write '1s2 2s'",
+  },
+  {
+    // 6s2 6p gives only 2P°, so capping the occupancy would trade this error for
+    // term-not-in-configuration: the fix is offered but not preferred.
+    name: 'an occupancy cap that would break the term is not preferred',
+    text: 'species Yb174\n  level meta: 6s7 6p 3P°1\n',
+    code: 'config-occupancy-too-large',
+    titles: ["Replace with '2'"],
+    preferred: null,
   },
   {
     name: 'a quadrupole constant that cannot act on J = 1/2, on the level line',
@@ -194,6 +253,9 @@ describe('quick fixes', () => {
         const fix = fixes.find((f) => f.title === c.apply!.title)!;
         expect(applyEdits(c.text, editsOf(fix.edit))).toBe(c.apply.result);
       }
+      if (c.preferred !== undefined) {
+        expect(fixes.filter((f) => f.isPreferred).map((f) => f.title)).toEqual(c.preferred === null ? [] : [c.preferred]);
+      }
     });
   }
 
@@ -258,6 +320,12 @@ describe('convert-unit refactoring', () => {
   it('keeps a glued unit glued', () => {
     const got = conversions('beam b\n  drift = 35cm\n', 1, 12);
     expect(got.map((g) => g.result.split('\n')[1])).toContain('  drift = 0.35m');
+  });
+
+  it('offers no conversion of a unit the setting cannot take (it would keep the wrong kind)', () => {
+    expect(conversions('field bias = 3.2 Gs\n', 0, 15)).toEqual([]);
+    expect(conversions('magnet m\n  gradient = 180 T\n', 1, 16)).toEqual([]);
+    expect(conversions('magnet m\n  gradient = 180 T/m\n', 1, 16).map((g) => g.title)).toEqual(['Convert to G/cm: 18000 G/cm']);
   });
 
   it('offers nothing for numbers with an uncertainty or without a unit', () => {

@@ -47,7 +47,20 @@ const CASES: Case[] = [
   {
     name: 'impossible J: the J values the term allows',
     text: 'species Na23\n  level upper: 3p 2P°5|/2\n',
-    has: ['not valid yet', '2P (S = 1/2, L = 1) allows J = 1/2, 3/2'],
+    has: ['the term is not valid: ', 'nothing is computed for this level yet', '2P (S = 1/2, L = 1) allows J = 1/2, 3/2'],
+  },
+  {
+    name: 'a wrong configuration is named as the wrong part, not the term',
+    text: 'species Na23\n  level upper: 3s3 3p 2P°3|/2\n',
+    has: ['the configuration is not valid: 3s holds at most 2 electrons'],
+    hasNot: ['the term is not valid'],
+  },
+  {
+    name: 'the run-together form of the built-in designation is a valid level (4f14 6s6p)',
+    // Yb 4f14 6s6p 3P°1: g_J = 3/2 in LS coupling with g_s = 2 (Landé formula, textbook).
+    text: 'species Yb174\n  level meta: 4f14 6s6p 3P°|1\n',
+    has: ['³P°₁', 'odd parity', 'exactly 3/2 with g_s = 2'],
+    hasNot: ['not valid'],
   },
   {
     name: 'field: other units, Zeeman scale and the sublevel table',
@@ -194,7 +207,51 @@ describe('hover on lines and resonances', () => {
     const text = plain(hoverText(hover(analysis, position)));
     expect(text).toContain('effective Landé factor g_eff = 1.16967');
     expect(text).toContain('68 components at field trap (3.23 G), strongest first');
-    expect(text).toMatch(/\| σ[−+] \| F=2, m_F=[-+]2 → F=3, m_F=[-+]3 \| \S+ GHz \| 1 \|/);
+    // At 3.23 G the 5P3/2 hyperfine structure (tens of MHz) is already past its linear range
+    // (the regime verdict says intermediate), so upper states carry both labels.
+    expect(text).toMatch(/\| σ[−+] \| F=2, m_F=[-+]2 → F=3, m_F=[-+]3 \/ m_J=[-+]3\/2, m_I=[-+]3\/2 \| \S+ GHz \| 1 \|/);
+    expect(text).toContain('labels: ground low-field |F, m_F>; p32 low-field / strong-field (intermediate field)');
+  });
+
+  it('leads with the answer: the line centre is on the title line', () => {
+    const { analysis, position } = atCursor(`${RB}line D|2: ground -> p32\n`);
+    const first = plain(hoverText(hover(analysis, position))).split('\n')[0]!;
+    // Steck, Rubidium 87 D Line Data: D2 at 384.230 484 468 5 THz, vacuum wavelength 780.241 209 686 nm.
+    expect(first).toMatch(/^line D2 in Rb87 — ν = 384\.230484\d* THz, vacuum wavelength 780\.24121\d* nm/);
+  });
+
+  it('two working fields of the same value share one component table', () => {
+    const two = 'species Rb87\n  level ground: 5s 2S1/2\n  level p32: 5p 2P°3/2\nfield f1 = 500 G\nfield f2 = 500 G\n';
+    const { analysis, position } = atCursor(`${two}line D|2: ground -> p32\n`);
+    const text = plain(hoverText(hover(analysis, position)));
+    expect(text).toContain('68 components at field f1 and field f2 (500 G), strongest first');
+    expect(text.match(/components at/g)).toHaveLength(1);
+  });
+
+  it('in a strong field the decoupled |m_J, m_I> labels name the states, without the linear column', () => {
+    // Na 3p 2P3/2 (A ≈ 18.5 MHz, Steck) at 1 T: μ_B·B/h ≈ 14 GHz ≫ hyperfine spread: Paschen–Back.
+    const { analysis, position } = atCursor('species Na23\n  level upper: 3p 2P°3/2\nfield str|ong = 1 T\n');
+    const text = plain(hoverText(hover(analysis, position)));
+    expect(text).toContain('regime: strong field');
+    expect(text).toContain('| state (strong-field label) | E/h exact | μ/μ_B |');
+    expect(text).toMatch(/\| m_J=\+3\/2, m_I=\+3\/2 \| /);
+    expect(text).not.toContain('linear formula |');
+  });
+
+  it('in the weak-field regime the low-field labels and the linear column stay', () => {
+    const { analysis, position } = atCursor('species Rb87\n  level ground: 5s 2S1/2\nfield we|ak = 100 mG\n');
+    const text = plain(hoverText(hover(analysis, position)));
+    expect(text).toContain('regime: weak field (linear)');
+    expect(text).toContain('| state (low-field label) | E/h exact | E/h linear formula | μ/μ_B |');
+    expect(text).not.toContain('strong-field label');
+  });
+
+  it('an intermediate field shows both labels and drops the linear column; thresholds to 3 digits', () => {
+    const { analysis, position } = atCursor('species Rb87\n  level ground: 5s 2S1/2\nfield mi|d = 500 G\n');
+    const text = plain(hoverText(hover(analysis, position)));
+    expect(text).toContain('| low-field label | strong-field label | E/h exact | μ/μ_B |');
+    expect(text).toContain('| F=2, m_F=+2 | m_J=+1/2, m_I=+3/2 |');
+    expect(text).toMatch(/below \d+(\.\d)? G; strong-field formula within it above \d\.\d\d T/);
   });
 
   it('shows the field-insensitive point of a two-photon pair', () => {
@@ -204,6 +261,20 @@ describe('hover on lines and resonances', () => {
     const text = plain(hoverText(hover(analysis, position)));
     expect(text).toMatch(/field-insensitive point: 3\.2289\d* G at 6\.83467\d* GHz/);
     expect(text).toContain('two-photon | F=1, m_F=-1 → F=2, m_F=+1');
+    // The answer leads, before the range searched and the tables.
+    expect(text.split('\n').slice(0, 3).join('\n')).toMatch(/^resonance clock of Rb87 ground\s*\nfield-insensitive point: 3\.2289/);
+  });
+
+  it('says when the range holds no field-insensitive point, as the CLI does; counts are singular when one', () => {
+    // The pair |1,0> ↔ |2,0> has df/dB = 0 only at B = 0 (quadratic shift), not inside 1 G to 2 G.
+    const { analysis, position } = atCursor(
+      'species Rb87\n  level ground: 5s 2S1/2\nfield trap = 3.23 G\nresonance cl|ock\n  level = ground\n  lower = 1 0\n  upper = 2 0\n  range = 1 G, 2 G\n',
+    );
+    const text = plain(hoverText(hover(analysis, position)));
+    expect(text).toContain('no field-insensitive point in the range');
+    expect(text).toContain('searched 1 G to 2 G');
+    // The chosen pair is one transition at the working field: "1 transition", not "1 transitions".
+    expect(text).toContain('1 transition at field trap (3.23 G)');
   });
 });
 
@@ -221,7 +292,17 @@ describe('hover on a beam', () => {
     const s = analysis.result!.beams[0]!.sublevels[0]!;
     const z = ((s.moment_J_per_T * 100) / (7.016003437 * ATOMIC_MASS_UNIT * 1000 ** 2)) * (0.1 ** 2 / 2 + 0.1 * 0.5);
     expect(s.mean_deflection_m / z).toBeCloseTo(1, 6);
-    expect(shown).toContain(`| F=1, m_F=+1 | 1.003 | 0.125 | ${(z * 1000).toPrecision(3)} mm |`);
-    expect(shown).toContain('Strong magnet (');
+    // At 1 T the Li-7 ground level (hyperfine 803.5 MHz ≪ μ_B·B/h ≈ 14 GHz) is decoupled: its
+    // |F=1, m_F=+1> is |m_J=-1/2, m_I=+3/2> (adiabatic connection, m_F = m_J + m_I).
+    expect(shown).toContain(`| m_J=-1/2, m_I=+3/2 | 1.003 | 0.125 | ${(z * 1000).toPrecision(3)} mm |`);
+    expect(shown).toContain('| sublevel (strong-field label) |');
+    // Each peak names its sublevels.
+    expect(shown).toMatch(/\| 4\.39 mm \| \S+ µm \| m_J=-1\/2, m_I=\+3\/2 \|/);
+    // The cautions in one line that fits the setup (no oven here, so no hot-oven caution).
+    const caution = shown.split('\n').filter((l) => l.startsWith('⚠'));
+    expect(caution).toEqual(["⚠ Strong magnet (1 T at the beam) · Alkali metal (Li) · Vacuum: follow your lab's safety rules (full cautions in the eval report)"]);
+    // The detector width in a unit read at a glance, not 0.00001 m.
+    expect(shown).toMatch(/detector = 10 µm\s*\n/);
+    expect(shown).not.toContain('0.00001 m');
   });
 });

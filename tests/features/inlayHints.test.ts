@@ -47,6 +47,13 @@ describe('inlay hints', () => {
     expect(labels({ start: { line: 9, character: 0 }, end: { line: 9, character: 0 } })).toEqual([]);
   });
 
+  it('writes half-integer F as fractions in the tooltip, as the hovers do', () => {
+    // J = 1/2, I = 1: F = 1/2 and 3/2, split by A(I + 1/2) = 1.5 A (textbook hyperfine interval rule).
+    const text = 'species Demo\n  mass = 40 u\n  I = 1\n  g_I = 0.0001\n  level g: 2S1/2  A = 100 MHz\n';
+    const hint = inlayHints(analysisOf(text), ALL).find((h) => String(h.label).startsWith('ΔE_hfs'))!;
+    expect(hint.tooltip).toBe('F = 1/2 ↔ 3/2: 150 MHz');
+  });
+
   it('gives no hints for an invalid level', () => {
     expect(inlayHints(analysisOf('species Na23\n  level x: 3p 2P°5/2\n'), ALL)).toEqual([]);
   });

@@ -37,7 +37,9 @@ describe('species', () => {
   it('requires a mass for a species defined by hand and suggests a built-in name', () => {
     const a = analyze('species Rb78\n');
     const p = a.problems.find((x) => x.code === 'species-needs-mass')!;
-    expect(p.message).toContain("'Rb87'");
+    // The canonical id leads the message (not an alias such as rubidium-87).
+    expect(p.message).toMatch(/^'Rb78' is not a built-in species; did you mean Rb87\b/);
+    expect(p.data).toMatchObject({ suggestions: expect.arrayContaining(['Rb87']) });
     expect(p.range).toEqual({ start: { line: 0, character: 8 }, end: { line: 0, character: 12 } });
   });
 

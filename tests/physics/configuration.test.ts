@@ -71,6 +71,46 @@ function onlyIssue(text: string): TextIssue {
   return issues[0];
 }
 
+describe('parseConfiguration: run-together subshells', () => {
+  // One digit between two subshell letters can only be the next n ('6s6p' = 6s 6p, occupancy 1
+  // implied): read as an occupancy it would leave the next subshell without n.
+  it.each([
+    ['6s6p', [[6, 0, 1], [6, 1, 1]], 'odd'],
+    ['1s2s', [[1, 0, 1], [2, 0, 1]], 'even'],
+    ['4f14 6s6p', [[4, 3, 14], [6, 0, 1], [6, 1, 1]], 'odd'],
+    ['3d9s', [[3, 2, 1], [9, 0, 1]], 'even'],
+  ] as const)('%s is accepted', (text, shells, parity) => {
+    const r = parseConfiguration(text);
+    expect(r.issues).toEqual([]);
+    expect(r.configuration?.subshells.map((s) => [s.n, s.l, s.occupancy])).toEqual(shells);
+    expect(r.configuration?.parity).toBe(parity);
+  });
+  it('subshell offsets of a run-together form', () => {
+    expect(parseConfiguration('6s6p').configuration?.subshells.map((s) => [s.start, s.end])).toEqual([[0, 2], [2, 4]]);
+  });
+  // Several digits are ambiguous in principle; the one split whose occupancy fits (≤ 4l+2) and
+  // whose n exceeds the next l is offered as the fix, and the parse goes on as if it were written.
+  it.each([
+    ['1s22s', '1s2 2s', 0, 5],
+    ['2p63s', '2p6 3s', 0, 5],
+    ['3d104s', '3d10 4s', 0, 6],
+  ])('%s is an error with the fix %s', (text, fix, start, end) => {
+    const r = parseConfiguration(text);
+    expect(r.issues).toEqual([expect.objectContaining({ code: 'config-malformed', start, end, suggestions: [fix] })]);
+    expect(r.issues[0]!.message).toContain(fix);
+  });
+  it('several run-together pairs each get their own fix', () => {
+    const r = parseConfiguration('1s22s22p6');
+    expect(r.issues.map((x) => x.suggestions)).toEqual([['1s2 2s'], ['2s2 2p']]);
+  });
+  it('with no split that fits, no fix is guessed', () => {
+    // '2s99s': 9 and 99 exceed the 2 electrons of an s subshell.
+    const r = parseConfiguration('2s99s');
+    expect(r.issues).toEqual([expect.objectContaining({ code: 'config-malformed', start: 0, end: 5 })]);
+    expect(r.issues[0]!.suggestions).toBeUndefined();
+  });
+});
+
 describe('parseConfiguration: bad forms', () => {
   it('occupancy above 4l+2', () => {
     expect(onlyIssue('2p7')).toMatchObject({ code: 'config-occupancy-too-large', start: 2, end: 3, suggestions: ['6'] });
@@ -89,7 +129,7 @@ describe('parseConfiguration: bad forms', () => {
     expect(onlyIssue('[ne] 3s')).toMatchObject({ code: 'config-unknown-core', suggestions: ['[Ne]'] });
   });
   it('malformed', () => {
-    expect(onlyIssue('2s2p')).toMatchObject({ code: 'config-malformed', start: 3, end: 4 });
+    expect(onlyIssue('2sp')).toMatchObject({ code: 'config-malformed', start: 2, end: 3 });
     expect(onlyIssue('')).toMatchObject({ code: 'config-malformed' });
     expect(onlyIssue('2p#')).toMatchObject({ code: 'config-malformed', start: 2, end: 3 });
     expect(onlyIssue('3s [Ne]')).toMatchObject({ code: 'config-malformed', start: 3, end: 7 });

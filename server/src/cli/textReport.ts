@@ -61,7 +61,7 @@ function levelReport(l: LevelResult, atFieldText: AtFieldText): string[] {
   const out: string[] = [];
   out.push('');
   const config = l.designation.configuration ? `${l.designation.configuration} ` : '';
-  out.push(`  level ${l.level}: ${config}${l.designation.unicode}   S = ${fraction(l.S)}, L = ${l.L}, J = ${l.J_text}, ${l.sublevel_count} sublevels`);
+  out.push(`  level ${l.level}: ${config}${l.designation.unicode}   S = ${fraction(l.S)}, L = ${l.L}, J = ${l.J_text}, ${l.sublevel_count} sublevel${l.sublevel_count === 1 ? '' : 's'}`);
   const g = l.g_J;
   const measured = g.measured ? `   measured ${trimNumber(g.measured.value, 8)} [${g.measured.source}]` : '';
   out.push(`    g_J (Landé) = ${trimNumber(g.lande, 9)}  (= ${g.lande_fraction} with g_s = 2)${measured}`);

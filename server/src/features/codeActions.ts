@@ -11,6 +11,7 @@ import { addJFix, missingArrowFix, missingColonFix, missingEqualsFix } from './c
 import { removeExtraValueFix, removeSettingFix } from './codeActions/removeSettingFix';
 import { suggestionFixes } from './codeActions/suggestionFixes';
 import type { FixBuilder, FixContext } from './codeActions/types';
+import { verifiedPreference } from './codeActions/verifyPreferred';
 import { sameRange } from './shared/names';
 
 /**
@@ -53,7 +54,7 @@ export function codeActions(analysis: Analysis, uri: string, request: CodeAction
       if (!problem) continue;
       const ctx: FixContext = { analysis, uri, diagnostic, problem };
       const builder = FIXES[problem.code] ?? (typeof problem.data?.removeSetting === 'string' ? removeSettingFix : suggestionFixes);
-      out.push(...builder(ctx));
+      out.push(...verifiedPreference(analysis.doc, problem, builder(ctx)));
     }
   }
   if (wants(request.only, CodeActionKind.RefactorRewrite)) out.push(...convertUnitActions(analysis, uri, request.range));

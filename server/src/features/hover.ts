@@ -72,7 +72,7 @@ function declaredSections(d: Declared, ctx: HoverContext): string[] {
     case 'magnet':
       return magnetSectionFor(d.item.name, ctx);
     case 'beam':
-      return [beamSection(d.item, ctx.analysis.result?.beams.find((b) => b.name === d.item.name), ctx.options.sublevelRows)];
+      return [beamSection(d.item, ctx.analysis.result?.beams.find((b) => b.name === d.item.name), ctx.options.sublevelRows, ctx.analysis.result)];
     case 'line':
       return [lineSection(d.item, ctx.analysis.result, ctx.options.sublevelRows)];
     case 'resonance': {

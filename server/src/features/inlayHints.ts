@@ -7,6 +7,7 @@
  */
 import { type InlayHint, InlayHintKind, type Position, type Range } from 'vscode-languageserver-types';
 import type { Analysis } from '../eval/analyze';
+import { halfText } from '../eval/halves';
 import { frequencyText, prefixedText, trimNumber } from '../eval/quantityText';
 import type { BlockNode, LevelNode } from '../format/ast';
 import { comparePositions } from '../format/positions';
@@ -47,7 +48,8 @@ function levelHints(analysis: Analysis, block: BlockNode, node: LevelNode, out: 
   const a = node.settings.find((s) => s.key.text === 'A');
   const at = a ? a.range.end : node.designation.range.end;
   const label = hf.intervals.length === 1 ? `ΔE_hfs ${frequencyText(hf.intervals[0]!.interval_Hz, 6)}` : `ΔE_hfs ${hf.intervals.map((i) => frequencyText(i.interval_Hz, 4)).join(', ')}`;
-  const tip = hf.intervals.map((i) => `F=${i.F_lower} ↔ ${i.F_upper}: ${frequencyText(i.interval_Hz)}`).join('\n');
+  // F written as the hovers and reports write it: 1/2, 3/2, not 0.5, 1.5.
+  const tip = hf.intervals.map((i) => `F = ${halfText(Math.round(2 * i.F_lower))} ↔ ${halfText(Math.round(2 * i.F_upper))}: ${frequencyText(i.interval_Hz)}`).join('\n');
   if (a) out.push(hint(at, label, tip));
   else out[out.length - 1] = { ...out[out.length - 1]!, label: `${out[out.length - 1]!.label as string}, ${label}`, tooltip: tip };
 }

@@ -34,7 +34,7 @@ export function editDistance(a: string, b: string, limit = Number.POSITIVE_INFIN
 }
 
 /** How many edits we allow for a word of this length (short words only differ by case). */
-function allowedEdits(length: number): number {
+export function allowedEdits(length: number): number {
   if (length <= 2) return 0;
   if (length <= 4) return 1;
   if (length <= 8) return 2;

@@ -131,6 +131,55 @@ function evaluateUnit(text: string): UnitEvaluation {
   return hit;
 }
 
+/** Long names of the SI prefixes, for saying how a prefixed unit was read (SI brochure). */
+const PREFIX_NAMES: Readonly<Record<string, string>> = {
+  P: 'peta', T: 'tera', G: 'giga', M: 'mega', k: 'kilo', h: 'hecto', da: 'deca', d: 'deci', c: 'centi',
+  m: 'milli', u: 'micro', n: 'nano', p: 'pico', f: 'femto',
+};
+/** Plural words for the base units a prefix can surprise on (`Gs`, `ms` meant as gauss, …). */
+const UNIT_WORDS: Readonly<Record<string, string>> = {
+  s: 'seconds', m: 'metres', g: 'grams', T: 'tesla', G: 'gauss', Hz: 'hertz', K: 'kelvin', J: 'joules', eV: 'electronvolts',
+  A: 'amperes', N: 'newtons', W: 'watts', V: 'volts', Pa: 'pascals', C: 'coulombs', L: 'litres', l: 'litres', mol: 'moles', rad: 'radians',
+};
+
+/** 'gigaseconds, a time' for `Gs`: how a one-name unit with a prefix was read; undefined otherwise. */
+function prefixedReading(text: string, value: UnitValue): string | undefined {
+  const canonical = knownCanonical(text);
+  if (canonical === undefined) return undefined;
+  let parts: { prefix: string; name: string };
+  try {
+    const u = math.unit(canonical).units[0]!;
+    parts = { prefix: (u.prefix as unknown as { name: string }).name, name: u.unit.name };
+  } catch {
+    return undefined;
+  }
+  const prefix = PREFIX_NAMES[parts.prefix];
+  const word = UNIT_WORDS[parts.name];
+  if (!prefix || !word) return undefined;
+  const kind = (Object.keys(DIMENSIONS) as Dimension[]).find((d) => d !== 'dimensionless' && ACCEPTED_DIMS[d].some((ref) => sameDims(ref, value.dims)));
+  const label = kind ? DIMENSIONS[kind].label : undefined;
+  return `${prefix}${word}${label ? `, ${/^[aeiou]/.test(label) ? 'an' : 'a'} ${label}` : ''}`;
+}
+
+/**
+ * The units to offer instead of one of the wrong dimension, nearest to what was written first:
+ * `Gs` → G, a field unit for a gradient → the same unit per length (`T` → T/m). `preferred` is set
+ * when one is clearly nearest (the written text starts with it, or it starts with the written text).
+ */
+function unitsNearest(written: string, expected: Dimension, value: UnitValue): { units: string[]; preferred?: string } {
+  const units = [...DIMENSIONS[expected].examples];
+  if (expected === 'gradient' && ACCEPTED_DIMS['flux-density'].some((ref) => sameDims(ref, value.dims))) {
+    const perLength = `${written}/${/G$|gauss$/.test(written) ? 'cm' : 'm'}`;
+    if (evaluateUnit(perLength).ok && !units.includes(perLength)) units.unshift(perLength);
+  }
+  const near = (u: string): boolean => written.startsWith(u) || u.startsWith(written) || written.toLowerCase() === u.toLowerCase();
+  const nearest = units.filter(near).sort((a, b) => Math.abs(a.length - written.length) - Math.abs(b.length - written.length));
+  const best = nearest[0];
+  const tie = nearest[1] !== undefined && best !== undefined && Math.abs(nearest[1].length - written.length) === Math.abs(best.length - written.length);
+  if (!best || tie) return { units };
+  return { units: [best, ...units.filter((u) => u !== best)], preferred: best };
+}
+
 /** Dimension vector of a unit from our table; for building the reference list below. */
 function dimsOf(text: string): number[] {
   const e = evaluateUnit(text);
@@ -298,9 +347,11 @@ export function readQuantity(part: ValuePart, expected: Dimension, what?: string
   }
   const si = toSI(part.number.value, e.value, expected);
   if (si === undefined) {
+    const readAs = prefixedReading(part.unit.text, e.value);
+    const fixes = unitsNearest(part.unit.text, expected, e.value);
     return {
-      problem: makeProblem('unit-wrong-dimension', `${label} needs ${examples}, got ${clip(part.unit.text)}`, part.unit.range, {
-        data: { suggestions: [...info.examples] },
+      problem: makeProblem('unit-wrong-dimension', `${label} needs ${examples}, got ${clip(part.unit.text)}${readAs ? ` (read as ${readAs})` : ''}`, part.unit.range, {
+        data: { suggestions: fixes.units, ...(fixes.preferred ? { preferred: fixes.preferred } : {}) },
       }),
     };
   }

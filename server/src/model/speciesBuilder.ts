@@ -3,10 +3,10 @@
  * overridden by the file's settings; a species defined by hand otherwise.
  */
 import type { BlockNode } from '../format/ast';
-import { suggestNames } from '../format/didYouMean';
+import { allowedEdits, editDistance } from '../format/didYouMean';
 import { ATOMIC_MASS_UNIT, NUCLEAR_MAGNETON } from '../physics/constants';
 import { nuclearGFromMoment } from '../physics/gFactors';
-import { findSpecies, speciesNames } from '../physics/species';
+import { findSpecies, normalizeSpeciesName, speciesSpellings } from '../physics/species';
 import { buildLevel } from './levelBuilder';
 import { NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
@@ -91,12 +91,25 @@ function applyNuclearG(
 
 function checkHandDefined(species: SpeciesModel, node: BlockNode, problems: ProblemList): void {
   if (species.builtin || species.massKg || node.settings.some((s) => s.key.text === 'mass')) return;
-  const suggestions = suggestNames(species.name, speciesNames());
-  const hint = suggestions.length > 0 ? ` If you meant a built-in species: ${suggestions.map((s) => `'${s}'`).join(' or ')}?` : '';
-  problems.add(
-    'species-needs-mass',
-    `'${species.name}' is not a built-in species, so it needs its own mass (mass = … u).${hint}`,
-    node.name?.range ?? node.headerRange,
-    { data: { suggestions } },
-  );
+  const near = nearSpecies(species.name);
+  const suggestions = near.map((n) => n.id);
+  // One clearly nearest built-in name is the likely meaning: say it first and prefer its fix.
+  const clear = near.length > 0 && (near.length === 1 || near[0]!.distance < near[1]!.distance) ? near[0]!.id : undefined;
+  const lead = suggestions.length > 0 ? `'${species.name}' is not a built-in species; did you mean ${suggestions.join(' or ')}? ` : `'${species.name}' is not a built-in species. `;
+  problems.add('species-needs-mass', `${lead}A species defined by hand needs its own mass (mass = … u).`, node.name?.range ?? node.headerRange, {
+    data: { suggestions, ...(clear ? { preferred: clear } : {}) },
+  });
+}
+
+/** Canonical ids of built-in species spelt close to `name` ('Rubidum87' → Rb87), nearest first. */
+function nearSpecies(name: string, max = 3): { id: string; distance: number }[] {
+  const key = normalizeSpeciesName(name);
+  if (key === '' || key.length > 64) return [];
+  const limit = allowedEdits(key.length);
+  const best = new Map<string, number>();
+  for (const [form, id] of speciesSpellings()) {
+    const d = editDistance(key, form, limit);
+    if (d <= limit && d < form.length && d < (best.get(id) ?? Number.POSITIVE_INFINITY)) best.set(id, d);
+  }
+  return [...best].map(([id, distance]) => ({ id, distance })).sort((a, b) => a.distance - b.distance).slice(0, max);
 }

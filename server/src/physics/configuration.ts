@@ -4,7 +4,9 @@
  * '3p 2P°3/2', '4f7 6s2 8S7/2', '2P3/2').
  *
  * Subshells are separated by spaces or dots; the occupancy follows the letter as ASCII
- * digits (optionally after '^') or superscript digits, and defaults to 1. A noble-gas core in
+ * digits (optionally after '^') or superscript digits, and defaults to 1. Subshells may run
+ * together when that is unambiguous: '6s6p' is 6s 6p (one digit between two letters can only be
+ * the next n); '1s22s' is an error whose fix is the one split that fits, '1s2 2s'. A noble-gas core in
  * brackets may come first. Offsets in issues and subshells are UTF-16 offsets into the text
  * passed in. Nothing here throws; the configuration is non-null exactly when no issue of
  * severity 'error' was found.
@@ -193,10 +195,29 @@ export function parseConfigurationAt(
       const superscript = isSuperscriptDigit(text[i] ?? '');
       const isOccDigit = superscript ? isSuperscriptDigit : isAsciiDigit;
       while (i < text.length && isOccDigit(text[i])) occText += digitChars.digitValue(text[i++]);
-      const occEnd = i;
+      let occEnd = i;
+      let glued = false;
       const n = Number(nText);
+      if (!superscript && occText.length > 0 && text[occStart - 1] !== '^' && /\p{L}/u.test(text[i] ?? '')) {
+        // Digits glued to a following letter start the next subshell, at least in part ('6s6p').
+        const split = runTogetherSplit(occText, letterToL(letter.toUpperCase()) ?? -1, letterToL((text[i] ?? '').toUpperCase()) ?? -1);
+        if (occText.length > 1) {
+          const whole = text.slice(start, i + 1);
+          const fixes = split.map((k) => `${whole.slice(0, occStart - start + k)} ${whole.slice(occStart - start + k)}`);
+          if (fixes.length !== 1) {
+            return bail(`'${whole}' runs two subshells together; put a space or '.' between them (e.g. 1s2 2s).`, start, i + 1);
+          }
+          issues.push(issue('config-malformed', `'${whole}' runs two subshells together; put a space between them: ${fixes[0]}.`, base + start, base + i + 1, 'error', fixes));
+        }
+        // One digit can only be the next n (occupancy 1 implied); several are read as the one split that fits.
+        const keep = occText.length > 1 && split.length === 1 ? split[0]! : 0;
+        occText = occText.slice(0, keep);
+        i = occStart + keep;
+        occEnd = i;
+        glued = true;
+      }
       const occupancy = occText.length > 0 ? Number(occText) : 1;
-      needSeparator = !superscript;
+      needSeparator = !superscript && !glued;
       sawSubshell = true;
       if (l < 0) continue;
 
@@ -384,6 +405,23 @@ function isAsciiDigit(c: string): boolean {
 function isSuperscriptDigit(c: string): boolean {
   return digitChars.SUPERSCRIPT_DIGITS.includes(c);
 }
+/**
+ * Where a digit run glued between two subshell letters can be split into an occupancy and the
+ * next n ('22' in '1s22s' → 1: '1s2 2s'): the occupancy fits the first subshell, n has no
+ * leading zero and exceeds the second subshell's l.
+ */
+function runTogetherSplit(digits: string, l1: number, l2: number): number[] {
+  const out: number[] = [];
+  for (let k = 1; k < digits.length; k++) {
+    const occ = Number(digits.slice(0, k));
+    const nText = digits.slice(k);
+    if (nText.startsWith('0') || occ < 1 || (l1 >= 0 && occ > subshellCapacity(l1))) continue;
+    if (l2 >= 0 && Number(nText) <= l2) continue;
+    out.push(k);
+  }
+  return out;
+}
+
 /** End of the current word (for underlining a run-together token). */
 function tokenEnd(text: string, i: number): number {
   let j = i;

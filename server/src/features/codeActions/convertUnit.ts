@@ -7,6 +7,7 @@ import type { Analysis } from '../../eval/analyze';
 import type { ValuePart } from '../../format/ast';
 import { convertSI, type Dimension, readQuantity } from '../../format/units';
 import { locate } from '../shared/locate';
+import { containsRange } from '../shared/names';
 import { convertTargets, dimensionOfUnit, displayUnit } from '../shared/units';
 
 /** Significant digits written in a decimal mantissa (`0.0450` → 3, `180` → 3, `8` → 1). */
@@ -77,5 +78,8 @@ function backToWritten(v: number, unit: string, written: string, d: Dimension): 
 export function convertUnitActions(analysis: Analysis, uri: string, range: Range): CodeAction[] {
   const t = locate(analysis.doc, range.start);
   if (!t || t.kind !== 'value' || !t.part) return [];
-  return unitConversions(t.part, uri);
+  // A unit the setting cannot take is fixed, not converted: a conversion would keep the wrong kind.
+  const part = t.part;
+  if (analysis.problems.some((p) => p.code.startsWith('unit-') && containsRange(part.range, p.range))) return [];
+  return unitConversions(part, uri);
 }

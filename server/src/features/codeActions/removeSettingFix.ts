@@ -7,12 +7,8 @@ import type { CodeAction, Range, TextEdit } from 'vscode-languageserver-types';
 import type { SettingNode, SetupDocument } from '../../format/ast';
 import { lineText, positionToOffset } from '../../format/positions';
 import { blockAt } from '../shared/locate';
+import { containsRange } from '../shared/names';
 import { type FixContext, quickFix } from './types';
-
-function containsRange(outer: Range, inner: Range): boolean {
-  const le = (a: Range['start'], b: Range['start']): boolean => a.line < b.line || (a.line === b.line && a.character <= b.character);
-  return le(outer.start, inner.start) && le(inner.end, outer.end);
-}
 
 /**
  * Edit that removes [from, to) on one line: with the blanks before it when something precedes

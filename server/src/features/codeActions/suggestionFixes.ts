@@ -33,6 +33,8 @@ function title(code: string, s: string): string {
       return `Use the built-in species ${s}`;
     case 'beam-source-malformed':
       return `Write source = ${s}`;
+    case 'config-malformed':
+      return `Write '${s}'`;
     default:
       return s === '' ? 'Remove it' : `Replace with '${s}'`;
   }
@@ -44,5 +46,9 @@ export function suggestionFixes(ctx: FixContext): CodeAction[] {
   const suggestions = raw.filter((s): s is string => typeof s === 'string').slice(0, 24);
   const range = ctx.problem.range;
   if (range.start.line !== range.end.line) return [];
-  return suggestions.map((s) => quickFix(ctx, title(ctx.problem.code, s), [{ range, newText: s }], suggestions.length === 1));
+  // The problem may name the one suggestion that is clearly meant (`Gs` → G); it goes first.
+  const named = ctx.problem.data?.preferred;
+  const preferred = typeof named === 'string' && suggestions.includes(named) ? named : suggestions.length === 1 ? suggestions[0] : undefined;
+  const ordered = preferred === undefined ? suggestions : [preferred, ...suggestions.filter((s) => s !== preferred)];
+  return ordered.map((s) => quickFix(ctx, title(ctx.problem.code, s), [{ range, newText: s }], s === preferred));
 }

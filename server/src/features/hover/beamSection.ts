@@ -1,15 +1,18 @@
 /**
  * A beam: what it is made of (species, level, source, slits, magnet, drift, detector) and,
- * when the evaluation computed it, the deflection of each sublevel at the detector, the peaks,
- * and whether neighbouring peaks are resolved.
+ * when the evaluation computed it, whether the peaks are resolved, the peaks with the sublevels in
+ * them, the deflection of each sublevel (labelled as the regime at the magnet says), and the
+ * cautions in one line.
  */
 import { levelDesignationText } from '../../eval/designationText';
-import type { BeamResult } from '../../eval/resultTypes';
+import type { BeamResult, EvaluationResult, LevelResult } from '../../eval/resultTypes';
 import { lengthText, speedText, trimNumber } from '../../eval/quantityText';
 import { beamPositionNoise } from '../../eval/noiseFloors';
 import type { BeamModel } from '../../model/types';
 import { md, mdTable, mdTitle } from '../shared/markdown';
+import { levelResult } from '../shared/results';
 import { valueInUnits } from '../shared/units';
+import { labelsAt, stateHeader, stateLabel } from './regimeLabels';
 
 function sourceText(b: BeamModel): string {
   const s = b.source?.value;
@@ -47,31 +50,56 @@ export function beamVerdict(r: BeamResult): string | undefined {
   return `${peaks}, not all resolved${r.resolving_advice ? `. ${r.resolving_advice}` : ''}`;
 }
 
-function results(r: BeamResult, maxRows: number): string | undefined {
+/**
+ * The cautions in one line: the lead words of each (what the hazard is, with the setup's number),
+ * the full text staying in the eval report and docs/beam.md.
+ */
+export function cautionLine(cautions: readonly string[]): string | undefined {
+  if (cautions.length === 0) return undefined;
+  const heads = cautions.map((c) => c.split(':')[0]!.trim());
+  return `⚠ ${md(heads.join(' · '))}: follow your lab's safety rules (full cautions in the eval report)`;
+}
+
+/** Peak members as the labels that describe the states at the magnet's field, shortened past four. */
+function membersText(members: readonly string[], label: (low: string) => string): string {
+  const shown = members.slice(0, 4).map((m) => md(label(m)));
+  return members.length > 4 ? `${shown.join('; ')}; … (${members.length} sublevels)` : shown.join('; ');
+}
+
+function results(r: BeamResult, maxRows: number, level: LevelResult | undefined): string | undefined {
   if (!r.computed) return undefined;
   const parts: string[] = [];
   const verdict = beamVerdict(r);
   if (verdict) parts.push(`${mdTitle('At the detector')}: ${verdict}`);
   if (r.speeds) parts.push(`mean speed ${speedText(r.speeds.mean_m_per_s)}, most probable ${speedText(r.speeds.most_probable_m_per_s)}`);
   const noise = beamPositionNoise(r);
-  if (r.sublevels.length > 0) {
+  // The states are named as the level's regime at the magnet's field says (|m_J, m_I> when decoupled).
+  const highOf = new Map(r.sublevels.map((s) => [s.label, s.high_label]));
+  const scheme = r.magnet ? labelsAt(level, { kind: 'magnet', name: r.magnet }).scheme : 'low';
+  const label = (low: string): string => stateLabel({ low, high: highOf.get(low) }, scheme);
+  if (r.peaks.length > 0) {
     parts.push(
       mdTable(
-        ['sublevel', 'μ/μ_B', 'population', 'mean deflection'],
-        r.sublevels.slice(0, maxRows).map((s) => [md(s.label), trimNumber(s.moment_bohr, 4), trimNumber(s.population, 3), lengthText(s.mean_deflection_m, 4, noise)]),
+        ['peak at', 'FWHM', 'sublevels in it'],
+        r.peaks.map((p) => [lengthText(p.position_m, 4, noise), p.fwhm_m !== null ? lengthText(p.fwhm_m) : '—', membersText(p.members, label)]),
       ),
     );
   }
-  if (r.peaks.length > 0) {
+  if (r.sublevels.length > 0) {
     parts.push(
-      `peaks: ${r.peaks.map((p) => `${lengthText(p.position_m, 4, noise)}${p.fwhm_m !== null ? ` (FWHM ${lengthText(p.fwhm_m)})` : ''}`).join('; ')}`,
+      mdTable(
+        [stateHeader(scheme).replace(/^state/, 'sublevel'), 'μ/μ_B', 'population', 'mean deflection'],
+        r.sublevels.slice(0, maxRows).map((s) => [md(label(s.label)), trimNumber(s.moment_bohr, 4), trimNumber(s.population, 3), lengthText(s.mean_deflection_m, 4, noise)]),
+      ),
     );
   }
-  for (const c of r.cautions) parts.push(`⚠ ${md(c)}`);
+  const caution = cautionLine(r.cautions);
+  if (caution) parts.push(caution);
   return parts.join('\n\n');
 }
 
-export function beamSection(b: BeamModel, r: BeamResult | undefined, maxRows: number): string {
-  const res = r ? results(r, maxRows) : undefined;
+export function beamSection(b: BeamModel, r: BeamResult | undefined, maxRows: number, result?: Pick<EvaluationResult, 'levels'>): string {
+  const level = b.species && b.level ? levelResult(result, b.species.name, b.level.name) : undefined;
+  const res = r ? results(r, maxRows, level) : undefined;
   return res ? `${inputs(b)}\n\n${res}` : inputs(b);
 }

@@ -1,6 +1,7 @@
 /**
- * A line: its two levels (term, J, g_J), ΔJ, the effective Landé factor, the line centre with
- * its vacuum wavelength, and the Zeeman components at each working field (strongest first).
+ * A line: the line centre with its vacuum wavelength first, then its two levels (term, J, g_J),
+ * ΔJ, the effective Landé factor, and the Zeeman components at each working field (strongest
+ * first; fields of equal value share one table), labelled as each level's regime at that field says.
  */
 import type { EvaluationResult, LevelResult, LineResult } from '../../eval/resultTypes';
 import { frequencyText, trimNumber } from '../../eval/quantityText';
@@ -9,7 +10,9 @@ import { fieldInUnit, workingFieldUnit } from '../../eval/writtenUnit';
 import type { LineModel } from '../../model/types';
 import { SPEED_OF_LIGHT } from '../../physics/constants';
 import { md, mdTable, mdTitle } from '../shared/markdown';
+import { sameFieldGroups, sourcesText } from './sameField';
 import { levelResult } from '../shared/results';
+import { type LabelScheme, labelsAt, schemeWords } from './regimeLabels';
 
 function levelLine(role: string, name: string | undefined, r: LevelResult | undefined): string {
   if (!name) return `${role}: not resolved`;
@@ -31,15 +34,27 @@ export function lineFrequency(
   return { hz, vacuumNm: (SPEED_OF_LIGHT / Math.abs(hz)) * 1e9 };
 }
 
-function componentsSection(r: LineResult, maxRows: number, result: EvaluationResult | undefined): string[] {
+/** Which labels the table uses, said only when they are not the low-field ones everywhere. */
+function labelNote(lower: { name: string; scheme: LabelScheme }, upper: { name: string; scheme: LabelScheme }): string {
+  if (lower.scheme === 'low' && upper.scheme === 'low') return '';
+  if (lower.scheme === upper.scheme) return `labels: ${schemeWords(lower.scheme)}`;
+  return `labels: ${md(lower.name)} ${schemeWords(lower.scheme)}; ${md(upper.name)} ${schemeWords(upper.scheme)}`;
+}
+
+function componentsSection(r: LineResult, lower: LevelResult | undefined, upper: LevelResult | undefined, maxRows: number, result: EvaluationResult | undefined): string[] {
   const out: string[] = [];
-  for (const at of r.at_fields) {
-    if (at.components.length === 0) continue;
+  for (const group of sameFieldGroups(r.at_fields, (at) => at.components.length)) {
+    const at = group[0]!;
+    const lo = labelsAt(lower, at.source);
+    const up = labelsAt(upper, at.source);
     const sorted = [...at.components].sort((a, b) => b.strength - a.strength);
-    const rows = sorted.slice(0, maxRows).map((c) => [md(polarizationSymbol(c.polarization)), `${md(c.lower_label)} → ${md(c.upper_label)}`, frequencyText(c.offset_Hz), trimNumber(c.strength, 3)]);
+    const rows = sorted.slice(0, maxRows).map((c) => [md(polarizationSymbol(c.polarization)), `${md(lo.label(c.lower_label))} → ${md(up.label(c.upper_label))}`, frequencyText(c.offset_Hz), trimNumber(c.strength, 3)]);
     const more = sorted.length - rows.length;
+    const count = `${sorted.length} component${sorted.length === 1 ? '' : 's'}`;
+    const note = labelNote({ name: lower?.level ?? 'lower', scheme: lo.scheme }, { name: upper?.level ?? 'upper', scheme: up.scheme });
+    const labels = note ? `  \n${note}` : '';
     out.push(
-      `${mdTitle(`${sorted.length} components`)} at ${md(at.source.kind)} ${md(at.source.name)} (${fieldInUnit(at.field_T, { unit: result && workingFieldUnit(result, at.source) })}), strongest first`,
+      `${mdTitle(count)} at ${sourcesText(group, md)} (${fieldInUnit(at.field_T, { unit: result && workingFieldUnit(result, at.source) })}), strongest first${labels}`,
       mdTable(['pol.', 'lower → upper', 'offset from centre', 'strength'], rows) + (more > 0 ? `\n\n… and ${more} more` : ''),
     );
   }
@@ -51,7 +66,10 @@ export function lineSection(line: LineModel, result: EvaluationResult | undefine
   const upper = line.upper ? levelResult(result, line.upper.species.name, line.upper.name) : undefined;
   const r = result?.lines.find((l) => l.name === line.name);
   const species = line.lower?.species.name ?? line.upper?.species.name;
-  const lines = [`${mdTitle(`line ${md(line.name)}`)}${species ? ` in ${md(species)}` : ''}`];
+  // The answer first: where the line is, then how it is made.
+  const f = lineFrequency(r, lower, upper);
+  const title = `${mdTitle(`line ${md(line.name)}`)}${species ? ` in ${md(species)}` : ''}`;
+  const lines = [f ? `${title} — ν = ${frequencyText(f.hz, 9)}, vacuum wavelength ${trimNumber(f.vacuumNm, 8)} nm` : title];
   lines.push(levelLine('lower', line.lower?.name, lower), levelLine('upper', line.upper?.name, upper));
   if (lower && upper) {
     const dTwoJ = Math.round(2 * upper.J) - Math.round(2 * lower.J);
@@ -59,7 +77,5 @@ export function lineSection(line: LineModel, result: EvaluationResult | undefine
     lines.push(`ΔJ = ${dJ}`);
   }
   if (r?.g_eff !== undefined) lines.push(`effective Landé factor g_eff = ${trimNumber(r.g_eff, 6)}`);
-  const f = lineFrequency(r, lower, upper);
-  if (f) lines.push(`ν = ${frequencyText(f.hz, 9)}, vacuum wavelength ${trimNumber(f.vacuumNm, 8)} nm`);
-  return [lines.join('  \n'), ...(r ? componentsSection(r, maxRows, result) : [])].join('\n\n');
+  return [lines.join('  \n'), ...(r ? componentsSection(r, lower, upper, maxRows, result) : [])].join('\n\n');
 }

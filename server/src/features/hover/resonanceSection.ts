@@ -1,7 +1,8 @@
 /**
- * A resonance block: the RF/microwave transitions of its level at each working field (with
- * their field sensitivity), the field-insensitive points of the chosen pair, and the fields
- * where the given frequency is resonant.
+ * A resonance block: first the answer (the field-insensitive points of the chosen pair, the
+ * fields where the given frequency is resonant, or that the searched range has none), then the
+ * RF/microwave transitions of its level at each working field with their field sensitivity
+ * (equal fields share one table; labels follow the level's regime there).
  */
 import type { EvaluationResult, MagneticTransitionResult, ResonanceResult } from '../../eval/resultTypes';
 import { curvatureText, frequencyText, sensitivityText } from '../../eval/quantityText';
@@ -9,28 +10,46 @@ import { SENSITIVITY_NOISE } from '../../eval/noiseFloors';
 import { polarizationSymbol } from '../../eval/polarizationName';
 import { fieldInUnit, workingFieldUnit } from '../../eval/writtenUnit';
 import { md, mdTable, mdTitle } from '../shared/markdown';
+import { sameFieldGroups, sourcesText } from './sameField';
+import { levelResult } from '../shared/results';
+import { labelsAt, schemeWords } from './regimeLabels';
 
-function transitionRow(t: MagneticTransitionResult): string[] {
-  return [md(polarizationSymbol(t.kind)), `${md(t.lower_label)} → ${md(t.upper_label)}`, frequencyText(t.frequency_Hz, 10), sensitivityText(t.df_dB_Hz_per_T, 5, SENSITIVITY_NOISE)];
+function transitionRow(t: MagneticTransitionResult, label: (low: string) => string): string[] {
+  return [md(polarizationSymbol(t.kind)), `${md(label(t.lower_label))} → ${md(label(t.upper_label))}`, frequencyText(t.frequency_Hz, 10), sensitivityText(t.df_dB_Hz_per_T, 5, SENSITIVITY_NOISE)];
 }
 
-export function resonanceSection(r: ResonanceResult, maxRows: number, result?: Pick<EvaluationResult, 'fields' | 'magnets'>): string {
+function plural(n: number, word: string): string {
+  return `${n} ${word}${n === 1 ? '' : 's'}`;
+}
+
+export function resonanceSection(r: ResonanceResult, maxRows: number, result?: Pick<EvaluationResult, 'fields' | 'magnets' | 'levels'>): string {
   const [fromUnit, toUnit] = r.range_units ?? [];
   // Fields found in the range are shown in the unit family the range was written in.
   const found = (t: number): string => fieldInUnit(t, { family: toUnit });
-  const parts = [`${mdTitle(`resonance ${md(r.name)}`)}${r.level ? ` of ${md(r.species ?? '')} ${md(r.level)}` : ''} — searched ${fieldInUnit(r.range_T[0], { unit: fromUnit })} to ${fieldInUnit(r.range_T[1], { unit: toUnit })}`];
-  for (const p of r.field_insensitive ?? []) {
-    parts.push(`field-insensitive point: ${found(p.field_T)} at ${frequencyText(p.frequency_Hz, 10)} (curvature ${curvatureText(p.d2f_dB2_Hz_per_T2, 5)})`);
+  const searched = `searched ${fieldInUnit(r.range_T[0], { unit: fromUnit })} to ${fieldInUnit(r.range_T[1], { unit: toUnit })}`;
+  // The answer first: the field-insensitive points and resonances, or that there are none in the range.
+  const answers: string[] = [];
+  if (r.field_insensitive) {
+    if (r.field_insensitive.length === 0) answers.push('no field-insensitive point in the range');
+    for (const p of r.field_insensitive) {
+      answers.push(`field-insensitive point: ${found(p.field_T)} at ${frequencyText(p.frequency_Hz, 10)} (curvature ${curvatureText(p.d2f_dB2_Hz_per_T2, 5)})`);
+    }
   }
-  for (const x of r.resonances ?? []) {
-    parts.push(`resonant at ${found(x.field_T)}: ${md(x.transition.lower_label)} → ${md(x.transition.upper_label)}`);
+  if (r.resonances) {
+    if (r.resonances.length === 0) answers.push('not resonant anywhere in the range');
+    for (const x of r.resonances) answers.push(`resonant at ${found(x.field_T)}: ${md(x.transition.lower_label)} → ${md(x.transition.upper_label)}`);
   }
-  for (const at of r.at_fields) {
-    if (at.transitions.length === 0) continue;
-    const rows = at.transitions.slice(0, maxRows).map(transitionRow);
+  const title = `${mdTitle(`resonance ${md(r.name)}`)}${r.level ? ` of ${md(r.species ?? '')} ${md(r.level)}` : ''}`;
+  const parts = [[title, ...answers, searched].join('  \n')];
+  const level = r.species && r.level ? levelResult(result, r.species, r.level) : undefined;
+  for (const group of sameFieldGroups(r.at_fields, (at) => at.transitions.length)) {
+    const at = group[0]!;
+    const { scheme, label } = labelsAt(level, at.source);
+    const rows = at.transitions.slice(0, maxRows).map((t) => transitionRow(t, label));
     const more = at.transitions.length - rows.length;
+    const where = sourcesText(group, md);
     parts.push(
-      `${mdTitle(`${at.transitions.length} transitions`)} at ${md(at.source.kind)} ${md(at.source.name)} (${fieldInUnit(at.field_T, { unit: result && workingFieldUnit(result, at.source) })})`,
+      `${mdTitle(plural(at.transitions.length, 'transition'))} at ${where} (${fieldInUnit(at.field_T, { unit: result && workingFieldUnit(result, at.source) })})${scheme === 'low' ? '' : `  \nlabels: ${schemeWords(scheme)}`}`,
       mdTable(['kind', 'lower → upper', 'frequency', 'df/dB'], rows) + (more > 0 ? `\n\n… and ${more} more` : ''),
     );
   }

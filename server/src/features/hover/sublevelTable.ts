@@ -1,19 +1,20 @@
 /**
  * The sublevels of one level at one field as a Markdown table, lowest energy first: the exact
- * energy from diagonalisation, the weak-field (linear) value beside it, and the magnetic
- * moment; with the regime the level is in at that field. Falls back to the linear energies
- * when the evaluation has no exact ones.
+ * energy from diagonalisation, the weak-field (linear) value beside it while that formula holds,
+ * and the magnetic moment; states carry the labels of the regime the level is in at that field.
+ * Falls back to the linear energies when the evaluation has no exact ones.
  */
 import { fieldText, frequencyText, trimNumber } from '../../eval/quantityText';
 import { md, mdTable } from '../shared/markdown';
 import type { SublevelsAtField } from '../shared/results';
+import { labelScheme, stateHeader, stateLabel } from './regimeLabels';
 
 export function regimeLine(point: SublevelsAtField): string | undefined {
   const r = point.regime;
   if (!r) return undefined;
   const limits: string[] = [];
-  if (r.linear_limit_T !== null) limits.push(`linear formula within ${trimNumber(r.fraction * 100, 3)} % below ${fieldText(r.linear_limit_T)}`);
-  if (r.strong_limit_T !== null) limits.push(`strong-field formula within it above ${fieldText(r.strong_limit_T)}`);
+  if (r.linear_limit_T !== null) limits.push(`linear formula within ${trimNumber(r.fraction * 100, 3)} % below ${fieldText(r.linear_limit_T, 3)}`);
+  if (r.strong_limit_T !== null) limits.push(`strong-field formula within it above ${fieldText(r.strong_limit_T, 3)}`);
   return `regime: ${md(r.verdict)}${limits.length > 0 ? ` — ${limits.join('; ')}` : ''}`;
 }
 
@@ -23,12 +24,26 @@ export function sublevelTable(point: SublevelsAtField, maxRows: number): string 
   let total = 0;
   if (point.exact.length > 0) {
     total = point.exact.length;
-    table = mdTable(
-      ['state (low-field label)', 'E/h exact', 'E/h linear formula', 'μ/μ_B'],
-      point.exact
-        .slice(0, rows)
-        .map((s) => [md(s.low_label), frequencyText(s.energy_Hz), s.linear_energy_Hz !== undefined ? frequencyText(s.linear_energy_Hz) : '—', trimNumber(s.moment_bohr, 4)]),
-    );
+    const scheme = labelScheme(point.regime);
+    // The linear formula is only shown where it holds (within the regime's fraction); past the
+    // weak-field regime it can be off by more than the splitting itself.
+    const linear = scheme === 'low';
+    const shown = point.exact.slice(0, rows);
+    table =
+      scheme === 'both'
+        ? mdTable(
+            ['low-field label', 'strong-field label', 'E/h exact', 'μ/μ_B'],
+            shown.map((s) => [md(s.low_label), md(s.high_label), frequencyText(s.energy_Hz), trimNumber(s.moment_bohr, 4)]),
+          )
+        : mdTable(
+            [stateHeader(scheme), 'E/h exact', ...(linear ? ['E/h linear formula'] : []), 'μ/μ_B'],
+            shown.map((s) => [
+              md(stateLabel({ low: s.low_label, high: s.high_label }, scheme)),
+              frequencyText(s.energy_Hz),
+              ...(linear ? [s.linear_energy_Hz !== undefined ? frequencyText(s.linear_energy_Hz) : '—'] : []),
+              trimNumber(s.moment_bohr, 4),
+            ]),
+          );
   } else if (point.linear && point.linear.length > 0) {
     total = point.linear.length;
     table = mdTable(['sublevel', 'E/h (linear formula)'], point.linear.slice(0, rows).map((s) => [md(s.label), frequencyText(s.energy_Hz)]));

@@ -8,6 +8,7 @@ import type { LevelResult } from '../../eval/resultTypes';
 import { halfText } from '../../eval/halves';
 import { trimNumber } from '../../eval/quantityText';
 import type { LevelModel } from '../../model/types';
+import { parseLevelDesignation } from '../../physics/configuration';
 import { allowedJ, formatTermLabel, formatTermSymbol } from '../../physics/termSymbol';
 import { md, mdTitle } from '../shared/markdown';
 
@@ -60,7 +61,7 @@ function unevaluatedTermSection(level: LevelModel): string {
   return [
     head.join(' '),
     `J = ${halfText(twoJ)}; ${md(formatTermLabel(term.twoS, term.L))} allows J = ${allowedJ(term.twoS, term.L).map(halfText).join(', ')}`,
-    `${(twoJ + 1) * (twoI + 1)} sublevels`,
+    `${(twoJ + 1) * (twoI + 1)} sublevel${(twoJ + 1) * (twoI + 1) === 1 ? '' : 's'}`,
     'g-factors and energies appear once the evaluation has run',
   ].join('  \n');
 }
@@ -75,12 +76,26 @@ function termLetters(text: string): { twoS: number; L: number } | undefined {
   return twoS >= 0 && L >= 0 ? { twoS, L } : undefined;
 }
 
+/** Which part of a designation is wrong, with the first error's words ('the configuration: 6s holds …'). */
+function wrongPart(text: string): string {
+  const first = parseLevelDesignation(text).issues.find((i) => i.severity === 'error');
+  if (!first) return 'this level is not valid';
+  const part = first.code.startsWith('config-')
+    ? 'the configuration is not valid'
+    : first.code === 'term-not-in-configuration' || first.code === 'term-parity-mismatch'
+      ? 'the term does not fit the configuration'
+      : first.code === 'level-missing-term' || first.code === 'level-empty'
+        ? 'the term is missing'
+        : 'the term is not valid';
+  return `${part}: ${md(first.message.replace(/\.$/, ''))}`;
+}
+
 function invalidTermSection(level: LevelModel): string {
   const term = level.term;
   const lines = [mdTitle(md(level.designationText || '(no term)'))];
   const sl = term ? { twoS: term.twoS, L: term.L } : termLetters(level.designationText);
   if (term && term.twoJ === null) lines.push(`${md(formatTermSymbol(term, 'unicode'))} has no J yet`);
-  else lines.push('this term is not valid yet, so nothing is computed for it');
+  else lines.push(`${wrongPart(level.designationText)}, so nothing is computed for this level yet`);
   if (sl) {
     const js = allowedJ(sl.twoS, sl.L).map(halfText);
     lines.push(`${md(formatTermLabel(sl.twoS, sl.L))} (S = ${halfText(sl.twoS)}, L = ${sl.L}) allows J = ${js.join(', ')}`);

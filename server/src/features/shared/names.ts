@@ -37,6 +37,12 @@ export function sameRange(a: Range, b: Range): boolean {
   );
 }
 
+/** Is `inner` inside `outer` (ends included)? */
+export function containsRange(outer: Range, inner: Range): boolean {
+  const le = (a: Range['start'], b: Range['start']): boolean => a.line < b.line || (a.line === b.line && a.character <= b.character);
+  return le(outer.start, inner.start) && le(inner.end, outer.end);
+}
+
 /**
  * The declaration a use stands for: itself when it is one, its target when it resolved, else
  * undefined. `uri` is set when the declaration is in another file (through `use`).

@@ -1,13 +1,13 @@
 /** Lookups from the model to the evaluation result (by species and level name). */
 import type { EvaluationResult, FieldPointResult, LevelResult, TermResult } from '../../eval/resultTypes';
 
-const levelIndex = new WeakMap<EvaluationResult, Map<string, LevelResult>>();
+const levelIndex = new WeakMap<Pick<EvaluationResult, 'levels'>, Map<string, LevelResult>>();
 
 function key(species: string, level: string): string {
   return `${species}\u0000${level}`;
 }
 
-export function levelResult(result: EvaluationResult | undefined, species: string, level: string): LevelResult | undefined {
+export function levelResult(result: Pick<EvaluationResult, 'levels'> | undefined, species: string, level: string): LevelResult | undefined {
   if (!result) return undefined;
   let index = levelIndex.get(result);
   if (!index) {

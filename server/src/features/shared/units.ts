@@ -107,12 +107,23 @@ function bestInFamily(si: number, d: Dimension, family: readonly string[]): stri
  */
 export function valueInUnits(si: number, d: Dimension, written?: string): string[] {
   const echoed = inWrittenUnit(si, d, written);
-  const out: string[] = echoed ? [echoed] : [];
+  const others: string[] = [];
   const writtenFamily = written === undefined ? undefined : FAMILIES[d].find((f) => f.includes(written));
   for (const family of FAMILIES[d]) {
     if (echoed && family === writtenFamily) continue;
     const text = bestInFamily(si, d, family);
-    if (text && !out.includes(text)) out.push(text);
+    if (text && text !== echoed && !others.includes(text)) others.push(text);
   }
-  return out;
+  // A form nobody reads at a glance (0.000025 m for 25 µm) is left out when a readable one exists;
+  // the user's own text stays, but after the readable form.
+  const readable = others.filter((t) => !hardToRead(t));
+  const shown = readable.length > 0 || (echoed !== undefined && !hardToRead(echoed)) ? readable : others;
+  if (!echoed) return shown;
+  return hardToRead(echoed) && readable.length > 0 ? [...shown, echoed] : [echoed, ...shown];
+}
+
+/** A plain number below 0.001 or from a million up: `0.000025 m`, `2500000 Hz`. */
+function hardToRead(text: string): boolean {
+  const n = Number(text.split(' ')[0]!.replace('−', '-'));
+  return Number.isFinite(n) && n !== 0 && (Math.abs(n) < 1e-3 || Math.abs(n) >= 1e6);
 }

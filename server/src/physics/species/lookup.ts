@@ -56,6 +56,11 @@ export function speciesNames(): string[] {
   return names;
 }
 
+/** Every accepted spelling (normalized) with the canonical id it names, for did-you-mean. */
+export function speciesSpellings(): [spelling: string, id: string][] {
+  return [...INDEX].map(([form, s]) => [form, s.id]);
+}
+
 /** A level of a species by its key ('ground', 'P3/2', …), case-insensitive. */
 export function findBuiltinLevel(species: BuiltinSpecies, key: string): BuiltinLevel | undefined {
   const wanted = key.trim().toLowerCase();
