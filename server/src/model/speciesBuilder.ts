@@ -6,7 +6,7 @@ import type { BlockNode } from '../format/ast';
 import { allowedEdits, editDistance } from '../format/didYouMean';
 import { ATOMIC_MASS_UNIT, NUCLEAR_MAGNETON } from '../physics/constants';
 import { nuclearGFromMoment } from '../physics/gFactors';
-import { findSpecies, normalizeSpeciesName, speciesSpellings } from '../physics/species';
+import { findSpecies, normalizedSpellings, normalizeSpeciesName } from '../physics/species';
 import { buildLevel } from './levelBuilder';
 import { NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
@@ -107,7 +107,7 @@ function nearSpecies(name: string, max = 3): { id: string; distance: number }[] 
   if (key === '' || key.length > 64) return [];
   const limit = allowedEdits(key.length);
   const best = new Map<string, number>();
-  for (const [form, id] of speciesSpellings()) {
+  for (const [form, id] of normalizedSpellings()) {
     const d = editDistance(key, form, limit);
     if (d <= limit && d < form.length && d < (best.get(id) ?? Number.POSITIVE_INFINITY)) best.set(id, d);
   }

@@ -57,7 +57,7 @@ export function speciesNames(): string[] {
 }
 
 /** Every accepted spelling (normalized) with the canonical id it names, for did-you-mean. */
-export function speciesSpellings(): [spelling: string, id: string][] {
+export function normalizedSpellings(): [spelling: string, id: string][] {
   return [...INDEX].map(([form, s]) => [form, s.id]);
 }
 
