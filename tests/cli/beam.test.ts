@@ -3,20 +3,9 @@ import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import { BOLTZMANN_K, BOHR_MAGNETON, ELECTRON_GS } from '../../server/src/physics/constants';
 import { cli } from './runCli';
+import { magnetAndBeam } from '../fixtures/ovenBeam';
 
-const geometry = `
-magnet m
-  field = 0.5 T
-  gradient = 100 T/m
-  length = 10 cm
-beam b
-  level = g
-  source = oven 500 K
-  slits = 30 um, 30 um apart 50 cm
-  magnet = m
-  drift = 40 cm
-  detector = 10 um
-`;
+const geometry = magnetAndBeam();
 
 function beamOf(text: string) {
   const a = analyze(text);

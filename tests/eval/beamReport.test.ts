@@ -1,22 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import { textReport } from '../../server/src/cli/textReport';
+import { magnetAndBeam, speciesX } from '../fixtures/ovenBeam';
 
-const SETUP = `species X
-  mass = 52 u
-  level g: 3S1
-magnet m
-  field = 0.5 T
-  gradient = 0.5 T/m
-  length = 10 cm
-beam b
-  level = g
-  source = oven 500 K
-  slits = 30 um, 30 um apart 50 cm
-  magnet = m
-  drift = 40 cm
-  detector = 10 um
-`;
+const SETUP = speciesX('52 u', '3S1') + magnetAndBeam('0.5 T/m');
 
 describe('beam results say the same thing everywhere', () => {
   it('the resolving suggestions of the diagnostic, the JSON and the text report are one sentence', () => {

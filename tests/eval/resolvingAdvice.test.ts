@@ -7,22 +7,9 @@
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import type { BeamResult } from '../../server/src/eval/resultTypes';
+import { magnetAndBeam, speciesX } from '../fixtures/ovenBeam';
 
-const setup = (level: string, gradient: string) => `species X
-  mass = 52 u
-  level g: ${level}
-magnet m
-  field = 0.5 T
-  gradient = ${gradient}
-  length = 10 cm
-beam b
-  level = g
-  source = oven 500 K
-  slits = 30 um, 30 um apart 50 cm
-  magnet = m
-  drift = 40 cm
-  detector = 10 um
-`;
+const setup = (level: string, gradient: string): string => speciesX('52 u', level) + magnetAndBeam(gradient);
 /** Overlap from the slit image: a stronger magnet separates the peaks. */
 const SLIT_LIMITED = setup('3S1', '0.5 T/m');
 /** Overlap from the speed spread: J = 2, peaks at 1 and 2 units of deflection, each as broad as 1/v². */
