@@ -12,6 +12,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import { diagramFor, type DiagramRequest } from '../../server/src/views/diagram';
 import { selectField } from '../../server/src/cli/selectors';
+import { wideSlitBeam } from '../fixtures/ovenBeam';
 
 const CHROMIUM = '/usr/bin/chromium';
 const HAVE_CHROMIUM = existsSync(CHROMIUM);
@@ -19,23 +20,7 @@ const SHOTS = process.env.SUBLEVEL_SHOTS_DIR;
 
 const example = (name: string): string => readFileSync(path.resolve(__dirname, '../../examples', name), 'utf8');
 
-const beam = (level: string, gradient: string): string => `species Xa
-  mass = 20 u
-  I    = 0
-  level ground: ${level}
-magnet sel
-  field    = 0.5 T
-  gradient = ${gradient}
-  length   = 10 cm
-beam b
-  species  = Xa
-  level    = ground
-  source   = oven 900 K
-  slits    = 100 um, 100 um apart 50 cm
-  magnet   = sel
-  drift    = 40 cm
-  detector = 25 um
-`;
+const beam = wideSlitBeam;
 const K41 = 'species K41\n  level ground: 4s 2S1/2\nfield guide = 20 G\nfield bias = 60 G\nfield probe = 62 G\n';
 const D_LINES = 'species Rb87\n  level ground: 5s 2S1/2\n  level p32: 5p 2P°3/2\nfield low = 0.1 G\nfield high = 1 T\nline D2: ground -> p32\n';
 const FORTY = 'species Ya\n  mass = 100 u\n  I = 3/2\n  g_I = -0.0003\n  level ground: 4G9/2  A = 300 MHz\nfield lab = 50 G\n';

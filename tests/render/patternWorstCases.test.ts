@@ -7,6 +7,7 @@ import { analyze } from '../../server/src/eval/analyze';
 import { patternCsv, renderPattern, type PatternViewData } from '../../server/src/render';
 import { diagramFor } from '../../server/src/views/diagram';
 import { all, byClass, parseSvg, pathPoints, textOf, type Node } from './svgTree';
+import { wideSlitBeam } from '../fixtures/ovenBeam';
 
 const theme = { kind: 'export' } as const;
 
@@ -88,23 +89,7 @@ describe('pattern worst cases', () => {
     expect(rows[2].split(',')[0]).toBe('-0.02');
   });
 
-  const J1_BEAM = `species Xa
-  mass = 20 u
-  I    = 0
-  level ground: 3P1
-magnet sel
-  field    = 0.5 T
-  gradient = 40 T/m
-  length   = 10 cm
-beam b
-  species  = Xa
-  level    = ground
-  source   = oven 900 K
-  slits    = 100 um, 100 um apart 50 cm
-  magnet   = sel
-  drift    = 40 cm
-  detector = 25 um
-`;
+  const J1_BEAM = wideSlitBeam('3P1', '40 T/m');
 
   it.each([
     ['a J = 1 beam at 40 T/m', J1_BEAM, 3],

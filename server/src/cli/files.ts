@@ -57,6 +57,11 @@ export function rootOption(value: string | undefined, fsys: CliFileSystem): stri
   return path.resolve(value);
 }
 
+/** `--out FILE`, shared by the commands that write data. */
+export const OUT_OPTION = {
+  out: { value: 'FILE', help: 'write to FILE (atomically: the old file stays if writing fails) instead of stdout' },
+} as const;
+
 /** The option, shared by every command that reads a setup file. */
 export const ROOT_OPTION = {
   root: { value: 'DIR', help: "the folder whose .sublevel files `use` may read (default: the file's own folder; for check <folder>, that folder)" },

@@ -5,7 +5,7 @@ import { patternCsv } from '../render';
 import { beamAbout } from '../views/diagram';
 import { patternView } from '../views/patternView';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
-import { ROOT_OPTION, rootOption } from './files';
+import { OUT_OPTION, ROOT_OPTION, rootOption } from './files';
 import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
 import { cliProblem, FileProblemError } from './fileProblems';
 import type { CliContext } from './io';
@@ -19,7 +19,7 @@ export const profileSpec: CommandSpec = {
   options: {
     ...ROOT_OPTION,
     beam: { value: 'NAME', help: 'the beam, when the file has more than one' },
-    out: { value: 'FILE', help: 'write the CSV to FILE (atomically: the old file stays if writing fails) instead of stdout' },
+    ...OUT_OPTION,
   },
 };
 

@@ -5,7 +5,7 @@
  */
 import { diagramFor, type DiagramRequest, type DiagramView } from '../views/diagram';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
-import { ROOT_OPTION, rootOption } from './files';
+import { OUT_OPTION, ROOT_OPTION, rootOption } from './files';
 import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
 import { cliProblem, FileProblemError } from './fileProblems';
 import type { CliContext } from './io';
@@ -35,7 +35,7 @@ export const renderSpec: CommandSpec = {
     to: { value: 'FIELD', help: 'end of the field axis, e.g. 50G or 0.1T' },
     unit: { value: 'UNIT', choices: FIELD_UNITS, help: 'unit of the field axis: G, mT or T' },
     format: { value: 'FORMAT', choices: FORMATS, help: 'svg (default), csv, or png (needs --out and the system Chromium)' },
-    out: { value: 'FILE', help: 'write to FILE (atomically: the old file stays if writing fails) instead of stdout' },
+    ...OUT_OPTION,
   },
 };
 

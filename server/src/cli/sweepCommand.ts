@@ -8,7 +8,7 @@ import { suggestNames } from '../format/didYouMean';
 import { sweepLevel, type SweepResult } from '../physics/engine';
 import type { LevelModel, SetupModel } from '../model/types';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
-import { ROOT_OPTION, rootOption } from './files';
+import { OUT_OPTION, ROOT_OPTION, rootOption } from './files';
 import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
 import { jsonText } from './escape';
 import { readFieldOption, MAX_CLI_FIELD_T } from './fieldOption';
@@ -31,7 +31,7 @@ export const sweepSpec: CommandSpec = {
     to: { value: 'FIELD', help: 'last field, e.g. 0.1T or "500 G" (required)' },
     points: { value: 'N', help: `number of fields, a whole number from 2 to ${MAX_CLI_POINTS} in decimal digits (default 2001)` },
     format: { value: 'FORMAT', choices: FORMATS, help: 'csv: field_T, then energy and moment columns per state (default; docs/csv.md); json' },
-    out: { value: 'FILE', help: 'write to FILE (atomically: the old file stays if writing fails) instead of stdout' },
+    ...OUT_OPTION,
   },
   notes: [`Fields use the file's units (T, mT, G, ...); |B| may be at most ${MAX_CLI_FIELD_T.toExponential().replace('+', '')} T.`],
 };
