@@ -1,14 +1,20 @@
 #!/usr/bin/env python3
 """NumPy side of the engine benchmark (run by bench/run.mjs through engine.bench.ts).
 
-Same physics as the TypeScript sweep: Cs 6P3/2 (J = 3/2, I = 7/2, A = 50.28827 MHz,
-B = -0.4934 MHz, g_J = 1.3340, g_I = -0.00039885395), energies and Hellmann-Feynman
-moments at N evenly spaced fields, done two ways:
-  loop    - numpy.linalg.eigh of the full 32 x 32 matrix, one field at a time;
-  blocked - the m blocks of equal size stacked across blocks and fields, one
-            batched eigh call per block size (rank in block = adiabatic label).
-Prints one JSON line with timings; writes both energy tables (sorted per field,
-float64 little-endian, loop table first) to --out for the accuracy comparison.
+Same physics and the same outputs as the TypeScript sweep: Cs 6P3/2 (J = 3/2, I = 7/2,
+A = 50.28827 MHz, B = -0.4934 MHz, g_J = 1.3340, g_I = -0.00039885395), energies and
+Hellmann-Feynman moments (so eigenvectors are needed) at N evenly spaced fields, done
+three ways, each with numpy.linalg.eigh with vectors:
+  loop-full    - one field at a time, the full 32 x 32 matrix (as the reference script
+                 scripts/reference/engine_cs6p32.py does it);
+  loop-blocks  - one field and one m block at a time;
+  blocked      - the m blocks of equal size stacked across blocks and fields, one
+                 batched eigh call per block size (rank in block = adiabatic label).
+Each variant does only the work its outputs need: the matrix at a field is H0 plus the
+diagonal B*z, written in place, and the moments are sum_i v_ik^2 z_i.
+Prints one JSON line with timings; writes the energy tables (sorted per field, float64
+little-endian, in the order loop-full, loop-blocks, blocked) to --out for the accuracy
+comparison.
 """
 import argparse
 import json
@@ -48,43 +54,70 @@ def parts():
     return h0, np.diag(z).copy(), two_m
 
 
-def loop_sweep(h0, z, fields):
-    energies = np.empty((len(fields), len(z)))
+def block_indices(two_m):
+    return [np.where(two_m == m)[0] for m in sorted(set(two_m.tolist()))]
+
+
+def loop_full(h0, z, two_m, fields):
+    n = len(z)
+    energies = np.empty((len(fields), n))
     moments = np.empty_like(energies)
-    zmat = np.diag(z)
+    diag = np.arange(n)
+    m = np.empty_like(h0)
     for p, b in enumerate(fields):
-        w, v = np.linalg.eigh(h0 + b * zmat)
+        m[...] = h0
+        m[diag, diag] += b * z
+        w, v = np.linalg.eigh(m)
         energies[p] = w
-        moments[p] = -H * np.einsum("ik,i,ik->k", v, z, v)
+        moments[p] = -H * ((v * v).T @ z)
     return energies, moments
 
 
-def blocked_sweep(h0, z, two_m, fields):
-    blocks = [np.where(two_m == m)[0] for m in sorted(set(two_m.tolist()))]
+def loop_blocks(h0, z, two_m, fields):
+    blocks = [(idx, h0[np.ix_(idx, idx)], z[idx]) for idx in block_indices(two_m)]
+    energies = np.empty((len(fields), len(z)))
+    moments = np.empty_like(energies)
+    for p, b in enumerate(fields):
+        at = 0
+        for idx, hb, zb in blocks:
+            s = len(idx)
+            m = hb.copy()
+            m[np.arange(s), np.arange(s)] += b * zb
+            w, v = np.linalg.eigh(m)
+            energies[p, at : at + s] = w
+            moments[p, at : at + s] = -H * ((v * v).T @ zb)
+            at += s
+    return energies, moments
+
+
+def blocked(h0, z, two_m, fields):
     by_size = {}
-    for idx in blocks:
+    for idx in block_indices(two_m):
         by_size.setdefault(len(idx), []).append(idx)
-    out = {}
+    energies, moments = [], []
     for size, group in by_size.items():
         h0s = np.stack([h0[np.ix_(idx, idx)] for idx in group])  # (nb, s, s)
         zs = np.stack([z[idx] for idx in group])  # (nb, s)
-        diag = fields[None, :, None] * zs[:, None, :]  # (nb, points, s)
         mats = np.broadcast_to(h0s[:, None], (len(group), len(fields), size, size)).copy()
-        mats[..., np.arange(size), np.arange(size)] += diag
-        w, v = np.linalg.eigh(mats)
-        mom = -H * np.einsum("bpik,bi,bpik->bpk", v, zs, v)
-        for g, idx in enumerate(group):
-            out[tuple(idx)] = (w[g], mom[g])  # (points, s): rank = adiabatic label
-    return out
+        mats[..., np.arange(size), np.arange(size)] += fields[None, :, None] * zs[:, None, :]
+        w, v = np.linalg.eigh(mats)  # (nb, points, s), (nb, points, s, s)
+        mom = -H * np.einsum("bpik,bi->bpk", v * v, zs)
+        energies.extend(w)  # each (points, s): rank = adiabatic label
+        moments.extend(mom)
+    return np.concatenate(energies, axis=1), np.concatenate(moments, axis=1)
 
 
 def timed(fn, repeats):
-    times, result = [], None
+    """Wall and CPU time (ms) of `repeats` runs: on a shared machine the CPU time of this
+    process is the steadier measure, the wall time the one a user sees."""
+    wall, cpu, result = [], [], None
     for _ in range(repeats):
-        t0 = time.perf_counter()
+        w0, c0 = time.perf_counter(), time.process_time()
         result = fn()
-        times.append((time.perf_counter() - t0) * 1e3)
-    return statistics.median(times), result
+        cpu.append((time.process_time() - c0) * 1e3)
+        wall.append((time.perf_counter() - w0) * 1e3)
+    stats = {"medianMs": statistics.median(wall), "bestMs": min(wall), "cpuMedianMs": statistics.median(cpu), "cpuBestMs": min(cpu)}
+    return stats, result
 
 
 def main():
@@ -92,29 +125,18 @@ def main():
     ap.add_argument("--points", type=int, default=2001)
     ap.add_argument("--from-t", type=float, default=0.0)
     ap.add_argument("--to-t", type=float, default=1.0)
-    ap.add_argument("--repeats", type=int, default=5)
+    ap.add_argument("--repeats", type=int, default=7)
     ap.add_argument("--out", required=True)
     args = ap.parse_args()
     fields = np.linspace(args.from_t, args.to_t, args.points)
     h0, z, two_m = parts()
-    loop_ms, (loop_e, _) = timed(lambda: loop_sweep(h0, z, fields), args.repeats)
-    blocked_ms, blocked = timed(lambda: blocked_sweep(h0, z, two_m, fields), args.repeats)
-    blocked_e = np.sort(np.concatenate([w for w, _ in blocked.values()], axis=1), axis=1)
+    variants = {"loopFull": loop_full, "loopBlocks": loop_blocks, "blocked": blocked}
+    times = {}
     with open(args.out, "wb") as f:
-        np.ascontiguousarray(loop_e, dtype="<f8").tofile(f)
-        np.ascontiguousarray(blocked_e, dtype="<f8").tofile(f)
-    print(
-        json.dumps(
-            {
-                "numpy": np.__version__,
-                "points": args.points,
-                "states": len(z),
-                "loopMs": loop_ms,
-                "blockedMs": blocked_ms,
-                "repeats": args.repeats,
-            }
-        )
-    )
+        for name, fn in variants.items():
+            times[name], (e, _) = timed(lambda: fn(h0, z, two_m, fields), args.repeats)
+            np.ascontiguousarray(np.sort(e, axis=1), dtype="<f8").tofile(f)
+    print(json.dumps({"numpy": np.__version__, "points": args.points, "states": len(z), "repeats": args.repeats, **times}))
 
 
 if __name__ == "__main__":

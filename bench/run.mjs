@@ -13,7 +13,7 @@ import * as esbuild from 'esbuild';
 
 const BENCHMARKS = [
   { name: 'eigen', entry: 'bench/eigen.bench.ts', about: 'eigen-solver choice: Jacobi vs own Householder+QR vs ml-matrix' },
-  { name: 'engine', entry: 'bench/engine.bench.ts', about: 'Cs 6P3/2 2001-point sweep against NumPy (loop and blocked)' },
+  { name: 'engine', entry: 'bench/engine.bench.ts', about: 'Cs 6P3/2 2001-point sweeps, 0–0.1 T and 0–1 T, against NumPy eigh (two loops, blocked)' },
   { name: 'beam', entry: 'bench/beam.bench.ts', call: 'runBeamBench', about: 'detector pattern of 16 sublevels' },
   { name: 'editor', entry: 'bench/editor.bench.ts', call: 'runEditorBench', about: '2,000-line setup: edit → diagnostics, hover, cold start' },
 ];
