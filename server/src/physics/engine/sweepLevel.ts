@@ -1,11 +1,13 @@
 /**
- * Field sweeps. The block model is built once; each block is then solved at
- * every field into one reused workspace, writing straight into the output
- * arrays (no allocation per point). States are followed by (block, rank),
- * which is exact because levels of one block never cross.
+ * Field sweeps. The block model is built once; each block then goes through
+ * every field (blockSweep.ts: exact solves at anchor fields and the anchors'
+ * perturbation series between them, or an exact solve at every field), writing
+ * straight into the output arrays (no allocation per point). States are
+ * followed by (block, rank), which is exact because levels of one block never
+ * cross.
  */
-import { PLANCK_H } from '../constants';
-import { curvaturesOf, makeWorkspace, solveBlockAt } from './blockSolver';
+import { makeWorkspace } from './blockSolver';
+import { type BlockOutput, makeAnchors, sweepBlockBySeries, sweepBlockPerField } from './blockSweep';
 import { buildLevelModel } from './buildModel';
 import { findCrossings, type StateSlot } from './crossings';
 import { issue } from './issues';
@@ -48,56 +50,49 @@ interface SweepSlot extends StateSlot {
 }
 
 /** Row r (`points` values) of the sweep's output store. */
+/**
+ * Smallest block order swept by series; smaller blocks are solved at every field.
+ * From bench/eigen.bench.ts (docs/engine.md).
+ */
+export const SERIES_MIN_ORDER = 3;
+
 function storeRow(store: Float64Array, points: number, r: number): Float64Array {
   return store.subarray(r * points, (r + 1) * points);
 }
 
 /** Solve every block at every field of `fieldsT`, filling the swept states in block order. */
-function runSweep(model: LevelModel, fieldsT: Float64Array, curvature: boolean, issues: EngineIssue[]): SweepSlot[] | null {
+function runSweep(model: LevelModel, fieldsT: Float64Array, options: SweepOptions, issues: EngineIssue[]): SweepSlot[] | null {
   const points = fieldsT.length;
+  const curvature = options.curvature === true;
+  const perField = options.method === 'per-field';
   const ws = makeWorkspace(model.largestBlock);
-  const curv = new Float64Array(model.largestBlock);
+  const anchors = makeAnchors(model.largestBlock);
   const slots: SweepSlot[] = [];
   let skipped = 0;
   // One allocation for every output array (views into it), so a sweep makes no garbage per state.
   // State s owns rows perState·s (energy), +1 (moment) and +2 (curvature) of `store`.
   const perState = curvature ? 3 : 2;
   const store = new Float64Array(model.dimension * points * perState);
-  const values = ws.values;
-  const vectors = ws.vectors;
+  const out: BlockOutput = { store, base: 0, stride: perState * points, points, curvature, curv: new Float64Array(model.largestBlock) };
   for (let b = 0; b < model.blocks.length; b++) {
     const block = model.blocks[b];
-    const n = block.size;
-    const z = block.zeeman;
     const first = slots.length;
-    for (let k = 0; k < n; k++) {
+    for (let k = 0; k < block.size; k++) {
       const r = perState * (first + k);
       const slot: SweepSlot = { block: b, rank: k, energyHz: storeRow(store, points, r), moment: storeRow(store, points, r + 1) };
       if (curvature) slot.curvature = storeRow(store, points, r + 2);
       slots.push(slot);
     }
-    // The point loop writes into `store` by index (state k of the block at base + k·stride + p):
-    // on 1 × 1 … 4 × 4 blocks per-state object and view look-ups cost as much as the moments.
-    const stride = perState * points;
-    const base = perState * first * points;
-    for (let p = 0; p < points; p++) {
-      if (!solveBlockAt(block, fieldsT[p], ws)) {
-        issues.push(issue('error', 'solver-failed', 'The eigen-solver did not converge during the sweep.'));
-        return null;
-      }
-      if (curvature) skipped += curvaturesOf(block, ws, curv);
-      for (let k = 0, at = base + p; k < n; k++, at += stride) {
-        // Hellmann–Feynman dE_k/dB = Σ_i v_ik² z_i (slopesOf, inlined), then μ = −h dE/dB.
-        let slope = 0;
-        for (let i = 0; i < n; i++) {
-          const c = vectors[i * n + k];
-          slope += c * c * z[i];
-        }
-        store[at] = values[k];
-        store[at + points] = -slope * PLANCK_H;
-        if (curvature) store[at + 2 * points] = curv[k];
-      }
+    out.base = perState * first * points;
+    const left =
+      perField || block.size < SERIES_MIN_ORDER
+        ? sweepBlockPerField(block, fieldsT, ws, out)
+        : sweepBlockBySeries(block, fieldsT, anchors, out);
+    if (left < 0) {
+      issues.push(issue('error', 'solver-failed', 'The eigen-solver did not converge during the sweep.'));
+      return null;
     }
+    skipped += left;
   }
   if (skipped > 0) {
     issues.push(issue('warning', 'degenerate-block', 'Some states of one m block were degenerate; their curvature leaves those pairs out.'));
@@ -127,7 +122,7 @@ export function sweepLevel(spec: LevelSpec, fromT: number, toT: number, points: 
   const fieldsT = new Float64Array(points);
   for (let p = 0; p < points; p++) fieldsT[p] = fromT + ((toT - fromT) * p) / (points - 1);
   fieldsT[points - 1] = toT;
-  const slots = runSweep(model, fieldsT, options.curvature === true, issues);
+  const slots = runSweep(model, fieldsT, options, issues);
   if (!slots) return emptySweep(issues);
 
   // Present states ordered by energy at the start of the sweep.

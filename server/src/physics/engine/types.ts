@@ -130,6 +130,12 @@ export interface SweepOptions {
   crossings?: boolean;
   /** Also return ∂²E/∂B² per point (default false). */
   curvature?: boolean;
+  /**
+   * 'series' (default): exact solves at anchor fields and their perturbation series
+   * between them, checked against the next exact solve; 'per-field': an exact solve at
+   * every field. Both give the same numbers to round-off (docs/engine.md).
+   */
+  method?: 'series' | 'per-field';
 }
 
 export interface SweepResult {

@@ -1,0 +1,152 @@
+/**
+ * One block through every field of a sweep, written into the sweep's output
+ * store. Two routes with the same results:
+ * - per field: an exact solve at every field;
+ * - by series (the default): an exact solve at anchor fields, and between them
+ *   the anchor's Rayleigh–Schrödinger series (perturbationSeries.ts), which
+ *   costs a few dozen multiplications per state and field instead of a solve.
+ *   Neighbouring anchors' series must agree halfway between them, where each
+ *   is least accurate; a stretch that fails is halved and tried again, so a
+ *   series never stands for a field where it is not checked.
+ */
+import { PLANCK_H } from '../constants';
+import { type BlockWorkspace, curvaturesOf, makeWorkspace, solveBlockAt } from './blockSolver';
+import type { LevelBlock } from './levelModel';
+import {
+  SERIES_ORDER,
+  evaluateSeries,
+  expandAt,
+  makeSeriesWorkspace,
+  seriesValueAt,
+  type SeriesWorkspace,
+} from './perturbationSeries';
+
+/** Where the block's states go: state k, point p at base + k·stride + p; moment one row (`points`) later, curvature two. */
+export interface BlockOutput {
+  store: Float64Array;
+  base: number;
+  stride: number;
+  points: number;
+  curvature: boolean;
+  /** Scratch of the largest block order. */
+  curv: Float64Array;
+}
+
+/** Agreement asked of two neighbouring anchors' series halfway between them (energy and moment scales of the block). */
+const CHECK_TOLERANCE = 1e-12;
+
+/** Write the exact solve in `ws` as point p; returns the number of degenerate pairs the curvature left out. */
+function writeSolved(block: LevelBlock, ws: BlockWorkspace, p: number, out: BlockOutput): number {
+  const n = block.size;
+  const z = block.zeeman;
+  const { store, points, curvature, curv } = out;
+  const { values, vectors } = ws;
+  const skipped = curvature ? curvaturesOf(block, ws, curv) : 0;
+  for (let k = 0, at = out.base + p; k < n; k++, at += out.stride) {
+    // Hellmann–Feynman dE_k/dB = Σ_i v_ik² z_i, then μ = −h dE/dB.
+    let slope = 0;
+    for (let i = 0; i < n; i++) {
+      const c = vectors[i * n + k];
+      slope += c * c * z[i];
+    }
+    store[at] = values[k];
+    store[at + points] = -slope * PLANCK_H;
+    if (curvature) store[at + 2 * points] = curv[k];
+  }
+  return skipped;
+}
+
+/** Every field solved exactly. Returns the degenerate pairs left out of curvatures, or −1 if the solver failed. */
+export function sweepBlockPerField(block: LevelBlock, fieldsT: Float64Array, ws: BlockWorkspace, out: BlockOutput): number {
+  let skipped = 0;
+  for (let p = 0; p < fieldsT.length; p++) {
+    if (!solveBlockAt(block, fieldsT[p], ws)) return -1;
+    skipped += writeSolved(block, ws, p, out);
+  }
+  return skipped;
+}
+
+/** Anchors at p and q: does each series reproduce the other's energies and slopes halfway between them? */
+function seriesAgree(block: LevelBlock, a: SeriesWorkspace, b: SeriesWorkspace, halfT: number, tmp: Float64Array): boolean {
+  const n = block.size;
+  let scaleE = 0;
+  let scaleZ = 0;
+  for (let k = 0; k < n; k++) {
+    scaleE = Math.max(scaleE, Math.abs(a.coef[k * (SERIES_ORDER + 1)]), Math.abs(b.coef[k * (SERIES_ORDER + 1)]));
+    scaleZ = Math.max(scaleZ, Math.abs(block.zeeman[k]));
+  }
+  for (let k = 0; k < n; k++) {
+    seriesValueAt(a, k, halfT, tmp);
+    const e = tmp[0];
+    const slope = tmp[1];
+    seriesValueAt(b, k, -halfT, tmp);
+    if (!(Math.abs(tmp[0] - e) <= CHECK_TOLERANCE * scaleE && Math.abs(tmp[1] - slope) <= CHECK_TOLERANCE * scaleZ)) return false;
+  }
+  return true;
+}
+
+/** Points from … to − 1 of every state from the series `sw` anchored at fieldsT[anchor]. */
+function writeSeries(block: LevelBlock, sw: SeriesWorkspace, fieldsT: Float64Array, anchor: number, from: number, to: number, out: BlockOutput): void {
+  const { store, points, stride, curvature } = out;
+  for (let k = 0, row = out.base; k < block.size; k++, row += stride) {
+    evaluateSeries(sw, k, fieldsT, fieldsT[anchor], from, to, store, row, row + points, curvature ? row + 2 * points : -1);
+  }
+}
+
+interface Anchor {
+  ws: BlockWorkspace;
+  sw: SeriesWorkspace;
+  /** Reach of the series in tesla (0: not expanded). */
+  reachT: number;
+}
+
+function anchorAt(block: LevelBlock, fieldT: number, at: Anchor, curvature: boolean): boolean {
+  if (!solveBlockAt(block, fieldT, at.ws)) return false;
+  expandAt(at.ws.values, at.ws.vectors, block.zeeman, block.size, at.sw, curvature);
+  at.reachT = at.sw.reach * at.sw.scaleT;
+  return true;
+}
+
+/**
+ * The series route (fields in sweep order, monotonic). Anchors are solved
+ * exactly and expanded; the points between two anchors take the nearer one's
+ * series. The next anchor is placed about two reaches ahead; if the two
+ * reaches do not meet, or the two series disagree halfway (where each is
+ * least accurate), the stretch is halved. Returns the degenerate pairs left
+ * out of curvatures, or −1 if the solver failed.
+ */
+export function sweepBlockBySeries(block: LevelBlock, fieldsT: Float64Array, anchors: [Anchor, Anchor], out: BlockOutput): number {
+  const last = fieldsT.length - 1;
+  const tmp = new Float64Array(2);
+  let [here, there] = anchors;
+  if (!anchorAt(block, fieldsT[0], here, out.curvature)) return -1;
+  let skipped = writeSolved(block, here.ws, 0, out);
+  let p = 0;
+  while (p < last) {
+    let q = p + 1;
+    while (q < last && Math.abs(fieldsT[q + 1] - fieldsT[p]) <= 2 * here.reachT) q++;
+    for (;;) {
+      if (!anchorAt(block, fieldsT[q], there, out.curvature)) return -1;
+      if (q === p + 1) break;
+      const half = 0.5 * (fieldsT[q] - fieldsT[p]);
+      if (Math.abs(half) <= Math.min(here.reachT, there.reachT) && seriesAgree(block, here.sw, there.sw, half, tmp)) break;
+      q = p + Math.max(1, Math.floor((q - p) / 2));
+    }
+    // Points nearer p take p's series, the rest q's.
+    let mid = p + 1;
+    while (mid < q && Math.abs(fieldsT[mid] - fieldsT[p]) <= Math.abs(fieldsT[q] - fieldsT[mid])) mid++;
+    writeSeries(block, here.sw, fieldsT, p, p + 1, mid, out);
+    writeSeries(block, there.sw, fieldsT, q, mid, q, out);
+    skipped += writeSolved(block, there.ws, q, out);
+    [here, there] = [there, here];
+    p = q;
+  }
+  return skipped;
+}
+
+export function makeAnchors(n: number): [Anchor, Anchor] {
+  return [
+    { ws: makeWorkspace(n), sw: makeSeriesWorkspace(n), reachT: 0 },
+    { ws: makeWorkspace(n), sw: makeSeriesWorkspace(n), reachT: 0 },
+  ];
+}
