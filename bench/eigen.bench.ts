@@ -4,6 +4,10 @@
  * the orders the engine meets. Prints time per decomposition and the worst
  * residual ‖A v − λ v‖ / ‖A‖ so speed is never bought with accuracy.
  */
+import { spawnSync } from 'node:child_process';
+import { symmetricEigen } from '../server/src/physics/engine';
+import { makeWorkspace } from '../server/src/physics/engine/blockSolver';
+import { makeAnchors, sweepBlockBySeries, sweepBlockPerField } from '../server/src/physics/engine/blockSweep';
 import { buildLevelModel } from '../server/src/physics/engine/buildModel';
 import { householderQlInPlace } from '../server/src/physics/engine/householderQl';
 import { jacobiInPlace } from '../server/src/physics/engine/jacobiEigen';
@@ -101,6 +105,102 @@ function physicalBlocks(spec: Parameters<typeof buildLevelModel>[0], fields: num
   return out;
 }
 
+const LAPACK_ORDERS = [16, 32, 64, 128, 160, 192, 256];
+
+/** CPU microseconds per call of `solve` on `mats` (median and best of 5 rounds). */
+function cpuPerCall(solve: (m: Float64Array) => void, mats: Float64Array[], n: number): { median: number; best: number } {
+  const reps = Math.max(1, Math.round(20000 / (n * n)));
+  for (const m of mats) solve(m); // warm-up
+  const rounds: number[] = [];
+  for (let r = 0; r < 5; r++) {
+    const c0 = process.cpuUsage();
+    for (let q = 0; q < reps; q++) for (const m of mats) solve(m);
+    const c = process.cpuUsage(c0);
+    rounds.push((c.user + c.system) / (reps * mats.length));
+  }
+  rounds.sort((a, b) => a - b);
+  return { median: rounds[2], best: rounds[0] };
+}
+
+/**
+ * The engine's solver on large orders against LAPACK through numpy.linalg.eigh (values and
+ * vectors, one BLAS thread) in the same run. OPENBLAS_CORETYPE and OPENBLAS_L2_SIZE are
+ * unset for the NumPy process only, so that it runs the kernel OpenBLAS picks for this
+ * processor (the fair, faster reference); the script prints which.
+ */
+function againstLapack(): void {
+  const env: NodeJS.ProcessEnv = { ...process.env, OMP_NUM_THREADS: '1', OPENBLAS_NUM_THREADS: '1', MKL_NUM_THREADS: '1' };
+  delete env.OPENBLAS_CORETYPE;
+  delete env.OPENBLAS_L2_SIZE;
+  const py = spawnSync('python3', ['bench/eigen_numpy.py', '--orders', LAPACK_ORDERS.join(',')], { encoding: 'utf8', env });
+  if (py.status !== 0) {
+    console.log(`\nLAPACK comparison skipped (python3 failed): ${py.stderr.trim().split('\n').pop() ?? ''}`);
+    return;
+  }
+  const np = JSON.parse(py.stdout.trim().split('\n').pop() as string) as {
+    numpy: string;
+    core: string | null;
+    orders: Record<string, { cpuMedian: number; cpuBest: number }>;
+  };
+  console.log(`\nsymmetricEigen vs numpy.linalg.eigh ${np.numpy} (LAPACK via OpenBLAS, core ${np.core ?? '?'}), values + vectors, CPU µs per call:`);
+  console.log('order | engine median | LAPACK median | LAPACK ÷ engine (≥ 1: engine at least as fast)');
+  for (const n of LAPACK_ORDERS) {
+    const rnd = lcg(99 + n);
+    const mats = Array.from({ length: Math.max(4, Math.round(2000 / n)) }, () => randomSymmetric(n, rnd));
+    const work = new Float64Array(n * n);
+    const values = new Float64Array(n);
+    const vectors = new Float64Array(n * n);
+    const ours = cpuPerCall(
+      (m) => {
+        work.set(m);
+        symmetricEigen(work, n, values, vectors);
+      },
+      mats,
+      n,
+    );
+    const ref = np.orders[String(n)];
+    console.log(
+      `${String(n).padStart(5)} | ${ours.median.toFixed(1).padStart(13)} | ${ref.cpuMedian.toFixed(1).padStart(13)} | ${(ref.cpuMedian / ours.median).toFixed(2)}`,
+    );
+  }
+}
+
+/**
+ * The sweep's route per block order: an exact solve at every field against anchors and
+ * their perturbation series (blockSweep.ts), µs per block and field over 2001 fields. The
+ * smallest order where the series wins is SERIES_MIN_ORDER in sweepLevel.ts.
+ */
+function sweepRoutes(levels: { name: string; spec: Parameters<typeof buildLevelModel>[0] }[]): void {
+  for (const toT of [0.1, 1]) {
+    const fields = Float64Array.from({ length: 2001 }, (_, p) => (toT * p) / 2000);
+    console.log(`\nsweep route per block order, 2001 fields 0–${toT} T, µs per block and field (best of runs):`);
+    console.log('order | every field | series | ratio');
+    const seen = new Set<number>();
+    for (const lv of levels) {
+      const { model } = buildLevelModel(lv.spec);
+      for (const block of model?.blocks ?? []) {
+        const n = block.size;
+        if (n < 2 || seen.has(n)) continue;
+        seen.add(n);
+        const out = { store: new Float64Array(2 * 2001 * n), base: 0, stride: 2 * 2001, points: 2001, curvature: false, curv: new Float64Array(n) };
+        const ws = makeWorkspace(n);
+        const anchors = makeAnchors(n);
+        let perField = Number.POSITIVE_INFINITY;
+        let series = Number.POSITIVE_INFINITY;
+        for (let r = 0; r < (n > 8 ? 3 : 11); r++) {
+          let t0 = process.hrtime.bigint();
+          sweepBlockPerField(block, fields, ws, out);
+          perField = Math.min(perField, Number(process.hrtime.bigint() - t0) / 1e3 / 2001);
+          t0 = process.hrtime.bigint();
+          sweepBlockBySeries(block, fields, anchors, out);
+          series = Math.min(series, Number(process.hrtime.bigint() - t0) / 1e3 / 2001);
+        }
+        console.log(`${String(n).padStart(5)} | ${perField.toFixed(3).padStart(11)} | ${series.toFixed(3).padStart(6)} | ${(perField / series).toFixed(2)}`);
+      }
+    }
+  }
+}
+
 function main(): void {
   const orders = [2, 3, 4, 6, 8, 12, 16, 24, 32, 48, 64, 96, 128];
   const own = ownTridiagonalSolver();
@@ -134,6 +234,8 @@ function main(): void {
       console.log(`${String(n).padStart(5)} | ${j.usPer.toFixed(2).padStart(9)} | ${h.usPer.toFixed(2).padStart(21)} | ${l.usPer.toFixed(2).padStart(12)}`);
     }
   }
+  sweepRoutes(levels);
+  againstLapack();
 }
 
 main();

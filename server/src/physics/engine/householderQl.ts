@@ -60,6 +60,17 @@ function tridiagonalise(a: Float64Array, n: number, d: Float64Array, e: Float64A
   for (let i = 0; i < n - 1; i++) e[i] = a[(i + 1) * n + i];
 }
 
+/** In-place transpose of the n × n row-major m. */
+function transpose(m: Float64Array, n: number): void {
+  for (let i = 0; i < n; i++) {
+    for (let j = i + 1; j < n; j++) {
+      const t = m[i * n + j];
+      m[i * n + j] = m[j * n + i];
+      m[j * n + i] = t;
+    }
+  }
+}
+
 /** Wilkinson shift: the eigenvalue of the trailing 2 × 2 [[dm1, b], [b, dm]] nearer dm. */
 function wilkinsonShift(dm1: number, dm: number, b: number): number {
   const delta = 0.5 * (dm1 - dm);
@@ -92,11 +103,12 @@ function chaseBulge(d: Float64Array, e: Float64Array, q: Float64Array, n: number
       e[k + 1] *= c;
       x = e[k];
     }
-    for (let i = 0; i < n; i++) {
-      const qk = q[i * n + k];
-      const qk1 = q[i * n + k + 1];
-      q[i * n + k] = c * qk + s * qk1;
-      q[i * n + k + 1] = c * qk1 - s * qk;
+    // q holds Qᵀ here (row k is column k of Q), so the rotation runs along two contiguous rows.
+    for (let i = 0, rk = k * n, rk1 = rk + n; i < n; i++) {
+      const qk = q[rk + i];
+      const qk1 = q[rk1 + i];
+      q[rk + i] = c * qk + s * qk1;
+      q[rk1 + i] = c * qk1 - s * qk;
     }
   }
 }
@@ -123,6 +135,7 @@ export function householderQlInPlace(
   const scale = big > 0 && 1 / big < Number.POSITIVE_INFINITY ? big : 1;
   for (let i = 0; i < n * n; i++) a[i] /= scale;
   tridiagonalise(a, n, d, e, vectors, w1, w2);
+  transpose(vectors, n);
   let norm = 0;
   for (let i = 0; i < n; i++) norm = Math.max(norm, Math.abs(d[i]) + (i > 0 ? Math.abs(e[i - 1]) : 0) + (i < n - 1 ? Math.abs(e[i]) : 0));
   if (!Number.isFinite(norm)) return false;
@@ -130,6 +143,7 @@ export function householderQlInPlace(
   let m = n - 1;
   for (let iter = 0; m > 0; iter++) {
     if (iter > 30 * n) {
+      transpose(vectors, n);
       for (let i = 0; i < n; i++) d[i] *= scale;
       return false;
     }
@@ -144,6 +158,7 @@ export function householderQlInPlace(
     if (l > 0) e[l - 1] = 0;
     chaseBulge(d, e, vectors, n, l, m);
   }
+  transpose(vectors, n);
   for (let i = 0; i < n; i++) d[i] *= scale;
   return true;
 }
