@@ -40,8 +40,8 @@ function refine(
   dLo: number,
   dHi: number,
   tol: number,
+  ws: ReturnType<typeof makeWorkspace>,
 ): LevelCrossing | null {
-  const ws = makeWorkspace(model.largestBlock);
   const diff = (f: number): number => energyAt(model, a.block, a.rank, f, ws) - energyAt(model, b.block, b.rank, f, ws);
   // Stop once the difference is at the round-off level of the energies (1e-15 of the scale).
   const field = bracketedRoot(diff, lo, hi, dLo, dHi, tol * 1e-5);
@@ -114,6 +114,7 @@ export function findCrossings(
   const tol = 1e-10 * scale + 1e-300;
   const out: LevelCrossing[] = [];
   const sideOf = (d: number): number => (d > tol ? 1 : d < -tol ? -1 : 0);
+  const ws = makeWorkspace(model.largestBlock);
   for (const { i, j, first, last } of reorderings(slots, points)) {
     const a = slots[i];
     const b = slots[j];
@@ -136,7 +137,7 @@ export function findCrossings(
           return out.sort((x, y) => x.fieldT - y.fieldT);
         }
         const dLo = a.energyHz[lastIndex] - b.energyHz[lastIndex];
-        const c = refine(model, a, b, fieldsT[lastIndex], fieldsT[p], dLo, d, tol);
+        const c = refine(model, a, b, fieldsT[lastIndex], fieldsT[p], dLo, d, tol, ws);
         if (c) out.push({ ...c, stateA: i, stateB: j });
       }
       lastSide = side;

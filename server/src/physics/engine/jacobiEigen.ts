@@ -66,7 +66,7 @@ function converged(a: Float64Array, n: number, floor: number): boolean {
 }
 
 /** tan φ of the rotation that zeroes a_pq (the smaller root of t² + 2θt − 1 = 0, θ = (a_qq − a_pp)/2a_pq). */
-export function rotationTangent(app: number, aqq: number, apq: number): number {
+function rotationTangent(app: number, aqq: number, apq: number): number {
   // Written as t = 2a_pq / (d + sign(d) sqrt(d² + 4a_pq²)), d = a_qq − a_pp, which saves a
   // division; overflow or underflow of d² + 4a_pq² falls back to the θ form.
   const d = aqq - app;
