@@ -116,13 +116,28 @@ function benchRange(fromT: number, toT: number): Record<string, unknown> {
   const sweep = sweepLevel(CS_6P32, fromT, toT, POINTS);
   const crossingRatio = median(crossingTimes.cpu) / median(plainAgain.cpu);
   const curvatureRatio = median(curvatureTimes.cpu) / median(plainAgain.cpu);
+  const bestOf = (xs: Samples): number => Math.min(...xs.wall);
+  const crossingBest = bestOf(crossingTimes) / bestOf(plainAgain);
+  const curvatureBest = bestOf(curvatureTimes) / bestOf(plainAgain);
   console.log(`\nCs 6P3/2, ${POINTS} fields ${label}, ${sweep.states.length} states, energies + moments + labels:`);
   console.log(
     `  engine: wall median ${plain.median.toFixed(2)} ms (best ${plain.min.toFixed(2)}), CPU median ${plain.cpuMedian.toFixed(2)} ms (best ${plain.cpuMin.toFixed(2)}) over ${engineTimes.wall.length} runs`,
   );
-  console.log(`  with crossing search: ${crossingRatio.toFixed(2)}× the sweep (CPU medians) (${sweep.crossings.length} crossings; goal ≤ 1.3×)`);
-  console.log(`  with curvature d²E/dB²: ${curvatureRatio.toFixed(2)}× the sweep (CPU medians)`);
-  const result: Record<string, unknown> = { fromT, toT, points: POINTS, engineMs: plain, crossingRatio, curvatureRatio, crossings: sweep.crossings.length };
+  console.log(
+    `  with crossing search: ${crossingRatio.toFixed(2)}× the sweep (CPU medians), ${crossingBest.toFixed(2)}× (best runs) (${sweep.crossings.length} crossings; goal ≤ 1.3×)`,
+  );
+  console.log(`  with curvature d²E/dB²: ${curvatureRatio.toFixed(2)}× the sweep (CPU medians), ${curvatureBest.toFixed(2)}× (best runs)`);
+  const result: Record<string, unknown> = {
+    fromT,
+    toT,
+    points: POINTS,
+    engineMs: plain,
+    crossingRatio,
+    crossingBest,
+    curvatureRatio,
+    curvatureBest,
+    crossings: sweep.crossings.length,
+  };
   if (py.status !== 0) {
     console.log(`  NumPy side skipped (python3 failed): ${py.stderr.trim().split('\n').pop() ?? ''}`);
     return result;
