@@ -15,6 +15,9 @@ import { createMessageConnection, type MessageConnection, StreamMessageReader, S
 import { ShutdownRequest } from 'vscode-languageserver-protocol';
 import { evaluateText, inProcessEvaluator } from '../server/src/service/evaluator';
 import { LanguageService } from '../server/src/service/languageService';
+import { generateSetup } from './generatedSetup';
+
+export { generateSetup };
 
 const LINES = 2000;
 const EDITS = 60;
@@ -25,29 +28,6 @@ const COLD_STARTS = 5;
 const URI = 'file:///bench/generated.sublevel';
 /** The Node flags the extension starts the server with (client/src/extension.ts). */
 const SERVER_NODE_FLAGS = ['--max-semi-space-size=64'];
-
-/** A plausible large setup: many species with levels, some fields and magnets, beams and lines. */
-export function generateSetup(lines: number): string {
-  const out: string[] = ['# Generated setup for the editor benchmark (invented numbers).', ''];
-  for (let i = 0; out.length < lines; i++) {
-    out.push(
-      `species Demo${i}                       # hand-made species ${i}`,
-      `  mass = ${(40 + (i % 150) + 0.913).toFixed(3)} u`,
-      '  I    = 3/2',
-      '  g_I  = -0.000995',
-      `  level g${i}: 5s 2S1/2  A = ${(3417.34 + i).toFixed(2)} MHz`,
-      `  level p${i}: 5p 2P°3/2  A = 84.72 MHz  B = 12.5 MHz`,
-      `  level d${i}: 4d 2D5/2`,
-    );
-    if (i % 40 === 0) out.push(`field f${i} = ${[0.5, 3, 10, 50][(i / 40) % 4]} G`);
-    if (i % 40 === 20) {
-      out.push(`magnet m${i}`, '  field    = 0.4 T', '  gradient = 120 T/m', '  length   = 6 cm');
-      out.push(`beam b${i}`, `  species  = Demo${i}`, `  level    = g${i}`, '  source   = oven 450 K', '  slits    = 80 um, 50 um apart 40 cm', `  magnet   = m${i}`, '  drift    = 30 cm', '  detector = 25 um');
-    }
-    out.push(`line L${i}: g${i} -> p${i}`, '');
-  }
-  return out.slice(0, lines).join('\n');
-}
 
 /** The number on one `mass` line changed (a typical keystroke): the new text, and the line as an LSP change. */
 function editAt(text: string, k: number): { text: string; change: { range: { start: { line: number; character: number }; end: { line: number; character: number } }; text: string } } {
