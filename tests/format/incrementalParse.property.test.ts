@@ -5,51 +5,24 @@
  * raise the number of cases.
  */
 import fc from 'fast-check';
-import { readdirSync, readFileSync } from 'fs';
 import { describe, expect, it } from 'vitest';
 import { parseIncrementally, type IncrementalParse } from '../../server/src/format/incrementalParse';
 import { parseSetup } from '../../server/src/format/parser';
 import { generateSetup } from '../../bench/generatedSetup';
+import { applyTextEdit, editSequence } from '../editSequences';
 
 const RUNS = Number(process.env.FUZZ_RUNS ?? '') || 150;
 const TIME_LIMIT = Math.max(60_000, RUNS * 400);
 
-const SEEDS = [
-  ...readdirSync('examples')
-    .filter((f) => f.endsWith('.sublevel'))
-    .map((f) => readFileSync(`examples/${f}`, 'utf8')),
-  generateSetup(400),
-];
-
-/** What a typing user inserts, with a bias towards what starts or ends a segment. */
-const PIECES = [
-  'species Demo', 'species', 'magnet m', 'beam b', 'field f = 3 G', 'line L: g -> p', 'settings', 'use "a.sublevel"', 'use',
-  'level x: 5s 2S1/2', 'level', 'field: 0.4 T', 'field =', 'A = 3 MHz', 'mass = 7 u', 'I = 3/2', ':', '=', '#', '# c', 'spices', 'lvel',
-  '\n', '\r\n', '\r', '\n\n', '  ', 'x', '3', '->', '\u0007', '\u202e',
-];
-
-type Edit = { at: number; remove: number; insert: string };
-
-const edit: fc.Arbitrary<Edit> = fc.record({
-  at: fc.nat(),
-  remove: fc.oneof(fc.constant(0), fc.nat(3), fc.nat(80)),
-  insert: fc.oneof(fc.constantFrom(...PIECES), fc.constant(''), fc.string({ maxLength: 4 })),
-});
-
-function apply(text: string, e: Edit): string {
-  const at = e.at % (text.length + 1);
-  return text.slice(0, at) + e.insert + text.slice(at + e.remove);
-}
-
 describe('incremental parse', () => {
   it('gives the full parse after every edit of a random sequence', { timeout: TIME_LIMIT }, () => {
     fc.assert(
-      fc.property(fc.constantFrom(...SEEDS), fc.array(edit, { minLength: 1, maxLength: 12 }), (seed, edits) => {
+      fc.property(editSequence, ([seed, edits]) => {
         let text = seed;
         let parse: IncrementalParse = parseIncrementally(text);
         expect(parse.doc).toStrictEqual(parseSetup(text));
         for (const e of edits) {
-          text = apply(text, e);
+          text = applyTextEdit(text, e);
           parse = parseIncrementally(text, parse);
           expect(parse.doc).toStrictEqual(parseSetup(text));
         }

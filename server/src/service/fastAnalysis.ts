@@ -6,7 +6,7 @@
  */
 import type { Problem, SetupDocument } from '../format/ast';
 import { refusedAnalysis, sortProblems, type Analysis, type AnalyzeOptions } from '../eval/analyze';
-import { parseSetup } from '../format/parser';
+import { parseIncrementally, type IncrementalParse } from '../format/incrementalParse';
 import { computeLineStarts } from '../format/positions';
 import { buildModel } from '../model/buildModel';
 import { recordSources } from '../model/sources';
@@ -24,20 +24,29 @@ function internalError(e: unknown): Problem {
 
 /** `options` as for `analyze`: the document's location and a reader for the files it uses. */
 export function analyzeFast(text: string, options?: AnalyzeOptions): Analysis {
+  return analyzeFastAfter(text, options).analysis;
+}
+
+/**
+ * The same, reusing the parse of an earlier version of the document (`previous`) for the lines
+ * an edit did not touch; gives the parse to pass on to the next version.
+ */
+export function analyzeFastAfter(text: string, options?: AnalyzeOptions, previous?: IncrementalParse): { analysis: Analysis; parse?: IncrementalParse } {
   const refused = refusedAnalysis(text);
-  if (refused) return refused;
-  let doc: SetupDocument;
+  if (refused) return { analysis: refused };
+  let parse: IncrementalParse;
   try {
-    doc = parseSetup(text);
+    parse = parseIncrementally(text, previous);
   } catch (e) {
-    return { doc: { text, lineStarts: computeLineStarts(text), blocks: [], uses: [], comments: [], problems: [] }, problems: [internalError(e)] };
+    return { analysis: { doc: { text, lineStarts: computeLineStarts(text), blocks: [], uses: [], comments: [], problems: [] }, problems: [internalError(e)] } };
   }
+  const doc: SetupDocument = parse.doc;
   const recording = options ? recordSources(options) : undefined;
   const withSources = (a: Analysis): Analysis => (recording ? { ...a, sources: recording.snapshot() } : a);
   try {
     const model = buildModel(doc, recording?.sources);
-    return withSources({ doc, model, problems: sortProblems([...doc.problems, ...model.problems]) });
+    return { analysis: withSources({ doc, model, problems: sortProblems([...doc.problems, ...model.problems]) }), parse };
   } catch (e) {
-    return withSources({ doc, problems: sortProblems([...doc.problems, internalError(e)]) });
+    return { analysis: withSources({ doc, problems: sortProblems([...doc.problems, internalError(e)]) }), parse };
   }
 }
