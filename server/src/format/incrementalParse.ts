@@ -9,7 +9,7 @@
  */
 import type { SetupDocument } from './ast';
 import { assembleDocument, parseLines, parseSetup, startsFreshState, type ParsedLines } from './parser';
-import { computeLineStarts } from './positions';
+import { computeLineStarts, offsetToPosition } from './positions';
 import { scanLines } from './scanner';
 
 interface Segment {
@@ -71,18 +71,6 @@ function segmentAt(segments: readonly Segment[], line: number): number {
   return lo;
 }
 
-/** The line that holds offset `at`. */
-function lineOf(lineStarts: readonly number[], at: number): number {
-  let lo = 0;
-  let hi = lineStarts.length - 1;
-  while (lo < hi) {
-    const mid = (lo + hi + 1) >> 1;
-    if (lineStarts[mid]! <= at) lo = mid;
-    else hi = mid - 1;
-  }
-  return lo;
-}
-
 function fromScratch(text: string): IncrementalParse {
   const lineStarts = computeLineStarts(text);
   const segments = readSegments(text, lineStarts, 0, lineStarts.length);
@@ -119,8 +107,8 @@ function reuse(text: string, previous: IncrementalParse): IncrementalParse {
   // margin after the last, for a line break that joins or splits lines), widened to whole
   // segments. When the first touched line starts a segment, the segment before it is read again
   // too: the line may no longer start one, and then it continues that segment.
-  const firstTouched = lineOf(before.lineStarts, prefix);
-  const lastTouched = Math.min(before.lineStarts.length - 1, lineOf(before.lineStarts, old.length - suffix) + 1);
+  const firstTouched = offsetToPosition(before, prefix).line;
+  const lastTouched = Math.min(before.lineStarts.length - 1, offsetToPosition(before, old.length - suffix).line + 1);
   const segments = previous.segments;
   let first = segmentAt(segments, firstTouched);
   if (first > 0 && segments[first]!.firstLine === firstTouched) first--;
