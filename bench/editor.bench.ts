@@ -15,8 +15,13 @@ import { createMessageConnection, type MessageConnection, StreamMessageReader, S
 import { ShutdownRequest } from 'vscode-languageserver-protocol';
 import { evaluateText, inProcessEvaluator } from '../server/src/service/evaluator';
 import { LanguageService } from '../server/src/service/languageService';
+import { generateSetup } from './generatedSetup';
+
+export { generateSetup };
 
 const LINES = 2000;
+/** The large file of issue 14's row: keystroke < 50 ms, resident memory < 500 MB. */
+const LARGE_LINES = 20000;
 const EDITS = 60;
 const HOVERS = 1000;
 const PROTOCOL_EDITS = 30;
@@ -25,29 +30,6 @@ const COLD_STARTS = 5;
 const URI = 'file:///bench/generated.sublevel';
 /** The Node flags the extension starts the server with (client/src/extension.ts). */
 const SERVER_NODE_FLAGS = ['--max-semi-space-size=64'];
-
-/** A plausible large setup: many species with levels, some fields and magnets, beams and lines. */
-export function generateSetup(lines: number): string {
-  const out: string[] = ['# Generated setup for the editor benchmark (invented numbers).', ''];
-  for (let i = 0; out.length < lines; i++) {
-    out.push(
-      `species Demo${i}                       # hand-made species ${i}`,
-      `  mass = ${(40 + (i % 150) + 0.913).toFixed(3)} u`,
-      '  I    = 3/2',
-      '  g_I  = -0.000995',
-      `  level g${i}: 5s 2S1/2  A = ${(3417.34 + i).toFixed(2)} MHz`,
-      `  level p${i}: 5p 2P°3/2  A = 84.72 MHz  B = 12.5 MHz`,
-      `  level d${i}: 4d 2D5/2`,
-    );
-    if (i % 40 === 0) out.push(`field f${i} = ${[0.5, 3, 10, 50][(i / 40) % 4]} G`);
-    if (i % 40 === 20) {
-      out.push(`magnet m${i}`, '  field    = 0.4 T', '  gradient = 120 T/m', '  length   = 6 cm');
-      out.push(`beam b${i}`, `  species  = Demo${i}`, `  level    = g${i}`, '  source   = oven 450 K', '  slits    = 80 um, 50 um apart 40 cm', `  magnet   = m${i}`, '  drift    = 30 cm', '  detector = 25 um');
-    }
-    out.push(`line L${i}: g${i} -> p${i}`, '');
-  }
-  return out.slice(0, lines).join('\n');
-}
 
 /** The number on one `mass` line changed (a typical keystroke): the new text, and the line as an LSP change. */
 function editAt(text: string, k: number): { text: string; change: { range: { start: { line: number; character: number }; end: { line: number; character: number } }; text: string } } {
@@ -218,23 +200,62 @@ async function protocolFigures(text: string): Promise<string[]> {
   ];
 }
 
-/** The service figures in a fresh Node process started with the server's flags (this bundle, run again). */
-function serviceFiguresWithServerFlags(): string[] {
-  const script = `require(${JSON.stringify(__filename)}).serviceFigures(require(${JSON.stringify(__filename)}).generateSetup(${LINES}), 'Node flags of the server')
-    .then((lines) => console.log(JSON.stringify(lines)))`;
+/**
+ * A large file in the service, keystrokes only (its evaluation is levels × working fields, both
+ * growing with the generated file, and is not run here): a number changed on a line, and a line
+ * inserted (which moves every block below it).
+ */
+export function largeFileFigures(lineCount: number): string[] {
+  const svc = new LanguageService(() => undefined, inProcessEvaluator());
+  let text = generateSetup(lineCount);
+  let version = 1;
+  svc.diagnostics({ uri: URI, version: version++, getText: () => text });
+  const timed = (next: string, into: number[], cpu: number[]): void => {
+    text = next;
+    const t = text;
+    const c0 = process.cpuUsage();
+    const t0 = process.hrtime.bigint();
+    svc.diagnostics({ uri: URI, version: version++, getText: () => t });
+    into.push(ms(t0));
+    cpu.push(cpuMs(c0));
+  };
+  const edits: number[] = [];
+  const editsCpu: number[] = [];
+  const inserts: number[] = [];
+  const insertsCpu: number[] = [];
+  for (let k = 0; k < 5; k++) timed(edited(text, k), [], []); // JIT warm-up
+  for (let k = 0; k < EDITS; k++) timed(edited(text, k), edits, editsCpu);
+  for (let k = 0; k < 20; k++) {
+    const lines = text.split('\n');
+    lines.splice(Math.floor(lines.length / 2) + k, 0, '');
+    timed(lines.join('\n'), inserts, insertsCpu);
+  }
+  const rss = process.memoryUsage().rss / 1e6;
+  return [
+    `language service (in process), ${lineCount} lines (generated), Node flags of the server, keystrokes only:`,
+    `  a number edited: median ${median(edits).toFixed(2)} ms (CPU ${median(editsCpu).toFixed(2)} ms), p95 ${p95(edits).toFixed(2)} ms (goal < 50 ms: ${median(edits) < 50 ? 'met' : 'MISSED'})`,
+    `  a line inserted mid-file: median ${median(inserts).toFixed(2)} ms (CPU ${median(insertsCpu).toFixed(2)} ms), p95 ${p95(inserts).toFixed(2)} ms`,
+    `  resident memory after ${EDITS + 25} versions: ${rss.toFixed(0)} MB (goal < 500 MB: ${rss < 500 ? 'met' : 'MISSED'})`,
+  ];
+}
+
+/** Runs `call` (an expression over this bundle's exports that gives lines, or a promise of them) in a fresh Node process started with the server's flags. */
+function withServerFlags(call: string, what: string): string[] {
+  const script = `const { serviceFigures, largeFileFigures, generateSetup } = require(${JSON.stringify(__filename)}); Promise.resolve(${call}).then((lines) => console.log(JSON.stringify(lines)))`;
   const run = spawnSync(process.execPath, [...SERVER_NODE_FLAGS, '-e', script], { encoding: 'utf8' });
   const last = run.stdout.trim().split('\n').pop() ?? '';
   try {
     return JSON.parse(last) as string[];
   } catch {
-    return [`service figures with the server's flags failed: ${run.stderr.trim().split('\n').pop() ?? ''}`];
+    return [`${what} with the server's flags failed: ${run.stderr.trim().split('\n').pop() ?? ''}`];
   }
 }
 
 export async function runEditorBench(): Promise<{ name: string; lines: string[] }> {
   const text = generateSetup(LINES);
   const lines = [
-    ...serviceFiguresWithServerFlags(),
+    ...withServerFlags(`serviceFigures(generateSetup(${LINES}), 'Node flags of the server')`, 'service figures'),
+    ...withServerFlags(`largeFileFigures(${LARGE_LINES})`, 'large-file figures'),
     ...(await serviceFigures(text, "Node's default heap")),
     ...(await protocolFigures(text)),
   ];

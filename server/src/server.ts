@@ -60,8 +60,8 @@ function startLanguageServer(): void {
   const documents = new TextDocuments(TextDocument);
   const log = (message: string): void => connection.console.error(message);
 
-  /** Short pause after a keystroke before pushing diagnostics, so fast typing is not slowed down. */
-  const PUSH_DEBOUNCE_MS = 60;
+  /** Refresh requests to the client within this pause of the first are one (see coalescedRequest). */
+  const REFRESH_PAUSE_MS = 60;
   /** Pause after the last change before the evaluation (in the worker) starts. */
   const EVALUATION_DELAY_MS = 120;
 
@@ -71,8 +71,8 @@ function startLanguageServer(): void {
   let workspaceFolders: string[] = [];
 
   /** Asks the client to pull diagnostics (or inlay hints) again: one request per pause, never a pile. */
-  const refreshDiagnostics = coalescedRequest(() => connection.languages.diagnostics.refresh(), PUSH_DEBOUNCE_MS);
-  const refreshInlayHints = coalescedRequest(() => connection.languages.inlayHint.refresh(), PUSH_DEBOUNCE_MS);
+  const refreshDiagnostics = coalescedRequest(() => connection.languages.diagnostics.refresh(), REFRESH_PAUSE_MS);
+  const refreshInlayHints = coalescedRequest(() => connection.languages.inlayHint.refresh(), REFRESH_PAUSE_MS);
 
   // ---- the service, loaded lazily --------------------------------------------------------------
 
@@ -200,7 +200,7 @@ function startLanguageServer(): void {
   // worker after a short pause in typing, and its problems follow (pushed again, or the client
   // is asked to pull again).
 
-  const pushTimers = new Map<string, NodeJS.Timeout>();
+  const pushTimers = new Map<string, NodeJS.Immediate>();
   const evaluationTimers = new Map<string, NodeJS.Timeout>();
 
   /** Versions whose evaluation is waiting for a pause in typing, by document. */
@@ -224,7 +224,7 @@ function startLanguageServer(): void {
           if (client.inlayHintRefresh) refreshInlayHints();
           if (client.pullDiagnostics) {
             if (client.diagnosticRefresh) refreshDiagnostics();
-          } else schedulePush(doc.uri, 0);
+          } else schedulePush(doc.uri);
         });
       }, EVALUATION_DELAY_MS),
     );
@@ -239,15 +239,20 @@ function startLanguageServer(): void {
     if (!complete) scheduleEvaluation(doc);
   }
 
-  function schedulePush(uri: string, delay: number): void {
-    clearTimeout(pushTimers.get(uri));
-    pushTimers.set(
-      uri,
-      setTimeout(() => {
-        pushTimers.delete(uri);
-        push(uri).catch((e: unknown) => log(`sublevel: diagnostics failed for ${uri}: ${String(e)}`));
-      }, delay),
-    );
+  /**
+   * Pushes the diagnostics with no fixed wait, but only once the changes already received are
+   * taken in. The protocol library handles one received message per turn of the event loop and
+   * schedules the next one after the handler, so waiting two turns lets a change queued behind
+   * this one be handled first; it cancels this push (a burst of edits is one push). A keystroke
+   * on its own is pushed at once.
+   */
+  function schedulePush(uri: string): void {
+    clearImmediate(pushTimers.get(uri));
+    const run = (): void => {
+      pushTimers.delete(uri);
+      push(uri).catch((e: unknown) => log(`sublevel: diagnostics failed for ${uri}: ${String(e)}`));
+    };
+    pushTimers.set(uri, setImmediate(() => pushTimers.set(uri, setImmediate(run))));
   }
 
   // ---- files used by other documents ----------------------------------------------------------
@@ -262,23 +267,23 @@ function startLanguageServer(): void {
   function recheck(dependents: string[]): void {
     if (dependents.length === 0) return;
     if (!client.pullDiagnostics) {
-      for (const uri of dependents) schedulePush(uri, PUSH_DEBOUNCE_MS);
+      for (const uri of dependents) schedulePush(uri);
     } else if (client.diagnosticRefresh) refreshDiagnostics();
   }
 
   connection.onDidChangeWatchedFiles((p) => filesChanged(p.changes.map((c) => c.uri)));
 
   documents.onDidOpen((e) => {
-    if (!client.pullDiagnostics) schedulePush(e.document.uri, 0);
+    if (!client.pullDiagnostics) schedulePush(e.document.uri);
   });
   documents.onDidChangeContent((e) => {
-    if (!client.pullDiagnostics) schedulePush(e.document.uri, PUSH_DEBOUNCE_MS);
+    if (!client.pullDiagnostics) schedulePush(e.document.uri);
     // Also on open: the open text may differ from the disk's.
     filesChanged([e.document.uri]);
   });
   documents.onDidClose((e) => {
     const uri = e.document.uri;
-    clearTimeout(pushTimers.get(uri));
+    clearImmediate(pushTimers.get(uri));
     clearTimeout(evaluationTimers.get(uri));
     pushTimers.delete(uri);
     evaluationTimers.delete(uri);

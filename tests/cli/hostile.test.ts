@@ -87,26 +87,26 @@ describe('size caps on the command line', () => {
     expect(r.code).toBe(1);
     const report = JSON.parse(r.out) as { files: { diagnostics: { code: string; message: string; line: number }[] }[] };
     expect(report.files[0]!.diagnostics).toEqual([
-      expect.objectContaining({ code: 'file-too-large', line: 1, message: expect.stringMatching(/^this file is not read: it has 50000\d{3} bytes, more than the 1500000 a setup file of at most 500000 characters can have$/) }),
+      expect.objectContaining({ code: 'file-too-large', line: 1, message: expect.stringMatching(/^this file is not read: it has 50000\d{3} bytes, more than the 3000000 a setup file of at most 1000000 characters can have$/) }),
     ]);
   });
 
   it('reads a file between the character cap and the byte guard, and reports the character cap', () => {
     const line = 'species K39\n  level ground: 4s 2S1/2\n';
-    const file = setup('large.sublevel', line.repeat(Math.ceil(600_000 / line.length)));
+    const file = setup('large.sublevel', line.repeat(Math.ceil(1_100_000 / line.length)));
     const r = cli('check', file, '--format', 'json');
     expect(r.code).toBe(1);
     const report = JSON.parse(r.out) as { files: { diagnostics: { code: string; message: string; line: number }[] }[] };
     expect(report.files[0]!.diagnostics).toEqual([
-      expect.objectContaining({ code: 'document-too-large', line: 1, message: expect.stringMatching(/^this file is not checked: it has 6000\d\d characters, more than the 500000 a setup file may have$/) }),
+      expect.objectContaining({ code: 'document-too-large', line: 1, message: expect.stringMatching(/^this file is not checked: it has 11000\d\d characters, more than the 1000000 a setup file may have$/) }),
     ]);
   });
 
   it('ends a file over the statement cap at once', () => {
-    const file = setup('many.sublevel', 'field f = 1 G\n'.repeat(2_001));
+    const file = setup('many.sublevel', 'field f = 1 G\n'.repeat(20_001));
     const r = cli('check', file);
     expect(r.code).toBe(1);
-    expect(r.out).toBe(`${file}:1:1 error too-many-statements this file is not checked: it has more than 2000 statements, the most a setup file may have`);
+    expect(r.out).toBe(`${file}:1:1 error too-many-statements this file is not checked: it has more than 20000 statements, the most a setup file may have`);
   });
 
   it('refuses a used file over the used-file cap without reading it', () => {

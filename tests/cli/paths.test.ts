@@ -197,13 +197,13 @@ describe('limits of the search and the reader', () => {
   });
   afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
-  it('a file over 1,500,000 bytes (3 bytes × the 500,000-character cap) is not read (a sparse file, so the test is quick)', () => {
+  it('a file over 3,000,000 bytes (3 bytes × the 1,000,000-character cap) is not read (a sparse file, so the test is quick)', () => {
     const big = path.join(dir, 'big.sublevel');
     writeFileSync(big, '');
-    fs.truncateSync(big, 1_500_001);
+    fs.truncateSync(big, 3_000_001);
     const r = cli('check', big);
     expect(r.code).toBe(1);
-    expect(r.out).toBe(`${big}:1:1 error file-too-large this file is not read: it has 1500001 bytes, more than the 1500000 a setup file of at most 500000 characters can have`);
+    expect(r.out).toBe(`${big}:1:1 error file-too-large this file is not read: it has 3000001 bytes, more than the 3000000 a setup file of at most 1000000 characters can have`);
     rmSync(big);
   });
 

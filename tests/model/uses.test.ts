@@ -253,9 +253,9 @@ describe('what use may read', () => {
     expect(a.problems.map((p) => `${p.code} ${p.message}`)).toEqual([
       `use-file-too-large big.sublevel is not read: it has ${big.length} characters, more than the 500000 a used file may have`,
     ]);
-    const many = run('use "many.sublevel"', { 'many.sublevel': `species K39\n${'  level x: 4s 2S1/2\n'.repeat(2_000)}` });
+    const many = run('use "many.sublevel"', { 'many.sublevel': `species K39\n${'  level x: 4s 2S1/2\n'.repeat(20_000)}` });
     expect(many.problems.map((p) => `${p.code} ${p.message}`)).toEqual([
-      'use-file-too-large many.sublevel is not used: it has more than 2000 statements, the most a setup file may have',
+      'use-file-too-large many.sublevel is not used: it has more than 20000 statements, the most a setup file may have',
     ]);
     const onDisk = analyze('use "huge.sublevel"', { ...memorySources(ROOT, {}), readFile: () => ({ tooLarge: true, bytes: 15_000_000 }) });
     expect(onDisk.problems[0]!.message).toBe('huge.sublevel is not read: it has 15000000 bytes, more than the 500000 a used file may have');

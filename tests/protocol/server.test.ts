@@ -107,6 +107,20 @@ describe('the built server over JSON-RPC, diagnostics pushed', () => {
     expect(closed.ok).toBe(false);
   });
 
+  it('pushes an edit’s diagnostics with no fixed wait: before requests sent just after it are all answered', async () => {
+    const other = 'file:///protocol/keystroke.sublevel';
+    await open(client, other, TEXT);
+    await client.waitForPush(other, (d) => d.some((x) => x.code === 'zeeman-not-linear')); // evaluated: the server is idle
+    const fixed = TEXT.replace('-> uper', '-> upper');
+    await client.connection.sendNotification('textDocument/didChange', { textDocument: { uri: other, version: 2 }, contentChanges: [{ text: fixed }] });
+    const outline = () => client.connection.sendRequest('textDocument/documentSymbol', { textDocument: { uri: other } });
+    await Promise.all([outline(), outline(), outline()]);
+    // A timer of even a few milliseconds before the push lets all three answers go out first.
+    expect(client.pushed.get(other)?.version).toBe(2);
+    expect(codes(client.pushed.get(other)!.diagnostics)).not.toContain('name-unknown');
+    await client.connection.sendNotification('textDocument/didClose', { textDocument: { uri: other } });
+  });
+
   it('follows edits and clears diagnostics on close', async () => {
     await client.connection.sendNotification('textDocument/didChange', {
       textDocument: { uri: URI, version: 2 },

@@ -16,7 +16,32 @@ export interface ExactAtField {
   notices: { code: string; severity: 'warning' | 'info'; message: string }[];
 }
 
+/**
+ * Results by (level spec, field): a file repeats levels (the same term and constants in many
+ * species) and an evaluation visits each at every working field, so equal ones are solved once.
+ * Each caller gets its own copies of the states (`pairLinear` adds a linear energy that depends
+ * on more than the spec). Bounded: the least recently used go first.
+ */
+const MEMO_ENTRIES = 4096;
+const memo = new Map<string, ExactAtField>();
+
+function memoKey(spec: LevelSpec, fieldT: number): string {
+  return spec.kind === 'hyperfine'
+    ? `h|${spec.twoJ}|${spec.twoI}|${spec.gJ}|${spec.gI}|${spec.A}|${spec.B}|${spec.C}|${fieldT}`
+    : `f|${spec.twoS}|${spec.L}|${spec.zeta}|${spec.gL}|${spec.gS}|${spec.twoI}|${spec.gI}|${fieldT}`;
+}
+
 export function exactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
+  const key = memoKey(spec, fieldT);
+  let known = memo.get(key);
+  if (known) memo.delete(key);
+  else known = solveExactAtField(spec, fieldT);
+  memo.set(key, known);
+  if (memo.size > MEMO_ENTRIES) memo.delete(memo.keys().next().value!);
+  return { ...known, exact: known.exact.map((s) => ({ ...s })) };
+}
+
+function solveExactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
   const solved = solveLevel(spec, fieldT);
   const noNucleus = spec.kind === 'hyperfine' && spec.twoI === 0;
   const errors = solved.issues.filter((i) => i.severity === 'error').map((i) => ({ code: i.code, message: i.message }));

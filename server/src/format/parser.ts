@@ -16,7 +16,8 @@ import { rangeOn, readValueGroups, spanOf, type LineSpans } from './values';
 /** Parses a whole document. Never throws. */
 export function parseSetup(text: string): SetupDocument {
   try {
-    return new SetupParser(text).run();
+    const scanned = scanText(text);
+    return assembleDocument(text, scanned.lineStarts, [parseLines(text, scanned.lines)]);
   } catch (e) {
     // Defensive only: the property tests check this path is never taken.
     const at = { line: 0, character: 0 };
@@ -29,6 +30,54 @@ export function parseSetup(text: string): SetupDocument {
       problems: [makeProblem('syntax-internal-error', `the parser failed on this text: ${String(e)}`, { start: at, end: at })],
     };
   }
+}
+
+/** What reading a run of lines gives: its nodes and its problems in reading order (not sorted). */
+export interface ParsedLines {
+  blocks: BlockNode[];
+  uses: UseNode[];
+  comments: SetupDocument['comments'];
+  problems: Problem[];
+}
+
+/**
+ * Reads scanned lines of `text` (line numbers and offsets are those of the whole text) starting
+ * from the parser's initial state. The incremental parser calls it on runs that begin at the
+ * document's first line or at a line that `startsFreshState` accepts.
+ */
+export function parseLines(text: string, lines: readonly ScannedLine[]): ParsedLines {
+  return new SetupParser(text).run(lines);
+}
+
+/**
+ * True when reading this line leaves the parser in a state that does not depend on the lines
+ * before it: a block header or a `use` statement (a block word or `use` not followed by `=` or `:`;
+ * after `:` it may be a key of the enclosing block). The same test as `readLine`'s, made without state.
+ */
+export function startsFreshState(line: ScannedLine): boolean {
+  const [t0, t1] = line.tokens;
+  if (t0?.kind !== 'atom' || t1?.kind === 'equals' || t1?.kind === 'colon') return false;
+  return isBlockWord(t0.text) || t0.text === USE_WORD;
+}
+
+/** The document from the runs of lines read in order: their nodes joined, control characters checked, problems sorted. */
+export function assembleDocument(text: string, lineStarts: number[], parts: readonly ParsedLines[]): SetupDocument {
+  const blocks: BlockNode[] = [];
+  const uses: UseNode[] = [];
+  const comments: SetupDocument['comments'] = [];
+  const found: Problem[] = [];
+  for (const part of parts) {
+    for (const b of part.blocks) blocks.push(b);
+    for (const u of part.uses) uses.push(u);
+    for (const c of part.comments) comments.push(c);
+    for (const p of part.problems) found.push(p);
+  }
+  for (const p of controlCharacterProblems(text, lineStarts)) found.push(p);
+  const problems = found
+    .map((p, i) => ({ p, i }))
+    .sort((a, b) => a.p.range.start.line - b.p.range.start.line || a.p.range.start.character - b.p.range.start.character || a.i - b.i)
+    .map((x) => x.p);
+  return { text, lineStarts, blocks, uses, comments, problems };
 }
 
 /** Indexes of tokens that start a setting: a word directly followed by `=`. */
@@ -70,15 +119,9 @@ class SetupParser {
 
   constructor(private readonly text: string) {}
 
-  run(): SetupDocument {
-    const scanned = scanText(this.text);
-    for (const line of scanned.lines) this.readLine(line);
-    this.problems.push(...controlCharacterProblems(this.text, scanned.lineStarts));
-    const problems = this.problems
-      .map((p, i) => ({ p, i }))
-      .sort((a, b) => a.p.range.start.line - b.p.range.start.line || a.p.range.start.character - b.p.range.start.character || a.i - b.i)
-      .map((x) => x.p);
-    return { text: this.text, lineStarts: scanned.lineStarts, blocks: this.blocks, uses: this.uses, comments: this.comments, problems };
+  run(lines: readonly ScannedLine[]): ParsedLines {
+    for (const line of lines) this.readLine(line);
+    return { blocks: this.blocks, uses: this.uses, comments: this.comments, problems: this.problems };
   }
 
   // ---- lines -------------------------------------------------------------------------------

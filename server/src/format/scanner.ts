@@ -119,16 +119,21 @@ export function scanLine(text: string, line: number, start: number, end: number)
   return result;
 }
 
-/** Every line of the text, scanned. */
-export function scanText(text: string): ScannedText {
-  const lineStarts = computeLineStarts(text);
+/** Lines [from, to) of a text whose line starts are known, scanned (the incremental parser reads a few). */
+export function scanLines(text: string, lineStarts: readonly number[], from: number, to: number): ScannedLine[] {
   const lines: ScannedLine[] = [];
-  for (let n = 0; n < lineStarts.length; n++) {
+  for (let n = from; n < to; n++) {
     const start = lineStarts[n]!;
     let end = n + 1 < lineStarts.length ? lineStarts[n + 1]! : text.length;
     if (end > start && text.charCodeAt(end - 1) === 10) end--;
     if (end > start && text.charCodeAt(end - 1) === 13) end--;
     lines.push(scanLine(text, n, start, end));
   }
-  return { lineStarts, lines };
+  return lines;
+}
+
+/** Every line of the text, scanned. */
+export function scanText(text: string): ScannedText {
+  const lineStarts = computeLineStarts(text);
+  return { lineStarts, lines: scanLines(text, lineStarts, 0, lineStarts.length) };
 }

@@ -5,6 +5,7 @@
  */
 import type { Range, SetupDocument } from '../format/ast';
 import { buildBeam, buildField, buildMagnet } from './apparatusBuilder';
+import { BlockMemo } from './blockMemo';
 import { checkLevelPhysics } from './levelChecks';
 import { buildLine } from './lineBuilder';
 import { locationKey } from './locations';
@@ -19,9 +20,11 @@ import { resolveUses, rootUseContext, type UseContext } from './useResolver';
 
 /**
  * `sources` says where the text lives and how to read the files its `use` statements name;
- * without it a `use` cannot be followed (and says so). `context` is for used files.
+ * without it a `use` cannot be followed (and says so). `context` is for used files. `memo`
+ * reuses what was built for the blocks of an earlier version that this one shares (the editor
+ * passes one per version); the model is the same with or without it.
  */
-export function buildModel(doc: SetupDocument, sources: SetupSources = {}, context?: UseContext): SetupModel {
+export function buildModel(doc: SetupDocument, sources: SetupSources = {}, context?: UseContext, memo: BlockMemo = new BlockMemo()): SetupModel {
   const problems = new ProblemList();
   const used = doc.uses.length > 0 ? resolveUses(doc, sources, context ?? rootUseContext(sources.uri), buildModel, problems) : [];
   const names: NameUse[] = [];
@@ -36,17 +39,17 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
   for (const block of doc.blocks) {
     switch (block.kind) {
       case 'species': {
-        const s = buildSpecies(block, names, problems);
+        const s = memo.build(block, names, problems, (u, p) => buildSpecies(block, u, p));
         if (s) species.declare(s, problems);
         break;
       }
       case 'field': {
-        const f = buildField(block, problems);
+        const f = memo.build(block, names, problems, (_u, p) => buildField(block, p));
         if (f) fields.declare(f, problems);
         break;
       }
       case 'magnet': {
-        const m = buildMagnet(block, problems);
+        const m = memo.build(block, names, problems, (_u, p) => buildMagnet(block, p));
         if (m) magnets.declare(m, problems);
         break;
       }
@@ -87,7 +90,10 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
     problems: problems.items,
   };
   // A used file's levels are checked in that file.
-  for (const s of model.species) if (!s.origin) for (const l of s.levels) checkLevelPhysics(l, model.settings, problems);
+  const settingsKey = JSON.stringify(model.settings);
+  for (const s of model.species) {
+    if (!s.origin) memo.check(s.node, settingsKey, problems, (p) => s.levels.forEach((l) => checkLevelPhysics(l, model.settings, p)));
+  }
   return model;
 }
 

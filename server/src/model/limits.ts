@@ -5,10 +5,10 @@
  */
 
 /** A document longer than this many characters (UTF-16 code units, about bytes for ASCII text) is not analysed. */
-export const MAX_DOCUMENT_CHARS = 500_000;
+export const MAX_DOCUMENT_CHARS = 1_000_000;
 
 /** A document with more statements (lines that are neither blank nor only a comment) than this is not analysed. */
-export const MAX_STATEMENTS = 2_000;
+export const MAX_STATEMENTS = 20_000;
 
 /**
  * A file named by `use` that is larger than this many bytes on disk (or characters when open in

@@ -91,17 +91,19 @@ export function resolveLevel(
   uses: NameUse[],
   problems: ProblemList,
 ): LevelModel | undefined {
-  let pool: SpeciesModel[];
+  // Without a qualifier or a context the pool is every species: listed only when a name is
+  // unknown (listing it for every reference made the model quadratic in the file).
+  let pool: () => SpeciesModel[];
   if (ref.qualifier) {
     const s = species.resolve(ref.qualifier, problems);
     if (!s) return undefined;
-    pool = [s];
+    pool = () => [s];
   } else if (context) {
-    pool = [context];
+    pool = () => [context];
   } else {
-    pool = species.all();
+    pool = () => species.all();
   }
-  const matches = ref.qualifier || context ? pool.flatMap((s) => s.levels.filter((l) => l.name === ref.name.text)) : (levelsByName(species).get(ref.name.text) ?? []);
+  const matches = ref.qualifier || context ? pool().flatMap((s) => s.levels.filter((l) => l.name === ref.name.text)) : (levelsByName(species).get(ref.name.text) ?? []);
   if (matches.length > 1) {
     problems.add(
       'name-ambiguous',
@@ -123,7 +125,7 @@ export function resolveLevel(
     ...(found ? { target: { kind: 'level', name: found.name, range: found.nameRange, ...(found.species.origin ? { uri: found.species.origin.uri } : {}) } } : {}),
   });
   if (!found) {
-    reportUnknown('level', ref.name, pool.flatMap((s) => s.levels.map((l) => l.name)), problems);
+    reportUnknown('level', ref.name, pool().flatMap((s) => s.levels.map((l) => l.name)), problems);
   }
   return found;
 }

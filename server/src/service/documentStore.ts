@@ -12,7 +12,7 @@ import type { Problem } from '../format/ast';
 import { folderOf, locationKey } from '../model/locations';
 import { carryOver, splitLines } from './carryOver';
 import { type Evaluator, SUPERSEDED } from './evaluator';
-import { analyzeFast } from './fastAnalysis';
+import { analyzeFastAfter, type FastState } from './fastAnalysis';
 import type { WorkspaceFiles } from './workspaceFiles';
 
 export interface DocumentSnapshot {
@@ -31,6 +31,8 @@ interface VersionState {
   lines: string[];
   /** Parse and model; `result` and the evaluation's problems are merged in when it arrives. */
   analysis: Analysis;
+  /** The parse in segments and the model's blocks, which the next version reuses where the edit did not touch them. */
+  fast?: FastState;
   evaluated: boolean;
   /** The previous version's evaluation problems, moved onto this version's lines. */
   carried: Problem[];
@@ -92,7 +94,7 @@ export class DocumentStore {
     const entry = this.docs.get(doc.uri);
     if (entry && entry.current.version === doc.version && !entry.current.stale) return entry.current;
     const text = doc.getText();
-    const analysis = analyzeFast(text, this.options(doc.uri));
+    const { analysis, state: fast } = analyzeFastAfter(text, this.options(doc.uri), entry?.current.fast);
     // A text over a cap is not split into lines or evaluated: its one problem is all there is.
     const lines = analysis.refused ? [] : splitLines(text);
     const last = analysis.refused ? undefined : entry?.lastEvaluated;
@@ -105,6 +107,7 @@ export class DocumentStore {
       evaluated: analysis.refused === true,
       carried: last ? carryOver(last.lines, lines, last.problems) : [],
       ...(last ? { carriedFrom: last } : {}),
+      ...(fast ? { fast } : {}),
     };
     if (entry) entry.current = state;
     else this.docs.set(doc.uri, { current: state });

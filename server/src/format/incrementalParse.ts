@@ -1,0 +1,125 @@
+/**
+ * Parsing at the speed of a keystroke: the document is kept as runs of lines ("segments") that
+ * each begin where the parser's state does not depend on what came before (the first line, a
+ * block header, a `use`; see `startsFreshState`). After an edit only the segments that the
+ * changed lines touch are read again; the others are reused, moved down or up by the change in
+ * line count when they follow it. Every segment is read by the one parser (`parseLines`), so the
+ * result is the document `parseSetup` gives for the same text (a property test checks this).
+ * Nothing here knows the block kinds: a block word added to the schema needs no change.
+ */
+import type { SetupDocument } from './ast';
+import { assembleDocument, parseLines, parseSetup, startsFreshState, type ParsedLines } from './parser';
+import { computeLineStarts, offsetToPosition } from './positions';
+import { scanLines } from './scanner';
+
+interface Segment {
+  /** The segment's first line, in the document it was read for. */
+  firstLine: number;
+  lineCount: number;
+  part: ParsedLines;
+}
+
+/** A parsed text and what the next parse needs to reuse it. */
+export interface IncrementalParse {
+  readonly doc: SetupDocument;
+  readonly segments: readonly Segment[];
+}
+
+/** Reads lines [from, to) of the text as segments. */
+function readSegments(text: string, lineStarts: readonly number[], from: number, to: number): Segment[] {
+  const lines = scanLines(text, lineStarts, from, to);
+  const out: Segment[] = [];
+  let start = 0;
+  for (let i = 1; i <= lines.length; i++) {
+    if (i < lines.length && !startsFreshState(lines[i]!)) continue;
+    out.push({ firstLine: from + start, lineCount: i - start, part: parseLines(text, lines.slice(start, i)) });
+    start = i;
+  }
+  return out;
+}
+
+/** A copy with every position (`{ line, character }`) moved by `delta` lines; strings and numbers are shared. */
+function shifted<T>(value: T, delta: number): T {
+  if (Array.isArray(value)) return value.map((v) => shifted(v, delta)) as T;
+  if (value === null || typeof value !== 'object') return value;
+  const o = value as Record<string, unknown>;
+  if (typeof o['line'] === 'number' && typeof o['character'] === 'number' && Object.keys(o).length === 2) {
+    return { line: (o['line'] as number) + delta, character: o['character'] } as T;
+  }
+  const copy: Record<string, unknown> = {};
+  for (const k of Object.keys(o)) copy[k] = shifted(o[k], delta);
+  return copy as T;
+}
+
+/** The segment moved by `delta` lines. One with problems is read again: their messages may name line numbers. */
+function moved(segment: Segment, delta: number, text: string, lineStarts: readonly number[]): Segment[] {
+  if (delta === 0) return [segment];
+  const firstLine = segment.firstLine + delta;
+  if (segment.part.problems.length > 0) return readSegments(text, lineStarts, firstLine, firstLine + segment.lineCount);
+  return [{ firstLine, lineCount: segment.lineCount, part: shifted(segment.part, delta) }];
+}
+
+/** Index of the segment holding `line` (segments are sorted and cover every line). */
+function segmentAt(segments: readonly Segment[], line: number): number {
+  let lo = 0;
+  let hi = segments.length - 1;
+  while (lo < hi) {
+    const mid = (lo + hi + 1) >> 1;
+    if (segments[mid]!.firstLine <= line) lo = mid;
+    else hi = mid - 1;
+  }
+  return lo;
+}
+
+function fromScratch(text: string): IncrementalParse {
+  const lineStarts = computeLineStarts(text);
+  const segments = readSegments(text, lineStarts, 0, lineStarts.length);
+  return { doc: assembleDocument(text, lineStarts, segments.map((s) => s.part)), segments };
+}
+
+/**
+ * Parses `text`, reusing what `previous` (the parse of an earlier version of the same document)
+ * read for the lines the edit did not touch. Never throws: on an unexpected failure the text is
+ * parsed whole by `parseSetup`, which reports it.
+ */
+export function parseIncrementally(text: string, previous?: IncrementalParse): IncrementalParse {
+  try {
+    if (!previous || previous.segments.length === 0) return fromScratch(text);
+    return reuse(text, previous);
+  } catch {
+    return { doc: parseSetup(text), segments: [] };
+  }
+}
+
+function reuse(text: string, previous: IncrementalParse): IncrementalParse {
+  const before = previous.doc;
+  const old = before.text;
+  if (old === text) return previous;
+  const min = Math.min(old.length, text.length);
+  let prefix = 0;
+  while (prefix < min && old.charCodeAt(prefix) === text.charCodeAt(prefix)) prefix++;
+  let suffix = 0;
+  while (suffix < min - prefix && old.charCodeAt(old.length - 1 - suffix) === text.charCodeAt(text.length - 1 - suffix)) suffix++;
+
+  const lineStarts = computeLineStarts(text);
+  const delta = lineStarts.length - before.lineStarts.length;
+  // The old lines the change touches (lines before the first keep their text; one line of
+  // margin after the last, for a line break that joins or splits lines), widened to whole
+  // segments. When the first touched line starts a segment, the segment before it is read again
+  // too: the line may no longer start one, and then it continues that segment.
+  const firstTouched = offsetToPosition(before, prefix).line;
+  const lastTouched = Math.min(before.lineStarts.length - 1, offsetToPosition(before, old.length - suffix).line + 1);
+  const segments = previous.segments;
+  let first = segmentAt(segments, firstTouched);
+  if (first > 0 && segments[first]!.firstLine === firstTouched) first--;
+  const last = segmentAt(segments, lastTouched);
+  const from = segments[first]!.firstLine;
+  const endOld = segments[last]!.firstLine + segments[last]!.lineCount;
+  const to = endOld + delta;
+  if (to < from) return fromScratch(text);
+
+  const out: Segment[] = segments.slice(0, first);
+  for (const s of readSegments(text, lineStarts, from, to)) out.push(s);
+  for (let i = last + 1; i < segments.length; i++) for (const s of moved(segments[i]!, delta, text, lineStarts)) out.push(s);
+  return { doc: assembleDocument(text, lineStarts, out.map((s) => s.part)), segments: out };
+}
