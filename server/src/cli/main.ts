@@ -6,6 +6,7 @@
 import { version } from '../../../package.json';
 import { type CommandSpec, type ParsedArgs, parseCommandArgs, UsageError } from './args';
 import { checkSpec, runCheck } from './checkCommand';
+import { diffSpec, runDiff } from './diffCommand';
 import { evalSpec, runEval } from './evalCommand';
 import { diagnosticLine, FileProblemError } from './fileProblems';
 import type { CliFileSystem } from './fileSystem';
@@ -28,6 +29,7 @@ const COMMANDS: readonly Command[] = [
   { spec: sweepSpec, run: runSweep },
   { spec: profileSpec, run: runProfile },
   { spec: renderSpec, run: runRender },
+  { spec: diffSpec, run: runDiff },
 ];
 
 const SPECS = COMMANDS.map((c) => c.spec);
