@@ -7,17 +7,17 @@ import { field, gradient, length, writtenLength } from './writers';
 /** A setting the user wrote changes when its value does at all (beyond rounding in the last digits). */
 const WRITTEN = (x: number | undefined, y: number | undefined): number => Math.max(Math.abs(x ?? 0), Math.abs(y ?? 0)) * 1e-12;
 
-export function compareField(a: { field_T?: number; field_unit?: string }, b: { field_T?: number; field_unit?: string }, t: DiffThresholds): ChangeList {
+export function compareField(a: { field_T?: number; field_unit?: string }, b: { field_T?: number; field_unit?: string }): ChangeList {
   const list = new ChangeList();
-  list.number('field', a.field_T, b.field_T, Math.min(t.field_T, WRITTEN(a.field_T, b.field_T)), field({ unit: b.field_unit ?? a.field_unit }), 'T');
+  list.number('field', a.field_T, b.field_T, WRITTEN(a.field_T, b.field_T), field({ unit: b.field_unit ?? a.field_unit }), 'T');
   return list;
 }
 
-export function compareMagnet(a: MagnetResult, b: MagnetResult, t: DiffThresholds): ChangeList {
+export function compareMagnet(a: MagnetResult, b: MagnetResult): ChangeList {
   const list = new ChangeList();
-  list.number('field', a.field_T, b.field_T, Math.min(t.field_T, WRITTEN(a.field_T, b.field_T)), field({ unit: b.field_unit ?? a.field_unit }), 'T');
+  list.number('field', a.field_T, b.field_T, WRITTEN(a.field_T, b.field_T), field({ unit: b.field_unit ?? a.field_unit }), 'T');
   list.number('gradient', a.gradient_T_per_m, b.gradient_T_per_m, WRITTEN(a.gradient_T_per_m, b.gradient_T_per_m), gradient(b.gradient_unit ?? a.gradient_unit), 'T/m');
-  list.number('length', a.length_m, b.length_m, Math.min(t.length_m, WRITTEN(a.length_m, b.length_m)), writtenLength(b.length_unit ?? a.length_unit), 'm');
+  list.number('length', a.length_m, b.length_m, WRITTEN(a.length_m, b.length_m), writtenLength(b.length_unit ?? a.length_unit), 'm');
   return list;
 }
 
