@@ -38,7 +38,7 @@ export const diffSpec: CommandSpec = {
   },
   notes: [
     'Things are matched by name (levels as species.level), so moved text is no change; diagnostics are matched by code and thing.',
-    'Exit codes for diff: 0 no physical change, 1 changes, 2 usage error or a file or revision that cannot be read, 3 internal error.',
+    'Thresholds, formats and the git diff driver: docs/ci.md.',
   ],
 };
 
