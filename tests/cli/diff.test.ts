@@ -9,15 +9,22 @@ import { execFileSync } from 'child_process';
 import * as fs from 'fs';
 import * as os from 'os';
 import * as path from 'path';
+import Ajv2020 from 'ajv/dist/2020';
 import { describe, expect, it } from 'vitest';
+import schema from '../../docs/schema/diff.schema.json';
 import type { SetupDiff } from '../../server/src/diff/diffTypes';
 import { cli } from './runCli';
 
 const F = 'tests/fixtures/diff';
 
+const validate = new Ajv2020({ allErrors: true, strict: true, allowUnionTypes: true }).compile(schema);
+
+/** The JSON document, checked against docs/schema/diff.schema.json on every call. */
 function diffJson(...args: string[]): { code: number; diff: SetupDiff } {
   const r = cli('diff', '--format', 'json', ...args);
-  return { code: r.code, diff: JSON.parse(r.out) as SetupDiff };
+  const diff = JSON.parse(r.out) as SetupDiff;
+  expect(validate(diff) ? [] : validate.errors).toEqual([]);
+  return { code: r.code, diff };
 }
 
 /** Every reported item as one short line: the whole report, to compare exactly. */
@@ -86,6 +93,7 @@ describe('sublevel diff: version pairs', () => {
       expect(reported(diff), other).toEqual([]);
       expect(diff.changed).toBe(false);
       expect(code).toBe(0);
+      expect(validate({ ...diff, version: 2 })).toBe(false);
     }
     const text = cli('diff', `${F}/beam-old.sublevel`, `${F}/beam-moved.sublevel`);
     expect(text.out.split('\n')).toEqual([`--- ${F}/beam-old.sublevel`, `+++ ${F}/beam-moved.sublevel`, 'No physical change.']);
