@@ -25,10 +25,6 @@ export function withReaderProblems(a: Analysis, extra: Problem[]): Analysis {
   return { ...a, problems, ...(result ? { result } : {}) };
 }
 
-export function errorCount(a: Analysis): number {
-  return a.problems.filter((p) => p.severity === 'error').length;
-}
-
 /**
  * For commands whose output is data (CSV, SVG): the file's errors on stderr as file:line:col
  * lines, so exit 1 is explained. Returns how many there are.

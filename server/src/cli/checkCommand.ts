@@ -17,15 +17,23 @@ import { diagnosticLine } from './fileProblems';
 import { findSetupFiles, type FoundPath, ROOT_OPTION, rootOption } from './files';
 import type { CliContext } from './io';
 import { readSetup } from './readSetup';
+import { sarifReport } from './sarif/sarifReport';
+import { atOrAbove, FAIL_ON_OPTION, failOnOption, QUIET_OPTION } from './severityThreshold';
 
-const FORMATS = ['text', 'json'] as const;
+const FORMATS = ['text', 'json', 'sarif'] as const;
 
 export const checkSpec: CommandSpec = {
   name: 'check',
   operands: '<files or folders...>',
   summary: 'report every problem in setup files (folders are searched recursively for *.sublevel); exit 1 if any error',
-  options: { format: { value: 'FORMAT', choices: FORMATS, help: 'text: one file:line:col line per problem (default); json: one document' }, ...ROOT_OPTION },
+  options: {
+    format: { value: 'FORMAT', choices: FORMATS, help: 'text: one file:line:col line per problem (default); json: one document; sarif: SARIF 2.1.0 for CI (docs/ci.md)' },
+    ...FAIL_ON_OPTION,
+    ...QUIET_OPTION,
+    ...ROOT_OPTION,
+  },
   notes: [
+    'SARIF paths are relative to --root if given, else to the git work tree holding the current folder, else to the current folder.',
     'Symbolic links to files and folders are followed; each file and folder is visited once (loops end with a note).',
     'A path that cannot be read or searched is reported as an error of that path; the other paths are still checked.',
   ],
@@ -46,28 +54,36 @@ function problemsOf(file: string, root: string | undefined, ctx: CliContext, che
 
 export function runCheck(args: ParsedArgs, ctx: CliContext): number {
   const format = stringOption(args, 'format', FORMATS) ?? 'text';
+  const failOn = failOnOption(args);
+  const quiet = args.options.has('quiet');
   if (args.positionals.length === 0) throw new UsageError('check needs at least one file or folder');
   const root = rootOption(stringOption(args, 'root'), ctx.fsys);
   const found = findSetupFiles(args.positionals, ctx.fsys);
   // `use` reads below --root, else below the folder named on the command line, else the file's own folder.
   const rootOf = (f: FoundPath): string | undefined => root ?? (f.input === f.path ? undefined : f.input);
   const checked = new Set(found.filter((f) => !f.problem).map((f) => path.resolve(f.path)));
+  let failing = 0;
   let errors = 0;
   let files = 0;
-  const report: { file: string; diagnostics: ReturnType<typeof toDiagnosticResult>[] }[] = [];
+  const checkedFiles: { file: string; problems: Problem[] }[] = [];
   for (const f of found) {
     const { problems, read } = f.problem ? { problems: [f.problem], read: false } : problemsOf(f.path, rootOf(f), ctx, checked);
     if (read) files++;
     errors += problems.filter((p) => p.severity === 'error').length;
-    report.push({ file: f.path, diagnostics: problems.map(toDiagnosticResult) });
-    if (format === 'text') for (const p of problems) ctx.io.out(diagnosticLine(f.path, p));
+    failing += problems.filter((p) => atOrAbove(p.severity, failOn)).length;
+    const shown = quiet ? problems.filter((p) => atOrAbove(p.severity, failOn)) : problems;
+    checkedFiles.push({ file: f.path, problems: shown });
+    if (format === 'text') for (const p of shown) ctx.io.out(diagnosticLine(f.path, p));
   }
-  if (format === 'json') ctx.io.out(jsonText({ format: 'sublevel-check', version: 1, files: report }));
-  else {
-    const total = report.reduce((n, r) => n + r.diagnostics.length, 0);
-    const unread = report.length - files;
+  if (format === 'json') {
+    const report = checkedFiles.map((r) => ({ file: r.file, diagnostics: r.problems.map(toDiagnosticResult) }));
+    ctx.io.out(jsonText({ format: 'sublevel-check', version: 1, files: report }));
+  } else if (format === 'sarif') ctx.io.out(jsonText(sarifReport(checkedFiles, root)));
+  else if (!quiet) {
+    const total = checkedFiles.reduce((n, r) => n + r.problems.length, 0);
+    const unread = checkedFiles.length - files;
     const notRead = unread > 0 ? ` (${unread} other path${unread === 1 ? '' : 's'} not read)` : '';
     ctx.io.err(`${files} file${files === 1 ? '' : 's'} checked${notRead}: ${errors} error${errors === 1 ? '' : 's'}, ${total - errors} other finding${total - errors === 1 ? '' : 's'}`);
   }
-  return errors > 0 ? 1 : 0;
+  return failing > 0 ? 1 : 0;
 }

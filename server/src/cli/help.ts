@@ -1,7 +1,8 @@
 /** Help texts: the overview (`sublevel --help`) and one page per command (`sublevel <command> --help`). */
 import type { CommandSpec } from './args';
 
-export const EXIT_CODES_TEXT = 'exit codes: 0 no errors (warnings and notes allowed), 1 an error in a setup file or a file that cannot be read, 2 usage error or --out not written, 3 internal error';
+export const EXIT_CODES_TEXT =
+  'exit codes: 0 no errors (warnings and notes allowed; see --fail-on), 1 an error in a setup file or a file that cannot be read, 2 usage error or --out not written, 3 internal error; diff: 0 no physical change, 1 changes, 2 usage or a file that cannot be read';
 
 export function overviewHelp(specs: readonly CommandSpec[]): string {
   const width = Math.max(...specs.map((s) => s.name.length));

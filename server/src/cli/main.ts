@@ -1,11 +1,13 @@
 /**
  * The `sublevel` command. Exit codes (the same for every command, see EXIT_CODES_TEXT):
  * 0 no errors, 1 an error in a setup file or a file that cannot be read, 2 usage error or
- * --out not written, 3 internal error.
+ * --out not written, 3 internal error. `diff` follows diff(1): 1 means the setups differ, and a
+ * file it cannot read is 2 (see diffCommand.ts).
  */
 import { version } from '../../../package.json';
 import { type CommandSpec, type ParsedArgs, parseCommandArgs, UsageError } from './args';
 import { checkSpec, runCheck } from './checkCommand';
+import { diffSpec, runDiff } from './diffCommand';
 import { evalSpec, runEval } from './evalCommand';
 import { diagnosticLine, FileProblemError } from './fileProblems';
 import type { CliFileSystem } from './fileSystem';
@@ -28,6 +30,7 @@ const COMMANDS: readonly Command[] = [
   { spec: sweepSpec, run: runSweep },
   { spec: profileSpec, run: runProfile },
   { spec: renderSpec, run: runRender },
+  { spec: diffSpec, run: runDiff },
 ];
 
 const SPECS = COMMANDS.map((c) => c.spec);
