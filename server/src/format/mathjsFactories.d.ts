@@ -4,7 +4,6 @@ import 'mathjs';
 declare module 'mathjs' {
   type Factory = (dependencies: Record<string, unknown>) => any; // eslint-disable-line @typescript-eslint/no-explicit-any
   export const createUnitClass: Factory;
-  export const createBigNumberClass: Factory;
   export const createComplexClass: Factory;
   export const createFractionClass: Factory;
 }
