@@ -16,6 +16,7 @@ const BENCHMARKS = [
   { name: 'engine', entry: 'bench/engine.bench.ts', about: 'Cs 6P3/2 2001-point sweep against NumPy (loop and blocked)' },
   { name: 'beam', entry: 'bench/beam.bench.ts', call: 'runBeamBench', about: 'detector pattern of 16 sublevels' },
   { name: 'startup', entry: 'bench/startup.bench.ts', call: 'runStartupBench', about: 'CLI start-up: check of one small file against bare node' },
+  { name: 'batch', entry: 'bench/batch.bench.ts', call: 'runBatchBench', about: 'eval of 2,000 files in one process against check of the same folder' },
   { name: 'editor', entry: 'bench/editor.bench.ts', call: 'runEditorBench', about: '2,000-line setup: edit → diagnostics, hover, cold start' },
 ];
 
