@@ -4,13 +4,13 @@
  * one process (worker threads, `--jobs`), printed in the order given; a file that cannot be read
  * or evaluated is reported in its place and the run goes on; the exit code is the worst file's.
  */
-import { availableParallelism } from 'os';
 import * as path from 'path';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
 import { EVAL_FORMATS, type EvalFormat, type EvalJob, type EvalOutcome, evaluateForOutput, jsonLine } from './evalFile';
 import { toDiagnosticResult } from '../eval/evaluate';
 import { diagnosticLine } from './fileProblems';
 import { readPathList } from './filesFrom';
+import { lazyBuiltin } from './lazyBuiltin';
 import { findSetupFiles, type FoundPath, ROOT_OPTION, rootOption, SETUP_EXTENSION } from './files';
 import { nodeFileSystem } from './fileSystem';
 import type { CliContext } from './io';
@@ -124,7 +124,7 @@ function runBatch(found: FoundPath[], root: string | undefined, format: EvalForm
   };
   flush();
 
-  const threads = Math.min(jobs ?? availableParallelism(), work.length);
+  const threads = Math.min(jobs ?? lazyBuiltin<typeof import('os')>('os').availableParallelism(), work.length);
   if (threads <= 1 || !ctx.workerScript || ctx.fsys !== nodeFileSystem) {
     for (const { index, job } of work) {
       outcomes[index] = evaluateForOutput(job, ctx.fsys);

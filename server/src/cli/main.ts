@@ -3,7 +3,6 @@
  * 0 no errors, 1 an error in a setup file or a file that cannot be read, 2 usage error or
  * --out not written, 3 internal error.
  */
-import { isMainThread, workerData } from 'worker_threads';
 import { version } from '../../../package.json';
 import { type CommandSpec, type ParsedArgs, parseCommandArgs, UsageError } from './args';
 import { checkSpec, runCheck } from './checkCommand';
@@ -11,7 +10,7 @@ import { evalSpec, runEval } from './evalCommand';
 import { diagnosticLine, FileProblemError } from './fileProblems';
 import type { CliFileSystem } from './fileSystem';
 import { commandHelp, overviewHelp, usageHint } from './help';
-import { BATCH_WORKER_ROLE, serveBatchJobs } from './batchWorker';
+import { isBatchWorker, serveBatchJobs } from './batchWorker';
 import { type CliContext, cliContext, type CliIO, type ProcessExtras, processIO } from './io';
 import { OutputError } from './output';
 import { profileSpec, runProfile } from './profileCommand';
@@ -109,7 +108,7 @@ function failure(e: unknown, argv: string[], ctx: CliContext): number {
   return 3;
 }
 
-if (!isMainThread && (workerData as { role?: string } | null)?.role === BATCH_WORKER_ROLE) {
+if (isBatchWorker()) {
   serveBatchJobs();
 } else if (require.main === module) {
   // A closed pipe (`sublevel profile f | head`) is a normal way to stop reading, not an error.

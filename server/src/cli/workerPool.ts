@@ -4,10 +4,10 @@
  * that dies takes only its current file with it (reported as an internal error of that file);
  * a new worker carries on with the rest.
  */
-import { Worker } from 'worker_threads';
 import type { BatchReply, BatchRequest } from './batchWorker';
-import { BATCH_WORKER_ROLE } from './batchWorker';
+import { BATCH_WORKER_ARG } from './batchWorker';
 import { type EvalJob, type EvalOutcome, internalErrorOutcome } from './evalFile';
+import { lazyBuiltin } from './lazyBuiltin';
 
 /** Runs every job in `threads` workers started from `script`; `onOutcome` sees each as it finishes (any order). */
 export function runInWorkers(script: string, jobs: readonly EvalJob[], threads: number, onOutcome: (index: number, outcome: EvalOutcome) => void): Promise<void> {
@@ -27,7 +27,7 @@ export function runInWorkers(script: string, jobs: readonly EvalJob[], threads: 
     const start = (): void => {
       if (next >= jobs.length) return;
       running++;
-      const worker = new Worker(script, { workerData: { role: BATCH_WORKER_ROLE } });
+      const worker = new (lazyBuiltin<typeof import('worker_threads')>('worker_threads').Worker)(script, { argv: [BATCH_WORKER_ARG] });
       let current: number | undefined;
       const feed = (): void => {
         if (next >= jobs.length) {
