@@ -6,28 +6,13 @@
  */
 import { all, create } from 'mathjs';
 import { describe, expect, it } from 'vitest';
-import { convertSI } from '../../server/src/format/units'; // applies Sublevel's own unit definitions
+import { convertSI, UNIT_ADDITIONS, UNIT_OVERRIDES } from '../../server/src/format/units';
 import { UnitMath } from '../../server/src/format/unitMath';
-import { ATOMIC_MASS_UNIT, BOHR_MAGNETON, ELEMENTARY_CHARGE, NUCLEAR_MAGNETON } from '../../server/src/physics/constants';
 
-/** The full instance, with the definitions units.ts made before it used the Unit class alone. */
+/** The full instance, with the same changes to the unit table that units.ts makes to the Unit class alone. */
 const full = create(all);
-full.createUnit(
-  {
-    eV: { definition: `${ELEMENTARY_CHARGE} J`, prefixes: 'short' },
-    electronvolt: { definition: `${ELEMENTARY_CHARGE} J`, prefixes: 'long' },
-  },
-  { override: true },
-);
-full.createUnit({
-  G: { definition: '1e-4 T', prefixes: 'short' },
-  gauss: { definition: '1e-4 T', prefixes: 'long' },
-  u: { definition: `${ATOMIC_MASS_UNIT} kg` },
-  Da: { definition: `${ATOMIC_MASS_UNIT} kg` },
-  muN: { definition: `${NUCLEAR_MAGNETON} J/T` },
-  muB: { definition: `${BOHR_MAGNETON} J/T` },
-  percent: { definition: '0.01' },
-});
+full.createUnit(UNIT_OVERRIDES, { override: true });
+full.createUnit(UNIT_ADDITIONS);
 
 const SYMBOLS = ['m', 'g', 's', 'A', 'K', 'mol', 'Hz', 'N', 'Pa', 'J', 'W', 'C', 'V', 'T', 'G', 'eV', 'Wb', 'rad', 'ohm'];
 const SHORT = ['', 'Q', 'R', 'Y', 'Z', 'E', 'P', 'T', 'G', 'M', 'k', 'h', 'da', 'd', 'c', 'm', 'u', 'n', 'p', 'f', 'a', 'z', 'y', 'r', 'q'];

@@ -41,15 +41,13 @@ export interface QuantityReading {
   problem?: Problem;
 }
 
-UnitMath.createUnit(
-  {
-    // mathjs' own eV predates the 2019 SI; the exact elementary charge replaces it.
-    eV: { definition: `${ELEMENTARY_CHARGE} J`, prefixes: 'short' },
-    electronvolt: { definition: `${ELEMENTARY_CHARGE} J`, prefixes: 'long' },
-  },
-  { override: true },
-);
-UnitMath.createUnit({
+/** Sublevel's changes to mathjs' unit table: the first set replaces mathjs' own, the second adds. */
+export const UNIT_OVERRIDES = {
+  // mathjs' own eV predates the 2019 SI; the exact elementary charge replaces it.
+  eV: { definition: `${ELEMENTARY_CHARGE} J`, prefixes: 'short' },
+  electronvolt: { definition: `${ELEMENTARY_CHARGE} J`, prefixes: 'long' },
+};
+export const UNIT_ADDITIONS = {
   G: { definition: '1e-4 T', prefixes: 'short' }, // gauss (CGS): 1 G = 1e-4 T exactly
   gauss: { definition: '1e-4 T', prefixes: 'long' },
   u: { definition: `${ATOMIC_MASS_UNIT} kg` },
@@ -57,7 +55,9 @@ UnitMath.createUnit({
   muN: { definition: `${NUCLEAR_MAGNETON} J/T` },
   muB: { definition: `${BOHR_MAGNETON} J/T` },
   percent: { definition: '0.01' },
-});
+};
+UnitMath.createUnit(UNIT_OVERRIDES, { override: true });
+UnitMath.createUnit(UNIT_ADDITIONS);
 
 /** A unit reduced to an SI factor and a dimension vector (mathjs' base dimensions). */
 interface UnitValue {
