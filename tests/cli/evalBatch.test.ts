@@ -49,6 +49,8 @@ describe('sublevel eval on many files (in-process, one thread)', () => {
     // In text the reports go to stdout and the problem to stderr, in the same order.
     const t = cli('eval', RB, missing, LI);
     expect(t.out.match(/^Sublevel evaluation of .*$/gm)).toEqual([`Sublevel evaluation of ${RB}`, `Sublevel evaluation of ${LI}`]);
+    expect(t.out).toContain(`\n\nSublevel evaluation of ${LI}`);
+    expect(t.out.split(`\n\nSublevel evaluation of ${LI}`)[0]).toBe(cli('eval', RB).out);
     expect(t.err.split('\n')[0]).toBe(`${missing}:1:1 error file-missing no such file or folder`);
     expect(t.code).toBe(1);
   });

@@ -105,11 +105,14 @@ function runBatch(found: FoundPath[], root: string | undefined, format: EvalForm
   let worst = 0;
   let withErrors = 0;
   let done = found.length - work.length;
+  let reports = 0;
   // Prints every outcome that is next in input order; later ones wait for the earlier.
   const flush = (): void => {
     progress.clear();
     for (; printed < found.length && outcomes[printed]; printed++) {
       const o = outcomes[printed]!;
+      // Text reports one after another, a blank line between them.
+      if (format === 'text' && o.out.length > 0 && reports++ > 0) ctx.io.out('');
       print(o, ctx);
       worst = Math.max(worst, o.code);
       if (o.code !== 0) withErrors++;
