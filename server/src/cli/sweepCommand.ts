@@ -34,7 +34,7 @@ export const sweepSpec: CommandSpec = {
     to: { value: 'FIELD', help: 'last field, e.g. 0.1T or "500 G" (required)' },
     points: { value: 'N', help: `number of fields, a whole number from 2 to ${MAX_CLI_POINTS} in decimal digits (default 2001)` },
     format: { value: 'FORMAT', choices: FORMATS, help: 'csv: field_T, then energy and moment columns per state (default; docs/csv.md); json' },
-    crossings: { help: 'also find where sublevels of different m cross (listed in the JSON; about 1.5× the sweep\'s time)' },
+    crossings: { help: 'also find where sublevels of different m cross (listed in the JSON; the sweep then takes about 2.5× as long)' },
     ...OUT_OPTION,
   },
   notes: [`Fields use the file's units (T, mT, G, ...); |B| may be at most ${MAX_CLI_FIELD_T.toExponential().replace('+', '')} T.`],

@@ -3,7 +3,8 @@
  * dimensions), built from its factory with plain-number arithmetic. `create(all)` — or even the
  * unit functions' own dependencies — builds typed-functions for every numeric type, which costs
  * a few hundred milliseconds at start-up; our values are always plain JavaScript numbers, so the
- * operations the class asks for are given as the number cases of mathjs' own functions.
+ * operations the class asks for are given as the number cases of mathjs' own functions. `fix`,
+ * `round` and `format` serve only splitUnit and toString, which Sublevel does not call.
  */
 import { createComplexClass, createFractionClass, createUnitClass } from 'mathjs';
 import type { Unit } from 'mathjs';
