@@ -15,6 +15,9 @@ const BENCHMARKS = [
   { name: 'eigen', entry: 'bench/eigen.bench.ts', about: 'eigen-solver choice: Jacobi vs own Householder+QR vs ml-matrix' },
   { name: 'engine', entry: 'bench/engine.bench.ts', about: 'Cs 6P3/2 2001-point sweeps, 0–0.1 T and 0–1 T, against NumPy eigh (two loops, blocked)' },
   { name: 'beam', entry: 'bench/beam.bench.ts', call: 'runBeamBench', about: 'detector pattern of 16 sublevels' },
+  { name: 'startup', entry: 'bench/startup.bench.ts', call: 'runStartupBench', about: 'CLI start-up: check of one small file against bare node' },
+  { name: 'batch', entry: 'bench/batch.bench.ts', call: 'runBatchBench', about: 'eval of 2,000 files in one process against check of the same folder' },
+  { name: 'profile-csv', entry: 'bench/profileCsv.bench.ts', call: 'runProfileCsvBench', about: 'profile CSV writing against computing the pattern' },
   { name: 'editor', entry: 'bench/editor.bench.ts', call: 'runEditorBench', about: '2,000-line setup: edit → diagnostics, hover, cold start' },
 ];
 

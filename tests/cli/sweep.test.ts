@@ -1,3 +1,6 @@
+import { mkdtempSync, readFileSync, writeFileSync } from 'fs';
+import os from 'os';
+import path from 'path';
 import { describe, expect, it } from 'vitest';
 import { cli } from './runCli';
 
@@ -33,6 +36,30 @@ describe('sublevel sweep', () => {
     expect(doc.format).toBe('sublevel-sweep');
     expect(doc.field_T).toEqual([-0.005, 0, 0.005]);
     expect(doc.states[0].moment_J_per_T).toHaveLength(3);
+    // The crossing search runs only when asked for; its absence is not an empty list.
+    expect(doc.version).toBe(2);
+    expect(doc).not.toHaveProperty('crossings');
+    expect(doc.notes).toEqual([]);
+  });
+
+  it('lists the crossings with --crossings, as the NumPy/SciPy reference finds them (Cs 6P3/2, 0 to 1 T)', () => {
+    const dir = mkdtempSync(path.join(os.tmpdir(), 'sublevel-crossings-'));
+    const file = path.join(dir, 'cs.sublevel');
+    writeFileSync(file, 'species Cs133\n  level p32: 6p 2P°3/2\n');
+    const r = cli('sweep', file, '--to', '1 T', '--format', 'json', '--crossings');
+    expect(r.code).toBe(0);
+    const doc = JSON.parse(r.out);
+    // scripts/reference/engine_cs6p32.py: 39 crossings, SciPy brentq on NumPy block eigenvalues. Its level
+    // rounds g_J to 1.334; the built-in data differ from it in the fourth digit, hence the tolerance.
+    const ref = JSON.parse(readFileSync('tests/reference/engine_cs6p32.json', 'utf8')) as { crossings: { fieldT: number }[] };
+    expect(doc.crossings).toHaveLength(ref.crossings.length);
+    doc.crossings.forEach((c: { field_T: number }, k: number) => expect(Math.abs(c.field_T / ref.crossings[k]!.fieldT - 1)).toBeLessThan(1e-3));
+  });
+
+  it('refuses --crossings for CSV, which has no place for them', () => {
+    const r = cli('sweep', RB, '--level', 'ground', '--to', '1 T', '--crossings');
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/--crossings lists the crossings in the JSON document; add --format json/);
   });
 
   it.each([

@@ -12,7 +12,8 @@ import { evalSpec, runEval } from './evalCommand';
 import { diagnosticLine, FileProblemError } from './fileProblems';
 import type { CliFileSystem } from './fileSystem';
 import { commandHelp, overviewHelp, usageHint } from './help';
-import { type CliContext, cliContext, type CliIO, processIO } from './io';
+import { isBatchWorker, serveBatchJobs } from './batchWorker';
+import { type CliContext, cliContext, type CliIO, type ProcessExtras, processIO } from './io';
 import { OutputError } from './output';
 import { profileSpec, runProfile } from './profileCommand';
 import { renderSpec, runRender } from './renderCommand';
@@ -21,7 +22,8 @@ import { suggestNames } from '../format/didYouMean';
 
 interface Command {
   spec: CommandSpec;
-  run(args: ParsedArgs, ctx: CliContext): number;
+  /** A promise only where the command uses worker threads (batch eval with ctx.workerScript). */
+  run(args: ParsedArgs, ctx: CliContext): number | Promise<number>;
 }
 
 const COMMANDS: readonly Command[] = [
@@ -42,7 +44,7 @@ function findCommand(name: string): Command {
   throw new UsageError(`unknown command '${name}'${hint.length ? ` — did you mean '${hint[0]}'?` : ''}`);
 }
 
-function runWords(argv: string[], ctx: CliContext): number {
+function runWords(argv: string[], ctx: CliContext): number | Promise<number> {
   const [first, ...rest] = argv;
   if (first === undefined) {
     ctx.io.err(overviewHelp(SPECS));
@@ -68,35 +70,56 @@ function runWords(argv: string[], ctx: CliContext): number {
   return command.run(args, ctx);
 }
 
+/** In-process runs (tests, embedding): no worker threads, so every command finishes before this returns. */
 export function runCli(argv: string[], io: CliIO, fsys?: CliFileSystem): number {
   const ctx = cliContext(io, fsys);
   try {
-    return runWords(argv, ctx);
+    const code = runWords(argv, ctx);
+    if (typeof code !== 'number') throw new Error('a command went asynchronous without worker threads');
+    return code;
   } catch (e) {
-    if (e instanceof FileProblemError) {
-      for (const p of e.problems) ctx.io.err(diagnosticLine(e.file, p));
-      return 1;
-    }
-    if (e instanceof UsageError) {
-      ctx.io.err(`sublevel: ${e.message}`);
-      const name = argv[0];
-      ctx.io.err(usageHint(name !== undefined && COMMANDS.some((c) => c.spec.name === name) ? name : undefined));
-      return 2;
-    }
-    if (e instanceof OutputError) {
-      ctx.io.err(`sublevel: ${e.message}`);
-      return 2;
-    }
-    ctx.io.err(`sublevel: internal error (please report it with the command and the file): ${(e as Error).stack ?? String(e)}`);
-    return 3;
+    return failure(e, argv, ctx);
   }
 }
 
-if (require.main === module) {
+/** The process's run: commands may use worker threads and draw progress on stderr. */
+export async function startCli(argv: string[], io: CliIO, extras: ProcessExtras): Promise<number> {
+  const ctx = cliContext(io, undefined, extras);
+  try {
+    return await runWords(argv, ctx);
+  } catch (e) {
+    return failure(e, argv, ctx);
+  }
+}
+
+function failure(e: unknown, argv: string[], ctx: CliContext): number {
+  if (e instanceof FileProblemError) {
+    for (const p of e.problems) ctx.io.err(diagnosticLine(e.file, p));
+    return 1;
+  }
+  if (e instanceof UsageError) {
+    ctx.io.err(`sublevel: ${e.message}`);
+    const name = argv[0];
+    ctx.io.err(usageHint(name !== undefined && COMMANDS.some((c) => c.spec.name === name) ? name : undefined));
+    return 2;
+  }
+  if (e instanceof OutputError) {
+    ctx.io.err(`sublevel: ${e.message}`);
+    return 2;
+  }
+  ctx.io.err(`sublevel: internal error (please report it with the command and the file): ${(e as Error).stack ?? String(e)}`);
+  return 3;
+}
+
+if (isBatchWorker()) {
+  serveBatchJobs();
+} else if (require.main === module) {
   // A closed pipe (`sublevel profile f | head`) is a normal way to stop reading, not an error.
   process.stdout.on('error', (e: NodeJS.ErrnoException) => {
     if (e.code === 'EPIPE') process.exit(process.exitCode ?? 0);
     throw e;
   });
-  process.exitCode = runCli(process.argv.slice(2), processIO);
+  void startCli(process.argv.slice(2), processIO, { progress: process.stderr, workerScript: __filename }).then((code) => {
+    process.exitCode = code;
+  });
 }

@@ -4,7 +4,6 @@
  * target in one step. If anything fails (a full disk, a read-only folder) the temporary file is
  * removed, the old file is left as it was, and the message says so.
  */
-import { randomBytes } from 'crypto';
 import * as path from 'path';
 import { escapeControls } from './escape';
 import { type CliFileSystem, reasonOf } from './fileSystem';
@@ -26,7 +25,7 @@ export function writeOutputFile(target: string, text: string | Uint8Array, fsys:
     if (e instanceof OutputError) throw e;
     // No such file yet (or not visible): it is created.
   }
-  const tmp = path.join(path.dirname(final), `.${path.basename(final)}.${process.pid}-${randomBytes(4).toString('hex')}.tmp`);
+  const tmp = path.join(path.dirname(final), `.${path.basename(final)}.${process.pid}-${uniqueSuffix()}.tmp`);
   let fd: number | undefined;
   try {
     fd = fsys.openSync(tmp, 'wx', existing?.mode ?? 0o666);
@@ -42,6 +41,14 @@ export function writeOutputFile(target: string, text: string | Uint8Array, fsys:
     throw new OutputError(`cannot write ${target}: ${reasonOf(e)}; ${existing ? 'the old file is unchanged' : 'no file was written'}`);
   }
   syncFolder(path.dirname(final), fsys);
+}
+
+/**
+ * A name no other writer uses: the pid and a random part, checked by the exclusive create ('wx').
+ * Math.random rather than crypto, whose loading costs the CLI's start-up more than the write.
+ */
+function uniqueSuffix(): string {
+  return Math.floor(Math.random() * 0x100000000).toString(16).padStart(8, '0');
 }
 
 /** Makes the rename itself durable where the platform allows it; a failure here loses no data. */

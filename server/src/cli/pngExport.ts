@@ -3,11 +3,10 @@
  * headless at three device pixels per SVG unit (a 760-unit figure becomes 2280 px wide, about
  * 300 dpi at 19 cm). No browser is downloaded; without one, the command says so.
  */
-import { spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 import { UsageError } from './args';
+import { lazyBuiltin } from './lazyBuiltin';
 
 export const PNG_SCALE = 3;
 
@@ -30,12 +29,12 @@ export function svgToPng(svg: string, scale = PNG_SCALE): Uint8Array {
   const chromium = browserPath();
   if (!chromium) throw new UsageError('--format png needs Chromium (/usr/bin/chromium, or set SUBLEVEL_CHROMIUM); write SVG instead with --format svg');
   const { width, height } = svgSize(svg);
-  const dir = mkdtempSync(path.join(os.tmpdir(), 'sublevel-png-'));
+  const dir = mkdtempSync(path.join(lazyBuiltin<typeof import('os')>('os').tmpdir(), 'sublevel-png-'));
   try {
     const page = path.join(dir, 'figure.html');
     const out = path.join(dir, 'figure.png');
     writeFileSync(page, `<!doctype html><html><head><meta charset="utf-8"><style>html,body{margin:0;padding:0;background:#fff}svg{display:block}</style></head><body>${svg}</body></html>`);
-    const r = spawnSync(
+    const r = lazyBuiltin<typeof import('child_process')>('child_process').spawnSync(
       chromium,
       ['--headless', '--no-sandbox', '--disable-gpu', '--hide-scrollbars', '--no-first-run', `--user-data-dir=${path.join(dir, 'profile')}`,
         `--force-device-scale-factor=${scale}`, `--window-size=${width},${height}`, `--screenshot=${out}`, `file://${page}`],

@@ -1,18 +1,21 @@
 /**
- * `sublevel sweep <file> --level NAME --from 0 --to 0.1T --points 2001 [--format csv|json] [--out FILE]`:
- * exact sublevel energies of one level over a field range, for plots and analysis code.
+ * `sublevel sweep <file> --level NAME --from 0 --to 0.1T --points 2001 [--format csv|json] [--crossings] [--out FILE]`:
+ * exact sublevel energies of one level over a field range, for plots and analysis code. The
+ * crossing search costs 1.4–1.6× the sweep itself (docs/speed.md) and only the JSON can carry
+ * its answer, so it runs when asked for (`--crossings`), not on every sweep.
  */
 import { stateTableCsv } from '../render/csv';
 import { engineSpec } from '../eval/levelSpec';
 import { suggestNames } from '../format/didYouMean';
-import { sweepLevel, type SweepResult } from '../physics/engine';
+import { type EngineIssue, sweepLevel, type SweepResult } from '../physics/engine';
+import type { Problem, Range } from '../format/ast';
 import type { LevelModel, SetupModel } from '../model/types';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
 import { OUT_OPTION, ROOT_OPTION, rootOption } from './files';
 import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
 import { jsonText } from './escape';
 import { readFieldOption, MAX_CLI_FIELD_T } from './fieldOption';
-import { cliProblem, FileProblemError } from './fileProblems';
+import { cliProblem, diagnosticLine, FileProblemError } from './fileProblems';
 import type { CliContext } from './io';
 import { writeOutputFile } from './output';
 
@@ -31,6 +34,7 @@ export const sweepSpec: CommandSpec = {
     to: { value: 'FIELD', help: 'last field, e.g. 0.1T or "500 G" (required)' },
     points: { value: 'N', help: `number of fields, a whole number from 2 to ${MAX_CLI_POINTS} in decimal digits (default 2001)` },
     format: { value: 'FORMAT', choices: FORMATS, help: 'csv: field_T, then energy and moment columns per state (default; docs/csv.md); json' },
+    crossings: { help: 'also find where sublevels of different m cross (listed in the JSON; the sweep then takes about 2.5× as long)' },
     ...OUT_OPTION,
   },
   notes: [`Fields use the file's units (T, mT, G, ...); |B| may be at most ${MAX_CLI_FIELD_T.toExponential().replace('+', '')} T.`],
@@ -44,6 +48,8 @@ export function runSweep(args: ParsedArgs, ctx: CliContext): number {
   const toT = fieldOption(args, 'to');
   const points = pointsOption(args);
   const out = stringOption(args, 'out');
+  const crossings = args.options.has('crossings');
+  if (crossings && format !== 'json') throw new UsageError('--crossings lists the crossings in the JSON document; add --format json');
   if (fromT === toT) throw new UsageError('--from and --to are the same field; give a range');
 
   const analysis = analyzeFile(file, ctx, rootOption(stringOption(args, 'root'), ctx.fsys));
@@ -58,17 +64,23 @@ export function runSweep(args: ParsedArgs, ctx: CliContext): number {
     throw new FileProblemError(file, [cliProblem('nothing-to-compute', `level '${level.name}' has problems to fix before it can be swept${listed}`, at)]);
   }
 
-  const sweep = sweepLevel(spec, fromT, toT, points);
+  const sweep = sweepLevel(spec, fromT, toT, points, { crossings });
   const errors = sweep.issues.filter((i) => i.severity === 'error');
   if (errors.length > 0) {
     throw new FileProblemError(file, errors.map((e) => ({ ...cliProblem('nothing-to-compute', e.message, at), code: e.code })));
   }
-  const text = format === 'csv' ? sweepCsv(sweep, file, level) : jsonText(sweepJson(file, level, sweep), 1);
+  // Warnings and notes of the sweep (a capped crossing search) on stderr, and in the JSON.
+  for (const i of sweep.issues) ctx.io.err(diagnosticLine(file, issueProblem(i, at)));
+  const text = format === 'csv' ? sweepCsv(sweep, file, level) : jsonText(sweepJson(file, level, sweep, crossings), 1);
   if (out) {
     writeOutputFile(out, text + '\n', ctx.fsys);
     ctx.io.err(`wrote ${sweep.states.length} sublevels × ${points} fields to ${out}`);
   } else ctx.io.out(text);
   return reportErrors(file, analysis, ctx) > 0 ? 1 : 0;
+}
+
+function issueProblem(i: EngineIssue, at: Range | undefined): Problem {
+  return { ...cliProblem('nothing-to-compute', i.message, at), code: i.code, severity: i.severity };
 }
 
 function fieldOption(args: ParsedArgs, name: string, fallback?: number): number {
@@ -110,10 +122,11 @@ export function sweepCsv(s: SweepResult, file: string, level: LevelModel): strin
   return stateTableCsv({ kind: 'sweep', about: [['file', file], ['level', `${level.species.name}.${level.name}`]] }, s.fieldsT, states).trimEnd();
 }
 
-function sweepJson(file: string, level: LevelModel, s: SweepResult) {
+/** Version 2: `crossings` is there only when the search was asked for (`--crossings`); `notes` added. */
+function sweepJson(file: string, level: LevelModel, s: SweepResult, crossings: boolean) {
   return {
     format: 'sublevel-sweep',
-    version: 1,
+    version: 2,
     file,
     species: level.species.name,
     level: level.name,
@@ -125,11 +138,16 @@ function sweepJson(file: string, level: LevelModel, s: SweepResult) {
       energy_Hz: Array.from(st.energyHz),
       moment_J_per_T: Array.from(st.momentJT),
     })),
-    crossings: s.crossings.map((c) => ({
-      a: s.states[c.stateA]!.low.text,
-      b: s.states[c.stateB]!.low.text,
-      field_T: c.fieldT,
-      energy_Hz: c.energyHz,
-    })),
+    ...(crossings
+      ? {
+          crossings: s.crossings.map((c) => ({
+            a: s.states[c.stateA]!.low.text,
+            b: s.states[c.stateB]!.low.text,
+            field_T: c.fieldT,
+            energy_Hz: c.energyHz,
+          })),
+        }
+      : {}),
+    notes: s.issues.map((i) => ({ severity: i.severity, code: i.code, message: i.message })),
   };
 }

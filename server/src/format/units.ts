@@ -1,17 +1,17 @@
 /**
  * Quantities: unit text is split by Sublevel's own grammar (unitGrammar.ts), each name is looked
- * up in our table, and the size and dimension of each name come from a private mathjs instance
- * (so the program-wide mathjs is not changed). Document text is never handed to mathjs' parser.
+ * up in our table, and the size and dimension of each name come from a private copy of mathjs'
+ * Unit class (unitMath.ts). Document text is never handed to mathjs' parser.
  *
  * Frequency-like values (level energies, hyperfine constants) are returned in Hz:
  * f = E/h for energies and f = c·σ for wave numbers, with the exact SI values of h and c.
  */
-import { all, create } from 'mathjs';
 import type { Problem, Range, ValuePart } from './ast';
 import { makeProblem } from './codes';
 import { didYouMeanText, suggestNames } from './didYouMean';
 import { readNumberPrefix } from './numbers';
 import { canonicalUnitName, isOffsetUnit, parseUnitSyntax } from './unitGrammar';
+import { UnitMath } from './unitMath';
 import {
   ATOMIC_MASS_UNIT,
   BOHR_MAGNETON,
@@ -41,16 +41,13 @@ export interface QuantityReading {
   problem?: Problem;
 }
 
-const math = create(all);
-math.createUnit(
-  {
-    // mathjs' own eV predates the 2019 SI; the exact elementary charge replaces it.
-    eV: { definition: `${ELEMENTARY_CHARGE} J`, prefixes: 'short' },
-    electronvolt: { definition: `${ELEMENTARY_CHARGE} J`, prefixes: 'long' },
-  },
-  { override: true },
-);
-math.createUnit({
+/** Sublevel's changes to mathjs' unit table: the first set replaces mathjs' own, the second adds. */
+export const UNIT_OVERRIDES = {
+  // mathjs' own eV predates the 2019 SI; the exact elementary charge replaces it.
+  eV: { definition: `${ELEMENTARY_CHARGE} J`, prefixes: 'short' },
+  electronvolt: { definition: `${ELEMENTARY_CHARGE} J`, prefixes: 'long' },
+};
+export const UNIT_ADDITIONS = {
   G: { definition: '1e-4 T', prefixes: 'short' }, // gauss (CGS): 1 G = 1e-4 T exactly
   gauss: { definition: '1e-4 T', prefixes: 'long' },
   u: { definition: `${ATOMIC_MASS_UNIT} kg` },
@@ -58,7 +55,9 @@ math.createUnit({
   muN: { definition: `${NUCLEAR_MAGNETON} J/T` },
   muB: { definition: `${BOHR_MAGNETON} J/T` },
   percent: { definition: '0.01' },
-});
+};
+UnitMath.createUnit(UNIT_OVERRIDES, { override: true });
+UnitMath.createUnit(UNIT_ADDITIONS);
 
 /** A unit reduced to an SI factor and a dimension vector (mathjs' base dimensions). */
 interface UnitValue {
@@ -78,7 +77,7 @@ const CACHE_LIMIT = 1000;
 
 function knownCanonical(name: string): string | undefined {
   const canonical = canonicalUnitName(name);
-  return canonical !== undefined && math.Unit.isValuelessUnit(canonical) ? canonical : undefined;
+  return canonical !== undefined && UnitMath.isValuelessUnit(canonical) ? canonical : undefined;
 }
 
 /** True when the whole text is a unit Sublevel reads, e.g. `T/m`, `cm^-1`, `%`. */
@@ -89,7 +88,7 @@ export function isUnitText(text: string): boolean {
 function evaluateUncached(text: string): UnitEvaluation {
   const syntax = parseUnitSyntax(text);
   if (!syntax.ok) return { ok: false, code: 'unit-malformed', message: syntax.message, start: syntax.start, end: syntax.end };
-  const dims = new Array<number>(math.Unit.BASE_DIMENSIONS.length).fill(0);
+  const dims = new Array<number>(UnitMath.BASE_DIMENSIONS.length).fill(0);
   let factor = 1;
   for (const term of syntax.terms) {
     const canonical = knownCanonical(term.name);
@@ -111,10 +110,10 @@ function evaluateUncached(text: string): UnitEvaluation {
       if (syntax.terms.length !== 1 || term.power !== 1) {
         return { ok: false, code: 'unit-malformed', message: `${term.name} cannot be combined with other units or powers; use K`, start: term.start, end: term.end };
       }
-      const one = math.unit(1, canonical);
+      const one = new UnitMath(1, canonical);
       return { ok: true, value: { factor: 1, dims: [...one.dimensions], offsetUnit: canonical } };
     }
-    const one = math.unit(1, canonical);
+    const one = new UnitMath(1, canonical);
     factor *= Math.pow(one.value, term.power);
     one.dimensions.forEach((d, i) => (dims[i] = (dims[i] ?? 0) + d * term.power));
   }
@@ -148,7 +147,7 @@ function prefixedReading(text: string, value: UnitValue): string | undefined {
   if (canonical === undefined) return undefined;
   let parts: { prefix: string; name: string };
   try {
-    const u = math.unit(canonical).units[0]!;
+    const u = new UnitMath(null, canonical).units[0]!;
     parts = { prefix: (u.prefix as unknown as { name: string }).name, name: u.unit.name };
   } catch {
     return undefined;
@@ -286,7 +285,7 @@ function subRange(range: Range, start: number, end: number): Range {
 
 /** SI value of `value` written in a unit, or a problem with the right dimension named. */
 function toSI(value: number, unit: UnitValue, d: Dimension): number | undefined {
-  if (unit.offsetUnit) return d === 'temperature' ? math.unit(value, unit.offsetUnit).toNumber('K') : undefined;
+  if (unit.offsetUnit) return d === 'temperature' ? new UnitMath(value, unit.offsetUnit).toNumber('K') : undefined;
   if (!ACCEPTED_DIMS[d].some((ref) => sameDims(ref, unit.dims))) return undefined;
   const si = value * unit.factor;
   if (d !== 'frequency-like') return si;
@@ -376,7 +375,7 @@ export function convertSI(valueSI: number, d: Dimension, unitText: string): numb
   if (d === 'dimensionless' && unitText === '') return valueSI;
   const e = evaluateUnit(unitText);
   if (!e.ok) return undefined;
-  if (e.value.offsetUnit) return d === 'temperature' ? math.unit(valueSI, 'K').toNumber(e.value.offsetUnit) : undefined;
+  if (e.value.offsetUnit) return d === 'temperature' ? new UnitMath(valueSI, 'K').toNumber(e.value.offsetUnit) : undefined;
   const perUnit = toSI(1, e.value, d);
   if (perUnit === undefined || perUnit === 0) return undefined;
   return valueSI / perUnit;

@@ -5,6 +5,7 @@
  * states sorted in one documented order, full double precision, and text cells quoted when
  * needed and defused against spreadsheet formula injection (labels come from users' files).
  */
+import { csvNumber as numCell, csvNumberRows } from '../eval/machineText';
 import type { LevelsViewData, LinesViewData, PatternViewData, ResonanceViewData } from './viewData';
 
 /** What a table is about; written as `# sublevel <kind>: key=value; …` on the first line. */
@@ -20,10 +21,6 @@ function textCell(s: string): string {
   return /[",\r\n]|^\s|\s$/.test(v) ? `"${v.replace(/"/g, '""')}"` : v;
 }
 
-function numCell(v: number | undefined): string {
-  return v === undefined || !Number.isFinite(v) ? '' : String(v);
-}
-
 /** The comment line: newlines and semicolons inside values would break it, so they become spaces and commas. */
 export function csvCommentLine(c: CsvContext): string {
   const pairs = c.about
@@ -33,7 +30,19 @@ export function csvCommentLine(c: CsvContext): string {
 }
 
 export function csvTable(c: CsvContext, header: string[], body: string[][]): string {
-  return [csvCommentLine(c), header.map(textCell).join(','), ...body.map((r) => r.join(','))].join('\n') + '\n';
+  return csvText(c, header, body.map((r) => r.join(',')).join('\n'), body.length);
+}
+
+/** The table from its body of `rows` lines, already joined by newlines. */
+function csvText(c: CsvContext, header: string[], body: string, rows: number): string {
+  return `${csvCommentLine(c)}\n${header.map(textCell).join(',')}\n${rows > 0 ? body + '\n' : ''}`;
+}
+
+/** A table of numbers, `rows` lines made by `rowAt`, formatted together (csvNumberRows). */
+function numberTable(c: CsvContext, header: string[], rows: number, rowAt: (k: number) => number[]): string {
+  const table = new Array<number[]>(rows);
+  for (let k = 0; k < rows; k++) table[k] = rowAt(k);
+  return csvText(c, header, csvNumberRows(table), rows);
 }
 
 /** A state as it is named in column headers: its low-field label, and where it goes at high field. */
@@ -78,11 +87,12 @@ export function stateTableCsv(c: CsvContext, fieldsT: ArrayLike<number>, states:
     ...sorted.map((s) => stateColumn('energy_Hz', s.lowLabel, s.highLabel)),
     ...withMoment.map((s) => stateColumn('moment_J_per_T', s.lowLabel, s.highLabel)),
   ];
-  const body: string[][] = [];
-  for (let k = 0; k < fieldsT.length; k++) {
-    body.push([numCell(fieldsT[k]), ...sorted.map((s) => numCell(s.energyHz[k])), ...withMoment.map((s) => numCell(s.momentJT?.[k]))]);
-  }
-  return csvTable(c, header, body);
+  return numberTable(c, header, fieldsT.length, (k) => {
+    const row = [fieldsT[k]!];
+    for (const s of sorted) row.push(s.energyHz[k]!);
+    for (const s of withMoment) row.push(s.momentJT![k]!);
+    return row;
+  });
 }
 
 export function levelsCsv(d: LevelsViewData, about: CsvContext['about'] = []): string {
@@ -93,11 +103,11 @@ export function levelsCsv(d: LevelsViewData, about: CsvContext['about'] = []): s
 /** Positions and the summed and per-sublevel shares (fraction of all atoms per metre); sublevels in the beam report's order. */
 export function patternCsv(d: PatternViewData, about: CsvContext['about'] = [], kind: 'pattern' | 'profile' = 'pattern'): string {
   const header = ['position_m', 'total_per_m', ...d.parts.map((p) => `share_per_m[${p.label}]`)];
-  const body: string[][] = [];
-  for (let k = 0; k < d.positionsM.length; k++) {
-    body.push([numCell(d.positionsM[k]), numCell(d.total[k]), ...d.parts.map((p) => numCell(p.values[k]))]);
-  }
-  return csvTable({ kind, about }, header, body);
+  return numberTable({ kind, about }, header, d.positionsM.length, (k) => {
+    const row = [d.positionsM[k]!, d.total[k]!];
+    for (const p of d.parts) row.push(p.values[k]!);
+    return row;
+  });
 }
 
 /** Components sorted by offset (then polarisation π, σ+, σ−), at the field the comment line names. */
@@ -114,7 +124,6 @@ export function linesCsv(d: LinesViewData, about: CsvContext['about'] = []): str
 
 /** The transition frequency and its field slope at each field. */
 export function resonanceCsv(d: ResonanceViewData, about: CsvContext['about'] = []): string {
-  const body: string[][] = [];
-  for (let k = 0; k < d.fieldsT.length; k++) body.push([numCell(d.fieldsT[k]), numCell(d.frequencyHz[k]), numCell(d.slopeHzPerT[k])]);
-  return csvTable({ kind: 'resonance', about: [...about, ['transition', d.pairLabel.replace(/ → /g, ' -> ')]] }, ['field_T', 'frequency_Hz', 'df_dB_Hz_per_T'], body);
+  const c: CsvContext = { kind: 'resonance', about: [...about, ['transition', d.pairLabel.replace(/ → /g, ' -> ')]] };
+  return numberTable(c, ['field_T', 'frequency_Hz', 'df_dB_Hz_per_T'], d.fieldsT.length, (k) => [d.fieldsT[k]!, d.frequencyHz[k]!, d.slopeHzPerT[k]!]);
 }

@@ -27,7 +27,8 @@ export function resonanceView(
   if (!level || !spec) return { problem: `Resonance '${r.name}' needs a level without problems.` };
   const { fromT, toT } = r.rangeT;
   if (!(toT > fromT)) return { problem: `Resonance '${r.name}' needs a field range, e.g. \`range = 0 G, 10 G\`.` };
-  const sweep = sweepLevel(spec, fromT, toT, RESONANCE_VIEW_POINTS);
+  // The figure draws one transition's frequency: the crossing search would be work thrown away.
+  const sweep = sweepLevel(spec, fromT, toT, RESONANCE_VIEW_POINTS, { crossings: false });
   if (sweep.issues.some((i) => i.severity === 'error')) return { problem: `Level '${level.name}' could not be swept.` };
   const term = level.kind === 'term';
   const key = (n: { twoF: number; twoM: number }): string | null => refKey(term ? { twoJ: n.twoF, twoMJ: n.twoM } : { twoF: n.twoF, twoMF: n.twoM });
