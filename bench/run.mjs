@@ -15,6 +15,7 @@ const BENCHMARKS = [
   { name: 'eigen', entry: 'bench/eigen.bench.ts', about: 'eigen-solver choice: Jacobi vs own Householder+QR vs ml-matrix' },
   { name: 'engine', entry: 'bench/engine.bench.ts', about: 'Cs 6P3/2 2001-point sweep against NumPy (loop and blocked)' },
   { name: 'beam', entry: 'bench/beam.bench.ts', call: 'runBeamBench', about: 'detector pattern of 16 sublevels' },
+  { name: 'whole-term', entry: 'bench/wholeTerm.bench.ts', call: 'runWholeTermBench', about: '87Rb 5P whole term vs single-J sweeps, per state' },
   { name: 'editor', entry: 'bench/editor.bench.ts', call: 'runEditorBench', about: '2,000-line setup: edit → diagnostics, hover, cold start' },
 ];
 
