@@ -129,12 +129,26 @@ export interface TermResult {
   designation: { text: string; unicode: string; configuration: string | null };
   S: number;
   L: number;
-  zeta_Hz: SourcedNumber;
+  /** Absent when the file gives the J-level energies E_J instead. */
+  zeta_Hz?: SourcedNumber;
   g_s: number;
   g_L: number;
-  /** J levels at zero field: E_J = ζ/2 [J(J+1) − L(L+1) − S(S+1)], relative to the term's centre of gravity. */
+  /** J levels at zero field (E_J = ζ/2 [J(J+1) − L(L+1) − S(S+1)], or the given E_J), relative to the term's centre of gravity. */
   fine_levels: { J: number; J_text: string; shift_Hz: number; g_J: number }[];
+  /** The term's hyperfine structure, when A_J / B_J are given (whole-term engine mode). */
+  hyperfine?: TermHyperfineResult;
   at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; exact: ExactSublevelResult[]; regime?: RegimeResultJson }[];
+}
+
+/** Radial parameters of a whole term's hyperfine Hamiltonian and the J-level constants they give (docs/engine.md). */
+export interface TermHyperfineResult {
+  /** 'level-constants' (solved exactly or by least squares) or 'level-constants, a_L = a_SD' (the stated assumption). */
+  source: string;
+  a_orbital_Hz: number;
+  a_spin_dipolar_Hz: number;
+  a_contact_Hz: number;
+  b_orbital_Hz: number;
+  levels: { J: number; J_text: string; A_Hz: number; B_Hz: number }[];
 }
 
 export interface SpeciesResult {
