@@ -244,7 +244,6 @@ describe('whole term: bad input in plain words', () => {
     [{ ...base, levelA: [{ twoJ: 5, A: 1e6 }] }, 'term-bad-level'],
     [{ ...base, zeta: undefined, levelEnergies: [{ twoJ: 1, energyHz: 0 }] , levelA: [{ twoJ: 1, A: 1e6 }, { twoJ: 3, A: 1e5 }] }, 'term-fine-missing'],
     [{ ...base, levelEnergies: [{ twoJ: 1, energyHz: 0 }, { twoJ: 3, energyHz: 1 }] }, 'term-fine-twice'],
-    [{ ...base, twoI: 0, levelA: [{ twoJ: 1, A: 1e6 }, { twoJ: 3, A: 1e5 }] }, 'term-no-nucleus'],
     [{ ...base, L: 10, twoS: 6, twoI: 40, radial: { orbital: 1, spinDipolar: 1, contact: 1 } }, 'basis-too-large'],
   ] as [WholeTermSpec, string][])('%o → %s', (spec, code) => {
     const r = solveLevel(spec, 0.1);
@@ -252,6 +251,14 @@ describe('whole term: bad input in plain words', () => {
     const err = r.issues.find((i) => i.severity === 'error')!;
     expect(err.code).toBe(code);
     expect(err.message.length).toBeGreaterThan(30);
+  });
+
+  it('without a nucleus the J-level energies alone make a fine-structure term (|J, m_J> labels), hyperfine data ignored with a warning', () => {
+    const r = solveLevel({ ...base, zeta: undefined, twoI: 0, levelEnergies: [{ twoJ: 1, energyHz: 0 }, { twoJ: 3, energyHz: 1.5e9 }], levelA: [{ twoJ: 1, A: 1e6 }, { twoJ: 3, A: 1e5 }] }, 0);
+    expect(r.issues.map((i) => i.code)).toEqual(['no-nucleus']);
+    expect(r.states.map((s) => s.low.text)).toEqual(['J=1/2, m_J=-1/2', 'J=1/2, m_J=+1/2', 'J=3/2, m_J=-3/2', 'J=3/2, m_J=-1/2', 'J=3/2, m_J=+1/2', 'J=3/2, m_J=+3/2']);
+    // E_J as given (exact identity): ζ = 1 GHz gives the same levels by the interval rule.
+    expect(r.states[5].energyHz - r.states[0].energyHz).toBeCloseTo(1.5e9, 3);
   });
 
   it('the basis cap is stated in the message', () => {

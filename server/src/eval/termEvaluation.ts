@@ -5,7 +5,7 @@
  */
 import { configurationText } from './designationText';
 import { allowedJ, formatTermSymbol } from '../physics/termSymbol';
-import { fineZeroFieldHz, termLevelConstants, type WholeTermSpec } from '../physics/engine';
+import { fineZeroFieldHz, termLevelConstants, type TermConstants, type WholeTermSpec } from '../physics/engine';
 import { landeGJ } from '../physics/gFactors';
 import type { LevelModel, SettingsModel } from '../model/types';
 import { exactAtField } from './exactAtField';
@@ -31,10 +31,7 @@ function fineShifts(spec: WholeTermSpec | { zeta: number }, L: number, twoS: num
   return new Map(spec.levelEnergies.map((e) => [e.twoJ, e.energyHz - sum / weight]));
 }
 
-function hyperfineResult(spec: WholeTermSpec, notes: EvaluationNote[], level: LevelModel): TermHyperfineResult | undefined {
-  if (spec.twoI === 0) return undefined;
-  const { constants } = termLevelConstants(spec);
-  if (!constants) return undefined;
+function hyperfineResult(constants: TermConstants, notes: EvaluationNote[], level: LevelModel): TermHyperfineResult {
   const note = termHyperfineNote(level, constants.source);
   if (note) notes.push(note);
   return {
@@ -51,8 +48,12 @@ export function evaluateTerm(level: LevelModel, settings: SettingsModel, fields:
   const spec = termSpec(level, settings);
   const term = level.term;
   if (!spec || !term) return undefined;
+  // Data the whole-term mode cannot use (no usable A_J, too few) are said once, without a field.
+  const resolved = spec.kind === 'term' ? termLevelConstants(spec) : undefined;
+  const unusable = resolved?.issues.find((i) => i.severity === 'error');
+  if (unusable) notes.push({ code: 'level-not-computed', message: `term '${level.name}' cannot be computed: ${unusable.message}`, range: level.nameRange });
   const points: FieldPoint[] = [];
-  const atFields = fields.map((f) => {
+  const atFields = (unusable ? [] : fields).map((f) => {
     const r = exactAtField(spec, f.tesla);
     notes.push(...engineNotes(level, { f, r }));
     points.push({ f, r });
@@ -62,7 +63,7 @@ export function evaluateTerm(level: LevelModel, settings: SettingsModel, fields:
   if (note) notes.push(note);
   const jValues = allowedJ(term.twoS, term.L);
   const shifts = fineShifts(spec.kind === 'term' ? spec : { zeta: spec.zeta }, term.L, term.twoS, jValues);
-  const hyperfine = spec.kind === 'term' ? hyperfineResult(spec, notes, level) : undefined;
+  const hyperfine = resolved?.constants && spec.kind === 'term' && spec.twoI > 0 ? hyperfineResult(resolved.constants, notes, level) : undefined;
   // ζ is reported when it is the fine structure in use (E_J, when given, replaces it).
   const zetaUsed = level.zeta && !(spec.kind === 'term' && spec.levelEnergies);
   return {

@@ -36,6 +36,7 @@ export { landeGF, landeGJ } from './landeFactors';
 export { levelCoefficients } from './termHyperfineParameters';
 export type { LevelCoefficients, RadialParameters } from './termHyperfineParameters';
 export { termLevelConstants } from './termLevelConstants';
+export type { TermConstants } from './termLevelConstants';
 export { validateSpec } from './validateSpec';
 export { symmetricEigen } from './symmetricEigen';
 export * as engineLimits from './limits';

@@ -35,7 +35,7 @@ export interface LevelCoefficients {
   quadrupole: number;
 }
 
-export type HyperfineSource = 'radial' | 'level-constants' | 'level-constants, a_L = a_SD';
+export type HyperfineSource = 'none' | 'radial' | 'level-constants' | 'level-constants, a_L = a_SD';
 
 export interface TermHyperfine {
   radial: RadialParameters;

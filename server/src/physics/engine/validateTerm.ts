@@ -104,8 +104,11 @@ export function validateTerm(s: WholeTermSpec, issues: EngineIssue[]): CleanTerm
   if (!levelEnergies) return null;
   const base = { kind: 'term' as const, twoS: s.twoS, L: s.L, twoI: s.twoI, gL: s.gL, gS: s.gS, gI: s.gI, levelEnergies };
   if (s.twoI === 0) {
-    issues.push(issue('error', 'term-no-nucleus', 'With I = 0 a term has no hyperfine structure; use the fine-structure mode (ζ alone).'));
-    return null;
+    // Fine structure alone (e.g. from measured J-level energies): nothing for hyperfine data to act on.
+    if (s.radial !== undefined || s.levelA !== undefined || s.levelB !== undefined) {
+      issues.push(issue('warning', 'no-nucleus', 'With I = 0 there is no hyperfine structure; the hyperfine data have no effect.'));
+    }
+    return { ...base, radial: { orbital: 0, spinDipolar: 0, contact: 0 }, quadrupoleL: 0, hyperfineSource: 'none' };
   }
   if (s.radial !== undefined) {
     const r = s.radial;

@@ -10,7 +10,7 @@
 import { BOHR_MAGNETON_HZ_PER_T } from '../constants';
 import { orderHighLabels, orderLowLabels } from './adiabaticOrder';
 import { couplings } from './halfIntegers';
-import { jfLabel, lsLabel } from './labelText';
+import { jfLabel, jLabel, lsLabel } from './labelText';
 import { landeGF, landeGJ } from './landeFactors';
 import type { LevelBlock, LevelModel, RankedHigh, RankedLow } from './levelModel';
 import { symmetricEigen } from './symmetricEigen';
@@ -75,14 +75,16 @@ export function buildWholeTermModel(s: CleanTerm): LevelModel {
     const zeeman = new Float64Array(n);
     const high: RankedHigh[] = basis.states.map(([mL, mS, mI], k) => {
       zeeman[k] = (mu * (s.gL * mL + s.gS * mS + s.gI * mI)) / 2;
-      return { label: lsLabel(mL, mS, mI), diagonalHz: h0[k * n + k], slopeHzPerT: zeeman[k] };
+      return { label: lsLabel(mL, mS, s.twoI === 0 ? null : mI), diagonalHz: h0[k * n + k], slopeHzPerT: zeeman[k] };
     });
     const cands: (RankedLow & { first: number })[] = [];
     for (const twoJ of jValues) {
       for (const twoF of couplings(twoJ, s.twoI)) {
         if (twoF < Math.abs(twoM)) continue;
         const slope = (mu * landeGF(twoF, twoJ, s.twoI, gJ.get(twoJ) as number, s.gI) * twoM) / 2;
-        cands.push({ label: jfLabel(twoJ, twoF, twoM), zeroFieldHz: 0, slopeHzPerT: slope, first: firstOrder(twoJ, twoF) });
+        // Without a nucleus F is J: the label is |J, m_J>.
+        const label = s.twoI === 0 ? jLabel(twoJ, twoM, null) : jfLabel(twoJ, twoF, twoM);
+        cands.push({ label, zeroFieldHz: 0, slopeHzPerT: slope, first: firstOrder(twoJ, twoF) });
       }
     }
     // Match the first-order order to the exact zero-field eigenvalues rank by rank.
