@@ -127,7 +127,7 @@ beam b
   });
 
   it('a line without components points at the finding that says why, by code and place', () => {
-    const { text } = report('species Li7\n  level g: 2s 2S1/2\n  level t: 2p 2P zeta = 6.7 GHz\nfield f = 100 G\nline L: g -> t\n');
+    const { text } = report('species Li7\n  level g: 2s 2S1/2\n  level t: 2p 2P E_J = 1/2 0 GHz, 3/2 10 GHz\nfield f = 100 G\nline L: g -> t\n');
     expect(text).toContain('  no components: see warning line-to-whole-term at 5:14');
     expect(text).toMatch(/\n  5:14 warning line-to-whole-term /);
     expect(text).toContain('diagnostics: 0 errors, 1 warning, 1 note');

@@ -242,6 +242,9 @@ export interface LineComponentResult {
   along_field: number;
   /** Relative intensity seen across the field (π 1, σ 1/2). */
   across_field: number;
+  /** Lines with a whole term: the uncoupled (high-field) labels |m_L, m_S, m_I> or |m_J, m_I> of both ends. */
+  lower_high_label?: string;
+  upper_high_label?: string;
 }
 
 export interface LineResult {
@@ -255,8 +258,13 @@ export interface LineResult {
   written_as_emission?: boolean;
   /** Upper minus lower level energy (always > 0), when both are known and differ. */
   line_centre_Hz?: number;
-  /** Components at each working field (at zero field when the file has none). */
-  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; components: LineComponentResult[] }[];
+  /**
+   * 'L' for a line with a whole term at one end or both: strengths are (2L_u+1)|<l|d_q|u>|²/|<L_u||d||L_l>|²
+   * (out of each upper sublevel they sum to 1 when the lower end is a whole term). Absent: per J, as above.
+   */
+  strengths_reduced_in?: 'L';
+  /** Components at each working field (at zero field when the file has none); `g_eff_centroid` from the σ± centroids (lines with a whole term). */
+  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; g_eff_centroid?: number; components: LineComponentResult[] }[];
 }
 
 export interface MagneticTransitionResult {

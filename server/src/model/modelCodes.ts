@@ -54,7 +54,7 @@ export const MODEL_RULES = {
   'line-incomplete': { severity: 'error', summary: 'A line without both levels.' },
   'line-across-species': { severity: 'error', summary: 'A line between levels of different species.' },
   'line-same-level': { severity: 'error', summary: 'A line from a level to itself.' },
-  'line-to-whole-term': { severity: 'warning', summary: 'A line to a whole term (zeta, no J): not computed; name a J level.' },
+  'line-to-whole-term': { severity: 'warning', summary: 'A line to a whole term given by E_J without hyperfine constants, on a species with a nucleus: not computed.' },
   'line-written-as-emission': { severity: 'info', summary: 'A line written upper level first: computed as that emission line.' },
   'line-levels-same-energy': { severity: 'warning', summary: 'A line between two levels of equal energy: no centre frequency.' },
   'use-file-missing': { severity: 'error', summary: 'A `use` path that leads to no readable file.' },

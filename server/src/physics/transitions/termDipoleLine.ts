@@ -54,8 +54,8 @@ function checkEnds(lower: TermLineEnd, upper: TermLineEnd, issues: TransitionIss
     issues.push(issue('error', 'line-spin-change', 'In LS coupling an electric-dipole line keeps S: these terms have different spin, so the line has no components here.'));
     return false;
   }
-  if (Math.abs(lower.L - upper.L) !== 1) {
-    issues.push(issue('error', 'line-delta-l', 'An electric-dipole line between terms of one electron needs ΔL = ±1; these terms have no components here.'));
+  if (Math.abs(lower.L - upper.L) > 1 || (lower.L === 0 && upper.L === 0)) {
+    issues.push(issue('error', 'line-delta-l', 'In LS coupling an electric-dipole line needs ΔL = 0 or ±1, and not L = 0 ↔ 0; these terms have no components here.'));
     return false;
   }
   if (nucleusOf(lower.spec) !== nucleusOf(upper.spec)) {
