@@ -73,3 +73,12 @@ describe('a line between two whole terms (fine structure only, ²P → ²D)', ()
     expect(codes(ground, { spec: p, twoS: 1, L: 1 })).toEqual(['line-nucleus-mismatch']);
   });
 });
+
+describe('sublevel identity in a whole term', () => {
+  it('|J, F, m_F> keys keep the J: 5P has F = 1 and F = 2 in both J levels (24 distinct keys)', async () => {
+    const { lowKey } = await import('../../server/src/physics/transitions/sublevelTag');
+    const { solveLevel } = await import('../../server/src/physics/engine');
+    const keys = new Set(solveLevel(RB87_5P, 1e-3).states.map((s) => lowKey(s.low)));
+    expect(keys.size).toBe(24);
+  });
+});
