@@ -4,8 +4,8 @@
  */
 import type { GJLookup } from './gJLookup';
 import type { Problem } from '../format/ast';
-import { electricDipoleLine, selectionRules, stickSpectrum, type LineTerm } from '../physics/transitions';
-import { polarizationName } from './polarizationName';
+import { electricDipoleLine, selectionRules, type LineTerm } from '../physics/transitions';
+import { lineComponentRows } from './lineComponents';
 import type { LevelModel, LineModel, SettingsModel } from '../model/types';
 import { evaluateTermLine } from './termLineEvaluation';
 import type { WorkingField } from './levelEvaluation';
@@ -60,16 +60,7 @@ export function evaluateLine(
     result.at_fields.push({
       source: f.source,
       field_T: f.tesla,
-      components: stickSpectrum(r.components).map((c, k) => ({
-        offset_Hz: c.offsetHz,
-        ...(r.components[k]!.absoluteHz !== null ? { absolute_Hz: r.components[k]!.absoluteHz! } : {}),
-        strength: c.strength,
-        polarization: polarizationName(c.polarization),
-        lower_label: c.lowerLabel,
-        upper_label: c.upperLabel,
-        along_field: c.alongField,
-        across_field: c.acrossField,
-      })),
+      components: lineComponentRows(r.components),
     });
   }
   return result;

@@ -4,13 +4,13 @@
  * uncoupled), the selection rules that do not need J, and the components at every field.
  */
 import type { LevelSpec } from '../physics/engine';
-import { selectionRules, stickSpectrum, termDipoleLine, type LineTerm, type TermLineEnd } from '../physics/transitions';
+import { selectionRules, termDipoleLine, type LineTerm, type TermLineEnd } from '../physics/transitions';
+import { lineComponentRows } from './lineComponents';
 import type { GJLookup } from './gJLookup';
 import type { LevelModel, LineModel, SettingsModel } from '../model/types';
 import type { PhysicsIssue } from './forwardIssues';
 import { fineSpec, hyperfineSpec, wholeTermSpec } from './levelSpec';
 import type { WorkingField } from './levelEvaluation';
-import { polarizationName } from './polarizationName';
 import type { LineResult } from './resultTypes';
 
 /** The engine spec of a line's end; a term keeps the species' nucleus so both ends share it. */
@@ -82,18 +82,7 @@ export function evaluateTermLine(
       source: f.source,
       field_T: f.tesla,
       ...(r.gEffCentroid !== null ? { g_eff_centroid: r.gEffCentroid } : {}),
-      components: stickSpectrum(r.components).map((c, k) => ({
-        offset_Hz: c.offsetHz,
-        ...(r.components[k]!.absoluteHz !== null ? { absolute_Hz: r.components[k]!.absoluteHz! } : {}),
-        strength: c.strength,
-        polarization: polarizationName(c.polarization),
-        lower_label: c.lowerLabel,
-        upper_label: c.upperLabel,
-        along_field: c.alongField,
-        across_field: c.acrossField,
-        lower_high_label: r.components[k]!.lower.high.text,
-        upper_high_label: r.components[k]!.upper.high.text,
-      })),
+      components: lineComponentRows(r.components, true),
     });
   }
 }

@@ -11,14 +11,7 @@ import { hyperfineFromLevels, type HyperfineSource, type RadialParameters } from
 import { termBlockSize } from './termBasis';
 import type { EngineIssue, WholeTermSpec } from './types';
 
-export interface CleanTerm {
-  kind: 'term';
-  twoS: number;
-  L: number;
-  twoI: number;
-  gL: number;
-  gS: number;
-  gI: number;
+export interface CleanTerm extends Pick<WholeTermSpec, 'kind' | 'twoS' | 'L' | 'twoI' | 'gL' | 'gS' | 'gI'> {
   /** E_J by twoJ, Hz. */
   levelEnergies: Map<number, number>;
   radial: RadialParameters;
