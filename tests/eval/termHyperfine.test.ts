@@ -84,3 +84,20 @@ describe('whole-term settings: mistakes in plain words', () => {
     expect(codes('species Li7\n  level p: 2p 2P°  E_J = 1/2 0 GHz, 3/2 10.053 GHz\n')).toEqual([]);
   });
 });
+
+describe('whole-term notes and partial data', () => {
+  it('the strong-field note names the whole-term labels |J, F, m_F> and |m_L, m_S, m_I>', () => {
+    // ⁷Li 2P (fine structure 10 GHz) is decoupled at 30 T.
+    const r = analyze('species Li7\n  level p: 2p 2P°  zeta = 6.7 GHz\n    A_J = 1/2 45.9 MHz, 3/2 -3.06 MHz\nfield f = 30 T\n');
+    const n = r.problems.find((p) => p.code === 'zeeman-strong-field')!;
+    expect(n.message).toContain('labels |J, F, m_F> no longer describe the states; read the |m_L, m_S, m_I> labels');
+  });
+
+  it('E_J naming a J the term lacks: the error, and fine levels only with numbers (no undefined shift in the JSON)', () => {
+    const r = analyze('species Rb87\n  level p: 5p 2P°  E_J = 1/2 0 Hz, 5/2 7 THz\n    A_J = 1/2 408 MHz, 3/2 84 MHz\nfield f = 1 mT\n');
+    expect(r.problems.map((p) => p.code)).toContain('term-level-unknown');
+    const t = r.result!.terms[0]!;
+    expect(t.at_fields).toEqual([]);
+    for (const l of t.fine_levels) expect(Number.isFinite(l.shift_Hz)).toBe(true);
+  });
+});

@@ -75,7 +75,8 @@ export function evaluateTerm(level: LevelModel, settings: SettingsModel, fields:
     ...(zetaUsed && level.zeta ? { zeta_Hz: { value: level.zeta.value, source: level.zeta.source } } : {}),
     g_s: spec.gS,
     g_L: spec.gL,
-    fine_levels: jValues.map((twoJ) => ({
+    // A J level missing from E_J (already an error) is left out rather than given no number.
+    fine_levels: jValues.filter((twoJ) => shifts.has(twoJ)).map((twoJ) => ({
       J: twoJ / 2,
       J_text: halfText(twoJ),
       shift_Hz: shifts.get(twoJ) as number,
