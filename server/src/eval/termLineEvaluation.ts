@@ -20,7 +20,8 @@ function endSpec(level: LevelModel, gJOf: GJLookup, settings: SettingsModel): Le
     return gJ !== undefined ? hyperfineSpec(level, gJ) : undefined;
   }
   const whole = wholeTermSpec(level, settings);
-  if (whole && (whole.twoI > 0 || level.species.twoI.value === 0)) return whole;
+  // E_J without hyperfine data on a species with a nucleus: no nucleus to share (the model says so).
+  if (whole) return whole.twoI > 0 || level.species.twoI.value === 0 ? whole : undefined;
   const fine = fineSpec(level, settings);
   const twoI = level.species.twoI.value;
   return fine && twoI > 0 ? { ...fine, twoI, gI: level.species.gI.value } : fine;

@@ -20,7 +20,7 @@ export function buildLine(node: BlockNode, species: NameIndex<SpeciesModel>, use
   if (upper) line.upper = upper;
   for (const [level, ref] of [[lower, link?.from], [upper, link?.to]] as const) {
     // A term known only by its J-level energies has no nucleus in the engine, unlike the other end.
-    const noNucleus = level?.kind === 'term' && !level.zeta && !level.levelA && !level.levelB && level.species.twoI.value > 0;
+    const noNucleus = level?.kind === 'term' && !!level.levelEnergies && !level.levelA && !level.levelB && level.species.twoI.value > 0;
     if (noNucleus && ref) {
       problems.add(
         'line-to-whole-term',
