@@ -266,3 +266,19 @@ describe('whole term: bad input in plain words', () => {
     expect(r.issues[0].message).toContain('4096');
   });
 });
+
+describe('whole term: hostile specs never throw', () => {
+  it.each([
+    [{ levelA: [null] }],
+    [{ levelA: 'x' }],
+    [{ levelEnergies: [{ twoJ: 1 }] , zeta: undefined }],
+    [{ radial: null }],
+    [{ twoI: -1 }],
+    [{ gI: Number.NaN }],
+  ])('%o gives an error issue', (patch) => {
+    const spec = { ...RB87_5P, ...patch } as unknown as WholeTermSpec;
+    const r = solveLevel(spec, 0.1);
+    expect(r.states).toEqual([]);
+    expect(r.issues.some((i) => i.severity === 'error')).toBe(true);
+  });
+});

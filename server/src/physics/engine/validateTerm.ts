@@ -30,7 +30,7 @@ function levelMap<T extends { twoJ: number }>(list: readonly T[] | undefined, va
     return null;
   }
   for (const x of list) {
-    const v = value(x);
+    const v = x && typeof x === 'object' ? value(x) : undefined;
     if (!x || !jValues.includes(x.twoJ) || !isReal(v)) {
       issues.push(issue('error', 'term-bad-level', `${what}: every entry needs a J of this term (${jValues.map((j) => (j % 2 ? `${j}/2` : j / 2)).join(', ')}) and a finite value.`));
       return null;
