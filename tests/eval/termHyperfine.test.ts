@@ -20,7 +20,7 @@ describe('a whole term with A_J, B_J and E_J (whole-term engine)', () => {
 
   it('reports the radial parameters, the stated assumption and the J-level constants they give back', () => {
     expect(r.problems.filter((p) => p.severity !== 'info')).toEqual([]);
-    expect(r.problems.map((p) => p.code)).toContain('term-hyperfine-assumed');
+    expect(r.problems.map((p) => p.code)).toContain('hyperfine-between-levels-assumed');
     expect(t.zeta_Hz).toBeUndefined();
     expect(t.hyperfine!.source).toBe('level-constants, a_L = a_SD');
     // NumPy lstsq on the same data (tests/reference/engine_whole_term.json)
