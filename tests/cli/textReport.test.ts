@@ -139,3 +139,10 @@ beam b
     expect(text).toMatch(/line centre 508\.848\d* THz \(vacuum wavelength 589\.15\d* nm\)/);
   });
 });
+
+describe('text report of a line to a whole term', () => {
+  it('says how its strengths are normalised and gives the centroid g_eff', () => {
+    const { text } = report('species Na23\n  level g: 3s 2S1/2\n  level p: 3p 2P° zeta = 343.68 GHz\nfield f = 1 T\nline L: g -> p\n');
+    expect(text).toMatch(/Zeeman components at field f = 1 T \(strength = \(2L_u\+1\)\|<l\|d_q\|u>\|² \/ \|<L_u\|\|d\|\|L_l>\|²; σ± centroid g_eff [0-9.]+\):/);
+  });
+});

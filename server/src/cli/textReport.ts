@@ -142,7 +142,10 @@ function lineReport(l: LineResult, atFieldText: AtFieldText, diagnostics: readon
     out.push(why.length > 0 ? `  no components: see ${why.map((d) => `${d.severity} ${d.code} at ${d.line}:${d.column}`).join(', ')}` : '  no components were computed');
     return out;
   }
-  out.push(`  ${at.components.length} Zeeman components at ${atFieldText(at)} (strength = branching fraction of the upper sublevel):`);
+  // With a whole term the strengths are per orbital reduced element (docs/transitions.md).
+  const meaning = l.strengths_reduced_in === 'L' ? 'strength = (2L_u+1)|<l|d_q|u>|² / |<L_u||d||L_l>|²' : 'strength = branching fraction of the upper sublevel';
+  const gEff = at.g_eff_centroid !== undefined ? `; σ± centroid g_eff ${trimNumber(at.g_eff_centroid, 6)}` : '';
+  out.push(`  ${at.components.length} Zeeman components at ${atFieldText(at)} (${meaning}${gEff}):`);
   out.push(
     ...table(
       ['offset', 'pol.', 'strength', 'lower', 'upper'],
