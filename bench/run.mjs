@@ -18,6 +18,7 @@ const BENCHMARKS = [
   { name: 'startup', entry: 'bench/startup.bench.ts', call: 'runStartupBench', about: 'CLI start-up: check of one small file against bare node' },
   { name: 'batch', entry: 'bench/batch.bench.ts', call: 'runBatchBench', about: 'eval of 2,000 files in one process against check of the same folder' },
   { name: 'profile-csv', entry: 'bench/profileCsv.bench.ts', call: 'runProfileCsvBench', about: 'profile CSV writing against computing the pattern' },
+  { name: 'whole-term', entry: 'bench/wholeTerm.bench.ts', call: 'runWholeTermBench', about: '87Rb 5P whole term vs single-J sweeps, per state' },
   { name: 'editor', entry: 'bench/editor.bench.ts', call: 'runEditorBench', about: '2,000-line setup: edit → diagnostics, hover, cold start' },
 ];
 

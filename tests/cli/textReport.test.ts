@@ -127,7 +127,7 @@ beam b
   });
 
   it('a line without components points at the finding that says why, by code and place', () => {
-    const { text } = report('species Li7\n  level g: 2s 2S1/2\n  level t: 2p 2P zeta = 6.7 GHz\nfield f = 100 G\nline L: g -> t\n');
+    const { text } = report('species Li7\n  level g: 2s 2S1/2\n  level t: 2p 2P E_J = 1/2 0 GHz, 3/2 10 GHz\nfield f = 100 G\nline L: g -> t\n');
     expect(text).toContain('  no components: see warning line-to-whole-term at 5:14');
     expect(text).toMatch(/\n  5:14 warning line-to-whole-term /);
     expect(text).toContain('diagnostics: 0 errors, 1 warning, 1 note');
@@ -137,5 +137,12 @@ beam b
     const { text } = report('species Na23\n  level g: 3s 2S1/2\n  level p: 3p 2P°3/2\nline L: p -> g\n');
     expect(text).toContain('line L: g -> p (Na23) (written as emission, upper level first)');
     expect(text).toMatch(/line centre 508\.848\d* THz \(vacuum wavelength 589\.15\d* nm\)/);
+  });
+});
+
+describe('text report of a line to a whole term', () => {
+  it('says how its strengths are normalised and gives the centroid g_eff', () => {
+    const { text } = report('species Na23\n  level g: 3s 2S1/2\n  level p: 3p 2P° zeta = 343.68 GHz\nfield f = 1 T\nline L: g -> p\n');
+    expect(text).toMatch(/Zeeman components at field f = 1 T \(strength = \(2L_u\+1\)\|<l\|d_q\|u>\|² \/ \|<L_u\|\|d\|\|L_l>\|²; σ± centroid g_eff [0-9.]+\):/);
   });
 });

@@ -34,10 +34,23 @@ describe('line order and whole-term lines', () => {
     for (const c of r.lines[0]!.at_fields[0]!.components) expect(c.absolute_Hz).toBeUndefined();
   });
 
-  it('a line to a whole term (zeta, no J) gets a warning at the term that says what to write', () => {
-    const text = 'species Na23\n  level g: 3s 2S1/2\n  level p: 3p 2P zeta = 10 GHz\nline L: g -> p\n';
+  it('a line to a whole term known only by E_J (no nucleus in the engine) gets a warning at the term that says what to write', () => {
+    const text = 'species Na23\n  level g: 3s 2S1/2\n  level p: 3p 2P E_J = 1/2 0 GHz, 3/2 515 GHz\nline L: g -> p\n';
     const d = analyze(text).result!.diagnostics.find((x) => x.code === 'line-to-whole-term')!;
     expect(d).toMatchObject({ severity: 'warning', line: 4, column: 14 });
-    expect(d.message).toContain('2P3/2');
+    expect(d.message).toContain('A_J = 1/2 <A>, 3/2 <A>');
+  });
+
+  it('a line to a whole term with zeta is computed (it used to stop with line-to-whole-term and no components)', () => {
+    const text = 'species Na23\n  level g: 3s 2S1/2\n  level p: 3p 2P zeta = 343.68 GHz\nfield f = 1 T\nline L: g -> p\n';
+    const r = analyze(text).result!;
+    expect(r.diagnostics.map((x) => x.code)).not.toContain('line-to-whole-term');
+    const c = r.lines[0]!.at_fields[0]!.components;
+    // 2 × 4 lower (F, m_F) and 6 × 4 upper (m_L, m_S, m_I) sublevels; every upper one decays with total strength 1
+    const out = new Map<string, number>();
+    for (const x of c) out.set(x.upper_high_label!, (out.get(x.upper_high_label!) ?? 0) + x.strength);
+    expect(out.size).toBe(24);
+    for (const v of out.values()) expect(v).toBeCloseTo(1, 12);
+    expect(r.lines[0]!.strengths_reduced_in).toBe('L');
   });
 });

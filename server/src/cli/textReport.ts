@@ -103,9 +103,16 @@ function levelReport(l: LevelResult, atFieldText: AtFieldText): string[] {
   return out;
 }
 
+/** The whole term's hyperfine parameters and the J-level constants they give. */
+function termHyperfineLines(h: NonNullable<TermResult['hyperfine']>): string[] {
+  const radial = `    hyperfine (${h.source}): a_L = ${frequencyText(h.a_orbital_Hz, 8)}, a_SD = ${frequencyText(h.a_spin_dipolar_Hz, 8)}, a_C = ${frequencyText(h.a_contact_Hz, 8)}, b_L = ${frequencyText(h.b_orbital_Hz, 8)}`;
+  return [radial, ...table(['J', 'A', 'B'], h.levels.map((l) => [l.J_text, frequencyText(l.A_Hz, 8), frequencyText(l.B_Hz, 8)])).map((x) => '      ' + x)];
+}
+
 function termReport(t: TermResult, atFieldText: AtFieldText): string[] {
-  const out = ['', `  term ${t.level}: ${t.designation.configuration ? t.designation.configuration + ' ' : ''}${t.designation.unicode}   S = ${fraction(t.S)}, L = ${t.L}, fine structure ζ = ${frequencyText(t.zeta_Hz.value, 8)} [${t.zeta_Hz.source}]`];
+  const out = ['', `  term ${t.level}: ${t.designation.configuration ? t.designation.configuration + ' ' : ''}${t.designation.unicode}   S = ${fraction(t.S)}, L = ${t.L}, ${t.zeta_Hz ? `fine structure ζ = ${frequencyText(t.zeta_Hz.value, 8)} [${t.zeta_Hz.source}]` : 'fine structure from the J-level energies'}`];
   out.push(...table(['J', 'zero-field shift', 'g_J'], t.fine_levels.map((f) => [f.J_text, frequencyText(f.shift_Hz, 10), trimNumber(f.g_J, 8)])).map((x) => '      ' + x));
+  if (t.hyperfine) out.push(...termHyperfineLines(t.hyperfine));
   for (const f of t.at_fields) {
     const regime = f.regime ? `; ${f.regime.verdict}${f.regime.x !== null ? `, x = ${trimNumber(f.regime.x, 3)}` : ''}` : '';
     out.push(`    at ${atFieldText(f)}${regime}:`);
@@ -135,7 +142,10 @@ function lineReport(l: LineResult, atFieldText: AtFieldText, diagnostics: readon
     out.push(why.length > 0 ? `  no components: see ${why.map((d) => `${d.severity} ${d.code} at ${d.line}:${d.column}`).join(', ')}` : '  no components were computed');
     return out;
   }
-  out.push(`  ${at.components.length} Zeeman components at ${atFieldText(at)} (strength = branching fraction of the upper sublevel):`);
+  // With a whole term the strengths are per orbital reduced element (docs/transitions.md).
+  const meaning = l.strengths_reduced_in === 'L' ? 'strength = (2L_u+1)|<l|d_q|u>|² / |<L_u||d||L_l>|²' : 'strength = branching fraction of the upper sublevel';
+  const gEff = at.g_eff_centroid !== undefined ? `; σ± centroid g_eff ${trimNumber(at.g_eff_centroid, 6)}` : '';
+  out.push(`  ${at.components.length} Zeeman components at ${atFieldText(at)} (${meaning}${gEff}):`);
   out.push(
     ...table(
       ['offset', 'pol.', 'strength', 'lower', 'upper'],

@@ -9,6 +9,7 @@ export const EVAL_RULES = {
   'beam-misses-detector': { severity: 'warning', summary: 'A detector placed where (almost) no atoms arrive.' },
   'resonance-unreachable': { severity: 'warning', summary: 'No transition reaches the given frequency in the field range.' },
   'resonance-no-such-pair': { severity: 'error', summary: 'The named sublevels have no magnetic-dipole or two-photon transition.' },
+  'hyperfine-between-levels-assumed': { severity: 'info', summary: 'A whole term\u2019s hyperfine coupling between J levels rests on the stated assumption a_L = a_SD.' },
   'level-too-large': { severity: 'error', summary: 'A level has more sublevels than the engine handles.' },
   'level-not-computed': { severity: 'error', summary: 'The eigen-solver failed for a level at one working field.' },
   'document-too-large': { severity: 'error', summary: 'A file longer than the document cap; it is not checked.' },

@@ -64,7 +64,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     return e.result;
   });
   const lineProblems: Problem[] = [];
-  const lines = model.lines.map((l) => evaluateLine(l, fields, gJOf, lineProblems));
+  const lines = model.lines.map((l) => evaluateLine(l, fields, gJOf, lineProblems, model.settings));
   const resonances = model.resonances.map((r) => evaluateResonance(r, fields, model.settings, gJOf, lineProblems));
   const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems]);
   const result: EvaluationResult = {

@@ -64,6 +64,7 @@ function solveExactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
 
 function hasZeroFieldStructure(spec: LevelSpec): boolean {
   if (spec.kind === 'fine') return spec.zeta !== 0 && spec.L > 0 && spec.twoS > 0;
+  if (spec.kind === 'term') return true;
   return spec.twoI > 0 && spec.twoJ > 0 && (spec.A !== 0 || (spec.B ?? 0) !== 0 || (spec.C ?? 0) !== 0);
 }
 

@@ -4,9 +4,10 @@
  */
 import type { GJLookup } from './gJLookup';
 import type { Problem } from '../format/ast';
-import { electricDipoleLine, selectionRules, stickSpectrum, type LineTerm } from '../physics/transitions';
-import { polarizationName } from './polarizationName';
-import type { LevelModel, LineModel } from '../model/types';
+import { electricDipoleLine, selectionRules, type LineTerm } from '../physics/transitions';
+import { lineComponentRows } from './lineComponents';
+import type { LevelModel, LineModel, SettingsModel } from '../model/types';
+import { evaluateTermLine } from './termLineEvaluation';
 import type { WorkingField } from './levelEvaluation';
 import { forwardIssues } from './forwardIssues';
 import { hyperfineSpec } from './levelSpec';
@@ -17,6 +18,7 @@ export function evaluateLine(
   fields: WorkingField[],
   gJOf: GJLookup,
   problems: Problem[],
+  settings: SettingsModel = { gS: 'exact', reducedMass: false },
 ): LineResult {
   const { lower, upper } = line;
   const result: LineResult = {
@@ -27,6 +29,10 @@ export function evaluateLine(
     at_fields: [],
   };
   if (!lower || !upper || lower.species !== upper.species || lower === upper) return result;
+  if (lower.kind === 'term' || upper.kind === 'term') {
+    if (lower.valid && upper.valid) evaluateTermLine(line, lower, upper, fields, gJOf, settings, forwardIssues(`line '${line.name}'`, line.node.headerRange, problems), result);
+    return result;
+  }
   const lt = lineTerm(lower);
   const ut = lineTerm(upper);
   if (!lt || !ut) return result;
@@ -54,16 +60,7 @@ export function evaluateLine(
     result.at_fields.push({
       source: f.source,
       field_T: f.tesla,
-      components: stickSpectrum(r.components).map((c, k) => ({
-        offset_Hz: c.offsetHz,
-        ...(r.components[k]!.absoluteHz !== null ? { absolute_Hz: r.components[k]!.absoluteHz! } : {}),
-        strength: c.strength,
-        polarization: polarizationName(c.polarization),
-        lower_label: c.lowerLabel,
-        upper_label: c.upperLabel,
-        along_field: c.alongField,
-        across_field: c.acrossField,
-      })),
+      components: lineComponentRows(r.components),
     });
   }
   return result;

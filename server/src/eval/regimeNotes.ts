@@ -42,8 +42,10 @@ export function regimeNote(level: LevelModel, points: readonly FieldPoint[]): Ev
   };
   const parts: string[] = [];
   if (strong.length > 0) {
-    const low = level.kind === 'term' ? '|J, m_J>' : '|F, m_F>';
-    const high = level.kind === 'term' ? '|m_L, m_S>' : '|m_J, m_I>';
+    // A whole term with its hyperfine data is computed with its nucleus (termSpec).
+    const withNucleus = level.kind === 'term' && (level.levelA !== undefined || level.levelB !== undefined) && level.species.twoI.value > 0;
+    const low = withNucleus ? '|J, F, m_F>' : level.kind === 'term' ? '|J, m_J>' : '|F, m_F>';
+    const high = withNucleus ? '|m_L, m_S, m_I>' : level.kind === 'term' ? '|m_L, m_S>' : '|m_J, m_I>';
     const above = limit(strong, 'strong_limit_T');
     parts.push(`in the strong-field (decoupled) regime at ${fieldList(strong)}${above ? ` (above ${above})` : ''}: labels ${low} no longer describe the states; read the ${high} labels`);
   }

@@ -129,12 +129,26 @@ export interface TermResult {
   designation: { text: string; unicode: string; configuration: string | null };
   S: number;
   L: number;
-  zeta_Hz: SourcedNumber;
+  /** Absent when the file gives the J-level energies E_J instead. */
+  zeta_Hz?: SourcedNumber;
   g_s: number;
   g_L: number;
-  /** J levels at zero field: E_J = ζ/2 [J(J+1) − L(L+1) − S(S+1)], relative to the term's centre of gravity. */
+  /** J levels at zero field (E_J = ζ/2 [J(J+1) − L(L+1) − S(S+1)], or the given E_J), relative to the term's centre of gravity. */
   fine_levels: { J: number; J_text: string; shift_Hz: number; g_J: number }[];
+  /** The term's hyperfine structure, when A_J / B_J are given (whole-term engine mode). */
+  hyperfine?: TermHyperfineResult;
   at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; exact: ExactSublevelResult[]; regime?: RegimeResultJson }[];
+}
+
+/** Radial parameters of a whole term's hyperfine Hamiltonian and the J-level constants they give (docs/engine.md). */
+export interface TermHyperfineResult {
+  /** 'level-constants' (solved exactly or by least squares) or 'level-constants, a_L = a_SD' (the stated assumption). */
+  source: string;
+  a_orbital_Hz: number;
+  a_spin_dipolar_Hz: number;
+  a_contact_Hz: number;
+  b_orbital_Hz: number;
+  levels: { J: number; J_text: string; A_Hz: number; B_Hz: number }[];
 }
 
 export interface SpeciesResult {
@@ -228,6 +242,9 @@ export interface LineComponentResult {
   along_field: number;
   /** Relative intensity seen across the field (π 1, σ 1/2). */
   across_field: number;
+  /** Lines with a whole term: the uncoupled (high-field) labels |m_L, m_S, m_I> or |m_J, m_I> of both ends. */
+  lower_high_label?: string;
+  upper_high_label?: string;
 }
 
 export interface LineResult {
@@ -241,8 +258,13 @@ export interface LineResult {
   written_as_emission?: boolean;
   /** Upper minus lower level energy (always > 0), when both are known and differ. */
   line_centre_Hz?: number;
-  /** Components at each working field (at zero field when the file has none). */
-  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; components: LineComponentResult[] }[];
+  /**
+   * 'L' for a line with a whole term at one end or both: strengths are (2L_u+1)|<l|d_q|u>|²/|<L_u||d||L_l>|²
+   * (out of each upper sublevel they sum to 1 when the lower end is a whole term). Absent: per J, as above.
+   */
+  strengths_reduced_in?: 'L';
+  /** Components at each working field (at zero field when the file has none); `g_eff_centroid` from the σ± centroids (lines with a whole term). */
+  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; g_eff_centroid?: number; components: LineComponentResult[] }[];
 }
 
 export interface MagneticTransitionResult {

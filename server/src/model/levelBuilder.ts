@@ -7,6 +7,7 @@ import { parseLevelDesignation } from '../physics/configuration';
 import type { BuiltinLevel } from '../physics/species';
 import type { ProblemList } from './problems';
 import { subRange } from './ranges';
+import { readPerLevel } from './perLevelReader';
 import { readSettingNumber, readSettingQuantity } from './settingReaders';
 import type { LevelModel, SpeciesModel, Valued } from './types';
 
@@ -68,7 +69,7 @@ function readDesignation(level: LevelModel, problems: ProblemList): void {
   }
   const hasError = parsed.issues.some((i) => i.severity === 'error');
   const noJ = !!parsed.term && parsed.term.twoJ === null;
-  if (noJ && level.zeta) {
+  if (noJ && (level.zeta || level.levelEnergies)) {
     level.kind = 'term';
   } else if (noJ && !hasError) {
     problems.add(
@@ -106,6 +107,15 @@ function readLevelSetting(level: LevelModel, s: SettingNode, problems: ProblemLi
       break;
     case 'zeta':
       level.zeta = readSettingQuantity(s, 'frequency-like', problems, 'spin–orbit constant ζ of the term, e.g. 6.70 GHz');
+      break;
+    case 'A_J':
+      level.levelA = readPerLevel(s, problems, '1/2 46.0 MHz, 3/2 -3.06 MHz');
+      break;
+    case 'B_J':
+      level.levelB = readPerLevel(s, problems, '3/2 -0.22 MHz');
+      break;
+    case 'E_J':
+      level.levelEnergies = readPerLevel(s, problems, '1/2 0 GHz, 3/2 10.05 GHz');
       break;
     case 'energy':
       level.energyHz = readSettingQuantity(s, 'frequency-like', problems, 'energy above the ground level, e.g. 16973.37 cm^-1');

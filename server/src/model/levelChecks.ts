@@ -5,6 +5,7 @@
 import { landeGJ, orbitalGFactor } from '../physics/gFactors';
 import { ELECTRON_GS } from '../physics/constants';
 import type { ProblemList } from './problems';
+import { checkTermSettings } from './termChecks';
 import type { LevelModel, SettingsModel } from './types';
 
 /** Relative difference between measured and LS g_J above which we point it out (common practice: LS is good to ~1e-3 for light atoms). */
@@ -12,10 +13,11 @@ const GJ_NOTICE_FRACTION = 0.01;
 
 export function checkLevelPhysics(level: LevelModel, settings: SettingsModel, problems: ProblemList): void {
   const term = level.term;
+  if (level.valid) checkTermSettings(level, problems);
   if (level.kind === 'term' && level.valid) {
     for (const [key, v] of [['A', level.A], ['B', level.B], ['C', level.C], ['g_J', level.gJMeasured]] as const) {
       if (v?.range) {
-        problems.add('term-hyperfine-unsupported', `${key} is not used for a whole term (a term without J); give it on a J level instead`, v.range, {
+        problems.add('term-hyperfine-unsupported', `${key} is not used for a whole term (a term without J); give it on a J level instead${key === 'A' || key === 'B' ? `, or per J level as ${key}_J = <J> <value>, …` : ''}`, v.range, {
           data: { removeSetting: key },
         });
       }

@@ -19,10 +19,12 @@ export function buildLine(node: BlockNode, species: NameIndex<SpeciesModel>, use
   if (lower) line.lower = lower;
   if (upper) line.upper = upper;
   for (const [level, ref] of [[lower, link?.from], [upper, link?.to]] as const) {
-    if (level?.kind === 'term' && ref) {
+    // A term known only by its J-level energies has no nucleus in the engine, unlike the other end.
+    const noNucleus = level?.kind === 'term' && !!level.levelEnergies && !level.levelA && !level.levelB && level.species.twoI.value > 0;
+    if (noNucleus && ref) {
       problems.add(
         'line-to-whole-term',
-        `line '${line.name}': '${level.name}' is a whole term (given with zeta, no J), and lines are computed only between J levels; write the J level instead, e.g. \`level ${level.name}32: ${level.term ? termWithJ(level.term.twoS, level.term.L) : '2P3/2'}\`, and draw the line to it`,
+        `line '${line.name}': the whole term '${level.name}' is given by its J-level energies without hyperfine constants, so it has no nucleus to share with the line's other end; give its A_J (e.g. \`A_J = 1/2 <A>, ${level.term ? termJ(level.term.twoS, level.term.L) : '3/2'} <A>\`), or zeta instead of E_J`,
         ref.range,
       );
     }
@@ -65,9 +67,8 @@ function orderByEnergy(line: LineModel, first: LevelModel, second: LevelModel, p
   }
 }
 
-/** A J level of the term for the advice text: the highest J. */
-function termWithJ(twoS: number, L: number): string {
-  const letter = 'SPDFGHIKLMNOQRTUV'[L] ?? '?';
+/** The term's highest J, for the advice text. */
+function termJ(twoS: number, L: number): string {
   const twoJ = 2 * L + twoS;
-  return `${twoS + 1}${letter}${twoJ % 2 === 0 ? twoJ / 2 : `${twoJ}/2`}`;
+  return twoJ % 2 === 0 ? String(twoJ / 2) : `${twoJ}/2`;
 }

@@ -50,6 +50,15 @@ export interface SpeciesModel {
   levels: LevelModel[];
 }
 
+/** One value of a whole term's J level (`A_J = 3/2 -3.06 MHz`): twice J, the SI value, and where it is written. */
+export interface PerLevelValue {
+  twoJ: number;
+  value: number;
+  /** The whole `J value` group. */
+  range: Range;
+  valueRange: Range;
+}
+
 export interface LevelModel {
   name: string;
   node: LevelNode;
@@ -60,13 +69,18 @@ export interface LevelModel {
   term: TermSymbol | null;
   /**
    * `level`: a J level (term symbol with J). `term`: a whole LS term without J whose fine
-   * structure ζ L·S is part of the problem (needs `zeta`).
+   * structure is part of the problem (needs `zeta` or the J-level energies `E_J`), with its
+   * hyperfine structure when `A_J` / `B_J` are given.
    */
   kind: 'level' | 'term';
   /** Set when the designation is usable: a valid J level, or a term with its ζ. */
   valid: boolean;
   /** Spin–orbit constant ζ of a term (E_J = ζ/2 [J(J+1) − L(L+1) − S(S+1)]), Hz. */
   zeta?: Valued<number>;
+  /** A whole term's J-level hyperfine constants and J-level energies (`A_J`, `B_J`, `E_J`), Hz. */
+  levelA?: PerLevelValue[];
+  levelB?: PerLevelValue[];
+  levelEnergies?: PerLevelValue[];
   A?: Valued<number>;
   B?: Valued<number>;
   C?: Valued<number>;

@@ -5,7 +5,7 @@ import { halfText } from '../../eval/halves';
 import { md, mdTable, mdTitle } from '../shared/markdown';
 
 export function fineStructureSection(t: TermResult): string {
-  const head = `${mdTitle(`${md(t.designation.unicode)} term`)}${t.designation.configuration ? ` — ${md(t.designation.configuration)}` : ''} (S = ${halfText(Math.round(2 * t.S))}, L = ${t.L})  \nζ = ${frequencyText(t.zeta_Hz.value)} (${md(t.zeta_Hz.source)}); every J level is computed together`;
+  const head = `${mdTitle(`${md(t.designation.unicode)} term`)}${t.designation.configuration ? ` — ${md(t.designation.configuration)}` : ''} (S = ${halfText(Math.round(2 * t.S))}, L = ${t.L})  \n${t.zeta_Hz ? `ζ = ${frequencyText(t.zeta_Hz.value)} (${md(t.zeta_Hz.source)})` : 'J-level energies from the file'}; every J level is computed together${t.hyperfine ? ', with the hyperfine coupling inside and between them' : ''}`;
   const table = mdTable(
     ['J', 'E/h at zero field', 'g_J (Landé)'],
     t.fine_levels.map((l) => [l.J_text, frequencyText(l.shift_Hz), trimNumber(l.g_J, 7)]),

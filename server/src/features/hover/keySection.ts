@@ -19,6 +19,9 @@ const LEVEL_KEYS: Record<string, string> = {
   g_J: 'measured g_J; it replaces the Landé value in the energies, and the Landé value is still shown',
   energy: 'the level energy above the ground level, used for line frequencies',
   zeta: 'spin–orbit constant ζ of a term written without J; all its J levels are then computed together, from weak field to Paschen–Back',
+  A_J: 'hyperfine A of each J level of a term written without J: `A_J = 1/2 46 MHz, 3/2 -3.06 MHz`; the term is then computed with its hyperfine coupling inside and between the J levels',
+  B_J: 'quadrupole B of J levels of a term written without J: `B_J = 3/2 -0.22 MHz`',
+  E_J: 'energy of each J level of a term written without J, instead of zeta: `E_J = 1/2 0 GHz, 3/2 10.05 GHz`',
 };
 
 const BLOCK_KEYS: Record<string, string> = {

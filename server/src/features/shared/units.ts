@@ -66,7 +66,7 @@ export interface ValueContext {
 
 /** The dimension a setting's quantity must have, or undefined for plain numbers and words. */
 export function expectedDimension(c: ValueContext): Dimension | undefined {
-  if (c.inLevel) return ['A', 'B', 'C', 'energy', 'zeta'].includes(c.key) ? 'frequency-like' : undefined;
+  if (c.inLevel) return ['A', 'B', 'C', 'energy', 'zeta', 'A_J', 'B_J', 'E_J'].includes(c.key) ? 'frequency-like' : undefined;
   switch (c.blockKind) {
     case 'species':
       return c.key === 'mass' ? 'mass' : c.key === 'mu_I' ? 'moment' : undefined;

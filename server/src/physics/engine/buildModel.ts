@@ -2,6 +2,7 @@
 import { buildFineModel } from './fineModel';
 import { hasError } from './issues';
 import { buildHyperfineModel } from './hyperfineModel';
+import { buildWholeTermModel } from './wholeTermModel';
 import type { LevelModel } from './levelModel';
 import type { EngineIssue, LevelSpec } from './types';
 import { validateSpec } from './validateSpec';
@@ -14,6 +15,6 @@ export interface ModelResult {
 export function buildLevelModel(spec: LevelSpec): ModelResult {
   const { spec: clean, issues } = validateSpec(spec);
   if (!clean || hasError(issues)) return { model: null, issues };
-  const model = clean.kind === 'hyperfine' ? buildHyperfineModel(clean) : buildFineModel(clean);
+  const model = clean.kind === 'hyperfine' ? buildHyperfineModel(clean) : clean.kind === 'term' ? buildWholeTermModel(clean) : buildFineModel(clean);
   return { model, issues };
 }

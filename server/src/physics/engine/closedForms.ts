@@ -14,6 +14,11 @@ import { nucleusUncoupled } from './uncoupledNucleus';
 import { validateSpec } from './validateSpec';
 import { fineZeroFieldHz, hyperfineZeroFieldHz } from './zeroFieldLevels';
 
+/** The whole-term mode has no closed forms here (its limits are tested against the other modes). */
+function noClosedForm(): EngineIssue {
+  return issue('error', 'no-closed-form', 'The closed forms cover one J level or a term without hyperfine coupling, not a whole term with its hyperfine structure.');
+}
+
 export interface LinearEnergy {
   low: LowFieldLabel;
   energyHz: number;
@@ -33,6 +38,7 @@ export interface StrongFieldEnergy {
 export function linearZeeman(spec: LevelSpec, fieldT: number): { states: LinearEnergy[]; issues: EngineIssue[] } {
   const { spec: s, issues } = validateSpec(spec);
   if (!s) return { states: [], issues };
+  if (s.kind === 'term') return { states: [], issues: [...issues, noClosedForm()] };
   const mu = BOHR_MAGNETON_HZ_PER_T;
   const states: LinearEnergy[] = [];
   if (s.kind === 'hyperfine' && nucleusUncoupled(s)) {
@@ -119,6 +125,7 @@ export function breitRabi(spec: HyperfineLevelSpec, fieldT: number): { states: {
 export function paschenBackLimit(spec: LevelSpec, fieldT: number): { states: StrongFieldEnergy[]; issues: EngineIssue[] } {
   const { spec: s, issues } = validateSpec(spec);
   if (!s) return { states: [], issues };
+  if (s.kind === 'term') return { states: [], issues: [...issues, noClosedForm()] };
   const mu = BOHR_MAGNETON_HZ_PER_T;
   const states: StrongFieldEnergy[] = [];
   if (s.kind === 'hyperfine') {

@@ -24,6 +24,7 @@ export type {
   SweptState,
   UncoupledJILabel,
   UncoupledLSLabel,
+  WholeTermSpec,
 } from './types';
 export { solveLevel } from './solveLevel';
 export { sweepLevel } from './sweepLevel';
@@ -32,6 +33,10 @@ export { breitRabi, breitRabiEnergy, linearZeeman, paschenBackLimit } from './cl
 export type { LinearEnergy, StrongFieldEnergy } from './closedForms';
 export { hyperfineZeroFieldHz, fineZeroFieldHz, quadrupoleActs, octupoleActs } from './zeroFieldLevels';
 export { landeGF, landeGJ } from './landeFactors';
+export { levelCoefficients } from './termHyperfineParameters';
+export type { LevelCoefficients, RadialParameters } from './termHyperfineParameters';
+export { termLevelConstants } from './termLevelConstants';
+export type { TermConstants } from './termLevelConstants';
 export { validateSpec } from './validateSpec';
 export { symmetricEigen } from './symmetricEigen';
 export * as engineLimits from './limits';

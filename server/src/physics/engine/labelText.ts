@@ -28,3 +28,8 @@ export function lsLabel(twoML: number, twoMS: number, twoMI: number | null): Unc
     text: `m_L=${halfText(twoML, true)}, m_S=${halfText(twoMS, true)}${nuc}`,
   };
 }
+
+/** Low-field label of a whole term's state: |J, F, m_F>. */
+export function jfLabel(twoJ: number, twoF: number, twoMF: number): CoupledFLabel {
+  return { scheme: 'F', twoF, twoMF, twoJ, text: `J=${halfText(twoJ)}, F=${halfText(twoF)}, m_F=${halfText(twoMF, true)}` };
+}

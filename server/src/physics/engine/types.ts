@@ -32,7 +32,28 @@ export interface FineTermSpec {
   gI?: number;
 }
 
-export type LevelSpec = HyperfineLevelSpec | FineTermSpec;
+/**
+ * A whole LS term with its nucleus: fine structure, magnetic-dipole hyperfine coupling inside
+ * and between its J levels, the orbital quadrupole, and the Zeeman term (docs/engine.md).
+ * Fine structure: `zeta` (ζ L·S) or `levelEnergies` (every J level, Hz, any common origin).
+ * Hyperfine: `radial` parameters, or the J-level constants `levelA` / `levelB` (Hz).
+ */
+export interface WholeTermSpec {
+  kind: 'term';
+  twoS: number;
+  L: number;
+  twoI: number;
+  gL: number;
+  gS: number;
+  gI: number;
+  zeta?: number;
+  levelEnergies?: { twoJ: number; energyHz: number }[];
+  radial?: { orbital: number; spinDipolar: number; contact: number; quadrupole?: number };
+  levelA?: { twoJ: number; A: number }[];
+  levelB?: { twoJ: number; B: number }[];
+}
+
+export type LevelSpec = HyperfineLevelSpec | FineTermSpec | WholeTermSpec;
 
 export type IssueSeverity = 'error' | 'warning' | 'info';
 
@@ -49,6 +70,8 @@ export interface CoupledFLabel {
   twoF: number;
   twoMF: number;
   text: string;
+  /** The J level of a whole term the state belongs to at low field (|J, F, m_F>). */
+  twoJ?: number;
 }
 
 /** Low-field label of a fine-structure sublevel: |J, m_J> (and m_I when a nucleus is given). */

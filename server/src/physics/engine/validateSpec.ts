@@ -7,6 +7,7 @@ import { issue } from './issues';
 import { MAX_BASIS_STATES, MAX_BLOCK_SIZE } from './limits';
 import type { EngineIssue, LevelSpec } from './types';
 import { octupoleActs, quadrupoleActs } from './zeroFieldLevels';
+import { validateTerm, type CleanTerm } from './validateTerm';
 
 export interface CleanHyperfine {
   kind: 'hyperfine';
@@ -32,7 +33,7 @@ export interface CleanFine {
   hasNucleus: boolean;
 }
 
-export type CleanSpec = CleanHyperfine | CleanFine;
+export type CleanSpec = CleanHyperfine | CleanFine | CleanTerm;
 
 export interface ValidatedSpec {
   spec: CleanSpec | null;
@@ -141,7 +142,8 @@ export function validateSpec(spec: LevelSpec): ValidatedSpec {
   let clean: CleanSpec | null = null;
   if (raw.kind === 'hyperfine') clean = validateHyperfine(raw, issues);
   else if (raw.kind === 'fine') clean = validateFine(raw, issues);
-  else issues.push(issue('error', 'bad-spec', "The level kind must be 'hyperfine' or 'fine'."));
+  else if (raw.kind === 'term') clean = validateTerm(spec as LevelSpec & { kind: 'term' }, issues);
+  else issues.push(issue('error', 'bad-spec', "The level kind must be 'hyperfine', 'fine' or 'term'."));
   return { spec: clean, issues };
 }
 

@@ -28,6 +28,8 @@ export type {
 } from './types';
 export { electricDipoleLine, CENTROID_PROBE_T } from './electricDipoleLine';
 export { stickSpectrum } from './stickSpectrum';
+export { termDipoleLine } from './termDipoleLine';
+export type { TermLineEnd, TermLineResult } from './termDipoleLine';
 export { selectionRules } from './selectionRules';
 export { effectiveLandeFactor, landeFromComponents } from './effectiveLande';
 export type { LandeLevel } from './effectiveLande';

@@ -12,7 +12,9 @@ export function tagOf(s: SublevelState): SublevelTag {
  * (see docs/engine.md), so the same key names the same state at every field.
  */
 export function lowKey(low: LowFieldLabel): string {
-  return low.scheme === 'F' ? `F:${low.twoF}:${low.twoMF}` : `J:${low.twoJ}:${low.twoMJ}:${low.twoMI ?? 'x'}`;
+  // A whole term has one |F, m_F> per J level: its J keeps them apart.
+  if (low.scheme === 'F') return `F:${low.twoF}:${low.twoMF}${low.twoJ === undefined ? '' : `:J${low.twoJ}`}`;
+  return `J:${low.twoJ}:${low.twoMJ}:${low.twoMI ?? 'x'}`;
 }
 
 /** Key of a user reference, or null when it names nothing sensible. */
