@@ -42,7 +42,7 @@ export function compareLevel(a: LevelResult, b: LevelResult, t: DiffThresholds):
 export function compareTerm(a: TermResult, b: TermResult, t: DiffThresholds): ChangeList {
   const list = new ChangeList();
   list.value('term', a.designation.text, b.designation.text);
-  list.number('zeta', a.zeta_Hz.value, b.zeta_Hz.value, t.frequency_Hz, frequency, 'Hz');
+  list.number('zeta', a.zeta_Hz?.value, b.zeta_Hz?.value, t.frequency_Hz, frequency, 'Hz');
   const fine = pairByKey(a.fine_levels, b.fine_levels, (l) => `J=${l.J_text}`);
   list.presence('J level', fine.oldKeys, fine.newKeys);
   for (const [la, lb] of fine.pairs) {
