@@ -3,6 +3,7 @@
  * exact sublevel energies of one level over a field range, for plots and analysis code.
  */
 import { stateTableCsv } from '../render/csv';
+import { sweepEnergyUnc } from '../eval/uncertainty/sweepPass';
 import { engineSpec } from '../eval/levelSpec';
 import { suggestNames } from '../format/didYouMean';
 import { sweepLevel, type SweepResult } from '../physics/engine';
@@ -63,7 +64,7 @@ export function runSweep(args: ParsedArgs, ctx: CliContext): number {
   if (errors.length > 0) {
     throw new FileProblemError(file, errors.map((e) => ({ ...cliProblem('nothing-to-compute', e.message, at), code: e.code })));
   }
-  const text = format === 'csv' ? sweepCsv(sweep, file, level) : jsonText(sweepJson(file, level, sweep), 1);
+  const text = format === 'csv' ? sweepCsv(sweep, file, level, sweepEnergyUnc(analysis.model, level, spec, sweep)) : jsonText(sweepJson(file, level, sweep), 1);
   if (out) {
     writeOutputFile(out, text + '\n', ctx.fsys);
     ctx.io.err(`wrote ${sweep.states.length} sublevels × ${points} fields to ${out}`);
@@ -105,8 +106,8 @@ function findLevel(file: string, model: SetupModel, name: string | undefined): L
 }
 
 /** CSV in the project's convention (docs/csv.md): field_T, energies and moments of every state, states in the documented order. */
-export function sweepCsv(s: SweepResult, file: string, level: LevelModel): string {
-  const states = s.states.map((st) => ({ lowLabel: st.low.text, highLabel: st.high.text, energyHz: st.energyHz, momentJT: st.momentJT }));
+export function sweepCsv(s: SweepResult, file: string, level: LevelModel, energyUnc?: Float64Array[]): string {
+  const states = s.states.map((st, i) => ({ lowLabel: st.low.text, highLabel: st.high.text, energyHz: st.energyHz, momentJT: st.momentJT, ...(energyUnc?.[i] ? { energyUncHz: energyUnc[i] } : {}) }));
   return stateTableCsv({ kind: 'sweep', about: [['file', file], ['level', `${level.species.name}.${level.name}`]] }, s.fieldsT, states).trimEnd();
 }
 

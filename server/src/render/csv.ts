@@ -46,6 +46,8 @@ export interface StateSeries {
   highLabel: string;
   energyHz: ArrayLike<number>;
   momentJT?: ArrayLike<number>;
+  /** Standard uncertainty of the energy at each field, when the level has uncertain constants. */
+  energyUncHz?: ArrayLike<number>;
 }
 
 /**
@@ -73,14 +75,21 @@ export function sortedStates<T extends StateSeries>(states: readonly T[]): T[] {
 export function stateTableCsv(c: CsvContext, fieldsT: ArrayLike<number>, states: readonly StateSeries[]): string {
   const sorted = sortedStates(states);
   const withMoment = sorted.filter((s) => s.momentJT);
+  const withUnc = sorted.filter((s) => s.energyUncHz);
   const header = [
     'field_T',
     ...sorted.map((s) => stateColumn('energy_Hz', s.lowLabel, s.highLabel)),
     ...withMoment.map((s) => stateColumn('moment_J_per_T', s.lowLabel, s.highLabel)),
+    ...withUnc.map((s) => stateColumn('energy_Hz_unc', s.lowLabel, s.highLabel)),
   ];
   const body: string[][] = [];
   for (let k = 0; k < fieldsT.length; k++) {
-    body.push([numCell(fieldsT[k]), ...sorted.map((s) => numCell(s.energyHz[k])), ...withMoment.map((s) => numCell(s.momentJT?.[k]))]);
+    body.push([
+      numCell(fieldsT[k]),
+      ...sorted.map((s) => numCell(s.energyHz[k])),
+      ...withMoment.map((s) => numCell(s.momentJT?.[k])),
+      ...withUnc.map((s) => numCell(s.energyUncHz?.[k])),
+    ]);
   }
   return csvTable(c, header, body);
 }
