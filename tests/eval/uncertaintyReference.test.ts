@@ -71,3 +71,17 @@ describe('GUM against a seeded Monte Carlo (NumPy, JCGM 101 style), resonance fi
     expect(rel).toBeLessThan(0.05);
   });
 });
+
+describe('built-in data carry the uncertainties their source publishes', () => {
+  it('Rb85 ground: A and g_J with their published uncertainties; the splitting 3A has u = 3 u(A)', () => {
+    const r = analyze('species Rb85\n  level ground: 5s 2S1/2\n').result!;
+    const l = r.levels[0]!;
+    // Rubidium 85 D line data compilation (rev. 2.1.6), Table 5: A = h·1.011 910 813 0(20) GHz; Table 6: g_J = 2.002 331 13(20).
+    expect(l.hyperfine!.A_Hz.uncertainty).toBeCloseTo(2, 9);
+    expect(l.g_J.used_unc).toBeCloseTo(2e-7, 15);
+    // Same compilation, Fig. 2: ground splitting 3.035 732 439 0(60) GHz.
+    expect(l.hyperfine!.intervals[0]!.interval_Hz).toBeCloseTo(3035732439.0, 0);
+    expect(l.hyperfine!.intervals[0]!.interval_Hz_unc).toBeCloseTo(6.0, 9);
+    expect(r.uncertainty_inputs!.map((i) => i.id).sort()).toEqual(['level:Rb85.ground.A', 'level:Rb85.ground.g_J', 'species:Rb85.g_I']);
+  });
+});
