@@ -85,3 +85,15 @@ describe('built-in data carry the uncertainties their source publishes', () => {
     expect(r.uncertainty_inputs!.map((i) => i.id).sort()).toEqual(['level:Rb85.ground.A', 'level:Rb85.ground.g_J', 'species:Rb85.g_I']);
   });
 });
+
+describe('where first order says nothing exact, the result says so', () => {
+  it('a term with ζ = 0(0.1) GHz at zero field: every m block is degenerate, so the note uncertainty-one-sided is raised on the level', () => {
+    const a = analyze('species Demo\n  mass = 40 u\n  level p: 3p 2P°  zeta = 0.0(1) GHz\nfield zero = 0 T\n');
+    const note = a.problems.find((p) => p.code === 'uncertainty-one-sided');
+    expect(note?.severity).toBe('info');
+    expect(note?.range.start).toEqual({ line: 2, character: 8 });
+    // The stretched state |m_L=+1, m_S=+1/2> is alone in its block: E = ζ/2 exactly, so u = u(ζ)/2 (linear).
+    const top = a.result!.terms[0]!.at_fields[0]!.exact.find((s) => s.high_label === 'm_L=+1, m_S=+1/2')!;
+    expect(top.energy_Hz_unc).toBeCloseTo(0.5e8, 3);
+  });
+});
