@@ -82,7 +82,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
       builtin: !!s.builtin,
       ...(s.massKg ? { mass_kg: { value: s.massKg.value, source: s.massKg.source } } : {}),
       I: s.twoI.value / 2,
-      g_I: { value: s.gI.value, source: s.gI.source },
+      g_I: { value: s.gI.value, source: s.gI.source, ...(s.gI.uncertainty !== undefined ? { uncertainty: s.gI.uncertainty } : {}) },
       levels: s.levels.map((l) => l.name),
       ...(s.origin ? { defined_in: s.origin.path } : {}),
     })),
