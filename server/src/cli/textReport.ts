@@ -140,7 +140,7 @@ function lineReport(l: LineResult, atFieldText: AtFieldText, diagnostics: readon
   out.push(
     ...table(
       ['offset', 'pol.', 'strength', 'lower', 'upper'],
-      at.components.map((c) => [frequencyText(c.offset_Hz, 9), polarizationSymbol(c.polarization), trimNumber(c.strength, 5), c.lower_label, c.upper_label]),
+      at.components.map((c) => [withUncertainty(c.offset_Hz, c.offset_Hz_unc, (v) => frequencyText(v, 9)), polarizationSymbol(c.polarization), trimNumber(c.strength, 5), c.lower_label, c.upper_label]),
     ).map((x) => '    ' + x),
   );
   if (l.at_fields.length > 1) out.push(`  (components at the other working fields: sublevel eval --format json)`);

@@ -231,6 +231,7 @@ export interface BeamResult {
 export interface LineComponentResult {
   /** E_upper − E_lower relative to the zero-field, hyperfine-free line centre, Hz. */
   offset_Hz: number;
+  offset_Hz_unc?: number;
   /** Absolute frequency, when both levels' energies are known. */
   absolute_Hz?: number;
   /** Branching fraction of the upper sublevel into this lower sublevel (they sum to 1 per upper sublevel). */

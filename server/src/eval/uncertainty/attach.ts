@@ -9,10 +9,11 @@ import type { EvaluationResult } from '../resultTypes';
 import { beamUncertainty } from './beamPass';
 import { fieldKey, setupInputs } from './inputs';
 import { levelUncertainty, termUncertainty } from './levelPass';
+import { lineUncertainty } from './linePass';
 import { resonanceUncertainty } from './resonancePass';
 import { setUnc } from './uncField';
 
-type Parts = Pick<EvaluationResult, 'levels' | 'terms' | 'beams' | 'resonances' | 'fields' | 'magnets'>;
+type Parts = Pick<EvaluationResult, 'levels' | 'terms' | 'beams' | 'lines' | 'resonances' | 'fields' | 'magnets'>;
 
 /** Mutates `parts`; returns the problems found (degenerate states, double roots) and the input list for the JSON. */
 export function attachUncertainty(model: SetupModel, parts: Parts, gJOf: GJLookup): { problems: Problem[]; inputs: EvaluationResult['uncertainty_inputs'] } {
@@ -31,6 +32,10 @@ export function attachUncertainty(model: SetupModel, parts: Parts, gJOf: GJLooku
   parts.beams.forEach((r, i) => {
     const b = model.beams[i];
     if (b && b.name === r.name) beamUncertainty(r, b, gJOf, inp);
+  });
+  parts.lines.forEach((r, i) => {
+    const l = model.lines[i];
+    if (l && l.name === r.name) lineUncertainty(r, l, gJOf, inp);
   });
   parts.resonances.forEach((r, i) => {
     const m = model.resonances[i];

@@ -6,18 +6,13 @@
  * At B₀ the frequency's total derivative is ∂f/∂θ alone (∂f/∂B = 0 there).
  */
 import type { Problem } from '../../format/ast';
-import { solveLevel, type LevelSpec } from '../../physics/engine';
-import { lowKey } from '../../physics/transitions/sublevelTag';
 import {
   combine,
   difference,
   hasSensitivity,
   implicitRoot,
-  levelDerivatives,
   NO_SENSITIVITY,
-  throughParams,
   type InputTable,
-  type ParamSensitivities,
   type Sensitivities,
 } from '../../physics/uncertainty';
 import type { ResonanceModel, SettingsModel } from '../../model/types';
@@ -25,29 +20,8 @@ import type { GJLookup } from '../gJLookup';
 import { engineSpec } from '../levelSpec';
 import type { MagneticTransitionResult, ResonanceResult } from '../resultTypes';
 import { fieldKey, type SetupInputs } from './inputs';
+import { statesAt, type StateSens } from './stateSens';
 import { setUnc } from './uncField';
-
-/** Per sublevel at one field: sensitivities of its energy and of its slope dE/dB, by label text and by low-field key. */
-interface StateSens {
-  energy: Sensitivities;
-  slope: Sensitivities;
-  energyHz: number;
-}
-
-function statesAt(spec: LevelSpec, fieldT: number, params: ParamSensitivities): { byText: Map<string, StateSens>; byKey: Map<string, StateSens> } {
-  const solved = solveLevel(spec, fieldT).states;
-  const d = levelDerivatives(spec, fieldT).states;
-  const byText = new Map<string, StateSens>();
-  const byKey = new Map<string, StateSens>();
-  if (d.length !== solved.length) return { byText, byKey };
-  solved.forEach((s, k) => {
-    const dk = d[k]!;
-    const v: StateSens = { energy: throughParams(dk.dE, params), slope: throughParams(dk.dSlope, params), energyHz: s.energyHz };
-    byText.set(s.low.text, v);
-    byKey.set(lowKey(s.low), v);
-  });
-  return byText.size === solved.length ? { byText, byKey } : { byText: new Map(), byKey: new Map() };
-}
 
 function transitionUnc(t: MagneticTransitionResult, states: Map<string, StateSens>, inputs: InputTable, shift?: { dB: Sensitivities }): void {
   const u = states.get(t.upper_label);
