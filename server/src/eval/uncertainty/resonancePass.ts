@@ -18,6 +18,7 @@ import {
 import type { ResonanceModel, SettingsModel } from '../../model/types';
 import type { GJLookup } from '../gJLookup';
 import { engineSpec } from '../levelSpec';
+import { fieldText } from '../quantityText';
 import type { MagneticTransitionResult, ResonanceResult } from '../resultTypes';
 import { fieldKey, type SetupInputs } from './inputs';
 import { statesAt, type StateSens } from './stateSens';
@@ -67,7 +68,7 @@ export function resonanceUncertainty(
       const fSens = difference(u.energy, l.energy);
       const dB0 = implicitRoot(p.d2f_dB2_Hz_per_T2, difference(u.slope, l.slope));
       if (!dB0) {
-        undefinedAt ??= `the field-insensitive point near ${p.field_T} T`;
+        undefinedAt ??= `the field-insensitive point near ${fieldText(p.field_T)}`;
         continue;
       }
       setUnc(p, 'field_T', dB0, inp.table);
@@ -82,7 +83,7 @@ export function resonanceUncertainty(
       if (!u || !l) continue;
       const dB = implicitRoot(x.transition.df_dB_Hz_per_T, difference(difference(u.energy, l.energy), nu));
       if (!dB) {
-        undefinedAt ??= `the resonance near ${x.field_T} T`;
+        undefinedAt ??= `the resonance near ${fieldText(x.field_T)}`;
         continue;
       }
       setUnc(x, 'field_T', dB, inp.table);
