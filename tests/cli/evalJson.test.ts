@@ -42,3 +42,45 @@ describe('sublevel eval --format json', () => {
     expect(top.energy_Hz).toBeCloseTo(expected, 0);
   });
 });
+
+describe('sublevel eval --format json with uncertain inputs (version 2)', () => {
+  const { doc } = evalJson('tests/fixtures/uncertain.sublevel');
+  it('validates against the schema and lists its independent inputs', () => {
+    expect(validate(doc)).toBe(true);
+    expect(validate.errors ?? []).toEqual([]);
+    expect(doc.version).toBe(2);
+    expect(doc.uncertainty_inputs.map((i: { id: string }) => i.id)).toEqual([
+      'field:bias', 'magnet:selector.field', 'magnet:selector.gradient', 'magnet:selector.length',
+      'level:Li7.ground.A', 'level:Li7.ground.g_J', 'level:Li7.p_term.zeta', 'level:Li7.upper.A', 'beam:main.drift', 'resonance:rf.frequency',
+    ]);
+  });
+  it('gives the beam sublevels a deflection uncertainty that follows ⟨z⟩ ∝ μ G (L1²/2 + L1 L2) (GUM, product rule)', () => {
+    const s = doc.beams[0].sublevels[0];
+    const m = doc.magnets[0];
+    const L1 = m.length_m;
+    const L2 = 0.35;
+    const lever = 0.5 * L1 * L1 + L1 * L2;
+    const rel = Math.hypot(
+      s.moment_J_per_T_unc / s.moment_J_per_T,
+      m.gradient_T_per_m_unc / m.gradient_T_per_m,
+      ((L1 + L2) * m.length_m_unc) / lever,
+      (L1 * 0.002) / lever,
+    );
+    expect(s.mean_deflection_m_unc / Math.abs(s.mean_deflection_m)).toBeCloseTo(rel, 10);
+  });
+  it('gives the term its fine-structure shifts with u = |shift/ζ| u(ζ) (linear in ζ)', () => {
+    for (const f of doc.terms[0].fine_levels) expect(f.shift_Hz_unc).toBeCloseTo(Math.abs(f.shift_Hz / 6.7e9) * 2e7, 3);
+  });
+  it('gives line components offset uncertainties from both levels and the field (stretched pair: GUM, every term linear)', () => {
+    const bias = doc.lines[0].at_fields.find((f: { source: { name: string } }) => f.source.name === 'bias');
+    const c = bias.components.find((x: { lower_label: string; upper_label: string }) => x.lower_label === 'F=2, m_F=+2' && x.upper_label === 'F=3, m_F=+3');
+    const gJu = doc.levels.find((l: { level: string }) => l.level === 'upper').g_J.used;
+    const muB = 9.2740100657e-24 / 6.62607015e-34; // CODATA 2022 μ_B/h, Hz/T
+    // E_l = (3/4) A_l + μ_B B (g_J,l/2 + 3 g_I/2); E_u = (9/4) A_u + μ_B B (3 g_J,u/2 + 3 g_I/2) (stretched states, exact at any field).
+    const u = Math.hypot(0.75 * 0.5, 2.25 * 2000, muB * (1.5 * gJu - 0.5 * 2.002301) * 3e-6, 0.5 * muB * 5e-4 * 2e-6);
+    expect(c.offset_Hz_unc).toBeCloseTo(u, 3);
+  });
+  it('gives the resonance field found an uncertainty', () => {
+    expect(doc.resonances[0].resonances[0].field_T_unc).toBeGreaterThan(0);
+  });
+});

@@ -81,3 +81,24 @@ describe('sublevel sweep', () => {
     expect(r.err).toMatch(message);
   });
 });
+
+describe('sublevel sweep with uncertain constants', () => {
+  it('adds one energy_Hz_unc column per state; at zero field u(E_F) = |∂E_F/∂A| u(A) (GUM, linear in A)', async () => {
+    const { mkdtempSync, writeFileSync } = await import('node:fs');
+    const { join } = await import('node:path');
+    const { tmpdir } = await import('node:os');
+    const file = join(mkdtempSync(join(tmpdir(), 'sweep-unc-')), 'li.sublevel');
+    writeFileSync(file, 'species Li7\n  level ground: 2s 2S1/2  A = 401.7520433(5) MHz\n');
+    const r = cli('sweep', file, '--to', '0.1 T', '--points', '3');
+    expect(r.code).toBe(0);
+    const rows = r.out.split('\n');
+    const header = rows[1]!.split('","');
+    // field_T, 8 energies, 8 moments, 8 uncertainties.
+    expect(header).toHaveLength(24);
+    expect(rows[1]).toContain('"energy_Hz_unc[F=1, m_F=+1 -> m_J=-1/2, m_I=+3/2]"');
+    const zero = rows[2]!.split(',').map(Number);
+    // E(F=1) = −5/4 A, E(F=2) = +3/4 A at zero field (interval rule, textbook): u = 0.625 Hz and 0.375 Hz.
+    expect(zero.slice(17, 20).every((u) => Math.abs(u - 0.625) < 1e-9)).toBe(true);
+    expect(zero.slice(20, 25).every((u) => Math.abs(u - 0.375) < 1e-9)).toBe(true);
+  });
+});

@@ -5,6 +5,7 @@
  * its answer, so it runs when asked for (`--crossings`), not on every sweep.
  */
 import { stateTableCsv } from '../render/csv';
+import { sweepEnergyUnc } from '../eval/uncertainty/sweepPass';
 import { engineSpec } from '../eval/levelSpec';
 import { suggestNames } from '../format/didYouMean';
 import { type EngineIssue, sweepLevel, type SweepResult } from '../physics/engine';
@@ -71,7 +72,7 @@ export function runSweep(args: ParsedArgs, ctx: CliContext): number {
   }
   // Warnings and notes of the sweep (a capped crossing search) on stderr, and in the JSON.
   for (const i of sweep.issues) ctx.io.err(diagnosticLine(file, issueProblem(i, at)));
-  const text = format === 'csv' ? sweepCsv(sweep, file, level) : jsonText(sweepJson(file, level, sweep, crossings), 1);
+  const text = format === 'csv' ? sweepCsv(sweep, file, level, sweepEnergyUnc(analysis.model, level, spec, sweep)) : jsonText(sweepJson(file, level, sweep, crossings), 1);
   if (out) {
     writeOutputFile(out, text + '\n', ctx.fsys);
     ctx.io.err(`wrote ${sweep.states.length} sublevels × ${points} fields to ${out}`);
@@ -117,8 +118,8 @@ function findLevel(file: string, model: SetupModel, name: string | undefined): L
 }
 
 /** CSV in the project's convention (docs/csv.md): field_T, energies and moments of every state, states in the documented order. */
-export function sweepCsv(s: SweepResult, file: string, level: LevelModel): string {
-  const states = s.states.map((st) => ({ lowLabel: st.low.text, highLabel: st.high.text, energyHz: st.energyHz, momentJT: st.momentJT }));
+export function sweepCsv(s: SweepResult, file: string, level: LevelModel, energyUnc?: Float64Array[]): string {
+  const states = s.states.map((st, i) => ({ lowLabel: st.low.text, highLabel: st.high.text, energyHz: st.energyHz, momentJT: st.momentJT, ...(energyUnc?.[i] ? { energyUncHz: energyUnc[i] } : {}) }));
   return stateTableCsv({ kind: 'sweep', about: [['file', file], ['level', `${level.species.name}.${level.name}`]] }, s.fieldsT, states).trimEnd();
 }
 

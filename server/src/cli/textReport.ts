@@ -1,7 +1,7 @@
 /** The human-readable report printed by `sublevel eval`. */
 import { ATOMIC_MASS_UNIT, SPEED_OF_LIGHT } from '../physics/constants';
 import { halfText } from '../eval/halves';
-import { curvatureText, frequencyText, gradientText, lengthText, percentText, sensitivityText, speedText, trimNumber } from '../eval/quantityText';
+import { curvatureText, frequencyText, gradientText, lengthText, percentText, sensitivityText, speedText, trimNumber, withUncertainty } from '../eval/quantityText';
 import { beamPositionNoise, DIP_NOISE, SENSITIVITY_NOISE } from '../eval/noiseFloors';
 import { polarizationSymbol } from '../eval/polarizationName';
 import { fieldInUnit, inWrittenUnit, workingFieldUnit } from '../eval/writtenUnit';
@@ -19,7 +19,8 @@ import { table } from './table';
 
 export function textReport(file: string, r: EvaluationResult): string[] {
   const out: string[] = [];
-  const atFieldText = (f: { source: FieldSource; field_T: number }): string => `${f.source.kind} ${f.source.name} = ${fieldInUnit(f.field_T, { unit: workingFieldUnit(r, f.source) })}`;
+  const atFieldText = (f: { source: FieldSource; field_T: number; field_T_unc?: number }): string =>
+    `${f.source.kind} ${f.source.name} = ${withUncertainty(f.field_T, f.field_T_unc, (v) => fieldInUnit(v, { unit: workingFieldUnit(r, f.source) }))}`;
   out.push(`Sublevel evaluation of ${file}`);
   out.push(`constants: ${r.constants}; g_s = ${r.settings.g_s === 2 ? '2 (textbook)' : '|g_e| (CODATA)'}; energies are E/h`);
   for (const s of r.species) {
@@ -39,9 +40,9 @@ export function textReport(file: string, r: EvaluationResult): string[] {
         ['name', 'field', 'gradient', 'length'],
         r.magnets.map((m) => [
           m.name,
-          m.field_T !== undefined ? fieldInUnit(m.field_T, { unit: m.field_unit }) : '—',
-          inWrittenUnit(m.gradient_T_per_m, 'gradient', m.gradient_unit) ?? gradientText(m.gradient_T_per_m),
-          inWrittenUnit(m.length_m, 'length', m.length_unit) ?? lengthText(m.length_m),
+          m.field_T !== undefined ? withUncertainty(m.field_T, m.field_T_unc, (v) => fieldInUnit(v, { unit: m.field_unit })) : '—',
+          m.gradient_T_per_m !== undefined ? withUncertainty(m.gradient_T_per_m, m.gradient_T_per_m_unc, (v) => inWrittenUnit(v, 'gradient', m.gradient_unit) ?? gradientText(v)) : gradientText(undefined),
+          m.length_m !== undefined ? withUncertainty(m.length_m, m.length_m_unc, (v) => inWrittenUnit(v, 'length', m.length_unit) ?? lengthText(v)) : lengthText(undefined),
         ]),
       ).map((l) => '  ' + l),
     );
@@ -65,20 +66,20 @@ function levelReport(l: LevelResult, atFieldText: AtFieldText): string[] {
   const g = l.g_J;
   const measured = g.measured ? `   measured ${trimNumber(g.measured.value, 8)} [${g.measured.source}]` : '';
   out.push(`    g_J (Landé) = ${trimNumber(g.lande, 9)}  (= ${g.lande_fraction} with g_s = 2)${measured}`);
-  out.push(`    g_J used = ${trimNumber(g.used, 9)}  [${g.used_source}]`);
+  out.push(`    g_J used = ${withUncertainty(g.used, g.used_unc, (v) => trimNumber(v, 9))}  [${g.used_source}]`);
   if (l.hyperfine) {
     const h = l.hyperfine;
-    const consts = [`A = ${frequencyText(h.A_Hz.value, 10)} [${h.A_Hz.source}]`];
-    if (h.B_Hz) consts.push(`B = ${frequencyText(h.B_Hz.value, 8)} [${h.B_Hz.source}]`);
-    if (h.C_Hz) consts.push(`C = ${frequencyText(h.C_Hz.value, 6)} [${h.C_Hz.source}]`);
+    const consts = [`A = ${withUncertainty(h.A_Hz.value, h.A_Hz.uncertainty, (v) => frequencyText(v, 10))} [${h.A_Hz.source}]`];
+    if (h.B_Hz) consts.push(`B = ${withUncertainty(h.B_Hz.value, h.B_Hz.uncertainty, (v) => frequencyText(v, 8))} [${h.B_Hz.source}]`);
+    if (h.C_Hz) consts.push(`C = ${withUncertainty(h.C_Hz.value, h.C_Hz.uncertainty, (v) => frequencyText(v, 6))} [${h.C_Hz.source}]`);
     for (const c of consts) out.push(`    ${c}`);
     out.push(
       ...table(
         ['F', 'zero-field shift', 'g_F'],
-        h.levels.map((f) => [f.F_text, frequencyText(f.shift_Hz, 10), trimNumber(f.g_F, 8)]),
+        h.levels.map((f) => [f.F_text, withUncertainty(f.shift_Hz, f.shift_Hz_unc, (v) => frequencyText(v, 10)), withUncertainty(f.g_F, f.g_F_unc, (v) => trimNumber(v, 8))]),
       ).map((x) => '      ' + x),
     );
-    for (const iv of h.intervals) out.push(`    interval F=${fraction(iv.F_lower)} → F=${fraction(iv.F_upper)}: ${frequencyText(iv.interval_Hz, 12)}`);
+    for (const iv of h.intervals) out.push(`    interval F=${fraction(iv.F_lower)} → F=${fraction(iv.F_upper)}: ${withUncertainty(iv.interval_Hz, iv.interval_Hz_unc, (v) => frequencyText(v, 12))}`);
   }
   for (const f of l.at_fields) {
     const regime = f.regime ? `; ${f.regime.verdict}${f.regime.x !== null ? `, x = ${trimNumber(f.regime.x, 3)}` : ''}` : '';
@@ -93,9 +94,9 @@ function levelReport(l: LevelResult, atFieldText: AtFieldText): string[] {
         f.exact.map((s) => [
           s.low_label,
           s.high_label,
-          frequencyText(s.energy_Hz, 10),
+          withUncertainty(s.energy_Hz, s.energy_Hz_unc, (v) => frequencyText(v, 10)),
           s.linear_energy_Hz !== undefined ? frequencyText(s.linear_energy_Hz, 10) : '—',
-          trimNumber(s.moment_bohr, 6),
+          withUncertainty(s.moment_bohr, s.moment_bohr_unc, (v) => trimNumber(v, 6)),
         ]),
       ).map((x) => '      ' + x),
     );
@@ -111,7 +112,7 @@ function termHyperfineLines(h: NonNullable<TermResult['hyperfine']>): string[] {
 
 function termReport(t: TermResult, atFieldText: AtFieldText): string[] {
   const out = ['', `  term ${t.level}: ${t.designation.configuration ? t.designation.configuration + ' ' : ''}${t.designation.unicode}   S = ${fraction(t.S)}, L = ${t.L}, ${t.zeta_Hz ? `fine structure ζ = ${frequencyText(t.zeta_Hz.value, 8)} [${t.zeta_Hz.source}]` : 'fine structure from the J-level energies'}`];
-  out.push(...table(['J', 'zero-field shift', 'g_J'], t.fine_levels.map((f) => [f.J_text, frequencyText(f.shift_Hz, 10), trimNumber(f.g_J, 8)])).map((x) => '      ' + x));
+  out.push(...table(['J', 'zero-field shift', 'g_J'], t.fine_levels.map((f) => [f.J_text, withUncertainty(f.shift_Hz, f.shift_Hz_unc, (v) => frequencyText(v, 10)), trimNumber(f.g_J, 8)])).map((x) => '      ' + x));
   if (t.hyperfine) out.push(...termHyperfineLines(t.hyperfine));
   for (const f of t.at_fields) {
     const regime = f.regime ? `; ${f.regime.verdict}${f.regime.x !== null ? `, x = ${trimNumber(f.regime.x, 3)}` : ''}` : '';
@@ -119,7 +120,7 @@ function termReport(t: TermResult, atFieldText: AtFieldText): string[] {
     out.push(
       ...table(
         ['low-field label', 'high-field label', 'energy (exact)', 'moment/μ_B'],
-        f.exact.map((s) => [s.low_label, s.high_label, frequencyText(s.energy_Hz, 10), trimNumber(s.moment_bohr, 6)]),
+        f.exact.map((s) => [s.low_label, s.high_label, withUncertainty(s.energy_Hz, s.energy_Hz_unc, (v) => frequencyText(v, 10)), withUncertainty(s.moment_bohr, s.moment_bohr_unc, (v) => trimNumber(v, 6))]),
       ).map((x) => '      ' + x),
     );
   }
@@ -149,7 +150,7 @@ function lineReport(l: LineResult, atFieldText: AtFieldText, diagnostics: readon
   out.push(
     ...table(
       ['offset', 'pol.', 'strength', 'lower', 'upper'],
-      at.components.map((c) => [frequencyText(c.offset_Hz, 9), polarizationSymbol(c.polarization), trimNumber(c.strength, 5), c.lower_label, c.upper_label]),
+      at.components.map((c) => [withUncertainty(c.offset_Hz, c.offset_Hz_unc, (v) => frequencyText(v, 9)), polarizationSymbol(c.polarization), trimNumber(c.strength, 5), c.lower_label, c.upper_label]),
     ).map((x) => '    ' + x),
   );
   if (l.at_fields.length > 1) out.push(`  (components at the other working fields: sublevel eval --format json)`);
@@ -159,13 +160,13 @@ function lineReport(l: LineResult, atFieldText: AtFieldText, diagnostics: readon
 function resonanceReport(x: ResonanceResult, atFieldText: AtFieldText): string[] {
   const [fromUnit, toUnit] = x.range_units ?? [];
   // Fields found in the range are shown in the unit family the range was written in.
-  const found = (t: number): string => fieldInUnit(t, { family: toUnit, digits: 8 });
+  const found = (t: number, u?: number): string => withUncertainty(t, u, (v) => fieldInUnit(v, { family: toUnit, digits: 8 }));
   const out = ['', `resonance ${x.name}: level ${x.level ?? '?'}${x.species ? ` (${x.species})` : ''}, searched ${fieldInUnit(x.range_T[0], { unit: fromUnit })} … ${fieldInUnit(x.range_T[1], { unit: toUnit })}`];
   const row = (t: MagneticTransitionResult): string[] => [
     `${t.lower_label} ↔ ${t.upper_label}`,
     polarizationSymbol(t.kind),
-    frequencyText(t.frequency_Hz, 12),
-    sensitivityText(t.df_dB_Hz_per_T, 7, SENSITIVITY_NOISE),
+    withUncertainty(t.frequency_Hz, t.frequency_Hz_unc, (v) => frequencyText(v, 12)),
+    withUncertainty(t.df_dB_Hz_per_T, t.df_dB_Hz_per_T_unc, (v) => sensitivityText(v, 7, SENSITIVITY_NOISE)),
     curvatureText(t.d2f_dB2_Hz_per_T2, 7),
   ];
   for (const f of x.at_fields) {
@@ -176,12 +177,12 @@ function resonanceReport(x: ResonanceResult, atFieldText: AtFieldText): string[]
     out.push(
       x.field_insensitive.length === 0
         ? '  no field-insensitive point in the range'
-        : `  field-insensitive (df/dB = 0) at: ${x.field_insensitive.map((p) => `${found(p.field_T)} (f = ${frequencyText(p.frequency_Hz, 12)})`).join(', ')}`,
+        : `  field-insensitive (df/dB = 0) at: ${x.field_insensitive.map((p) => `${found(p.field_T, p.field_T_unc)} (f = ${withUncertainty(p.frequency_Hz, p.frequency_Hz_unc, (v) => frequencyText(v, 12))})`).join(', ')}`,
     );
   }
   if (x.resonances) {
     out.push(x.resonances.length === 0 ? '  not resonant anywhere in the range' : '  resonant at:');
-    out.push(...x.resonances.map((r) => `    ${found(r.field_T)}: ${r.transition.lower_label} ↔ ${r.transition.upper_label} (${polarizationSymbol(r.transition.kind)})`));
+    out.push(...x.resonances.map((r) => `    ${found(r.field_T, r.field_T_unc)}: ${r.transition.lower_label} ↔ ${r.transition.upper_label} (${polarizationSymbol(r.transition.kind)})`));
   }
   return out;
 }
@@ -199,7 +200,7 @@ function beamReport(b: BeamResult): string[] {
   out.push(
     ...table(
       ['sublevel', 'high-field label', 'moment/μ_B', 'mean deflection', 'own peak at'],
-      b.sublevels.map((s) => [s.label, s.high_label, trimNumber(s.moment_bohr, 6), lengthText(s.mean_deflection_m, 4, noise), s.peak_m === null ? 'no atoms' : lengthText(s.peak_m, 4, noise)]),
+      b.sublevels.map((s) => [s.label, s.high_label, withUncertainty(s.moment_bohr, s.moment_bohr_unc, (v) => trimNumber(v, 6)), withUncertainty(s.mean_deflection_m, s.mean_deflection_m_unc, (v) => lengthText(v, 4, noise)), s.peak_m === null ? 'no atoms' : lengthText(s.peak_m, 4, noise)]),
     ).map((x) => '  ' + x),
   );
   out.push('  peaks on the detector:');
@@ -219,7 +220,7 @@ function beamReport(b: BeamResult): string[] {
 }
 
 type FieldSource = { kind: 'field' | 'magnet'; name: string };
-type AtFieldText = (f: { source: FieldSource; field_T: number }) => string;
+type AtFieldText = (f: { source: FieldSource; field_T: number; field_T_unc?: number }) => string;
 
 /** A quantum number given as a number (1.5) in the result, written as text (3/2). */
 function fraction(x: number): string {

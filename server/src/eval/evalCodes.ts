@@ -14,5 +14,7 @@ export const EVAL_RULES = {
   'level-not-computed': { severity: 'error', summary: 'The eigen-solver failed for a level at one working field.' },
   'document-too-large': { severity: 'error', summary: 'A file longer than the document cap; it is not checked.' },
   'too-many-statements': { severity: 'error', summary: 'A file with more statements than the cap; it is not checked.' },
+  'uncertainty-one-sided': { severity: 'info', summary: 'Uncertain states degenerate inside one block: their uncertainty is the one-sided (increasing-input) value.' },
+  'uncertainty-undefined': { severity: 'warning', summary: 'A result with uncertain inputs whose first-order uncertainty does not exist (a double root, a zero slope).' },
   'evaluation-cut-short': { severity: 'warning', summary: 'The evaluation was stopped (time limit or failure); its findings are missing.' },
 } as const satisfies Record<string, { severity: ProblemSeverity; summary: string }>;

@@ -11,6 +11,7 @@ import { gJLookup } from './gJLookup';
 import { evaluateTerm } from './termEvaluation';
 import { evaluateLine } from './lineEvaluation';
 import { evaluateResonance } from './resonanceEvaluation';
+import { attachUncertainty } from './uncertainty/attach';
 import { EVAL_RULES } from './evalCodes';
 import { evaluateLevel, type EvaluationNote, type WorkingField } from './levelEvaluation';
 import {
@@ -66,7 +67,6 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   const lineProblems: Problem[] = [];
   const lines = model.lines.map((l) => evaluateLine(l, fields, gJOf, lineProblems, model.settings));
   const resonances = model.resonances.map((r) => evaluateResonance(r, fields, model.settings, gJOf, lineProblems));
-  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems]);
   const result: EvaluationResult = {
     format: EVALUATION_FORMAT,
     version: EVALUATION_VERSION,
@@ -82,7 +82,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
       builtin: !!s.builtin,
       ...(s.massKg ? { mass_kg: { value: s.massKg.value, source: s.massKg.source } } : {}),
       I: s.twoI.value / 2,
-      g_I: { value: s.gI.value, source: s.gI.source },
+      g_I: { value: s.gI.value, source: s.gI.source, ...(s.gI.uncertainty !== undefined ? { uncertainty: s.gI.uncertainty } : {}) },
       levels: s.levels.map((l) => l.name),
       ...(s.origin ? { defined_in: s.origin.path } : {}),
     })),
@@ -98,8 +98,12 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     beams,
     lines,
     resonances,
-    diagnostics: problems.map(toDiagnosticResult),
+    diagnostics: [],
   };
+  const uncertainty = attachUncertainty(model, result, gJOf);
+  if (uncertainty.inputs) result.uncertainty_inputs = uncertainty.inputs;
+  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...uncertainty.problems]);
+  result.diagnostics = problems.map(toDiagnosticResult);
   return { result, problems };
 }
 

@@ -145,3 +145,41 @@ export function percentText(fraction: number | null | undefined, digits = 3, noi
   const v = cleanValue(fraction, noise);
   return v === undefined ? MISSING : `${trimNumber(v * 100, digits)} %`;
 }
+
+/**
+ * A value with its standard uncertainty in concise notation, `2.563009(14) GHz`: the value as
+ * `format` prints it (same unit, same prefix, so units as the user wrote them), rounded to the
+ * last digit of the uncertainty, which keeps two significant digits when it starts with 1 or 2
+ * and one otherwise (common practice). Without an uncertainty (or with 0) it is `format(value)`,
+ * so results with no uncertain input read exactly as before.
+ */
+export function withUncertainty(value: number | null | undefined, unc: number | null | undefined, format: (v: number) => string): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return MISSING;
+  const plain = format(value);
+  if (unc === null || unc === undefined || !(unc > 0) || !Number.isFinite(unc)) return plain;
+  // The unit (and prefix) come from the larger of value and uncertainty: 0.9(17) Hz/G, not 934(17254) mHz/G.
+  const ref = unc > Math.abs(value) ? unc : value;
+  const printed = unc > Math.abs(value) ? format(unc) : plain;
+  const m = /^(-?\d+(?:\.\d+)?)(?:e(-?\d+))?(.*)$/.exec(printed);
+  const shown = m ? Number(m[1]) : 0;
+  if (!m || shown === 0) return `${plain} ± ${format(unc)}`;
+  const exponent = m[2] !== undefined ? Number(m[2]) : 0;
+  const scale = unitScale(ref / (shown * 10 ** exponent), m[1]!.replace(/^-?0*\.?0*/, '').replace('.', '').length);
+  const uShown = unc / Math.abs(scale) / 10 ** exponent;
+  const lead = Math.floor(Math.log10(uShown));
+  const keep = uShown / 10 ** lead < 3 ? 2 : 1;
+  const decimals = Math.min(20, Math.max(0, keep - 1 - lead));
+  const uDigits = Math.round(uShown * 10 ** decimals);
+  const v = (value / scale / 10 ** exponent).toFixed(decimals);
+  return `${v.replace(/^-(0\.?0*)$/, '$1')}(${uDigits})${m[2] !== undefined ? `e${m[2]}` : ''}${m[3]}`;
+}
+
+/**
+ * The factor between a value and the number printed for it: a power of ten (an SI prefix, G for
+ * T) unless the unit is not decimal (inch); `ratio` carries the printed number's rounding.
+ */
+function unitScale(ratio: number, printedDigits: number): number {
+  const pow = 10 ** Math.round(Math.log10(Math.abs(ratio)));
+  if (Math.abs(ratio / pow - 1) <= 10 ** (1 - Math.max(1, printedDigits))) return pow;
+  return Number(ratio.toPrecision(Math.max(3, printedDigits - 2)));
+}

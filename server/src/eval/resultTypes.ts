@@ -6,7 +6,8 @@
 import type { Problem } from '../format/ast';
 
 export const EVALUATION_FORMAT = 'sublevel-evaluation';
-export const EVALUATION_VERSION = 1;
+/** 2: `*_unc` standard uncertainties and `uncertainty_inputs` (docs/uncertainty.md); every v1 field kept. */
+export const EVALUATION_VERSION = 2;
 
 export interface SourcedNumber {
   value: number;
@@ -17,6 +18,8 @@ export interface SourcedNumber {
 export interface GFactorResult {
   /** The g_J used for sublevel energies: the measured one if known, otherwise the LS (Landé) value. */
   used: number;
+  /** Standard uncertainty (k = 1) of `used`, when it has an uncertain input. Every `*_unc` field below: the same, in the value's unit. */
+  used_unc?: number;
   used_source: string;
   /** Landé g_J with the file's g_s choice (default CODATA |g_e|) and g_L. */
   lande: number;
@@ -33,6 +36,8 @@ export interface HyperfineLevelResult {
   /** Zero-field energy of the F level relative to the level's centre of gravity. */
   shift_Hz: number;
   g_F: number;
+  shift_Hz_unc?: number;
+  g_F_unc?: number;
 }
 
 export interface HyperfineResult {
@@ -41,7 +46,7 @@ export interface HyperfineResult {
   C_Hz?: SourcedNumber;
   levels: HyperfineLevelResult[];
   /** Adjacent F intervals, E(F_upper) − E(F_lower), in order of F. */
-  intervals: { F_lower: number; F_upper: number; interval_Hz: number }[];
+  intervals: { F_lower: number; F_upper: number; interval_Hz: number; interval_Hz_unc?: number }[];
 }
 
 export interface SublevelResult {
@@ -75,6 +80,9 @@ export interface ExactSublevelResult {
   /** μ = −∂E/∂B (Hellmann–Feynman), J/T. */
   moment_J_per_T: number;
   moment_bohr: number;
+  energy_Hz_unc?: number;
+  moment_J_per_T_unc?: number;
+  moment_bohr_unc?: number;
   /** ∂²(E/h)/∂B², Hz/T². */
   d2E_dB2_Hz_per_T2: number;
   /** The weak-field (linear) energy of the state with the same low-field label, for comparison. */
@@ -96,6 +104,7 @@ export interface FieldPointResult {
   /** The field block or magnet this field comes from. */
   source: { kind: 'field' | 'magnet'; name: string };
   field_T: number;
+  field_T_unc?: number;
   /** Weak-field (linear) energies: zero-field hyperfine shift + g m μ_B B. */
   linear: SublevelResult[];
   /** Exact energies at this field, sorted by energy. */
@@ -134,10 +143,10 @@ export interface TermResult {
   g_s: number;
   g_L: number;
   /** J levels at zero field (E_J = ζ/2 [J(J+1) − L(L+1) − S(S+1)], or the given E_J), relative to the term's centre of gravity. */
-  fine_levels: { J: number; J_text: string; shift_Hz: number; g_J: number }[];
+  fine_levels: { J: number; J_text: string; shift_Hz: number; shift_Hz_unc?: number; g_J: number }[];
   /** The term's hyperfine structure, when A_J / B_J are given (whole-term engine mode). */
   hyperfine?: TermHyperfineResult;
-  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; exact: ExactSublevelResult[]; regime?: RegimeResultJson }[];
+  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; field_T_unc?: number; exact: ExactSublevelResult[]; regime?: RegimeResultJson }[];
 }
 
 /** Radial parameters of a whole term's hyperfine Hamiltonian and the J-level constants they give (docs/engine.md). */
@@ -167,6 +176,9 @@ export interface MagnetResult {
   field_T?: number;
   gradient_T_per_m?: number;
   length_m?: number;
+  field_T_unc?: number;
+  gradient_T_per_m_unc?: number;
+  length_m_unc?: number;
   /** The units the file wrote the settings in (reports show them back in these units). */
   field_unit?: string;
   gradient_unit?: string;
@@ -179,11 +191,14 @@ export interface BeamSublevelResult {
   high_label: string;
   /** μ = −∂E/∂B at the magnet's field (exact), J/T. */
   moment_J_per_T: number;
+  moment_J_per_T_unc?: number;
   moment_bohr: number;
+  moment_bohr_unc?: number;
   /** Population, normalised over the sublevels. */
   population: number;
   /** Flux-averaged deflection at the detector, m (positive along +z for a positive moment and gradient). */
   mean_deflection_m: number;
+  mean_deflection_m_unc?: number;
   /** Maximum of this sublevel's own profile; null when it has no atoms (population 0). */
   peak_m: number | null;
 }
@@ -230,6 +245,7 @@ export interface BeamResult {
 export interface LineComponentResult {
   /** E_upper − E_lower relative to the zero-field, hyperfine-free line centre, Hz. */
   offset_Hz: number;
+  offset_Hz_unc?: number;
   /** Absolute frequency, when both levels' energies are known. */
   absolute_Hz?: number;
   /** Branching fraction of the upper sublevel into this lower sublevel (they sum to 1 per upper sublevel). */
@@ -274,6 +290,8 @@ export interface MagneticTransitionResult {
   kind: 'pi' | 'sigma+' | 'sigma-' | 'two-photon';
   frequency_Hz: number;
   df_dB_Hz_per_T: number;
+  frequency_Hz_unc?: number;
+  df_dB_Hz_per_T_unc?: number;
   d2f_dB2_Hz_per_T2: number;
   /** |<u| g_J J_q + g_I I_q |l>|²; null for two-photon transitions. */
   strength: number | null;
@@ -291,9 +309,9 @@ export interface ResonanceResult {
   range_units?: [string, string];
   at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; transitions: MagneticTransitionResult[] }[];
   /** Fields where df/dB = 0 for the chosen pair. */
-  field_insensitive?: { field_T: number; frequency_Hz: number; d2f_dB2_Hz_per_T2: number }[];
+  field_insensitive?: { field_T: number; field_T_unc?: number; frequency_Hz: number; frequency_Hz_unc?: number; d2f_dB2_Hz_per_T2: number }[];
   /** Fields where a transition (of the chosen pair, if any) is at the given frequency. */
-  resonances?: { field_T: number; transition: MagneticTransitionResult }[];
+  resonances?: { field_T: number; field_T_unc?: number; transition: MagneticTransitionResult }[];
 }
 
 export interface DiagnosticResult {
@@ -317,10 +335,12 @@ export interface EvaluationResult {
   levels: LevelResult[];
   terms: TermResult[];
   /** `field_unit`: the unit the file wrote the field in (reports show it back in that unit). */
-  fields: { name: string; field_T?: number; field_unit?: string }[];
+  fields: { name: string; field_T?: number; field_T_unc?: number; field_unit?: string }[];
   magnets: MagnetResult[];
   beams: BeamResult[];
   lines: LineResult[];
   resonances: ResonanceResult[];
   diagnostics: DiagnosticResult[];
+  /** The independent uncertain inputs (standard uncertainties `u`, k = 1); absent when there are none. */
+  uncertainty_inputs?: { id: string; label: string; value: number; u: number }[];
 }

@@ -8,7 +8,7 @@
 import { type InlayHint, InlayHintKind, type Position, type Range } from 'vscode-languageserver-types';
 import type { Analysis } from '../eval/analyze';
 import { halfText } from '../eval/halves';
-import { frequencyText, prefixedText, trimNumber } from '../eval/quantityText';
+import { frequencyText, prefixedText, trimNumber, withUncertainty } from '../eval/quantityText';
 import type { BlockNode, LevelNode } from '../format/ast';
 import { comparePositions } from '../format/positions';
 import type { SetupModel } from '../model/types';
@@ -42,14 +42,14 @@ function levelHints(analysis: Analysis, block: BlockNode, node: LevelNode, out: 
   const r = levelResult(analysis.result, level.species.name, level.name);
   if (!r) return;
   const g = r.g_J;
-  out.push(hint(node.designation.range.end, `g_J ${trimNumber(g.used, 6)}`, g.measured ? `measured g_J (${g.used_source}); Landé ${trimNumber(g.lande, 7)}` : `Landé g_J, exactly ${g.lande_fraction} with g_s = 2`));
+  out.push(hint(node.designation.range.end, `g_J ${withUncertainty(g.used, g.used_unc, (v) => trimNumber(v, 6))}`, g.measured ? `measured g_J (${g.used_source}); Landé ${trimNumber(g.lande, 7)}` : `Landé g_J, exactly ${g.lande_fraction} with g_s = 2`));
   const hf = r.hyperfine;
   if (!hf || hf.intervals.length === 0) return;
   const a = node.settings.find((s) => s.key.text === 'A');
   const at = a ? a.range.end : node.designation.range.end;
-  const label = hf.intervals.length === 1 ? `ΔE_hfs ${frequencyText(hf.intervals[0]!.interval_Hz, 6)}` : `ΔE_hfs ${hf.intervals.map((i) => frequencyText(i.interval_Hz, 4)).join(', ')}`;
+  const label = hf.intervals.length === 1 ? `ΔE_hfs ${withUncertainty(hf.intervals[0]!.interval_Hz, hf.intervals[0]!.interval_Hz_unc, (v) => frequencyText(v, 6))}` : `ΔE_hfs ${hf.intervals.map((i) => withUncertainty(i.interval_Hz, i.interval_Hz_unc, (v) => frequencyText(v, 4))).join(', ')}`;
   // F written as the hovers and reports write it: 1/2, 3/2, not 0.5, 1.5.
-  const tip = hf.intervals.map((i) => `F = ${halfText(Math.round(2 * i.F_lower))} ↔ ${halfText(Math.round(2 * i.F_upper))}: ${frequencyText(i.interval_Hz)}`).join('\n');
+  const tip = hf.intervals.map((i) => `F = ${halfText(Math.round(2 * i.F_lower))} ↔ ${halfText(Math.round(2 * i.F_upper))}: ${withUncertainty(i.interval_Hz, i.interval_Hz_unc, (v) => frequencyText(v))}`).join('\n');
   if (a) out.push(hint(at, label, tip));
   else out[out.length - 1] = { ...out[out.length - 1]!, label: `${out[out.length - 1]!.label as string}, ${label}`, tooltip: tip };
 }

@@ -140,8 +140,8 @@ function mergeBuiltin(level: LevelModel): void {
   level.energyHz ??= fromBuiltin(match.energyHz);
 }
 
-function fromBuiltin(v: { value: number; source: string } | undefined): Valued<number> | undefined {
-  return v ? { value: v.value, source: v.source } : undefined;
+function fromBuiltin(v: { value: number; source: string; uncertainty?: number } | undefined): Valued<number> | undefined {
+  return v ? { value: v.value, source: v.source, ...(v.uncertainty !== undefined ? { uncertainty: v.uncertainty } : {}) } : undefined;
 }
 
 function findBuiltinLevel(levels: readonly BuiltinLevel[], level: LevelModel): BuiltinLevel | undefined {

@@ -55,6 +55,8 @@ export interface StateSeries {
   highLabel: string;
   energyHz: ArrayLike<number>;
   momentJT?: ArrayLike<number>;
+  /** Standard uncertainty of the energy at each field, when the level has uncertain constants. */
+  energyUncHz?: ArrayLike<number>;
 }
 
 /**
@@ -82,15 +84,18 @@ export function sortedStates<T extends StateSeries>(states: readonly T[]): T[] {
 export function stateTableCsv(c: CsvContext, fieldsT: ArrayLike<number>, states: readonly StateSeries[]): string {
   const sorted = sortedStates(states);
   const withMoment = sorted.filter((s) => s.momentJT);
+  const withUnc = sorted.filter((s) => s.energyUncHz);
   const header = [
     'field_T',
     ...sorted.map((s) => stateColumn('energy_Hz', s.lowLabel, s.highLabel)),
     ...withMoment.map((s) => stateColumn('moment_J_per_T', s.lowLabel, s.highLabel)),
+    ...withUnc.map((s) => stateColumn('energy_Hz_unc', s.lowLabel, s.highLabel)),
   ];
   return numberTable(c, header, fieldsT.length, (k) => {
     const row = [fieldsT[k]!];
     for (const s of sorted) row.push(s.energyHz[k]!);
     for (const s of withMoment) row.push(s.momentJT![k]!);
+    for (const s of withUnc) row.push(s.energyUncHz![k]!);
     return row;
   });
 }

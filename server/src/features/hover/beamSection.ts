@@ -6,7 +6,7 @@
  */
 import { levelDesignationText } from '../../eval/designationText';
 import type { BeamResult, EvaluationResult, LevelResult } from '../../eval/resultTypes';
-import { lengthText, speedText, trimNumber } from '../../eval/quantityText';
+import { lengthText, speedText, trimNumber, withUncertainty } from '../../eval/quantityText';
 import { beamPositionNoise } from '../../eval/noiseFloors';
 import type { BeamModel } from '../../model/types';
 import { md, mdTable, mdTitle } from '../shared/markdown';
@@ -89,7 +89,7 @@ function results(r: BeamResult, maxRows: number, level: LevelResult | undefined)
     parts.push(
       mdTable(
         [stateHeader(scheme).replace(/^state/, 'sublevel'), 'μ/μ_B', 'population', 'mean deflection'],
-        r.sublevels.slice(0, maxRows).map((s) => [md(label(s.label)), trimNumber(s.moment_bohr, 4), trimNumber(s.population, 3), lengthText(s.mean_deflection_m, 4, noise)]),
+        r.sublevels.slice(0, maxRows).map((s) => [md(label(s.label)), withUncertainty(s.moment_bohr, s.moment_bohr_unc, (v) => trimNumber(v, 4)), trimNumber(s.population, 3), withUncertainty(s.mean_deflection_m, s.mean_deflection_m_unc, (v) => lengthText(v, 4, noise))]),
       ),
     );
   }

@@ -1,6 +1,6 @@
 /** A whole LS term written with its spin–orbit constant ζ: its J levels at zero field, their g_J and intervals. */
 import type { TermResult } from '../../eval/resultTypes';
-import { frequencyText, trimNumber } from '../../eval/quantityText';
+import { frequencyText, trimNumber, withUncertainty } from '../../eval/quantityText';
 import { halfText } from '../../eval/halves';
 import { md, mdTable, mdTitle } from '../shared/markdown';
 
@@ -8,7 +8,7 @@ export function fineStructureSection(t: TermResult): string {
   const head = `${mdTitle(`${md(t.designation.unicode)} term`)}${t.designation.configuration ? ` — ${md(t.designation.configuration)}` : ''} (S = ${halfText(Math.round(2 * t.S))}, L = ${t.L})  \n${t.zeta_Hz ? `ζ = ${frequencyText(t.zeta_Hz.value)} (${md(t.zeta_Hz.source)})` : 'J-level energies from the file'}; every J level is computed together${t.hyperfine ? ', with the hyperfine coupling inside and between them' : ''}`;
   const table = mdTable(
     ['J', 'E/h at zero field', 'g_J (Landé)'],
-    t.fine_levels.map((l) => [l.J_text, frequencyText(l.shift_Hz), trimNumber(l.g_J, 7)]),
+    t.fine_levels.map((l) => [l.J_text, withUncertainty(l.shift_Hz, l.shift_Hz_unc, (v) => frequencyText(v)), trimNumber(l.g_J, 7)]),
   );
   const intervals = t.fine_levels.slice(1).map((u, i) => `J = ${t.fine_levels[i]!.J_text} ↔ ${u.J_text}: ${frequencyText(u.shift_Hz - t.fine_levels[i]!.shift_Hz)}`);
   return [head, table, intervals.length > 0 ? `Intervals: ${intervals.join('; ')}` : ''].filter((s) => s !== '').join('\n\n');

@@ -1,13 +1,12 @@
 /** A level's zero-field hyperfine structure: F levels with their energy and g_F, and the splittings. */
 import type { LevelResult, SourcedNumber } from '../../eval/resultTypes';
 import { halfText } from '../../eval/halves';
-import { frequencyText, trimNumber } from '../../eval/quantityText';
+import { frequencyText, trimNumber, withUncertainty } from '../../eval/quantityText';
 import { md, mdTable, mdTitle } from '../shared/markdown';
 
 function constantText(name: string, c: SourcedNumber | undefined): string | undefined {
   if (!c) return undefined;
-  const unc = c.uncertainty !== undefined ? ` ± ${frequencyText(c.uncertainty, 3)}` : '';
-  return `${name} = ${frequencyText(c.value)}${unc} (${md(c.source)})`;
+  return `${name} = ${withUncertainty(c.value, c.uncertainty, (v) => frequencyText(v))} (${md(c.source)})`;
 }
 
 export function hyperfineSection(r: LevelResult): string | undefined {
@@ -21,9 +20,9 @@ export function hyperfineSection(r: LevelResult): string | undefined {
   const constants = [constantText('A', hf.A_Hz), constantText('B', hf.B_Hz), constantText('C', hf.C_Hz)].filter((x): x is string => !!x);
   const table = mdTable(
     ['F', 'E/h at zero field', 'g_F'],
-    hf.levels.map((l) => [l.F_text, frequencyText(l.shift_Hz), trimNumber(l.g_F, 6)]),
+    hf.levels.map((l) => [l.F_text, withUncertainty(l.shift_Hz, l.shift_Hz_unc, (v) => frequencyText(v)), withUncertainty(l.g_F, l.g_F_unc, (v) => trimNumber(v, 6))]),
   );
-  const splits = hf.intervals.map((i) => `F = ${halfText(Math.round(2 * i.F_lower))} ↔ ${halfText(Math.round(2 * i.F_upper))}: ${frequencyText(i.interval_Hz)}`);
+  const splits = hf.intervals.map((i) => `F = ${halfText(Math.round(2 * i.F_lower))} ↔ ${halfText(Math.round(2 * i.F_upper))}: ${withUncertainty(i.interval_Hz, i.interval_Hz_unc, (v) => frequencyText(v))}`);
   return [
     `${mdTitle('Hyperfine structure')} (I = ${halfText(twoI)}, J = ${r.J_text})  \n${constants.join('  \n')}`,
     table,

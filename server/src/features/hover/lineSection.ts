@@ -4,7 +4,7 @@
  * first; fields of equal value share one table), labelled as each level's regime at that field says.
  */
 import type { EvaluationResult, LevelResult, LineResult } from '../../eval/resultTypes';
-import { frequencyText, trimNumber } from '../../eval/quantityText';
+import { frequencyText, trimNumber, withUncertainty } from '../../eval/quantityText';
 import { polarizationSymbol } from '../../eval/polarizationName';
 import { fieldInUnit, workingFieldUnit } from '../../eval/writtenUnit';
 import type { LineModel } from '../../model/types';
@@ -48,7 +48,7 @@ function componentsSection(r: LineResult, lower: LevelResult | undefined, upper:
     const lo = labelsAt(lower, at.source);
     const up = labelsAt(upper, at.source);
     const sorted = [...at.components].sort((a, b) => b.strength - a.strength);
-    const rows = sorted.slice(0, maxRows).map((c) => [md(polarizationSymbol(c.polarization)), `${md(lo.label(c.lower_label))} → ${md(up.label(c.upper_label))}`, frequencyText(c.offset_Hz), trimNumber(c.strength, 3)]);
+    const rows = sorted.slice(0, maxRows).map((c) => [md(polarizationSymbol(c.polarization)), `${md(lo.label(c.lower_label))} → ${md(up.label(c.upper_label))}`, withUncertainty(c.offset_Hz, c.offset_Hz_unc, (v) => frequencyText(v)), trimNumber(c.strength, 3)]);
     const more = sorted.length - rows.length;
     const count = `${sorted.length} component${sorted.length === 1 ? '' : 's'}`;
     const note = labelNote({ name: lower?.level ?? 'lower', scheme: lo.scheme }, { name: upper?.level ?? 'upper', scheme: up.scheme });

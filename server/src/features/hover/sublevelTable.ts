@@ -4,7 +4,7 @@
  * and the magnetic moment; states carry the labels of the regime the level is in at that field.
  * Falls back to the linear energies when the evaluation has no exact ones.
  */
-import { fieldText, frequencyText, trimNumber } from '../../eval/quantityText';
+import { fieldText, frequencyText, trimNumber, withUncertainty } from '../../eval/quantityText';
 import { md, mdTable } from '../shared/markdown';
 import type { SublevelsAtField } from '../shared/results';
 import { labelScheme, stateHeader, stateLabel } from './regimeLabels';
@@ -33,15 +33,15 @@ export function sublevelTable(point: SublevelsAtField, maxRows: number): string 
       scheme === 'both'
         ? mdTable(
             ['low-field label', 'strong-field label', 'E/h exact', 'μ/μ_B'],
-            shown.map((s) => [md(s.low_label), md(s.high_label), frequencyText(s.energy_Hz), trimNumber(s.moment_bohr, 4)]),
+            shown.map((s) => [md(s.low_label), md(s.high_label), withUncertainty(s.energy_Hz, s.energy_Hz_unc, (v) => frequencyText(v)), withUncertainty(s.moment_bohr, s.moment_bohr_unc, (v) => trimNumber(v, 4))]),
           )
         : mdTable(
             [stateHeader(scheme), 'E/h exact', ...(linear ? ['E/h linear formula'] : []), 'μ/μ_B'],
             shown.map((s) => [
               md(stateLabel({ low: s.low_label, high: s.high_label }, scheme)),
-              frequencyText(s.energy_Hz),
+              withUncertainty(s.energy_Hz, s.energy_Hz_unc, (v) => frequencyText(v)),
               ...(linear ? [s.linear_energy_Hz !== undefined ? frequencyText(s.linear_energy_Hz) : '—'] : []),
-              trimNumber(s.moment_bohr, 4),
+              withUncertainty(s.moment_bohr, s.moment_bohr_unc, (v) => trimNumber(v, 4)),
             ]),
           );
   } else if (point.linear && point.linear.length > 0) {

@@ -6,7 +6,7 @@
 import { configurationText } from '../../eval/designationText';
 import type { LevelResult } from '../../eval/resultTypes';
 import { halfText } from '../../eval/halves';
-import { trimNumber } from '../../eval/quantityText';
+import { trimNumber, withUncertainty } from '../../eval/quantityText';
 import type { LevelModel } from '../../model/types';
 import { parseLevelDesignation } from '../../physics/configuration';
 import { allowedJ, formatTermLabel, formatTermSymbol } from '../../physics/termSymbol';
@@ -26,7 +26,7 @@ export function termSection(level: LevelModel, r: LevelResult | undefined): stri
   const lines = [head.join(' ')];
   const landeNote = `Landé ${trimNumber(g.lande, 7)} (g_s = ${g.g_s === 2 ? '2' : trimNumber(g.g_s, 12)}${g.g_L !== 1 ? `, g_L = ${trimNumber(g.g_L, 10)}` : ''})`;
   if (g.measured) {
-    lines.push(`g_J = ${trimNumber(g.used, 8)} — measured (${md(g.used_source)}); ${landeNote}; exactly ${g.lande_fraction} with g_s = 2`);
+    lines.push(`g_J = ${withUncertainty(g.used, g.used_unc, (v) => trimNumber(v, 8))} — measured (${md(g.used_source)}); ${landeNote}; exactly ${g.lande_fraction} with g_s = 2`);
   } else {
     lines.push(`g_J = ${trimNumber(g.used, 7)} — ${landeNote}; exactly ${g.lande_fraction} with g_s = 2`);
   }

@@ -18,7 +18,8 @@ import type { CleanHyperfine } from './validateSpec';
 import { hyperfineZeroFieldHz, octupoleActs, quadrupoleActs } from './zeroFieldLevels';
 import { nucleusUncoupled } from './uncoupledNucleus';
 
-function zeroFieldMatrix(s: CleanHyperfine, x: Float64Array, n: number): Float64Array {
+/** The zero-field matrix of one block (exported so derivatives can take it with unit constants). */
+export function zeroFieldMatrix(s: CleanHyperfine, x: Float64Array, n: number): Float64Array {
   const h = new Float64Array(n * n);
   for (let k = 0; k < n * n; k++) h[k] = s.A * x[k];
   const needSquare = (s.B !== 0 && quadrupoleActs(s.twoJ, s.twoI)) || (s.C !== 0 && octupoleActs(s.twoJ, s.twoI));

@@ -6,14 +6,14 @@ import { nuclearGFromMoment, publishedEnergyToHz } from './conversions';
 import { FROM_MEMORY } from './sources';
 import type { PublishedEnergy, PublishedEnergyUnit, Sourced } from './types';
 
-/** Wraps a value with its citation. */
-export function sourced<T>(value: T, source: string): Sourced<T> {
-  return { value, source };
+/** Wraps a value with its citation (and the uncertainty the citation publishes, if any). */
+export function sourced<T>(value: T, source: string, uncertainty?: number): Sourced<T> {
+  return uncertainty !== undefined ? { value, source, uncertainty } : { value, source };
 }
 
-/** A frequency published in MHz, stored in Hz. */
-export function mhz(value: number, source: string): Sourced<number> {
-  return sourced(value * 1e6, source);
+/** A frequency published in MHz, stored in Hz; the published uncertainty is in MHz too. */
+export function mhz(value: number, source: string, uncertaintyMHz?: number): Sourced<number> {
+  return sourced(value * 1e6, source, uncertaintyMHz !== undefined ? uncertaintyMHz * 1e6 : undefined);
 }
 
 /** A lifetime published in ns, stored in s. */

@@ -13,19 +13,20 @@ export const RUBIDIUM_85: BuiltinSpecies = {
   massU: sourced(84.9117897379, NIST_MASSES),
   twoI: sourced(5, STECK_RB85),
   muI: sourced(1.3530562, IAEA_MOMENTS),
-  gI: sourced(-0.00029364, STECK_RB85),
+  // Uncertainties as the compilation's tables print them (rev. 2.1.6, Tables 5 and 6).
+  gI: sourced(-0.00029364, STECK_RB85, 6.0e-10),
   levels: [
     {
       key: 'ground',
       designation: '5s 2S1/2',
-      A: mhz(1011.910813, STECK_RB85),
-      gJ: sourced(2.00233113, STECK_RB85),
+      A: mhz(1011.910813, STECK_RB85, 0.000002),
+      gJ: sourced(2.00233113, STECK_RB85, 0.0000002),
       energyHz: GROUND_ENERGY,
     },
     {
       key: 'P1/2',
       designation: '5p 2P°1/2',
-      A: mhz(120.527, STECK_RB85),
+      A: mhz(120.527, STECK_RB85, 0.056),
       gJ: sourced(0.666, STECK_RB85),
       ...energy(377.10738569, 'THz', STECK_RB85),
       vacuumWavelengthNm: sourced(794.979014933, STECK_RB85),
@@ -34,9 +35,9 @@ export const RUBIDIUM_85: BuiltinSpecies = {
     {
       key: 'P3/2',
       designation: '5p 2P°3/2',
-      A: mhz(25.002, STECK_RB85),
-      B: mhz(25.79, STECK_RB85),
-      gJ: sourced(1.3362, STECK_RB85),
+      A: mhz(25.002, STECK_RB85, 0.0099),
+      B: mhz(25.79, STECK_RB85, 0.093),
+      gJ: sourced(1.3362, STECK_RB85, 0.0013),
       ...energy(384.230406373, 'THz', STECK_RB85),
       vacuumWavelengthNm: sourced(780.241368271, STECK_RB85),
       lifetimeS: ns(26.2348, STECK_RB85),

@@ -8,6 +8,8 @@ export interface Sourced<T> {
   readonly value: T;
   /** Short citation; contains "from memory" when the value was recalled rather than read. */
   readonly source: string;
+  /** Standard uncertainty in the value's unit, only where the cited source publishes one. */
+  readonly uncertainty?: number;
 }
 
 /** Units in which level energies are published before conversion to Hz. */

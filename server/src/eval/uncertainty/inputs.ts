@@ -1,0 +1,60 @@
+/**
+ * The uncertain inputs of one setup: every value written with an uncertainty (`0.35(2) T`) and
+ * every built-in value whose source publishes one. Each is an independent input with a stable id.
+ */
+import type { SetupModel, LevelModel, Valued } from '../../model/types';
+import { NO_SENSITIVITY, type ParamSensitivities, type Sensitivities, type UncertainInput } from '../../physics/uncertainty';
+
+export interface SetupInputs {
+  table: Map<string, UncertainInput>;
+  /** Sensitivities of a working field by its source (`field:bias`, `magnet:selector`). */
+  fieldSens: Map<string, Sensitivities>;
+  magnetSens: Map<string, { gradient: Sensitivities; length: Sensitivities }>;
+  /** The level parameters' sensitivities (A, B, C, ζ, g_I and a measured g_J). */
+  levelParams: (level: LevelModel) => ParamSensitivities;
+  beamDrift: Map<string, Sensitivities>;
+  resonanceFrequency: Map<string, Sensitivities>;
+}
+
+export function fieldKey(source: { kind: 'field' | 'magnet'; name: string }): string {
+  return `${source.kind}:${source.name}`;
+}
+
+export function setupInputs(model: SetupModel): SetupInputs {
+  const table = new Map<string, UncertainInput>();
+  const add = (id: string, label: string, v: Valued<number> | undefined): Sensitivities => {
+    const u = v?.uncertainty;
+    if (!v || u === undefined || !(u > 0) || !Number.isFinite(u) || !Number.isFinite(v.value)) return NO_SENSITIVITY;
+    table.set(id, { id, label, value: v.value, u });
+    return { [id]: 1 };
+  };
+  const fieldSens = new Map<string, Sensitivities>();
+  for (const f of model.fields) fieldSens.set(fieldKey({ kind: 'field', name: f.name }), add(`field:${f.name}`, `field ${f.name}`, f.tesla));
+  const magnetSens = new Map<string, { gradient: Sensitivities; length: Sensitivities }>();
+  for (const m of model.magnets) {
+    fieldSens.set(fieldKey({ kind: 'magnet', name: m.name }), add(`magnet:${m.name}.field`, `field of magnet ${m.name}`, m.fieldT));
+    magnetSens.set(m.name, {
+      gradient: add(`magnet:${m.name}.gradient`, `gradient of magnet ${m.name}`, m.gradientTPerM),
+      length: add(`magnet:${m.name}.length`, `length of magnet ${m.name}`, m.lengthM),
+    });
+  }
+  const levelParams = new Map<LevelModel, ParamSensitivities>();
+  for (const s of model.species) {
+    const gI = add(`species:${s.name}.g_I`, `g_I of ${s.name}`, s.gI);
+    for (const l of s.levels) {
+      const id = `level:${s.name}.${l.name}`;
+      const name = `${s.name}.${l.name}`;
+      levelParams.set(l, {
+        gI,
+        A: add(`${id}.A`, `A of ${name}`, l.A),
+        B: add(`${id}.B`, `B of ${name}`, l.B),
+        C: add(`${id}.C`, `C of ${name}`, l.C),
+        zeta: add(`${id}.zeta`, `zeta of ${name}`, l.zeta),
+        gJ: add(`${id}.g_J`, `g_J of ${name}`, l.gJMeasured),
+      });
+    }
+  }
+  const beamDrift = new Map(model.beams.map((b) => [b.name, add(`beam:${b.name}.drift`, `drift of beam ${b.name}`, b.driftM)]));
+  const resonanceFrequency = new Map(model.resonances.map((r) => [r.name, add(`resonance:${r.name}.frequency`, `frequency of resonance ${r.name}`, r.frequencyHz)]));
+  return { table, fieldSens, magnetSens, levelParams: (l) => levelParams.get(l) ?? {}, beamDrift, resonanceFrequency };
+}
