@@ -2,3 +2,6 @@
 export { levenbergMarquardt, type LeastSquaresProblem, type LmOptions, type LmResult, type LmStatus } from './levenbergMarquardt';
 export { covarianceFromJacobian, correlationOf } from './covariance';
 export { fitCurve, type CurveProblem, type FitDiagnostic, type FitDiagnosticCode, type FitOutcome } from './fitCurve';
+export { spectralModel, pairExists, type SpectralParameter, type SpectralPoint, type SpectralModel } from './spectralModel';
+export { profileModel, type ProfileParameter, type ProfileSetup, type ProfileModel } from './profileModel';
+export { calibrateField, type FieldCalibration, type CalibrationRoot } from './fieldCalibration';

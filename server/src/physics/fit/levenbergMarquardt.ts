@@ -136,9 +136,9 @@ export function levenbergMarquardt(problem: LeastSquaresProblem, start: Float64A
   let status: LmStatus = 'max-iterations';
   let iterations = 0;
   let freshJacobian = true;
-  let work = new Float64Array(n * m);
-  let qtr = new Float64Array(n);
-  let rFactor = new Float64Array(m * m);
+  let work: Float64Array = new Float64Array(n * m);
+  let qtr: Float64Array = new Float64Array(n);
+  let rFactor: Float64Array = new Float64Array(m * m);
 
   while (iterations < maxIterations) {
     if (freshJacobian) {

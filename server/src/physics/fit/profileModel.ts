@@ -1,0 +1,137 @@
+/**
+ * Model of a measured detector profile: counts(x) = amplitude · P(x − offset) + background,
+ * with P the exact beam engine's detector pattern (speed law ⊗ two-slit image ⊗ aperture,
+ * sublevel moments from the Zeeman engine). Free: gradient, oven temperature, detector offset and
+ * width, the magnet's field, populations of each F (relative to the first), background; the
+ * amplitude is always free (counts have no absolute scale).
+ */
+import { detectorPattern, type PatternInput } from '../beam';
+import { solveLevel, type HyperfineLevelSpec } from '../engine';
+
+export type ProfileParameter = 'gradient' | 'temperature' | 'offset' | 'width' | 'field' | 'populations' | 'background';
+
+export interface ProfileSetup {
+  input: PatternInput;
+  /** The level and magnet field, to recompute moments when the field is free. */
+  spec: HyperfineLevelSpec;
+  magnetFieldT: number;
+  /** Twice F of each sublevel, same order as input.sublevels (for per-F populations). */
+  twoF: number[];
+}
+
+export interface ProfileModel {
+  /** Names of the fitted parameters, in order (amplitude last but one, populations expanded). */
+  names: string[];
+  start: number[];
+  scale: number[];
+  model(p: Float64Array, out: Float64Array): boolean;
+}
+
+/** Bins of the pattern grid over the scanned span. */
+const BINS = 2048;
+
+function interpolate(xs: Float64Array, ys: Float64Array, x: number): number {
+  const n = xs.length;
+  if (n === 0 || x < xs[0]! || x > xs[n - 1]!) return 0;
+  let lo = 0;
+  let hi = n - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (xs[mid]! <= x) lo = mid;
+    else hi = mid;
+  }
+  const t = xs[hi]! === xs[lo]! ? 0 : (x - xs[lo]!) / (xs[hi]! - xs[lo]!);
+  return ys[lo]! * (1 - t) + ys[hi]! * t;
+}
+
+export function profileModel(setup: ProfileSetup, positionsM: Float64Array, counts: Float64Array, free: readonly ProfileParameter[], startOffsetM = 0): ProfileModel {
+  const fs = [...new Set(setup.twoF)].sort((a, b) => a - b);
+  const names: string[] = [];
+  const start: number[] = [];
+  const scale: number[] = [];
+  const geometry = { ...setup.input.geometry };
+  delete geometry.detectorOffsetM;
+  const source = setup.input.source;
+  const firstWeight = new Map<number, number>();
+  setup.twoF.forEach((f, i) => firstWeight.set(f, Math.max(firstWeight.get(f) ?? 0, setup.input.sublevels[i]!.population)));
+  const push = (name: string, value: number, size: number): void => {
+    names.push(name);
+    start.push(value);
+    scale.push(Math.max(Math.abs(value), size));
+  };
+  for (const name of free) {
+    if (name === 'gradient') push('gradient', geometry.gradientTPerM, 1e-3);
+    else if (name === 'temperature') push('temperature', source.kind === 'effusive' ? source.temperatureK : 0, 1);
+    else if (name === 'offset') push('offset', startOffsetM, 1e-6);
+    else if (name === 'width') push('width', geometry.detectorWidthM, 1e-6);
+    else if (name === 'field') push('field', setup.magnetFieldT, 1e-6);
+    else if (name === 'background') push('background', 0, 1);
+    else if (name === 'populations') for (const f of fs.slice(1)) push(`population F=${f % 2 === 0 ? f / 2 : `${f}/2`}`, firstWeight.get(f) ?? 1, 1e-3);
+  }
+  const span = { startM: Math.min(...positionsM), endM: Math.max(...positionsM) };
+  const margin = 0.05 * (span.endM - span.startM || 1e-3);
+  const index = (n: string): number => names.indexOf(n);
+
+  const shape = (p: Float64Array): { xs: Float64Array; ys: Float64Array; offset: number; background: number } | null => {
+    const g = { ...geometry };
+    if (index('gradient') >= 0) g.gradientTPerM = p[index('gradient')]!;
+    if (index('width') >= 0) g.detectorWidthM = p[index('width')]!;
+    const offset = index('offset') >= 0 ? p[index('offset')]! : startOffsetM;
+    let src = source;
+    if (index('temperature') >= 0) {
+      if (source.kind !== 'effusive') return null;
+      src = { kind: 'effusive', temperatureK: p[index('temperature')]! };
+    }
+    let moments = setup.input.sublevels.map((s) => s.momentJT);
+    if (index('field') >= 0) {
+      const solved = solveLevel(setup.spec, p[index('field')]!);
+      if (solved.states.length !== moments.length) return null;
+      moments = solved.states.map((s) => s.momentJT);
+    }
+    const sublevels = setup.input.sublevels.map((s, i) => {
+      const f = setup.twoF[i]!;
+      const k = names.indexOf(`population F=${f % 2 === 0 ? f / 2 : `${f}/2`}`);
+      const relative = k >= 0 ? p[k]! / (firstWeight.get(f) || 1) : 1;
+      return { label: s.label, momentJT: moments[i]!, population: s.population * relative };
+    });
+    if (sublevels.some((s) => !(s.population >= 0))) return null;
+    const pattern = detectorPattern({
+      ...setup.input,
+      geometry: g,
+      source: src,
+      sublevels,
+      bins: BINS,
+      spanM: { startM: span.startM - offset - margin, endM: span.endM - offset + margin },
+    });
+    if (pattern.issues.some((i) => i.severity === 'error') || pattern.total.length === 0) return null;
+    return { xs: pattern.positionsM, ys: pattern.total, offset, background: index('background') >= 0 ? p[index('background')]! : 0 };
+  };
+
+  // The amplitude starts at its linear least-squares value for the starting shape.
+  const first = shape(Float64Array.from(start));
+  let amplitude = 1;
+  if (first) {
+    let num = 0;
+    let den = 0;
+    for (let i = 0; i < positionsM.length; i++) {
+      const v = interpolate(first.xs, first.ys, positionsM[i]! - first.offset);
+      num += v * counts[i]!;
+      den += v * v;
+    }
+    if (den > 0 && num > 0) amplitude = num / den;
+  }
+  push('amplitude', amplitude, 1e-30);
+  const ampAt = names.length - 1;
+  return {
+    names,
+    start,
+    scale,
+    model(p, out) {
+      const s = shape(p);
+      if (!s) return false;
+      const a = p[ampAt]!;
+      for (let i = 0; i < positionsM.length; i++) out[i] = a * interpolate(s.xs, s.ys, positionsM[i]! - s.offset) + s.background;
+      return true;
+    },
+  };
+}
