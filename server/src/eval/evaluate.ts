@@ -11,6 +11,7 @@ import { gJLookup } from './gJLookup';
 import { evaluateTerm } from './termEvaluation';
 import { evaluateLine } from './lineEvaluation';
 import { evaluateResonance } from './resonanceEvaluation';
+import { evaluateFit } from './fitEvaluation';
 import { EVAL_RULES } from './evalCodes';
 import { evaluateLevel, type EvaluationNote, type WorkingField } from './levelEvaluation';
 import {
@@ -66,7 +67,9 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   const lineProblems: Problem[] = [];
   const lines = model.lines.map((l) => evaluateLine(l, fields, gJOf, lineProblems));
   const resonances = model.resonances.map((r) => evaluateResonance(r, fields, model.settings, gJOf, lineProblems));
-  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems]);
+  const fitProblems: Problem[] = [];
+  const fits = model.fits.map((f) => evaluateFit(f, gJOf, fitProblems));
+  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems]);
   const result: EvaluationResult = {
     format: EVALUATION_FORMAT,
     version: EVALUATION_VERSION,
@@ -98,6 +101,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     beams,
     lines,
     resonances,
+    ...(fits.length > 0 ? { fits } : {}),
     diagnostics: problems.map(toDiagnosticResult),
   };
   return { result, problems };

@@ -3,6 +3,7 @@
  * so names carry SI units (`energy_Hz`, `field_T`) and the shape is versioned:
  * docs/schema/evaluation.schema.json describes it. Bump EVALUATION_VERSION on any breaking change.
  */
+import type { FitResult } from './fitResultTypes';
 import type { Problem } from '../format/ast';
 
 export const EVALUATION_FORMAT = 'sublevel-evaluation';
@@ -274,6 +275,8 @@ export interface ResonanceResult {
   resonances?: { field_T: number; transition: MagneticTransitionResult }[];
 }
 
+export type { FitResult } from './fitResultTypes';
+
 export interface DiagnosticResult {
   code: string;
   severity: Problem['severity'];
@@ -300,5 +303,7 @@ export interface EvaluationResult {
   beams: BeamResult[];
   lines: LineResult[];
   resonances: ResonanceResult[];
+  /** The `fit` blocks' results (docs/fit.md); absent when the file has none. */
+  fits?: FitResult[];
   diagnostics: DiagnosticResult[];
 }
