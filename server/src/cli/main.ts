@@ -7,6 +7,7 @@ import { version } from '../../../package.json';
 import { type CommandSpec, type ParsedArgs, parseCommandArgs, UsageError } from './args';
 import { checkSpec, runCheck } from './checkCommand';
 import { evalSpec, runEval } from './evalCommand';
+import { fitSpec, runFit } from './fitCommand';
 import { diagnosticLine, FileProblemError } from './fileProblems';
 import type { CliFileSystem } from './fileSystem';
 import { commandHelp, overviewHelp, usageHint } from './help';
@@ -28,6 +29,7 @@ const COMMANDS: readonly Command[] = [
   { spec: sweepSpec, run: runSweep },
   { spec: profileSpec, run: runProfile },
   { spec: renderSpec, run: runRender },
+  { spec: fitSpec, run: runFit },
 ];
 
 const SPECS = COMMANDS.map((c) => c.spec);
