@@ -73,12 +73,12 @@ function checkComplete(d: DataModel, problems: ProblemList): void {
   const at = d.nameRange;
   if (d.kind === 'profile') {
     if (!d.beam) problems.add('data-incomplete', `data '${d.name}' is a detector profile: name the beam that predicts it, beam = <name>`, at);
-    if (d.profile.length === 0 && !d.file) problems.add('data-incomplete', `data '${d.name}' has no points: write point = <position> <counts> [<error>] lines or file = "<name>.csv"`, at);
+    if (d.profile.length === 0 && !d.file) problems.add('data-incomplete', `data '${d.name}' has no usable points: write point = <position> <counts> [<error>] lines or file = "<name>.csv"`, at);
     return;
   }
   if (!d.level) problems.add('data-incomplete', `data '${d.name}' needs the level its ${d.kind}s belong to: level = <name>`, at);
   if (!d.lower || !d.upper) problems.add('data-incomplete', `data '${d.name}' needs the pair of sublevels measured: lower = <F> <m_F> and upper = <F> <m_F>`, at);
-  if (d.spectral.length === 0 && !d.file) problems.add('data-incomplete', `data '${d.name}' has no points: write point = <frequency> [at <field>] lines or file = "<name>.csv"`, at);
+  if (d.spectral.length === 0 && !d.file) problems.add('data-incomplete', `data '${d.name}' has no usable points: write point = <frequency> [at <field>] lines or file = "<name>.csv"`, at);
 }
 
 /** `point = 6834.678(5) MHz` or `point = 6834.712 MHz at 0.5 mT`. */

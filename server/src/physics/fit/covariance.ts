@@ -7,8 +7,12 @@
 import { Matrix, SingularValueDecomposition } from 'ml-matrix';
 import { qrReduce } from './householderQr';
 
-/** Below this ratio of smallest to largest singular value (scaled columns) a combination is undetermined. */
-export const SINGULAR_RATIO = 1e-10;
+/**
+ * Below this ratio of smallest to largest singular value (scaled columns) a combination is
+ * undetermined: Jacobians by central differences are good to ~1e-8 relative, so a weaker
+ * combination cannot be told from none.
+ */
+export const SINGULAR_RATIO = 1e-7;
 /** Above this |correlation| two parameters are called nearly degenerate (common practice). */
 export const NEAR_DEGENERATE_CORRELATION = 0.999;
 

@@ -17,6 +17,8 @@ export interface CurveProblem {
   sigma?: Float64Array;
   /** Predictions at `p` into `out`; false when the model cannot be evaluated there. */
   model(p: Float64Array, out: Float64Array): boolean;
+  /** Relative difference step for the Jacobian (default 6e-6). */
+  relativeStep?: number;
   /** Optional ∂model_i/∂p_j (count × p, row-major). */
   modelJacobian?(p: Float64Array, out: Float64Array): boolean;
 }
@@ -119,6 +121,7 @@ export function fitCurve(problem: CurveProblem, options: LmOptions = {}): FitOut
           }
         : {}),
       ...(problem.scale ? { scale: Float64Array.from(problem.scale) } : {}),
+      ...(problem.relativeStep ? { relativeStep: problem.relativeStep } : {}),
     },
     Float64Array.from(problem.start),
     options,
@@ -144,6 +147,7 @@ export function fitCurve(problem: CurveProblem, options: LmOptions = {}): FitOut
   const correlation = covariance ? correlationOf(covariance) : null;
 
   const notMinimum = !(lm.gradientCosine <= GRADIENT_COSINE_LIMIT);
+
   if (lm.status !== 'converged' || notMinimum) {
     const why = lm.status === 'max-iterations' ? `after ${lm.iterations} iterations` : 'no step lowers χ² any further';
     diagnostics.push({

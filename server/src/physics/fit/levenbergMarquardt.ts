@@ -16,6 +16,8 @@ export interface LeastSquaresProblem {
   jacobian?(p: Float64Array, out: Float64Array): boolean;
   /** Typical size of each parameter, for difference steps (default max(|start|, 1e-12)). */
   scale?: Float64Array;
+  /** Relative difference step (default 6e-6); a model computed on a grid needs a larger one. */
+  relativeStep?: number;
 }
 
 export interface LmOptions {
@@ -59,7 +61,7 @@ function finite(r: Float64Array): boolean {
 }
 
 /** Evaluates the Jacobian, analytic or by central differences; false when the model fails nearby. */
-function jacobianAt(problem: LeastSquaresProblem, p: Float64Array, scale: Float64Array, out: Float64Array, count: () => void): boolean {
+function jacobianAt(problem: LeastSquaresProblem, p: Float64Array, here: Float64Array, scale: Float64Array, out: Float64Array, count: () => void): boolean {
   const n = problem.count;
   const m = p.length;
   if (problem.jacobian) {
@@ -70,7 +72,7 @@ function jacobianAt(problem: LeastSquaresProblem, p: Float64Array, scale: Float6
   const minus = new Float64Array(n);
   const q = Float64Array.from(p);
   for (let j = 0; j < m; j++) {
-    const h = DIFF_STEP * Math.max(Math.abs(p[j]!), scale[j]!);
+    const h = (problem.relativeStep ?? DIFF_STEP) * Math.max(Math.abs(p[j]!), scale[j]!);
     q[j] = p[j]! + h;
     count();
     const okPlus = problem.residuals(q, plus) && finite(plus);
@@ -78,9 +80,12 @@ function jacobianAt(problem: LeastSquaresProblem, p: Float64Array, scale: Float6
     count();
     const okMinus = problem.residuals(q, minus) && finite(minus);
     q[j] = p[j]!;
-    if (!okPlus || !okMinus) return false;
-    const width = (p[j]! + h) - (p[j]! - h);
-    for (let i = 0; i < n; i++) out[i * m + j] = (plus[i]! - minus[i]!) / width;
+    if (!okPlus && !okMinus) return false;
+    // At the edge of the model's domain: a one-sided difference from the current point.
+    const hi = okPlus ? plus : here;
+    const lo = okMinus ? minus : here;
+    const width = (okPlus ? p[j]! + h : p[j]!) - (okMinus ? p[j]! - h : p[j]!);
+    for (let i = 0; i < n; i++) out[i * m + j] = (hi[i]! - lo[i]!) / width;
   }
   return true;
 }
@@ -126,7 +131,7 @@ export function levenbergMarquardt(problem: LeastSquaresProblem, start: Float64A
   tally();
   if (!problem.residuals(p, r) || !finite(r)) return fail(0);
   let chi2 = sumSquares(r);
-  if (!jacobianAt(problem, p, scale, jac, tally)) return fail(0);
+  if (!jacobianAt(problem, p, r, scale, jac, tally)) return fail(0);
 
   const diag = new Float64Array(m);
   let lambda = 1e-3;
@@ -188,7 +193,7 @@ export function levenbergMarquardt(problem: LeastSquaresProblem, start: Float64A
       chi2 = chi2Trial;
       lambda *= Math.max(1 / 3, 1 - (2 * rho - 1) ** 3);
       nu = 2;
-      if (!jacobianAt(problem, p, scale, jac, tally)) return fail(iterations);
+      if (!jacobianAt(problem, p, r, scale, jac, tally)) return fail(iterations);
       freshJacobian = true;
       if ((actualDrop <= ftol * chi2 && predictedDrop <= ftol * chi2) || tinyStep) {
         status = 'converged';

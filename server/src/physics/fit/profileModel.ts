@@ -3,7 +3,8 @@
  * with P the exact beam engine's detector pattern (speed law ⊗ two-slit image ⊗ aperture,
  * sublevel moments from the Zeeman engine). Free: gradient, oven temperature, detector offset and
  * width, the magnet's field, populations of each F (relative to the first), background; the
- * amplitude is always free (counts have no absolute scale).
+ * amplitude is always free (counts have no absolute scale). Width, temperature and populations
+ * enter by their absolute value; `sizeParameters` lists them so results are reported as sizes.
  */
 import { detectorPattern, type PatternInput } from '../beam';
 import { solveLevel, type HyperfineLevelSpec } from '../engine';
@@ -19,12 +20,20 @@ export interface ProfileSetup {
   twoF: number[];
 }
 
+/** Difference step for this model: the pattern is computed on a grid, so steps far below a bin only see its rounding. */
+export const PROFILE_RELATIVE_STEP = 1e-4;
+
 export interface ProfileModel {
   /** Names of the fitted parameters, in order (amplitude last but one, populations expanded). */
   names: string[];
   start: number[];
   scale: number[];
   model(p: Float64Array, out: Float64Array): boolean;
+}
+
+/** Parameters that enter by their absolute value. */
+export function isSizeParameter(name: string): boolean {
+  return name === 'width' || name === 'temperature' || name.startsWith('population');
 }
 
 /** Bins of the pattern grid over the scanned span. */
@@ -68,19 +77,22 @@ export function profileModel(setup: ProfileSetup, positionsM: Float64Array, coun
     else if (name === 'background') push('background', 0, 1);
     else if (name === 'populations') for (const f of fs.slice(1)) push(`population F=${f % 2 === 0 ? f / 2 : `${f}/2`}`, firstWeight.get(f) ?? 1, 1e-3);
   }
-  const span = { startM: Math.min(...positionsM), endM: Math.max(...positionsM) };
-  const margin = 0.05 * (span.endM - span.startM || 1e-3);
+  // One grid for every evaluation (shifted by the starting offset only): a grid that moved with
+  // the parameters would add its own steps to the model.
+  const margin = 0.1 * (Math.max(...positionsM) - Math.min(...positionsM) || 1e-3);
+  const grid = { startM: Math.min(...positionsM) - startOffsetM - margin, endM: Math.max(...positionsM) - startOffsetM + margin };
   const index = (n: string): number => names.indexOf(n);
 
   const shape = (p: Float64Array): { xs: Float64Array; ys: Float64Array; offset: number; background: number } | null => {
     const g = { ...geometry };
     if (index('gradient') >= 0) g.gradientTPerM = p[index('gradient')]!;
-    if (index('width') >= 0) g.detectorWidthM = p[index('width')]!;
+    // Width, temperature and populations enter by their size: a step through zero stays computable.
+    if (index('width') >= 0) g.detectorWidthM = Math.abs(p[index('width')]!);
     const offset = index('offset') >= 0 ? p[index('offset')]! : startOffsetM;
     let src = source;
     if (index('temperature') >= 0) {
       if (source.kind !== 'effusive') return null;
-      src = { kind: 'effusive', temperatureK: p[index('temperature')]! };
+      src = { kind: 'effusive', temperatureK: Math.abs(p[index('temperature')]!) };
     }
     let moments = setup.input.sublevels.map((s) => s.momentJT);
     if (index('field') >= 0) {
@@ -91,17 +103,16 @@ export function profileModel(setup: ProfileSetup, positionsM: Float64Array, coun
     const sublevels = setup.input.sublevels.map((s, i) => {
       const f = setup.twoF[i]!;
       const k = names.indexOf(`population F=${f % 2 === 0 ? f / 2 : `${f}/2`}`);
-      const relative = k >= 0 ? p[k]! / (firstWeight.get(f) || 1) : 1;
+      const relative = k >= 0 ? Math.abs(p[k]!) / (firstWeight.get(f) || 1) : 1;
       return { label: s.label, momentJT: moments[i]!, population: s.population * relative };
     });
-    if (sublevels.some((s) => !(s.population >= 0))) return null;
     const pattern = detectorPattern({
       ...setup.input,
       geometry: g,
       source: src,
       sublevels,
       bins: BINS,
-      spanM: { startM: span.startM - offset - margin, endM: span.endM - offset + margin },
+      spanM: grid,
     });
     if (pattern.issues.some((i) => i.severity === 'error') || pattern.total.length === 0) return null;
     return { xs: pattern.positionsM, ys: pattern.total, offset, background: index('background') >= 0 ? p[index('background')]! : 0 };
