@@ -16,6 +16,7 @@ const BENCHMARKS = [
   { name: 'engine', entry: 'bench/engine.bench.ts', about: 'Cs 6P3/2 2001-point sweep against NumPy (loop and blocked)' },
   { name: 'beam', entry: 'bench/beam.bench.ts', call: 'runBeamBench', about: 'detector pattern of 16 sublevels' },
   { name: 'editor', entry: 'bench/editor.bench.ts', call: 'runEditorBench', about: '2,000-line setup: edit → diagnostics, hover, cold start' },
+  { name: 'fit', entry: 'bench/fit.bench.ts', call: 'runFitBench', about: 'field calibration from one resonance; 5-parameter fit of a 4,096-point profile' },
 ];
 
 const TMP = '.bench-tmp';

@@ -11,7 +11,6 @@ import {
   calibrateField,
   fitCurve,
   isSizeParameter,
-  PROFILE_RELATIVE_STEP,
   pairExists,
   profileModel,
   spectralModel,
@@ -183,7 +182,7 @@ function fitProfile(f: FitRequestModel, gJOf: GJLookup, report: Report, failed: 
   const start = model.start.map((v, j) => (model.names[j] === 'background' ? startOf('background') ?? v : v));
   // Counts without errors: Poisson, σ² = max(counts, 1) (common practice for counting data).
   const sigma = Float64Array.from(d.profile, (p) => (withErrors === d.profile.length ? p.error! : Math.sqrt(Math.max(p.counts, 1))));
-  const fitted = fitCurve({ names: model.names, start, scale: model.scale, y: counts, sigma, model: model.model, relativeStep: PROFILE_RELATIVE_STEP });
+  const fitted = fitCurve({ names: model.names, start, scale: model.scale, y: counts, sigma, model: model.model, modelJacobian: model.jacobian });
   const outcome = { ...fitted, params: fitted.params.map((v, j) => (isSizeParameter(model.names[j]!) ? Math.abs(v) : v)) };
   const result = fromOutcome(f, outcome, model.names, start, 'profile', 'counts', undefined, report, (i) => ({
     data: d.name,

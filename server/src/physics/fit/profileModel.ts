@@ -6,7 +6,9 @@
  * amplitude is always free (counts have no absolute scale). Width, temperature and populations
  * enter by their absolute value; `sizeParameters` lists them so results are reported as sizes.
  */
-import { detectorPattern, type PatternInput } from '../beam';
+import type { PatternInput } from '../beam';
+// The pattern without peak refinement: a fit needs the density only, not off-grid peak positions.
+import { computePattern } from '../beam/detectorPattern';
 import { solveLevel, type HyperfineLevelSpec } from '../engine';
 
 export type ProfileParameter = 'gradient' | 'temperature' | 'offset' | 'width' | 'field' | 'populations' | 'background';
@@ -29,6 +31,8 @@ export interface ProfileModel {
   start: number[];
   scale: number[];
   model(p: Float64Array, out: Float64Array): boolean;
+  /** ∂model/∂p (count × p): amplitude and background exactly (the model is linear in them), the rest by central differences. */
+  jacobian(p: Float64Array, out: Float64Array): boolean;
 }
 
 /** Parameters that enter by their absolute value. */
@@ -37,7 +41,7 @@ export function isSizeParameter(name: string): boolean {
 }
 
 /** Bins of the pattern grid over the scanned span. */
-const BINS = 2048;
+const BINS = 1024;
 
 function interpolate(xs: Float64Array, ys: Float64Array, x: number): number {
   const n = xs.length;
@@ -106,14 +110,14 @@ export function profileModel(setup: ProfileSetup, positionsM: Float64Array, coun
       const relative = k >= 0 ? Math.abs(p[k]!) / (firstWeight.get(f) || 1) : 1;
       return { label: s.label, momentJT: moments[i]!, population: s.population * relative };
     });
-    const pattern = detectorPattern({
+    const pattern = computePattern({
       ...setup.input,
       geometry: g,
       source: src,
       sublevels,
       bins: BINS,
       spanM: grid,
-    });
+    }, undefined, false);
     if (pattern.issues.some((i) => i.severity === 'error') || pattern.total.length === 0) return null;
     return { xs: pattern.positionsM, ys: pattern.total, offset, background: index('background') >= 0 ? p[index('background')]! : 0 };
   };
@@ -133,15 +137,50 @@ export function profileModel(setup: ProfileSetup, positionsM: Float64Array, coun
   }
   push('amplitude', amplitude, 1e-30);
   const ampAt = names.length - 1;
+  const n = positionsM.length;
+  const m = names.length;
+  const unitShape = (p: Float64Array, out: Float64Array): boolean => {
+    const s = shape(p);
+    if (!s) return false;
+    for (let i = 0; i < n; i++) out[i] = interpolate(s.xs, s.ys, positionsM[i]! - s.offset);
+    return true;
+  };
+  const bgAt = names.indexOf('background');
   return {
     names,
     start,
     scale,
     model(p, out) {
-      const s = shape(p);
-      if (!s) return false;
+      if (!unitShape(p, out)) return false;
       const a = p[ampAt]!;
-      for (let i = 0; i < positionsM.length; i++) out[i] = a * interpolate(s.xs, s.ys, positionsM[i]! - s.offset) + s.background;
+      const bg = bgAt >= 0 ? p[bgAt]! : 0;
+      for (let i = 0; i < n; i++) out[i] = a * out[i]! + bg;
+      return true;
+    },
+    jacobian(p, out) {
+      const base = new Float64Array(n);
+      if (!unitShape(p, base)) return false;
+      const a = p[ampAt]!;
+      const plus = new Float64Array(n);
+      const minus = new Float64Array(n);
+      const q = Float64Array.from(p);
+      for (let j = 0; j < m; j++) {
+        if (j === ampAt || j === bgAt) {
+          for (let i = 0; i < n; i++) out[i * m + j] = j === ampAt ? base[i]! : 1;
+          continue;
+        }
+        const h = PROFILE_RELATIVE_STEP * Math.max(Math.abs(p[j]!), scale[j]!);
+        q[j] = p[j]! + h;
+        const okPlus = unitShape(q, plus);
+        q[j] = p[j]! - h;
+        const okMinus = unitShape(q, minus);
+        q[j] = p[j]!;
+        if (!okPlus && !okMinus) return false;
+        const hi = okPlus ? plus : base;
+        const lo = okMinus ? minus : base;
+        const width = (okPlus ? h : 0) + (okMinus ? h : 0);
+        for (let i = 0; i < n; i++) out[i * m + j] = (a * (hi[i]! - lo[i]!)) / width;
+      }
       return true;
     },
   };
