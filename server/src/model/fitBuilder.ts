@@ -9,7 +9,7 @@ import { PROFILE_PARAMETERS, SPECTRAL_PARAMETERS, type DataModel, type FitParame
 import { didYouMeanText, suggestNames } from '../format/didYouMean';
 import type { NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
-import { DEFAULT_RESONANCE_RANGE_T } from './resonanceBuilder';
+import { DEFAULT_RESONANCE_RANGE_T, readFieldRange } from './resonanceBuilder';
 import { readPartQuantity } from './settingReaders';
 
 const ALL: readonly FitParameterName[] = [...new Set<FitParameterName>([...SPECTRAL_PARAMETERS, ...PROFILE_PARAMETERS])];
@@ -63,9 +63,11 @@ export function buildFit(node: BlockNode, data: NameIndex<DataModel>, problems: 
       case 'start':
         readStarts(s, f, problems);
         break;
-      case 'range':
-        readRange(s, f, problems);
+      case 'range': {
+        const range = readFieldRange(s, problems);
+        if (range) f.rangeT = range;
         break;
+      }
       default:
         break;
     }
@@ -113,20 +115,4 @@ function readStarts(s: SettingNode, f: FitRequestModel, problems: ProblemList): 
     const v = readPartQuantity(value, START_DIMENSION[name.text], problems, name.text);
     if (v) f.starts.push({ name: name.text, value: v.value, ...(v.unit ? { unit: v.unit } : {}), range: value.range });
   }
-}
-
-function readRange(s: SettingNode, f: FitRequestModel, problems: ProblemList): void {
-  const parts = s.groups.flat();
-  if (parts.length !== 2) {
-    problems.add('resonance-range-malformed', 'write range = <from field>, <to field>, e.g. range = 0 G, 10 G', s.valueText.range);
-    return;
-  }
-  const a = readPartQuantity(parts[0]!, 'flux-density', problems, 'range');
-  const b = readPartQuantity(parts[1]!, 'flux-density', problems, 'range');
-  if (!a || !b || a.value === b.value) {
-    if (a && b) problems.add('resonance-range-malformed', 'the range starts and ends at the same field; give two different fields', s.valueText.range);
-    return;
-  }
-  const [from, to] = a.value < b.value ? [a, b] : [b, a];
-  f.rangeT = { fromT: from.value, toT: to.value, ...(from.unit ? { fromUnit: from.unit } : {}), ...(to.unit ? { toUnit: to.unit } : {}) };
 }

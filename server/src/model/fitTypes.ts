@@ -55,5 +55,5 @@ export interface FitRequestModel {
   /** Starting values in SI, with the unit written (to show results back in it). */
   starts: { name: FitParameterName; value: number; unit?: string; range: Range }[];
   /** Field range a one-point calibration searches. */
-  rangeT: { fromT: number; toT: number; fromUnit?: string; toUnit?: string };
+  rangeT: { fromT: number; toT: number; range?: Range; fromUnit?: string; toUnit?: string };
 }

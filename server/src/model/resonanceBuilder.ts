@@ -34,20 +34,8 @@ export function buildResonance(node: BlockNode, species: NameIndex<SpeciesModel>
         break;
       }
       case 'range': {
-        const parts = s.groups.flat();
-        if (parts.length !== 2) {
-          problems.add('resonance-range-malformed', 'write range = <from field>, <to field>, e.g. range = 0 G, 10 G', s.valueText.range);
-          break;
-        }
-        const a = readPartQuantity(parts[0]!, 'flux-density', problems, 'range');
-        const b = readPartQuantity(parts[1]!, 'flux-density', problems, 'range');
-        if (!a || !b) break;
-        if (a.value === b.value) {
-          problems.add('resonance-range-malformed', 'the range starts and ends at the same field; give two different fields', s.valueText.range);
-          break;
-        }
-        const [from, to] = a.value < b.value ? [a, b] : [b, a];
-        r.rangeT = { fromT: from.value, toT: to.value, range: s.valueText.range, ...(from.unit ? { fromUnit: from.unit } : {}), ...(to.unit ? { toUnit: to.unit } : {}) };
+        const range = readFieldRange(s, problems);
+        if (range) r.rangeT = range;
         break;
       }
       case 'two_photon': {
@@ -64,6 +52,24 @@ export function buildResonance(node: BlockNode, species: NameIndex<SpeciesModel>
     problems.add('resonance-incomplete', `resonance '${r.name}' names one sublevel of its pair; give both lower and upper`, node.name.range);
   }
   return r;
+}
+
+/** `range = <from>, <to>`: two different fields, in increasing order, with the units written. */
+export function readFieldRange(s: SettingNode, problems: ProblemList): ResonanceModel['rangeT'] | undefined {
+  const parts = s.groups.flat();
+  if (parts.length !== 2) {
+    problems.add('resonance-range-malformed', 'write range = <from field>, <to field>, e.g. range = 0 G, 10 G', s.valueText.range);
+    return undefined;
+  }
+  const a = readPartQuantity(parts[0]!, 'flux-density', problems, 'range');
+  const b = readPartQuantity(parts[1]!, 'flux-density', problems, 'range');
+  if (!a || !b) return undefined;
+  if (a.value === b.value) {
+    problems.add('resonance-range-malformed', 'the range starts and ends at the same field; give two different fields', s.valueText.range);
+    return undefined;
+  }
+  const [from, to] = a.value < b.value ? [a, b] : [b, a];
+  return { fromT: from.value, toT: to.value, range: s.valueText.range, ...(from.unit ? { fromUnit: from.unit } : {}), ...(to.unit ? { toUnit: to.unit } : {}) };
 }
 
 /** `level = ground` or `level = Rb87.ground`, resolved among the species. */
