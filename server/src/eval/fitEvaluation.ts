@@ -227,7 +227,7 @@ function fromOutcome(
   const n = o.model.length;
   const points = Array.from({ length: o.ok ? n : 0 }, (_, i) => {
     const p = point(i);
-    return { ...p, model: o.model[i]!, residual: o.residuals[i]! };
+    return Number.isFinite(o.model[i]!) ? { ...p, model: o.model[i]!, residual: o.residuals[i]! } : p;
   });
   return {
     name: f.name,
@@ -236,8 +236,8 @@ function fromOutcome(
     measured_unit: unit,
     ...(writtenUnit ? { measured_written_unit: writtenUnit } : {}),
     parameters,
-    ...(o.covariance ? { covariance: o.covariance } : {}),
-    ...(o.correlation ? { correlation: o.correlation } : {}),
+    ...(o.covariance && allFinite(o.covariance) ? { covariance: o.covariance } : {}),
+    ...(o.correlation && allFinite(o.correlation) ? { correlation: o.correlation } : {}),
     ...(Number.isFinite(o.chi2) ? { chi2: o.chi2 } : {}),
     dof: o.dof,
     ...(o.reducedChi2 !== null && Number.isFinite(o.reducedChi2) ? { reduced_chi2: o.reducedChi2 } : {}),
@@ -245,6 +245,11 @@ function fromOutcome(
     iterations: o.iterations,
     points,
   };
+}
+
+/** No NaN or Infinity reaches the JSON: a matrix with one is left out. */
+function allFinite(m: number[][]): boolean {
+  return m.every((row) => row.every(Number.isFinite));
 }
 
 function half(twice: number): string {
