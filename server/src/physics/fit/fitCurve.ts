@@ -10,7 +10,7 @@ export interface CurveProblem {
   /** Parameter names, for diagnostics. */
   names: readonly string[];
   start: readonly number[];
-  /** Typical size of each parameter (difference steps); default max(|start|, tiny). */
+  /** Typical size of each parameter (difference steps); default |start|, or 1 for a start of 0. */
   scale?: readonly number[];
   y: Float64Array;
   /** Standard uncertainties of y; absent: unknown, the covariance is scaled by χ²/dof (as certified reference fits are). */

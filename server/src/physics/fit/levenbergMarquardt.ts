@@ -14,7 +14,7 @@ export interface LeastSquaresProblem {
   residuals(p: Float64Array, out: Float64Array): boolean;
   /** ∂r_i/∂p_j into `out` (count × p, row-major); without it central differences are used. */
   jacobian?(p: Float64Array, out: Float64Array): boolean;
-  /** Typical size of each parameter, for difference steps (default max(|start|, 1e-12)). */
+  /** Typical size of each parameter, for difference steps (default |start|, or 1 for a start of 0). */
   scale?: Float64Array;
   /** Relative difference step (default 6e-6); a model computed on a grid needs a larger one. */
   relativeStep?: number;
@@ -114,7 +114,8 @@ export function levenbergMarquardt(problem: LeastSquaresProblem, start: Float64A
   const tally = (): void => {
     evaluations++;
   };
-  const scale = problem.scale ?? Float64Array.from(start, (v) => Math.max(Math.abs(v), 1e-12));
+  // A parameter starting at 0 has no size of its own: a unit step scale (the caller gives better ones).
+  const scale = problem.scale ?? Float64Array.from(start, (v) => (v !== 0 ? Math.abs(v) : 1));
   const p = Float64Array.from(start);
   const r = new Float64Array(n);
   const jac = new Float64Array(n * m);
