@@ -97,9 +97,10 @@ describe('panel HTML', () => {
     expect(html).not.toMatch(/\son\w+=/);
   });
 
-  it('offers the four views, three exports and the field and range choices', () => {
-    expect(html.match(/role="tab"/g)).toHaveLength(4);
+  it('offers the five views, three exports and the field and range choices', () => {
+    expect(html.match(/role="tab"/g)).toHaveLength(5);
     expect(html).toContain('data-view="resonance"');
+    expect(html).toContain('data-view="residuals"');
     expect(html).toContain('data-export="svg"');
     expect(html).toContain('data-export="csv"');
     expect(html).toContain('data-export="png"');

@@ -19,6 +19,7 @@ const VIEW_NAMES: Record<View, string> = {
   pattern: 'Detector pattern',
   lines: 'Line components',
   resonance: 'Resonance vs field',
+  residuals: 'Fit residuals',
 };
 
 function escapeHtml(s: string): string {

@@ -9,6 +9,7 @@ import { type CommandSpec, type ParsedArgs, parseCommandArgs, UsageError } from 
 import { checkSpec, runCheck } from './checkCommand';
 import { diffSpec, runDiff } from './diffCommand';
 import { evalSpec, runEval } from './evalCommand';
+import { fitSpec, runFit } from './fitCommand';
 import { diagnosticLine, FileProblemError } from './fileProblems';
 import type { CliFileSystem } from './fileSystem';
 import { commandHelp, overviewHelp, usageHint } from './help';
@@ -33,6 +34,7 @@ const COMMANDS: readonly Command[] = [
   { spec: profileSpec, run: runProfile },
   { spec: renderSpec, run: runRender },
   { spec: diffSpec, run: runDiff },
+  { spec: fitSpec, run: runFit },
 ];
 
 const SPECS = COMMANDS.map((c) => c.spec);

@@ -12,6 +12,7 @@ import { evaluateTerm } from './termEvaluation';
 import { evaluateLine } from './lineEvaluation';
 import { evaluateResonance } from './resonanceEvaluation';
 import { attachUncertainty } from './uncertainty/attach';
+import { evaluateFit } from './fitEvaluation';
 import { EVAL_RULES } from './evalCodes';
 import { evaluateLevel, type EvaluationNote, type WorkingField } from './levelEvaluation';
 import {
@@ -67,6 +68,8 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   const lineProblems: Problem[] = [];
   const lines = model.lines.map((l) => evaluateLine(l, fields, gJOf, lineProblems, model.settings));
   const resonances = model.resonances.map((r) => evaluateResonance(r, fields, model.settings, gJOf, lineProblems));
+  const fitProblems: Problem[] = [];
+  const fits = model.fits.map((f) => evaluateFit(f, gJOf, fitProblems));
   const result: EvaluationResult = {
     format: EVALUATION_FORMAT,
     version: EVALUATION_VERSION,
@@ -98,11 +101,12 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     beams,
     lines,
     resonances,
+    ...(fits.length > 0 ? { fits } : {}),
     diagnostics: [],
   };
   const uncertainty = attachUncertainty(model, result, gJOf);
   if (uncertainty.inputs) result.uncertainty_inputs = uncertainty.inputs;
-  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...uncertainty.problems]);
+  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...uncertainty.problems]);
   result.diagnostics = problems.map(toDiagnosticResult);
   return { result, problems };
 }

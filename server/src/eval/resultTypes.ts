@@ -3,6 +3,7 @@
  * so names carry SI units (`energy_Hz`, `field_T`) and the shape is versioned:
  * docs/schema/evaluation.schema.json describes it. Bump EVALUATION_VERSION on any breaking change.
  */
+import type { FitResult } from './fitResultTypes';
 import type { Problem } from '../format/ast';
 
 export const EVALUATION_FORMAT = 'sublevel-evaluation';
@@ -314,6 +315,8 @@ export interface ResonanceResult {
   resonances?: { field_T: number; field_T_unc?: number; transition: MagneticTransitionResult }[];
 }
 
+export type { FitResult } from './fitResultTypes';
+
 export interface DiagnosticResult {
   code: string;
   severity: Problem['severity'];
@@ -340,6 +343,8 @@ export interface EvaluationResult {
   beams: BeamResult[];
   lines: LineResult[];
   resonances: ResonanceResult[];
+  /** The `fit` blocks' results (docs/fit.md); absent when the file has none. */
+  fits?: FitResult[];
   diagnostics: DiagnosticResult[];
   /** The independent uncertain inputs (standard uncertainties `u`, k = 1); absent when there are none. */
   uncertainty_inputs?: { id: string; label: string; value: number; u: number }[];

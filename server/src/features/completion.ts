@@ -29,6 +29,8 @@ const BLOCK_WORD_DETAIL: Record<BlockKind, string> = {
   line: 'line <name>: <lower> -> <upper>',
   resonance: 'resonance <name> — RF/microwave transitions of a level: level, lower, upper, frequency, range',
   settings: 'settings — g_s, reduced_mass',
+  data: 'data <name> — measured points: level, kind, lower, upper, point, file, beam',
+  fit: 'fit <name> — data, free, start, range (or fit <name>: <data> -> <parameter>)',
 };
 
 function statementStart(c: LineContext): CompletionItem[] {

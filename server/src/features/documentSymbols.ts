@@ -11,6 +11,8 @@ const KIND: Record<BlockKind, SymbolKind> = {
   line: SymbolKind.Event,
   resonance: SymbolKind.Function,
   settings: SymbolKind.Module,
+  data: SymbolKind.Array,
+  fit: SymbolKind.Operator,
 };
 
 function settingSymbol(s: SettingNode): DocumentSymbol {

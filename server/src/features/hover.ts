@@ -12,6 +12,7 @@ import { DEFAULT_HOVER_OPTIONS, type HoverContext, type HoverOptions } from './h
 import { fieldSection } from './hover/fieldSection';
 import { fineStructureSection } from './hover/fineStructureSection';
 import { hyperfineSection } from './hover/hyperfineSection';
+import { fitSection } from './hover/fitSection';
 import { blockWordSection, keySection } from './hover/keySection';
 import { lineSection } from './hover/lineSection';
 import { magnetSection } from './hover/magnetSection';
@@ -111,9 +112,20 @@ function blockSections(block: BlockNode, ctx: HoverContext): string[] {
       const r = resonanceOfBlock(model, block);
       return r ? declaredSections({ kind: 'resonance', item: r }, ctx) : [];
     }
+    case 'fit':
+    case 'data':
+      return fitSectionsOf(block, ctx);
     default:
       return [];
   }
+}
+
+/** The fit a `fit` block asks for, or the fits that use a `data` block. */
+function fitSectionsOf(block: BlockNode, ctx: HoverContext): string[] {
+  const name = block.name?.text;
+  const fits = ctx.analysis.result?.fits ?? [];
+  const mine = block.kind === 'fit' ? fits.filter((f) => f.name === name) : fits.filter((f) => f.points.some((p) => p.data === name));
+  return mine.map(fitSection);
 }
 
 function referenceSections(ctx: HoverContext, pos: Position): string[] | undefined {

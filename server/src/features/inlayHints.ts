@@ -13,6 +13,7 @@ import type { BlockNode, LevelNode } from '../format/ast';
 import { comparePositions } from '../format/positions';
 import type { SetupModel } from '../model/types';
 import { beamVerdict } from './hover/beamSection';
+import { fitSummary, residualLabel } from './hover/fitSection';
 import { zeemanScaleHz } from './hover/fieldSection';
 import { lineFrequency } from './hover/lineSection';
 import { bohrForceN } from './hover/magnetSection';
@@ -95,6 +96,26 @@ function blockHints(analysis: Analysis, model: SetupModel, block: BlockNode, out
         ...(r?.g_eff !== undefined ? [`g_eff ${trimNumber(r.g_eff, 4)}`] : []),
       ];
       if (parts.length > 0) out.push(hint(block.link.to.range.end, parts.join(', '), 'line centre from the level energies; effective Landé factor of the line'));
+      break;
+    }
+    case 'fit': {
+      const f = block.name && analysis.result?.fits?.find((x) => x.name === block.name!.text);
+      const summary = f && fitSummary(f);
+      if (summary) out.push(hint(block.headerRange.end, summary, 'fitted by weighted least squares on the exact engine (sublevel fit)'));
+      break;
+    }
+    case 'data': {
+      // Each point's residual in every fit of this data, after the point.
+      const name = block.name?.text;
+      for (const f of analysis.result?.fits ?? []) {
+        for (const p of f.points) {
+          const s = block.settings.find((x) => x.key.text === 'point' && x.range.start.line === p.line);
+          const label = p.data === name && s && p.csv_line === undefined ? residualLabel(f, p) : undefined;
+          if (label && s) out.push(hint(s.range.end, label, `measured − model in fit '${f.name}'`));
+        }
+        const summary = f.points.some((p) => p.data === name) ? fitSummary(f) : undefined;
+        if (summary && block.name) out.push(hint(block.headerRange.end, `${f.name}: ${summary}`, `fit '${f.name}' of this data`));
+      }
       break;
     }
     default:

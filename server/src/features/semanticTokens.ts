@@ -29,6 +29,8 @@ const NAME_TYPE: Record<NameUse['kind'], TokenType> = {
   beam: 'variable',
   line: 'variable',
   resonance: 'variable',
+  data: 'variable',
+  fit: 'variable',
 };
 
 class Collector {

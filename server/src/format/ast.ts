@@ -66,7 +66,7 @@ export interface LevelNode {
   range: Range;
 }
 
-export type BlockKind = 'species' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'settings';
+export type BlockKind = 'species' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'settings' | 'data' | 'fit';
 
 export interface BlockNode {
   kind: BlockKind;
@@ -74,7 +74,7 @@ export interface BlockNode {
   name?: Spanned;
   /** For `field <name> = <value>`: the value written on the header line. */
   headerSetting?: SettingNode;
-  /** For `line <name>: <from> -> <to>`. */
+  /** For `line <name>: <from> -> <to>` (and the one-line `fit <name>: <data> -> <parameter>`). */
   link?: { from?: NameRef; arrow?: Range; to?: NameRef };
   settings: SettingNode[];
   levels: LevelNode[];

@@ -10,7 +10,7 @@ import { didYouMeanText, suggestNames } from './didYouMean';
 import { startsLikeNumber } from './numbers';
 import { computeLineStarts } from './positions';
 import { scanText, type ScannedLine, type Token } from './scanner';
-import { BLOCK_KEYS, BLOCK_WORDS, blocksWithKey, isBlockWord, LEVEL_KEYS, LEVEL_WORD, USE_WORD } from './schema';
+import { BLOCK_KEYS, BLOCK_WORDS, blocksWithKey, isBlockWord, LEVEL_KEYS, LEVEL_WORD, REPEATABLE_KEYS, USE_WORD } from './schema';
 import { rangeOn, readValueGroups, spanOf, type LineSpans } from './values';
 
 /** Parses a whole document. Never throws. */
@@ -190,7 +190,7 @@ class SetupParser {
     this.levelOrphan = false;
     let rest = tokens.slice(1);
     if (kind === 'field') return this.readFieldHeader(block, t0, rest);
-    if (kind === 'line') return this.readLineHeader(block, rest);
+    if (kind === 'line' || kind === 'fit') return this.readLineHeader(block, rest);
     if (kind !== 'settings' && rest[0]?.kind === 'atom') {
       block.name = this.span(rest[0]);
       rest = rest.slice(1);
@@ -260,8 +260,12 @@ class SetupParser {
         this.report('syntax-missing-arrow', `missing '->' between '${clip(fromToken.text)}' and '${clip(to.text)}'`, fromToken.end, to.start);
       }
     }
+    if (block.kind === 'fit' && !link.from && !link.arrow && !link.to) {
+      this.unexpected(rest, 'a `fit` header is `fit <name>` or, in one line, `fit <name>: <data> -> <parameter>`');
+      return;
+    }
     block.link = link;
-    this.unexpected(rest, 'a line is written `line <name>: <lower level> -> <upper level>`');
+    this.unexpected(rest, block.kind === 'fit' ? 'a one-line fit is written `fit <name>: <data> -> <parameter>`' : 'a line is written `line <name>: <lower level> -> <upper level>`');
   }
 
   /** `ground` or `Na23.ground` */
@@ -486,7 +490,7 @@ class SetupParser {
     let keys = this.seen.get(target);
     if (!keys) this.seen.set(target, (keys = new Map()));
     const first = keys.get(key);
-    if (first) {
+    if (first && !REPEATABLE_KEYS.includes(key)) {
       this.report('syntax-duplicate-setting', `'${key}' is already set on line ${first.range.start.line + 1}; this value is ignored`, ...this.keyOffsets(node), {
         related: [{ message: `'${key}' is first set here`, range: first.range }],
       });

@@ -4,7 +4,7 @@
  */
 import type { BlockKind } from './ast';
 
-export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 'beam', 'line', 'resonance', 'settings'];
+export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 'beam', 'line', 'resonance', 'settings', 'data', 'fit'];
 
 export const LEVEL_WORD = 'level';
 
@@ -23,7 +23,12 @@ export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
   line: [],
   resonance: ['level', 'lower', 'upper', 'frequency', 'range', 'two_photon'],
   settings: ['g_s', 'reduced_mass'],
+  data: ['level', 'kind', 'lower', 'upper', 'point', 'file', 'beam'],
+  fit: ['data', 'free', 'start', 'range'],
 };
+
+/** Keys that may be written more than once in a block, each line one more value (`point` in `data`). */
+export const REPEATABLE_KEYS: readonly string[] = ['point'];
 
 /** Plain words that appear inside values; never mistaken for misspelt units. */
 export const VALUE_WORDS: readonly string[] = ['oven', 'jet', 'speed', 'spread', 'apart', 'at', 'exact', 'on', 'off'];

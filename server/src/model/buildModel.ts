@@ -14,6 +14,9 @@ import { ProblemList } from './problems';
 import { applySettings, DEFAULT_SETTINGS } from './settingsBuilder';
 import { buildSpecies } from './speciesBuilder';
 import { buildResonance } from './resonanceBuilder';
+import { buildData } from './dataBuilder';
+import { buildFit } from './fitBuilder';
+import type { DataModel, FitRequestModel } from './fitTypes';
 import type { SetupSources } from './sources';
 import type { BeamModel, FieldModel, LineModel, MagnetModel, NameUse, ResonanceModel, SetupModel, SpeciesModel, UsedFileModel } from './types';
 import { resolveUses, rootUseContext, type UseContext } from './useResolver';
@@ -76,6 +79,19 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
       if (r) resonances.declare(r, problems);
     }
   }
+  // Data name beams and levels; fits name data: so they come last.
+  const data = new NameIndex<DataModel>('data', names);
+  const fits = new NameIndex<FitRequestModel>('fit', names);
+  for (const block of doc.blocks) {
+    if (block.kind !== 'data') continue;
+    const d = buildData(block, { species, beams, sources }, names, problems);
+    if (d) data.declare(d, problems);
+  }
+  for (const block of doc.blocks) {
+    if (block.kind !== 'fit') continue;
+    const f = buildFit(block, data, problems);
+    if (f) fits.declare(f, problems);
+  }
   const model: SetupModel = {
     doc,
     uses: used,
@@ -85,6 +101,8 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
     beams: [...beams.all(), ...beamsWithoutName],
     lines: lines.all(),
     resonances: resonances.all(),
+    data: data.all(),
+    fits: fits.all(),
     settings,
     names,
     problems: problems.items,

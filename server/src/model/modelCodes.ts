@@ -64,6 +64,16 @@ export const MODEL_RULES = {
   'use-not-setup-file': { severity: 'error', summary: 'A `use` path that does not name a .sublevel file (it is not read).' },
   'use-outside-root': { severity: 'error', summary: 'A `use` path outside the workspace folder or root (it is not read).' },
   'use-file-too-large': { severity: 'error', summary: 'A used file larger than the cap for used files (it is not read).' },
+  'data-incomplete': { severity: 'error', summary: 'A data block lacks its kind, level, pair, beam or points.' },
+  'data-point-malformed': { severity: 'error', summary: 'A data point not written as the kind needs (frequency [at field], or position counts [error]).' },
+  'data-counts-invalid': { severity: 'error', summary: 'Detector counts or errors that are negative, zero (errors) or not numbers.' },
+  'data-file-missing': { severity: 'error', summary: 'A data file that cannot be read.' },
+  'data-file-refused': { severity: 'error', summary: 'A data file that is not a .csv inside the workspace folder or root (it is not read).' },
+  'data-file-malformed': { severity: 'error', summary: 'A data file with a bad header or a line that cannot be read (reported with its line).' },
+  'fit-incomplete': { severity: 'error', summary: 'A fit without data or without free parameters.' },
+  'fit-parameter-unknown': { severity: 'error', summary: 'A free parameter that is not one of the fit parameters.' },
+  'fit-parameter-not-applicable': { severity: 'error', summary: 'A free parameter that the data named cannot determine.' },
+  'fit-start-malformed': { severity: 'error', summary: 'A starting value not written as <parameter> <value>.' },
 } as const satisfies Record<string, RuleInfo>;
 
 export type ModelCode = keyof typeof MODEL_RULES;

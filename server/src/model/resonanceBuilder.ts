@@ -3,7 +3,7 @@ import type { BlockNode, SettingNode } from '../format/ast';
 import { resolveLevel, type NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
 import { readPartQuantity, readSettingQuantity, readSettingWord, singlePart } from './settingReaders';
-import type { NameUse, ResonanceModel, SpeciesModel, SublevelName } from './types';
+import type { LevelModel, NameUse, ResonanceModel, SpeciesModel, SublevelName } from './types';
 
 /** Default search range when the file gives none: wide enough for electron-spin resonance at X band. */
 export const DEFAULT_RESONANCE_RANGE_T = { fromT: 0, toT: 1 };
@@ -17,12 +17,7 @@ export function buildResonance(node: BlockNode, species: NameIndex<SpeciesModel>
   for (const s of node.settings) {
     switch (s.key.text) {
       case 'level': {
-        const part = singlePart(s, problems, 'level name');
-        if (!part) break;
-        const dot = part.text.indexOf('.');
-        const name = dot > 0 ? { text: part.text.slice(dot + 1), range: part.range } : part;
-        const qualifier = dot > 0 ? { text: part.text.slice(0, dot), range: part.range } : undefined;
-        const lv = resolveLevel(qualifier ? { qualifier, name } : { name }, species, undefined, uses, problems);
+        const lv = readLevelSetting(s, species, uses, problems);
         if (lv) r.level = lv;
         break;
       }
@@ -39,20 +34,8 @@ export function buildResonance(node: BlockNode, species: NameIndex<SpeciesModel>
         break;
       }
       case 'range': {
-        const parts = s.groups.flat();
-        if (parts.length !== 2) {
-          problems.add('resonance-range-malformed', 'write range = <from field>, <to field>, e.g. range = 0 G, 10 G', s.valueText.range);
-          break;
-        }
-        const a = readPartQuantity(parts[0]!, 'flux-density', problems, 'range');
-        const b = readPartQuantity(parts[1]!, 'flux-density', problems, 'range');
-        if (!a || !b) break;
-        if (a.value === b.value) {
-          problems.add('resonance-range-malformed', 'the range starts and ends at the same field; give two different fields', s.valueText.range);
-          break;
-        }
-        const [from, to] = a.value < b.value ? [a, b] : [b, a];
-        r.rangeT = { fromT: from.value, toT: to.value, range: s.valueText.range, ...(from.unit ? { fromUnit: from.unit } : {}), ...(to.unit ? { toUnit: to.unit } : {}) };
+        const range = readFieldRange(s, problems);
+        if (range) r.rangeT = range;
         break;
       }
       case 'two_photon': {
@@ -71,8 +54,36 @@ export function buildResonance(node: BlockNode, species: NameIndex<SpeciesModel>
   return r;
 }
 
+/** `range = <from>, <to>`: two different fields, in increasing order, with the units written. */
+export function readFieldRange(s: SettingNode, problems: ProblemList): ResonanceModel['rangeT'] | undefined {
+  const parts = s.groups.flat();
+  if (parts.length !== 2) {
+    problems.add('resonance-range-malformed', 'write range = <from field>, <to field>, e.g. range = 0 G, 10 G', s.valueText.range);
+    return undefined;
+  }
+  const a = readPartQuantity(parts[0]!, 'flux-density', problems, 'range');
+  const b = readPartQuantity(parts[1]!, 'flux-density', problems, 'range');
+  if (!a || !b) return undefined;
+  if (a.value === b.value) {
+    problems.add('resonance-range-malformed', 'the range starts and ends at the same field; give two different fields', s.valueText.range);
+    return undefined;
+  }
+  const [from, to] = a.value < b.value ? [a, b] : [b, a];
+  return { fromT: from.value, toT: to.value, range: s.valueText.range, ...(from.unit ? { fromUnit: from.unit } : {}), ...(to.unit ? { toUnit: to.unit } : {}) };
+}
+
+/** `level = ground` or `level = Rb87.ground`, resolved among the species. */
+export function readLevelSetting(s: SettingNode, species: NameIndex<SpeciesModel>, uses: NameUse[], problems: ProblemList): LevelModel | undefined {
+  const part = singlePart(s, problems, 'level name');
+  if (!part) return undefined;
+  const dot = part.text.indexOf('.');
+  const name = dot > 0 ? { text: part.text.slice(dot + 1), range: part.range } : part;
+  const qualifier = dot > 0 ? { text: part.text.slice(0, dot), range: part.range } : undefined;
+  return resolveLevel(qualifier ? { qualifier, name } : { name }, species, undefined, uses, problems);
+}
+
 /** `lower = 1 -1` (F and m_F; J and m_J for a term), also written `1, -1`. */
-function readSublevelName(s: SettingNode, problems: ProblemList): SublevelName | undefined {
+export function readSublevelName(s: SettingNode, problems: ProblemList): SublevelName | undefined {
   const parts = s.groups.flat();
   const bad = (): undefined => {
     problems.add('resonance-sublevel-malformed', `write ${s.key.text} = <F> <m_F>, e.g. ${s.key.text} = 2 +1 (F and m_F of the low-field label)`, s.valueText.range);

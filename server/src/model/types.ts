@@ -7,6 +7,7 @@ import type { BlockNode, LevelNode, Problem, Range, SettingNode, SetupDocument, 
 import type { Configuration } from '../physics/configuration';
 import type { TermSymbol } from '../physics/termSymbol';
 import type { BuiltinSpecies } from '../physics/species';
+import type { DataModel, FitRequestModel } from './fitTypes';
 
 /** A value and its origin: `file` (with the setting's range) or a citation of a published source. */
 export interface Valued<T> {
@@ -171,7 +172,7 @@ export interface SettingsModel {
 
 /** A place in the file that names something, for go-to-definition, references and rename. */
 export interface NameUse {
-  kind: 'species' | 'level' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance';
+  kind: 'species' | 'level' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'data' | 'fit';
   name: string;
   range: Range;
   /** The declaration it resolves to, if any; `uri` is set when it is declared in another file (through `use`). */
@@ -200,6 +201,9 @@ export interface SetupModel {
   beams: BeamModel[];
   lines: LineModel[];
   resonances: ResonanceModel[];
+  /** Measured points (`data` blocks) and the fits asked of them (`fit` blocks); see docs/fit.md. */
+  data: DataModel[];
+  fits: FitRequestModel[];
   settings: SettingsModel;
   names: NameUse[];
   /** Problems found while building the model (the parser's own are in doc.problems). */

@@ -10,12 +10,12 @@ import type { LevelsViewData, LinesViewData, PatternViewData, ResonanceViewData 
 
 /** What a table is about; written as `# sublevel <kind>: key=value; …` on the first line. */
 export interface CsvContext {
-  kind: 'levels' | 'sweep' | 'pattern' | 'profile' | 'lines' | 'resonance';
+  kind: 'levels' | 'sweep' | 'pattern' | 'profile' | 'lines' | 'resonance' | 'fit';
   /** key/value pairs in order, e.g. ['file', 'a.sublevel'], ['level', 'Rb87.ground'], ['field', 'trap 3.23e-4 T']. */
   about: [string, string | undefined][];
 }
 
-function textCell(s: string): string {
+export function textCell(s: string): string {
   let v = String(s);
   if (/^[=+@\t\r]/.test(v) || /^-(?![\d.])/.test(v)) v = `'${v}`;
   return /[",\r\n]|^\s|\s$/.test(v) ? `"${v.replace(/"/g, '""')}"` : v;

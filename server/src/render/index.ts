@@ -17,5 +17,7 @@ export { renderLevels } from './levels';
 export { renderPattern } from './pattern';
 export { renderLines } from './lines';
 export { renderResonance } from './resonance';
+export { renderResiduals, type ResidualsViewData } from './residuals';
+export { fitCsv } from './fitCsv';
 export { levelsCsv, linesCsv, patternCsv, resonanceCsv } from './csv';
 export { escapeXml } from './svgText';

@@ -8,13 +8,14 @@ import { gJLookup } from '../eval/gJLookup';
 import { workingFields } from '../eval/evaluate';
 import type { BeamModel, LevelModel, SetupModel } from '../model/types';
 import type { WorkingField } from '../eval/levelEvaluation';
-import { levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, renderResonance, resonanceCsv, type FieldUnit, type RenderTheme } from '../render';
+import { fitCsv, levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, renderResiduals, renderResonance, resonanceCsv, type FieldUnit, type RenderTheme } from '../render';
+import { residualsView } from './residualsView';
 import { resonanceView } from './resonanceView';
 import { lineFieldIndex, linesView } from './linesView';
 import { levelsView } from './levelsView';
 import { patternView } from './patternView';
 
-export type DiagramView = 'levels' | 'pattern' | 'lines' | 'resonance';
+export type DiagramView = 'levels' | 'pattern' | 'lines' | 'resonance' | 'residuals';
 
 export interface DiagramRequest {
   view: DiagramView;
@@ -27,6 +28,7 @@ export interface DiagramRequest {
   beam?: BeamModel;
   lineName?: string;
   resonanceName?: string;
+  fitName?: string;
   /** Levels view: field range and axis unit chosen by the user (CLI --from/--to/--unit, panel range control). */
   fromT?: number;
   toT?: number;
@@ -77,6 +79,14 @@ function drawn(analysis: Analysis, model: SetupModel, req: DiagramRequest): Diag
     if ('problem' in v) return { ok: false, message: v.problem };
     const about: [string, string][] = [['file', req.source ?? ''], ['resonance', r.name]];
     return { ok: true, title: v.title, svg: renderResonance(v, theme), csv: resonanceCsv(v, about) };
+  }
+  if (req.view === 'residuals') {
+    const fits = analysis.result?.fits ?? [];
+    const f = fits.find((x) => x.name === req.fitName) ?? fits.find((x) => contains(model.fits.find((m) => m.name === x.name)?.node.range ?? NOWHERE, req.line)) ?? fits.find((x) => x.kind !== 'calibration') ?? fits[0];
+    if (!f) return { ok: false, message: 'No fit to draw: add a `data` block and a `fit` block (see docs/fit.md).' };
+    const v = residualsView(f);
+    if (!v) return { ok: false, message: f.kind === 'calibration' ? `Fit '${f.name}' is a one-resonance calibration: its fields are in the hover, there are no residuals.` : `Fit '${f.name}' has no fitted points; see the Problems view.` };
+    return { ok: true, title: v.title, svg: renderResiduals(v, theme), csv: fitCsv([f], req.source ?? '') };
   }
   const lines = analysis.result?.lines ?? [];
   const line = lines.find((l) => l.name === req.lineName) ?? lines.find((l) => contains(model.lines.find((m) => m.name === l.name)?.node.range ?? NOWHERE, req.line)) ?? lines[0];

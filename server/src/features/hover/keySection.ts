@@ -10,6 +10,8 @@ const BLOCK_WORDS: Record<BlockKind, string> = {
   line: 'an electric-dipole line between two levels of one species',
   resonance: 'magnetic-dipole (RF/microwave) transitions between the sublevels of one level: frequencies, field sensitivity, field-insensitive points and resonance fields',
   settings: 'file-wide choices: g_s (exact or 2) and reduced_mass (on or off)',
+  data: 'measured points: resonance frequencies or level intervals of a pair of sublevels, or a detector profile; written here or read from a CSV file beside the setup',
+  fit: 'a weighted least-squares fit of data on the exact engine: which parameters are free and where they start',
 };
 
 const LEVEL_KEYS: Record<string, string> = {
@@ -45,6 +47,17 @@ const BLOCK_KEYS: Record<string, string> = {
   'resonance.frequency': 'a source frequency: the fields where a transition is resonant with it are found',
   'resonance.range': 'the field range searched: <from>, <to>, e.g. 0 G, 10 G',
   'resonance.two_photon': 'on: also two-photon transitions (Δm = ±2)',
+  'data.level': 'the level the resonances or intervals belong to (resonance and interval data)',
+  'data.kind': 'resonance (magnetic-dipole pair), interval (any pair of sublevels) or profile (detector counts against position)',
+  'data.lower': 'one sublevel of the pair by its low-field label, F and m_F',
+  'data.upper': 'the other sublevel of the pair, F and m_F',
+  'data.point': 'one measured point: <frequency>[(u)] [at <field>], or for a profile <position> <counts> [<error>]',
+  'data.file': 'a CSV file beside the setup with the points (a header names the columns and their units)',
+  'data.beam': 'the beam whose detector pattern a profile is compared with',
+  'fit.data': 'the data blocks fitted together, comma separated',
+  'fit.free': 'free parameters: field, g_J, A, B (resonances and intervals); gradient, temperature, offset, width, field, populations, background (profiles)',
+  'fit.start': 'starting values, e.g. field 3 G, A 3417 MHz (defaults: the setup\'s values)',
+  'fit.range': 'field range searched by a one-point field calibration: <from>, <to>',
   'settings.g_s': 'electron spin g-factor in the Landé formula: exact (CODATA) or 2 (textbook fractions)',
   'settings.reduced_mass': 'on: g_L = 1 − m_e/M instead of 1',
 };

@@ -1,0 +1,57 @@
+/**
+ * Fitted values as text: `value(uncertainty) unit` in concise notation, two digits of the
+ * uncertainty, in the unit the file wrote or an SI prefix that keeps the number readable.
+ * Numbers go through the one formatter (quantityText.ts); nothing prints NaN or Infinity.
+ */
+import { convertSI, type Dimension } from '../format/units';
+import type { FitParameterResult } from './fitResultTypes';
+import { cleanValue, fieldText, frequencyText, gradientText, lengthText, MISSING, trimNumber } from './quantityText';
+import { displayUnit } from './writtenUnit';
+
+const DIMENSION: Readonly<Record<string, Dimension>> = { T: 'flux-density', Hz: 'frequency-like', m: 'length', 'T/m': 'gradient', K: 'temperature' };
+
+/** The display unit and its size in SI for a value: the written unit, else the prefix `sample` (a formatted text) chose. */
+function displayScale(si: number, unit: string, written: string | undefined): { unit: string; perUnit: number } {
+  const dim = DIMENSION[unit];
+  if (!dim) return { unit, perUnit: 1 };
+  if (written) {
+    const inWritten = convertSI(1, dim, written);
+    if (inWritten !== undefined && inWritten > 0) return { unit: displayUnit(written), perUnit: 1 / inWritten };
+  }
+  const sample = unit === 'T' ? fieldText(si) : unit === 'Hz' ? frequencyText(si) : unit === 'm' ? lengthText(si) : unit === 'T/m' ? gradientText(si) : `${trimNumber(si)} ${unit}`;
+  const shown = sample.split(' ').slice(1).join(' ');
+  const back = convertSI(1, dim, shown.replace('µ', 'u'));
+  return back !== undefined && back > 0 ? { unit: shown, perUnit: 1 / back } : { unit, perUnit: 1 };
+}
+
+/** `2.152279(54) G`: the value rounded where its uncertainty's second digit falls. */
+export function valueWithUncertaintyText(si: number | null | undefined, uncertainty: number | null | undefined, unit: string, written?: string): string {
+  const v = cleanValue(si);
+  if (v === undefined) return MISSING;
+  const { unit: shownUnit, perUnit } = displayScale(v, unit, written);
+  const x = v / perUnit;
+  const suffix = shownUnit ? ` ${shownUnit}` : '';
+  const u = cleanValue(uncertainty);
+  if (u === undefined || u <= 0) return `${trimNumber(x, 7)}${suffix}`;
+  const du = u / perUnit;
+  const decimals = Math.max(0, 1 - Math.floor(Math.log10(du)));
+  if (decimals > 12) return `${trimNumber(x, 7)}${suffix}`;
+  const digits = Math.round(du * 10 ** decimals);
+  if (decimals === 0) return `${trimNumber(Math.round(x), 15)}(${trimNumber(Math.round(du), 2)})${suffix}`;
+  return `${x.toFixed(decimals)}(${digits})${suffix}`;
+}
+
+export function parameterText(p: FitParameterResult): string {
+  return valueWithUncertaintyText(p.value, p.uncertainty, p.unit, p.written_unit);
+}
+
+/** A measured value, a model value or a residual in the data's unit (Hz with a prefix, or counts). */
+export function measuredText(value: number | null | undefined, unit: string, digits = 10): string {
+  return unit === 'Hz' ? frequencyText(value, digits) : trimNumber(value, digits);
+}
+
+/** A residual, with the noise floor of the measured values it is the difference of. */
+export function residualText(value: number | null | undefined, unit: string, scale: number): string {
+  const noise = { scale, relative: 1e-12 };
+  return unit === 'Hz' ? frequencyText(value, 4, noise) : trimNumber(value, 4, noise);
+}
