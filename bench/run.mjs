@@ -16,6 +16,7 @@ const BENCHMARKS = [
   { name: 'engine', entry: 'bench/engine.bench.ts', about: 'Cs 6P3/2 2001-point sweep against NumPy (loop and blocked)' },
   { name: 'beam', entry: 'bench/beam.bench.ts', call: 'runBeamBench', about: 'detector pattern of 16 sublevels' },
   { name: 'editor', entry: 'bench/editor.bench.ts', call: 'runEditorBench', about: '2,000-line setup: edit → diagnostics, hover, cold start' },
+  { name: 'spectrum', entry: 'bench/spectrum.bench.ts', call: 'runSpectrumBench', about: '10,000-point Voigt spectrum with 100 components' },
 ];
 
 const TMP = '.bench-tmp';
