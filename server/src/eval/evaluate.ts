@@ -10,6 +10,7 @@ import { evaluateBeam } from './beamEvaluation';
 import { gJLookup } from './gJLookup';
 import { evaluateTerm } from './termEvaluation';
 import { evaluateLine } from './lineEvaluation';
+import { addSpectra } from './spectrumEvaluation';
 import { evaluateResonance } from './resonanceEvaluation';
 import { EVAL_RULES } from './evalCodes';
 import { evaluateLevel, type EvaluationNote, type WorkingField } from './levelEvaluation';
@@ -64,7 +65,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     return e.result;
   });
   const lineProblems: Problem[] = [];
-  const lines = model.lines.map((l) => evaluateLine(l, fields, gJOf, lineProblems));
+  const lines = model.lines.map((l) => addSpectra(l, evaluateLine(l, fields, gJOf, lineProblems), lineProblems));
   const resonances = model.resonances.map((r) => evaluateResonance(r, fields, model.settings, gJOf, lineProblems));
   const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems]);
   const result: EvaluationResult = {
