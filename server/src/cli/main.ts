@@ -13,6 +13,7 @@ import { commandHelp, overviewHelp, usageHint } from './help';
 import { type CliContext, cliContext, type CliIO, processIO } from './io';
 import { OutputError } from './output';
 import { profileSpec, runProfile } from './profileCommand';
+import { runSpectrum, spectrumSpec } from './spectrumCommand';
 import { renderSpec, runRender } from './renderCommand';
 import { runSweep, sweepSpec } from './sweepCommand';
 import { suggestNames } from '../format/didYouMean';
@@ -27,6 +28,7 @@ const COMMANDS: readonly Command[] = [
   { spec: evalSpec, run: runEval },
   { spec: sweepSpec, run: runSweep },
   { spec: profileSpec, run: runProfile },
+  { spec: spectrumSpec, run: runSpectrum },
   { spec: renderSpec, run: runRender },
 ];
 

@@ -9,7 +9,7 @@ import type { LevelsViewData, LinesViewData, PatternViewData, ResonanceViewData 
 
 /** What a table is about; written as `# sublevel <kind>: key=value; …` on the first line. */
 export interface CsvContext {
-  kind: 'levels' | 'sweep' | 'pattern' | 'profile' | 'lines' | 'resonance';
+  kind: 'levels' | 'sweep' | 'pattern' | 'profile' | 'lines' | 'resonance' | 'spectrum';
   /** key/value pairs in order, e.g. ['file', 'a.sublevel'], ['level', 'Rb87.ground'], ['field', 'trap 3.23e-4 T']. */
   about: [string, string | undefined][];
 }
@@ -117,4 +117,25 @@ export function resonanceCsv(d: ResonanceViewData, about: CsvContext['about'] = 
   const body: string[][] = [];
   for (let k = 0; k < d.fieldsT.length; k++) body.push([numCell(d.fieldsT[k]), numCell(d.frequencyHz[k]), numCell(d.slopeHzPerT[k])]);
   return csvTable({ kind: 'resonance', about: [...about, ['transition', d.pairLabel.replace(/ → /g, ' -> ')]] }, ['field_T', 'frequency_Hz', 'df_dB_Hz_per_T'], body);
+}
+
+/** Columns of a synthesized spectrum; the frequency and wavelength columns only when they are known. */
+export interface SpectrumColumns {
+  offsetHz: ArrayLike<number>;
+  intensity: ArrayLike<number>;
+  absoluteHz?: ArrayLike<number>;
+  vacuumWavelengthM?: ArrayLike<number>;
+  airWavelengthM?: ArrayLike<number>;
+}
+
+/** A line's synthesized spectrum, one row per sample in ascending frequency (docs/csv.md). */
+export function spectrumCsv(d: SpectrumColumns, about: CsvContext['about'] = []): string {
+  const cols: [string, ArrayLike<number>][] = [['offset_Hz', d.offsetHz]];
+  if (d.absoluteHz) cols.push(['frequency_Hz', d.absoluteHz]);
+  if (d.vacuumWavelengthM) cols.push(['vacuum_wavelength_m', d.vacuumWavelengthM]);
+  if (d.airWavelengthM) cols.push(['air_wavelength_m', d.airWavelengthM]);
+  cols.push(['intensity_per_Hz', d.intensity]);
+  const body: string[][] = [];
+  for (let i = 0; i < d.offsetHz.length; i++) body.push(cols.map(([, v]) => numCell(v[i])));
+  return csvTable({ kind: 'spectrum', about }, cols.map(([h]) => h), body);
 }

@@ -17,5 +17,5 @@ export { renderLevels } from './levels';
 export { renderPattern } from './pattern';
 export { renderLines } from './lines';
 export { renderResonance } from './resonance';
-export { levelsCsv, linesCsv, patternCsv, resonanceCsv } from './csv';
+export { levelsCsv, linesCsv, patternCsv, resonanceCsv, spectrumCsv, type SpectrumColumns } from './csv';
 export { escapeXml } from './svgText';
