@@ -9,7 +9,7 @@ import { SPECTRUM_POINTS_DEFAULT, SPECTRUM_POINTS_MAX } from '../model/limits';
 import type { LineModel, SpectrumRequest } from '../model/types';
 import { EVAL_RULES } from './evalCodes';
 import type { LineResult, SpectrumResult } from './resultTypes';
-import { frequencyText } from './quantityText';
+import { frequencyText, trimNumber } from './quantityText';
 import { spectrumSamples } from './spectrumSamples';
 import { componentWeight, shapeWidths, spectrumWindow } from './spectrumShape';
 
@@ -106,7 +106,7 @@ function nothingSeen(name: string, req: SpectrumRequest): string {
 export function spectrumWidthsText(s: SpectrumResult): string {
   const parts = [
     s.natural_fwhm_Hz !== undefined ? `natural ${frequencyText(s.natural_fwhm_Hz, 4)}` : 'no natural width',
-    s.doppler_fwhm_Hz !== undefined ? `Doppler ${frequencyText(s.doppler_fwhm_Hz, 4)} at ${s.temperature_K} K` : undefined,
+    s.doppler_fwhm_Hz !== undefined ? `Doppler ${frequencyText(s.doppler_fwhm_Hz, 4)} at ${trimNumber(s.temperature_K, 6)} K` : undefined,
     s.instrument_fwhm_Hz !== undefined ? `instrument ${frequencyText(s.instrument_fwhm_Hz, 4)}` : undefined,
   ].filter((p): p is string => p !== undefined);
   return `${parts.join(', ')}; Voigt FWHM ≈ ${frequencyText(s.voigt_fwhm_Hz, 4)}`;
