@@ -60,6 +60,45 @@ line L: g -> u
   });
 });
 
+describe('Doppler width from a beam', () => {
+  const LI = `species Li7
+  level g: 2s 2S1/2
+  level u: 2p 2P°3/2
+
+magnet m
+  field = 0.1 T
+  gradient = 100 T/m
+  length = 5 cm
+
+beam B
+  level = g
+  source = oven 700 K
+  slits = 80 um, 50 um apart 40 cm
+  magnet = m
+  drift = 30 cm
+`;
+
+  it('takes the transverse rms speed of the beam (SciPy quadrature over both slits and the flux: voigt.json)', async () => {
+    const { readFileSync } = await import('node:fs');
+    const ref = JSON.parse(readFileSync(new URL('../reference/voigt.json', import.meta.url), 'utf8')).beam_transverse;
+    const r = run(`${LI}\nline L: g -> u\n  spectrum = across\n  doppler = beam B\n`);
+    const at = r.result.lines[0]!.at_fields[0]!;
+    const s = at.spectrum!;
+    expect(s.beam).toBe('B');
+    // Same slits, oven and temperature; the reference takes the mass as 7.016 u.
+    expect(Math.abs(s.transverse_rms_speed_m_per_s! / ref.transverse_rms_speed - 1)).toBeLessThan(1e-5);
+    const nu = r.result.lines[0]!.line_centre_Hz!;
+    expect(s.doppler_fwhm_Hz! / ((nu / 299792458) * s.transverse_rms_speed_m_per_s! * Math.sqrt(8 * Math.LN2))).toBeCloseTo(1, 12);
+  });
+
+  it('an unknown beam, or one of another species, is said at the beam name', () => {
+    const r = run(`${LI}\nline L: g -> u\n  spectrum = across\n  doppler = beam C\n`);
+    const p = problem(r, 'spectrum-doppler-beam');
+    expect(p.covered).toBe('C');
+    expect(p.message).toMatch(/no beam 'C' in this file \(beams: B\)/);
+  });
+});
+
 describe('what the observer sees', () => {
   const line = (extra: string) => run(`${RB}
 line D2: ground -> p32

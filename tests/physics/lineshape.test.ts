@@ -11,6 +11,7 @@ import {
   GAUSS_FWHM_PER_SIGMA,
   VoigtShape,
   airWavelengthM,
+  beamTransverseRmsSpeed,
   dopplerSigmaHz,
   erfcx,
   faddeevaReal,
@@ -27,6 +28,7 @@ interface Ref {
   voigt_profile: { x_Hz: number; sigma_Hz: number; gamma_Hz: number; value: number }[];
   wofz_real: { x: number; y: number; re_w: number }[];
   doppler: { nu0_Hz: number; T_K: number; mass_u: number; fwhm_Hz: number }[];
+  beam_transverse: { slit1_m: number; slit2_m: number; separation_m: number; mean_speed: number; rms_spread: number; transverse_rms_speed: number };
   atomic_mass_constant_kg: number;
 }
 const ref = JSON.parse(readFileSync(new URL('../reference/voigt.json', import.meta.url), 'utf8')) as Ref;
@@ -97,6 +99,11 @@ describe('widths', () => {
   it('Doppler FWHM of the Na D line at 500 K is about 1.7 GHz (Demtröder, Laser Spectroscopy, §3.2 example; from memory)', () => {
     const fwhm = dopplerSigmaHz(5.0893e14, 500, 22.98977 * 1.66053906892e-27) * GAUSS_FWHM_PER_SIGMA;
     expect(fwhm / 1e9).toBeCloseTo(1.7, 1);
+  });
+
+  it('transverse rms speed of a collimated beam equals the quadrature over both slits and the flux (voigt.json, SciPy dblquad/quad)', () => {
+    const b = ref.beam_transverse;
+    expect(rel(beamTransverseRmsSpeed(b.slit1_m, b.slit2_m, b.separation_m, b.mean_speed, b.rms_spread), b.transverse_rms_speed)).toBeLessThan(1e-10);
   });
 
   it('Voigt FWHM approximation: both limits exact to its stated 0.02 % (Olivero & Longbothum 1977)', () => {

@@ -14,6 +14,7 @@ export const EVAL_RULES = {
   'spectrum-no-line-frequency': { severity: 'warning', summary: 'A Doppler width asked for on a line whose frequency is unknown.' },
   'spectrum-nothing-seen': { severity: 'warning', summary: 'No component of the line is seen from that direction through that analyser.' },
   'spectrum-analyser-mixes': { severity: 'info', summary: 'Across the field an analyser cannot separate σ+ from σ−.' },
+  'spectrum-doppler-beam': { severity: 'warning', summary: 'A spectrum takes its Doppler width from a beam that cannot give one.' },
   'spectrum-span-cuts': { severity: 'warning', summary: 'The span of a spectrum leaves some seen components outside its window.' },
   'spectrum-undersampled': { severity: 'warning', summary: 'Samples of a spectrum further apart than half the line width: peaks may be missed.' },
   'level-too-large': { severity: 'error', summary: 'A level has more sublevels than the engine handles.' },

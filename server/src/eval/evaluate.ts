@@ -65,7 +65,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     return e.result;
   });
   const lineProblems: Problem[] = [];
-  const lines = model.lines.map((l) => addSpectra(l, evaluateLine(l, fields, gJOf, lineProblems), lineProblems));
+  const lines = model.lines.map((l) => addSpectra(l, evaluateLine(l, fields, gJOf, lineProblems), lineProblems, model.beams));
   const resonances = model.resonances.map((r) => evaluateResonance(r, fields, model.settings, gJOf, lineProblems));
   const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems]);
   const result: EvaluationResult = {

@@ -240,6 +240,9 @@ export interface SpectrumResult {
   /** Natural FWHM Γ/2π = 1/(2πτ), Hz. */
   natural_fwhm_Hz?: number;
   temperature_K?: number;
+  /** Or the beam whose transverse speed spread gives the Doppler width, and that rms speed, m/s. */
+  beam?: string;
+  transverse_rms_speed_m_per_s?: number;
   /** Doppler FWHM ν₀/c √(8 ln2 k_B T/m), Hz. */
   doppler_fwhm_Hz?: number;
   instrument_fwhm_Hz?: number;

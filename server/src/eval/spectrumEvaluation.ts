@@ -6,32 +6,34 @@
  */
 import type { Problem, Range } from '../format/ast';
 import { SPECTRUM_POINTS_DEFAULT, SPECTRUM_POINTS_MAX } from '../model/limits';
-import type { LineModel, SpectrumRequest } from '../model/types';
+import type { BeamModel, LineModel, SpectrumRequest } from '../model/types';
+import { dopplerPart } from './spectrumDoppler';
 import { EVAL_RULES } from './evalCodes';
 import type { LineResult, SpectrumResult } from './resultTypes';
 import { frequencyText, trimNumber } from './quantityText';
 import { spectrumSamples } from './spectrumSamples';
 import { componentWeight, shapeWidths, spectrumWindow } from './spectrumShape';
 
-export function addSpectra(line: LineModel, result: LineResult, problems: Problem[]): LineResult {
+export function addSpectra(line: LineModel, result: LineResult, problems: Problem[], beams: readonly BeamModel[]): LineResult {
   const req = line.spectrum;
   const upper = line.upper;
   if (!req || !upper || result.at_fields.length === 0) return result;
   const say = (code: keyof typeof EVAL_RULES, message: string, range: Range = req.range): void => {
     problems.push({ code, severity: EVAL_RULES[code].severity, message, range });
   };
-  const widths = shapeWidths(req, upper, line.lower?.species.massKg?.value, result.line_centre_Hz);
+  const doppler = dopplerPart(line, result.line_centre_Hz, beams, (m) => say('spectrum-doppler-beam', `line '${line.name}': ${m}`, req.dopplerBeam!.range));
+  const widths = shapeWidths(req, upper, doppler?.sigmaHz ?? 0);
   if (!widths.lifetime) {
     say(
       'spectrum-no-linewidth',
       `line '${line.name}': level '${upper.name}' has no lifetime or natural linewidth, so the spectrum has no natural (Lorentzian) width; give the level \`lifetime = …\` or \`linewidth = …\``,
     );
   }
-  if (req.dopplerK && !widths.dopplerFwhmHz) {
+  if ((req.dopplerK || req.dopplerBeam) && !result.line_centre_Hz) {
     say(
       'spectrum-no-line-frequency',
       `line '${line.name}': the Doppler width is proportional to the line's frequency, which is unknown here; give both levels an energy to include it`,
-      req.dopplerK.range,
+      (req.dopplerK ?? req.dopplerBeam)!.range,
     );
   }
   if (widths.gammaHz === 0 && widths.sigmaHz === 0) {
@@ -71,7 +73,9 @@ export function addSpectra(line: LineModel, result: LineResult, problems: Proble
       direction: req.direction,
       light: req.light,
       ...(widths.lifetime ? { lifetime_s: widths.lifetime.value, lifetime_source: widths.lifetime.source, natural_fwhm_Hz: 2 * widths.gammaHz } : {}),
-      ...(widths.dopplerFwhmHz ? { temperature_K: req.dopplerK!.value, doppler_fwhm_Hz: widths.dopplerFwhmHz } : {}),
+      ...(widths.dopplerFwhmHz ? { doppler_fwhm_Hz: widths.dopplerFwhmHz } : {}),
+      ...(doppler?.temperatureK !== undefined ? { temperature_K: doppler.temperatureK } : {}),
+      ...(doppler?.beam !== undefined ? { beam: doppler.beam, transverse_rms_speed_m_per_s: doppler.transverseRmsSpeed! } : {}),
       ...(req.instrumentHz ? { instrument_fwhm_Hz: req.instrumentHz.value } : {}),
       gamma_Hz: widths.gammaHz,
       sigma_Hz: widths.sigmaHz,
@@ -106,7 +110,9 @@ function nothingSeen(name: string, req: SpectrumRequest): string {
 export function spectrumWidthsText(s: SpectrumResult): string {
   const parts = [
     s.natural_fwhm_Hz !== undefined ? `natural ${frequencyText(s.natural_fwhm_Hz, 4)}` : 'no natural width',
-    s.doppler_fwhm_Hz !== undefined ? `Doppler ${frequencyText(s.doppler_fwhm_Hz, 4)} at ${trimNumber(s.temperature_K, 6)} K` : undefined,
+    s.doppler_fwhm_Hz !== undefined
+      ? `Doppler ${frequencyText(s.doppler_fwhm_Hz, 4)} ${s.beam !== undefined ? `across beam ${s.beam} (transverse rms speed ${trimNumber(s.transverse_rms_speed_m_per_s, 4)} m/s)` : `at ${trimNumber(s.temperature_K, 6)} K`}`
+      : undefined,
     s.instrument_fwhm_Hz !== undefined ? `instrument ${frequencyText(s.instrument_fwhm_Hz, 4)}` : undefined,
   ].filter((p): p is string => p !== undefined);
   return `${parts.join(', ')}; Voigt FWHM ≈ ${frequencyText(s.voigt_fwhm_Hz, 4)}`;

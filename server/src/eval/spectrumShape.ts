@@ -2,7 +2,6 @@
 import type { LevelModel, SpectrumRequest, Valued } from '../model/types';
 import {
   GAUSS_FWHM_PER_SIGMA,
-  dopplerSigmaHz,
   gaussianSigmaHz,
   naturalFwhmHz,
   observedWeight,
@@ -20,10 +19,10 @@ export interface ShapeWidths {
   voigtFwhmHz: number;
 }
 
-export function shapeWidths(req: SpectrumRequest, upper: LevelModel, massKg: number | undefined, lineHz: number | undefined): ShapeWidths {
+/** `dopplerSigma`: the Doppler part's standard deviation, Hz (0 when there is none). */
+export function shapeWidths(req: SpectrumRequest, upper: LevelModel, dopplerSigma: number): ShapeWidths {
   const lifetime = upper.lifetimeS;
   const gammaHz = lifetime ? naturalFwhmHz(lifetime.value) / 2 : 0;
-  const dopplerSigma = req.dopplerK && massKg && lineHz ? dopplerSigmaHz(lineHz, req.dopplerK.value, massKg) : 0;
   const sigmaHz = gaussianSigmaHz(dopplerSigma, req.instrumentHz?.value ?? 0);
   return {
     ...(lifetime ? { lifetime } : {}),

@@ -3,6 +3,7 @@
  *   spectrum = along | across     asks for the spectrum, seen along or across the field
  *   light = all | pi | sigma | sigma+ | sigma-   analyser (default all)
  *   doppler = 350 K               gas temperature for the Doppler width
+ *   doppler = beam NAME           or the transverse speed spread of a beam of this file
  *   instrument = 5 MHz            Gaussian instrument width (FWHM)
  *   span = 4 GHz                  window width (default: from the components and widths)
  *   points = 2001                 samples
@@ -38,6 +39,16 @@ export function readSpectrumRequest(line: LineModel, settings: readonly SettingN
         break;
       }
       case 'doppler': {
+        const parts = s.groups.flat();
+        if (parts[0]?.kind === 'word' && parts[0].text === 'beam') {
+          const name = parts[1];
+          if (parts.length !== 2 || name?.kind !== 'word') {
+            problems.add('value-not-allowed', 'write doppler = beam <name>, naming a beam of this file, or a gas temperature such as doppler = 350 K', s.valueText.range);
+          } else {
+            req.dopplerBeam = { name: name.text, range: name.range };
+          }
+          break;
+        }
         const t = positiveValue(readSettingQuantity(s, 'temperature', problems, 'gas temperature for the Doppler width, e.g. 350 K'), 'the temperature', problems);
         if (t) req.dopplerK = t;
         break;

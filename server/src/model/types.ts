@@ -143,8 +143,10 @@ export interface SpectrumRequest {
   /** Analyser in front of the detector (`light`); `all` when not given. */
   light: 'all' | 'pi' | 'sigma' | 'sigma+' | 'sigma-';
   lightRange?: Range;
-  /** Gas temperature for the Doppler width (`doppler`), K. */
+  /** Gas temperature for the Doppler width (`doppler = 350 K`), K. */
   dopplerK?: Valued<number>;
+  /** Or a beam whose transverse speed spread sets the Doppler width (`doppler = beam NAME`); resolved in the evaluation. */
+  dopplerBeam?: { name: string; range: Range };
   /** Gaussian instrument width, FWHM in Hz (`instrument`). */
   instrumentHz?: Valued<number>;
   /** Total width of the frequency window (`span`), Hz; chosen from the widths when absent. */

@@ -14,3 +14,4 @@ export {
 export { AIR_MIN_WAVELENGTH_M, AIR_STANDARD, airIndex, airWavelengthM } from './airIndex';
 export { analyserProblem, observedWeight, passesAnalyser, viewAngleRad, type Analyser, type ViewDirection } from './observation';
 export { gridFrequencies, synthesizeSpectrum, type UniformGrid, type WeightedComponent } from './spectrum';
+export { beamTransverseRmsSpeed } from './beamDoppler';
