@@ -18,6 +18,8 @@ const LEVEL_KEYS: Record<string, string> = {
   C: 'magnetic-octupole hyperfine constant — acts only when I ≥ 3/2 and J ≥ 3/2',
   g_J: 'measured g_J; it replaces the Landé value in the energies, and the Landé value is still shown',
   energy: 'the level energy above the ground level, used for line frequencies',
+  lifetime: 'radiative lifetime τ of the level: the natural width Γ/2π = 1/(2πτ) of lines to it',
+  linewidth: 'natural linewidth Γ/2π (FWHM) of the level, instead of lifetime',
   zeta: 'spin–orbit constant ζ of a term written without J; all its J levels are then computed together, from weak field to Paschen–Back',
 };
 
@@ -36,6 +38,12 @@ const BLOCK_KEYS: Record<string, string> = {
   'beam.magnet': 'the magnet the beam passes (a magnet block of this file)',
   'beam.drift': 'distance from the magnet exit to the detector',
   'beam.detector': 'detector width or resolution',
+  'line.spectrum': 'draw the line\u2019s spectrum as seen along or across the field (Voigt line shapes)',
+  'line.light': 'analyser: all, pi, sigma (both), sigma+ or sigma-',
+  'line.doppler': 'Doppler width from a gas temperature (310 K) or from a beam seen across (beam <name>)',
+  'line.instrument': 'Gaussian instrument or laser width, FWHM',
+  'line.span': 'width of the spectrum\u2019s frequency window',
+  'line.points': 'number of samples of the spectrum (11 to 100,001)',
   'resonance.level': 'the level whose sublevels the RF or microwave field couples',
   'resonance.lower': 'the lower sublevel by its low-field label, F and m_F: e.g. 1 -1',
   'resonance.upper': 'the upper sublevel by its low-field label, F and m_F: e.g. 2 +1',
