@@ -7,6 +7,7 @@
 import type { Problem, Range } from '../format/ast';
 import { SPECTRUM_POINTS_DEFAULT, SPECTRUM_POINTS_MAX } from '../model/limits';
 import type { BeamModel, LineModel, SpectrumRequest } from '../model/types';
+import { analyserProblem } from '../physics/lineshape';
 import { dopplerPart } from './spectrumDoppler';
 import { EVAL_RULES } from './evalCodes';
 import type { LineResult, SpectrumResult } from './resultTypes';
@@ -40,10 +41,8 @@ export function addSpectra(line: LineModel, result: LineResult, problems: Proble
     say('spectrum-no-width', `line '${line.name}': the spectrum has no width at all (no lifetime, Doppler or instrument width), so there is no line shape to draw`);
     return result;
   }
-  const mix = req.direction === 'across' && (req.light === 'sigma+' || req.light === 'sigma-');
-  if (mix) {
-    say('spectrum-analyser-mixes', `across the field σ+ and σ− light are both linearly polarised perpendicular to the field, so no polariser separates them; only the ${req.light} components are drawn, as if they could be`, req.lightRange ?? req.range);
-  }
+  const unseparable = req.direction === 'across' ? analyserProblem(req.direction, req.light) : undefined;
+  if (unseparable) say('spectrum-analyser-mixes', `line '${line.name}': ${unseparable}; only the ${req.light} components are drawn, as if they could be`, req.lightRange ?? req.range);
   const warned = new Set<string>();
   const atFields = result.at_fields.map((f) => {
     const weights = f.components.map((c) => componentWeight(c, req));
@@ -100,10 +99,8 @@ function samplePoints(window: [number, number], fwhmHz: number, written: number 
 }
 
 function nothingSeen(name: string, req: SpectrumRequest): string {
-  if (req.direction === 'along' && req.light === 'pi') {
-    return `line '${name}': π light is not emitted along the field, so looking along it through a π analyser shows nothing; look across the field, or choose sigma`;
-  }
-  return `line '${name}': no component of this line is seen ${req.direction} the field through the '${req.light}' analyser, so there is no spectrum to draw`;
+  const why = analyserProblem(req.direction, req.light);
+  return `line '${name}': ${why ?? `no component of this line is seen ${req.direction} the field through the '${req.light}' analyser, so there is no spectrum to draw`}`;
 }
 
 /** The widths of a spectrum in words, for reports and hovers. */
