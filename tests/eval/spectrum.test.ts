@@ -2,6 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import { spectrumSamples } from '../../server/src/eval/spectrumSamples';
+import { linesView } from '../../server/src/views/linesView';
 
 const RB = `species Rb87
   level ground: 5s 2S1/2
@@ -230,6 +231,9 @@ line bad: ground -> Na23.na_p
     expect(problem(cut, 'spectrum-span-cuts').covered).toBe('2 GHz');
     const sparse = run(`${RB}\nline D2: ground -> p32\n  spectrum = across\n  points = 11\n`);
     expect(problem(sparse, 'spectrum-undersampled').message).toMatch(/11 samples over .* more than half the line width/);
+    // The figure says it too, not only the diagnostic.
+    expect(linesView(sparse.result.lines[0]!)!.spectrum!.caption).toMatch(/too few samples: .* apart, peaks not resolved/);
+    expect(linesView(cut.result.lines[0]!)!.spectrum!.caption).not.toMatch(/too few/);
   });
 
   it('with no `points` the samples follow the width: five per FWHM, at least 2001', () => {
