@@ -35,6 +35,9 @@ const CASES: Case[] = [
   { name: '`apart` after two slit widths', text: 'beam b\n  slits = 80 um, 50 um |', exactly: ['apart'] },
   { name: 'g_s choices', text: 'settings\n  g_s = |', exactly: ['exact', '2'] },
   { name: 'reduced_mass choices', text: 'settings\n  reduced_mass = |', exactly: ['on', 'off'] },
+  { name: 'spectrum directions', text: 'line L: a -> b\n  spectrum = |', exactly: ['across', 'along'] },
+  { name: 'spectrum analysers', text: 'line L: a -> b\n  light = |', exactly: ['all', 'pi', 'sigma', 'sigma+', 'sigma-'] },
+  { name: 'a beam for the Doppler width', text: 'beam hot\nline L: a -> b\n  doppler = beam |', exactly: ['hot'] },
   {
     name: 'level names in a line',
     text: 'species Na23\n  level g: 3s 2S1/2\n  level e: 3p 2P°3/2\nline D2: |',

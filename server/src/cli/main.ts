@@ -17,6 +17,7 @@ import { isBatchWorker, serveBatchJobs } from './batchWorker';
 import { type CliContext, cliContext, type CliIO, type ProcessExtras, processIO } from './io';
 import { OutputError } from './output';
 import { profileSpec, runProfile } from './profileCommand';
+import { runSpectrum, spectrumSpec } from './spectrumCommand';
 import { renderSpec, runRender } from './renderCommand';
 import { runSweep, sweepSpec } from './sweepCommand';
 import { suggestNames } from '../format/didYouMean';
@@ -32,6 +33,7 @@ const COMMANDS: readonly Command[] = [
   { spec: evalSpec, run: runEval },
   { spec: sweepSpec, run: runSweep },
   { spec: profileSpec, run: runProfile },
+  { spec: spectrumSpec, run: runSpectrum },
   { spec: renderSpec, run: runRender },
   { spec: diffSpec, run: runDiff },
   { spec: fitSpec, run: runFit },

@@ -1,4 +1,5 @@
 /** The human-readable report printed by `sublevel eval`. */
+import { spectrumWidthsText } from '../eval/spectrumEvaluation';
 import { ATOMIC_MASS_UNIT, SPEED_OF_LIGHT } from '../physics/constants';
 import { halfText } from '../eval/halves';
 import { curvatureText, frequencyText, gradientText, lengthText, percentText, sensitivityText, speedText, trimNumber, withUncertainty } from '../eval/quantityText';
@@ -153,6 +154,11 @@ function lineReport(l: LineResult, atFieldText: AtFieldText, diagnostics: readon
       at.components.map((c) => [withUncertainty(c.offset_Hz, c.offset_Hz_unc, (v) => frequencyText(v, 9)), polarizationSymbol(c.polarization), trimNumber(c.strength, 5), c.lower_label, c.upper_label]),
     ).map((x) => '    ' + x),
   );
+  if (at.spectrum) {
+    const s = at.spectrum;
+    out.push(`  spectrum ${s.direction} the field, ${s.light} light: ${spectrumWidthsText(s)}`);
+    out.push(`    highest at offset ${frequencyText(s.peak_offset_Hz, 7)}; ${s.points} samples from ${frequencyText(s.window_Hz[0], 5)} to ${frequencyText(s.window_Hz[1], 5)} (sublevel spectrum writes them)`);
+  }
   if (l.at_fields.length > 1) out.push(`  (components at the other working fields: sublevel eval --format json)`);
   return out;
 }

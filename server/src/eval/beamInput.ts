@@ -5,7 +5,7 @@
 import type { GJLookup } from './gJLookup';
 import type { BeamGeometry, PatternInput, SpeedDistribution } from '../physics/beam';
 import { solveLevel, type SublevelState } from '../physics/engine';
-import type { BeamModel } from '../model/types';
+import type { BeamModel, BeamSource } from '../model/types';
 import { hyperfineSpec } from './levelSpec';
 
 export interface BeamInputs {
@@ -35,13 +35,7 @@ export function beamInputs(beam: BeamModel, gJOf: GJLookup): BeamInputs | undefi
     gradientTPerM: magnet.gradientTPerM.value,
     ...(beam.detectorOffsetM ? { detectorOffsetM: beam.detectorOffsetM.value } : {}),
   };
-  const src = source.value;
-  const speed: SpeedDistribution =
-    src.kind === 'oven'
-      ? { kind: 'effusive', temperatureK: src.temperatureK }
-      : src.kind === 'jet'
-        ? { kind: 'jet', meanSpeed: src.speedMPerS, relativeSpread: src.spreadFraction }
-        : { kind: 'single', speed: src.speedMPerS };
+  const speed = speedDistributionOf(source.value);
   return {
     input: {
       massKg,
@@ -59,4 +53,13 @@ function populationOf(beam: BeamModel, s: SublevelState): number {
   const [twoF, twoM] = s.low.scheme === 'F' ? [s.low.twoF, s.low.twoMF] : [s.low.twoJ, s.low.twoMJ];
   const hit = beam.populations.find((p) => p.twoF === twoF && (p.twoM === undefined || p.twoM === twoM));
   return hit ? hit.weight : 0;
+}
+
+/** The physics core's speed law for a beam's `source`. */
+export function speedDistributionOf(src: BeamSource): SpeedDistribution {
+  return src.kind === 'oven'
+    ? { kind: 'effusive', temperatureK: src.temperatureK }
+    : src.kind === 'jet'
+      ? { kind: 'jet', meanSpeed: src.speedMPerS, relativeSpread: src.spreadFraction }
+      : { kind: 'single', speed: src.speedMPerS };
 }

@@ -10,6 +10,7 @@ import { evaluateBeam } from './beamEvaluation';
 import { gJLookup } from './gJLookup';
 import { evaluateTerm } from './termEvaluation';
 import { evaluateLine } from './lineEvaluation';
+import { addSpectra } from './spectrumEvaluation';
 import { evaluateResonance } from './resonanceEvaluation';
 import { attachUncertainty } from './uncertainty/attach';
 import { evaluateFit } from './fitEvaluation';
@@ -66,7 +67,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     return e.result;
   });
   const lineProblems: Problem[] = [];
-  const lines = model.lines.map((l) => evaluateLine(l, fields, gJOf, lineProblems, model.settings));
+  const lines = model.lines.map((l) => addSpectra(l, evaluateLine(l, fields, gJOf, lineProblems, model.settings), lineProblems, model.beams));
   const resonances = model.resonances.map((r) => evaluateResonance(r, fields, model.settings, gJOf, lineProblems));
   const fitProblems: Problem[] = [];
   const fits = model.fits.map((f) => evaluateFit(f, gJOf, fitProblems));

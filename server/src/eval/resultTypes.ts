@@ -264,6 +264,37 @@ export interface LineComponentResult {
   upper_high_label?: string;
 }
 
+/** A synthesized spectrum of a line at one field (docs/spectra.md); the samples are in the CSV export. */
+export interface SpectrumResult {
+  direction: 'along' | 'across';
+  light: 'all' | 'pi' | 'sigma' | 'sigma+' | 'sigma-';
+  /** Radiative lifetime of the upper level, s, and where it comes from. */
+  lifetime_s?: number;
+  lifetime_source?: string;
+  /** Natural FWHM Γ/2π = 1/(2πτ), Hz. */
+  natural_fwhm_Hz?: number;
+  temperature_K?: number;
+  /** Or the beam whose transverse speed spread gives the Doppler width, and that rms speed, m/s. */
+  beam?: string;
+  transverse_rms_speed_m_per_s?: number;
+  /** Doppler FWHM ν₀/c √(8 ln2 k_B T/m), Hz. */
+  doppler_fwhm_Hz?: number;
+  instrument_fwhm_Hz?: number;
+  /** The Voigt profile used: Lorentzian half width γ and Gaussian standard deviation σ, Hz. */
+  gamma_Hz: number;
+  sigma_Hz: number;
+  /** FWHM of that profile (Olivero–Longbothum approximation, 2e-4), Hz. */
+  voigt_fwhm_Hz: number;
+  /** The window on the offset axis of the components, Hz, and its number of samples. */
+  window_Hz: [number, number];
+  points: number;
+  /** Observed weight of each component (strength × angular factor; 0 when not seen), in the order of `components`. */
+  weights: number[];
+  /** The highest sample: its offset (Hz) and height (per Hz of a unit-strength component). */
+  peak_offset_Hz: number;
+  peak_per_Hz: number;
+}
+
 export interface LineResult {
   name: string;
   species?: string;
@@ -281,7 +312,7 @@ export interface LineResult {
    */
   strengths_reduced_in?: 'L';
   /** Components at each working field (at zero field when the file has none); `g_eff_centroid` from the σ± centroids (lines with a whole term). */
-  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; g_eff_centroid?: number; components: LineComponentResult[] }[];
+  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; g_eff_centroid?: number; components: LineComponentResult[]; spectrum?: SpectrumResult }[];
 }
 
 export interface MagneticTransitionResult {

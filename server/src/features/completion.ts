@@ -110,6 +110,13 @@ function valueCompletions(c: LineContext, model: SetupModel | undefined, block: 
     }
     case 'resonance.level':
       return empty ? levelNameItems(model, c) : [];
+    case 'line.spectrum':
+      return empty ? wordItems(['across', 'along'], c.replace, 'look across or along the field') : [];
+    case 'line.light':
+      return empty ? wordItems(['all', 'pi', 'sigma', 'sigma+', 'sigma-'], c.replace, 'analyser in front of the detector') : [];
+    case 'line.doppler':
+      if (empty) return wordItems(['beam'], c.replace, 'a temperature such as 310 K, or beam <name>');
+      return words.length === 1 && words[0]!.text === 'beam' ? (model?.beams ?? []).map((b, i) => item(b.name, CompletionItemKind.Variable, c.replace, { order: i })) : [];
     case 'resonance.two_photon':
       return empty ? wordItems(['on', 'off'], c.replace) : [];
     case 'beam.magnet':

@@ -12,7 +12,7 @@ export const LEVEL_WORD = 'level';
 export const USE_WORD = 'use';
 
 /** Keys a level takes, on its own line or on the lines after it. */
-export const LEVEL_KEYS: readonly string[] = ['A', 'B', 'C', 'g_J', 'energy', 'zeta', 'A_J', 'B_J', 'E_J'];
+export const LEVEL_KEYS: readonly string[] = ['A', 'B', 'C', 'g_J', 'energy', 'zeta', 'A_J', 'B_J', 'E_J', 'lifetime', 'linewidth'];
 
 /** Keys each block takes on the lines after its header. */
 export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
@@ -20,7 +20,7 @@ export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
   field: [],
   magnet: ['field', 'gradient', 'length'],
   beam: ['species', 'level', 'source', 'slits', 'magnet', 'drift', 'detector', 'populations'],
-  line: [],
+  line: ['spectrum', 'light', 'doppler', 'instrument', 'span', 'points'],
   resonance: ['level', 'lower', 'upper', 'frequency', 'range', 'two_photon'],
   settings: ['g_s', 'reduced_mass'],
   data: ['level', 'kind', 'lower', 'upper', 'point', 'file', 'beam'],
@@ -31,7 +31,7 @@ export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
 export const REPEATABLE_KEYS: readonly string[] = ['point'];
 
 /** Plain words that appear inside values; never mistaken for misspelt units. */
-export const VALUE_WORDS: readonly string[] = ['oven', 'jet', 'speed', 'spread', 'apart', 'at', 'exact', 'on', 'off'];
+export const VALUE_WORDS: readonly string[] = ['oven', 'jet', 'speed', 'spread', 'apart', 'at', 'exact', 'on', 'off', 'along', 'across'];
 
 export function isBlockWord(word: string): word is BlockKind {
   return (BLOCK_WORDS as readonly string[]).includes(word);

@@ -4,6 +4,7 @@
  */
 import type { LevelNode, SettingNode } from '../format/ast';
 import { parseLevelDesignation } from '../physics/configuration';
+import { lifetimeFromFwhm } from '../physics/lineshape';
 import type { BuiltinLevel } from '../physics/species';
 import type { ProblemList } from './problems';
 import { subRange } from './ranges';
@@ -28,6 +29,7 @@ export function buildLevel(node: LevelNode, species: SpeciesModel, problems: Pro
     valid: false,
   };
   for (const s of node.settings) readLevelSetting(level, s, problems);
+  reconcileWidth(level, problems);
   readDesignation(level, problems);
   mergeBuiltin(level);
   return level;
@@ -117,6 +119,12 @@ function readLevelSetting(level: LevelModel, s: SettingNode, problems: ProblemLi
     case 'E_J':
       level.levelEnergies = readPerLevel(s, problems, '1/2 0 GHz, 3/2 10.05 GHz');
       break;
+    case 'lifetime':
+      level.lifetimeS = positive(readSettingQuantity(s, 'time', problems, 'radiative lifetime of the level, e.g. 26.2 ns'), 'lifetime', problems);
+      break;
+    case 'linewidth':
+      level.linewidthHz = positive(readSettingQuantity(s, 'frequency-like', problems, 'natural linewidth Γ/2π (FWHM) of the level, e.g. 6.07 MHz'), 'linewidth', problems);
+      break;
     case 'energy':
       level.energyHz = readSettingQuantity(s, 'frequency-like', problems, 'energy above the ground level, e.g. 16973.37 cm^-1');
       break;
@@ -124,6 +132,27 @@ function readLevelSetting(level: LevelModel, s: SettingNode, problems: ProblemLi
       // Unknown keys are reported by the parser's schema check.
       break;
   }
+}
+
+/** A lifetime or linewidth must be above zero: a zero lifetime would be an infinitely broad line. */
+function positive(v: Valued<number> | undefined, key: string, problems: ProblemList): Valued<number> | undefined {
+  if (!v || v.value > 0) return v;
+  problems.add('lifetime-not-positive', `${key} must be above zero (a level that lives for no time has no line to draw), got ${v.value === 0 ? 'zero' : 'a negative value'}`, v.range!);
+  return undefined;
+}
+
+/** `linewidth` is the natural FWHM Γ/2π = 1/(2πτ); one of the two is enough. */
+function reconcileWidth(level: LevelModel, problems: ProblemList): void {
+  const w = level.linewidthHz;
+  if (!w) return;
+  if (level.lifetimeS) {
+    problems.add('lifetime-and-linewidth', `level '${level.name}' gives both lifetime and linewidth; they say the same thing (linewidth = 1/(2π·lifetime)), so the lifetime is used and the linewidth is ignored`, w.range!, {
+      data: { removeSetting: 'linewidth' },
+    });
+    delete level.linewidthHz;
+    return;
+  }
+  level.lifetimeS = { value: lifetimeFromFwhm(w.value), source: w.source, ...(w.range ? { range: w.range } : {}) };
 }
 
 /** Take A, B, C, g_J and energy from the built-in level with the same term, unless the file gives them. */
@@ -138,6 +167,7 @@ function mergeBuiltin(level: LevelModel): void {
   level.C ??= fromBuiltin(match.C);
   level.gJMeasured ??= fromBuiltin(match.gJ);
   level.energyHz ??= fromBuiltin(match.energyHz);
+  level.lifetimeS ??= fromBuiltin(match.lifetimeS);
 }
 
 function fromBuiltin(v: { value: number; source: string; uncertainty?: number } | undefined): Valued<number> | undefined {

@@ -40,3 +40,8 @@ export function countStatements(text: string, limit: number): number {
   }
   return lineHasCode ? count + 1 : count;
 }
+
+/** Samples of a line's synthesized spectrum (`points`): default, least and most (docs/spectra.md). */
+export const SPECTRUM_POINTS_DEFAULT = 2001;
+export const SPECTRUM_POINTS_MIN = 11;
+export const SPECTRUM_POINTS_MAX = 100_001;

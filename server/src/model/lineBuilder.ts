@@ -2,6 +2,7 @@
 import type { BlockNode } from '../format/ast';
 import { resolveLevel, type NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
+import { readSpectrumRequest } from './spectrumRequestBuilder';
 import type { LevelModel, LineModel, NameUse, SpeciesModel } from './types';
 
 export function buildLine(node: BlockNode, species: NameIndex<SpeciesModel>, uses: NameUse[], problems: ProblemList): LineModel | undefined {
@@ -18,6 +19,8 @@ export function buildLine(node: BlockNode, species: NameIndex<SpeciesModel>, use
   const upper = link?.to ? resolveLevel(link.to, species, lower?.species, uses, problems) : undefined;
   if (lower) line.lower = lower;
   if (upper) line.upper = upper;
+  const spectrum = readSpectrumRequest(line, node.settings, problems);
+  if (spectrum) line.spectrum = spectrum;
   for (const [level, ref] of [[lower, link?.from], [upper, link?.to]] as const) {
     // A term known only by its J-level energies has no nucleus in the engine, unlike the other end.
     const noNucleus = level?.kind === 'term' && !!level.levelEnergies && !level.levelA && !level.levelB && level.species.twoI.value > 0;

@@ -87,6 +87,10 @@ export interface LevelModel {
   C?: Valued<number>;
   gJMeasured?: Valued<number>;
   energyHz?: Valued<number>;
+  /** Radiative lifetime τ, s: from `lifetime`, from `linewidth` (τ = 1/(2π·FWHM)), or built in. */
+  lifetimeS?: Valued<number>;
+  /** Set when the lifetime came from the file's `linewidth` (the natural FWHM Γ/2π, Hz). */
+  linewidthHz?: Valued<number>;
   /** The built-in level whose data were merged in, if any. */
   builtinKey?: string;
 }
@@ -141,6 +145,29 @@ export interface LineModel {
   upper?: LevelModel;
   /** The file writes the upper level first (an emission line); lower/upper above are already swapped. */
   emission?: boolean;
+  /** A synthesized spectrum asked for with `spectrum = along | across`. */
+  spectrum?: SpectrumRequest;
+}
+
+/** How to draw a line's spectrum (docs/spectra.md). */
+export interface SpectrumRequest {
+  /** The `spectrum` setting: where diagnostics about the spectrum as a whole go. */
+  range: Range;
+  /** Looking along or across the field. */
+  direction: 'along' | 'across';
+  /** Analyser in front of the detector (`light`); `all` when not given. */
+  light: 'all' | 'pi' | 'sigma' | 'sigma+' | 'sigma-';
+  lightRange?: Range;
+  /** Gas temperature for the Doppler width (`doppler = 350 K`), K. */
+  dopplerK?: Valued<number>;
+  /** Or a beam whose transverse speed spread sets the Doppler width (`doppler = beam NAME`); resolved in the evaluation. */
+  dopplerBeam?: { name: string; range: Range };
+  /** Gaussian instrument width, FWHM in Hz (`instrument`). */
+  instrumentHz?: Valued<number>;
+  /** Total width of the frequency window (`span`), Hz; chosen from the widths when absent. */
+  spanHz?: Valued<number>;
+  /** Number of samples (`points`); when absent, enough for five samples per line width (at least 2001, at most the cap). */
+  points?: Valued<number>;
 }
 
 /** A sublevel named by its low-field quantum numbers: F and m_F (or J and m_J for a term), twice their values. */

@@ -10,7 +10,7 @@ import type { LevelsViewData, LinesViewData, PatternViewData, ResonanceViewData 
 
 /** What a table is about; written as `# sublevel <kind>: key=value; …` on the first line. */
 export interface CsvContext {
-  kind: 'levels' | 'sweep' | 'pattern' | 'profile' | 'lines' | 'resonance' | 'fit';
+  kind: 'levels' | 'sweep' | 'pattern' | 'profile' | 'lines' | 'resonance' | 'fit' | 'spectrum';
   /** key/value pairs in order, e.g. ['file', 'a.sublevel'], ['level', 'Rb87.ground'], ['field', 'trap 3.23e-4 T']. */
   about: [string, string | undefined][];
 }
@@ -131,4 +131,25 @@ export function linesCsv(d: LinesViewData, about: CsvContext['about'] = []): str
 export function resonanceCsv(d: ResonanceViewData, about: CsvContext['about'] = []): string {
   const c: CsvContext = { kind: 'resonance', about: [...about, ['transition', d.pairLabel.replace(/ → /g, ' -> ')]] };
   return numberTable(c, ['field_T', 'frequency_Hz', 'df_dB_Hz_per_T'], d.fieldsT.length, (k) => [d.fieldsT[k]!, d.frequencyHz[k]!, d.slopeHzPerT[k]!]);
+}
+
+/** Columns of a synthesized spectrum; the frequency and wavelength columns only when they are known. */
+export interface SpectrumColumns {
+  offsetHz: ArrayLike<number>;
+  intensity: ArrayLike<number>;
+  absoluteHz?: ArrayLike<number>;
+  vacuumWavelengthM?: ArrayLike<number>;
+  airWavelengthM?: ArrayLike<number>;
+}
+
+/** A line's synthesized spectrum, one row per sample in ascending frequency (docs/csv.md). */
+export function spectrumCsv(d: SpectrumColumns, about: CsvContext['about'] = []): string {
+  const cols: [string, ArrayLike<number>][] = [['offset_Hz', d.offsetHz]];
+  if (d.absoluteHz) cols.push(['frequency_Hz', d.absoluteHz]);
+  if (d.vacuumWavelengthM) cols.push(['vacuum_wavelength_m', d.vacuumWavelengthM]);
+  if (d.airWavelengthM) cols.push(['air_wavelength_m', d.airWavelengthM]);
+  cols.push(['intensity_per_Hz', d.intensity]);
+  const body: string[][] = [];
+  for (let i = 0; i < d.offsetHz.length; i++) body.push(cols.map(([, v]) => numCell(v[i])));
+  return csvTable({ kind: 'spectrum', about }, cols.map(([h]) => h), body);
 }

@@ -19,5 +19,5 @@ export { renderLines } from './lines';
 export { renderResonance } from './resonance';
 export { renderResiduals, type ResidualsViewData } from './residuals';
 export { fitCsv } from './fitCsv';
-export { levelsCsv, linesCsv, patternCsv, resonanceCsv } from './csv';
+export { levelsCsv, linesCsv, patternCsv, resonanceCsv, spectrumCsv, type SpectrumColumns } from './csv';
 export { escapeXml } from './svgText';

@@ -8,6 +8,7 @@
  * group's centre in Hz and in units of μ_B·B/h.
  */
 import { scaleLinear } from 'd3-scale';
+import { spectrumPath } from './spectrumCurve';
 import { bottomAxis, leftAxis, topAxis, type PlotBox, type Scale } from './axes';
 import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
 import { lineGroups, zeemanUnitHz, type LineGroup } from './lineGroups';
@@ -92,8 +93,10 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
     marker: POLARIZATION_MARKER[p],
   }));
   legend.push({ label: 'marker size: strength', colour: pal.muted, marker: 'circle' });
+  if (d.spectrum) legend.push({ label: d.spectrum.caption, colour: pal.total, line: { width: 1.8 } });
   const legendSvg = legendRows(legend, 64, 48, WIDTH - 80, pal);
-  const groups = d.unitHz === undefined ? lineGroups(comps, d.fieldT) : [];
+  // A spectrum is one curve on one axis, so the hyperfine groups are not split into panels.
+  const groups = d.unitHz === undefined && !d.spectrum ? lineGroups(comps, d.fieldT) : [];
   const counts = POLARIZATIONS.filter((p) => present.has(p)).map((p) => `${comps.filter((c) => c.polarization === p).length} ${POLARIZATION_NAME[p]}`);
   const yDomain = [Math.min(0, sExtent[0]), Math.max(sExtent[1], 0) * 1.12 || 1];
   const interactive = theme.kind === 'panel';
@@ -104,8 +107,10 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
   const unit = frequencyUnit(Math.max(Math.abs(fExtent[0]), Math.abs(fExtent[1])), d.unitHz);
   const span = fExtent[1] - fExtent[0];
   const pad = span > 0 ? span * 0.08 : Math.max(Math.abs(fExtent[0]) * 0.1, unit.factor);
-  const f0 = fExtent[0] - pad;
-  const f1 = fExtent[1] + pad;
+  // With a spectrum its window is the axis (sticks outside a chosen span are not drawn).
+  const window = d.spectrum ? finiteExtent(Array.from(d.spectrum.offsetHz)) : undefined;
+  const f0 = window ? window[0] : fExtent[0] - pad;
+  const f1 = window ? window[1] : fExtent[1] + pad;
 
   const box: PlotBox = { left: 64, right: WIDTH - 20, top: 48 + legendSvg.height + 16, bottom: HEIGHT - 56 };
   const x = scaleLinear().domain([f0, f1]).range([box.left, box.right]);
@@ -120,7 +125,12 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
     );
   }
   const ctx: StickContext = { idBase, pal, interactive, y, strongest, unit };
-  body.push(el('g', { class: 'sl-components' }, comps.map((c, i) => stick(c, i, x(c.offsetHz), ctx))));
+  const drawn = window ? comps.filter((c) => c.offsetHz >= f0 && c.offsetHz <= f1) : comps;
+  body.push(el('g', { class: 'sl-components' }, drawn.map((c, i) => stick(c, i, x(c.offsetHz), ctx))));
+  if (d.spectrum) {
+    const path = spectrumPath(d.spectrum, x, y, strongest);
+    if (path) body.push(el('path', { class: 'sl-spectrum', 'data-kind': 'spectrum', d: path, fill: 'none', stroke: pal.total, 'stroke-width': 1.8, 'stroke-linejoin': 'round' }));
+  }
 
   const desc = `Stick spectrum of ${comps.length} line components (${counts.join(', ')}) from Δf = ${formatIn(fExtent[0], unit)} to ${formatIn(fExtent[1], unit)}.`;
   return svgDocument(

@@ -91,6 +91,16 @@ export interface LinesViewData {
   fieldText?: string;
   /** Unit of the offset axis in Hz (1e6 draws MHz); chosen from the data when absent. */
   unitHz?: number;
+  /** A synthesized spectrum drawn over the sticks (its window sets the axis). */
+  spectrum?: LineSpectrumCurve;
+}
+
+export interface LineSpectrumCurve {
+  offsetHz: ArrayLike<number>;
+  /** Intensity per Hz; drawn with its highest sample at the height of the strongest stick. */
+  intensity: ArrayLike<number>;
+  /** What the curve is, for the legend: "spectrum across the field, all light, Voigt FWHM 523 MHz". */
+  caption: string;
 }
 
 /** `panel`: colours follow the editor theme through CSS variables; `export`: fixed light palette for files. */

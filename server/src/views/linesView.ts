@@ -2,6 +2,8 @@
 import type { LineResult } from '../eval/resultTypes';
 import type { LinesViewData } from '../render';
 import { fieldInUnit } from '../eval/writtenUnit';
+import { spectrumSamples } from '../eval/spectrumSamples';
+import { frequencyText } from '../eval/quantityText';
 
 /** The index of the named field among the line's computed fields, else the first. */
 export function lineFieldIndex(line: LineResult, fieldName: string | undefined): number {
@@ -26,5 +28,19 @@ export function linesView(line: LineResult, fieldIndex = 0, writtenUnit?: string
       polarization: c.polarization,
       label: `${c.lower_label} → ${c.upper_label}`,
     })),
+    ...(at.spectrum ? { spectrum: spectrumCurve(at.spectrum, at.components) } : {}),
+  };
+}
+
+function spectrumCurve(s: NonNullable<LineResult['at_fields'][number]['spectrum']>, components: LineResult['at_fields'][number]['components']): NonNullable<LinesViewData['spectrum']> {
+  const samples = spectrumSamples(s, components);
+  const light = s.light === 'all' ? 'all light' : `${s.light} light`;
+  // The figure itself says when its samples are too far apart to show the peaks (spectrum-undersampled).
+  const step = (s.window_Hz[1] - s.window_Hz[0]) / Math.max(1, s.points - 1);
+  const sparse = step > s.voigt_fwhm_Hz / 2 ? `; too few samples: ${frequencyText(step, 3)} apart, peaks not resolved` : '';
+  return {
+    offsetHz: samples.offsetHz,
+    intensity: samples.intensity,
+    caption: `spectrum ${s.direction} the field, ${light}, Voigt FWHM ${frequencyText(s.voigt_fwhm_Hz, 3)} (peak scaled${sparse})`,
   };
 }

@@ -66,7 +66,7 @@ export interface ValueContext {
 
 /** The dimension a setting's quantity must have, or undefined for plain numbers and words. */
 export function expectedDimension(c: ValueContext): Dimension | undefined {
-  if (c.inLevel) return ['A', 'B', 'C', 'energy', 'zeta', 'A_J', 'B_J', 'E_J'].includes(c.key) ? 'frequency-like' : undefined;
+  if (c.inLevel) return ['A', 'B', 'C', 'energy', 'zeta', 'A_J', 'B_J', 'E_J', 'linewidth'].includes(c.key) ? 'frequency-like' : c.key === 'lifetime' ? 'time' : undefined;
   switch (c.blockKind) {
     case 'species':
       return c.key === 'mass' ? 'mass' : c.key === 'mu_I' ? 'moment' : undefined;
@@ -74,6 +74,8 @@ export function expectedDimension(c: ValueContext): Dimension | undefined {
       return 'flux-density';
     case 'magnet':
       return c.key === 'field' ? 'flux-density' : c.key === 'gradient' ? 'gradient' : c.key === 'length' ? 'length' : undefined;
+    case 'line':
+      return c.key === 'doppler' ? 'temperature' : c.key === 'instrument' || c.key === 'span' ? 'frequency-like' : undefined;
     case 'resonance':
       return c.key === 'frequency' ? 'frequency-like' : c.key === 'range' ? 'flux-density' : undefined;
     case 'beam':

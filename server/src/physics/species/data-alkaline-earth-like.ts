@@ -99,7 +99,7 @@ export const YTTERBIUM_174: BuiltinSpecies = {
   twoI: sourced(0, 'even–even nucleus, I = 0 (IAEA nuclear moments table lists no moment)'),
   levels: [
     { key: 'ground', designation: '4f14 6s2 1S0', energyHz: GROUND_ENERGY },
-    { key: '3P1', designation: '4f14 6s 6p 3P°1', ...energy(YB_3P1_CM, 'cm-1', NIST_ASD_MEMORY) },
+    { key: '3P1', designation: '4f14 6s 6p 3P°1', ...energy(YB_3P1_CM, 'cm-1', NIST_ASD_MEMORY), lifetimeS: sourced(870e-9, FROM_MEMORY) },
   ],
 };
 
@@ -117,6 +117,8 @@ export const CALCIUM_40: BuiltinSpecies = {
       key: '3P1',
       designation: '4s 4p 3P°1',
       ...energy(455986240494.15, 'kHz', FROM_MEMORY),
+      // Natural width of the 657 nm intercombination line Γ/2π ≈ 374 Hz, so τ = 1/(2π·374 Hz).
+      lifetimeS: sourced(1 / (2 * Math.PI * 374), FROM_MEMORY),
     },
   ],
 };

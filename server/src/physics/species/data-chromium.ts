@@ -18,7 +18,8 @@ export const CHROMIUM_52: BuiltinSpecies = {
   twoI: sourced(0, 'even–even nucleus, I = 0 (IAEA nuclear moments table lists no moment)'),
   levels: [
     { key: 'ground', designation: '3d5 4s 7S3', energyHz: GROUND_ENERGY },
-    { key: 'P4', designation: '3d5 4p 7P°4', ...energy(23498.84, 'cm-1', NIST_ASD_MEMORY) },
+    // 425.6 nm cooling line: Γ/2π ≈ 5.0 MHz, τ ≈ 31.8 ns.
+    { key: 'P4', designation: '3d5 4p 7P°4', ...energy(23498.84, 'cm-1', NIST_ASD_MEMORY), lifetimeS: sourced(31.8e-9, FROM_MEMORY) },
   ],
   notes: 'Ground g_J not tabulated (no published value found); the LS value with the exact g_e is close to 2.0023.',
 };

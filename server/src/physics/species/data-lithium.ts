@@ -6,6 +6,8 @@ import type { BuiltinSpecies } from './types';
 const LI_GJ_GROUND = sourced(2.0023010, ARIMONDO);
 const LI_GJ_P12 = sourced(0.6668, FROM_MEMORY);
 const LI_GJ_P32 = sourced(1.335, FROM_MEMORY);
+// Measured on 6Li; the isotope changes the 2P lifetime by far less than its 9 ps uncertainty.
+const LI7_TAU_2P = sourced(27.102e-9, `${GEHM_LI6}, 6Li value (isotope difference negligible)`);
 const LI7_LINES =
   FROM_MEMORY;
 
@@ -76,6 +78,7 @@ export const LITHIUM_7: BuiltinSpecies = {
       A: mhz(91.873 / 2, FROM_MEMORY),
       gJ: LI_GJ_P12,
       ...energy(446.800132, 'THz', LI7_LINES),
+      lifetimeS: LI7_TAU_2P,
     },
     {
       key: 'P3/2',
@@ -84,6 +87,7 @@ export const LITHIUM_7: BuiltinSpecies = {
       B: mhz(-0.221, ARIMONDO_MEMORY),
       gJ: LI_GJ_P32,
       ...energy(446.810184, 'THz', LI7_LINES),
+      lifetimeS: LI7_TAU_2P,
     },
   ],
   notes: 'Ground splitting check value 803.5040866(10) MHz (from memory).',
