@@ -58,10 +58,13 @@ describe('sublevel eval on many files (in-process, one thread)', () => {
   it('searches a folder as check does, and reads --files-from lists (CRLF and blank lines allowed)', () => {
     const folder = jsonl(cli('eval', 'examples', '--format', 'jsonl').out).map((l) => l.file);
     expect(folder).toEqual([
+      'examples/fit-rubidium.sublevel',
       'examples/handmade-species.sublevel',
       'examples/lithium-beam.sublevel',
+      'examples/lithium-whole-term.sublevel',
       'examples/mistakes.sublevel',
       'examples/rubidium-bias.sublevel',
+      'examples/rubidium-spectrum.sublevel',
       'examples/shared/alkali-levels.sublevel',
       'examples/shared-species-demo.sublevel',
     ]);

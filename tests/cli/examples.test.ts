@@ -33,7 +33,7 @@ describe('sublevel check on the bundled examples', () => {
     const r = cli('check', 'examples');
     expect(r.code).toBe(1);
     // Six setups and the shared species file they may use (examples/shared/).
-    expect(r.err).toMatch(/^7 files checked: 6 errors, \d+ other findings/);
+    expect(r.err).toMatch(/^9 files checked: 6 errors, \d+ other findings/);
   });
 
   it('writes check results as JSON', () => {

@@ -53,10 +53,26 @@ describe('progress bar', () => {
       const err: string[] = [];
       const code = await startCli(['eval', 'examples', '--format', 'jsonl'], { out: (l) => out.push(l), err: (l) => err.push(l) }, { progress: s });
       expect(code).toBe(1); // examples/mistakes.sublevel
-      expect(out).toHaveLength(6);
-      expect(err).toEqual(['6 files evaluated: 1 with errors or not read']);
+      expect(out).toHaveLength(9);
+      expect(err).toEqual(['9 files evaluated: 1 with errors or not read']);
       if (isTTY) {
-        expect(s.written.some((w) => /^\reval \[[#-]{30}\] [0-6]\/6\x1b\[K$/.test(w))).toBe(true);
+        expect(s.written.some((w) => /^\reval \[[#-]{30}\] [0-9]\/9\x1b\[K$/.test(w))).toBe(true);
+        expect(s.written.at(-1)).toBe('\r\x1b[K');
+      } else expect(s.written).toEqual([]);
+    }
+  });
+
+  it('shows on a terminal during a long sweep (per m block) and is cleared before the CSV; nothing on a pipe', async () => {
+    for (const isTTY of [true, false]) {
+      const s = stream(isTTY);
+      const out: string[] = [];
+      const err: string[] = [];
+      const code = await startCli(['sweep', 'examples/rubidium-bias.sublevel', '--level', 'Rb87.ground', '--to', '0.1T', '--points', '5001'], { out: (l) => out.push(l), err: (l) => err.push(l) }, { progress: s });
+      expect(code).toBe(0);
+      expect(out.join('\n')).toContain('field_T');
+      if (isTTY) {
+        // 87Rb ground: 8 states in m blocks; the last update (8/8) is always drawn, then cleared.
+        expect(s.written).toContain(`\rsweep [${'#'.repeat(30)}] 8/8\x1b[K`);
         expect(s.written.at(-1)).toBe('\r\x1b[K');
       } else expect(s.written).toEqual([]);
     }

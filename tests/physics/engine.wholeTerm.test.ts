@@ -243,7 +243,7 @@ describe('whole term: bad input in plain words', () => {
     [{ ...base, levelA: [{ twoJ: 3, A: 1e6 }] }, 'term-hyperfine-underdetermined'],
     [{ ...base, levelA: [{ twoJ: 5, A: 1e6 }] }, 'term-bad-level'],
     [{ ...base, zeta: undefined, levelEnergies: [{ twoJ: 1, energyHz: 0 }] , levelA: [{ twoJ: 1, A: 1e6 }, { twoJ: 3, A: 1e5 }] }, 'term-fine-missing'],
-    [{ ...base, levelEnergies: [{ twoJ: 1, energyHz: 0 }, { twoJ: 3, energyHz: 1 }] }, 'term-fine-twice'],
+    [{ ...base, levelEnergies: [{ twoJ: 1, energyHz: 0 }, { twoJ: 3, energyHz: 1 }] }, 'term-fine-both'],
     [{ ...base, L: 10, twoS: 6, twoI: 40, radial: { orbital: 1, spinDipolar: 1, contact: 1 } }, 'basis-too-large'],
   ] as [WholeTermSpec, string][])('%o → %s', (spec, code) => {
     const r = solveLevel(spec, 0.1);

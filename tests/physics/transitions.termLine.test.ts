@@ -69,7 +69,7 @@ describe('a line between two whole terms (fine structure only, ²P → ²D)', ()
   it('bad pairs in plain words: spin change, |ΔL| > 1, different nuclei', () => {
     const codes = (l: TermLineEnd, u: TermLineEnd): string[] => termDipoleLine(l, u, 0.1).issues.map((i) => i.code);
     expect(codes({ spec: p, twoS: 1, L: 1 }, { spec: { ...d, twoS: 3 }, twoS: 3, L: 2 })).toEqual(['line-spin-change']);
-    expect(codes({ spec: p, twoS: 1, L: 1 }, { spec: { ...d, L: 3 }, twoS: 1, L: 3 })).toEqual(['line-delta-l']);
+    expect(codes({ spec: p, twoS: 1, L: 1 }, { spec: { ...d, L: 3 }, twoS: 1, L: 3 })).toEqual(['line-term-delta-l']);
     expect(codes(ground, { spec: p, twoS: 1, L: 1 })).toEqual(['line-nucleus-mismatch']);
   });
 });

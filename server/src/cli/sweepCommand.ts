@@ -12,6 +12,7 @@ import { type EngineIssue, sweepLevel, type SweepResult } from '../physics/engin
 import type { Problem, Range } from '../format/ast';
 import type { LevelModel, SetupModel } from '../model/types';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
+import { createProgress, type Progress } from './progress';
 import { OUT_OPTION, ROOT_OPTION, rootOption } from './files';
 import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
 import { jsonText } from './escape';
@@ -65,7 +66,14 @@ export function runSweep(args: ParsedArgs, ctx: CliContext): number {
     throw new FileProblemError(file, [cliProblem('nothing-to-compute', `level '${level.name}' has problems to fix before it can be swept${listed}`, at)]);
   }
 
-  const sweep = sweepLevel(spec, fromT, toT, points, { crossings });
+  // A bar on a terminal for long sweeps (per m block); the bar hides itself when stderr is piped.
+  let progress: Progress | undefined;
+  const onProgress = (done: number, total: number): void => {
+    progress ??= createProgress(ctx.progress, 'sweep', total);
+    progress.update(done);
+  };
+  const sweep = sweepLevel(spec, fromT, toT, points, { crossings, onProgress });
+  progress?.clear();
   const errors = sweep.issues.filter((i) => i.severity === 'error');
   if (errors.length > 0) {
     throw new FileProblemError(file, errors.map((e) => ({ ...cliProblem('nothing-to-compute', e.message, at), code: e.code })));

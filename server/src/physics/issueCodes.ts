@@ -60,7 +60,18 @@ export const PHYSICS_RULES = {
   'crossings-skipped': { severity: 'info', summary: 'A sweep too large to scan for level crossings.' },
   'too-many-crossings': { severity: 'warning', summary: 'More level crossings than are reported; the first ones are listed.' },
   'degenerate-block': { severity: 'warning', summary: 'Degenerate states in one m block; their curvature leaves those pairs out.' },
+  // The whole-term engine (engine/termHyperfineParameters.ts, validateTerm.ts, closedForms.ts).
+  'no-closed-form': { severity: 'error', summary: 'Closed forms asked for a whole term with its hyperfine structure, which has none.' },
+  'term-no-hyperfine': { severity: 'error', summary: 'A whole term with a nucleus but no usable hyperfine data.' },
+  'term-hyperfine-underdetermined': { severity: 'error', summary: 'One A constant cannot fix the orbital, spin-dipolar and contact parts of a term.' },
+  'term-hyperfine-misfit': { severity: 'warning', summary: 'The level A constants do not fit one set of radial hyperfine parameters.' },
+  'term-quadrupole-ignored': { severity: 'warning', summary: 'Quadrupole constants on a term they cannot act on (need L ≥ 1, I ≥ 1, J ≥ 1).' },
+  'term-bad-level': { severity: 'error', summary: 'A per-J value for a J the term does not have, not finite, or given twice.' },
+  'term-fine-both': { severity: 'error', summary: 'A term spec with both ζ and J-level energies (the model keeps only E_J).' },
+  'term-hyperfine-twice': { severity: 'error', summary: 'Hyperfine data given both as radial parameters and as J-level constants.' },
   // Transitions (transitions/).
+  'line-term-delta-l': { severity: 'error', summary: 'A line with a whole term whose ΔL is beyond 0, ±1 (or L = 0 ↔ 0): no components in LS coupling.' },
+  'line-spin-change': { severity: 'error', summary: 'An LS-coupled electric-dipole line between terms of different spin: no components.' },
   'line-level-kind': { severity: 'error', summary: 'A line end that is not a level with J (a whole term, or nothing known).' },
   'line-term-invalid': { severity: 'error', summary: 'A line end whose term symbol is not valid.' },
   'line-nucleus-mismatch': { severity: 'error', summary: 'The two levels of a line have different nuclear spins.' },

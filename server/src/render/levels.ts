@@ -23,7 +23,8 @@ import { fieldDisplayUnit, formatIn, formatSI, frequencyUnit } from './units';
 import type { LevelCurve, LevelsViewData, RenderTheme } from './viewData';
 
 const LABEL_SPACING = 13;
-const LABEL_MAX_CHARS = 24;
+/** Long enough for a whole term's high-field label |m_L, m_S, m_I⟩ with fractions (26 characters). */
+const LABEL_MAX_CHARS = 28;
 const AXIS_X = 60;
 const MIN_PLOT_WIDTH = 320;
 

@@ -93,6 +93,7 @@ function runSweep(model: LevelModel, fieldsT: Float64Array, options: SweepOption
       return null;
     }
     skipped += left;
+    options.onProgress?.(slots.length, model.dimension);
   }
   if (skipped > 0) {
     issues.push(issue('warning', 'degenerate-block', 'Some states of one m block were degenerate; their curvature leaves those pairs out.'));

@@ -159,6 +159,8 @@ export interface SweepOptions {
    * every field. Both give the same numbers to round-off (docs/engine.md).
    */
   method?: 'series' | 'per-field';
+  /** Called after each m block with the states swept so far and the level's total (progress of long sweeps). */
+  onProgress?: (statesDone: number, statesTotal: number) => void;
 }
 
 export interface SweepResult {

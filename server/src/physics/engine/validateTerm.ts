@@ -62,7 +62,7 @@ function checkTermSize(twoL: number, twoS: number, twoI: number, issues: EngineI
 function fineEnergies(s: WholeTermSpec, jValues: number[], issues: EngineIssue[]): Map<number, number> | null {
   const hasZeta = s.zeta !== undefined;
   if (hasZeta && s.levelEnergies !== undefined) {
-    issues.push(issue('error', 'term-fine-twice', 'Give the fine structure once: either ζ or the energies of the J levels.'));
+    issues.push(issue('error', 'term-fine-both', 'Give the fine structure once: either ζ or the energies of the J levels.'));
     return null;
   }
   if (hasZeta) {
@@ -99,7 +99,7 @@ export function validateTerm(s: WholeTermSpec, issues: EngineIssue[]): CleanTerm
   if (s.twoI === 0) {
     // Fine structure alone (e.g. from measured J-level energies): nothing for hyperfine data to act on.
     if (s.radial !== undefined || s.levelA !== undefined || s.levelB !== undefined) {
-      issues.push(issue('warning', 'no-nucleus', 'With I = 0 there is no hyperfine structure; the hyperfine data have no effect.'));
+      issues.push(issue('info', 'no-nucleus', 'With I = 0 there is no hyperfine structure; the hyperfine data have no effect.'));
     }
     return { ...base, radial: { orbital: 0, spinDipolar: 0, contact: 0 }, quadrupoleL: 0, hyperfineSource: 'none' };
   }

@@ -55,7 +55,7 @@ function checkEnds(lower: TermLineEnd, upper: TermLineEnd, issues: TransitionIss
     return false;
   }
   if (Math.abs(lower.L - upper.L) > 1 || (lower.L === 0 && upper.L === 0)) {
-    issues.push(issue('error', 'line-delta-l', 'In LS coupling an electric-dipole line needs ΔL = 0 or ±1, and not L = 0 ↔ 0; these terms have no components here.'));
+    issues.push(issue('error', 'line-term-delta-l', 'In LS coupling an electric-dipole line needs ΔL = 0 or ±1, and not L = 0 ↔ 0; these terms have no components here.'));
     return false;
   }
   if (nucleusOf(lower.spec) !== nucleusOf(upper.spec)) {
