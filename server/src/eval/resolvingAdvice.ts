@@ -16,7 +16,7 @@ export function resolvingAdvice(r: BeamResult, geometry: BeamGeometry): string |
   if (r.resolving_options.length === 0) {
     return `The worst dip is ${now}; no gradient, magnet length or drift up to 100 times the present one, no narrower slits or detector and no narrower speed spread deepens it.`;
   }
-  const parts = r.resolving_options.map((o) => `${changeText(o, geometry)} ${o.change === 'slits' ? 'give' : 'gives'} ${percentText(o.worst_dip_ratio, 2)}${o.resolves_all ? ' and resolves every pair' : ''}`);
+  const parts = r.resolving_options.map((o) => `${changeText(o, geometry)} ${o.change === 'slits' ? 'give' : 'gives'} ${percentText(o.worst_dip_ratio, 2)}${o.resolves_all ? (o.change === 'slits' ? ' and resolve every pair' : ' and resolves every pair') : ''}`);
   return `Worst dip now ${now} (resolved at ≤ ${percentText(r.criterion_dip_ratio, 2)}); computed on this setup: ${parts.join('; ')}.`;
 }
 
