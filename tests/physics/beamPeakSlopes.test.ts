@@ -56,7 +56,7 @@ describe('peak slopes against central differences of the exact maximum', () => {
         const members = (shift: (i: number) => number) => peak.memberIndices.map((i) => ({ k: ks[i]! + shift(i), weight: populations[i]! / popSum }));
         const x0 = maximum(members(() => 0), input, image, peak.positionM);
         expect(Math.abs(x0 - peak.positionM), peak.members.join("+")).toBeLessThan(1e-4 * Math.abs(x0)); // the same maximum the pattern refined
-        const slopes = peakSlopes(input, x0, peak.memberIndices)!;
+        const slopes = peakSlopes(input, [{ positionM: x0, memberIndices: peak.memberIndices }])[0]!;
         peak.memberIndices.forEach((i, j) => {
           const h = 2e-3 * Math.abs(ks[i]!); // moves the maximum ~2e-5 m, 1e4 times its placement error
           const at = (d: number) => maximum(members((q) => (q === i ? d : 0)), input, image, x0);
@@ -74,7 +74,7 @@ describe('peak slopes against central differences of the exact maximum', () => {
     const image = slitImage(wide);
     const members = [{ k: deflectionCoefficient(0.5 * MU, input.massKg, wide), weight: 1 }];
     const x0 = maximum(members, input, image, detectorPattern(input).peaks[0]!.positionM);
-    const slopes = peakSlopes(input, x0, [0])!;
+    const slopes = peakSlopes(input, [{ positionM: x0, memberIndices: [0] }])[0]!;
     for (const [key, slope] of [['boxAM', slopes.perBoxA], ['boxBM', slopes.perBoxB]] as const) {
       const h = 0.02 * image[key];
       const at = (d: number) => maximum(members, input, { ...image, [key]: image[key] + d }, x0);
@@ -87,14 +87,14 @@ describe('peak slopes against central differences of the exact maximum', () => {
   it('a lone peak far out moves almost in proportion to its coefficient (x_p ≈ k⟨·⟩: dx_p/dk ≈ x_p/k)', () => {
     const input = { ...setup(false), sublevels: [{ label: 'a', momentJT: 5 * MU, population: 1 }] };
     const peak = detectorPattern(input).peaks[0]!;
-    const s = peakSlopes(input, peak.positionM, peak.memberIndices)!;
+    const s = peakSlopes(input, [peak])[0]!;
     const k = deflectionCoefficient(5 * MU, input.massKg, geometry);
     expect((s.perK[0]! * k) / peak.positionM).toBeCloseTo(1, 2);
   });
 
   it('no slopes where the refinement does not run: single speed, point detector', () => {
     const input = setup(false);
-    expect(peakSlopes({ ...input, source: { kind: 'single', speed: 500 } }, 1e-4, [0])).toBeUndefined();
-    expect(peakSlopes({ ...input, geometry: { ...geometry, detectorWidthM: 0 } }, 1e-4, [0])).toBeUndefined();
+    expect(peakSlopes({ ...input, source: { kind: 'single', speed: 500 } }, [{ positionM: 1e-4, memberIndices: [0] }])[0]).toBeUndefined();
+    expect(peakSlopes({ ...input, geometry: { ...geometry, detectorWidthM: 0 } }, [{ positionM: 1e-4, memberIndices: [0] }])[0]).toBeUndefined();
   });
 });

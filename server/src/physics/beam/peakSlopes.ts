@@ -12,7 +12,8 @@ import { cumulativeAt } from './depositDeflections';
 import { deflectionCoefficient } from './deflection';
 import type { PatternInput } from './detectorPattern';
 import { resolveOptions } from './patternOptions';
-import { slitImage } from './slitImage';
+import type { RefineMember } from './peakRefine';
+import { slitImage, type SlitImage } from './slitImage';
 import type { SpeedLaw } from './speedLaw';
 import { speedLawFor } from './speedLawFor';
 
@@ -26,36 +27,46 @@ export interface PeakSlopes {
 
 const at = new Float64Array(2);
 
-/** F(e), H(e) and ∂H/∂k at e for one member. */
-function closedForms(e: number, k: number, law: SpeedLaw): { F: number; H: number; Hk: number } {
-  if (k === 0) return { F: e > 0 ? 1 : 0, H: Math.max(e, 0), Hk: e >= 0 ? -law.meanInverseSquare : 0 };
+/** F(e) = P(z ≤ e) and ∂H/∂k = −E[u; z ≤ e] at e for one member. */
+function closedForms(e: number, k: number, law: SpeedLaw): { F: number; Hk: number } {
+  if (k === 0) return { F: e > 0 ? 1 : 0, Hk: e >= 0 ? -law.meanInverseSquare : 0 };
   cumulativeAt(e, k, law, at);
-  return { F: at[0], H: e * at[0] - at[1], Hk: -at[1] / k };
+  return { F: at[0], Hk: -at[1] / k };
+}
+
+export interface PeakAt {
+  positionM: number;
+  /** Indices into the input's sublevels: the pattern's own grouping. */
+  memberIndices: readonly number[];
 }
 
 /**
- * Slopes of the peak at `positionM` made of the sublevels `memberIndices` of `input` (the pattern's
- * own grouping and weights). Undefined where the position is not a smooth maximum of the exact profile.
+ * Slopes of each peak (positions and members as the pattern found them; weights as in the pattern).
+ * Undefined for a peak that is not a smooth maximum of the exact profile.
  */
-export function peakSlopes(input: PatternInput, positionM: number, memberIndices: readonly number[]): PeakSlopes | undefined {
+export function peakSlopes(input: PatternInput, peaks: readonly PeakAt[]): (PeakSlopes | undefined)[] {
   const { options } = resolveOptions(input);
   const image = slitImage(input.geometry);
-  const { boxAM: a, boxBM: b, detectorM: w } = image;
-  if (input.source.kind === 'single' || !(a > 0 && b > 0 && w > 0) || memberIndices.length === 0) return undefined;
+  if (input.source.kind === 'single' || !(image.boxAM > 0 && image.boxBM > 0 && image.detectorM > 0)) return peaks.map(() => undefined);
   const law = speedLawFor(input.source, input.massKg, options.speedPanels);
   const popSum = input.sublevels.reduce((s, x) => s + x.population, 0);
+  const members = (p: PeakAt) =>
+    p.memberIndices.map((i) => ({ k: deflectionCoefficient(input.sublevels[i]!.momentJT, input.massKg, input.geometry), weight: input.sublevels[i]!.population / popSum }));
+  return peaks.map((p) => (p.memberIndices.length > 0 ? slopesAt(p.positionM, members(p), law, image) : undefined));
+}
+
+function slopesAt(x: number, members: readonly RefineMember[], law: SpeedLaw, image: SlitImage): PeakSlopes | undefined {
+  const { boxAM: a, boxBM: b, detectorM: w } = image;
   let pxx = 0;
   let spreadA = 0;
   let spreadB = 0;
   const pxk: number[] = [];
-  for (const i of memberIndices) {
-    const sub = input.sublevels[i]!;
-    const k = deflectionCoefficient(sub.momentJT, input.massKg, input.geometry);
-    const c0 = sub.population / popSum / (a * b * w);
+  for (const { k, weight } of members) {
+    const c0 = weight / (a * b * w);
     let dk = 0;
     for (const s of [-1, 1]) {
       for (const t of [-1, 1]) {
-        const c = positionM + (s * a) / 2 + (t * b) / 2;
+        const c = x + (s * a) / 2 + (t * b) / 2;
         const hi = closedForms(c + w / 2, k, law);
         const lo = closedForms(c - w / 2, k, law);
         const curve = s * t * c0 * (hi.F - lo.F);
