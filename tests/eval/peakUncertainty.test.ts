@@ -58,9 +58,21 @@ describe('peak position uncertainty', () => {
     }
   });
 
+  it('a point detector: no slope, so no uncertainty, and the warning uncertainty-undefined on the beam says so', () => {
+    const a = analyze(setup('180(2) T/m').replace('detector = 25 um', 'detector = 0 um'));
+    const b = a.result!.beams[0]!;
+    expect(b.peaks.some((p) => p.position_m !== 0)).toBe(true);
+    for (const p of b.peaks) expect(p.position_m_unc).toBeUndefined();
+    const w = a.problems.find((p) => p.code === 'uncertainty-undefined');
+    expect(w?.severity).toBe('warning');
+    expect(w?.message).toContain("beam 'main'");
+    expect(w?.range.start).toEqual({ line: 8, character: 5 });
+  });
+
   it('is absent when nothing uncertain reaches the beam, and an undeflected peak at 0 gets none printed as noise', () => {
     const b = beam(setup('180 T/m'));
     for (const p of b.peaks) expect(p.position_m_unc).toBeUndefined();
     for (const s of b.sublevels) expect(s.peak_m_unc).toBeUndefined();
+    expect(analyze(setup('180 T/m').replace('detector = 25 um', 'detector = 0 um')).problems.map((p) => p.code)).not.toContain('uncertainty-undefined');
   });
 });

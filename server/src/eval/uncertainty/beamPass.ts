@@ -8,6 +8,7 @@
 import { peakSlopes, type PeakAt } from '../../physics/beam';
 import { BOHR_MAGNETON, PLANCK_H } from '../../physics/constants';
 import { combine, hasSensitivity, type Sensitivities, levelDerivatives, NO_SENSITIVITY, scaled, throughParams } from '../../physics/uncertainty';
+import type { Problem } from '../../format/ast';
 import type { BeamModel } from '../../model/types';
 import { beamInputs } from '../beamInput';
 import type { GJLookup } from '../gJLookup';
@@ -16,7 +17,7 @@ import type { BeamResult } from '../resultTypes';
 import { fieldKey, type SetupInputs } from './inputs';
 import { setUnc } from './uncField';
 
-export function beamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: SetupInputs): void {
+export function beamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: SetupInputs, problems: Problem[]): void {
   const { level, magnet, driftM } = beam;
   const mass = beam.species?.massKg?.value;
   const mis = r.speeds?.mean_inverse_square_s2_per_m2;
@@ -52,11 +53,11 @@ export function beamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, 
     setUnc(s, 'mean_deflection_m', sZ, inp.table);
     deflections.push(sZ);
   });
-  peakUncertainty(r, beam, gJOf, inp, deflections, combine([[1, geo?.length ?? NO_SENSITIVITY], [1, drift]]));
+  peakUncertainty(r, beam, gJOf, inp, deflections, combine([[1, geo?.length ?? NO_SENSITIVITY], [1, drift]]), problems);
 }
 
 /** `peaks[].position_m_unc` and `sublevels[].peak_m_unc`; `flight` holds the sensitivities of L1 + L2. */
-function peakUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: SetupInputs, deflections: Sensitivities[], flight: Sensitivities): void {
+function peakUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: SetupInputs, deflections: Sensitivities[], flight: Sensitivities, problems: Problem[]): void {
   const input = beamInputs(beam, gJOf)?.input;
   const mis = r.speeds?.mean_inverse_square_s2_per_m2;
   if (!input || !mis || input.sublevels.length !== deflections.length) return;
@@ -74,4 +75,14 @@ function peakUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: Se
   };
   own.forEach((p, j) => setUnc(r.sublevels[p.memberIndices[0]!]!, 'peak_m', sensOf(p, j), inp.table));
   shared.forEach((p, j) => setUnc(r.peaks[j]!, 'position_m', sensOf(p, own.length + j), inp.table));
+  // A deflected peak whose deflections are uncertain but which got no slope: say so (nothing silent).
+  const missed = r.peaks.some((p, j) => p.position_m !== 0 && p.position_m_unc === undefined && !slopes[own.length + j] && shared[j]!.memberIndices.some((i) => hasSensitivity(deflections[i]!)));
+  if (missed) {
+    problems.push({
+      code: 'uncertainty-undefined',
+      severity: 'warning',
+      message: `beam '${beam.name}': its peak positions have uncertain inputs but no first-order uncertainty is shown; the exact slope of a peak needs a spread of speeds and a detector of nonzero width`,
+      range: beam.nameRange,
+    });
+  }
 }
