@@ -68,6 +68,10 @@ describe('sublevel eval --format json with uncertain inputs (version 2)', () => 
     );
     expect(s.mean_deflection_m_unc / Math.abs(s.mean_deflection_m)).toBeCloseTo(rel, 10);
   });
+  it('gives every deflected peak a position uncertainty (docs/uncertainty.md; value checked in tests/eval/peakUncertainty.test.ts)', () => {
+    for (const p of doc.beams[0].peaks) expect(p.position_m_unc / Math.abs(p.position_m)).toBeGreaterThan(1e-3);
+    for (const s of doc.beams[0].sublevels) expect(s.peak_m_unc).toBeGreaterThan(0);
+  });
   it('gives the term its fine-structure shifts with u = |shift/ζ| u(ζ) (linear in ζ)', () => {
     for (const f of doc.terms[0].fine_levels) expect(f.shift_Hz_unc).toBeCloseTo(Math.abs(f.shift_Hz / 6.7e9) * 2e7, 3);
   });

@@ -15,7 +15,9 @@ describe('sublevel sweep', () => {
     expect(rows[0]).toBe(`# sublevel sweep: file=${RB}; level=Rb87.ground`);
     // field_T, then 8 energies and 8 moments, states sorted by zero-field energy (F=1 first), ties by energy at the top field.
     const header = rows[1]!.split('","');
-    expect(header).toHaveLength(16);
+    // Then one energy_Hz_unc column per state: the built-in A carries its published uncertainty (docs/csv.md).
+    expect(header).toHaveLength(24);
+    expect(header[16]).toBe('energy_Hz_unc[F=1, m_F=+1 -> m_J=-1/2, m_I=+3/2]');
     expect(header[0]).toBe('field_T,"energy_Hz[F=1, m_F=+1 -> m_J=-1/2, m_I=+3/2]');
     expect(rows[1]).toContain('"energy_Hz[F=2, m_F=+2 -> m_J=+1/2, m_I=+3/2]"');
     expect(rows[1]).toContain('"moment_J_per_T[F=2, m_F=+2 -> m_J=+1/2, m_I=+3/2]"');

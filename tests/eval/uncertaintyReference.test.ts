@@ -6,6 +6,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
+import { frequencyText, withUncertainty } from '../../server/src/eval/quantityText';
 import { BOHR_MAGNETON_HZ_PER_T } from '../../server/src/physics/constants';
 
 interface McCase { name: string; A_Hz: number; u_A_Hz: number; f_Hz: number; u_f_Hz: number; field_T: number; mc_std_T: number; mc_std_uncertainty_T: number }
@@ -83,6 +84,28 @@ describe('built-in data carry the uncertainties their source publishes', () => {
     expect(l.hyperfine!.intervals[0]!.interval_Hz).toBeCloseTo(3035732439.0, 0);
     expect(l.hyperfine!.intervals[0]!.interval_Hz_unc).toBeCloseTo(6.0, 9);
     expect(r.uncertainty_inputs!.map((i) => i.id).sort()).toEqual(['level:Rb85.ground.A', 'level:Rb85.ground.g_J', 'species:Rb85.g_I']);
+  });
+  it('Rb87 ground: the splitting 2A prints with the published 6.834 682 610 904 290(90) GHz', () => {
+    const r = analyze('species Rb87\n  level ground: 5s 2S1/2\n  level p: 5p 2P°3/2\n').result!;
+    const [g, p] = r.levels;
+    // Rubidium 87 D line data compilation, hyperfine-constant table: A(5²S1/2) = h·3.417 341 305 452 145(45) GHz,
+    // A(5²P3/2) = h·84.7185(20) MHz, B(5²P3/2) = h·12.4965(37) MHz; the ground splitting 6.834 682 610 904 290(90) GHz.
+    expect(g!.hyperfine!.A_Hz.uncertainty).toBeCloseTo(4.5e-5, 12);
+    expect(p!.hyperfine!.A_Hz.uncertainty).toBeCloseTo(2000, 6);
+    expect(p!.hyperfine!.B_Hz!.uncertainty).toBeCloseTo(3700, 6);
+    expect(g!.hyperfine!.intervals[0]!.interval_Hz_unc).toBeCloseTo(9e-5, 12);
+    expect(withUncertainty(g!.hyperfine!.intervals[0]!.interval_Hz, g!.hyperfine!.intervals[0]!.interval_Hz_unc, (v) => frequencyText(v, 15))).toBe('6.83468261090429(9) GHz');
+  });
+  it('Cs133 6p: A, B and C with the published uncertainties (the ground A is exact by the definition of the second)', () => {
+    const r = analyze('species Cs133\n  level ground: 6s 2S1/2\n  level p1: 6p 2P°1/2\n  level p: 6p 2P°3/2\n').result!;
+    const [g, p1, p] = r.levels;
+    // Cesium D line data compilation, hyperfine-constant table: A(6²P1/2) = h·291.9201(75) MHz, A(6²P3/2) = h·50.288 27(23) MHz,
+    // B(6²P3/2) = h·−0.4934(17) MHz, C(6²P3/2) = h·0.560(70) kHz.
+    expect(g!.hyperfine!.A_Hz.uncertainty).toBeUndefined();
+    expect(p1!.hyperfine!.A_Hz.uncertainty).toBeCloseTo(7500, 6);
+    expect(p!.hyperfine!.A_Hz.uncertainty).toBeCloseTo(230, 6);
+    expect(p!.hyperfine!.B_Hz!.uncertainty).toBeCloseTo(1700, 6);
+    expect(p!.hyperfine!.C_Hz!.uncertainty).toBeCloseTo(70, 9);
   });
 });
 

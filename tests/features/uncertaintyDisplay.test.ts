@@ -26,6 +26,14 @@ describe('uncertainty in the editor', () => {
     const h = plain(hoverText(hover(analysisOf(text), position)));
     expect(h).toMatch(/resonant at \d+\.\d+\(\d+\) G/);
   });
+  it('hover on a beam: peak positions with their uncertainty (gradient written uncertain)', () => {
+    const setup = `${LEVEL}magnet sel\n  field = 0.45 T\n  gradient = 180(2) T/m\n  length = 8 cm\nbeam ma|in\n  species = Li7\n  level = ground\n  source = oven 720 K\n  slits = 80 um, 50 um apart 40 cm\n  magnet = sel\n  drift = 35 cm\n  detector = 25 um\n`;
+    const { text, position } = atCursor(setup);
+    const h = plain(hoverText(hover(analysisOf(text), position)));
+    // ⟨z⟩ ∝ G: a 1.1 % gradient moves the ±0.88 mm peaks by about 10 µm.
+    expect(h).toMatch(/-8\d\d\(1\d\) µm/);
+    expect(h).toMatch(/[^-]8\d\d\(1\d\) µm/);
+  });
   it('no uncertainty written: no parentheses', () => {
     const hints = inlayHints(analysisOf('species Demo\n  mass = 40 u\n  level p: 3p 2P°3/2\nfield b = 1 G\n'), { start: { line: 0, character: 0 }, end: { line: 10, character: 0 } }).map((h) => String(h.label));
     expect(hints.join(' ')).not.toMatch(/\(\d+\)/);

@@ -206,14 +206,14 @@ function beamReport(b: BeamResult): string[] {
   out.push(
     ...table(
       ['sublevel', 'high-field label', 'moment/μ_B', 'mean deflection', 'own peak at'],
-      b.sublevels.map((s) => [s.label, s.high_label, withUncertainty(s.moment_bohr, s.moment_bohr_unc, (v) => trimNumber(v, 6)), withUncertainty(s.mean_deflection_m, s.mean_deflection_m_unc, (v) => lengthText(v, 4, noise)), s.peak_m === null ? 'no atoms' : lengthText(s.peak_m, 4, noise)]),
+      b.sublevels.map((s) => [s.label, s.high_label, withUncertainty(s.moment_bohr, s.moment_bohr_unc, (v) => trimNumber(v, 6)), withUncertainty(s.mean_deflection_m, s.mean_deflection_m_unc, (v) => lengthText(v, 4, noise)), s.peak_m === null ? 'no atoms' : withUncertainty(s.peak_m, s.peak_m_unc, (v) => lengthText(v, 4, noise))]),
     ).map((x) => '  ' + x),
   );
   out.push('  peaks on the detector:');
   out.push(
     ...table(
       ['position', 'FWHM', 'sublevels'],
-      b.peaks.map((p) => [lengthText(p.position_m, 4, noise), p.fwhm_m === null ? 'off grid' : lengthText(p.fwhm_m), p.members.join('; ')]),
+      b.peaks.map((p) => [withUncertainty(p.position_m, p.position_m_unc, (v) => lengthText(v, 4, noise)), p.fwhm_m === null ? 'off grid' : lengthText(p.fwhm_m), p.members.join('; ')]),
     ).map((x) => '    ' + x),
   );
   for (const p of b.pairs) {

@@ -202,6 +202,7 @@ export interface BeamSublevelResult {
   mean_deflection_m_unc?: number;
   /** Maximum of this sublevel's own profile; null when it has no atoms (population 0). */
   peak_m: number | null;
+  peak_m_unc?: number;
 }
 
 export type ResolvingChange = 'gradient' | 'magnet_length' | 'drift' | 'slits' | 'detector' | 'speed_spread';
@@ -215,7 +216,7 @@ export interface BeamResult {
   computed: boolean;
   speeds?: { mean_m_per_s: number; most_probable_m_per_s: number; rms_spread_m_per_s: number; mean_inverse_square_s2_per_m2: number };
   sublevels: BeamSublevelResult[];
-  peaks: { position_m: number; fwhm_m: number | null; height_per_m: number; members: string[] }[];
+  peaks: { position_m: number; position_m_unc?: number; fwhm_m: number | null; height_per_m: number; members: string[] }[];
   /** Neighbouring peaks: resolved when the minimum between them is at most `criterion_dip_ratio` of the smaller peak. */
   pairs: { left: number; right: number; dip_ratio: number; resolved: boolean }[];
   criterion_dip_ratio: number;

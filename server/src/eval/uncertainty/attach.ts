@@ -15,7 +15,7 @@ import { setUnc } from './uncField';
 
 type Parts = Pick<EvaluationResult, 'levels' | 'terms' | 'beams' | 'lines' | 'resonances' | 'fields' | 'magnets'>;
 
-/** Mutates `parts`; returns the problems found (degenerate states, double roots) and the input list for the JSON. */
+/** Mutates `parts`; returns the problems found (degenerate states, double roots, peaks without a slope) and the input list for the JSON. */
 export function attachUncertainty(model: SetupModel, parts: Parts, gJOf: GJLookup): { problems: Problem[]; inputs: EvaluationResult['uncertainty_inputs'] } {
   const inp = setupInputs(model);
   const problems: Problem[] = [];
@@ -31,7 +31,7 @@ export function attachUncertainty(model: SetupModel, parts: Parts, gJOf: GJLooku
   }
   parts.beams.forEach((r, i) => {
     const b = model.beams[i];
-    if (b && b.name === r.name) beamUncertainty(r, b, gJOf, inp);
+    if (b && b.name === r.name) beamUncertainty(r, b, gJOf, inp, problems);
   });
   parts.lines.forEach((r, i) => {
     const l = model.lines[i];

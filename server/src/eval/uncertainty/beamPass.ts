@@ -1,18 +1,23 @@
 /**
  * `*_unc` of a beam's sublevels: the exact moment at the magnet's field and the flux-averaged
  * deflection ⟨z⟩ = μ G (L1²/2 + L1 L2) ⟨1/v²⟩ / M, which is linear in each of μ, G and the
- * lever arm. Peak positions come from a convolved profile and are not propagated (docs/uncertainty.md).
+ * lever arm. Peak positions (of the pattern and of each sublevel's own profile) move with the
+ * deflection coefficients k_i = ⟨z_i⟩/⟨1/v²⟩ of their members and with the slit image, whose box
+ * widths grow with L1 + L2: dx/dp = Σ_i (∂x/∂k_i) ∂k_i/∂p + (∂x/∂a ∂a/∂L + ∂x/∂b ∂b/∂L) ∂L/∂p.
  */
+import { peakSlopes, type PeakAt } from '../../physics/beam';
 import { BOHR_MAGNETON, PLANCK_H } from '../../physics/constants';
-import { combine, hasSensitivity, levelDerivatives, NO_SENSITIVITY, scaled, throughParams } from '../../physics/uncertainty';
+import { combine, hasSensitivity, type Sensitivities, levelDerivatives, NO_SENSITIVITY, scaled, throughParams } from '../../physics/uncertainty';
+import type { Problem } from '../../format/ast';
 import type { BeamModel } from '../../model/types';
+import { beamInputs } from '../beamInput';
 import type { GJLookup } from '../gJLookup';
 import { hyperfineSpec } from '../levelSpec';
 import type { BeamResult } from '../resultTypes';
 import { fieldKey, type SetupInputs } from './inputs';
 import { setUnc } from './uncField';
 
-export function beamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: SetupInputs): void {
+export function beamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: SetupInputs, problems: Problem[]): void {
   const { level, magnet, driftM } = beam;
   const mass = beam.species?.massKg?.value;
   const mis = r.speeds?.mean_inverse_square_s2_per_m2;
@@ -33,6 +38,7 @@ export function beamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, 
   const L2 = driftM.value;
   const lever = 0.5 * L1 * L1 + L1 * L2;
   const per = mis / mass;
+  const deflections: Sensitivities[] = [];
   r.sublevels.forEach((s, k) => {
     const mu = s.moment_J_per_T;
     const sMu = scaled(-PLANCK_H, throughParams(d[k]!.dSlope, params));
@@ -45,5 +51,38 @@ export function beamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, 
       [mu * G * L1 * per, drift],
     ]);
     setUnc(s, 'mean_deflection_m', sZ, inp.table);
+    deflections.push(sZ);
   });
+  peakUncertainty(r, beam, gJOf, inp, deflections, combine([[1, geo?.length ?? NO_SENSITIVITY], [1, drift]]), problems);
+}
+
+/** `peaks[].position_m_unc` and `sublevels[].peak_m_unc`; `flight` holds the sensitivities of L1 + L2. */
+function peakUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: SetupInputs, deflections: Sensitivities[], flight: Sensitivities, problems: Problem[]): void {
+  const input = beamInputs(beam, gJOf)?.input;
+  const mis = r.speeds?.mean_inverse_square_s2_per_m2;
+  if (!input || !mis || input.sublevels.length !== deflections.length) return;
+  const index = new Map(input.sublevels.map((s, i) => [s.label, i]));
+  const own: PeakAt[] = r.sublevels.flatMap((s, i) => (s.peak_m === null ? [] : [{ positionM: s.peak_m, memberIndices: [i] }]));
+  const shared: PeakAt[] = r.peaks.map((p) => ({ positionM: p.position_m, memberIndices: p.members.map((m) => index.get(m) ?? -1) }));
+  if (shared.some((p) => p.memberIndices.includes(-1))) return;
+  const slopes = peakSlopes(input, [...own, ...shared]);
+  const { slit1M, slit2M, slitSeparationM: d } = input.geometry;
+  const sensOf = (p: PeakAt, j: number): Sensitivities | undefined => {
+    const s = slopes[j];
+    if (!s) return undefined;
+    // a = w2 (1 + L/d), b = w1 L/d with L = L1 + L2 (slitImage.ts).
+    return combine([...p.memberIndices.map((i, q) => [s.perK[q]! / mis, deflections[i]!] as const), [(s.perBoxA * slit2M + s.perBoxB * slit1M) / d, flight]]);
+  };
+  own.forEach((p, j) => setUnc(r.sublevels[p.memberIndices[0]!]!, 'peak_m', sensOf(p, j), inp.table));
+  shared.forEach((p, j) => setUnc(r.peaks[j]!, 'position_m', sensOf(p, own.length + j), inp.table));
+  // A deflected peak whose deflections are uncertain but which got no slope: say so (nothing silent).
+  const missed = r.peaks.some((p, j) => p.position_m !== 0 && p.position_m_unc === undefined && !slopes[own.length + j] && shared[j]!.memberIndices.some((i) => hasSensitivity(deflections[i]!)));
+  if (missed) {
+    problems.push({
+      code: 'uncertainty-undefined',
+      severity: 'warning',
+      message: `beam '${beam.name}': its peak positions have uncertain inputs but no first-order uncertainty is shown; the exact slope of a peak needs a spread of speeds and a detector of nonzero width`,
+      range: beam.nameRange,
+    });
+  }
 }

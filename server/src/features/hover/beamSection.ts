@@ -81,7 +81,7 @@ function results(r: BeamResult, maxRows: number, level: LevelResult | undefined)
     parts.push(
       mdTable(
         ['peak at', 'FWHM', 'sublevels in it'],
-        r.peaks.map((p) => [lengthText(p.position_m, 4, noise), p.fwhm_m !== null ? lengthText(p.fwhm_m) : '—', membersText(p.members, label)]),
+        r.peaks.map((p) => [withUncertainty(p.position_m, p.position_m_unc, (v) => lengthText(v, 4, noise)), p.fwhm_m !== null ? lengthText(p.fwhm_m) : '—', membersText(p.members, label)]),
       ),
     );
   }

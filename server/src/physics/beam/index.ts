@@ -2,6 +2,7 @@
 export type { BeamGeometry, BeamIssue, BeamIssueSeverity, BeamSublevel, SpeedDistribution } from './types';
 export { deflectionAtSpeed, deflectionCoefficient, leverArmM2, meanDeflection } from './deflection';
 export { sourceSpeeds, type SourceSpeeds } from './speedSummary';
+export { peakSlopes, type PeakAt, type PeakSlopes } from './peakSlopes';
 export { kernelDensity, slitImage, trapezoidDensity, type SlitImage } from './slitImage';
 export {
   detectorPattern,

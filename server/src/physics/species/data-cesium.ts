@@ -18,6 +18,8 @@ export const CAESIUM_133: BuiltinSpecies = {
     FROM_MEMORY,
   ),
   gI: sourced(-0.00039885395, STECK_CS),
+  // Uncertainties of the 6p constants as the compilation's hyperfine-constant table prints them
+  // (read in a public transcription of that table, rev. 2.3.x; the values are the same digits as here).
   levels: [
     {
       key: 'ground',
@@ -30,7 +32,7 @@ export const CAESIUM_133: BuiltinSpecies = {
     {
       key: 'P1/2',
       designation: '6p 2P°1/2',
-      A: mhz(291.9201, STECK_CS),
+      A: mhz(291.9201, STECK_CS, 0.0075),
       gJ: sourced(0.6659, STECK_CS),
       ...energy(335.116048807, 'THz', STECK_CS),
       vacuumWavelengthNm: sourced(894.59295986, STECK_CS),
@@ -39,9 +41,9 @@ export const CAESIUM_133: BuiltinSpecies = {
     {
       key: 'P3/2',
       designation: '6p 2P°3/2',
-      A: mhz(50.28827, STECK_CS),
-      B: mhz(-0.4934, STECK_CS),
-      C: sourced(560, STECK_CS),
+      A: mhz(50.28827, STECK_CS, 0.00023),
+      B: mhz(-0.4934, STECK_CS, 0.0017),
+      C: sourced(560, STECK_CS, 70),
       gJ: sourced(
         1.33408749,
         FROM_MEMORY,

@@ -56,11 +56,13 @@ export const RUBIDIUM_87: BuiltinSpecies = {
   twoI: sourced(3, STECK_RB87),
   muI: sourced(2.751292, IAEA_MOMENTS),
   gI: sourced(-0.0009951414, STECK_RB87),
+  // Uncertainties of A and B as the compilation's hyperfine-constant table prints them (read in a
+  // public transcription of that table, rev. 2.3.x; the values are the same digits as here).
   levels: [
     {
       key: 'ground',
       designation: '5s 2S1/2',
-      A: mhz(3417.341305452145, STECK_RB87),
+      A: mhz(3417.341305452145, STECK_RB87, 0.000000000045),
       gJ: sourced(2.00233113, STECK_RB87),
       energyHz: GROUND_ENERGY,
     },
@@ -79,8 +81,8 @@ export const RUBIDIUM_87: BuiltinSpecies = {
     {
       key: 'P3/2',
       designation: '5p 2P°3/2',
-      A: mhz(84.7185, STECK_RB87),
-      B: mhz(12.4965, STECK_RB87),
+      A: mhz(84.7185, STECK_RB87, 0.002),
+      B: mhz(12.4965, STECK_RB87, 0.0037),
       gJ: sourced(1.3362, STECK_RB87),
       ...energy(384.2304844685, 'THz', STECK_RB87),
       vacuumWavelengthNm: sourced(780.241209686, STECK_RB87),
