@@ -63,3 +63,13 @@ describe('exact results memo', () => {
     expect(Math.abs(Math.max(...c) - Math.max(...a))).toBeGreaterThan(1e3);
   });
 });
+
+describe('r2 in the text report and the hover', () => {
+  it('the report line and the hover name ⟨r²⟩ in a0² (what the file wrote)', async () => {
+    const { textReport } = await import('../../server/src/cli/textReport');
+    const { fineStructureSection } = await import('../../server/src/features/hover/fineStructureSection');
+    const r = analyze(term('\n    r2 = 27.1 a0^2', STRONG)).result!;
+    expect(fineStructureSection(r.terms[0]!)).toContain('diamagnetic term on (⟨r²⟩ = 27.1 a₀²)');
+    expect(textReport('t.sublevel', r).join('\n')).toMatch(/diamagnetic term: ⟨r²⟩ = 27\.1 a0², e²⟨r²⟩\/8mₑh = 403\.4\d* kHz\/T² × ⟨sin²θ⟩ of m_L/);
+  });
+});
