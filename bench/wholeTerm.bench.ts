@@ -4,7 +4,7 @@
  * same fields. Goal: time per state of the whole term within 2× of the single-J sweep's.
  * Runs alternate between the three so load on a shared machine hits them alike.
  */
-import { ELECTRON_GS } from '../server/src/physics/constants';
+import { BOHR_RADIUS, ELECTRON_GS } from '../server/src/physics/constants';
 import { landeGJ, sweepLevel, termLevelConstants, type HyperfineLevelSpec, type WholeTermSpec } from '../server/src/physics/engine';
 
 // Alkali D-line data compilation for ⁸⁷Rb (5P1/2 A recalled): the same numbers as tests/reference/engine_whole_term.json.
@@ -20,6 +20,8 @@ function level(twoJ: number): HyperfineLevelSpec {
   return { kind: 'hyperfine', twoJ, twoI: 3, gJ: landeGJ(1, 1, twoJ, 1, ELECTRON_GS), gI: TERM.gI, A: k.A, B: k.B };
 }
 
+const WITH_DIAMAGNETIC: WholeTermSpec = { ...TERM, r2M2: 40 * BOHR_RADIUS ** 2 };
+
 const POINTS = 2001;
 const RUNS = 31;
 
@@ -33,6 +35,8 @@ export function runWholeTermBench(): { name: string; lines: string[] } {
     { name: '5P whole term (24 states)', states: 24, run: () => sweepLevel(TERM, 0, 1, POINTS, { crossings: false }) },
     { name: '5P3/2 single J (16 states)', states: 16, run: () => sweepLevel(level(3), 0, 1, POINTS, { crossings: false }) },
     { name: '5P1/2 single J (8 states)', states: 8, run: () => sweepLevel(level(1), 0, 1, POINTS, { crossings: false }) },
+    // Scenario ⟨r²⟩ = 40 a₀² (our own round number): the diamagnetic term makes H quadratic in B, so every field is solved.
+    { name: '5P whole term + diamagnetic (per field)', states: 24, run: () => sweepLevel(WITH_DIAMAGNETIC, 0, 1, POINTS, { crossings: false }) },
   ];
   const times = cases.map(() => [] as number[]);
   for (let i = 0; i < 5; i++) for (const c of cases) c.run();
@@ -48,5 +52,6 @@ export function runWholeTermBench(): { name: string; lines: string[] } {
   const lines = cases.map((c, k) => `${c.name}: ${median(times[k]).toFixed(2)} ms median (best ${Math.min(...times[k]).toFixed(2)}), ${(perState[k] * 1000).toFixed(0)} µs per state`);
   lines.push(`whole term per state / 5P3/2 per state: ${(perState[0] / perState[1]).toFixed(2)} median, ${(best[0] / best[1]).toFixed(2)} best (goal ≤ 2)`);
   lines.push(`whole term per state / 5P1/2 per state: ${(perState[0] / perState[2]).toFixed(2)} median`);
+  lines.push(`with the diamagnetic term / without: ${(perState[3] / perState[0]).toFixed(2)} median`);
   return { name: `whole-term sweep, ${POINTS} points 0–1 T`, lines };
 }

@@ -25,6 +25,7 @@ KEYS = {
     "ELECTRON_G": "electron g factor",
     "ELECTRON_MASS": "electron mass",
     "PROTON_MASS": "proton mass",
+    "BOHR_RADIUS": "Bohr radius",
     "ATOMIC_MASS_UNIT": "atomic mass constant",
     "ELECTRON_MASS_U": "electron mass in u",
     "ELECTRON_PROTON_MASS_RATIO": "electron-proton mass ratio",

@@ -87,7 +87,8 @@ def fine_projector(two_j, two_i, labels):
     return p
 
 
-def build(case):
+def hamiltonian(case):
+    """H0 and Z = dH/dB (Hz, Hz/T) in the uncoupled basis, with the basis labels (m_L, m_S, m_I)."""
     two_i = case["twoI"]
     L, S, I, labels = operators(two_i)
     ll = (TWO_L / 2) * (TWO_L / 2 + 1)
@@ -120,6 +121,12 @@ def build(case):
     bl = case["B"][3] / coeffs[3]["quadrupole"]
     h0 = sum(e * proj[tj] for tj, e in case["energies"].items()) + a * (ops["orbital"] + ops["spinDipolar"]) + ac * ops["contact"] + bl * Q
     z = MU_B_HZ_PER_T * (G_L * L[2] + G_S * S[2] + case["gI"] * I[2])
+    return h0, z, labels, {"a": a, "ac": ac, "bl": bl}, coeffs
+
+
+def build(case):
+    h0, z, labels, r, coeffs = hamiltonian(case)
+    a, ac, bl = r["a"], r["ac"], r["bl"]
     out = {"radial": {"orbital": a, "spinDipolar": a, "contact": ac, "quadrupole": bl},
            "coefficients": {str(tj): c for tj, c in coeffs.items()}, "fields_T": FIELDS_T, "energies_Hz": []}
     for b in FIELDS_T:

@@ -199,3 +199,19 @@ describe('convertSI, dimensionExamples, unitNames', () => {
     for (const u of names) expect(part(`1 ${u}`).kind, u).toBe('quantity');
   });
 });
+
+describe('readQuantity: areas for ⟨r²⟩', () => {
+  it('a0^2, a₀², bohr^2 are the Bohr radius squared (CODATA 2022: a₀ = 5.291 772 105 44e-11 m); nm^2 and pm^2 too', () => {
+    const a0 = 5.29177210544e-11;
+    expectRel(si('27.1 a0^2', 'area'), 27.1 * a0 * a0, 1e-15);
+    expectRel(si('27.1 a₀²', 'area'), 27.1 * a0 * a0, 1e-15);
+    expectRel(si('27.1 bohr^2', 'area'), 27.1 * a0 * a0, 1e-15);
+    expectRel(si('0.0759 nm^2', 'area'), 0.0759e-18, 1e-14);
+    expectRel(si('7590 pm^2', 'area'), 7590e-24, 1e-14);
+  });
+
+  it('a length alone is not an area; a digit after any other name is still malformed', () => {
+    expect(readQuantity(part('27 a0'), 'area').problem?.code).toBe('unit-wrong-dimension');
+    expect(readQuantity(part('27 b0^2'), 'area').problem).toBeDefined();
+  });
+});

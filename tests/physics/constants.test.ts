@@ -40,6 +40,7 @@ describe('constants.ts vs scipy.constants (CODATA 2022, tests/reference/codata.j
     ['ELECTRON_G', 'ELECTRON_G'],
     ['ELECTRON_MASS', 'ELECTRON_MASS'],
     ['PROTON_MASS', 'PROTON_MASS'],
+    ['BOHR_RADIUS', 'BOHR_RADIUS'],
     ['ATOMIC_MASS_UNIT', 'ATOMIC_MASS_UNIT'],
     ['ELECTRON_MASS_U', 'ELECTRON_MASS_U'],
     ['ELECTRON_PROTON_MASS_RATIO', 'ELECTRON_PROTON_MASS_RATIO'],

@@ -1,6 +1,6 @@
 /** The human-readable report printed by `sublevel eval`. */
 import { spectrumWidthsText } from '../eval/spectrumEvaluation';
-import { ATOMIC_MASS_UNIT, SPEED_OF_LIGHT } from '../physics/constants';
+import { ATOMIC_MASS_UNIT, BOHR_RADIUS, SPEED_OF_LIGHT } from '../physics/constants';
 import { halfText } from '../eval/halves';
 import { curvatureText, frequencyText, gradientText, lengthText, percentText, sensitivityText, speedText, trimNumber, withUncertainty } from '../eval/quantityText';
 import { beamPositionNoise, DIP_NOISE, SENSITIVITY_NOISE } from '../eval/noiseFloors';
@@ -115,6 +115,7 @@ function termReport(t: TermResult, atFieldText: AtFieldText): string[] {
   const out = ['', `  term ${t.level}: ${t.designation.configuration ? t.designation.configuration + ' ' : ''}${t.designation.unicode}   S = ${fraction(t.S)}, L = ${t.L}, ${t.zeta_Hz ? `fine structure ζ = ${frequencyText(t.zeta_Hz.value, 8)} [${t.zeta_Hz.source}]` : 'fine structure from the J-level energies'}`];
   out.push(...table(['J', 'zero-field shift', 'g_J'], t.fine_levels.map((f) => [f.J_text, withUncertainty(f.shift_Hz, f.shift_Hz_unc, (v) => frequencyText(v, 10)), trimNumber(f.g_J, 8)])).map((x) => '      ' + x));
   if (t.hyperfine) out.push(...termHyperfineLines(t.hyperfine));
+  if (t.diamagnetic) out.push(`    diamagnetic term: ⟨r²⟩ = ${trimNumber(t.diamagnetic.r2_m2 / BOHR_RADIUS ** 2, 6)} a0², e²⟨r²⟩/8mₑh = ${frequencyText(t.diamagnetic.Hz_per_T2, 6)}/T² × ⟨sin²θ⟩ of m_L`);
   for (const f of t.at_fields) {
     const regime = f.regime ? `; ${f.regime.verdict}${f.regime.x !== null ? `, x = ${trimNumber(f.regime.x, 3)}` : ''}` : '';
     out.push(`    at ${atFieldText(f)}${regime}:`);

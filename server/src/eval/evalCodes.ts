@@ -4,6 +4,7 @@ import type { ProblemSeverity } from '../format/ast';
 export const EVAL_RULES = {
   'zeeman-not-linear': { severity: 'info', summary: 'A level is past the linear (weak-field) regime at a working field.' },
   'zeeman-strong-field': { severity: 'info', summary: 'A level is in the strong-field regime; low-field labels mislead.' },
+  'diamagnetic-not-included': { severity: 'info', summary: 'A whole term computed without its diamagnetic term where that term would exceed 1e-3 of its smallest splitting.' },
   'beam-unresolved': { severity: 'warning', summary: 'Neighbouring peaks of a beam would merge on the detector.' },
   'beam-slits-too-wide': { severity: 'error', summary: 'Slits so wide for their separation that the collimated beam is not narrow.' },
   'beam-misses-detector': { severity: 'warning', summary: 'A detector placed where (almost) no atoms arrive.' },

@@ -28,7 +28,10 @@ const memo = new Map<string, ExactAtField>();
 function memoKey(spec: LevelSpec, fieldT: number): string {
   return spec.kind === 'hyperfine'
     ? `h|${spec.twoJ}|${spec.twoI}|${spec.gJ}|${spec.gI}|${spec.A}|${spec.B}|${spec.C}|${fieldT}`
-    : `f|${spec.twoS}|${spec.L}|${spec.zeta}|${spec.gL}|${spec.gS}|${spec.twoI}|${spec.gI}|${fieldT}`;
+    : spec.kind === 'fine'
+      ? `f|${spec.twoS}|${spec.L}|${spec.zeta}|${spec.gL}|${spec.gS}|${spec.twoI}|${spec.gI}|${fieldT}`
+      : // A whole term carries lists (E_J, A_J, B_J) and ⟨r²⟩: all of it tells two terms apart.
+        `t|${JSON.stringify(spec)}|${fieldT}`;
 }
 
 export function exactAtField(spec: LevelSpec, fieldT: number): ExactAtField {

@@ -44,14 +44,16 @@ export function fineSpec(level: LevelModel, settings: SettingsModel): FineTermSp
 
 /**
  * A whole term given with J-level hyperfine constants (A_J, B_J) or J-level energies (E_J): the
- * whole-term mode. Without hyperfine constants the nucleus is left out, as in the fine mode.
+ * whole-term mode (also with ζ alone when ⟨r²⟩ asks for the diamagnetic term). Without hyperfine
+ * constants the nucleus is left out, as in the fine mode.
  */
 export function wholeTermSpec(level: LevelModel, settings: SettingsModel): WholeTermSpec | undefined {
   const term = level.term;
   if (level.kind !== 'term' || !level.valid || !term) return undefined;
   const twoI = level.species.twoI.value;
   const hyperfine = twoI > 0 && (level.levelA !== undefined || level.levelB !== undefined);
-  if (!hyperfine && !level.levelEnergies) return undefined;
+  // ⟨r²⟩ needs the whole-term mode (the fine mode has no diamagnetic term).
+  if (!hyperfine && !level.levelEnergies && !level.r2) return undefined;
   const fine = level.levelEnergies
     ? { levelEnergies: level.levelEnergies.map((e) => ({ twoJ: e.twoJ, energyHz: e.value })) }
     : { zeta: level.zeta?.value ?? 0 };
@@ -65,6 +67,7 @@ export function wholeTermSpec(level: LevelModel, settings: SettingsModel): Whole
     ...fine,
     ...(hyperfine && level.levelA ? { levelA: level.levelA.map((a) => ({ twoJ: a.twoJ, A: a.value })) } : {}),
     ...(hyperfine && level.levelB ? { levelB: level.levelB.map((b) => ({ twoJ: b.twoJ, B: b.value })) } : {}),
+    ...(level.r2 ? { r2M2: level.r2.value } : {}),
   };
 }
 

@@ -62,7 +62,7 @@ export function regimeNote(level: LevelModel, points: readonly FieldPoint[]): Ev
   };
 }
 
-function fieldName(f: WorkingField): string {
+export function fieldName(f: WorkingField): string {
   return `${f.source.kind} ${f.source.name} (${fieldInUnit(f.tesla, { unit: f.unit })})`;
 }
 

@@ -147,6 +147,8 @@ export interface TermResult {
   fine_levels: { J: number; J_text: string; shift_Hz: number; shift_Hz_unc?: number; g_J: number }[];
   /** The term's hyperfine structure, when A_J / B_J are given (whole-term engine mode). */
   hyperfine?: TermHyperfineResult;
+  /** The diamagnetic term, when `r2` is given: ⟨r²⟩ (m²) and e²⟨r²⟩/(8mₑh) (Hz/T², times ⟨sin²θ⟩_{m_L} B²). */
+  diamagnetic?: { r2_m2: number; Hz_per_T2: number };
   at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; field_T_unc?: number; exact: ExactSublevelResult[]; regime?: RegimeResultJson }[];
 }
 

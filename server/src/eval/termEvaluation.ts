@@ -5,9 +5,10 @@
  */
 import { configurationText } from './designationText';
 import { allowedJ, formatTermSymbol } from '../physics/termSymbol';
-import { fineZeroFieldHz, termLevelConstants, type TermConstants, type WholeTermSpec } from '../physics/engine';
+import { diamagneticHzPerT2, fineZeroFieldHz, termLevelConstants, type TermConstants, type WholeTermSpec } from '../physics/engine';
 import { landeGJ } from '../physics/gFactors';
 import type { LevelModel, SettingsModel } from '../model/types';
+import { diamagneticNote } from './diamagneticNote';
 import { exactAtField } from './exactAtField';
 import { halfText } from './halves';
 import type { EvaluationNote, WorkingField } from './levelEvaluation';
@@ -61,6 +62,8 @@ export function evaluateTerm(level: LevelModel, settings: SettingsModel, fields:
   });
   const note = regimeNote(level, points);
   if (note) notes.push(note);
+  const diamagnetic = diamagneticNote(level, points);
+  if (diamagnetic) notes.push(diamagnetic);
   const jValues = allowedJ(term.twoS, term.L);
   const shifts = fineShifts(spec.kind === 'term' ? spec : { zeta: spec.zeta }, term.L, term.twoS, jValues);
   const hyperfine = resolved?.constants && spec.kind === 'term' && spec.twoI > 0 ? hyperfineResult(resolved.constants, notes, level) : undefined;
@@ -83,6 +86,7 @@ export function evaluateTerm(level: LevelModel, settings: SettingsModel, fields:
       g_J: twoJ === 0 ? 0 : landeGJ(term.twoS, term.L, twoJ, { gS: spec.gS, gL: spec.gL }),
     })),
     ...(hyperfine ? { hyperfine } : {}),
+    ...(spec.kind === 'term' && spec.r2M2 !== undefined ? { diamagnetic: { r2_m2: spec.r2M2, Hz_per_T2: diamagneticHzPerT2(spec.r2M2) } } : {}),
     at_fields: atFields,
   };
 }

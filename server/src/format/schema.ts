@@ -12,7 +12,7 @@ export const LEVEL_WORD = 'level';
 export const USE_WORD = 'use';
 
 /** Keys a level takes, on its own line or on the lines after it. */
-export const LEVEL_KEYS: readonly string[] = ['A', 'B', 'C', 'g_J', 'energy', 'zeta', 'A_J', 'B_J', 'E_J', 'lifetime', 'linewidth'];
+export const LEVEL_KEYS: readonly string[] = ['A', 'B', 'C', 'g_J', 'energy', 'zeta', 'A_J', 'B_J', 'E_J', 'lifetime', 'linewidth', 'r2'];
 
 /** Keys each block takes on the lines after its header. */
 export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {

@@ -4,7 +4,7 @@
  *   unit  := ["1/"] term (op term)*          op: `*`, `·`, `⋅` or `/` (left to right)
  *   term  := name [power]
  *   power := "^" int | "^(" int ")" | "-" digits | superscript digits (`cm⁻¹`)
- *   name  := letters, `_`, `%`, `°`, `℃`
+ *   name  := letters, `_`, `%`, `°`, `℃`; or `a0` / `a₀` (the Bohr radius)
  *
  * A name is a symbol with an optional SI prefix (`mT`, `µm`, `GHz`), a long name with an optional
  * long prefix (`millitesla`), or one of the special names below. `G` alone is the gauss; as a
@@ -88,6 +88,8 @@ export function parseUnitSyntax(text: string): UnitSyntax {
   for (;;) {
     const start = i;
     while (i < text.length && NAME_CHAR.test(text[i]!)) i++;
+    // The Bohr radius a0 (a₀) is the one name with a digit in it.
+    if (i === start + 1 && text[start] === 'a' && (text[i] === '0' || text[i] === '₀')) i++;
     if (i === start) {
       const what = i < text.length ? `'${text[i]}'` : 'the end';
       return { ok: false, message: `expected a unit name, found ${what}`, start: i, end: Math.min(text.length, i + 1) };
@@ -127,6 +129,9 @@ const SPECIAL_NAMES: Readonly<Record<string, string>> = {
   '°C': 'degC',
   '\u2103': 'degC', // ℃
   'Ω': 'ohm',
+  a0: 'a0',
+  'a₀': 'a0',
+  bohr: 'a0',
 };
 
 /** Symbols that take SI prefixes. `G` is the gauss. */

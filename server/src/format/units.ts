@@ -15,6 +15,7 @@ import { UnitMath } from './unitMath';
 import {
   ATOMIC_MASS_UNIT,
   BOHR_MAGNETON,
+  BOHR_RADIUS,
   ELEMENTARY_CHARGE,
   NUCLEAR_MAGNETON,
   PLANCK_H,
@@ -31,7 +32,8 @@ export type Dimension =
   | 'mass'
   | 'moment'
   | 'dimensionless'
-  | 'time';
+  | 'time'
+  | 'area';
 
 export interface QuantityReading {
   /** The value in SI units (Hz for frequency-like, J/T for moments, a plain fraction for %). */
@@ -55,6 +57,7 @@ export const UNIT_ADDITIONS = {
   muN: { definition: `${NUCLEAR_MAGNETON} J/T` },
   muB: { definition: `${BOHR_MAGNETON} J/T` },
   percent: { definition: '0.01' },
+  a0: { definition: `${BOHR_RADIUS} m` }, // Bohr radius (CODATA 2022), for ⟨r²⟩ in a0^2
 };
 UnitMath.createUnit(UNIT_OVERRIDES, { override: true });
 UnitMath.createUnit(UNIT_ADDITIONS);
@@ -211,6 +214,7 @@ const DIMENSIONS: Record<Dimension, DimensionInfo> = {
   moment: { label: 'magnetic moment', examples: ['muN', 'muB', 'J/T'], accepts: ['J/T'] },
   dimensionless: { label: 'fraction', examples: ['%'], accepts: ['%'] },
   time: { label: 'time', examples: ['s', 'ms', 'us'], accepts: ['s'] },
+  area: { label: 'area', examples: ['a0^2', 'nm^2', 'pm^2'], accepts: ['m^2'] },
 };
 
 const ACCEPTED_DIMS: Record<Dimension, number[][]> = Object.fromEntries(
@@ -234,6 +238,7 @@ const COMMON_UNITS: readonly string[] = [
   'muN', 'muB', 'J/T',
   '%',
   's', 'ms', 'us', 'ns',
+  'a0^2',
   'tesla', 'gauss', 'kelvin', 'meter', 'metre', 'second', 'hertz', 'joule',
 ];
 const SINGLE_NAMES = COMMON_UNITS.filter((u) => /^[\p{L}%]+$/u.test(u));

@@ -85,6 +85,9 @@ function readDesignation(level: LevelModel, problems: ProblemList): void {
       data: { removeSetting: 'zeta' },
     });
   }
+  if (!noJ && level.r2?.range) {
+    problems.add('r2-needs-term', `r2 adds the diamagnetic term to a whole term only: write the term without J and give zeta or E_J, or remove r2`, level.r2.range);
+  }
   level.valid = !!parsed.term && !hasError && (parsed.term.twoJ !== null || level.kind === 'term');
 }
 
@@ -124,6 +127,13 @@ function readLevelSetting(level: LevelModel, s: SettingNode, problems: ProblemLi
       break;
     case 'linewidth':
       level.linewidthHz = positive(readSettingQuantity(s, 'frequency-like', problems, 'natural linewidth Γ/2π (FWHM) of the level, e.g. 6.07 MHz'), 'linewidth', problems);
+      break;
+    case 'r2':
+      level.r2 = readSettingQuantity(s, 'area', problems, 'mean square radius ⟨r²⟩ of the valence electron, e.g. 27 a0^2');
+      if (level.r2 && !(level.r2.value > 0)) {
+        problems.add('r2-not-positive', `r2 must be above zero (it is the mean square radius ⟨r²⟩ of the valence electron)`, level.r2.range!);
+        level.r2 = undefined;
+      }
       break;
     case 'energy':
       level.energyHz = readSettingQuantity(s, 'frequency-like', problems, 'energy above the ground level, e.g. 16973.37 cm^-1');

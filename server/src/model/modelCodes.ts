@@ -56,6 +56,8 @@ export const MODEL_RULES = {
   'line-same-level': { severity: 'error', summary: 'A line from a level to itself.' },
   'line-to-whole-term': { severity: 'warning', summary: 'A line to a whole term given by E_J without hyperfine constants, on a species with a nucleus: not computed.' },
   'line-written-as-emission': { severity: 'info', summary: 'A line written upper level first: computed as that emission line.' },
+  'r2-not-positive': { severity: 'error', summary: 'A level\u2019s ⟨r²⟩ (r2) of zero or below.' },
+  'r2-needs-term': { severity: 'warning', summary: 'r2 on a J level: the diamagnetic term is computed for whole terms only.' },
   'lifetime-not-positive': { severity: 'error', summary: 'A level lifetime or natural linewidth of zero or below.' },
   'lifetime-and-linewidth': { severity: 'warning', summary: 'A level gives both lifetime and linewidth; the lifetime is used.' },
   'spectrum-setting-unused': { severity: 'warning', summary: 'A line shape setting on a line without `spectrum`: nothing uses it.' },

@@ -82,6 +82,8 @@ export interface LevelModel {
   levelA?: PerLevelValue[];
   levelB?: PerLevelValue[];
   levelEnergies?: PerLevelValue[];
+  /** ⟨r²⟩ of the valence electron, m² (`r2`): turns the diamagnetic term on for a whole term. */
+  r2?: Valued<number>;
   A?: Valued<number>;
   B?: Valued<number>;
   C?: Valued<number>;

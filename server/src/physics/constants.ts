@@ -30,6 +30,8 @@ export const ELECTRON_G = -2.00231930436092;
 export const ELECTRON_GS = -ELECTRON_G;
 /** Electron mass m_e, kg. CODATA 2022: 9.109 383 7139(28) e-31. */
 export const ELECTRON_MASS = 9.1093837139e-31;
+/** Bohr radius a₀, m. CODATA 2022: 5.291 772 105 44(82) e-11. */
+export const BOHR_RADIUS = 5.29177210544e-11;
 /** Proton mass m_p, kg. CODATA 2022: 1.672 621 925 95(52) e-27. */
 export const PROTON_MASS = 1.67262192595e-27;
 /** Atomic mass constant m_u = 1 u, kg. CODATA 2022: 1.660 539 068 92(52) e-27. */

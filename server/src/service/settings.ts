@@ -15,7 +15,7 @@ export interface EditorSettings {
 export const DEFAULT_SETTINGS: EditorSettings = { inlayHints: { enabled: true }, hover: DEFAULT_HOVER_OPTIONS, regimeNotes: { enabled: true } };
 
 /** The codes `regimeNotes.enabled: false` hides in the editor. */
-export const REGIME_NOTE_CODES: ReadonlySet<string> = new Set(['zeeman-not-linear', 'zeeman-strong-field']);
+export const REGIME_NOTE_CODES: ReadonlySet<string> = new Set(['zeeman-not-linear', 'zeeman-strong-field', 'diamagnetic-not-included']);
 
 function object(x: unknown): Record<string, unknown> {
   return typeof x === 'object' && x !== null ? (x as Record<string, unknown>) : {};

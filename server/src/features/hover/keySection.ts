@@ -25,6 +25,7 @@ const LEVEL_KEYS: Record<string, string> = {
   zeta: 'spin–orbit constant ζ of a term written without J; all its J levels are then computed together, from weak field to Paschen–Back',
   A_J: 'hyperfine A of each J level of a term written without J: `A_J = 1/2 46 MHz, 3/2 -3.06 MHz`; the term is then computed with its hyperfine coupling inside and between the J levels',
   B_J: 'quadrupole B of J levels of a term written without J: `B_J = 3/2 -0.22 MHz`',
+  r2: 'mean square radius ⟨r²⟩ of the valence electron (e.g. `r2 = 27 a0^2`) on a term written without J: adds the diamagnetic term (e²B²/8mₑ)⟨r²⟩⟨sin²θ⟩; off without it',
   E_J: 'energy of each J level of a term written without J, instead of zeta: `E_J = 1/2 0 GHz, 3/2 10.05 GHz`',
 };
 

@@ -24,6 +24,7 @@ const FAMILIES: Readonly<Record<Dimension, readonly (readonly string[])[]>> = {
   moment: [['muN'], ['muB'], ['J/T']],
   dimensionless: [['%']],
   time: [['s', 'ms', 'us', 'ns']],
+  area: [['a0^2'], ['nm^2', 'pm^2']],
 };
 
 /** Units offered by the "convert to" refactoring, per dimension. */
@@ -38,11 +39,12 @@ const CONVERT_TARGETS: Readonly<Record<Dimension, readonly string[]>> = {
   moment: ['muN', 'J/T'],
   dimensionless: ['%'],
   time: ['s', 'ms', 'us'],
+  area: ['a0^2', 'nm^2', 'm^2'],
 };
 
 /** Order matters: the first dimension that accepts a unit wins. */
 const ALL_DIMENSIONS: readonly Dimension[] = [
-  'flux-density', 'gradient', 'length', 'temperature', 'speed', 'frequency-like', 'mass', 'moment', 'time', 'dimensionless',
+  'flux-density', 'gradient', 'length', 'temperature', 'speed', 'frequency-like', 'mass', 'moment', 'time', 'area', 'dimensionless',
 ];
 
 export function convertTargets(d: Dimension): readonly string[] {
@@ -66,7 +68,7 @@ export interface ValueContext {
 
 /** The dimension a setting's quantity must have, or undefined for plain numbers and words. */
 export function expectedDimension(c: ValueContext): Dimension | undefined {
-  if (c.inLevel) return ['A', 'B', 'C', 'energy', 'zeta', 'A_J', 'B_J', 'E_J', 'linewidth'].includes(c.key) ? 'frequency-like' : c.key === 'lifetime' ? 'time' : undefined;
+  if (c.inLevel) return ['A', 'B', 'C', 'energy', 'zeta', 'A_J', 'B_J', 'E_J', 'linewidth'].includes(c.key) ? 'frequency-like' : c.key === 'lifetime' ? 'time' : c.key === 'r2' ? 'area' : undefined;
   switch (c.blockKind) {
     case 'species':
       return c.key === 'mass' ? 'mass' : c.key === 'mu_I' ? 'moment' : undefined;

@@ -2,7 +2,7 @@
  * One block through every field of a sweep, written into the sweep's output
  * store. Two routes with the same results:
  * - per field: an exact solve at every field;
- * - by series (the default): an exact solve at anchor fields, and between them
+ * - by series (the default when H is linear in B): an exact solve at anchor fields, and between them
  *   the anchor's Rayleigh–Schrödinger series (perturbationSeries.ts), which
  *   costs a few dozen multiplications per state and field instead of a solve.
  *   Neighbouring anchors' series must agree halfway between them, where each
@@ -10,7 +10,7 @@
  *   series never stands for a field where it is not checked.
  */
 import { PLANCK_H } from '../constants';
-import { type BlockWorkspace, curvaturesOf, makeWorkspace, solveBlockAt } from './blockSolver';
+import { type BlockWorkspace, curvaturesOf, fieldDerivative, makeWorkspace, solveBlockAt } from './blockSolver';
 import type { LevelBlock } from './levelModel';
 import {
   SERIES_ORDER,
@@ -35,15 +35,15 @@ export interface BlockOutput {
 /** Agreement asked of two neighbouring anchors' series halfway between them (energy and moment scales of the block). */
 const CHECK_TOLERANCE = 1e-12;
 
-/** Write the exact solve in `ws` as point p; returns the number of degenerate pairs the curvature left out. */
-function writeSolved(block: LevelBlock, ws: BlockWorkspace, p: number, out: BlockOutput): number {
+/** Write the exact solve in `ws` (at `fieldT`) as point p; returns the number of degenerate pairs the curvature left out. */
+function writeSolved(block: LevelBlock, ws: BlockWorkspace, fieldT: number, p: number, out: BlockOutput): number {
   const n = block.size;
-  const z = block.zeeman;
+  const z = fieldDerivative(block, fieldT, ws.dz);
   const { store, points, curvature, curv } = out;
   const { values, vectors } = ws;
-  const skipped = curvature ? curvaturesOf(block, ws, curv) : 0;
+  const skipped = curvature ? curvaturesOf(block, ws, curv, 0, fieldT) : 0;
   for (let k = 0, at = out.base + p; k < n; k++, at += out.stride) {
-    // Hellmann–Feynman dE_k/dB = Σ_i v_ik² z_i, then μ = −h dE/dB.
+    // Hellmann–Feynman dE_k/dB = Σ_i v_ik² (∂H/∂B)_i, then μ = −h dE/dB.
     let slope = 0;
     for (let i = 0; i < n; i++) {
       const c = vectors[i * n + k];
@@ -61,7 +61,7 @@ export function sweepBlockPerField(block: LevelBlock, fieldsT: Float64Array, ws:
   let skipped = 0;
   for (let p = 0; p < fieldsT.length; p++) {
     if (!solveBlockAt(block, fieldsT[p], ws)) return -1;
-    skipped += writeSolved(block, ws, p, out);
+    skipped += writeSolved(block, ws, fieldsT[p], p, out);
   }
   return skipped;
 }
@@ -108,7 +108,8 @@ function anchorAt(block: LevelBlock, fieldT: number, at: Anchor, curvature: bool
 }
 
 /**
- * The series route (fields in sweep order, monotonic). Anchors are solved
+ * The series route (fields in sweep order, monotonic; a block linear in B only, since the
+ * series expands in B·Z). Anchors are solved
  * exactly and expanded; the points between two anchors take the nearer one's
  * series. The next anchor is placed about two reaches ahead; if the two
  * reaches do not meet, or the two series disagree halfway (where each is
@@ -120,7 +121,7 @@ export function sweepBlockBySeries(block: LevelBlock, fieldsT: Float64Array, anc
   const tmp = new Float64Array(2);
   let [here, there] = anchors;
   if (!anchorAt(block, fieldsT[0], here, out.curvature)) return -1;
-  let skipped = writeSolved(block, here.ws, 0, out);
+  let skipped = writeSolved(block, here.ws, fieldsT[0], 0, out);
   let p = 0;
   while (p < last) {
     let q = p + 1;
@@ -137,7 +138,7 @@ export function sweepBlockBySeries(block: LevelBlock, fieldsT: Float64Array, anc
     while (mid < q && Math.abs(fieldsT[mid] - fieldsT[p]) <= Math.abs(fieldsT[q] - fieldsT[mid])) mid++;
     writeSeries(block, here.sw, fieldsT, p, p + 1, mid, out);
     writeSeries(block, there.sw, fieldsT, q, mid, q, out);
-    skipped += writeSolved(block, there.ws, q, out);
+    skipped += writeSolved(block, there.ws, fieldsT[q], q, out);
     [here, there] = [there, here];
     p = q;
   }

@@ -36,6 +36,7 @@ export { landeGF, landeGJ } from './landeFactors';
 export { levelCoefficients } from './termHyperfineParameters';
 export type { LevelCoefficients, RadialParameters } from './termHyperfineParameters';
 export { termLevelConstants } from './termLevelConstants';
+export { diamagneticHzPerT2, hydrogenicR2InBohr2, sinSquaredMean } from './diamagnetic';
 export type { TermConstants } from './termLevelConstants';
 export { validateSpec } from './validateSpec';
 export { symmetricEigen } from './symmetricEigen';

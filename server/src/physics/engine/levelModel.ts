@@ -31,6 +31,11 @@ export interface LevelBlock {
   h0: Float64Array;
   /** ∂H/∂B, diagonal in the uncoupled basis, Hz/T. */
   zeeman: Float64Array;
+  /**
+   * The B² coefficient (the diamagnetic term), diagonal in the uncoupled basis, Hz/T², when the
+   * level asks for it: H = h0 + B·zeeman + B²·quadratic. Such a block is never swept by series.
+   */
+  quadratic?: Float64Array;
   /** Low-field labels by energy rank: [0] for B ≥ 0, [1] for B < 0. */
   low: [RankedLow[], RankedLow[]];
   /** High-field labels by energy rank: [0] for B → +∞, [1] for B → −∞. */

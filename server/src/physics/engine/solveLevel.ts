@@ -41,8 +41,8 @@ export function solveModel(model: LevelModel, fieldT: number): SolveResult {
       issues.push(issue('error', 'solver-failed', `The eigen-solver did not converge for the block 2m = ${block.twoM}.`));
       return { states: [], issues };
     }
-    slopesOf(block, ws, slopes);
-    skipped += curvaturesOf(block, ws, curv);
+    slopesOf(block, ws, slopes, 0, fieldT);
+    skipped += curvaturesOf(block, ws, curv, 0, fieldT);
     for (let k = 0; k < n; k++) {
       states.push({
         index: 0,

@@ -84,8 +84,9 @@ function runSweep(model: LevelModel, fieldsT: Float64Array, options: SweepOption
       slots.push(slot);
     }
     out.base = perState * first * points;
+    // The series expands H0 + B·Z; a block with a B² (diamagnetic) term is solved at every field.
     const left =
-      perField || block.size < SERIES_MIN_ORDER
+      perField || block.size < SERIES_MIN_ORDER || block.quadratic !== undefined
         ? sweepBlockPerField(block, fieldsT, ws, out)
         : sweepBlockBySeries(block, fieldsT, anchors, out);
     if (left < 0) {

@@ -51,6 +51,8 @@ export interface WholeTermSpec {
   radial?: { orbital: number; spinDipolar: number; contact: number; quadrupole?: number };
   levelA?: { twoJ: number; A: number }[];
   levelB?: { twoJ: number; B: number }[];
+  /** ⟨r²⟩ of the valence electron, m²: adds the diamagnetic term (diamagnetic.ts). Off when absent. */
+  r2M2?: number;
 }
 
 export type LevelSpec = HyperfineLevelSpec | FineTermSpec | WholeTermSpec;

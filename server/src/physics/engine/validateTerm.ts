@@ -7,6 +7,7 @@ import { couplings } from './halfIntegers';
 import { issue } from './issues';
 import { MAX_BASIS_STATES, MAX_BLOCK_SIZE } from './limits';
 import { fineZeroFieldHz } from './zeroFieldLevels';
+import { diamagneticHzPerT2 } from './diamagnetic';
 import { hyperfineFromLevels, type HyperfineSource, type RadialParameters } from './termHyperfineParameters';
 import { termBlockSize } from './termBasis';
 import type { EngineIssue, WholeTermSpec } from './types';
@@ -17,6 +18,8 @@ export interface CleanTerm extends Pick<WholeTermSpec, 'kind' | 'twoS' | 'L' | '
   radial: RadialParameters;
   quadrupoleL: number;
   hyperfineSource: HyperfineSource;
+  /** e²⟨r²⟩/(8mₑh), Hz/T²; 0 when the diamagnetic term is off. */
+  diamagneticHzPerT2: number;
 }
 
 const isCount = (v: unknown): v is number => typeof v === 'number' && Number.isInteger(v) && v >= 0;
@@ -95,7 +98,12 @@ export function validateTerm(s: WholeTermSpec, issues: EngineIssue[]): CleanTerm
   const jValues = couplings(twoL, s.twoS);
   const levelEnergies = fineEnergies(s, jValues, issues);
   if (!levelEnergies) return null;
-  const base = { kind: 'term' as const, twoS: s.twoS, L: s.L, twoI: s.twoI, gL: s.gL, gS: s.gS, gI: s.gI, levelEnergies };
+  if (s.r2M2 !== undefined && !(isReal(s.r2M2) && s.r2M2 > 0)) {
+    issues.push(issue('error', 'bad-constant', '⟨r²⟩ for the diamagnetic term must be a finite number above zero.'));
+    return null;
+  }
+  const diamagnetic = s.r2M2 === undefined ? 0 : diamagneticHzPerT2(s.r2M2);
+  const base = { kind: 'term' as const, twoS: s.twoS, L: s.L, twoI: s.twoI, gL: s.gL, gS: s.gS, gI: s.gI, levelEnergies, diamagneticHzPerT2: diamagnetic };
   if (s.twoI === 0) {
     // Fine structure alone (e.g. from measured J-level energies): nothing for hyperfine data to act on.
     if (s.radial !== undefined || s.levelA !== undefined || s.levelB !== undefined) {

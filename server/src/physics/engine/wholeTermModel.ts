@@ -2,13 +2,15 @@
  * Blocks of a whole LS term with its nucleus in the uncoupled basis |m_L, m_S, m_I>, one per
  * total m:
  *   H/h = fine structure + dipole hyperfine (inside and between the J levels) + orbital
- *         quadrupole (termOperators.ts) + (μ_B B/h)(g_L L_z + g_S S_z + g_I I_z).
+ *         quadrupole (termOperators.ts) + (μ_B B/h)(g_L L_z + g_S S_z + g_I I_z)
+ *         [+ B² e²⟨r²⟩⟨sin²θ⟩_{m_L}/(8mₑh) when ⟨r²⟩ is given (diamagnetic.ts)].
  * Low-field labels |J, F, m_F> rank by the exact zero-field eigenvalues of the block (F is exact
  * at B = 0; J is the level the state comes from, matched by the first-order energy
  * E_J + Casimir(A_J, B_J)); high-field labels |m_L, m_S, m_I> as in the other modes.
  */
 import { BOHR_MAGNETON_HZ_PER_T } from '../constants';
 import { orderHighLabels, orderLowLabels } from './adiabaticOrder';
+import { sinSquaredMean } from './diamagnetic';
 import { couplings } from './halfIntegers';
 import { jfLabel, jLabel, lsLabel } from './labelText';
 import { landeGF, landeGJ } from './landeFactors';
@@ -65,7 +67,7 @@ export function buildWholeTermModel(s: CleanTerm): LevelModel {
   };
   const blocks: LevelBlock[] = [];
   const zeroField: number[] = [];
-  const built: { twoM: number; h0: Float64Array; zeeman: Float64Array; basis: RankedHigh[]; low: RankedLow[] }[] = [];
+  const built: { twoM: number; h0: Float64Array; zeeman: Float64Array; quadratic?: Float64Array; basis: RankedHigh[]; low: RankedLow[] }[] = [];
   const twoMax = two[0] + two[1] + two[2];
   for (let twoM = -twoMax; twoM <= twoMax; twoM += 2) {
     const basis = termBlockBasis(two, twoM);
@@ -73,6 +75,7 @@ export function buildWholeTermModel(s: CleanTerm): LevelModel {
     const n = ops.n;
     const h0 = zeroFieldMatrix(s, two, jValues, ops);
     const zeeman = new Float64Array(n);
+    const quadratic = s.diamagneticHzPerT2 > 0 ? basis.states.map(([mL]) => s.diamagneticHzPerT2 * sinSquaredMean(s.L, mL / 2)) : undefined;
     const high: RankedHigh[] = basis.states.map(([mL, mS, mI], k) => {
       zeeman[k] = (mu * (s.gL * mL + s.gS * mS + s.gI * mI)) / 2;
       return { label: lsLabel(mL, mS, s.twoI === 0 ? null : mI), diagonalHz: h0[k * n + k], slopeHzPerT: zeeman[k] };
@@ -92,7 +95,7 @@ export function buildWholeTermModel(s: CleanTerm): LevelModel {
     const exact = blockEigenvalues(h0, n);
     const low: RankedLow[] = cands.map((c, k) => ({ label: c.label, zeroFieldHz: exact[k], slopeHzPerT: c.slopeHzPerT }));
     for (const e of exact) zeroField.push(e);
-    built.push({ twoM, h0, zeeman, basis: high, low });
+    built.push({ twoM, h0, zeeman, quadratic: quadratic && Float64Array.from(quadratic), basis: high, low });
   }
   const spread = Math.max(...zeroField) - Math.min(...zeroField);
   const energyScale = Math.max(spread, 1e-300);
@@ -106,6 +109,7 @@ export function buildWholeTermModel(s: CleanTerm): LevelModel {
       basis: b.basis.map((h) => h.label),
       h0: b.h0,
       zeeman: b.zeeman,
+      ...(b.quadratic ? { quadratic: b.quadratic } : {}),
       low: [orderLowLabels(b.low, 1, energyScale, slopeScale), orderLowLabels(b.low, -1, energyScale, slopeScale)],
       high: [orderHighLabels(b.basis, 1, energyScale, slopeScale), orderHighLabels(b.basis, -1, energyScale, slopeScale)],
     });

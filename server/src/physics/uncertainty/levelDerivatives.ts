@@ -62,7 +62,12 @@ function twoMIOf(l: HighFieldLabel): number {
 function paramMatrices(spec: CleanSpec, block: LevelBlock, fieldT: number): ParamMatrix[] {
   const mu = BOHR_MAGNETON_HZ_PER_T;
   const n = block.size;
-  const out: ParamMatrix[] = [{ param: 'field', h: diag([...block.zeeman]) }];
+  // With a diamagnetic term ∂H/∂B = Z + 2B·D, and its own B-derivative 2D enters d²E/dB².
+  const q = block.quadratic;
+  const field: ParamMatrix = q
+    ? { param: 'field', h: diag([...block.zeeman].map((z, i) => z + 2 * fieldT * q[i]!)), dz: q.map((x) => 2 * x) }
+    : { param: 'field', h: diag([...block.zeeman]) };
+  const out: ParamMatrix[] = [field];
   const zI = block.basis.map((l) => (mu * twoMIOf(l)) / 2);
   out.push({ param: 'gI', h: diag(zI.map((z) => z * fieldT)), dz: Float64Array.from(zI) });
   if (spec.kind === 'hyperfine') {
