@@ -23,4 +23,8 @@ run('Zeeman components of the Rb87 D2 line at the trap field (SVG)', ['render', 
 run('The same pattern as CSV for analysis code', ['profile', 'examples/lithium-beam.sublevel', '--out', 'demo-output/li7-pattern.csv'], 0);
 run('Rb87 ground sublevels from 0 to 0.2 T as CSV', ['sweep', 'examples/rubidium-bias.sublevel', '--level', 'ground', '--to', '0.2 T', '--points', '2001', '--out', 'demo-output/rb87-ground-sweep.csv'], 0);
 run('Rb87 ground diagram with the probe field marked (SVG)', ['render', 'examples/rubidium-bias.sublevel', '--level', 'ground', '--field', 'probe', '--out', 'demo-output/rb87-levels.svg'], 0);
+run('Li7 2p as one whole term, through both Paschen–Back regimes (SVG)', ['render', 'examples/lithium-whole-term.sublevel', '--view', 'levels', '--level', 'p', '--to', '1 T', '--out', 'demo-output/li7-2p-whole-term.svg'], 0);
+run('Rb87 D2 spectrum at 0.6 T seen across the field: Voigt profiles as CSV', ['spectrum', 'examples/rubidium-spectrum.sublevel', '--out', 'demo-output/rb87-d2-spectrum.csv'], 0);
+run('Field from one measured resonance, and g_J and A from eight (invented data)', ['fit', 'examples/fit-rubidium.sublevel'], 0);
+run('What a weaker magnet changes physically (exit 1: the setups differ)', ['diff', 'tests/fixtures/diff/beam-old.sublevel', 'tests/fixtures/diff/beam-weak-gradient.sublevel'], 1);
 console.log('\ndemo finished: diagrams and CSV files are in demo-output/; see README.md for the format and the CLI.');
