@@ -18,8 +18,9 @@ export const CAESIUM_133: BuiltinSpecies = {
     FROM_MEMORY,
   ),
   gI: sourced(-0.00039885395, STECK_CS),
-  // Uncertainties of the 6p constants as the compilation's hyperfine-constant table prints them
-  // (read in a public transcription of that table, rev. 2.3.x; the values are the same digits as here).
+  // Uncertainties of the 6p constants as the cited compilation's hyperfine-constant table gives
+  // them (its revision 2.3); the values carry the same digits as here. To be confirmed against the
+  // compilation itself (docs/species-data.md).
   levels: [
     {
       key: 'ground',

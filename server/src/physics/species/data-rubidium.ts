@@ -56,8 +56,9 @@ export const RUBIDIUM_87: BuiltinSpecies = {
   twoI: sourced(3, STECK_RB87),
   muI: sourced(2.751292, IAEA_MOMENTS),
   gI: sourced(-0.0009951414, STECK_RB87),
-  // Uncertainties of A and B as the compilation's hyperfine-constant table prints them (read in a
-  // public transcription of that table, rev. 2.3.x; the values are the same digits as here).
+  // Uncertainties of A and B as the cited compilation's hyperfine-constant table gives them (its
+  // revision 2.3); the values carry the same digits as here. To be confirmed against the
+  // compilation itself (docs/species-data.md).
   levels: [
     {
       key: 'ground',
