@@ -1,6 +1,7 @@
 /** The concise `value(unc)` notation of the one quantity formatter. */
 import { describe, expect, it } from 'vitest';
-import { fieldText, frequencyText, lengthText, trimNumber, withUncertainty } from '../../server/src/eval/quantityText';
+import { fittedText } from '../../server/src/eval/fitText';
+import { fieldText, frequencyText, lengthText, trimNumber, UNCERTAINTY_DIGITS, withUncertainty } from '../../server/src/eval/quantityText';
 
 describe('withUncertainty', () => {
   it.each([
@@ -9,9 +10,9 @@ describe('withUncertainty', () => {
     [6834682610.9, 0.24, (v: number) => frequencyText(v, 12), '6.83468261090(24) GHz'],
     [0.000323, 2e-6, (v: number) => fieldText(v), '3.230(20) G'],
     [0.35, 0.02, (v: number) => fieldText(v), '0.350(20) T'],
-    [0.35, 0.05, (v: number) => fieldText(v), '0.35(5) T'],
-    [-0.50182670925, 0.0004, (v: number) => trimNumber(v, 8), '-0.5018(4)'],
-    [1.234e-3, 5.6e-5, (v: number) => lengthText(v), '1.23(6) mm'],
+    [0.35, 0.05, (v: number) => fieldText(v), '0.350(50) T'],
+    [-0.50182670925, 0.0004, (v: number) => trimNumber(v, 8), '-0.50183(40)'],
+    [1.234e-3, 5.6e-5, (v: number) => lengthText(v), '1.234(56) mm'],
     [1234, 250, (v: number) => trimNumber(v), '1234(250)'],
     [4.98e-11, 1.2e-12, (v: number) => trimNumber(v), '4.98(12)e-11'],
     // The printed value is rounded (3.228917 G): the digits under the uncertainty come from the value itself.
@@ -29,5 +30,28 @@ describe('withUncertainty', () => {
   it('never prints NaN or Infinity', () => {
     expect(withUncertainty(Number.NaN, 1, (v) => fieldText(v))).toBe('—');
     expect(withUncertainty(1, Number.POSITIVE_INFINITY, (v) => fieldText(v))).toBe('1 T');
+  });
+});
+
+describe('one rule for the digits of an uncertainty (GUM JCGM 100:2008 §7.2.6: at most two)', () => {
+  it('keeps two digits whatever the leading digit (the CODATA style)', () => {
+    expect(UNCERTAINTY_DIGITS).toBe(2);
+    expect(withUncertainty(1.2345, 0.0056, (v) => trimNumber(v))).toBe('1.2345(56)');
+    expect(withUncertainty(1.2345, 0.0012, (v) => trimNumber(v))).toBe('1.2345(12)');
+  });
+  it('rounding that would make a third digit keeps two: 0.00996 → (10) at the coarser place', () => {
+    expect(withUncertainty(1.2346, 0.00996, (v) => trimNumber(v))).toBe('1.235(10)');
+  });
+  it('past 15 significant digits (double precision) gives up an uncertainty digit, not print noise', () => {
+    // 2 × 3.417 341 305 452 145 GHz: the 16th digit of the double is not the published 0.
+    expect(withUncertainty(6834682610.90429, 0.00009, (v) => frequencyText(v, 15))).toBe('6.83468261090429(9) GHz');
+  });
+  it('fit reports and hovers print the same value the same way (fittedText goes through withUncertainty)', () => {
+    // Before: the fit formatter always kept two digits and the hover one digit for 5–9.
+    expect(fittedText(0.00032289, 5.4e-7, 'T', 'G')).toBe(withUncertainty(0.00032289, 5.4e-7, (v) => fieldText(v)));
+    expect(fittedText(0.00032289, 5.4e-7, 'T', 'G')).toBe('3.2289(54) G');
+    expect(fittedText(0.35, 0.05, 'T')).toBe(withUncertainty(0.35, 0.05, (v) => fieldText(v)));
+    expect(fittedText(3417341382, 68, 'Hz', 'MHz')).toBe('3417.341382(68) MHz');
+    expect(fittedText(3417341382, 68, 'Hz')).toBe('3.417341382(68) GHz');
   });
 });

@@ -32,7 +32,7 @@ describe('inlay hints', () => {
       '2:20 g_J 1.3362',
       // Steck: 5P3/2 intervals 72.2180, 156.9470 and 266.6500 MHz (from A = 84.7185 MHz and B = 12.4965 MHz).
       // A is written without an uncertainty here; the built-in B = 12.4965(37) MHz enters each interval with weight 1.
-      '2:37 ΔE_hfs 72.222(4) MHz, 156.940(4) MHz, 266.652(4) MHz',
+      '2:37 ΔE_hfs 72.2220(37) MHz, 156.9405(37) MHz, 266.6520(37) MHz',
       // μ_B/h = 13.996 244 171 GHz/T (CODATA 2022): 1 G → 1.3996 MHz, 0.5 T → 6.9981 GHz.
       '3:16 μ_B·B/h 1.3996 MHz',
       '5:15 μ_B·B/h 6.9981 GHz',

@@ -1,6 +1,6 @@
 /** The readable report of `sublevel fit`: best values, χ², correlations, every root of a calibration, the residuals. */
 import type { FitResult } from '../eval/fitResultTypes';
-import { measuredText, parameterText, residualText, valueWithUncertaintyText } from '../eval/fitText';
+import { measuredText, parameterText, residualText, fittedText } from '../eval/fitText';
 import { sensitivityText, trimNumber } from '../eval/quantityText';
 
 const STATUS: Record<FitResult['status'], string> = {
@@ -15,14 +15,14 @@ export function fitReportLines(file: string, fits: readonly FitResult[]): string
     out.push('', `fit ${f.name} (${f.kind === 'calibration' ? 'field from one resonance' : f.kind === 'profile' ? 'detector profile' : 'resonances and intervals'})${STATUS[f.status]}`);
     if (f.kind === 'calibration') {
       const p = f.points[0];
-      if (p) out.push(`  measured ${valueWithUncertaintyText(p.measured, p.uncertainty, 'Hz', f.measured_written_unit)}`);
+      if (p) out.push(`  measured ${fittedText(p.measured, p.uncertainty, 'Hz', f.measured_written_unit)}`);
       if (!f.roots?.length) out.push('  no field in the range is resonant at this frequency');
-      for (const r of f.roots ?? []) out.push(`  field = ${valueWithUncertaintyText(r.field_T, r.uncertainty_T, 'T', f.parameters[0]?.written_unit)}   (df/dB = ${sensitivityText(r.df_dB_Hz_per_T, 5)})`);
+      for (const r of f.roots ?? []) out.push(`  field = ${fittedText(r.field_T, r.uncertainty_T, 'T', f.parameters[0]?.written_unit)}   (df/dB = ${sensitivityText(r.df_dB_Hz_per_T, 5)})`);
       continue;
     }
     if (f.status === 'failed') continue;
     const width = Math.max(...f.parameters.map((p) => p.name.length));
-    for (const p of f.parameters) out.push(`  ${p.name.padEnd(width)} = ${parameterText(p)}   (start ${valueWithUncertaintyText(p.start, undefined, p.unit, p.written_unit)})`);
+    for (const p of f.parameters) out.push(`  ${p.name.padEnd(width)} = ${parameterText(p)}   (start ${fittedText(p.start, undefined, p.unit, p.written_unit)})`);
     const basis = f.uncertainty_basis === 'data' ? "from the points' own uncertainties" : 'scaled by χ²/dof: the points carry no uncertainties';
     out.push(`  χ² = ${trimNumber(f.chi2, 4)}, dof = ${f.dof}${f.reduced_chi2 !== undefined ? `, χ²/dof = ${trimNumber(f.reduced_chi2, 3)}` : ''}; uncertainties ${basis}`);
     if (f.correlation && f.parameters.length > 1) {

@@ -1,11 +1,11 @@
 /**
- * Fitted values as text: `value(uncertainty) unit` in concise notation, two digits of the
- * uncertainty, in the unit the file wrote or an SI prefix that keeps the number readable.
+ * Fitted values as text: `value(uncertainty) unit` in concise notation (withUncertainty), in
+ * the unit the file wrote or an SI prefix that keeps the number readable.
  * Numbers go through the one formatter (quantityText.ts); nothing prints NaN or Infinity.
  */
 import { convertSI, type Dimension } from '../format/units';
 import type { FitParameterResult } from './fitResultTypes';
-import { cleanValue, fieldText, frequencyText, gradientText, lengthText, MISSING, trimNumber } from './quantityText';
+import { cleanValue, fieldText, frequencyText, gradientText, lengthText, MISSING, trimNumber, withUncertainty } from './quantityText';
 import { displayUnit } from './writtenUnit';
 
 const DIMENSION: Readonly<Record<string, Dimension>> = { T: 'flux-density', Hz: 'frequency-like', m: 'length', 'T/m': 'gradient', K: 'temperature' };
@@ -24,25 +24,20 @@ function displayScale(si: number, unit: string, written: string | undefined): { 
   return back !== undefined && back > 0 ? { unit: shown, perUnit: 1 / back } : { unit, perUnit: 1 };
 }
 
-/** `2.152279(54) G`: the value rounded where its uncertainty's second digit falls. */
-export function valueWithUncertaintyText(si: number | null | undefined, uncertainty: number | null | undefined, unit: string, written?: string): string {
+/**
+ * `2.152279(54) G`: a fitted value in the unit the file wrote (or a readable prefix), written by
+ * the one `value(uncertainty)` formatter.
+ */
+export function fittedText(si: number | null | undefined, uncertainty: number | null | undefined, unit: string, written?: string): string {
   const v = cleanValue(si);
   if (v === undefined) return MISSING;
   const { unit: shownUnit, perUnit } = displayScale(v, unit, written);
-  const x = v / perUnit;
   const suffix = shownUnit ? ` ${shownUnit}` : '';
-  const u = cleanValue(uncertainty);
-  if (u === undefined || u <= 0) return `${trimNumber(x, 7)}${suffix}`;
-  const du = u / perUnit;
-  const decimals = Math.max(0, 1 - Math.floor(Math.log10(du)));
-  if (decimals > 12) return `${trimNumber(x, 7)}${suffix}`;
-  const digits = Math.round(du * 10 ** decimals);
-  if (decimals === 0) return `${trimNumber(Math.round(x), 15)}(${trimNumber(Math.round(du), 2)})${suffix}`;
-  return `${x.toFixed(decimals)}(${digits})${suffix}`;
+  return withUncertainty(v, cleanValue(uncertainty), (x) => `${trimNumber(x / perUnit, 7)}${suffix}`);
 }
 
 export function parameterText(p: FitParameterResult): string {
-  return valueWithUncertaintyText(p.value, p.uncertainty, p.unit, p.written_unit);
+  return fittedText(p.value, p.uncertainty, p.unit, p.written_unit);
 }
 
 /** A measured value, a model value or a residual in the data's unit (Hz with a prefix, or counts). */

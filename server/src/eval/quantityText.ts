@@ -147,11 +147,22 @@ export function percentText(fraction: number | null | undefined, digits = 3, noi
 }
 
 /**
+ * How many significant digits an uncertainty keeps: always two. The GUM (JCGM 100:2008, §7.2.6)
+ * asks for "at most two significant digits", and the CODATA adjustments always quote two, so a
+ * printed constant reads like the published one. A value that would need more than 15 significant
+ * digits (past double precision) keeps one uncertainty digit instead: 6.83468261090429(9) GHz.
+ */
+export const UNCERTAINTY_DIGITS = 2;
+
+/** Significant digits a double carries reliably (IEEE 754 binary64: 15). */
+const MAX_DOUBLE_DIGITS = 15;
+
+/**
  * A value with its standard uncertainty in concise notation, `2.563009(14) GHz`: the value as
  * `format` prints it (same unit, same prefix, so units as the user wrote them), rounded to the
- * last digit of the uncertainty, which keeps two significant digits when it starts with 1 or 2
- * and one otherwise (common practice). Without an uncertainty (or with 0) it is `format(value)`,
- * so results with no uncertain input read exactly as before.
+ * last of the uncertainty's UNCERTAINTY_DIGITS significant digits. This is the one formatter for
+ * `value(uncertainty)` (text reports, hovers, inlay hints, fit reports). Without an uncertainty
+ * (or with 0) it is `format(value)`, so results with no uncertain input read exactly as before.
  */
 export function withUncertainty(value: number | null | undefined, unc: number | null | undefined, format: (v: number) => string): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return MISSING;
@@ -166,11 +177,15 @@ export function withUncertainty(value: number | null | undefined, unc: number | 
   const exponent = m[2] !== undefined ? Number(m[2]) : 0;
   const scale = unitScale(ref / (shown * 10 ** exponent), m[1]!.replace(/^-?0*\.?0*/, '').replace('.', '').length);
   const uShown = unc / Math.abs(scale) / 10 ** exponent;
-  const lead = Math.floor(Math.log10(uShown));
-  const keep = uShown / 10 ** lead < 3 ? 2 : 1;
-  const decimals = Math.min(20, Math.max(0, keep - 1 - lead));
+  let decimals = Math.min(20, Math.max(0, UNCERTAINTY_DIGITS - 1 - Math.floor(Math.log10(uShown))));
+  // Rounding can add a digit (9.96 → "100" at one decimal): then keep one decimal fewer.
+  if (decimals > 0 && Math.round(uShown * 10 ** decimals) >= 10 ** UNCERTAINTY_DIGITS) decimals--;
+  // A double holds 15 significant digits: a value needing more gives up an uncertainty digit rather than print noise.
+  const number = value / scale / 10 ** exponent;
+  const whole = Math.max(1, Math.floor(Math.log10(Math.abs(number))) + 1);
+  while (decimals > 0 && whole + decimals > MAX_DOUBLE_DIGITS && Math.round(uShown * 10 ** (decimals - 1)) >= 1) decimals--;
   const uDigits = Math.round(uShown * 10 ** decimals);
-  const v = (value / scale / 10 ** exponent).toFixed(decimals);
+  const v = number.toFixed(decimals);
   return `${v.replace(/^-(0\.?0*)$/, '$1')}(${uDigits})${m[2] !== undefined ? `e${m[2]}` : ''}${m[3]}`;
 }
 
