@@ -1,5 +1,5 @@
 /** Sensitivities of every sublevel's energy and slope at one field, looked up by label (for transitions and lines). */
-import { solveLevel, type LevelSpec } from '../../physics/engine';
+import type { LevelSpec } from '../../physics/engine';
 import { lowKey } from '../../physics/transitions/sublevelTag';
 import { levelDerivatives, throughParams, type ParamSensitivities, type Sensitivities } from '../../physics/uncertainty';
 
@@ -10,18 +10,15 @@ export interface StateSens {
   energyHz: number;
 }
 
+/** One solve per block: levelDerivatives gives the energies and labels with the derivatives. */
 export function statesAt(spec: LevelSpec, fieldT: number, params: ParamSensitivities): { byText: Map<string, StateSens>; byKey: Map<string, StateSens> } {
-  const solved = solveLevel(spec, fieldT).states;
   const d = levelDerivatives(spec, fieldT).states;
   const byText = new Map<string, StateSens>();
   const byKey = new Map<string, StateSens>();
-  if (d.length !== solved.length) return { byText, byKey };
-  solved.forEach((s, k) => {
-    const dk = d[k]!;
-    const v: StateSens = { energy: throughParams(dk.dE, params), slope: throughParams(dk.dSlope, params), energyHz: s.energyHz };
+  for (const s of d) {
+    const v: StateSens = { energy: throughParams(s.dE, params), slope: throughParams(s.dSlope, params), energyHz: s.energyHz };
     byText.set(s.low.text, v);
     byKey.set(lowKey(s.low), v);
-  });
-  return byText.size === solved.length ? { byText, byKey } : { byText: new Map(), byKey: new Map() };
+  }
+  return byText.size === d.length ? { byText, byKey } : { byText: new Map(), byKey: new Map() };
 }
-

@@ -14,9 +14,9 @@ import { buildLevelModel } from '../engine/buildModel';
 import { makeWorkspace, solveBlockAt } from '../engine/blockSolver';
 import { dotProductBlock } from '../engine/couplingMatrix';
 import { zeroFieldMatrix } from '../engine/hyperfineModel';
-import type { LevelBlock } from '../engine/levelModel';
+import { fieldSide, type LevelBlock } from '../engine/levelModel';
 import { symmetricEigen } from '../engine/symmetricEigen';
-import type { EngineIssue, HighFieldLabel, LevelSpec } from '../engine/types';
+import type { EngineIssue, HighFieldLabel, LevelSpec, LowFieldLabel } from '../engine/types';
 import type { CleanSpec } from '../engine/validateSpec';
 
 export type LevelParam = 'field' | 'A' | 'B' | 'C' | 'gJ' | 'gI' | 'zeta';
@@ -26,6 +26,8 @@ export type ParamPartials = Partial<Record<LevelParam, number>>;
 export interface StateDerivatives {
   twoM: number;
   energyHz: number;
+  /** The state's low-field label, as solveLevel gives it (so callers need not solve the level again). */
+  low: LowFieldLabel;
   /** ∂E/∂p, Hz per unit of p (Hz/T for the field, Hz/Hz for A, B, C, ζ). */
   dE: ParamPartials;
   /** ∂(dE/dB)/∂p, Hz/T per unit of p (for p = field: d²E/dB²). */
@@ -137,7 +139,8 @@ function blockDerivatives(spec: CleanSpec, block: LevelBlock, fieldT: number, va
   const groupOf = new Int32Array(n);
   groups.forEach((g, gi) => g.forEach((k) => (groupOf[k] = gi)));
   const states: StateDerivatives[] = [];
-  for (let k = 0; k < n; k++) states.push({ twoM: block.twoM, energyHz: values[k], dE: {}, dSlope: {}, degenerate: groups[groupOf[k]]!.length > 1 });
+  const low = block.low[fieldSide(fieldT)];
+  for (let k = 0; k < n; k++) states.push({ twoM: block.twoM, energyHz: values[k], low: low[k]!.label, dE: {}, dSlope: {}, degenerate: groups[groupOf[k]]!.length > 1 });
   const mats = paramMatrices(spec, block, fieldT);
   const zW = inEigenbasis(mats[0]!.h, vectors, n);
   for (const pm of mats) {
