@@ -1,14 +1,12 @@
 /** `sublevel fit <file> [--format text|json|csv]`: the file's fits, their best values with uncertainties and the residuals. */
 import { EVALUATION_VERSION } from '../eval/resultTypes';
 import { fitCsv } from '../render/fitCsv';
-import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
-import { OUT_OPTION, ROOT_OPTION, rootOption } from './files';
-import { analyzeFile, reportErrors } from './analyzeFile';
+import { type CommandSpec, type ParsedArgs, stringOption } from './args';
+import { OUT_OPTION, ROOT_OPTION } from './files';
 import { jsonText } from './escape';
-import { cliProblem, FileProblemError } from './fileProblems';
 import { fitReportLines } from './fitReport';
 import type { CliContext } from './io';
-import { writeOutputFile } from './output';
+import { emitOutput, nothingToCompute, openSetupFile } from './singleFile';
 
 const FORMATS = ['text', 'json', 'csv'] as const;
 
@@ -28,25 +26,15 @@ export const fitSpec: CommandSpec = {
 
 export function runFit(args: ParsedArgs, ctx: CliContext): number {
   const format = stringOption(args, 'format', FORMATS) ?? 'text';
-  if (args.positionals.length !== 1) throw new UsageError('fit needs exactly one setup file');
-  const file = args.positionals[0]!;
-  const out = stringOption(args, 'out');
-  const analysis = analyzeFile(file, ctx, rootOption(stringOption(args, 'root'), ctx.fsys));
-  const model = analysis.model;
-  if (!model) throw new FileProblemError(file, analysis.problems);
-  if (model.fits.length === 0) {
-    throw new FileProblemError(file, [cliProblem('nothing-to-compute', 'the file has no fit; write a `data` block and a `fit` block (docs/fit.md)')]);
-  }
+  const opened = openSetupFile('fit', args, ctx);
+  const { file, analysis, model } = opened;
+  if (model.fits.length === 0) nothingToCompute(file, 'the file has no fit; write a `data` block and a `fit` block (docs/fit.md)');
   const fits = analysis.result?.fits ?? [];
   const text =
     format === 'json'
       ? jsonText({ format: FIT_FORMAT, version: FIT_VERSION, evaluation_version: EVALUATION_VERSION, file, fits, diagnostics: analysis.result?.diagnostics.filter((d) => d.code.startsWith('fit-') || d.code.startsWith('data-')) ?? [] })
       : format === 'csv'
-        ? fitCsv(fits, file).trimEnd()
+        ? fitCsv(fits, file)
         : fitReportLines(file, fits).join('\n');
-  if (out) {
-    writeOutputFile(out, `${text}\n`, ctx.fsys);
-    ctx.io.err(`wrote ${fits.length} fit${fits.length === 1 ? '' : 's'} to ${out}`);
-  } else ctx.io.out(text);
-  return reportErrors(file, analysis, ctx) > 0 ? 1 : 0;
+  return emitOutput(opened, text, ctx, () => `${fits.length} fit${fits.length === 1 ? '' : 's'}`);
 }
