@@ -83,13 +83,14 @@ describe('renderLevels geometry', () => {
     expect(f2.map((g) => g.attrs['data-label'])).toEqual(['F=2, m_F=2', 'F=2, m_F=1', 'F=2, m_F=0', 'F=2, m_F=-1', 'F=2, m_F=-2']);
   });
 
-  it('grows the figure instead of merging names when there are many states', () => {
+  it('grows the figure for many distinct ends; 40 ends in one point (over 16 names) get one name', () => {
     const many: LevelsViewData = {
       ...data,
       curves: Array.from({ length: 40 }, (_, i) => ({ id: `s${i}`, lowLabel: `F=9, m_F=${i - 20}`, highLabel: `h${i}`, energyHz: Array.from(data.fieldsT, (b) => (i - 20) * 1e9 * b) })),
     };
     const s = parseSvg(renderLevels(many, exportTheme));
-    for (const side of ['sl-end-low', 'sl-end-high']) {
+    expect(all(byClass(s, 'sl-end-low')[0], (n) => n.name === 'text').map(textOf)).toEqual(['F=9, m_F=-20…19']);
+    for (const side of ['sl-end-high']) {
       const texts = all(byClass(s, side)[0], (n) => n.name === 'text');
       expect(texts).toHaveLength(40);
       const ys = texts.map((t) => Number(t.attrs.y)).sort((a, b) => a - b);

@@ -4,7 +4,8 @@
  * that decides which states a magnet focuses or a trap holds at that field, and a state can turn
  * over along the axis. Every named field of the file is a labelled rule. Every state is named
  * at both ends, in lanes left and right of the plot joined to the curve ends by short leaders;
- * the figure grows taller rather than merge names.
+ * the figure grows taller for distinct ends, and a crowded lane names coinciding ends once
+ * (placeLabels). Energies far from zero count from an offset (offsetAxis.ts).
  */
 import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
@@ -13,6 +14,7 @@ import { bottomAxis, leftAxis, type PlotBox } from './axes';
 import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
 import { laneHeightFor, placeLabels, truncateLabel, type LabelAnchor, type PlacedLabel } from './labelLayout';
 import { fieldMarksIn, layoutMarkRows, MARK_ROW } from './fieldMarks';
+import { axisOffset } from './offsetAxis';
 import { legendRows, type LegendEntry } from './legend';
 import { markerPath } from './markers';
 import { FALLING_DASH, paletteFor, type Palette } from './palette';
@@ -95,7 +97,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const markRows = layoutMarkRows(marks, AXIS_X + 180, width0 - 180, narrow);
   const rowCount = Math.max(1, ...markRows.map((r) => r + 1));
   const top = legendTop + legendSvg.height + 6 + rowCount * MARK_ROW;
-  // Tall enough that every state has its own name in each lane.
+  // Tall enough that every state could have its own name in each lane.
   const plotHeight = Math.max(480 - 56 - top, laneHeightFor(d.curves.length, LABEL_SPACING) + 8);
   const height = top + plotHeight + 56;
   const box: PlotBox = { left: 0, right: 0, top, bottom: top + plotHeight };
@@ -114,8 +116,8 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
     });
   const lowAnchors = endAnchors('low');
   const highAnchors = endAnchors('high');
-  const lowLabels = placeLabels(lowAnchors, box.top + 4, box.bottom - 2, LABEL_SPACING);
-  const highLabels = placeLabels(highAnchors, box.top + 4, box.bottom - 2, LABEL_SPACING);
+  const lowLabels = placeLabels(lowAnchors, box.top + 4, box.bottom - 2, LABEL_SPACING, LABEL_MAX_CHARS);
+  const highLabels = placeLabels(highAnchors, box.top + 4, box.bottom - 2, LABEL_SPACING, LABEL_MAX_CHARS);
   const leftLane = laneWidth(lowLabels);
   const rightLane = laneWidth(highLabels);
   const width = Math.max(width0, AXIS_X + leftLane + MIN_PLOT_WIDTH + rightLane + 12);
@@ -126,7 +128,11 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
 
   const body: string[] = [legendSvg.svg];
   body.push(bottomAxis(x, fUnit, 'B', box, pal));
-  body.push(leftAxis(y, eUnit, 'E/h', box, AXIS_X, pal));
+  // Ticks count from a round offset when absolute energies would need long labels (a whole term in THz).
+  const [yLo, yHi] = y.domain() as [number, number];
+  const eAxis = d.energyUnitHz !== undefined ? { offset: 0, unit: eUnit, name: 'E/h' } : axisOffset(yLo, yHi, Math.max(2, Math.round(plotHeight / 55)), 'E/h', 'Hz');
+  const yShown = eAxis.offset === 0 ? y : y.copy().domain([yLo - eAxis.offset, yHi - eAxis.offset]);
+  body.push(leftAxis(yShown, eAxis.unit, eAxis.name, box, AXIS_X, pal));
 
   // Curves.
   const interactive = theme.kind === 'panel';

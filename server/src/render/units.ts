@@ -48,7 +48,7 @@ export function fieldDisplayUnit(unit: FieldUnit): DisplayUnit {
 }
 
 /** Figures set numbers with the true minus sign (U+2212); the numbers themselves come from the one formatter. */
-function figureMinus(text: string): string {
+export function figureMinus(text: string): string {
   return text.replace(/(^|[\s(])-(?=\d)/g, '$1−');
 }
 
