@@ -8,7 +8,7 @@
  * group's centre in Hz and in units of μ_B·B/h.
  */
 import { scaleLinear } from 'd3-scale';
-import { spectrumPath } from './spectrumCurve';
+import { spectrumPath, spectrumTop } from './spectrumCurve';
 import { bottomAxis, leftAxis, topAxis, type PlotBox, type Scale } from './axes';
 import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
 import { lineGroups, zeemanUnitHz, type LineGroup } from './lineGroups';
@@ -43,18 +43,24 @@ interface StickContext {
   unit: DisplayUnit;
 }
 
+/** The height a component is drawn at: what the spectrum counts when one is drawn, else its strength. */
+function shownStrength(c: LineComponent): number {
+  return c.observed ?? c.strength;
+}
+
 function stick(c: LineComponent, i: number, cx: number, ctx: StickContext): string {
   const { pal, y } = ctx;
   const base = y(0);
-  const top = y(c.strength);
+  const h = shownStrength(c);
+  const top = y(h);
   const colour = pal.polarization[c.polarization];
   const name = POLARIZATION_NAME[c.polarization];
   const where = signed(c.offsetHz, formatIn(c.offsetHz, ctx.unit));
   const pathId = `${ctx.idBase}-k${i}`;
   const children = [
-    titleEl(`${name} ${c.label}: Δf = ${where}, strength ${dataNum(c.strength)}`),
+    titleEl(`${name} ${c.label}: Δf = ${where}, strength ${dataNum(c.strength)}${c.observed !== undefined ? `, seen ${dataNum(c.observed)} with the viewing factor` : ''}`),
     el('path', { id: pathId, d: `M${px(cx)},${px(base)}V${px(top)}`, fill: 'none', 'stroke-linecap': 'butt' }),
-    el('path', { class: 'sl-cap', d: markerPath(POLARIZATION_MARKER[c.polarization], cx, top, capRadius(c.strength, ctx.strongest)), fill: colour, stroke: pal.halo, 'stroke-width': 0.8, 'stroke-dasharray': 'none' }),
+    el('path', { class: 'sl-cap', d: markerPath(POLARIZATION_MARKER[c.polarization], cx, top, capRadius(h, ctx.strongest)), fill: colour, stroke: pal.halo, 'stroke-width': 0.8, 'stroke-dasharray': 'none' }),
   ];
   if (ctx.interactive) children.push(el('use', { href: `#${pathId}`, class: 'sl-hit', 'stroke-width': 9, 'stroke-opacity': 0, 'stroke-dasharray': 'none' }));
   return el(
@@ -66,6 +72,7 @@ function stick(c: LineComponent, i: number, cx: number, ctx: StickContext): stri
       'data-polarization': name,
       'data-offset-hz': dataNum(c.offsetHz),
       'data-strength': dataNum(c.strength),
+      'data-observed': c.observed !== undefined ? dataNum(c.observed) : undefined,
       stroke: colour,
       'stroke-width': 2.4,
       'stroke-dasharray': POLARIZATION_DASH[c.polarization],
@@ -79,10 +86,10 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
   const pal = paletteFor(theme);
   const idBase = `sl-s${shortHash(`${d.title}|${d.components.length}`)}`;
   const comps = d.components.filter(
-    (c) => Number.isFinite(c.offsetHz) && Number.isFinite(c.strength) && POLARIZATIONS.includes(c.polarization),
+    (c) => Number.isFinite(c.offsetHz) && Number.isFinite(shownStrength(c)) && POLARIZATIONS.includes(c.polarization) && !(c.observed === 0),
   );
   const fExtent = finiteExtent(comps.map((c) => c.offsetHz));
-  const sExtent = finiteExtent(comps.map((c) => c.strength));
+  const sExtent = finiteExtent(comps.map(shownStrength));
   if (!fExtent || !sExtent) return emptyDiagram('lines', idBase, d.title, 'No line components to draw.', pal);
 
   const present = new Set(comps.map((c) => c.polarization));
@@ -98,7 +105,9 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
   // A spectrum is one curve on one axis, so the hyperfine groups are not split into panels.
   const groups = d.unitHz === undefined && !d.spectrum ? lineGroups(comps, d.fieldT) : [];
   const counts = POLARIZATIONS.filter((p) => present.has(p)).map((p) => `${comps.filter((c) => c.polarization === p).length} ${POLARIZATION_NAME[p]}`);
-  const yDomain = [Math.min(0, sExtent[0]), Math.max(sExtent[1], 0) * 1.12 || 1];
+  // A blend of components can stand above every stick: the axis holds the curve too.
+  const top = Math.max(sExtent[1], d.spectrum ? spectrumTop(d.spectrum, sExtent[1]) : 0, 0);
+  const yDomain = [Math.min(0, sExtent[0]), top * 1.12 || 1];
   const interactive = theme.kind === 'panel';
   const strongest = sExtent[1];
 
@@ -118,7 +127,7 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
 
   const body: string[] = [legendSvg.svg];
   body.push(bottomAxis(x, unit, 'Δf', box, pal));
-  body.push(leftAxis(y, undefined, 'relative strength', box, box.left, pal));
+  body.push(leftAxis(y, undefined, comps.some((c) => c.observed !== undefined) ? 'strength × viewing factor' : 'relative strength', box, box.left, pal));
   if (f0 < 0 && f1 > 0) {
     body.push(
       el('path', { class: 'sl-zero', d: `M${px(x(0))},${px(box.top)}V${px(box.bottom)}`, stroke: pal.muted, 'stroke-width': 1, 'stroke-dasharray': '2 4', fill: 'none' }),

@@ -7,13 +7,30 @@ import type { Scale } from './axes';
 import { px } from './svgText';
 import type { LineSpectrumCurve } from './viewData';
 
-/** Path data for the curve scaled so its highest sample sits at `height` on the y scale. */
-export function spectrumPath(c: LineSpectrumCurve, x: Scale, y: Scale, height: number): string {
+function highestSample(c: LineSpectrumCurve): number {
   const n = Math.min(c.offsetHz.length, c.intensity.length);
   let peak = 0;
   for (let i = 0; i < n; i++) if (Number.isFinite(c.intensity[i]!) && c.intensity[i]! > peak) peak = c.intensity[i]!;
-  if (n < 2 || peak <= 0) return '';
-  const k = height / peak;
+  return peak;
+}
+
+/** The factor from intensity to stick units: 1/unitPeak, else the one that puts the highest sample at `height`. */
+function stickUnits(c: LineSpectrumCurve, height: number): number {
+  if (c.unitPeak !== undefined && c.unitPeak > 0 && Number.isFinite(c.unitPeak)) return 1 / c.unitPeak;
+  const peak = highestSample(c);
+  return peak > 0 ? height / peak : 0;
+}
+
+/** The curve's highest point in stick units (for the y axis). */
+export function spectrumTop(c: LineSpectrumCurve, height: number): number {
+  return highestSample(c) * stickUnits(c, height);
+}
+
+/** Path data for the curve in stick units (see LineSpectrumCurve.unitPeak); `height` is the strongest stick's. */
+export function spectrumPath(c: LineSpectrumCurve, x: Scale, y: Scale, height: number): string {
+  const n = Math.min(c.offsetHz.length, c.intensity.length);
+  const k = stickUnits(c, height);
+  if (n < 2 || !(k > 0)) return '';
   const parts: string[] = [];
   let column = NaN;
   let lo = Infinity;

@@ -79,6 +79,11 @@ export interface LineComponent {
   strength: number;
   polarization: Polarization;
   label: string;
+  /**
+   * With a spectrum: the strength times the angular factor of its viewing direction and analyser
+   * (what the curve counts). The stick is drawn at this height; 0 (π along the field) is not drawn.
+   */
+  observed?: number;
 }
 
 export interface LinesViewData {
@@ -97,8 +102,14 @@ export interface LinesViewData {
 
 export interface LineSpectrumCurve {
   offsetHz: ArrayLike<number>;
-  /** Intensity per Hz; drawn with its highest sample at the height of the strongest stick. */
+  /** Intensity per Hz; drawn with its highest sample at the height of the strongest stick unless `unitPeak` is given. */
   intensity: ArrayLike<number>;
+  /**
+   * The intensity at the centre of one isolated component of unit weight (the line shape's peak):
+   * the curve is then drawn in stick units, so an isolated peak meets its stick and a blend of
+   * components stands above them, as the spectrum counts it.
+   */
+  unitPeak?: number;
   /** What the curve is, for the legend: "spectrum across the field, all light, Voigt FWHM 523 MHz". */
   caption: string;
 }

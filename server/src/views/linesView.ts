@@ -4,6 +4,7 @@ import type { LinesViewData } from '../render';
 import { fieldInUnit } from '../eval/writtenUnit';
 import { spectrumSamples } from '../eval/spectrumSamples';
 import { frequencyText } from '../eval/quantityText';
+import { voigtProfile } from '../physics/lineshape';
 
 /** The index of the named field among the line's computed fields, else the first. */
 export function lineFieldIndex(line: LineResult, fieldName: string | undefined): number {
@@ -22,11 +23,13 @@ export function linesView(line: LineResult, fieldIndex = 0, writtenUnit?: string
     fieldT: at.field_T,
     fieldText: field,
     fieldName: `${at.source.kind} ${at.source.name}`,
-    components: at.components.map((c) => ({
+    components: at.components.map((c, k) => ({
       offsetHz: c.offset_Hz,
       strength: c.strength,
       polarization: c.polarization,
       label: `${c.lower_label} → ${c.upper_label}`,
+      // The sticks under a spectrum show what its curve counts: strength × the viewing factor.
+      ...(at.spectrum ? { observed: at.spectrum.weights[k] ?? 0 } : {}),
     })),
     ...(at.spectrum ? { spectrum: spectrumCurve(at.spectrum, at.components) } : {}),
   };
@@ -41,6 +44,7 @@ function spectrumCurve(s: NonNullable<LineResult['at_fields'][number]['spectrum'
   return {
     offsetHz: samples.offsetHz,
     intensity: samples.intensity,
-    caption: `spectrum ${s.direction} the field, ${light}, Voigt FWHM ${frequencyText(s.voigt_fwhm_Hz, 3)} (peak scaled${sparse})`,
+    unitPeak: voigtProfile(0, s.sigma_Hz, s.gamma_Hz),
+    caption: `spectrum ${s.direction} the field, ${light}, Voigt FWHM ${frequencyText(s.voigt_fwhm_Hz, 3)} (a lone component peaks at its stick${sparse})`,
   };
 }
