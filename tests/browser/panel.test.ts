@@ -159,6 +159,17 @@ describe('diagram panel page (browser)', () => {
     expect(await page.title()).toBe(data.title);
     expect(await page.locator('button[data-export="csv"]').isDisabled()).toBe(false);
 
+    // Before the user picks a unit, the unit control follows the field axis, which echoes the
+    // file's unit: a file that writes gauss starts at G (it used to start at mT whatever the file wrote).
+    expect(await page.inputValue('#sl-unit')).toBe('mT');
+    const inGauss = { ...data, fieldUnit: 'G' as const };
+    await page.evaluate((m) => window.postMessage(m, '*'), { ...show, svg: renderLevels(inGauss, { kind: 'panel' }) });
+    await page.waitForSelector('#sl-host svg[data-x-unit="G"]');
+    expect(await page.inputValue('#sl-unit')).toBe('G');
+    await page.evaluate((m) => window.postMessage(m, '*'), show);
+    await page.waitForSelector('#sl-host svg[data-x-unit="mT"]');
+    expect(await page.inputValue('#sl-unit')).toBe('mT');
+
     // Hover a point 70% along the top curve: the read-out names that state.
     const point = await page.evaluate(() => {
       const p = document.querySelector('[data-kind="curve"][data-id="F2m4"] path') as SVGPathElement;

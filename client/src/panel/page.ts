@@ -62,8 +62,19 @@ function showCurrent(): void {
     b.disabled = !svg || (b.dataset.export === 'csv' && !msg?.csv);
   }
   showFieldChoices(msg?.fields ?? []);
+  if (svg) followAxisUnit(svg);
   // The range applies to the energy diagram; the resonance view takes its range from the file.
   rangeBox.hidden = current !== 'levels';
+}
+
+/**
+ * Until the user picks a unit, the unit control shows the field axis's unit, which echoes the
+ * unit the file wrote (`5 G` → G), so From/to are typed in the unit the figure shows.
+ */
+function followAxisUnit(svg: Element): void {
+  if (options.unit !== undefined || svg.getAttribute('data-x-name') !== 'B') return;
+  const unit = svg.getAttribute('data-x-unit');
+  if (unit !== null && (FIELD_UNITS as readonly string[]).includes(unit)) unitSelect.value = unit;
 }
 
 function showFieldChoices(names: string[]): void {
