@@ -116,6 +116,64 @@ describe('sublevel diff: version pairs', () => {
   });
 });
 
+describe('sublevel diff: fits and spectra', () => {
+  // Expected: the edits are the changed inputs; the fitted values, χ², roots and widths are the
+  // fit and line-shape code's own (checked against outside references in tests/physics, tests/eval).
+  it('a moved resonance point: χ² jumps and the fit warns; g_J and A move by less than their thresholds', () => {
+    const { code, diff } = diffJson(`${F}/fit-old.sublevel`, `${F}/fit-point-moved.sublevel`);
+    expect(code).toBe(1);
+    expect(reported(diff)).toEqual(['fit constants: χ²: 8.2837 → 61.037', 'fit constants: new warning fit-chi2-high']);
+    expect(diff.things[0]!.changes[0]).toMatchObject({ unit: '', change: '+52.754' });
+  });
+
+  it('with finer thresholds the fitted values show, each to the digits its threshold resolves', () => {
+    const { diff } = diffJson(`${F}/fit-old.sublevel`, `${F}/fit-point-moved.sublevel`, '--frequency-threshold', '10Hz', '--g-threshold', '1e-9');
+    expect(reported(diff)).toEqual([
+      'fit constants: value [g_J]: 2.0023312572 → 2.0023317042',
+      'fit constants: value [A]: 3417.341361 MHz → 3417.341491 MHz',
+      'fit constants: χ²: 8.2837 → 61.037',
+      'fit constants: new warning fit-chi2-high',
+    ]);
+    expect(diff.things[0]!.changes[1]).toMatchObject({ change: '+0.00013 MHz', unit: 'Hz' });
+  });
+
+  it('a more precise clock point: both fields of the calibration move and their uncertainties shrink, in the unit the range was written in', () => {
+    const { diff } = diffJson(`${F}/fit-old.sublevel`, `${F}/fit-clock-moved.sublevel`);
+    expect(reported(diff)).toEqual([
+      'fit bias: field [root 1]: 2.1454 G → 2.1138 G',
+      'fit bias: field uncertainty [root 1]: 0.00535 G → 0.00208 G',
+      'fit bias: field [root 2]: 4.3124 G → 4.3441 G',
+      'fit bias: field uncertainty [root 2]: 0.00535 G → 0.00208 G',
+    ]);
+  });
+
+  it('a hotter vapour and a laser width: the spectrum widens and its highest peak moves', () => {
+    const { diff } = diffJson(`${F}/spectrum-old.sublevel`, `${F}/spectrum-hotter.sublevel`);
+    expect(reported(diff)).toEqual([
+      'line L: spectrum peak offset at field coil: -1.300427 GHz → -926.4752 MHz',
+      'line L: Voigt FWHM at field coil: 2.96257 GHz → 3.420398 GHz',
+      'line L: Doppler FWHM at field coil: 2.959429 GHz → 3.417254 GHz',
+      'line L: instrument FWHM at field coil: — → 5 MHz',
+    ]);
+    // Doppler FWHM ∝ √T (textbook): 2.959429 GHz × √(800/600).
+    expect(diff.things[0]!.changes[2]!.new_value as number).toBeCloseTo(2.959429e9 * Math.sqrt(800 / 600), -3);
+  });
+
+  it('the same line seen along the field: the view changes and the highest peak is another component', () => {
+    const { diff } = diffJson(`${F}/spectrum-old.sublevel`, `${F}/spectrum-along.sublevel`);
+    expect(reported(diff)).toEqual(['line L: spectrum viewed at field coil: across → along', 'line L: spectrum peak offset at field coil: -1.300427 GHz → 4.295258 GHz']);
+  });
+
+  it('a spectrum added to a line is reported as new', () => {
+    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'sl-diff-spectrum-'));
+    const plain = path.join(dir, 'plain.sublevel');
+    fs.writeFileSync(plain, fs.readFileSync(`${F}/spectrum-old.sublevel`, 'utf8').replace(/  spectrum = across\n  doppler  = 600 K\n/, ''));
+    const { diff } = diffJson(plain, `${F}/spectrum-old.sublevel`);
+    expect(reported(diff)).toEqual(['line L: spectrum [spectrum] at field coil: absent → new']);
+    fs.rmSync(dir, { recursive: true, force: true });
+  });
+});
+
 describe('sublevel diff: thresholds, formats, exit codes', () => {
   const H = [`${F}/hydrogen-old.sublevel`, `${F}/hydrogen-A-changed.sublevel`];
 

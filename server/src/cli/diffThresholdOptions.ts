@@ -18,6 +18,8 @@ const THRESHOLDS: Readonly<Record<string, ThresholdOption>> = {
   'g-threshold': { key: 'g', help: 'smallest change of a g-factor reported (default 1e-6)' },
   'moment-threshold': { key: 'moment_bohr', help: 'smallest change of a sublevel moment reported, in Bohr magnetons (default 1e-4)' },
   'strength-threshold': { key: 'strength', help: 'smallest change of a line component strength reported (default 1e-4)' },
+  'chi2-threshold': { key: 'chi2', help: "smallest change of a fit's chi-squared reported (default 1e-3)" },
+  'fraction-threshold': { key: 'fraction', help: 'smallest relative change of a fitted value with no threshold of its own, e.g. a temperature (default 1e-6)' },
 };
 
 export const DIFF_THRESHOLD_OPTIONS = Object.fromEntries(

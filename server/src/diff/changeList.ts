@@ -58,7 +58,7 @@ export class ChangeList {
 
 /** A difference with its sign in front ('+30 T/m', '-1.2 mm'). */
 function signed(text: string): string {
-  return /^[-−0]/.test(text) || text === MISSING ? text : `+${text}`;
+  return /^[-−]/.test(text) || /^0(?:\s|$)/.test(text) || text === MISSING ? text : `+${text}`;
 }
 
 /** Items of two lists paired by a key; each key once (a later repeat is ignored). */

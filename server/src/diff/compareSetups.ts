@@ -1,6 +1,6 @@
 /**
  * The physical difference between two analysed versions of a setup: each thing (field, magnet,
- * level, term, beam, line, resonance) matched by name and compared quantity by quantity beyond
+ * level, term, beam, line, resonance, fit) matched by name and compared quantity by quantity beyond
  * the thresholds, plus the diagnostics that appeared or went away. Pure: no I/O.
  */
 import type { SetupDocument } from '../format/ast';
@@ -10,6 +10,7 @@ import type { EvaluationResult } from '../eval/resultTypes';
 import type { ChangeList } from './changeList';
 import { compareBeam, compareField, compareMagnet } from './compareApparatus';
 import { compareLevel, compareTerm } from './compareLevels';
+import { compareFit } from './compareFits';
 import { compareLine, compareResonance } from './compareSpectra';
 import { thingOf, type ThingRef, unmatched } from './diagnosticThings';
 import { DIFF_FORMAT, DIFF_VERSION, type DiffThresholds, type SetupDiff, type ThingDiff, type ThingKind } from './diffTypes';
@@ -21,7 +22,7 @@ export interface DiffSide {
 }
 
 /** The order things are reported in. */
-const KIND_ORDER: readonly ThingKind[] = ['file', 'settings', 'species', 'field', 'magnet', 'level', 'term', 'beam', 'line', 'resonance'];
+const KIND_ORDER: readonly ThingKind[] = ['file', 'settings', 'species', 'field', 'magnet', 'level', 'term', 'beam', 'line', 'resonance', 'data', 'fit'];
 
 interface Kind<T> {
   kind: ThingKind;
@@ -44,6 +45,7 @@ const KINDS: readonly Kind<unknown>[] = [
   kind({ kind: 'beam', list: (r) => r.beams, name: named, compare: compareBeam }),
   kind({ kind: 'line', list: (r) => r.lines, name: named, compare: compareLine }),
   kind({ kind: 'resonance', list: (r) => r.resonances, name: named, compare: compareResonance }),
+  kind({ kind: 'fit', list: (r) => r.fits ?? [], name: named, compare: compareFit }),
 ];
 
 const thingKey = (t: ThingRef): string => `${t.kind}\u0000${t.name}`;

@@ -1,5 +1,5 @@
-/** Optical lines and RF/microwave resonances: centres, components, transition frequencies, resonance fields. */
-import type { LineResult, MagneticTransitionResult, ResonanceResult } from '../eval/resultTypes';
+/** Optical lines and RF/microwave resonances: centres, components, spectra, transition frequencies, resonance fields. */
+import type { LineResult, MagneticTransitionResult, ResonanceResult, SpectrumResult } from '../eval/resultTypes';
 import { ChangeList, pairByKey } from './changeList';
 import type { DiffThresholds } from './diffTypes';
 import { field, frequency, gFactor, strength } from './writers';
@@ -26,8 +26,23 @@ export function compareLine(a: LineResult, b: LineResult, t: DiffThresholds): Ch
       list.number('offset', ca.offset_Hz, cb.offset_Hz, t.frequency_Hz, frequency, 'Hz', { subject, at });
       list.number('strength', ca.strength, cb.strength, t.strength, strength, '', { subject, at });
     }
+    compareSpectrum(list, pa.spectrum, pb.spectrum, at, t);
   }
   return list;
+}
+
+/** A line's synthesized spectrum: how it is viewed, where its highest peak is and how wide its line shape. */
+function compareSpectrum(list: ChangeList, a: SpectrumResult | undefined, b: SpectrumResult | undefined, at: string, t: DiffThresholds): void {
+  list.presence('spectrum', a ? ['spectrum'] : [], b ? ['spectrum'] : [], { at });
+  if (!a || !b) return;
+  const where = { at };
+  list.value('spectrum viewed', a.direction, b.direction, where);
+  list.value('spectrum light', a.light, b.light, where);
+  list.number('spectrum peak offset', a.peak_offset_Hz, b.peak_offset_Hz, t.frequency_Hz, frequency, 'Hz', where);
+  list.number('Voigt FWHM', a.voigt_fwhm_Hz, b.voigt_fwhm_Hz, t.frequency_Hz, frequency, 'Hz', where);
+  list.number('Doppler FWHM', a.doppler_fwhm_Hz, b.doppler_fwhm_Hz, t.frequency_Hz, frequency, 'Hz', where);
+  list.number('natural FWHM', a.natural_fwhm_Hz, b.natural_fwhm_Hz, t.frequency_Hz, frequency, 'Hz', where);
+  list.number('instrument FWHM', a.instrument_fwhm_Hz, b.instrument_fwhm_Hz, t.frequency_Hz, frequency, 'Hz', where);
 }
 
 function compareTransitions(list: ChangeList, a: readonly MagneticTransitionResult[], b: readonly MagneticTransitionResult[], at: string, t: DiffThresholds): void {

@@ -18,6 +18,10 @@ export interface DiffThresholds {
   g: number;
   moment_bohr: number;
   strength: number;
+  /** A fit's χ² (absolute). */
+  chi2: number;
+  /** Fitted values without a threshold of their own (a temperature, a gradient): relative to the value. */
+  fraction: number;
 }
 
 export const DEFAULT_THRESHOLDS: DiffThresholds = {
@@ -27,6 +31,8 @@ export const DEFAULT_THRESHOLDS: DiffThresholds = {
   g: 1e-6,
   moment_bohr: 1e-4,
   strength: 1e-4,
+  chi2: 1e-3,
+  fraction: 1e-6,
 };
 
 export type ChangeValue = number | string | boolean | null;

@@ -28,12 +28,12 @@ function displayScale(si: number, unit: string, written: string | undefined): { 
  * `2.152279(54) G`: a fitted value in the unit the file wrote (or a readable prefix), written by
  * the one `value(uncertainty)` formatter.
  */
-export function fittedText(si: number | null | undefined, uncertainty: number | null | undefined, unit: string, written?: string): string {
+export function fittedText(si: number | null | undefined, uncertainty: number | null | undefined, unit: string, written?: string, digits = 7): string {
   const v = cleanValue(si);
   if (v === undefined) return MISSING;
   const { unit: shownUnit, perUnit } = displayScale(v, unit, written);
   const suffix = shownUnit ? ` ${shownUnit}` : '';
-  return withUncertainty(v, cleanValue(uncertainty), (x) => `${trimNumber(x / perUnit, 7)}${suffix}`);
+  return withUncertainty(v, cleanValue(uncertainty), (x) => `${trimNumber(x / perUnit, digits)}${suffix}`);
 }
 
 export function parameterText(p: FitParameterResult): string {
