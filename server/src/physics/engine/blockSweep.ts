@@ -114,10 +114,21 @@ interface Anchor {
   reachT: number;
 }
 
-function anchorAt(block: LevelBlock, fieldT: number, at: Anchor, curvature: boolean): boolean {
-  if (!solveBlockAt(block, fieldT, at.ws)) return false;
+/**
+ * Where a series reaches less than one step, an anchor's expansion is never used: such
+ * steps are solved without expanding, and the expansion is tried again after this many of
+ * them (the reach grows with the field, so it may have become worth it).
+ */
+const SOLVE_ONLY_RUN = 4;
+
+function expandAnchor(block: LevelBlock, at: Anchor, curvature: boolean): void {
   expandAt(at.ws.values, at.ws.vectors, block.zeeman, block.size, at.sw, curvature);
   at.reachT = at.sw.reach * at.sw.scaleT;
+}
+
+function anchorAt(block: LevelBlock, fieldT: number, at: Anchor, curvature: boolean): boolean {
+  if (!solveBlockAt(block, fieldT, at.ws)) return false;
+  expandAnchor(block, at, curvature);
   return true;
 }
 
@@ -127,8 +138,10 @@ function anchorAt(block: LevelBlock, fieldT: number, at: Anchor, curvature: bool
  * exactly and expanded; the points between two anchors take the nearer one's
  * series. The next anchor is placed about two reaches ahead; if the two
  * reaches do not meet, or the two series disagree halfway (where each is
- * least accurate), the stretch is halved. Returns the degenerate pairs left
- * out of curvatures, or −1 if the solver failed.
+ * least accurate), the stretch is halved. A neighbouring point is solved but not
+ * expanded, and while the last reach is shorter than a step the sweep goes on solving
+ * (SOLVE_ONLY_RUN). Returns the degenerate pairs left out of curvatures, or −1 if the
+ * solver failed.
  */
 export function sweepBlockBySeries(block: LevelBlock, fieldsT: Float64Array, anchors: [Anchor, Anchor], out: BlockOutput): number {
   const last = fieldsT.length - 1;
@@ -137,16 +150,35 @@ export function sweepBlockBySeries(block: LevelBlock, fieldsT: Float64Array, anc
   if (!anchorAt(block, fieldsT[0], here, out.curvature)) return -1;
   let skipped = writeSolved(block, here.ws, fieldsT[0], 0, out);
   let p = 0;
+  let expanded = true;
+  let lastReachT = here.reachT;
+  let solvedOnly = 0;
   while (p < last) {
+    if (!expanded) {
+      if (solvedOnly < SOLVE_ONLY_RUN && lastReachT < Math.abs(fieldsT[p + 1] - fieldsT[p])) {
+        if (!solveBlockAt(block, fieldsT[p + 1], there.ws)) return -1;
+        skipped += writeSolved(block, there.ws, fieldsT[p + 1], p + 1, out);
+        [here, there] = [there, here];
+        p++;
+        solvedOnly++;
+        continue;
+      }
+      expandAnchor(block, here, out.curvature);
+      lastReachT = here.reachT;
+      solvedOnly = 0;
+    }
     let q = p + 1;
     while (q < last && Math.abs(fieldsT[q + 1] - fieldsT[p]) <= 2 * here.reachT) q++;
     for (;;) {
-      if (!anchorAt(block, fieldsT[q], there, out.curvature)) return -1;
+      if (!solveBlockAt(block, fieldsT[q], there.ws)) return -1;
       if (q === p + 1) break;
+      expandAnchor(block, there, out.curvature);
       const half = 0.5 * (fieldsT[q] - fieldsT[p]);
       if (Math.abs(half) <= Math.min(here.reachT, there.reachT) && seriesAgree(block, here.sw, there.sw, half, tmp)) break;
       q = p + Math.max(1, Math.floor((q - p) / 2));
     }
+    expanded = q > p + 1;
+    if (expanded) lastReachT = there.reachT;
     // Points nearer p take p's series, the rest q's.
     let mid = p + 1;
     while (mid < q && Math.abs(fieldsT[mid] - fieldsT[p]) <= Math.abs(fieldsT[q] - fieldsT[mid])) mid++;
