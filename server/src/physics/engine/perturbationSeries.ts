@@ -41,7 +41,7 @@ export interface SeriesWorkspace {
   invGap: Float64Array;
   /** c_kj at j n + k while the series is built. */
   orders: Float64Array;
-  /** <Ψ_a|Ψ_b>_k at (a (STATE_ORDER + 1) + b) n + k, 1 ≤ a, b ≤ STATE_ORDER. */
+  /** <Ψ_a|Ψ_b>_k at (a (STATE_ORDER + 1) + b) n + k, 1 ≤ a ≤ b ≤ STATE_ORDER. */
   overlap: Float64Array;
   /** Tesla per unit of t; 0 when the anchor cannot be expanded. */
   scaleT: number;
@@ -143,23 +143,31 @@ function energySeries(values: Float64Array, n: number, sw: SeriesWorkspace): voi
     }
     for (let i = 0; i < nn; i++) psi[at + i] *= invGap[i];
   }
+  // <Ψ_a|Ψ_b> for a ≤ b (symmetric), as far as the sums below reach (a + b < SERIES_ORDER).
   for (let a = 1; a <= STATE_ORDER; a++) {
-    for (let b = a; b <= STATE_ORDER; b++) {
-      columnDots(psi, a * nn, psi, b * nn, n, overlap, (a * s1 + b) * n);
-      if (b !== a) overlap.copyWithin((b * s1 + a) * n, (a * s1 + b) * n, (a * s1 + b + 1) * n);
-    }
+    for (let b = a; b <= STATE_ORDER && a + b < SERIES_ORDER; b++) columnDots(psi, a * nn, psi, b * nn, n, overlap, (a * s1 + b) * n);
   }
   for (let j = STATE_ORDER + 1; j <= SERIES_ORDER; j++) {
     const m = j >> 1;
     const at = j * n;
-    // <Ψ_{m}|Z_s|Ψ_m> (odd j) or <Ψ_{m−1}|Z_s|Ψ_m> (even j), with Z_s Ψ taken from the lower one.
-    if (j % 2 === 1) columnDots(psi, m * nn, zpsi, m * nn, n, orders, at);
-    else columnDots(psi, m * nn, zpsi, (m - 1) * nn, n, orders, at);
-    const bTop = j % 2 === 1 ? m : m - 1;
-    for (let a = 1; a <= m; a++) {
-      for (let b = 1; b <= bTop; b++) {
+    const odd = j % 2 === 1;
+    // <Ψ_m|Z_s|Ψ_m> (odd j) or <Ψ_{m−1}|Z_s|Ψ_m> (even j), with Z_s Ψ taken from the lower one.
+    columnDots(psi, m * nn, zpsi, (odd ? m : m - 1) * nn, n, orders, at);
+    // The double sum over the square a, b ≤ q (q = m for odd j, m − 1 for even j) by symmetry:
+    // the diagonal once, each pair a < b twice; even j adds the row a = m, b < m.
+    const q = odd ? m : m - 1;
+    for (let a = 1; a <= q; a++) {
+      for (let b = a; b <= q; b++) {
         const c = (j - a - b) * n;
         const o = (a * s1 + b) * n;
+        const w = a === b ? 1 : 2;
+        for (let k = 0; k < n; k++) orders[at + k] -= w * orders[c + k] * overlap[o + k];
+      }
+    }
+    if (!odd) {
+      for (let b = 1; b < m; b++) {
+        const c = (j - m - b) * n;
+        const o = (b * s1 + m) * n;
         for (let k = 0; k < n; k++) orders[at + k] -= orders[c + k] * overlap[o + k];
       }
     }
