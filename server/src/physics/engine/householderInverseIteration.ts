@@ -12,14 +12,12 @@ import { tridiagonalQr } from './householderQl';
 import { tridiagonalEigenpairs } from './tridiagonalVectors';
 
 /**
- * Reduce the lower triangle of `a` to T = Qᵀ A Q (d diagonal, e sub-diagonal); the reflector of
- * step k, H_k = I − β_k v vᵀ with v nonzero from k + 1 on, goes to row k of `reflectors`
- * (packed at k n + k + 1 …) and β_k to betas[k].
+ * Reduce the lower triangle of `a` to T = Qᵀ A Q (d diagonal, e sub-diagonal). The reflector of
+ * step k, H_k = I − β_k v vᵀ with v nonzero from k + 1 on, stays in column k of `a` below the
+ * diagonal (where the column it annihilates was, as LAPACK's dsytrd keeps it), β_k in betas[k].
  */
-function tridiagonaliseLower(a: Float64Array, n: number, d: Float64Array, e: Float64Array, reflectors: Float64Array, betas: Float64Array, p: Float64Array): void {
+function tridiagonaliseLower(a: Float64Array, n: number, d: Float64Array, e: Float64Array, v: Float64Array, betas: Float64Array, p: Float64Array): void {
   for (let k = 0; k < n - 2; k++) {
-    const v = reflectors;
-    const vAt = k * n;
     let tail = 0;
     for (let i = k + 2; i < n; i++) tail += a[i * n + k] * a[i * n + k];
     const x0 = a[(k + 1) * n + k];
@@ -29,20 +27,21 @@ function tridiagonaliseLower(a: Float64Array, n: number, d: Float64Array, e: Flo
       continue;
     }
     const alpha = -(x0 >= 0 ? 1 : -1) * Math.sqrt(tail + x0 * x0);
-    v[vAt + k + 1] = x0 - alpha;
-    for (let i = k + 2; i < n; i++) v[vAt + i] = a[i * n + k];
-    const beta = 2 / (v[vAt + k + 1] * v[vAt + k + 1] + tail);
+    a[(k + 1) * n + k] = x0 - alpha;
+    // v (contiguous copy of column k) for the passes below.
+    for (let i = k + 1; i < n; i++) v[i] = a[i * n + k];
+    const beta = 2 / (v[k + 1] * v[k + 1] + tail);
     betas[k] = beta;
     e[k] = alpha;
     // p = β A v on the trailing block, from its lower triangle (row i: a_ij, j ≤ i).
     for (let i = k + 1; i < n; i++) p[i] = 0;
     for (let i = k + 1; i < n; i++) {
       const row = i * n;
-      const vi = v[vAt + i];
+      const vi = v[i];
       let s = 0;
       for (let j = k + 1; j < i; j++) {
         const aij = a[row + j];
-        s += aij * v[vAt + j];
+        s += aij * v[j];
         p[j] += aij * vi;
       }
       p[i] += s + a[row + i] * vi;
@@ -50,16 +49,16 @@ function tridiagonaliseLower(a: Float64Array, n: number, d: Float64Array, e: Flo
     let vp = 0;
     for (let i = k + 1; i < n; i++) {
       p[i] *= beta;
-      vp += v[vAt + i] * p[i];
+      vp += v[i] * p[i];
     }
     // w = p − (β/2)(vᵀp) v, then A ← A − v wᵀ − w vᵀ on the lower trailing triangle.
     const kk = 0.5 * beta * vp;
-    for (let i = k + 1; i < n; i++) p[i] -= kk * v[vAt + i];
+    for (let i = k + 1; i < n; i++) p[i] -= kk * v[i];
     for (let i = k + 1; i < n; i++) {
       const row = i * n;
-      const vi = v[vAt + i];
+      const vi = v[i];
       const wi = p[i];
-      for (let j = k + 1; j <= i; j++) a[row + j] -= vi * p[j] + wi * v[vAt + j];
+      for (let j = k + 1; j <= i; j++) a[row + j] -= vi * p[j] + wi * v[j];
     }
   }
   for (let i = 0; i < n; i++) d[i] = a[i * n + i];
@@ -67,14 +66,16 @@ function tridiagonaliseLower(a: Float64Array, n: number, d: Float64Array, e: Flo
 }
 
 /**
- * Row r of zt ← H_0 … H_{n−3} (row r) for every row. Four rows share each pass over a
+ * Row r of zt ← H_0 … H_{n−3} (row r) for every row, the reflectors read from the columns of
+ * `a` (tridiagonaliseLower). Four rows share each pass over a
  * reflector (four dot products, then four updates), which halves the loads per operation.
  */
-function applyReflectors(zt: Float64Array, n: number, reflectors: Float64Array, betas: Float64Array): void {
+function applyReflectors(zt: Float64Array, n: number, a: Float64Array, betas: Float64Array, reflector: Float64Array): void {
   for (let k = n - 3; k >= 0; k--) {
     const beta = betas[k];
     if (beta === 0) continue;
-    const vAt = k * n;
+    // The reflector, copied out of column k so the passes below read it contiguously.
+    for (let i = k + 1; i < n; i++) reflector[i] = a[i * n + k];
     let r = 0;
     for (; r + 3 < n; r += 4) {
       const a0 = r * n;
@@ -86,7 +87,7 @@ function applyReflectors(zt: Float64Array, n: number, reflectors: Float64Array, 
       let s2 = 0;
       let s3 = 0;
       for (let i = k + 1; i < n; i++) {
-        const v = reflectors[vAt + i];
+        const v = reflector[i];
         s0 += v * zt[a0 + i];
         s1 += v * zt[a1 + i];
         s2 += v * zt[a2 + i];
@@ -97,7 +98,7 @@ function applyReflectors(zt: Float64Array, n: number, reflectors: Float64Array, 
       s2 *= beta;
       s3 *= beta;
       for (let i = k + 1; i < n; i++) {
-        const v = reflectors[vAt + i];
+        const v = reflector[i];
         zt[a0 + i] -= s0 * v;
         zt[a1 + i] -= s1 * v;
         zt[a2 + i] -= s2 * v;
@@ -107,9 +108,9 @@ function applyReflectors(zt: Float64Array, n: number, reflectors: Float64Array, 
     for (; r < n; r++) {
       const at = r * n;
       let s = 0;
-      for (let i = k + 1; i < n; i++) s += reflectors[vAt + i] * zt[at + i];
+      for (let i = k + 1; i < n; i++) s += reflector[i] * zt[at + i];
       s *= beta;
-      for (let i = k + 1; i < n; i++) zt[at + i] -= s * reflectors[vAt + i];
+      for (let i = k + 1; i < n; i++) zt[at + i] -= s * reflector[i];
     }
   }
 }
@@ -128,13 +129,20 @@ export function householderInverseIterationInPlace(a: Float64Array, n: number, v
   const d = new Float64Array(n);
   const e = new Float64Array(n);
   const betas = new Float64Array(n);
-  const reflectors = new Float64Array(n * n);
-  tridiagonaliseLower(a, n, d, e, reflectors, betas, values);
+  const v = new Float64Array(n);
+  tridiagonaliseLower(a, n, d, e, v, betas, values);
   // Row k of zt: the k-th eigenvector, first of T, then of A = H_0 … H_{n−3} T-vectors.
-  const zt = a;
+  const zt = vectors;
   if (!tridiagonalEigenpairs(d, e, n, values, zt, (bd, be, m) => tridiagonalQr(bd, be, null, m))) return false;
-  applyReflectors(zt, n, reflectors, betas);
-  for (let i = 0; i < n; i++) for (let k = 0; k < n; k++) vectors[i * n + k] = zt[k * n + i];
+  applyReflectors(zt, n, a, betas, v);
+  // Rows to columns.
+  for (let i = 0; i < n; i++) {
+    for (let k = i + 1; k < n; k++) {
+      const t = zt[i * n + k];
+      zt[i * n + k] = zt[k * n + i];
+      zt[k * n + i] = t;
+    }
+  }
   for (let i = 0; i < n; i++) values[i] *= scale;
   return true;
 }

@@ -30,7 +30,7 @@ export function symmetricEigen(a: Float64Array, n: number, values: Float64Array,
     for (let i = 0; i < n; i++) values[i] = a[i * n + i];
   } else if (n >= INVERSE_ITERATION_MIN_ORDER) {
     // Should inverse iteration not converge (it reports so), the QR route solves a copy.
-    const copy = Float64Array.from(a.subarray(0, n * n));
+    const copy = inputCopy(a, n);
     ok = householderInverseIterationInPlace(a, n, values, vectors) || qrRoute(copy, n, values, vectors);
   } else {
     ok = qrRoute(a, n, values, vectors);
@@ -43,4 +43,14 @@ export function symmetricEigen(a: Float64Array, n: number, values: Float64Array,
 function qrRoute(a: Float64Array, n: number, values: Float64Array, vectors: Float64Array): boolean {
   const scratch = new Float64Array(3 * n);
   return householderQlInPlace(a, n, values, vectors, scratch.subarray(0, n), scratch.subarray(n, 2 * n), scratch.subarray(2 * n));
+}
+
+/** The largest input copied so far, reused: a large block is solved at many fields in a row. */
+let copyBuffer = new Float64Array(0);
+
+function inputCopy(a: Float64Array, n: number): Float64Array {
+  if (copyBuffer.length < n * n) copyBuffer = new Float64Array(n * n);
+  const copy = copyBuffer.subarray(0, n * n);
+  copy.set(a.subarray(0, n * n));
+  return copy;
 }
