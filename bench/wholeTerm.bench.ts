@@ -4,6 +4,7 @@
  * same fields. Goal: time per state of the whole term within 2× of the single-J sweep's.
  * Runs alternate between the three so load on a shared machine hits them alike.
  */
+import { loadavg } from 'node:os';
 import { BOHR_RADIUS, ELECTRON_GS } from '../server/src/physics/constants';
 import { landeGJ, sweepLevel, termLevelConstants, type HyperfineLevelSpec, type WholeTermSpec } from '../server/src/physics/engine';
 
@@ -47,10 +48,15 @@ export function runWholeTermBench(): { name: string; lines: string[] } {
       times[k].push(Number(process.hrtime.bigint() - t0) / 1e6);
     });
   }
+  // Ratio of the two runs of the same round (one after the other, so under the same load): its median and
+  // quartiles say more on a shared machine than the ratio of two medians.
+  const paired = times[0].map((t, r) => t / cases[0].states / (times[1][r] / cases[1].states)).sort((a, b) => a - b);
+  const quartile = (q: number) => paired[Math.floor(q * (paired.length - 1))];
   const perState = cases.map((c, k) => median(times[k]) / c.states);
   const best = cases.map((c, k) => Math.min(...times[k]) / c.states);
   const lines = cases.map((c, k) => `${c.name}: ${median(times[k]).toFixed(2)} ms median (best ${Math.min(...times[k]).toFixed(2)}), ${(perState[k] * 1000).toFixed(0)} µs per state`);
   lines.push(`whole term per state / 5P3/2 per state: ${(perState[0] / perState[1]).toFixed(2)} median, ${(best[0] / best[1]).toFixed(2)} best (goal ≤ 2)`);
+  lines.push(`  same, round by round: ${median(paired).toFixed(2)} median, quartiles ${quartile(0.25).toFixed(2)}–${quartile(0.75).toFixed(2)}, load average ${loadavg()[0].toFixed(1)}`);
   lines.push(`whole term per state / 5P1/2 per state: ${(perState[0] / perState[2]).toFixed(2)} median`);
   lines.push(`with the diamagnetic term / without: ${(perState[3] / perState[0]).toFixed(2)} median`);
   return { name: `whole-term sweep, ${POINTS} points 0–1 T`, lines };

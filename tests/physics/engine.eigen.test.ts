@@ -1,6 +1,7 @@
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { symmetricEigen } from '../../server/src/physics/engine';
+import { householderInverseIterationInPlace } from '../../server/src/physics/engine/householderInverseIteration';
 import { householderQlInPlace } from '../../server/src/physics/engine/householderQl';
 import { jacobiInPlace } from '../../server/src/physics/engine/jacobiEigen';
 import { sortEigenPairs } from '../../server/src/physics/engine/sortEigenPairs';
@@ -25,6 +26,13 @@ const householder: Solve = (a, n) => {
   return { values, vectors, ok };
 };
 
+const inverseIteration: Solve = (a, n) => {
+  const vectors = new Float64Array(n * n);
+  const values = new Float64Array(n);
+  const ok = householderInverseIterationInPlace(a.slice(), n, values, vectors);
+  return { values, vectors, ok };
+};
+
 const dispatcher: Solve = (a, n) => {
   const vectors = new Float64Array(n * n);
   const values = new Float64Array(n);
@@ -35,6 +43,7 @@ const dispatcher: Solve = (a, n) => {
 const SOLVERS: [string, Solve][] = [
   ['Jacobi', jacobi],
   ['Householder + QR', householder],
+  ['Householder + inverse iteration', inverseIteration],
   ['engine dispatcher', dispatcher],
 ];
 
@@ -144,5 +153,44 @@ describe.each(SOLVERS)('%s eigen-solver', (_name, solve) => {
   it('reports non-finite input instead of looping', () => {
     const a = new Float64Array([1, Number.NaN, Number.NaN, 2]);
     expect(solve(a, 2).ok).toBe(false);
+  });
+});
+
+describe('large orders (the inverse-iteration route of the dispatcher)', () => {
+  it('random symmetric matrices of order 40–120 agree with ml-matrix and decompose A', () => {
+    for (const n of [40, 64, 120]) {
+      const a = randomSymmetric(n, 31 * n);
+      for (const solve of [inverseIteration, dispatcher]) {
+        const { values, vectors, ok } = solve(a, n);
+        expect(ok).toBe(true);
+        const lib = new EigenvalueDecomposition(new Matrix(Array.from({ length: n }, (_, i) => Array.from(a.subarray(i * n, i * n + n)))), { assumeSymmetric: true });
+        const ref = [...lib.realEigenvalues].sort((x, y) => x - y);
+        ref.forEach((e, k) => expect(Math.abs(values[k] - e)).toBeLessThan(1e-13 * n));
+        checkDecomposition(a, n, values, vectors, 1e-14);
+      }
+    }
+  });
+
+  it('degenerate spectra: identity plus a small rank-one part, repeated diagonal, identical blocks', () => {
+    const n = 48;
+    const rank1 = new Float64Array(n * n);
+    for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) rank1[i * n + j] = (i === j ? 2 : 0) + 1e-3 * Math.sin(i + 1) * Math.sin(j + 1);
+    const diagonal = new Float64Array(n * n);
+    for (let i = 0; i < n; i++) diagonal[i * n + i] = i % 3;
+    // Twelve copies of one 4 × 4 block: every eigenvalue twelvefold, the tridiagonal splits.
+    const blocks = new Float64Array(n * n);
+    const b = [2, 1, 0, 0.5, 1, -1, 0.25, 0, 0, 0.25, 3, 1, 0.5, 0, 1, 0];
+    for (let c = 0; c < n / 4; c++) for (let i = 0; i < 4; i++) for (let j = 0; j < 4; j++) blocks[(4 * c + i) * n + 4 * c + j] = b[i * 4 + j];
+    for (const a of [rank1, diagonal, blocks]) {
+      const { values, vectors, ok } = inverseIteration(a, n);
+      expect(ok).toBe(true);
+      checkDecomposition(a, n, values, vectors, 1e-14);
+    }
+    // 2I + 1e-3 u uᵀ: eigenvalue 2 (47 times) and 2 + 1e-3 |u|².
+    const { values } = inverseIteration(rank1, n);
+    let uu = 0;
+    for (let i = 0; i < n; i++) uu += Math.sin(i + 1) ** 2;
+    expect(Math.abs(values[n - 1] - (2 + 1e-3 * uu))).toBeLessThan(1e-14);
+    for (let k = 0; k < n - 1; k++) expect(Math.abs(values[k] - 2)).toBeLessThan(1e-14);
   });
 });

@@ -34,6 +34,16 @@ export interface BlockOutput {
 
 /** Agreement asked of two neighbouring anchors' series halfway between them (energy and moment scales of the block). */
 const CHECK_TOLERANCE = 1e-12;
+/**
+ * An exact solve's eigenvectors carry a round-off of about ε·(energy scale)/(gap) (standard
+ * perturbation bound for a symmetric eigenproblem), and so do its moments, relative to the
+ * Zeeman scale. A block holding several J levels of a whole term (gaps of MHz under energies of
+ * THz) reaches 3e-12 this way (⁸⁷Rb 5P, measured), so the moment check asks for no better than
+ * ROUND_OFF_MARGIN times that bound, and never for less than MOMENT_CHECK_CAP.
+ */
+const ROUND_OFF_MARGIN = 4;
+const MOMENT_CHECK_CAP = 1e-10;
+const EPS = 2.220446049250313e-16;
 
 /** Write the exact solve in `ws` (at `fieldT`) as point p; returns the number of degenerate pairs the curvature left out. */
 function writeSolved(block: LevelBlock, ws: BlockWorkspace, fieldT: number, p: number, out: BlockOutput): number {
@@ -69,18 +79,22 @@ export function sweepBlockPerField(block: LevelBlock, fieldsT: Float64Array, ws:
 /** Anchors at p and q: does each series reproduce the other's energies and slopes halfway between them? */
 function seriesAgree(block: LevelBlock, a: SeriesWorkspace, b: SeriesWorkspace, halfT: number, tmp: Float64Array): boolean {
   const n = block.size;
+  const k1 = SERIES_ORDER + 1;
   let scaleE = 0;
   let scaleZ = 0;
+  let minGap = Number.POSITIVE_INFINITY;
   for (let k = 0; k < n; k++) {
-    scaleE = Math.max(scaleE, Math.abs(a.coef[k * (SERIES_ORDER + 1)]), Math.abs(b.coef[k * (SERIES_ORDER + 1)]));
+    scaleE = Math.max(scaleE, Math.abs(a.coef[k * k1]), Math.abs(b.coef[k * k1]));
     scaleZ = Math.max(scaleZ, Math.abs(block.zeeman[k]));
+    if (k > 0) minGap = Math.min(minGap, a.coef[k * k1] - a.coef[(k - 1) * k1], b.coef[k * k1] - b.coef[(k - 1) * k1]);
   }
+  const momentTolerance = Math.max(CHECK_TOLERANCE, Math.min(MOMENT_CHECK_CAP, (ROUND_OFF_MARGIN * EPS * scaleE) / minGap)) * scaleZ;
   for (let k = 0; k < n; k++) {
     seriesValueAt(a, k, halfT, tmp);
     const e = tmp[0];
     const slope = tmp[1];
     seriesValueAt(b, k, -halfT, tmp);
-    if (!(Math.abs(tmp[0] - e) <= CHECK_TOLERANCE * scaleE && Math.abs(tmp[1] - slope) <= CHECK_TOLERANCE * scaleZ)) return false;
+    if (!(Math.abs(tmp[0] - e) <= CHECK_TOLERANCE * scaleE && Math.abs(tmp[1] - slope) <= momentTolerance)) return false;
   }
   return true;
 }
@@ -100,10 +114,21 @@ interface Anchor {
   reachT: number;
 }
 
-function anchorAt(block: LevelBlock, fieldT: number, at: Anchor, curvature: boolean): boolean {
-  if (!solveBlockAt(block, fieldT, at.ws)) return false;
+/**
+ * Where a series reaches less than one step, an anchor's expansion is never used: such
+ * steps are solved without expanding, and the expansion is tried again after this many of
+ * them (the reach grows with the field, so it may have become worth it).
+ */
+const SOLVE_ONLY_RUN = 4;
+
+function expandAnchor(block: LevelBlock, at: Anchor, curvature: boolean): void {
   expandAt(at.ws.values, at.ws.vectors, block.zeeman, block.size, at.sw, curvature);
   at.reachT = at.sw.reach * at.sw.scaleT;
+}
+
+function anchorAt(block: LevelBlock, fieldT: number, at: Anchor, curvature: boolean): boolean {
+  if (!solveBlockAt(block, fieldT, at.ws)) return false;
+  expandAnchor(block, at, curvature);
   return true;
 }
 
@@ -113,8 +138,10 @@ function anchorAt(block: LevelBlock, fieldT: number, at: Anchor, curvature: bool
  * exactly and expanded; the points between two anchors take the nearer one's
  * series. The next anchor is placed about two reaches ahead; if the two
  * reaches do not meet, or the two series disagree halfway (where each is
- * least accurate), the stretch is halved. Returns the degenerate pairs left
- * out of curvatures, or −1 if the solver failed.
+ * least accurate), the stretch is halved. A neighbouring point is solved but not
+ * expanded, and while the last reach is shorter than a step the sweep goes on solving
+ * (SOLVE_ONLY_RUN). Returns the degenerate pairs left out of curvatures, or −1 if the
+ * solver failed.
  */
 export function sweepBlockBySeries(block: LevelBlock, fieldsT: Float64Array, anchors: [Anchor, Anchor], out: BlockOutput): number {
   const last = fieldsT.length - 1;
@@ -123,16 +150,35 @@ export function sweepBlockBySeries(block: LevelBlock, fieldsT: Float64Array, anc
   if (!anchorAt(block, fieldsT[0], here, out.curvature)) return -1;
   let skipped = writeSolved(block, here.ws, fieldsT[0], 0, out);
   let p = 0;
+  let expanded = true;
+  let lastReachT = here.reachT;
+  let solvedOnly = 0;
   while (p < last) {
+    if (!expanded) {
+      if (solvedOnly < SOLVE_ONLY_RUN && lastReachT < Math.abs(fieldsT[p + 1] - fieldsT[p])) {
+        if (!solveBlockAt(block, fieldsT[p + 1], there.ws)) return -1;
+        skipped += writeSolved(block, there.ws, fieldsT[p + 1], p + 1, out);
+        [here, there] = [there, here];
+        p++;
+        solvedOnly++;
+        continue;
+      }
+      expandAnchor(block, here, out.curvature);
+      lastReachT = here.reachT;
+      solvedOnly = 0;
+    }
     let q = p + 1;
     while (q < last && Math.abs(fieldsT[q + 1] - fieldsT[p]) <= 2 * here.reachT) q++;
     for (;;) {
-      if (!anchorAt(block, fieldsT[q], there, out.curvature)) return -1;
+      if (!solveBlockAt(block, fieldsT[q], there.ws)) return -1;
       if (q === p + 1) break;
+      expandAnchor(block, there, out.curvature);
       const half = 0.5 * (fieldsT[q] - fieldsT[p]);
       if (Math.abs(half) <= Math.min(here.reachT, there.reachT) && seriesAgree(block, here.sw, there.sw, half, tmp)) break;
       q = p + Math.max(1, Math.floor((q - p) / 2));
     }
+    expanded = q > p + 1;
+    if (expanded) lastReachT = there.reachT;
     // Points nearer p take p's series, the rest q's.
     let mid = p + 1;
     while (mid < q && Math.abs(fieldsT[mid] - fieldsT[p]) <= Math.abs(fieldsT[q] - fieldsT[mid])) mid++;

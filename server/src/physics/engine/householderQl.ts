@@ -83,7 +83,7 @@ function wilkinsonShift(dm1: number, dm: number, b: number): number {
  * One implicit shifted QR sweep on the unreduced window [l, m] of the
  * tridiagonal (d, e); rotations are also applied to the columns of q.
  */
-function chaseBulge(d: Float64Array, e: Float64Array, q: Float64Array, n: number, l: number, m: number): void {
+function chaseBulge(d: Float64Array, e: Float64Array, q: Float64Array | null, n: number, l: number, m: number): void {
   const mu = wilkinsonShift(d[m - 1], d[m], e[m - 1]);
   let x = d[l] - mu;
   let z = e[l];
@@ -104,6 +104,7 @@ function chaseBulge(d: Float64Array, e: Float64Array, q: Float64Array, n: number
       x = e[k];
     }
     // q holds Qᵀ here (row k is column k of Q), so the rotation runs along two contiguous rows.
+    if (q === null) continue;
     for (let i = 0, rk = k * n, rk1 = rk + n; i < n; i++) {
       const qk = q[rk + i];
       const qk1 = q[rk1 + i];
@@ -136,17 +137,25 @@ export function householderQlInPlace(
   for (let i = 0; i < n * n; i++) a[i] /= scale;
   tridiagonalise(a, n, d, e, vectors, w1, w2);
   transpose(vectors, n);
+  const ok = tridiagonalQr(d, e, vectors, n);
+  transpose(vectors, n);
+  for (let i = 0; i < n; i++) d[i] *= scale;
+  return ok;
+}
+
+/**
+ * Eigenvalues of the tridiagonal (d, e) into d (unsorted; e destroyed) by implicit shifted QR,
+ * the rotations also applied to the rows of `qt` (Qᵀ) unless it is null. Returns false on
+ * non-finite input or if the iteration limit (30 n sweeps) is reached.
+ */
+export function tridiagonalQr(d: Float64Array, e: Float64Array, qt: Float64Array | null, n: number): boolean {
   let norm = 0;
   for (let i = 0; i < n; i++) norm = Math.max(norm, Math.abs(d[i]) + (i > 0 ? Math.abs(e[i - 1]) : 0) + (i < n - 1 ? Math.abs(e[i]) : 0));
   if (!Number.isFinite(norm)) return false;
   const floor = 1e-300 + EPS * 1e-3 * norm;
   let m = n - 1;
   for (let iter = 0; m > 0; iter++) {
-    if (iter > 30 * n) {
-      transpose(vectors, n);
-      for (let i = 0; i < n; i++) d[i] *= scale;
-      return false;
-    }
+    if (iter > 30 * n) return false;
     // Deflate converged eigenvalues at the bottom.
     while (m > 0 && Math.abs(e[m - 1]) <= EPS * (Math.abs(d[m - 1]) + Math.abs(d[m])) + floor) {
       e[m - 1] = 0;
@@ -156,9 +165,7 @@ export function householderQlInPlace(
     let l = m - 1;
     while (l > 0 && Math.abs(e[l - 1]) > EPS * (Math.abs(d[l - 1]) + Math.abs(d[l])) + floor) l--;
     if (l > 0) e[l - 1] = 0;
-    chaseBulge(d, e, vectors, n, l, m);
+    chaseBulge(d, e, qt, n, l, m);
   }
-  transpose(vectors, n);
-  for (let i = 0; i < n; i++) d[i] *= scale;
   return true;
 }

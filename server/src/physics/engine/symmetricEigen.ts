@@ -1,14 +1,22 @@
 /**
  * Eigen-decomposition used by the engine: own cyclic Jacobi for blocks up to
- * JACOBI_MAX_ORDER, own Householder + implicit-shift QR above. Both beat
+ * JACOBI_MAX_ORDER, own Householder + implicit-shift QR above, and from
+ * INVERSE_ITERATION_MIN_ORDER on the QR for eigenvalues only with the vectors by inverse iteration. Both beat
  * ml-matrix's EigenvalueDecomposition on every order measured; the switch
  * point comes from bench/eigen.bench.ts (numbers in docs/engine.md).
  */
+import { householderInverseIterationInPlace } from './householderInverseIteration';
 import { householderQlInPlace } from './householderQl';
 import { jacobiInPlace } from './jacobiEigen';
 import { sortEigenPairs } from './sortEigenPairs';
 
 export const JACOBI_MAX_ORDER = 8;
+/**
+ * From this order on, the vectors come from inverse iteration and the kept reflectors
+ * (householderInverseIteration.ts): 1.7× faster at 40, 1.9× at 160 (bench/eigen.bench.ts,
+ * docs/engine.md); below it the accumulated QR rotations cost no more.
+ */
+export const INVERSE_ITERATION_MIN_ORDER = 32;
 
 /**
  * Eigenpairs of the symmetric matrix `a` (destroyed), sorted ascending:
@@ -20,10 +28,29 @@ export function symmetricEigen(a: Float64Array, n: number, values: Float64Array,
   if (n <= JACOBI_MAX_ORDER) {
     ok = jacobiInPlace(a, n, vectors);
     for (let i = 0; i < n; i++) values[i] = a[i * n + i];
+  } else if (n >= INVERSE_ITERATION_MIN_ORDER) {
+    // Should inverse iteration not converge (it reports so), the QR route solves a copy.
+    const copy = inputCopy(a, n);
+    ok = householderInverseIterationInPlace(a, n, values, vectors) || qrRoute(copy, n, values, vectors);
   } else {
-    const scratch = new Float64Array(3 * n);
-    ok = householderQlInPlace(a, n, values, vectors, scratch.subarray(0, n), scratch.subarray(n, 2 * n), scratch.subarray(2 * n));
+    ok = qrRoute(a, n, values, vectors);
   }
   sortEigenPairs(values, vectors, n);
   return ok;
+}
+
+/** Householder + QR with every rotation accumulated (householderQl.ts). */
+function qrRoute(a: Float64Array, n: number, values: Float64Array, vectors: Float64Array): boolean {
+  const scratch = new Float64Array(3 * n);
+  return householderQlInPlace(a, n, values, vectors, scratch.subarray(0, n), scratch.subarray(n, 2 * n), scratch.subarray(2 * n));
+}
+
+/** The largest input copied so far, reused: a large block is solved at many fields in a row. */
+let copyBuffer = new Float64Array(0);
+
+function inputCopy(a: Float64Array, n: number): Float64Array {
+  if (copyBuffer.length < n * n) copyBuffer = new Float64Array(n * n);
+  const copy = copyBuffer.subarray(0, n * n);
+  copy.set(a.subarray(0, n * n));
+  return copy;
 }

@@ -16,8 +16,8 @@
 import { couplings, jj1 } from './halfIntegers';
 import { issue } from './issues';
 import { symmetricEigen } from './symmetricEigen';
-import { termBlockBasis } from './termBasis';
-import { levelProjector, orbitalQuadrupoleActs, termOperators } from './termOperators';
+import { termBlockParts } from './termAngularParts';
+import { orbitalQuadrupoleActs } from './termOperators';
 import type { EngineIssue } from './types';
 
 export interface RadialParameters {
@@ -68,10 +68,9 @@ export function levelCoefficients(twoL: number, twoS: number, twoI: number): Lev
   const out: LevelCoefficients[] = [];
   for (const twoJ of jValues) {
     if (twoJ === 0 || twoI === 0) continue;
-    const basis = termBlockBasis(two, twoJ + twoI);
-    const ops = termOperators(two, basis);
+    const { basis, ops, projectors } = termBlockParts(two, twoJ + twoI);
     const n = ops.n;
-    const p = levelProjector(two, jValues, twoJ, ops.LS, n);
+    const p = projectors.get(twoJ) as Float64Array;
     // P_J restricted to m_I = I, m_J = J has rank one: its leading eigenvector is |J, J>|I, I>.
     const values = new Float64Array(n);
     const vectors = new Float64Array(n * n);

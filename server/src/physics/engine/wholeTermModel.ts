@@ -16,9 +16,8 @@ import { jfLabel, jLabel, lsLabel } from './labelText';
 import { landeGF, landeGJ } from './landeFactors';
 import type { LevelBlock, LevelModel, RankedHigh, RankedLow } from './levelModel';
 import { symmetricEigen } from './symmetricEigen';
-import { termBlockBasis } from './termBasis';
+import { termBlockParts, type TermBlockParts } from './termAngularParts';
 import { levelCoefficients } from './termHyperfineParameters';
-import { levelProjector, termOperators } from './termOperators';
 import type { CleanTerm } from './validateTerm';
 import { hyperfineZeroFieldHz } from './zeroFieldLevels';
 
@@ -32,13 +31,13 @@ export function impliedLevelConstants(s: CleanTerm): Map<number, { A: number; B:
   return out;
 }
 
-function zeroFieldMatrix(s: CleanTerm, two: readonly [number, number, number], jValues: number[], ops: ReturnType<typeof termOperators>): Float64Array {
+function zeroFieldMatrix(s: CleanTerm, jValues: number[], { ops, projectors }: TermBlockParts): Float64Array {
   const n = ops.n;
   const h = new Float64Array(n * n);
   for (const twoJ of jValues) {
     const e = s.levelEnergies.get(twoJ) as number;
     if (e === 0) continue;
-    const p = levelProjector(two, jValues, twoJ, ops.LS, n);
+    const p = projectors.get(twoJ) as Float64Array;
     for (let k = 0; k < n * n; k++) h[k] += e * p[k];
   }
   const r = s.radial;
@@ -70,10 +69,10 @@ export function buildWholeTermModel(s: CleanTerm): LevelModel {
   const built: { twoM: number; h0: Float64Array; zeeman: Float64Array; quadratic?: Float64Array; basis: RankedHigh[]; low: RankedLow[] }[] = [];
   const twoMax = two[0] + two[1] + two[2];
   for (let twoM = -twoMax; twoM <= twoMax; twoM += 2) {
-    const basis = termBlockBasis(two, twoM);
-    const ops = termOperators(two, basis);
-    const n = ops.n;
-    const h0 = zeroFieldMatrix(s, two, jValues, ops);
+    const parts = termBlockParts(two, twoM);
+    const basis = parts.basis;
+    const n = parts.ops.n;
+    const h0 = zeroFieldMatrix(s, jValues, parts);
     const zeeman = new Float64Array(n);
     const quadratic = s.diamagneticHzPerT2 > 0 ? basis.states.map(([mL]) => s.diamagneticHzPerT2 * sinSquaredMean(s.L, mL / 2)) : undefined;
     const high: RankedHigh[] = basis.states.map(([mL, mS, mI], k) => {

@@ -1,0 +1,212 @@
+/**
+ * Eigenvectors of a symmetric tridiagonal matrix (diagonal d, off-diagonal e) at eigenvalues
+ * already known to full accuracy, by inverse iteration with reorthogonalisation inside clusters:
+ * the scheme of LAPACK's dstein (after Wilkinson & Reinsch, Handbook for Automatic Computation
+ * II, 1971, procedure tinvit). Each vector costs O(n) per iteration plus O(n·k) against the k
+ * earlier vectors of its cluster, instead of the O(n²) per QR sweep of accumulated rotations.
+ *
+ * - T − λI is factorised with partial pivoting (three bands of U), a zero pivot replaced by
+ *   ε‖T‖, so the solve cannot fail;
+ * - eigenvalues closer than 10 ε‖T‖ are pulled apart by that much, so their solves differ;
+ * - neighbours closer than CLUSTER·‖T‖ form a cluster whose vectors are orthogonalised against
+ *   each other (modified Gram–Schmidt) before every solve and once more at the end;
+ * - a vector has converged when its growth shows a residual below RESIDUAL·ε‖T‖√n (plus
+ *   twice the pull) ; EXTRA more iterations follow, as in dstein;
+ * - T splits where an off-diagonal element is below ε of its neighbours; each block is solved
+ *   on its own (exactly degenerate eigenvalues of different blocks need no orthogonalising).
+ */
+
+const EPS = 2.220446049250313e-16;
+/** dstein's ORTOL: neighbours closer than 1e-3 ‖T‖ are orthogonalised explicitly. */
+const CLUSTER = 1e-3;
+const RESIDUAL = 10;
+const EXTRA = 2;
+const MAX_ITERATIONS = 8;
+
+/** Scratch for one call, of the order n. */
+export interface TridiagonalScratch {
+  dd: Float64Array;
+  du: Float64Array;
+  du2: Float64Array;
+  dl: Float64Array;
+  swap: Uint8Array;
+  x: Float64Array;
+}
+
+export function makeTridiagonalScratch(n: number): TridiagonalScratch {
+  return {
+    dd: new Float64Array(n),
+    du: new Float64Array(n),
+    du2: new Float64Array(n),
+    dl: new Float64Array(n),
+    swap: new Uint8Array(n),
+    x: new Float64Array(n),
+  };
+}
+
+/** LU of T − λI with partial pivoting (LAPACK dgttrf's layout); zero pivots become `tiny`. */
+function factorise(d: Float64Array, e: Float64Array, n: number, lambda: number, tiny: number, s: TridiagonalScratch): void {
+  const { dd, du, du2, dl, swap } = s;
+  for (let i = 0; i < n; i++) dd[i] = d[i] - lambda;
+  for (let i = 0; i < n - 1; i++) {
+    du[i] = e[i];
+    dl[i] = e[i];
+    du2[i] = 0;
+  }
+  for (let i = 0; i < n - 1; i++) {
+    if (Math.abs(dd[i]) >= Math.abs(dl[i])) {
+      swap[i] = 0;
+      if (dd[i] === 0) dd[i] = tiny;
+      const f = dl[i] / dd[i];
+      dl[i] = f;
+      dd[i + 1] -= f * du[i];
+    } else {
+      swap[i] = 1;
+      const f = dd[i] / dl[i];
+      dd[i] = dl[i];
+      dl[i] = f;
+      const t = du[i];
+      du[i] = dd[i + 1];
+      dd[i + 1] = t - f * dd[i + 1];
+      if (i < n - 2) {
+        du2[i] = du[i + 1];
+        du[i + 1] = -f * du[i + 1];
+      }
+    }
+  }
+  if (dd[n - 1] === 0) dd[n - 1] = tiny;
+}
+
+/** b ← (T − λI)⁻¹ b with the factors in s. */
+function solve(n: number, s: TridiagonalScratch, b: Float64Array, at: number): void {
+  const { dd, du, du2, dl, swap } = s;
+  for (let i = 0; i < n - 1; i++) {
+    if (swap[i] === 0) {
+      b[at + i + 1] -= dl[i] * b[at + i];
+    } else {
+      const t = b[at + i];
+      b[at + i] = b[at + i + 1];
+      b[at + i + 1] = t - dl[i] * b[at + i];
+    }
+  }
+  b[at + n - 1] /= dd[n - 1];
+  if (n > 1) b[at + n - 2] = (b[at + n - 2] - du[n - 2] * b[at + n - 1]) / dd[n - 2];
+  for (let i = n - 3; i >= 0; i--) b[at + i] = (b[at + i] - du[i] * b[at + i + 1] - du2[i] * b[at + i + 2]) / dd[i];
+}
+
+function normalise(z: Float64Array, at: number, n: number): number {
+  let s = 0;
+  for (let i = 0; i < n; i++) s += z[at + i] * z[at + i];
+  const norm = Math.sqrt(s);
+  const inv = 1 / norm;
+  for (let i = 0; i < n; i++) z[at + i] *= inv;
+  return norm;
+}
+
+/** x minus its projections on the block's vectors from … k − 1 (modified Gram–Schmidt). */
+function orthogonalise(x: Float64Array, z: Float64Array, rows: Int32Array, stride: number, offset: number, n: number, from: number, k: number): void {
+  for (let q = from; q < k; q++) {
+    const qa = rows[q] * stride + offset;
+    let dot = 0;
+    for (let i = 0; i < n; i++) dot += z[qa + i] * x[i];
+    for (let i = 0; i < n; i++) x[i] -= dot * z[qa + i];
+  }
+}
+
+/**
+ * Eigenvectors of one unreduced block of T (d, e of order n) for its ascending eigenvalues
+ * `values`: row k of the block's vectors is z[rowAt(k) + offset …]. Returns false if a vector did not converge.
+ */
+function blockEigenvectors(
+  d: Float64Array,
+  e: Float64Array,
+  n: number,
+  values: Float64Array,
+  z: Float64Array,
+  rows: Int32Array,
+  stride: number,
+  offset: number,
+  s: TridiagonalScratch,
+): boolean {
+  let norm = 0;
+  for (let i = 0; i < n; i++) norm = Math.max(norm, Math.abs(d[i]) + (i > 0 ? Math.abs(e[i - 1]) : 0) + (i < n - 1 ? Math.abs(e[i]) : 0));
+  if (norm === 0) norm = 1;
+  const tiny = EPS * norm;
+  const pull = 10 * EPS * norm;
+  const cluster = CLUSTER * norm;
+  const floor = RESIDUAL * EPS * norm * Math.sqrt(n);
+  const x = s.x;
+  let clusterStart = 0;
+  let shifted = Number.NEGATIVE_INFINITY;
+  // A fixed pseudo-random start (an LCG), so results depend on nothing but the input.
+  let seed = 12345;
+  for (let k = 0; k < n; k++) {
+    if (k > 0 && values[k] - values[k - 1] > cluster) clusterStart = k;
+    const lambda = Math.max(values[k], shifted + pull);
+    shifted = lambda;
+    // (T − λ'I)⁻¹ grows at most 1 / |λ' − λ|: a pulled-apart value converges that far.
+    const converged = 1 / (floor + 2 * (lambda - values[k]));
+    factorise(d, e, n, lambda, tiny, s);
+    for (let i = 0; i < n; i++) {
+      seed = (Math.imul(seed, 1664525) + 1013904223) >>> 0;
+      x[i] = seed / 4294967296 - 0.5;
+    }
+    normalise(x, 0, n);
+    let extra = -1;
+    for (let it = 0; it < MAX_ITERATIONS && extra < EXTRA; it++) {
+      orthogonalise(x, z, rows, stride, offset, n, clusterStart, k);
+      solve(n, s, x, 0);
+      const growth = normalise(x, 0, n);
+      if (!(growth < Number.POSITIVE_INFINITY)) return false;
+      if (extra >= 0 || growth >= converged) extra++;
+    }
+    if (extra < 0) return false;
+    orthogonalise(x, z, rows, stride, offset, n, clusterStart, k);
+    normalise(x, 0, n);
+    const at = rows[k] * stride + offset;
+    for (let i = 0; i < n; i++) z[at + i] = x[i];
+  }
+  return true;
+}
+
+/**
+ * Eigenvectors of T (order n): T is split where an off-diagonal element is below ε of its
+ * neighbours (set to zero there, as the QR deflation does), each block gets its own eigenvalues
+ * (implicit QR) and vectors, and row k of `z` (n × n, row-major) receives the vector of the
+ * k-th smallest eigenvalue, which goes to values[k]. Returns false on no convergence.
+ */
+export function tridiagonalEigenpairs(d: Float64Array, e: Float64Array, n: number, values: Float64Array, z: Float64Array, qr: QrValues): boolean {
+  const s = makeTridiagonalScratch(n);
+  z.fill(0, 0, n * n);
+  // Eigenvalues of every block, with the block each came from, then one global order.
+  const owner = new Int32Array(n);
+  const blockValues = new Float64Array(n);
+  const work = new Float64Array(n);
+  let start = 0;
+  for (let i = 0; i < n; i++) {
+    if (i < n - 1 && !(Math.abs(e[i]) <= EPS * (Math.abs(d[i]) + Math.abs(d[i + 1])))) continue;
+    blockValues.set(d.subarray(start, i + 1), start);
+    work.set(e.subarray(start, i), start);
+    if (!qr(blockValues.subarray(start, i + 1), work.subarray(start, i + 1), i + 1 - start)) return false;
+    blockValues.subarray(start, i + 1).sort();
+    owner.fill(start, start, i + 1);
+    start = i + 1;
+  }
+  const order = Array.from({ length: n }, (_, k) => k).sort((a, b) => blockValues[a] - blockValues[b] || a - b);
+  const rowOf = new Int32Array(n);
+  order.forEach((k, r) => {
+    rowOf[k] = r;
+    values[r] = blockValues[k];
+  });
+  for (let b = 0; b < n; ) {
+    let end = b;
+    while (end + 1 < n && owner[end + 1] === b) end++;
+    const m = end + 1 - b;
+    const ok = blockEigenvectors(d.subarray(b, end + 1), e.subarray(b, end + 1), m, blockValues.subarray(b, end + 1), z, rowOf.subarray(b, end + 1), n, b, s);
+    if (!ok) return false;
+    b = end + 1;
+  }
+  return true;
+}
+
+export type QrValues = (d: Float64Array, e: Float64Array, n: number) => boolean;

@@ -1,0 +1,72 @@
+/**
+ * The sweep's perturbation series (perturbationSeries.ts) against an outside reference
+ * (tests/reference/perturbation_series.json from scripts/reference/perturbation_series.py):
+ * the Rayleigh–Schrödinger coefficients of the textbook recursion in 50-digit arithmetic (mpmath),
+ * which the engine reaches beyond order 8 by Wigner's 2n + 1 rule, and the exact eigenvalues of
+ * NumPy's eigvalsh at offsets inside the series' reach.
+ */
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { SERIES_ORDER, expandAt, makeSeriesWorkspace, seriesValueAt } from '../../server/src/physics/engine/perturbationSeries';
+
+interface SeriesCase {
+  values: number[];
+  vectors: number[];
+  zeeman: number[];
+  coefficients: number[][];
+  offsets: number[];
+  exact: number[][];
+}
+const ref = JSON.parse(readFileSync(path.join(__dirname, '../reference/perturbation_series.json'), 'utf8')) as { order: number; cases: SeriesCase[] };
+
+function expand(c: SeriesCase) {
+  const n = c.values.length;
+  const sw = makeSeriesWorkspace(n);
+  expandAt(Float64Array.from(c.values), Float64Array.from(c.vectors), Float64Array.from(c.zeeman), n, sw, false);
+  return { n, sw, scale: Math.max(...c.values.map(Math.abs)) };
+}
+
+describe('perturbation series against the textbook recursion (mpmath) and NumPy eigvalsh', () => {
+  it('uses the reference order', () => {
+    expect(SERIES_ORDER).toBe(ref.order);
+  });
+
+  ref.cases.forEach((c, i) => {
+    it(`case ${i + 1} (${c.values.length} states): every coefficient, to its share of the energy inside the reach`, () => {
+      const { n, sw, scale } = expand(c);
+      expect(sw.scaleT).toBeGreaterThan(0);
+      const reach = sw.reach * sw.scaleT;
+      let worst = 0;
+      for (let k = 0; k < n; k++) {
+        for (let j = 0; j <= SERIES_ORDER; j++) {
+          const ours = sw.coef[k * (SERIES_ORDER + 1) + j] / sw.scaleT ** j;
+          const want = c.coefficients[k][j];
+          // What the difference adds to the energy at the reach, against the energy scale; low
+          // orders also relative to themselves.
+          worst = Math.max(worst, (Math.abs(ours - want) * reach ** j) / scale);
+          if (j <= 4) expect(Math.abs(ours - want)).toBeLessThanOrEqual(1e-12 * Math.abs(want) + 1e-15 * scale / reach ** j);
+        }
+      }
+      // Measured up to 2.1e-18.
+      expect(worst).toBeLessThan(1e-16);
+    });
+
+    it(`case ${i + 1}: energies at offsets inside the reach equal NumPy eigvalsh`, () => {
+      const { n, sw, scale } = expand(c);
+      const reach = sw.reach * sw.scaleT;
+      const out = new Float64Array(2);
+      let compared = 0;
+      c.offsets.forEach((t, o) => {
+        if (Math.abs(t) > reach) return;
+        compared++;
+        for (let k = 0; k < n; k++) {
+          seriesValueAt(sw, k, t, out);
+          // Measured up to 8e-16 of the scale (both sides carry the round-off of a solve).
+          expect(Math.abs(out[0] - c.exact[o][k])).toBeLessThanOrEqual(1e-14 * scale);
+        }
+      });
+      expect(compared).toBeGreaterThanOrEqual(2);
+    });
+  });
+});
