@@ -50,11 +50,16 @@ function sourceLines(s: BuiltinSpecies): string[] {
     );
   }
   const groups = new Map<string, string[]>();
+  const uncertainties = new Map<string, string[]>();
   for (const [label, v] of items) {
     if (!v || v.source.startsWith('definition:')) continue;
     groups.set(v.source, [...(groups.get(v.source) ?? []), label]);
+    if (v.uncertaintySource !== undefined) uncertainties.set(v.uncertaintySource, [...(uncertainties.get(v.uncertaintySource) ?? []), label]);
   }
-  return [...groups].map(([source, labels]) => `- ${labels.join(', ')}: ${source}`);
+  return [
+    ...[...groups].map(([source, labels]) => `- ${labels.join(', ')}: ${source}`),
+    ...[...uncertainties].map(([source, labels]) => `- uncertainties of ${labels.join(', ')}: ${source}`),
+  ];
 }
 
 function speciesSection(s: BuiltinSpecies): string[] {

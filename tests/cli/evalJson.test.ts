@@ -51,7 +51,7 @@ describe('sublevel eval --format json with uncertain inputs (version 2)', () => 
     expect(doc.version).toBe(2);
     expect(doc.uncertainty_inputs.map((i: { id: string }) => i.id)).toEqual([
       'field:bias', 'magnet:selector.field', 'magnet:selector.gradient', 'magnet:selector.length',
-      'level:Li7.ground.A', 'level:Li7.ground.g_J', 'level:Li7.p_term.zeta', 'level:Li7.upper.A', 'beam:main.drift', 'resonance:rf.frequency',
+      'level:Li7.ground.A', 'level:Li7.ground.g_J', 'level:Li7.p_term.zeta', 'level:Li7.upper.A', 'level:Li7.upper.B', 'beam:main.drift', 'resonance:rf.frequency',
     ]);
   });
   it('gives the beam sublevels a deflection uncertainty that follows ⟨z⟩ ∝ μ G (L1²/2 + L1 L2) (GUM, product rule)', () => {
@@ -80,8 +80,10 @@ describe('sublevel eval --format json with uncertain inputs (version 2)', () => 
     const c = bias.components.find((x: { lower_label: string; upper_label: string }) => x.lower_label === 'F=2, m_F=+2' && x.upper_label === 'F=3, m_F=+3');
     const gJu = doc.levels.find((l: { level: string }) => l.level === 'upper').g_J.used;
     const muB = 9.2740100657e-24 / 6.62607015e-34; // CODATA 2022 μ_B/h, Hz/T
-    // E_l = (3/4) A_l + μ_B B (g_J,l/2 + 3 g_I/2); E_u = (9/4) A_u + μ_B B (3 g_J,u/2 + 3 g_I/2) (stretched states, exact at any field).
-    const u = Math.hypot(0.75 * 0.5, 2.25 * 2000, muB * (1.5 * gJu - 0.5 * 2.002301) * 3e-6, 0.5 * muB * 5e-4 * 2e-6);
+    // E_l = (3/4) A_l + μ_B B (g_J,l/2 + 3 g_I/2); E_u = (9/4) A_u + B_u/4 + μ_B B (3 g_J,u/2 + 3 g_I/2) (stretched
+    // states, exact at any field; the quadrupole term of F = I + J = 3 for I = J = 3/2 is B/4). The upper B is the
+    // built-in −0.221(29) MHz (alkali hyperfine review; value and uncertainty from memory).
+    const u = Math.hypot(0.75 * 0.5, 2.25 * 2000, 0.25 * 29e3, muB * (1.5 * gJu - 0.5 * 2.002301) * 3e-6, 0.5 * muB * 5e-4 * 2e-6);
     expect(c.offset_Hz_unc).toBeCloseTo(u, 3);
   });
   it('gives the resonance field found an uncertainty', () => {

@@ -5,10 +5,13 @@ import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import type { BeamResult } from '../../server/src/eval/resultTypes';
 
-/** Invented apparatus: ⁷Li in a selector magnet, one input written with an uncertainty at a time. */
+/**
+ * Invented apparatus: ⁷Li in a selector magnet, one input written with an uncertainty at a time
+ * (the level's constants are written exactly: the built-in ones carry uncertainties of their own).
+ */
 function setup(gradient: string, drift = '35.0 cm', field = '0.450 T'): string {
   return `species Li7
-  level ground: 2s 2S1/2
+  level ground: 2s 2S1/2  A = 401.7520433 MHz  g_J = 2.0023010
 
 magnet selector
   field    = ${field}

@@ -31,13 +31,14 @@ const CASES: Case[] = [
     name: 'level name: hyperfine F levels, g_F and the splitting',
     // Li-7 2s A = 401.752 MHz (Arimondo, Inguscio & Violino 1977) → ΔE(F=1↔2) = 2A = 803.504 MHz.
     text: `species Li7\n  level gro|und: 2s 2S1/2\n`,
-    has: ['Hyperfine structure', 'A = 401.752 MHz', 'F = 1 ↔ 2: 803.504', '| F | E/h at zero field | g_F |'],
+    // The built-in A carries its uncertainty (0.5 kHz; from memory of the same review), so does 2A.
+    has: ['Hyperfine structure', 'A = 401.7520433(5) MHz', 'F = 1 ↔ 2: 803.5040866(10) MHz', '| F | E/h at zero field | g_F |'],
   },
   {
     name: 'sodium ground splitting from the built-in A',
-    // Steck, Sodium D Line Data: ground-state splitting 1.771 626 128 8 GHz = 2A.
+    // Steck, Sodium D Line Data: ground-state splitting 1.771 626 128 8 GHz = 2A, u = 2 u(A) = 1.0 Hz.
     text: 'species Na23\n  level |g: 3s 2S1/2\n',
-    has: ['F = 1 ↔ 2: 1.771626 GHz'],
+    has: ['F = 1 ↔ 2: 1.7716261288(10) GHz'],
   },
   {
     name: 'a nucleus without A: each m_J sublevel splits into 2I + 1 by g_I',
@@ -295,7 +296,8 @@ describe('hover on a beam', () => {
     expect(s.mean_deflection_m / z).toBeCloseTo(1, 6);
     // At 1 T the Li-7 ground level (hyperfine 803.5 MHz ≪ μ_B·B/h ≈ 14 GHz) is decoupled: its
     // |F=1, m_F=+1> is |m_J=-1/2, m_I=+3/2> (adiabatic connection, m_F = m_J + m_I).
-    expect(shown).toContain(`| m_J=-1/2, m_I=+3/2 | 1.003 | 0.125 | ${(z * 1000).toPrecision(3)} mm |`);
+    // The moment and deflection carry the built-in constants' uncertainties (A, g_J, g_I of Li-7).
+    expect(shown).toContain(`| m_J=-1/2, m_I=+3/2 | 1.0026242(4) | 0.125 | ${(z * 1000).toPrecision(8)}(15) mm |`);
     expect(shown).toContain('| sublevel (strong-field label) |');
     // Each peak names its sublevels.
     expect(shown).toMatch(/\| 4\.39 mm \| \S+ µm \| m_J=-1\/2, m_I=\+3\/2 \|/);

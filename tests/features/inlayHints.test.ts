@@ -27,9 +27,10 @@ describe('inlay hints', () => {
       // Steck, Rubidium 87 D Line Data: g_J(5S1/2) = 2.002 331 13; ground splitting 6.834 682 610 904 GHz = 2A
       // (A = 3.417 341 305 452 145(45) GHz in the built-in table, so the splitting prints with u = 2 u(A) = 90 µHz,
       // the compilation's 6.834 682 610 904 290(90) GHz).
-      '1:24 g_J 2.00233, ΔE_hfs 6.83468261090429(9) GHz',
+      // The built-in g_J values carry the compilation's uncertainties (from memory): 2.002 331 13(20), 1.3362(13).
+      '1:24 g_J 2.00233113(20), ΔE_hfs 6.83468261090429(9) GHz',
       // Landé with CODATA g_s for 2P3/2 is 1.3341; the built-in measured g_J (Steck) is 1.3362.
-      '2:20 g_J 1.3362',
+      '2:20 g_J 1.3362(13)',
       // Steck: 5P3/2 intervals 72.2180, 156.9470 and 266.6500 MHz (from A = 84.7185 MHz and B = 12.4965 MHz).
       // A is written without an uncertainty here; the built-in B = 12.4965(37) MHz enters each interval with weight 1.
       '2:37 ΔE_hfs 72.2220(37) MHz, 156.9405(37) MHz, 266.6520(37) MHz',

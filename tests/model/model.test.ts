@@ -105,8 +105,9 @@ describe('names and references', () => {
     const text = base + 'species K39\n  level ground: 4s 2S1/2\n' + 'magnet m\n  field = 1 T\n  gradient = 1 T/m\n  length = 1 cm\n'
       + 'beam b\n  level = ground\n  source = oven 400 K\n  slits = 20 um, 20 um apart 30 cm\n  magnet = m\n  drift = 10 cm\n';
     expect(problems(text)).toContain('11:11 name-ambiguous');
-    // No detector: the beam engine's note that the pattern is for a point detector is forwarded.
-    expect(problems(text.replace('level = ground', 'level = K39.ground'))).toEqual(['10:6 beam-point-detector']);
+    // No detector: the beam engine's note that the pattern is for a point detector is forwarded, and
+    // (the built-in K39 constants being uncertain) that the peaks then get no uncertainty.
+    expect(problems(text.replace('level = ground', 'level = K39.ground'))).toEqual(['10:6 beam-point-detector', '10:6 uncertainty-undefined']);
   });
 
   it('records declarations and uses for go-to-definition', () => {

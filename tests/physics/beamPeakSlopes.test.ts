@@ -67,7 +67,7 @@ describe('peak slopes against central differences of the exact maximum', () => {
     });
   }
 
-  it('box widths: wide slits, where the image shapes the peak', () => {
+  it('box widths and the detector width: wide slits, where the image shapes the peak', () => {
     // With 10 µm slits the image moves an oven peak by ~1e-9 m per 10 % of a width: too little to difference.
     const wide = { ...geometry, slit1M: 3e-4, slit2M: 2e-4, detectorWidthM: 1e-4 };
     const input: PatternInput = { ...setup(false), geometry: wide, sublevels: [{ label: 'a', momentJT: 0.5 * MU, population: 1 }] };
@@ -75,7 +75,7 @@ describe('peak slopes against central differences of the exact maximum', () => {
     const members = [{ k: deflectionCoefficient(0.5 * MU, input.massKg, wide), weight: 1 }];
     const x0 = maximum(members, input, image, detectorPattern(input).peaks[0]!.positionM);
     const slopes = peakSlopes(input, [{ positionM: x0, memberIndices: [0] }])[0]!;
-    for (const [key, slope] of [['boxAM', slopes.perBoxA], ['boxBM', slopes.perBoxB]] as const) {
+    for (const [key, slope] of [['boxAM', slopes.perBoxA], ['boxBM', slopes.perBoxB], ['detectorM', slopes.perDetector]] as const) {
       const h = 0.02 * image[key];
       const at = (d: number) => maximum(members, input, { ...image, [key]: image[key] + d }, x0);
       const fd = (at(h) - at(-h)) / (2 * h);

@@ -136,7 +136,7 @@ function lineReport(l: LineResult, atFieldText: AtFieldText, diagnostics: readon
   if (l.line_centre_Hz !== undefined) {
     // A wavelength only for a positive frequency: a negative one means the levels are the other way round.
     const wavelength = l.line_centre_Hz > 0 ? ` (vacuum wavelength ${trimNumber((SPEED_OF_LIGHT / l.line_centre_Hz) * 1e9, 9)} nm)` : '';
-    out.push(`  line centre ${frequencyText(l.line_centre_Hz, 13)}${wavelength}`);
+    out.push(`  line centre ${withUncertainty(l.line_centre_Hz, l.line_centre_Hz_unc, (v) => frequencyText(v, 13))}${wavelength}`);
   }
   const at = l.at_fields[0];
   if (!at) {

@@ -252,6 +252,7 @@ export interface LineComponentResult {
   offset_Hz_unc?: number;
   /** Absolute frequency, when both levels' energies are known. */
   absolute_Hz?: number;
+  absolute_Hz_unc?: number;
   /** Branching fraction of the upper sublevel into this lower sublevel (they sum to 1 per upper sublevel). */
   strength: number;
   /** π: Δm = 0; σ+: m_upper = m_lower + 1; σ−: m_upper = m_lower − 1. */
@@ -309,6 +310,7 @@ export interface LineResult {
   written_as_emission?: boolean;
   /** Upper minus lower level energy (always > 0), when both are known and differ. */
   line_centre_Hz?: number;
+  line_centre_Hz_unc?: number;
   /**
    * 'L' for a line with a whole term at one end or both: strengths are (2L_u+1)|<l|d_q|u>|²/|<L_u||d||L_l>|²
    * (out of each upper sublevel they sum to 1 when the lower end is a whole term). Absent: per J, as above.

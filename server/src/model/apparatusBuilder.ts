@@ -89,12 +89,16 @@ export function buildBeam(
       }
       case 'source': {
         const src = readSource(s, problems);
-        if (src) beam.source = src;
+        if (src) beam.source = src.source;
+        if (src?.temperature) beam.ovenTemperatureK = src.temperature;
         break;
       }
       case 'slits': {
         const sl = readSlits(s, problems);
-        if (sl) beam.slits = sl;
+        if (sl) {
+          beam.slits = sl.slits;
+          beam.slitParts = sl.parts;
+        }
         break;
       }
       case 'drift': {
@@ -158,7 +162,7 @@ function positive(s: SettingNode, v: Valued<number> | undefined, problems: Probl
 
 const SOURCE_FORMS = 'oven <temperature>, jet <speed> spread <percent>, or speed <speed>';
 
-function readSource(s: SettingNode, problems: ProblemList): Valued<BeamSource> | undefined {
+function readSource(s: SettingNode, problems: ProblemList): { source: Valued<BeamSource>; temperature?: Valued<number> } | undefined {
   const parts = s.groups.flat();
   const bad = (msg: string): undefined => {
     problems.add('beam-source-malformed', msg, s.valueText.range, { data: { suggestions: ['oven 450 K', 'jet 1500 m/s spread 10 %', 'speed 800 m/s'] } });
@@ -166,21 +170,23 @@ function readSource(s: SettingNode, problems: ProblemList): Valued<BeamSource> |
   };
   const kind = parts[0];
   if (!kind || kind.kind !== 'word') return bad(`source must be ${SOURCE_FORMS}`);
+  let read: Valued<number> | undefined;
   const q = (i: number, d: Dimension, what: string): number | undefined => {
     const p = parts[i];
     if (!p) {
       bad(`source '${kind.text}' needs ${what}`);
       return undefined;
     }
-    return readPartQuantity(p, d, problems, 'source')?.value;
+    read = readPartQuantity(p, d, problems, 'source');
+    return read?.value;
   };
-  const done = (value: BeamSource): Valued<BeamSource> => ({ value, source: 'this file', range: s.valueText.range });
+  const done = (value: BeamSource) => ({ source: { value, source: 'this file', range: s.valueText.range } });
   switch (kind.text) {
     case 'oven': {
       const t = q(1, 'temperature', 'a temperature, e.g. oven 450 K');
       if (t === undefined) return undefined;
       if (t <= 0) return bad(`an oven temperature must be above absolute zero, got ${parts[1]!.text}`);
-      return done({ kind: 'oven', temperatureK: t });
+      return { ...done({ kind: 'oven', temperatureK: t }), ...(read ? { temperature: read } : {}) };
     }
     case 'jet': {
       const v = q(1, 'speed', 'a mean speed, e.g. jet 1500 m/s spread 10 %');
@@ -203,7 +209,7 @@ function readSource(s: SettingNode, problems: ProblemList): Valued<BeamSource> |
   }
 }
 
-function readSlits(s: SettingNode, problems: ProblemList): BeamModel['slits'] {
+function readSlits(s: SettingNode, problems: ProblemList): { slits: NonNullable<BeamModel['slits']>; parts: NonNullable<BeamModel['slitParts']> } | undefined {
   const [g1, g2] = s.groups;
   const form = 'slits = <width>, <width> apart <distance>, e.g. slits = 80 um, 50 um apart 40 cm';
   const bad = (): undefined => {
@@ -221,7 +227,10 @@ function readSlits(s: SettingNode, problems: ProblemList): BeamModel['slits'] {
       return undefined;
     }
   }
-  return { value: { firstM: first.value, secondM: second.value, separationM: sep.value }, source: 'this file', range: s.valueText.range };
+  return {
+    slits: { value: { firstM: first.value, secondM: second.value, separationM: sep.value }, source: 'this file', range: s.valueText.range },
+    parts: { firstM: first, secondM: second, separationM: sep },
+  };
 }
 
 /** `detector = <width>` or `detector = <width> at <offset from the axis>`. */

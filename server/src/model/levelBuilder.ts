@@ -5,7 +5,7 @@
 import type { LevelNode, SettingNode } from '../format/ast';
 import { parseLevelDesignation } from '../physics/configuration';
 import { lifetimeFromFwhm } from '../physics/lineshape';
-import type { BuiltinLevel } from '../physics/species';
+import { citationOf, type BuiltinLevel, type Sourced } from '../physics/species';
 import type { ProblemList } from './problems';
 import { subRange } from './ranges';
 import { readPerLevel } from './perLevelReader';
@@ -180,8 +180,8 @@ function mergeBuiltin(level: LevelModel): void {
   level.lifetimeS ??= fromBuiltin(match.lifetimeS);
 }
 
-function fromBuiltin(v: { value: number; source: string; uncertainty?: number } | undefined): Valued<number> | undefined {
-  return v ? { value: v.value, source: v.source, ...(v.uncertainty !== undefined ? { uncertainty: v.uncertainty } : {}) } : undefined;
+function fromBuiltin(v: Sourced<number> | undefined): Valued<number> | undefined {
+  return v ? { value: v.value, source: citationOf(v), ...(v.uncertainty !== undefined ? { uncertainty: v.uncertainty } : {}) } : undefined;
 }
 
 function findBuiltinLevel(levels: readonly BuiltinLevel[], level: LevelModel): BuiltinLevel | undefined {

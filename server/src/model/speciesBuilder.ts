@@ -6,7 +6,7 @@ import type { BlockNode } from '../format/ast';
 import { allowedEdits, editDistance } from '../format/didYouMean';
 import { ATOMIC_MASS_UNIT, NUCLEAR_MAGNETON } from '../physics/constants';
 import { nuclearGFromMoment } from '../physics/gFactors';
-import { findSpecies, normalizedSpellings, normalizeSpeciesName } from '../physics/species';
+import { citationOf, findSpecies, normalizedSpellings, normalizeSpeciesName } from '../physics/species';
 import { buildLevel } from './levelBuilder';
 import { NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
@@ -26,7 +26,9 @@ export function buildSpecies(node: BlockNode, uses: NameUse[], problems: Problem
     ...(builtin ? { builtin } : {}),
     ...(builtin ? { massKg: { value: builtin.massU.value * ATOMIC_MASS_UNIT, source: builtin.massU.source } } : {}),
     twoI: builtin ? { ...builtin.twoI } : { value: 0, source: 'no nuclear spin given' },
-    gI: builtin?.gI ? { ...builtin.gI } : { value: 0, source: 'no nuclear moment given' },
+    gI: builtin?.gI
+      ? { value: builtin.gI.value, source: citationOf(builtin.gI), ...(builtin.gI.uncertainty !== undefined ? { uncertainty: builtin.gI.uncertainty } : {}) }
+      : { value: 0, source: 'no nuclear moment given' },
     levels: [],
   };
 

@@ -127,6 +127,9 @@ export interface BeamModel {
   magnet?: MagnetModel;
   source?: Valued<BeamSource>;
   slits?: Valued<{ firstM: number; secondM: number; separationM: number }>;
+  /** The oven temperature and the slit dimensions as written, each with its uncertainty (for propagation). */
+  ovenTemperatureK?: Valued<number>;
+  slitParts?: { firstM: Valued<number>; secondM: Valued<number>; separationM: Valued<number> };
   driftM?: Valued<number>;
   detectorM?: Valued<number>;
   /** Centre of a fixed detector from the undeflected axis (`detector = 25 um at 1.2 mm`). */

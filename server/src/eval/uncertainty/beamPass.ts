@@ -4,6 +4,9 @@
  * lever arm. Peak positions (of the pattern and of each sublevel's own profile) move with the
  * deflection coefficients k_i = ⟨z_i⟩/⟨1/v²⟩ of their members and with the slit image, whose box
  * widths grow with L1 + L2: dx/dp = Σ_i (∂x/∂k_i) ∂k_i/∂p + (∂x/∂a ∂a/∂L + ∂x/∂b ∂b/∂L) ∂L/∂p.
+ * The slit widths w1, w2 and separation d enter through a = w2 (1 + L/d), b = w1 L/d, the detector
+ * width W directly. An oven's speeds scale as √T, so 1/v² and every deflection as 1/T: the pattern
+ * depends on each k_i/T, ∂⟨z⟩/∂T = −⟨z⟩/T and ∂x/∂T = −Σ_i (∂x/∂k_i) k_i/T.
  */
 import { peakSlopes, type PeakAt } from '../../physics/beam';
 import { BOHR_MAGNETON, PLANCK_H } from '../../physics/constants';
@@ -14,7 +17,7 @@ import { beamInputs } from '../beamInput';
 import type { GJLookup } from '../gJLookup';
 import { hyperfineSpec } from '../levelSpec';
 import type { BeamResult } from '../resultTypes';
-import { fieldKey, type SetupInputs } from './inputs';
+import { fieldKey, type BeamGeometrySens, type SetupInputs } from './inputs';
 import { setUnc } from './uncField';
 
 export function beamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: SetupInputs, problems: Problem[]): void {
@@ -29,7 +32,11 @@ export function beamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, 
   const params = { ...inp.levelParams(level), field };
   const geo = inp.magnetSens.get(magnet.name);
   const drift = inp.beamDrift.get(beam.name) ?? NO_SENSITIVITY;
-  const anything = [field, drift, geo?.gradient, geo?.length, ...Object.values(params)].some((s) => s && hasSensitivity(s));
+  const apparatus = inp.beamGeometry.get(beam.name);
+  // Only an oven's temperature is propagated (a jet's speed and spread are not yet).
+  const temperature = beam.source?.value.kind === 'oven' ? apparatus?.temperature ?? NO_SENSITIVITY : NO_SENSITIVITY;
+  const T = beam.source?.value.kind === 'oven' ? beam.source.value.temperatureK : 1;
+  const anything = [field, drift, geo?.gradient, geo?.length, temperature, ...Object.values(apparatus ?? {}), ...Object.values(params)].some((s) => s && hasSensitivity(s));
   if (!anything) return;
   const d = levelDerivatives(spec, magnet.fieldT.value).states;
   if (d.length !== r.sublevels.length) return;
@@ -44,20 +51,38 @@ export function beamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, 
     const sMu = scaled(-PLANCK_H, throughParams(d[k]!.dSlope, params));
     setUnc(s, 'moment_J_per_T', sMu, inp.table);
     setUnc(s, 'moment_bohr', scaled(1 / BOHR_MAGNETON, sMu), inp.table);
-    const sZ = combine([
+    const sK = combine([
       [G * lever * per, sMu],
       [mu * lever * per, geo?.gradient ?? NO_SENSITIVITY],
       [mu * G * (L1 + L2) * per, geo?.length ?? NO_SENSITIVITY],
       [mu * G * L1 * per, drift],
     ]);
-    setUnc(s, 'mean_deflection_m', sZ, inp.table);
-    deflections.push(sZ);
+    setUnc(s, 'mean_deflection_m', combine([[1, sK], [-s.mean_deflection_m / T, temperature]]), inp.table);
+    // The peaks need k_i itself (⟨z_i⟩/⟨1/v²⟩), whose sensitivities are ⟨z_i⟩'s without the temperature.
+    deflections.push(sK);
   });
-  peakUncertainty(r, beam, gJOf, inp, deflections, combine([[1, geo?.length ?? NO_SENSITIVITY], [1, drift]]), problems);
+  const flight = combine([[1, geo?.length ?? NO_SENSITIVITY], [1, drift]]);
+  peakUncertainty(r, beam, gJOf, inp, deflections, flight, { temperature, T, apparatus }, problems);
+}
+
+interface SourceAndSlits {
+  /** The oven temperature's sensitivities (none for another source) and its value. */
+  temperature: Sensitivities;
+  T: number;
+  apparatus: BeamGeometrySens | undefined;
 }
 
 /** `peaks[].position_m_unc` and `sublevels[].peak_m_unc`; `flight` holds the sensitivities of L1 + L2. */
-function peakUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: SetupInputs, deflections: Sensitivities[], flight: Sensitivities, problems: Problem[]): void {
+function peakUncertainty(
+  r: BeamResult,
+  beam: BeamModel,
+  gJOf: GJLookup,
+  inp: SetupInputs,
+  deflections: Sensitivities[],
+  flight: Sensitivities,
+  { temperature, T, apparatus }: SourceAndSlits,
+  problems: Problem[],
+): void {
   const input = beamInputs(beam, gJOf)?.input;
   const mis = r.speeds?.mean_inverse_square_s2_per_m2;
   if (!input || !mis || input.sublevels.length !== deflections.length) return;
@@ -66,17 +91,33 @@ function peakUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: Se
   const shared: PeakAt[] = r.peaks.map((p) => ({ positionM: p.position_m, memberIndices: p.members.map((m) => index.get(m) ?? -1) }));
   if (shared.some((p) => p.memberIndices.includes(-1))) return;
   const slopes = peakSlopes(input, [...own, ...shared]);
-  const { slit1M, slit2M, slitSeparationM: d } = input.geometry;
+  const { slit1M, slit2M, slitSeparationM: d, magnetLengthM, driftM } = input.geometry;
+  const L = magnetLengthM + driftM;
+  const none = NO_SENSITIVITY;
   const sensOf = (p: PeakAt, j: number): Sensitivities | undefined => {
     const s = slopes[j];
-    if (!s) return undefined;
+    // An undeflected peak sits at 0 by symmetry whatever the inputs: no uncertainty, not rounding noise.
+    if (!s || p.positionM === 0) return undefined;
+    // k_i = ⟨z_i⟩/⟨1/v²⟩ (the flux average at the file's temperature).
+    const perT = -p.memberIndices.reduce((sum, i, q) => sum + s.perK[q]! * (r.sublevels[i]!.mean_deflection_m / mis), 0) / T;
     // a = w2 (1 + L/d), b = w1 L/d with L = L1 + L2 (slitImage.ts).
-    return combine([...p.memberIndices.map((i, q) => [s.perK[q]! / mis, deflections[i]!] as const), [(s.perBoxA * slit2M + s.perBoxB * slit1M) / d, flight]]);
+    return combine([
+      ...p.memberIndices.map((i, q) => [s.perK[q]! / mis, deflections[i]!] as const),
+      [(s.perBoxA * slit2M + s.perBoxB * slit1M) / d, flight],
+      [perT, temperature],
+      [s.perBoxB * (L / d), apparatus?.slit1 ?? none],
+      [s.perBoxA * (1 + L / d), apparatus?.slit2 ?? none],
+      [(-(s.perBoxA * slit2M + s.perBoxB * slit1M) * L) / (d * d), apparatus?.separation ?? none],
+      [s.perDetector, apparatus?.detector ?? none],
+    ]);
   };
   own.forEach((p, j) => setUnc(r.sublevels[p.memberIndices[0]!]!, 'peak_m', sensOf(p, j), inp.table));
   shared.forEach((p, j) => setUnc(r.peaks[j]!, 'position_m', sensOf(p, own.length + j), inp.table));
   // A deflected peak whose deflections are uncertain but which got no slope: say so (nothing silent).
-  const missed = r.peaks.some((p, j) => p.position_m !== 0 && p.position_m_unc === undefined && !slopes[own.length + j] && shared[j]!.memberIndices.some((i) => hasSensitivity(deflections[i]!)));
+  const apparatusUncertain = [temperature, ...Object.values(apparatus ?? {})].some((s) => hasSensitivity(s));
+  const missed = r.peaks.some(
+    (p, j) => p.position_m !== 0 && p.position_m_unc === undefined && !slopes[own.length + j] && (apparatusUncertain || shared[j]!.memberIndices.some((i) => hasSensitivity(deflections[i]!))),
+  );
   if (missed) {
     problems.push({
       code: 'uncertainty-undefined',

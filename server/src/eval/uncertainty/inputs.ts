@@ -13,7 +13,19 @@ export interface SetupInputs {
   /** The level parameters' sensitivities (A, B, C, ζ, g_I and a measured g_J). */
   levelParams: (level: LevelModel) => ParamSensitivities;
   beamDrift: Map<string, Sensitivities>;
+  /** A beam's oven temperature, slit widths w1, w2, slit separation d and detector width W. */
+  beamGeometry: Map<string, BeamGeometrySens>;
+  /** A level's energy above the ground level (absolute line frequencies). */
+  levelEnergy: (level: LevelModel) => Sensitivities;
   resonanceFrequency: Map<string, Sensitivities>;
+}
+
+export interface BeamGeometrySens {
+  temperature: Sensitivities;
+  slit1: Sensitivities;
+  slit2: Sensitivities;
+  separation: Sensitivities;
+  detector: Sensitivities;
 }
 
 export function fieldKey(source: { kind: 'field' | 'magnet'; name: string }): string {
@@ -39,6 +51,7 @@ export function setupInputs(model: SetupModel): SetupInputs {
     });
   }
   const levelParams = new Map<LevelModel, ParamSensitivities>();
+  const levelEnergy = new Map<LevelModel, Sensitivities>();
   for (const s of model.species) {
     const gI = add(`species:${s.name}.g_I`, `g_I of ${s.name}`, s.gI);
     for (const l of s.levels) {
@@ -52,9 +65,31 @@ export function setupInputs(model: SetupModel): SetupInputs {
         zeta: add(`${id}.zeta`, `zeta of ${name}`, l.zeta),
         gJ: add(`${id}.g_J`, `g_J of ${name}`, l.gJMeasured),
       });
+      levelEnergy.set(l, add(`${id}.energy`, `energy of ${name}`, l.energyHz));
     }
   }
   const beamDrift = new Map(model.beams.map((b) => [b.name, add(`beam:${b.name}.drift`, `drift of beam ${b.name}`, b.driftM)]));
+  const beamGeometry = new Map(
+    model.beams.map((b) => [
+      b.name,
+      {
+        temperature: add(`beam:${b.name}.temperature`, `oven temperature of beam ${b.name}`, b.ovenTemperatureK),
+        slit1: add(`beam:${b.name}.slit1`, `first slit of beam ${b.name}`, b.slitParts?.firstM),
+        slit2: add(`beam:${b.name}.slit2`, `second slit of beam ${b.name}`, b.slitParts?.secondM),
+        separation: add(`beam:${b.name}.slit_separation`, `slit separation of beam ${b.name}`, b.slitParts?.separationM),
+        detector: add(`beam:${b.name}.detector`, `detector width of beam ${b.name}`, b.detectorM),
+      },
+    ]),
+  );
   const resonanceFrequency = new Map(model.resonances.map((r) => [r.name, add(`resonance:${r.name}.frequency`, `frequency of resonance ${r.name}`, r.frequencyHz)]));
-  return { table, fieldSens, magnetSens, levelParams: (l) => levelParams.get(l) ?? {}, beamDrift, resonanceFrequency };
+  return {
+    table,
+    fieldSens,
+    magnetSens,
+    levelParams: (l) => levelParams.get(l) ?? {},
+    beamDrift,
+    beamGeometry,
+    levelEnergy: (l) => levelEnergy.get(l) ?? NO_SENSITIVITY,
+    resonanceFrequency,
+  };
 }

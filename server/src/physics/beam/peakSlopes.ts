@@ -5,6 +5,8 @@
  *   P(x) = Σ_i (w_i/(a b)) Σ_{s,t=±1} s t J_i(x + sa/2 + tb/2),  J = H averaged over the aperture W,
  * every derivative is a divided difference of closed forms of the speed law:
  *   ∂H/∂e = F(e) = P(z ≤ e),  and, as H(e) = E[(e − k u)⁺] with u = 1/v²,  ∂H/∂k = −E[u; z ≤ e].
+ * The aperture width W enters through the averaging limits c ± W/2 (and a 1/W prefactor):
+ *   ∂²P/∂x∂W = Σ_i (w_i/(a b W)) Σ s t (F(c + W/2) + F(c − W/2))/2 − P_x/W.
  * All exact; no finite differences. A point detector (W = 0) would need the density itself, which
  * the speed laws do not expose: undefined there, as where the refinement did not run.
  */
@@ -23,6 +25,8 @@ export interface PeakSlopes {
   /** dx_p/da and dx_p/db: the slit-image box widths (dimensionless). */
   perBoxA: number;
   perBoxB: number;
+  /** dx_p/dW: the detector (aperture) width (dimensionless). */
+  perDetector: number;
 }
 
 const at = new Float64Array(2);
@@ -60,6 +64,7 @@ function slopesAt(x: number, members: readonly RefineMember[], law: SpeedLaw, im
   let pxx = 0;
   let spreadA = 0;
   let spreadB = 0;
+  let spreadW = 0;
   const pxk: number[] = [];
   for (const { k, weight } of members) {
     const c0 = weight / (a * b * w);
@@ -73,13 +78,14 @@ function slopesAt(x: number, members: readonly RefineMember[], law: SpeedLaw, im
         pxx += curve;
         spreadA += (s / 2) * curve;
         spreadB += (t / 2) * curve;
+        spreadW += (s * t * c0 * (hi.F + lo.F)) / 2;
         dk += s * t * c0 * (hi.Hk - lo.Hk);
       }
     }
     pxk.push(dk);
   }
   if (!(pxx < 0) || !Number.isFinite(pxx)) return undefined;
-  // The 1/(a b) prefactor would add −P_x/a (resp. /b), but P_x = 0 at the maximum: dropped, since at
-  // the refined position (~1e-5 relative off) that term would be mostly the refinement's own error.
-  return { perK: pxk.map((v) => -v / pxx), perBoxA: -spreadA / pxx, perBoxB: -spreadB / pxx };
+  // The 1/(a b W) prefactor would add −P_x/a (resp. /b, /W), but P_x = 0 at the maximum: dropped, since
+  // at the refined position (~1e-5 relative off) that term would be mostly the refinement's own error.
+  return { perK: pxk.map((v) => -v / pxx), perBoxA: -spreadA / pxx, perBoxB: -spreadB / pxx, perDetector: -spreadW / pxx };
 }

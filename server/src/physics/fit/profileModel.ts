@@ -31,8 +31,10 @@ export interface ProfileModel {
   start: number[];
   scale: number[];
   model(p: Float64Array, out: Float64Array): boolean;
-  /** ∂model/∂p (count × p): amplitude and background exactly (the model is linear in them), the rest by central differences. */
+  /** ∂model/∂p (count × p): amplitude, background, offset and populations exactly, the rest by central differences. */
   jacobian(p: Float64Array, out: Float64Array): boolean;
+  /** Detector patterns computed so far (the model's cost; for benchmarks and tests). */
+  patterns(): number;
 }
 
 /** Parameters that enter by their absolute value. */
@@ -43,18 +45,40 @@ export function isSizeParameter(name: string): boolean {
 /** Bins of the pattern grid over the scanned span. */
 const BINS = 1024;
 
-function interpolate(xs: Float64Array, ys: Float64Array, x: number): number {
+/**
+ * The grid values ys (at ascending xs) linearly interpolated at each x − shift into `out`, 0 off
+ * the grid; with `slopes`, the interpolant's slope there too (its exact derivative in x, taken
+ * from the right at a knot). Positions are usually ascending, so the search walks from the last
+ * segment and falls back to bisection.
+ */
+function sampleGrid(xs: Float64Array, ys: Float64Array, positions: Float64Array, shift: number, out: Float64Array, slopes?: Float64Array): void {
   const n = xs.length;
-  if (n === 0 || x < xs[0]! || x > xs[n - 1]!) return 0;
   let lo = 0;
-  let hi = n - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (xs[mid]! <= x) lo = mid;
-    else hi = mid;
+  for (let i = 0; i < positions.length; i++) {
+    const x = positions[i]! - shift;
+    if (n < 2 || x < xs[0]! || x > xs[n - 1]!) {
+      out[i] = 0;
+      if (slopes) slopes[i] = 0;
+      continue;
+    }
+    if (x < xs[lo]!) lo = 0;
+    if (x >= xs[lo + 1]!) {
+      if (lo + 2 < n && x < xs[lo + 2]!) lo++;
+      else {
+        let hi = n - 1;
+        while (hi - lo > 1) {
+          const mid = (lo + hi) >> 1;
+          if (xs[mid]! <= x) lo = mid;
+          else hi = mid;
+        }
+        if (lo === n - 1) lo = n - 2;
+      }
+    }
+    const dx = xs[lo + 1]! - xs[lo]!;
+    const slope = dx > 0 ? (ys[lo + 1]! - ys[lo]!) / dx : 0;
+    out[i] = ys[lo]! + slope * (x - xs[lo]!);
+    if (slopes) slopes[i] = slope;
   }
-  const t = xs[hi]! === xs[lo]! ? 0 : (x - xs[lo]!) / (xs[hi]! - xs[lo]!);
-  return ys[lo]! * (1 - t) + ys[hi]! * t;
 }
 
 export function profileModel(setup: ProfileSetup, positionsM: Float64Array, counts: Float64Array, free: readonly ProfileParameter[], startOffsetM = 0): ProfileModel {
@@ -87,12 +111,22 @@ export function profileModel(setup: ProfileSetup, positionsM: Float64Array, coun
   const grid = { startM: Math.min(...positionsM) - startOffsetM - margin, endM: Math.max(...positionsM) - startOffsetM + margin };
   const index = (n: string): number => names.indexOf(n);
 
-  const shape = (p: Float64Array): { xs: Float64Array; ys: Float64Array; offset: number; background: number } | null => {
+  const fLabel = (f: number): string => `population F=${f % 2 === 0 ? f / 2 : `${f}/2`}`;
+  // Which population parameter (if any) scales each sublevel.
+  const popParam = setup.twoF.map((f) => names.indexOf(fLabel(f)));
+
+  /** The pattern on its grid at p: total, and per F the summed contribution and weight (for the population columns). */
+  interface Shape {
+    xs: Float64Array;
+    ys: Float64Array;
+    byF: Map<number, { sum: Float64Array; weight: number }>;
+  }
+  let patterns = 0;
+  const shape = (p: Float64Array): Shape | null => {
     const g = { ...geometry };
     if (index('gradient') >= 0) g.gradientTPerM = p[index('gradient')]!;
     // Width, temperature and populations enter by their size: a step through zero stays computable.
     if (index('width') >= 0) g.detectorWidthM = Math.abs(p[index('width')]!);
-    const offset = index('offset') >= 0 ? p[index('offset')]! : startOffsetM;
     let src = source;
     if (index('temperature') >= 0) {
       if (source.kind !== 'effusive') return null;
@@ -106,10 +140,11 @@ export function profileModel(setup: ProfileSetup, positionsM: Float64Array, coun
     }
     const sublevels = setup.input.sublevels.map((s, i) => {
       const f = setup.twoF[i]!;
-      const k = names.indexOf(`population F=${f % 2 === 0 ? f / 2 : `${f}/2`}`);
+      const k = popParam[i]!;
       const relative = k >= 0 ? Math.abs(p[k]!) / (firstWeight.get(f) || 1) : 1;
       return { label: s.label, momentJT: moments[i]!, population: s.population * relative };
     });
+    patterns++;
     const pattern = computePattern({
       ...setup.input,
       geometry: g,
@@ -119,54 +154,109 @@ export function profileModel(setup: ProfileSetup, positionsM: Float64Array, coun
       spanM: grid,
     }, undefined, false);
     if (pattern.issues.some((i) => i.severity === 'error') || pattern.total.length === 0) return null;
-    return { xs: pattern.positionsM, ys: pattern.total, offset, background: index('background') >= 0 ? p[index('background')]! : 0 };
+    const byF = new Map<number, { sum: Float64Array; weight: number }>();
+    popParam.forEach((k, i) => {
+      if (k < 0) return;
+      const f = setup.twoF[i]!;
+      const entry = byF.get(f) ?? { sum: new Float64Array(pattern.total.length), weight: 0 };
+      byF.set(f, entry);
+      const part = pattern.perSublevel[i]!;
+      for (let j = 0; j < part.length; j++) entry.sum[j] += part[j]!;
+      entry.weight += pattern.sublevels[i]!.weight;
+    });
+    return { xs: pattern.positionsM, ys: pattern.total, byF };
+  };
+
+  // The offset, background and amplitude do not change the pattern, only how it is sampled and
+  // scaled: the last pattern is kept with the other parameters it was computed at. The Jacobian
+  // is asked for where the fitter has just evaluated the model, and a step that moves only
+  // those three needs no new pattern.
+  const offsetAt = names.indexOf('offset');
+  const bgAt = names.indexOf('background');
+  const offsetOf = (p: Float64Array): number => (offsetAt >= 0 ? p[offsetAt]! : startOffsetM);
+  // Every parameter but the amplitude is named by now; these are the ones that shape the pattern.
+  const shaping = names.map((_, j) => j).filter((j) => j !== offsetAt && j !== bgAt);
+  const keyOf = (p: Float64Array): number[] => shaping.map((j) => p[j]!);
+  let cachedAt: number[] | null = null;
+  let cached: Shape | null = null;
+  const shapeAt = (p: Float64Array): Shape | null => {
+    const key = keyOf(p);
+    if (cachedAt && cachedAt.every((v, j) => Object.is(v, key[j]))) return cached;
+    cached = shape(p);
+    cachedAt = key;
+    return cached;
   };
 
   // The amplitude starts at its linear least-squares value for the starting shape.
-  const first = shape(Float64Array.from(start));
+  const n = positionsM.length;
+  const first = shapeAt(Float64Array.from(start));
   let amplitude = 1;
   if (first) {
+    const v = new Float64Array(n);
+    sampleGrid(first.xs, first.ys, positionsM, offsetOf(Float64Array.from(start)), v);
     let num = 0;
     let den = 0;
-    for (let i = 0; i < positionsM.length; i++) {
-      const v = interpolate(first.xs, first.ys, positionsM[i]! - first.offset);
-      num += v * counts[i]!;
-      den += v * v;
+    for (let i = 0; i < n; i++) {
+      num += v[i]! * counts[i]!;
+      den += v[i]! * v[i]!;
     }
     if (den > 0 && num > 0) amplitude = num / den;
   }
   push('amplitude', amplitude, 1e-30);
   const ampAt = names.length - 1;
-  const n = positionsM.length;
   const m = names.length;
+  /** The unit shape at the data positions, uncached (for difference columns). */
   const unitShape = (p: Float64Array, out: Float64Array): boolean => {
     const s = shape(p);
     if (!s) return false;
-    for (let i = 0; i < n; i++) out[i] = interpolate(s.xs, s.ys, positionsM[i]! - s.offset);
+    sampleGrid(s.xs, s.ys, positionsM, offsetOf(p), out);
     return true;
   };
-  const bgAt = names.indexOf('background');
+  const base = new Float64Array(n);
+  const slope = new Float64Array(n);
+  const part = new Float64Array(n);
+  const plus = new Float64Array(n);
+  const minus = new Float64Array(n);
   return {
     names,
     start,
     scale,
+    patterns: () => patterns,
     model(p, out) {
-      if (!unitShape(p, out)) return false;
+      const s = shapeAt(p);
+      if (!s) return false;
+      sampleGrid(s.xs, s.ys, positionsM, offsetOf(p), out);
       const a = p[ampAt]!;
       const bg = bgAt >= 0 ? p[bgAt]! : 0;
       for (let i = 0; i < n; i++) out[i] = a * out[i]! + bg;
       return true;
     },
+    // Exact columns where the model is linear or simple in the parameter: amplitude, background,
+    // offset (minus the interpolant's slope) and populations (below); the rest, which move the
+    // deflections, the speed law or the aperture, by central differences of the pattern.
     jacobian(p, out) {
-      const base = new Float64Array(n);
-      if (!unitShape(p, base)) return false;
+      const s = shapeAt(p);
+      if (!s) return false;
+      sampleGrid(s.xs, s.ys, positionsM, offsetOf(p), base, slope);
       const a = p[ampAt]!;
-      const plus = new Float64Array(n);
-      const minus = new Float64Array(n);
       const q = Float64Array.from(p);
       for (let j = 0; j < m; j++) {
         if (j === ampAt || j === bgAt) {
           for (let i = 0; i < n; i++) out[i * m + j] = j === ampAt ? base[i]! : 1;
+          continue;
+        }
+        if (j === offsetAt) {
+          for (let i = 0; i < n; i++) out[i * m + j] = -a * slope[i]!;
+          continue;
+        }
+        // Population π_F scales the populations of F by |π_F|/π⁰_F; with weights w normalised
+        // over all sublevels, ∂P/∂π_F = (S_F − W_F·P)/π_F, S_F the contributions of F and W_F
+        // their weight. At π_F = 0 that F has no contribution to read: differences then.
+        const popF = p[j] !== 0 ? [...s.byF].find(([f]) => names.indexOf(fLabel(f)) === j) : undefined;
+        if (popF) {
+          const { sum, weight } = popF[1];
+          sampleGrid(s.xs, sum, positionsM, offsetOf(p), part);
+          for (let i = 0; i < n; i++) out[i * m + j] = (a * (part[i]! - weight * base[i]!)) / p[j]!;
           continue;
         }
         const h = PROFILE_RELATIVE_STEP * Math.max(Math.abs(p[j]!), scale[j]!);

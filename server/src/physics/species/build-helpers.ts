@@ -6,14 +6,26 @@ import { nuclearGFromMoment, publishedEnergyToHz } from './conversions';
 import { FROM_MEMORY } from './sources';
 import type { PublishedEnergy, PublishedEnergyUnit, Sourced } from './types';
 
-/** Wraps a value with its citation (and the uncertainty the citation publishes, if any). */
-export function sourced<T>(value: T, source: string, uncertainty?: number): Sourced<T> {
-  return uncertainty !== undefined ? { value, source, uncertainty } : { value, source };
+/**
+ * Wraps a value with its citation (and the uncertainty the citation publishes, if any; with
+ * `uncertaintySource` when that uncertainty was not read in the citation, e.g. FROM_MEMORY).
+ */
+export function sourced<T>(value: T, source: string, uncertainty?: number, uncertaintySource?: string): Sourced<T> {
+  if (uncertainty === undefined) return { value, source };
+  return uncertaintySource !== undefined ? { value, source, uncertainty, uncertaintySource } : { value, source, uncertainty };
 }
 
 /** A frequency published in MHz, stored in Hz; the published uncertainty is in MHz too. */
-export function mhz(value: number, source: string, uncertaintyMHz?: number): Sourced<number> {
-  return sourced(value * 1e6, source, uncertaintyMHz !== undefined ? uncertaintyMHz * 1e6 : undefined);
+export function mhz(value: number, source: string, uncertaintyMHz?: number, uncertaintySource?: string): Sourced<number> {
+  return sourced(value * 1e6, source, uncertaintyMHz !== undefined ? uncertaintyMHz * 1e6 : undefined, uncertaintySource);
+}
+
+/**
+ * The citation a derived number shows for a built-in value: the value's source, and where its
+ * uncertainty comes from when that differs.
+ */
+export function citationOf(v: Sourced<unknown>): string {
+  return v.uncertaintySource !== undefined ? `${v.source}; uncertainty ${v.uncertaintySource}` : v.source;
 }
 
 /** A lifetime published in ns, stored in s. */

@@ -17,7 +17,8 @@ export const CAESIUM_133: BuiltinSpecies = {
     2.5778,
     FROM_MEMORY,
   ),
-  gI: sourced(-0.00039885395, STECK_CS),
+  // Uncertainties marked FROM_MEMORY (fourth argument) were recalled from the compilation, not read.
+  gI: sourced(-0.00039885395, STECK_CS, 5.2e-13, FROM_MEMORY),
   // Uncertainties of the 6p constants as the cited compilation's hyperfine-constant table gives
   // them (its revision 2.3); the values carry the same digits as here. To be confirmed against the
   // compilation itself (docs/species-data.md).
@@ -27,14 +28,14 @@ export const CAESIUM_133: BuiltinSpecies = {
       designation: '6s 2S1/2',
       // ΔW = A(I + 1/2) = 4A is exact by definition of the second.
       A: sourced(CAESIUM_HYPERFINE_HZ / 4, `derived: A = ΔW/4 from the ${SI_SECOND}`),
-      gJ: sourced(2.00254032, STECK_CS),
+      gJ: sourced(2.00254032, STECK_CS, 2.0e-7, FROM_MEMORY),
       energyHz: GROUND_ENERGY,
     },
     {
       key: 'P1/2',
       designation: '6p 2P°1/2',
       A: mhz(291.9201, STECK_CS, 0.0075),
-      gJ: sourced(0.6659, STECK_CS),
+      gJ: sourced(0.6659, STECK_CS, 0.00009, FROM_MEMORY),
       ...energy(335.116048807, 'THz', STECK_CS),
       vacuumWavelengthNm: sourced(894.59295986, STECK_CS),
       lifetimeS: ns(34.894, STECK_CS),

@@ -3,7 +3,9 @@ import { energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
 import { ARIMONDO, ARIMONDO_MEMORY, FROM_MEMORY, GEHM_LI6, IAEA_MOMENTS, NIST_MASSES } from './sources';
 import type { BuiltinSpecies } from './types';
 
-const LI_GJ_GROUND = sourced(2.0023010, ARIMONDO);
+// Uncertainties marked FROM_MEMORY (fourth argument) were recalled from the cited compilation,
+// not read while this was written; docs/species-data.md lists them.
+const LI_GJ_GROUND = sourced(2.0023010, ARIMONDO, 7e-7, FROM_MEMORY);
 const LI_GJ_P12 = sourced(0.6668, FROM_MEMORY);
 const LI_GJ_P32 = sourced(1.335, FROM_MEMORY);
 // Measured on 6Li; the isotope changes the 2P lifetime by far less than its 9 ps uncertainty.
@@ -20,19 +22,19 @@ export const LITHIUM_6: BuiltinSpecies = {
   massU: sourced(6.0151228874, NIST_MASSES),
   twoI: sourced(2, GEHM_LI6),
   muI: sourced(0.8220428, IAEA_MOMENTS),
-  gI: sourced(-0.00044765403, ARIMONDO),
+  gI: sourced(-0.00044765403, ARIMONDO, 3e-10, FROM_MEMORY),
   levels: [
     {
       key: 'ground',
       designation: '2s 2S1/2',
-      A: mhz(152.1368407, GEHM_LI6),
+      A: mhz(152.1368407, GEHM_LI6, 0.000002, FROM_MEMORY),
       gJ: LI_GJ_GROUND,
       energyHz: GROUND_ENERGY,
     },
     {
       key: 'P1/2',
       designation: '2p 2P°1/2',
-      A: mhz(17.386, GEHM_LI6),
+      A: mhz(17.386, GEHM_LI6, 0.031, FROM_MEMORY),
       gJ: LI_GJ_P12,
       ...energy(446.789634, 'THz', GEHM_LI6),
       vacuumWavelengthNm: sourced(670.992421, GEHM_LI6),
@@ -41,8 +43,8 @@ export const LITHIUM_6: BuiltinSpecies = {
     {
       key: 'P3/2',
       designation: '2p 2P°3/2',
-      A: mhz(-1.155, GEHM_LI6),
-      B: mhz(-0.10, GEHM_LI6),
+      A: mhz(-1.155, GEHM_LI6, 0.008, FROM_MEMORY),
+      B: mhz(-0.10, GEHM_LI6, 0.14, FROM_MEMORY),
       gJ: LI_GJ_P32,
       ...energy(446.799677, 'THz', GEHM_LI6),
       vacuumWavelengthNm: sourced(670.977338, GEHM_LI6),
@@ -66,7 +68,7 @@ export const LITHIUM_7: BuiltinSpecies = {
     {
       key: 'ground',
       designation: '2s 2S1/2',
-      A: mhz(401.7520433, ARIMONDO),
+      A: mhz(401.7520433, ARIMONDO, 0.0000005, FROM_MEMORY),
       gJ: LI_GJ_GROUND,
       energyHz: GROUND_ENERGY,
     },
@@ -83,8 +85,9 @@ export const LITHIUM_7: BuiltinSpecies = {
     {
       key: 'P3/2',
       designation: '2p 2P°3/2',
-      A: mhz(-3.055, ARIMONDO_MEMORY),
-      B: mhz(-0.221, ARIMONDO_MEMORY),
+      // Value and uncertainty both recalled.
+      A: mhz(-3.055, ARIMONDO_MEMORY, 0.014),
+      B: mhz(-0.221, ARIMONDO_MEMORY, 0.029),
       gJ: LI_GJ_P32,
       ...energy(446.810184, 'THz', LI7_LINES),
       lifetimeS: LI7_TAU_2P,

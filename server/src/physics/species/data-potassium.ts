@@ -1,17 +1,23 @@
 /** Potassium-39, -40, -41: 4s ground level and the 4p D-line levels. */
 import { energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
-import { IAEA_MOMENTS, IAEA_MOMENTS_MEMORY, NIST_MASSES, TIECKE_K } from './sources';
+import { FROM_MEMORY, IAEA_MOMENTS, IAEA_MOMENTS_MEMORY, NIST_MASSES, TIECKE_K } from './sources';
 import type { BuiltinLevel, BuiltinSpecies } from './types';
 
-const K_GJ_GROUND = sourced(2.00229421, TIECKE_K);
+// Uncertainties: the compilation's values as recalled, not read while this was written (the
+// fourth argument says so; docs/species-data.md lists them). Its P-level g_J are Landé values
+// without an uncertainty, so none is stored.
+const K_GJ_GROUND = sourced(2.00229421, TIECKE_K, 2.4e-7, FROM_MEMORY);
 const TAU_D1 = ns(26.72, TIECKE_K);
 const TAU_D2 = ns(26.37, TIECKE_K);
 
+/** A value and its standard uncertainty, MHz. */
+type WithU = readonly [number, number];
+
 interface KLevelData {
-  aGround: number;
-  aP12: number;
-  aP32: number;
-  bP32: number;
+  aGround: WithU;
+  aP12: WithU;
+  aP32: WithU;
+  bP32: WithU;
   d1THz: number;
   d2THz: number;
   d1Nm?: number;
@@ -21,11 +27,11 @@ interface KLevelData {
 /** The three isotopes share designations, g_J and lifetimes; only hyperfine data and lines differ. */
 function potassiumLevels(d: KLevelData): BuiltinLevel[] {
   return [
-    { key: 'ground', designation: '4s 2S1/2', A: mhz(d.aGround, TIECKE_K), gJ: K_GJ_GROUND, energyHz: GROUND_ENERGY },
+    { key: 'ground', designation: '4s 2S1/2', A: mhz(d.aGround[0], TIECKE_K, d.aGround[1], FROM_MEMORY), gJ: K_GJ_GROUND, energyHz: GROUND_ENERGY },
     {
       key: 'P1/2',
       designation: '4p 2P°1/2',
-      A: mhz(d.aP12, TIECKE_K),
+      A: mhz(d.aP12[0], TIECKE_K, d.aP12[1], FROM_MEMORY),
       ...energy(d.d1THz, 'THz', TIECKE_K),
       ...(d.d1Nm === undefined ? {} : { vacuumWavelengthNm: sourced(d.d1Nm, TIECKE_K) }),
       lifetimeS: TAU_D1,
@@ -33,8 +39,8 @@ function potassiumLevels(d: KLevelData): BuiltinLevel[] {
     {
       key: 'P3/2',
       designation: '4p 2P°3/2',
-      A: mhz(d.aP32, TIECKE_K),
-      B: mhz(d.bP32, TIECKE_K),
+      A: mhz(d.aP32[0], TIECKE_K, d.aP32[1], FROM_MEMORY),
+      B: mhz(d.bP32[0], TIECKE_K, d.bP32[1], FROM_MEMORY),
       ...energy(d.d2THz, 'THz', TIECKE_K),
       ...(d.d2Nm === undefined ? {} : { vacuumWavelengthNm: sourced(d.d2Nm, TIECKE_K) }),
       lifetimeS: TAU_D2,
@@ -51,12 +57,12 @@ export const POTASSIUM_39: BuiltinSpecies = {
   massU: sourced(38.9637064864, NIST_MASSES),
   twoI: sourced(3, TIECKE_K),
   muI: sourced(0.3914699, IAEA_MOMENTS),
-  gI: sourced(-0.00014193489, TIECKE_K),
+  gI: sourced(-0.00014193489, TIECKE_K, 1.2e-13, FROM_MEMORY),
   levels: potassiumLevels({
-    aGround: 230.8598601,
-    aP12: 27.775,
-    aP32: 6.093,
-    bP32: 2.786,
+    aGround: [230.8598601, 0.0000003],
+    aP12: [27.775, 0.042],
+    aP32: [6.093, 0.025],
+    bP32: [2.786, 0.071],
     d1THz: 389.286058716,
     d2THz: 391.01617003,
     d1Nm: 770.108385049,
@@ -74,12 +80,12 @@ export const POTASSIUM_40: BuiltinSpecies = {
   massU: sourced(39.963998166, NIST_MASSES),
   twoI: sourced(8, TIECKE_K),
   muI: sourced(-1.2981, IAEA_MOMENTS_MEMORY),
-  gI: sourced(0.00017649, TIECKE_K),
+  gI: sourced(0.00017649, TIECKE_K, 3.4e-8, FROM_MEMORY),
   levels: potassiumLevels({
-    aGround: -285.7308,
-    aP12: -34.523,
-    aP32: -7.585,
-    bP32: -3.445,
+    aGround: [-285.7308, 0.0024],
+    aP12: [-34.523, 0.025],
+    aP32: [-7.585, 0.010],
+    bP32: [-3.445, 0.090],
     d1THz: 389.286184353,
     d2THz: 391.01629605,
     d1Nm: 770.108136507,
@@ -97,12 +103,12 @@ export const POTASSIUM_41: BuiltinSpecies = {
   massU: sourced(40.9618252579, NIST_MASSES),
   twoI: sourced(3, TIECKE_K),
   muI: sourced(0.2148722, IAEA_MOMENTS),
-  gI: sourced(-0.000077906, TIECKE_K),
+  gI: sourced(-0.000077906, TIECKE_K, 8e-14, FROM_MEMORY),
   levels: potassiumLevels({
-    aGround: 127.0069352,
-    aP12: 15.245,
-    aP32: 3.363,
-    bP32: 3.351,
+    aGround: [127.0069352, 0.0000006],
+    aP12: [15.245, 0.042],
+    aP32: [3.363, 0.025],
+    bP32: [3.351, 0.071],
     d1THz: 389.286294205,
     d2THz: 391.01640621,
     d2Nm: 766.7004587,

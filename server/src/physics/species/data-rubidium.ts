@@ -55,7 +55,8 @@ export const RUBIDIUM_87: BuiltinSpecies = {
   massU: sourced(86.909180531, NIST_MASSES),
   twoI: sourced(3, STECK_RB87),
   muI: sourced(2.751292, IAEA_MOMENTS),
-  gI: sourced(-0.0009951414, STECK_RB87),
+  // Uncertainties marked FROM_MEMORY (fourth argument) were recalled from the compilation, not read.
+  gI: sourced(-0.0009951414, STECK_RB87, 1.0e-9, FROM_MEMORY),
   // Uncertainties of A and B as the cited compilation's hyperfine-constant table gives them (its
   // revision 2.3); the values carry the same digits as here. To be confirmed against the
   // compilation itself (docs/species-data.md).
@@ -64,16 +65,15 @@ export const RUBIDIUM_87: BuiltinSpecies = {
       key: 'ground',
       designation: '5s 2S1/2',
       A: mhz(3417.341305452145, STECK_RB87, 0.000000000045),
-      gJ: sourced(2.00233113, STECK_RB87),
+      gJ: sourced(2.00233113, STECK_RB87, 2.0e-7, FROM_MEMORY),
       energyHz: GROUND_ENERGY,
     },
     {
       key: 'P1/2',
       designation: '5p 2P°1/2',
-      A: mhz(
-        408.328,
-        FROM_MEMORY,
-      ),
+      // Value and uncertainty both recalled (an older revision of the compilation); whether its
+      // current revision lists another value could not be read (docs/species-data.md).
+      A: mhz(408.328, FROM_MEMORY, 0.015),
       gJ: sourced(0.666, STECK_RB87),
       ...energy(377.10746338, 'THz', STECK_RB87),
       vacuumWavelengthNm: sourced(794.978851156, FROM_MEMORY),
@@ -84,7 +84,7 @@ export const RUBIDIUM_87: BuiltinSpecies = {
       designation: '5p 2P°3/2',
       A: mhz(84.7185, STECK_RB87, 0.002),
       B: mhz(12.4965, STECK_RB87, 0.0037),
-      gJ: sourced(1.3362, STECK_RB87),
+      gJ: sourced(1.3362, STECK_RB87, 0.0013, FROM_MEMORY),
       ...energy(384.2304844685, 'THz', STECK_RB87),
       vacuumWavelengthNm: sourced(780.241209686, STECK_RB87),
       lifetimeS: ns(26.2348, STECK_RB87),

@@ -10,6 +10,11 @@ export interface Sourced<T> {
   readonly source: string;
   /** Standard uncertainty in the value's unit, only where the cited source publishes one. */
   readonly uncertainty?: number;
+  /**
+   * Where the uncertainty comes from when not from `source`: "from memory" for one recalled
+   * (from the same compilation) but not read while the table was written.
+   */
+  readonly uncertaintySource?: string;
 }
 
 /** Units in which level energies are published before conversion to Hz. */
