@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { COPPER_RESISTIVITY_20C, copperResistivity, loopWireLength, windingPower } from '../../server/src/physics/fields/coilPower';
 import { sourceCautions } from '../../server/src/physics/fields/sourceCautions';
+import { magnitude, magnitudeGradient } from '../../server/src/physics/fields/magnitude';
 
 describe('copper windings', () => {
   it('uses the annealed-copper resistivity 1/58 Ω·mm²/m = 1.7241e-8 Ω·m (IEC 60028, from memory)', () => {
@@ -58,5 +59,28 @@ describe('cautions of field sources', () => {
     expect(sourceCautions({ kind: 'slab', magnetisationT: 1.2 })[0]).toMatch(/^Permanent magnet \(μ0·M = 1.2 T\): .*pinch/);
     expect(sourceCautions({ kind: 'coil', fieldT: 1e-4 })).toEqual([]);
     expect(sourceCautions({ kind: 'solenoid', fieldT: 0.02 })[0]).toMatch(/^Strong field \(0.02 T/);
+  });
+});
+
+describe('|B| and its gradient', () => {
+  // An Ioffe-type field near its axis: B = (G x, −G y, B0); |B| = √(B0² + G² r²), ∂|B|/∂x = G² x / |B| (analytic).
+  const G = 2.5;
+  const B0 = 1e-4;
+  const sample = (x: number, y: number) => ({
+    B: [G * x, -G * y, B0] as const,
+    gradient: [[G, 0, 0], [0, -G, 0], [0, 0, 0]] as const,
+  });
+  it('matches the analytic gradient of |B| of an Ioffe-type field', () => {
+    const s = sample(1e-3, -2e-3);
+    const b = Math.sqrt(B0 * B0 + G * G * 5e-6);
+    expect(magnitude(s.B)).toBeCloseTo(b, 15);
+    const g = magnitudeGradient(s)!;
+    expect(g[0]).toBeCloseTo((G * G * 1e-3) / b, 10);
+    expect(g[1]).toBeCloseTo((G * G * -2e-3) / b, 10);
+    expect(g[2]).toBe(0);
+  });
+  it('has no gradient of |B| at a field zero or on a conductor', () => {
+    expect(magnitudeGradient({ B: [0, 0, 0], gradient: [[1, 0, 0], [0, 1, 0], [0, 0, -2]] })).toBeUndefined();
+    expect(magnitudeGradient({ B: [NaN, 0, 0], gradient: [[1, 0, 0], [0, 1, 0], [0, 0, -2]] })).toBeUndefined();
   });
 });
