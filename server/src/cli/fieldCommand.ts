@@ -13,10 +13,10 @@ import { jsonText } from './escape';
 import type { CliContext } from './io';
 import { writeOutputFile } from './output';
 import { table } from './table';
+import { selectSources } from './selectors';
 import { csvTable } from '../render/csv';
 import { csvNumber } from '../eval/machineText';
 import { trimNumber } from '../eval/quantityText';
-import { suggestNames } from '../format/didYouMean';
 import type { FieldSourceModel, SetupModel } from '../model/types';
 import { sumField } from '../physics/fields';
 import { isFiniteSample, magnitude, magnitudeGradient } from '../physics/fields/magnitude';
@@ -86,13 +86,7 @@ function chooseSources(file: string, model: SetupModel, wanted: string | undefin
   const all = model.sources;
   if (all.length === 0) throw new FileProblemError(file, [cliProblem('nothing-to-compute', 'the file has no field source: add a `coil`, `solenoid`, `wire` or `slab` block (docs/fields.md)')]);
   if (wanted === undefined) return all;
-  const names = wanted.split(',').map((n) => n.trim());
-  return names.map((n) => {
-    const s = all.find((x) => x.name === n);
-    if (s) return s;
-    const hint = suggestNames(n, all.map((x) => x.name));
-    throw new UsageError(`no source named '${n}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : ''}`);
-  });
+  return selectSources(model, wanted).map((n) => all.find((s) => s.name === n)!);
 }
 
 export function sampleField(sources: readonly FieldSourceModel[], plan: FieldPointPlan): FieldPointRow[] {

@@ -9,6 +9,8 @@
  */
 import { scaleLinear, scaleLog } from 'd3-scale';
 import { line } from 'd3-shape';
+import { csvNumber } from '../eval/machineText';
+import { csvTable } from './csv';
 import { bottomAxis, leftAxis, type PlotBox, type Scale } from './axes';
 import { emptyDiagram, svgDocument } from './frame';
 import { legendRows, type LegendEntry } from './legend';
@@ -236,4 +238,15 @@ function shapeSvg(sh: FieldMapShape, x: (s: number) => number, ty: (t: number) =
       return el('ellipse', { cx: x(sh.s), cy: ty(sh.t), rx: Math.max(2, Math.abs(x(sh.s + sh.r) - x(sh.s))), ry: Math.max(2, r), fill: 'none', stroke: colour, 'stroke-width': 1.6 });
     }
   }
+}
+
+/** The numbers behind the field map (docs/csv.md): position along the line, |B| and the component along it, SI. */
+export function fieldMapCsv(d: FieldMapViewData, about: [string, string | undefined][]): string {
+  const along = d.alongName === 's' ? 's' : d.alongName;
+  const header = [`${along}_m`, 'B_abs_T', ...(d.componentT ? [`B_${along}_T`] : [])];
+  const body: string[][] = [];
+  for (let k = 0; k < d.positionsM.length; k++) {
+    body.push([csvNumber(d.positionsM[k]), csvNumber(d.magnitudeT[k]), ...(d.componentT ? [csvNumber(d.componentT[k])] : [])]);
+  }
+  return csvTable({ kind: 'fieldmap', about: [...about, ['line', d.lineText]] }, header, body);
 }

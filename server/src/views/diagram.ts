@@ -14,8 +14,9 @@ import { resonanceView } from './resonanceView';
 import { lineFieldIndex, linesView } from './linesView';
 import { levelsView } from './levelsView';
 import { patternView } from './patternView';
+import { fieldMapFor } from './fieldMapDiagram';
 
-export type DiagramView = 'levels' | 'pattern' | 'lines' | 'resonance' | 'residuals';
+export type DiagramView = 'levels' | 'pattern' | 'lines' | 'resonance' | 'residuals' | 'fieldmap';
 
 export interface DiagramRequest {
   view: DiagramView;
@@ -37,6 +38,9 @@ export interface DiagramRequest {
   fieldName?: string;
   /** The setup file's name, for the CSV header line. */
   source?: string;
+  /** Field map: only these sources (the CLI's --source), and the |B| axis scale. */
+  sourceNames?: string[];
+  fieldScale?: 'auto' | 'linear' | 'log';
 }
 
 export type DiagramAnswer = { ok: true; title: string; svg: string; csv: string; fields?: string[] } | { ok: false; message: string };
@@ -80,6 +84,7 @@ function drawn(analysis: Analysis, model: SetupModel, req: DiagramRequest): Diag
     const about: [string, string][] = [['file', req.source ?? ''], ['resonance', r.name]];
     return { ok: true, title: v.title, svg: renderResonance(v, theme), csv: resonanceCsv(v, about) };
   }
+  if (req.view === 'fieldmap') return fieldMapFor(model, req, theme);
   if (req.view === 'residuals') {
     const fits = analysis.result?.fits ?? [];
     const f = fits.find((x) => x.name === req.fitName) ?? fits.find((x) => contains(model.fits.find((m) => m.name === x.name)?.node.range ?? NOWHERE, req.line)) ?? fits.find((x) => x.kind !== 'calibration') ?? fits[0];
