@@ -3,7 +3,7 @@
  * the same diagrams the editor panel shows, as standalone SVG for reports (light palette), as PNG at print resolution,
  * or the numbers behind them as CSV.
  */
-import { diagramFor, type DiagramRequest, type DiagramView } from '../views/diagram';
+import { DIAGRAM_VIEWS, diagramFor, type DiagramRequest, type DiagramView } from '../views/diagram';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
 import { OUT_OPTION, ROOT_OPTION, rootOption } from './files';
 import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
@@ -15,7 +15,7 @@ import { readFieldOption } from './fieldOption';
 import type { FieldUnit } from '../render';
 import { selectBeam, selectField, selectLevel, selectName, selectSources } from './selectors';
 
-export const RENDER_VIEWS = ['levels', 'pattern', 'lines', 'resonance', 'residuals', 'fieldmap'] as const;
+export const RENDER_VIEWS = DIAGRAM_VIEWS;
 const FORMATS = ['svg', 'csv', 'png'] as const;
 const FIELD_UNITS = ['G', 'mT', 'T'] as const;
 

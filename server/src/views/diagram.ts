@@ -16,7 +16,12 @@ import { levelsView } from './levelsView';
 import { patternView } from './patternView';
 import { fieldMapFor } from './fieldMapDiagram';
 
-export type DiagramView = 'levels' | 'pattern' | 'lines' | 'resonance' | 'residuals' | 'fieldmap';
+export const DIAGRAM_VIEWS = ['levels', 'pattern', 'lines', 'resonance', 'residuals', 'fieldmap'] as const;
+export type DiagramView = (typeof DIAGRAM_VIEWS)[number];
+
+export function isDiagramView(v: unknown): v is DiagramView {
+  return typeof v === 'string' && (DIAGRAM_VIEWS as readonly string[]).includes(v);
+}
 
 export interface DiagramRequest {
   view: DiagramView;
