@@ -107,3 +107,17 @@ function largestEntry(g: readonly (readonly number[])[]): { i: number; j: number
   }));
   return best;
 }
+
+/** One short line for an inlay hint: the centre's defining number, and the winding's power. */
+export function sourceSummary(r: FieldSourceResult): string | undefined {
+  const parts: string[] = [];
+  const gradientFirst = r.pair?.sense === 'opposite' || (r.field_abs_T === 0 && r.axial_gradient_T_per_m !== undefined);
+  if (gradientFirst && r.axial_gradient_T_per_m !== undefined) {
+    parts.push(`∂B/∂axis ${trimNumber(r.axial_gradient_T_per_m * 100, 4)} G/cm`);
+  } else if (r.field_abs_T !== undefined) {
+    const u = fieldVectorUnit(r.field_abs_T, r.field_unit);
+    parts.push(`|B| ${trimNumber(r.field_abs_T / u.factor, 4)} ${u.symbol}${r.kind === 'wire' ? ' midway' : ' at centre'}`);
+  }
+  if (r.winding) parts.push(`${trimNumber(r.winding.power_W, 3)} W, ${trimNumber(r.winding.current_density_A_per_m2 / 1e6, 3)} A/mm²`);
+  return parts.length > 0 ? parts.join(', ') : undefined;
+}
