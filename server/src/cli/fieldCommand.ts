@@ -19,7 +19,8 @@ import { csvNumber } from '../eval/machineText';
 import { trimNumber } from '../eval/quantityText';
 import type { FieldSourceModel, SetupModel } from '../model/types';
 import { sumField } from '../physics/fields';
-import { isFiniteSample, magnitude, magnitudeGradient } from '../physics/fields/magnitude';
+import { magnitude, magnitudeGradient } from '../physics/fields/magnitude';
+import { cleanField } from '../eval/cleanField';
 import type { FieldSample, Vec3 } from '../physics/fields/types';
 
 const FORMATS = ['text', 'json', 'csv'] as const;
@@ -90,10 +91,10 @@ function chooseSources(file: string, model: SetupModel, wanted: string | undefin
 }
 
 export function sampleField(sources: readonly FieldSourceModel[], plan: FieldPointPlan): FieldPointRow[] {
-  const field = sumField(sources.flatMap((s) => s.parts));
+  const field = cleanField(sources.flatMap((s) => s.parts), sumField);
   return plan.points.map((point) => {
     const s = field(point);
-    if (!isFiniteSample(s)) return { point };
+    if (!s) return { point };
     const g = magnitudeGradient(s);
     return { point, sample: s, ...(g ? { magnitudeGradient: g } : {}) };
   });

@@ -9,7 +9,8 @@ import type { Problem, Range } from '../format/ast';
 import { loopWireLength, windingPower, type WindingPower } from '../physics/fields/coilPower';
 import { magnitude } from '../physics/fields/magnitude';
 import { sourceCautions } from '../physics/fields/sourceCautions';
-import type { FieldFunction, FieldSourceSpec, Vec3 } from '../physics/fields/types';
+import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
+import { CANCELLATION_FLOOR, cleanField, type FieldOf } from './cleanField';
 import type { FieldSourcePartResult, FieldSourceResult, WindingResult } from './fieldSourceResultTypes';
 import { EVAL_RULES } from './evalCodes';
 
@@ -34,10 +35,7 @@ export interface SourceEvalInput {
   fieldUnit?: string;
 }
 
-/** Values below this fraction of the parts' own size are rounding left over from exact cancellation. */
-const CANCELLATION_FLOOR = 1e-12;
-
-export function evaluateFieldSource(s: SourceEvalInput, fieldOf: (parts: readonly FieldSourceSpec[]) => FieldFunction, problems: Problem[]): FieldSourceResult {
+export function evaluateFieldSource(s: SourceEvalInput, fieldOf: FieldOf, problems: Problem[]): FieldSourceResult {
   const parts = s.parts.map(partResult);
   const out: FieldSourceResult = { name: s.name, kind: s.kind, parts, cautions: [] };
   if (s.fieldUnit) out.field_unit = s.fieldUnit;
@@ -46,30 +44,20 @@ export function evaluateFieldSource(s: SourceEvalInput, fieldOf: (parts: readonl
     out.pair = { sense: s.sense ?? 'same', spacing_m: s.spacingM, spacing_over_radius: s.spacingM / s.radiusM };
   }
   const centre = probePoint(s.parts);
-  if (centre) {
-    const sample = fieldOf(s.parts)(centre);
-    if (sample.B.every(Number.isFinite) && sample.gradient.every((r) => r.every(Number.isFinite))) {
-      // The size of the numbers that cancel: each part's own field and gradient at the point.
-      let bScale = 0;
-      let gScale = 0;
-      for (const p of s.parts) {
-        const own = fieldOf([p])(centre);
-        bScale += magnitude(own.B);
-        gScale += Math.max(...own.gradient.flat().map(Math.abs).filter(Number.isFinite), 0);
-      }
-      const B = sample.B.map((b) => clean(b, bScale));
-      const G = sample.gradient.map((row) => row.map((g) => clean(g, gScale)));
-      out.centre_m = [...centre];
-      out.field_T = B;
-      out.field_abs_T = clean(magnitude(B as unknown as Vec3), bScale);
-      out.gradient_T_per_m = G;
-      const axial = s.parts[0];
-      if (axial && (axial.kind === 'loop' || axial.kind === 'solenoid')) {
-        const a = axial.axis;
-        let d = 0;
-        for (let i = 0; i < 3; i++) for (let j = 0; j < 3; j++) d += a[i]! * G[i]![j]! * a[j]!;
-        out.axial_gradient_T_per_m = clean(d, gScale);
-      }
+  const sample = centre && cleanField(s.parts, fieldOf)(centre);
+  if (centre && sample) {
+    const G = sample.gradient;
+    out.centre_m = [...centre];
+    out.field_T = [...sample.B];
+    out.field_abs_T = magnitude(sample.B);
+    out.gradient_T_per_m = G.map((r) => [...r]);
+    const axial = s.parts[0];
+    if (axial && (axial.kind === 'loop' || axial.kind === 'solenoid')) {
+      const a = axial.axis;
+      let d = 0;
+      for (let i = 0; i < 3; i++) for (let j = 0; j < 3; j++) d += a[i]! * G[i]![j]! * a[j]!;
+      // The axis is a unit vector with rounding: a zero tensor must stay exactly zero.
+      out.axial_gradient_T_per_m = Math.abs(d) <= CANCELLATION_FLOOR * Math.max(...G.flat().map(Math.abs)) ? 0 : d;
     }
   }
   const w = winding(s);
@@ -85,10 +73,6 @@ export function evaluateFieldSource(s: SourceEvalInput, fieldOf: (parts: readonl
     ...(slab?.kind === 'slab' ? { magnetisationT: magnitude(slab.magnetisationT) } : {}),
   });
   return out;
-}
-
-function clean(x: number, scale: number): number {
-  return Math.abs(x) <= CANCELLATION_FLOOR * scale ? 0 : x;
 }
 
 /** The centre of the block; for a wire with its return, midway between the two; none for a lone wire. */

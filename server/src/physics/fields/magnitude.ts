@@ -18,7 +18,3 @@ export function magnitudeGradient(s: FieldSample): Vec3 | undefined {
   return out.every(Number.isFinite) ? out : undefined;
 }
 
-/** True when B and every gradient entry are finite numbers. */
-export function isFiniteSample(s: FieldSample): boolean {
-  return s.B.every(Number.isFinite) && s.gradient.every((row) => row.every(Number.isFinite));
-}
