@@ -119,6 +119,15 @@ export const PHYSICS_RULES = {
   'beam-nothing-to-resolve': { severity: 'warning', summary: 'Fewer than two peaks: there is nothing to resolve.' },
   'beam-resolved-at-lower-bound': { severity: 'info', summary: 'Already resolved at the lower bound of a resolving search.' },
   'beam-unresolvable-within-bound': { severity: 'warning', summary: 'No value up to the search bound resolves the peaks.' },
+  // Field sources (fields/).
+  'source-invalid-part': { severity: 'error', summary: 'A coil, solenoid, wire or block part with a size, direction or current the field formulas cannot use.' },
+  'source-point-on-loop': { severity: 'warning', summary: 'A field point on the wire of a loop, where a thin loop has no field.' },
+  'source-point-on-winding': { severity: 'warning', summary: 'A field point on the winding of a solenoid, where the field jumps.' },
+  'source-point-on-wire': { severity: 'warning', summary: 'A field point on a straight wire, where a thin wire has no field.' },
+  'source-point-on-block': { severity: 'warning', summary: 'A field point on the surface of a magnetised block, where the field jumps.' },
+  'source-zero-field': { severity: 'info', summary: 'The field vanishes at the point, where |B| has no curvature.' },
+  'source-bad-step': { severity: 'error', summary: 'A difference step for the curvature that is not a positive length.' },
+  'source-bad-sampling': { severity: 'error', summary: 'A field sampling request with too few or too many points.' },
 } as const satisfies Record<string, PhysicsRule>;
 
 export type PhysicsCode = keyof typeof PHYSICS_RULES;
