@@ -35,7 +35,10 @@ export function runFieldMapBench(): { name: string; lines: string[] } {
   const field = sumField(parts);
   const map = () => {
     const clean = cleanField(parts, sumField);
-    const v = fieldMapView(sources.map((s) => ({ name: s.name, kind: s.kind, parts: s.parts })), (p) => clean(p) ?? field(p))!;
+    const v = fieldMapView(sources.map((s) => ({ name: s.name, kind: s.kind, parts: s.parts })), (p) => {
+      const c = clean(p);
+      return 'sample' in c ? c.sample : field(p);
+    })!;
     return renderFieldMap(v, { kind: 'export' });
   };
   const line = fieldPointPlan({ along: '0,0,-12cm:0,0,12cm', points: '401' });

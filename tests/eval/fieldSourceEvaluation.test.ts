@@ -8,6 +8,7 @@ import type { Problem } from '../../server/src/format/ast';
 import { evaluateFieldSource, probePoint, type SourceEvalInput } from '../../server/src/eval/fieldSourceEvaluation';
 import { sourceHeadline, sourceLines } from '../../server/src/eval/fieldSourceText';
 import type { FieldFunction, FieldSourceSpec, Mat3, Vec3 } from '../../server/src/physics/fields/types';
+import { sumField } from '../../server/src/physics/fields';
 
 const MU0 = 1.25663706127e-6; // CODATA 2022 μ0 (N/A²)
 const RANGE = { start: { line: 0, character: 5 }, end: { line: 0, character: 9 } };
@@ -69,6 +70,18 @@ describe('a coil pair at its centre', () => {
     expect(lines[0]).toBe('at the centre (0, 0, 0) mm: |B| = 0 G, B = (0, 0, 0) G');
     // Positive: just above the centre the upper (positive) loop is nearer.
     expect(lines[1]).toMatch(/^axial gradient ∂B_z\/∂z = 1\.18\d+ T\/m = 118\.\d+ G\/cm$/);
+  });
+});
+
+describe('with the physics core\'s exact loops (sumField)', () => {
+  it('Helmholtz pair: the textbook centre field; opposed pair: B = 0 exactly, no gradient of |B| noise', () => {
+    const R = 0.05;
+    const same = evaluateFieldSource(coil({ parts: pair(R, R, 200, 'same'), radiusM: R, spacingM: R, sense: 'same' }), sumField, []);
+    expect(same.field_abs_T! / ((4 / 5) ** 1.5 * MU0 * 200 / R)).toBeCloseTo(1, 12);
+    expect(same.axial_gradient_T_per_m).toBe(0);
+    const opposed = evaluateFieldSource(coil({ parts: pair(R, Math.sqrt(3) * R, 200, 'opposite'), radiusM: R, spacingM: Math.sqrt(3) * R, sense: 'opposite' }), sumField, []);
+    expect(opposed.field_T).toEqual([0, 0, 0]);
+    expect(opposed.axial_gradient_T_per_m! / (((48 * Math.sqrt(3)) / (49 * Math.sqrt(7))) * MU0 * 200 / R ** 2)).toBeCloseTo(1, 12);
   });
 });
 

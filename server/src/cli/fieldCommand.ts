@@ -18,8 +18,7 @@ import { csvTable } from '../render/csv';
 import { csvNumber } from '../eval/machineText';
 import { trimNumber } from '../eval/quantityText';
 import type { FieldSourceModel, SetupModel } from '../model/types';
-import { sumField } from '../physics/fields';
-import { magnitude, magnitudeGradient } from '../physics/fields/magnitude';
+import { magnitudeGradient, sumField } from '../physics/fields';
 import { cleanField } from '../eval/cleanField';
 import type { FieldSample, Vec3 } from '../physics/fields/types';
 
@@ -48,11 +47,12 @@ export const fieldSpec: CommandSpec = {
   ],
 };
 
-/** One sampled point: the sample when it is finite, and ∂|B|/∂x_j when defined. */
+/** One sampled point: the sample (none on a conductor, with the reason), and ∂|B|/∂x_j where defined. */
 export interface FieldPointRow {
   point: Vec3;
   sample?: FieldSample;
   magnitudeGradient?: Vec3;
+  onSource?: string;
 }
 
 export function runField(args: ParsedArgs, ctx: CliContext): number {
@@ -93,10 +93,10 @@ function chooseSources(file: string, model: SetupModel, wanted: string | undefin
 export function sampleField(sources: readonly FieldSourceModel[], plan: FieldPointPlan): FieldPointRow[] {
   const field = cleanField(sources.flatMap((s) => s.parts), sumField);
   return plan.points.map((point) => {
-    const s = field(point);
-    if (!s) return { point };
-    const g = magnitudeGradient(s);
-    return { point, sample: s, ...(g ? { magnitudeGradient: g } : {}) };
+    const c = field(point);
+    if ('onSource' in c) return { point, onSource: c.onSource.message };
+    const g = magnitudeGradient(c.sample);
+    return { point, sample: c.sample, ...(g ? { magnitudeGradient: g } : {}) };
   });
 }
 
@@ -134,7 +134,7 @@ export function fieldText(names: string[], plan: FieldPointPlan, rows: readonly 
   if (plan.kind === 'point') {
     const r = rows[0]!;
     const out = [`${head} at ${pos(r.point)}:`];
-    if (!r.sample) return [...out, '  no value: the point lies on a conductor (a wire or a loop)'];
+    if (!r.sample) return [...out, `  no value: ${lowerFirst(r.onSource ?? 'the point lies on a conductor')}`];
     const s = r.sample;
     out.push(`  B   = (${s.B.map(fieldNum).join(', ')}) ${u.field.name}`);
     out.push(`  |B| = ${fieldNum(magnitude(s.B))} ${u.field.name}`);
@@ -155,6 +155,12 @@ export function fieldText(names: string[], plan: FieldPointPlan, rows: readonly 
   return [`${head} ${what}:`, ...table(header, body)];
 }
 
+function lowerFirst(s: string): string {
+  return s.charAt(0).toLowerCase() + s.slice(1);
+}
+
+const magnitude = (B: Vec3): number => Math.hypot(B[0], B[1], B[2]);
+
 // ---- JSON and CSV (SI) ----
 
 export function fieldJson(file: string, names: string[], plan: FieldPointPlan, rows: readonly FieldPointRow[]) {
@@ -170,7 +176,7 @@ export function fieldJson(file: string, names: string[], plan: FieldPointPlan, r
       B_abs_T: r.sample ? magnitude(r.sample.B) : null,
       gradient_T_per_m: r.sample ? r.sample.gradient : null,
       B_abs_gradient_T_per_m: r.magnitudeGradient ?? null,
-      ...(r.sample ? {} : { note: 'on a conductor: no field value' }),
+      ...(r.sample ? {} : { note: r.onSource ?? 'on a conductor: no field value' }),
     })),
   };
 }

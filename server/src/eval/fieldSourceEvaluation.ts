@@ -7,7 +7,6 @@
  */
 import type { Problem, Range } from '../format/ast';
 import { loopWireLength, windingPower, type WindingPower } from '../physics/fields/coilPower';
-import { magnitude } from '../physics/fields/magnitude';
 import { sourceCautions } from '../physics/fields/sourceCautions';
 import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
 import { CANCELLATION_FLOOR, cleanField, type FieldOf } from './cleanField';
@@ -44,12 +43,13 @@ export function evaluateFieldSource(s: SourceEvalInput, fieldOf: FieldOf, proble
     out.pair = { sense: s.sense ?? 'same', spacing_m: s.spacingM, spacing_over_radius: s.spacingM / s.radiusM };
   }
   const centre = probePoint(s.parts);
-  const sample = centre && cleanField(s.parts, fieldOf)(centre);
+  const probed = centre && cleanField(s.parts, fieldOf)(centre);
+  const sample = probed && 'sample' in probed ? probed.sample : undefined;
   if (centre && sample) {
     const G = sample.gradient;
     out.centre_m = [...centre];
     out.field_T = [...sample.B];
-    out.field_abs_T = magnitude(sample.B);
+    out.field_abs_T = Math.hypot(...sample.B);
     out.gradient_T_per_m = G.map((r) => [...r]);
     const axial = s.parts[0];
     if (axial && (axial.kind === 'loop' || axial.kind === 'solenoid')) {
@@ -70,7 +70,7 @@ export function evaluateFieldSource(s: SourceEvalInput, fieldOf: FieldOf, proble
     kind: s.kind,
     ...(w ? { winding: w } : {}),
     ...(out.field_abs_T !== undefined ? { fieldT: out.field_abs_T } : {}),
-    ...(slab?.kind === 'slab' ? { magnetisationT: magnitude(slab.magnetisationT) } : {}),
+    ...(slab?.kind === 'slab' ? { magnetisationT: Math.hypot(...slab.magnetisationT) } : {}),
   });
   return out;
 }

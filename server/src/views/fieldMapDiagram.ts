@@ -19,7 +19,10 @@ export function fieldMapFor(model: SetupModel, req: DiagramRequest, theme: Rende
   const clean = cleanField(usable.flatMap((s) => s.parts), sumField);
   const v = fieldMapView(
     usable.map((s) => ({ name: s.name, kind: s.kind, parts: s.parts })),
-    (p) => clean(p) ?? ON_A_CONDUCTOR,
+    (p) => {
+      const c = clean(p);
+      return 'sample' in c ? c.sample : ON_A_CONDUCTOR;
+    },
     { ...(req.fieldUnit ? { fieldUnit: req.fieldUnit } : {}), ...(req.fieldScale ? { scale: req.fieldScale } : {}) },
   );
   if (!v) return { ok: false, message: 'The field sources have nothing to draw; see the Problems view.' };
