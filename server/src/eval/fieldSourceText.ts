@@ -70,7 +70,7 @@ export function sourceLines(r: FieldSourceResult): string[] {
   const out: string[] = [];
   if (r.parts.length === 0) return ['not computed: the block has problems to fix (see diagnostics)'];
   if (r.centre_m && r.field_T && r.field_abs_T !== undefined) {
-    const where = r.kind === 'wire' ? 'midway between the wires' : 'at the centre';
+    const where = r.kind === 'wire' ? 'midway between the wires' : r.kind === 'slab' ? 'inside the block, at its centre' : 'at the centre';
     const u = fieldVectorUnit(r.field_abs_T, r.field_unit);
     const num = (t: number): string => trimNumber(t / u.factor, 5);
     out.push(`${where} ${pointText(r.centre_m)}: |B| = ${num(r.field_abs_T)} ${u.symbol}, B = ${vectorText(r.field_T, num, u.symbol)}`);

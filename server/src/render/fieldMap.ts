@@ -103,7 +103,7 @@ export function renderFieldMap(d: FieldMapViewData, theme: RenderTheme): string 
   const legendSvg = legendRows(legend, LEFT, 46, RIGHT - LEFT, pal);
   const top = 46 + legendSvg.height + 8;
   const plot: PlotBox = { left: LEFT, right: RIGHT, top, bottom: top + 230 };
-  const strip: PlotBox = { left: LEFT, right: RIGHT, top: plot.bottom + 28, bottom: plot.bottom + 28 + STRIP_HEIGHT };
+  const strip: PlotBox = { left: LEFT, right: RIGHT, top: plot.bottom + 46, bottom: plot.bottom + 46 + STRIP_HEIGHT };
   const height = strip.bottom + 58;
 
   const x = scaleLinear().domain(sx).range([LEFT, RIGHT]);
@@ -116,8 +116,14 @@ export function renderFieldMap(d: FieldMapViewData, theme: RenderTheme): string 
     ? scaleLog().domain(yDomain).range([plot.bottom, plot.top]).nice()
     : scaleLinear().domain(yDomain[0] === yDomain[1] ? [yDomain[0], yDomain[0] + 1e-4] : yDomain).range([plot.bottom, plot.top]).nice();
   const [lowY, highY] = y.domain() as [number, number];
-  // Values beyond the axis are drawn at its edge (a log axis has no zero; a cut axis has no spike).
-  const yOf = (v: number): number => y(Math.min(highY, Math.max(lowY, v)));
+  // Beyond the axis the curve runs out of the clipped plot (a spike leaves at the top, not as a
+  // plateau); a log axis has no zero, so values under its floor leave at the bottom. The pixel
+  // value is bounded to keep coordinates short.
+  const span = plot.bottom - plot.top;
+  const yOf = (v: number): number => {
+    const p = axis.log && !(v > 0) ? plot.bottom + span : y(v);
+    return Math.min(plot.bottom + span, Math.max(plot.top - span, p));
+  };
 
   const body: string[] = [legendSvg.svg];
   const clipId = `${idBase}-clip`;
@@ -145,7 +151,7 @@ export function renderFieldMap(d: FieldMapViewData, theme: RenderTheme): string 
     );
   }
   if (axis.cut) {
-    body.push(el('text', { class: 'sl-note', x: RIGHT, y: plot.top - 6, 'text-anchor': 'end', 'font-size': 10, fill: pal.muted }, text(`axis cut at ${formatIn(highY, fUnit)}: the field rises steeply next to a conductor`)));
+    body.push(el('text', { class: 'sl-note', x: RIGHT, y: plot.top - 6, 'text-anchor': 'end', 'font-size': 10, fill: pal.muted }, text(`axis cut at ${formatIn(highY, fUnit)}: the field is far stronger next to (or inside) a source`)));
   }
 
   body.push(sideView(d, x, strip, lUnit, pal));
@@ -182,7 +188,8 @@ function sideView(d: FieldMapViewData, x: Scale, box: PlotBox, lUnit: { factor: 
   let reach = 0;
   for (const s of d.sources) for (const sh of s.shapes) for (const t of shapeAcross(sh)) reach = Math.max(reach, Math.abs(t));
   const pxPerM = Math.abs(x(1) - x(0));
-  const half = (box.bottom - box.top) / 2 - 6;
+  // Room above the top mark for its name.
+  const half = (box.bottom - box.top) / 2 - 18;
   // Metres across per pixel: the same as along when everything fits, else squeezed to fit.
   const acrossPerPx = reach > 0 ? Math.max(1 / pxPerM, reach / half) : 1 / pxPerM;
   const mid = (box.top + box.bottom) / 2;
@@ -190,16 +197,33 @@ function sideView(d: FieldMapViewData, x: Scale, box: PlotBox, lUnit: { factor: 
   const parts: string[] = [
     el('rect', { class: 'sl-side-frame', x: box.left, y: box.top, width: box.right - box.left, height: box.bottom - box.top, fill: 'none', stroke: pal.grid }),
     el('path', { class: 'sl-beam-line', d: `M${px(box.left)},${px(mid)}H${px(box.right)}`, stroke: pal.muted, 'stroke-dasharray': '8 3 2 3', fill: 'none' }),
-    el('text', { x: box.left + 4, y: box.top + 12, 'font-size': 10, fill: pal.muted }, text(`side view: ${d.acrossName} across (${acrossPerPx * pxPerM > 1.0001 ? 'squeezed' : 'to scale'}), the line dashed`)),
+    el('text', { class: 'sl-side-caption', x: box.left, y: box.top - 6, 'font-size': 10, fill: pal.muted }, text(`side view: ${d.acrossName} across (${acrossPerPx * pxPerM > 1.0001 ? 'squeezed' : 'to scale'}), the sampled line dashed; ⊙ current towards you, ⊗ away`)),
   ];
   const clipped = (sv: number): number => Math.min(box.right, Math.max(box.left, x(sv)));
   d.sources.forEach((s, i) => {
     const colour = pal.series[(i + 2) % pal.series.length];
     const shapes = s.shapes.map((sh) => shapeSvg(sh, clipped, ty, colour, pal.halo));
-    parts.push(el('g', { class: 'sl-source', 'data-kind': 'source', 'data-label': s.name, 'data-source-kind': s.kind }, [titleEl(`${s.kind} ${s.name}`), ...shapes]));
+    // The name above the source's topmost point, kept inside the strip.
+    const top = s.shapes.map(labelPoint).sort((a, b) => b.t - a.t)[0];
+    const label = top
+      ? el('text', { class: 'sl-source-name', x: clipped(top.s), y: Math.max(box.top + 10, ty(top.t) - 9), 'text-anchor': 'middle', 'font-size': 10, fill: pal.text, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text(s.name))
+      : '';
+    parts.push(el('g', { class: 'sl-source', 'data-kind': 'source', 'data-label': s.name, 'data-source-kind': s.kind }, [titleEl(`${s.kind} ${s.name}`), ...shapes, label]));
   });
   parts.push(leftAxis(scaleLinear().domain([-half * acrossPerPx, half * acrossPerPx]).range([mid + half, mid - half]), lUnit, d.acrossName, { ...box, top: mid - half, bottom: mid + half }, box.left, pal));
   return el('g', { class: 'sl-side-view' }, parts);
+}
+
+/** Where a shape's label goes: its top, centred along the line. */
+function labelPoint(sh: FieldMapShape): { s: number; t: number } {
+  switch (sh.kind) {
+    case 'dot':
+      return { s: sh.s, t: sh.t };
+    case 'ring':
+      return { s: sh.s, t: sh.t + sh.r };
+    default:
+      return { s: (sh.s0 + sh.s1) / 2, t: Math.max(sh.t0, sh.t1) };
+  }
 }
 
 function shapeAcross(sh: FieldMapShape): number[] {
