@@ -110,6 +110,20 @@ describe('the field map figure', () => {
     expect(magnitudeAxis([NaN, NaN])).toBeUndefined();
   });
 
+  it('draws a field spanning six decades on a log axis, zeros leaving at the bottom, no component curve', () => {
+    const positionsM = Array.from({ length: 201 }, (_, k) => -0.1 + k * 0.001);
+    const magnitudeT = positionsM.map((z) => (z === 0 ? 0 : Math.min(1, 1e-9 / Math.abs(z) ** 3)));
+    const svg = renderFieldMap(
+      { title: 'decades', alongName: 'z', acrossName: 'x', lineText: 'along z', positionsM, magnitudeT, componentT: magnitudeT, componentName: 'B_z', fieldUnit: 'T', sources: [] },
+      { kind: 'export' },
+    );
+    expect(svg).not.toMatch(/NaN|Infinity/);
+    const doc = parseSvg(svg);
+    expect(all(doc, (n) => n.attrs['data-y-scale'] === 'log')).toHaveLength(1);
+    expect(byClass(doc, 'sl-component')).toHaveLength(0);
+    expect(svg).toContain('|B|, log scale (T)');
+  });
+
   it('a line with no values at all is an empty figure with words', () => {
     const nothing: FieldFunction = () => ({ B: [NaN, NaN, NaN], gradient: ZERO3 });
     const v = fieldMapView([{ name: 'quad', kind: 'coil', parts: pair }], nothing)!;
