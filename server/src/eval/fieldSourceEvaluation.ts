@@ -12,6 +12,24 @@ import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
 import { CANCELLATION_FLOOR, cleanField, type FieldOf } from './cleanField';
 import type { FieldSourcePartResult, FieldSourceResult, WindingResult } from './fieldSourceResultTypes';
 import { EVAL_RULES } from './evalCodes';
+import type { FieldSourceModel } from '../model/types';
+
+/** The model's source block as the evaluation reads it. */
+export function sourceEvalInput(m: FieldSourceModel, fieldUnit: string | undefined): SourceEvalInput {
+  return {
+    name: m.name,
+    kind: m.kind,
+    nameRange: m.nameRange,
+    parts: m.parts,
+    ...(m.turns ? { turns: m.turns.value } : {}),
+    ...(m.currentA ? { currentA: m.currentA.value } : {}),
+    ...(m.radiusM ? { radiusM: m.radiusM.value } : {}),
+    ...(m.conductorM ? { conductorM: m.conductorM.value, ...(m.conductorM.range ? { conductorRange: m.conductorM.range } : {}) } : {}),
+    ...(m.spacingM ? { spacingM: m.spacingM.value } : {}),
+    ...(m.sense ? { sense: m.sense.value } : {}),
+    ...(fieldUnit ? { fieldUnit } : {}),
+  };
+}
 
 /** What the evaluation needs of a source block (the model's FieldSourceModel, adapted). */
 export interface SourceEvalInput {
@@ -23,8 +41,6 @@ export interface SourceEvalInput {
   turns?: number;
   currentA?: number;
   radiusM?: number;
-  /** A finite wire's length (each of it and its return). */
-  lengthM?: number;
   conductorM?: number;
   conductorRange?: Range;
   /** A coil pair: spacing and sense. */
@@ -92,17 +108,13 @@ export function probePoint(parts: readonly FieldSourceSpec[]): Vec3 | undefined 
   return first.centre;
 }
 
-/** The winding's numbers, when the block gives a conductor and enough to know the wire's length. */
+/** The winding's numbers: coils and solenoids that give a conductor (turns × 2πR per coil). */
 export function winding(s: SourceEvalInput): WindingPower | undefined {
   if (s.conductorM === undefined || s.currentA === undefined) return undefined;
-  let length: number | undefined;
-  if ((s.kind === 'coil' || s.kind === 'solenoid') && s.turns !== undefined && s.radiusM !== undefined) {
-    const coils = s.kind === 'coil' && s.spacingM !== undefined ? 2 : 1;
-    length = coils * loopWireLength(s.turns, s.radiusM);
-  } else if (s.kind === 'wire' && s.lengthM !== undefined) {
-    length = s.parts.length * s.lengthM;
-  }
-  return length === undefined ? undefined : windingPower({ wireLengthM: length, diameterM: s.conductorM, currentA: s.currentA });
+  if (s.kind !== 'coil' && s.kind !== 'solenoid') return undefined;
+  if (s.turns === undefined || s.radiusM === undefined) return undefined;
+  const coils = s.kind === 'coil' && s.spacingM !== undefined ? 2 : 1;
+  return windingPower({ wireLengthM: coils * loopWireLength(s.turns, s.radiusM), diameterM: s.conductorM, currentA: s.currentA });
 }
 
 function windingResult(w: WindingPower, conductorM: number): WindingResult {

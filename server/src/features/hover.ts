@@ -123,7 +123,7 @@ function blockSections(block: BlockNode, ctx: HoverContext): string[] {
 
 /** A `coil`, `solenoid`, `wire` or `slab` block: its entry in the evaluation, by name and kind. */
 function fieldSourceSections(block: BlockNode, ctx: HoverContext): string[] {
-  const r = ctx.analysis.result?.fieldSources?.find((s) => s.name === block.name?.text && s.kind === (block.kind as string));
+  const r = ctx.analysis.result?.fieldSources?.find((s) => s.name === block.name?.text && s.kind === block.kind);
   return r ? [sourceSection(r)] : [];
 }
 
