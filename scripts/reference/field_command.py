@@ -2,7 +2,8 @@
 """Reference field values for `sublevel field` on examples/coils-and-wires.sublevel.
 
 Writes tests/reference/field_command.json: B and the gradient tensor dB_i/dx_j of the file's
-coils (`quad`: two loops of 120 turns, radius 3.5 cm, at z = +-3.5 cm, 15 A in opposite senses;
+coils (`quad`: two loops of 120 turns, radius 3.5 cm, at z = +-3.5 cm, 15 A in opposite senses, the
+loop on the +axis side reversed as the model builds an opposed pair;
 `bias`: 40 turns, radius 6 cm, at z = 9 cm, 2 A) and its wire rail (40 A along +x through
 y = +2 mm and back through y = -2 mm, each 20 cm long, centred on x = 0) at a few points, by
 direct numerical Biot-Savart quadrature (SciPy quad over the conductor), independent of the
@@ -57,7 +58,7 @@ def line(y0, direction):
 
 
 SOURCES = {
-    "quad": [(loop(0.035, 0.035), 0, 2 * np.pi, 120 * 15.0), (loop(-0.035, 0.035), 0, 2 * np.pi, -120 * 15.0)],
+    "quad": [(loop(0.035, 0.035), 0, 2 * np.pi, -120 * 15.0), (loop(-0.035, 0.035), 0, 2 * np.pi, 120 * 15.0)],
     "bias": [(loop(0.09, 0.06), 0, 2 * np.pi, 40 * 2.0)],
     "rail": [(line(0.002, 1.0), -0.1, 0.1, 40.0), (line(-0.002, -1.0), -0.1, 0.1, 40.0)],
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { COPPER_RESISTIVITY_20C, copperResistivity, loopWireLength, windingPower } from '../../server/src/physics/fields/coilPower';
-import { sourceCautions } from '../../server/src/physics/fields/sourceCautions';
+import { sourceCautions } from '../../server/src/eval/fieldSourceCautions';
 import { magnitudeGradient } from '../../server/src/physics/fields';
 
 describe('copper windings', () => {
@@ -58,7 +58,8 @@ describe('cautions of field sources', () => {
   it('a magnetised block pinches and erases; a weak coil without conductor has no caution', () => {
     expect(sourceCautions({ kind: 'slab', magnetisationT: 1.2 })[0]).toMatch(/^Permanent magnet \(μ0·M = 1.2 T\): .*pinch/);
     expect(sourceCautions({ kind: 'coil', fieldT: 1e-4 })).toEqual([]);
-    expect(sourceCautions({ kind: 'solenoid', fieldT: 0.02 })[0]).toMatch(/^Strong field \(0.02 T/);
+    expect(sourceCautions({ kind: 'solenoid', fieldT: 8.4e-4 })[0]).toBe("Field above the 5 G implant limit (8.4 G at the centre): keep pacemakers and other implants away while it is on; follow your lab's rules and ask its safety officer.");
+    expect(sourceCautions({ kind: 'solenoid', fieldT: 0.2 })[0]).toContain('(0.2 T at the centre): keep pacemakers and other implants, steel tools, watches and cards away');
   });
 });
 

@@ -7,7 +7,7 @@
  */
 import type { Problem, Range } from '../format/ast';
 import { loopWireLength, windingPower, type WindingPower } from '../physics/fields/coilPower';
-import { sourceCautions } from '../physics/fields/sourceCautions';
+import { sourceCautions } from './fieldSourceCautions';
 import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
 import { CANCELLATION_FLOOR, cleanField, type FieldOf } from './cleanField';
 import type { FieldSourcePartResult, FieldSourceResult, WindingResult } from './fieldSourceResultTypes';

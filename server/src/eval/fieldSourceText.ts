@@ -77,7 +77,7 @@ export function sourceLines(r: FieldSourceResult): string[] {
   } else if (r.kind === 'wire') {
     out.push('a lone wire has no centre: B = μ0 I / 2π r at distance r (sublevel field gives it at any point)');
   }
-  if (r.axial_gradient_T_per_m !== undefined) {
+  if (r.axial_gradient_T_per_m !== undefined && r.axial_gradient_T_per_m !== 0) {
     const axis = r.parts[0] && 'axis' in r.parts[0] ? axisName(r.parts[0].axis) : 'axis';
     out.push(`axial gradient ∂B_${axis}/∂${axis} = ${gradientPair(r.axial_gradient_T_per_m)}`);
   } else if (r.gradient_T_per_m) {

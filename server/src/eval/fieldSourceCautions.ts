@@ -1,10 +1,14 @@
 /**
- * Short safety reminders shown beside a field source's results: windings that heat up, strong
+ * Short safety reminders shown beside a field source's results (report, JSON, hover): windings that heat up, strong
  * fields near implants, permanent magnets that pinch and erase. They defer to the lab's own
  * rules and its safety officer; they are not a safety assessment.
  */
-import { MAGNET_CAUTION_T } from '../beam/cautions';
-import { AIR_COOLED_LIMIT_A_PER_M2, WATER_COOLED_LIMIT_A_PER_M2, type WindingPower } from './coilPower';
+import { MAGNET_CAUTION_T } from '../physics/beam/cautions';
+import { AIR_COOLED_LIMIT_A_PER_M2, WATER_COOLED_LIMIT_A_PER_M2, type WindingPower } from '../physics/fields/coilPower';
+import { fieldText } from './quantityText';
+
+/** From here up steel tools and loose iron are pulled in (common practice, rough). */
+const TOOLS_CAUTION_T = 0.05;
 
 export interface SourceCautionInput {
   kind: 'coil' | 'solenoid' | 'wire' | 'slab';
@@ -39,7 +43,9 @@ export function sourceCautions(s: SourceCautionInput): string[] {
   if (s.kind === 'slab' && s.magnetisationT !== undefined && s.magnetisationT > 0) {
     out.push(`Permanent magnet (μ0·M = ${trim(s.magnetisationT)} T): magnets pull together and onto steel hard enough to pinch fingers and shatter; keep them away from implants, cards and instruments; ${LAB_RULES}.`);
   } else if (s.fieldT !== undefined && Math.abs(s.fieldT) >= MAGNET_CAUTION_T) {
-    out.push(`Strong field (${trim(Math.abs(s.fieldT))} T at the centre): keep pacemakers and other implants, steel tools, watches and cards away while it is on; ${LAB_RULES}.`);
+    const b = Math.abs(s.fieldT);
+    const away = b >= TOOLS_CAUTION_T ? 'pacemakers and other implants, steel tools, watches and cards' : 'pacemakers and other implants';
+    out.push(`Field above the 5 G implant limit (${fieldText(b, 3)} at the centre): keep ${away} away while it is on; ${LAB_RULES}.`);
   }
   return out;
 }
