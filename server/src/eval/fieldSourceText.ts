@@ -116,7 +116,7 @@ export function sourceSummary(r: FieldSourceResult): string | undefined {
     parts.push(`∂B/∂axis ${trimNumber(r.axial_gradient_T_per_m * 100, 4)} G/cm`);
   } else if (r.field_abs_T !== undefined) {
     const u = fieldVectorUnit(r.field_abs_T, r.field_unit);
-    parts.push(`|B| ${trimNumber(r.field_abs_T / u.factor, 4)} ${u.symbol}${r.kind === 'wire' ? ' midway' : ' at centre'}`);
+    parts.push(`|B| ${trimNumber(r.field_abs_T / u.factor, 4)} ${u.symbol}${r.kind === 'wire' ? ' midway' : r.kind === 'slab' ? ' inside' : ' at centre'}`);
   }
   if (r.winding) parts.push(`${trimNumber(r.winding.power_W, 3)} W, ${trimNumber(r.winding.current_density_A_per_m2 / 1e6, 3)} A/mm²`);
   return parts.length > 0 ? parts.join(', ') : undefined;
