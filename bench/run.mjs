@@ -23,6 +23,7 @@ const BENCHMARKS = [
   { name: 'fit', entry: 'bench/fit.bench.ts', call: 'runFitBench', about: 'field calibration from one resonance; 5-parameter fit of a 4,096-point profile' },
   { name: 'field-sources', entry: 'bench/fieldSources.bench.ts', call: 'runFieldSourcesBench', about: 'B and gradient of a 10-loop assembly at one point, against point dipoles' },
   { name: 'spectrum', entry: 'bench/spectrum.bench.ts', call: 'runSpectrumBench', about: '10,000-point Voigt spectrum with 100 components' },
+  { name: 'field-map', entry: 'bench/fieldMap.bench.ts', call: 'runFieldMapBench', about: 'field-map figure and a 201 × 201 `sublevel field` grid against the summed field alone' },
 ];
 
 const TMP = '.bench-tmp';

@@ -28,7 +28,7 @@ import { SEMANTIC_TOKENS_LEGEND } from './features/semanticTokensLegend';
 import type { LanguageService } from './service/languageService';
 import type { EditorSettings } from './service/settings';
 import { guardedStdio } from './stdioTransport';
-import type { DiagramView } from './views/diagram';
+import { type DiagramView, isDiagramView } from './views/diagram';
 import type { FieldUnit } from './render/viewData';
 
 /** Same value as EVALUATOR_ROLE in service/workerEvaluator.ts (not imported: that would load the service here). */
@@ -355,7 +355,8 @@ function startLanguageServer(): void {
   // The diagram panel (client/src/host/diagramPanel.ts) asks for the SVG and CSV of one view.
   connection.onRequest('sublevel/diagram', (p: { uri?: unknown; view?: unknown; line?: unknown; theme?: unknown; field?: unknown; fromT?: unknown; toT?: unknown; unit?: unknown } | null, token) => {
     const uri = typeof p?.uri === 'string' ? p.uri : '';
-    const view: DiagramView = p?.view === 'pattern' || p?.view === 'lines' || p?.view === 'resonance' ? p.view : 'levels';
+    // Every view the panel has (the residuals and field-map tabs included), else the default.
+    const view: DiagramView = isDiagramView(p?.view) ? p.view : 'levels';
     const finite = (v: unknown): number | undefined => (typeof v === 'number' && Number.isFinite(v) ? v : undefined);
     const choices = {
       ...(typeof p?.field === 'string' ? { fieldName: p.field } : {}),

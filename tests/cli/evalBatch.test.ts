@@ -58,6 +58,7 @@ describe('sublevel eval on many files (in-process, one thread)', () => {
   it('searches a folder as check does, and reads --files-from lists (CRLF and blank lines allowed)', () => {
     const folder = jsonl(cli('eval', 'examples', '--format', 'jsonl').out).map((l) => l.file);
     expect(folder).toEqual([
+      'examples/coils-and-wires.sublevel',
       'examples/fit-rubidium.sublevel',
       'examples/handmade-species.sublevel',
       'examples/lithium-beam.sublevel',

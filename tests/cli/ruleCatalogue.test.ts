@@ -56,3 +56,12 @@ describe('rule catalogue', () => {
     expect(catalogue.get('solver-failed')!.help).toContain('docs/engine.md');
   });
 });
+
+describe('rule catalogue: field sources', () => {
+  it('lists the winding checks with help that points to docs/fields.md', () => {
+    const catalogue = new Map(RULE_CATALOGUE.map((r) => [r.id, r]));
+    expect(catalogue.get('coil-needs-cooling')).toMatchObject({ severity: 'info' });
+    expect(catalogue.get('coil-overheats')).toMatchObject({ severity: 'warning' });
+    expect(catalogue.get('coil-overheats')!.help).toContain('docs/fields.md');
+  });
+});

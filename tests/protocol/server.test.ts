@@ -107,6 +107,14 @@ describe('the built server over JSON-RPC, diagnostics pushed', () => {
     expect(closed.ok).toBe(false);
   });
 
+  it('draws every tab of the panel, not the levels in their place', async () => {
+    // The file has no fit and no field source: each view says so in its own words.
+    const residuals = (await client.connection.sendRequest('sublevel/diagram', { uri: URI, view: 'residuals', theme: 'panel' })) as { ok: boolean; message?: string };
+    expect(residuals).toEqual({ ok: false, message: expect.stringMatching(/^No fit to draw/) });
+    const map = (await client.connection.sendRequest('sublevel/diagram', { uri: URI, view: 'fieldmap', theme: 'panel' })) as { ok: boolean; message?: string };
+    expect(map).toEqual({ ok: false, message: expect.stringMatching(/^No field source to draw/) });
+  });
+
   it('pushes an edit’s diagnostics with no fixed wait: before requests sent just after it are all answered', async () => {
     const other = 'file:///protocol/keystroke.sublevel';
     await open(client, other, TEXT);

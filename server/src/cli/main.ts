@@ -10,6 +10,7 @@ import { checkSpec, runCheck } from './checkCommand';
 import { diffSpec, runDiff } from './diffCommand';
 import { evalSpec, runEval } from './evalCommand';
 import { fitSpec, runFit } from './fitCommand';
+import { fieldSpec, runField } from './fieldCommand';
 import { diagnosticLine, FileProblemError } from './fileProblems';
 import type { CliFileSystem } from './fileSystem';
 import { commandHelp, overviewHelp, usageHint } from './help';
@@ -37,6 +38,7 @@ const COMMANDS: readonly Command[] = [
   { spec: renderSpec, run: runRender },
   { spec: diffSpec, run: runDiff },
   { spec: fitSpec, run: runFit },
+  { spec: fieldSpec, run: runField },
 ];
 
 const SPECS = COMMANDS.map((c) => c.spec);

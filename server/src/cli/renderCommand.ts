@@ -1,9 +1,9 @@
 /**
- * `sublevel render <file> [--view levels|pattern|lines|resonance] [selectors…] [--from B] [--to B] [--unit G|mT|T] [--format svg|csv|png] [--out FILE]`:
+ * `sublevel render <file> [--view levels|pattern|lines|resonance|residuals|fieldmap] [selectors…] [--from B] [--to B] [--unit G|mT|T] [--format svg|csv|png] [--out FILE]`:
  * the same diagrams the editor panel shows, as standalone SVG for reports (light palette), as PNG at print resolution,
  * or the numbers behind them as CSV.
  */
-import { diagramFor, type DiagramRequest, type DiagramView } from '../views/diagram';
+import { DIAGRAM_VIEWS, diagramFor, type DiagramRequest, type DiagramView } from '../views/diagram';
 import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './args';
 import { OUT_OPTION, ROOT_OPTION, rootOption } from './files';
 import { analyzeFile, listErrorsFirst, reportErrors } from './analyzeFile';
@@ -13,9 +13,9 @@ import { writeOutputFile } from './output';
 import { PNG_SCALE, svgToPng } from './pngExport';
 import { readFieldOption } from './fieldOption';
 import type { FieldUnit } from '../render';
-import { selectBeam, selectField, selectLevel, selectName } from './selectors';
+import { selectBeam, selectField, selectLevel, selectName, selectSources } from './selectors';
 
-export const RENDER_VIEWS = ['levels', 'pattern', 'lines', 'resonance', 'residuals'] as const;
+export const RENDER_VIEWS = DIAGRAM_VIEWS;
 const FORMATS = ['svg', 'csv', 'png'] as const;
 const FIELD_UNITS = ['G', 'mT', 'T'] as const;
 
@@ -25,13 +25,15 @@ export const renderSpec: CommandSpec = {
   summary: 'a diagram as SVG (light palette, for reports) or PNG (print resolution), or the numbers behind it as CSV',
   options: {
     ...ROOT_OPTION,
-    view: { value: 'VIEW', choices: RENDER_VIEWS, help: 'levels: sublevel energies against field (default); pattern: detector pattern; lines: line components; resonance: a transition frequency against field; residuals: a fit\'s data, model and residuals' },
+    view: { value: 'VIEW', choices: RENDER_VIEWS, help: 'levels: sublevel energies against field (default); pattern: detector pattern; lines: line components; resonance: a transition frequency against field; residuals: a fit\'s data, model and residuals; fieldmap: |B| along a line through the field sources, the sources drawn beside it' },
     level: { value: 'NAME', help: 'the level to draw (levels view); default: the first beam\'s level, else the first level' },
     field: { value: 'NAME', help: 'the field or magnet to mark; default: the first one' },
     beam: { value: 'NAME', help: 'the beam (pattern view), when the file has more than one' },
     line: { value: 'NAME', help: 'the line (lines view); default: the first one' },
     resonance: { value: 'NAME', help: 'the resonance (resonance view); default: the first one' },
     fit: { value: 'NAME', help: 'the fit (residuals view); default: the first one' },
+    source: { value: 'NAMES', help: 'the field sources to draw (fieldmap view), comma-separated; default: all' },
+    scale: { value: 'SCALE', choices: ['auto', 'linear', 'log'], help: 'the |B| axis of the fieldmap view: log when the field spans orders of magnitude (auto, the default), or as asked' },
     from: { value: 'FIELD', help: 'start of the field axis (levels and resonance views), e.g. 0 or 10G' },
     to: { value: 'FIELD', help: 'end of the field axis, e.g. 50G or 0.1T' },
     unit: { value: 'UNIT', choices: FIELD_UNITS, help: 'unit of the field axis: G, mT or T' },
@@ -77,6 +79,10 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   if (resonance !== undefined) req.resonanceName = resonance;
   const fit = selectName('fit', model.fits.map((f) => f.name), stringOption(args, 'fit'));
   if (fit !== undefined) req.fitName = fit;
+  const sources = stringOption(args, 'source');
+  if (sources !== undefined) req.sourceNames = selectSources(model, sources);
+  const scale = stringOption(args, 'scale', ['auto', 'linear', 'log']);
+  if (scale !== undefined) req.fieldScale = scale as 'auto' | 'linear' | 'log';
   const d = diagramFor(analysis, req);
   if (!d.ok) {
     const listed = listErrorsFirst(file, analysis, ctx);

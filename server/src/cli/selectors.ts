@@ -39,3 +39,8 @@ export function selectField(model: SetupModel, wanted: string | undefined): Work
 export function selectName(kind: 'line' | 'resonance' | 'fit', names: string[], wanted: string | undefined): string | undefined {
   return wanted === undefined ? undefined : pick(kind, names, (n) => [n], wanted);
 }
+
+/** Field sources named on the command line (`--source a,b`), each checked; their names in the order given. */
+export function selectSources(model: SetupModel, wanted: string): string[] {
+  return wanted.split(',').map((n) => pick('source', model.sources, (s) => [s.name], n.trim()).name);
+}

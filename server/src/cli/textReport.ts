@@ -9,6 +9,7 @@ import { fieldInUnit, inWrittenUnit, workingFieldUnit } from '../eval/writtenUni
 import type {
   BeamResult,
   DiagnosticResult,
+  FieldSourceResult,
   EvaluationResult,
   LevelResult,
   LineResult,
@@ -17,6 +18,7 @@ import type {
   TermResult,
 } from '../eval/resultTypes';
 import { table } from './table';
+import { sourceHeadline, sourceLines } from '../eval/fieldSourceText';
 
 export function textReport(file: string, r: EvaluationResult): string[] {
   const out: string[] = [];
@@ -48,6 +50,7 @@ export function textReport(file: string, r: EvaluationResult): string[] {
       ).map((l) => '  ' + l),
     );
   }
+  for (const f of r.fieldSources ?? []) out.push(...fieldSourceReport(f));
   for (const b of r.beams) out.push(...beamReport(b));
   for (const l of r.lines) out.push(...lineReport(l, atFieldText, r.diagnostics));
   for (const x of r.resonances) out.push(...resonanceReport(x, atFieldText));
@@ -190,6 +193,15 @@ function resonanceReport(x: ResonanceResult, atFieldText: AtFieldText): string[]
   if (x.resonances) {
     out.push(x.resonances.length === 0 ? '  not resonant anywhere in the range' : '  resonant at:');
     out.push(...x.resonances.map((r) => `    ${found(r.field_T, r.field_T_unc)}: ${r.transition.lower_label} ↔ ${r.transition.upper_label} (${polarizationSymbol(r.transition.kind)})`));
+  }
+  return out;
+}
+
+function fieldSourceReport(f: FieldSourceResult): string[] {
+  const out = ['', sourceHeadline(f), ...sourceLines(f).map((l) => `  ${l}`)];
+  if (f.cautions.length > 0) {
+    out.push('  cautions:');
+    for (const c of f.cautions) out.push(`    - ${c}`);
   }
   return out;
 }

@@ -2,6 +2,8 @@
 import type { ProblemSeverity } from '../format/ast';
 
 export const EVAL_RULES = {
+  'coil-needs-cooling': { severity: 'info', summary: 'A winding carries more current density than air-cooled windings carry continuously (common practice: about 3 A/mm²).' },
+  'coil-overheats': { severity: 'warning', summary: 'A winding carries more current density than even water-cooled conductors carry continuously (common practice: about 20 A/mm²).' },
   'zeeman-not-linear': { severity: 'info', summary: 'A level is past the linear (weak-field) regime at a working field.' },
   'zeeman-strong-field': { severity: 'info', summary: 'A level is in the strong-field regime; low-field labels mislead.' },
   'diamagnetic-not-included': { severity: 'info', summary: 'A whole term computed without its diamagnetic term where that term would exceed 1e-3 of its smallest splitting.' },

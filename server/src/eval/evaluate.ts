@@ -14,6 +14,8 @@ import { addSpectra } from './spectrumEvaluation';
 import { evaluateResonance } from './resonanceEvaluation';
 import { attachUncertainty } from './uncertainty/attach';
 import { evaluateFit } from './fitEvaluation';
+import { evaluateFieldSource, sourceEvalInput } from './fieldSourceEvaluation';
+import { sumField } from '../physics/fields';
 import { EVAL_RULES } from './evalCodes';
 import { evaluateLevel, type EvaluationNote, type WorkingField } from './levelEvaluation';
 import {
@@ -71,6 +73,10 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   const resonances = model.resonances.map((r) => evaluateResonance(r, fields, model.settings, gJOf, lineProblems));
   const fitProblems: Problem[] = [];
   const fits = model.fits.map((f) => evaluateFit(f, gJOf, fitProblems));
+  const sourceProblems: Problem[] = [];
+  // Sources print fields in the unit family the file writes fields in (the first field or magnet that gives a unit).
+  const fieldUnit = fields.find((f) => f.unit !== undefined)?.unit;
+  const fieldSources = model.sources.map((s) => evaluateFieldSource(sourceEvalInput(s, fieldUnit), sumField, sourceProblems));
   const result: EvaluationResult = {
     format: EVALUATION_FORMAT,
     version: EVALUATION_VERSION,
@@ -103,11 +109,12 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     lines,
     resonances,
     ...(fits.length > 0 ? { fits } : {}),
+    ...(fieldSources.length > 0 ? { fieldSources } : {}),
     diagnostics: [],
   };
   const uncertainty = attachUncertainty(model, result, gJOf);
   if (uncertainty.inputs) result.uncertainty_inputs = uncertainty.inputs;
-  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...uncertainty.problems]);
+  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...sourceProblems, ...uncertainty.problems]);
   result.diagnostics = problems.map(toDiagnosticResult);
   return { result, problems };
 }

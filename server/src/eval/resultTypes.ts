@@ -4,6 +4,7 @@
  * docs/schema/evaluation.schema.json describes it. Bump EVALUATION_VERSION on any breaking change.
  */
 import type { FitResult } from './fitResultTypes';
+import type { FieldSourceResult } from './fieldSourceResultTypes';
 import type { Problem } from '../format/ast';
 
 export const EVALUATION_FORMAT = 'sublevel-evaluation';
@@ -352,6 +353,7 @@ export interface ResonanceResult {
 }
 
 export type { FitResult } from './fitResultTypes';
+export type { FieldSourceResult, FieldSourcePartResult, WindingResult } from './fieldSourceResultTypes';
 
 export interface DiagnosticResult {
   code: string;
@@ -381,6 +383,8 @@ export interface EvaluationResult {
   resonances: ResonanceResult[];
   /** The `fit` blocks' results (docs/fit.md); absent when the file has none. */
   fits?: FitResult[];
+  /** The field sources (`coil`, `solenoid`, `wire`, `slab`; docs/fields.md); absent when the file has none. */
+  fieldSources?: FieldSourceResult[];
   diagnostics: DiagnosticResult[];
   /** The independent uncertain inputs (standard uncertainties `u`, k = 1); absent when there are none. */
   uncertainty_inputs?: { id: string; label: string; value: number; u: number }[];

@@ -19,6 +19,7 @@ import { magnetSection } from './hover/magnetSection';
 import { quantitySection } from './hover/quantitySection';
 import { resonanceSection } from './hover/resonanceSection';
 import { speciesSection } from './hover/speciesSection';
+import { sourceSection } from './hover/sourceSection';
 import { termSection } from './hover/termSection';
 import { useSection } from './hover/useSection';
 import { locate, type Target, useAt } from './shared/locate';
@@ -116,8 +117,14 @@ function blockSections(block: BlockNode, ctx: HoverContext): string[] {
     case 'data':
       return fitSectionsOf(block, ctx);
     default:
-      return [];
+      return fieldSourceSections(block, ctx);
   }
+}
+
+/** A `coil`, `solenoid`, `wire` or `slab` block: its entry in the evaluation, by name and kind. */
+function fieldSourceSections(block: BlockNode, ctx: HoverContext): string[] {
+  const r = ctx.analysis.result?.fieldSources?.find((s) => s.name === block.name?.text && s.kind === block.kind);
+  return r ? [sourceSection(r)] : [];
 }
 
 /** The fit a `fit` block asks for, or the fits that use a `data` block. */

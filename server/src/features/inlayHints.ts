@@ -20,6 +20,7 @@ import { bohrForceN } from './hover/magnetSection';
 import { lastStartingAtOrBefore } from './shared/locate';
 import { beamOfBlock, fieldOfBlock, levelOfNode, lineOfBlock, magnetOfBlock } from './shared/modelLookup';
 import { levelResult, termResult } from './shared/results';
+import { sourceSummary } from '../eval/fieldSourceText';
 
 function hint(position: Position, label: string, tooltip?: string): InlayHint {
   return { position, label, kind: InlayHintKind.Parameter, paddingLeft: true, ...(tooltip ? { tooltip } : {}) };
@@ -116,6 +117,15 @@ function blockHints(analysis: Analysis, model: SetupModel, block: BlockNode, out
         const summary = f.points.some((p) => p.data === name) ? fitSummary(f) : undefined;
         if (summary && block.name) out.push(hint(block.headerRange.end, `${f.name}: ${summary}`, `fit '${f.name}' of this data`));
       }
+      break;
+    }
+    case 'coil':
+    case 'solenoid':
+    case 'wire':
+    case 'slab': {
+      const r = block.name && analysis.result?.fieldSources?.find((x) => x.name === block.name!.text && x.kind === block.kind);
+      const summary = r && sourceSummary(r);
+      if (summary) out.push(hint(block.headerRange.end, summary, 'field source: the field or gradient at its centre, the winding\'s power and current density (hover for more)'));
       break;
     }
     default:

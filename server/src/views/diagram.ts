@@ -14,8 +14,14 @@ import { resonanceView } from './resonanceView';
 import { lineFieldIndex, linesView } from './linesView';
 import { levelsView } from './levelsView';
 import { patternView } from './patternView';
+import { fieldMapFor } from './fieldMapDiagram';
 
-export type DiagramView = 'levels' | 'pattern' | 'lines' | 'resonance' | 'residuals';
+export const DIAGRAM_VIEWS = ['levels', 'pattern', 'lines', 'resonance', 'residuals', 'fieldmap'] as const;
+export type DiagramView = (typeof DIAGRAM_VIEWS)[number];
+
+export function isDiagramView(v: unknown): v is DiagramView {
+  return typeof v === 'string' && (DIAGRAM_VIEWS as readonly string[]).includes(v);
+}
 
 export interface DiagramRequest {
   view: DiagramView;
@@ -37,6 +43,9 @@ export interface DiagramRequest {
   fieldName?: string;
   /** The setup file's name, for the CSV header line. */
   source?: string;
+  /** Field map: only these sources (the CLI's --source), and the |B| axis scale. */
+  sourceNames?: string[];
+  fieldScale?: 'auto' | 'linear' | 'log';
 }
 
 export type DiagramAnswer = { ok: true; title: string; svg: string; csv: string; fields?: string[] } | { ok: false; message: string };
@@ -80,6 +89,7 @@ function drawn(analysis: Analysis, model: SetupModel, req: DiagramRequest): Diag
     const about: [string, string][] = [['file', req.source ?? ''], ['resonance', r.name]];
     return { ok: true, title: v.title, svg: renderResonance(v, theme), csv: resonanceCsv(v, about) };
   }
+  if (req.view === 'fieldmap') return fieldMapFor(model, req, theme);
   if (req.view === 'residuals') {
     const fits = analysis.result?.fits ?? [];
     const f = fits.find((x) => x.name === req.fitName) ?? fits.find((x) => contains(model.fits.find((m) => m.name === x.name)?.node.range ?? NOWHERE, req.line)) ?? fits.find((x) => x.kind !== 'calibration') ?? fits[0];

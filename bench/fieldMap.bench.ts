@@ -1,0 +1,72 @@
+/**
+ * Field sources in use, on examples/coils-and-wires.sublevel (2 coils, a rail, a block: 7 parts):
+ * the field-map figure (401 points along the coils' axis, view + SVG) and `sublevel field` on a
+ * 201 × 201 grid (with the cleaning of exact cancellations, and the text table), each against a
+ * baseline measured in the same run: the summed field alone at the same points. CPU time of this
+ * process, medians of alternated runs. Goal: the figure well inside a keystroke's budget (< 16 ms).
+ */
+import { readFileSync } from 'node:fs';
+import { analyze } from '../server/src/eval/analyze';
+import { cleanField } from '../server/src/eval/cleanField';
+import { sumField } from '../server/src/physics/fields';
+import { fieldPointPlan } from '../server/src/cli/fieldPoints';
+import { fieldText, sampleField } from '../server/src/cli/fieldCommand';
+import { renderFieldMap } from '../server/src/render/fieldMap';
+import { fieldMapView } from '../server/src/views/fieldMapView';
+
+const RUNS = 15;
+
+function cpuMs(f: () => unknown): number {
+  const t0 = process.cpuUsage();
+  f();
+  const d = process.cpuUsage(t0);
+  return (d.user + d.system) / 1000;
+}
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[s.length >> 1]!;
+}
+
+export function runFieldMapBench(): { name: string; lines: string[] } {
+  const model = analyze(readFileSync('examples/coils-and-wires.sublevel', 'utf8')).model!;
+  const sources = model.sources.filter((s) => s.parts.length > 0);
+  const parts = sources.flatMap((s) => s.parts);
+  const field = sumField(parts);
+  const map = () => {
+    const clean = cleanField(parts, sumField);
+    const v = fieldMapView(sources.map((s) => ({ name: s.name, kind: s.kind, parts: s.parts })), (p) => {
+      const c = clean(p);
+      return 'sample' in c ? c.sample : field(p);
+    })!;
+    return renderFieldMap(v, { kind: 'export' });
+  };
+  const line = fieldPointPlan({ along: '0,0,-12cm:0,0,12cm', points: '401' });
+  const grid = fieldPointPlan({ grid: 'x=-2:2cm,z=-2:2cm', points: '201x201' });
+  const raw = (pts: readonly (readonly [number, number, number])[]) => () => {
+    let s = 0;
+    for (const p of pts) s += field(p).B[2];
+    return s;
+  };
+  const times = { mapBase: [] as number[], map: [] as number[], gridBase: [] as number[], grid: [] as number[], gridText: [] as number[] };
+  for (let i = 0; i < RUNS; i++) {
+    times.mapBase.push(cpuMs(raw(line.points)));
+    times.map.push(cpuMs(map));
+    times.gridBase.push(cpuMs(raw(grid.points)));
+    const rows: ReturnType<typeof sampleField>[] = [];
+    times.grid.push(cpuMs(() => rows.push(sampleField(sources, grid))));
+    times.gridText.push(cpuMs(() => fieldText(sources.map((s) => s.name), grid, rows[0]!, undefined)));
+  }
+  const m = Object.fromEntries(Object.entries(times).map(([k, v]) => [k, median(v)])) as Record<keyof typeof times, number>;
+  const row = (what: string, ms: number, base: number): string => `${what.padEnd(46)} ${ms.toFixed(2).padStart(8)} ms  ${(ms / base).toFixed(2)}× the field alone`;
+  return {
+    name: `field sources: ${parts.length} parts of examples/coils-and-wires.sublevel, CPU medians of ${RUNS}`,
+    lines: [
+      row('field alone, 401 points', m.mapBase, m.mapBase),
+      row('field map (clean field, view, SVG), 401 points', m.map, m.mapBase),
+      row('field alone, 201 × 201 grid', m.gridBase, m.gridBase),
+      row('sublevel field --grid 201x201 (sampling)', m.grid, m.gridBase),
+      row('  … its text table', m.gridText, m.gridBase),
+    ],
+  };
+}

@@ -1,0 +1,123 @@
+/**
+ * A field source's result in words, line by line: what it is, its field and gradient at the
+ * centre, its winding. The text report and the hover both print these lines, so a source
+ * reads the same in the terminal and in the editor.
+ */
+import type { FieldSourceResult } from './fieldSourceResultTypes';
+import { gradientText, lengthText, MISSING, trimNumber } from './quantityText';
+import { isGaussUnit } from './writtenUnit';
+
+const AXES = ['x', 'y', 'z'] as const;
+
+/**
+ * One unit for all three components and |B|: the family the file writes fields in (gauss or
+ * tesla), else the lab habit (gauss below 0.1 T), with the prefix that suits |B|.
+ */
+export function fieldVectorUnit(absT: number, written: string | undefined): { factor: number; symbol: string } {
+  const gauss = written !== undefined ? isGaussUnit(written) : absT < 0.1;
+  if (gauss) return absT !== 0 && absT < 1e-4 ? { factor: 1e-7, symbol: 'mG' } : { factor: 1e-4, symbol: 'G' };
+  if (absT === 0 || absT >= 1) return { factor: 1, symbol: 'T' };
+  return absT >= 1e-3 ? { factor: 1e-3, symbol: 'mT' } : { factor: 1e-6, symbol: 'µT' };
+}
+
+/** A gradient in T/m and in the lab's G/cm. */
+export function gradientPair(tPerM: number): string {
+  if (!Number.isFinite(tPerM)) return MISSING;
+  if (tPerM === 0) return '0 T/m';
+  return `${gradientText(tPerM, 5)} = ${trimNumber(tPerM * 100, 5)} G/cm`;
+}
+
+function vectorText(v: readonly number[], each: (x: number) => string, unit: string): string {
+  return `(${v.map((x) => each(x)).join(', ')}) ${unit}`;
+}
+
+/** The common length unit of a point's coordinates. */
+function pointText(p: readonly number[]): string {
+  const max = Math.max(...p.map(Math.abs));
+  const [factor, unit] = max === 0 || max < 0.1 ? [1e-3, 'mm'] : max < 10 ? [1e-2, 'cm'] : [1, 'm'];
+  return vectorText(p, (x) => trimNumber(x / factor, 5), unit);
+}
+
+export function sourceHeadline(r: FieldSourceResult): string {
+  const loops = r.parts.filter((p) => p.kind === 'loop').length;
+  switch (r.kind) {
+    case 'coil': {
+      if (r.pair) {
+        const ratio = r.pair.spacing_over_radius;
+        const named = Math.abs(ratio - 1) < 0.005 ? (r.pair.sense === 'same' ? ' (Helmholtz spacing)' : ' (spacing = radius)') : r.pair.sense === 'opposite' && Math.abs(ratio - Math.sqrt(3)) < 0.005 ? ' (√3 R: the most uniform gradient)' : '';
+        const sense = r.pair.sense === 'opposite' ? 'a pair wound in opposite senses (anti-Helmholtz type)' : 'a pair wound in the same sense';
+        return `coil ${r.name}: ${sense}, spacing ${lengthText(r.pair.spacing_m)} = ${trimNumber(ratio, 4)} R${named}`;
+      }
+      return `coil ${r.name}: ${loops === 1 ? 'one loop' : `${loops} loops`}`;
+    }
+    case 'solenoid':
+      return `solenoid ${r.name}`;
+    case 'wire': {
+      const n = r.parts.length;
+      return `wire ${r.name}: ${n === 2 ? 'with a return wire (the two-wire field)' : 'one straight wire'}`;
+    }
+    case 'slab': {
+      const s = r.parts[0];
+      if (s?.kind !== 'slab') return `slab ${r.name}`;
+      const m = Math.hypot(...s.magnetisation_T);
+      return `slab ${r.name}: ${s.size_m.map((x) => trimNumber(x * 1e3, 4)).join(' × ')} mm, μ0·M = ${trimNumber(m, 4)} T`;
+    }
+  }
+}
+
+/** The lines after the headline (no cautions: callers show those their own way). */
+export function sourceLines(r: FieldSourceResult): string[] {
+  const out: string[] = [];
+  if (r.parts.length === 0) return ['not computed: the block has problems to fix (see diagnostics)'];
+  if (r.centre_m && r.field_T && r.field_abs_T !== undefined) {
+    const where = r.kind === 'wire' ? 'midway between the wires' : r.kind === 'slab' ? 'inside the block, at its centre' : 'at the centre';
+    const u = fieldVectorUnit(r.field_abs_T, r.field_unit);
+    const num = (t: number): string => trimNumber(t / u.factor, 5);
+    out.push(`${where} ${pointText(r.centre_m)}: |B| = ${num(r.field_abs_T)} ${u.symbol}, B = ${vectorText(r.field_T, num, u.symbol)}`);
+  } else if (r.kind === 'wire') {
+    out.push('a lone wire has no centre: B = μ0 I / 2π r at distance r (sublevel field gives it at any point)');
+  }
+  if (r.axial_gradient_T_per_m !== undefined && r.axial_gradient_T_per_m !== 0) {
+    const axis = r.parts[0] && 'axis' in r.parts[0] ? axisName(r.parts[0].axis) : 'axis';
+    out.push(`axial gradient ∂B_${axis}/∂${axis} = ${gradientPair(r.axial_gradient_T_per_m)}`);
+  } else if (r.gradient_T_per_m) {
+    const largest = largestEntry(r.gradient_T_per_m);
+    if (largest) out.push(`largest gradient ∂B_${AXES[largest.i]}/∂${AXES[largest.j]} = ${gradientPair(largest.value)}`);
+  }
+  const w = r.winding;
+  if (w) {
+    const cooling = w.cooling === 'air' ? 'air cooling can do' : w.cooling === 'water' ? 'needs water cooling' : 'beyond continuous operation';
+    out.push(
+      `winding: ${lengthText(w.wire_length_m)} of ${lengthText(w.conductor_m)} copper, ${trimNumber(w.resistance_ohm, 4)} Ω at ${trimNumber(w.temperature_C, 3)} °C; ` +
+        `${trimNumber(w.current_density_A_per_m2 / 1e6, 4)} A/mm², ${trimNumber(w.power_W, 4)} W, ${trimNumber(w.voltage_V, 4)} V (${cooling})`,
+    );
+  }
+  return out;
+}
+
+function axisName(a: readonly number[]): string {
+  const k = a.findIndex((x) => Math.abs(Math.abs(x) - 1) < 1e-12);
+  return k >= 0 ? AXES[k]! : 'axis';
+}
+
+function largestEntry(g: readonly (readonly number[])[]): { i: number; j: number; value: number } | undefined {
+  let best: { i: number; j: number; value: number } | undefined;
+  g.forEach((row, i) => row.forEach((value, j) => {
+    if (Number.isFinite(value) && value !== 0 && (!best || Math.abs(value) > Math.abs(best.value))) best = { i, j, value };
+  }));
+  return best;
+}
+
+/** One short line for an inlay hint: the centre's defining number, and the winding's power. */
+export function sourceSummary(r: FieldSourceResult): string | undefined {
+  const parts: string[] = [];
+  const gradientFirst = r.pair?.sense === 'opposite' || (r.field_abs_T === 0 && r.axial_gradient_T_per_m !== undefined);
+  if (gradientFirst && r.axial_gradient_T_per_m !== undefined) {
+    parts.push(`∂B/∂axis ${trimNumber(r.axial_gradient_T_per_m * 100, 4)} G/cm`);
+  } else if (r.field_abs_T !== undefined) {
+    const u = fieldVectorUnit(r.field_abs_T, r.field_unit);
+    parts.push(`|B| ${trimNumber(r.field_abs_T / u.factor, 4)} ${u.symbol}${r.kind === 'wire' ? ' midway' : r.kind === 'slab' ? ' inside' : ' at centre'}`);
+  }
+  if (r.winding) parts.push(`${trimNumber(r.winding.power_W, 3)} W, ${trimNumber(r.winding.current_density_A_per_m2 / 1e6, 3)} A/mm²`);
+  return parts.length > 0 ? parts.join(', ') : undefined;
+}

@@ -1,0 +1,111 @@
+/**
+ * `sublevel field` on examples/coils-and-wires.sublevel: values against direct Biot–Savart
+ * quadrature (tests/reference/field_command.json, from scripts/reference/field_command.py with
+ * SciPy), the three output formats, and the usage errors.
+ */
+import { readFileSync } from 'fs';
+import { describe, expect, it } from 'vitest';
+import { cli } from './runCli';
+
+const FILE = 'examples/coils-and-wires.sublevel';
+const reference = JSON.parse(readFileSync('tests/reference/field_command.json', 'utf8')) as {
+  cases: { sources: string[]; point_m: number[]; B_T: number[]; gradient_T_per_m: number[][] }[];
+};
+
+function json(...args: string[]) {
+  const r = cli('field', FILE, ...args, '--format', 'json');
+  expect(r.err).toBe('');
+  expect(r.code).toBe(0);
+  return JSON.parse(r.out);
+}
+
+describe('sublevel field: values', () => {
+  it.each(reference.cases.map((c) => [c.sources.join('+'), c.point_m.join(','), c] as const))('%s at (%s) m agrees with Biot–Savart quadrature to 1e-9', (_s, _p, c) => {
+    const doc = json('--source', c.sources.join(','), '--at', `${c.point_m.join(',')} m`);
+    const p = doc.points[0];
+    const bScale = Math.hypot(...c.B_T);
+    const gScale = Math.max(...c.gradient_T_per_m.flat().map(Math.abs));
+    p.B_T.forEach((b: number, i: number) => expect(Math.abs(b - c.B_T[i]!)).toBeLessThanOrEqual(1e-9 * bScale));
+    p.gradient_T_per_m.flat().forEach((g: number, k: number) => expect(Math.abs(g - c.gradient_T_per_m.flat()[k]!)).toBeLessThanOrEqual(1e-9 * gScale));
+    expect(p.B_abs_T).toBeCloseTo(bScale, 15);
+  });
+
+  it('cleans exact cancellations: the quadrupole centre is 0, not 1e-20', () => {
+    const p = json('--source', 'quad', '--at', '0,0,0').points[0];
+    expect(p.B_T).toEqual([0, 0, 0]);
+    expect(p.B_abs_T).toBe(0);
+    // |B| has a cone at a field zero: no gradient of |B| there.
+    expect(p.B_abs_gradient_T_per_m).toBeNull();
+  });
+
+  it('has no value on a wire and says so in every format', () => {
+    // The rail's wire runs along x through y = 2 mm: the bare sum would leave it out there, which would mislead.
+    const p = json('--source', 'rail', '--at', '1cm,2mm,0').points[0];
+    expect(p).toMatchObject({ B_T: null, B_abs_T: null, gradient_T_per_m: null, B_abs_gradient_T_per_m: null });
+    expect(p.note).toMatch(/^The point lies on a wire/);
+    expect(cli('field', FILE, '--source', 'rail', '--at', '1cm,2mm,0').out).toMatch(/\n {2}no value: the point lies on a wire/);
+    const csv = cli('field', FILE, '--source', 'rail', '--at', '1cm,2mm,0', '--format', 'csv').out.split('\n');
+    expect(csv[2]).toBe('0.01,0.002,0' + ','.repeat(16));
+  });
+});
+
+describe('sublevel field: formats', () => {
+  it('prints one point with B, |B|, the gradient tensor and ∇|B| in the unit asked for', () => {
+    const r = cli('field', FILE, '--source', 'quad', '--at', '0,0,1cm', '--unit', 'G');
+    expect(r.code).toBe(0);
+    const lines = r.out.split('\n');
+    expect(lines[0]).toBe('field of quad at (0, 0, 10) mm:');
+    // The model reverses the loop on the +z side of an opposed pair: B_z < 0 above the centre.
+    expect(lines[1]).toMatch(/^ {2}B {3}= \(0, 0, -99\.33\d*\) G$/);
+    expect(lines[2]).toMatch(/^ {2}\|B\| = 99\.33\d* G$/);
+    expect(lines[3]).toBe('  gradient ∂B_i/∂x_j (G/cm):');
+    expect(r.out).toMatch(/B_z +0 +0 +-101\.64\d*/);
+    expect(r.out).toMatch(/∇\|B\| = \(0, 0, 101\.64\d*\) G\/cm/);
+  });
+
+  it('tabulates a line in text, and writes CSV with SI column names', () => {
+    const text = cli('field', FILE, '--source', 'quad', '--along', '0,0,-1cm:0,0,1cm', '--points', '3').out.split('\n');
+    expect(text[0]).toBe('field of quad along (0, 0, -10) mm → (0, 0, 10) mm, 3 points:');
+    expect(text).toHaveLength(1 + 2 + 3);
+    const csv = cli('field', FILE, '--along', '0,0,-1cm:0,0,1cm', '--points', '3', '--format', 'csv').out.split('\n');
+    expect(csv[0]).toBe(`# sublevel field: file=${FILE}; sources=quad + bias + rail + pole`);
+    expect(csv[1]).toBe(
+      'x_m,y_m,z_m,Bx_T,By_T,Bz_T,B_abs_T,dBx_dx_T_per_m,dBx_dy_T_per_m,dBx_dz_T_per_m,dBy_dx_T_per_m,dBy_dy_T_per_m,dBy_dz_T_per_m,dBz_dx_T_per_m,dBz_dy_T_per_m,dBz_dz_T_per_m,dB_abs_dx_T_per_m,dB_abs_dy_T_per_m,dB_abs_dz_T_per_m',
+    );
+    expect(csv).toHaveLength(5);
+    expect(csv[4]!.split(',').slice(0, 3)).toEqual(['0', '0', '0.01']);
+  });
+
+  it('samples a grid, first axis fastest', () => {
+    const doc = json('--source', 'rail', '--grid', 'y=-1:1mm,z=-1:1mm', '--points', '3x2');
+    expect(doc.sampling).toEqual({ kind: 'grid', axes: ['y', 'z'], points: [3, 2] });
+    expect(doc.points.map((p: { position_m: number[] }) => p.position_m)).toEqual([
+      [0, -0.001, -0.001], [0, 0, -0.001], [0, 0.001, -0.001],
+      [0, -0.001, 0.001], [0, 0, 0.001], [0, 0.001, 0.001],
+    ]);
+  });
+});
+
+describe('sublevel field: mistakes', () => {
+  it.each([
+    [['--at', '0,0,1'], /'1' needs a length unit/],
+    [['--source', 'qaud', '--at', '0,0,0'], /no source named 'qaud' — did you mean 'quad'\?/],
+    [['--along', '0,0,0:0,0,1cm', '--grid', 'x=0:1cm,y=0:1cm'], /one of --along or --grid/],
+    [[], /say where/],
+  ])('%j is a usage error (exit 2)', (args, message) => {
+    const r = cli('field', FILE, ...args);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(message);
+  });
+
+  it('a file without sources: exit 1 with words', () => {
+    const r = cli('field', 'examples/rubidium-bias.sublevel', '--at', '0,0,0');
+    expect(r.code).toBe(1);
+    expect(r.err).toContain('the file has no field source');
+  });
+
+  it('is listed in the help', () => {
+    expect(cli('--help').out).toMatch(/\n {2}field +the summed field/);
+    expect(cli('field', '--help').out).toContain('--grid RANGES');
+  });
+});
