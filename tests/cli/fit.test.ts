@@ -15,6 +15,13 @@ describe('sublevel fit', () => {
     expect(r.out).not.toMatch(/NaN|Infinity/);
   });
 
+  it('text: the residual table echoes the measured values in the unit the file wrote them (kHz), as written', () => {
+    const r = cli('fit', FILE);
+    expect(r.out).toMatch(/pi_lines line 23 +6834696\.976 kHz +-165\.6 Hz/);
+    expect(r.out).toMatch(/sigma_lines line 35 +9651311\.13 kHz/);
+    expect(r.out).not.toMatch(/line \d+ +[\d.]+ GHz/);
+  });
+
   it('json: the sublevel-fit document, version 1', () => {
     const doc = JSON.parse(cli('fit', FILE, '--format', 'json').out);
     expect(doc.format).toBe('sublevel-fit');

@@ -57,6 +57,19 @@ describe('sublevel render options', () => {
     expect(Number(csv[2]!.split(',')[1])).toBeCloseTo(6834682610.904, 2);
   });
 
+  it('writes df/dB in the unit the reports use (Hz/G with a prefix), and places it on that axis', () => {
+    const svg = cli('render', RB, '--view', 'resonance', '--resonance', 'clock').out;
+    const report = cli('eval', RB).out;
+    expect(report).toMatch(/Hz\/G/);
+    expect(svg).toContain('df/dB (kHz/G)');
+    expect(svg).not.toMatch(/Hz\/T/);
+    // At zero field the pair's slope is about −3 kHz/G (the text report's df/dB at 0 G): the CSV's first slope, per gauss.
+    const csv = cli('render', RB, '--view', 'resonance', '--format', 'csv').out.split('\n');
+    const slopePerG = Number(csv[2]!.split(',')[2]) * 1e-4;
+    expect(slopePerG).toBeLessThan(-2000);
+    expect(slopePerG).toBeGreaterThan(-4000);
+  });
+
   it.skipIf(!existsSync('/usr/bin/chromium'))('writes PNG at three pixels per SVG unit', () => {
     const dir = mkdtempSync(path.join(os.tmpdir(), 'sublevel-png-test-'));
     try {

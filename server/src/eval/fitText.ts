@@ -40,9 +40,9 @@ export function parameterText(p: FitParameterResult): string {
   return fittedText(p.value, p.uncertainty, p.unit, p.written_unit);
 }
 
-/** A measured value, a model value or a residual in the data's unit (Hz with a prefix, or counts). */
-export function measuredText(value: number | null | undefined, unit: string, digits = 10): string {
-  return unit === 'Hz' ? frequencyText(value, digits) : trimNumber(value, digits);
+/** A measured value in the unit the data were written in (`written`, e.g. kHz), else Hz with a prefix; counts as numbers. */
+export function measuredText(value: number | null | undefined, unit: string, written?: string, digits = 10): string {
+  return unit === 'Hz' ? fittedText(value, undefined, 'Hz', written, digits) : trimNumber(value, digits);
 }
 
 /** A residual, with the noise floor of the measured values it is the difference of. */

@@ -17,6 +17,9 @@ import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
 import { engineeringUnit, fieldDisplayUnit, formatIn, formatSI } from './units';
 import type { RenderTheme, ResonanceViewData } from './viewData';
 
+/** 1 G = 1e-4 T: a slope in Hz/T times this is in Hz/G. */
+const HZ_PER_T_TO_PER_G = 1e-4;
+
 const WIDTH = 760;
 const LEFT = 84;
 const RIGHT = WIDTH - 20;
@@ -37,7 +40,9 @@ export function renderResonance(d: ResonanceViewData, theme: RenderTheme): strin
   const offsets = Array.from(d.frequencyHz, (f) => f - ref.hz);
   const oExt = finiteExtent(offsets)!;
   const oUnit = engineeringUnit(Math.max(Math.abs(oExt[0]), Math.abs(oExt[1])), 'Hz');
-  const sUnit = engineeringUnit(Math.max(Math.abs(fs[0]), Math.abs(fs[1])), 'Hz/T');
+  // df/dB per gauss, as every report writes it (sensitivityText): the figure and the numbers agree.
+  const perGauss = engineeringUnit(Math.max(Math.abs(fs[0]), Math.abs(fs[1])) * HZ_PER_T_TO_PER_G, 'Hz/G');
+  const sUnit = { factor: perGauss.factor / HZ_PER_T_TO_PER_G, symbol: perGauss.symbol };
 
   const legend: LegendEntry[] = [{ label: d.pairLabel, colour: pal.series[0], line: { width: 2 } }];
   if (d.insensitive.some((p) => inRange(p.fieldT))) legend.push({ label: 'df/dB = 0', colour: pal.text, marker: 'diamond' });
@@ -99,7 +104,7 @@ export function renderResonance(d: ResonanceViewData, theme: RenderTheme): strin
   const point = (kind: string, fieldT: number, f: number, shape: 'diamond' | 'circle', colour: string, what: string): string => {
     const slope = valueAt(d.fieldsT, d.slopeHzPerT, fieldT);
     return el('g', { class: `sl-${kind}`, 'data-kind': kind, 'data-field-t': dataNum(fieldT), 'data-frequency-hz': dataNum(f), tabindex: '0' }, [
-      titleEl(`${what} at B = ${formatIn(fieldT, fUnit)}: f = ${formatSI(f, 'Hz')}${Number.isFinite(slope) ? `, df/dB = ${formatSI(slope, 'Hz/T')}` : ''}`),
+      titleEl(`${what} at B = ${formatIn(fieldT, fUnit)}: f = ${formatSI(f, 'Hz')}${Number.isFinite(slope) ? `, df/dB = ${formatSI(slope * HZ_PER_T_TO_PER_G, 'Hz/G')}` : ''}`),
       el('path', { d: markerPath(shape, x(fieldT), yf(f - ref.hz), 5), fill: colour, stroke: pal.halo, 'stroke-width': 1 }),
     ]);
   };
