@@ -40,12 +40,17 @@ export function runWholeTermBench(): { name: string; lines: string[] } {
     { name: '5P whole term + diamagnetic (per field)', states: 24, run: () => sweepLevel(WITH_DIAMAGNETIC, 0, 1, POINTS, { crossings: false }) },
   ];
   const times = cases.map(() => [] as number[]);
+  // CPU time of this process too: on a loaded machine a longer run is more often descheduled, which wall time counts.
+  const cpu = cases.map(() => [] as number[]);
   for (let i = 0; i < 5; i++) for (const c of cases) c.run();
   for (let r = 0; r < RUNS; r++) {
     cases.forEach((c, k) => {
+      const c0 = process.cpuUsage();
       const t0 = process.hrtime.bigint();
       c.run();
       times[k].push(Number(process.hrtime.bigint() - t0) / 1e6);
+      const used = process.cpuUsage(c0);
+      cpu[k].push((used.user + used.system) / 1e3);
     });
   }
   // Ratio of the two runs of the same round (one after the other, so under the same load): its median and
@@ -57,6 +62,8 @@ export function runWholeTermBench(): { name: string; lines: string[] } {
   const lines = cases.map((c, k) => `${c.name}: ${median(times[k]).toFixed(2)} ms median (best ${Math.min(...times[k]).toFixed(2)}), ${(perState[k] * 1000).toFixed(0)} µs per state`);
   lines.push(`whole term per state / 5P3/2 per state: ${(perState[0] / perState[1]).toFixed(2)} median, ${(best[0] / best[1]).toFixed(2)} best (goal ≤ 2)`);
   lines.push(`  same, round by round: ${median(paired).toFixed(2)} median, quartiles ${quartile(0.25).toFixed(2)}–${quartile(0.75).toFixed(2)}, load average ${loadavg()[0].toFixed(1)}`);
+  const cpuPerState = cases.map((c, k) => median(cpu[k]) / c.states);
+  lines.push(`  CPU time: ${median(cpu[0]).toFixed(2)} ms vs ${median(cpu[1]).toFixed(2)} ms median, per state ${(cpuPerState[0] / cpuPerState[1]).toFixed(2)}`);
   lines.push(`whole term per state / 5P1/2 per state: ${(perState[0] / perState[2]).toFixed(2)} median`);
   lines.push(`with the diamagnetic term / without: ${(perState[3] / perState[0]).toFixed(2)} median`);
   return { name: `whole-term sweep, ${POINTS} points 0–1 T`, lines };

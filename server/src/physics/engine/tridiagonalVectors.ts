@@ -11,7 +11,7 @@
  * - neighbours closer than CLUSTER·‖T‖ form a cluster whose vectors are orthogonalised against
  *   each other (modified Gram–Schmidt) before every solve and once more at the end;
  * - a vector has converged when its growth shows a residual below RESIDUAL·ε‖T‖√n (plus
- *   twice the pull) ; EXTRA more iterations follow, as in dstein;
+ *   twice the pull); EXTRA more iterations follow, as in dstein;
  * - T splits where an off-diagonal element is below ε of its neighbours; each block is solved
  *   on its own (exactly degenerate eigenvalues of different blocks need no orthogonalising).
  */
@@ -115,7 +115,8 @@ function orthogonalise(x: Float64Array, z: Float64Array, rows: Int32Array, strid
 
 /**
  * Eigenvectors of one unreduced block of T (d, e of order n) for its ascending eigenvalues
- * `values`: row k of the block's vectors is z[rowAt(k) + offset …]. Returns false if a vector did not converge.
+ * `values`: the k-th vector goes to z[rows[k]·stride + offset …] (zero elsewhere in that row).
+ * Returns false if a vector did not converge.
  */
 function blockEigenvectors(
   d: Float64Array,
@@ -171,7 +172,7 @@ function blockEigenvectors(
 
 /**
  * Eigenvectors of T (order n): T is split where an off-diagonal element is below ε of its
- * neighbours (set to zero there, as the QR deflation does), each block gets its own eigenvalues
+ * neighbours (treated as zero there, as the QR deflation does), each block gets its own eigenvalues
  * (implicit QR) and vectors, and row k of `z` (n × n, row-major) receives the vector of the
  * k-th smallest eigenvalue, which goes to values[k]. Returns false on no convergence.
  */
