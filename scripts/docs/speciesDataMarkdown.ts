@@ -54,7 +54,9 @@ function sourceLines(s: BuiltinSpecies): string[] {
   for (const [label, v] of items) {
     if (!v || v.source.startsWith('definition:')) continue;
     groups.set(v.source, [...(groups.get(v.source) ?? []), label]);
-    if (v.uncertaintySource !== undefined) uncertainties.set(v.uncertaintySource, [...(uncertainties.get(v.uncertaintySource) ?? []), label]);
+    // The energy's citation is the published form's; its uncertainty sits on the Hz value.
+    const from = label.endsWith(' energy') ? s.levels.find((l) => `${l.key} energy` === label)?.energyHz?.uncertaintySource : (v as Sourced<unknown>).uncertaintySource;
+    if (from !== undefined) uncertainties.set(from, [...(uncertainties.get(from) ?? []), label]);
   }
   return [
     ...[...groups].map(([source, labels]) => `- ${labels.join(', ')}: ${source}`),

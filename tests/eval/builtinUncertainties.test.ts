@@ -15,6 +15,8 @@
  *  - Rubidium 87 / Cesium D line data compilations: g_J(5²S1/2) = 2.002 331 13(20),
  *    g_J(5²P3/2) = 1.3362(13), g_I(87Rb) = −0.000 995 141 4(10); g_J(6²S1/2) = 2.002 540 32(20),
  *    g_J(6²P1/2) = 0.665 90(9), g_I(133Cs) = −0.000 398 853 95(52) (from memory).
+ *  - D-line frequencies of the same compilations: 87Rb D2 384.230 484 468 5(62) THz, D1
+ *    377.107 463 380(11) THz; 133Cs D2 351.725 718 50(11) THz; 39K D1 389.286 058 716(62) THz (from memory).
  */
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
@@ -99,4 +101,23 @@ describe('built-in g_J and g_I carry their uncertainties into sublevel energies'
     const cs = levels('species Cs133\n  level p: 6p 2P°1/2\n').r;
     expect(cs.uncertainty_inputs!.find((i) => i.id === 'level:Cs133.p.g_J')!.u).toBeCloseTo(9e-5, 12);
   });
+});
+
+describe('built-in D-line frequencies carry their uncertainties into line centres and absolute frequencies', () => {
+  const cases: [string, string, string, number][] = [
+    ['Rb87', '5s 2S1/2', '5p 2P°3/2', 6.2e3],
+    ['Rb87', '5s 2S1/2', '5p 2P°1/2', 11e3],
+    ['Cs133', '6s 2S1/2', '6p 2P°3/2', 110e3],
+    ['K39', '4s 2S1/2', '4p 2P°1/2', 62e3],
+  ];
+  for (const [species, lower, upper, u] of cases) {
+    it(`${species} ${upper}: u(centre) = u(E_upper) (the ground level is the zero of the scale), and every absolute frequency at least that`, () => {
+      const r = analyze(`species ${species}\n  level g: ${lower}\n  level p: ${upper}\nfield f = 1 G\nline L: g -> p\n`).result!;
+      const line = r.lines[0]!;
+      expect(line.line_centre_Hz_unc).toBeCloseTo(u, 3);
+      for (const c of line.at_fields[0]!.components) {
+        expect(c.absolute_Hz_unc! / Math.hypot(u, c.offset_Hz_unc ?? 0)).toBeCloseTo(1, 9);
+      }
+    });
+  }
 });

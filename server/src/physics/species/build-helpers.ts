@@ -33,15 +33,22 @@ export function ns(value: number, source: string): Sourced<number> {
   return sourced(value * 1e-9, source);
 }
 
-/** Energy fields of a level from a published frequency or wavenumber. */
+/** Energy fields of a level from a published frequency or wavenumber (and its uncertainty, in the same unit). */
 export function energy(
   value: number,
   unit: PublishedEnergyUnit,
   source: string,
+  uncertainty?: number,
+  uncertaintySource?: string,
 ): { energyHz: Sourced<number>; energyPublished: PublishedEnergy } {
   return {
     // A recalled value stays just "from memory"; the exact unit conversion adds nothing to cite.
-    energyHz: sourced(publishedEnergyToHz(value, unit), source === FROM_MEMORY ? FROM_MEMORY : `${source} [${value} ${unit}, converted to Hz]`),
+    energyHz: sourced(
+      publishedEnergyToHz(value, unit),
+      source === FROM_MEMORY ? FROM_MEMORY : `${source} [${value} ${unit}, converted to Hz]`,
+      uncertainty !== undefined ? publishedEnergyToHz(uncertainty, unit) : undefined,
+      uncertaintySource,
+    ),
     energyPublished: { value, unit, source },
   };
 }

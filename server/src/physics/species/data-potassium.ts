@@ -20,6 +20,9 @@ interface KLevelData {
   bP32: WithU;
   d1THz: number;
   d2THz: number;
+  /** Uncertainties of the D-line frequencies, THz (from memory), where known. */
+  d1U?: number;
+  d2U?: number;
   d1Nm?: number;
   d2Nm?: number;
 }
@@ -32,7 +35,7 @@ function potassiumLevels(d: KLevelData): BuiltinLevel[] {
       key: 'P1/2',
       designation: '4p 2P°1/2',
       A: mhz(d.aP12[0], TIECKE_K, d.aP12[1], FROM_MEMORY),
-      ...energy(d.d1THz, 'THz', TIECKE_K),
+      ...energy(d.d1THz, 'THz', TIECKE_K, d.d1U, d.d1U === undefined ? undefined : FROM_MEMORY),
       ...(d.d1Nm === undefined ? {} : { vacuumWavelengthNm: sourced(d.d1Nm, TIECKE_K) }),
       lifetimeS: TAU_D1,
     },
@@ -41,7 +44,7 @@ function potassiumLevels(d: KLevelData): BuiltinLevel[] {
       designation: '4p 2P°3/2',
       A: mhz(d.aP32[0], TIECKE_K, d.aP32[1], FROM_MEMORY),
       B: mhz(d.bP32[0], TIECKE_K, d.bP32[1], FROM_MEMORY),
-      ...energy(d.d2THz, 'THz', TIECKE_K),
+      ...energy(d.d2THz, 'THz', TIECKE_K, d.d2U, d.d2U === undefined ? undefined : FROM_MEMORY),
       ...(d.d2Nm === undefined ? {} : { vacuumWavelengthNm: sourced(d.d2Nm, TIECKE_K) }),
       lifetimeS: TAU_D2,
     },
@@ -65,6 +68,8 @@ export const POTASSIUM_39: BuiltinSpecies = {
     bP32: [2.786, 0.071],
     d1THz: 389.286058716,
     d2THz: 391.01617003,
+    d1U: 0.000000062,
+    d2U: 0.00000012,
     d1Nm: 770.108385049,
     d2Nm: 766.700921822,
   }),
