@@ -4,6 +4,7 @@
  * docs/schema/evaluation.schema.json describes it. Bump EVALUATION_VERSION on any breaking change.
  */
 import type { FitResult } from './fitResultTypes';
+import type { SlowerResult } from './slowerResultTypes';
 import type { Problem } from '../format/ast';
 
 export const EVALUATION_FORMAT = 'sublevel-evaluation';
@@ -350,6 +351,7 @@ export interface ResonanceResult {
 }
 
 export type { FitResult } from './fitResultTypes';
+export type { SlowerResult, SlowerSample, SlowerFlight } from './slowerResultTypes';
 
 export interface DiagnosticResult {
   code: string;
@@ -379,6 +381,8 @@ export interface EvaluationResult {
   resonances: ResonanceResult[];
   /** The `fit` blocks' results (docs/fit.md); absent when the file has none. */
   fits?: FitResult[];
+  /** The `slower` blocks' results (docs/slower.md); absent when the file has none. */
+  slowers?: SlowerResult[];
   diagnostics: DiagnosticResult[];
   /** The independent uncertain inputs (standard uncertainties `u`, k = 1); absent when there are none. */
   uncertainty_inputs?: { id: string; label: string; value: number; u: number }[];

@@ -31,6 +31,7 @@ const BLOCK_WORD_DETAIL: Record<BlockKind, string> = {
   settings: 'settings — g_s, reduced_mass',
   data: 'data <name> — measured points: level, kind, lower, upper, point, file, beam',
   fit: 'fit <name> — data, free, start, range (or fit <name>: <data> -> <parameter>)',
+  slower: 'slower <name> — line, capture, final, safety, design, bias, saturation, sources',
 };
 
 function statementStart(c: LineContext): CompletionItem[] {

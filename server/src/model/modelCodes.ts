@@ -80,6 +80,9 @@ export const MODEL_RULES = {
   'fit-parameter-unknown': { severity: 'error', summary: 'A free parameter that is not one of the fit parameters.' },
   'fit-parameter-not-applicable': { severity: 'error', summary: 'A free parameter that the data named cannot determine.' },
   'fit-start-malformed': { severity: 'error', summary: 'A starting value not written as <parameter> <value>.' },
+  'slower-incomplete': { severity: 'warning', summary: 'A slower lacks its line, capture speed or final speed.' },
+  'slower-final-not-below-capture': { severity: 'error', summary: 'A slower whose final speed is not below its capture speed.' },
+  'slower-safety-out-of-range': { severity: 'error', summary: 'A slower safety factor η outside (0, 1].' },
 } as const satisfies Record<string, RuleInfo>;
 
 export type ModelCode = keyof typeof MODEL_RULES;

@@ -12,6 +12,7 @@ const BLOCK_WORDS: Record<BlockKind, string> = {
   settings: 'file-wide choices: g_s (exact or 2) and reduced_mass (on or off)',
   data: 'measured points: resonance frequencies or level intervals of a pair of sublevels, or a detector profile; written here or read from a CSV file beside the setup',
   fit: 'a weighted least-squares fit of data on the exact engine: which parameters are free and where they start',
+  slower: 'a Zeeman slower on a cycling line: the ideal field profile B(z), its length, the laser detuning, and a check of a coil design against it',
 };
 
 const LEVEL_KEYS: Record<string, string> = {
@@ -67,6 +68,16 @@ const BLOCK_KEYS: Record<string, string> = {
   'fit.free': 'free parameters: field, g_J, A, B (resonances and intervals); gradient, temperature, offset, width, field, populations, background (profiles)',
   'fit.start': 'starting values, e.g. field 3 G, A 3417 MHz (defaults: the setup\'s values)',
   'fit.range': 'field range searched by a one-point field calibration: <from>, <to>',
+  'slower.line': 'the cycling line the slowing laser drives (a line of this file, lower -> upper, J -> J+1)',
+  'slower.capture': 'capture speed v0: the fastest atoms the slower takes — m/s',
+  'slower.final': 'final speed at the exit — m/s',
+  'slower.safety': 'safety factor η on the largest deceleration ħkΓ/2m, in (0, 1]; the profile asks for η a_max',
+  'slower.design': 'decreasing, increasing or spin_flip: how |B| runs along the slower',
+  'slower.bias': 'the offset B_bias of B(z) = B_bias ± ΔB √(1 − z/L0); sets the laser detuning (default: per design)',
+  'slower.saturation': 'saturation parameter s0 = I/I_sat of the slowing beam (default 2)',
+  'slower.sources': 'coils (field sources) whose field along the slower axis is checked against the ideal profile',
+  'slower.start': 'where the slower begins (z = 0) in the coordinates of the sources; default the origin',
+  'slower.axis': 'the direction the atoms fly along the slower (the laser comes the other way); default z',
   'settings.g_s': 'electron spin g-factor in the Landé formula: exact (CODATA) or 2 (textbook fractions)',
   'settings.reduced_mass': 'on: g_L = 1 − m_e/M instead of 1',
 };
