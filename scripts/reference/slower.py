@@ -40,6 +40,7 @@ CASES = [
     {"name": "sodium spin flip", "atom": SODIUM, "v0": 900.0, "vf": 25.0, "eta": 0.5, "s0": 2.0, "design": "spin_flip"},
     {"name": "rubidium increasing", "atom": RUBIDIUM, "v0": 350.0, "vf": 20.0, "eta": 0.6, "s0": 3.0, "design": "increasing"},
     {"name": "sodium with a step", "atom": SODIUM, "v0": 1000.0, "vf": 30.0, "eta": 0.5, "s0": 2.0, "design": "decreasing", "step": {"z_m": 0.3, "width_m": 0.01, "size_T": 0.004}},
+    {"name": "sodium example file", "atom": SODIUM, "v0": 950.0, "vf": 30.0, "eta": 0.55, "s0": 2.5, "design": "spin_flip"},
     {"name": "rubidium given bias", "atom": RUBIDIUM, "v0": 300.0, "vf": 15.0, "eta": 0.7, "s0": 5.0, "design": "decreasing", "bias_T": -0.002},
 ]
 

@@ -19,5 +19,6 @@ export { renderLines } from './lines';
 export { renderResonance } from './resonance';
 export { renderResiduals, type ResidualsViewData } from './residuals';
 export { fitCsv } from './fitCsv';
+export { slowerCsv } from './slowerCsv';
 export { levelsCsv, linesCsv, patternCsv, resonanceCsv, spectrumCsv, type SpectrumColumns } from './csv';
 export { escapeXml } from './svgText';
