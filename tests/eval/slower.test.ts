@@ -146,7 +146,7 @@ slower s
     const s = r.result.slowers![0]!;
     expect(s.computed).toBe(true);
     expect(s.driven_pair!.cycling).toBe(true);
-    // Landé g_J with CODATA g_s: 2P3/2 → (2 + g_s)/3·… ; the rate is μ_B/h (g_u·3/2 − g_l·1/2) = μ_B/h (1 + (g_s − 2)·0) … checked against the engine's own g_J in the level results.
+    // The stretched pair's closed form μ_B/h (g_u·3/2 − g_l·1/2) with the Landé g_J the level results report.
     const gl = r.result.levels.find((l) => l.level === 'g')!.g_J.used;
     const gu = r.result.levels.find((l) => l.level === 'e')!.g_J.used;
     expect(s.driven_pair!.rate_Hz_per_T / (BOHR_MAGNETON_HZ_PER_T * (1.5 * gu - 0.5 * gl))).toBeCloseTo(1, 9);
