@@ -18,6 +18,7 @@ import { lineSection } from './hover/lineSection';
 import { magnetSection } from './hover/magnetSection';
 import { quantitySection } from './hover/quantitySection';
 import { resonanceSection } from './hover/resonanceSection';
+import { slowerSection } from './hover/slowerSection';
 import { speciesSection } from './hover/speciesSection';
 import { termSection } from './hover/termSection';
 import { useSection } from './hover/useSection';
@@ -115,6 +116,10 @@ function blockSections(block: BlockNode, ctx: HoverContext): string[] {
     case 'fit':
     case 'data':
       return fitSectionsOf(block, ctx);
+    case 'slower': {
+      const s = ctx.analysis.result?.slowers?.find((x) => x.name === block.name?.text);
+      return s ? [slowerSection(s)] : [];
+    }
     default:
       return [];
   }
