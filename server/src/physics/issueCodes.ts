@@ -131,6 +131,15 @@ export const PHYSICS_RULES = {
   'slower-no-pair': { severity: 'error', summary: 'No circularly driven pair of sublevels joins the ends of a slower line.' },
   'slower-not-cycling': { severity: 'warning', summary: 'A slower line that is not a stretched J → J+1 pair: the atoms are pumped dark.' },
   'slower-simulation-too-long': { severity: 'warning', summary: "A slower atom's flight needed more steps than allowed; no final speed." },
+  // Field sources (fields/).
+  'source-invalid-part': { severity: 'error', summary: 'A coil, solenoid, wire or block part with a size, direction or current the field formulas cannot use.' },
+  'source-point-on-loop': { severity: 'warning', summary: 'A field point on the wire of a loop, where a thin loop has no field.' },
+  'source-point-on-winding': { severity: 'warning', summary: 'A field point on the winding of a solenoid, where the field jumps.' },
+  'source-point-on-wire': { severity: 'warning', summary: 'A field point on a straight wire, where a thin wire has no field.' },
+  'source-point-on-block': { severity: 'warning', summary: 'A field point on the surface of a magnetised block, where the field jumps.' },
+  'source-zero-field': { severity: 'info', summary: 'The field vanishes at the point, where |B| has no curvature.' },
+  'source-bad-step': { severity: 'error', summary: 'A difference step for the curvature that is not a positive length.' },
+  'source-bad-sampling': { severity: 'error', summary: 'A field sampling request with too few or too many points.' },
 } as const satisfies Record<string, PhysicsRule>;
 
 export type PhysicsCode = keyof typeof PHYSICS_RULES;
