@@ -25,6 +25,7 @@ export function checkDesign(input: CheckInput): DesignCheck {
   const samples: DesignCheck['samples'] = [];
   let worst = 0;
   let dropAtM: number | undefined;
+  let capture = 0;
   for (let i = 0; i < n; i++) {
     const zM = (p.lengthM * i) / (n - 1);
     const at = field(zM);
@@ -34,7 +35,8 @@ export function checkDesign(input: CheckInput): DesignCheck {
     const neededMPerS2 = resonantMPerS > 0 ? -resonantMPerS * slope : 0;
     samples.push({ zM, idealT: idealField(p, zM).BT, fieldT: at.BT, resonantMPerS, neededMPerS2 });
     worst = Math.max(worst, neededMPerS2 / p.designDecelerationMPerS2);
+    capture = Math.max(capture, resonantMPerS);
     if (dropAtM === undefined && neededMPerS2 > reachable) dropAtM = zM;
   }
-  return { samples, worstOverDesign: worst, reachableMPerS2: reachable, ...(dropAtM !== undefined ? { dropAtM } : {}) };
+  return { samples, worstOverDesign: worst, captureMPerS: capture, reachableMPerS2: reachable, ...(dropAtM !== undefined ? { dropAtM } : {}) };
 }

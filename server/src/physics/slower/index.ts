@@ -6,3 +6,4 @@ export { drivenPair, rateSpread, type DrivenPair, type PairSide } from './driven
 export { checkDesign, type CheckInput } from './designCheck';
 export { simulateAtom, type SimulationInput } from './simulate';
 export { slowerCautions, type SlowerCautionSetup } from './cautions';
+export { axisField, pointOnAxis, transverseFraction, type SlowerAxis } from './axisField';

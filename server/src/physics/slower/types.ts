@@ -88,6 +88,8 @@ export interface DesignCheck {
   worstOverDesign: number;
   /** First z where the needed deceleration exceeds what the light can give (a_max s0/(1+s0)); absent when none. */
   dropAtM?: number;
+  /** The largest resonant speed along the field: faster atoms never meet the resonance, m/s. */
+  captureMPerS: number;
   /** The reachable deceleration used for `dropAtM`, m/s². */
   reachableMPerS2: number;
 }
