@@ -23,6 +23,7 @@ const BENCHMARKS = [
   { name: 'fit', entry: 'bench/fit.bench.ts', call: 'runFitBench', about: 'field calibration from one resonance; 5-parameter fit of a 4,096-point profile' },
   { name: 'field-sources', entry: 'bench/fieldSources.bench.ts', call: 'runFieldSourcesBench', about: 'B and gradient of a 10-loop assembly at one point, against point dipoles' },
   { name: 'spectrum', entry: 'bench/spectrum.bench.ts', call: 'runSpectrumBench', about: '10,000-point Voigt spectrum with 100 components' },
+  { name: 'slower', entry: 'bench/slower.bench.ts', call: 'runSlowerBench', about: 'a whole slower (profile, check, flight) and a 40-section coil design, against one exact solve' },
 ];
 
 const TMP = '.bench-tmp';
