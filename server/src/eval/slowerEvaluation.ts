@@ -24,6 +24,7 @@ import {
 import type { LevelModel, SettingsModel, SlowerModel } from '../model/types';
 import type { GJLookup } from './gJLookup';
 import { engineSpec } from './levelSpec';
+import { lengthText, speedText, trimNumber } from './quantityText';
 import type { SlowerFlight, SlowerResult, SlowerSample } from './slowerResultTypes';
 
 /** Samples of the profile in the result (and the CSV). */
@@ -118,7 +119,7 @@ export function evaluateSlower(s: SlowerModel, gJOf: GJLookup, settings: Setting
     say(
       'slower-saturation-too-low',
       'warning',
-      `at saturation s0 = ${s.saturation.value} the light gives at most ${(s.saturation.value / (1 + s.saturation.value)).toFixed(3)} a_max, not the η = ${s.safety.value} a_max the profile asks for: atoms fall behind the resonance even in the ideal field; lower safety or raise saturation`,
+      `at saturation s0 = ${s.saturation.value} the light gives at most ${trimNumber(s.saturation.value / (1 + s.saturation.value), 3)} a_max, not the η = ${s.safety.value} a_max the profile asks for: atoms fall behind the resonance even in the ideal field; lower safety or raise saturation`,
       s.safety.range ?? s.saturation.range ?? s.nameRange,
     );
   }
@@ -136,20 +137,27 @@ export function evaluateSlower(s: SlowerModel, gJOf: GJLookup, settings: Setting
   if (coils) {
     const check = checkDesign({ ...common, profile: p, field: coils.field, points: SLOWER_SAMPLES });
     const run = flyThrough(coils.field);
-    result.coils = { sources: coils.sources, worst_over_design: check.worstOverDesign, ...(check.dropAtM !== undefined ? { drop_at_m: check.dropAtM } : {}), ...(run ? { flight: flightOf(run) } : {}) };
+    result.coils = { sources: coils.sources, worst_over_design: check.worstOverDesign, capture_m_per_s: check.captureMPerS, ...(check.dropAtM !== undefined ? { drop_at_m: check.dropAtM } : {}), ...(run ? { flight: flightOf(run) } : {}) };
     samples = check.samples.map((c) => ({ z_m: c.zM, B_ideal_T: c.idealT, B_coils_T: c.fieldT, resonant_speed_m_per_s: c.resonantMPerS, needed_deceleration_m_per_s2: c.neededMPerS2 }));
     shown = run;
+    if (check.captureMPerS < 0.99 * p.captureMPerS) {
+      say(
+        'slower-coils-capture-below',
+        'warning',
+        `the coils' field is resonant with atoms up to ${speedText(check.captureMPerS)} only, below the capture speed ${speedText(p.captureMPerS)}: faster atoms never meet the light (raise the entrance field)`,
+      );
+    }
     if (check.dropAtM !== undefined) {
-      const end = run ? (run.stoppedAtM !== undefined ? 'the simulated atom stops' : `the simulated atom leaves at ${run.finalMPerS.toFixed(1)} m/s instead of about ${p.finalMPerS} m/s`) : '';
+      const end = run ? (run.stoppedAtM !== undefined ? 'the simulated atom stops' : `the simulated atom leaves at ${speedText(run.finalMPerS)} instead of about ${speedText(p.finalMPerS)}`) : '';
       say(
         'slower-coils-drop-atoms',
         'warning',
-        `the coils' field drops the atoms at z = ${(check.dropAtM * 100).toFixed(1)} cm: there it asks for ${(check.worstOverDesign * p.designDecelerationMPerS2 / p.maxDecelerationMPerS2).toFixed(2)} a_max at worst, more than the ${(idealCheck.reachableMPerS2 / p.maxDecelerationMPerS2).toFixed(2)} a_max the light gives${end ? `; ${end}` : ''}`,
+        `the coils' field drops the atoms at z = ${lengthText(check.dropAtM)}: it asks for up to ${trimNumber((check.worstOverDesign * p.designDecelerationMPerS2) / p.maxDecelerationMPerS2, 3)} a_max, more than the ${trimNumber(idealCheck.reachableMPerS2 / p.maxDecelerationMPerS2, 3)} a_max the light gives${end ? `; ${end}` : ''}`,
       );
     }
   }
   if (shown?.stoppedAtM !== undefined) {
-    say('slower-atoms-stop', 'warning', `the simulated atom at the capture speed stops at z = ${(shown.stoppedAtM * 100).toFixed(1)} cm, before the exit (${(p.lengthM * 100).toFixed(1)} cm), and would be pushed back`);
+    say('slower-atoms-stop', 'warning', `the simulated atom at the capture speed stops at z = ${lengthText(shown.stoppedAtM)}, before the exit (${lengthText(p.lengthM)}), and would be pushed back`);
   }
   if (shown) attachFlight(samples, shown);
   result.samples = samples;

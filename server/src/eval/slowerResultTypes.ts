@@ -67,6 +67,8 @@ export interface SlowerResult {
     sources: string[];
     /** Largest needed deceleration over η a_max. */
     worst_over_design: number;
+    /** The largest speed resonant anywhere in the coils' field: faster atoms are not caught, m/s. */
+    capture_m_per_s: number;
     /** First z where the needed deceleration passes the reachable one: atoms leave the resonance. */
     drop_at_m?: number;
     flight?: SlowerFlight;
