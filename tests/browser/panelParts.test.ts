@@ -97,8 +97,9 @@ describe('panel HTML', () => {
     expect(html).not.toMatch(/\son\w+=/);
   });
 
-  it('offers the five views, three exports and the field and range choices', () => {
-    expect(html.match(/role="tab"/g)).toHaveLength(5);
+  it('offers the six views, three exports and the field and range choices', () => {
+    expect(html.match(/role="tab"/g)).toHaveLength(6);
+    expect(html).toContain('data-view="slower"');
     expect(html).toContain('data-view="resonance"');
     expect(html).toContain('data-view="residuals"');
     expect(html).toContain('data-export="svg"');

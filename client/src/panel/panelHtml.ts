@@ -20,6 +20,7 @@ const VIEW_NAMES: Record<View, string> = {
   lines: 'Line components',
   resonance: 'Resonance vs field',
   residuals: 'Fit residuals',
+  slower: 'Slower',
 };
 
 function escapeHtml(s: string): string {

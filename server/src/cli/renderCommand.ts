@@ -15,7 +15,7 @@ import { readFieldOption } from './fieldOption';
 import type { FieldUnit } from '../render';
 import { selectBeam, selectField, selectLevel, selectName } from './selectors';
 
-export const RENDER_VIEWS = ['levels', 'pattern', 'lines', 'resonance', 'residuals'] as const;
+export const RENDER_VIEWS = ['levels', 'pattern', 'lines', 'resonance', 'residuals', 'slower'] as const;
 const FORMATS = ['svg', 'csv', 'png'] as const;
 const FIELD_UNITS = ['G', 'mT', 'T'] as const;
 
@@ -25,13 +25,14 @@ export const renderSpec: CommandSpec = {
   summary: 'a diagram as SVG (light palette, for reports) or PNG (print resolution), or the numbers behind it as CSV',
   options: {
     ...ROOT_OPTION,
-    view: { value: 'VIEW', choices: RENDER_VIEWS, help: 'levels: sublevel energies against field (default); pattern: detector pattern; lines: line components; resonance: a transition frequency against field; residuals: a fit\'s data, model and residuals' },
+    view: { value: 'VIEW', choices: RENDER_VIEWS, help: 'levels: sublevel energies against field (default); pattern: detector pattern; lines: line components; resonance: a transition frequency against field; residuals: a fit\'s data, model and residuals; slower: a slower\'s field profile and speeds along it' },
     level: { value: 'NAME', help: 'the level to draw (levels view); default: the first beam\'s level, else the first level' },
     field: { value: 'NAME', help: 'the field or magnet to mark; default: the first one' },
     beam: { value: 'NAME', help: 'the beam (pattern view), when the file has more than one' },
     line: { value: 'NAME', help: 'the line (lines view); default: the first one' },
     resonance: { value: 'NAME', help: 'the resonance (resonance view); default: the first one' },
     fit: { value: 'NAME', help: 'the fit (residuals view); default: the first one' },
+    slower: { value: 'NAME', help: 'the slower (slower view); default: the first one' },
     from: { value: 'FIELD', help: 'start of the field axis (levels and resonance views), e.g. 0 or 10G' },
     to: { value: 'FIELD', help: 'end of the field axis, e.g. 50G or 0.1T' },
     unit: { value: 'UNIT', choices: FIELD_UNITS, help: 'unit of the field axis: G, mT or T' },
@@ -77,6 +78,8 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   if (resonance !== undefined) req.resonanceName = resonance;
   const fit = selectName('fit', model.fits.map((f) => f.name), stringOption(args, 'fit'));
   if (fit !== undefined) req.fitName = fit;
+  const slower = selectName('slower', model.slowers.map((s) => s.name), stringOption(args, 'slower'));
+  if (slower !== undefined) req.slowerName = slower;
   const d = diagramFor(analysis, req);
   if (!d.ok) {
     const listed = listErrorsFirst(file, analysis, ctx);

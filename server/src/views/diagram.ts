@@ -8,14 +8,15 @@ import { gJLookup } from '../eval/gJLookup';
 import { workingFields } from '../eval/evaluate';
 import type { BeamModel, LevelModel, SetupModel } from '../model/types';
 import type { WorkingField } from '../eval/levelEvaluation';
-import { fitCsv, levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, renderResiduals, renderResonance, resonanceCsv, type FieldUnit, type RenderTheme } from '../render';
+import { fitCsv, levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, renderResiduals, renderResonance, resonanceCsv, renderSlower, slowerCsv, type FieldUnit, type RenderTheme } from '../render';
 import { residualsView } from './residualsView';
+import { slowerView } from './slowerView';
 import { resonanceView } from './resonanceView';
 import { lineFieldIndex, linesView } from './linesView';
 import { levelsView } from './levelsView';
 import { patternView } from './patternView';
 
-export type DiagramView = 'levels' | 'pattern' | 'lines' | 'resonance' | 'residuals';
+export type DiagramView = 'levels' | 'pattern' | 'lines' | 'resonance' | 'residuals' | 'slower';
 
 export interface DiagramRequest {
   view: DiagramView;
@@ -29,6 +30,7 @@ export interface DiagramRequest {
   lineName?: string;
   resonanceName?: string;
   fitName?: string;
+  slowerName?: string;
   /** Levels view: field range and axis unit chosen by the user (CLI --from/--to/--unit, panel range control). */
   fromT?: number;
   toT?: number;
@@ -79,6 +81,14 @@ function drawn(analysis: Analysis, model: SetupModel, req: DiagramRequest): Diag
     if ('problem' in v) return { ok: false, message: v.problem };
     const about: [string, string][] = [['file', req.source ?? ''], ['resonance', r.name]];
     return { ok: true, title: v.title, svg: renderResonance(v, theme), csv: resonanceCsv(v, about) };
+  }
+  if (req.view === 'slower') {
+    const all = analysis.result?.slowers ?? [];
+    const s = all.find((x) => x.name === req.slowerName) ?? all.find((x) => contains(model.slowers.find((m) => m.name === x.name)?.node.range ?? NOWHERE, req.line)) ?? all[0];
+    if (!s) return { ok: false, message: 'No slower to draw: add a `slower` block with line, capture and final (see docs/slower.md).' };
+    const v = slowerView(s);
+    if (!v) return { ok: false, message: `Slower '${s.name}' cannot be computed yet; see the Problems view.` };
+    return { ok: true, title: v.title, svg: renderSlower(v, theme), csv: slowerCsv(s, req.source ?? '') };
   }
   if (req.view === 'residuals') {
     const fits = analysis.result?.fits ?? [];
