@@ -11,7 +11,7 @@ const TEXT = readFileSync(new URL('../../examples/sodium-slower.sublevel', impor
 describe('slower view', () => {
   it('draws the ideal field, the resonant speed and the flight, with the zero crossing marked', () => {
     const a = analyze(TEXT);
-    const d = diagramFor(a, { view: 'slower', theme: 'light', source: 'sodium-slower.sublevel' });
+    const d = diagramFor(a, { view: 'slower', theme: 'export', source: 'sodium-slower.sublevel' });
     expect(d.ok).toBe(true);
     if (!d.ok) return;
     expect(d.title).toBe('Slower main on D2: spin-flip field profile');
@@ -27,13 +27,13 @@ describe('slower view', () => {
   it('marks where coils drop the atoms and draws their field', () => {
     const s = analyze(TEXT).result!.slowers![0]!;
     const v = slowerView({ ...s, samples: s.samples!.map((x) => ({ ...x, B_coils_T: 0.9 * x.B_ideal_T })), coils: { sources: ['c'], worst_over_design: 2, capture_m_per_s: 900, drop_at_m: 0.3 } })!;
-    const svg = renderSlower(v, { kind: 'dark' });
+    const svg = renderSlower(v, { kind: 'panel' });
     expect(svg).toContain('data-kind="coils"');
     expect(svg).toMatch(/data-kind="drop" data-z-m="0.3"/);
   });
 
   it('says plainly when there is no slower', () => {
-    const d = diagramFor(analyze('species Na23\n  level g: 3s 2S1/2\n'), { view: 'slower', theme: 'light' });
+    const d = diagramFor(analyze('species Na23\n  level g: 3s 2S1/2\n'), { view: 'slower', theme: 'export' });
     expect(d).toEqual({ ok: false, message: expect.stringContaining('No slower to draw') });
   });
 });
