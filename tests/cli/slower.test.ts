@@ -15,6 +15,7 @@ describe('sublevel slower', () => {
     expect(r.out).toMatch(/field at the entrance 557\.76 G, at the exit -557\.76 G, through zero at z = 66\.43 cm/);
     expect(r.out).toMatch(/laser detuning from the zero-field line: -831\.695 MHz \(red\)/);
     expect(r.out).toMatch(/Slowing laser at 589 nm/);
+    expect(r.out).toMatch(/coils \(zs01, .*, zs20\): catch atoms up to 95\d(\.\d+)? m\/s, need up to [\d.]+ × η a_max; no atoms dropped/);
     expect(r.out).not.toMatch(/NaN|Infinity|undefined/);
   });
 
@@ -23,15 +24,16 @@ describe('sublevel slower', () => {
     expect(r.code).toBe(0);
     const lines = r.out.split('\n');
     expect(lines[0]).toMatch(/^# sublevel slower: file=examples\/sodium-slower.sublevel; slower=main; line=D2; design=spin_flip; detuning_Hz=-831\d+/);
-    expect(lines[1]).toBe('z_m,B_ideal_T,resonant_speed_m_per_s,needed_deceleration_m_per_s2,flight_speed_m_per_s');
+    expect(lines[1]).toBe('z_m,B_ideal_T,B_coils_T,resonant_speed_m_per_s,needed_deceleration_m_per_s2,flight_speed_m_per_s');
     expect(lines).toHaveLength(2 + 101);
     const first = lines[2]!.split(',').map(Number);
     expect(first[0]).toBe(0);
-    expect(first[2]).toBeCloseTo(950, 6);
+    expect(first[1]).toBeCloseTo(0.0557761, 6);
+    expect(Math.abs(first[2]! - first[1]!)).toBeLessThan(20e-4);
     const last = lines.at(-1)!.split(',').map(Number);
     expect(last[1]).toBeCloseTo(-0.0557761, 6);
-    expect(last[4]).toBeGreaterThan(20);
-    expect(last[4]).toBeLessThan(30);
+    expect(last[5]).toBeGreaterThan(25);
+    expect(last[5]).toBeLessThan(40);
   });
 
   it('writes the result as JSON with the diagnostics', () => {

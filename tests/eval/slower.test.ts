@@ -60,12 +60,41 @@ describe('the example file', () => {
     expect(s.polarisation).toBe('sigma+');
   });
 
-  it('gives 101 samples from the entrance to the exit, the flight speed on each', () => {
+  it('gives 101 samples from the entrance to the exit with the coils’ field and the flight through it', () => {
     expect(s.samples).toHaveLength(101);
-    expect(s.samples![0]!.resonant_speed_m_per_s).toBeCloseTo(950, 6);
+    expect(s.samples![0]!.B_ideal_T).toBeCloseTo(s.entry_field_T!, 12);
     expect(s.samples!.at(-1)!.z_m).toBeCloseTo(s.length_m!, 12);
-    expect(s.samples!.at(-1)!.flight_speed_m_per_s).toBeCloseTo(s.flight!.final_m_per_s, 9);
-    for (const x of s.samples!) expect(Number.isFinite(x.flight_speed_m_per_s)).toBe(true);
+    expect(s.samples!.at(-1)!.flight_speed_m_per_s).toBeCloseTo(s.coils!.flight!.final_m_per_s, 9);
+    for (const x of s.samples!) {
+      expect(Number.isFinite(x.flight_speed_m_per_s)).toBe(true);
+      // The 20 sections follow the profile to within a few gauss, except near the zero crossing where the ratio means nothing.
+      expect(Math.abs(x.B_coils_T! - x.B_ideal_T)).toBeLessThan(20e-4);
+    }
+  });
+
+  it('the coil design catches 950 m/s, drops nobody and brings the atom near the final speed', () => {
+    expect(s.coils!.sources).toHaveLength(20);
+    expect(s.coils!.capture_m_per_s).toBeGreaterThan(950);
+    expect(s.coils!.drop_at_m).toBeUndefined();
+    expect(s.coils!.flight!.final_m_per_s).toBeGreaterThan(25);
+    expect(s.coils!.flight!.final_m_per_s).toBeLessThan(40);
+  });
+
+  it('a last section with too few turns releases the atoms early: they leave fast, and the message gives the exit fields', () => {
+    const short = run(readFileSync(new URL('../../examples/sodium-slower.sublevel', import.meta.url), 'utf8').replace('turns = 372', 'turns = 60'));
+    const w = short.result.slowers![0]!;
+    const p = problem(short, 'slower-coils-exit-fast');
+    expect(p.severity).toBe('warning');
+    expect(p.message).toMatch(/leaves the coils' field at 2\d\d(\.\d)? m\/s, well above the final speed 30 m\/s: at the exit the coils give -2\d\d(\.\d)? G where the profile needs -557\.8 G/);
+    expect(w.coils!.drop_at_m).toBeUndefined();
+  });
+
+  it('the same coils at 15 % less current miss the fast atoms: capture below, and the atom is not slowed', () => {
+    const weak = run(readFileSync(new URL('../../examples/sodium-slower.sublevel', import.meta.url), 'utf8').replace(/current = (-?)20 A/g, 'current = $117 A'));
+    const w = weak.result.slowers![0]!;
+    expect(w.coils!.capture_m_per_s).toBeLessThan(0.95 * 950);
+    expect(problem(weak, 'slower-coils-capture-below').message).toMatch(/resonant with atoms up to 8\d\d(\.\d+)? m\/s only, below the capture speed 950 m\/s/);
+    expect(w.coils!.flight!.final_m_per_s).toBeGreaterThan(800);
   });
 
   it('shows the laser and coil cautions', () => {

@@ -16,12 +16,12 @@ describe('slower view', () => {
     if (!d.ok) return;
     expect(d.title).toBe('Slower main on D2: spin-flip field profile');
     expect(d.svg).toContain('data-view="slower"');
-    for (const kind of ['ideal', 'resonant', 'flight', 'zero-crossing']) expect(d.svg).toContain(`data-kind="${kind}"`);
-    expect(d.svg).not.toContain('data-kind="coils"');
+    for (const kind of ['ideal', 'coils', 'resonant', 'flight', 'zero-crossing']) expect(d.svg).toContain(`data-kind="${kind}"`);
+    expect(d.svg).not.toContain('data-kind="drop"');
     expect(d.svg).not.toMatch(/NaN|Infinity/);
     const z0 = a.result!.slowers![0]!.zero_crossing_m!;
     expect(d.svg).toContain(`data-z-m="${Number(z0.toPrecision(12))}"`);
-    expect(d.csv.split('\n')[1]).toBe('z_m,B_ideal_T,resonant_speed_m_per_s,needed_deceleration_m_per_s2,flight_speed_m_per_s');
+    expect(d.csv.split('\n')[1]).toBe('z_m,B_ideal_T,B_coils_T,resonant_speed_m_per_s,needed_deceleration_m_per_s2,flight_speed_m_per_s');
   });
 
   it('marks where coils drop the atoms and draws their field', () => {

@@ -25,6 +25,7 @@ export const EVAL_RULES = {
   'slower-saturation-too-low': { severity: 'warning', summary: 'The light cannot give η a_max at this saturation (needs η < s0/(1+s0)): atoms fall out even in the ideal field.' },
   'slower-coils-drop-atoms': { severity: 'warning', summary: 'The coils\u2019 field asks for more deceleration than the light gives somewhere along the slower: atoms leave the resonance there.' },
   'slower-coils-capture-below': { severity: 'warning', summary: 'The coils\u2019 field never reaches the resonance of the capture speed: faster atoms are not slowed.' },
+  'slower-coils-exit-fast': { severity: 'warning', summary: 'The simulated atom leaves the coils\u2019 field well above the final speed: the exit field falls short of the profile.' },
   'slower-atoms-stop': { severity: 'warning', summary: 'The simulated atom stops inside the slower and turns back.' },
   'slower-coils-off-axis': { severity: 'info', summary: 'The coils\u2019 field along the slower has a transverse part comparable to its axial part.' },
   'level-too-large': { severity: 'error', summary: 'A level has more sublevels than the engine handles.' },

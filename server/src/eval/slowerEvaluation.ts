@@ -5,7 +5,9 @@
  */
 import type { Problem, Range } from '../format/ast';
 import { SPEED_OF_LIGHT } from '../physics/constants';
+import { sumField, type FieldFunction } from '../physics/fields';
 import {
+  axisField,
   checkDesign,
   designSign,
   drivenPair,
@@ -18,8 +20,10 @@ import {
   type DrivenPair,
   type IdealProfile,
   type SimulationResult,
+  type SlowerAxis,
   type SlowerIssue,
   type SlowerTransition,
+  transverseFraction,
 } from '../physics/slower';
 import type { LevelModel, SettingsModel, SlowerModel } from '../model/types';
 import type { GJLookup } from './gJLookup';
@@ -32,13 +36,25 @@ export const SLOWER_SAMPLES = 101;
 /** A field small enough to be weak for any level, large enough to lift every degeneracy: the first rate. */
 const SMALL_FIELD_T = 1e-7;
 
-/** The coils' field along the slower, when the slower names sources (wired in by the caller). */
-export interface CoilAxis {
+/** The coils' field along the slower. */
+interface CoilAxis {
   sources: string[];
   field: AxisField;
+  /** The field of the sources in space and the slower's axis in it (for the transverse check). */
+  whole: FieldFunction;
+  axis: SlowerAxis;
 }
 
-export function evaluateSlower(s: SlowerModel, gJOf: GJLookup, settings: SettingsModel, problems: Problem[], coils?: CoilAxis): SlowerResult {
+/** The slower's sources as one field along its axis; undefined without sources or when none has a usable part. */
+function coilAxis(s: SlowerModel): CoilAxis | undefined {
+  const parts = (s.sources ?? []).flatMap((x) => x.parts);
+  if (parts.length === 0) return undefined;
+  const whole = sumField(parts);
+  const axis: SlowerAxis = { start: s.start?.value ?? [0, 0, 0], direction: s.axis?.value ?? [0, 0, 1] };
+  return { sources: s.sources!.map((x) => x.name), field: axisField(whole, axis), whole, axis };
+}
+
+export function evaluateSlower(s: SlowerModel, gJOf: GJLookup, settings: SettingsModel, problems: Problem[]): SlowerResult {
   const result: SlowerResult = {
     name: s.name,
     design: s.design,
@@ -134,12 +150,27 @@ export function evaluateSlower(s: SlowerModel, gJOf: GJLookup, settings: Setting
   const idealCheck = checkDesign({ ...common, profile: p, field: (z) => idealField(p, z), points: SLOWER_SAMPLES });
   let samples: SlowerSample[] = idealCheck.samples.map((c) => ({ z_m: c.zM, B_ideal_T: c.idealT, resonant_speed_m_per_s: c.resonantMPerS, needed_deceleration_m_per_s2: c.neededMPerS2 }));
   let shown = ideal;
+  const coils = coilAxis(s);
   if (coils) {
     const check = checkDesign({ ...common, profile: p, field: coils.field, points: SLOWER_SAMPLES });
     const run = flyThrough(coils.field);
     result.coils = { sources: coils.sources, worst_over_design: check.worstOverDesign, capture_m_per_s: check.captureMPerS, ...(check.dropAtM !== undefined ? { drop_at_m: check.dropAtM } : {}), ...(run ? { flight: flightOf(run) } : {}) };
     samples = check.samples.map((c) => ({ z_m: c.zM, B_ideal_T: c.idealT, B_coils_T: c.fieldT, resonant_speed_m_per_s: c.resonantMPerS, needed_deceleration_m_per_s2: c.neededMPerS2 }));
     shown = run;
+    // Released early (a weak exit field) the atom leaves well above the final speed although nothing asked for too much deceleration.
+    const margin = Math.max(0.1 * (p.captureMPerS - p.finalMPerS), p.finalMPerS);
+    if (run && run.stoppedAtM === undefined && check.dropAtM === undefined && run.finalMPerS > p.finalMPerS + margin) {
+      const exit = check.samples[check.samples.length - 1]!;
+      say(
+        'slower-coils-exit-fast',
+        'warning',
+        `the simulated atom leaves the coils' field at ${speedText(run.finalMPerS)}, well above the final speed ${speedText(p.finalMPerS)}: at the exit the coils give ${trimNumber(exit.fieldT * 1e4, 4)} G where the profile needs ${trimNumber(exit.idealT * 1e4, 4)} G`,
+      );
+    }
+    const sideways = transverseFraction(coils.whole, coils.axis, check.samples.map((x) => x.zM), p.deltaBT);
+    if (sideways > 0.1) {
+      say('slower-coils-off-axis', 'info', `the coils' field has a transverse part up to ${trimNumber(sideways * 100, 2)} % of its axial part along the slower: the check uses the axial part; is \`axis\` (or \`start\`) the coils' axis?`);
+    }
     if (check.captureMPerS < 0.99 * p.captureMPerS) {
       say(
         'slower-coils-capture-below',

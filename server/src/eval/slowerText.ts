@@ -48,7 +48,7 @@ export function slowerReport(s: SlowerResult): string[] {
   }
   if (s.coils) {
     const c = s.coils;
-    out.push(`  coils (${c.sources.join(', ')}): need up to ${trimNumber(c.worst_over_design, 4)} × η a_max; ${c.drop_at_m !== undefined ? `atoms DROPPED at z = ${lengthText(c.drop_at_m)}` : 'no atoms dropped'}`);
+    out.push(`  coils (${c.sources.join(', ')}): catch atoms up to ${speedText(c.capture_m_per_s)}, need up to ${trimNumber(c.worst_over_design, 4)} × η a_max; ${c.drop_at_m !== undefined ? `atoms DROPPED at z = ${lengthText(c.drop_at_m)}` : 'no atoms dropped'}`);
     if (c.flight) out.push(`    an atom at the capture speed in the coils' field: ${c.flight.stopped_at_m !== undefined ? `stops at ${lengthText(c.flight.stopped_at_m)}` : `leaves at ${speedText(c.flight.final_m_per_s)}`}`);
   }
   out.push('  cautions:');

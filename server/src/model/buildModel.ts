@@ -94,7 +94,7 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
   const slowers = new NameIndex<SlowerModel>('slower', names);
   for (const block of doc.blocks) {
     if (block.kind !== 'slower') continue;
-    const s = buildSlower(block, { lines }, problems);
+    const s = buildSlower(block, { lines, sources: fieldSources }, problems);
     if (s) slowers.declare(s, problems);
   }
   // Data name beams and levels; fits name data: so they come last.

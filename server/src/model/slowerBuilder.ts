@@ -3,7 +3,9 @@ import type { BlockNode, SettingNode } from '../format/ast';
 import type { NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
 import { readSettingNumber, readSettingQuantity, readSettingWord, singlePart } from './settingReaders';
-import type { LineModel, SlowerModel, Valued } from './types';
+import { readSourceList } from './sourceListReader';
+import { readDirection, readVector } from './vectorReader';
+import type { FieldSourceModel, LineModel, SlowerModel, Valued } from './types';
 
 export const SLOWER_DESIGNS = ['decreasing', 'increasing', 'spin_flip'] as const;
 /** Defaults: η = 0.5 and s0 = 2 are middle-of-the-road choices for a first design (common practice). */
@@ -12,7 +14,7 @@ export const DEFAULT_SATURATION = 2;
 
 const DEFAULT_SOURCE = 'default';
 
-export function buildSlower(node: BlockNode, index: { lines: NameIndex<LineModel> }, problems: ProblemList): SlowerModel | undefined {
+export function buildSlower(node: BlockNode, index: { lines: NameIndex<LineModel>; sources: NameIndex<FieldSourceModel> }, problems: ProblemList): SlowerModel | undefined {
   if (!node.name) {
     problems.add('name-missing', 'a slower needs a name, as in `slower zs`', node.keyword.range);
     return undefined;
@@ -70,6 +72,21 @@ export function buildSlower(node: BlockNode, index: { lines: NameIndex<LineModel
         const v = readSettingNumber(s, problems, 'saturation parameter s0 = I/I_sat, e.g. 2');
         if (v && !(v.value > 0)) problems.add('value-out-of-range', `saturation must be greater than zero, got ${s.valueText.text}`, v.range ?? s.valueText.range);
         else if (v) slower.saturation = v;
+        break;
+      }
+      case 'sources': {
+        const list = readSourceList(s, index.sources, problems);
+        if (list) slower.sources = list;
+        break;
+      }
+      case 'start': {
+        const v = readVector(s, 'length', problems);
+        if (v) slower.start = v;
+        break;
+      }
+      case 'axis': {
+        const v = readDirection(s, problems);
+        if (v) slower.axis = v;
         break;
       }
       case 'repump':

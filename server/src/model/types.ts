@@ -251,6 +251,12 @@ export interface SlowerModel {
   saturation: Valued<number>;
   /** `repump = on`: the file accepts a line that does not cycle (its warning becomes a note). */
   repump: boolean;
+  /** Coils whose field along the slower is checked against the ideal (`sources`). */
+  sources?: FieldSourceModel[];
+  /** Where the slower begins (z = 0) in the sources' coordinates, m (`start`; default the origin). */
+  start?: Valued<Vec3>;
+  /** Unit vector of the atoms' flight (`axis`; default +z). */
+  axis?: Valued<Vec3>;
 }
 
 export interface SettingsModel {
