@@ -8,8 +8,6 @@ export interface SlowerCautionSetup {
   wavelengthM?: number;
   /** Largest |B| of the profile, T. */
   peakFieldT?: number;
-  /** Total coil power, W, when a coil design with its conductor is known. */
-  coilPowerW?: number;
 }
 
 export function slowerCautions(setup: SlowerCautionSetup): string[] {
@@ -17,8 +15,7 @@ export function slowerCautions(setup: SlowerCautionSetup): string[] {
   const out = [
     `Slowing laser${nm}: a slower beam is typically tens to hundreds of mW, collimated and aimed straight along the atom beam into the oven — an eye hazard directly and by reflections from windows; use the eyewear, enclosures and beam dumps your lab's laser rules require and ask its laser safety officer.`,
   ];
-  const power = setup.coilPowerW !== undefined ? ` (${Number(setup.coilPowerW.toPrecision(3))} W)` : '';
   const field = setup.peakFieldT !== undefined ? ` for up to ${Number((setup.peakFieldT * 1e4).toPrecision(3))} G` : '';
-  out.push(`Slower coils${field}${power}: the windings dissipate their power as heat and can overheat without cooling; check the current density and the cooling; ${LAB_RULES}.`);
+  out.push(`Slower coils${field}: the windings dissipate their power as heat and can overheat without cooling; check the current density and the cooling; ${LAB_RULES}.`);
   return out;
 }
