@@ -100,6 +100,7 @@ describe('panel HTML', () => {
   it('offers the six views, three exports and the field and range choices', () => {
     expect(html.match(/role="tab"/g)).toHaveLength(6);
     expect(html).toContain('data-view="fieldmap"');
+    expect(html).toContain('data-view="slower"');
     expect(html).toContain('data-view="resonance"');
     expect(html).toContain('data-view="residuals"');
     expect(html).toContain('data-export="svg"');

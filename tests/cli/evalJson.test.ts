@@ -12,7 +12,7 @@ function evalJson(file: string) {
 }
 
 describe('sublevel eval --format json', () => {
-  it.each(['lithium-beam', 'rubidium-bias', 'handmade-species', 'mistakes', 'lithium-whole-term', 'fit-rubidium'])('%s validates against the published JSON Schema', (f) => {
+  it.each(['lithium-beam', 'rubidium-bias', 'handmade-species', 'mistakes', 'lithium-whole-term', 'fit-rubidium', 'sodium-slower'])('%s validates against the published JSON Schema', (f) => {
     const { doc } = evalJson(`examples/${f}.sublevel`);
     const ok = validate(doc);
     expect(validate.errors ?? []).toEqual([]);

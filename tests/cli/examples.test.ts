@@ -24,7 +24,7 @@ describe('sublevel check on the bundled examples', () => {
   });
 
   it('finds the demo setups clean (no errors, no warnings; notes allowed)', () => {
-    for (const f of ['lithium-beam', 'rubidium-bias', 'handmade-species', 'shared-species-demo', 'shared/alkali-levels', 'lithium-whole-term', 'fit-rubidium', 'rubidium-spectrum', 'coils-and-wires']) {
+    for (const f of ['lithium-beam', 'rubidium-bias', 'handmade-species', 'shared-species-demo', 'shared/alkali-levels', 'lithium-whole-term', 'fit-rubidium', 'rubidium-spectrum', 'coils-and-wires', 'sodium-slower']) {
       const r = cli('check', `examples/${f}.sublevel`);
       expect(r.out.split('\n').filter((l) => / (error|warning) /.test(l)), f).toEqual([]);
       expect(r.code, f).toBe(0);

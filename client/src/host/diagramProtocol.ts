@@ -3,7 +3,7 @@ export const DIAGRAM_REQUEST = 'sublevel/diagram';
 
 export interface DiagramParams {
   uri: string;
-  view: 'levels' | 'pattern' | 'lines' | 'resonance' | 'residuals' | 'fieldmap';
+  view: 'levels' | 'pattern' | 'lines' | 'resonance' | 'residuals' | 'fieldmap' | 'slower';
   /** 0-based cursor line, to pick the level, beam or line being edited. */
   line?: number;
   theme: 'panel' | 'export';

@@ -4,7 +4,7 @@
  * shapes below and return undefined for everything else. No DOM, so both sides can use it.
  */
 
-export const VIEWS = ['levels', 'pattern', 'lines', 'resonance', 'residuals', 'fieldmap'] as const;
+export const VIEWS = ['levels', 'pattern', 'lines', 'resonance', 'residuals', 'fieldmap', 'slower'] as const;
 export type View = (typeof VIEWS)[number];
 export type ExportFormat = 'svg' | 'csv' | 'png';
 export const FIELD_UNITS = ['G', 'mT', 'T'] as const;

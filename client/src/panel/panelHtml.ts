@@ -21,6 +21,7 @@ const VIEW_NAMES: Record<View, string> = {
   resonance: 'Resonance vs field',
   residuals: 'Fit residuals',
   fieldmap: 'Field map',
+  slower: 'Slower',
 };
 
 function escapeHtml(s: string): string {

@@ -21,6 +21,7 @@ import { profileSpec, runProfile } from './profileCommand';
 import { runSpectrum, spectrumSpec } from './spectrumCommand';
 import { renderSpec, runRender } from './renderCommand';
 import { runSweep, sweepSpec } from './sweepCommand';
+import { runSlower, slowerSpec } from './slowerCommand';
 import { suggestNames } from '../format/didYouMean';
 
 interface Command {
@@ -39,6 +40,7 @@ const COMMANDS: readonly Command[] = [
   { spec: diffSpec, run: runDiff },
   { spec: fitSpec, run: runFit },
   { spec: fieldSpec, run: runField },
+  { spec: slowerSpec, run: runSlower },
 ];
 
 const SPECS = COMMANDS.map((c) => c.spec);

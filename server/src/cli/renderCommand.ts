@@ -25,7 +25,7 @@ export const renderSpec: CommandSpec = {
   summary: 'a diagram as SVG (light palette, for reports) or PNG (print resolution), or the numbers behind it as CSV',
   options: {
     ...ROOT_OPTION,
-    view: { value: 'VIEW', choices: RENDER_VIEWS, help: 'levels: sublevel energies against field (default); pattern: detector pattern; lines: line components; resonance: a transition frequency against field; residuals: a fit\'s data, model and residuals; fieldmap: |B| along a line through the field sources, the sources drawn beside it' },
+    view: { value: 'VIEW', choices: RENDER_VIEWS, help: 'levels: sublevel energies against field (default); pattern: detector pattern; lines: line components; resonance: a transition frequency against field; residuals: a fit\'s data, model and residuals; fieldmap: |B| along a line through the field sources, the sources drawn beside it; slower: a slower\'s field profile and speeds along it' },
     level: { value: 'NAME', help: 'the level to draw (levels view); default: the first beam\'s level, else the first level' },
     field: { value: 'NAME', help: 'the field or magnet to mark; default: the first one' },
     beam: { value: 'NAME', help: 'the beam (pattern view), when the file has more than one' },
@@ -34,6 +34,7 @@ export const renderSpec: CommandSpec = {
     fit: { value: 'NAME', help: 'the fit (residuals view); default: the first one' },
     source: { value: 'NAMES', help: 'the field sources to draw (fieldmap view), comma-separated; default: all' },
     scale: { value: 'SCALE', choices: ['auto', 'linear', 'log'], help: 'the |B| axis of the fieldmap view: log when the field spans orders of magnitude (auto, the default), or as asked' },
+    slower: { value: 'NAME', help: 'the slower (slower view); default: the first one' },
     from: { value: 'FIELD', help: 'start of the field axis (levels and resonance views), e.g. 0 or 10G' },
     to: { value: 'FIELD', help: 'end of the field axis, e.g. 50G or 0.1T' },
     unit: { value: 'UNIT', choices: FIELD_UNITS, help: 'unit of the field axis: G, mT or T' },
@@ -83,6 +84,8 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   if (sources !== undefined) req.sourceNames = selectSources(model, sources);
   const scale = stringOption(args, 'scale', ['auto', 'linear', 'log']);
   if (scale !== undefined) req.fieldScale = scale as 'auto' | 'linear' | 'log';
+  const slower = selectName('slower', model.slowers.map((s) => s.name), stringOption(args, 'slower'));
+  if (slower !== undefined) req.slowerName = slower;
   const d = diagramFor(analysis, req);
   if (!d.ok) {
     const listed = listErrorsFirst(file, analysis, ctx);

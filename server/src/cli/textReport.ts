@@ -19,6 +19,7 @@ import type {
 } from '../eval/resultTypes';
 import { table } from './table';
 import { sourceHeadline, sourceLines } from '../eval/fieldSourceText';
+import { slowerReport } from '../eval/slowerText';
 
 export function textReport(file: string, r: EvaluationResult): string[] {
   const out: string[] = [];
@@ -54,6 +55,7 @@ export function textReport(file: string, r: EvaluationResult): string[] {
   for (const b of r.beams) out.push(...beamReport(b));
   for (const l of r.lines) out.push(...lineReport(l, atFieldText, r.diagnostics));
   for (const x of r.resonances) out.push(...resonanceReport(x, atFieldText));
+  for (const s of r.slowers ?? []) out.push('', ...slowerReport(s));
   const counts = (sev: string): number => r.diagnostics.filter((d) => d.severity === sev).length;
   out.push('');
   const plural = (n: number, word: string): string => `${n} ${word}${n === 1 ? '' : 's'}`;

@@ -16,6 +16,7 @@ import { attachUncertainty } from './uncertainty/attach';
 import { evaluateFit } from './fitEvaluation';
 import { evaluateFieldSource, sourceEvalInput } from './fieldSourceEvaluation';
 import { sumField } from '../physics/fields';
+import { evaluateSlower } from './slowerEvaluation';
 import { EVAL_RULES } from './evalCodes';
 import { evaluateLevel, type EvaluationNote, type WorkingField } from './levelEvaluation';
 import {
@@ -77,6 +78,8 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   // Sources print fields in the unit family the file writes fields in (the first field or magnet that gives a unit).
   const fieldUnit = fields.find((f) => f.unit !== undefined)?.unit;
   const fieldSources = model.sources.map((s) => evaluateFieldSource(sourceEvalInput(s, fieldUnit), sumField, sourceProblems));
+  const slowerProblems: Problem[] = [];
+  const slowers = model.slowers.map((s) => evaluateSlower(s, gJOf, model.settings, slowerProblems));
   const result: EvaluationResult = {
     format: EVALUATION_FORMAT,
     version: EVALUATION_VERSION,
@@ -110,11 +113,12 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     resonances,
     ...(fits.length > 0 ? { fits } : {}),
     ...(fieldSources.length > 0 ? { fieldSources } : {}),
+    ...(slowers.length > 0 ? { slowers } : {}),
     diagnostics: [],
   };
   const uncertainty = attachUncertainty(model, result, gJOf);
   if (uncertainty.inputs) result.uncertainty_inputs = uncertainty.inputs;
-  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...sourceProblems, ...uncertainty.problems]);
+  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...sourceProblems, ...slowerProblems, ...uncertainty.problems]);
   result.diagnostics = problems.map(toDiagnosticResult);
   return { result, problems };
 }

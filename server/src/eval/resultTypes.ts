@@ -5,6 +5,7 @@
  */
 import type { FitResult } from './fitResultTypes';
 import type { FieldSourceResult } from './fieldSourceResultTypes';
+import type { SlowerResult } from './slowerResultTypes';
 import type { Problem } from '../format/ast';
 
 export const EVALUATION_FORMAT = 'sublevel-evaluation';
@@ -354,6 +355,7 @@ export interface ResonanceResult {
 
 export type { FitResult } from './fitResultTypes';
 export type { FieldSourceResult, FieldSourcePartResult, WindingResult } from './fieldSourceResultTypes';
+export type { SlowerResult, SlowerSample, SlowerFlight } from './slowerResultTypes';
 
 export interface DiagnosticResult {
   code: string;
@@ -385,6 +387,8 @@ export interface EvaluationResult {
   fits?: FitResult[];
   /** The field sources (`coil`, `solenoid`, `wire`, `slab`; docs/fields.md); absent when the file has none. */
   fieldSources?: FieldSourceResult[];
+  /** The `slower` blocks' results (docs/slower.md); absent when the file has none. */
+  slowers?: SlowerResult[];
   diagnostics: DiagnosticResult[];
   /** The independent uncertain inputs (standard uncertainties `u`, k = 1); absent when there are none. */
   uncertainty_inputs?: { id: string; label: string; value: number; u: number }[];

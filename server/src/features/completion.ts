@@ -35,6 +35,7 @@ const BLOCK_WORD_DETAIL: Record<BlockKind, string> = {
   solenoid: 'solenoid <name> — radius, length, turns, current, centre, axis, conductor',
   wire: 'wire <name> — a straight wire: current, through, direction, length, return',
   slab: 'slab <name> — a magnetised block: size, centre, magnetisation',
+  slower: 'slower <name> — line, capture, final, safety, design, bias, saturation, sources',
 };
 
 function statementStart(c: LineContext): CompletionItem[] {

@@ -17,6 +17,7 @@ const KIND: Record<BlockKind, SymbolKind> = {
   solenoid: SymbolKind.Field,
   wire: SymbolKind.Field,
   slab: SymbolKind.Field,
+  slower: SymbolKind.Method,
 };
 
 function settingSymbol(s: SettingNode): DocumentSymbol {

@@ -18,6 +18,7 @@ import { lineSection } from './hover/lineSection';
 import { magnetSection } from './hover/magnetSection';
 import { quantitySection } from './hover/quantitySection';
 import { resonanceSection } from './hover/resonanceSection';
+import { slowerSection } from './hover/slowerSection';
 import { speciesSection } from './hover/speciesSection';
 import { sourceSection } from './hover/sourceSection';
 import { termSection } from './hover/termSection';
@@ -116,6 +117,10 @@ function blockSections(block: BlockNode, ctx: HoverContext): string[] {
     case 'fit':
     case 'data':
       return fitSectionsOf(block, ctx);
+    case 'slower': {
+      const s = ctx.analysis.result?.slowers?.find((x) => x.name === block.name?.text);
+      return s ? [slowerSection(s)] : [];
+    }
     default:
       return fieldSourceSections(block, ctx);
   }

@@ -32,6 +32,7 @@ const NAME_TYPE: Record<NameUse['kind'], TokenType> = {
   data: 'variable',
   fit: 'variable',
   source: 'variable',
+  slower: 'variable',
 };
 
 class Collector {

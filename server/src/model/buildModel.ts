@@ -16,11 +16,12 @@ import { buildSpecies } from './speciesBuilder';
 import { buildResonance } from './resonanceBuilder';
 import { buildData } from './dataBuilder';
 import { buildFit } from './fitBuilder';
+import { buildSlower } from './slowerBuilder';
 import type { DataModel, FitRequestModel } from './fitTypes';
 import type { SetupSources } from './sources';
 import { buildFieldSource, isSourceBlock } from './sourceBuilder';
 import { checkSourceOverlaps } from './sourceOverlaps';
-import type { BeamModel, FieldModel, FieldSourceModel, LineModel, MagnetModel, NameUse, ResonanceModel, SetupModel, SpeciesModel, UsedFileModel } from './types';
+import type { BeamModel, FieldModel, FieldSourceModel, LineModel, MagnetModel, NameUse, ResonanceModel, SetupModel, SlowerModel, SpeciesModel, UsedFileModel } from './types';
 import { resolveUses, rootUseContext, type UseContext } from './useResolver';
 
 /**
@@ -89,6 +90,13 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
       if (r) resonances.declare(r, problems);
     }
   }
+  // Slowers name lines.
+  const slowers = new NameIndex<SlowerModel>('slower', names);
+  for (const block of doc.blocks) {
+    if (block.kind !== 'slower') continue;
+    const s = buildSlower(block, { lines, sources: fieldSources }, problems);
+    if (s) slowers.declare(s, problems);
+  }
   // Data name beams and levels; fits name data: so they come last.
   const data = new NameIndex<DataModel>('data', names);
   const fits = new NameIndex<FitRequestModel>('fit', names);
@@ -114,6 +122,7 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
     resonances: resonances.all(),
     data: data.all(),
     fits: fits.all(),
+    slowers: slowers.all(),
     settings,
     names,
     problems: problems.items,

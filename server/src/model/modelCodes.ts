@@ -93,6 +93,9 @@ export const MODEL_RULES = {
   'source-return-on-wire': { severity: 'error', summary: 'A return wire on the same line as its wire.' },
   'source-overlap': { severity: 'warning', summary: 'Two sources in the same place: two equal loops at one place, a wire through a loop’s wire, or two wires on one line.' },
   'source-listed-twice': { severity: 'warning', summary: 'A source named twice in one list; it is counted once.' },
+  'slower-incomplete': { severity: 'warning', summary: 'A slower lacks its line, capture speed or final speed.' },
+  'slower-final-not-below-capture': { severity: 'error', summary: 'A slower whose final speed is not below its capture speed.' },
+  'slower-safety-out-of-range': { severity: 'error', summary: 'A slower safety factor η outside (0, 1].' },
 } as const satisfies Record<string, RuleInfo>;
 
 export type ModelCode = keyof typeof MODEL_RULES;

@@ -234,6 +234,34 @@ export interface ResonanceModel {
   twoPhoton: boolean;
 }
 
+/** A Zeeman slower on a cycling line (docs/slower.md). Speeds in m/s, fields in T. */
+export interface SlowerModel {
+  name: string;
+  node: BlockNode;
+  nameRange: Range;
+  line?: LineModel;
+  /** Where the `line` setting is written (diagnostics about the line go there). */
+  lineRange?: Range;
+  captureMPerS?: Valued<number>;
+  finalMPerS?: Valued<number>;
+  /** η on a_max = ħkΓ/2m; 0.5 when absent. */
+  safety: Valued<number>;
+  design: 'decreasing' | 'increasing' | 'spin_flip';
+  designRange?: Range;
+  /** B_bias of the profile; the design's default when absent. */
+  biasT?: Valued<number>;
+  /** s0 = I/I_sat; 2 when absent. */
+  saturation: Valued<number>;
+  /** `repump = on`: the file accepts a line that does not cycle (its warning becomes a note). */
+  repump: boolean;
+  /** Coils whose field along the slower is checked against the ideal (`sources`). */
+  sources?: FieldSourceModel[];
+  /** Where the slower begins (z = 0) in the sources' coordinates, m (`start`; default the origin). */
+  start?: Valued<Vec3>;
+  /** Unit vector of the atoms' flight (`axis`; default +z). */
+  axis?: Valued<Vec3>;
+}
+
 export interface SettingsModel {
   /** Electron spin g-factor for Landé formulas: CODATA |g_e| or exactly 2. */
   gS: 'exact' | 2;
@@ -242,7 +270,7 @@ export interface SettingsModel {
 
 /** A place in the file that names something, for go-to-definition, references and rename. */
 export interface NameUse {
-  kind: 'species' | 'level' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'data' | 'fit' | 'source';
+  kind: 'species' | 'level' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'data' | 'fit' | 'source' | 'slower';
   name: string;
   range: Range;
   /** The declaration it resolves to, if any; `uri` is set when it is declared in another file (through `use`). */
@@ -276,6 +304,8 @@ export interface SetupModel {
   /** Measured points (`data` blocks) and the fits asked of them (`fit` blocks); see docs/fit.md. */
   data: DataModel[];
   fits: FitRequestModel[];
+  /** The `slower` blocks (docs/slower.md). */
+  slowers: SlowerModel[];
   settings: SettingsModel;
   names: NameUse[];
   /** Problems found while building the model (the parser's own are in doc.problems). */

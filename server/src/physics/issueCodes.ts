@@ -119,6 +119,18 @@ export const PHYSICS_RULES = {
   'beam-nothing-to-resolve': { severity: 'warning', summary: 'Fewer than two peaks: there is nothing to resolve.' },
   'beam-resolved-at-lower-bound': { severity: 'info', summary: 'Already resolved at the lower bound of a resolving search.' },
   'beam-unresolvable-within-bound': { severity: 'warning', summary: 'No value up to the search bound resolves the peaks.' },
+  // Slowers (slower/).
+  'slower-bad-transition': { severity: 'error', summary: 'A slower line without a positive wavelength, upper-level lifetime or atomic mass.' },
+  'slower-no-zeeman-shift': { severity: 'error', summary: 'The driven pair of a slower line has no Zeeman shift: no field keeps it resonant.' },
+  'slower-bad-speeds': { severity: 'error', summary: 'A slower whose capture speed is not positive or whose final speed is not below it.' },
+  'slower-bad-safety': { severity: 'error', summary: 'A slower safety factor η outside (0, 1].' },
+  'slower-bad-saturation': { severity: 'error', summary: 'A slower saturation parameter that is not positive.' },
+  'slower-bad-bias': { severity: 'error', summary: 'A slower bias field that is not finite.' },
+  'slower-design-mismatch': { severity: 'info', summary: 'A bias that makes the profile cross zero when the design is not spin-flip, or the reverse.' },
+  'slower-no-sublevels': { severity: 'error', summary: 'The engine gave no sublevels for an end of a slower line.' },
+  'slower-no-pair': { severity: 'error', summary: 'No circularly driven pair of sublevels joins the ends of a slower line.' },
+  'slower-not-cycling': { severity: 'warning', summary: 'A slower line that is not a stretched J → J+1 pair: the atoms are pumped dark.' },
+  'slower-simulation-too-long': { severity: 'warning', summary: "A slower atom's flight needed more steps than allowed; no final speed." },
   // Field sources (fields/).
   'source-invalid-part': { severity: 'error', summary: 'A coil, solenoid, wire or block part with a size, direction or current the field formulas cannot use.' },
   'source-point-on-loop': { severity: 'warning', summary: 'A field point on the wire of a loop, where a thin loop has no field.' },

@@ -13,7 +13,7 @@ export function estimateTextWidth(s: string, fontSize = 11): number {
 }
 
 export interface FrameSpec {
-  view: 'levels' | 'pattern' | 'lines' | 'resonance' | 'residuals' | 'fieldmap';
+  view: 'levels' | 'pattern' | 'lines' | 'resonance' | 'residuals' | 'fieldmap' | 'slower';
   idBase: string;
   width: number;
   height: number;

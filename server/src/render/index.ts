@@ -19,6 +19,8 @@ export { renderLines } from './lines';
 export { renderResonance } from './resonance';
 export { renderResiduals, type ResidualsViewData } from './residuals';
 export { fitCsv } from './fitCsv';
+export { slowerCsv } from './slowerCsv';
+export { renderSlower, type SlowerViewData } from './slower';
 export { levelsCsv, linesCsv, patternCsv, resonanceCsv, spectrumCsv, type SpectrumColumns } from './csv';
 export { escapeXml } from './svgText';
 export { fieldMapCsv, renderFieldMap, type FieldMapViewData } from './fieldMap';

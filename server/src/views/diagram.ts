@@ -8,15 +8,16 @@ import { gJLookup } from '../eval/gJLookup';
 import { workingFields } from '../eval/evaluate';
 import type { BeamModel, LevelModel, SetupModel } from '../model/types';
 import type { WorkingField } from '../eval/levelEvaluation';
-import { fitCsv, levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, renderResiduals, renderResonance, resonanceCsv, type FieldUnit, type RenderTheme } from '../render';
+import { fitCsv, levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, renderResiduals, renderResonance, resonanceCsv, renderSlower, slowerCsv, type FieldUnit, type RenderTheme } from '../render';
 import { residualsView } from './residualsView';
+import { slowerView } from './slowerView';
 import { resonanceView } from './resonanceView';
 import { lineFieldIndex, linesView } from './linesView';
 import { levelsView } from './levelsView';
 import { patternView } from './patternView';
 import { fieldMapFor } from './fieldMapDiagram';
 
-export const DIAGRAM_VIEWS = ['levels', 'pattern', 'lines', 'resonance', 'residuals', 'fieldmap'] as const;
+export const DIAGRAM_VIEWS = ['levels', 'pattern', 'lines', 'resonance', 'residuals', 'fieldmap', 'slower'] as const;
 export type DiagramView = (typeof DIAGRAM_VIEWS)[number];
 
 export function isDiagramView(v: unknown): v is DiagramView {
@@ -35,6 +36,7 @@ export interface DiagramRequest {
   lineName?: string;
   resonanceName?: string;
   fitName?: string;
+  slowerName?: string;
   /** Levels view: field range and axis unit chosen by the user (CLI --from/--to/--unit, panel range control). */
   fromT?: number;
   toT?: number;
@@ -90,6 +92,14 @@ function drawn(analysis: Analysis, model: SetupModel, req: DiagramRequest): Diag
     return { ok: true, title: v.title, svg: renderResonance(v, theme), csv: resonanceCsv(v, about) };
   }
   if (req.view === 'fieldmap') return fieldMapFor(model, req, theme);
+  if (req.view === 'slower') {
+    const all = analysis.result?.slowers ?? [];
+    const s = all.find((x) => x.name === req.slowerName) ?? all.find((x) => contains(model.slowers.find((m) => m.name === x.name)?.node.range ?? NOWHERE, req.line)) ?? all[0];
+    if (!s) return { ok: false, message: 'No slower to draw: add a `slower` block with line, capture and final (see docs/slower.md).' };
+    const v = slowerView(s);
+    if (!v) return { ok: false, message: `Slower '${s.name}' cannot be computed yet; see the Problems view.` };
+    return { ok: true, title: v.title, svg: renderSlower(v, theme), csv: slowerCsv(s, req.source ?? '') };
+  }
   if (req.view === 'residuals') {
     const fits = analysis.result?.fits ?? [];
     const f = fits.find((x) => x.name === req.fitName) ?? fits.find((x) => contains(model.fits.find((m) => m.name === x.name)?.node.range ?? NOWHERE, req.line)) ?? fits.find((x) => x.kind !== 'calibration') ?? fits[0];

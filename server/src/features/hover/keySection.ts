@@ -16,6 +16,7 @@ const BLOCK_WORDS: Record<BlockKind, string> = {
   solenoid: 'a finite solenoid, taken as a uniform current sheet',
   wire: 'a straight thin wire, infinite unless `length` is given, optionally with a parallel return wire',
   slab: 'a uniformly magnetised rectangular block with edges along x, y and z',
+  slower: 'a Zeeman slower on a cycling line: the ideal field profile B(z), its length, the laser detuning, and a check of a coil design against it',
 };
 
 const LEVEL_KEYS: Record<string, string> = {
@@ -94,6 +95,16 @@ const BLOCK_KEYS: Record<string, string> = {
   'slab.size': 'edge lengths along x, y and z, e.g. 10, 20, 5 mm',
   'slab.centre': 'centre of the block: x, y, z with a unit (default the origin)',
   'slab.magnetisation': 'μ0·M in T (or M in A/m) along a direction: e.g. 1.2 T along y',
+  'slower.line': 'the cycling line the slowing laser drives (a line of this file, lower -> upper, J -> J+1)',
+  'slower.capture': 'capture speed v0: the fastest atoms the slower takes — m/s',
+  'slower.final': 'final speed at the exit — m/s',
+  'slower.safety': 'safety factor η on the largest deceleration ħkΓ/2m, in (0, 1]; the profile asks for η a_max',
+  'slower.design': 'decreasing, increasing or spin_flip: how |B| runs along the slower',
+  'slower.bias': 'the offset B_bias of B(z) = B_bias ± ΔB √(1 − z/L0); sets the laser detuning (default: per design)',
+  'slower.saturation': 'saturation parameter s0 = I/I_sat of the slowing beam (default 2)',
+  'slower.sources': 'coils (field sources) whose field along the slower axis is checked against the ideal profile',
+  'slower.start': 'where the slower begins (z = 0) in the coordinates of the sources; default the origin',
+  'slower.axis': 'the direction the atoms fly along the slower (the laser comes the other way); default z',
   'settings.g_s': 'electron spin g-factor in the Landé formula: exact (CODATA) or 2 (textbook fractions)',
   'settings.reduced_mass': 'on: g_L = 1 − m_e/M instead of 1',
 };

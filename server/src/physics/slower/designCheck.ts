@@ -1,0 +1,42 @@
+/**
+ * A field B(z) along the slower (the ideal one, or a coil design's) against what the atoms need.
+ * At each z the laser is resonant with one speed, v_res = λ (shift·B − δ); an atom riding that
+ * resonance needs the deceleration −v_res dv_res/dz. Where that exceeds what the light can give,
+ * a_max s0/(1 + s0), the atoms fall behind the resonance and leave it: they are dropped there.
+ */
+import { idealField } from './idealProfile';
+import type { AxisField, DesignCheck, IdealProfile } from './types';
+
+export interface CheckInput {
+  profile: IdealProfile;
+  field: AxisField;
+  /** Zeeman shift of the driven pair per tesla, signed as the profile uses it, Hz/T. */
+  shiftHzPerT: number;
+  wavelengthM: number;
+  saturation: number;
+  /** Samples over [0, L] (default 201). */
+  points?: number;
+}
+
+export function checkDesign(input: CheckInput): DesignCheck {
+  const { profile: p, field, shiftHzPerT, wavelengthM } = input;
+  const n = Math.max(2, Math.round(input.points ?? 201));
+  const reachable = (p.maxDecelerationMPerS2 * input.saturation) / (1 + input.saturation);
+  const samples: DesignCheck['samples'] = [];
+  let worst = 0;
+  let dropAtM: number | undefined;
+  let capture = 0;
+  for (let i = 0; i < n; i++) {
+    const zM = (p.lengthM * i) / (n - 1);
+    const at = field(zM);
+    const resonantMPerS = wavelengthM * (shiftHzPerT * at.BT - p.detuningHz);
+    const slope = wavelengthM * shiftHzPerT * at.dBdzTPerM;
+    // Past the last sample the ideal profile's derivative diverges at the stop point only, never inside [0, L).
+    const neededMPerS2 = resonantMPerS > 0 ? -resonantMPerS * slope : 0;
+    samples.push({ zM, idealT: idealField(p, zM).BT, fieldT: at.BT, resonantMPerS, neededMPerS2 });
+    worst = Math.max(worst, neededMPerS2 / p.designDecelerationMPerS2);
+    capture = Math.max(capture, resonantMPerS);
+    if (dropAtM === undefined && neededMPerS2 > reachable) dropAtM = zM;
+  }
+  return { samples, worstOverDesign: worst, captureMPerS: capture, reachableMPerS2: reachable, ...(dropAtM !== undefined ? { dropAtM } : {}) };
+}

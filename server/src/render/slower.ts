@@ -1,0 +1,96 @@
+/**
+ * A slower along its length: the field B(z) it needs (and the coils' field, when it names coils)
+ * above, and the speeds below — the speed resonant with the laser at each z and one atom's
+ * simulated speed, which rides just below it. Where the coils drop the atoms, a rule.
+ */
+import { scaleLinear } from 'd3-scale';
+import { line } from 'd3-shape';
+import { bottomAxis, leftAxis, type PlotBox } from './axes';
+import { emptyDiagram, svgDocument } from './frame';
+import { legendRows, type LegendEntry } from './legend';
+import { paletteFor } from './palette';
+import { finiteExtent } from './sampled';
+import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
+import { engineeringUnit, formatIn } from './units';
+import type { RenderTheme } from './viewData';
+
+export interface SlowerViewData {
+  title: string;
+  zM: number[];
+  idealT: number[];
+  /** The coils' field along the axis, when there are coils. */
+  coilsT?: number[];
+  resonantMPerS: number[];
+  /** The simulated atom's speed; NaN past where it stopped. */
+  flightMPerS: number[];
+  dropAtM?: number;
+  zeroCrossingM?: number;
+}
+
+const WIDTH = 760;
+const LEFT = 84;
+const RIGHT = WIDTH - 20;
+const GAUSS = { factor: 1e-4, symbol: 'G' };
+
+export function renderSlower(d: SlowerViewData, theme: RenderTheme): string {
+  const pal = paletteFor(theme);
+  const idBase = `sl-s${shortHash(`${d.title}|${d.zM.length}`)}`;
+  const zx = finiteExtent(d.zM);
+  const bx = finiteExtent([...d.idealT, ...(d.coilsT ?? [])]);
+  const vx = finiteExtent([...d.resonantMPerS, ...d.flightMPerS, 0]);
+  if (!zx || !bx || !vx || zx[0] === zx[1]) return emptyDiagram('slower', idBase, d.title, 'No profile to draw.', pal);
+
+  const legend: LegendEntry[] = [{ label: 'ideal field', colour: pal.series[0], line: { width: 2 } }];
+  if (d.coilsT) legend.push({ label: 'coils', colour: pal.series[1], line: { width: 2, dash: '6 3' } });
+  legend.push({ label: 'resonant speed', colour: pal.series[2], line: { width: 2 } });
+  legend.push({ label: 'simulated atom', colour: pal.text, line: { width: 1.5, dash: '2 3' } });
+  const legendSvg = legendRows(legend, LEFT, 46, RIGHT - LEFT, pal);
+  const top = 46 + legendSvg.height + 10;
+  const upper: PlotBox = { left: LEFT, right: RIGHT, top, bottom: top + 190 };
+  const lower: PlotBox = { left: LEFT, right: RIGHT, top: upper.bottom + 24, bottom: upper.bottom + 24 + 170 };
+  const height = lower.bottom + 56;
+  const x = scaleLinear().domain(zx).range([LEFT, RIGHT]);
+  const pad = (a: number, b: number): [number, number] => [a - (b - a) * 0.06, b + (b - a) * 0.06];
+  const yb = scaleLinear().domain(pad(Math.min(bx[0], 0), Math.max(bx[1], 0))).range([upper.bottom, upper.top]).nice();
+  const yv = scaleLinear().domain(pad(0, vx[1])).range([lower.bottom, lower.top]).nice();
+  const zUnit = engineeringUnit(zx[1], 'm');
+  const vUnit = { factor: 1, symbol: 'm/s' };
+
+  const body: string[] = [legendSvg.svg];
+  body.push(bottomAxis(x, zUnit, '', upper, pal));
+  body.push(leftAxis(yb, GAUSS, 'B', upper, LEFT, pal));
+  body.push(bottomAxis(x, zUnit, 'z', lower, pal));
+  body.push(leftAxis(yv, vUnit, 'v', lower, LEFT, pal));
+  body.push(el('path', { class: 'sl-zero', d: `M${px(LEFT)},${px(yb(0))}H${px(RIGHT)}`, stroke: pal.muted, 'stroke-dasharray': '2 4', fill: 'none' }));
+  const idx = d.zM.map((_, k) => k);
+  const curve = (ys: number[], y: (v: number) => number): string =>
+    line<number>().defined((k) => Number.isFinite(ys[k]!)).x((k) => x(d.zM[k]!)).y((k) => y(ys[k]!)).digits(2)(idx) ?? '';
+  const series = (kind: string, label: string, ys: number[], y: (v: number) => number, colour: string, width: number, dash?: string): string =>
+    el('g', { class: 'sl-curve', 'data-kind': kind, 'data-label': label, fill: 'none', stroke: colour, 'stroke-width': width, ...(dash ? { 'stroke-dasharray': dash } : {}) }, [titleEl(label), el('path', { d: curve(ys, y) })]);
+  body.push(series('ideal', 'ideal field B(z)', d.idealT, yb, pal.series[0]!, 2));
+  if (d.coilsT) body.push(series('coils', "the coils' field", d.coilsT, yb, pal.series[1]!, 2, '6 3'));
+  body.push(series('resonant', 'speed resonant with the laser', d.resonantMPerS, yv, pal.series[2]!, 2));
+  body.push(series('flight', 'simulated atom', d.flightMPerS, yv, pal.text, 1.5, '2 3'));
+  const rule = (kind: string, zM: number, label: string, colour: string): string =>
+    el('g', { class: `sl-${kind}`, 'data-kind': kind, 'data-z-m': dataNum(zM) }, [
+      titleEl(`${label} at z = ${formatIn(zM, zUnit)}`),
+      el('path', { d: `M${px(x(zM))},${px(upper.top)}V${px(lower.bottom)}`, stroke: colour, 'stroke-dasharray': '4 3', fill: 'none' }),
+      el('text', { x: Math.min(RIGHT - 4, x(zM) + 4), y: upper.top + 12, 'font-size': 11, fill: colour, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text(label)),
+    ]);
+  if (d.zeroCrossingM !== undefined) body.push(rule('zero-crossing', d.zeroCrossingM, 'B = 0', pal.muted));
+  if (d.dropAtM !== undefined) body.push(rule('drop', d.dropAtM, 'atoms dropped', pal.bad));
+  const desc = `Field from ${formatIn(d.idealT[0]!, GAUSS)} to ${formatIn(d.idealT.at(-1)!, GAUSS)} over ${formatIn(zx[1], zUnit)}; resonant speed from ${formatIn(d.resonantMPerS[0]!, vUnit)} to ${formatIn(d.resonantMPerS.at(-1)!, vUnit)}${d.dropAtM !== undefined ? `; atoms dropped at ${formatIn(d.dropAtM, zUnit)}` : ''}.`;
+  return svgDocument(
+    {
+      view: 'slower',
+      idBase,
+      width: WIDTH,
+      height,
+      title: d.title,
+      desc,
+      pal,
+      rootData: { 'data-x-name': 'z', 'data-x-unit': zUnit.symbol, 'data-x-factor': dataNum(zUnit.factor), 'data-x-domain': `${dataNum(zx[0])},${dataNum(zx[1])}`, 'data-x-range': `${px(LEFT)},${px(RIGHT)}` },
+    },
+    body,
+  );
+}
