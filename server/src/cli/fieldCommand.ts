@@ -43,7 +43,7 @@ export const fieldSpec: CommandSpec = {
   },
   notes: [
     'Positions use the file\'s length units (m, cm, mm, um); zero needs none.',
-    'A point on a wire or a loop has no field value: the text says so, JSON gives null and CSV an empty cell.',
+    'A point on a wire, a loop, a winding or a block\'s face has no field value: the text says so, JSON gives null and CSV empty cells (with a note on stderr).',
   ],
 };
 
@@ -80,6 +80,11 @@ export function runField(args: ParsedArgs, ctx: CliContext): number {
     writeOutputFile(out, text + '\n', ctx.fsys);
     ctx.io.err(`wrote the field at ${rows.length} point${rows.length === 1 ? '' : 's'} to ${out}`);
   } else ctx.io.out(text);
+  // A CSV's empty cells and a JSON's nulls are easy to miss: say on stderr why they are there.
+  const onSource = rows.filter((r) => r.onSource !== undefined);
+  if (onSource.length > 0 && (format !== 'text' || out)) {
+    ctx.io.err(`note: ${onSource.length} point${onSource.length === 1 ? ' lies' : 's lie'} on a conductor and ${onSource.length === 1 ? 'has' : 'have'} no field value (first: ${onSource[0]!.onSource})`);
+  }
   return reportErrors(file, analysis, ctx) > 0 ? 1 : 0;
 }
 
