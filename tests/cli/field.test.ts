@@ -112,3 +112,16 @@ describe('sublevel field: mistakes', () => {
     expect(cli('field', '--help').out).toContain('--grid RANGES');
   });
 });
+
+describe('sublevel field: large grids', () => {
+  it('prints a 150 × 150 grid as text (the unit choice looks at every value without overflowing the stack)', async () => {
+    const { fieldText } = await import('../../server/src/cli/fieldCommand');
+    const { fieldPointPlan } = await import('../../server/src/cli/fieldPoints');
+    const plan = fieldPointPlan({ grid: 'x=-1:1cm,y=-1:1cm', points: '150x150' });
+    const rows = plan.points.map((point) => ({ point, sample: { B: [1e-3, 0, 0] as const, gradient: [[0.1, 0, 0], [0, -0.1, 0], [0, 0, 0]] as const } }));
+    const lines = fieldText(['g'], plan, rows, undefined);
+    expect(lines).toHaveLength(1 + 2 + 150 * 150);
+    expect(lines[0]).toBe('field of g on a 150 × 150 grid:');
+    expect(lines[2]!.startsWith('------')).toBe(true);
+  });
+});

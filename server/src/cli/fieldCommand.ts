@@ -107,13 +107,20 @@ export function sampleField(sources: readonly FieldSourceModel[], plan: FieldPoi
 
 // ---- text ----
 
+/** The largest |value| over all rows, by a loop: spreading a 250 000-point grid into Math.max overflows the stack. */
+function largest(rows: readonly FieldPointRow[], values: (r: FieldPointRow) => readonly number[]): number {
+  let max = 0;
+  for (const r of rows) for (const v of values(r)) if (Math.abs(v) > max) max = Math.abs(v);
+  return max;
+}
+
 interface TextUnits {
   field: { name: string; factor: number };
   gradient: { name: string; factor: number };
 }
 
 function textUnits(choice: FieldUnitName | undefined, rows: readonly FieldPointRow[]): TextUnits {
-  const max = Math.max(0, ...rows.map((r) => (r.sample ? magnitude(r.sample.B) : 0)));
+  const max = largest(rows, (r) => (r.sample ? [magnitude(r.sample.B)] : []));
   const unit = choice ?? (max < 0.1 ? 'G' : 'T');
   if (unit === 'G') return { field: { name: 'G', factor: 1e-4 }, gradient: { name: 'G/cm', factor: 1e-2 } };
   if (unit === 'mT') return { field: { name: 'mT', factor: 1e-3 }, gradient: { name: 'mT/m', factor: 1e-3 } };
@@ -122,7 +129,7 @@ function textUnits(choice: FieldUnitName | undefined, rows: readonly FieldPointR
 
 /** A length for positions: mm below 10 cm, else m; one unit for a whole table. */
 function lengthUnit(rows: readonly FieldPointRow[]): { name: string; factor: number } {
-  const max = Math.max(0, ...rows.flatMap((r) => r.point.map(Math.abs)));
+  const max = largest(rows, (r) => r.point);
   return max < 0.1 ? { name: 'mm', factor: 1e-3 } : max < 10 ? { name: 'cm', factor: 1e-2 } : { name: 'm', factor: 1 };
 }
 
@@ -130,8 +137,8 @@ export function fieldText(names: string[], plan: FieldPointPlan, rows: readonly 
   const u = textUnits(unit, rows);
   const len = lengthUnit(rows);
   // Exact cancellations leave ~1e-16 relative dust: below 1e-12 of the largest value it prints as 0.
-  const maxB = Math.max(0, ...rows.map((r) => (r.sample ? magnitude(r.sample.B) : 0)));
-  const maxG = Math.max(0, ...rows.flatMap((r) => (r.sample ? r.sample.gradient.flat().map(Math.abs) : [0])));
+  const maxB = largest(rows, (r) => (r.sample ? [magnitude(r.sample.B)] : []));
+  const maxG = largest(rows, (r) => (r.sample ? r.sample.gradient.flat() : []));
   const fieldNum = (t: number): string => trimNumber(t / u.field.factor, 6, { scale: maxB / u.field.factor, relative: 1e-12 });
   const gradNum = (t: number): string => trimNumber(t / u.gradient.factor, 6, { scale: maxG / u.gradient.factor, relative: 1e-12 });
   const pos = (p: Vec3): string => `(${p.map((c) => trimNumber(c / len.factor, 6, { scale: 1, relative: 1e-12 })).join(', ')}) ${len.name}`;
