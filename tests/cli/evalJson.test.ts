@@ -12,11 +12,33 @@ function evalJson(file: string) {
 }
 
 describe('sublevel eval --format json', () => {
-  it.each(['lithium-beam', 'rubidium-bias', 'handmade-species', 'mistakes', 'lithium-whole-term', 'fit-rubidium', 'sodium-slower'])('%s validates against the published JSON Schema', (f) => {
+  it.each(['lithium-beam', 'rubidium-bias', 'handmade-species', 'mistakes', 'lithium-whole-term', 'fit-rubidium', 'sodium-slower', 'coils-and-wires'])('%s validates against the published JSON Schema', (f) => {
     const { doc } = evalJson(`examples/${f}.sublevel`);
     const ok = validate(doc);
     expect(validate.errors ?? []).toEqual([]);
     expect(ok).toBe(true);
+  });
+
+  it('lists the field sources with their parts, centre values, winding and cautions; none in a file without sources', () => {
+    const { code, doc } = evalJson('examples/coils-and-wires.sublevel');
+    expect(code).toBe(0);
+    expect(doc.fieldSources.map((s: { name: string; kind: string }) => `${s.kind} ${s.name}`)).toEqual(['coil quad', 'coil bias', 'wire rail', 'slab pole']);
+    const [quad, bias, rail, pole] = doc.fieldSources;
+    expect(quad.parts).toHaveLength(2);
+    expect(quad.pair).toEqual({ sense: 'opposite', spacing_m: 0.07, spacing_over_radius: 2 });
+    expect(quad.field_T).toEqual([0, 0, 0]);
+    // 120 turns × 2 coils × 2π × 3.5 cm of 1.2 mm copper at 15 A (IEC annealed copper; hand-computed): 181.03 W.
+    expect(quad.winding.power_W).toBeCloseTo(181.0345, 3);
+    expect(quad.winding.cooling).toBe('water');
+    expect(bias.centre_m).toEqual([0, 0, 0.09]);
+    // A single loop's centre: μ0 N I / 2R = 1.25663706127e-6 × 80 / 0.12 = 8.37758e-4 T (CODATA 2022 μ0).
+    expect(bias.field_abs_T).toBeCloseTo(8.3775804e-4, 10);
+    expect(rail.winding).toBeUndefined();
+    expect(pole.cautions[0]).toMatch(/^Permanent magnet/);
+    expect(doc.diagnostics.map((d: { code: string }) => d.code)).toEqual(['coil-needs-cooling']);
+    expect(evalJson('examples/rubidium-bias.sublevel').doc.fieldSources).toBeUndefined();
+    const text = cli('eval', 'examples/coils-and-wires.sublevel').out;
+    expect(text).toContain('\ncoil bias: one loop\n  at the centre (0, 0, 90) mm: |B| = 8.3776 G, B = (0, 0, 8.3776) G\n');
   });
 
   it('gives the 87Rb ground hyperfine interval and g_F values', () => {

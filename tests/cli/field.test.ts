@@ -40,12 +40,15 @@ describe('sublevel field: values', () => {
 
   it('has no value on a wire and says so in every format', () => {
     // The rail's wire runs along x through y = 2 mm: the bare sum would leave it out there, which would mislead.
-    const p = json('--source', 'rail', '--at', '1cm,2mm,0').points[0];
+    const j = cli('field', FILE, '--source', 'rail', '--at', '1cm,2mm,0', '--format', 'json');
+    expect(j.code).toBe(0);
+    const p = JSON.parse(j.out).points[0];
     expect(p).toMatchObject({ B_T: null, B_abs_T: null, gradient_T_per_m: null, B_abs_gradient_T_per_m: null });
     expect(p.note).toMatch(/^The point lies on a wire/);
     expect(cli('field', FILE, '--source', 'rail', '--at', '1cm,2mm,0').out).toMatch(/\n {2}no value: the point lies on a wire/);
-    const csv = cli('field', FILE, '--source', 'rail', '--at', '1cm,2mm,0', '--format', 'csv').out.split('\n');
-    expect(csv[2]).toBe('0.01,0.002,0' + ','.repeat(16));
+    const r = cli('field', FILE, '--source', 'rail', '--at', '1cm,2mm,0', '--format', 'csv');
+    expect(r.out.split('\n')[2]).toBe('0.01,0.002,0' + ','.repeat(16));
+    expect(r.err).toMatch(/^note: 1 point lies on a conductor and has no field value \(first: The point lies on a wire/);
   });
 });
 
@@ -107,5 +110,18 @@ describe('sublevel field: mistakes', () => {
   it('is listed in the help', () => {
     expect(cli('--help').out).toMatch(/\n {2}field +the summed field/);
     expect(cli('field', '--help').out).toContain('--grid RANGES');
+  });
+});
+
+describe('sublevel field: large grids', () => {
+  it('prints a 150 × 150 grid as text (the unit choice looks at every value without overflowing the stack)', async () => {
+    const { fieldText } = await import('../../server/src/cli/fieldCommand');
+    const { fieldPointPlan } = await import('../../server/src/cli/fieldPoints');
+    const plan = fieldPointPlan({ grid: 'x=-1:1cm,y=-1:1cm', points: '150x150' });
+    const rows = plan.points.map((point) => ({ point, sample: { B: [1e-3, 0, 0] as const, gradient: [[0.1, 0, 0], [0, -0.1, 0], [0, 0, 0]] as const } }));
+    const lines = fieldText(['g'], plan, rows, undefined);
+    expect(lines).toHaveLength(1 + 2 + 150 * 150);
+    expect(lines[0]).toBe('field of g on a 150 × 150 grid:');
+    expect(lines[2]!.startsWith('------')).toBe(true);
   });
 });

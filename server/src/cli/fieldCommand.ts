@@ -43,7 +43,7 @@ export const fieldSpec: CommandSpec = {
   },
   notes: [
     'Positions use the file\'s length units (m, cm, mm, um); zero needs none.',
-    'A point on a wire or a loop has no field value: the text says so, JSON gives null and CSV an empty cell.',
+    'A point on a wire, a loop, a winding or a block\'s face has no field value: the text says so, JSON gives null and CSV empty cells (with a note on stderr).',
   ],
 };
 
@@ -80,6 +80,11 @@ export function runField(args: ParsedArgs, ctx: CliContext): number {
     writeOutputFile(out, text + '\n', ctx.fsys);
     ctx.io.err(`wrote the field at ${rows.length} point${rows.length === 1 ? '' : 's'} to ${out}`);
   } else ctx.io.out(text);
+  // A CSV's empty cells and a JSON's nulls are easy to miss: say on stderr why they are there.
+  const onSource = rows.filter((r) => r.onSource !== undefined);
+  if (onSource.length > 0 && (format !== 'text' || out)) {
+    ctx.io.err(`note: ${onSource.length} point${onSource.length === 1 ? ' lies' : 's lie'} on a conductor and ${onSource.length === 1 ? 'has' : 'have'} no field value (first: ${onSource[0]!.onSource})`);
+  }
   return reportErrors(file, analysis, ctx) > 0 ? 1 : 0;
 }
 
@@ -102,13 +107,20 @@ export function sampleField(sources: readonly FieldSourceModel[], plan: FieldPoi
 
 // ---- text ----
 
+/** The largest |value| over all rows, by a loop: spreading a 250 000-point grid into Math.max overflows the stack. */
+function largest(rows: readonly FieldPointRow[], values: (r: FieldPointRow) => readonly number[]): number {
+  let max = 0;
+  for (const r of rows) for (const v of values(r)) if (Math.abs(v) > max) max = Math.abs(v);
+  return max;
+}
+
 interface TextUnits {
   field: { name: string; factor: number };
   gradient: { name: string; factor: number };
 }
 
 function textUnits(choice: FieldUnitName | undefined, rows: readonly FieldPointRow[]): TextUnits {
-  const max = Math.max(0, ...rows.map((r) => (r.sample ? magnitude(r.sample.B) : 0)));
+  const max = largest(rows, (r) => (r.sample ? [magnitude(r.sample.B)] : []));
   const unit = choice ?? (max < 0.1 ? 'G' : 'T');
   if (unit === 'G') return { field: { name: 'G', factor: 1e-4 }, gradient: { name: 'G/cm', factor: 1e-2 } };
   if (unit === 'mT') return { field: { name: 'mT', factor: 1e-3 }, gradient: { name: 'mT/m', factor: 1e-3 } };
@@ -117,7 +129,7 @@ function textUnits(choice: FieldUnitName | undefined, rows: readonly FieldPointR
 
 /** A length for positions: mm below 10 cm, else m; one unit for a whole table. */
 function lengthUnit(rows: readonly FieldPointRow[]): { name: string; factor: number } {
-  const max = Math.max(0, ...rows.flatMap((r) => r.point.map(Math.abs)));
+  const max = largest(rows, (r) => r.point);
   return max < 0.1 ? { name: 'mm', factor: 1e-3 } : max < 10 ? { name: 'cm', factor: 1e-2 } : { name: 'm', factor: 1 };
 }
 
@@ -125,8 +137,8 @@ export function fieldText(names: string[], plan: FieldPointPlan, rows: readonly 
   const u = textUnits(unit, rows);
   const len = lengthUnit(rows);
   // Exact cancellations leave ~1e-16 relative dust: below 1e-12 of the largest value it prints as 0.
-  const maxB = Math.max(0, ...rows.map((r) => (r.sample ? magnitude(r.sample.B) : 0)));
-  const maxG = Math.max(0, ...rows.flatMap((r) => (r.sample ? r.sample.gradient.flat().map(Math.abs) : [0])));
+  const maxB = largest(rows, (r) => (r.sample ? [magnitude(r.sample.B)] : []));
+  const maxG = largest(rows, (r) => (r.sample ? r.sample.gradient.flat() : []));
   const fieldNum = (t: number): string => trimNumber(t / u.field.factor, 6, { scale: maxB / u.field.factor, relative: 1e-12 });
   const gradNum = (t: number): string => trimNumber(t / u.gradient.factor, 6, { scale: maxG / u.gradient.factor, relative: 1e-12 });
   const pos = (p: Vec3): string => `(${p.map((c) => trimNumber(c / len.factor, 6, { scale: 1, relative: 1e-12 })).join(', ')}) ${len.name}`;

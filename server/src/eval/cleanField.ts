@@ -16,26 +16,39 @@ export type FieldOf = (parts: readonly FieldSourceSpec[]) => FieldFunction;
 export type CleanSample = { sample: FieldSample } | { onSource: FieldIssue };
 
 export function cleanField(parts: readonly FieldSourceSpec[], fieldOf: FieldOf): (point: Vec3) => CleanSample {
-  const total = fieldOf(parts);
-  // One part alone cannot cancel against itself.
-  const each = parts.length > 1 ? parts.map((p) => fieldOf([p])) : [];
+  if (parts.length <= 1) {
+    // One part alone cannot cancel against itself.
+    const only = fieldOf(parts);
+    return (point) => {
+      const on = parts[0] && pointOnSource(parts[0], point);
+      return on ? { onSource: on } : { sample: only(point) };
+    };
+  }
+  // The sum is made here from the parts' own fields, which also give the size of what cancels.
+  const each = parts.map((p) => fieldOf([p]));
   return (point) => {
     for (const part of parts) {
       const on = pointOnSource(part, point);
       if (on) return { onSource: on };
     }
-    const s = total(point);
-    if (each.length === 0) return { sample: s };
+    const B = [0, 0, 0];
+    const G = [0, 0, 0, 0, 0, 0, 0, 0, 0];
     let bScale = 0;
     let gScale = 0;
     for (const f of each) {
       const own = f(point);
-      bScale += Math.hypot(own.B[0], own.B[1], own.B[2]);
-      for (const row of own.gradient) for (const g of row) gScale = Math.max(gScale, Math.abs(g));
+      for (let i = 0; i < 3; i++) {
+        B[i] += own.B[i];
+        bScale += Math.abs(own.B[i]);
+        for (let j = 0; j < 3; j++) {
+          G[3 * i + j] += own.gradient[i][j];
+          gScale = Math.max(gScale, Math.abs(own.gradient[i][j]));
+        }
+      }
     }
-    const b = (x: number): number => (Math.abs(x) <= CANCELLATION_FLOOR * bScale ? 0 : x);
-    const g = (x: number): number => (Math.abs(x) <= CANCELLATION_FLOOR * gScale * parts.length ? 0 : x);
-    const row = (r: Vec3): Vec3 => [g(r[0]), g(r[1]), g(r[2])];
-    return { sample: { B: [b(s.B[0]), b(s.B[1]), b(s.B[2])], gradient: [row(s.gradient[0]), row(s.gradient[1]), row(s.gradient[2])] } };
+    const b = (k: number): number => (Math.abs(B[k]!) <= CANCELLATION_FLOOR * bScale ? 0 : B[k]!);
+    const g = (k: number): number => (Math.abs(G[k]!) <= CANCELLATION_FLOOR * gScale * parts.length ? 0 : G[k]!);
+    const row = (i: number): Vec3 => [g(3 * i), g(3 * i + 1), g(3 * i + 2)];
+    return { sample: { B: [b(0), b(1), b(2)], gradient: [row(0), row(1), row(2)] } };
   };
 }
