@@ -1,0 +1,191 @@
+/**
+ * The summary of a magnetic trap for every sublevel of one level: trapped or not, the levitation
+ * gradient, the minimum with its gravity sag, the depth, the harmonic frequencies or the linear
+ * gradients, the RF knife and the Majorana estimate, with problems as values. docs/traps.md.
+ */
+import { BOLTZMANN_K, PLANCK_H } from '../constants';
+import type { Vec3 } from '../fields/types';
+import type { LowFieldLabel } from '../engine';
+import { energyCurves, rfPartner, type EnergyCurve } from './energyCurves';
+import { surveyField, type FieldSurvey } from './fieldSurvey';
+import { ADIABATIC_MARGIN, majoranaRate } from './majorana';
+import { trapPotential } from './potential';
+import { rfCut } from './rfCut';
+import { trapDepth } from './trapDepth';
+import { findMinimum } from './trapMinimum';
+import { harmonicShape, linearShape } from './trapShape';
+import type { SublevelTrap, TrapInput, TrapIssue, TrapSummary } from './types';
+import { norm, sub } from './vec3';
+
+/** Below this fraction of the largest |B| in the region a minimum counts as a zero of the field. */
+export const ZERO_FIELD_FRACTION = 1e-6;
+/** The swept range reaches this far past the largest |B| sampled (rays can pass a little higher). */
+const CURVE_HEADROOM = 1.5;
+
+const G_PER_CM = 1e-2; // 1 G/cm = 0.01 T/m
+
+function gcm(tPerM: number): string {
+  return `${Number((tPerM / G_PER_CM).toPrecision(3))} G/cm`;
+}
+
+function invalid(input: TrapInput): TrapIssue | undefined {
+  const r = input.region;
+  const bad = (code: string, message: string): TrapIssue => ({ severity: 'error', code, message });
+  if (!(r.radiusM > 0) || !Number.isFinite(r.radiusM) || !r.centre.every(Number.isFinite)) {
+    return bad('trap-region-invalid', 'The trap region needs a finite centre and a radius above 0.');
+  }
+  if (!(input.massKg > 0) || !Number.isFinite(input.massKg)) return bad('trap-mass-invalid', 'The trap needs the atom’s mass, a positive number of kg.');
+  if (!input.gravity.every(Number.isFinite)) return bad('trap-gravity-invalid', 'Gravity must be a finite vector.');
+  if (input.temperatureK !== undefined && !(input.temperatureK > 0 && Number.isFinite(input.temperatureK))) {
+    return bad('trap-temperature-invalid', 'A cloud temperature must be above 0 K.');
+  }
+  if (input.cutJ !== undefined && !(input.cutJ > 0 && Number.isFinite(input.cutJ))) {
+    return bad('trap-cut-invalid', 'The RF cut must be an energy above 0.');
+  }
+  return undefined;
+}
+
+function emptySummary(issues: TrapIssue[], survey?: FieldSurvey): TrapSummary {
+  return {
+    fieldCentre: survey?.centre ?? [0, 0, 0],
+    fieldAtCentreT: survey && Number.isFinite(survey.fieldAtCentreT) ? survey.fieldAtCentreT : 0,
+    fieldRangeT: [0, survey?.maxFieldT ?? 0],
+    gravityGradientTPerM: survey?.gravityGradientTPerM ?? 0,
+    sublevels: [],
+    issues,
+  };
+}
+
+export function summariseTrap(input: TrapInput): TrapSummary {
+  const bad = invalid(input);
+  if (bad) return emptySummary([bad]);
+  const survey = surveyField(input.field, input.region, input.gravity);
+  if (!survey.finite) {
+    return emptySummary(
+      [{ severity: 'error', code: 'trap-field-not-finite', message: 'The field is not finite somewhere in the trap region: a wire or a loop passes through it. Make the region smaller or move the source.' }],
+      survey,
+    );
+  }
+  const curves = energyCurves(input.level, CURVE_HEADROOM * Math.max(survey.maxFieldT, survey.fieldAtCentreT));
+  const issues: TrapIssue[] = curves.issues.map((i) => ({ ...i }));
+  if (curves.curves.length === 0) return emptySummary(issues, survey);
+  const gravityG = norm(input.gravity);
+  const sublevels = curves.curves.map((c) => sublevelTrap(input, survey, curves.curves, c, curves.topT, gravityG, issues));
+  if (!sublevels.some((s) => s.trapped)) {
+    issues.push({ severity: 'warning', code: 'trap-holds-nothing', message: 'The trap holds no sublevel of this level.' });
+  }
+  return {
+    fieldCentre: survey.centre,
+    fieldAtCentreT: survey.fieldAtCentreT,
+    fieldRangeT: [survey.fieldAtCentreT, survey.maxFieldT],
+    gravityGradientTPerM: survey.gravityGradientTPerM,
+    sublevels,
+    issues,
+  };
+}
+
+function sublevelTrap(
+  input: TrapInput,
+  survey: FieldSurvey,
+  all: readonly EnergyCurve[],
+  c: EnergyCurve,
+  topT: number,
+  gravityG: number,
+  issues: TrapIssue[],
+): SublevelTrap {
+  const name = labelText(c.low);
+  const say = (severity: TrapIssue['severity'], code: string, message: string): void => {
+    issues.push({ severity, code, message, sublevel: name });
+  };
+  // The engine's moment is −dE/dB (negative for a low-field seeker); what holds an atom up is dE/dB.
+  const moment = (b: number): number => -PLANCK_H * c.slopeHzPerT(b);
+  const levitation = (mu: number): number | undefined => (mu < 0 && gravityG > 0 ? (input.massKg * gravityG) / -mu : undefined);
+  const centreField = survey.fieldAtCentreT;
+  const base = {
+    low: c.low,
+    twoM: c.twoM,
+    turningFieldT: c.turningFieldT(centreField),
+  };
+  const muCentre = moment(centreField);
+  const seeking = c.slopeHzPerT(centreField) > 0;
+  if (!seeking) {
+    return { ...base, lowFieldSeeking: false, momentJT: muCentre, trapped: false };
+  }
+  const u = trapPotential(input.field, c, input.massKg, input.gravity);
+  // A length over which |B| rounds off at the minimum: B/|∇B|; none at a zero of the field.
+  const smooth = (r: Vec3): number => {
+    const s = input.field(r);
+    const b = norm(s.B);
+    if (!(b > ZERO_FIELD_FRACTION * survey.maxFieldT)) return 0;
+    let g = 0;
+    for (const row of s.gradient) g = Math.max(g, norm(row));
+    return Math.min(input.region.radiusM, g > 0 ? b / g : input.region.radiusM);
+  };
+  const found = findMinimum(u, survey.centre, input.region, smooth);
+  const mu = moment(found.fieldT);
+  const turningFieldT = c.turningFieldT(found.fieldT);
+  const out: SublevelTrap = { ...base, turningFieldT, lowFieldSeeking: c.slopeHzPerT(found.fieldT) > 0, momentJT: mu, trapped: false };
+  // Held: the moment at the minimum; not held: the moment at the field centre, where it would have to be held.
+  const lev = levitation(found.onEdge ? muCentre : mu);
+  if (lev !== undefined) out.levitationTPerM = lev;
+  if (found.onEdge) {
+    if (lev !== undefined && survey.gravityGradientTPerM < lev) {
+      say('warning', 'trap-gravity-too-strong', `This trap cannot hold ${name} against gravity: it needs ≥ ${gcm(lev)} along gravity (has ${gcm(survey.gravityGradientTPerM)}).`);
+    } else {
+      say('info', 'trap-sublevel-escapes', `${name} is low-field seeking but has no minimum inside the trap region: it is pushed out to the edge.`);
+    }
+    return out;
+  }
+  const depth = trapDepth(input.field, c, input.massKg, input.gravity, input.region, found, turningFieldT);
+  out.minimum = { position: found.position, fieldT: found.fieldT, energyJ: found.energyJ };
+  out.sagM = norm(sub(found.position, survey.centre));
+  out.depthJ = depth.depthJ;
+  out.depthLimit = depth.limit;
+  out.trapped = depth.depthJ > 0;
+  if (!out.trapped) {
+    say('info', 'trap-sublevel-escapes', `${name} finds no barrier on its way out: the trap has no depth for it.`);
+    return out;
+  }
+  if (depth.limit === 'turning' && turningFieldT !== null) {
+    say('info', 'trap-turning-point', `The depth for ${name} is set by the turning point of its energy at ${Number((turningFieldT * 1e4).toPrecision(4))} G, where it becomes high-field seeking.`);
+  }
+  const partner = rfPartner(all, c);
+  if (partner) out.larmorHz = Math.abs(c.energyHz(found.fieldT) - partner.energyHz(found.fieldT));
+  const at = input.field(found.position);
+  if (found.fieldT <= ZERO_FIELD_FRACTION * survey.maxFieldT) {
+    const shape = linearShape(at.gradient);
+    const pull0 = -moment(0);
+    if (input.temperatureK !== undefined) {
+      const kT = BOLTZMANN_K * input.temperatureK;
+      shape.cloudSizesM = [kT / (pull0 * shape.gradientsTPerM[0]), kT / (pull0 * shape.gradientsTPerM[1]), kT / (pull0 * shape.gradientsTPerM[2])];
+      out.majorana = majoranaRate(pull0, shape.gradientsTPerM[0], input.massKg, input.temperatureK);
+    }
+    out.shape = shape;
+    const rate = out.majorana ? ` (about ${Number(out.majorana.rateHz.toPrecision(2))} /s at the cloud temperature)` : '; give the cloud temperature for a loss estimate';
+    say('warning', 'trap-zero-field', `${name} sits at a zero of the field: bias at the minimum is too small, Majorana spin flips lose atoms there${rate}.`);
+  } else {
+    const step = 1e-4 * Math.max(smooth(found.position), 1e-9 * input.region.radiusM);
+    const shape = harmonicShape(u.gradient, found.position, step, input.massKg);
+    if (shape) {
+      out.shape = shape;
+      const top = shape.frequenciesHz[2];
+      if (out.larmorHz !== undefined && out.larmorHz < ADIABATIC_MARGIN * top) {
+        say('warning', 'trap-bias-too-small', `The bias at the minimum is too small for ${name}: its Larmor frequency ${Number(out.larmorHz.toPrecision(3))} Hz is less than ${ADIABATIC_MARGIN} × the highest trap frequency ${Number(top.toPrecision(3))} Hz: Majorana losses.`);
+      }
+    } else {
+      say('info', 'trap-not-harmonic', `The minimum for ${name} is flat in some direction: no harmonic frequencies.`);
+    }
+  }
+  if (input.cutJ !== undefined && partner) {
+    const limit = turningFieldT ?? topT;
+    const cut = input.cutJ <= depth.depthJ ? rfCut(c, partner, found.fieldT, input.cutJ, limit) : null;
+    if (cut) out.rfCut = cut;
+    else say('warning', 'trap-cut-outside', `The RF cut is above the trap's depth for ${name}: the knife cuts nothing the edge does not.`);
+  }
+  return out;
+}
+
+/** |F, m_F⟩ style text of a low-field label, for messages. */
+export function labelText(low: LowFieldLabel): string {
+  return `|${low.text}⟩`;
+}
