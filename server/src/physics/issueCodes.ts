@@ -119,6 +119,21 @@ export const PHYSICS_RULES = {
   'beam-nothing-to-resolve': { severity: 'warning', summary: 'Fewer than two peaks: there is nothing to resolve.' },
   'beam-resolved-at-lower-bound': { severity: 'info', summary: 'Already resolved at the lower bound of a resolving search.' },
   'beam-unresolvable-within-bound': { severity: 'warning', summary: 'No value up to the search bound resolves the peaks.' },
+  // Magnetic traps (traps/).
+  'trap-region-invalid': { severity: 'error', summary: 'A trap region without a finite centre or a radius above 0.' },
+  'trap-mass-invalid': { severity: 'error', summary: 'A trap for atoms without a positive mass.' },
+  'trap-gravity-invalid': { severity: 'error', summary: 'A gravity vector that is not finite.' },
+  'trap-temperature-invalid': { severity: 'error', summary: 'A cloud temperature not above 0 K.' },
+  'trap-cut-invalid': { severity: 'error', summary: 'An RF cut that is not an energy above 0.' },
+  'trap-field-not-finite': { severity: 'error', summary: 'The field is not finite inside the trap region (a wire or loop passes through it).' },
+  'trap-holds-nothing': { severity: 'warning', summary: 'The trap holds no sublevel of the level.' },
+  'trap-gravity-too-strong': { severity: 'warning', summary: 'A low-field seeker the trap cannot hold against gravity, with the gradient it needs.' },
+  'trap-sublevel-escapes': { severity: 'info', summary: 'A low-field seeker with no minimum or no barrier inside the trap region.' },
+  'trap-zero-field': { severity: 'warning', summary: 'A sublevel held at a zero of the field: Majorana spin flips lose atoms there.' },
+  'trap-bias-too-small': { severity: 'warning', summary: 'The Larmor frequency at the minimum is less than 100 × the highest trap frequency: Majorana losses.' },
+  'trap-cut-outside': { severity: 'warning', summary: 'An RF cut above the trap depth: the knife cuts nothing the edge does not.' },
+  'trap-turning-point': { severity: 'info', summary: 'The depth is set where the sublevel turns high-field seeking, not by the edge.' },
+  'trap-not-harmonic': { severity: 'info', summary: 'A minimum that is flat in some direction: no harmonic frequencies.' },
 } as const satisfies Record<string, PhysicsRule>;
 
 export type PhysicsCode = keyof typeof PHYSICS_RULES;

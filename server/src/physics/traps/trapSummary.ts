@@ -14,6 +14,7 @@ import { rfCut } from './rfCut';
 import { trapDepth } from './trapDepth';
 import { findMinimum } from './trapMinimum';
 import { harmonicShape, linearShape } from './trapShape';
+import { issue } from './issues';
 import type { SublevelTrap, TrapInput, TrapIssue, TrapSummary } from './types';
 import { norm, sub } from './vec3';
 
@@ -30,17 +31,16 @@ function gcm(tPerM: number): string {
 
 function invalid(input: TrapInput): TrapIssue | undefined {
   const r = input.region;
-  const bad = (code: string, message: string): TrapIssue => ({ severity: 'error', code, message });
   if (!(r.radiusM > 0) || !Number.isFinite(r.radiusM) || !r.centre.every(Number.isFinite)) {
-    return bad('trap-region-invalid', 'The trap region needs a finite centre and a radius above 0.');
+    return issue('error', 'trap-region-invalid', 'The trap region needs a finite centre and a radius above 0.');
   }
-  if (!(input.massKg > 0) || !Number.isFinite(input.massKg)) return bad('trap-mass-invalid', 'The trap needs the atom’s mass, a positive number of kg.');
-  if (!input.gravity.every(Number.isFinite)) return bad('trap-gravity-invalid', 'Gravity must be a finite vector.');
+  if (!(input.massKg > 0) || !Number.isFinite(input.massKg)) return issue('error', 'trap-mass-invalid', 'The trap needs the atom’s mass, a positive number of kg.');
+  if (!input.gravity.every(Number.isFinite)) return issue('error', 'trap-gravity-invalid', 'Gravity must be a finite vector.');
   if (input.temperatureK !== undefined && !(input.temperatureK > 0 && Number.isFinite(input.temperatureK))) {
-    return bad('trap-temperature-invalid', 'A cloud temperature must be above 0 K.');
+    return issue('error', 'trap-temperature-invalid', 'A cloud temperature must be above 0 K.');
   }
   if (input.cutJ !== undefined && !(input.cutJ > 0 && Number.isFinite(input.cutJ))) {
-    return bad('trap-cut-invalid', 'The RF cut must be an energy above 0.');
+    return issue('error', 'trap-cut-invalid', 'The RF cut must be an energy above 0.');
   }
   return undefined;
 }
@@ -62,7 +62,7 @@ export function summariseTrap(input: TrapInput): TrapSummary {
   const survey = surveyField(input.field, input.region, input.gravity);
   if (!survey.finite) {
     return emptySummary(
-      [{ severity: 'error', code: 'trap-field-not-finite', message: 'The field is not finite somewhere in the trap region: a wire or a loop passes through it. Make the region smaller or move the source.' }],
+      [issue('error', 'trap-field-not-finite', 'The field is not finite somewhere in the trap region: a wire or a loop passes through it. Make the region smaller or move the source.')],
       survey,
     );
   }
@@ -72,7 +72,7 @@ export function summariseTrap(input: TrapInput): TrapSummary {
   const gravityG = norm(input.gravity);
   const sublevels = curves.curves.map((c) => sublevelTrap(input, survey, curves.curves, c, curves.topT, gravityG, issues));
   if (!sublevels.some((s) => s.trapped)) {
-    issues.push({ severity: 'warning', code: 'trap-holds-nothing', message: 'The trap holds no sublevel of this level.' });
+    issues.push(issue('warning', 'trap-holds-nothing', 'The trap holds no sublevel of this level.'));
   }
   return {
     fieldCentre: survey.centre,
@@ -94,9 +94,6 @@ function sublevelTrap(
   issues: TrapIssue[],
 ): SublevelTrap {
   const name = labelText(c.low);
-  const say = (severity: TrapIssue['severity'], code: string, message: string): void => {
-    issues.push({ severity, code, message, sublevel: name });
-  };
   // The engine's moment is −dE/dB (negative for a low-field seeker); what holds an atom up is dE/dB.
   const moment = (b: number): number => -PLANCK_H * c.slopeHzPerT(b);
   const levitation = (mu: number): number | undefined => (mu < 0 && gravityG > 0 ? (input.massKg * gravityG) / -mu : undefined);
@@ -130,9 +127,9 @@ function sublevelTrap(
   if (lev !== undefined) out.levitationTPerM = lev;
   if (found.onEdge) {
     if (lev !== undefined && survey.gravityGradientTPerM < lev) {
-      say('warning', 'trap-gravity-too-strong', `This trap cannot hold ${name} against gravity: it needs ≥ ${gcm(lev)} along gravity (has ${gcm(survey.gravityGradientTPerM)}).`);
+      issues.push(issue('warning', 'trap-gravity-too-strong', `This trap cannot hold ${name} against gravity: it needs ≥ ${gcm(lev)} along gravity (has ${gcm(survey.gravityGradientTPerM)}).`, name));
     } else {
-      say('info', 'trap-sublevel-escapes', `${name} is low-field seeking but has no minimum inside the trap region: it is pushed out to the edge.`);
+      issues.push(issue('info', 'trap-sublevel-escapes', `${name} is low-field seeking but has no minimum inside the trap region: it is pushed out to the edge.`, name));
     }
     return out;
   }
@@ -143,11 +140,11 @@ function sublevelTrap(
   out.depthLimit = depth.limit;
   out.trapped = depth.depthJ > 0;
   if (!out.trapped) {
-    say('info', 'trap-sublevel-escapes', `${name} finds no barrier on its way out: the trap has no depth for it.`);
+    issues.push(issue('info', 'trap-sublevel-escapes', `${name} finds no barrier on its way out: the trap has no depth for it.`, name));
     return out;
   }
   if (depth.limit === 'turning' && turningFieldT !== null) {
-    say('info', 'trap-turning-point', `The depth for ${name} is set by the turning point of its energy at ${Number((turningFieldT * 1e4).toPrecision(4))} G, where it becomes high-field seeking.`);
+    issues.push(issue('info', 'trap-turning-point', `The depth for ${name} is set by the turning point of its energy at ${Number((turningFieldT * 1e4).toPrecision(4))} G, where it becomes high-field seeking.`, name));
   }
   const partner = rfPartner(all, c);
   if (partner) out.larmorHz = Math.abs(c.energyHz(found.fieldT) - partner.energyHz(found.fieldT));
@@ -162,7 +159,7 @@ function sublevelTrap(
     }
     out.shape = shape;
     const rate = out.majorana ? ` (about ${Number(out.majorana.rateHz.toPrecision(2))} /s at the cloud temperature)` : '; give the cloud temperature for a loss estimate';
-    say('warning', 'trap-zero-field', `${name} sits at a zero of the field: bias at the minimum is too small, Majorana spin flips lose atoms there${rate}.`);
+    issues.push(issue('warning', 'trap-zero-field', `${name} sits at a zero of the field: bias at the minimum is too small, Majorana spin flips lose atoms there${rate}.`, name));
   } else {
     const step = 1e-4 * Math.max(smooth(found.position), 1e-9 * input.region.radiusM);
     const shape = harmonicShape(u.gradient, found.position, step, input.massKg);
@@ -170,17 +167,17 @@ function sublevelTrap(
       out.shape = shape;
       const top = shape.frequenciesHz[2];
       if (out.larmorHz !== undefined && out.larmorHz < ADIABATIC_MARGIN * top) {
-        say('warning', 'trap-bias-too-small', `The bias at the minimum is too small for ${name}: its Larmor frequency ${Number(out.larmorHz.toPrecision(3))} Hz is less than ${ADIABATIC_MARGIN} × the highest trap frequency ${Number(top.toPrecision(3))} Hz: Majorana losses.`);
+        issues.push(issue('warning', 'trap-bias-too-small', `The bias at the minimum is too small for ${name}: its Larmor frequency ${Number(out.larmorHz.toPrecision(3))} Hz is less than ${ADIABATIC_MARGIN} × the highest trap frequency ${Number(top.toPrecision(3))} Hz: Majorana losses.`, name));
       }
     } else {
-      say('info', 'trap-not-harmonic', `The minimum for ${name} is flat in some direction: no harmonic frequencies.`);
+      issues.push(issue('info', 'trap-not-harmonic', `The minimum for ${name} is flat in some direction: no harmonic frequencies.`, name));
     }
   }
   if (input.cutJ !== undefined && partner) {
     const limit = turningFieldT ?? topT;
     const cut = input.cutJ <= depth.depthJ ? rfCut(c, partner, found.fieldT, input.cutJ, limit) : null;
     if (cut) out.rfCut = cut;
-    else say('warning', 'trap-cut-outside', `The RF cut is above the trap's depth for ${name}: the knife cuts nothing the edge does not.`);
+    else issues.push(issue('warning', 'trap-cut-outside', `The RF cut is above the trap's depth for ${name}: the knife cuts nothing the edge does not.`, name));
   }
   return out;
 }
