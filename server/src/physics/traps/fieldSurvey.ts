@@ -10,7 +10,7 @@ import { magnitudeGradient } from './potential';
 import type { TrapRegion } from './types';
 import { addScaled, dot, norm, sphereDirections, sub, unit } from './vec3';
 
-export const SURFACE_SAMPLES = 194;
+export const SURFACE_SAMPLES = 98;
 const GRAVITY_RAY_STEPS = 64;
 
 export interface FieldSurvey {
@@ -35,8 +35,8 @@ export function surveyField(field: FieldFunction, region: TrapRegion, gravity: V
   const R = region.radiusM;
   const f = insideMagnitude(field, region);
   // Two passes: the second restarts from the first's best point with a fresh, smaller simplex.
-  let best = nelderMead(f, region.centre, R / 8, R * 1e-11);
-  best = nelderMead(f, best.point, R / 200, R * 1e-12);
+  let best = nelderMead(f, region.centre, R / 8, R * 1e-10);
+  best = nelderMead(f, best.point, R / 200, R * 1e-11);
   let finite = Number.isFinite(best.value);
   let maxFieldT = Number.isFinite(best.value) ? best.value : 0;
   for (const d of sphereDirections(SURFACE_SAMPLES)) {

@@ -13,9 +13,9 @@ import { rayExit } from './fieldSurvey';
 import type { TrapRegion } from './types';
 import { addScaled, dot, norm, sphereDirections, unit } from './vec3';
 
-export const DEPTH_DIRECTIONS = 62;
-export const DEPTH_STEPS = 24;
-const REFINE_ROUNDS = 10;
+export const DEPTH_DIRECTIONS = 42;
+export const DEPTH_STEPS = 16;
+const REFINE_ROUNDS = 8;
 
 export interface DepthFound {
   depthJ: number;
@@ -39,7 +39,8 @@ export function trapDepth(
 ): DepthFound {
   const r0 = minimum.position;
   const u = (r: Vec3, b: number): number => PLANCK_H * curve.energyHz(b) - massKg * dot(gravity, r);
-  const ray = (d: Vec3): RayBarrier => {
+  // `beat`: a ray whose coarse barrier is already above this cannot win, so its maximum is not refined.
+  const ray = (d: Vec3, beat = Number.POSITIVE_INFINITY): RayBarrier => {
     const exit = rayExit(r0, d, region);
     let top = minimum.energyJ;
     let prevS = 0;
@@ -68,7 +69,7 @@ export function trapDepth(
       prevS = s;
     }
     // An interior maximum (gravity tilting the edge): refine it between its neighbouring samples.
-    if (at > 0 && at < DEPTH_STEPS) top = Math.max(top, refineMax(r0, d, exit, at, u, field));
+    if (at > 0 && at < DEPTH_STEPS && top < beat) top = Math.max(top, refineMax(r0, d, exit, at, u, field));
     return { barrierJ: top, limit: 'edge' };
   };
   let bestDir: Vec3 = [0, 0, 1];
@@ -77,7 +78,7 @@ export function trapDepth(
   const candidates = sphereDirections(DEPTH_DIRECTIONS);
   if (norm(down) > 0) candidates.push(down);
   for (const d of candidates) {
-    const b = ray(d);
+    const b = ray(d, best.barrierJ);
     if (b.barrierJ < best.barrierJ) [best, bestDir] = [b, d];
   }
   // Pattern search on the sphere around the best direction.
@@ -87,7 +88,7 @@ export function trapDepth(
     let moved = false;
     for (const [a, b] of [[1, 0], [-1, 0], [0, 1], [0, -1]] as const) {
       const d = unit(addScaled(addScaled(bestDir, e1, a * spread), e2, b * spread));
-      const r = ray(d);
+      const r = ray(d, best.barrierJ);
       if (r.barrierJ < best.barrierJ) {
         [best, bestDir] = [r, d];
         moved = true;
@@ -118,7 +119,7 @@ function refineMax(r0: Vec3, d: Vec3, exit: number, at: number, u: (r: Vec3, b: 
   let x2 = lo + g * (hi - lo);
   let f1 = f(x1);
   let f2 = f(x2);
-  for (let i = 0; i < 30; i++) {
+  for (let i = 0; i < 24; i++) {
     if (f1 > f2) {
       hi = x2;
       [x2, f2] = [x1, f1];

@@ -24,8 +24,8 @@ export const EDGE_FRACTION = 0.995;
 export function findMinimum(u: TrapPotential, start: Vec3, region: TrapRegion, smooth: (r: Vec3) => number): MinimumFound {
   const R = region.radiusM;
   const inside = (r: Vec3): number => (norm(sub(r, region.centre)) > R ? Number.POSITIVE_INFINITY : u.energy(r));
-  let best = nelderMead(inside, start, R / 20, R * 1e-11);
-  best = nelderMead(inside, best.point, R / 400, R * 1e-12);
+  let best = nelderMead(inside, start, R / 20, R * 1e-10);
+  best = nelderMead(inside, best.point, R / 400, R * 1e-11);
   let p = best.point;
   // Newton polish where the potential is smooth (a length scale over which |B| rounds off is known).
   const ell = smooth(p);
