@@ -20,6 +20,7 @@ import { profileSpec, runProfile } from './profileCommand';
 import { runSpectrum, spectrumSpec } from './spectrumCommand';
 import { renderSpec, runRender } from './renderCommand';
 import { runSweep, sweepSpec } from './sweepCommand';
+import { runTrap, trapSpec } from './trapCommand';
 import { suggestNames } from '../format/didYouMean';
 
 interface Command {
@@ -37,6 +38,7 @@ const COMMANDS: readonly Command[] = [
   { spec: renderSpec, run: runRender },
   { spec: diffSpec, run: runDiff },
   { spec: fitSpec, run: runFit },
+  { spec: trapSpec, run: runTrap },
 ];
 
 const SPECS = COMMANDS.map((c) => c.spec);

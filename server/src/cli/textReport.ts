@@ -17,6 +17,7 @@ import type {
   TermResult,
 } from '../eval/resultTypes';
 import { table } from './table';
+import { trapReport } from './trapReport';
 
 export function textReport(file: string, r: EvaluationResult): string[] {
   const out: string[] = [];
@@ -51,6 +52,7 @@ export function textReport(file: string, r: EvaluationResult): string[] {
   for (const b of r.beams) out.push(...beamReport(b));
   for (const l of r.lines) out.push(...lineReport(l, atFieldText, r.diagnostics));
   for (const x of r.resonances) out.push(...resonanceReport(x, atFieldText));
+  for (const t of r.traps ?? []) out.push(...trapReport(t));
   const counts = (sev: string): number => r.diagnostics.filter((d) => d.severity === sev).length;
   out.push('');
   const plural = (n: number, word: string): string => `${n} ${word}${n === 1 ? '' : 's'}`;

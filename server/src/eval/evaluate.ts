@@ -14,6 +14,7 @@ import { addSpectra } from './spectrumEvaluation';
 import { evaluateResonance } from './resonanceEvaluation';
 import { attachUncertainty } from './uncertainty/attach';
 import { evaluateFit } from './fitEvaluation';
+import { evaluateTrap } from './trapEvaluation';
 import { EVAL_RULES } from './evalCodes';
 import { evaluateLevel, type EvaluationNote, type WorkingField } from './levelEvaluation';
 import {
@@ -71,6 +72,12 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   const resonances = model.resonances.map((r) => evaluateResonance(r, fields, model.settings, gJOf, lineProblems));
   const fitProblems: Problem[] = [];
   const fits = model.fits.map((f) => evaluateFit(f, gJOf, fitProblems));
+  const trapProblems: Problem[] = [];
+  const traps = model.traps.map((t) => {
+    const e = evaluateTrap(t, gJOf, model.settings);
+    trapProblems.push(...e.problems);
+    return e.result;
+  });
   const result: EvaluationResult = {
     format: EVALUATION_FORMAT,
     version: EVALUATION_VERSION,
@@ -103,11 +110,12 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     lines,
     resonances,
     ...(fits.length > 0 ? { fits } : {}),
+    ...(traps.length > 0 ? { traps } : {}),
     diagnostics: [],
   };
   const uncertainty = attachUncertainty(model, result, gJOf);
   if (uncertainty.inputs) result.uncertainty_inputs = uncertainty.inputs;
-  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...uncertainty.problems]);
+  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...trapProblems, ...uncertainty.problems]);
   result.diagnostics = problems.map(toDiagnosticResult);
   return { result, problems };
 }

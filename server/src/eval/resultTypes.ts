@@ -4,6 +4,7 @@
  * docs/schema/evaluation.schema.json describes it. Bump EVALUATION_VERSION on any breaking change.
  */
 import type { FitResult } from './fitResultTypes';
+import type { TrapResult } from './trapResultTypes';
 import type { Problem } from '../format/ast';
 
 export const EVALUATION_FORMAT = 'sublevel-evaluation';
@@ -379,6 +380,8 @@ export interface EvaluationResult {
   resonances: ResonanceResult[];
   /** The `fit` blocks' results (docs/fit.md); absent when the file has none. */
   fits?: FitResult[];
+  /** The `trap` blocks' summaries (docs/traps.md); absent when the file has none. */
+  traps?: TrapResult[];
   diagnostics: DiagnosticResult[];
   /** The independent uncertain inputs (standard uncertainties `u`, k = 1); absent when there are none. */
   uncertainty_inputs?: { id: string; label: string; value: number; u: number }[];

@@ -20,6 +20,7 @@ import { quantitySection } from './hover/quantitySection';
 import { resonanceSection } from './hover/resonanceSection';
 import { speciesSection } from './hover/speciesSection';
 import { termSection } from './hover/termSection';
+import { trapSection } from './hover/trapSection';
 import { useSection } from './hover/useSection';
 import { locate, type Target, useAt } from './shared/locate';
 import { md } from './shared/markdown';
@@ -115,6 +116,10 @@ function blockSections(block: BlockNode, ctx: HoverContext): string[] {
     case 'fit':
     case 'data':
       return fitSectionsOf(block, ctx);
+    case 'trap': {
+      const t = ctx.analysis.result?.traps?.find((x) => x.name === block.name?.text);
+      return t ? [trapSection(t)] : [];
+    }
     default:
       return [];
   }

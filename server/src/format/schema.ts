@@ -4,7 +4,7 @@
  */
 import type { BlockKind } from './ast';
 
-export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 'beam', 'line', 'resonance', 'settings', 'data', 'fit'];
+export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 'beam', 'line', 'resonance', 'settings', 'data', 'fit', 'trap'];
 
 export const LEVEL_WORD = 'level';
 
@@ -25,6 +25,7 @@ export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
   settings: ['g_s', 'reduced_mass'],
   data: ['level', 'kind', 'lower', 'upper', 'point', 'file', 'beam'],
   fit: ['data', 'free', 'start', 'range'],
+  trap: ['sources', 'level', 'gravity', 'temperature', 'cut', 'region', 'centre'],
 };
 
 /** Keys that may be written more than once in a block, each line one more value (`point` in `data`). */

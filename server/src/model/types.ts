@@ -8,6 +8,7 @@ import type { Configuration } from '../physics/configuration';
 import type { TermSymbol } from '../physics/termSymbol';
 import type { BuiltinSpecies } from '../physics/species';
 import type { DataModel, FitRequestModel } from './fitTypes';
+import type { TrapModel } from './trapTypes';
 
 /** A value and its origin: `file` (with the setting's range) or a citation of a published source. */
 export interface Valued<T> {
@@ -201,7 +202,7 @@ export interface SettingsModel {
 
 /** A place in the file that names something, for go-to-definition, references and rename. */
 export interface NameUse {
-  kind: 'species' | 'level' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'data' | 'fit';
+  kind: 'species' | 'level' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'data' | 'fit' | 'trap';
   name: string;
   range: Range;
   /** The declaration it resolves to, if any; `uri` is set when it is declared in another file (through `use`). */
@@ -233,6 +234,8 @@ export interface SetupModel {
   /** Measured points (`data` blocks) and the fits asked of them (`fit` blocks); see docs/fit.md. */
   data: DataModel[];
   fits: FitRequestModel[];
+  /** Magnetic traps (`trap` blocks; docs/traps.md). */
+  traps: TrapModel[];
   settings: SettingsModel;
   names: NameUse[];
   /** Problems found while building the model (the parser's own are in doc.problems). */

@@ -21,3 +21,4 @@ export { renderResiduals, type ResidualsViewData } from './residuals';
 export { fitCsv } from './fitCsv';
 export { levelsCsv, linesCsv, patternCsv, resonanceCsv, spectrumCsv, type SpectrumColumns } from './csv';
 export { escapeXml } from './svgText';
+export { trapCsv } from './trapCsv';

@@ -202,3 +202,24 @@ describe('bad input', () => {
     expect(JSON.stringify(s)).not.toMatch(/NaN|Infinity|null/);
   });
 });
+
+describe('the default region (90 % of the way to the nearest conductor)', () => {
+  it('is measured to a loop winding, a finite solenoid, a wire segment and a block (geometry by hand)', async () => {
+    const { defaultRegionRadius, distanceToSource } = await import('../../../server/src/physics/traps/defaultRegion');
+    // A loop of radius 3 cm at z = ±2 cm: from the origin √(3² + 2²) cm.
+    const loop = { kind: 'loop', centre: [0, 0, 0.02], axis: [0, 0, 1], radiusM: 0.03, ampereTurns: 1 } as const;
+    expect(distanceToSource([0, 0, 0], loop)).toBeCloseTo(Math.hypot(0.03, 0.02), 12);
+    // Inside a solenoid (radius 2 cm, length 10 cm) on its axis: 2 cm; beyond its end by 3 cm: √(2² + 3²).
+    const sol = { kind: 'solenoid', centre: [0, 0, 0], axis: [0, 0, 1], radiusM: 0.02, lengthM: 0.1, ampereTurns: 1 } as const;
+    expect(distanceToSource([0, 0, 0.01], sol)).toBeCloseTo(0.02, 12);
+    expect(distanceToSource([0, 0, 0.08], sol)).toBeCloseTo(Math.hypot(0.02, 0.03), 12);
+    // A wire along x through (0, 2 mm, 0), 1 cm long: 2 mm from the origin; from (2 cm, 0, 0) to its end.
+    const wire = { kind: 'wire', point: [0, 0.002, 0], direction: [1, 0, 0], currentA: 1, lengthM: 0.01 } as const;
+    expect(distanceToSource([0, 0, 0], wire)).toBeCloseTo(0.002, 12);
+    expect(distanceToSource([0.02, 0, 0], wire)).toBeCloseTo(Math.hypot(0.015, 0.002), 12);
+    const slab = { kind: 'slab', centre: [0, 0, 0.01], sizeM: [0.01, 0.01, 0.004], magnetisationT: [0, 0, 1] } as const;
+    expect(distanceToSource([0, 0, 0], slab)).toBeCloseTo(0.008, 12);
+    expect(defaultRegionRadius([0, 0, 0], [loop, wire])).toBeCloseTo(0.9 * 0.002, 12);
+    expect(defaultRegionRadius([0, 0, 0], [])).toBeUndefined();
+  });
+});

@@ -12,6 +12,7 @@ const BLOCK_WORDS: Record<BlockKind, string> = {
   settings: 'file-wide choices: g_s (exact or 2) and reduced_mass (on or off)',
   data: 'measured points: resonance frequencies or level intervals of a pair of sublevels, or a detector profile; written here or read from a CSV file beside the setup',
   fit: 'a weighted least-squares fit of data on the exact engine: which parameters are free and where they start',
+  trap: 'a magnetic trap made of field sources: which sublevels of a level it holds, how deep, at what frequencies, the RF cut and Majorana losses',
 };
 
 const LEVEL_KEYS: Record<string, string> = {
@@ -67,6 +68,13 @@ const BLOCK_KEYS: Record<string, string> = {
   'fit.free': 'free parameters: field, g_J, A, B (resonances and intervals); gradient, temperature, offset, width, field, populations, background (profiles)',
   'fit.start': 'starting values, e.g. field 3 G, A 3417 MHz (defaults: the setup\'s values)',
   'fit.range': 'field range searched by a one-point field calibration: <from>, <to>',
+  'trap.sources': 'the field sources whose summed field makes the trap (coil, solenoid, wire, slab names), comma separated',
+  'trap.level': 'the level whose sublevels are trapped (`ground` or `Rb87.ground`); its species gives the mass',
+  'trap.gravity': 'direction of gravity: x, -z, … or three numbers; `off` for none (default -z)',
+  'trap.temperature': 'cloud temperature: cloud sizes and the Majorana loss of a zero-field trap',
+  'trap.cut': 'RF knife: energy above the trap bottom as a temperature (1 mK) or a frequency (20 MHz); gives the RF frequency that cuts there',
+  'trap.region': 'radius of the trap region (a sphere; its surface is the trap edge); default 90 % of the way to the nearest conductor',
+  'trap.centre': 'centre of the trap region, e.g. 0, 0, 0 mm (default the origin)',
   'settings.g_s': 'electron spin g-factor in the Landé formula: exact (CODATA) or 2 (textbook fractions)',
   'settings.reduced_mass': 'on: g_L = 1 − m_e/M instead of 1',
 };
