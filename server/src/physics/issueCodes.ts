@@ -130,6 +130,7 @@ export const PHYSICS_RULES = {
   'trap-gravity-too-strong': { severity: 'warning', summary: 'A low-field seeker the trap cannot hold against gravity, with the gradient it needs.' },
   'trap-sublevel-escapes': { severity: 'info', summary: 'A low-field seeker with no minimum or no barrier inside the trap region.' },
   'trap-zero-field': { severity: 'warning', summary: 'A sublevel held at a zero of the field: Majorana spin flips lose atoms there.' },
+  'trap-majorana-slow': { severity: 'info', summary: 'A sublevel held at a zero of the field whose estimated Majorana loss is slower than 1/(60 s).' },
   'trap-bias-too-small': { severity: 'warning', summary: 'The Larmor frequency at the minimum is less than 100 × the highest trap frequency: Majorana losses.' },
   'trap-cut-outside': { severity: 'warning', summary: 'An RF cut above the trap depth: the knife cuts nothing the edge does not.' },
   'trap-turning-point': { severity: 'info', summary: 'The depth is set where the sublevel turns high-field seeking, not by the edge.' },

@@ -76,10 +76,15 @@ describe('a quadrupole against gravity (b′ = 21 G/cm along z, gravity −z)', 
     expect(msgs).toContain('This trap cannot hold |F=2, m_F=+1⟩ against gravity: it needs ≥ 30.5 G/cm along gravity (has 21 G/cm).');
     expect(msgs.length).toBe(2);
   });
-  it('says the zero field loses atoms (Majorana) and estimates the rate', () => {
+  it('says the zero field loses atoms (Majorana) and estimates the rate: a note when slower than 1/(60 s)', () => {
     const t = state(s.sublevels, 4, 4);
-    expect(s.issues.some((i) => i.code === 'trap-zero-field' && i.sublevel === '|F=2, m_F=+2⟩')).toBe(true);
-    expect(t.majorana).toBeDefined();
+    // 21 G/cm at 100 µK: Γ ≈ 1.85 ħ/m (μ_B b′/k_B T)² ≈ 0.0027 /s.
+    expect(t.majorana!.rateHz).toBeCloseTo(0.0027, 4);
+    expect(s.issues.some((i) => i.code === 'trap-majorana-slow' && i.sublevel === '|F=2, m_F=+2⟩')).toBe(true);
+    const cold = summariseTrap(input({ field: quadrupole(1), temperatureK: 20e-6 }));
+    expect(cold.issues.some((i) => i.code === 'trap-zero-field' && i.sublevel === '|F=2, m_F=+2⟩' && /about 1\.5 \/s/.test(i.message))).toBe(true);
+    const unknown = summariseTrap(input({ field: quadrupole(1) }));
+    expect(unknown.issues.some((i) => i.code === 'trap-zero-field' && /give the cloud temperature/.test(i.message))).toBe(true);
   });
   it('holds nothing of the high-field seekers', () => {
     expect(state(s.sublevels, 4, -4).trapped).toBe(false);

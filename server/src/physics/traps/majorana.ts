@@ -14,6 +14,11 @@ import type { MajoranaEstimate } from './types';
 
 export const MAJORANA_PREFACTOR = 1.85;
 export const MAJORANA_SOURCE = 'Γ = 1.85 ħ/m (μ b′/k_B T)², Phys. Rev. A 79, 063631 (2009) (prefactor from memory, an empirical fit)';
+/**
+ * Below this Majorana rate (a lifetime over a minute, about what the background gas allows in a
+ * typical vacuum; common practice) the loss is a note, not a warning.
+ */
+export const MAJORANA_NOTE_RATE = 1 / 60;
 /** Warn when the Larmor frequency at the minimum is less than this many times the highest trap frequency (common practice). */
 export const ADIABATIC_MARGIN = 100;
 

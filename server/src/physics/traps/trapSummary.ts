@@ -8,7 +8,7 @@ import type { Vec3 } from '../fields/types';
 import type { LowFieldLabel } from '../engine';
 import { energyCurves, rfPartner, type EnergyCurve } from './energyCurves';
 import { surveyField, type FieldSurvey } from './fieldSurvey';
-import { ADIABATIC_MARGIN, majoranaRate } from './majorana';
+import { ADIABATIC_MARGIN, MAJORANA_NOTE_RATE, majoranaRate } from './majorana';
 import { trapPotential } from './potential';
 import { rfCut } from './rfCut';
 import { trapDepth } from './trapDepth';
@@ -158,8 +158,13 @@ function sublevelTrap(
       out.majorana = majoranaRate(pull0, shape.gradientsTPerM[0], input.massKg, input.temperatureK);
     }
     out.shape = shape;
-    const rate = out.majorana ? ` (about ${Number(out.majorana.rateHz.toPrecision(2))} /s at the cloud temperature)` : '; give the cloud temperature for a loss estimate';
-    issues.push(issue('warning', 'trap-zero-field', `${name} sits at a zero of the field: bias at the minimum is too small, Majorana spin flips lose atoms there${rate}.`, name));
+    const m = out.majorana;
+    if (m && m.rateHz < MAJORANA_NOTE_RATE) {
+      issues.push(issue('info', 'trap-majorana-slow', `${name} sits at a zero of the field; Majorana spin flips lose about ${Number(m.rateHz.toPrecision(2))} /s at the cloud temperature (a lifetime of ${Number((1 / m.rateHz).toPrecision(2))} s).`, name));
+    } else {
+      const rate = m ? ` (about ${Number(m.rateHz.toPrecision(2))} /s at the cloud temperature)` : '; give the cloud temperature for a loss estimate';
+      issues.push(issue('warning', 'trap-zero-field', `${name} sits at a zero of the field: bias at the minimum is too small, Majorana spin flips lose atoms there${rate}.`, name));
+    }
   } else {
     const step = 1e-4 * Math.max(smooth(found.position), 1e-9 * input.region.radiusM);
     const shape = harmonicShape(u.gradient, found.position, step, input.massKg);
