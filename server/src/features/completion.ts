@@ -31,6 +31,7 @@ const BLOCK_WORD_DETAIL: Record<BlockKind, string> = {
   settings: 'settings — g_s, reduced_mass',
   data: 'data <name> — measured points: level, kind, lower, upper, point, file, beam',
   fit: 'fit <name> — data, free, start, range (or fit <name>: <data> -> <parameter>)',
+  trap: 'trap <name> — sources, level, gravity, temperature, cut, region, centre',
 };
 
 function statementStart(c: LineContext): CompletionItem[] {

@@ -13,6 +13,7 @@ const KIND: Record<BlockKind, SymbolKind> = {
   settings: SymbolKind.Module,
   data: SymbolKind.Array,
   fit: SymbolKind.Operator,
+  trap: SymbolKind.Class,
 };
 
 function settingSymbol(s: SettingNode): DocumentSymbol {
