@@ -8,7 +8,7 @@ import { BOLTZMANN_K, PLANCK_H } from '../physics/constants';
 import { sumField } from '../physics/fields';
 import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
 import { PHYSICS_RULES } from '../physics/issueCodes';
-import { defaultRegionRadius, gravityAlong, summariseTrap, trapCautions, type SublevelTrap, type TrapIssue, type TrapSummary } from '../physics/traps';
+import { defaultRegionRadius, gravityAlong, regionIssues, summariseTrap, trapCautions, type SublevelTrap, type TrapIssue, type TrapSummary } from '../physics/traps';
 import type { SettingsModel } from '../model/types';
 import type { TrapModel } from '../model/trapTypes';
 import type { GJLookup } from './gJLookup';
@@ -44,6 +44,7 @@ export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: Settings
   const radius = trap.regionRadiusM?.value ?? defaultRegionRadius(centre, parts);
   if (radius === undefined) return { result, problems };
   result.region = { centre_m: [...centre], radius_m: radius, from: trap.regionRadiusM ? 'file' : 'sources' };
+  for (const i of regionIssues(centre, radius, parts)) problems.push(toProblem(trap, i));
   const summary = summariseTrap({
     field: sumField(parts),
     level: spec,
@@ -116,6 +117,7 @@ function rangeFor(trap: TrapModel, code: string): Range {
     'trap-temperature-invalid': 'temperature',
     'trap-region-invalid': 'region',
     'trap-field-not-finite': 'region',
+    'trap-region-reaches-source': 'region',
     'trap-gravity-too-strong': 'sources',
   };
   const key = byCode[code];

@@ -226,5 +226,8 @@ describe('the default region (90 % of the way to the nearest conductor)', () => 
     expect(distanceToSource([0, 0, 0], slab)).toBeCloseTo(0.008, 12);
     expect(defaultRegionRadius([0, 0, 0], [loop, wire])).toBeCloseTo(0.9 * 0.002, 12);
     expect(defaultRegionRadius([0, 0, 0], [])).toBeUndefined();
+    const { regionIssues } = await import('../../../server/src/physics/traps/defaultRegion');
+    expect(regionIssues([0, 0, 0], 0.0019, [wire])).toEqual([]);
+    expect(regionIssues([0, 0, 0], 0.002, [wire]).map((i) => i.code)).toEqual(['trap-region-reaches-source']);
   });
 });

@@ -4,6 +4,8 @@
  * current sheet, a wire, a magnetised block). Atoms that get that far would meet the hardware.
  */
 import type { FieldSourceSpec, Vec3 } from '../fields/types';
+import { issue } from './issues';
+import type { TrapIssue } from './types';
 import { addScaled, dot, norm, sub } from './vec3';
 
 export const DEFAULT_REGION_FRACTION = 0.9;
@@ -48,4 +50,13 @@ export function defaultRegionRadius(centre: Vec3, parts: readonly FieldSourceSpe
   let nearest = Number.POSITIVE_INFINITY;
   for (const s of parts) nearest = Math.min(nearest, distanceToSource(centre, s));
   return Number.isFinite(nearest) ? DEFAULT_REGION_FRACTION * nearest : undefined;
+}
+
+/** A region given by hand that reaches a conductor: atoms would meet the hardware before the edge. */
+export function regionIssues(centre: Vec3, radiusM: number, parts: readonly FieldSourceSpec[]): TrapIssue[] {
+  let nearest = Number.POSITIVE_INFINITY;
+  for (const s of parts) nearest = Math.min(nearest, distanceToSource(centre, s));
+  if (!(radiusM >= nearest)) return [];
+  const cm = (m: number): string => `${Number((m * 100).toPrecision(3))} cm`;
+  return [issue('warning', 'trap-region-reaches-source', `The trap region (radius ${cm(radiusM)}) reaches a conductor ${cm(nearest)} from its centre: atoms would meet the hardware before the edge, and the field near a thin conductor grows without bound. Make the region smaller.`)];
 }

@@ -5,4 +5,4 @@ export { STANDARD_GRAVITY, gravityAlong } from './gravity';
 export { energyCurves, rfPartner, type EnergyCurve } from './energyCurves';
 export { MAJORANA_SOURCE, ADIABATIC_MARGIN, majoranaRate } from './majorana';
 export { trapCautions } from './cautions';
-export { defaultRegionRadius, distanceToSource, DEFAULT_REGION_FRACTION } from './defaultRegion';
+export { defaultRegionRadius, distanceToSource, regionIssues, DEFAULT_REGION_FRACTION } from './defaultRegion';
