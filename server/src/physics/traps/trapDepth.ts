@@ -23,6 +23,12 @@ export interface DepthFound {
   direction: Vec3;
 }
 
+/**
+ * |B| along rays, kept for the sublevels of one summary: sublevels whose minima coincide (all of
+ * a quadrupole's, at its zero) walk the same rays, and the field is the costly part.
+ */
+export type RayCache = Map<string, Float64Array>;
+
 interface RayBarrier {
   barrierJ: number;
   limit: 'edge' | 'turning';
@@ -36,19 +42,27 @@ export function trapDepth(
   region: TrapRegion,
   minimum: { position: Vec3; energyJ: number },
   turningFieldT: number | null,
+  cache: RayCache = new Map(),
 ): DepthFound {
   const r0 = minimum.position;
   const u = (r: Vec3, b: number): number => PLANCK_H * curve.energyHz(b) - massKg * dot(gravity, r);
   // `beat`: a ray whose coarse barrier is already above this cannot win, so its maximum is not refined.
   const ray = (d: Vec3, beat = Number.POSITIVE_INFINITY): RayBarrier => {
     const exit = rayExit(r0, d, region);
+    const key = `${r0[0]},${r0[1]},${r0[2]}|${d[0]},${d[1]},${d[2]}`;
+    let fields = cache.get(key);
+    if (!fields) {
+      fields = new Float64Array(DEPTH_STEPS + 1);
+      for (let k = 1; k <= DEPTH_STEPS; k++) fields[k] = norm(field(addScaled(r0, d, (exit * k) / DEPTH_STEPS)).B);
+      cache.set(key, fields);
+    }
     let top = minimum.energyJ;
     let prevS = 0;
     let at = 0;
     for (let k = 1; k <= DEPTH_STEPS; k++) {
       const s = (exit * k) / DEPTH_STEPS;
       const r = addScaled(r0, d, s);
-      const b = norm(field(r).B);
+      const b = fields[k]!;
       if (!Number.isFinite(b)) return { barrierJ: top, limit: 'edge' };
       if (turningFieldT !== null && b >= turningFieldT) {
         // Bisect for the point where |B| reaches the turning field.

@@ -11,7 +11,7 @@ import { surveyField, type FieldSurvey } from './fieldSurvey';
 import { ADIABATIC_MARGIN, MAJORANA_NOTE_RATE, majoranaRate } from './majorana';
 import { trapPotential } from './potential';
 import { rfCut } from './rfCut';
-import { trapDepth } from './trapDepth';
+import { trapDepth, type RayCache } from './trapDepth';
 import { findMinimum } from './trapMinimum';
 import { harmonicShape, linearShape } from './trapShape';
 import { issue } from './issues';
@@ -20,6 +20,8 @@ import { norm, sub } from './vec3';
 
 /** Below this fraction of the largest |B| in the region a minimum counts as a zero of the field. */
 export const ZERO_FIELD_FRACTION = 1e-6;
+/** Minima closer than this fraction of the region's radius to the field's minimum are taken to be at it. */
+const SAME_POINT_FRACTION = 1e-9;
 /** The swept range reaches this far past the largest |B| sampled (rays can pass a little higher). */
 const CURVE_HEADROOM = 1.5;
 
@@ -70,7 +72,8 @@ export function summariseTrap(input: TrapInput): TrapSummary {
   const issues: TrapIssue[] = curves.issues.map((i) => ({ ...i }));
   if (curves.curves.length === 0) return emptySummary(issues, survey);
   const gravityG = norm(input.gravity);
-  const sublevels = curves.curves.map((c) => sublevelTrap(input, survey, curves.curves, c, curves.topT, gravityG, issues));
+  const rays: RayCache = new Map();
+  const sublevels = curves.curves.map((c) => sublevelTrap(input, survey, curves.curves, c, curves.topT, gravityG, issues, rays));
   if (!sublevels.some((s) => s.trapped)) {
     issues.push(issue('warning', 'trap-holds-nothing', 'The trap holds no sublevel of this level.'));
   }
@@ -92,6 +95,7 @@ function sublevelTrap(
   topT: number,
   gravityG: number,
   issues: TrapIssue[],
+  rays: RayCache,
 ): SublevelTrap {
   const name = labelText(c.low);
   // The engine's moment is −dE/dB (negative for a low-field seeker); what holds an atom up is dE/dB.
@@ -118,7 +122,12 @@ function sublevelTrap(
     for (const row of s.gradient) g = Math.max(g, norm(row));
     return Math.min(input.region.radiusM, g > 0 ? b / g : input.region.radiusM);
   };
-  const found = findMinimum(u, survey.centre, input.region, smooth);
+  let found = findMinimum(u, survey.centre, input.region, smooth);
+  // A minimum at the field's own minimum (to the search's tolerance) is that point: sublevels held
+  // there then share it exactly (and their depth rays), and the sag reads 0, not round-off.
+  if (norm(sub(found.position, survey.centre)) < SAME_POINT_FRACTION * input.region.radiusM) {
+    found = { ...found, position: survey.centre, energyJ: u.energy(survey.centre), fieldT: u.fieldT(survey.centre) };
+  }
   const mu = moment(found.fieldT);
   const turningFieldT = c.turningFieldT(found.fieldT);
   const out: SublevelTrap = { ...base, turningFieldT, lowFieldSeeking: c.slopeHzPerT(found.fieldT) > 0, momentJT: mu, trapped: false };
@@ -133,7 +142,7 @@ function sublevelTrap(
     }
     return out;
   }
-  const depth = trapDepth(input.field, c, input.massKg, input.gravity, input.region, found, turningFieldT);
+  const depth = trapDepth(input.field, c, input.massKg, input.gravity, input.region, found, turningFieldT, rays);
   out.minimum = { position: found.position, fieldT: found.fieldT, energyJ: found.energyJ };
   out.sagM = norm(sub(found.position, survey.centre));
   out.depthJ = depth.depthJ;
