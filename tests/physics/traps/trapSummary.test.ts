@@ -231,3 +231,21 @@ describe('the default region (90 % of the way to the nearest conductor)', () => 
     expect(regionIssues([0, 0, 0], 0.002, [wire]).map((i) => i.code)).toEqual(['trap-region-reaches-source']);
   });
 });
+
+describe('a trap from real coils (field sources, elliptic integrals)', () => {
+  it('an anti-Helmholtz pair: the linear gradients are the closed-form axial gradient and half of it', async () => {
+    const { sumField } = await import('../../../server/src/physics/fields');
+    // Loops of radius R at ±a, N I = ±2000 A: dB_z/dz = 3 μ0 N I a R²/(R² + a²)^{5/2} (the on-axis loop
+    // field differentiated; Griffiths, Introduction to Electrodynamics, ch. 5). μ0 from CODATA 2022.
+    const [R, a, NI, mu0] = [0.04, 0.04, 2000, 1.25663706127e-6];
+    const loop = (z: number, at: number) => ({ kind: 'loop', centre: [0, 0, z], axis: [0, 0, 1], radiusM: R, ampereTurns: at }) as const;
+    const field = sumField([loop(a, NI), loop(-a, -NI)]);
+    const s = summariseTrap(input({ field, region: { centre: [0, 0, 0], radiusM: 0.03 }, temperatureK: 3e-4 }));
+    const t = state(s.sublevels, 4, 4);
+    if (t.shape?.kind !== 'linear') throw new Error('linear');
+    const b1 = (3 * mu0 * NI * a * R * R) / (R * R + a * a) ** 2.5;
+    expect(rel(t.shape.gradientsTPerM[0], b1)).toBeLessThan(1e-9);
+    expect(rel(t.shape.gradientsTPerM[1], b1 / 2)).toBeLessThan(1e-9);
+    expect(s.sublevels.filter((x) => x.trapped)).toHaveLength(3);
+  });
+});

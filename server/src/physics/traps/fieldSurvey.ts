@@ -6,7 +6,7 @@
  */
 import type { FieldFunction, Vec3 } from '../fields/types';
 import { nelderMead } from './nelderMead';
-import { magnitudeGradient } from './potential';
+import { magnitudeGradient } from '../fields';
 import type { TrapRegion } from './types';
 import { addScaled, dot, norm, sphereDirections, sub, unit } from './vec3';
 
@@ -52,7 +52,8 @@ export function surveyField(field: FieldFunction, region: TrapRegion, gravity: V
     for (let k = 0; k <= GRAVITY_RAY_STEPS; k++) {
       const s = field(addScaled(best.point, down, (exit * k) / GRAVITY_RAY_STEPS));
       // The |B| gradient opposing gravity: how fast |B| rises going down.
-      const g = dot(magnitudeGradient(s.B, s.gradient), down);
+      const mg = magnitudeGradient(s);
+      const g = mg ? dot(mg, down) : 0;
       if (Number.isFinite(g)) gravityGradientTPerM = Math.max(gravityGradientTPerM, g);
     }
   }

@@ -5,7 +5,8 @@
 import { PLANCK_H } from '../constants';
 import type { FieldFunction, Vec3 } from '../fields/types';
 import type { EnergyCurve } from './energyCurves';
-import { dot, norm, transposeTimes } from './vec3';
+import { magnitudeGradient } from '../fields';
+import { dot, norm } from './vec3';
 
 export interface TrapPotential {
   /** J; +Infinity where the field is not finite (on a wire or a loop). */
@@ -25,16 +26,10 @@ export function trapPotential(field: FieldFunction, curve: EnergyCurve, massKg: 
     },
     gradient(r) {
       const s = field(r);
-      const g = magnitudeGradient(s.B, s.gradient);
+      // |B| has a cone, no gradient, where B vanishes: no force from the field there.
+      const g = magnitudeGradient(s) ?? [0, 0, 0];
       const k = PLANCK_H * curve.slopeHzPerT(norm(s.B));
       return [k * g[0] - massKg * gravity[0], k * g[1] - massKg * gravity[1], k * g[2] - massKg * gravity[2]];
     },
   };
-}
-
-/** ∇|B| (T/m); zero where B vanishes (|B| has a cone there, no gradient). */
-export function magnitudeGradient(B: Vec3, gradient: Parameters<typeof transposeTimes>[0]): Vec3 {
-  const b = norm(B);
-  if (!(b > 0)) return [0, 0, 0];
-  return transposeTimes(gradient, [B[0] / b, B[1] / b, B[2] / b]);
 }
