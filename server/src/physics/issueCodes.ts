@@ -133,7 +133,8 @@ export const PHYSICS_RULES = {
   'trap-zero-field': { severity: 'warning', summary: 'A sublevel held at a zero of the field: Majorana spin flips lose atoms there.' },
   'trap-majorana-slow': { severity: 'info', summary: 'A sublevel held at a zero of the field whose estimated Majorana loss is slower than 1/(60 s).' },
   'trap-bias-too-small': { severity: 'warning', summary: 'The Larmor frequency at the minimum is less than 100 × the highest trap frequency: Majorana losses.' },
-  'trap-cut-outside': { severity: 'warning', summary: 'An RF cut above the trap depth: the knife cuts nothing the edge does not.' },
+  'trap-cut-outside': { severity: 'info', summary: 'An RF cut above the trap depth of one sublevel: for it the knife cuts nothing the edge does not.' },
+  'trap-cut-above-depth': { severity: 'warning', summary: 'An RF cut above the depth of every trapped sublevel: the knife cuts nothing.' },
   'trap-turning-point': { severity: 'info', summary: 'The depth is set where the sublevel turns high-field seeking, not by the edge.' },
   'trap-not-harmonic': { severity: 'info', summary: 'A minimum that is flat in some direction: no harmonic frequencies.' },
   // Field sources (fields/).

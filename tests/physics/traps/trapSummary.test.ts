@@ -183,9 +183,14 @@ describe('the RF knife', () => {
     const q = summariseTrap(input({ field: quadrupole(1), gravity: [0, 0, 0], cutJ: rf.cut_J }));
     expect(rel(state(q.sublevels, 4, 4).rfCut!.linearHz, rf.cut_J / PLANCK_H / 2)).toBeLessThan(1e-3);
   });
-  it('a cut above the depth is flagged', () => {
+  it('a cut above the depth is flagged: a note per sublevel, a warning when it cuts no sublevel', () => {
     const q = summariseTrap(input({ field: quadrupole(1), gravity: [0, 0, 0], cutJ: 1e-20 }));
-    expect(q.issues.filter((i) => i.code === 'trap-cut-outside').length).toBeGreaterThan(0);
+    expect(q.issues.filter((i) => i.code === 'trap-cut-outside')).toHaveLength(3);
+    expect(q.issues.filter((i) => i.code === 'trap-cut-above-depth')).toHaveLength(1);
+    // 1 T/m, 2 cm: |2,+2⟩ is about 6.7 mK deep (μ_B b′R/2 / k_B), |2,+1⟩ about half: a 5 mK cut reaches only |2,+2⟩.
+    const one = summariseTrap(input({ field: quadrupole(1), gravity: [0, 0, 0], cutJ: 1.380649e-23 * 5e-3 }));
+    expect(one.issues.filter((i) => i.code === 'trap-cut-outside').map((i) => i.sublevel).sort()).toEqual(['|F=1, m_F=-1⟩', '|F=2, m_F=+1⟩']);
+    expect(one.issues.filter((i) => i.code === 'trap-cut-above-depth')).toEqual([]);
   });
 });
 

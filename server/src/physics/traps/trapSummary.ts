@@ -76,6 +76,8 @@ export function summariseTrap(input: TrapInput): TrapSummary {
   const sublevels = curves.curves.map((c) => sublevelTrap(input, survey, curves.curves, c, curves.topT, gravityG, issues, rays));
   if (!sublevels.some((s) => s.trapped)) {
     issues.push(issue('warning', 'trap-holds-nothing', 'The trap holds no sublevel of this level.'));
+  } else if (input.cutJ !== undefined && !sublevels.some((s) => s.rfCut)) {
+    issues.push(issue('warning', 'trap-cut-above-depth', 'The RF cut is above the depth of every trapped sublevel: the knife cuts nothing. Lower the cut.'));
   }
   return {
     fieldCentre: survey.centre,
@@ -191,7 +193,7 @@ function sublevelTrap(
     const limit = turningFieldT ?? topT;
     const cut = input.cutJ <= depth.depthJ ? rfCut(c, partner, found.fieldT, input.cutJ, limit) : null;
     if (cut) out.rfCut = cut;
-    else issues.push(issue('warning', 'trap-cut-outside', `The RF cut is above the trap's depth for ${name}: the knife cuts nothing the edge does not.`, name));
+    else issues.push(issue('info', 'trap-cut-outside', `The RF cut is above the trap's depth for ${name}: for it the knife cuts nothing the edge does not.`, name));
   }
   return out;
 }
