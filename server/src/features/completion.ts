@@ -31,6 +31,10 @@ const BLOCK_WORD_DETAIL: Record<BlockKind, string> = {
   settings: 'settings — g_s, reduced_mass',
   data: 'data <name> — measured points: level, kind, lower, upper, point, file, beam',
   fit: 'fit <name> — data, free, start, range (or fit <name>: <data> -> <parameter>)',
+  coil: 'coil <name> — a current loop, or a pair with spacing: radius, turns, current, centre, axis, spacing, sense, conductor',
+  solenoid: 'solenoid <name> — radius, length, turns, current, centre, axis, conductor',
+  wire: 'wire <name> — a straight wire: current, through, direction, length, return',
+  slab: 'slab <name> — a magnetised block: size, centre, magnetisation',
   trap: 'trap <name> — sources, level, gravity, temperature, cut, region, centre',
 };
 
@@ -132,6 +136,16 @@ function valueCompletions(c: LineContext, model: SetupModel | undefined, block: 
       return empty ? wordItems(['exact', '2'], c.replace, 'exact: CODATA |g_e|; 2: textbook fractions') : [];
     case 'settings.reduced_mass':
       return empty ? wordItems(['on', 'off'], c.replace) : [];
+    case 'coil.axis':
+    case 'solenoid.axis':
+    case 'wire.direction':
+      return empty ? wordItems(['x', 'y', 'z', '-x', '-y', '-z'], c.replace, 'a direction, or three numbers such as 0, 1, 1') : [];
+    case 'coil.sense':
+      return empty ? wordItems(['same', 'opposite'], c.replace, 'same: currents alike; opposite: a quadrupole pair') : [];
+    case 'slab.magnetisation':
+      // `1.2 T |` → along; `1.2 T along |` → a direction.
+      if (words[words.length - 1]?.text === 'along') return wordItems(['x', 'y', 'z', '-x', '-y', '-z'], c.replace, 'direction of magnetisation');
+      return words.length >= 2 && !words.some((w) => w.text === 'along') ? wordItems(['along'], c.replace) : [];
     default:
       return [];
   }

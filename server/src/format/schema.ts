@@ -4,7 +4,7 @@
  */
 import type { BlockKind } from './ast';
 
-export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 'beam', 'line', 'resonance', 'settings', 'data', 'fit', 'trap'];
+export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 'beam', 'line', 'resonance', 'settings', 'data', 'fit', 'coil', 'solenoid', 'wire', 'slab', 'trap'];
 
 export const LEVEL_WORD = 'level';
 
@@ -25,6 +25,11 @@ export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
   settings: ['g_s', 'reduced_mass'],
   data: ['level', 'kind', 'lower', 'upper', 'point', 'file', 'beam'],
   fit: ['data', 'free', 'start', 'range'],
+  // Field sources (docs/fields.md).
+  coil: ['radius', 'turns', 'current', 'centre', 'axis', 'spacing', 'sense', 'conductor'],
+  solenoid: ['radius', 'length', 'turns', 'current', 'centre', 'axis', 'conductor'],
+  wire: ['current', 'through', 'direction', 'length', 'return'],
+  slab: ['size', 'centre', 'magnetisation'],
   trap: ['sources', 'level', 'gravity', 'temperature', 'cut', 'region', 'centre'],
 };
 
@@ -32,7 +37,7 @@ export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
 export const REPEATABLE_KEYS: readonly string[] = ['point'];
 
 /** Plain words that appear inside values; never mistaken for misspelt units. */
-export const VALUE_WORDS: readonly string[] = ['oven', 'jet', 'speed', 'spread', 'apart', 'at', 'exact', 'on', 'off', 'along', 'across'];
+export const VALUE_WORDS: readonly string[] = ['oven', 'jet', 'speed', 'spread', 'apart', 'at', 'exact', 'on', 'off', 'along', 'across', 'same', 'opposite', 'x', 'y', 'z', '-x', '-y', '-z', '+x', '+y', '+z'];
 
 export function isBlockWord(word: string): word is BlockKind {
   return (BLOCK_WORDS as readonly string[]).includes(word);

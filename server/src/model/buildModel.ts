@@ -16,9 +16,13 @@ import { buildSpecies } from './speciesBuilder';
 import { buildResonance } from './resonanceBuilder';
 import { buildData } from './dataBuilder';
 import { buildFit } from './fitBuilder';
+import { buildTrap } from './trapBuilder';
+import type { TrapModel } from './trapTypes';
 import type { DataModel, FitRequestModel } from './fitTypes';
 import type { SetupSources } from './sources';
-import type { BeamModel, FieldModel, LineModel, MagnetModel, NameUse, ResonanceModel, SetupModel, SpeciesModel, UsedFileModel } from './types';
+import { buildFieldSource, isSourceBlock } from './sourceBuilder';
+import { checkSourceOverlaps } from './sourceOverlaps';
+import type { BeamModel, FieldModel, FieldSourceModel, LineModel, MagnetModel, NameUse, ResonanceModel, SetupModel, SpeciesModel, UsedFileModel } from './types';
 import { resolveUses, rootUseContext, type UseContext } from './useResolver';
 
 /**
@@ -34,6 +38,14 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
   const settings = { ...DEFAULT_SETTINGS };
   const species = new NameIndex<SpeciesModel>('species', names);
   const fields = new NameIndex<FieldModel>('field', names);
+  // Sources come before everything that lists them (magnets, traps, slowers), wherever they are in the file.
+  const fieldSources = new NameIndex<FieldSourceModel>('source', names);
+  for (const block of doc.blocks) {
+    if (!isSourceBlock(block)) continue;
+    const s = memo.build(block, names, problems, (_u, p) => buildFieldSource(block, p));
+    if (s) fieldSources.declare(s, problems);
+  }
+  checkSourceOverlaps(fieldSources.all(), problems);
   const magnets = new NameIndex<MagnetModel>('magnet', names);
   const beams = new NameIndex<BeamModel>('beam', names);
   const lines = new NameIndex<LineModel>('line', names);
@@ -64,6 +76,7 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
     }
   }
   adoptUsedSpecies(used, species, problems);
+  const traps = new NameIndex<TrapModel>('trap', names);
   let beamOrdinal = 0;
   const beamsWithoutName: BeamModel[] = [];
   for (const block of doc.blocks) {
@@ -77,6 +90,9 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
     } else if (block.kind === 'resonance') {
       const r = buildResonance(block, species, names, problems);
       if (r) resonances.declare(r, problems);
+    } else if (block.kind === 'trap') {
+      const t = buildTrap(block, { species, sources: fieldSources }, names, problems);
+      if (t) traps.declare(t, problems);
     }
   }
   // Data name beams and levels; fits name data: so they come last.
@@ -97,12 +113,14 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
     uses: used,
     species: species.all(),
     fields: fields.all(),
+    sources: fieldSources.all(),
     magnets: magnets.all(),
     beams: [...beams.all(), ...beamsWithoutName],
     lines: lines.all(),
     resonances: resonances.all(),
     data: data.all(),
     fits: fits.all(),
+    traps: traps.all(),
     settings,
     names,
     problems: problems.items,

@@ -27,7 +27,7 @@ export function buildTrap(
   for (const s of node.settings) {
     switch (s.key.text) {
       case 'sources': {
-        const list = readSourceList(s, index, problems);
+        const list = readSourceList(s, index.sources, problems);
         if (list) trap.sources = list;
         break;
       }

@@ -36,6 +36,7 @@ const FAMILY_HELP: readonly [RegExp, string][] = [
   [/^(?:value|spin|name)-/, 'Correct the value or name as the message says; docs/format.md lists what each setting takes.'],
   [/^(?:species|level|zeta|term|hyperfine|dipole|quadrupole|octupole|gj|config)-/, 'Check the level against docs/format.md (species, levels, term symbols) and the published data for the species.'],
   [/^(?:use)-/, 'Check the `use` path: a .sublevel file inside the root that exists and has no errors (docs/format.md).'],
+  [/^(?:source|vector|direction)-/, 'Check the coil, solenoid, wire or slab block against docs/format.md; the field formulas and their limits are in docs/fields.md.'],
   [/^trap-/, 'Check the trap block against docs/traps.md (region, sources, level, gravity, temperature, cut); the message names the sublevel.'],
   [/^(?:field|magnet|beam)-/, 'Check the apparatus settings against docs/beam.md; the message names the setting and the value.'],
   [/^(?:line|resonance|pair|scan|no-resonance|no-insensitive)/, 'Check the line or resonance against docs/transitions.md; the message names the levels involved.'],

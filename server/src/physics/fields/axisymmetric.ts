@@ -25,9 +25,15 @@ export function toCylinder(point: Vec3, centre: Vec3, axis: Vec3, out: CylinderP
   const dy = point[1] - centre[1];
   const dz = point[2] - centre[2];
   const z = dx * axis[0] + dy * axis[1] + dz * axis[2];
-  const px = dx - z * axis[0];
-  const py = dy - z * axis[1];
-  const pz = dz - z * axis[2];
+  let px = dx - z * axis[0];
+  let py = dy - z * axis[1];
+  let pz = dz - z * axis[2];
+  // On a tilted axis, rounding leaves a perpendicular part that is not perpendicular; one more
+  // projection fixes its direction (ρ itself is already right to rounding).
+  const again = px * axis[0] + py * axis[1] + pz * axis[2];
+  px -= again * axis[0];
+  py -= again * axis[1];
+  pz -= again * axis[2];
   const rho = Math.sqrt(px * px + py * py + pz * pz);
   out.rho = rho;
   out.z = z;
