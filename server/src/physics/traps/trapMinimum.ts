@@ -18,13 +18,24 @@ export interface MinimumFound {
   onEdge: boolean;
 }
 
+/** Restarts of the simplex search at most (each costs a few hundred potential evaluations). */
+const MAX_RESTARTS = 6;
+
 /** Fraction of the radius beyond which a minimum counts as lying on the edge. */
 export const EDGE_FRACTION = 0.995;
 
 export function findMinimum(u: TrapPotential, start: Vec3, region: TrapRegion, smooth: (r: Vec3) => number): MinimumFound {
   const R = region.radiusM;
   const inside = (r: Vec3): number => (norm(sub(r, region.centre)) > R ? Number.POSITIVE_INFINITY : u.energy(r));
+  // A simplex can stall in a tilted valley (a quadrupole's cone with gravity): restart it with a
+  // fresh, full-size simplex until a restart no longer moves, then refine with a small one.
   let best = nelderMead(inside, start, R / 20, R * 1e-10);
+  for (let k = 0; k < MAX_RESTARTS; k++) {
+    const again = nelderMead(inside, best.point, R / 20, R * 1e-10);
+    const moved = norm(sub(again.point, best.point));
+    best = again;
+    if (moved < R * 1e-9) break;
+  }
   best = nelderMead(inside, best.point, R / 400, R * 1e-11);
   let p = best.point;
   // Newton polish where the potential is smooth (a length scale over which |B| rounds off is known).

@@ -136,12 +136,14 @@ function sublevelTrap(
   // Held: the moment at the minimum; not held: the moment at the field centre, where it would have to be held.
   const lev = levitation(found.onEdge ? muCentre : mu);
   if (lev !== undefined) out.levitationTPerM = lev;
+  // Gravity wins where the sublevel needs more |B| gradient along gravity than the trap has anywhere below its centre.
+  const gravityWins = lev !== undefined && survey.gravityGradientTPerM < lev;
+  const gravityIssue = (): void => {
+    issues.push(issue('warning', 'trap-gravity-too-strong', `This trap cannot hold ${name} against gravity: it needs ≥ ${gcm(lev!)} along gravity (has ${gcm(survey.gravityGradientTPerM)}).`, name));
+  };
   if (found.onEdge) {
-    if (lev !== undefined && survey.gravityGradientTPerM < lev) {
-      issues.push(issue('warning', 'trap-gravity-too-strong', `This trap cannot hold ${name} against gravity: it needs ≥ ${gcm(lev)} along gravity (has ${gcm(survey.gravityGradientTPerM)}).`, name));
-    } else {
-      issues.push(issue('info', 'trap-sublevel-escapes', `${name} is low-field seeking but has no minimum inside the trap region: it is pushed out to the edge.`, name));
-    }
+    if (gravityWins) gravityIssue();
+    else issues.push(issue('info', 'trap-sublevel-escapes', `${name} is low-field seeking but has no minimum inside the trap region: it is pushed out to the edge.`, name));
     return out;
   }
   const depth = trapDepth(input.field, c, input.massKg, input.gravity, input.region, found, turningFieldT, rays);
@@ -151,7 +153,8 @@ function sublevelTrap(
   out.depthLimit = depth.limit;
   out.trapped = depth.depthJ > 0;
   if (!out.trapped) {
-    issues.push(issue('info', 'trap-sublevel-escapes', `${name} finds no barrier on its way out: the trap has no depth for it.`, name));
+    if (gravityWins) gravityIssue();
+    else issues.push(issue('info', 'trap-sublevel-escapes', `${name} finds no barrier on its way out: the trap has no depth for it.`, name));
     return out;
   }
   if (depth.limit === 'turning' && turningFieldT !== null) {
