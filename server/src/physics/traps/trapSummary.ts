@@ -3,7 +3,7 @@
  * gradient, the minimum with its gravity sag, the depth, the harmonic frequencies or the linear
  * gradients, the RF knife and the Majorana estimate, with problems as values. docs/traps.md.
  */
-import { BOLTZMANN_K, PLANCK_H } from '../constants';
+import { BOHR_MAGNETON_HZ_PER_T, BOLTZMANN_K, PLANCK_H } from '../constants';
 import type { Vec3 } from '../fields/types';
 import type { LowFieldLabel } from '../engine';
 import { energyCurves, rfPartner, type EnergyCurve } from './energyCurves';
@@ -20,6 +20,11 @@ import { norm, sub } from './vec3';
 
 /** Below this fraction of the largest |B| in the region a minimum counts as a zero of the field. */
 export const ZERO_FIELD_FRACTION = 1e-6;
+/**
+ * dE/dB below 10⁻⁴ μ_B (an m = 0 state at a zero of the field, whose energy only starts
+ * quadratically) is not counted as low-field seeking: no gradient could hold it up.
+ */
+const SEEKING_SLOPE_HZ_PER_T = 1e-4 * BOHR_MAGNETON_HZ_PER_T;
 /** Minima closer than this fraction of the region's radius to the field's minimum are taken to be at it. */
 const SAME_POINT_FRACTION = 1e-9;
 /** The swept range reaches this far past the largest |B| sampled (rays can pass a little higher). */
@@ -110,7 +115,7 @@ function sublevelTrap(
     turningFieldT: c.turningFieldT(centreField),
   };
   const muCentre = moment(centreField);
-  const seeking = c.slopeHzPerT(centreField) > 0;
+  const seeking = c.slopeHzPerT(centreField) > SEEKING_SLOPE_HZ_PER_T;
   if (!seeking) {
     return { ...base, lowFieldSeeking: false, momentJT: muCentre, trapped: false };
   }
@@ -132,7 +137,7 @@ function sublevelTrap(
   }
   const mu = moment(found.fieldT);
   const turningFieldT = c.turningFieldT(found.fieldT);
-  const out: SublevelTrap = { ...base, turningFieldT, lowFieldSeeking: c.slopeHzPerT(found.fieldT) > 0, momentJT: mu, trapped: false };
+  const out: SublevelTrap = { ...base, turningFieldT, lowFieldSeeking: c.slopeHzPerT(found.fieldT) > SEEKING_SLOPE_HZ_PER_T, momentJT: mu, trapped: false };
   // Held: the moment at the minimum; not held: the moment at the field centre, where it would have to be held.
   const lev = levitation(found.onEdge ? muCentre : mu);
   if (lev !== undefined) out.levitationTPerM = lev;
@@ -161,9 +166,11 @@ function sublevelTrap(
     issues.push(issue('info', 'trap-turning-point', `The depth for ${name} is set by the turning point of its energy at ${Number((turningFieldT * 1e4).toPrecision(4))} G, where it becomes high-field seeking.`, name));
   }
   const partner = rfPartner(all, c);
-  if (partner) out.larmorHz = Math.abs(c.energyHz(found.fieldT) - partner.energyHz(found.fieldT));
   const at = input.field(found.position);
-  if (found.fieldT <= ZERO_FIELD_FRACTION * survey.maxFieldT) {
+  const zeroField = found.fieldT <= ZERO_FIELD_FRACTION * survey.maxFieldT;
+  // At a zero of the field there is no precession to speak of: no Larmor frequency.
+  if (partner && !zeroField) out.larmorHz = Math.abs(c.energyHz(found.fieldT) - partner.energyHz(found.fieldT));
+  if (zeroField) {
     const shape = linearShape(at.gradient);
     const pull0 = -moment(0);
     if (input.temperatureK !== undefined) {
