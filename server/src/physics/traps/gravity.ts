@@ -1,6 +1,6 @@
 /**
  * Standard acceleration of gravity g_n = 9.806 65 m/s², a conventional exact value (3rd CGPM, 1901;
- * the value scipy.constants.g ships, checked in tests/physics/traps.test.ts against tests/reference/traps.json).
+ * the value scipy.constants.g ships, checked in tests/physics/traps/trapSummary.test.ts against tests/reference/traps.json).
  */
 import type { Vec3 } from '../fields/types';
 
