@@ -12,7 +12,7 @@ describe('sublevel trap', () => {
     expect(r.out).toContain('trap quadtrap — Rb87.ground; sources quad, lift');
     expect(r.out).toContain('temperature 300 µK; cut 3 mK');
     expect(r.out).toMatch(/\|F=2, m_F=\+2⟩ +trapped/);
-    expect(r.out).toMatch(/\|F=2, m_F=-2⟩ +high-field seeking: not trapped/);
+    expect(r.out).toMatch(/\|F=2, m_F=-2⟩ +not low-field seeking/);
     expect(r.out).toMatch(/linear \(no harmonic frequency\)/);
     expect(r.out).toMatch(/RF cut [0-9.]+ MHz to \|F=2, m_F=\+1⟩/);
     expect(r.out).toContain('caution: Trap coils dissipate power');

@@ -41,7 +41,7 @@ export function shapeText(s: TrapSublevelResult): string {
 /** One line about a sublevel: held or not, and why. */
 export function sublevelVerdict(s: TrapSublevelResult): string {
   if (s.trapped) return 'trapped';
-  if (!s.low_field_seeking) return 'high-field seeking: not trapped';
+  if (!s.low_field_seeking) return 'not low-field seeking';
   return s.levitation_T_per_m !== undefined ? `not held (needs ${gaussPerCmText(s.levitation_T_per_m)} along gravity)` : 'not held';
 }
 
