@@ -34,7 +34,8 @@ export function findMinimum(u: TrapPotential, start: Vec3, region: TrapRegion, s
     const again = nelderMead(inside, best.point, R / 20, R * 1e-10);
     const moved = norm(sub(again.point, best.point));
     best = again;
-    if (moved < R * 1e-9) break;
+    // A stall leaves the simplex far from the minimum; small moves are the final digits, which Newton steps (or the last refinement) supply.
+    if (moved < R * 1e-6) break;
   }
   best = nelderMead(inside, best.point, R / 400, R * 1e-11);
   let p = best.point;

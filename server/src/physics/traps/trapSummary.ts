@@ -119,6 +119,17 @@ function sublevelTrap(
   if (!seeking) {
     return { ...base, lowFieldSeeking: false, momentJT: muCentre, trapped: false };
   }
+  // Gravity wins everywhere when even the largest dE/dB over the region's fields cannot hold the
+  // atom with the steepest |B| rise along gravity: no minimum to search for.
+  if (gravityG > 0 && input.massKg * gravityG > PLANCK_H * largestSlope(c, centreField, survey.maxFieldT) * survey.gravityGradientTPerM) {
+    const out: SublevelTrap = { ...base, lowFieldSeeking: true, momentJT: muCentre, trapped: false };
+    const lev = levitation(muCentre);
+    if (lev !== undefined) {
+      out.levitationTPerM = lev;
+      issues.push(issue('warning', 'trap-gravity-too-strong', `This trap cannot hold ${name} against gravity: it needs ≥ ${gcm(lev)} along gravity (has ${gcm(survey.gravityGradientTPerM)}).`, name));
+    }
+    return out;
+  }
   const u = trapPotential(input.field, c, input.massKg, input.gravity);
   // A length over which |B| rounds off at the minimum: B/|∇B|; none at a zero of the field.
   const smooth = (r: Vec3): number => {
@@ -206,6 +217,13 @@ function sublevelTrap(
     else issues.push(issue('info', 'trap-cut-outside', `The RF cut is above the trap's depth for ${name}: for it the knife cuts nothing the edge does not.`, name));
   }
   return out;
+}
+
+/** The largest dE/dB (Hz/T) between two fields, on a grid fine enough for the smooth E(B). */
+function largestSlope(c: EnergyCurve, fromT: number, toT: number): number {
+  let top = c.slopeHzPerT(fromT);
+  for (let k = 1; k <= 64; k++) top = Math.max(top, c.slopeHzPerT(fromT + ((toT - fromT) * k) / 64));
+  return top;
 }
 
 /** |F, m_F⟩ style text of a low-field label, for messages. */
