@@ -82,6 +82,13 @@ describe('trap from an anti-Helmholtz pair', () => {
     expect(codes).toContain('value-out-of-range');
   });
 
+  it('writes round-off of the searches as 0: the zero of the field is at the origin with |B| = 0', () => {
+    const s = t.sublevels.find((x) => x.label === 'F=2, m_F=+2')!;
+    expect(s.minimum_m).toEqual([0, 0, 0]);
+    expect(s.field_at_minimum_T).toBe(0);
+    expect(t.field_at_centre_T).toBe(0);
+  });
+
   it('never prints NaN or Infinity', () => {
     expect(JSON.stringify(r.result)).not.toMatch(/NaN|Infinity/);
   });

@@ -8,7 +8,7 @@ import { BOLTZMANN_K, PLANCK_H } from '../physics/constants';
 import { sumField } from '../physics/fields';
 import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
 import { PHYSICS_RULES } from '../physics/issueCodes';
-import { defaultRegionRadius, gravityAlong, regionIssues, summariseTrap, trapCautions, type SublevelTrap, type TrapIssue, type TrapSummary } from '../physics/traps';
+import { defaultRegionRadius, gravityAlong, regionIssues, ZERO_FIELD_FRACTION, summariseTrap, trapCautions, type SublevelTrap, type TrapIssue, type TrapSummary } from '../physics/traps';
 import type { SettingsModel } from '../model/types';
 import type { TrapModel } from '../model/trapTypes';
 import type { GJLookup } from './gJLookup';
@@ -57,15 +57,28 @@ export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: Settings
   for (const i of summary.issues) problems.push(toProblem(trap, i));
   if (summary.sublevels.length === 0) return { result, summary, problems };
   result.computed = true;
-  result.field_centre_m = [...summary.fieldCentre];
-  result.field_at_centre_T = summary.fieldAtCentreT;
+  // Below the searches' own precision a position or a field is round-off: written as 0.
+  const noise = { lengthM: SEARCH_PRECISION * radius, fieldT: ZERO_FIELD_FRACTION * summary.fieldRangeT[1] };
+  result.field_centre_m = cleanVec(summary.fieldCentre, noise.lengthM);
+  result.field_at_centre_T = clean(summary.fieldAtCentreT, noise.fieldT);
   result.field_max_T = summary.fieldRangeT[1];
   result.gravity_gradient_T_per_m = summary.gravityGradientTPerM;
-  result.sublevels = summary.sublevels.map(sublevelResult);
+  result.sublevels = summary.sublevels.map((s) => sublevelResult(s, noise));
   return { result, summary, problems };
 }
 
-function sublevelResult(s: SublevelTrap): TrapSublevelResult {
+/** Relative precision of the minimum searches (the simplex stops at 1e-11 of the region's radius; docs/traps.md). */
+const SEARCH_PRECISION = 1e-9;
+
+function clean(x: number, floor: number): number {
+  return Math.abs(x) < floor ? 0 : x;
+}
+
+function cleanVec(v: readonly number[], floor: number): [number, number, number] {
+  return [clean(v[0]!, floor), clean(v[1]!, floor), clean(v[2]!, floor)];
+}
+
+function sublevelResult(s: SublevelTrap, noise: { lengthM: number; fieldT: number }): TrapSublevelResult {
   const out: TrapSublevelResult = {
     label: s.low.text,
     two_m: s.twoM,
@@ -76,10 +89,10 @@ function sublevelResult(s: SublevelTrap): TrapSublevelResult {
   if (s.levitationTPerM !== undefined) out.levitation_T_per_m = s.levitationTPerM;
   if (s.turningFieldT !== null) out.turning_field_T = s.turningFieldT;
   if (s.minimum) {
-    out.minimum_m = [...s.minimum.position];
-    out.field_at_minimum_T = s.minimum.fieldT;
+    out.minimum_m = cleanVec(s.minimum.position, noise.lengthM);
+    out.field_at_minimum_T = clean(s.minimum.fieldT, noise.fieldT);
   }
-  if (s.sagM !== undefined) out.sag_m = s.sagM;
+  if (s.sagM !== undefined) out.sag_m = clean(s.sagM, noise.lengthM);
   if (s.depthJ !== undefined) {
     out.depth_J = s.depthJ;
     out.depth_K = s.depthJ / BOLTZMANN_K;
