@@ -119,6 +119,9 @@ function sublevelTrap(
   if (!seeking) {
     return { ...base, lowFieldSeeking: false, momentJT: muCentre, trapped: false };
   }
+  const gravityIssue = (lev: number): void => {
+    issues.push(issue('warning', 'trap-gravity-too-strong', `This trap cannot hold ${name} against gravity: it needs ≥ ${gcm(lev)} along gravity (has ${gcm(survey.gravityGradientTPerM)}).`, name));
+  };
   // Gravity wins everywhere when even the largest dE/dB over the region's fields cannot hold the
   // atom with the steepest |B| rise along gravity: no minimum to search for.
   if (gravityG > 0 && input.massKg * gravityG > PLANCK_H * largestSlope(c, centreField, survey.maxFieldT) * survey.gravityGradientTPerM) {
@@ -126,7 +129,7 @@ function sublevelTrap(
     const lev = levitation(muCentre);
     if (lev !== undefined) {
       out.levitationTPerM = lev;
-      issues.push(issue('warning', 'trap-gravity-too-strong', `This trap cannot hold ${name} against gravity: it needs ≥ ${gcm(lev)} along gravity (has ${gcm(survey.gravityGradientTPerM)}).`, name));
+      gravityIssue(lev);
     }
     return out;
   }
@@ -154,11 +157,8 @@ function sublevelTrap(
   if (lev !== undefined) out.levitationTPerM = lev;
   // Gravity wins where the sublevel needs more |B| gradient along gravity than the trap has anywhere below its centre.
   const gravityWins = lev !== undefined && survey.gravityGradientTPerM < lev;
-  const gravityIssue = (): void => {
-    issues.push(issue('warning', 'trap-gravity-too-strong', `This trap cannot hold ${name} against gravity: it needs ≥ ${gcm(lev!)} along gravity (has ${gcm(survey.gravityGradientTPerM)}).`, name));
-  };
   if (found.onEdge) {
-    if (gravityWins) gravityIssue();
+    if (gravityWins) gravityIssue(lev!);
     else issues.push(issue('info', 'trap-sublevel-escapes', `${name} is low-field seeking but has no minimum inside the trap region: it is pushed out to the edge.`, name));
     return out;
   }
@@ -169,7 +169,7 @@ function sublevelTrap(
   out.depthLimit = depth.limit;
   out.trapped = depth.depthJ > 0;
   if (!out.trapped) {
-    if (gravityWins) gravityIssue();
+    if (gravityWins) gravityIssue(lev!);
     else issues.push(issue('info', 'trap-sublevel-escapes', `${name} finds no barrier on its way out: the trap has no depth for it.`, name));
     return out;
   }
