@@ -64,6 +64,7 @@ describe('sublevel eval on many files (in-process, one thread)', () => {
       'examples/lithium-beam.sublevel',
       'examples/lithium-whole-term.sublevel',
       'examples/mistakes.sublevel',
+      'examples/quadrupole-trap.sublevel',
       'examples/rubidium-bias.sublevel',
       'examples/rubidium-spectrum.sublevel',
       'examples/shared/alkali-levels.sublevel',

@@ -145,6 +145,13 @@ const CASES: Case[] = [
     text: 'mag|net m\n',
     has: ['magnet — a state-selecting magnet'],
   },
+  {
+    name: 'trap name: the summary, the trapped sublevels and their depth (docs/traps.md)',
+    // A 1000 A-turn anti-Helmholtz pair (R = 4 cm at ±4 cm): 41.7 G/cm on the axis, holds ⁸⁷Rb |2,+2⟩ (needs 15.3 G/cm).
+    text: 'species Rb87\n  level ground: 5s 2S1/2\ncoil quad\n  radius = 4 cm\n  turns = 100\n  current = 10 A\n  spacing = 8 cm\n  sense = opposite\ntrap q|t\n  sources = quad\n  level = ground\n',
+    has: ['trap qt — Rb87.ground; sources quad', 'trapped: |F=1, m_F=-1⟩, |F=2, m_F=+1⟩, |F=2, m_F=+2⟩', '|F=2, m_F=-2⟩ | not low-field seeking', 'linear (no harmonic frequency)', '15.27 G/cm'],
+    hasNot: ['NaN', 'undefined'],
+  },
 ];
 
 describe('hover', () => {

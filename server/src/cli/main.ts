@@ -22,6 +22,7 @@ import { runSpectrum, spectrumSpec } from './spectrumCommand';
 import { renderSpec, runRender } from './renderCommand';
 import { runSweep, sweepSpec } from './sweepCommand';
 import { runSlower, slowerSpec } from './slowerCommand';
+import { runTrap, trapSpec } from './trapCommand';
 import { suggestNames } from '../format/didYouMean';
 
 interface Command {
@@ -41,6 +42,7 @@ const COMMANDS: readonly Command[] = [
   { spec: fitSpec, run: runFit },
   { spec: fieldSpec, run: runField },
   { spec: slowerSpec, run: runSlower },
+  { spec: trapSpec, run: runTrap },
 ];
 
 const SPECS = COMMANDS.map((c) => c.spec);

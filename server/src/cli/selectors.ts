@@ -36,7 +36,7 @@ export function selectField(model: SetupModel, wanted: string | undefined): Work
 }
 
 /** The name of a line (or resonance) of the file, checked; undefined when none is asked for. */
-export function selectName(kind: 'line' | 'resonance' | 'fit' | 'slower', names: string[], wanted: string | undefined): string | undefined {
+export function selectName(kind: 'line' | 'resonance' | 'fit' | 'slower' | 'trap', names: string[], wanted: string | undefined): string | undefined {
   return wanted === undefined ? undefined : pick(kind, names, (n) => [n], wanted);
 }
 

@@ -20,6 +20,7 @@ import type {
 import { table } from './table';
 import { sourceHeadline, sourceLines } from '../eval/fieldSourceText';
 import { slowerReport } from '../eval/slowerText';
+import { trapReport } from './trapReport';
 
 export function textReport(file: string, r: EvaluationResult): string[] {
   const out: string[] = [];
@@ -56,6 +57,7 @@ export function textReport(file: string, r: EvaluationResult): string[] {
   for (const l of r.lines) out.push(...lineReport(l, atFieldText, r.diagnostics));
   for (const x of r.resonances) out.push(...resonanceReport(x, atFieldText));
   for (const s of r.slowers ?? []) out.push('', ...slowerReport(s));
+  for (const t of r.traps ?? []) out.push(...trapReport(t));
   const counts = (sev: string): number => r.diagnostics.filter((d) => d.severity === sev).length;
   out.push('');
   const plural = (n: number, word: string): string => `${n} ${word}${n === 1 ? '' : 's'}`;

@@ -17,6 +17,7 @@ import { evaluateFit } from './fitEvaluation';
 import { evaluateFieldSource, sourceEvalInput } from './fieldSourceEvaluation';
 import { sumField } from '../physics/fields';
 import { evaluateSlower } from './slowerEvaluation';
+import { evaluateTrap } from './trapEvaluation';
 import { EVAL_RULES } from './evalCodes';
 import { evaluateLevel, type EvaluationNote, type WorkingField } from './levelEvaluation';
 import {
@@ -80,6 +81,12 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   const fieldSources = model.sources.map((s) => evaluateFieldSource(sourceEvalInput(s, fieldUnit), sumField, sourceProblems));
   const slowerProblems: Problem[] = [];
   const slowers = model.slowers.map((s) => evaluateSlower(s, gJOf, model.settings, slowerProblems));
+  const trapProblems: Problem[] = [];
+  const traps = model.traps.map((t) => {
+    const e = evaluateTrap(t, gJOf, model.settings);
+    trapProblems.push(...e.problems);
+    return e.result;
+  });
   const result: EvaluationResult = {
     format: EVALUATION_FORMAT,
     version: EVALUATION_VERSION,
@@ -114,11 +121,12 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     ...(fits.length > 0 ? { fits } : {}),
     ...(fieldSources.length > 0 ? { fieldSources } : {}),
     ...(slowers.length > 0 ? { slowers } : {}),
+    ...(traps.length > 0 ? { traps } : {}),
     diagnostics: [],
   };
   const uncertainty = attachUncertainty(model, result, gJOf);
   if (uncertainty.inputs) result.uncertainty_inputs = uncertainty.inputs;
-  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...sourceProblems, ...slowerProblems, ...uncertainty.problems]);
+  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...sourceProblems, ...slowerProblems, ...trapProblems, ...uncertainty.problems]);
   result.diagnostics = problems.map(toDiagnosticResult);
   return { result, problems };
 }

@@ -6,6 +6,7 @@
 import type { FitResult } from './fitResultTypes';
 import type { FieldSourceResult } from './fieldSourceResultTypes';
 import type { SlowerResult } from './slowerResultTypes';
+import type { TrapResult } from './trapResultTypes';
 import type { Problem } from '../format/ast';
 
 export const EVALUATION_FORMAT = 'sublevel-evaluation';
@@ -389,6 +390,8 @@ export interface EvaluationResult {
   fieldSources?: FieldSourceResult[];
   /** The `slower` blocks' results (docs/slower.md); absent when the file has none. */
   slowers?: SlowerResult[];
+  /** The `trap` blocks' summaries (docs/traps.md); absent when the file has none. */
+  traps?: TrapResult[];
   diagnostics: DiagnosticResult[];
   /** The independent uncertain inputs (standard uncertainties `u`, k = 1); absent when there are none. */
   uncertainty_inputs?: { id: string; label: string; value: number; u: number }[];

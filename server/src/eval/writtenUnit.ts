@@ -8,7 +8,7 @@ import { fieldText, MISSING, prefixedText, trimNumber } from './quantityText';
 
 /** Display spellings for ASCII unit texts. */
 const DISPLAY: Readonly<Record<string, string>> = {
-  uT: 'µT', um: 'µm', ueV: 'µeV', uG: 'µG', us: 'µs', 'cm^-1': 'cm⁻¹', '1/cm': 'cm⁻¹', 'cm-1': 'cm⁻¹', degC: '°C', muN: 'μ_N', muB: 'μ_B',
+  uT: 'µT', um: 'µm', uK: 'µK', nK: 'nK', ueV: 'µeV', uG: 'µG', us: 'µs', 'cm^-1': 'cm⁻¹', '1/cm': 'cm⁻¹', 'cm-1': 'cm⁻¹', degC: '°C', muN: 'μ_N', muB: 'μ_B',
   'μT': 'µT', 'μm': 'µm',
 };
 

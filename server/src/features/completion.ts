@@ -36,6 +36,7 @@ const BLOCK_WORD_DETAIL: Record<BlockKind, string> = {
   wire: 'wire <name> — a straight wire: current, through, direction, length, return',
   slab: 'slab <name> — a magnetised block: size, centre, magnetisation',
   slower: 'slower <name> — line, capture, final, safety, design, bias, saturation, sources',
+  trap: 'trap <name> — sources, level, gravity, temperature, cut, region, centre',
 };
 
 function statementStart(c: LineContext): CompletionItem[] {

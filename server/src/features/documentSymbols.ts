@@ -18,6 +18,7 @@ const KIND: Record<BlockKind, SymbolKind> = {
   wire: SymbolKind.Field,
   slab: SymbolKind.Field,
   slower: SymbolKind.Method,
+  trap: SymbolKind.Class,
 };
 
 function settingSymbol(s: SettingNode): DocumentSymbol {

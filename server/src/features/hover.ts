@@ -22,6 +22,7 @@ import { slowerSection } from './hover/slowerSection';
 import { speciesSection } from './hover/speciesSection';
 import { sourceSection } from './hover/sourceSection';
 import { termSection } from './hover/termSection';
+import { trapSection } from './hover/trapSection';
 import { useSection } from './hover/useSection';
 import { locate, type Target, useAt } from './shared/locate';
 import { md } from './shared/markdown';
@@ -120,6 +121,10 @@ function blockSections(block: BlockNode, ctx: HoverContext): string[] {
     case 'slower': {
       const s = ctx.analysis.result?.slowers?.find((x) => x.name === block.name?.text);
       return s ? [slowerSection(s)] : [];
+    }
+    case 'trap': {
+      const t = ctx.analysis.result?.traps?.find((x) => x.name === block.name?.text);
+      return t ? [trapSection(t)] : [];
     }
     default:
       return fieldSourceSections(block, ctx);

@@ -33,6 +33,7 @@ const NAME_TYPE: Record<NameUse['kind'], TokenType> = {
   fit: 'variable',
   source: 'variable',
   slower: 'variable',
+  trap: 'variable',
 };
 
 class Collector {

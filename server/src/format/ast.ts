@@ -66,7 +66,7 @@ export interface LevelNode {
   range: Range;
 }
 
-export type BlockKind = 'species' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'settings' | 'data' | 'fit' | 'coil' | 'solenoid' | 'wire' | 'slab' | 'slower';
+export type BlockKind = 'species' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'settings' | 'data' | 'fit' | 'coil' | 'solenoid' | 'wire' | 'slab' | 'slower' | 'trap';
 
 export interface BlockNode {
   kind: BlockKind;

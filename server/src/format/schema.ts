@@ -4,7 +4,7 @@
  */
 import type { BlockKind } from './ast';
 
-export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 'beam', 'line', 'resonance', 'settings', 'data', 'fit', 'coil', 'solenoid', 'wire', 'slab', 'slower'];
+export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 'beam', 'line', 'resonance', 'settings', 'data', 'fit', 'coil', 'solenoid', 'wire', 'slab', 'slower', 'trap'];
 
 export const LEVEL_WORD = 'level';
 
@@ -31,6 +31,7 @@ export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
   wire: ['current', 'through', 'direction', 'length', 'return'],
   slab: ['size', 'centre', 'magnetisation'],
   slower: ['line', 'capture', 'final', 'safety', 'design', 'bias', 'saturation', 'repump', 'sources', 'start', 'axis'],
+  trap: ['sources', 'level', 'gravity', 'temperature', 'cut', 'region', 'centre'],
 };
 
 /** Keys that may be written more than once in a block, each line one more value (`point` in `data`). */

@@ -17,6 +17,8 @@ import { buildResonance } from './resonanceBuilder';
 import { buildData } from './dataBuilder';
 import { buildFit } from './fitBuilder';
 import { buildSlower } from './slowerBuilder';
+import { buildTrap } from './trapBuilder';
+import type { TrapModel } from './trapTypes';
 import type { DataModel, FitRequestModel } from './fitTypes';
 import type { SetupSources } from './sources';
 import { buildFieldSource, isSourceBlock } from './sourceBuilder';
@@ -75,6 +77,7 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
     }
   }
   adoptUsedSpecies(used, species, problems);
+  const traps = new NameIndex<TrapModel>('trap', names);
   let beamOrdinal = 0;
   const beamsWithoutName: BeamModel[] = [];
   for (const block of doc.blocks) {
@@ -88,6 +91,9 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
     } else if (block.kind === 'resonance') {
       const r = buildResonance(block, species, names, problems);
       if (r) resonances.declare(r, problems);
+    } else if (block.kind === 'trap') {
+      const t = buildTrap(block, { species, sources: fieldSources }, names, problems);
+      if (t) traps.declare(t, problems);
     }
   }
   // Slowers name lines.
@@ -123,6 +129,7 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
     data: data.all(),
     fits: fits.all(),
     slowers: slowers.all(),
+    traps: traps.all(),
     settings,
     names,
     problems: problems.items,

@@ -44,6 +44,7 @@ export const MODEL_RULES = {
   'field-beyond-physical': { severity: 'error', summary: 'A field above 1e5 T, beyond what the Hamiltonian describes (near the atomic unit of field).' },
   'magnet-incomplete': { severity: 'warning', summary: 'A magnet lacks a field, gradient or length.' },
   'beam-incomplete': { severity: 'warning', summary: 'A beam lacks a setting it needs.' },
+  'trap-incomplete': { severity: 'warning', summary: 'A trap lacks its sources or its level.' },
   'beam-source-malformed': { severity: 'error', summary: 'A beam source that is not oven/jet/speed with its values.' },
   'beam-slits-malformed': { severity: 'error', summary: 'Slits not written as width, width apart length.' },
   'resonance-incomplete': { severity: 'error', summary: 'A resonance block lacks its level or half of its pair.' },

@@ -9,6 +9,7 @@ import type { TermSymbol } from '../physics/termSymbol';
 import type { BuiltinSpecies } from '../physics/species';
 import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
 import type { DataModel, FitRequestModel } from './fitTypes';
+import type { TrapModel } from './trapTypes';
 
 /** A value and its origin: `file` (with the setting's range) or a citation of a published source. */
 export interface Valued<T> {
@@ -270,7 +271,7 @@ export interface SettingsModel {
 
 /** A place in the file that names something, for go-to-definition, references and rename. */
 export interface NameUse {
-  kind: 'species' | 'level' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'data' | 'fit' | 'source' | 'slower';
+  kind: 'species' | 'level' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'data' | 'fit' | 'source' | 'slower' | 'trap';
   name: string;
   range: Range;
   /** The declaration it resolves to, if any; `uri` is set when it is declared in another file (through `use`). */
@@ -306,6 +307,8 @@ export interface SetupModel {
   fits: FitRequestModel[];
   /** The `slower` blocks (docs/slower.md). */
   slowers: SlowerModel[];
+  /** Magnetic traps (`trap` blocks; docs/traps.md). */
+  traps: TrapModel[];
   settings: SettingsModel;
   names: NameUse[];
   /** Problems found while building the model (the parser's own are in doc.problems). */

@@ -24,3 +24,4 @@ export { renderSlower, type SlowerViewData } from './slower';
 export { levelsCsv, linesCsv, patternCsv, resonanceCsv, spectrumCsv, type SpectrumColumns } from './csv';
 export { escapeXml } from './svgText';
 export { fieldMapCsv, renderFieldMap, type FieldMapViewData } from './fieldMap';
+export { trapCsv } from './trapCsv';

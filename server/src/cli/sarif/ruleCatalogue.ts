@@ -38,6 +38,7 @@ const FAMILY_HELP: readonly [RegExp, string][] = [
   [/^(?:use)-/, 'Check the `use` path: a .sublevel file inside the root that exists and has no errors (docs/format.md).'],
   [/^coil-/, 'Check the winding against docs/fields.md (cautions): a thicker conductor, less current or cooling; follow your lab\u2019s rules.'],
   [/^(?:source|vector|direction)-/, 'Check the coil, solenoid, wire or slab block against docs/format.md; the field formulas and their limits are in docs/fields.md.'],
+  [/^trap-/, 'Check the trap block against docs/traps.md (region, sources, level, gravity, temperature, cut); the message names the sublevel.'],
   [/^(?:field|magnet|beam)-/, 'Check the apparatus settings against docs/beam.md; the message names the setting and the value.'],
   [/^(?:line|resonance|pair|scan|no-resonance|no-insensitive)/, 'Check the line or resonance against docs/transitions.md; the message names the levels involved.'],
   [/^(?:r2|diamagnetic)-/, 'Give a whole term the valence electron\u2019s ⟨r²⟩ as `r2 = … a0^2` (docs/format.md); the diamagnetic term it adds is in docs/engine.md.'],

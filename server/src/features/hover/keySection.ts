@@ -17,6 +17,7 @@ const BLOCK_WORDS: Record<BlockKind, string> = {
   wire: 'a straight thin wire, infinite unless `length` is given, optionally with a parallel return wire',
   slab: 'a uniformly magnetised rectangular block with edges along x, y and z',
   slower: 'a Zeeman slower on a cycling line: the ideal field profile B(z), its length, the laser detuning, and a check of a coil design against it',
+  trap: 'a magnetic trap made of field sources: which sublevels of a level it holds, how deep, at what frequencies, the RF cut and Majorana losses',
 };
 
 const LEVEL_KEYS: Record<string, string> = {
@@ -105,6 +106,13 @@ const BLOCK_KEYS: Record<string, string> = {
   'slower.sources': 'coils (field sources) whose field along the slower axis is checked against the ideal profile',
   'slower.start': 'where the slower begins (z = 0) in the coordinates of the sources; default the origin',
   'slower.axis': 'the direction the atoms fly along the slower (the laser comes the other way); default z',
+  'trap.sources': 'the field sources whose summed field makes the trap (coil, solenoid, wire, slab names), comma separated',
+  'trap.level': 'the level whose sublevels are trapped (`ground` or `Rb87.ground`); its species gives the mass',
+  'trap.gravity': 'direction of gravity: x, -z, … or three numbers; `off` for none (default -z)',
+  'trap.temperature': 'cloud temperature: cloud sizes and the Majorana loss of a zero-field trap',
+  'trap.cut': 'RF knife: energy above the trap bottom as a temperature (1 mK) or a frequency (20 MHz); gives the RF frequency that cuts there',
+  'trap.region': 'radius of the trap region (a sphere; its surface is the trap edge); default 90 % of the way to the nearest conductor',
+  'trap.centre': 'centre of the trap region, e.g. 0, 0, 0 mm (default the origin)',
   'settings.g_s': 'electron spin g-factor in the Landé formula: exact (CODATA) or 2 (textbook fractions)',
   'settings.reduced_mass': 'on: g_L = 1 − m_e/M instead of 1',
 };

@@ -1,0 +1,143 @@
+/**
+ * Trap results: the summed field of the trap's sources, the level's exact energies, and the
+ * physics core's trap summary (physics/traps), as the `traps` part of the evaluation and as
+ * problems placed on the trap's settings.
+ */
+import type { Problem, Range } from '../format/ast';
+import { BOLTZMANN_K, PLANCK_H } from '../physics/constants';
+import { sumField } from '../physics/fields';
+import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
+import { PHYSICS_RULES } from '../physics/issueCodes';
+import { defaultRegionRadius, gravityAlong, regionIssues, ZERO_FIELD_FRACTION, summariseTrap, trapCautions, type SublevelTrap, type TrapIssue, type TrapSummary } from '../physics/traps';
+import type { SettingsModel } from '../model/types';
+import type { TrapModel } from '../model/trapTypes';
+import type { GJLookup } from './gJLookup';
+import { engineSpec } from './levelSpec';
+import type { TrapResult, TrapSublevelResult } from './trapResultTypes';
+
+export interface TrapEvaluation {
+  result: TrapResult;
+  summary?: TrapSummary;
+  problems: Problem[];
+}
+
+export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: SettingsModel): TrapEvaluation {
+  const parts: FieldSourceSpec[] = (trap.sources ?? []).flatMap((s) => s.parts);
+  const result: TrapResult = {
+    name: trap.name,
+    ...(trap.level ? { species: trap.level.species.name, level: trap.level.name } : {}),
+    sources: (trap.sources ?? []).map((s) => s.name),
+    computed: false,
+    gravity: trap.gravity.down ? [...trap.gravity.down] : 'off',
+    ...(trap.temperatureK ? { temperature_K: trap.temperatureK.value, ...(trap.temperatureK.unit ? { temperature_unit: trap.temperatureK.unit } : {}) } : {}),
+    ...(trap.cutJ ? { cut_J: trap.cutJ.value, ...(trap.cutJ.unit ? { cut_unit: trap.cutJ.unit } : {}) } : {}),
+    sublevels: [],
+    cautions: trapCautions(),
+  };
+  const problems: Problem[] = [];
+  const level = trap.level;
+  const massKg = level?.species.massKg?.value;
+  const spec = level ? engineSpec(level, gJOf(level), settings) : undefined;
+  // What is missing has its own problem already (trap-incomplete, name-unknown, species-needs-mass, the level's own).
+  if (!level || !spec || massKg === undefined || parts.length === 0) return { result, problems };
+  const centre: Vec3 = trap.regionCentre?.value ?? [0, 0, 0];
+  const radius = trap.regionRadiusM?.value ?? defaultRegionRadius(centre, parts);
+  if (radius === undefined) return { result, problems };
+  result.region = { centre_m: [...centre], radius_m: radius, from: trap.regionRadiusM ? 'file' : 'sources' };
+  for (const i of regionIssues(centre, radius, parts)) problems.push(toProblem(trap, i));
+  const summary = summariseTrap({
+    field: sumField(parts),
+    level: spec,
+    massKg,
+    gravity: trap.gravity.down ? gravityAlong(trap.gravity.down) : [0, 0, 0],
+    region: { centre, radiusM: radius },
+    ...(trap.temperatureK ? { temperatureK: trap.temperatureK.value } : {}),
+    ...(trap.cutJ ? { cutJ: trap.cutJ.value } : {}),
+  });
+  for (const i of summary.issues) problems.push(toProblem(trap, i));
+  if (summary.sublevels.length === 0) return { result, summary, problems };
+  result.computed = true;
+  // Below the searches' own precision a position or a field is round-off: written as 0.
+  const noise = { lengthM: SEARCH_PRECISION * radius, fieldT: ZERO_FIELD_FRACTION * summary.fieldRangeT[1] };
+  result.field_centre_m = cleanVec(summary.fieldCentre, noise.lengthM);
+  result.field_at_centre_T = clean(summary.fieldAtCentreT, noise.fieldT);
+  result.field_max_T = summary.fieldRangeT[1];
+  result.gravity_gradient_T_per_m = summary.gravityGradientTPerM;
+  result.sublevels = summary.sublevels.map((s) => sublevelResult(s, noise));
+  return { result, summary, problems };
+}
+
+/** Relative precision of the minimum searches (the simplex stops at 1e-11 of the region's radius; docs/traps.md). */
+const SEARCH_PRECISION = 1e-9;
+
+function clean(x: number, floor: number): number {
+  return Math.abs(x) < floor ? 0 : x;
+}
+
+function cleanVec(v: readonly number[], floor: number): [number, number, number] {
+  return [clean(v[0]!, floor), clean(v[1]!, floor), clean(v[2]!, floor)];
+}
+
+function sublevelResult(s: SublevelTrap, noise: { lengthM: number; fieldT: number }): TrapSublevelResult {
+  const out: TrapSublevelResult = {
+    label: s.low.text,
+    two_m: s.twoM,
+    low_field_seeking: s.lowFieldSeeking,
+    trapped: s.trapped,
+    moment_J_per_T: s.momentJT,
+  };
+  if (s.levitationTPerM !== undefined) out.levitation_T_per_m = s.levitationTPerM;
+  if (s.turningFieldT !== null) out.turning_field_T = s.turningFieldT;
+  if (s.minimum) {
+    out.minimum_m = cleanVec(s.minimum.position, noise.lengthM);
+    out.field_at_minimum_T = clean(s.minimum.fieldT, noise.fieldT);
+  }
+  if (s.sagM !== undefined) out.sag_m = clean(s.sagM, noise.lengthM);
+  if (s.depthJ !== undefined) {
+    out.depth_J = s.depthJ;
+    out.depth_K = s.depthJ / BOLTZMANN_K;
+    out.depth_Hz = s.depthJ / PLANCK_H;
+  }
+  if (s.depthLimit) out.depth_limit = s.depthLimit;
+  if (s.shape?.kind === 'harmonic') {
+    out.shape = 'harmonic';
+    out.frequencies_Hz = [...s.shape.frequenciesHz];
+    out.axes = axesOf(s.shape.axes);
+  } else if (s.shape?.kind === 'linear') {
+    out.shape = 'linear';
+    out.gradients_T_per_m = [...s.shape.gradientsTPerM];
+    out.axes = axesOf(s.shape.axes);
+    if (s.shape.cloudSizesM) out.cloud_sizes_m = [...s.shape.cloudSizesM];
+  }
+  if (s.larmorHz !== undefined) out.larmor_Hz = s.larmorHz;
+  if (s.rfCut) out.rf_cut = { field_T: s.rfCut.fieldT, frequency_Hz: s.rfCut.frequencyHz, linear_Hz: s.rfCut.linearHz, to: s.rfCut.partner.text };
+  if (s.majorana) out.majorana = { rate_per_s: s.majorana.rateHz, gradient_T_per_m: s.majorana.gradientTPerM, source: s.majorana.source };
+  return out;
+}
+
+/** Axes with round-off below 1e-12 set to 0 (an axis printed as 3e-16 would be noise). */
+function axesOf(a: readonly [Vec3, Vec3, Vec3]): TrapSublevelResult['axes'] {
+  const clean = (v: Vec3): [number, number, number] => [v[0], v[1], v[2]].map((x) => (Math.abs(x) < 1e-12 ? 0 : x)) as [number, number, number];
+  return [clean(a[0]), clean(a[1]), clean(a[2])];
+}
+
+/** Where a trap's problem belongs: the setting it is about, else the trap's name. */
+function rangeFor(trap: TrapModel, code: string): Range {
+  const setting = (key: string): Range | undefined => trap.node.settings.find((s) => s.key.text === key)?.valueText.range;
+  const byCode: Record<string, string> = {
+    'trap-cut-outside': 'cut',
+    'trap-cut-invalid': 'cut',
+    'trap-temperature-invalid': 'temperature',
+    'trap-region-invalid': 'region',
+    'trap-field-not-finite': 'region',
+    'trap-region-reaches-source': 'region',
+    'trap-gravity-too-strong': 'sources',
+  };
+  const key = byCode[code];
+  return (key !== undefined ? setting(key) : undefined) ?? trap.nameRange;
+}
+
+function toProblem(trap: TrapModel, i: TrapIssue): Problem {
+  const rule = (PHYSICS_RULES as Record<string, { severity: Problem['severity'] }>)[i.code];
+  return { code: i.code, severity: rule?.severity ?? i.severity, message: `trap '${trap.name}': ${i.message}`, range: rangeFor(trap, i.code) };
+}

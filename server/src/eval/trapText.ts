@@ -1,0 +1,84 @@
+/**
+ * Words and numbers for trap results, shared by the CLI report and the hover: gradients in G/cm
+ * (the trade's habit for traps), temperatures with a prefix, the depth three ways.
+ */
+import { BOLTZMANN_K, PLANCK_H } from '../physics/constants';
+import { ZERO_FIELD_FRACTION } from '../physics/traps';
+import { fieldText, frequencyText, lengthText, MISSING, trimNumber } from './quantityText';
+import type { TrapResult, TrapSublevelResult } from './trapResultTypes';
+import { displayUnit, inWrittenUnit } from './writtenUnit';
+
+/** A |B| gradient in G/cm. */
+export function gaussPerCmText(tPerM: number | null | undefined, digits = 4): string {
+  if (tPerM === null || tPerM === undefined || !Number.isFinite(tPerM)) return MISSING;
+  return `${trimNumber(tPerM * 100, digits)} G/cm`;
+}
+
+/** A temperature in K, mK, µK or nK. */
+export function temperatureText(k: number | null | undefined, digits = 4): string {
+  if (k === null || k === undefined || !Number.isFinite(k)) return MISSING;
+  const a = Math.abs(k);
+  if (a === 0 || a >= 1) return `${trimNumber(k, digits)} K`;
+  if (a >= 1e-3) return `${trimNumber(k * 1e3, digits)} mK`;
+  if (a >= 1e-6) return `${trimNumber(k * 1e6, digits)} µK`;
+  return `${trimNumber(k * 1e9, digits)} nK`;
+}
+
+/** Depth as a temperature and a frequency, with what sets it. */
+export function depthText(s: TrapSublevelResult): string {
+  if (s.depth_K === undefined) return MISSING;
+  const limit = s.depth_limit === 'turning' ? 'turning point' : 'edge';
+  return `${temperatureText(s.depth_K)} = h·${frequencyText(s.depth_Hz, 4)} (${limit})`;
+}
+
+/** Frequencies or linear gradients of a trapped sublevel. */
+export function shapeText(s: TrapSublevelResult): string {
+  if (s.shape === 'harmonic' && s.frequencies_Hz) return `harmonic ${s.frequencies_Hz.map((f) => frequencyText(f, 4)).join(', ')}`;
+  if (s.shape === 'linear' && s.gradients_T_per_m) return `linear (no harmonic frequency): |B| gradients ${s.gradients_T_per_m.map((g) => gaussPerCmText(g)).join(', ')}`;
+  return MISSING;
+}
+
+/** One line about a sublevel: held or not, and why. */
+export function sublevelVerdict(s: TrapSublevelResult): string {
+  if (s.trapped) return 'trapped';
+  if (!s.low_field_seeking) return 'not low-field seeking';
+  return s.levitation_T_per_m !== undefined ? `not held (needs ${gaussPerCmText(s.levitation_T_per_m)} along gravity)` : 'not held';
+}
+
+/** The trap's cloud temperature and cut as the file wrote them. */
+export function trapInputsText(t: TrapResult): string[] {
+  const out: string[] = [];
+  if (t.temperature_K !== undefined) out.push(`temperature ${inWrittenUnit(t.temperature_K, 'temperature', t.temperature_unit, 5) ?? temperatureText(t.temperature_K)}`);
+  if (t.cut_J !== undefined) out.push(`cut ${t.cut_unit ? `${cutInUnit(t)}` : `${trimNumber(t.cut_J, 5)} J`}`);
+  return out;
+}
+
+function cutInUnit(t: TrapResult): string {
+  const unit = t.cut_unit!;
+  const asT = inWrittenUnit(t.cut_J! / BOLTZMANN_K, 'temperature', unit, 5);
+  if (asT) return asT;
+  const asF = inWrittenUnit(t.cut_J! / PLANCK_H, 'frequency-like', unit, 5);
+  return asF ?? `${trimNumber(t.cut_J!, 5)} J (${displayUnit(unit)})`;
+}
+
+/** The trap's summary in a few lines (hover and report header). */
+export function trapSummaryLines(t: TrapResult): string[] {
+  const out: string[] = [];
+  const what = [t.species && t.level ? `${t.species}.${t.level}` : undefined, t.sources.length > 0 ? `sources ${t.sources.join(', ')}` : undefined].filter(Boolean).join('; ');
+  out.push(`trap ${t.name}${what ? ` — ${what}` : ''}`);
+  const gravity = t.gravity === 'off' ? 'gravity off' : `gravity along (${t.gravity.map((x) => trimNumber(x, 3)).join(', ')})`;
+  const region = t.region ? `region ${lengthText(t.region.radius_m)} about (${t.region.centre_m.map((x) => lengthText(x)).join(', ')})${t.region.from === 'sources' ? ' (90 % of the way to the nearest conductor)' : ''}` : 'no region';
+  out.push([gravity, region, ...trapInputsText(t)].join('; '));
+  if (!t.computed) {
+    out.push('not computed: see the diagnostics');
+    return out;
+  }
+  // |B| below ZERO_FIELD_FRACTION of the largest |B| is the search's round-off: a zero of the field.
+  const floor = { scale: t.field_max_T ?? 0, relative: ZERO_FIELD_FRACTION };
+  out.push(
+    `field minimum ${fieldText(t.field_at_centre_T, 5, floor)} at (${t.field_centre_m!.map((x) => lengthText(x, 3, { scale: t.region?.radius_m ?? 1 })).join(', ')}); up to ${fieldText(t.field_max_T, 5)} in the region; |B| gradient along gravity up to ${gaussPerCmText(t.gravity_gradient_T_per_m)}`,
+  );
+  const held = t.sublevels.filter((s) => s.trapped).map((s) => `|${s.label}⟩`);
+  out.push(held.length > 0 ? `trapped: ${held.join(', ')}` : 'trapped: none');
+  return out;
+}

@@ -1,0 +1,108 @@
+/** Builds `trap` blocks (docs/traps.md): which sources, which level, gravity, the region, temperature and the RF cut. */
+import type { BlockNode, SettingNode } from '../format/ast';
+import { readQuantity } from '../format/units';
+import { BOLTZMANN_K, PLANCK_H } from '../physics/constants';
+import type { NameIndex } from './nameIndex';
+import type { ProblemList } from './problems';
+import { readLevelSetting } from './resonanceBuilder';
+import { readSettingQuantity, singlePart } from './settingReaders';
+import { readSourceList } from './sourceListReader';
+import type { TrapModel } from './trapTypes';
+import type { FieldSourceModel, NameUse, SpeciesModel, Valued } from './types';
+import { readDirection, readVector } from './vectorReader';
+
+export const DEFAULT_GRAVITY_DOWN = [0, 0, -1] as const;
+
+export function buildTrap(
+  node: BlockNode,
+  index: { species: NameIndex<SpeciesModel>; sources: NameIndex<FieldSourceModel> },
+  uses: NameUse[],
+  problems: ProblemList,
+): TrapModel | undefined {
+  if (!node.name) {
+    problems.add('name-missing', 'a trap needs a name, as in `trap quadtrap`', node.keyword.range);
+    return undefined;
+  }
+  const trap: TrapModel = { name: node.name.text, node, nameRange: node.name.range, gravity: { down: [...DEFAULT_GRAVITY_DOWN] } };
+  for (const s of node.settings) {
+    switch (s.key.text) {
+      case 'sources': {
+        const list = readSourceList(s, index.sources, problems);
+        if (list) trap.sources = list;
+        break;
+      }
+      case 'level': {
+        const lv = readLevelSetting(s, index.species, uses, problems);
+        if (lv) trap.level = lv;
+        break;
+      }
+      case 'gravity':
+        readGravity(s, trap, problems);
+        break;
+      case 'temperature': {
+        const t = readSettingQuantity(s, 'temperature', problems, 'cloud temperature, e.g. 100 uK');
+        if (t && positive(s, t, problems)) trap.temperatureK = t;
+        break;
+      }
+      case 'cut': {
+        const c = readCut(s, problems);
+        if (c) trap.cutJ = c;
+        break;
+      }
+      case 'region': {
+        const r = readSettingQuantity(s, 'length', problems, 'radius of the trap region, e.g. 1 cm');
+        if (r && positive(s, r, problems)) trap.regionRadiusM = r;
+        break;
+      }
+      case 'centre': {
+        const c = readVector(s, 'length', problems);
+        if (c) trap.regionCentre = c;
+        break;
+      }
+      default:
+        break;
+    }
+  }
+  const missing = (['sources', 'level'] as const).filter((k) => !node.settings.some((s) => s.key.text === k));
+  if (missing.length > 0) {
+    problems.add('trap-incomplete', `trap '${trap.name}' has no ${missing.join(' and ')}; the trap summary needs ${missing.length > 1 ? 'both' : 'it'}`, node.name.range, {
+      data: { missing },
+    });
+  }
+  return trap;
+}
+
+/** `gravity = -z`, `gravity = 0, 0, -1` or `gravity = off`. */
+function readGravity(s: SettingNode, trap: TrapModel, problems: ProblemList): void {
+  const only = s.groups.length === 1 && s.groups[0]!.length === 1 ? s.groups[0]![0] : undefined;
+  if (only?.kind === 'word' && only.text === 'off') {
+    trap.gravity = { down: null, range: s.valueText.range };
+    return;
+  }
+  const d = readDirection(s, problems);
+  if (d) trap.gravity = { down: d.value, range: s.valueText.range };
+}
+
+/** The knife's energy written as a temperature (E = k_B T) or a frequency (E = h ν). */
+function readCut(s: SettingNode, problems: ProblemList): Valued<number> | undefined {
+  const part = singlePart(s, problems, 'RF cut, e.g. 1 mK or 20 MHz');
+  if (!part) return undefined;
+  const unit = part.kind === 'quantity' ? { unit: part.unit.text } : {};
+  const asT = readQuantity(part, 'temperature');
+  if (!asT.problem && asT.si !== undefined) return checkCut(s, { value: BOLTZMANN_K * asT.si, source: 'this file', range: part.range, ...unit }, problems);
+  const asF = readQuantity(part, 'frequency-like');
+  if (!asF.problem && asF.si !== undefined) return checkCut(s, { value: PLANCK_H * asF.si, source: 'this file', range: part.range, ...unit }, problems);
+  const p = asF.problem ?? asT.problem;
+  if (p) problems.push({ ...p, message: `cut needs an energy written as a temperature (e.g. 1 mK) or a frequency (e.g. 20 MHz); ${p.message}` });
+  return undefined;
+}
+
+function checkCut(s: SettingNode, v: Valued<number>, problems: ProblemList): Valued<number> | undefined {
+  return Number.isFinite(v.value) && positive(s, v, problems) ? v : undefined;
+}
+
+function positive(s: SettingNode, v: Valued<number>, problems: ProblemList): boolean {
+  if (v.value > 0) return true;
+  problems.add('value-out-of-range', `${s.key.text} must be greater than zero, got ${s.valueText.text}`, v.range ?? s.valueText.range);
+  return false;
+}

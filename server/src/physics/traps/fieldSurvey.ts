@@ -1,0 +1,69 @@
+/**
+ * What the field does in the trap region, before any atom is placed in it: where |B| is smallest,
+ * the range of |B| (the maximum sits on the region's surface: each component of a current-free
+ * field is harmonic, so |B| is subharmonic and has no interior maximum), and the strongest |B|
+ * gradient along gravity below the centre (what has to hold atoms up).
+ */
+import type { FieldFunction, Vec3 } from '../fields/types';
+import { nelderMead } from './nelderMead';
+import { magnitudeGradient } from '../fields';
+import type { TrapRegion } from './types';
+import { addScaled, dot, norm, sphereDirections, sub, unit } from './vec3';
+
+export const SURFACE_SAMPLES = 98;
+const GRAVITY_RAY_STEPS = 64;
+
+export interface FieldSurvey {
+  centre: Vec3;
+  fieldAtCentreT: number;
+  maxFieldT: number;
+  gravityGradientTPerM: number;
+  /** False when the field is not finite somewhere it was sampled (a source inside the region). */
+  finite: boolean;
+}
+
+/** |B| at r, +Infinity outside the region (keeps the search inside it) or where the field is not finite. */
+function insideMagnitude(field: FieldFunction, region: TrapRegion): (r: Vec3) => number {
+  return (r) => {
+    if (norm(sub(r, region.centre)) > region.radiusM) return Number.POSITIVE_INFINITY;
+    const b = norm(field(r).B);
+    return Number.isFinite(b) ? b : Number.POSITIVE_INFINITY;
+  };
+}
+
+export function surveyField(field: FieldFunction, region: TrapRegion, gravity: Vec3): FieldSurvey {
+  const R = region.radiusM;
+  const f = insideMagnitude(field, region);
+  // Two passes: the second restarts from the first's best point with a fresh, smaller simplex.
+  let best = nelderMead(f, region.centre, R / 8, R * 1e-10);
+  best = nelderMead(f, best.point, R / 200, R * 1e-11);
+  let finite = Number.isFinite(best.value);
+  let maxFieldT = Number.isFinite(best.value) ? best.value : 0;
+  for (const d of sphereDirections(SURFACE_SAMPLES)) {
+    const b = norm(field(addScaled(region.centre, d, R)).B);
+    if (!Number.isFinite(b)) finite = false;
+    else maxFieldT = Math.max(maxFieldT, b);
+  }
+  let gravityGradientTPerM = 0;
+  const down = unit(gravity);
+  if (norm(down) > 0 && finite) {
+    // From the centre down to the region's surface along gravity.
+    const exit = rayExit(best.point, down, region);
+    for (let k = 0; k <= GRAVITY_RAY_STEPS; k++) {
+      const s = field(addScaled(best.point, down, (exit * k) / GRAVITY_RAY_STEPS));
+      // The |B| gradient opposing gravity: how fast |B| rises going down.
+      const mg = magnitudeGradient(s);
+      const g = mg ? dot(mg, down) : 0;
+      if (Number.isFinite(g)) gravityGradientTPerM = Math.max(gravityGradientTPerM, g);
+    }
+  }
+  return { centre: best.point, fieldAtCentreT: finite ? best.value : Number.NaN, maxFieldT, gravityGradientTPerM, finite };
+}
+
+/** Distance s ≥ 0 at which r0 + s·d leaves the region's sphere (r0 inside). */
+export function rayExit(r0: Vec3, d: Vec3, region: TrapRegion): number {
+  const o = sub(r0, region.centre);
+  const b = dot(o, d);
+  const c = dot(o, o) - region.radiusM ** 2;
+  return Math.max(0, -b + Math.sqrt(Math.max(0, b * b - c)));
+}

@@ -1,0 +1,8 @@
+/** Magnetic traps built from field sources: which sublevels are held, how deep, how stiff (docs/traps.md). */
+export type { HarmonicShape, LinearShape, MajoranaEstimate, RfCut, SublevelTrap, TrapInput, TrapIssue, TrapRegion, TrapSummary } from './types';
+export { summariseTrap, labelText, ZERO_FIELD_FRACTION } from './trapSummary';
+export { STANDARD_GRAVITY, gravityAlong } from './gravity';
+export { energyCurves, rfPartner, type EnergyCurve } from './energyCurves';
+export { MAJORANA_SOURCE, ADIABATIC_MARGIN, majoranaRate } from './majorana';
+export { trapCautions } from './cautions';
+export { defaultRegionRadius, distanceToSource, regionIssues, DEFAULT_REGION_FRACTION } from './defaultRegion';

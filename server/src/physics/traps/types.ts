@@ -1,0 +1,105 @@
+/**
+ * Shapes of the trap analysis. SI throughout: positions m, fields T, energies J, frequencies Hz,
+ * temperatures K. A problem is a value ({code, severity, message}) with a code from issueCodes.ts.
+ */
+import type { EngineIssue, LevelSpec, LowFieldLabel } from '../engine';
+import type { FieldFunction, Vec3 } from '../fields/types';
+
+/**
+ * The region the atoms must stay in: a sphere. Its surface is the trap's edge (in a setup file,
+ * by default the sphere inside the smallest coil; docs/traps.md).
+ */
+export interface TrapRegion {
+  centre: Vec3;
+  radiusM: number;
+}
+
+export interface TrapInput {
+  field: FieldFunction;
+  level: LevelSpec;
+  massKg: number;
+  /** Acceleration of gravity, m/s² (a vector; [0, 0, 0] for none). */
+  gravity: Vec3;
+  region: TrapRegion;
+  /** Cloud temperature, K (the Majorana estimate of a zero-field trap and the cloud size). */
+  temperatureK?: number;
+  /** The RF knife's energy above each sublevel's minimum, J. */
+  cutJ?: number;
+}
+
+/** A linear (zero-field) minimum: the |B| gradients along the field's principal axes, strongest first. */
+export interface LinearShape {
+  kind: 'linear';
+  gradientsTPerM: [number, number, number];
+  axes: [Vec3, Vec3, Vec3];
+  /** 1/e size of the cloud along each axis at the temperature, k_B T / (μ · gradient), m. */
+  cloudSizesM?: [number, number, number];
+}
+
+/** A harmonic minimum: frequencies (Hz, lowest first) and their axes from the Hessian of U. */
+export interface HarmonicShape {
+  kind: 'harmonic';
+  frequenciesHz: [number, number, number];
+  axes: [Vec3, Vec3, Vec3];
+}
+
+export interface RfCut {
+  /** The field where the energy above the minimum equals the cut, T. */
+  fieldT: number;
+  /** The exact Δm = ±1 frequency there (to `partner`), Hz. */
+  frequencyHz: number;
+  /** The linear rule's frequency: splitting and field both from the low-field slopes, Hz. */
+  linearHz: number;
+  partner: LowFieldLabel;
+}
+
+export interface MajoranaEstimate {
+  /** Loss rate, 1/s. */
+  rateHz: number;
+  /** The gradient used (the strongest |B| gradient at the zero), T/m. */
+  gradientTPerM: number;
+  source: string;
+}
+
+export interface SublevelTrap {
+  low: LowFieldLabel;
+  twoM: number;
+  /** dE/dB > 0 at the field of the minimum (or at the field centre when there is none). */
+  lowFieldSeeking: boolean;
+  /** The engine's moment −dE/dB at that field, J/T (negative for a low-field seeker). */
+  momentJT: number;
+  /** m g / (dE/dB): the |B| gradient along gravity that holds the sublevel up, T/m (absent for a high-field seeker or without gravity). */
+  levitationTPerM?: number;
+  /** Where dE/dB turns negative above the field at the minimum, T; null when it does not within the range swept. */
+  turningFieldT: number | null;
+  /** Held: a minimum inside the region with a positive depth. */
+  trapped: boolean;
+  minimum?: { position: Vec3; fieldT: number; energyJ: number };
+  /** Distance the minimum hangs below the field's own minimum, m. */
+  sagM?: number;
+  /** Lowest escape energy above the minimum, J, and which boundary sets it. */
+  depthJ?: number;
+  depthLimit?: 'edge' | 'turning';
+  shape?: LinearShape | HarmonicShape;
+  /** Larmor frequency at the minimum (splitting to the RF partner), Hz. */
+  larmorHz?: number;
+  rfCut?: RfCut;
+  majorana?: MajoranaEstimate;
+}
+
+export interface TrapIssue extends EngineIssue {
+  /** The sublevel the issue is about, when it is about one. */
+  sublevel?: string;
+}
+
+export interface TrapSummary {
+  /** Where |B| is smallest in the region, and |B| there. */
+  fieldCentre: Vec3;
+  fieldAtCentreT: number;
+  /** |B| range sampled over the region. */
+  fieldRangeT: [number, number];
+  /** The largest |B| gradient along gravity below the field centre, T/m (0 without gravity). */
+  gravityGradientTPerM: number;
+  sublevels: SublevelTrap[];
+  issues: TrapIssue[];
+}

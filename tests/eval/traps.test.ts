@@ -1,0 +1,95 @@
+/**
+ * The `trap` block through the whole pipeline: model, evaluation, diagnostics. Anti-Helmholtz
+ * gradient from the textbook closed form dB_z/dz = 3 μ0 N I a R² / (R² + a²)^{5/2} for loops of
+ * radius R at ±a (Griffiths, Introduction to Electrodynamics, the on-axis loop field differentiated).
+ */
+import { describe, expect, it } from 'vitest';
+import { analyze } from '../../server/src/eval/analyze';
+
+const MU0 = 1.25663706127e-6; // CODATA 2022 vacuum permeability
+
+const PAIR = (current: string) => `species Rb87
+  level ground: 5s 2S1/2
+coil quad
+  radius  = 4 cm
+  turns   = 100
+  current = ${current}
+  spacing = 8 cm
+  sense   = opposite
+`;
+
+function pairGradient(ampereTurns: number): number {
+  const R = 0.04;
+  const a = 0.04;
+  return (3 * MU0 * ampereTurns * a * R * R) / (R * R + a * a) ** 2.5;
+}
+
+describe('trap from an anti-Helmholtz pair', () => {
+  const text = `${PAIR('20 A')}trap q
+  sources     = quad
+  level       = ground
+  temperature = 300 uK
+  cut         = 3 mK
+`;
+  const r = analyze(text);
+  const t = r.result!.traps![0]!;
+
+  it('holds |2,+2⟩, |2,+1⟩ and |1,−1⟩ at the zero; the strongest |B| gradient is the axial one of the closed form', () => {
+    expect(t.computed).toBe(true);
+    expect(t.sublevels.filter((s) => s.trapped).map((s) => s.label).sort()).toEqual(['F=1, m_F=-1', 'F=2, m_F=+1', 'F=2, m_F=+2']);
+    const s = t.sublevels.find((x) => x.label === 'F=2, m_F=+2')!;
+    expect(s.shape).toBe('linear');
+    expect(Math.abs(s.gradients_T_per_m![0] / pairGradient(2000) - 1)).toBeLessThan(1e-6);
+    expect(Math.abs(s.gradients_T_per_m![1] / (pairGradient(2000) / 2) - 1)).toBeLessThan(1e-6);
+    expect(s.rf_cut).toBeDefined();
+    expect(s.majorana!.rate_per_s).toBeGreaterThan(0);
+  });
+
+  it('takes the default region from the coils: 90 % of the way to the windings, √(4² + 4²) cm', () => {
+    expect(t.region!.from).toBe('sources');
+    expect(t.region!.radius_m).toBeCloseTo(0.9 * Math.hypot(0.04, 0.04), 12);
+  });
+
+  it('a weak pair cannot hold |2,+1⟩: the diagnostic names the gradient it needs and the one it has', () => {
+    const weak = analyze(`${PAIR('5 A')}trap q\n  sources = quad\n  level = ground\n`);
+    const msgs = weak.problems.filter((p) => p.code === 'trap-gravity-too-strong').map((p) => p.message);
+    // "has": the largest |B| gradient along gravity below the centre; at the centre it is the closed form's.
+    const has = weak.result!.traps![0]!.gravity_gradient_T_per_m!;
+    expect(has).toBeGreaterThanOrEqual(pairGradient(500) * (1 - 1e-9));
+    expect(msgs).toContain(`trap 'q': This trap cannot hold |F=2, m_F=+1⟩ against gravity: it needs ≥ 30.5 G/cm along gravity (has ${Number((has * 100).toPrecision(3))} G/cm).`);
+    expect(msgs).toHaveLength(2);
+  });
+
+  it('a trap without sources or level says so; unknown names get did-you-mean', () => {
+    const codes = analyze(`${PAIR('20 A')}trap q\n  level = ground\n`).problems.map((p) => p.code);
+    expect(codes).toContain('trap-incomplete');
+    const unknown = analyze(`${PAIR('20 A')}trap q\n  sources = qaud\n  level = ground\n`).problems.find((p) => p.code === 'name-unknown');
+    expect(unknown?.message).toMatch(/did you mean 'quad'/);
+  });
+
+  it('gravity off, cut as a frequency, region and centre by hand', () => {
+    const x = analyze(`${PAIR('20 A')}trap q\n  sources = quad\n  level = ground\n  gravity = off\n  cut = 20 MHz\n  region = 2 cm\n  centre = 0, 0, 1 mm\n`);
+    const tr = x.result!.traps![0]!;
+    expect(tr.gravity).toBe('off');
+    expect(tr.region).toEqual({ centre_m: [0, 0, 0.001], radius_m: 0.02, from: 'file' });
+    expect(tr.cut_J).toBeCloseTo(6.62607015e-34 * 20e6, 40);
+    expect(tr.sublevels.find((s) => s.label === 'F=2, m_F=+2')!.rf_cut).toBeDefined();
+  });
+
+  it('bad values: a cut in metres, a negative temperature', () => {
+    const codes = analyze(`${PAIR('20 A')}trap q\n  sources = quad\n  level = ground\n  cut = 3 m\n  temperature = -1 K\n`).problems.map((p) => p.code);
+    expect(codes).toContain('unit-wrong-dimension');
+    expect(codes).toContain('value-out-of-range');
+  });
+
+  it('writes round-off of the searches as 0: the zero of the field is at the origin with |B| = 0', () => {
+    const s = t.sublevels.find((x) => x.label === 'F=2, m_F=+2')!;
+    expect(s.minimum_m).toEqual([0, 0, 0]);
+    expect(s.field_at_minimum_T).toBe(0);
+    expect(t.field_at_centre_T).toBe(0);
+  });
+
+  it('never prints NaN or Infinity', () => {
+    expect(JSON.stringify(r.result)).not.toMatch(/NaN|Infinity/);
+  });
+});
