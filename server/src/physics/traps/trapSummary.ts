@@ -78,7 +78,9 @@ export function summariseTrap(input: TrapInput): TrapSummary {
   if (curves.curves.length === 0) return emptySummary(issues, survey);
   const gravityG = norm(input.gravity);
   const rays: RayCache = new Map();
-  const sublevels = curves.curves.map((c) => sublevelTrap(input, survey, curves.curves, c, curves.topT, gravityG, issues, rays));
+  // Listed as a physicist reads them: by F (or J), then by m.
+  const ordered = [...curves.curves].sort((a, b) => lowFieldRank(a.low) - lowFieldRank(b.low) || a.twoM - b.twoM);
+  const sublevels = ordered.map((c) => sublevelTrap(input, survey, curves.curves, c, curves.topT, gravityG, issues, rays));
   if (!sublevels.some((s) => s.trapped)) {
     issues.push(issue('warning', 'trap-holds-nothing', 'The trap holds no sublevel of this level.'));
   } else if (input.cutJ !== undefined && !sublevels.some((s) => s.rfCut)) {
@@ -224,6 +226,11 @@ function largestSlope(c: EnergyCurve, fromT: number, toT: number): number {
   let top = c.slopeHzPerT(fromT);
   for (let k = 1; k <= 64; k++) top = Math.max(top, c.slopeHzPerT(fromT + ((toT - fromT) * k) / 64));
   return top;
+}
+
+/** Twice the F (or J) of a low-field label: the first sort key of the listed sublevels. */
+function lowFieldRank(low: LowFieldLabel): number {
+  return low.scheme === 'F' ? low.twoF : low.twoJ;
 }
 
 /** |F, m_F⟩ style text of a low-field label, for messages. */
