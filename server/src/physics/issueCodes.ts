@@ -119,6 +119,13 @@ export const PHYSICS_RULES = {
   'beam-nothing-to-resolve': { severity: 'warning', summary: 'Fewer than two peaks: there is nothing to resolve.' },
   'beam-resolved-at-lower-bound': { severity: 'info', summary: 'Already resolved at the lower bound of a resolving search.' },
   'beam-unresolvable-within-bound': { severity: 'warning', summary: 'No value up to the search bound resolves the peaks.' },
+  // Beam flight through a field map (beam/trajectory/).
+  'trajectory-field-range-invalid': { severity: 'error', summary: 'A field range for the sublevel moments that is not a positive number of tesla.' },
+  'trajectory-level-unusable': { severity: 'error', summary: 'The engine cannot tabulate this level’s sublevel energies for a trajectory.' },
+  'trajectory-level-note': { severity: 'warning', summary: 'A note from the engine while tabulating the sublevel energies for a trajectory.' },
+  'trajectory-field-beyond-table': { severity: 'error', summary: 'The field along a path exceeds the range the sublevel moments were tabulated for.' },
+  'trajectory-meets-source': { severity: 'error', summary: 'An atom’s path runs into a field source, where the field is not defined.' },
+  'trajectory-not-converged': { severity: 'error', summary: 'The trajectory integration did not converge.' },
 } as const satisfies Record<string, PhysicsRule>;
 
 export type PhysicsCode = keyof typeof PHYSICS_RULES;

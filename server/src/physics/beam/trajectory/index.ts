@@ -1,0 +1,5 @@
+/** Beam flight through a real (non-uniform) field: the public surface of this folder. */
+export { sublevelCurves, NODES_PER_SCALE, type CurveOptions, type SublevelCurveLabel, type SublevelCurves } from './sublevelCurves';
+export { flySublevel, ADIABATIC_LIMIT, type Flight, type FlightOptions, type FlightSetup, type TransverseState } from './flight';
+export { directionTurnRate, magnitudeAndGradient } from './fieldMagnitude';
+export { dormandPrince, rungeKutta4, type Derivative, type Observer, type StepperResult } from './steppers';
