@@ -126,6 +126,11 @@ export const PHYSICS_RULES = {
   'trajectory-field-beyond-table': { severity: 'error', summary: 'The field along a path exceeds the range the sublevel moments were tabulated for.' },
   'trajectory-meets-source': { severity: 'error', summary: 'An atom’s path runs into a field source, where the field is not defined.' },
   'trajectory-not-converged': { severity: 'error', summary: 'The trajectory integration did not converge.' },
+  'magnet-line-meets-source': { severity: 'error', summary: 'A magnet’s beam line runs through one of its field sources.' },
+  'magnet-gradient-uneven': { severity: 'warning', summary: 'The gradient of a magnet built from sources changes too much across the beam height for one deflection per sublevel.' },
+  'magnet-spin-flip-risk': { severity: 'warning', summary: 'The field along the beam turns too fast for its strength: atoms may leave their sublevel.' },
+  'magnet-deflection-not-inverse-square': { severity: 'info', summary: 'In a non-uniform field the deflection departs from z ∝ 1/v² across the speeds.' },
+  'magnet-forward-speed-changes': { severity: 'warning', summary: 'The sublevel energy changes enough through the magnet to alter the forward speed.' },
 } as const satisfies Record<string, PhysicsRule>;
 
 export type PhysicsCode = keyof typeof PHYSICS_RULES;

@@ -3,3 +3,5 @@ export { sublevelCurves, NODES_PER_SCALE, type CurveOptions, type SublevelCurveL
 export { flySublevel, ADIABATIC_LIMIT, type Flight, type FlightOptions, type FlightSetup, type TransverseState } from './flight';
 export { directionTurnRate, magnitudeAndGradient } from './fieldMagnitude';
 export { dormandPrince, rungeKutta4, type Derivative, type Observer, type StepperResult } from './steppers';
+export { surveyBeamLine, GRADIENT_VARIATION_LIMIT, type BeamLineSurvey, type SurveyInput } from './beamLineSurvey';
+export { fieldMapBeam, FORWARD_ENERGY_LIMIT, INVERSE_SQUARE_LIMIT, type FieldMapBeam, type FieldMapInput, type FieldMapSublevel } from './fieldMapBeam';

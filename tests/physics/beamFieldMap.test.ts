@@ -1,0 +1,81 @@
+import { describe, expect, it } from 'vitest';
+import { ATOMIC_MASS_UNIT } from '../../server/src/physics/constants';
+import { deflectionCoefficient, type BeamGeometry } from '../../server/src/physics/beam';
+import { solveLevel } from '../../server/src/physics/engine';
+import { fieldMapBeam, surveyBeamLine } from '../../server/src/physics/beam/trajectory';
+import { infiniteWires, uniformGradientField } from './trajectoryFields';
+import { LI7_2S } from './engine.fixtures';
+
+const MU0 = 1.25663706127e-6; // CODATA 2022
+
+/** Two opposite currents ±I at y = ±a, z = 0: on the plane y = 0, |B| = μ0 I a / (π (a² + z²)) (textbook superposition of two infinite wires). */
+function twoWireGradient(current: number, a: number, z: number): number {
+  return (-2 * MU0 * current * a * z) / (Math.PI * (a * a + z * z) ** 2);
+}
+
+describe('beam-line survey', () => {
+  it('a uniform gradient: the centre values, no variation', () => {
+    const s = surveyBeamLine({ field: uniformGradientField(0.5, 120), centre: [0.1, 0, 0], magnetLengthM: 0.1, halfHeightM: 1e-3 });
+    expect(s.fieldT).toBeCloseTo(0.5, 14);
+    expect(s.gradientTPerM).toBeCloseTo(120, 10);
+    expect(s.gradientVariation).toBeLessThan(1e-12);
+    expect(s.issues).toEqual([]);
+  });
+
+  it('two wires: the gradient of |B| at the beam line and across the beam height match the closed form', () => {
+    const field = infiniteWires([
+      { y: 2e-3, z: 0, current: 900 },
+      { y: -2e-3, z: 0, current: -900 },
+    ]);
+    const h = 0.5e-3;
+    const s = surveyBeamLine({ field, centre: [0, 0, 1.5e-3], magnetLengthM: 0.08, halfHeightM: h });
+    const g = (z: number) => twoWireGradient(900, 2e-3, z);
+    expect(s.gradientTPerM / g(1.5e-3) - 1).toBeLessThan(1e-12);
+    expect(Math.abs(s.meanGradientTPerM.above / g(2e-3) - 1)).toBeLessThan(1e-12);
+    const expected = Math.max(Math.abs(g(1e-3) - g(1.5e-3)), Math.abs(g(2e-3) - g(1.5e-3))) / Math.abs(g(1.5e-3));
+    expect(s.gradientVariation).toBeCloseTo(expected, 10);
+    expect(expected).toBeGreaterThan(0.05);
+    expect(s.issues.map((i) => i.code)).toEqual(['magnet-gradient-uneven']);
+    expect(s.issues[0]!.message).toContain(`${Math.round(100 * expected)} %`);
+  });
+
+  it('a beam line through a wire is an error, and nothing is NaN', () => {
+    const field = infiniteWires([{ y: 0, z: 0, current: 10 }]);
+    const s = surveyBeamLine({ field, centre: [0, 0, 0], magnetLengthM: 0.08, halfHeightM: 1e-3 });
+    expect(s.issues.map((i) => i.code)).toEqual(['magnet-line-meets-source']);
+    expect(Number.isFinite(s.fieldT) && Number.isFinite(s.gradientTPerM)).toBe(true);
+  });
+});
+
+describe('a beam through a field map', () => {
+  const mass = 7.0160034366 * ATOMIC_MASS_UNIT; // 7Li, AME 2020 (from memory)
+  const labels = solveLevel(LI7_2S, 1).states.map((s) => s.low.text);
+
+  it('in a uniform gradient gives each sublevel the uniform model’s coefficient μ G (L1²/2 + L1 L2)/M', () => {
+    const geometry: BeamGeometry = { slit1M: 1e-4, slit2M: 1e-4, slitSeparationM: 0.4, magnetLengthM: 0.08, driftM: 0.35, detectorWidthM: 0, gradientTPerM: 20 };
+    const r = fieldMapBeam({ field: uniformGradientField(1, 20), centre: [0, 0, 0], magnetLengthM: 0.08, driftM: 0.35, massKg: mass, spec: LI7_2S, labels, speeds: [1500, 800, 3000], halfHeightM: 1e-4 });
+    expect(r.ok).toBe(true);
+    expect(r.issues.filter((i) => i.severity !== 'info')).toEqual([]);
+    const states = solveLevel(LI7_2S, 1).states;
+    for (const s of r.sublevels) {
+      const mu = states.find((x) => x.low.text === s.label)!.momentJT;
+      // the moments change by < 1e-4 across these sub-millimetre deflections at 1 T
+      expect(Math.abs(s.coefficientM3PerS2 / deflectionCoefficient(mu, mass, geometry) - 1)).toBeLessThan(1e-4);
+      expect(s.coefficientSpread).toBeLessThan(1e-4);
+    }
+    expect(r.survey.gradientTPerM).toBeCloseTo(20, 10);
+    expect(r.tableErrorJT).toBeLessThan(1e-32);
+  });
+
+  it('warns of spin flips when the beam line passes the zero of the field', () => {
+    const same = infiniteWires([
+      { y: 2e-3, z: 0, current: 50 },
+      { y: -2e-3, z: 0, current: 50 },
+    ]);
+    const r = fieldMapBeam({ field: same, centre: [0, 1e-6, 1e-7], magnetLengthM: 0.05, driftM: 0.1, massKg: mass, spec: LI7_2S, labels, speeds: [1000], halfHeightM: 0 });
+    const flip = r.issues.find((i) => i.code === 'magnet-spin-flip-risk');
+    expect(flip?.severity).toBe('warning');
+    expect(flip!.message).toMatch(/falls to below 1 mG [0-9.]+ cm into the magnet/);
+    expect(r.adiabaticity).toBeGreaterThan(0.1);
+  });
+});
