@@ -22,6 +22,7 @@ const BENCHMARKS = [
   { name: 'editor', entry: 'bench/editor.bench.ts', call: 'runEditorBench', about: '2,000-line setup: edit → diagnostics, hover, cold start' },
   { name: 'fit', entry: 'bench/fit.bench.ts', call: 'runFitBench', about: 'field calibration from one resonance; 5-parameter fit of a 4,096-point profile' },
   { name: 'spectrum', entry: 'bench/spectrum.bench.ts', call: 'runSpectrumBench', about: '10,000-point Voigt spectrum with 100 components' },
+  { name: 'trajectory', entry: 'bench/trajectory.bench.ts', call: 'runTrajectoryBench', about: 'one sublevel through a 200-step field map against the analytic deflection' },
 ];
 
 const TMP = '.bench-tmp';

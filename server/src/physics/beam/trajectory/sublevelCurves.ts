@@ -138,21 +138,19 @@ function hermiteAt(t: Float64Array, h: number, intervals: number, b: number, out
   out[1] = (-slope / h) * PLANCK_H;
 }
 
-/** Exact moments at the midpoints of (up to 64 spread) intervals against the table. */
+/** Exact moments at every interval midpoint (one sweep through them) against the table. */
 function midpointError(spec: LevelSpec, curves: SublevelCurves, intervals: number): number {
-  const probes = Math.min(64, intervals);
-  const stride = intervals / probes;
+  const h = curves.stepT;
+  const exact = sweepLevel(spec, 0.5 * h, curves.maxFieldT - 0.5 * h, intervals, { crossings: false });
   const out = new Float64Array(2);
   let worst = 0;
-  for (let p = 0; p < probes; p++) {
-    const b = (Math.floor(p * stride) + 0.5) * curves.stepT;
-    const exact = sweepLevel(spec, b, b + 1e-3 * curves.stepT, 2, { crossings: false });
-    exact.states.forEach((s) => {
-      const i = curves.labels.findIndex((l) => l.low === s.low.text);
-      if (i < 0) return;
-      curves.at(i, b, out);
-      worst = Math.max(worst, Math.abs(out[1] - s.momentJT[0]));
-    });
-  }
+  exact.states.forEach((s) => {
+    const i = curves.labels.findIndex((l) => l.low === s.low.text);
+    if (i < 0) return;
+    for (let p = 0; p < exact.fieldsT.length; p++) {
+      curves.at(i, exact.fieldsT[p]!, out);
+      worst = Math.max(worst, Math.abs(out[1] - s.momentJT[p]!));
+    }
+  });
   return worst;
 }
