@@ -5,3 +5,4 @@ export { directionTurnRate, magnitudeAndGradient } from './fieldMagnitude';
 export { dormandPrince, rungeKutta4, type Derivative, type Observer, type StepperResult } from './steppers';
 export { surveyBeamLine, GRADIENT_VARIATION_LIMIT, type BeamLineSurvey, type SurveyInput } from './beamLineSurvey';
 export { fieldMapBeam, FORWARD_ENERGY_LIMIT, INVERSE_SQUARE_LIMIT, type FieldMapBeam, type FieldMapInput, type FieldMapSublevel } from './fieldMapBeam';
+export { fieldMapPattern, END_FRACTIONS, type FieldMapPatternInput } from './fieldMapPattern';
