@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { ATOMIC_MASS_UNIT } from '../../server/src/physics/constants';
-import { deflectionCoefficient, type BeamGeometry } from '../../server/src/physics/beam';
+import { ATOMIC_MASS_UNIT, BOLTZMANN_K } from '../../server/src/physics/constants';
+import { deflectionCoefficient, detectorPattern, type BeamGeometry } from '../../server/src/physics/beam';
 import { solveLevel } from '../../server/src/physics/engine';
-import { fieldMapBeam, surveyBeamLine } from '../../server/src/physics/beam/trajectory';
+import { fieldMapBeam, fieldMapPattern, surveyBeamLine } from '../../server/src/physics/beam/trajectory';
 import { infiniteWires, uniformGradientField } from './trajectoryFields';
 import { LI7_2S } from './engine.fixtures';
 
@@ -77,5 +77,41 @@ describe('a beam through a field map', () => {
     expect(flip?.severity).toBe('warning');
     expect(flip!.message).toMatch(/falls to below 1 mG [0-9.]+ cm into the magnet/);
     expect(r.adiabaticity).toBeGreaterThan(0.1);
+  });
+});
+
+describe('the detector pattern of a field-map magnet', () => {
+  const mass = 7.0160034366 * ATOMIC_MASS_UNIT; // 7Li, AME 2020 (from memory)
+  const states = solveLevel(LI7_2S, 1).states;
+  const geometry: BeamGeometry = { slit1M: 2e-5, slit2M: 2e-5, slitSeparationM: 0.4, magnetLengthM: 0.08, driftM: 0.35, detectorWidthM: 1e-5, gradientTPerM: 20 };
+
+  it('equals the uniform model’s pattern in a uniform gradient: stretched states at one speed to 1e-9, all sublevels from an oven to 1e-4', () => {
+    const only = (twoM: number) => states.map((s) => ({ label: s.low.text, momentJT: s.momentJT, population: s.twoM === twoM && s.low.text.startsWith('F=2') ? 1 : 0 }));
+    for (const [source, sublevels, tol] of [
+      [{ kind: 'single', speed: 1500 } as const, only(4), 1e-9],
+      [{ kind: 'single', speed: 1500 } as const, only(-4), 1e-9],
+      [{ kind: 'effusive', temperatureK: 900 } as const, states.map((s) => ({ label: s.low.text, momentJT: s.momentJT, population: 1 })), 1e-4],
+    ] as const) {
+      const uniform = { massKg: mass, geometry, source, sublevels };
+      const mapped = fieldMapPattern({ pattern: uniform, field: uniformGradientField(1, 20), centre: [0, 0, 0], spec: LI7_2S, labels: states.map((s) => s.low.text) });
+      expect(mapped.fieldMap!.ok).toBe(true);
+      const a = detectorPattern(uniform);
+      const b = detectorPattern(mapped.pattern);
+      expect(b.peaks.length).toBe(a.peaks.length);
+      a.peaks.forEach((p, i) => expect(Math.abs(b.peaks[i]!.positionM - p.positionM)).toBeLessThan(tol * Math.abs(p.positionM) + 1e-12));
+      a.sublevels.forEach((s, i) => {
+        if (s.weight > 0) expect(Math.abs(b.sublevels[i]!.meanDeflectionM / s.meanDeflectionM - 1)).toBeLessThan(tol);
+      });
+    }
+  });
+
+  it('with an oven flies the reference speed ⟨1/v²⟩^(−1/2) = √(2kT/M) and the 5 % and 95 % flux points', () => {
+    const sublevels = states.map((s) => ({ label: s.low.text, momentJT: s.momentJT, population: 1 }));
+    const mapped = fieldMapPattern({ pattern: { massKg: mass, geometry, source: { kind: 'effusive', temperatureK: 900 }, sublevels }, field: uniformGradientField(1, 20), centre: [0, 0, 0], spec: LI7_2S, labels: states.map((s) => s.low.text) });
+    // oven flux law: ⟨1/v²⟩ = M/2kT (closed form, docs/beam.md §2)
+    expect(Math.abs(mapped.referenceSpeed! / Math.sqrt((2 * BOLTZMANN_K * 900) / mass) - 1)).toBeLessThan(1e-12);
+    expect(mapped.speeds!.length).toBe(3);
+    expect(mapped.speeds![1]).toBeLessThan(mapped.referenceSpeed!);
+    expect(mapped.speeds![2]).toBeGreaterThan(mapped.referenceSpeed!);
   });
 });
