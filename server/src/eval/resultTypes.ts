@@ -186,6 +186,10 @@ export interface MagnetResult {
   field_unit?: string;
   gradient_unit?: string;
   length_unit?: string;
+  /** A magnet built from sources: their names; field_T and gradient_T_per_m are then |B| and ∂|B|/∂z at `at_m` (docs/beam.md §7). */
+  sources?: string[];
+  /** Where the beam line (along +x) passes the magnet's centre, m. */
+  at_m?: [number, number, number];
 }
 
 export interface BeamSublevelResult {
