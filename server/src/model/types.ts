@@ -8,6 +8,7 @@ import type { Configuration } from '../physics/configuration';
 import type { TermSymbol } from '../physics/termSymbol';
 import type { BuiltinSpecies } from '../physics/species';
 import type { DataModel, FitRequestModel } from './fitTypes';
+import type { Vec3 } from '../physics/fields/types';
 
 /** A value and its origin: `file` (with the setting's range) or a citation of a published source. */
 export interface Valued<T> {
@@ -108,9 +109,15 @@ export interface MagnetModel {
   name: string;
   node: BlockNode;
   nameRange: Range;
+  /** Written, or with `sources` |B| at the beam line's centre taken from them (source 'sources …'). */
   fieldT?: Valued<number>;
+  /** Written, or with `sources` ∂|B|/∂z at the beam line's centre. */
   gradientTPerM?: Valued<number>;
   lengthM?: Valued<number>;
+  /** The field sources the magnet is built from (`sources = …`); the beam then flies through their field (docs/beam.md §7). */
+  sources?: FieldSourceModel[];
+  /** Where the beam line (along +x) passes the middle of the magnet (`at`), m; default the origin. */
+  atM?: Valued<Vec3>;
 }
 
 export type BeamSource =
