@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { ATOMIC_MASS_UNIT, BOLTZMANN_K } from '../../server/src/physics/constants';
 import { deflectionCoefficient, detectorPattern, type BeamGeometry } from '../../server/src/physics/beam';
 import { solveLevel } from '../../server/src/physics/engine';
-import { fieldMapBeam, fieldMapPattern, surveyBeamLine } from '../../server/src/physics/beam/trajectory';
+import { closestApproach, fieldMapBeam, fieldMapPattern, surveyBeamLine } from '../../server/src/physics/beam/trajectory';
 import { infiniteWires, uniformGradientField } from './trajectoryFields';
 import { LI7_2S } from './engine.fixtures';
 
@@ -113,5 +113,33 @@ describe('the detector pattern of a field-map magnet', () => {
     expect(mapped.speeds!.length).toBe(3);
     expect(mapped.speeds![1]).toBeLessThan(mapped.referenceSpeed!);
     expect(mapped.speeds![2]).toBeGreaterThan(mapped.referenceSpeed!);
+  });
+});
+
+describe('clearance of the beam line from the sources (geometry)', () => {
+  const start: [number, number, number] = [-0.04, 0, 0];
+  it('a wire across the line at height d: closest approach d where they cross', () => {
+    const r = closestApproach({ kind: 'wire', point: [0.01, 0, 3e-4], direction: [0, 1, 0], currentA: 1 }, start, 0.08);
+    expect(r.distanceM).toBeCloseTo(3e-4, 12);
+    expect(r.atM).toBeCloseTo(0.05, 9);
+  });
+  it('a short wire segment beside the line: distance to its nearer end (Pythagoras)', () => {
+    const r = closestApproach({ kind: 'wire', point: [0, 0.003, 0], direction: [0, 1, 0], currentA: 1, lengthM: 0.002 }, start, 0.08);
+    expect(r.distanceM).toBeCloseTo(0.002, 12);
+  });
+  it('a loop around the line (coaxial) keeps its radius; one the line crosses near its wire does not', () => {
+    expect(closestApproach({ kind: 'loop', centre: [0, 0, 0], axis: [1, 0, 0], radiusM: 0.01, ampereTurns: 1 }, start, 0.08).distanceM).toBeCloseTo(0.01, 12);
+    // a loop in the x–z plane whose wire passes through the origin, on the line
+    expect(closestApproach({ kind: 'loop', centre: [0, 0, 0.01], axis: [0, 1, 0], radiusM: 0.01, ampereTurns: 1 }, start, 0.08).distanceM).toBeCloseTo(0, 12);
+  });
+  it('inside a block is distance 0; beside it, the gap', () => {
+    expect(closestApproach({ kind: 'slab', centre: [0, 0, 0.002], sizeM: [0.01, 0.01, 0.002], magnetisationT: [0, 0, 1] }, start, 0.08).distanceM).toBeCloseTo(0.001, 12);
+    expect(closestApproach({ kind: 'slab', centre: [0, 0, 0], sizeM: [0.01, 0.01, 0.002], magnetisationT: [0, 0, 1] }, start, 0.08).distanceM).toBe(0);
+  });
+  it('the survey reports the source the line runs into, by name', () => {
+    const spec = { kind: 'wire' as const, point: [0.01, 0, 2e-5] as const, direction: [0, 1, 0] as const, currentA: 1 };
+    const s = surveyBeamLine({ field: uniformGradientField(1, 1), centre: [0, 0, 0], magnetLengthM: 0.08, halfHeightM: 5e-5, obstacles: [{ name: 'cross', spec: { ...spec, point: [...spec.point], direction: [...spec.direction] } }] });
+    expect(s.issues.map((i) => i.code)).toEqual(['magnet-line-meets-source']);
+    expect(s.issues[0]!.message).toContain("source 'cross' 5 cm into the magnet (it passes 20 µm from it, within the beam's half height of 50 µm)");
   });
 });

@@ -4,9 +4,10 @@
  * stretch, whether the line runs through a source, and how much the gradient averaged along
  * the stretch changes across the beam height (where the uniform model would mislead).
  */
-import type { FieldFunction, Vec3 } from '../../fields/types';
+import type { FieldFunction, FieldSourceSpec, Vec3 } from '../../fields/types';
 import { beamIssue, type BeamIssue } from '../types';
 import { magnitudeAndGradient } from './fieldMagnitude';
+import { closestApproach } from './lineClearance';
 
 export interface SurveyInput {
   field: FieldFunction;
@@ -16,6 +17,8 @@ export interface SurveyInput {
   halfHeightM: number;
   /** Samples along the stretch (default 401). */
   samples?: number;
+  /** The parts that make the field, with the names to report them by: the line must keep clear of them. */
+  obstacles?: readonly { name: string; spec: FieldSourceSpec }[];
 }
 
 export interface BeamLineSurvey {
@@ -34,6 +37,9 @@ export interface BeamLineSurvey {
   maxFieldT: number;
   issues: BeamIssue[];
 }
+
+/** Closest a beam line may pass a thin conductor (at least this, or the beam's half height when larger), m. */
+export const MIN_CLEARANCE_M = 1e-6;
 
 /** Above this the averaged gradient varies too much across the beam for the uniform model (our choice, docs/beam.md). */
 export const GRADIENT_VARIATION_LIMIT = 0.05;
@@ -74,7 +80,20 @@ export function surveyBeamLine(input: SurveyInput): BeamLineSurvey {
   const gradientTPerM = Number.isFinite(m[3]) ? m[3] : 0;
   const on = mean[1]!;
   const variation = on !== 0 ? Math.max(Math.abs(mean[0]! - on), Math.abs(mean[2]! - on)) / Math.abs(on) : 0;
-  if (blocked !== undefined) {
+  const clearance = Math.max(h, MIN_CLEARANCE_M);
+  const hits = (input.obstacles ?? [])
+    .map((o) => ({ name: o.name, ...closestApproach(o.spec, [x0, centre[1], centre[2]], L) }))
+    .filter((o) => o.distanceM < clearance);
+  if (hits.length > 0) {
+    const first = hits[0]!;
+    issues.push(
+      beamIssue(
+        'error',
+        'magnet-line-meets-source',
+        `The beam line runs into source '${first.name}' ${cm(first.atM)} into the magnet (it passes ${um(first.distanceM)} from it, within the beam's half height of ${um(clearance)}); move \`at\` or the source.`,
+      ),
+    );
+  } else if (blocked !== undefined) {
     issues.push(
       beamIssue('error', 'magnet-line-meets-source', `The beam line runs through a field source ${cm(blocked)} into the magnet, where the field is not defined; move \`at\` off the sources.`),
     );
@@ -97,6 +116,10 @@ export function surveyBeamLine(input: SurveyInput): BeamLineSurvey {
     maxFieldT: maxB,
     issues,
   };
+}
+
+function um(x: number): string {
+  return `${Number((x * 1e6).toPrecision(3))} µm`;
 }
 
 function cm(x: number): string {

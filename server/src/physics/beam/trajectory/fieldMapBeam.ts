@@ -7,7 +7,7 @@
  * sublevel over the speed law with that k. Problems come back as values.
  */
 import type { LevelSpec } from '../../engine';
-import type { FieldFunction, Vec3 } from '../../fields/types';
+import type { FieldFunction, FieldSourceSpec, Vec3 } from '../../fields/types';
 import { beamIssue, type BeamIssue } from '../types';
 import { surveyBeamLine, type BeamLineSurvey } from './beamLineSurvey';
 import { ADIABATIC_LIMIT, flySublevel, type Flight, type FlightOptions } from './flight';
@@ -26,6 +26,8 @@ export interface FieldMapInput {
   speeds: readonly number[];
   /** Half the beam's height inside the magnet, m. */
   halfHeightM: number;
+  /** The parts of the field, named: the beam line must keep clear of them (beamLineSurvey.ts). */
+  obstacles?: readonly { name: string; spec: FieldSourceSpec }[];
   options?: FlightOptions;
 }
 
@@ -62,7 +64,13 @@ export const FORWARD_ENERGY_LIMIT = 0.02;
 const TABLE_MARGIN = 1.5;
 
 export function fieldMapBeam(input: FieldMapInput): FieldMapBeam {
-  const survey = surveyBeamLine({ field: input.field, centre: input.centre, magnetLengthM: input.magnetLengthM, halfHeightM: input.halfHeightM });
+  const survey = surveyBeamLine({
+    field: input.field,
+    centre: input.centre,
+    magnetLengthM: input.magnetLengthM,
+    halfHeightM: input.halfHeightM,
+    ...(input.obstacles ? { obstacles: input.obstacles } : {}),
+  });
   const out: FieldMapBeam = {
     ok: false,
     survey,

@@ -8,7 +8,7 @@
  * detector, speed spread) are valid resolving advice for such a beam.
  */
 import type { LevelSpec } from '../../engine';
-import type { FieldFunction, Vec3 } from '../../fields/types';
+import type { FieldFunction, FieldSourceSpec, Vec3 } from '../../fields/types';
 import { leverArmM2 } from '../deflection';
 import type { PatternInput } from '../detectorPattern';
 import { speedAtSlowerFraction } from '../speedLaw';
@@ -27,6 +27,8 @@ export interface FieldMapPatternInput {
   spec: LevelSpec;
   /** Engine low-field label of each of pattern.sublevels, same order. */
   labels: readonly string[];
+  /** The named parts of the field, which the beam line must keep clear of. */
+  obstacles?: readonly { name: string; spec: FieldSourceSpec }[];
   options?: FlightOptions;
 }
 
@@ -54,6 +56,7 @@ export function fieldMapPattern(input: FieldMapPatternInput): { pattern: Pattern
     labels: input.labels,
     speeds,
     halfHeightM,
+    ...(input.obstacles ? { obstacles: input.obstacles } : {}),
     ...(input.options ? { options: input.options } : {}),
   });
   const g = fieldMap.survey.gradientTPerM;

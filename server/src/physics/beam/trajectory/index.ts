@@ -3,6 +3,7 @@ export { sublevelCurves, NODES_PER_SCALE, type CurveOptions, type SublevelCurveL
 export { flySublevel, ADIABATIC_LIMIT, type Flight, type FlightOptions, type FlightSetup, type TransverseState } from './flight';
 export { directionTurnRate, magnitudeAndGradient } from './fieldMagnitude';
 export { dormandPrince, rungeKutta4, type Derivative, type Observer, type StepperResult } from './steppers';
-export { surveyBeamLine, GRADIENT_VARIATION_LIMIT, type BeamLineSurvey, type SurveyInput } from './beamLineSurvey';
+export { surveyBeamLine, GRADIENT_VARIATION_LIMIT, MIN_CLEARANCE_M, type BeamLineSurvey, type SurveyInput } from './beamLineSurvey';
 export { fieldMapBeam, FORWARD_ENERGY_LIMIT, INVERSE_SQUARE_LIMIT, type FieldMapBeam, type FieldMapInput, type FieldMapSublevel } from './fieldMapBeam';
 export { fieldMapPattern, END_FRACTIONS, type FieldMapPatternInput } from './fieldMapPattern';
+export { closestApproach, distanceToSource } from './lineClearance';
