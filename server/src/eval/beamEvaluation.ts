@@ -63,7 +63,7 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
   let patternInput = inputs.input;
   let fieldMap: FieldMapBeam | undefined;
   if (map) {
-    const mapped = fieldMapPattern({ pattern: inputs.input, field: map.field, centre: map.centre, spec: inputs.spec, labels: inputs.input.sublevels.map((s) => s.label) });
+    const mapped = fieldMapPattern({ pattern: inputs.input, field: map.field, centre: map.centre, obstacles: map.obstacles, spec: inputs.spec, labels: inputs.input.sublevels.map((s) => s.label) });
     patternInput = mapped.pattern;
     fieldMap = mapped.fieldMap;
     base.deflection_model = 'field-map';
