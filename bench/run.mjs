@@ -21,6 +21,7 @@ const BENCHMARKS = [
   { name: 'whole-term', entry: 'bench/wholeTerm.bench.ts', call: 'runWholeTermBench', about: '87Rb 5P whole term vs single-J sweeps, per state' },
   { name: 'editor', entry: 'bench/editor.bench.ts', call: 'runEditorBench', about: '2,000-line setup: edit → diagnostics, hover, cold start' },
   { name: 'fit', entry: 'bench/fit.bench.ts', call: 'runFitBench', about: 'field calibration from one resonance; 5-parameter fit of a 4,096-point profile' },
+  { name: 'field-sources', entry: 'bench/fieldSources.bench.ts', call: 'runFieldSourcesBench', about: 'B and gradient of a 10-loop assembly at one point, against point dipoles' },
   { name: 'spectrum', entry: 'bench/spectrum.bench.ts', call: 'runSpectrumBench', about: '10,000-point Voigt spectrum with 100 components' },
   { name: 'trajectory', entry: 'bench/trajectory.bench.ts', call: 'runTrajectoryBench', about: 'one sublevel through a 200-step field map against the analytic deflection' },
 ];

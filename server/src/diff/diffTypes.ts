@@ -8,7 +8,7 @@ import type { DiagnosticResult } from '../eval/resultTypes';
 export const DIFF_FORMAT = 'sublevel-diff';
 export const DIFF_VERSION = 1;
 
-export type ThingKind = 'field' | 'magnet' | 'level' | 'term' | 'beam' | 'line' | 'resonance' | 'species' | 'settings' | 'data' | 'fit' | 'file';
+export type ThingKind = 'field' | 'magnet' | 'level' | 'term' | 'beam' | 'line' | 'resonance' | 'species' | 'settings' | 'data' | 'fit' | 'coil' | 'solenoid' | 'wire' | 'slab' | 'file';
 
 /** Below these differences a number is the same (SI units; dimensionless for g, moments in μ_B, strengths). */
 export interface DiffThresholds {

@@ -31,6 +31,10 @@ const BLOCK_WORD_DETAIL: Record<BlockKind, string> = {
   settings: 'settings — g_s, reduced_mass',
   data: 'data <name> — measured points: level, kind, lower, upper, point, file, beam',
   fit: 'fit <name> — data, free, start, range (or fit <name>: <data> -> <parameter>)',
+  coil: 'coil <name> — a current loop, or a pair with spacing: radius, turns, current, centre, axis, spacing, sense, conductor',
+  solenoid: 'solenoid <name> — radius, length, turns, current, centre, axis, conductor',
+  wire: 'wire <name> — a straight wire: current, through, direction, length, return',
+  slab: 'slab <name> — a magnetised block: size, centre, magnetisation',
 };
 
 function statementStart(c: LineContext): CompletionItem[] {

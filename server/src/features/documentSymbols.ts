@@ -13,6 +13,10 @@ const KIND: Record<BlockKind, SymbolKind> = {
   settings: SymbolKind.Module,
   data: SymbolKind.Array,
   fit: SymbolKind.Operator,
+  coil: SymbolKind.Field,
+  solenoid: SymbolKind.Field,
+  wire: SymbolKind.Field,
+  slab: SymbolKind.Field,
 };
 
 function settingSymbol(s: SettingNode): DocumentSymbol {

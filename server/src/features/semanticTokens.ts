@@ -31,6 +31,7 @@ const NAME_TYPE: Record<NameUse['kind'], TokenType> = {
   resonance: 'variable',
   data: 'variable',
   fit: 'variable',
+  source: 'variable',
 };
 
 class Collector {

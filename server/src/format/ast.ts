@@ -66,7 +66,7 @@ export interface LevelNode {
   range: Range;
 }
 
-export type BlockKind = 'species' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'settings' | 'data' | 'fit';
+export type BlockKind = 'species' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'settings' | 'data' | 'fit' | 'coil' | 'solenoid' | 'wire' | 'slab';
 
 export interface BlockNode {
   kind: BlockKind;

@@ -4,7 +4,7 @@
  */
 import type { BlockKind } from './ast';
 
-export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 'beam', 'line', 'resonance', 'settings', 'data', 'fit'];
+export const BLOCK_WORDS: readonly BlockKind[] = ['species', 'field', 'magnet', 'beam', 'line', 'resonance', 'settings', 'data', 'fit', 'coil', 'solenoid', 'wire', 'slab'];
 
 export const LEVEL_WORD = 'level';
 
@@ -25,13 +25,18 @@ export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
   settings: ['g_s', 'reduced_mass'],
   data: ['level', 'kind', 'lower', 'upper', 'point', 'file', 'beam'],
   fit: ['data', 'free', 'start', 'range'],
+  // Field sources (docs/fields.md).
+  coil: ['radius', 'turns', 'current', 'centre', 'axis', 'spacing', 'sense', 'conductor'],
+  solenoid: ['radius', 'length', 'turns', 'current', 'centre', 'axis', 'conductor'],
+  wire: ['current', 'through', 'direction', 'length', 'return'],
+  slab: ['size', 'centre', 'magnetisation'],
 };
 
 /** Keys that may be written more than once in a block, each line one more value (`point` in `data`). */
 export const REPEATABLE_KEYS: readonly string[] = ['point'];
 
 /** Plain words that appear inside values; never mistaken for misspelt units. */
-export const VALUE_WORDS: readonly string[] = ['oven', 'jet', 'speed', 'spread', 'apart', 'at', 'exact', 'on', 'off', 'along', 'across'];
+export const VALUE_WORDS: readonly string[] = ['oven', 'jet', 'speed', 'spread', 'apart', 'at', 'exact', 'on', 'off', 'along', 'across', 'same', 'opposite', 'x', 'y', 'z', '-x', '-y', '-z', '+x', '+y', '+z'];
 
 export function isBlockWord(word: string): word is BlockKind {
   return (BLOCK_WORDS as readonly string[]).includes(word);

@@ -33,7 +33,9 @@ export type Dimension =
   | 'moment'
   | 'dimensionless'
   | 'time'
-  | 'area';
+  | 'area'
+  | 'current'
+  | 'magnetisation';
 
 export interface QuantityReading {
   /** The value in SI units (Hz for frequency-like, J/T for moments, a plain fraction for %). */
@@ -215,6 +217,8 @@ const DIMENSIONS: Record<Dimension, DimensionInfo> = {
   dimensionless: { label: 'fraction', examples: ['%'], accepts: ['%'] },
   time: { label: 'time', examples: ['s', 'ms', 'us'], accepts: ['s'] },
   area: { label: 'area', examples: ['a0^2', 'nm^2', 'pm^2'], accepts: ['m^2'] },
+  current: { label: 'current', examples: ['A', 'mA', 'kA'], accepts: ['A'] },
+  magnetisation: { label: 'magnetisation', examples: ['A/m', 'kA/m'], accepts: ['A/m'] },
 };
 
 const ACCEPTED_DIMS: Record<Dimension, number[][]> = Object.fromEntries(
@@ -239,6 +243,7 @@ const COMMON_UNITS: readonly string[] = [
   '%',
   's', 'ms', 'us', 'ns',
   'a0^2',
+  'A', 'mA', 'kA', 'A/m', 'kA/m',
   'tesla', 'gauss', 'kelvin', 'meter', 'metre', 'second', 'hertz', 'joule',
 ];
 const SINGLE_NAMES = COMMON_UNITS.filter((u) => /^[\p{L}%]+$/u.test(u));

@@ -152,7 +152,7 @@ function splitQualified(part: ValuePart): [ValuePart | undefined, ValuePart] {
   return [q, n];
 }
 
-function positive(s: SettingNode, v: Valued<number> | undefined, problems: ProblemList): Valued<number> | undefined {
+export function positive(s: SettingNode, v: Valued<number> | undefined, problems: ProblemList): Valued<number> | undefined {
   if (v && v.value <= 0) {
     problems.add('value-out-of-range', `${s.key.text} must be greater than zero, got ${s.valueText.text}`, v.range ?? s.valueText.range);
     return undefined;

@@ -18,7 +18,9 @@ import { buildData } from './dataBuilder';
 import { buildFit } from './fitBuilder';
 import type { DataModel, FitRequestModel } from './fitTypes';
 import type { SetupSources } from './sources';
-import type { BeamModel, FieldModel, LineModel, MagnetModel, NameUse, ResonanceModel, SetupModel, SpeciesModel, UsedFileModel } from './types';
+import { buildFieldSource, isSourceBlock } from './sourceBuilder';
+import { checkSourceOverlaps } from './sourceOverlaps';
+import type { BeamModel, FieldModel, FieldSourceModel, LineModel, MagnetModel, NameUse, ResonanceModel, SetupModel, SpeciesModel, UsedFileModel } from './types';
 import { resolveUses, rootUseContext, type UseContext } from './useResolver';
 
 /**
@@ -34,6 +36,14 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
   const settings = { ...DEFAULT_SETTINGS };
   const species = new NameIndex<SpeciesModel>('species', names);
   const fields = new NameIndex<FieldModel>('field', names);
+  // Sources come before everything that lists them (magnets, traps, slowers), wherever they are in the file.
+  const fieldSources = new NameIndex<FieldSourceModel>('source', names);
+  for (const block of doc.blocks) {
+    if (!isSourceBlock(block)) continue;
+    const s = memo.build(block, names, problems, (_u, p) => buildFieldSource(block, p));
+    if (s) fieldSources.declare(s, problems);
+  }
+  checkSourceOverlaps(fieldSources.all(), problems);
   const magnets = new NameIndex<MagnetModel>('magnet', names);
   const beams = new NameIndex<BeamModel>('beam', names);
   const lines = new NameIndex<LineModel>('line', names);
@@ -97,6 +107,7 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
     uses: used,
     species: species.all(),
     fields: fields.all(),
+    sources: fieldSources.all(),
     magnets: magnets.all(),
     beams: [...beams.all(), ...beamsWithoutName],
     lines: lines.all(),

@@ -83,6 +83,19 @@ export const MODEL_RULES = {
   'fit-parameter-unknown': { severity: 'error', summary: 'A free parameter that is not one of the fit parameters.' },
   'fit-parameter-not-applicable': { severity: 'error', summary: 'A free parameter that the data named cannot determine.' },
   'fit-start-malformed': { severity: 'error', summary: 'A starting value not written as <parameter> <value>.' },
+  'vector-malformed': { severity: 'error', summary: 'A point or size not written as three numbers with a unit (0, 0, 3 cm).' },
+  'direction-unknown': { severity: 'error', summary: 'A direction that is not x, y, z, -x, -y, -z or three numbers.' },
+  'direction-zero': { severity: 'error', summary: 'A direction written as three numbers that are all zero.' },
+  'source-incomplete': { severity: 'error', summary: 'A coil, solenoid, wire or slab lacks a setting its field needs.' },
+  'source-turns-not-whole': { severity: 'error', summary: 'A number of turns that is not a whole number.' },
+  'source-current-zero': { severity: 'warning', summary: 'A source whose current is zero adds no field.' },
+  'source-current-absurd': { severity: 'warning', summary: 'A current above 10 kA in one conductor, beyond laboratory coils and wires.' },
+  'source-magnetisation-high': { severity: 'warning', summary: 'A magnetisation μ0·M above 2.5 T, beyond any permanent magnet.' },
+  'source-magnetisation-zero': { severity: 'warning', summary: 'A block whose magnetisation is zero adds no field.' },
+  'source-sense-without-spacing': { severity: 'warning', summary: '`sense` on a coil without `spacing` (a single loop): it is not used.' },
+  'source-return-on-wire': { severity: 'error', summary: 'A return wire on the same line as its wire.' },
+  'source-overlap': { severity: 'warning', summary: 'Two sources in the same place: two equal loops at one place, a wire through a loop’s wire, or two wires on one line.' },
+  'source-listed-twice': { severity: 'warning', summary: 'A source named twice in one list; it is counted once.' },
 } as const satisfies Record<string, RuleInfo>;
 
 export type ModelCode = keyof typeof MODEL_RULES;

@@ -7,6 +7,7 @@ import type { BlockNode, LevelNode, Problem, Range, SettingNode, SetupDocument, 
 import type { Configuration } from '../physics/configuration';
 import type { TermSymbol } from '../physics/termSymbol';
 import type { BuiltinSpecies } from '../physics/species';
+import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
 import type { DataModel, FitRequestModel } from './fitTypes';
 import type { Vec3 } from '../physics/fields/types';
 
@@ -103,6 +104,43 @@ export interface FieldModel {
   node: BlockNode;
   nameRange: Range;
   tesla?: Valued<number>;
+}
+
+/**
+ * A field source block (`coil`, `solenoid`, `wire`, `slab`; docs/fields.md) with its values in SI
+ * as written, and the exact parts the physics sums: a coil pair or a wire with its return is two.
+ * `parts` is empty when the block cannot be used (its problems say why).
+ */
+export interface FieldSourceModel {
+  name: string;
+  node: BlockNode;
+  nameRange: Range;
+  kind: 'coil' | 'solenoid' | 'wire' | 'slab';
+  parts: FieldSourceSpec[];
+  /** coil, solenoid: loop or winding radius, m. */
+  radiusM?: Valued<number>;
+  /** coil, solenoid: turns (of each loop of a pair). */
+  turns?: Valued<number>;
+  /** coil, solenoid, wire: current, A (its sign as written). */
+  currentA?: Valued<number>;
+  /** coil, solenoid, slab: centre, m (default the origin, without a range). */
+  centre?: Valued<Vec3>;
+  /** coil, solenoid: unit axis (default +z, without a range). */
+  axis?: Valued<Vec3>;
+  /** coil: distance between the loops of a pair, m, and whether their currents run the same way. */
+  spacingM?: Valued<number>;
+  sense?: Valued<'same' | 'opposite'>;
+  /** coil, solenoid: copper wire diameter, m (for current density, resistance, power). */
+  conductorM?: Valued<number>;
+  /** solenoid: winding length; wire: segment length (absent: infinite), m. */
+  lengthM?: Valued<number>;
+  /** wire: a point on it, the unit direction of the current, and a point on the return wire. */
+  through?: Valued<Vec3>;
+  direction?: Valued<Vec3>;
+  returnThrough?: Valued<Vec3>;
+  /** slab: edge lengths along x, y, z, m, and μ0·M, T. */
+  sizeM?: Valued<Vec3>;
+  magnetisationT?: Valued<Vec3>;
 }
 
 export interface MagnetModel {
@@ -208,7 +246,7 @@ export interface SettingsModel {
 
 /** A place in the file that names something, for go-to-definition, references and rename. */
 export interface NameUse {
-  kind: 'species' | 'level' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'data' | 'fit';
+  kind: 'species' | 'level' | 'field' | 'magnet' | 'beam' | 'line' | 'resonance' | 'data' | 'fit' | 'source';
   name: string;
   range: Range;
   /** The declaration it resolves to, if any; `uri` is set when it is declared in another file (through `use`). */
@@ -233,6 +271,8 @@ export interface SetupModel {
   uses: UsedFileModel[];
   species: SpeciesModel[];
   fields: FieldModel[];
+  /** Coils, solenoids, wires and magnetised blocks (docs/fields.md). */
+  sources: FieldSourceModel[];
   magnets: MagnetModel[];
   beams: BeamModel[];
   lines: LineModel[];

@@ -41,6 +41,9 @@ export const ELECTRON_MASS_U = 5.485799090441e-4;
 /** Electron-to-proton mass ratio. CODATA 2022: 5.446 170 214 889(94) e-4. */
 export const ELECTRON_PROTON_MASS_RATIO = 5.446170214889e-4;
 
+/** Vacuum magnetic permeability μ0, N/A². CODATA 2022: 1.256 637 061 27(20) e-6 (no longer exactly 4π·1e-7). */
+export const VACUUM_PERMEABILITY = 1.25663706127e-6;
+
 /** μ_B/h in Hz/T (derived; CODATA 2022 lists 13 996 244 917.1(4.4) Hz/T). */
 export const BOHR_MAGNETON_HZ_PER_T = BOHR_MAGNETON / PLANCK_H;
 /** μ_N/h in Hz/T (derived; CODATA 2022 lists 7.622 593 2188(24) MHz/T). */

@@ -131,6 +131,15 @@ export const PHYSICS_RULES = {
   'magnet-spin-flip-risk': { severity: 'warning', summary: 'The field along the beam turns too fast for its strength: atoms may leave their sublevel.' },
   'magnet-deflection-not-inverse-square': { severity: 'info', summary: 'In a non-uniform field the deflection departs from z ∝ 1/v² across the speeds.' },
   'magnet-forward-speed-changes': { severity: 'warning', summary: 'The sublevel energy changes enough through the magnet to alter the forward speed.' },
+  // Field sources (fields/).
+  'source-invalid-part': { severity: 'error', summary: 'A coil, solenoid, wire or block part with a size, direction or current the field formulas cannot use.' },
+  'source-point-on-loop': { severity: 'warning', summary: 'A field point on the wire of a loop, where a thin loop has no field.' },
+  'source-point-on-winding': { severity: 'warning', summary: 'A field point on the winding of a solenoid, where the field jumps.' },
+  'source-point-on-wire': { severity: 'warning', summary: 'A field point on a straight wire, where a thin wire has no field.' },
+  'source-point-on-block': { severity: 'warning', summary: 'A field point on the surface of a magnetised block, where the field jumps.' },
+  'source-zero-field': { severity: 'info', summary: 'The field vanishes at the point, where |B| has no curvature.' },
+  'source-bad-step': { severity: 'error', summary: 'A difference step for the curvature that is not a positive length.' },
+  'source-bad-sampling': { severity: 'error', summary: 'A field sampling request with too few or too many points.' },
 } as const satisfies Record<string, PhysicsRule>;
 
 export type PhysicsCode = keyof typeof PHYSICS_RULES;

@@ -25,6 +25,8 @@ const FAMILIES: Readonly<Record<Dimension, readonly (readonly string[])[]>> = {
   dimensionless: [['%']],
   time: [['s', 'ms', 'us', 'ns']],
   area: [['a0^2'], ['nm^2', 'pm^2']],
+  current: [['kA', 'A', 'mA']],
+  magnetisation: [['kA/m', 'A/m']],
 };
 
 /** Units offered by the "convert to" refactoring, per dimension. */
@@ -40,11 +42,13 @@ const CONVERT_TARGETS: Readonly<Record<Dimension, readonly string[]>> = {
   dimensionless: ['%'],
   time: ['s', 'ms', 'us'],
   area: ['a0^2', 'nm^2', 'm^2'],
+  current: ['A', 'mA', 'kA'],
+  magnetisation: ['A/m', 'kA/m'],
 };
 
 /** Order matters: the first dimension that accepts a unit wins. */
 const ALL_DIMENSIONS: readonly Dimension[] = [
-  'flux-density', 'gradient', 'length', 'temperature', 'speed', 'frequency-like', 'mass', 'moment', 'time', 'area', 'dimensionless',
+  'flux-density', 'gradient', 'length', 'temperature', 'speed', 'frequency-like', 'mass', 'moment', 'time', 'area', 'current', 'magnetisation', 'dimensionless',
 ];
 
 export function convertTargets(d: Dimension): readonly string[] {
@@ -88,6 +92,13 @@ export function expectedDimension(c: ValueContext): Dimension | undefined {
         if (c.previousWord === 'spread') return 'dimensionless';
       }
       return undefined;
+    case 'coil':
+    case 'solenoid':
+      return c.key === 'current' ? 'current' : c.key === 'turns' || c.key === 'axis' || c.key === 'sense' ? undefined : 'length';
+    case 'wire':
+      return c.key === 'current' ? 'current' : c.key === 'direction' ? undefined : 'length';
+    case 'slab':
+      return c.key === 'magnetisation' ? (c.previousWord === undefined ? 'flux-density' : undefined) : 'length';
     default:
       return undefined;
   }

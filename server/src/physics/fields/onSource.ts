@@ -1,0 +1,58 @@
+/**
+ * Points where a thin-conductor or surface model has no field: on a loop's wire, on a solenoid's
+ * current sheet, on a wire, on a magnetised block's surface. "On" means within a billionth of the
+ * source's size (1 nm for an infinite wire), well below any real conductor's thickness.
+ */
+import { toCylinder } from './axisymmetric';
+import { issue, type FieldIssue } from './issues';
+import type { FieldSourceSpec, Vec3 } from './types';
+import { dot, sub } from './vec3';
+
+const RELATIVE = 1e-9;
+const INFINITE_WIRE_M = 1e-9;
+
+export function onLoopWire(rho: number, z: number, radius: number): boolean {
+  const dr = rho - radius;
+  const tol = RELATIVE * radius;
+  return dr * dr + z * z <= tol * tol;
+}
+
+export function onWinding(rho: number, z: number, radius: number, length: number): boolean {
+  const tol = RELATIVE * Math.max(radius, length);
+  return Math.abs(rho - radius) <= tol && Math.abs(z) <= length / 2 + tol;
+}
+
+export function pointOnSource(spec: FieldSourceSpec, point: Vec3, partIndex?: number): FieldIssue | undefined {
+  switch (spec.kind) {
+    case 'loop': {
+      const { rho, z } = toCylinder(point, spec.centre, spec.axis);
+      if (onLoopWire(rho, z, spec.radiusM)) return issue('warning', 'source-point-on-loop', 'The point lies on the wire of a loop, where a thin loop has no field; that loop is left out there.', partIndex);
+      return undefined;
+    }
+    case 'solenoid': {
+      const { rho, z } = toCylinder(point, spec.centre, spec.axis);
+      if (onWinding(rho, z, spec.radiusM, spec.lengthM)) return issue('warning', 'source-point-on-winding', 'The point lies on the winding of a solenoid, where the field jumps; that solenoid is left out there.', partIndex);
+      return undefined;
+    }
+    case 'wire': {
+      const d = sub(point, spec.point);
+      const u = dot(d, spec.direction);
+      const rho = Math.hypot(d[0] - u * spec.direction[0], d[1] - u * spec.direction[1], d[2] - u * spec.direction[2]);
+      const tol = spec.lengthM === undefined ? INFINITE_WIRE_M : RELATIVE * spec.lengthM;
+      const within = spec.lengthM === undefined || Math.abs(u) <= spec.lengthM / 2 + tol;
+      if (rho <= tol && within) return issue('warning', 'source-point-on-wire', 'The point lies on a wire, where a thin wire has no field; that wire is left out there.', partIndex);
+      return undefined;
+    }
+    case 'slab': {
+      const tol = RELATIVE * Math.max(...spec.sizeM);
+      let onFace = false;
+      for (let k = 0; k < 3; k++) {
+        const off = Math.abs(point[k] - spec.centre[k]) - spec.sizeM[k] / 2;
+        if (off > tol) return undefined;
+        if (off >= -tol) onFace = true;
+      }
+      if (onFace) return issue('warning', 'source-point-on-block', 'The point lies on the surface of a magnetised block, where the field jumps; that block is left out there.', partIndex);
+      return undefined;
+    }
+  }
+}
