@@ -67,6 +67,7 @@ describe('sublevel eval on many files (in-process, one thread)', () => {
       'examples/rubidium-spectrum.sublevel',
       'examples/shared/alkali-levels.sublevel',
       'examples/shared-species-demo.sublevel',
+      'examples/two-wire-magnet.sublevel',
     ]);
     expect(jsonl(cli('eval', '--files-from', list, '--format', 'jsonl').out).map((l) => l.file)).toEqual([LI, RB]);
   });

@@ -22,7 +22,7 @@ describe('sublevel check on the bundled examples', () => {
   });
 
   it('finds the demo setups clean (no errors, no warnings; notes allowed)', () => {
-    for (const f of ['lithium-beam', 'rubidium-bias', 'handmade-species', 'shared-species-demo', 'shared/alkali-levels', 'lithium-whole-term', 'fit-rubidium', 'rubidium-spectrum']) {
+    for (const f of ['lithium-beam', 'rubidium-bias', 'handmade-species', 'shared-species-demo', 'shared/alkali-levels', 'lithium-whole-term', 'fit-rubidium', 'rubidium-spectrum', 'two-wire-magnet']) {
       const r = cli('check', `examples/${f}.sublevel`);
       expect(r.out.split('\n').filter((l) => / (error|warning) /.test(l)), f).toEqual([]);
       expect(r.code, f).toBe(0);
@@ -32,8 +32,8 @@ describe('sublevel check on the bundled examples', () => {
   it('searches folders recursively and exits 1 because of the mistakes file', () => {
     const r = cli('check', 'examples');
     expect(r.code).toBe(1);
-    // Six setups and the shared species file they may use (examples/shared/).
-    expect(r.err).toMatch(/^9 files checked: 6 errors, \d+ other findings/);
+    // Seven setups and the shared species file they may use (examples/shared/).
+    expect(r.err).toMatch(/^10 files checked: 6 errors, \d+ other findings/);
   });
 
   it('writes check results as JSON', () => {

@@ -229,7 +229,8 @@ function beamReport(b: BeamResult): string[] {
 
 /** How a field-map beam's deflections were made (docs/beam.md §7). */
 function fieldMapLines(m: NonNullable<BeamResult['field_map']>): string[] {
-  const adiabatic = m.worst_adiabaticity === null ? 'the field passes through zero' : `${trimNumber(m.worst_adiabaticity, 2)} (limit ${trimNumber(m.adiabatic_limit, 2)})`;
+  const ratio = m.worst_adiabaticity;
+  const adiabatic = ratio === null ? 'the field passes through zero' : `${ratio < 1e-3 ? 'below 0.001' : trimNumber(ratio, 2)} (limit ${trimNumber(m.adiabatic_limit, 2)})`;
   return [
     `  deflections from ${m.flights} flights through the sources' field (field map), peaks at the reference speed ${speedText(m.reference_speed_m_per_s)}`,
     `  |B| on the beam line ${fieldText(m.field_on_line_min_T, 4)} … ${fieldText(m.field_on_line_max_T, 4)}; mean ∂|B|/∂z ${gradientText(m.mean_gradient_T_per_m, 4)}, changing ${percentText(m.gradient_variation, 2)} across the beam; field turning rate / Larmor frequency ${adiabatic}`,

@@ -20,7 +20,7 @@ export function readMagnetSources(node: BlockNode, magnet: MagnetModel, index: {
     if (atSetting) problems.add('magnet-at-without-sources', `\`at\` places the beam line in the field of sources; magnet '${magnet.name}' has no \`sources\``, atSetting.key.range);
     return;
   }
-  const list = readSourceList(setting, index, problems);
+  const list = readSourceList(setting, index.sources, problems);
   if (!list) return;
   magnet.sources = list;
   if (atSetting) {

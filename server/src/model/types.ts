@@ -9,7 +9,6 @@ import type { TermSymbol } from '../physics/termSymbol';
 import type { BuiltinSpecies } from '../physics/species';
 import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
 import type { DataModel, FitRequestModel } from './fitTypes';
-import type { Vec3 } from '../physics/fields/types';
 
 /** A value and its origin: `file` (with the setting's range) or a citation of a published source. */
 export interface Valued<T> {
