@@ -9,6 +9,7 @@
 import { deflectionAtSpeed, type BeamGeometry } from '../server/src/physics/beam';
 import { ATOMIC_MASS_UNIT } from '../server/src/physics/constants';
 import type { HyperfineLevelSpec } from '../server/src/physics/engine';
+import { sumField } from '../server/src/physics/fields';
 import type { FieldFunction, Vec3 } from '../server/src/physics/fields/types';
 import { flySublevel, sublevelCurves } from '../server/src/physics/beam/trajectory';
 
@@ -61,6 +62,15 @@ export function runTrajectoryBench(): { name: string; lines: string[] } {
   const adaptive = timePerCall(() => {
     sink += flySublevel(setup, state, 800).detector.zM;
   });
+  // The same magnet from the field-source code: two 12 cm conductors (finite segments, closed form).
+  const sources = sumField([
+    { kind: 'wire', point: [0, 2e-3, 0], direction: [1, 0, 0], currentA: 900, lengthM: 0.12 },
+    { kind: 'wire', point: [0, -2e-3, 0], direction: [1, 0, 0], currentA: -900, lengthM: 0.12 },
+  ]);
+  const fromSources = { ...setup, field: sources };
+  const sourcesRk4 = timePerCall(() => {
+    sink += flySublevel(fromSources, state, 800, { method: 'rk4', steps: 200 }).detector.zM;
+  });
   const geometry: BeamGeometry = { slit1M: 1e-4, slit2M: 1e-4, slitSeparationM: 0.4, magnetLengthM: 0.08, driftM: 0.3, detectorWidthM: 0, gradientTPerM: 180 };
   const baseline = timePerCall(() => {
     for (let i = 0; i < 200; i++) sink += deflectionAtSpeed(-9.27e-24, massKg, geometry, 800 + i);
@@ -71,6 +81,7 @@ export function runTrajectoryBench(): { name: string; lines: string[] } {
     lines: [
       `RK4, 200 steps (801 field samples)          ${us(rk4)}  ${(rk4 / baseline).toFixed(1)}× baseline`,
       `Dormand–Prince, ${String(adaptiveRun.steps).padStart(3)} steps (${adaptiveRun.evaluations} samples)    ${us(adaptive)}  ${(adaptive / baseline).toFixed(1)}× baseline`,
+      `RK4, 200 steps, field from sumField (wires) ${us(sourcesRk4)}  ${(sourcesRk4 / baseline).toFixed(1)}× baseline`,
       `baseline: analytic deflection × 200         ${us(baseline)}`,
       `moment table (${curves!.labels.length} sublevels, 0–0.3 T, once per beam) ${us(tableMs)}`,
     ],

@@ -91,7 +91,10 @@ describe('a magnet built from sources', () => {
     // a second conductor across the beam line, 2 cm after the magnet centre
     const text = setup({ wire: '\nwire cross\n  current = 10 A\n  through = 2, 0, 1.5 cm\n  direction = y' }).replace('  sources = rails', '  sources = rails, cross').replace('  through = 2, 0, 1.5 cm', '  through = 2, 0, 0.15 cm');
     const r = analyze(text).result!;
-    expect(r.diagnostics.map((d) => d.code)).toContain('magnet-line-meets-source');
+    const found = r.diagnostics.find((d) => d.code === 'magnet-line-meets-source')!;
+    expect(found.message).toContain("runs into source 'cross' 6 cm into the magnet");
+    // on the magnet's `at` setting, where the fix goes
+    expect(found.line).toBe(text.split('\n').findIndex((l) => l.startsWith('  at ')) + 1);
     expect(r.beams[0]!.computed).toBe(false);
     expect(JSON.stringify(r)).not.toMatch(/NaN|Infinity/);
   });

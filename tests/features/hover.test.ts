@@ -97,6 +97,13 @@ const CASES: Case[] = [
     has: ['magnet selector', 'field = 0.45 T = 4.5 kG', '180 T/m = 18000 G/cm', '1.6693e-21 N', 'length = 8 cm = 0.08 m', 'Li7 upper'],
   },
   {
+    name: 'magnet built from sources: field and gradient of |B| where the beam line passes',
+    // Two long opposite currents ±900 A at y = ±2 mm; on their mid-plane |B| = μ0 I a/π(a² + z²) and
+    // ∂|B|/∂z = −2 μ0 I a z/π(a² + z²)² = −55.296 T/m at z = 1.5 mm (superposition of two infinite wires, textbook).
+    text: 'wire rails\n  current = 900 A\n  through = 0, 2, 0 mm\n  direction = x\n  return = 0, -2, 0 mm\nmagnet sel|ector\n  sources = rails\n  length = 8 cm\n  at = 0, 0, 1.5 mm\n',
+    has: ['magnet selector', 'built from rails', 'the beam flies through their field', '-55.296 T/m', 'length = 8 cm'],
+  },
+  {
     name: 'magnet without settings says what is missing',
     text: 'magnet emp|ty\n',
     has: ['field: not given', 'gradient: not given', 'length: not given'],

@@ -129,7 +129,7 @@ function fieldMapSummary(m: FieldMapBeam, referenceSpeed: number | undefined, sp
     flights: m.sublevels.reduce((n, s) => n + s.flights.length, 0),
     steps: m.steps,
     field_on_line_min_T: m.survey.minFieldT,
-    field_on_line_max_T: m.survey.maxFieldT,
+    field_on_line_max_T: m.survey.maxOnLineT,
     mean_gradient_T_per_m: m.survey.meanGradientTPerM.on,
     gradient_variation: m.survey.gradientVariation,
     // Infinity (a field through zero) would not survive JSON: say it with null.

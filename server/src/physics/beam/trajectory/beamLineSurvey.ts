@@ -33,6 +33,8 @@ export interface BeamLineSurvey {
   minFieldT: number;
   /** x of the weakest |B| from the magnet entrance, m. */
   minFieldAtM: number;
+  /** Largest |B| on the beam line, T. */
+  maxOnLineT: number;
   /** Largest |B| on the three lines, T (sets the range the moments are tabulated over). */
   maxFieldT: number;
   issues: BeamIssue[];
@@ -53,6 +55,7 @@ export function surveyBeamLine(input: SurveyInput): BeamLineSurvey {
   let minB = Infinity;
   let minAt = 0;
   let maxB = 0;
+  let maxOnLine = 0;
   let blocked: number | undefined;
   const sums = [0, 0, 0];
   const offsets = [-h, 0, h];
@@ -72,6 +75,7 @@ export function surveyBeamLine(input: SurveyInput): BeamLineSurvey {
         minB = m[0];
         minAt = s;
       }
+      if (o === 1) maxOnLine = Math.max(maxOnLine, m[0]);
     }
   }
   const mean = sums.map((v) => v / (n - 1));
@@ -113,6 +117,7 @@ export function surveyBeamLine(input: SurveyInput): BeamLineSurvey {
     gradientVariation: variation,
     minFieldT: Number.isFinite(minB) ? minB : 0,
     minFieldAtM: minAt,
+    maxOnLineT: maxOnLine,
     maxFieldT: maxB,
     issues,
   };
