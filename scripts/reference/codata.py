@@ -29,6 +29,7 @@ KEYS = {
     "ATOMIC_MASS_UNIT": "atomic mass constant",
     "ELECTRON_MASS_U": "electron mass in u",
     "ELECTRON_PROTON_MASS_RATIO": "electron-proton mass ratio",
+    "VACUUM_PERMEABILITY": "vacuum mag. permeability",
     "BOHR_MAGNETON_HZ_PER_T": "Bohr magneton in Hz/T",
     "NUCLEAR_MAGNETON_MHZ_PER_T": "nuclear magneton in MHz/T",
 }

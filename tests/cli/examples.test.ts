@@ -15,6 +15,8 @@ describe('sublevel check on the bundled examples', () => {
       '17:20 error name-unknown',
       '18:1 error line-parity-unchanged',
       '18:1 warning line-l-zero-zero',
+      '22:13 error source-turns-not-whole',
+      '24:3 warning source-sense-without-spacing',
     ]);
     expect(r.out).toContain("did you mean 'magnet'");
     expect(r.out).toContain("did you mean 'upper'");
@@ -33,14 +35,14 @@ describe('sublevel check on the bundled examples', () => {
     const r = cli('check', 'examples');
     expect(r.code).toBe(1);
     // Seven setups and the shared species file they may use (examples/shared/).
-    expect(r.err).toMatch(/^10 files checked: 6 errors, \d+ other findings/);
+    expect(r.err).toMatch(/^10 files checked: 7 errors, \d+ other findings/);
   });
 
   it('writes check results as JSON', () => {
     const r = cli('check', 'examples/mistakes.sublevel', '--format', 'json');
     const doc = JSON.parse(r.out);
     expect(doc.format).toBe('sublevel-check');
-    expect(doc.files[0].diagnostics.filter((d: { severity: string }) => d.severity !== 'info')).toHaveLength(8);
+    expect(doc.files[0].diagnostics.filter((d: { severity: string }) => d.severity !== 'info')).toHaveLength(10);
     // One regime note for the level (on its name), then the quadrupole on the same line.
     expect(doc.files[0].diagnostics.slice(0, 2)).toMatchObject([
       { code: 'zeeman-not-linear', line: 5, column: 9 },

@@ -135,6 +135,16 @@ function valueCompletions(c: LineContext, model: SetupModel | undefined, block: 
       return empty ? wordItems(['exact', '2'], c.replace, 'exact: CODATA |g_e|; 2: textbook fractions') : [];
     case 'settings.reduced_mass':
       return empty ? wordItems(['on', 'off'], c.replace) : [];
+    case 'coil.axis':
+    case 'solenoid.axis':
+    case 'wire.direction':
+      return empty ? wordItems(['x', 'y', 'z', '-x', '-y', '-z'], c.replace, 'a direction, or three numbers such as 0, 1, 1') : [];
+    case 'coil.sense':
+      return empty ? wordItems(['same', 'opposite'], c.replace, 'same: currents alike; opposite: a quadrupole pair') : [];
+    case 'slab.magnetisation':
+      // `1.2 T |` → along; `1.2 T along |` → a direction.
+      if (words[words.length - 1]?.text === 'along') return wordItems(['x', 'y', 'z', '-x', '-y', '-z'], c.replace, 'direction of magnetisation');
+      return words.length >= 2 && !words.some((w) => w.text === 'along') ? wordItems(['along'], c.replace) : [];
     default:
       return [];
   }

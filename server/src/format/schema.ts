@@ -36,7 +36,7 @@ export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
 export const REPEATABLE_KEYS: readonly string[] = ['point'];
 
 /** Plain words that appear inside values; never mistaken for misspelt units. */
-export const VALUE_WORDS: readonly string[] = ['oven', 'jet', 'speed', 'spread', 'apart', 'at', 'exact', 'on', 'off', 'along', 'across', 'same', 'opposite', 'x', 'y', 'z', '-x', '-y', '-z', '+x', '+y', '+z'];
+export const VALUE_WORDS: readonly string[] = ['oven', 'jet', 'speed', 'spread', 'apart', 'at', 'exact', 'on', 'off', 'along', 'across', 'same', 'opposite'];
 
 export function isBlockWord(word: string): word is BlockKind {
   return (BLOCK_WORDS as readonly string[]).includes(word);

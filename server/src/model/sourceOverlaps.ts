@@ -5,6 +5,7 @@
  * Checked pair by pair over the parts, up to a cap so that a huge file stays quick.
  */
 import type { LoopSpec, Vec3, WireSpec } from '../physics/fields/types';
+import { dot, norm as len, sub } from '../physics/fields/vec3';
 import type { ProblemList } from './problems';
 import type { FieldSourceModel } from './types';
 
@@ -12,9 +13,6 @@ const RELATIVE = 1e-9;
 /** Beyond this many parts the pairwise check is skipped (it is quadratic). */
 export const OVERLAP_CHECK_MAX_PARTS = 400;
 
-const dot = (a: Vec3, b: Vec3): number => a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
-const sub = (a: Vec3, b: Vec3): Vec3 => [a[0] - b[0], a[1] - b[1], a[2] - b[2]];
-const len = (a: Vec3): number => Math.hypot(a[0], a[1], a[2]);
 
 function sameLoop(a: LoopSpec, b: LoopSpec): boolean {
   const tol = RELATIVE * Math.max(a.radiusM, b.radiusM);

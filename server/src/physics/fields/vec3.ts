@@ -1,14 +1,8 @@
 /** Small 3-vector and 3×3 helpers for the field sources (plain tuples, no allocation tricks). */
 import type { Mat3, Vec3 } from './types';
 
-export const ZERO3: Vec3 = [0, 0, 0];
-export const ZERO33: Mat3 = [ZERO3, ZERO3, ZERO3];
-
 export function sub(a: Vec3, b: Vec3): Vec3 {
   return [a[0] - b[0], a[1] - b[1], a[2] - b[2]];
-}
-export function add(a: Vec3, b: Vec3): Vec3 {
-  return [a[0] + b[0], a[1] + b[1], a[2] + b[2]];
 }
 export function scale(a: Vec3, s: number): Vec3 {
   return [a[0] * s, a[1] * s, a[2] * s];
