@@ -132,8 +132,9 @@ function fieldMapSummary(m: FieldMapBeam, referenceSpeed: number | undefined, sp
     field_on_line_max_T: m.survey.maxOnLineT,
     mean_gradient_T_per_m: m.survey.meanGradientTPerM.on,
     gradient_variation: m.survey.gradientVariation,
-    // Infinity (a field through zero) would not survive JSON: say it with null.
-    worst_adiabaticity: Number.isFinite(m.adiabaticity) ? m.adiabaticity : null,
+    // Infinity (a field through zero) would not survive JSON: say it with null. Below 1e-12 the
+    // ratio is round-off of a field direction that does not turn: 0.
+    worst_adiabaticity: !Number.isFinite(m.adiabaticity) ? null : m.adiabaticity < 1e-12 ? 0 : m.adiabaticity,
     adiabatic_limit: ADIABATIC_LIMIT,
     forward_energy_fraction: m.forwardEnergyFraction,
     moment_table_max_T: m.tableMaxFieldT,

@@ -8,6 +8,7 @@ import type { FieldFunction, FieldSourceSpec, Vec3 } from '../../fields/types';
 import { beamIssue, type BeamIssue } from '../types';
 import { magnitudeAndGradient } from './fieldMagnitude';
 import { closestApproach } from './lineClearance';
+import { cm, um } from './messageText';
 
 export interface SurveyInput {
   field: FieldFunction;
@@ -121,12 +122,4 @@ export function surveyBeamLine(input: SurveyInput): BeamLineSurvey {
     maxFieldT: maxB,
     issues,
   };
-}
-
-function um(x: number): string {
-  return `${Number((x * 1e6).toPrecision(3))} µm`;
-}
-
-function cm(x: number): string {
-  return `${Number((x * 100).toPrecision(3))} cm`;
 }

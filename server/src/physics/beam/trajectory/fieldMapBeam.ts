@@ -11,6 +11,7 @@ import type { FieldFunction, FieldSourceSpec, Vec3 } from '../../fields/types';
 import { beamIssue, type BeamIssue } from '../types';
 import { surveyBeamLine, type BeamLineSurvey } from './beamLineSurvey';
 import { ADIABATIC_LIMIT, flySublevel, type Flight, type FlightOptions } from './flight';
+import { cm, tesla } from './messageText';
 import { sublevelCurves, type SublevelCurves } from './sublevelCurves';
 
 export interface FieldMapInput {
@@ -170,7 +171,7 @@ function finish(out: FieldMapBeam, sublevels: FieldMapSublevel[], input: FieldMa
       beamIssue(
         'warning',
         'magnet-spin-flip-risk',
-        `|B| falls to ${tesla(f.minFieldT)} ${cm(f.minFieldAtM)} into the magnet and the field turns ${Number.isFinite(worstAdiabatic.ratio) ? `${worstAdiabatic.ratio.toPrecision(2)} times` : 'many times'} faster than the Larmor precession of ${worstAdiabatic.label} (it should stay below ${ADIABATIC_LIMIT}): atoms may flip to other sublevels there, which the peaks do not include.`,
+        `|B| falls to ${tesla(f.minFieldT)} ${cm(f.minFieldAtM)} into the magnet, and the field's direction turns ${Number.isFinite(worstAdiabatic.ratio) ? `at ${worstAdiabatic.ratio.toPrecision(2)} times the Larmor precession rate` : 'while the field passes through zero, faster than the Larmor precession'} of ${worstAdiabatic.label} (it should stay below ${ADIABATIC_LIMIT} times): atoms may flip to other sublevels there, which the peaks do not include.`,
       ),
     );
   }
@@ -193,13 +194,4 @@ function finish(out: FieldMapBeam, sublevels: FieldMapSublevel[], input: FieldMa
     );
   }
   return out;
-}
-
-function tesla(b: number): string {
-  if (b >= 1e-3) return `${Number((b * 1e3).toPrecision(3))} mT`;
-  return b >= 1e-7 ? `${Number((b * 1e4).toPrecision(3))} G` : 'below 1 mG';
-}
-
-function cm(x: number): string {
-  return `${Number((x * 100).toPrecision(3))} cm`;
 }

@@ -16,6 +16,7 @@ import { PLANCK_H } from '../../constants';
 import type { FieldFunction, FieldSample, Vec3 } from '../../fields/types';
 import { beamIssue, type BeamIssue } from '../types';
 import { directionTurnRate, magnitudeAndGradient } from './fieldMagnitude';
+import { cm } from './messageText';
 import { dormandPrince, rungeKutta4, type StepperResult } from './steppers';
 import type { SublevelCurves } from './sublevelCurves';
 
@@ -148,7 +149,7 @@ export function flySublevel(setup: FlightSetup, state: number, speed: number, op
   const exit: TransverseState = { yM: u[0], zM: u[1], angleY: u[2], angleZ: u[3] };
   const detector: TransverseState = { yM: u[0] + u[2] * driftM, zM: u[1] + u[3] * driftM, angleY: u[2], angleZ: u[3] };
   if (!run.ok) {
-    const where = `${((run.stoppedAtS ?? 0) * 100).toPrecision(3)} cm into the magnet`;
+    const where = `${cm(run.stoppedAtS ?? 0)} into the magnet`;
     if (beyond) issues.push(beamIssue('error', 'trajectory-field-beyond-table', `The field along the path exceeds the ${curves.maxFieldT} T the moments were tabulated for (${where}).`));
     else if (run.reason === 'derivative') issues.push(beamIssue('error', 'trajectory-meets-source', `The atom's path runs into a field source ${where}: the field is not defined there.`));
     else issues.push(beamIssue('error', 'trajectory-not-converged', `The trajectory integration did not converge (${run.reason} ${where}).`));
