@@ -26,6 +26,7 @@ const BENCHMARKS = [
   { name: 'field-map', entry: 'bench/fieldMap.bench.ts', call: 'runFieldMapBench', about: 'field-map figure and a 201 × 201 `sublevel field` grid against the summed field alone' },
   { name: 'slower', entry: 'bench/slower.bench.ts', call: 'runSlowerBench', about: 'a whole slower (profile, check, flight) and a 40-section coil design, against one exact solve' },
   { name: 'trap', entry: 'bench/trap.bench.ts', call: 'runTrapBench', about: 'trap summary of the 87Rb ground level (8 sublevels): quadrupole, Ioffe–Pritchard' },
+  { name: 'trajectory', entry: 'bench/trajectory.bench.ts', call: 'runTrajectoryBench', about: 'one sublevel through a 200-step field map against the analytic deflection' },
 ];
 
 const TMP = '.bench-tmp';

@@ -97,8 +97,8 @@ describe('panel HTML', () => {
     expect(html).not.toMatch(/\son\w+=/);
   });
 
-  it('offers the six views, three exports and the field and range choices', () => {
-    expect(html.match(/role="tab"/g)).toHaveLength(6);
+  it('offers the seven views, three exports and the field and range choices', () => {
+    expect(html.match(/role="tab"/g)).toHaveLength(7);
     expect(html).toContain('data-view="fieldmap"');
     expect(html).toContain('data-view="slower"');
     expect(html).toContain('data-view="resonance"');

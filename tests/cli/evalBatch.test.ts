@@ -70,6 +70,7 @@ describe('sublevel eval on many files (in-process, one thread)', () => {
       'examples/shared/alkali-levels.sublevel',
       'examples/shared-species-demo.sublevel',
       'examples/sodium-slower.sublevel',
+      'examples/two-wire-magnet.sublevel',
     ]);
     expect(jsonl(cli('eval', '--files-from', list, '--format', 'jsonl').out).map((l) => l.file)).toEqual([LI, RB]);
   });

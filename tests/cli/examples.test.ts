@@ -24,7 +24,7 @@ describe('sublevel check on the bundled examples', () => {
   });
 
   it('finds the demo setups clean (no errors, no warnings; notes allowed)', () => {
-    for (const f of ['lithium-beam', 'rubidium-bias', 'handmade-species', 'shared-species-demo', 'shared/alkali-levels', 'lithium-whole-term', 'fit-rubidium', 'rubidium-spectrum', 'coils-and-wires', 'sodium-slower', 'quadrupole-trap']) {
+    for (const f of ['lithium-beam', 'rubidium-bias', 'handmade-species', 'shared-species-demo', 'shared/alkali-levels', 'lithium-whole-term', 'fit-rubidium', 'rubidium-spectrum', 'coils-and-wires', 'sodium-slower', 'quadrupole-trap', 'two-wire-magnet']) {
       const r = cli('check', `examples/${f}.sublevel`);
       expect(r.out.split('\n').filter((l) => / (error|warning) /.test(l)), f).toEqual([]);
       expect(r.code, f).toBe(0);
@@ -35,7 +35,7 @@ describe('sublevel check on the bundled examples', () => {
     const r = cli('check', 'examples');
     expect(r.code).toBe(1);
     // Seven setups and the shared species file they may use (examples/shared/).
-    expect(r.err).toMatch(/^12 files checked: 7 errors, \d+ other findings/);
+    expect(r.err).toMatch(/^13 files checked: 7 errors, \d+ other findings/);
   });
 
   it('writes check results as JSON', () => {

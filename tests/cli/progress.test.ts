@@ -53,10 +53,10 @@ describe('progress bar', () => {
       const err: string[] = [];
       const code = await startCli(['eval', 'examples', '--format', 'jsonl'], { out: (l) => out.push(l), err: (l) => err.push(l) }, { progress: s });
       expect(code).toBe(1); // examples/mistakes.sublevel
-      expect(out).toHaveLength(10);
-      expect(err).toEqual(['10 files evaluated: 1 with errors or not read']);
+      expect(out).toHaveLength(13);
+      expect(err).toEqual(['13 files evaluated: 1 with errors or not read']);
       if (isTTY) {
-        expect(s.written.some((w) => /^\reval \[[#-]{30}\] [0-9]+\/10\x1b\[K$/.test(w))).toBe(true);
+        expect(s.written.some((w) => /^\reval \[[#-]{30}\] [0-9]+\/13\x1b\[K$/.test(w))).toBe(true);
         expect(s.written.at(-1)).toBe('\r\x1b[K');
       } else expect(s.written).toEqual([]);
     }

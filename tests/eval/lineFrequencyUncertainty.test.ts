@@ -58,8 +58,8 @@ describe('absolute line frequencies', () => {
     for (const c of line.at_fields[0]!.components) expect(c.absolute_Hz_unc).toBeUndefined();
   });
 
-  it('the text report prints the centre with its uncertainty (one digit: it starts with 6)', () => {
+  it('the text report prints the centre with its uncertainty (two digits, GUM 7.2.6)', () => {
     const r = analyze(setup('384.2304844685(62) THz')).result!;
-    expect(textReport('x.sublevel', r).join('\n')).toContain('line centre 384.230484468(6) THz');
+    expect(textReport('x.sublevel', r).join('\n')).toContain('line centre 384.2304844685(62) THz');
   });
 });

@@ -32,7 +32,7 @@ const CASES: Case[] = [
     // Li-7 2s A = 401.752 MHz (Arimondo, Inguscio & Violino 1977) → ΔE(F=1↔2) = 2A = 803.504 MHz.
     text: `species Li7\n  level gro|und: 2s 2S1/2\n`,
     // The built-in A carries its uncertainty (0.5 kHz; from memory of the same review), so does 2A.
-    has: ['Hyperfine structure', 'A = 401.7520433(5) MHz', 'F = 1 ↔ 2: 803.5040866(10) MHz', '| F | E/h at zero field | g_F |'],
+    has: ['Hyperfine structure', 'A = 401.75204330(50) MHz', 'F = 1 ↔ 2: 803.5040866(10) MHz', '| F | E/h at zero field | g_F |'],
   },
   {
     name: 'sodium ground splitting from the built-in A',
@@ -96,6 +96,13 @@ const CASES: Case[] = [
     // 180 T/m = 18 000 G/cm (1 G = 1e-4 T, 1 cm = 1e-2 m); μ_B·180 T/m = 1.6693e-21 N (μ_B from CODATA 2022).
     text: `${LI}magnet sel|ector\n  field = 0.45 T\n  gradient = 180 T/m\n  length = 8 cm\n`,
     has: ['magnet selector', 'field = 0.45 T = 4.5 kG', '180 T/m = 18000 G/cm', '1.6693e-21 N', 'length = 8 cm = 0.08 m', 'Li7 upper'],
+  },
+  {
+    name: 'magnet built from sources: field and gradient of |B| where the beam line passes',
+    // Two long opposite currents ±900 A at y = ±2 mm; on their mid-plane |B| = μ0 I a/π(a² + z²) and
+    // ∂|B|/∂z = −2 μ0 I a z/π(a² + z²)² = −55.296 T/m at z = 1.5 mm (superposition of two infinite wires, textbook).
+    text: 'wire rails\n  current = 900 A\n  through = 0, 2, 0 mm\n  direction = x\n  return = 0, -2, 0 mm\nmagnet sel|ector\n  sources = rails\n  length = 8 cm\n  at = 0, 0, 1.5 mm\n',
+    has: ['magnet selector', 'built from rails', 'the beam flies through their field', '-55.296 T/m', 'length = 8 cm'],
   },
   {
     name: 'magnet without settings says what is missing',
@@ -304,7 +311,7 @@ describe('hover on a beam', () => {
     // At 1 T the Li-7 ground level (hyperfine 803.5 MHz ≪ μ_B·B/h ≈ 14 GHz) is decoupled: its
     // |F=1, m_F=+1> is |m_J=-1/2, m_I=+3/2> (adiabatic connection, m_F = m_J + m_I).
     // The moment and deflection carry the built-in constants' uncertainties (A, g_J, g_I of Li-7).
-    expect(shown).toContain(`| m_J=-1/2, m_I=+3/2 | 1.0026242(4) | 0.125 | ${(z * 1000).toPrecision(8)}(15) mm |`);
+    expect(shown).toContain(`| m_J=-1/2, m_I=+3/2 | 1.00262417(35) | 0.125 | ${(z * 1000).toPrecision(8)}(15) mm |`);
     expect(shown).toContain('| sublevel (strong-field label) |');
     // Each peak names its sublevels.
     expect(shown).toMatch(/\| 4\.39 mm \| \S+ µm \| m_J=-1\/2, m_I=\+3\/2 \|/);

@@ -2,7 +2,7 @@
 import { spectrumWidthsText } from '../eval/spectrumEvaluation';
 import { ATOMIC_MASS_UNIT, BOHR_RADIUS, SPEED_OF_LIGHT } from '../physics/constants';
 import { halfText } from '../eval/halves';
-import { curvatureText, frequencyText, gradientText, lengthText, percentText, sensitivityText, speedText, trimNumber, withUncertainty } from '../eval/quantityText';
+import { curvatureText, fieldText, frequencyText, gradientText, lengthText, percentText, sensitivityText, speedText, trimNumber, withUncertainty } from '../eval/quantityText';
 import { beamPositionNoise, DIP_NOISE, SENSITIVITY_NOISE } from '../eval/noiseFloors';
 import { polarizationSymbol } from '../eval/polarizationName';
 import { fieldInUnit, inWrittenUnit, workingFieldUnit } from '../eval/writtenUnit';
@@ -219,6 +219,7 @@ function beamReport(b: BeamResult): string[] {
   if (b.speeds) {
     out.push(`  speeds: most probable ${speedText(b.speeds.most_probable_m_per_s)}, mean ${speedText(b.speeds.mean_m_per_s)}, rms spread ${speedText(b.speeds.rms_spread_m_per_s, 3)}`);
   }
+  if (b.field_map) out.push(...fieldMapLines(b.field_map));
   const noise = beamPositionNoise(b);
   out.push(
     ...table(
@@ -240,6 +241,16 @@ function beamReport(b: BeamResult): string[] {
   out.push('  cautions:');
   for (const c of b.cautions) out.push(`    - ${c}`);
   return out;
+}
+
+/** How a field-map beam's deflections were made (docs/beam.md §7). */
+function fieldMapLines(m: NonNullable<BeamResult['field_map']>): string[] {
+  const ratio = m.worst_adiabaticity;
+  const adiabatic = ratio === null ? 'the field passes through zero' : `${ratio < 1e-3 ? 'below 0.001' : trimNumber(ratio, 2)} (limit ${trimNumber(m.adiabatic_limit, 2)})`;
+  return [
+    `  deflections from ${m.flights} flights through the sources' field (field map), peaks at the reference speed ${speedText(m.reference_speed_m_per_s)}`,
+    `  |B| on the beam line ${fieldText(m.field_on_line_min_T, 4)} … ${fieldText(m.field_on_line_max_T, 4)}; mean ∂|B|/∂z ${gradientText(m.mean_gradient_T_per_m, 4)}, changing ${percentText(m.gradient_variation, 2)} across the beam; field turning rate / Larmor frequency ${adiabatic}`,
+  ];
 }
 
 type FieldSource = { kind: 'field' | 'magnet'; name: string };

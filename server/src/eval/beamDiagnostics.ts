@@ -10,8 +10,16 @@ import { EVAL_RULES } from './evalCodes';
 export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
   const out: Problem[] = [];
   for (const i of e.issues) {
-    const where = i.code.includes('detector') ? beam.detectorM?.range : i.code.includes('slit') ? beam.slits?.range : undefined;
-    out.push({ code: i.code, severity: i.severity, message: `beam '${beam.name}': ${i.message}`, range: where ?? beam.nameRange });
+    // Findings about a magnet built from sources go on its `at` (or `sources`) setting, with the beam related.
+    const onMagnet = /^(?:magnet|trajectory)-/.test(i.code) ? beam.magnet?.atM?.range ?? beam.magnet?.fieldT?.range : undefined;
+    const where = i.code.includes('detector') ? beam.detectorM?.range : i.code.includes('slit') ? beam.slits?.range : onMagnet;
+    out.push({
+      code: i.code,
+      severity: i.severity,
+      message: `beam '${beam.name}': ${i.message}`,
+      range: where ?? beam.nameRange,
+      ...(onMagnet ? { related: [{ message: `beam '${beam.name}' flies through this magnet`, range: beam.nameRange }] } : {}),
+    });
   }
   const r = e.result;
   if (!r.computed || r.all_resolved !== false) return out;

@@ -12,10 +12,12 @@ import {
   type DetectorPattern,
 } from '../physics/beam';
 import { BOHR_MAGNETON } from '../physics/constants';
+import { ADIABATIC_LIMIT, fieldMapPattern, type FieldMapBeam } from '../physics/beam/trajectory';
 import type { BeamModel } from '../model/types';
 import { beamInputs } from './beamInput';
+import { magnetFieldMap } from './magnetFieldMap';
 import { resolvingAdvice } from './resolvingAdvice';
-import type { BeamResult, ResolvingChange } from './resultTypes';
+import type { BeamResult, BeamSublevelResult, ResolvingChange } from './resultTypes';
 
 const CHANGE_NAME: Record<AdviceParameter, ResolvingChange> = {
   gradient: 'gradient',
@@ -56,8 +58,20 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
   };
   const inputs = beamInputs(beam, gJOf);
   if (!inputs) return { result: base, issues: [] };
-  const pattern = detectorPattern(inputs.input);
-  const issues = pattern.issues.map((i) => ({ ...i }));
+  // A magnet built from sources: every sublevel flies through the real field (physics/beam/trajectory/).
+  const map = magnetFieldMap(beam.magnet);
+  let patternInput = inputs.input;
+  let fieldMap: FieldMapBeam | undefined;
+  if (map) {
+    const mapped = fieldMapPattern({ pattern: inputs.input, field: map.field, centre: map.centre, obstacles: map.obstacles, spec: inputs.spec, labels: inputs.input.sublevels.map((s) => s.label) });
+    patternInput = mapped.pattern;
+    fieldMap = mapped.fieldMap;
+    base.deflection_model = 'field-map';
+    if (fieldMap?.issues.some((i) => i.severity === 'error')) return { result: base, issues: fieldMap.issues.map((i) => ({ ...i })) };
+    if (fieldMap) base.field_map = fieldMapSummary(fieldMap, mapped.referenceSpeed, mapped.speeds);
+  }
+  const pattern = detectorPattern(patternInput);
+  const issues = [...(fieldMap?.issues ?? []), ...pattern.issues].map((i) => ({ ...i }));
   if (issues.some((i) => i.severity === 'error')) return { result: base, issues };
 
   const result: BeamResult = {
@@ -80,6 +94,7 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
       mean_deflection_m: s.meanDeflectionM,
       // An unpopulated sublevel sends no atoms, so it has no peak.
       peak_m: Number.isFinite(s.peakM) ? s.peakM : null,
+      ...(fieldMap ? { field_map: sublevelFlight(fieldMap, i) } : {}),
     })),
     peaks: pattern.peaks.map((p) => ({ position_m: p.positionM, fwhm_m: p.fwhmM, height_per_m: p.height, members: p.members })),
     pairs: pattern.pairs.map((p) => ({ left: p.left, right: p.right, dip_ratio: p.dipRatio, resolved: p.resolved })),
@@ -88,16 +103,53 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
   };
   if (pattern.detectorFraction !== undefined) result.detector_fraction = pattern.detectorFraction;
   if (searchResolving && !pattern.allResolved && pattern.peaks.length > 1) {
-    const found = resolvingOptions(inputs.input, pattern);
+    // A field-map magnet's deflections come from its flights: only changes that leave them alone are tried.
+    const found = resolvingOptions(patternInput, pattern, fieldMap ? ['slits', 'detector', 'speedSpread'] : undefined);
     const options = found.options.map((o) => ({ change: CHANGE_NAME[o.parameter], value: o.value, worst_dip_ratio: o.worstDipRatio, resolves_all: o.resolvesAll }));
     const resolving = (change: ResolvingChange): number | null => options.find((o) => o.change === change && o.resolves_all)?.value ?? null;
-    result.resolving_gradient_T_per_m = resolving('gradient');
-    result.resolving_magnet_length_m = resolving('magnet_length');
-    result.resolving_drift_m = resolving('drift');
+    if (!fieldMap) {
+      result.resolving_gradient_T_per_m = resolving('gradient');
+      result.resolving_magnet_length_m = resolving('magnet_length');
+      result.resolving_drift_m = resolving('drift');
+    }
     result.worst_dip_ratio = found.presentWorstDipRatio;
     result.resolving_options = options;
-    const advice = resolvingAdvice(result, inputs.input.geometry);
+    const advice = resolvingAdvice(result, patternInput.geometry);
     if (advice) result.resolving_advice = advice;
   }
   return { result, pattern, issues };
+}
+
+/** The flights behind a field-map beam's peaks, for the JSON document and the report. */
+function fieldMapSummary(m: FieldMapBeam, referenceSpeed: number | undefined, speeds: number[] | undefined): NonNullable<BeamResult['field_map']> {
+  return {
+    integrator: 'dormand-prince-5(4), constant forward speed, adiabatic sublevels',
+    reference_speed_m_per_s: referenceSpeed ?? 0,
+    speeds_m_per_s: speeds ?? [],
+    flights: m.sublevels.reduce((n, s) => n + s.flights.length, 0),
+    steps: m.steps,
+    field_on_line_min_T: m.survey.minFieldT,
+    field_on_line_max_T: m.survey.maxOnLineT,
+    mean_gradient_T_per_m: m.survey.meanGradientTPerM.on,
+    gradient_variation: m.survey.gradientVariation,
+    // Infinity (a field through zero) would not survive JSON: say it with null. Below 1e-12 the
+    // ratio is round-off of a field direction that does not turn: 0.
+    worst_adiabaticity: !Number.isFinite(m.adiabaticity) ? null : m.adiabaticity < 1e-12 ? 0 : m.adiabaticity,
+    adiabatic_limit: ADIABATIC_LIMIT,
+    forward_energy_fraction: m.forwardEnergyFraction,
+    moment_table_max_T: m.tableMaxFieldT,
+    moment_table_error_J_per_T: m.tableErrorJT,
+  };
+}
+
+function sublevelFlight(m: FieldMapBeam, i: number): NonNullable<BeamSublevelResult['field_map']> {
+  const s = m.sublevels[i];
+  const ref = s?.flights[0];
+  return {
+    coefficient_m3_per_s2: s?.coefficientM3PerS2 ?? 0,
+    inverse_square_departure: s?.coefficientSpread ?? 0,
+    exit_angle_rad: ref?.flight.exit.angleZ ?? 0,
+    detector_z_m: ref?.flight.detector.zM ?? 0,
+    detector_y_m: ref?.flight.detector.yM ?? 0,
+  };
 }

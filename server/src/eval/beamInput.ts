@@ -4,7 +4,7 @@
  */
 import type { GJLookup } from './gJLookup';
 import type { BeamGeometry, PatternInput, SpeedDistribution } from '../physics/beam';
-import { solveLevel, type SublevelState } from '../physics/engine';
+import { solveLevel, type HyperfineLevelSpec, type SublevelState } from '../physics/engine';
 import type { BeamModel, BeamSource } from '../model/types';
 import { hyperfineSpec } from './levelSpec';
 
@@ -12,6 +12,8 @@ export interface BeamInputs {
   input: PatternInput;
   /** High-field label of each sublevel, same order as input.sublevels. */
   highLabels: string[];
+  /** The level as the engine sees it (a magnet built from sources flies its sublevels through the field). */
+  spec: HyperfineLevelSpec;
 }
 
 /** Undefined when the beam lacks something it needs (the model has reported what). */
@@ -44,6 +46,7 @@ export function beamInputs(beam: BeamModel, gJOf: GJLookup): BeamInputs | undefi
       sublevels: solved.states.map((s) => ({ label: s.low.text, momentJT: s.momentJT, population: populationOf(beam, s) })),
     },
     highLabels: solved.states.map((s) => s.high.text),
+    spec,
   };
 }
 

@@ -114,6 +114,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
       ...(m.fieldT ? { field_T: m.fieldT.value, ...unitOf('field_unit', m.fieldT) } : {}),
       ...(m.gradientTPerM ? { gradient_T_per_m: m.gradientTPerM.value, ...unitOf('gradient_unit', m.gradientTPerM) } : {}),
       ...(m.lengthM ? { length_m: m.lengthM.value, ...unitOf('length_unit', m.lengthM) } : {}),
+      ...(m.sources ? { sources: m.sources.map((x) => x.name), at_m: [...(m.atM?.value ?? [0, 0, 0])] as [number, number, number] } : {}),
     })),
     beams,
     lines,

@@ -164,6 +164,9 @@ function fitProfile(f: FitRequestModel, gJOf: GJLookup, report: Report, failed: 
     if (d.beam) report('fit-not-possible', `beam '${d.beam.name}' is not complete enough to predict a pattern (see its own problems)`, f.nameRange);
     return out;
   }
+  if (d.beam?.magnet?.sources) {
+    report('fit-not-possible', `magnet '${d.beam.magnet.name}' is built from sources: the fit uses the uniform-gradient model with their field and gradient at the beam line, not the flights through their field`, f.nameRange, 'warning');
+  }
   const free = f.free.map((p) => p.name as ProfileParameter);
   if (free.includes('temperature') && inputs.input.source.kind !== 'effusive') {
     report('fit-not-possible', 'temperature can be fitted only for an oven source', f.free.find((p) => p.name === 'temperature')!.range);

@@ -13,6 +13,9 @@ type Option = NonNullable<BeamResult['resolving_options']>[number];
 export function resolvingAdvice(r: BeamResult, geometry: BeamGeometry): string | undefined {
   if (!r.computed || r.all_resolved !== false || r.resolving_options === undefined || r.worst_dip_ratio === undefined) return undefined;
   const now = percentText(r.worst_dip_ratio, 2);
+  if (r.resolving_options.length === 0 && r.deflection_model === 'field-map') {
+    return `The worst dip is ${now}; no narrower slits or detector and no narrower speed spread deepens it. The magnet is built from sources: change their currents or geometry (or the drift) and evaluate again.`;
+  }
   if (r.resolving_options.length === 0) {
     return `The worst dip is ${now}; no gradient, magnet length or drift up to 100 times the present one, no narrower slits or detector and no narrower speed spread deepens it.`;
   }

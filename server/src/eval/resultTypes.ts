@@ -189,6 +189,10 @@ export interface MagnetResult {
   field_unit?: string;
   gradient_unit?: string;
   length_unit?: string;
+  /** A magnet built from sources: their names; field_T and gradient_T_per_m are then |B| and ∂|B|/∂z at `at_m` (docs/beam.md §7). */
+  sources?: string[];
+  /** Where the beam line (along +x) passes the magnet's centre, m. */
+  at_m?: [number, number, number];
 }
 
 export interface BeamSublevelResult {
@@ -208,6 +212,18 @@ export interface BeamSublevelResult {
   /** Maximum of this sublevel's own profile; null when it has no atoms (population 0). */
   peak_m: number | null;
   peak_m_unc?: number;
+  /** A magnet built from sources: this sublevel's flight at the reference speed (docs/beam.md). */
+  field_map?: {
+    /** k in z = k/v² at the reference speed (z at the detector × v²), m³/s². */
+    coefficient_m3_per_s2: number;
+    /** Largest |k(v)/k(v_ref) − 1| at the slow and fast ends of the speed law. */
+    inverse_square_departure: number;
+    /** dz/dx at the magnet exit, rad. */
+    exit_angle_rad: number;
+    /** Position at the detector plane from the beam line, m (z: the deflection axis; y: sideways). */
+    detector_z_m: number;
+    detector_y_m: number;
+  };
 }
 
 export type ResolvingChange = 'gradient' | 'magnet_length' | 'drift' | 'slits' | 'detector' | 'speed_spread';
@@ -246,6 +262,33 @@ export interface BeamResult {
   detector_fraction?: number;
   /** Flux fraction that falls outside the computed pattern (slow tail). */
   off_grid_fraction?: number;
+  /** 'field-map' when the magnet is built from sources and the peaks come from integrated flights; absent: the uniform-gradient model. */
+  deflection_model?: 'field-map';
+  /** How the field-map flights were made (only with deflection_model 'field-map'). */
+  field_map?: {
+    integrator: string;
+    /** v_ref = ⟨1/v²⟩^(−1/2), m/s; the peaks use each sublevel's k at this speed. */
+    reference_speed_m_per_s: number;
+    /** Every speed flown (the reference first, then the 5 % and 95 % flux points), m/s. */
+    speeds_m_per_s: number[];
+    flights: number;
+    steps: number;
+    /** |B| along the beam line through the magnet, T. */
+    field_on_line_min_T: number;
+    field_on_line_max_T: number;
+    /** ∂|B|/∂z averaged along the magnet on the beam line, T/m. */
+    mean_gradient_T_per_m: number;
+    /** Largest relative change of that average at ± the beam's half height. */
+    gradient_variation: number;
+    /** Largest (field-direction turning rate)/(Larmor angular frequency) met; null: the field passes through zero. */
+    worst_adiabaticity: number | null;
+    adiabatic_limit: number;
+    /** Largest span of a sublevel's energy along its path over ½Mv² (the constant-forward-speed approximation). */
+    forward_energy_fraction: number;
+    /** Field range of the tabulated sublevel moments, T, and the table's largest moment error at its interval midpoints, J/T. */
+    moment_table_max_T: number;
+    moment_table_error_J_per_T: number;
+  };
   cautions: string[];
 }
 

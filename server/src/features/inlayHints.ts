@@ -8,7 +8,7 @@
 import { type InlayHint, InlayHintKind, type Position, type Range } from 'vscode-languageserver-types';
 import type { Analysis } from '../eval/analyze';
 import { halfText } from '../eval/halves';
-import { frequencyText, prefixedText, trimNumber, withUncertainty } from '../eval/quantityText';
+import { fieldText, frequencyText, gradientText, prefixedText, trimNumber, withUncertainty } from '../eval/quantityText';
 import type { BlockNode, LevelNode } from '../format/ast';
 import { comparePositions } from '../format/positions';
 import type { SetupModel } from '../model/types';
@@ -74,6 +74,11 @@ function blockHints(analysis: Analysis, model: SetupModel, block: BlockNode, out
       if (m.fieldT && fieldSetting) out.push(hint(fieldSetting.range.end, `μ_B·B/h ${frequencyText(zeemanScaleHz(m.fieldT.value), 5)}`, 'Zeeman scale: shift of a sublevel with g·m = 1'));
       const gradSetting = block.settings.find((s) => s.key.text === 'gradient');
       if (m.gradientTPerM && gradSetting) out.push(hint(gradSetting.range.end, `μ_B·b ${prefixedText(bohrForceN(m.gradientTPerM.value), 'N', { digits: 4 })}`, 'force on a moment of one Bohr magneton'));
+      // Built from sources: what they make where the beam line passes.
+      const sourcesSetting = block.settings.find((s) => s.key.text === 'sources');
+      if (m.sources && sourcesSetting && m.fieldT && m.gradientTPerM) {
+        out.push(hint(sourcesSetting.range.end, `|B| ${fieldText(m.fieldT.value, 4)}, ∂|B|/∂z ${gradientText(m.gradientTPerM.value, 4)}`, 'field and gradient of the sources where the beam line passes (`at`)'));
+      }
       break;
     }
     case 'beam': {

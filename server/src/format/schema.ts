@@ -18,7 +18,7 @@ export const LEVEL_KEYS: readonly string[] = ['A', 'B', 'C', 'g_J', 'energy', 'z
 export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
   species: ['mass', 'I', 'g_I', 'mu_I'],
   field: [],
-  magnet: ['field', 'gradient', 'length'],
+  magnet: ['field', 'gradient', 'length', 'sources', 'at'],
   beam: ['species', 'level', 'source', 'slits', 'magnet', 'drift', 'detector', 'populations'],
   line: ['spectrum', 'light', 'doppler', 'instrument', 'span', 'points'],
   resonance: ['level', 'lower', 'upper', 'frequency', 'range', 'two_photon'],

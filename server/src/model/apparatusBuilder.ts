@@ -5,7 +5,8 @@ import { physicalField } from './fieldRange';
 import { NameIndex, resolveLevel } from './nameIndex';
 import type { ProblemList } from './problems';
 import { readPartQuantity, readSettingQuantity, singlePart } from './settingReaders';
-import type { BeamModel, BeamSource, FieldModel, MagnetModel, NameUse, SpeciesModel, Valued } from './types';
+import { readMagnetSources } from './magnetSources';
+import type { BeamModel, BeamSource, FieldModel, FieldSourceModel, MagnetModel, NameUse, SpeciesModel, Valued } from './types';
 
 export function buildField(node: BlockNode, problems: ProblemList): FieldModel | undefined {
   if (!node.name) {
@@ -23,7 +24,7 @@ export function buildField(node: BlockNode, problems: ProblemList): FieldModel |
   return field;
 }
 
-export function buildMagnet(node: BlockNode, problems: ProblemList): MagnetModel | undefined {
+export function buildMagnet(node: BlockNode, problems: ProblemList, index?: { sources: NameIndex<FieldSourceModel> }): MagnetModel | undefined {
   if (!node.name) {
     problems.add('name-missing', 'a magnet needs a name, as in `magnet selector`', node.keyword.range);
     return undefined;
@@ -50,9 +51,12 @@ export function buildMagnet(node: BlockNode, problems: ProblemList): MagnetModel
         break;
     }
   }
-  const missing = (['field', 'gradient', 'length'] as const).filter((k) => !node.settings.some((s) => s.key.text === k));
+  if (index) readMagnetSources(node, magnet, index, problems);
+  const built = node.settings.some((s) => s.key.text === 'sources');
+  const needed = built ? (['sources', 'length'] as const) : (['field', 'gradient', 'length'] as const);
+  const missing = needed.filter((k) => !node.settings.some((s) => s.key.text === k));
   if (missing.length > 0) {
-    problems.add('magnet-incomplete', `magnet '${magnet.name}' has no ${missing.join(', ')}; deflections need all three`, node.name.range, {
+    problems.add('magnet-incomplete', `magnet '${magnet.name}' has no ${missing.join(', ')}; deflections need ${built ? 'both' : 'all three'}`, node.name.range, {
       data: { missing },
     });
   }

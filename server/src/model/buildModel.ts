@@ -65,7 +65,9 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
         break;
       }
       case 'magnet': {
-        const m = memo.build(block, names, problems, (_u, p) => buildMagnet(block, p));
+        // A magnet built from sources reads their blocks too, so it is not memoised with its own block.
+        const fromSources = block.settings.some((s) => s.key.text === 'sources');
+        const m = fromSources ? buildMagnet(block, problems, { sources: fieldSources }) : memo.build(block, names, problems, (_u, p) => buildMagnet(block, p));
         if (m) magnets.declare(m, problems);
         break;
       }

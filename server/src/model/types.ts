@@ -147,9 +147,15 @@ export interface MagnetModel {
   name: string;
   node: BlockNode;
   nameRange: Range;
+  /** Written, or with `sources` |B| at the beam line's centre taken from them (source 'sources …'). */
   fieldT?: Valued<number>;
+  /** Written, or with `sources` ∂|B|/∂z at the beam line's centre. */
   gradientTPerM?: Valued<number>;
   lengthM?: Valued<number>;
+  /** The field sources the magnet is built from (`sources = …`); the beam then flies through their field (docs/beam.md §7). */
+  sources?: FieldSourceModel[];
+  /** Where the beam line (along +x) passes the middle of the magnet (`at`), m; default the origin. */
+  atM?: Valued<Vec3>;
 }
 
 export type BeamSource =

@@ -149,6 +149,18 @@ export const PHYSICS_RULES = {
   'trap-cut-above-depth': { severity: 'warning', summary: 'An RF cut above the depth of every trapped sublevel: the knife cuts nothing.' },
   'trap-turning-point': { severity: 'info', summary: 'The depth is set where the sublevel turns high-field seeking, not by the edge.' },
   'trap-not-harmonic': { severity: 'info', summary: 'A minimum that is flat in some direction: no harmonic frequencies.' },
+  // Beam flight through a field map (beam/trajectory/).
+  'trajectory-field-range-invalid': { severity: 'error', summary: 'A field range for the sublevel moments that is not a positive number of tesla.' },
+  'trajectory-level-unusable': { severity: 'error', summary: 'The engine cannot tabulate this level’s sublevel energies for a trajectory.' },
+  'trajectory-level-note': { severity: 'warning', summary: 'A note from the engine while tabulating the sublevel energies for a trajectory.' },
+  'trajectory-field-beyond-table': { severity: 'error', summary: 'The field along a path exceeds the range the sublevel moments were tabulated for.' },
+  'trajectory-meets-source': { severity: 'error', summary: 'An atom’s path runs into a field source, where the field is not defined.' },
+  'trajectory-not-converged': { severity: 'error', summary: 'The trajectory integration did not converge.' },
+  'magnet-line-meets-source': { severity: 'error', summary: 'A magnet’s beam line runs through one of its field sources.' },
+  'magnet-gradient-uneven': { severity: 'warning', summary: 'The gradient of a magnet built from sources changes too much across the beam height for one deflection per sublevel.' },
+  'magnet-spin-flip-risk': { severity: 'warning', summary: 'The field along the beam turns too fast for its strength: atoms may leave their sublevel.' },
+  'magnet-deflection-not-inverse-square': { severity: 'info', summary: 'In a non-uniform field the deflection departs from z ∝ 1/v² across the speeds.' },
+  'magnet-forward-speed-changes': { severity: 'warning', summary: 'The sublevel energy changes enough through the magnet to alter the forward speed.' },
   // Field sources (fields/).
   'source-invalid-part': { severity: 'error', summary: 'A coil, solenoid, wire or block part with a size, direction or current the field formulas cannot use.' },
   'source-point-on-loop': { severity: 'warning', summary: 'A field point on the wire of a loop, where a thin loop has no field.' },

@@ -37,6 +37,7 @@ const FAMILY_HELP: readonly [RegExp, string][] = [
   [/^(?:species|level|zeta|term|hyperfine|dipole|quadrupole|octupole|gj|config)-/, 'Check the level against docs/format.md (species, levels, term symbols) and the published data for the species.'],
   [/^(?:use)-/, 'Check the `use` path: a .sublevel file inside the root that exists and has no errors (docs/format.md).'],
   [/^coil-/, 'Check the winding against docs/fields.md (cautions): a thicker conductor, less current or cooling; follow your lab\u2019s rules.'],
+  [/^(?:magnet|trajectory)-(?:line|gradient|spin|deflection|forward|field|meets|not|level)/, 'A magnet built from sources: see docs/beam.md §7 (the frame, the flights and what each finding means); move `at` or change the sources as the message says.'],
   [/^(?:source|vector|direction)-/, 'Check the coil, solenoid, wire or slab block against docs/format.md; the field formulas and their limits are in docs/fields.md.'],
   [/^trap-/, 'Check the trap block against docs/traps.md (region, sources, level, gravity, temperature, cut); the message names the sublevel.'],
   [/^(?:field|magnet|beam)-/, 'Check the apparatus settings against docs/beam.md; the message names the setting and the value.'],

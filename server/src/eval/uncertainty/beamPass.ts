@@ -25,6 +25,8 @@ export function beamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, 
   const mass = beam.species?.massKg?.value;
   const mis = r.speeds?.mean_inverse_square_s2_per_m2;
   if (!r.computed || !level || !magnet?.fieldT || !magnet.gradientTPerM || !magnet.lengthM || !driftM || !mass || mis === undefined) return;
+  // A magnet built from sources: its deflections come from flights, not from μ G (L1²/2 + L1 L2)/M (docs/beam.md §7).
+  if (r.deflection_model === 'field-map') return;
   const gJ = gJOf(level);
   const spec = gJ !== undefined ? hyperfineSpec(level, gJ) : undefined;
   if (!spec) return;

@@ -4,7 +4,7 @@
  * here when the evaluation carries them.
  */
 import type { EvaluationResult, MagnetResult } from '../../eval/resultTypes';
-import { prefixedText } from '../../eval/quantityText';
+import { lengthText, prefixedText } from '../../eval/quantityText';
 import { BOHR_MAGNETON } from '../../physics/constants';
 import { md, mdTitle } from '../shared/markdown';
 import { valueInUnits } from '../shared/units';
@@ -19,6 +19,10 @@ export function bohrForceN(gradientTPerM: number): number {
 
 export function magnetSection(m: MagnetResult, ctx: { result: EvaluationResult | undefined; options: HoverOptions }): string {
   const lines = [mdTitle(`magnet ${md(m.name)}`)];
+  if (m.sources) {
+    const at = m.at_m ? m.at_m.map((x) => lengthText(x, 4)).join(', ') : 'the origin';
+    lines.push(`built from ${m.sources.map(md).join(', ')}: field and gradient of |B| where the beam line (along +x) passes, at ${at}; the beam flies through their field`);
+  }
   if (m.field_T !== undefined) lines.push(`field ${fieldValueLines(m.field_T, m.field_unit).join('; ')}`);
   else lines.push('field: not given');
   if (m.gradient_T_per_m !== undefined) {

@@ -49,7 +49,9 @@ interface Trial {
   pattern: DetectorPattern;
 }
 
-export function resolvingOptions(input: PatternInput, present: DetectorPattern): ResolvingOptions {
+/** `only` limits the changes tried (a magnet built from sources: its flights fix the deflections, see trajectory/fieldMapPattern.ts). */
+export function resolvingOptions(input: PatternInput, present: DetectorPattern, only?: readonly AdviceParameter[]): ResolvingOptions {
+  const tried = (p: AdviceParameter): boolean => !only || only.includes(p);
   const groups = present.peaks.map((p) => p.memberIndices);
   const presentWorst = worstDip(present);
   const out: ResolvingOptions = { presentWorstDipRatio: presentWorst, options: [] };
@@ -63,6 +65,7 @@ export function resolvingOptions(input: PatternInput, present: DetectorPattern):
     computePattern({ ...input, geometry: { ...geo, ...change }, ...(source ? { source } : {}) }, groups, false);
 
   const grown = (parameter: 'gradient' | 'magnetLength' | 'drift', base: number): void => {
+    if (!tried(parameter)) return;
     const key = parameter === 'gradient' ? 'gradientTPerM' : parameter === 'magnetLength' ? 'magnetLengthM' : 'driftM';
     const scale = parameter === 'gradient' ? sign : 1;
     const trials = scan(GROWTH.map((f) => f * base), (v) => at({ [key]: scale * v }));
@@ -85,6 +88,7 @@ export function resolvingOptions(input: PatternInput, present: DetectorPattern):
   grown('drift', geo.driftM > 0 ? geo.driftM : geo.magnetLengthM / 10);
 
   const narrowed = (parameter: 'slits' | 'detector', change: (f: number) => Partial<PatternInput['geometry']>): void => {
+    if (!tried(parameter)) return;
     keep(parameter, choose(scan(NARROWING, (f) => at(change(f))), presentWorst));
   };
   narrowed('slits', (f) => ({ slit1M: geo.slit1M * f, slit2M: geo.slit2M * f }));
@@ -92,7 +96,7 @@ export function resolvingOptions(input: PatternInput, present: DetectorPattern):
 
   const spread = presentSpread(input.source);
   const mean = present.speed?.meanSpeed;
-  if (spread !== undefined && mean !== undefined && mean > 0) {
+  if (tried('speedSpread') && spread !== undefined && mean !== undefined && mean > 0) {
     const values = SPREADS.filter((s) => s < spread * 0.9);
     keep('speedSpread', choose(scan(values, (s) => at({}, { kind: 'jet', meanSpeed: mean, relativeSpread: s })), presentWorst));
   }
