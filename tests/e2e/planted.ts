@@ -19,4 +19,6 @@ export const PLANTED: readonly PlantedProblem[] = [
   { line: 17, column: 20, code: 'name-unknown', severity: 'error' },
   { line: 18, column: 1, code: 'line-parity-unchanged', severity: 'error' },
   { line: 18, column: 1, code: 'line-l-zero-zero', severity: 'warning' },
+  { line: 22, column: 13, code: 'source-turns-not-whole', severity: 'error' },
+  { line: 24, column: 3, code: 'source-sense-without-spacing', severity: 'warning' },
 ];
