@@ -26,5 +26,11 @@ run('Rb87 ground diagram with the probe field marked (SVG)', ['render', 'example
 run('Li7 2p as one whole term, through both Paschen–Back regimes (SVG)', ['render', 'examples/lithium-whole-term.sublevel', '--view', 'levels', '--level', 'p', '--to', '1 T', '--out', 'demo-output/li7-2p-whole-term.svg'], 0);
 run('Rb87 D2 spectrum at 0.6 T seen across the field: Voigt profiles as CSV', ['spectrum', 'examples/rubidium-spectrum.sublevel', '--out', 'demo-output/rb87-d2-spectrum.csv'], 0);
 run('Field from one measured resonance, and g_J and A from eight (invented data)', ['fit', 'examples/fit-rubidium.sublevel'], 0);
+run('Coils, a two-wire rail and a magnetised block: the field along the pair\'s axis (CSV)', ['field', 'examples/coils-and-wires.sublevel', '--source', 'quad', '--along', '0,0,-6cm:0,0,6cm', '--points', '121', '--format', 'csv', '--out', 'demo-output/quad-axis-field.csv'], 0);
+run('The field map of those sources, drawn beside them (SVG)', ['render', 'examples/coils-and-wires.sublevel', '--view', 'fieldmap', '--out', 'demo-output/coils-field-map.svg'], 0);
+run('A sodium beam through the real field of a two-wire magnet', ['eval', 'examples/two-wire-magnet.sublevel'], 0);
+run('Which Rb87 ground sublevels a quadrupole trap holds, and how deeply', ['trap', 'examples/quadrupole-trap.sublevel'], 0);
+run('A spin-flip sodium slower: the ideal profile and a 20-section coil design', ['slower', 'examples/sodium-slower.sublevel'], 0);
+run('The slower\'s field and speeds along it (SVG)', ['render', 'examples/sodium-slower.sublevel', '--view', 'slower', '--out', 'demo-output/na-slower.svg'], 0);
 run('What a weaker magnet changes physically (exit 1: the setups differ)', ['diff', 'tests/fixtures/diff/beam-old.sublevel', 'tests/fixtures/diff/beam-weak-gradient.sublevel'], 1);
 console.log('\ndemo finished: diagrams and CSV files are in demo-output/; see README.md for the format and the CLI.');
