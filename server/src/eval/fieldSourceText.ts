@@ -31,8 +31,8 @@ function vectorText(v: readonly number[], each: (x: number) => string, unit: str
   return `(${v.map((x) => each(x)).join(', ')}) ${unit}`;
 }
 
-/** The common length unit of a point's coordinates. */
-function pointText(p: readonly number[]): string {
+/** A point with one length unit for all three coordinates, `(0, 0, 10) mm`. */
+export function pointText(p: readonly number[]): string {
   const max = Math.max(...p.map(Math.abs));
   const [factor, unit] = max === 0 || max < 0.1 ? [1e-3, 'mm'] : max < 10 ? [1e-2, 'cm'] : [1, 'm'];
   return vectorText(p, (x) => trimNumber(x / factor, 5), unit);

@@ -6,6 +6,7 @@ import { BOLTZMANN_K, PLANCK_H } from '../physics/constants';
 import { ZERO_FIELD_FRACTION } from '../physics/traps';
 import { fieldText, frequencyText, lengthText, MISSING, trimNumber } from './quantityText';
 import type { TrapResult, TrapSublevelResult } from './trapResultTypes';
+import { pointText } from './fieldSourceText';
 import { displayUnit, inWrittenUnit } from './writtenUnit';
 
 /** A |B| gradient in G/cm. */
@@ -67,7 +68,7 @@ export function trapSummaryLines(t: TrapResult): string[] {
   const what = [t.species && t.level ? `${t.species}.${t.level}` : undefined, t.sources.length > 0 ? `sources ${t.sources.join(', ')}` : undefined].filter(Boolean).join('; ');
   out.push(`trap ${t.name}${what ? ` — ${what}` : ''}`);
   const gravity = t.gravity === 'off' ? 'gravity off' : `gravity along (${t.gravity.map((x) => trimNumber(x, 3)).join(', ')})`;
-  const region = t.region ? `region ${lengthText(t.region.radius_m)} about (${t.region.centre_m.map((x) => lengthText(x)).join(', ')})${t.region.from === 'sources' ? ' (90 % of the way to the nearest conductor)' : ''}` : 'no region';
+  const region = t.region ? `region ${lengthText(t.region.radius_m)} about ${pointText(t.region.centre_m)}${t.region.from === 'sources' ? ' (90 % of the way to the nearest conductor)' : ''}` : 'no region';
   out.push([gravity, region, ...trapInputsText(t)].join('; '));
   if (!t.computed) {
     out.push('not computed: see the diagnostics');
@@ -76,7 +77,7 @@ export function trapSummaryLines(t: TrapResult): string[] {
   // |B| below ZERO_FIELD_FRACTION of the largest |B| is the search's round-off: a zero of the field.
   const floor = { scale: t.field_max_T ?? 0, relative: ZERO_FIELD_FRACTION };
   out.push(
-    `field minimum ${fieldText(t.field_at_centre_T, 5, floor)} at (${t.field_centre_m!.map((x) => lengthText(x, 3, { scale: t.region?.radius_m ?? 1 })).join(', ')}); up to ${fieldText(t.field_max_T, 5)} in the region; |B| gradient along gravity up to ${gaussPerCmText(t.gravity_gradient_T_per_m)}`,
+    `field minimum ${fieldText(t.field_at_centre_T, 5, floor)} at ${pointText(t.field_centre_m!)}; up to ${fieldText(t.field_max_T, 5)} in the region; |B| gradient along gravity up to ${gaussPerCmText(t.gravity_gradient_T_per_m)}`,
   );
   const held = t.sublevels.filter((s) => s.trapped).map((s) => `|${s.label}⟩`);
   out.push(held.length > 0 ? `trapped: ${held.join(', ')}` : 'trapped: none');
