@@ -72,6 +72,17 @@ describe('peak position uncertainty', () => {
     expect(w?.range.start).toEqual({ line: 8, character: 5 });
   });
 
+  it('a point detector with only published built-in uncertainties reaching the peaks: a note, not a warning', () => {
+    // Li7 from the built-in table (A and g_J carry the compilation's uncertainties); the file writes none.
+    const text = 'species Li7\n  level ground: 2s 2S1/2\nmagnet m\n  field = 0.4 T\n  gradient = 100 T/m\n  length = 5 cm\n'
+      + 'beam b\n  species = Li7\n  level = ground\n  source = oven 700 K\n  slits = 50 um, 50 um apart 30 cm\n  magnet = m\n  drift = 30 cm\n';
+    const w = analyze(text).problems.find((p) => p.code === 'uncertainty-undefined');
+    expect(w?.severity).toBe('info');
+    // The same beam with a gradient the file gives an uncertainty: the user's own uncertainty is lost, a warning.
+    const v = analyze(text.replace('100 T/m', '100(2) T/m')).problems.find((p) => p.code === 'uncertainty-undefined');
+    expect(v?.severity).toBe('warning');
+  });
+
   it('is absent when nothing uncertain reaches the beam, and an undeflected peak at 0 gets none printed as noise', () => {
     const b = beam(setup('180 T/m'));
     for (const p of b.peaks) expect(p.position_m_unc).toBeUndefined();

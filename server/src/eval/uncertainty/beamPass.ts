@@ -121,9 +121,13 @@ function peakUncertainty(
     (p, j) => p.position_m !== 0 && p.position_m_unc === undefined && !slopes[own.length + j] && (apparatusUncertain || shared[j]!.memberIndices.some((i) => hasSensitivity(deflections[i]!))),
   );
   if (missed) {
+    // A warning when an uncertainty the file wrote is lost here; when only published built-in
+    // uncertainties reach the peaks, a note (the setup itself asked for nothing).
+    const reaching = [temperature, ...Object.values(apparatus ?? {}), ...deflections];
+    const written = reaching.some((s) => Object.keys(s).some((id) => s[id] !== 0 && inp.table.get(id)?.written === true));
     problems.push({
       code: 'uncertainty-undefined',
-      severity: 'warning',
+      severity: written ? 'warning' : 'info',
       message: `beam '${beam.name}': its peak positions have uncertain inputs but no first-order uncertainty is shown; the exact slope of a peak needs a spread of speeds and a detector of nonzero width`,
       range: beam.nameRange,
     });

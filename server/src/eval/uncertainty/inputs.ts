@@ -37,7 +37,7 @@ export function setupInputs(model: SetupModel): SetupInputs {
   const add = (id: string, label: string, v: Valued<number> | undefined): Sensitivities => {
     const u = v?.uncertainty;
     if (!v || u === undefined || !(u > 0) || !Number.isFinite(u) || !Number.isFinite(v.value)) return NO_SENSITIVITY;
-    table.set(id, { id, label, value: v.value, u });
+    table.set(id, { id, label, value: v.value, u, ...(v.range !== undefined ? { written: true } : {}) });
     return { [id]: 1 };
   };
   const fieldSens = new Map<string, Sensitivities>();

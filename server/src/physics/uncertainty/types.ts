@@ -21,6 +21,8 @@ export interface UncertainInput {
   readonly label: string;
   readonly value: number;
   readonly u: number;
+  /** The setup file wrote this uncertainty (`0.35(2) T`); absent for published built-in data. */
+  readonly written?: boolean;
 }
 
 /** The inputs of one evaluation, by id. */
