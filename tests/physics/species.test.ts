@@ -321,3 +321,40 @@ describe('unit conversion', () => {
     expect(publishedEnergyToHz(2.5, 'MHz')).toBe(2.5e6);
   });
 });
+
+describe('rubidium 5p hyperfine constants against independent measurements (read, not recalled)', () => {
+  /** |stored − measured| ≤ 2 × the combined standard uncertainty (k = 2 agreement). */
+  function agreesWithin2Sigma(stored: Sourced<number> | undefined, measuredHz: number, sigmaHz: number, what: string): void {
+    const v = num(stored, what);
+    const u = stored?.uncertainty;
+    if (u === undefined) throw new Error(`${what}: no stored uncertainty`);
+    expect(Math.abs(v - measuredHz)).toBeLessThanOrEqual(2 * Math.hypot(u, sigmaHz));
+  }
+
+  it.each([
+    // arXiv:1611.02406 (2016), "Measurement of hyperfine structure in the D1 line of Rb", abstract:
+    // A = 120.510(26) MHz in ⁸⁵Rb and 408.340(19) MHz in ⁸⁷Rb.
+    ['Rb85', 120.51e6, 0.026e6],
+    ['Rb87', 408.34e6, 0.019e6],
+  ] as const)('%s 5p1/2 A agrees with the 2016 D1-line measurement', (id, measured, sigma) => {
+    agreesWithin2Sigma(level(id, 'P1/2').A, measured, sigma, `${id} 5p1/2 A`);
+  });
+
+  it('⁸⁷Rb 5p3/2 A and B agree with the octupole-aware reanalysis of the 1996 intervals', () => {
+    // arXiv:0810.5745 (Phys. Rev. A 79, 2009), abstract: A = 84.7189(22) MHz, B = 12.4942(43) MHz,
+    // C = −0.12(9) kHz, from the intervals measured in Opt. Lett. 21, 1280 (1996).
+    agreesWithin2Sigma(level('Rb87', 'P3/2').A, 84.7189e6, 0.0022e6, 'Rb87 5p3/2 A');
+    agreesWithin2Sigma(level('Rb87', 'P3/2').B, 12.4942e6, 0.0043e6, 'Rb87 5p3/2 B');
+  });
+
+  it('⁸⁷Rb 5p3/2: the F = 3 – F = 2 interval 3A + B equals the measured 266.650(9) MHz', () => {
+    // Interval printed in arXiv:0810.5745, Fig. 1 (measured in Opt. Lett. 21, 1280 (1996)).
+    // For I = J = 3/2 the dipole part gives A·(K₃ − K₂)/2 = 3A and the quadrupole part B·(1/4 + 3/4) = B.
+    const l = level('Rb87', 'P3/2');
+    const interval = 3 * num(l.A, 'A') + num(l.B, 'B');
+    const u = Math.hypot(3 * (l.A?.uncertainty ?? 0), l.B?.uncertainty ?? 0);
+    expect(Math.abs(interval - 266.65e6)).toBeLessThanOrEqual(2 * Math.hypot(u, 0.009e6));
+    // And to the kHz level it is the same number: 266.652 MHz stored vs 266.650 measured.
+    expect(interval / 1e6).toBeCloseTo(266.652, 3);
+  });
+});

@@ -71,8 +71,8 @@ export const RUBIDIUM_87: BuiltinSpecies = {
     {
       key: 'P1/2',
       designation: '5p 2P°1/2',
-      // Value and uncertainty both recalled (an older revision of the compilation); whether its
-      // current revision lists another value could not be read (docs/species-data.md).
+      // Value and uncertainty both recalled (an older revision of the compilation). A measurement
+      // read since, 408.340(19) MHz (arXiv:1611.02406), agrees within 0.5σ (tests/physics/species.test.ts).
       A: mhz(408.328, FROM_MEMORY, 0.015),
       gJ: sourced(0.666, STECK_RB87),
       ...energy(377.10746338, 'THz', STECK_RB87, 0.000000011, FROM_MEMORY),
