@@ -9,6 +9,7 @@ import { startHost } from './host.mjs';
 import { copyExamples } from './workspace.mjs';
 
 const SUITE_TIMEOUT_MS = 5 * 60_000;
+const PAGE_LOAD_TIMEOUT_MS = 120_000;
 
 export async function runInHostSuite({ codeServer, root, suite, workDir, browser, report }) {
   const folder = copyExamples(root, join(workDir, 'workspace'));
@@ -27,7 +28,8 @@ export async function runInHostSuite({ codeServer, root, suite, workDir, browser
       ['extensionDevelopmentPath', remote(root)],
       ['extensionTestsPath', remote(suite)],
     ];
-    await page.goto(`${host.origin}/?folder=${encodeURIComponent(folder)}&payload=${encodeURIComponent(JSON.stringify(payload))}`);
+    // The workbench page is large: on a loaded machine its first load takes longer than playwright's 30 s default.
+    await page.goto(`${host.origin}/?folder=${encodeURIComponent(folder)}&payload=${encodeURIComponent(JSON.stringify(payload))}`, { timeout: PAGE_LOAD_TIMEOUT_MS });
     const watchdog = new Promise((resolve) => setTimeout(resolve, SUITE_TIMEOUT_MS, 'timeout').unref());
     const code = await Promise.race([exit, watchdog]);
     if (existsSync(resultsFile)) {

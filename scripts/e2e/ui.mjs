@@ -14,7 +14,8 @@ export async function runUiSuite({ codeServer, root, vsix, uiBundle, workDir, sh
   const host = await startHost(codeServer, hostDir);
   const page = await browser.newPage({ viewport: { width: 1400, height: 900 } });
   try {
-    await page.goto(`${host.origin}/?folder=${encodeURIComponent(folder)}`);
+    // The workbench page is large: on a loaded machine its first load takes longer than playwright's 30 s default.
+    await page.goto(`${host.origin}/?folder=${encodeURIComponent(folder)}`, { timeout: WORKBENCH_TIMEOUT_MS });
     await page.locator('.monaco-workbench .explorer-folders-view').waitFor({ timeout: WORKBENCH_TIMEOUT_MS });
     const { runUi } = createRequire(import.meta.url)(uiBundle);
     await runUi(page, shotsDir, report);

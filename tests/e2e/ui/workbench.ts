@@ -6,7 +6,7 @@
 import { join } from 'node:path';
 import type { Frame, Locator, Page } from 'playwright-core';
 
-const STEP_TIMEOUT_MS = 30_000;
+const STEP_TIMEOUT_MS = 45_000;
 
 export class Workbench {
   constructor(
