@@ -73,7 +73,7 @@ export function coefficientSlopes(flyer: CoefficientFlyer, base: CoefficientSetu
         if (Math.abs(up - down) > LINEARITY_LIMIT * Math.max(Math.abs(up), Math.abs(down)) + 2 * noise) linear = false;
       }
       if (linear) return { dk, step: h };
-      h /= 4;
+      if (attempt < RETRIES) h /= 4;
     }
     return { dk: null, step: h, reason: 'not-linear' as const };
   });
