@@ -135,7 +135,7 @@ describe('a field-map beam against the uniform-gradient pass in a nearly uniform
     return `magnet m\n  field = ${r.magnets[0]!.field_T} T\n  gradient = ${gradient} T/m\n  length = 1 cm\n`;
   }
 
-  it('the oven temperature, slits and detector: the two passes agree to 1e-4 (the same peak slopes, k nearly 1/v²)', () => {
+  it('the oven temperature, slits and detector: the two passes agree to 1e-6 (measured 1.4e-8: the same peak slopes, k nearly 1/v²)', () => {
     const text = nearlyUniform(sourcesMagnet, apparatus).replace('{gradCurrent}', '185.4');
     const mapped = analyze(text);
     const b = mapped.result!.beams[0]!;
@@ -146,15 +146,15 @@ describe('a field-map beam against the uniform-gradient pass in a nearly uniform
     expect(uniform.peaks.length).toBe(b.peaks.length);
     b.peaks.forEach((p, j) => {
       expect(Math.abs(uniform.peaks[j]!.position_m / p.position_m - 1)).toBeLessThan(1e-6);
-      expect(Math.abs(uniform.peaks[j]!.position_m_unc! / p.position_m_unc! - 1)).toBeLessThan(1e-4);
+      expect(Math.abs(uniform.peaks[j]!.position_m_unc! / p.position_m_unc! - 1)).toBeLessThan(1e-6);
     });
   });
 
-  it('the gradient coil current (1 %) against the gradient with the same relative uncertainty: within the 0.4 % the gradient varies', () => {
+  it('the gradient coil current (1 %) against the gradient with the same relative uncertainty: within the 0.4 % the gradient varies (measured 0.13 %)', () => {
     const none = { T: '600', slit: '10', detector: '10' };
     const mapped = analyze(nearlyUniform(sourcesMagnet, none).replace('{gradCurrent}', '185.4(19)'));
     const b = mapped.result!.beams[0]!;
     const uniform = analyze(nearlyUniform(equivalentUniform(mapped, 1.9 / 185.4), none).replace('{gradCurrent}', '185.4')).result!.beams[0]!;
-    b.peaks.forEach((p, j) => expect(Math.abs(uniform.peaks[j]!.position_m_unc! / p.position_m_unc! - 1)).toBeLessThan(4e-3));
+    b.peaks.forEach((p, j) => expect(Math.abs(uniform.peaks[j]!.position_m_unc! / p.position_m_unc! - 1)).toBeLessThan(3e-3));
   });
 });
