@@ -20,14 +20,12 @@ import {
   type SpectralParameter,
   type SpectralPoint,
 } from '../physics/fit';
-import { CoefficientFlyer, fieldMapPattern } from '../physics/beam/trajectory';
-import { scaledField } from '../physics/fields';
-import { beamInputs, type BeamInputs } from './beamInput';
+import { beamInputs } from './beamInput';
 import { EVAL_RULES } from './evalCodes';
 import type { FitParameterResult, FitPointResult, FitResult } from './fitResultTypes';
 import type { GJLookup } from './gJLookup';
 import { hyperfineSpec } from './levelSpec';
-import { magnetFieldMap } from './magnetFieldMap';
+import { sourceFlights } from './sourceFlights';
 
 type Report = (code: keyof typeof EVAL_RULES, message: string, range: Range, severity?: Problem['severity']) => void;
 
@@ -218,25 +216,6 @@ function fitProfile(f: FitRequestModel, gJOf: GJLookup, report: Report, failed: 
   }));
   if (withErrors > 0 && withErrors < d.profile.length) report('fit-not-possible', 'some points have an error and some do not: all are weighted as Poisson counts (σ² = counts)', d.nameRange, 'warning');
   return result;
-}
-
-/**
- * The flights of a beam through a magnet built from sources, for the profile model: the pattern
- * input with each sublevel's flown coefficient (fieldMapPattern.ts), and the coefficients again
- * with every source scaled, at the speed asked (the moment table is kept between calls).
- */
-function sourceFlights(inputs: BeamInputs, spec: HyperfineLevelSpec, magnet: NonNullable<NonNullable<DataModel['beam']>['magnet']>): { flights: ProfileSetup['flights']; patternInput: BeamInputs['input'] } | undefined {
-  const map = magnetFieldMap(magnet);
-  if (!map) return undefined;
-  const labels = inputs.input.sublevels.map((s) => s.label);
-  const mapped = fieldMapPattern({ pattern: inputs.input, field: map.field, centre: map.centre, obstacles: map.obstacles, spec, labels });
-  if (!mapped.fieldMap || mapped.fieldMap.issues.some((i) => i.severity === 'error')) return undefined;
-  const geo = inputs.input.geometry;
-  const flyer = new CoefficientFlyer();
-  const base = { field: map.field, centre: map.centre, magnetLengthM: geo.magnetLengthM, driftM: geo.driftM, massKg: inputs.input.massKg, spec, labels, maxFieldT: mapped.fieldMap.tableMaxFieldT };
-  const coefficients = (scale: number, speed: number): Float64Array | null =>
-    flyer.fly({ ...base, field: scaledField(map.field, scale), maxFieldT: base.maxFieldT * Math.max(1, Math.abs(scale)) }, speed).k;
-  return { flights: { coefficients }, patternInput: mapped.pattern };
 }
 
 // ---- shared ------------------------------------------------------------------------------
