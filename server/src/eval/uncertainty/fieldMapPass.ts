@@ -35,8 +35,6 @@ interface Flown {
   sens: Sensitivities;
   label: string;
   nudge: CoefficientNudge;
-  /** The oven temperature: its 1/T scaling of the speeds is added by the peak pass, not here. */
-  temperature?: boolean;
 }
 
 export function fieldMapBeamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: SetupInputs, problems: Problem[]): void {
@@ -52,8 +50,7 @@ export function fieldMapBeamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJ
   const length = inp.magnetSens.get(magnet.name)?.length ?? NO_SENSITIVITY;
   const drift = inp.beamDrift.get(beam.name) ?? NO_SENSITIVITY;
   const apparatus = inp.beamGeometry.get(beam.name);
-  const oven = beam.source?.value.kind === 'oven';
-  const temperature = oven ? apparatus?.temperature ?? NO_SENSITIVITY : NO_SENSITIVITY;
+  const temperature = beam.source?.value.kind === 'oven' ? apparatus?.temperature ?? NO_SENSITIVITY : NO_SENSITIVITY;
   const T = beam.source?.value.kind === 'oven' ? beam.source.value.temperatureK : 1;
   const L1 = magnet.lengthM.value;
   const v = fm.reference_speed_m_per_s;
@@ -85,8 +82,8 @@ export function fieldMapBeamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJ
     flown.push({ sens: length, label: `length of magnet ${magnet.name}`, nudge: { step: firstStep(standardUncertainty(length, inp.table), L1), at: (t) => ({ magnetLengthM: L1 + t }) } });
   }
   if (hasSensitivity(temperature)) {
-    // An oven's speeds scale as √T: the reference speed moves with it.
-    flown.push({ sens: temperature, label: 'oven temperature', temperature: true, nudge: { step: firstStep(standardUncertainty(temperature, inp.table), T), at: (t) => ({ speed: v * Math.sqrt((T + t) / T) }) } });
+    // An oven's speeds scale as √T: the reference speed moves with it (the 1/T of ⟨1/v²⟩ is the peak pass's).
+    flown.push({ sens: temperature, label: 'oven temperature', nudge: { step: firstStep(standardUncertainty(temperature, inp.table), T), at: (t) => ({ speed: v * Math.sqrt((T + t) / T) }) } });
   }
   const anything = flown.length > 0 || unmovable.length > 0 || [drift, params.field, ...Object.values(apparatus ?? {})].some((s) => hasSensitivity(s));
   if (!anything) return;
