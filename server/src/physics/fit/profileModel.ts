@@ -51,7 +51,8 @@ export interface ProfileModel {
 
 /** Parameters that enter by their absolute value. */
 export function isSizeParameter(name: string): boolean {
-  return name === 'width' || name === 'temperature' || name.startsWith('population');
+  // The field reversed (source_scale < 0) has the same |B|, so the same deflections.
+  return name === 'width' || name === 'temperature' || name === 'source_scale' || name.startsWith('population');
 }
 
 /** Bins of the pattern grid over the scanned span. */
