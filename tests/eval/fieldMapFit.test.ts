@@ -4,7 +4,12 @@
  * gradient. Synthetic profiles come from the whole beam evaluation (evaluateBeam: the flights at
  * three speeds and the detector pattern), with seeded Poisson-like noise.
  */
+import Ajv2020 from 'ajv/dist/2020';
+import { mkdtempSync, readFileSync, writeFileSync } from 'fs';
+import { tmpdir } from 'os';
+import path from 'path';
 import { describe, expect, it } from 'vitest';
+import { cli } from '../cli/runCli';
 import { analyze } from '../../server/src/eval/analyze';
 import { evaluateBeam } from '../../server/src/eval/beamEvaluation';
 import { gJLookup } from '../../server/src/eval/gJLookup';
@@ -130,5 +135,23 @@ beam main
     // the gradient coil's current 3 % up moves |B|'s gradient 3 % (the bias coil has none at the centre): s ≈ 1.03 × (its share)
     expect(Math.abs((s.value * m.gradient_T_per_m!) / g.value - 1)).toBeLessThan(3e-3);
     expect(Math.abs(s.uncertainty! / s.value / Math.abs(g.uncertainty! / g.value) - 1)).toBeLessThan(1e-2);
+  });
+});
+
+describe('the JSON document of a field-map beam with uncertainties and a source_scale fit', () => {
+  it('validates against the published JSON Schema, and the text report shows value(unc)', () => {
+    const counts = syntheticCounts(wires(2472), positions, 4, 12e-6, 20, 5);
+    const text = wires(2400).replace('current   = 2400 A', 'current   = 2400(24) A').replace('oven 600 K', 'oven 600(5) K') + profileBlock(counts, '  free = source_scale, offset, background\n');
+    const file = path.join(mkdtempSync(path.join(tmpdir(), 'fieldfit-')), 'setup.sublevel');
+    writeFileSync(file, text);
+    const doc = JSON.parse(cli('eval', file, '--format', 'json').out);
+    const validate = new Ajv2020({ allErrors: true, strict: true }).compile(JSON.parse(readFileSync('docs/schema/evaluation.schema.json', 'utf8')));
+    validate(doc);
+    expect(validate.errors ?? []).toEqual([]);
+    expect(doc.beams[0].peaks[0].position_m_unc).toBeGreaterThan(0);
+    expect(doc.fits[0].parameters[0].name).toBe('source_scale');
+    const report = cli('fit', file).out;
+    expect(report).toMatch(/source_scale[^\n]*1\.0\d+\(\d+\)/);
+    expect(report).not.toMatch(/NaN|Infinity/);
   });
 });
