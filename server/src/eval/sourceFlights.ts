@@ -21,7 +21,15 @@ export function sourceFlights(inputs: BeamInputs, spec: HyperfineLevelSpec, magn
   const geo = inputs.input.geometry;
   const flyer = new CoefficientFlyer();
   const base = { field: map.field, centre: map.centre, magnetLengthM: geo.magnetLengthM, driftM: geo.driftM, massKg: inputs.input.massKg, spec, labels, maxFieldT: mapped.fieldMap.tableMaxFieldT };
-  const coefficients = (scale: number, speed: number): Float64Array | null =>
-    flyer.fly({ ...base, field: scaledField(map.field, scale), maxFieldT: base.maxFieldT * Math.max(1, Math.abs(scale)) }, speed).k;
+  // A fit that leaves the scale and the speeds alone (width, populations) asks again for the same flights.
+  const known = new Map<string, Float64Array | null>();
+  const coefficients = (scale: number, speed: number): Float64Array | null => {
+    const key = `${scale} ${speed}`;
+    if (!known.has(key)) {
+      if (known.size >= 16) known.clear();
+      known.set(key, flyer.fly({ ...base, field: scaledField(map.field, scale), maxFieldT: base.maxFieldT * Math.max(1, Math.abs(scale)) }, speed).k);
+    }
+    return known.get(key)!;
+  };
   return { flights: { coefficients }, patternInput: mapped.pattern, flown: () => flyer.flights };
 }
