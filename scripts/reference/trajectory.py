@@ -10,6 +10,8 @@ The moment mu = -dE/dB comes from the Breit-Rabi formula (textbook closed form f
 differentiated analytically; the wire field and its derivatives are the textbook infinite-wire
 field mu0 I / (2 pi r). A third case uses wires of finite length (Biot-Savart segment field,
 differentiated by central differences of the closed form) so the field changes along the beam.
+"slopes" holds dk/dp of the deflection coefficient k = z_detector v^2 for the wires' current, the
+beam line's height and A: central differences of these flights (for the uncertainty pass).
 Nothing here is read from the project's TypeScript.
 
 Run from the repository root:  python3 scripts/reference/trajectory.py
@@ -112,7 +114,7 @@ def finite_wires(wires, half_length):
     return field, B_at
 
 
-def fly(field, F_upper, m, speed, centre, length, drift, rtol=1e-13):
+def fly(field, F_upper, m, speed, centre, length, drift, rtol=1e-13, moment=None):
     x0 = centre[0] - length / 2
 
     def rhs(s, u):
@@ -120,7 +122,7 @@ def fly(field, F_upper, m, speed, centre, length, drift, rtol=1e-13):
         B, G = field(p)
         b = np.linalg.norm(B)
         grad = G.T @ B / b
-        _, dE = breit_rabi(F_upper, m, b)
+        _, dE = (moment or breit_rabi)(F_upper, m, b)
         mu = -dE * H
         a = mu / (MASS * speed * speed)
         return [u[2], u[3], a * grad[1], a * grad[2]]
@@ -152,6 +154,31 @@ def main():
     for F_upper, m in [(True, 2), (False, -1), (True, -1)]:
         r = fly(fin, F_upper, m, 600.0, centre, length, drift, rtol=1e-12)
         cases.append({"field": "finite", "half_length_m": 0.05, "twoF": 4 if F_upper else 2, "twoM": 2 * m, "speed_m_per_s": 600.0, **r})
+    # dk/dp by central differences of the flights (k = z_detector v^2), at one speed.
+    speed = 800.0
+
+    def k_of(wire_current=900.0, height=centre[2], a_scale=1.0):
+        global A_HZ, DW
+        saved = (A_HZ, DW)
+        A_HZ, DW = A_HZ * a_scale, DW * a_scale
+        try:
+            f = infinite_wires([(2e-3, 0.0, wire_current), (-2e-3, 0.0, -wire_current)])
+            return [fly(f, Fu, mm, speed, [0.0, 0.0, height], length, drift)["detector"]["z_m"] * speed**2 for Fu, mm in slope_states]
+        finally:
+            A_HZ, DW = saved
+
+    slope_states = [(True, 2), (True, 0), (False, -1)]
+    steps = {"current_A": 1.0, "height_m": 1e-6, "A_Hz": 1e-4 * A_HZ}
+    slopes = {}
+    for name, h in steps.items():
+        if name == "current_A":
+            plus, minus = k_of(wire_current=900.0 + h), k_of(wire_current=900.0 - h)
+        elif name == "height_m":
+            plus, minus = k_of(height=centre[2] + h), k_of(height=centre[2] - h)
+        else:
+            plus, minus = k_of(a_scale=1 + h / A_HZ), k_of(a_scale=1 - h / A_HZ)
+        slopes[name] = {"step": h, "dk": [(p - q) / (2 * h) for p, q in zip(plus, minus)]}
+    base_k = k_of()
     out = {
         "generator": "scripts/reference/trajectory.py",
         "numpy": np.__version__,
@@ -163,6 +190,12 @@ def main():
         "length_m": length,
         "drift_m": drift,
         "cases": cases,
+        "slopes": {
+            "speed_m_per_s": speed,
+            "states": [{"twoF": 4 if Fu else 2, "twoM": 2 * mm} for Fu, mm in slope_states],
+            "k_m3_per_s2": base_k,
+            "derivatives": slopes,
+        },
     }
     path = os.path.join("tests", "reference", "trajectory.json")
     with open(path, "w") as f:

@@ -16,6 +16,7 @@ import {
   spectralModel,
   type FitOutcome,
   type ProfileParameter,
+  type ProfileSetup,
   type SpectralParameter,
   type SpectralPoint,
 } from '../physics/fit';
@@ -24,10 +25,11 @@ import { EVAL_RULES } from './evalCodes';
 import type { FitParameterResult, FitPointResult, FitResult } from './fitResultTypes';
 import type { GJLookup } from './gJLookup';
 import { hyperfineSpec } from './levelSpec';
+import { sourceFlights } from './sourceFlights';
 
 type Report = (code: keyof typeof EVAL_RULES, message: string, range: Range, severity?: Problem['severity']) => void;
 
-const SI_UNIT: Record<string, string> = { field: 'T', g_J: '', A: 'Hz', B: 'Hz', gradient: 'T/m', temperature: 'K', offset: 'm', width: 'm', background: 'counts', amplitude: 'counts·m' };
+const SI_UNIT: Record<string, string> = { source_scale: '', field: 'T', g_J: '', A: 'Hz', B: 'Hz', gradient: 'T/m', temperature: 'K', offset: 'm', width: 'm', background: 'counts', amplitude: 'counts·m' };
 
 export function evaluateFit(f: FitRequestModel, gJOf: GJLookup, problems: Problem[]): FitResult {
   const report: Report = (code, message, range, severity) =>
@@ -164,10 +166,27 @@ function fitProfile(f: FitRequestModel, gJOf: GJLookup, report: Report, failed: 
     if (d.beam) report('fit-not-possible', `beam '${d.beam.name}' is not complete enough to predict a pattern (see its own problems)`, f.nameRange);
     return out;
   }
-  if (d.beam?.magnet?.sources) {
-    report('fit-not-possible', `magnet '${d.beam.magnet.name}' is built from sources: the fit uses the uniform-gradient model with their field and gradient at the beam line, not the flights through their field`, f.nameRange, 'warning');
-  }
   const free = f.free.map((p) => p.name as ProfileParameter);
+  const rangeOf = (name: string) => f.free.find((p) => p.name === name)?.range ?? f.nameRange;
+  const magnet = d.beam!.magnet!;
+  let flights: ProfileSetup['flights'];
+  let patternInput = inputs.input;
+  if (magnet.sources) {
+    const misplaced = free.find((p) => p === 'gradient' || p === 'field');
+    if (misplaced) {
+      report('fit-not-possible', `magnet '${magnet.name}' is built from sources, which set its ${misplaced}; free source_scale (every source's current and magnetisation times one factor) instead`, rangeOf(misplaced));
+      return out;
+    }
+    const flown = sourceFlights(inputs, spec, magnet);
+    if (!flown) {
+      report('fit-not-possible', `the atoms cannot be flown through the field of magnet '${magnet.name}' (see the beam's own problems), so its profile cannot be fitted`, f.nameRange);
+      return out;
+    }
+    ({ flights, patternInput } = flown);
+  } else if (free.includes('source_scale')) {
+    report('fit-not-possible', `source_scale scales the sources a magnet is built from; magnet '${magnet.name}' is given by its field and gradient: free gradient instead`, rangeOf('source_scale'));
+    return out;
+  }
   if (free.includes('temperature') && inputs.input.source.kind !== 'effusive') {
     report('fit-not-possible', 'temperature can be fitted only for an oven source', f.free.find((p) => p.name === 'temperature')!.range);
     return out;
@@ -175,14 +194,14 @@ function fitProfile(f: FitRequestModel, gJOf: GJLookup, report: Report, failed: 
   const twoF = solveLevel(spec, magnetField).states.map((s) => (s.low.scheme === 'F' ? s.low.twoF : s.low.twoJ));
   const withErrors = d.profile.filter((p) => p.error !== undefined).length;
   const startOf = (name: string): number | undefined => f.starts.find((s) => s.name === name)?.value;
-  const input = { ...inputs.input, geometry: { ...inputs.input.geometry } };
+  const input = { ...patternInput, geometry: { ...patternInput.geometry } };
   if (startOf('gradient') !== undefined) input.geometry.gradientTPerM = startOf('gradient')!;
   if (startOf('width') !== undefined) input.geometry.detectorWidthM = startOf('width')!;
   if (startOf('temperature') !== undefined && input.source.kind === 'effusive') input.source = { kind: 'effusive', temperatureK: startOf('temperature')! };
   const positions = Float64Array.from(d.profile, (p) => p.positionM);
   const counts = Float64Array.from(d.profile, (p) => p.counts);
-  const model = profileModel({ input, spec, magnetFieldT: startOf('field') ?? magnetField, twoF }, positions, counts, free, startOf('offset') ?? 0);
-  const start = model.start.map((v, j) => (model.names[j] === 'background' ? startOf('background') ?? v : v));
+  const model = profileModel({ input, spec, magnetFieldT: startOf('field') ?? magnetField, twoF, ...(flights ? { flights } : {}) }, positions, counts, free, startOf('offset') ?? 0);
+  const start = model.start.map((v, j) => (model.names[j] === 'background' || model.names[j] === 'source_scale' ? startOf(model.names[j]!) ?? v : v));
   // Counts without errors: Poisson, σ² = max(counts, 1) (common practice for counting data).
   const sigma = Float64Array.from(d.profile, (p) => (withErrors === d.profile.length ? p.error! : Math.sqrt(Math.max(p.counts, 1))));
   const fitted = fitCurve({ names: model.names, start, scale: model.scale, y: counts, sigma, model: model.model, modelJacobian: model.jacobian });

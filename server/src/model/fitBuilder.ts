@@ -26,6 +26,7 @@ const START_DIMENSION: Record<FitParameterName, Dimension> = {
   width: 'length',
   populations: 'dimensionless',
   background: 'dimensionless',
+  source_scale: 'dimensionless',
 };
 
 function isParameter(word: string): word is FitParameterName {

@@ -43,7 +43,7 @@ export interface DataModel {
 }
 
 export const SPECTRAL_PARAMETERS = ['field', 'g_J', 'A', 'B'] as const;
-export const PROFILE_PARAMETERS = ['gradient', 'temperature', 'offset', 'width', 'field', 'populations', 'background'] as const;
+export const PROFILE_PARAMETERS = ['gradient', 'temperature', 'offset', 'width', 'field', 'populations', 'background', 'source_scale'] as const;
 export type FitParameterName = (typeof SPECTRAL_PARAMETERS)[number] | (typeof PROFILE_PARAMETERS)[number];
 
 export interface FitRequestModel {

@@ -31,7 +31,15 @@ function readMagnetisation(s: SettingNode, problems: ProblemList): Valued<Vec3> 
   const dirGroups = [first.slice(2), ...s.groups.slice(1)];
   const dir = readDirectionParts('the direction of magnetisation', dirGroups, s.valueText.range, problems);
   if (!dir) return undefined;
-  return { value: [tesla * dir.value[0], tesla * dir.value[1], tesla * dir.value[2]], source: 'this file', range: s.valueText.range, ...(size.unit ? { unit: size.unit } : {}) };
+  // `1.20(2) T along z`: the uncertainty is that of the magnitude μ0·|M|, T.
+  const u = size.uncertainty !== undefined ? (unitIsField ? size.uncertainty : VACUUM_PERMEABILITY * size.uncertainty) : undefined;
+  return {
+    value: [tesla * dir.value[0], tesla * dir.value[1], tesla * dir.value[2]],
+    source: 'this file',
+    range: s.valueText.range,
+    ...(size.unit ? { unit: size.unit } : {}),
+    ...(u !== undefined ? { uncertainty: u } : {}),
+  };
 }
 
 export function buildSlab(node: BlockNode & { kind: 'slab' }, name: NonNullable<BlockNode['name']>, problems: ProblemList): FieldSourceModel {

@@ -19,6 +19,8 @@ export interface Valued<T> {
   range?: Range;
   /** Standard uncertainty, when the file wrote e.g. `0.35(2)`. */
   uncertainty?: number;
+  /** A point or size written with uncertainties on its components (`0, 0, 1.5(1) mm`): each one's, m (undefined where exact). */
+  componentUncertainty?: readonly [number | undefined, number | undefined, number | undefined];
   /** The unit the file wrote (`mT` in `25 mT`), so reports can show the value back in it. */
   unit?: string;
 }

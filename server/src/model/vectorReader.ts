@@ -52,14 +52,18 @@ export function readVector(setting: SettingNode, kind: Dimension, problems: Prob
     return undefined;
   }
   const values: number[] = [];
+  const uncertainties: (number | undefined)[] = [];
   for (const p of parts) {
     // A plain number borrows the unit written at the end.
     const q: ValuePart = p.kind === 'number' ? { kind: 'quantity', number: p.number, unit: last.unit, text: `${p.text} ${last.unit.text}`, range: p.range } : p;
     const v = readPartQuantity(q, kind, problems, setting.key.text);
     if (!v) return undefined;
     values.push(v.value);
+    uncertainties.push(v.uncertainty);
   }
-  return { value: [values[0]!, values[1]!, values[2]!], source: FILE_SOURCE, range, unit: last.unit.text };
+  // Components written with an uncertainty (`0, 0, 1.5(1) mm`) are uncertain inputs (docs/uncertainty.md).
+  const componentUncertainty = uncertainties.some((u) => u !== undefined) ? { componentUncertainty: [uncertainties[0], uncertainties[1], uncertainties[2]] as const } : {};
+  return { value: [values[0]!, values[1]!, values[2]!], source: FILE_SOURCE, range, unit: last.unit.text, ...componentUncertainty };
 }
 
 /** A direction from value parts: one word (x, -z, …) or three plain numbers in `groups`, normalised. */

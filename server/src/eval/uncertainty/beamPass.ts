@@ -8,7 +8,7 @@
  * width W directly. An oven's speeds scale as √T, so 1/v² and every deflection as 1/T: the pattern
  * depends on each k_i/T, ∂⟨z⟩/∂T = −⟨z⟩/T and ∂x/∂T = −Σ_i (∂x/∂k_i) k_i/T.
  */
-import { peakSlopes, type PeakAt } from '../../physics/beam';
+import { peakSlopes, type PatternInput, type PeakAt } from '../../physics/beam';
 import { BOHR_MAGNETON, PLANCK_H } from '../../physics/constants';
 import { combine, hasSensitivity, type Sensitivities, levelDerivatives, NO_SENSITIVITY, scaled, throughParams } from '../../physics/uncertainty';
 import type { Problem } from '../../format/ast';
@@ -17,6 +17,7 @@ import { beamInputs } from '../beamInput';
 import type { GJLookup } from '../gJLookup';
 import { hyperfineSpec } from '../levelSpec';
 import type { BeamResult } from '../resultTypes';
+import { fieldMapBeamUncertainty } from './fieldMapPass';
 import { fieldKey, type BeamGeometrySens, type SetupInputs } from './inputs';
 import { setUnc } from './uncField';
 
@@ -26,7 +27,7 @@ export function beamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, 
   const mis = r.speeds?.mean_inverse_square_s2_per_m2;
   if (!r.computed || !level || !magnet?.fieldT || !magnet.gradientTPerM || !magnet.lengthM || !driftM || !mass || mis === undefined) return;
   // A magnet built from sources: its deflections come from flights, not from μ G (L1²/2 + L1 L2)/M (docs/beam.md §7).
-  if (r.deflection_model === 'field-map') return;
+  if (r.deflection_model === 'field-map') return fieldMapBeamUncertainty(r, beam, gJOf, inp, problems);
   const gJ = gJOf(level);
   const spec = gJ !== undefined ? hyperfineSpec(level, gJ) : undefined;
   if (!spec) return;
@@ -64,30 +65,34 @@ export function beamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, 
     deflections.push(sK);
   });
   const flight = combine([[1, geo?.length ?? NO_SENSITIVITY], [1, drift]]);
-  peakUncertainty(r, beam, gJOf, inp, deflections, flight, { temperature, T, apparatus }, problems);
+  const input = beamInputs(beam, gJOf)?.input;
+  if (input) peakUncertainty(r, beam, input, inp, deflections, flight, { temperature, T, apparatus }, problems);
 }
 
-interface SourceAndSlits {
+export interface SourceAndSlits {
   /** The oven temperature's sensitivities (none for another source) and its value. */
   temperature: Sensitivities;
   T: number;
   apparatus: BeamGeometrySens | undefined;
 }
 
-/** `peaks[].position_m_unc` and `sublevels[].peak_m_unc`; `flight` holds the sensitivities of L1 + L2. */
-function peakUncertainty(
+/**
+ * `peaks[].position_m_unc` and `sublevels[].peak_m_unc`; `deflections` holds the sensitivities of
+ * each k_i⟨1/v²⟩, `flight` those of L1 + L2, `input` the pattern input whose coefficients the
+ * peaks were found with (a field-map beam's stands for its flights).
+ */
+export function peakUncertainty(
   r: BeamResult,
   beam: BeamModel,
-  gJOf: GJLookup,
+  input: PatternInput,
   inp: SetupInputs,
   deflections: Sensitivities[],
   flight: Sensitivities,
   { temperature, T, apparatus }: SourceAndSlits,
   problems: Problem[],
 ): void {
-  const input = beamInputs(beam, gJOf)?.input;
   const mis = r.speeds?.mean_inverse_square_s2_per_m2;
-  if (!input || !mis || input.sublevels.length !== deflections.length) return;
+  if (!mis || input.sublevels.length !== deflections.length) return;
   const index = new Map(input.sublevels.map((s, i) => [s.label, i]));
   const own: PeakAt[] = r.sublevels.flatMap((s, i) => (s.peak_m === null ? [] : [{ positionM: s.peak_m, memberIndices: [i] }]));
   const shared: PeakAt[] = r.peaks.map((p) => ({ positionM: p.position_m, memberIndices: p.members.map((m) => index.get(m) ?? -1) }));

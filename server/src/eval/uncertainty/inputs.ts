@@ -3,13 +3,16 @@
  * every built-in value whose source publishes one. Each is an independent input with a stable id.
  */
 import type { SetupModel, LevelModel, Valued } from '../../model/types';
-import { NO_SENSITIVITY, type ParamSensitivities, type Sensitivities, type UncertainInput } from '../../physics/uncertainty';
+import { hasSensitivity, NO_SENSITIVITY, type ParamSensitivities, type Sensitivities, type UncertainInput } from '../../physics/uncertainty';
+import { centreFieldSensitivities, magnetSourceInputs, type SourceInput } from './sourceInputs';
 
 export interface SetupInputs {
   table: Map<string, UncertainInput>;
   /** Sensitivities of a working field by its source (`field:bias`, `magnet:selector`). */
   fieldSens: Map<string, Sensitivities>;
   magnetSens: Map<string, { gradient: Sensitivities; length: Sensitivities }>;
+  /** A magnet built from sources: its sources' uncertain inputs, each able to rebuild the field with itself moved. */
+  sourceInputs: Map<string, SourceInput[]>;
   /** The level parameters' sensitivities (A, B, C, ζ, g_I and a measured g_J). */
   levelParams: (level: LevelModel) => ParamSensitivities;
   beamDrift: Map<string, Sensitivities>;
@@ -43,12 +46,20 @@ export function setupInputs(model: SetupModel): SetupInputs {
   const fieldSens = new Map<string, Sensitivities>();
   for (const f of model.fields) fieldSens.set(fieldKey({ kind: 'field', name: f.name }), add(`field:${f.name}`, `field ${f.name}`, f.tesla));
   const magnetSens = new Map<string, { gradient: Sensitivities; length: Sensitivities }>();
+  const sourceInputs = new Map<string, SourceInput[]>();
   for (const m of model.magnets) {
     fieldSens.set(fieldKey({ kind: 'magnet', name: m.name }), add(`magnet:${m.name}.field`, `field of magnet ${m.name}`, m.fieldT));
     magnetSens.set(m.name, {
       gradient: add(`magnet:${m.name}.gradient`, `gradient of magnet ${m.name}`, m.gradientTPerM),
       length: add(`magnet:${m.name}.length`, `length of magnet ${m.name}`, m.lengthM),
     });
+    if (!m.sources) continue;
+    // Built from sources: the field and gradient at the beam line move with the sources' inputs.
+    const inputs = magnetSourceInputs(m, add);
+    sourceInputs.set(m.name, inputs);
+    const centre = centreFieldSensitivities(inputs);
+    if (hasSensitivity(centre.field)) fieldSens.set(fieldKey({ kind: 'magnet', name: m.name }), centre.field);
+    if (hasSensitivity(centre.gradient)) magnetSens.get(m.name)!.gradient = centre.gradient;
   }
   const levelParams = new Map<LevelModel, ParamSensitivities>();
   const levelEnergy = new Map<LevelModel, Sensitivities>();
@@ -86,6 +97,7 @@ export function setupInputs(model: SetupModel): SetupInputs {
     table,
     fieldSens,
     magnetSens,
+    sourceInputs,
     levelParams: (l) => levelParams.get(l) ?? {},
     beamDrift,
     beamGeometry,

@@ -72,7 +72,7 @@ const BLOCK_KEYS: Record<string, string> = {
   'data.file': 'a CSV file beside the setup with the points (a header names the columns and their units)',
   'data.beam': 'the beam whose detector pattern a profile is compared with',
   'fit.data': 'the data blocks fitted together, comma separated',
-  'fit.free': 'free parameters: field, g_J, A, B (resonances and intervals); gradient, temperature, offset, width, field, populations, background (profiles)',
+  'fit.free': 'free parameters: field, g_J, A, B (resonances and intervals); gradient, temperature, offset, width, field, populations, background (profiles); source_scale instead of gradient and field for a magnet built from sources',
   'fit.start': 'starting values, e.g. field 3 G, A 3417 MHz (defaults: the setup\'s values)',
   'fit.range': 'field range searched by a one-point field calibration: <from>, <to>',
   'coil.radius': 'loop radius (to the middle of the winding)',

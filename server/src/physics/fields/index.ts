@@ -12,3 +12,4 @@ export { pointOnSource } from './onSource';
 export { validateFieldSource } from './validateSource';
 export { magnitudeGradient, magnitudeHessian, DEFAULT_CURVATURE_STEP_M, type MagnitudeCurvature } from './curvature';
 export { sampleSegment, sampleGrid, MAX_SAMPLES, type GridRequest, type GridSamples, type PointSample, type SegmentSamples } from './sampling';
+export { scaledField } from './scaledField';

@@ -3,5 +3,5 @@ export { levenbergMarquardt, type LeastSquaresProblem, type LmOptions, type LmRe
 export { covarianceFromJacobian, correlationOf } from './covariance';
 export { fitCurve, type CurveProblem, type FitDiagnostic, type FitDiagnosticCode, type FitOutcome } from './fitCurve';
 export { spectralModel, pairExists, type SpectralParameter, type SpectralPoint, type SpectralModel } from './spectralModel';
-export { profileModel, isSizeParameter, PROFILE_RELATIVE_STEP, type ProfileParameter, type ProfileSetup, type ProfileModel } from './profileModel';
+export { profileModel, isSizeParameter, PROFILE_RELATIVE_STEP, type ProfileFlights, type ProfileParameter, type ProfileSetup, type ProfileModel } from './profileModel';
 export { calibrateField, type FieldCalibration, type CalibrationRoot } from './fieldCalibration';

@@ -5,13 +5,23 @@
  * width, the magnet's field, populations of each F (relative to the first), background; the
  * amplitude is always free (counts have no absolute scale). Width, temperature and populations
  * enter by their absolute value; `sizeParameters` lists them so results are reported as sizes.
+ * A beam whose magnet is built from sources takes its deflections from flights (`flights`): a
+ * scale on every source's strength replaces the gradient, and the pattern is fed each
+ * sublevel's coefficient k as an effective moment k M / (G (L1²/2 + L1 L2)) (fieldMapPattern.ts).
  */
-import type { PatternInput } from '../beam';
+import { leverArmM2, type PatternInput } from '../beam';
+import { speedLawFor } from '../beam/speedLawFor';
 // The pattern without peak refinement: a fit needs the density only, not off-grid peak positions.
 import { computePattern } from '../beam/detectorPattern';
 import { solveLevel, type HyperfineLevelSpec } from '../engine';
 
-export type ProfileParameter = 'gradient' | 'temperature' | 'offset' | 'width' | 'field' | 'populations' | 'background';
+export type ProfileParameter = 'gradient' | 'temperature' | 'offset' | 'width' | 'field' | 'populations' | 'background' | 'source_scale';
+
+/** The flights of a beam through a magnet built from sources. */
+export interface ProfileFlights {
+  /** Each sublevel's deflection coefficient k = z_detector · v² (m³/s², input.sublevels' order) with every source's strength times `scale`, flown at `speed`; null when a flight fails. */
+  coefficients(scale: number, speed: number): Float64Array | null;
+}
 
 export interface ProfileSetup {
   input: PatternInput;
@@ -20,6 +30,8 @@ export interface ProfileSetup {
   magnetFieldT: number;
   /** Twice F of each sublevel, same order as input.sublevels (for per-F populations). */
   twoF: number[];
+  /** A magnet built from sources: the deflections come from these flights (then `gradient` and `field` are not parameters). */
+  flights?: ProfileFlights;
 }
 
 /** Difference step for this model: the pattern is computed on a grid, so steps far below a bin only see its rounding. */
@@ -39,7 +51,8 @@ export interface ProfileModel {
 
 /** Parameters that enter by their absolute value. */
 export function isSizeParameter(name: string): boolean {
-  return name === 'width' || name === 'temperature' || name.startsWith('population');
+  // The field reversed (source_scale < 0) has the same |B|, so the same deflections.
+  return name === 'width' || name === 'temperature' || name === 'source_scale' || name.startsWith('population');
 }
 
 /** Bins of the pattern grid over the scanned span. */
@@ -103,6 +116,7 @@ export function profileModel(setup: ProfileSetup, positionsM: Float64Array, coun
     else if (name === 'width') push('width', geometry.detectorWidthM, 1e-6);
     else if (name === 'field') push('field', setup.magnetFieldT, 1e-6);
     else if (name === 'background') push('background', 0, 1);
+    else if (name === 'source_scale') push('source_scale', 1, 1e-3);
     else if (name === 'populations') for (const f of fs.slice(1)) push(`population F=${f % 2 === 0 ? f / 2 : `${f}/2`}`, firstWeight.get(f) ?? 1, 1e-3);
   }
   // One grid for every evaluation (shifted by the starting offset only): a grid that moved with
@@ -133,7 +147,14 @@ export function profileModel(setup: ProfileSetup, positionsM: Float64Array, coun
       src = { kind: 'effusive', temperatureK: Math.abs(p[index('temperature')]!) };
     }
     let moments = setup.input.sublevels.map((s) => s.momentJT);
-    if (index('field') >= 0) {
+    if (setup.flights) {
+      // The flights at the reference speed ⟨1/v²⟩^(−1/2) of the (possibly fitted) speed law.
+      const speed = 1 / Math.sqrt(speedLawFor(src, setup.input.massKg).meanInverseSquare);
+      const k = setup.flights.coefficients(index('source_scale') >= 0 ? p[index('source_scale')]! : 1, speed);
+      const lever = g.gradientTPerM * leverArmM2(g);
+      if (!k || !(lever !== 0) || !Number.isFinite(speed)) return null;
+      moments = moments.map((_, i) => (k[i]! * setup.input.massKg) / lever);
+    } else if (index('field') >= 0) {
       const solved = solveLevel(setup.spec, p[index('field')]!);
       if (solved.states.length !== moments.length) return null;
       moments = solved.states.map((s) => s.momentJT);

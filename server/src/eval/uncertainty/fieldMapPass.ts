@@ -1,0 +1,148 @@
+/**
+ * `*_unc` of a beam whose magnet is built from sources (docs/beam.md §7): its peaks come from
+ * each sublevel's coefficient k = z_detector · v*² flown at the reference speed v*, so every
+ * input that changes a flight — a source's current, turns, radius, place…, the beam line `at`,
+ * the magnet's length, the level's constants, the oven temperature (through v* ∝ √T) — reaches
+ * the peaks through ∂k_i/∂p, found by flying again with the input nudged (central differences,
+ * physics/beam/trajectory/coefficientSlopes.ts). The drift is exact: the atom leaves the magnet
+ * in a straight line, ∂k/∂L2 = (dz/dx at the exit) · v*². From the k_i on, the peaks are those
+ * of the uniform pass (beamPass.ts: peak slopes, slit image, detector, the 1/T of the speeds).
+ */
+import { leverArmM2 } from '../../physics/beam';
+import { CoefficientFlyer, coefficientSlopes, type CoefficientNudge, type FlightChange } from '../../physics/beam/trajectory';
+import { BOHR_MAGNETON, PLANCK_H } from '../../physics/constants';
+import type { HyperfineLevelSpec } from '../../physics/engine';
+import { sumField } from '../../physics/fields';
+import { combine, hasSensitivity, levelDerivatives, NO_SENSITIVITY, scaled, standardUncertainty, throughParams, type LevelParam, type Sensitivities } from '../../physics/uncertainty';
+import type { Problem } from '../../format/ast';
+import type { BeamModel } from '../../model/types';
+import { beamInputs } from '../beamInput';
+import type { GJLookup } from '../gJLookup';
+import { magnetFieldMap } from '../magnetFieldMap';
+import type { BeamResult } from '../resultTypes';
+import { peakUncertainty } from './beamPass';
+import { fieldKey, type SetupInputs } from './inputs';
+import { firstStep } from './sourceInputs';
+import { setUnc } from './uncField';
+
+/** The level constants a flight's moments depend on, as the spec names them. */
+const SPEC_PARAMS: readonly (LevelParam & keyof HyperfineLevelSpec)[] = ['A', 'B', 'C', 'gJ', 'gI'];
+
+/** Most inputs re-flown for one beam (each costs 2 flights per sublevel, more when its step is cut): our bound on the cost. */
+export const MAX_FLOWN_INPUTS = 48;
+
+interface Flown {
+  sens: Sensitivities;
+  label: string;
+  nudge: CoefficientNudge;
+}
+
+export function fieldMapBeamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: SetupInputs, problems: Problem[]): void {
+  const { level, magnet, driftM } = beam;
+  const mass = beam.species?.massKg?.value;
+  const mis = r.speeds?.mean_inverse_square_s2_per_m2;
+  const fm = r.field_map;
+  const inputs = beamInputs(beam, gJOf);
+  const map = magnetFieldMap(magnet);
+  if (!r.computed || !level || !magnet?.fieldT || !magnet.lengthM || !driftM || !mass || mis === undefined || !fm || !inputs || !map || inputs.spec.kind !== 'hyperfine') return;
+  const spec = inputs.spec;
+  const params = { ...inp.levelParams(level), field: inp.fieldSens.get(fieldKey({ kind: 'magnet', name: magnet.name })) ?? NO_SENSITIVITY };
+  const length = inp.magnetSens.get(magnet.name)?.length ?? NO_SENSITIVITY;
+  const drift = inp.beamDrift.get(beam.name) ?? NO_SENSITIVITY;
+  const apparatus = inp.beamGeometry.get(beam.name);
+  const temperature = beam.source?.value.kind === 'oven' ? apparatus?.temperature ?? NO_SENSITIVITY : NO_SENSITIVITY;
+  const T = beam.source?.value.kind === 'oven' ? beam.source.value.temperatureK : 1;
+  const L1 = magnet.lengthM.value;
+  const v = fm.reference_speed_m_per_s;
+
+  const flown: Flown[] = [];
+  const unmovable: { label: string; sens: Sensitivities }[] = [];
+  for (const s of inp.sourceInputs.get(magnet.name) ?? []) {
+    const step = firstStep(s.u, s.scale);
+    const label = inp.table.get(s.id)?.label ?? s.id;
+    if (!s.at(step)) {
+      unmovable.push({ label, sens: s.sens });
+      continue;
+    }
+    const at = (t: number): FlightChange => {
+      const moved = s.at(t)!;
+      return { field: sumField(moved.parts), centre: moved.centre };
+    };
+    flown.push({ sens: s.sens, label, nudge: { step, at } });
+  }
+  for (const p of SPEC_PARAMS) {
+    const sens = params[p];
+    if (!sens || !hasSensitivity(sens)) continue;
+    const value = spec[p] ?? 0;
+    const u = standardUncertainty(sens, inp.table);
+    if (!(u > 0)) continue;
+    flown.push({ sens, label: `${p} of ${level.name}`, nudge: { step: firstStep(u, Math.abs(value)), at: (t) => ({ spec: { ...spec, [p]: value + t } }) } });
+  }
+  if (hasSensitivity(length)) {
+    flown.push({ sens: length, label: `length of magnet ${magnet.name}`, nudge: { step: firstStep(standardUncertainty(length, inp.table), L1), at: (t) => ({ magnetLengthM: L1 + t }) } });
+  }
+  if (hasSensitivity(temperature)) {
+    // An oven's speeds scale as √T: the reference speed moves with it (the 1/T of ⟨1/v²⟩ is the peak pass's).
+    flown.push({ sens: temperature, label: 'oven temperature', nudge: { step: firstStep(standardUncertainty(temperature, inp.table), T), at: (t) => ({ speed: v * Math.sqrt((T + t) / T) }) } });
+  }
+  const anything = flown.length > 0 || unmovable.length > 0 || [drift, params.field, ...Object.values(apparatus ?? {})].some((s) => hasSensitivity(s));
+  if (!anything) return;
+
+  // A warning when an uncertainty the file wrote is lost, a note when only built-in data's are (as beamPass.ts).
+  const undefinedFor = (what: readonly { label: string; sens: Sensitivities }[], why: string): void => {
+    const written = what.some((w) => Object.keys(w.sens).some((id) => inp.table.get(id)?.written === true));
+    problems.push({
+      code: 'uncertainty-undefined',
+      severity: written ? 'warning' : 'info',
+      message: `beam '${beam.name}': ${why}: ${what.map((w) => w.label).join(', ')}; the uncertainties shown leave ${what.length > 1 ? 'them' : 'it'} out`,
+      range: beam.nameRange,
+    });
+  };
+  if (unmovable.length > 0) undefinedFor(unmovable, 'a source without current or magnetisation has no field to scale, so its strength cannot be propagated');
+  if (flown.length > MAX_FLOWN_INPUTS) {
+    undefinedFor(
+      flown.slice(MAX_FLOWN_INPUTS),
+      `more than ${MAX_FLOWN_INPUTS} uncertain inputs change the flights, and each needs its own; only the first ${MAX_FLOWN_INPUTS} are propagated`,
+    );
+    flown.length = MAX_FLOWN_INPUTS;
+  }
+
+  const labels = inputs.input.sublevels.map((s) => s.label);
+  const base = { field: map.field, centre: map.centre, magnetLengthM: L1, driftM: driftM.value, massKg: mass, spec, labels, maxFieldT: fm.moment_table_max_T };
+  const flyer = new CoefficientFlyer();
+  const start = flyer.fly(base, v);
+  if (!start.k || start.k.length !== r.sublevels.length) {
+    undefinedFor(flown, 'the flights could not be repeated for the uncertainties');
+    return;
+  }
+  const k0 = start.k;
+  const slopes = coefficientSlopes(flyer, base, v, k0, flown.map((f) => f.nudge));
+  const lost = flown.filter((_, j) => !slopes[j]!.dk);
+  if (lost.length > 0) {
+    undefinedFor(
+      lost,
+      "the deflections do not change smoothly with these inputs over their uncertainty (an atom's path meets a source or the field's shape changes abruptly), so they have no first-order uncertainty",
+    );
+  }
+
+  const d = levelDerivatives(spec, magnet.fieldT.value).states;
+  const deflections: Sensitivities[] = r.sublevels.map((s, i) => {
+    if (d.length === r.sublevels.length) {
+      const sMu = scaled(-PLANCK_H, throughParams(d[i]!.dSlope, params));
+      setUnc(s, 'moment_J_per_T', sMu, inp.table);
+      setUnc(s, 'moment_bohr', scaled(1 / BOHR_MAGNETON, sMu), inp.table);
+    }
+    const sK = combine([
+      ...flown.map((f, j) => [(slopes[j]!.dk?.[i] ?? 0) * mis, f.sens] as const),
+      [start.exitAngles[i]! * v * v * mis, drift],
+    ]);
+    setUnc(s, 'mean_deflection_m', combine([[1, sK], [-s.mean_deflection_m / T, temperature]]), inp.table);
+    return sK;
+  });
+  // The pattern's own input: each coefficient as an effective moment in a 1 T/m gradient (fieldMapPattern.ts).
+  const geometry = { ...inputs.input.geometry, gradientTPerM: 1 };
+  const lever = leverArmM2(geometry);
+  const effective = { ...inputs.input, geometry, sublevels: inputs.input.sublevels.map((s, i) => ({ ...s, momentJT: (k0[i]! * mass) / lever })) };
+  const flight = combine([[1, length], [1, drift]]);
+  peakUncertainty(r, beam, effective, inp, deflections, flight, { temperature, T, apparatus }, problems);
+}

@@ -1,0 +1,143 @@
+/**
+ * The uncertain inputs of a magnet built from field sources (docs/beam.md §7): each source's
+ * current, turns, radius, pair spacing, winding or segment length, the components of its place
+ * (`centre`, a wire's `through` and `return`), a block's size and the size of its magnetisation,
+ * and the components of the magnet's `at`. Each comes with the magnet's parts and beam-line
+ * centre rebuilt with that input moved, so its effect can be found by flying again.
+ */
+import { magnitudeAndGradient } from '../../physics/beam/trajectory';
+import { sumField } from '../../physics/fields';
+import type { FieldSourceSpec, Vec3 } from '../../physics/fields/types';
+import { combine, NO_SENSITIVITY, type Sensitivities } from '../../physics/uncertainty';
+import type { FieldSourceModel, MagnetModel, Valued } from '../../model/types';
+
+export interface MovedMagnet {
+  parts: FieldSourceSpec[];
+  centre: Vec3;
+}
+
+export interface SourceInput {
+  id: string;
+  /** {id: 1}. */
+  sens: Sensitivities;
+  u: number;
+  /** The size the step is measured against (the value, or the magnet's length for a place). */
+  scale: number;
+  /** The magnet with this input moved by t; undefined when it cannot be moved (a source with no current). */
+  at(t: number): MovedMagnet | undefined;
+}
+
+/** Registers an input in the setup's table; returns its sensitivities ({} when it is exact). */
+export type AddInput = (id: string, label: string, v: Valued<number> | undefined) => Sensitivities;
+
+const AXES = ['x', 'y', 'z'] as const;
+
+export function magnetSourceInputs(magnet: MagnetModel, add: AddInput): SourceInput[] {
+  const sources = magnet.sources ?? [];
+  const centre: Vec3 = magnet.atM?.value ?? [0, 0, 0];
+  const lengthScale = magnet.lengthM?.value ?? 0.1;
+  const out: SourceInput[] = [];
+  const push = (id: string, label: string, v: Valued<number> | undefined, scale: number, at: (t: number) => MovedMagnet | undefined): void => {
+    const sens = add(id, label, v);
+    if (sens === NO_SENSITIVITY || !v?.uncertainty) return;
+    out.push({ id, sens, u: v.uncertainty, scale: scale > 0 ? scale : lengthScale, at });
+  };
+  const withSource = (s: FieldSourceModel, moved: (parts: FieldSourceSpec[]) => FieldSourceSpec[] | undefined, c: Vec3 = centre): MovedMagnet | undefined => {
+    const own = moved(s.parts);
+    return own ? { parts: sources.flatMap((o) => (o === s ? own : o.parts)), centre: c } : undefined;
+  };
+  const components = (v: Valued<Vec3> | undefined, id: string, label: string, moved: (c: number, t: number) => MovedMagnet | undefined): void => {
+    v?.componentUncertainty?.forEach((u, c) => {
+      if (u !== undefined) push(`${id}.${AXES[c]}`, `${label} ${AXES[c]}`, { value: v.value[c], source: v.source, uncertainty: u, ...(v.range ? { range: v.range } : {}) }, lengthScale, (t) => moved(c, t));
+    });
+  };
+  for (const s of sources) {
+    if (s.parts.length === 0) continue;
+    const id = `source:${s.name}`;
+    const strength = (v: Valued<number> | undefined, what: 'current' | 'turns'): void => {
+      push(`${id}.${what}`, `${what} of ${s.kind} ${s.name}`, v, Math.abs(v?.value ?? 0), (t) => {
+        const x = v!.value;
+        if (x === 0) return undefined;
+        return withSource(s, (parts) => parts.map((p) => scaleStrength(p, (x + t) / x)));
+      });
+    };
+    strength(s.currentA, 'current');
+    strength(s.turns, 'turns');
+    push(`${id}.radius`, `radius of ${s.kind} ${s.name}`, s.radiusM, s.radiusM?.value ?? 0, (t) =>
+      withSource(s, (parts) => parts.map((p) => (p.kind === 'loop' || p.kind === 'solenoid' ? { ...p, radiusM: p.radiusM + t } : p))),
+    );
+    if (s.kind === 'coil' && s.parts.length === 2) {
+      push(`${id}.spacing`, `spacing of coil ${s.name}`, s.spacingM, s.spacingM?.value ?? 0, (t) =>
+        withSource(s, (parts) => parts.map((p, j) => (p.kind === 'loop' ? { ...p, centre: shift(p.centre, p.axis, (j === 0 ? -t : t) / 2) } : p))),
+      );
+    }
+    if (s.kind === 'solenoid' || (s.kind === 'wire' && s.lengthM)) {
+      push(`${id}.length`, `length of ${s.kind} ${s.name}`, s.lengthM, s.lengthM?.value ?? 0, (t) =>
+        withSource(s, (parts) => parts.map((p) => (p.kind === 'solenoid' || (p.kind === 'wire' && p.lengthM !== undefined) ? { ...p, lengthM: p.lengthM! + t } : p))),
+      );
+    }
+    components(s.centre, `${id}.centre`, `centre of ${s.kind} ${s.name}`, (c, t) => withSource(s, (parts) => parts.map((p) => movePart(p, c, t))));
+    components(s.through, `${id}.through`, `line of wire ${s.name}`, (c, t) => withSource(s, (parts) => parts.map((p, j) => (j === 0 ? movePart(p, c, t) : p))));
+    components(s.returnThrough, `${id}.return`, `return of wire ${s.name}`, (c, t) => withSource(s, (parts) => parts.map((p, j) => (j === 1 ? movePart(p, c, t) : p))));
+    components(s.sizeM, `${id}.size`, `size of slab ${s.name}`, (c, t) =>
+      withSource(s, (parts) => parts.map((p) => (p.kind === 'slab' ? { ...p, sizeM: withComponent(p.sizeM, c, p.sizeM[c] + t) } : p))),
+    );
+    const m = s.magnetisationT;
+    if (m?.uncertainty !== undefined) {
+      const size = Math.hypot(...m.value);
+      push(`${id}.magnetisation`, `magnetisation of slab ${s.name}`, { value: size, source: m.source, uncertainty: m.uncertainty, ...(m.range ? { range: m.range } : {}) }, size, (t) =>
+        size === 0 ? undefined : withSource(s, (parts) => parts.map((p) => scaleStrength(p, (size + t) / size))),
+      );
+    }
+  }
+  components(magnet.atM, `magnet:${magnet.name}.at`, `beam line of magnet ${magnet.name}`, (c, t) => ({ parts: sources.flatMap((o) => o.parts), centre: withComponent(centre, c, centre[c] + t) }));
+  return out;
+}
+
+/** The first step for an input of standard uncertainty u and size `scale`: u, kept between 1e-4 and 1e-2 of the scale (our choice: above the flights' noise, inside the linear range). */
+export function firstStep(u: number, scale: number): number {
+  const s = scale > 0 ? scale : u;
+  return Math.min(Math.max(u, 1e-4 * s), 1e-2 * s);
+}
+
+/** Sensitivities of |B| and ∂|B|/∂z at the beam line's centre to the sources' inputs (central differences of the exact field). */
+export function centreFieldSensitivities(inputs: readonly SourceInput[]): { field: Sensitivities; gradient: Sensitivities } {
+  const m = new Float64Array(4);
+  const at = (moved: MovedMagnet): [number, number] => {
+    magnitudeAndGradient(sumField(moved.parts)(moved.centre), m);
+    return [m[0], m[3]];
+  };
+  const field: [number, Sensitivities][] = [];
+  const gradient: [number, Sensitivities][] = [];
+  for (const input of inputs) {
+    const h = firstStep(input.u, input.scale);
+    const plus = input.at(h);
+    const minus = input.at(-h);
+    if (!plus || !minus) continue;
+    const [bp, gp] = at(plus);
+    const [bm, gm] = at(minus);
+    if (![bp, gp, bm, gm].every(Number.isFinite)) continue;
+    field.push([(bp - bm) / (2 * h), input.sens]);
+    gradient.push([(gp - gm) / (2 * h), input.sens]);
+  }
+  return { field: combine(field), gradient: combine(gradient) };
+}
+
+function scaleStrength(p: FieldSourceSpec, f: number): FieldSourceSpec {
+  if (p.kind === 'wire') return { ...p, currentA: p.currentA * f };
+  if (p.kind === 'slab') return { ...p, magnetisationT: [p.magnetisationT[0] * f, p.magnetisationT[1] * f, p.magnetisationT[2] * f] };
+  return { ...p, ampereTurns: p.ampereTurns * f };
+}
+
+function movePart(p: FieldSourceSpec, c: number, t: number): FieldSourceSpec {
+  if (p.kind === 'wire') return { ...p, point: withComponent(p.point, c, p.point[c] + t) };
+  return { ...p, centre: withComponent(p.centre, c, p.centre[c] + t) };
+}
+
+function shift(v: Vec3, axis: Vec3, t: number): Vec3 {
+  return [v[0] + t * axis[0], v[1] + t * axis[1], v[2] + t * axis[2]];
+}
+
+function withComponent(v: Vec3, c: number, x: number): Vec3 {
+  return [c === 0 ? x : v[0], c === 1 ? x : v[1], c === 2 ? x : v[2]];
+}
