@@ -10,8 +10,8 @@
 import { fifteenDigitsText } from './fifteenDigitsText';
 import { makePower, POWER_OFFSET, powerHi, powerHiHigh, powerHiLow, powerLo, SPLITTER } from './tenPowers';
 
-/** The most bytes one number takes: "-1.23456789012345e-300". */
-export const MAX_NUMBER_BYTES = 22;
+/** The most bytes written for one number: "-0.00000" and all 15 digits (the text is at most 22). */
+export const MAX_NUMBER_BYTES = 23;
 
 const float = new Float64Array(1);
 const words = new Uint32Array(float.buffer);
@@ -27,8 +27,6 @@ for (let i = 0; i < 100; i++) {
   PAIRS[2 * i] = 48 + Math.floor(i / 10);
   PAIRS[2 * i + 1] = 48 + (i % 10);
 }
-/** The 15 digits of the number being written. */
-const DIGITS = new Uint8Array(16);
 
 /** Writes x (finite) at out[p…], returns the position after it. out must have MAX_NUMBER_BYTES free. */
 export function writeFifteenDigits(out: Uint8Array, p: number, x: number): number {
@@ -64,31 +62,37 @@ export function writeFifteenDigits(out: Uint8Array, p: number, x: number): numbe
     else break;
   }
   if (x < 0) out[p++] = 45;
-  const nd = digitsOf(r);
+  // Two int32 halves (exact, as r < 2^53), so all digit arithmetic below is on small integers.
+  const high = Math.floor(r / 1e8) | 0; // the first 7 digits
+  const low = (r - high * 1e8) | 0; // the last 8
+  const nd = significantDigits(high, low);
   const n = e + 1; // value = 0.d1…d15 × 10^n
-  if (n > 0 && n <= 21) {
-    if (nd <= n) {
-      for (let j = 0; j < nd; j++) out[p++] = DIGITS[j]!;
-      for (let j = nd; j < n; j++) out[p++] = 48;
-    } else {
-      for (let j = 0; j < n; j++) out[p++] = DIGITS[j]!;
-      out[p++] = 46;
-      for (let j = n; j < nd; j++) out[p++] = DIGITS[j]!;
-    }
-    return p;
-  }
   if (n <= 0 && n > -6) {
     out[p++] = 48;
     out[p++] = 46;
     for (let j = n; j < 0; j++) out[p++] = 48;
-    for (let j = 0; j < nd; j++) out[p++] = DIGITS[j]!;
-    return p;
+    putDigits(out, p, high, low);
+    return p + nd;
   }
-  out[p++] = DIGITS[0]!;
+  if (n > 0 && n <= 21) {
+    if (nd <= n) {
+      putDigits(out, p, high, low);
+      p += nd;
+      for (let j = nd; j < n; j++) out[p++] = 48;
+      return p;
+    }
+    // d1…dn . dn+1…: digits one place on, the first n moved back over the gap
+    putDigits(out, p + 1, high, low);
+    for (let j = 0; j < n; j++) out[p + j] = out[p + j + 1]!;
+    out[p + n] = 46;
+    return p + nd + 1;
+  }
+  putDigits(out, p + 1, high, low);
+  out[p] = out[p + 1]!;
   if (nd > 1) {
-    out[p++] = 46;
-    for (let j = 1; j < nd; j++) out[p++] = DIGITS[j]!;
-  }
+    out[p + 1] = 46;
+    p += nd + 1;
+  } else p += 1;
   out[p++] = 101;
   let exponent = e;
   if (exponent < 0) {
@@ -108,33 +112,42 @@ export function writeFifteenDigits(out: Uint8Array, p: number, x: number): numbe
   return p;
 }
 
-/** The 15 digits of r (10^14 ≤ r < 10^15) into DIGITS, as two Smi halves; returns how many are left without trailing zeros. */
-function digitsOf(r: number): number {
-  const high = Math.floor(r / 1e8); // 7 digits; exact, r < 2^53
-  const low = r - high * 1e8; // 8 digits
-  const h1 = (high / 10000) | 0;
-  const h0 = high - h1 * 10000;
-  const top = (h1 / 100) | 0;
-  DIGITS[0] = 48 + top;
-  const mid = h1 - top * 100;
-  DIGITS[1] = PAIRS[2 * mid]!;
-  DIGITS[2] = PAIRS[2 * mid + 1]!;
-  fourDigits(h0, 3);
-  const l1 = (low / 10000) | 0;
-  fourDigits(l1, 7);
-  fourDigits(low - l1 * 10000, 11);
+/** How many of the 15 digits are left without trailing zeros (high: 7 digits, low: 8). */
+function significantDigits(high: number, low: number): number {
   let nd = 15;
-  while (DIGITS[nd - 1] === 48) nd--;
+  let v = low;
+  if (v === 0) {
+    nd = 7;
+    v = high;
+  }
+  while (v % 10 === 0) {
+    v = (v / 10) | 0;
+    nd--;
+  }
   return nd;
 }
 
-function fourDigits(v: number, at: number): void {
+/** All 15 digits at out[p…p+15), two at a time. */
+function putDigits(out: Uint8Array, p: number, high: number, low: number): void {
+  const h1 = (high / 10000) | 0;
+  const top = (h1 / 100) | 0;
+  out[p] = 48 + top;
+  pair(out, p + 1, h1 - top * 100);
+  four(out, p + 3, high - h1 * 10000);
+  const l1 = (low / 10000) | 0;
+  four(out, p + 7, l1);
+  four(out, p + 11, low - l1 * 10000);
+}
+
+function four(out: Uint8Array, p: number, v: number): void {
   const h = (v / 100) | 0;
-  const l = v - h * 100;
-  DIGITS[at] = PAIRS[2 * h]!;
-  DIGITS[at + 1] = PAIRS[2 * h + 1]!;
-  DIGITS[at + 2] = PAIRS[2 * l]!;
-  DIGITS[at + 3] = PAIRS[2 * l + 1]!;
+  pair(out, p, h);
+  pair(out, p + 2, v - h * 100);
+}
+
+function pair(out: Uint8Array, p: number, v: number): void {
+  out[p] = PAIRS[2 * v]!;
+  out[p + 1] = PAIRS[2 * v + 1]!;
 }
 
 function writeText(out: Uint8Array, p: number, s: string): number {
