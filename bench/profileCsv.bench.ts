@@ -43,7 +43,7 @@ export function runProfileCsvBench(): { name: string; lines: string[] } {
   const cells = table.flat();
   const header = ['position_m', 'total_per_m', ...view.parts.map((p) => `share_per_m[${p.label}]`)].join(',');
   const perCell = (format: (x: number) => string) => (): string => table.map((r) => r.map(format).join(',')).join('\n');
-  // Three groups, each alternated with the computation and set against its own median of it: the
+  // Groups, each alternated with the computation and set against its own median of it: the
   // comparisons leave much garbage, and a collector thread's CPU time counts to whatever runs then.
   const flattened = (f: () => string) => (): void => {
     const text = f();
@@ -51,13 +51,11 @@ export function runProfileCsvBench(): { name: string; lines: string[] } {
   };
   const before = (): string => `# sublevel profile: file=lithium-beam.sublevel\n${header}\n${JSON.stringify(table).slice(2, -2).replace(/\],\[/g, '\n')}\n`;
   const groups: [string, () => unknown][][] = [
+    [['writing the CSV (patternCsv)', () => patternCsv(view, about, 'profile')]],
+    [['the writer before (JSON.stringify table)', before]],
     [
-      ['writing the CSV (patternCsv)', () => patternCsv(view, about, 'profile')],
-      ['  and flattening it to one string', flattened(() => patternCsv(view, about, 'profile'))],
-    ],
-    [
-      ['the writer before (JSON.stringify table)', before],
-      ['  and flattening it to one string', flattened(before)],
+      ['patternCsv, flattened to one string', flattened(() => patternCsv(view, about, 'profile'))],
+      ['the writer before, flattened', flattened(before)],
     ],
     [
       ['one csvNumber per cell', perCell(csvNumber)],
