@@ -67,7 +67,7 @@ export function runProfileCsvBench(): { name: string; lines: string[] } {
     ],
   ];
   const lines: string[] = [];
-  for (let i = 0; i < 5; i++) for (const f of [compute, ...groups.flat().map(([, g]) => g)]) f(); // warm-up: every case compiled
+  for (let i = 0; i < 15; i++) for (const f of [compute, ...groups.flat().map(([, g]) => g)]) f(); // warm-up: every case compiled
   for (const cases of groups) {
     const computeTimes: number[] = [];
     const times = cases.map(() => [] as number[]);
