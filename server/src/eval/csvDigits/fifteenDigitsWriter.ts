@@ -57,6 +57,8 @@ export function writeFifteenDigits(out: Uint8Array, p: number, x: number): numbe
     const fraction = m - whole + (aHigh * hiHigh - m + aHigh * hiLow + aLow * hiHigh + aLow * hiLow + a * powerLo[i]!);
     if (fraction > 0.5 - TIE_MARGIN && fraction < 0.5 + TIE_MARGIN) return writeText(out, p, fifteenDigitsText(x));
     r = whole + Math.floor(fraction + 0.5);
+    // e was one too small, or the value rounds up to 10^(e+1): again with e + 1. r = 10^14 is
+    // right even from just below 10^e: only a double within an ulp of 10^e gets there.
     if (r >= 1e15) e++;
     else if (r < 1e14) e--;
     else break;
