@@ -1,14 +1,14 @@
 /**
- * The whole-table number formatter writes every cell exactly as the one CSV number formatter,
- * csvNumber, does: on random doubles across the whole exponent range, the boundaries where
- * ECMA-262 Number::toString switches to exponent notation (1e-7, 1e21), subnormals, integers
- * past 2^53, signed zeros, and tables with missing or non-finite cells.
+ * The whole-table writer writes every cell exactly as the one CSV number formatter, csvNumber,
+ * does: on random doubles across the whole exponent range, the boundaries where the layout
+ * switches to exponent notation (1e-7, 1e21), subnormals, integers past 2^53, signed zeros,
+ * tables with missing or non-finite cells, and tables larger than one of its output chunks.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { csvNumber, csvNumberRow, csvNumberRows } from '../../server/src/eval/machineText';
 
-const cellByCell = (rows: (number | undefined)[][]): string => rows.map((r) => r.map(csvNumber).join(',')).join('\n');
+const cellByCell = (rows: (number | null | undefined)[][]): string => rows.map((r) => r.map(csvNumber).join(',')).join('\n');
 
 const EDGES = [
   0, -0, 1, -1, 0.1, 1e-7, 9.999999999999999e-8, 1e-6, 1e21, 9.999999999999999e20, 1e20, 123456789012345680000, 2 ** 53, 2 ** 53 + 2,
@@ -20,7 +20,7 @@ describe('csvNumberRows', () => {
   it('matches csvNumber on the notation boundaries and extremes', () => {
     expect(csvNumberRows([EDGES])).toBe(cellByCell([EDGES]));
     expect(csvNumberRow(EDGES)).toBe(EDGES.map(csvNumber).join(','));
-    expect(csvNumberRows([[-0, 1e21, 1e-7]])).toBe('0,1e+21,1e-7');
+    expect(csvNumberRows([[-0, 1e21, 1e-7, 0.1 + 0.2, 9.999999999999999e-8]])).toBe('0,1e+21,1e-7,0.3,1e-7');
   });
 
   it('matches csvNumber cell for cell on random tables of doubles', () => {
@@ -34,9 +34,21 @@ describe('csvNumberRows', () => {
   });
 
   it('leaves missing and non-finite cells empty, keeping the other rows and cells', () => {
-    const rows = [[1.5, NaN, 2], [Infinity, -Infinity, undefined], [3, 4, 5]];
-    expect(csvNumberRows(rows)).toBe('1.5,,2\n,,\n3,4,5');
+    const rows = [[1.5, NaN, 2], [Infinity, -Infinity, undefined], [3, 4, 5], [null, 6]];
+    expect(csvNumberRows(rows)).toBe('1.5,,2\n,,\n3,4,5\n,6');
     expect(csvNumberRows(rows)).toBe(cellByCell(rows));
     expect(csvNumberRows([])).toBe('');
+    expect(csvNumberRows([[], []])).toBe('\n');
+  });
+
+  it('writes tables far larger than one output chunk, and long runs of empty rows', () => {
+    let seed = 7;
+    const next = (): number => ((seed = (seed * 16807) % 2147483647) / 2147483647 - 0.5) * 10 ** ((seed % 60) - 30);
+    const rows = Array.from({ length: 5000 }, (_, k) => (k % 97 === 0 ? [] : Array.from({ length: 10 }, next)));
+    expect(csvNumberRows(rows)).toBe(cellByCell(rows));
+    const empty = Array.from({ length: 100_000 }, () => [] as number[]);
+    expect(csvNumberRows(empty)).toBe('\n'.repeat(99_999));
+    const wide = [Array.from({ length: 20_000 }, (_, k) => -k / 3)];
+    expect(csvNumberRows(wide)).toBe(cellByCell(wide));
   });
 });

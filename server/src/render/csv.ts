@@ -2,7 +2,7 @@
  * The numbers behind each diagram, and the sweep and profile exports, as CSV in one convention
  * (docs/csv.md): a first comment line that says what the table is, `quantity_unit` column names
  * in SI (`field_T`, `energy_Hz[state]`, `moment_J_per_T[state]`, `position_m`, `offset_Hz`),
- * states sorted in one documented order, full double precision, and text cells quoted when
+ * states sorted in one documented order, 15 significant digits, and text cells quoted when
  * needed and defused against spreadsheet formula injection (labels come from users' files).
  */
 import { csvNumber as numCell, csvNumberRows } from '../eval/machineText';

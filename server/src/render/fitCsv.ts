@@ -1,6 +1,6 @@
 /**
  * Fits as one CSV table in long form (docs/fit.md): one row per fitted parameter, statistic,
- * calibration root and data point, values in SI with their unit, full double precision.
+ * calibration root and data point, values in SI with their unit, 15 significant digits.
  */
 import type { FitResult } from '../eval/fitResultTypes';
 import { csvCommentLine, textCell } from './csv';

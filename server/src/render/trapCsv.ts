@@ -1,6 +1,6 @@
 /**
  * Traps as one CSV table (docs/traps.md): one row per trap and sublevel, values in SI (the unit
- * is in each column name), full double precision, empty cells where a value does not apply.
+ * is in each column name), 15 significant digits, empty cells where a value does not apply.
  */
 import type { TrapResult } from '../eval/trapResultTypes';
 import { csvNumber as numCell } from '../eval/machineText';
