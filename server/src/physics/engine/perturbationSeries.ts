@@ -87,11 +87,19 @@ function rotateZeeman(vectors: Float64Array, z: Float64Array, n: number, zs: Flo
   return off;
 }
 
-/** Σ_l x[xAt + l n] y[yAt + l n]: the dot product of two columns of n × n blocks. */
-function columnDot(x: Float64Array, xAt: number, y: Float64Array, yAt: number, n: number): number {
-  let sum = 0;
-  for (let l = 0; l < n; l++, xAt += n, yAt += n) sum += x[xAt] * y[yAt];
-  return sum;
+/**
+ * Σ_l x[xAt + l·xStep] y[yAt + l·yStep] for l < n. Two running sums: on these short dot
+ * products one sum's chain of dependent additions, not the arithmetic, was the cost.
+ */
+function dot(x: Float64Array, xAt: number, xStep: number, y: Float64Array, yAt: number, yStep: number, n: number): number {
+  let even = 0;
+  let odd = 0;
+  let l = 1;
+  for (; l < n; l += 2, xAt += 2 * xStep, yAt += 2 * yStep) {
+    even += x[xAt] * y[yAt];
+    odd += x[xAt + xStep] * y[yAt + yStep];
+  }
+  return l === n ? even + odd + x[xAt] * y[yAt] : even + odd;
 }
 
 /**
@@ -114,8 +122,8 @@ function energySeries(values: Float64Array, n: number, sw: SeriesWorkspace): voi
   for (let k = 0; k < n; k++) psi[k * n + k] = 1;
   for (let k = 0; k < n; k++) orders[k] = values[k];
   // Plain recursion up to Ψ_m (and Z_s Ψ_m when the last order is odd): c_j = (Z_s Ψ_{j−1})_kk.
-  // Each element is summed in a local, in the order of the textbook loops (so the same numbers):
-  // on blocks of order 3–6 the loads and stores of running sums in memory were the cost.
+  // Each element is summed in locals, not in memory: on blocks of order 3–6 the loads and
+  // stores of running sums were the cost.
   const lastProduct = SERIES_ORDER % 2 === 1 ? STATE_ORDER : STATE_ORDER - 1;
   for (let j = 0; j <= lastProduct; j++) {
     // zpsi_j = Z_s Ψ_j (Ψ_0 = 1: Z_s itself)
@@ -125,11 +133,7 @@ function energySeries(values: Float64Array, n: number, sw: SeriesWorkspace): voi
     } else {
       for (let l = 0; l < n; l++) {
         const zRow = l * n;
-        for (let k = 0; k < n; k++) {
-          let sum = 0;
-          for (let i = 0, at = from + k; i < n; i++, at += n) sum += zs[zRow + i] * psi[at];
-          zpsi[from + zRow + k] = sum;
-        }
+        for (let k = 0; k < n; k++) zpsi[from + zRow + k] = dot(zs, zRow, 1, psi, from + k, n, n);
       }
     }
     const next = j + 1;
@@ -139,9 +143,7 @@ function energySeries(values: Float64Array, n: number, sw: SeriesWorkspace): voi
     const at = next * nn;
     for (let l = 0, lk = 0; l < n; l++) {
       for (let k = 0; k < n; k++, lk++) {
-        let sum = -zpsi[from + lk];
-        for (let i = 1, src = from + lk; i < next; i++, src -= nn) sum += orders[i * n + k] * psi[src];
-        psi[at + lk] = sum * invGap[lk];
+        psi[at + lk] = (dot(orders, n + k, n, psi, from + lk, -nn, j) - zpsi[from + lk]) * invGap[lk];
       }
     }
   }
@@ -150,21 +152,25 @@ function energySeries(values: Float64Array, n: number, sw: SeriesWorkspace): voi
   for (let k = 0; k < n; k++) {
     // <Ψ_a|Ψ_b>_k for a ≤ b (symmetric), as far as the sums below reach (a + b < SERIES_ORDER).
     for (let a = 1; a <= STATE_ORDER; a++) {
-      for (let b = a; b <= STATE_ORDER && a + b < SERIES_ORDER; b++) overlap[(a * s1 + b) * n + k] = columnDot(psi, a * nn + k, psi, b * nn + k, n);
+      for (let b = a; b <= STATE_ORDER && a + b < SERIES_ORDER; b++) overlap[(a * s1 + b) * n + k] = dot(psi, a * nn + k, n, psi, b * nn + k, n, n);
     }
     for (let j = STATE_ORDER + 1; j <= SERIES_ORDER; j++) {
       const m = j >> 1;
       const odd = j % 2 === 1;
       // <Ψ_m|Z_s|Ψ_m> (odd j) or <Ψ_{m−1}|Z_s|Ψ_m> (even j), with Z_s Ψ taken from the lower one.
-      let sum = columnDot(psi, m * nn + k, zpsi, (odd ? m : m - 1) * nn + k, n);
+      const head = dot(psi, m * nn + k, n, zpsi, (odd ? m : m - 1) * nn + k, n, n);
       // The double sum over the square a, b ≤ q (q = m for odd j, m − 1 for even j) by symmetry:
-      // the diagonal once, each pair a < b twice; even j adds the row a = m, b < m.
+      // the diagonal once, each pair a < b twice (in separate sums, so the chains are short);
+      // even j adds the row a = m, b < m.
       const q = odd ? m : m - 1;
+      let diagonal = 0;
+      let pairs = 0;
       for (let a = 1; a <= q; a++) {
-        for (let b = a; b <= q; b++) sum -= (a === b ? 1 : 2) * orders[(j - a - b) * n + k] * overlap[(a * s1 + b) * n + k];
+        diagonal += orders[(j - 2 * a) * n + k] * overlap[(a * s1 + a) * n + k];
+        pairs += dot(orders, (j - 2 * a - 1) * n + k, -n, overlap, (a * s1 + a + 1) * n + k, n, q - a);
       }
-      if (!odd) for (let b = 1; b < m; b++) sum -= orders[(j - m - b) * n + k] * overlap[(b * s1 + m) * n + k];
-      orders[j * n + k] = sum;
+      const row = odd ? 0 : dot(orders, (j - m - 1) * n + k, -n, overlap, (s1 + m) * n + k, s1 * n, m - 1);
+      orders[j * n + k] = head - diagonal - 2 * pairs - row;
     }
   }
   const k1 = SERIES_ORDER + 1;
