@@ -35,6 +35,8 @@ export interface SeriesWorkspace {
   coef: Float64Array;
   /** j c_kj (the slope's coefficients) at k SERIES_ORDER + j − 1, 1 ≤ j ≤ SERIES_ORDER. */
   slope: Float64Array;
+  /** j (j − 1) c_kj (the curvature's) at k SERIES_ORDER + j − 1, 2 ≤ j ≤ SERIES_ORDER; filled when curvatures are asked for. */
+  bend: Float64Array;
   /** Ψ_j (n × n, column k for energy k) at j n², j ≤ STATE_ORDER. */
   psi: Float64Array;
   /** Z_s Ψ_j at j n², j ≤ STATE_ORDER. */
@@ -62,6 +64,7 @@ export function makeSeriesWorkspace(n: number): SeriesWorkspace {
     zs: new Float64Array(n * n),
     coef: new Float64Array(n * k1),
     slope: new Float64Array(n * SERIES_ORDER),
+    bend: new Float64Array(n * SERIES_ORDER),
     psi: new Float64Array(s1 * n * n),
     zpsi: new Float64Array(s1 * n * n),
     invGap: new Float64Array(n * n),
@@ -224,6 +227,11 @@ export function expandAt(values: Float64Array, vectors: Float64Array, z: Float64
   energySeries(values, n, sw);
   let curv = 0;
   for (let k = 0; k < n; k++) curv = Math.max(curv, Math.abs(2 * sw.coef[k * (SERIES_ORDER + 1) + 2]));
+  if (curvature) {
+    for (let k = 0; k < n; k++) {
+      for (let j = 2; j <= SERIES_ORDER; j++) sw.bend[k * SERIES_ORDER + j - 1] = j * (j - 1) * sw.coef[k * (SERIES_ORDER + 1) + j];
+    }
+  }
   const tolC = curvature ? TRUNCATION_C * curv + 1e-300 : 0;
   const reach = reachOf(sw.coef, n, TRUNCATION_E * scaleE, TRUNCATION_M * maxZ * scaleT, tolC);
   if (!(reach > 0)) return;
@@ -307,10 +315,34 @@ export function evaluateSeries(
     store[momentRow + r] = s * momentPerUnit;
   }
   if (curvatureRow < 0) return;
-  for (r = from; r < to; r++) {
+  // d²E/dB², four fields a pass like the above.
+  const b = sw.bend;
+  const bTop = b[dBase + SERIES_ORDER];
+  for (r = from; r + 4 <= to; r += 4) {
+    const t0 = (fieldsT[r] - anchorT) * inv;
+    const t1 = (fieldsT[r + 1] - anchorT) * inv;
+    const t2 = (fieldsT[r + 2] - anchorT) * inv;
+    const t3 = (fieldsT[r + 3] - anchorT) * inv;
+    let b0 = bTop;
+    let b1 = bTop;
+    let b2 = bTop;
+    let b3 = bTop;
+    for (let j = SERIES_ORDER - 1; j >= 2; j--) {
+      const bj = b[dBase + j];
+      b0 = b0 * t0 + bj;
+      b1 = b1 * t1 + bj;
+      b2 = b2 * t2 + bj;
+      b3 = b3 * t3 + bj;
+    }
+    store[curvatureRow + r] = b0 * inv * inv;
+    store[curvatureRow + r + 1] = b1 * inv * inv;
+    store[curvatureRow + r + 2] = b2 * inv * inv;
+    store[curvatureRow + r + 3] = b3 * inv * inv;
+  }
+  for (; r < to; r++) {
     const t = (fieldsT[r] - anchorT) * inv;
-    let d2 = SERIES_ORDER * (SERIES_ORDER - 1) * top;
-    for (let j = SERIES_ORDER - 1; j >= 2; j--) d2 = d2 * t + j * (j - 1) * c[base + j];
+    let d2 = bTop;
+    for (let j = SERIES_ORDER - 1; j >= 2; j--) d2 = d2 * t + b[dBase + j];
     store[curvatureRow + r] = d2 * inv * inv;
   }
 }
