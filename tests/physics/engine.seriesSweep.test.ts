@@ -11,9 +11,9 @@ import path from 'node:path';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { BOHR_MAGNETON_HZ_PER_T, PLANCK_H } from '../../server/src/physics/constants';
-import { sweepLevel } from '../../server/src/physics/engine';
+import { breitRabi, sweepLevel } from '../../server/src/physics/engine';
 import type { FineTermSpec, HyperfineLevelSpec, LevelSpec, SweepResult } from '../../server/src/physics/engine';
-import { CS133_6P32 } from './engine.fixtures';
+import { CS133_6P32, GROUND_LEVELS } from './engine.fixtures';
 import { LI7_2P, RB87_5P } from './engine.wholeTerm.fixtures';
 
 const FUZZ = Number(process.env.FUZZ_RUNS ?? 0);
@@ -91,6 +91,24 @@ describe('series sweep = an exact solve at every field', () => {
       expect(e.moment).toBeLessThanOrEqual(1e-10);
       expect(e.curvature).toBeLessThanOrEqual(1e-9);
     }
+  });
+
+  it('blocks of order 1 and 2 in closed form (J = 1/2 levels): the Breit–Rabi formula, and the exact solve to 1e-14', () => {
+    // Every block of a J = 1/2 level has order 1 or 2, so the whole sweep takes smallBlockSweep.ts.
+    for (const [name, spec] of GROUND_LEVELS) {
+      const sweep = sweepLevel(spec, -0.3, 0.5, 801, { crossings: false, curvature: true });
+      expect(sweep.issues, name).toEqual([]);
+      const splitting = Math.abs(spec.A) * (spec.twoI + 1);
+      for (let p = 0; p < sweep.fieldsT.length; p += 20) {
+        const closed = breitRabi(spec, sweep.fieldsT[p]).states.map((c) => c.energyHz).sort((x, y) => x - y);
+        const ours = sweep.states.map((st) => st.energyHz[p]).sort((x, y) => x - y);
+        ours.forEach((e, k) => expect(Math.abs(e - closed[k]), `${name} at ${sweep.fieldsT[p]} T`).toBeLessThanOrEqual(1e-12 * splitting + 1e-12 * Math.abs(closed[k])));
+      }
+      expectSameSweep(spec, -0.3, 0.5, 801, 1e-14);
+      expectSameSweep(spec, 0, 2e-3, 401, 1e-14);
+    }
+    // A level whose 2 × 2 blocks have no coupling (ζ = 0) and fields whose squares underflow: solved exactly there.
+    expectSameSweep({ kind: 'fine', twoS: 1, L: 1, zeta: 0, gL: 1, gS: 2.0023 }, 0, -2.5e-172, 2, 0);
   });
 
   it('a quadrupole-only level (A = 0): zero-field levels of different F degenerate inside a block', () => {

@@ -46,7 +46,7 @@ const MOMENT_CHECK_CAP = 1e-10;
 const EPS = 2.220446049250313e-16;
 
 /** Write the exact solve in `ws` (at `fieldT`) as point p; returns the number of degenerate pairs the curvature left out. */
-function writeSolved(block: LevelBlock, ws: BlockWorkspace, fieldT: number, p: number, out: BlockOutput): number {
+export function writeSolved(block: LevelBlock, ws: BlockWorkspace, fieldT: number, p: number, out: BlockOutput): number {
   const n = block.size;
   const z = fieldDerivative(block, fieldT, ws.dz);
   const { store, points, curvature, curv } = out;

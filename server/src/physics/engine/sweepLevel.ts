@@ -13,6 +13,7 @@ import { findCrossings, type StateSlot } from './crossings';
 import { issue } from './issues';
 import { fieldSide, type LevelModel } from './levelModel';
 import { MAX_SWEEP_POINTS, MAX_SWEEP_VALUES, MAX_SWEEP_WORK } from './limits';
+import { isSmallBlock, sweepSmallBlock } from './smallBlockSweep';
 import type { EngineIssue, LevelSpec, SweepOptions, SweepResult, SweptState } from './types';
 import { checkField } from './validateSpec';
 
@@ -85,10 +86,12 @@ function runSweep(model: LevelModel, fieldsT: Float64Array, options: SweepOption
     }
     out.base = perState * first * points;
     // The series expands H0 + B·Z; a block with a B² (diamagnetic) term is solved at every field.
-    const left =
-      perField || block.size < SERIES_MIN_ORDER || block.quadratic !== undefined
-        ? sweepBlockPerField(block, fieldsT, ws, out)
-        : sweepBlockBySeries(block, fieldsT, anchors, out);
+    // Blocks of order 1 and 2 have closed forms.
+    let left: number;
+    if (perField || block.quadratic !== undefined) left = sweepBlockPerField(block, fieldsT, ws, out);
+    else if (isSmallBlock(block)) left = sweepSmallBlock(block, fieldsT, ws, out);
+    else if (block.size < SERIES_MIN_ORDER) left = sweepBlockPerField(block, fieldsT, ws, out);
+    else left = sweepBlockBySeries(block, fieldsT, anchors, out);
     if (left < 0) {
       issues.push(issue('error', 'solver-failed', 'The eigen-solver did not converge during the sweep.'));
       return null;
