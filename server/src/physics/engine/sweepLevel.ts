@@ -1,7 +1,8 @@
 /**
  * Field sweeps. The block model is built once; each block then goes through
  * every field (blockSweep.ts: exact solves at anchor fields and the anchors'
- * perturbation series between them, or an exact solve at every field), writing
+ * perturbation series between them, or an exact solve at every field;
+ * smallBlockSweep.ts: closed forms for blocks of order 1 and 2), writing
  * straight into the output arrays (no allocation per point). States are
  * followed by (block, rank), which is exact because levels of one block never
  * cross.
