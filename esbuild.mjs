@@ -1,6 +1,8 @@
 // Bundles the extension client, the language server and the CLI into dist/.
 // The physics core is shared: each bundle pulls it in from server/src.
 import * as esbuild from 'esbuild';
+import { writeUnitTable } from './scripts/unitTable/write.mjs';
+import { buildCli } from './scripts/cliBuild.mjs';
 
 const common = {
   bundle: true,
@@ -11,18 +13,16 @@ const common = {
   logLevel: 'warning',
 };
 
+// The unit table comes from mathjs at build time, so no bundle loads mathjs (docs/speed.md).
+await writeUnitTable();
+
 await Promise.all([
   esbuild.build({ ...common, entryPoints: ['client/src/extension.ts'], outfile: 'dist/client.js', external: ['vscode'] }),
   // The server is two bundles: a thin protocol layer that answers `initialize` at once, and the
   // analysis (parser, model, physics, mathjs) that it requires from beside itself afterwards.
   esbuild.build({ ...common, entryPoints: ['server/src/server.ts'], outfile: 'dist/server.js' }),
   esbuild.build({ ...common, entryPoints: ['server/src/service/serviceEntry.ts'], outfile: 'dist/service.js' }),
-  esbuild.build({
-    ...common,
-    entryPoints: ['server/src/cli/main.ts'],
-    outfile: 'dist/cli.js',
-    banner: { js: '#!/usr/bin/env node' },
-  }),
+  buildCli(),
   // The diagram panel's page script and stylesheet, loaded by the webview (no Node APIs there).
   esbuild.build({
     entryPoints: ['client/src/panel/page.ts'],
