@@ -37,8 +37,7 @@ export function termsOfEquivalentElectrons(l: number, n: number): LSTerm[] {
   const cached = equivalentCache.get(key);
   if (cached) return cached.map((t) => ({ ...t }));
 
-  const table = microstateTable(l, n);
-  const N = (ML: number, twoMS: number): number => table.get(ML)?.get(twoMS) ?? 0;
+  const N = microstateTable(l, n);
   const maxML = n * l; // loose upper bound is fine
   const terms: LSTerm[] = [];
   for (let L = 0; L <= maxML; L++) {
@@ -97,30 +96,34 @@ export function microstateCount(terms: LSTerm[]): number {
 
 /**
  * N(M_L, 2M_S) for l^n: number of ways to put n electrons in distinct spin-orbitals with the
- * given total projections. Dynamic programme over the 2(2l+1) spin-orbitals.
+ * given total projections. Dynamic programme over the 2(2l+1) spin-orbitals, on flat arrays
+ * indexed by (electrons placed, M_L, 2M_S): string-keyed maps made 4f⁹ cost a CLI start-up
+ * tens of milliseconds (docs/speed.md). The counts are exact integers either way.
  */
-function microstateTable(l: number, n: number): Map<number, Map<number, number>> {
-  // state key: `${k},${ML},${twoMS}` → ways, where k electrons have been placed
-  let states = new Map<string, number>([['0,0,0', 1]]);
+function microstateTable(l: number, n: number): (ML: number, twoMS: number) => number {
+  const maxML = n * l;
+  const width = 2 * maxML + 1; // M_L from −maxML to maxML
+  const height = 2 * n + 1; // 2M_S from −n to n
+  const plane = width * height;
+  const at = (k: number, ML: number, twoMS: number): number => k * plane + (ML + maxML) * height + (twoMS + n);
+  let ways = new Float64Array((n + 1) * plane);
+  ways[at(0, 0, 0)] = 1;
   for (let ml = -l; ml <= l; ml++) {
     for (const twoMs of [1, -1]) {
-      const next = new Map<string, number>(states);
-      for (const [key, ways] of states) {
-        const [k, ML, twoMS] = key.split(',').map(Number);
-        if (k >= n) continue;
-        const nk = `${k + 1},${ML + ml},${twoMS + twoMs}`;
-        next.set(nk, (next.get(nk) ?? 0) + ways);
+      const next = ways.slice();
+      // Each orbital takes at most one electron: add it to every state of k < n electrons.
+      for (let k = 0; k < n; k++) {
+        for (let ML = -maxML; ML <= maxML; ML++) {
+          for (let twoMS = -n; twoMS <= n; twoMS++) {
+            const w = ways[at(k, ML, twoMS)]!;
+            if (w === 0) continue;
+            // Reachable states never leave the box: |M_L| ≤ n·l and |2M_S| ≤ n for n electrons.
+            next[at(k + 1, ML + ml, twoMS + twoMs)]! += w;
+          }
+        }
       }
-      states = next;
+      ways = next;
     }
   }
-  const table = new Map<number, Map<number, number>>();
-  for (const [key, ways] of states) {
-    const [k, ML, twoMS] = key.split(',').map(Number);
-    if (k !== n) continue;
-    let row = table.get(ML);
-    if (!row) table.set(ML, (row = new Map()));
-    row.set(twoMS, ways);
-  }
-  return table;
+  return (ML, twoMS) => (Math.abs(ML) <= maxML && Math.abs(twoMS) <= n ? ways[at(n, ML, twoMS)]! : 0);
 }
