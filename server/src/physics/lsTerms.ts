@@ -96,34 +96,38 @@ export function microstateCount(terms: LSTerm[]): number {
 
 /**
  * N(M_L, 2M_S) for l^n: number of ways to put n electrons in distinct spin-orbitals with the
- * given total projections. Dynamic programme over the 2(2l+1) spin-orbitals, on flat arrays
- * indexed by (electrons placed, M_L, 2M_S): string-keyed maps made 4f⁹ cost a CLI start-up
- * tens of milliseconds (docs/speed.md). The counts are exact integers either way.
+ * given total projections. The spin-up and spin-down electrons fill the 2l+1 orbitals
+ * independently, so N is a sum over (up, down) counts of products of subset counts: ways[k][M]
+ * = number of k-orbital subsets of m_l = −l … l with Σ m_l = M (a small dynamic programme).
+ * String-keyed maps over all spin-orbitals made 4f⁹ cost a CLI start-up tens of milliseconds
+ * (docs/speed.md); the counts are exact integers either way.
  */
 function microstateTable(l: number, n: number): (ML: number, twoMS: number) => number {
-  const maxML = n * l;
-  const width = 2 * maxML + 1; // M_L from −maxML to maxML
-  const height = 2 * n + 1; // 2M_S from −n to n
-  const plane = width * height;
-  const at = (k: number, ML: number, twoMS: number): number => k * plane + (ML + maxML) * height + (twoMS + n);
-  let ways = new Float64Array((n + 1) * plane);
-  ways[at(0, 0, 0)] = 1;
+  const orbitals = 2 * l + 1;
+  const maxM = l * orbitals; // |Σ m_l| of any subset
+  const width = 2 * maxM + 1;
+  // ways[k * width + M + maxM]: subsets of k orbitals with Σ m_l = M.
+  const ways = new Float64Array((orbitals + 1) * width);
+  ways[maxM] = 1;
   for (let ml = -l; ml <= l; ml++) {
-    for (const twoMs of [1, -1]) {
-      const next = ways.slice();
-      // Each orbital takes at most one electron: add it to every state of k < n electrons.
-      for (let k = 0; k < n; k++) {
-        for (let ML = -maxML; ML <= maxML; ML++) {
-          for (let twoMS = -n; twoMS <= n; twoMS++) {
-            const w = ways[at(k, ML, twoMS)]!;
-            if (w === 0) continue;
-            // Reachable states never leave the box: |M_L| ≤ n·l and |2M_S| ≤ n for n electrons.
-            next[at(k + 1, ML + ml, twoMS + twoMs)]! += w;
-          }
-        }
+    // Largest k first, so each orbital is taken at most once (0/1 knapsack).
+    for (let k = orbitals; k >= 1; k--) {
+      for (let M = -maxM; M <= maxM; M++) {
+        const from = M - ml;
+        if (from < -maxM || from > maxM) continue;
+        ways[k * width + M + maxM]! += ways[(k - 1) * width + from + maxM]!;
       }
-      ways = next;
     }
   }
-  return (ML, twoMS) => (Math.abs(ML) <= maxML && Math.abs(twoMS) <= n ? ways[at(n, ML, twoMS)]! : 0);
+  const subsets = (k: number, M: number): number => (k < 0 || k > orbitals || M < -maxM || M > maxM ? 0 : ways[k * width + M + maxM]!);
+  return (ML, twoMS) => {
+    // up − down = 2M_S, up + down = n
+    if ((n + twoMS) % 2 !== 0) return 0;
+    const up = (n + twoMS) / 2;
+    const down = n - up;
+    if (up < 0 || down < 0) return 0;
+    let total = 0;
+    for (let M = -maxM; M <= maxM; M++) total += subsets(up, M) * subsets(down, ML - M);
+    return total;
+  };
 }
