@@ -2,7 +2,6 @@
 // The physics core is shared: each bundle pulls it in from server/src.
 import * as esbuild from 'esbuild';
 import { writeUnitTable } from './scripts/unitTable/write.mjs';
-import { buildCli } from './scripts/cliBuild.mjs';
 
 const common = {
   bundle: true,
@@ -22,7 +21,12 @@ await Promise.all([
   // analysis (parser, model, physics, mathjs) that it requires from beside itself afterwards.
   esbuild.build({ ...common, entryPoints: ['server/src/server.ts'], outfile: 'dist/server.js' }),
   esbuild.build({ ...common, entryPoints: ['server/src/service/serviceEntry.ts'], outfile: 'dist/service.js' }),
-  buildCli(),
+  esbuild.build({
+    ...common,
+    entryPoints: ['server/src/cli/main.ts'],
+    outfile: 'dist/cli.js',
+    banner: { js: '#!/usr/bin/env node' },
+  }),
   // The diagram panel's page script and stylesheet, loaded by the webview (no Node APIs there).
   esbuild.build({
     entryPoints: ['client/src/panel/page.ts'],
