@@ -18,7 +18,7 @@ await writeUnitTable();
 await Promise.all([
   esbuild.build({ ...common, entryPoints: ['client/src/extension.ts'], outfile: 'dist/client.js', external: ['vscode'] }),
   // The server is two bundles: a thin protocol layer that answers `initialize` at once, and the
-  // analysis (parser, model, physics, mathjs) that it requires from beside itself afterwards.
+  // analysis (parser, model, physics) that it requires from beside itself afterwards.
   esbuild.build({ ...common, entryPoints: ['server/src/server.ts'], outfile: 'dist/server.js' }),
   esbuild.build({ ...common, entryPoints: ['server/src/service/serviceEntry.ts'], outfile: 'dist/service.js' }),
   esbuild.build({
