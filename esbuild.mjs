@@ -1,6 +1,7 @@
 // Bundles the extension client, the language server and the CLI into dist/.
 // The physics core is shared: each bundle pulls it in from server/src.
 import * as esbuild from 'esbuild';
+import { writeUnitTable } from './scripts/unitTable/write.mjs';
 
 const common = {
   bundle: true,
@@ -11,10 +12,13 @@ const common = {
   logLevel: 'warning',
 };
 
+// The unit table comes from mathjs at build time, so no bundle loads mathjs (docs/speed.md).
+await writeUnitTable();
+
 await Promise.all([
   esbuild.build({ ...common, entryPoints: ['client/src/extension.ts'], outfile: 'dist/client.js', external: ['vscode'] }),
   // The server is two bundles: a thin protocol layer that answers `initialize` at once, and the
-  // analysis (parser, model, physics, mathjs) that it requires from beside itself afterwards.
+  // analysis (parser, model, physics) that it requires from beside itself afterwards.
   esbuild.build({ ...common, entryPoints: ['server/src/server.ts'], outfile: 'dist/server.js' }),
   esbuild.build({ ...common, entryPoints: ['server/src/service/serviceEntry.ts'], outfile: 'dist/service.js' }),
   esbuild.build({

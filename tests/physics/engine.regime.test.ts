@@ -92,3 +92,20 @@ describe('regime edge cases', () => {
     expect(regime(RB87_5S, 0.1, 2).issues.map((i) => i.code)).toEqual(['bad-fraction']);
   });
 });
+
+describe('regime limits searched on demand', () => {
+  it('give the same numbers in either order of reading, and the same verdicts at and around them', () => {
+    const linearFirst = regime(RB87_5S, 1e-4);
+    const lin = linearFirst.linearLimitT;
+    const strong = linearFirst.strongLimitT;
+    const strongFirst = regime(RB87_5S, 1e-4);
+    expect(strongFirst.strongLimitT).toBe(strong);
+    expect(strongFirst.linearLimitT).toBe(lin);
+    // Fields on either side of the linear limit: the early verdict (a partial scan) agrees with the limit read afterwards.
+    for (const b of [lin / 10, lin * 0.999999, lin, lin * 1.000001, lin * 10]) {
+      const r = regime(RB87_5S, b);
+      expect(r.verdict === 'weak field (linear)', String(b)).toBe(b <= lin);
+      expect(r.linearLimitT).toBe(lin);
+    }
+  });
+});

@@ -2,7 +2,7 @@
  * Exact sublevels of one level at one working field, from the any-field engine, with the regime
  * verdict that tells whether the weak-field (linear) picture still holds.
  */
-import { regime, solveLevel, type LevelSpec, type SublevelState } from '../physics/engine';
+import { buildLevelModel, regime, solveLevel, type LevelSpec, type SublevelState } from '../physics/engine';
 import { BOHR_MAGNETON } from '../physics/constants';
 import { signedHalfText } from './halves';
 import type { ExactSublevelResult, RegimeResultJson } from './resultTypes';
@@ -45,21 +45,29 @@ export function exactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
 }
 
 function solveExactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
-  const solved = solveLevel(spec, fieldT);
+  // One model for both: building a large level's model costs as much as solving it once.
+  const built = buildLevelModel(spec);
+  const solved = solveLevel(spec, fieldT, built);
   const noNucleus = spec.kind === 'hyperfine' && spec.twoI === 0;
   const errors = solved.issues.filter((i) => i.severity === 'error').map((i) => ({ code: i.code, message: i.message }));
   const notices = solved.issues.flatMap((i) => (i.severity === 'error' ? [] : [{ code: i.code, severity: i.severity, message: i.message }]));
   if (errors.length > 0) return { exact: [], errors, notices };
   // A level without zero-field structure has exactly linear energies in this single-level model: no regime to judge.
   if (!hasZeroFieldStructure(spec)) return { exact: solved.states.map((s) => toJson(s, noNucleus)), errors: [], notices };
-  const r = regime(spec, fieldT);
+  const r = regime(spec, fieldT, undefined, built);
+  // The limits stay unsearched until read (JSON output, a regime note, a hover): `check` of a file
+  // at lab fields needs only the verdict (physics/engine/regime.ts, docs/speed.md).
   const regimeJson: RegimeResultJson | undefined = r.issues.some((i) => i.severity === 'error')
     ? undefined
     : {
         x: Number.isFinite(r.x) ? r.x : null,
         verdict: r.verdict,
-        linear_limit_T: Number.isFinite(r.linearLimitT) ? r.linearLimitT : null,
-        strong_limit_T: Number.isFinite(r.strongLimitT) ? r.strongLimitT : null,
+        get linear_limit_T() {
+          return Number.isFinite(r.linearLimitT) ? r.linearLimitT : null;
+        },
+        get strong_limit_T() {
+          return Number.isFinite(r.strongLimitT) ? r.strongLimitT : null;
+        },
         fraction: r.fraction,
       };
   return { exact: solved.states.map((s) => toJson(s, noNucleus)), ...(regimeJson ? { regime: regimeJson } : {}), errors: [], notices };

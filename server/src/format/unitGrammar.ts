@@ -210,6 +210,20 @@ export function canonicalUnitName(name: string): string | undefined {
   return undefined;
 }
 
+/** Every name canonicalUnitName can return: the names the unit table (unitTable.ts) is generated for. */
+export function canonicalUnitNames(): string[] {
+  const names = new Set<string>(Object.values(SPECIAL_NAMES));
+  for (const symbol of new Set(Object.values(SYMBOLS))) {
+    names.add(symbol);
+    for (const prefix of new Set(Object.values(SHORT_PREFIXES))) names.add(prefix + symbol);
+  }
+  for (const long of new Set(Object.values(LONG_NAMES))) {
+    names.add(long);
+    for (const prefix of LONG_PREFIXES) names.add(prefix + long);
+  }
+  return [...names].sort();
+}
+
 /** Units with an offset (only allowed alone, with power 1). */
 export function isOffsetUnit(canonical: string): boolean {
   return canonical === 'degC';

@@ -1,7 +1,7 @@
 /**
  * Quantities: unit text is split by Sublevel's own grammar (unitGrammar.ts), each name is looked
- * up in our table, and the size and dimension of each name come from a private copy of mathjs'
- * Unit class (unitMath.ts). Document text is never handed to mathjs' parser.
+ * up in our table, and the size and dimension of each name come from a table generated from
+ * mathjs (unitTable.ts, read by unitLookup.ts). Document text is never handed to mathjs.
  *
  * Frequency-like values (level energies, hyperfine constants) are returned in Hz:
  * f = E/h for energies and f = c·σ for wave numbers, with the exact SI values of h and c.
@@ -11,16 +11,8 @@ import { makeProblem } from './codes';
 import { didYouMeanText, suggestNames } from './didYouMean';
 import { readNumberPrefix } from './numbers';
 import { canonicalUnitName, isOffsetUnit, parseUnitSyntax } from './unitGrammar';
-import { UnitMath } from './unitMath';
-import {
-  ATOMIC_MASS_UNIT,
-  BOHR_MAGNETON,
-  BOHR_RADIUS,
-  ELEMENTARY_CHARGE,
-  NUCLEAR_MAGNETON,
-  PLANCK_H,
-  SPEED_OF_LIGHT,
-} from '../physics/constants';
+import { BASE_DIMENSION_COUNT, convertScale, unitEntry } from './unitLookup';
+import { PLANCK_H, SPEED_OF_LIGHT } from '../physics/constants';
 
 export type Dimension =
   | 'flux-density'
@@ -45,24 +37,7 @@ export interface QuantityReading {
   problem?: Problem;
 }
 
-/** Sublevel's changes to mathjs' unit table: the first set replaces mathjs' own, the second adds. */
-export const UNIT_OVERRIDES = {
-  // mathjs' own eV predates the 2019 SI; the exact elementary charge replaces it.
-  eV: { definition: `${ELEMENTARY_CHARGE} J`, prefixes: 'short' },
-  electronvolt: { definition: `${ELEMENTARY_CHARGE} J`, prefixes: 'long' },
-};
-export const UNIT_ADDITIONS = {
-  G: { definition: '1e-4 T', prefixes: 'short' }, // gauss (CGS): 1 G = 1e-4 T exactly
-  gauss: { definition: '1e-4 T', prefixes: 'long' },
-  u: { definition: `${ATOMIC_MASS_UNIT} kg` },
-  Da: { definition: `${ATOMIC_MASS_UNIT} kg` },
-  muN: { definition: `${NUCLEAR_MAGNETON} J/T` },
-  muB: { definition: `${BOHR_MAGNETON} J/T` },
-  percent: { definition: '0.01' },
-  a0: { definition: `${BOHR_RADIUS} m` }, // Bohr radius (CODATA 2022), for ⟨r²⟩ in a0^2
-};
-UnitMath.createUnit(UNIT_OVERRIDES, { override: true });
-UnitMath.createUnit(UNIT_ADDITIONS);
+// Sublevel's changes to mathjs' unit table (the gauss, u, muB, …) are in unitDefinitions.ts.
 
 /** A unit reduced to an SI factor and a dimension vector (mathjs' base dimensions). */
 interface UnitValue {
@@ -82,7 +57,7 @@ const CACHE_LIMIT = 1000;
 
 function knownCanonical(name: string): string | undefined {
   const canonical = canonicalUnitName(name);
-  return canonical !== undefined && UnitMath.isValuelessUnit(canonical) ? canonical : undefined;
+  return canonical !== undefined && unitEntry(canonical) !== undefined ? canonical : undefined;
 }
 
 /** True when the whole text is a unit Sublevel reads, e.g. `T/m`, `cm^-1`, `%`. */
@@ -93,7 +68,7 @@ export function isUnitText(text: string): boolean {
 function evaluateUncached(text: string): UnitEvaluation {
   const syntax = parseUnitSyntax(text);
   if (!syntax.ok) return { ok: false, code: 'unit-malformed', message: syntax.message, start: syntax.start, end: syntax.end };
-  const dims = new Array<number>(UnitMath.BASE_DIMENSIONS.length).fill(0);
+  const dims = new Array<number>(BASE_DIMENSION_COUNT).fill(0);
   let factor = 1;
   for (const term of syntax.terms) {
     const canonical = knownCanonical(term.name);
@@ -115,12 +90,11 @@ function evaluateUncached(text: string): UnitEvaluation {
       if (syntax.terms.length !== 1 || term.power !== 1) {
         return { ok: false, code: 'unit-malformed', message: `${term.name} cannot be combined with other units or powers; use K`, start: term.start, end: term.end };
       }
-      const one = new UnitMath(1, canonical);
-      return { ok: true, value: { factor: 1, dims: [...one.dimensions], offsetUnit: canonical } };
+      return { ok: true, value: { factor: 1, dims: [...unitEntry(canonical)!.dims], offsetUnit: canonical } };
     }
-    const one = new UnitMath(1, canonical);
-    factor *= Math.pow(one.value, term.power);
-    one.dimensions.forEach((d, i) => (dims[i] = (dims[i] ?? 0) + d * term.power));
+    const one = unitEntry(canonical)!;
+    factor *= Math.pow(one.size, term.power);
+    one.dims.forEach((d, i) => (dims[i] = (dims[i] ?? 0) + d * term.power));
   }
   return { ok: true, value: { factor, dims } };
 }
@@ -150,15 +124,9 @@ const UNIT_WORDS: Readonly<Record<string, string>> = {
 function prefixedReading(text: string, value: UnitValue): string | undefined {
   const canonical = knownCanonical(text);
   if (canonical === undefined) return undefined;
-  let parts: { prefix: string; name: string };
-  try {
-    const u = new UnitMath(null, canonical).units[0]!;
-    parts = { prefix: (u.prefix as unknown as { name: string }).name, name: u.unit.name };
-  } catch {
-    return undefined;
-  }
-  const prefix = PREFIX_NAMES[parts.prefix];
-  const word = UNIT_WORDS[parts.name];
+  const entry = unitEntry(canonical)!;
+  const prefix = PREFIX_NAMES[entry.prefixName];
+  const word = UNIT_WORDS[entry.unitName];
   if (!prefix || !word) return undefined;
   const kind = (Object.keys(DIMENSIONS) as Dimension[]).find((d) => d !== 'dimensionless' && ACCEPTED_DIMS[d].some((ref) => sameDims(ref, value.dims)));
   const label = kind ? DIMENSIONS[kind].label : undefined;
@@ -295,7 +263,7 @@ function subRange(range: Range, start: number, end: number): Range {
 
 /** SI value of `value` written in a unit, or a problem with the right dimension named. */
 function toSI(value: number, unit: UnitValue, d: Dimension): number | undefined {
-  if (unit.offsetUnit) return d === 'temperature' ? new UnitMath(value, unit.offsetUnit).toNumber('K') : undefined;
+  if (unit.offsetUnit) return d === 'temperature' ? convertScale(value, unit.offsetUnit, 'K') : undefined;
   if (!ACCEPTED_DIMS[d].some((ref) => sameDims(ref, unit.dims))) return undefined;
   const si = value * unit.factor;
   if (d !== 'frequency-like') return si;
@@ -385,7 +353,7 @@ export function convertSI(valueSI: number, d: Dimension, unitText: string): numb
   if (d === 'dimensionless' && unitText === '') return valueSI;
   const e = evaluateUnit(unitText);
   if (!e.ok) return undefined;
-  if (e.value.offsetUnit) return d === 'temperature' ? new UnitMath(valueSI, 'K').toNumber(e.value.offsetUnit) : undefined;
+  if (e.value.offsetUnit) return d === 'temperature' ? convertScale(valueSI, 'K', e.value.offsetUnit) : undefined;
   const perUnit = toSI(1, e.value, d);
   if (perUnit === undefined || perUnit === 0) return undefined;
   return valueSI / perUnit;

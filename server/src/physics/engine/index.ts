@@ -27,6 +27,7 @@ export type {
   WholeTermSpec,
 } from './types';
 export { solveLevel } from './solveLevel';
+export { buildLevelModel } from './buildModel';
 export { sweepLevel } from './sweepLevel';
 export { regime } from './regime';
 export { breitRabi, breitRabiEnergy, linearZeeman, paschenBackLimit } from './closedForms';

@@ -17,7 +17,7 @@
  */
 import { BOHR_MAGNETON_HZ_PER_T } from '../constants';
 import { makeWorkspace, solveBlockAt } from './blockSolver';
-import { buildLevelModel } from './buildModel';
+import { buildLevelModel, type ModelResult } from './buildModel';
 import { issue } from './issues';
 import type { LevelModel } from './levelModel';
 import { MAX_SWEEP_WORK } from './limits';
@@ -72,8 +72,10 @@ function verdictFor(b: number, linearLimitT: number, strongLimitT: number): Regi
   return 'intermediate';
 }
 
-export function regime(spec: LevelSpec, fieldT: number, fraction = 0.01): RegimeResult {
-  const { model, issues } = buildLevelModel(spec);
+/** `built` is the spec's model when the caller already has it (it is not changed). */
+export function regime(spec: LevelSpec, fieldT: number, fraction = 0.01, built: ModelResult = buildLevelModel(spec)): RegimeResult {
+  const model = built.model;
+  const issues = [...built.issues];
   const empty = (msgs: EngineIssue[]): RegimeResult => ({
     x: Number.NaN,
     verdict: 'intermediate',
@@ -108,28 +110,90 @@ export function regime(spec: LevelSpec, fieldT: number, fraction = 0.01): Regime
     return { x, verdict: v, linearLimitT: Number.NaN, strongLimitT: Number.NaN, zeroFieldSpreadHz: spread, fraction, issues };
   }
 
+  const search = limitSearch(model, fraction, characteristicField(model, gDiff));
+  // A field at or below the linear limit is weak whatever the strong limit is (verdictFor).
+  const verdict = search.linearHoldsAt(b) ? 'weak field (linear)' : verdictFor(b, search.linearLimit(), search.strongLimit());
+  return {
+    x,
+    verdict,
+    get linearLimitT() {
+      return search.linearLimit();
+    },
+    get strongLimitT() {
+      return search.strongLimit();
+    },
+    zeroFieldSpreadHz: spread,
+    fraction,
+    issues,
+  };
+}
+
+interface LimitSearch {
+  /** True when the field is known to be at or below the linear limit; found with the fewest solves. */
+  linearHoldsAt(b: number): boolean;
+  linearLimit(): number;
+  strongLimit(): number;
+}
+
+/**
+ * The two limits, each searched only when first asked for. The verdict at a weak field needs the
+ * linear scan only up to that field (a fifth of the solves for a small file at a lab field: the
+ * CLI's start-up, docs/speed.md); the rest of the scan, its bisection and the strong search run
+ * when a limit is read. Every solve is a pure function of the field, so the limits are the same
+ * numbers, in any order of asking, as a search run from start to end.
+ */
+function limitSearch(model: LevelModel, fraction: number, bc: number): LimitSearch {
   let maxSlope = 0;
   for (const blk of model.blocks) for (const low of blk.low[0]) maxSlope = Math.max(maxSlope, Math.abs(low.slopeHzPerT));
+  const spread = model.zeroFieldSpreadHz;
   const ws = makeWorkspace(model.largestBlock);
   const linearFails = (f: number): boolean => !(formulaErrors(model, f, ws).linear <= fraction * maxSlope * f);
   const strongFails = (f: number): boolean => !(formulaErrors(model, f, ws).strong <= fraction * spread);
-
-  const bc = characteristicField(model, gDiff);
   const at = (k: number): number => bc * 10 ** (k / STEPS_PER_DECADE);
 
-  let linearLimitT = Number.POSITIVE_INFINITY;
-  for (let k = SCAN_LO; k <= SCAN_HI; k++) {
-    if (linearFails(at(k))) {
-      linearLimitT = k === SCAN_LO ? 0 : bisectLog(at(k - 1), at(k), linearFails, false);
-      break;
+  // The linear scan goes up from SCAN_LO; `passed` is the last step known to pass.
+  let passed = SCAN_LO - 1;
+  let linearLimitT: number | undefined;
+  /** Scans on until the limit is known or, given `b`, a passing step at or above b. */
+  const scanLinear = (b?: number): void => {
+    while (linearLimitT === undefined) {
+      const k = passed + 1;
+      if (k > SCAN_HI) {
+        linearLimitT = Number.POSITIVE_INFINITY;
+        return;
+      }
+      if (linearFails(at(k))) {
+        linearLimitT = k === SCAN_LO ? 0 : bisectLog(at(k - 1), at(k), linearFails, false);
+        return;
+      }
+      passed = k;
+      if (b !== undefined && at(k) >= b) return;
     }
-  }
-  let strongLimitT = 0;
-  for (let k = SCAN_HI; k >= SCAN_LO; k--) {
-    if (strongFails(at(k))) {
-      strongLimitT = k === SCAN_HI ? Number.POSITIVE_INFINITY : bisectLog(at(k), at(k + 1), strongFails, true);
-      break;
+  };
+  let strongLimitT: number | undefined;
+  const scanStrong = (): number => {
+    let limit = 0;
+    for (let k = SCAN_HI; k >= SCAN_LO; k--) {
+      if (strongFails(at(k))) {
+        limit = k === SCAN_HI ? Number.POSITIVE_INFINITY : bisectLog(at(k), at(k + 1), strongFails, true);
+        break;
+      }
     }
-  }
-  return { x, verdict: verdictFor(b, linearLimitT, strongLimitT), linearLimitT, strongLimitT, zeroFieldSpreadHz: spread, fraction, issues };
+    return limit;
+  };
+  return {
+    linearHoldsAt(b) {
+      scanLinear(b);
+      // A passing step at or above b puts the limit, which lies above every passing step, above b too.
+      return linearLimitT === undefined ? true : b <= linearLimitT;
+    },
+    linearLimit() {
+      scanLinear();
+      return linearLimitT!;
+    },
+    strongLimit() {
+      strongLimitT ??= scanStrong();
+      return strongLimitT;
+    },
+  };
 }

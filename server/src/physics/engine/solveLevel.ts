@@ -4,7 +4,7 @@
  */
 import { BOHR_MAGNETON_HZ_PER_T, PLANCK_H } from '../constants';
 import { curvaturesOf, makeWorkspace, slopesOf, solveBlockAt } from './blockSolver';
-import { buildLevelModel } from './buildModel';
+import { buildLevelModel, type ModelResult } from './buildModel';
 import { issue } from './issues';
 import { fieldSide, type LevelModel } from './levelModel';
 import type { EngineIssue, LevelSpec, SolveResult, SublevelState } from './types';
@@ -72,9 +72,13 @@ export function solveModel(model: LevelModel, fieldT: number): SolveResult {
   return { states, issues };
 }
 
-/** Every sublevel of `spec` at `fieldT` tesla (energies E/h in Hz, sorted ascending). */
-export function solveLevel(spec: LevelSpec, fieldT: number): SolveResult {
-  const { model, issues } = buildLevelModel(spec);
+/**
+ * Every sublevel of `spec` at `fieldT` tesla (energies E/h in Hz, sorted ascending). `built` is
+ * the spec's model when the caller already has it (it is not changed).
+ */
+export function solveLevel(spec: LevelSpec, fieldT: number, built: ModelResult = buildLevelModel(spec)): SolveResult {
+  const model = built.model;
+  const issues = [...built.issues];
   if (!model) return { states: [], issues };
   if (!checkField(fieldT, 'field', issues)) return { states: [], issues };
   const solved = solveModel(model, fieldT);
