@@ -50,6 +50,18 @@ describe('sublevel field: values', () => {
     expect(r.out.split('\n')[2]).toBe('0.01,0.002,0' + ','.repeat(16));
     expect(r.err).toMatch(/^note: 1 point lies on a conductor and has no field value \(first: The point lies on a wire/);
   });
+
+  it('has no value on the wire of a loop, alone or in a pair (the sum says which part it left out)', () => {
+    // bias: one loop of radius 6 cm at z = 9 cm; quad: two loops of radius 3.5 cm at z = ±3.5 cm.
+    expect(cli('field', FILE, '--source', 'bias', '--at', '0,6,9 cm').out).toMatch(/\n {2}no value: the point lies on the wire of a loop, where a thin loop has no field; that loop is left out there\.$/);
+    const p = JSON.parse(cli('field', FILE, '--source', 'quad', '--at', '-3.5,0,3.5 cm', '--format', 'json').out).points[0];
+    expect(p).toMatchObject({ B_T: null, note: 'The point lies on the wire of a loop, where a thin loop has no field; that loop is left out there.' });
+    // A grid through the pair's wires: those cells are empty, the others have values.
+    const grid = cli('field', FILE, '--source', 'quad', '--grid', 'x=-3.5:3.5cm,z=-3.5:3.5cm', '--points', '3', '--format', 'json');
+    const values = JSON.parse(grid.out).points.map((q: { B_T: number[] | null }) => q.B_T !== null);
+    expect(values).toEqual([false, true, false, true, true, true, false, true, false]);
+    expect(grid.err).toMatch(/^note: 4 points lie on a conductor/);
+  });
 });
 
 describe('sublevel field: formats', () => {
