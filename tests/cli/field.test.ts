@@ -69,7 +69,9 @@ describe('sublevel field: formats', () => {
     const r = cli('field', FILE, '--source', 'quad', '--at', '0,0,1cm', '--unit', 'G');
     expect(r.code).toBe(0);
     const lines = r.out.split('\n');
-    expect(lines[0]).toBe('field of quad at (0, 0, 10) mm:');
+    // The point echoes in the unit written on the command line.
+    expect(lines[0]).toBe('field of quad at (0, 0, 1) cm:');
+    expect(cli('field', FILE, '--source', 'quad', '--at', '0,0,10mm').out.split('\n')[0]).toBe('field of quad at (0, 0, 10) mm:');
     // The model reverses the loop on the +z side of an opposed pair: B_z < 0 above the centre.
     expect(lines[1]).toMatch(/^ {2}B {3}= \(0, 0, -99\.33\d*\) G$/);
     expect(lines[2]).toMatch(/^ {2}\|B\| = 99\.33\d* G$/);
@@ -80,7 +82,10 @@ describe('sublevel field: formats', () => {
 
   it('tabulates a line in text, and writes CSV with SI column names', () => {
     const text = cli('field', FILE, '--source', 'quad', '--along', '0,0,-1cm:0,0,1cm', '--points', '3').out.split('\n');
-    expect(text[0]).toBe('field of quad along (0, 0, -10) mm → (0, 0, 10) mm, 3 points:');
+    expect(text[0]).toBe('field of quad along (0, 0, -1) cm → (0, 0, 1) cm, 3 points:');
+    expect(text[1]).toMatch(/^x \(cm\) +y \(cm\) +z \(cm\) /);
+    // Units that differ between the ends: one unit by size for the whole table.
+    expect(cli('field', FILE, '--source', 'quad', '--along', '0,0,-1cm:0,0,10mm', '--points', '3').out.split('\n')[0]).toBe('field of quad along (0, 0, -1) cm → (0, 0, 1) cm, 3 points:');
     expect(text).toHaveLength(1 + 2 + 3);
     const csv = cli('field', FILE, '--along', '0,0,-1cm:0,0,1cm', '--points', '3', '--format', 'csv').out.split('\n');
     expect(csv[0]).toBe(`# sublevel field: file=${FILE}; sources=quad + bias + rail + pole`);
