@@ -29,8 +29,9 @@ export function cleanField(parts: readonly FieldSourceSpec[], fieldOf: FieldOf):
   const each = parts.map((p) => fieldOf([p]));
   return (point) => {
     const own = each.map((f) => f(point));
-    const on = own.find((s) => s.leftOut)?.leftOut?.[0];
-    if (on) return { onSource: on };
+    const k = own.findIndex((s) => s.leftOut);
+    // Each part was summed alone: its issue's index is made the part's place in `parts`.
+    if (k >= 0) return { onSource: { ...own[k]!.leftOut![0]!, partIndex: k } };
     const B = [0, 0, 0];
     const G = [0, 0, 0, 0, 0, 0, 0, 0, 0];
     let bScale = 0;
