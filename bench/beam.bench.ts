@@ -10,6 +10,7 @@
  */
 import { detectorPattern, type BeamGeometry, type BeamSublevel, type DetectorPattern, type SpeedDistribution } from '../server/src/physics/beam';
 import { ATOMIC_MASS_UNIT, BOHR_MAGNETON, ELECTRON_GS } from '../server/src/physics/constants';
+import { median, wallAndCpuMs } from './timing';
 
 /** Breit–Rabi slopes −∂E/∂B for J = 1/2, I = 7/2 at x = 0.5, nuclear term dropped. */
 function sixteenSublevels(): BeamSublevel[] {
@@ -65,11 +66,6 @@ function convergenceError(a: DetectorPattern, b: DetectorPattern): number {
   return Math.max(worst, Math.abs(ma - mb) / Math.sqrt(va), Math.abs(va / vb - 1));
 }
 
-function median(xs: number[]): number {
-  const s = [...xs].sort((p, q) => p - q);
-  return s[Math.floor(s.length / 2)];
-}
-
 export function runBeamBench(): { name: string; lines: string[] } {
   const sublevels = sixteenSublevels();
   const sources: [string, SpeedDistribution][] = [
@@ -85,12 +81,9 @@ export function runBeamBench(): { name: string; lines: string[] } {
     const cpu: number[] = [];
     let last: DetectorPattern | undefined;
     for (let i = 0; i < 60; i++) {
-      const c0 = process.cpuUsage();
-      const t0 = process.hrtime.bigint();
-      last = detectorPattern(input);
-      times.push(Number(process.hrtime.bigint() - t0) / 1e6);
-      const c1 = process.cpuUsage(c0);
-      cpu.push((c1.user + c1.system) / 1000);
+      const t = wallAndCpuMs(() => (last = detectorPattern(input)));
+      times.push(t.wall);
+      cpu.push(t.cpu);
     }
     const fine = detectorPattern({ ...input, bins: 8192 });
     const ms = median(times);

@@ -13,20 +13,9 @@ import { fieldPointPlan } from '../server/src/cli/fieldPoints';
 import { fieldText, sampleField } from '../server/src/cli/fieldCommand';
 import { renderFieldMap } from '../server/src/render/fieldMap';
 import { fieldMapView } from '../server/src/views/fieldMapView';
+import { cpuMs, median } from './timing';
 
 const RUNS = 15;
-
-function cpuMs(f: () => unknown): number {
-  const t0 = process.cpuUsage();
-  f();
-  const d = process.cpuUsage(t0);
-  return (d.user + d.system) / 1000;
-}
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[s.length >> 1]!;
-}
 
 export function runFieldMapBench(): { name: string; lines: string[] } {
   const model = analyze(readFileSync('examples/coils-and-wires.sublevel', 'utf8')).model!;

@@ -6,6 +6,7 @@
  */
 import { VACUUM_PERMEABILITY } from '../server/src/physics/constants';
 import { sumField, type FieldSourceSpec, type Vec3 } from '../server/src/physics/fields';
+import { bestMs } from './timing';
 
 const AXIS: Vec3 = [0, 0.6, 0.8];
 const LOOPS: FieldSourceSpec[] = Array.from({ length: 10 }, (_, i) => {
@@ -40,21 +41,11 @@ export function runFieldSourcesBench(): { name: string; lines: string[] } {
   const field = sumField(LOOPS);
   const N = 20_000;
   const points: Vec3[] = Array.from({ length: N }, (_, i) => [0.004 + 1e-7 * i, 0.003, 0.001 - 2e-8 * i]);
-  const time = (f: () => void): number => {
-    f();
-    let best = Infinity;
-    for (let r = 0; r < 7; r++) {
-      const t0 = performance.now();
-      f();
-      best = Math.min(best, performance.now() - t0);
-    }
-    return best;
-  };
   let sink = 0;
-  const exact = time(() => {
+  const exact = bestMs(() => {
     for (const p of points) sink += field(p).gradient[2][2];
   });
-  const dipole = time(() => {
+  const dipole = bestMs(() => {
     for (const p of points) sink += dipoleSum(p);
   });
   const perPointUs = (exact / N) * 1000;

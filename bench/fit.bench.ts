@@ -15,6 +15,7 @@ import { computePattern } from '../server/src/physics/beam/detectorPattern';
 import { ATOMIC_MASS_UNIT } from '../server/src/physics/constants';
 import { solveLevel, type HyperfineLevelSpec } from '../server/src/physics/engine';
 import { calibrateField, fitCurve, profileModel } from '../server/src/physics/fit';
+import { quartiles } from './timing';
 
 const spec: HyperfineLevelSpec = { kind: 'hyperfine', twoJ: 1, twoI: 3, gJ: 2.00233113, gI: -0.0009951414, A: 3417.341305452145e6 };
 
@@ -33,9 +34,7 @@ function time(run: () => void, repeats: number): Timing {
     run();
     ts.push(performance.now() - t0);
   }
-  ts.sort((a, b) => a - b);
-  const at = (q: number): number => ts[Math.min(ts.length - 1, Math.floor(q * ts.length))]!;
-  return { median: at(0.5), low: at(0.25), high: at(0.75) };
+  return quartiles(ts);
 }
 
 const ms = (t: Timing, digits: number): string => `${t.median.toFixed(digits)} ms (quartiles ${t.low.toFixed(digits)}–${t.high.toFixed(digits)})`;

@@ -5,7 +5,8 @@
 // loaded (no `call`), or exports a function named by `call` that returns (or
 // resolves to) { name?, lines: string[] }, which the runner prints.
 // `node bench/run.mjs eigen` runs only the named ones. Benchmarks print their
-// own figures; none is a pass/fail test.
+// own figures; none is a pass/fail test. Time and summarise through bench/timing.ts (CPU time,
+// wall and CPU of one call, best of n, median, quartiles) rather than a copy of your own.
 import { spawnSync } from 'node:child_process';
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';

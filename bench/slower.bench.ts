@@ -9,32 +9,22 @@ import type { HyperfineLevelSpec } from '../server/src/physics/engine';
 import { solveLevel } from '../server/src/physics/engine';
 import { sumField, type FieldSourceSpec } from '../server/src/physics/fields';
 import { axisField, checkDesign, drivenPair, idealField, idealProfile, simulateAtom } from '../server/src/physics/slower';
+import { bestMs } from './timing';
 
 // Steck, "Sodium D Line Data": g_J, A, B, g_I (as in the species table).
 const GROUND: HyperfineLevelSpec = { kind: 'hyperfine', twoJ: 1, twoI: 3, gJ: 2.002296, gI: -0.0008046108, A: 885.8130644e6 };
 const P32: HyperfineLevelSpec = { kind: 'hyperfine', twoJ: 3, twoI: 3, gJ: 1.3342, gI: -0.0008046108, A: 18.534e6, B: 2.724e6 };
 const T = { wavelengthM: 589.1583264e-9, lifetimeS: 16.2492e-9, massKg: 3.81754100782e-26 };
 
-function best(f: () => void, runs = 7): number {
-  f();
-  let b = Infinity;
-  for (let r = 0; r < runs; r++) {
-    const t0 = performance.now();
-    f();
-    b = Math.min(b, performance.now() - t0);
-  }
-  return b;
-}
-
 export function runSlowerBench(): { name: string; lines: string[] } {
-  const baseline = best(() => {
+  const baseline = bestMs(() => {
     for (let i = 0; i < 100; i++) {
       solveLevel(GROUND, 0.01);
       solveLevel(P32, 0.01);
     }
   }) / 100;
   let final = 0;
-  const whole = best(() => {
+  const whole = bestMs(() => {
     const pair = drivenPair(GROUND, P32, 'top', [1e-7]).pair!;
     const p = idealProfile({ ...T, rateHzPerT: pair.ratesHzPerT[0]! }, { captureMPerS: 950, finalMPerS: 30, safety: 0.55, design: 'spin_flip', saturation: 2.5 }).profile!;
     drivenPair(GROUND, P32, 'top', [1e-7, p.entryFieldT, idealField(p, p.lengthM / 2).BT, p.exitFieldT]);
@@ -52,7 +42,7 @@ export function runSlowerBench(): { name: string; lines: string[] } {
   const field = axisField(sumField(parts), { start: [0, 0, 0], direction: [0, 0, 1] });
   const common = { shiftHzPerT: pair.ratesHzPerT[0]!, wavelengthM: T.wavelengthM, saturation: 2.5 };
   let steps = 0;
-  const coils = best(() => {
+  const coils = bestMs(() => {
     checkDesign({ ...common, profile: p, field, points: 101 });
     steps = simulateAtom({ ...common, field, detuningHz: p.detuningHz, lifetimeS: T.lifetimeS, maxDecelerationMPerS2: p.maxDecelerationMPerS2, startSpeedMPerS: 950, endM: p.lengthM }).result!.steps;
   }, 3);

@@ -5,23 +5,14 @@
  * the exact profile at every sample, for the ratio.
  */
 import { VoigtShape, synthesizeSpectrum } from '../server/src/physics/lineshape';
+import { bestMs } from './timing';
 
 export function runSpectrumBench(): { name: string; lines: string[] } {
   const comps = Array.from({ length: 100 }, (_, k) => ({ frequencyHz: -2e9 + k * 4e7 + 1234.5, weight: 1 + (k % 3) }));
   const grid = { fromHz: -4e9, stepHz: 8e9 / 9999, points: 10_000 };
-  const time = (f: () => void): number => {
-    f();
-    let best = Infinity;
-    for (let r = 0; r < 7; r++) {
-      const t0 = performance.now();
-      f();
-      best = Math.min(best, performance.now() - t0);
-    }
-    return best;
-  };
   let k = 0;
-  const fast = time(() => synthesizeSpectrum(comps, 2.2e8, 3e6 * (1 + 1e-3 * k++), grid));
-  const exact = time(() => {
+  const fast = bestMs(() => synthesizeSpectrum(comps, 2.2e8, 3e6 * (1 + 1e-3 * k++), grid));
+  const exact = bestMs(() => {
     const shape = new VoigtShape(2.2e8, 3e6);
     const out = new Float64Array(grid.points);
     for (const c of comps) for (let i = 0; i < grid.points; i++) out[i] = out[i]! + c.weight * shape.at(grid.fromHz + i * grid.stepHz - c.frequencyHz);

@@ -13,6 +13,7 @@ import type { HyperfineLevelSpec } from '../server/src/physics/engine';
 import { sumField } from '../server/src/physics/fields';
 import type { FieldFunction, LoopSpec } from '../server/src/physics/fields/types';
 import { STANDARD_GRAVITY, energyCurves, summariseTrap, type TrapInput } from '../server/src/physics/traps';
+import { median, wallAndCpuMs } from './timing';
 
 const RB87: HyperfineLevelSpec = { kind: 'hyperfine', twoJ: 1, twoI: 3, gJ: 2.00233113, gI: -0.0009951414, A: 3417.341305452145e6 };
 const MASS = 86.909180531 * ATOMIC_MASS_UNIT;
@@ -38,22 +39,14 @@ function coils(): LoopSpec[] {
   return [loop(0.04, 0.04, 2000), loop(-0.04, 0.04, -2000), loop(-0.06, 0.02, 20)];
 }
 
-function median(xs: number[]): number {
-  const s = [...xs].sort((p, q) => p - q);
-  return s[Math.floor(s.length / 2)];
-}
-
 function timeIt(f: () => void, runs: number): { wall: number; cpu: number } {
   for (let i = 0; i < 5; i++) f(); // warm-up (JIT)
   const wall: number[] = [];
   const cpu: number[] = [];
   for (let i = 0; i < runs; i++) {
-    const c0 = process.cpuUsage();
-    const t0 = process.hrtime.bigint();
-    f();
-    wall.push(Number(process.hrtime.bigint() - t0) / 1e6);
-    const c1 = process.cpuUsage(c0);
-    cpu.push((c1.user + c1.system) / 1000);
+    const t = wallAndCpuMs(f);
+    wall.push(t.wall);
+    cpu.push(t.cpu);
   }
   return { wall: median(wall), cpu: median(cpu) };
 }

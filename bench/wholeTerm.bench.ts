@@ -7,6 +7,7 @@
 import { loadavg } from 'node:os';
 import { BOHR_RADIUS, ELECTRON_GS } from '../server/src/physics/constants';
 import { landeGJ, sweepLevel, termLevelConstants, type HyperfineLevelSpec, type WholeTermSpec } from '../server/src/physics/engine';
+import { median, quantile, wallAndCpuMs } from './timing';
 
 // Alkali D-line data compilation for ⁸⁷Rb (5P1/2 A recalled): the same numbers as tests/reference/engine_whole_term.json.
 const TERM: WholeTermSpec = {
@@ -26,11 +27,6 @@ const WITH_DIAMAGNETIC: WholeTermSpec = { ...TERM, r2M2: 40 * BOHR_RADIUS ** 2 }
 const POINTS = 2001;
 const RUNS = 31;
 
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)];
-}
-
 export function runWholeTermBench(): { name: string; lines: string[] } {
   const cases = [
     { name: '5P whole term (24 states)', states: 24, run: () => sweepLevel(TERM, 0, 1, POINTS, { crossings: false }) },
@@ -45,18 +41,15 @@ export function runWholeTermBench(): { name: string; lines: string[] } {
   for (let i = 0; i < 5; i++) for (const c of cases) c.run();
   for (let r = 0; r < RUNS; r++) {
     cases.forEach((c, k) => {
-      const c0 = process.cpuUsage();
-      const t0 = process.hrtime.bigint();
-      c.run();
-      times[k].push(Number(process.hrtime.bigint() - t0) / 1e6);
-      const used = process.cpuUsage(c0);
-      cpu[k].push((used.user + used.system) / 1e3);
+      const t = wallAndCpuMs(c.run);
+      times[k].push(t.wall);
+      cpu[k].push(t.cpu);
     });
   }
   // Ratio of the two runs of the same round (one after the other, so under the same load): its median and
   // quartiles say more on a shared machine than the ratio of two medians.
-  const paired = times[0].map((t, r) => t / cases[0].states / (times[1][r] / cases[1].states)).sort((a, b) => a - b);
-  const quartile = (q: number) => paired[Math.floor(q * (paired.length - 1))];
+  const paired = times[0].map((t, r) => t / cases[0].states / (times[1][r] / cases[1].states));
+  const quartile = (q: number) => quantile(paired, q);
   const perState = cases.map((c, k) => median(times[k]) / c.states);
   const best = cases.map((c, k) => Math.min(...times[k]) / c.states);
   const lines = cases.map((c, k) => `${c.name}: ${median(times[k]).toFixed(2)} ms median (best ${Math.min(...times[k]).toFixed(2)}), ${(perState[k] * 1000).toFixed(0)} µs per state`);

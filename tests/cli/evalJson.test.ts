@@ -38,7 +38,7 @@ describe('sublevel eval --format json', () => {
     expect(doc.diagnostics.map((d: { code: string }) => d.code)).toEqual(['coil-needs-cooling']);
     expect(evalJson('examples/rubidium-bias.sublevel').doc.fieldSources).toBeUndefined();
     const text = cli('eval', 'examples/coils-and-wires.sublevel').out;
-    expect(text).toContain('\ncoil bias: one loop\n  at the centre (0, 0, 90) mm: |B| = 8.3776 G, B = (0, 0, 8.3776) G\n');
+    expect(text).toContain('\ncoil bias: one loop\n  at the centre (0, 0, 9) cm: |B| = 8.3776 G, B = (0, 0, 8.3776) G\n');
   });
 
   it('gives the 87Rb ground hyperfine interval and g_F values', () => {

@@ -50,6 +50,18 @@ describe('sublevel field: values', () => {
     expect(r.out.split('\n')[2]).toBe('0.01,0.002,0' + ','.repeat(16));
     expect(r.err).toMatch(/^note: 1 point lies on a conductor and has no field value \(first: The point lies on a wire/);
   });
+
+  it('has no value on the wire of a loop, alone or in a pair (the sum says which part it left out)', () => {
+    // bias: one loop of radius 6 cm at z = 9 cm; quad: two loops of radius 3.5 cm at z = ±3.5 cm.
+    expect(cli('field', FILE, '--source', 'bias', '--at', '0,6,9 cm').out).toMatch(/\n {2}no value: the point lies on the wire of a loop, where a thin loop has no field; that loop is left out there\.$/);
+    const p = JSON.parse(cli('field', FILE, '--source', 'quad', '--at', '-3.5,0,3.5 cm', '--format', 'json').out).points[0];
+    expect(p).toMatchObject({ B_T: null, note: 'The point lies on the wire of a loop, where a thin loop has no field; that loop is left out there.' });
+    // A grid through the pair's wires: those cells are empty, the others have values.
+    const grid = cli('field', FILE, '--source', 'quad', '--grid', 'x=-3.5:3.5cm,z=-3.5:3.5cm', '--points', '3', '--format', 'json');
+    const values = JSON.parse(grid.out).points.map((q: { B_T: number[] | null }) => q.B_T !== null);
+    expect(values).toEqual([false, true, false, true, true, true, false, true, false]);
+    expect(grid.err).toMatch(/^note: 4 points lie on a conductor/);
+  });
 });
 
 describe('sublevel field: formats', () => {
@@ -57,7 +69,9 @@ describe('sublevel field: formats', () => {
     const r = cli('field', FILE, '--source', 'quad', '--at', '0,0,1cm', '--unit', 'G');
     expect(r.code).toBe(0);
     const lines = r.out.split('\n');
-    expect(lines[0]).toBe('field of quad at (0, 0, 10) mm:');
+    // The point echoes in the unit written on the command line.
+    expect(lines[0]).toBe('field of quad at (0, 0, 1) cm:');
+    expect(cli('field', FILE, '--source', 'quad', '--at', '0,0,10mm').out.split('\n')[0]).toBe('field of quad at (0, 0, 10) mm:');
     // The model reverses the loop on the +z side of an opposed pair: B_z < 0 above the centre.
     expect(lines[1]).toMatch(/^ {2}B {3}= \(0, 0, -99\.33\d*\) G$/);
     expect(lines[2]).toMatch(/^ {2}\|B\| = 99\.33\d* G$/);
@@ -68,7 +82,10 @@ describe('sublevel field: formats', () => {
 
   it('tabulates a line in text, and writes CSV with SI column names', () => {
     const text = cli('field', FILE, '--source', 'quad', '--along', '0,0,-1cm:0,0,1cm', '--points', '3').out.split('\n');
-    expect(text[0]).toBe('field of quad along (0, 0, -10) mm → (0, 0, 10) mm, 3 points:');
+    expect(text[0]).toBe('field of quad along (0, 0, -1) cm → (0, 0, 1) cm, 3 points:');
+    expect(text[1]).toMatch(/^x \(cm\) +y \(cm\) +z \(cm\) /);
+    // Units that differ between the ends: one unit by size for the whole table.
+    expect(cli('field', FILE, '--source', 'quad', '--along', '0,0,-1cm:0,0,10mm', '--points', '3').out.split('\n')[0]).toBe('field of quad along (0, 0, -1) cm → (0, 0, 1) cm, 3 points:');
     expect(text).toHaveLength(1 + 2 + 3);
     const csv = cli('field', FILE, '--along', '0,0,-1cm:0,0,1cm', '--points', '3', '--format', 'csv').out.split('\n');
     expect(csv[0]).toBe(`# sublevel field: file=${FILE}; sources=quad + bias + rail + pole`);

@@ -101,6 +101,17 @@ describe('a magnet built from sources', () => {
     expect(JSON.stringify(r)).not.toMatch(/NaN|Infinity/);
   });
 
+  it('a magnet centred on one of its conductors is an error on `at` naming that source, and nothing is computed from it', () => {
+    // `at` on the rail's return wire: the sum leaves that wire out there, so a value would mislead.
+    const text = setup().replace('  at      = 0, 0, 1.5 mm', '  at      = 0, -2, 0 mm');
+    const r = analyze(text).result!;
+    const found = r.diagnostics.filter((d) => d.code === 'magnet-at-on-source');
+    expect(found.map((d) => d.message)).toEqual(["the beam line of magnet 'selector' passes through a wire of source 'rails' at its centre, where the field is not defined; move `at`"]);
+    expect(found[0]!.line).toBe(text.split('\n').findIndex((l) => l.startsWith('  at ')) + 1);
+    expect(r.magnets[0]!.field_T).toBeUndefined();
+    expect(JSON.stringify(r)).not.toMatch(/NaN|Infinity/);
+  });
+
   it('warns of spin flips when the beam line passes the zero between two equal currents', () => {
     const text = setup().replace('  return    = 0, -2, 0 mm', '').replace('  sources = rails', '  sources = rails, twin').replace('  at      = 0, 0, 1.5 mm', '  at      = 0, 0, 0 mm') + '\nwire twin\n  current   = 900 A\n  through   = 0, -2, 0 mm\n  direction = x\n';
     const r = analyze(text).result!;

@@ -67,7 +67,7 @@ describe('a coil pair at its centre', () => {
     expect(r.gradient_T_per_m![0]![0]).toBeCloseTo(-r.axial_gradient_T_per_m! / 2, 15);
     expect(sourceHeadline(r)).toContain('(√3 R: the most uniform gradient)');
     const lines = sourceLines(r);
-    expect(lines[0]).toBe('at the centre (0, 0, 0) mm: |B| = 0 G, B = (0, 0, 0) G');
+    expect(lines[0]).toBe('at the centre (0, 0, 0) m: |B| = 0 G, B = (0, 0, 0) G');
     // Positive: just above the centre the upper (positive) loop is nearer.
     expect(lines[1]).toMatch(/^axial gradient ∂B_z\/∂z = 1\.18\d+ T\/m = 118\.\d+ G\/cm$/);
   });

@@ -89,6 +89,25 @@ describe('frequencies, fields, lengths', () => {
   });
 });
 
+describe('one length-unit rule (eval/lengthUnit.ts)', () => {
+  it('takes the unit written, else the largest of m, cm, mm, µm, nm that keeps the largest magnitude ≥ 1', async () => {
+    const { lengthUnitFor } = await import('../../server/src/eval/lengthUnit');
+    const { pointText } = await import('../../server/src/eval/fieldSourceText');
+    expect(lengthUnitFor(0.05)).toEqual({ symbol: 'cm', metres: 1e-2 });
+    expect(lengthUnitFor(-2.5)).toEqual({ symbol: 'm', metres: 1 });
+    expect(lengthUnitFor(0.001)).toEqual({ symbol: 'mm', metres: 1e-3 });
+    expect(lengthUnitFor(3e-7)).toEqual({ symbol: 'nm', metres: 1e-9 });
+    expect(lengthUnitFor(0)).toEqual({ symbol: 'm', metres: 1 });
+    expect(lengthUnitFor(0.05, 'mm')).toEqual({ symbol: 'mm', metres: 1e-3 });
+    expect(lengthUnitFor(0.05, 'um')).toEqual({ symbol: 'µm', metres: 1e-6 });
+    expect(lengthUnitFor(0.05, 'G')).toEqual({ symbol: 'cm', metres: 1e-2 });
+    // The same rule for one length and for a point: the largest coordinate picks the unit.
+    expect(lengthText(0.09)).toBe('9 cm');
+    expect(pointText([0.005, 0, 0.09])).toBe('(0.5, 0, 9) cm');
+    expect(pointText([0, 0, 0])).toBe('(0, 0, 0) m');
+  });
+});
+
 describe('unit echo', () => {
   it('shows a value in the unit the file wrote', () => {
     expect(fieldInUnit(0.025, { unit: 'mT' })).toBe('25 mT');

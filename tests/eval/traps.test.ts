@@ -93,3 +93,33 @@ describe('trap from an anti-Helmholtz pair', () => {
     expect(JSON.stringify(r.result)).not.toMatch(/NaN|Infinity/);
   });
 });
+
+describe('a trap on a conductor (the sum of its sources leaves that part out there)', () => {
+  const withWire = (centre: string) => `${PAIR('20 A')}wire w
+  current   = 3 A
+  through   = 0, 0, 0 cm
+  direction = x
+trap q
+  sources = quad, w
+  level   = ground
+${centre}`;
+
+  it('a wire through the default centre: an error at the trap’s name, no sublevels, no NaN', () => {
+    const r = analyze(withWire(''));
+    const p = r.problems.filter((x) => x.code === 'trap-on-conductor');
+    expect(p.map((x) => x.message)).toEqual(["trap 'q': The trap's centre lies on a wire of its sources, where the field has no value: no trap is computed. Move the centre or the source."]);
+    expect(p[0]!.severity).toBe('error');
+    const lines = withWire('').split('\n');
+    expect(lines[p[0]!.range.start.line]).toBe('trap q');
+    expect(r.problems.map((x) => x.code)).not.toContain('trap-region-invalid');
+    expect(r.result!.traps![0]!.computed).toBe(false);
+    expect(JSON.stringify(r.result)).not.toMatch(/NaN|Infinity/);
+  });
+
+  it('a centre given on the wire: the error sits on `centre`', () => {
+    const text = withWire('  centre  = 1 cm, 0, 0\n');
+    const p = analyze(text).problems.find((x) => x.code === 'trap-on-conductor')!;
+    expect(text.split('\n')[p.range.start.line]).toBe('  centre  = 1 cm, 0, 0');
+  });
+});
+

@@ -20,7 +20,7 @@ describe('hover on a field source', () => {
   it('an opposed pair: what it is, zero field and the gradient at the centre, the winding, the cautions in one line', () => {
     const h = hoverAt(EXAMPLE.replace('coil quad', 'coil qu|ad'));
     expect(h).toContain('coil quad: a pair wound in opposite senses (anti-Helmholtz type), spacing 7 cm = 2 R');
-    expect(h).toContain('at the centre (0, 0, 0) mm: |B| = 0 G, B = (0, 0, 0) G');
+    expect(h).toContain('at the centre (0, 0, 0) m: |B| = 0 G, B = (0, 0, 0) G');
     expect(h).toMatch(/axial gradient ∂B_z\/∂z = -979\.2\d* mT\/m = -97\.92\d* G\/cm/);
     expect(h).toContain('winding: 52.78 m of 1.2 mm copper, 0.8046 Ω at 20 °C; 13.26 A/mm², 181 W, 12.07 V (needs water cooling)');
     expect(h).toContain("⚠ Coil heating (181 W at 13.3 A/mm², 12.1 V): follow your lab's safety rules");
@@ -30,7 +30,7 @@ describe('hover on a field source', () => {
     const h = hoverAt(EXAMPLE.replace('slab pole', 'sl|ab pole'));
     expect(h).toContain('a uniformly magnetised rectangular block');
     expect(h).toContain('slab pole: 10 × 20 × 5 mm, μ0·M = 1.2 T');
-    expect(h).toContain('inside the block, at its centre (0, 0, -80) mm');
+    expect(h).toContain('inside the block, at its centre (0, 0, -8) cm');
     expect(h).toContain('⚠ Permanent magnet (μ0·M = 1.2 T)');
   });
 

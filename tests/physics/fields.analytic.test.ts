@@ -233,10 +233,13 @@ describe('points on a source', () => {
       expect(issues.map((i) => [i.code, i.partIndex])).toContainEqual([code, index]);
       const s = f(p);
       expectFinite(s);
+      // The sample itself says what the sum left out: the same issues as fieldIssuesAt.
+      expect(s.leftOut).toEqual(issues);
       const without = sumField(parts.filter((_, i) => i !== index))(p);
       expect(relVec(s.B, without.B)).toBeLessThan(1e-12);
     }
     expect(fieldIssuesAt(parts, [0.05, 0.05, 0.05])).toEqual([]);
+    expect(f([0.05, 0.05, 0.05]).leftOut).toBeUndefined();
   });
 
   it('invalid parts are reported and left out of the sum', () => {
@@ -247,6 +250,17 @@ describe('points on a source', () => {
       ['source-invalid-part', 2],
     ]);
     expect(sumField(bad)([1, 1, 1]).B).toEqual([0, 0, 0]);
+    // Invalid parts are the model's to report: the sample does not repeat them.
+    expect(sumField(bad)([1, 1, 1]).leftOut).toBeUndefined();
+  });
+
+  it('a part whose field overflows just off its conductor is left out and named, never Infinity', () => {
+    // 1e300 A at 1 µm: B = μ0 I/(2π ρ) ≈ 2e299 T is still a double, but the gradient's formula
+    // overflows on the way (IEEE 754 doubles end near 1.8e308) and gives NaN.
+    const wire: FieldSourceSpec = { kind: 'wire', point: [0, 0, 0], direction: [1, 0, 0], currentA: 1e300 };
+    const s = sumField([loop(0, 0.03, 100), wire])([0, 1e-6, 0]);
+    expectFinite(s);
+    expect(s.leftOut?.map((i) => [i.code, i.partIndex])).toEqual([['source-point-on-wire', 1]]);
   });
 });
 

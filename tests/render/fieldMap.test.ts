@@ -101,6 +101,22 @@ describe('the field map figure', () => {
     expect(pathPoints(d).filter((p) => p.move)).toHaveLength(2);
   });
 
+  it('through the real sum: a line across a rail leaves gaps at both wires (empty CSV cells), never NaN', async () => {
+    const { analyze } = await import('../../server/src/eval/analyze');
+    const { fieldMapFor } = await import('../../server/src/views/fieldMapDiagram');
+    // Two wires 12 mm apart: the map's line runs through both (the view's choice for wires alone),
+    // from −16 to 16 mm in 400 steps of 0.08 mm, so samples 125 and 275 fall on the wires.
+    const model = analyze('wire rail\n  current = 10 A\n  through = 0, 6, 0 mm\n  direction = x\n  return = 0, -6, 0 mm\n').model!;
+    const a = fieldMapFor(model, { view: 'fieldmap', theme: 'export' }, { kind: 'export' });
+    if (!a.ok) throw new Error(a.message);
+    expect(a.svg).not.toMatch(/NaN|Infinity/);
+    const rows = a.csv!.split('\n').filter((l) => /^-?\d/.test(l));
+    const empty = rows.filter((l) => /,,|,$/.test(l)).map((l) => Number(l.split(',')[0]));
+    expect(empty.map((m) => Math.round(m * 1e6))).toEqual([-6000, 6000]);
+    const d = all(byClass(parseSvg(a.svg), 'sl-magnitude')[0]!, (n) => n.name === 'path')[0]!.attrs.d!;
+    expect(pathPoints(d).filter((p) => p.move)).toHaveLength(3);
+  });
+
   it('turns logarithmic when |B| spans orders of magnitude', () => {
     const values = Array.from({ length: 101 }, (_, k) => 10 ** (-6 + (6 * k) / 100));
     expect(magnitudeAxis(values)).toMatchObject({ log: true });

@@ -5,6 +5,8 @@ import { analyze } from '../../server/src/eval/analyze';
 import { renderSlower } from '../../server/src/render';
 import { diagramFor } from '../../server/src/views/diagram';
 import { slowerView } from '../../server/src/views/slowerView';
+import { estimateTextWidth } from '../../server/src/render/frame';
+import { all, byClass, parseSvg, type Node } from './svgTree';
 
 const TEXT = readFileSync(new URL('../../examples/sodium-slower.sublevel', import.meta.url), 'utf8');
 
@@ -30,6 +32,38 @@ describe('slower view', () => {
     const svg = renderSlower(v, { kind: 'panel' });
     expect(svg).toContain('data-kind="coils"');
     expect(svg).toMatch(/data-kind="drop" data-z-m="0.3"/);
+  });
+
+  it('a steep exit: curves stay inside their plots, rule labels stay on the figure and apart', () => {
+    // Invented worst case: coils whose field falls far below the ideal one over the last 10 %, so
+    // the speed resonant with the laser goes below 0 there, and atoms dropped just before the exit.
+    const s = analyze(TEXT).result!.slowers![0]!;
+    const L = s.samples!.at(-1)!.z_m;
+    const samples = s.samples!.map((x) => ({ ...x, B_coils_T: x.z_m > 0.9 * L ? x.B_ideal_T - 0.2 * (x.z_m / L - 0.9) : x.B_ideal_T }));
+    const steep = slowerView({ ...s, samples: samples.map((x) => (x.z_m > 0.95 * L ? { ...x, resonant_speed_m_per_s: -300 } : x)), coils: { sources: ['c'], worst_over_design: 3, capture_m_per_s: 900, drop_at_m: 0.99 * L } })!;
+    const doc = parseSvg(renderSlower(steep, { kind: 'export' }));
+    const width = Number(doc.attrs.width ?? doc.attrs.viewBox?.split(' ')[2]);
+    const clips = new Map(all(doc, (n) => n.name === 'clipPath').map((c) => [c.attrs.id!, c.children[0]!]));
+    const curves = byClass(doc, 'sl-curve');
+    expect(curves.map((c) => c.attrs['data-kind'])).toEqual(['ideal', 'coils', 'resonant', 'flight']);
+    // Every curve is clipped, the speeds to the lower plot (below the field's plot).
+    const box = (c: Node) => clips.get(/^url\(#(.+)\)$/.exec(c.attrs['clip-path'] ?? '')?.[1] ?? '')!;
+    for (const c of curves) expect(box(c), c.attrs['data-kind']).toBeDefined();
+    expect(Number(box(curves[2]!).attrs.y)).toBeGreaterThan(Number(box(curves[0]!).attrs.y) + Number(box(curves[0]!).attrs.height));
+    // The drop label runs left of its rule near the exit, inside the figure; the two labels do not overlap.
+    const labels = [...byClass(doc, 'sl-zero-crossing'), ...byClass(doc, 'sl-drop')].map((g) => all(g, (n) => n.name === 'text')[0]!);
+    const spans = labels.map((t) => {
+      const x = Number(t.attrs.x);
+      const w = estimateTextWidth(t.text);
+      return { from: t.attrs['text-anchor'] === 'end' ? x - w : x, to: t.attrs['text-anchor'] === 'end' ? x : x + w, y: Number(t.attrs.y) };
+    });
+    for (const sp of spans) {
+      expect(sp.from).toBeGreaterThanOrEqual(0);
+      expect(sp.to).toBeLessThanOrEqual(width);
+    }
+    const [a, b] = spans;
+    expect(a!.y !== b!.y || a!.to <= b!.from || b!.to <= a!.from).toBe(true);
+    expect(labels[1]!.attrs['text-anchor']).toBe('end');
   });
 
   it('says plainly when there is no slower', () => {

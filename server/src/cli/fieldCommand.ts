@@ -16,6 +16,7 @@ import { table } from './table';
 import { selectSources } from './selectors';
 import { csvTable } from '../render/csv';
 import { csvNumber } from '../eval/machineText';
+import { lengthUnitFor } from '../eval/lengthUnit';
 import { trimNumber } from '../eval/quantityText';
 import type { FieldSourceModel, SetupModel } from '../model/types';
 import { magnitudeGradient, sumField } from '../physics/fields';
@@ -127,21 +128,16 @@ function textUnits(choice: FieldUnitName | undefined, rows: readonly FieldPointR
   return { field: { name: 'T', factor: 1 }, gradient: { name: 'T/m', factor: 1 } };
 }
 
-/** A length for positions: mm below 10 cm, else m; one unit for a whole table. */
-function lengthUnit(rows: readonly FieldPointRow[]): { name: string; factor: number } {
-  const max = largest(rows, (r) => r.point);
-  return max < 0.1 ? { name: 'mm', factor: 1e-3 } : max < 10 ? { name: 'cm', factor: 1e-2 } : { name: 'm', factor: 1 };
-}
-
 export function fieldText(names: string[], plan: FieldPointPlan, rows: readonly FieldPointRow[], unit: FieldUnitName | undefined): string[] {
   const u = textUnits(unit, rows);
-  const len = lengthUnit(rows);
+  // One length unit for the whole table: the one the options were written in, else by size.
+  const len = lengthUnitFor(largest(rows, (r) => r.point), plan.lengthUnit);
   // Exact cancellations leave ~1e-16 relative dust: below 1e-12 of the largest value it prints as 0.
   const maxB = largest(rows, (r) => (r.sample ? [magnitude(r.sample.B)] : []));
   const maxG = largest(rows, (r) => (r.sample ? r.sample.gradient.flat() : []));
   const fieldNum = (t: number): string => trimNumber(t / u.field.factor, 6, { scale: maxB / u.field.factor, relative: 1e-12 });
   const gradNum = (t: number): string => trimNumber(t / u.gradient.factor, 6, { scale: maxG / u.gradient.factor, relative: 1e-12 });
-  const pos = (p: Vec3): string => `(${p.map((c) => trimNumber(c / len.factor, 6, { scale: 1, relative: 1e-12 })).join(', ')}) ${len.name}`;
+  const pos = (p: Vec3): string => `(${p.map((c) => trimNumber(c / len.metres, 6, { scale: 1, relative: 1e-12 })).join(', ')}) ${len.symbol}`;
   const head = `field of ${names.join(', ')}`;
   if (plan.kind === 'point') {
     const r = rows[0]!;
@@ -157,9 +153,9 @@ export function fieldText(names: string[], plan: FieldPointPlan, rows: readonly 
     return out;
   }
   const what = plan.kind === 'line' ? `along ${pos(plan.from)} → ${pos(plan.to)}, ${rows.length} points` : `on a ${plan.counts[0]} × ${plan.counts[1]} grid`;
-  const header = [`x (${len.name})`, `y (${len.name})`, `z (${len.name})`, `B_x (${u.field.name})`, `B_y`, `B_z`, `|B|`, `∂|B|/∂x (${u.gradient.name})`, '∂|B|/∂y', '∂|B|/∂z'];
+  const header = [`x (${len.symbol})`, `y (${len.symbol})`, `z (${len.symbol})`, `B_x (${u.field.name})`, `B_y`, `B_z`, `|B|`, `∂|B|/∂x (${u.gradient.name})`, '∂|B|/∂y', '∂|B|/∂z'];
   const body = rows.map((r) => {
-    const p = r.point.map((c) => trimNumber(c / len.factor, 6, { scale: 1, relative: 1e-12 }));
+    const p = r.point.map((c) => trimNumber(c / len.metres, 6, { scale: 1, relative: 1e-12 }));
     if (!r.sample) return [...p, 'on a conductor', '', '', '', '', '', ''];
     const g = r.magnitudeGradient;
     return [...p, ...r.sample.B.map(fieldNum), fieldNum(magnitude(r.sample.B)), ...(g ? g.map(gradNum) : ['—', '—', '—'])];

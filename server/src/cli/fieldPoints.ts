@@ -14,17 +14,22 @@ export const MAX_FIELD_POINTS = 250_000;
 /** Largest coordinate accepted, m: far beyond any laboratory, small enough that squares stay finite. */
 export const MAX_COORDINATE_M = 1e3;
 
-export type FieldPointPlan =
+/** `lengthUnit`: the one length unit the options were written in, when they agree on one (reports echo it). */
+export type FieldPointPlan = { lengthUnit?: string } & (
   | { kind: 'point'; points: Vec3[] }
   | { kind: 'line'; from: Vec3; to: Vec3; points: Vec3[] }
-  | { kind: 'grid'; axes: [number, number]; counts: [number, number]; points: Vec3[] };
+  | { kind: 'grid'; axes: [number, number]; counts: [number, number]; points: Vec3[] }
+);
 
 const AXES = ['x', 'y', 'z'] as const;
 const NUMBER_THEN_UNIT = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?\s*(\S.*)$/;
 const BARE_NUMBER = /^\s*[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?\s*$/;
 
-/** A list of lengths where a unit written only on the last applies to the bare numbers before it. */
-export function readLengths(option: string, text: string, count: number): number[] {
+/**
+ * A list of lengths where a unit written only on the last applies to the bare numbers before it.
+ * The units written are added to `units` when given.
+ */
+export function readLengths(option: string, text: string, count: number, units?: Set<string>): number[] {
   const pieces = text.split(',');
   if (pieces.length !== count) throw new UsageError(`${option} needs ${count} comma-separated lengths such as ${count === 3 ? '0,0,1cm' : '-2:2cm'}, got '${text}'`);
   const last = pieces[pieces.length - 1]!;
@@ -34,6 +39,8 @@ export function readLengths(option: string, text: string, count: number): number
     if (bare && Number(p) === 0) return 0;
     const written = bare && trailingUnit ? `${p.trim()} ${trailingUnit}` : p;
     if (bare && !trailingUnit) throw new UsageError(`${option}: '${p.trim()}' needs a length unit, e.g. ${p.trim()}cm`);
+    const unit = bare ? trailingUnit : NUMBER_THEN_UNIT.exec(p.trim())?.[1]?.trim();
+    if (unit !== undefined) units?.add(unit);
     const r = readQuantityArgument(written, 'length', option);
     if (r.si === undefined) throw new UsageError(r.message ?? `${option}: cannot read '${p}'`);
     if (!Number.isFinite(r.si) || Math.abs(r.si) > MAX_COORDINATE_M) throw new UsageError(`${option}: ${p.trim()} is outside ±${MAX_COORDINATE_M} m`);
@@ -41,8 +48,8 @@ export function readLengths(option: string, text: string, count: number): number
   });
 }
 
-export function readPoint(option: string, text: string): Vec3 {
-  const [x, y, z] = readLengths(option, text, 3);
+export function readPoint(option: string, text: string, units?: Set<string>): Vec3 {
+  const [x, y, z] = readLengths(option, text, 3, units);
   return [x!, y!, z!];
 }
 
@@ -62,14 +69,14 @@ export function readCounts(text: string | undefined, kind: 'line' | 'grid'): [nu
 }
 
 /** `x=-2:2cm,z=-1:1cm`: two different axes, each with its range. */
-export function readGridRanges(text: string): { axes: [number, number]; ranges: [[number, number], [number, number]] } {
+export function readGridRanges(text: string, units?: Set<string>): { axes: [number, number]; ranges: [[number, number], [number, number]] } {
   const parts = text.split(/,(?=\s*[xyz]\s*=)/);
   const shape = "--grid needs two axes with ranges, e.g. 'x=-2:2cm,z=-1:1cm'";
   if (parts.length !== 2) throw new UsageError(`${shape}, got '${text}'`);
   const read = parts.map((p) => {
     const m = /^\s*([xyz])\s*=\s*(.+)$/.exec(p);
     if (!m) throw new UsageError(`${shape}, got '${p.trim()}'`);
-    const [a, b] = readLengths(`--grid ${m[1]}`, m[2]!.replace(':', ','), 2);
+    const [a, b] = readLengths(`--grid ${m[1]}`, m[2]!.replace(':', ','), 2, units);
     if (!(b! > a!)) throw new UsageError(`--grid ${m[1]}: the range must go from a smaller to a larger value, got '${m[2]!.trim()}'`);
     return { axis: AXES.indexOf(m[1] as 'x'), range: [a!, b!] as [number, number] };
   });
@@ -85,14 +92,20 @@ export interface PlanOptions {
 }
 
 export function fieldPointPlan(o: PlanOptions): FieldPointPlan {
+  const units = new Set<string>();
+  const plan = pointsOf(o, units);
+  return units.size === 1 ? { ...plan, lengthUnit: [...units][0]! } : plan;
+}
+
+function pointsOf(o: PlanOptions, units: Set<string>): FieldPointPlan {
   const given = [o.along !== undefined, o.grid !== undefined].filter(Boolean).length;
   if (given > 1) throw new UsageError('give one of --along or --grid (with --grid, --at places the plane)');
   if (o.along !== undefined) {
     if (o.at !== undefined) throw new UsageError('--at and --along do not go together: --along gives its own points');
     const ends = o.along.split(':');
     if (ends.length !== 2) throw new UsageError(`--along needs two points joined by ':', e.g. 0,0,-5cm:0,0,5cm, got '${o.along}'`);
-    const from = readPoint('--along', ends[0]!);
-    const to = readPoint('--along', ends[1]!);
+    const from = readPoint('--along', ends[0]!, units);
+    const to = readPoint('--along', ends[1]!, units);
     if (from.every((v, i) => v === to[i])) throw new UsageError('--along needs two different points');
     const [n] = readCounts(o.points, 'line');
     const points: Vec3[] = [];
@@ -103,8 +116,8 @@ export function fieldPointPlan(o: PlanOptions): FieldPointPlan {
     return { kind: 'line', from, to, points };
   }
   if (o.grid !== undefined) {
-    const { axes, ranges } = readGridRanges(o.grid);
-    const base = o.at !== undefined ? readPoint('--at', o.at) : ([0, 0, 0] as Vec3);
+    const { axes, ranges } = readGridRanges(o.grid, units);
+    const base = o.at !== undefined ? readPoint('--at', o.at, units) : ([0, 0, 0] as Vec3);
     const counts = readCounts(o.points, 'grid');
     const points: Vec3[] = [];
     // Rows of the second axis, the first axis fastest: the order a spreadsheet reads a map in.
@@ -120,7 +133,7 @@ export function fieldPointPlan(o: PlanOptions): FieldPointPlan {
   }
   if (o.points !== undefined) throw new UsageError('--points goes with --along or --grid');
   if (o.at === undefined) throw new UsageError('say where: --at x,y,z, --along A:B or --grid x=a:b,z=c:d');
-  return { kind: 'point', points: [readPoint('--at', o.at)] };
+  return { kind: 'point', points: [readPoint('--at', o.at, units)] };
 }
 
 /** Exact at both ends (a + t(b − a) would miss b by a rounding). */

@@ -1,12 +1,13 @@
 /**
  * The summed field of some parts as reports print it. Two things the bare sum does not say:
  * - a point on a conductor (a loop's wire, a wire, a winding, a block's face): the sum leaves that
- *   part out there, so a value would mislead; here the point has no value, only the issue;
+ *   part out there and says so in the sample's `leftOut`, so a value would mislead; here the point
+ *   has no value, only the issue;
  * - exact cancellations (the centre of an opposed coil pair, the axial derivative at the centre of a
  *   Helmholtz pair) leave rounding of ~1e-16 of the parts' own size, which would print as a value:
  *   below 1e-12 of that size a component is 0.
  */
-import { pointOnSource, type FieldIssue } from '../physics/fields';
+import type { FieldIssue } from '../physics/fields';
 import type { FieldFunction, FieldSample, FieldSourceSpec, Vec3 } from '../physics/fields/types';
 
 export const CANCELLATION_FLOOR = 1e-12;
@@ -20,29 +21,28 @@ export function cleanField(parts: readonly FieldSourceSpec[], fieldOf: FieldOf):
     // One part alone cannot cancel against itself.
     const only = fieldOf(parts);
     return (point) => {
-      const on = parts[0] && pointOnSource(parts[0], point);
-      return on ? { onSource: on } : { sample: only(point) };
+      const sample = only(point);
+      return sample.leftOut ? { onSource: sample.leftOut[0]! } : { sample };
     };
   }
   // The sum is made here from the parts' own fields, which also give the size of what cancels.
   const each = parts.map((p) => fieldOf([p]));
   return (point) => {
-    for (const part of parts) {
-      const on = pointOnSource(part, point);
-      if (on) return { onSource: on };
-    }
+    const own = each.map((f) => f(point));
+    const k = own.findIndex((s) => s.leftOut);
+    // Each part was summed alone: its issue's index is made the part's place in `parts`.
+    if (k >= 0) return { onSource: { ...own[k]!.leftOut![0]!, partIndex: k } };
     const B = [0, 0, 0];
     const G = [0, 0, 0, 0, 0, 0, 0, 0, 0];
     let bScale = 0;
     let gScale = 0;
-    for (const f of each) {
-      const own = f(point);
+    for (const s of own) {
       for (let i = 0; i < 3; i++) {
-        B[i] += own.B[i];
-        bScale += Math.abs(own.B[i]);
+        B[i] += s.B[i];
+        bScale += Math.abs(s.B[i]);
         for (let j = 0; j < 3; j++) {
-          G[3 * i + j] += own.gradient[i][j];
-          gScale = Math.max(gScale, Math.abs(own.gradient[i][j]));
+          G[3 * i + j] += s.gradient[i][j];
+          gScale = Math.max(gScale, Math.abs(s.gradient[i][j]));
         }
       }
     }

@@ -4,6 +4,7 @@
  * reads the same in the terminal and in the editor.
  */
 import type { FieldSourceResult } from './fieldSourceResultTypes';
+import { lengthUnitFor } from './lengthUnit';
 import { gradientText, lengthText, MISSING, trimNumber } from './quantityText';
 import { isGaussUnit } from './writtenUnit';
 
@@ -31,11 +32,10 @@ function vectorText(v: readonly number[], each: (x: number) => string, unit: str
   return `(${v.map((x) => each(x)).join(', ')}) ${unit}`;
 }
 
-/** A point with one length unit for all three coordinates, `(0, 0, 10) mm`. */
+/** A point with one length unit for all three coordinates (lengthUnit.ts), `(0, 0, 1) cm`. */
 export function pointText(p: readonly number[]): string {
-  const max = Math.max(...p.map(Math.abs));
-  const [factor, unit] = max === 0 || max < 0.1 ? [1e-3, 'mm'] : max < 10 ? [1e-2, 'cm'] : [1, 'm'];
-  return vectorText(p, (x) => trimNumber(x / factor, 5), unit);
+  const u = lengthUnitFor(Math.max(0, ...p.map(Math.abs)));
+  return vectorText(p, (x) => trimNumber(x / u.metres, 5), u.symbol);
 }
 
 export function sourceHeadline(r: FieldSourceResult): string {

@@ -4,6 +4,7 @@
  * Infinity (a missing value is MISSING), never "-0", and prints values below the computation's
  * own precision as 0 when the caller says what that precision is.
  */
+import { lengthUnitFor } from './lengthUnit';
 
 /** How a value that is not there (NaN, ±Infinity, undefined) is written in text. */
 export const MISSING = '—';
@@ -115,18 +116,12 @@ export function fieldText(tesla: number | null | undefined, digits = 6, noise?: 
   return `${trimNumber(v * 1e4 * 1e3, digits)} mG`;
 }
 
-/** A length in m, cm, mm, µm or nm. */
+/** A length in m, cm, mm, µm or nm (the one rule of lengthUnit.ts); 0 with a noise scale takes the scale's unit. */
 export function lengthText(m: number | null | undefined, digits = 4, noise?: NoiseFloor): string {
   const v = cleanValue(m, noise);
   if (v === undefined) return MISSING;
-  const a = v === 0 ? Math.abs(noise?.scale ?? 0) : Math.abs(v);
-  const shown = (scale: number, unit: string): string => `${trimNumber(v / scale, digits)} ${unit}`;
-  if (a === 0) return '0 m';
-  if (a >= 1) return shown(1, 'm');
-  if (a >= 1e-2) return shown(1e-2, 'cm');
-  if (a >= 1e-3) return shown(1e-3, 'mm');
-  if (a >= 1e-6) return shown(1e-6, 'µm');
-  return shown(1e-9, 'nm');
+  const u = lengthUnitFor(v === 0 ? Math.abs(noise?.scale ?? 0) : v);
+  return `${trimNumber(v / u.metres, digits)} ${u.symbol}`;
 }
 
 /** A field gradient in T/m (or mT/m when small). */

@@ -121,20 +121,23 @@ function axesOf(a: readonly [Vec3, Vec3, Vec3]): TrapSublevelResult['axes'] {
   return [clean(a[0]), clean(a[1]), clean(a[2])];
 }
 
-/** Where a trap's problem belongs: the setting it is about, else the trap's name. */
+/** Where a trap's problem belongs: the first setting it is about that the trap has, else the trap's name. */
 function rangeFor(trap: TrapModel, code: string): Range {
   const setting = (key: string): Range | undefined => trap.node.settings.find((s) => s.key.text === key)?.valueText.range;
-  const byCode: Record<string, string> = {
-    'trap-cut-outside': 'cut',
-    'trap-cut-invalid': 'cut',
-    'trap-temperature-invalid': 'temperature',
-    'trap-region-invalid': 'region',
-    'trap-field-not-finite': 'region',
-    'trap-region-reaches-source': 'region',
-    'trap-gravity-too-strong': 'sources',
+  const byCode: Record<string, string[]> = {
+    'trap-cut-outside': ['cut'],
+    'trap-cut-invalid': ['cut'],
+    'trap-temperature-invalid': ['temperature'],
+    'trap-region-invalid': ['region'],
+    'trap-on-conductor': ['centre', 'region'],
+    'trap-region-reaches-source': ['region'],
+    'trap-gravity-too-strong': ['sources'],
   };
-  const key = byCode[code];
-  return (key !== undefined ? setting(key) : undefined) ?? trap.nameRange;
+  for (const key of byCode[code] ?? []) {
+    const r = setting(key);
+    if (r) return r;
+  }
+  return trap.nameRange;
 }
 
 function toProblem(trap: TrapModel, i: TrapIssue): Problem {

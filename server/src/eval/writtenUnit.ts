@@ -5,16 +5,9 @@
  */
 import { convertSI, type Dimension } from '../format/units';
 import { fieldText, MISSING, prefixedText, trimNumber } from './quantityText';
+import { displayUnit } from './unitSpelling';
 
-/** Display spellings for ASCII unit texts. */
-const DISPLAY: Readonly<Record<string, string>> = {
-  uT: 'µT', um: 'µm', uK: 'µK', nK: 'nK', ueV: 'µeV', uG: 'µG', us: 'µs', 'cm^-1': 'cm⁻¹', '1/cm': 'cm⁻¹', 'cm-1': 'cm⁻¹', degC: '°C', muN: 'μ_N', muB: 'μ_B',
-  'μT': 'µT', 'μm': 'µm',
-};
-
-export function displayUnit(unit: string): string {
-  return DISPLAY[unit] ?? unit;
-}
+export { displayUnit } from './unitSpelling';
 
 /** `si` shown in `unit` (as written in the file), or undefined when the unit cannot express it. */
 export function inWrittenUnit(si: number | null | undefined, dimension: Dimension, unit: string | undefined, digits = 7): string | undefined {

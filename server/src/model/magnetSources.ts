@@ -5,7 +5,7 @@
  */
 import type { BlockNode } from '../format/ast';
 import { magnitudeAndGradient } from '../physics/beam/trajectory';
-import { sumField } from '../physics/fields';
+import { conductorOf, sumField } from '../physics/fields';
 import type { Vec3 } from '../physics/fields/types';
 import type { NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
@@ -41,12 +41,15 @@ export function readMagnetSources(node: BlockNode, magnet: MagnetModel, index: {
   const parts = list.flatMap((s) => s.parts);
   if (parts.length === 0) return; // each source has said why it is unusable
   const centre: Vec3 = magnet.atM?.value ?? [0, 0, 0];
-  const m = new Float64Array(4);
-  magnitudeAndGradient(sumField(parts)(centre), m);
-  if (!Number.isFinite(m[0]) || !Number.isFinite(m[3])) {
-    problems.add('magnet-at-on-source', `the beam line of magnet '${magnet.name}' passes through a source at its centre, where the field is not defined; move \`at\``, atSetting?.valueText.range ?? setting.valueText.range);
+  const sample = sumField(parts)(centre);
+  if (sample.leftOut) {
+    const on = sample.leftOut[0]!;
+    const owner = list.flatMap((s) => s.parts.map(() => s.name))[on.partIndex ?? 0];
+    problems.add('magnet-at-on-source', `the beam line of magnet '${magnet.name}' passes through ${conductorOf(on)} of source '${owner}' at its centre, where the field is not defined; move \`at\``, atSetting?.valueText.range ?? setting.valueText.range);
     return;
   }
+  const m = new Float64Array(4);
+  magnitudeAndGradient(sample, m);
   const from = `sources ${list.map((s) => s.name).join(', ')}`;
   magnet.fieldT = { value: m[0], source: from, range: setting.valueText.range };
   magnet.gradientTPerM = { value: m[3], source: from, range: setting.valueText.range };

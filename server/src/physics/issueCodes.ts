@@ -137,7 +137,7 @@ export const PHYSICS_RULES = {
   'trap-gravity-invalid': { severity: 'error', summary: 'A gravity vector that is not finite.' },
   'trap-temperature-invalid': { severity: 'error', summary: 'A cloud temperature not above 0 K.' },
   'trap-cut-invalid': { severity: 'error', summary: 'An RF cut that is not an energy above 0.' },
-  'trap-field-not-finite': { severity: 'error', summary: 'The field is not finite inside the trap region (a wire or loop passes through it).' },
+  'trap-on-conductor': { severity: 'error', summary: 'The trap centre, or a point of the trap region, lies on a conductor of its sources, where the field has no value.' },
   'trap-region-reaches-source': { severity: 'warning', summary: 'A trap region given by hand that reaches a conductor of its sources.' },
   'trap-holds-nothing': { severity: 'warning', summary: 'The trap holds no sublevel of the level.' },
   'trap-gravity-too-strong': { severity: 'warning', summary: 'A low-field seeker the trap cannot hold against gravity, with the gradient it needs.' },

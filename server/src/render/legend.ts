@@ -21,6 +21,20 @@ const SAMPLE = 22;
 const GAP = 18;
 const ROW = 18;
 
+/** One entry: its sample (area, line, marker) at x…x+SAMPLE around the baseline y, then its label. */
+function entrySvg(e: LegendEntry, x: number, y: number, pal: Palette): string {
+  const parts: string[] = [];
+  const mid = x + SAMPLE / 2;
+  if (e.area) parts.push(el('rect', { x, y: y - 6, width: SAMPLE, height: 10, fill: e.area, 'fill-opacity': 0.18 }));
+  if (e.line) {
+    const d = e.line.vertical ? `M${px(mid)},${px(y - 7)}V${px(y + 5)}` : `M${px(x)},${px(y)}H${px(x + SAMPLE)}`;
+    parts.push(el('path', { d, stroke: e.colour, 'stroke-width': e.line.width, 'stroke-dasharray': e.line.dash, fill: 'none' }));
+  }
+  if (e.marker) parts.push(el('path', { d: markerPath(e.marker, mid, y, 4), fill: e.colour, stroke: e.colour }));
+  parts.push(el('text', { x: x + SAMPLE + 6, y: y + 4, fill: pal.text }, text(e.label)));
+  return el('g', { class: 'sl-legend-entry' }, parts);
+}
+
 export function legendRows(entries: LegendEntry[], x0: number, y0: number, maxWidth: number, pal: Palette): { svg: string; height: number } {
   const items: string[] = [];
   let x = x0;
@@ -31,36 +45,28 @@ export function legendRows(entries: LegendEntry[], x0: number, y0: number, maxWi
       x = x0;
       y += ROW;
     }
-    const parts: string[] = [];
-    const mid = x + SAMPLE / 2;
-    if (e.area) parts.push(el('rect', { x, y: y - 6, width: SAMPLE, height: 10, fill: e.area, 'fill-opacity': 0.18 }));
-    if (e.line) {
-      const d = e.line.vertical ? `M${px(mid)},${px(y - 7)}V${px(y + 5)}` : `M${px(x)},${px(y)}H${px(x + SAMPLE)}`;
-      parts.push(el('path', { d, stroke: e.colour, 'stroke-width': e.line.width, 'stroke-dasharray': e.line.dash, fill: 'none' }));
-    }
-    if (e.marker) parts.push(el('path', { d: markerPath(e.marker, mid, y, 4), fill: e.colour, stroke: e.colour }));
-    parts.push(el('text', { x: x + SAMPLE + 6, y: y + 4, fill: pal.text }, text(e.label)));
-    items.push(el('g', { class: 'sl-legend-entry' }, parts));
+    items.push(entrySvg(e, x, y, pal));
     x += w + GAP;
   }
   return { svg: el('g', { class: 'sl-legend', 'font-size': 11 }, items), height: y - y0 + ROW };
 }
 
+/** Where the legend of a figure with plots stacked under its title starts (the baseline of its first row). */
+const UNDER_TITLE_Y = 46;
+
+/**
+ * The legend under a figure's title, in rows across the plot's width from `left` to `right`:
+ * its SVG and `below`, the y where what follows starts (`gap` under the last row).
+ */
+export function legendUnderTitle(entries: LegendEntry[], left: number, right: number, gap: number, pal: Palette): { svg: string; below: number } {
+  const rows = legendRows(entries, left, UNDER_TITLE_Y, right - left, pal);
+  return { svg: rows.svg, below: UNDER_TITLE_Y + rows.height + gap };
+}
+
 /** A legend stacked in one column; entries beyond `maxRows` are summarised as "+n more". */
 export function legendColumn(entries: LegendEntry[], x0: number, y0: number, maxRows: number, pal: Palette): string {
   const shown = entries.length > maxRows ? entries.slice(0, Math.max(1, maxRows - 1)) : entries;
-  const items = shown.map((e, i) => {
-    const y = y0 + i * ROW;
-    const parts: string[] = [];
-    const mid = x0 + SAMPLE / 2;
-    if (e.area) parts.push(el('rect', { x: x0, y: y - 6, width: SAMPLE, height: 10, fill: e.area, 'fill-opacity': 0.18 }));
-    if (e.line) {
-      parts.push(el('path', { d: `M${px(x0)},${px(y)}H${px(x0 + SAMPLE)}`, stroke: e.colour, 'stroke-width': e.line.width, 'stroke-dasharray': e.line.dash, fill: 'none' }));
-    }
-    if (e.marker) parts.push(el('path', { d: markerPath(e.marker, mid, y, 4), fill: e.colour, stroke: e.colour }));
-    parts.push(el('text', { x: x0 + SAMPLE + 6, y: y + 4, fill: pal.text }, text(e.label)));
-    return el('g', { class: 'sl-legend-entry' }, parts);
-  });
+  const items = shown.map((e, i) => entrySvg(e, x0, y0 + i * ROW, pal));
   if (shown.length < entries.length) {
     items.push(el('text', { x: x0, y: y0 + shown.length * ROW + 4, fill: pal.muted }, text(`+${entries.length - shown.length} more`)));
   }

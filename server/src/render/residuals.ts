@@ -8,7 +8,7 @@ import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
 import { bottomAxis, leftAxis, type PlotBox } from './axes';
 import { emptyDiagram, svgDocument } from './frame';
-import { legendRows } from './legend';
+import { legendUnderTitle } from './legend';
 import { markerPath } from './markers';
 import { paletteFor } from './palette';
 import { finiteExtent } from './sampled';
@@ -48,17 +48,17 @@ export function renderResiduals(d: ResidualsViewData, theme: RenderTheme): strin
 
   const xUnit = d.xKind === 'field' ? engineeringUnit(Math.max(Math.abs(fx[0]), Math.abs(fx[1])), 'T') : d.xKind === 'position' ? engineeringUnit(Math.max(Math.abs(fx[0]), Math.abs(fx[1])), 'm') : { factor: 1, symbol: '' };
   const yUnit = d.unit === 'Hz' ? engineeringUnit(Math.max(Math.abs(fy[0]), Math.abs(fy[1])), 'Hz') : { factor: 1, symbol: d.unit };
-  const legend = legendRows(
+  const legend = legendUnderTitle(
     [
       { label: 'measured ± σ', colour: pal.series[0], marker: 'circle' },
       d.modelLine ? { label: 'model', colour: pal.series[1], line: { width: 2 } } : { label: 'model', colour: pal.series[1], marker: 'circle' },
     ],
     LEFT,
-    46,
-    RIGHT - LEFT,
+    RIGHT,
+    10,
     pal,
   );
-  const top = 46 + legend.height + 10;
+  const top = legend.below;
   const upper: PlotBox = { left: LEFT, right: RIGHT, top, bottom: top + 220 };
   const lower: PlotBox = { left: LEFT, right: RIGHT, top: upper.bottom + 26, bottom: upper.bottom + 26 + 130 };
   const height = lower.bottom + 56;

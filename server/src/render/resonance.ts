@@ -9,7 +9,7 @@ import { line } from 'd3-shape';
 import { bottomAxis, leftAxis, type PlotBox } from './axes';
 import { fieldMarksIn, layoutMarkRows, MARK_ROW } from './fieldMarks';
 import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
-import { legendRows, type LegendEntry } from './legend';
+import { legendUnderTitle, type LegendEntry } from './legend';
 import { markerPath } from './markers';
 import { paletteFor } from './palette';
 import { finiteExtent, valueAt } from './sampled';
@@ -47,7 +47,7 @@ export function renderResonance(d: ResonanceViewData, theme: RenderTheme): strin
   const legend: LegendEntry[] = [{ label: d.pairLabel, colour: pal.series[0], line: { width: 2 } }];
   if (d.insensitive.some((p) => inRange(p.fieldT))) legend.push({ label: 'df/dB = 0', colour: pal.text, marker: 'diamond' });
   if (d.resonances.some((p) => inRange(p.fieldT))) legend.push({ label: 'resonant with the file’s frequency', colour: pal.series[1], marker: 'circle' });
-  const legendSvg = legendRows(legend, LEFT, 46, RIGHT - LEFT, pal);
+  const legendSvg = legendUnderTitle(legend, LEFT, RIGHT, 6, pal);
 
   const marks = fieldMarksIn(d.fieldUnit, inRange, undefined, undefined, [
     ...d.insensitive.map((p) => ({ fieldT: p.fieldT, label: 'df/dB = 0' })),
@@ -57,7 +57,7 @@ export function renderResonance(d: ResonanceViewData, theme: RenderTheme): strin
   const x = scaleLinear().domain(fx).range([LEFT, RIGHT]);
   const rows = layoutMarkRows(marks, LEFT, RIGHT, x);
   const rowCount = Math.max(1, ...rows.map((r) => r + 1));
-  const top = 46 + legendSvg.height + 6 + rowCount * MARK_ROW;
+  const top = legendSvg.below + rowCount * MARK_ROW;
   const upper: PlotBox = { left: LEFT, right: RIGHT, top, bottom: top + 200 };
   const lower: PlotBox = { left: LEFT, right: RIGHT, top: upper.bottom + 22, bottom: upper.bottom + 22 + 120 };
   const height = lower.bottom + 56;

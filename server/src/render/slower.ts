@@ -6,8 +6,8 @@
 import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
 import { bottomAxis, leftAxis, type PlotBox } from './axes';
-import { emptyDiagram, svgDocument } from './frame';
-import { legendRows, type LegendEntry } from './legend';
+import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
+import { legendUnderTitle, type LegendEntry } from './legend';
 import { paletteFor } from './palette';
 import { finiteExtent } from './sampled';
 import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
@@ -44,8 +44,8 @@ export function renderSlower(d: SlowerViewData, theme: RenderTheme): string {
   if (d.coilsT) legend.push({ label: 'coils', colour: pal.series[1], line: { width: 2, dash: '6 3' } });
   legend.push({ label: 'resonant speed', colour: pal.series[2], line: { width: 2 } });
   legend.push({ label: 'simulated atom', colour: pal.text, line: { width: 1.5, dash: '2 3' } });
-  const legendSvg = legendRows(legend, LEFT, 46, RIGHT - LEFT, pal);
-  const top = 46 + legendSvg.height + 10;
+  const legendSvg = legendUnderTitle(legend, LEFT, RIGHT, 10, pal);
+  const top = legendSvg.below;
   const upper: PlotBox = { left: LEFT, right: RIGHT, top, bottom: top + 190 };
   const lower: PlotBox = { left: LEFT, right: RIGHT, top: upper.bottom + 24, bottom: upper.bottom + 24 + 170 };
   const height = lower.bottom + 56;
@@ -65,18 +65,37 @@ export function renderSlower(d: SlowerViewData, theme: RenderTheme): string {
   const idx = d.zM.map((_, k) => k);
   const curve = (ys: number[], y: (v: number) => number): string =>
     line<number>().defined((k) => Number.isFinite(ys[k]!)).x((k) => x(d.zM[k]!)).y((k) => y(ys[k]!)).digits(2)(idx) ?? '';
-  const series = (kind: string, label: string, ys: number[], y: (v: number) => number, colour: string, width: number, dash?: string): string =>
-    el('g', { class: 'sl-curve', 'data-kind': kind, 'data-label': label, fill: 'none', stroke: colour, 'stroke-width': width, ...(dash ? { 'stroke-dasharray': dash } : {}) }, [titleEl(label), el('path', { d: curve(ys, y) })]);
-  body.push(series('ideal', 'ideal field B(z)', d.idealT, yb, pal.series[0]!, 2));
-  if (d.coilsT) body.push(series('coils', "the coils' field", d.coilsT, yb, pal.series[1]!, 2, '6 3'));
-  body.push(series('resonant', 'speed resonant with the laser', d.resonantMPerS, yv, pal.series[2]!, 2));
-  body.push(series('flight', 'simulated atom', d.flightMPerS, yv, pal.text, 1.5, '2 3'));
-  const rule = (kind: string, zM: number, label: string, colour: string): string =>
-    el('g', { class: `sl-${kind}`, 'data-kind': kind, 'data-z-m': dataNum(zM) }, [
-      titleEl(`${label} at z = ${formatIn(zM, zUnit)}`),
-      el('path', { d: `M${px(x(zM))},${px(upper.top)}V${px(lower.bottom)}`, stroke: colour, 'stroke-dasharray': '4 3', fill: 'none' }),
-      el('text', { x: Math.min(RIGHT - 4, x(zM) + 4), y: upper.top + 12, 'font-size': 11, fill: colour, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text(label)),
+  // Each curve stays inside its own plot: a resonant speed below 0 (no atom flying forwards is
+  // resonant there, as behind a steep exit) leaves at the bottom of the lower plot, not off the figure.
+  const clip = { upper: `${idBase}-upper`, lower: `${idBase}-lower` };
+  const clipRect = (id: string, b: PlotBox): string => el('clipPath', { id }, el('rect', { x: b.left, y: b.top - 1, width: b.right - b.left, height: b.bottom - b.top + 2 }));
+  body.push(el('defs', {}, [clipRect(clip.upper, upper), clipRect(clip.lower, lower)]));
+  const series = (kind: string, label: string, ys: number[], y: (v: number) => number, clipId: string, colour: string, width: number, dash?: string): string =>
+    el('g', { class: 'sl-curve', 'data-kind': kind, 'data-label': label, 'clip-path': `url(#${clipId})`, fill: 'none', stroke: colour, 'stroke-width': width, ...(dash ? { 'stroke-dasharray': dash } : {}) }, [
+      titleEl(label),
+      el('path', { d: curve(ys, y) }),
     ]);
+  body.push(series('ideal', 'ideal field B(z)', d.idealT, yb, clip.upper, pal.series[0]!, 2));
+  if (d.coilsT) body.push(series('coils', "the coils' field", d.coilsT, yb, clip.upper, pal.series[1]!, 2, '6 3'));
+  body.push(series('resonant', 'speed resonant with the laser', d.resonantMPerS, yv, clip.lower, pal.series[2]!, 2));
+  body.push(series('flight', 'simulated atom', d.flightMPerS, yv, clip.lower, pal.text, 1.5, '2 3'));
+  // Rule labels sit right of their rule, or left of it where they would run past the plot's right
+  // edge; a label that would overlap the one before goes one row down.
+  const placed: { from: number; to: number; row: number }[] = [];
+  const rule = (kind: string, zM: number, label: string, colour: string): string => {
+    const xr = x(zM);
+    const w = estimateTextWidth(label);
+    const onRight = xr + 4 + w <= RIGHT;
+    const from = onRight ? xr + 4 : xr - 4 - w;
+    let row = 0;
+    while (placed.some((p) => p.row === row && from < p.to + 4 && from + w > p.from - 4)) row++;
+    placed.push({ from, to: from + w, row });
+    return el('g', { class: `sl-${kind}`, 'data-kind': kind, 'data-z-m': dataNum(zM) }, [
+      titleEl(`${label} at z = ${formatIn(zM, zUnit)}`),
+      el('path', { d: `M${px(xr)},${px(upper.top)}V${px(lower.bottom)}`, stroke: colour, 'stroke-dasharray': '4 3', fill: 'none' }),
+      el('text', { x: px(onRight ? xr + 4 : xr - 4), y: upper.top + 12 + 14 * row, 'text-anchor': onRight ? undefined : 'end', 'font-size': 11, fill: colour, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text(label)),
+    ]);
+  };
   if (d.zeroCrossingM !== undefined) body.push(rule('zero-crossing', d.zeroCrossingM, 'B = 0', pal.muted));
   if (d.dropAtM !== undefined) body.push(rule('drop', d.dropAtM, 'atoms dropped', pal.bad));
   const desc = `Field from ${formatIn(d.idealT[0]!, GAUSS)} to ${formatIn(d.idealT.at(-1)!, GAUSS)} over ${formatIn(zx[1], zUnit)}; resonant speed from ${formatIn(d.resonantMPerS[0]!, vUnit)} to ${formatIn(d.resonantMPerS.at(-1)!, vUnit)}${d.dropAtM !== undefined ? `; atoms dropped at ${formatIn(d.dropAtM, zUnit)}` : ''}.`;

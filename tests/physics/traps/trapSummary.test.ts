@@ -205,10 +205,30 @@ describe('bad input', () => {
     expect(summariseTrap(input({ massKg: 0 })).issues[0]!.code).toBe('trap-mass-invalid');
     expect(summariseTrap(input({ temperatureK: 0 })).issues[0]!.code).toBe('trap-temperature-invalid');
   });
-  it('a field that is not finite inside the region (a wire through it)', () => {
-    const wire = (): ReturnType<ReturnType<typeof quadrupole>> => ({ B: [Number.POSITIVE_INFINITY, 0, 0], gradient: [[0, 0, 0], [0, 0, 0], [0, 0, 0]] });
-    const s = summariseTrap(input({ field: wire }));
-    expect(s.issues[0]!.code).toBe('trap-field-not-finite');
+  it('a wire through the centre: an error that names the wire, never NaN (the sum says what it left out)', async () => {
+    const { sumField } = await import('../../../server/src/physics/fields');
+    const wire = { kind: 'wire', point: [0, 0, 0], direction: [1, 0, 0], currentA: 5 } as const;
+    const loop = (z: number, at: number) => ({ kind: 'loop', centre: [0, 0, z], axis: [0, 0, 1], radiusM: 0.04, ampereTurns: at }) as const;
+    const s = summariseTrap(input({ field: sumField([loop(0.04, 2000), loop(-0.04, -2000), wire]) }));
+    expect(s.issues.map((i) => i.code)).toEqual(['trap-on-conductor']);
+    expect(s.issues[0]!.message).toMatch(/^The trap's centre lies on a wire of its sources, where the field has no value/);
+    expect(s.sublevels).toEqual([]);
+    expect(JSON.stringify(s)).not.toMatch(/NaN|Infinity|null/);
+    // A default region about a centre on the wire has radius 0: the wire is still what is reported.
+    const zero = summariseTrap(input({ field: sumField([wire]), region: { centre: [0, 0, 0], radiusM: 0 } }));
+    expect(zero.issues.map((i) => i.code)).toEqual(['trap-on-conductor']);
+  });
+  it('a loop’s wire on the region’s surface, where the survey samples: the region meets it', async () => {
+    const { sumField } = await import('../../../server/src/physics/fields');
+    const { sphereDirections } = await import('../../../server/src/physics/traps/vec3');
+    const { SURFACE_SAMPLES } = await import('../../../server/src/physics/traps/fieldSurvey');
+    // A loop about z whose wire passes through the first surface sample of a 2 cm region.
+    const d = sphereDirections(SURFACE_SAMPLES)[0]!;
+    const p = [0.02 * d[0], 0.02 * d[1], 0.02 * d[2]];
+    const loop = { kind: 'loop', centre: [0, 0, p[2]!], axis: [0, 0, 1], radiusM: Math.hypot(p[0]!, p[1]!), ampereTurns: 100 } as const;
+    const s = summariseTrap(input({ field: sumField([loop]) }));
+    expect(s.issues.map((i) => i.code)).toEqual(['trap-on-conductor']);
+    expect(s.issues[0]!.message).toMatch(/^The trap region meets the wire of a loop of its sources/);
     expect(JSON.stringify(s)).not.toMatch(/NaN|Infinity|null/);
   });
 });

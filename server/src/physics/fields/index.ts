@@ -8,7 +8,7 @@ export { solenoidField } from './solenoidField';
 export { wireField } from './wireField';
 export { slabField } from './slabField';
 export { partField, sumField, fieldIssuesAt } from './sumField';
-export { pointOnSource } from './onSource';
+export { conductorOf, onSourceIssue, pointOnSource } from './onSource';
 export { validateFieldSource } from './validateSource';
 export { magnitudeGradient, magnitudeHessian, DEFAULT_CURVATURE_STEP_M, type MagnitudeCurvature } from './curvature';
 export { sampleSegment, sampleGrid, MAX_SAMPLES, type GridRequest, type GridSamples, type PointSample, type SegmentSamples } from './sampling';

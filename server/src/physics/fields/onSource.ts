@@ -22,16 +22,42 @@ export function onWinding(rho: number, z: number, radius: number, length: number
   return Math.abs(rho - radius) <= tol && Math.abs(z) <= length / 2 + tol;
 }
 
+/** The issue for a point on (or, where the field overflows, next to) a part's conductor. */
+export function onSourceIssue(kind: FieldSourceSpec['kind'], partIndex?: number): FieldIssue {
+  switch (kind) {
+    case 'loop':
+      return issue('warning', 'source-point-on-loop', 'The point lies on the wire of a loop, where a thin loop has no field; that loop is left out there.', partIndex);
+    case 'solenoid':
+      return issue('warning', 'source-point-on-winding', 'The point lies on the winding of a solenoid, where the field jumps; that solenoid is left out there.', partIndex);
+    case 'wire':
+      return issue('warning', 'source-point-on-wire', 'The point lies on a wire, where a thin wire has no field; that wire is left out there.', partIndex);
+    case 'slab':
+      return issue('warning', 'source-point-on-block', 'The point lies on the surface of a magnetised block, where the field jumps; that block is left out there.', partIndex);
+  }
+}
+
+const CONDUCTOR_BY_CODE: Record<string, string> = {
+  'source-point-on-loop': 'the wire of a loop',
+  'source-point-on-winding': 'the winding of a solenoid',
+  'source-point-on-wire': 'a wire',
+  'source-point-on-block': 'the surface of a magnetised block',
+};
+
+/** The conductor an on-source issue is about, in words ("a wire"), for other layers' messages. */
+export function conductorOf(i: FieldIssue): string {
+  return CONDUCTOR_BY_CODE[i.code] ?? 'a conductor';
+}
+
 export function pointOnSource(spec: FieldSourceSpec, point: Vec3, partIndex?: number): FieldIssue | undefined {
   switch (spec.kind) {
     case 'loop': {
       const { rho, z } = toCylinder(point, spec.centre, spec.axis);
-      if (onLoopWire(rho, z, spec.radiusM)) return issue('warning', 'source-point-on-loop', 'The point lies on the wire of a loop, where a thin loop has no field; that loop is left out there.', partIndex);
+      if (onLoopWire(rho, z, spec.radiusM)) return onSourceIssue('loop', partIndex);
       return undefined;
     }
     case 'solenoid': {
       const { rho, z } = toCylinder(point, spec.centre, spec.axis);
-      if (onWinding(rho, z, spec.radiusM, spec.lengthM)) return issue('warning', 'source-point-on-winding', 'The point lies on the winding of a solenoid, where the field jumps; that solenoid is left out there.', partIndex);
+      if (onWinding(rho, z, spec.radiusM, spec.lengthM)) return onSourceIssue('solenoid', partIndex);
       return undefined;
     }
     case 'wire': {
@@ -40,7 +66,7 @@ export function pointOnSource(spec: FieldSourceSpec, point: Vec3, partIndex?: nu
       const rho = Math.hypot(d[0] - u * spec.direction[0], d[1] - u * spec.direction[1], d[2] - u * spec.direction[2]);
       const tol = spec.lengthM === undefined ? INFINITE_WIRE_M : RELATIVE * spec.lengthM;
       const within = spec.lengthM === undefined || Math.abs(u) <= spec.lengthM / 2 + tol;
-      if (rho <= tol && within) return issue('warning', 'source-point-on-wire', 'The point lies on a wire, where a thin wire has no field; that wire is left out there.', partIndex);
+      if (rho <= tol && within) return onSourceIssue('wire', partIndex);
       return undefined;
     }
     case 'slab': {
@@ -51,7 +77,7 @@ export function pointOnSource(spec: FieldSourceSpec, point: Vec3, partIndex?: nu
         if (off > tol) return undefined;
         if (off >= -tol) onFace = true;
       }
-      if (onFace) return issue('warning', 'source-point-on-block', 'The point lies on the surface of a magnetised block, where the field jumps; that block is left out there.', partIndex);
+      if (onFace) return onSourceIssue('slab', partIndex);
       return undefined;
     }
   }

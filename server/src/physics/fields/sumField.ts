@@ -1,13 +1,14 @@
 /**
  * The field of several sources added up. Parts that fail validation are left out (the model
- * reports them); at a point on a part (see onSource.ts) that part adds nothing, and
- * `fieldIssuesAt` says so. A part whose contribution overflows adds nothing either, so the sum is
- * never NaN or infinite.
+ * reports them); at a point on a part (see onSource.ts) that part adds nothing, and the sample's
+ * `leftOut` says so: every caller reads that one decision. A part whose contribution overflows
+ * (an absurd current just off its conductor) is left out the same way, so the
+ * sum is never NaN or infinite.
  */
 import { accToSample, newFieldAcc, type FieldAcc } from './axisymmetric';
 import type { FieldIssue } from './issues';
 import { addLoopField, loopField } from './loopField';
-import { pointOnSource } from './onSource';
+import { onSourceIssue, pointOnSource } from './onSource';
 import { slabField } from './slabField';
 import { addSolenoidField, solenoidField } from './solenoidField';
 import type { FieldFunction, FieldSample, FieldSourceSpec, Vec3 } from './types';
@@ -27,8 +28,9 @@ export function partField(spec: FieldSourceSpec, point: Vec3): FieldSample {
   }
 }
 
-function usable(parts: readonly FieldSourceSpec[]): FieldSourceSpec[] {
-  return parts.filter((p) => validateFieldSource(p).length === 0);
+/** The parts the formulas can use, with their place in the list given (for `leftOut`). */
+function usable(parts: readonly FieldSourceSpec[]): { part: FieldSourceSpec; index: number }[] {
+  return parts.flatMap((part, index) => (validateFieldSource(part).length === 0 ? [{ part, index }] : []));
 }
 
 /** Adds one part into `acc` unless the point is on it (then false). */
@@ -58,17 +60,21 @@ export function sumField(parts: readonly FieldSourceSpec[]): FieldFunction {
   const scratch = newFieldAcc();
   return (point: Vec3): FieldSample => {
     acc.fill(0);
-    for (const part of good) addPart(acc, part, point, scratch);
-    if (!finiteAcc(acc)) {
-      // Overflow right next to a conductor: leave that part out rather than print Infinity.
-      acc.fill(0);
-      for (const part of good) {
-        one.fill(0);
-        addPart(one, part, point, scratch);
-        if (finiteAcc(one)) for (let i = 0; i < 12; i++) acc[i] += one[i];
-      }
+    let missed = false;
+    for (const g of good) if (!addPart(acc, g.part, point, scratch)) missed = true;
+    if (!missed && finiteAcc(acc)) return accToSample(acc);
+    // On a conductor, or so near one that its field overflows: part by part, leaving that part
+    // out and saying so (rather than print Infinity).
+    acc.fill(0);
+    const leftOut: FieldIssue[] = [];
+    for (const g of good) {
+      one.fill(0);
+      if (addPart(one, g.part, point, scratch) && finiteAcc(one)) for (let i = 0; i < 12; i++) acc[i] += one[i];
+      else leftOut.push(onSourceIssue(g.part.kind, g.index));
     }
-    return accToSample(acc);
+    const sample = accToSample(acc);
+    if (leftOut.length > 0) sample.leftOut = leftOut;
+    return sample;
   };
 }
 

@@ -4,6 +4,7 @@
  * SI throughout: positions in m, fields in T, gradients in T/m, currents in A.
  * The lab frame is right-handed; gravity points along −z unless a trap says otherwise.
  */
+import type { FieldIssue } from './issues';
 
 export type Vec3 = readonly [number, number, number];
 
@@ -14,6 +15,11 @@ export type Mat3 = readonly [Vec3, Vec3, Vec3];
 export interface FieldSample {
   B: Vec3;
   gradient: Mat3;
+  /**
+   * Parts of a sum (sumField) left out at this point because it lies on their conductor; absent
+   * when none was. B and the gradient are then those of the other parts only.
+   */
+  leftOut?: readonly FieldIssue[];
 }
 
 /** A circular current loop of N turns (`ampereTurns` = N·I; the sign follows the right-hand rule about `axis`). */
@@ -56,5 +62,5 @@ export interface SlabSpec {
 /** One exact part of the field; a coil pair or a wire with its return is two parts. */
 export type FieldSourceSpec = LoopSpec | SolenoidSpec | WireSpec | SlabSpec;
 
-/** The summed field of some sources: B and its gradient at a point. Never NaN at points off the sources. */
+/** The summed field of some sources: B and its gradient at a point. Never NaN; `leftOut` names the parts a point lies on. */
 export type FieldFunction = (point: Vec3) => FieldSample;

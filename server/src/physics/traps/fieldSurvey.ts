@@ -4,6 +4,7 @@
  * field is harmonic, so |B| is subharmonic and has no interior maximum), and the strongest |B|
  * gradient along gravity below the centre (what has to hold atoms up).
  */
+import type { FieldIssue } from '../fields/issues';
 import type { FieldFunction, Vec3 } from '../fields/types';
 import { nelderMead } from './nelderMead';
 import { magnitudeGradient } from '../fields';
@@ -18,46 +19,53 @@ export interface FieldSurvey {
   fieldAtCentreT: number;
   maxFieldT: number;
   gravityGradientTPerM: number;
-  /** False when the field is not finite somewhere it was sampled (a source inside the region). */
-  finite: boolean;
+  /** The first sampled point that lies on a conductor (the sum left a part out there), if any. */
+  onConductor?: { point: Vec3; issue: FieldIssue };
 }
 
-/** |B| at r, +Infinity outside the region (keeps the search inside it) or where the field is not finite. */
+/** |B| at r; +Infinity outside the region (keeps the search inside it) or on a conductor. */
 function insideMagnitude(field: FieldFunction, region: TrapRegion): (r: Vec3) => number {
   return (r) => {
     if (norm(sub(r, region.centre)) > region.radiusM) return Number.POSITIVE_INFINITY;
-    const b = norm(field(r).B);
-    return Number.isFinite(b) ? b : Number.POSITIVE_INFINITY;
+    const s = field(r);
+    return s.leftOut ? Number.POSITIVE_INFINITY : norm(s.B);
   };
 }
 
 export function surveyField(field: FieldFunction, region: TrapRegion, gravity: Vec3): FieldSurvey {
   const R = region.radiusM;
-  const f = insideMagnitude(field, region);
+  let onConductor: FieldSurvey['onConductor'];
+  // Every sample of the survey goes through here, so the first one on a conductor is kept.
+  const noted: FieldFunction = (r) => {
+    const s = field(r);
+    if (s.leftOut && !onConductor) onConductor = { point: r, issue: s.leftOut[0]! };
+    return s;
+  };
+  const f = insideMagnitude(noted, region);
   // Two passes: the second restarts from the first's best point with a fresh, smaller simplex.
   let best = nelderMead(f, region.centre, R / 8, R * 1e-10);
   best = nelderMead(f, best.point, R / 200, R * 1e-11);
-  let finite = Number.isFinite(best.value);
   let maxFieldT = Number.isFinite(best.value) ? best.value : 0;
   for (const d of sphereDirections(SURFACE_SAMPLES)) {
-    const b = norm(field(addScaled(region.centre, d, R)).B);
-    if (!Number.isFinite(b)) finite = false;
-    else maxFieldT = Math.max(maxFieldT, b);
+    const s = noted(addScaled(region.centre, d, R));
+    if (!s.leftOut) maxFieldT = Math.max(maxFieldT, norm(s.B));
   }
   let gravityGradientTPerM = 0;
   const down = unit(gravity);
-  if (norm(down) > 0 && finite) {
+  if (norm(down) > 0 && !onConductor) {
     // From the centre down to the region's surface along gravity.
     const exit = rayExit(best.point, down, region);
     for (let k = 0; k <= GRAVITY_RAY_STEPS; k++) {
-      const s = field(addScaled(best.point, down, (exit * k) / GRAVITY_RAY_STEPS));
+      const s = noted(addScaled(best.point, down, (exit * k) / GRAVITY_RAY_STEPS));
+      if (s.leftOut) continue;
       // The |B| gradient opposing gravity: how fast |B| rises going down.
       const mg = magnitudeGradient(s);
       const g = mg ? dot(mg, down) : 0;
       if (Number.isFinite(g)) gravityGradientTPerM = Math.max(gravityGradientTPerM, g);
     }
   }
-  return { centre: best.point, fieldAtCentreT: finite ? best.value : Number.NaN, maxFieldT, gravityGradientTPerM, finite };
+  const fieldAtCentreT = Number.isFinite(best.value) ? best.value : 0;
+  return { centre: best.point, fieldAtCentreT, maxFieldT, gravityGradientTPerM, ...(onConductor ? { onConductor } : {}) };
 }
 
 /** Distance s ≥ 0 at which r0 + s·d leaves the region's sphere (r0 inside). */

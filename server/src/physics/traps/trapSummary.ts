@@ -4,6 +4,8 @@
  * gradients, the RF knife and the Majorana estimate, with problems as values. docs/traps.md.
  */
 import { BOHR_MAGNETON_HZ_PER_T, BOLTZMANN_K, PLANCK_H } from '../constants';
+import { conductorOf } from '../fields/onSource';
+import type { FieldIssue } from '../fields/issues';
 import type { Vec3 } from '../fields/types';
 import type { LowFieldLabel } from '../engine';
 import { energyCurves, rfPartner, type EnergyCurve } from './energyCurves';
@@ -55,7 +57,7 @@ function invalid(input: TrapInput): TrapIssue | undefined {
 function emptySummary(issues: TrapIssue[], survey?: FieldSurvey): TrapSummary {
   return {
     fieldCentre: survey?.centre ?? [0, 0, 0],
-    fieldAtCentreT: survey && Number.isFinite(survey.fieldAtCentreT) ? survey.fieldAtCentreT : 0,
+    fieldAtCentreT: survey?.fieldAtCentreT ?? 0,
     fieldRangeT: [0, survey?.maxFieldT ?? 0],
     gravityGradientTPerM: survey?.gravityGradientTPerM ?? 0,
     sublevels: [],
@@ -63,16 +65,20 @@ function emptySummary(issues: TrapIssue[], survey?: FieldSurvey): TrapSummary {
   };
 }
 
+/** A trap point on a conductor: the thin-conductor field has no value there, so no trap is computed. */
+function onConductorIssue(at: 'centre' | 'inside', on: FieldIssue): TrapIssue {
+  const where = at === 'centre' ? `The trap's centre lies on ${conductorOf(on)} of its sources` : `The trap region meets ${conductorOf(on)} of its sources`;
+  return issue('error', 'trap-on-conductor', `${where}, where the field has no value: no trap is computed. ${at === 'centre' ? 'Move the centre or the source.' : 'Make the region smaller or move the source.'}`);
+}
+
 export function summariseTrap(input: TrapInput): TrapSummary {
+  // First, so that a centre on a wire (a default region of radius 0) says so rather than "radius 0".
+  const atCentre = input.region.centre.every(Number.isFinite) ? input.field(input.region.centre).leftOut : undefined;
+  if (atCentre) return emptySummary([onConductorIssue('centre', atCentre[0]!)]);
   const bad = invalid(input);
   if (bad) return emptySummary([bad]);
   const survey = surveyField(input.field, input.region, input.gravity);
-  if (!survey.finite) {
-    return emptySummary(
-      [issue('error', 'trap-field-not-finite', 'The field is not finite somewhere in the trap region: a wire or a loop passes through it. Make the region smaller or move the source.')],
-      survey,
-    );
-  }
+  if (survey.onConductor) return emptySummary([onConductorIssue('inside', survey.onConductor.issue)], survey);
   const curves = energyCurves(input.level, CURVE_HEADROOM * Math.max(survey.maxFieldT, survey.fieldAtCentreT));
   const issues: TrapIssue[] = curves.issues.map((i) => ({ ...i }));
   if (curves.curves.length === 0) return emptySummary(issues, survey);
