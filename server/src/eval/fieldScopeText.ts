@@ -22,6 +22,7 @@ export function fieldScopeLine(r: Pick<EvaluationResult, 'fields' | 'magnets' | 
     if (x.kind === 'field') {
       const list = r.fields.find((f) => f.name === x.name)?.species;
       if (!list) return 'every species';
+      if (list.length === 0) return 'its species list names no known species';
       return own ? 'its species list' : `species = ${list.length > 3 ? `${list.slice(0, 3).join(', ')}, …` : list.join(', ')}`;
     }
     const beams = r.beams.filter((b) => b.magnet === x.name && b.species !== undefined && (b.species === s.name) === own);

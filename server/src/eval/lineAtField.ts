@@ -11,7 +11,10 @@ import { evaluateLine } from './lineEvaluation';
 import type { LineResult } from './resultTypes';
 import { addSpectra } from './spectrumEvaluation';
 
-/** The named line with its components (and spectrum, if asked for) at `field` only; undefined when the file has no such line. */
+/**
+ * The named line with its components (and spectrum, if asked for) at `field` only, without the
+ * uncertainties the whole evaluation attaches; undefined when the file has no such line.
+ */
 export function lineAtField(model: SetupModel, name: string, field: WorkingField, gJOf: GJLookup): LineResult | undefined {
   const line = model.lines.find((l) => l.name === name);
   if (!line) return undefined;
