@@ -5,7 +5,9 @@
  *     the language service and over JSON-RPC against the built server (pull request);
  *   - the evaluation of the whole file (runs in the server's worker thread, off the keystroke path);
  *   - hover latency (p95; goal < 5 ms) on an evaluated version, in the service and over JSON-RPC;
- *   - cold start (spawn `node dist/server.js --stdio` → `initialize` answer; goal < 300 ms).
+ *   - cold start (spawn `node dist/server.js --stdio` → `initialize` answer; goal < 300 ms);
+ *   - a 20,000-line file: keystrokes and resident memory, and its whole evaluation against the
+ *     worker's time limit.
  * Needs dist/server.js for the protocol figures (`npm run bench` builds it).
  */
 import { spawn, spawnSync } from 'node:child_process';
@@ -16,6 +18,7 @@ import { ShutdownRequest } from 'vscode-languageserver-protocol';
 import { evaluateText, inProcessEvaluator } from '../server/src/service/evaluator';
 import { LanguageService } from '../server/src/service/languageService';
 import { generateSetup } from './generatedSetup';
+import { EVALUATION_TIME_LIMIT_MS } from '../server/src/model/limits';
 
 export { generateSetup };
 
@@ -239,9 +242,33 @@ export function largeFileFigures(lineCount: number): string[] {
   ];
 }
 
+/**
+ * The whole evaluation of a large generated file, once, in a fresh process (as the worker runs it,
+ * off the keystroke path): wall and CPU time against the worker's time limit, and the resident
+ * memory after it with the result still held. The generated file names the species of each field,
+ * so a level is evaluated at one or two working fields (docs/format.md).
+ */
+export function largeEvaluationFigures(lineCount: number): string[] {
+  const text = generateSetup(lineCount);
+  const c0 = process.cpuUsage();
+  const t0 = process.hrtime.bigint();
+  const out = evaluateText(text);
+  const wall = ms(t0);
+  const cpu = cpuMs(c0);
+  const rss = process.memoryUsage().rss / 1e6;
+  const levels = out.result?.levels ?? [];
+  const pairs = levels.reduce((n, l) => n + l.at_fields.length, 0);
+  const limit = EVALUATION_TIME_LIMIT_MS;
+  return [
+    `evaluation of the whole file, ${lineCount} lines (generated), in process with the server's flags:`,
+    `  ${levels.length} levels at ${pairs} (level, field) pairs, ${out.result?.lines.length ?? 0} lines, ${out.result?.beams.length ?? 0} beams: wall ${(wall / 1000).toFixed(1)} s, CPU ${(cpu / 1000).toFixed(1)} s (the worker's limit ${limit / 1000} s: ${wall < limit ? 'inside' : 'OVER'} by wall clock)`,
+    `  resident memory with the result held: ${rss.toFixed(0)} MB (goal < 500 MB: ${rss < 500 ? 'met' : 'MISSED'})`,
+  ];
+}
+
 /** Runs `call` (an expression over this bundle's exports that gives lines, or a promise of them) in a fresh Node process started with the server's flags. */
 function withServerFlags(call: string, what: string): string[] {
-  const script = `const { serviceFigures, largeFileFigures, generateSetup } = require(${JSON.stringify(__filename)}); Promise.resolve(${call}).then((lines) => console.log(JSON.stringify(lines)))`;
+  const script = `const { serviceFigures, largeFileFigures, largeEvaluationFigures, generateSetup } = require(${JSON.stringify(__filename)}); Promise.resolve(${call}).then((lines) => console.log(JSON.stringify(lines)))`;
   const run = spawnSync(process.execPath, [...SERVER_NODE_FLAGS, '-e', script], { encoding: 'utf8' });
   const last = run.stdout.trim().split('\n').pop() ?? '';
   try {
@@ -256,6 +283,7 @@ export async function runEditorBench(): Promise<{ name: string; lines: string[] 
   const lines = [
     ...withServerFlags(`serviceFigures(generateSetup(${LINES}), 'Node flags of the server')`, 'service figures'),
     ...withServerFlags(`largeFileFigures(${LARGE_LINES})`, 'large-file figures'),
+    ...withServerFlags(`largeEvaluationFigures(${LARGE_LINES})`, 'large-file evaluation'),
     ...(await serviceFigures(text, "Node's default heap")),
     ...(await protocolFigures(text)),
   ];

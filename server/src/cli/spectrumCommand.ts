@@ -7,7 +7,9 @@ import { type CommandSpec, type ParsedArgs, stringOption } from './args';
 import { listErrorsFirst } from './analyzeFile';
 import { OUT_OPTION, ROOT_OPTION } from './files';
 import type { CliContext } from './io';
-import { selectName } from './selectors';
+import { selectField, selectName } from './selectors';
+import { lineAtField } from '../eval/lineAtField';
+import { gJLookup } from '../eval/gJLookup';
 import { emitOutput, nothingToCompute, openSetupFile } from './singleFile';
 
 export const spectrumSpec: CommandSpec = {
@@ -28,8 +30,13 @@ export function runSpectrum(args: ParsedArgs, ctx: CliContext): number {
   const asked = model.lines.filter((l) => l.spectrum);
   if (asked.length === 0) nothingToCompute(file, 'the file has no line with a spectrum; add `spectrum = across` (or along) under a `line`');
   const name = selectName('line', model.lines.map((l) => l.name), stringOption(args, 'line')) ?? asked[0]!.name;
-  const line = analysis.result?.lines.find((l) => l.name === name);
-  const at = line?.at_fields[lineFieldIndex(line, stringOption(args, 'field'))];
+  const wanted = stringOption(args, 'field');
+  const field = wanted !== undefined ? selectField(model, wanted) : undefined;
+  const evaluated = analysis.result?.lines.find((l) => l.name === name);
+  // A field that concerns another species is left out of the evaluation: the line is computed there now.
+  const missing = evaluated && field && !evaluated.at_fields.some((f) => f.source.kind === field.source.kind && f.source.name === field.source.name);
+  const line = missing ? (lineAtField(model, name, field, gJLookup(analysis.result?.levels ?? [])) ?? evaluated) : evaluated;
+  const at = line?.at_fields[lineFieldIndex(line, wanted)];
   if (!line || !at?.spectrum) {
     const listed = listErrorsFirst(file, analysis, ctx);
     const lm = model.lines.find((l) => l.name === name);

@@ -4,7 +4,7 @@
  */
 import type { Problem } from '../format/ast';
 import { CONSTANTS_SOURCE } from '../physics/constants';
-import type { SetupModel } from '../model/types';
+import type { SetupModel, SpeciesModel } from '../model/types';
 import { beamDiagnostics } from './beamDiagnostics';
 import { evaluateBeam } from './beamEvaluation';
 import { gJLookup } from './gJLookup';
@@ -19,33 +19,27 @@ import { sumField } from '../physics/fields';
 import { evaluateSlower } from './slowerEvaluation';
 import { evaluateTrap } from './trapEvaluation';
 import { EVAL_RULES } from './evalCodes';
-import { evaluateLevel, type EvaluationNote, type WorkingField } from './levelEvaluation';
+import { fieldScope, type FieldScope } from './fieldScope';
+import { evaluateLevel, type EvaluationNote } from './levelEvaluation';
 import {
   EVALUATION_FORMAT,
   EVALUATION_VERSION,
   type DiagnosticResult,
   type EvaluationResult,
   type LevelResult,
+  type SpeciesResult,
   type TermResult,
 } from './resultTypes';
 
-export function workingFields(model: SetupModel): WorkingField[] {
-  const out: WorkingField[] = [];
-  for (const f of model.fields) {
-    if (f.tesla) out.push({ source: { kind: 'field', name: f.name }, tesla: f.tesla.value, range: f.tesla.range ?? f.nameRange, ...(f.tesla.unit ? { unit: f.tesla.unit } : {}) });
-  }
-  for (const m of model.magnets) {
-    if (m.fieldT) out.push({ source: { kind: 'magnet', name: m.name }, tesla: m.fieldT.value, range: m.fieldT.range ?? m.nameRange, ...(m.fieldT.unit ? { unit: m.fieldT.unit } : {}) });
-  }
-  return out;
-}
+export { workingFields } from './fieldScope';
 
 /**
  * Evaluates the model. `earlier` are the problems of the parser and model; the returned
  * `problems` add what the evaluation found, and `result.diagnostics` lists them all in order.
  */
 export function evaluate(model: SetupModel, earlier: Problem[]): { result: EvaluationResult; problems: Problem[] } {
-  const fields = workingFields(model);
+  const scope = fieldScope(model);
+  const fields = scope.all;
   const levels: LevelResult[] = [];
   const notes: EvaluationNote[] = [];
   const terms: TermResult[] = [];
@@ -53,10 +47,10 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     for (const l of s.levels) {
       const first = notes.length;
       if (l.kind === 'term') {
-        const t = evaluateTerm(l, model.settings, fields, notes);
+        const t = evaluateTerm(l, model.settings, scope.of(s), notes);
         if (t) terms.push(t);
       } else {
-        const r = evaluateLevel(l, model.settings, fields, notes);
+        const r = evaluateLevel(l, model.settings, scope.of(s), notes);
         if (r) levels.push(r);
       }
       // A level from a used file has its ranges in that file: its notes go on the `use` path here.
@@ -71,8 +65,8 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     return e.result;
   });
   const lineProblems: Problem[] = [];
-  const lines = model.lines.map((l) => addSpectra(l, evaluateLine(l, fields, gJOf, lineProblems, model.settings), lineProblems, model.beams));
-  const resonances = model.resonances.map((r) => evaluateResonance(r, fields, model.settings, gJOf, lineProblems));
+  const lines = model.lines.map((l) => addSpectra(l, evaluateLine(l, l.lower ? scope.of(l.lower.species) : [], gJOf, lineProblems, model.settings), lineProblems, model.beams));
+  const resonances = model.resonances.map((r) => evaluateResonance(r, r.level ? scope.of(r.level.species) : [], model.settings, gJOf, lineProblems));
   const fitProblems: Problem[] = [];
   const fits = model.fits.map((f) => evaluateFit(f, gJOf, fitProblems));
   const sourceProblems: Problem[] = [];
@@ -105,10 +99,11 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
       g_I: { value: s.gI.value, source: s.gI.source, ...(s.gI.uncertainty !== undefined ? { uncertainty: s.gI.uncertainty } : {}) },
       levels: s.levels.map((l) => l.name),
       ...(s.origin ? { defined_in: s.origin.path } : {}),
+      ...evaluatedAt(scope, s),
     })),
     levels,
     terms,
-    fields: model.fields.map((f) => ({ name: f.name, ...(f.tesla ? { field_T: f.tesla.value, ...unitOf('field_unit', f.tesla) } : {}) })),
+    fields: model.fields.map((f) => ({ name: f.name, ...(f.tesla ? { field_T: f.tesla.value, ...unitOf('field_unit', f.tesla) } : {}), ...(f.species ? { species: f.species.map((x) => x.name) } : {}) })),
     magnets: model.magnets.map((m) => ({
       name: m.name,
       ...(m.fieldT ? { field_T: m.fieldT.value, ...unitOf('field_unit', m.fieldT) } : {}),
@@ -130,6 +125,12 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...sourceProblems, ...slowerProblems, ...trapProblems, ...uncertainty.problems]);
   result.diagnostics = problems.map(toDiagnosticResult);
   return { result, problems };
+}
+
+/** `evaluated_at` of a species that is evaluated at some of the working fields only. */
+function evaluatedAt(scope: FieldScope, species: SpeciesModel): Pick<SpeciesResult, 'evaluated_at'> {
+  const own = scope.of(species);
+  return own === scope.all ? {} : { evaluated_at: own.map((f) => ({ ...f.source })) };
 }
 
 /** A note that is the same at every field (same text, same place) is said once. */

@@ -175,6 +175,11 @@ export interface SpeciesResult {
   levels: string[];
   /** The file that declares it, when it comes through `use` (relative to the evaluated file). */
   defined_in?: string;
+  /**
+   * Set only when the species' levels, lines and resonances are evaluated at some of the file's
+   * working fields, not all: the ones they are evaluated at, in order (docs/format.md).
+   */
+  evaluated_at?: { kind: 'field' | 'magnet'; name: string }[];
 }
 
 export interface MagnetResult {
@@ -422,7 +427,8 @@ export interface EvaluationResult {
   levels: LevelResult[];
   terms: TermResult[];
   /** `field_unit`: the unit the file wrote the field in (reports show it back in that unit). */
-  fields: { name: string; field_T?: number; field_T_unc?: number; field_unit?: string }[];
+  /** `species`: the species the field acts on, when its block lists them (otherwise every species). */
+  fields: { name: string; field_T?: number; field_T_unc?: number; field_unit?: string; species?: string[] }[];
   magnets: MagnetResult[];
   beams: BeamResult[];
   lines: LineResult[];

@@ -109,6 +109,13 @@ function valueCompletions(c: LineContext, model: SetupModel | undefined, block: 
   switch (`${block.kind}.${key}`) {
     case 'beam.species':
       return empty ? (model?.species ?? []).map((s, i) => item(s.name, CompletionItemKind.Module, c.replace, { order: i })) : [];
+    case 'field.species': {
+      // A list: after a comma (or at its start), the species not yet written.
+      const last = valueTokens[valueTokens.length - 1];
+      if (last && last.kind !== 'comma') return [];
+      const written = new Set(words.map((w) => w.text));
+      return (model?.species ?? []).filter((s) => !written.has(s.name)).map((s, i) => item(s.name, CompletionItemKind.Module, c.replace, { order: i }));
+    }
     case 'beam.level': {
       if (!empty) return [];
       const beam = model?.beams.find((b) => b.node === block);

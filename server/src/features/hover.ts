@@ -68,11 +68,11 @@ function magnetSectionFor(name: string, ctx: HoverContext): string[] {
 function declaredSections(d: Declared, ctx: HoverContext): string[] {
   switch (d.kind) {
     case 'species':
-      return [speciesSection(d.item)];
+      return [speciesSection(d.item, ctx.analysis.result)];
     case 'level':
       return levelSections(d.item, ctx);
     case 'field':
-      return [fieldSection(d.item.name, d.item.tesla?.value, { result: ctx.analysis.result, options: ctx.options }, d.item.tesla?.unit)];
+      return [fieldSection(d.item.name, d.item.tesla?.value, { result: ctx.analysis.result, options: ctx.options }, d.item.tesla?.unit, d.item.species?.map((x) => x.name))];
     case 'magnet':
       return magnetSectionFor(d.item.name, ctx);
     case 'beam':
@@ -93,7 +93,7 @@ function blockSections(block: BlockNode, ctx: HoverContext): string[] {
   switch (block.kind) {
     case 'species': {
       const s = speciesOfBlock(model, block);
-      return s ? [speciesSection(s)] : [];
+      return s ? [speciesSection(s, ctx.analysis.result)] : [];
     }
     case 'field': {
       const f = fieldOfBlock(model, block);

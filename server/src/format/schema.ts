@@ -17,7 +17,7 @@ export const LEVEL_KEYS: readonly string[] = ['A', 'B', 'C', 'g_J', 'energy', 'z
 /** Keys each block takes on the lines after its header. */
 export const BLOCK_KEYS: Readonly<Record<BlockKind, readonly string[]>> = {
   species: ['mass', 'I', 'g_I', 'mu_I'],
-  field: [],
+  field: ['species'],
   magnet: ['field', 'gradient', 'length', 'sources', 'at'],
   beam: ['species', 'level', 'source', 'slits', 'magnet', 'drift', 'detector', 'populations'],
   line: ['spectrum', 'light', 'doppler', 'instrument', 'span', 'points'],

@@ -23,6 +23,7 @@ import type { DataModel, FitRequestModel } from './fitTypes';
 import type { SetupSources } from './sources';
 import { buildFieldSource, isSourceBlock } from './sourceBuilder';
 import { checkSourceOverlaps } from './sourceOverlaps';
+import { readFieldSpecies } from './fieldSpecies';
 import type { BeamModel, FieldModel, FieldSourceModel, LineModel, MagnetModel, NameUse, ResonanceModel, SetupModel, SlowerModel, SpeciesModel, UsedFileModel } from './types';
 import { resolveUses, rootUseContext, type UseContext } from './useResolver';
 
@@ -51,6 +52,7 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
   const beams = new NameIndex<BeamModel>('beam', names);
   const lines = new NameIndex<LineModel>('line', names);
   const resonances = new NameIndex<ResonanceModel>('resonance', names);
+  const scopedFields: FieldModel[] = [];
 
   for (const block of doc.blocks) {
     switch (block.kind) {
@@ -61,7 +63,10 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
       }
       case 'field': {
         const f = memo.build(block, names, problems, (_u, p) => buildField(block, p));
-        if (f) fields.declare(f, problems);
+        // The species a field names are resolved below, on a copy: the memoised field is shared with earlier versions.
+        const scoped = f && block.settings.some((s) => s.key.text === 'species') ? { ...f } : f;
+        if (scoped) fields.declare(scoped, problems);
+        if (scoped && scoped !== f) scopedFields.push(scoped);
         break;
       }
       case 'magnet': {
@@ -79,6 +84,10 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
     }
   }
   adoptUsedSpecies(used, species, problems);
+  for (const f of scopedFields) {
+    const acted = readFieldSpecies(f.node, species, problems);
+    if (acted) f.species = acted;
+  }
   const traps = new NameIndex<TrapModel>('trap', names);
   let beamOrdinal = 0;
   const beamsWithoutName: BeamModel[] = [];

@@ -106,6 +106,8 @@ export interface FieldModel {
   node: BlockNode;
   nameRange: Range;
   tesla?: Valued<number>;
+  /** The species the field acts on (`species = …`); undefined: every species (docs/format.md). */
+  species?: SpeciesModel[];
 }
 
 /**

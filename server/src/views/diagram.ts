@@ -6,6 +6,7 @@ import type { Analysis } from '../eval/analyze';
 import { evaluateBeam } from '../eval/beamEvaluation';
 import { gJLookup } from '../eval/gJLookup';
 import { workingFields } from '../eval/evaluate';
+import { lineAtField } from '../eval/lineAtField';
 import type { BeamModel, LevelModel, SetupModel } from '../model/types';
 import type { WorkingField } from '../eval/levelEvaluation';
 import { fitCsv, levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, renderResiduals, renderResonance, resonanceCsv, renderSlower, slowerCsv, type FieldUnit, type RenderTheme } from '../render';
@@ -109,9 +110,12 @@ function drawn(analysis: Analysis, model: SetupModel, req: DiagramRequest): Diag
     return { ok: true, title: v.title, svg: renderResiduals(v, theme), csv: fitCsv([f], req.source ?? '') };
   }
   const lines = analysis.result?.lines ?? [];
-  const line = lines.find((l) => l.name === req.lineName) ?? lines.find((l) => contains(model.lines.find((m) => m.name === l.name)?.node.range ?? NOWHERE, req.line)) ?? lines[0];
-  if (!line) return { ok: false, message: 'No line to draw: add one, e.g. `line D2: ground -> upper`.' };
+  const evaluated = lines.find((l) => l.name === req.lineName) ?? lines.find((l) => contains(model.lines.find((m) => m.name === l.name)?.node.range ?? NOWHERE, req.line)) ?? lines[0];
+  if (!evaluated) return { ok: false, message: 'No line to draw: add one, e.g. `line D2: ground -> upper`.' };
   const fieldName = req.marker?.source.name;
+  // A field that concerns another species is left out of the evaluation: the line is computed there now.
+  const missing = req.marker && !evaluated.at_fields.some((f) => f.source.kind === req.marker!.source.kind && f.source.name === fieldName);
+  const line = missing ? (lineAtField(model, evaluated.name, req.marker!, gJOf) ?? evaluated) : evaluated;
   if (fieldName !== undefined && !line.at_fields.some((f) => f.source.name === fieldName)) {
     return { ok: false, message: `Line '${line.name}' was not computed at field '${fieldName}'.` };
   }

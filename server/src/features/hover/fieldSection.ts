@@ -51,10 +51,13 @@ export function fieldSection(
   tesla: number | undefined,
   ctx: { result: EvaluationResult | undefined; options: HoverOptions },
   unit?: string,
+  species?: readonly string[],
 ): string {
   const head = `${mdTitle(`field ${md(name)}`)}`;
-  if (tesla === undefined) return `${head}  \nno valid value yet`;
-  const body = [`${head}  \n${fieldValueLines(tesla, unit).join('  \n')}`];
+  // A field that lists species acts on those only: their levels are the ones evaluated at it.
+  const actsOn = species ? [species.length > 0 ? `acts on ${species.map(md).join(', ')} (its species list)` : 'acts on no species (none of its list is known)'] : [];
+  if (tesla === undefined) return [head, ...actsOn, 'no valid value yet'].join('  \n');
+  const body = [[head, ...fieldValueLines(tesla, unit), ...actsOn].join('  \n')];
   const tables = levelsAtFieldSection(ctx.result, { kind: 'field', name }, ctx.options);
   if (tables) body.push(tables);
   return body.join('\n\n');

@@ -43,6 +43,7 @@ const BLOCK_KEYS: Record<string, string> = {
   'magnet.field': 'flux density at the beam — T, mT or G',
   'magnet.gradient': 'field gradient across the beam — T/m or G/cm',
   'magnet.length': 'length of the magnet along the beam',
+  'field.species': 'the species this field acts on, comma separated: only their levels, lines and resonances are evaluated at it (without this line, every species)',
   'magnet.sources': 'the field sources (coil, solenoid, wire, slab blocks) the magnet is built from; the beam flies through their field',
   'magnet.at': 'where the beam line (along +x) passes the middle of the magnet, e.g. 0, 0, 1.5 mm; default the origin',
   'beam.species': 'which species flies (a species block of this file)',

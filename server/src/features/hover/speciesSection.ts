@@ -3,10 +3,13 @@ import { levelDesignationText } from '../../eval/designationText';
 import { halfText } from '../../eval/halves';
 import { trimNumber } from '../../eval/quantityText';
 import type { SpeciesModel } from '../../model/types';
+import type { EvaluationResult } from '../../eval/resultTypes';
+import { fieldScopeLine } from '../../eval/fieldScopeText';
 import { ATOMIC_MASS_UNIT } from '../../physics/constants';
 import { md, mdTitle } from '../shared/markdown';
 
-export function speciesSection(s: SpeciesModel): string {
+/** `result`: the evaluation, for the working fields the species is evaluated at when they are not all. */
+export function speciesSection(s: SpeciesModel, result?: EvaluationResult): string {
   const data = s.builtin ? `built-in data (${md(s.builtin.id)})` : undefined;
   const where = s.origin ? `defined in ${md(s.origin.path)}${data ? `, ${data}` : ''}` : (data ?? 'defined in this file');
   const lines = [`${mdTitle(`species ${md(s.name)}`)} — ${where}`];
@@ -19,5 +22,8 @@ export function speciesSection(s: SpeciesModel): string {
   if (s.builtin && s.builtin.levels.length > 0) {
     lines.push(`built-in levels: ${s.builtin.levels.map((l) => md(l.designation)).join(', ')}`);
   }
+  const evaluated = result?.species.find((x) => x.name === s.name);
+  const scope = evaluated ? fieldScopeLine(result!, evaluated) : undefined;
+  if (scope) lines.push(md(scope.trim()));
   return lines.join('  \n');
 }

@@ -1,0 +1,73 @@
+/**
+ * Working fields and which species each one concerns (docs/format.md, "Which fields a level is
+ * evaluated at"). A species' levels, and the lines and resonances between them, are evaluated at
+ * the fields that concern it, in the file's order (fields, then magnets):
+ * - a `field` with `species = …` concerns those species; a `field` without it, every species;
+ * - a magnet concerns the species of the beams that fly through it; a magnet no beam uses,
+ *   every species.
+ * So a file of one species, or one whose fields name no species and whose magnets each carry a
+ * beam of every species, is evaluated as it always was: every level at every field.
+ */
+import type { SetupModel, SpeciesModel } from '../model/types';
+import type { WorkingField } from './levelEvaluation';
+
+/** Every field and magnet that has a value, in the file's order: fields, then magnets. */
+export function workingFields(model: SetupModel): WorkingField[] {
+  return scopedFields(model).map((s) => s.field);
+}
+
+interface ScopedField {
+  field: WorkingField;
+  /** The species the field concerns; undefined: every species. */
+  species?: ReadonlySet<SpeciesModel>;
+}
+
+function scopedFields(model: SetupModel): ScopedField[] {
+  const out: ScopedField[] = [];
+  for (const f of model.fields) {
+    if (!f.tesla) continue;
+    const field: WorkingField = { source: { kind: 'field', name: f.name }, tesla: f.tesla.value, range: f.tesla.range ?? f.nameRange, ...(f.tesla.unit ? { unit: f.tesla.unit } : {}) };
+    out.push({ field, ...(f.species ? { species: new Set(f.species) } : {}) });
+  }
+  const flown = new Map<object, Set<SpeciesModel>>();
+  for (const b of model.beams) {
+    const sp = b.level?.species ?? b.species;
+    if (!b.magnet || !sp) continue;
+    const set = flown.get(b.magnet) ?? new Set();
+    set.add(sp);
+    flown.set(b.magnet, set);
+  }
+  for (const m of model.magnets) {
+    if (!m.fieldT) continue;
+    const field: WorkingField = { source: { kind: 'magnet', name: m.name }, tesla: m.fieldT.value, range: m.fieldT.range ?? m.nameRange, ...(m.fieldT.unit ? { unit: m.fieldT.unit } : {}) };
+    const species = flown.get(m);
+    out.push({ field, ...(species ? { species } : {}) });
+  }
+  return out;
+}
+
+export interface FieldScope {
+  /** Every working field of the file. */
+  all: WorkingField[];
+  /** The working fields that concern a species (the same array for species that share them). */
+  of(species: SpeciesModel): WorkingField[];
+}
+
+export function fieldScope(model: SetupModel): FieldScope {
+  const scoped = scopedFields(model);
+  const all = scoped.map((s) => s.field);
+  if (scoped.every((s) => !s.species)) return { all, of: () => all };
+  const cache = new Map<SpeciesModel, WorkingField[]>();
+  return {
+    all,
+    of(species) {
+      let fields = cache.get(species);
+      if (!fields) {
+        fields = scoped.filter((s) => !s.species || s.species.has(species)).map((s) => s.field);
+        if (fields.length === all.length) fields = all;
+        cache.set(species, fields);
+      }
+      return fields;
+    },
+  };
+}
