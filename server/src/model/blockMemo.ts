@@ -1,13 +1,16 @@
 /**
  * What the model builders made of each block of the previous version, kept so that a keystroke
  * builds again only the blocks it touched. The incremental parser hands over the very same node
- * for a block whose lines did not change (and a new node for one that moved or changed), so a
- * node is its own key. Only builders that read nothing but their block are memoised (species,
+ * for a block whose lines did not change, or that only moved up or down with the lines above it
+ * (and a new node for one that changed), so a node is its own key. A moved block's positions
+ * moved in place; the positions a builder made itself (sub-ranges of a value, say) are gathered
+ * when it runs and moved here by the same amount. Only builders that read nothing but their block are memoised (species,
  * fields, magnets: the declarations); the checks of a species' levels also depend on the file's
  * settings, which are part of their key. A memo holds the entries of one version and reads those
  * of the version before it, so memory stays bounded by one document's blocks.
  */
-import type { BlockNode, Problem } from '../format/ast';
+import type { BlockNode, Position, Problem } from '../format/ast';
+import { collectPositions, moveLines } from '../format/linePositions';
 import { ProblemList } from './problems';
 import type { NameUse } from './types';
 
@@ -15,8 +18,28 @@ interface Entry {
   value: unknown;
   uses: NameUse[];
   problems: Problem[];
-  /** The checks that depend on the settings too, under the settings they were made with. */
-  checks?: { settings: string; problems: Problem[] };
+  /** The block's first line when the entry was made (or last moved). */
+  line: number;
+  /** The positions in `value`, `uses` and `problems` that are not the block's own (the builder made them). */
+  own: Position[];
+  /** The checks that depend on the settings too, under the settings they were made with, and the positions they made. */
+  checks?: { settings: string; problems: Problem[]; own: Position[] };
+}
+
+/** Every object reachable from the block's tree, so that a builder's own positions can be told apart. */
+function treeObjects(block: BlockNode): Set<object> {
+  const seen = new Set<object>();
+  collectPositions([block], seen);
+  return seen;
+}
+
+/** Moves the builder's own positions when the block has moved since the entry was made. */
+function follow(entry: Entry, block: BlockNode): void {
+  const delta = block.range.start.line - entry.line;
+  if (delta === 0) return;
+  moveLines(entry.own, delta);
+  if (entry.checks) moveLines(entry.checks.own, delta);
+  entry.line += delta;
 }
 
 export class BlockMemo {
@@ -34,10 +57,13 @@ export class BlockMemo {
    */
   build<T>(block: BlockNode, uses: NameUse[], problems: ProblemList, builder: (uses: NameUse[], problems: ProblemList) => T): T {
     let entry = this.before?.get(block);
-    if (!entry) {
+    if (entry) follow(entry, block);
+    else {
       const own = new ProblemList();
       const ownUses: NameUse[] = [];
-      entry = { value: builder(ownUses, own), uses: ownUses, problems: own.items };
+      const value = builder(ownUses, own);
+      const made = collectPositions([value, ownUses, own.items], treeObjects(block));
+      entry = { value, uses: ownUses, problems: own.items, line: block.range.start.line, own: made };
     }
     this.entries.set(block, entry);
     for (const u of entry.uses) uses.push(u);
@@ -52,7 +78,9 @@ export class BlockMemo {
     if (entry.checks?.settings !== settings) {
       const own = new ProblemList();
       checker(own);
-      entry.checks = { settings, problems: own.items };
+      const seen = treeObjects(block);
+      collectPositions([entry.value, entry.uses, entry.problems], seen);
+      entry.checks = { settings, problems: own.items, own: collectPositions([own.items], seen) };
     }
     for (const p of entry.checks.problems) problems.push(p);
   }
