@@ -11,7 +11,7 @@
 import type { Position, SetupDocument } from './ast';
 import { collectPositions, moveLines } from './linePositions';
 import { assembleDocument, parseLines, parseSetup, startsFreshState, type ParsedLines } from './parser';
-import { computeLineStarts, offsetToPosition } from './positions';
+import { computeLineStarts, lineStartsAfterEdit, offsetToPosition } from './positions';
 import { scanLines } from './scanner';
 
 interface Segment {
@@ -103,7 +103,7 @@ function reuse(text: string, previous: IncrementalParse): IncrementalParse {
   let suffix = 0;
   while (suffix < min - prefix && old.charCodeAt(old.length - 1 - suffix) === text.charCodeAt(text.length - 1 - suffix)) suffix++;
 
-  const lineStarts = computeLineStarts(text);
+  const lineStarts = lineStartsAfterEdit(before.lineStarts, old.length, text, prefix, suffix);
   const delta = lineStarts.length - before.lineStarts.length;
   // The old lines the change touches (lines before the first keep their text; one line of
   // margin after the last, for a line break that joins or splits lines), widened to whole

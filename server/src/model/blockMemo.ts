@@ -42,13 +42,35 @@ function follow(entry: Entry, block: BlockNode): void {
   entry.line += delta;
 }
 
+/** A value derived from a list of items (say, every species), with the items it was made from. */
+interface Carried {
+  items: readonly unknown[];
+  value: unknown;
+}
+
 export class BlockMemo {
   private readonly entries = new Map<BlockNode, Entry>();
   /** The previous version's entries (not the memo itself, so that versions do not chain). */
   private readonly before: Map<BlockNode, Entry> | undefined;
+  private readonly carried = new Map<string, Carried>();
+  private readonly carriedBefore: Map<string, Carried> | undefined;
 
   constructor(previous?: BlockMemo) {
     this.before = previous?.entries;
+    this.carriedBefore = previous?.carried;
+  }
+
+  /**
+   * `build(items)`, or the previous version's value under this key when it was made from the
+   * same items in the same order (an edit that changed no species keeps, say, the level-name
+   * index of every species).
+   */
+  carry<T, V>(key: string, items: readonly T[], build: (items: T[]) => V): V {
+    const before = this.carriedBefore?.get(key);
+    const same = before !== undefined && before.items.length === items.length && items.every((x, i) => before.items[i] === x);
+    const value = same ? (before.value as V) : build([...items]);
+    this.carried.set(key, { items, value });
+    return value;
   }
 
   /**
