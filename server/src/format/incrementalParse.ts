@@ -19,8 +19,8 @@ interface Segment {
   firstLine: number;
   lineCount: number;
   part: ParsedLines;
-  /** Every position in `part`, gathered when it was read, so that moving it touches nothing else. */
-  positions: Position[];
+  /** Every position in `part`, gathered the first time the segment moves (a keystroke that keeps the line count walks nothing). */
+  positions?: Position[];
 }
 
 /** A parsed text and what the next parse needs to reuse it. */
@@ -36,8 +36,7 @@ function readSegments(text: string, lineStarts: readonly number[], from: number,
   let start = 0;
   for (let i = 1; i <= lines.length; i++) {
     if (i < lines.length && !startsFreshState(lines[i]!)) continue;
-    const part = parseLines(text, lines.slice(start, i));
-    out.push({ firstLine: from + start, lineCount: i - start, part, positions: collectPositions([part.blocks, part.uses, part.comments, part.problems]) });
+    out.push({ firstLine: from + start, lineCount: i - start, part: parseLines(text, lines.slice(start, i)) });
     start = i;
   }
   return out;
@@ -52,8 +51,10 @@ function moved(segment: Segment, delta: number, text: string, lineStarts: readon
   if (delta === 0) return [segment];
   const firstLine = segment.firstLine + delta;
   if (segment.part.problems.length > 0) return readSegments(text, lineStarts, firstLine, firstLine + segment.lineCount);
-  moveLines(segment.positions, delta);
-  return [{ firstLine, lineCount: segment.lineCount, part: segment.part, positions: segment.positions }];
+  const { part } = segment;
+  const positions = segment.positions ?? collectPositions([part.blocks, part.uses, part.comments, part.problems]);
+  moveLines(positions, delta);
+  return [{ firstLine, lineCount: segment.lineCount, part, positions }];
 }
 
 /** Index of the segment holding `line` (segments are sorted and cover every line). */

@@ -4,8 +4,8 @@
  * for a block whose lines did not change, or that only moved up or down with the lines above it
  * (and a new node for one that changed), so a node is its own key. A moved block's positions
  * moved in place; the positions a builder made itself (sub-ranges of a value, say) are gathered
- * when it runs and moved here by the same amount. Only builders that read nothing but their block are memoised (species,
- * fields, magnets: the declarations); the checks of a species' levels also depend on the file's
+ * the first time the block moves and moved here by the same amount. Only builders that read
+ * nothing but their block are memoised (species, fields, magnets: the declarations); the checks of a species' levels also depend on the file's
  * settings, which are part of their key. A memo holds the entries of one version and reads those
  * of the version before it, so memory stays bounded by one document's blocks.
  */
@@ -20,25 +20,29 @@ interface Entry {
   problems: Problem[];
   /** The block's first line when the entry was made (or last moved). */
   line: number;
-  /** The positions in `value`, `uses` and `problems` that are not the block's own (the builder made them). */
-  own: Position[];
-  /** The checks that depend on the settings too, under the settings they were made with, and the positions they made. */
-  checks?: { settings: string; problems: Problem[]; own: Position[] };
+  /**
+   * The positions in `value`, `uses`, `problems` and the checks' problems that are not the
+   * block's own (the builder made them), gathered the first time the block moves.
+   */
+  own?: Position[];
+  /** The checks that depend on the settings too, under the settings they were made with. */
+  checks?: { settings: string; problems: Problem[] };
 }
 
-/** Every object reachable from the block's tree, so that a builder's own positions can be told apart. */
-function treeObjects(block: BlockNode): Set<object> {
-  const seen = new Set<object>();
-  collectPositions([block], seen);
-  return seen;
-}
-
-/** Moves the builder's own positions when the block has moved since the entry was made. */
+/**
+ * Moves the builder's own positions when the block has moved since the entry was made. The
+ * block's tree has moved already, so its objects are set apart first: what else the entry
+ * reaches is the builder's.
+ */
 function follow(entry: Entry, block: BlockNode): void {
   const delta = block.range.start.line - entry.line;
   if (delta === 0) return;
+  if (!entry.own) {
+    const tree = new Set<object>();
+    collectPositions([block], tree);
+    entry.own = collectPositions([entry.value, entry.uses, entry.problems, entry.checks?.problems], tree);
+  }
   moveLines(entry.own, delta);
-  if (entry.checks) moveLines(entry.checks.own, delta);
   entry.line += delta;
 }
 
@@ -83,9 +87,7 @@ export class BlockMemo {
     else {
       const own = new ProblemList();
       const ownUses: NameUse[] = [];
-      const value = builder(ownUses, own);
-      const made = collectPositions([value, ownUses, own.items], treeObjects(block));
-      entry = { value, uses: ownUses, problems: own.items, line: block.range.start.line, own: made };
+      entry = { value: builder(ownUses, own), uses: ownUses, problems: own.items, line: block.range.start.line };
     }
     this.entries.set(block, entry);
     for (const u of entry.uses) uses.push(u);
@@ -100,9 +102,8 @@ export class BlockMemo {
     if (entry.checks?.settings !== settings) {
       const own = new ProblemList();
       checker(own);
-      const seen = treeObjects(block);
-      collectPositions([entry.value, entry.uses, entry.problems], seen);
-      entry.checks = { settings, problems: own.items, own: collectPositions([own.items], seen) };
+      entry.checks = { settings, problems: own.items };
+      delete entry.own; // the new checks' positions are gathered at the next move
     }
     for (const p of entry.checks.problems) problems.push(p);
   }
