@@ -3,9 +3,10 @@
  * each begin where the parser's state does not depend on what came before (the first line, a
  * block header, a `use`; see `startsFreshState`). After an edit only the segments that the
  * changed lines touch are read again; the others are reused as they are, and those after the
- * change are moved down or up by the change in line count in place (`linePositions.ts`), so their
- * nodes keep their identity and the model's block memo finds them. Every segment is read by the one parser (`parseLines`), so the
- * result is the document `parseSetup` gives for the same text (a property test checks this).
+ * change are moved down or up by the change in line count in place (`linePositions.ts`), so
+ * their nodes keep their identity and the model's block memo finds them. Every segment is read
+ * by the one parser (`parseLines`), so the result is the document `parseSetup` gives for the
+ * same text (a property test checks this).
  * Nothing here knows the block kinds: a block word added to the schema needs no change.
  */
 import type { Position, SetupDocument } from './ast';

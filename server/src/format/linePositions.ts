@@ -1,7 +1,7 @@
 /**
  * Moving parsed lines without copying them: the positions a run of lines' syntax tree holds (and
- * those a model builder made for it) are gathered once, and a change in the line count above the
- * run adds to their `line` in place. The nodes keep their identity, so whatever is keyed by a node
+ * those a model builder made for it) are gathered the first time the run moves, and a change in
+ * the line count above the run adds to their `line` in place. The nodes keep their identity, so whatever is keyed by a node
  * (the model's block memo) still finds it. The price: a tree moved this way is the tree of the
  * newest version only; the version it was read for sees the new line numbers too.
  */

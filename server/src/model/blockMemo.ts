@@ -5,8 +5,8 @@
  * (and a new node for one that changed), so a node is its own key. A moved block's positions
  * moved in place; the positions a builder made itself (sub-ranges of a value, say) are gathered
  * the first time the block moves and moved here by the same amount. Only builders that read
- * nothing but their block are memoised (species, fields, magnets: the declarations); the checks of a species' levels also depend on the file's
- * settings, which are part of their key. A memo holds the entries of one version and reads those
+ * nothing but their block are memoised (species, fields, magnets: the declarations); the checks
+ * of a species' levels also depend on the file's settings, which are part of their key. A memo holds the entries of one version and reads those
  * of the version before it, so memory stays bounded by one document's blocks.
  */
 import type { BlockNode, Position, Problem } from '../format/ast';
