@@ -2,14 +2,17 @@
  * Parsing at the speed of a keystroke: the document is kept as runs of lines ("segments") that
  * each begin where the parser's state does not depend on what came before (the first line, a
  * block header, a `use`; see `startsFreshState`). After an edit only the segments that the
- * changed lines touch are read again; the others are reused, moved down or up by the change in
- * line count when they follow it. Every segment is read by the one parser (`parseLines`), so the
- * result is the document `parseSetup` gives for the same text (a property test checks this).
+ * changed lines touch are read again; the others are reused as they are, and those after the
+ * change are moved down or up by the change in line count in place (`linePositions.ts`), so
+ * their nodes keep their identity and the model's block memo finds them. Every segment is read
+ * by the one parser (`parseLines`), so the result is the document `parseSetup` gives for the
+ * same text (a property test checks this).
  * Nothing here knows the block kinds: a block word added to the schema needs no change.
  */
-import type { SetupDocument } from './ast';
+import type { Position, SetupDocument } from './ast';
+import { collectPositions, moveLines } from './linePositions';
 import { assembleDocument, parseLines, parseSetup, startsFreshState, type ParsedLines } from './parser';
-import { computeLineStarts, offsetToPosition } from './positions';
+import { computeLineStarts, lineStartsAfterEdit, offsetToPosition } from './positions';
 import { scanLines } from './scanner';
 
 interface Segment {
@@ -17,6 +20,8 @@ interface Segment {
   firstLine: number;
   lineCount: number;
   part: ParsedLines;
+  /** Every position in `part`, gathered the first time the segment moves (a keystroke that keeps the line count walks nothing). */
+  positions?: Position[];
 }
 
 /** A parsed text and what the next parse needs to reuse it. */
@@ -38,25 +43,19 @@ function readSegments(text: string, lineStarts: readonly number[], from: number,
   return out;
 }
 
-/** A copy with every position (`{ line, character }`) moved by `delta` lines; strings and numbers are shared. */
-function shifted<T>(value: T, delta: number): T {
-  if (Array.isArray(value)) return value.map((v) => shifted(v, delta)) as T;
-  if (value === null || typeof value !== 'object') return value;
-  const o = value as Record<string, unknown>;
-  if (typeof o['line'] === 'number' && typeof o['character'] === 'number' && Object.keys(o).length === 2) {
-    return { line: (o['line'] as number) + delta, character: o['character'] } as T;
-  }
-  const copy: Record<string, unknown> = {};
-  for (const k of Object.keys(o)) copy[k] = shifted(o[k], delta);
-  return copy as T;
-}
-
-/** The segment moved by `delta` lines. One with problems is read again: their messages may name line numbers. */
+/**
+ * The segment moved by `delta` lines: its own nodes, their positions changed in place (the
+ * previous version's tree is not read again once a newer one exists). One with problems is read
+ * again: their messages may name line numbers.
+ */
 function moved(segment: Segment, delta: number, text: string, lineStarts: readonly number[]): Segment[] {
   if (delta === 0) return [segment];
   const firstLine = segment.firstLine + delta;
   if (segment.part.problems.length > 0) return readSegments(text, lineStarts, firstLine, firstLine + segment.lineCount);
-  return [{ firstLine, lineCount: segment.lineCount, part: shifted(segment.part, delta) }];
+  const { part } = segment;
+  const positions = segment.positions ?? collectPositions([part.blocks, part.uses, part.comments, part.problems]);
+  moveLines(positions, delta);
+  return [{ firstLine, lineCount: segment.lineCount, part, positions }];
 }
 
 /** Index of the segment holding `line` (segments are sorted and cover every line). */
@@ -77,14 +76,19 @@ function fromScratch(text: string): IncrementalParse {
   return { doc: assembleDocument(text, lineStarts, segments.map((s) => s.part)), segments };
 }
 
+/** Parses whose nodes a later parse has moved: their positions are no longer theirs, so they are not reused again. */
+const spent = new WeakSet<IncrementalParse>();
+
 /**
  * Parses `text`, reusing what `previous` (the parse of an earlier version of the same document)
- * read for the lines the edit did not touch. Never throws: on an unexpected failure the text is
- * parsed whole by `parseSetup`, which reports it.
+ * read for the lines the edit did not touch. When the line count changes, the nodes below the
+ * change move in place, so `previous.doc` then shows the new line numbers there: read the newest
+ * parse only (a parse reused once this way is read whole if it is passed again). Never throws: on
+ * an unexpected failure the text is parsed whole by `parseSetup`, which reports it.
  */
 export function parseIncrementally(text: string, previous?: IncrementalParse): IncrementalParse {
   try {
-    if (!previous || previous.segments.length === 0) return fromScratch(text);
+    if (!previous || previous.segments.length === 0 || spent.has(previous)) return fromScratch(text);
     return reuse(text, previous);
   } catch {
     return { doc: parseSetup(text), segments: [] };
@@ -101,7 +105,7 @@ function reuse(text: string, previous: IncrementalParse): IncrementalParse {
   let suffix = 0;
   while (suffix < min - prefix && old.charCodeAt(old.length - 1 - suffix) === text.charCodeAt(text.length - 1 - suffix)) suffix++;
 
-  const lineStarts = computeLineStarts(text);
+  const lineStarts = lineStartsAfterEdit(before.lineStarts, old.length, text, prefix, suffix);
   const delta = lineStarts.length - before.lineStarts.length;
   // The old lines the change touches (lines before the first keep their text; one line of
   // margin after the last, for a line break that joins or splits lines), widened to whole
@@ -118,6 +122,7 @@ function reuse(text: string, previous: IncrementalParse): IncrementalParse {
   const to = endOld + delta;
   if (to < from) return fromScratch(text);
 
+  if (delta !== 0) spent.add(previous);
   const out: Segment[] = segments.slice(0, first);
   for (const s of readSegments(text, lineStarts, from, to)) out.push(s);
   for (let i = last + 1; i < segments.length; i++) for (const s of moved(segments[i]!, delta, text, lineStarts)) out.push(s);

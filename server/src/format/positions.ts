@@ -26,6 +26,32 @@ export function computeLineStarts(text: string): number[] {
   return starts;
 }
 
+/** True when a line starts at `offset`: after `\n`, or after a `\r` that no `\n` follows (as `computeLineStarts` counts). */
+function startsLine(text: string, offset: number): boolean {
+  const before = text.charCodeAt(offset - 1);
+  return before === 10 || (before === 13 && text.charCodeAt(offset) !== 10);
+}
+
+/**
+ * The line starts of `text`, an edit of a text whose line starts were `before`: the two texts
+ * share their first `prefix` and last `suffix` characters. Only the changed part is scanned; the
+ * starts before it are kept and those after it moved by the change in length. (Whether an offset
+ * starts a line depends on the character before it and the one at it, hence the one-character
+ * margins.)
+ */
+export function lineStartsAfterEdit(before: readonly number[], oldLength: number, text: string, prefix: number, suffix: number): number[] {
+  const starts: number[] = [0];
+  let i = 1;
+  while (i < before.length && before[i]! <= prefix - 1) starts.push(before[i++]!);
+  const newEnd = text.length - suffix;
+  for (let o = Math.max(1, prefix); o <= newEnd; o++) if (startsLine(text, o)) starts.push(o);
+  const oldEnd = oldLength - suffix;
+  const shift = text.length - oldLength;
+  while (i < before.length && before[i]! <= oldEnd) i++;
+  for (; i < before.length; i++) starts.push(before[i]! + shift);
+  return starts;
+}
+
 /** Offset just past the last character of `line`, before its line break. */
 export function lineEndOffset(index: LineIndex, line: number): number {
   const { text, lineStarts } = index;

@@ -38,7 +38,7 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
   const used = doc.uses.length > 0 ? resolveUses(doc, sources, context ?? rootUseContext(sources.uri), buildModel, problems) : [];
   const names: NameUse[] = [];
   const settings = { ...DEFAULT_SETTINGS };
-  const species = new NameIndex<SpeciesModel>('species', names);
+  const species = new NameIndex<SpeciesModel>('species', names, (items, build) => memo.carry('species', items, build));
   const fields = new NameIndex<FieldModel>('field', names);
   // Sources come before everything that lists them (magnets, traps, slowers), wherever they are in the file.
   const fieldSources = new NameIndex<FieldSourceModel>('source', names);

@@ -15,7 +15,15 @@ export class NameIndex<T extends { name: string; nameRange: Range; origin?: Spec
   private revision = 0;
   private memo: { revision: number; value: unknown } | undefined;
 
-  constructor(private readonly kind: NamedKind, private readonly uses: NameUse[]) {}
+  /**
+   * `carry`, when given, may hand back what an earlier version derived from the same items
+   * (`BlockMemo.carry`); `derived` then skips the work.
+   */
+  constructor(
+    private readonly kind: NamedKind,
+    private readonly uses: NameUse[],
+    private readonly carry?: <V>(items: T[], build: (items: T[]) => V) => V,
+  ) {}
 
   /** Declare; a second declaration of the same name is reported and not indexed. */
   declare(item: T, problems: ProblemList): boolean {
@@ -46,7 +54,7 @@ export class NameIndex<T extends { name: string; nameRange: Range; origin?: Spec
 
   /** A value computed from the indexed items, kept until another item is indexed (one per index). */
   derived<V>(build: (items: T[]) => V): V {
-    if (this.memo?.revision !== this.revision) this.memo = { revision: this.revision, value: build(this.all()) };
+    if (this.memo?.revision !== this.revision) this.memo = { revision: this.revision, value: this.carry ? this.carry(this.all(), build) : build(this.all()) };
     return this.memo.value as V;
   }
 
@@ -93,17 +101,12 @@ export function resolveLevel(
 ): LevelModel | undefined {
   // Without a qualifier or a context the pool is every species: listed only when a name is
   // unknown (listing it for every reference made the model quadratic in the file).
-  let pool: () => SpeciesModel[];
+  let only: SpeciesModel | undefined = context;
   if (ref.qualifier) {
-    const s = species.resolve(ref.qualifier, problems);
-    if (!s) return undefined;
-    pool = () => [s];
-  } else if (context) {
-    pool = () => [context];
-  } else {
-    pool = () => species.all();
+    only = species.resolve(ref.qualifier, problems);
+    if (!only) return undefined;
   }
-  const matches = ref.qualifier || context ? pool().flatMap((s) => s.levels.filter((l) => l.name === ref.name.text)) : (levelsByName(species).get(ref.name.text) ?? []);
+  const matches = only ? levelsNamed(only, ref.name.text) : (levelsByName(species).get(ref.name.text) ?? []);
   if (matches.length > 1) {
     problems.add(
       'name-ambiguous',
@@ -117,17 +120,23 @@ export function resolveLevel(
     return undefined;
   }
   const found = matches[0];
-  uses.push({
-    kind: 'level',
-    name: ref.name.text,
-    range: ref.name.range,
-    isDeclaration: false,
-    ...(found ? { target: { kind: 'level', name: found.name, range: found.nameRange, ...(found.species.origin ? { uri: found.species.origin.uri } : {}) } } : {}),
-  });
+  // Written out rather than spread: this runs for every level reference of every keystroke.
+  const use: NameUse = { kind: 'level', name: ref.name.text, range: ref.name.range, isDeclaration: false };
+  if (found) {
+    const origin = found.species.origin;
+    use.target = origin ? { kind: 'level', name: found.name, range: found.nameRange, uri: origin.uri } : { kind: 'level', name: found.name, range: found.nameRange };
+  }
+  uses.push(use);
   if (!found) {
-    reportUnknown('level', ref.name, pool().flatMap((s) => s.levels.map((l) => l.name)), problems);
+    reportUnknown('level', ref.name, (only ? [only] : species.all()).flatMap((s) => s.levels.map((l) => l.name)), problems);
   }
   return found;
+}
+
+function levelsNamed(species: SpeciesModel, name: string): LevelModel[] {
+  const out: LevelModel[] = [];
+  for (const l of species.levels) if (l.name === name) out.push(l);
+  return out;
 }
 
 /**

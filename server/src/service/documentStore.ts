@@ -28,7 +28,8 @@ interface VersionState {
   /** Set when a file this state read has changed: the next request analyses the version again. */
   stale?: boolean;
   text: string;
-  lines: string[];
+  /** The text split into lines, made when a carry-over first needs them (a file that is never evaluated never splits). */
+  lines?: string[];
   /** Parse and model; `result` and the evaluation's problems are merged in when it arrives. */
   analysis: Analysis;
   /** The parse in segments and the model's blocks, which the next version reuses where the edit did not touch them. */
@@ -67,6 +68,11 @@ function cutShort(reason: string): Problem {
   };
 }
 
+function linesOf(s: VersionState): string[] {
+  s.lines ??= splitLines(s.text);
+  return s.lines;
+}
+
 export class DocumentStore {
   private readonly docs = new Map<string, DocumentEntry>();
 
@@ -96,19 +102,19 @@ export class DocumentStore {
     const text = doc.getText();
     const { analysis, state: fast } = analyzeFastAfter(text, this.options(doc.uri), entry?.current.fast);
     // A text over a cap is not split into lines or evaluated: its one problem is all there is.
-    const lines = analysis.refused ? [] : splitLines(text);
     const last = analysis.refused ? undefined : entry?.lastEvaluated;
     const state: VersionState = {
       version: doc.version,
       revision: entry && entry.current.version === doc.version ? entry.current.revision + 1 : 0,
       text,
-      lines,
+      ...(analysis.refused ? { lines: [] } : {}),
       analysis,
       evaluated: analysis.refused === true,
-      carried: last ? carryOver(last.lines, lines, last.problems) : [],
+      carried: [],
       ...(last ? { carriedFrom: last } : {}),
       ...(fast ? { fast } : {}),
     };
+    if (last) state.carried = carryOver(last.lines, linesOf(state), last.problems);
     if (entry) entry.current = state;
     else this.docs.set(doc.uri, { current: state });
     return state;
@@ -169,7 +175,7 @@ export class DocumentStore {
     if (s.evaluated) return { problems: s.analysis.problems, complete: true };
     const last = this.docs.get(doc.uri)?.lastEvaluated;
     if (last && last !== s.carriedFrom) {
-      s.carried = carryOver(last.lines, s.lines, last.problems);
+      s.carried = carryOver(last.lines, linesOf(s), last.problems);
       s.carriedFrom = last;
     }
     return { problems: s.carried.length > 0 ? sortProblems([...s.analysis.problems, ...s.carried]) : s.analysis.problems, complete: false };
@@ -212,7 +218,7 @@ export class DocumentStore {
     s.analysis.result = result;
     s.analysis.problems = problems;
     s.evaluated = true;
-    entry.lastEvaluated = { lines: s.lines, problems: evaluationOnly };
+    entry.lastEvaluated = { lines: linesOf(s), problems: evaluationOnly };
   }
 
   /** The evaluated analysis, or the fast one if the evaluation does not arrive within `waitMs`. */
