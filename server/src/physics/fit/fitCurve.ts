@@ -146,7 +146,7 @@ export function fitCurve(problem: CurveProblem, options: LmOptions = {}): FitOut
   const errors = params.map((_, j) => (covariance && covariance[j]![j]! >= 0 ? Math.sqrt(covariance[j]![j]!) : null));
   const correlation = covariance ? correlationOf(covariance) : null;
 
-  const notMinimum = !(lm.gradientCosine <= GRADIENT_COSINE_LIMIT);
+  const notMinimum = !(lm.gradientCosine <= GRADIENT_COSINE_LIMIT) && !lm.atRoundOff;
 
   if (lm.status !== 'converged' || notMinimum) {
     const why = lm.status === 'max-iterations' ? `after ${lm.iterations} iterations` : 'no step lowers χ² any further';

@@ -43,6 +43,8 @@ export interface LmResult {
   status: LmStatus;
   /** Largest cosine between a Jacobian column and the residuals at the end (0 at an exact minimum). */
   gradientCosine: number;
+  /** χ² fell twenty orders of magnitude below its start: the residuals are the model's round-off, so the cosine means nothing. */
+  atRoundOff: boolean;
 }
 
 const DEFAULTS = { maxIterations: 200, ftol: 1e-15, xtol: 1e-13, gtol: 1e-12 };
@@ -128,10 +130,14 @@ export function levenbergMarquardt(problem: LeastSquaresProblem, start: Float64A
     evaluations,
     status: 'model-failed',
     gradientCosine: Number.NaN,
+    atRoundOff: false,
   });
   tally();
   if (!problem.residuals(p, r) || !finite(r)) return fail(0);
   let chi2 = sumSquares(r);
+  /** An exactly determined fit ends with χ² at the model's round-off, where no step helps any more. */
+  const atRoundOff = (x: number) => x <= 1e-20 * chi2Start;
+  const chi2Start = chi2;
   if (!jacobianAt(problem, p, r, scale, jac, tally)) return fail(0);
 
   const diag = new Float64Array(m);
@@ -208,10 +214,11 @@ export function levenbergMarquardt(problem: LeastSquaresProblem, start: Float64A
       lambda *= nu;
       nu *= 2;
       if (lambda > 1e30) {
-        status = 'stalled';
+        // No step helps: at round-off, the point is the solution.
+        status = atRoundOff(chi2) ? 'converged' : 'stalled';
         break;
       }
     }
   }
-  return { params: p, chi2, residuals: r, jacobian: jac, iterations, evaluations, status, gradientCosine: gradientCosine(jac, r, n, m) };
+  return { params: p, chi2, residuals: r, jacobian: jac, iterations, evaluations, status, gradientCosine: gradientCosine(jac, r, n, m), atRoundOff: atRoundOff(chi2) };
 }
