@@ -10,7 +10,7 @@
  * which stays the reference the tests compare against.
  */
 import { EIGEN_KERNELS_BASE64 } from './eigenKernelsBinary';
-import { tridiagonalQr } from './householderQl';
+import { tridiagonalValues } from './tridiagonalValues';
 import { tridiagonalEigenpairs } from './tridiagonalVectors';
 
 /** Rows per tile of the back-transformation kernel (ROW_TILE in eigenKernelsWat.mjs). */
@@ -93,10 +93,12 @@ export function simdHouseholderInverseIteration(a: Float64Array, n: number, valu
   const d = heap.subarray(l.d / 8, l.d / 8 + n);
   const e = heap.subarray(l.e / 8, l.e / 8 + n);
   // Row k of the tridiagonal's vectors into `vectors`, then into z with the padded stride.
-  if (!tridiagonalEigenpairs(d, e, n, values, vectors, (bd, be, m) => tridiagonalQr(bd, be, null, m))) return false;
+  if (!tridiagonalEigenpairs(d, e, n, values, vectors, tridiagonalValues)) return false;
   const z = l.z / 8;
   heap.fill(0, z, z + l.rows * ns);
-  for (let r = 0; r < n; r++) heap.set(vectors.subarray(r * n, r * n + n), z + r * ns);
+  for (let r = 0; r < n; r++) {
+    for (let i = 0, at = z + r * ns; i < n; i++) heap[at + i] = vectors[r * n + i];
+  }
   k.packReflectors(l.a, ns, n, l.refl);
   k.applyReflectors(l.z, ns, l.rows, n, l.refl, l.betas);
   // Rows of z to columns of `vectors`.

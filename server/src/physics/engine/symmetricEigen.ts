@@ -8,6 +8,7 @@
 import { householderInverseIterationInPlace } from './householderInverseIteration';
 import { householderQlInPlace } from './householderQl';
 import { jacobiInPlace } from './jacobiEigen';
+import { simdHouseholderInverseIteration, simdKernelsAvailable } from './simdEigen';
 import { sortEigenPairs } from './sortEigenPairs';
 
 export const JACOBI_MAX_ORDER = 8;
@@ -17,6 +18,13 @@ export const JACOBI_MAX_ORDER = 8;
  * docs/engine.md); below it the accumulated QR rotations cost no more.
  */
 export const INVERSE_ITERATION_MIN_ORDER = 32;
+/**
+ * From this order on, where WebAssembly runs, the reduction and the back-transformation of that
+ * route run as SIMD kernels (simdEigen.ts): 2× faster than the JavaScript loops at order 32,
+ * about 3× from 64 on (bench/eigen.bench.ts, docs/engine.md). The module is compiled on the
+ * first such block.
+ */
+export const SIMD_MIN_ORDER = 32;
 
 /**
  * Eigenpairs of the symmetric matrix `a` (destroyed), sorted ascending:
@@ -28,6 +36,9 @@ export function symmetricEigen(a: Float64Array, n: number, values: Float64Array,
   if (n <= JACOBI_MAX_ORDER) {
     ok = jacobiInPlace(a, n, vectors);
     for (let i = 0; i < n; i++) values[i] = a[i * n + i];
+  } else if (n >= SIMD_MIN_ORDER && simdKernelsAvailable()) {
+    // `a` is left as it was, so the QR route can take it should inverse iteration not converge.
+    ok = simdHouseholderInverseIteration(a, n, values, vectors) || qrRoute(a, n, values, vectors);
   } else if (n >= INVERSE_ITERATION_MIN_ORDER) {
     // Should inverse iteration not converge (it reports so), the QR route solves a copy.
     const copy = inputCopy(a, n);
