@@ -227,13 +227,69 @@ function applyReflectors() {
   )`;
 }
 
-/** The whole module: one exported memory (grown by the caller) and the three kernels. */
+/**
+ * maxAbs(src, count) → max |src[i]| (NaN if any entry is NaN); packScaled(src, n, ns, dst,
+ * factor): dst[i·ns + j] = factor · src[i·n + j], zero in the padding column; unpackTransposed(z,
+ * ns, n, out): out[i·n + r] = z[r·ns + i]. The O(n²) moves into and out of the kernels' layout.
+ */
+function moves() {
+  return `
+  (func $maxAbs (export "maxAbs") (param $src i32) (param $count i32) (result f64)
+    (local $i i32) (local $m v128) (local $x f64)
+    (local.set $m (v128.const f64x2 0 0))
+    (local.set $i (i32.const 0))
+    (block $done (loop $l
+      (br_if $done (i32.gt_s (i32.add (local.get $i) (i32.const 2)) (local.get $count)))
+      (local.set $m (f64x2.max (local.get $m) (f64x2.abs (v128.load ${at('(local.get $src)', '(local.get $i)')}))))
+      (local.set $i (i32.add (local.get $i) (i32.const 2)))
+      (br $l)))
+    (local.set $x (f64.max (f64x2.extract_lane 0 (local.get $m)) (f64x2.extract_lane 1 (local.get $m))))
+    (if (result f64) (i32.lt_s (local.get $i) (local.get $count))
+      (then (f64.max (local.get $x) (f64.abs ${f64(at('(local.get $src)', '(local.get $i)'))})))
+      (else (local.get $x))))
+  (func $packScaled (export "packScaled") (param $src i32) (param $n i32) (param $ns i32) (param $dst i32) (param $factor f64)
+    (local $i i32) (local $j i32) (local $from i32) (local $to i32)
+    (local.set $i (i32.const 0))
+    (block $i_done (loop $il
+      (br_if $i_done (i32.ge_s (local.get $i) (local.get $n)))
+      (local.set $from ${at('(local.get $src)', '(i32.mul (local.get $i) (local.get $n))')})
+      (local.set $to ${at('(local.get $dst)', '(i32.mul (local.get $i) (local.get $ns))')})
+      (local.set $j (i32.const 0))
+      (block $j_done (loop $jl
+        (br_if $j_done (i32.ge_s (local.get $j) (local.get $n)))
+        (f64.store ${at('(local.get $to)', '(local.get $j)')} (f64.mul (local.get $factor) ${f64(at('(local.get $from)', '(local.get $j)'))}))
+        (local.set $j (i32.add (local.get $j) (i32.const 1)))
+        (br $jl)))
+      (if (i32.lt_s (local.get $n) (local.get $ns)) (then (f64.store ${at('(local.get $to)', '(local.get $n)')} (f64.const 0))))
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $il))))
+  (func $unpackTransposed (export "unpackTransposed") (param $z i32) (param $ns i32) (param $n i32) (param $out i32)
+    (local $r i32) (local $i i32) (local $from i32) (local $to i32) (local $step i32)
+    (local.set $step (i32.shl (local.get $n) (i32.const 3)))
+    (local.set $r (i32.const 0))
+    (block $r_done (loop $rl
+      (br_if $r_done (i32.ge_s (local.get $r) (local.get $n)))
+      (local.set $from ${at('(local.get $z)', '(i32.mul (local.get $r) (local.get $ns))')})
+      (local.set $to ${at('(local.get $out)', '(local.get $r)')})
+      (local.set $i (i32.const 0))
+      (block $i_done (loop $il
+        (br_if $i_done (i32.ge_s (local.get $i) (local.get $n)))
+        (f64.store (local.get $to) ${f64(at('(local.get $from)', '(local.get $i)'))})
+        (local.set $to (i32.add (local.get $to) (local.get $step)))
+        (local.set $i (i32.add (local.get $i) (i32.const 1)))
+        (br $il)))
+      (local.set $r (i32.add (local.get $r) (i32.const 1)))
+      (br $rl))))`;
+}
+
+/** The whole module: one exported memory (grown by the caller) and the kernels. */
 export function eigenKernelsWat() {
   return `(module
   (memory (export "memory") 1)
 ${tridiagonalise()}
 ${packReflectors()}
 ${applyReflectors()}
+${moves()}
 )
 `;
 }

@@ -151,25 +151,30 @@ describe('WebAssembly kernels of the large-block eigen-solver', () => {
 
 describe('tridiagonal eigenvectors, four at a time', () => {
   it('bit-for-bit the vectors of one at a time: spread, clustered and split tridiagonals', () => {
-    for (const n of [5, 9, 33, 64, 100, 161]) {
-      for (const kind of ['spread', 'clustered', 'split']) {
-        const r = lcg(7 + n);
+    let failures = 0;
+    // (Order 256 'clustered' is one where inverse iteration gives up, returning false: the
+    // rows written before the failing vector must match too.)
+    for (const n of [5, 9, 33, 64, 100, 161, 256]) {
+      for (const [index, kind] of ['spread', 'clustered', 'split'].entries()) {
+        const r = lcg(7 + n + index);
         const d = new Float64Array(n);
         const e = new Float64Array(n);
         for (let i = 0; i < n; i++) {
           d[i] = kind === 'clustered' ? (i % 3) * 0.1 + 1e-9 * r() : 2 * r();
-          e[i] = kind === 'split' && i % 7 === 0 ? 0 : 0.2 + 0.6 * Math.abs(r());
+          e[i] = kind === 'split' && i % 7 === 0 ? 0 : 0.2 + 0.6 * Math.abs(r()) * Math.sqrt((n - i) / n);
         }
         for (const qr of [(bd: Float64Array, be: Float64Array, m: number) => tridiagonalQr(bd, be, null, m), tridiagonalValues]) {
           const one = { values: new Float64Array(n), z: new Float64Array(n * n) };
           const four = { values: new Float64Array(n), z: new Float64Array(n * n) };
-          expect(tridiagonalEigenpairs(d, e, n, one.values, one.z, qr, false)).toBe(true);
-          expect(tridiagonalEigenpairs(d, e, n, four.values, four.z, qr, true)).toBe(true);
+          const ok = tridiagonalEigenpairs(d, e, n, one.values, one.z, qr, false);
+          expect(tridiagonalEigenpairs(d, e, n, four.values, four.z, qr, true)).toBe(ok);
+          if (!ok) failures++;
           expect(four.values).toEqual(one.values);
           expect(four.z).toEqual(one.z);
         }
       }
     }
+    expect(failures).toBeGreaterThan(0);
   });
 
   it('values-only QR with square roots: the eigenvalues of tridiagonalQr to a few ulps of ‖T‖', () => {

@@ -21,6 +21,9 @@ interface EigenKernels {
   tridiagonalise(a: number, ns: number, n: number, d: number, e: number, betas: number, v: number, p: number): void;
   packReflectors(a: number, ns: number, n: number, out: number): void;
   applyReflectors(z: number, ns: number, rows: number, n: number, refl: number, betas: number): void;
+  maxAbs(src: number, count: number): number;
+  packScaled(src: number, n: number, ns: number, dst: number, factor: number): void;
+  unpackTransposed(z: number, ns: number, n: number, out: number): void;
 }
 
 /** undefined: not tried yet; null: this runtime cannot run the module. */
@@ -56,6 +59,8 @@ interface Layout {
   betas: number;
   v: number;
   p: number;
+  /** The caller's n × n matrix, in and out. */
+  stage: number;
 }
 
 function layout(n: number, memory: WebAssembly.Memory): Layout {
@@ -63,8 +68,9 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
   const rows = Math.ceil(n / ROW_TILE) * ROW_TILE;
   const square = 8 * ns * Math.max(n, rows);
   const vector = 8 * (ns + 2);
-  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: 3 * square, e: 3 * square + vector, betas: 3 * square + 2 * vector, v: 3 * square + 3 * vector, p: 3 * square + 4 * vector };
-  const bytes = l.p + vector;
+  const v = 3 * square;
+  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, stage: v + 5 * vector };
+  const bytes = l.stage + 8 * n * n;
   const pages = Math.ceil((bytes - memory.buffer.byteLength) / 65536);
   if (pages > 0) memory.grow(pages);
   return l;
@@ -78,33 +84,37 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
 export function simdHouseholderInverseIteration(a: Float64Array, n: number, values: Float64Array, vectors: Float64Array): boolean {
   const k = loadKernels();
   if (k === null) throw new Error('WebAssembly eigen kernels unavailable');
-  // Work on A / max|a_ij| so sums of squares can neither overflow nor underflow.
-  let big = 0;
-  for (let i = 0; i < n * n; i++) big = Math.max(big, Math.abs(a[i]));
-  if (!(big < Number.POSITIVE_INFINITY)) return false;
-  const scale = big > 0 && 1 / big < Number.POSITIVE_INFINITY ? big : 1;
   const l = layout(n, k.memory);
   const heap = new Float64Array(k.memory.buffer);
+  heap.set(a.subarray(0, n * n), l.stage / 8);
+  // Work on A / 2^m ≥ max|a_ij| so sums of squares can neither overflow nor underflow; a power
+  // of two makes the scaling and its undoing exact.
+  const big = k.maxAbs(l.stage, n * n);
+  if (!(big < Number.POSITIVE_INFINITY)) return false;
+  const scale = big > 0 && 1 / big < Number.POSITIVE_INFINITY ? powerOfTwoAtLeast(big) : 1;
   const ns = l.ns;
-  for (let i = 0, at = l.a / 8; i < n; i++, at += ns) {
-    for (let j = 0; j < n; j++) heap[at + j] = a[i * n + j] / scale;
-  }
+  k.packScaled(l.stage, n, ns, l.a, 1 / scale);
   k.tridiagonalise(l.a, ns, n, l.d, l.e, l.betas, l.v, l.p);
   const d = heap.subarray(l.d / 8, l.d / 8 + n);
   const e = heap.subarray(l.e / 8, l.e / 8 + n);
-  // Row k of the tridiagonal's vectors into `vectors`, then into z with the padded stride.
-  if (!tridiagonalEigenpairs(d, e, n, values, vectors, tridiagonalValues)) return false;
-  const z = l.z / 8;
-  heap.fill(0, z, z + l.rows * ns);
-  for (let r = 0; r < n; r++) {
-    for (let i = 0, at = z + r * ns; i < n; i++) heap[at + i] = vectors[r * n + i];
-  }
+  // Row k of the tridiagonal's vectors into the stage, then into z with the padded stride.
+  const stage = heap.subarray(l.stage / 8, l.stage / 8 + n * n);
+  if (!tridiagonalEigenpairs(d, e, n, values, stage, tridiagonalValues)) return false;
+  heap.fill(0, (l.z + 8 * n * ns) / 8, (l.z + 8 * l.rows * ns) / 8);
+  k.packScaled(l.stage, n, ns, l.z, 1);
   k.packReflectors(l.a, ns, n, l.refl);
   k.applyReflectors(l.z, ns, l.rows, n, l.refl, l.betas);
   // Rows of z to columns of `vectors`.
-  for (let r = 0; r < n; r++) {
-    for (let i = 0, at = z + r * ns; i < n; i++) vectors[i * n + r] = heap[at + i];
-  }
+  k.unpackTransposed(l.z, ns, n, l.stage);
+  vectors.set(stage);
   for (let i = 0; i < n; i++) values[i] *= scale;
   return true;
+}
+
+/** The smallest power of two ≥ x (x positive, finite, with 1/x finite). */
+function powerOfTwoAtLeast(x: number): number {
+  let p = 2 ** Math.ceil(Math.log2(x));
+  while (p < x) p *= 2;
+  while (p / 2 >= x) p /= 2;
+  return p;
 }

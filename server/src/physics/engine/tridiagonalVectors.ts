@@ -149,6 +149,34 @@ function normalise(z: Float64Array, at: number, n: number): number {
   return norm;
 }
 
+/** normalise() of four vectors at once (their sums interleaved); the norms go to `norms`. */
+function normaliseLanes(n: number, x0: Float64Array, x1: Float64Array, x2: Float64Array, x3: Float64Array, norms: Float64Array): void {
+  let s0 = 0;
+  let s1 = 0;
+  let s2 = 0;
+  let s3 = 0;
+  for (let i = 0; i < n; i++) {
+    s0 += x0[i] * x0[i];
+    s1 += x1[i] * x1[i];
+    s2 += x2[i] * x2[i];
+    s3 += x3[i] * x3[i];
+  }
+  norms[0] = Math.sqrt(s0);
+  norms[1] = Math.sqrt(s1);
+  norms[2] = Math.sqrt(s2);
+  norms[3] = Math.sqrt(s3);
+  const i0 = 1 / norms[0];
+  const i1 = 1 / norms[1];
+  const i2 = 1 / norms[2];
+  const i3 = 1 / norms[3];
+  for (let i = 0; i < n; i++) {
+    x0[i] *= i0;
+    x1[i] *= i1;
+    x2[i] *= i2;
+    x3[i] *= i3;
+  }
+}
+
 /** x minus its projections on the block's vectors from … k − 1 (modified Gram–Schmidt). */
 function orthogonalise(x: Float64Array, z: Float64Array, rows: Int32Array, stride: number, offset: number, n: number, from: number, k: number): void {
   for (let q = from; q < k; q++) {
@@ -193,6 +221,7 @@ function blockEigenvectors(
   let seed = 12345;
   const converged = [0, 0, 0, 0];
   const extra = [0, 0, 0, 0];
+  const norms = lanes[LANES].dd;
   for (let k = 0; k < n; ) {
     // LANES vectors in a row, each farther than `cluster` from the one before: no
     // orthogonalisation links them, so they can be iterated together.
@@ -218,28 +247,23 @@ function blockEigenvectors(
         for (let q = 0; q < LANES; q++) if (extra[q] < EXTRA) active++;
         if (active === 0) break;
         const spare = lanes[LANES].x;
-        solveLanes(
-          n,
-          lanes[0],
-          lanes[1],
-          lanes[2],
-          lanes[3],
-          extra[0] < EXTRA ? lanes[0].x : spare,
-          extra[1] < EXTRA ? lanes[1].x : spare,
-          extra[2] < EXTRA ? lanes[2].x : spare,
-          extra[3] < EXTRA ? lanes[3].x : spare,
-        );
+        const x0 = extra[0] < EXTRA ? lanes[0].x : spare;
+        const x1 = extra[1] < EXTRA ? lanes[1].x : spare;
+        const x2 = extra[2] < EXTRA ? lanes[2].x : spare;
+        const x3 = extra[3] < EXTRA ? lanes[3].x : spare;
+        solveLanes(n, lanes[0], lanes[1], lanes[2], lanes[3], x0, x1, x2, x3);
+        normaliseLanes(n, x0, x1, x2, x3, norms);
         for (let q = 0; q < LANES; q++) {
           if (extra[q] >= EXTRA) continue;
-          const growth = normalise(lanes[q].x, 0, n);
+          const growth = norms[q];
           if (!(growth < Number.POSITIVE_INFINITY)) return false;
           if (extra[q] >= 0 || growth >= converged[q]) extra[q]++;
         }
       }
+      normaliseLanes(n, lanes[0].x, lanes[1].x, lanes[2].x, lanes[3].x, norms);
       for (let q = 0; q < LANES; q++) {
         if (extra[q] < 0) return false;
         const xq = lanes[q].x;
-        normalise(xq, 0, n);
         const at = rows[k + q] * stride + offset;
         for (let i = 0; i < n; i++) z[at + i] = xq[i];
       }
