@@ -221,7 +221,7 @@ function blockEigenvectors(
   let seed = 12345;
   const converged = [0, 0, 0, 0];
   const extra = [0, 0, 0, 0];
-  const norms = lanes[LANES].dd;
+  const norms = lanes[LANES].dd; // the spare set never factorises: its dd holds the four norms
   for (let k = 0; k < n; ) {
     // LANES vectors in a row, each farther than `cluster` from the one before: no
     // orthogonalisation links them, so they can be iterated together.
