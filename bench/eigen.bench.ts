@@ -6,10 +6,13 @@
  */
 import { spawnSync } from 'node:child_process';
 import { symmetricEigen } from '../server/src/physics/engine';
+import { SIMD_MIN_ORDER } from '../server/src/physics/engine/symmetricEigen';
 import { makeWorkspace } from '../server/src/physics/engine/blockSolver';
 import { makeAnchors, sweepBlockBySeries, sweepBlockPerField } from '../server/src/physics/engine/blockSweep';
 import { buildLevelModel } from '../server/src/physics/engine/buildModel';
+import { householderInverseIterationInPlace } from '../server/src/physics/engine/householderInverseIteration';
 import { householderQlInPlace } from '../server/src/physics/engine/householderQl';
+import { simdHouseholderInverseIteration, simdKernelsAvailable } from '../server/src/physics/engine/simdEigen';
 import { jacobiInPlace } from '../server/src/physics/engine/jacobiEigen';
 import { libraryEigenInPlace } from './mlMatrixEigen';
 
@@ -142,8 +145,9 @@ function againstLapack(): void {
     core: string | null;
     orders: Record<string, { cpuMedian: number; cpuBest: number }>;
   };
-  console.log(`\nsymmetricEigen vs numpy.linalg.eigh ${np.numpy} (LAPACK via OpenBLAS, core ${np.core ?? '?'}), values + vectors, CPU µs per call:`);
-  console.log('order | engine median | LAPACK median | LAPACK ÷ engine (≥ 1: engine at least as fast)');
+  console.log(`\nsymmetricEigen vs numpy.linalg.eigh ${np.numpy} (LAPACK via OpenBLAS, core ${np.core ?? '?'}), values + vectors, CPU µs per call (medians of 5):`);
+  console.log(`engine: the dispatcher (WebAssembly kernels from order ${SIMD_MIN_ORDER}: ${simdKernelsAvailable() ? 'available' : 'NOT available'}); JS: the JavaScript route alone`);
+  console.log('order | engine | JS route | LAPACK | JS ÷ engine | LAPACK ÷ engine (≥ 1: engine at least as fast)');
   for (const n of LAPACK_ORDERS) {
     const rnd = lcg(99 + n);
     const mats = Array.from({ length: Math.max(4, Math.round(2000 / n)) }, () => randomSymmetric(n, rnd));
@@ -158,10 +162,46 @@ function againstLapack(): void {
       mats,
       n,
     );
+    const js = cpuPerCall(
+      (m) => {
+        work.set(m);
+        householderInverseIterationInPlace(work, n, values, vectors);
+      },
+      mats,
+      n,
+    );
     const ref = np.orders[String(n)];
     console.log(
-      `${String(n).padStart(5)} | ${ours.median.toFixed(1).padStart(13)} | ${ref.cpuMedian.toFixed(1).padStart(13)} | ${(ref.cpuMedian / ours.median).toFixed(2)}`,
+      `${String(n).padStart(5)} | ${ours.median.toFixed(1).padStart(6)} | ${js.median.toFixed(1).padStart(8)} | ${ref.cpuMedian.toFixed(1).padStart(6)} | ${(js.median / ours.median).toFixed(2).padStart(11)} | ${(ref.cpuMedian / ours.median).toFixed(2)}`,
     );
+  }
+}
+
+/**
+ * Where the WebAssembly route starts to pay (SIMD_MIN_ORDER): Householder + QR with the
+ * rotations accumulated (the route below INVERSE_ITERATION_MIN_ORDER), the JavaScript
+ * inverse-iteration route and the WebAssembly one on the same matrices, CPU µs per call.
+ */
+function simdCrossover(): void {
+  if (!simdKernelsAvailable()) return;
+  console.log('\ncrossover, CPU µs per call (medians of 5): order | QR, rotations accumulated | JS inverse iteration | WebAssembly kernels');
+  for (const n of [12, 16, 20, 24, 28, 32, 40, 48]) {
+    const rnd = lcg(7 + n);
+    const mats = Array.from({ length: Math.max(4, Math.round(2000 / n)) }, () => randomSymmetric(n, rnd));
+    const work = new Float64Array(n * n);
+    const values = new Float64Array(n);
+    const vectors = new Float64Array(n * n);
+    const scratch = [new Float64Array(n), new Float64Array(n), new Float64Array(n)];
+    const qr = cpuPerCall((m) => {
+      work.set(m);
+      householderQlInPlace(work, n, values, vectors, scratch[0], scratch[1], scratch[2]);
+    }, mats, n);
+    const js = cpuPerCall((m) => {
+      work.set(m);
+      householderInverseIterationInPlace(work, n, values, vectors);
+    }, mats, n);
+    const simd = cpuPerCall((m) => simdHouseholderInverseIteration(m, n, values, vectors), mats, n);
+    console.log(`${String(n).padStart(5)} | ${qr.median.toFixed(1).padStart(8)} | ${js.median.toFixed(1).padStart(8)} | ${simd.median.toFixed(1).padStart(8)}`);
   }
 }
 
@@ -202,6 +242,12 @@ function sweepRoutes(levels: { name: string; spec: Parameters<typeof buildLevelM
 }
 
 function main(): void {
+  // EIGEN_BENCH=large: only the crossover and the LAPACK comparison.
+  if (process.env.EIGEN_BENCH === 'large') {
+    simdCrossover();
+    againstLapack();
+    return;
+  }
   const orders = [2, 3, 4, 6, 8, 12, 16, 24, 32, 48, 64, 96, 128];
   const own = ownTridiagonalSolver();
   console.log('order | Jacobi µs | own Householder+QR µs | ml-matrix µs | Jacobi resid | own resid | ml-matrix resid');
@@ -235,6 +281,7 @@ function main(): void {
     }
   }
   sweepRoutes(levels);
+  simdCrossover();
   againstLapack();
 }
 

@@ -4,6 +4,7 @@ import { symmetricEigen } from '../../server/src/physics/engine';
 import { householderInverseIterationInPlace } from '../../server/src/physics/engine/householderInverseIteration';
 import { householderQlInPlace } from '../../server/src/physics/engine/householderQl';
 import { jacobiInPlace } from '../../server/src/physics/engine/jacobiEigen';
+import { simdHouseholderInverseIteration } from '../../server/src/physics/engine/simdEigen';
 import { sortEigenPairs } from '../../server/src/physics/engine/sortEigenPairs';
 
 type Solve = (a: Float64Array, n: number) => { values: Float64Array; vectors: Float64Array; ok: boolean };
@@ -33,6 +34,13 @@ const inverseIteration: Solve = (a, n) => {
   return { values, vectors, ok };
 };
 
+const simdKernels: Solve = (a, n) => {
+  const vectors = new Float64Array(n * n);
+  const values = new Float64Array(n);
+  const ok = simdHouseholderInverseIteration(a.slice(), n, values, vectors);
+  return { values, vectors, ok };
+};
+
 const dispatcher: Solve = (a, n) => {
   const vectors = new Float64Array(n * n);
   const values = new Float64Array(n);
@@ -44,6 +52,7 @@ const SOLVERS: [string, Solve][] = [
   ['Jacobi', jacobi],
   ['Householder + QR', householder],
   ['Householder + inverse iteration', inverseIteration],
+  ['Householder + inverse iteration, WebAssembly kernels', simdKernels],
   ['engine dispatcher', dispatcher],
 ];
 
@@ -160,7 +169,7 @@ describe('large orders (the inverse-iteration route of the dispatcher)', () => {
   it('random symmetric matrices of order 40–120 agree with ml-matrix and decompose A', () => {
     for (const n of [40, 64, 120]) {
       const a = randomSymmetric(n, 31 * n);
-      for (const solve of [inverseIteration, dispatcher]) {
+      for (const solve of [inverseIteration, simdKernels, dispatcher]) {
         const { values, vectors, ok } = solve(a, n);
         expect(ok).toBe(true);
         const lib = new EigenvalueDecomposition(new Matrix(Array.from({ length: n }, (_, i) => Array.from(a.subarray(i * n, i * n + n)))), { assumeSymmetric: true });
@@ -181,16 +190,18 @@ describe('large orders (the inverse-iteration route of the dispatcher)', () => {
     const blocks = new Float64Array(n * n);
     const b = [2, 1, 0, 0.5, 1, -1, 0.25, 0, 0, 0.25, 3, 1, 0.5, 0, 1, 0];
     for (let c = 0; c < n / 4; c++) for (let i = 0; i < 4; i++) for (let j = 0; j < 4; j++) blocks[(4 * c + i) * n + 4 * c + j] = b[i * 4 + j];
-    for (const a of [rank1, diagonal, blocks]) {
-      const { values, vectors, ok } = inverseIteration(a, n);
-      expect(ok).toBe(true);
-      checkDecomposition(a, n, values, vectors, 1e-14);
+    for (const solve of [inverseIteration, simdKernels]) {
+      for (const a of [rank1, diagonal, blocks]) {
+        const { values, vectors, ok } = solve(a, n);
+        expect(ok).toBe(true);
+        checkDecomposition(a, n, values, vectors, 1e-14);
+      }
+      // 2I + 1e-3 u uᵀ: eigenvalue 2 (47 times) and 2 + 1e-3 |u|².
+      const { values } = solve(rank1, n);
+      let uu = 0;
+      for (let i = 0; i < n; i++) uu += Math.sin(i + 1) ** 2;
+      expect(Math.abs(values[n - 1] - (2 + 1e-3 * uu))).toBeLessThan(1e-14);
+      for (let k = 0; k < n - 1; k++) expect(Math.abs(values[k] - 2)).toBeLessThan(1e-14);
     }
-    // 2I + 1e-3 u uᵀ: eigenvalue 2 (47 times) and 2 + 1e-3 |u|².
-    const { values } = inverseIteration(rank1, n);
-    let uu = 0;
-    for (let i = 0; i < n; i++) uu += Math.sin(i + 1) ** 2;
-    expect(Math.abs(values[n - 1] - (2 + 1e-3 * uu))).toBeLessThan(1e-14);
-    for (let k = 0; k < n - 1; k++) expect(Math.abs(values[k] - 2)).toBeLessThan(1e-14);
   });
 });

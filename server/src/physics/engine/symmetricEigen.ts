@@ -1,13 +1,16 @@
 /**
  * Eigen-decomposition used by the engine: own cyclic Jacobi for blocks up to
  * JACOBI_MAX_ORDER, own Householder + implicit-shift QR above, and from
- * INVERSE_ITERATION_MIN_ORDER on the QR for eigenvalues only with the vectors by inverse iteration. Both beat
- * ml-matrix's EigenvalueDecomposition on every order measured; the switch
- * point comes from bench/eigen.bench.ts (numbers in docs/engine.md).
+ * INVERSE_ITERATION_MIN_ORDER on the QR for eigenvalues only with the vectors by inverse
+ * iteration. From SIMD_MIN_ORDER on, where WebAssembly runs, that route's reduction and
+ * back-transformation run as SIMD kernels (simdEigen.ts). All beat ml-matrix's
+ * EigenvalueDecomposition on every order measured; the switch points come from
+ * bench/eigen.bench.ts (numbers in docs/engine.md).
  */
 import { householderInverseIterationInPlace } from './householderInverseIteration';
 import { householderQlInPlace } from './householderQl';
 import { jacobiInPlace } from './jacobiEigen';
+import { simdHouseholderInverseIteration, simdKernelsAvailable } from './simdEigen';
 import { sortEigenPairs } from './sortEigenPairs';
 
 export const JACOBI_MAX_ORDER = 8;
@@ -17,6 +20,14 @@ export const JACOBI_MAX_ORDER = 8;
  * docs/engine.md); below it the accumulated QR rotations cost no more.
  */
 export const INVERSE_ITERATION_MIN_ORDER = 32;
+/**
+ * From this order on, where WebAssembly runs, blocks take the inverse-iteration route with its
+ * reduction and back-transformation as SIMD kernels (simdEigen.ts): 1.1–1.4× faster than the
+ * QR route at order 16 (which keeps order 12 and below, where it is 1.1–1.2× faster), 1.8–4×
+ * faster than the JavaScript loops from 32 on (bench/eigen.bench.ts, docs/engine.md). The
+ * module is compiled on the first such block.
+ */
+export const SIMD_MIN_ORDER = 16;
 
 /**
  * Eigenpairs of the symmetric matrix `a` (destroyed), sorted ascending:
@@ -28,6 +39,9 @@ export function symmetricEigen(a: Float64Array, n: number, values: Float64Array,
   if (n <= JACOBI_MAX_ORDER) {
     ok = jacobiInPlace(a, n, vectors);
     for (let i = 0; i < n; i++) values[i] = a[i * n + i];
+  } else if (n >= SIMD_MIN_ORDER && simdKernelsAvailable()) {
+    // `a` is left as it was, so the QR route can take it should inverse iteration not converge.
+    ok = simdHouseholderInverseIteration(a, n, values, vectors) || qrRoute(a, n, values, vectors);
   } else if (n >= INVERSE_ITERATION_MIN_ORDER) {
     // Should inverse iteration not converge (it reports so), the QR route solves a copy.
     const copy = inputCopy(a, n);

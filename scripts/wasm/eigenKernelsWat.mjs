@@ -1,0 +1,295 @@
+// WebAssembly text of the eigen-solver's two O(n³) kernels (128-bit SIMD, two doubles a lane
+// pair), written out by a generator so the unrolled row tiles stay readable here.
+// Layout shared with server/src/physics/engine/simdEigen.ts: every matrix is row-major with an
+// even row stride `ns` (n rounded up), so pairs of doubles start 16-byte aligned; all pointers
+// are byte offsets into the one exported memory.
+
+/** Rows of the eigenvector matrix that share one pass over a reflector in `applyReflectors`. */
+export const ROW_TILE = 4;
+
+const f64 = (addr) => `(f64.load ${addr})`;
+const at = (base, index) => `(i32.add ${base} (i32.shl ${index} (i32.const 3)))`;
+const sumLanes = (x) => `(f64.add (f64x2.extract_lane 0 ${x}) (f64x2.extract_lane 1 ${x}))`;
+
+/**
+ * tridiagonalise(a, ns, n, d, e, betas, v, p): Householder reduction of the lower triangle of
+ * the order-n matrix at `a` to T (diagonal d, sub-diagonal e), the same steps as
+ * tridiagonaliseLower in householderInverseIteration.ts: reflector k stays in column k below
+ * the diagonal, β_k in betas[k]. v and p are scratch of n + 2 doubles. Per step, the
+ * symmetric product p = β A v (row i: a dot product along the row and an update of p along it)
+ * and the rank-2 update A ← A − v wᵀ − w vᵀ run over the row in pairs from the even index at
+ * or below k + 1; v_k = w_k = 0 make the pair's column-k half an exact no-op.
+ */
+function tridiagonalise() {
+  const A = (i, j) => at(`(local.get $a)`, `(i32.add (i32.mul ${i} (local.get $ns)) ${j})`);
+  const V = (i) => at(`(local.get $v)`, i);
+  const P = (i) => at(`(local.get $p)`, i);
+  return `
+  (func $tridiagonalise (export "tridiagonalise")
+    (param $a i32) (param $ns i32) (param $n i32) (param $d i32) (param $e i32) (param $betas i32) (param $v i32) (param $p i32)
+    (local $k i32) (local $i i32) (local $j i32) (local $j0 i32) (local $row i32)
+    (local $tail f64) (local $x0 f64) (local $alpha f64) (local $beta f64) (local $s f64) (local $vi f64) (local $wi f64)
+    (local $vp f64) (local $kk f64) (local $aij f64)
+    (local $s2 v128) (local $x v128) (local $vi2 v128) (local $wi2 v128)
+    (local.set $k (i32.const 0))
+    (block $steps_done
+      (loop $steps
+        (br_if $steps_done (i32.ge_s (i32.add (local.get $k) (i32.const 2)) (local.get $n)))
+        ;; tail = Σ_{i ≥ k+2} a_ik²
+        (local.set $tail (f64.const 0))
+        (local.set $i (i32.add (local.get $k) (i32.const 2)))
+        (block $t_done (loop $t
+          (br_if $t_done (i32.ge_s (local.get $i) (local.get $n)))
+          (local.set $aij ${f64(A('(local.get $i)', '(local.get $k)'))})
+          (local.set $tail (f64.add (local.get $tail) (f64.mul (local.get $aij) (local.get $aij))))
+          (local.set $i (i32.add (local.get $i) (i32.const 1)))
+          (br $t)))
+        (local.set $x0 ${f64(A('(i32.add (local.get $k) (i32.const 1))', '(local.get $k)'))})
+        (if (f64.eq (local.get $tail) (f64.const 0))
+          (then
+            (f64.store ${at('(local.get $betas)', '(local.get $k)')} (f64.const 0))
+            (f64.store ${at('(local.get $e)', '(local.get $k)')} (local.get $x0)))
+          (else
+            (local.set $alpha (f64.sqrt (f64.add (local.get $tail) (f64.mul (local.get $x0) (local.get $x0)))))
+            (if (f64.ge (local.get $x0) (f64.const 0)) (then (local.set $alpha (f64.neg (local.get $alpha)))))
+            (f64.store ${A('(i32.add (local.get $k) (i32.const 1))', '(local.get $k)')} (f64.sub (local.get $x0) (local.get $alpha)))
+            ;; v: contiguous copy of column k, v_k = 0
+            (f64.store ${V('(local.get $k)')} (f64.const 0))
+            (local.set $i (i32.add (local.get $k) (i32.const 1)))
+            (block $c_done (loop $c
+              (br_if $c_done (i32.ge_s (local.get $i) (local.get $n)))
+              (f64.store ${V('(local.get $i)')} ${f64(A('(local.get $i)', '(local.get $k)'))})
+              (f64.store ${P('(local.get $i)')} (f64.const 0))
+              (local.set $i (i32.add (local.get $i) (i32.const 1)))
+              (br $c)))
+            (f64.store ${P('(local.get $k)')} (f64.const 0))
+            (local.set $x0 ${f64(V('(i32.add (local.get $k) (i32.const 1))'))})
+            (local.set $beta (f64.div (f64.const 2) (f64.add (f64.mul (local.get $x0) (local.get $x0)) (local.get $tail))))
+            (f64.store ${at('(local.get $betas)', '(local.get $k)')} (local.get $beta))
+            (f64.store ${at('(local.get $e)', '(local.get $k)')} (local.get $alpha))
+            (local.set $j0 (i32.and (i32.add (local.get $k) (i32.const 1)) (i32.const -2)))
+            ;; p = A v from the lower triangle: row i gives Σ_{j<i} a_ij v_j to p_i and a_ij v_i to p_j.
+            (local.set $i (i32.add (local.get $k) (i32.const 1)))
+            (block $r_done (loop $r
+              (br_if $r_done (i32.ge_s (local.get $i) (local.get $n)))
+              (local.set $row ${A('(local.get $i)', '(i32.const 0)')})
+              (local.set $vi ${f64(V('(local.get $i)'))})
+              (local.set $vi2 (f64x2.splat (local.get $vi)))
+              (local.set $s2 (v128.const f64x2 0 0))
+              (local.set $j (local.get $j0))
+              (block $q_done (loop $q
+                (br_if $q_done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $i)))
+                (local.set $x (v128.load ${at('(local.get $row)', '(local.get $j)')}))
+                (local.set $s2 (f64x2.add (local.get $s2) (f64x2.mul (local.get $x) (v128.load ${V('(local.get $j)')}))))
+                (v128.store ${P('(local.get $j)')} (f64x2.add (v128.load ${P('(local.get $j)')}) (f64x2.mul (local.get $x) (local.get $vi2))))
+                (local.set $j (i32.add (local.get $j) (i32.const 2)))
+                (br $q)))
+              (local.set $s ${sumLanes('(local.get $s2)')})
+              (if (i32.lt_s (local.get $j) (local.get $i))
+                (then
+                  (local.set $aij ${f64(at('(local.get $row)', '(local.get $j)'))})
+                  (local.set $s (f64.add (local.get $s) (f64.mul (local.get $aij) ${f64(V('(local.get $j)'))})))
+                  (f64.store ${P('(local.get $j)')} (f64.add ${f64(P('(local.get $j)'))} (f64.mul (local.get $aij) (local.get $vi))))))
+              (f64.store ${P('(local.get $i)')}
+                (f64.add ${f64(P('(local.get $i)'))} (f64.add (local.get $s) (f64.mul ${f64(at('(local.get $row)', '(local.get $i)'))} (local.get $vi)))))
+              (local.set $i (i32.add (local.get $i) (i32.const 1)))
+              (br $r)))
+            ;; p ← β p, then w = p − (β/2)(vᵀp) v in p.
+            (local.set $vp (f64.const 0))
+            (local.set $i (i32.add (local.get $k) (i32.const 1)))
+            (block $b_done (loop $b
+              (br_if $b_done (i32.ge_s (local.get $i) (local.get $n)))
+              (local.set $s (f64.mul (local.get $beta) ${f64(P('(local.get $i)'))}))
+              (f64.store ${P('(local.get $i)')} (local.get $s))
+              (local.set $vp (f64.add (local.get $vp) (f64.mul ${f64(V('(local.get $i)'))} (local.get $s))))
+              (local.set $i (i32.add (local.get $i) (i32.const 1)))
+              (br $b)))
+            (local.set $kk (f64.mul (f64.mul (f64.const 0.5) (local.get $beta)) (local.get $vp)))
+            (local.set $i (i32.add (local.get $k) (i32.const 1)))
+            (block $w_done (loop $w
+              (br_if $w_done (i32.ge_s (local.get $i) (local.get $n)))
+              (f64.store ${P('(local.get $i)')} (f64.sub ${f64(P('(local.get $i)'))} (f64.mul (local.get $kk) ${f64(V('(local.get $i)'))})))
+              (local.set $i (i32.add (local.get $i) (i32.const 1)))
+              (br $w)))
+            (f64.store ${P('(local.get $k)')} (f64.const 0))
+            ;; A ← A − v wᵀ − w vᵀ on the lower trailing triangle.
+            (local.set $i (i32.add (local.get $k) (i32.const 1)))
+            (block $u_done (loop $u
+              (br_if $u_done (i32.ge_s (local.get $i) (local.get $n)))
+              (local.set $row ${A('(local.get $i)', '(i32.const 0)')})
+              (local.set $vi ${f64(V('(local.get $i)'))})
+              (local.set $wi ${f64(P('(local.get $i)'))})
+              (local.set $vi2 (f64x2.splat (local.get $vi)))
+              (local.set $wi2 (f64x2.splat (local.get $wi)))
+              (local.set $j (local.get $j0))
+              (block $g_done (loop $g
+                (br_if $g_done (i32.gt_s (i32.add (local.get $j) (i32.const 1)) (local.get $i)))
+                (v128.store ${at('(local.get $row)', '(local.get $j)')}
+                  (f64x2.sub (v128.load ${at('(local.get $row)', '(local.get $j)')})
+                    (f64x2.add (f64x2.mul (local.get $vi2) (v128.load ${P('(local.get $j)')})) (f64x2.mul (local.get $wi2) (v128.load ${V('(local.get $j)')})))))
+                (local.set $j (i32.add (local.get $j) (i32.const 2)))
+                (br $g)))
+              (if (i32.eq (local.get $j) (local.get $i))
+                (then
+                  (f64.store ${at('(local.get $row)', '(local.get $j)')}
+                    (f64.sub ${f64(at('(local.get $row)', '(local.get $j)'))}
+                      (f64.add (f64.mul (local.get $vi) (local.get $wi)) (f64.mul (local.get $wi) (local.get $vi)))))))
+              (local.set $i (i32.add (local.get $i) (i32.const 1)))
+              (br $u)))))
+        (local.set $k (i32.add (local.get $k) (i32.const 1)))
+        (br $steps)))
+    (local.set $i (i32.const 0))
+    (block $d_done (loop $dl
+      (br_if $d_done (i32.ge_s (local.get $i) (local.get $n)))
+      (f64.store ${at('(local.get $d)', '(local.get $i)')} ${f64(A('(local.get $i)', '(local.get $i)'))})
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $dl)))
+    (if (i32.ge_s (local.get $n) (i32.const 2))
+      (then
+        (f64.store ${at('(local.get $e)', '(i32.sub (local.get $n) (i32.const 2))')}
+          ${f64(A('(i32.sub (local.get $n) (i32.const 1))', '(i32.sub (local.get $n) (i32.const 2))'))})))
+  )`;
+}
+
+/**
+ * packReflectors(a, ns, n, out): reflector k (column k of `a` below the diagonal) as row k of
+ * `out` (stride ns), zero before index k + 1 and in the padding, so applyReflectors reads it in
+ * aligned pairs.
+ */
+function packReflectors() {
+  return `
+  (func $packReflectors (export "packReflectors") (param $a i32) (param $ns i32) (param $n i32) (param $out i32)
+    (local $k i32) (local $i i32) (local $row i32)
+    (local.set $k (i32.const 0))
+    (block $k_done (loop $kl
+      (br_if $k_done (i32.ge_s (local.get $k) (local.get $n)))
+      (local.set $row ${at('(local.get $out)', '(i32.mul (local.get $k) (local.get $ns))')})
+      (local.set $i (i32.const 0))
+      (block $i_done (loop $il
+        (br_if $i_done (i32.ge_s (local.get $i) (local.get $ns)))
+        (f64.store ${at('(local.get $row)', '(local.get $i)')}
+          (if (result f64) (i32.and (i32.gt_s (local.get $i) (local.get $k)) (i32.lt_s (local.get $i) (local.get $n)))
+            (then ${f64(at('(local.get $a)', '(i32.add (i32.mul (local.get $i) (local.get $ns)) (local.get $k))'))})
+            (else (f64.const 0))))
+        (local.set $i (i32.add (local.get $i) (i32.const 1)))
+        (br $il)))
+      (local.set $k (i32.add (local.get $k) (i32.const 1)))
+      (br $kl)))
+  )`;
+}
+
+/**
+ * applyReflectors(z, ns, rows, n, refl, betas): every row r < rows (a multiple of ROW_TILE) of
+ * z becomes row · H_{n−3} … H_0 (H_k for k = n−3 down to 0, as applyReflectors in
+ * householderInverseIteration.ts; the reflectors packed by packReflectors). ROW_TILE rows stay in cache while every reflector passes
+ * over them: per reflector ROW_TILE dot products, then ROW_TILE updates, in aligned pairs
+ * from the even index at or below k + 1.
+ */
+function applyReflectors() {
+  const R = ROW_TILE;
+  const idx = [...Array(R).keys()];
+  const zAt = (q) => at(`(local.get $z${q})`, '(local.get $i)');
+  return `
+  (func $applyReflectors (export "applyReflectors") (param $z i32) (param $ns i32) (param $rows i32) (param $n i32) (param $refl i32) (param $betas i32)
+    (local $r i32) (local $k i32) (local $i i32) (local $vrow i32) (local $beta f64) (local $x v128)
+    ${idx.map((q) => `(local $z${q} i32) (local $s${q} v128)`).join(' ')}
+    (local.set $r (i32.const 0))
+    (block $r_done (loop $rl
+      (br_if $r_done (i32.ge_s (local.get $r) (local.get $rows)))
+      ${idx.map((q) => `(local.set $z${q} ${at('(local.get $z)', `(i32.mul (i32.add (local.get $r) (i32.const ${q})) (local.get $ns))`)})`).join('\n      ')}
+      (local.set $k (i32.sub (local.get $n) (i32.const 3)))
+      (block $k_done (loop $kl
+        (br_if $k_done (i32.lt_s (local.get $k) (i32.const 0)))
+        (local.set $beta ${f64(at('(local.get $betas)', '(local.get $k)'))})
+        (if (f64.ne (local.get $beta) (f64.const 0))
+          (then
+            (local.set $vrow ${at('(local.get $refl)', '(i32.mul (local.get $k) (local.get $ns))')})
+            ${idx.map((q) => `(local.set $s${q} (v128.const f64x2 0 0))`).join(' ')}
+            (local.set $i (i32.and (i32.add (local.get $k) (i32.const 1)) (i32.const -2)))
+            (block $dot_done (loop $dot
+              (br_if $dot_done (i32.ge_s (local.get $i) (local.get $ns)))
+              (local.set $x (v128.load ${at('(local.get $vrow)', '(local.get $i)')}))
+              ${idx.map((q) => `(local.set $s${q} (f64x2.add (local.get $s${q}) (f64x2.mul (local.get $x) (v128.load ${zAt(q)}))))`).join('\n              ')}
+              (local.set $i (i32.add (local.get $i) (i32.const 2)))
+              (br $dot)))
+            ${idx.map((q) => `(local.set $s${q} (f64x2.splat (f64.mul (local.get $beta) ${sumLanes(`(local.get $s${q})`)})))`).join('\n            ')}
+            (local.set $i (i32.and (i32.add (local.get $k) (i32.const 1)) (i32.const -2)))
+            (block $upd_done (loop $upd
+              (br_if $upd_done (i32.ge_s (local.get $i) (local.get $ns)))
+              (local.set $x (v128.load ${at('(local.get $vrow)', '(local.get $i)')}))
+              ${idx.map((q) => `(v128.store ${zAt(q)} (f64x2.sub (v128.load ${zAt(q)}) (f64x2.mul (local.get $s${q}) (local.get $x))))`).join('\n              ')}
+              (local.set $i (i32.add (local.get $i) (i32.const 2)))
+              (br $upd)))))
+        (local.set $k (i32.sub (local.get $k) (i32.const 1)))
+        (br $kl)))
+      (local.set $r (i32.add (local.get $r) (i32.const ${R})))
+      (br $rl)))
+  )`;
+}
+
+/**
+ * maxAbs(src, count) → max |src[i]| (NaN if any entry is NaN); packScaled(src, n, ns, dst,
+ * factor): dst[i·ns + j] = factor · src[i·n + j], zero in the padding column; unpackTransposed(z,
+ * ns, n, out): out[i·n + r] = z[r·ns + i]. The O(n²) moves into and out of the kernels' layout.
+ */
+function moves() {
+  return `
+  (func $maxAbs (export "maxAbs") (param $src i32) (param $count i32) (result f64)
+    (local $i i32) (local $m v128) (local $x f64)
+    (local.set $m (v128.const f64x2 0 0))
+    (local.set $i (i32.const 0))
+    (block $done (loop $l
+      (br_if $done (i32.gt_s (i32.add (local.get $i) (i32.const 2)) (local.get $count)))
+      (local.set $m (f64x2.max (local.get $m) (f64x2.abs (v128.load ${at('(local.get $src)', '(local.get $i)')}))))
+      (local.set $i (i32.add (local.get $i) (i32.const 2)))
+      (br $l)))
+    (local.set $x (f64.max (f64x2.extract_lane 0 (local.get $m)) (f64x2.extract_lane 1 (local.get $m))))
+    (if (result f64) (i32.lt_s (local.get $i) (local.get $count))
+      (then (f64.max (local.get $x) (f64.abs ${f64(at('(local.get $src)', '(local.get $i)'))})))
+      (else (local.get $x))))
+  (func $packScaled (export "packScaled") (param $src i32) (param $n i32) (param $ns i32) (param $dst i32) (param $factor f64)
+    (local $i i32) (local $j i32) (local $from i32) (local $to i32)
+    (local.set $i (i32.const 0))
+    (block $i_done (loop $il
+      (br_if $i_done (i32.ge_s (local.get $i) (local.get $n)))
+      (local.set $from ${at('(local.get $src)', '(i32.mul (local.get $i) (local.get $n))')})
+      (local.set $to ${at('(local.get $dst)', '(i32.mul (local.get $i) (local.get $ns))')})
+      (local.set $j (i32.const 0))
+      (block $j_done (loop $jl
+        (br_if $j_done (i32.ge_s (local.get $j) (local.get $n)))
+        (f64.store ${at('(local.get $to)', '(local.get $j)')} (f64.mul (local.get $factor) ${f64(at('(local.get $from)', '(local.get $j)'))}))
+        (local.set $j (i32.add (local.get $j) (i32.const 1)))
+        (br $jl)))
+      (if (i32.lt_s (local.get $n) (local.get $ns)) (then (f64.store ${at('(local.get $to)', '(local.get $n)')} (f64.const 0))))
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $il))))
+  (func $unpackTransposed (export "unpackTransposed") (param $z i32) (param $ns i32) (param $n i32) (param $out i32)
+    (local $r i32) (local $i i32) (local $from i32) (local $to i32) (local $step i32)
+    (local.set $step (i32.shl (local.get $n) (i32.const 3)))
+    (local.set $r (i32.const 0))
+    (block $r_done (loop $rl
+      (br_if $r_done (i32.ge_s (local.get $r) (local.get $n)))
+      (local.set $from ${at('(local.get $z)', '(i32.mul (local.get $r) (local.get $ns))')})
+      (local.set $to ${at('(local.get $out)', '(local.get $r)')})
+      (local.set $i (i32.const 0))
+      (block $i_done (loop $il
+        (br_if $i_done (i32.ge_s (local.get $i) (local.get $n)))
+        (f64.store (local.get $to) ${f64(at('(local.get $from)', '(local.get $i)'))})
+        (local.set $to (i32.add (local.get $to) (local.get $step)))
+        (local.set $i (i32.add (local.get $i) (i32.const 1)))
+        (br $il)))
+      (local.set $r (i32.add (local.get $r) (i32.const 1)))
+      (br $rl))))`;
+}
+
+/** The whole module: one exported memory (grown by the caller) and the kernels. */
+export function eigenKernelsWat() {
+  return `(module
+  (memory (export "memory") 1)
+${tridiagonalise()}
+${packReflectors()}
+${applyReflectors()}
+${moves()}
+)
+`;
+}
