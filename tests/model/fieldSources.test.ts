@@ -64,6 +64,11 @@ describe('vector and direction readers', () => {
     expect(readDirection(setting('direction = up'), q)).toBeUndefined();
     expect(q.items.map((x) => x.code)).toEqual(['direction-zero', 'direction-unknown']);
     expect(q.items[1]!.message).toContain("got 'up'");
+    // An uncertainty on a direction component is read but cannot reach a result: a note, at that number.
+    const u = new ProblemList();
+    expect(readDirection(setting('direction = 0, 0.05(1), 1'), u)?.value[2]).toBeCloseTo(1 / Math.hypot(0.05, 1), 15);
+    expect(u.items.map((x) => [x.code, x.severity])).toEqual([['direction-uncertainty-unused', 'info']]);
+    expect(u.items[0]!.message).toContain('not used');
   });
 });
 

@@ -87,6 +87,7 @@ export const MODEL_RULES = {
   'vector-malformed': { severity: 'error', summary: 'A point or size not written as three numbers with a unit (0, 0, 3 cm).' },
   'direction-unknown': { severity: 'error', summary: 'A direction that is not x, y, z, -x, -y, -z or three numbers.' },
   'direction-zero': { severity: 'error', summary: 'A direction written as three numbers that are all zero.' },
+  'direction-uncertainty-unused': { severity: 'info', summary: 'An uncertainty written on a direction component: directions are taken as exact, so it reaches no result.' },
   'source-incomplete': { severity: 'error', summary: 'A coil, solenoid, wire or slab lacks a setting its field needs.' },
   'source-turns-not-whole': { severity: 'error', summary: 'A number of turns that is not a whole number.' },
   'source-current-zero': { severity: 'warning', summary: 'A source whose current is zero adds no field.' },

@@ -92,6 +92,11 @@ export function readDirectionParts(key: string, groups: readonly (readonly Value
     problems.add('direction-zero', `${key} = ${flat.map((p) => p.text).join(', ')} has no direction: at least one number must be non-zero`, span);
     return undefined;
   }
+  // Directions are exact in the field sums and flights; say so rather than drop a written uncertainty quietly.
+  const uncertain = flat.filter((p) => p.kind === 'number' && p.number.uncertainty !== undefined);
+  if (uncertain.length > 0) {
+    problems.add('direction-uncertainty-unused', `the uncertainty written on ${key} is not used: directions are taken as exact, so it reaches no result (write the uncertainty on a position or a size instead)`, spanOf(uncertain, span));
+  }
   return { value: [n[0]! / len, n[1]! / len, n[2]! / len], source: FILE_SOURCE, range: span };
 }
 
