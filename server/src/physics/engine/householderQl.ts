@@ -6,7 +6,7 @@
  * skip their reflection, and all work happens in caller-provided buffers.
  */
 
-const EPS = 2.220446049250313e-16;
+import { deflatingQr } from './tridiagonalValues';
 
 /**
  * Reduce `a` (order n, full symmetric storage, destroyed) to tridiagonal form
@@ -149,23 +149,5 @@ export function householderQlInPlace(
  * non-finite input or if the iteration limit (30 n sweeps) is reached.
  */
 export function tridiagonalQr(d: Float64Array, e: Float64Array, qt: Float64Array | null, n: number): boolean {
-  let norm = 0;
-  for (let i = 0; i < n; i++) norm = Math.max(norm, Math.abs(d[i]) + (i > 0 ? Math.abs(e[i - 1]) : 0) + (i < n - 1 ? Math.abs(e[i]) : 0));
-  if (!Number.isFinite(norm)) return false;
-  const floor = 1e-300 + EPS * 1e-3 * norm;
-  let m = n - 1;
-  for (let iter = 0; m > 0; iter++) {
-    if (iter > 30 * n) return false;
-    // Deflate converged eigenvalues at the bottom.
-    while (m > 0 && Math.abs(e[m - 1]) <= EPS * (Math.abs(d[m - 1]) + Math.abs(d[m])) + floor) {
-      e[m - 1] = 0;
-      m--;
-    }
-    if (m === 0) break;
-    let l = m - 1;
-    while (l > 0 && Math.abs(e[l - 1]) > EPS * (Math.abs(d[l - 1]) + Math.abs(d[l])) + floor) l--;
-    if (l > 0) e[l - 1] = 0;
-    chaseBulge(d, e, qt, n, l, m);
-  }
-  return true;
+  return deflatingQr(d, e, n, (l, m) => chaseBulge(d, e, qt, n, l, m));
 }

@@ -50,10 +50,11 @@ function chaseValues(d: Float64Array, e: Float64Array, l: number, m: number): vo
 }
 
 /**
- * Eigenvalues of the tridiagonal (d, e) into d (unsorted; e destroyed). Returns false on
+ * The deflation loop both QR routes share: split off converged values at the bottom, find the
+ * unreduced block [l, m] above, and let `chase` run one shifted sweep over it. Returns false on
  * non-finite input or if the iteration limit (30 n sweeps) is reached.
  */
-export function tridiagonalValues(d: Float64Array, e: Float64Array, n: number): boolean {
+export function deflatingQr(d: Float64Array, e: Float64Array, n: number, chase: (l: number, m: number) => void): boolean {
   let norm = 0;
   for (let i = 0; i < n; i++) norm = Math.max(norm, Math.abs(d[i]) + (i > 0 ? Math.abs(e[i - 1]) : 0) + (i < n - 1 ? Math.abs(e[i]) : 0));
   if (!Number.isFinite(norm)) return false;
@@ -69,7 +70,12 @@ export function tridiagonalValues(d: Float64Array, e: Float64Array, n: number): 
     let l = m - 1;
     while (l > 0 && Math.abs(e[l - 1]) > EPS * (Math.abs(d[l - 1]) + Math.abs(d[l])) + floor) l--;
     if (l > 0) e[l - 1] = 0;
-    chaseValues(d, e, l, m);
+    chase(l, m);
   }
   return true;
+}
+
+/** Eigenvalues of the tridiagonal (d, e) into d (unsorted; e destroyed); false as deflatingQr. */
+export function tridiagonalValues(d: Float64Array, e: Float64Array, n: number): boolean {
+  return deflatingQr(d, e, n, (l, m) => chaseValues(d, e, l, m));
 }
