@@ -7,23 +7,15 @@
  * atom strays beyond it, as fieldMapBeam.ts does.
  */
 import type { LevelSpec } from '../../engine';
-import type { FieldFunction, Vec3 } from '../../fields/types';
-import { flySublevel, type FlightOptions } from './flight';
+import type { FieldMapInput } from './fieldMapBeam';
+import { flySublevel } from './flight';
 import { sublevelCurves, type SublevelCurves } from './sublevelCurves';
 
-export interface CoefficientSetup {
-  field: FieldFunction;
-  centre: Vec3;
-  magnetLengthM: number;
-  driftM: number;
-  massKg: number;
-  spec: LevelSpec;
-  /** Engine low-field labels of the sublevels, in the beam's order. */
-  labels: readonly string[];
+/** A field-map beam's own flight set-up (fieldMapBeam.ts), with the moment table's field range. */
+export type CoefficientSetup = Pick<FieldMapInput, 'field' | 'centre' | 'magnetLengthM' | 'driftM' | 'massKg' | 'spec' | 'labels' | 'options'> & {
   /** The field range of the moment table, T (a beam's `moment_table_max_T`). */
   maxFieldT: number;
-  options?: FlightOptions;
-}
+};
 
 export interface CoefficientFlights {
   /** k of each sublevel, m³/s² (same order as the labels); null when a flight failed. */
