@@ -193,9 +193,12 @@ export class DocumentStore {
     const run = previous.then(async () => {
       // A newer version came while waiting: this one is not worth evaluating.
       if (entry.current !== s) return s.analysis;
+      // Keys taken before the wait: a newer line-count edit moves shared nodes in place (incrementalParse.ts),
+      // and the evaluator's problems keep this version's positions.
+      const fastKeys = new Set(s.analysis.problems.map(key));
       try {
         const outcome = await this.evaluator.evaluate(s.text, abort.signal, s.analysis.sources);
-        this.attach(entry, s, outcome.result, outcome.problems);
+        this.attach(entry, s, outcome.result, outcome.problems, fastKeys);
       } catch (e) {
         const message = e instanceof Error ? e.message : String(e);
         if (message === SUPERSEDED) return s.analysis;
@@ -212,8 +215,7 @@ export class DocumentStore {
     return run;
   }
 
-  private attach(entry: DocumentEntry, s: VersionState, result: Analysis['result'], problems: Problem[]): void {
-    const fast = new Set(s.analysis.problems.map(key));
+  private attach(entry: DocumentEntry, s: VersionState, result: Analysis['result'], problems: Problem[], fast: ReadonlySet<string>): void {
     const evaluationOnly = problems.filter((p) => !fast.has(key(p)));
     s.analysis.result = result;
     s.analysis.problems = problems;

@@ -9,7 +9,7 @@
  * of the uniform pass (beamPass.ts: peak slopes, slit image, detector, the 1/T of the speeds).
  */
 import { leverArmM2 } from '../../physics/beam';
-import { CoefficientFlyer, coefficientSlopes, type CoefficientNudge, type FlightChange } from '../../physics/beam/trajectory';
+import { CoefficientFlyer, coefficientSlopes, effectiveMomentJT, type CoefficientNudge, type FlightChange } from '../../physics/beam/trajectory';
 import { BOHR_MAGNETON, PLANCK_H } from '../../physics/constants';
 import type { HyperfineLevelSpec } from '../../physics/engine';
 import { sumField } from '../../physics/fields';
@@ -142,7 +142,7 @@ export function fieldMapBeamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJ
   // The pattern's own input: each coefficient as an effective moment in a 1 T/m gradient (fieldMapPattern.ts).
   const geometry = { ...inputs.input.geometry, gradientTPerM: 1 };
   const lever = leverArmM2(geometry);
-  const effective = { ...inputs.input, geometry, sublevels: inputs.input.sublevels.map((s, i) => ({ ...s, momentJT: (k0[i]! * mass) / lever })) };
+  const effective = { ...inputs.input, geometry, sublevels: inputs.input.sublevels.map((s, i) => ({ ...s, momentJT: effectiveMomentJT(k0[i]!, mass, lever) })) };
   const flight = combine([[1, length], [1, drift]]);
   peakUncertainty(r, beam, effective, inp, deflections, flight, { temperature, T, apparatus }, problems);
 }

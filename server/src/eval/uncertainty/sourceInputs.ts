@@ -104,7 +104,10 @@ export function firstStep(u: number, scale: number): number {
 export function centreFieldSensitivities(inputs: readonly SourceInput[]): { field: Sensitivities; gradient: Sensitivities } {
   const m = new Float64Array(4);
   const at = (moved: MovedMagnet): [number, number] => {
-    magnitudeAndGradient(sumField(moved.parts)(moved.centre), m);
+    const sample = sumField(moved.parts)(moved.centre);
+    // A nudge that puts a conductor on the centre leaves that part out: no derivative from it.
+    if (sample.leftOut) return [Number.NaN, Number.NaN];
+    magnitudeAndGradient(sample, m);
     return [m[0], m[3]];
   };
   const field: [number, Sensitivities][] = [];

@@ -11,6 +11,7 @@
  */
 import { leverArmM2, type PatternInput } from '../beam';
 import { speedLawFor } from '../beam/speedLawFor';
+import { effectiveMomentJT } from '../beam/trajectory/fieldMapPattern';
 // The pattern without peak refinement: a fit needs the density only, not off-grid peak positions.
 import { computePattern } from '../beam/detectorPattern';
 import { solveLevel, type HyperfineLevelSpec } from '../engine';
@@ -153,7 +154,7 @@ export function profileModel(setup: ProfileSetup, positionsM: Float64Array, coun
       const k = setup.flights.coefficients(index('source_scale') >= 0 ? p[index('source_scale')]! : 1, speed);
       const lever = g.gradientTPerM * leverArmM2(g);
       if (!k || !(lever !== 0) || !Number.isFinite(speed)) return null;
-      moments = moments.map((_, i) => (k[i]! * setup.input.massKg) / lever);
+      moments = moments.map((_, i) => effectiveMomentJT(k[i]!, setup.input.massKg, lever));
     } else if (index('field') >= 0) {
       const solved = solveLevel(setup.spec, p[index('field')]!);
       if (solved.states.length !== moments.length) return null;

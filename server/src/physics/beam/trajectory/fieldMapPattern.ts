@@ -64,7 +64,15 @@ export function fieldMapPattern(input: FieldMapPatternInput): { pattern: Pattern
   const lever = leverArmM2({ ...geo, gradientTPerM: gRef });
   const sublevels = pattern.sublevels.map((s, i) => {
     const k = fieldMap.sublevels[i]?.coefficientM3PerS2 ?? 0;
-    return { ...s, momentJT: lever > 0 ? (k * pattern.massKg) / (gRef * lever) : 0 };
+    return { ...s, momentJT: effectiveMomentJT(k, pattern.massKg, gRef * lever) };
   });
   return { pattern: { ...pattern, geometry: { ...geo, gradientTPerM: gRef }, sublevels }, fieldMap, referenceSpeed: reference, speeds };
+}
+
+/**
+ * The moment that gives deflection coefficient k = z·v² in the uniform-gradient model with
+ * gradient × lever arm `gradientLever` (T·m): k·M / (G·lever); 0 where that product is 0 or not finite.
+ */
+export function effectiveMomentJT(k: number, massKg: number, gradientLever: number): number {
+  return gradientLever !== 0 && Number.isFinite(gradientLever) ? (k * massKg) / gradientLever : 0;
 }

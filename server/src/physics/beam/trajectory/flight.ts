@@ -87,6 +87,8 @@ export function flySublevel(setup: FlightSetup, state: number, speed: number, op
   let beyond = false;
   const f = (s: number, u: Float64Array, du: Float64Array): boolean => {
     const sample = field([x0 + s, centre[1] + u[0], centre[2] + u[1]]);
+    // On a conductor the sum leaves that part out (sumField's leftOut): the flight stops there.
+    if (sample.leftOut) return false;
     magnitudeAndGradient(sample, mag);
     const b = mag[0];
     if (!Number.isFinite(b) || !Number.isFinite(mag[2]) || !Number.isFinite(mag[3])) return false;

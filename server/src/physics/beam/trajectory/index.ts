@@ -5,7 +5,7 @@ export { directionTurnRate, magnitudeAndGradient } from './fieldMagnitude';
 export { dormandPrince, rungeKutta4, type Derivative, type Observer, type StepperResult } from './steppers';
 export { surveyBeamLine, GRADIENT_VARIATION_LIMIT, MIN_CLEARANCE_M, type BeamLineSurvey, type SurveyInput } from './beamLineSurvey';
 export { fieldMapBeam, FORWARD_ENERGY_LIMIT, INVERSE_SQUARE_LIMIT, type FieldMapBeam, type FieldMapInput, type FieldMapSublevel } from './fieldMapBeam';
-export { fieldMapPattern, END_FRACTIONS, type FieldMapPatternInput } from './fieldMapPattern';
+export { effectiveMomentJT, fieldMapPattern, END_FRACTIONS, type FieldMapPatternInput } from './fieldMapPattern';
 export { closestApproach, distanceToSource } from './lineClearance';
 export { CoefficientFlyer, type CoefficientFlights, type CoefficientSetup } from './coefficientFlights';
 export { coefficientSlopes, LINEARITY_LIMIT, type CoefficientNudge, type CoefficientSlope, type FlightChange } from './coefficientSlopes';
