@@ -135,9 +135,9 @@ export function levenbergMarquardt(problem: LeastSquaresProblem, start: Float64A
   tally();
   if (!problem.residuals(p, r) || !finite(r)) return fail(0);
   let chi2 = sumSquares(r);
+  const chi2Start = chi2;
   /** An exactly determined fit ends with χ² at the model's round-off, where no step helps any more. */
   const atRoundOff = (x: number) => x <= 1e-20 * chi2Start;
-  const chi2Start = chi2;
   if (!jacobianAt(problem, p, r, scale, jac, tally)) return fail(0);
 
   const diag = new Float64Array(m);
