@@ -23,8 +23,7 @@ export function registerUiTests(wb: () => Workbench): void {
     it('shows g_J when pointing at a term symbol', async () => {
       // Inlay hints appear once the server has evaluated the file; point after that.
       await wb().editorLine('g_J 1.3').waitFor();
-      await wb().pointAt('2P°3/2');
-      const text = await wb().hoverText('g_J');
+      const text = await wb().hoverAt('2P°3/2', 'g_J');
       await wb().shot('2-hover-term');
       assert.match(text, /g_J = [\d.]+/, text);
       // Landé g_J of ²P₃/₂ is exactly 4/3 with g_s = 2 (Landé formula, textbook value).

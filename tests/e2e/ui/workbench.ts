@@ -98,11 +98,22 @@ export class Workbench {
     await this.page.mouse.move(centre.x, centre.y, { steps: 5 });
   }
 
-  /** The visible hover widget's text once it contains `expected`. */
-  async hoverText(expected: string): Promise<string> {
-    const hover = this.page.locator('.monaco-hover:visible', { hasText: expected }).first();
-    await hover.waitFor();
-    return hover.innerText();
+  /**
+   * Point at `text` until a hover containing `expected` shows: the editor may redraw the line (inlay
+   * hints arriving) under a resting pointer, and then no hover opens, so point again up to three times.
+   */
+  async hoverAt(text: string, expected: string): Promise<string> {
+    for (let attempt = 1; ; attempt++) {
+      await this.pointAt(text);
+      const hover = this.page.locator('.monaco-hover:visible', { hasText: expected }).first();
+      try {
+        await hover.waitFor({ timeout: 12_000 });
+        return await hover.innerText();
+      } catch (e) {
+        if (attempt >= 3) throw e;
+        await this.page.mouse.move(5, 5);
+      }
+    }
   }
 
   /** Problems view rows (Ctrl+Shift+M) once a row mentions every one of `codes`. */
