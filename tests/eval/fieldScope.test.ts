@@ -5,6 +5,7 @@
  * out and computed on demand must equal the same pair in an evaluation that keeps every field.
  */
 import { readFileSync } from 'node:fs';
+import Ajv2020 from 'ajv/dist/2020';
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import { textReport } from '../../server/src/cli/textReport';
@@ -82,10 +83,19 @@ describe('a level is evaluated at the working fields that concern its species', 
   });
 
   it('the JSON names the fields of a species evaluated at some only, and the list of a field', () => {
-    expect(r.species.map((s) => s.evaluated_at)).toEqual([
-      [{ kind: 'field', name: 'bias' }, { kind: 'field', name: 'guide' }],
-      [{ kind: 'field', name: 'guide' }, { kind: 'magnet', name: 'sel' }],
+    expect(r.species.map((s) => [s.evaluated_at, s.not_at])).toEqual([
+      [
+        [{ kind: 'field', name: 'bias', species: ['Rb87'] }, { kind: 'field', name: 'guide' }],
+        [{ kind: 'magnet', name: 'sel', beams: [{ name: 'b', species: 'K39' }] }],
+      ],
+      [
+        [{ kind: 'field', name: 'guide' }, { kind: 'magnet', name: 'sel', beams: [{ name: 'b', species: 'K39' }] }],
+        [{ kind: 'field', name: 'bias', species: ['Rb87'] }],
+      ],
     ]);
+    const validate = new Ajv2020({ allErrors: true, strict: true }).compile(JSON.parse(readFileSync('docs/schema/evaluation.schema.json', 'utf8')));
+    validate(JSON.parse(JSON.stringify(r)));
+    expect(validate.errors ?? []).toEqual([]);
     expect(r.fields.map((f) => [f.name, f.field_unit, f.species])).toEqual([
       ['bias', 'G', ['Rb87']],
       ['guide', 'G', undefined],
@@ -96,6 +106,27 @@ describe('a level is evaluated at the working fields that concern its species', 
     const text = textReport('x.sublevel', r);
     expect(text).toContain("  evaluated at 2 of the file's 3 working fields: field bias (its species list), field guide (every species); not at magnet sel (beam b of K39)");
     expect(text).toContain("  evaluated at 2 of the file's 3 working fields: field guide (every species), magnet sel (beam b); not at field bias (species = Rb87)");
+  });
+
+  it('a beam that names one species and flies a level of another: the text, the hover and the JSON give the level\'s species, as the evaluation does', () => {
+    const src = SCOPED.replace('  species = Rb87\n', '').replace('  level    = kg\n', '  species  = Rb87\n  level    = K39.kg\n');
+    const b = analyze(src);
+    const rb = b.result!.species.find((s) => s.name === 'Rb87')!;
+    expect(names(b.result!.levels.find((l) => l.level === 'ground')!.at_fields)).toEqual(['field bias', 'field guide']);
+    expect(rb.not_at).toEqual([{ kind: 'magnet', name: 'sel', beams: [{ name: 'b', species: 'K39' }] }]);
+    // Read from the beam's own `species`, the old line said "not at magnet sel (no beam: every species)".
+    const line = "  evaluated at 2 of the file's 3 working fields: field bias (every species), field guide (every species); not at magnet sel (beam b of K39)";
+    expect(textReport('x.sublevel', b.result!)).toContain(line);
+    const { analysis, position } = atCursor(src.replace('species Rb87', 'species Rb|87'));
+    expect(plain(hoverText(hover(analysis, position)))).toContain(line.trim());
+  });
+
+  it('a magnet no beam names is at every species; the others say which beams keep them out', () => {
+    const src = `${SPECIES}magnet spare\n  field = 0.1 T\n  gradient = 1 T/m\n  length = 1 cm\n${APPARATUS}`;
+    const r2 = analyze(src).result!;
+    const rb = r2.species.find((s) => s.name === 'Rb87')!;
+    expect(rb.evaluated_at).toEqual([{ kind: 'field', name: 'guide' }, { kind: 'magnet', name: 'spare' }]);
+    expect(textReport('x.sublevel', r2)).toContain("  evaluated at 2 of the file's 3 working fields: field guide (every species), magnet spare (no beam: every species); not at magnet sel (beam b of K39)");
   });
 
   it('each pair equals the same pair of an evaluation at every field (the field alone sets it)', () => {

@@ -4,7 +4,7 @@
  */
 import type { Problem } from '../format/ast';
 import { CONSTANTS_SOURCE } from '../physics/constants';
-import type { SetupModel, SpeciesModel } from '../model/types';
+import type { SetupModel } from '../model/types';
 import { beamDiagnostics } from './beamDiagnostics';
 import { evaluateBeam } from './beamEvaluation';
 import { gJLookup } from './gJLookup';
@@ -19,7 +19,7 @@ import { sumField } from '../physics/fields';
 import { evaluateSlower } from './slowerEvaluation';
 import { evaluateTrap } from './trapEvaluation';
 import { EVAL_RULES } from './evalCodes';
-import { fieldScope, type FieldScope } from './fieldScope';
+import { fieldScope } from './fieldScope';
 import { evaluateLevel, type EvaluationNote } from './levelEvaluation';
 import {
   EVALUATION_FORMAT,
@@ -27,7 +27,6 @@ import {
   type DiagnosticResult,
   type EvaluationResult,
   type LevelResult,
-  type SpeciesResult,
   type TermResult,
 } from './resultTypes';
 
@@ -99,7 +98,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
       g_I: { value: s.gI.value, source: s.gI.source, ...(s.gI.uncertainty !== undefined ? { uncertainty: s.gI.uncertainty } : {}) },
       levels: s.levels.map((l) => l.name),
       ...(s.origin ? { defined_in: s.origin.path } : {}),
-      ...evaluatedAt(scope, s),
+      ...scope.resultOf(s),
     })),
     levels,
     terms,
@@ -125,12 +124,6 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...sourceProblems, ...slowerProblems, ...trapProblems, ...uncertainty.problems]);
   result.diagnostics = problems.map(toDiagnosticResult);
   return { result, problems };
-}
-
-/** `evaluated_at` of a species that is evaluated at some of the working fields only. */
-function evaluatedAt(scope: FieldScope, species: SpeciesModel): Pick<SpeciesResult, 'evaluated_at'> {
-  const own = scope.of(species);
-  return own === scope.all ? {} : { evaluated_at: own.map((f) => ({ ...f.source })) };
 }
 
 /** A note that is the same at every field (same text, same place) is said once. */

@@ -10,6 +10,7 @@
  */
 import type { SetupModel, SpeciesModel } from '../model/types';
 import type { WorkingField } from './levelEvaluation';
+import type { FieldScopeEntry, SpeciesResult } from './resultTypes';
 
 /** Every field and magnet that has a value, in the file's order: fields, then magnets. */
 export function workingFields(model: SetupModel): WorkingField[] {
@@ -20,6 +21,9 @@ interface ScopedField {
   field: WorkingField;
   /** The species the field concerns; undefined: every species. */
   species?: ReadonlySet<SpeciesModel>;
+  /** Why, for the report and the JSON: a field's (known) species list, or the beams through a magnet. */
+  list?: readonly SpeciesModel[];
+  beams?: { name: string; species: SpeciesModel }[];
 }
 
 function scopedFields(model: SetupModel): ScopedField[] {
@@ -27,21 +31,22 @@ function scopedFields(model: SetupModel): ScopedField[] {
   for (const f of model.fields) {
     if (!f.tesla) continue;
     const field: WorkingField = { source: { kind: 'field', name: f.name }, tesla: f.tesla.value, range: f.tesla.range ?? f.nameRange, ...(f.tesla.unit ? { unit: f.tesla.unit } : {}) };
-    out.push({ field, ...(f.species ? { species: new Set(f.species) } : {}) });
+    out.push({ field, ...(f.species ? { species: new Set(f.species), list: f.species } : {}) });
   }
-  const flown = new Map<object, Set<SpeciesModel>>();
+  // The species that flies is the level's (a beam may name one species and a level of another).
+  const flown = new Map<object, { name: string; species: SpeciesModel }[]>();
   for (const b of model.beams) {
     const sp = b.level?.species ?? b.species;
     if (!b.magnet || !sp) continue;
-    const set = flown.get(b.magnet) ?? new Set();
-    set.add(sp);
-    flown.set(b.magnet, set);
+    const beams = flown.get(b.magnet) ?? [];
+    beams.push({ name: b.name, species: sp });
+    flown.set(b.magnet, beams);
   }
   for (const m of model.magnets) {
     if (!m.fieldT) continue;
     const field: WorkingField = { source: { kind: 'magnet', name: m.name }, tesla: m.fieldT.value, range: m.fieldT.range ?? m.nameRange, ...(m.fieldT.unit ? { unit: m.fieldT.unit } : {}) };
-    const species = flown.get(m);
-    out.push({ field, ...(species ? { species } : {}) });
+    const beams = flown.get(m);
+    out.push({ field, ...(beams ? { species: new Set(beams.map((b) => b.species)), beams } : {}) });
   }
   return out;
 }
@@ -51,12 +56,22 @@ export interface FieldScope {
   all: WorkingField[];
   /** The working fields that concern a species (the same array for species that share them). */
   of(species: SpeciesModel): WorkingField[];
+  /**
+   * `evaluated_at` and `not_at` of a species evaluated at some of the working fields only, each
+   * with the reason (empty when it is evaluated at every one): what the report and hovers say.
+   */
+  resultOf(species: SpeciesModel): Pick<SpeciesResult, 'evaluated_at' | 'not_at'>;
 }
 
 export function fieldScope(model: SetupModel): FieldScope {
   const scoped = scopedFields(model);
   const all = scoped.map((s) => s.field);
-  if (scoped.every((s) => !s.species)) return { all, of: () => all };
+  const resultOf = (species: SpeciesModel): Pick<SpeciesResult, 'evaluated_at' | 'not_at'> => {
+    const concerns = (s: ScopedField): boolean => !s.species || s.species.has(species);
+    if (scoped.every(concerns)) return {};
+    return { evaluated_at: scoped.filter(concerns).map(scopeEntry), not_at: scoped.filter((s) => !concerns(s)).map(scopeEntry) };
+  };
+  if (scoped.every((s) => !s.species)) return { all, of: () => all, resultOf: () => ({}) };
   const cache = new Map<SpeciesModel, WorkingField[]>();
   return {
     all,
@@ -69,5 +84,14 @@ export function fieldScope(model: SetupModel): FieldScope {
       }
       return fields;
     },
+    resultOf,
+  };
+}
+
+function scopeEntry(s: ScopedField): FieldScopeEntry {
+  return {
+    ...s.field.source,
+    ...(s.list ? { species: s.list.map((x) => x.name) } : {}),
+    ...(s.beams ? { beams: s.beams.map((b) => ({ name: b.name, species: b.species.name })) } : {}),
   };
 }

@@ -179,7 +179,21 @@ export interface SpeciesResult {
    * Set only when the species' levels, lines and resonances are evaluated at some of the file's
    * working fields, not all: the ones they are evaluated at, in order (docs/format.md).
    */
-  evaluated_at?: { kind: 'field' | 'magnet'; name: string }[];
+  evaluated_at?: FieldScopeEntry[];
+  /** With `evaluated_at`: the working fields the species is not evaluated at, in order. */
+  not_at?: FieldScopeEntry[];
+}
+
+/**
+ * A working field and why it concerns some species only, as the evaluation decided it: a field's
+ * `species` list (the known names; empty when none is known), or the beams through a magnet and
+ * the species each carries (a level's species). Neither: the field concerns every species.
+ */
+export interface FieldScopeEntry {
+  kind: 'field' | 'magnet';
+  name: string;
+  species?: string[];
+  beams?: { name: string; species: string }[];
 }
 
 export interface MagnetResult {
