@@ -35,6 +35,7 @@ export const RUBIDIUM_85: BuiltinSpecies = {
     {
       key: 'P3/2',
       designation: '5p 2P°3/2',
+      // Held to the ⁸⁷Rb values scaled by the nuclear moments (tests/physics/species.test.ts).
       A: mhz(25.002, STECK_RB85, 0.0099),
       B: mhz(25.79, STECK_RB85, 0.093),
       gJ: sourced(1.3362, STECK_RB85, 0.0013),
