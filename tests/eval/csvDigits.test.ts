@@ -65,6 +65,21 @@ describe('CSV numbers: 15 significant digits', () => {
     }
   });
 
+  it('is not String(Number(x.toPrecision(15))) everywhere: that one-liner loses subnormal digits and overflows at the top', () => {
+    // A subnormal has fewer than 15 significant bits' worth of digits, so the 15-digit decimal reads
+    // back as a double whose shortest form is shorter; near MAX_VALUE the rounded decimal reads back as Infinity.
+    const cases: [number, string, string][] = [
+      [Number.MIN_VALUE, '5e-324', '4.94065645841247e-324'],
+      [1e-310, '1e-310', '9.99999999999997e-311'],
+      [Number.MAX_VALUE, 'Infinity', '1.79769313486232e+308'],
+    ];
+    for (const [x, oneLiner, written] of cases) {
+      expect(oracle(x)).toBe(oneLiner);
+      expect(fifteenDigitsText(x)).toBe(written);
+      expect(csvNumber(x)).toBe(written);
+    }
+  });
+
   it('matches toPrecision(15) on random doubles over the whole exponent range', () => {
     fc.assert(
       fc.property(fc.double({ noNaN: true, noDefaultInfinity: true }), (x) => {

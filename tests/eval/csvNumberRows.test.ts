@@ -6,7 +6,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { csvNumber, csvNumberRow, csvNumberRows } from '../../server/src/eval/machineText';
+import { csvNumber, csvNumberRow, csvNumberRows, csvNumberRowsBytes } from '../../server/src/eval/machineText';
 
 const cellByCell = (rows: (number | null | undefined)[][]): string => rows.map((r) => r.map(csvNumber).join(',')).join('\n');
 
@@ -50,5 +50,19 @@ describe('csvNumberRows', () => {
     expect(csvNumberRows(empty)).toBe('\n'.repeat(99_999));
     const wide = [Array.from({ length: 20_000 }, (_, k) => -k / 3)];
     expect(csvNumberRows(wide)).toBe(cellByCell(wide));
+  });
+
+  it('gives the same text as bytes, a chunk at a time, for a file writer', () => {
+    const asBytes = (rows: (number | null | undefined)[][]): { text: string; chunks: number } => {
+      const parts: Buffer[] = [];
+      csvNumberRowsBytes(rows, (b) => parts.push(Buffer.from(b)));
+      return { text: Buffer.concat(parts).toString('latin1'), chunks: parts.length };
+    };
+    const rows = Array.from({ length: 3000 }, (_, k) => [k / 7, -k * 1e-9, k % 5 === 0 ? NaN : 2 ** k, 0.1 + 0.2]);
+    const r = asBytes(rows);
+    expect(r.text).toBe(csvNumberRows(rows));
+    expect(r.chunks).toBeGreaterThan(3);
+    expect(asBytes([])).toEqual({ text: '', chunks: 0 });
+    expect(asBytes([[], []])).toEqual({ text: '\n', chunks: 1 });
   });
 });

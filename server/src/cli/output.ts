@@ -11,8 +11,14 @@ import { type CliFileSystem, reasonOf } from './fileSystem';
 /** --out could not be written: exit 2 with one line, without the usage text. */
 export class OutputError extends Error {}
 
-/** Text is written with control characters escaped; bytes (a PNG) as they are. */
-export function writeOutputFile(target: string, text: string | Uint8Array, fsys: CliFileSystem): void {
+/**
+ * Output made in pieces: it hands each piece's bytes to `put`, which has written them when it
+ * returns (so a piece may be a view of a buffer the maker reuses).
+ */
+export type OutputPieces = (put: (bytes: Uint8Array) => void) => void;
+
+/** Text is written with control characters escaped; bytes (a PNG) as they are; pieces as they come. */
+export function writeOutputFile(target: string, content: string | Uint8Array | OutputPieces, fsys: CliFileSystem): void {
   let existing: { mode: number } | undefined;
   let final = target;
   try {
@@ -28,9 +34,13 @@ export function writeOutputFile(target: string, text: string | Uint8Array, fsys:
   const tmp = path.join(path.dirname(final), `.${path.basename(final)}.${process.pid}-${uniqueSuffix()}.tmp`);
   let fd: number | undefined;
   try {
-    fd = fsys.openSync(tmp, 'wx', existing?.mode ?? 0o666);
-    const bytes = typeof text === 'string' ? Buffer.from(escapeControls(text), 'utf8') : text;
-    for (let done = 0; done < bytes.length; ) done += fsys.writeSync(fd, bytes, done, bytes.length - done);
+    const opened = fsys.openSync(tmp, 'wx', existing?.mode ?? 0o666);
+    fd = opened;
+    const put = (bytes: Uint8Array): void => {
+      for (let done = 0; done < bytes.length; ) done += fsys.writeSync(opened, bytes, done, bytes.length - done);
+    };
+    if (typeof content === 'function') content(put);
+    else put(typeof content === 'string' ? Buffer.from(escapeControls(content), 'utf8') : content);
     fsys.fsyncSync(fd);
     fsys.closeSync(fd);
     fd = undefined;

@@ -1,7 +1,7 @@
 /** `sublevel profile <file> [--beam NAME] [--out FILE.csv]`: the predicted detector pattern as CSV. */
 import { evaluateBeam } from '../eval/beamEvaluation';
 import { gJLookup } from '../eval/gJLookup';
-import { patternCsv } from '../render';
+import { patternTable } from '../render';
 import { beamAbout } from '../views/diagram';
 import { patternView } from '../views/patternView';
 import { type CommandSpec, type ParsedArgs, stringOption } from './args';
@@ -32,5 +32,5 @@ export function runProfile(args: ParsedArgs, ctx: CliContext): number {
     const listed = listErrorsFirst(file, analysis, ctx);
     return nothingToCompute(file, `beam '${beam.name}' cannot be computed: it lacks a setting or has an error${listed}`, beam.nameRange);
   }
-  return emitOutput(opened, patternCsv(v, beamAbout(beam, file), 'profile'), ctx, () => `the detector pattern (${v.positionsM.length} positions)`);
+  return emitOutput(opened, patternTable(v, beamAbout(beam, file), 'profile'), ctx, () => `the detector pattern (${v.positionsM.length} positions)`);
 }

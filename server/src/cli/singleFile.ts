@@ -12,6 +12,8 @@ import { rootOption } from './files';
 import { cliProblem, FileProblemError } from './fileProblems';
 import type { CliContext } from './io';
 import { writeOutputFile } from './output';
+import { csvTablePieces } from './csvTablePieces';
+import { csvNumberTableText, type CsvNumberTable } from '../render/csv';
 
 export interface OpenedFile {
   file: string;
@@ -37,12 +39,15 @@ export function nothingToCompute(file: string, message: string, range?: Range): 
   throw new FileProblemError(file, [cliProblem('nothing-to-compute', message, range)]);
 }
 
-/** Writes `text` to --out (ending in one newline; `wrote` says what on stderr) or prints it; 1 when the file has errors. */
-export function emitOutput(opened: OpenedFile, text: string, ctx: CliContext, wrote: () => string): number {
-  const body = text.trimEnd();
+/**
+ * Writes the output to --out (ending in one newline; `wrote` says what on stderr) or prints it;
+ * 1 when the file has errors. A table of numbers goes to the file as its text (which ends in a
+ * newline), in pieces: csvTablePieces never makes it one string.
+ */
+export function emitOutput(opened: OpenedFile, output: string | CsvNumberTable, ctx: CliContext, wrote: () => string): number {
   if (opened.out) {
-    writeOutputFile(opened.out, `${body}\n`, ctx.fsys);
+    writeOutputFile(opened.out, typeof output === 'string' ? `${output.trimEnd()}\n` : csvTablePieces(output), ctx.fsys);
     ctx.io.err(`wrote ${wrote()} to ${opened.out}`);
-  } else ctx.io.out(body);
+  } else ctx.io.out((typeof output === 'string' ? output : csvNumberTableText(output)).trimEnd());
   return reportErrors(opened.file, opened.analysis, ctx) > 0 ? 1 : 0;
 }

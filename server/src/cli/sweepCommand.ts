@@ -4,7 +4,8 @@
  * crossing search costs 1.4–1.6× the sweep itself (docs/speed.md) and only the JSON can carry
  * its answer, so it runs when asked for (`--crossings`), not on every sweep.
  */
-import { stateTableCsv } from '../render/csv';
+import { csvNumberTableText, type CsvNumberTable, stateTable } from '../render/csv';
+import { csvTablePieces } from './csvTablePieces';
 import { sweepEnergyUnc } from '../eval/uncertainty/sweepPass';
 import { engineSpec } from '../eval/levelSpec';
 import { suggestNames } from '../format/didYouMean';
@@ -80,11 +81,13 @@ export function runSweep(args: ParsedArgs, ctx: CliContext): number {
   }
   // Warnings and notes of the sweep (a capped crossing search) on stderr, and in the JSON.
   for (const i of sweep.issues) ctx.io.err(diagnosticLine(file, issueProblem(i, at)));
-  const text = format === 'csv' ? sweepCsv(sweep, file, level, sweepEnergyUnc(analysis.model, level, spec, sweep)) : jsonText(sweepJson(file, level, sweep, crossings), 1);
+  // A CSV file gets the table in pieces, never as one string (csvTablePieces); the rows start
+  // with the field, so the table's text ends in one newline, as the printed text plus one does.
+  const table = format === 'csv' ? sweepTable(sweep, file, level, sweepEnergyUnc(analysis.model, level, spec, sweep)) : undefined;
   if (out) {
-    writeOutputFile(out, text + '\n', ctx.fsys);
+    writeOutputFile(out, table ? csvTablePieces(table) : jsonText(sweepJson(file, level, sweep, crossings), 1) + '\n', ctx.fsys);
     ctx.io.err(`wrote ${sweep.states.length} sublevels × ${points} fields to ${out}`);
-  } else ctx.io.out(text);
+  } else ctx.io.out(table ? csvNumberTableText(table).trimEnd() : jsonText(sweepJson(file, level, sweep, crossings), 1));
   return reportErrors(file, analysis, ctx) > 0 ? 1 : 0;
 }
 
@@ -126,9 +129,9 @@ function findLevel(file: string, model: SetupModel, name: string | undefined): L
 }
 
 /** CSV in the project's convention (docs/csv.md): field_T, energies and moments of every state, states in the documented order. */
-export function sweepCsv(s: SweepResult, file: string, level: LevelModel, energyUnc?: Float64Array[]): string {
+function sweepTable(s: SweepResult, file: string, level: LevelModel, energyUnc?: Float64Array[]): CsvNumberTable {
   const states = s.states.map((st, i) => ({ lowLabel: st.low.text, highLabel: st.high.text, energyHz: st.energyHz, momentJT: st.momentJT, ...(energyUnc?.[i] ? { energyUncHz: energyUnc[i] } : {}) }));
-  return stateTableCsv({ kind: 'sweep', about: [['file', file], ['level', `${level.species.name}.${level.name}`]] }, s.fieldsT, states).trimEnd();
+  return stateTable({ kind: 'sweep', about: [['file', file], ['level', `${level.species.name}.${level.name}`]] }, s.fieldsT, states);
 }
 
 /** Version 2: `crossings` is there only when the search was asked for (`--crossings`); `notes` added. */

@@ -4,7 +4,7 @@
  * non-finite number in an object is left out, as the schema's optional fields expect, and in an
  * array it is written as null (the position matters there). A CSV cell for it is empty.
  */
-import { numberRowsText, numberText } from './csvDigits/numberTableText';
+import { numberRowsBytes, numberRowsText, numberText } from './csvDigits/numberTableText';
 
 export function finiteJsonText(value: unknown, space?: number): string {
   return JSON.stringify(value, (_key, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? undefined : v), space);
@@ -32,4 +32,12 @@ export function csvNumberRow(row: readonly (number | null | undefined)[]): strin
  */
 export function csvNumberRows(rows: readonly (readonly (number | null | undefined)[])[]): string {
   return numberRowsText(rows);
+}
+
+/**
+ * csvNumberRows' text as ASCII bytes, handed to `put` a chunk at a time (a view of a reused
+ * buffer, to be consumed before `put` returns): a file writer never needs the table as one string.
+ */
+export function csvNumberRowsBytes(rows: readonly (readonly (number | null | undefined)[])[], put: (chunk: Uint8Array) => void): void {
+  numberRowsBytes(rows, put);
 }

@@ -38,11 +38,25 @@ function csvText(c: CsvContext, header: string[], body: string, rows: number): s
   return `${csvCommentLine(c)}\n${header.map(textCell).join(',')}\n${rows > 0 ? body + '\n' : ''}`;
 }
 
-/** A table of numbers, `rows` lines made by `rowAt`, formatted together (csvNumberRows). */
-function numberTable(c: CsvContext, header: string[], rows: number, rowAt: (k: number) => number[]): string {
+/**
+ * A CSV table of numbers in two parts: the text above them (comment line and header, each ending
+ * in a newline) and the rows of numbers. Its text is `csvNumberTableText`; a file writer may
+ * instead take the rows as bytes (csvNumberRowsBytes) after the head, and a newline after them.
+ */
+export interface CsvNumberTable {
+  head: string;
+  rows: number[][];
+}
+
+export function csvNumberTableText(t: CsvNumberTable): string {
+  return t.rows.length > 0 ? `${t.head}${csvNumberRows(t.rows)}\n` : t.head;
+}
+
+/** A table of numbers, `rows` lines made by `rowAt`. */
+function numberTable(c: CsvContext, header: string[], rows: number, rowAt: (k: number) => number[]): CsvNumberTable {
   const table = new Array<number[]>(rows);
   for (let k = 0; k < rows; k++) table[k] = rowAt(k);
-  return csvText(c, header, csvNumberRows(table), rows);
+  return { head: `${csvCommentLine(c)}\n${header.map(textCell).join(',')}\n`, rows: table };
 }
 
 /** A state as it is named in column headers: its low-field label, and where it goes at high field. */
@@ -82,6 +96,11 @@ export function sortedStates<T extends StateSeries>(states: readonly T[]): T[] {
 
 /** Energies and moments of every state at each field: one row per field. */
 export function stateTableCsv(c: CsvContext, fieldsT: ArrayLike<number>, states: readonly StateSeries[]): string {
+  return csvNumberTableText(stateTable(c, fieldsT, states));
+}
+
+/** stateTableCsv in parts (CsvNumberTable). */
+export function stateTable(c: CsvContext, fieldsT: ArrayLike<number>, states: readonly StateSeries[]): CsvNumberTable {
   const sorted = sortedStates(states);
   const withMoment = sorted.filter((s) => s.momentJT);
   const withUnc = sorted.filter((s) => s.energyUncHz);
@@ -107,6 +126,11 @@ export function levelsCsv(d: LevelsViewData, about: CsvContext['about'] = []): s
 
 /** Positions and the summed and per-sublevel shares (fraction of all atoms per metre); sublevels in the beam report's order. */
 export function patternCsv(d: PatternViewData, about: CsvContext['about'] = [], kind: 'pattern' | 'profile' = 'pattern'): string {
+  return csvNumberTableText(patternTable(d, about, kind));
+}
+
+/** patternCsv in parts (CsvNumberTable). */
+export function patternTable(d: PatternViewData, about: CsvContext['about'] = [], kind: 'pattern' | 'profile' = 'pattern'): CsvNumberTable {
   const header = ['position_m', 'total_per_m', ...d.parts.map((p) => `share_per_m[${p.label}]`)];
   return numberTable({ kind, about }, header, d.positionsM.length, (k) => {
     const row = [d.positionsM[k]!, d.total[k]!];
@@ -130,7 +154,7 @@ export function linesCsv(d: LinesViewData, about: CsvContext['about'] = []): str
 /** The transition frequency and its field slope at each field. */
 export function resonanceCsv(d: ResonanceViewData, about: CsvContext['about'] = []): string {
   const c: CsvContext = { kind: 'resonance', about: [...about, ['transition', d.pairLabel.replace(/ → /g, ' -> ')]] };
-  return numberTable(c, ['field_T', 'frequency_Hz', 'df_dB_Hz_per_T'], d.fieldsT.length, (k) => [d.fieldsT[k]!, d.frequencyHz[k]!, d.slopeHzPerT[k]!]);
+  return csvNumberTableText(numberTable(c, ['field_T', 'frequency_Hz', 'df_dB_Hz_per_T'], d.fieldsT.length, (k) => [d.fieldsT[k]!, d.frequencyHz[k]!, d.slopeHzPerT[k]!]));
 }
 
 /** Columns of a synthesized spectrum; the frequency and wavelength columns only when they are known. */

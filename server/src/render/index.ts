@@ -21,7 +21,7 @@ export { renderResiduals, type ResidualsViewData } from './residuals';
 export { fitCsv } from './fitCsv';
 export { slowerCsv } from './slowerCsv';
 export { renderSlower, type SlowerViewData } from './slower';
-export { levelsCsv, linesCsv, patternCsv, resonanceCsv, spectrumCsv, type SpectrumColumns } from './csv';
+export { csvNumberTableText, levelsCsv, linesCsv, patternCsv, patternTable, resonanceCsv, spectrumCsv, type CsvNumberTable, type SpectrumColumns } from './csv';
 export { escapeXml } from './svgText';
 export { fieldMapCsv, renderFieldMap, type FieldMapViewData } from './fieldMap';
 export { trapCsv } from './trapCsv';

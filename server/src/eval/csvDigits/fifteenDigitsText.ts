@@ -4,6 +4,11 @@
  * larger on a tie), trailing zeros dropped, and laid out like Number::toString lays out its digits
  * (plain from 1e-6 up to below 1e21, else d.ddde±n). Zero of either sign is "0".
  * The fast byte writer (fifteenDigitsWriter.ts) is held to this and falls back to it.
+ *
+ * Not String(Number(x.toPrecision(15))): that equals this for normal doubles up to
+ * 1.797693134862315e308, but the writer hands it subnormals and the top of the range too, where
+ * the 15-digit decimal reads back as another double (5e-324 for Number.MIN_VALUE, whose 15 digits
+ * are 4.94065645841247e-324) or as Infinity (Number.MAX_VALUE). tests/eval/csvDigits.test.ts.
  */
 export function fifteenDigitsText(x: number): string {
   if (x === 0) return '0';
