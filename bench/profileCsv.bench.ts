@@ -5,15 +5,23 @@
  * runs. Beside it: the same text flattened to one string (what encoding it for a file does
  * first), the writer before this one (one JSON.stringify of the table, shortest round-trip
  * digits, brackets turned into line ends), one csvNumber and one String() per cell, and the
- * platform's own number-to-text conversions of the same numbers alone.
+ * platform's own number-to-text conversions of the same numbers alone. Last, writing the file
+ * as `profile --out` does, the rows as the writer's bytes (csvTablePieces) against the text
+ * flattened and encoded first (before), into a temporary file with fsync left out (its wait is
+ * the disk's, not this process's CPU).
  * Goal: writing < computing.
  */
-import { readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { csvTablePieces } from '../server/src/cli/csvTablePieces';
+import { nodeFileSystem } from '../server/src/cli/fileSystem';
+import { writeOutputFile } from '../server/src/cli/output';
 import { csvNumber } from '../server/src/eval/machineText';
 import { analyze } from '../server/src/eval/analyze';
 import { evaluateBeam } from '../server/src/eval/beamEvaluation';
 import { gJLookup } from '../server/src/eval/gJLookup';
-import { patternCsv } from '../server/src/render';
+import { patternCsv, patternTable } from '../server/src/render';
 import { patternView } from '../server/src/views/patternView';
 
 const RUNS = 31;
@@ -66,6 +74,13 @@ export function runProfileCsvBench(): { name: string; lines: string[] } {
       }],
     ],
   ];
+  const dir = mkdtempSync(path.join(tmpdir(), 'sublevel-bench-csv-'));
+  const target = path.join(dir, 'pattern.csv');
+  const noSync = { ...nodeFileSystem, fsyncSync: () => undefined };
+  groups.push([
+    ['to a file: rows as bytes (profile --out)', () => writeOutputFile(target, csvTablePieces(patternTable(view, about, 'profile')), noSync)],
+    ['to a file: text flattened, encoded (before)', () => writeOutputFile(target, `${patternCsv(view, about, 'profile').trimEnd()}\n`, noSync)],
+  ]);
   const lines: string[] = [];
   for (let i = 0; i < 15; i++) for (const f of [compute, ...groups.flat().map(([, g]) => g)]) f(); // warm-up: every case compiled
   for (const cases of groups) {
@@ -79,6 +94,7 @@ export function runProfileCsvBench(): { name: string; lines: string[] } {
     lines.push(`${'computing the pattern'.padEnd(42)} ${c.toFixed(1).padStart(6)} ms`);
     cases.forEach(([what], j) => lines.push(`${what.padEnd(42)} ${median(times[j]!).toFixed(1).padStart(6)} ms  ${(median(times[j]!) / c).toFixed(2)}× computing`));
   }
+  rmSync(dir, { recursive: true, force: true });
   return {
     name: `profile CSV: ${view.positionsM.length} positions × ${view.parts.length} sublevels, CPU time, median of ${RUNS}`,
     lines: [...lines, 'goal: writing < computing'],

@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { detectorPattern, kernelDensity, type BeamGeometry, type DetectorPattern } from '../../server/src/physics/beam';
+import { detectorPattern, kernelDensity, type DetectorPattern } from '../../server/src/physics/beam';
 import { sampleAt } from '../../server/src/physics/beam/peakShape';
 import { ATOMIC_MASS_UNIT, BOHR_MAGNETON, BOLTZMANN_K, ELECTRON_GS } from '../../server/src/physics/constants';
 import { beamRef, type PatternRef } from './beamReference';
+import { MASS_39_U, SLIT_BEAM_GEOMETRY } from '../fixtures/slitBeamGeometry';
 
 const at = (p: DetectorPattern, x: number): number => sampleAt(p.total, p.positionsM, p.edgesM, x);
 const width = (p: DetectorPattern, j: number): number => p.edgesM[j + 1] - p.edgesM[j];
@@ -96,16 +97,8 @@ describe('pattern first moment vs the closed form ⟨z⟩ = μ (∂B/∂z)(L1²/
 });
 
 // Facts of the trade: a uniform gradient pushes each sublevel by a force proportional to its moment.
-const geometry: BeamGeometry = {
-  slit1M: 50e-6,
-  slit2M: 50e-6,
-  slitSeparationM: 0.6,
-  magnetLengthM: 0.12,
-  driftM: 0.5,
-  detectorWidthM: 15e-6,
-  gradientTPerM: 150,
-};
-const mass = 39 * ATOMIC_MASS_UNIT; // invented scenario
+const geometry = SLIT_BEAM_GEOMETRY;
+const mass = MASS_39_U; // invented scenario
 const oven = { kind: 'effusive' as const, temperatureK: 550 };
 const single = { kind: 'single' as const, speed: 700 };
 

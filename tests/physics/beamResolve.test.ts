@@ -7,22 +7,14 @@ import {
   smallestResolvingDrift,
   smallestResolvingGradient,
   smallestResolvingMagnetLength,
-  type BeamGeometry,
   type PatternInput,
 } from '../../server/src/physics/beam';
-import { ATOMIC_MASS_UNIT, BOHR_MAGNETON } from '../../server/src/physics/constants';
+import { BOHR_MAGNETON } from '../../server/src/physics/constants';
+import { MASS_39_U, SLIT_BEAM_GEOMETRY } from '../fixtures/slitBeamGeometry';
 
 // Invented scenario: 39 u, single speed 700 m/s, two sublevels with moments ±μ_B.
-const geometry: BeamGeometry = {
-  slit1M: 50e-6,
-  slit2M: 50e-6,
-  slitSeparationM: 0.6,
-  magnetLengthM: 0.12,
-  driftM: 0.5,
-  detectorWidthM: 15e-6,
-  gradientTPerM: 150,
-};
-const mass = 39 * ATOMIC_MASS_UNIT;
+const geometry = SLIT_BEAM_GEOMETRY;
+const mass = MASS_39_U;
 const speed = 700;
 const pair: PatternInput = {
   massKg: mass,

@@ -1,18 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { beamCautions, detectorPattern, MAX_HALF_ANGLE_RAD, validateGeometry, type BeamGeometry, type PatternInput } from '../../server/src/physics/beam';
-import { ATOMIC_MASS_UNIT, BOHR_MAGNETON } from '../../server/src/physics/constants';
+import { beamCautions, detectorPattern, MAX_HALF_ANGLE_RAD, validateGeometry, type PatternInput } from '../../server/src/physics/beam';
+import { BOHR_MAGNETON } from '../../server/src/physics/constants';
+import { MASS_39_U, SLIT_BEAM_GEOMETRY } from '../fixtures/slitBeamGeometry';
 
-const geometry: BeamGeometry = {
-  slit1M: 50e-6,
-  slit2M: 50e-6,
-  slitSeparationM: 0.6,
-  magnetLengthM: 0.12,
-  driftM: 0.5,
-  detectorWidthM: 15e-6,
-  gradientTPerM: 150,
-};
+const geometry = SLIT_BEAM_GEOMETRY;
 const input: PatternInput = {
-  massKg: 39 * ATOMIC_MASS_UNIT,
+  massKg: MASS_39_U,
   geometry,
   source: { kind: 'effusive', temperatureK: 500 },
   sublevels: [{ label: 'a', momentJT: BOHR_MAGNETON, population: 1 }],
