@@ -14,29 +14,9 @@ import { analyze } from '../../server/src/eval/analyze';
 import { evaluateBeam } from '../../server/src/eval/beamEvaluation';
 import { gJLookup } from '../../server/src/eval/gJLookup';
 import { magnetAndBeam, speciesX } from '../fixtures/ovenBeam';
+import { coilPairBeam, twoWireBeam } from '../fixtures/fieldMapBeams';
 
-/** Na23 through two 12 cm conductors with opposite currents (invented numbers, examples/two-wire-magnet.sublevel). */
-const wires = (current: number) => `species Na23
-  level ground: 3s 2S1/2
-wire rails
-  current   = ${current} A
-  through   = 0, 2, 0 mm
-  direction = x
-  length    = 12 cm
-  return    = 0, -2, 0 mm
-magnet selector
-  sources = rails
-  length  = 8 cm
-  at      = 0, 0, 1.5 mm
-beam main
-  species  = Na23
-  level    = ground
-  source   = oven 600 K
-  slits    = 50 um, 50 um apart 80 cm
-  magnet   = selector
-  drift    = 40 cm
-  detector = 20 um
-`;
+const wires = (current: number): string => twoWireBeam({ current: String(current) });
 
 /** Counts amplitude · P(x − offset) + background at `positions`, P the evaluated pattern (linear between its bins), with seeded noise of σ = √counts. */
 function syntheticCounts(text: string, positions: number[], amplitude: number, offset: number, background: number, seed: number): number[] {
@@ -97,31 +77,7 @@ describe('a profile fit through the flights', () => {
 
   it('agrees with the uniform-gradient fit where the field is nearly uniform: source_scale × G = the fitted gradient', () => {
     // A spin-1/2 without a nucleus through a Helmholtz pair (0.3 T) and an anti-Helmholtz pair (~10 T/m) on one axis (invented numbers).
-    const setup = (magnet: string) => `species X
-  mass = 39 u
-  I    = 0
-  level g: 2S1/2
-coil bias
-  radius  = 10 cm
-  turns   = 100
-  current = 333.7 A
-  spacing = 10 cm
-coil grad
-  radius  = 10 cm
-  turns   = 500
-  current = 185.4 A
-  spacing = 17.32 cm
-  sense   = opposite
-${magnet}
-beam main
-  species  = X
-  level    = g
-  source   = oven 600 K
-  slits    = 10 um, 10 um apart 50 cm
-  magnet   = m
-  drift    = 100 cm
-  detector = 10 um
-`;
+    const setup = (magnet: string): string => coilPairBeam({ magnet, beam: 'main', gradCurrent: '185.4', T: '600', slit: '10', detector: '10' });
     const mapped = setup('magnet m\n  sources = bias, grad\n  length  = 1 cm\n');
     const m = analyze(mapped).result!.magnets[0]!;
     const near = Array.from({ length: 161 }, (_, i) => -80e-6 + (160e-6 * i) / 160);
@@ -141,7 +97,7 @@ beam main
 describe('the JSON document of a field-map beam with uncertainties and a source_scale fit', () => {
   it('validates against the published JSON Schema, and the text report shows value(unc)', () => {
     const counts = syntheticCounts(wires(2472), positions, 4, 12e-6, 20, 5);
-    const text = wires(2400).replace('current   = 2400 A', 'current   = 2400(24) A').replace('oven 600 K', 'oven 600(5) K') + profileBlock(counts, '  free = source_scale, offset, background\n');
+    const text = twoWireBeam({ current: '2400(24)', T: '600(5)' }) + profileBlock(counts, '  free = source_scale, offset, background\n');
     const file = path.join(mkdtempSync(path.join(tmpdir(), 'fieldfit-')), 'setup.sublevel');
     writeFileSync(file, text);
     const doc = JSON.parse(cli('eval', file, '--format', 'json').out);

@@ -6,29 +6,10 @@
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import { ATOMIC_MASS_UNIT } from '../../server/src/physics/constants';
+import { coilPairBeam, twoWireBeam } from '../fixtures/fieldMapBeams';
 
-/** Na23 through two 12 cm conductors with opposite currents (invented numbers, examples/two-wire-magnet.sublevel). */
-const WIRES = `species Na23
-  level ground: 3s 2S1/2
-wire rails
-  current   = {current} A
-  through   = 0, {through}, 0 mm
-  direction = x
-  length    = 12 cm
-  return    = 0, -2, 0 mm
-magnet selector
-  sources = rails
-  length  = {length} cm
-  at      = 0, 0, {at} mm
-beam main
-  species  = Na23
-  level    = ground
-  source   = oven {T} K
-  slits    = 50 um, 50 um apart 80 cm
-  magnet   = selector
-  drift    = {drift} cm
-  detector = 20 um
-`;
+/** Na23 through two 12 cm conductors, every input a {placeholder}. */
+const WIRES = twoWireBeam({ current: '{current}', through: '{through}', at: '{at}', length: '{length}', T: '{T}', drift: '{drift}' });
 
 /** Writes value(u) with u in units of the value's last digit (the file's notation). */
 function written(value: number, u: number, decimals: number): string {
@@ -94,31 +75,7 @@ describe('a field-map beam: peak uncertainties against differences of the whole 
  * across the axis over 1 cm: ∂|B|/∂z = G B0/|B| changes by < 0.4 % along it (invented numbers).
  */
 function nearlyUniform(magnet: string, beamExtra: { T: string; slit: string; detector: string }): string {
-  return `species X
-  mass = 39 u
-  I    = 0
-  level g: 2S1/2
-coil bias
-  radius  = 10 cm
-  turns   = 100
-  current = 333.7 A
-  spacing = 10 cm
-coil grad
-  radius  = 10 cm
-  turns   = 500
-  current = {gradCurrent} A
-  spacing = 17.32 cm
-  sense   = opposite
-${magnet}
-beam b
-  species  = X
-  level    = g
-  source   = oven ${beamExtra.T} K
-  slits    = ${beamExtra.slit} um, ${beamExtra.slit} um apart 50 cm
-  magnet   = m
-  drift    = 100 cm
-  detector = ${beamExtra.detector} um
-`;
+  return coilPairBeam({ magnet, gradCurrent: '{gradCurrent}', ...beamExtra });
 }
 
 describe('a field-map beam against the uniform-gradient pass in a nearly uniform gradient', () => {
