@@ -22,6 +22,20 @@ function piecesBytes(t: CsvNumberTable): { bytes: Buffer; sizes: number[] } {
   return { bytes: Buffer.concat(parts), sizes: parts.map((p) => p.length) };
 }
 
+/** The real file system, recording the length of every write. */
+function countingWrites(): { counting: CliFileSystem; sizes: number[] } {
+  const sizes: number[] = [];
+  const write = nodeFileSystem.writeSync as (fd: number, b: Uint8Array, o: number, l: number) => number;
+  const counting: CliFileSystem = {
+    ...nodeFileSystem,
+    writeSync: ((fd: number, buf: Uint8Array, offset: number, length: number) => {
+      sizes.push(length);
+      return write(fd, buf, offset, length);
+    }) as CliFileSystem['writeSync'],
+  };
+  return { counting, sizes };
+}
+
 describe('a table of numbers written in pieces', () => {
   let dir = '';
   beforeEach(() => {
@@ -30,14 +44,7 @@ describe('a table of numbers written in pieces', () => {
   afterEach(() => rmSync(dir, { recursive: true, force: true }));
 
   it('profile --out: the same bytes as the printed text, written in chunks of at most 33 KiB', () => {
-    const sizes: number[] = [];
-    const counting: CliFileSystem = {
-      ...nodeFileSystem,
-      writeSync: ((fd: number, buf: Uint8Array, offset: number, length: number) => {
-        sizes.push(length);
-        return (nodeFileSystem.writeSync as (fd: number, b: Uint8Array, o: number, l: number) => number)(fd, buf, offset, length);
-      }) as CliFileSystem['writeSync'],
-    };
+    const { counting, sizes } = countingWrites();
     const target = path.join(dir, 'pattern.csv');
     const r = cliOn(counting, 'profile', LI, '--out', target);
     expect(r.code).toBe(0);
@@ -52,18 +59,11 @@ describe('a table of numbers written in pieces', () => {
 
   it('sweep --out (CSV): the same bytes as the printed text, in pieces; JSON as before', () => {
     const args = ['sweep', 'examples/rubidium-bias.sublevel', '--level', 'ground', '--to', '0.1T', '--points', '3001'];
-    let writes = 0;
-    const counting: CliFileSystem = {
-      ...nodeFileSystem,
-      writeSync: ((fd: number, buf: Uint8Array, offset: number, length: number) => {
-        writes++;
-        return (nodeFileSystem.writeSync as (fd: number, b: Uint8Array, o: number, l: number) => number)(fd, buf, offset, length);
-      }) as CliFileSystem['writeSync'],
-    };
+    const { counting, sizes } = countingWrites();
     const csv = path.join(dir, 'sweep.csv');
     expect(cliOn(counting, ...args, '--out', csv).code).toBe(0);
     expect(readFileSync(csv, 'utf8')).toBe(cli(...args).out + '\n');
-    expect(writes).toBeGreaterThan(3);
+    expect(sizes.length).toBeGreaterThan(3);
     const json = path.join(dir, 'sweep.json');
     expect(cli(...args, '--format', 'json', '--out', json).code).toBe(0);
     expect(readFileSync(json, 'utf8')).toBe(cli(...args, '--format', 'json').out + '\n');
