@@ -118,38 +118,15 @@ describe('a field-map beam against the uniform-gradient pass in a nearly uniform
 
 describe('coils and a magnetised block: every kind of source input', () => {
   /** The nearly uniform pair of coils above with a block below the beam line (invented numbers). */
-  const template = `species X
-  mass = 39 u
-  I    = 0
-  level g: 2S1/2
-coil bias
-  radius  = {radius} cm
-  turns   = {turns}
-  current = {current} A
-  spacing = {spacing} cm
-coil grad
-  radius  = 10 cm
-  turns   = 500
-  current = 185.4 A
-  spacing = 17.32 cm
-  sense   = opposite
-  centre  = 0, 0, {gradZ} mm
-slab block
-  size          = 2, 2, {sizeZ} cm
-  magnetisation = {magnetisation} T along z
-  centre        = 0, 0, -3 cm
-magnet m
-  sources = bias, grad, block
-  length  = 1 cm
-beam b
-  species  = X
-  level    = g
-  source   = oven 600 K
-  slits    = 10 um, 10 um apart 50 cm
-  magnet   = m
-  drift    = 100 cm
-  detector = 10 um
-`;
+  const template = coilPairBeam({
+    bias: { radius: '{radius}', turns: '{turns}', current: '{current}', spacing: '{spacing}' },
+    gradCurrent: '185.4',
+    gradCentre: '{gradZ}',
+    magnet: 'slab block\n  size          = 2, 2, {sizeZ} cm\n  magnetisation = {magnetisation} T along z\n  centre        = 0, 0, -3 cm\nmagnet m\n  sources = bias, grad, block\n  length  = 1 cm',
+    T: '600',
+    slit: '10',
+    detector: '10',
+  });
   const inputs: Record<string, { value: number; u: number; decimals: number }> = {
     radius: { value: 10, u: 0.02, decimals: 2 },
     turns: { value: 100, u: 1, decimals: 0 },
