@@ -83,16 +83,11 @@ describe('a level is evaluated at the working fields that concern its species', 
   });
 
   it('the JSON names the fields of a species evaluated at some only, and the list of a field', () => {
-    expect(r.species.map((s) => [s.evaluated_at, s.not_at])).toEqual([
-      [
-        [{ kind: 'field', name: 'bias', species: ['Rb87'] }, { kind: 'field', name: 'guide' }],
-        [{ kind: 'magnet', name: 'sel', beams: [{ name: 'b', species: 'K39' }] }],
-      ],
-      [
-        [{ kind: 'field', name: 'guide' }, { kind: 'magnet', name: 'sel', beams: [{ name: 'b', species: 'K39' }] }],
-        [{ kind: 'field', name: 'bias', species: ['Rb87'] }],
-      ],
+    expect(r.species.map((s) => s.evaluated_at)).toEqual([
+      [{ kind: 'field', name: 'bias' }, { kind: 'field', name: 'guide' }],
+      [{ kind: 'field', name: 'guide' }, { kind: 'magnet', name: 'sel' }],
     ]);
+    expect(r.magnets.map((m) => [m.name, m.beams])).toEqual([['sel', [{ name: 'b', species: 'K39' }]]]);
     const validate = new Ajv2020({ allErrors: true, strict: true }).compile(JSON.parse(readFileSync('docs/schema/evaluation.schema.json', 'utf8')));
     validate(JSON.parse(JSON.stringify(r)));
     expect(validate.errors ?? []).toEqual([]);
@@ -108,12 +103,14 @@ describe('a level is evaluated at the working fields that concern its species', 
     expect(text).toContain("  evaluated at 2 of the file's 3 working fields: field guide (every species), magnet sel (beam b); not at field bias (species = Rb87)");
   });
 
-  it('a beam that names one species and flies a level of another: the text, the hover and the JSON give the level\'s species, as the evaluation does', () => {
+  it('a beam that names one species and flies a level of another: the text, the hover and the magnet\'s JSON give the level\'s species, as the evaluation does', () => {
     const src = SCOPED.replace('  species = Rb87\n', '').replace('  level    = kg\n', '  species  = Rb87\n  level    = K39.kg\n');
     const b = analyze(src);
     const rb = b.result!.species.find((s) => s.name === 'Rb87')!;
     expect(names(b.result!.levels.find((l) => l.level === 'ground')!.at_fields)).toEqual(['field bias', 'field guide']);
-    expect(rb.not_at).toEqual([{ kind: 'magnet', name: 'sel', beams: [{ name: 'b', species: 'K39' }] }]);
+    expect(rb.evaluated_at).toEqual([{ kind: 'field', name: 'bias' }, { kind: 'field', name: 'guide' }]);
+    expect(b.result!.beams[0]!.species).toBe('Rb87');
+    expect(b.result!.magnets[0]!.beams).toEqual([{ name: 'b', species: 'K39' }]);
     // Read from the beam's own `species`, the old line said "not at magnet sel (no beam: every species)".
     const line = "  evaluated at 2 of the file's 3 working fields: field bias (every species), field guide (every species); not at magnet sel (beam b of K39)";
     expect(textReport('x.sublevel', b.result!)).toContain(line);
@@ -126,6 +123,7 @@ describe('a level is evaluated at the working fields that concern its species', 
     const r2 = analyze(src).result!;
     const rb = r2.species.find((s) => s.name === 'Rb87')!;
     expect(rb.evaluated_at).toEqual([{ kind: 'field', name: 'guide' }, { kind: 'magnet', name: 'spare' }]);
+    expect(r2.magnets.map((m) => m.beams)).toEqual([undefined, [{ name: 'b', species: 'K39' }]]);
     expect(textReport('x.sublevel', r2)).toContain("  evaluated at 2 of the file's 3 working fields: field guide (every species), magnet spare (no beam: every species); not at magnet sel (beam b of K39)");
   });
 

@@ -35,7 +35,7 @@ export function textReport(file: string, r: EvaluationResult): string[] {
     out.push(`species ${s.name} (${where})`);
     const mass = s.mass_kg ? `${trimNumber(s.mass_kg.value / ATOMIC_MASS_UNIT, 9)} u` : 'not given';
     out.push(`  mass ${mass}   I = ${fraction(s.I)}   g_I = ${trimNumber(s.g_I.value, 8)}  [${s.g_I.source}]`);
-    const scope = fieldScopeLine(s);
+    const scope = fieldScopeLine(r, s);
     if (scope) out.push(scope);
     for (const l of r.levels.filter((x) => x.species === s.name)) out.push(...levelReport(l, atFieldText));
     for (const t of r.terms.filter((x) => x.species === s.name)) out.push(...termReport(t, atFieldText));

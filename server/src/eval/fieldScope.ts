@@ -8,33 +8,33 @@
  * So a file of one species, or one whose fields name no species and whose magnets each carry a
  * beam of every species, is evaluated as it always was: every level at every field.
  */
-import type { SetupModel, SpeciesModel } from '../model/types';
+import type { MagnetModel, SetupModel, SpeciesModel } from '../model/types';
 import type { WorkingField } from './levelEvaluation';
-import type { FieldScopeEntry, SpeciesResult } from './resultTypes';
+import type { MagnetResult, SpeciesResult } from './resultTypes';
 
 /** Every field and magnet that has a value, in the file's order: fields, then magnets. */
 export function workingFields(model: SetupModel): WorkingField[] {
-  return scopedFields(model).map((s) => s.field);
+  return scopedFields(model).scoped.map((s) => s.field);
 }
 
 interface ScopedField {
   field: WorkingField;
   /** The species the field concerns; undefined: every species. */
   species?: ReadonlySet<SpeciesModel>;
-  /** Why, for the report and the JSON: a field's (known) species list, or the beams through a magnet. */
-  list?: readonly SpeciesModel[];
-  beams?: { name: string; species: SpeciesModel }[];
 }
 
-function scopedFields(model: SetupModel): ScopedField[] {
-  const out: ScopedField[] = [];
+/** A beam through a magnet and the species it carries. */
+type Flown = { name: string; species: SpeciesModel };
+
+function scopedFields(model: SetupModel): { scoped: ScopedField[]; flown: Map<MagnetModel, Flown[]> } {
+  const scoped: ScopedField[] = [];
   for (const f of model.fields) {
     if (!f.tesla) continue;
     const field: WorkingField = { source: { kind: 'field', name: f.name }, tesla: f.tesla.value, range: f.tesla.range ?? f.nameRange, ...(f.tesla.unit ? { unit: f.tesla.unit } : {}) };
-    out.push({ field, ...(f.species ? { species: new Set(f.species), list: f.species } : {}) });
+    scoped.push({ field, ...(f.species ? { species: new Set(f.species) } : {}) });
   }
   // The species that flies is the level's (a beam may name one species and a level of another).
-  const flown = new Map<object, { name: string; species: SpeciesModel }[]>();
+  const flown = new Map<MagnetModel, Flown[]>();
   for (const b of model.beams) {
     const sp = b.level?.species ?? b.species;
     if (!b.magnet || !sp) continue;
@@ -46,9 +46,9 @@ function scopedFields(model: SetupModel): ScopedField[] {
     if (!m.fieldT) continue;
     const field: WorkingField = { source: { kind: 'magnet', name: m.name }, tesla: m.fieldT.value, range: m.fieldT.range ?? m.nameRange, ...(m.fieldT.unit ? { unit: m.fieldT.unit } : {}) };
     const beams = flown.get(m);
-    out.push({ field, ...(beams ? { species: new Set(beams.map((b) => b.species)), beams } : {}) });
+    scoped.push({ field, ...(beams ? { species: new Set(beams.map((b) => b.species)) } : {}) });
   }
-  return out;
+  return { scoped, flown };
 }
 
 export interface FieldScope {
@@ -56,42 +56,37 @@ export interface FieldScope {
   all: WorkingField[];
   /** The working fields that concern a species (the same array for species that share them). */
   of(species: SpeciesModel): WorkingField[];
-  /**
-   * `evaluated_at` and `not_at` of a species evaluated at some of the working fields only, each
-   * with the reason (empty when it is evaluated at every one): what the report and hovers say.
-   */
-  resultOf(species: SpeciesModel): Pick<SpeciesResult, 'evaluated_at' | 'not_at'>;
+  /** `evaluated_at` of a species evaluated at some of the working fields only (else empty). */
+  evaluatedAt(species: SpeciesModel): Pick<SpeciesResult, 'evaluated_at'>;
+  /** A magnet's `beams`: those through it and the species each carries, the species it concerns. */
+  beamsThrough(magnet: MagnetModel): Pick<MagnetResult, 'beams'>;
 }
 
 export function fieldScope(model: SetupModel): FieldScope {
-  const scoped = scopedFields(model);
+  const { scoped, flown } = scopedFields(model);
   const all = scoped.map((s) => s.field);
-  const resultOf = (species: SpeciesModel): Pick<SpeciesResult, 'evaluated_at' | 'not_at'> => {
-    const concerns = (s: ScopedField): boolean => !s.species || s.species.has(species);
-    if (scoped.every(concerns)) return {};
-    return { evaluated_at: scoped.filter(concerns).map(scopeEntry), not_at: scoped.filter((s) => !concerns(s)).map(scopeEntry) };
+  const beamsThrough = (m: MagnetModel): Pick<MagnetResult, 'beams'> => {
+    const beams = flown.get(m);
+    return beams ? { beams: beams.map((b) => ({ name: b.name, species: b.species.name })) } : {};
   };
-  if (scoped.every((s) => !s.species)) return { all, of: () => all, resultOf: () => ({}) };
+  if (scoped.every((s) => !s.species)) return { all, of: () => all, evaluatedAt: () => ({}), beamsThrough };
   const cache = new Map<SpeciesModel, WorkingField[]>();
+  const of = (species: SpeciesModel): WorkingField[] => {
+    let fields = cache.get(species);
+    if (!fields) {
+      fields = scoped.filter((s) => !s.species || s.species.has(species)).map((s) => s.field);
+      if (fields.length === all.length) fields = all;
+      cache.set(species, fields);
+    }
+    return fields;
+  };
   return {
     all,
-    of(species) {
-      let fields = cache.get(species);
-      if (!fields) {
-        fields = scoped.filter((s) => !s.species || s.species.has(species)).map((s) => s.field);
-        if (fields.length === all.length) fields = all;
-        cache.set(species, fields);
-      }
-      return fields;
+    of,
+    evaluatedAt(species) {
+      const own = of(species);
+      return own === all ? {} : { evaluated_at: own.map((f) => ({ ...f.source })) };
     },
-    resultOf,
-  };
-}
-
-function scopeEntry(s: ScopedField): FieldScopeEntry {
-  return {
-    ...s.field.source,
-    ...(s.list ? { species: s.list.map((x) => x.name) } : {}),
-    ...(s.beams ? { beams: s.beams.map((b) => ({ name: b.name, species: b.species.name })) } : {}),
+    beamsThrough,
   };
 }

@@ -179,25 +179,16 @@ export interface SpeciesResult {
    * Set only when the species' levels, lines and resonances are evaluated at some of the file's
    * working fields, not all: the ones they are evaluated at, in order (docs/format.md).
    */
-  evaluated_at?: FieldScopeEntry[];
-  /** With `evaluated_at`: the working fields the species is not evaluated at, in order. */
-  not_at?: FieldScopeEntry[];
-}
-
-/**
- * A working field and why it concerns some species only, as the evaluation decided it: a field's
- * `species` list (the known names; empty when none is known), or the beams through a magnet and
- * the species each carries (a level's species). Neither: the field concerns every species.
- */
-export interface FieldScopeEntry {
-  kind: 'field' | 'magnet';
-  name: string;
-  species?: string[];
-  beams?: { name: string; species: string }[];
+  evaluated_at?: { kind: 'field' | 'magnet'; name: string }[];
 }
 
 export interface MagnetResult {
   name: string;
+  /**
+   * The beams that fly through it and the species each carries (its level's species): the
+   * species it acts on (docs/format.md). Absent: no beam does, and it acts on every species.
+   */
+  beams?: { name: string; species: string }[];
   field_T?: number;
   gradient_T_per_m?: number;
   length_m?: number;

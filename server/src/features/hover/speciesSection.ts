@@ -23,7 +23,7 @@ export function speciesSection(s: SpeciesModel, result?: EvaluationResult): stri
     lines.push(`built-in levels: ${s.builtin.levels.map((l) => md(l.designation)).join(', ')}`);
   }
   const evaluated = result?.species.find((x) => x.name === s.name);
-  const scope = evaluated ? fieldScopeLine(evaluated) : undefined;
+  const scope = evaluated ? fieldScopeLine(result!, evaluated) : undefined;
   if (scope) lines.push(md(scope.trim()));
   return lines.join('  \n');
 }
