@@ -22,30 +22,23 @@ export function onWinding(rho: number, z: number, radius: number, length: number
   return Math.abs(rho - radius) <= tol && Math.abs(z) <= length / 2 + tol;
 }
 
+/** Per kind of part: its code, its conductor in words, why the model has no field there, and what is left out. */
+const ON_SOURCE: Record<FieldSourceSpec['kind'], { code: string; conductor: string; why: string; part: string }> = {
+  loop: { code: 'source-point-on-loop', conductor: 'the wire of a loop', why: 'a thin loop has no field', part: 'that loop' },
+  solenoid: { code: 'source-point-on-winding', conductor: 'the winding of a solenoid', why: 'the field jumps', part: 'that solenoid' },
+  wire: { code: 'source-point-on-wire', conductor: 'a wire', why: 'a thin wire has no field', part: 'that wire' },
+  slab: { code: 'source-point-on-block', conductor: 'the surface of a magnetised block', why: 'the field jumps', part: 'that block' },
+};
+
 /** The issue for a point on (or, where the field overflows, next to) a part's conductor. */
 export function onSourceIssue(kind: FieldSourceSpec['kind'], partIndex?: number): FieldIssue {
-  switch (kind) {
-    case 'loop':
-      return issue('warning', 'source-point-on-loop', 'The point lies on the wire of a loop, where a thin loop has no field; that loop is left out there.', partIndex);
-    case 'solenoid':
-      return issue('warning', 'source-point-on-winding', 'The point lies on the winding of a solenoid, where the field jumps; that solenoid is left out there.', partIndex);
-    case 'wire':
-      return issue('warning', 'source-point-on-wire', 'The point lies on a wire, where a thin wire has no field; that wire is left out there.', partIndex);
-    case 'slab':
-      return issue('warning', 'source-point-on-block', 'The point lies on the surface of a magnetised block, where the field jumps; that block is left out there.', partIndex);
-  }
+  const t = ON_SOURCE[kind];
+  return issue('warning', t.code, `The point lies on ${t.conductor}, where ${t.why}; ${t.part} is left out there.`, partIndex);
 }
-
-const CONDUCTOR_BY_CODE: Record<string, string> = {
-  'source-point-on-loop': 'the wire of a loop',
-  'source-point-on-winding': 'the winding of a solenoid',
-  'source-point-on-wire': 'a wire',
-  'source-point-on-block': 'the surface of a magnetised block',
-};
 
 /** The conductor an on-source issue is about, in words ("a wire"), for other layers' messages. */
 export function conductorOf(i: FieldIssue): string {
-  return CONDUCTOR_BY_CODE[i.code] ?? 'a conductor';
+  return Object.values(ON_SOURCE).find((t) => t.code === i.code)?.conductor ?? 'a conductor';
 }
 
 export function pointOnSource(spec: FieldSourceSpec, point: Vec3, partIndex?: number): FieldIssue | undefined {
