@@ -22,23 +22,28 @@ export function onWinding(rho: number, z: number, radius: number, length: number
   return Math.abs(rho - radius) <= tol && Math.abs(z) <= length / 2 + tol;
 }
 
-/** Per kind of part: its code, its conductor in words, why the model has no field there, and what is left out. */
-const ON_SOURCE: Record<FieldSourceSpec['kind'], { code: string; conductor: string; why: string; part: string }> = {
-  loop: { code: 'source-point-on-loop', conductor: 'the wire of a loop', why: 'a thin loop has no field', part: 'that loop' },
-  solenoid: { code: 'source-point-on-winding', conductor: 'the winding of a solenoid', why: 'the field jumps', part: 'that solenoid' },
-  wire: { code: 'source-point-on-wire', conductor: 'a wire', why: 'a thin wire has no field', part: 'that wire' },
-  slab: { code: 'source-point-on-block', conductor: 'the surface of a magnetised block', why: 'the field jumps', part: 'that block' },
+/** One entry of the table below: the issue, its message made from the conductor in words, why the model has no field there, and what is left out. */
+function entry(made: (message: string) => FieldIssue, conductor: string, why: string, leftOut: string): { issue: FieldIssue; conductor: string } {
+  return { issue: made(`The point lies on ${conductor}, where ${why}; ${leftOut} is left out there.`), conductor };
+}
+
+/** Per kind of part, the one table of on-conductor findings (the issue makers keep their codes literal for the rule catalogue's scan). */
+const ON_SOURCE: Record<FieldSourceSpec['kind'], { issue: FieldIssue; conductor: string }> = {
+  loop: entry((m) => issue('warning', 'source-point-on-loop', m), 'the wire of a loop', 'a thin loop has no field', 'that loop'),
+  solenoid: entry((m) => issue('warning', 'source-point-on-winding', m), 'the winding of a solenoid', 'the field jumps', 'that solenoid'),
+  wire: entry((m) => issue('warning', 'source-point-on-wire', m), 'a wire', 'a thin wire has no field', 'that wire'),
+  slab: entry((m) => issue('warning', 'source-point-on-block', m), 'the surface of a magnetised block', 'the field jumps', 'that block'),
 };
 
 /** The issue for a point on (or, where the field overflows, next to) a part's conductor. */
 export function onSourceIssue(kind: FieldSourceSpec['kind'], partIndex?: number): FieldIssue {
-  const t = ON_SOURCE[kind];
-  return issue('warning', t.code, `The point lies on ${t.conductor}, where ${t.why}; ${t.part} is left out there.`, partIndex);
+  const { severity, code, message } = ON_SOURCE[kind].issue;
+  return issue(severity, code, message, partIndex);
 }
 
 /** The conductor an on-source issue is about, in words ("a wire"), for other layers' messages. */
 export function conductorOf(i: FieldIssue): string {
-  return Object.values(ON_SOURCE).find((t) => t.code === i.code)?.conductor ?? 'a conductor';
+  return Object.values(ON_SOURCE).find((t) => t.issue.code === i.code)?.conductor ?? 'a conductor';
 }
 
 export function pointOnSource(spec: FieldSourceSpec, point: Vec3, partIndex?: number): FieldIssue | undefined {
