@@ -168,13 +168,18 @@ describe('coils and a magnetised block: every kind of source input', () => {
     });
   });
 
-  it('a source without current whose current is uncertain: the peaks say it is left out (a warning, the file wrote it)', () => {
-    const t = text(['radius']).replace('slab block', 'coil idle\n  radius  = 5 cm\n  turns   = 10\n  current = 0.0(5) A\nslab block').replace('sources = bias, grad, block', 'sources = bias, grad, block, idle');
-    const a = analyze(t);
-    const p = a.problems.find((x) => x.code === 'uncertainty-undefined')!;
-    expect(p.severity).toBe('warning');
-    expect(p.message).toContain('current of coil idle');
-    // the radius still reaches the peaks
-    expect(a.result!.beams[0]!.peaks[0]!.position_m_unc).toBeGreaterThan(0);
+  it('a source without current whose current is uncertain: the current is set rather than scaled, and the peaks move as the whole evaluation does (within 1e-3)', () => {
+    const idle = (current: string) =>
+      text([]).replace('slab block', `coil idle\n  radius  = 5 cm\n  turns   = 10\n  current = ${current} A\n  centre  = 0, 0, 3 cm\nslab block`).replace('sources = bias, grad, block', 'sources = bias, grad, block, idle');
+    const a = analyze(idle('0.0(5)'));
+    expect(a.problems.filter((x) => x.code === 'uncertainty-undefined')).toEqual([]);
+    const h = 0.05;
+    const up = peaks(idle(String(h)));
+    const down = peaks(idle(String(-h)));
+    a.result!.beams[0]!.peaks.forEach((p, j) => {
+      const fd = Math.abs(((up[j]! - down[j]!) / (2 * h)) * 0.5);
+      expect(fd).toBeGreaterThan(0);
+      expect(Math.abs(p.position_m_unc! / fd - 1)).toBeLessThan(1e-3);
+    });
   });
 });

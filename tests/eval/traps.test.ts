@@ -104,22 +104,44 @@ trap q
   level   = ground
 ${centre}`;
 
-  it('a wire through the default centre: an error at the trap’s name, no sublevels, no NaN', () => {
+  it('a wire through the default centre: an error at the wire’s `through` (what the file wrote), the trap related, no sublevels, no NaN', () => {
     const r = analyze(withWire(''));
     const p = r.problems.filter((x) => x.code === 'trap-on-conductor');
     expect(p.map((x) => x.message)).toEqual(["trap 'q': The trap's centre lies on a wire of its sources, where the field has no value: no trap is computed. Move the centre or the source."]);
     expect(p[0]!.severity).toBe('error');
     const lines = withWire('').split('\n');
-    expect(lines[p[0]!.range.start.line]).toBe('trap q');
+    expect(lines[p[0]!.range.start.line]).toBe('  through   = 0, 0, 0 cm');
+    expect(p[0]!.related!.map((x) => [lines[x.range.start.line], x.message])).toEqual([['trap q', "trap 'q' (no `centre` written: its centre is the origin)"]]);
     expect(r.problems.map((x) => x.code)).not.toContain('trap-region-invalid');
     expect(r.result!.traps![0]!.computed).toBe(false);
     expect(JSON.stringify(r.result)).not.toMatch(/NaN|Infinity/);
   });
 
-  it('a centre given on the wire: the error sits on `centre`', () => {
+  it('a centre given on the wire: the error sits on `centre`, the wire’s `through` related', () => {
     const text = withWire('  centre  = 1 cm, 0, 0\n');
     const p = analyze(text).problems.find((x) => x.code === 'trap-on-conductor')!;
-    expect(text.split('\n')[p.range.start.line]).toBe('  centre  = 1 cm, 0, 0');
+    const lines = text.split('\n');
+    expect(lines[p.range.start.line]).toBe('  centre  = 1 cm, 0, 0');
+    expect(p.related!.map((x) => [lines[x.range.start.line], x.message])).toEqual([['  through   = 0, 0, 0 cm', "wire 'w' is placed here"]]);
+  });
+
+  it('a region that meets a block’s face below the centre (where the gravity ray ends): the error sits on `region`, not on `centre`', () => {
+    // The block's top face is at z = −1 cm, the region's lowest point (invented numbers).
+    const text = `${PAIR('20 A')}slab plate
+  size          = 10, 10, 2 cm
+  magnetisation = 1 mT along z
+  centre        = 0, 0, -2 cm
+trap q
+  sources = quad, plate
+  level   = ground
+  centre  = 0, 0, 0
+  region  = 1 cm
+`;
+    const p = analyze(text).problems.find((x) => x.code === 'trap-on-conductor')!;
+    expect(p.message).toMatch(/The trap region meets the surface of a magnetised block/);
+    const lines = text.split('\n');
+    expect(lines[p.range.start.line]).toBe('  region  = 1 cm');
+    expect(p.related!.map((x) => lines[x.range.start.line])).toEqual(['  centre        = 0, 0, -2 cm']);
   });
 });
 

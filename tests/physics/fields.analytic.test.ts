@@ -211,6 +211,19 @@ describe('gradient tensor', () => {
 });
 
 describe('points on a source', () => {
+  it('say, per kind of part, one code and one conductor in words, the same in the issue and in conductorOf', async () => {
+    const { conductorOf, onSourceIssue } = await import('../../server/src/physics/fields/onSource');
+    const kinds = ['loop', 'solenoid', 'wire', 'slab'] as const;
+    expect(kinds.map((k) => [onSourceIssue(k, 2).code, conductorOf(onSourceIssue(k)), onSourceIssue(k, 2).partIndex])).toEqual([
+      ['source-point-on-loop', 'the wire of a loop', 2],
+      ['source-point-on-winding', 'the winding of a solenoid', 2],
+      ['source-point-on-wire', 'a wire', 2],
+      ['source-point-on-block', 'the surface of a magnetised block', 2],
+    ]);
+    expect(onSourceIssue('solenoid').message).toBe('The point lies on the winding of a solenoid, where the field jumps; that solenoid is left out there.');
+    for (const k of kinds) expect(onSourceIssue(k).message).toContain(`lies on ${conductorOf(onSourceIssue(k))}, where`);
+    expect(conductorOf({ severity: 'warning', code: 'something-else', message: '' })).toBe('a conductor');
+  });
   it('give an issue naming the part, and a finite sum without that part', () => {
     const parts = GENERIC;
     const onLoop: Vec3 = (() => {

@@ -117,6 +117,34 @@ describe('the field map figure', () => {
     expect(pathPoints(d).filter((p) => p.move)).toHaveLength(3);
   });
 
+  it('across a rail, where B·(along the line) is 0 by symmetry, draws the component across it: B_z = μ0 I/π a between the wires, sign turning at each (textbook superposition of two long wires)', async () => {
+    const { analyze } = await import('../../server/src/eval/analyze');
+    const { fieldMapFor } = await import('../../server/src/views/fieldMapDiagram');
+    const { sumField } = await import('../../server/src/physics/fields');
+    const model = analyze('wire rail\n  current = 10 A\n  through = 0, 6, 0 mm\n  direction = x\n  return = 0, -6, 0 mm\n').model!;
+    const parts = model.sources[0]!.parts;
+    const v = fieldMapView([{ name: 'rail', kind: 'wire', parts }], sumField(parts), { points: 401 })!;
+    expect([v.componentName, v.componentAxis]).toEqual(['B_z', 'z']);
+    const mid = 200;
+    expect(v.positionsM[mid]).toBeCloseTo(0, 15);
+    // Between the wires both fields point the same way: 2 × μ0 I/(2π a) with a = 6 mm.
+    const between = (MU0 * 10) / (Math.PI * 0.006);
+    expect(Math.abs(Math.abs(v.componentT![mid]!) / between - 1)).toBeLessThan(1e-6);
+    // Outside the pair the sense is reversed; |B_z| is |B| everywhere on this line.
+    expect(Math.sign(v.componentT![10]!)).toBe(-Math.sign(v.componentT![mid]!));
+    for (let k = 0; k < 401; k += 40) if (Number.isFinite(v.magnitudeT[k])) expect(Math.abs(Math.abs(v.componentT![k]!) / v.magnitudeT[k]! - 1)).toBeLessThan(1e-12);
+    const a = fieldMapFor(model, { view: 'fieldmap', theme: 'export' }, { kind: 'export' });
+    if (!a.ok) throw new Error(a.message);
+    expect(a.csv!.split('\n').find((l) => l.startsWith('y_m'))).toBe('y_m,B_abs_T,B_z_T');
+    expect(a.svg).toContain('B_z (signed)');
+  });
+
+  it('along a coil pair’s axis keeps the component along the line', () => {
+    const v = fieldMapView([{ name: 'quad', kind: 'coil', parts: pair }], quadrupole(0.3), { points: 201 })!;
+    expect([v.componentName, v.componentAxis]).toEqual(['B_z', 'z']);
+    expect(v.componentT![200]).toBeCloseTo(0.3 * v.positionsM[200]!, 12);
+  });
+
   it('turns logarithmic when |B| spans orders of magnitude', () => {
     const values = Array.from({ length: 101 }, (_, k) => 10 ** (-6 + (6 * k) / 100));
     expect(magnitudeAxis(values)).toMatchObject({ log: true });

@@ -9,7 +9,7 @@ import { sumField } from '../physics/fields';
 import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
 import { PHYSICS_RULES } from '../physics/issueCodes';
 import { defaultRegionRadius, gravityAlong, regionIssues, ZERO_FIELD_FRACTION, summariseTrap, trapCautions, type SublevelTrap, type TrapIssue, type TrapSummary } from '../physics/traps';
-import type { SettingsModel } from '../model/types';
+import type { FieldSourceModel, SettingsModel } from '../model/types';
 import type { TrapModel } from '../model/trapTypes';
 import type { GJLookup } from './gJLookup';
 import { engineSpec } from './levelSpec';
@@ -121,26 +121,50 @@ function axesOf(a: readonly [Vec3, Vec3, Vec3]): TrapSublevelResult['axes'] {
   return [clean(a[0]), clean(a[1]), clean(a[2])];
 }
 
+function settingRange(trap: TrapModel, key: string): Range | undefined {
+  return trap.node.settings.find((s) => s.key.text === key)?.valueText.range;
+}
+
 /** Where a trap's problem belongs: the first setting it is about that the trap has, else the trap's name. */
 function rangeFor(trap: TrapModel, code: string): Range {
-  const setting = (key: string): Range | undefined => trap.node.settings.find((s) => s.key.text === key)?.valueText.range;
   const byCode: Record<string, string[]> = {
     'trap-cut-outside': ['cut'],
     'trap-cut-invalid': ['cut'],
     'trap-temperature-invalid': ['temperature'],
     'trap-region-invalid': ['region'],
-    'trap-on-conductor': ['centre', 'region'],
     'trap-region-reaches-source': ['region'],
     'trap-gravity-too-strong': ['sources'],
   };
   for (const key of byCode[code] ?? []) {
-    const r = setting(key);
+    const r = settingRange(trap, key);
     if (r) return r;
   }
   return trap.nameRange;
 }
 
+/**
+ * A trap point on a conductor belongs where the user would change it: the trap's `centre` (its
+ * centre on the conductor) or `region` (the region reaching it) when written, else the line that
+ * places the conductor in its source; the other place is given as related.
+ */
+function onConductorPlace(trap: TrapModel, c: NonNullable<TrapIssue['conductor']>): Pick<Problem, 'range' | 'related'> {
+  const owners = (trap.sources ?? []).flatMap((s) => s.parts.map((_, j) => ({ s, j })));
+  const owner = c.partIndex !== undefined ? owners[c.partIndex] : undefined;
+  const placed = owner ? conductorSetting(owner.s, owner.j) : undefined;
+  const mine = settingRange(trap, c.meets);
+  if (mine) return { range: mine, ...(owner && placed ? { related: [{ message: `${owner.s.kind} '${owner.s.name}' is placed here`, range: placed }] } : {}) };
+  if (placed) return { range: placed, related: [{ message: `trap '${trap.name}' (no \`${c.meets}\` written: ${c.meets === 'centre' ? 'its centre is the origin' : 'its region comes from the sources'})`, range: trap.nameRange }] };
+  return { range: trap.nameRange };
+}
+
+/** The setting that places part j of a source: a wire's `through` or `return`, else its `centre`, else the block's name. */
+function conductorSetting(s: FieldSourceModel, j: number): Range {
+  if (s.kind === 'wire') return (j === 1 ? s.returnThrough?.range : s.through?.range) ?? s.nameRange;
+  return s.centre?.range ?? s.nameRange;
+}
+
 function toProblem(trap: TrapModel, i: TrapIssue): Problem {
   const rule = (PHYSICS_RULES as Record<string, { severity: Problem['severity'] }>)[i.code];
-  return { code: i.code, severity: rule?.severity ?? i.severity, message: `trap '${trap.name}': ${i.message}`, range: rangeFor(trap, i.code) };
+  const place = i.conductor ? onConductorPlace(trap, i.conductor) : { range: rangeFor(trap, i.code) };
+  return { code: i.code, severity: rule?.severity ?? i.severity, message: `trap '${trap.name}': ${i.message}`, ...place };
 }

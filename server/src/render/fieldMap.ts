@@ -1,5 +1,5 @@
 /**
- * The field map: |B| (and the field component along the line) against position along a
+ * The field map: |B| (and one signed field component, fieldMapView.ts) against position along a
  * straight line through the sources, over a side view of the sources drawn at their places on
  * the same horizontal scale — loops as their two cross-section marks (⊙ current towards the
  * reader, ⊗ away), solenoids as their winding sheets, wires as dots or lines, blocks as
@@ -46,9 +46,11 @@ export interface FieldMapViewData {
   positionsM: ArrayLike<number>;
   /** |B| at each position, T; NaN where there is no value (on a conductor). */
   magnitudeT: ArrayLike<number>;
-  /** The field component along the line, T (signed), and its name ("B_z"). */
+  /** One field component, T (signed): along the line, or across it where the field runs across (fieldMapView.ts); its name ("B_z"). */
   componentT?: ArrayLike<number>;
   componentName?: string;
+  /** The axis of that component for the CSV column (`B_<axis>_T`): "z", "s" along a slanted line, "across"; default the line's own. */
+  componentAxis?: string;
   fieldUnit: FieldUnit;
   /** 'auto' picks a log axis when |B| spans more than LOG_SPAN (middle 90 % of the samples). */
   scale?: 'linear' | 'log' | 'auto';
@@ -264,10 +266,10 @@ function shapeSvg(sh: FieldMapShape, x: (s: number) => number, ty: (t: number) =
   }
 }
 
-/** The numbers behind the field map (docs/csv.md): position along the line, |B| and the component along it, SI. */
+/** The numbers behind the field map (docs/csv.md): position along the line, |B| and the signed component drawn, SI. */
 export function fieldMapCsv(d: FieldMapViewData, about: [string, string | undefined][]): string {
   const along = d.alongName === 's' ? 's' : d.alongName;
-  const header = [`${along}_m`, 'B_abs_T', ...(d.componentT ? [`B_${along}_T`] : [])];
+  const header = [`${along}_m`, 'B_abs_T', ...(d.componentT ? [`B_${d.componentAxis ?? along}_T`] : [])];
   const body: string[][] = [];
   for (let k = 0; k < d.positionsM.length; k++) {
     body.push([csvNumber(d.positionsM[k]), csvNumber(d.magnitudeT[k]), ...(d.componentT ? [csvNumber(d.componentT[k])] : [])]);

@@ -1,7 +1,10 @@
 /**
  * Field-map view data: which straight line to sample (the common axis of coaxial coils, else
- * the line across the wires, else through the blocks along their magnetisation), |B| and the
- * field component along it, and every source projected into the side view.
+ * the line across the wires, else through the blocks along their magnetisation), |B| and one
+ * signed field component, and every source projected into the side view. The component is the
+ * one along the line, unless that is 0 all along it: a wire's field circles the wire, so on the
+ * line across the wires B lies across the line; there the component across it in the drawing
+ * plane is drawn, which shows the field's sense and where it turns.
  */
 import type { FieldMapShape, FieldMapSource, FieldMapViewData } from '../render/fieldMap';
 import type { FieldUnit } from '../render';
@@ -129,6 +132,16 @@ function snapToAxis(v: Vec3): Vec3 {
   return k >= 0 ? (dot(AXIS[k]!, v) > 0 ? AXIS[k]! : v) : v;
 }
 
+/** The component along the line counts as 0 below this fraction of the largest |B| (round-off is ~1e-15 of it; our choice). */
+const ALONG_IS_ZERO = 1e-9;
+
+/** Largest |x| over the finite samples (the gaps on a conductor count for nothing). */
+function largest(xs: Float64Array): number {
+  let m = 0;
+  for (const x of xs) if (Number.isFinite(x)) m = Math.max(m, Math.abs(x));
+  return m;
+}
+
 function axisName(a: Vec3, fallback: string): string {
   const k = AXIS.findIndex((e) => Math.abs(dot(e, a) - 1) < 1e-12);
   return k >= 0 ? AXIS_NAME[k]! : fallback;
@@ -197,7 +210,8 @@ export function fieldMapView(sources: readonly MapSource[], field: FieldFunction
   const count = options.points ?? FIELD_MAP_POINTS;
   const positionsM = new Float64Array(count);
   const magnitudeT = new Float64Array(count);
-  const componentT = new Float64Array(count);
+  const alongT = new Float64Array(count);
+  const acrossT = new Float64Array(count);
   for (let k = 0; k < count; k++) {
     const sPos = k === count - 1 ? line.to : line.from + ((line.to - line.from) * k) / (count - 1);
     const p = add(line.origin, line.u, sPos);
@@ -205,12 +219,15 @@ export function fieldMapView(sources: readonly MapSource[], field: FieldFunction
     const b = field(p).B;
     const ok = b.every(Number.isFinite);
     magnitudeT[k] = ok ? norm(b) : NaN;
-    componentT[k] = ok ? dot(b, line.u) : NaN;
+    alongT[k] = ok ? dot(b, line.u) : NaN;
+    acrossT[k] = ok ? dot(b, line.v) : NaN;
   }
   let max = 0;
   for (const m of magnitudeT) if (Number.isFinite(m)) max = Math.max(max, m);
   const along = axisName(line.u, 's');
   const acrossName = axisName(line.v, 'across');
+  const showAcross = largest(alongT) <= ALONG_IS_ZERO * max && largest(acrossT) > 0;
+  const componentAxis = showAcross ? acrossName : along;
   const offset = dot(line.origin, line.v);
   const pointText = `(${line.origin.map((c) => Number(c.toPrecision(4))).join(', ')}) m`;
   return {
@@ -220,8 +237,9 @@ export function fieldMapView(sources: readonly MapSource[], field: FieldFunction
     lineText: along === 's' ? `along (${line.u.map((c) => Number(c.toPrecision(4))).join(', ')}) through ${pointText}` : `along ${along} through ${pointText}`,
     positionsM,
     magnitudeT,
-    componentT,
-    componentName: along === 's' ? 'B along the line' : `B_${along}`,
+    componentT: showAcross ? acrossT : alongT,
+    componentName: componentAxis === 's' ? 'B along the line' : componentAxis === 'across' ? 'B across the line' : `B_${componentAxis}`,
+    componentAxis,
     fieldUnit: options.fieldUnit ?? (max < 0.1 ? 'G' : 'T'),
     scale: options.scale ?? 'auto',
     sources: usable.map((s) => ({ name: s.name, kind: s.kind, shapes: sourceShapes(s.parts, line) })),

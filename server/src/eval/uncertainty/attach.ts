@@ -11,6 +11,7 @@ import { fieldKey, setupInputs } from './inputs';
 import { levelUncertainty, termUncertainty } from './levelPass';
 import { lineUncertainty } from './linePass';
 import { resonanceUncertainty } from './resonancePass';
+import { sourceGapProblems } from './sourceGaps';
 import { setUnc } from './uncField';
 
 type Parts = Pick<EvaluationResult, 'levels' | 'terms' | 'beams' | 'lines' | 'resonances' | 'fields' | 'magnets'>;
@@ -47,5 +48,6 @@ export function attachUncertainty(model: SetupModel, parts: Parts, gJOf: GJLooku
     setUnc(m, 'gradient_T_per_m', inp.magnetSens.get(m.name)?.gradient, inp.table);
     setUnc(m, 'length_m', inp.magnetSens.get(m.name)?.length, inp.table);
   }
+  problems.push(...sourceGapProblems(model.magnets, inp));
   return { problems, inputs: [...inp.table.values()].map((i) => ({ id: i.id, label: i.label, value: i.value, u: i.u })) };
 }

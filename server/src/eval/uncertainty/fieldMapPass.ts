@@ -9,12 +9,12 @@
  * of the uniform pass (beamPass.ts: peak slopes, slit image, detector, the 1/T of the speeds).
  */
 import { leverArmM2 } from '../../physics/beam';
-import { CoefficientFlyer, coefficientSlopes, effectiveMomentJT, type CoefficientNudge, type FlightChange } from '../../physics/beam/trajectory';
+import { CoefficientFlyer, coefficientSlopes, effectiveMomentJT, type CoefficientNudge, type CoefficientSlope, type FlightChange } from '../../physics/beam/trajectory';
 import { BOHR_MAGNETON, PLANCK_H } from '../../physics/constants';
 import type { HyperfineLevelSpec } from '../../physics/engine';
 import { sumField } from '../../physics/fields';
 import { combine, hasSensitivity, levelDerivatives, NO_SENSITIVITY, scaled, standardUncertainty, throughParams, type LevelParam, type Sensitivities } from '../../physics/uncertainty';
-import type { Problem } from '../../format/ast';
+import type { Problem, Range } from '../../format/ast';
 import type { BeamModel } from '../../model/types';
 import { beamInputs } from '../beamInput';
 import type { GJLookup } from '../gJLookup';
@@ -34,8 +34,16 @@ export const MAX_FLOWN_INPUTS = 48;
 interface Flown {
   sens: Sensitivities;
   label: string;
+  /** The written value's range, when the input is a number of this file's sources. */
+  range?: Range;
   nudge: CoefficientNudge;
 }
+
+/** Why re-flown coefficients gave no slope, in the user's words (coefficientSlopes.ts). */
+const NO_SLOPE: Record<NonNullable<CoefficientSlope['reason']>, string> = {
+  'flight-failed': "an atom's path, with the input moved by its uncertainty, meets a source or cannot be flown, so the deflections have no first-order uncertainty in it",
+  'not-linear': "the deflections do not change linearly with the input over its uncertainty, even with the step cut twice (the field's shape changes abruptly there), so they have no first-order uncertainty in it",
+};
 
 export function fieldMapBeamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: SetupInputs, problems: Problem[]): void {
   const { level, magnet, driftM } = beam;
@@ -56,19 +64,15 @@ export function fieldMapBeamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJ
   const v = fm.reference_speed_m_per_s;
 
   const flown: Flown[] = [];
-  const unmovable: { label: string; sens: Sensitivities }[] = [];
   for (const s of inp.sourceInputs.get(magnet.name) ?? []) {
     const step = firstStep(s.u, s.scale);
-    const label = inp.table.get(s.id)?.label ?? s.id;
-    if (!s.at(step)) {
-      unmovable.push({ label, sens: s.sens });
-      continue;
-    }
+    // An input that cannot be moved is reported once at its number, for the magnet and its beams (sourceGaps.ts).
+    if (!s.at(step)) continue;
     const at = (t: number): FlightChange => {
       const moved = s.at(t)!;
       return { field: sumField(moved.parts), centre: moved.centre };
     };
-    flown.push({ sens: s.sens, label, nudge: { step, at } });
+    flown.push({ sens: s.sens, label: s.label, ...(s.range ? { range: s.range } : {}), nudge: { step, at } });
   }
   for (const p of SPEC_PARAMS) {
     const sens = params[p];
@@ -85,20 +89,31 @@ export function fieldMapBeamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJ
     // An oven's speeds scale as √T: the reference speed moves with it (the 1/T of ⟨1/v²⟩ is the peak pass's).
     flown.push({ sens: temperature, label: 'oven temperature', nudge: { step: firstStep(standardUncertainty(temperature, inp.table), T), at: (t) => ({ speed: v * Math.sqrt((T + t) / T) }) } });
   }
-  const anything = flown.length > 0 || unmovable.length > 0 || [drift, params.field, ...Object.values(apparatus ?? {})].some((s) => hasSensitivity(s));
+  const anything = flown.length > 0 || [drift, params.field, ...Object.values(apparatus ?? {})].some((s) => hasSensitivity(s));
   if (!anything) return;
 
   // A warning when an uncertainty the file wrote is lost, a note when only built-in data's are (as beamPass.ts).
-  const undefinedFor = (what: readonly { label: string; sens: Sensitivities }[], why: string): void => {
-    const written = what.some((w) => Object.keys(w.sens).some((id) => inp.table.get(id)?.written === true));
+  // An input written in a source gets its own problem at its number; the rest one at the beam's name.
+  const undefinedFor = (what: readonly Flown[], why: string): void => {
+    const severity = (w: readonly Flown[]) => (w.some((x) => Object.keys(x.sens).some((id) => inp.table.get(id)?.written === true)) ? 'warning' : 'info');
+    for (const w of what.filter((x) => x.range)) {
+      problems.push({
+        code: 'uncertainty-undefined',
+        severity: severity([w]),
+        message: `beam '${beam.name}': ${w.label}: ${why}; the uncertainties shown leave it out`,
+        range: w.range!,
+        related: [{ message: `beam '${beam.name}'`, range: beam.nameRange }],
+      });
+    }
+    const rest = what.filter((x) => !x.range);
+    if (rest.length === 0) return;
     problems.push({
       code: 'uncertainty-undefined',
-      severity: written ? 'warning' : 'info',
-      message: `beam '${beam.name}': ${why}: ${what.map((w) => w.label).join(', ')}; the uncertainties shown leave ${what.length > 1 ? 'them' : 'it'} out`,
+      severity: severity(rest),
+      message: `beam '${beam.name}': ${rest.map((w) => w.label).join(', ')}: ${why}; the uncertainties shown leave ${rest.length > 1 ? 'them' : 'it'} out`,
       range: beam.nameRange,
     });
   };
-  if (unmovable.length > 0) undefinedFor(unmovable, 'a source without current or magnetisation has no field to scale, so its strength cannot be propagated');
   if (flown.length > MAX_FLOWN_INPUTS) {
     undefinedFor(
       flown.slice(MAX_FLOWN_INPUTS),
@@ -109,20 +124,18 @@ export function fieldMapBeamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJ
 
   const labels = inputs.input.sublevels.map((s) => s.label);
   const base = { field: map.field, centre: map.centre, magnetLengthM: L1, driftM: driftM.value, massKg: mass, spec, labels, maxFieldT: fm.moment_table_max_T };
-  const flyer = new CoefficientFlyer();
-  const start = flyer.fly(base, v);
-  if (!start.k || start.k.length !== r.sublevels.length) {
-    undefinedFor(flown, 'the flights could not be repeated for the uncertainties');
+  // The beam's own flights at the reference speed are the starting point: k and the exit angles as evaluated.
+  const own = r.sublevels.map((s) => s.field_map);
+  if (own.length !== inputs.input.sublevels.length || own.some((f) => !f)) {
+    undefinedFor(flown, 'the beam has no flights to start the uncertainties from');
     return;
   }
-  const k0 = start.k;
-  const slopes = coefficientSlopes(flyer, base, v, k0, flown.map((f) => f.nudge));
-  const lost = flown.filter((_, j) => !slopes[j]!.dk);
-  if (lost.length > 0) {
-    undefinedFor(
-      lost,
-      "the deflections do not change smoothly with these inputs over their uncertainty (an atom's path meets a source or the field's shape changes abruptly), so they have no first-order uncertainty",
-    );
+  const k0 = Float64Array.from(own, (f) => f!.coefficient_m3_per_s2);
+  const exitAngles = own.map((f) => f!.exit_angle_rad);
+  const slopes = coefficientSlopes(new CoefficientFlyer(), base, v, k0, flown.map((f) => f.nudge));
+  for (const reason of Object.keys(NO_SLOPE) as (keyof typeof NO_SLOPE)[]) {
+    const lost = flown.filter((_, j) => !slopes[j]!.dk && slopes[j]!.reason === reason);
+    if (lost.length > 0) undefinedFor(lost, NO_SLOPE[reason]);
   }
 
   const d = levelDerivatives(spec, magnet.fieldT.value).states;
@@ -134,7 +147,7 @@ export function fieldMapBeamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJ
     }
     const sK = combine([
       ...flown.map((f, j) => [(slopes[j]!.dk?.[i] ?? 0) * mis, f.sens] as const),
-      [start.exitAngles[i]! * v * v * mis, drift],
+      [exitAngles[i]! * v * v * mis, drift],
     ]);
     setUnc(s, 'mean_deflection_m', combine([[1, sK], [-s.mean_deflection_m / T, temperature]]), inp.table);
     return sK;

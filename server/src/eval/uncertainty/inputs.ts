@@ -4,7 +4,7 @@
  */
 import type { SetupModel, LevelModel, Valued } from '../../model/types';
 import { hasSensitivity, NO_SENSITIVITY, type ParamSensitivities, type Sensitivities, type UncertainInput } from '../../physics/uncertainty';
-import { centreFieldSensitivities, magnetSourceInputs, type SourceInput } from './sourceInputs';
+import { centreFieldSensitivities, magnetSourceInputs, type SourceGap, type SourceInput } from './sourceInputs';
 
 export interface SetupInputs {
   table: Map<string, UncertainInput>;
@@ -13,6 +13,8 @@ export interface SetupInputs {
   magnetSens: Map<string, { gradient: Sensitivities; length: Sensitivities }>;
   /** A magnet built from sources: its sources' uncertain inputs, each able to rebuild the field with itself moved. */
   sourceInputs: Map<string, SourceInput[]>;
+  /** A magnet built from sources: the inputs its field and gradient leave out, with why (sourceGaps.ts reports them). */
+  sourceGaps: Map<string, SourceGap[]>;
   /** The level parameters' sensitivities (A, B, C, ζ, g_I and a measured g_J). */
   levelParams: (level: LevelModel) => ParamSensitivities;
   beamDrift: Map<string, Sensitivities>;
@@ -47,6 +49,7 @@ export function setupInputs(model: SetupModel): SetupInputs {
   for (const f of model.fields) fieldSens.set(fieldKey({ kind: 'field', name: f.name }), add(`field:${f.name}`, `field ${f.name}`, f.tesla));
   const magnetSens = new Map<string, { gradient: Sensitivities; length: Sensitivities }>();
   const sourceInputs = new Map<string, SourceInput[]>();
+  const sourceGaps = new Map<string, SourceGap[]>();
   for (const m of model.magnets) {
     fieldSens.set(fieldKey({ kind: 'magnet', name: m.name }), add(`magnet:${m.name}.field`, `field of magnet ${m.name}`, m.fieldT));
     magnetSens.set(m.name, {
@@ -58,6 +61,7 @@ export function setupInputs(model: SetupModel): SetupInputs {
     const inputs = magnetSourceInputs(m, add);
     sourceInputs.set(m.name, inputs);
     const centre = centreFieldSensitivities(inputs);
+    if (centre.gaps.length > 0) sourceGaps.set(m.name, centre.gaps);
     if (hasSensitivity(centre.field)) fieldSens.set(fieldKey({ kind: 'magnet', name: m.name }), centre.field);
     if (hasSensitivity(centre.gradient)) magnetSens.get(m.name)!.gradient = centre.gradient;
   }
@@ -98,6 +102,7 @@ export function setupInputs(model: SetupModel): SetupInputs {
     fieldSens,
     magnetSens,
     sourceInputs,
+    sourceGaps,
     levelParams: (l) => levelParams.get(l) ?? {},
     beamDrift,
     beamGeometry,

@@ -5,6 +5,7 @@
  * and the components of the magnet's `at`. Each comes with the magnet's parts and beam-line
  * centre rebuilt with that input moved, so its effect can be found by flying again.
  */
+import type { Range } from '../../format/ast';
 import { magnitudeAndGradient } from '../../physics/beam/trajectory';
 import { sumField } from '../../physics/fields';
 import type { FieldSourceSpec, Vec3 } from '../../physics/fields/types';
@@ -18,13 +19,25 @@ export interface MovedMagnet {
 
 export interface SourceInput {
   id: string;
+  /** In words, as the input table has it ("current of coil bias"). */
+  label: string;
+  /** The written value's range (where a problem about this input belongs). */
+  range?: Range;
   /** {id: 1}. */
   sens: Sensitivities;
   u: number;
   /** The size the step is measured against (the value, or the magnet's length for a place). */
   scale: number;
-  /** The magnet with this input moved by t; undefined when it cannot be moved (a source with no current). */
+  /** The magnet with this input moved by t; undefined when it cannot be moved (a block whose magnetisation is 0 has no direction to grow in). */
   at(t: number): MovedMagnet | undefined;
+}
+
+/** Why an input has no first-order effect on the magnet's field: it cannot be moved, or moving it puts a conductor on the beam line's centre. */
+export type SourceGapReason = 'cannot-move' | 'onto-conductor';
+
+export interface SourceGap {
+  input: SourceInput;
+  why: SourceGapReason;
 }
 
 /** Registers an input in the setup's table; returns its sensitivities ({} when it is exact). */
@@ -40,7 +53,7 @@ export function magnetSourceInputs(magnet: MagnetModel, add: AddInput): SourceIn
   const push = (id: string, label: string, v: Valued<number> | undefined, scale: number, at: (t: number) => MovedMagnet | undefined): void => {
     const sens = add(id, label, v);
     if (sens === NO_SENSITIVITY || !v?.uncertainty) return;
-    out.push({ id, sens, u: v.uncertainty, scale: scale > 0 ? scale : lengthScale, at });
+    out.push({ id, label, ...(v.range ? { range: v.range } : {}), sens, u: v.uncertainty, scale: scale > 0 ? scale : lengthScale, at });
   };
   const withSource = (s: FieldSourceModel, moved: (parts: FieldSourceSpec[]) => FieldSourceSpec[] | undefined, c: Vec3 = centre): MovedMagnet | undefined => {
     const own = moved(s.parts);
@@ -55,13 +68,15 @@ export function magnetSourceInputs(magnet: MagnetModel, add: AddInput): SourceIn
     if (s.parts.length === 0) continue;
     const id = `source:${s.name}`;
     const strength = (v: Valued<number> | undefined, what: 'current' | 'turns'): void => {
-      push(`${id}.${what}`, `${what} of ${s.kind} ${s.name}`, v, Math.abs(v?.value ?? 0), (t) => {
-        const x = v!.value;
-        if (x === 0) return undefined;
-        return withSource(s, (parts) => parts.map((p) => scaleStrength(p, (x + t) / x)));
+      // A current of 0 cannot be scaled: it is set instead (a step of its uncertainty's size, as the field is linear in it).
+      const x = v?.value ?? 0;
+      push(`${id}.${what}`, `${what} of ${s.kind} ${s.name}`, v, x !== 0 ? Math.abs(x) : v?.uncertainty ?? 0, (t) => {
+        if (x !== 0) return withSource(s, (parts) => parts.map((p) => scaleStrength(p, (x + t) / x)));
+        return what === 'current' ? withSource(s, () => partsAtCurrent(s, t)) : undefined;
       });
     };
     strength(s.currentA, 'current');
+    // Turns are never 0 (the reader asks for a positive count); with no current they change nothing, exactly.
     strength(s.turns, 'turns');
     push(`${id}.radius`, `radius of ${s.kind} ${s.name}`, s.radiusM, s.radiusM?.value ?? 0, (t) =>
       withSource(s, (parts) => parts.map((p) => (p.kind === 'loop' || p.kind === 'solenoid' ? { ...p, radiusM: p.radiusM + t } : p))),
@@ -100,8 +115,25 @@ export function firstStep(u: number, scale: number): number {
   return Math.min(Math.max(u, 1e-4 * s), 1e-2 * s);
 }
 
-/** Sensitivities of |B| and ∂|B|/∂z at the beam line's centre to the sources' inputs (central differences of the exact field). */
-export function centreFieldSensitivities(inputs: readonly SourceInput[]): { field: Sensitivities; gradient: Sensitivities } {
+/**
+ * The parts of a coil, solenoid or wire carrying current `I`, with the signs its builder gives
+ * them (a pair's second loop reversed for `sense = opposite`, a wire's return carrying −I).
+ */
+export function partsAtCurrent(s: FieldSourceModel, I: number): FieldSourceSpec[] {
+  const turns = s.turns?.value ?? 1;
+  const opposite = s.kind === 'coil' && s.sense?.value === 'opposite';
+  return s.parts.map((p, j) => {
+    if (p.kind === 'wire') return { ...p, currentA: j === 0 ? I : -I };
+    if (p.kind === 'loop' || p.kind === 'solenoid') return { ...p, ampereTurns: turns * I * (opposite && j === 1 ? -1 : 1) };
+    return p;
+  });
+}
+
+/**
+ * Sensitivities of |B| and ∂|B|/∂z at the beam line's centre to the sources' inputs (central
+ * differences of the exact field), and the inputs left out, with why (the caller says so).
+ */
+export function centreFieldSensitivities(inputs: readonly SourceInput[]): { field: Sensitivities; gradient: Sensitivities; gaps: SourceGap[] } {
   const m = new Float64Array(4);
   const at = (moved: MovedMagnet): [number, number] => {
     const sample = sumField(moved.parts)(moved.centre);
@@ -112,18 +144,25 @@ export function centreFieldSensitivities(inputs: readonly SourceInput[]): { fiel
   };
   const field: [number, Sensitivities][] = [];
   const gradient: [number, Sensitivities][] = [];
+  const gaps: SourceGap[] = [];
   for (const input of inputs) {
     const h = firstStep(input.u, input.scale);
     const plus = input.at(h);
     const minus = input.at(-h);
-    if (!plus || !minus) continue;
+    if (!plus || !minus) {
+      gaps.push({ input, why: 'cannot-move' });
+      continue;
+    }
     const [bp, gp] = at(plus);
     const [bm, gm] = at(minus);
-    if (![bp, gp, bm, gm].every(Number.isFinite)) continue;
+    if (![bp, gp, bm, gm].every(Number.isFinite)) {
+      gaps.push({ input, why: 'onto-conductor' });
+      continue;
+    }
     field.push([(bp - bm) / (2 * h), input.sens]);
     gradient.push([(gp - gm) / (2 * h), input.sens]);
   }
-  return { field: combine(field), gradient: combine(gradient) };
+  return { field: combine(field), gradient: combine(gradient), gaps };
 }
 
 function scaleStrength(p: FieldSourceSpec, f: number): FieldSourceSpec {

@@ -22,30 +22,28 @@ export function onWinding(rho: number, z: number, radius: number, length: number
   return Math.abs(rho - radius) <= tol && Math.abs(z) <= length / 2 + tol;
 }
 
-/** The issue for a point on (or, where the field overflows, next to) a part's conductor. */
-export function onSourceIssue(kind: FieldSourceSpec['kind'], partIndex?: number): FieldIssue {
-  switch (kind) {
-    case 'loop':
-      return issue('warning', 'source-point-on-loop', 'The point lies on the wire of a loop, where a thin loop has no field; that loop is left out there.', partIndex);
-    case 'solenoid':
-      return issue('warning', 'source-point-on-winding', 'The point lies on the winding of a solenoid, where the field jumps; that solenoid is left out there.', partIndex);
-    case 'wire':
-      return issue('warning', 'source-point-on-wire', 'The point lies on a wire, where a thin wire has no field; that wire is left out there.', partIndex);
-    case 'slab':
-      return issue('warning', 'source-point-on-block', 'The point lies on the surface of a magnetised block, where the field jumps; that block is left out there.', partIndex);
-  }
+/** One entry of the table below: the issue, its message made from the conductor in words, why the model has no field there, and what is left out. */
+function entry(made: (message: string) => FieldIssue, conductor: string, why: string, leftOut: string): { issue: FieldIssue; conductor: string } {
+  return { issue: made(`The point lies on ${conductor}, where ${why}; ${leftOut} is left out there.`), conductor };
 }
 
-const CONDUCTOR_BY_CODE: Record<string, string> = {
-  'source-point-on-loop': 'the wire of a loop',
-  'source-point-on-winding': 'the winding of a solenoid',
-  'source-point-on-wire': 'a wire',
-  'source-point-on-block': 'the surface of a magnetised block',
+/** Per kind of part, the one table of on-conductor findings (the issue makers keep their codes literal for the rule catalogue's scan). */
+const ON_SOURCE: Record<FieldSourceSpec['kind'], { issue: FieldIssue; conductor: string }> = {
+  loop: entry((m) => issue('warning', 'source-point-on-loop', m), 'the wire of a loop', 'a thin loop has no field', 'that loop'),
+  solenoid: entry((m) => issue('warning', 'source-point-on-winding', m), 'the winding of a solenoid', 'the field jumps', 'that solenoid'),
+  wire: entry((m) => issue('warning', 'source-point-on-wire', m), 'a wire', 'a thin wire has no field', 'that wire'),
+  slab: entry((m) => issue('warning', 'source-point-on-block', m), 'the surface of a magnetised block', 'the field jumps', 'that block'),
 };
+
+/** The issue for a point on (or, where the field overflows, next to) a part's conductor. */
+export function onSourceIssue(kind: FieldSourceSpec['kind'], partIndex?: number): FieldIssue {
+  const { severity, code, message } = ON_SOURCE[kind].issue;
+  return issue(severity, code, message, partIndex);
+}
 
 /** The conductor an on-source issue is about, in words ("a wire"), for other layers' messages. */
 export function conductorOf(i: FieldIssue): string {
-  return CONDUCTOR_BY_CODE[i.code] ?? 'a conductor';
+  return Object.values(ON_SOURCE).find((t) => t.issue.code === i.code)?.conductor ?? 'a conductor';
 }
 
 export function pointOnSource(spec: FieldSourceSpec, point: Vec3, partIndex?: number): FieldIssue | undefined {

@@ -68,7 +68,8 @@ function emptySummary(issues: TrapIssue[], survey?: FieldSurvey): TrapSummary {
 /** A trap point on a conductor: the thin-conductor field has no value there, so no trap is computed. */
 function onConductorIssue(at: 'centre' | 'inside', on: FieldIssue): TrapIssue {
   const where = at === 'centre' ? `The trap's centre lies on ${conductorOf(on)} of its sources` : `The trap region meets ${conductorOf(on)} of its sources`;
-  return issue('error', 'trap-on-conductor', `${where}, where the field has no value: no trap is computed. ${at === 'centre' ? 'Move the centre or the source.' : 'Make the region smaller or move the source.'}`);
+  const found = issue('error', 'trap-on-conductor', `${where}, where the field has no value: no trap is computed. ${at === 'centre' ? 'Move the centre or the source.' : 'Make the region smaller or move the source.'}`);
+  return { ...found, conductor: { meets: at === 'centre' ? 'centre' : 'region', ...(on.partIndex !== undefined ? { partIndex: on.partIndex } : {}) } };
 }
 
 export function summariseTrap(input: TrapInput): TrapSummary {

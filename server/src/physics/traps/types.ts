@@ -90,6 +90,8 @@ export interface SublevelTrap {
 export interface TrapIssue extends EngineIssue {
   /** The sublevel the issue is about, when it is about one. */
   sublevel?: string;
+  /** A point on a conductor: what meets it (the centre, or a point of the region) and the part's place in the field's list. */
+  conductor?: { meets: 'centre' | 'region'; partIndex?: number };
 }
 
 export interface TrapSummary {

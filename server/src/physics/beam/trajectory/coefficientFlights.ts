@@ -4,12 +4,13 @@
  * source scaled in a profile fit). The pattern reads only the coefficients at the reference
  * speed (fieldMapPattern.ts), so these re-fly that one speed per sublevel and reuse the moment
  * table while the level is unchanged; the table is widened (and the flights repeated) when an
- * atom strays beyond it, as fieldMapBeam.ts does.
+ * atom strays beyond it, by the loop fieldMapBeam.ts uses (widenedTable.ts).
  */
 import type { LevelSpec } from '../../engine';
 import type { FieldMapInput } from './fieldMapBeam';
 import { flySublevel } from './flight';
 import { sublevelCurves, type SublevelCurves } from './sublevelCurves';
+import { BEYOND_TABLE, flyWideningTable } from './widenedTable';
 
 /** A field-map beam's own flight set-up (fieldMapBeam.ts), with the moment table's field range. */
 export type CoefficientSetup = Pick<FieldMapInput, 'field' | 'centre' | 'magnetLengthM' | 'driftM' | 'massKg' | 'spec' | 'labels' | 'options'> & {
@@ -22,53 +23,46 @@ export interface CoefficientFlights {
   k: Float64Array | null;
   /** dz/dx after the magnet, rad (∂k/∂drift = angle · v²). */
   exitAngles: Float64Array;
-  flights: number;
 }
 
 /** Keeps one moment table per level spec (by identity) so re-flights with the same level reuse it. */
 export class CoefficientFlyer {
   private tables = new Map<LevelSpec, SublevelCurves>();
-  /** Flights flown so far (the cost of what used this flyer). */
+  /** Flights flown so far (the cost of what used this flyer; the fit bench prints it). */
   flights = 0;
 
   fly(setup: CoefficientSetup, speed: number): CoefficientFlights {
-    let maxT = setup.maxFieldT;
     const exitAngles = new Float64Array(setup.labels.length);
-    for (let attempt = 0; attempt < 3; attempt++) {
-      const curves = this.curves(setup.spec, maxT);
-      if (!curves) return { k: null, exitAngles, flights: 0 };
-      const k = new Float64Array(setup.labels.length);
-      let beyond = false;
-      let failed = false;
-      let flown = 0;
-      const flightSetup = { field: setup.field, centre: setup.centre, magnetLengthM: setup.magnetLengthM, driftM: setup.driftM, massKg: setup.massKg, curves };
-      for (let i = 0; i < setup.labels.length && !beyond && !failed; i++) {
-        const state = curves.labels.findIndex((l) => l.low === setup.labels[i]);
-        if (state < 0) failed = true;
-        else {
-          const f = flySublevel(flightSetup, state, speed, setup.options);
-          flown++;
-          if (f.issues.some((x) => x.code === 'trajectory-field-beyond-table')) beyond = true;
-          else if (!f.ok) failed = true;
-          k[i] = f.detector.zM * speed * speed;
-          exitAngles[i] = f.exit.angleZ;
-        }
-      }
-      this.flights += flown;
-      if (beyond) {
-        maxT *= 4;
-        continue;
-      }
-      return { k: failed ? null : k, exitAngles, flights: flown };
-    }
-    return { k: null, exitAngles, flights: 0 };
+    const flown = flyWideningTable(
+      setup.maxFieldT,
+      (maxT) => ({ ...this.curves(setup.spec, maxT), issues: [] }),
+      (curves) => this.flyAt(setup, curves, speed, exitAngles),
+    );
+    return { k: flown.kind === 'flown' ? flown.value : null, exitAngles };
   }
 
-  private curves(spec: LevelSpec, maxT: number): SublevelCurves | undefined {
+  /** Every sublevel at one speed: k, or null when a flight failed, or BEYOND_TABLE. */
+  private flyAt(setup: CoefficientSetup, curves: SublevelCurves, speed: number, exitAngles: Float64Array): Float64Array | null | typeof BEYOND_TABLE {
+    const k = new Float64Array(setup.labels.length);
+    const flightSetup = { field: setup.field, centre: setup.centre, magnetLengthM: setup.magnetLengthM, driftM: setup.driftM, massKg: setup.massKg, curves };
+    for (let i = 0; i < setup.labels.length; i++) {
+      const state = curves.labels.findIndex((l) => l.low === setup.labels[i]);
+      if (state < 0) return null;
+      const f = flySublevel(flightSetup, state, speed, setup.options);
+      this.flights++;
+      if (f.issues.some((x) => x.code === 'trajectory-field-beyond-table')) return BEYOND_TABLE;
+      if (!f.ok) return null;
+      k[i] = f.detector.zM * speed * speed;
+      exitAngles[i] = f.exit.angleZ;
+    }
+    return k;
+  }
+
+  private curves(spec: LevelSpec, maxT: number): { curves?: SublevelCurves } {
     const known = this.tables.get(spec);
-    if (known && known.maxFieldT >= maxT) return known;
+    if (known && known.maxFieldT >= maxT) return { curves: known };
     const built = sublevelCurves(spec, maxT).curves;
     if (built) this.tables.set(spec, built);
-    return built;
+    return built ? { curves: built } : {};
   }
 }

@@ -13,6 +13,7 @@ import { surveyBeamLine, type BeamLineSurvey } from './beamLineSurvey';
 import { ADIABATIC_LIMIT, flySublevel, type Flight, type FlightOptions } from './flight';
 import { cm, tesla } from './messageText';
 import { sublevelCurves, type SublevelCurves } from './sublevelCurves';
+import { BEYOND_TABLE, flyWideningTable } from './widenedTable';
 
 export interface FieldMapInput {
   field: FieldFunction;
@@ -84,35 +85,29 @@ export function fieldMapBeam(input: FieldMapInput): FieldMapBeam {
     issues: [...survey.issues],
   };
   if (survey.issues.some((i) => i.severity === 'error')) return out;
-  let maxT = Math.max(survey.maxFieldT * TABLE_MARGIN, 1e-6);
-  // An atom deflected far from the line can meet stronger fields: widen the table and fly again (twice at most).
-  for (let attempt = 0; attempt < 3; attempt++) {
-    const built = sublevelCurves(input.spec, maxT);
-    if (!built.curves) {
-      out.issues.push(...built.issues);
-      return out;
-    }
-    const flown = flyAll(input, built.curves);
-    if (flown === 'beyond') {
-      maxT *= 4;
-      continue;
-    }
-    out.issues.push(...built.issues);
-    out.tableMaxFieldT = maxT;
-    out.tableErrorJT = built.curves.interpolationErrorJT;
-    return finish(out, flown, input);
+  // An atom deflected far from the line can meet stronger fields: the table is widened and the atoms flown again.
+  const flown = flyWideningTable(Math.max(survey.maxFieldT * TABLE_MARGIN, 1e-6), (maxT) => sublevelCurves(input.spec, maxT), (curves) => flyAll(input, curves));
+  if (flown.kind === 'no-table') {
+    out.issues.push(...flown.issues);
+    return out;
   }
-  out.issues.push(beamIssue('error', 'trajectory-field-beyond-table', `The field along the atoms' paths exceeds ${maxT.toPrecision(3)} T; they run far from the beam line into strong fields near a source.`));
+  if (flown.kind === 'flown') {
+    out.issues.push(...flown.issues);
+    out.tableMaxFieldT = flown.maxT;
+    out.tableErrorJT = flown.curves.interpolationErrorJT;
+    return finish(out, flown.value, input);
+  }
+  out.issues.push(beamIssue('error', 'trajectory-field-beyond-table', `The field along the atoms' paths exceeds ${flown.maxT.toPrecision(3)} T; they run far from the beam line into strong fields near a source.`));
   return out;
 }
 
-function flyAll(input: FieldMapInput, curves: SublevelCurves): FieldMapSublevel[] | 'beyond' {
+function flyAll(input: FieldMapInput, curves: SublevelCurves): FieldMapSublevel[] | typeof BEYOND_TABLE {
   const setup = { field: input.field, centre: input.centre, magnetLengthM: input.magnetLengthM, driftM: input.driftM, massKg: input.massKg, curves };
   const result: FieldMapSublevel[] = [];
   for (const label of input.labels) {
     const state = curves.labels.findIndex((l) => l.low === label);
     const flights = input.speeds.map((speed) => ({ speed, flight: state >= 0 ? flySublevel(setup, state, speed, input.options) : missing(label) }));
-    if (flights.some((f) => f.flight.issues.some((i) => i.code === 'trajectory-field-beyond-table'))) return 'beyond';
+    if (flights.some((f) => f.flight.issues.some((i) => i.code === 'trajectory-field-beyond-table'))) return BEYOND_TABLE;
     const k = flights.map((f) => f.flight.detector.zM * f.speed * f.speed);
     const k0 = k[0] ?? 0;
     const spread = k0 !== 0 ? Math.max(0, ...k.slice(1).map((x) => Math.abs(x / k0 - 1))) : 0;

@@ -1,0 +1,92 @@
+/**
+ * Nothing silent in the sources' uncertainties (eval/uncertainty/sourceInputs.ts, sourceGaps.ts):
+ * a current of 0 is set rather than scaled (so its uncertainty reaches the magnet's field, checked
+ * against the on-axis field of a loop, B = μ0 N I R²/(2 (R² + z²)^(3/2)), textbook Biot–Savart);
+ * an input that still cannot be moved, or whose nudge puts a conductor on the beam line, gets
+ * `uncertainty-undefined` at the number the file wrote, in `check`, `eval` text and JSON.
+ */
+import { mkdtempSync, writeFileSync } from 'fs';
+import { tmpdir } from 'os';
+import path from 'path';
+import { describe, expect, it } from 'vitest';
+import { analyze } from '../../server/src/eval/analyze';
+import { partsAtCurrent } from '../../server/src/eval/uncertainty/sourceInputs';
+import { VACUUM_PERMEABILITY } from '../../server/src/physics/constants';
+import { cli } from '../cli/runCli';
+
+/** A one-loop coil that sets the field at the origin and a second source under test (invented numbers). */
+const setup = (other: string, otherName: string) => `coil bias
+  radius  = 10 cm
+  turns   = 100
+  current = 300 A
+${other}
+magnet m
+  sources = bias, ${otherName}
+  length  = 8 cm
+`;
+
+const lineOf = (text: string, line: number) => text.split('\n')[line];
+
+describe('a source input that cannot be scaled or moved', () => {
+  it('a current of 0(5) A: set instead of scaled, so the magnet field carries 0.5 A × the loop’s on-axis field per ampere (to 1e-9)', () => {
+    const text = setup('coil idle\n  radius  = 5 cm\n  turns   = 10\n  current = 0.0(5) A\n  centre  = 0, 0, -3 cm', 'idle');
+    const a = analyze(text);
+    expect(a.problems.filter((p) => p.code === 'uncertainty-undefined')).toEqual([]);
+    const R = 0.05, z = 0.03;
+    const perAmpere = (VACUUM_PERMEABILITY * 10 * R * R) / (2 * (R * R + z * z) ** 1.5);
+    // the bias field is along +z at the origin, so |B| grows with the idle coil's B_z
+    expect(Math.abs(a.result!.magnets[0]!.field_T_unc! / (0.5 * perAmpere) - 1)).toBeLessThan(1e-9);
+  });
+
+  it('partsAtCurrent gives back the builders’ parts at the written current (a reversed pair, a solenoid, a wire with its return)', () => {
+    const text = `coil pair
+  radius  = 4 cm
+  turns   = 20
+  current = -3 A
+  spacing = 8 cm
+  sense   = opposite
+solenoid long
+  radius  = 1 cm
+  length  = 20 cm
+  turns   = 400
+  current = 2 A
+wire rails
+  current   = 7 A
+  through   = 0, 2, 0 mm
+  direction = x
+  return    = 0, -2, 0 mm
+`;
+    for (const s of analyze(text).model!.sources) {
+      expect(s.parts.length).toBeGreaterThan(0);
+      expect(partsAtCurrent(s, s.currentA!.value)).toEqual(s.parts);
+    }
+  });
+
+  it('a block magnetised 0.0(1) T: a warning at that number, in check, eval text and eval JSON', () => {
+    const text = setup('slab block\n  size          = 2, 2, 1 cm\n  magnetisation = 0.0(1) T along z\n  centre        = 0, 0, -3 cm', 'block');
+    const p = analyze(text).problems.filter((x) => x.code === 'uncertainty-undefined');
+    expect(p.map((x) => x.severity)).toEqual(['warning']);
+    expect(lineOf(text, p[0]!.range.start.line)).toBe('  magnetisation = 0.0(1) T along z');
+    expect(p[0]!.message).toBe(
+      "magnetisation of slab block: it cannot be moved by its uncertainty (a block with no magnetisation has no direction for it to grow in); the uncertainties of magnet 'm' (field and gradient at the beam line) and of the beams through it leave it out",
+    );
+    const dir = mkdtempSync(path.join(tmpdir(), 'sublevel-gap-'));
+    const file = path.join(dir, 'gap.sublevel');
+    writeFileSync(file, text);
+    expect(cli('check', file).out).toContain('uncertainty-undefined');
+    expect(cli('eval', file).out).toContain('magnetisation of slab block: it cannot be moved');
+    const json = JSON.parse(cli('eval', file, '--format', 'json').out);
+    expect(JSON.stringify(json)).toContain('magnetisation of slab block: it cannot be moved');
+  });
+
+  it('a wire whose nudge puts it on the beam line’s centre: a warning at its `through`', () => {
+    // The wire crosses 10 µm under the centre; its place is uncertain by 10 µm, the step taken (within 1e-4…1e-2 of 8 cm).
+    const text = setup('wire w\n  current   = 5 A\n  through   = 0, 0, -0.010(10) mm\n  direction = y', 'w');
+    const a = analyze(text);
+    const p = a.problems.filter((x) => x.code === 'uncertainty-undefined');
+    expect(p.length).toBe(1);
+    expect(lineOf(text, p[0]!.range.start.line)).toBe('  through   = 0, 0, -0.010(10) mm');
+    expect(p[0]!.message).toMatch(/^line of wire w z: moving it by its uncertainty puts a conductor on the beam line's centre/);
+    expect(JSON.stringify(a.result)).not.toMatch(/NaN|Infinity/);
+  });
+});
