@@ -21,7 +21,7 @@ import { FALLING_DASH, paletteFor, type Palette } from './palette';
 import { arrayValues, finiteExtent, slopeAt, valueAt } from './sampled';
 import { slopeRuns, trendOf, type Trend } from './slopeRuns';
 import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
-import { fieldDisplayUnit, formatIn, formatSI, frequencyUnit } from './units';
+import { fieldDisplayUnit, figureMinus, formatIn, formatSI, frequencyUnit } from './units';
 import type { LevelCurve, LevelsViewData, RenderTheme } from './viewData';
 
 const LABEL_SPACING = 13;
@@ -79,7 +79,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const runs = d.curves.map((c) => slopeRuns(fields, c.energyHz));
 
   // Every named field inside the sweep, the chosen one first; labels stack in rows above the plot.
-  const marks = fieldMarksIn(d.fieldUnit, inSweep, d.markerT, d.markerLabel, d.fieldMarks);
+  const marks = fieldMarksIn(d.fieldUnit, inSweep, d.markerT, d.markerLabel, d.fieldMarks, d.markerText);
 
   const legend: LegendEntry[] = [];
   const present = new Set(runs.flatMap((r) => r.map((x) => x.trend)));
@@ -337,11 +337,12 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
     `against field B from ${formatIn(fieldExtent[0], fUnit)} to ${formatIn(fieldExtent[1], fUnit)}`,
     `${d.curves.length} states`,
   ];
-  if (marker !== undefined) descParts.push(`chosen field ${formatIn(marker, fUnit)}`);
-  else if (d.markerT !== undefined) descParts.push(`chosen field ${formatIn(d.markerT, fUnit)} lies outside the sweep`);
+  const chosenText = d.markerText !== undefined ? figureMinus(d.markerText) : d.markerT !== undefined ? formatIn(d.markerT, fUnit) : '';
+  if (marker !== undefined) descParts.push(`chosen field ${chosenText}`);
+  else if (d.markerT !== undefined) descParts.push(`chosen field ${chosenText} lies outside the sweep`);
   if (marks.length > 0) descParts.push(`named fields marked: ${marks.map((m) => m.text).join(', ')}`);
   const outside = (d.fieldMarks ?? []).filter((m) => !inSweep(m.fieldT));
-  if (outside.length > 0) descParts.push(`outside the sweep: ${outside.map((m) => `${m.label} ${formatIn(m.fieldT, fUnit)}`).join(', ')}`);
+  if (outside.length > 0) descParts.push(`outside the sweep: ${outside.map((m) => `${m.label} ${m.valueText !== undefined ? figureMinus(m.valueText) : formatIn(m.fieldT, fUnit)}`).join(', ')}`);
 
   return svgDocument(
     {

@@ -1,0 +1,58 @@
+/**
+ * A named field echoes the unit the file wrote on every figure that marks it: a magnetometer's
+ * `1 nT` reads `1 nT` on a tesla axis, not `1e-9 T`; a `250 mT` field reads `250 mT`. Fields the
+ * evaluation found (df/dB = 0) stay in the axis unit. Setups are invented for the test.
+ */
+import { describe, expect, it } from 'vitest';
+import { analyze } from '../../server/src/eval/analyze';
+import { diagramFor } from '../../server/src/views/diagram';
+import { all, parseSvg, textOf } from './svgTree';
+
+const setup = `species Sr87
+  level p2: 5s 5p 3P°2
+field tiny = 1 nT
+field mid  = 250 mT
+field huge = 30 T
+field lab  = 0.5 G
+`;
+
+function markTexts(svg: string): string[] {
+  return all(parseSvg(svg), (n) => n.attrs['data-kind'] === 'marker').map((m) => textOf(all(m, (n) => n.name === 'text')[0]!));
+}
+
+function descOf(svg: string): string {
+  return textOf(parseSvg(svg).children.find((c) => c.name === 'desc')!);
+}
+
+describe('named fields on figures keep the unit the file wrote', () => {
+  it('levels view on a tesla axis', () => {
+    const d = diagramFor(analyze(setup), { view: 'levels', theme: 'export', toT: 31, fieldUnit: 'T' });
+    if (!d.ok) throw new Error(d.message);
+    expect(markTexts(d.svg)).toEqual(['field tiny · 1 nT', 'field mid · 250 mT', 'field huge · 30 T', 'field lab · 0.5 G']);
+    expect(descOf(d.svg)).toContain('chosen field 1 nT');
+  });
+
+  it('levels view: a field outside the range is named in its own unit too', () => {
+    const d = diagramFor(analyze(setup), { view: 'levels', theme: 'export', toT: 1, fieldUnit: 'mT' });
+    if (!d.ok) throw new Error(d.message);
+    expect(descOf(d.svg)).toContain('outside the sweep: field huge 30 T');
+    expect(markTexts(d.svg)).toContain('field mid · 250 mT');
+  });
+
+  it('resonance view: named fields echo, found fields use the axis unit', () => {
+    const text = `species Rb87
+  level ground: 5s 2S1/2
+field trap = 323 µT
+resonance clock
+  level = ground
+  lower = 1 -1
+  upper = 2 +1
+  range = 0 G, 10 G
+`;
+    const d = diagramFor(analyze(text), { view: 'resonance', theme: 'export' });
+    if (!d.ok) throw new Error(d.message);
+    const marks = all(parseSvg(d.svg), (n) => n.name === 'text').map((n) => textOf(n));
+    expect(marks).toContain('field trap · 323 µT');
+    expect(marks.some((t) => /^df\/dB = 0 · 3\.2\d* G$/.test(t))).toBe(true);
+  });
+});
