@@ -56,3 +56,16 @@ resonance clock
     expect(marks.some((t) => /^df\/dB = 0 · 3\.2\d* G$/.test(t))).toBe(true);
   });
 });
+
+describe('the resonance field axis follows the unit of the range', () => {
+  it.each([
+    ['0 mT, 5 mT', 'mT'],
+    ['0 G, 50 G', 'G'],
+    ['0 T, 0.005 T', 'G'],
+  ])('range = %s draws B in %s', (range, unit) => {
+    const text = `species Rb87\n  level ground: 5s 2S1/2\nresonance clock\n  level = ground\n  lower = 1 -1\n  upper = 2 +1\n  range = ${range}\n`;
+    const d = diagramFor(analyze(text), { view: 'resonance', theme: 'export' });
+    if (!d.ok) throw new Error(d.message);
+    expect(parseSvg(d.svg).attrs['data-x-unit']).toBe(unit);
+  });
+});

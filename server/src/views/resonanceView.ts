@@ -58,7 +58,7 @@ export function resonanceView(
   const sign = Math.sign(frequencyHz[0]!) || 1;
   return {
     title: `resonance ${r.name}: ${level.species.name} ${level.name}, ${lower.low.text} → ${upper.low.text}`,
-    fieldUnit: unitFor(toT),
+    fieldUnit: unitFor(toT, r.rangeT.toUnit ?? r.rangeT.fromUnit),
     fieldsT: sweep.fieldsT,
     frequencyHz,
     slopeHzPerT,
