@@ -69,3 +69,19 @@ describe('the resonance field axis follows the unit of the range', () => {
     expect(parseSvg(d.svg).attrs['data-x-unit']).toBe(unit);
   });
 });
+
+describe('the resonance frequency axis', () => {
+  const rf = (lower: string, upper: string): string[] => {
+    // K40 ground (invented range): a Δm = 1 pair inside F = 9/2 starts at 0 Hz; a ΔF pair near 1.3 GHz.
+    const text = `species K40\n  level ground: 4s 2S1/2\nresonance r\n  level = ground\n  lower = ${lower}\n  upper = ${upper}\n  range = 0 mT, 60 mT\n`;
+    const d = diagramFor(analyze(text), { view: 'resonance', theme: 'export' });
+    if (!d.ok) throw new Error(d.message);
+    return all(parseSvg(d.svg), (n) => n.attrs.class === 'sl-axis-title').map((n) => textOf(n));
+  };
+  it('is plain f when the transition starts at zero frequency (no "f − 0 Hz")', () => {
+    expect(rf('9/2 -9/2', '9/2 -7/2')).toContain('f (MHz)');
+  });
+  it('counts from a round reference when the frequency is far from zero', () => {
+    expect(rf('9/2 1/2', '7/2 1/2').some((t) => /^f − 1\.\d+ GHz \((GHz|MHz)\)$/.test(t))).toBe(true);
+  });
+});
