@@ -85,3 +85,20 @@ describe('the resonance frequency axis', () => {
     expect(rf('9/2 1/2', '7/2 1/2').some((t) => /^f − 1\.\d+ GHz \((GHz|MHz)\)$/.test(t))).toBe(true);
   });
 });
+
+describe('levels view: the right lane names what the states are at the end of the range', () => {
+  const rightLabels = (toT: number): string[] => {
+    const d = diagramFor(analyze(setup), { view: 'levels', theme: 'export', toT });
+    if (!d.ok) throw new Error(d.message);
+    return all(parseSvg(d.svg), (n) => n.attrs['data-kind'] === 'end-label' && n.attrs['data-side'] === 'high').map((n) => n.attrs['data-label']!);
+  };
+  it('a range ending at 1 µT (weak field, x ≈ 5e-6) names F and m_F on the right too', () => {
+    const labels = rightLabels(1e-6);
+    expect(labels).toEqual(['F=5/2, m_F=-5/2…+5/2', 'F=7/2, m_F=-7/2…+7/2', 'F=9/2, m_F=-9/2…+9/2', 'F=11/2, m_F=-11/2…+11/2', 'F=13/2, m_F=-13/2…+13/2'].reverse());
+  });
+  it('a range ending at 30 T (decoupled) names m_J and m_I', () => {
+    const labels = rightLabels(30);
+    expect(labels.length).toBeGreaterThan(0);
+    expect(labels.every((l) => l.startsWith('m_J='))).toBe(true);
+  });
+});

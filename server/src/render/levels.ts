@@ -103,6 +103,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const box: PlotBox = { left: 0, right: 0, top, bottom: top + plotHeight };
   const y = scaleLinear().domain([e0, e1]).range([box.bottom, box.top]).nice();
 
+  const rightName = (c: LevelCurve): string => (d.endsWeak ? c.lowLabel : c.highLabel);
   const endAnchors = (side: 'low' | 'high'): LabelAnchor[] =>
     d.curves.map((c, index) => {
       const n = Math.min(fields.length, c.energyHz.length);
@@ -112,7 +113,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
       const ok = k >= 0 && k < n;
       // Coincident ends fan out in the order their curves take a little way in, so leaders do not cross.
       const along = Math.min(n - 1, Math.max(0, k + step * Math.max(1, Math.round(n / 25))));
-      return { index, y: ok ? y(c.energyHz[k]) : NaN, tie: y(c.energyHz[along]), label: side === 'low' ? c.lowLabel : c.highLabel };
+      return { index, y: ok ? y(c.energyHz[k]) : NaN, tie: y(c.energyHz[along]), label: side === 'low' ? c.lowLabel : rightName(c) };
     });
   const lowAnchors = endAnchors('low');
   const highAnchors = endAnchors('high');
@@ -210,7 +211,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
         const leader = l.members
           .map((m) => `M${px(edge)},${px(m.y)}h${px(dir * 4)}L${px(edge + dir * 10)},${px(l.y)}`)
           .join('');
-        const names = l.members.map((m) => (side === 'low' ? d.curves[m.index].lowLabel : d.curves[m.index].highLabel));
+        const names = l.members.map((m) => (side === 'low' ? d.curves[m.index].lowLabel : rightName(d.curves[m.index])));
         return el(
           'g',
           {

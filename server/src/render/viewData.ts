@@ -49,6 +49,11 @@ export interface LevelsViewData {
   /** Every named field and magnet field of the file, each drawn as a labelled rule when inside the sweep. */
   fieldMarks?: NamedFieldMark[];
   crossings?: LevelCrossing[];
+  /**
+   * The sweep ends in the weak-field (linear) regime: the states there are still |F, m_F⟩, so the
+   * right lane names them by their low-field labels rather than by where they go at high field.
+   */
+  endsWeak?: boolean;
 }
 
 export interface PatternPart {

@@ -63,6 +63,8 @@ export function levelsView(
       energyHz: s.energyHz,
       momentJT: s.momentJT,
     })),
+    // A range that ends in the weak regime (a magnetometer's µT) has no high-field names to give yet.
+    ...(regime(spec, upper).verdict === 'weak field (linear)' ? { endsWeak: true } : {}),
     crossings: sweep.crossings.map((c) => ({
       fieldT: c.fieldT,
       energyHz: c.energyHz,
