@@ -144,4 +144,30 @@ describe('pattern worst cases', () => {
     );
     expect(rows).toEqual(['Peaks: 1 at −6 mm (m_J=-1)', '    2 at 0 mm (m_J=0)']);
   });
+
+  it('says how many states a lone peak holds, so "resolved" is not read as "separated"', () => {
+    // Invented apparatus: a weak gradient leaves nine populated Cs sublevels in one peak.
+    const text = `species Cs133
+  level ground: 6s 2S1/2
+magnet sel
+  field    = 800 G
+  gradient = 25 G/cm
+  length   = 0.12 m
+beam wide
+  level    = ground
+  source   = oven 400 K
+  slits    = 0.05 mm, 30 um apart 60 cm
+  magnet   = sel
+  drift    = 900 mm
+  detector = 20 um
+  populations = 4 4 1, 4 -4 1, 3 0.02
+`;
+    const analysis = analyze(text);
+    expect(analysis.result!.beams[0]!.peaks).toHaveLength(1);
+    expect(analysis.result!.beams[0]!.peaks[0]!.members).toHaveLength(9);
+    const d = diagramFor(analysis, { view: 'pattern', theme: 'export' });
+    if (!d.ok) throw new Error(d.message);
+    const verdict = all(parseSvg(d.svg), (n) => n.attrs['data-kind'] === 'verdict')[0]!;
+    expect(verdict.attrs['data-label']).toBe('one peak: all 9 states with atoms land together');
+  });
 });
