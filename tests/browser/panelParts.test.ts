@@ -77,6 +77,10 @@ describe('read-out text', () => {
     expect(pointerValue(root, 400)).toBe('B = 150 mT');
     expect(pointerValue(root, 50)).toBeUndefined();
     expect(pointerValue({ xDomain: 'a,b' }, 10)).toBeUndefined();
+    // A log field axis from 1 µT to 1 T over 0…600: the middle is 1 mT, not 0.5 T.
+    const log = { xDomain: '1e-6,1', xRange: '0,600', xFactor: '1', xName: 'B', xUnit: 'T', xScale: 'log' };
+    expect(pointerValue(log, 300)).toBe('B = 0.001 T');
+    expect(pointerValue(log, 400)).toBe('B = 0.01 T');
   });
 });
 

@@ -1,5 +1,8 @@
 /** `sublevel fit`: the three formats on the example, and a file without fits. */
 import { describe, expect, it } from 'vitest';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { cli } from './runCli';
 
 const FILE = 'examples/fit-rubidium.sublevel';
@@ -20,6 +23,28 @@ describe('sublevel fit', () => {
     expect(r.out).toMatch(/pi_lines line 23 +6834696\.976 kHz +-165\.6 Hz/);
     expect(r.out).toMatch(/sigma_lines line 35 +9651311\.13 kHz/);
     expect(r.out).not.toMatch(/line \d+ +[\d.]+ GHz/);
+  });
+
+  it('text: a point written in another unit than the first reads back in its own unit (MHz, GHz), not the first point’s kHz', () => {
+    // Invented, badly scaled data: units change from point to point.
+    const dir = mkdtempSync(join(tmpdir(), 'sublevel-fit-'));
+    const file = join(dir, 'mixed.sublevel');
+    writeFileSync(
+      file,
+      ['species Rb87', '  level ground: 5s 2S1/2', 'data mixed', '  level = ground', '  lower = 1 0', '  upper = 2 0',
+        '  point = 6834682.6(5) kHz at 2 µT', '  point = 6834.7(2) MHz at 100 G', '  point = 21.1(8) GHz at 1 T',
+        'fit wild', '  data  = mixed', '  free  = g_J, A', '  start = g_J 2, A 3417 MHz', ''].join('\n'),
+    );
+    try {
+      const r = cli('fit', file);
+      expect(r.out).toMatch(/mixed line 7 +6834682\.6 kHz /);
+      expect(r.out).toMatch(/mixed line 8 +6834\.7 MHz /);
+      expect(r.out).toMatch(/mixed line 9 +21\.1 GHz /);
+      const doc = JSON.parse(cli('fit', file, '--format', 'json').out);
+      expect(doc.fits[0].points.map((p: { written_unit?: string }) => p.written_unit)).toEqual([undefined, 'MHz', 'GHz']);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 
   it('json: the sublevel-fit document, version 1', () => {

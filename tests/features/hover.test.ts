@@ -261,6 +261,20 @@ describe('hover on lines and resonances', () => {
     expect(text).not.toContain('strong-field label');
   });
 
+  it('at 1 nT the sublevels of one F level read apart (enough digits for a ~14 Hz splitting on GHz)', () => {
+    // Rb-87 ground at 1 nT (invented field): m_F of F = 2 lie μ_B·B·g_F/h ≈ 7 Hz apart around +2.563 GHz.
+    const { analysis, position } = atCursor('species Rb87\n  level ground: 5s 2S1/2\nfield ti|ny = 1 nT\n');
+    const text = plain(hoverText(hover(analysis, position)));
+    // Both the exact and the linear-formula column (which carries no uncertainty to lengthen it).
+    const rows = [...text.matchAll(/\| F=2, m_F=[+-]?\d \| ([^|]+) \| ([^|]+) \|/g)];
+    expect(rows).toHaveLength(5);
+    for (const col of [1, 2]) {
+      const values = rows.map((m) => m[col]!.trim());
+      expect(new Set(values).size).toBe(5);
+      expect(values.every((t) => /^2\.56300\d+(\(\d+\))? GHz$/.test(t))).toBe(true);
+    }
+  });
+
   it('an intermediate field shows both labels and drops the linear column; thresholds to 3 digits', () => {
     const { analysis, position } = atCursor('species Rb87\n  level ground: 5s 2S1/2\nfield mi|d = 500 G\n');
     const text = plain(hoverText(hover(analysis, position)));

@@ -4,6 +4,15 @@ import { levelsCsv, linesCsv, patternCsv } from '../../server/src/render';
 import { csvCommentLine, sortedStates, stateTableCsv } from '../../server/src/render/csv';
 
 describe('diagram CSV', () => {
+  it('states the field in the comment line without binary noise (50 nT is 5e-8 T, not 5.0000000000000004e-8 T)', () => {
+    const fieldT = 50 * 1e-9; // as the unit table converts `50 nT`
+    expect(fieldT).not.toBe(5e-8);
+    const levels = levelsCsv({ title: 't', fieldUnit: 'G', fieldsT: [0], curves: [], markerT: fieldT, markerLabel: 'field tiny' });
+    expect(levels.split('\n')[0]).toBe('# sublevel levels: field=field tiny 5e-8 T');
+    const lines = linesCsv({ title: 't', components: [], fieldT, fieldName: 'field tiny' });
+    expect(lines.split('\n')[0]).toBe('# sublevel lines: field=field tiny 5e-8 T');
+  });
+
   it('writes a comment line, SI column names, energies then moments, one row per field', () => {
     const csv = levelsCsv(
       {

@@ -5,6 +5,8 @@
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import { patternCsv, renderPattern, type PatternViewData } from '../../server/src/render';
+import { estimateTextWidth } from '../../server/src/render/frame';
+import { peakTableRows } from '../../server/src/render/pattern';
 import { diagramFor } from '../../server/src/views/diagram';
 import { all, byClass, parseSvg, pathPoints, textOf, type Node } from './svgTree';
 import { wideSlitBeam } from '../fixtures/ovenBeam';
@@ -113,5 +115,59 @@ describe('pattern worst cases', () => {
     // The CSV holds the engine's whole grid.
     expect(d.csv.trim().split('\n').length - 2).toBeGreaterThan(peaks.length * 50);
     expect(d.csv.split('\n')[0]).toBe('# sublevel pattern: beam=b; level=Xa.ground; field=magnet sel 0.5 T');
+  });
+
+  it('wraps the peak table between state names, so a peak of many states stays inside the figure', () => {
+    // One broad peak holding nine sublevels of a large-spin ground level (invented heights).
+    const d = broadLowPeaks();
+    const members = [...Array.from({ length: 7 }, (_, k) => `F=3, m_F=${k - 3 > 0 ? '+' : ''}${k - 3}`), 'F=4, m_F=-4', 'F=4, m_F=+4'];
+    d.peaks = [{ positionM: 0, height: 2000, fwhmM: 0.2e-3, members }];
+    d.verdict = { resolved: true, text: 'one peak' };
+    const svg = parseSvg(renderPattern(d, theme));
+    const rows = byClass(svg, 'sl-peak-table')[0].children.map((r) => textOf(r));
+    expect(rows.length).toBe(2);
+    const width = Number(svg.attrs.viewBox.split(' ')[2]);
+    for (const r of rows) expect(16 + estimateTextWidth(r)).toBeLessThanOrEqual(width - 16);
+    // Read together the rows list every state once, in order, and break only between names.
+    expect(rows.join(' ').replace(/\s+/g, ' ')).toBe(`Peaks: 1 at 0 µm (${members.join(', ')})`);
+    expect(rows[0]).toMatch(/,$/);
+    expect(rows[1]).toMatch(/^ {4}F=/);
+  });
+
+  it('starts a new row at a peak rather than inside a short one', () => {
+    const rows = peakTableRows(
+      [
+        { head: '1 at −6 mm', members: ['m_J=-1'] },
+        { head: '2 at 0 mm', members: ['m_J=0'] },
+      ],
+      estimateTextWidth('Peaks: 1 at −6 mm (m_J=-1) · 2 at'),
+    );
+    expect(rows).toEqual(['Peaks: 1 at −6 mm (m_J=-1)', '    2 at 0 mm (m_J=0)']);
+  });
+
+  it('says how many states a lone peak holds, so "resolved" is not read as "separated"', () => {
+    // Invented apparatus: a weak gradient leaves nine populated Cs sublevels in one peak.
+    const text = `species Cs133
+  level ground: 6s 2S1/2
+magnet sel
+  field    = 800 G
+  gradient = 25 G/cm
+  length   = 0.12 m
+beam wide
+  level    = ground
+  source   = oven 400 K
+  slits    = 0.05 mm, 30 um apart 60 cm
+  magnet   = sel
+  drift    = 900 mm
+  detector = 20 um
+  populations = 4 4 1, 4 -4 1, 3 0.02
+`;
+    const analysis = analyze(text);
+    expect(analysis.result!.beams[0]!.peaks).toHaveLength(1);
+    expect(analysis.result!.beams[0]!.peaks[0]!.members).toHaveLength(9);
+    const d = diagramFor(analysis, { view: 'pattern', theme: 'export' });
+    if (!d.ok) throw new Error(d.message);
+    const verdict = all(parseSvg(d.svg), (n) => n.attrs['data-kind'] === 'verdict')[0]!;
+    expect(verdict.attrs['data-label']).toBe('one peak: all 9 states with atoms land together');
   });
 });

@@ -91,7 +91,10 @@ export function pointerValue(root: DataRecord, userX: number): string | undefine
   if (domain.length !== 2 || range.length !== 2 || ![...domain, ...range, factor].every(Number.isFinite)) return undefined;
   const [r0, r1] = range;
   if (r1 === r0 || userX < Math.min(r0, r1) || userX > Math.max(r0, r1)) return undefined;
-  const v = domain[0] + ((userX - r0) / (r1 - r0)) * (domain[1] - domain[0]);
+  const t = (userX - r0) / (r1 - r0);
+  // A logarithmic axis (data-x-scale="log", the residuals figure over decades of field) maps position to the logarithm.
+  const log = root.xScale === 'log' && domain[0] > 0 && domain[1] > 0;
+  const v = log ? domain[0] * (domain[1] / domain[0]) ** t : domain[0] + t * (domain[1] - domain[0]);
   const shown = Number((v / factor).toPrecision(4)).toString().replace('-', '−');
   return `${root.xName ?? 'x'} = ${shown} ${root.xUnit ?? ''}`.trim();
 }

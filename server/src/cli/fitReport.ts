@@ -35,7 +35,7 @@ export function fitReportLines(file: string, fits: readonly FitResult[]): string
     for (const p of f.points.slice(0, 200)) {
       const where = p.csv_line !== undefined ? `${p.data} csv line ${p.csv_line}` : `${p.data} line ${p.line + 1}`;
       const z = p.uncertainty && p.residual !== undefined ? `  (${trimNumber(p.residual / p.uncertainty, 3)} σ)` : '';
-      out.push(`    ${where.padEnd(24)} ${measuredText(p.measured, f.measured_unit, f.measured_written_unit).padStart(18)}  ${residualText(p.residual, f.measured_unit, scale).padStart(12)}${z}`);
+      out.push(`    ${where.padEnd(24)} ${measuredText(p.measured, f.measured_unit, p.written_unit ?? f.measured_written_unit).padStart(18)}  ${residualText(p.residual, f.measured_unit, scale).padStart(12)}${z}`);
     }
     if (f.points.length > 200) out.push(`    … ${f.points.length - 200} more (--format csv lists every point)`);
   }

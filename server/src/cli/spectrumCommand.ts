@@ -11,6 +11,7 @@ import { selectField, selectName } from './selectors';
 import { lineAtField } from '../eval/lineAtField';
 import { gJLookup } from '../eval/gJLookup';
 import { emitOutput, nothingToCompute, openSetupFile } from './singleFile';
+import { csvNumber } from '../eval/machineText';
 
 export const spectrumSpec: CommandSpec = {
   name: 'spectrum',
@@ -48,7 +49,7 @@ export function runSpectrum(args: ParsedArgs, ctx: CliContext): number {
   const csv = spectrumCsv(samples, [
     ['file', file],
     ['line', name],
-    ['field', `${at.source.kind} ${at.source.name} ${at.field_T} T`],
+    ['field', `${at.source.kind} ${at.source.name} ${csvNumber(at.field_T)} T`],
     ['view', `${s.direction} the field, ${s.light} light`],
     ['widths', spectrumWidthsText(s)],
     ['intensity', 'per Hz, components of unit strength times the angular factor'],

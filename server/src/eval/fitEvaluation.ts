@@ -124,6 +124,7 @@ function fitSpectral(f: FitRequestModel, gJOf: GJLookup, report: Report, failed:
     ...(rows[i]!.datum.csvLine !== undefined ? { csv_line: rows[i]!.datum.csvLine } : {}),
     ...(rows[i]!.datum.fieldT !== undefined ? { field_T: rows[i]!.datum.fieldT } : {}),
     measured: rows[i]!.datum.frequencyHz,
+    ...(rows[i]!.datum.unit !== undefined && rows[i]!.datum.unit !== unit ? { written_unit: rows[i]!.datum.unit } : {}),
     ...(rows[i]!.datum.uncertaintyHz !== undefined ? { uncertainty: rows[i]!.datum.uncertaintyHz } : {}),
   }));
 }

@@ -23,6 +23,8 @@ export interface FitPointResult {
   field_T?: number;
   position_m?: number;
   measured: number;
+  /** The unit this point's value was written in, when it differs from the data's first (for display). */
+  written_unit?: string;
   uncertainty?: number;
   model?: number;
   /** measured − model. */

@@ -110,6 +110,7 @@ function readSpectralPoint(s: SettingNode, d: DataModel, problems: ProblemList):
     frequencyHz: f.value,
     ...(f.uncertainty !== undefined && f.uncertainty > 0 ? { uncertaintyHz: f.uncertainty } : {}),
     ...(field ? { fieldT: field.value } : {}),
+    ...(f.unit ? { unit: f.unit } : {}),
     range: s.range,
   });
 }

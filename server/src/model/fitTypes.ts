@@ -16,6 +16,8 @@ export interface SpectralDatum extends PointPlace {
   frequencyHz: number;
   uncertaintyHz?: number;
   fieldT?: number;
+  /** The unit the frequency was written in (`MHz`), so reports show each point back in its own unit. */
+  unit?: string;
 }
 
 /** One detector reading: counts at a position, with an optional standard uncertainty. */

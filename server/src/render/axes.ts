@@ -34,8 +34,9 @@ function displayScale(scale: Scale, unit: DisplayUnit): Scale {
 export function bottomAxis(scale: Scale, unit: DisplayUnit, name: string, box: PlotBox, pal: Palette, pxPerTick = 90): string {
   const shown = displayScale(scale, unit);
   const count = Math.max(2, Math.round((box.right - box.left) / pxPerTick));
-  const ticks = shown.ticks(count);
-  const fmt = shown.tickFormat(count);
+  const labelled = tickLabels(shown, count);
+  const ticks = labelled.map((k) => k.t);
+  const fmt = (t: number): string => labelled.find((k) => k.t === t)!.label;
   const parts: string[] = [];
   const grid = ticks.map((t) => `M${px(shown(t))},${px(box.top)}V${px(box.bottom)}`).join('');
   if (grid) parts.push(el('path', { class: 'sl-grid', d: grid, stroke: pal.grid, 'stroke-width': 1, fill: 'none' }));

@@ -120,7 +120,7 @@ export function stateTable(c: CsvContext, fieldsT: ArrayLike<number>, states: re
 }
 
 export function levelsCsv(d: LevelsViewData, about: CsvContext['about'] = []): string {
-  const field = d.markerT !== undefined ? `${d.markerLabel ? d.markerLabel + ' ' : ''}${d.markerT} T` : undefined;
+  const field = d.markerT !== undefined ? `${d.markerLabel ? d.markerLabel + ' ' : ''}${numCell(d.markerT)} T` : undefined;
   return stateTableCsv({ kind: 'levels', about: [...about, ['field', field]] }, d.fieldsT, d.curves);
 }
 
@@ -143,7 +143,7 @@ export function patternTable(d: PatternViewData, about: CsvContext['about'] = []
 export function linesCsv(d: LinesViewData, about: CsvContext['about'] = []): string {
   const rank = { pi: 0, 'sigma+': 1, 'sigma-': 2 } as const;
   const sorted = [...d.components].sort((a, b) => a.offsetHz - b.offsetHz || rank[a.polarization] - rank[b.polarization]);
-  const field = d.fieldT !== undefined ? `${d.fieldName ? d.fieldName + ' ' : ''}${d.fieldT} T` : undefined;
+  const field = d.fieldT !== undefined ? `${d.fieldName ? d.fieldName + ' ' : ''}${numCell(d.fieldT)} T` : undefined;
   return csvTable(
     { kind: 'lines', about: [...about, ['field', field]] },
     ['offset_Hz', 'strength', 'polarization', 'transition'],

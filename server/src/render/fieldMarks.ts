@@ -3,8 +3,8 @@
  * above the plot so that no two labels overlap.
  */
 import { estimateTextWidth } from './frame';
-import { fieldDisplayUnit, formatIn } from './units';
-import type { FieldUnit } from './viewData';
+import { fieldDisplayUnit, figureMinus, formatIn } from './units';
+import type { FieldUnit, NamedFieldMark } from './viewData';
 
 export const MARK_ROW = 14;
 
@@ -21,16 +21,19 @@ export function fieldMarksIn(
   inSweep: (b: number | undefined) => b is number,
   chosenT: number | undefined,
   chosenLabel: string | undefined,
-  others: readonly { fieldT: number; label: string }[] = [],
+  others: readonly NamedFieldMark[] = [],
+  chosenText?: string,
 ): FieldMark[] {
   const unit = fieldDisplayUnit(fieldUnit);
   const out: FieldMark[] = [];
-  const add = (fieldT: number, label: string, chosen: boolean): void => {
+  const add = (fieldT: number, label: string, chosen: boolean, written: string | undefined): void => {
     if (!inSweep(fieldT) || out.some((m) => m.fieldT === fieldT && m.label === label)) return;
-    out.push({ fieldT, label, chosen, text: label ? `${label} · ${formatIn(fieldT, unit)}` : `B = ${formatIn(fieldT, unit)}` });
+    // A field the file wrote reads in its own unit (1 nT, not 1e-6 mT); a found one in the axis unit.
+    const value = written !== undefined ? figureMinus(written) : formatIn(fieldT, unit);
+    out.push({ fieldT, label, chosen, text: label ? `${label} · ${value}` : `B = ${value}` });
   };
-  if (chosenT !== undefined) add(chosenT, chosenLabel ?? '', true);
-  for (const m of others) add(m.fieldT, m.label, false);
+  if (chosenT !== undefined) add(chosenT, chosenLabel ?? '', true, chosenText);
+  for (const m of others) add(m.fieldT, m.label, false, m.valueText);
   return out;
 }
 

@@ -1,6 +1,7 @@
 /** Diagram rendering: plain view data in, SVG (or CSV) text out. No DOM, no I/O. */
 export type {
   FieldUnit,
+  NamedFieldMark,
   LevelCrossing,
   LevelCurve,
   LevelsViewData,

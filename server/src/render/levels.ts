@@ -21,7 +21,7 @@ import { FALLING_DASH, paletteFor, type Palette } from './palette';
 import { arrayValues, finiteExtent, slopeAt, valueAt } from './sampled';
 import { slopeRuns, trendOf, type Trend } from './slopeRuns';
 import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
-import { fieldDisplayUnit, formatIn, formatSI, frequencyUnit } from './units';
+import { fieldDisplayUnit, figureMinus, formatIn, formatSI, frequencyUnit } from './units';
 import type { LevelCurve, LevelsViewData, RenderTheme } from './viewData';
 
 const LABEL_SPACING = 13;
@@ -79,7 +79,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const runs = d.curves.map((c) => slopeRuns(fields, c.energyHz));
 
   // Every named field inside the sweep, the chosen one first; labels stack in rows above the plot.
-  const marks = fieldMarksIn(d.fieldUnit, inSweep, d.markerT, d.markerLabel, d.fieldMarks);
+  const marks = fieldMarksIn(d.fieldUnit, inSweep, d.markerT, d.markerLabel, d.fieldMarks, d.markerText);
 
   const legend: LegendEntry[] = [];
   const present = new Set(runs.flatMap((r) => r.map((x) => x.trend)));
@@ -103,6 +103,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const box: PlotBox = { left: 0, right: 0, top, bottom: top + plotHeight };
   const y = scaleLinear().domain([e0, e1]).range([box.bottom, box.top]).nice();
 
+  const rightName = (c: LevelCurve): string => (d.endsWeak ? c.lowLabel : c.highLabel);
   const endAnchors = (side: 'low' | 'high'): LabelAnchor[] =>
     d.curves.map((c, index) => {
       const n = Math.min(fields.length, c.energyHz.length);
@@ -112,7 +113,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
       const ok = k >= 0 && k < n;
       // Coincident ends fan out in the order their curves take a little way in, so leaders do not cross.
       const along = Math.min(n - 1, Math.max(0, k + step * Math.max(1, Math.round(n / 25))));
-      return { index, y: ok ? y(c.energyHz[k]) : NaN, tie: y(c.energyHz[along]), label: side === 'low' ? c.lowLabel : c.highLabel };
+      return { index, y: ok ? y(c.energyHz[k]) : NaN, tie: y(c.energyHz[along]), label: side === 'low' ? c.lowLabel : rightName(c) };
     });
   const lowAnchors = endAnchors('low');
   const highAnchors = endAnchors('high');
@@ -210,7 +211,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
         const leader = l.members
           .map((m) => `M${px(edge)},${px(m.y)}h${px(dir * 4)}L${px(edge + dir * 10)},${px(l.y)}`)
           .join('');
-        const names = l.members.map((m) => (side === 'low' ? d.curves[m.index].lowLabel : d.curves[m.index].highLabel));
+        const names = l.members.map((m) => (side === 'low' ? d.curves[m.index].lowLabel : rightName(d.curves[m.index])));
         return el(
           'g',
           {
@@ -337,11 +338,12 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
     `against field B from ${formatIn(fieldExtent[0], fUnit)} to ${formatIn(fieldExtent[1], fUnit)}`,
     `${d.curves.length} states`,
   ];
-  if (marker !== undefined) descParts.push(`chosen field ${formatIn(marker, fUnit)}`);
-  else if (d.markerT !== undefined) descParts.push(`chosen field ${formatIn(d.markerT, fUnit)} lies outside the sweep`);
+  const chosenText = d.markerText !== undefined ? figureMinus(d.markerText) : d.markerT !== undefined ? formatIn(d.markerT, fUnit) : '';
+  if (marker !== undefined) descParts.push(`chosen field ${chosenText}`);
+  else if (d.markerT !== undefined) descParts.push(`chosen field ${chosenText} lies outside the sweep`);
   if (marks.length > 0) descParts.push(`named fields marked: ${marks.map((m) => m.text).join(', ')}`);
   const outside = (d.fieldMarks ?? []).filter((m) => !inSweep(m.fieldT));
-  if (outside.length > 0) descParts.push(`outside the sweep: ${outside.map((m) => `${m.label} ${formatIn(m.fieldT, fUnit)}`).join(', ')}`);
+  if (outside.length > 0) descParts.push(`outside the sweep: ${outside.map((m) => `${m.label} ${m.valueText !== undefined ? figureMinus(m.valueText) : formatIn(m.fieldT, fUnit)}`).join(', ')}`);
 
   return svgDocument(
     {

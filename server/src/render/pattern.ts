@@ -70,16 +70,33 @@ function positionLabel(v: number, unit: DisplayUnit): string {
 /** The height axis shows the share of all atoms per millimetre of detector, in per cent (data are per metre). */
 export const PATTERN_Y_UNIT: DisplayUnit = { factor: 10, symbol: '% of atoms per mm' };
 
-/** "1 at −2.1 mm (m_F=−1)" entries wrapped into rows that fit `maxWidth`. */
-function peakTableRows(entries: string[], maxWidth: number): string[] {
+/** One peak's entry in the table: "1 at −2.1 mm" and the states that land in it. */
+interface PeakEntry {
+  head: string;
+  members: string[];
+}
+
+/**
+ * "Peaks: 1 at −2.1 mm (m_F=−1) · 2 at …" wrapped into rows that fit `maxWidth`. A peak of many
+ * states breaks between its state names, so no row runs past the figure's edge.
+ */
+export function peakTableRows(entries: PeakEntry[], maxWidth: number): string[] {
   const rows: string[] = [];
   let cur = 'Peaks:';
+  let fresh = true;
   for (const e of entries) {
-    const next = cur === 'Peaks:' ? `${cur} ${e}` : `${cur} · ${e}`;
-    if (estimateTextWidth(next) > maxWidth && cur !== 'Peaks:') {
-      rows.push(cur);
-      cur = `  ${e}`;
-    } else cur = next;
+    const names = e.members;
+    // The pieces a row may break between: the head with the first name, each further name.
+    const pieces = names.length === 0 ? [e.head] : names.map((n, k) => `${k === 0 ? `${e.head} (` : ''}${n}${k === names.length - 1 ? ')' : ''}`);
+    pieces.forEach((piece, k) => {
+      const sep = k > 0 ? ', ' : cur === 'Peaks:' ? ' ' : ' · ';
+      const next = cur + sep + piece;
+      if (estimateTextWidth(next) > maxWidth && !fresh) {
+        rows.push(k > 0 ? `${cur},` : cur);
+        cur = `    ${piece}`;
+      } else cur = next;
+      fresh = false;
+    });
   }
   rows.push(cur);
   return rows;
@@ -114,7 +131,7 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
   const legendW = Math.min(200, Math.max(...legend.map((e) => estimateTextWidth(e.label))) + LEGEND_SAMPLE_WIDTH + 20);
 
   const tableEntries = peaks.map((p, i) => `${i + 1} at ${positionLabel(p.positionM, unit)}${p.members.length ? ` (${p.members.join(', ')})` : ''}`);
-  const tableRows = peaks.length > 0 ? peakTableRows(tableEntries, WIDTH - 32) : [];
+  const tableRows = peaks.length > 0 ? peakTableRows(peaks.map((p, i) => ({ head: `${i + 1} at ${positionLabel(p.positionM, unit)}`, members: p.members })), WIDTH - 32) : [];
   const height = BASE_HEIGHT + tableRows.length * TABLE_ROW;
   const box: PlotBox = { left: 64, right: WIDTH - 16 - legendW, top: 78, bottom: BASE_HEIGHT - 56 };
   const x = scaleLinear().domain([x0, x1]).range([box.left, box.right]);

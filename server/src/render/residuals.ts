@@ -4,9 +4,9 @@
  * (measured − model)/σ with the ±1 and ±2 bands, on the same x axis (field, position, or the
  * point's number when the points share an unknown field).
  */
-import { scaleLinear } from 'd3-scale';
+import { scaleLinear, scaleLog } from 'd3-scale';
 import { line } from 'd3-shape';
-import { bottomAxis, leftAxis, type PlotBox } from './axes';
+import { bottomAxis, leftAxis, type PlotBox, type Scale } from './axes';
 import { emptyDiagram, svgDocument } from './frame';
 import { legendUnderTitle } from './legend';
 import { markerPath } from './markers';
@@ -32,6 +32,8 @@ export interface ResidualsViewData {
 }
 
 const WIDTH = 760;
+/** Fields spanning more than this ratio (all above zero) get a logarithmic B axis. */
+export const LOG_FIELD_SPAN = 100;
 const LEFT = 84;
 const RIGHT = WIDTH - 20;
 
@@ -63,7 +65,9 @@ export function renderResiduals(d: ResidualsViewData, theme: RenderTheme): strin
   const lower: PlotBox = { left: LEFT, right: RIGHT, top: upper.bottom + 26, bottom: upper.bottom + 26 + 130 };
   const height = lower.bottom + 56;
   const pad = (a: number, b: number): [number, number] => (a === b ? [a - (Math.abs(a) || 1) * 0.1, b + (Math.abs(b) || 1) * 0.1] : [a - (b - a) * 0.05, b + (b - a) * 0.05]);
-  const x = scaleLinear().domain(pad(fx[0], fx[1])).range([LEFT, RIGHT]);
+  // Fields from µT to T would crowd every weak-field point into one spot at B = 0: spread over decades, B is logarithmic.
+  const logX = d.xKind === 'field' && fx[0] > 0 && fx[1] / fx[0] > LOG_FIELD_SPAN;
+  const x: Scale = logX ? scaleLog().domain([fx[0] / 1.5, fx[1] * 1.5]).range([LEFT, RIGHT]) : scaleLinear().domain(pad(fx[0], fx[1])).range([LEFT, RIGHT]);
   const y = scaleLinear().domain(pad(fy[0], fy[1])).range([upper.bottom, upper.top]).nice();
   const yz = scaleLinear().domain(pad(fz[0], fz[1])).range([lower.bottom, lower.top]).nice();
   const xName = d.xKind === 'field' ? 'B' : d.xKind === 'position' ? 'position' : 'point';
@@ -71,7 +75,7 @@ export function renderResiduals(d: ResidualsViewData, theme: RenderTheme): strin
   const body: string[] = [legend.svg];
   body.push(bottomAxis(x, xUnit, '', upper, pal));
   body.push(leftAxis(y, yUnit, 'measured, model', upper, LEFT, pal));
-  body.push(bottomAxis(x, xUnit, xName, lower, pal));
+  body.push(bottomAxis(x, xUnit, logX ? `${xName}, log scale` : xName, lower, pal));
   body.push(leftAxis(yz, undefined, normalised ? '(measured − model)/σ' : 'measured − model', lower, LEFT, pal));
   for (const level of normalised ? [-2, -1, 0, 1, 2] : [0]) {
     body.push(el('path', { class: 'sl-zero', d: `M${px(LEFT)},${px(yz(level))}H${px(RIGHT)}`, stroke: pal.muted, 'stroke-dasharray': level === 0 ? '' : '2 4', fill: 'none' }));
@@ -108,9 +112,9 @@ export function renderResiduals(d: ResidualsViewData, theme: RenderTheme): strin
       width: WIDTH,
       height,
       title: d.title,
-      desc: `${n} points against the fitted model; largest ${normalised ? 'normalised ' : ''}residual ${worst.toFixed(2)}${normalised ? ' σ' : ''}.`,
+      desc: `${n} points against the fitted model${logX ? ' on a logarithmic field axis' : ''}; largest ${normalised ? 'normalised ' : ''}residual ${worst.toFixed(2)}${normalised ? ' σ' : ''}.`,
       pal,
-      rootData: { 'data-x-name': xName, 'data-x-unit': xUnit.symbol, 'data-x-factor': dataNum(xUnit.factor), 'data-x-domain': `${dataNum(x.domain()[0]!)},${dataNum(x.domain()[1]!)}`, 'data-x-range': `${px(LEFT)},${px(RIGHT)}` },
+      rootData: { 'data-x-name': xName, 'data-x-unit': xUnit.symbol, 'data-x-factor': dataNum(xUnit.factor), 'data-x-domain': `${dataNum(x.domain()[0]!)},${dataNum(x.domain()[1]!)}`, 'data-x-range': `${px(LEFT)},${px(RIGHT)}`, 'data-x-scale': logX ? 'log' : 'linear' },
     },
     body,
   );

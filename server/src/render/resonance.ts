@@ -67,7 +67,8 @@ export function renderResonance(d: ResonanceViewData, theme: RenderTheme): strin
 
   const body: string[] = [legendSvg.svg];
   body.push(bottomAxis(x, fUnit, '', upper, pal));
-  body.push(leftAxis(yf, oUnit, `f − ${ref.text}`, upper, LEFT, pal));
+  // A transition that starts at zero frequency (Δm = ±1 within one F) needs no offset: "f", not "f − 0 Hz".
+  body.push(leftAxis(yf, oUnit, ref.hz === 0 ? 'f' : `f − ${ref.text}`, upper, LEFT, pal));
   body.push(bottomAxis(x, fUnit, 'B', lower, pal));
   body.push(leftAxis(ys, sUnit, 'df/dB', lower, LEFT, pal));
   body.push(el('path', { class: 'sl-zero', d: `M${px(LEFT)},${px(ys(0))}H${px(RIGHT)}`, stroke: pal.muted, 'stroke-dasharray': '2 4', fill: 'none' }));

@@ -6,6 +6,14 @@
 
 export type FieldUnit = 'T' | 'G' | 'mT';
 
+/** A named field of the file on a field axis. */
+export interface NamedFieldMark {
+  fieldT: number;
+  label: string;
+  /** The value as the file wrote it (`250 mT`), so the label echoes the user's unit; else the axis unit. */
+  valueText?: string;
+}
+
 export interface LevelCurve {
   id: string;
   /** Name of the state at the low-field end (e.g. "F=2, m_F=1"). */
@@ -36,9 +44,16 @@ export interface LevelsViewData {
   /** The chosen working field of the setup file: a vertical rule with a dot on every curve. */
   markerT?: number;
   markerLabel?: string;
+  /** The chosen field as the file wrote it (`1 nT`), for its label; else it is written in the axis unit. */
+  markerText?: string;
   /** Every named field and magnet field of the file, each drawn as a labelled rule when inside the sweep. */
-  fieldMarks?: { fieldT: number; label: string }[];
+  fieldMarks?: NamedFieldMark[];
   crossings?: LevelCrossing[];
+  /**
+   * The sweep ends in the weak-field (linear) regime: the states there are still |F, m_F⟩, so the
+   * right lane names them by their low-field labels rather than by where they go at high field.
+   */
+  endsWeak?: boolean;
 }
 
 export interface PatternPart {
@@ -134,5 +149,5 @@ export interface ResonanceViewData {
   /** Fields where the transition is at the file's frequency. */
   resonances: { fieldT: number; frequencyHz: number }[];
   /** Named fields of the file, drawn as rules when inside the range. */
-  fieldMarks: { fieldT: number; label: string }[];
+  fieldMarks: NamedFieldMark[];
 }

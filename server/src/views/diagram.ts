@@ -5,6 +5,7 @@
 import type { Analysis } from '../eval/analyze';
 import { evaluateBeam } from '../eval/beamEvaluation';
 import { gJLookup } from '../eval/gJLookup';
+import { csvNumber } from '../eval/machineText';
 import { workingFields } from '../eval/evaluate';
 import { lineAtField } from '../eval/lineAtField';
 import type { BeamModel, LevelModel, SetupModel } from '../model/types';
@@ -130,7 +131,7 @@ function drawn(analysis: Analysis, model: SetupModel, req: DiagramRequest): Diag
 export function beamAbout(beam: BeamModel, source: string | undefined): [string, string][] {
   const about: [string, string][] = [['file', source ?? ''], ['beam', beam.name]];
   if (beam.level) about.push(['level', `${beam.level.species.name}.${beam.level.name}`]);
-  if (beam.magnet) about.push(['field', `magnet ${beam.magnet.name}${beam.magnet.fieldT ? ` ${beam.magnet.fieldT.value} T` : ''}`]);
+  if (beam.magnet) about.push(['field', `magnet ${beam.magnet.name}${beam.magnet.fieldT ? ` ${csvNumber(beam.magnet.fieldT.value)} T` : ''}`]);
   return about;
 }
 

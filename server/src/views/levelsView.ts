@@ -3,13 +3,13 @@
  * change of regime, with the file's working field marked.
  */
 import { levelDesignationText } from '../eval/designationText';
-import { isGaussUnit } from '../eval/writtenUnit';
+import { inWrittenUnit, isGaussUnit } from '../eval/writtenUnit';
 import { regime, sweepLevel, type LevelSpec, type SweepResult } from '../physics/engine';
 import { BOHR_MAGNETON_HZ_PER_T } from '../physics/constants';
 import type { LevelModel, SettingsModel } from '../model/types';
 import { engineSpec } from '../eval/levelSpec';
 import type { WorkingField } from '../eval/levelEvaluation';
-import type { FieldUnit, LevelsViewData } from '../render';
+import type { FieldUnit, LevelsViewData, NamedFieldMark } from '../render';
 
 export const LEVELS_VIEW_POINTS = 401;
 
@@ -63,6 +63,8 @@ export function levelsView(
       energyHz: s.energyHz,
       momentJT: s.momentJT,
     })),
+    // A range that ends in the weak regime (a magnetometer's µT) has no high-field names to give yet.
+    ...(regime(spec, upper).verdict === 'weak field (linear)' ? { endsWeak: true } : {}),
     crossings: sweep.crossings.map((c) => ({
       fieldT: c.fieldT,
       energyHz: c.energyHz,
@@ -73,9 +75,21 @@ export function levelsView(
   if (marker) {
     data.markerT = marker.tesla;
     data.markerLabel = `${marker.source.kind} ${marker.source.name}`;
+    data.markerText = writtenFieldText(marker);
   }
-  if (options.fieldMarks) data.fieldMarks = options.fieldMarks.map((f) => ({ fieldT: f.tesla, label: `${f.source.kind} ${f.source.name}` }));
+  if (options.fieldMarks) data.fieldMarks = options.fieldMarks.map(namedFieldMark);
   return { data, sweep };
+}
+
+/** The field as the file wrote it (`1 nT`), or undefined when the file gave no unit to echo. */
+export function writtenFieldText(f: WorkingField): string | undefined {
+  return inWrittenUnit(f.tesla, 'flux-density', f.unit, 6);
+}
+
+/** A working field as a labelled rule on a field axis, its value in the unit the file wrote. */
+export function namedFieldMark(f: WorkingField): NamedFieldMark {
+  const valueText = writtenFieldText(f);
+  return { fieldT: f.tesla, label: `${f.source.kind} ${f.source.name}`, ...(valueText !== undefined ? { valueText } : {}) };
 }
 
 /**

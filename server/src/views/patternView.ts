@@ -20,10 +20,15 @@ export function patternView(beamName: string, e: BeamEvaluation): PatternViewDat
       resolved: p.allResolved,
       text:
         p.peaks.length <= 1
-          ? 'one peak'
+          ? onePeakText(p.peaks[0]?.members.length ?? 0)
           : unresolved === 0
             ? `${p.peaks.length} peaks, all resolved`
             : `${p.peaks.length} peaks; ${unresolved} of ${p.pairs.length} neighbouring pairs not resolved`,
     },
   };
+}
+
+/** A lone peak says how many states it holds: with several, the magnet separates none of them. */
+function onePeakText(states: number): string {
+  return states > 1 ? `one peak: all ${states} states with atoms land together` : 'one peak';
 }

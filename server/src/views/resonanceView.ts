@@ -11,7 +11,7 @@ import type { ResonanceResult } from '../eval/resultTypes';
 import type { WorkingField } from '../eval/levelEvaluation';
 import { engineSpec } from '../eval/levelSpec';
 import type { ResonanceViewData } from '../render';
-import { unitFor } from './levelsView';
+import { namedFieldMark, unitFor } from './levelsView';
 
 export const RESONANCE_VIEW_POINTS = 401;
 
@@ -58,7 +58,7 @@ export function resonanceView(
   const sign = Math.sign(frequencyHz[0]!) || 1;
   return {
     title: `resonance ${r.name}: ${level.species.name} ${level.name}, ${lower.low.text} → ${upper.low.text}`,
-    fieldUnit: unitFor(toT),
+    fieldUnit: unitFor(toT, r.rangeT.toUnit ?? r.rangeT.fromUnit),
     fieldsT: sweep.fieldsT,
     frequencyHz,
     slopeHzPerT,
@@ -67,6 +67,6 @@ export function resonanceView(
     resonances: (result.resonances ?? [])
       .filter((x) => [x.transition.lower_label, x.transition.upper_label].sort().join('|') === [lower.low.text, upper.low.text].sort().join('|'))
       .map((x) => ({ fieldT: x.field_T, frequencyHz: sign * Math.abs(x.transition.frequency_Hz) })),
-    fieldMarks: fields.map((f) => ({ fieldT: f.tesla, label: `${f.source.kind} ${f.source.name}` })),
+    fieldMarks: fields.map(namedFieldMark),
   };
 }

@@ -18,6 +18,25 @@ export function regimeLine(point: SublevelsAtField): string | undefined {
   return `regime: ${md(r.verdict)}${limits.length > 0 ? ` — ${limits.join('; ')}` : ''}`;
 }
 
+/** Significant digits the hover normally gives an energy. */
+const ENERGY_DIGITS = 7;
+/** Never more than this: past it the engine's own precision (and the reader's patience) ends. */
+const MAX_ENERGY_DIGITS = 11;
+
+/**
+ * Enough significant digits that neighbouring sublevels read apart: at 1 nT the m_F of one F level
+ * lie ~10 Hz apart on a GHz offset, and seven digits would print them all the same.
+ */
+export function separatingDigits(energiesHz: readonly number[]): number {
+  const e = energiesHz.filter(Number.isFinite).sort((a, b) => a - b);
+  const largest = Math.max(0, ...e.map(Math.abs));
+  let gap = Infinity;
+  for (let i = 1; i < e.length; i++) if (e[i]! - e[i - 1]! > largest * 1e-12) gap = Math.min(gap, e[i]! - e[i - 1]!);
+  if (!(largest > 0) || !Number.isFinite(gap)) return ENERGY_DIGITS;
+  // Two digits past the one where the closest pair first differs.
+  return Math.min(MAX_ENERGY_DIGITS, Math.max(ENERGY_DIGITS, Math.ceil(Math.log10(largest / gap)) + 2));
+}
+
 export function sublevelTable(point: SublevelsAtField, maxRows: number): string {
   const rows = Math.max(0, maxRows);
   let table = '';
@@ -29,18 +48,19 @@ export function sublevelTable(point: SublevelsAtField, maxRows: number): string 
     // weak-field regime it can be off by more than the splitting itself.
     const linear = scheme === 'low';
     const shown = point.exact.slice(0, rows);
+    const digits = separatingDigits(point.exact.map((s) => s.energy_Hz));
     table =
       scheme === 'both'
         ? mdTable(
             ['low-field label', 'strong-field label', 'E/h exact', 'μ/μ_B'],
-            shown.map((s) => [md(s.low_label), md(s.high_label), withUncertainty(s.energy_Hz, s.energy_Hz_unc, (v) => frequencyText(v)), withUncertainty(s.moment_bohr, s.moment_bohr_unc, (v) => trimNumber(v, 4))]),
+            shown.map((s) => [md(s.low_label), md(s.high_label), withUncertainty(s.energy_Hz, s.energy_Hz_unc, (v) => frequencyText(v, digits)), withUncertainty(s.moment_bohr, s.moment_bohr_unc, (v) => trimNumber(v, 4))]),
           )
         : mdTable(
             [stateHeader(scheme), 'E/h exact', ...(linear ? ['E/h linear formula'] : []), 'μ/μ_B'],
             shown.map((s) => [
               md(stateLabel({ low: s.low_label, high: s.high_label }, scheme)),
-              withUncertainty(s.energy_Hz, s.energy_Hz_unc, (v) => frequencyText(v)),
-              ...(linear ? [s.linear_energy_Hz !== undefined ? frequencyText(s.linear_energy_Hz) : '—'] : []),
+              withUncertainty(s.energy_Hz, s.energy_Hz_unc, (v) => frequencyText(v, digits)),
+              ...(linear ? [s.linear_energy_Hz !== undefined ? frequencyText(s.linear_energy_Hz, digits) : '—'] : []),
               withUncertainty(s.moment_bohr, s.moment_bohr_unc, (v) => trimNumber(v, 4)),
             ]),
           );
