@@ -112,13 +112,28 @@ function hyperfineOf(level: LevelModel, gJ: number, twoJ: number, twoI: number):
 
 /** Attach to each exact state the linear energy of the state with the same low-field quantum numbers. */
 function pairLinear(p: FieldPointResult): FieldPointResult {
-  const key = (s: SublevelResult | ExactSublevelResult): string => `${s.F ?? ''}|${s.J ?? ''}|${s.m}|${s.m_I ?? ''}`;
-  const linear = new Map(p.linear.map((s) => [key(s), s.energy_Hz]));
+  const linear = new Map(p.linear.map((s) => [lowFieldKey(s), s.energy_Hz]));
   for (const s of p.exact) {
-    const e = linear.get(key(s));
+    const e = linear.get(lowFieldKey(s));
     if (e !== undefined) s.linear_energy_Hz = e;
   }
   return p;
+}
+
+/**
+ * F, J, m and m_I (halves, or absent) packed into one number: a map keyed by it pairs the states
+ * without building two strings per state (6,500 level–field pairs in a large file). Quantum numbers
+ * beyond ±255 fall back to a string key.
+ */
+function lowFieldKey(s: SublevelResult | ExactSublevelResult): number | string {
+  const parts = [s.F, s.J, s.m, s.m_I];
+  let key = 0;
+  for (const x of parts) {
+    const twice = x === undefined ? -512 : 2 * x;
+    if (!(Number.isInteger(twice) && Math.abs(twice) <= 511)) return `${s.F ?? ''}|${s.J ?? ''}|${s.m}|${s.m_I ?? ''}`;
+    key = key * 1024 + (twice + 512);
+  }
+  return key;
 }
 
 function exactAt(level: LevelModel, gJ: number, f: WorkingField, notes: EvaluationNote[], points: FieldPoint[]): Pick<FieldPointResult, 'exact' | 'regime'> {
@@ -143,7 +158,7 @@ function linearAt(f: WorkingField, gJ: number, gI: number, twoJ: number, twoI: n
       const twoF = Math.round(2 * F.F);
       for (const s of linearSublevels(F.g_F, twoF, f.tesla)) {
         linear.push({
-          label: `F=${F.F_text}, m_F=${signedHalfText(s.twoM)}`,
+          label: hyperfineLabel(F.F_text, s.twoM),
           F: F.F,
           m: s.twoM / 2,
           m_text: signedHalfText(s.twoM),
@@ -154,6 +169,18 @@ function linearAt(f: WorkingField, gJ: number, gI: number, twoJ: number, twoI: n
   }
   linear.sort((a, b) => a.energy_Hz - b.energy_Hz);
   return { source: f.source, field_T: f.tesla, linear };
+}
+
+/** Linear-state labels by F and 2m: the same few strings recur in every level with a nucleus, so each is made once. */
+const hyperfineLabels = new Map<string, string>();
+function hyperfineLabel(fText: string, twoM: number): string {
+  const key = `${fText}|${twoM}`;
+  let label = hyperfineLabels.get(key);
+  if (label === undefined) {
+    label = `F=${fText}, m_F=${signedHalfText(twoM)}`;
+    if (hyperfineLabels.size < 4096) hyperfineLabels.set(key, label);
+  }
+  return label;
 }
 
 function sourced(v: Valued<number>): SourcedNumber {

@@ -14,7 +14,7 @@ export {
 } from './detectorPattern';
 export type { PatternOptions } from './patternOptions';
 export { DEFAULT_BINS, DEFAULT_MERGE_FRACTION, DEFAULT_TAIL_FRACTION } from './patternOptions';
-export { DEFAULT_DIP_CRITERION, type PairVerdict } from './pairDips';
+export { DEFAULT_DIP_CRITERION, worstDip, type PairVerdict } from './pairDips';
 export {
   smallestResolvingDrift,
   smallestResolvingGradient,
@@ -24,7 +24,7 @@ export {
   type ResolveSearchResult,
   type ResolvingParameter,
 } from './resolvingSolver';
-export { resolvingOptions, worstDip, VISIBLE_IMPROVEMENT, type AdviceParameter, type ResolvingOption, type ResolvingOptions } from './resolvingOptions';
+export { resolvingOptions, VISIBLE_IMPROVEMENT, type AdviceParameter, type ResolvingOption, type ResolvingOptions } from './resolvingOptions';
 export { validateGeometry, MAX_HALF_ANGLE_RAD } from './validateGeometry';
 export { validateSource } from './validateSource';
 export { validateSublevels } from './validateSublevels';

@@ -42,3 +42,8 @@ export function pairDips(
   }
   return out;
 }
+
+/** The largest dip ratio of a pattern's neighbouring pairs (0 when there is no pair). */
+export function worstDip(p: { pairs: readonly PairVerdict[] }): number {
+  return p.pairs.length === 0 ? 0 : Math.max(...p.pairs.map((q) => q.dipRatio));
+}

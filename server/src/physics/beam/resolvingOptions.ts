@@ -6,10 +6,18 @@
  * overlap comes from the speed spread (peaks broadened ∝ 1/v², as wide as they are far
  * apart), narrower slits or a stronger magnet change nothing, and only a narrower speed
  * spread helps — the computation shows it instead of a rule of thumb.
+ *
+ * Most of a search's patterns usually show that a change cannot help (the generated benchmark
+ * file: 38 per beam, all of them). So each kind of change is first screened on a coarse grid
+ * (trialScreen.ts); when every value it would try certainly leaves the worst dip above the bar
+ * (not resolved, no visible improvement), none can be an option and the full patterns are
+ * skipped. Otherwise the values are computed in full as before, so any option found is the same.
  */
 import { computePattern, type DetectorPattern, type PatternInput } from './detectorPattern';
 import { EFFUSIVE_RELATIVE_SPREAD } from './jetLaw';
+import { DEFAULT_DIP_CRITERION, worstDip } from './pairDips';
 import { smallestResolvingValue } from './resolvingSolver';
+import { certainlyAbove, screenable } from './trialScreen';
 import { hasBeamError, type SpeedDistribution } from './types';
 
 export type AdviceParameter = 'gradient' | 'magnetLength' | 'drift' | 'slits' | 'detector' | 'speedSpread';
@@ -61,14 +69,21 @@ export function resolvingOptions(input: PatternInput, present: DetectorPattern, 
   const keep = (parameter: AdviceParameter, pick: Trial | undefined, value = pick?.value): void => {
     if (pick && value !== undefined) out.options.push({ parameter, value, worstDipRatio: worstDip(pick.pattern), resolvesAll: pick.pattern.allResolved });
   };
-  const at = (change: Partial<PatternInput['geometry']>, source?: SpeedDistribution): DetectorPattern =>
-    computePattern({ ...input, geometry: { ...geo, ...change }, ...(source ? { source } : {}) }, groups, false);
+  const changed = (change: Partial<PatternInput['geometry']>, source?: SpeedDistribution): PatternInput => ({ ...input, geometry: { ...geo, ...change }, ...(source ? { source } : {}) });
+  const at = (change: Partial<PatternInput['geometry']>, source?: SpeedDistribution): DetectorPattern => computePattern(changed(change, source), groups, false);
+  // A trial is an option only if it resolves (worst dip ≤ criterion) or visibly lowers the worst dip.
+  const bar = Math.max(presentWorst - VISIBLE_IMPROVEMENT, input.dipCriterion ?? DEFAULT_DIP_CRITERION);
+  const screen = screenable(input);
+  /** Every one of these changes certainly leaves the worst dip above the bar: no option among them. */
+  const hopeless = (inputs: readonly PatternInput[]): boolean => screen && inputs.length > 0 && inputs.every((i) => certainlyAbove(i, groups, bar));
 
   const grown = (parameter: 'gradient' | 'magnetLength' | 'drift', base: number): void => {
     if (!tried(parameter)) return;
     const key = parameter === 'gradient' ? 'gradientTPerM' : parameter === 'magnetLength' ? 'magnetLengthM' : 'driftM';
     const scale = parameter === 'gradient' ? sign : 1;
-    const trials = scan(GROWTH.map((f) => f * base), (v) => at({ [key]: scale * v }));
+    const values = GROWTH.map((f) => f * base);
+    if (hopeless(values.map((v) => changed({ [key]: scale * v })))) return;
+    const trials = scan(values, (v) => at({ [key]: scale * v }));
     const pick = choose(trials, presentWorst);
     if (!pick) return;
     const hitIndex = trials.indexOf(pick);
@@ -88,7 +103,7 @@ export function resolvingOptions(input: PatternInput, present: DetectorPattern, 
   grown('drift', geo.driftM > 0 ? geo.driftM : geo.magnetLengthM / 10);
 
   const narrowed = (parameter: 'slits' | 'detector', change: (f: number) => Partial<PatternInput['geometry']>): void => {
-    if (!tried(parameter)) return;
+    if (!tried(parameter) || hopeless(NARROWING.map((f) => changed(change(f))))) return;
     keep(parameter, choose(scan(NARROWING, (f) => at(change(f))), presentWorst));
   };
   narrowed('slits', (f) => ({ slit1M: geo.slit1M * f, slit2M: geo.slit2M * f }));
@@ -98,7 +113,9 @@ export function resolvingOptions(input: PatternInput, present: DetectorPattern, 
   const mean = present.speed?.meanSpeed;
   if (tried('speedSpread') && spread !== undefined && mean !== undefined && mean > 0) {
     const values = SPREADS.filter((s) => s < spread * 0.9);
-    keep('speedSpread', choose(scan(values, (s) => at({}, { kind: 'jet', meanSpeed: mean, relativeSpread: s })), presentWorst));
+    const jet = (s: number): SpeedDistribution => ({ kind: 'jet', meanSpeed: mean, relativeSpread: s });
+    if (hopeless(values.map((s) => changed({}, jet(s))))) return out;
+    keep('speedSpread', choose(scan(values, (s) => at({}, jet(s))), presentWorst));
   }
   return out;
 }
@@ -128,8 +145,4 @@ function choose(trials: readonly Trial[], presentWorst: number): Trial | undefin
   const best = Math.min(...trials.map((t) => worstDip(t.pattern)));
   if (presentWorst - best < VISIBLE_IMPROVEMENT) return undefined;
   return trials.find((t) => worstDip(t.pattern) <= best + SATURATION_MARGIN);
-}
-
-export function worstDip(p: DetectorPattern): number {
-  return p.pairs.length === 0 ? 0 : Math.max(...p.pairs.map((q) => q.dipRatio));
 }
