@@ -7,6 +7,8 @@ import { join } from 'node:path';
 import type { Frame, Locator, Page } from 'playwright-core';
 
 const STEP_TIMEOUT_MS = 45_000;
+/** The rendered lines of the active editor. */
+const EDITOR_LINE = '.editor-group-container.active .monaco-editor .view-line';
 
 export class Workbench {
   constructor(
@@ -65,55 +67,66 @@ export class Workbench {
 
   /** The active editor's rendered line that contains `text`. */
   editorLine(text: string): Locator {
-    return this.page.locator('.editor-group-container.active .monaco-editor .view-line', { hasText: text }).first();
+    return this.page.locator(EDITOR_LINE, { hasText: text }).first();
+  }
+
+  /**
+   * Where `text` is drawn in the active editor, once the topmost element at its centre is the line
+   * that shows it. Found and measured in one call in the page: the editor replaces a line's element
+   * whenever it redraws it (semantic tokens, inlay hints, decorations), and an element found in one
+   * call and measured in the next may be detached by then; a detached element measures as an empty
+   * box at (0, 0), and the pointer then lands on the title bar, where no hover opens.
+   */
+  private async whereDrawn(text: string): Promise<{ x: number; y: number }> {
+    const found = await this.page.waitForFunction(
+      ({ selector, wanted }) => {
+        for (const el of Array.from(document.querySelectorAll(selector))) {
+          // Find the text across the line's token spans and measure just that substring.
+          const walker = document.createTreeWalker(el, NodeFilter.SHOW_TEXT);
+          const pieces: { node: Text; start: number }[] = [];
+          let full = '';
+          for (let n = walker.nextNode(); n; n = walker.nextNode()) {
+            pieces.push({ node: n as Text, start: full.length });
+            full += n.textContent ?? '';
+          }
+          const at = full.indexOf(wanted);
+          if (at < 0) continue;
+          const locate = (pos: number): [Text, number] => {
+            const p = pieces.find((q) => pos >= q.start && pos <= q.start + (q.node.textContent ?? '').length) ?? pieces[0]!;
+            return [p.node, pos - p.start];
+          };
+          const range = document.createRange();
+          range.setStart(...locate(at));
+          range.setEnd(...locate(at + wanted.length));
+          const box = range.getBoundingClientRect();
+          const centre = { x: box.x + box.width / 2, y: box.y + box.height / 2 };
+          // Not yet laid out, or covered (a menu, a notification, an earlier hover): not a place to point at yet.
+          const top = box.width > 0 && box.height > 0 ? document.elementFromPoint(centre.x, centre.y) : null;
+          return top && el.contains(top) ? centre : false;
+        }
+        return false;
+      },
+      { selector: EDITOR_LINE, wanted: text },
+    );
+    return (await found.jsonValue()) as { x: number; y: number };
   }
 
   /** Moves the mouse onto `text` in the active editor, as a person pointing at it. */
   async pointAt(text: string): Promise<void> {
-    const line = this.editorLine(text);
-    await line.waitFor();
-    const centre = await line.evaluate((el, wanted) => {
-      // Find the text across the line's token spans and measure just that substring.
-      const walker = document.createTreeWalker(el, NodeFilter.SHOW_TEXT);
-      const pieces: { node: Text; start: number }[] = [];
-      let full = '';
-      for (let n = walker.nextNode(); n; n = walker.nextNode()) {
-        pieces.push({ node: n as Text, start: full.length });
-        full += n.textContent ?? '';
-      }
-      const at = full.indexOf(wanted);
-      if (at < 0) return undefined;
-      const locate = (pos: number): [Text, number] => {
-        const p = pieces.find((q) => pos >= q.start && pos <= q.start + (q.node.textContent ?? '').length) ?? pieces[0];
-        return [p.node, pos - p.start];
-      };
-      const range = document.createRange();
-      range.setStart(...locate(at));
-      range.setEnd(...locate(at + wanted.length));
-      const box = range.getBoundingClientRect();
-      return { x: box.x + box.width / 2, y: box.y + box.height / 2 };
-    }, text);
-    if (!centre) throw new Error(`'${text}' is not on the rendered line`);
+    const centre = await this.whereDrawn(text);
     await this.page.mouse.move(centre.x - 30, centre.y + 40);
     await this.page.mouse.move(centre.x, centre.y, { steps: 5 });
   }
 
   /**
-   * Point at `text` until a hover containing `expected` shows: the editor may redraw the line (inlay
-   * hints arriving) under a resting pointer, and then no hover opens, so point again up to three times.
+   * Points at `text` and gives the text of the hover that opens there, once it contains `expected`.
+   * One pointing, no second try: a hover that does not open, or opens without `expected`, fails.
    */
   async hoverAt(text: string, expected: string): Promise<string> {
-    for (let attempt = 1; ; attempt++) {
-      await this.pointAt(text);
-      const hover = this.page.locator('.monaco-hover:visible', { hasText: expected }).first();
-      try {
-        await hover.waitFor({ timeout: 12_000 });
-        return await hover.innerText();
-      } catch (e) {
-        if (attempt >= 3) throw e;
-        await this.page.mouse.move(5, 5);
-      }
-    }
+    await this.pointAt(text);
+    const hover = this.page.locator('.monaco-hover:visible', { hasText: expected }).first();
+    await hover.waitFor();
+    return hover.innerText();
   }
 
   /** Problems view rows (Ctrl+Shift+M) once a row mentions every one of `codes`. */
@@ -124,21 +137,31 @@ export class Workbench {
     return rows.allInnerTexts();
   }
 
-  /** Quick Fix menu (Ctrl+.) at the cursor: picks the entry whose label contains `label`. */
+  /**
+   * Waits until the rendered line containing `text` carries a problem's squiggle: the markers the
+   * Quick Fix menu hands to the server as its context are in (the squiggles are drawn from them).
+   */
+  async problemMarkedOn(text: string): Promise<void> {
+    await this.page.waitForFunction(
+      ({ selector, wanted }) => {
+        const line = Array.from(document.querySelectorAll<HTMLElement>(selector)).find((el) => (el.textContent ?? '').includes(wanted));
+        const editor = line?.closest('.monaco-editor');
+        if (!line || !editor) return false;
+        // The overlay layer draws each line's decorations in a row at the same height as the line.
+        const row = Array.from(editor.querySelectorAll<HTMLElement>('.view-overlays > div')).find((r) => r.style.top === line.style.top);
+        return !!row?.querySelector('[class*="squiggly-"]');
+      },
+      { selector: EDITOR_LINE, wanted: text },
+    );
+  }
+
+  /**
+   * Quick Fix menu (Ctrl+.) at the cursor: picks the entry whose label contains `label`. The menu
+   * lists the fixes for the problems marked when it opens: wait for the mark first (problemMarkedOn).
+   */
   async applyQuickFix(label: string): Promise<void> {
     const entry = this.page.locator('.action-widget .monaco-list-row', { hasText: label }).first();
-    // The menu lists what the server had when it opened: before the diagnostics for this line have
-    // arrived it is empty and closes, so ask again (as a person would) until the fix is there.
-    for (let attempt = 1; ; attempt++) {
-      await this.page.keyboard.press('Control+.');
-      try {
-        await entry.waitFor({ timeout: 5_000 });
-        break;
-      } catch (e) {
-        if (attempt >= 5) throw e;
-        await this.page.keyboard.press('Escape');
-      }
-    }
+    await this.page.keyboard.press('Control+.');
     await entry.click();
     await entry.waitFor({ state: 'hidden' });
   }
