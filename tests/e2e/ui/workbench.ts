@@ -91,7 +91,8 @@ export class Workbench {
             pieces.push({ node: n as Text, start: full.length });
             full += n.textContent ?? '';
           }
-          const at = full.indexOf(wanted);
+          // The editor draws spaces as no-break spaces (one character each, so offsets hold).
+          const at = full.replace(/\u00a0/g, ' ').indexOf(wanted);
           if (at < 0) continue;
           const locate = (pos: number): [Text, number] => {
             const p = pieces.find((q) => pos >= q.start && pos <= q.start + (q.node.textContent ?? '').length) ?? pieces[0]!;
@@ -146,12 +147,16 @@ export class Workbench {
   async problemMarkedOn(text: string): Promise<void> {
     await this.page.waitForFunction(
       ({ selector, wanted }) => {
-        const line = Array.from(document.querySelectorAll<HTMLElement>(selector)).find((el) => (el.textContent ?? '').includes(wanted));
+        // The editor draws spaces as no-break spaces.
+        const line = Array.from(document.querySelectorAll<HTMLElement>(selector)).find((el) => (el.textContent ?? '').replace(/\u00a0/g, ' ').includes(wanted));
         const editor = line?.closest('.monaco-editor');
         if (!line || !editor) return false;
-        // The overlay layer draws each line's decorations in a row at the same height as the line.
-        const row = Array.from(editor.querySelectorAll<HTMLElement>('.view-overlays > div')).find((r) => r.style.top === line.style.top);
-        return !!row?.querySelector('[class*="squiggly-"]');
+        // The overlay layer draws each line's decorations (squiggles: `cdr squiggly-error` and the
+        // like) in a row of its own, level with the line.
+        const top = line.getBoundingClientRect().top;
+        return Array.from(editor.querySelectorAll<HTMLElement>('.view-overlays > div')).some(
+          (row) => Math.abs(row.getBoundingClientRect().top - top) < 1 && row.querySelector('.cdr[class*="squiggly-"]') !== null,
+        );
       },
       { selector: EDITOR_LINE, wanted: text },
     );
