@@ -9,13 +9,13 @@ import { PLANTED } from '../planted';
 import type { Workbench } from './workbench';
 
 const DEMO = 'lithium-beam.sublevel';
+const MISTAKES = 'mistakes.sublevel';
 /**
  * Well above one step's deadline (STEP_TIMEOUT_MS, workbench.ts), so that a step that never
  * happens fails with its own message: at load 20–30 on the 2-core machine opening the first file
  * of a fresh workbench took 76–98 s.
  */
 const UI_TEST_TIMEOUT_MS = 300_000;
-const MISTAKES = 'mistakes.sublevel';
 
 export function registerUiTests(wb: () => Workbench): void {
   describe('in the browser window', () => {
