@@ -4,8 +4,8 @@ import * as vscode from 'vscode';
 import { whenEvent } from './events';
 
 export const EXTENSION_ID = 'sublevel-dev.sublevel';
-const DIAGNOSTICS_TIMEOUT_MS = 60_000;
-const EVALUATION_TIMEOUT_MS = 45_000;
+const DIAGNOSTICS_TIMEOUT_MS = 90_000;
+const EVALUATION_TIMEOUT_MS = 90_000;
 
 export function extension(): vscode.Extension<unknown> {
   const ext = vscode.extensions.getExtension(EXTENSION_ID);
