@@ -64,7 +64,12 @@ export class Workbench {
     // The box opens holding ':' (go to line); keep it, or the text becomes a file search.
     await this.quickInput().fill(`:${line}:${column}`);
     await this.page.keyboard.press('Enter');
+    // The cursor moves (and the status bar shows it) while the box still previews the place, before
+    // Enter closes it: keys pressed then go to the box. Wait for the box to close and the editor to
+    // hold the keyboard focus as well.
     await this.page.locator('.statusbar-item', { hasText: `Ln ${line}, Col ${column}` }).waitFor();
+    await this.quickInput().waitFor({ state: 'hidden' });
+    await this.page.locator('.editor-group-container.active .monaco-editor.focused').waitFor();
   }
 
   /** The active editor's rendered line that contains `text`. */
