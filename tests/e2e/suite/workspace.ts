@@ -4,7 +4,8 @@ import * as vscode from 'vscode';
 import { whenEvent } from './events';
 
 export const EXTENSION_ID = 'sublevel-dev.sublevel';
-const DIAGNOSTICS_TIMEOUT_MS = 60_000;
+const DIAGNOSTICS_TIMEOUT_MS = 90_000;
+const EVALUATION_TIMEOUT_MS = 90_000;
 
 export function extension(): vscode.Extension<unknown> {
   const ext = vscode.extensions.getExtension(EXTENSION_ID);
@@ -49,4 +50,24 @@ export function whenDiagnostics<T>(uri: vscode.Uri, probe: (ds: vscode.Diagnosti
     DIAGNOSTICS_TIMEOUT_MS,
     () => listDiagnostics(uri),
   );
+}
+
+/**
+ * Waits until the server's evaluation of the open document is in: an inlay hint containing `label`
+ * (the hints that carry numbers come from the evaluation) is offered for it. A hover asked before
+ * that shows only what the file says: the server waits at most EVALUATION_WAIT_MS
+ * (server/src/service/languageService.ts) for the evaluation. No editor event tells a test that
+ * the hints changed, so it asks again, a moment apart, until the deadline.
+ */
+export async function whenInlayHint(doc: vscode.TextDocument, label: string): Promise<void> {
+  const whole = new vscode.Range(0, 0, doc.lineCount, 0);
+  const deadline = Date.now() + EVALUATION_TIMEOUT_MS;
+  let seen: string[] = [];
+  while (Date.now() < deadline) {
+    const hints = (await vscode.commands.executeCommand<vscode.InlayHint[]>('vscode.executeInlayHintProvider', doc.uri, whole)) ?? [];
+    seen = hints.map((h) => (typeof h.label === 'string' ? h.label : h.label.map((p) => p.value).join('')));
+    if (seen.some((l) => l.includes(label))) return;
+    await new Promise((resolve) => setTimeout(resolve, 200));
+  }
+  assert.fail(`no inlay hint with '${label}' within ${EVALUATION_TIMEOUT_MS} ms; hints now: [${seen.join(' | ')}]`);
 }

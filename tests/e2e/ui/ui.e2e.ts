@@ -10,6 +10,12 @@ import type { Workbench } from './workbench';
 
 const DEMO = 'lithium-beam.sublevel';
 const MISTAKES = 'mistakes.sublevel';
+/**
+ * Well above one step's deadline (STEP_TIMEOUT_MS, workbench.ts), so that a step that never
+ * happens fails with its own message: at load 20–30 on the 2-core machine opening the first file
+ * of a fresh workbench took 76–98 s.
+ */
+const UI_TEST_TIMEOUT_MS = 300_000;
 
 export function registerUiTests(wb: () => Workbench): void {
   describe('in the browser window', () => {
@@ -18,10 +24,10 @@ export function registerUiTests(wb: () => Workbench): void {
       // The language's name from the manifest, shown in the status bar.
       await wb().page.locator('.statusbar-item', { hasText: 'Sublevel setup' }).waitFor();
       await wb().shot('1-demo-open');
-    });
+    }, UI_TEST_TIMEOUT_MS);
 
     it('shows g_J when pointing at a term symbol', async () => {
-      // Inlay hints appear once the server has evaluated the file; point after that.
+      // The inlay hint comes from the server's evaluation of this version: the hover's g_J is in.
       await wb().editorLine('g_J 1.3').waitFor();
       const text = await wb().hoverAt('2P°3/2', 'g_J');
       await wb().shot('2-hover-term');
@@ -29,7 +35,7 @@ export function registerUiTests(wb: () => Workbench): void {
       // Landé g_J of ²P₃/₂ is exactly 4/3 with g_s = 2 (Landé formula, textbook value).
       assert.match(text, /4\/3/, text);
       await wb().page.keyboard.press('Escape');
-    });
+    }, UI_TEST_TIMEOUT_MS);
 
     it('lists the planted mistakes of mistakes.sublevel in the Problems view', async () => {
       await wb().openFile(MISTAKES);
@@ -39,21 +45,18 @@ export function registerUiTests(wb: () => Workbench): void {
         const row = rows.find((r) => r.includes(p.code) && r.includes(`[Ln ${p.line}, Col ${p.column}]`));
         assert.ok(row, `no Problems row for ${p.code} at line ${p.line}, column ${p.column}`);
       }
-    });
+    }, UI_TEST_TIMEOUT_MS);
 
     it("replaces 'uper' by 'upper' with the quick fix", async () => {
       await wb().openFile(MISTAKES);
       await wb().goTo(17, 21);
+      await wb().problemMarkedOn('line D1:');
       await wb().applyQuickFix("'upper'");
-      // The edit reaches the rendered line a moment after the menu closes (longer on a loaded machine).
-      let line = '';
-      for (const deadline = Date.now() + 10_000; Date.now() < deadline; await new Promise((r) => setTimeout(r, 100))) {
-        line = (await wb().editorLine('line D1:').innerText()).replace(/\u00a0/g, ' ');
-        if (/^line D1: ground -> upper\s/.test(line)) break;
-      }
+      // The edit reaches the rendered line a moment after the menu closes.
+      const line = (await wb().editorLine('line D1: ground -> upper').innerText()).replace(/\u00a0/g, ' ');
       await wb().shot('4-quick-fix-applied');
       assert.match(line, /^line D1: ground -> upper\s+#/, line);
-    });
+    }, UI_TEST_TIMEOUT_MS);
 
     it('draws the levels diagram as SVG in the diagram panel', async () => {
       await wb().openFile(DEMO);
@@ -67,6 +70,6 @@ export function registerUiTests(wb: () => Workbench): void {
       // Li7 ground level: I = 3/2, J = 1/2, so (2I+1)(2J+1) = 8 sublevel curves.
       assert.equal(curves, 8, `curves drawn: ${curves}`);
       assert.match(title, /Li7/, title);
-    });
+    }, UI_TEST_TIMEOUT_MS);
   });
 }
