@@ -271,9 +271,10 @@ export function orderFor(sw: SeriesWorkspace, tAbs: number): number {
   const top = sw.top;
   const dropE = DROP_SHARE * sw.tolE;
   const dropM = DROP_SHARE * sw.tolM;
-  // From the top order down, one power a step (a chain of multiplications up would be as long).
+  // t^SERIES_ORDER by squaring (Math.pow cost as much as the rest), then down one power a step.
   const inv = 1 / tAbs;
-  let power = tAbs ** SERIES_ORDER;
+  let power = 1;
+  for (let x = tAbs, e = SERIES_ORDER; e > 0; x *= x, e >>= 1) if (e & 1) power *= x;
   let leftE = 0;
   let leftM = 0;
   for (let j = SERIES_ORDER; j > 1; j--) {
