@@ -267,7 +267,7 @@ const DROP_SHARE = 0.25;
  * tolerances for every |t| ≤ tAbs (|t| ≤ reach).
  */
 export function orderFor(sw: SeriesWorkspace, tAbs: number): number {
-  if (!(tAbs > 1e-100)) return 1;
+  if (!(tAbs > 1e-100)) return 1; // at the anchor (and 1/t would overflow): every term past the first is nil
   const top = sw.top;
   const dropE = DROP_SHARE * sw.tolE;
   const dropM = DROP_SHARE * sw.tolM;
