@@ -3,12 +3,17 @@
  * labels) over 0–0.1 T and 0–1 T against bench/engine_numpy.py computing the same
  * outputs at the same fields with numpy.linalg.eigh with vectors, three ways (a loop
  * over fields of the full 32 × 32 matrix, a loop over fields and m blocks, and the
- * blocked batched call). Prints time ratios (medians and best runs), the cost of the
- * crossing search and of curvatures relative to the plain sweep, and the largest
- * disagreement of the energies; writes .bench-tmp/engine-bench.json.
+ * blocked batched call). The two sides alternate round by round (NumPy as a child process
+ * answering one timed run per request), each round timing one NumPy call and a window of
+ * engine sweeps about as long, so that both see the same load over the same length of time.
+ * Prints the round-by-round CPU-time ratios (median and quartiles), the ratio of each side's
+ * CPU medians and of the best runs, the cost of the crossing search and of curvatures
+ * relative to the plain sweep, and the largest disagreement of the energies; writes
+ * .bench-tmp/engine-bench.json.
  */
-import { spawnSync } from 'node:child_process';
+import { spawn } from 'node:child_process';
 import { readFileSync, writeFileSync } from 'node:fs';
+import { createInterface } from 'node:readline';
 import { sweepLevel } from '../server/src/physics/engine';
 import type { HyperfineLevelSpec } from '../server/src/physics/engine';
 
@@ -26,6 +31,9 @@ const NUMPY_VARIANTS = [
   ['blocked', 'blocked, batched eigh'],
 ] as const;
 const GOAL_VS_BLOCKED = 5;
+/** Alternated rounds against the blocked NumPy call (about 25 ms each), and against each loop (150–450 ms). */
+const ROUNDS = 31;
+const LOOP_ROUNDS = 5;
 
 /** Wall and CPU time of this process, ms. Under load from other processes the CPU time is the steadier one. */
 interface Timing {
@@ -87,22 +95,103 @@ function disagreement(a: Float64Array, b: Float64Array, states: number): { maxRe
   return { maxRel, maxAbsHz: maxAbs };
 }
 
-/** The NumPy side in its own process, single-threaded BLAS (tiny matrices: threads only add contention; the engine is single-threaded too). */
-function runNumpy(fromT: number, toT: number, binFile: string): { status: number | null; stdout: string; stderr: string } {
-  const env: NodeJS.ProcessEnv = { ...process.env, OMP_NUM_THREADS: '1', OPENBLAS_NUM_THREADS: '1', MKL_NUM_THREADS: '1' };
-  const args = ['bench/engine_numpy.py', '--points', String(POINTS), '--from-t', String(fromT), '--to-t', String(toT), '--out', binFile];
-  return spawnSync('python3', args, { encoding: 'utf8', env });
+/** One timed NumPy run, ms. */
+interface NumpyRun {
+  cpuMs: number;
+  wallMs: number;
 }
 
-function benchRange(fromT: number, toT: number): Record<string, unknown> {
+/**
+ * The NumPy side in its own process (`engine_numpy.py --serve`), single-threaded BLAS (tiny
+ * matrices: threads only add contention; the engine is single-threaded too): `run(variant)`
+ * asks for one timed run of a variant and resolves with its times.
+ */
+interface NumpyServer {
+  info: { numpy: string; states: number };
+  run(variant: string): Promise<NumpyRun>;
+  close(): void;
+}
+
+function startNumpy(fromT: number, toT: number, binFile: string): Promise<NumpyServer> {
+  const env: NodeJS.ProcessEnv = { ...process.env, OMP_NUM_THREADS: '1', OPENBLAS_NUM_THREADS: '1', MKL_NUM_THREADS: '1' };
+  const args = ['bench/engine_numpy.py', '--points', String(POINTS), '--from-t', String(fromT), '--to-t', String(toT), '--out', binFile, '--serve'];
+  const child = spawn('python3', args, { env, stdio: ['pipe', 'pipe', 'pipe'] });
+  let stderr = '';
+  child.stderr.on('data', (d: Buffer) => (stderr += d.toString()));
+  const waiting: { resolve: (line: string) => void; reject: (e: Error) => void }[] = [];
+  const failAll = (why: string): void => {
+    for (const w of waiting.splice(0)) w.reject(new Error(why));
+  };
+  createInterface({ input: child.stdout }).on('line', (line) => waiting.shift()?.resolve(line));
+  child.on('error', (e) => failAll(e.message));
+  child.on('exit', () => failAll(stderr.trim().split('\n').pop() || 'python3 exited'));
+  const next = (): Promise<string> => new Promise((resolve, reject) => waiting.push({ resolve, reject }));
+  return next().then((first) => ({
+    info: JSON.parse(first) as NumpyServer['info'],
+    run(variant: string): Promise<NumpyRun> {
+      const answer = next();
+      child.stdin.write(`${variant}\n`);
+      return answer.then((line) => JSON.parse(line) as NumpyRun);
+    },
+    close(): void {
+      child.stdin.end('\n');
+    },
+  }));
+}
+
+/** CPU and wall time per sweep of a window of `count` sweeps, ms. */
+function engineWindow(runEngine: () => void, count: number): NumpyRun {
+  const c0 = process.cpuUsage();
+  const t0 = process.hrtime.bigint();
+  for (let i = 0; i < count; i++) runEngine();
+  const wallMs = Number(process.hrtime.bigint() - t0) / 1e6 / count;
+  const c = process.cpuUsage(c0);
+  return { cpuMs: (c.user + c.system) / 1e3 / count, wallMs };
+}
+
+function quartilesOf(xs: number[]): [number, number, number] {
+  const s = [...xs].sort((a, b) => a - b);
+  return [s[Math.floor(s.length / 4)], s[Math.floor(s.length / 2)], s[Math.floor((3 * s.length) / 4)]];
+}
+
+interface Alternated {
+  engineCpu: number[];
+  numpyCpu: number[];
+  ratios: number[];
+  wallRatios: number[];
+  windowSweeps: number;
+}
+
+/**
+ * `rounds` rounds of one NumPy run of `variant` and a window of engine sweeps about as long
+ * (from a first NumPy run), the side that goes first alternating from round to round.
+ */
+async function alternate(np: NumpyServer, variant: string, runEngine: () => void, engineMs: number, rounds: number): Promise<Alternated> {
+  const first = await np.run(variant);
+  const windowSweeps = Math.max(1, Math.round(first.cpuMs / engineMs));
+  const out: Alternated = { engineCpu: [], numpyCpu: [], ratios: [], wallRatios: [], windowSweeps };
+  for (let r = 0; r < rounds; r++) {
+    let ours: NumpyRun;
+    let theirs: NumpyRun;
+    if (r % 2 === 0) {
+      ours = engineWindow(runEngine, windowSweeps);
+      theirs = await np.run(variant);
+    } else {
+      theirs = await np.run(variant);
+      ours = engineWindow(runEngine, windowSweeps);
+    }
+    out.engineCpu.push(ours.cpuMs);
+    out.numpyCpu.push(theirs.cpuMs);
+    out.ratios.push(theirs.cpuMs / ours.cpuMs);
+    out.wallRatios.push(theirs.wallMs / ours.wallMs);
+  }
+  return out;
+}
+
+async function benchRange(fromT: number, toT: number): Promise<Record<string, unknown>> {
   const label = `${fromT}–${toT} T`;
-  // The engine is timed before and after the NumPy run and the median taken over both
-  // halves, so a burst of load on a shared machine does not favour either side.
   const engineTimes: Samples = { wall: [], cpu: [] };
   const runEngine = (): void => void sweepLevel(CS_6P32, fromT, toT, POINTS, { crossings: false });
-  timeRuns(runEngine, RUNS, engineTimes);
-  const binFile = `.bench-tmp/engine_numpy_${toT}.bin`;
-  const py = runNumpy(fromT, toT, binFile);
   const plain = timeRuns(runEngine, RUNS, engineTimes);
   // Crossing search and curvature, interleaved with the plain sweep so that their ratios see the same load.
   const plainAgain: Samples = { wall: [], cpu: [] };
@@ -138,36 +227,49 @@ function benchRange(fromT: number, toT: number): Record<string, unknown> {
     curvatureBest,
     crossings: sweep.crossings.length,
   };
-  if (py.status !== 0) {
-    console.log(`  NumPy side skipped (python3 failed): ${py.stderr.trim().split('\n').pop() ?? ''}`);
+  const binFile = `.bench-tmp/engine_numpy_${toT}.bin`;
+  let np: NumpyServer;
+  try {
+    np = await startNumpy(fromT, toT, binFile);
+  } catch (e) {
+    console.log(`  NumPy side skipped (python3 failed): ${(e as Error).message}`);
     return result;
   }
-  const np = JSON.parse(py.stdout.trim().split('\n').pop() as string) as Record<string, { medianMs: number; bestMs: number; cpuMedianMs: number; cpuBestMs: number }> & {
-    numpy: string;
-    states: number;
-  };
   const raw = readFileSync(binFile);
   const all = new Float64Array(raw.buffer, raw.byteOffset, raw.byteLength / 8);
-  const n = np.states;
+  const n = np.info.states;
   const ours = sortedTable(POINTS, sweep.states.map((s) => s.energyHz));
-  console.log(`  NumPy ${np.numpy}, eigh with vectors, same fields and outputs (${np.repeats} runs); engine faster by (CPU medians, CPU best, wall medians):`);
-  NUMPY_VARIANTS.forEach(([key, what], v) => {
-    const t = np[key];
-    const d = disagreement(ours, all.subarray(v * POINTS * n, (v + 1) * POINTS * n), n);
-    const ratio = t.cpuMedianMs / plain.cpuMedian;
-    const best = t.cpuBestMs / plain.cpuMin;
-    const wall = t.medianMs / plain.median;
-    const goal = key === 'blocked' ? ` (goal ≥ ${GOAL_VS_BLOCKED}×)` : '';
-    console.log(`    ${what.padEnd(38)} CPU ${t.cpuMedianMs.toFixed(1).padStart(7)} ms → ${ratio.toFixed(1)}×, ${best.toFixed(1)}×, ${wall.toFixed(1)}×${goal}`);
-    console.log(`    ${''.padEnd(38)} energies agree to ${d.maxRel.toExponential(2)} relative, ${d.maxAbsHz.toExponential(2)} Hz`);
-    result[key] = { ...t, ratio, bestRatio: best, wallRatio: wall, disagreement: d };
-  });
+  console.log(
+    `  NumPy ${np.info.numpy}, eigh with vectors, same fields and outputs, alternating with the engine round by round (each round one NumPy call`,
+  );
+  console.log('  and engine sweeps for about as long, CPU time per sweep); engine faster by:');
+  try {
+    for (const [v, [key, what]] of NUMPY_VARIANTS.entries()) {
+      const rounds = key === 'blocked' ? ROUNDS : LOOP_ROUNDS;
+      const alt = await alternate(np, key, runEngine, plain.cpuMedian, rounds);
+      const d = disagreement(ours, all.subarray(v * POINTS * n, (v + 1) * POINTS * n), n);
+      const [low, mid, high] = quartilesOf(alt.ratios);
+      const ofMedians = median(alt.numpyCpu) / median(alt.engineCpu);
+      const ofBest = Math.min(...alt.numpyCpu) / Math.min(...alt.engineCpu);
+      const wall = median(alt.wallRatios);
+      const goal = key === 'blocked' ? ` (goal ≥ ${GOAL_VS_BLOCKED}× round by round)` : '';
+      console.log(`    ${what} (CPU median ${median(alt.numpyCpu).toFixed(1)} ms; engine ${median(alt.engineCpu).toFixed(2)} ms a sweep, ${alt.windowSweeps} sweeps a round):`);
+      console.log(
+        `      round by round ${mid.toFixed(1)}× (quartiles ${low.toFixed(1)}–${high.toFixed(1)}×, ${rounds} rounds)${goal}; CPU medians ${ofMedians.toFixed(1)}×, best ${ofBest.toFixed(1)}×, wall round by round ${wall.toFixed(1)}×`,
+      );
+      console.log(`      energies agree to ${d.maxRel.toExponential(2)} relative, ${d.maxAbsHz.toExponential(2)} Hz`);
+      result[key] = { roundRatio: mid, roundQuartiles: [low, high], ratioOfCpuMedians: ofMedians, ratioOfBest: ofBest, wallRatio: wall, numpyCpuMedianMs: median(alt.numpyCpu), engineCpuMedianMs: median(alt.engineCpu), windowSweeps: alt.windowSweeps, rounds, disagreement: d };
+    }
+  } finally {
+    np.close();
+  }
   return result;
 }
 
-function main(): void {
-  const results = RANGES.map(([from, to]) => benchRange(from, to));
+async function main(): Promise<void> {
+  const results: Record<string, unknown>[] = [];
+  for (const [from, to] of RANGES) results.push(await benchRange(from, to));
   writeFileSync('.bench-tmp/engine-bench.json', JSON.stringify(results, null, 2));
 }
 
-main();
+void main();

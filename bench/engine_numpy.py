@@ -15,10 +15,15 @@ diagonal B*z, written in place, and the moments are sum_i v_ik^2 z_i.
 Prints one JSON line with timings; writes the energy tables (sorted per field, float64
 little-endian, in the order loop-full, loop-blocks, blocked) to --out for the accuracy
 comparison.
+With --serve it writes the tables, prints one JSON line (version, states) and then runs one
+variant per line read from stdin (its name), answering each with one JSON line of that run's
+CPU and wall time (ms): the engine bench alternates its own runs with these, round by round,
+so that both sides see the same load.
 """
 import argparse
 import json
 import statistics
+import sys
 import time
 
 import numpy as np
@@ -120,6 +125,20 @@ def timed(fn, repeats):
     return stats, result
 
 
+def serve(h0, z, two_m, fields, variants):
+    """One timed run per variant name read from stdin; an empty line ends."""
+    for line in sys.stdin:
+        name = line.strip()
+        if not name:
+            break
+        fn = variants[name]
+        w0, c0 = time.perf_counter(), time.process_time()
+        fn(h0, z, two_m, fields)
+        cpu = (time.process_time() - c0) * 1e3
+        wall = (time.perf_counter() - w0) * 1e3
+        print(json.dumps({"cpuMs": cpu, "wallMs": wall}), flush=True)
+
+
 def main():
     ap = argparse.ArgumentParser()
     ap.add_argument("--points", type=int, default=2001)
@@ -127,10 +146,19 @@ def main():
     ap.add_argument("--to-t", type=float, default=1.0)
     ap.add_argument("--repeats", type=int, default=7)
     ap.add_argument("--out", required=True)
+    ap.add_argument("--serve", action="store_true")
     args = ap.parse_args()
     fields = np.linspace(args.from_t, args.to_t, args.points)
     h0, z, two_m = parts()
     variants = {"loopFull": loop_full, "loopBlocks": loop_blocks, "blocked": blocked}
+    if args.serve:
+        with open(args.out, "wb") as f:
+            for fn in variants.values():
+                e, _ = fn(h0, z, two_m, fields)
+                np.ascontiguousarray(np.sort(e, axis=1), dtype="<f8").tofile(f)
+        print(json.dumps({"numpy": np.__version__, "points": args.points, "states": len(z)}), flush=True)
+        serve(h0, z, two_m, fields, variants)
+        return
     times = {}
     with open(args.out, "wb") as f:
         for name, fn in variants.items():

@@ -8,7 +8,8 @@
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { SERIES_ORDER, expandAt, makeSeriesWorkspace, seriesValueAt } from '../../server/src/physics/engine/perturbationSeries';
+import { PLANCK_H } from '../../server/src/physics/constants';
+import { SERIES_ORDER, evaluateSeries, expandAt, makeSeriesWorkspace, orderFor, seriesValueAt } from '../../server/src/physics/engine/perturbationSeries';
 
 interface SeriesCase {
   values: number[];
@@ -67,6 +68,42 @@ describe('perturbation series against the textbook recursion (mpmath) and NumPy 
         }
       });
       expect(compared).toBeGreaterThanOrEqual(2);
+    });
+  });
+
+  ref.cases.forEach((c, i) => {
+    it(`case ${i + 1}: the sweep's evaluation, each four points to the order orderFor gives, equals NumPy eigvalsh and the whole series`, () => {
+      const { n, sw, scale } = expand(c);
+      const reach = sw.reach * sw.scaleT;
+      // The reference offsets inside the reach, then points from near the anchor out to the reach.
+      const inside = c.offsets.map((t, o) => ({ t, o })).filter(({ t }) => Math.abs(t) <= reach);
+      const spread = Array.from({ length: 23 }, (_, r) => reach * (r % 2 ? -1 : 1) * 1.5 ** (r - 22));
+      const fieldsT = Float64Array.from([...inside.map(({ t }) => t), ...spread]);
+      const points = fieldsT.length;
+      const store = new Float64Array(2 * n * points);
+      evaluateSeries(sw, n, fieldsT, 0, 0, points, { store, base: 0, stride: 2 * points, points, curvature: false });
+      const out = new Float64Array(2);
+      const zScale = Math.max(...c.zeeman.map(Math.abs));
+      for (let k = 0; k < n; k++) {
+        // Measured up to 8e-16 of the scale against NumPy, as the whole series.
+        inside.forEach(({ o }, r) => expect(Math.abs(store[k * 2 * points + r] - c.exact[o][k])).toBeLessThanOrEqual(1e-14 * scale));
+        for (let r = 0; r < points; r++) {
+          seriesValueAt(sw, k, fieldsT[r], out);
+          // Left-out terms: at most a quarter of the series' truncation tolerances (1e-16 of the energies, 1e-15 of the moments).
+          expect(Math.abs(store[k * 2 * points + r] - out[0])).toBeLessThanOrEqual(1e-15 * scale);
+          expect(Math.abs(store[k * 2 * points + points + r] + PLANCK_H * out[1])).toBeLessThanOrEqual(1e-14 * PLANCK_H * zScale);
+        }
+      }
+    });
+
+    it(`case ${i + 1}: orderFor leaves out more orders nearer the anchor, none at the reach`, () => {
+      const { sw } = expand(c);
+      const orders = [1e-6, 1e-3, 0.1, 0.5, 1].map((f) => orderFor(sw, f * sw.reach));
+      for (let q = 1; q < orders.length; q++) expect(orders[q]).toBeGreaterThanOrEqual(orders[q - 1]);
+      expect(orders[0]).toBeLessThanOrEqual(3);
+      expect(orders[2]).toBeLessThan(SERIES_ORDER);
+      expect(orders[4]).toBeGreaterThanOrEqual(SERIES_ORDER - 2);
+      expect(orderFor(sw, 0)).toBe(1);
     });
   });
 });

@@ -51,6 +51,11 @@ export interface SeriesWorkspace {
   scaleT: number;
   /** Largest |t| where the truncation is below the TRUNCATION_* tolerances. */
   reach: number;
+  /** max over the states of |c_kj| at j (orderFor). */
+  top: Float64Array;
+  /** The energy's and the slope dE/dt's truncation tolerances, in the series' units. */
+  tolE: number;
+  tolM: number;
 }
 
 /** Highest order of the states Ψ_j: Wigner's 2n + 1 rule gets energies to SERIES_ORDER from these. */
@@ -72,6 +77,9 @@ export function makeSeriesWorkspace(n: number): SeriesWorkspace {
     overlap: new Float64Array(s1 * s1 * n),
     scaleT: 0,
     reach: 0,
+    top: new Float64Array(k1),
+    tolE: 0,
+    tolM: 0,
   };
 }
 
@@ -233,92 +241,146 @@ export function expandAt(values: Float64Array, vectors: Float64Array, z: Float64
     }
   }
   const tolC = curvature ? TRUNCATION_C * curv + 1e-300 : 0;
-  const reach = reachOf(sw.coef, n, TRUNCATION_E * scaleE, TRUNCATION_M * maxZ * scaleT, tolC);
+  sw.tolE = TRUNCATION_E * scaleE;
+  sw.tolM = TRUNCATION_M * maxZ * scaleT;
+  const reach = reachOf(sw.coef, n, sw.tolE, sw.tolM, tolC);
   if (!(reach > 0)) return;
+  for (let j = 0; j <= SERIES_ORDER; j++) {
+    let c = 0;
+    for (let k = 0; k < n; k++) c = Math.max(c, Math.abs(sw.coef[k * (SERIES_ORDER + 1) + j]));
+    sw.top[j] = c;
+  }
   sw.scaleT = scaleT;
   sw.reach = reach;
 }
 
 /**
- * Points `from` … `to` − 1 of state k from the series around the anchor field: the
- * energy (Hz) goes to store[energyRow + r], the moment −h dE/dB (J/T) to
- * store[momentRow + r] and, if curvatureRow ≥ 0, d²E/dB² (Hz/T²) to
- * store[curvatureRow + r]. Horner's rule, four points per pass: one point's chain is
- * a row of dependent multiply-adds, so four independent chains keep the processor's
- * pipelines full (about 3× faster than one point at a time; same operations, same numbers).
+ * Share of the truncation tolerances that the terms an evaluation leaves out (orderFor) may
+ * add to the truncation of the whole series: nearer the anchor the high orders are far below
+ * round-off, so evaluating them only costs time.
  */
-export function evaluateSeries(
-  sw: SeriesWorkspace,
-  k: number,
-  fieldsT: Float64Array,
-  anchorT: number,
-  from: number,
-  to: number,
-  store: Float64Array,
-  energyRow: number,
-  momentRow: number,
-  curvatureRow: number,
-): void {
+const DROP_SHARE = 0.25;
+
+/**
+ * The lowest order ≥ 1 at which the terms left out, bounded with each order's largest
+ * coefficient over the states, stay within DROP_SHARE of the energy's and the slope's
+ * tolerances for every |t| ≤ tAbs (|t| ≤ reach).
+ */
+export function orderFor(sw: SeriesWorkspace, tAbs: number): number {
+  if (!(tAbs > 1e-100)) return 1; // at the anchor (and 1/t would overflow): every term past the first is nil
+  const top = sw.top;
+  const dropE = DROP_SHARE * sw.tolE;
+  const dropM = DROP_SHARE * sw.tolM;
+  // t^SERIES_ORDER by squaring (Math.pow cost as much as the rest), then down one power a step.
+  const inv = 1 / tAbs;
+  let power = 1;
+  for (let x = tAbs, e = SERIES_ORDER; e > 0; x *= x, e >>= 1) if (e & 1) power *= x;
+  let leftE = 0;
+  let leftM = 0;
+  for (let j = SERIES_ORDER; j > 1; j--) {
+    const term = top[j] * power;
+    leftE += term;
+    leftM += j * term * inv;
+    if (!(leftE <= dropE && leftM <= dropM)) return j;
+    power *= inv;
+  }
+  return 1;
+}
+
+/** Where a block's series values go: state k, point r at base + k·stride + r; the moment `points` later, the curvature 2·`points`. */
+export interface SeriesTarget {
+  store: Float64Array;
+  base: number;
+  stride: number;
+  points: number;
+  curvature: boolean;
+}
+
+/**
+ * Points `from` … `to` − 1 of every state of the block (n states) from the series around the
+ * anchor field: energies (Hz), moments −h dE/dB (J/T) and, if asked for, d²E/dB² (Hz/T²) into
+ * `target`. Horner's rule, four points per pass: one point's chain is a row of dependent
+ * multiply-adds, so four independent chains keep the processor's pipelines full (about 3×
+ * faster than one point at a time). Energies and moments of each four points go to the order
+ * their farthest point needs (orderFor; on the Cs 6P3/2 sweeps 10.5 of 16 on average), found
+ * once for all the block's states; curvatures to SERIES_ORDER.
+ */
+export function evaluateSeries(sw: SeriesWorkspace, n: number, fieldsT: Float64Array, anchorT: number, from: number, to: number, target: SeriesTarget): void {
+  const { store, stride, points } = target;
   const c = sw.coef;
   const d = sw.slope;
-  const base = k * (SERIES_ORDER + 1);
-  const dBase = k * SERIES_ORDER - 1; // d[dBase + j] = j c_j
   const inv = 1 / sw.scaleT;
   const momentPerUnit = -PLANCK_H * inv;
-  const top = c[base + SERIES_ORDER];
-  const dTop = d[dBase + SERIES_ORDER];
-  const c0 = c[base];
   let r = from;
   for (; r + 4 <= to; r += 4) {
     const t0 = (fieldsT[r] - anchorT) * inv;
     const t1 = (fieldsT[r + 1] - anchorT) * inv;
     const t2 = (fieldsT[r + 2] - anchorT) * inv;
     const t3 = (fieldsT[r + 3] - anchorT) * inv;
-    let e0 = top;
-    let e1 = top;
-    let e2 = top;
-    let e3 = top;
-    let s0 = dTop;
-    let s1 = dTop;
-    let s2 = dTop;
-    let s3 = dTop;
-    for (let j = SERIES_ORDER - 1; j >= 1; j--) {
-      const cj = c[base + j];
-      const dj = d[dBase + j];
-      e0 = e0 * t0 + cj;
-      e1 = e1 * t1 + cj;
-      e2 = e2 * t2 + cj;
-      e3 = e3 * t3 + cj;
-      s0 = s0 * t0 + dj;
-      s1 = s1 * t1 + dj;
-      s2 = s2 * t2 + dj;
-      s3 = s3 * t3 + dj;
+    const order = orderFor(sw, Math.max(Math.abs(t0), Math.abs(t3)));
+    for (let k = 0, at = target.base + r; k < n; k++, at += stride) {
+      const base = k * (SERIES_ORDER + 1);
+      const dBase = k * SERIES_ORDER - 1; // d[dBase + j] = j c_j
+      const top = c[base + order];
+      const dTop = d[dBase + order];
+      const c0 = c[base];
+      let e0 = top;
+      let e1 = top;
+      let e2 = top;
+      let e3 = top;
+      let s0 = dTop;
+      let s1 = dTop;
+      let s2 = dTop;
+      let s3 = dTop;
+      for (let j = order - 1; j >= 1; j--) {
+        const cj = c[base + j];
+        const dj = d[dBase + j];
+        e0 = e0 * t0 + cj;
+        e1 = e1 * t1 + cj;
+        e2 = e2 * t2 + cj;
+        e3 = e3 * t3 + cj;
+        s0 = s0 * t0 + dj;
+        s1 = s1 * t1 + dj;
+        s2 = s2 * t2 + dj;
+        s3 = s3 * t3 + dj;
+      }
+      store[at] = e0 * t0 + c0;
+      store[at + 1] = e1 * t1 + c0;
+      store[at + 2] = e2 * t2 + c0;
+      store[at + 3] = e3 * t3 + c0;
+      store[at + points] = s0 * momentPerUnit;
+      store[at + points + 1] = s1 * momentPerUnit;
+      store[at + points + 2] = s2 * momentPerUnit;
+      store[at + points + 3] = s3 * momentPerUnit;
     }
-    store[energyRow + r] = e0 * t0 + c0;
-    store[energyRow + r + 1] = e1 * t1 + c0;
-    store[energyRow + r + 2] = e2 * t2 + c0;
-    store[energyRow + r + 3] = e3 * t3 + c0;
-    store[momentRow + r] = s0 * momentPerUnit;
-    store[momentRow + r + 1] = s1 * momentPerUnit;
-    store[momentRow + r + 2] = s2 * momentPerUnit;
-    store[momentRow + r + 3] = s3 * momentPerUnit;
   }
   for (; r < to; r++) {
     const t = (fieldsT[r] - anchorT) * inv;
-    let e = top;
-    let s = dTop;
-    for (let j = SERIES_ORDER - 1; j >= 1; j--) {
-      e = e * t + c[base + j];
-      s = s * t + d[dBase + j];
+    const order = orderFor(sw, Math.abs(t));
+    for (let k = 0, at = target.base + r; k < n; k++, at += stride) {
+      const base = k * (SERIES_ORDER + 1);
+      const dBase = k * SERIES_ORDER - 1;
+      let e = c[base + order];
+      let s = d[dBase + order];
+      for (let j = order - 1; j >= 1; j--) {
+        e = e * t + c[base + j];
+        s = s * t + d[dBase + j];
+      }
+      store[at] = e * t + c[base];
+      store[at + points] = s * momentPerUnit;
     }
-    store[energyRow + r] = e * t + c0;
-    store[momentRow + r] = s * momentPerUnit;
   }
-  if (curvatureRow < 0) return;
-  // d²E/dB², four fields a pass like the above.
+  if (target.curvature) for (let k = 0; k < n; k++) evaluateCurvature(sw, k, fieldsT, anchorT, from, to, store, target.base + k * stride + 2 * points);
+}
+
+/** d²E/dB² of state k at points `from` … `to` − 1 into store[row + r], four points a pass like evaluateSeries. */
+function evaluateCurvature(sw: SeriesWorkspace, k: number, fieldsT: Float64Array, anchorT: number, from: number, to: number, store: Float64Array, row: number): void {
+  const inv = 1 / sw.scaleT;
   const b = sw.bend;
+  const dBase = k * SERIES_ORDER - 1;
   const bTop = b[dBase + SERIES_ORDER];
-  for (r = from; r + 4 <= to; r += 4) {
+  let r = from;
+  for (; r + 4 <= to; r += 4) {
     const t0 = (fieldsT[r] - anchorT) * inv;
     const t1 = (fieldsT[r + 1] - anchorT) * inv;
     const t2 = (fieldsT[r + 2] - anchorT) * inv;
@@ -334,16 +396,16 @@ export function evaluateSeries(
       b2 = b2 * t2 + bj;
       b3 = b3 * t3 + bj;
     }
-    store[curvatureRow + r] = b0 * inv * inv;
-    store[curvatureRow + r + 1] = b1 * inv * inv;
-    store[curvatureRow + r + 2] = b2 * inv * inv;
-    store[curvatureRow + r + 3] = b3 * inv * inv;
+    store[row + r] = b0 * inv * inv;
+    store[row + r + 1] = b1 * inv * inv;
+    store[row + r + 2] = b2 * inv * inv;
+    store[row + r + 3] = b3 * inv * inv;
   }
   for (; r < to; r++) {
     const t = (fieldsT[r] - anchorT) * inv;
     let d2 = bTop;
     for (let j = SERIES_ORDER - 1; j >= 2; j--) d2 = d2 * t + b[dBase + j];
-    store[curvatureRow + r] = d2 * inv * inv;
+    store[row + r] = d2 * inv * inv;
   }
 }
 
