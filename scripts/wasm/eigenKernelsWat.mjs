@@ -282,6 +282,65 @@ function moves() {
       (br $rl))))`;
 }
 
+/**
+ * multiply(a, as, b, bs, c, cs, rows, inner, cols): c = a · b for a rows × inner, b inner × cols
+ * (row-major, strides as, bs, cs in doubles), the products of the divide-and-conquer merges
+ * (divideConquerTridiagonal.ts). Tiles of 4 rows × 4 columns: eight pairs of sums stay in
+ * registers while the inner index runs, each step loading two pairs of b and four entries of a.
+ * rows and cols are rounded up to 4, so up to three more rows and columns are read and written.
+ */
+function multiply() {
+  const idx = [0, 1, 2, 3];
+  const acc = (q, h) => `$c${q}${h}`;
+  return `
+  (func $multiply (export "multiply")
+    (param $a i32) (param $as i32) (param $b i32) (param $bs i32) (param $c i32) (param $cs i32) (param $rows i32) (param $inner i32) (param $cols i32)
+    (local $i i32) (local $j i32) (local $l i32) (local $bp i32) (local $ap i32) (local $arow i32) (local $crow i32) (local $astep i32) (local $bstep i32) (local $cstep i32)
+    (local $b0 v128) (local $b1 v128) (local $x v128)
+    ${idx.map((q) => `(local ${acc(q, 0)} v128) (local ${acc(q, 1)} v128)`).join(' ')}
+    (local.set $astep (i32.shl (local.get $as) (i32.const 3)))
+    (local.set $bstep (i32.shl (local.get $bs) (i32.const 3)))
+    (local.set $cstep (i32.shl (local.get $cs) (i32.const 3)))
+    (local.set $i (i32.const 0))
+    (block $i_done (loop $il
+      (br_if $i_done (i32.ge_s (local.get $i) (local.get $rows)))
+      (local.set $arow (i32.add (local.get $a) (i32.mul (local.get $i) (local.get $astep))))
+      (local.set $crow (i32.add (local.get $c) (i32.mul (local.get $i) (local.get $cstep))))
+      (local.set $j (i32.const 0))
+      (block $j_done (loop $jl
+        (br_if $j_done (i32.ge_s (local.get $j) (local.get $cols)))
+        ${idx.map((q) => `(local.set ${acc(q, 0)} (v128.const f64x2 0 0)) (local.set ${acc(q, 1)} (v128.const f64x2 0 0))`).join('\n        ')}
+        (local.set $bp (i32.add (local.get $b) (i32.shl (local.get $j) (i32.const 3))))
+        (local.set $ap (local.get $arow))
+        (local.set $l (local.get $inner))
+        (block $l_done (loop $ll
+          (br_if $l_done (i32.le_s (local.get $l) (i32.const 0)))
+          (local.set $b0 (v128.load (local.get $bp)))
+          (local.set $b1 (v128.load offset=16 (local.get $bp)))
+          ${idx
+            .map(
+              (q) => `(local.set $x (f64x2.splat (f64.load ${q === 0 ? '' : `(i32.add (local.get $ap) (i32.mul (local.get $astep) (i32.const ${q})))`}${q === 0 ? '(local.get $ap)' : ''})))
+          (local.set ${acc(q, 0)} (f64x2.add (local.get ${acc(q, 0)}) (f64x2.mul (local.get $x) (local.get $b0))))
+          (local.set ${acc(q, 1)} (f64x2.add (local.get ${acc(q, 1)}) (f64x2.mul (local.get $x) (local.get $b1))))`,
+            )
+            .join('\n          ')}
+          (local.set $ap (i32.add (local.get $ap) (i32.const 8)))
+          (local.set $bp (i32.add (local.get $bp) (local.get $bstep)))
+          (local.set $l (i32.sub (local.get $l) (i32.const 1)))
+          (br $ll)))
+        ${idx
+          .map(
+            (q) => `(v128.store (i32.add (local.get $crow) (i32.add (i32.shl (local.get $j) (i32.const 3)) (i32.mul (local.get $cstep) (i32.const ${q})))) (local.get ${acc(q, 0)}))
+        (v128.store offset=16 (i32.add (local.get $crow) (i32.add (i32.shl (local.get $j) (i32.const 3)) (i32.mul (local.get $cstep) (i32.const ${q})))) (local.get ${acc(q, 1)}))`,
+          )
+          .join('\n        ')}
+        (local.set $j (i32.add (local.get $j) (i32.const 4)))
+        (br $jl)))
+      (local.set $i (i32.add (local.get $i) (i32.const 4)))
+      (br $il)))
+  )`;
+}
+
 /** The whole module: one exported memory (grown by the caller) and the kernels. */
 export function eigenKernelsWat() {
   return `(module
@@ -290,6 +349,7 @@ ${tridiagonalise()}
 ${packReflectors()}
 ${applyReflectors()}
 ${moves()}
+${multiply()}
 )
 `;
 }

@@ -10,6 +10,7 @@
  * SIMD is missing, `simdKernelsAvailable()` is false and the caller keeps the JavaScript route,
  * which stays the reference the tests compare against.
  */
+import { divideConquerTridiagonal, type MergeProducts, productStride } from './divideConquerTridiagonal';
 import { EIGEN_KERNELS_BASE64 } from './eigenKernelsBinary';
 import { tridiagonalValues } from './tridiagonalValues';
 import { tridiagonalEigenpairs } from './tridiagonalVectors';
@@ -25,7 +26,15 @@ interface EigenKernels {
   maxAbs(src: number, count: number): number;
   packScaled(src: number, n: number, ns: number, dst: number, factor: number): void;
   unpackTransposed(z: number, ns: number, n: number, out: number): void;
+  multiply(a: number, as: number, b: number, bs: number, c: number, cs: number, rows: number, inner: number, cols: number): void;
 }
+
+/**
+ * From this order on the tridiagonal's eigenpairs come from divide and conquer
+ * (divideConquerTridiagonal.ts, its products in the `multiply` kernel); below it from QR values
+ * and inverse iteration (tridiagonalVectors.ts). Set by bench/eigen.bench.ts (docs/engine.md).
+ */
+export const DIVIDE_MIN_ORDER = 48;
 
 /** undefined: not tried yet; null: this runtime cannot run the module. */
 let kernels: EigenKernels | null | undefined;
@@ -62,6 +71,10 @@ interface Layout {
   p: number;
   /** The caller's n × n matrix, in and out. */
   stage: number;
+  /** The divide and conquer's product operands (productStride(n) wide). */
+  pv: number;
+  pg: number;
+  pw: number;
 }
 
 function layout(n: number, memory: WebAssembly.Memory): Layout {
@@ -70,8 +83,11 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
   const square = 8 * ns * Math.max(n, rows);
   const vector = 8 * (ns + 2);
   const v = 3 * square;
-  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, stage: v + 5 * vector };
-  const bytes = l.stage + 8 * n * n;
+  const stage = v + 5 * vector;
+  const operand = 8 * (n + 4) * productStride(n);
+  const pv = stage + 8 * n * n;
+  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, stage, pv, pg: pv + operand, pw: pv + 2 * operand };
+  const bytes = l.pw + operand;
   const pages = Math.ceil((bytes - memory.buffer.byteLength) / 65536);
   if (pages > 0) memory.grow(pages);
   return l;
@@ -98,11 +114,15 @@ export function simdHouseholderInverseIteration(a: Float64Array, n: number, valu
   k.tridiagonalise(l.a, ns, n, l.d, l.e, l.betas, l.v, l.p);
   const d = heap.subarray(l.d / 8, l.d / 8 + n);
   const e = heap.subarray(l.e / 8, l.e / 8 + n);
-  // Row k of the tridiagonal's vectors into the stage, then into z with the padded stride.
   const stage = heap.subarray(l.stage / 8, l.stage / 8 + n * n);
-  if (!tridiagonalEigenpairs(d, e, n, values, stage, tridiagonalValues)) return false;
   heap.fill(0, (l.z + 8 * n * ns) / 8, (l.z + 8 * l.rows * ns) / 8);
-  k.packScaled(l.stage, n, ns, l.z, 1);
+  // Row k of z (stride ns): the tridiagonal's k-th eigenvector.
+  if (n >= DIVIDE_MIN_ORDER) {
+    if (!divideConquerTridiagonal(d, e, n, values, heap.subarray(l.z / 8, l.z / 8 + n * ns), ns, wasmProducts(k, heap, l, n))) return false;
+  } else {
+    if (!tridiagonalEigenpairs(d, e, n, values, stage, tridiagonalValues)) return false;
+    k.packScaled(l.stage, n, ns, l.z, 1);
+  }
   k.packReflectors(l.a, ns, n, l.refl);
   k.applyReflectors(l.z, ns, l.rows, n, l.refl, l.betas);
   // Rows of z to columns of `vectors`.
@@ -110,6 +130,20 @@ export function simdHouseholderInverseIteration(a: Float64Array, n: number, valu
   vectors.set(stage);
   for (let i = 0; i < n; i++) values[i] *= scale;
   return true;
+}
+
+/** The merges' products on the module's memory, by the `multiply` kernel. */
+function wasmProducts(k: EigenKernels, heap: Float64Array, l: Layout, n: number): MergeProducts {
+  const size = (n + 4) * productStride(n);
+  const { pv, pg, pw } = l;
+  return {
+    v: heap.subarray(pv / 8, pv / 8 + size),
+    g: heap.subarray(pg / 8, pg / 8 + size),
+    w: heap.subarray(pw / 8, pw / 8 + size),
+    multiply(rows, inner, cols, aOff, as, bOff, bs, cOff, cs) {
+      k.multiply(pv + 8 * aOff, as, pg + 8 * bOff, bs, pw + 8 * cOff, cs, rows, inner, cols);
+    },
+  };
 }
 
 /** The smallest power of two ≥ x (x positive, finite, with 1/x finite). */
