@@ -341,6 +341,45 @@ function multiply() {
   )`;
 }
 
+/**
+ * secularSums(gaps, z2, split, k, t, out): the two halves of the secular function's sum at the
+ * offset t (secularRoots.ts): out[0] = Σ_{j≤split} z2_j r_j and out[1] = Σ_{j≤split} z2_j r_j²
+ * with r_j = 1/(gaps_j − t), out[2], out[3] the same over split < j < k. Pairs of terms per
+ * operation, two divisions in one.
+ */
+function secularSums() {
+  const half = (name, from, to, s, ds) => `
+    (local.set $j ${from})
+    (local.set ${s} (v128.const f64x2 0 0))
+    (local.set ${ds} (v128.const f64x2 0 0))
+    (block $${name}_done (loop $${name}
+      (br_if $${name}_done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) ${to}))
+      (local.set $r (f64x2.div (v128.const f64x2 1 1) (f64x2.sub (v128.load ${at('(local.get $gaps)', '(local.get $j)')}) (local.get $tt))))
+      (local.set $w (f64x2.mul (v128.load ${at('(local.get $z2)', '(local.get $j)')}) (local.get $r)))
+      (local.set ${s} (f64x2.add (local.get ${s}) (local.get $w)))
+      (local.set ${ds} (f64x2.add (local.get ${ds}) (f64x2.mul (local.get $w) (local.get $r))))
+      (local.set $j (i32.add (local.get $j) (i32.const 2)))
+      (br $${name})))
+    (local.set $x (f64.const 0))
+    (local.set $dx (f64.const 0))
+    (if (i32.lt_s (local.get $j) ${to})
+      (then
+        (local.set $y (f64.div (f64.const 1) (f64.sub ${f64(at('(local.get $gaps)', '(local.get $j)'))} (local.get $t))))
+        (local.set $x (f64.mul ${f64(at('(local.get $z2)', '(local.get $j)'))} (local.get $y)))
+        (local.set $dx (f64.mul (local.get $x) (local.get $y)))))`;
+  return `
+  (func $secularSums (export "secularSums") (param $gaps i32) (param $z2 i32) (param $split i32) (param $k i32) (param $t f64) (param $out i32)
+    (local $j i32) (local $tt v128) (local $r v128) (local $w v128) (local $s v128) (local $ds v128) (local $x f64) (local $dx f64) (local $y f64)
+    (local.set $tt (f64x2.splat (local.get $t)))
+    ${half('left', '(i32.const 0)', '(i32.add (local.get $split) (i32.const 1))', '$s', '$ds')}
+    (f64.store (local.get $out) (f64.add (local.get $x) ${sumLanes('(local.get $s)')}))
+    (f64.store offset=8 (local.get $out) (f64.add (local.get $dx) ${sumLanes('(local.get $ds)')}))
+    ${half('right', '(i32.add (local.get $split) (i32.const 1))', '(local.get $k)', '$s', '$ds')}
+    (f64.store offset=16 (local.get $out) (f64.add (local.get $x) ${sumLanes('(local.get $s)')}))
+    (f64.store offset=24 (local.get $out) (f64.add (local.get $dx) ${sumLanes('(local.get $ds)')}))
+  )`;
+}
+
 /** The whole module: one exported memory (grown by the caller) and the kernels. */
 export function eigenKernelsWat() {
   return `(module
@@ -350,6 +389,7 @@ ${packReflectors()}
 ${applyReflectors()}
 ${moves()}
 ${multiply()}
+${secularSums()}
 )
 `;
 }

@@ -18,9 +18,9 @@
  *   of G from the upper piece are zero in the lower columns and vice versa; sorted upper-only,
  *   mixed (joined by a deflating rotation), lower-only, each half of the columns needs only its
  *   share of G's rows (about half the work of the full product). The products run in
- *   `MergeProducts`: JavaScript loops (here) or the WebAssembly kernel (simdEigen.ts).
+ *   `MergeKernels`: JavaScript loops (here) or the WebAssembly kernel (simdEigen.ts).
  */
-import { secularRoots } from './secularRoots';
+import { javascriptSecularSums, type SecularSums, secularRoots } from './secularRoots';
 import { tridiagonalValuesVectors } from './tridiagonalValues';
 
 const EPS = 2.220446049250313e-16;
@@ -29,12 +29,14 @@ const EPS = 2.220446049250313e-16;
 export const DIVIDE_LEAF_ORDER = 24;
 
 /**
- * The merges' matrix products and their operands: v (new vectors in the pieces' basis), g (the
- * pieces' vectors) and w (the product), each at least (n + 4) × (n + 8) doubles. `multiply`
- * sets w[cOff + r·cs + c] = Σ_l v[aOff + r·as + l] · g[bOff + l·bs + c] for r < rows,
- * c < cols; it may also write up to three more rows and columns of w (and read as far in v, g).
+ * Where the merges' O(n²) and O(n³) loops run, and their operands: the secular equation's sums
+ * (secularRoots.ts) and the matrix products, with v (new vectors in the pieces' basis), g (the
+ * pieces' vectors) and w (the product), each at least (n + 4) × productStride(n) doubles.
+ * `multiply` sets w[cOff + r·cs + c] = Σ_l v[aOff + r·as + l] · g[bOff + l·bs + c] for
+ * r < rows, c < cols; it may also write up to three more rows and columns of w (and read as far
+ * in v, g).
  */
-export interface MergeProducts {
+export interface MergeKernels extends SecularSums {
   v: Float64Array;
   g: Float64Array;
   w: Float64Array;
@@ -58,7 +60,6 @@ interface Scratch {
   zhat: Float64Array;
   origin: Int32Array;
   tau: Float64Array;
-  gaps: Float64Array;
   column: Int32Array;
   merged: Float64Array;
   leaf: Float64Array;
@@ -87,7 +88,6 @@ function scratch(n: number): Scratch {
     zhat: new Float64Array(n),
     origin: new Int32Array(n),
     tau: new Float64Array(n),
-    gaps: new Float64Array(n * n),
     column: new Int32Array(n),
     merged: new Float64Array(n),
     leaf: new Float64Array(L * L),
@@ -109,7 +109,7 @@ export function productStride(n: number): number {
  * eigenvector of values[k]. Returns false on non-finite input or if a piece's QR does not
  * converge.
  */
-export function divideConquerTridiagonal(d: Float64Array, e: Float64Array, n: number, values: Float64Array, z: Float64Array, zs: number, products: MergeProducts): boolean {
+export function divideConquerTridiagonal(d: Float64Array, e: Float64Array, n: number, values: Float64Array, z: Float64Array, zs: number, products: MergeKernels): boolean {
   for (let i = 0; i < n; i++) if (!Number.isFinite(d[i]) || (i < n - 1 && !Number.isFinite(e[i]))) return false;
   const s = scratch(n);
   s.ps = productStride(n);
@@ -122,7 +122,7 @@ export function divideConquerTridiagonal(d: Float64Array, e: Float64Array, n: nu
 }
 
 /** Solves T[at .. at+m) (its diagonal already corrected for the cuts): values into s.d, vectors into z's rows. */
-function solvePiece(s: Scratch, z: Float64Array, zs: number, products: MergeProducts, at: number, m: number): boolean {
+function solvePiece(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, at: number, m: number): boolean {
   if (m <= DIVIDE_LEAF_ORDER) return solveLeaf(s, z, zs, at, m);
   const m1 = m >> 1;
   const beta = s.e[at + m1 - 1];
@@ -166,7 +166,7 @@ function solveLeaf(s: Scratch, z: Float64Array, zs: number, at: number, m: numbe
  * Joins the solved pieces [at, at+m1) and [at+m1, at+m1+m2) (values ascending in s.d, vectors as
  * rows of z) into the solution of their whole, values ascending again.
  */
-function merge(s: Scratch, z: Float64Array, zs: number, products: MergeProducts, at: number, m1: number, m2: number, beta: number): void {
+function merge(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, at: number, m1: number, m2: number, beta: number): void {
   const m = m1 + m2;
   const { d, z: zv, perm, types, kept, dropped } = s;
   // z = Qᵀ v / √2 (unit length), ρ = 2|β|.
@@ -250,13 +250,15 @@ function merge(s: Scratch, z: Float64Array, zs: number, products: MergeProducts,
  * in the pieces' basis (rows of v, columns in upper-only, mixed, lower-only order) and their
  * products with the pieces' vectors (rows of w, upper columns at 0, lower ones at b0).
  */
-function newVectors(s: Scratch, z: Float64Array, zs: number, products: MergeProducts, at: number, m1: number, m2: number, k: number, rho: number, ps: number, b0: number): void {
-  const { d, z: zv, types, kept, dk, zk, zhat, origin, tau, gaps, column } = s;
+function newVectors(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, at: number, m1: number, m2: number, k: number, rho: number, ps: number, b0: number): void {
+  const { d, z: zv, types, kept, dk, zk, zhat, origin, tau, column } = s;
+  const { gaps, z2 } = products;
   for (let j = 0; j < k; j++) {
     dk[j] = d[at + kept[j]];
     zk[j] = zv[kept[j]];
+    z2[j] = zk[j] * zk[j];
   }
-  secularRoots(dk, zk, k, rho, origin, tau, gaps);
+  secularRoots(dk, k, rho, origin, tau, products);
   // ẑ_j² = Π_i (λ_i − d_j) / (ρ Π_{i≠j} (d_i − d_j)), as ratios near one to stay in range.
   for (let j = 0; j < k; j++) {
     let prod = -gaps[(k - 1) * k + j] / rho;
@@ -332,13 +334,14 @@ function sortDropped(d: Float64Array, at: number, dropped: Int32Array, count: nu
   }
 }
 
-/** The products in plain JavaScript loops, with operands of order up to n. */
-export function javascriptProducts(n: number): MergeProducts {
+/** The merges' loops in plain JavaScript, with operands of order up to n. */
+export function javascriptMergeKernels(n: number): MergeKernels {
   const size = (n + 4) * productStride(n);
   const v = new Float64Array(size);
   const g = new Float64Array(size);
   const w = new Float64Array(size);
   return {
+    ...javascriptSecularSums(n),
     v,
     g,
     w,

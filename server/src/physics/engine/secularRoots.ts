@@ -22,61 +22,61 @@ const EPS = 2.220446049250313e-16;
 const MAX_STEPS = 120;
 
 /**
- * Fills origin[i], tau[i] (λ_i = d[origin[i]] + tau[i]) and row i of `gaps` (stride k):
- * gaps[i·k + j] = d_j − λ_i, for the k roots of the equation above.
+ * Where the sums run (JavaScript loops or a WebAssembly kernel) and their operands: `gaps`
+ * (k × k, row i for root i), `z2` (the squared weights) and `out`. `sums(row, split, k, t)` sets
+ * out[0] = Σ_{j≤split} z2_j r_j, out[1] = Σ_{j≤split} z2_j r_j², out[2], out[3] the same over
+ * split < j < k, with r_j = 1/(gaps[row + j] − t).
  */
-export function secularRoots(d: Float64Array, z: Float64Array, k: number, rho: number, origin: Int32Array, tau: Float64Array, gaps: Float64Array): void {
+export interface SecularSums {
+  gaps: Float64Array;
+  z2: Float64Array;
+  out: Float64Array;
+  sums(row: number, split: number, k: number, t: number): void;
+}
+
+/**
+ * Fills origin[i], tau[i] (λ_i = d[origin[i]] + tau[i]) and row i of `space.gaps` (stride k):
+ * gaps[i·k + j] = d_j − λ_i, for the k roots of the equation above. `space.z2` must hold z_j².
+ */
+export function secularRoots(d: Float64Array, k: number, rho: number, origin: Int32Array, tau: Float64Array, space: SecularSums): void {
+  const { gaps, z2, out } = space;
   const invRho = 1 / rho;
   let zz = 0;
-  for (let j = 0; j < k; j++) zz += z[j] * z[j];
+  for (let j = 0; j < k; j++) zz += z2[j];
   for (let i = 0; i < k; i++) {
     const row = i * k;
-    let o: number;
-    let lo: number;
+    // The left half of the sum runs over poles 0..i, the right half over i+1..k−1.
+    let o = i;
+    for (let j = 0; j < k; j++) gaps[row + j] = d[j] - d[i];
+    let lo = 0;
     let hi: number;
+    let t: number;
     if (i < k - 1) {
-      // Which pole is nearer: the sign of f halfway between them.
-      const half = 0.5 * (d[i + 1] - d[i]);
-      let f = invRho;
-      for (let j = 0; j < k; j++) f += (z[j] * z[j]) / (d[j] - d[i] - half);
-      if (f >= 0) {
-        o = i;
-        lo = 0;
-        hi = half;
-      } else {
+      // Halfway between the poles; the sign of f there tells which pole is nearer.
+      hi = 0.5 * gaps[row + i + 1];
+      t = hi;
+      space.sums(row, i, k, t);
+      if (invRho + out[0] + out[2] < 0) {
+        // Nearer d_{i+1}: offsets from there; f and its halves at this point are the same.
         o = i + 1;
-        lo = -(d[i + 1] - d[i] - half);
+        const shift = gaps[row + i + 1];
+        for (let j = 0; j < k; j++) gaps[row + j] = d[j] - d[o];
+        lo = hi - shift;
         hi = 0;
+        t = lo;
       }
     } else {
-      o = i;
-      lo = 0;
       hi = rho * zz;
+      t = 0.5 * hi;
+      space.sums(row, i, k, t);
     }
-    const dO = d[o];
-    // gaps row: first the poles' offsets from the origin; τ is subtracted at the end.
-    for (let j = 0; j < k; j++) gaps[row + j] = d[j] - dO;
-    const left = i; // poles 0..i form the left half of the sum, i+1..k−1 the right
     const a = gaps[row + i];
     const b = i < k - 1 ? gaps[row + i + 1] : 0;
-    let t = 0.5 * (lo + hi);
     for (let step = 0; step < MAX_STEPS; step++) {
-      let psi = 0;
-      let dpsi = 0;
-      for (let j = 0; j <= left; j++) {
-        const r = 1 / (gaps[row + j] - t);
-        const w = z[j] * z[j] * r;
-        psi += w;
-        dpsi += w * r;
-      }
-      let phi = 0;
-      let dphi = 0;
-      for (let j = left + 1; j < k; j++) {
-        const r = 1 / (gaps[row + j] - t);
-        const w = z[j] * z[j] * r;
-        phi += w;
-        dphi += w * r;
-      }
+      const psi = out[0];
+      const dpsi = out[1];
+      const phi = out[2];
+      const dphi = out[3];
       const f = invRho + psi + phi;
       if (f === 0) break;
       if (f < 0) lo = t;
@@ -86,11 +86,46 @@ export function secularRoots(d: Float64Array, z: Float64Array, k: number, rho: n
       if (Math.abs(f) <= noise || hi - lo <= 4 * EPS * Math.max(Math.abs(lo), Math.abs(hi))) break;
       const next = modelRoot(invRho, psi, dpsi, phi, dphi, a, b, t, i < k - 1);
       t = next > lo && next < hi ? next : 0.5 * (lo + hi);
+      space.sums(row, i, k, t);
     }
     origin[i] = o;
     tau[i] = t;
     for (let j = 0; j < k; j++) gaps[row + j] -= t;
   }
+}
+
+/** The sums in JavaScript loops, for orders up to n. */
+export function javascriptSecularSums(n: number): SecularSums {
+  const gaps = new Float64Array(n * n);
+  const z2 = new Float64Array(n);
+  const out = new Float64Array(4);
+  return {
+    gaps,
+    z2,
+    out,
+    sums(row, split, k, t) {
+      let psi = 0;
+      let dpsi = 0;
+      for (let j = 0; j <= split; j++) {
+        const r = 1 / (gaps[row + j] - t);
+        const w = z2[j] * r;
+        psi += w;
+        dpsi += w * r;
+      }
+      let phi = 0;
+      let dphi = 0;
+      for (let j = split + 1; j < k; j++) {
+        const r = 1 / (gaps[row + j] - t);
+        const w = z2[j] * r;
+        phi += w;
+        dphi += w * r;
+      }
+      out[0] = psi;
+      out[1] = dpsi;
+      out[2] = phi;
+      out[3] = dphi;
+    },
+  };
 }
 
 /**

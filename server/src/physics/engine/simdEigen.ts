@@ -10,7 +10,7 @@
  * SIMD is missing, `simdKernelsAvailable()` is false and the caller keeps the JavaScript route,
  * which stays the reference the tests compare against.
  */
-import { divideConquerTridiagonal, type MergeProducts, productStride } from './divideConquerTridiagonal';
+import { divideConquerTridiagonal, type MergeKernels, productStride } from './divideConquerTridiagonal';
 import { EIGEN_KERNELS_BASE64 } from './eigenKernelsBinary';
 import { tridiagonalValues } from './tridiagonalValues';
 import { tridiagonalEigenpairs } from './tridiagonalVectors';
@@ -27,6 +27,7 @@ interface EigenKernels {
   packScaled(src: number, n: number, ns: number, dst: number, factor: number): void;
   unpackTransposed(z: number, ns: number, n: number, out: number): void;
   multiply(a: number, as: number, b: number, bs: number, c: number, cs: number, rows: number, inner: number, cols: number): void;
+  secularSums(gaps: number, z2: number, split: number, k: number, t: number, out: number): void;
 }
 
 /**
@@ -75,6 +76,10 @@ interface Layout {
   pv: number;
   pg: number;
   pw: number;
+  /** The secular equation's operands: n × n gaps, n squared weights, four sums. */
+  gaps: number;
+  z2: number;
+  sums: number;
 }
 
 function layout(n: number, memory: WebAssembly.Memory): Layout {
@@ -86,8 +91,11 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
   const stage = v + 5 * vector;
   const operand = 8 * (n + 4) * productStride(n);
   const pv = stage + 8 * n * n;
-  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, stage, pv, pg: pv + operand, pw: pv + 2 * operand };
-  const bytes = l.pw + operand;
+  const gaps = pv + 3 * operand;
+  const z2 = gaps + 8 * n * n;
+  const sums = z2 + vector;
+  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, stage, pv, pg: pv + operand, pw: pv + 2 * operand, gaps, z2, sums };
+  const bytes = sums + 32;
   const pages = Math.ceil((bytes - memory.buffer.byteLength) / 65536);
   if (pages > 0) memory.grow(pages);
   return l;
@@ -118,7 +126,7 @@ export function simdHouseholderInverseIteration(a: Float64Array, n: number, valu
   heap.fill(0, (l.z + 8 * n * ns) / 8, (l.z + 8 * l.rows * ns) / 8);
   // Row k of z (stride ns): the tridiagonal's k-th eigenvector.
   if (n >= DIVIDE_MIN_ORDER) {
-    if (!divideConquerTridiagonal(d, e, n, values, heap.subarray(l.z / 8, l.z / 8 + n * ns), ns, wasmProducts(k, heap, l, n))) return false;
+    if (!divideConquerTridiagonal(d, e, n, values, heap.subarray(l.z / 8, l.z / 8 + n * ns), ns, wasmMergeKernels(k, heap, l, n))) return false;
   } else {
     if (!tridiagonalEigenpairs(d, e, n, values, stage, tridiagonalValues)) return false;
     k.packScaled(l.stage, n, ns, l.z, 1);
@@ -132,11 +140,17 @@ export function simdHouseholderInverseIteration(a: Float64Array, n: number, valu
   return true;
 }
 
-/** The merges' products on the module's memory, by the `multiply` kernel. */
-function wasmProducts(k: EigenKernels, heap: Float64Array, l: Layout, n: number): MergeProducts {
+/** The merges' loops on the module's memory, by the `multiply` and `secularSums` kernels. */
+function wasmMergeKernels(k: EigenKernels, heap: Float64Array, l: Layout, n: number): MergeKernels {
   const size = (n + 4) * productStride(n);
-  const { pv, pg, pw } = l;
+  const { pv, pg, pw, gaps, z2, sums } = l;
   return {
+    gaps: heap.subarray(gaps / 8, gaps / 8 + n * n),
+    z2: heap.subarray(z2 / 8, z2 / 8 + n),
+    out: heap.subarray(sums / 8, sums / 8 + 4),
+    sums(row, split, count, t) {
+      k.secularSums(gaps + 8 * row, z2, split, count, t, sums);
+    },
     v: heap.subarray(pv / 8, pv / 8 + size),
     g: heap.subarray(pg / 8, pg / 8 + size),
     w: heap.subarray(pw / 8, pw / 8 + size),
