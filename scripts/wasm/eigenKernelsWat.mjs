@@ -380,6 +380,63 @@ function secularSums() {
   )`;
 }
 
+/**
+ * weightRatios(prod, gaps, d, from, to, pole): prod_j ← prod_j · gaps_j / (d_j − pole) for
+ * from ≤ j < to, one row's factors of the Gu–Eisenstat weights; poleOffsets(gaps, d, k, pole, t):
+ * gaps_j ← (d_j − pole) − t, a root's row of d_j − λ (secularRoots.ts); cauchyRow(gaps, w, k) → Σ x_j²
+ * with gaps_j ← x_j = w_j / gaps_j, one new vector before normalising (divideConquerTridiagonal.ts).
+ */
+function vectorRows() {
+  const G = (j) => at('(local.get $gaps)', j);
+  return `
+  (func $weightRatios (export "weightRatios") (param $prod i32) (param $gaps i32) (param $d i32) (param $from i32) (param $to i32) (param $pole f64)
+    (local $j i32) (local $pp v128)
+    (local.set $pp (f64x2.splat (local.get $pole)))
+    (local.set $j (local.get $from))
+    (block $done (loop $l
+      (br_if $done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $to)))
+      (v128.store ${at('(local.get $prod)', '(local.get $j)')}
+        (f64x2.mul (v128.load ${at('(local.get $prod)', '(local.get $j)')})
+          (f64x2.div (v128.load ${G('(local.get $j)')}) (f64x2.sub (v128.load ${at('(local.get $d)', '(local.get $j)')}) (local.get $pp)))))
+      (local.set $j (i32.add (local.get $j) (i32.const 2)))
+      (br $l)))
+    (if (i32.lt_s (local.get $j) (local.get $to))
+      (then
+        (f64.store ${at('(local.get $prod)', '(local.get $j)')}
+          (f64.mul ${f64(at('(local.get $prod)', '(local.get $j)'))}
+            (f64.div ${f64(G('(local.get $j)'))} (f64.sub ${f64(at('(local.get $d)', '(local.get $j)'))} (local.get $pole))))))))
+  (func $poleOffsets (export "poleOffsets") (param $gaps i32) (param $d i32) (param $k i32) (param $pole f64) (param $t f64)
+    (local $j i32) (local $pp v128) (local $tt v128)
+    (local.set $pp (f64x2.splat (local.get $pole)))
+    (local.set $tt (f64x2.splat (local.get $t)))
+    (local.set $j (i32.const 0))
+    (block $done (loop $l
+      (br_if $done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $k)))
+      (v128.store ${G('(local.get $j)')} (f64x2.sub (f64x2.sub (v128.load ${at('(local.get $d)', '(local.get $j)')}) (local.get $pp)) (local.get $tt)))
+      (local.set $j (i32.add (local.get $j) (i32.const 2)))
+      (br $l)))
+    (if (i32.lt_s (local.get $j) (local.get $k))
+      (then (f64.store ${G('(local.get $j)')} (f64.sub (f64.sub ${f64(at('(local.get $d)', '(local.get $j)'))} (local.get $pole)) (local.get $t))))))
+  (func $cauchyRow (export "cauchyRow") (param $gaps i32) (param $w i32) (param $k i32) (result f64)
+    (local $j i32) (local $x v128) (local $s v128) (local $y f64) (local $t f64)
+    (local.set $s (v128.const f64x2 0 0))
+    (local.set $j (i32.const 0))
+    (block $done (loop $l
+      (br_if $done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $k)))
+      (local.set $x (f64x2.div (v128.load ${at('(local.get $w)', '(local.get $j)')}) (v128.load ${G('(local.get $j)')})))
+      (v128.store ${G('(local.get $j)')} (local.get $x))
+      (local.set $s (f64x2.add (local.get $s) (f64x2.mul (local.get $x) (local.get $x))))
+      (local.set $j (i32.add (local.get $j) (i32.const 2)))
+      (br $l)))
+    (local.set $t ${sumLanes('(local.get $s)')})
+    (if (result f64) (i32.lt_s (local.get $j) (local.get $k))
+      (then
+        (local.set $y (f64.div ${f64(at('(local.get $w)', '(local.get $j)'))} ${f64(G('(local.get $j)'))}))
+        (f64.store ${G('(local.get $j)')} (local.get $y))
+        (f64.add (local.get $t) (f64.mul (local.get $y) (local.get $y))))
+      (else (local.get $t))))`;
+}
+
 /** The whole module: one exported memory (grown by the caller) and the kernels. */
 export function eigenKernelsWat() {
   return `(module
@@ -390,6 +447,7 @@ ${applyReflectors()}
 ${moves()}
 ${multiply()}
 ${secularSums()}
+${vectorRows()}
 )
 `;
 }

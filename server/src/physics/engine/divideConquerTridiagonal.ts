@@ -37,6 +37,13 @@ export const DIVIDE_LEAF_ORDER = 24;
  * in v, g).
  */
 export interface MergeKernels extends SecularSums {
+  /** The kept poles d_j and, after the roots, the Gu–Eisenstat weights ẑ_j (n each). */
+  dk: Float64Array;
+  zhat: Float64Array;
+  /** zhat_j ← zhat_j · gaps[row + j] / (dk_j − pole) for from ≤ j < to. */
+  weightRatios(row: number, from: number, to: number, pole: number): void;
+  /** gaps[row + j] ← zhat_j / gaps[row + j] for j < k; returns the sum of their squares. */
+  cauchyRow(row: number, k: number): number;
   v: Float64Array;
   g: Float64Array;
   w: Float64Array;
@@ -46,7 +53,13 @@ export interface MergeKernels extends SecularSums {
 /** Scratch of one call (order n), kept between calls: a large block is solved at many fields. */
 interface Scratch {
   n: number;
-  /** Stride of the product operands in the current call (productStride of its order). */
+  /** Components kept (solved by the secular equation) and dropped by deflation, summed over merges. */
+export interface DeflationCount {
+  kept: number;
+  dropped: number;
+}
+
+/** Stride of the product operands in the current call (productStride of its order). */
   ps: number;
   d: Float64Array;
   e: Float64Array;
@@ -55,9 +68,7 @@ interface Scratch {
   types: Uint8Array;
   kept: Int32Array;
   dropped: Int32Array;
-  dk: Float64Array;
   zk: Float64Array;
-  zhat: Float64Array;
   origin: Int32Array;
   tau: Float64Array;
   column: Int32Array;
@@ -76,6 +87,7 @@ function scratch(n: number): Scratch {
   cache = {
     n,
     ps: 0,
+    count: null,
     d: new Float64Array(n),
     e: new Float64Array(n),
     z: new Float64Array(n),
@@ -83,9 +95,7 @@ function scratch(n: number): Scratch {
     types: new Uint8Array(n),
     kept: new Int32Array(n),
     dropped: new Int32Array(n),
-    dk: new Float64Array(n),
     zk: new Float64Array(n),
-    zhat: new Float64Array(n),
     origin: new Int32Array(n),
     tau: new Float64Array(n),
     column: new Int32Array(n),
@@ -98,6 +108,12 @@ function scratch(n: number): Scratch {
   return cache;
 }
 
+/** Components kept (solved by the secular equation) and dropped by deflation, summed over merges. */
+export interface DeflationCount {
+  kept: number;
+  dropped: number;
+}
+
 /** Stride of the product operands for order n (room for the padding the kernel may touch). */
 export function productStride(n: number): number {
   return n + 8;
@@ -107,12 +123,13 @@ export function productStride(n: number): number {
  * Eigenpairs of the tridiagonal (d diagonal, e[i] = T[i+1][i]; neither modified): values
  * ascending into `values`, row k of `z` (stride zs ≥ n, rows 0..n−1 overwritten whole) the
  * eigenvector of values[k]. Returns false on non-finite input or if a piece's QR does not
- * converge.
+ * converge. `count`, if given, gets the merges' kept and dropped components added (for tests).
  */
-export function divideConquerTridiagonal(d: Float64Array, e: Float64Array, n: number, values: Float64Array, z: Float64Array, zs: number, products: MergeKernels): boolean {
+export function divideConquerTridiagonal(d: Float64Array, e: Float64Array, n: number, values: Float64Array, z: Float64Array, zs: number, products: MergeKernels, count?: DeflationCount): boolean {
   for (let i = 0; i < n; i++) if (!Number.isFinite(d[i]) || (i < n - 1 && !Number.isFinite(e[i]))) return false;
   const s = scratch(n);
   s.ps = productStride(n);
+  s.count = count ?? null;
   s.d.set(d.subarray(0, n));
   s.e.set(e.subarray(0, n - 1));
   z.fill(0, 0, n * zs);
@@ -157,7 +174,7 @@ function solveLeaf(s: Scratch, z: Float64Array, zs: number, at: number, m: numbe
   for (let r = 0; r < m; r++) {
     const k = leafOrder[r];
     s.d[at + r] = leafD[k];
-    z.set(q.subarray(k * m, k * m + m), (at + r) * zs + at);
+    for (let i = 0, to = (at + r) * zs + at; i < m; i++) z[to + i] = q[k * m + i];
   }
   return true;
 }
@@ -220,6 +237,10 @@ function merge(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, 
     pending = t;
   }
   if (pending >= 0) kept[k++] = pending;
+  if (s.count !== null) {
+    s.count.kept += k;
+    s.count.dropped += nDropped;
+  }
   const ps = s.ps;
   const b0 = (m1 + 3) & ~3;
   if (k > 0) newVectors(s, z, zs, products, at, m1, m2, k, rho, ps, b0);
@@ -228,7 +249,8 @@ function merge(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, 
   const { g, w } = products;
   for (let q = 0; q < nDropped; q++) copySplitRow(z, (at + dropped[q]) * zs + at, g, (k + q) * ps, m1, m2, b0);
   // Both lists ascending: merge them into the rows of z.
-  const { merged, dk, origin, tau } = s;
+  const { merged, origin, tau } = s;
+  const { dk } = products;
   for (let r = 0, i = 0, q = 0; r < m; r++) {
     const row = (at + r) * zs + at;
     const lambda = i < k ? dk[origin[i]] + tau[i] : Number.POSITIVE_INFINITY;
@@ -251,21 +273,22 @@ function merge(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, 
  * products with the pieces' vectors (rows of w, upper columns at 0, lower ones at b0).
  */
 function newVectors(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, at: number, m1: number, m2: number, k: number, rho: number, ps: number, b0: number): void {
-  const { d, z: zv, types, kept, dk, zk, zhat, origin, tau, column } = s;
-  const { gaps, z2 } = products;
+  const { d, z: zv, types, kept, zk, origin, tau, column } = s;
+  const { gaps, z2, dk, zhat } = products;
   for (let j = 0; j < k; j++) {
     dk[j] = d[at + kept[j]];
     zk[j] = zv[kept[j]];
     z2[j] = zk[j] * zk[j];
   }
   secularRoots(dk, k, rho, origin, tau, products);
-  // ẑ_j² = Π_i (λ_i − d_j) / (ρ Π_{i≠j} (d_i − d_j)), as ratios near one to stay in range.
-  for (let j = 0; j < k; j++) {
-    let prod = -gaps[(k - 1) * k + j] / rho;
-    for (let i = 0; i < j; i++) prod *= -gaps[i * k + j] / (dk[i] - dk[j]);
-    for (let i = j + 1; i < k; i++) prod *= -gaps[(i - 1) * k + j] / (dk[i] - dk[j]);
-    zhat[j] = (zk[j] >= 0 ? 1 : -1) * Math.sqrt(prod);
+  // ẑ_j² = Π_i (λ_i − d_j) / (ρ Π_{i≠j} (d_i − d_j)), as ratios near one to stay in range: root
+  // i < k − 1 pairs with pole i for j > i and with pole i + 1 for j ≤ i; the last root with ρ.
+  for (let j = 0; j < k; j++) zhat[j] = -gaps[(k - 1) * k + j] / rho;
+  for (let i = 0; i < k - 1; i++) {
+    products.weightRatios(i * k, 0, i + 1, dk[i + 1]);
+    products.weightRatios(i * k, i + 1, k, dk[i]);
   }
+  for (let j = 0; j < k; j++) zhat[j] = (zk[j] >= 0 ? 1 : -1) * Math.sqrt(zhat[j]);
   let k1 = 0;
   let k2 = 0;
   for (let j = 0; j < k; j++) {
@@ -280,14 +303,8 @@ function newVectors(s: Scratch, z: Float64Array, zs: number, products: MergeKern
   const { v, g, w } = products;
   for (let i = 0; i < k; i++) {
     const row = i * k;
-    let sum = 0;
-    for (let j = 0; j < k; j++) {
-      const x = zhat[j] / gaps[row + j];
-      v[i * ps + column[j]] = x;
-      sum += x * x;
-    }
-    const scale = 1 / Math.sqrt(sum);
-    for (let j = 0; j < k; j++) v[i * ps + j] *= scale;
+    const scale = 1 / Math.sqrt(products.cauchyRow(row, k));
+    for (let j = 0; j < k; j++) v[i * ps + column[j]] = scale * gaps[row + j];
   }
   for (let j = 0; j < k; j++) copySplitRow(z, (at + kept[j]) * zs + at, g, column[j] * ps, m1, m2, b0);
   const upper = k1 + k2;
@@ -308,16 +325,19 @@ function rotateRows(z: Float64Array, p: number, q: number, m: number, c: number,
   }
 }
 
-/** A row of the piece (m1 upper, m2 lower entries) into g with the lower part moved to b0. */
+/**
+ * A row of the piece (m1 upper, m2 lower entries) into g with the lower part moved to b0. Plain
+ * loops: a subarray per row would be garbage for the collector.
+ */
 function copySplitRow(z: Float64Array, from: number, g: Float64Array, to: number, m1: number, m2: number, b0: number): void {
-  g.set(z.subarray(from, from + m1), to);
-  g.set(z.subarray(from + m1, from + m1 + m2), to + b0);
+  for (let i = 0; i < m1; i++) g[to + i] = z[from + i];
+  for (let i = 0; i < m2; i++) g[to + b0 + i] = z[from + m1 + i];
 }
 
 /** The inverse of copySplitRow. */
 function joinSplitRow(g: Float64Array, from: number, z: Float64Array, to: number, m1: number, m2: number, b0: number): void {
-  z.set(g.subarray(from, from + m1), to);
-  z.set(g.subarray(from + b0, from + b0 + m2), to + m1);
+  for (let i = 0; i < m1; i++) z[to + i] = g[from + i];
+  for (let i = 0; i < m2; i++) z[to + m1 + i] = g[from + b0 + i];
 }
 
 /** Insertion sort of the dropped components by value (nearly sorted already). */
@@ -340,8 +360,26 @@ export function javascriptMergeKernels(n: number): MergeKernels {
   const v = new Float64Array(size);
   const g = new Float64Array(size);
   const w = new Float64Array(size);
+  const dk = new Float64Array(n);
+  const sums = javascriptSecularSums(n, dk);
+  const { gaps } = sums;
+  const zhat = new Float64Array(n);
   return {
-    ...javascriptSecularSums(n),
+    ...sums,
+    dk,
+    zhat,
+    weightRatios(row, from, to, pole) {
+      for (let j = from; j < to; j++) zhat[j] *= gaps[row + j] / (dk[j] - pole);
+    },
+    cauchyRow(row, k) {
+      let sum = 0;
+      for (let j = 0; j < k; j++) {
+        const x = zhat[j] / gaps[row + j];
+        gaps[row + j] = x;
+        sum += x * x;
+      }
+      return sum;
+    },
     v,
     g,
     w,

@@ -32,11 +32,14 @@ export interface SecularSums {
   z2: Float64Array;
   out: Float64Array;
   sums(row: number, split: number, k: number, t: number): void;
+  /** gaps[row + j] ← (d_j − pole) − t for j < k, d being the `d` of secularRoots (kept there). */
+  offsets(row: number, k: number, pole: number, t: number): void;
 }
 
 /**
  * Fills origin[i], tau[i] (λ_i = d[origin[i]] + tau[i]) and row i of `space.gaps` (stride k):
- * gaps[i·k + j] = d_j − λ_i, for the k roots of the equation above. `space.z2` must hold z_j².
+ * gaps[i·k + j] = d_j − λ_i, for the k roots of the equation above. `space.z2` must hold z_j²,
+ * and `d` must be the array `space.offsets` reads.
  */
 export function secularRoots(d: Float64Array, k: number, rho: number, origin: Int32Array, tau: Float64Array, space: SecularSums): void {
   const { gaps, z2, out } = space;
@@ -47,7 +50,7 @@ export function secularRoots(d: Float64Array, k: number, rho: number, origin: In
     const row = i * k;
     // The left half of the sum runs over poles 0..i, the right half over i+1..k−1.
     let o = i;
-    for (let j = 0; j < k; j++) gaps[row + j] = d[j] - d[i];
+    space.offsets(row, k, d[i], 0);
     let lo = 0;
     let hi: number;
     let t: number;
@@ -60,7 +63,7 @@ export function secularRoots(d: Float64Array, k: number, rho: number, origin: In
         // Nearer d_{i+1}: offsets from there; f and its halves at this point are the same.
         o = i + 1;
         const shift = gaps[row + i + 1];
-        for (let j = 0; j < k; j++) gaps[row + j] = d[j] - d[o];
+        space.offsets(row, k, d[o], 0);
         lo = hi - shift;
         hi = 0;
         t = lo;
@@ -90,12 +93,12 @@ export function secularRoots(d: Float64Array, k: number, rho: number, origin: In
     }
     origin[i] = o;
     tau[i] = t;
-    for (let j = 0; j < k; j++) gaps[row + j] -= t;
+    space.offsets(row, k, d[o], t);
   }
 }
 
-/** The sums in JavaScript loops, for orders up to n. */
-export function javascriptSecularSums(n: number): SecularSums {
+/** The sums in JavaScript loops, for orders up to n, with the poles d read by `offsets`. */
+export function javascriptSecularSums(n: number, d: Float64Array): SecularSums {
   const gaps = new Float64Array(n * n);
   const z2 = new Float64Array(n);
   const out = new Float64Array(4);
@@ -103,6 +106,9 @@ export function javascriptSecularSums(n: number): SecularSums {
     gaps,
     z2,
     out,
+    offsets(row, k, pole, t) {
+      for (let j = 0; j < k; j++) gaps[row + j] = d[j] - pole - t;
+    },
     sums(row, split, k, t) {
       let psi = 0;
       let dpsi = 0;

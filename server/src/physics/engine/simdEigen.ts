@@ -28,6 +28,9 @@ interface EigenKernels {
   unpackTransposed(z: number, ns: number, n: number, out: number): void;
   multiply(a: number, as: number, b: number, bs: number, c: number, cs: number, rows: number, inner: number, cols: number): void;
   secularSums(gaps: number, z2: number, split: number, k: number, t: number, out: number): void;
+  weightRatios(prod: number, gaps: number, d: number, from: number, to: number, pole: number): void;
+  cauchyRow(gaps: number, w: number, k: number): number;
+  poleOffsets(gaps: number, d: number, k: number, pole: number, t: number): void;
 }
 
 /**
@@ -80,6 +83,8 @@ interface Layout {
   gaps: number;
   z2: number;
   sums: number;
+  dk: number;
+  zhat: number;
 }
 
 function layout(n: number, memory: WebAssembly.Memory): Layout {
@@ -94,8 +99,10 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
   const gaps = pv + 3 * operand;
   const z2 = gaps + 8 * n * n;
   const sums = z2 + vector;
-  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, stage, pv, pg: pv + operand, pw: pv + 2 * operand, gaps, z2, sums };
-  const bytes = sums + 32;
+  const dk = sums + 32;
+  const zhat = dk + vector;
+  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, stage, pv, pg: pv + operand, pw: pv + 2 * operand, gaps, z2, sums, dk, zhat };
+  const bytes = zhat + vector;
   const pages = Math.ceil((bytes - memory.buffer.byteLength) / 65536);
   if (pages > 0) memory.grow(pages);
   return l;
@@ -143,11 +150,22 @@ export function simdHouseholderInverseIteration(a: Float64Array, n: number, valu
 /** The merges' loops on the module's memory, by the `multiply` and `secularSums` kernels. */
 function wasmMergeKernels(k: EigenKernels, heap: Float64Array, l: Layout, n: number): MergeKernels {
   const size = (n + 4) * productStride(n);
-  const { pv, pg, pw, gaps, z2, sums } = l;
+  const { pv, pg, pw, gaps, z2, sums, dk, zhat } = l;
   return {
+    dk: heap.subarray(dk / 8, dk / 8 + n),
+    zhat: heap.subarray(zhat / 8, zhat / 8 + n),
+    weightRatios(row, from, to, pole) {
+      k.weightRatios(zhat, gaps + 8 * row, dk, from, to, pole);
+    },
+    cauchyRow(row, count) {
+      return k.cauchyRow(gaps + 8 * row, zhat, count);
+    },
     gaps: heap.subarray(gaps / 8, gaps / 8 + n * n),
     z2: heap.subarray(z2 / 8, z2 / 8 + n),
     out: heap.subarray(sums / 8, sums / 8 + 4),
+    offsets(row, count, pole, t) {
+      k.poleOffsets(gaps + 8 * row, dk, count, pole, t);
+    },
     sums(row, split, count, t) {
       k.secularSums(gaps + 8 * row, z2, split, count, t, sums);
     },
