@@ -53,14 +53,9 @@ export interface MergeKernels extends SecularSums {
 /** Scratch of one call (order n), kept between calls: a large block is solved at many fields. */
 interface Scratch {
   n: number;
-  /** Components kept (solved by the secular equation) and dropped by deflation, summed over merges. */
-export interface DeflationCount {
-  kept: number;
-  dropped: number;
-}
-
-/** Stride of the product operands in the current call (productStride of its order). */
+  /** Stride of the product operands in the current call (productStride of its order). */
   ps: number;
+  count: DeflationCount | null;
   d: Float64Array;
   e: Float64Array;
   z: Float64Array;
@@ -106,6 +101,12 @@ function scratch(n: number): Scratch {
     leafOrder: new Int32Array(L),
   };
   return cache;
+}
+
+/** Components kept (solved by the secular equation) and dropped by deflation, summed over merges. */
+export interface DeflationCount {
+  kept: number;
+  dropped: number;
 }
 
 /** Components kept (solved by the secular equation) and dropped by deflation, summed over merges. */
