@@ -147,6 +147,17 @@ export function simdHouseholderInverseIteration(a: Float64Array, n: number, valu
   return true;
 }
 
+/**
+ * The merges' kernels for order n on the module's memory (null where the module cannot run), so
+ * that tests can run the divide and conquer on a tridiagonal with them. Valid until the next call.
+ */
+export function simdMergeKernels(n: number): MergeKernels | null {
+  const k = loadKernels();
+  if (k === null) return null;
+  const l = layout(n, k.memory);
+  return wasmMergeKernels(k, new Float64Array(k.memory.buffer), l, n);
+}
+
 /** The merges' loops on the module's memory, by the `multiply` and `secularSums` kernels. */
 function wasmMergeKernels(k: EigenKernels, heap: Float64Array, l: Layout, n: number): MergeKernels {
   const size = (n + 4) * productStride(n);
