@@ -111,9 +111,10 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
 /**
  * Eigenpairs of the symmetric `a` (order n ≥ 2, not modified) into `values` (ascending) and the
  * columns of `vectors`, as householderInverseIterationInPlace. Returns false on non-finite
- * input or no convergence; call only when simdKernelsAvailable().
+ * input or no convergence; call only when simdKernelsAvailable(). `divide` chooses the
+ * tridiagonal's solver (default: divide and conquer from DIVIDE_MIN_ORDER; for the bench).
  */
-export function simdHouseholderInverseIteration(a: Float64Array, n: number, values: Float64Array, vectors: Float64Array): boolean {
+export function simdHouseholderInverseIteration(a: Float64Array, n: number, values: Float64Array, vectors: Float64Array, divide = n >= DIVIDE_MIN_ORDER): boolean {
   const k = loadKernels();
   if (k === null) throw new Error('WebAssembly eigen kernels unavailable');
   const l = layout(n, k.memory);
@@ -132,7 +133,7 @@ export function simdHouseholderInverseIteration(a: Float64Array, n: number, valu
   const stage = heap.subarray(l.stage / 8, l.stage / 8 + n * n);
   heap.fill(0, (l.z + 8 * n * ns) / 8, (l.z + 8 * l.rows * ns) / 8);
   // Row k of z (stride ns): the tridiagonal's k-th eigenvector.
-  if (n >= DIVIDE_MIN_ORDER) {
+  if (divide) {
     if (!divideConquerTridiagonal(d, e, n, values, heap.subarray(l.z / 8, l.z / 8 + n * ns), ns, wasmMergeKernels(k, heap, l, n))) return false;
   } else {
     if (!tridiagonalEigenpairs(d, e, n, values, stage, tridiagonalValues)) return false;
