@@ -35,10 +35,13 @@ interface EigenKernels {
 
 /**
  * From this order on the tridiagonal's eigenpairs come from divide and conquer
- * (divideConquerTridiagonal.ts, its products in the `multiply` kernel); below it from QR values
- * and inverse iteration (tridiagonalVectors.ts). Set by bench/eigen.bench.ts (docs/engine.md).
+ * (divideConquerTridiagonal.ts, its loops in the kernels below); below it from QR values and
+ * inverse iteration (tridiagonalVectors.ts). Divide and conquer was faster at every order the
+ * bench measures (12–96: 1.4–2.2×; bench/eigen.bench.ts, docs/engine.md), so the whole
+ * WebAssembly route (SIMD_MIN_ORDER = 16 on) takes it; pieces of up to DIVIDE_LEAF_ORDER are a
+ * single QR with the rotations accumulated.
  */
-export const DIVIDE_MIN_ORDER = 48;
+export const DIVIDE_MIN_ORDER = 16;
 
 /** undefined: not tried yet; null: this runtime cannot run the module. */
 let kernels: EigenKernels | null | undefined;
