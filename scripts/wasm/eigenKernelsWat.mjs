@@ -282,6 +282,161 @@ function moves() {
       (br $rl))))`;
 }
 
+/**
+ * multiply(a, as, b, bs, c, cs, rows, inner, cols): c = a · b for a rows × inner, b inner × cols
+ * (row-major, strides as, bs, cs in doubles), the products of the divide-and-conquer merges
+ * (divideConquerTridiagonal.ts). Tiles of 4 rows × 4 columns: eight pairs of sums stay in
+ * registers while the inner index runs, each step loading two pairs of b and four entries of a.
+ * rows and cols are rounded up to 4, so up to three more rows and columns are read and written.
+ */
+function multiply() {
+  const idx = [0, 1, 2, 3];
+  const acc = (q, h) => `$c${q}${h}`;
+  return `
+  (func $multiply (export "multiply")
+    (param $a i32) (param $as i32) (param $b i32) (param $bs i32) (param $c i32) (param $cs i32) (param $rows i32) (param $inner i32) (param $cols i32)
+    (local $i i32) (local $j i32) (local $l i32) (local $bp i32) (local $ap i32) (local $arow i32) (local $crow i32) (local $astep i32) (local $bstep i32) (local $cstep i32)
+    (local $b0 v128) (local $b1 v128) (local $x v128)
+    ${idx.map((q) => `(local ${acc(q, 0)} v128) (local ${acc(q, 1)} v128)`).join(' ')}
+    (local.set $astep (i32.shl (local.get $as) (i32.const 3)))
+    (local.set $bstep (i32.shl (local.get $bs) (i32.const 3)))
+    (local.set $cstep (i32.shl (local.get $cs) (i32.const 3)))
+    (local.set $i (i32.const 0))
+    (block $i_done (loop $il
+      (br_if $i_done (i32.ge_s (local.get $i) (local.get $rows)))
+      (local.set $arow (i32.add (local.get $a) (i32.mul (local.get $i) (local.get $astep))))
+      (local.set $crow (i32.add (local.get $c) (i32.mul (local.get $i) (local.get $cstep))))
+      (local.set $j (i32.const 0))
+      (block $j_done (loop $jl
+        (br_if $j_done (i32.ge_s (local.get $j) (local.get $cols)))
+        ${idx.map((q) => `(local.set ${acc(q, 0)} (v128.const f64x2 0 0)) (local.set ${acc(q, 1)} (v128.const f64x2 0 0))`).join('\n        ')}
+        (local.set $bp (i32.add (local.get $b) (i32.shl (local.get $j) (i32.const 3))))
+        (local.set $ap (local.get $arow))
+        (local.set $l (local.get $inner))
+        (block $l_done (loop $ll
+          (br_if $l_done (i32.le_s (local.get $l) (i32.const 0)))
+          (local.set $b0 (v128.load (local.get $bp)))
+          (local.set $b1 (v128.load offset=16 (local.get $bp)))
+          ${idx
+            .map(
+              (q) => `(local.set $x (f64x2.splat (f64.load ${q === 0 ? '' : `(i32.add (local.get $ap) (i32.mul (local.get $astep) (i32.const ${q})))`}${q === 0 ? '(local.get $ap)' : ''})))
+          (local.set ${acc(q, 0)} (f64x2.add (local.get ${acc(q, 0)}) (f64x2.mul (local.get $x) (local.get $b0))))
+          (local.set ${acc(q, 1)} (f64x2.add (local.get ${acc(q, 1)}) (f64x2.mul (local.get $x) (local.get $b1))))`,
+            )
+            .join('\n          ')}
+          (local.set $ap (i32.add (local.get $ap) (i32.const 8)))
+          (local.set $bp (i32.add (local.get $bp) (local.get $bstep)))
+          (local.set $l (i32.sub (local.get $l) (i32.const 1)))
+          (br $ll)))
+        ${idx
+          .map(
+            (q) => `(v128.store (i32.add (local.get $crow) (i32.add (i32.shl (local.get $j) (i32.const 3)) (i32.mul (local.get $cstep) (i32.const ${q})))) (local.get ${acc(q, 0)}))
+        (v128.store offset=16 (i32.add (local.get $crow) (i32.add (i32.shl (local.get $j) (i32.const 3)) (i32.mul (local.get $cstep) (i32.const ${q})))) (local.get ${acc(q, 1)}))`,
+          )
+          .join('\n        ')}
+        (local.set $j (i32.add (local.get $j) (i32.const 4)))
+        (br $jl)))
+      (local.set $i (i32.add (local.get $i) (i32.const 4)))
+      (br $il)))
+  )`;
+}
+
+/**
+ * secularSums(gaps, z2, split, k, t, out): the two halves of the secular function's sum at the
+ * offset t (secularRoots.ts): out[0] = Σ_{j≤split} z2_j r_j and out[1] = Σ_{j≤split} z2_j r_j²
+ * with r_j = 1/(gaps_j − t), out[2], out[3] the same over split < j < k. Pairs of terms per
+ * operation, two divisions in one.
+ */
+function secularSums() {
+  const half = (name, from, to, s, ds) => `
+    (local.set $j ${from})
+    (local.set ${s} (v128.const f64x2 0 0))
+    (local.set ${ds} (v128.const f64x2 0 0))
+    (block $${name}_done (loop $${name}
+      (br_if $${name}_done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) ${to}))
+      (local.set $r (f64x2.div (v128.const f64x2 1 1) (f64x2.sub (v128.load ${at('(local.get $gaps)', '(local.get $j)')}) (local.get $tt))))
+      (local.set $w (f64x2.mul (v128.load ${at('(local.get $z2)', '(local.get $j)')}) (local.get $r)))
+      (local.set ${s} (f64x2.add (local.get ${s}) (local.get $w)))
+      (local.set ${ds} (f64x2.add (local.get ${ds}) (f64x2.mul (local.get $w) (local.get $r))))
+      (local.set $j (i32.add (local.get $j) (i32.const 2)))
+      (br $${name})))
+    (local.set $x (f64.const 0))
+    (local.set $dx (f64.const 0))
+    (if (i32.lt_s (local.get $j) ${to})
+      (then
+        (local.set $y (f64.div (f64.const 1) (f64.sub ${f64(at('(local.get $gaps)', '(local.get $j)'))} (local.get $t))))
+        (local.set $x (f64.mul ${f64(at('(local.get $z2)', '(local.get $j)'))} (local.get $y)))
+        (local.set $dx (f64.mul (local.get $x) (local.get $y)))))`;
+  return `
+  (func $secularSums (export "secularSums") (param $gaps i32) (param $z2 i32) (param $split i32) (param $k i32) (param $t f64) (param $out i32)
+    (local $j i32) (local $tt v128) (local $r v128) (local $w v128) (local $s v128) (local $ds v128) (local $x f64) (local $dx f64) (local $y f64)
+    (local.set $tt (f64x2.splat (local.get $t)))
+    ${half('left', '(i32.const 0)', '(i32.add (local.get $split) (i32.const 1))', '$s', '$ds')}
+    (f64.store (local.get $out) (f64.add (local.get $x) ${sumLanes('(local.get $s)')}))
+    (f64.store offset=8 (local.get $out) (f64.add (local.get $dx) ${sumLanes('(local.get $ds)')}))
+    ${half('right', '(i32.add (local.get $split) (i32.const 1))', '(local.get $k)', '$s', '$ds')}
+    (f64.store offset=16 (local.get $out) (f64.add (local.get $x) ${sumLanes('(local.get $s)')}))
+    (f64.store offset=24 (local.get $out) (f64.add (local.get $dx) ${sumLanes('(local.get $ds)')}))
+  )`;
+}
+
+/**
+ * weightRatios(prod, gaps, d, from, to, pole): prod_j ← prod_j · gaps_j / (d_j − pole) for
+ * from ≤ j < to, one row's factors of the Gu–Eisenstat weights; poleOffsets(gaps, d, k, pole, t):
+ * gaps_j ← (d_j − pole) − t, a root's row of d_j − λ (secularRoots.ts); cauchyRow(gaps, w, k) → Σ x_j²
+ * with gaps_j ← x_j = w_j / gaps_j, one new vector before normalising (divideConquerTridiagonal.ts).
+ */
+function vectorRows() {
+  const G = (j) => at('(local.get $gaps)', j);
+  return `
+  (func $weightRatios (export "weightRatios") (param $prod i32) (param $gaps i32) (param $d i32) (param $from i32) (param $to i32) (param $pole f64)
+    (local $j i32) (local $pp v128)
+    (local.set $pp (f64x2.splat (local.get $pole)))
+    (local.set $j (local.get $from))
+    (block $done (loop $l
+      (br_if $done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $to)))
+      (v128.store ${at('(local.get $prod)', '(local.get $j)')}
+        (f64x2.mul (v128.load ${at('(local.get $prod)', '(local.get $j)')})
+          (f64x2.div (v128.load ${G('(local.get $j)')}) (f64x2.sub (v128.load ${at('(local.get $d)', '(local.get $j)')}) (local.get $pp)))))
+      (local.set $j (i32.add (local.get $j) (i32.const 2)))
+      (br $l)))
+    (if (i32.lt_s (local.get $j) (local.get $to))
+      (then
+        (f64.store ${at('(local.get $prod)', '(local.get $j)')}
+          (f64.mul ${f64(at('(local.get $prod)', '(local.get $j)'))}
+            (f64.div ${f64(G('(local.get $j)'))} (f64.sub ${f64(at('(local.get $d)', '(local.get $j)'))} (local.get $pole))))))))
+  (func $poleOffsets (export "poleOffsets") (param $gaps i32) (param $d i32) (param $k i32) (param $pole f64) (param $t f64)
+    (local $j i32) (local $pp v128) (local $tt v128)
+    (local.set $pp (f64x2.splat (local.get $pole)))
+    (local.set $tt (f64x2.splat (local.get $t)))
+    (local.set $j (i32.const 0))
+    (block $done (loop $l
+      (br_if $done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $k)))
+      (v128.store ${G('(local.get $j)')} (f64x2.sub (f64x2.sub (v128.load ${at('(local.get $d)', '(local.get $j)')}) (local.get $pp)) (local.get $tt)))
+      (local.set $j (i32.add (local.get $j) (i32.const 2)))
+      (br $l)))
+    (if (i32.lt_s (local.get $j) (local.get $k))
+      (then (f64.store ${G('(local.get $j)')} (f64.sub (f64.sub ${f64(at('(local.get $d)', '(local.get $j)'))} (local.get $pole)) (local.get $t))))))
+  (func $cauchyRow (export "cauchyRow") (param $gaps i32) (param $w i32) (param $k i32) (result f64)
+    (local $j i32) (local $x v128) (local $s v128) (local $y f64) (local $t f64)
+    (local.set $s (v128.const f64x2 0 0))
+    (local.set $j (i32.const 0))
+    (block $done (loop $l
+      (br_if $done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $k)))
+      (local.set $x (f64x2.div (v128.load ${at('(local.get $w)', '(local.get $j)')}) (v128.load ${G('(local.get $j)')})))
+      (v128.store ${G('(local.get $j)')} (local.get $x))
+      (local.set $s (f64x2.add (local.get $s) (f64x2.mul (local.get $x) (local.get $x))))
+      (local.set $j (i32.add (local.get $j) (i32.const 2)))
+      (br $l)))
+    (local.set $t ${sumLanes('(local.get $s)')})
+    (if (result f64) (i32.lt_s (local.get $j) (local.get $k))
+      (then
+        (local.set $y (f64.div ${f64(at('(local.get $w)', '(local.get $j)'))} ${f64(G('(local.get $j)'))}))
+        (f64.store ${G('(local.get $j)')} (local.get $y))
+        (f64.add (local.get $t) (f64.mul (local.get $y) (local.get $y))))
+      (else (local.get $t))))`;
+}
+
 /** The whole module: one exported memory (grown by the caller) and the kernels. */
 export function eigenKernelsWat() {
   return `(module
@@ -290,6 +445,9 @@ ${tridiagonalise()}
 ${packReflectors()}
 ${applyReflectors()}
 ${moves()}
+${multiply()}
+${secularSums()}
+${vectorRows()}
 )
 `;
 }

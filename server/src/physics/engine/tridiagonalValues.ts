@@ -6,7 +6,8 @@
  * 2× faster and the whole tridiagonal eigen-solve lost a fifth of its time to garbage
  * collection before this (bench/eigen.bench.ts, docs/engine.md). Math.hypot remains for the
  * rare x² + z² outside [1e-280, 1e280], where the square could underflow or overflow.
- * Used by the WebAssembly route (simdEigen.ts); the JavaScript route keeps tridiagonalQr, the
+ * Used by the WebAssembly route (simdEigen.ts; with vectors for the small pieces of the divide
+ * and conquer, divideConquerTridiagonal.ts); the JavaScript route keeps tridiagonalQr, the
  * reference, bit-for-bit.
  */
 const EPS = 2.220446049250313e-16;
@@ -25,8 +26,11 @@ function wilkinsonShift(dm1: number, dm: number, b: number): number {
   return denom === 0 ? dm : dm - (b * b) / denom;
 }
 
-/** One implicit shifted QR sweep on the unreduced window [l, m] of (d, e). */
-function chaseValues(d: Float64Array, e: Float64Array, l: number, m: number): void {
+/**
+ * One implicit shifted QR sweep on the unreduced window [l, m] of (d, e); the rotations also
+ * go to rows k, k + 1 of `qt` (stride qs) unless it is null.
+ */
+function chaseValues(d: Float64Array, e: Float64Array, l: number, m: number, qt: Float64Array | null, qs: number): void {
   const mu = wilkinsonShift(d[m - 1], d[m], e[m - 1]);
   let x = d[l] - mu;
   let z = e[l];
@@ -45,6 +49,13 @@ function chaseValues(d: Float64Array, e: Float64Array, l: number, m: number): vo
       z = s * e[k + 1];
       e[k + 1] *= c;
       x = e[k];
+    }
+    if (qt === null) continue;
+    for (let i = 0, rk = k * qs, rk1 = rk + qs; i < qs; i++) {
+      const qk = qt[rk + i];
+      const qk1 = qt[rk1 + i];
+      qt[rk + i] = c * qk + s * qk1;
+      qt[rk1 + i] = c * qk1 - s * qk;
     }
   }
 }
@@ -77,5 +88,13 @@ export function deflatingQr(d: Float64Array, e: Float64Array, n: number, chase: 
 
 /** Eigenvalues of the tridiagonal (d, e) into d (unsorted; e destroyed); false as deflatingQr. */
 export function tridiagonalValues(d: Float64Array, e: Float64Array, n: number): boolean {
-  return deflatingQr(d, e, n, (l, m) => chaseValues(d, e, l, m));
+  return deflatingQr(d, e, n, (l, m) => chaseValues(d, e, l, m, null, 0));
+}
+
+/**
+ * Eigenvalues into d as tridiagonalValues, with the rotations accumulated into the rows of `qt`
+ * (n × n, row-major): start from the identity and row k ends as the eigenvector of d[k].
+ */
+export function tridiagonalValuesVectors(d: Float64Array, e: Float64Array, n: number, qt: Float64Array): boolean {
+  return deflatingQr(d, e, n, (l, m) => chaseValues(d, e, l, m, qt, n));
 }
