@@ -146,6 +146,17 @@ describe('apparatus', () => {
     expect(codes('jet 1500 m/s spread 150 %')).toEqual(['beam-source-malformed']);
   });
 
+  it('flags a beam whose level belongs to another species than the one it names, at the level', () => {
+    const text = 'species Na23\n  level g: 3s 2S1/2\nspecies Li7\n  level g: 2s 2S1/2\nbeam b\n  species = Na23\n  level = Li7.g\n';
+    const found = analyze(text).problems.filter((p) => p.code === 'beam-level-of-other-species');
+    expect(found.map((p) => [p.range.start.line, p.range.start.character, p.range.end.character])).toEqual([[6, 10, 15]]);
+    expect(found[0]!.message).toBe("beam 'b' carries Na23, but its level 'g' belongs to Li7; name a level of Na23, or change the species");
+    // The same level named through the beam's own species, or with no species written, is fine.
+    const clean = (t: string) => analyze(t).problems.filter((p) => p.code === 'beam-level-of-other-species');
+    expect(clean(text.replace('level = Li7.g', 'level = Na23.g'))).toEqual([]);
+    expect(clean(text.replace('  species = Na23\n', ''))).toEqual([]);
+  });
+
   it('reads slits and rejects malformed ones', () => {
     const m = model('beam b\n  slits = 80 um, 50 um apart 40 cm\n');
     const slits = m.beams[0]!.slits!.value;

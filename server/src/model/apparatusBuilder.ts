@@ -128,6 +128,15 @@ export function buildBeam(
       const [q, n] = splitQualified(part);
       const lv = resolveLevel(q ? { qualifier: q, name: n } : { name: n }, index.species, beam.species, uses, problems);
       if (lv) {
+        // The level decides what flies (its mass, its moments); a `species` that names another
+        // one is a contradiction the user must settle, not something to pick a side of quietly.
+        if (beam.species && beam.species !== lv.species) {
+          problems.add(
+            'beam-level-of-other-species',
+            `beam '${name}' carries ${beam.species.name}, but its level '${lv.name}' belongs to ${lv.species.name}; name a level of ${beam.species.name}, or change the species`,
+            part.range,
+          );
+        }
         beam.level = lv;
         beam.species ??= lv.species;
       }

@@ -56,6 +56,7 @@ export const MODEL_RULES = {
   'beam-detector-malformed': { severity: 'error', summary: 'A detector not written as width [at offset].' },
   'beam-populations-malformed': { severity: 'error', summary: 'Populations not written as F m weight groups.' },
   'line-incomplete': { severity: 'error', summary: 'A line without both levels.' },
+  'beam-level-of-other-species': { severity: 'error', summary: 'A beam whose level belongs to another species than the one it names.' },
   'line-across-species': { severity: 'error', summary: 'A line between levels of different species.' },
   'line-same-level': { severity: 'error', summary: 'A line from a level to itself.' },
   'line-to-whole-term': { severity: 'warning', summary: 'A line to a whole term given by E_J without hyperfine constants, on a species with a nucleus: not computed.' },
