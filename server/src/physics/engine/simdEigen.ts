@@ -163,7 +163,7 @@ export function simdMergeKernels(n: number): MergeKernels | null {
   return wasmMergeKernels(k, new Float64Array(k.memory.buffer), l, n);
 }
 
-/** The merges' loops on the module's memory, by the `multiply` and `secularSums` kernels. */
+/** The merges' loops on the module's memory, by the module's kernels (multiply, secularSums, poleOffsets, weightRatios, cauchyRow). */
 function wasmMergeKernels(k: EigenKernels, heap: Float64Array, l: Layout, n: number): MergeKernels {
   const size = (n + 4) * productStride(n);
   const { pv, pg, pw, gaps, z2, sums, dk, zhat } = l;
