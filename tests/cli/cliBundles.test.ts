@@ -42,7 +42,7 @@ describe('which bundle answers', () => {
 describe('the same output from either bundle', () => {
   it.each([
     [['check', SMALL]],
-    [['check', 'examples', '--format', 'sarif']],
+    [['check', 'examples/mistakes.sublevel', '--format', 'sarif']],
     [['check', 'examples/mistakes.sublevel', '--format', 'json']],
     [['eval', FIT, '--format', 'json']],
     [['check', '--help']],
