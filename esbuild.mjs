@@ -12,6 +12,16 @@ const common = {
   logLevel: 'warning',
 };
 
+/** A package the bundle requires at run time from a file beside itself instead of carrying it. */
+function besideTheBundle(name, file) {
+  return {
+    name: `beside-${name}`,
+    setup(build) {
+      build.onResolve({ filter: new RegExp(`^${name}$`) }, () => ({ path: file, external: true }));
+    },
+  };
+}
+
 // The unit table comes from mathjs at build time, so no bundle loads mathjs (docs/speed.md).
 await writeUnitTable();
 
@@ -21,12 +31,20 @@ await Promise.all([
   // analysis (parser, model, physics) that it requires from beside itself afterwards.
   esbuild.build({ ...common, entryPoints: ['server/src/server.ts'], outfile: 'dist/server.js' }),
   esbuild.build({ ...common, entryPoints: ['server/src/service/serviceEntry.ts'], outfile: 'dist/service.js' }),
+  // The CLI is a launcher (the bin) and two bundles beside it, so `check` and `eval` do not compile
+  // the other commands' code: the core bundle has those two, the full one every command
+  // (server/src/cli/bundleRoute.ts). ml-matrix, needed only by a fit, is a file of its own that
+  // the first fit loads (docs/speed.md, "Start-up").
   esbuild.build({
     ...common,
-    entryPoints: ['server/src/cli/main.ts'],
+    entryPoints: ['server/src/cli/bundles/launcher.ts'],
     outfile: 'dist/cli.js',
+    external: ['./cli-core.js', './cli-full.js'],
     banner: { js: '#!/usr/bin/env node' },
   }),
+  esbuild.build({ ...common, entryPoints: ['server/src/cli/bundles/core.ts'], outfile: 'dist/cli-core.js', plugins: [besideTheBundle('ml-matrix', './cli-ml-matrix.js')] }),
+  esbuild.build({ ...common, entryPoints: ['server/src/cli/bundles/full.ts'], outfile: 'dist/cli-full.js', plugins: [besideTheBundle('ml-matrix', './cli-ml-matrix.js')] }),
+  esbuild.build({ ...common, entryPoints: ['ml-matrix'], outfile: 'dist/cli-ml-matrix.js' }),
   // The diagram panel's page script and stylesheet, loaded by the webview (no Node APIs there).
   esbuild.build({
     entryPoints: ['client/src/panel/page.ts'],

@@ -60,27 +60,35 @@ function entries(stageOf: (id: string) => string, table: Readonly<Record<string,
   return Object.entries(table).map(([id, r]) => ({ id, severity: r.severity, summary: r.summary, stage: STAGE_WORDS[stageOf(id)] ?? stageOf(id), help: helpFor(id) }));
 }
 
-const INTERNAL: RuleEntry = {
-  id: 'internal-error',
-  severity: 'error',
-  summary: 'Sublevel itself failed while reading the file.',
-  stage: 'the pipeline',
-  help: helpFor('internal-error'),
-};
+let catalogue: readonly RuleEntry[] | undefined;
 
-/** One entry per code; a code in two registries (an evaluation check that repeats a physics one) is listed once, first come. */
-export const RULE_CATALOGUE: readonly RuleEntry[] = (() => {
-  const all = [
-    ...entries((id) => RULES[id]!.stage, RULES),
-    ...entries(() => 'model', MODEL_RULES),
-    ...entries(() => 'evaluation', EVAL_RULES),
-    ...entries(() => 'physics', PHYSICS_RULES),
-    ...entries(() => 'cli', CLI_RULES),
-    INTERNAL,
-  ];
-  const seen = new Set<string>();
-  return all.filter((r) => !seen.has(r.id) && seen.add(r.id));
-})();
+/**
+ * One entry per code; a code in two registries (an evaluation check that repeats a physics one)
+ * is listed once, first come. Made on first use: only SARIF output reads it, and matching every
+ * code against the help patterns would cost every `check` its time at start-up (docs/speed.md).
+ */
+export function ruleCatalogue(): readonly RuleEntry[] {
+  catalogue ??= (() => {
+    const internal: RuleEntry = {
+      id: 'internal-error',
+      severity: 'error',
+      summary: 'Sublevel itself failed while reading the file.',
+      stage: 'the pipeline',
+      help: helpFor('internal-error'),
+    };
+    const all = [
+      ...entries((id) => RULES[id]!.stage, RULES),
+      ...entries(() => 'model', MODEL_RULES),
+      ...entries(() => 'evaluation', EVAL_RULES),
+      ...entries(() => 'physics', PHYSICS_RULES),
+      ...entries(() => 'cli', CLI_RULES),
+      internal,
+    ];
+    const seen = new Set<string>();
+    return all.filter((r) => !seen.has(r.id) && seen.add(r.id));
+  })();
+  return catalogue;
+}
 
 /** A rule for a code no registry lists (a future code): described by the finding itself. */
 export function unlistedRule(id: string, severity: ProblemSeverity): RuleEntry {

@@ -9,7 +9,7 @@ import * as path from 'path';
 import { fileURLToPath, pathToFileURL } from 'url';
 import type * as Sarif from 'sarif';
 import type { Problem, ProblemSeverity, Range } from '../../format/ast';
-import { RULE_CATALOGUE, type RuleEntry, unlistedRule } from './ruleCatalogue';
+import { ruleCatalogue, type RuleEntry, unlistedRule } from './ruleCatalogue';
 
 export const SARIF_SCHEMA_URI = 'https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/schemas/sarif-schema-2.1.0.json';
 export const ROOT_BASE_ID = 'SRCROOT';
@@ -64,7 +64,7 @@ function relatedFile(uri: string | undefined, file: string): string {
 }
 
 export function sarifLog(files: readonly SarifFile[], settings: SarifSettings): Sarif.Log {
-  const rules = [...RULE_CATALOGUE];
+  const rules = [...ruleCatalogue()];
   const indexOf = new Map(rules.map((r, i) => [r.id, i]));
   const ruleIndex = (p: Problem): number => {
     let i = indexOf.get(p.code);

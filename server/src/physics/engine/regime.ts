@@ -23,6 +23,7 @@ import type { LevelModel } from './levelModel';
 import { MAX_SWEEP_WORK } from './limits';
 import type { EngineIssue, LevelSpec, RegimeResult, RegimeVerdict } from './types';
 import { checkField } from './validateSpec';
+import { linearProvenBetween } from './weakFieldBound';
 
 /** Scan from 1e-9 to 1e6 times the characteristic field, four steps per decade. */
 const STEPS_PER_DECADE = 4;
@@ -181,8 +182,21 @@ function limitSearch(model: LevelModel, fraction: number, bc: number): LimitSear
     }
     return limit;
   };
+  /** The first step at or above b, if the scan reaches that far. */
+  const stepAtOrAbove = (b: number): number | undefined => {
+    let k = Math.max(SCAN_LO, Math.ceil(Math.log10(b / bc) * STEPS_PER_DECADE) - 1);
+    while (k <= SCAN_HI && at(k) < b) k++;
+    while (k > SCAN_LO && at(k - 1) >= b) k--;
+    return k <= SCAN_HI ? k : undefined;
+  };
   return {
     linearHoldsAt(b) {
+      // Steps that a bound proves to pass need no solve; they pass all the same, so the limits do not move (weakFieldBound.ts).
+      if (linearLimitT === undefined && passed < SCAN_LO) {
+        const k = stepAtOrAbove(b);
+        if (k !== undefined && linearProvenBetween(model, fraction, maxSlope, at(SCAN_LO), at(k))) passed = k;
+      }
+      if (linearLimitT === undefined && passed >= SCAN_LO && at(passed) >= b) return true;
       scanLinear(b);
       // A passing step at or above b puts the limit, which lies above every passing step, above b too.
       return linearLimitT === undefined ? true : b <= linearLimitT;

@@ -4,8 +4,19 @@
  * parameter combination the data do not determine (the covariance is then not reported as if
  * it were). ml-matrix gives the small SVD.
  */
-import { Matrix, SingularValueDecomposition } from 'ml-matrix';
+import type * as MlMatrix from 'ml-matrix';
 import { qrReduce } from './householderQr';
+
+let mlMatrix: typeof MlMatrix | undefined;
+
+/**
+ * ml-matrix, loaded by the first fit rather than with the program: it is a seventh of the CLI,
+ * and every `check` would compile it at start-up (docs/speed.md, "Start-up").
+ */
+function svdLibrary(): typeof MlMatrix {
+  mlMatrix ??= require('ml-matrix') as typeof MlMatrix;
+  return mlMatrix;
+}
 
 /**
  * Below this ratio of smallest to largest singular value (scaled columns) a combination is
@@ -39,6 +50,7 @@ export function covarianceFromJacobian(jac: Float64Array, n: number, p: number):
   const r = qrReduce(a, n, p, new Float64Array(n));
   const rows: number[][] = [];
   for (let i = 0; i < p; i++) rows.push(Array.from(r.subarray(i * p, i * p + p)));
+  const { Matrix, SingularValueDecomposition } = svdLibrary();
   const svd = new SingularValueDecomposition(new Matrix(rows), { autoTranspose: true });
   const s = svd.diagonal;
   const v = svd.rightSingularVectors;
