@@ -13,17 +13,10 @@ import { householderInverseIterationInPlace } from '../../server/src/physics/eng
 import { javascriptSecularSums, secularRoots } from '../../server/src/physics/engine/secularRoots';
 import { simdHouseholderInverseIteration, simdKernelsAvailable, simdMergeKernels } from '../../server/src/physics/engine/simdEigen';
 import { tridiagonalValues } from '../../server/src/physics/engine/tridiagonalValues';
+import { lcg, quality } from './eigenQuality';
 
 const EPS = 2.220446049250313e-16;
 const FUZZ = Number(process.env.FUZZ_RUNS ?? 0);
-
-function lcg(seed: number): () => number {
-  let s = seed >>> 0;
-  return () => {
-    s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
-    return s / 4294967296 - 0.5;
-  };
-}
 
 interface Tridiagonal {
   d: Float64Array;
@@ -276,27 +269,9 @@ describe.runIf(simdKernelsAvailable())('large-block route with divide and conque
           const jsValues = new Float64Array(n);
           const jsVectors = new Float64Array(n * n);
           if (!householderInverseIterationInPlace(a.slice(), n, jsValues, jsVectors)) return false;
-          let norm = 0;
-          for (const x of a) norm += x * x;
-          norm = Math.sqrt(norm);
-          let residual = 0;
-          let orthogonality = 0;
-          for (let k = 0; k < n; k++) {
-            if (!(Math.abs(values[k] - jsValues[k]) < n * EPS * norm)) return false;
-            let r2 = 0;
-            for (let i = 0; i < n; i++) {
-              let s = -values[k] * vectors[i * n + k];
-              for (let j = 0; j < n; j++) s += a[i * n + j] * vectors[j * n + k];
-              r2 += s * s;
-            }
-            residual = Math.max(residual, Math.sqrt(r2) / norm);
-            for (let l = k; l < n; l++) {
-              let dot = k === l ? -1 : 0;
-              for (let i = 0; i < n; i++) dot += vectors[i * n + k] * vectors[i * n + l];
-              orthogonality = Math.max(orthogonality, Math.abs(dot));
-            }
-          }
-          return residual < n * EPS && orthogonality < n * EPS;
+          const q = quality(a, n, values, vectors);
+          for (let k = 0; k < n; k++) if (!(Math.abs(values[k] - jsValues[k]) < n * EPS * q.norm)) return false;
+          return q.residual < n * EPS && q.orthogonality < n * EPS;
         },
       ),
       { numRuns: FUZZ || 8, seed: FUZZ ? undefined : 1202 },

@@ -15,17 +15,10 @@ import { simdHouseholderInverseIteration, simdKernelsAvailable } from '../../ser
 import { SIMD_MIN_ORDER, symmetricEigen } from '../../server/src/physics/engine/symmetricEigen';
 import { tridiagonalValues } from '../../server/src/physics/engine/tridiagonalValues';
 import { tridiagonalEigenpairs } from '../../server/src/physics/engine/tridiagonalVectors';
+import { lcg, quality } from './eigenQuality';
 
 const EPS = 2.220446049250313e-16;
 const FUZZ = Number(process.env.FUZZ_RUNS ?? 0);
-
-function lcg(seed: number): () => number {
-  let s = seed >>> 0;
-  return () => {
-    s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
-    return s / 4294967296 - 0.5;
-  };
-}
 
 /** Random symmetric matrix: uniform entries in ±0.5 plus `weight` × uniform on the diagonal, times `scale`. */
 function randomSymmetric(n: number, seed: number, weight: number, scale: number): Float64Array {
@@ -33,30 +26,6 @@ function randomSymmetric(n: number, seed: number, weight: number, scale: number)
   const a = new Float64Array(n * n);
   for (let i = 0; i < n; i++) for (let j = i; j < n; j++) a[i * n + j] = a[j * n + i] = scale * (r() + (i === j ? weight * r() : 0));
   return a;
-}
-
-/** ‖A‖_F, the largest ‖A v_k − λ_k v_k‖ / ‖A‖_F and the largest |VᵀV − I| entry. */
-function quality(a: Float64Array, n: number, values: Float64Array, v: Float64Array): { norm: number; residual: number; orthogonality: number } {
-  let norm = 0;
-  for (const x of a) norm += x * x;
-  norm = Math.sqrt(norm);
-  let residual = 0;
-  let orthogonality = 0;
-  for (let k = 0; k < n; k++) {
-    let r2 = 0;
-    for (let i = 0; i < n; i++) {
-      let s = -values[k] * v[i * n + k];
-      for (let j = 0; j < n; j++) s += a[i * n + j] * v[j * n + k];
-      r2 += s * s;
-    }
-    residual = Math.max(residual, Math.sqrt(r2) / norm);
-    for (let l = k; l < n; l++) {
-      let dot = k === l ? -1 : 0;
-      for (let i = 0; i < n; i++) dot += v[i * n + k] * v[i * n + l];
-      orthogonality = Math.max(orthogonality, Math.abs(dot));
-    }
-  }
-  return { norm, residual, orthogonality };
 }
 
 function solveBoth(a: Float64Array, n: number, mustSucceed = true) {
