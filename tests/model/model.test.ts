@@ -151,6 +151,8 @@ describe('apparatus', () => {
     const found = analyze(text).problems.filter((p) => p.code === 'beam-level-of-other-species');
     expect(found.map((p) => [p.range.start.line, p.range.start.character, p.range.end.character])).toEqual([[6, 10, 15]]);
     expect(found[0]!.message).toBe("beam 'b' carries Na23, but its level 'g' belongs to Li7; name a level of Na23, or change the species");
+    // No beam result mixes Na23's mass with Li7's moments: the beam has no level, so it is not flown.
+    expect(model(text).beams[0]!.level).toBeUndefined();
     // The same level named through the beam's own species, or with no species written, is fine.
     const clean = (t: string) => analyze(t).problems.filter((p) => p.code === 'beam-level-of-other-species');
     expect(clean(text.replace('level = Li7.g', 'level = Na23.g'))).toEqual([]);

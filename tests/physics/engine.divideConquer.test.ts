@@ -116,7 +116,7 @@ describe('secular equation (secularRoots.ts)', () => {
       for (let j = 0; j < k; j++) space.z2[j] = z[j] * z[j];
       const origin = new Int32Array(k);
       const tau = new Float64Array(k);
-      secularRoots(d, k, rho, origin, tau, space);
+      expect(secularRoots(d, k, rho, origin, tau, space)).toBe(true);
       let sum = 0;
       let expected = 0;
       for (let i = 0; i < k; i++) {

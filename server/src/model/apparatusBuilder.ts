@@ -130,15 +130,18 @@ export function buildBeam(
       if (lv) {
         // The level decides what flies (its mass, its moments); a `species` that names another
         // one is a contradiction the user must settle, not something to pick a side of quietly.
+        // The beam is then left without a level (not computed), so no result mixes one species'
+        // mass with another's moments.
         if (beam.species && beam.species !== lv.species) {
           problems.add(
             'beam-level-of-other-species',
             `beam '${name}' carries ${beam.species.name}, but its level '${lv.name}' belongs to ${lv.species.name}; name a level of ${beam.species.name}, or change the species`,
             part.range,
           );
+        } else {
+          beam.level = lv;
+          beam.species ??= lv.species;
         }
-        beam.level = lv;
-        beam.species ??= lv.species;
       }
     }
   }

@@ -1,9 +1,9 @@
 /**
  * A cheap first look at a trial of the resolving search (resolvingOptions.ts): the same pattern
  * on a coarse grid of SCREEN_BINS bins instead of the full 4,096 (11–13 % of the work). It
- * answers one question only — does this change certainly leave the worst dip above a bar? — and
- * only with a margin wider than any difference between the coarse and the full worst dip seen on
- * random oven and jet set-ups (tests/physics/trialScreen.test.ts). A single-speed beam is never
+ * answers one question only — does this change leave the worst dip above a bar? — and only with
+ * a margin wider than any difference between the coarse and the full worst dip seen on random oven
+ * and jet set-ups (tests/physics/trialScreen.test.ts): an empirical margin, not a proof (docs/beam.md). A single-speed beam is never
  * screened: its flat-topped peaks need the full grid (coarse dips were off by up to 0.05 even at 512 bins).
  */
 import { computePattern, type PatternInput } from './detectorPattern';

@@ -103,11 +103,6 @@ function scratch(n: number): Scratch {
   return cache;
 }
 
-/** Components kept (solved by the secular equation) and dropped by deflation, summed over merges. */
-export interface DeflationCount {
-  kept: number;
-  dropped: number;
-}
 
 /** Components kept (solved by the secular equation) and dropped by deflation, summed over merges. */
 export interface DeflationCount {
@@ -127,6 +122,7 @@ export function productStride(n: number): number {
  * converge. `count`, if given, gets the merges' kept and dropped components added (for tests).
  */
 export function divideConquerTridiagonal(d: Float64Array, e: Float64Array, n: number, values: Float64Array, z: Float64Array, zs: number, products: MergeKernels, count?: DeflationCount): boolean {
+  if (n <= 0) return true;
   for (let i = 0; i < n; i++) if (!Number.isFinite(d[i]) || (i < n - 1 && !Number.isFinite(e[i]))) return false;
   const s = scratch(n);
   s.ps = productStride(n);
@@ -149,8 +145,7 @@ function solvePiece(s: Scratch, z: Float64Array, zs: number, products: MergeKern
   s.d[at + m1] -= Math.abs(beta);
   if (!solvePiece(s, z, zs, products, at, m1)) return false;
   if (!solvePiece(s, z, zs, products, at + m1, m - m1)) return false;
-  merge(s, z, zs, products, at, m1, m - m1, beta);
-  return true;
+  return merge(s, z, zs, products, at, m1, m - m1, beta);
 }
 
 /** A small piece by QR with the rotations accumulated, sorted ascending. */
@@ -184,7 +179,7 @@ function solveLeaf(s: Scratch, z: Float64Array, zs: number, at: number, m: numbe
  * Joins the solved pieces [at, at+m1) and [at+m1, at+m1+m2) (values ascending in s.d, vectors as
  * rows of z) into the solution of their whole, values ascending again.
  */
-function merge(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, at: number, m1: number, m2: number, beta: number): void {
+function merge(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, at: number, m1: number, m2: number, beta: number): boolean {
   const m = m1 + m2;
   const { d, z: zv, perm, types, kept, dropped } = s;
   // z = Qᵀ v / √2 (unit length), ρ = 2|β|.
@@ -244,7 +239,7 @@ function merge(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, 
   }
   const ps = s.ps;
   const b0 = (m1 + 3) & ~3;
-  if (k > 0) newVectors(s, z, zs, products, at, m1, m2, k, rho, ps, b0);
+  if (k > 0 && !newVectors(s, z, zs, products, at, m1, m2, k, rho, ps, b0)) return false;
   sortDropped(d, at, dropped, nDropped);
   // Pieces' vectors of the dropped components, after the kept ones in g.
   const { g, w } = products;
@@ -266,6 +261,7 @@ function merge(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, 
     }
   }
   d.set(merged.subarray(0, m), at);
+  return true;
 }
 
 /**
@@ -273,7 +269,7 @@ function merge(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, 
  * in the pieces' basis (rows of v, columns in upper-only, mixed, lower-only order) and their
  * products with the pieces' vectors (rows of w, upper columns at 0, lower ones at b0).
  */
-function newVectors(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, at: number, m1: number, m2: number, k: number, rho: number, ps: number, b0: number): void {
+function newVectors(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, at: number, m1: number, m2: number, k: number, rho: number, ps: number, b0: number): boolean {
   const { d, z: zv, types, kept, zk, origin, tau, column } = s;
   const { gaps, z2, dk, zhat } = products;
   for (let j = 0; j < k; j++) {
@@ -281,7 +277,7 @@ function newVectors(s: Scratch, z: Float64Array, zs: number, products: MergeKern
     zk[j] = zv[kept[j]];
     z2[j] = zk[j] * zk[j];
   }
-  secularRoots(dk, k, rho, origin, tau, products);
+  if (!secularRoots(dk, k, rho, origin, tau, products)) return false;
   // ẑ_j² = Π_i (λ_i − d_j) / (ρ Π_{i≠j} (d_i − d_j)), as ratios near one to stay in range: root
   // i < k − 1 pairs with pole i for j > i and with pole i + 1 for j ≤ i; the last root with ρ.
   for (let j = 0; j < k; j++) zhat[j] = -gaps[(k - 1) * k + j] / rho;
@@ -314,6 +310,7 @@ function newVectors(s: Scratch, z: Float64Array, zs: number, products: MergeKern
   else for (let i = 0; i < k; i++) w.fill(0, i * ps, i * ps + m1);
   if (lower > 0) products.multiply(k, lower, m2, k1, ps, k1 * ps + b0, ps, b0, ps);
   else for (let i = 0; i < k; i++) w.fill(0, i * ps + b0, i * ps + b0 + m2);
+  return true;
 }
 
 /** Rows p, q (m entries from the given offsets) ← (c p − s q, s p + c q). */

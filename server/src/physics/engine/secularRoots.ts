@@ -15,7 +15,8 @@
  * Sorensen, Numer. Math. 31 (1978) 31, as in Demmel, Applied Numerical Linear Algebra, §5.3.3)
  * and steps to that model's root; a bracket kept from the signs of f catches any step that leaves
  * it, which then bisects. It stops when |f| is within its own rounding error or the bracket is
- * a few ulps wide, so it always ends.
+ * a few ulps wide; a root that has neither after MAX_STEPS steps makes the call return false, so
+ * the caller falls back to another route instead of using an unconverged root.
  */
 
 const EPS = 2.220446049250313e-16;
@@ -41,7 +42,7 @@ export interface SecularSums {
  * gaps[i·k + j] = d_j − λ_i, for the k roots of the equation above. `space.z2` must hold z_j²,
  * and `d` must be the array `space.offsets` reads.
  */
-export function secularRoots(d: Float64Array, k: number, rho: number, origin: Int32Array, tau: Float64Array, space: SecularSums): void {
+export function secularRoots(d: Float64Array, k: number, rho: number, origin: Int32Array, tau: Float64Array, space: SecularSums): boolean {
   const { gaps, z2, out } = space;
   const invRho = 1 / rho;
   let zz = 0;
@@ -75,26 +76,35 @@ export function secularRoots(d: Float64Array, k: number, rho: number, origin: In
     }
     const a = gaps[row + i];
     const b = i < k - 1 ? gaps[row + i + 1] : 0;
+    let settled = false;
     for (let step = 0; step < MAX_STEPS; step++) {
       const psi = out[0];
       const dpsi = out[1];
       const phi = out[2];
       const dphi = out[3];
       const f = invRho + psi + phi;
-      if (f === 0) break;
+      if (f === 0) {
+        settled = true;
+        break;
+      }
       if (f < 0) lo = t;
       else hi = t;
       // Rounding error of f: its terms' magnitudes (ψ < 0 < φ) and the ulp of τ times the slope.
       const noise = EPS * (8 * (invRho - psi + phi) + Math.abs(t) * (dpsi + dphi));
-      if (Math.abs(f) <= noise || hi - lo <= 4 * EPS * Math.max(Math.abs(lo), Math.abs(hi))) break;
+      if (Math.abs(f) <= noise || hi - lo <= 4 * EPS * Math.max(Math.abs(lo), Math.abs(hi))) {
+        settled = true;
+        break;
+      }
       const next = modelRoot(invRho, psi, dpsi, phi, dphi, a, b, t, i < k - 1);
       t = next > lo && next < hi ? next : 0.5 * (lo + hi);
       space.sums(row, i, k, t);
     }
+    if (!settled) return false;
     origin[i] = o;
     tau[i] = t;
     space.offsets(row, k, d[o], t);
   }
+  return true;
 }
 
 /** The sums in JavaScript loops, for orders up to n, with the poles d read by `offsets`. */

@@ -1,5 +1,5 @@
 /**
- * A proof, without solving, that the regime scan's linear test passes at every field up to a
+ * A bound, without solving, showing that the regime scan's linear test passes at every field up to a
  * given one, for a hyperfine level: the scan then need not solve those steps (regime.ts).
  *
  * In one m block, H(B) = H0 + B·Z with Z diagonal. Each F appears once in a block, so the
@@ -15,7 +15,7 @@
  * numbers, so round-off is allowed for on top: backward-stable symmetric eigensolvers return
  * eigenvalues within a small multiple of n·ε·‖H‖ of the exact ones (Golub & Van Loan, symmetric
  * QR and Jacobi, from memory); the slack here is 100 (n + 1)² ε times a bound on every term's
- * size, far above that. The proof is kept only with a factor 4/3 to spare.
+ * size, far above that. The round-off slack is a chosen allowance, not a proven constant for this solver; the bound is used only with a factor 4/3 to spare.
  */
 import type { LevelModel } from './levelModel';
 import { jj1 } from './halfIntegers';
