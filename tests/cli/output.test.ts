@@ -8,6 +8,7 @@ import { tmpdir } from 'os';
 import path from 'path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { type CliFileSystem, nodeFileSystem } from '../../server/src/cli/fileSystem';
+import { OutputError, writeOutputFile } from '../../server/src/cli/output';
 import { cli, cliOn } from './runCli';
 
 const LI = 'examples/lithium-beam.sublevel';
@@ -33,6 +34,25 @@ describe('atomic --out', () => {
     dir = mkdtempSync(path.join(tmpdir(), 'sublevel-out-'));
   });
   afterEach(() => rmSync(dir, { recursive: true, force: true }));
+
+  it('a failure of the pieces\' maker is passed on as it is (an internal error), not as a write failure; the old file stays', () => {
+    const target = path.join(dir, 'pattern.csv');
+    writeFileSync(target, OLD);
+    const bug = new Error('writer bug');
+    let thrown: unknown;
+    try {
+      writeOutputFile(target, (put) => {
+        put(new Uint8Array([65, 66]));
+        throw bug;
+      }, nodeFileSystem);
+    } catch (e) {
+      thrown = e;
+    }
+    expect(thrown).toBe(bug);
+    expect(thrown).not.toBeInstanceOf(OutputError);
+    expect(readFileSync(target, 'utf8')).toBe(OLD);
+    expect(readdirSync(dir)).toEqual(['pattern.csv']);
+  });
 
   it('on a full disk the old file is untouched, no temporary file is left, and the message says so', () => {
     const target = path.join(dir, 'pattern.csv');

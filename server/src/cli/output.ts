@@ -36,11 +36,25 @@ export function writeOutputFile(target: string, content: string | Uint8Array | O
   try {
     const opened = fsys.openSync(tmp, 'wx', existing?.mode ?? 0o666);
     fd = opened;
+    let writeFailed = false;
     const put = (bytes: Uint8Array): void => {
-      for (let done = 0; done < bytes.length; ) done += fsys.writeSync(opened, bytes, done, bytes.length - done);
+      try {
+        for (let done = 0; done < bytes.length; ) done += fsys.writeSync(opened, bytes, done, bytes.length - done);
+      } catch (e) {
+        writeFailed = true;
+        throw e;
+      }
     };
-    if (typeof content === 'function') content(put);
-    else put(typeof content === 'string' ? Buffer.from(escapeControls(content), 'utf8') : content);
+    if (typeof content === 'function') {
+      try {
+        content(put);
+      } catch (e) {
+        // A failure of the pieces' maker, not of the file system, is a bug: passed on unchanged
+        // (an internal error, exit 3), after the temporary file is removed.
+        if (!writeFailed) throw new MakerFailure(e);
+        throw e;
+      }
+    } else put(typeof content === 'string' ? Buffer.from(escapeControls(content), 'utf8') : content);
     fsys.fsyncSync(fd);
     fsys.closeSync(fd);
     fd = undefined;
@@ -48,9 +62,15 @@ export function writeOutputFile(target: string, content: string | Uint8Array | O
   } catch (e) {
     if (fd !== undefined) ignoreFailure(() => fsys.closeSync(fd!));
     ignoreFailure(() => fsys.unlinkSync(tmp));
+    if (e instanceof MakerFailure) throw e.cause;
     throw new OutputError(`cannot write ${target}: ${reasonOf(e)}; ${existing ? 'the old file is unchanged' : 'no file was written'}`);
   }
   syncFolder(path.dirname(final), fsys);
+}
+
+/** A failure of the pieces' maker, carried past the file-system handler unchanged. */
+class MakerFailure {
+  constructor(readonly cause: unknown) {}
 }
 
 /**
