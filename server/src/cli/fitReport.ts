@@ -15,7 +15,7 @@ export function fitReportLines(file: string, fits: readonly FitResult[]): string
     out.push('', `fit ${f.name} (${f.kind === 'calibration' ? 'field from one resonance' : f.kind === 'profile' ? 'detector profile' : 'resonances and intervals'})${STATUS[f.status]}`);
     if (f.kind === 'calibration') {
       const p = f.points[0];
-      if (p) out.push(`  measured ${fittedText(p.measured, p.uncertainty, 'Hz', f.measured_written_unit)}`);
+      if (p) out.push(`  measured ${fittedText(p.measured, p.uncertainty, 'Hz', p.written_unit ?? f.measured_written_unit)}`);
       if (!f.roots?.length) out.push('  no field in the range is resonant at this frequency');
       for (const r of f.roots ?? []) out.push(`  field = ${fittedText(r.field_T, r.uncertainty_T, 'T', f.parameters[0]?.written_unit)}   (df/dB = ${sensitivityText(r.df_dB_Hz_per_T, 5)})`);
       continue;

@@ -137,7 +137,15 @@ function calibrate(f: FitRequestModel, spec: HyperfineLevelSpec, row: SpectralRo
     status: cal.roots.length > 0 ? 'converged' : 'failed',
     dof: 0,
     uncertainty_basis: 'data',
-    points: [{ data: row.data.name, line: row.datum.range.start.line, measured: row.datum.frequencyHz, ...(row.datum.uncertaintyHz !== undefined ? { uncertainty: row.datum.uncertaintyHz } : {}) }],
+    points: [
+      {
+        data: row.data.name,
+        line: row.datum.range.start.line,
+        measured: row.datum.frequencyHz,
+        ...(row.datum.uncertaintyHz !== undefined ? { uncertainty: row.datum.uncertaintyHz } : {}),
+        ...(row.datum.unit !== undefined && row.datum.unit !== out.measured_written_unit ? { written_unit: row.datum.unit } : {}),
+      },
+    ],
     roots: cal.roots.map((r) => ({ field_T: r.fieldT, ...(r.uncertaintyT !== null ? { uncertainty_T: r.uncertaintyT } : {}), df_dB_Hz_per_T: r.dfdBHzPerT })),
   };
   const first = cal.roots[0];
