@@ -18,7 +18,7 @@ import type { GJLookup } from '../gJLookup';
 import { hyperfineSpec } from '../levelSpec';
 import type { BeamResult } from '../resultTypes';
 import { fieldMapBeamUncertainty } from './fieldMapPass';
-import { fieldKey, type BeamGeometrySens, type SetupInputs } from './inputs';
+import { fieldKey, reachesWritten, type BeamGeometrySens, type SetupInputs } from './inputs';
 import { setUnc } from './uncField';
 
 export function beamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJLookup, inp: SetupInputs, problems: Problem[]): void {
@@ -129,7 +129,7 @@ export function peakUncertainty(
     // A warning when an uncertainty the file wrote is lost here; when only published built-in
     // uncertainties reach the peaks, a note (the setup itself asked for nothing).
     const reaching = [temperature, ...Object.values(apparatus ?? {}), ...deflections];
-    const written = reaching.some((s) => Object.keys(s).some((id) => s[id] !== 0 && inp.table.get(id)?.written === true));
+    const written = reaching.some((s) => reachesWritten(s, inp.table));
     problems.push({
       code: 'uncertainty-undefined',
       severity: written ? 'warning' : 'info',

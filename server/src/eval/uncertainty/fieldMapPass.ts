@@ -21,7 +21,7 @@ import type { GJLookup } from '../gJLookup';
 import { magnetFieldMap } from '../magnetFieldMap';
 import type { BeamResult } from '../resultTypes';
 import { peakUncertainty } from './beamPass';
-import { fieldKey, type SetupInputs } from './inputs';
+import { fieldKey, reachesWritten, type SetupInputs } from './inputs';
 import { firstStep } from './sourceInputs';
 import { setUnc } from './uncField';
 
@@ -97,7 +97,7 @@ export function fieldMapBeamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJ
   // A warning when an uncertainty the file wrote is lost, a note when only built-in data's are (as beamPass.ts).
   // An input written in a source gets its own problem at its number; the rest one at the beam's name.
   const undefinedFor = (what: readonly Flown[], why: string): void => {
-    const severity = (w: readonly Flown[]) => (w.some((x) => Object.keys(x.sens).some((id) => inp.table.get(id)?.written === true)) ? 'warning' : 'info');
+    const severity = (w: readonly Flown[]) => (w.some((x) => reachesWritten(x.sens, inp.table)) ? 'warning' : 'info');
     for (const w of what.filter((x) => x.range)) {
       problems.push({
         code: 'uncertainty-undefined',

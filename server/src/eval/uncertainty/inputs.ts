@@ -110,3 +110,8 @@ export function setupInputs(model: SetupModel): SetupInputs {
     resonanceFrequency,
   };
 }
+
+/** Whether any input these sensitivities reach (a nonzero one) was written in the file, not built in: a lost one then earns a warning, else a note. */
+export function reachesWritten(sens: Readonly<Record<string, number>>, table: ReadonlyMap<string, UncertainInput>): boolean {
+  return Object.keys(sens).some((id) => sens[id] !== 0 && table.get(id)?.written === true);
+}

@@ -5,8 +5,8 @@
  */
 import type { Problem } from '../../format/ast';
 import type { MagnetModel } from '../../model/types';
-import type { SetupInputs } from './inputs';
-import type { SourceGap, SourceGapReason, SourceInput } from './sourceInputs';
+import { reachesWritten, type SetupInputs } from './inputs';
+import type { SourceGap, SourceGapReason } from './sourceInputs';
 
 const WHY: Record<SourceGapReason, string> = {
   'cannot-move': 'it cannot be moved by its uncertainty (a block with no magnetisation has no direction for it to grow in)',
@@ -29,14 +29,10 @@ export function sourceGapProblems(magnets: readonly MagnetModel[], inp: SetupInp
     const which = names.map((n) => `'${n}'`).join(', ');
     problems.push({
       code: 'uncertainty-undefined',
-      severity: written(gap.input, inp) ? 'warning' : 'info',
+      severity: reachesWritten(gap.input.sens, inp.table) ? 'warning' : 'info',
       message: `${gap.input.label}: ${WHY[gap.why]}; the uncertainties of magnet${names.length > 1 ? 's' : ''} ${which} (field and gradient at the beam line) and of the beams through ${names.length > 1 ? 'them' : 'it'} leave it out`,
       range,
     });
   }
   return problems;
-}
-
-function written(input: SourceInput, inp: SetupInputs): boolean {
-  return Object.keys(input.sens).some((id) => inp.table.get(id)?.written === true);
 }
