@@ -103,18 +103,21 @@ describe('a level is evaluated at the working fields that concern its species', 
     expect(text).toContain("  evaluated at 2 of the file's 3 working fields: field guide (every species), magnet sel (beam b); not at field bias (species = Rb87)");
   });
 
-  it('a beam that names one species and flies a level of another: the text, the hover and the magnet\'s JSON give the level\'s species, as the evaluation does', () => {
+  it('a beam that names one species and a level of another: an error, the beam is not flown, and the text, the hover and the magnet\'s JSON all give the species it names', () => {
     const src = SCOPED.replace('  species = Rb87\n', '').replace('  level    = kg\n', '  species  = Rb87\n  level    = K39.kg\n');
     const b = analyze(src);
+    expect(b.problems.filter((p) => p.code === 'beam-level-of-other-species').length).toBe(1);
+    expect(b.result!.beams[0]!.computed).toBe(false);
     const rb = b.result!.species.find((s) => s.name === 'Rb87')!;
-    expect(names(b.result!.levels.find((l) => l.level === 'ground')!.at_fields)).toEqual(['field bias', 'field guide']);
-    expect(rb.evaluated_at).toEqual([{ kind: 'field', name: 'bias' }, { kind: 'field', name: 'guide' }]);
+    expect(names(b.result!.levels.find((l) => l.level === 'ground')!.at_fields)).toEqual(['field bias', 'field guide', 'magnet sel']);
+    expect(rb.evaluated_at).toBeUndefined();
     expect(b.result!.beams[0]!.species).toBe('Rb87');
-    expect(b.result!.magnets[0]!.beams).toEqual([{ name: 'b', species: 'K39' }]);
-    // Read from the beam's own `species`, the old line said "not at magnet sel (no beam: every species)".
-    const line = "  evaluated at 2 of the file's 3 working fields: field bias (every species), field guide (every species); not at magnet sel (beam b of K39)";
+    expect(b.result!.magnets[0]!.beams).toEqual([{ name: 'b', species: 'Rb87' }]);
+    const k = b.result!.species.find((s) => s.name === 'K39')!;
+    const line = "  evaluated at 2 of the file's 3 working fields: field bias (every species), field guide (every species); not at magnet sel (beam b of Rb87)";
+    expect(k.evaluated_at).toEqual([{ kind: 'field', name: 'bias' }, { kind: 'field', name: 'guide' }]);
     expect(textReport('x.sublevel', b.result!)).toContain(line);
-    const { analysis, position } = atCursor(src.replace('species Rb87', 'species Rb|87'));
+    const { analysis, position } = atCursor(src.replace('species K39', 'species K3|9'));
     expect(plain(hoverText(hover(analysis, position)))).toContain(line.trim());
   });
 
