@@ -16,6 +16,7 @@ import { ATOMIC_MASS_UNIT } from '../server/src/physics/constants';
 import { solveLevel, type HyperfineLevelSpec } from '../server/src/physics/engine';
 import { calibrateField, fitCurve, profileModel } from '../server/src/physics/fit';
 import { quartiles } from './timing';
+import { twoWireBeam } from '../tests/fixtures/fieldMapBeams';
 
 const spec: HyperfineLevelSpec = { kind: 'hyperfine', twoJ: 1, twoI: 3, gJ: 2.00233113, gI: -0.0009951414, A: 3417.341305452145e6 };
 
@@ -89,30 +90,8 @@ export function runFitBench(): { name: string; lines: string[] } {
   };
 }
 
-const TWO_WIRES = `species Na23
-  level ground: 3s 2S1/2
-wire rails
-  current   = 2400 A
-  through   = 0, 2, 0 mm
-  direction = x
-  length    = 12 cm
-  return    = 0, -2, 0 mm
-magnet selector
-  sources = rails
-  length  = 8 cm
-  at      = 0, 0, 1.5 mm
-beam main
-  species  = Na23
-  level    = ground
-  source   = oven 600 K
-  slits    = 50 um, 50 um apart 80 cm
-  magnet   = selector
-  drift    = 40 cm
-  detector = 20 um
-`;
-
 function fieldMapFit(n: number): { fitMs: Timing; flightsMs: Timing; summary: string } {
-  const a = analyze(TWO_WIRES);
+  const a = analyze(twoWireBeam());
   const beam = a.model!.beams[0]!;
   const gJOf = gJLookup(a.result!.levels);
   const inputs = beamInputs(beam, gJOf)!;

@@ -10,43 +10,21 @@ import { gJLookup } from '../../server/src/eval/gJLookup';
 import { hyperfineSpec } from '../../server/src/eval/levelSpec';
 import { sourceFlights } from '../../server/src/eval/sourceFlights';
 import { CoefficientFlyer } from '../../server/src/physics/beam/trajectory';
-
-/** Na23 through two 12 cm conductors with opposite currents (invented numbers, examples/two-wire-magnet.sublevel). */
-const wires = (at: string) => `species Na23
-  level ground: 3s 2S1/2
-wire rails
-  current   = 2400 A
-  through   = 0, 2, 0 mm
-  direction = x
-  length    = 12 cm
-  return    = 0, -2, 0 mm
-magnet selector
-  sources = rails
-  length  = 8 cm
-  at      = 0, 0, ${at} mm
-beam main
-  species  = Na23
-  level    = ground
-  source   = oven 600 K
-  slits    = 50 um, 50 um apart 80 cm
-  magnet   = selector
-  drift    = 40 cm
-  detector = 20 um
-`;
+import { twoWireBeam } from '../fixtures/fieldMapBeams';
 
 afterEach(() => vi.restoreAllMocks());
 
 describe('flights reused', () => {
   it('the uncertainty pass flies only nudged pairs (±h), never the reference again: an even number of re-flights', () => {
     const fly = vi.spyOn(CoefficientFlyer.prototype, 'fly');
-    const r = analyze(wires('1.50(2)')).result!;
+    const r = analyze(twoWireBeam({ at: '1.50(2)' })).result!;
     expect(r.beams[0]!.peaks[0]!.position_m_unc).toBeGreaterThan(0);
     expect(fly.mock.calls.length).toBeGreaterThanOrEqual(2);
     expect(fly.mock.calls.length % 2).toBe(0);
   });
 
   it('a fit’s first pattern (scale 1 at the reference speed) uses the beam’s own coefficients: no flight', () => {
-    const a = analyze(wires('1.5'));
+    const a = analyze(twoWireBeam());
     const beam = a.model!.beams[0]!;
     const gJOf = gJLookup(a.result!.levels);
     const spec = hyperfineSpec(beam.level!, gJOf(beam.level!)!)!;
