@@ -12,7 +12,7 @@ import { makeAnchors, sweepBlockBySeries, sweepBlockPerField } from '../server/s
 import { buildLevelModel } from '../server/src/physics/engine/buildModel';
 import { householderInverseIterationInPlace } from '../server/src/physics/engine/householderInverseIteration';
 import { householderQlInPlace } from '../server/src/physics/engine/householderQl';
-import { simdHouseholderInverseIteration, simdKernelsAvailable } from '../server/src/physics/engine/simdEigen';
+import { simdEigenpairs, simdKernelsAvailable } from '../server/src/physics/engine/simdEigen';
 import { jacobiInPlace } from '../server/src/physics/engine/jacobiEigen';
 import { libraryEigenInPlace } from './mlMatrixEigen';
 
@@ -201,8 +201,8 @@ function simdCrossover(): void {
       work.set(m);
       householderInverseIterationInPlace(work, n, values, vectors);
     }, mats, n);
-    const simd = cpuPerCall((m) => simdHouseholderInverseIteration(m, n, values, vectors, false), mats, n);
-    const divide = cpuPerCall((m) => simdHouseholderInverseIteration(m, n, values, vectors, true), mats, n);
+    const simd = cpuPerCall((m) => simdEigenpairs(m, n, values, vectors, false), mats, n);
+    const divide = cpuPerCall((m) => simdEigenpairs(m, n, values, vectors, true), mats, n);
     console.log(`${String(n).padStart(5)} | ${qr.median.toFixed(1).padStart(8)} | ${js.median.toFixed(1).padStart(8)} | ${simd.median.toFixed(1).padStart(8)} | ${divide.median.toFixed(1).padStart(8)}`);
   }
 }

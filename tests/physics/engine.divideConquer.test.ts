@@ -11,7 +11,7 @@ import { describe, expect, it } from 'vitest';
 import { type DeflationCount, divideConquerTridiagonal, javascriptMergeKernels, type MergeKernels } from '../../server/src/physics/engine/divideConquerTridiagonal';
 import { householderInverseIterationInPlace } from '../../server/src/physics/engine/householderInverseIteration';
 import { javascriptSecularSums, secularRoots } from '../../server/src/physics/engine/secularRoots';
-import { simdHouseholderInverseIteration, simdKernelsAvailable, simdMergeKernels } from '../../server/src/physics/engine/simdEigen';
+import { simdEigenpairs, simdKernelsAvailable, simdMergeKernels } from '../../server/src/physics/engine/simdEigen';
 import { tridiagonalValues } from '../../server/src/physics/engine/tridiagonalValues';
 import { lcg, quality } from './eigenQuality';
 
@@ -265,7 +265,7 @@ describe.runIf(simdKernelsAvailable())('large-block route with divide and conque
           const a = withSpectrum(lambda, seed);
           const values = new Float64Array(n);
           const vectors = new Float64Array(n * n);
-          if (!simdHouseholderInverseIteration(a, n, values, vectors)) return false;
+          if (!simdEigenpairs(a, n, values, vectors)) return false;
           const jsValues = new Float64Array(n);
           const jsVectors = new Float64Array(n * n);
           if (!householderInverseIterationInPlace(a.slice(), n, jsValues, jsVectors)) return false;

@@ -4,7 +4,7 @@ import { symmetricEigen } from '../../server/src/physics/engine';
 import { householderInverseIterationInPlace } from '../../server/src/physics/engine/householderInverseIteration';
 import { householderQlInPlace } from '../../server/src/physics/engine/householderQl';
 import { jacobiInPlace } from '../../server/src/physics/engine/jacobiEigen';
-import { simdHouseholderInverseIteration } from '../../server/src/physics/engine/simdEigen';
+import { simdEigenpairs } from '../../server/src/physics/engine/simdEigen';
 import { sortEigenPairs } from '../../server/src/physics/engine/sortEigenPairs';
 
 type Solve = (a: Float64Array, n: number) => { values: Float64Array; vectors: Float64Array; ok: boolean };
@@ -37,7 +37,7 @@ const inverseIteration: Solve = (a, n) => {
 const simdKernels: Solve = (a, n) => {
   const vectors = new Float64Array(n * n);
   const values = new Float64Array(n);
-  const ok = simdHouseholderInverseIteration(a.slice(), n, values, vectors);
+  const ok = simdEigenpairs(a.slice(), n, values, vectors);
   return { values, vectors, ok };
 };
 

@@ -118,7 +118,7 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
  * input or no convergence; call only when simdKernelsAvailable(). `divide` chooses the
  * tridiagonal's solver (default: divide and conquer from DIVIDE_MIN_ORDER; for the bench).
  */
-export function simdHouseholderInverseIteration(a: Float64Array, n: number, values: Float64Array, vectors: Float64Array, divide = n >= DIVIDE_MIN_ORDER): boolean {
+export function simdEigenpairs(a: Float64Array, n: number, values: Float64Array, vectors: Float64Array, divide = n >= DIVIDE_MIN_ORDER): boolean {
   const k = loadKernels();
   if (k === null) throw new Error('WebAssembly eigen kernels unavailable');
   const l = layout(n, k.memory);

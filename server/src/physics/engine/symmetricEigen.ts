@@ -10,7 +10,7 @@
 import { householderInverseIterationInPlace } from './householderInverseIteration';
 import { householderQlInPlace } from './householderQl';
 import { jacobiInPlace } from './jacobiEigen';
-import { simdHouseholderInverseIteration, simdKernelsAvailable } from './simdEigen';
+import { simdEigenpairs, simdKernelsAvailable } from './simdEigen';
 import { sortEigenPairs } from './sortEigenPairs';
 
 export const JACOBI_MAX_ORDER = 8;
@@ -41,7 +41,7 @@ export function symmetricEigen(a: Float64Array, n: number, values: Float64Array,
     for (let i = 0; i < n; i++) values[i] = a[i * n + i];
   } else if (n >= SIMD_MIN_ORDER && simdKernelsAvailable()) {
     // `a` is left as it was, so the QR route can take it should inverse iteration not converge.
-    ok = simdHouseholderInverseIteration(a, n, values, vectors) || qrRoute(a, n, values, vectors);
+    ok = simdEigenpairs(a, n, values, vectors) || qrRoute(a, n, values, vectors);
   } else if (n >= INVERSE_ITERATION_MIN_ORDER) {
     // Should inverse iteration not converge (it reports so), the QR route solves a copy.
     const copy = inputCopy(a, n);
