@@ -6,6 +6,7 @@ import * as path from 'path';
 import * as vscode from 'vscode';
 import { LanguageClient, type LanguageClientOptions, type ServerOptions, TransportKind } from 'vscode-languageclient/node';
 import { DiagramPanel, PANEL_VIEW_TYPE } from './host/diagramPanel';
+import { createTraceChannel } from './host/traceChannel';
 
 let client: LanguageClient | undefined;
 
@@ -21,9 +22,20 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
   // Setup files changed on disk re-check the open files that `use` them.
   const watcher = vscode.workspace.createFileSystemWatcher('**/*.sublevel');
   context.subscriptions.push(watcher);
+  // `sublevel.trace.server` alone turns the protocol trace on (see host/traceChannel.ts).
+  const traceOutputChannel = createTraceChannel({
+    readSetting: () => vscode.workspace.getConfiguration('sublevel').get<string>('trace.server'),
+    onSettingChange: (listener) => vscode.workspace.onDidChangeConfiguration((event) => {
+      if (event.affectsConfiguration('sublevel.trace.server')) listener();
+    }),
+    openChannel: (name) => vscode.window.createOutputChannel(name),
+    levels: vscode.LogLevel,
+  });
+  context.subscriptions.push(traceOutputChannel);
   const clientOptions: LanguageClientOptions = {
     documentSelector: [{ language: 'sublevel' }],
     synchronize: { configurationSection: 'sublevel', fileEvents: watcher },
+    traceOutputChannel,
   };
   const c = new LanguageClient('sublevel', 'Sublevel', serverOptions, clientOptions);
   client = c;
