@@ -5,6 +5,9 @@
  * answers it, as the in-process CLI with every command does. Needs `node esbuild.mjs` first.
  */
 import { spawnSync } from 'child_process';
+import { copyFileSync, mkdtempSync, rmSync } from 'fs';
+import os from 'os';
+import path from 'path';
 import { describe, expect, it } from 'vitest';
 import { bundleFor } from '../../server/src/cli/bundleRoute';
 import { ALL_COMMANDS } from '../../server/src/cli/commands';
@@ -14,12 +17,18 @@ import { builtCli, cli } from './runCli';
 const SMALL = 'examples/handmade-species.sublevel';
 const FIT = 'examples/fit-rubidium.sublevel';
 
-/** The bundle as Node runs it, with the modules it loaded (which files of dist/ were read). */
-function loadedFiles(...argv: string[]): string[] {
-  const probe = `process.on('exit', () => process.stderr.write('\\nLOADED ' + JSON.stringify(Object.keys(require.cache).map((f) => require('path').basename(f)))));`;
+/**
+ * The launcher as a user runs it, watched: the dist/ files the main thread loaded, the scripts it
+ * started worker threads with (file names), and what it printed without the watch's own line.
+ */
+function watchedRun(...argv: string[]): { loaded: string[]; workers: string[]; code: number | null; out: string; err: string } {
+  const probe = `const wt = require('worker_threads'); const Started = wt.Worker; const workers = [];
+    wt.Worker = class extends Started { constructor(file, options) { workers.push(require('path').basename(String(file))); super(file, options); } };
+    process.on('exit', () => process.stderr.write('\\nWATCHED ' + JSON.stringify({ workers, loaded: Object.keys(require.cache).map((f) => require('path').basename(f)) })));`;
   const r = spawnSync(process.execPath, ['-e', `${probe} process.argv.splice(1, 0, 'dist/cli.js'); require('./dist/cli.js')`, '--', ...argv], { encoding: 'utf8' });
-  const line = r.stderr.split('\n').find((l) => l.startsWith('LOADED '));
-  return JSON.parse(line!.slice('LOADED '.length)) as string[];
+  const [err, watched] = r.stderr.split('\nWATCHED ');
+  const { workers, loaded } = JSON.parse(watched!) as { workers: string[]; loaded: string[] };
+  return { loaded: loaded.filter((f) => f.startsWith('cli')), workers, code: r.status, out: r.stdout.trimEnd(), err: err!.trimEnd() };
 }
 
 describe('which bundle answers', () => {
@@ -34,8 +43,26 @@ describe('which bundle answers', () => {
   });
 
   it('a check loads the launcher and the core bundle only; a fit loads the full bundle and ml-matrix', () => {
-    expect(loadedFiles('check', SMALL).filter((f) => f.startsWith('cli'))).toEqual(['cli.js', 'cli-core.js']);
-    expect(loadedFiles('fit', FIT).filter((f) => f.startsWith('cli'))).toEqual(['cli.js', 'cli-full.js', 'cli-ml-matrix.js']);
+    expect(watchedRun('check', SMALL).loaded).toEqual(['cli.js', 'cli-core.js']);
+    expect(watchedRun('fit', FIT).loaded).toEqual(['cli.js', 'cli-full.js', 'cli-ml-matrix.js']);
+  });
+});
+
+describe('eval --jobs through the launcher', () => {
+  it('routes `eval --jobs 2 <folder>` to the core bundle, whose workers are the core bundle too, with the one-process output', () => {
+    // A folder of three self-contained examples, one with errors: small enough to run twice.
+    const folder = mkdtempSync(path.join(os.tmpdir(), 'sublevel-jobs-'));
+    for (const name of ['coils-and-wires.sublevel', 'handmade-species.sublevel', 'mistakes.sublevel']) copyFileSync(path.join('examples', name), path.join(folder, name));
+    const argv = ['eval', folder, '--jobs', '2'];
+    const run = watchedRun(...argv);
+    const oneProcess = cli(...argv);
+    rmSync(folder, { recursive: true });
+    expect(run.loaded).toEqual(['cli.js', 'cli-core.js']);
+    expect(run.workers).toEqual(['cli-core.js', 'cli-core.js']);
+    // In-process there is no bundle to start as a worker, so `oneProcess` is the one-thread run.
+    expect(oneProcess.err).toBe('3 files evaluated: 1 with errors or not read');
+    expect(oneProcess.out.match(/^Sublevel evaluation of .*$/gm)).toHaveLength(3);
+    expect({ code: run.code, out: run.out, err: run.err }).toEqual({ code: oneProcess.code, out: oneProcess.out.trimEnd(), err: oneProcess.err });
   });
 });
 
