@@ -1,7 +1,9 @@
 /**
  * Nothing silent in the sources' uncertainties (eval/uncertainty/sourceInputs.ts, sourceGaps.ts):
  * a current of 0 is set rather than scaled (so its uncertainty reaches the magnet's field, checked
- * against the on-axis field of a loop, B = μ0 N I R²/(2 (R² + z²)^(3/2)), textbook Biot–Savart);
+ * against the on-axis field of a loop, B = μ0 N I R²/(2 (R² + z²)^(3/2)), textbook Biot–Savart),
+ * and so is a block's magnetisation of 0, along the direction written (checked against a block's
+ * on-axis field);
  * an input that still cannot be moved, or whose nudge puts a conductor on the beam line, gets
  * `uncertainty-undefined` at the number the file wrote, in `check`, `eval` text and JSON.
  */
@@ -62,24 +64,28 @@ wire rails
     }
   });
 
-  it('a block magnetised 0.0(1) T: a warning at that number, in check, eval text and eval JSON', () => {
-    const text = setup('slab block\n  size          = 2, 2, 1 cm\n  magnetisation = 0.0(1) T along z\n  centre        = 0, 0, -3 cm', 'block');
-    const p = analyze(text).problems.filter((x) => x.code === 'uncertainty-undefined');
-    expect(p.map((x) => x.severity)).toEqual(['warning']);
-    expect(lineOf(text, p[0]!.range.start.line)).toBe('  magnetisation = 0.0(1) T along z');
-    expect(p[0]!.message).toBe(
-      "magnetisation of slab block: it cannot be moved by its uncertainty (a block with no magnetisation has no direction for it to grow in); the uncertainties of magnet 'm' (field and gradient at the beam line) and of the beams through it leave it out",
-    );
-    const dir = mkdtempSync(path.join(tmpdir(), 'sublevel-gap-'));
-    const file = path.join(dir, 'gap.sublevel');
-    writeFileSync(file, text);
-    expect(cli('check', file).out).toContain('uncertainty-undefined');
-    expect(cli('eval', file).out).toContain('magnetisation of slab block: it cannot be moved');
-    const json = JSON.parse(cli('eval', file, '--format', 'json').out);
-    expect(JSON.stringify(json)).toContain('magnetisation of slab block: it cannot be moved');
+  it('a block magnetised 0.0(1) T along z: set along z instead of scaled, so the magnet field carries 0.1 T × the block’s on-axis field per tesla (to 1e-9)', () => {
+    // A 2 × 2 × 1 cm block 2.5 cm below the beam line's centre, on its axis. On the axis of a block
+    // with half-sides a, b and thickness L magnetised along it, at distance d from the near face:
+    // B = (μ0M/π) [atan(ab / (d √(a² + b² + d²))) − atan(ab / ((d + L) √(a² + b² + (d + L)²)))]
+    // (the surface-charge integral of two uniformly charged rectangles, textbook magnetostatics; from memory).
+    const a = 0.01, b = 0.01, L = 0.01, d = 0.025;
+    const face = (x: number) => Math.atan((a * b) / (x * Math.sqrt(a * a + b * b + x * x)));
+    const perTesla = (face(d) - face(d + L)) / Math.PI;
+    for (const along of ['z', '-z', '0, 0, 2']) {
+      const text = setup(`slab block\n  size          = 2, 2, 1 cm\n  magnetisation = 0.0(1) T along ${along}\n  centre        = 0, 0, -3 cm`, 'block');
+      const an = analyze(text);
+      expect(an.problems.filter((p) => p.code === 'uncertainty-undefined')).toEqual([]);
+      // the bias field is along +z at the origin, so |B| moves with the block's B_z, whichever way it is set
+      expect(Math.abs(an.result!.magnets[0]!.field_T_unc! / (0.1 * perTesla) - 1)).toBeLessThan(1e-9);
+    }
+    // The direction is the one written, not a default: set across the axis, the block's field at the centre is across |B| too, so it does not reach it at first order.
+    const across = analyze(setup('slab block\n  size          = 2, 2, 1 cm\n  magnetisation = 0.0(1) T along x\n  centre        = 0, 0, -3 cm', 'block'));
+    expect(across.problems.filter((p) => p.code === 'uncertainty-undefined')).toEqual([]);
+    expect(across.result!.magnets[0]!.field_T_unc ?? 0).toBeLessThan(1e-6 * 0.1 * perTesla);
   });
 
-  it('a wire whose nudge puts it on the beam line’s centre: a warning at its `through`', () => {
+  it('a wire whose nudge puts it on the beam line’s centre: a warning at its `through`, in check, eval text and eval JSON', () => {
     // The wire crosses 10 µm under the centre; its place is uncertain by 10 µm, the step taken (within 1e-4…1e-2 of 8 cm).
     const text = setup('wire w\n  current   = 5 A\n  through   = 0, 0, -0.010(10) mm\n  direction = y', 'w');
     const a = analyze(text);
@@ -88,5 +94,11 @@ wire rails
     expect(lineOf(text, p[0]!.range.start.line)).toBe('  through   = 0, 0, -0.010(10) mm');
     expect(p[0]!.message).toMatch(/^line of wire w z: moving it by its uncertainty puts a conductor on the beam line's centre/);
     expect(JSON.stringify(a.result)).not.toMatch(/NaN|Infinity/);
+    // The same warning in check, eval text and eval JSON.
+    const file = path.join(mkdtempSync(path.join(tmpdir(), 'sublevel-gap-')), 'gap.sublevel');
+    writeFileSync(file, text);
+    expect(cli('check', file).out).toContain('uncertainty-undefined');
+    expect(cli('eval', file).out).toContain('line of wire w z: moving it by its uncertainty');
+    expect(JSON.stringify(JSON.parse(cli('eval', file, '--format', 'json').out))).toContain('line of wire w z: moving it by its uncertainty');
   });
 });

@@ -16,7 +16,7 @@ export const HIGH_MAGNETISATION_T = 2.5;
 
 const FORM = 'magnetisation = <μ0·M in T, or M in A/m> along <direction>, e.g. 1.2 T along y';
 
-function readMagnetisation(s: SettingNode, problems: ProblemList): Valued<Vec3> | undefined {
+function readMagnetisation(s: SettingNode, problems: ProblemList): { magnetisation: Valued<Vec3>; along: Vec3 } | undefined {
   const first = s.groups[0] ?? [];
   const [amount, along] = first;
   if (!amount || amount.kind !== 'quantity' || along?.text !== 'along' || first.length < 3) {
@@ -33,13 +33,14 @@ function readMagnetisation(s: SettingNode, problems: ProblemList): Valued<Vec3> 
   if (!dir) return undefined;
   // `1.20(2) T along z`: the uncertainty is that of the magnitude μ0·|M|, T.
   const u = size.uncertainty !== undefined ? (unitIsField ? size.uncertainty : VACUUM_PERMEABILITY * size.uncertainty) : undefined;
-  return {
+  const magnetisation: Valued<Vec3> = {
     value: [tesla * dir.value[0], tesla * dir.value[1], tesla * dir.value[2]],
     source: 'this file',
     range: s.valueText.range,
     ...(size.unit ? { unit: size.unit } : {}),
     ...(u !== undefined ? { uncertainty: u } : {}),
   };
+  return { magnetisation, along: dir.value };
 }
 
 export function buildSlab(node: BlockNode & { kind: 'slab' }, name: NonNullable<BlockNode['name']>, problems: ProblemList): FieldSourceModel {
@@ -64,13 +65,14 @@ export function buildSlab(node: BlockNode & { kind: 'slab' }, name: NonNullable<
         break;
       }
       case 'magnetisation': {
-        const v = readMagnetisation(s, problems);
-        if (!v) {
+        const read = readMagnetisation(s, problems);
+        if (!read) {
           bad = true;
           break;
         }
-        model.magnetisationT = v;
-        const j = Math.hypot(...v.value);
+        model.magnetisationT = read.magnetisation;
+        model.magnetisationAlong = read.along;
+        const j = Math.hypot(...read.magnetisation.value);
         if (j === 0) problems.add('source-magnetisation-zero', `${what} is not magnetised, so it adds no field`, s.valueText.range);
         else if (j > HIGH_MAGNETISATION_T) {
           problems.add('source-magnetisation-high', `μ0·M = ${Number(j.toPrecision(4))} T is beyond any permanent magnet (the strongest reach about 1.5 T); check the number and unit`, s.valueText.range);

@@ -145,6 +145,8 @@ export interface FieldSourceModel {
   /** slab: edge lengths along x, y, z, m, and μ0·M, T. */
   sizeM?: Valued<Vec3>;
   magnetisationT?: Valued<Vec3>;
+  /** slab: the unit direction written after `along` (μ0·M of 0 keeps none, and its uncertainty is set along this). */
+  magnetisationAlong?: Vec3;
 }
 
 export interface MagnetModel {

@@ -28,7 +28,7 @@ export interface SourceInput {
   u: number;
   /** The size the step is measured against (the value, or the magnet's length for a place). */
   scale: number;
-  /** The magnet with this input moved by t; undefined when it cannot be moved (a block whose magnetisation is 0 has no direction to grow in). */
+  /** The magnet with this input moved by t; undefined when it cannot be moved (a strength of 0 with no written direction to set it along). */
   at(t: number): MovedMagnet | undefined;
 }
 
@@ -100,9 +100,12 @@ export function magnetSourceInputs(magnet: MagnetModel, add: AddInput): SourceIn
     const m = s.magnetisationT;
     if (m?.uncertainty !== undefined) {
       const size = Math.hypot(...m.value);
-      push(`${id}.magnetisation`, `magnetisation of slab ${s.name}`, { value: size, source: m.source, uncertainty: m.uncertainty, ...(m.range ? { range: m.range } : {}) }, size, (t) =>
-        size === 0 ? undefined : withSource(s, (parts) => parts.map((p) => scaleStrength(p, (size + t) / size))),
-      );
+      const along = s.magnetisationAlong;
+      // Like a current of 0, a magnetisation of 0 cannot be scaled: it is set along its written direction instead (the field is linear in it).
+      push(`${id}.magnetisation`, `magnetisation of slab ${s.name}`, { value: size, source: m.source, uncertainty: m.uncertainty, ...(m.range ? { range: m.range } : {}) }, size !== 0 ? size : m.uncertainty, (t) => {
+        if (size !== 0) return withSource(s, (parts) => parts.map((p) => scaleStrength(p, (size + t) / size)));
+        return along ? withSource(s, (parts) => parts.map((p) => (p.kind === 'slab' ? { ...p, magnetisationT: [t * along[0], t * along[1], t * along[2]] } : p))) : undefined;
+      });
     }
   }
   components(magnet.atM, `magnet:${magnet.name}.at`, `beam line of magnet ${magnet.name}`, (c, t) => ({ parts: sources.flatMap((o) => o.parts), centre: withComponent(centre, c, centre[c] + t) }));
