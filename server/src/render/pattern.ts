@@ -76,6 +76,11 @@ interface PeakEntry {
   members: string[];
 }
 
+/** An entry in one line: "1 at −2.1 mm (m_F=−1, m_F=0)". */
+function entryText(e: PeakEntry): string {
+  return e.members.length ? `${e.head} (${e.members.join(', ')})` : e.head;
+}
+
 /**
  * "Peaks: 1 at −2.1 mm (m_F=−1) · 2 at …" wrapped into rows that fit `maxWidth`. A peak of many
  * states breaks between its state names, so no row runs past the figure's edge.
@@ -130,8 +135,8 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
   if (peaks.length > 0) legend.push({ label: 'counted peak', colour: pal.text, marker: 'down' });
   const legendW = Math.min(200, Math.max(...legend.map((e) => estimateTextWidth(e.label))) + LEGEND_SAMPLE_WIDTH + 20);
 
-  const tableEntries = peaks.map((p, i) => `${i + 1} at ${positionLabel(p.positionM, unit)}${p.members.length ? ` (${p.members.join(', ')})` : ''}`);
-  const tableRows = peaks.length > 0 ? peakTableRows(peaks.map((p, i) => ({ head: `${i + 1} at ${positionLabel(p.positionM, unit)}`, members: p.members })), WIDTH - 32) : [];
+  const entries: PeakEntry[] = peaks.map((p, i) => ({ head: `${i + 1} at ${positionLabel(p.positionM, unit)}`, members: p.members }));
+  const tableRows = entries.length > 0 ? peakTableRows(entries, WIDTH - 32) : [];
   const height = BASE_HEIGHT + tableRows.length * TABLE_ROW;
   const box: PlotBox = { left: 64, right: WIDTH - 16 - legendW, top: 78, bottom: BASE_HEIGHT - 56 };
   const x = scaleLinear().domain([x0, x1]).range([box.left, box.right]);
@@ -286,7 +291,7 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
   const desc = [
     `Detector profile across ${positionLabel(x0, unit)} to ${positionLabel(x1, unit)}`,
     `${d.parts.length} sublevel contributions`,
-    `${peaks.length} ${peaks.length === 1 ? 'peak' : 'peaks'}${tableEntries.length ? ` (${tableEntries.join('; ')})` : ''}`,
+    `${peaks.length} ${peaks.length === 1 ? 'peak' : 'peaks'}${entries.length ? ` (${entries.map(entryText).join('; ')})` : ''}`,
     `height axis ${logAxis ? 'logarithmic' : 'linear'} in ${PATTERN_Y_UNIT.symbol}`,
     `${d.verdict.resolved ? 'resolved' : 'not resolved'}: ${d.verdict.text}`,
   ];
