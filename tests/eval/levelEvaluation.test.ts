@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
+import { halfText, signedHalfText } from '../../server/src/eval/halves';
+import { hyperfineLabel } from '../../server/src/eval/levelEvaluation';
 import type { LevelResult } from '../../server/src/eval/resultTypes';
 
 function level(text: string, name: string): LevelResult {
@@ -56,5 +58,27 @@ describe('level evaluation against published values', () => {
     const top = l.at_fields[0]!.linear.at(-1)!;
     expect(top.label).toBe('m_J=+1/2');
     expect(top.energy_Hz / (0.5 * 2.00231930436092 * 13996244917.1)).toBeCloseTo(1, 10);
+  });
+});
+
+describe('linear-state labels of a level with a nucleus (hyperfineLabel, cached by 2F and 2m)', () => {
+  it('every (F, m_F) up to F = 8 gets its own label, "F=3/2, m_F=-1/2", the same from the cache', () => {
+    const seen = new Set<string>();
+    for (let twoF = 0; twoF <= 16; twoF++) {
+      for (let twoM = -twoF; twoM <= twoF; twoM += 2) {
+        const want = `F=${halfText(twoF)}, m_F=${signedHalfText(twoM)}`;
+        expect(hyperfineLabel(twoF, twoM)).toBe(want);
+        expect(hyperfineLabel(twoF, twoM)).toBe(want);
+        seen.add(want);
+      }
+    }
+    expect(seen.size).toBe(((16 + 1) * (16 + 2)) / 2);
+    expect(hyperfineLabel(3, -1)).toBe('F=3/2, m_F=-1/2');
+  });
+
+  it('the labels of a level read as before: 87Rb ground at a weak field', () => {
+    const l = level('species Rb87\n  level g: 5s 2S1/2\n  field b: 1 G\n', 'g');
+    const labels = l.at_fields?.[0]?.linear.map((s) => s.label) ?? [];
+    expect([...labels].sort()).toEqual(['F=1, m_F=+1', 'F=1, m_F=-1', 'F=1, m_F=0', 'F=2, m_F=+1', 'F=2, m_F=+2', 'F=2, m_F=-1', 'F=2, m_F=-2', 'F=2, m_F=0'].sort());
   });
 });

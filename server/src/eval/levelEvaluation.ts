@@ -158,7 +158,7 @@ function linearAt(f: WorkingField, gJ: number, gI: number, twoJ: number, twoI: n
       const twoF = Math.round(2 * F.F);
       for (const s of linearSublevels(F.g_F, twoF, f.tesla)) {
         linear.push({
-          label: hyperfineLabel(F.F_text, s.twoM),
+          label: hyperfineLabel(twoF, s.twoM),
           F: F.F,
           m: s.twoM / 2,
           m_text: signedHalfText(s.twoM),
@@ -171,14 +171,15 @@ function linearAt(f: WorkingField, gJ: number, gI: number, twoJ: number, twoI: n
   return { source: f.source, field_T: f.tesla, linear };
 }
 
-/** Linear-state labels by F and 2m: the same few strings recur in every level with a nucleus, so each is made once. */
-const hyperfineLabels = new Map<string, string>();
-function hyperfineLabel(fText: string, twoM: number): string {
-  const key = `${fText}|${twoM}`;
+/** Linear-state labels by 2F and 2m: the same few strings recur in every level with a nucleus, so each is made once. */
+const hyperfineLabels = new Map<number, string>();
+export function hyperfineLabel(twoF: number, twoM: number): string {
+  // (2F)² + (2m + 2F)/2 numbers the 2F + 1 states of each F after those of every smaller F, so no two (F, m) share a key.
+  const key = Math.abs(twoM) <= twoF ? twoF * twoF + (twoM + twoF) / 2 : -1;
   let label = hyperfineLabels.get(key);
   if (label === undefined) {
-    label = `F=${fText}, m_F=${signedHalfText(twoM)}`;
-    if (hyperfineLabels.size < 4096) hyperfineLabels.set(key, label);
+    label = `F=${halfText(twoF)}, m_F=${signedHalfText(twoM)}`;
+    if (key >= 0 && hyperfineLabels.size < 4096) hyperfineLabels.set(key, label);
   }
   return label;
 }
