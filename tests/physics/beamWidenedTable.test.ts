@@ -26,6 +26,10 @@ describe('flyWideningTable', () => {
     const out = flyWideningTable(1, () => ({ curves: someCurves, issues: [] }), () => BEYOND_TABLE);
     expect(out).toEqual({ kind: 'beyond', maxT: 64 });
   });
+  it('takes any flown value for flown, a string "beyond" too: only the sentinel means beyond the table', () => {
+    expect(flyWideningTable(1, () => ({ curves: someCurves, issues: [] }), () => 'beyond')).toMatchObject({ kind: 'flown', value: 'beyond', maxT: 1 });
+    expect(typeof BEYOND_TABLE).toBe('symbol');
+  });
   it('passes on why the table could not be built', () => {
     const issues = [{ severity: 'error' as const, code: 'trajectory-level-unusable', message: 'no level' }];
     expect(flyWideningTable(1, () => ({ issues }), () => 'never')).toEqual({ kind: 'no-table', issues });

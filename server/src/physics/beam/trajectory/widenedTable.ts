@@ -8,8 +8,8 @@
 import type { BeamIssue } from '../types';
 import type { SublevelCurves } from './sublevelCurves';
 
-/** What a set of flights returns when an atom met a field beyond the table. */
-export const BEYOND_TABLE = 'beyond';
+/** What a set of flights returns when an atom met a field beyond the table: a symbol, so no flown value (a string, a number) can be taken for it. */
+export const BEYOND_TABLE: unique symbol = Symbol('beyond the table');
 
 /** Tables tried: the first and two widenings (our choice: a fourfold widening twice covers 16 times the first range). */
 const ATTEMPTS = 3;
