@@ -304,6 +304,9 @@ export interface SeriesTarget {
  * faster than one point at a time). Energies and moments of each four points go to the order
  * their farthest point needs (orderFor; on the Cs 6P3/2 sweeps 10.5 of 16 on average), found
  * once for all the block's states; curvatures to SERIES_ORDER.
+ * The fields need not be sorted (the farthest of each four is looked for, not assumed to be an
+ * end one); each must lie within the series' reach of the anchor, which the caller sees to
+ * (sweepBlockBySeries, whose anchor placement does assume a monotonic sweep).
  */
 export function evaluateSeries(sw: SeriesWorkspace, n: number, fieldsT: Float64Array, anchorT: number, from: number, to: number, target: SeriesTarget): void {
   const { store, stride, points } = target;
@@ -317,7 +320,8 @@ export function evaluateSeries(sw: SeriesWorkspace, n: number, fieldsT: Float64A
     const t1 = (fieldsT[r + 1] - anchorT) * inv;
     const t2 = (fieldsT[r + 2] - anchorT) * inv;
     const t3 = (fieldsT[r + 3] - anchorT) * inv;
-    const order = orderFor(sw, Math.max(Math.abs(t0), Math.abs(t3)));
+    // The farthest of the four sets the order: on a monotonic sweep an end point, but the fields may come in any order.
+    const order = orderFor(sw, Math.max(Math.abs(t0), Math.abs(t1), Math.abs(t2), Math.abs(t3)));
     for (let k = 0, at = target.base + r; k < n; k++, at += stride) {
       const base = k * (SERIES_ORDER + 1);
       const dBase = k * SERIES_ORDER - 1; // d[dBase + j] = j c_j
