@@ -57,7 +57,7 @@ describe('hydrogen and deuterium', () => {
     expect(Math.abs(num(level('D', 'ground').gJ, 'D g_J') * (1 + 7.22e-9) - gH)).toBeLessThanOrEqual(0.5e-7);
   });
 
-  it('H n = 2 energies agree with the experimental column of a 2021 table (Kramida et al. 2020) to its printed 0.001 cm⁻¹', () => {
+  it('H n = 2 energies agree with the experimental column of a 2021 table (quoting NIST ASD) to its printed 0.001 cm⁻¹', () => {
     // A&A 2021, aa40681-21, Table 1 "Experimental": 2s 82 258.954, 2p3/2 82 259.285 cm⁻¹. Its 2p1/2 entry,
     // 82 258.917, is not used: it would put the Lamb shift at 1.11 GHz instead of 1.058 GHz (species.test.ts).
     expect(Math.abs(num(level('H', 'metastable').energyHz, '2s') / CM_TO_HZ - 82258.954)).toBeLessThanOrEqual(0.0005);
@@ -65,7 +65,7 @@ describe('hydrogen and deuterium', () => {
   });
 
   it('H 2p lifetime is 1/A with the textbook Lyman-α rate 6.27×10⁸ s⁻¹ (to its three printed digits)', () => {
-    // Fitzpatrick, Introductory Quantum Mechanics §12.11 (LibreTexts): w(2P→1S) = 6.27×10⁸ s⁻¹.
+    // Textbook worked example (LibreTexts, Introductory Quantum Mechanics §12.11): w(2P→1S) = 6.27×10⁸ s⁻¹.
     for (const key of ['P1/2', 'P3/2']) {
       expect(Math.abs(num(level('H', key).lifetimeS, key) * 6.27e8 - 1)).toBeLessThanOrEqual(0.005 / 6.27);
     }
@@ -92,7 +92,7 @@ describe('helium', () => {
   });
 
   it('³He 2³S1: (J + 1/2)A = −6 739 701 177(16) Hz, inverted', () => {
-    // Rosner & Pipkin (1970), quoted in arXiv:2304.12274, abstract; theory there: −6 739 701 181(41) Hz.
+    // Phys. Rev. A 1, 571 (1970), quoted in arXiv:2304.12274, abstract; theory there: −6 739 701 181(41) Hz.
     const a = level('He3', 'metastable').A;
     expect(Math.abs(num(a, 'A') * 1.5 - -6739701177)).toBeLessThanOrEqual(2 * 16);
     expect(Math.abs(num(a, 'A') * 1.5 - -6739701181)).toBeLessThanOrEqual(2 * Math.hypot(16, 41));
@@ -106,7 +106,7 @@ describe('helium', () => {
 
 describe('lithium 2p hyperfine constants', () => {
   it('⁷Li 2p1/2: A = 91.873(5)/2 MHz agrees with the 1975 double-resonance a(1/2) = 45.914(25) MHz', () => {
-    // Interval: Huang, NTHU thesis (2018), abstract. a(1/2): Z. Phys. A abstract (optical double resonance).
+    // Interval: NTHU thesis on lithium laser spectroscopy (2018), abstract. a(1/2): Z. Phys. A abstract (optical double resonance).
     const a = level('Li7', 'P1/2').A;
     expect(num(a, 'A') * 2).toBeCloseTo(91.873e6, 0);
     within2Sigma(a, 45.914e6, 0.025e6, '7Li 2p1/2 A');
@@ -119,7 +119,7 @@ describe('lithium 2p hyperfine constants', () => {
   });
 
   it('⁶Li 2p1/2 A (compilation) agrees with the 2018 interval 26.108(9) MHz = (3/2)A', () => {
-    // Huang, NTHU thesis (2018), abstract.
+    // NTHU thesis on lithium laser spectroscopy (2018), abstract.
     within2Sigma(level('Li6', 'P1/2').A, 26.108e6 / 1.5, 0.009e6 / 1.5, '6Li 2p1/2 A');
   });
 });
@@ -194,7 +194,7 @@ describe('chromium and strontium hyperfine constants and clock lines', () => {
   });
 
   it('the ⁸⁸Sr 689 nm line: 434 829 121 311(10) kHz, and its lifetime matches a 2π × 7.5 kHz width', () => {
-    // Ferrari et al., Phys. Rev. Lett. 91, 243002 (2003); width "2π × 7.5 kHz" (arXiv:2403.18796, introduction).
+    // Phys. Rev. Lett. 91, 243002 (2003), abstract; width "2π × 7.5 kHz" (arXiv:2403.18796, introduction).
     within2Sigma(level('Sr88', '3P1').energyHz, 434829121311e3, 10e3, 'Sr88 3P1');
     const tau = num(level('Sr88', '3P1').lifetimeS, 'τ');
     // Two printed digits: 7.45–7.55 kHz.
