@@ -3,18 +3,24 @@
  * clock (3P0) and intercombination (3P1) levels; 87Sr also its metastable 3P2.
  */
 import { derivedNuclearG, energy, GROUND_ENERGY, mhz, sourced } from './build-helpers';
-import { IAEA_MOMENTS_MEMORY, NIST_ASD_MEMORY, NIST_MASSES } from './sources';
-import { FROM_MEMORY } from './sources';
+import {
+  CHEMLIN_SR87,
+  CHEMLIN_YB171_SPIN,
+  FROM_MEMORY,
+  IAEA_MOMENTS_MEMORY,
+  NIST_ASD_MEMORY,
+  NIST_MASSES,
+  READ_IN_MEASUREMENT,
+} from './sources';
 import type { BuiltinSpecies } from './types';
 
-// 88Sr 1S0–3P1 frequency; the 87Sr level uses it too (the ~−60 MHz isotope shift is not applied).
-const SR88_3P1 = FROM_MEMORY;
-const SR87_CLOCK = FROM_MEMORY;
+// 88Sr 1S0–3P1 frequency (10 kHz); the 87Sr level uses it too (the ~−60 MHz isotope shift is not applied).
+const SR_3P1_KHZ = 434829121311;
 const CIPM_2009 = 'CIPM Recommendation 2 (2009), recommended standard frequencies';
-const SR87_3P2 = FROM_MEMORY;
 const SR87_3P1_MEMORY = FROM_MEMORY;
 const TAU_SR_3P1 = sourced(21.28e-6, FROM_MEMORY);
-const SR87_MU = sourced(-1.093603, IAEA_MOMENTS_MEMORY);
+// Read value; the recalled −1.093603 it replaces was 4σ away (docs/species-data.md).
+const SR87_MU = sourced(-1.09316, CHEMLIN_SR87, 0.00011);
 const YB171_MU = sourced(0.49367, IAEA_MOMENTS_MEMORY);
 const YB_3P1_CM = 17992.007;
 
@@ -25,25 +31,25 @@ export const STRONTIUM_87: BuiltinSpecies = {
   Z: 38,
   massNumber: 87,
   massU: sourced(86.9088775, NIST_MASSES),
-  twoI: sourced(9, IAEA_MOMENTS_MEMORY),
+  twoI: sourced(9, CHEMLIN_SR87),
   muI: SR87_MU,
   gI: derivedNuclearG(SR87_MU, 9),
   levels: [
     { key: 'ground', designation: '5s2 1S0', energyHz: GROUND_ENERGY },
-    { key: '3P0', designation: '5s 5p 3P°0', ...energy(429228004229873.082, 'Hz', SR87_CLOCK) },
+    { key: '3P0', designation: '5s 5p 3P°0', ...energy(429228004229873.082, 'Hz', FROM_MEMORY, 0.076, READ_IN_MEASUREMENT) },
     {
       key: '3P1',
       designation: '5s 5p 3P°1',
       A: mhz(-260.084, SR87_3P1_MEMORY),
       B: mhz(-35.658, SR87_3P1_MEMORY),
-      ...energy(434829121311, 'kHz', SR88_3P1),
+      ...energy(SR_3P1_KHZ, 'kHz', FROM_MEMORY, 10, READ_IN_MEASUREMENT),
       lifetimeS: TAU_SR_3P1,
     },
     {
       key: '3P2',
       designation: '5s 5p 3P°2',
-      A: mhz(212.765, SR87_3P2),
-      B: mhz(67.215, SR87_3P2),
+      A: mhz(212.765, FROM_MEMORY, 0.001, READ_IN_MEASUREMENT),
+      B: mhz(67.215, FROM_MEMORY, 0.015, READ_IN_MEASUREMENT),
       ...energy(14898.545, 'cm-1', NIST_ASD_MEMORY),
     },
   ],
@@ -61,7 +67,7 @@ export const STRONTIUM_88: BuiltinSpecies = {
   levels: [
     { key: 'ground', designation: '5s2 1S0', energyHz: GROUND_ENERGY },
     { key: '3P0', designation: '5s 5p 3P°0', ...energy(429228066418012, 'Hz', `${CIPM_2009}: 88Sr 1S0–3P0`) },
-    { key: '3P1', designation: '5s 5p 3P°1', ...energy(434829121311, 'kHz', SR88_3P1), lifetimeS: TAU_SR_3P1 },
+    { key: '3P1', designation: '5s 5p 3P°1', ...energy(SR_3P1_KHZ, 'kHz', FROM_MEMORY, 10, READ_IN_MEASUREMENT), lifetimeS: TAU_SR_3P1 },
   ],
 };
 
@@ -72,7 +78,7 @@ export const YTTERBIUM_171: BuiltinSpecies = {
   Z: 70,
   massNumber: 171,
   massU: sourced(170.9363302, 'AME2016/AME2020 relative atomic mass, as in current isotopic-composition tables'),
-  twoI: sourced(1, IAEA_MOMENTS_MEMORY),
+  twoI: sourced(1, CHEMLIN_YB171_SPIN),
   muI: YB171_MU,
   gI: derivedNuclearG(YB171_MU, 1),
   levels: [

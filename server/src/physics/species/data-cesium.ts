@@ -1,8 +1,7 @@
 /** Caesium-133: 6s ground level (defines the SI second) and the 6p D-line levels. */
 import { CAESIUM_HYPERFINE_HZ } from '../constants';
 import { energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
-import { NIST_MASSES, SI_SECOND, STECK_CS } from './sources';
-import { FROM_MEMORY } from './sources';
+import { FROM_MEMORY, NIST_MASSES, READ_IN_MEASUREMENT, SI_SECOND, STECK_CS } from './sources';
 import type { BuiltinSpecies } from './types';
 
 export const CAESIUM_133: BuiltinSpecies = {
@@ -13,10 +12,7 @@ export const CAESIUM_133: BuiltinSpecies = {
   massNumber: 133,
   massU: sourced(132.905451961, NIST_MASSES),
   twoI: sourced(7, STECK_CS),
-  muI: sourced(
-    2.5778,
-    FROM_MEMORY,
-  ),
+  muI: sourced(2.5778, FROM_MEMORY),
   // Uncertainties marked FROM_MEMORY (fourth argument) were recalled from the compilation, not read.
   gI: sourced(-0.00039885395, STECK_CS, 5.2e-13, FROM_MEMORY),
   // Uncertainties of the 6p constants as the cited compilation's hyperfine-constant table gives
@@ -36,7 +32,9 @@ export const CAESIUM_133: BuiltinSpecies = {
       designation: '6p 2P°1/2',
       A: mhz(291.9201, STECK_CS, 0.0075),
       gJ: sourced(0.6659, STECK_CS, 0.00009, FROM_MEMORY),
-      ...energy(335.116048807, 'THz', STECK_CS, 0.000000041, FROM_MEMORY),
+      // Value and uncertainty are those of a 1999 comb measurement (read); a 2006 comb measurement is
+      // 1.4σ lower (tests/physics/speciesReadValues.test.ts, docs/species-data.md).
+      ...energy(335.116048807, 'THz', STECK_CS, 0.000000041, READ_IN_MEASUREMENT),
       vacuumWavelengthNm: sourced(894.59295986, STECK_CS),
       lifetimeS: ns(34.894, STECK_CS),
     },
@@ -46,10 +44,7 @@ export const CAESIUM_133: BuiltinSpecies = {
       A: mhz(50.28827, STECK_CS, 0.00023),
       B: mhz(-0.4934, STECK_CS, 0.0017),
       C: sourced(560, STECK_CS, 70),
-      gJ: sourced(
-        1.33408749,
-        FROM_MEMORY,
-      ),
+      gJ: sourced(1.33408749, FROM_MEMORY, 5.2e-7, READ_IN_MEASUREMENT),
       ...energy(351.7257185, 'THz', STECK_CS, 0.00000011, FROM_MEMORY),
       vacuumWavelengthNm: sourced(852.34727582, STECK_CS),
       lifetimeS: ns(30.473, STECK_CS),

@@ -1,12 +1,9 @@
 /** Chromium-52 (bosonic, I = 0) and chromium-53 (I = 3/2): 7S3 ground level and the 425 nm 7P°4 level. */
 import { derivedNuclearG, energy, GROUND_ENERGY, mhz, sourced } from './build-helpers';
-import { IAEA_MOMENTS_MEMORY, NIST_ASD_MEMORY, NIST_MASSES } from './sources';
-import { FROM_MEMORY } from './sources';
+import { FROM_MEMORY, NIST_ASD_MEMORY, NIST_MASSES, READ_IN_MEASUREMENT, WEBELEMENTS_CR53 } from './sources';
 import type { BuiltinSpecies } from './types';
 
-const CR53_HFS =
-  FROM_MEMORY;
-const CR53_MU = sourced(-0.47454, IAEA_MOMENTS_MEMORY);
+const CR53_MU = sourced(-0.47454, WEBELEMENTS_CR53);
 
 export const CHROMIUM_52: BuiltinSpecies = {
   id: 'Cr52',
@@ -31,15 +28,15 @@ export const CHROMIUM_53: BuiltinSpecies = {
   Z: 24,
   massNumber: 53,
   massU: sourced(52.94064815, NIST_MASSES),
-  twoI: sourced(3, IAEA_MOMENTS_MEMORY),
+  twoI: sourced(3, WEBELEMENTS_CR53),
   muI: CR53_MU,
   gI: derivedNuclearG(CR53_MU, 3),
   levels: [
     {
       key: 'ground',
       designation: '3d5 4s 7S3',
-      A: mhz(-82.5994, CR53_HFS),
-      B: mhz(0.008, CR53_HFS),
+      A: mhz(-82.5994, FROM_MEMORY, 0.0016, READ_IN_MEASUREMENT),
+      B: mhz(0.008, FROM_MEMORY, 0.012, READ_IN_MEASUREMENT),
       energyHz: GROUND_ENERGY,
     },
   ],

@@ -1,11 +1,11 @@
 /** Hydrogen and deuterium: ground hyperfine masers/beams and the n = 2 levels. */
 import { derivedNuclearG, energy, GROUND_ENERGY, ns, sourced } from './build-helpers';
-import { FROM_MEMORY, IAEA_MOMENTS, NIST_ASD_MEMORY, NIST_MASSES } from './sources';
+import { FROM_MEMORY, HFS_TABLE, IAEA_MOMENTS, NIST_ASD_MEMORY, NIST_MASSES, READ_IN_MEASUREMENT } from './sources';
 import type { BuiltinSpecies } from './types';
 
 const H_MU = sourced(2.792847351, IAEA_MOMENTS);
 const D_MU = sourced(0.857438231, IAEA_MOMENTS);
-/** Bound-electron g of H(1s): g_e(1 − α²/3) (Breit); the α² term is 1.775e-5 relative. */
+/** Bound-electron g of H(1s), g_e(1 − α²/3); the same to 7 decimals for D (tests hold both). */
 const H_GJ = sourced(2.0022838, FROM_MEMORY);
 
 export const HYDROGEN: BuiltinSpecies = {
@@ -22,14 +22,15 @@ export const HYDROGEN: BuiltinSpecies = {
     {
       key: 'ground',
       designation: '1s 2S1/2',
-      A: sourced(1420405751.768, FROM_MEMORY),
+      // J = I = 1/2: the splitting (I + 1/2)A is A itself.
+      A: sourced(1420405751.768, `${HFS_TABLE}: hydrogen maser 1 420 405 751.768(2) Hz (1970)`, 0.002),
       gJ: H_GJ,
       energyHz: GROUND_ENERGY,
     },
     {
       key: 'metastable',
       designation: '2s 2S1/2',
-      A: sourced(177556834.3, FROM_MEMORY),
+      A: sourced(177556834.3, FROM_MEMORY, 6.7, READ_IN_MEASUREMENT),
       ...energy(82258.9543992821, 'cm-1', NIST_ASD_MEMORY),
     },
     {
@@ -66,10 +67,7 @@ export const DEUTERIUM: BuiltinSpecies = {
       key: 'ground',
       designation: '1s 2S1/2',
       // The splitting ΔW = A(I + 1/2) = 3A/2 is what was measured.
-      A: sourced(
-        327384352.5222 / 1.5,
-        FROM_MEMORY,
-      ),
+      A: sourced(327384352.5222 / 1.5, `${HFS_TABLE}: 327 384 352.5222(17) Hz (1972); A = ΔW/(3/2)`, 0.0017 / 1.5),
       gJ: H_GJ,
       energyHz: GROUND_ENERGY,
     },

@@ -1,6 +1,6 @@
 /** Lithium-6 and lithium-7: 2s ground level and the 2p D-line levels. */
 import { energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
-import { ARIMONDO, ARIMONDO_MEMORY, FROM_MEMORY, GEHM_LI6, IAEA_MOMENTS, NIST_MASSES } from './sources';
+import { ARIMONDO, FROM_MEMORY, GEHM_LI6, IAEA_MOMENTS, NIST_MASSES, READ_IN_MEASUREMENT } from './sources';
 import type { BuiltinSpecies } from './types';
 
 // Uncertainties marked FROM_MEMORY (fourth argument) were recalled from the cited compilation,
@@ -76,8 +76,7 @@ export const LITHIUM_7: BuiltinSpecies = {
       key: 'P1/2',
       designation: '2p 2P°1/2',
       // Interval F=2–F=1 equals 2A for I = 3/2, J = 1/2.
-      // A = interval/2 with the 2P1/2 hyperfine interval 91.873 MHz (recalled).
-      A: mhz(91.873 / 2, FROM_MEMORY),
+      A: mhz(91.873 / 2, FROM_MEMORY, 0.005 / 2, READ_IN_MEASUREMENT),
       gJ: LI_GJ_P12,
       ...energy(446.800132, 'THz', LI7_LINES),
       lifetimeS: LI7_TAU_2P,
@@ -85,9 +84,8 @@ export const LITHIUM_7: BuiltinSpecies = {
     {
       key: 'P3/2',
       designation: '2p 2P°3/2',
-      // Value and uncertainty both recalled.
-      A: mhz(-3.055, ARIMONDO_MEMORY, 0.014),
-      B: mhz(-0.221, ARIMONDO_MEMORY, 0.029),
+      A: mhz(-3.055, FROM_MEMORY, 0.014, READ_IN_MEASUREMENT),
+      B: mhz(-0.221, FROM_MEMORY, 0.029, READ_IN_MEASUREMENT),
       gJ: LI_GJ_P32,
       ...energy(446.810184, 'THz', LI7_LINES),
       lifetimeS: LI7_TAU_2P,

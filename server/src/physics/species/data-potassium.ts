@@ -1,6 +1,6 @@
 /** Potassium-39, -40, -41: 4s ground level and the 4p D-line levels. */
 import { energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
-import { FROM_MEMORY, IAEA_MOMENTS, IAEA_MOMENTS_MEMORY, NIST_MASSES, TIECKE_K } from './sources';
+import { CHEMLIN_K40, FROM_MEMORY, IAEA_MOMENTS, NIST_MASSES, TIECKE_K } from './sources';
 import type { BuiltinLevel, BuiltinSpecies } from './types';
 
 // Uncertainties: the compilation's values as recalled, not read while this was written (the
@@ -84,7 +84,8 @@ export const POTASSIUM_40: BuiltinSpecies = {
   massNumber: 40,
   massU: sourced(39.963998166, NIST_MASSES),
   twoI: sourced(8, TIECKE_K),
-  muI: sourced(-1.2981, IAEA_MOMENTS_MEMORY),
+  // Read value; the recalled −1.2981 it replaces was 4σ away (docs/species-data.md).
+  muI: sourced(-1.29797, CHEMLIN_K40, 0.00003),
   gI: sourced(0.00017649, TIECKE_K, 3.4e-8, FROM_MEMORY),
   levels: potassiumLevels({
     aGround: [-285.7308, 0.0024],

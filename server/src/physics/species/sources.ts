@@ -12,7 +12,6 @@ export const NIST_MASSES =
 export const IAEA_MOMENTS = 'IAEA nuclear moments table INDC(NDS)-0794 (Stone 2019)';
 export const IAEA_MOMENTS_MEMORY = FROM_MEMORY;
 export const ARIMONDO = 'Arimondo, Inguscio & Violino, Rev. Mod. Phys. 49, 31 (1977)';
-export const ARIMONDO_MEMORY = FROM_MEMORY;
 export const NIST_ASD_MEMORY = FROM_MEMORY;
 
 export const STECK_NA = 'Steck, "Sodium D Line Data" (alkali D-line data compilation, rev. 2.x)';
@@ -21,3 +20,17 @@ export const STECK_RB87 = 'Steck, "Rubidium 87 D Line Data" (alkali D-line data 
 export const STECK_CS = 'Steck, "Cesium D Line Data" (alkali D-line data compilation, rev. 2.1.x)';
 export const TIECKE_K = 'Tiecke, "Properties of Potassium" (v1.02, 2011)';
 export const GEHM_LI6 = 'Gehm, "Properties of 6Li" (2003)';
+
+// Compilations and isotope tables read (value and, where printed, uncertainty) with the search tool.
+export const HFS_TABLE = 'public table of measured ground hyperfine splittings (rubidium.dyndns.org/~magnus/physics/hyperfine)';
+export const CHEMLIN_K40 = 'ChemLin isotope data (chemlin.org), potassium-40: μ/μ_N = −1.29797(3)';
+export const CHEMLIN_SR87 = 'ChemLin isotope data (chemlin.org), strontium-87: spin 9/2+, μ/μ_N = −1.09316(11)';
+export const CHEMLIN_YB171_SPIN = 'ChemLin isotope data (chemlin.org), ytterbium isotopes: ¹⁷¹Yb spin 1/2−';
+export const WEBELEMENTS_CR53 = 'WebElements chromium isotopes table: ⁵³Cr I = 3/2, μ/μ_N = −0.47454 (no uncertainty printed)';
+
+/**
+ * Uncertainty of a value that stays "from memory" (its only readable source is a single measurement,
+ * not a compilation) but whose measurement printed value and uncertainty were read and agree;
+ * docs/species-data.md names the measurement and tests/physics/speciesReadValues.test.ts holds it.
+ */
+export const READ_IN_MEASUREMENT = 'read in the abstract of a single measurement that confirms the value (docs/species-data.md)';

@@ -1,0 +1,204 @@
+/**
+ * Built-in values that were once recalled, held against published numbers read (with the search
+ * tool) in abstracts, opening pages and tables. Each check names where the number was read; the
+ * pass rule is agreement within twice the combined standard uncertainty unless said otherwise.
+ * docs/species-data.md ("Read to confirm recalled values") lists the same sources.
+ */
+import { describe, expect, it } from 'vitest';
+import { ELECTRON_GS, NUCLEAR_MAGNETON_HZ_PER_T, SPEED_OF_LIGHT } from '../../server/src/physics/constants';
+import { findBuiltinLevel, findSpecies, nuclearGFromMoment } from '../../server/src/physics/species';
+import type { BuiltinLevel, BuiltinSpecies, Sourced } from '../../server/src/physics/species';
+
+function species(id: string): BuiltinSpecies {
+  const s = findSpecies(id);
+  if (!s) throw new Error(`species ${id} missing`);
+  return s;
+}
+
+function level(id: string, key: string): BuiltinLevel {
+  const l = findBuiltinLevel(species(id), key);
+  if (!l) throw new Error(`level ${key} of ${id} missing`);
+  return l;
+}
+
+function num(x: Sourced<number> | undefined, what: string): number {
+  if (!x) throw new Error(`${what} missing`);
+  return x.value;
+}
+
+/** |stored − published| ≤ 2 × combined standard uncertainty; the stored one counts only if present. */
+function within2Sigma(stored: Sourced<number> | undefined, published: number, sigma: number, what: string): void {
+  const u = stored?.uncertainty ?? 0;
+  expect(Math.abs(num(stored, what) - published), what).toBeLessThanOrEqual(2 * Math.hypot(u, sigma));
+}
+
+const CM_TO_HZ = SPEED_OF_LIGHT * 100;
+
+describe('hydrogen and deuterium', () => {
+  it('H 2s A equals the optical 2S hyperfine measurement 177 556 834.3(6.7) Hz and carries its uncertainty', () => {
+    // arXiv:0812.3509 (2009), abstract.
+    const a = level('H', 'metastable').A;
+    within2Sigma(a, 177556834.3, 6.7, 'H 2s A');
+    expect(a?.uncertainty).toBe(6.7);
+  });
+
+  it('H and D ground splittings carry the listed uncertainties (maser values, public hyperfine-splitting table)', () => {
+    // 1 420 405 751.768(2) Hz (H, 1970) and 327 384 352.5222(17) Hz (D, 1972); ΔW = (I + 1/2)A.
+    expect(level('H', 'ground').A?.uncertainty).toBe(0.002);
+    expect(num(level('D', 'ground').A, 'D A') * 1.5).toBeCloseTo(327384352.5222, 4);
+    expect((level('D', 'ground').A?.uncertainty ?? 0) * 1.5).toBeCloseTo(0.0017, 10);
+  });
+
+  it('H 1s g_J is g_e(1 − 17.709(13)e-6) to the 7 stored decimals; D shares it (ratio 1 + 7.22e-9)', () => {
+    // g_J(H)/g_s(e) = 1 − 17.709(13)×10⁻⁶ (Phys. Rev. A abstract, scilit); g_J(H)/g_J(D) = 1 + 7.22(3)×10⁻⁹
+    // (pulsed double-mode hydrogen maser, abstract); g_e from CODATA 2022.
+    const gH = num(level('H', 'ground').gJ, 'H g_J');
+    expect(Math.abs(gH - ELECTRON_GS * (1 - 17.709e-6))).toBeLessThanOrEqual(0.5e-7);
+    expect(Math.abs(num(level('D', 'ground').gJ, 'D g_J') * (1 + 7.22e-9) - gH)).toBeLessThanOrEqual(0.5e-7);
+  });
+
+  it('H n = 2 energies agree with the experimental column of a 2021 table (quoting NIST ASD) to its printed 0.001 cm⁻¹', () => {
+    // A&A 2021, aa40681-21, Table 1 "Experimental": 2s 82 258.954, 2p3/2 82 259.285 cm⁻¹. Its 2p1/2 entry,
+    // 82 258.917, is not used: it would put the Lamb shift at 1.11 GHz instead of 1.058 GHz (species.test.ts).
+    expect(Math.abs(num(level('H', 'metastable').energyHz, '2s') / CM_TO_HZ - 82258.954)).toBeLessThanOrEqual(0.0005);
+    expect(Math.abs(num(level('H', 'P3/2').energyHz, '2p3/2') / CM_TO_HZ - 82259.285)).toBeLessThanOrEqual(0.0005);
+  });
+
+  it('H 2p lifetime is 1/A with the textbook Lyman-α rate 6.27×10⁸ s⁻¹ (to its three printed digits)', () => {
+    // Textbook worked example (LibreTexts, Introductory Quantum Mechanics §12.11): w(2P→1S) = 6.27×10⁸ s⁻¹.
+    for (const key of ['P1/2', 'P3/2']) {
+      expect(Math.abs(num(level('H', key).lifetimeS, key) * 6.27e8 - 1)).toBeLessThanOrEqual(0.005 / 6.27);
+    }
+  });
+});
+
+describe('helium', () => {
+  const ms = () => num(level('He4', 'metastable').energyHz, '2³S1');
+  const p = (key: string) => num(level('He4', key).energyHz, key);
+
+  it('the 2³P_J − 2³S1 differences reproduce the measured centroid and fine-structure intervals', () => {
+    // Centroid 276 736 495 624.6(2.4) kHz: Phys. Rev. Lett. 92, 023001 (2004), abstract.
+    // P0−P1 = 29 616 952.7(1.0) kHz, P1−P2 = 2 291 167.7 kHz: Can. J. Phys. 83, 301 (2005), abstract.
+    const centroid = (5 * p('3P2') + 3 * p('3P1') + p('3P0')) / 9 - ms();
+    expect(Math.abs(centroid - 276736495624.6e3)).toBeLessThanOrEqual(2 * 2.4e3);
+    expect(Math.abs(p('3P0') - p('3P1') - 29616952.7e3)).toBeLessThanOrEqual(2 * 1.0e3);
+    expect(Math.abs(p('3P1') - p('3P2') - 2291167.7e3)).toBeLessThanOrEqual(2 * 1.0e3);
+  });
+
+  it('the 2³S1 lifetime is the trapped-atom measurement 7870(510) s', () => {
+    // Phys. Rev. Lett. 103, 053002 (2009), abstract.
+    within2Sigma(level('He4', 'metastable').lifetimeS, 7870, 510, 'He* lifetime');
+    expect(level('He4', 'metastable').lifetimeS?.uncertainty).toBe(510);
+  });
+
+  it('³He 2³S1: (J + 1/2)A = −6 739 701 177(16) Hz, inverted', () => {
+    // Phys. Rev. A 1, 571 (1970), quoted in arXiv:2304.12274, abstract; theory there: −6 739 701 181(41) Hz.
+    const a = level('He3', 'metastable').A;
+    expect(Math.abs(num(a, 'A') * 1.5 - -6739701177)).toBeLessThanOrEqual(2 * 16);
+    expect(Math.abs(num(a, 'A') * 1.5 - -6739701181)).toBeLessThanOrEqual(2 * Math.hypot(16, 41));
+  });
+
+  it('³He μ_I (recalled) is within 2σ of the CODATA 2014 helion moment −2.127 625 307(25) μ_N', () => {
+    // Helion page citing CODATA 2014: μ_h/μ_N = −2.127 625 307(25), g_h = −4.255 250 615(50).
+    expect(Math.abs(num(species('He3').muI, 'μ') - -2.127625307)).toBeLessThanOrEqual(2 * 2.5e-8);
+  });
+});
+
+describe('lithium 2p hyperfine constants', () => {
+  it('⁷Li 2p1/2: A = 91.873(5)/2 MHz agrees with the 1975 double-resonance a(1/2) = 45.914(25) MHz', () => {
+    // Interval: NTHU thesis on lithium laser spectroscopy (2018), abstract. a(1/2): Z. Phys. A abstract (optical double resonance).
+    const a = level('Li7', 'P1/2').A;
+    expect(num(a, 'A') * 2).toBeCloseTo(91.873e6, 0);
+    within2Sigma(a, 45.914e6, 0.025e6, '7Li 2p1/2 A');
+  });
+
+  it('⁷Li 2p3/2: A and B equal the double-resonance values −3.055(14) and −0.221(29) MHz', () => {
+    const l = level('Li7', 'P3/2');
+    within2Sigma(l.A, -3.055e6, 0.014e6, '7Li 2p3/2 A');
+    within2Sigma(l.B, -0.221e6, 0.029e6, '7Li 2p3/2 B');
+  });
+
+  it('⁶Li 2p1/2 A (compilation) agrees with the 2018 interval 26.108(9) MHz = (3/2)A', () => {
+    // NTHU thesis on lithium laser spectroscopy (2018), abstract.
+    within2Sigma(level('Li6', 'P1/2').A, 26.108e6 / 1.5, 0.009e6 / 1.5, '6Li 2p1/2 A');
+  });
+});
+
+describe('nuclear moments read in isotope tables', () => {
+  /** Shielding fraction between a listed g_I and the one derived from μ_I: 1 − g_I/g_I(μ_I). */
+  const shielding = (id: string): number => {
+    const s = species(id);
+    return 1 - num(s.gI, 'g_I') / (nuclearGFromMoment(num(s.muI, 'μ_I'), s.twoI.value) ?? Number.NaN);
+  };
+
+  it('⁴⁰K: the read μ_I and the listed g_I give the same shielding as ³⁹K and ⁴¹K (one element, one σ)', () => {
+    // μ(40K) = −1.29797(3) μ_N (ChemLin); g_I(40K) = 1.7649(34)e-4 (potassium compilation, u from memory).
+    const s = species('K40');
+    const u = Math.hypot((s.gI?.uncertainty ?? Number.NaN) / num(s.gI, 'g_I'), (s.muI?.uncertainty ?? Number.NaN) / num(s.muI, 'μ'));
+    for (const other of ['K39', 'K41']) expect(Math.abs(shielding('K40') - shielding(other)), other).toBeLessThanOrEqual(2 * u);
+  });
+
+  it('⁸⁷Sr: the read μ_I = −1.09316(11) μ_N makes the 1S0 nuclear Zeeman step |μ|/(I h) = 185.17 Hz/G', () => {
+    // ChemLin strontium-87 page: μ/μ_N = −1.09316(11), spin 9/2+.
+    const s = species('Sr87');
+    expect(s.twoI.value).toBe(9);
+    expect((Math.abs(num(s.muI, 'μ')) * NUCLEAR_MAGNETON_HZ_PER_T * 1e-4) / 4.5).toBeCloseTo(185.17, 2);
+  });
+
+  it('⁵³Cr: I = 3/2 and μ_I = −0.47454 μ_N (WebElements and ChemLin tables)', () => {
+    expect(species('Cr53').twoI.value).toBe(3);
+    expect(num(species('Cr53').muI, 'μ')).toBe(-0.47454);
+  });
+});
+
+describe('caesium 6p', () => {
+  it('6p3/2 g_J = 1.334 087 49(52) agrees with the earlier strong-field double-resonance value 1.3340(3)', () => {
+    // The D2-line measurement (arXiv abstract) is the stored value; Z. Phys. abstract: g_J(6²P3/2) = 1.3340(3).
+    const g = level('Cs133', 'P3/2').gJ;
+    expect(g?.uncertainty).toBe(5.2e-7);
+    within2Sigma(g, 1.334, 0.0003, 'Cs 6p3/2 g_J');
+  });
+
+  it('the D1 centroid is the 1999 comb value 335 116 048 807(41) kHz, within 2σ of the 2006 value 335 116 048 748.1(2.4) kHz', () => {
+    // 1999: Phys. Rev. Lett. 82, 3568, abstract (the uncertainty is now read, no longer recalled).
+    // 2006: thermal-beam comb measurement, NIST publication page abstract; 1.4σ below. Kept, see docs/species-data.md.
+    const e = level('Cs133', 'P1/2').energyHz;
+    expect(num(e, 'D1') / 1e3).toBeCloseTo(335116048807, 0);
+    expect(e?.uncertainty).toBeCloseTo(41e3, 3);
+    expect(e?.uncertaintySource).not.toMatch(/memory/);
+    within2Sigma(e, 335116048748.1e3, 2.4e3, 'Cs D1');
+  });
+});
+
+describe('chromium and strontium hyperfine constants and clock lines', () => {
+  it('⁵³Cr ground A, B are the atomic-beam values −82.5994(16) and +0.008(12) MHz', () => {
+    const l = level('Cr53', 'ground');
+    within2Sigma(l.A, -82.5994e6, 0.0016e6, 'Cr53 A');
+    within2Sigma(l.B, 0.008e6, 0.012e6, 'Cr53 B');
+  });
+
+  it('⁸⁷Sr 3P2 A, B are the atomic-beam values 212.765(1) and 67.215(15) MHz', () => {
+    const l = level('Sr87', '3P2');
+    within2Sigma(l.A, 212.765e6, 0.001e6, 'Sr87 3P2 A');
+    within2Sigma(l.B, 67.215e6, 0.015e6, 'Sr87 3P2 B');
+  });
+
+  it.each([
+    // Independent absolute measurements of the 87Sr clock line, read in abstracts, and the 2009 CIPM value.
+    ['NPL 2020 (arXiv:2005.10857)', 429228004229873.1, 0.5],
+    ['NTSC 2023', 429228004229872.91, 0.18],
+    ['PTB (arXiv abstract)', 429228004229872.9, 0.5],
+    ['CIPM 2009 recommended value (1e-15)', 429228004229873.7, 0.43],
+  ] as const)('⁸⁷Sr clock frequency agrees with %s', (_what, f, u) => {
+    within2Sigma(level('Sr87', '3P0').energyHz, f, u, 'Sr87 clock');
+  });
+
+  it('the ⁸⁸Sr 689 nm line: 434 829 121 311(10) kHz, and its lifetime matches a 2π × 7.5 kHz width', () => {
+    // Phys. Rev. Lett. 91, 243002 (2003), abstract; width "2π × 7.5 kHz" (arXiv:2403.18796, introduction).
+    within2Sigma(level('Sr88', '3P1').energyHz, 434829121311e3, 10e3, 'Sr88 3P1');
+    const tau = num(level('Sr88', '3P1').lifetimeS, 'τ');
+    // Two printed digits: 7.45–7.55 kHz.
+    expect(1 / (2 * Math.PI * tau)).toBeGreaterThanOrEqual(7.45e3);
+    expect(1 / (2 * Math.PI * tau)).toBeLessThanOrEqual(7.55e3);
+  });
+});
