@@ -105,9 +105,9 @@ export function topAxis(scale: Scale, unit: DisplayUnit, box: PlotBox, pal: Pale
  * Vertical axis at `axisX` (which may sit left of the plot when a label lane lies between),
  * with horizontal grid lines from the axis across the plot.
  */
-export function leftAxis(scale: Scale, unit: DisplayUnit | undefined, name: string, box: PlotBox, axisX: number, pal: Palette): string {
+export function leftAxis(scale: Scale, unit: DisplayUnit | undefined, name: string, box: PlotBox, axisX: number, pal: Palette, pxPerTick = 55): string {
   const shown = unit ? displayScale(scale, unit) : scale;
-  const count = Math.max(2, Math.round((box.bottom - box.top) / 55));
+  const count = Math.max(2, Math.round((box.bottom - box.top) / pxPerTick));
   const labelled = tickLabels(shown, count, unit);
   const ticks = labelled.map((k) => k.t);
   const parts: string[] = [];

@@ -44,6 +44,10 @@ export function fieldDisplayUnit(unit: FieldUnit): DisplayUnit {
       return { factor: 1e-4, symbol: 'G' };
     case 'mT':
       return { factor: 1e-3, symbol: 'mT' };
+    case 'µT':
+      return { factor: 1e-6, symbol: 'µT' };
+    case 'nT':
+      return { factor: 1e-9, symbol: 'nT' };
     default:
       return { factor: 1, symbol: 'T' };
   }
