@@ -362,7 +362,7 @@ function startLanguageServer(): void {
       ...(typeof p?.field === 'string' ? { fieldName: p.field } : {}),
       ...(finite(p?.fromT) !== undefined ? { fromT: finite(p?.fromT) } : {}),
       ...(finite(p?.toT) !== undefined ? { toT: finite(p?.toT) } : {}),
-      ...(p?.unit === 'G' || p?.unit === 'mT' || p?.unit === 'T' ? { fieldUnit: p.unit as FieldUnit } : {}),
+      ...(p?.unit === 'G' || p?.unit === 'mT' || p?.unit === 'µT' || p?.unit === 'nT' || p?.unit === 'T' ? { fieldUnit: p.unit as FieldUnit } : {}),
     };
     const theme = p?.theme === 'export' ? 'export' : 'panel';
     const line = typeof p?.line === 'number' && Number.isInteger(p.line) && p.line >= 0 ? p.line : undefined;

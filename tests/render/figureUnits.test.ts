@@ -61,12 +61,41 @@ describe('the resonance field axis follows the unit of the range', () => {
   it.each([
     ['0 mT, 5 mT', 'mT'],
     ['0 G, 50 G', 'G'],
-    ['0 T, 0.005 T', 'G'],
+    // A range written in tesla reads in the tesla family, with the prefix that suits it.
+    ['0 T, 0.005 T', 'mT'],
+    ['0 uT, 50 uT', 'µT'],
+    ['0 nT, 500 nT', 'nT'],
+    ['0 mT, 0.05 mT', 'µT'],
   ])('range = %s draws B in %s', (range, unit) => {
     const text = `species Rb87\n  level ground: 5s 2S1/2\nresonance clock\n  level = ground\n  lower = 1 -1\n  upper = 2 +1\n  range = ${range}\n`;
     const d = diagramFor(analyze(text), { view: 'resonance', theme: 'export' });
     if (!d.ok) throw new Error(d.message);
     expect(parseSvg(d.svg).attrs['data-x-unit']).toBe(unit);
+  });
+});
+
+describe('a magnetometer’s fields (1 nT to 100 µT) read in µT or nT', () => {
+  const bias = (field: string, toT: number): string => {
+    const d = diagramFor(analyze(`species Rb87\n  level ground: 5s 2S1/2\nfield bias = ${field}\n`), { view: 'levels', theme: 'export', toT });
+    if (!d.ok) throw new Error(d.message);
+    return d.svg;
+  };
+  it.each([
+    ['20 uT', 5e-5, 'µT'],
+    ['300 nT', 5e-7, 'nT'],
+    ['0.02 mT', 5e-5, 'µT'],
+    ['0.2 G', 5e-5, 'G'],
+  ])('field bias = %s on a levels axis to %s T reads in %s', (field, toT, unit) => {
+    const svg = bias(field, toT);
+    expect(parseSvg(svg).attrs['data-x-unit']).toBe(unit);
+    expect(svg).not.toMatch(/NaN|Infinity/);
+  });
+  it('with no field written, a range under 1 G reads in µT, under 1 µT in nT', () => {
+    const d = (toT: number): string | undefined => {
+      const r = diagramFor(analyze('species Rb87\n  level ground: 5s 2S1/2\n'), { view: 'levels', theme: 'export', toT });
+      return r.ok ? parseSvg(r.svg).attrs['data-x-unit'] : undefined;
+    };
+    expect([d(5e-5), d(5e-7), d(5e-3)]).toEqual(['µT', 'nT', 'G']);
   });
 });
 

@@ -34,6 +34,12 @@ function pointXs(svg: string): number[] {
   });
 }
 
+function xTicks(svg: string): string[] {
+  const root = parseSvg(svg);
+  const axes = all(root, (n) => n.attrs.class?.includes('sl-axis-x') === true);
+  return all(axes[axes.length - 1]!, (n) => n.attrs['data-tick'] !== undefined).map((n) => n.attrs['data-tick']!);
+}
+
 describe('residuals figure', () => {
   it('draws fields from 2 µT to 1 T on a log axis, every point apart', () => {
     const svg = renderResiduals(data([2e-6, 0.01, 0.02, 0.15, 1]), theme);
@@ -42,11 +48,37 @@ describe('residuals figure', () => {
     const xs = pointXs(svg);
     for (let i = 1; i < xs.length; i++) expect(xs[i]! - xs[i - 1]!).toBeGreaterThan(20);
     const titles = all(root, (n) => n.attrs.class === 'sl-axis-title').map((n) => textOf(n));
-    expect(titles).toContain('B, log scale (T)');
-    // Tick labels are plain numbers, every one of them a power of ten here.
-    const ticks = all(root, (n) => n.attrs['data-tick'] !== undefined && n.parent?.attrs.class?.includes('sl-axis-x') === true).map((n) => n.attrs['data-tick']!);
-    expect(ticks.length).toBeGreaterThan(3);
-    for (const t of ticks) expect(Math.log10(Number(t)) % 1).toBeCloseTo(0, 9);
+    // Six decades read in no single unit: each tick names its own prefix, the title none.
+    expect(titles).toContain('B, log scale');
+    const ticks = xTicks(svg);
+    expect(ticks).toEqual(expect.arrayContaining(['5 µT', '10 µT', '100 µT', '1 mT', '10 mT', '100 mT', '1 T']));
+  });
+
+  it('labels every decade the points span: the 0.5 mT points of the example read on the axis', () => {
+    // The fields of examples/fit-rubidium.sublevel (0.5, 20, 60, 150 mT).
+    const svg = renderResiduals(data([5e-4, 0.02, 0.06, 0.15]), theme);
+    const root = parseSvg(svg);
+    expect(root.attrs['data-x-scale']).toBe('log');
+    expect(root.attrs['data-x-unit']).toBe('mT');
+    const ticks = xTicks(svg).map(Number);
+    for (const decade of [-1, 0, 1, 2]) expect(ticks.some((t) => Math.floor(Math.log10(t) + 1e-9) === decade)).toBe(true);
+    expect(ticks).toContain(0.5);
+    // The smallest point lies right of the smallest label's decade start, so it is read against a label of its own decade.
+    expect(Math.min(...ticks)).toBeLessThanOrEqual(1);
+  });
+
+  it('shows in its legend the marks it draws: a dot with an error bar, and the model as rings', () => {
+    const root = parseSvg(renderResiduals(data([5e-4, 0.02, 0.06, 0.15]), theme));
+    const entries = all(root, (n) => n.attrs.class === 'sl-legend-entry');
+    const model = entries.find((e) => textOf(e).includes('model'))!;
+    const mark = all(model, (n) => n.attrs['data-marker'] !== undefined)[0]!;
+    expect(mark.attrs['data-marker']).toBe('circle open');
+    expect(mark.attrs.fill).toBe('none');
+    // The plot's model rings have the same stroke and no fill.
+    const ring = all(root, (n) => n.parent?.attrs['data-kind'] === 'point' && n.attrs.fill === 'none')[0]!;
+    expect(ring.attrs['stroke-width']).toBe(mark.attrs['stroke-width']);
+    const measured = entries.find((e) => textOf(e).includes('measured'))!;
+    expect(all(measured, (n) => n.name === 'path').some((n) => /^M[\d.]+,[\d.]+V/.test(n.attrs.d!))).toBe(true);
   });
 
   it('keeps a linear axis for fields within two decades, or with a point at zero field', () => {

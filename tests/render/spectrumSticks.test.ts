@@ -7,6 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import { renderLines } from '../../server/src/render';
+import { VISIBLE_FLOOR } from '../../server/src/render/lines';
 import { linesView } from '../../server/src/views/linesView';
 import { all, byClass, parseSvg, pathPoints, textOf } from './svgTree';
 
@@ -25,13 +26,21 @@ function sticks(view: string, light?: string) {
   const at = line.at_fields[0]!;
   const svg = parseSvg(renderLines(linesView(line)!, { kind: 'export' }));
   const drawn = all(svg, (n) => n.attrs['data-kind'] === 'component');
-  return { at, svg, drawn };
+  // Sticks under VISIBLE_FLOOR of the strongest seen are left out of the figure (and counted in its note).
+  const weights = at.spectrum!.weights;
+  const top = Math.max(...weights);
+  const visible = (k: number): boolean => weights[k]! > 0 && weights[k]! >= VISIBLE_FLOOR * top;
+  const note = byClass(svg, 'sl-faint-note')[0];
+  const leftOut = note ? Number(note.attrs['data-left-out']) : 0;
+  return { at, svg, drawn, visible, leftOut };
 }
 
 describe('spectrum sticks carry the viewing factor', () => {
   it('across the field: π at its strength, σ at half, as the curve counts them', () => {
-    const { at, drawn, svg } = sticks('across');
-    expect(drawn).toHaveLength(at.components.length);
+    const { at, drawn, svg, visible, leftOut } = sticks('across');
+    const seen = at.components.filter((_, k) => visible(k));
+    expect(drawn).toHaveLength(seen.length);
+    expect(leftOut).toBe(at.components.length - seen.length);
     for (const g of drawn) {
       const strength = Number(g.attrs['data-strength']);
       const factor = g.attrs['data-polarization'] === 'π' ? 1 : 0.5;
@@ -41,8 +50,8 @@ describe('spectrum sticks carry the viewing factor', () => {
   });
 
   it('along the field: no π stick at all, σ at full strength', () => {
-    const { at, drawn } = sticks('along');
-    const sigma = at.components.filter((c) => c.polarization !== 'pi');
+    const { at, drawn, visible } = sticks('along');
+    const sigma = at.components.filter((c, k) => c.polarization !== 'pi' && visible(k));
     expect(at.components.some((c) => c.polarization === 'pi')).toBe(true);
     expect(drawn).toHaveLength(sigma.length);
     for (const g of drawn) {
@@ -52,8 +61,8 @@ describe('spectrum sticks carry the viewing factor', () => {
   });
 
   it('through a σ+ analyser along the field: only σ+ sticks', () => {
-    const { at, drawn } = sticks('along', 'sigma+');
-    expect(drawn).toHaveLength(at.components.filter((c) => c.polarization === 'sigma+').length);
+    const { at, drawn, visible } = sticks('along', 'sigma+');
+    expect(drawn).toHaveLength(at.components.filter((c, k) => c.polarization === 'sigma+' && visible(k)).length);
   });
 
   it('a lone component peaks at its stick; a blend stands above its sticks (the curve in stick units)', () => {

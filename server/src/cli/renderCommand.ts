@@ -1,5 +1,5 @@
 /**
- * `sublevel render <file> [--view levels|pattern|lines|resonance|residuals|fieldmap] [selectors…] [--from B] [--to B] [--unit G|mT|T] [--format svg|csv|png] [--out FILE]`:
+ * `sublevel render <file> [--view levels|pattern|lines|resonance|residuals|fieldmap] [selectors…] [--from B] [--to B] [--unit G|mT|uT|nT|T] [--format svg|csv|png] [--out FILE]`:
  * the same diagrams the editor panel shows, as standalone SVG for reports (light palette), as PNG at print resolution,
  * or the numbers behind them as CSV.
  */
@@ -17,7 +17,7 @@ import { selectBeam, selectField, selectLevel, selectName, selectSources } from 
 
 export const RENDER_VIEWS = DIAGRAM_VIEWS;
 const FORMATS = ['svg', 'csv', 'png'] as const;
-const FIELD_UNITS = ['G', 'mT', 'T'] as const;
+const FIELD_UNITS = ['G', 'mT', 'uT', 'µT', 'nT', 'T'] as const;
 
 export const renderSpec: CommandSpec = {
   name: 'render',
@@ -37,7 +37,7 @@ export const renderSpec: CommandSpec = {
     slower: { value: 'NAME', help: 'the slower (slower view); default: the first one' },
     from: { value: 'FIELD', help: 'start of the field axis (levels and resonance views), e.g. 0 or 10G' },
     to: { value: 'FIELD', help: 'end of the field axis, e.g. 50G or 0.1T' },
-    unit: { value: 'UNIT', choices: FIELD_UNITS, help: 'unit of the field axis: G, mT or T' },
+    unit: { value: 'UNIT', choices: FIELD_UNITS, help: 'unit of the field axis: G, mT, uT (or µT), nT or T' },
     format: { value: 'FORMAT', choices: FORMATS, help: 'svg (default), csv, or png (needs --out and the system Chromium)' },
     ...OUT_OPTION,
   },
@@ -64,7 +64,7 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   if (toText !== undefined) req.toT = readFieldOption('to', toText);
   if (req.fromT !== undefined && req.toT !== undefined && !(req.toT > req.fromT)) throw new UsageError('--to must be a larger field than --from');
   const unit = stringOption(args, 'unit', FIELD_UNITS);
-  if (unit !== undefined) req.fieldUnit = unit as FieldUnit;
+  if (unit !== undefined) req.fieldUnit = (unit === 'uT' ? 'µT' : unit) as FieldUnit;
   if (format === 'png' && !out) throw new UsageError('--format png writes a file: add --out FILE.png');
   const level = stringOption(args, 'level');
   if (level !== undefined) req.level = selectLevel(model, level);

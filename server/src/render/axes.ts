@@ -5,7 +5,8 @@
 import type { ScaleContinuousNumeric } from 'd3-scale';
 import type { Palette } from './palette';
 import { el, px, text } from './svgText';
-import type { DisplayUnit } from './units';
+import { format } from 'd3-format';
+import { formatSI, type DisplayUnit } from './units';
 
 export interface PlotBox {
   left: number;
@@ -21,9 +22,35 @@ function isLog(scale: Scale): boolean {
   return typeof (scale as { base?: unknown }).base === 'function';
 }
 
-function tickLabels(shown: Scale, count: number): { t: number; label: string }[] {
-  const fmt = isLog(shown) ? shown.tickFormat(count, '~g') : shown.tickFormat(count);
+/** The ticks a log axis labels: d3's choice, plus one per decade the domain spans that d3 left bare (0.5 in 0.33…1). */
+function logTickLabels(shown: Scale, count: number, label: (t: number) => string): { t: number; label: string }[] {
+  const all = shown.ticks(count);
+  const fmt = shown.tickFormat(count, '~g');
+  const kept = all.filter((t) => fmt(t) !== '');
+  const decade = (t: number): number => Math.floor(Math.log10(t) + 1e-9);
+  const [a, b] = (shown.domain() as number[]).map(Math.abs).sort((p, q) => p - q);
+  for (let k = decade(a!); k <= decade(b!); k++) {
+    if (kept.some((t) => decade(t) === k)) continue;
+    const inDecade = all.filter((t) => decade(t) === k);
+    // A round mantissa (5, then 2) reads best; else the tick nearest the next labelled decade.
+    const pick = inDecade.find((t) => Math.abs(t / 10 ** k - 5) < 1e-6) ?? inDecade.find((t) => Math.abs(t / 10 ** k - 2) < 1e-6) ?? inDecade[inDecade.length - 1];
+    if (pick !== undefined) kept.push(pick);
+  }
+  return kept.sort((p, q) => p - q).map((t) => ({ t, label: label(t) }));
+}
+
+function tickLabels(shown: Scale, count: number, unit?: DisplayUnit): { t: number; label: string }[] {
+  if (isLog(shown)) {
+    const plain = format('~g');
+    return logTickLabels(shown, count, unit?.perTick !== undefined ? (t) => formatSI(t, unit.perTick!, 3) : plain);
+  }
+  const fmt = shown.tickFormat(count);
   return shown.ticks(count).map((t) => ({ t, label: fmt(t) })).filter((k) => k.label !== '');
+}
+
+/** The axis title: the unit in brackets, unless every tick names its own. */
+function axisTitle(name: string, unit: DisplayUnit): string {
+  return unit.perTick !== undefined ? name : `${name} (${unit.symbol})`;
 }
 
 function displayScale(scale: Scale, unit: DisplayUnit): Scale {
@@ -34,7 +61,7 @@ function displayScale(scale: Scale, unit: DisplayUnit): Scale {
 export function bottomAxis(scale: Scale, unit: DisplayUnit, name: string, box: PlotBox, pal: Palette, pxPerTick = 90): string {
   const shown = displayScale(scale, unit);
   const count = Math.max(2, Math.round((box.right - box.left) / pxPerTick));
-  const labelled = tickLabels(shown, count);
+  const labelled = tickLabels(shown, count, unit);
   const ticks = labelled.map((k) => k.t);
   const fmt = (t: number): string => labelled.find((k) => k.t === t)!.label;
   const parts: string[] = [];
@@ -50,7 +77,7 @@ export function bottomAxis(scale: Scale, unit: DisplayUnit, name: string, box: P
   if (name) {
     parts.push(
       el('text', { class: 'sl-axis-title', x: (box.left + box.right) / 2, y: box.bottom + 38, 'text-anchor': 'middle', fill: pal.text },
-        text(`${name} (${unit.symbol})`)),
+        text(axisTitle(name, unit))),
     );
   }
   return el('g', { class: 'sl-axis sl-axis-x', 'font-size': 11 }, parts);
@@ -61,7 +88,7 @@ export function topAxis(scale: Scale, unit: DisplayUnit, box: PlotBox, pal: Pale
   if (!(unit.factor > 0) || !Number.isFinite(unit.factor)) return '';
   const shown = displayScale(scale, unit);
   const count = Math.max(2, Math.round((box.right - box.left) / pxPerTick));
-  const labelled = tickLabels(shown, count);
+  const labelled = tickLabels(shown, count, unit);
   const parts: string[] = [
     el('path', { class: 'sl-axis-line', d: `M${px(box.left)},${px(box.top)}H${px(box.right)}`, stroke: pal.axis, fill: 'none' }),
   ];
@@ -78,10 +105,10 @@ export function topAxis(scale: Scale, unit: DisplayUnit, box: PlotBox, pal: Pale
  * Vertical axis at `axisX` (which may sit left of the plot when a label lane lies between),
  * with horizontal grid lines from the axis across the plot.
  */
-export function leftAxis(scale: Scale, unit: DisplayUnit | undefined, name: string, box: PlotBox, axisX: number, pal: Palette): string {
+export function leftAxis(scale: Scale, unit: DisplayUnit | undefined, name: string, box: PlotBox, axisX: number, pal: Palette, pxPerTick = 55): string {
   const shown = unit ? displayScale(scale, unit) : scale;
-  const count = Math.max(2, Math.round((box.bottom - box.top) / 55));
-  const labelled = tickLabels(shown, count);
+  const count = Math.max(2, Math.round((box.bottom - box.top) / pxPerTick));
+  const labelled = tickLabels(shown, count, unit);
   const ticks = labelled.map((k) => k.t);
   const parts: string[] = [];
   const grid = ticks.map((t) => `M${px(axisX)},${px(shown(t))}H${px(box.right)}`).join('');
@@ -92,7 +119,7 @@ export function leftAxis(scale: Scale, unit: DisplayUnit | undefined, name: stri
   for (const { t, label } of labelled) {
     parts.push(el('text', { x: axisX - 8, y: shown(t) + 4, 'text-anchor': 'end', fill: pal.muted, 'data-tick': label }, text(label)));
   }
-  const title = unit ? `${name} (${unit.symbol})` : name;
+  const title = unit ? axisTitle(name, unit) : name;
   const cy = (box.top + box.bottom) / 2;
   parts.push(
     el('text', { class: 'sl-axis-title', x: 16, y: cy, transform: `rotate(-90 16 ${px(cy)})`, 'text-anchor': 'middle', fill: pal.text },

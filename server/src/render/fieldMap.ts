@@ -17,7 +17,7 @@ import { legendUnderTitle, type LegendEntry } from './legend';
 import { paletteFor } from './palette';
 import { finiteExtent } from './sampled';
 import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
-import { engineeringUnit, fieldDisplayUnit, formatIn } from './units';
+import { engineeringUnit, fieldDisplayUnit, formatIn, type DisplayUnit } from './units';
 import type { FieldUnit, RenderTheme } from './viewData';
 
 /** One drawn piece of a source in the side view; s along the line, t across it, metres. */
@@ -112,7 +112,9 @@ export function renderFieldMap(d: FieldMapViewData, theme: RenderTheme): string 
   let yDomain = axis.domain;
   if (showComponent && !axis.log) {
     const c = finiteExtent(Array.from(d.componentT!).filter((v) => Math.abs(v) <= axis.domain[1]));
-    if (c) yDomain = [Math.min(0, c[0]), Math.max(axis.domain[1], c[1])];
+    const all = finiteExtent(Array.from(d.componentT!));
+    // A component that spikes below as |B| spikes above is cut at the same size on both sides.
+    if (c) yDomain = [Math.min(0, axis.cut && all![0] < -axis.domain[1] ? -axis.domain[1] : c[0]), Math.max(axis.domain[1], c[1])];
   }
   const y: Scale = axis.log
     ? scaleLog().domain(yDomain).range([plot.bottom, plot.top]).nice()
@@ -152,9 +154,9 @@ export function renderFieldMap(d: FieldMapViewData, theme: RenderTheme): string 
       ]),
     );
   }
-  if (axis.cut) {
-    body.push(el('text', { class: 'sl-note', x: RIGHT, y: plot.top - 6, 'text-anchor': 'end', 'font-size': 10, fill: pal.muted }, text(`axis cut at ${formatIn(highY, fUnit)}: the field is far stronger next to (or inside) a source`)));
-  }
+  // A field that is zero all along lies on the axis line itself: say so, rather than leave a bare plot.
+  const note = !(mag![1] > 0) ? '|B| = 0 all along the line: the sources cancel here (or carry no current)' : cutNote(d, axis.log, lowY, highY, fUnit, showComponent);
+  if (note) body.push(el('text', { class: 'sl-note', x: RIGHT, y: plot.top - 6, 'text-anchor': 'end', 'font-size': 10, fill: pal.muted }, text(note)));
 
   body.push(sideView(d, x, strip, lUnit, pal));
   body.push(bottomAxis(x, lUnit, `${d.alongName}`, strip, pal));
@@ -185,6 +187,31 @@ export function renderFieldMap(d: FieldMapViewData, theme: RenderTheme): string 
   );
 }
 
+/**
+ * Every side where a drawn curve leaves the axis, named with the value there: a spike next to a
+ * wire leaves at the top (and, for a signed component, at the bottom); on a log axis |B| may dip
+ * under the floor (to zero at the centre of a quadrupole).
+ */
+export function cutNote(d: FieldMapViewData, log: boolean, lowY: number, highY: number, unit: DisplayUnit, withComponent: boolean): string | undefined {
+  const drawn = [Array.from(d.magnitudeT), ...(withComponent && d.componentT ? [Array.from(d.componentT)] : [])].flat().filter(Number.isFinite);
+  if (drawn.length === 0) return undefined;
+  const lowest = Math.min(...drawn);
+  // Half a pixel's worth of slack: a value on the axis end is not cut.
+  const slack = log ? 1e-9 : (highY - lowY) * 1e-3;
+  const above = Math.max(...drawn) > highY + (log ? highY * slack : slack);
+  const below = log ? lowest < lowY * (1 - slack) : lowest < lowY - slack;
+  if (log) {
+    const parts = [
+      ...(above ? [`axis cut at ${formatIn(highY, unit)}`] : []),
+      ...(below ? [`|B| dips below the axis floor ${formatIn(lowY, unit)} (to ${formatIn(lowest, unit)})`] : []),
+    ];
+    return parts.length ? parts.join('; ') : undefined;
+  }
+  if (!above && !below) return undefined;
+  const where = above && below ? `${formatIn(lowY, unit)} and ${formatIn(highY, unit)}` : formatIn(above ? highY : lowY, unit);
+  return `axis cut at ${where}: the field is far stronger next to (or inside) a source`;
+}
+
 /** The sources in a side view under the plot: same horizontal scale; true aspect when the strip is tall enough. */
 function sideView(d: FieldMapViewData, x: Scale, box: PlotBox, lUnit: { factor: number; symbol: string }, pal: ReturnType<typeof paletteFor>): string {
   let reach = 0;
@@ -202,17 +229,23 @@ function sideView(d: FieldMapViewData, x: Scale, box: PlotBox, lUnit: { factor: 
     el('text', { class: 'sl-side-caption', x: box.left, y: box.top - 6, 'font-size': 10, fill: pal.muted }, text(`side view: ${d.acrossName} across (${acrossPerPx * pxPerM > 1.0001 ? 'squeezed' : 'to scale'}), the sampled line dashed; ⊙ current towards you, ⊗ away`)),
   ];
   const clipped = (sv: number): number => Math.min(box.right, Math.max(box.left, x(sv)));
+  // The name above the source's topmost point, kept inside the strip; sources drawn in one place share one label.
+  const at = d.sources.map((s) => {
+    const top = s.shapes.map(labelPoint).sort((a, b) => b.t - a.t)[0];
+    return top ? { x: clipped(top.s), y: Math.max(box.top + 10, ty(top.t) - 9) } : undefined;
+  });
+  const sameSpot = (i: number, j: number): boolean => at[i] !== undefined && at[j] !== undefined && Math.abs(at[i]!.x - at[j]!.x) < 2 && Math.abs(at[i]!.y - at[j]!.y) < 2;
   d.sources.forEach((s, i) => {
     const colour = pal.series[(i + 2) % pal.series.length];
     const shapes = s.shapes.map((sh) => shapeSvg(sh, clipped, ty, colour, pal.halo));
-    // The name above the source's topmost point, kept inside the strip.
-    const top = s.shapes.map(labelPoint).sort((a, b) => b.t - a.t)[0];
-    const label = top
-      ? el('text', { class: 'sl-source-name', x: clipped(top.s), y: Math.max(box.top + 10, ty(top.t) - 9), 'text-anchor': 'middle', 'font-size': 10, fill: pal.text, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text(s.name))
+    const first = d.sources.findIndex((_, j) => j === i || sameSpot(i, j));
+    const names = d.sources.filter((_, j) => j >= i && sameSpot(i, j)).map((o) => o.name);
+    const label = at[i] && first === i
+      ? el('text', { class: 'sl-source-name', x: at[i]!.x, y: at[i]!.y, 'text-anchor': 'middle', 'font-size': 10, fill: pal.text, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text([s.name, ...names.filter((n) => n !== s.name)].join(', ')))
       : '';
     parts.push(el('g', { class: 'sl-source', 'data-kind': 'source', 'data-label': s.name, 'data-source-kind': s.kind }, [titleEl(`${s.kind} ${s.name}`), ...shapes, label]));
   });
-  parts.push(leftAxis(scaleLinear().domain([-half * acrossPerPx, half * acrossPerPx]).range([mid + half, mid - half]), lUnit, d.acrossName, { ...box, top: mid - half, bottom: mid + half }, box.left, pal));
+  parts.push(leftAxis(scaleLinear().domain([-half * acrossPerPx, half * acrossPerPx]).range([mid + half, mid - half]), lUnit, d.acrossName, { ...box, top: mid - half, bottom: mid + half }, box.left, pal, 28));
   return el('g', { class: 'sl-side-view' }, parts);
 }
 

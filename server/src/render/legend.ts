@@ -13,6 +13,8 @@ export interface LegendEntry {
   /** A line sample with this width and dash; omitted for marker-only entries. */
   line?: { width: number; dash?: string; vertical?: boolean };
   marker?: MarkerShape;
+  /** The marker as an open outline of this stroke width (a ring), as the figure draws it; else filled. */
+  hollow?: number;
   /** Filled area sample (drawn under the line sample). */
   area?: string;
 }
@@ -30,7 +32,10 @@ function entrySvg(e: LegendEntry, x: number, y: number, pal: Palette): string {
     const d = e.line.vertical ? `M${px(mid)},${px(y - 7)}V${px(y + 5)}` : `M${px(x)},${px(y)}H${px(x + SAMPLE)}`;
     parts.push(el('path', { d, stroke: e.colour, 'stroke-width': e.line.width, 'stroke-dasharray': e.line.dash, fill: 'none' }));
   }
-  if (e.marker) parts.push(el('path', { d: markerPath(e.marker, mid, y, 4), fill: e.colour, stroke: e.colour }));
+  if (e.marker) {
+    const style = e.hollow !== undefined ? { fill: 'none', stroke: e.colour, 'stroke-width': e.hollow } : { fill: e.colour, stroke: e.colour };
+    parts.push(el('path', { 'data-marker': e.hollow !== undefined ? `${e.marker} open` : e.marker, d: markerPath(e.marker, mid, y, e.hollow !== undefined ? 5 : 4), ...style }));
+  }
   parts.push(el('text', { x: x + SAMPLE + 6, y: y + 4, fill: pal.text }, text(e.label)));
   return el('g', { class: 'sl-legend-entry' }, parts);
 }

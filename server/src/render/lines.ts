@@ -17,12 +17,17 @@ import { markerPath, type MarkerShape } from './markers';
 import { paletteFor, POLARIZATION_DASH, POLARIZATION_NAME, type Palette } from './palette';
 import { finiteExtent } from './sampled';
 import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
+import { trimNumber } from '../eval/quantityText';
 import { engineeringUnit, formatIn, formatSI, frequencyUnit, type DisplayUnit } from './units';
 import type { LineComponent, LinesViewData, Polarization, RenderTheme } from './viewData';
 
 const WIDTH = 760;
 const HEIGHT = 420;
 const POLARIZATIONS: Polarization[] = ['pi', 'sigma+', 'sigma-'];
+/** Components weaker than this fraction of the strongest are not drawn (common practice for a visible stick: ~1e-4 of full scale is under a pixel at any figure size). */
+export const VISIBLE_FLOOR = 1e-4;
+/** Height of the row that holds the note of components left out. */
+const NOTE_ROW = 14;
 export const POLARIZATION_MARKER: Record<Polarization, MarkerShape> = { pi: 'circle', 'sigma+': 'up', 'sigma-': 'down' };
 
 function signed(v: number, text: string): string {
@@ -85,9 +90,17 @@ function stick(c: LineComponent, i: number, cx: number, ctx: StickContext): stri
 export function renderLines(d: LinesViewData, theme: RenderTheme): string {
   const pal = paletteFor(theme);
   const idBase = `sl-s${shortHash(`${d.title}|${d.components.length}`)}`;
-  const comps = d.components.filter(
+  const finite = d.components.filter(
     (c) => Number.isFinite(c.offsetHz) && Number.isFinite(shownStrength(c)) && POLARIZATIONS.includes(c.polarization) && !(c.observed === 0),
   );
+  // A component far below the strongest would draw as a line no spectrometer sees: it stays in
+  // the report and the CSV, and the figure says how many it leaves out.
+  const strongestAll = Math.max(0, ...finite.map(shownStrength));
+  const comps = finite.filter((c) => shownStrength(c) >= VISIBLE_FLOOR * strongestAll);
+  const faint = finite.length - comps.length;
+  const faintNote = faint > 0
+    ? `not drawn: ${faint} ${faint === 1 ? 'component' : 'components'} weaker than ${trimNumber(VISIBLE_FLOOR, 2)} × the strongest (down to ${trimNumber(Math.min(...finite.map(shownStrength)) / (strongestAll || 1), 2)} ×), listed in the report`
+    : undefined;
   const fExtent = finiteExtent(comps.map((c) => c.offsetHz));
   const sExtent = finiteExtent(comps.map(shownStrength));
   if (!fExtent || !sExtent) return emptyDiagram('lines', idBase, d.title, 'No line components to draw.', pal);
@@ -111,7 +124,7 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
   const interactive = theme.kind === 'panel';
   const strongest = sExtent[1];
 
-  if (groups.length > 1) return groupedPanels(d, comps, groups, legendSvg, counts, yDomain, { idBase, pal, interactive, strongest });
+  if (groups.length > 1) return groupedPanels(d, comps, groups, legendSvg, counts, yDomain, { idBase, pal, interactive, strongest }, faintNote);
 
   const unit = frequencyUnit(Math.max(Math.abs(fExtent[0]), Math.abs(fExtent[1])), d.unitHz);
   const span = fExtent[1] - fExtent[0];
@@ -141,13 +154,14 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
     if (path) body.push(el('path', { class: 'sl-spectrum', 'data-kind': 'spectrum', d: path, fill: 'none', stroke: pal.total, 'stroke-width': 1.8, 'stroke-linejoin': 'round' }));
   }
 
-  const desc = `Stick spectrum of ${comps.length} line components (${counts.join(', ')}) from Δf = ${formatIn(fExtent[0], unit)} to ${formatIn(fExtent[1], unit)}.`;
+  if (faintNote) body.push(faintNoteSvg(faintNote, box.left, HEIGHT + NOTE_ROW - 8, pal));
+  const desc = `Stick spectrum of ${comps.length} line components (${counts.join(', ')}) from Δf = ${formatIn(fExtent[0], unit)} to ${formatIn(fExtent[1], unit)}${faintNote ? `; ${faintNote}` : ''}.`;
   return svgDocument(
     {
       view: 'lines',
       idBase,
       width: WIDTH,
-      height: HEIGHT,
+      height: HEIGHT + (faintNote ? NOTE_ROW : 0),
       title: d.title,
       desc,
       pal,
@@ -168,6 +182,10 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
 
 const PANEL_GAP = 24;
 
+function faintNoteSvg(note: string, x: number, y: number, pal: Palette): string {
+  return el('text', { class: 'sl-note sl-faint-note', 'data-left-out': note.split(' ')[2], x, y, 'font-size': 10, fill: pal.muted }, text(note));
+}
+
 /** One panel per group, all on the same scale, offsets from each group's centre. */
 function groupedPanels(
   d: LinesViewData,
@@ -177,6 +195,7 @@ function groupedPanels(
   counts: string[],
   yDomain: number[],
   base: Omit<StickContext, 'y' | 'unit'>,
+  faintNote?: string,
 ): string {
   const { pal, idBase } = base;
   const z = zeemanUnitHz(d.fieldT);
@@ -215,15 +234,16 @@ function groupedPanels(
   });
   const unitNote = `top scale: offset in μB·B/h = ${formatSI(z, 'Hz')} (B = ${d.fieldText ?? formatSI(d.fieldT ?? 0, 'T')})`;
   body.push(el('text', { class: 'sl-note', x: right, y: height - 8, 'text-anchor': 'end', 'font-size': 10, fill: pal.muted }, text(unitNote)));
+  if (faintNote) body.push(faintNoteSvg(faintNote, left, height + NOTE_ROW - 8, pal));
   const desc = `Stick spectrum of ${comps.length} line components (${counts.join(', ')}) in ${n} groups, one panel each on a common scale of ±${formatIn(half, unit)} about the group centre: ${groups
     .map((g) => signed(g.centreHz, formatSI(g.centreHz, 'Hz')))
-    .join(', ')}; ${unitNote}.`;
+    .join(', ')}; ${unitNote}${faintNote ? `; ${faintNote}` : ''}.`;
   return svgDocument(
     {
       view: 'lines',
       idBase,
       width: WIDTH,
-      height,
+      height: height + (faintNote ? NOTE_ROW : 0),
       title: d.title,
       desc,
       pal,

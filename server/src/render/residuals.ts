@@ -13,7 +13,7 @@ import { markerPath } from './markers';
 import { paletteFor } from './palette';
 import { finiteExtent } from './sampled';
 import { dataNum, el, px, shortHash, titleEl } from './svgText';
-import { engineeringUnit, formatIn } from './units';
+import { engineeringUnit, formatIn, type DisplayUnit } from './units';
 import type { RenderTheme } from './viewData';
 
 export interface ResidualsViewData {
@@ -35,7 +35,20 @@ const WIDTH = 760;
 /** Fields spanning more than this ratio (all above zero) get a logarithmic B axis. */
 export const LOG_FIELD_SPAN = 100;
 const LEFT = 84;
+/** Stroke of the model's rings, in the plot and in the legend. */
+const RING_WIDTH = 1.5;
 const RIGHT = WIDTH - 20;
+
+/**
+ * The field axis's unit. On a log axis the smallest field must read as well as the largest:
+ * one unit while the smallest point still reads 0.1 or more in it (0.5 to 150 in mT), else each
+ * tick names its own prefix (5 µT … 100 mT).
+ */
+export function fieldAxisUnit(minT: number, maxT: number, log: boolean): DisplayUnit {
+  const unit = engineeringUnit(Math.max(Math.abs(minT), Math.abs(maxT)), 'T');
+  if (!log || minT / unit.factor >= 0.1) return unit;
+  return { factor: 1, symbol: 'T', perTick: 'T' };
+}
 
 export function renderResiduals(d: ResidualsViewData, theme: RenderTheme): string {
   const pal = paletteFor(theme);
@@ -43,17 +56,21 @@ export function renderResiduals(d: ResidualsViewData, theme: RenderTheme): strin
   const n = d.x.length;
   const z = d.x.map((_, i) => (d.sigma[i]! > 0 ? (d.measured[i]! - d.model[i]!) / d.sigma[i]! : d.measured[i]! - d.model[i]!));
   const normalised = d.sigma.every((s) => s > 0);
+  const withSigma = d.sigma.some((s) => s > 0);
   const fx = finiteExtent(d.x);
   const fy = finiteExtent([...d.measured.map((m, i) => m - d.sigma[i]!), ...d.measured.map((m, i) => m + d.sigma[i]!), ...d.model]);
   const fz = finiteExtent([...z, -2.5, 2.5]);
   if (n === 0 || !fx || !fy || !fz) return emptyDiagram('residuals', idBase, d.title, 'No fitted points to draw.', pal);
 
-  const xUnit = d.xKind === 'field' ? engineeringUnit(Math.max(Math.abs(fx[0]), Math.abs(fx[1])), 'T') : d.xKind === 'position' ? engineeringUnit(Math.max(Math.abs(fx[0]), Math.abs(fx[1])), 'm') : { factor: 1, symbol: '' };
+  // Fields from µT to T would crowd every weak-field point into one spot at B = 0: spread over decades, B is logarithmic.
+  const logX = d.xKind === 'field' && fx[0] > 0 && fx[1] / fx[0] > LOG_FIELD_SPAN;
+  const xUnit = d.xKind === 'field' ? fieldAxisUnit(fx[0], fx[1], logX) : d.xKind === 'position' ? engineeringUnit(Math.max(Math.abs(fx[0]), Math.abs(fx[1])), 'm') : { factor: 1, symbol: '' };
   const yUnit = d.unit === 'Hz' ? engineeringUnit(Math.max(Math.abs(fy[0]), Math.abs(fy[1])), 'Hz') : { factor: 1, symbol: d.unit };
   const legend = legendUnderTitle(
     [
-      { label: 'measured ± σ', colour: pal.series[0], marker: 'circle' },
-      d.modelLine ? { label: 'model', colour: pal.series[1], line: { width: 2 } } : { label: 'model', colour: pal.series[1], marker: 'circle' },
+      // The samples are the marks drawn: a dot with its error bar, the model as its line or its rings.
+      { label: withSigma ? 'measured ± σ' : 'measured', colour: pal.series[0], marker: 'circle', ...(withSigma ? { line: { width: 1, vertical: true } } : {}) },
+      d.modelLine ? { label: 'model', colour: pal.series[1], line: { width: 2 } } : { label: 'model', colour: pal.series[1], marker: 'circle', hollow: RING_WIDTH },
     ],
     LEFT,
     RIGHT,
@@ -65,8 +82,6 @@ export function renderResiduals(d: ResidualsViewData, theme: RenderTheme): strin
   const lower: PlotBox = { left: LEFT, right: RIGHT, top: upper.bottom + 26, bottom: upper.bottom + 26 + 130 };
   const height = lower.bottom + 56;
   const pad = (a: number, b: number): [number, number] => (a === b ? [a - (Math.abs(a) || 1) * 0.1, b + (Math.abs(b) || 1) * 0.1] : [a - (b - a) * 0.05, b + (b - a) * 0.05]);
-  // Fields from µT to T would crowd every weak-field point into one spot at B = 0: spread over decades, B is logarithmic.
-  const logX = d.xKind === 'field' && fx[0] > 0 && fx[1] / fx[0] > LOG_FIELD_SPAN;
   const x: Scale = logX ? scaleLog().domain([fx[0] / 1.5, fx[1] * 1.5]).range([LEFT, RIGHT]) : scaleLinear().domain(pad(fx[0], fx[1])).range([LEFT, RIGHT]);
   const y = scaleLinear().domain(pad(fy[0], fy[1])).range([upper.bottom, upper.top]).nice();
   const yz = scaleLinear().domain(pad(fz[0], fz[1])).range([lower.bottom, lower.top]).nice();
@@ -98,7 +113,7 @@ export function renderResiduals(d: ResidualsViewData, theme: RenderTheme): strin
           titleEl(what),
           d.sigma[i]! > 0 ? el('path', { d: `M${px(xi)},${px(y(d.measured[i]! - d.sigma[i]!))}V${px(y(d.measured[i]! + d.sigma[i]!))}`, stroke: pal.series[0], 'stroke-width': 1 }) : '',
           el('path', { d: markerPath('circle', xi, y(d.measured[i]!), r), fill: pal.series[0] }),
-          d.modelLine ? '' : el('path', { d: markerPath('circle', xi, y(d.model[i]!), r + 2), fill: 'none', stroke: pal.series[1], 'stroke-width': 1.5 }),
+          d.modelLine ? '' : el('path', { d: markerPath('circle', xi, y(d.model[i]!), r + 2), fill: 'none', stroke: pal.series[1], 'stroke-width': RING_WIDTH }),
           el('path', { d: markerPath('circle', xi, yz(Math.max(yz.domain()[0]!, Math.min(yz.domain()[1]!, z[i]!))), r), fill: pal.series[0] }),
         ]);
       }),

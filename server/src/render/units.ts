@@ -10,6 +10,8 @@ export interface DisplayUnit {
   /** SI value ÷ factor = displayed number. */
   factor: number;
   symbol: string;
+  /** Set on a log axis over many decades: each tick carries its own prefixed unit (`5 µT`, `100 mT`), this base unit; factor is 1. */
+  perTick?: string;
 }
 
 const PREFIXES: readonly [number, string][] = [
@@ -42,6 +44,10 @@ export function fieldDisplayUnit(unit: FieldUnit): DisplayUnit {
       return { factor: 1e-4, symbol: 'G' };
     case 'mT':
       return { factor: 1e-3, symbol: 'mT' };
+    case 'µT':
+      return { factor: 1e-6, symbol: 'µT' };
+    case 'nT':
+      return { factor: 1e-9, symbol: 'nT' };
     default:
       return { factor: 1, symbol: 'T' };
   }
@@ -53,13 +59,14 @@ export function figureMinus(text: string): string {
 }
 
 /** A value with an SI prefix and unit for titles and read-outs: 6.835e9, 'Hz' → "6.835 GHz". */
-export function formatSI(value: number, unit: string): string {
+export function formatSI(value: number, unit: string, digits = 4): string {
   if (!Number.isFinite(value)) return `— ${unit}`;
-  return figureMinus(prefixedText(value, unit, { digits: 4 }));
+  return figureMinus(prefixedText(value, unit, { digits }));
 }
 
 /** A value in a fixed display unit with 4 significant figures: 0.45 T, 4500 G. */
 export function formatIn(value: number, unit: DisplayUnit): string {
   if (!Number.isFinite(value)) return `— ${unit.symbol}`;
+  if (unit.perTick !== undefined) return formatSI(value, unit.perTick);
   return `${figureMinus(trimNumber(value / unit.factor, 4))} ${unit.symbol}`;
 }

@@ -4,7 +4,8 @@
  * Energies are E/h in Hz, fields in tesla, positions in metres, moments in J/T.
  */
 
-export type FieldUnit = 'T' | 'G' | 'mT';
+/** Units a field axis reads in: the tesla family down to nT (a magnetometer's fields), and gauss. */
+export type FieldUnit = 'T' | 'G' | 'mT' | 'µT' | 'nT';
 
 /** A named field of the file on a field axis. */
 export interface NamedFieldMark {

@@ -16,6 +16,8 @@ export function fieldMapFor(model: SetupModel, req: DiagramRequest, theme: Rende
   const usable = chosen.filter((s) => s.parts.length > 0);
   const broken = chosen.filter((s) => s.parts.length === 0);
   if (usable.length === 0) return { ok: false, message: `${broken.map((s) => `${s.kind} '${s.name}'`).join(', ')} ${broken.length === 1 ? 'has' : 'have'} problems to fix before the field can be drawn; see the Problems view.` };
+  // The file's first field written with a unit sets the family of the |B| axis.
+  const written = model.fields.find((f) => f.tesla?.unit !== undefined)?.tesla?.unit ?? model.magnets.find((m) => m.fieldT?.unit !== undefined)?.fieldT?.unit;
   const clean = cleanField(usable.flatMap((s) => s.parts), sumField);
   const v = fieldMapView(
     usable.map((s) => ({ name: s.name, kind: s.kind, parts: s.parts })),
@@ -23,7 +25,7 @@ export function fieldMapFor(model: SetupModel, req: DiagramRequest, theme: Rende
       const c = clean(p);
       return 'sample' in c ? c.sample : ON_A_CONDUCTOR;
     },
-    { ...(req.fieldUnit ? { fieldUnit: req.fieldUnit } : {}), ...(req.fieldScale ? { scale: req.fieldScale } : {}) },
+    { ...(req.fieldUnit ? { fieldUnit: req.fieldUnit } : {}), ...(written ? { writtenUnit: written } : {}), ...(req.fieldScale ? { scale: req.fieldScale } : {}) },
   );
   if (!v) return { ok: false, message: 'The field sources have nothing to draw; see the Problems view.' };
   const about: [string, string][] = [['file', req.source ?? ''], ['sources', usable.map((s) => s.name).join(' + ')]];

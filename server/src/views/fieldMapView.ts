@@ -6,7 +6,8 @@
  * line across the wires B lies across the line; there the component across it in the drawing
  * plane is drawn, which shows the field's sense and where it turns.
  */
-import type { FieldMapShape, FieldMapSource, FieldMapViewData } from '../render/fieldMap';
+import { magnitudeAxis, type FieldMapShape, type FieldMapSource, type FieldMapViewData } from '../render/fieldMap';
+import { unitFor } from './levelsView';
 import type { FieldUnit } from '../render';
 import type { FieldFunction, FieldSourceSpec, Vec3 } from '../physics/fields/types';
 
@@ -198,8 +199,20 @@ export function sourceShapes(parts: readonly FieldSourceSpec[], line: MapLine): 
 
 export interface FieldMapOptions {
   fieldUnit?: FieldUnit;
+  /** The unit the file wrote its fields in (`field bias = 50 uT`): the |B| axis reads in that family. */
+  writtenUnit?: string;
   scale?: FieldMapViewData['scale'];
   points?: number;
+}
+
+/**
+ * The |B| axis unit, from the top of the axis (a spike next to a wire is cut, so not its peak):
+ * the family the file wrote, else G up to 0.1 T (coils and wires on a bench), T above, and µT or
+ * nT under 1 G (small currents, a magnetometer's shield).
+ */
+function mapUnit(topT: number, written: string | undefined): FieldUnit {
+  if (written !== undefined || topT < 1e-4) return unitFor(topT, written);
+  return topT < 0.1 ? 'G' : 'T';
 }
 
 /** The view of `sources` summed by `field`; undefined when no source has usable parts. */
@@ -240,7 +253,7 @@ export function fieldMapView(sources: readonly MapSource[], field: FieldFunction
     componentT: showAcross ? acrossT : alongT,
     componentName: componentAxis === 's' ? 'B along the line' : componentAxis === 'across' ? 'B across the line' : `B_${componentAxis}`,
     componentAxis,
-    fieldUnit: options.fieldUnit ?? (max < 0.1 ? 'G' : 'T'),
+    fieldUnit: options.fieldUnit ?? mapUnit(magnitudeAxis(magnitudeT, options.scale)?.domain[1] ?? max, options.writtenUnit),
     scale: options.scale ?? 'auto',
     sources: usable.map((s) => ({ name: s.name, kind: s.kind, shapes: sourceShapes(s.parts, line) })),
   };

@@ -94,12 +94,21 @@ export function namedFieldMark(f: WorkingField): NamedFieldMark {
 
 /**
  * The field axis's unit: the family the file wrote its field in (a lab that writes gauss reads
- * gauss), else by the size of the range.
+ * gauss; one that writes µT reads the tesla family, with the prefix that suits the range), else
+ * by the size of the range — µT and nT below 1 G, where a magnetometer works.
  */
 export function unitFor(upperT: number, writtenUnit?: string): FieldUnit {
   if (writtenUnit !== undefined && isGaussUnit(writtenUnit)) return 'G';
-  if (writtenUnit === 'mT' && upperT < 1) return 'mT';
+  if (writtenUnit !== undefined && /^[mµμun]?T$/.test(writtenUnit)) return teslaPrefixFor(upperT);
+  if (upperT < 1e-4) return teslaPrefixFor(upperT);
   if (upperT < 0.01) return 'G';
+  return teslaPrefixFor(upperT);
+}
+
+/** The tesla prefix that puts `upperT` between 1 and 1000. */
+function teslaPrefixFor(upperT: number): FieldUnit {
+  if (upperT < 1e-6) return 'nT';
+  if (upperT < 1e-3) return 'µT';
   if (upperT < 1) return 'mT';
   return 'T';
 }
