@@ -23,9 +23,9 @@ function variant(): PatternViewData {
 
 describe('renderPattern bytes', () => {
   it.each([
-    ['five peaks, export', () => renderPattern(patternFixture(), { kind: 'export' }), 'ee1e839da2907b9d4be5582ee542fe7eedc79be56db272d3a2c2c916e093fefa'],
-    ['five peaks, panel', () => renderPattern(patternFixture(), { kind: 'panel' }), 'deb04bc4794cd7f1d098b6691a3655b894e6a7c5f4e9a78b3ca2e0e48296b1b5'],
-    ['a peak with no states, one at 0, not resolved', () => renderPattern(variant(), { kind: 'export' }), '5b2d0d2c8828e4ea44adc77d9d10d69bdba2d510fb63701f0f3097c7ad5fe3d4'],
+    ['five peaks, export', () => renderPattern(patternFixture(), { kind: 'export' }), '92a19bc816ecc61bc6fda11741428c0d545ade4f64de329a8b0e41275b2288f3'],
+    ['five peaks, panel', () => renderPattern(patternFixture(), { kind: 'panel' }), '19e6611edb72d7ac314da0c52d38c5c50b377b8a74305f4d0726e62fde3742aa'],
+    ['a peak with no states, one at 0, not resolved', () => renderPattern(variant(), { kind: 'export' }), '447c684b26838751f76b8a7b22b2c84a579dfa55a598988f1f99c6c82bae481f'],
   ])('%s', (_name, render, hash) => {
     expect(sha256(render())).toBe(hash);
   });
