@@ -152,21 +152,21 @@ function tridiagonalise() {
 }
 
 /**
- * packReflectors(a, ns, n, out, os): reflector k (column k of `a` below the diagonal) as row k of
- * `out` (stride os ≥ ns), zero before index k + 1 and in the padding, so applyReflectors reads it
- * in aligned pairs and the blocked back-transformation (blockedBackTransform.ts) in fours.
+ * packReflectors(a, ns, n, out): reflector k (column k of `a` below the diagonal) as row k of
+ * `out` (stride ns), zero before index k + 1 and in the padding, so applyReflectors reads it in
+ * aligned pairs.
  */
 function packReflectors() {
   return `
-  (func $packReflectors (export "packReflectors") (param $a i32) (param $ns i32) (param $n i32) (param $out i32) (param $os i32)
+  (func $packReflectors (export "packReflectors") (param $a i32) (param $ns i32) (param $n i32) (param $out i32)
     (local $k i32) (local $i i32) (local $row i32)
     (local.set $k (i32.const 0))
     (block $k_done (loop $kl
       (br_if $k_done (i32.ge_s (local.get $k) (local.get $n)))
-      (local.set $row ${at('(local.get $out)', '(i32.mul (local.get $k) (local.get $os))')})
+      (local.set $row ${at('(local.get $out)', '(i32.mul (local.get $k) (local.get $ns))')})
       (local.set $i (i32.const 0))
       (block $i_done (loop $il
-        (br_if $i_done (i32.ge_s (local.get $i) (local.get $os)))
+        (br_if $i_done (i32.ge_s (local.get $i) (local.get $ns)))
         (f64.store ${at('(local.get $row)', '(local.get $i)')}
           (if (result f64) (i32.and (i32.gt_s (local.get $i) (local.get $k)) (i32.lt_s (local.get $i) (local.get $n)))
             (then ${f64(at('(local.get $a)', '(i32.add (i32.mul (local.get $i) (local.get $ns)) (local.get $k))'))})
@@ -288,16 +288,14 @@ function moves() {
  * (divideConquerTridiagonal.ts). Tiles of 4 rows × 4 columns: eight pairs of sums stay in
  * registers while the inner index runs, each step loading two pairs of b and four entries of a.
  * rows and cols are rounded up to 4, so up to three more rows and columns are read and written.
- * multiplySubtract (same arguments): c ← c − a · b, the blocked back-transformation's update.
  */
-function multiply(name = 'multiply', subtract = false) {
+function multiply() {
   const idx = [0, 1, 2, 3];
   const acc = (q, h) => `$c${q}${h}`;
-  const result = (old, sum) => (subtract ? `(f64x2.sub ${old} (local.get ${sum}))` : `(local.get ${sum})`);
   return `
-  (func $${name} (export "${name}")
+  (func $multiply (export "multiply")
     (param $a i32) (param $as i32) (param $b i32) (param $bs i32) (param $c i32) (param $cs i32) (param $rows i32) (param $inner i32) (param $cols i32)
-    (local $i i32) (local $j i32) (local $l i32) (local $bp i32) (local $ap i32) (local $arow i32) (local $crow i32) (local $cp i32) (local $astep i32) (local $bstep i32) (local $cstep i32)
+    (local $i i32) (local $j i32) (local $l i32) (local $bp i32) (local $ap i32) (local $arow i32) (local $crow i32) (local $astep i32) (local $bstep i32) (local $cstep i32)
     (local $b0 v128) (local $b1 v128) (local $x v128)
     ${idx.map((q) => `(local ${acc(q, 0)} v128) (local ${acc(q, 1)} v128)`).join(' ')}
     (local.set $astep (i32.shl (local.get $as) (i32.const 3)))
@@ -332,9 +330,8 @@ function multiply(name = 'multiply', subtract = false) {
           (br $ll)))
         ${idx
           .map(
-            (q) => `(local.set $cp (i32.add (local.get $crow) (i32.add (i32.shl (local.get $j) (i32.const 3)) (i32.mul (local.get $cstep) (i32.const ${q})))))
-        (v128.store (local.get $cp) ${result('(v128.load (local.get $cp))', acc(q, 0))})
-        (v128.store offset=16 (local.get $cp) ${result('(v128.load offset=16 (local.get $cp))', acc(q, 1))})`,
+            (q) => `(v128.store (i32.add (local.get $crow) (i32.add (i32.shl (local.get $j) (i32.const 3)) (i32.mul (local.get $cstep) (i32.const ${q})))) (local.get ${acc(q, 0)}))
+        (v128.store offset=16 (i32.add (local.get $crow) (i32.add (i32.shl (local.get $j) (i32.const 3)) (i32.mul (local.get $cstep) (i32.const ${q})))) (local.get ${acc(q, 1)}))`,
           )
           .join('\n        ')}
         (local.set $j (i32.add (local.get $j) (i32.const 4)))
@@ -449,7 +446,6 @@ ${packReflectors()}
 ${applyReflectors()}
 ${moves()}
 ${multiply()}
-${multiply('multiplySubtract', true)}
 ${secularSums()}
 ${vectorRows()}
 )

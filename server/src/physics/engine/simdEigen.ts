@@ -11,7 +11,6 @@
  * SIMD is missing, `simdKernelsAvailable()` is false and the caller keeps the JavaScript route,
  * which stays the reference the tests compare against.
  */
-import { backTransformScratch, blockedBackTransform, REFLECTOR_BLOCK } from './blockedBackTransform';
 import { divideConquerTridiagonal, type MergeKernels, productStride } from './divideConquerTridiagonal';
 import { EIGEN_KERNELS_BASE64 } from './eigenKernelsBinary';
 import { tridiagonalValues } from './tridiagonalValues';
@@ -20,19 +19,15 @@ import { tridiagonalEigenpairs } from './tridiagonalVectors';
 /** Rows per tile of the back-transformation kernel (ROW_TILE in eigenKernelsWat.mjs). */
 const ROW_TILE = 4;
 
-/** For the bench: reflectors one at a time (applyReflectors) instead of in blocks. */
-export const backTransformChoice = { blocked: true, skip: false };
-
 interface EigenKernels {
   memory: WebAssembly.Memory;
   tridiagonalise(a: number, ns: number, n: number, d: number, e: number, betas: number, v: number, p: number): void;
-  packReflectors(a: number, ns: number, n: number, out: number, os: number): void;
+  packReflectors(a: number, ns: number, n: number, out: number): void;
   applyReflectors(z: number, ns: number, rows: number, n: number, refl: number, betas: number): void;
   maxAbs(src: number, count: number): number;
   packScaled(src: number, n: number, ns: number, dst: number, factor: number): void;
   unpackTransposed(z: number, ns: number, n: number, out: number): void;
   multiply(a: number, as: number, b: number, bs: number, c: number, cs: number, rows: number, inner: number, cols: number): void;
-  multiplySubtract(a: number, as: number, b: number, bs: number, c: number, cs: number, rows: number, inner: number, cols: number): void;
   secularSums(gaps: number, z2: number, split: number, k: number, t: number, out: number): void;
   weightRatios(prod: number, gaps: number, d: number, from: number, to: number, pole: number): void;
   cauchyRow(gaps: number, w: number, k: number): number;
@@ -73,8 +68,6 @@ export function simdKernelsAvailable(): boolean {
 /** Byte offsets of one call's arrays in the module's memory (order n, even stride ns). */
 interface Layout {
   ns: number;
-  /** Stride of z and the packed reflectors, and z's row count: n rounded up to 4. */
-  zs: number;
   rows: number;
   a: number;
   z: number;
@@ -96,23 +89,14 @@ interface Layout {
   sums: number;
   dk: number;
   zhat: number;
-  /** The blocked back-transformation's scratch (blockedBackTransform.ts). */
-  columns: number;
-  gram: number;
-  tt: number;
-  w: number;
-  wt: number;
 }
 
 function layout(n: number, memory: WebAssembly.Memory): Layout {
   const ns = n + (n & 1);
-  const zs = Math.ceil(n / ROW_TILE) * ROW_TILE;
-  const rows = zs;
+  const rows = Math.ceil(n / ROW_TILE) * ROW_TILE;
+  const square = 8 * ns * Math.max(n, rows);
   const vector = 8 * (ns + 2);
-  const z = 8 * ns * n;
-  // The packed reflectors get four zero rows beyond n (the Gram product reads up to three).
-  const refl = z + 8 * zs * rows;
-  const v = refl + 8 * zs * (n + 4);
+  const v = 3 * square;
   const stage = v + 5 * vector;
   const operand = 8 * (n + 4) * productStride(n);
   const pv = stage + 8 * n * n;
@@ -121,14 +105,8 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
   const sums = z2 + vector;
   const dk = sums + 32;
   const zhat = dk + vector;
-  const columns = zhat + vector;
-  const nb = REFLECTOR_BLOCK;
-  const gram = columns + 8 * zs * nb;
-  const tt = gram + 8 * nb * nb;
-  const w = tt + 8 * nb * nb;
-  const wt = w + 8 * rows * nb;
-  const l = { ns, zs, rows, a: 0, z, refl, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, stage, pv, pg: pv + operand, pw: pv + 2 * operand, gaps, z2, sums, dk, zhat, columns, gram, tt, w, wt };
-  const bytes = columns + 8 * backTransformScratch(zs, rows);
+  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, stage, pv, pg: pv + operand, pw: pv + 2 * operand, gaps, z2, sums, dk, zhat };
+  const bytes = zhat + vector;
   const pages = Math.ceil((bytes - memory.buffer.byteLength) / 65536);
   if (pages > 0) memory.grow(pages);
   return l;
@@ -157,23 +135,18 @@ export function simdEigenpairs(a: Float64Array, n: number, values: Float64Array,
   const d = heap.subarray(l.d / 8, l.d / 8 + n);
   const e = heap.subarray(l.e / 8, l.e / 8 + n);
   const stage = heap.subarray(l.stage / 8, l.stage / 8 + n * n);
-  const zs = l.zs;
-  // z's padding rows and columns must be finite: the products multiply them by zeros.
-  heap.fill(0, l.z / 8, l.z / 8 + l.rows * zs);
-  // Row k of z (stride zs): the tridiagonal's k-th eigenvector.
+  heap.fill(0, (l.z + 8 * n * ns) / 8, (l.z + 8 * l.rows * ns) / 8);
+  // Row k of z (stride ns): the tridiagonal's k-th eigenvector.
   if (divide) {
-    if (!divideConquerTridiagonal(d, e, n, values, heap.subarray(l.z / 8, l.z / 8 + n * zs), zs, wasmMergeKernels(k, heap, l, n))) return false;
+    if (!divideConquerTridiagonal(d, e, n, values, heap.subarray(l.z / 8, l.z / 8 + n * ns), ns, wasmMergeKernels(k, heap, l, n))) return false;
   } else {
     if (!tridiagonalEigenpairs(d, e, n, values, stage, tridiagonalValues)) return false;
-    k.packScaled(l.stage, n, zs, l.z, 1);
+    k.packScaled(l.stage, n, ns, l.z, 1);
   }
-  k.packReflectors(l.a, ns, n, l.refl, zs);
-  heap.fill(0, l.refl / 8 + n * zs, l.refl / 8 + (n + 4) * zs);
-  if (backTransformChoice.skip) {}
-  else if (backTransformChoice.blocked) blockedBackTransform(k, heap, l, n);
-  else k.applyReflectors(l.z, zs, l.rows, n, l.refl, l.betas);
+  k.packReflectors(l.a, ns, n, l.refl);
+  k.applyReflectors(l.z, ns, l.rows, n, l.refl, l.betas);
   // Rows of z to columns of `vectors`.
-  k.unpackTransposed(l.z, zs, n, l.stage);
+  k.unpackTransposed(l.z, ns, n, l.stage);
   vectors.set(stage);
   for (let i = 0; i < n; i++) values[i] *= scale;
   return true;
