@@ -228,25 +228,29 @@ function applyReflectors() {
 }
 
 /**
- * maxAbs(src, count) → max |src[i]| (NaN if any entry is NaN); packScaled(src, n, ns, dst,
+ * maxAbs(src, count) → max |src[i]| (NaN if any entry is NaN or infinite); packScaled(src, n, ns, dst,
  * factor): dst[i·ns + j] = factor · src[i·n + j], zero in the padding column; unpackTransposed(z,
  * ns, n, out): out[i·n + r] = z[r·ns + i]. The O(n²) moves into and out of the kernels' layout.
  */
 function moves() {
   return `
   (func $maxAbs (export "maxAbs") (param $src i32) (param $count i32) (result f64)
-    (local $i i32) (local $m v128) (local $x f64)
+    (local $i i32) (local $m v128) (local $bad v128) (local $x f64)
+    ;; pmax is one instruction (f64x2.max, with its NaN rules, is several on x64) but skips NaN:
+    ;; x · 0 is NaN exactly for a NaN or infinite x, so $bad collects those.
     (local.set $m (v128.const f64x2 0 0))
+    (local.set $bad (v128.const f64x2 0 0))
     (local.set $i (i32.const 0))
     (block $done (loop $l
       (br_if $done (i32.gt_s (i32.add (local.get $i) (i32.const 2)) (local.get $count)))
-      (local.set $m (f64x2.max (local.get $m) (f64x2.abs (v128.load ${at('(local.get $src)', '(local.get $i)')}))))
+      (local.set $m (f64x2.pmax (local.get $m) (f64x2.abs (v128.load ${at('(local.get $src)', '(local.get $i)')}))))
+      (local.set $bad (f64x2.add (local.get $bad) (f64x2.mul (v128.load ${at('(local.get $src)', '(local.get $i)')}) (v128.const f64x2 0 0))))
       (local.set $i (i32.add (local.get $i) (i32.const 2)))
       (br $l)))
     (local.set $x (f64.max (f64x2.extract_lane 0 (local.get $m)) (f64x2.extract_lane 1 (local.get $m))))
-    (if (result f64) (i32.lt_s (local.get $i) (local.get $count))
-      (then (f64.max (local.get $x) (f64.abs ${f64(at('(local.get $src)', '(local.get $i)'))})))
-      (else (local.get $x))))
+    (if (i32.lt_s (local.get $i) (local.get $count))
+      (then (local.set $x (f64.max (local.get $x) (f64.abs ${f64(at('(local.get $src)', '(local.get $i)'))})))))
+    (f64.add (local.get $x) ${sumLanes('(local.get $bad)')}))
   (func $packScaled (export "packScaled") (param $src i32) (param $n i32) (param $ns i32) (param $dst i32) (param $factor f64)
     (local $i i32) (local $j i32) (local $from i32) (local $to i32)
     (local.set $i (i32.const 0))
@@ -437,6 +441,42 @@ function vectorRows() {
       (else (local.get $t))))`;
 }
 
+/**
+ * copyRows(from, fs, fromRows, to, ts, toRows, count, cols): for q < count, `cols` doubles of row
+ * fromRows[q] (i32) of the matrix at `from` (stride fs) to row toRows[q] of the one at `to`
+ * (stride ts); scatterScaled(src, dst, index, count, scale): dst[index[j]] = scale · src[j]. The
+ * merges' O(k²) gathers and scatters (divideConquerTridiagonal.ts), one call per batch of rows.
+ */
+function rowMoves() {
+  return `
+  (func $copyRows (export "copyRows") (param $from i32) (param $fs i32) (param $fromRows i32) (param $to i32) (param $ts i32) (param $toRows i32) (param $count i32) (param $cols i32)
+    (local $q i32) (local $j i32) (local $src i32) (local $dst i32)
+    (local.set $q (i32.const 0))
+    (block $q_done (loop $ql
+      (br_if $q_done (i32.ge_s (local.get $q) (local.get $count)))
+      (local.set $src (i32.add (local.get $from) (i32.shl (i32.mul (i32.load ${`(i32.add (local.get $fromRows) (i32.shl (local.get $q) (i32.const 2)))`}) (local.get $fs)) (i32.const 3))))
+      (local.set $dst (i32.add (local.get $to) (i32.shl (i32.mul (i32.load ${`(i32.add (local.get $toRows) (i32.shl (local.get $q) (i32.const 2)))`}) (local.get $ts)) (i32.const 3))))
+      (local.set $j (i32.const 0))
+      (block $j_done (loop $jl
+        (br_if $j_done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $cols)))
+        (v128.store ${at('(local.get $dst)', '(local.get $j)')} (v128.load ${at('(local.get $src)', '(local.get $j)')}))
+        (local.set $j (i32.add (local.get $j) (i32.const 2)))
+        (br $jl)))
+      (if (i32.lt_s (local.get $j) (local.get $cols))
+        (then (f64.store ${at('(local.get $dst)', '(local.get $j)')} ${f64(at('(local.get $src)', '(local.get $j)'))})))
+      (local.set $q (i32.add (local.get $q) (i32.const 1)))
+      (br $ql))))
+  (func $scatterScaled (export "scatterScaled") (param $src i32) (param $dst i32) (param $index i32) (param $count i32) (param $scale f64)
+    (local $j i32)
+    (local.set $j (i32.const 0))
+    (block $done (loop $l
+      (br_if $done (i32.ge_s (local.get $j) (local.get $count)))
+      (f64.store ${at('(local.get $dst)', '(i32.load (i32.add (local.get $index) (i32.shl (local.get $j) (i32.const 2))))')}
+        (f64.mul (local.get $scale) ${f64(at('(local.get $src)', '(local.get $j)'))}))
+      (local.set $j (i32.add (local.get $j) (i32.const 1)))
+      (br $l))))`;
+}
+
 /** The whole module: one exported memory (grown by the caller) and the kernels. */
 export function eigenKernelsWat() {
   return `(module
@@ -448,6 +488,7 @@ ${moves()}
 ${multiply()}
 ${secularSums()}
 ${vectorRows()}
+${rowMoves()}
 )
 `;
 }
