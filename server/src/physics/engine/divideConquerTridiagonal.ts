@@ -43,18 +43,17 @@ export interface MergeKernels extends SecularSums {
   /** zhat_j ← zhat_j · gaps[row + j] / (dk_j − pole) for from ≤ j < to. */
   weightRatios(row: number, from: number, to: number, pole: number): void;
   /** gaps[row + j] ← zhat_j / gaps[row + j] for j < k; returns the sum of their squares. */
-  cauchyRow(row: number, k: number): number;
+  /** x_j = zhat_j / gaps[row + j] (left in gaps), then v[at + column[j]] = x_j / ‖x‖ for j < k: one new vector. */
+  cauchyRow(row: number, k: number, at: number): void;
   v: Float64Array;
   g: Float64Array;
   w: Float64Array;
-  /** Row indices for copyRows, and v's column of each kept component for scatterRow (n each). */
+  /** Row indices for copyRows, and v's column of each kept component for cauchyRow (n each). */
   fromRows: Int32Array;
   toRows: Int32Array;
   column: Int32Array;
   /** For q < count: `cols` entries of row fromRows[q] of `from` (stride fs, from fromAt) to row toRows[q] of `to` (stride ts, from toAt). */
   copyRows(from: Float64Array, fromAt: number, fs: number, to: Float64Array, toAt: number, ts: number, count: number, cols: number): void;
-  /** v[at + column[j]] = scale · gaps[row + j] for j < k. */
-  scatterRow(row: number, k: number, scale: number, at: number): void;
   multiply(rows: number, inner: number, cols: number, aOff: number, as: number, bOff: number, bs: number, cOff: number, cs: number): void;
 }
 
@@ -317,13 +316,10 @@ function newVectors(s: Scratch, z: Float64Array, zs: number, products: MergeKern
     column[j] = type === 1 ? upperNext++ : type === 3 ? mixedNext++ : lowerNext++;
   }
   const { g, w } = products;
-  for (let i = 0; i < k; i++) {
-    const row = i * k;
-    products.scatterRow(row, k, 1 / Math.sqrt(products.cauchyRow(row, k)), i * ps);
-  }
+  for (let i = 0; i < k; i++) products.cauchyRow(i * k, k, i * ps);
   for (let j = 0; j < k; j++) fromRows[j] = at + kept[j];
   // column (the target rows of g) doubles as toRows here.
-  products.toRows.set(column.subarray(0, k));
+  for (let j = 0; j < k; j++) products.toRows[j] = column[j];
   copySplitRows(products, z, at, zs, g, 0, ps, k, m1, m2, b0);
   const upper = k1 + k2;
   const lower = k - k1;
@@ -405,20 +401,18 @@ export function javascriptMergeKernels(n: number): MergeKernels {
     copyRows(from, fromAt, fs, to, toAt, ts, count, cols) {
       copyRowsByLoops(fromRows, toRows, from, fromAt, fs, to, toAt, ts, count, cols);
     },
-    scatterRow(row, k, scale, at) {
-      for (let j = 0; j < k; j++) v[at + column[j]] = scale * gaps[row + j];
-    },
     weightRatios(row, from, to, pole) {
       for (let j = from; j < to; j++) zhat[j] *= gaps[row + j] / (dk[j] - pole);
     },
-    cauchyRow(row, k) {
+    cauchyRow(row, k, at) {
       let sum = 0;
       for (let j = 0; j < k; j++) {
         const x = zhat[j] / gaps[row + j];
         gaps[row + j] = x;
         sum += x * x;
       }
-      return sum;
+      const scale = 1 / Math.sqrt(sum);
+      for (let j = 0; j < k; j++) v[at + column[j]] = scale * gaps[row + j];
     },
     v,
     g,

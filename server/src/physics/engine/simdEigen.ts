@@ -27,12 +27,11 @@ interface EigenKernels {
   packScaled(src: number, n: number, ns: number, dst: number, factor: number): void;
   unpackTransposed(z: number, ns: number, n: number, out: number): void;
   multiply(a: number, as: number, b: number, bs: number, c: number, cs: number, rows: number, inner: number, cols: number): void;
-  secularSums(gaps: number, z2: number, split: number, k: number, t: number, out: number): void;
-  weightRatios(prod: number, gaps: number, d: number, from: number, to: number, pole: number): void;
-  cauchyRow(gaps: number, w: number, k: number): number;
-  poleOffsets(gaps: number, d: number, k: number, pole: number, t: number): void;
+  secularSums(gaps: number, z2: number, split: number, k: number, args: number, out: number): void;
+  weightRatios(prod: number, gaps: number, d: number, from: number, to: number, args: number): void;
+  cauchyRow(gaps: number, w: number, k: number, dst: number, index: number): void;
+  poleOffsets(gaps: number, d: number, k: number, args: number): void;
   copyRows(from: number, fs: number, fromRows: number, to: number, ts: number, toRows: number, count: number, cols: number): void;
-  scatterScaled(src: number, dst: number, index: number, count: number, scale: number): void;
 }
 
 /** undefined: not tried yet; null: this runtime cannot run the module. */
@@ -98,7 +97,7 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
   const gaps = pv + 3 * operand;
   const z2 = gaps + 8 * n * n;
   const sums = z2 + vector;
-  const dk = sums + 32;
+  const dk = sums + 48;
   const zhat = dk + vector;
   const fromRows = zhat + vector;
   const toRows = fromRows + vector;
@@ -155,7 +154,7 @@ export function simdMergeKernels(n: number): MergeKernels | null {
   return wasmMergeKernels(k, new Float64Array(k.memory.buffer), l, n);
 }
 
-/** The merges' loops on the module's memory, by the module's kernels (multiply, secularSums, poleOffsets, weightRatios, cauchyRow). */
+/** The merges' loops on the module's memory, by the module's kernels (multiply, secularSums, poleOffsets, weightRatios, cauchyRow, copyRows). */
 function wasmMergeKernels(k: EigenKernels, heap: Float64Array, l: Layout, n: number): MergeKernels {
   const size = (n + 4) * productStride(n);
   const { pv, pg, pw, gaps, z2, sums, dk, zhat, fromRows, toRows, column } = l;
@@ -163,6 +162,9 @@ function wasmMergeKernels(k: EigenKernels, heap: Float64Array, l: Layout, n: num
   const rowsFrom = ints.subarray(fromRows / 4, fromRows / 4 + n);
   const rowsTo = ints.subarray(toRows / 4, toRows / 4 + n);
   const memory = heap.buffer;
+  // The kernels' double arguments, passed through memory (eigenKernelsWat.mjs says why).
+  const argsAt = sums + 32;
+  const args = heap.subarray(argsAt / 8, argsAt / 8 + 2);
   return {
     fromRows: rowsFrom,
     toRows: rowsTo,
@@ -172,25 +174,27 @@ function wasmMergeKernels(k: EigenKernels, heap: Float64Array, l: Layout, n: num
       if (from.buffer === memory && to.buffer === memory) k.copyRows(from.byteOffset + 8 * fromAt, fs, fromRows, to.byteOffset + 8 * toAt, ts, toRows, count, cols);
       else copyRowsByLoops(rowsFrom, rowsTo, from, fromAt, fs, to, toAt, ts, count, cols);
     },
-    scatterRow(row, count, scale, at) {
-      k.scatterScaled(gaps + 8 * row, pv + 8 * at, column, count, scale);
-    },
+
     dk: heap.subarray(dk / 8, dk / 8 + n),
     zhat: heap.subarray(zhat / 8, zhat / 8 + n),
     weightRatios(row, from, to, pole) {
-      k.weightRatios(zhat, gaps + 8 * row, dk, from, to, pole);
+      args[0] = pole;
+      k.weightRatios(zhat, gaps + 8 * row, dk, from, to, argsAt);
     },
-    cauchyRow(row, count) {
-      return k.cauchyRow(gaps + 8 * row, zhat, count);
+    cauchyRow(row, count, at) {
+      k.cauchyRow(gaps + 8 * row, zhat, count, pv + 8 * at, column);
     },
     gaps: heap.subarray(gaps / 8, gaps / 8 + n * n),
     z2: heap.subarray(z2 / 8, z2 / 8 + n),
     out: heap.subarray(sums / 8, sums / 8 + 4),
     offsets(row, count, pole, t) {
-      k.poleOffsets(gaps + 8 * row, dk, count, pole, t);
+      args[0] = pole;
+      args[1] = t;
+      k.poleOffsets(gaps + 8 * row, dk, count, argsAt);
     },
     sums(row, split, count, t) {
-      k.secularSums(gaps + 8 * row, z2, split, count, t, sums);
+      args[0] = t;
+      k.secularSums(gaps + 8 * row, z2, split, count, argsAt, sums);
     },
     v: heap.subarray(pv / 8, pv / 8 + size),
     g: heap.subarray(pg / 8, pg / 8 + size),
