@@ -42,7 +42,6 @@ export interface MergeKernels extends SecularSums {
   zhat: Float64Array;
   /** zhat_j ← zhat_j · gaps[row + j] / (dk_j − pole) for from ≤ j < to. */
   weightRatios(row: number, from: number, to: number, pole: number): void;
-  /** gaps[row + j] ← zhat_j / gaps[row + j] for j < k; returns the sum of their squares. */
   /** x_j = zhat_j / gaps[row + j] (left in gaps), then v[at + column[j]] = x_j / ‖x‖ for j < k: one new vector. */
   cauchyRow(row: number, k: number, at: number): void;
   v: Float64Array;
@@ -317,9 +316,11 @@ function newVectors(s: Scratch, z: Float64Array, zs: number, products: MergeKern
   }
   const { g, w } = products;
   for (let i = 0; i < k; i++) products.cauchyRow(i * k, k, i * ps);
-  for (let j = 0; j < k; j++) fromRows[j] = at + kept[j];
-  // column (the target rows of g) doubles as toRows here.
-  for (let j = 0; j < k; j++) products.toRows[j] = column[j];
+  // The pieces' vectors of the kept components into g, row column[j] for component j.
+  for (let j = 0; j < k; j++) {
+    fromRows[j] = at + kept[j];
+    products.toRows[j] = column[j];
+  }
   copySplitRows(products, z, at, zs, g, 0, ps, k, m1, m2, b0);
   const upper = k1 + k2;
   const lower = k - k1;
