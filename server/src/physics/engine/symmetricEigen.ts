@@ -23,8 +23,8 @@ export const INVERSE_ITERATION_MIN_ORDER = 32;
 /**
  * From this order on, where WebAssembly runs, blocks take the WebAssembly route (simdEigen.ts:
  * reduction and back-transformation as SIMD kernels, the tridiagonal by divide and conquer):
- * 1.7× faster than the QR route at order 9, 2.0–2.2× at 10–14 (bench/eigen.bench.ts,
- * docs/engine.md), so every order above JACOBI_MAX_ORDER takes it. The module is compiled on
+ * 1.4–1.8× faster than the QR route at order 9, 1.3–2.3× at 10–14 (four runs of
+ * bench/eigen.bench.ts, docs/engine.md), so every order above JACOBI_MAX_ORDER takes it. The module is compiled on
  * the first such block.
  */
 export const SIMD_MIN_ORDER = JACOBI_MAX_ORDER + 1;
