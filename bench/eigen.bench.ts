@@ -178,15 +178,17 @@ function againstLapack(): void {
 }
 
 /**
- * Where the WebAssembly route starts to pay (SIMD_MIN_ORDER) and where its divide and conquer
- * does (DIVIDE_MIN_ORDER): Householder + QR with the rotations accumulated (the route below
- * INVERSE_ITERATION_MIN_ORDER), the JavaScript inverse-iteration route and the WebAssembly one
- * with either tridiagonal solver, on the same matrices, CPU µs per call.
+ * Where the WebAssembly route starts to pay (SIMD_MIN_ORDER): Householder + QR with the rotations
+ * accumulated (the route below INVERSE_ITERATION_MIN_ORDER and the engine's from
+ * JACOBI_MAX_ORDER + 1 up to SIMD_MIN_ORDER), the JavaScript inverse-iteration route and the
+ * WebAssembly route (kernels plus divide and conquer) on the same matrices, CPU µs per call.
+ * (The WebAssembly route with inverse iteration, which divide and conquer beat 1.4–2.2× at every
+ * order from 12 to 96, is gone: docs/engine.md.)
  */
 function simdCrossover(): void {
   if (!simdKernelsAvailable()) return;
-  console.log('\ncrossover, CPU µs per call (medians of 5): order | QR, rotations accumulated | JS inverse iteration | WebAssembly kernels, inverse iteration | WebAssembly kernels, divide and conquer');
-  for (const n of [12, 16, 20, 24, 28, 32, 40, 48, 64, 96]) {
+  console.log(`\ncrossover (engine: WebAssembly from order ${SIMD_MIN_ORDER}), CPU µs per call (medians of 5): order | QR, rotations accumulated | JS inverse iteration | WebAssembly kernels, divide and conquer | QR ÷ WebAssembly`);
+  for (const n of [9, 10, 12, 14, 16, 20, 24, 28, 32, 40, 48, 64, 96]) {
     const rnd = lcg(7 + n);
     const mats = Array.from({ length: Math.max(4, Math.round(2000 / n)) }, () => randomSymmetric(n, rnd));
     const work = new Float64Array(n * n);
@@ -201,9 +203,8 @@ function simdCrossover(): void {
       work.set(m);
       householderInverseIterationInPlace(work, n, values, vectors);
     }, mats, n);
-    const simd = cpuPerCall((m) => simdEigenpairs(m, n, values, vectors, false), mats, n);
-    const divide = cpuPerCall((m) => simdEigenpairs(m, n, values, vectors, true), mats, n);
-    console.log(`${String(n).padStart(5)} | ${qr.median.toFixed(1).padStart(8)} | ${js.median.toFixed(1).padStart(8)} | ${simd.median.toFixed(1).padStart(8)} | ${divide.median.toFixed(1).padStart(8)}`);
+    const simd = cpuPerCall((m) => simdEigenpairs(m, n, values, vectors), mats, n);
+    console.log(`${String(n).padStart(5)} | ${qr.median.toFixed(1).padStart(8)} | ${js.median.toFixed(1).padStart(8)} | ${simd.median.toFixed(1).padStart(8)} | ${(qr.median / simd.median).toFixed(2)}`);
   }
 }
 

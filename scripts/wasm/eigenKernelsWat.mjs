@@ -228,25 +228,29 @@ function applyReflectors() {
 }
 
 /**
- * maxAbs(src, count) → max |src[i]| (NaN if any entry is NaN); packScaled(src, n, ns, dst,
+ * maxAbs(src, count) → max |src[i]| (NaN if any entry is NaN or infinite); packScaled(src, n, ns, dst,
  * factor): dst[i·ns + j] = factor · src[i·n + j], zero in the padding column; unpackTransposed(z,
  * ns, n, out): out[i·n + r] = z[r·ns + i]. The O(n²) moves into and out of the kernels' layout.
  */
 function moves() {
   return `
   (func $maxAbs (export "maxAbs") (param $src i32) (param $count i32) (result f64)
-    (local $i i32) (local $m v128) (local $x f64)
+    (local $i i32) (local $m v128) (local $bad v128) (local $x f64)
+    ;; pmax is one instruction (f64x2.max, with its NaN rules, is several on x64) but skips NaN:
+    ;; x · 0 is NaN exactly for a NaN or infinite x, so $bad collects those.
     (local.set $m (v128.const f64x2 0 0))
+    (local.set $bad (v128.const f64x2 0 0))
     (local.set $i (i32.const 0))
     (block $done (loop $l
       (br_if $done (i32.gt_s (i32.add (local.get $i) (i32.const 2)) (local.get $count)))
-      (local.set $m (f64x2.max (local.get $m) (f64x2.abs (v128.load ${at('(local.get $src)', '(local.get $i)')}))))
+      (local.set $m (f64x2.pmax (local.get $m) (f64x2.abs (v128.load ${at('(local.get $src)', '(local.get $i)')}))))
+      (local.set $bad (f64x2.add (local.get $bad) (f64x2.mul (v128.load ${at('(local.get $src)', '(local.get $i)')}) (v128.const f64x2 0 0))))
       (local.set $i (i32.add (local.get $i) (i32.const 2)))
       (br $l)))
     (local.set $x (f64.max (f64x2.extract_lane 0 (local.get $m)) (f64x2.extract_lane 1 (local.get $m))))
-    (if (result f64) (i32.lt_s (local.get $i) (local.get $count))
-      (then (f64.max (local.get $x) (f64.abs ${f64(at('(local.get $src)', '(local.get $i)'))})))
-      (else (local.get $x))))
+    (if (i32.lt_s (local.get $i) (local.get $count))
+      (then (local.set $x (f64.max (local.get $x) (f64.abs ${f64(at('(local.get $src)', '(local.get $i)'))})))))
+    (f64.add (local.get $x) ${sumLanes('(local.get $bad)')}))
   (func $packScaled (export "packScaled") (param $src i32) (param $n i32) (param $ns i32) (param $dst i32) (param $factor f64)
     (local $i i32) (local $j i32) (local $from i32) (local $to i32)
     (local.set $i (i32.const 0))
@@ -342,8 +346,8 @@ function multiply() {
 }
 
 /**
- * secularSums(gaps, z2, split, k, t, out): the two halves of the secular function's sum at the
- * offset t (secularRoots.ts): out[0] = Σ_{j≤split} z2_j r_j and out[1] = Σ_{j≤split} z2_j r_j²
+ * secularSums(gaps, z2, split, k, args, out): the two halves of the secular function's sum at the
+ * offset t = args[0] (secularRoots.ts): out[0] = Σ_{j≤split} z2_j r_j and out[1] = Σ_{j≤split} z2_j r_j²
  * with r_j = 1/(gaps_j − t), out[2], out[3] the same over split < j < k. Pairs of terms per
  * operation, two divisions in one.
  */
@@ -368,8 +372,9 @@ function secularSums() {
         (local.set $x (f64.mul ${f64(at('(local.get $z2)', '(local.get $j)'))} (local.get $y)))
         (local.set $dx (f64.mul (local.get $x) (local.get $y)))))`;
   return `
-  (func $secularSums (export "secularSums") (param $gaps i32) (param $z2 i32) (param $split i32) (param $k i32) (param $t f64) (param $out i32)
-    (local $j i32) (local $tt v128) (local $r v128) (local $w v128) (local $s v128) (local $ds v128) (local $x f64) (local $dx f64) (local $y f64)
+  (func $secularSums (export "secularSums") (param $gaps i32) (param $z2 i32) (param $split i32) (param $k i32) (param $args i32) (param $out i32)
+    (local $j i32) (local $t f64) (local $tt v128) (local $r v128) (local $w v128) (local $s v128) (local $ds v128) (local $x f64) (local $dx f64) (local $y f64)
+    (local.set $t (f64.load (local.get $args)))
     (local.set $tt (f64x2.splat (local.get $t)))
     ${half('left', '(i32.const 0)', '(i32.add (local.get $split) (i32.const 1))', '$s', '$ds')}
     (f64.store (local.get $out) (f64.add (local.get $x) ${sumLanes('(local.get $s)')}))
@@ -381,16 +386,21 @@ function secularSums() {
 }
 
 /**
- * weightRatios(prod, gaps, d, from, to, pole): prod_j ← prod_j · gaps_j / (d_j − pole) for
- * from ≤ j < to, one row's factors of the Gu–Eisenstat weights; poleOffsets(gaps, d, k, pole, t):
- * gaps_j ← (d_j − pole) − t, a root's row of d_j − λ (secularRoots.ts); cauchyRow(gaps, w, k) → Σ x_j²
- * with gaps_j ← x_j = w_j / gaps_j, one new vector before normalising (divideConquerTridiagonal.ts).
+ * weightRatios(prod, gaps, d, from, to, args): prod_j ← prod_j · gaps_j / (d_j − pole) for
+ * from ≤ j < to, one row's factors of the Gu–Eisenstat weights; poleOffsets(gaps, d, k, args):
+ * gaps_j ← (d_j − pole) − t, a root's row of d_j − λ (secularRoots.ts); cauchyRow(gaps, w, k, dst,
+ * index): x_j = w_j / gaps_j, then dst[index[j]] = x_j / ‖x‖ (i32 indices), one new vector
+ * (divideConquerTridiagonal.ts). The doubles pole (args[0]) and t (args[1]) come through memory and
+ * no double is returned: Node 20 calls these kernels through V8's generic JS-to-WebAssembly
+ * wrapper, which can box doubles, thousands of calls per solve (no change in the collector's
+ * share was measurable either way).
  */
 function vectorRows() {
   const G = (j) => at('(local.get $gaps)', j);
   return `
-  (func $weightRatios (export "weightRatios") (param $prod i32) (param $gaps i32) (param $d i32) (param $from i32) (param $to i32) (param $pole f64)
-    (local $j i32) (local $pp v128)
+  (func $weightRatios (export "weightRatios") (param $prod i32) (param $gaps i32) (param $d i32) (param $from i32) (param $to i32) (param $args i32)
+    (local $j i32) (local $pp v128) (local $pole f64)
+    (local.set $pole (f64.load (local.get $args)))
     (local.set $pp (f64x2.splat (local.get $pole)))
     (local.set $j (local.get $from))
     (block $done (loop $l
@@ -405,8 +415,10 @@ function vectorRows() {
         (f64.store ${at('(local.get $prod)', '(local.get $j)')}
           (f64.mul ${f64(at('(local.get $prod)', '(local.get $j)'))}
             (f64.div ${f64(G('(local.get $j)'))} (f64.sub ${f64(at('(local.get $d)', '(local.get $j)'))} (local.get $pole))))))))
-  (func $poleOffsets (export "poleOffsets") (param $gaps i32) (param $d i32) (param $k i32) (param $pole f64) (param $t f64)
-    (local $j i32) (local $pp v128) (local $tt v128)
+  (func $poleOffsets (export "poleOffsets") (param $gaps i32) (param $d i32) (param $k i32) (param $args i32)
+    (local $j i32) (local $pp v128) (local $tt v128) (local $pole f64) (local $t f64)
+    (local.set $pole (f64.load (local.get $args)))
+    (local.set $t (f64.load offset=8 (local.get $args)))
     (local.set $pp (f64x2.splat (local.get $pole)))
     (local.set $tt (f64x2.splat (local.get $t)))
     (local.set $j (i32.const 0))
@@ -417,7 +429,7 @@ function vectorRows() {
       (br $l)))
     (if (i32.lt_s (local.get $j) (local.get $k))
       (then (f64.store ${G('(local.get $j)')} (f64.sub (f64.sub ${f64(at('(local.get $d)', '(local.get $j)'))} (local.get $pole)) (local.get $t))))))
-  (func $cauchyRow (export "cauchyRow") (param $gaps i32) (param $w i32) (param $k i32) (result f64)
+  (func $cauchyRow (export "cauchyRow") (param $gaps i32) (param $w i32) (param $k i32) (param $dst i32) (param $index i32)
     (local $j i32) (local $x v128) (local $s v128) (local $y f64) (local $t f64)
     (local.set $s (v128.const f64x2 0 0))
     (local.set $j (i32.const 0))
@@ -429,12 +441,45 @@ function vectorRows() {
       (local.set $j (i32.add (local.get $j) (i32.const 2)))
       (br $l)))
     (local.set $t ${sumLanes('(local.get $s)')})
-    (if (result f64) (i32.lt_s (local.get $j) (local.get $k))
+    (if (i32.lt_s (local.get $j) (local.get $k))
       (then
         (local.set $y (f64.div ${f64(at('(local.get $w)', '(local.get $j)'))} ${f64(G('(local.get $j)'))}))
         (f64.store ${G('(local.get $j)')} (local.get $y))
-        (f64.add (local.get $t) (f64.mul (local.get $y) (local.get $y))))
-      (else (local.get $t))))`;
+        (local.set $t (f64.add (local.get $t) (f64.mul (local.get $y) (local.get $y))))))
+    (local.set $t (f64.div (f64.const 1) (f64.sqrt (local.get $t))))
+    (local.set $j (i32.const 0))
+    (block $s_done (loop $sl
+      (br_if $s_done (i32.ge_s (local.get $j) (local.get $k)))
+      (f64.store ${at('(local.get $dst)', '(i32.load (i32.add (local.get $index) (i32.shl (local.get $j) (i32.const 2))))')}
+        (f64.mul (local.get $t) ${f64(G('(local.get $j)'))}))
+      (local.set $j (i32.add (local.get $j) (i32.const 1)))
+      (br $sl))))`;
+}
+
+/**
+ * copyRows(from, fs, fromRows, to, ts, toRows, count, cols): for q < count, `cols` doubles of row
+ * fromRows[q] (i32) of the matrix at `from` (stride fs) to row toRows[q] of the one at `to`
+ * (stride ts): the merges' gathers of rows (divideConquerTridiagonal.ts), one call per batch.
+ */
+function copyRows() {
+  return `
+  (func $copyRows (export "copyRows") (param $from i32) (param $fs i32) (param $fromRows i32) (param $to i32) (param $ts i32) (param $toRows i32) (param $count i32) (param $cols i32)
+    (local $q i32) (local $j i32) (local $src i32) (local $dst i32)
+    (local.set $q (i32.const 0))
+    (block $q_done (loop $ql
+      (br_if $q_done (i32.ge_s (local.get $q) (local.get $count)))
+      (local.set $src (i32.add (local.get $from) (i32.shl (i32.mul (i32.load ${`(i32.add (local.get $fromRows) (i32.shl (local.get $q) (i32.const 2)))`}) (local.get $fs)) (i32.const 3))))
+      (local.set $dst (i32.add (local.get $to) (i32.shl (i32.mul (i32.load ${`(i32.add (local.get $toRows) (i32.shl (local.get $q) (i32.const 2)))`}) (local.get $ts)) (i32.const 3))))
+      (local.set $j (i32.const 0))
+      (block $j_done (loop $jl
+        (br_if $j_done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $cols)))
+        (v128.store ${at('(local.get $dst)', '(local.get $j)')} (v128.load ${at('(local.get $src)', '(local.get $j)')}))
+        (local.set $j (i32.add (local.get $j) (i32.const 2)))
+        (br $jl)))
+      (if (i32.lt_s (local.get $j) (local.get $cols))
+        (then (f64.store ${at('(local.get $dst)', '(local.get $j)')} ${f64(at('(local.get $src)', '(local.get $j)'))})))
+      (local.set $q (i32.add (local.get $q) (i32.const 1)))
+      (br $ql))))`;
 }
 
 /** The whole module: one exported memory (grown by the caller) and the kernels. */
@@ -448,6 +493,7 @@ ${moves()}
 ${multiply()}
 ${secularSums()}
 ${vectorRows()}
+${copyRows()}
 )
 `;
 }

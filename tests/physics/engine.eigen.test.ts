@@ -52,7 +52,7 @@ const SOLVERS: [string, Solve][] = [
   ['Jacobi', jacobi],
   ['Householder + QR', householder],
   ['Householder + inverse iteration', inverseIteration],
-  ['Householder + inverse iteration, WebAssembly kernels', simdKernels],
+  ['WebAssembly kernels, divide and conquer', simdKernels],
   ['engine dispatcher', dispatcher],
 ];
 

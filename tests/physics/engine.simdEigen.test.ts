@@ -10,9 +10,9 @@ import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { householderInverseIterationInPlace } from '../../server/src/physics/engine/householderInverseIteration';
-import { tridiagonalQr } from '../../server/src/physics/engine/householderQl';
+import { householderQlInPlace, tridiagonalQr } from '../../server/src/physics/engine/householderQl';
 import { simdEigenpairs, simdKernelsAvailable } from '../../server/src/physics/engine/simdEigen';
-import { SIMD_MIN_ORDER, symmetricEigen } from '../../server/src/physics/engine/symmetricEigen';
+import { JACOBI_MAX_ORDER, SIMD_MIN_ORDER, symmetricEigen } from '../../server/src/physics/engine/symmetricEigen';
 import { tridiagonalValues } from '../../server/src/physics/engine/tridiagonalValues';
 import { tridiagonalEigenpairs } from '../../server/src/physics/engine/tridiagonalVectors';
 import { lcg, quality } from './eigenQuality';
@@ -49,9 +49,28 @@ describe('WebAssembly kernels of the large-block eigen-solver', () => {
     expect(readFileSync(OUTPUT as string, 'utf8')).toBe(await (eigenKernelsSource as () => Promise<string>)());
   });
 
-  it('runs on this Node (WebAssembly SIMD), so the dispatcher takes it from SIMD_MIN_ORDER on', () => {
+  it('runs on this Node (WebAssembly SIMD), so the dispatcher takes it from SIMD_MIN_ORDER on, every order above Jacobi’s', () => {
     expect(simdKernelsAvailable()).toBe(true);
-    expect(SIMD_MIN_ORDER).toBeGreaterThanOrEqual(16);
+    expect(SIMD_MIN_ORDER).toBe(JACOBI_MAX_ORDER + 1);
+  });
+
+  it('orders 9–15 (moved from the QR route): the QR route’s eigenvalues within n·ε·‖A‖_F, residual and orthogonality below n·ε', () => {
+    for (let n = SIMD_MIN_ORDER; n < 16; n++) {
+      for (const [seed, weight] of [[n, 0], [100 + n, 10], [200 + n, 1e6]]) {
+        const a = randomSymmetric(n, seed, weight, 1);
+        const values = new Float64Array(n);
+        const vectors = new Float64Array(n * n);
+        expect(symmetricEigen(a.slice(), n, values, vectors)).toBe(true);
+        const qr = new Float64Array(n);
+        const s = () => new Float64Array(n);
+        expect(householderQlInPlace(a.slice(), n, qr, new Float64Array(n * n), s(), s(), s())).toBe(true);
+        qr.sort();
+        const q = quality(a, n, values, vectors);
+        for (let i = 0; i < n; i++) expect(Math.abs(values[i] - qr[i])).toBeLessThanOrEqual(n * EPS * q.norm);
+        expect(q.residual).toBeLessThan(n * EPS);
+        expect(q.orthogonality).toBeLessThan(n * EPS);
+      }
+    }
   });
 
   it('property: random symmetric matrices of order 32–300 give the JavaScript route’s eigenvalues, no larger residual, orthonormal vectors', () => {
@@ -120,6 +139,12 @@ describe('WebAssembly kernels of the large-block eigen-solver', () => {
     const bad = randomSymmetric(40, 5, 1, 1);
     bad[3 * 40 + 7] = Number.NaN;
     expect(simdEigenpairs(bad, 40, new Float64Array(40), new Float64Array(1600))).toBe(false);
+    // maxAbs takes the largest entry by pmax, which skips NaN: a lone NaN or infinity must still be seen.
+    for (const x of [Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY]) {
+      const one = randomSymmetric(40, 6, 1, 1);
+      one[40 * 40 - 1] = x;
+      expect(simdEigenpairs(one, 40, new Float64Array(40), new Float64Array(1600))).toBe(false);
+    }
   });
 
   it('the dispatcher gives the WebAssembly route’s results from SIMD_MIN_ORDER on', () => {

@@ -42,11 +42,17 @@ export interface MergeKernels extends SecularSums {
   zhat: Float64Array;
   /** zhat_j ← zhat_j · gaps[row + j] / (dk_j − pole) for from ≤ j < to. */
   weightRatios(row: number, from: number, to: number, pole: number): void;
-  /** gaps[row + j] ← zhat_j / gaps[row + j] for j < k; returns the sum of their squares. */
-  cauchyRow(row: number, k: number): number;
+  /** x_j = zhat_j / gaps[row + j] (left in gaps), then v[at + column[j]] = x_j / ‖x‖ for j < k: one new vector. */
+  cauchyRow(row: number, k: number, at: number): void;
   v: Float64Array;
   g: Float64Array;
   w: Float64Array;
+  /** Row indices for copyRows, and v's column of each kept component for cauchyRow (n each). */
+  fromRows: Int32Array;
+  toRows: Int32Array;
+  column: Int32Array;
+  /** For q < count: `cols` entries of row fromRows[q] of `from` (stride fs, from fromAt) to row toRows[q] of `to` (stride ts, from toAt). */
+  copyRows(from: Float64Array, fromAt: number, fs: number, to: Float64Array, toAt: number, ts: number, count: number, cols: number): void;
   multiply(rows: number, inner: number, cols: number, aOff: number, as: number, bOff: number, bs: number, cOff: number, cs: number): void;
 }
 
@@ -66,7 +72,7 @@ interface Scratch {
   zk: Float64Array;
   origin: Int32Array;
   tau: Float64Array;
-  column: Int32Array;
+  target: Int32Array;
   merged: Float64Array;
   leaf: Float64Array;
   leafD: Float64Array;
@@ -93,7 +99,7 @@ function scratch(n: number): Scratch {
     zk: new Float64Array(n),
     origin: new Int32Array(n),
     tau: new Float64Array(n),
-    column: new Int32Array(n),
+    target: new Int32Array(n),
     merged: new Float64Array(n),
     leaf: new Float64Array(L * L),
     leafD: new Float64Array(L),
@@ -242,24 +248,32 @@ function merge(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, 
   if (k > 0 && !newVectors(s, z, zs, products, at, m1, m2, k, rho, ps, b0)) return false;
   sortDropped(d, at, dropped, nDropped);
   // Pieces' vectors of the dropped components, after the kept ones in g.
-  const { g, w } = products;
-  for (let q = 0; q < nDropped; q++) copySplitRow(z, (at + dropped[q]) * zs + at, g, (k + q) * ps, m1, m2, b0);
-  // Both lists ascending: merge them into the rows of z.
-  const { merged, origin, tau } = s;
+  const { g, w, fromRows, toRows } = products;
+  for (let q = 0; q < nDropped; q++) {
+    fromRows[q] = at + dropped[q];
+    toRows[q] = k + q;
+  }
+  copySplitRows(products, z, at, zs, g, 0, ps, nDropped, m1, m2, b0);
+  // Both lists ascending: merge them into the rows of z (kept rows' targets in toRows, dropped ones' in target).
+  const { merged, origin, tau, target } = s;
   const { dk } = products;
   for (let r = 0, i = 0, q = 0; r < m; r++) {
-    const row = (at + r) * zs + at;
     const lambda = i < k ? dk[origin[i]] + tau[i] : Number.POSITIVE_INFINITY;
     if (q >= nDropped || lambda <= d[at + dropped[q]]) {
       merged[r] = lambda;
-      joinSplitRow(w, i * ps, z, row, m1, m2, b0);
-      i++;
+      fromRows[i] = i;
+      toRows[i++] = at + r;
     } else {
       merged[r] = d[at + dropped[q]];
-      joinSplitRow(g, (k + q) * ps, z, row, m1, m2, b0);
-      q++;
+      target[q++] = at + r;
     }
   }
+  joinSplitRows(products, w, 0, ps, z, at, zs, k, m1, m2, b0);
+  for (let q = 0; q < nDropped; q++) {
+    fromRows[q] = k + q;
+    toRows[q] = target[q];
+  }
+  joinSplitRows(products, g, 0, ps, z, at, zs, nDropped, m1, m2, b0);
   d.set(merged.subarray(0, m), at);
   return true;
 }
@@ -270,8 +284,8 @@ function merge(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, 
  * products with the pieces' vectors (rows of w, upper columns at 0, lower ones at b0).
  */
 function newVectors(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, at: number, m1: number, m2: number, k: number, rho: number, ps: number, b0: number): boolean {
-  const { d, z: zv, types, kept, zk, origin, tau, column } = s;
-  const { gaps, z2, dk, zhat } = products;
+  const { d, z: zv, types, kept, zk, origin, tau } = s;
+  const { gaps, z2, dk, zhat, column, fromRows } = products;
   for (let j = 0; j < k; j++) {
     dk[j] = d[at + kept[j]];
     zk[j] = zv[kept[j]];
@@ -292,18 +306,22 @@ function newVectors(s: Scratch, z: Float64Array, zs: number, products: MergeKern
     if (types[kept[j]] === 1) k1++;
     else if (types[kept[j]] === 3) k2++;
   }
-  const next = [0, k1, k1 + k2];
+  // Columns of v: upper-only components first, then mixed, then lower-only.
+  let upperNext = 0;
+  let mixedNext = k1;
+  let lowerNext = k1 + k2;
   for (let j = 0; j < k; j++) {
     const type = types[kept[j]];
-    column[j] = next[type === 1 ? 0 : type === 3 ? 1 : 2]++;
+    column[j] = type === 1 ? upperNext++ : type === 3 ? mixedNext++ : lowerNext++;
   }
-  const { v, g, w } = products;
-  for (let i = 0; i < k; i++) {
-    const row = i * k;
-    const scale = 1 / Math.sqrt(products.cauchyRow(row, k));
-    for (let j = 0; j < k; j++) v[i * ps + column[j]] = scale * gaps[row + j];
+  const { g, w } = products;
+  for (let i = 0; i < k; i++) products.cauchyRow(i * k, k, i * ps);
+  // The pieces' vectors of the kept components into g, row column[j] for component j.
+  for (let j = 0; j < k; j++) {
+    fromRows[j] = at + kept[j];
+    products.toRows[j] = column[j];
   }
-  for (let j = 0; j < k; j++) copySplitRow(z, (at + kept[j]) * zs + at, g, column[j] * ps, m1, m2, b0);
+  copySplitRows(products, z, at, zs, g, 0, ps, k, m1, m2, b0);
   const upper = k1 + k2;
   const lower = k - k1;
   if (upper > 0) products.multiply(k, upper, m1, 0, ps, 0, ps, 0, ps);
@@ -324,18 +342,27 @@ function rotateRows(z: Float64Array, p: number, q: number, m: number, c: number,
 }
 
 /**
- * A row of the piece (m1 upper, m2 lower entries) into g with the lower part moved to b0. Plain
- * loops: a subarray per row would be garbage for the collector.
+ * Rows fromRows[q] of the piece (m1 upper, m2 lower entries from column `at` of z) to rows toRows[q]
+ * of g or w, the lower part moved to column b0.
  */
-function copySplitRow(z: Float64Array, from: number, g: Float64Array, to: number, m1: number, m2: number, b0: number): void {
-  for (let i = 0; i < m1; i++) g[to + i] = z[from + i];
-  for (let i = 0; i < m2; i++) g[to + b0 + i] = z[from + m1 + i];
+function copySplitRows(p: MergeKernels, z: Float64Array, at: number, zs: number, g: Float64Array, gAt: number, ps: number, count: number, m1: number, m2: number, b0: number): void {
+  p.copyRows(z, at, zs, g, gAt, ps, count, m1);
+  p.copyRows(z, at + m1, zs, g, gAt + b0, ps, count, m2);
 }
 
-/** The inverse of copySplitRow. */
-function joinSplitRow(g: Float64Array, from: number, z: Float64Array, to: number, m1: number, m2: number, b0: number): void {
-  for (let i = 0; i < m1; i++) z[to + i] = g[from + i];
-  for (let i = 0; i < m2; i++) z[to + m1 + i] = g[from + b0 + i];
+/** The inverse of copySplitRows. */
+function joinSplitRows(p: MergeKernels, g: Float64Array, gAt: number, ps: number, z: Float64Array, at: number, zs: number, count: number, m1: number, m2: number, b0: number): void {
+  p.copyRows(g, gAt, ps, z, at, zs, count, m1);
+  p.copyRows(g, gAt + b0, ps, z, at + m1, zs, count, m2);
+}
+
+/** copyRows in plain JavaScript (MergeKernels), for either kernel set's arrays. */
+export function copyRowsByLoops(fromRows: Int32Array, toRows: Int32Array, from: Float64Array, fromAt: number, fs: number, to: Float64Array, toAt: number, ts: number, count: number, cols: number): void {
+  for (let q = 0; q < count; q++) {
+    const src = fromAt + fromRows[q] * fs;
+    const dst = toAt + toRows[q] * ts;
+    for (let i = 0; i < cols; i++) to[dst + i] = from[src + i];
+  }
 }
 
 /** Insertion sort of the dropped components by value (nearly sorted already). */
@@ -362,21 +389,31 @@ export function javascriptMergeKernels(n: number): MergeKernels {
   const sums = javascriptSecularSums(n, dk);
   const { gaps } = sums;
   const zhat = new Float64Array(n);
+  const fromRows = new Int32Array(n);
+  const toRows = new Int32Array(n);
+  const column = new Int32Array(n);
   return {
     ...sums,
     dk,
     zhat,
+    fromRows,
+    toRows,
+    column,
+    copyRows(from, fromAt, fs, to, toAt, ts, count, cols) {
+      copyRowsByLoops(fromRows, toRows, from, fromAt, fs, to, toAt, ts, count, cols);
+    },
     weightRatios(row, from, to, pole) {
       for (let j = from; j < to; j++) zhat[j] *= gaps[row + j] / (dk[j] - pole);
     },
-    cauchyRow(row, k) {
+    cauchyRow(row, k, at) {
       let sum = 0;
       for (let j = 0; j < k; j++) {
         const x = zhat[j] / gaps[row + j];
         gaps[row + j] = x;
         sum += x * x;
       }
-      return sum;
+      const scale = 1 / Math.sqrt(sum);
+      for (let j = 0; j < k; j++) v[at + column[j]] = scale * gaps[row + j];
     },
     v,
     g,

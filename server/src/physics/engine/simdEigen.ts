@@ -5,16 +5,15 @@
  * scripts/wasm/eigenKernelsWat.mjs and embedded in eigenKernelsBinary.ts). The tridiagonal's
  * eigenpairs come from divide and conquer (divideConquerTridiagonal.ts), whose secular-equation
  * loops and matrix products are kernels of the same module; the JavaScript route keeps QR values
- * and inverse iteration (tridiagonalVectors.ts).
+ * and inverse iteration (tridiagonalVectors.ts). Inverse iteration behind the kernels lost to
+ * divide and conquer at every order from 12 to 96 (1.4–2.2×, docs/engine.md) and was removed.
  *
  * The module is compiled on the first large block, not at start-up; where WebAssembly or its
  * SIMD is missing, `simdKernelsAvailable()` is false and the caller keeps the JavaScript route,
  * which stays the reference the tests compare against.
  */
-import { divideConquerTridiagonal, type MergeKernels, productStride } from './divideConquerTridiagonal';
+import { copyRowsByLoops, divideConquerTridiagonal, type MergeKernels, productStride } from './divideConquerTridiagonal';
 import { EIGEN_KERNELS_BASE64 } from './eigenKernelsBinary';
-import { tridiagonalValues } from './tridiagonalValues';
-import { tridiagonalEigenpairs } from './tridiagonalVectors';
 
 /** Rows per tile of the back-transformation kernel (ROW_TILE in eigenKernelsWat.mjs). */
 const ROW_TILE = 4;
@@ -28,21 +27,12 @@ interface EigenKernels {
   packScaled(src: number, n: number, ns: number, dst: number, factor: number): void;
   unpackTransposed(z: number, ns: number, n: number, out: number): void;
   multiply(a: number, as: number, b: number, bs: number, c: number, cs: number, rows: number, inner: number, cols: number): void;
-  secularSums(gaps: number, z2: number, split: number, k: number, t: number, out: number): void;
-  weightRatios(prod: number, gaps: number, d: number, from: number, to: number, pole: number): void;
-  cauchyRow(gaps: number, w: number, k: number): number;
-  poleOffsets(gaps: number, d: number, k: number, pole: number, t: number): void;
+  secularSums(gaps: number, z2: number, split: number, k: number, args: number, out: number): void;
+  weightRatios(prod: number, gaps: number, d: number, from: number, to: number, args: number): void;
+  cauchyRow(gaps: number, w: number, k: number, dst: number, index: number): void;
+  poleOffsets(gaps: number, d: number, k: number, args: number): void;
+  copyRows(from: number, fs: number, fromRows: number, to: number, ts: number, toRows: number, count: number, cols: number): void;
 }
-
-/**
- * From this order on the tridiagonal's eigenpairs come from divide and conquer
- * (divideConquerTridiagonal.ts, its loops in the kernels below); below it from QR values and
- * inverse iteration (tridiagonalVectors.ts). Divide and conquer was faster at every order the
- * bench measures (12–96: 1.4–2.2×; bench/eigen.bench.ts, docs/engine.md), so the whole
- * WebAssembly route (SIMD_MIN_ORDER = 16 on) takes it; pieces of up to DIVIDE_LEAF_ORDER are a
- * single QR with the rotations accumulated.
- */
-export const DIVIDE_MIN_ORDER = 16;
 
 /** undefined: not tried yet; null: this runtime cannot run the module. */
 let kernels: EigenKernels | null | undefined;
@@ -89,6 +79,10 @@ interface Layout {
   sums: number;
   dk: number;
   zhat: number;
+  /** The merges' row and column indices (n int32 each). */
+  fromRows: number;
+  toRows: number;
+  column: number;
 }
 
 function layout(n: number, memory: WebAssembly.Memory): Layout {
@@ -103,10 +97,13 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
   const gaps = pv + 3 * operand;
   const z2 = gaps + 8 * n * n;
   const sums = z2 + vector;
-  const dk = sums + 32;
+  const dk = sums + 48;
   const zhat = dk + vector;
-  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, stage, pv, pg: pv + operand, pw: pv + 2 * operand, gaps, z2, sums, dk, zhat };
-  const bytes = zhat + vector;
+  const fromRows = zhat + vector;
+  const toRows = fromRows + vector;
+  const column = toRows + vector;
+  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, stage, pv, pg: pv + operand, pw: pv + 2 * operand, gaps, z2, sums, dk, zhat, fromRows, toRows, column };
+  const bytes = column + vector;
   const pages = Math.ceil((bytes - memory.buffer.byteLength) / 65536);
   if (pages > 0) memory.grow(pages);
   return l;
@@ -115,10 +112,9 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
 /**
  * Eigenpairs of the symmetric `a` (order n ≥ 2, not modified) into `values` (ascending) and the
  * columns of `vectors`, as householderInverseIterationInPlace. Returns false on non-finite
- * input or no convergence; call only when simdKernelsAvailable(). `divide` chooses the
- * tridiagonal's solver (default: divide and conquer from DIVIDE_MIN_ORDER; for the bench).
+ * input or no convergence; call only when simdKernelsAvailable().
  */
-export function simdEigenpairs(a: Float64Array, n: number, values: Float64Array, vectors: Float64Array, divide = n >= DIVIDE_MIN_ORDER): boolean {
+export function simdEigenpairs(a: Float64Array, n: number, values: Float64Array, vectors: Float64Array): boolean {
   const k = loadKernels();
   if (k === null) throw new Error('WebAssembly eigen kernels unavailable');
   const l = layout(n, k.memory);
@@ -137,12 +133,7 @@ export function simdEigenpairs(a: Float64Array, n: number, values: Float64Array,
   const stage = heap.subarray(l.stage / 8, l.stage / 8 + n * n);
   heap.fill(0, (l.z + 8 * n * ns) / 8, (l.z + 8 * l.rows * ns) / 8);
   // Row k of z (stride ns): the tridiagonal's k-th eigenvector.
-  if (divide) {
-    if (!divideConquerTridiagonal(d, e, n, values, heap.subarray(l.z / 8, l.z / 8 + n * ns), ns, wasmMergeKernels(k, heap, l, n))) return false;
-  } else {
-    if (!tridiagonalEigenpairs(d, e, n, values, stage, tridiagonalValues)) return false;
-    k.packScaled(l.stage, n, ns, l.z, 1);
-  }
+  if (!divideConquerTridiagonal(d, e, n, values, heap.subarray(l.z / 8, l.z / 8 + n * ns), ns, wasmMergeKernels(k, heap, l, n))) return false;
   k.packReflectors(l.a, ns, n, l.refl);
   k.applyReflectors(l.z, ns, l.rows, n, l.refl, l.betas);
   // Rows of z to columns of `vectors`.
@@ -163,27 +154,47 @@ export function simdMergeKernels(n: number): MergeKernels | null {
   return wasmMergeKernels(k, new Float64Array(k.memory.buffer), l, n);
 }
 
-/** The merges' loops on the module's memory, by the module's kernels (multiply, secularSums, poleOffsets, weightRatios, cauchyRow). */
+/** The merges' loops on the module's memory, by the module's kernels (multiply, secularSums, poleOffsets, weightRatios, cauchyRow, copyRows). */
 function wasmMergeKernels(k: EigenKernels, heap: Float64Array, l: Layout, n: number): MergeKernels {
   const size = (n + 4) * productStride(n);
-  const { pv, pg, pw, gaps, z2, sums, dk, zhat } = l;
+  const { pv, pg, pw, gaps, z2, sums, dk, zhat, fromRows, toRows, column } = l;
+  const ints = new Int32Array(k.memory.buffer);
+  const rowsFrom = ints.subarray(fromRows / 4, fromRows / 4 + n);
+  const rowsTo = ints.subarray(toRows / 4, toRows / 4 + n);
+  const memory = heap.buffer;
+  // The kernels' double arguments, passed through memory (eigenKernelsWat.mjs says why).
+  const argsAt = sums + 32;
+  const args = heap.subarray(argsAt / 8, argsAt / 8 + 2);
   return {
+    fromRows: rowsFrom,
+    toRows: rowsTo,
+    column: ints.subarray(column / 4, column / 4 + n),
+    copyRows(from, fromAt, fs, to, toAt, ts, count, cols) {
+      // The tests also run these kernels on a z outside the module's memory.
+      if (from.buffer === memory && to.buffer === memory) k.copyRows(from.byteOffset + 8 * fromAt, fs, fromRows, to.byteOffset + 8 * toAt, ts, toRows, count, cols);
+      else copyRowsByLoops(rowsFrom, rowsTo, from, fromAt, fs, to, toAt, ts, count, cols);
+    },
+
     dk: heap.subarray(dk / 8, dk / 8 + n),
     zhat: heap.subarray(zhat / 8, zhat / 8 + n),
     weightRatios(row, from, to, pole) {
-      k.weightRatios(zhat, gaps + 8 * row, dk, from, to, pole);
+      args[0] = pole;
+      k.weightRatios(zhat, gaps + 8 * row, dk, from, to, argsAt);
     },
-    cauchyRow(row, count) {
-      return k.cauchyRow(gaps + 8 * row, zhat, count);
+    cauchyRow(row, count, at) {
+      k.cauchyRow(gaps + 8 * row, zhat, count, pv + 8 * at, column);
     },
     gaps: heap.subarray(gaps / 8, gaps / 8 + n * n),
     z2: heap.subarray(z2 / 8, z2 / 8 + n),
     out: heap.subarray(sums / 8, sums / 8 + 4),
     offsets(row, count, pole, t) {
-      k.poleOffsets(gaps + 8 * row, dk, count, pole, t);
+      args[0] = pole;
+      args[1] = t;
+      k.poleOffsets(gaps + 8 * row, dk, count, argsAt);
     },
     sums(row, split, count, t) {
-      k.secularSums(gaps + 8 * row, z2, split, count, t, sums);
+      args[0] = t;
+      k.secularSums(gaps + 8 * row, z2, split, count, argsAt, sums);
     },
     v: heap.subarray(pv / 8, pv / 8 + size),
     g: heap.subarray(pg / 8, pg / 8 + size),

@@ -21,13 +21,13 @@ export const JACOBI_MAX_ORDER = 8;
  */
 export const INVERSE_ITERATION_MIN_ORDER = 32;
 /**
- * From this order on, where WebAssembly runs, blocks take the inverse-iteration route with its
- * reduction and back-transformation as SIMD kernels (simdEigen.ts): 1.1–1.4× faster than the
- * QR route at order 16 (which keeps order 12 and below, where it is 1.1–1.2× faster), 1.8–4×
- * faster than the JavaScript loops from 32 on (bench/eigen.bench.ts, docs/engine.md). The
- * module is compiled on the first such block.
+ * From this order on, where WebAssembly runs, blocks take the WebAssembly route (simdEigen.ts:
+ * reduction and back-transformation as SIMD kernels, the tridiagonal by divide and conquer):
+ * 1.4–1.8× faster than the QR route at order 9, 1.3–2.3× at 10–14 (four runs of
+ * bench/eigen.bench.ts, docs/engine.md), so every order above JACOBI_MAX_ORDER takes it. The module is compiled on
+ * the first such block.
  */
-export const SIMD_MIN_ORDER = 16;
+export const SIMD_MIN_ORDER = JACOBI_MAX_ORDER + 1;
 
 /**
  * Eigenpairs of the symmetric matrix `a` (destroyed), sorted ascending:
