@@ -57,6 +57,30 @@ describe('sublevel diff: version pairs', () => {
     expect(peak.new_value as number).toBeCloseTo(-71.56e-6, 8);
   });
 
+  it('one merged peak → two peaks, unresolved → resolved: the peak splits, and only the last step resolves', () => {
+    // 1 T/m: all eight sublevels in one peak (not resolved); 10 T/m: two peaks that overlap; 18 T/m: resolved.
+    const split = diffJson(`${F}/beam-one-peak.sublevel`, `${F}/beam-weak-gradient.sublevel`);
+    expect(reported(split.diff)).toEqual([
+      'magnet selector: gradient: 1 T/m → 10 T/m',
+      'magnet selector: new warning beam-unresolved',
+      `beam main: peak [${HIGH_PEAK} + ${LOW_PEAK}]: present → gone`,
+      `beam main: peak [${HIGH_PEAK}]: absent → new`,
+      `beam main: peak [${LOW_PEAK}]: absent → new`,
+      'beam main: gone warning beam-one-peak',
+    ]);
+    const resolved = diffJson(`${F}/beam-weak-gradient.sublevel`, `${F}/beam-old.sublevel`);
+    expect(reported(resolved.diff)).toContain('beam main: all peaks resolved: no → yes');
+    const whole = diffJson(`${F}/beam-one-peak.sublevel`, `${F}/beam-old.sublevel`);
+    expect(reported(whole.diff)).toEqual([
+      'magnet selector: gradient: 1 T/m → 18 T/m',
+      'beam main: all peaks resolved: no → yes',
+      `beam main: peak [${HIGH_PEAK} + ${LOW_PEAK}]: present → gone`,
+      `beam main: peak [${HIGH_PEAK}]: absent → new`,
+      `beam main: peak [${LOW_PEAK}]: absent → new`,
+      'beam main: gone warning beam-one-peak',
+    ]);
+  });
+
   it("a level's A changed: its interval, energies and the clock resonance move; g-factors and moments beyond 1e-4 μ_B do not", () => {
     const { code, diff } = diffJson(`${F}/hydrogen-old.sublevel`, `${F}/hydrogen-A-changed.sublevel`);
     expect(code).toBe(1);

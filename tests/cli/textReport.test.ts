@@ -78,8 +78,10 @@ describe('eval text report', () => {
     expect(text).not.toMatch(/NaN|Infinity/);
     expect(text).toMatch(/F=2, m_F=\+2 .* no atoms/);
     expect(json).not.toMatch(/NaN|Infinity/);
-    // null appears only as the documented 'no peak' of an unpopulated sublevel.
-    expect(json.match(/null/g)?.length).toBe(json.match(/"peak_m": null/g)?.length);
+    // null appears only as the documented 'no peak' of an unpopulated sublevel, and as the documented
+    // 'none up to 100×' of the resolving values: the three F = 1 sublevels land in one merged peak.
+    expect(json.match(/"resolving_(gradient_T_per_m|magnet_length_m|drift_m)": null/g)).toHaveLength(3);
+    expect(json.match(/null/g)?.length).toBe(json.match(/"peak_m": null/g)!.length + 3);
   });
 
   it('the JSON gives an unpopulated sublevel a null peak and stays valid', () => {

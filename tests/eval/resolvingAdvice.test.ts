@@ -6,6 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
+import { beamVerdict } from '../../server/src/features/hover/beamSection';
 import type { BeamResult } from '../../server/src/eval/resultTypes';
 import { magnetAndBeam, speciesX } from '../fixtures/ovenBeam';
 
@@ -14,13 +15,16 @@ const setup = (level: string, gradient: string): string => speciesX('52 u', leve
 const SLIT_LIMITED = setup('3S1', '0.5 T/m');
 /** Overlap from the speed spread: J = 2, peaks at 1 and 2 units of deflection, each as broad as 1/v². */
 const SPEED_LIMITED = setup('3P2', '100 T/m');
+/** All three sublevels in one merged peak: m_J = ±1 deflect by ±6 µm (mean) against a 60 µm image. */
+const ONE_PEAK = setup('3S1', '0.1 T/m');
 
 function beamOf(text: string): BeamResult {
   return analyze(text).result!.beams[0]!;
 }
 
+/** The worst dip of the pairs; 1 (no dip) for one peak. */
 function worst(b: BeamResult): number {
-  return Math.max(...b.pairs.map((p) => p.dip_ratio));
+  return b.pairs.length === 0 ? 1 : Math.max(...b.pairs.map((p) => p.dip_ratio));
 }
 
 /** The file with one advised change written into it. */
@@ -41,6 +45,7 @@ describe('beam advice names only changes that deepen the dip', () => {
   for (const [name, text] of [
     ['slit-limited J = 1 beam', SLIT_LIMITED],
     ['speed-limited J = 2 beam', SPEED_LIMITED],
+    ['J = 1 beam in one merged peak', ONE_PEAK],
   ] as const) {
     it(`${name}: each advised change, written into the file, gives the dip it states`, () => {
       const b = beamOf(text);
@@ -82,5 +87,40 @@ describe('beam advice names only changes that deepen the dip', () => {
     expect(changes).toContain('speed_spread');
     expect(b.resolving_advice).not.toMatch(/slit/);
     expect(b.resolving_advice).toMatch(/velocity-selected source with an rms speed spread of 10 % of the mean gives \d+ % and resolves every pair/);
+  });
+});
+
+describe('one peak: merged (not resolved) or nothing to resolve', () => {
+  it('a merged peak is not resolved: its own warning at the beam, with the advice, and the hover says so', () => {
+    const a = analyze(ONE_PEAK);
+    const b = a.result!.beams[0]!;
+    expect(b.peaks).toHaveLength(1);
+    expect(b.all_resolved).toBe(false);
+    expect(b.worst_dip_ratio).toBe(1);
+    const p = a.problems.find((x) => x.code === 'beam-one-peak')!;
+    expect(p.severity).toBe('warning');
+    expect(a.problems.some((x) => x.code === 'beam-unresolved')).toBe(false);
+    // At the beam's name (line 12 of the file: `beam b`).
+    expect(p.range.start.line).toBe(ONE_PEAK.split('\n').indexOf('beam b'));
+    expect(p.message).toMatch(/^beam 'b': all 3 sublevels with atoms land in one peak: their mean deflections differ by at most [\d.]+ [nµ]m against an image width \(FWHM\) of [\d.]+ µm, so the detector does not separate them\. No dip now, one peak \(resolved at ≤ 80 %\); computed on this setup: a gradient of [\d.]+ T\/m gives peaks with a worst dip of 8\d % and resolves every pair/);
+    expect(p.message).toContain(b.resolving_advice!);
+    expect(beamVerdict(b)).toBe(`1 peak: the sublevels deflect differently but land together, not resolved. ${b.resolving_advice}`);
+    // The same gradient as found from 0.5 T/m, where the peaks are apart but unresolved (pinned in
+    // resolvingAdvicePinned.test.ts: 3.1619 T/m), within the search's relative tolerance 1e-3.
+    expect(Math.abs(b.resolving_gradient_T_per_m! / 3.1619077616529565 - 1)).toBeLessThan(2e-3);
+    // The gradient offered, written into the file, splits the peak into resolved ones.
+    const fixed = beamOf(ONE_PEAK.replace(/gradient = .*/, `gradient = ${b.resolving_gradient_T_per_m} T/m`));
+    expect(fixed.peaks.length).toBeGreaterThan(1);
+    expect(fixed.all_resolved).toBe(true);
+  });
+
+  it('sublevels that all deflect alike (J = 0) have nothing to resolve: resolved, no warning, and said so', () => {
+    const a = analyze(setup('1S0', '100 T/m'));
+    const b = a.result!.beams[0]!;
+    expect(b.peaks).toHaveLength(1);
+    expect(b.all_resolved).toBe(true);
+    expect(b.resolving_advice).toBeUndefined();
+    expect(a.problems.filter((x) => x.code.startsWith('beam-')).map((x) => x.code)).not.toContain('beam-one-peak');
+    expect(beamVerdict(b)).toBe('1 peak: one sublevel with atoms, nothing to resolve');
   });
 });

@@ -3,6 +3,7 @@ import {
   detectorPattern,
   kernelDensity,
   leverArmM2,
+  resolvingOptions,
   slitImage,
   smallestResolvingDrift,
   smallestResolvingGradient,
@@ -138,8 +139,66 @@ describe('smallest resolving gradient / length / drift', () => {
     expect(r.issues.map((i) => i.code)).toEqual(['beam-nothing-to-resolve']);
   });
 
+  it('one merged peak even at the bound is unresolvable, not "nothing to resolve"', () => {
+    // ±μ_B at 0.2 T/m: peaks 7.9 µm apart against a 102 µm image (merged below 0.25 of it).
+    const r = smallestResolvingGradient(pair, { upperBound: 0.2 });
+    expect(r.value).toBeUndefined();
+    expect(r.peaks).toEqual([['down', 'up']]);
+    expect(r.issues.map((i) => i.code)).toEqual(['beam-unresolvable-within-bound']);
+  });
+
   it('rejects bad bounds as an issue', () => {
     expect(smallestResolvingGradient(pair, { upperBound: -1 }).issues[0].code).toBe('beam-search-bounds-invalid');
     expect(smallestResolvingGradient(pair, { upperBound: 10, lowerBound: 20 }).issues[0].code).toBe('beam-search-bounds-invalid');
+  });
+});
+
+describe('one peak: merged, or nothing to resolve', () => {
+  const weak = { ...geometry, gradientTPerM: 0.2 };
+
+  it('sublevels that deflect oppositely but land in one peak are not resolved', () => {
+    // ±μ_B at 0.2 T/m: z = ±μ G (L1²/2 + L1 L2)/(M v²) = ±3.9 µm, well inside 0.25 × the 102 µm image.
+    const p = detectorPattern({ ...pair, geometry: weak });
+    expect(p.peaks).toHaveLength(1);
+    expect(p.pairs).toEqual([]);
+    expect(p.allResolved).toBe(false);
+  });
+
+  it('sublevels that all deflect alike have nothing to resolve: equal moments, μ = 0 (J = 0), one sublevel, one populated', () => {
+    const alike = (moments: number[], populations = moments.map(() => 1)): boolean => {
+      const p = detectorPattern({ ...pair, sublevels: moments.map((m, i) => ({ label: `s${i}`, momentJT: m, population: populations[i]! })) });
+      expect(p.peaks).toHaveLength(1);
+      return p.allResolved;
+    };
+    expect(alike([BOHR_MAGNETON, BOHR_MAGNETON, BOHR_MAGNETON])).toBe(true);
+    expect(alike([0, 0, 0])).toBe(true);
+    expect(alike([BOHR_MAGNETON])).toBe(true);
+    expect(alike([BOHR_MAGNETON, -BOHR_MAGNETON], [1, 0])).toBe(true);
+  });
+
+  it('the tolerance: round-off-size differences of the moments are alike, 1e-7 of them is not', () => {
+    // Tolerance 1e-9 of the larger of the largest |k| and the image's k (deflectAlike.ts); at 150 T/m
+    // the image width is 0.04 of ±μ_B's deflection, so the first term sets it.
+    const at = (m2: number): boolean => detectorPattern({ ...pair, sublevels: [{ label: 'a', momentJT: BOHR_MAGNETON, population: 1 }, { label: 'b', momentJT: m2, population: 1 }] }).allResolved;
+    expect(at(BOHR_MAGNETON * (1 + 1e-12))).toBe(true);
+    expect(at(BOHR_MAGNETON * (1 + 1e-7))).toBe(false);
+    // Moments that are zero but for round-off are alike by the image floor (±1e-40 J/T deflect by ±3e-20 m,
+    // 6e-16 of the 102 µm image apart); ±1e-30 J/T (±3e-10 m, 6e-6 of the image apart) are merged.
+    const opposite = (m: number): boolean => detectorPattern({ ...pair, sublevels: [{ label: 'a', momentJT: -m, population: 1 }, { label: 'b', momentJT: m, population: 1 }] }).allResolved;
+    expect(opposite(1e-40)).toBe(true);
+    expect(opposite(1e-30)).toBe(false);
+  });
+
+  it('the advice for one merged peak finds the gradient of the analytic two-kernel dip (to 1e-3)', () => {
+    const input = { ...pair, geometry: weak };
+    const found = resolvingOptions(input, detectorPattern(input));
+    expect(found.presentWorstDipRatio).toBe(1);
+    const g = found.options.find((o) => o.parameter === 'gradient')!;
+    expect(g.resolvesAll).toBe(true);
+    const expected = (separationAtCriterion(0.8) / 2) * ((mass * speed * speed) / (BOHR_MAGNETON * leverArmM2(geometry)));
+    expect(Math.abs(g.value / expected - 1)).toBeLessThan(1e-3);
+    // Every option offered resolves or visibly splits the peak, and is computed: the pattern with it agrees.
+    for (const o of found.options) expect(o.worstDipRatio).toBeLessThanOrEqual(0.98);
+    expect(detectorPattern({ ...input, geometry: { ...geometry, gradientTPerM: g.value } }).allResolved).toBe(true);
   });
 });

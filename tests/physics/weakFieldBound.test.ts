@@ -8,11 +8,15 @@
 import { describe, expect, it } from 'vitest';
 import { BOHR_MAGNETON_HZ_PER_T } from '../../server/src/physics/constants';
 import { buildLevelModel, regime } from '../../server/src/physics/engine';
-import type { HyperfineLevelSpec } from '../../server/src/physics/engine';
+import type { HyperfineLevelSpec, LevelSpec } from '../../server/src/physics/engine';
+import { REGIME_INTERNALS } from '../../server/src/physics/engine/regime';
+import { landeGJ } from '../../server/src/physics/gFactors';
+import { BUILTIN_SPECIES, parseDesignation } from '../../server/src/physics/species';
 import { makeWorkspace, solveBlockAt } from '../../server/src/physics/engine/blockSolver';
 import type { LevelModel } from '../../server/src/physics/engine/levelModel';
 import { linearProvenBetween } from '../../server/src/physics/engine/weakFieldBound';
 import { CS133_6P32, GROUND_LEVELS, RB87_5S } from './engine.fixtures';
+import { LI7_2P, RB87_5P } from './engine.wholeTerm.fixtures';
 
 const FRACTION = 0.01;
 
@@ -107,5 +111,76 @@ describe('the weak-field bound', () => {
   it('is not used for other kinds of level (a fine-structure term)', () => {
     const fine = buildLevelModel({ kind: 'fine', twoS: 1, L: 1, zeta: 1e12, gL: 1, gS: 2.0023, twoI: 0, gI: 0 }).model!;
     expect(linearProvenBetween(fine, FRACTION, maxSlopeOf(fine), 1e-12, 1e-6)).toBe(false);
+  });
+});
+
+/** Every built-in species' levels as hyperfine levels: published A, B, C, g_J where given, else the Landé g_J. */
+function builtinLevels(): [string, HyperfineLevelSpec][] {
+  const out: [string, HyperfineLevelSpec][] = [];
+  for (const sp of BUILTIN_SPECIES) {
+    for (const level of sp.levels) {
+      const d = parseDesignation(level.designation)!;
+      const twoI = sp.twoI.value;
+      const spec: HyperfineLevelSpec = {
+        kind: 'hyperfine',
+        twoJ: d.twoJ,
+        twoI,
+        gJ: level.gJ?.value ?? landeGJ(d.multiplicity - 1, d.L, d.twoJ),
+        gI: twoI > 0 ? sp.gI?.value ?? 0 : 0,
+        A: twoI > 0 && d.twoJ > 0 ? level.A?.value ?? 0 : 0,
+      };
+      if (twoI >= 2 && d.twoJ >= 2 && level.B) spec.B = level.B.value;
+      if (twoI >= 3 && d.twoJ >= 3 && level.C) spec.C = level.C.value;
+      out.push([`${sp.id} ${level.key}`, spec]);
+    }
+  }
+  return out;
+}
+
+/** Verdict at each field (asked first, as the evaluation does: that is where the bound acts), then both limits and x. */
+function regimeAnswers(spec: LevelSpec, fieldsT: readonly number[]): unknown[] {
+  return fieldsT.map((b) => {
+    const r = regime(spec, b, FRACTION);
+    return [r.verdict, r.linearLimitT, r.strongLimitT, r.x];
+  });
+}
+
+describe('the regime scan with and without the weak-field bound', () => {
+  // Lab fields from 1 nT to 10 T: the bound is tried when the verdict is asked before the limits.
+  const FIELDS = [1e-9, 1e-6, 1e-4, 3e-3, 0.1, 1, 10];
+  const fine = (twoS: number, L: number, zeta: number): LevelSpec => ({ kind: 'fine', twoS, L, zeta, gL: 1, gS: 2.0023, twoI: 0, gI: 0 });
+  const r = lcg(20261203);
+  const cases: [string, LevelSpec][] = [
+    ...builtinLevels(),
+    ...GROUND_LEVELS,
+    ['Cs 6P3/2', CS133_6P32],
+    ['demo', DEMO_LEVEL],
+    // Whole terms and fine-structure terms (the bound does not apply to them: same answers by construction, checked all the same).
+    ['7Li 2P whole term', LI7_2P],
+    ['87Rb 5P whole term', RB87_5P],
+    ['fine 2P', fine(1, 1, 1e10)],
+    ['fine 3D', fine(2, 2, 3e11)],
+    ...Array.from({ length: 80 }, (_, i): [string, LevelSpec] => [`invented ${i}`, randomLevel(r)]),
+  ];
+
+  it(`gives identical verdicts and limits for ${cases.length} levels (every built-in level, whole terms, invented ones)`, () => {
+    let proven = 0;
+    for (const [name, spec] of cases) {
+      REGIME_INTERNALS.useWeakFieldBound = false;
+      let without: unknown[];
+      try {
+        without = regimeAnswers(spec, FIELDS);
+      } finally {
+        REGIME_INTERNALS.useWeakFieldBound = true;
+      }
+      expect(regimeAnswers(spec, FIELDS), `${name}: ${JSON.stringify(spec)}`).toEqual(without);
+      // Not vacuous: count the levels whose lab fields the bound proves weak from the scan's first step.
+      const model = buildLevelModel(spec).model;
+      if (model && spec.kind === 'hyperfine' && model.zeroFieldSpreadHz > 0) {
+        const bc = model.zeroFieldSpreadHz / (Math.abs(spec.gJ - spec.gI) * BOHR_MAGNETON_HZ_PER_T);
+        if (linearProvenBetween(model, FRACTION, maxSlopeOf(model), 1e-9 * bc, 1e-6)) proven++;
+      }
+    }
+    expect(proven).toBeGreaterThan(40);
   });
 });

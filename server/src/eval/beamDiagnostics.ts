@@ -1,10 +1,12 @@
 /**
  * Diagnostics from a beam's evaluation: the beam engine's own problems (its stable codes, e.g.
- * `beam-slits-too-wide`, `beam-misses-detector`) and unresolvable peaks with what would resolve them.
+ * `beam-slits-too-wide`, `beam-misses-detector`) and unresolvable peaks (or one merged peak) with what would resolve them.
  */
 import type { Problem } from '../format/ast';
 import type { BeamModel } from '../model/types';
 import type { BeamEvaluation } from './beamEvaluation';
+import { lengthText } from './quantityText';
+import type { BeamResult } from './resultTypes';
 import { EVAL_RULES } from './evalCodes';
 
 export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
@@ -23,6 +25,10 @@ export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
   }
   const r = e.result;
   if (!r.computed || r.all_resolved !== false) return out;
+  if (r.peaks.length === 1) {
+    out.push(onePeak(beam, r, e.pattern?.image?.kernelFwhmM));
+    return out;
+  }
   const merged = r.pairs.filter((p) => !p.resolved);
   const names = merged.map((p) => `${peakName(r.peaks[p.left]?.members)} and ${peakName(r.peaks[p.right]?.members)}`);
   const gradient = beam.magnet?.gradientTPerM;
@@ -38,6 +44,23 @@ export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
     ...(typeof fix === 'number' ? { data: { resolvingGradientTPerM: Math.abs(fix) } } : {}),
   });
   return out;
+}
+
+/** One merged peak (sublevels that deflect differently, resolved: false): how far apart they are against the image. */
+function onePeak(beam: BeamModel, r: BeamResult, imageFwhmM: number | undefined): Problem {
+  const members = new Set(r.peaks[0]!.members);
+  const means = r.sublevels.filter((s) => members.has(s.label)).map((s) => s.mean_deflection_m);
+  // The difference of exact mean deflections: above the engine's round-off (the verdict's own tolerance, physics/beam/deflectAlike.ts).
+  const spread = Math.max(...means) - Math.min(...means);
+  const image = imageFwhmM !== undefined ? ` against an image width (FWHM) of ${lengthText(imageFwhmM, 2)}` : '';
+  const advice = r.resolving_advice ? ` ${r.resolving_advice}` : '';
+  return {
+    code: 'beam-one-peak',
+    severity: EVAL_RULES['beam-one-peak'].severity,
+    message: `beam '${beam.name}': all ${members.size} sublevels with atoms land in one peak: their mean deflections differ by at most ${lengthText(spread, 2)}${image}, so the detector does not separate them.${advice}`,
+    range: beam.nameRange,
+    ...(typeof r.resolving_gradient_T_per_m === 'number' ? { data: { resolvingGradientTPerM: Math.abs(r.resolving_gradient_T_per_m) } } : {}),
+  };
 }
 
 function peakName(members: string[] | undefined): string {

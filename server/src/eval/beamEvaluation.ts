@@ -102,7 +102,7 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
     off_grid_fraction: pattern.offGridFraction,
   };
   if (pattern.detectorFraction !== undefined) result.detector_fraction = pattern.detectorFraction;
-  if (searchResolving && !pattern.allResolved && pattern.peaks.length > 1) {
+  if (searchResolving && !pattern.allResolved && pattern.peaks.length > 0) {
     // A field-map magnet's deflections come from its flights: only changes that leave them alone are tried.
     const found = resolvingOptions(patternInput, pattern, fieldMap ? ['slits', 'detector', 'speedSpread'] : undefined);
     const options = found.options.map((o) => ({ change: CHANGE_NAME[o.parameter], value: o.value, worst_dip_ratio: o.worstDipRatio, resolves_all: o.resolvesAll }));

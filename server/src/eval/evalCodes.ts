@@ -8,6 +8,7 @@ export const EVAL_RULES = {
   'zeeman-strong-field': { severity: 'info', summary: 'A level is in the strong-field regime; low-field labels mislead.' },
   'diamagnetic-not-included': { severity: 'info', summary: 'A whole term computed without its diamagnetic term where that term would exceed 1e-3 of its smallest splitting.' },
   'beam-unresolved': { severity: 'warning', summary: 'Neighbouring peaks of a beam would merge on the detector.' },
+  'beam-one-peak': { severity: 'warning', summary: 'All sublevels of a beam land in one peak on the detector although they deflect differently: the peak is not resolved.' },
   'beam-slits-too-wide': { severity: 'error', summary: 'Slits so wide for their separation that the collimated beam is not narrow.' },
   'beam-misses-detector': { severity: 'warning', summary: 'A detector placed where (almost) no atoms arrive.' },
   'resonance-unreachable': { severity: 'warning', summary: 'No transition reaches the given frequency in the field range.' },

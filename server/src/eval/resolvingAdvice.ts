@@ -9,18 +9,28 @@ import type { BeamResult } from './resultTypes';
 
 type Option = NonNullable<BeamResult['resolving_options']>[number];
 
-/** The sentence, or undefined when the peaks are resolved or the search did not run. */
+/** The sentence, or undefined when the peaks are resolved (or there is nothing to resolve) or the search did not run. */
 export function resolvingAdvice(r: BeamResult, geometry: BeamGeometry): string | undefined {
   if (!r.computed || r.all_resolved !== false || r.resolving_options === undefined || r.worst_dip_ratio === undefined) return undefined;
-  const now = percentText(r.worst_dip_ratio, 2);
+  // One merged peak: there is no dip yet, and each change is judged on the peaks it splits the beam into.
+  const onePeak = r.peaks.length === 1;
+  const now = onePeak ? 'One peak with no dip' : `The worst dip is ${percentText(r.worst_dip_ratio, 2)}`;
+  const deepens = onePeak ? 'splits it with a visible dip' : 'deepens it';
   if (r.resolving_options.length === 0 && r.deflection_model === 'field-map') {
-    return `The worst dip is ${now}; no narrower slits or detector and no narrower speed spread deepens it. The magnet is built from sources: change their currents or geometry (or the drift) and evaluate again.`;
+    return `${now}; no narrower slits or detector and no narrower speed spread ${deepens}. The magnet is built from sources: change their currents or geometry (or the drift) and evaluate again.`;
   }
   if (r.resolving_options.length === 0) {
-    return `The worst dip is ${now}; no gradient, magnet length or drift up to 100 times the present one, no narrower slits or detector and no narrower speed spread deepens it.`;
+    return `${now}; no gradient, magnet length or drift up to 100 times the present one, no narrower slits or detector and no narrower speed spread ${deepens}.`;
   }
-  const parts = r.resolving_options.map((o) => `${changeText(o, geometry)} ${o.change === 'slits' ? 'give' : 'gives'} ${percentText(o.worst_dip_ratio, 2)}${o.resolves_all ? (o.change === 'slits' ? ' and resolve every pair' : ' and resolves every pair') : ''}`);
-  return `Worst dip now ${now} (resolved at ≤ ${percentText(r.criterion_dip_ratio, 2)}); computed on this setup: ${parts.join('; ')}.`;
+  const dip = (o: Option): string => (onePeak ? `peaks with a worst dip of ${percentText(o.worst_dip_ratio, 2)}` : percentText(o.worst_dip_ratio, 2));
+  const parts = r.resolving_options.map((o) => `${changeText(o, geometry)} ${o.change === 'slits' ? 'give' : 'gives'} ${dip(o)}${o.resolves_all ? (o.change === 'slits' ? ' and resolve every pair' : ' and resolves every pair') : ''}`);
+  const lead = onePeak ? 'No dip now, one peak' : `Worst dip now ${percentText(r.worst_dip_ratio, 2)}`;
+  return `${lead} (resolved at ≤ ${percentText(r.criterion_dip_ratio, 2)}); computed on this setup: ${parts.join('; ')}.`;
+}
+
+/** A lone peak that counts as resolved holds one sublevel, or sublevels that all deflect alike. */
+export function nothingToResolve(r: BeamResult): string {
+  return (r.peaks[0]?.members.length ?? 0) > 1 ? 'the sublevels all deflect alike, nothing to resolve' : 'one sublevel with atoms, nothing to resolve';
 }
 
 function changeText(o: Option, g: BeamGeometry): string {

@@ -251,6 +251,10 @@ export interface BeamResult {
   /** Neighbouring peaks: resolved when the minimum between them is at most `criterion_dip_ratio` of the smaller peak. */
   pairs: { left: number; right: number; dip_ratio: number; resolved: boolean }[];
   criterion_dip_ratio: number;
+  /**
+   * Every pair passes. One peak: false when its sublevels deflect differently (merged), true when
+   * they deflect alike or one sublevel has atoms (nothing to resolve; physics/beam/deflectAlike.ts).
+   */
   all_resolved?: boolean;
   /** Smallest gradient that resolves every pair (null: none up to 100× the file's gradient); only when unresolved. */
   resolving_gradient_T_per_m?: number | null;
@@ -258,7 +262,7 @@ export interface BeamResult {
   resolving_magnet_length_m?: number | null;
   /** Smallest drift that resolves every pair; null: none up to 100× the file's. */
   resolving_drift_m?: number | null;
-  /** Worst dip ratio of the setup as it is (only when unresolved). */
+  /** Worst dip ratio of the setup as it is (only when unresolved; 1 for one merged peak: no dip). */
   worst_dip_ratio?: number;
   /**
    * Changes computed to deepen the worst dip, each with the dip it gives (only those that improve it).
@@ -266,7 +270,7 @@ export interface BeamResult {
    * the detector width, the relative rms spread of a velocity-selected source at the same mean speed.
    */
   resolving_options?: { change: ResolvingChange; value: number; worst_dip_ratio: number; resolves_all: boolean }[];
-  /** What would resolve the merged peaks, in words: the same sentence as the beam-unresolved diagnostic. */
+  /** What would resolve the merged peaks, in words: the same sentence as the beam-unresolved (or beam-one-peak) diagnostic. */
   resolving_advice?: string;
   /** Fraction of the atoms entering a detector placed at the file's offset (`detector = w at x`). */
   detector_fraction?: number;

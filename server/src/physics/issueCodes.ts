@@ -116,7 +116,7 @@ export const PHYSICS_RULES = {
   'beam-pattern-off-grid': { severity: 'warning', summary: 'A part of the flux lands outside the computed pattern (slow tail).' },
   'beam-option-invalid': { severity: 'error', summary: 'A resolving search with too few points or a bad tolerance.' },
   'beam-search-bounds-invalid': { severity: 'error', summary: 'A resolving search with bounds that are not 0 ≤ lower < upper.' },
-  'beam-nothing-to-resolve': { severity: 'warning', summary: 'Fewer than two peaks: there is nothing to resolve.' },
+  'beam-nothing-to-resolve': { severity: 'warning', summary: 'One peak whose sublevels all deflect alike: there is nothing to resolve.' },
   'beam-resolved-at-lower-bound': { severity: 'info', summary: 'Already resolved at the lower bound of a resolving search.' },
   'beam-unresolvable-within-bound': { severity: 'warning', summary: 'No value up to the search bound resolves the peaks.' },
   // Slowers (slower/).

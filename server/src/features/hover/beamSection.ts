@@ -5,6 +5,7 @@
  * cautions in one line.
  */
 import { levelDesignationText } from '../../eval/designationText';
+import { nothingToResolve } from '../../eval/resolvingAdvice';
 import type { BeamResult, EvaluationResult, LevelResult } from '../../eval/resultTypes';
 import { lengthText, speedText, trimNumber, withUncertainty } from '../../eval/quantityText';
 import { beamPositionNoise } from '../../eval/noiseFloors';
@@ -41,12 +42,13 @@ function inputs(b: BeamModel): string {
   return lines.join('  \n');
 }
 
-/** One line: how many peaks and whether they are resolved, with the gradient that would resolve them. */
+/** One line: how many peaks and whether they are resolved (or nothing to resolve), with what would resolve them. */
 export function beamVerdict(r: BeamResult): string | undefined {
   if (!r.computed) return undefined;
   const peaks = `${r.peaks.length} peak${r.peaks.length === 1 ? '' : 's'}`;
   if (r.all_resolved === undefined) return peaks;
-  if (r.all_resolved) return `${peaks}, all resolved`;
+  if (r.all_resolved) return r.peaks.length === 1 ? `${peaks}: ${nothingToResolve(r)}` : `${peaks}, all resolved`;
+  if (r.peaks.length === 1) return `${peaks}: the sublevels deflect differently but land together, not resolved${r.resolving_advice ? `. ${r.resolving_advice}` : ''}`;
   return `${peaks}, not all resolved${r.resolving_advice ? `. ${r.resolving_advice}` : ''}`;
 }
 

@@ -5,6 +5,7 @@
  * resolvability verdict per neighbouring pair. Never throws: problems are issues.
  */
 import { boxOperator, convolveBox, shareToCentres, type BinRange } from './boxConvolve';
+import { deflectAlike } from './deflectAlike';
 import { deflectionCoefficient } from './deflection';
 import { depositDeflections, type BinnedMasses } from './depositDeflections';
 import { detectorGrid } from './detectorGrid';
@@ -85,6 +86,11 @@ export interface DetectorPattern {
   peaks: PatternPeak[];
   /** Verdict for each pair of neighbouring peaks. */
   pairs: PairVerdict[];
+  /**
+   * Every pair passes the dip criterion, and the pattern is not one lone peak of sublevels that
+   * deflect differently (merged: not resolved). A lone peak whose sublevels all deflect alike has
+   * nothing to resolve and counts as resolved (deflectAlike.ts).
+   */
   allResolved: boolean;
   /** Local maxima of the summed pattern (what a scan shows). */
   maxima: LocalMaximum[];
@@ -265,7 +271,7 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][], re
     },
     peaks,
     pairs,
-    allResolved: pairs.every((p) => p.resolved),
+    allResolved: pairs.every((p) => p.resolved) && !(peaks.length === 1 && !deflectAlike(ks, peaks[0]!.memberIndices, image.kernelFwhmM / law.meanInverseSquare)),
     maxima: localMaxima(total, centresM, options.minRelativeProminence),
     issues,
   };

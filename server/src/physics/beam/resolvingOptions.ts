@@ -60,10 +60,13 @@ interface Trial {
 /** `only` limits the changes tried (a magnet built from sources: its flights fix the deflections, see trajectory/fieldMapPattern.ts). */
 export function resolvingOptions(input: PatternInput, present: DetectorPattern, only?: readonly AdviceParameter[]): ResolvingOptions {
   const tried = (p: AdviceParameter): boolean => !only || only.includes(p);
-  const groups = present.peaks.map((p) => p.memberIndices);
-  const presentWorst = worstDip(present);
+  // One merged peak (sublevels that deflect differently): each trial is judged on the peaks it
+  // shows itself (no fixed groups), which is what the file would show with the change; no dip now.
+  const merged = present.peaks.length === 1 && !present.allResolved;
+  const groups = merged ? undefined : present.peaks.map((p) => p.memberIndices);
+  const presentWorst = merged ? 1 : worstDip(present);
   const out: ResolvingOptions = { presentWorstDipRatio: presentWorst, options: [] };
-  if (groups.length < 2 || present.allResolved) return out;
+  if (present.allResolved || (!merged && present.peaks.length < 2)) return out;
   const geo = input.geometry;
   const sign = geo.gradientTPerM < 0 ? -1 : 1;
   const keep = (parameter: AdviceParameter, pick: Trial | undefined, value = pick?.value): void => {
@@ -73,9 +76,10 @@ export function resolvingOptions(input: PatternInput, present: DetectorPattern, 
   const at = (change: Partial<PatternInput['geometry']>, source?: SpeedDistribution): DetectorPattern => computePattern(changed(change, source), groups, false);
   // A trial is an option only if it resolves (worst dip ≤ criterion) or visibly lowers the worst dip.
   const bar = Math.max(presentWorst - VISIBLE_IMPROVEMENT, input.dipCriterion ?? DEFAULT_DIP_CRITERION);
-  const screen = screenable(input);
+  // The screen needs fixed groups: a coarse grid could group a trial's sublevels differently.
+  const screen = groups !== undefined && screenable(input);
   /** Every one of these changes certainly leaves the worst dip above the bar: no option among them. */
-  const hopeless = (inputs: readonly PatternInput[]): boolean => screen && inputs.length > 0 && inputs.every((i) => certainlyAbove(i, groups, bar));
+  const hopeless = (inputs: readonly PatternInput[]): boolean => screen && inputs.length > 0 && inputs.every((i) => certainlyAbove(i, groups!, bar));
 
   const grown = (parameter: 'gradient' | 'magnetLength' | 'drift', base: number): void => {
     if (!tried(parameter)) return;

@@ -77,13 +77,20 @@ export function smallestResolvingValue(
   }
   const groups = opts.groups ?? top.peaks.map((p) => p.memberIndices);
   result.peaks = top.peaks.map((p) => p.members);
+  if (groups.length < 2 && !top.allResolved) {
+    // One merged peak: the sublevels deflect differently, but not far enough apart even at the bound.
+    result.issues.push(
+      beamIssue('warning', 'beam-unresolvable-within-bound', `Even at the upper bound (${upper}) all populated sublevels land in one peak, although they deflect differently.`),
+    );
+    return result;
+  }
   if (groups.length < 2) {
     result.dipRatios = [];
     result.issues.push(
       beamIssue(
         'warning',
         'beam-nothing-to-resolve',
-        `Even at the upper bound (${upper}) all populated sublevels form a single peak, so there is nothing to resolve.`,
+        `Even at the upper bound (${upper}) all populated sublevels form a single peak and deflect alike, so there is nothing to resolve.`,
       ),
     );
     return result;

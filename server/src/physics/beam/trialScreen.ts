@@ -20,9 +20,15 @@ export const SCREEN_MARGIN = 0.05;
  */
 export const NO_DIP_MARGIN = 0.01;
 
+/**
+ * Module-internal switch, not a user option: tests turn the screen off to check that the advice
+ * is the same without it (tests/physics/trialScreen.property.test.ts).
+ */
+export const TRIAL_SCREEN = { enabled: true };
+
 /** Whether trials of this beam may be screened at all. */
 export function screenable(input: PatternInput): boolean {
-  return input.source.kind !== 'single' && (input.bins ?? DEFAULT_BINS) >= 8 * SCREEN_BINS;
+  return TRIAL_SCREEN.enabled && input.source.kind !== 'single' && (input.bins ?? DEFAULT_BINS) >= 8 * SCREEN_BINS;
 }
 
 /** True only when the full pattern's worst dip is certainly above `bar` (and the pattern has pairs to judge). */

@@ -30,6 +30,12 @@ const STEPS_PER_DECADE = 4;
 const SCAN_LO = -9 * STEPS_PER_DECADE;
 const SCAN_HI = 6 * STEPS_PER_DECADE;
 
+/**
+ * Module-internal switch, not a user option: tests turn the weak-field bound off to check that the
+ * limits and verdicts are the same numbers without it (tests/physics/weakFieldBound.test.ts).
+ */
+export const REGIME_INTERNALS = { useWeakFieldBound: true };
+
 interface FormulaErrors {
   linear: number;
   strong: number;
@@ -192,7 +198,7 @@ function limitSearch(model: LevelModel, fraction: number, bc: number): LimitSear
   return {
     linearHoldsAt(b) {
       // Steps that a bound proves to pass need no solve; they pass all the same, so the limits do not move (weakFieldBound.ts).
-      if (linearLimitT === undefined && passed < SCAN_LO) {
+      if (REGIME_INTERNALS.useWeakFieldBound && linearLimitT === undefined && passed < SCAN_LO) {
         const k = stepAtOrAbove(b);
         if (k !== undefined && linearProvenBetween(model, fraction, maxSlope, at(SCAN_LO), at(k))) passed = k;
       }
