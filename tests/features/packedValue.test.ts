@@ -31,6 +31,13 @@ describe('packValue / unpackValue', () => {
     expect(back).toEqual({ points: [{ source: 'f', exact: [{ e: 1 }, { e: 2 }] }, { source: 'g', exact: [{ e: 3 }] }] });
   });
 
+  it('keeps a key named __proto__ as a key', () => {
+    const v = JSON.parse('{"__proto__": {"a": 1}, "b": 2}') as Record<string, unknown>;
+    const back = unpackValue(packValue(v, new Set()), noRevive) as Record<string, unknown>;
+    expect(Object.getPrototypeOf(back)).toBe(Object.prototype);
+    expect(JSON.stringify(back)).toBe(JSON.stringify(v));
+  });
+
   it('refuses what is not plain data', () => {
     expect(() => packValue({ m: new Map() }, new Set())).toThrow('cannot pack');
     expect(() => packValue({ f: () => 1 }, new Set())).toThrow('cannot pack');

@@ -35,7 +35,7 @@ const ARRAY = 6; // length, then the elements
 const OBJECT = 7; // shape, then the values in the shape's key order
 const DEFERRED = 8; // ops length, numbers length, then an ARRAY
 const UNREAD = 9; // then the recipe of a property not yet built (eval/lazyFields.ts)
-const AGAIN = 10; // op and number position of an array packed before inside a recipe (recipes share their states)
+const AGAIN = 10; // op and number position of an array or object packed before inside a recipe (recipes share their states)
 
 /** Keys of one shape that get a site of their own for the shape guess (later keys share the last). */
 const SITES_PER_SHAPE = 32;
@@ -63,8 +63,8 @@ class Packer {
   private readonly stringIds = new Map<string, number>();
   private readonly shapes: string[][] = [];
   private readonly root: ShapeStep = { next: new Map(), id: -1, keys: [] };
-  /** Arrays packed inside recipes, by identity: where they start in `ops` and `numbers`. */
-  private readonly recipeArrays = new Map<unknown[], [number, number]>();
+  /** Arrays and objects packed inside recipes, by identity: where they start in `ops` and `numbers`. */
+  private readonly recipeParts = new Map<object, [number, number]>();
   private inRecipe = false;
   /** By site: (shape number + 1) × SITES_PER_SHAPE + key index, 0 for the root. */
   private readonly lastShape: (ShapeStep | undefined)[] = [];
@@ -122,6 +122,7 @@ class Packer {
         return;
       case 'object':
         if (v === null) this.op(NULL);
+        else if (this.inRecipe && this.packedBefore(v)) return;
         else if (Array.isArray(v)) this.walkArray(v, site);
         else if (Object.getPrototypeOf(v) === Object.prototype) this.walkObject(v as Record<string, unknown>, site);
         else throw new Error(`cannot pack a ${Object.prototype.toString.call(v)}`);
@@ -132,19 +133,22 @@ class Packer {
   }
 
   private walkArray(a: unknown[], site: number): void {
-    if (this.inRecipe) {
-      const seen = this.recipeArrays.get(a);
-      if (seen) {
-        this.op(AGAIN);
-        this.op(seen[0]);
-        this.op(seen[1]);
-        return;
-      }
-      this.recipeArrays.set(a, [this.opCount, this.numberCount]);
-    }
     this.op(ARRAY);
     this.op(a.length);
     for (let i = 0; i < a.length; i++) this.walk(a[i], site);
+  }
+
+  /** Inside a recipe: true (and a reference written) when `v` was packed before, else noted for next time. */
+  private packedBefore(v: object): boolean {
+    const seen = this.recipeParts.get(v);
+    if (seen) {
+      this.op(AGAIN);
+      this.op(seen[0]);
+      this.op(seen[1]);
+      return true;
+    }
+    this.recipeParts.set(v, [this.opCount, this.numberCount]);
+    return false;
   }
 
   private walkObject(o: Record<string, unknown>, site: number): void {
@@ -224,7 +228,7 @@ export type Revive = (o: Record<string, unknown>, key: string, recipe: unknown) 
 
 interface Unpacking extends PackedValue {
   revive: Revive;
-  /** Arrays met again inside recipes, unpacked once, by op position. */
+  /** Arrays and objects met again inside recipes, unpacked once, by op position. */
   again: Map<number, unknown>;
 }
 
@@ -280,7 +284,8 @@ function readAt(p: Unpacking, startOp: number, startNum: number): Read {
           } else if (ops[op] === UNREAD) {
             op++;
             p.revive(o, k, read());
-          } else o[k] = read();
+          } else if (k === '__proto__') Object.defineProperty(o, k, { value: read(), writable: true, enumerable: true, configurable: true }); // a key, not the prototype
+          else o[k] = read();
         }
         return o;
       }
