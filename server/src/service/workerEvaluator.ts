@@ -123,8 +123,13 @@ export class WorkerEvaluator implements Evaluator {
     clearTimeout(this.abandonTimer);
     this.current = undefined;
     if (!reply.ok) job.reject(new Error(reply.error));
-    else if ('packed' in reply) job.resolve({ result: unpackResult(reply.packed), problems: reply.problems });
-    else job.resolve(reply.outcome);
+    else if ('packed' in reply) {
+      try {
+        job.resolve({ result: unpackResult(reply.packed), problems: reply.problems });
+      } catch (e) {
+        job.reject(new Error(`the evaluation's result could not be unpacked: ${e instanceof Error ? e.message : String(e)}`));
+      }
+    } else job.resolve(reply.outcome);
     this.pump();
   }
 
