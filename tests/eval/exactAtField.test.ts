@@ -1,6 +1,6 @@
 /**
  * The (level, field) memo of the exact evaluation: an equal level at an equal field is solved
- * once, and each caller gets states of its own to add to.
+ * once; the states are shared, and each level's table at a field is a copy of its own.
  */
 import { describe, expect, it, vi } from 'vitest';
 
@@ -16,6 +16,7 @@ vi.mock('../../server/src/physics/engine', async (importOriginal) => {
   };
 });
 
+import { analyze } from '../../server/src/eval/analyze';
 import { exactAtField } from '../../server/src/eval/exactAtField';
 import type { HyperfineLevelSpec } from '../../server/src/physics/engine';
 
@@ -35,9 +36,15 @@ describe('exactAtField memo', () => {
     expect(calls.solve).toBe(3);
   });
 
-  it('gives each caller its own states', () => {
-    const a = exactAtField(spec(), 0.03);
-    a.exact[0]!.linear_energy_Hz = 1;
-    expect(exactAtField(spec(), 0.03).exact[0]!.linear_energy_Hz).toBeUndefined();
+  it('shares the states, and gives each level a table of its own to add to', () => {
+    expect(exactAtField(spec(), 0.03)).toBe(exactAtField(spec(), 0.03));
+    // Two equal levels at one field: the uncertainty pass writes into one table, the other stays as it was.
+    const r = analyze(['species A', '  I = 3/2', '  g_I = -0.000995', '  level g: 5s 2S1/2  A = 3417.34 MHz', 'species B', '  I = 3/2', '  g_I = -0.000995', '  level g: 5s 2S1/2  A = 3417.34 MHz', 'field f = 3 G'].join('\n')).result!;
+    const [a, b] = r.levels.map((l) => l.at_fields[0]!.exact);
+    expect(a).toEqual(b);
+    expect(a).not.toBe(b);
+    a![0]!.energy_Hz_unc = 1;
+    expect(b![0]!.energy_Hz_unc).toBeUndefined();
+    expect(exactAtField(spec(), 0.0003).exact[0]!.energy_Hz_unc).toBeUndefined();
   });
 });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import { halfText, signedHalfText } from '../../server/src/eval/halves';
-import { hyperfineLabel } from '../../server/src/eval/levelEvaluation';
+import { hyperfineLabel } from '../../server/src/eval/levelTables';
 import type { LevelResult } from '../../server/src/eval/resultTypes';
 
 function level(text: string, name: string): LevelResult {

@@ -19,8 +19,8 @@ export interface ExactAtField {
 /**
  * Results by (level spec, field): a file repeats levels (the same term and constants in many
  * species) and an evaluation visits each at every working field, so equal ones are solved once.
- * Each caller gets its own copies of the states (`pairLinear` adds a linear energy that depends
- * on more than the spec). Bounded: the least recently used go first.
+ * The entry is shared: callers copy the states before changing them (a level's tables,
+ * eval/levelTables.ts, copy them when first read). Bounded: the least recently used go first.
  */
 const MEMO_ENTRIES = 4096;
 const memo = new Map<string, ExactAtField>();
@@ -34,6 +34,7 @@ function memoKey(spec: LevelSpec, fieldT: number): string {
         `t|${JSON.stringify(spec)}|${fieldT}`;
 }
 
+/** The states and regime of `spec` at `fieldT`; shared with every equal call, so read only. */
 export function exactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
   const key = memoKey(spec, fieldT);
   let known = memo.get(key);
@@ -41,7 +42,7 @@ export function exactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
   else known = solveExactAtField(spec, fieldT);
   memo.set(key, known);
   if (memo.size > MEMO_ENTRIES) memo.delete(memo.keys().next().value!);
-  return { ...known, exact: known.exact.map((s) => ({ ...s })) };
+  return known;
 }
 
 function solveExactAtField(spec: LevelSpec, fieldT: number): ExactAtField {

@@ -58,7 +58,8 @@ export function evaluateTerm(level: LevelModel, settings: SettingsModel, fields:
     const r = exactAtField(spec, f.tesla);
     notes.push(...engineNotes(level, { f, r }));
     points.push({ f, r });
-    return { source: f.source, field_T: f.tesla, exact: r.exact, ...(r.regime ? { regime: r.regime } : {}) };
+    // Copies: the memo's states are shared, and the uncertainty pass writes into these.
+    return { source: f.source, field_T: f.tesla, exact: r.exact.map((s) => ({ ...s })), ...(r.regime ? { regime: r.regime } : {}) };
   });
   const note = regimeNote(level, points);
   if (note) notes.push(note);

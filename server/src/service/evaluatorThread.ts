@@ -1,7 +1,10 @@
 /** The worker-thread side of the worker evaluator: answers `{ id, text, sources }` with the full pipeline's outcome. */
 import { parentPort } from 'worker_threads';
+import type { Problem } from '../format/ast';
 import type { SourceSnapshot } from '../model/sources';
 import { evaluateText } from './evaluator';
+import { packResult } from './resultHandOff';
+import type { PackedValue } from './packedValue';
 
 export interface EvaluationRequest {
   id: number;
@@ -10,16 +13,25 @@ export interface EvaluationRequest {
   sources?: SourceSnapshot;
 }
 
-export type EvaluationReply = { id: number; ok: true; outcome: ReturnType<typeof evaluateText> } | { id: number; ok: false; error: string };
+/**
+ * `outcome` as it is (a structured clone), or `packed`: the result packed (service/resultHandOff.ts)
+ * beside the problems, its typed arrays transferred rather than copied.
+ */
+export type EvaluationReply =
+  | { id: number; ok: true; outcome: ReturnType<typeof evaluateText> }
+  | { id: number; ok: true; packed: PackedValue; problems: Problem[] }
+  | { id: number; ok: false; error: string };
 
 export function serveEvaluations(): void {
   parentPort?.on('message', (req: EvaluationRequest) => {
     let reply: EvaluationReply;
     try {
-      reply = { id: req.id, ok: true, outcome: evaluateText(req.text, req.sources) };
+      const outcome = evaluateText(req.text, req.sources);
+      const packed = outcome.result ? packResult(outcome.result) : undefined;
+      reply = packed ? { id: req.id, ok: true, packed, problems: outcome.problems } : { id: req.id, ok: true, outcome };
     } catch (e) {
       reply = { id: req.id, ok: false, error: e instanceof Error ? (e.stack ?? e.message) : String(e) };
     }
-    parentPort?.postMessage(reply);
+    parentPort?.postMessage(reply, 'packed' in reply ? [reply.packed.ops.buffer as ArrayBuffer, reply.packed.numbers.buffer as ArrayBuffer] : []);
   });
 }

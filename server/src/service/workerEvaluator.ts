@@ -10,6 +10,7 @@ import { EVALUATION_TIME_LIMIT_MS } from '../model/limits';
 import type { SourceSnapshot } from '../model/sources';
 import { type EvaluationOutcome, type Evaluator, evaluateText, SUPERSEDED } from './evaluator';
 import type { EvaluationReply, EvaluationRequest } from './evaluatorThread';
+import { unpackResult } from './resultHandOff';
 
 /** `workerData.role` that tells a bundle started as a worker to serve evaluations. */
 export const EVALUATOR_ROLE = 'sublevel-evaluator';
@@ -121,8 +122,14 @@ export class WorkerEvaluator implements Evaluator {
     clearTimeout(this.timer);
     clearTimeout(this.abandonTimer);
     this.current = undefined;
-    if (reply.ok) job.resolve(reply.outcome);
-    else job.reject(new Error(reply.error));
+    if (!reply.ok) job.reject(new Error(reply.error));
+    else if ('packed' in reply) {
+      try {
+        job.resolve({ result: unpackResult(reply.packed), problems: reply.problems });
+      } catch (e) {
+        job.reject(new Error(`the evaluation's result could not be unpacked: ${e instanceof Error ? e.message : String(e)}`));
+      }
+    } else job.resolve(reply.outcome);
     this.pump();
   }
 

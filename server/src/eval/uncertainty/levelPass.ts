@@ -76,7 +76,9 @@ export function levelUncertainty(r: LevelResult, level: LevelModel, inp: SetupIn
   for (const fp of r.at_fields) {
     const field = inp.fieldSens.get(fieldKey(fp.source));
     setUnc(fp, 'field_T', field, inp.table);
-    if (exactUncertainty(fp.exact, spec, fp.field_T, { ...params, ...(field ? { field } : {}) }, inp.table)) problems.push(oneSidedNote(level, `${fp.source.kind} ${fp.source.name}`));
+    const p: ParamSensitivities = { ...params, ...(field ? { field } : {}) };
+    // Checked before reading `exact`: a level's tables are built when first read (eval/levelTables.ts).
+    if (anyUncertain(p) && exactUncertainty(fp.exact, spec, fp.field_T, p, inp.table)) problems.push(oneSidedNote(level, `${fp.source.kind} ${fp.source.name}`));
   }
 }
 

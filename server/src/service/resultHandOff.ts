@@ -1,0 +1,26 @@
+/**
+ * How the evaluation worker hands its result to the editor's thread: packed (service/packedValue.ts)
+ * instead of a structured clone. The sublevel tables of levels and the components of lines, most
+ * of the result, are unpacked when first read, and tables still unread in the worker travel as
+ * their recipes (eval/levelTables.ts). The problems travel as they are.
+ */
+import type { EvaluationResult } from '../eval/resultTypes';
+import { defineLazyField } from '../eval/lazyFields';
+import { buildLevelTable, type ExactRecipe, type LinearRecipe } from '../eval/levelTables';
+import { packValue, unpackValue, type PackedValue } from './packedValue';
+
+/** Arrays under these keys are unpacked when first read. */
+const DEFERRED_KEYS: ReadonlySet<string> = new Set(['linear', 'exact', 'components']);
+
+/** The packed result, or undefined when it holds something that cannot be packed (then it goes as it is). */
+export function packResult(result: EvaluationResult): PackedValue | undefined {
+  try {
+    return packValue(result, DEFERRED_KEYS);
+  } catch {
+    return undefined;
+  }
+}
+
+export function unpackResult(packed: PackedValue): EvaluationResult {
+  return unpackValue(packed, (o, key, recipe) => defineLazyField(o, key, recipe as LinearRecipe | ExactRecipe, buildLevelTable)) as EvaluationResult;
+}
