@@ -292,6 +292,8 @@ export function readQuantity(part: ValuePart, expected: Dimension, what?: string
     };
   }
   if (part.kind === 'word') {
+    // Its number was reported where it was read; a second problem would say the same.
+    if (part.unreadable) return {};
     const prefix = readNumberPrefix(part.text);
     if (prefix && prefix.reading.ok && prefix.length < part.text.length) {
       // A number glued to something that is not a unit we know, e.g. `401.75Mhz`.

@@ -58,7 +58,7 @@ export function readPartQuantity(
 /** A plain number (no unit). */
 export function readSettingNumber(setting: SettingNode, problems: ProblemList, what: string): Valued<number> | undefined {
   const part = singlePart(setting, problems, what);
-  if (!part) return undefined;
+  if (!part || (part.kind === 'word' && part.unreadable)) return undefined;
   if (part.kind !== 'number') {
     const got = part.kind === 'quantity' ? `a quantity with unit ${part.unit.text}` : `'${part.text}'`;
     problems.add('value-not-number', `${setting.key.text} needs a plain number (${what}), got ${got}`, part.range);
@@ -73,7 +73,7 @@ export function readSettingNumber(setting: SettingNode, problems: ProblemList, w
  */
 export function readSettingSpin(setting: SettingNode, problems: ProblemList, what: string): Valued<number> | undefined {
   const part = singlePart(setting, problems, what);
-  if (!part) return undefined;
+  if (!part || (part.kind === 'word' && part.unreadable)) return undefined;
   if (part.kind !== 'number') {
     problems.add('value-not-number', `${setting.key.text} needs a spin such as 0, 1/2, 1 or 3/2 (${what}), got '${part.text}'`, part.range);
     return undefined;
