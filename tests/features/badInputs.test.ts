@@ -38,6 +38,19 @@ const CASES: Case[] = [
     text: 'species Na23\n  level p: 3p 2P°3/2  A = \u221218.53 MHz\nfield bias = \u22123.2 G\n',
     findings: [],
   },
+  {
+    // Term symbols are written without blanks (²ˢ⁺¹L_J, textbook notation). Read apart, `2P` was taken
+    // for a subshell, with three errors and a fix that lower-cased the term's letter.
+    name: 'a term symbol typed with a blank inside: one warning, read as meant, and the fix that joins it',
+    text: 'species Na23\n  level a: 3p 2P 3/2\n  level b: 3p 2P°3 /2  # kept\n  level c: 2 S1/2\n',
+    findings: ['2:15-21 term-blank-inside [2P 3/2]', '3:15-22 term-blank-inside [2P°3 /2]', '4:12-18 term-blank-inside [2 S1/2]'],
+    fixes: [
+      "term-blank-inside: Replace with '2P3/2' →   level a: 3p 2P3/2",
+      "term-blank-inside: Replace with '2P°3/2' →   level b: 3p 2P°3/2  # kept",
+      "term-blank-inside: Replace with '2S1/2' →   level c: 2S1/2",
+    ],
+    says: ['read as 2P3/2'],
+  },
 ];
 
 function describeFindings(text: string): { findings: string[]; fixes: string[]; messages: string[] } {
@@ -56,7 +69,7 @@ function describeFindings(text: string): { findings: string[]; fixes: string[]; 
     const covered = start.line === end.line ? lines[start.line]!.slice(start.character, end.character) : '…';
     return `${start.line + 1}:${start.character + 1}-${end.character + 1} ${String(d.code)} [${covered}]`;
   });
-  return { findings, fixes, messages: ds.map((d) => d.message) };
+  return { findings, fixes, messages: ds.map((d) => (typeof d.message === 'string' ? d.message : d.message.value)) };
 }
 
 describe('bad inputs', () => {

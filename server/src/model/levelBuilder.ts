@@ -10,6 +10,7 @@ import type { ProblemList } from './problems';
 import { subRange } from './ranges';
 import { readPerLevel } from './perLevelReader';
 import { readSettingNumber, readSettingQuantity } from './settingReaders';
+import { splitTermOf, writtenOffset } from './splitTerm';
 import type { LevelModel, SpeciesModel, Valued } from './types';
 
 export function buildLevel(node: LevelNode, species: SpeciesModel, problems: ProblemList): LevelModel | undefined {
@@ -61,11 +62,19 @@ function readDesignation(level: LevelModel, problems: ProblemList): void {
     problems.add('level-needs-term', `level '${level.name}' needs a term symbol after the colon, such as 2S1/2 or 3p 2P°3/2`, level.node.name?.range ?? level.node.range);
     return;
   }
-  const parsed = designationOf(d.text);
+  const asWritten = designationOf(d.text);
+  const split = splitTermOf(d.text, asWritten.issues.filter((i) => i.severity === 'error').length);
+  const parsed = split ? designationOf(split.text) : asWritten;
+  if (split) {
+    problems.add('term-blank-inside', `a term symbol is written without blanks: read as ${split.term}`, subRange(d, split.start, split.end), {
+      data: { suggestions: [split.term] },
+    });
+  }
   level.configuration = parsed.configuration;
   level.term = parsed.term;
   for (const issue of parsed.issues) {
-    problems.addWith(issue.code, issue.severity, issue.message, subRange(d, issue.start, issue.end), {
+    const range = subRange(d, writtenOffset(split, issue.start, false), writtenOffset(split, issue.end, true));
+    problems.addWith(issue.code, issue.severity, issue.message, range, {
       ...(issue.suggestions ? { data: { suggestions: issue.suggestions } } : {}),
     });
   }
