@@ -51,6 +51,73 @@ const CASES: Case[] = [
     ],
     says: ['read as 2P3/2'],
   },
+  {
+    // K39 ground: I = 3/2, J = 1/2, so F = 1, 2 (angular momentum addition, textbook); |m_F| ≤ F.
+    name: 'populations that name a sublevel the level lacks are said, not dropped; a wrong entry says what is wrong',
+    text: [
+      'species K39',
+      '  level ground: 4s 2S1/2',
+      'magnet m',
+      '  field = 0.1 T',
+      '  gradient = 100 T/m',
+      '  length = 5 cm',
+      'beam b',
+      '  level = ground',
+      '  source = oven 400 K',
+      '  slits = 80 um, 50 um apart 40 cm',
+      '  magnet = m',
+      '  drift = 50 cm',
+      '  detector = 10 um',
+      '  populations = 3 0 1, 2 1 1, 1 1',
+      'beam c',
+      '  level = ground',
+      '  source = oven 400 K',
+      '  slits = 80 um, 50 um apart 40 cm',
+      '  magnet = m',
+      '  drift = 50 cm',
+      '  detector = 10 um',
+      '  populations = 2 1 1, 2 5 1',
+      '',
+    ].join('\n'),
+    findings: ['14:17-22 beam-population-unmatched [3 0 1]', '22:24-29 beam-populations-malformed [2 5 1]'],
+    says: ["beam 'b': level ground has no F = 3, m_F = 0 (it has F = 1, 2), so this population is not used", 'm_F runs from -F to F, so from -2 to 2 for F = 2'],
+  },
+  {
+    name: 'a beam source with a value out of range: said at the value, and no template that overwrites it',
+    text: 'beam b\n  source = oven -300 K\nbeam c\n  source = jet 1500 m/s spread 200 %\nbeam d\n  source = furnace 400 K\n',
+    findings: [
+      "1:6-7 beam-incomplete [b]",
+      '2:17-23 beam-source-malformed [-300 K]',
+      "3:6-7 beam-incomplete [c]",
+      '4:32-37 beam-source-malformed [200 %]',
+      "5:6-7 beam-incomplete [d]",
+      '6:12-25 beam-source-malformed [furnace 400 K]',
+    ],
+    fixes: [
+      'beam-source-malformed: Write source = oven 450 K →   source = oven 450 K',
+      'beam-source-malformed: Write source = jet 1500 m/s spread 10 % →   source = jet 1500 m/s spread 10 %',
+      'beam-source-malformed: Write source = speed 800 m/s →   source = speed 800 m/s',
+    ],
+    says: ['an oven temperature must be above absolute zero, got -300 K', "unknown source 'furnace'"],
+  },
+  {
+    name: 'a fit naming data or a parameter that do not exist: that name is the error, not a missing one',
+    text: 'fit f: nope -> field\nfit g: nope -> mass\nfit h\n',
+    findings: [
+      "1:8-12 name-unknown [nope]",
+      "2:8-12 name-unknown [nope]",
+      "2:16-20 fit-parameter-unknown [mass]",
+      "3:5-6 fit-incomplete [h]",
+      "3:5-6 fit-incomplete [h]",
+    ],
+  },
+  {
+    // 3p gives only ²P (one p electron, textbook); ²Q would need L = 12.
+    name: 'a J that the term allows but the configuration cannot make is not offered as a fix',
+    text: 'species Na23\n  level a: 3p 2Q3/2\n  level b: 3p 2P5/2\n',
+    findings: ['2:17-20 term-j-out-of-range [3/2]', '3:17-20 term-j-out-of-range [5/2]'],
+    fixes: ['term-j-out-of-range: Change J to 1/2 →   level b: 3p 2P1/2', 'term-j-out-of-range: Change J to 3/2 →   level b: 3p 2P3/2'],
+  },
 ];
 
 function describeFindings(text: string): { findings: string[]; fixes: string[]; messages: string[] } {
