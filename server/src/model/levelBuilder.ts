@@ -72,10 +72,12 @@ function readDesignation(level: LevelModel, problems: ProblemList): void {
   }
   level.configuration = parsed.configuration;
   level.term = parsed.term;
+  const parsedText = split ? split.text : d.text;
   for (const issue of parsed.issues) {
     const range = subRange(d, writtenOffset(split, issue.start, false), writtenOffset(split, issue.end, true));
+    const suggestions = issue.suggestions && issue.code.startsWith('term-j-') ? issue.suggestions.filter((j) => readsClean(parsedText, issue.start, issue.end, j)) : issue.suggestions;
     problems.addWith(issue.code, issue.severity, issue.message, range, {
-      ...(issue.suggestions ? { data: { suggestions: issue.suggestions } } : {}),
+      ...(suggestions && suggestions.length > 0 ? { data: { suggestions } } : {}),
     });
   }
   const hasError = parsed.issues.some((i) => i.severity === 'error');
@@ -98,6 +100,14 @@ function readDesignation(level: LevelModel, problems: ProblemList): void {
     problems.add('r2-needs-term', `r2 adds the diamagnetic term to a whole term only: write the term without J and give zeta or E_J, or remove r2`, level.r2.range);
   }
   level.valid = !!parsed.term && !hasError && (parsed.term.twoJ !== null || level.kind === 'term');
+}
+
+/**
+ * A J the term allows is offered only when the level then reads without error: `3p 2Q3/2` allows
+ * J = 23/2 for 2Q, but 3p makes no 2Q, so that fix would trade one error for another.
+ */
+function readsClean(text: string, start: number, end: number, replacement: string): boolean {
+  return !designationOf(text.slice(0, start) + replacement + text.slice(end)).issues.some((i) => i.severity === 'error');
 }
 
 function jHint(twoS: number, L: number): string {
