@@ -118,6 +118,13 @@ const CASES: Case[] = [
     findings: ['2:17-20 term-j-out-of-range [3/2]', '3:17-20 term-j-out-of-range [5/2]'],
     fixes: ['term-j-out-of-range: Change J to 1/2 →   level b: 3p 2P1/2', 'term-j-out-of-range: Change J to 3/2 →   level b: 3p 2P3/2'],
   },
+  {
+    name: 'a misspelt unit gets "did you mean" only among units of the dimension the setting needs',
+    text: 'field b = 8 CM\nmagnet m\n  field = 1 mt\n  gradient = 1 T/m\n  length = 8 CM\n',
+    findings: ['1:13-15 unit-unknown [CM]', '3:13-15 unit-unknown [mt]', '5:14-16 unit-unknown [CM]'],
+    fixes: ["unit-unknown: Change to 'mT' →   field = 1 mT", "unit-unknown: Change to 'cm' →   length = 8 cm"],
+    says: ["unknown unit 'CM': flux density needs T, mT or G"],
+  },
 ];
 
 function describeFindings(text: string): { findings: string[]; fixes: string[]; messages: string[] } {

@@ -274,6 +274,23 @@ function toSI(value: number, unit: UnitValue, d: Dimension): number | undefined 
 }
 
 /**
+ * "Did you mean" names of the dimension the setting needs only: `8 CM` for a field once offered
+ * `cm`, a fix that made a length of a field. With none left the message says what the setting takes.
+ */
+function fittingSuggestions(e: Extract<UnitEvaluation, { ok: false }>, unitText: string, expected: Dimension, label: string, examples: string): { message: string; suggestions: string[] } {
+  const all = [...(e.suggestions ?? [])];
+  if (e.code !== 'unit-unknown' || all.length === 0) return { message: e.message, suggestions: all };
+  const fits = all.filter((name) => {
+    const whole = evaluateUnit(unitText.slice(0, e.start) + name + unitText.slice(e.end));
+    return whole.ok && (expected === 'dimensionless' ? whole.value.dims.every((d) => d === 0) : toSI(1, whole.value, expected) !== undefined);
+  });
+  if (fits.length === all.length) return { message: e.message, suggestions: all };
+  const name = unitText.slice(e.start, e.end);
+  const message = fits.length > 0 ? `unknown unit '${clip(name)}'${didYouMeanText(fits)}` : `unknown unit '${clip(name)}': ${label} needs ${examples}`;
+  return { message, suggestions: fits };
+}
+
+/**
  * Reads one value part as a quantity of the expected dimension, in SI.
  * `what` names the setting in messages (default: the dimension, e.g. "gradient").
  */
@@ -300,9 +317,10 @@ export function readQuantity(part: ValuePart, expected: Dimension, what?: string
       const unitText = part.text.slice(prefix.length);
       const e = evaluateUnit(unitText);
       if (!e.ok) {
+        const f = fittingSuggestions(e, unitText, expected, label, examples);
         return {
-          problem: makeProblem(e.code, e.message, subRange(part.range, prefix.length + e.start, prefix.length + e.end), {
-            data: { suggestions: [...(e.suggestions ?? [])] },
+          problem: makeProblem(e.code, f.message, subRange(part.range, prefix.length + e.start, prefix.length + e.end), {
+            data: { suggestions: f.suggestions },
           }),
         };
       }
@@ -313,9 +331,10 @@ export function readQuantity(part: ValuePart, expected: Dimension, what?: string
   }
   const e = evaluateUnit(part.unit.text);
   if (!e.ok) {
+    const f = fittingSuggestions(e, part.unit.text, expected, label, examples);
     return {
-      problem: makeProblem(e.code, e.message, subRange(part.unit.range, e.start, e.end), {
-        data: { suggestions: [...(e.suggestions ?? [])] },
+      problem: makeProblem(e.code, f.message, subRange(part.unit.range, e.start, e.end), {
+        data: { suggestions: f.suggestions },
       }),
     };
   }
