@@ -125,6 +125,14 @@ const CASES: Case[] = [
     fixes: ["unit-unknown: Change to 'mT' →   field = 1 mT", "unit-unknown: Change to 'cm' →   length = 8 cm"],
     says: ["unknown unit 'CM': flux density needs T, mT or G"],
   },
+  {
+    // `8 Tt` was "needs a unit" with a fix giving `8 T Tt`, and an unused `Tt` with a fix deleting it.
+    name: 'an unknown word where the unit goes is an unknown unit, with what the setting needs',
+    text: 'field c = 8 Tt\nfield d = 8 Tesla\nspecies Demo\n  mass = 23 amu\n',
+    findings: ['1:13-15 unit-unknown [Tt]', '2:13-18 unit-unknown [Tesla]', '4:13-16 unit-unknown [amu]'],
+    fixes: ["unit-unknown: Change to 'tesla' → field d = 8 tesla"],
+    says: ["unknown unit 'Tt': flux density needs T, mT or G", "unknown unit 'amu': mass needs u, Da or kg"],
+  },
 ];
 
 function describeFindings(text: string): { findings: string[]; fixes: string[]; messages: string[] } {

@@ -274,6 +274,28 @@ function toSI(value: number, unit: UnitValue, d: Dimension): number | undefined 
 }
 
 /**
+ * A word right after the number of a one-quantity setting that is no unit Sublevel knows (`8 Tt`):
+ * it stands where the unit goes, so it is the unit that is wrong. Read apart it gave "needs a unit"
+ * with a fix that put one before the word, and an unused word with a fix that deleted it.
+ */
+export function wordForUnit(word: ValuePart, expected: Dimension, what?: string): Problem | undefined {
+  if (word.kind !== 'word' || word.unreadable || !/^[\p{L}µ°%]/u.test(word.text) || expected === 'dimensionless') return undefined;
+  const info = DIMENSIONS[expected];
+  const label = what ?? info.label;
+  const suggestions = suggestNames(word.text, [...new Set([...info.examples, ...unitNamesOf(expected)])]);
+  const hint = suggestions.length > 0 ? didYouMeanText(suggestions) : `: ${label} needs ${orList(info.examples)}`;
+  return makeProblem('unit-unknown', `unknown unit '${clip(word.text)}'${hint}`, word.range, { data: { suggestions } });
+}
+
+/** Unit names (completion's list) whose dimension is the one expected. */
+function unitNamesOf(expected: Dimension): string[] {
+  return COMMON_UNITS.filter((name) => {
+    const e = evaluateUnit(name);
+    return e.ok && toSI(1, e.value, expected) !== undefined;
+  });
+}
+
+/**
  * "Did you mean" names of the dimension the setting needs only: `8 CM` for a field once offered
  * `cm`, a fix that made a length of a field. With none left the message says what the setting takes.
  */

@@ -3,7 +3,7 @@
  * reporting a plain-words problem at the value's range when the value does not fit.
  */
 import type { ParsedNumber, SettingNode, ValuePart } from '../format/ast';
-import { readQuantity, type Dimension } from '../format/units';
+import { readQuantity, wordForUnit, type Dimension } from '../format/units';
 import type { ProblemList } from './problems';
 import type { Valued } from './types';
 
@@ -33,6 +33,14 @@ export function readSettingQuantity(
   problems: ProblemList,
   what: string,
 ): Valued<number> | undefined {
+  const parts = setting.groups.flat();
+  if (setting.groups.length === 1 && parts.length === 2 && parts[0]!.kind === 'number') {
+    const unit = wordForUnit(parts[1]!, dimension);
+    if (unit) {
+      problems.push(unit);
+      return undefined;
+    }
+  }
   const part = singlePart(setting, problems, what);
   if (!part) return undefined;
   return readPartQuantity(part, dimension, problems, setting.key.text);
