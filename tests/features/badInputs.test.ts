@@ -133,6 +133,11 @@ const CASES: Case[] = [
     fixes: ["unit-unknown: Change to 'tesla' → field d = 8 tesla"],
     says: ["unknown unit 'Tt': flux density needs T, mT or G", "unknown unit 'amu': mass needs u, Da or kg"],
   },
+  {
+    name: 'a bad spectrum direction does not hide the mistakes of the other spectrum settings',
+    text: 'species Rb87\n  level g: 5s 2S1/2\n  level p: 5p 2P°3/2\nline D2: g -> p\n  spectrum = sideways\n  light = red\n  doppler = -3 K\n',
+    findings: ['5:14-22 value-not-allowed [sideways]', '6:11-14 value-not-allowed [red]', '7:13-17 value-out-of-range [-3 K]'],
+  },
 ];
 
 function describeFindings(text: string): { findings: string[]; fixes: string[]; messages: string[] } {
