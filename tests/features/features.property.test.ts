@@ -42,6 +42,9 @@ const PIECES = [
   '3s', '3p', '2p2', '4f7', '[Ne]', '2S1/2', '2P°3/2', '²P₃/₂', '3P2', '2P5/2', '2P', '6H°15/2', '0.45', '-3.06', '1/2', '3/2',
   '1e-3', '0.35(2)', 'T', 'G', 'mT', 'T/m', 'G/cm', 'cm', 'um', 'MHz', 'GHz', 'cm^-1', 'K', 'degC', 'm/s', '%', 'u', 'muN', 'Mhz',
   '720K', '8cm', 'exact', 'on', '\t', '  ', '\n', '\n  ', '\r\n', '→', '°', 'é', '\u00a0', '|', '*', '[x](y)', 'use', '"shared/a b.sublevel"', '"', '"x.sublevel',
+  // Mistakes from the session-7 audit: the U+2212 minus, unusable numbers before a unit, a term split by a blank, populations.
+  '\u22123.2', '1e\u22122', '1e400', '1e400T', 'NaN', '-inf', '1/0', '2P 3/2', '2P°3 /2', 'populations', '3 0 1', '2 5 1',
+  'trap', 'slower', 'fit', 'data', 'sources', 'free', 'design', 'gravity',
 ];
 
 const pieced = fc.array(fc.constantFrom(...PIECES), { maxLength: 60 }).map((parts) => parts.join(' '));

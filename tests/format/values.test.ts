@@ -69,6 +69,10 @@ describe('value parts', () => {
     ['3 Gauss', [['q:3|Gauss']]],
     // glued to an unknown unit: a word (the unit reader still explains it)
     ['401.75Mhz', [['w:401.75Mhz']]],
+    // the minus sign U+2212 that a value copied from a paper holds is a minus (Unicode standard, U+2212 MINUS SIGN)
+    ['\u221218.53 MHz', [['q:\u221218.53|MHz']]],
+    ['\u22121/2', [['n:\u22121/2']]],
+    ['1e\u22122 T/m', [['q:1e\u22122|T/m']]],
   ];
   for (const [value, parts] of table) {
     it(`${value} → ${JSON.stringify(parts)}`, () => {
@@ -129,9 +133,27 @@ describe('numbers in parts', () => {
     expect(formatRange(p.unit.range)).toBe('1:15-1:17');
   });
 
-  it('numbers that cannot be used are reported and kept as words', () => {
+  it('numbers that cannot be used are reported and kept as words, with the unit after them', () => {
+    // The unit belongs to the bad number: a separate word `K` read as an unused extra value once
+    // offered a quick fix that deleted the unit and left the bad number.
     const { parts, doc } = valueOf('1/0, 1e999, 2e999 K');
-    expect(parts).toEqual([['w:1/0'], ['w:1e999'], ['w:2e999', 'w:K']]);
+    expect(parts).toEqual([['w:1/0'], ['w:1e999'], ['w:2e999 K']]);
     expect(problemSummary(doc)).toEqual(['syntax-bad-number 1:11-1:14', 'syntax-bad-number 1:16-1:21', 'syntax-bad-number 1:23-1:28']);
+  });
+
+  it('NaN and inf before a unit are bad numbers; alone they stay words (a name may be inf)', () => {
+    const a = valueOf('NaN T, -inf mT');
+    expect(a.parts).toEqual([['w:NaN T'], ['w:-inf mT']]);
+    expect(problemSummary(a.doc)).toEqual(['syntax-bad-number 1:11-1:14', 'syntax-bad-number 1:18-1:22']);
+    const b = valueOf('inf');
+    expect(b.parts).toEqual([['w:inf']]);
+    expect(problemSummary(b.doc)).toEqual([]);
+  });
+
+  it('the U+2212 minus gives the same number as the ASCII one', () => {
+    const a = onlyPart('\u22123.06');
+    const b = onlyPart('\u22121/2');
+    expect(a.kind === 'number' && a.number).toEqual({ value: -3.06 });
+    expect(b.kind === 'number' && b.number).toEqual({ value: -0.5, fraction: { num: -1, den: 2 } });
   });
 });

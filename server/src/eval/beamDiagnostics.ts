@@ -23,6 +23,14 @@ export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
       ...(onMagnet ? { related: [{ message: `beam '${beam.name}' flies through this magnet`, range: beam.nameRange }] } : {}),
     });
   }
+  for (const u of e.unmatchedPopulations ?? []) {
+    out.push({
+      code: 'beam-population-unmatched',
+      severity: EVAL_RULES['beam-population-unmatched'].severity,
+      message: `beam '${beam.name}': level ${beam.level?.name ?? ''} has no ${u.named} (it has ${u.has}), so this population is not used`,
+      range: u.range,
+    });
+  }
   const r = e.result;
   if (!r.computed || r.all_resolved !== false) return out;
   if (r.peaks.length === 1) {

@@ -14,7 +14,7 @@ import {
 import { BOHR_MAGNETON } from '../physics/constants';
 import { ADIABATIC_LIMIT, fieldMapPattern, type FieldMapBeam } from '../physics/beam/trajectory';
 import type { BeamModel } from '../model/types';
-import { beamInputs } from './beamInput';
+import { beamInputs, type UnmatchedPopulation } from './beamInput';
 import { magnetFieldMap } from './magnetFieldMap';
 import { resolvingAdvice } from './resolvingAdvice';
 import type { BeamResult, BeamSublevelResult, ResolvingChange } from './resultTypes';
@@ -33,6 +33,8 @@ export interface BeamEvaluation {
   pattern?: DetectorPattern;
   /** Problems the beam engine reported, in plain words. */
   issues: { severity: 'error' | 'warning' | 'info'; code: string; message: string }[];
+  /** `populations` entries that name no sublevel of the level. */
+  unmatchedPopulations?: UnmatchedPopulation[];
 }
 
 /**
@@ -58,6 +60,7 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
   };
   const inputs = beamInputs(beam, gJOf);
   if (!inputs) return { result: base, issues: [] };
+  const unmatched = inputs.unmatchedPopulations.length > 0 ? { unmatchedPopulations: inputs.unmatchedPopulations } : {};
   // A magnet built from sources: every sublevel flies through the real field (physics/beam/trajectory/).
   const map = magnetFieldMap(beam.magnet);
   let patternInput = inputs.input;
@@ -67,12 +70,12 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
     patternInput = mapped.pattern;
     fieldMap = mapped.fieldMap;
     base.deflection_model = 'field-map';
-    if (fieldMap?.issues.some((i) => i.severity === 'error')) return { result: base, issues: fieldMap.issues.map((i) => ({ ...i })) };
+    if (fieldMap?.issues.some((i) => i.severity === 'error')) return { result: base, issues: fieldMap.issues.map((i) => ({ ...i })), ...unmatched };
     if (fieldMap) base.field_map = fieldMapSummary(fieldMap, mapped.referenceSpeed, mapped.speeds);
   }
   const pattern = detectorPattern(patternInput);
   const issues = [...(fieldMap?.issues ?? []), ...pattern.issues].map((i) => ({ ...i }));
-  if (issues.some((i) => i.severity === 'error')) return { result: base, issues };
+  if (issues.some((i) => i.severity === 'error')) return { result: base, issues, ...unmatched };
 
   const result: BeamResult = {
     ...base,
@@ -117,7 +120,7 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
     const advice = resolvingAdvice(result, patternInput.geometry);
     if (advice) result.resolving_advice = advice;
   }
-  return { result, pattern, issues };
+  return { result, pattern, issues, ...unmatched };
 }
 
 /** The flights behind a field-map beam's peaks, for the JSON document and the report. */

@@ -5,6 +5,7 @@
 import type { GJLookup } from './gJLookup';
 import type { BeamGeometry, PatternInput, SpeedDistribution } from '../physics/beam';
 import { solveLevel, type HyperfineLevelSpec, type SublevelState } from '../physics/engine';
+import type { Range } from '../format/ast';
 import type { BeamModel, BeamSource } from '../model/types';
 import { hyperfineSpec } from './levelSpec';
 
@@ -14,6 +15,15 @@ export interface BeamInputs {
   highLabels: string[];
   /** The level as the engine sees it (a magnet built from sources flies its sublevels through the field). */
   spec: HyperfineLevelSpec;
+  /** `populations` entries that match no sublevel of the level (they would be dropped without a word). */
+  unmatchedPopulations: UnmatchedPopulation[];
+}
+
+export interface UnmatchedPopulation {
+  range: Range;
+  /** `F = 3` or `F = 2, m_F = +5`, and the F (or J) values the level has. */
+  named: string;
+  has: string;
 }
 
 /** Undefined when the beam lacks something it needs (the model has reported what). */
@@ -47,7 +57,31 @@ export function beamInputs(beam: BeamModel, gJOf: GJLookup): BeamInputs | undefi
     },
     highLabels: solved.states.map((s) => s.high.text),
     spec,
+    unmatchedPopulations: unmatchedPopulations(beam, solved.states),
   };
+}
+
+function lowPair(s: SublevelState): [twoF: number, twoM: number, letter: string] {
+  return s.low.scheme === 'F' ? [s.low.twoF, s.low.twoMF, 'F'] : [s.low.twoJ, s.low.twoMJ, 'J'];
+}
+
+function half(two: number, signed = false): string {
+  const text = two % 2 === 0 ? String(Math.abs(two) / 2) : `${Math.abs(two)}/2`;
+  return two < 0 ? `-${text}` : signed && two > 0 ? `+${text}` : text;
+}
+
+function unmatchedPopulations(beam: BeamModel, states: SublevelState[]): UnmatchedPopulation[] {
+  if (!beam.populations || states.length === 0) return [];
+  const pairs = states.map(lowPair);
+  const letter = pairs[0]![2];
+  const totals = [...new Set(pairs.map(([twoF]) => twoF))].sort((a, b) => a - b);
+  return beam.populations
+    .filter((p) => !pairs.some(([twoF, twoM]) => p.twoF === twoF && (p.twoM === undefined || p.twoM === twoM)))
+    .map((p) => ({
+      range: p.range,
+      named: `${letter} = ${half(p.twoF)}${p.twoM !== undefined ? `, m_${letter} = ${half(p.twoM, true)}` : ''}`,
+      has: `${letter} = ${totals.map((t) => half(t)).join(', ')}`,
+    }));
 }
 
 /** The file's population for a state, matched on its low-field label (F, m_F or J, m_J); 1 when the file sets none. */

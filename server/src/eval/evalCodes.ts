@@ -11,6 +11,7 @@ export const EVAL_RULES = {
   'beam-one-peak': { severity: 'warning', summary: 'All sublevels of a beam land in one peak on the detector although they deflect differently: the peak is not resolved.' },
   'beam-slits-too-wide': { severity: 'error', summary: 'Slits so wide for their separation that the collimated beam is not narrow.' },
   'beam-misses-detector': { severity: 'warning', summary: 'A detector placed where (almost) no atoms arrive.' },
+  'beam-population-unmatched': { severity: 'warning', summary: 'A `populations` entry names an F (or F, m_F) the beam\u2019s level does not have; it is not used.' },
   'resonance-unreachable': { severity: 'warning', summary: 'No transition reaches the given frequency in the field range.' },
   'resonance-no-such-pair': { severity: 'error', summary: 'The named sublevels have no magnetic-dipole or two-photon transition.' },
   'hyperfine-between-levels-assumed': { severity: 'info', summary: 'A whole term\u2019s hyperfine coupling between J levels rests on the stated assumption a_L = a_SD.' },

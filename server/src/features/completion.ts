@@ -11,6 +11,7 @@ import type { BlockKind, BlockNode } from '../format/ast';
 import { readNumber, readNumberPrefix, startsLikeNumber } from '../format/numbers';
 import { BLOCK_KEYS, BLOCK_WORDS, isBlockWord, LEVEL_KEYS, LEVEL_WORD, USE_WORD } from '../format/schema';
 import type { Token } from '../format/scanner';
+import { PROFILE_PARAMETERS, SPECTRAL_PARAMETERS } from '../model/fitTypes';
 import type { LevelModel, SetupModel } from '../model/types';
 import { parseLevelDesignation } from '../physics/configuration';
 import { item, unitItems, wordItems } from './completion/items';
@@ -122,7 +123,25 @@ function valueCompletions(c: LineContext, model: SetupModel | undefined, block: 
       return levelNameItems(model, c, beam?.species);
     }
     case 'resonance.level':
+    case 'trap.level':
+    case 'data.level':
       return empty ? levelNameItems(model, c) : [];
+    case 'slower.line':
+      return empty ? (model?.lines ?? []).map((l, i) => item(l.name, CompletionItemKind.Variable, c.replace, { order: i })) : [];
+    case 'magnet.sources':
+    case 'trap.sources':
+    case 'slower.sources':
+      return namesInList(valueTokens, words, (model?.sources ?? []).map((s) => s.name), c);
+    case 'fit.data':
+      return namesInList(valueTokens, words, (model?.data ?? []).map((d) => d.name), c);
+    case 'fit.free':
+      return namesInList(valueTokens, words, [...new Set<string>([...SPECTRAL_PARAMETERS, ...PROFILE_PARAMETERS])], c);
+    case 'slower.design':
+      return empty ? wordItems(['decreasing', 'increasing', 'spin_flip'], c.replace, 'the shape of the field profile') : [];
+    case 'slower.repump':
+      return empty ? wordItems(['on', 'off'], c.replace) : [];
+    case 'trap.gravity':
+      return empty ? wordItems(['-z', 'z', 'x', '-x', 'y', '-y', 'off'], c.replace, 'direction of gravity, three numbers, or off') : [];
     case 'line.spectrum':
       return empty ? wordItems(['across', 'along'], c.replace, 'look across or along the field') : [];
     case 'line.light':
@@ -132,6 +151,8 @@ function valueCompletions(c: LineContext, model: SetupModel | undefined, block: 
       return words.length === 1 && words[0]!.text === 'beam' ? (model?.beams ?? []).map((b, i) => item(b.name, CompletionItemKind.Variable, c.replace, { order: i })) : [];
     case 'resonance.two_photon':
       return empty ? wordItems(['on', 'off'], c.replace) : [];
+    case 'data.beam':
+      return empty ? (model?.beams ?? []).map((b, i) => item(b.name, CompletionItemKind.Variable, c.replace, { order: i })) : [];
     case 'beam.magnet':
       return empty ? (model?.magnets ?? []).map((m, i) => item(m.name, CompletionItemKind.Variable, c.replace, { order: i })) : [];
     case 'beam.source':
@@ -157,6 +178,14 @@ function valueCompletions(c: LineContext, model: SetupModel | undefined, block: 
     default:
       return [];
   }
+}
+
+/** Names for a comma-separated list (`sources = a, |`): at its start or after a comma, those not yet written. */
+function namesInList(valueTokens: Token[], words: Token[], names: string[], c: LineContext): CompletionItem[] {
+  const last = valueTokens[valueTokens.length - 1];
+  if (last && last.kind !== 'comma') return [];
+  const written = new Set(words.map((w) => w.text));
+  return names.filter((n) => !written.has(n)).map((n, i) => item(n, CompletionItemKind.Variable, c.replace, { order: i }));
 }
 
 /** `level <name>: <configuration> |` → terms; after the term → the level's keys. */

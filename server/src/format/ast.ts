@@ -32,7 +32,8 @@ export interface ParsedNumber {
 export type ValuePart =
   | ({ kind: 'number'; number: ParsedNumber } & Spanned)
   | ({ kind: 'quantity'; number: ParsedNumber; unit: Spanned } & Spanned)
-  | ({ kind: 'word' } & Spanned);
+  /** `unreadable`: a number that cannot be used (`1e400 T`), already reported where it was read. */
+  | ({ kind: 'word'; unreadable?: true } & Spanned);
 
 /** `key = value`. `groups` are the comma-separated pieces of the value, each a sequence of parts. */
 export interface SettingNode {

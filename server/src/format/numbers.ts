@@ -6,9 +6,17 @@
  */
 import type { ParsedNumber } from './ast';
 
-/** sign, mantissa, optional (uncertainty), optional exponent — anchored at the start only. */
-const DECIMAL_PREFIX = /^([+-]?)(\d+(?:\.\d*)?|\.\d+)(?:\((\d+(?:\.\d+)?)\))?(?:[eE]([+-]?\d+))?/;
-const FRACTION = /^([+-]?)(\d+)\/(\d+)$/;
+/**
+ * sign, mantissa, optional (uncertainty), optional exponent — anchored at the start only. The
+ * minus sign U+2212 (what papers and typesetting print, so what a pasted value holds) is a minus.
+ */
+const DECIMAL_PREFIX = /^([+\-\u2212]?)(\d+(?:\.\d*)?|\.\d+)(?:\((\d+(?:\.\d+)?)\))?(?:[eE]([+\-\u2212]?\d+))?/;
+const FRACTION = /^([+\-\u2212]?)(\d+)\/(\d+)$/;
+
+/** `-` for either minus sign, so that Number() reads it. */
+function asciiMinus(text: string): string {
+  return text.replace('\u2212', '-');
+}
 
 export type NumberReading =
   | { ok: true; number: ParsedNumber }
@@ -26,9 +34,11 @@ function decimalsOf(mantissa: string): number {
 }
 
 function fromDecimalMatch(m: RegExpExecArray): NumberReading {
-  const [, sign = '', mantissa = '', unc, exp] = m;
+  const [, rawSign = '', mantissa = '', unc, rawExp] = m;
+  const sign = asciiMinus(rawSign);
+  const exp = rawExp === undefined ? undefined : asciiMinus(rawExp);
   const value = Number(`${sign}${mantissa}${exp !== undefined ? `e${exp}` : ''}`) + 0; // +0 turns -0 into 0
-  if (!Number.isFinite(value)) return { ok: false, reason: 'is too large to represent' };
+  if (!Number.isFinite(value)) return { ok: false, reason: 'is too large to represent (numbers end near 1.8e308): check the exponent' };
   const number: ParsedNumber = { value };
   if (unc !== undefined) {
     const power = exp !== undefined ? Number(exp) : 0;
@@ -56,7 +66,7 @@ export function readNumber(text: string): NumberReading | undefined {
     if (den === 0) return { ok: false, reason: 'divides by zero' };
     if (!Number.isSafeInteger(num) || !Number.isSafeInteger(den)) return { ok: false, reason: 'is too large to be exact' };
     const g = gcd(num, den) || 1;
-    const n = (sign === '-' ? -num : num) / g + 0;
+    const n = (sign === '' || sign === '+' ? num : -num) / g + 0;
     const d = den / g;
     return { ok: true, number: { value: n / d, fraction: { num: n, den: d } } };
   }
@@ -77,5 +87,5 @@ export function readNumberPrefix(text: string): { reading: NumberReading; length
 
 /** True when the text starts like a number (optional sign, then a digit or `.digit`). */
 export function startsLikeNumber(text: string): boolean {
-  return /^[+-]?(\d|\.\d)/.test(text);
+  return /^[+\-\u2212]?(\d|\.\d)/.test(text);
 }

@@ -274,6 +274,45 @@ function toSI(value: number, unit: UnitValue, d: Dimension): number | undefined 
 }
 
 /**
+ * A word right after the number of a one-quantity setting that is no unit Sublevel knows (`8 Tt`):
+ * it stands where the unit goes, so it is the unit that is wrong. Read apart it gave "needs a unit"
+ * with a fix that put one before the word, and an unused word with a fix that deleted it.
+ */
+export function wordForUnit(word: ValuePart, expected: Dimension, what?: string): Problem | undefined {
+  if (word.kind !== 'word' || word.unreadable || !/^[\p{L}µ°%]/u.test(word.text) || expected === 'dimensionless') return undefined;
+  const info = DIMENSIONS[expected];
+  const label = what ?? info.label;
+  const suggestions = suggestNames(word.text, [...new Set([...info.examples, ...unitNamesOf(expected)])]);
+  const hint = suggestions.length > 0 ? didYouMeanText(suggestions) : `: ${label} needs ${orList(info.examples)}`;
+  return makeProblem('unit-unknown', `unknown unit '${clip(word.text)}'${hint}`, word.range, { data: { suggestions } });
+}
+
+/** Unit names (completion's list) whose dimension is the one expected. */
+function unitNamesOf(expected: Dimension): string[] {
+  return COMMON_UNITS.filter((name) => {
+    const e = evaluateUnit(name);
+    return e.ok && toSI(1, e.value, expected) !== undefined;
+  });
+}
+
+/**
+ * "Did you mean" names of the dimension the setting needs only: `8 CM` for a field once offered
+ * `cm`, a fix that made a length of a field. With none left the message says what the setting takes.
+ */
+function fittingSuggestions(e: Extract<UnitEvaluation, { ok: false }>, unitText: string, expected: Dimension, label: string, examples: string): { message: string; suggestions: string[] } {
+  const all = [...(e.suggestions ?? [])];
+  if (e.code !== 'unit-unknown' || all.length === 0) return { message: e.message, suggestions: all };
+  const fits = all.filter((name) => {
+    const whole = evaluateUnit(unitText.slice(0, e.start) + name + unitText.slice(e.end));
+    return whole.ok && (expected === 'dimensionless' ? whole.value.dims.every((d) => d === 0) : toSI(1, whole.value, expected) !== undefined);
+  });
+  if (fits.length === all.length) return { message: e.message, suggestions: all };
+  const name = unitText.slice(e.start, e.end);
+  const message = fits.length > 0 ? `unknown unit '${clip(name)}'${didYouMeanText(fits)}` : `unknown unit '${clip(name)}': ${label} needs ${examples}`;
+  return { message, suggestions: fits };
+}
+
+/**
  * Reads one value part as a quantity of the expected dimension, in SI.
  * `what` names the setting in messages (default: the dimension, e.g. "gradient").
  */
@@ -292,15 +331,18 @@ export function readQuantity(part: ValuePart, expected: Dimension, what?: string
     };
   }
   if (part.kind === 'word') {
+    // Its number was reported where it was read; a second problem would say the same.
+    if (part.unreadable) return {};
     const prefix = readNumberPrefix(part.text);
     if (prefix && prefix.reading.ok && prefix.length < part.text.length) {
       // A number glued to something that is not a unit we know, e.g. `401.75Mhz`.
       const unitText = part.text.slice(prefix.length);
       const e = evaluateUnit(unitText);
       if (!e.ok) {
+        const f = fittingSuggestions(e, unitText, expected, label, examples);
         return {
-          problem: makeProblem(e.code, e.message, subRange(part.range, prefix.length + e.start, prefix.length + e.end), {
-            data: { suggestions: [...(e.suggestions ?? [])] },
+          problem: makeProblem(e.code, f.message, subRange(part.range, prefix.length + e.start, prefix.length + e.end), {
+            data: { suggestions: f.suggestions },
           }),
         };
       }
@@ -311,9 +353,10 @@ export function readQuantity(part: ValuePart, expected: Dimension, what?: string
   }
   const e = evaluateUnit(part.unit.text);
   if (!e.ok) {
+    const f = fittingSuggestions(e, part.unit.text, expected, label, examples);
     return {
-      problem: makeProblem(e.code, e.message, subRange(part.unit.range, e.start, e.end), {
-        data: { suggestions: [...(e.suggestions ?? [])] },
+      problem: makeProblem(e.code, f.message, subRange(part.unit.range, e.start, e.end), {
+        data: { suggestions: f.suggestions },
       }),
     };
   }

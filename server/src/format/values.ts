@@ -31,20 +31,29 @@ export function rangeOn(ls: LineSpans, start: number, end: number): Range {
 type Classified =
   | { kind: 'number'; number: ParsedNumber }
   | { kind: 'quantity'; number: ParsedNumber; unitStart: number }
-  | { kind: 'word' };
+  | { kind: 'word'; unreadable?: true };
+
+/** Words a program prints for a number it could not make; never a value here. */
+const NOT_A_NUMBER = /^[+\-\u2212]?(nan|inf|infinity|∞)$/i;
 
 /** What one atom is on its own; reports numbers that cannot be used. */
-function classifyAtom(atom: Token, ls: LineSpans, problems: Problem[]): Classified {
+function classifyAtom(atom: Token, next: Token | undefined, ls: LineSpans, problems: Problem[]): Classified {
   const whole = readNumber(atom.text);
   if (whole) {
     if (whole.ok) return { kind: 'number', number: whole.number };
     problems.push(makeProblem('syntax-bad-number', `the number ${clip(atom.text)} ${whole.reason}`, rangeOn(ls, atom.start, atom.end)));
-    return { kind: 'word' };
+    return { kind: 'word', unreadable: true };
   }
   const prefix = readNumberPrefix(atom.text);
   if (prefix && isUnitText(atom.text.slice(prefix.length))) {
     if (prefix.reading.ok) return { kind: 'quantity', number: prefix.reading.number, unitStart: atom.start + prefix.length };
     problems.push(makeProblem('syntax-bad-number', `the number in ${clip(atom.text)} ${prefix.reading.reason}`, rangeOn(ls, atom.start, atom.end)));
+    return { kind: 'word', unreadable: true };
+  }
+  // Only before a unit: a lone `inf` may be a name the file gives something.
+  if (NOT_A_NUMBER.test(atom.text) && next && isUnitAfterNumber(next.text)) {
+    problems.push(makeProblem('syntax-bad-number', `'${clip(atom.text)}' is not a number: write the value in digits, e.g. 0.45 or 1.2e-3`, rangeOn(ls, atom.start, atom.end)));
+    return { kind: 'word', unreadable: true };
   }
   return { kind: 'word' };
 }
@@ -59,16 +68,25 @@ function readGroup(atoms: Token[], ls: LineSpans, problems: Problem[]): ValuePar
   const parts: ValuePart[] = [];
   for (let i = 0; i < atoms.length; i++) {
     const atom = atoms[i]!;
-    const c = classifyAtom(atom, ls, problems);
+    const next = atoms[i + 1];
+    const c = classifyAtom(atom, next, ls, problems);
     if (c.kind === 'quantity') {
       parts.push({ kind: 'quantity', number: c.number, unit: spanOf(ls, c.unitStart, atom.end), text: atom.text, range: rangeOn(ls, atom.start, atom.end) });
+      continue;
+    }
+    if (c.kind === 'word' && c.unreadable) {
+      // The unit after an unusable number belongs to it: one value, not a value and a stray unit.
+      const gluedUnit = readNumber(atom.text) === undefined && !NOT_A_NUMBER.test(atom.text);
+      const withUnit = next !== undefined && !gluedUnit && isUnitAfterNumber(next.text);
+      const end = withUnit ? next.end : atom.end;
+      if (withUnit) i++;
+      parts.push({ kind: 'word', unreadable: true, ...spanOf(ls, atom.start, end) });
       continue;
     }
     if (c.kind === 'word') {
       parts.push({ kind: 'word', text: atom.text, range: rangeOn(ls, atom.start, atom.end) });
       continue;
     }
-    const next = atoms[i + 1];
     if (next && isUnitAfterNumber(next.text)) {
       parts.push({ kind: 'quantity', number: c.number, unit: spanOf(ls, next.start, next.end), ...spanOf(ls, atom.start, next.end) });
       i++;

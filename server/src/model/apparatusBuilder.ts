@@ -184,6 +184,11 @@ function readSource(s: SettingNode, problems: ProblemList): { source: Valued<Bea
     problems.add('beam-source-malformed', msg, s.valueText.range, { data: { suggestions: ['oven 450 K', 'jet 1500 m/s spread 10 %', 'speed 800 m/s'] } });
     return undefined;
   };
+  // A value out of range in a well-formed source: said at the value, with no template that would overwrite the user's numbers.
+  const outOfRange = (msg: string, part: ValuePart): undefined => {
+    problems.add('beam-source-malformed', msg, part.range);
+    return undefined;
+  };
   const kind = parts[0];
   if (!kind || kind.kind !== 'word') return bad(`source must be ${SOURCE_FORMS}`);
   let read: Valued<number> | undefined;
@@ -201,23 +206,23 @@ function readSource(s: SettingNode, problems: ProblemList): { source: Valued<Bea
     case 'oven': {
       const t = q(1, 'temperature', 'a temperature, e.g. oven 450 K');
       if (t === undefined) return undefined;
-      if (t <= 0) return bad(`an oven temperature must be above absolute zero, got ${parts[1]!.text}`);
+      if (t <= 0) return outOfRange(`an oven temperature must be above absolute zero, got ${parts[1]!.text}`, parts[1]!);
       return { ...done({ kind: 'oven', temperatureK: t }), ...(read ? { temperature: read } : {}) };
     }
     case 'jet': {
       const v = q(1, 'speed', 'a mean speed, e.g. jet 1500 m/s spread 10 %');
       if (v === undefined) return undefined;
-      if (v <= 0) return bad(`a jet speed must be positive, got ${parts[1]!.text}`);
+      if (v <= 0) return outOfRange(`a jet speed must be positive, got ${parts[1]!.text}`, parts[1]!);
       if (parts[2]?.text !== 'spread') return bad('a jet needs its speed spread: jet <speed> spread <percent>');
       const spread = q(3, 'dimensionless', 'a relative spread, e.g. spread 10 %');
       if (spread === undefined) return undefined;
-      if (spread <= 0 || spread >= 1) return bad(`a jet's relative speed spread must be between 0 and 100 %, got ${parts[3]!.text}`);
+      if (spread <= 0 || spread >= 1) return outOfRange(`a jet's relative speed spread must be between 0 and 100 %, got ${parts[3]!.text}`, parts[3]!);
       return done({ kind: 'jet', speedMPerS: v, spreadFraction: spread });
     }
     case 'speed': {
       const v = q(1, 'speed', 'a speed, e.g. speed 800 m/s');
       if (v === undefined) return undefined;
-      if (v <= 0) return bad(`a beam speed must be positive, got ${parts[1]!.text}`);
+      if (v <= 0) return outOfRange(`a beam speed must be positive, got ${parts[1]!.text}`, parts[1]!);
       return done({ kind: 'speed', speedMPerS: v });
     }
     default:
@@ -266,6 +271,17 @@ function readDetector(s: SettingNode, beam: BeamModel, problems: ProblemList): v
   }
 }
 
+/** What is wrong with one well-shaped entry, in words; undefined when nothing is (`twoM` null: not a half-integer). */
+function populationMistake(twoF: number, twoM: number | null | undefined, weight: number): string | undefined {
+  if (twoF < 0) return 'F cannot be negative';
+  if (twoM === null) return 'm_F must be a whole or half-integer';
+  const f = twoF % 2 === 0 ? String(twoF / 2) : `${twoF}/2`;
+  if (twoM !== undefined && Math.abs(twoM) > twoF) return `m_F runs from -F to F, so from -${f} to ${f} for F = ${f}`;
+  if (twoM !== undefined && (twoF - twoM) % 2 !== 0) return `m_F differs from F = ${f} by a whole number`;
+  if (!(weight >= 0)) return `a weight cannot be negative, got ${weight}`;
+  return undefined;
+}
+
 /** `populations = F m weight, ...` or `F weight` for a whole F manifold. */
 function readPopulations(s: SettingNode, problems: ProblemList): BeamModel['populations'] {
   const out: NonNullable<BeamModel['populations']> = [];
@@ -277,8 +293,10 @@ function readPopulations(s: SettingNode, problems: ProblemList): BeamModel['popu
     const twoF = ok ? twice(nums[0]!) : undefined;
     const twoM = ok && g.length === 3 ? twice(nums[1]!) : undefined;
     const weight = nums[nums.length - 1]!;
-    if (!ok || twoF === undefined || twoF < 0 || (g.length === 3 && (twoM === undefined || Math.abs(twoM) > twoF || (twoF - twoM) % 2 !== 0)) || !(weight >= 0)) {
-      problems.add('beam-populations-malformed', 'write populations = <F> <m_F> <weight>, … (or <F> <weight> for every m_F of F), e.g. populations = 2 +2 1, 2 +1 0.1', range);
+    const wrong = !ok || twoF === undefined ? undefined : populationMistake(twoF, g.length === 3 ? twoM ?? null : undefined, weight);
+    if (!ok || twoF === undefined || wrong) {
+      const shape = 'write populations = <F> <m_F> <weight>, … (or <F> <weight> for every m_F of F), e.g. populations = 2 +2 1, 2 +1 0.1';
+      problems.add('beam-populations-malformed', wrong ? `${wrong}: ${shape}` : shape, range);
       return undefined;
     }
     out.push({ twoF, ...(twoM !== undefined ? { twoM } : {}), weight, range });

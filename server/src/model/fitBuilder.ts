@@ -39,11 +39,15 @@ export function buildFit(node: BlockNode, data: NameIndex<DataModel>, problems: 
     return undefined;
   }
   const f: FitRequestModel = { name: node.name.text, node, nameRange: node.name.range, data: [], free: [], starts: [], rangeT: { ...DEFAULT_RESONANCE_RANGE_T } };
+  // A name that does not resolve has its own problem; "names no data" would then be untrue.
+  const named = { data: false, free: false };
   const addData = (ref: Spanned): void => {
+    named.data = true;
     const d = data.resolve(ref, problems);
     if (d && !f.data.includes(d)) f.data.push(d);
   };
   const addFree = (ref: Spanned): void => {
+    named.free = true;
     if (!isParameter(ref.text)) {
       reportParameter(ref, problems);
       return;
@@ -73,8 +77,8 @@ export function buildFit(node: BlockNode, data: NameIndex<DataModel>, problems: 
         break;
     }
   }
-  if (f.data.length === 0) problems.add('fit-incomplete', `fit '${f.name}' names no data: data = <data block>[, …]`, f.nameRange);
-  if (f.free.length === 0) problems.add('fit-incomplete', `fit '${f.name}' frees no parameter: free = field, g_J, A, …`, f.nameRange);
+  if (!named.data) problems.add('fit-incomplete', `fit '${f.name}' names no data: data = <data block>[, …]`, f.nameRange);
+  if (!named.free) problems.add('fit-incomplete', `fit '${f.name}' frees no parameter: free = field, g_J, A, …`, f.nameRange);
   checkApplicable(f, problems);
   return f;
 }

@@ -10,6 +10,7 @@ import type { ProblemList } from './problems';
 import { subRange } from './ranges';
 import { readPerLevel } from './perLevelReader';
 import { readSettingNumber, readSettingQuantity } from './settingReaders';
+import { splitTermOf, writtenOffset } from './splitTerm';
 import type { LevelModel, SpeciesModel, Valued } from './types';
 
 export function buildLevel(node: LevelNode, species: SpeciesModel, problems: ProblemList): LevelModel | undefined {
@@ -61,12 +62,22 @@ function readDesignation(level: LevelModel, problems: ProblemList): void {
     problems.add('level-needs-term', `level '${level.name}' needs a term symbol after the colon, such as 2S1/2 or 3p 2P°3/2`, level.node.name?.range ?? level.node.range);
     return;
   }
-  const parsed = designationOf(d.text);
+  const asWritten = designationOf(d.text);
+  const split = splitTermOf(d.text, asWritten.issues.filter((i) => i.severity === 'error').length);
+  const parsed = split ? designationOf(split.text) : asWritten;
+  if (split) {
+    problems.add('term-blank-inside', `a term symbol is written without blanks: read as ${split.term}`, subRange(d, split.start, split.end), {
+      data: { suggestions: [split.term] },
+    });
+  }
   level.configuration = parsed.configuration;
   level.term = parsed.term;
+  const parsedText = split ? split.text : d.text;
   for (const issue of parsed.issues) {
-    problems.addWith(issue.code, issue.severity, issue.message, subRange(d, issue.start, issue.end), {
-      ...(issue.suggestions ? { data: { suggestions: issue.suggestions } } : {}),
+    const range = subRange(d, writtenOffset(split, issue.start, false), writtenOffset(split, issue.end, true));
+    const suggestions = issue.suggestions && issue.code.startsWith('term-j-') ? issue.suggestions.filter((j) => readsClean(parsedText, issue.start, issue.end, j)) : issue.suggestions;
+    problems.addWith(issue.code, issue.severity, issue.message, range, {
+      ...(suggestions && suggestions.length > 0 ? { data: { suggestions } } : {}),
     });
   }
   const hasError = parsed.issues.some((i) => i.severity === 'error');
@@ -89,6 +100,14 @@ function readDesignation(level: LevelModel, problems: ProblemList): void {
     problems.add('r2-needs-term', `r2 adds the diamagnetic term to a whole term only: write the term without J and give zeta or E_J, or remove r2`, level.r2.range);
   }
   level.valid = !!parsed.term && !hasError && (parsed.term.twoJ !== null || level.kind === 'term');
+}
+
+/**
+ * A J the term allows is offered only when the level then reads without error: `3p 2Q3/2` allows
+ * J = 23/2 for 2Q, but 3p makes no 2Q, so that fix would trade one error for another.
+ */
+function readsClean(text: string, start: number, end: number, replacement: string): boolean {
+  return !designationOf(text.slice(0, start) + replacement + text.slice(end)).issues.some((i) => i.severity === 'error');
 }
 
 function jHint(twoS: number, L: number): string {

@@ -28,6 +28,7 @@ export const MODEL_RULES = {
   'species-mass-number': { severity: 'warning', summary: 'A mass far from the species\u2019 mass number.' },
   'level-needs-term': { severity: 'error', summary: 'A level has no term symbol.' },
   'level-needs-j': { severity: 'error', summary: 'A level term without J (and without zeta).' },
+  'term-blank-inside': { severity: 'warning', summary: 'A term symbol typed with a blank inside (2P 3/2); read without it.' },
   'zeta-needs-term': { severity: 'warning', summary: 'zeta given for a level with J; it applies to a whole term.' },
   'term-hyperfine-unsupported': { severity: 'warning', summary: 'A, B, C or g_J on a whole term are not used (a term takes A_J, B_J).' },
   'term-level-value-malformed': { severity: 'error', summary: 'A_J, B_J or E_J not written as J value groups.' },

@@ -3,7 +3,7 @@
  * reporting a plain-words problem at the value's range when the value does not fit.
  */
 import type { ParsedNumber, SettingNode, ValuePart } from '../format/ast';
-import { readQuantity, type Dimension } from '../format/units';
+import { readQuantity, wordForUnit, type Dimension } from '../format/units';
 import type { ProblemList } from './problems';
 import type { Valued } from './types';
 
@@ -33,6 +33,14 @@ export function readSettingQuantity(
   problems: ProblemList,
   what: string,
 ): Valued<number> | undefined {
+  const parts = setting.groups.flat();
+  if (setting.groups.length === 1 && parts.length === 2 && parts[0]!.kind === 'number') {
+    const unit = wordForUnit(parts[1]!, dimension);
+    if (unit) {
+      problems.push(unit);
+      return undefined;
+    }
+  }
   const part = singlePart(setting, problems, what);
   if (!part) return undefined;
   return readPartQuantity(part, dimension, problems, setting.key.text);
@@ -58,7 +66,7 @@ export function readPartQuantity(
 /** A plain number (no unit). */
 export function readSettingNumber(setting: SettingNode, problems: ProblemList, what: string): Valued<number> | undefined {
   const part = singlePart(setting, problems, what);
-  if (!part) return undefined;
+  if (!part || (part.kind === 'word' && part.unreadable)) return undefined;
   if (part.kind !== 'number') {
     const got = part.kind === 'quantity' ? `a quantity with unit ${part.unit.text}` : `'${part.text}'`;
     problems.add('value-not-number', `${setting.key.text} needs a plain number (${what}), got ${got}`, part.range);
@@ -73,7 +81,7 @@ export function readSettingNumber(setting: SettingNode, problems: ProblemList, w
  */
 export function readSettingSpin(setting: SettingNode, problems: ProblemList, what: string): Valued<number> | undefined {
   const part = singlePart(setting, problems, what);
-  if (!part) return undefined;
+  if (!part || (part.kind === 'word' && part.unreadable)) return undefined;
   if (part.kind !== 'number') {
     problems.add('value-not-number', `${setting.key.text} needs a spin such as 0, 1/2, 1 or 3/2 (${what}), got '${part.text}'`, part.range);
     return undefined;

@@ -26,8 +26,8 @@ export function readSpectrumRequest(line: LineModel, settings: readonly SettingN
     return undefined;
   }
   const direction = readSettingWord(spectrumSetting, DIRECTIONS, problems);
-  if (!direction) return undefined;
-  const req: SpectrumRequest = { range: spectrumSetting.range, direction, light: 'all' };
+  // With a bad direction the other settings are still read, so their mistakes show now, not after this one is fixed.
+  const req: SpectrumRequest = { range: spectrumSetting.range, direction: direction ?? 'across', light: 'all' };
   for (const s of settings) {
     switch (s.key.text) {
       case 'light': {
@@ -77,7 +77,7 @@ export function readSpectrumRequest(line: LineModel, settings: readonly SettingN
         break;
     }
   }
-  return req;
+  return direction ? req : undefined;
 }
 
 function positiveValue(v: Valued<number> | undefined, what: string, problems: ProblemList): Valued<number> | undefined {

@@ -1,0 +1,171 @@
+/**
+ * Half-written and mistyped setups as a user types them (invented numbers): each mistake gets
+ * one diagnostic at its own text, in plain words, and only quick fixes that fix it.
+ */
+import { describe, expect, it } from 'vitest';
+import { codeActions } from '../../server/src/features/codeActions';
+import { diagnostics } from '../../server/src/features/diagnostics';
+import { analysisOf, applyEdits, editsOf, URI } from './helpers';
+
+interface Case {
+  name: string;
+  text: string;
+  /** Errors and warnings (notes left out): `line:col-col code [the text it covers]`, 1-based. */
+  findings: string[];
+  /** Every quick fix offered for the findings: `code: title → the changed line`. */
+  fixes?: string[];
+  /** Words the messages must hold. */
+  says?: string[];
+}
+
+const CASES: Case[] = [
+  {
+    name: 'a number too large, with its unit apart or glued: one error each, and no fix that drops the unit',
+    text: 'field huge = 1e400 T\nfield glued = 1e400T\nmagnet m\n  field = 1/0 T\n  gradient = 10 T/m\n  length = 5 cm\n',
+    findings: ['1:14-19 syntax-bad-number [1e400]', '2:15-21 syntax-bad-number [1e400T]', '4:11-14 syntax-bad-number [1/0]'],
+    fixes: [],
+    says: ['too large to represent', 'check the exponent', 'divides by zero'],
+  },
+  {
+    name: 'NaN and inf where a number goes: one error each',
+    text: 'field a = NaN T\nfield b = -inf G\n',
+    findings: ['1:11-14 syntax-bad-number [NaN]', '2:11-15 syntax-bad-number [-inf]'],
+    fixes: [],
+    says: ["'NaN' is not a number", 'write the value in digits'],
+  },
+  {
+    name: 'the U+2212 minus of a pasted value reads as a minus',
+    text: 'species Na23\n  level p: 3p 2P°3/2  A = \u221218.53 MHz\nfield bias = \u22123.2 G\n',
+    findings: [],
+  },
+  {
+    // Term symbols are written without blanks (²ˢ⁺¹L_J, textbook notation). Read apart, `2P` was taken
+    // for a subshell, with three errors and a fix that lower-cased the term's letter.
+    name: 'a term symbol typed with a blank inside: one warning, read as meant, and the fix that joins it',
+    text: 'species Na23\n  level a: 3p 2P 3/2\n  level b: 3p 2P°3 /2  # kept\n  level c: 2 S1/2\n',
+    findings: ['2:15-21 term-blank-inside [2P 3/2]', '3:15-22 term-blank-inside [2P°3 /2]', '4:12-18 term-blank-inside [2 S1/2]'],
+    fixes: [
+      "term-blank-inside: Replace with '2P3/2' →   level a: 3p 2P3/2",
+      "term-blank-inside: Replace with '2P°3/2' →   level b: 3p 2P°3/2  # kept",
+      "term-blank-inside: Replace with '2S1/2' →   level c: 2S1/2",
+    ],
+    says: ['read as 2P3/2'],
+  },
+  {
+    // K39 ground: I = 3/2, J = 1/2, so F = 1, 2 (angular momentum addition, textbook); |m_F| ≤ F.
+    name: 'populations that name a sublevel the level lacks are said, not dropped; a wrong entry says what is wrong',
+    text: [
+      'species K39',
+      '  level ground: 4s 2S1/2',
+      'magnet m',
+      '  field = 0.1 T',
+      '  gradient = 100 T/m',
+      '  length = 5 cm',
+      'beam b',
+      '  level = ground',
+      '  source = oven 400 K',
+      '  slits = 80 um, 50 um apart 40 cm',
+      '  magnet = m',
+      '  drift = 50 cm',
+      '  detector = 10 um',
+      '  populations = 3 0 1, 2 1 1, 1 1',
+      'beam c',
+      '  level = ground',
+      '  source = oven 400 K',
+      '  slits = 80 um, 50 um apart 40 cm',
+      '  magnet = m',
+      '  drift = 50 cm',
+      '  detector = 10 um',
+      '  populations = 2 1 1, 2 5 1',
+      '',
+    ].join('\n'),
+    findings: ['14:17-22 beam-population-unmatched [3 0 1]', '22:24-29 beam-populations-malformed [2 5 1]'],
+    says: ["beam 'b': level ground has no F = 3, m_F = 0 (it has F = 1, 2), so this population is not used", 'm_F runs from -F to F, so from -2 to 2 for F = 2'],
+  },
+  {
+    name: 'a beam source with a value out of range: said at the value, and no template that overwrites it',
+    text: 'beam b\n  source = oven -300 K\nbeam c\n  source = jet 1500 m/s spread 200 %\nbeam d\n  source = furnace 400 K\n',
+    findings: [
+      "1:6-7 beam-incomplete [b]",
+      '2:17-23 beam-source-malformed [-300 K]',
+      "3:6-7 beam-incomplete [c]",
+      '4:32-37 beam-source-malformed [200 %]',
+      "5:6-7 beam-incomplete [d]",
+      '6:12-25 beam-source-malformed [furnace 400 K]',
+    ],
+    fixes: [
+      'beam-source-malformed: Write source = oven 450 K →   source = oven 450 K',
+      'beam-source-malformed: Write source = jet 1500 m/s spread 10 % →   source = jet 1500 m/s spread 10 %',
+      'beam-source-malformed: Write source = speed 800 m/s →   source = speed 800 m/s',
+    ],
+    says: ['an oven temperature must be above absolute zero, got -300 K', "unknown source 'furnace'"],
+  },
+  {
+    name: 'a fit naming data or a parameter that do not exist: that name is the error, not a missing one',
+    text: 'fit f: nope -> field\nfit g: nope -> mass\nfit h\n',
+    findings: [
+      "1:8-12 name-unknown [nope]",
+      "2:8-12 name-unknown [nope]",
+      "2:16-20 fit-parameter-unknown [mass]",
+      "3:5-6 fit-incomplete [h]",
+      "3:5-6 fit-incomplete [h]",
+    ],
+  },
+  {
+    // 3p gives only ²P (one p electron, textbook); ²Q would need L = 12.
+    name: 'a J that the term allows but the configuration cannot make is not offered as a fix',
+    text: 'species Na23\n  level a: 3p 2Q3/2\n  level b: 3p 2P5/2\n',
+    findings: ['2:17-20 term-j-out-of-range [3/2]', '3:17-20 term-j-out-of-range [5/2]'],
+    fixes: ['term-j-out-of-range: Change J to 1/2 →   level b: 3p 2P1/2', 'term-j-out-of-range: Change J to 3/2 →   level b: 3p 2P3/2'],
+  },
+  {
+    name: 'a misspelt unit gets "did you mean" only among units of the dimension the setting needs',
+    text: 'field b = 8 CM\nmagnet m\n  field = 1 mt\n  gradient = 1 T/m\n  length = 8 CM\n',
+    findings: ['1:13-15 unit-unknown [CM]', '3:13-15 unit-unknown [mt]', '5:14-16 unit-unknown [CM]'],
+    fixes: ["unit-unknown: Change to 'mT' →   field = 1 mT", "unit-unknown: Change to 'cm' →   length = 8 cm"],
+    says: ["unknown unit 'CM': flux density needs T, mT or G"],
+  },
+  {
+    // `8 Tt` was "needs a unit" with a fix giving `8 T Tt`, and an unused `Tt` with a fix deleting it.
+    name: 'an unknown word where the unit goes is an unknown unit, with what the setting needs',
+    text: 'field c = 8 Tt\nfield d = 8 Tesla\nspecies Demo\n  mass = 23 amu\n',
+    findings: ['1:13-15 unit-unknown [Tt]', '2:13-18 unit-unknown [Tesla]', '4:13-16 unit-unknown [amu]'],
+    fixes: ["unit-unknown: Change to 'tesla' → field d = 8 tesla"],
+    says: ["unknown unit 'Tt': flux density needs T, mT or G", "unknown unit 'amu': mass needs u, Da or kg"],
+  },
+  {
+    name: 'a bad spectrum direction does not hide the mistakes of the other spectrum settings',
+    text: 'species Rb87\n  level g: 5s 2S1/2\n  level p: 5p 2P°3/2\nline D2: g -> p\n  spectrum = sideways\n  light = red\n  doppler = -3 K\n',
+    findings: ['5:14-22 value-not-allowed [sideways]', '6:11-14 value-not-allowed [red]', '7:13-17 value-out-of-range [-3 K]'],
+  },
+];
+
+function describeFindings(text: string): { findings: string[]; fixes: string[]; messages: string[] } {
+  const lines = text.split(/\r\n|\r|\n/);
+  const analysis = analysisOf(text);
+  const ds = diagnostics(analysis, URI).filter((d) => d.severity !== undefined && d.severity <= 2);
+  const fixes: string[] = [];
+  for (const d of ds) {
+    for (const a of codeActions(analysis, URI, { range: d.range, diagnostics: [d], only: ['quickfix'] })) {
+      const after = applyEdits(text, editsOf(a.edit)).split(/\r\n|\r|\n/);
+      fixes.push(`${String(d.code)}: ${a.title} → ${after[d.range.start.line]}`);
+    }
+  }
+  const findings = ds.map((d) => {
+    const { start, end } = d.range;
+    const covered = start.line === end.line ? lines[start.line]!.slice(start.character, end.character) : '…';
+    return `${start.line + 1}:${start.character + 1}-${end.character + 1} ${String(d.code)} [${covered}]`;
+  });
+  return { findings, fixes, messages: ds.map((d) => (typeof d.message === 'string' ? d.message : d.message.value)) };
+}
+
+describe('bad inputs', () => {
+  for (const c of CASES) {
+    it(c.name, () => {
+      const got = describeFindings(c.text);
+      expect(got.findings).toEqual(c.findings);
+      if (c.fixes) expect(got.fixes).toEqual(c.fixes);
+      for (const words of c.says ?? []) expect(got.messages.join('\n')).toContain(words);
+    });
+  }
+});
