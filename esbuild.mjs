@@ -42,7 +42,16 @@ await Promise.all([
     external: ['./cli-core.js', './cli-full.js'],
     banner: { js: '#!/usr/bin/env node' },
   }),
-  esbuild.build({ ...common, entryPoints: ['server/src/cli/bundles/core.ts'], outfile: 'dist/cli-core.js', plugins: [besideTheBundle('ml-matrix', './cli-ml-matrix.js')] }),
+  // The core bundle without whitespace and with shorter syntax (names kept): V8 parses every byte of
+  // it at each `check`, and 0.65 MB parse faster than 0.86 MB (docs/speed.md). Its .map maps stack traces back.
+  esbuild.build({
+    ...common,
+    entryPoints: ['server/src/cli/bundles/core.ts'],
+    outfile: 'dist/cli-core.js',
+    minifyWhitespace: true,
+    minifySyntax: true,
+    plugins: [besideTheBundle('ml-matrix', './cli-ml-matrix.js')],
+  }),
   esbuild.build({ ...common, entryPoints: ['server/src/cli/bundles/full.ts'], outfile: 'dist/cli-full.js', plugins: [besideTheBundle('ml-matrix', './cli-ml-matrix.js')] }),
   esbuild.build({ ...common, entryPoints: ['ml-matrix'], outfile: 'dist/cli-ml-matrix.js' }),
   // The diagram panel's page script and stylesheet, loaded by the webview (no Node APIs there).

@@ -38,11 +38,10 @@ export function termsOfEquivalentElectrons(l: number, n: number): LSTerm[] {
   if (cached) return cached.map((t) => ({ ...t }));
 
   const N = microstateTable(l, n);
-  const maxML = n * l; // loose upper bound is fine
   const terms: LSTerm[] = [];
-  for (let L = 0; L <= maxML; L++) {
+  for (let L = 0; L <= N.maxML; L++) {
     for (let twoS = n % 2; twoS <= n; twoS += 2) {
-      const count = N(L, twoS) - N(L + 1, twoS) - N(L, twoS + 2) + N(L + 1, twoS + 2);
+      const count = N.at(L, twoS) - N.at(L + 1, twoS) - N.at(L, twoS + 2) + N.at(L + 1, twoS + 2);
       if (count > 0) terms.push({ twoS, L, count });
     }
   }
@@ -95,14 +94,15 @@ export function microstateCount(terms: LSTerm[]): number {
 }
 
 /**
- * N(M_L, 2M_S) for l^n: number of ways to put n electrons in distinct spin-orbitals with the
- * given total projections. The spin-up and spin-down electrons fill the 2l+1 orbitals
- * independently, so N is a sum over (up, down) counts of products of subset counts: ways[k][M]
- * = number of k-orbital subsets of m_l = −l … l with Σ m_l = M (a small dynamic programme).
- * String-keyed maps over all spin-orbitals made 4f⁹ cost a CLI start-up tens of milliseconds
- * (docs/speed.md); the counts are exact integers either way.
+ * N(M_L, 2M_S) for l^n, M_L ≥ 0 and 2M_S ≥ 0: number of ways to put n electrons in distinct
+ * spin-orbitals with the given total projections. The spin-up and spin-down electrons fill the
+ * 2l+1 orbitals independently, so N is a sum over (up, down) counts of products of subset counts:
+ * ways[k][M] = number of k-orbital subsets of m_l = −l … l with Σ m_l = M (a small dynamic
+ * programme). The table is filled once, only up to the largest M_L there is (k orbitals sum to at
+ * most the k highest m_l): 4f⁹ was tens of milliseconds of a CLI start-up while still interpreted
+ * (docs/speed.md); the counts are exact integers either way. Outside the table N is 0.
  */
-function microstateTable(l: number, n: number): (ML: number, twoMS: number) => number {
+function microstateTable(l: number, n: number): { maxML: number; at(ML: number, twoMS: number): number } {
   const orbitals = 2 * l + 1;
   const maxM = l * orbitals; // |Σ m_l| of any subset
   const width = 2 * maxM + 1;
@@ -119,15 +119,36 @@ function microstateTable(l: number, n: number): (ML: number, twoMS: number) => n
       }
     }
   }
-  const subsets = (k: number, M: number): number => (k < 0 || k > orbitals || M < -maxM || M > maxM ? 0 : ways[k * width + M + maxM]!);
-  return (ML, twoMS) => {
-    // up − down = 2M_S, up + down = n
-    if ((n + twoMS) % 2 !== 0) return 0;
-    const up = (n + twoMS) / 2;
+  /** The largest Σ m_l of k distinct orbitals: the k highest m_l. */
+  const top = (k: number): number => k * l - (k * (k - 1)) / 2;
+  // Rows: 2M_S = n mod 2, +2, … n (up = (n + 2M_S)/2 spin-up electrons); columns: M_L = 0 … maxML.
+  const rows = (n >> 1) + 1;
+  let maxML = 0;
+  for (let r = 0; r < rows; r++) {
+    const up = (n + (n % 2) + 2 * r) / 2;
+    if (up <= orbitals) maxML = Math.max(maxML, top(up) + top(n - up));
+  }
+  const cols = maxML + 1;
+  const table = new Float64Array(rows * cols);
+  for (let r = 0; r < rows; r++) {
+    const up = (n + (n % 2) + 2 * r) / 2;
     const down = n - up;
-    if (up < 0 || down < 0) return 0;
-    let total = 0;
-    for (let M = -maxM; M <= maxM; M++) total += subsets(up, M) * subsets(down, ML - M);
-    return total;
+    if (up > orbitals) continue;
+    const topUp = top(up);
+    const topDown = top(down);
+    for (let ML = 0; ML <= maxML; ML++) {
+      let total = 0;
+      for (let M = Math.max(-topUp, ML - topDown); M <= Math.min(topUp, ML + topDown); M++) {
+        total += ways[up * width + M + maxM]! * ways[down * width + ML - M + maxM]!;
+      }
+      table[r * cols + ML] = total;
+    }
+  }
+  return {
+    maxML,
+    at: (ML, twoMS) => {
+      const r = (twoMS - (n % 2)) / 2;
+      return ML < 0 || ML > maxML || r < 0 || r >= rows || !Number.isInteger(r) ? 0 : table[r * cols + ML]!;
+    },
   };
 }
