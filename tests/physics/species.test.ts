@@ -6,32 +6,17 @@ import { describe, expect, it } from 'vitest';
 import { CAESIUM_HYPERFINE_HZ, ELECTRON_PROTON_MASS_RATIO, SPEED_OF_LIGHT } from '../../server/src/physics/constants';
 import {
   BUILTIN_SPECIES,
-  findBuiltinLevel,
-  findSpecies,
   nuclearGFromMoment,
   nuclearMomentFromG,
   parseDesignation,
   publishedEnergyToHz,
   vacuumWavelengthNm,
 } from '../../server/src/physics/species';
-import type { BuiltinLevel, BuiltinSpecies, Sourced } from '../../server/src/physics/species';
+import type { Sourced } from '../../server/src/physics/species';
+import { level, num, species } from '../fixtures/builtinLookup';
 
-function species(id: string): BuiltinSpecies {
-  const s = findSpecies(id);
-  if (!s) throw new Error(`species ${id} missing from the table`);
-  return s;
-}
 
-function level(id: string, key: string): BuiltinLevel {
-  const l = findBuiltinLevel(species(id), key);
-  if (!l) throw new Error(`level ${key} of ${id} missing`);
-  return l;
-}
 
-function num(x: Sourced<number> | undefined, what: string): number {
-  if (!x) throw new Error(`${what} missing`);
-  return x.value;
-}
 
 /** Every object in the tree shaped like { value, source }. */
 function collectSourced(node: unknown, path: string, out: Array<{ path: string; item: Sourced<unknown> }>): void {

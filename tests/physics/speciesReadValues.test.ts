@@ -6,25 +6,12 @@
  */
 import { describe, expect, it } from 'vitest';
 import { ELECTRON_GS, NUCLEAR_MAGNETON_HZ_PER_T, SPEED_OF_LIGHT } from '../../server/src/physics/constants';
-import { findBuiltinLevel, findSpecies, nuclearGFromMoment } from '../../server/src/physics/species';
-import type { BuiltinLevel, BuiltinSpecies, Sourced } from '../../server/src/physics/species';
+import { nuclearGFromMoment } from '../../server/src/physics/species';
+import type { Sourced } from '../../server/src/physics/species';
+import { level, num, species } from '../fixtures/builtinLookup';
 
-function species(id: string): BuiltinSpecies {
-  const s = findSpecies(id);
-  if (!s) throw new Error(`species ${id} missing`);
-  return s;
-}
 
-function level(id: string, key: string): BuiltinLevel {
-  const l = findBuiltinLevel(species(id), key);
-  if (!l) throw new Error(`level ${key} of ${id} missing`);
-  return l;
-}
 
-function num(x: Sourced<number> | undefined, what: string): number {
-  if (!x) throw new Error(`${what} missing`);
-  return x.value;
-}
 
 /** |stored − published| ≤ 2 × combined standard uncertainty; the stored one counts only if present. */
 function within2Sigma(stored: Sourced<number> | undefined, published: number, sigma: number, what: string): void {
