@@ -138,6 +138,19 @@ const CASES: Case[] = [
     text: 'species Rb87\n  level g: 5s 2S1/2\n  level p: 5p 2P°3/2\nline D2: g -> p\n  spectrum = sideways\n  light = red\n  doppler = -3 K\n',
     findings: ['5:14-22 value-not-allowed [sideways]', '6:11-14 value-not-allowed [red]', '7:13-17 value-out-of-range [-3 K]'],
   },
+  {
+    name: 'an unusable number inside a vector, a magnetisation or a populations entry is said once, at the number',
+    text: [
+      'slab pole',
+      '  size          = 10, 20, 1e400 mm',
+      '  centre        = 0, 0, -8 cm',
+      '  magnetisation = 1e400 T along y',
+      'beam b',
+      '  populations = 2 1e400 1, 1 1',
+      '',
+    ].join('\n'),
+    findings: ['2:27-32 syntax-bad-number [1e400]', '4:19-24 syntax-bad-number [1e400]', '5:6-7 beam-incomplete [b]', '6:19-24 syntax-bad-number [1e400]'],
+  },
 ];
 
 function describeFindings(text: string): { findings: string[]; fixes: string[]; messages: string[] } {

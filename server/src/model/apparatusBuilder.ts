@@ -4,7 +4,7 @@ import type { Dimension } from '../format/units';
 import { physicalField } from './fieldRange';
 import { NameIndex, resolveLevel } from './nameIndex';
 import type { ProblemList } from './problems';
-import { readPartQuantity, readSettingQuantity, singlePart } from './settingReaders';
+import { isUnreadable, readPartQuantity, readSettingQuantity, singlePart } from './settingReaders';
 import { readMagnetSources } from './magnetSources';
 import type { BeamModel, BeamSource, FieldModel, FieldSourceModel, MagnetModel, NameUse, SpeciesModel, Valued } from './types';
 
@@ -286,6 +286,7 @@ function populationMistake(twoF: number, twoM: number | null | undefined, weight
 function readPopulations(s: SettingNode, problems: ProblemList): BeamModel['populations'] {
   const out: NonNullable<BeamModel['populations']> = [];
   for (const g of s.groups) {
+    if (g.some(isUnreadable)) return undefined;
     const range = g.length > 0 ? { start: g[0]!.range.start, end: g[g.length - 1]!.range.end } : s.valueText.range;
     const nums = g.map((p) => (p.kind === 'number' ? p.number.value : NaN));
     const twice = (x: number): number | undefined => (Number.isFinite(x) && Math.abs(2 * x - Math.round(2 * x)) < 1e-9 ? Math.round(2 * x) : undefined);

@@ -63,10 +63,15 @@ export function readPartQuantity(
   return { value: result.si, source: FILE_SOURCE, range: part.range, ...(uncertainty !== undefined ? { uncertainty } : {}), ...(unit !== undefined ? { unit } : {}) };
 }
 
+/** A number that cannot be used (`1e400`), already reported where the value was read: say nothing more. */
+export function isUnreadable(part: ValuePart | undefined): boolean {
+  return part !== undefined && part.kind === 'word' && part.unreadable === true;
+}
+
 /** A plain number (no unit). */
 export function readSettingNumber(setting: SettingNode, problems: ProblemList, what: string): Valued<number> | undefined {
   const part = singlePart(setting, problems, what);
-  if (!part || (part.kind === 'word' && part.unreadable)) return undefined;
+  if (!part || isUnreadable(part)) return undefined;
   if (part.kind !== 'number') {
     const got = part.kind === 'quantity' ? `a quantity with unit ${part.unit.text}` : `'${part.text}'`;
     problems.add('value-not-number', `${setting.key.text} needs a plain number (${what}), got ${got}`, part.range);
@@ -81,7 +86,7 @@ export function readSettingNumber(setting: SettingNode, problems: ProblemList, w
  */
 export function readSettingSpin(setting: SettingNode, problems: ProblemList, what: string): Valued<number> | undefined {
   const part = singlePart(setting, problems, what);
-  if (!part || (part.kind === 'word' && part.unreadable)) return undefined;
+  if (!part || isUnreadable(part)) return undefined;
   if (part.kind !== 'number') {
     problems.add('value-not-number', `${setting.key.text} needs a spin such as 0, 1/2, 1 or 3/2 (${what}), got '${part.text}'`, part.range);
     return undefined;

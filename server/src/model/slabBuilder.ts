@@ -6,7 +6,7 @@ import type { BlockNode, SettingNode } from '../format/ast';
 import { VACUUM_PERMEABILITY } from '../physics/constants';
 import type { Vec3 } from '../physics/fields/types';
 import { ProblemList } from './problems';
-import { readPartQuantity } from './settingReaders';
+import { isUnreadable, readPartQuantity } from './settingReaders';
 import { missingKeys, ORIGIN, readPoint } from './sourceReaders';
 import type { FieldSourceModel, Valued } from './types';
 import { readDirectionParts, readVector } from './vectorReader';
@@ -19,6 +19,7 @@ const FORM = 'magnetisation = <μ0·M in T, or M in A/m> along <direction>, e.g.
 function readMagnetisation(s: SettingNode, problems: ProblemList): { magnetisation: Valued<Vec3>; along: Vec3 } | undefined {
   const first = s.groups[0] ?? [];
   const [amount, along] = first;
+  if (isUnreadable(amount)) return undefined;
   if (!amount || amount.kind !== 'quantity' || along?.text !== 'along' || first.length < 3) {
     problems.add('vector-malformed', `write ${FORM}`, s.valueText.range);
     return undefined;

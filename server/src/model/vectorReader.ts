@@ -7,7 +7,7 @@ import type { Range, SettingNode, ValuePart } from '../format/ast';
 import type { Dimension } from '../format/units';
 import type { Vec3 } from '../physics/fields/types';
 import type { ProblemList } from './problems';
-import { readPartQuantity } from './settingReaders';
+import { isUnreadable, readPartQuantity } from './settingReaders';
 import type { Valued } from './types';
 
 const FILE_SOURCE = 'this file';
@@ -41,6 +41,7 @@ export function readVector(setting: SettingNode, kind: Dimension, problems: Prob
     return undefined;
   }
   const parts = groups.map((g) => g[0]!);
+  if (parts.some(isUnreadable)) return undefined;
   const last = parts[2]!;
   if (parts.some((p) => p.kind === 'word')) {
     const word = parts.find((p) => p.kind === 'word')!;
