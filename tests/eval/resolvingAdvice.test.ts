@@ -102,7 +102,7 @@ describe('one peak: merged (not resolved) or nothing to resolve', () => {
     expect(a.problems.some((x) => x.code === 'beam-unresolved')).toBe(false);
     // At the beam's name (line 12 of the file: `beam b`).
     expect(p.range.start.line).toBe(ONE_PEAK.split('\n').indexOf('beam b'));
-    expect(p.message).toMatch(/^beam 'b': all 3 sublevels with atoms land in one peak: their mean deflections differ by at most [\d.]+ [nµ]m against an image width \(FWHM\) of [\d.]+ µm, so the detector does not separate them\. No dip now, one peak \(resolved at ≤ 80 %\); computed on this setup: a gradient of [\d.]+ T\/m gives peaks with a worst dip of 8\d % and resolves every pair/);
+    expect(p.message).toMatch(/^beam 'b': all 3 sublevels with atoms land in one peak: their mean deflections span [\d.]+ [nµ]m against an image width \(FWHM\) of [\d.]+ µm, so the detector does not separate them\. No dip now, one peak \(resolved at ≤ 80 %\); computed on this setup: a gradient of [\d.]+ T\/m gives peaks with a worst dip of 8\d % and resolves every pair/);
     expect(p.message).toContain(b.resolving_advice!);
     expect(beamVerdict(b)).toBe(`1 peak: the sublevels deflect differently but land together, not resolved. ${b.resolving_advice}`);
     // The same gradient as found from 0.5 T/m, where the peaks are apart but unresolved (pinned in

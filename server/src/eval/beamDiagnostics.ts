@@ -65,7 +65,7 @@ function onePeak(beam: BeamModel, r: BeamResult, imageFwhmM: number | undefined)
   return {
     code: 'beam-one-peak',
     severity: EVAL_RULES['beam-one-peak'].severity,
-    message: `beam '${beam.name}': all ${members.size} sublevels with atoms land in one peak: their mean deflections differ by at most ${lengthText(spread, 2)}${image}, so the detector does not separate them.${advice}`,
+    message: `beam '${beam.name}': all ${members.size} sublevels with atoms land in one peak: their mean deflections span ${lengthText(spread, 2)}${image}, so the detector does not separate them.${advice}`,
     range: beam.nameRange,
     ...(typeof r.resolving_gradient_T_per_m === 'number' ? { data: { resolvingGradientTPerM: Math.abs(r.resolving_gradient_T_per_m) } } : {}),
   };
