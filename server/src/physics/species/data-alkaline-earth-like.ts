@@ -42,7 +42,8 @@ export const STRONTIUM_87: BuiltinSpecies = {
       designation: '5s 5p 3P°1',
       A: mhz(-260.084, SR87_3P1_MEMORY),
       B: mhz(-35.658, SR87_3P1_MEMORY),
-      ...energy(SR_3P1_KHZ, 'kHz', FROM_MEMORY, 10, READ_IN_MEASUREMENT),
+      // The ⁸⁸Sr frequency without the ~−60 MHz isotope shift: its 10 kHz measurement uncertainty does not apply here, so none is stored.
+      ...energy(SR_3P1_KHZ, 'kHz', FROM_MEMORY),
       lifetimeS: TAU_SR_3P1,
     },
     {
