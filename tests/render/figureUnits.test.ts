@@ -66,6 +66,9 @@ describe('the resonance field axis follows the unit of the range', () => {
     ['0 uT, 50 uT', 'µT'],
     ['0 nT, 500 nT', 'nT'],
     ['0 mT, 0.05 mT', 'µT'],
+    // The written prefix stays while the range's top reads 0.1–1000 in it.
+    ['0 mT, 0.5 mT', 'mT'],
+    ['0 uT, 800 uT', 'µT'],
   ])('range = %s draws B in %s', (range, unit) => {
     const text = `species Rb87\n  level ground: 5s 2S1/2\nresonance clock\n  level = ground\n  lower = 1 -1\n  upper = 2 +1\n  range = ${range}\n`;
     const d = diagramFor(analyze(text), { view: 'resonance', theme: 'export' });

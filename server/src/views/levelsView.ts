@@ -99,10 +99,27 @@ export function namedFieldMark(f: WorkingField): NamedFieldMark {
  */
 export function unitFor(upperT: number, writtenUnit?: string): FieldUnit {
   if (writtenUnit !== undefined && isGaussUnit(writtenUnit)) return 'G';
-  if (writtenUnit !== undefined && /^[mµμun]?T$/.test(writtenUnit)) return teslaPrefixFor(upperT);
+  if (writtenUnit !== undefined && /^[mµμun]?T$/.test(writtenUnit)) return writtenPrefixFits(upperT, writtenUnit) ?? teslaPrefixFor(upperT);
   if (upperT < 1e-4) return teslaPrefixFor(upperT);
   if (upperT < 0.01) return 'G';
   return teslaPrefixFor(upperT);
+}
+
+const TESLA_UNITS: Record<string, { unit: FieldUnit; tesla: number }> = {
+  T: { unit: 'T', tesla: 1 },
+  mT: { unit: 'mT', tesla: 1e-3 },
+  µT: { unit: 'µT', tesla: 1e-6 },
+  μT: { unit: 'µT', tesla: 1e-6 },
+  uT: { unit: 'µT', tesla: 1e-6 },
+  nT: { unit: 'nT', tesla: 1e-9 },
+};
+
+/** The written tesla unit itself when the axis top reads 0.1–1000 in it (0.5 mT stays mT, not 500 µT). */
+function writtenPrefixFits(upperT: number, writtenUnit: string): FieldUnit | undefined {
+  const u = TESLA_UNITS[writtenUnit];
+  if (!u) return undefined;
+  const top = upperT / u.tesla;
+  return top >= 0.1 && top <= 1000 ? u.unit : undefined;
 }
 
 /** The tesla prefix that puts `upperT` between 1 and 1000. */
