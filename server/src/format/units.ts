@@ -10,6 +10,7 @@ import type { Problem, Range, ValuePart } from './ast';
 import { makeProblem } from './codes';
 import { didYouMeanText, suggestNames } from './didYouMean';
 import { readNumberPrefix } from './numbers';
+import { VALUE_WORDS } from './schema';
 import { canonicalUnitName, isOffsetUnit, parseUnitSyntax } from './unitGrammar';
 import { BASE_DIMENSION_COUNT, convertScale, unitEntry } from './unitLookup';
 import { PLANCK_H, SPEED_OF_LIGHT } from '../physics/constants';
@@ -278,10 +279,11 @@ function toSI(value: number, unit: UnitValue, d: Dimension): number | undefined 
  * it stands where the unit goes, so it is the unit that is wrong. Read apart it gave "needs a unit"
  * with a fix that put one before the word, and an unused word with a fix that deleted it.
  */
-export function wordForUnit(word: ValuePart, expected: Dimension, what?: string): Problem | undefined {
-  if (word.kind !== 'word' || word.unreadable || !/^[\p{L}µ°%]/u.test(word.text) || expected === 'dimensionless') return undefined;
+export function wordForUnit(word: ValuePart, expected: Dimension): Problem | undefined {
+  // A value word (`exact`, `along`, …) after a number is a missing unit, not a misspelt one.
+  if (word.kind !== 'word' || word.unreadable || VALUE_WORDS.includes(word.text) || !/^[\p{L}µ°%]/u.test(word.text) || expected === 'dimensionless') return undefined;
   const info = DIMENSIONS[expected];
-  const label = what ?? info.label;
+  const label = info.label;
   const suggestions = suggestNames(word.text, [...new Set([...info.examples, ...unitNamesOf(expected)])]);
   const hint = suggestions.length > 0 ? didYouMeanText(suggestions) : `: ${label} needs ${orList(info.examples)}`;
   return makeProblem('unit-unknown', `unknown unit '${clip(word.text)}'${hint}`, word.range, { data: { suggestions } });
