@@ -27,7 +27,7 @@ export interface TraceChannelHost {
 }
 
 /** Settings values under which the trace is on (the client reads "verbose" itself). */
-const TRACING_VALUES: ReadonlySet<string> = new Set(['messages', 'verbose']);
+const TRACING_VALUES: ReadonlySet<string> = new Set(['messages', 'compact', 'verbose']);
 
 export function createTraceChannel(host: TraceChannelHost): vscode.LogOutputChannel {
   const levelOf = (): vscode.LogLevel =>
