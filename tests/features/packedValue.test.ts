@@ -82,3 +82,19 @@ describe('level tables built when first read', () => {
     expect(point.linear.map((s) => s.label)).toEqual(copy.levels[0]!.at_fields[1]!.linear.map((s) => s.label));
   });
 });
+
+describe('a lazy field read through a prototype', () => {
+  it('gives the prototype its value and keeps its recipe out of the child', () => {
+    const point: Record<string, unknown> = {};
+    let builds = 0;
+    defineLazyField(point, 'table', [1, 2, 3], (xs) => {
+      builds++;
+      return xs.map((x) => 2 * x);
+    });
+    const child = Object.create(point) as Record<string, unknown>;
+    expect(child.table).toEqual([2, 4, 6]);
+    expect(point.table).toEqual([2, 4, 6]);
+    expect(builds).toBe(1);
+    expect(unreadRecipes(child)).toBeUndefined();
+  });
+});

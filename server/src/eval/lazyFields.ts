@@ -15,7 +15,7 @@ interface WithRecipes {
 
 export function defineLazyField<R>(o: object, key: string, recipe: R, build: (recipe: R) => unknown): void {
   const target = o as WithRecipes;
-  let recipes = target[RECIPES];
+  let recipes = ownRecipes(target);
   if (!recipes) {
     recipes = {};
     Object.defineProperty(o, RECIPES, { value: recipes, enumerable: false, writable: true, configurable: true });
@@ -26,11 +26,16 @@ export function defineLazyField<R>(o: object, key: string, recipe: R, build: (re
 
 /** The recipes of `o`'s properties still unread, by name (absent names are read or ordinary), or undefined when it never had any. */
 export function unreadRecipes(o: object): Readonly<Record<string, { recipe: unknown } | undefined>> | undefined {
-  return (o as WithRecipes)[RECIPES];
+  return ownRecipes(o);
+}
+
+/** `o`'s own recipes: an object made with `o` as its prototype must not read or spend them. */
+function ownRecipes(o: object): WithRecipes[typeof RECIPES] {
+  return Object.prototype.hasOwnProperty.call(o, RECIPES) ? (o as WithRecipes)[RECIPES] : undefined;
 }
 
 function settle(o: object, key: string, value: unknown): void {
-  const recipes = (o as WithRecipes)[RECIPES];
+  const recipes = ownRecipes(o);
   if (recipes) delete recipes[key];
   Object.defineProperty(o, key, { value, writable: true, enumerable: true, configurable: true });
 }
@@ -42,7 +47,10 @@ function accessorsFor(key: string): PropertyDescriptor {
   if (!d) {
     d = {
       get(this: WithRecipes) {
-        const entry = this[RECIPES]?.[key];
+        const own = ownRecipes(this);
+        // Inherited through a prototype: the value is the prototype's, built there.
+        if (!own) return Reflect.get(Object.getPrototypeOf(this) as object, key);
+        const entry = own[key];
         const value = entry ? entry.build(entry.recipe as never) : undefined;
         settle(this, key, value);
         return value;
