@@ -43,7 +43,8 @@ await Promise.all([
     banner: { js: '#!/usr/bin/env node' },
   }),
   // The core bundle without whitespace and with shorter syntax (names kept): V8 parses every byte of
-  // it at each `check`, and 0.65 MB parse faster than 0.86 MB (docs/speed.md). Its .map maps stack traces back.
+  // it at each `check`, and 0.65 MB parse faster than 0.86 MB (docs/speed.md). A stack trace then points into long
+  // lines; run `node --enable-source-maps dist/cli.js …` to read it against the sources (the .map beside it).
   esbuild.build({
     ...common,
     entryPoints: ['server/src/cli/bundles/core.ts'],
