@@ -126,6 +126,7 @@ function checkDocument(text: string): void {
     for (const d of dims) {
       const q = readQuantity(part, d);
       if (q.problem) checkRange(doc, q.problem.range, 'unit problem');
+      else if (part.kind === 'word' && part.unreadable) check(doc.problems.some((p) => p.range.start.line === part.range.start.line), 'an unusable number was reported where it was read');
       else check(typeof q.si === 'number', 'unit reader gives a value or a problem');
     }
   };
@@ -185,6 +186,10 @@ describe('parser properties', () => {
     const piece = fc.constantFrom(...SPECIAL, ...WORDS, ' ', ' ', '\n');
     fc.assert(fc.property(fc.array(piece, { maxLength: 80 }), (pieces) => checkDocument(pieces.join(''))), { numRuns: RUNS });
   }, TIME_LIMIT);
+
+  it('an unusable number before a unit (1/0 T, found by the mutation property) passes the invariants', () => {
+    checkDocument('species Rb87\n  level ground: 5s 2S1/2\nfield bias = 1/0 T\nfield b2 = 1e400 G\n');
+  });
 
   it('never throws on mutated copies of a valid document', () => {
     fc.assert(
