@@ -33,6 +33,11 @@ describe('fit diagnostics', () => {
     expect(codes(r)).toEqual(['fit-too-few-points']);
   });
 
+  it('too few points for one free parameter: the message counts in the singular', () => {
+    const r = fitCurve({ names: ['a'], start: [0], y: new Float64Array(0), model: () => true });
+    expect(r.diagnostics.map((d) => d.message)).toEqual(['0 data points cannot determine 1 free parameter (a): give at least 1 point or free fewer parameters']);
+  });
+
   it('a model that cannot be computed at the start', () => {
     const r = fitCurve({ ...line([1, 2, 3]), model: () => false });
     expect(r.ok).toBe(false);

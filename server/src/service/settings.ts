@@ -1,7 +1,7 @@
 /**
  * The user's settings for one document (section `sublevel` of the editor's configuration),
  * read defensively: anything missing or of the wrong type falls back to the default.
- * The contributed schema is client/contributes.configuration.json.
+ * The contributed schema is `contributes.configuration` in package.json.
  */
 import { DEFAULT_HOVER_OPTIONS, type HoverOptions } from '../features/hover/context';
 

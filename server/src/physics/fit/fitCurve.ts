@@ -99,7 +99,7 @@ export function fitCurve(problem: CurveProblem, options: LmOptions = {}): FitOut
     diagnostics.push({
       code: 'fit-too-few-points',
       severity: 'error',
-      message: `${n} data point${n === 1 ? '' : 's'} cannot determine ${m} free parameter${m === 1 ? '' : 's'} (${problem.names.join(', ')}): give at least ${m} points or free fewer parameters`,
+      message: `${n} data point${n === 1 ? '' : 's'} cannot determine ${m} free parameter${m === 1 ? '' : 's'} (${problem.names.join(', ')}): give at least ${m} point${m === 1 ? '' : 's'} or free fewer parameters`,
     });
     return empty('model-failed');
   }
