@@ -7,6 +7,7 @@ import type { BeamGeometry, PatternInput, SpeedDistribution } from '../physics/b
 import { solveLevel, type HyperfineLevelSpec, type SublevelState } from '../physics/engine';
 import type { Range } from '../format/ast';
 import type { BeamModel, BeamSource } from '../model/types';
+import { halfText, signedHalfText } from './halves';
 import { hyperfineSpec } from './levelSpec';
 
 export interface BeamInputs {
@@ -65,30 +66,30 @@ function lowPair(s: SublevelState): [twoF: number, twoM: number, letter: string]
   return s.low.scheme === 'F' ? [s.low.twoF, s.low.twoMF, 'F'] : [s.low.twoJ, s.low.twoMJ, 'J'];
 }
 
-function half(two: number, signed = false): string {
-  const text = two % 2 === 0 ? String(Math.abs(two) / 2) : `${Math.abs(two)}/2`;
-  return two < 0 ? `-${text}` : signed && two > 0 ? `+${text}` : text;
-}
-
 function unmatchedPopulations(beam: BeamModel, states: SublevelState[]): UnmatchedPopulation[] {
   if (!beam.populations || states.length === 0) return [];
   const pairs = states.map(lowPair);
   const letter = pairs[0]![2];
   const totals = [...new Set(pairs.map(([twoF]) => twoF))].sort((a, b) => a - b);
   return beam.populations
-    .filter((p) => !pairs.some(([twoF, twoM]) => p.twoF === twoF && (p.twoM === undefined || p.twoM === twoM)))
+    .filter((p) => !pairs.some(([twoF, twoM]) => names(p, twoF, twoM)))
     .map((p) => ({
       range: p.range,
-      named: `${letter} = ${half(p.twoF)}${p.twoM !== undefined ? `, m_${letter} = ${half(p.twoM, true)}` : ''}`,
-      has: `${letter} = ${totals.map((t) => half(t)).join(', ')}`,
+      named: `${letter} = ${halfText(p.twoF)}${p.twoM !== undefined ? `, m_${letter} = ${signedHalfText(p.twoM)}` : ''}`,
+      has: `${letter} = ${totals.map((t) => halfText(t)).join(', ')}`,
     }));
+}
+
+/** Whether a population entry (F, or F and m_F) names this low-field pair. */
+function names(p: NonNullable<BeamModel['populations']>[number], twoF: number, twoM: number): boolean {
+  return p.twoF === twoF && (p.twoM === undefined || p.twoM === twoM);
 }
 
 /** The file's population for a state, matched on its low-field label (F, m_F or J, m_J); 1 when the file sets none. */
 function populationOf(beam: BeamModel, s: SublevelState): number {
   if (!beam.populations) return 1;
-  const [twoF, twoM] = s.low.scheme === 'F' ? [s.low.twoF, s.low.twoMF] : [s.low.twoJ, s.low.twoMJ];
-  const hit = beam.populations.find((p) => p.twoF === twoF && (p.twoM === undefined || p.twoM === twoM));
+  const [twoF, twoM] = lowPair(s);
+  const hit = beam.populations.find((p) => names(p, twoF, twoM));
   return hit ? hit.weight : 0;
 }
 
