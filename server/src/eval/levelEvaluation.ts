@@ -41,7 +41,18 @@ export function evaluateLevel(level: LevelModel, settings: SettingsModel, fields
   const gJ = gFactor(level, settings);
   const hyperfine = twoI > 0 ? hyperfineOf(level, gJ.used, twoJ, twoI) : undefined;
   const points: FieldPoint[] = [];
-  const atFields = fields.map((f) => pointAt(level, gJ.used, f, twoJ, twoI, hyperfine, notes, points));
+  // What every field shares is made once: the engine's spec, and the weak-field recipe's constants
+  // (one object, so the hand-off to the editor sends it once).
+  const spec = hyperfineSpec(level, gJ.used);
+  const linear: Omit<LinearRecipe, 'fieldT'> = {
+    kind: 'linear',
+    gJ: gJ.used,
+    gI: level.species.gI.value,
+    twoJ,
+    twoI,
+    ...(hyperfine ? { hyperfine: hyperfine.levels.map((F) => ({ F: F.F, shift_Hz: F.shift_Hz, g_F: F.g_F })) } : {}),
+  };
+  const atFields = fields.map((f) => pointAt(level, spec, linear, f, notes, points));
   const note = regimeNote(level, points);
   if (note) notes.push(note);
   return {
@@ -121,31 +132,19 @@ function sourced(v: Valued<number>): SourcedNumber {
  */
 function pointAt(
   level: LevelModel,
-  gJ: number,
+  spec: ReturnType<typeof hyperfineSpec>,
+  shared: Omit<LinearRecipe, 'fieldT'>,
   f: WorkingField,
-  twoJ: number,
-  twoI: number,
-  hf: HyperfineResult | undefined,
   notes: EvaluationNote[],
   points: FieldPoint[],
 ): FieldPointResult {
-  const spec = hyperfineSpec(level, gJ);
   const r = spec ? exactAtField(spec, f.tesla) : undefined;
   if (r) {
     notes.push(...engineNotes(level, { f, r }));
     points.push({ f, r });
   }
-  const linear: LinearRecipe = {
-    kind: 'linear',
-    gJ,
-    gI: level.species.gI.value,
-    twoJ,
-    twoI,
-    ...(hf ? { hyperfine: hf.levels.map((F) => ({ F: F.F, F_text: F.F_text, shift_Hz: F.shift_Hz, g_F: F.g_F })) } : {}),
-    fieldT: f.tesla,
-  };
   const point: Partial<FieldPointResult> = { source: f.source, field_T: f.tesla };
-  defineLevelTables(point, linear, r?.exact ?? []);
+  defineLevelTables(point, { ...shared, fieldT: f.tesla }, r?.exact ?? []);
   if (r?.regime) point.regime = r.regime;
   return point as FieldPointResult;
 }

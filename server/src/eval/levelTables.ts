@@ -21,7 +21,7 @@ export interface LinearRecipe {
   twoJ: number;
   twoI: number;
   /** The hyperfine F levels (F, its text, zero-field shift, g_F), when the level has A. */
-  hyperfine?: { F: number; F_text: string; shift_Hz: number; g_F: number }[];
+  hyperfine?: { F: number; shift_Hz: number; g_F: number }[];
   fieldT: number;
 }
 
