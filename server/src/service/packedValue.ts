@@ -221,7 +221,7 @@ class Packer {
  * first read, and `revive` puts each unread property back on its object from its recipe.
  */
 export function unpackValue(p: PackedValue, revive: Revive): unknown {
-  return readAt({ ...p, revive, again: new Map() }, 0, 0).value;
+  return readAt({ ...p, revive, again: new Map() }, 0, 0);
 }
 
 export type Revive = (o: Record<string, unknown>, key: string, recipe: unknown) => void;
@@ -232,14 +232,8 @@ interface Unpacking extends PackedValue {
   again: Map<number, unknown>;
 }
 
-interface Read {
-  value: unknown;
-  /** Where the next value starts in `ops` and `numbers`. */
-  op: number;
-  num: number;
-}
-
-function readAt(p: Unpacking, startOp: number, startNum: number): Read {
+/** The value whose tags start at `startOp` and whose numbers start at `startNum`. */
+function readAt(p: Unpacking, startOp: number, startNum: number): unknown {
   const { ops, numbers, strings, shapes } = p;
   let op = startOp;
   let num = startNum;
@@ -262,7 +256,7 @@ function readAt(p: Unpacking, startOp: number, startNum: number): Read {
         const atNum = ops[op++]!;
         let a = p.again.get(at);
         if (a === undefined) {
-          a = readAt(p, at, atNum).value;
+          a = readAt(p, at, atNum);
           p.again.set(at, a);
         }
         return a;
@@ -293,8 +287,7 @@ function readAt(p: Unpacking, startOp: number, startNum: number): Read {
         throw new Error(`packed value: unknown tag at ${op - 1}`);
     }
   };
-  const value = read();
-  return { value, op, num };
+  return read();
 }
 
 /** `o[k]` unpacked on first read (then an ordinary property); a write before that replaces it. */
@@ -304,7 +297,7 @@ function defer(p: Unpacking, o: Record<string, unknown>, k: string, op: number, 
   };
   Object.defineProperty(o, k, {
     get() {
-      const v = readAt(p, op, num).value;
+      const v = readAt(p, op, num);
       settle(v);
       return v;
     },

@@ -40,7 +40,7 @@ export function symmetricEigen(a: Float64Array, n: number, values: Float64Array,
     ok = jacobiInPlace(a, n, vectors);
     for (let i = 0; i < n; i++) values[i] = a[i * n + i];
   } else if (n >= SIMD_MIN_ORDER && simdKernelsAvailable()) {
-    // `a` is left as it was, so the QR route can take it should inverse iteration not converge.
+    // `a` is left as it was, so the QR route can take it should the secular equation or a merge not settle.
     ok = simdEigenpairs(a, n, values, vectors) || qrRoute(a, n, values, vectors);
   } else if (n >= INVERSE_ITERATION_MIN_ORDER) {
     // Should inverse iteration not converge (it reports so), the QR route solves a copy.
