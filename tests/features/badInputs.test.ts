@@ -152,6 +152,11 @@ const CASES: Case[] = [
     findings: ['2:27-32 syntax-bad-number [1e400]', '4:19-24 syntax-bad-number [1e400]', '5:6-7 beam-incomplete [b]', '6:19-24 syntax-bad-number [1e400]'],
   },
   {
+    name: 'an unusable number where a word goes (spectrum = 1e400 T) is said once',
+    text: 'species Rb87\n  level ground: 5s 2S1/2\n  level p: 5p 2P°3/2\nline D2: ground -> p\n  spectrum = 1e400 T\n',
+    findings: ['5:14-19 syntax-bad-number [1e400]'],
+  },
+  {
     name: 'a value word where the unit goes (0.5 exact) is a missing unit, not an unknown one',
     text: 'species Rb87\n  level ground: 5s 2S1/2\nfield bias = 0.5 exact\n',
     findings: ['3:14-17 unit-missing [0.5]', '3:18-23 value-extra [exact]'],

@@ -9,7 +9,10 @@ import type { Valued } from './types';
 
 const FILE_SOURCE = 'this file';
 
-/** The value's single part, or a problem when the value is empty or has extra items. */
+/**
+ * The value's single part, or a problem when the value is empty or has extra items; undefined
+ * without another problem for a number that cannot be used (reported where it was read).
+ */
 export function singlePart(setting: SettingNode, problems: ProblemList, what: string): ValuePart | undefined {
   const parts = setting.groups.flat();
   if (parts.length === 0) {
@@ -23,7 +26,7 @@ export function singlePart(setting: SettingNode, problems: ProblemList, what: st
       end: setting.valueText.range.end,
     });
   }
-  return parts[0];
+  return isUnreadable(parts[0]) ? undefined : parts[0];
 }
 
 /** A quantity of the given dimension, converted to SI. */
@@ -71,7 +74,7 @@ export function isUnreadable(part: ValuePart | undefined): boolean {
 /** A plain number (no unit). */
 export function readSettingNumber(setting: SettingNode, problems: ProblemList, what: string): Valued<number> | undefined {
   const part = singlePart(setting, problems, what);
-  if (!part || isUnreadable(part)) return undefined;
+  if (!part) return undefined;
   if (part.kind !== 'number') {
     const got = part.kind === 'quantity' ? `a quantity with unit ${part.unit.text}` : `'${part.text}'`;
     problems.add('value-not-number', `${setting.key.text} needs a plain number (${what}), got ${got}`, part.range);
@@ -86,7 +89,7 @@ export function readSettingNumber(setting: SettingNode, problems: ProblemList, w
  */
 export function readSettingSpin(setting: SettingNode, problems: ProblemList, what: string): Valued<number> | undefined {
   const part = singlePart(setting, problems, what);
-  if (!part || isUnreadable(part)) return undefined;
+  if (!part) return undefined;
   if (part.kind !== 'number') {
     problems.add('value-not-number', `${setting.key.text} needs a spin such as 0, 1/2, 1 or 3/2 (${what}), got '${part.text}'`, part.range);
     return undefined;
