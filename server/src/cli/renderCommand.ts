@@ -13,6 +13,7 @@ import { writeOutputFile } from './output';
 import { PNG_SCALE, svgToPng } from './pngExport';
 import { readFieldOption } from './fieldOption';
 import type { FieldUnit } from '../render';
+import { displayUnit } from '../eval/unitSpelling';
 import { selectBeam, selectField, selectLevel, selectName, selectSources } from './selectors';
 
 export const RENDER_VIEWS = DIAGRAM_VIEWS;
@@ -64,7 +65,7 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   if (toText !== undefined) req.toT = readFieldOption('to', toText);
   if (req.fromT !== undefined && req.toT !== undefined && !(req.toT > req.fromT)) throw new UsageError('--to must be a larger field than --from');
   const unit = stringOption(args, 'unit', FIELD_UNITS);
-  if (unit !== undefined) req.fieldUnit = (unit === 'uT' ? 'µT' : unit) as FieldUnit;
+  if (unit !== undefined) req.fieldUnit = displayUnit(unit) as FieldUnit; // uT → µT
   if (format === 'png' && !out) throw new UsageError('--format png writes a file: add --out FILE.png');
   const level = stringOption(args, 'level');
   if (level !== undefined) req.level = selectLevel(model, level);

@@ -4,6 +4,8 @@
  */
 import { levelDesignationText } from '../eval/designationText';
 import { inWrittenUnit, isGaussUnit } from '../eval/writtenUnit';
+import { displayUnit } from '../eval/unitSpelling';
+import { fieldDisplayUnit } from '../render/units';
 import { regime, sweepLevel, type LevelSpec, type SweepResult } from '../physics/engine';
 import { BOHR_MAGNETON_HZ_PER_T } from '../physics/constants';
 import type { LevelModel, SettingsModel } from '../model/types';
@@ -105,21 +107,11 @@ export function unitFor(upperT: number, writtenUnit?: string): FieldUnit {
   return teslaPrefixFor(upperT);
 }
 
-const TESLA_UNITS: Record<string, { unit: FieldUnit; tesla: number }> = {
-  T: { unit: 'T', tesla: 1 },
-  mT: { unit: 'mT', tesla: 1e-3 },
-  µT: { unit: 'µT', tesla: 1e-6 },
-  μT: { unit: 'µT', tesla: 1e-6 },
-  uT: { unit: 'µT', tesla: 1e-6 },
-  nT: { unit: 'nT', tesla: 1e-9 },
-};
-
 /** The written tesla unit itself when the axis top reads 0.1–1000 in it (0.5 mT stays mT, not 500 µT). */
 function writtenPrefixFits(upperT: number, writtenUnit: string): FieldUnit | undefined {
-  const u = TESLA_UNITS[writtenUnit];
-  if (!u) return undefined;
-  const top = upperT / u.tesla;
-  return top >= 0.1 && top <= 1000 ? u.unit : undefined;
+  const unit = displayUnit(writtenUnit) as FieldUnit; // uT, μT → µT
+  const top = upperT / fieldDisplayUnit(unit).factor;
+  return top >= 0.1 && top <= 1000 ? unit : undefined;
 }
 
 /** The tesla prefix that puts `upperT` between 1 and 1000. */
