@@ -241,7 +241,7 @@ function sideView(d: FieldMapViewData, x: Scale, box: PlotBox, lUnit: { factor: 
     const first = d.sources.findIndex((_, j) => j === i || sameSpot(i, j));
     const names = d.sources.filter((_, j) => j >= i && sameSpot(i, j)).map((o) => o.name);
     const label = at[i] && first === i
-      ? el('text', { class: 'sl-source-name', x: at[i]!.x, y: at[i]!.y, 'text-anchor': 'middle', 'font-size': 10, fill: pal.text, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text([s.name, ...names.filter((n) => n !== s.name)].join(', ')))
+      ? el('text', { class: 'sl-source-name', x: at[i]!.x, y: at[i]!.y, 'text-anchor': 'middle', 'font-size': 10, fill: pal.text, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text(names.join(', ')))
       : '';
     parts.push(el('g', { class: 'sl-source', 'data-kind': 'source', 'data-label': s.name, 'data-source-kind': s.kind }, [titleEl(`${s.kind} ${s.name}`), ...shapes, label]));
   });

@@ -98,8 +98,8 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
   const strongestAll = Math.max(0, ...finite.map(shownStrength));
   const comps = finite.filter((c) => shownStrength(c) >= VISIBLE_FLOOR * strongestAll);
   const faint = finite.length - comps.length;
-  const faintNote = faint > 0
-    ? `not drawn: ${faint} ${faint === 1 ? 'component' : 'components'} weaker than ${trimNumber(VISIBLE_FLOOR, 2)} × the strongest (down to ${trimNumber(Math.min(...finite.map(shownStrength)) / (strongestAll || 1), 2)} ×), listed in the report`
+  const faintNote: FaintNote | undefined = faint > 0
+    ? { count: faint, text: `not drawn: ${faint} ${faint === 1 ? 'component' : 'components'} weaker than ${trimNumber(VISIBLE_FLOOR, 2)} × the strongest (down to ${trimNumber(Math.min(...finite.map(shownStrength)) / (strongestAll || 1), 2)} ×), listed in the report` }
     : undefined;
   const fExtent = finiteExtent(comps.map((c) => c.offsetHz));
   const sExtent = finiteExtent(comps.map(shownStrength));
@@ -155,7 +155,7 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
   }
 
   if (faintNote) body.push(faintNoteSvg(faintNote, box.left, HEIGHT + NOTE_ROW - 8, pal));
-  const desc = `Stick spectrum of ${comps.length} line components (${counts.join(', ')}) from Δf = ${formatIn(fExtent[0], unit)} to ${formatIn(fExtent[1], unit)}${faintNote ? `; ${faintNote}` : ''}.`;
+  const desc = `Stick spectrum of ${comps.length} line components (${counts.join(', ')}) from Δf = ${formatIn(fExtent[0], unit)} to ${formatIn(fExtent[1], unit)}${faintNote ? `; ${faintNote.text}` : ''}.`;
   return svgDocument(
     {
       view: 'lines',
@@ -182,8 +182,14 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
 
 const PANEL_GAP = 24;
 
-function faintNoteSvg(note: string, x: number, y: number, pal: Palette): string {
-  return el('text', { class: 'sl-note sl-faint-note', 'data-left-out': note.split(' ')[2], x, y, 'font-size': 10, fill: pal.muted }, text(note));
+/** Components left out of the figure: how many, and the sentence that says so. */
+interface FaintNote {
+  count: number;
+  text: string;
+}
+
+function faintNoteSvg(note: FaintNote, x: number, y: number, pal: Palette): string {
+  return el('text', { class: 'sl-note sl-faint-note', 'data-left-out': note.count, x, y, 'font-size': 10, fill: pal.muted }, text(note.text));
 }
 
 /** One panel per group, all on the same scale, offsets from each group's centre. */
@@ -195,7 +201,7 @@ function groupedPanels(
   counts: string[],
   yDomain: number[],
   base: Omit<StickContext, 'y' | 'unit'>,
-  faintNote?: string,
+  faintNote?: FaintNote,
 ): string {
   const { pal, idBase } = base;
   const z = zeemanUnitHz(d.fieldT);
@@ -237,7 +243,7 @@ function groupedPanels(
   if (faintNote) body.push(faintNoteSvg(faintNote, left, height + NOTE_ROW - 8, pal));
   const desc = `Stick spectrum of ${comps.length} line components (${counts.join(', ')}) in ${n} groups, one panel each on a common scale of ±${formatIn(half, unit)} about the group centre: ${groups
     .map((g) => signed(g.centreHz, formatSI(g.centreHz, 'Hz')))
-    .join(', ')}; ${unitNote}${faintNote ? `; ${faintNote}` : ''}.`;
+    .join(', ')}; ${unitNote}${faintNote ? `; ${faintNote.text}` : ''}.`;
   return svgDocument(
     {
       view: 'lines',
