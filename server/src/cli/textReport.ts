@@ -5,7 +5,7 @@ import { halfText } from '../eval/halves';
 import { curvatureText, fieldText, frequencyText, gradientText, lengthText, percentText, sensitivityText, speedText, trimNumber, withUncertainty } from '../eval/quantityText';
 import { beamPositionNoise, DIP_NOISE, SENSITIVITY_NOISE } from '../eval/noiseFloors';
 import { polarizationSymbol } from '../eval/polarizationName';
-import { nothingToResolve } from '../eval/resolvingAdvice';
+import { MERGED_PEAK_TEXT, nothingToResolve } from '../eval/resolvingAdvice';
 import { fieldInUnit, inWrittenUnit, workingFieldUnit } from '../eval/writtenUnit';
 import type {
   BeamResult,
@@ -239,7 +239,7 @@ function beamReport(b: BeamResult): string[] {
     ).map((x) => '    ' + x),
   );
   if (b.peaks.length === 1 && b.all_resolved !== undefined) {
-    out.push(`  one peak: ${b.all_resolved ? nothingToResolve(b) : 'the sublevels deflect differently but land together → NOT resolved'}`);
+    out.push(`  one peak: ${b.all_resolved ? nothingToResolve(b) : `${MERGED_PEAK_TEXT} → NOT resolved`}`);
   }
   for (const p of b.pairs) {
     out.push(`  peaks ${p.left + 1} and ${p.right + 1}: dip ${percentText(p.dip_ratio, 3, DIP_NOISE)} of the smaller peak → ${p.resolved ? 'resolved' : 'NOT resolved'} (criterion ≤ ${percentText(b.criterion_dip_ratio)})`);

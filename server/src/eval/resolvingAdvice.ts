@@ -29,6 +29,9 @@ export function resolvingAdvice(r: BeamResult, geometry: BeamGeometry): string |
 }
 
 /** A lone peak that counts as resolved holds one sublevel, or sublevels that all deflect alike. */
+/** One peak of sublevels that deflect differently (`beam-one-peak`), in words. */
+export const MERGED_PEAK_TEXT = 'the sublevels deflect differently but land together';
+
 export function nothingToResolve(r: BeamResult): string {
   return (r.peaks[0]?.members.length ?? 0) > 1 ? 'the sublevels all deflect alike, nothing to resolve' : 'one sublevel with atoms, nothing to resolve';
 }

@@ -5,7 +5,7 @@
  * cautions in one line.
  */
 import { levelDesignationText } from '../../eval/designationText';
-import { nothingToResolve } from '../../eval/resolvingAdvice';
+import { MERGED_PEAK_TEXT, nothingToResolve } from '../../eval/resolvingAdvice';
 import type { BeamResult, EvaluationResult, LevelResult } from '../../eval/resultTypes';
 import { lengthText, speedText, trimNumber, withUncertainty } from '../../eval/quantityText';
 import { beamPositionNoise } from '../../eval/noiseFloors';
@@ -48,7 +48,7 @@ export function beamVerdict(r: BeamResult): string | undefined {
   const peaks = `${r.peaks.length} peak${r.peaks.length === 1 ? '' : 's'}`;
   if (r.all_resolved === undefined) return peaks;
   if (r.all_resolved) return r.peaks.length === 1 ? `${peaks}: ${nothingToResolve(r)}` : `${peaks}, all resolved`;
-  if (r.peaks.length === 1) return `${peaks}: the sublevels deflect differently but land together, not resolved${r.resolving_advice ? `. ${r.resolving_advice}` : ''}`;
+  if (r.peaks.length === 1) return `${peaks}: ${MERGED_PEAK_TEXT}, not resolved${r.resolving_advice ? `. ${r.resolving_advice}` : ''}`;
   return `${peaks}, not all resolved${r.resolving_advice ? `. ${r.resolving_advice}` : ''}`;
 }
 
