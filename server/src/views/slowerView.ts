@@ -2,6 +2,7 @@
 import type { SlowerResult } from '../eval/slowerResultTypes';
 import type { SlowerViewData } from '../render/slower';
 import { adaptiveSamples } from '../render/sampled';
+import { designSign, idealField } from '../physics/slower/idealProfile';
 
 /** The curves are smooth to this fraction of their span (well under a pixel on the figure). */
 const SMOOTH = 1e-3;
@@ -13,9 +14,9 @@ const SMOOTH = 1e-3;
 function idealCurves(s: SlowerResult, coils: boolean): Pick<SlowerViewData, 'idealFine' | 'resonantFine'> {
   const { stop_length_m: l0, delta_B_T: dB, bias_T: bias, length_m: len } = s;
   if (!(l0! > 0) || !(len! > 0) || !Number.isFinite(dB) || !Number.isFinite(bias) || !(s.capture_m_per_s! > 0)) return {};
-  const sign = s.design === 'increasing' ? -1 : 1;
+  const profile = { lengthM: len!, stopLengthM: l0!, biasT: bias!, deltaBT: dB!, sign: designSign(s.design) };
   const root = (z: number): number => Math.sqrt(Math.max(0, 1 - z / l0!));
-  const b = adaptiveSamples((z) => bias! + sign * dB! * root(z), 0, len!, SMOOTH * Math.abs(dB!));
+  const b = adaptiveSamples((z) => idealField(profile, z).BT, 0, len!, SMOOTH * Math.abs(dB!));
   if (coils) return { idealFine: { zM: b.x, values: b.y } };
   // Without coils the atom is resonant with the ideal field itself.
   const v0 = s.capture_m_per_s!;

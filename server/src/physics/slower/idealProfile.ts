@@ -82,7 +82,7 @@ export function idealProfile(t: SlowerTransition, r: SlowerRequest): { profile?:
 }
 
 /** B(z) and dB/dz of the ideal profile; z is clamped to [0, L] (the profile ends there). */
-export function idealField(p: IdealProfile, zM: number): { BT: number; dBdzTPerM: number } {
+export function idealField(p: Pick<IdealProfile, 'lengthM' | 'stopLengthM' | 'biasT' | 'deltaBT' | 'sign'>, zM: number): { BT: number; dBdzTPerM: number } {
   const z = Math.min(Math.max(zM, 0), p.lengthM);
   const root = Math.sqrt(Math.max(1 - z / p.stopLengthM, 0));
   const BT = p.biasT + p.sign * p.deltaBT * root;
