@@ -21,7 +21,7 @@ export const STECK_CS = 'Steck, "Cesium D Line Data" (alkali D-line data compila
 export const TIECKE_K = 'Tiecke, "Properties of Potassium" (v1.02, 2011)';
 export const GEHM_LI6 = 'Gehm, "Properties of 6Li" (2003)';
 
-// Compilations and isotope tables read (value and, where printed, uncertainty) with the search tool.
+// Compilations and isotope tables read in their published pages (value and, where printed, uncertainty).
 export const HFS_TABLE = 'public table of measured ground hyperfine splittings (rubidium.dyndns.org/~magnus/physics/hyperfine)';
 export const CHEMLIN_K40 = 'ChemLin isotope data (chemlin.org), potassium-40: μ/μ_N = −1.29797(3)';
 export const CHEMLIN_SR87 = 'ChemLin isotope data (chemlin.org), strontium-87: spin 9/2+, μ/μ_N = −1.09316(11)';
