@@ -58,7 +58,30 @@ describe('docs/species-data.md and the sources of the table', () => {
     }
   });
 
-  it('sources name compilations, not single measurements with their authors', () => {
-    for (const { path, source } of items) expect(source, path).not.toMatch(/et al\.|thesis|arXiv|\bPRL\b|\bPRA\b|Nature/);
+  /** A source citing a single measurement: a journal, an e-print number or a dissertation. */
+  const MEASUREMENT = /Phys\. Rev\.|IEEE Trans\.|arXiv:|dissertation|critical review/;
+
+  it('no source names authors', () => {
+    // "et al." and initials followed by a surname ("A. Name", "A.B. Name") mark personal names. The compilations
+    // cited by their authors' names (alkali D-line data, potassium and 6Li properties, the 1977 review) are the
+    // only exceptions, and none of them cites a single measurement.
+    for (const { path, source } of items) {
+      expect(source, path).not.toMatch(/et al\.|\b(?:[A-Z]\.\s?){1,3}(?!Phys|Rev|Lett|Instrum)[A-Z][a-z]+/);
+      if (MEASUREMENT.test(source)) expect(source, path).not.toMatch(/Steck|Tiecke|Gehm|Arimondo/);
+    }
+  });
+
+  it('a single measurement is cited by journal, volume, page or number and year, with its value and uncertainty as printed', () => {
+    const cited = items.filter(({ source }) => MEASUREMENT.test(source));
+    expect(cited.length).toBeGreaterThanOrEqual(10);
+    for (const { path, source } of cited) {
+      expect(source, path).toMatch(/\((?:19|20)\d\d\)/); // the year
+      expect(source, path).toMatch(/\d\(\d+(?:\.\d+)?\)|± ?\d/); // a value printed with its uncertainty
+      expect(source, path).toMatch(/Phys\. Rev\.(?: Lett\.| A)? \d+, \d+|IEEE Trans\. [A-Za-z. ]+ \d+, \d+|arXiv:\d{4}\.\d{4,5}|dissertation, [A-Z]|critical review/);
+    }
+  });
+
+  it('no source cites a personal web page', () => {
+    for (const { path, source } of items) expect(source, path).not.toMatch(/~|dyndns|personal/);
   });
 });

@@ -29,9 +29,13 @@ describe('hydrogen and deuterium', () => {
     expect(a?.uncertainty).toBe(6.7);
   });
 
-  it('H and D ground splittings carry the listed uncertainties (maser values, public hyperfine-splitting table)', () => {
-    // 1 420 405 751.768(2) Hz (H, 1970) and 327 384 352.5222(17) Hz (D, 1972); ΔW = (I + 1/2)A.
+  it('H and D ground splittings carry the maser uncertainties; H cites its measurement, D stays recalled', () => {
+    // H: 1 420 405 751.768 ± 0.002 Hz, IEEE Trans. Instrum. Meas. 19, 200 (1970) (quoted in a time-and-frequency
+    // mailing-list note) and a later maser abstract (scilit.com). D: 327 384 352.5222(17) Hz (1972), recalled:
+    // no readable page prints it. ΔW = (I + 1/2)A.
     expect(level('H', 'ground').A?.uncertainty).toBe(0.002);
+    expect(level('H', 'ground').A?.source).toContain('IEEE Trans. Instrum. Meas. 19, 200 (1970)');
+    expect(level('D', 'ground').A?.source).toBe('from memory');
     expect(num(level('D', 'ground').A, 'D A') * 1.5).toBeCloseTo(327384352.5222, 4);
     expect((level('D', 'ground').A?.uncertainty ?? 0) * 1.5).toBeCloseTo(0.0017, 10);
   });
@@ -85,18 +89,30 @@ describe('helium', () => {
     expect(Math.abs(num(a, 'A') * 1.5 - -6739701181)).toBeLessThanOrEqual(2 * Math.hypot(16, 41));
   });
 
-  it('³He μ_I (recalled) is within 2σ of the CODATA 2014 helion moment −2.127 625 307(25) μ_N', () => {
-    // Helion page citing CODATA 2014: μ_h/μ_N = −2.127 625 307(25), g_h = −4.255 250 615(50).
-    expect(Math.abs(num(species('He3').muI, 'μ') - -2.127625307)).toBeLessThanOrEqual(2 * 2.5e-8);
+  it('³He μ_I is the bare helion moment g_h/2 of CODATA 2022, within 2σ of the earlier evaluation', () => {
+    // CODATA 2022 g_h = −4.255 250 699 5(34) (mp-units CODATA 2022 constants reference); μ = g I μ_N with I = 1/2.
+    const mu = species('He3').muI;
+    expect(num(mu, 'μ')).toBeCloseTo(-4.2552506995 / 2, 12);
+    expect(mu?.uncertainty).toBeCloseTo(1.7e-9, 15);
+    // The earlier evaluation's bare helion moment, −2.127 625 307(25) μ_N (physical_constants docs, docs.rs).
+    expect(Math.abs(num(mu, 'μ') - -2.127625307)).toBeLessThanOrEqual(2 * Math.hypot(2.5e-8, 1.7e-9));
+    // Not the shielded moment (−2.127 497 719 μ_N in the same docs), 6e-5 away.
+    expect(Math.abs(num(mu, 'μ') - -2.127497719)).toBeGreaterThan(1e-4);
   });
 });
 
 describe('lithium 2p hyperfine constants', () => {
-  it('⁷Li 2p1/2: A = 91.873(5)/2 MHz agrees with the 1975 double-resonance a(1/2) = 45.914(25) MHz', () => {
-    // Interval: NTHU thesis on lithium laser spectroscopy (2018), abstract. a(1/2): Z. Phys. A abstract (optical double resonance).
+  it('⁷Li 2p1/2: A = 91.873(5)/2 MHz, with an uncertainty that covers the read measurements', () => {
+    // Interval 91.873(5) MHz: doctoral dissertation, National Tsing Hua University (2018), abstract. A = 46.047(3) MHz
+    // (interval 92.040(6) MHz): arXiv:1008.3228 (2010), abstract. a(1/2) = 45.914(25) MHz: optical double resonance
+    // (Z. Phys. A abstract, read in an earlier session).
     const a = level('Li7', 'P1/2').A;
     expect(num(a, 'A') * 2).toBeCloseTo(91.873e6, 0);
-    within2Sigma(a, 45.914e6, 0.025e6, '7Li 2p1/2 A');
+    expect(a?.uncertainty).toBeCloseTo(0.056e6, 6);
+    within2Sigma(a, 46.047e6, 0.003e6, '7Li 2p1/2 A, saturated absorption');
+    within2Sigma(a, 45.914e6, 0.025e6, '7Li 2p1/2 A, double resonance');
+    // The interval's own 2.5 kHz would leave the saturated-absorption value 44σ away.
+    expect(Math.abs(46.047e6 - num(a, 'A')) / 2.5e3).toBeGreaterThan(40);
   });
 
   it('⁷Li 2p3/2: A and B equal the double-resonance values −3.055(14) and −0.221(29) MHz', () => {
@@ -106,7 +122,7 @@ describe('lithium 2p hyperfine constants', () => {
   });
 
   it('⁶Li 2p1/2 A (compilation) agrees with the 2018 interval 26.108(9) MHz = (3/2)A', () => {
-    // NTHU thesis on lithium laser spectroscopy (2018), abstract.
+    // Doctoral dissertation, National Tsing Hua University (2018), abstract.
     within2Sigma(level('Li6', 'P1/2').A, 26.108e6 / 1.5, 0.009e6 / 1.5, '6Li 2p1/2 A');
   });
 });
@@ -187,5 +203,28 @@ describe('chromium and strontium hyperfine constants and clock lines', () => {
     // Two printed digits: 7.45–7.55 kHz.
     expect(1 / (2 * Math.PI * tau)).toBeGreaterThanOrEqual(7.45e3);
     expect(1 / (2 * Math.PI * tau)).toBeLessThanOrEqual(7.55e3);
+  });
+});
+
+describe('values read in a single measurement cite it', () => {
+  it.each([
+    // [species, level, field, the printed value the source must carry]
+    ['H', 'metastable', 'A', '177 556 834.3(6.7) Hz'],
+    ['He4', 'metastable', 'lifetimeS', '7870(510) s'],
+    ['He3', 'metastable', 'A', '−6 739 701 177(16) Hz'],
+    ['Li7', 'P1/2', 'A', '91.873(5) MHz'],
+    ['Sr87', '3P0', 'energyHz', '429 228 004 229 873.082(76) Hz'],
+    ['Sr88', '3P1', 'energyHz', '434 829 121 311(10) kHz'],
+    ['Cs133', 'P3/2', 'gJ', '1.334 087 49(52)'],
+  ] as const)('%s %s %s: %s', (id, key, field, printed) => {
+    const v = level(id, key)[field] as Sourced<number> | undefined;
+    expect(v?.source).toContain(printed);
+    // The uncertainty is the measurement's own, except for ⁷Li 2p1/2 A, widened to cover a second measurement.
+    if (id !== 'Li7') expect(v?.uncertaintySource).toBeUndefined();
+    else expect(v?.uncertaintySource).toContain('arXiv:1008.3228');
+  });
+
+  it('Cs D1: the compilation value carries the 1999 measurement\'s printed uncertainty, cited', () => {
+    expect(level('Cs133', 'P1/2').energyHz?.uncertaintySource).toContain('335 116 048 807(41) kHz');
   });
 });

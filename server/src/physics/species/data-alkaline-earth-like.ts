@@ -3,6 +3,7 @@
  * clock (3P0) and intercombination (3P1) levels; 87Sr also its metastable 3P2.
  */
 import { derivedNuclearG, energy, GROUND_ENERGY, mhz, sourced } from './build-helpers';
+import { SR87_CLOCK, SR88_INTERCOMBINATION } from './measurements';
 import {
   CHEMLIN_SR87,
   CHEMLIN_YB171_SPIN,
@@ -36,14 +37,14 @@ export const STRONTIUM_87: BuiltinSpecies = {
   gI: derivedNuclearG(SR87_MU, 9),
   levels: [
     { key: 'ground', designation: '5s2 1S0', energyHz: GROUND_ENERGY },
-    { key: '3P0', designation: '5s 5p 3P°0', ...energy(429228004229873.082, 'Hz', FROM_MEMORY, 0.076, READ_IN_MEASUREMENT) },
+    { key: '3P0', designation: '5s 5p 3P°0', ...energy(429228004229873.082, 'Hz', SR87_CLOCK, 0.076) },
     {
       key: '3P1',
       designation: '5s 5p 3P°1',
       A: mhz(-260.084, SR87_3P1_MEMORY),
       B: mhz(-35.658, SR87_3P1_MEMORY),
       // The ⁸⁸Sr frequency without the ~−60 MHz isotope shift: its 10 kHz measurement uncertainty does not apply here, so none is stored.
-      ...energy(SR_3P1_KHZ, 'kHz', FROM_MEMORY),
+      ...energy(SR_3P1_KHZ, 'kHz', `${SR88_INTERCOMBINATION}; the ⁸⁸Sr value, used for ⁸⁷Sr without its isotope shift`),
       lifetimeS: TAU_SR_3P1,
     },
     {
@@ -68,7 +69,7 @@ export const STRONTIUM_88: BuiltinSpecies = {
   levels: [
     { key: 'ground', designation: '5s2 1S0', energyHz: GROUND_ENERGY },
     { key: '3P0', designation: '5s 5p 3P°0', ...energy(429228066418012, 'Hz', `${CIPM_2009}: 88Sr 1S0–3P0`) },
-    { key: '3P1', designation: '5s 5p 3P°1', ...energy(SR_3P1_KHZ, 'kHz', FROM_MEMORY, 10, READ_IN_MEASUREMENT), lifetimeS: TAU_SR_3P1 },
+    { key: '3P1', designation: '5s 5p 3P°1', ...energy(SR_3P1_KHZ, 'kHz', SR88_INTERCOMBINATION, 10), lifetimeS: TAU_SR_3P1 },
   ],
 };
 

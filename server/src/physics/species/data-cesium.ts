@@ -1,7 +1,8 @@
 /** Caesium-133: 6s ground level (defines the SI second) and the 6p D-line levels. */
 import { CAESIUM_HYPERFINE_HZ } from '../constants';
 import { energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
-import { FROM_MEMORY, NIST_MASSES, READ_IN_MEASUREMENT, SI_SECOND, STECK_CS } from './sources';
+import { CS_6P32_GJ, CS_D1_1999 } from './measurements';
+import { FROM_MEMORY, NIST_MASSES, SI_SECOND, STECK_CS } from './sources';
 import type { BuiltinSpecies } from './types';
 
 export const CAESIUM_133: BuiltinSpecies = {
@@ -34,7 +35,7 @@ export const CAESIUM_133: BuiltinSpecies = {
       gJ: sourced(0.6659, STECK_CS, 0.00009, FROM_MEMORY),
       // Value and uncertainty are those of a 1999 comb measurement (read); a 2006 comb measurement is
       // 1.4σ lower (tests/physics/speciesReadValues.test.ts, docs/species-data.md).
-      ...energy(335.116048807, 'THz', STECK_CS, 0.000000041, READ_IN_MEASUREMENT),
+      ...energy(335.116048807, 'THz', STECK_CS, 0.000000041, CS_D1_1999),
       vacuumWavelengthNm: sourced(894.59295986, STECK_CS),
       lifetimeS: ns(34.894, STECK_CS),
     },
@@ -44,7 +45,7 @@ export const CAESIUM_133: BuiltinSpecies = {
       A: mhz(50.28827, STECK_CS, 0.00023),
       B: mhz(-0.4934, STECK_CS, 0.0017),
       C: sourced(560, STECK_CS, 70),
-      gJ: sourced(1.33408749, FROM_MEMORY, 5.2e-7, READ_IN_MEASUREMENT),
+      gJ: sourced(1.33408749, CS_6P32_GJ, 5.2e-7),
       ...energy(351.7257185, 'THz', STECK_CS, 0.00000011, FROM_MEMORY),
       vacuumWavelengthNm: sourced(852.34727582, STECK_CS),
       lifetimeS: ns(30.473, STECK_CS),

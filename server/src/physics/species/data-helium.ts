@@ -4,7 +4,8 @@
  */
 import { publishedEnergyToHz } from './conversions';
 import { derivedNuclearG, energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
-import { FROM_MEMORY, NIST_ASD_MEMORY, NIST_MASSES, READ_IN_MEASUREMENT } from './sources';
+import { CODATA_2022_HELION, HE3_METASTABLE_SPLITTING, HE4_METASTABLE_LIFETIME } from './measurements';
+import { FROM_MEMORY, NIST_ASD_MEMORY, NIST_MASSES } from './sources';
 import type { BuiltinLevel, BuiltinSpecies, Sourced } from './types';
 
 const METASTABLE_CM = 159855.9743297;
@@ -39,7 +40,7 @@ const HE4_LEVELS: BuiltinLevel[] = [
     designation: '1s 2s 3S1',
     gJ: sourced(2.002237, FROM_MEMORY),
     ...energy(METASTABLE_CM, 'cm-1', NIST_ASD_MEMORY),
-    lifetimeS: sourced(7870, FROM_MEMORY, 510, READ_IN_MEASUREMENT),
+    lifetimeS: sourced(7870, HE4_METASTABLE_LIFETIME, 510),
   },
   { key: '3P2', designation: '1s 2p 3P°2', energyHz: tripletP(4), lifetimeS: TAU_2P },
   { key: '3P1', designation: '1s 2p 3P°1', energyHz: tripletP(2), lifetimeS: TAU_2P },
@@ -58,9 +59,9 @@ export const HELIUM_4: BuiltinSpecies = {
   notes: 'Use level "metastable" (1s 2s 3S1, J = 1) for metastable-helium beams and traps.',
 };
 
-// Bare helion g-factor / 2, recalled from a direct Penning-trap measurement whose numbers could not be
-// read; the readable CODATA 2014 helion moment is 1.7σ away (tests/physics/speciesReadValues.test.ts).
-const HE3_MU = sourced(-4.2552506997 / 2, FROM_MEMORY);
+// Bare helion moment μ_h/μ_N = g_h/2 (I = 1/2) from the CODATA 2022 helion g-factor; bare because μ_I is the
+// bare-nucleus moment for every species and g_I is derived from it without shielding.
+const HE3_MU = sourced(-4.2552506995 / 2, CODATA_2022_HELION, 0.0000000034 / 2);
 
 export const HELIUM_3: BuiltinSpecies = {
   id: 'He3',
@@ -78,7 +79,7 @@ export const HELIUM_3: BuiltinSpecies = {
       key: 'metastable',
       designation: '1s 2s 3S1',
       // Interval F=1/2 − F=3/2 equals (3/2)|A| for J = 1, I = 1/2; inverted because μ < 0.
-      A: mhz(-6739.701177 / 1.5, FROM_MEMORY, 0.000016 / 1.5, READ_IN_MEASUREMENT),
+      A: mhz(-6739.701177 / 1.5, HE3_METASTABLE_SPLITTING, 0.000016 / 1.5),
       gJ: sourced(2.002237, FROM_MEMORY),
     },
   ],

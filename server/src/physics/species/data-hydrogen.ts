@@ -1,6 +1,7 @@
 /** Hydrogen and deuterium: ground hyperfine masers/beams and the n = 2 levels. */
 import { derivedNuclearG, energy, GROUND_ENERGY, ns, sourced } from './build-helpers';
-import { FROM_MEMORY, HFS_TABLE, IAEA_MOMENTS, NIST_ASD_MEMORY, NIST_MASSES, READ_IN_MEASUREMENT } from './sources';
+import { H_2S_INTERVAL, H_GROUND_MASER } from './measurements';
+import { FROM_MEMORY, IAEA_MOMENTS, NIST_ASD_MEMORY, NIST_MASSES } from './sources';
 import type { BuiltinSpecies } from './types';
 
 const H_MU = sourced(2.792847351, IAEA_MOMENTS);
@@ -23,14 +24,14 @@ export const HYDROGEN: BuiltinSpecies = {
       key: 'ground',
       designation: '1s 2S1/2',
       // J = I = 1/2: the splitting (I + 1/2)A is A itself.
-      A: sourced(1420405751.768, `${HFS_TABLE}: hydrogen maser 1 420 405 751.768(2) Hz (1970)`, 0.002),
+      A: sourced(1420405751.768, H_GROUND_MASER, 0.002),
       gJ: H_GJ,
       energyHz: GROUND_ENERGY,
     },
     {
       key: 'metastable',
       designation: '2s 2S1/2',
-      A: sourced(177556834.3, FROM_MEMORY, 6.7, READ_IN_MEASUREMENT),
+      A: sourced(177556834.3, H_2S_INTERVAL, 6.7),
       ...energy(82258.9543992821, 'cm-1', NIST_ASD_MEMORY),
     },
     {
@@ -66,8 +67,9 @@ export const DEUTERIUM: BuiltinSpecies = {
     {
       key: 'ground',
       designation: '1s 2S1/2',
-      // The splitting ΔW = A(I + 1/2) = 3A/2 is what was measured.
-      A: sourced(327384352.5222 / 1.5, `${HFS_TABLE}: 327 384 352.5222(17) Hz (1972); A = ΔW/(3/2)`, 0.0017 / 1.5),
+      // The splitting ΔW = A(I + 1/2) = 3A/2 is what was measured: 327 384 352.5222(17) Hz, a 1972 maser value
+      // recalled with its uncertainty; no readable page prints it (docs/species-data.md).
+      A: sourced(327384352.5222 / 1.5, FROM_MEMORY, 0.0017 / 1.5),
       gJ: H_GJ,
       energyHz: GROUND_ENERGY,
     },

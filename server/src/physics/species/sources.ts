@@ -1,7 +1,7 @@
 /**
  * Citation strings shared by the data files. A value read in a published compilation cites
- * that compilation; a value that was recalled, or whose source could not be confirmed as a
- * named compilation, says FROM_MEMORY and nothing more.
+ * that compilation; a value read in a single measurement cites it (measurements.ts); a value
+ * that was recalled, or whose source could not be read, says FROM_MEMORY and nothing more.
  */
 
 export const FROM_MEMORY = 'from memory';
@@ -22,15 +22,14 @@ export const TIECKE_K = 'Tiecke, "Properties of Potassium" (v1.02, 2011)';
 export const GEHM_LI6 = 'Gehm, "Properties of 6Li" (2003)';
 
 // Compilations and isotope tables read in their published pages (value and, where printed, uncertainty).
-export const HFS_TABLE = 'public table of measured ground hyperfine splittings (rubidium.dyndns.org/~magnus/physics/hyperfine)';
 export const CHEMLIN_K40 = 'ChemLin isotope data (chemlin.org), potassium-40: μ/μ_N = −1.29797(3)';
 export const CHEMLIN_SR87 = 'ChemLin isotope data (chemlin.org), strontium-87: spin 9/2+, μ/μ_N = −1.09316(11)';
 export const CHEMLIN_YB171_SPIN = 'ChemLin isotope data (chemlin.org), ytterbium isotopes: ¹⁷¹Yb spin 1/2−';
 export const WEBELEMENTS_CR53 = 'WebElements chromium isotopes table: ⁵³Cr I = 3/2, μ/μ_N = −0.47454 (no uncertainty printed)';
 
 /**
- * Uncertainty of a value that stays "from memory" (its only readable source is a single measurement,
- * not a compilation) but whose measurement printed value and uncertainty were read and agree;
- * docs/species-data.md names the measurement and tests/physics/speciesReadValues.test.ts holds it.
+ * Uncertainty of a value that stays "from memory": its measurement's abstract was read in an earlier
+ * session, but could not be found again to cite it (docs/species-data.md names the measurement and
+ * tests/physics/speciesReadValues.test.ts holds the value to it).
  */
 export const READ_IN_MEASUREMENT = 'read in the abstract of a single measurement that confirms the value (docs/species-data.md)';

@@ -1,0 +1,56 @@
+/**
+ * The four lithium D-line centroids stored in the species table, held to the measured differences between
+ * them: the ⁷Li − ⁶Li isotope shift of the D1 line and the 2P fine structure of each isotope. Each check names
+ * where the number was read (search tool, abstracts); agreement is within twice the combined uncertainty.
+ */
+import { describe, expect, it } from 'vitest';
+import { level, num } from '../fixtures/builtinLookup';
+
+const MHZ = 1e6;
+const line = (id: string, key: string): number => num(level(id, key).energyHz, `${id} ${key}`) / MHZ;
+
+const isotopeShiftD1 = (): number => line('Li7', 'P1/2') - line('Li6', 'P1/2');
+const isotopeShiftD2 = (): number => line('Li7', 'P3/2') - line('Li6', 'P3/2');
+const fineStructure = (id: string): number => line(id, 'P3/2') - line(id, 'P1/2');
+
+/** |implied − published| ≤ 2σ, σ the published uncertainty (the stored differences carry none of their own). */
+function within2Sigma(implied: number, published: number, sigma: number): void {
+  expect(Math.abs(implied - published)).toBeLessThanOrEqual(2 * sigma);
+}
+
+describe('lithium D lines: the differences implied by the table', () => {
+  it('D1 isotope shift 10 533.800(15) MHz (doctoral dissertation, National Tsing Hua University, 2018, abstract)', () => {
+    within2Sigma(isotopeShiftD1(), 10533.8, 0.015);
+  });
+
+  it.each([
+    // Critical review of the lithium fine-structure data (2009), abstract (yorku.ca/wlaser publication list).
+    ['Li6', 10052.954, 0.049],
+    ['Li7', 10053.154, 0.04],
+  ] as const)('%s 2P fine structure %s ± %s MHz (2009 critical review, abstract)', (id, published, sigma) => {
+    within2Sigma(fineStructure(id), published, sigma);
+  });
+
+  it('the isotope shifts of both lines agree with the calculation of Phys. Rev. A 61, 022504 (2000)', () => {
+    // Abstract (scholar.uwindsor.ca): 10 534.31(61) MHz (D1) and 10 534.70(61) MHz (D2), with the nuclear charge
+    // radii of electron scattering; independent of the measurements the table is built from.
+    const measuredU = Math.hypot(0.015, 0.049, 0.04);
+    expect(Math.abs(isotopeShiftD1() - 10534.31)).toBeLessThanOrEqual(2 * Math.hypot(0.61, 0.015));
+    expect(Math.abs(isotopeShiftD2() - 10534.7)).toBeLessThanOrEqual(2 * Math.hypot(0.61, measuredU));
+  });
+
+  it('no longer pairs the recalled ⁷Li D1 with the compilation ⁶Li lines, which miss both differences', () => {
+    // The 6Li compilation (2003) prints 446.789634 and 446.799677 THz: their difference, 10 043 MHz, is ~200σ from
+    // the reviewed ⁶Li fine structure, and 446.789634 THz sits 38 MHz above ⁷Li D1 − the measured isotope shift.
+    expect(Math.abs(line('Li6', 'P1/2') - 446789634)).toBeGreaterThan(30);
+    expect(Math.abs(line('Li6', 'P3/2') - 446799677)).toBeGreaterThan(20);
+  });
+
+  it('keeps the ⁷Li D1 line the table is anchored on (recalled) and derives the other three from it', () => {
+    expect(line('Li7', 'P1/2')).toBeCloseTo(446800129.853, 3);
+    expect(level('Li7', 'P1/2').energyHz?.source).toBe('from memory');
+    for (const [id, key] of [['Li7', 'P3/2'], ['Li6', 'P1/2'], ['Li6', 'P3/2']] as const) {
+      expect(level(id, key).energyHz?.source, `${id} ${key}`).toMatch(/^derived: .*\((?:19|20)\d\d\)/);
+    }
+  });
+});
