@@ -196,6 +196,11 @@ describe('chromium and strontium hyperfine constants and clock lines', () => {
     within2Sigma(level('Sr87', '3P0').energyHz, f, u, 'Sr87 clock');
   });
 
+  it('⁴⁰Ca 1S0–3P1 (recalled) agrees with the phase-coherent measurement 455 986 240 493.95 kHz, u = 0.43 kHz', () => {
+    // "First Phase-Coherent Frequency Measurement of Visible Radiation", abstract (scilit.com); no journal printed there.
+    within2Sigma(level('Ca40', '3P1').energyHz, 455986240493.95e3, 0.43e3, 'Ca40 3P1');
+  });
+
   it('the ⁸⁸Sr 689 nm line: 434 829 121 311(10) kHz, and its lifetime matches a 2π × 7.5 kHz width', () => {
     // Phys. Rev. Lett. 91, 243002 (2003), abstract; width "2π × 7.5 kHz" (arXiv:2403.18796, introduction).
     within2Sigma(level('Sr88', '3P1').energyHz, 434829121311e3, 10e3, 'Sr88 3P1');
