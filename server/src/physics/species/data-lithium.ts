@@ -9,7 +9,7 @@ import type { BuiltinSpecies } from './types';
  * no page printing an absolute lithium frequency could be read), and the read differences: the D1 isotope
  * shift and the two 2P fine-structure intervals. The compilation's ⁶Li lines (446.789634 and 446.799677 THz)
  * are not used: their difference, 10 043 MHz, is 10 MHz from the measured ⁶Li fine structure, and the ⁶Li D1
- * sits 38 MHz above the ⁷Li D1 below minus the measured isotope shift (docs/species-data.md).
+ * sits 38 MHz above ⁷Li D1 minus the measured isotope shift (docs/species-data.md).
  */
 const LI7_D1_MHZ = 446800129.853;
 const LI_D1_ISOTOPE_SHIFT_MHZ = 10533.8;
