@@ -28,8 +28,8 @@ export const CHEMLIN_YB171_SPIN = 'ChemLin isotope data (chemlin.org), ytterbium
 export const WEBELEMENTS_CR53 = 'WebElements chromium isotopes table: ⁵³Cr I = 3/2, μ/μ_N = −0.47454 (no uncertainty printed)';
 
 /**
- * Uncertainty of a value that stays "from memory": its measurement's abstract was read in an earlier
- * session, but could not be found again to cite it (docs/species-data.md names the measurement and
- * tests/physics/speciesReadValues.test.ts holds the value to it).
+ * Uncertainty of a value that stays "from memory": its measurement's abstract was read, but the page
+ * printed no journal, volume, page and year to cite it by (or could not be found again);
+ * docs/species-data.md names the measurement and tests/physics/speciesReadValues.test.ts holds the value to it.
  */
 export const READ_IN_MEASUREMENT = 'read in the abstract of a single measurement that confirms the value (docs/species-data.md)';
