@@ -8,6 +8,7 @@ import type { BeamEvaluation } from './beamEvaluation';
 import { lengthText } from './quantityText';
 import type { BeamResult } from './resultTypes';
 import { EVAL_RULES } from './evalCodes';
+import { lonePeak } from './lonePeak';
 
 export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
   const out: Problem[] = [];
@@ -33,7 +34,7 @@ export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
   }
   const r = e.result;
   if (!r.computed || r.all_resolved !== false) return out;
-  if (r.peaks.length === 1) {
+  if (lonePeak(r) === 'merged') {
     out.push(onePeak(beam, r, e.pattern?.image?.kernelFwhmM));
     return out;
   }
