@@ -55,6 +55,16 @@ export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
   return out;
 }
 
+/**
+ * Whether the advice searched the beam's own geometry (gradient, magnet length, drift, slits, detector, speed spread)
+ * and no change within its bound splits the merged peak. Then the finding is information, not a warning: nothing
+ * the user can turn within reach resolves it (e.g. nuclear-size moment differences). A magnet built from sources is
+ * searched without its gradient and length (its currents and geometry might split it), so it stays a warning.
+ */
+function nothingWithinReach(r: BeamResult): boolean {
+  return r.resolving_options !== undefined && r.resolving_options.length === 0 && r.deflection_model !== 'field-map';
+}
+
 /** One merged peak (sublevels that deflect differently, resolved: false): how far apart they are against the image. */
 function onePeak(beam: BeamModel, r: BeamResult, imageFwhmM: number | undefined): Problem {
   const members = new Set(r.peaks[0]!.members);
@@ -65,7 +75,7 @@ function onePeak(beam: BeamModel, r: BeamResult, imageFwhmM: number | undefined)
   const advice = r.resolving_advice ? ` ${r.resolving_advice}` : '';
   return {
     code: 'beam-one-peak',
-    severity: EVAL_RULES['beam-one-peak'].severity,
+    severity: nothingWithinReach(r) ? 'info' : EVAL_RULES['beam-one-peak'].severity,
     message: `beam '${beam.name}': all ${members.size} sublevels with atoms land in one peak: their mean deflections span ${lengthText(spread, 2)}${image}, so the detector does not separate them.${advice}`,
     range: beam.nameRange,
     ...(typeof r.resolving_gradient_T_per_m === 'number' ? { data: { resolvingGradientTPerM: Math.abs(r.resolving_gradient_T_per_m) } } : {}),
