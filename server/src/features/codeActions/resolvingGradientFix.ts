@@ -8,7 +8,7 @@ import { convertSI } from '../../format/units';
 import { type FixContext, quickFix } from './types';
 
 /** Rounded away from zero to 3 significant digits: the written value must not fall below the one that resolves. */
-export function roundedUp(x: number): string {
+function roundedUp(x: number): string {
   const step = 10 ** (Math.floor(Math.log10(x)) - 2);
   return String(Number((Math.ceil(x / step) * step).toPrecision(3)));
 }
