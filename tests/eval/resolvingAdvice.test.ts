@@ -4,7 +4,9 @@
  * where the overlap of m_J = ±1 and ±2 comes from the speed spread (profiles ∝ 1/v², as wide as
  * they are apart), so narrower slits cannot help and must not be advised.
  */
+import * as fs from 'fs';
 import { describe, expect, it } from 'vitest';
+import { sarifLog } from '../../server/src/cli/sarif/sarifLog';
 import { analyze } from '../../server/src/eval/analyze';
 import { beamVerdict } from '../../server/src/features/hover/beamSection';
 import type { BeamResult } from '../../server/src/eval/resultTypes';
@@ -112,6 +114,30 @@ describe('one peak: merged (not resolved) or nothing to resolve', () => {
     const fixed = beamOf(ONE_PEAK.replace(/gradient = .*/, `gradient = ${b.resolving_gradient_T_per_m} T/m`));
     expect(fixed.peaks.length).toBeGreaterThan(1);
     expect(fixed.all_resolved).toBe(true);
+  });
+
+  it('a merged peak that no change within the advice\u2019s bound splits is information, with the reason, and still not resolved (SARIF note)', () => {
+    // Invented scenario: only F = 1 of ⁷Li populated at 0.45 T. All three states have m_J = −1/2 there, so their
+    // moments differ by nuclear-size amounts (tens of nm apart against a 100 µm image): no gradient splits them.
+    const text = fs.readFileSync('tests/fixtures/diff/beam-one-peak.sublevel', 'utf8').replace(/^(  detector = .*)$/m, '$1\n  populations = 1 1');
+    const a = analyze(text);
+    const b = a.result!.beams[0]!;
+    expect(b.peaks).toHaveLength(1);
+    expect(b.peaks[0]!.members).toHaveLength(3);
+    expect(b.all_resolved).toBe(false);
+    expect(b.resolving_options).toEqual([]);
+    const p = a.problems.find((x) => x.code === 'beam-one-peak')!;
+    expect(p.severity).toBe('info');
+    expect(p.message).toMatch(/their mean deflections span [\d.]+ nm against an image width \(FWHM\) of 100 µm/);
+    expect(p.message).toContain('no gradient, magnet length or drift up to 100 times the present one, no narrower slits or detector and no narrower speed spread splits it with a visible dip');
+    const log = sarifLog([{ path: 'f1.sublevel', problems: [p] }], { toolVersion: '0', root: '/repo', cwd: '/repo' });
+    expect(log.runs[0]!.results![0]!.level).toBe('note');
+    // The same beam with every sublevel populated splits at a stronger gradient: a warning (the ONE_PEAK case above, too).
+    const all = analyze(fs.readFileSync('tests/fixtures/diff/beam-one-peak.sublevel', 'utf8'));
+    const q = all.problems.find((x) => x.code === 'beam-one-peak')!;
+    expect(all.result!.beams[0]!.resolving_options!.length).toBeGreaterThan(0);
+    expect(q.severity).toBe('warning');
+    expect(sarifLog([{ path: 'all.sublevel', problems: [q] }], { toolVersion: '0', root: '/repo', cwd: '/repo' }).runs[0]!.results![0]!.level).toBe('warning');
   });
 
   it('sublevels that all deflect alike (J = 0) have nothing to resolve: resolved, no warning, and said so', () => {

@@ -4,8 +4,9 @@
  * against the on-axis field of a loop, B = μ0 N I R²/(2 (R² + z²)^(3/2)), textbook Biot–Savart),
  * and so is a block's magnetisation of 0, along the direction written (checked against a block's
  * on-axis field);
- * an input that still cannot be moved, or whose nudge puts a conductor on the beam line, gets
- * `uncertainty-undefined` at the number the file wrote, in `check`, `eval` text and JSON.
+ * an input whose nudge puts a conductor on the beam line gets `uncertainty-undefined` at the
+ * number the file wrote, in `check`, `eval` text and JSON. (Every input can be moved: turns are at
+ * least 1 and a magnetisation is always written with its direction.)
  */
 import { mkdtempSync, writeFileSync } from 'fs';
 import { tmpdir } from 'os';

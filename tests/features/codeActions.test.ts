@@ -9,6 +9,7 @@ import { analyzeFast } from '../../server/src/service/fastAnalysis';
 import { readQuantity } from '../../server/src/format/units';
 import { diagnostics } from '../../server/src/features/diagnostics';
 import { applyEdits, editsOf, analysisOf, URI } from './helpers';
+import { magnetAndBeam, speciesX } from '../fixtures/ovenBeam';
 
 interface Case {
   name: string;
@@ -360,5 +361,65 @@ describe('convert-unit refactoring on every quantity of the example files', () =
       }
     }
     expect(checked).toBeGreaterThan(20);
+  });
+});
+
+describe('quick fix: the gradient the beam advice found', () => {
+  // Invented oven beam (tests/fixtures/ovenBeam.ts): a J = 1 level whose three peaks overlap at 0.5 T/m.
+  const unresolved = (gradient: string): string => speciesX('52 u', '3S1') + magnetAndBeam(gradient);
+  const gradientLine = (text: string): string => text.split('\n').find((l) => l.trimStart().startsWith('gradient'))!;
+
+  function applyOnly(text: string, code: string): { title: string; after: string } {
+    const fixes = fixesFor(text, code);
+    expect(fixes.map((f) => f.title)).toHaveLength(1);
+    return { title: fixes[0]!.title, after: applyEdits(text, editsOf(fixes[0]!.edit)) };
+  }
+
+  it('beam-unresolved: only the number changes (unit, spacing, comment kept), rounded up, and the file then resolves', () => {
+    const text = unresolved('0.5 T/m   # from the supplier');
+    const g = analysisOf(text).problems.find((p) => p.code === 'beam-unresolved')!.data!.resolvingGradientTPerM as number;
+    const { title, after } = applyOnly(text, 'beam-unresolved');
+    const line = gradientLine(after);
+    const m = /^  gradient = ([\d.]+) T\/m   # from the supplier$/.exec(line)!;
+    expect(m, line).not.toBeNull();
+    const written = Number(m[1]);
+    // 3 significant digits, never below the gradient the search found (the resolving_advice test pins it near 3.16 T/m).
+    expect(written).toBeGreaterThanOrEqual(g);
+    expect(written / g).toBeLessThan(1.01);
+    expect(title).toBe(`Set the gradient of magnet 'm' to ${m[1]} T/m (resolves the peaks)`);
+    // Every other line is untouched.
+    expect(after.split('\n').filter((l) => l !== line)).toEqual(text.split('\n').filter((l) => l !== gradientLine(text)));
+    expect(analysisOf(after).result!.beams[0]!.all_resolved).toBe(true);
+  });
+
+  it('the user’s unit and sign stay: −50 G/cm is rewritten in G/cm with its minus', () => {
+    const text = unresolved('-50 G/cm');
+    const { after } = applyOnly(text, 'beam-unresolved');
+    const m = /^  gradient = -([\d.]+) G\/cm$/.exec(gradientLine(after))!;
+    expect(m).not.toBeNull();
+    // 3.16 T/m = 316 G/cm (SI: 1 G = 1e-4 T, 1 cm = 1e-2 m).
+    expect(Number(m[1])).toBeGreaterThan(300);
+    expect(Number(m[1])).toBeLessThan(330);
+    expect(analysisOf(after).result!.beams[0]!.all_resolved).toBe(true);
+  });
+
+  it('beam-one-peak (at the beam name): the fix edits the magnet’s gradient and splits the peak into resolved ones', () => {
+    const text = unresolved('0.1 T/m');
+    // The diagnostic sits at the beam's name and names the gradient line its fix edits.
+    const d = diagnostics(analysisOf(text), URI).find((x) => x.code === 'beam-one-peak')!;
+    expect(d.relatedInformation!.map((r) => [r.location.range.start.line, r.message])).toEqual([[text.split('\n').indexOf('  gradient = 0.1 T/m'), "magnet 'm' sets the gradient here"]]);
+    const { after } = applyOnly(text, 'beam-one-peak');
+    expect(gradientLine(after)).toMatch(/^  gradient = 3\.1\d T\/m$/);
+    const b = analysisOf(after).result!.beams[0]!;
+    expect(b.peaks.length).toBeGreaterThan(1);
+    expect(b.all_resolved).toBe(true);
+  });
+
+  it('no fix where it could not keep the line as written: a gradient with an uncertainty', () => {
+    const text = unresolved('0.50(2) T/m');
+    const analysis = analysisOf(text);
+    const d = diagnostics(analysis, URI).filter((x) => x.code === 'beam-unresolved');
+    expect(d).toHaveLength(1);
+    expect(codeActions(analysis, URI, { range: d[0]!.range, diagnostics: d, only: ['quickfix'] })).toEqual([]);
   });
 });

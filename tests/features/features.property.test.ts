@@ -184,18 +184,17 @@ describe('quick fixes', () => {
         const lineStarts = computeLineStarts(text);
         const index = { text, lineStarts };
         for (const d of diagnostics(a, URI)) {
-          const from = lineStarts[d.range.start.line] ?? text.length;
-          const to = lineStarts[d.range.end.line + 1] ?? text.length;
+          // The diagnostic's own lines, and those of a related range it names in this file (a beam's
+          // `beam-one-peak` names the magnet's gradient line, where its fix writes the advised gradient).
+          const ranges = [d.range, ...(d.relatedInformation ?? []).filter((r) => r.location.uri === URI).map((r) => r.location.range)];
+          const spans = ranges.map((r) => [lineStarts[r.start.line] ?? text.length, lineStarts[r.end.line + 1] ?? text.length] as const);
           for (const action of codeActions(a, URI, { range: d.range, diagnostics: [d], only: ['quickfix'] })) {
             const edits = editsOf(action.edit);
             expect(edits.length).toBeGreaterThan(0);
             for (const e of edits) {
-              expect(positionToOffset(index, e.range.start)).toBeGreaterThanOrEqual(from);
-              expect(positionToOffset(index, e.range.end)).toBeLessThanOrEqual(to);
+              const [start, end] = [positionToOffset(index, e.range.start), positionToOffset(index, e.range.end)];
+              expect(spans.some(([from, to]) => start >= from && end <= to), `edit at ${start}-${end} outside the diagnostic's lines`).toBe(true);
             }
-            const fixed = applyEdits(text, edits);
-            expect(fixed.slice(0, from)).toBe(text.slice(0, from));
-            expect(fixed.slice(fixed.length - (text.length - to))).toBe(text.slice(to));
             checked++;
           }
         }

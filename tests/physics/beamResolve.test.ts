@@ -162,12 +162,14 @@ describe('one peak: merged, or nothing to resolve', () => {
     expect(p.peaks).toHaveLength(1);
     expect(p.pairs).toEqual([]);
     expect(p.allResolved).toBe(false);
+    expect(p.mergedLonePeak).toBe(true);
   });
 
   it('sublevels that all deflect alike have nothing to resolve: equal moments, μ = 0 (J = 0), one sublevel, one populated', () => {
     const alike = (moments: number[], populations = moments.map(() => 1)): boolean => {
       const p = detectorPattern({ ...pair, sublevels: moments.map((m, i) => ({ label: `s${i}`, momentJT: m, population: populations[i]! })) });
       expect(p.peaks).toHaveLength(1);
+      expect(p.mergedLonePeak).toBe(!p.allResolved);
       return p.allResolved;
     };
     expect(alike([BOHR_MAGNETON, BOHR_MAGNETON, BOHR_MAGNETON])).toBe(true);

@@ -158,7 +158,7 @@ describe('the field map figure', () => {
     const positionsM = Array.from({ length: 201 }, (_, k) => -0.1 + k * 0.001);
     const magnitudeT = positionsM.map((z) => (z === 0 ? 0 : Math.min(1, 1e-9 / Math.abs(z) ** 3)));
     const svg = renderFieldMap(
-      { title: 'decades', alongName: 'z', acrossName: 'x', lineText: 'along z', positionsM, magnitudeT, componentT: magnitudeT, componentName: 'B_z', fieldUnit: 'T', sources: [] },
+      { title: 'decades', alongName: 'z', acrossName: 'x', lineText: 'along z', positionsM, magnitudeT, componentT: magnitudeT, componentName: 'B_z', fieldUnit: 'T', axis: magnitudeAxis(magnitudeT), sources: [] },
       { kind: 'export' },
     );
     expect(svg).not.toMatch(/NaN|Infinity/);

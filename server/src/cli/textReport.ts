@@ -5,7 +5,7 @@ import { halfText } from '../eval/halves';
 import { curvatureText, fieldText, frequencyText, gradientText, lengthText, percentText, sensitivityText, speedText, trimNumber, withUncertainty } from '../eval/quantityText';
 import { beamPositionNoise, DIP_NOISE, SENSITIVITY_NOISE } from '../eval/noiseFloors';
 import { polarizationSymbol } from '../eval/polarizationName';
-import { MERGED_PEAK_TEXT, nothingToResolve } from '../eval/resolvingAdvice';
+import { lonePeak, MERGED_PEAK_TEXT, nothingToResolveText } from '../eval/lonePeak';
 import { fieldInUnit, inWrittenUnit, workingFieldUnit } from '../eval/writtenUnit';
 import type {
   BeamResult,
@@ -238,9 +238,8 @@ function beamReport(b: BeamResult): string[] {
       b.peaks.map((p) => [withUncertainty(p.position_m, p.position_m_unc, (v) => lengthText(v, 4, noise)), p.fwhm_m === null ? 'off grid' : lengthText(p.fwhm_m), p.members.join('; ')]),
     ).map((x) => '    ' + x),
   );
-  if (b.peaks.length === 1 && b.all_resolved !== undefined) {
-    out.push(`  one peak: ${b.all_resolved ? nothingToResolve(b) : `${MERGED_PEAK_TEXT} → NOT resolved`}`);
-  }
+  const lone = lonePeak(b);
+  if (lone) out.push(`  one peak: ${lone === 'nothing-to-resolve' ? nothingToResolveText(b) : `${MERGED_PEAK_TEXT} → NOT resolved`}`);
   for (const p of b.pairs) {
     out.push(`  peaks ${p.left + 1} and ${p.right + 1}: dip ${percentText(p.dip_ratio, 3, DIP_NOISE)} of the smaller peak → ${p.resolved ? 'resolved' : 'NOT resolved'} (criterion ≤ ${percentText(b.criterion_dip_ratio)})`);
   }

@@ -8,6 +8,7 @@ import type { BeamEvaluation } from './beamEvaluation';
 import { lengthText } from './quantityText';
 import type { BeamResult } from './resultTypes';
 import { EVAL_RULES } from './evalCodes';
+import { lonePeak } from './lonePeak';
 
 export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
   const out: Problem[] = [];
@@ -33,14 +34,13 @@ export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
   }
   const r = e.result;
   if (!r.computed || r.all_resolved !== false) return out;
-  if (r.peaks.length === 1) {
+  if (lonePeak(r) === 'merged') {
     out.push(onePeak(beam, r, e.pattern?.image?.kernelFwhmM));
     return out;
   }
   const merged = r.pairs.filter((p) => !p.resolved);
   const names = merged.map((p) => `${peakName(r.peaks[p.left]?.members)} and ${peakName(r.peaks[p.right]?.members)}`);
   const gradient = beam.magnet?.gradientTPerM;
-  const fix = r.resolving_gradient_T_per_m;
   const advice = r.resolving_advice ? ` ${r.resolving_advice}` : '';
   const related = [{ message: `beam '${beam.name}' uses this magnet`, range: beam.nameRange }];
   out.push({
@@ -49,9 +49,19 @@ export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
     message: `beam '${beam.name}': ${merged.length} neighbouring peak pair${merged.length === 1 ? '' : 's'} will not be resolved on the detector (${names.join('; ')}).${advice}`,
     range: gradient?.range ?? beam.nameRange,
     related,
-    ...(typeof fix === 'number' ? { data: { resolvingGradientTPerM: Math.abs(fix) } } : {}),
+    ...resolvingGradientData(beam, r),
   });
   return out;
+}
+
+/**
+ * Whether the advice searched the beam's own geometry (gradient, magnet length, drift, slits, detector, speed spread)
+ * and no change within its bound splits the merged peak. Then the finding is information, not a warning: nothing
+ * the user can turn within reach resolves it (e.g. nuclear-size moment differences). A magnet built from sources is
+ * searched without its gradient and length (its currents and geometry might split it), so it stays a warning.
+ */
+function nothingWithinReach(r: BeamResult): boolean {
+  return r.resolving_options !== undefined && r.resolving_options.length === 0 && r.deflection_model !== 'field-map';
 }
 
 /** One merged peak (sublevels that deflect differently, resolved: false): how far apart they are against the image. */
@@ -62,13 +72,23 @@ function onePeak(beam: BeamModel, r: BeamResult, imageFwhmM: number | undefined)
   const spread = Math.max(...means) - Math.min(...means);
   const image = imageFwhmM !== undefined ? ` against an image width (FWHM) of ${lengthText(imageFwhmM, 2)}` : '';
   const advice = r.resolving_advice ? ` ${r.resolving_advice}` : '';
+  const fix = resolvingGradientData(beam, r);
+  // The quick fix writes the advised gradient on the magnet's line: the diagnostic names that line.
+  const gradient = fix.data ? beam.magnet?.gradientTPerM?.range : undefined;
   return {
     code: 'beam-one-peak',
-    severity: EVAL_RULES['beam-one-peak'].severity,
+    severity: nothingWithinReach(r) ? 'info' : EVAL_RULES['beam-one-peak'].severity,
     message: `beam '${beam.name}': all ${members.size} sublevels with atoms land in one peak: their mean deflections span ${lengthText(spread, 2)}${image}, so the detector does not separate them.${advice}`,
     range: beam.nameRange,
-    ...(typeof r.resolving_gradient_T_per_m === 'number' ? { data: { resolvingGradientTPerM: Math.abs(r.resolving_gradient_T_per_m) } } : {}),
+    ...(gradient ? { related: [{ message: `magnet '${beam.magnet!.name}' sets the gradient here`, range: gradient }] } : {}),
+    ...fix,
   };
+}
+
+/** For the quick fix that writes the advised gradient into the magnet (features/codeActions/resolvingGradientFix.ts). */
+function resolvingGradientData(beam: BeamModel, r: BeamResult): Pick<Problem, 'data'> {
+  const g = r.resolving_gradient_T_per_m;
+  return typeof g === 'number' && beam.magnet ? { data: { resolvingGradientTPerM: Math.abs(g), magnet: beam.magnet.name } } : {};
 }
 
 function peakName(members: string[] | undefined): string {

@@ -8,7 +8,7 @@ export const EVAL_RULES = {
   'zeeman-strong-field': { severity: 'info', summary: 'A level is in the strong-field regime; low-field labels mislead.' },
   'diamagnetic-not-included': { severity: 'info', summary: 'A whole term computed without its diamagnetic term where that term would exceed 1e-3 of its smallest splitting.' },
   'beam-unresolved': { severity: 'warning', summary: 'Neighbouring peaks of a beam would merge on the detector.' },
-  'beam-one-peak': { severity: 'warning', summary: 'All sublevels of a beam land in one peak on the detector although they deflect differently: the peak is not resolved.' },
+  'beam-one-peak': { severity: 'warning', summary: 'All sublevels of a beam land in one peak on the detector although they deflect differently: the peak is not resolved (information when no gradient, magnet length, drift, slit, detector or speed spread within the advice\u2019s bound splits it).' },
   'beam-slits-too-wide': { severity: 'error', summary: 'Slits so wide for their separation that the collimated beam is not narrow.' },
   'beam-misses-detector': { severity: 'warning', summary: 'A detector placed where (almost) no atoms arrive.' },
   'beam-population-unmatched': { severity: 'warning', summary: 'A `populations` entry names an F (or F, m_F) the beam\u2019s level does not have; it is not used.' },

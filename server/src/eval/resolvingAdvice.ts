@@ -5,6 +5,7 @@
  */
 import type { BeamGeometry } from '../physics/beam';
 import { gradientText, lengthText, percentText } from './quantityText';
+import { lonePeak } from './lonePeak';
 import type { BeamResult } from './resultTypes';
 
 type Option = NonNullable<BeamResult['resolving_options']>[number];
@@ -13,7 +14,7 @@ type Option = NonNullable<BeamResult['resolving_options']>[number];
 export function resolvingAdvice(r: BeamResult, geometry: BeamGeometry): string | undefined {
   if (!r.computed || r.all_resolved !== false || r.resolving_options === undefined || r.worst_dip_ratio === undefined) return undefined;
   // One merged peak: there is no dip yet, and each change is judged on the peaks it splits the beam into.
-  const onePeak = r.peaks.length === 1;
+  const onePeak = lonePeak(r) === 'merged';
   const now = onePeak ? 'One peak with no dip' : `The worst dip is ${percentText(r.worst_dip_ratio, 2)}`;
   const deepens = onePeak ? 'splits it with a visible dip' : 'deepens it';
   if (r.resolving_options.length === 0 && r.deflection_model === 'field-map') {
@@ -26,14 +27,6 @@ export function resolvingAdvice(r: BeamResult, geometry: BeamGeometry): string |
   const parts = r.resolving_options.map((o) => `${changeText(o, geometry)} ${o.change === 'slits' ? 'give' : 'gives'} ${dip(o)}${o.resolves_all ? (o.change === 'slits' ? ' and resolve every pair' : ' and resolves every pair') : ''}`);
   const lead = onePeak ? 'No dip now, one peak' : `Worst dip now ${percentText(r.worst_dip_ratio, 2)}`;
   return `${lead} (resolved at ≤ ${percentText(r.criterion_dip_ratio, 2)}); computed on this setup: ${parts.join('; ')}.`;
-}
-
-/** A lone peak that counts as resolved holds one sublevel, or sublevels that all deflect alike. */
-/** One peak of sublevels that deflect differently (`beam-one-peak`), in words. */
-export const MERGED_PEAK_TEXT = 'the sublevels deflect differently but land together';
-
-export function nothingToResolve(r: BeamResult): string {
-  return (r.peaks[0]?.members.length ?? 0) > 1 ? 'the sublevels all deflect alike, nothing to resolve' : 'one sublevel with atoms, nothing to resolve';
 }
 
 function changeText(o: Option, g: BeamGeometry): string {

@@ -9,6 +9,7 @@ import type { Problem } from '../format/ast';
 import { convertUnitActions } from './codeActions/convertUnit';
 import { addJFix, missingArrowFix, missingColonFix, missingEqualsFix } from './codeActions/punctuationFixes';
 import { removeExtraValueFix, removeSettingFix } from './codeActions/removeSettingFix';
+import { resolvingGradientFix } from './codeActions/resolvingGradientFix';
 import { suggestionFixes } from './codeActions/suggestionFixes';
 import type { FixBuilder, FixContext } from './codeActions/types';
 import { verifiedPreference } from './codeActions/verifyPreferred';
@@ -27,6 +28,8 @@ const FIXES: Readonly<Record<string, FixBuilder>> = {
   'syntax-missing-colon': missingColonFix,
   'syntax-missing-arrow': missingArrowFix,
   'level-needs-j': addJFix,
+  'beam-unresolved': resolvingGradientFix,
+  'beam-one-peak': resolvingGradientFix,
 };
 
 export interface CodeActionRequest {

@@ -54,7 +54,16 @@ export interface FieldMapViewData {
   fieldUnit: FieldUnit;
   /** 'auto' picks a log axis when |B| spans more than LOG_SPAN (middle 90 % of the samples). */
   scale?: 'linear' | 'log' | 'auto';
+  /** The |B| axis, `magnitudeAxis(magnitudeT, scale)`, computed once by the view (its unit is read from it); undefined: no values. */
+  axis: MagnitudeAxis | undefined;
   sources: FieldMapSource[];
+}
+
+export interface MagnitudeAxis {
+  log: boolean;
+  domain: [number, number];
+  /** A linear axis cut below a spike (next to a wire). */
+  cut: boolean;
 }
 
 const WIDTH = 760;
@@ -73,7 +82,7 @@ function percentile(sorted: number[], q: number): number {
 }
 
 /** Whether |B| needs a log axis, and the axis domain. */
-export function magnitudeAxis(values: ArrayLike<number>, scale: FieldMapViewData['scale'] = 'auto'): { log: boolean; domain: [number, number]; cut: boolean } | undefined {
+export function magnitudeAxis(values: ArrayLike<number>, scale: FieldMapViewData['scale'] = 'auto'): MagnitudeAxis | undefined {
   const finite = Array.from(values).filter((v) => Number.isFinite(v) && v >= 0).sort((a, b) => a - b);
   if (finite.length === 0) return undefined;
   const max = finite[finite.length - 1]!;
@@ -94,7 +103,7 @@ export function renderFieldMap(d: FieldMapViewData, theme: RenderTheme): string 
   const pal = paletteFor(theme);
   const idBase = `sl-f${shortHash(`${d.title}|${d.positionsM.length}`)}`;
   const sx = finiteExtent(Array.from(d.positionsM));
-  const axis = magnitudeAxis(d.magnitudeT, d.scale);
+  const axis = d.axis;
   if (!sx || sx[0] === sx[1] || !axis) return emptyDiagram('fieldmap', idBase, d.title, 'No field values to draw (every sample lies on a source).', pal);
 
   const fUnit = fieldDisplayUnit(d.fieldUnit);

@@ -243,6 +243,7 @@ export function fieldMapView(sources: readonly MapSource[], field: FieldFunction
   const componentAxis = showAcross ? acrossName : along;
   const offset = dot(line.origin, line.v);
   const pointText = `(${line.origin.map((c) => Number(c.toPrecision(4))).join(', ')}) m`;
+  const axis = magnitudeAxis(magnitudeT, options.scale);
   return {
     title: `field map: ${usable.map((s) => `${s.kind} ${s.name}`).join(', ')}`,
     alongName: along,
@@ -253,8 +254,9 @@ export function fieldMapView(sources: readonly MapSource[], field: FieldFunction
     componentT: showAcross ? acrossT : alongT,
     componentName: componentAxis === 's' ? 'B along the line' : componentAxis === 'across' ? 'B across the line' : `B_${componentAxis}`,
     componentAxis,
-    fieldUnit: options.fieldUnit ?? mapUnit(magnitudeAxis(magnitudeT, options.scale)?.domain[1] ?? max, options.writtenUnit),
+    fieldUnit: options.fieldUnit ?? mapUnit(axis?.domain[1] ?? max, options.writtenUnit),
     scale: options.scale ?? 'auto',
+    axis,
     sources: usable.map((s) => ({ name: s.name, kind: s.kind, shapes: sourceShapes(s.parts, line) })),
   };
 }

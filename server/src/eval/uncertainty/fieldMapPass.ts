@@ -64,14 +64,14 @@ export function fieldMapBeamUncertainty(r: BeamResult, beam: BeamModel, gJOf: GJ
   const v = fm.reference_speed_m_per_s;
 
   const flown: Flown[] = [];
-  // An input the magnet's own pass could not propagate (it cannot be moved, or its nudge meets a
-  // conductor) is reported once at its number, for the magnet and its beams (sourceGaps.ts).
+  // An input the magnet's own pass could not propagate (its nudge meets a conductor) is reported
+  // once at its number, for the magnet and its beams (sourceGaps.ts).
   const gapped = new Set((inp.sourceGaps.get(magnet.name) ?? []).map((g) => g.input));
   for (const s of inp.sourceInputs.get(magnet.name) ?? []) {
     const step = firstStep(s.u, s.scale);
-    if (gapped.has(s) || !s.at(step)) continue;
+    if (gapped.has(s)) continue;
     const at = (t: number): FlightChange => {
-      const moved = s.at(t)!;
+      const moved = s.at(t);
       return { field: sumField(moved.parts), centre: moved.centre };
     };
     flown.push({ sens: s.sens, label: s.label, ...(s.range ? { range: s.range } : {}), nudge: { step, at } });

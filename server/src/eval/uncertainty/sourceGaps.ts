@@ -9,7 +9,6 @@ import { reachesWritten, type SetupInputs } from './inputs';
 import type { SourceGap, SourceGapReason } from './sourceInputs';
 
 const WHY: Record<SourceGapReason, string> = {
-  'cannot-move': 'it cannot be moved by its uncertainty (it is 0 and has no direction written for it to grow in)',
   'onto-conductor': "moving it by its uncertainty puts a conductor on the beam line's centre, where the field has no value",
 };
 

@@ -28,12 +28,16 @@ export interface SourceInput {
   u: number;
   /** The size the step is measured against (the value, or the magnet's length for a place). */
   scale: number;
-  /** The magnet with this input moved by t; undefined when it cannot be moved (a strength of 0 with no written direction to set it along). */
-  at(t: number): MovedMagnet | undefined;
+  /** The magnet with this input moved by t (a strength of 0 is set rather than scaled). */
+  at(t: number): MovedMagnet;
 }
 
-/** Why an input has no first-order effect on the magnet's field: it cannot be moved, or moving it puts a conductor on the beam line's centre. */
-export type SourceGapReason = 'cannot-move' | 'onto-conductor';
+/**
+ * Why an input has no first-order effect on the magnet's field: moving it puts a conductor on the
+ * beam line's centre. (Every input can be moved: a current or magnetisation of 0 is set rather than
+ * scaled, the readers give a magnetisation its direction and turns are at least 1.)
+ */
+export type SourceGapReason = 'onto-conductor';
 
 export interface SourceGap {
   input: SourceInput;
@@ -50,16 +54,16 @@ export function magnetSourceInputs(magnet: MagnetModel, add: AddInput): SourceIn
   const centre: Vec3 = magnet.atM?.value ?? [0, 0, 0];
   const lengthScale = magnet.lengthM?.value ?? 0.1;
   const out: SourceInput[] = [];
-  const push = (id: string, label: string, v: Valued<number> | undefined, scale: number, at: (t: number) => MovedMagnet | undefined): void => {
+  const push = (id: string, label: string, v: Valued<number> | undefined, scale: number, at: (t: number) => MovedMagnet): void => {
     const sens = add(id, label, v);
     if (sens === NO_SENSITIVITY || !v?.uncertainty) return;
     out.push({ id, label, ...(v.range ? { range: v.range } : {}), sens, u: v.uncertainty, scale: scale > 0 ? scale : lengthScale, at });
   };
-  const withSource = (s: FieldSourceModel, moved: (parts: FieldSourceSpec[]) => FieldSourceSpec[] | undefined, c: Vec3 = centre): MovedMagnet | undefined => {
+  const withSource = (s: FieldSourceModel, moved: (parts: FieldSourceSpec[]) => FieldSourceSpec[], c: Vec3 = centre): MovedMagnet => {
     const own = moved(s.parts);
-    return own ? { parts: sources.flatMap((o) => (o === s ? own : o.parts)), centre: c } : undefined;
+    return { parts: sources.flatMap((o) => (o === s ? own : o.parts)), centre: c };
   };
-  const components = (v: Valued<Vec3> | undefined, id: string, label: string, moved: (c: number, t: number) => MovedMagnet | undefined): void => {
+  const components = (v: Valued<Vec3> | undefined, id: string, label: string, moved: (c: number, t: number) => MovedMagnet): void => {
     v?.componentUncertainty?.forEach((u, c) => {
       if (u !== undefined) push(`${id}.${AXES[c]}`, `${label} ${AXES[c]}`, { value: v.value[c], source: v.source, uncertainty: u, ...(v.range ? { range: v.range } : {}) }, lengthScale, (t) => moved(c, t));
     });
@@ -67,17 +71,14 @@ export function magnetSourceInputs(magnet: MagnetModel, add: AddInput): SourceIn
   for (const s of sources) {
     if (s.parts.length === 0) continue;
     const id = `source:${s.name}`;
-    const strength = (v: Valued<number> | undefined, what: 'current' | 'turns'): void => {
-      // A current of 0 cannot be scaled: it is set instead (a step of its uncertainty's size, as the field is linear in it).
-      const x = v?.value ?? 0;
-      push(`${id}.${what}`, `${what} of ${s.kind} ${s.name}`, v, x !== 0 ? Math.abs(x) : v?.uncertainty ?? 0, (t) => {
-        if (x !== 0) return withSource(s, (parts) => parts.map((p) => scaleStrength(p, (x + t) / x)));
-        return what === 'current' ? withSource(s, () => partsAtCurrent(s, t)) : undefined;
-      });
-    };
-    strength(s.currentA, 'current');
-    // Turns are never 0 (the reader asks for a positive count); with no current they change nothing, exactly.
-    strength(s.turns, 'turns');
+    // A current of 0 cannot be scaled: it is set instead (a step of its uncertainty's size, as the field is linear in it).
+    const current = s.currentA?.value ?? 0;
+    push(`${id}.current`, `current of ${s.kind} ${s.name}`, s.currentA, current !== 0 ? Math.abs(current) : s.currentA?.uncertainty ?? 0, (t) =>
+      current !== 0 ? withSource(s, (parts) => parts.map((p) => scaleStrength(p, (current + t) / current))) : withSource(s, () => partsAtCurrent(s, t)),
+    );
+    // Turns are at least 1 (sourceReaders.ts: a source with fewer has no parts and is skipped above); with no current they change nothing, exactly.
+    const turns = s.turns?.value ?? 1;
+    push(`${id}.turns`, `turns of ${s.kind} ${s.name}`, s.turns, turns, (t) => withSource(s, (parts) => parts.map((p) => scaleStrength(p, (turns + t) / turns))));
     push(`${id}.radius`, `radius of ${s.kind} ${s.name}`, s.radiusM, s.radiusM?.value ?? 0, (t) =>
       withSource(s, (parts) => parts.map((p) => (p.kind === 'loop' || p.kind === 'solenoid' ? { ...p, radiusM: p.radiusM + t } : p))),
     );
@@ -100,12 +101,14 @@ export function magnetSourceInputs(magnet: MagnetModel, add: AddInput): SourceIn
     const m = s.magnetisationT;
     if (m?.uncertainty !== undefined) {
       const size = Math.hypot(...m.value);
-      const along = s.magnetisationAlong;
+      // The reader gives every magnetisation its written direction (slabBuilder.ts: `… along y` is required).
+      const along = s.magnetisationAlong!;
       // Like a current of 0, a magnetisation of 0 cannot be scaled: it is set along its written direction instead (the field is linear in it).
-      push(`${id}.magnetisation`, `magnetisation of slab ${s.name}`, { value: size, source: m.source, uncertainty: m.uncertainty, ...(m.range ? { range: m.range } : {}) }, size !== 0 ? size : m.uncertainty, (t) => {
-        if (size !== 0) return withSource(s, (parts) => parts.map((p) => scaleStrength(p, (size + t) / size)));
-        return along ? withSource(s, (parts) => parts.map((p) => (p.kind === 'slab' ? { ...p, magnetisationT: [t * along[0], t * along[1], t * along[2]] } : p))) : undefined;
-      });
+      push(`${id}.magnetisation`, `magnetisation of slab ${s.name}`, { value: size, source: m.source, uncertainty: m.uncertainty, ...(m.range ? { range: m.range } : {}) }, size !== 0 ? size : m.uncertainty, (t) =>
+        size !== 0
+          ? withSource(s, (parts) => parts.map((p) => scaleStrength(p, (size + t) / size)))
+          : withSource(s, (parts) => parts.map((p) => (p.kind === 'slab' ? { ...p, magnetisationT: [t * along[0], t * along[1], t * along[2]] } : p))),
+      );
     }
   }
   components(magnet.atM, `magnet:${magnet.name}.at`, `beam line of magnet ${magnet.name}`, (c, t) => ({ parts: sources.flatMap((o) => o.parts), centre: withComponent(centre, c, centre[c] + t) }));
@@ -150,14 +153,8 @@ export function centreFieldSensitivities(inputs: readonly SourceInput[]): { fiel
   const gaps: SourceGap[] = [];
   for (const input of inputs) {
     const h = firstStep(input.u, input.scale);
-    const plus = input.at(h);
-    const minus = input.at(-h);
-    if (!plus || !minus) {
-      gaps.push({ input, why: 'cannot-move' });
-      continue;
-    }
-    const [bp, gp] = at(plus);
-    const [bm, gm] = at(minus);
+    const [bp, gp] = at(input.at(h));
+    const [bm, gm] = at(input.at(-h));
     if (![bp, gp, bm, gm].every(Number.isFinite)) {
       gaps.push({ input, why: 'onto-conductor' });
       continue;

@@ -5,7 +5,7 @@
  * cautions in one line.
  */
 import { levelDesignationText } from '../../eval/designationText';
-import { MERGED_PEAK_TEXT, nothingToResolve } from '../../eval/resolvingAdvice';
+import { lonePeak, MERGED_PEAK_TEXT, nothingToResolveText } from '../../eval/lonePeak';
 import type { BeamResult, EvaluationResult, LevelResult } from '../../eval/resultTypes';
 import { lengthText, speedText, trimNumber, withUncertainty } from '../../eval/quantityText';
 import { beamPositionNoise } from '../../eval/noiseFloors';
@@ -47,8 +47,10 @@ export function beamVerdict(r: BeamResult): string | undefined {
   if (!r.computed) return undefined;
   const peaks = `${r.peaks.length} peak${r.peaks.length === 1 ? '' : 's'}`;
   if (r.all_resolved === undefined) return peaks;
-  if (r.all_resolved) return r.peaks.length === 1 ? `${peaks}: ${nothingToResolve(r)}` : `${peaks}, all resolved`;
-  if (r.peaks.length === 1) return `${peaks}: ${MERGED_PEAK_TEXT}, not resolved${r.resolving_advice ? `. ${r.resolving_advice}` : ''}`;
+  const lone = lonePeak(r);
+  if (lone === 'nothing-to-resolve') return `${peaks}: ${nothingToResolveText(r)}`;
+  if (lone === 'merged') return `${peaks}: ${MERGED_PEAK_TEXT}, not resolved${r.resolving_advice ? `. ${r.resolving_advice}` : ''}`;
+  if (r.all_resolved) return `${peaks}, all resolved`;
   return `${peaks}, not all resolved${r.resolving_advice ? `. ${r.resolving_advice}` : ''}`;
 }
 

@@ -87,9 +87,13 @@ export interface DetectorPattern {
   /** Verdict for each pair of neighbouring peaks. */
   pairs: PairVerdict[];
   /**
-   * Every pair passes the dip criterion, and the pattern is not one lone peak of sublevels that
-   * deflect differently (merged: not resolved). A lone peak whose sublevels all deflect alike has
-   * nothing to resolve and counts as resolved (deflectAlike.ts).
+   * One lone peak of sublevels that deflect differently (deflectAlike.ts): merged, not resolved.
+   * Decided here once; the advice, the diagnostics and the reports read it (or `all_resolved`).
+   */
+  mergedLonePeak: boolean;
+  /**
+   * Every pair passes the dip criterion, and the pattern is not a merged lone peak. A lone peak
+   * whose sublevels all deflect alike has nothing to resolve and counts as resolved.
    */
   allResolved: boolean;
   /** Local maxima of the summed pattern (what a scan shows). */
@@ -111,6 +115,7 @@ function emptyPattern(issues: BeamIssue[]): DetectorPattern {
     speed: null,
     peaks: [],
     pairs: [],
+    mergedLonePeak: false,
     allResolved: false,
     maxima: [],
     issues,
@@ -255,6 +260,7 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][], re
     peaks.map((p) => p.positionM),
     options.dipCriterion,
   );
+  const mergedLonePeak = peaks.length === 1 && !deflectAlike(ks, peaks[0]!.memberIndices, image.kernelFwhmM / law.meanInverseSquare);
   const result: DetectorPattern = {
     positionsM: centresM,
     edgesM,
@@ -271,7 +277,8 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][], re
     },
     peaks,
     pairs,
-    allResolved: pairs.every((p) => p.resolved) && !(peaks.length === 1 && !deflectAlike(ks, peaks[0]!.memberIndices, image.kernelFwhmM / law.meanInverseSquare)),
+    mergedLonePeak,
+    allResolved: pairs.every((p) => p.resolved) && !mergedLonePeak,
     maxima: localMaxima(total, centresM, options.minRelativeProminence),
     issues,
   };

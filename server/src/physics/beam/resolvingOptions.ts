@@ -62,7 +62,7 @@ export function resolvingOptions(input: PatternInput, present: DetectorPattern, 
   const tried = (p: AdviceParameter): boolean => !only || only.includes(p);
   // One merged peak (sublevels that deflect differently): each trial is judged on the peaks it
   // shows itself (no fixed groups), which is what the file would show with the change; no dip now.
-  const merged = present.peaks.length === 1 && !present.allResolved;
+  const merged = present.mergedLonePeak;
   const groups = merged ? undefined : present.peaks.map((p) => p.memberIndices);
   const presentWorst = merged ? 1 : worstDip(present);
   const out: ResolvingOptions = { presentWorstDipRatio: presentWorst, options: [] };

@@ -77,7 +77,7 @@ export function smallestResolvingValue(
   }
   const groups = opts.groups ?? top.peaks.map((p) => p.memberIndices);
   result.peaks = top.peaks.map((p) => p.members);
-  if (groups.length < 2 && !top.allResolved) {
+  if (groups.length < 2 && top.mergedLonePeak) {
     // One merged peak: the sublevels deflect differently, but not far enough apart even at the bound.
     result.issues.push(
       beamIssue('warning', 'beam-unresolvable-within-bound', `Even at the upper bound (${upper}) all populated sublevels land in one peak, although they deflect differently.`),
