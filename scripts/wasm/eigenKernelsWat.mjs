@@ -9,6 +9,7 @@ export const ROW_TILE = 4;
 
 const f64 = (addr) => `(f64.load ${addr})`;
 const at = (base, index) => `(i32.add ${base} (i32.shl ${index} (i32.const 3)))`;
+const at4 = (base, index) => `(i32.add ${base} (i32.shl ${index} (i32.const 2)))`;
 const sumLanes = (x) => `(f64.add (f64x2.extract_lane 0 ${x}) (f64x2.extract_lane 1 ${x}))`;
 
 /**
@@ -485,7 +486,7 @@ function secularSums() {
  * weightRatios(prod, gaps, d, from, to, args): prod_j ← prod_j · gaps_j / (d_j − pole) for
  * from ≤ j < to, one row's factors of the Gu–Eisenstat weights; poleOffsets(gaps, d, k, args):
  * gaps_j ← (d_j − pole) − t, a root's row of d_j − λ (secularRoots.ts); cauchyRow(gaps, w, k, dst,
- * index): x_j = w_j / gaps_j, then dst[index[j]] = x_j / ‖x‖ (i32 indices), one new vector
+ * index): x_j = w_j / gaps_j, then dst[index[j]] = x_j / ‖x‖ (i32 indices; gaps is left as it is), one new vector
  * (divideConquerTridiagonal.ts). The doubles pole (args[0]) and t (args[1]) come through memory and
  * no double is returned: Node 20 calls these kernels through V8's generic JS-to-WebAssembly
  * wrapper, which can box doubles, thousands of calls per solve (no change in the collector's
@@ -527,12 +528,15 @@ function vectorRows() {
       (then (f64.store ${G('(local.get $j)')} (f64.sub (f64.sub ${f64(at('(local.get $d)', '(local.get $j)'))} (local.get $pole)) (local.get $t))))))
   (func $cauchyRow (export "cauchyRow") (param $gaps i32) (param $w i32) (param $k i32) (param $dst i32) (param $index i32)
     (local $j i32) (local $x v128) (local $s v128) (local $y f64) (local $t f64)
+    ;; Pass 1 sums the squares only; pass 2 divides again instead of reading back the quotients
+    ;; pass 1 stored in pairs: those 8-byte reads of 16-byte stores just made cost about 5 ns an
+    ;; entry (0.96 against 0.22 µs a call at k = 160; likely stores not yet forwardable), 8 % of
+    ;; a whole solve at order 160.
     (local.set $s (v128.const f64x2 0 0))
     (local.set $j (i32.const 0))
     (block $done (loop $l
       (br_if $done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $k)))
       (local.set $x (f64x2.div (v128.load ${at('(local.get $w)', '(local.get $j)')}) (v128.load ${G('(local.get $j)')})))
-      (v128.store ${G('(local.get $j)')} (local.get $x))
       (local.set $s (f64x2.add (local.get $s) (f64x2.mul (local.get $x) (local.get $x))))
       (local.set $j (i32.add (local.get $j) (i32.const 2)))
       (br $l)))
@@ -540,16 +544,20 @@ function vectorRows() {
     (if (i32.lt_s (local.get $j) (local.get $k))
       (then
         (local.set $y (f64.div ${f64(at('(local.get $w)', '(local.get $j)'))} ${f64(G('(local.get $j)'))}))
-        (f64.store ${G('(local.get $j)')} (local.get $y))
         (local.set $t (f64.add (local.get $t) (f64.mul (local.get $y) (local.get $y))))))
     (local.set $t (f64.div (f64.const 1) (f64.sqrt (local.get $t))))
     (local.set $j (i32.const 0))
     (block $s_done (loop $sl
-      (br_if $s_done (i32.ge_s (local.get $j) (local.get $k)))
-      (f64.store ${at('(local.get $dst)', '(i32.load (i32.add (local.get $index) (i32.shl (local.get $j) (i32.const 2))))')}
-        (f64.mul (local.get $t) ${f64(G('(local.get $j)'))}))
-      (local.set $j (i32.add (local.get $j) (i32.const 1)))
-      (br $sl))))`;
+      (br_if $s_done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $k)))
+      (local.set $x (f64x2.mul (f64x2.splat (local.get $t)) (f64x2.div (v128.load ${at('(local.get $w)', '(local.get $j)')}) (v128.load ${G('(local.get $j)')}))))
+      (f64.store ${at('(local.get $dst)', `(i32.load ${at4('(local.get $index)', '(local.get $j)')})`)} (f64x2.extract_lane 0 (local.get $x)))
+      (f64.store ${at('(local.get $dst)', `(i32.load offset=4 ${at4('(local.get $index)', '(local.get $j)')})`)} (f64x2.extract_lane 1 (local.get $x)))
+      (local.set $j (i32.add (local.get $j) (i32.const 2)))
+      (br $sl)))
+    (if (i32.lt_s (local.get $j) (local.get $k))
+      (then
+        (f64.store ${at('(local.get $dst)', `(i32.load ${at4('(local.get $index)', '(local.get $j)')})`)}
+          (f64.mul (local.get $t) (f64.div ${f64(at('(local.get $w)', '(local.get $j)'))} ${f64(G('(local.get $j)'))}))))))`;
 }
 
 /**
