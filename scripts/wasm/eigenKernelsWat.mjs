@@ -283,6 +283,16 @@ function applyReflectors() {
   const zAt = (q) => `(i32.add (local.get $z${q}) (local.get $o))`;
   const vA = `(i32.add (local.get $va) (local.get $o))`;
   const vB = `(i32.add (local.get $vb) (local.get $o))`;
+  /** One pair of columns (at byte offset imm past $o) of the two-reflector dot products and updates; the loops take two pairs a trip. */
+  const dotPair = (imm) => `
+          (local.set $x (v128.load offset=${imm} ${vA}))
+          (local.set $y (v128.load offset=${imm} ${vB}))
+          ${idx.map((q) => `(local.set $s${q} (f64x2.add (local.get $s${q}) (f64x2.mul (local.get $x) (local.tee $x${q} (v128.load offset=${imm} ${zAt(q)})))))
+          (local.set $t${q} (f64x2.add (local.get $t${q}) (f64x2.mul (local.get $y) (local.get $x${q}))))`).join('\n          ')}`;
+  const updPair = (imm) => `
+          (local.set $x (v128.load offset=${imm} ${vA}))
+          (local.set $y (v128.load offset=${imm} ${vB}))
+          ${idx.map((q) => `(v128.store offset=${imm} ${zAt(q)} (f64x2.sub (v128.load offset=${imm} ${zAt(q)}) (f64x2.add (f64x2.mul (local.get $s${q}) (local.get $x)) (f64x2.mul (local.get $t${q}) (local.get $y)))))`).join('\n          ')}`;
   const single = `
             (local.set $va ${at('(local.get $refl)', '(i32.mul (local.get $k) (local.get $ns))')})
             ${idx.map((q) => `(local.set $s${q} (v128.const f64x2 0 0))`).join(' ')}
@@ -340,11 +350,9 @@ function applyReflectors() {
         (local.set $o (i32.shl (i32.and (local.get $k) (i32.const -2)) (i32.const 3)))
         (block $dot_done (loop $dot
           (br_if $dot_done (i32.ge_s (local.get $o) (local.get $end)))
-          (local.set $x (v128.load ${vA}))
-          (local.set $y (v128.load ${vB}))
-          ${idx.map((q) => `(local.set $s${q} (f64x2.add (local.get $s${q}) (f64x2.mul (local.get $x) (local.tee $x${q} (v128.load ${zAt(q)})))))
-          (local.set $t${q} (f64x2.add (local.get $t${q}) (f64x2.mul (local.get $y) (local.get $x${q}))))`).join('\n          ')}
-          (local.set $o (i32.add (local.get $o) (i32.const 16)))
+          ${dotPair(0)}
+          (if (i32.lt_s (i32.add (local.get $o) (i32.const 16)) (local.get $end)) (then ${dotPair(16)}))
+          (local.set $o (i32.add (local.get $o) (i32.const 32)))
           (br $dot)))
         ${idx.map((q) => `(local.set $sa (f64.mul (local.get $ba) ${sumLanes(`(local.get $s${q})`)}))
         (local.set $s${q} (f64x2.splat (local.get $sa)))
@@ -352,10 +360,9 @@ function applyReflectors() {
         (local.set $o (i32.shl (i32.and (local.get $k) (i32.const -2)) (i32.const 3)))
         (block $upd_done (loop $upd
           (br_if $upd_done (i32.ge_s (local.get $o) (local.get $end)))
-          (local.set $x (v128.load ${vA}))
-          (local.set $y (v128.load ${vB}))
-          ${idx.map((q) => `(v128.store ${zAt(q)} (f64x2.sub (v128.load ${zAt(q)}) (f64x2.add (f64x2.mul (local.get $s${q}) (local.get $x)) (f64x2.mul (local.get $t${q}) (local.get $y)))))`).join('\n          ')}
-          (local.set $o (i32.add (local.get $o) (i32.const 16)))
+          ${updPair(0)}
+          (if (i32.lt_s (i32.add (local.get $o) (i32.const 16)) (local.get $end)) (then ${updPair(16)}))
+          (local.set $o (i32.add (local.get $o) (i32.const 32)))
           (br $upd)))
         (local.set $k (i32.sub (local.get $k) (i32.const 2)))
         (br $kl)))
