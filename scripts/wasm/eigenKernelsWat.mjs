@@ -4,7 +4,7 @@
 // even row stride `ns` (n rounded up), so pairs of doubles start 16-byte aligned; all pointers
 // are byte offsets into the one exported memory.
 
-/** Rows of the eigenvector matrix that share one pass over a reflector in `applyReflectors`. */
+/** Rows of the eigenvector matrix that share one pass over two reflectors in `applyReflectors`. */
 export const ROW_TILE = 4;
 
 const f64 = (addr) => `(f64.load ${addr})`;
@@ -69,7 +69,6 @@ function tridiagonalise() {
           (local.set $beta (f64.div (f64.const 2) (f64.add (f64.mul (local.get $x0) (local.get $x0)) (local.get $tail))))
           (f64.store ${at('(local.get $betas)', K(plus))} (local.get $beta))
           (f64.store ${at('(local.get $e)', K(plus))} (local.get $alpha))))`;
-  /** Row i's pairs strictly below the diagonal from $o on: the update by $v/$p (if upd) and the product with $vn/$pn (if mul). */
   /** Row (suffix q: '' row i, '1' row i + 1) pairs strictly below its diagonal from $o on: the update by $v/$p (if upd) and the product with $vn/$pn (if mul). */
   const rowPairs = (upd, mul, label, q) => `
           (block $${label}_done (loop $${label}
