@@ -4,139 +4,228 @@
 // even row stride `ns` (n rounded up), so pairs of doubles start 16-byte aligned; all pointers
 // are byte offsets into the one exported memory.
 
-/** Rows of the eigenvector matrix that share one pass over a reflector in `applyReflectors`. */
+/** Rows of the eigenvector matrix that share one pass over two reflectors in `applyReflectors`. */
 export const ROW_TILE = 4;
 
 const f64 = (addr) => `(f64.load ${addr})`;
 const at = (base, index) => `(i32.add ${base} (i32.shl ${index} (i32.const 3)))`;
+const at4 = (base, index) => `(i32.add ${base} (i32.shl ${index} (i32.const 2)))`;
 const sumLanes = (x) => `(f64.add (f64x2.extract_lane 0 ${x}) (f64x2.extract_lane 1 ${x}))`;
 
 /**
- * tridiagonalise(a, ns, n, d, e, betas, v, p): Householder reduction of the lower triangle of
- * the order-n matrix at `a` to T (diagonal d, sub-diagonal e), the same steps as
- * tridiagonaliseLower in householderInverseIteration.ts: reflector k stays in column k below
- * the diagonal, β_k in betas[k]. v and p are scratch of n + 2 doubles. Per step, the
- * symmetric product p = β A v (row i: a dot product along the row and an update of p along it)
- * and the rank-2 update A ← A − v wᵀ − w vᵀ run over the row in pairs from the even index at
- * or below k + 1; v_k = w_k = 0 make the pair's column-k half an exact no-op.
+ * tridiagonalise(a, ns, n, d, e, betas, v, p, vn, pn): Householder reduction of the lower triangle
+ * of the order-n matrix at `a` to T (diagonal d, sub-diagonal e), the same steps as
+ * tridiagonaliseLower in householderInverseIteration.ts: reflector k stays in column k below the
+ * diagonal, β_k in betas[k]. Per step, the symmetric product p = β A v (row i: a dot product
+ * along the row and an update of p along it) and the rank-2 update A ← A − v wᵀ − w vᵀ, in pairs
+ * from the even index at or below k + 1 (v_k = w_k = 0 make the pair's column-k half a no-op).
+ *
+ * The update of step k and the product of step k + 1 share one pass over the trailing triangle
+ * (one trip of the matrix through the cache instead of two): column k + 1 is updated first,
+ * reflector k + 1 formed from it, then each row is updated and at once multiplied by the new
+ * reflector; rows go two at a time, sharing the loads of v, w, the new reflector and p (fused
+ * 1.16–1.33×, two rows a further 1.28–1.38× at orders 160–192, docs/engine.md). v, p and vn, pn
+ * (n + 2 doubles of scratch each) swap roles every step; v and w are
+ * zeroed at k + 1 after the column's update, so pairs that start there leave the column as it is.
+ * Every entry gets the same operations in the same order as with two passes (the same bits).
  */
 function tridiagonalise() {
-  const A = (i, j) => at(`(local.get $a)`, `(i32.add (i32.mul ${i} (local.get $ns)) ${j})`);
-  const V = (i) => at(`(local.get $v)`, i);
-  const P = (i) => at(`(local.get $p)`, i);
+  const rowAt = (i) => `(i32.add (local.get $a) (i32.mul ${i} (local.get $rowBytes)))`;
+  const A = (i, j) => at(rowAt(i), j);
+  const X = (vec, i) => at(`(local.get ${vec})`, i);
+  const pair = (base) => `(i32.add (local.get ${base}) (local.get $o))`;
+  const K = (plus) => (plus === 0 ? '(local.get $k)' : `(i32.add (local.get $k) (i32.const ${plus}))`);
+  /** Reflector of step k + plus from its column into vec (zero at the step), prod zeroed; $beta (0: nothing to do), betas, e. */
+  const form = (plus, vec, prod) => `
+      (local.set $tail (f64.const 0))
+      (local.set $i ${K(plus + 2)})
+      (block $t_done${plus} (loop $t${plus}
+        (br_if $t_done${plus} (i32.ge_s (local.get $i) (local.get $n)))
+        (local.set $aij ${f64(A('(local.get $i)', K(plus)))})
+        (local.set $tail (f64.add (local.get $tail) (f64.mul (local.get $aij) (local.get $aij))))
+        (local.set $i (i32.add (local.get $i) (i32.const 1)))
+        (br $t${plus})))
+      (local.set $x0 ${f64(A(K(plus + 1), K(plus)))})
+      (local.set $beta (f64.const 0))
+      (if (f64.eq (local.get $tail) (f64.const 0))
+        (then
+          (f64.store ${at('(local.get $betas)', K(plus))} (f64.const 0))
+          (f64.store ${at('(local.get $e)', K(plus))} (local.get $x0)))
+        (else
+          (local.set $alpha (f64.sqrt (f64.add (local.get $tail) (f64.mul (local.get $x0) (local.get $x0)))))
+          (if (f64.ge (local.get $x0) (f64.const 0)) (then (local.set $alpha (f64.neg (local.get $alpha)))))
+          (f64.store ${A(K(plus + 1), K(plus))} (f64.sub (local.get $x0) (local.get $alpha)))
+          (f64.store ${X(vec, K(plus))} (f64.const 0))
+          (f64.store ${X(prod, K(plus))} (f64.const 0))
+          ${plus === 1 ? `(f64.store ${X(vec, K(0))} (f64.const 0))` : ''}
+          (local.set $i ${K(plus + 1)})
+          (block $c_done${plus} (loop $c${plus}
+            (br_if $c_done${plus} (i32.ge_s (local.get $i) (local.get $n)))
+            (f64.store ${X(vec, '(local.get $i)')} ${f64(A('(local.get $i)', K(plus)))})
+            (f64.store ${X(prod, '(local.get $i)')} (f64.const 0))
+            (local.set $i (i32.add (local.get $i) (i32.const 1)))
+            (br $c${plus})))
+          (local.set $x0 ${f64(X(vec, K(plus + 1)))})
+          (local.set $beta (f64.div (f64.const 2) (f64.add (f64.mul (local.get $x0) (local.get $x0)) (local.get $tail))))
+          (f64.store ${at('(local.get $betas)', K(plus))} (local.get $beta))
+          (f64.store ${at('(local.get $e)', K(plus))} (local.get $alpha))))`;
+  /** Row (suffix q: '' row i, '1' row i + 1) pairs strictly below its diagonal from $o on: the update by $v/$p (if upd) and the product with $vn/$pn (if mul). */
+  const rowPairs = (upd, mul, label, q) => `
+          (block $${label}_done (loop $${label}
+            (br_if $${label}_done (i32.ge_s (i32.add (local.get $o) (i32.const 8)) (local.get $oDiag${q})))
+            ${loadUpdateOperands(upd)}
+            ${updatedPair(upd, q)}
+            ${mul
+              ? `(local.set $s2${q} (f64x2.add (local.get $s2${q}) (f64x2.mul (local.get $x${q}) (v128.load ${pair('$vn')}))))
+            (v128.store ${pair('$pn')} (f64x2.add (v128.load ${pair('$pn')}) (f64x2.mul (local.get $x${q}) (local.get $ni2${q}))))`
+              : ''}
+            (local.set $o (i32.add (local.get $o) (i32.const 16)))
+            (br $${label})))`;
+  /** $x{q} ← the row's pair at $o, updated and stored back if upd. */
+  const updatedPair = (upd, q) =>
+    upd
+      ? `(local.set $x${q} (f64x2.sub (v128.load ${pair(`$row${q}`)})
+              (f64x2.add (f64x2.mul (local.get $vi2${q}) (local.get $pp)) (f64x2.mul (local.get $wi2${q}) (local.get $vv)))))
+            (v128.store ${pair(`$row${q}`)} (local.get $x${q}))`
+      : `(local.set $x${q} (v128.load ${pair(`$row${q}`)}))`;
+  const loadUpdateOperands = (upd) => (upd ? `(local.set $pp (v128.load ${pair('$p')})) (local.set $vv (v128.load ${pair('$v')}))` : '');
+  /** Rows i and i + 1 together: their common pairs (below row i's diagonal) share the loads of v, w, the new reflector and p. */
+  const twoRowPairs = (upd, mul, label) => `
+          (block $${label}_done (loop $${label}
+            (br_if $${label}_done (i32.ge_s (i32.add (local.get $o) (i32.const 8)) (local.get $oDiag)))
+            ${loadUpdateOperands(upd)}
+            ${updatedPair(upd, '')}
+            ${updatedPair(upd, '1')}
+            ${mul
+              ? `(local.set $y (v128.load ${pair('$vn')}))
+            (local.set $s2 (f64x2.add (local.get $s2) (f64x2.mul (local.get $x) (local.get $y))))
+            (local.set $s21 (f64x2.add (local.get $s21) (f64x2.mul (local.get $x1) (local.get $y))))
+            (v128.store ${pair('$pn')} (f64x2.add (f64x2.add (v128.load ${pair('$pn')}) (f64x2.mul (local.get $x) (local.get $ni2))) (f64x2.mul (local.get $x1) (local.get $ni21))))`
+              : ''}
+            (local.set $o (i32.add (local.get $o) (i32.const 16)))
+            (br $${label})))`;
+  const scalarUpdate = (addr, q) =>
+    `(f64.store ${addr} (f64.sub ${f64(addr)} (f64.add (f64.mul (local.get $vi${q}) ${f64(`(i32.add (local.get $p) (local.get $o))`)}) (f64.mul (local.get $wi${q}) ${f64(`(i32.add (local.get $v) (local.get $o))`)}))))`;
+  const rowStart = (upd, mul, q, i) => `
+        (local.set $row${q} ${rowAt(i)})
+        (local.set $oDiag${q} (i32.shl ${i} (i32.const 3)))
+        ${upd ? `(local.set $vi${q} ${f64(X('$v', i))}) (local.set $wi${q} ${f64(X('$p', i))})
+        (local.set $vi2${q} (f64x2.splat (local.get $vi${q}))) (local.set $wi2${q} (f64x2.splat (local.get $wi${q})))` : ''}
+        ${mul ? `(local.set $ni${q} ${f64(X('$vn', i))}) (local.set $ni2${q} (f64x2.splat (local.get $ni${q}))) (local.set $s2${q} (v128.const f64x2 0 0))` : ''}`;
+  /** The row's one or two entries left after its pairs ($o at column i − 1 or i). */
+  const rowTail = (upd, mul, q) => `
+        (local.set $s (f64.const 0))
+        (if (i32.lt_s (local.get $o) (local.get $oDiag${q}))
+          (then
+            ${upd ? scalarUpdate(pair(`$row${q}`), q) : ''}
+            ${mul ? `(local.set $aij ${f64(pair(`$row${q}`))})
+            (local.set $s (f64.mul (local.get $aij) ${f64(pair('$vn'))}))
+            (f64.store ${pair('$pn')} (f64.add ${f64(pair('$pn'))} (f64.mul (local.get $aij) (local.get $ni${q}))))` : ''}
+            (local.set $o (i32.add (local.get $o) (i32.const 8)))))
+        ${upd ? scalarUpdate(pair(`$row${q}`), q) : ''}
+        ${mul ? `(f64.store ${pair('$pn')}
+          (f64.add ${f64(pair('$pn'))} (f64.add (f64.add ${sumLanes(`(local.get $s2${q})`)} (local.get $s)) (f64.mul ${f64(pair(`$row${q}`))} (local.get $ni${q})))))` : ''}`;
+  /**
+   * Rows from $i0 to n − 1, two at a time: their common pairs together, then row i's one or two
+   * entries left, row i + 1's last pair and entries. Each row's sums and each p_j's additions keep
+   * the order of one row at a time (row i before row i + 1), so the bits do not change.
+   */
+  const pass = (upd, mul, label) => `
+      (local.set $i (local.get $i0))
+      (block $${label}_rows_done (loop $${label}_rows
+        (br_if $${label}_rows_done (i32.ge_s (local.get $i) (local.get $n)))
+        ${rowStart(upd, mul, '', '(local.get $i)')}
+        (local.set $o (local.get $o0))
+        (if (i32.lt_s (i32.add (local.get $i) (i32.const 1)) (local.get $n))
+          (then
+            ${rowStart(upd, mul, '1', '(i32.add (local.get $i) (i32.const 1))')}
+            ${twoRowPairs(upd, mul, `${label}_two`)}
+            (local.set $oSave (local.get $o))
+            ${rowTail(upd, mul, '')}
+            (local.set $o (local.get $oSave))
+            ${rowPairs(upd, mul, `${label}_last`, '1')}
+            ${rowTail(upd, mul, '1')}
+            (local.set $i (i32.add (local.get $i) (i32.const 2))))
+          (else
+            ${rowPairs(upd, mul, `${label}_one`, '')}
+            ${rowTail(upd, mul, '')}
+            (local.set $i (i32.add (local.get $i) (i32.const 1)))))
+        (br $${label}_rows)))`;
   return `
   (func $tridiagonalise (export "tridiagonalise")
-    (param $a i32) (param $ns i32) (param $n i32) (param $d i32) (param $e i32) (param $betas i32) (param $v i32) (param $p i32)
-    (local $k i32) (local $i i32) (local $j i32) (local $j0 i32) (local $row i32)
-    (local $tail f64) (local $x0 f64) (local $alpha f64) (local $beta f64) (local $s f64) (local $vi f64) (local $wi f64)
-    (local $vp f64) (local $kk f64) (local $aij f64)
-    (local $s2 v128) (local $x v128) (local $vi2 v128) (local $wi2 v128)
+    (param $a i32) (param $ns i32) (param $n i32) (param $d i32) (param $e i32) (param $betas i32) (param $v i32) (param $p i32) (param $vn i32) (param $pn i32)
+    (local $k i32) (local $i i32) (local $i0 i32) (local $o i32) (local $o0 i32) (local $oDiag i32) (local $row i32) (local $rowBytes i32) (local $pending i32) (local $swap i32)
+    (local $tail f64) (local $x0 f64) (local $alpha f64) (local $beta f64) (local $s f64) (local $vi f64) (local $wi f64) (local $ni f64)
+    (local $vp f64) (local $kk f64) (local $aij f64) (local $wk f64) (local $vk f64)
+    (local $s2 v128) (local $x v128) (local $vi2 v128) (local $wi2 v128) (local $ni2 v128)
+    (local $row1 i32) (local $oDiag1 i32) (local $oSave i32) (local $vi1 f64) (local $wi1 f64) (local $ni1 f64)
+    (local $s21 v128) (local $x1 v128) (local $vi21 v128) (local $wi21 v128) (local $ni21 v128) (local $y v128) (local $pp v128) (local $vv v128)
+    (local.set $rowBytes (i32.shl (local.get $ns) (i32.const 3)))
     (local.set $k (i32.const 0))
     (block $steps_done
       (loop $steps
-        (br_if $steps_done (i32.ge_s (i32.add (local.get $k) (i32.const 2)) (local.get $n)))
-        ;; tail = Σ_{i ≥ k+2} a_ik²
-        (local.set $tail (f64.const 0))
-        (local.set $i (i32.add (local.get $k) (i32.const 2)))
-        (block $t_done (loop $t
-          (br_if $t_done (i32.ge_s (local.get $i) (local.get $n)))
-          (local.set $aij ${f64(A('(local.get $i)', '(local.get $k)'))})
-          (local.set $tail (f64.add (local.get $tail) (f64.mul (local.get $aij) (local.get $aij))))
-          (local.set $i (i32.add (local.get $i) (i32.const 1)))
-          (br $t)))
-        (local.set $x0 ${f64(A('(i32.add (local.get $k) (i32.const 1))', '(local.get $k)'))})
-        (if (f64.eq (local.get $tail) (f64.const 0))
+        (br_if $steps_done (i32.ge_s ${K(2)} (local.get $n)))
+        (if (i32.eqz (local.get $pending))
           (then
-            (f64.store ${at('(local.get $betas)', '(local.get $k)')} (f64.const 0))
-            (f64.store ${at('(local.get $e)', '(local.get $k)')} (local.get $x0)))
-          (else
-            (local.set $alpha (f64.sqrt (f64.add (local.get $tail) (f64.mul (local.get $x0) (local.get $x0)))))
-            (if (f64.ge (local.get $x0) (f64.const 0)) (then (local.set $alpha (f64.neg (local.get $alpha)))))
-            (f64.store ${A('(i32.add (local.get $k) (i32.const 1))', '(local.get $k)')} (f64.sub (local.get $x0) (local.get $alpha)))
-            ;; v: contiguous copy of column k, v_k = 0
-            (f64.store ${V('(local.get $k)')} (f64.const 0))
-            (local.set $i (i32.add (local.get $k) (i32.const 1)))
-            (block $c_done (loop $c
-              (br_if $c_done (i32.ge_s (local.get $i) (local.get $n)))
-              (f64.store ${V('(local.get $i)')} ${f64(A('(local.get $i)', '(local.get $k)'))})
-              (f64.store ${P('(local.get $i)')} (f64.const 0))
-              (local.set $i (i32.add (local.get $i) (i32.const 1)))
-              (br $c)))
-            (f64.store ${P('(local.get $k)')} (f64.const 0))
-            (local.set $x0 ${f64(V('(i32.add (local.get $k) (i32.const 1))'))})
-            (local.set $beta (f64.div (f64.const 2) (f64.add (f64.mul (local.get $x0) (local.get $x0)) (local.get $tail))))
-            (f64.store ${at('(local.get $betas)', '(local.get $k)')} (local.get $beta))
-            (f64.store ${at('(local.get $e)', '(local.get $k)')} (local.get $alpha))
-            (local.set $j0 (i32.and (i32.add (local.get $k) (i32.const 1)) (i32.const -2)))
-            ;; p = A v from the lower triangle: row i gives Σ_{j<i} a_ij v_j to p_i and a_ij v_i to p_j.
-            (local.set $i (i32.add (local.get $k) (i32.const 1)))
-            (block $r_done (loop $r
-              (br_if $r_done (i32.ge_s (local.get $i) (local.get $n)))
-              (local.set $row ${A('(local.get $i)', '(i32.const 0)')})
-              (local.set $vi ${f64(V('(local.get $i)'))})
-              (local.set $vi2 (f64x2.splat (local.get $vi)))
-              (local.set $s2 (v128.const f64x2 0 0))
-              (local.set $j (local.get $j0))
-              (block $q_done (loop $q
-                (br_if $q_done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $i)))
-                (local.set $x (v128.load ${at('(local.get $row)', '(local.get $j)')}))
-                (local.set $s2 (f64x2.add (local.get $s2) (f64x2.mul (local.get $x) (v128.load ${V('(local.get $j)')}))))
-                (v128.store ${P('(local.get $j)')} (f64x2.add (v128.load ${P('(local.get $j)')}) (f64x2.mul (local.get $x) (local.get $vi2))))
-                (local.set $j (i32.add (local.get $j) (i32.const 2)))
-                (br $q)))
-              (local.set $s ${sumLanes('(local.get $s2)')})
-              (if (i32.lt_s (local.get $j) (local.get $i))
-                (then
-                  (local.set $aij ${f64(at('(local.get $row)', '(local.get $j)'))})
-                  (local.set $s (f64.add (local.get $s) (f64.mul (local.get $aij) ${f64(V('(local.get $j)'))})))
-                  (f64.store ${P('(local.get $j)')} (f64.add ${f64(P('(local.get $j)'))} (f64.mul (local.get $aij) (local.get $vi))))))
-              (f64.store ${P('(local.get $i)')}
-                (f64.add ${f64(P('(local.get $i)'))} (f64.add (local.get $s) (f64.mul ${f64(at('(local.get $row)', '(local.get $i)'))} (local.get $vi)))))
-              (local.set $i (i32.add (local.get $i) (i32.const 1)))
-              (br $r)))
-            ;; p ← β p, then w = p − (β/2)(vᵀp) v in p.
-            (local.set $vp (f64.const 0))
-            (local.set $i (i32.add (local.get $k) (i32.const 1)))
-            (block $b_done (loop $b
-              (br_if $b_done (i32.ge_s (local.get $i) (local.get $n)))
-              (local.set $s (f64.mul (local.get $beta) ${f64(P('(local.get $i)'))}))
-              (f64.store ${P('(local.get $i)')} (local.get $s))
-              (local.set $vp (f64.add (local.get $vp) (f64.mul ${f64(V('(local.get $i)'))} (local.get $s))))
-              (local.set $i (i32.add (local.get $i) (i32.const 1)))
-              (br $b)))
-            (local.set $kk (f64.mul (f64.mul (f64.const 0.5) (local.get $beta)) (local.get $vp)))
-            (local.set $i (i32.add (local.get $k) (i32.const 1)))
-            (block $w_done (loop $w
-              (br_if $w_done (i32.ge_s (local.get $i) (local.get $n)))
-              (f64.store ${P('(local.get $i)')} (f64.sub ${f64(P('(local.get $i)'))} (f64.mul (local.get $kk) ${f64(V('(local.get $i)'))})))
-              (local.set $i (i32.add (local.get $i) (i32.const 1)))
-              (br $w)))
-            (f64.store ${P('(local.get $k)')} (f64.const 0))
-            ;; A ← A − v wᵀ − w vᵀ on the lower trailing triangle.
-            (local.set $i (i32.add (local.get $k) (i32.const 1)))
-            (block $u_done (loop $u
-              (br_if $u_done (i32.ge_s (local.get $i) (local.get $n)))
-              (local.set $row ${A('(local.get $i)', '(i32.const 0)')})
-              (local.set $vi ${f64(V('(local.get $i)'))})
-              (local.set $wi ${f64(P('(local.get $i)'))})
-              (local.set $vi2 (f64x2.splat (local.get $vi)))
-              (local.set $wi2 (f64x2.splat (local.get $wi)))
-              (local.set $j (local.get $j0))
-              (block $g_done (loop $g
-                (br_if $g_done (i32.gt_s (i32.add (local.get $j) (i32.const 1)) (local.get $i)))
-                (v128.store ${at('(local.get $row)', '(local.get $j)')}
-                  (f64x2.sub (v128.load ${at('(local.get $row)', '(local.get $j)')})
-                    (f64x2.add (f64x2.mul (local.get $vi2) (v128.load ${P('(local.get $j)')})) (f64x2.mul (local.get $wi2) (v128.load ${V('(local.get $j)')})))))
-                (local.set $j (i32.add (local.get $j) (i32.const 2)))
-                (br $g)))
-              (if (i32.eq (local.get $j) (local.get $i))
-                (then
-                  (f64.store ${at('(local.get $row)', '(local.get $j)')}
-                    (f64.sub ${f64(at('(local.get $row)', '(local.get $j)'))}
-                      (f64.add (f64.mul (local.get $vi) (local.get $wi)) (f64.mul (local.get $wi) (local.get $vi)))))))
-              (local.set $i (i32.add (local.get $i) (i32.const 1)))
-              (br $u)))))
-        (local.set $k (i32.add (local.get $k) (i32.const 1)))
+            ${form(0, '$v', '$p')}
+            (if (f64.eq (local.get $beta) (f64.const 0))
+              (then (local.set $k ${K(1)}) (br $steps)))
+            ;; p = A v alone (the product of a step whose predecessor left nothing to fuse with)
+            (local.set $swap (local.get $vn)) (local.set $vn (local.get $v)) (local.set $v (local.get $swap))
+            (local.set $swap (local.get $pn)) (local.set $pn (local.get $p)) (local.set $p (local.get $swap))
+            (local.set $i0 ${K(1)})
+            (local.set $o0 (i32.shl (i32.and ${K(1)} (i32.const -2)) (i32.const 3)))
+            ${pass(false, true, 'mv')}
+            (local.set $swap (local.get $vn)) (local.set $vn (local.get $v)) (local.set $v (local.get $swap))
+            (local.set $swap (local.get $pn)) (local.set $pn (local.get $p)) (local.set $p (local.get $swap))))
+        (local.set $beta ${f64(at('(local.get $betas)', K(0)))})
+        ;; p ← β p, then w = p − (β/2)(vᵀp) v in p.
+        (local.set $vp (f64.const 0))
+        (local.set $i ${K(1)})
+        (block $b_done (loop $b
+          (br_if $b_done (i32.ge_s (local.get $i) (local.get $n)))
+          (local.set $s (f64.mul (local.get $beta) ${f64(X('$p', '(local.get $i)'))}))
+          (f64.store ${X('$p', '(local.get $i)')} (local.get $s))
+          (local.set $vp (f64.add (local.get $vp) (f64.mul ${f64(X('$v', '(local.get $i)'))} (local.get $s))))
+          (local.set $i (i32.add (local.get $i) (i32.const 1)))
+          (br $b)))
+        (local.set $kk (f64.mul (f64.mul (f64.const 0.5) (local.get $beta)) (local.get $vp)))
+        (local.set $i ${K(1)})
+        (block $w_done (loop $w
+          (br_if $w_done (i32.ge_s (local.get $i) (local.get $n)))
+          (f64.store ${X('$p', '(local.get $i)')} (f64.sub ${f64(X('$p', '(local.get $i)'))} (f64.mul (local.get $kk) ${f64(X('$v', '(local.get $i)'))})))
+          (local.set $i (i32.add (local.get $i) (i32.const 1)))
+          (br $w)))
+        (f64.store ${X('$p', K(0))} (f64.const 0))
+        ;; column k + 1 of the trailing triangle first (rows ≥ k + 1), then v, w zero there.
+        (local.set $vk ${f64(X('$v', K(1)))})
+        (local.set $wk ${f64(X('$p', K(1)))})
+        (local.set $i ${K(1)})
+        (block $col_done (loop $col
+          (br_if $col_done (i32.ge_s (local.get $i) (local.get $n)))
+          (local.set $vi ${f64(X('$v', '(local.get $i)'))})
+          (local.set $wi ${f64(X('$p', '(local.get $i)'))})
+          (f64.store ${A('(local.get $i)', K(1))}
+            (f64.sub ${f64(A('(local.get $i)', K(1)))} (f64.add (f64.mul (local.get $vi) (local.get $wk)) (f64.mul (local.get $wi) (local.get $vk)))))
+          (local.set $i (i32.add (local.get $i) (i32.const 1)))
+          (br $col)))
+        (f64.store ${X('$v', K(1))} (f64.const 0))
+        (f64.store ${X('$p', K(1))} (f64.const 0))
+        (local.set $i0 ${K(2)})
+        (local.set $o0 (i32.shl (i32.and ${K(1)} (i32.const -2)) (i32.const 3)))
+        (local.set $pending (i32.const 0))
+        (if (i32.lt_s ${K(3)} (local.get $n))
+          (then
+            ${form(1, '$vn', '$pn')}
+            (if (f64.ne (local.get $beta) (f64.const 0))
+              (then
+                ${pass(true, true, 'fused')}
+                (local.set $swap (local.get $vn)) (local.set $vn (local.get $v)) (local.set $v (local.get $swap))
+                (local.set $swap (local.get $pn)) (local.set $pn (local.get $p)) (local.set $p (local.get $swap))
+                (local.set $pending (i32.const 1))))))
+        (if (i32.eqz (local.get $pending))
+          (then ${pass(true, false, 'up')}))
+        (local.set $k ${K(1)})
         (br $steps)))
     (local.set $i (i32.const 0))
     (block $d_done (loop $dl
@@ -179,49 +268,107 @@ function packReflectors() {
 }
 
 /**
- * applyReflectors(z, ns, rows, n, refl, betas): every row r < rows (a multiple of ROW_TILE) of
- * z becomes row · H_{n−3} … H_0 (H_k for k = n−3 down to 0, as applyReflectors in
- * householderInverseIteration.ts; the reflectors packed by packReflectors). ROW_TILE rows stay in cache while every reflector passes
- * over them: per reflector ROW_TILE dot products, then ROW_TILE updates, in aligned pairs
- * from the even index at or below k + 1.
+ * applyReflectors(z, ns, rows, n, refl, betas, cross): every row r < rows (a multiple of ROW_TILE)
+ * of z becomes row · H_{n−3} … H_0 (as applyReflectors in householderInverseIteration.ts; the
+ * reflectors packed by packReflectors). ROW_TILE rows stay in cache while the reflectors pass over
+ * them two at a time (k, then k − 1), so every z pair is loaded and stored half as often as with
+ * one (1.06–1.27× at orders 160–192, docs/engine.md): with c = v_k · v_{k−1} (computed first into `cross`, n doubles of scratch),
+ * s_k = β_k (z · v_k) and s_{k−1} = β_{k−1} (z · v_{k−1} − s_k c), then z ← z − s_k v_k − s_{k−1} v_{k−1}.
+ * Addresses are a byte offset added to each row's start (no shift per access).
  */
 function applyReflectors() {
   const R = ROW_TILE;
   const idx = [...Array(R).keys()];
-  const zAt = (q) => at(`(local.get $z${q})`, '(local.get $i)');
+  const zAt = (q) => `(i32.add (local.get $z${q}) (local.get $o))`;
+  const vA = `(i32.add (local.get $va) (local.get $o))`;
+  const vB = `(i32.add (local.get $vb) (local.get $o))`;
+  /** One pair of columns (at byte offset imm past $o) of the two-reflector dot products and updates; the loops take two pairs a trip. */
+  const dotPair = (imm) => `
+          (local.set $x (v128.load offset=${imm} ${vA}))
+          (local.set $y (v128.load offset=${imm} ${vB}))
+          ${idx.map((q) => `(local.set $s${q} (f64x2.add (local.get $s${q}) (f64x2.mul (local.get $x) (local.tee $x${q} (v128.load offset=${imm} ${zAt(q)})))))
+          (local.set $t${q} (f64x2.add (local.get $t${q}) (f64x2.mul (local.get $y) (local.get $x${q}))))`).join('\n          ')}`;
+  const updPair = (imm) => `
+          (local.set $x (v128.load offset=${imm} ${vA}))
+          (local.set $y (v128.load offset=${imm} ${vB}))
+          ${idx.map((q) => `(v128.store offset=${imm} ${zAt(q)} (f64x2.sub (v128.load offset=${imm} ${zAt(q)}) (f64x2.add (f64x2.mul (local.get $s${q}) (local.get $x)) (f64x2.mul (local.get $t${q}) (local.get $y)))))`).join('\n          ')}`;
+  const single = `
+            (local.set $va ${at('(local.get $refl)', '(i32.mul (local.get $k) (local.get $ns))')})
+            ${idx.map((q) => `(local.set $s${q} (v128.const f64x2 0 0))`).join(' ')}
+            (local.set $o (i32.shl (i32.and (i32.add (local.get $k) (i32.const 1)) (i32.const -2)) (i32.const 3)))
+            (block $dot1_done (loop $dot1
+              (br_if $dot1_done (i32.ge_s (local.get $o) (local.get $end)))
+              (local.set $x (v128.load ${vA}))
+              ${idx.map((q) => `(local.set $s${q} (f64x2.add (local.get $s${q}) (f64x2.mul (local.get $x) (v128.load ${zAt(q)}))))`).join('\n              ')}
+              (local.set $o (i32.add (local.get $o) (i32.const 16)))
+              (br $dot1)))
+            ${idx.map((q) => `(local.set $s${q} (f64x2.splat (f64.mul (local.get $ba) ${sumLanes(`(local.get $s${q})`)})))`).join('\n            ')}
+            (local.set $o (i32.shl (i32.and (i32.add (local.get $k) (i32.const 1)) (i32.const -2)) (i32.const 3)))
+            (block $upd1_done (loop $upd1
+              (br_if $upd1_done (i32.ge_s (local.get $o) (local.get $end)))
+              (local.set $x (v128.load ${vA}))
+              ${idx.map((q) => `(v128.store ${zAt(q)} (f64x2.sub (v128.load ${zAt(q)}) (f64x2.mul (local.get $s${q}) (local.get $x))))`).join('\n              ')}
+              (local.set $o (i32.add (local.get $o) (i32.const 16)))
+              (br $upd1)))`;
   return `
-  (func $applyReflectors (export "applyReflectors") (param $z i32) (param $ns i32) (param $rows i32) (param $n i32) (param $refl i32) (param $betas i32)
-    (local $r i32) (local $k i32) (local $i i32) (local $vrow i32) (local $beta f64) (local $x v128)
-    ${idx.map((q) => `(local $z${q} i32) (local $s${q} v128)`).join(' ')}
+  (func $applyReflectors (export "applyReflectors") (param $z i32) (param $ns i32) (param $rows i32) (param $n i32) (param $refl i32) (param $betas i32) (param $cross i32)
+    (local $r i32) (local $k i32) (local $o i32) (local $end i32) (local $va i32) (local $vb i32) (local $rowBytes i32)
+    (local $ba f64) (local $bb f64) (local $c f64) (local $sa f64) (local $x v128) (local $y v128)
+    ${idx.map((q) => `(local $z${q} i32) (local $s${q} v128) (local $t${q} v128) (local $x${q} v128)`).join(' ')}
+    (local.set $rowBytes (i32.shl (local.get $ns) (i32.const 3)))
+    (local.set $end (local.get $rowBytes))
+    ;; cross[k] = v_k · v_{k−1} for k ≥ 1 (both rows zero before k).
+    (local.set $k (i32.sub (local.get $n) (i32.const 3)))
+    (block $c_done (loop $cl
+      (br_if $c_done (i32.lt_s (local.get $k) (i32.const 1)))
+      (local.set $va ${at('(local.get $refl)', '(i32.mul (local.get $k) (local.get $ns))')})
+      (local.set $vb (i32.sub (local.get $va) (local.get $rowBytes)))
+      (local.set $x (v128.const f64x2 0 0))
+      (local.set $o (i32.shl (i32.and (local.get $k) (i32.const -2)) (i32.const 3)))
+      (block $cd_done (loop $cd
+        (br_if $cd_done (i32.ge_s (local.get $o) (local.get $end)))
+        (local.set $x (f64x2.add (local.get $x) (f64x2.mul (v128.load ${vA}) (v128.load ${vB}))))
+        (local.set $o (i32.add (local.get $o) (i32.const 16)))
+        (br $cd)))
+      (f64.store ${at('(local.get $cross)', '(local.get $k)')} ${sumLanes('(local.get $x)')})
+      (local.set $k (i32.sub (local.get $k) (i32.const 1)))
+      (br $cl)))
     (local.set $r (i32.const 0))
     (block $r_done (loop $rl
       (br_if $r_done (i32.ge_s (local.get $r) (local.get $rows)))
-      ${idx.map((q) => `(local.set $z${q} ${at('(local.get $z)', `(i32.mul (i32.add (local.get $r) (i32.const ${q})) (local.get $ns))`)})`).join('\n      ')}
+      ${idx.map((q) => `(local.set $z${q} (i32.add (local.get $z) (i32.mul (i32.add (local.get $r) (i32.const ${q})) (local.get $rowBytes))))`).join('\n      ')}
       (local.set $k (i32.sub (local.get $n) (i32.const 3)))
       (block $k_done (loop $kl
-        (br_if $k_done (i32.lt_s (local.get $k) (i32.const 0)))
-        (local.set $beta ${f64(at('(local.get $betas)', '(local.get $k)'))})
-        (if (f64.ne (local.get $beta) (f64.const 0))
-          (then
-            (local.set $vrow ${at('(local.get $refl)', '(i32.mul (local.get $k) (local.get $ns))')})
-            ${idx.map((q) => `(local.set $s${q} (v128.const f64x2 0 0))`).join(' ')}
-            (local.set $i (i32.and (i32.add (local.get $k) (i32.const 1)) (i32.const -2)))
-            (block $dot_done (loop $dot
-              (br_if $dot_done (i32.ge_s (local.get $i) (local.get $ns)))
-              (local.set $x (v128.load ${at('(local.get $vrow)', '(local.get $i)')}))
-              ${idx.map((q) => `(local.set $s${q} (f64x2.add (local.get $s${q}) (f64x2.mul (local.get $x) (v128.load ${zAt(q)}))))`).join('\n              ')}
-              (local.set $i (i32.add (local.get $i) (i32.const 2)))
-              (br $dot)))
-            ${idx.map((q) => `(local.set $s${q} (f64x2.splat (f64.mul (local.get $beta) ${sumLanes(`(local.get $s${q})`)})))`).join('\n            ')}
-            (local.set $i (i32.and (i32.add (local.get $k) (i32.const 1)) (i32.const -2)))
-            (block $upd_done (loop $upd
-              (br_if $upd_done (i32.ge_s (local.get $i) (local.get $ns)))
-              (local.set $x (v128.load ${at('(local.get $vrow)', '(local.get $i)')}))
-              ${idx.map((q) => `(v128.store ${zAt(q)} (f64x2.sub (v128.load ${zAt(q)}) (f64x2.mul (local.get $s${q}) (local.get $x))))`).join('\n              ')}
-              (local.set $i (i32.add (local.get $i) (i32.const 2)))
-              (br $upd)))))
-        (local.set $k (i32.sub (local.get $k) (i32.const 1)))
+        (br_if $k_done (i32.lt_s (local.get $k) (i32.const 1)))
+        (local.set $ba ${f64(at('(local.get $betas)', '(local.get $k)'))})
+        (local.set $bb ${f64(at('(local.get $betas)', '(i32.sub (local.get $k) (i32.const 1))'))})
+        (local.set $c ${f64(at('(local.get $cross)', '(local.get $k)'))})
+        (local.set $va ${at('(local.get $refl)', '(i32.mul (local.get $k) (local.get $ns))')})
+        (local.set $vb (i32.sub (local.get $va) (local.get $rowBytes)))
+        ${idx.map((q) => `(local.set $s${q} (v128.const f64x2 0 0)) (local.set $t${q} (v128.const f64x2 0 0))`).join('\n        ')}
+        (local.set $o (i32.shl (i32.and (local.get $k) (i32.const -2)) (i32.const 3)))
+        (block $dot_done (loop $dot
+          (br_if $dot_done (i32.ge_s (local.get $o) (local.get $end)))
+          ${dotPair(0)}
+          (if (i32.lt_s (i32.add (local.get $o) (i32.const 16)) (local.get $end)) (then ${dotPair(16)}))
+          (local.set $o (i32.add (local.get $o) (i32.const 32)))
+          (br $dot)))
+        ${idx.map((q) => `(local.set $sa (f64.mul (local.get $ba) ${sumLanes(`(local.get $s${q})`)}))
+        (local.set $s${q} (f64x2.splat (local.get $sa)))
+        (local.set $t${q} (f64x2.splat (f64.mul (local.get $bb) (f64.sub ${sumLanes(`(local.get $t${q})`)} (f64.mul (local.get $sa) (local.get $c))))))`).join('\n        ')}
+        (local.set $o (i32.shl (i32.and (local.get $k) (i32.const -2)) (i32.const 3)))
+        (block $upd_done (loop $upd
+          (br_if $upd_done (i32.ge_s (local.get $o) (local.get $end)))
+          ${updPair(0)}
+          (if (i32.lt_s (i32.add (local.get $o) (i32.const 16)) (local.get $end)) (then ${updPair(16)}))
+          (local.set $o (i32.add (local.get $o) (i32.const 32)))
+          (br $upd)))
+        (local.set $k (i32.sub (local.get $k) (i32.const 2)))
         (br $kl)))
+      (if (i32.eq (local.get $k) (i32.const 0))
+        (then
+          (local.set $ba ${f64(at('(local.get $betas)', '(i32.const 0)'))})
+          ${single}))
       (local.set $r (i32.add (local.get $r) (i32.const ${R})))
       (br $rl)))
   )`;
@@ -389,7 +536,7 @@ function secularSums() {
  * weightRatios(prod, gaps, d, from, to, args): prod_j ← prod_j · gaps_j / (d_j − pole) for
  * from ≤ j < to, one row's factors of the Gu–Eisenstat weights; poleOffsets(gaps, d, k, args):
  * gaps_j ← (d_j − pole) − t, a root's row of d_j − λ (secularRoots.ts); cauchyRow(gaps, w, k, dst,
- * index): x_j = w_j / gaps_j, then dst[index[j]] = x_j / ‖x‖ (i32 indices), one new vector
+ * index): x_j = w_j / gaps_j, then dst[index[j]] = x_j / ‖x‖ (i32 indices; gaps is left as it is), one new vector
  * (divideConquerTridiagonal.ts). The doubles pole (args[0]) and t (args[1]) come through memory and
  * no double is returned: Node 20 calls these kernels through V8's generic JS-to-WebAssembly
  * wrapper, which can box doubles, thousands of calls per solve (no change in the collector's
@@ -431,12 +578,15 @@ function vectorRows() {
       (then (f64.store ${G('(local.get $j)')} (f64.sub (f64.sub ${f64(at('(local.get $d)', '(local.get $j)'))} (local.get $pole)) (local.get $t))))))
   (func $cauchyRow (export "cauchyRow") (param $gaps i32) (param $w i32) (param $k i32) (param $dst i32) (param $index i32)
     (local $j i32) (local $x v128) (local $s v128) (local $y f64) (local $t f64)
+    ;; Pass 1 sums the squares only; pass 2 divides again instead of reading back the quotients
+    ;; pass 1 stored in pairs: those 8-byte reads of 16-byte stores just made cost about 5 ns an
+    ;; entry (0.96 against 0.22 µs a call at k = 160; likely stores not yet forwardable), 8 % of
+    ;; a whole solve at order 160.
     (local.set $s (v128.const f64x2 0 0))
     (local.set $j (i32.const 0))
     (block $done (loop $l
       (br_if $done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $k)))
       (local.set $x (f64x2.div (v128.load ${at('(local.get $w)', '(local.get $j)')}) (v128.load ${G('(local.get $j)')})))
-      (v128.store ${G('(local.get $j)')} (local.get $x))
       (local.set $s (f64x2.add (local.get $s) (f64x2.mul (local.get $x) (local.get $x))))
       (local.set $j (i32.add (local.get $j) (i32.const 2)))
       (br $l)))
@@ -444,16 +594,20 @@ function vectorRows() {
     (if (i32.lt_s (local.get $j) (local.get $k))
       (then
         (local.set $y (f64.div ${f64(at('(local.get $w)', '(local.get $j)'))} ${f64(G('(local.get $j)'))}))
-        (f64.store ${G('(local.get $j)')} (local.get $y))
         (local.set $t (f64.add (local.get $t) (f64.mul (local.get $y) (local.get $y))))))
     (local.set $t (f64.div (f64.const 1) (f64.sqrt (local.get $t))))
     (local.set $j (i32.const 0))
     (block $s_done (loop $sl
-      (br_if $s_done (i32.ge_s (local.get $j) (local.get $k)))
-      (f64.store ${at('(local.get $dst)', '(i32.load (i32.add (local.get $index) (i32.shl (local.get $j) (i32.const 2))))')}
-        (f64.mul (local.get $t) ${f64(G('(local.get $j)'))}))
-      (local.set $j (i32.add (local.get $j) (i32.const 1)))
-      (br $sl))))`;
+      (br_if $s_done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $k)))
+      (local.set $x (f64x2.mul (f64x2.splat (local.get $t)) (f64x2.div (v128.load ${at('(local.get $w)', '(local.get $j)')}) (v128.load ${G('(local.get $j)')}))))
+      (f64.store ${at('(local.get $dst)', `(i32.load ${at4('(local.get $index)', '(local.get $j)')})`)} (f64x2.extract_lane 0 (local.get $x)))
+      (f64.store ${at('(local.get $dst)', `(i32.load offset=4 ${at4('(local.get $index)', '(local.get $j)')})`)} (f64x2.extract_lane 1 (local.get $x)))
+      (local.set $j (i32.add (local.get $j) (i32.const 2)))
+      (br $sl)))
+    (if (i32.lt_s (local.get $j) (local.get $k))
+      (then
+        (f64.store ${at('(local.get $dst)', `(i32.load ${at4('(local.get $index)', '(local.get $j)')})`)}
+          (f64.mul (local.get $t) (f64.div ${f64(at('(local.get $w)', '(local.get $j)'))} ${f64(G('(local.get $j)'))}))))))`;
 }
 
 /**

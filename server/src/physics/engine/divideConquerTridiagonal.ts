@@ -42,7 +42,7 @@ export interface MergeKernels extends SecularSums {
   zhat: Float64Array;
   /** zhat_j ← zhat_j · gaps[row + j] / (dk_j − pole) for from ≤ j < to. */
   weightRatios(row: number, from: number, to: number, pole: number): void;
-  /** x_j = zhat_j / gaps[row + j] (left in gaps), then v[at + column[j]] = x_j / ‖x‖ for j < k: one new vector. */
+  /** x_j = zhat_j / gaps[row + j] (gaps may be left holding x), then v[at + column[j]] = x_j / ‖x‖ for j < k: one new vector. */
   cauchyRow(row: number, k: number, at: number): void;
   v: Float64Array;
   g: Float64Array;

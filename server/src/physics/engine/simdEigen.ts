@@ -20,9 +20,9 @@ const ROW_TILE = 4;
 
 interface EigenKernels {
   memory: WebAssembly.Memory;
-  tridiagonalise(a: number, ns: number, n: number, d: number, e: number, betas: number, v: number, p: number): void;
+  tridiagonalise(a: number, ns: number, n: number, d: number, e: number, betas: number, v: number, p: number, vn: number, pn: number): void;
   packReflectors(a: number, ns: number, n: number, out: number): void;
-  applyReflectors(z: number, ns: number, rows: number, n: number, refl: number, betas: number): void;
+  applyReflectors(z: number, ns: number, rows: number, n: number, refl: number, betas: number, cross: number): void;
   maxAbs(src: number, count: number): number;
   packScaled(src: number, n: number, ns: number, dst: number, factor: number): void;
   unpackTransposed(z: number, ns: number, n: number, out: number): void;
@@ -67,6 +67,9 @@ interface Layout {
   betas: number;
   v: number;
   p: number;
+  /** The reduction's second pair of scratch vectors (its passes fuse two steps). */
+  vn: number;
+  pn: number;
   /** The caller's n × n matrix, in and out. */
   stage: number;
   /** The divide and conquer's product operands (productStride(n) wide). */
@@ -91,7 +94,7 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
   const square = 8 * ns * Math.max(n, rows);
   const vector = 8 * (ns + 2);
   const v = 3 * square;
-  const stage = v + 5 * vector;
+  const stage = v + 7 * vector;
   const operand = 8 * (n + 4) * productStride(n);
   const pv = stage + 8 * n * n;
   const gaps = pv + 3 * operand;
@@ -102,7 +105,7 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
   const fromRows = zhat + vector;
   const toRows = fromRows + vector;
   const column = toRows + vector;
-  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, stage, pv, pg: pv + operand, pw: pv + 2 * operand, gaps, z2, sums, dk, zhat, fromRows, toRows, column };
+  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, vn: v + 5 * vector, pn: v + 6 * vector, stage, pv, pg: pv + operand, pw: pv + 2 * operand, gaps, z2, sums, dk, zhat, fromRows, toRows, column };
   const bytes = column + vector;
   const pages = Math.ceil((bytes - memory.buffer.byteLength) / 65536);
   if (pages > 0) memory.grow(pages);
@@ -127,7 +130,7 @@ export function simdEigenpairs(a: Float64Array, n: number, values: Float64Array,
   const scale = big > 0 && 1 / big < Number.POSITIVE_INFINITY ? powerOfTwoAtLeast(big) : 1;
   const ns = l.ns;
   k.packScaled(l.stage, n, ns, l.a, 1 / scale);
-  k.tridiagonalise(l.a, ns, n, l.d, l.e, l.betas, l.v, l.p);
+  k.tridiagonalise(l.a, ns, n, l.d, l.e, l.betas, l.v, l.p, l.vn, l.pn);
   const d = heap.subarray(l.d / 8, l.d / 8 + n);
   const e = heap.subarray(l.e / 8, l.e / 8 + n);
   const stage = heap.subarray(l.stage / 8, l.stage / 8 + n * n);
@@ -135,7 +138,7 @@ export function simdEigenpairs(a: Float64Array, n: number, values: Float64Array,
   // Row k of z (stride ns): the tridiagonal's k-th eigenvector.
   if (!divideConquerTridiagonal(d, e, n, values, heap.subarray(l.z / 8, l.z / 8 + n * ns), ns, wasmMergeKernels(k, heap, l, n))) return false;
   k.packReflectors(l.a, ns, n, l.refl);
-  k.applyReflectors(l.z, ns, l.rows, n, l.refl, l.betas);
+  k.applyReflectors(l.z, ns, l.rows, n, l.refl, l.betas, l.p);
   // Rows of z to columns of `vectors`.
   k.unpackTransposed(l.z, ns, n, l.stage);
   vectors.set(stage);
