@@ -26,6 +26,11 @@ export interface LevelCurve {
   energyHz: ArrayLike<number>;
   /** Magnetic moment −∂E/∂B in J/T at each entry of `fieldsT`, when known. */
   momentJT?: ArrayLike<number>;
+  /**
+   * The manifold the state belongs to at low field ("F=2", "J=3/2, F=3", "J=3/2"). When every
+   * curve has one, manifolds far apart compared with their spread get bands of their own (levelBands.ts).
+   */
+  manifold?: string;
 }
 
 export interface LevelCrossing {
