@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { BAND_GAP_RATIO, levelBands, MAX_BANDS } from '../../server/src/render/levelBands';
 import { renderLevels, type LevelsViewData } from '../../server/src/render';
 import { manifoldOf } from '../../server/src/views/levelsView';
-import { parseSvg } from './svgTree';
+import { all, axisMap, byClass, parseSvg, pathPoints, textOf } from './svgTree';
 
 const FIELDS = [0, 0.5, 1];
 
@@ -83,6 +83,23 @@ describe('renderLevels on both sides of the rule', () => {
     const broken = parseSvg(renderLevels(data(4.1), { kind: 'export' }));
     expect(broken.attrs['data-y-bands']).toBe('2');
     expect(broken.attrs['data-y-domain']).toBeUndefined();
+  });
+
+  it('draws a crossing in the band its two manifolds share, at its energy on that band’s ticks', () => {
+    // F=1 and F=2 overlap (their fans cross); F=3 lies 500 MHz above: two bands.
+    const curves = [...fan('F=1', 2, 0, 4e6), ...fan('F=2', 4, 1e6, 4e6), ...fan('F=3', 6, 500e6, 4e6)];
+    // F=1, m_F=1 (0 → 2 MHz at 1 T) meets F=2, m_F=-1 (1 → 0 MHz) at B = 1/3 T, E = 2/3 MHz.
+    const crossing = { fieldT: 1 / 3, energyHz: 2e6 / 3, a: 'F=1, m_F=1', b: 'F=2, m_F=-1' };
+    const svg = parseSvg(renderLevels({ title: 'crossing', fieldUnit: 'T', fieldsT: FIELDS, curves, crossings: [crossing] }, { kind: 'export' }));
+    const bands = byClass(svg, 'sl-band');
+    expect(bands.map((b) => b.attrs['data-label'])).toEqual(['F=3', 'F=1 + F=2']);
+    const lower = bands[1]!;
+    const title = textOf(byClass(lower, 'sl-band-title')[0]!);
+    expect(title).toBe('F=1 + F=2: E/h (MHz)');
+    const diamond = all(svg, (n) => n.attrs['data-kind'] === 'crossing')[0]!;
+    const top = pathPoints(diamond.children[1]!.attrs.d!)[0]!; // the diamond's top vertex (cx, cy − 4.5)
+    expect(Math.abs(top.y + 4.5 - axisMap(lower, 'sl-axis-y')(2 / 3))).toBeLessThan(0.05);
+    expect(Math.abs(top.x - axisMap(svg, 'sl-axis-x')(1 / 3))).toBeLessThan(0.05);
   });
 
   it('draws data without manifold names exactly as before (one axis)', () => {

@@ -5,7 +5,9 @@
  * over along the axis. Every named field of the file is a labelled rule. Every state is named
  * at both ends, in lanes left and right of the plot joined to the curve ends by short leaders;
  * the figure grows taller for distinct ends, and a crowded lane names coinciding ends once
- * (placeLabels). Energies far from zero count from an offset (offsetAxis.ts).
+ * (placeLabels). Energies far from zero count from an offset (offsetAxis.ts). Manifolds far apart
+ * compared with their fans (a magnetometer's µT) get stacked bands, each on its own offset axis
+ * (levelBands.ts, levelBandAxis.ts), so the fans are not flat lines on a GHz axis.
  */
 import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
