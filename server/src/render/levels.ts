@@ -147,12 +147,12 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
 
   const body: string[] = [legendSvg.svg];
   body.push(bottomAxis(x, fUnit, 'B', box, pal));
-  // Ticks count from a round offset when absolute energies would need long labels (a whole term in THz).
   if (bands) {
     body.push(bandAxes(bands, box, AXIS_X, pal));
-    body.push(el('text', { class: 'sl-band-note', x: 16, y: box.bottom + 58, 'font-size': 11, fill: pal.muted }, noteLines.map((l, k) => el('tspan', { x: 16, dy: k === 0 ? undefined : NOTE_LINE }, text(l)))));
-  }
-  else {
+    const noteSpans = noteLines.map((l, k) => el('tspan', { x: 16, dy: k === 0 ? undefined : NOTE_LINE }, text(l)));
+    body.push(el('text', { class: 'sl-band-note', x: 16, y: box.bottom + 58, 'font-size': 11, fill: pal.muted }, noteSpans));
+  } else {
+    // Ticks count from a round offset when absolute energies would need long labels (a whole term in THz).
     const [yLo, yHi] = y.domain() as [number, number];
     const eAxis = d.energyUnitHz !== undefined ? { offset: 0, unit: eUnit, name: 'E/h' } : axisOffset(yLo, yHi, Math.max(2, Math.round(plotHeight / 55)), 'E/h', 'Hz');
     const yShown = eAxis.offset === 0 ? y : y.copy().domain([yLo - eAxis.offset, yHi - eAxis.offset]);
@@ -269,9 +269,13 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   body.push(labelGroup(lowLabels, 'low'), labelGroup(highLabels, 'high'));
 
   // Crossings: in the band of their states (manifolds that meet share a band); else where their energy lies.
+  const holds = (b: PlacedBand, e: number): boolean => {
+    const [lo, hi] = b.y.domain() as [number, number];
+    return e >= lo && e <= hi;
+  };
   const crossingY = (c: LevelCrossing): number => {
     const i = d.curves.findIndex((k) => k.lowLabel === c.a);
-    const scale = i >= 0 ? yOf(i) : (bands?.find((b) => { const [lo, hi] = b.y.domain() as [number, number]; return c.energyHz >= lo && c.energyHz <= hi; })?.y ?? y);
+    const scale = i >= 0 ? yOf(i) : (bands?.find((b) => holds(b, c.energyHz))?.y ?? y);
     return scale(c.energyHz);
   };
   if (crossings.length > 0) {
