@@ -29,7 +29,7 @@ import type { LanguageService } from './service/languageService';
 import type { EditorSettings } from './service/settings';
 import { guardedStdio } from './stdioTransport';
 import { type DiagramView, isDiagramView } from './views/diagram';
-import type { FieldUnit } from './render/viewData';
+import { isFieldUnit } from './render/fieldUnits';
 
 /** Same value as EVALUATOR_ROLE in service/workerEvaluator.ts (not imported: that would load the service here). */
 const EVALUATOR_ROLE = 'sublevel-evaluator';
@@ -362,7 +362,7 @@ function startLanguageServer(): void {
       ...(typeof p?.field === 'string' ? { fieldName: p.field } : {}),
       ...(finite(p?.fromT) !== undefined ? { fromT: finite(p?.fromT) } : {}),
       ...(finite(p?.toT) !== undefined ? { toT: finite(p?.toT) } : {}),
-      ...(p?.unit === 'G' || p?.unit === 'mT' || p?.unit === 'µT' || p?.unit === 'nT' || p?.unit === 'T' ? { fieldUnit: p.unit as FieldUnit } : {}),
+      ...(isFieldUnit(p?.unit) ? { fieldUnit: p.unit } : {}),
     };
     const theme = p?.theme === 'export' ? 'export' : 'panel';
     const line = typeof p?.line === 'number' && Number.isInteger(p.line) && p.line >= 0 ? p.line : undefined;

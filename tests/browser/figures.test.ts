@@ -23,6 +23,10 @@ const example = (name: string): string => readFileSync(path.resolve(__dirname, '
 const beam = wideSlitBeam;
 const K41 = 'species K41\n  level ground: 4s 2S1/2\nfield guide = 20 G\nfield bias = 60 G\nfield probe = 62 G\n';
 const D_LINES = 'species Rb87\n  level ground: 5s 2S1/2\n  level p32: 5p 2P°3/2\nfield low = 0.1 G\nfield high = 1 T\nline D2: ground -> p32\n';
+// Invented magnetometer setups: the level diagram breaks its energy axis into one band per F.
+const RB_20UT = 'species Rb87\n  level ground: 5s 2S1/2\nfield bias = 20 uT\n';
+const FORTY_BANDS = 'species Demo40\n  mass = 90 u\n  I = 9/2\n  mu_I = -1.3 muN\n  level upper: 5p 2P°3/2  A = -12 MHz  B = 3 MHz\nfield bias = 100 uT\n';
+const SR_TINY = 'species Sr87\n  level p2: 5s 5p 3P°2\nfield tiny = 1 nT\n';
 const FORTY = 'species Ya\n  mass = 100 u\n  I = 3/2\n  g_I = -0.0003\n  level ground: 4G9/2  A = 300 MHz\nfield lab = 50 G\n';
 
 interface Case {
@@ -42,6 +46,9 @@ const CASES: Case[] = [
   { name: 'levels-demo', text: example('rubidium-bias.sublevel'), req: { view: 'levels' }, fieldMarks: 2 },
   { name: 'levels-k41-turnover', text: K41, req: { view: 'levels', toT: 0.012, fieldUnit: 'G' }, field: 'bias', fieldMarks: 3 },
   { name: 'levels-forty', text: FORTY, req: { view: 'levels' }, fieldMarks: 1 },
+  { name: 'levels-bands-rb-50uT', text: RB_20UT, req: { view: 'levels', toT: 50e-6 }, fieldMarks: 1 },
+  { name: 'levels-bands-forty-200uT', text: FORTY_BANDS, req: { view: 'levels', toT: 200e-6 }, fieldMarks: 1 },
+  { name: 'levels-bands-fifty-1uT', text: SR_TINY, req: { view: 'levels', toT: 1e-6 }, fieldMarks: 1 },
   // Groups whose every component is under the lines figure's visibility floor (1e-4 of the strongest) get no panel:
   // at 0.1 G both ΔF = 2 groups; at 3.23 G the field mixes one of them above the floor.
   { name: 'lines-demo-3.23G', text: example('rubidium-bias.sublevel'), req: { view: 'lines' }, panels: 7 },

@@ -166,6 +166,10 @@ describe('diagram panel page (browser)', () => {
     await page.evaluate((m) => window.postMessage(m, '*'), { ...show, svg: renderLevels(inGauss, { kind: 'panel' }) });
     await page.waitForSelector('#sl-host svg[data-x-unit="G"]');
     expect(await page.inputValue('#sl-unit')).toBe('G');
+    // A magnetometer's axis in µT: the control offers it and follows (it offered G, mT and T only).
+    await page.evaluate((m) => window.postMessage(m, '*'), { ...show, svg: renderLevels({ ...data, fieldUnit: 'µT' as const }, { kind: 'panel' }) });
+    await page.waitForSelector('#sl-host svg[data-x-unit="µT"]');
+    expect(await page.inputValue('#sl-unit')).toBe('µT');
     await page.evaluate((m) => window.postMessage(m, '*'), show);
     await page.waitForSelector('#sl-host svg[data-x-unit="mT"]');
     expect(await page.inputValue('#sl-unit')).toBe('mT');

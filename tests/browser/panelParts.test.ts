@@ -27,6 +27,9 @@ describe('message validation', () => {
     expect(parsePageMessage({ type: 'export', format: 'gif', view: 'lines' })).toBeUndefined();
     expect(parsePageMessage({ type: 'options', view: 'levels', field: 'bias', from: 0, to: 120, unit: 'G', junk: 1 })).toEqual({ type: 'options', view: 'levels', field: 'bias', from: 0, to: 120, unit: 'G' });
     expect(parsePageMessage({ type: 'options', view: 'levels', from: Infinity, unit: 'kG' })).toEqual({ type: 'options', view: 'levels' });
+    // A magnetometer's units: the panel offers every unit a figure's field axis reads in.
+    expect(parsePageMessage({ type: 'options', view: 'levels', from: 0, to: 50, unit: 'µT' })).toEqual({ type: 'options', view: 'levels', from: 0, to: 50, unit: 'µT' });
+    expect(parsePageMessage({ type: 'options', view: 'levels', to: 50, unit: 'nT' })).toEqual({ type: 'options', view: 'levels', to: 50, unit: 'nT' });
     expect(parsePageMessage({ type: 'png', view: 'pattern', data: 'iVBORw0KGgo=' })).toEqual({ type: 'png', view: 'pattern', data: 'iVBORw0KGgo=' });
     expect(parsePageMessage({ type: 'png', view: 'pattern', data: '<script>' })).toBeUndefined();
     expect(parseHostMessage({ type: 'rasterise', view: 'resonance', svg: '<svg/>', scale: 3 })).toEqual({ type: 'rasterise', view: 'resonance', svg: '<svg/>', scale: 3 });
@@ -111,6 +114,7 @@ describe('panel HTML', () => {
     expect(html).toContain('data-export="csv"');
     expect(html).toContain('data-export="png"');
     for (const id of ['sl-field', 'sl-from', 'sl-to', 'sl-unit']) expect(html).toContain(`id="${id}"`);
+    expect(html).toContain('<select id="sl-unit"><option>G</option><option selected>mT</option><option>µT</option><option>nT</option><option>T</option></select>');
     expect(html).toContain('id="sl-host"');
     expect(html).toContain('id="sl-readout"');
   });

@@ -80,6 +80,21 @@ describe('sublevel field: formats', () => {
     expect(r.out).toMatch(/∇\|B\| = \(0, 0, 101\.64\d*\) G\/cm/);
   });
 
+  it('prints a magnetometer’s units: uT (or µT) and nT, gradients per metre', () => {
+    // The same point as above in T, µT and nT: the numbers scale by 1e6 and 1e9 (SI prefixes).
+    const inT = cli('field', FILE, '--source', 'quad', '--at', '0,0,1cm', '--unit', 'T').out.split('\n');
+    const bzT = Number(/\(0, 0, (-[\d.e-]+)\) T$/.exec(inT[1]!)![1]);
+    for (const [choice, shown, factor] of [['uT', 'µT', 1e6], ['µT', 'µT', 1e6], ['nT', 'nT', 1e9]] as const) {
+      const r = cli('field', FILE, '--source', 'quad', '--at', '0,0,1cm', '--unit', choice);
+      expect(r.code).toBe(0);
+      const lines = r.out.split('\n');
+      const bz = Number(new RegExp(`\\(0, 0, (-[\\d.e+-]+)\\) ${shown}$`).exec(lines[1]!)![1]);
+      expect(bz / (bzT * factor)).toBeCloseTo(1, 5);
+      expect(lines[3]).toBe(`  gradient ∂B_i/∂x_j (${shown}/m):`);
+    }
+    expect(cli('field', FILE, '--source', 'quad', '--at', '0,0,1cm', '--unit', 'kG').code).toBe(2);
+  });
+
   it('tabulates a line in text, and writes CSV with SI column names', () => {
     const text = cli('field', FILE, '--source', 'quad', '--along', '0,0,-1cm:0,0,1cm', '--points', '3').out.split('\n');
     expect(text[0]).toBe('field of quad along (0, 0, -1) cm → (0, 0, 1) cm, 3 points:');

@@ -7,7 +7,8 @@ import * as vscode from 'vscode';
 import type { LanguageClient } from 'vscode-languageclient/node';
 import { makeNonce } from '../panel/nonce';
 import { panelHtml } from '../panel/panelHtml';
-import { isView, parsePageMessage, type FieldUnitName, type View, type ViewOptions } from '../panel/messages';
+import { isView, parsePageMessage, type View, type ViewOptions } from '../panel/messages';
+import { FIELD_UNIT_TESLA } from '../../../server/src/render/fieldUnits';
 import { DIAGRAM_REQUEST, type DiagramParams, type DiagramResult } from './diagramProtocol';
 import { messageSvg } from './messageSvg';
 
@@ -16,7 +17,6 @@ export const PANEL_VIEW_TYPE = 'sublevel.diagrams';
 const REDRAW_DELAY_MS = 100;
 /** Device pixels per SVG unit for PNG (a 760-unit figure becomes 2280 px, about 300 dpi at 19 cm). */
 const PNG_SCALE = 3;
-const UNIT_TESLA: Record<FieldUnitName, number> = { G: 1e-4, mT: 1e-3, T: 1 };
 
 export class DiagramPanel {
   private static current: DiagramPanel | undefined;
@@ -96,7 +96,7 @@ export class DiagramPanel {
     if (!doc) return { ok: false, message: 'Open a .sublevel file to see its diagrams.' };
     const editor = vscode.window.visibleTextEditors.find((e) => e.document === doc);
     const o = this.options;
-    const toTesla = (v: number | undefined): number | undefined => (v === undefined ? undefined : v * UNIT_TESLA[o.unit ?? 'mT']);
+    const toTesla = (v: number | undefined): number | undefined => (v === undefined ? undefined : v * FIELD_UNIT_TESLA[o.unit ?? 'mT']);
     const params: DiagramParams = {
       uri: doc.uri.toString(),
       view: this.view,

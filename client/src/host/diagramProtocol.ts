@@ -1,3 +1,5 @@
+import type { FieldUnit } from '../../../server/src/render/fieldUnits';
+
 /** The custom request the panel uses to get a diagram from the language server. */
 export const DIAGRAM_REQUEST = 'sublevel/diagram';
 
@@ -11,7 +13,7 @@ export interface DiagramParams {
   field?: string;
   fromT?: number;
   toT?: number;
-  unit?: 'G' | 'mT' | 'T';
+  unit?: FieldUnit;
 }
 
 export type DiagramResult = { ok: true; title: string; svg: string; csv: string; fields?: string[] } | { ok: false; message: string };

@@ -3,12 +3,14 @@
  * postMessage is untrusted: `parseHostMessage` / `parsePageMessage` accept only the exact
  * shapes below and return undefined for everything else. No DOM, so both sides can use it.
  */
+import { FIELD_UNITS, type FieldUnit as FieldUnitName } from '../../../server/src/render/fieldUnits';
 
 export const VIEWS = ['levels', 'pattern', 'lines', 'resonance', 'residuals', 'fieldmap', 'slower'] as const;
 export type View = (typeof VIEWS)[number];
 export type ExportFormat = 'svg' | 'csv' | 'png';
-export const FIELD_UNITS = ['G', 'mT', 'T'] as const;
-export type FieldUnitName = (typeof FIELD_UNITS)[number];
+
+/** The figures' own list of field units (G, mT, µT, nT, T): the control offers every unit an axis reads in. */
+export { FIELD_UNITS, type FieldUnitName };
 
 /** Extension → page: draw this diagram (SVG text from the shared renderer). */
 export interface ShowMessage {

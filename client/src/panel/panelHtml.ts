@@ -3,7 +3,7 @@
  * template holds only static structure, one stylesheet and one nonce'd script, under a
  * Content-Security-Policy that forbids inline code, inline styles and any remote content.
  */
-import { VIEWS, type View } from './messages';
+import { FIELD_UNITS, VIEWS, type View } from './messages';
 
 export interface PanelHtmlOptions {
   /** The webview's `cspSource` (origin allowed for the style sheet and images). */
@@ -50,6 +50,8 @@ export function panelHtml(opts: PanelHtmlOptions): string {
       `      <button type="button" role="tab" id="sl-tab-${v}" data-view="${v}" aria-controls="sl-host" ` +
       `aria-selected="${i === 0}" tabindex="${i === 0 ? 0 : -1}">${VIEW_NAMES[v]}</button>`,
   ).join('\n');
+  // mT until the first diagram arrives; then the control follows the figure's field axis (page.ts).
+  const unitOptions = FIELD_UNITS.map((u) => `<option${u === 'mT' ? ' selected' : ''}>${escapeHtml(u)}</option>`).join('');
   return `<!DOCTYPE html>
 <html lang="en">
 <head>
@@ -75,7 +77,7 @@ ${tabs}
     <span class="sl-range" id="sl-range">
       <label>From <input id="sl-from" type="number" step="any" inputmode="decimal" size="6"></label>
       <label>to <input id="sl-to" type="number" step="any" inputmode="decimal" size="6"></label>
-      <label>unit <select id="sl-unit"><option>G</option><option selected>mT</option><option>T</option></select></label>
+      <label>unit <select id="sl-unit">${unitOptions}</select></label>
     </span>
     <button type="submit">Apply</button>
   </form>

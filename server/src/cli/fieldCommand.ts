@@ -1,6 +1,6 @@
 /**
  * `sublevel field <file> [--source a,b] (--at P | --along A:B [--points N] | --grid x=a:b,z=c:d [--points NxM] [--at P])
- * [--unit G|mT|T] [--format text|json|csv] [--out FILE]`: the summed field of the file's sources —
+ * [--unit G|mT|uT|nT|T] [--format text|json|csv] [--out FILE]`: the summed field of the file's sources —
  * B, |B|, the gradient tensor ∂B_i/∂x_j and ∂|B|/∂x_j — at points, along a line or on a grid.
  * Text uses the chosen unit; JSON and CSV stay in SI (docs/csv.md).
  */
@@ -15,6 +15,7 @@ import { writeOutputFile } from './output';
 import { table } from './table';
 import { selectSources } from './selectors';
 import { csvTable } from '../render/csv';
+import { FIELD_UNIT_CHOICES, FIELD_UNIT_TESLA, fieldUnitOf, type FieldUnit } from '../render/fieldUnits';
 import { csvNumber } from '../eval/machineText';
 import { lengthUnitFor } from '../eval/lengthUnit';
 import { trimNumber } from '../eval/quantityText';
@@ -24,8 +25,6 @@ import { cleanField } from '../eval/cleanField';
 import type { FieldSample, Vec3 } from '../physics/fields/types';
 
 const FORMATS = ['text', 'json', 'csv'] as const;
-const UNITS = ['G', 'mT', 'T'] as const;
-type FieldUnitName = (typeof UNITS)[number];
 
 export const fieldSpec: CommandSpec = {
   name: 'field',
@@ -38,7 +37,7 @@ export const fieldSpec: CommandSpec = {
     along: { value: 'A:B', help: 'points on the segment from A to B, e.g. 0,0,-5cm:0,0,5cm' },
     grid: { value: 'RANGES', help: 'a rectangle in a coordinate plane, e.g. x=-2:2cm,z=-1:1cm' },
     points: { value: 'N', help: 'number of points: N along a line (default 201), N or NxM on a grid (default 41x41)' },
-    unit: { value: 'UNIT', choices: UNITS, help: 'field unit of the text output: G (gradients in G/cm), mT (mT/m) or T (T/m); default by size' },
+    unit: { value: 'UNIT', choices: FIELD_UNIT_CHOICES, help: 'field unit of the text output: G (gradients in G/cm), mT (mT/m), uT or µT (µT/m), nT (nT/m) or T (T/m); default by size' },
     format: { value: 'FORMAT', choices: FORMATS, help: 'text (default), json or csv (both in SI units)' },
     ...OUT_OPTION,
   },
@@ -60,7 +59,8 @@ export function runField(args: ParsedArgs, ctx: CliContext): number {
   if (args.positionals.length !== 1) throw new UsageError('field needs exactly one setup file');
   const file = args.positionals[0]!;
   const format = stringOption(args, 'format', FORMATS) ?? 'text';
-  const unitChoice = stringOption(args, 'unit', UNITS) as FieldUnitName | undefined;
+  const unitText = stringOption(args, 'unit', FIELD_UNIT_CHOICES);
+  const unitChoice = unitText === undefined ? undefined : fieldUnitOf(unitText);
   const plan = fieldPointPlan({ at: stringOption(args, 'at'), along: stringOption(args, 'along'), grid: stringOption(args, 'grid'), points: stringOption(args, 'points') });
   const out = stringOption(args, 'out');
 
@@ -120,15 +120,16 @@ interface TextUnits {
   gradient: { name: string; factor: number };
 }
 
-function textUnits(choice: FieldUnitName | undefined, rows: readonly FieldPointRow[]): TextUnits {
+function textUnits(choice: FieldUnit | undefined, rows: readonly FieldPointRow[]): TextUnits {
   const max = largest(rows, (r) => (r.sample ? [magnitude(r.sample.B)] : []));
   const unit = choice ?? (max < 0.1 ? 'G' : 'T');
+  // Gradients per cm beside gauss (the lab's G/cm), per metre beside the tesla family.
   if (unit === 'G') return { field: { name: 'G', factor: 1e-4 }, gradient: { name: 'G/cm', factor: 1e-2 } };
-  if (unit === 'mT') return { field: { name: 'mT', factor: 1e-3 }, gradient: { name: 'mT/m', factor: 1e-3 } };
-  return { field: { name: 'T', factor: 1 }, gradient: { name: 'T/m', factor: 1 } };
+  const factor = FIELD_UNIT_TESLA[unit];
+  return { field: { name: unit, factor }, gradient: { name: `${unit}/m`, factor } };
 }
 
-export function fieldText(names: string[], plan: FieldPointPlan, rows: readonly FieldPointRow[], unit: FieldUnitName | undefined): string[] {
+export function fieldText(names: string[], plan: FieldPointPlan, rows: readonly FieldPointRow[], unit: FieldUnit | undefined): string[] {
   const u = textUnits(unit, rows);
   // One length unit for the whole table: the one the options were written in, else by size.
   const len = lengthUnitFor(largest(rows, (r) => r.point), plan.lengthUnit);

@@ -12,13 +12,11 @@ import type { CliContext } from './io';
 import { writeOutputFile } from './output';
 import { PNG_SCALE, svgToPng } from './pngExport';
 import { readFieldOption } from './fieldOption';
-import type { FieldUnit } from '../render';
-import { displayUnit } from '../eval/unitSpelling';
+import { FIELD_UNIT_CHOICES, fieldUnitOf } from '../render/fieldUnits';
 import { selectBeam, selectField, selectLevel, selectName, selectSources } from './selectors';
 
 export const RENDER_VIEWS = DIAGRAM_VIEWS;
 const FORMATS = ['svg', 'csv', 'png'] as const;
-const FIELD_UNITS = ['G', 'mT', 'uT', 'µT', 'nT', 'T'] as const;
 
 export const renderSpec: CommandSpec = {
   name: 'render',
@@ -38,7 +36,7 @@ export const renderSpec: CommandSpec = {
     slower: { value: 'NAME', help: 'the slower (slower view); default: the first one' },
     from: { value: 'FIELD', help: 'start of the field axis (levels and resonance views), e.g. 0 or 10G' },
     to: { value: 'FIELD', help: 'end of the field axis, e.g. 50G or 0.1T' },
-    unit: { value: 'UNIT', choices: FIELD_UNITS, help: 'unit of the field axis: G, mT, uT (or µT), nT or T' },
+    unit: { value: 'UNIT', choices: FIELD_UNIT_CHOICES, help: 'unit of the field axis: G, mT, uT (or µT), nT or T' },
     format: { value: 'FORMAT', choices: FORMATS, help: 'svg (default), csv, or png (needs --out and the system Chromium)' },
     ...OUT_OPTION,
   },
@@ -64,8 +62,8 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   if (fromText !== undefined) req.fromT = readFieldOption('from', fromText);
   if (toText !== undefined) req.toT = readFieldOption('to', toText);
   if (req.fromT !== undefined && req.toT !== undefined && !(req.toT > req.fromT)) throw new UsageError('--to must be a larger field than --from');
-  const unit = stringOption(args, 'unit', FIELD_UNITS);
-  if (unit !== undefined) req.fieldUnit = displayUnit(unit) as FieldUnit; // uT → µT
+  const unit = stringOption(args, 'unit', FIELD_UNIT_CHOICES);
+  if (unit !== undefined) req.fieldUnit = fieldUnitOf(unit); // uT → µT
   if (format === 'png' && !out) throw new UsageError('--format png writes a file: add --out FILE.png');
   const level = stringOption(args, 'level');
   if (level !== undefined) req.level = selectLevel(model, level);

@@ -119,11 +119,14 @@ export function leftAxis(scale: Scale, unit: DisplayUnit | undefined, name: stri
   for (const { t, label } of labelled) {
     parts.push(el('text', { x: axisX - 8, y: shown(t) + 4, 'text-anchor': 'end', fill: pal.muted, 'data-tick': label }, text(label)));
   }
-  const title = unit ? axisTitle(name, unit) : name;
-  const cy = (box.top + box.bottom) / 2;
-  parts.push(
-    el('text', { class: 'sl-axis-title', x: 16, y: cy, transform: `rotate(-90 16 ${px(cy)})`, 'text-anchor': 'middle', fill: pal.text },
-      text(title)),
-  );
+  // An empty name leaves the title to the caller (a broken axis names each band in a header).
+  if (name) {
+    const title = unit ? axisTitle(name, unit) : name;
+    const cy = (box.top + box.bottom) / 2;
+    parts.push(
+      el('text', { class: 'sl-axis-title', x: 16, y: cy, transform: `rotate(-90 16 ${px(cy)})`, 'text-anchor': 'middle', fill: pal.text },
+        text(title)),
+    );
+  }
   return el('g', { class: 'sl-axis sl-axis-y', 'font-size': 11 }, parts);
 }

@@ -5,12 +5,16 @@
  * over along the axis. Every named field of the file is a labelled rule. Every state is named
  * at both ends, in lanes left and right of the plot joined to the curve ends by short leaders;
  * the figure grows taller for distinct ends, and a crowded lane names coinciding ends once
- * (placeLabels). Energies far from zero count from an offset (offsetAxis.ts).
+ * (placeLabels). Energies far from zero count from an offset (offsetAxis.ts). Manifolds far apart
+ * compared with their fans (a magnetometer's µT) get stacked bands, each on its own offset axis
+ * (levelBands.ts, levelBandAxis.ts), so the fans are not flat lines on a GHz axis.
  */
 import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
 import { BOHR_MAGNETON } from '../physics/constants';
-import { bottomAxis, leftAxis, type PlotBox } from './axes';
+import { bottomAxis, leftAxis, type PlotBox, type Scale } from './axes';
+import { levelBands } from './levelBands';
+import { bandAxes, bandNote, placeBands, wrapNote, type PlacedBand } from './levelBandAxis';
 import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
 import { laneHeightFor, placeLabels, truncateLabel, type LabelAnchor, type PlacedLabel } from './labelLayout';
 import { fieldMarksIn, layoutMarkRows, MARK_ROW } from './fieldMarks';
@@ -22,13 +26,14 @@ import { arrayValues, finiteExtent, slopeAt, valueAt } from './sampled';
 import { slopeRuns, trendOf, type Trend } from './slopeRuns';
 import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
 import { fieldDisplayUnit, figureMinus, formatIn, formatSI, frequencyUnit } from './units';
-import type { LevelCurve, LevelsViewData, RenderTheme } from './viewData';
+import type { LevelCrossing, LevelCurve, LevelsViewData, RenderTheme } from './viewData';
 
 const LABEL_SPACING = 13;
 /** Long enough for a whole term's high-field label |m_L, m_S, m_I⟩ with fractions (26 characters). */
 const LABEL_MAX_CHARS = 28;
 const AXIS_X = 60;
 const MIN_PLOT_WIDTH = 320;
+const NOTE_LINE = 15;
 
 function trendStyle(t: Trend, pal: Palette): { colour: string; dash?: string } {
   if (t === 'rising') return { colour: pal.rising };
@@ -97,11 +102,16 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const markRows = layoutMarkRows(marks, AXIS_X + 180, width0 - 180, narrow);
   const rowCount = Math.max(1, ...markRows.map((r) => r + 1));
   const top = legendTop + legendSvg.height + 6 + rowCount * MARK_ROW;
+  // Manifolds far apart compared with their fans get bands of their own (a broken axis), unless the caller fixed the unit.
+  const bandList = d.energyUnitHz === undefined ? levelBands(d.curves, fields.length) : [];
+  const bands = bandList.length >= 2 ? placeBands(bandList, top, 480 - 56 - top, LABEL_SPACING).placed : undefined;
   // Tall enough that every state could have its own name in each lane.
-  const plotHeight = Math.max(480 - 56 - top, laneHeightFor(d.curves.length, LABEL_SPACING) + 8);
-  const height = top + plotHeight + 56;
+  const plotHeight = bands ? bands[bands.length - 1]!.bottom - top : Math.max(480 - 56 - top, laneHeightFor(d.curves.length, LABEL_SPACING) + 8);
   const box: PlotBox = { left: 0, right: 0, top, bottom: top + plotHeight };
   const y = scaleLinear().domain([e0, e1]).range([box.bottom, box.top]).nice();
+  // Each curve's energy scale: its band's, or the one axis.
+  const bandOf: (PlacedBand | undefined)[] = d.curves.map((_, i) => bands?.find((b) => b.band.curves.includes(i)));
+  const yOf = (i: number): Scale => bandOf[i]?.y ?? y;
 
   const rightName = (c: LevelCurve): string => (d.endsWeak ? c.lowLabel : c.highLabel);
   const endAnchors = (side: 'low' | 'high'): LabelAnchor[] =>
@@ -113,27 +123,41 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
       const ok = k >= 0 && k < n;
       // Coincident ends fan out in the order their curves take a little way in, so leaders do not cross.
       const along = Math.min(n - 1, Math.max(0, k + step * Math.max(1, Math.round(n / 25))));
-      return { index, y: ok ? y(c.energyHz[k]) : NaN, tie: y(c.energyHz[along]), label: side === 'low' ? c.lowLabel : rightName(c) };
+      const yc = yOf(index);
+      return { index, y: ok ? yc(c.energyHz[k]) : NaN, tie: yc(c.energyHz[along]), label: side === 'low' ? c.lowLabel : rightName(c) };
     });
-  const lowAnchors = endAnchors('low');
-  const highAnchors = endAnchors('high');
-  const lowLabels = placeLabels(lowAnchors, box.top + 4, box.bottom - 2, LABEL_SPACING, LABEL_MAX_CHARS);
-  const highLabels = placeLabels(highAnchors, box.top + 4, box.bottom - 2, LABEL_SPACING, LABEL_MAX_CHARS);
+  // On a broken axis each band's names stay in its own stretch of the lane.
+  const lane = (anchors: LabelAnchor[]): PlacedLabel[] =>
+    bands
+      ? bands.flatMap((b) => placeLabels(anchors.filter((a) => bandOf[a.index] === b), b.top + 4, b.bottom - 2, LABEL_SPACING, LABEL_MAX_CHARS))
+      : placeLabels(anchors, box.top + 4, box.bottom - 2, LABEL_SPACING, LABEL_MAX_CHARS);
+  const lowLabels = lane(endAnchors('low'));
+  const highLabels = lane(endAnchors('high'));
   const leftLane = laneWidth(lowLabels);
   const rightLane = laneWidth(highLabels);
   const width = Math.max(width0, AXIS_X + leftLane + MIN_PLOT_WIDTH + rightLane + 12);
   box.left = AXIS_X + leftLane;
   box.right = width - 12 - rightLane;
   const x = scaleLinear().domain([f0, f1]).range([box.left, box.right]);
+  // A broken axis says so, and how far apart its bands are, in a note under the field axis.
+  const note = bands ? bandNote(bands) : undefined;
+  const noteLines = note !== undefined ? wrapNote(note, width - 32) : [];
+  const height = top + plotHeight + 56 + noteLines.length * NOTE_LINE;
   const rows = layoutMarkRows(marks, box.left, box.right, x).map((r) => Math.min(r, rowCount - 1));
 
   const body: string[] = [legendSvg.svg];
   body.push(bottomAxis(x, fUnit, 'B', box, pal));
-  // Ticks count from a round offset when absolute energies would need long labels (a whole term in THz).
-  const [yLo, yHi] = y.domain() as [number, number];
-  const eAxis = d.energyUnitHz !== undefined ? { offset: 0, unit: eUnit, name: 'E/h' } : axisOffset(yLo, yHi, Math.max(2, Math.round(plotHeight / 55)), 'E/h', 'Hz');
-  const yShown = eAxis.offset === 0 ? y : y.copy().domain([yLo - eAxis.offset, yHi - eAxis.offset]);
-  body.push(leftAxis(yShown, eAxis.unit, eAxis.name, box, AXIS_X, pal));
+  if (bands) {
+    body.push(bandAxes(bands, box, AXIS_X, pal));
+    const noteSpans = noteLines.map((l, k) => el('tspan', { x: 16, dy: k === 0 ? undefined : NOTE_LINE }, text(l)));
+    body.push(el('text', { class: 'sl-band-note', x: 16, y: box.bottom + 58, 'font-size': 11, fill: pal.muted }, noteSpans));
+  } else {
+    // Ticks count from a round offset when absolute energies would need long labels (a whole term in THz).
+    const [yLo, yHi] = y.domain() as [number, number];
+    const eAxis = d.energyUnitHz !== undefined ? { offset: 0, unit: eUnit, name: 'E/h' } : axisOffset(yLo, yHi, Math.max(2, Math.round(plotHeight / 55)), 'E/h', 'Hz');
+    const yShown = eAxis.offset === 0 ? y : y.copy().domain([yLo - eAxis.offset, yHi - eAxis.offset]);
+    body.push(leftAxis(yShown, eAxis.unit, eAxis.name, box, AXIS_X, pal));
+  }
 
   // Curves.
   const interactive = theme.kind === 'panel';
@@ -141,7 +165,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   d.curves.forEach((c, i) => {
     const segments = runs[i].map((r) => {
       const idx = Array.from({ length: r.to - r.from + 1 }, (_, k) => r.from + k);
-      const path = line<number>().x((k) => x(fields[k])).y((k) => y(c.energyHz[k])).digits(2)(idx) ?? '';
+      const path = line<number>().x((k) => x(fields[k])).y((k) => yOf(i)(c.energyHz[k])).digits(2)(idx) ?? '';
       const style = trendStyle(r.trend, pal);
       return { r, path, style };
     }).filter((g) => g.path);
@@ -244,7 +268,16 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
     );
   body.push(labelGroup(lowLabels, 'low'), labelGroup(highLabels, 'high'));
 
-  // Crossings.
+  // Crossings: in the band of their states (manifolds that meet share a band); else where their energy lies.
+  const holds = (b: PlacedBand, e: number): boolean => {
+    const [lo, hi] = b.y.domain() as [number, number];
+    return e >= lo && e <= hi;
+  };
+  const crossingY = (c: LevelCrossing): number => {
+    const i = d.curves.findIndex((k) => k.lowLabel === c.a);
+    const scale = i >= 0 ? yOf(i) : (bands?.find((b) => holds(b, c.energyHz))?.y ?? y);
+    return scale(c.energyHz);
+  };
   if (crossings.length > 0) {
     body.push(
       el(
@@ -264,7 +297,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
             },
             [
               titleEl(`Crossing of ${c.a} and ${c.b} at B = ${formatIn(c.fieldT, fUnit)}, E/h = ${formatSI(c.energyHz, 'Hz')}`),
-              el('path', { d: markerPath('diamond', x(c.fieldT), y(c.energyHz), 4.5), fill: pal.halo, stroke: pal.text, 'stroke-width': 1.3 }),
+              el('path', { d: markerPath('diamond', x(c.fieldT), crossingY(c), 4.5), fill: pal.halo, stroke: pal.text, 'stroke-width': 1.3 }),
             ],
           ),
         ),
@@ -326,7 +359,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
         },
         [
           titleEl(lines.join('; ')),
-          el('path', { d: markerPath('circle', mx, y(e), 3.2), fill: trendStyle(trends[i], pal).colour, stroke: pal.halo, 'stroke-width': 1 }),
+          el('path', { d: markerPath('circle', mx, yOf(i)(e), 3.2), fill: trendStyle(trends[i], pal).colour, stroke: pal.halo, 'stroke-width': 1 }),
         ],
       );
     });
@@ -344,6 +377,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   if (marks.length > 0) descParts.push(`named fields marked: ${marks.map((m) => m.text).join(', ')}`);
   const outside = (d.fieldMarks ?? []).filter((m) => !inSweep(m.fieldT));
   if (outside.length > 0) descParts.push(`outside the sweep: ${outside.map((m) => `${m.label} ${m.valueText !== undefined ? figureMinus(m.valueText) : formatIn(m.fieldT, fUnit)}`).join(', ')}`);
+  if (note !== undefined) descParts.push(note.replace(/\.$/, ''));
 
   return svgDocument(
     {
@@ -360,7 +394,8 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
         'data-x-factor': dataNum(fUnit.factor),
         'data-x-domain': `${dataNum(f0)},${dataNum(f1)}`,
         'data-x-range': `${px(box.left)},${px(box.right)}`,
-        'data-y-domain': `${dataNum(y.domain()[0])},${dataNum(y.domain()[1])}`,
+        // A broken axis has no one energy scale: each band group carries its own.
+        ...(bands ? { 'data-y-bands': String(bands.length) } : { 'data-y-domain': `${dataNum(y.domain()[0])},${dataNum(y.domain()[1])}` }),
         'data-y-range': `${px(box.bottom)},${px(box.top)}`,
       },
     },

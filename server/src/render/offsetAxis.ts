@@ -18,15 +18,18 @@ export interface AxisOffset {
   name: string;
 }
 
-/** The display of values in [lo, hi] (SI `base` unit) on an axis with about `ticks` ticks. */
-export function axisOffset(lo: number, hi: number, ticks: number, name: string, base: string): AxisOffset {
+/**
+ * The display of values in [lo, hi] (SI `base` unit) on an axis with about `ticks` ticks, offset
+ * when tick labels would need more than `maxDigits` significant digits.
+ */
+export function axisOffset(lo: number, hi: number, ticks: number, name: string, base: string, maxDigits = MAX_TICK_DIGITS): AxisOffset {
   const maxAbs = Math.max(Math.abs(lo), Math.abs(hi));
   const span = hi - lo;
   const plain = { offset: 0, unit: engineeringUnit(maxAbs, base), name };
   if (!(span > 0) || !Number.isFinite(span) || !(maxAbs > 0)) return plain;
   const step = span / Math.max(1, ticks);
   const digits = Math.floor(Math.log10(maxAbs)) - Math.floor(Math.log10(step)) + 1;
-  if (digits <= MAX_TICK_DIGITS) return plain;
+  if (digits <= maxDigits) return plain;
   // A round value at the decade of the spread, so the offset itself reads with few digits.
   const decade = 10 ** Math.floor(Math.log10(span));
   const offset = Math.round((lo + hi) / 2 / decade) * decade;

@@ -4,7 +4,7 @@
  */
 import { format } from 'd3-format';
 import { prefixedText, trimNumber } from '../eval/quantityText';
-import type { FieldUnit } from './viewData';
+import { FIELD_UNIT_TESLA, type FieldUnit } from './fieldUnits';
 
 export interface DisplayUnit {
   /** SI value ÷ factor = displayed number. */
@@ -39,18 +39,7 @@ export function frequencyUnit(maxAbsHz: number, givenHz?: number): DisplayUnit {
 }
 
 export function fieldDisplayUnit(unit: FieldUnit): DisplayUnit {
-  switch (unit) {
-    case 'G':
-      return { factor: 1e-4, symbol: 'G' };
-    case 'mT':
-      return { factor: 1e-3, symbol: 'mT' };
-    case 'µT':
-      return { factor: 1e-6, symbol: 'µT' };
-    case 'nT':
-      return { factor: 1e-9, symbol: 'nT' };
-    default:
-      return { factor: 1, symbol: 'T' };
-  }
+  return { factor: FIELD_UNIT_TESLA[unit] ?? 1, symbol: unit in FIELD_UNIT_TESLA ? unit : 'T' };
 }
 
 /** Figures set numbers with the true minus sign (U+2212); the numbers themselves come from the one formatter. */

@@ -4,8 +4,9 @@
  * Energies are E/h in Hz, fields in tesla, positions in metres, moments in J/T.
  */
 
-/** Units a field axis reads in: the tesla family down to nT (a magnetometer's fields), and gauss. */
-export type FieldUnit = 'T' | 'G' | 'mT' | 'µT' | 'nT';
+/** Units a field axis reads in: the tesla family down to nT (a magnetometer's fields), and gauss (fieldUnits.ts). */
+import type { FieldUnit } from './fieldUnits';
+export type { FieldUnit };
 
 /** A named field of the file on a field axis. */
 export interface NamedFieldMark {
@@ -25,6 +26,11 @@ export interface LevelCurve {
   energyHz: ArrayLike<number>;
   /** Magnetic moment −∂E/∂B in J/T at each entry of `fieldsT`, when known. */
   momentJT?: ArrayLike<number>;
+  /**
+   * The manifold the state belongs to at low field ("F=2", "J=3/2, F=3", "J=3/2"). When every
+   * curve has one, manifolds far apart compared with their spread get bands of their own (levelBands.ts).
+   */
+  manifold?: string;
 }
 
 export interface LevelCrossing {

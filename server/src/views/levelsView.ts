@@ -64,6 +64,7 @@ export function levelsView(
       highLabel: s.high.text,
       energyHz: s.energyHz,
       momentJT: s.momentJT,
+      manifold: manifoldOf(s.low.text),
     })),
     // A range that ends in the weak regime (a magnetometer's µT) has no high-field names to give yet.
     ...(regime(spec, upper).verdict === 'weak field (linear)' ? { endsWeak: true } : {}),
@@ -81,6 +82,11 @@ export function levelsView(
   }
   if (options.fieldMarks) data.fieldMarks = options.fieldMarks.map(namedFieldMark);
   return { data, sweep };
+}
+
+/** The low-field label without its magnetic quantum numbers: "J=3/2, F=2, m_F=+1" → "J=3/2, F=2". */
+export function manifoldOf(lowLabel: string): string {
+  return lowLabel.split(', ').filter((part) => !part.startsWith('m_')).join(', ');
 }
 
 /** The field as the file wrote it (`1 nT`), or undefined when the file gave no unit to echo. */
