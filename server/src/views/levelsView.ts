@@ -20,15 +20,32 @@ export interface LevelsView {
   sweep: SweepResult;
 }
 
-/** Upper end of the plotted field range: well past x = 1 and past the working field. */
-export function levelsViewRangeT(spec: LevelSpec, marker: number | undefined): number {
-  const r = regime(spec, marker ?? 1e-4);
+/**
+ * A file whose largest field is below this fraction of the change of regime works in the weak
+ * field (a bias of a few gauss, a magnetometer's µT): the whole Breit–Rabi sweep would press its
+ * fields against the left edge, so the range is drawn around them instead (own display rule).
+ */
+export const WEAK_WORK_FRACTION = 0.1;
+
+/**
+ * Upper end of the plotted field range. Files working in the weak field: twice their largest
+ * field, so its sublevels sit mid-figure. Otherwise: well past x = 1 and past the largest field.
+ */
+export function levelsViewRangeT(spec: LevelSpec, largestFieldT: number | undefined): number {
+  const r = regime(spec, largestFieldT ?? 1e-4);
   const spread = r.zeroFieldSpreadHz;
   const gDiff = spec.kind === 'hyperfine' ? Math.abs(spec.gJ - spec.gI) : Math.abs(spec.gS - spec.gL);
   const crossover = spread > 0 ? spread / (Math.max(gDiff, 1e-3) * BOHR_MAGNETON_HZ_PER_T) : 0;
-  const fromMarker = marker !== undefined ? Math.abs(marker) * 1.25 : 0;
-  const upper = Math.max(fromMarker, 3 * crossover);
+  const largest = largestFieldT !== undefined ? Math.abs(largestFieldT) : 0;
+  if (largest > 0 && largest < WEAK_WORK_FRACTION * crossover) return 2 * largest;
+  const upper = Math.max(largest * 1.25, 3 * crossover);
   return upper > 0 ? upper : 1;
+}
+
+/** The largest magnitude among the working field and the file's named fields (undefined: none written). */
+function largestFieldT(marker: WorkingField | undefined, marks: WorkingField[] | undefined): number | undefined {
+  const all = [...(marker ? [marker] : []), ...(marks ?? [])].map((f) => Math.abs(f.tesla)).filter((t) => Number.isFinite(t));
+  return all.length > 0 ? Math.max(...all) : undefined;
 }
 
 /** What the caller may choose: the field range and the unit of the field axis (the CLI's --from/--to/--unit, the panel's range control). */
@@ -50,7 +67,7 @@ export function levelsView(
   const spec = engineSpec(level, gJ, settings);
   if (!spec) return undefined;
   const lower = options.fromT ?? 0;
-  const upper = options.toT ?? Math.max(levelsViewRangeT(spec, marker?.tesla), lower > 0 ? lower * 2 : 0);
+  const upper = options.toT ?? Math.max(levelsViewRangeT(spec, largestFieldT(marker, options.fieldMarks)), lower > 0 ? lower * 2 : 0);
   if (!(upper > lower)) return undefined;
   const sweep = sweepLevel(spec, lower, upper, LEVELS_VIEW_POINTS);
   if (sweep.issues.some((i) => i.severity === 'error')) return undefined;
