@@ -52,7 +52,7 @@ describe('options', () => {
     [['eval', RB, '--format'], /--format needs a value/],
     [['eval', RB, '--format='], /--format needs a value/],
     [['eval', RB, '--help=yes'], /--help takes no value/],
-    [['check', '--format', 'xml', RB], /--format must be text or json or sarif, got 'xml'/],
+    [['check', '--format', 'xml', RB], /--format must be text, json or sarif, got 'xml'/],
     [['chekc', RB], /unknown command 'chekc' — did you mean 'check'\?/],
     [['--format', 'json', 'check', RB], /a command comes first/],
   ])('%j is a one-line usage error with a hint, not the whole usage text', (argv, message) => {

@@ -8,7 +8,7 @@ import { csvNumberTableText, type CsvNumberTable, stateTable } from '../render/c
 import { csvTablePieces } from './csvTablePieces';
 import { sweepEnergyUnc } from '../eval/uncertainty/sweepPass';
 import { engineSpec } from '../eval/levelSpec';
-import { suggestNames } from '../format/didYouMean';
+import { selectLevel } from './selectors';
 import { type EngineIssue, sweepLevel, type SweepResult } from '../physics/engine';
 import type { Problem, Range } from '../format/ast';
 import type { LevelModel, SetupModel } from '../model/types';
@@ -124,8 +124,7 @@ function findLevel(file: string, model: SetupModel, name: string | undefined): L
   const matches = all.filter((l) => l.name === name || qualified(l) === name);
   if (matches.length === 1) return matches[0]!;
   if (matches.length > 1) throw new UsageError(`level '${name}' is in several species; write one of ${matches.map(qualified).join(', ')}`);
-  const hint = suggestNames(name, all.map((l) => l.name));
-  throw new UsageError(`no level named '${name}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : ''}`);
+  return selectLevel(model, name); // no such level: the message every command gives (did you mean, or the file's levels)
 }
 
 /** CSV in the project's convention (docs/csv.md): field_T, energies and moments of every state, states in the documented order. */
