@@ -153,7 +153,7 @@ export function fieldText(names: string[], plan: FieldPointPlan, rows: readonly 
     return out;
   }
   const what = plan.kind === 'line' ? `along ${pos(plan.from)} → ${pos(plan.to)}, ${rows.length} points` : `on a ${plan.counts[0]} × ${plan.counts[1]} grid`;
-  const header = [`x (${len.symbol})`, `y (${len.symbol})`, `z (${len.symbol})`, `B_x (${u.field.name})`, `B_y`, `B_z`, `|B|`, `∂|B|/∂x (${u.gradient.name})`, '∂|B|/∂y', '∂|B|/∂z'];
+  const header = [`x (${len.symbol})`, `y (${len.symbol})`, `z (${len.symbol})`, ...['B_x', 'B_y', 'B_z', '|B|'].map((c) => `${c} (${u.field.name})`), ...['x', 'y', 'z'].map((c) => `∂|B|/∂${c} (${u.gradient.name})`)];
   const body = rows.map((r) => {
     const p = r.point.map((c) => trimNumber(c / len.metres, 6, { scale: 1, relative: 1e-12 }));
     if (!r.sample) return [...p, 'on a conductor', '', '', '', '', '', ''];

@@ -36,7 +36,7 @@ export const sweepSpec: CommandSpec = {
     from: { value: 'FIELD', help: 'first field, e.g. 0 or -50G (default 0)' },
     to: { value: 'FIELD', help: 'last field, e.g. 0.1T or "500 G" (required)' },
     points: { value: 'N', help: `number of fields, a whole number from 2 to ${MAX_CLI_POINTS} in decimal digits (default 2001)` },
-    format: { value: 'FORMAT', choices: FORMATS, help: 'csv: field_T, then energy and moment columns per state (default; docs/csv.md); json' },
+    format: { value: 'FORMAT', choices: FORMATS, help: 'csv: field_T, then energy and moment columns per state (default; docs/csv.md); json: field_T and, per state, its labels, m, energy_Hz and moment_J_per_T (and the crossings with --crossings)' },
     crossings: { help: 'also find where sublevels of different m cross (listed in the JSON; the sweep then takes about 2.5× as long)' },
     ...OUT_OPTION,
   },
