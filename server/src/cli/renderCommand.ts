@@ -36,9 +36,9 @@ export const renderSpec: CommandSpec = {
     source: { value: 'NAMES', help: 'the field sources to draw (fieldmap view), comma-separated; default: all' },
     scale: { value: 'SCALE', choices: ['auto', 'linear', 'log'], help: 'the |B| axis of the fieldmap view: log when the field spans orders of magnitude (auto, the default), or as asked' },
     slower: { value: 'NAME', help: 'the slower (slower view); default: the first one' },
-    from: { value: 'FIELD', help: 'start of the field axis (levels and resonance views), e.g. 0 or 10G' },
-    to: { value: 'FIELD', help: 'end of the field axis, e.g. 50G or 0.1T' },
-    unit: { value: 'UNIT', choices: FIELD_UNITS, help: 'unit of the field axis: G, mT, uT (or µT), nT or T' },
+    from: { value: 'FIELD', help: 'start of the field axis (levels view), e.g. 0 or 10G; the resonance view spans the block\'s own `range`' },
+    to: { value: 'FIELD', help: 'end of the field axis (levels view), e.g. 50G or 0.1T' },
+    unit: { value: 'UNIT', choices: FIELD_UNITS, help: 'unit of the field axis (levels view) or of |B| (fieldmap view): G, mT, uT (or µT), nT or T' },
     format: { value: 'FORMAT', choices: FORMATS, help: 'svg (default), csv, or png (needs --out and the system Chromium)' },
     ...OUT_OPTION,
   },
@@ -61,6 +61,7 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   const req: DiagramRequest = { view, theme: 'export', source: file };
   const fromText = stringOption(args, 'from');
   const toText = stringOption(args, 'to');
+  refuseAxisOptions(view, fromText !== undefined || toText !== undefined, args.options.has('unit'));
   if (fromText !== undefined) req.fromT = readFieldOption('from', fromText);
   if (toText !== undefined) req.toT = readFieldOption('to', toText);
   if (req.fromT !== undefined && req.toT !== undefined && !(req.toT > req.fromT)) throw new UsageError('--to must be a larger field than --from');
@@ -103,4 +104,16 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
     ctx.io.err(`wrote the ${view} diagram${format === 'csv' ? ' data' : ''} to ${out}`);
   } else ctx.io.out(text);
   return reportErrors(file, analysis, ctx) > 0 ? 1 : 0;
+}
+
+/** --from, --to and --unit act on some views only; given to another they would be ignored without a word. */
+function refuseAxisOptions(view: DiagramView, range: boolean, unit: boolean): void {
+  if (range && view !== 'levels') {
+    const instead = view === 'resonance' ? "the resonance view spans the resonance block's own `range` (e.g. `range = 0 G, 10 G`)" : `the ${view} view has no field range to set from the command line`;
+    throw new UsageError(`--from and --to set the field axis of the levels view; ${instead}`);
+  }
+  if (unit && view !== 'levels' && view !== 'fieldmap') {
+    const instead = view === 'resonance' ? "the resonance view takes the unit of the resonance block's `range`" : `the ${view} view chooses its own units`;
+    throw new UsageError(`--unit sets the field unit of the levels and fieldmap views; ${instead}`);
+  }
 }
