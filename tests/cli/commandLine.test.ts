@@ -156,7 +156,7 @@ describe('exit codes and file problems', () => {
 
   it('naming something the file does not have stays a usage error (exit 2)', () => {
     expect(cli('profile', LI, '--beam', 'nope').code).toBe(2);
-    expect(cli('render', LI, '--line', 'nope').code).toBe(2);
+    expect(cli('render', LI, '--view', 'lines', '--line', 'nope').code).toBe(2);
   });
 
   it('the README states the same exit codes as --help', () => {

@@ -15,6 +15,7 @@ import { readFieldOption } from './fieldOption';
 import type { FieldUnit } from '../render';
 import { displayUnit } from '../eval/unitSpelling';
 import { selectBeam, selectField, selectLevel, selectName, selectSources } from './selectors';
+import { refuseOptionsOfOtherViews } from './renderViewOptions';
 
 export const RENDER_VIEWS = DIAGRAM_VIEWS;
 const FORMATS = ['svg', 'csv', 'png'] as const;
@@ -61,7 +62,7 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   const req: DiagramRequest = { view, theme: 'export', source: file };
   const fromText = stringOption(args, 'from');
   const toText = stringOption(args, 'to');
-  refuseAxisOptions(view, fromText !== undefined || toText !== undefined, args.options.has('unit'));
+  refuseOptionsOfOtherViews(view, args);
   if (fromText !== undefined) req.fromT = readFieldOption('from', fromText);
   if (toText !== undefined) req.toT = readFieldOption('to', toText);
   if (req.fromT !== undefined && req.toT !== undefined && !(req.toT > req.fromT)) throw new UsageError('--to must be a larger field than --from');
@@ -106,14 +107,3 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   return reportErrors(file, analysis, ctx) > 0 ? 1 : 0;
 }
 
-/** --from, --to and --unit act on some views only; given to another they would be ignored without a word. */
-function refuseAxisOptions(view: DiagramView, range: boolean, unit: boolean): void {
-  if (range && view !== 'levels') {
-    const instead = view === 'resonance' ? "the resonance view spans the resonance block's own `range` (e.g. `range = 0 G, 10 G`)" : `the ${view} view has no field range to set from the command line`;
-    throw new UsageError(`--from and --to set the field axis of the levels view; ${instead}`);
-  }
-  if (unit && view !== 'levels' && view !== 'fieldmap') {
-    const instead = view === 'resonance' ? "the resonance view takes the unit of the resonance block's `range`" : `the ${view} view chooses its own units`;
-    throw new UsageError(`--unit sets the field unit of the levels and fieldmap views; ${instead}`);
-  }
-}
