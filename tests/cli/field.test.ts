@@ -113,6 +113,7 @@ describe('sublevel field: mistakes', () => {
     [['--at', '0,0,1'], /'1' needs a length unit/],
     [['--source', 'qaud', '--at', '0,0,0'], /no source named 'qaud' — did you mean 'quad'\?/],
     [['--along', '0,0,0:0,0,1cm', '--grid', 'x=0:1cm,y=0:1cm'], /one of --along or --grid/],
+    [['--at', '0,0,0', '--unit', 'G', '--format', 'csv'], /--unit sets the unit of the text output; --format csv is always in SI units/],
     [[], /say where/],
   ])('%j is a usage error (exit 2)', (args, message) => {
     const r = cli('field', FILE, ...args);

@@ -61,6 +61,7 @@ export function runField(args: ParsedArgs, ctx: CliContext): number {
   const file = args.positionals[0]!;
   const format = stringOption(args, 'format', FORMATS) ?? 'text';
   const unitChoice = stringOption(args, 'unit', UNITS) as FieldUnitName | undefined;
+  if (unitChoice !== undefined && format !== 'text') throw new UsageError(`--unit sets the unit of the text output; --format ${format} is always in SI units (T, T/m)`);
   const plan = fieldPointPlan({ at: stringOption(args, 'at'), along: stringOption(args, 'along'), grid: stringOption(args, 'grid'), points: stringOption(args, 'points') });
   const out = stringOption(args, 'out');
 
