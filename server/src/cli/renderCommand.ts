@@ -29,7 +29,7 @@ export const renderSpec: CommandSpec = {
     ...ROOT_OPTION,
     view: { value: 'VIEW', choices: RENDER_VIEWS, help: 'levels: sublevel energies against field (default); pattern: detector pattern; lines: line components; resonance: a transition frequency against field; residuals: a fit\'s data, model and residuals; fieldmap: |B| along a line through the field sources, the sources drawn beside it; slower: a slower\'s field profile and speeds along it' },
     level: { value: 'NAME', help: 'the level to draw (levels view); default: the first beam\'s level, else the first level' },
-    field: { value: 'NAME', help: 'the field or magnet to mark; default: the first one' },
+    field: { value: 'NAME', help: 'the field or magnet to mark (levels view) or to compute the line at (lines view); default: the first one' },
     beam: { value: 'NAME', help: 'the beam (pattern view), when the file has more than one' },
     line: { value: 'NAME', help: 'the line (lines view); default: the first one' },
     resonance: { value: 'NAME', help: 'the resonance (resonance view); default: the first one' },
@@ -106,4 +106,3 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   } else ctx.io.out(text);
   return reportErrors(file, analysis, ctx) > 0 ? 1 : 0;
 }
-
