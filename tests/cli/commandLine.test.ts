@@ -21,8 +21,23 @@ describe('help and version', () => {
       expect(r.code).toBe(0);
       expect(r.out.split('\n')[0]).toMatch(new RegExp(`^usage: sublevel ${command} `));
       expect(r.out).toContain('-h, --help');
-      expect(r.out).toContain(EXIT_CODES_TEXT);
+      expect(r.out).toMatch(/\nexit codes: 0 no errors \(warnings and notes allowed(; see --fail-on)?\), 1 an error in a setup file/);
     }
+  });
+
+  it('each help page gives only its own exit codes: --fail-on, --out and diff(1) codes where they apply', () => {
+    const last = (...argv: string[]) => cli(...argv).out.trimEnd().split('\n').pop();
+    expect(last('check', '--help')).toBe('exit codes: 0 no errors (warnings and notes allowed; see --fail-on), 1 an error in a setup file or a file that cannot be read, 2 usage error, 3 internal error');
+    expect(last('sweep', '--help')).toBe('exit codes: 0 no errors (warnings and notes allowed), 1 an error in a setup file or a file that cannot be read, 2 usage error or --out not written, 3 internal error');
+    expect(last('diff', '--help')).toBe('exit codes: 0 no physical change, 1 changes, 2 usage error or a file that cannot be read, 3 internal error');
+    expect(cli('--help').out).toContain(EXIT_CODES_TEXT);
+  });
+
+  it('--root says it bounds data CSV files as well as used setups, and folders only where a command takes them', () => {
+    const root = (command: string) => cli(command, '--help').out.split('\n').find((l) => l.trimStart().startsWith('--root'));
+    expect(root('fit')).toContain('used .sublevel files and data .csv files');
+    expect(root('fit')).not.toContain('folder named on the command line');
+    expect(root('check')).toContain('the folder named on the command line');
   });
 
   it('a command\'s help lists each of its options, and help works after other words too', () => {
@@ -52,7 +67,11 @@ describe('options', () => {
     [['eval', RB, '--format'], /--format needs a value/],
     [['eval', RB, '--format='], /--format needs a value/],
     [['eval', RB, '--help=yes'], /--help takes no value/],
-    [['check', '--format', 'xml', RB], /--format must be text or json or sarif, got 'xml'/],
+    [['check', '--format', 'xml', RB], /--format must be text, json or sarif, got 'xml'/],
+    [['render', RB, '--unit', 'Gauss'], /--unit must be G, mT, uT, µT, nT or T, got 'Gauss'$/m],
+    [['sweep', RB, '--to', '1G', '--level', 'zzz'], /no level named 'zzz'; the file has 'Rb87\.ground', 'Rb87\.p32'$/m],
+    [['sweep', RB, '--to', '1G', '--level', 'groud'], /no level named 'groud' — did you mean 'ground'\?$/m],
+    [['profile', LI, '--beam', 'xyz'], /no beam named 'xyz'; the file has 'main'$/m],
     [['chekc', RB], /unknown command 'chekc' — did you mean 'check'\?/],
     [['--format', 'json', 'check', RB], /a command comes first/],
   ])('%j is a one-line usage error with a hint, not the whole usage text', (argv, message) => {
@@ -137,7 +156,7 @@ describe('exit codes and file problems', () => {
 
   it('naming something the file does not have stays a usage error (exit 2)', () => {
     expect(cli('profile', LI, '--beam', 'nope').code).toBe(2);
-    expect(cli('render', LI, '--line', 'nope').code).toBe(2);
+    expect(cli('render', LI, '--view', 'lines', '--line', 'nope').code).toBe(2);
   });
 
   it('the README states the same exit codes as --help', () => {

@@ -56,7 +56,7 @@ describe('CLI usage errors exit with 2', () => {
   it.each([
     [['frobnicate'], /unknown command 'frobnicate'/],
     [['check'], /at least one file/],
-    [['eval', 'examples/rubidium-bias.sublevel', '--format', 'xml'], /--format must be text or json or jsonl/],
+    [['eval', 'examples/rubidium-bias.sublevel', '--format', 'xml'], /--format must be text, json or jsonl/],
     [['eval', 'examples/rubidium-bias.sublevel', '--bogus'], /eval has no option --bogus/],
     [['eval'], /eval needs a setup file \(or several, or a folder, or --files-from\)/],
   ])('%j', (argv, message) => {

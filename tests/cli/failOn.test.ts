@@ -21,7 +21,7 @@ describe('check --fail-on', () => {
   it('refuses an unknown level as a usage error', () => {
     const r = cli('check', CLEAN, '--fail-on', 'hint');
     expect(r.code).toBe(2);
-    expect(r.err).toContain("--fail-on must be error or warning or info, got 'hint'");
+    expect(r.err).toContain("--fail-on must be error, warning or info, got 'hint'");
   });
 });
 

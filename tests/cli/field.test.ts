@@ -99,6 +99,8 @@ describe('sublevel field: formats', () => {
     const text = cli('field', FILE, '--source', 'quad', '--along', '0,0,-1cm:0,0,1cm', '--points', '3').out.split('\n');
     expect(text[0]).toBe('field of quad along (0, 0, -1) cm → (0, 0, 1) cm, 3 points:');
     expect(text[1]).toMatch(/^x \(cm\) +y \(cm\) +z \(cm\) /);
+    // Every field and gradient column names its unit, as the position columns do.
+    expect(text[1]!.split(/ {2,}/).slice(3)).toEqual(['B_x (G)', 'B_y (G)', 'B_z (G)', '|B| (G)', '∂|B|/∂x (G/cm)', '∂|B|/∂y (G/cm)', '∂|B|/∂z (G/cm)']);
     // Units that differ between the ends: one unit by size for the whole table.
     expect(cli('field', FILE, '--source', 'quad', '--along', '0,0,-1cm:0,0,10mm', '--points', '3').out.split('\n')[0]).toBe('field of quad along (0, 0, -1) cm → (0, 0, 1) cm, 3 points:');
     expect(text).toHaveLength(1 + 2 + 3);
@@ -126,6 +128,7 @@ describe('sublevel field: mistakes', () => {
     [['--at', '0,0,1'], /'1' needs a length unit/],
     [['--source', 'qaud', '--at', '0,0,0'], /no source named 'qaud' — did you mean 'quad'\?/],
     [['--along', '0,0,0:0,0,1cm', '--grid', 'x=0:1cm,y=0:1cm'], /one of --along or --grid/],
+    [['--at', '0,0,0', '--unit', 'G', '--format', 'csv'], /--unit sets the unit of the text output; --format csv is always in SI units/],
     [[], /say where/],
   ])('%j is a usage error (exit 2)', (args, message) => {
     const r = cli('field', FILE, ...args);

@@ -39,6 +39,12 @@ describe('sublevel render options', () => {
     [['--to', '3 m'], /--to/],
     [['--view', 'resonance', '--resonance', 'clok'], /did you mean 'clock'/],
     [['--format', 'png'], /--out FILE.png/],
+    // An option of another view would be ignored without a word: the resonance view spans the block's own range.
+    [['--view', 'resonance', '--from', '-5 G', '--to', '5 G'], /--from acts on the levels view; the resonance view spans the resonance block's own `range`/],
+    [['--view', 'resonance', '--unit', 'mT'], /--unit acts on the levels and fieldmap views; the resonance view takes the unit of the resonance block's `range`/],
+    [['--view', 'lines', '--to', '5 G'], /--to acts on the levels view; the lines view does not use it/],
+    [['--view', 'levels', '--beam', 'b'], /--beam acts on the pattern view; the levels view does not use it/],
+    [['--view', 'lines', '--level', 'ground'], /--level acts on the levels view; the lines view does not use it/],
   ])('rejects %j with a usage error', (opts, message) => {
     const r = cli('render', RB, ...opts);
     expect(r.code).toBe(2);

@@ -108,6 +108,11 @@ export function stringOption(args: ParsedArgs, name: string, allowed?: readonly 
   const v = args.options.get(name);
   if (v === undefined) return undefined;
   if (v === true || v === '') throw new UsageError(`--${name} needs a value`);
-  if (allowed && !allowed.includes(v)) throw new UsageError(`--${name} must be ${allowed.join(' or ')}, got '${v}'`);
+  if (allowed && !allowed.includes(v)) throw new UsageError(`--${name} must be ${choiceList(allowed)}, got '${v}'`);
   return v;
+}
+
+/** `a, b or c`: a fixed set of values as a sentence says it. */
+export function choiceList(items: readonly string[]): string {
+  return items.length < 2 ? items.join('') : `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}`;
 }

@@ -14,7 +14,7 @@ import { type CommandSpec, type ParsedArgs, stringOption, UsageError } from './a
 import { withReaderProblems } from './analyzeFile';
 import { jsonText } from './escape';
 import { diagnosticLine } from './fileProblems';
-import { findSetupFiles, type FoundPath, ROOT_OPTION, rootOption } from './files';
+import { findSetupFiles, FOLDERS_ROOT_OPTION, type FoundPath, rootOption } from './files';
 import type { CliContext } from './io';
 import { readSetup } from './readSetup';
 import { sarifReport } from './sarif/sarifReport';
@@ -30,7 +30,7 @@ export const checkSpec: CommandSpec = {
     format: { value: 'FORMAT', choices: FORMATS, help: 'text: one file:line:col line per problem (default); json: one document; sarif: SARIF 2.1.0 for CI (docs/ci.md)' },
     ...FAIL_ON_OPTION,
     ...QUIET_OPTION,
-    ...ROOT_OPTION,
+    ...FOLDERS_ROOT_OPTION,
   },
   notes: [
     'SARIF paths are relative to --root if given, else to the git work tree holding the current folder, else to the current folder.',

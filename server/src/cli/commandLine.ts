@@ -1,7 +1,7 @@
 /**
  * Reading a `sublevel` command line against a set of commands: the version, the help pages, the
  * command's options, and the exit code and message of whatever goes wrong. Exit codes (the same
- * for every command, see EXIT_CODES_TEXT): 0 no errors, 1 an error in a setup file or a file
+ * for every command, see help.ts): 0 no errors, 1 an error in a setup file or a file
  * that cannot be read, 2 usage error or --out not written, 3 internal error. `diff` follows
  * diff(1): 1 means the setups differ, and a file it cannot read is 2 (see diffCommand.ts).
  */

@@ -11,7 +11,7 @@ import { toDiagnosticResult } from '../eval/evaluate';
 import { diagnosticLine } from './fileProblems';
 import { readPathList } from './filesFrom';
 import { lazyBuiltin } from './lazyBuiltin';
-import { findSetupFiles, type FoundPath, ROOT_OPTION, rootOption, SETUP_EXTENSION } from './files';
+import { findSetupFiles, FOLDERS_ROOT_OPTION, type FoundPath, rootOption, SETUP_EXTENSION } from './files';
 import { nodeFileSystem } from './fileSystem';
 import type { CliContext } from './io';
 import { createProgress } from './progress';
@@ -34,7 +34,7 @@ export const evalSpec: CommandSpec = {
     'files-from': { value: 'LIST', help: 'also evaluate the paths listed in LIST, one per line (- reads the list from stdin)' },
     jobs: { value: 'N', help: `worker threads for many files, 1 to ${MAX_JOBS} (default: one per core)` },
     ...FAIL_ON_OPTION,
-    ...ROOT_OPTION,
+    ...FOLDERS_ROOT_OPTION,
   },
   notes: [
     'Several files, a folder (searched for *.sublevel like check) or --files-from: each file is evaluated and printed in the order given;',

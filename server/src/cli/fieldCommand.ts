@@ -61,6 +61,7 @@ export function runField(args: ParsedArgs, ctx: CliContext): number {
   const format = stringOption(args, 'format', FORMATS) ?? 'text';
   const unitText = stringOption(args, 'unit', FIELD_UNIT_CHOICES);
   const unitChoice = unitText === undefined ? undefined : fieldUnitOf(unitText);
+  if (unitChoice !== undefined && format !== 'text') throw new UsageError(`--unit sets the unit of the text output; --format ${format} is always in SI units (T, T/m)`);
   const plan = fieldPointPlan({ at: stringOption(args, 'at'), along: stringOption(args, 'along'), grid: stringOption(args, 'grid'), points: stringOption(args, 'points') });
   const out = stringOption(args, 'out');
 
@@ -154,7 +155,7 @@ export function fieldText(names: string[], plan: FieldPointPlan, rows: readonly 
     return out;
   }
   const what = plan.kind === 'line' ? `along ${pos(plan.from)} → ${pos(plan.to)}, ${rows.length} points` : `on a ${plan.counts[0]} × ${plan.counts[1]} grid`;
-  const header = [`x (${len.symbol})`, `y (${len.symbol})`, `z (${len.symbol})`, `B_x (${u.field.name})`, `B_y`, `B_z`, `|B|`, `∂|B|/∂x (${u.gradient.name})`, '∂|B|/∂y', '∂|B|/∂z'];
+  const header = [`x (${len.symbol})`, `y (${len.symbol})`, `z (${len.symbol})`, ...['B_x', 'B_y', 'B_z', '|B|'].map((c) => `${c} (${u.field.name})`), ...['x', 'y', 'z'].map((c) => `∂|B|/∂${c} (${u.gradient.name})`)];
   const body = rows.map((r) => {
     const p = r.point.map((c) => trimNumber(c / len.metres, 6, { scale: 1, relative: 1e-12 }));
     if (!r.sample) return [...p, 'on a conductor', '', '', '', '', '', ''];

@@ -62,9 +62,14 @@ export const OUT_OPTION = {
   out: { value: 'FILE', help: 'write to FILE (atomically: the old file stays if writing fails) instead of stdout' },
 } as const;
 
-/** The option, shared by every command that reads a setup file. */
+/** The option, shared by every command that reads one setup file: `use` and data `file` both read below it. */
 export const ROOT_OPTION = {
-  root: { value: 'DIR', help: "the folder whose .sublevel files `use` may read (default: the file's own folder; for check <folder>, that folder)" },
+  root: { value: 'DIR', help: "the folder below which the setup may read other files: used .sublevel files and data .csv files (default: the setup file's own folder)" },
+} as const;
+
+/** The same for check and eval, which also take folders. */
+export const FOLDERS_ROOT_OPTION = {
+  root: { value: 'DIR', help: "the folder below which setups may read other files: used .sublevel files and data .csv files (default: the folder named on the command line, else the setup file's own folder)" },
 } as const;
 
 /**

@@ -1,7 +1,7 @@
 /** The readable report of `sublevel fit`: best values, χ², correlations, every root of a calibration, the residuals. */
 import type { FitResult } from '../eval/fitResultTypes';
 import { measuredText, parameterText, residualText, fittedText } from '../eval/fitText';
-import { sensitivityText, trimNumber } from '../eval/quantityText';
+import { lengthText, prefixedText, sensitivityText, trimNumber } from '../eval/quantityText';
 
 const STATUS: Record<FitResult['status'], string> = {
   converged: '',
@@ -35,7 +35,9 @@ export function fitReportLines(file: string, fits: readonly FitResult[]): string
     for (const p of f.points.slice(0, 200)) {
       const where = p.csv_line !== undefined ? `${p.data} csv line ${p.csv_line}` : `${p.data} line ${p.line + 1}`;
       const z = p.uncertainty && p.residual !== undefined ? `  (${trimNumber(p.residual / p.uncertainty, 3)} σ)` : '';
-      out.push(`    ${where.padEnd(24)} ${measuredText(p.measured, f.measured_unit, p.written_unit ?? f.measured_written_unit).padStart(18)}  ${residualText(p.residual, f.measured_unit, scale).padStart(12)}${z}`);
+      // Where the point was taken, so a residual pattern can be read without the CSV beside it.
+      const at = p.position_m !== undefined ? `  at ${lengthText(p.position_m)}` : p.field_T !== undefined ? `  at ${prefixedText(p.field_T, 'T')}` : '';
+      out.push(`    ${where.padEnd(24)} ${measuredText(p.measured, f.measured_unit, p.written_unit ?? f.measured_written_unit).padStart(18)}  ${residualText(p.residual, f.measured_unit, scale).padStart(12)}${z}${at}`);
     }
     if (f.points.length > 200) out.push(`    … ${f.points.length - 200} more (--format csv lists every point)`);
   }

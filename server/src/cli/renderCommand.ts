@@ -14,6 +14,7 @@ import { PNG_SCALE, svgToPng } from './pngExport';
 import { readFieldOption } from './fieldOption';
 import { FIELD_UNIT_CHOICES, fieldUnitOf } from '../render/fieldUnits';
 import { selectBeam, selectField, selectLevel, selectName, selectSources } from './selectors';
+import { refuseOptionsOfOtherViews } from './renderViewOptions';
 
 export const RENDER_VIEWS = DIAGRAM_VIEWS;
 const FORMATS = ['svg', 'csv', 'png'] as const;
@@ -26,7 +27,7 @@ export const renderSpec: CommandSpec = {
     ...ROOT_OPTION,
     view: { value: 'VIEW', choices: RENDER_VIEWS, help: 'levels: sublevel energies against field (default); pattern: detector pattern; lines: line components; resonance: a transition frequency against field; residuals: a fit\'s data, model and residuals; fieldmap: |B| along a line through the field sources, the sources drawn beside it; slower: a slower\'s field profile and speeds along it' },
     level: { value: 'NAME', help: 'the level to draw (levels view); default: the first beam\'s level, else the first level' },
-    field: { value: 'NAME', help: 'the field or magnet to mark; default: the first one' },
+    field: { value: 'NAME', help: 'the field or magnet to mark (levels view) or to compute the line at (lines view); default: the first one' },
     beam: { value: 'NAME', help: 'the beam (pattern view), when the file has more than one' },
     line: { value: 'NAME', help: 'the line (lines view); default: the first one' },
     resonance: { value: 'NAME', help: 'the resonance (resonance view); default: the first one' },
@@ -34,9 +35,9 @@ export const renderSpec: CommandSpec = {
     source: { value: 'NAMES', help: 'the field sources to draw (fieldmap view), comma-separated; default: all' },
     scale: { value: 'SCALE', choices: ['auto', 'linear', 'log'], help: 'the |B| axis of the fieldmap view: log when the field spans orders of magnitude (auto, the default), or as asked' },
     slower: { value: 'NAME', help: 'the slower (slower view); default: the first one' },
-    from: { value: 'FIELD', help: 'start of the field axis (levels and resonance views), e.g. 0 or 10G' },
-    to: { value: 'FIELD', help: 'end of the field axis, e.g. 50G or 0.1T' },
-    unit: { value: 'UNIT', choices: FIELD_UNIT_CHOICES, help: 'unit of the field axis: G, mT, uT (or µT), nT or T' },
+    from: { value: 'FIELD', help: 'start of the field axis (levels view), e.g. 0 or 10G; the resonance view spans the block\'s own `range`' },
+    to: { value: 'FIELD', help: 'end of the field axis (levels view), e.g. 50G or 0.1T' },
+    unit: { value: 'UNIT', choices: FIELD_UNIT_CHOICES, help: 'unit of the field axis (levels view) or of |B| (fieldmap view): G, mT, uT (or µT), nT or T' },
     format: { value: 'FORMAT', choices: FORMATS, help: 'svg (default), csv, or png (needs --out and the system Chromium)' },
     ...OUT_OPTION,
   },
@@ -59,6 +60,7 @@ export function runRender(args: ParsedArgs, ctx: CliContext): number {
   const req: DiagramRequest = { view, theme: 'export', source: file };
   const fromText = stringOption(args, 'from');
   const toText = stringOption(args, 'to');
+  refuseOptionsOfOtherViews(view, args);
   if (fromText !== undefined) req.fromT = readFieldOption('from', fromText);
   if (toText !== undefined) req.toT = readFieldOption('to', toText);
   if (req.fromT !== undefined && req.toT !== undefined && !(req.toT > req.fromT)) throw new UsageError('--to must be a larger field than --from');

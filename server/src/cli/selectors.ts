@@ -16,7 +16,15 @@ function pick<T>(kind: string, items: T[], nameOf: (t: T) => string[], wanted: s
   if (matches.length === 1) return matches[0]!;
   if (matches.length > 1) throw new UsageError(`${kind} '${wanted}' is ambiguous; write one of ${matches.map((m) => nameOf(m)[0]).join(', ')}`);
   const hint = suggestNames(wanted, items.flatMap(nameOf));
-  throw new UsageError(`no ${kind} named '${wanted}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : ''}`);
+  throw new UsageError(`no ${kind} named '${wanted}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : namesOnFile(kind, items.map((t) => nameOf(t)[0]!))}`);
+}
+
+/** With no near name to suggest, the names the file does have (a few), so the next try need not guess. */
+function namesOnFile(kind: string, names: string[]): string {
+  const SHOWN = 8;
+  if (names.length === 0) return `: the file has no ${kind}`;
+  const listed = names.slice(0, SHOWN).map((n) => `'${n}'`).join(', ');
+  return `; the file has ${listed}${names.length > SHOWN ? ` and ${names.length - SHOWN} more` : ''}`;
 }
 
 export function selectLevel(model: SetupModel, wanted: string): LevelModel {

@@ -23,7 +23,7 @@ export const slowerSpec: CommandSpec = {
   options: {
     ...ROOT_OPTION,
     slower: { value: 'NAME', help: 'the slower; default: the first one' },
-    format: { value: 'FORMAT', choices: FORMATS, help: 'text (default); json: the slower\u2019s result; csv: z_m, B_ideal_T, B_coils_T, resonant speed, needed deceleration, flight speed' },
+    format: { value: 'FORMAT', choices: FORMATS, help: 'text (default); json: the slower\u2019s result; csv: z_m, B_ideal_T, B_coils_T (when the slower lists sources), resonant_speed_m_per_s, needed_deceleration_m_per_s2, flight_speed_m_per_s' },
     ...OUT_OPTION,
   },
 };

@@ -8,7 +8,7 @@ import { csvNumberTableText, type CsvNumberTable, stateTable } from '../render/c
 import { csvTablePieces } from './csvTablePieces';
 import { sweepEnergyUnc } from '../eval/uncertainty/sweepPass';
 import { engineSpec } from '../eval/levelSpec';
-import { suggestNames } from '../format/didYouMean';
+import { selectLevel } from './selectors';
 import { type EngineIssue, sweepLevel, type SweepResult } from '../physics/engine';
 import type { Problem, Range } from '../format/ast';
 import type { LevelModel, SetupModel } from '../model/types';
@@ -36,7 +36,7 @@ export const sweepSpec: CommandSpec = {
     from: { value: 'FIELD', help: 'first field, e.g. 0 or -50G (default 0)' },
     to: { value: 'FIELD', help: 'last field, e.g. 0.1T or "500 G" (required)' },
     points: { value: 'N', help: `number of fields, a whole number from 2 to ${MAX_CLI_POINTS} in decimal digits (default 2001)` },
-    format: { value: 'FORMAT', choices: FORMATS, help: 'csv: field_T, then energy and moment columns per state (default; docs/csv.md); json' },
+    format: { value: 'FORMAT', choices: FORMATS, help: 'csv: field_T, then energy and moment columns per state (default; docs/csv.md); json: field_T and, per state, its labels, m, energy_Hz and moment_J_per_T (and the crossings with --crossings)' },
     crossings: { help: 'also find where sublevels of different m cross (listed in the JSON; the sweep then takes about 2.5× as long)' },
     ...OUT_OPTION,
   },
@@ -124,8 +124,7 @@ function findLevel(file: string, model: SetupModel, name: string | undefined): L
   const matches = all.filter((l) => l.name === name || qualified(l) === name);
   if (matches.length === 1) return matches[0]!;
   if (matches.length > 1) throw new UsageError(`level '${name}' is in several species; write one of ${matches.map(qualified).join(', ')}`);
-  const hint = suggestNames(name, all.map((l) => l.name));
-  throw new UsageError(`no level named '${name}'${hint.length ? ` — did you mean ${hint.map((h) => `'${h}'`).join(' or ')}?` : ''}`);
+  return selectLevel(model, name); // no such level: the message every command gives (did you mean, or the file's levels)
 }
 
 /** CSV in the project's convention (docs/csv.md): field_T, energies and moments of every state, states in the documented order. */
