@@ -296,7 +296,13 @@ function shapeSvg(sh: FieldMapShape, x: (s: number) => number, ty: (t: number) =
       const y0 = Math.min(ty(sh.t0), ty(sh.t1));
       const w = Math.max(2, Math.abs(x(sh.s1) - x(sh.s0)));
       const h = Math.max(2, Math.abs(ty(sh.t1) - ty(sh.t0)));
-      return el('rect', { x: x0, y: y0, width: w, height: h, fill: colour, 'fill-opacity': 0.25, stroke: colour }) + magnetisationMark(sh.magnetisation, x0 + w / 2, y0 + h / 2, Math.min(w, h), colour);
+      // The arrow follows the drawing's own scales (the across axis may be squeezed).
+      const m = sh.magnetisation;
+      const cs = (sh.s0 + sh.s1) / 2;
+      const ct = (sh.t0 + sh.t1) / 2;
+      const step = 1e-3 * Math.max(Math.abs(sh.s1 - sh.s0), Math.abs(sh.t1 - sh.t0));
+      const onPage = m && step > 0 ? { dx: x(cs + m.s * step) - x(cs), dy: ty(ct + m.t * step) - ty(ct) } : undefined;
+      return el('rect', { x: x0, y: y0, width: w, height: h, fill: colour, 'fill-opacity': 0.25, stroke: colour }) + magnetisationMark(m, onPage, x0 + w / 2, y0 + h / 2, Math.min(w, h), colour);
     }
     case 'ring': {
       const r = Math.abs(ty(sh.t + sh.r) - ty(sh.t));
@@ -310,17 +316,20 @@ function shapeSvg(sh: FieldMapShape, x: (s: number) => number, ty: (t: number) =
  * the block's smaller side, at least 8 px), or ⊙/⊗ where it points mostly at or away from the
  * reader; nothing for a block magnetised 0, which has no direction.
  */
-function magnetisationMark(m: { s: number; t: number; n: number } | undefined, cx: number, cy: number, size: number, colour: string): string {
+function magnetisationMark(m: { s: number; t: number; n: number } | undefined, onPage: { dx: number; dy: number } | undefined, cx: number, cy: number, size: number, colour: string): string {
   if (!m) return '';
   const inPlane = Math.hypot(m.s, m.t);
+  const pageLength = onPage ? Math.hypot(onPage.dx, onPage.dy) : 0;
   if (inPlane < Math.abs(m.n)) {
     const dot = m.n > 0 ? el('circle', { cx, cy, r: 1.6, fill: colour }) : el('path', { d: `M${px(cx - 3)},${px(cy - 3)}l6,6m0,-6l-6,6`, stroke: colour, 'stroke-width': 1.4 });
     return el('g', { class: 'sl-magnetisation', 'data-direction': m.n > 0 ? 'towards' : 'away' }, [el('circle', { cx, cy, r: 5, fill: 'none', stroke: colour, 'stroke-width': 1.6 }), dot]);
   }
-  // Up the page is +t; the arrow runs centred on the block's middle.
+  // A block drawn at the strip's edge (outside the plotted stretch) has no room for an arrow.
+  if (!onPage || !(pageLength > 0)) return '';
+  // The arrow runs centred on the block's middle, along the magnetisation as drawn (up the page is +t).
   const half = Math.max(8, 0.4 * size) / 2;
-  const ux = m.s / inPlane;
-  const uy = -m.t / inPlane;
+  const ux = onPage.dx / pageLength;
+  const uy = onPage.dy / pageLength;
   const tipX = cx + ux * half;
   const tipY = cy + uy * half;
   const head = (side: number): string => `L${px(tipX - 4 * ux + side * 3 * uy)},${px(tipY - 4 * uy - side * 3 * ux)}`;
