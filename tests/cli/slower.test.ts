@@ -25,7 +25,8 @@ describe('sublevel slower', () => {
     const lines = r.out.split('\n');
     expect(lines[0]).toMatch(/^# sublevel slower: file=examples\/sodium-slower.sublevel; slower=main; line=D2; design=spin_flip; detuning_Hz=-831\d+/);
     expect(lines[1]).toBe('z_m,B_ideal_T,B_coils_T,resonant_speed_m_per_s,needed_deceleration_m_per_s2,flight_speed_m_per_s');
-    expect(lines).toHaveLength(2 + 101);
+    // 101 uniform samples and 6 more where the fields bend at the exit (physics/slower/zGrid.ts).
+    expect(lines).toHaveLength(2 + 107);
     const first = lines[2]!.split(',').map(Number);
     expect(first[0]).toBe(0);
     expect(first[1]).toBeCloseTo(0.0557761, 6);
@@ -42,7 +43,7 @@ describe('sublevel slower', () => {
     const doc = JSON.parse(r.out) as { slower: { name: string; length_m: number; samples: unknown[] }; diagnostics: unknown[] };
     expect(doc.slower.name).toBe('main');
     expect(doc.slower.length_m).toBeCloseTo(0.90416, 4);
-    expect(doc.slower.samples).toHaveLength(101);
+    expect(doc.slower.samples).toHaveLength(107);
   });
 
   it('eval includes the slower in its report', () => {

@@ -60,8 +60,12 @@ describe('the example file', () => {
     expect(s.polarisation).toBe('sigma+');
   });
 
-  it('gives 101 samples from the entrance to the exit with the coils’ field and the flight through it', () => {
-    expect(s.samples).toHaveLength(101);
+  it('gives 101 uniform samples from the entrance to the exit, and 6 more where the fields bend at the exit, with the coils’ field and the flight through it', () => {
+    expect(s.samples).toHaveLength(107);
+    const zs = s.samples!.map((x) => x.z_m);
+    for (let i = 0; i <= 100; i++) expect(zs).toContain((s.length_m! * i) / 100);
+    // Uniform only over the smooth first 85 %.
+    expect(zs.filter((z) => z < 0.85 * s.length_m!)).toHaveLength(85);
     expect(s.samples![0]!.B_ideal_T).toBeCloseTo(s.entry_field_T!, 12);
     expect(s.samples!.at(-1)!.z_m).toBeCloseTo(s.length_m!, 12);
     expect(s.samples!.at(-1)!.flight_speed_m_per_s).toBeCloseTo(s.coils!.flight!.final_m_per_s, 9);

@@ -63,7 +63,8 @@ describe('a coil design of solenoid sections against the ideal profile (invented
     const check = checkDesign({ ...common, profile: p, field, points: 401 });
     expect(check.dropAtM).toBeUndefined();
     expect(check.samples[0]!.resonantMPerS).toBeGreaterThan(700);
-    const mid = check.samples[200]!;
+    // The middle of the uniform grid (points are added between uniform ones where the field bends).
+    const mid = check.samples.find((x) => x.zM === (p.lengthM * 200) / 400)!;
     expect(Math.abs(mid.fieldT / mid.idealT - 1)).toBeLessThan(0.04);
     const run = simulateAtom({ ...common, field, detuningHz: p.detuningHz, lifetimeS: t.lifetimeS, maxDecelerationMPerS2: p.maxDecelerationMPerS2, startSpeedMPerS: 700, endM: p.lengthM }).result!;
     expect(run.finalMPerS).toBeGreaterThan(20);

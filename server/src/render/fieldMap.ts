@@ -25,7 +25,8 @@ export type FieldMapShape =
   /** A conductor crossing the drawing plane; `towardsReader`: the current's sense (undefined: along the plane). */
   | { kind: 'dot'; s: number; t: number; towardsReader?: boolean }
   | { kind: 'segment'; s0: number; t0: number; s1: number; t1: number }
-  | { kind: 'rect'; s0: number; t0: number; s1: number; t1: number }
+  /** A block; `magnetisation`: its unit direction (s along, t across, n towards the reader), absent when magnetised 0. */
+  | { kind: 'rect'; s0: number; t0: number; s1: number; t1: number; magnetisation?: { s: number; t: number; n: number } }
   /** A loop lying in the drawing plane. */
   | { kind: 'ring'; s: number; t: number; r: number };
 
@@ -33,6 +34,8 @@ export interface FieldMapSource {
   name: string;
   kind: 'coil' | 'solenoid' | 'wire' | 'slab';
   shapes: FieldMapShape[];
+  /** Said with its name in the side view and its tooltip ("not magnetised"). */
+  note?: string;
 }
 
 export interface FieldMapViewData {
@@ -232,10 +235,11 @@ function sideView(d: FieldMapViewData, x: Scale, box: PlotBox, lUnit: { factor: 
   const acrossPerPx = reach > 0 ? Math.max(1 / pxPerM, reach / half) : 1 / pxPerM;
   const mid = (box.top + box.bottom) / 2;
   const ty = (t: number): number => mid - t / acrossPerPx;
+  const magnetised = d.sources.some((s) => s.shapes.some((sh) => sh.kind === 'rect' && sh.magnetisation));
   const parts: string[] = [
     el('rect', { class: 'sl-side-frame', x: box.left, y: box.top, width: box.right - box.left, height: box.bottom - box.top, fill: 'none', stroke: pal.grid }),
     el('path', { class: 'sl-beam-line', d: `M${px(box.left)},${px(mid)}H${px(box.right)}`, stroke: pal.muted, 'stroke-dasharray': '8 3 2 3', fill: 'none' }),
-    el('text', { class: 'sl-side-caption', x: box.left, y: box.top - 6, 'font-size': 10, fill: pal.muted }, text(`side view: ${d.acrossName} across (${acrossPerPx * pxPerM > 1.0001 ? 'squeezed' : 'to scale'}), the sampled line dashed; ⊙ current towards you, ⊗ away`)),
+    el('text', { class: 'sl-side-caption', x: box.left, y: box.top - 6, 'font-size': 10, fill: pal.muted }, text(`side view: ${d.acrossName} across (${acrossPerPx * pxPerM > 1.0001 ? 'squeezed' : 'to scale'}), the sampled line dashed; ⊙ current towards you, ⊗ away${magnetised ? '; arrow: magnetisation' : ''}`)),
   ];
   const clipped = (sv: number): number => Math.min(box.right, Math.max(box.left, x(sv)));
   // The name above the source's topmost point, kept inside the strip; sources drawn in one place share one label.
@@ -248,11 +252,11 @@ function sideView(d: FieldMapViewData, x: Scale, box: PlotBox, lUnit: { factor: 
     const colour = pal.series[(i + 2) % pal.series.length];
     const shapes = s.shapes.map((sh) => shapeSvg(sh, clipped, ty, colour, pal.halo));
     const first = d.sources.findIndex((_, j) => j === i || sameSpot(i, j));
-    const names = d.sources.filter((_, j) => j >= i && sameSpot(i, j)).map((o) => o.name);
+    const names = d.sources.filter((_, j) => j >= i && sameSpot(i, j)).map((o) => (o.note ? `${o.name} (${o.note})` : o.name));
     const label = at[i] && first === i
       ? el('text', { class: 'sl-source-name', x: at[i]!.x, y: at[i]!.y, 'text-anchor': 'middle', 'font-size': 10, fill: pal.text, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text(names.join(', ')))
       : '';
-    parts.push(el('g', { class: 'sl-source', 'data-kind': 'source', 'data-label': s.name, 'data-source-kind': s.kind }, [titleEl(`${s.kind} ${s.name}`), ...shapes, label]));
+    parts.push(el('g', { class: 'sl-source', 'data-kind': 'source', 'data-label': s.name, 'data-source-kind': s.kind }, [titleEl(`${s.kind} ${s.name}${s.note ? `, ${s.note}` : ''}`), ...shapes, label]));
   });
   parts.push(leftAxis(scaleLinear().domain([-half * acrossPerPx, half * acrossPerPx]).range([mid + half, mid - half]), lUnit, d.acrossName, { ...box, top: mid - half, bottom: mid + half }, box.left, pal, 28));
   return el('g', { class: 'sl-side-view' }, parts);
@@ -299,13 +303,46 @@ function shapeSvg(sh: FieldMapShape, x: (s: number) => number, ty: (t: number) =
     case 'rect': {
       const x0 = Math.min(x(sh.s0), x(sh.s1));
       const y0 = Math.min(ty(sh.t0), ty(sh.t1));
-      return el('rect', { x: x0, y: y0, width: Math.max(2, Math.abs(x(sh.s1) - x(sh.s0))), height: Math.max(2, Math.abs(ty(sh.t1) - ty(sh.t0))), fill: colour, 'fill-opacity': 0.25, stroke: colour });
+      const w = Math.max(2, Math.abs(x(sh.s1) - x(sh.s0)));
+      const h = Math.max(2, Math.abs(ty(sh.t1) - ty(sh.t0)));
+      // The arrow follows the drawing's own scales (the across axis may be squeezed).
+      const m = sh.magnetisation;
+      const cs = (sh.s0 + sh.s1) / 2;
+      const ct = (sh.t0 + sh.t1) / 2;
+      const step = 1e-3 * Math.max(Math.abs(sh.s1 - sh.s0), Math.abs(sh.t1 - sh.t0));
+      const onPage = m && step > 0 ? { dx: x(cs + m.s * step) - x(cs), dy: ty(ct + m.t * step) - ty(ct) } : undefined;
+      return el('rect', { x: x0, y: y0, width: w, height: h, fill: colour, 'fill-opacity': 0.25, stroke: colour }) + magnetisationMark(m, onPage, x0 + w / 2, y0 + h / 2, Math.min(w, h), colour);
     }
     case 'ring': {
       const r = Math.abs(ty(sh.t + sh.r) - ty(sh.t));
       return el('ellipse', { cx: x(sh.s), cy: ty(sh.t), rx: Math.max(2, Math.abs(x(sh.s + sh.r) - x(sh.s))), ry: Math.max(2, r), fill: 'none', stroke: colour, 'stroke-width': 1.6 });
     }
   }
+}
+
+/**
+ * A block's magnetisation at its centre: an arrow in the drawing plane (its length up to 40 % of
+ * the block's smaller side, at least 8 px), or ⊙/⊗ where it points mostly at or away from the
+ * reader; nothing for a block magnetised 0, which has no direction.
+ */
+function magnetisationMark(m: { s: number; t: number; n: number } | undefined, onPage: { dx: number; dy: number } | undefined, cx: number, cy: number, size: number, colour: string): string {
+  if (!m) return '';
+  const inPlane = Math.hypot(m.s, m.t);
+  const pageLength = onPage ? Math.hypot(onPage.dx, onPage.dy) : 0;
+  if (inPlane < Math.abs(m.n)) {
+    const dot = m.n > 0 ? el('circle', { cx, cy, r: 1.6, fill: colour }) : el('path', { d: `M${px(cx - 3)},${px(cy - 3)}l6,6m0,-6l-6,6`, stroke: colour, 'stroke-width': 1.4 });
+    return el('g', { class: 'sl-magnetisation', 'data-direction': m.n > 0 ? 'towards' : 'away' }, [el('circle', { cx, cy, r: 5, fill: 'none', stroke: colour, 'stroke-width': 1.6 }), dot]);
+  }
+  // A block drawn at the strip's edge (outside the plotted stretch) has no room for an arrow.
+  if (!onPage || !(pageLength > 0)) return '';
+  // The arrow runs centred on the block's middle, along the magnetisation as drawn (up the page is +t).
+  const half = Math.max(8, 0.4 * size) / 2;
+  const ux = onPage.dx / pageLength;
+  const uy = onPage.dy / pageLength;
+  const tipX = cx + ux * half;
+  const tipY = cy + uy * half;
+  const head = (side: number): string => `L${px(tipX - 4 * ux + side * 3 * uy)},${px(tipY - 4 * uy - side * 3 * ux)}`;
+  return el('path', { class: 'sl-magnetisation', 'data-direction': 'in-plane', d: `M${px(cx - ux * half)},${px(cy - uy * half)}L${px(tipX)},${px(tipY)}M${px(tipX)},${px(tipY)}${head(1)}M${px(tipX)},${px(tipY)}${head(-1)}`, stroke: colour, 'stroke-width': 1.6, fill: 'none', 'stroke-linecap': 'round' });
 }
 
 /** The numbers behind the field map (docs/csv.md): position along the line, |B| and the signed component drawn, SI. */

@@ -28,6 +28,8 @@ const POLARIZATIONS: Polarization[] = ['pi', 'sigma+', 'sigma-'];
 export const VISIBLE_FLOOR = 1e-4;
 /** Height of the row that holds the note of components left out. */
 const NOTE_ROW = 14;
+/** A stick's stroke width: sticks closer than this stand on each other. */
+const STICK_WIDTH = 2.4;
 export const POLARIZATION_MARKER: Record<Polarization, MarkerShape> = { pi: 'circle', 'sigma+': 'up', 'sigma-': 'down' };
 
 function signed(v: number, text: string): string {
@@ -79,7 +81,7 @@ function stick(c: LineComponent, i: number, cx: number, ctx: StickContext): stri
       'data-strength': dataNum(c.strength),
       'data-observed': c.observed !== undefined ? dataNum(c.observed) : undefined,
       stroke: colour,
-      'stroke-width': 2.4,
+      'stroke-width': STICK_WIDTH,
       'stroke-dasharray': POLARIZATION_DASH[c.polarization],
       tabindex: '0',
     },
@@ -154,14 +156,18 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
     if (path) body.push(el('path', { class: 'sl-spectrum', 'data-kind': 'spectrum', d: path, fill: 'none', stroke: pal.total, 'stroke-width': 1.8, 'stroke-linejoin': 'round' }));
   }
 
-  if (faintNote) body.push(faintNoteSvg(faintNote, box.left, HEIGHT + NOTE_ROW - 8, pal));
-  const desc = `Stick spectrum of ${comps.length} line components (${counts.join(', ')}) from Δf = ${formatIn(fExtent[0], unit)} to ${formatIn(fExtent[1], unit)}${faintNote ? `; ${faintNote.text}` : ''}.`;
+  // Sticks closer than their width draw as one: the figure says so, or the report's count would not match what is seen.
+  const overlap = overlapNote(drawn.map((c) => x(c.offsetHz)));
+  const notes = [overlap, faintNote?.text].filter((t): t is string => t !== undefined);
+  if (overlap) body.push(el('text', { class: 'sl-note sl-overlap-note', 'data-places': overlapPlaces(drawn.map((c) => x(c.offsetHz))), x: box.left, y: HEIGHT + NOTE_ROW - 8, 'font-size': 10, fill: pal.muted }, text(overlap)));
+  if (faintNote) body.push(faintNoteSvg(faintNote, box.left, HEIGHT + NOTE_ROW * (overlap ? 2 : 1) - 8, pal));
+  const desc = `Stick spectrum of ${comps.length} line components (${counts.join(', ')}) from Δf = ${formatIn(fExtent[0], unit)} to ${formatIn(fExtent[1], unit)}${notes.map((t) => `; ${t}`).join('')}.`;
   return svgDocument(
     {
       view: 'lines',
       idBase,
       width: WIDTH,
-      height: HEIGHT + (faintNote ? NOTE_ROW : 0),
+      height: HEIGHT + NOTE_ROW * notes.length,
       title: d.title,
       desc,
       pal,
@@ -181,6 +187,26 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
 }
 
 const PANEL_GAP = 24;
+
+/** How many separate places the sticks at these x stand in: a place holds the sticks less than a stick's width right of its first. */
+function overlapPlaces(xs: number[]): number {
+  const sorted = [...xs].sort((a, b) => a - b);
+  let places = 0;
+  let start = -Infinity;
+  for (const v of sorted) {
+    if (v - start >= STICK_WIDTH) {
+      places++;
+      start = v;
+    }
+  }
+  return places;
+}
+
+/** The sentence for sticks drawn on top of each other, when some are. */
+function overlapNote(xs: number[]): string | undefined {
+  const places = overlapPlaces(xs);
+  return places < xs.length ? `${xs.length} components drawn at ${places} ${places === 1 ? 'place' : 'places'}: sticks closer than their width overlap (each is listed in the report)` : undefined;
+}
 
 /** Components left out of the figure: how many, and the sentence that says so. */
 interface FaintNote {

@@ -23,6 +23,8 @@ import type { PatternViewData, RenderTheme } from './viewData';
 const WIDTH = 760;
 const BASE_HEIGHT = 460;
 const TABLE_ROW = 14;
+/** Room between the position axis's title and the peak table (they touched at 12 units between baselines). */
+const TABLE_GAP = 8;
 const LEGEND_MAX_CHARS = 22;
 
 /** Colour i mod 8 with a dash that shifts every 8 series, so the first 32 pairs are all distinct. */
@@ -137,7 +139,7 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
 
   const entries: PeakEntry[] = peaks.map((p, i) => ({ head: `${i + 1} at ${positionLabel(p.positionM, unit)}`, members: p.members }));
   const tableRows = entries.length > 0 ? peakTableRows(entries, WIDTH - 32) : [];
-  const height = BASE_HEIGHT + tableRows.length * TABLE_ROW;
+  const height = BASE_HEIGHT + (tableRows.length > 0 ? TABLE_GAP + tableRows.length * TABLE_ROW : 0);
   const box: PlotBox = { left: 64, right: WIDTH - 16 - legendW, top: 78, bottom: BASE_HEIGHT - 56 };
   const x = scaleLinear().domain([x0, x1]).range([box.left, box.right]);
 
@@ -221,15 +223,18 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
   // Every counted peak gets a marker and its number; its position is printed too where there is room (taller first).
   const order = peaks.map((_, i) => i).sort((a, b) => peaks[b].height - peaks[a].height || a - b);
   // Every number keeps its own span; a position is added where the longer label overlaps no other label.
+  // Labels sit over their peaks, so two at heights more than a line apart (a tall narrow peak beside
+  // broad low ones) never meet, however close they are across.
   const spans: [number, number][] = peaks.map((p, i) => {
     const half = estimateTextWidth(String(i + 1), 10) / 2 + 3;
     return [x(p.positionM) - half, x(p.positionM) + half];
   });
+  const labelY = peaks.map((p) => Math.max(box.top + 14, yv(p.height) - 3)); // the marker's foot; its label sits above
   const withPosition = new Set<number>();
   for (const i of order) {
     const cx = x(peaks[i].positionM);
     const half = estimateTextWidth(`${i + 1}: ${positionLabel(peaks[i].positionM, unit)}`, 10) / 2 + 3;
-    if (spans.every(([a, b], j) => j === i || cx + half < a || cx - half > b)) {
+    if (spans.every(([a, b], j) => j === i || cx + half < a || cx - half > b || Math.abs(labelY[j]! - labelY[i]!) >= 14)) {
       spans[i] = [cx - half, cx + half];
       withPosition.add(i);
     }
@@ -250,7 +255,7 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
       { class: 'sl-peaks' },
       peaks.map((p, i) => {
         const cx = x(p.positionM);
-        const cy = Math.max(box.top + 14, yv(p.height) - 3);
+        const cy = labelY[i]!;
         const where = positionLabel(p.positionM, unit);
         const members = p.members.join(', ');
         const label = withPosition.has(i) ? `${i + 1}: ${where}` : `${i + 1}`;
@@ -283,7 +288,7 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
       el(
         'g',
         { class: 'sl-peak-table', 'font-size': 11 },
-        tableRows.map((r, i) => el('text', { x: 16, y: BASE_HEIGHT - 6 + i * TABLE_ROW, fill: pal.text }, text(r))),
+        tableRows.map((r, i) => el('text', { x: 16, y: BASE_HEIGHT - 6 + TABLE_GAP + i * TABLE_ROW, fill: pal.text }, text(r))),
       ),
     );
   }

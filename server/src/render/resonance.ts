@@ -57,7 +57,11 @@ export function renderResonance(d: ResonanceViewData, theme: RenderTheme): strin
   const x = scaleLinear().domain(fx).range([LEFT, RIGHT]);
   const rows = layoutMarkRows(marks, LEFT, RIGHT, x);
   const rowCount = Math.max(1, ...rows.map((r) => r + 1));
-  const top = legendSvg.below + rowCount * MARK_ROW;
+  // The file asks where its frequency is resonant and the range holds no such field: the figure says so, as the report does, in a row of its own.
+  const unreached = d.soughtHz !== undefined && !d.resonances.some((p) => inRange(p.fieldT))
+    ? `not resonant with ${exactHz(Math.abs(d.soughtHz))} anywhere from ${formatIn(fx[0], fUnit)} to ${formatIn(fx[1], fUnit)}`
+    : undefined;
+  const top = legendSvg.below + (rowCount + (unreached ? 1 : 0)) * MARK_ROW;
   const upper: PlotBox = { left: LEFT, right: RIGHT, top, bottom: top + 200 };
   const lower: PlotBox = { left: LEFT, right: RIGHT, top: upper.bottom + 22, bottom: upper.bottom + 22 + 120 };
   const height = lower.bottom + 56;
@@ -116,10 +120,12 @@ export function renderResonance(d: ResonanceViewData, theme: RenderTheme): strin
     ]),
   );
 
+  if (unreached) body.push(el('text', { class: 'sl-note sl-unreached', x: RIGHT, y: legendSvg.below + MARK_ROW - 8, 'text-anchor': 'end', 'font-size': 10, fill: pal.muted }, text(unreached)));
   const desc = [
     `Transition ${d.pairLabel}: frequency from ${formatSI(ff[0], 'Hz')} to ${formatSI(ff[1], 'Hz')} and df/dB against B from ${formatIn(fx[0], fUnit)} to ${formatIn(fx[1], fUnit)}`,
     `field-insensitive points: ${d.insensitive.map((p) => formatIn(p.fieldT, fUnit)).join(', ') || 'none in range'}`,
     `resonance fields: ${d.resonances.map((p) => formatIn(p.fieldT, fUnit)).join(', ') || 'none'}`,
+    ...(unreached ? [unreached] : []),
   ];
   return svgDocument(
     {

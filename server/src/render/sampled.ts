@@ -48,31 +48,3 @@ export function slopeAt(xs: ArrayLike<number>, ys: ArrayLike<number>, x: number)
   if (k < 0 || xs[k + 1] === xs[k]) return NaN;
   return (ys[k + 1] - ys[k]) / (xs[k + 1] - xs[k]);
 }
-
-/**
- * Samples of f on [a, b], denser where it bends: each interval of a uniform start is halved
- * while f at its midpoint lies more than `tol` off the chord (a curve drawn through the samples
- * then strays at most about `tol` from f). Used where a profile has a steep end, such as
- * √(1 − z/L0) at z → L0, which uniform samples draw with a kink.
- */
-export function adaptiveSamples(f: (x: number) => number, a: number, b: number, tol: number, start = 32, maxDepth = 14): { x: number[]; y: number[] } {
-  const xs: number[] = [a];
-  const ys: number[] = [f(a)];
-  const refine = (x0: number, y0: number, x1: number, y1: number, depth: number): void => {
-    const xm = (x0 + x1) / 2;
-    const ym = f(xm);
-    if (depth < maxDepth && Number.isFinite(ym) && Math.abs(ym - (y0 + y1) / 2) > tol) {
-      refine(x0, y0, xm, ym, depth + 1);
-      refine(xm, ym, x1, y1, depth + 1);
-      return;
-    }
-    xs.push(x1);
-    ys.push(y1);
-  };
-  for (let i = 0; i < start; i++) {
-    const x0 = a + ((b - a) * i) / start;
-    const x1 = i === start - 1 ? b : a + ((b - a) * (i + 1)) / start;
-    refine(x0, ys[ys.length - 1]!, x1, f(x1), 0);
-  }
-  return { x: xs, y: ys };
-}

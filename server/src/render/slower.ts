@@ -18,10 +18,6 @@ export interface SlowerViewData {
   title: string;
   zM: number[];
   idealT: number[];
-  /** The ideal field sampled densely where it steepens (the √ end), drawn instead of idealT when given. */
-  idealFine?: { zM: number[]; values: number[] };
-  /** The resonant speed, likewise (only without coils: with coils it follows their field). */
-  resonantFine?: { zM: number[]; values: number[] };
   /** The coils' field along the axis, when there are coils. */
   coilsT?: number[];
   resonantMPerS: number[];
@@ -66,21 +62,21 @@ export function renderSlower(d: SlowerViewData, theme: RenderTheme): string {
   body.push(bottomAxis(x, zUnit, 'z', lower, pal));
   body.push(leftAxis(yv, vUnit, 'v', lower, LEFT, pal));
   body.push(el('path', { class: 'sl-zero', d: `M${px(LEFT)},${px(yb(0))}H${px(RIGHT)}`, stroke: pal.muted, 'stroke-dasharray': '2 4', fill: 'none' }));
-  const curve = (ys: number[], y: (v: number) => number, zs: number[] = d.zM): string =>
-    line<number>().defined((k) => Number.isFinite(ys[k]!) && Number.isFinite(zs[k]!)).x((k) => x(zs[k]!)).y((k) => y(ys[k]!)).digits(2)(ys.map((_, k) => k)) ?? '';
+  const curve = (ys: number[], y: (v: number) => number): string =>
+    line<number>().defined((k) => Number.isFinite(ys[k]!) && Number.isFinite(d.zM[k]!)).x((k) => x(d.zM[k]!)).y((k) => y(ys[k]!)).digits(2)(ys.map((_, k) => k)) ?? '';
   // Each curve stays inside its own plot: a resonant speed below 0 (no atom flying forwards is
   // resonant there, as behind a steep exit) leaves at the bottom of the lower plot, not off the figure.
   const clip = { upper: `${idBase}-upper`, lower: `${idBase}-lower` };
   const clipRect = (id: string, b: PlotBox): string => el('clipPath', { id }, el('rect', { x: b.left, y: b.top - 1, width: b.right - b.left, height: b.bottom - b.top + 2 }));
   body.push(el('defs', {}, [clipRect(clip.upper, upper), clipRect(clip.lower, lower)]));
-  const series = (kind: string, label: string, ys: number[], y: (v: number) => number, clipId: string, colour: string, width: number, dash?: string, zs?: number[]): string =>
+  const series = (kind: string, label: string, ys: number[], y: (v: number) => number, clipId: string, colour: string, width: number, dash?: string): string =>
     el('g', { class: 'sl-curve', 'data-kind': kind, 'data-label': label, 'clip-path': `url(#${clipId})`, fill: 'none', stroke: colour, 'stroke-width': width, ...(dash ? { 'stroke-dasharray': dash } : {}) }, [
       titleEl(label),
-      el('path', { d: curve(ys, y, zs) }),
+      el('path', { d: curve(ys, y) }),
     ]);
-  body.push(series('ideal', 'ideal field B(z)', d.idealFine?.values ?? d.idealT, yb, clip.upper, pal.series[0]!, 2, undefined, d.idealFine?.zM));
+  body.push(series('ideal', 'ideal field B(z)', d.idealT, yb, clip.upper, pal.series[0]!, 2));
   if (d.coilsT) body.push(series('coils', "the coils' field", d.coilsT, yb, clip.upper, pal.series[1]!, 2, '6 3'));
-  body.push(series('resonant', 'speed resonant with the laser', d.resonantFine?.values ?? d.resonantMPerS, yv, clip.lower, pal.series[2]!, 2, undefined, d.resonantFine?.zM));
+  body.push(series('resonant', 'speed resonant with the laser', d.resonantMPerS, yv, clip.lower, pal.series[2]!, 2));
   body.push(series('flight', 'simulated atom', d.flightMPerS, yv, clip.lower, pal.text, 1.5, '2 3'));
   // Rule labels sit right of their rule, or left of it where they would run past the plot's right
   // edge; a label that would overlap the one before goes one row down.

@@ -155,6 +155,8 @@ export interface ResonanceViewData {
   insensitive: { fieldT: number; frequencyHz: number }[];
   /** Fields where the transition is at the file's frequency. */
   resonances: { fieldT: number; frequencyHz: number }[];
+  /** The file's frequency, when it gives one: a figure with no resonance in range says it is not reached. */
+  soughtHz?: number;
   /** Named fields of the file, drawn as rules when inside the range. */
   fieldMarks: NamedFieldMark[];
 }

@@ -91,7 +91,9 @@ export function chooseLine(parts: readonly FieldSourceSpec[]): MapLine | undefin
     origin = first.centre;
   } else {
     const wires = parts.filter((p): p is Extract<FieldSourceSpec, { kind: 'wire' }> => p.kind === 'wire');
-    const slab = parts.find((p): p is Extract<FieldSourceSpec, { kind: 'slab' }> => p.kind === 'slab');
+    // A block magnetised 0 has no direction to follow: a magnetised one leads; a dead one alone gets the z axis through it.
+    const slabs = parts.filter((p): p is Extract<FieldSourceSpec, { kind: 'slab' }> => p.kind === 'slab');
+    const slab = slabs.find((p) => norm(p.magnetisationT) > 0) ?? slabs[0];
     if (wires.length > 0 && axial.length === 0) {
       // Across the wires: through the first and the farthest other wire, else perpendicular to the one wire.
       const w0 = wires[0]!;
@@ -191,7 +193,9 @@ export function sourceShapes(parts: readonly FieldSourceSpec[], line: MapLine): 
         const c: Vec3 = [p.centre[0] + dx * p.sizeM[0], p.centre[1] + dy * p.sizeM[1], p.centre[2] + dz * p.sizeM[2]];
         s0 = Math.min(s0, s(c)); s1 = Math.max(s1, s(c)); t0 = Math.min(t0, t(c)); t1 = Math.max(t1, t(c));
       }
-      out.push({ kind: 'rect', s0, t0, s1, t1 });
+      // The magnetisation's direction in the drawing's terms (none for a block magnetised 0).
+      const m = norm(p.magnetisationT) > 0 ? unit(p.magnetisationT) : undefined;
+      out.push({ kind: 'rect', s0, t0, s1, t1, ...(m ? { magnetisation: { s: dot(m, line.u), t: dot(m, line.v), n: dot(m, n) } } : {}) });
     }
   }
   return out;
@@ -213,6 +217,11 @@ export interface FieldMapOptions {
 function mapUnit(topT: number, written: string | undefined): FieldUnit {
   if (written !== undefined || topT < 1e-4) return unitFor(topT, written);
   return topT < 0.1 ? 'G' : 'T';
+}
+
+/** A block whose every part is magnetised 0: it adds no field and has no direction to draw. */
+function unmagnetised(s: MapSource): boolean {
+  return s.parts.length > 0 && s.parts.every((p) => p.kind === 'slab' && !(norm(p.magnetisationT) > 0));
 }
 
 /** The view of `sources` summed by `field`; undefined when no source has usable parts. */
@@ -257,6 +266,6 @@ export function fieldMapView(sources: readonly MapSource[], field: FieldFunction
     fieldUnit: options.fieldUnit ?? mapUnit(axis?.domain[1] ?? max, options.writtenUnit),
     scale: options.scale ?? 'auto',
     axis,
-    sources: usable.map((s) => ({ name: s.name, kind: s.kind, shapes: sourceShapes(s.parts, line) })),
+    sources: usable.map((s) => ({ name: s.name, kind: s.kind, shapes: sourceShapes(s.parts, line), ...(unmagnetised(s) ? { note: 'not magnetised' } : {}) })),
   };
 }

@@ -68,5 +68,6 @@ export function resonanceView(
       .filter((x) => [x.transition.lower_label, x.transition.upper_label].sort().join('|') === [lower.low.text, upper.low.text].sort().join('|'))
       .map((x) => ({ fieldT: x.field_T, frequencyHz: sign * Math.abs(x.transition.frequency_Hz) })),
     fieldMarks: fields.map(namedFieldMark),
+    ...(r.frequencyHz ? { soughtHz: r.frequencyHz.value } : {}),
   };
 }
