@@ -46,6 +46,12 @@ describe('one rule for the digits of an uncertainty (GUM JCGM 100:2008 §7.2.6: 
     // 2 × 3.417 341 305 452 145 GHz: the 16th digit of the double is not the published 0.
     expect(withUncertainty(6834682610.90429, 0.00009, (v) => frequencyText(v, 15))).toBe('6.83468261090429(9) GHz');
   });
+  it('an uncertainty below the double\'s resolution prints the value at 15 digits and no (0)', () => {
+    // Cs ground F=3, m_F=0 at 1 nT: its uncertainty (from g_J alone, quadratic in B) is ~1e-11 Hz.
+    // Before: -5.17085537062499955852(0) GHz — five digits past what a double holds.
+    expect(withUncertainty(-5170855370.625, 1e-11, (v) => frequencyText(v, 15))).toBe('-5.17085537062500 GHz');
+    expect(withUncertainty(4021776399.375, 3e-12, (v) => frequencyText(v, 15))).toBe('4.02177639937500 GHz');
+  });
   it('fit reports and hovers print the same value the same way (fittedText goes through withUncertainty)', () => {
     // Before: the fit formatter always kept two digits and the hover one digit for 5–9.
     expect(fittedText(0.00032289, 5.4e-7, 'T', 'G')).toBe(withUncertainty(0.00032289, 5.4e-7, (v) => fieldText(v)));

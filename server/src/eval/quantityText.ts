@@ -179,9 +179,13 @@ export function withUncertainty(value: number | null | undefined, unc: number | 
   const number = value / scale / 10 ** exponent;
   const whole = Math.max(1, Math.floor(Math.log10(Math.abs(number))) + 1);
   while (decimals > 0 && whole + decimals > MAX_DOUBLE_DIGITS && Math.round(uShown * 10 ** (decimals - 1)) >= 1) decimals--;
+  // An uncertainty below what the double resolves (an m_F = 0 level's 1e-20 GHz at 1 nT): the value
+  // at the double's 15 digits and no "(0)" — the digits past them would be noise, not a result.
+  if (whole + decimals > MAX_DOUBLE_DIGITS) decimals = Math.max(0, MAX_DOUBLE_DIGITS - whole);
   const uDigits = Math.round(uShown * 10 ** decimals);
-  const v = number.toFixed(decimals);
-  return `${v.replace(/^-(0\.?0*)$/, '$1')}(${uDigits})${m[2] !== undefined ? `e${m[2]}` : ''}${m[3]}`;
+  const v = number.toFixed(decimals).replace(/^-(0\.?0*)$/, '$1');
+  const tail = `${m[2] !== undefined ? `e${m[2]}` : ''}${m[3]}`;
+  return uDigits === 0 ? `${v}${tail}` : `${v}(${uDigits})${tail}`;
 }
 
 /**
