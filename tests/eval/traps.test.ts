@@ -145,3 +145,17 @@ trap q
   });
 });
 
+
+describe('a weak pair without gravity: the minimum is the field zero, not round-off beside it', () => {
+  // 1 mA through one turn: |B| of nT–µT. Each trapped sublevel's potential carries its GHz hyperfine
+  // energy, so offsets of ~1e-10 m are below its round-off; before, |2,+1⟩ read a sag of 0.087 nm.
+  const r = analyze(`${PAIR('1 mA').replace('turns   = 100', 'turns   = 1')}trap q\n  sources = quad\n  level   = ground\n  gravity = off\n`);
+  const trapped = r.result!.traps![0]!.sublevels.filter((s) => s.trapped);
+  it('every trapped sublevel sits at the centre with sag 0', () => {
+    expect(trapped.map((s) => s.label).sort()).toEqual(['F=1, m_F=-1', 'F=2, m_F=+1', 'F=2, m_F=+2']);
+    for (const s of trapped) {
+      expect(s.sag_m, s.label).toBe(0);
+      expect(s.minimum_m, s.label).toEqual([0, 0, 0]);
+    }
+  });
+});

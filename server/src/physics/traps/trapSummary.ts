@@ -29,6 +29,14 @@ export const ZERO_FIELD_FRACTION = 1e-6;
 const SEEKING_SLOPE_HZ_PER_T = 1e-4 * BOHR_MAGNETON_HZ_PER_T;
 /** Minima closer than this fraction of the region's radius to the field's minimum are taken to be at it. */
 const SAME_POINT_FRACTION = 1e-9;
+/**
+ * A minimum found within this fraction of the region's radius whose energy is not measurably below
+ * the energy at the field's minimum is that point: the potential carries the hyperfine energy
+ * (GHz), so near a zero of a weak field (nT) its round-off hides offsets of ~1e-10 m.
+ */
+const UNRESOLVED_POINT_FRACTION = 1e-6;
+/** Energies closer than this fraction of their size are not told apart (a few hundred ε of the eigen-solve). */
+const ENERGY_ROUNDOFF = 1e-13;
 /** The swept range reaches this far past the largest |B| sampled (rays can pass a little higher). */
 const CURVE_HEADROOM = 1.5;
 
@@ -155,8 +163,11 @@ function sublevelTrap(
   let found = findMinimum(u, survey.centre, input.region, smooth);
   // A minimum at the field's own minimum (to the search's tolerance) is that point: sublevels held
   // there then share it exactly (and their depth rays), and the sag reads 0, not round-off.
-  if (norm(sub(found.position, survey.centre)) < SAME_POINT_FRACTION * input.region.radiusM) {
-    found = { ...found, position: survey.centre, energyJ: u.energy(survey.centre), fieldT: u.fieldT(survey.centre) };
+  const offsetM = norm(sub(found.position, survey.centre));
+  const centreEnergyJ = u.energy(survey.centre);
+  const notLower = found.energyJ >= centreEnergyJ - ENERGY_ROUNDOFF * Math.abs(centreEnergyJ);
+  if (offsetM < SAME_POINT_FRACTION * input.region.radiusM || (offsetM < UNRESOLVED_POINT_FRACTION * input.region.radiusM && notLower)) {
+    found = { ...found, position: survey.centre, energyJ: centreEnergyJ, fieldT: u.fieldT(survey.centre) };
   }
   const mu = moment(found.fieldT);
   const turningFieldT = c.turningFieldT(found.fieldT);
