@@ -38,7 +38,7 @@ describe('the field map names every side it cuts', () => {
 
   it('a field that is zero all along says so instead of leaving a bare plot', () => {
     const svg = mapOf('coil a\n  radius = 5 cm\n  turns = 10\n  current = 1 A\ncoil b\n  radius = 5 cm\n  turns = 10\n  current = -1 A\n');
-    expect(noteOf(svg)).toBe('|B| = 0 all along the line: the sources cancel here (or carry no current)');
+    expect(noteOf(svg)).toBe('|B| = 0 all along the line: the sources cancel here, or none carries a current or a magnetisation');
     // Two coils in one place share one name label.
     expect(byClass(parseSvg(svg), 'sl-source-name').map(textOf)).toEqual(['a, b']);
   });

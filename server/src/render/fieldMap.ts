@@ -167,7 +167,7 @@ export function renderFieldMap(d: FieldMapViewData, theme: RenderTheme): string 
     );
   }
   // A field that is zero all along lies on the axis line itself: say so, rather than leave a bare plot.
-  const note = !(mag![1] > 0) ? '|B| = 0 all along the line: the sources cancel here (or carry no current)' : cutNote(d, axis.log, lowY, highY, fUnit, showComponent);
+  const note = !(mag![1] > 0) ? '|B| = 0 all along the line: the sources cancel here, or none carries a current or a magnetisation' : cutNote(d, axis.log, lowY, highY, fUnit, showComponent);
   if (note) body.push(el('text', { class: 'sl-note', x: RIGHT, y: plot.top - 6, 'text-anchor': 'end', 'font-size': 10, fill: pal.muted }, text(note)));
 
   body.push(sideView(d, x, strip, lUnit, pal));
