@@ -11,6 +11,7 @@ import { evaluateTermLine } from './termLineEvaluation';
 import type { WorkingField } from './levelEvaluation';
 import { forwardIssues } from './forwardIssues';
 import { hyperfineSpec } from './levelSpec';
+import { solvedAtField } from './exactAtField';
 import type { LineResult } from './resultTypes';
 
 export function evaluateLine(
@@ -52,7 +53,7 @@ export function evaluateLine(
       : {};
   const at = fields.length > 0 ? fields : [{ source: { kind: 'field' as const, name: 'zero' }, tesla: 0, range: line.nameRange }];
   for (const f of at) {
-    const r = electricDipoleLine(ls, us, f.tesla, energies);
+    const r = electricDipoleLine(ls, us, f.tesla, { ...energies, solve: solvedAtField });
     report(r.issues);
     if (r.issues.some((i) => i.severity === 'error')) continue;
     if (result.g_eff === undefined && r.gEff) result.g_eff = r.gEff.formula;

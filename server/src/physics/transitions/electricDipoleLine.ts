@@ -117,8 +117,9 @@ export function electricDipoleLine(
   if (opts.terms) issues.push(...selectionRules(opts.terms.lower, opts.terms.upper));
   if (hasError(issues) || !checkPair(lower, upper, issues)) return empty(fieldT, issues);
 
-  const lo = solveLevel(lower, fieldT);
-  const up = solveLevel(upper, fieldT);
+  const solve = opts.solve ?? solveLevel;
+  const lo = solve(lower, fieldT);
+  const up = solve(upper, fieldT);
   issues.push(...fromLevel('Lower level', lo.issues), ...fromLevel('Upper level', up.issues));
   if (lo.states.length === 0 || up.states.length === 0) return empty(fieldT, issues);
 
@@ -140,8 +141,8 @@ export function electricDipoleLine(
   let sums = got.centroid;
   if (Math.abs(fieldT) < 1e-6) {
     centroidFieldT = CENTROID_PROBE_T;
-    const lp = solveLevel(lower, centroidFieldT).states;
-    const upp = solveLevel(upper, centroidFieldT).states;
+    const lp = solve(lower, centroidFieldT).states;
+    const upp = solve(upper, centroidFieldT).states;
     sums = components(lp, upp, lower.twoJ, upper.twoJ, null, dropBelow).centroid;
   }
   const gEff = {
