@@ -7,6 +7,7 @@
 import type { EvaluationResult } from '../eval/resultTypes';
 import { defineLazyField } from '../eval/lazyFields';
 import { buildLevelTable, type ExactRecipe, type LinearRecipe } from '../eval/levelTables';
+import { buildLineComponents, type ComponentsRecipe } from '../eval/lineComponentsRecipe';
 import { packValue, unpackValue, type PackedValue } from './packedValue';
 
 /** Arrays under these keys are unpacked when first read. */
@@ -22,5 +23,12 @@ export function packResult(result: EvaluationResult): PackedValue | undefined {
 }
 
 export function unpackResult(packed: PackedValue): EvaluationResult {
-  return unpackValue(packed, (o, key, recipe) => defineLazyField(o, key, recipe as LinearRecipe | ExactRecipe, buildLevelTable)) as EvaluationResult;
+  return unpackValue(packed, (o, key, recipe) => defineLazyField(o, key, recipe as Recipe, buildFromRecipe)) as EvaluationResult;
+}
+
+type Recipe = LinearRecipe | ExactRecipe | ComponentsRecipe;
+
+/** Every kind of recipe the evaluation leaves unread (eval/levelTables.ts, eval/lineComponentsRecipe.ts). */
+function buildFromRecipe(r: Recipe): unknown {
+  return r.kind === 'components' ? buildLineComponents(r) : buildLevelTable(r);
 }
