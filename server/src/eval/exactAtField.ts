@@ -5,6 +5,7 @@
 import { buildLevelModel, regime, solveLevel, type LevelSpec, type SolveResult, type SublevelState } from '../physics/engine';
 import { BOHR_MAGNETON } from '../physics/constants';
 import { signedHalfText } from './halves';
+import { defineRegimeLimits } from './regimeLimits';
 import type { ExactSublevelResult, RegimeResultJson } from './resultTypes';
 
 export interface ExactAtField {
@@ -72,19 +73,12 @@ function exactFromSolved(spec: LevelSpec, fieldT: number, built: ReturnType<type
   const r = regime(spec, fieldT, undefined, built);
   // The limits stay unsearched until read (JSON output, a regime note, a hover): `check` of a file
   // at lab fields needs only the verdict (physics/engine/regime.ts, docs/speed.md).
-  const regimeJson: RegimeResultJson | undefined = r.issues.some((i) => i.severity === 'error')
-    ? undefined
-    : {
-        x: Number.isFinite(r.x) ? r.x : null,
-        verdict: r.verdict,
-        get linear_limit_T() {
-          return Number.isFinite(r.linearLimitT) ? r.linearLimitT : null;
-        },
-        get strong_limit_T() {
-          return Number.isFinite(r.strongLimitT) ? r.strongLimitT : null;
-        },
-        fraction: r.fraction,
-      };
+  let regimeJson: RegimeResultJson | undefined;
+  if (!r.issues.some((i) => i.severity === 'error')) {
+    // The limits stand in their places (key order) and are searched when first read (eval/regimeLimits.ts).
+    regimeJson = { x: Number.isFinite(r.x) ? r.x : null, verdict: r.verdict, linear_limit_T: null, strong_limit_T: null, fraction: r.fraction };
+    defineRegimeLimits(regimeJson, r, spec, fieldT);
+  }
   return { exact: solved.states.map((s) => toJson(s, noNucleus)), ...(regimeJson ? { regime: regimeJson } : {}), errors: [], notices };
 }
 
