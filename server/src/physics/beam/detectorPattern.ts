@@ -219,7 +219,9 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][], re
     summaries.push({ label: sublevels[i].label, weight: weights[i], coefficientM3PerS2: ks[i], meanDeflectionM, peakM });
   }
 
-  const activeIdx = weights.map((w, i) => (w > 0 && Number.isFinite(ownPeaks[i]) ? i : -1)).filter((i) => i >= 0);
+  // A plain loop: map-then-filter here deoptimised this function on every other call (wrong array map), leaving the rest of the call to the interpreter.
+  const activeIdx: number[] = [];
+  for (let i = 0; i < weights.length; i++) if (weights[i] > 0 && Number.isFinite(ownPeaks[i])) activeIdx.push(i);
   const groups = fixedGroups
     ? fixedGroups.map((g) => g.filter((i) => activeIdx.includes(i))).filter((g) => g.length > 0)
     : groupByPeakPosition(ownPeaks, activeIdx, options.mergeFraction * image.kernelFwhmM);
