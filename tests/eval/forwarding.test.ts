@@ -16,6 +16,8 @@ vi.mock('../../server/src/physics/transitions', async (importOriginal) => {
     ...t,
     selectionRules: (...a: Parameters<typeof t.selectionRules>) => [...t.selectionRules(...a), planted('planted-rules')],
     electricDipoleLine: wrap(t.electricDipoleLine, 'planted-line'),
+    // The evaluation checks a line here and builds its components (electricDipoleLine) only when they are read.
+    electricDipoleLineChecks: wrap(t.electricDipoleLineChecks, 'planted-line'),
     magneticTransitions: wrap(t.magneticTransitions, 'planted-transitions'),
     resonanceFields: wrap(t.resonanceFields, 'planted-resonance'),
     fieldInsensitivePoints: wrap(t.fieldInsensitivePoints, 'planted-insensitive'),

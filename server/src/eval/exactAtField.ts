@@ -2,9 +2,10 @@
  * Exact sublevels of one level at one working field, from the any-field engine, with the regime
  * verdict that tells whether the weak-field (linear) picture still holds.
  */
-import { buildLevelModel, regime, solveLevel, type LevelSpec, type SublevelState } from '../physics/engine';
+import { buildLevelModel, regime, solveLevel, type LevelSpec, type SolveResult, type SublevelState } from '../physics/engine';
 import { BOHR_MAGNETON } from '../physics/constants';
 import { signedHalfText } from './halves';
+import { defineRegimeLimits } from './regimeLimits';
 import type { ExactSublevelResult, RegimeResultJson } from './resultTypes';
 
 export interface ExactAtField {
@@ -21,9 +22,11 @@ export interface ExactAtField {
  * species) and an evaluation visits each at every working field, so equal ones are solved once.
  * The entry is shared: callers copy the states before changing them (a level's tables,
  * eval/levelTables.ts, copy them when first read). Bounded: the least recently used go first.
+ * Each entry keeps the engine's own solution beside it, so a line between two levels reuses
+ * their solves at that field instead of solving both again (`solvedAtField`).
  */
 const MEMO_ENTRIES = 4096;
-const memo = new Map<string, ExactAtField>();
+const memo = new Map<string, { result: ExactAtField; solved: SolveResult }>();
 
 function memoKey(spec: LevelSpec, fieldT: number): string {
   return spec.kind === 'hyperfine'
@@ -42,13 +45,25 @@ export function exactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
   else known = solveExactAtField(spec, fieldT);
   memo.set(key, known);
   if (memo.size > MEMO_ENTRIES) memo.delete(memo.keys().next().value!);
-  return known;
+  return known.result;
 }
 
-function solveExactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
+/**
+ * The engine's solution of `spec` at `fieldT`: the one `exactAtField` made when it is still
+ * remembered, else solved here (not remembered). Shared, so read only.
+ */
+export function solvedAtField(spec: LevelSpec, fieldT: number): SolveResult {
+  return memo.get(memoKey(spec, fieldT))?.solved ?? solveLevel(spec, fieldT);
+}
+
+function solveExactAtField(spec: LevelSpec, fieldT: number): { result: ExactAtField; solved: SolveResult } {
   // One model for both: building a large level's model costs as much as solving it once.
   const built = buildLevelModel(spec);
   const solved = solveLevel(spec, fieldT, built);
+  return { result: exactFromSolved(spec, fieldT, built, solved), solved };
+}
+
+function exactFromSolved(spec: LevelSpec, fieldT: number, built: ReturnType<typeof buildLevelModel>, solved: SolveResult): ExactAtField {
   const noNucleus = spec.kind === 'hyperfine' && spec.twoI === 0;
   const errors = solved.issues.filter((i) => i.severity === 'error').map((i) => ({ code: i.code, message: i.message }));
   const notices = solved.issues.flatMap((i) => (i.severity === 'error' ? [] : [{ code: i.code, severity: i.severity, message: i.message }]));
@@ -58,19 +73,12 @@ function solveExactAtField(spec: LevelSpec, fieldT: number): ExactAtField {
   const r = regime(spec, fieldT, undefined, built);
   // The limits stay unsearched until read (JSON output, a regime note, a hover): `check` of a file
   // at lab fields needs only the verdict (physics/engine/regime.ts, docs/speed.md).
-  const regimeJson: RegimeResultJson | undefined = r.issues.some((i) => i.severity === 'error')
-    ? undefined
-    : {
-        x: Number.isFinite(r.x) ? r.x : null,
-        verdict: r.verdict,
-        get linear_limit_T() {
-          return Number.isFinite(r.linearLimitT) ? r.linearLimitT : null;
-        },
-        get strong_limit_T() {
-          return Number.isFinite(r.strongLimitT) ? r.strongLimitT : null;
-        },
-        fraction: r.fraction,
-      };
+  let regimeJson: RegimeResultJson | undefined;
+  if (!r.issues.some((i) => i.severity === 'error')) {
+    // The limits stand in their places (key order) and are searched when first read (eval/regimeLimits.ts).
+    regimeJson = { x: Number.isFinite(r.x) ? r.x : null, verdict: r.verdict, linear_limit_T: null, strong_limit_T: null, fraction: r.fraction };
+    defineRegimeLimits(regimeJson, r, spec, fieldT);
+  }
   return { exact: solved.states.map((s) => toJson(s, noNucleus)), ...(regimeJson ? { regime: regimeJson } : {}), errors: [], notices };
 }
 

@@ -4,13 +4,14 @@
  */
 import type { GJLookup } from './gJLookup';
 import type { Problem } from '../format/ast';
-import { electricDipoleLine, selectionRules, type LineTerm } from '../physics/transitions';
-import { lineComponentRows } from './lineComponents';
+import { electricDipoleLineChecks, selectionRules, type LineTerm } from '../physics/transitions';
+import { defineLineComponents } from './lineComponentsRecipe';
 import type { LevelModel, LineModel, SettingsModel } from '../model/types';
 import { evaluateTermLine } from './termLineEvaluation';
 import type { WorkingField } from './levelEvaluation';
 import { forwardIssues } from './forwardIssues';
 import { hyperfineSpec } from './levelSpec';
+import { solvedAtField } from './exactAtField';
 import type { LineResult } from './resultTypes';
 
 export function evaluateLine(
@@ -52,16 +53,15 @@ export function evaluateLine(
       : {};
   const at = fields.length > 0 ? fields : [{ source: { kind: 'field' as const, name: 'zero' }, tesla: 0, range: line.nameRange }];
   for (const f of at) {
-    const r = electricDipoleLine(ls, us, f.tesla, energies);
+    // Checked here (issues, sum rule); the components themselves are built when first read.
+    const r = electricDipoleLineChecks(ls, us, f.tesla, { ...energies, solve: solvedAtField });
     report(r.issues);
     if (r.issues.some((i) => i.severity === 'error')) continue;
     if (result.g_eff === undefined && r.gEff) result.g_eff = r.gEff.formula;
     if (r.lineCentreHz !== null) result.line_centre_Hz = r.lineCentreHz;
-    result.at_fields.push({
-      source: f.source,
-      field_T: f.tesla,
-      components: lineComponentRows(r.components),
-    });
+    const point = { source: f.source, field_T: f.tesla };
+    defineLineComponents(point, { kind: 'components', lower: ls, upper: us, fieldT: f.tesla, energies });
+    result.at_fields.push(point as LineResult['at_fields'][number]);
   }
   return result;
 }

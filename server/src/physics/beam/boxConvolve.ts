@@ -51,8 +51,12 @@ function planShift(edges: Float64Array, shift: number, name: string, wide: Uint8
   let count = 0;
   let k = 0;
   while (k < n && edges[k + 1] <= edges[0] + shift) k++;
-  for (let j = 0; j < n; j++) {
+  // start[n] is written by the same store as the others: a store of its own after the loop had no
+  // type feedback when the loop was optimised mid-call, and deoptimised this function about 200
+  // times in a large file's evaluation.
+  for (let j = 0; j <= n; j++) {
     start[j] = count;
+    if (j === n) break;
     const y2 = edges[j + 1] + shift;
     if (wide[j] === 1) {
       // No pieces needed (convolveBox uses the closed form); just keep k on the bin containing y2.
@@ -86,7 +90,6 @@ function planShift(edges: Float64Array, shift: number, name: string, wide: Uint8
       if (k < n && u >= edges[k + 1]) k++;
     }
   }
-  start[n] = count;
   return { start, k: ks, w };
 }
 

@@ -224,10 +224,18 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][], re
     summaries.push({ label: sublevels[i].label, weight: weights[i], coefficientM3PerS2: ks[i], meanDeflectionM, peakM });
   }
 
-  const activeIdx = weights.map((w, i) => (w > 0 && Number.isFinite(ownPeaks[i]) ? i : -1)).filter((i) => i >= 0);
-  const groups = fixedGroups
-    ? fixedGroups.map((g) => g.filter((i) => activeIdx.includes(i))).filter((g) => g.length > 0)
-    : groupByPeakPosition(ownPeaks, activeIdx, options.mergeFraction * image.kernelFwhmM);
+  // Plain loops: map-then-filter here deoptimised this function on most calls of some runs (wrong
+  // array map, over 1,000 times in a large file's evaluation), leaving the rest of each call to the interpreter.
+  const activeIdx: number[] = [];
+  for (let i = 0; i < weights.length; i++) if (weights[i] > 0 && Number.isFinite(ownPeaks[i])) activeIdx.push(i);
+  let groups: number[][];
+  if (fixedGroups) {
+    groups = [];
+    for (const g of fixedGroups) {
+      const kept = g.filter((i) => activeIdx.includes(i));
+      if (kept.length > 0) groups.push(kept);
+    }
+  } else groups = groupByPeakPosition(ownPeaks, activeIdx, options.mergeFraction * image.kernelFwhmM);
   const peaks: PatternPeak[] = [];
   const profile = scratchFloat64('pattern.profile', n);
   for (const g of groups) {

@@ -85,16 +85,42 @@ export function jetLaw(meanSpeed: number, relativeSpread: number, panels = 1024)
   const key = `${meanSpeed}|${relativeSpread}|${panels}`;
   const hit = memo.get(key);
   if (hit) return hit;
-  const s = speedRatioForSpread(relativeSpread);
-  const m = jetShapeMoments(s);
-  const alpha = meanSpeed / m.mean;
-  const law = tabulate(s, alpha, m, panels);
+  const table = shapeTable(relativeSpread, panels);
+  const alpha = meanSpeed / table.m.mean;
+  const law = lawFromTable(table, alpha);
   if (memo.size > 32) memo.clear();
   memo.set(key, law);
   return law;
 }
 
-function tabulate(s: number, alpha: number, m: ShapeMoments, panels: number): SpeedLaw {
+/** The law's shape in units of α: it depends on the spread alone, so jets of any speed share it. */
+interface ShapeTable {
+  s: number;
+  m: ShapeMoments;
+  lo: number;
+  hi: number;
+  h: number;
+  panels: number;
+  cum: Float64Array;
+  cumInv: Float64Array;
+  dens: Float64Array;
+}
+
+/** Shape tables by spread and panels: many sources (one per beam and species) share a few spreads. */
+const tables = new Map<string, ShapeTable>();
+
+function shapeTable(relativeSpread: number, panels: number): ShapeTable {
+  const key = `${relativeSpread}|${panels}`;
+  const hit = tables.get(key);
+  if (hit) return hit;
+  const s = speedRatioForSpread(relativeSpread);
+  const table = tabulate(s, jetShapeMoments(s), panels);
+  if (tables.size > 32) tables.clear();
+  tables.set(key, table);
+  return table;
+}
+
+function tabulate(s: number, m: ShapeMoments, panels: number): ShapeTable {
   const lo = Math.max(0, s - RANGE_IN_ALPHA);
   const hi = s + RANGE_IN_ALPHA;
   const h = (hi - lo) / panels;
@@ -116,6 +142,11 @@ function tabulate(s: number, alpha: number, m: ShapeMoments, panels: number): Sp
     cum[p + 1] = cum[p] + a;
     cumInv[p + 1] = cumInv[p] + b;
   }
+  return { s, m, lo, hi, h, panels, cum, cumInv, dens };
+}
+
+function lawFromTable(table: ShapeTable, alpha: number): SpeedLaw {
+  const { s, m, lo, hi, h, panels, cum, cumInv, dens } = table;
   const total = cum[panels];
   const totalInv = cumInv[panels];
   // Cubic Hermite on panel k with exact slopes.

@@ -68,6 +68,7 @@ function components(
   twoJu: number,
   centreHz: number | null,
   dropBelow: number,
+  build = true,
 ): Computed {
   const all: DipoleComponent[] = [];
   const centroid = emptyCentroidSums();
@@ -82,6 +83,7 @@ function components(
       const strength = norm * amp * amp;
       if (strength === 0) continue;
       total += strength;
+      if (!build) continue;
       const q = (dTwoM / 2) as -1 | 0 | 1;
       const polarization = polarizationOf(q);
       const offsetHz = u.energyHz - l.energyHz;
@@ -112,13 +114,32 @@ export function electricDipoleLine(
   fieldT: number,
   opts: DipoleLineOptions = {},
 ): DipoleLineResult {
+  return dipoleLine(lower, upper, fieldT, opts, true);
+}
+
+/**
+ * What `electricDipoleLine` reports (its issues, the sum rule checked all the same, its line
+ * centre and formula g_eff) without building the components or the centroid g_eff: for a caller
+ * that builds the components later, if at all. `components` is empty and `gEff.fromCentroid` NaN.
+ */
+export function electricDipoleLineChecks(
+  lower: HyperfineLevelSpec,
+  upper: HyperfineLevelSpec,
+  fieldT: number,
+  opts: DipoleLineOptions = {},
+): DipoleLineResult {
+  return dipoleLine(lower, upper, fieldT, opts, false);
+}
+
+function dipoleLine(lower: HyperfineLevelSpec, upper: HyperfineLevelSpec, fieldT: number, opts: DipoleLineOptions, build: boolean): DipoleLineResult {
   const issues: TransitionIssue[] = [];
   // A line the term data forbid outright (error) gets no components, like any other error.
   if (opts.terms) issues.push(...selectionRules(opts.terms.lower, opts.terms.upper));
   if (hasError(issues) || !checkPair(lower, upper, issues)) return empty(fieldT, issues);
 
-  const lo = solveLevel(lower, fieldT);
-  const up = solveLevel(upper, fieldT);
+  const solve = opts.solve ?? solveLevel;
+  const lo = solve(lower, fieldT);
+  const up = solve(upper, fieldT);
   issues.push(...fromLevel('Lower level', lo.issues), ...fromLevel('Upper level', up.issues));
   if (lo.states.length === 0 || up.states.length === 0) return empty(fieldT, issues);
 
@@ -128,7 +149,7 @@ export function electricDipoleLine(
     issues.push(issue('warning', 'line-upper-below-lower', 'The upper level lies below the lower one; the strengths are normalised on the level called upper.'));
   }
   const dropBelow = Number.isFinite(opts.dropBelow) && (opts.dropBelow as number) >= 0 ? (opts.dropBelow as number) : 1e-12;
-  const got = components(lo.states, up.states, lower.twoJ, upper.twoJ, centreHz, dropBelow);
+  const got = components(lo.states, up.states, lower.twoJ, upper.twoJ, centreHz, dropBelow, build);
   if (got.sumRuleDeviation > SUM_RULE_TOLERANCE) {
     issues.push(
       issue('warning', 'line-sum-rule', `The strengths out of one upper sublevel add up to 1 only within ${got.sumRuleDeviation.toExponential(1)}; the eigenvectors may be inaccurate.`),
@@ -138,15 +159,15 @@ export function electricDipoleLine(
   // Centroid g_eff: exact at any field in this model, so take it at the field unless that is ~0.
   let centroidFieldT = fieldT;
   let sums = got.centroid;
-  if (Math.abs(fieldT) < 1e-6) {
+  if (build && Math.abs(fieldT) < 1e-6) {
     centroidFieldT = CENTROID_PROBE_T;
-    const lp = solveLevel(lower, centroidFieldT).states;
-    const upp = solveLevel(upper, centroidFieldT).states;
+    const lp = solve(lower, centroidFieldT).states;
+    const upp = solve(upper, centroidFieldT).states;
     sums = components(lp, upp, lower.twoJ, upper.twoJ, null, dropBelow).centroid;
   }
   const gEff = {
     formula: effectiveLandeFactor({ twoJ: lower.twoJ, gJ: lower.gJ }, { twoJ: upper.twoJ, gJ: upper.gJ }),
-    fromCentroid: landeFromSums(sums, centroidFieldT),
+    fromCentroid: build ? landeFromSums(sums, centroidFieldT) : NaN,
     centroidFieldT,
   };
   return { fieldT, components: got.components, gEff, lineCentreHz: centreHz, sumRuleDeviation: got.sumRuleDeviation, issues };

@@ -26,7 +26,7 @@ export type {
   SublevelTag,
   TransitionIssue,
 } from './types';
-export { electricDipoleLine, CENTROID_PROBE_T } from './electricDipoleLine';
+export { electricDipoleLine, electricDipoleLineChecks, CENTROID_PROBE_T } from './electricDipoleLine';
 export { stickSpectrum } from './stickSpectrum';
 export { termDipoleLine } from './termDipoleLine';
 export type { TermLineEnd, TermLineResult } from './termDipoleLine';

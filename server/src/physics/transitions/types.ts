@@ -5,7 +5,7 @@
  * angular momenta as twice their value. See docs/transitions.md.
  */
 import type { Parity } from '../termSymbol';
-import type { EngineIssue, HighFieldLabel, LowFieldLabel } from '../engine';
+import type { EngineIssue, HighFieldLabel, HyperfineLevelSpec, LowFieldLabel, SolveResult } from '../engine';
 
 /** Problems come back as values with the engine's shape (severity, stable code, plain words). */
 export type TransitionIssue = EngineIssue;
@@ -67,6 +67,11 @@ export interface DipoleLineOptions {
   terms?: { lower: LineTerm; upper: LineTerm };
   /** Components weaker than this fraction of the strongest are dropped (default 1e-12). */
   dropBelow?: number;
+  /**
+   * Solves a level at a field (default: the engine's `solveLevel`). A caller that has already
+   * solved the levels passes its solutions here; they are only read.
+   */
+  solve?: (spec: HyperfineLevelSpec, fieldT: number) => SolveResult;
 }
 
 export interface DipoleLineResult {
