@@ -301,10 +301,14 @@ class SetupParser {
     if (p.kind === 'atom') {
       this.report('syntax-use-path', `put the path in double quotes: use "${clip(p.text)}"`, p.start, p.end, { data: { suggestions: [`"${p.text}"`] } });
       node.path = this.span(p);
+      node.quotesWrong = true;
     } else {
       const closed = p.text.length >= 2 && p.text.endsWith('"');
       const innerEnd = closed ? p.end - 1 : p.end;
-      if (!closed) this.report('syntax-use-path', `the path has no closing quote: ${how}`, p.start, p.end, { data: { suggestions: [`${p.text}"`] } });
+      if (!closed) {
+        this.report('syntax-use-path', `the path has no closing quote: ${how}`, p.start, p.end, { data: { suggestions: [`${p.text}"`] } });
+        node.quotesWrong = true;
+      }
       if (innerEnd > p.start + 1) node.path = spanOf(this.ls, p.start + 1, innerEnd);
       else if (closed) this.report('syntax-use-path', `the path is empty: ${how}`, p.start, p.end);
     }
