@@ -213,6 +213,13 @@ const CASES: Case[] = [
       'term-j-out-of-range: Change J to 3/2 →   level q: 3p 2P° 3/2',
     ],
   },
+  {
+    name: 'an unknown unit in a vector or a field source is said as in any other setting; a stray word after a plain number is left over',
+    text: 'slab pole\n  size          = 10, 20, 5 mn\n  centre        = 0, 0, -8 cm\n  magnetisation = 1.2 T along y\ncoil c\n  radius  = 3 cn\n  turns   = 40 x\n  current = 2 Amp\n',
+    findings: ['2:29-31 unit-unknown [mn]', '6:15-17 unit-unknown [cn]', '7:16-17 value-extra [x]', '8:15-18 unit-unknown [Amp]'],
+    fixes: ['value-extra: Remove the unused rest of the value →   turns   = 40'],
+    says: ["unknown unit 'mn': length needs m, cm, mm or um", "unknown unit 'Amp': current needs A, mA or kA", "turns takes one plain number (number of turns, e.g. 120); 'x' is not used"],
+  },
 ];
 
 function describeFindings(text: string, notes = false): { findings: string[]; fixes: string[]; messages: string[] } {

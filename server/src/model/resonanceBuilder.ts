@@ -2,7 +2,7 @@
 import type { BlockNode, SettingNode } from '../format/ast';
 import { resolveLevel, type NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
-import { readPartQuantity, readSettingQuantity, readSettingWord, singlePart } from './settingReaders';
+import { readPartQuantity, readSettingQuantity, readSettingWord, singlePart, strayUnit } from './settingReaders';
 import type { LevelModel, NameUse, ResonanceModel, SpeciesModel, SublevelName } from './types';
 
 /** Default search range when the file gives none: wide enough for electron-spin resonance at X band. */
@@ -88,6 +88,11 @@ export function readLevelSetting(s: SettingNode, species: NameIndex<SpeciesModel
 /** `lower = 1 -1` (F and m_F; J and m_J for a term), also written `1, -1`. */
 export function readSublevelName(s: SettingNode, problems: ProblemList): SublevelName | undefined {
   const parts = s.groups.flat();
+  const stray = parts.length === 1 ? strayUnit(parts[0]!) : undefined;
+  if (stray) {
+    problems.add('resonance-sublevel-malformed', `'${stray.text}' is not a number: write ${s.key.text} = <F> <m_F>, e.g. ${s.key.text} = 2 +1 (F and m_F of the low-field label)`, stray.range);
+    return undefined;
+  }
   const bad = (): undefined => {
     problems.add('resonance-sublevel-malformed', `write ${s.key.text} = <F> <m_F>, e.g. ${s.key.text} = 2 +1 (F and m_F of the low-field label)`, s.valueText.range);
     return undefined;

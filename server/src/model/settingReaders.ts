@@ -2,8 +2,8 @@
  * Readers that turn one `key = value` setting into an SI number, an exact spin or a word,
  * reporting a plain-words problem at the value's range when the value does not fit.
  */
-import type { ParsedNumber, SettingNode, ValuePart } from '../format/ast';
-import { readQuantity, wordForUnit, type Dimension } from '../format/units';
+import type { ParsedNumber, SettingNode, Spanned, ValuePart } from '../format/ast';
+import { isUnitText, readQuantity, type Dimension } from '../format/units';
 import type { ProblemList } from './problems';
 import type { Valued } from './types';
 
@@ -36,14 +36,6 @@ export function readSettingQuantity(
   problems: ProblemList,
   what: string,
 ): Valued<number> | undefined {
-  const parts = setting.groups.flat();
-  if (setting.groups.length === 1 && parts.length === 2 && parts[0]!.kind === 'number') {
-    const unit = wordForUnit(parts[1]!, dimension);
-    if (unit) {
-      problems.push(unit);
-      return undefined;
-    }
-  }
   const part = singlePart(setting, problems, what);
   if (!part) return undefined;
   return readPartQuantity(part, dimension, problems, setting.key.text);
@@ -71,10 +63,21 @@ export function isUnreadable(part: ValuePart | undefined): boolean {
   return part !== undefined && part.kind === 'word' && part.unreadable === true;
 }
 
+/** The word after a number that the value reads as its unit but is no unit (`40 x`), for settings that take no unit. */
+export function strayUnit(part: ValuePart): Spanned | undefined {
+  return part.kind === 'quantity' && !isUnitText(part.unit.text) ? part.unit : undefined;
+}
+
 /** A plain number (no unit). */
 export function readSettingNumber(setting: SettingNode, problems: ProblemList, what: string): Valued<number> | undefined {
   const part = singlePart(setting, problems, what);
   if (!part) return undefined;
+  const stray = strayUnit(part);
+  if (stray && part.kind === 'quantity') {
+    // `turns = 40 x`: no unit is meant; the word is left over.
+    problems.add('value-extra', `${setting.key.text} takes one plain number (${what}); '${stray.text}' is not used`, stray.range);
+    return withUncertainty(part.number, { start: part.range.start, end: stray.range.start });
+  }
   if (part.kind !== 'number') {
     const got = part.kind === 'quantity' ? `a quantity with unit ${part.unit.text}` : `'${part.text}'`;
     problems.add('value-not-number', `${setting.key.text} needs a plain number (${what}), got ${got}`, part.range);
