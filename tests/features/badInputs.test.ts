@@ -220,6 +220,30 @@ const CASES: Case[] = [
     fixes: ['value-extra: Remove the unused rest of the value →   turns   = 40'],
     says: ["unknown unit 'mn': length needs m, cm, mm or um", "unknown unit 'Amp': current needs A, mA or kA", "turns takes one plain number (number of turns, e.g. 120); 'x' is not used"],
   },
+  {
+    name: 'a decimal comma where one value goes: one error at the number, and the fix that writes the point',
+    text: 'field b = 3,2 G\nmagnet m\n  field = 0,45 T\n  gradient = 180 T/m\n  length = 8 cm\nspecies Na23\n  level g: 3s 2S1/2 A = 885,8 MHz\n',
+    findings: ['1:11-14 value-decimal-comma [3,2]', '3:11-15 value-decimal-comma [0,45]', '7:25-30 value-decimal-comma [885,8]'],
+    fixes: [
+      "value-decimal-comma: Replace with '3.2' → field b = 3.2 G",
+      "value-decimal-comma: Replace with '0.45' →   field = 0.45 T",
+      "value-decimal-comma: Replace with '885.8' →   level g: 3s 2S1/2 A = 885.8 MHz",
+    ],
+    says: ["'3,2' has a decimal comma; a comma separates list items, so write 3.2"],
+  },
+  {
+    name: 'an arrow typed otherwise (=>, -->, an em dash, a blank inside) is one error at it, with the fix that writes ->',
+    text: 'species Rb87\n  level g: 5s 2S1/2\n  level p: 5p 2P°3/2\nline A: g => p\nline B: g --> p\nline C: g \u2014> p\nline D: g - > p\nline E: g \u2192 p\n',
+    findings: ['4:11-13 syntax-missing-arrow [=>]', '5:11-14 syntax-missing-arrow [-->]', '6:11-13 syntax-missing-arrow [\u2014>]', '7:11-14 syntax-missing-arrow [- >]'],
+    fixes: ["syntax-missing-arrow: Write '->' → line A: g -> p", "syntax-missing-arrow: Write '->' → line B: g -> p", "syntax-missing-arrow: Write '->' → line C: g -> p", "syntax-missing-arrow: Write '->' → line D: g -> p"],
+    says: ["'=>' is not the arrow: write '->' between the levels"],
+  },
+  {
+    name: 'a degree sign before K is an unknown unit with the fix that drops it, not a missing unit',
+    text: 'species Rb87\n  level g: 5s 2S1/2\nbeam b\n  level = g\n  source = oven 400 °K\n  slits = 80 um, 50 um apart 40 cm\n  drift = 50 cm\n  detector = 10 um\n',
+    findings: ["3:6-7 beam-incomplete [b]", '5:21-23 unit-unknown [°K]'],
+    fixes: ["unit-unknown: Change to 'K' →   source = oven 400 K"],
+  },
 ];
 
 function describeFindings(text: string, notes = false): { findings: string[]; fixes: string[]; messages: string[] } {

@@ -250,6 +250,16 @@ class SetupParser {
     if (rest[0]?.kind === 'arrow') {
       link.arrow = rangeOn(this.ls, rest[0].start, rest[0].end);
       rest = rest.slice(1);
+    } else if (fromToken) {
+      // `=>`, `-->`, `—>`: meant as the arrow, so said as a wrong arrow, not as a line without levels.
+      const taken = lookalikeArrow(rest);
+      if (taken > 0) {
+        const start = rest[0]!.start;
+        const end = rest[taken - 1]!.end;
+        this.report('syntax-missing-arrow', `'${clip(this.ls.text.slice(start, end))}' is not the arrow: write '->' between the levels`, start, end);
+        link.arrow = rangeOn(this.ls, start, end);
+        rest = rest.slice(taken);
+      }
     }
     if (rest[0]?.kind === 'atom') {
       const to = rest[0];
@@ -532,4 +542,15 @@ class SetupParser {
   private keyOffsets(node: SettingNode): [number, number] {
     return [this.ls.lineStart + node.key.range.start.character, this.ls.lineStart + node.key.range.end.character];
   }
+}
+
+/** Arrows typed otherwise (`=>`, `-->`, `—>`, `- >`): how many tokens at the start of `rest` make one, 0 when none. */
+function lookalikeArrow(rest: readonly Token[]): number {
+  const [a, b] = rest;
+  if (!a) return 0;
+  if (a.kind === 'atom' && /^(?:=+>|-{2,}>|[—–−]+>|>)$/.test(a.text)) return 1;
+  const firstHalf = a.kind === 'equals' || (a.kind === 'atom' && /^[-—–−=]+$/.test(a.text));
+  if (firstHalf && b?.kind === 'atom' && b.text === '>') return 2;
+  // `-->` scans as `-` and `->`.
+  return a.kind === 'atom' && /^[-—–−]+$/.test(a.text) && b?.kind === 'arrow' && a.end === b.start ? 2 : 0;
 }

@@ -235,6 +235,8 @@ export function suggestUnitNames(name: string): string[] {
  */
 export function looksLikeMisspeltUnit(word: string): boolean {
   if (word.length > 16) return false;
+  // A degree sign before a letter (`°K`, `°F`) is a temperature unit typed another way.
+  if (/^°\p{L}$/u.test(word)) return true;
   const syntax = parseUnitSyntax(word);
   // A broken compound such as `T//m` or `cm^` is still meant as a unit.
   if (!syntax.ok) return /^[\p{L}%°][\p{L}\d_%°·*/^⁻⁺⁰-⁹+-]*$/u.test(word) && /[/^*·]/.test(word);
@@ -296,7 +298,9 @@ function fittingSuggestions(e: Extract<UnitEvaluation, { ok: false }>, unitText:
   if (fits.length > 0 && fits.length === all.length) return { message: e.message, suggestions: all };
   const name = unitText.slice(e.start, e.end);
   // Nothing close among all units: look among those of the needed dimension only (`Tesla` → `tesla`).
-  const near = fits.length > 0 ? fits : suggestNames(name, [...new Set([...DIMENSIONS[expected].examples, ...unitNamesOf(expected)])]).filter(fitsWhole);
+  // `°K` is K with a degree sign the SI does not write.
+  const withoutDegree = name.startsWith('°') ? [name.slice(1)].filter(fitsWhole) : [];
+  const near = fits.length > 0 ? fits : withoutDegree.length > 0 ? withoutDegree : suggestNames(name, [...new Set([...DIMENSIONS[expected].examples, ...unitNamesOf(expected)])]).filter(fitsWhole);
   const message = near.length > 0 ? `unknown unit '${clip(name)}'${didYouMeanText(near)}` : `unknown unit '${clip(name)}': ${label} needs ${examples}`;
   return { message, suggestions: near };
 }

@@ -2,7 +2,7 @@
  * Readers that turn one `key = value` setting into an SI number, an exact spin or a word,
  * reporting a plain-words problem at the value's range when the value does not fit.
  */
-import type { ParsedNumber, SettingNode, Spanned, ValuePart } from '../format/ast';
+import type { ParsedNumber, Range, SettingNode, Spanned, ValuePart } from '../format/ast';
 import { isUnitText, readQuantity, type Dimension } from '../format/units';
 import type { ProblemList } from './problems';
 import type { Valued } from './types';
@@ -19,6 +19,11 @@ export function singlePart(setting: SettingNode, problems: ProblemList, what: st
     problems.add('value-missing', `${setting.key.text} needs a value (${what})`, setting.range);
     return undefined;
   }
+  const decimal = decimalComma(setting);
+  if (decimal) {
+    problems.add('value-decimal-comma', `'${decimal.written}' has a decimal comma; a comma separates list items, so write ${decimal.meant}`, decimal.range, { data: { suggestions: [decimal.meant] } });
+    return undefined;
+  }
   if (parts.length > 1 || setting.groups.length > 1) {
     const extra = parts[1] ?? parts[0]!;
     problems.add('value-extra', `${setting.key.text} takes one value (${what}); the rest of the line is not used`, {
@@ -27,6 +32,23 @@ export function singlePart(setting: SettingNode, problems: ProblemList, what: st
     });
   }
   return isUnreadable(parts[0]) ? undefined : parts[0];
+}
+
+/**
+ * `3,2 G` where one value goes: a whole number, a comma with no blank either side, then digits.
+ * Read as a list it gave a missing unit with a fix writing `3 T,2 G`, and an unused rest.
+ */
+function decimalComma(setting: SettingNode): { written: string; meant: string; range: Range } | undefined {
+  const [first, second] = setting.groups;
+  if (setting.groups.length !== 2 || first?.length !== 1 || !second?.[0]) return undefined;
+  const whole = first[0]!;
+  const rest = second[0];
+  if (whole.kind !== 'number' || !/^[+\-\u2212]?\d+$/.test(whole.text) || rest.kind === 'word' || !/^\d/.test(rest.text)) return undefined;
+  const { end } = whole.range;
+  const next = rest.range.start;
+  if (end.line !== next.line || next.character !== end.character + 1) return undefined;
+  const digits = /^\d+/.exec(rest.text)![0];
+  return { written: `${whole.text},${digits}`, meant: `${whole.text}.${digits}`, range: { start: whole.range.start, end: { line: next.line, character: next.character + digits.length } } };
 }
 
 /** A quantity of the given dimension, converted to SI. */
