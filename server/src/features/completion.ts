@@ -12,7 +12,7 @@ import { readNumber, readNumberPrefix, startsLikeNumber } from '../format/number
 import { BLOCK_KEYS, BLOCK_WORDS, isBlockWord, LEVEL_KEYS, LEVEL_WORD, USE_WORD } from '../format/schema';
 import type { Token } from '../format/scanner';
 import { DATA_KINDS } from '../model/dataBuilder';
-import { PROFILE_PARAMETERS, SPECTRAL_PARAMETERS } from '../model/fitTypes';
+import { FIT_PARAMETERS } from '../model/fitTypes';
 import { SLOWER_DESIGNS } from '../model/slowerBuilder';
 import { SPECTRUM_DIRECTIONS, SPECTRUM_LIGHTS } from '../model/spectrumRequestBuilder';
 import { DIRECTION_NAMES } from '../model/vectorReader';
@@ -139,7 +139,7 @@ function valueCompletions(c: LineContext, model: SetupModel | undefined, block: 
     case 'fit.data':
       return namesInList(valueTokens, words, (model?.data ?? []).map((d) => d.name), c);
     case 'fit.free':
-      return namesInList(valueTokens, words, [...new Set<string>([...SPECTRAL_PARAMETERS, ...PROFILE_PARAMETERS])], c);
+      return namesInList(valueTokens, words, [...FIT_PARAMETERS], c);
     case 'slower.design':
       return empty ? wordItems(SLOWER_DESIGNS, c.replace, 'the shape of the field profile') : [];
     case 'slower.repump':
