@@ -11,6 +11,7 @@ import type { BlockKind, BlockNode } from '../format/ast';
 import { readNumber, readNumberPrefix, startsLikeNumber } from '../format/numbers';
 import { BLOCK_KEYS, BLOCK_WORDS, isBlockWord, LEVEL_KEYS, LEVEL_WORD, USE_WORD } from '../format/schema';
 import type { Token } from '../format/scanner';
+import { halfText, signedHalfText } from '../eval/halves';
 import { DATA_KINDS } from '../model/dataBuilder';
 import { FIT_PARAMETERS } from '../model/fitTypes';
 import { SLOWER_DESIGNS } from '../model/slowerBuilder';
@@ -198,11 +199,9 @@ function sublevelItems(level: LevelModel | undefined, c: LineContext): Completio
   const twoJ = level?.kind === 'level' ? level.term?.twoJ : undefined;
   if (!level || twoJ === undefined || twoJ === null) return [];
   const twoI = level.species.twoI.value;
-  const half = (two: number): string => (two % 2 === 0 ? String(two / 2) : `${two}/2`);
-  const signed = (two: number): string => (two > 0 ? `+${half(two)}` : two < 0 ? `-${half(-two)}` : '0');
   const labels: string[] = [];
   for (let twoF = Math.abs(twoJ - twoI); twoF <= twoJ + twoI; twoF += 2) {
-    for (let twoM = twoF; twoM >= -twoF; twoM -= 2) labels.push(`${half(twoF)} ${signed(twoM)}`);
+    for (let twoM = twoF; twoM >= -twoF; twoM -= 2) labels.push(`${halfText(twoF)} ${signedHalfText(twoM)}`);
   }
   return wordItems(labels, c.replace, `F and m_F of a sublevel of ${level.name}`);
 }

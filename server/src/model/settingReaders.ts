@@ -98,7 +98,8 @@ export function readSettingNumber(setting: SettingNode, problems: ProblemList, w
   if (stray && part.kind === 'quantity') {
     // `turns = 40 x`: no unit is meant; the word is left over.
     problems.add('value-extra', `${setting.key.text} takes one plain number (${what}); '${stray.text}' is not used`, stray.range);
-    return withUncertainty(part.number, { start: part.range.start, end: stray.range.start });
+    const numberEnd = { line: part.range.start.line, character: part.range.start.character + part.text.search(/\s|$/) };
+    return withUncertainty(part.number, { start: part.range.start, end: numberEnd });
   }
   if (part.kind !== 'number') {
     const got = part.kind === 'quantity' ? `a quantity with unit ${part.unit.text}` : `'${part.text}'`;
