@@ -24,7 +24,7 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
   context.subscriptions.push(watcher);
   // `sublevel.trace.server` alone turns the protocol trace on (see host/traceChannel.ts).
   const traceOutputChannel = createTraceChannel({
-    readSetting: () => vscode.workspace.getConfiguration('sublevel').get<string>('trace.server'),
+    readSetting: () => vscode.workspace.getConfiguration('sublevel').get<unknown>('trace.server'),
     onSettingChange: (listener) => vscode.workspace.onDidChangeConfiguration((event) => {
       if (event.affectsConfiguration('sublevel.trace.server')) listener();
     }),

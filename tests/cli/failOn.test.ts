@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { cli } from './runCli';
 
 const CLEAN = 'examples/lithium-beam.sublevel'; // three notes (info), no warning, no error
-const MISTAKES = 'examples/mistakes.sublevel'; // 7 errors, 3 warnings, 1 note
+const MISTAKES = 'examples/mistakes.sublevel'; // 7 errors, 4 warnings, notes
 
 describe('check --fail-on', () => {
   it('defaults to error: notes and warnings alone exit 0, as before the option', () => {
@@ -32,8 +32,8 @@ describe('check --quiet', () => {
     expect(r.err).toBe('');
     const severities = r.out.split('\n').map((l) => l.split(' ')[1]);
     expect(severities.filter((s) => s === 'error')).toHaveLength(7);
-    expect(severities.filter((s) => s === 'warning')).toHaveLength(3);
-    expect(severities).toHaveLength(10);
+    expect(severities.filter((s) => s === 'warning')).toHaveLength(4);
+    expect(severities).toHaveLength(11);
   });
 
   it('prints nothing at all for a clean file at the default threshold', () => {

@@ -12,14 +12,14 @@ import { createTraceChannel, TRACE_CHANNEL_NAME, type TraceChannelHost } from '.
 const LEVELS = { Off: 0, Trace: 1, Debug: 2, Info: 3, Warning: 4, Error: 5 } as unknown as typeof vscode.LogLevel;
 
 interface FakeHost extends TraceChannelHost {
-  setting: string | undefined;
-  change(value: string | undefined): void;
+  setting: unknown;
+  change(value: unknown): void;
   lines: string[];
   opened: string[];
   watching: number;
 }
 
-function fakeHost(setting: string | undefined): FakeHost {
+function fakeHost(setting: unknown): FakeHost {
   const listeners = new Set<() => void>();
   const host: FakeHost = {
     setting,
@@ -50,6 +50,14 @@ describe('trace channel wiring', () => {
     expect(createTraceChannel(fakeHost(undefined)).logLevel).toBe(LEVELS.Off);
     expect(createTraceChannel(fakeHost('messages')).logLevel).toBe(LEVELS.Trace);
     expect(createTraceChannel(fakeHost('verbose')).logLevel).toBe(LEVELS.Trace);
+  });
+
+  it('reads the object form of the setting by its verbosity, as the language client does', () => {
+    expect(createTraceChannel(fakeHost({ verbosity: 'verbose' })).logLevel).toBe(LEVELS.Trace);
+    expect(createTraceChannel(fakeHost({ verbosity: 'messages', format: 'json' })).logLevel).toBe(LEVELS.Trace);
+    expect(createTraceChannel(fakeHost({ verbosity: 'off' })).logLevel).toBe(LEVELS.Off);
+    expect(createTraceChannel(fakeHost({})).logLevel).toBe(LEVELS.Off);
+    expect(createTraceChannel(fakeHost(null)).logLevel).toBe(LEVELS.Off);
   });
 
   it('writes trace lines as plain timed text to its own channel, opened on the first line', () => {

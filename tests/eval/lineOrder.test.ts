@@ -21,8 +21,8 @@ describe('line order and whole-term lines', () => {
     expect(forward.written_as_emission).toBeUndefined();
     expect(back.at_fields[0]!.components.map((c) => c.offset_Hz)).toEqual(forward.at_fields[0]!.components.map((c) => c.offset_Hz));
     for (const c of back.at_fields[0]!.components) expect(c.absolute_Hz!).toBeGreaterThan(0);
-    expect(codes(NA + 'line L: p -> g\n')).toContain('5:1 info line-written-as-emission');
-    expect(codes(NA + 'line L: g -> p\n')).not.toContain('5:1 info line-written-as-emission');
+    expect(codes(NA + 'line L: p -> g\n')).toContain('5:9 info line-written-as-emission');
+    expect(codes(NA + 'line L: g -> p\n')).not.toContain('5:9 info line-written-as-emission');
   });
 
   it('two levels of equal energy: a warning, offsets only, no centre (no infinite wavelength)', () => {

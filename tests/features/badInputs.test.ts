@@ -16,6 +16,8 @@ interface Case {
   fixes?: string[];
   /** Words the messages must hold. */
   says?: string[];
+  /** Count notes (information) among the findings too. */
+  notes?: boolean;
 }
 
 const CASES: Case[] = [
@@ -161,12 +163,93 @@ const CASES: Case[] = [
     text: 'species Rb87\n  level ground: 5s 2S1/2\nfield bias = 0.5 exact\n',
     findings: ['3:14-17 unit-missing [0.5]', '3:18-23 value-extra [exact]'],
   },
+  {
+    // Both 3s and 4s are even (parity (-1)^Σl, textbook): the fault is the pair of levels, not the line's name.
+    name: 'a line between levels of one parity, or written upper level first, marks its two levels',
+    text: 'species Na23\n  level g: 3s 2S1/2\n  level s4: 4s 2S1/2\n  level p: 3p 2P°3/2\nline S: g -> s4\nline D2: p -> g\n',
+    findings: ['5:9-16 line-parity-unchanged [g -> s4]', '5:9-16 line-l-zero-zero [g -> s4]', '6:10-16 line-written-as-emission [p -> g]'],
+    notes: true,
+  },
+  {
+    name: 'a built-in species named without its block, or spelt otherwise than its block: says which and offers the block name',
+    text: 'beam b\n  species = K39\n  level = ground\nspecies Rb87\n  level g: 5s 2S1/2\nfield f = 1 G\n  species = 87Rb\n',
+    findings: ['1:6-7 beam-incomplete [b]', '2:13-16 name-unknown [K39]', '7:13-17 name-unknown [87Rb]'],
+    fixes: ["name-unknown: Change to 'Rb87' →   species = Rb87"],
+    says: ["K39 is built in, but a file uses a species only through its own block; add `species K39`", "did you mean 'Rb87'? A species is named as its block names it"],
+  },
+  {
+    name: 'a resonance with one side of its pair unreadable says so at that side; a side not written says which',
+    text: 'species Rb87\n  level g: 5s 2S1/2\nresonance r\n  level = g\n  lower = 2 x\n  upper = 1 1\nresonance s\n  level = g\n  upper = 1 1\n',
+    findings: ['5:13-14 resonance-sublevel-malformed [x]', '7:11-12 resonance-incomplete [s]'],
+    says: ["'x' is not a number: write lower = <F> <m_F>", "resonance 's' gives its upper sublevel but not its lower one; add lower = <F> <m_F>"],
+  },
+  {
+    name: 'every wrong populations entry is said, each at its own entry',
+    text: 'beam b\n  populations = 2 5 1, 1 1, 2 x 1, 3 0 -1, 1 2 1 1\n',
+    findings: [
+      '1:6-7 beam-incomplete [b]',
+      '2:17-22 beam-populations-malformed [2 5 1]',
+      '2:29-34 beam-populations-malformed [2 x 1]',
+      '2:36-42 beam-populations-malformed [3 0 -1]',
+      '2:44-51 beam-populations-malformed [1 2 1 1]',
+    ],
+    says: ["'x' is not a number", 'a weight cannot be negative, got -1', 'an entry has 2 or 3 numbers, this one has 4'],
+  },
+  {
+    name: 'a use path without its closing quote, or without quotes: one error, with the fix that quotes it',
+    text: 'use "shared/alkali.sublevel\nuse shared/other.sublevel\n',
+    findings: ['1:5-28 syntax-use-path ["shared/alkali.sublevel]', '2:5-26 syntax-use-path [shared/other.sublevel]'],
+    fixes: ['syntax-use-path: Write "shared/alkali.sublevel" → use "shared/alkali.sublevel"', 'syntax-use-path: Write "shared/other.sublevel" → use "shared/other.sublevel"'],
+  },
+  {
+    // 2P has J = 1/2, 3/2 only (S = 1/2, L = 1; textbook): after the join, 5/2 is a second, real mistake.
+    name: 'a term with a parity mark and a blank inside is joined; a J it cannot have is then said at the J',
+    text: 'species Na23\n  level p: 3p 2P° 3/2\n  level q: 3p 2P° 5/2\n',
+    findings: ['2:15-22 term-blank-inside [2P° 3/2]', '3:15-22 term-blank-inside [2P° 5/2]', '3:19-22 term-j-out-of-range [5/2]'],
+    fixes: [
+      "term-blank-inside: Replace with '2P°3/2' →   level p: 3p 2P°3/2",
+      "term-blank-inside: Replace with '2P°5/2' →   level q: 3p 2P°5/2",
+      'term-j-out-of-range: Change J to 1/2 →   level q: 3p 2P° 1/2',
+      'term-j-out-of-range: Change J to 3/2 →   level q: 3p 2P° 3/2',
+    ],
+  },
+  {
+    name: 'an unknown unit in a vector or a field source is said as in any other setting; a stray word after a plain number is left over',
+    text: 'slab pole\n  size          = 10, 20, 5 mn\n  centre        = 0, 0, -8 cm\n  magnetisation = 1.2 T along y\ncoil c\n  radius  = 3 cn\n  turns   = 40 x\n  current = 2 Amp\n',
+    findings: ['2:29-31 unit-unknown [mn]', '6:15-17 unit-unknown [cn]', '7:16-17 value-extra [x]', '8:15-18 unit-unknown [Amp]'],
+    fixes: ['value-extra: Remove the unused rest of the value →   turns   = 40'],
+    says: ["unknown unit 'mn': length needs m, cm, mm or um", "unknown unit 'Amp': current needs A, mA or kA", "turns takes one plain number (number of turns, e.g. 120); 'x' is not used"],
+  },
+  {
+    name: 'a decimal comma where one value goes: one error at the number, and the fix that writes the point',
+    text: 'field b = 3,2 G\nmagnet m\n  field = 0,45 T\n  gradient = 180 T/m\n  length = 8 cm\nspecies Na23\n  level g: 3s 2S1/2 A = 885,8 MHz\n',
+    findings: ['1:11-14 value-decimal-comma [3,2]', '3:11-15 value-decimal-comma [0,45]', '7:25-30 value-decimal-comma [885,8]'],
+    fixes: [
+      "value-decimal-comma: Replace with '3.2' → field b = 3.2 G",
+      "value-decimal-comma: Replace with '0.45' →   field = 0.45 T",
+      "value-decimal-comma: Replace with '885.8' →   level g: 3s 2S1/2 A = 885.8 MHz",
+    ],
+    says: ["'3,2' has a decimal comma; a comma separates list items, so write 3.2"],
+  },
+  {
+    name: 'an arrow typed otherwise (=>, -->, an em dash, a blank inside) is one error at it, with the fix that writes ->',
+    text: 'species Rb87\n  level g: 5s 2S1/2\n  level p: 5p 2P°3/2\nline A: g => p\nline B: g --> p\nline C: g \u2014> p\nline D: g - > p\nline E: g \u2192 p\n',
+    findings: ['4:11-13 syntax-missing-arrow [=>]', '5:11-14 syntax-missing-arrow [-->]', '6:11-13 syntax-missing-arrow [\u2014>]', '7:11-14 syntax-missing-arrow [- >]'],
+    fixes: ["syntax-missing-arrow: Write '->' → line A: g -> p", "syntax-missing-arrow: Write '->' → line B: g -> p", "syntax-missing-arrow: Write '->' → line C: g -> p", "syntax-missing-arrow: Write '->' → line D: g -> p"],
+    says: ["'=>' is not the arrow: write '->' between the levels"],
+  },
+  {
+    name: 'a degree sign before K is an unknown unit with the fix that drops it, not a missing unit',
+    text: 'species Rb87\n  level g: 5s 2S1/2\nbeam b\n  level = g\n  source = oven 400 °K\n  slits = 80 um, 50 um apart 40 cm\n  drift = 50 cm\n  detector = 10 um\n',
+    findings: ["3:6-7 beam-incomplete [b]", '5:21-23 unit-unknown [°K]'],
+    fixes: ["unit-unknown: Change to 'K' →   source = oven 400 K"],
+  },
 ];
 
-function describeFindings(text: string): { findings: string[]; fixes: string[]; messages: string[] } {
+function describeFindings(text: string, notes = false): { findings: string[]; fixes: string[]; messages: string[] } {
   const lines = text.split(/\r\n|\r|\n/);
   const analysis = analysisOf(text);
-  const ds = diagnostics(analysis, URI).filter((d) => d.severity !== undefined && d.severity <= 2);
+  const ds = diagnostics(analysis, URI).filter((d) => d.severity !== undefined && d.severity <= (notes ? 3 : 2));
   const fixes: string[] = [];
   for (const d of ds) {
     for (const a of codeActions(analysis, URI, { range: d.range, diagnostics: [d], only: ['quickfix'] })) {
@@ -185,7 +268,7 @@ function describeFindings(text: string): { findings: string[]; fixes: string[]; 
 describe('bad inputs', () => {
   for (const c of CASES) {
     it(c.name, () => {
-      const got = describeFindings(c.text);
+      const got = describeFindings(c.text, c.notes);
       expect(got.findings).toEqual(c.findings);
       if (c.fixes) expect(got.fixes).toEqual(c.fixes);
       for (const words of c.says ?? []) expect(got.messages.join('\n')).toContain(words);

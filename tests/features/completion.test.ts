@@ -48,10 +48,18 @@ const CASES: Case[] = [
   { name: 'data blocks and parameters of a fit', text: 'data d1\ndata d2\nfit f\n  data = |', exactly: ['d1', 'd2'] },
   { name: 'fit parameters', text: 'fit f\n  free = field, |', has: ['g_J', 'A', 'gradient', 'source_scale'], hasNot: ['field'] },
   { name: 'slower designs', text: 'slower s\n  design = |', exactly: ['decreasing', 'increasing', 'spin_flip'] },
-  { name: 'gravity directions and off', text: 'trap t\n  gravity = |', exactly: ['-z', 'z', 'x', '-x', 'y', '-y', 'off'] },
+  { name: 'gravity directions and off', text: 'trap t\n  gravity = |', exactly: ['-z', 'x', 'y', 'z', '-x', '-y', 'off'] },
+  { name: 'data kinds', text: 'data d\n  kind = |', exactly: ['resonance', 'interval', 'profile'] },
+  // Rb87 ground: I = 3/2, J = 1/2, so F = 1, 2 (angular momentum addition, textbook).
+  {
+    name: 'the sublevels of a resonance level for its pair',
+    text: 'species Rb87\n  level g: 5s 2S1/2\nresonance r\n  level = g\n  lower = |',
+    exactly: ['1 +1', '1 0', '1 -1', '2 +2', '2 +1', '2 0', '2 -1', '2 -2'],
+  },
+  { name: 'no sublevels without the resonance level', text: 'resonance r\n  upper = |', exactly: [] },
   { name: '`along` after a magnetisation', text: 'slab s\n  magnetisation = 1.2 T |', exactly: ['along'] },
   { name: 'directions after `along`', text: 'slab s\n  magnetisation = 1.2 T along |', exactly: ['x', 'y', 'z', '-x', '-y', '-z'] },
-  { name: 'spectrum directions', text: 'line L: a -> b\n  spectrum = |', exactly: ['across', 'along'] },
+  { name: 'spectrum directions', text: 'line L: a -> b\n  spectrum = |', exactly: ['along', 'across'] },
   { name: 'spectrum analysers', text: 'line L: a -> b\n  light = |', exactly: ['all', 'pi', 'sigma', 'sigma+', 'sigma-'] },
   { name: 'a beam for the Doppler width', text: 'beam hot\nline L: a -> b\n  doppler = beam |', exactly: ['hot'] },
   {

@@ -57,7 +57,10 @@ describe('value parts', () => {
     ['jet 1500 m/s spread 8 %', [['w:jet', 'q:1500|m/s', 'w:spread', 'q:8|%']]],
     ['80 um, 50 um apart 40 cm', [['q:80|um'], ['q:50|um', 'w:apart', 'q:40|cm']]],
     ['2 apart', [['n:2', 'w:apart']]],
-    ['3 ground', [['n:3', 'w:ground']]],
+    ['oven 3 ground', [['w:oven', 'n:3', 'w:ground']]],
+    // an item of just a number and a word: the word stands where the unit goes, so the unit reader says it is unknown
+    ['3 ground', [['q:3|ground']]],
+    ['10, 5 mn', [['n:10'], ['q:5|mn']]],
     // names that start with digits are words, not quantities with odd units
     ['87Rb', [['w:87Rb']]],
     ['23Na', [['w:23Na']]],

@@ -14,8 +14,8 @@ import type * as vscode from 'vscode';
 export const TRACE_CHANNEL_NAME = 'Sublevel Trace';
 
 export interface TraceChannelHost {
-  /** The value of `sublevel.trace.server` now. */
-  readSetting(): string | undefined;
+  /** The value of `sublevel.trace.server` now: a word, or the object form `{ "verbosity": "verbose" }`. */
+  readSetting(): unknown;
   /** Calls `listener` whenever the setting may have changed. */
   onSettingChange(listener: () => void): vscode.Disposable;
   /** Opens the plain output channel named {@link TRACE_CHANNEL_NAME}; called at most once. */
@@ -29,9 +29,16 @@ export interface TraceChannelHost {
 /** Settings values under which the trace is on (the client reads "verbose" itself). */
 const TRACING_VALUES: ReadonlySet<string> = new Set(['messages', 'compact', 'verbose']);
 
+/** The trace verbosity of the setting: the word itself, or the `verbosity` of its object form (as the language client reads it). */
+function verbosityOf(setting: unknown): string {
+  if (typeof setting === 'string') return setting;
+  const verbosity = typeof setting === 'object' && setting !== null ? (setting as { verbosity?: unknown }).verbosity : undefined;
+  return typeof verbosity === 'string' ? verbosity : 'off';
+}
+
 export function createTraceChannel(host: TraceChannelHost): vscode.LogOutputChannel {
   const levelOf = (): vscode.LogLevel =>
-    TRACING_VALUES.has(host.readSetting() ?? 'off') ? host.levels.Trace : host.levels.Off;
+    TRACING_VALUES.has(verbosityOf(host.readSetting())) ? host.levels.Trace : host.levels.Off;
   let level = levelOf();
   let channel: vscode.OutputChannel | undefined;
   const opened = (): vscode.OutputChannel => (channel ??= host.openChannel(TRACE_CHANNEL_NAME));

@@ -10,6 +10,7 @@ import type { LevelModel, LineModel, SettingsModel } from '../model/types';
 import { evaluateTermLine } from './termLineEvaluation';
 import type { WorkingField } from './levelEvaluation';
 import { forwardIssues } from './forwardIssues';
+import { lineLevelsRange } from '../model/lineBuilder';
 import { hyperfineSpec } from './levelSpec';
 import { solvedAtField } from './exactAtField';
 import type { LineResult } from './resultTypes';
@@ -31,13 +32,13 @@ export function evaluateLine(
   };
   if (!lower || !upper || lower.species !== upper.species || lower === upper) return result;
   if (lower.kind === 'term' || upper.kind === 'term') {
-    if (lower.valid && upper.valid) evaluateTermLine(line, lower, upper, fields, gJOf, settings, forwardIssues(`line '${line.name}'`, line.node.headerRange, problems), result);
+    if (lower.valid && upper.valid) evaluateTermLine(line, lower, upper, fields, gJOf, settings, forwardIssues(`line '${line.name}'`, lineLevelsRange(line.node), problems), result);
     return result;
   }
   const lt = lineTerm(lower);
   const ut = lineTerm(upper);
   if (!lt || !ut) return result;
-  const report = forwardIssues(`line '${line.name}'`, line.node.headerRange, problems);
+  const report = forwardIssues(`line '${line.name}'`, lineLevelsRange(line.node), problems);
   const rules = selectionRules(lt, ut);
   report(rules);
   if (rules.some((i) => i.severity === 'error')) return result;

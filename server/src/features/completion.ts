@@ -11,7 +11,12 @@ import type { BlockKind, BlockNode } from '../format/ast';
 import { readNumber, readNumberPrefix, startsLikeNumber } from '../format/numbers';
 import { BLOCK_KEYS, BLOCK_WORDS, isBlockWord, LEVEL_KEYS, LEVEL_WORD, USE_WORD } from '../format/schema';
 import type { Token } from '../format/scanner';
-import { PROFILE_PARAMETERS, SPECTRAL_PARAMETERS } from '../model/fitTypes';
+import { halfText, signedHalfText } from '../eval/halves';
+import { DATA_KINDS } from '../model/dataBuilder';
+import { FIT_PARAMETERS } from '../model/fitTypes';
+import { SLOWER_DESIGNS } from '../model/slowerBuilder';
+import { SPECTRUM_DIRECTIONS, SPECTRUM_LIGHTS } from '../model/spectrumRequestBuilder';
+import { DIRECTION_NAMES } from '../model/vectorReader';
 import type { LevelModel, SetupModel } from '../model/types';
 import { parseLevelDesignation } from '../physics/configuration';
 import { item, unitItems, wordItems } from './completion/items';
@@ -135,20 +140,29 @@ function valueCompletions(c: LineContext, model: SetupModel | undefined, block: 
     case 'fit.data':
       return namesInList(valueTokens, words, (model?.data ?? []).map((d) => d.name), c);
     case 'fit.free':
-      return namesInList(valueTokens, words, [...new Set<string>([...SPECTRAL_PARAMETERS, ...PROFILE_PARAMETERS])], c);
+      return namesInList(valueTokens, words, [...FIT_PARAMETERS], c);
     case 'slower.design':
-      return empty ? wordItems(['decreasing', 'increasing', 'spin_flip'], c.replace, 'the shape of the field profile') : [];
+      return empty ? wordItems(SLOWER_DESIGNS, c.replace, 'the shape of the field profile') : [];
     case 'slower.repump':
       return empty ? wordItems(['on', 'off'], c.replace) : [];
     case 'trap.gravity':
-      return empty ? wordItems(['-z', 'z', 'x', '-x', 'y', '-y', 'off'], c.replace, 'direction of gravity, three numbers, or off') : [];
+      // Down first: it is what a trap on a table has.
+      return empty ? wordItems(['-z', ...DIRECTION_NAMES.filter((w) => w !== '-z'), 'off'], c.replace, 'direction of gravity, three numbers, or off') : [];
     case 'line.spectrum':
-      return empty ? wordItems(['across', 'along'], c.replace, 'look across or along the field') : [];
+      return empty ? wordItems(SPECTRUM_DIRECTIONS, c.replace, 'look across or along the field') : [];
     case 'line.light':
-      return empty ? wordItems(['all', 'pi', 'sigma', 'sigma+', 'sigma-'], c.replace, 'analyser in front of the detector') : [];
+      return empty ? wordItems(SPECTRUM_LIGHTS, c.replace, 'analyser in front of the detector') : [];
     case 'line.doppler':
       if (empty) return wordItems(['beam'], c.replace, 'a temperature such as 310 K, or beam <name>');
       return words.length === 1 && words[0]!.text === 'beam' ? (model?.beams ?? []).map((b, i) => item(b.name, CompletionItemKind.Variable, c.replace, { order: i })) : [];
+    case 'data.kind':
+      return empty ? wordItems(DATA_KINDS, c.replace, 'what was measured: resonance fields, intervals, or a beam profile') : [];
+    case 'resonance.lower':
+    case 'resonance.upper': {
+      if (valueTokens.length > 0) return [];
+      const level = model?.resonances.find((r) => r.node === block)?.level;
+      return sublevelItems(level, c);
+    }
     case 'resonance.two_photon':
       return empty ? wordItems(['on', 'off'], c.replace) : [];
     case 'data.beam':
@@ -168,16 +182,28 @@ function valueCompletions(c: LineContext, model: SetupModel | undefined, block: 
     case 'coil.axis':
     case 'solenoid.axis':
     case 'wire.direction':
-      return empty ? wordItems(['x', 'y', 'z', '-x', '-y', '-z'], c.replace, 'a direction, or three numbers such as 0, 1, 1') : [];
+      return empty ? wordItems(DIRECTION_NAMES, c.replace, 'a direction, or three numbers such as 0, 1, 1') : [];
     case 'coil.sense':
       return empty ? wordItems(['same', 'opposite'], c.replace, 'same: currents alike; opposite: a quadrupole pair') : [];
     case 'slab.magnetisation':
       // `1.2 T |` → along; `1.2 T along |` → a direction.
-      if (words[words.length - 1]?.text === 'along') return wordItems(['x', 'y', 'z', '-x', '-y', '-z'], c.replace, 'direction of magnetisation');
+      if (words[words.length - 1]?.text === 'along') return wordItems(DIRECTION_NAMES, c.replace, 'direction of magnetisation');
       return words.length >= 2 && !words.some((w) => w.text === 'along') ? wordItems(['along'], c.replace) : [];
     default:
       return [];
   }
+}
+
+/** `lower = |`: the F, m_F pairs of the resonance's level (F from |J − I| to J + I, angular momentum addition). */
+function sublevelItems(level: LevelModel | undefined, c: LineContext): CompletionItem[] {
+  const twoJ = level?.kind === 'level' ? level.term?.twoJ : undefined;
+  if (!level || twoJ === undefined || twoJ === null) return [];
+  const twoI = level.species.twoI.value;
+  const labels: string[] = [];
+  for (let twoF = Math.abs(twoJ - twoI); twoF <= twoJ + twoI; twoF += 2) {
+    for (let twoM = twoF; twoM >= -twoF; twoM -= 2) labels.push(`${halfText(twoF)} ${signedHalfText(twoM)}`);
+  }
+  return wordItems(labels, c.replace, `F and m_F of a sublevel of ${level.name}`);
 }
 
 /** Names for a comma-separated list (`sources = a, |`): at its start or after a comma, those not yet written. */

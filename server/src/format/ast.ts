@@ -94,6 +94,8 @@ export interface UseNode {
   keyword: Spanned;
   /** The path as written, without its quotes; the range covers the text between them. Absent when none is written. */
   path?: Spanned;
+  /** The path was written without quotes or without its closing one (reported by the parser). */
+  quotesWrong?: true;
   /** The whole statement. */
   range: Range;
 }

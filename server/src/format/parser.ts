@@ -250,6 +250,16 @@ class SetupParser {
     if (rest[0]?.kind === 'arrow') {
       link.arrow = rangeOn(this.ls, rest[0].start, rest[0].end);
       rest = rest.slice(1);
+    } else if (fromToken) {
+      // `=>`, `-->`, `—>`: meant as the arrow, so said as a wrong arrow, not as a line without levels.
+      const taken = lookalikeArrow(rest);
+      if (taken > 0) {
+        const start = rest[0]!.start;
+        const end = rest[taken - 1]!.end;
+        this.report('syntax-missing-arrow', `'${clip(this.ls.text.slice(start, end))}' is not the arrow: write '->' between the levels`, start, end);
+        link.arrow = rangeOn(this.ls, start, end);
+        rest = rest.slice(taken);
+      }
     }
     if (rest[0]?.kind === 'atom') {
       const to = rest[0];
@@ -301,10 +311,14 @@ class SetupParser {
     if (p.kind === 'atom') {
       this.report('syntax-use-path', `put the path in double quotes: use "${clip(p.text)}"`, p.start, p.end, { data: { suggestions: [`"${p.text}"`] } });
       node.path = this.span(p);
+      node.quotesWrong = true;
     } else {
       const closed = p.text.length >= 2 && p.text.endsWith('"');
       const innerEnd = closed ? p.end - 1 : p.end;
-      if (!closed) this.report('syntax-use-path', `the path has no closing quote: ${how}`, p.start, p.end, { data: { suggestions: [`${p.text}"`] } });
+      if (!closed) {
+        this.report('syntax-use-path', `the path has no closing quote: ${how}`, p.start, p.end, { data: { suggestions: [`${p.text}"`] } });
+        node.quotesWrong = true;
+      }
       if (innerEnd > p.start + 1) node.path = spanOf(this.ls, p.start + 1, innerEnd);
       else if (closed) this.report('syntax-use-path', `the path is empty: ${how}`, p.start, p.end);
     }
@@ -528,4 +542,15 @@ class SetupParser {
   private keyOffsets(node: SettingNode): [number, number] {
     return [this.ls.lineStart + node.key.range.start.character, this.ls.lineStart + node.key.range.end.character];
   }
+}
+
+/** Arrows typed otherwise (`=>`, `-->`, `—>`, `- >`): how many tokens at the start of `rest` make one, 0 when none. */
+function lookalikeArrow(rest: readonly Token[]): number {
+  const [a, b] = rest;
+  if (!a) return 0;
+  if (a.kind === 'atom' && /^(?:=+>|-{2,}>|[—–−]+>|>)$/.test(a.text)) return 1;
+  const firstHalf = a.kind === 'equals' || (a.kind === 'atom' && /^[-—–−=]+$/.test(a.text));
+  if (firstHalf && b?.kind === 'atom' && b.text === '>') return 2;
+  // `-->` scans as `-` and `->`.
+  return a.kind === 'atom' && /^[-—–−]+$/.test(a.text) && b?.kind === 'arrow' && a.end === b.start ? 2 : 0;
 }

@@ -10,7 +10,6 @@ import type { Problem, Range, ValuePart } from './ast';
 import { makeProblem } from './codes';
 import { didYouMeanText, suggestNames } from './didYouMean';
 import { readNumberPrefix } from './numbers';
-import { VALUE_WORDS } from './schema';
 import { canonicalUnitName, isOffsetUnit, parseUnitSyntax } from './unitGrammar';
 import { BASE_DIMENSION_COUNT, convertScale, unitEntry } from './unitLookup';
 import { PLANCK_H, SPEED_OF_LIGHT } from '../physics/constants';
@@ -236,6 +235,8 @@ export function suggestUnitNames(name: string): string[] {
  */
 export function looksLikeMisspeltUnit(word: string): boolean {
   if (word.length > 16) return false;
+  // A degree sign before a letter (`°K`, `°F`) is a temperature unit typed another way.
+  if (/^°\p{L}$/u.test(word)) return true;
   const syntax = parseUnitSyntax(word);
   // A broken compound such as `T//m` or `cm^` is still meant as a unit.
   if (!syntax.ok) return /^[\p{L}%°][\p{L}\d_%°·*/^⁻⁺⁰-⁹+-]*$/u.test(word) && /[/^*·]/.test(word);
@@ -274,21 +275,6 @@ function toSI(value: number, unit: UnitValue, d: Dimension): number | undefined 
   return si;
 }
 
-/**
- * A word right after the number of a one-quantity setting that is no unit Sublevel knows (`8 Tt`):
- * it stands where the unit goes, so it is the unit that is wrong. Read apart it gave "needs a unit"
- * with a fix that put one before the word, and an unused word with a fix that deleted it.
- */
-export function wordForUnit(word: ValuePart, expected: Dimension): Problem | undefined {
-  // A value word (`exact`, `along`, …) after a number is a missing unit, not a misspelt one.
-  if (word.kind !== 'word' || word.unreadable || VALUE_WORDS.includes(word.text) || !/^[\p{L}µ°%]/u.test(word.text) || expected === 'dimensionless') return undefined;
-  const info = DIMENSIONS[expected];
-  const label = info.label;
-  const suggestions = suggestNames(word.text, [...new Set([...info.examples, ...unitNamesOf(expected)])]);
-  const hint = suggestions.length > 0 ? didYouMeanText(suggestions) : `: ${label} needs ${orList(info.examples)}`;
-  return makeProblem('unit-unknown', `unknown unit '${clip(word.text)}'${hint}`, word.range, { data: { suggestions } });
-}
-
 /** Unit names (completion's list) whose dimension is the one expected. */
 function unitNamesOf(expected: Dimension): string[] {
   return COMMON_UNITS.filter((name) => {
@@ -303,15 +289,20 @@ function unitNamesOf(expected: Dimension): string[] {
  */
 function fittingSuggestions(e: Extract<UnitEvaluation, { ok: false }>, unitText: string, expected: Dimension, label: string, examples: string): { message: string; suggestions: string[] } {
   const all = [...(e.suggestions ?? [])];
-  if (e.code !== 'unit-unknown' || all.length === 0) return { message: e.message, suggestions: all };
-  const fits = all.filter((name) => {
+  if (e.code !== 'unit-unknown') return { message: e.message, suggestions: all };
+  const fitsWhole = (name: string): boolean => {
     const whole = evaluateUnit(unitText.slice(0, e.start) + name + unitText.slice(e.end));
     return whole.ok && (expected === 'dimensionless' ? whole.value.dims.every((d) => d === 0) : toSI(1, whole.value, expected) !== undefined);
-  });
-  if (fits.length === all.length) return { message: e.message, suggestions: all };
+  };
+  const fits = all.filter(fitsWhole);
+  if (fits.length > 0 && fits.length === all.length) return { message: e.message, suggestions: all };
   const name = unitText.slice(e.start, e.end);
-  const message = fits.length > 0 ? `unknown unit '${clip(name)}'${didYouMeanText(fits)}` : `unknown unit '${clip(name)}': ${label} needs ${examples}`;
-  return { message, suggestions: fits };
+  // Nothing close among all units: look among those of the needed dimension only (`Tesla` → `tesla`).
+  // `°K` is K with a degree sign the SI does not write.
+  const withoutDegree = name.startsWith('°') ? [name.slice(1)].filter(fitsWhole) : [];
+  const near = fits.length > 0 ? fits : withoutDegree.length > 0 ? withoutDegree : suggestNames(name, [...new Set([...DIMENSIONS[expected].examples, ...unitNamesOf(expected)])]).filter(fitsWhole);
+  const message = near.length > 0 ? `unknown unit '${clip(name)}'${didYouMeanText(near)}` : `unknown unit '${clip(name)}': ${label} needs ${examples}`;
+  return { message, suggestions: near };
 }
 
 /**

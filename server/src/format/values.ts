@@ -63,6 +63,18 @@ function isUnitAfterNumber(word: string): boolean {
   return isUnitText(word) || looksLikeMisspeltUnit(word);
 }
 
+/**
+ * The word of an item written as a number and a word stands where the unit goes (`8 Tt`, `5 mn`):
+ * read as the quantity's unit, so the unknown unit is said with what the setting needs, in every
+ * setting alike. Read apart it gave "needs a unit" with a fix that put one before the word.
+ * A value word (`0.5 exact`) stays a word: that is a missing unit.
+ */
+function endsAsUnit(next: Token | undefined, numberAndWord: boolean): boolean {
+  if (!next) return false;
+  if (isUnitAfterNumber(next.text)) return true;
+  return numberAndWord && !VALUE_WORDS.includes(next.text) && /^[\p{L}µ°%]/u.test(next.text);
+}
+
 /** Parts of one comma-free run of atoms (an atom's text is the document's text at its span, so it is used as is). */
 function readGroup(atoms: Token[], ls: LineSpans, problems: Problem[]): ValuePart[] {
   const parts: ValuePart[] = [];
@@ -87,7 +99,7 @@ function readGroup(atoms: Token[], ls: LineSpans, problems: Problem[]): ValuePar
       parts.push({ kind: 'word', text: atom.text, range: rangeOn(ls, atom.start, atom.end) });
       continue;
     }
-    if (next && isUnitAfterNumber(next.text)) {
+    if (next && endsAsUnit(next, i === 0 && atoms.length === 2)) {
       parts.push({ kind: 'quantity', number: c.number, unit: spanOf(ls, next.start, next.end), ...spanOf(ls, atom.start, next.end) });
       i++;
       continue;

@@ -3,7 +3,7 @@ import type { BlockNode, SettingNode, ValuePart } from '../format/ast';
 import type { Dimension } from '../format/units';
 import { physicalField } from './fieldRange';
 import { NameIndex, resolveLevel } from './nameIndex';
-import type { ProblemList } from './problems';
+import { ProblemList } from './problems';
 import { isUnreadable, readPartQuantity, readSettingQuantity, singlePart } from './settingReaders';
 import { readMagnetSources } from './magnetSources';
 import type { BeamModel, BeamSource, FieldModel, FieldSourceModel, MagnetModel, NameUse, SpeciesModel, Valued } from './types';
@@ -126,7 +126,9 @@ export function buildBeam(
     const part = singlePart(levelSetting, problems, 'level name');
     if (part) {
       const [q, n] = splitQualified(part);
-      const lv = resolveLevel(q ? { qualifier: q, name: n } : { name: n }, index.species, beam.species, uses, problems);
+      // A species that is not found is the error already said: its level is not looked for elsewhere.
+      const speciesUnknown = !beam.species && node.settings.some((s) => s.key.text === 'species');
+      const lv = resolveLevel(q ? { qualifier: q, name: n } : { name: n }, index.species, beam.species, uses, speciesUnknown ? new ProblemList() : problems);
       if (lv) {
         // The level decides what flies (its mass, its moments); a `species` that names another
         // one is a contradiction the user must settle, not something to pick a side of quietly.
@@ -285,8 +287,13 @@ function populationMistake(twoF: number, twoM: number | null | undefined, weight
 /** `populations = F m weight, ...` or `F weight` for a whole F manifold. */
 function readPopulations(s: SettingNode, problems: ProblemList): BeamModel['populations'] {
   const out: NonNullable<BeamModel['populations']> = [];
+  // Every wrong entry is said; one wrong entry leaves the beam without populations.
+  let anyWrong = false;
   for (const g of s.groups) {
-    if (g.some(isUnreadable)) return undefined;
+    if (g.some(isUnreadable)) {
+      anyWrong = true;
+      continue;
+    }
     const range = g.length > 0 ? { start: g[0]!.range.start, end: g[g.length - 1]!.range.end } : s.valueText.range;
     const nums = g.map((p) => (p.kind === 'number' ? p.number.value : NaN));
     const twice = (x: number): number | undefined => (Number.isFinite(x) && Math.abs(2 * x - Math.round(2 * x)) < 1e-9 ? Math.round(2 * x) : undefined);
@@ -294,14 +301,23 @@ function readPopulations(s: SettingNode, problems: ProblemList): BeamModel['popu
     const twoF = ok ? twice(nums[0]!) : undefined;
     const twoM = ok && g.length === 3 ? twice(nums[1]!) : undefined;
     const weight = nums[nums.length - 1]!;
-    const wrong = !ok || twoF === undefined ? undefined : populationMistake(twoF, g.length === 3 ? twoM ?? null : undefined, weight);
+    const word = g.find((p) => p.kind !== 'number');
+    const wrong = word
+      ? `'${word.text}' is not a number`
+      : g.length !== 2 && g.length !== 3
+        ? `an entry has 2 or 3 numbers, this one has ${g.length}`
+        : twoF === undefined
+          ? 'F must be a whole or half-integer'
+          : populationMistake(twoF, g.length === 3 ? twoM ?? null : undefined, weight);
     if (!ok || twoF === undefined || wrong) {
       const shape = 'write populations = <F> <m_F> <weight>, … (or <F> <weight> for every m_F of F), e.g. populations = 2 +2 1, 2 +1 0.1';
       problems.add('beam-populations-malformed', wrong ? `${wrong}: ${shape}` : shape, range);
-      return undefined;
+      anyWrong = true;
+      continue;
     }
     out.push({ twoF, ...(twoM !== undefined ? { twoM } : {}), weight, range });
   }
+  if (anyWrong) return undefined;
   if (out.length > 0 && out.every((p) => p.weight === 0)) {
     problems.add('beam-populations-malformed', 'every listed population is 0, so no atoms reach the detector', s.valueText.range);
     return undefined;

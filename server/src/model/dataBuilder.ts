@@ -17,7 +17,7 @@ import { readPartQuantity, readSettingWord, singlePart } from './settingReaders'
 import type { SetupSources } from './sources';
 import type { BeamModel, NameUse, SpeciesModel } from './types';
 
-const KINDS = ['resonance', 'interval', 'profile'] as const;
+export const DATA_KINDS = ['resonance', 'interval', 'profile'] as const;
 
 interface Context {
   species: NameIndex<SpeciesModel>;
@@ -31,7 +31,7 @@ export function buildData(node: BlockNode, ctx: Context, uses: NameUse[], proble
     return undefined;
   }
   const kindSetting = node.settings.find((s) => s.key.text === 'kind');
-  const kind: DataKind | undefined = kindSetting ? readSettingWord(kindSetting, KINDS, problems) : 'resonance';
+  const kind: DataKind | undefined = kindSetting ? readSettingWord(kindSetting, DATA_KINDS, problems) : 'resonance';
   const d: DataModel = { name: node.name.text, node, nameRange: node.name.range, kind: kind ?? 'resonance', spectral: [], profile: [], units: {} };
   if (!kind) return d;
   const points: SettingNode[] = [];

@@ -5,14 +5,14 @@
  */
 import type { BlockNode, SettingNode, Spanned } from '../format/ast';
 import type { Dimension } from '../format/units';
-import { PROFILE_PARAMETERS, SPECTRAL_PARAMETERS, type DataModel, type FitParameterName, type FitRequestModel } from './fitTypes';
+import { FIT_PARAMETERS, PROFILE_PARAMETERS, SPECTRAL_PARAMETERS, type DataModel, type FitParameterName, type FitRequestModel } from './fitTypes';
 import { didYouMeanText, suggestNames } from '../format/didYouMean';
 import type { NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
 import { DEFAULT_RESONANCE_RANGE_T, readFieldRange } from './resonanceBuilder';
 import { readPartQuantity } from './settingReaders';
 
-const ALL: readonly FitParameterName[] = [...new Set<FitParameterName>([...SPECTRAL_PARAMETERS, ...PROFILE_PARAMETERS])];
+const ALL = FIT_PARAMETERS;
 
 /** What a starting value is measured in; populations and g_J are plain numbers. */
 const START_DIMENSION: Record<FitParameterName, Dimension> = {

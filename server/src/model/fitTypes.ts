@@ -46,6 +46,8 @@ export interface DataModel {
 
 export const SPECTRAL_PARAMETERS = ['field', 'g_J', 'A', 'B'] as const;
 export const PROFILE_PARAMETERS = ['gradient', 'temperature', 'offset', 'width', 'field', 'populations', 'background', 'source_scale'] as const;
+/** Every parameter name a fit knows, spectral first, each once. */
+export const FIT_PARAMETERS: readonly FitParameterName[] = [...new Set<FitParameterName>([...SPECTRAL_PARAMETERS, ...PROFILE_PARAMETERS])];
 export type FitParameterName = (typeof SPECTRAL_PARAMETERS)[number] | (typeof PROFILE_PARAMETERS)[number];
 
 export interface FitRequestModel {

@@ -75,7 +75,7 @@ function readDesignation(level: LevelModel, problems: ProblemList): void {
   const parsedText = split ? split.text : d.text;
   for (const issue of parsed.issues) {
     const range = subRange(d, writtenOffset(split, issue.start, false), writtenOffset(split, issue.end, true));
-    const suggestions = issue.suggestions && issue.code.startsWith('term-j-') ? issue.suggestions.filter((j) => readsClean(parsedText, issue.start, issue.end, j)) : issue.suggestions;
+    const suggestions = issue.suggestions && issue.code.startsWith('term-j-') ? offeredJ(parsedText, issue.start, issue.end, issue.suggestions) : issue.suggestions;
     problems.addWith(issue.code, issue.severity, issue.message, range, {
       ...(suggestions && suggestions.length > 0 ? { data: { suggestions } } : {}),
     });
@@ -103,11 +103,16 @@ function readDesignation(level: LevelModel, problems: ProblemList): void {
 }
 
 /**
- * A J the term allows is offered only when the level then reads without error: `3p 2Q3/2` allows
- * J = 23/2 for 2Q, but 3p makes no 2Q, so that fix would trade one error for another.
+ * The J the term allows are offered only when the level then reads without error: `3p 2Q3/2` allows
+ * J = 23/2 for 2Q, but 3p makes no 2Q, so that fix would trade one error for another. A
+ * configuration makes whole LS terms, each with every J from |L − S| to L + S (textbook), so one
+ * J read in place answers for all of them: the designation is parsed once, not once per J.
  */
-function readsClean(text: string, start: number, end: number, replacement: string): boolean {
-  return !designationOf(text.slice(0, start) + replacement + text.slice(end)).issues.some((i) => i.severity === 'error');
+function offeredJ(text: string, start: number, end: number, allowed: string[]): string[] {
+  const first = allowed[0];
+  if (first === undefined) return [];
+  const clean = !designationOf(text.slice(0, start) + first + text.slice(end)).issues.some((i) => i.severity === 'error');
+  return clean ? allowed : [];
 }
 
 function jHint(twoS: number, L: number): string {

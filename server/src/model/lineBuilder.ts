@@ -1,5 +1,5 @@
 /** Builds `line` blocks: two levels of one species joined by an electric-dipole line. */
-import type { BlockNode } from '../format/ast';
+import type { BlockNode, Range } from '../format/ast';
 import { resolveLevel, type NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
 import { readSpectrumRequest } from './spectrumRequestBuilder';
@@ -65,9 +65,15 @@ function orderByEnergy(line: LineModel, first: LevelModel, second: LevelModel, p
     problems.add(
       'line-written-as-emission',
       `line '${line.name}' is written from the upper level '${first.name}' to the lower level '${second.name}' (emission); it is computed as the same line with '${second.name}' as its lower level, at a positive frequency`,
-      line.node.headerRange,
+      lineLevelsRange(line.node),
     );
   }
+}
+
+/** `ground -> upper` of a line's header: what a finding about the pair of levels marks (the header when a side is missing). */
+export function lineLevelsRange(node: BlockNode): Range {
+  const { from, to } = node.link ?? {};
+  return from && to ? { start: from.range.start, end: to.range.end } : node.headerRange;
 }
 
 /** The term's highest J, for the advice text. */

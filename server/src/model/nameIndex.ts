@@ -4,6 +4,7 @@
  */
 import type { Range, Spanned } from '../format/ast';
 import { suggestNames } from '../format/didYouMean';
+import { findSpecies } from '../physics/species/lookup';
 import type { ProblemList } from './problems';
 import type { LevelModel, NameUse, SpeciesModel, SpeciesOrigin } from './types';
 
@@ -82,10 +83,27 @@ export class NameIndex<T extends { name: string; nameRange: Range; origin?: Spec
 }
 
 export function reportUnknown(kind: NamedKind, ref: Spanned, candidates: string[], problems: ProblemList): void {
+  if (kind === 'species') return reportUnknownSpecies(ref, candidates, problems);
   const suggestions = suggestNames(ref.text, candidates);
   const hint = suggestions.length > 0 ? ` — did you mean ${suggestions.map((s) => `'${s}'`).join(' or ')}?` : '';
   const none = candidates.length === 0 ? ` (no ${kind} is defined in this file)` : '';
   problems.add('name-unknown', `no ${kind} named '${ref.text}'${hint}${none}`, ref.range, { data: { suggestions } });
+}
+
+/**
+ * A species is named by its block's name, so `39K` or `k39` misses `species K39`, and a built-in
+ * name misses when the file has no block for it: both are said as such.
+ */
+function reportUnknownSpecies(ref: Spanned, candidates: string[], problems: ProblemList): void {
+  const builtin = findSpecies(ref.text);
+  const sameAtom = builtin ? candidates.filter((c) => findSpecies(c) === builtin) : [];
+  const suggestions = sameAtom.length > 0 ? sameAtom : suggestNames(ref.text, candidates);
+  let message = `no species named '${ref.text}'`;
+  if (suggestions.length > 0) message += ` — did you mean ${suggestions.map((s) => `'${s}'`).join(' or ')}?`;
+  if (sameAtom.length > 0) message += ' A species is named as its block names it.';
+  else if (builtin) message += `: ${builtin.id} is built in, but a file uses a species only through its own block; add \`species ${builtin.id}\` with the levels you need`;
+  else if (candidates.length === 0) message += ' (no species is defined in this file)';
+  problems.add('name-unknown', message, ref.range, { data: { suggestions } });
 }
 
 /**

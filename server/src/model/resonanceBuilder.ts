@@ -2,7 +2,7 @@
 import type { BlockNode, SettingNode } from '../format/ast';
 import { resolveLevel, type NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
-import { readPartQuantity, readSettingQuantity, readSettingWord, singlePart } from './settingReaders';
+import { readPartQuantity, readSettingQuantity, readSettingWord, singlePart, strayUnit } from './settingReaders';
 import type { LevelModel, NameUse, ResonanceModel, SpeciesModel, SublevelName } from './types';
 
 /** Default search range when the file gives none: wide enough for electron-spin resonance at X band. */
@@ -48,8 +48,11 @@ export function buildResonance(node: BlockNode, species: NameIndex<SpeciesModel>
     }
   }
   if (!r.level) problems.add('resonance-incomplete', `resonance '${r.name}' needs a level: level = <name>`, node.name.range);
-  if ((r.lower === undefined) !== (r.upper === undefined)) {
-    problems.add('resonance-incomplete', `resonance '${r.name}' names one sublevel of its pair; give both lower and upper`, node.name.range);
+  // A side written but unreadable is said at its value; only a side not written at all is missing.
+  const written = (key: string): boolean => node.settings.some((s) => s.key.text === key);
+  if (written('lower') !== written('upper')) {
+    const [given, missing] = written('lower') ? ['lower', 'upper'] : ['upper', 'lower'];
+    problems.add('resonance-incomplete', `resonance '${r.name}' gives its ${given} sublevel but not its ${missing} one; add ${missing} = <F> <m_F> (a resonance joins a pair)`, node.name.range);
   }
   return r;
 }
@@ -85,13 +88,28 @@ export function readLevelSetting(s: SettingNode, species: NameIndex<SpeciesModel
 /** `lower = 1 -1` (F and m_F; J and m_J for a term), also written `1, -1`. */
 export function readSublevelName(s: SettingNode, problems: ProblemList): SublevelName | undefined {
   const parts = s.groups.flat();
+  const stray = parts.length === 1 ? strayUnit(parts[0]!) : undefined;
+  if (stray) {
+    problems.add('resonance-sublevel-malformed', `'${stray.text}' is not a number: write ${s.key.text} = <F> <m_F>, e.g. ${s.key.text} = 2 +1 (F and m_F of the low-field label)`, stray.range);
+    return undefined;
+  }
   const bad = (): undefined => {
     problems.add('resonance-sublevel-malformed', `write ${s.key.text} = <F> <m_F>, e.g. ${s.key.text} = 2 +1 (F and m_F of the low-field label)`, s.valueText.range);
     return undefined;
   };
   if (parts.length !== 2) return bad();
+  const notNumber = parts.find((p) => p.kind !== 'number');
+  if (notNumber) {
+    if (notNumber.kind === 'word' && notNumber.unreadable) return undefined;
+    problems.add('resonance-sublevel-malformed', `'${notNumber.text}' is not a number: write ${s.key.text} = <F> <m_F>, e.g. ${s.key.text} = 2 +1 (F and m_F of the low-field label)`, notNumber.range);
+    return undefined;
+  }
   const twice = parts.map((p) => (p.kind === 'number' ? 2 * p.number.value : NaN));
-  if (twice.some((t) => !Number.isFinite(t) || Math.abs(t - Math.round(t)) > 1e-9)) return bad();
+  const notHalf = parts.find((_, i) => Math.abs(twice[i]! - Math.round(twice[i]!)) > 1e-9);
+  if (notHalf) {
+    problems.add('resonance-sublevel-malformed', `${s.key.text}: F and m_F are whole or half-whole numbers, got ${notHalf.text}`, notHalf.range);
+    return undefined;
+  }
   const [twoF, twoM] = twice.map(Math.round) as [number, number];
   if (twoF < 0 || Math.abs(twoM) > twoF || (twoF - twoM) % 2 !== 0) {
     problems.add('resonance-sublevel-malformed', `m must run from −F to F in whole steps; got F = ${parts[0]!.text}, m = ${parts[1]!.text}`, s.valueText.range);

@@ -2,8 +2,8 @@
  * Readers that turn one `key = value` setting into an SI number, an exact spin or a word,
  * reporting a plain-words problem at the value's range when the value does not fit.
  */
-import type { ParsedNumber, SettingNode, ValuePart } from '../format/ast';
-import { readQuantity, wordForUnit, type Dimension } from '../format/units';
+import type { ParsedNumber, Range, SettingNode, Spanned, ValuePart } from '../format/ast';
+import { isUnitText, readQuantity, type Dimension } from '../format/units';
 import type { ProblemList } from './problems';
 import type { Valued } from './types';
 
@@ -19,6 +19,11 @@ export function singlePart(setting: SettingNode, problems: ProblemList, what: st
     problems.add('value-missing', `${setting.key.text} needs a value (${what})`, setting.range);
     return undefined;
   }
+  const decimal = decimalComma(setting);
+  if (decimal) {
+    problems.add('value-decimal-comma', `'${decimal.written}' has a decimal comma; a comma separates list items, so write ${decimal.meant}`, decimal.range, { data: { suggestions: [decimal.meant] } });
+    return undefined;
+  }
   if (parts.length > 1 || setting.groups.length > 1) {
     const extra = parts[1] ?? parts[0]!;
     problems.add('value-extra', `${setting.key.text} takes one value (${what}); the rest of the line is not used`, {
@@ -29,6 +34,23 @@ export function singlePart(setting: SettingNode, problems: ProblemList, what: st
   return isUnreadable(parts[0]) ? undefined : parts[0];
 }
 
+/**
+ * `3,2 G` where one value goes: a whole number, a comma with no blank either side, then digits.
+ * Read as a list it gave a missing unit with a fix writing `3 T,2 G`, and an unused rest.
+ */
+function decimalComma(setting: SettingNode): { written: string; meant: string; range: Range } | undefined {
+  const [first, second] = setting.groups;
+  if (setting.groups.length !== 2 || first?.length !== 1 || !second?.[0]) return undefined;
+  const whole = first[0]!;
+  const rest = second[0];
+  if (whole.kind !== 'number' || !/^[+\-\u2212]?\d+$/.test(whole.text) || rest.kind === 'word' || !/^\d/.test(rest.text)) return undefined;
+  const { end } = whole.range;
+  const next = rest.range.start;
+  if (end.line !== next.line || next.character !== end.character + 1) return undefined;
+  const digits = /^\d+/.exec(rest.text)![0];
+  return { written: `${whole.text},${digits}`, meant: `${whole.text}.${digits}`, range: { start: whole.range.start, end: { line: next.line, character: next.character + digits.length } } };
+}
+
 /** A quantity of the given dimension, converted to SI. */
 export function readSettingQuantity(
   setting: SettingNode,
@@ -36,14 +58,6 @@ export function readSettingQuantity(
   problems: ProblemList,
   what: string,
 ): Valued<number> | undefined {
-  const parts = setting.groups.flat();
-  if (setting.groups.length === 1 && parts.length === 2 && parts[0]!.kind === 'number') {
-    const unit = wordForUnit(parts[1]!, dimension);
-    if (unit) {
-      problems.push(unit);
-      return undefined;
-    }
-  }
   const part = singlePart(setting, problems, what);
   if (!part) return undefined;
   return readPartQuantity(part, dimension, problems, setting.key.text);
@@ -71,10 +85,22 @@ export function isUnreadable(part: ValuePart | undefined): boolean {
   return part !== undefined && part.kind === 'word' && part.unreadable === true;
 }
 
+/** The word after a number that the value reads as its unit but is no unit (`40 x`), for settings that take no unit. */
+export function strayUnit(part: ValuePart): Spanned | undefined {
+  return part.kind === 'quantity' && !isUnitText(part.unit.text) ? part.unit : undefined;
+}
+
 /** A plain number (no unit). */
 export function readSettingNumber(setting: SettingNode, problems: ProblemList, what: string): Valued<number> | undefined {
   const part = singlePart(setting, problems, what);
   if (!part) return undefined;
+  const stray = strayUnit(part);
+  if (stray && part.kind === 'quantity') {
+    // `turns = 40 x`: no unit is meant; the word is left over.
+    problems.add('value-extra', `${setting.key.text} takes one plain number (${what}); '${stray.text}' is not used`, stray.range);
+    const numberEnd = { line: part.range.start.line, character: part.range.start.character + part.text.search(/\s|$/) };
+    return withUncertainty(part.number, { start: part.range.start, end: numberEnd });
+  }
   if (part.kind !== 'number') {
     const got = part.kind === 'quantity' ? `a quantity with unit ${part.unit.text}` : `'${part.text}'`;
     problems.add('value-not-number', `${setting.key.text} needs a plain number (${what}), got ${got}`, part.range);

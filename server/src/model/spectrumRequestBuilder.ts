@@ -14,8 +14,8 @@ import type { ProblemList } from './problems';
 import { readSettingNumber, readSettingQuantity, readSettingWord } from './settingReaders';
 import type { LineModel, SpectrumRequest, Valued } from './types';
 
-const DIRECTIONS = ['along', 'across'] as const;
-const LIGHTS = ['all', 'pi', 'sigma', 'sigma+', 'sigma-'] as const;
+export const SPECTRUM_DIRECTIONS = ['along', 'across'] as const;
+export const SPECTRUM_LIGHTS = ['all', 'pi', 'sigma', 'sigma+', 'sigma-'] as const;
 
 export function readSpectrumRequest(line: LineModel, settings: readonly SettingNode[], problems: ProblemList): SpectrumRequest | undefined {
   const spectrumSetting = settings.find((s) => s.key.text === 'spectrum');
@@ -25,13 +25,13 @@ export function readSpectrumRequest(line: LineModel, settings: readonly SettingN
     }
     return undefined;
   }
-  const direction = readSettingWord(spectrumSetting, DIRECTIONS, problems);
+  const direction = readSettingWord(spectrumSetting, SPECTRUM_DIRECTIONS, problems);
   // With a bad direction the other settings are still read, so their mistakes show now, not after this one is fixed.
   const req: SpectrumRequest = { range: spectrumSetting.range, direction: direction ?? 'across', light: 'all' };
   for (const s of settings) {
     switch (s.key.text) {
       case 'light': {
-        const w = readSettingWord(s, LIGHTS, problems);
+        const w = readSettingWord(s, SPECTRUM_LIGHTS, problems);
         if (w) {
           req.light = w;
           req.lightRange = s.valueText.range;

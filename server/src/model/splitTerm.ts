@@ -17,7 +17,7 @@ export interface SplitTerm {
   blank: number;
 }
 
-/** Only when the designation without the blank reads as a term and has fewer errors than as written. */
+/** Only when the designation without the blank reads as a term (perhaps with a wrong J) and has fewer errors than as written. */
 export function splitTermOf(designation: string, errorsAsWritten: number): SplitTerm | undefined {
   if (errorsAsWritten === 0) return undefined;
   const words = [...designation.matchAll(/\S+/g)];
@@ -31,7 +31,10 @@ export function splitTermOf(designation: string, errorsAsWritten: number): Split
   const term = prev[0] + last[0];
   const text = designation.slice(0, start) + term + designation.slice(end);
   const joined = parseLevelDesignation(text);
-  if (!joined.term || joined.issues.filter((i) => i.severity === 'error').length >= errorsAsWritten) return undefined;
+  const errors = joined.issues.filter((i) => i.severity === 'error');
+  // A J the term cannot have (`2P° 5/2`) still reads as a term: that J is the one error left.
+  const readsAsTerm = !!joined.term || (errors.length > 0 && errors.every((i) => i.code.startsWith('term-j-')));
+  if (!readsAsTerm || errors.length >= errorsAsWritten) return undefined;
   return { text, start, end, term, joinAt: start + prev[0].length, blank: last.index! - start - prev[0].length };
 }
 

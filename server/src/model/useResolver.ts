@@ -92,13 +92,17 @@ function resolveOne(node: UseNode, sources: SetupSources, context: UseContext, b
   const p = node.path;
   if (!p) return out;
   const written = p.text;
+  // A path whose quotes are wrong is already an error; a file it cannot find is not a second one.
+  const missing = (message: string, extra?: Partial<Problem>): void => {
+    if (!node.quotesWrong) problems.add('use-file-missing', message, p.range, extra);
+  };
   if (!sources.readFile) {
-    problems.add('use-file-missing', `cannot read ${written}: this text is not read from a file, so it cannot use other files`, p.range);
+    missing(`cannot read ${written}: this text is not read from a file, so it cannot use other files`);
     return out;
   }
   const location = resolveLocation(sources.uri, written);
   if (location === undefined) {
-    problems.add('use-file-missing', `cannot read ${written}: this document has no folder to start from (save it as a file first)`, p.range);
+    missing(`cannot read ${written}: this document has no folder to start from (save it as a file first)`);
     return out;
   }
   out.location = location;
@@ -135,7 +139,7 @@ function resolveOne(node: UseNode, sources: SetupSources, context: UseContext, b
     if (text === undefined) {
       const suggestions = siblingSuggestions(sources, location, written);
       const hint = suggestions.length > 0 ? ` — did you mean ${suggestions.map((s) => `'${s}'`).join(' or ')}?` : '';
-      problems.add('use-file-missing', `cannot read ${written}: no such file${hint}`, p.range, { data: { suggestions } });
+      missing(`cannot read ${written}: no such file${hint}`, { data: { suggestions } });
       return out;
     }
     const usedDoc = parseUsed(key, text);

@@ -24,6 +24,9 @@ export const DIRECTION_WORDS: Readonly<Record<string, Vec3>> = {
   '-z': [0, 0, -1],
 };
 
+/** The direction words as a user writes them (the `+` forms are accepted, not offered). */
+export const DIRECTION_NAMES: readonly string[] = Object.keys(DIRECTION_WORDS).filter((w) => !w.startsWith('+'));
+
 function spanOf(parts: readonly ValuePart[], fallback: Range): Range {
   return parts.length > 0 ? { start: parts[0]!.range.start, end: parts[parts.length - 1]!.range.end } : fallback;
 }
@@ -70,7 +73,7 @@ export function readVector(setting: SettingNode, kind: Dimension, problems: Prob
 /** A direction from value parts: one word (x, -z, …) or three plain numbers in `groups`, normalised. */
 export function readDirectionParts(key: string, groups: readonly (readonly ValuePart[])[], range: Range, problems: ProblemList): Valued<Vec3> | undefined {
   const flat = groups.flat();
-  const allowed = Object.keys(DIRECTION_WORDS).filter((w) => !w.startsWith('+'));
+  const allowed = DIRECTION_NAMES;
   if (flat.length === 1 && flat[0]!.kind === 'word') {
     const w = flat[0]!;
     const v = DIRECTION_WORDS[w.text];

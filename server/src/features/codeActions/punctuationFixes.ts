@@ -31,7 +31,9 @@ export function missingColonFix(ctx: FixContext): CodeAction[] {
 export function missingArrowFix(ctx: FixContext): CodeAction[] {
   const r = ctx.problem.range;
   if (r.start.line !== r.end.line) return [];
-  return [quickFix(ctx, "Add '->' between the levels", [{ range: r, newText: ' -> ' }], true)];
+  // A wrong arrow (`=>`) is replaced; a missing one goes into the gap between the levels.
+  const wrong = r.end.character > r.start.character && lineText(ctx.analysis.doc, r.start.line).slice(r.start.character, r.end.character).trim() !== '';
+  return [quickFix(ctx, wrong ? "Write '->'" : "Add '->' between the levels", [{ range: r, newText: wrong ? '->' : ' -> ' }], true)];
 }
 
 /** `level-needs-j`: the term has no J; offer each J its S and L allow. */
