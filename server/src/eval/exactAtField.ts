@@ -22,11 +22,12 @@ export interface ExactAtField {
  * species) and an evaluation visits each at every working field, so equal ones are solved once.
  * The entry is shared: callers copy the states before changing them (a level's tables,
  * eval/levelTables.ts, copy them when first read). Bounded: the least recently used go first.
- * Each entry keeps the engine's own solution beside it, so a line between two levels reuses
- * their solves at that field instead of solving both again (`solvedAtField`).
+ * A J level's entry keeps the engine's own solution beside it, so a line between two levels
+ * reuses their solves at that field instead of solving both again (`solvedAtField`); lines join
+ * J levels only, so a whole term's large eigenvectors are not kept.
  */
 const MEMO_ENTRIES = 4096;
-const memo = new Map<string, { result: ExactAtField; solved: SolveResult }>();
+const memo = new Map<string, { result: ExactAtField; solved?: SolveResult }>();
 
 function memoKey(spec: LevelSpec, fieldT: number): string {
   return spec.kind === 'hyperfine'
@@ -56,11 +57,12 @@ export function solvedAtField(spec: LevelSpec, fieldT: number): SolveResult {
   return memo.get(memoKey(spec, fieldT))?.solved ?? solveLevel(spec, fieldT);
 }
 
-function solveExactAtField(spec: LevelSpec, fieldT: number): { result: ExactAtField; solved: SolveResult } {
+function solveExactAtField(spec: LevelSpec, fieldT: number): { result: ExactAtField; solved?: SolveResult } {
   // One model for both: building a large level's model costs as much as solving it once.
   const built = buildLevelModel(spec);
   const solved = solveLevel(spec, fieldT, built);
-  return { result: exactFromSolved(spec, fieldT, built, solved), solved };
+  const result = exactFromSolved(spec, fieldT, built, solved);
+  return spec.kind === 'hyperfine' ? { result, solved } : { result };
 }
 
 function exactFromSolved(spec: LevelSpec, fieldT: number, built: ReturnType<typeof buildLevelModel>, solved: SolveResult): ExactAtField {

@@ -120,7 +120,7 @@ export function electricDipoleLine(
 /**
  * What `electricDipoleLine` reports (its issues, the sum rule checked all the same, its line
  * centre and formula g_eff) without building the components or the centroid g_eff: for a caller
- * that builds the components later, if at all. `components` is empty and `gEff.fromCentroid` NaN.
+ * that builds the components later, if at all. `components` is empty and `gEff.fromCentroid` null.
  */
 export function electricDipoleLineChecks(
   lower: HyperfineLevelSpec,
@@ -167,7 +167,7 @@ function dipoleLine(lower: HyperfineLevelSpec, upper: HyperfineLevelSpec, fieldT
   }
   const gEff = {
     formula: effectiveLandeFactor({ twoJ: lower.twoJ, gJ: lower.gJ }, { twoJ: upper.twoJ, gJ: upper.gJ }),
-    fromCentroid: build ? landeFromSums(sums, centroidFieldT) : NaN,
+    fromCentroid: build ? landeFromSums(sums, centroidFieldT) : null,
     centroidFieldT,
   };
   return { fieldT, components: got.components, gEff, lineCentreHz: centreHz, sumRuleDeviation: got.sumRuleDeviation, issues };
