@@ -8,9 +8,12 @@ import { convertSI } from '../../format/units';
 import { type FixContext, quickFix } from './types';
 
 /** Rounded away from zero to 3 significant digits: the written value must not fall below the one that resolves. */
-function roundedUp(x: number): string {
+export function roundedUp(x: number): string {
   const step = 10 ** (Math.floor(Math.log10(x)) - 2);
-  return String(Number((Math.ceil(x / step) * step).toPrecision(3)));
+  const near = Number(x.toPrecision(3));
+  // A value already of 3 digits (1.11 after a unit conversion's round-off) stays as it is.
+  if (near >= x * (1 - 1e-12)) return String(near);
+  return String(Number((near + step).toPrecision(3)));
 }
 
 export function resolvingGradientFix(ctx: FixContext): CodeAction[] {
