@@ -178,6 +178,20 @@ const CASES: Case[] = [
     says: ["K39 is built in, but a file uses a species only through its own block; add `species K39`", "did you mean 'Rb87'? A species is named as its block names it"],
   },
   {
+    // Review: the did-you-mean and the built-in sentence ran together as "…'K40'?: K41 is built in".
+    name: 'a built-in species without its block, close to another block name: the suggestion and the sentence read apart',
+    text: 'species K40\n  level g: 4s 2S1/2\nfield f = 1 G\n  species = K41\n',
+    findings: ['4:13-16 name-unknown [K41]'],
+    says: ["no species named 'K41' — did you mean 'K40'? K41 is built in, but a file uses a species only through its own block"],
+  },
+  {
+    // Review: a number followed by a word is read as a quantity; the message quotes only the word.
+    name: 'a populations entry with a word for its weight quotes the word',
+    text: 'beam b\n  populations = 1 0.5, 2 abc\n',
+    findings: ['1:6-7 beam-incomplete [b]', '2:24-29 beam-populations-malformed [2 abc]'],
+    says: ["'abc' is not a number"],
+  },
+  {
     name: 'a resonance with one side of its pair unreadable says so at that side; a side not written says which',
     text: 'species Rb87\n  level g: 5s 2S1/2\nresonance r\n  level = g\n  lower = 2 x\n  upper = 1 1\nresonance s\n  level = g\n  upper = 1 1\n',
     findings: ['5:13-14 resonance-sublevel-malformed [x]', '7:11-12 resonance-incomplete [s]'],

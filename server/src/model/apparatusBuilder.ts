@@ -4,7 +4,7 @@ import type { Dimension } from '../format/units';
 import { physicalField } from './fieldRange';
 import { NameIndex, resolveLevel } from './nameIndex';
 import { ProblemList } from './problems';
-import { isUnreadable, readPartQuantity, readSettingQuantity, singlePart } from './settingReaders';
+import { isUnreadable, readPartQuantity, readSettingQuantity, singlePart, strayUnit } from './settingReaders';
 import { readMagnetSources } from './magnetSources';
 import type { BeamModel, BeamSource, FieldModel, FieldSourceModel, MagnetModel, NameUse, SpeciesModel, Valued } from './types';
 
@@ -303,7 +303,7 @@ function readPopulations(s: SettingNode, problems: ProblemList): BeamModel['popu
     const weight = nums[nums.length - 1]!;
     const word = g.find((p) => p.kind !== 'number');
     const wrong = word
-      ? `'${word.text}' is not a number`
+      ? `'${(strayUnit(word) ?? word).text}' is not a number`
       : g.length !== 2 && g.length !== 3
         ? `an entry has 2 or 3 numbers, this one has ${g.length}`
         : twoF === undefined

@@ -101,7 +101,7 @@ function reportUnknownSpecies(ref: Spanned, candidates: string[], problems: Prob
   let message = `no species named '${ref.text}'`;
   if (suggestions.length > 0) message += ` — did you mean ${suggestions.map((s) => `'${s}'`).join(' or ')}?`;
   if (sameAtom.length > 0) message += ' A species is named as its block names it.';
-  else if (builtin) message += `: ${builtin.id} is built in, but a file uses a species only through its own block; add \`species ${builtin.id}\` with the levels you need`;
+  else if (builtin) message += `${suggestions.length > 0 ? ' ' : ': '}${builtin.id} is built in, but a file uses a species only through its own block; add \`species ${builtin.id}\` with the levels you need`;
   else if (candidates.length === 0) message += ' (no species is defined in this file)';
   problems.add('name-unknown', message, ref.range, { data: { suggestions } });
 }
