@@ -2,6 +2,8 @@
  * The four lithium D-line centroids stored in the species table, held to the measured differences between
  * them: the ⁷Li − ⁶Li isotope shift of the D1 line and the 2P fine structure of each isotope. Each check names
  * where the number was read (search tool, abstracts); agreement is within twice the combined uncertainty.
+ * The table is derived from these very differences (data-lithium.ts), so the first two checks guard the
+ * derivation (a typo, a changed anchor or sign), not the sources; the last one is independent of them.
  */
 import { describe, expect, it } from 'vitest';
 import { level, num } from '../fixtures/builtinLookup';

@@ -197,7 +197,7 @@ describe('chromium and strontium hyperfine constants and clock lines', () => {
   });
 
   it('⁴⁰Ca 1S0–3P1 (recalled) agrees with the phase-coherent measurement 455 986 240 493.95 kHz, u = 0.43 kHz', () => {
-    // "First Phase-Coherent Frequency Measurement of Visible Radiation", abstract (scilit.com); no journal printed there.
+    // A phase-coherent frequency measurement of the line, abstract read on scilit.com; no journal printed there.
     within2Sigma(level('Ca40', '3P1').energyHz, 455986240493.95e3, 0.43e3, 'Ca40 3P1');
   });
 

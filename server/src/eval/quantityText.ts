@@ -158,6 +158,8 @@ const MAX_DOUBLE_DIGITS = 15;
  * last of the uncertainty's UNCERTAINTY_DIGITS significant digits. This is the one formatter for
  * `value(uncertainty)` (text reports, hovers, inlay hints, fit reports). Without an uncertainty
  * (or with 0) it is `format(value)`, so results with no uncertain input read exactly as before.
+ * An uncertainty too small to show within a double's 15 significant digits gives the value at
+ * those 15 digits without brackets (its neighbours in a table keep their precision).
  */
 export function withUncertainty(value: number | null | undefined, unc: number | null | undefined, format: (v: number) => string): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return MISSING;

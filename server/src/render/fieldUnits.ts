@@ -10,8 +10,8 @@ export type FieldUnit = (typeof FIELD_UNITS)[number];
 /** Tesla per unit. */
 export const FIELD_UNIT_TESLA: Readonly<Record<FieldUnit, number>> = { G: 1e-4, mT: 1e-3, 'µT': 1e-6, nT: 1e-9, T: 1 };
 
-/** What a command line accepts: the display units, and `uT` for µT where µ is hard to type. */
-export const FIELD_UNIT_CHOICES = ['G', 'mT', 'uT', 'µT', 'nT', 'T'] as const;
+/** What a command line accepts: the display units, `uT` for µT where µ is hard to type, and the Greek μT many keyboards give. */
+export const FIELD_UNIT_CHOICES = ['G', 'mT', 'uT', 'µT', 'μT', 'nT', 'T'] as const;
 
 export function isFieldUnit(v: unknown): v is FieldUnit {
   return typeof v === 'string' && (FIELD_UNITS as readonly string[]).includes(v);

@@ -2,7 +2,7 @@
  * Whether the level diagram breaks its energy axis, and into which bands. A manifold is the
  * group of sublevels that share F (or J, without a nucleus); over the plotted fields it fills
  * the energy interval [lo, hi], its spread. At small fields the manifolds sit far apart compared
- * with their spreads (F = 1 and 2 of a ground level 6.8 GHz apart, each fanning out by 0.3 MHz
+ * with their spreads (F = 1 and 2 of a ground level 6.8 GHz apart, fanning out by 0.28 and 0.56 MHz
  * at 20 µT): on one axis every fan is a flat line. Each group of manifolds then gets its own
  * band with its own scale, so its fan fills the band.
  *

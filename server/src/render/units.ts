@@ -39,7 +39,7 @@ export function frequencyUnit(maxAbsHz: number, givenHz?: number): DisplayUnit {
 }
 
 export function fieldDisplayUnit(unit: FieldUnit): DisplayUnit {
-  return { factor: FIELD_UNIT_TESLA[unit] ?? 1, symbol: unit in FIELD_UNIT_TESLA ? unit : 'T' };
+  return { factor: FIELD_UNIT_TESLA[unit], symbol: unit };
 }
 
 /** Figures set numbers with the true minus sign (U+2212); the numbers themselves come from the one formatter. */

@@ -4,8 +4,8 @@
  * Energies are E/h in Hz, fields in tesla, positions in metres, moments in J/T.
  */
 
-/** Units a field axis reads in: the tesla family down to nT (a magnetometer's fields), and gauss (fieldUnits.ts). */
 import type { FieldUnit } from './fieldUnits';
+/** Units a field axis reads in (the one list: fieldUnits.ts). */
 export type { FieldUnit };
 
 /** A named field of the file on a field axis. */

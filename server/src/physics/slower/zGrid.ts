@@ -2,7 +2,8 @@
  * The z samples of a design check: a uniform grid over [0, L] (every one of its points kept), each
  * interval halved while the ideal field or the checked field at its midpoint lies more than `tol`
  * off the chord. The √ end of the ideal profile and a coil design's fall at the exit then draw
- * without a kink, while the uniform points (and so the drop point's resolution) stay as before.
+ * without a kink. The uniform points stay; the drop point, the worst shortfall and the capture
+ * speed are taken over the added points too, so they may fall between them.
  */
 import type { AxisField } from './types';
 
