@@ -157,9 +157,11 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
   }
 
   // Sticks closer than their width draw as one: the figure says so, or the report's count would not match what is seen.
-  const overlap = overlapNote(drawn.map((c) => x(c.offsetHz)));
+  const stickXs = drawn.map((c) => x(c.offsetHz));
+  const places = overlapPlaces(stickXs);
+  const overlap = overlapNote(stickXs.length, places);
   const notes = [overlap, faintNote?.text].filter((t): t is string => t !== undefined);
-  if (overlap) body.push(el('text', { class: 'sl-note sl-overlap-note', 'data-places': overlapPlaces(drawn.map((c) => x(c.offsetHz))), x: box.left, y: HEIGHT + NOTE_ROW - 8, 'font-size': 10, fill: pal.muted }, text(overlap)));
+  if (overlap) body.push(el('text', { class: 'sl-note sl-overlap-note', 'data-places': places, x: box.left, y: HEIGHT + NOTE_ROW - 8, 'font-size': 10, fill: pal.muted }, text(overlap)));
   if (faintNote) body.push(faintNoteSvg(faintNote, box.left, HEIGHT + NOTE_ROW * (overlap ? 2 : 1) - 8, pal));
   const desc = `Stick spectrum of ${comps.length} line components (${counts.join(', ')}) from Δf = ${formatIn(fExtent[0], unit)} to ${formatIn(fExtent[1], unit)}${notes.map((t) => `; ${t}`).join('')}.`;
   return svgDocument(
@@ -203,9 +205,8 @@ function overlapPlaces(xs: number[]): number {
 }
 
 /** The sentence for sticks drawn on top of each other, when some are. */
-function overlapNote(xs: number[]): string | undefined {
-  const places = overlapPlaces(xs);
-  return places < xs.length ? `${xs.length} components drawn at ${places} ${places === 1 ? 'place' : 'places'}: sticks closer than their width overlap (each is listed in the report)` : undefined;
+function overlapNote(count: number, places: number): string | undefined {
+  return places < count ? `${count} components drawn at ${places} ${places === 1 ? 'place' : 'places'}: sticks closer than their width overlap (each is listed in the report)` : undefined;
 }
 
 /** Components left out of the figure: how many, and the sentence that says so. */
