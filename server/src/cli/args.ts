@@ -5,6 +5,7 @@
  */
 import { parseArgs as nodeParseArgs } from 'util';
 import { suggestNames } from '../format/didYouMean';
+import { listWords } from '../physics/termSymbol';
 
 export interface OptionSpec {
   /** Placeholder for the value in help (`NAME`, `FILE`); absent for an option that takes none. */
@@ -114,5 +115,5 @@ export function stringOption(args: ParsedArgs, name: string, allowed?: readonly 
 
 /** `a, b or c`: a fixed set of values as a sentence says it. */
 export function choiceList(items: readonly string[]): string {
-  return items.length < 2 ? items.join('') : `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}`;
+  return listWords(items);
 }

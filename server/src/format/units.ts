@@ -13,6 +13,7 @@ import { readNumberPrefix } from './numbers';
 import { canonicalUnitName, isOffsetUnit, parseUnitSyntax } from './unitGrammar';
 import { BASE_DIMENSION_COUNT, convertScale, unitEntry } from './unitLookup';
 import { PLANCK_H, SPEED_OF_LIGHT } from '../physics/constants';
+import { listWords } from '../physics/termSymbol';
 
 export type Dimension =
   | 'flux-density'
@@ -246,11 +247,6 @@ export function looksLikeMisspeltUnit(word: string): boolean {
   return word.length >= 3 && suggestUnitNames(word).some((u) => Math.abs(u.length - word.length) <= 1);
 }
 
-function orList(items: readonly string[]): string {
-  if (items.length <= 1) return items.join('');
-  return `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}`;
-}
-
 function clip(text: string): string {
   return text.length > 40 ? `${text.slice(0, 37)}…` : text;
 }
@@ -312,7 +308,7 @@ function fittingSuggestions(e: Extract<UnitEvaluation, { ok: false }>, unitText:
 export function readQuantity(part: ValuePart, expected: Dimension, what?: string): QuantityReading {
   const info = DIMENSIONS[expected];
   const label = what ?? info.label;
-  const examples = orList(info.examples);
+  const examples = listWords(info.examples);
   if (part.kind === 'number') {
     if (expected === 'dimensionless') {
       return { si: part.number.value, ...(part.number.uncertainty !== undefined ? { siUncertainty: part.number.uncertainty } : {}) };

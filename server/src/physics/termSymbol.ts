@@ -469,7 +469,7 @@ export function issue(
 }
 
 /** 'a', 'a or b', 'a, b or c' */
-export function listWords(items: string[]): string {
+export function listWords(items: readonly string[]): string {
   if (items.length <= 1) return items.join('');
   return `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}`;
 }
