@@ -68,7 +68,7 @@ describe('options', () => {
     [['eval', RB, '--format='], /--format needs a value/],
     [['eval', RB, '--help=yes'], /--help takes no value/],
     [['check', '--format', 'xml', RB], /--format must be text, json or sarif, got 'xml'/],
-    [['render', RB, '--unit', 'Gauss'], /--unit must be G, mT, uT, µT, nT or T, got 'Gauss'$/m],
+    [['render', RB, '--unit', 'Gauss'], /--unit must be G, mT, uT, µT, μT, nT or T, got 'Gauss'$/m],
     [['sweep', RB, '--to', '1G', '--level', 'zzz'], /no level named 'zzz'; the file has 'Rb87\.ground', 'Rb87\.p32'$/m],
     [['sweep', RB, '--to', '1G', '--level', 'groud'], /no level named 'groud' — did you mean 'ground'\?$/m],
     [['profile', LI, '--beam', 'xyz'], /no beam named 'xyz'; the file has 'main'$/m],
