@@ -40,7 +40,7 @@ export function evaluateFit(f: FitRequestModel, gJOf: GJLookup, problems: Proble
     status: 'failed',
     measured_unit: unit,
     parameters: [],
-    dof: 0,
+    dof: null,
     uncertainty_basis: 'data',
     iterations: 0,
     points: [],
@@ -270,7 +270,8 @@ function fromOutcome(
     ...(o.covariance && allFinite(o.covariance) ? { covariance: o.covariance } : {}),
     ...(o.correlation && allFinite(o.correlation) ? { correlation: o.correlation } : {}),
     ...(Number.isFinite(o.chi2) ? { chi2: o.chi2 } : {}),
-    dof: o.dof,
+    // A fit that did not run has no degrees of freedom (not points − parameters, which may be < 0).
+    dof: o.ok ? o.dof : null,
     ...(o.reducedChi2 !== null && Number.isFinite(o.reducedChi2) ? { reduced_chi2: o.reducedChi2 } : {}),
     uncertainty_basis: o.scaledByResidual ? 'scatter' : 'data',
     iterations: o.iterations,

@@ -51,7 +51,8 @@ export interface FitResult {
   covariance?: number[][];
   correlation?: number[][];
   chi2?: number;
-  dof: number;
+  /** Degrees of freedom (points − free parameters); null when the fit did not run. */
+  dof: number | null;
   reduced_chi2?: number;
   /** data: from the points' own uncertainties; scatter: scaled by χ²/dof (the points carry none). */
   uncertainty_basis: 'data' | 'scatter';

@@ -21,6 +21,21 @@ export function csvNumber(x: number | null | undefined): string {
   return x === 0 ? '0' : numberText(x);
 }
 
+/**
+ * Units of round-off a computed value may carry relative to the largest value of its column: a
+ * value within this many ε of that scale is zero in theory written with its arithmetic's noise
+ * (common practice: a few dozen ε covers the sums and differences of one evaluation).
+ */
+export const ROUND_OFF_ULPS = 64;
+
+/**
+ * `x`, or 0 when it is round-off relative to `scale` (|x| ≤ 64 ε |scale|, e.g. 2e-17 T in a
+ * profile whose largest field is 0.07 T). A value above that is kept however small it is.
+ */
+export function zeroIfRoundOff(x: number, scale: number): number {
+  return Math.abs(x) <= ROUND_OFF_ULPS * Number.EPSILON * Math.abs(scale) ? 0 : x;
+}
+
 /** A row of numbers as one CSV line, cell for cell what csvNumber writes. */
 export function csvNumberRow(row: readonly (number | null | undefined)[]): string {
   return numberRowsText([row]);

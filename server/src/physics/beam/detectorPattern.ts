@@ -217,7 +217,10 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][], re
     convolveBox(out, slitB, flat, support);
     convolveBox(flat, aperture, out, support);
     const inside = weighInto(out, total, weights[i], inverseWidth, support);
-    offGrid += weights[i] * Math.max(0, 1 - inside);
+    // A sum of (to − from) bins is exact to about that many ε (standard summation bound, from memory):
+    // a loss below it is a pattern wholly on the grid, written with the sum's round-off.
+    const lost = 1 - inside;
+    offGrid += lost > (support.to - support.from) * Number.EPSILON ? weights[i] * lost : 0;
     const own = peakShape(out, centresM, support.from, support.to);
     const peakM = !own ? NaN : refine ? refinePeak(own.positionM, binWidth(edgesM, own.index), [{ k: ks[i], weight: 1 }], law, image) : own.positionM;
     ownPeaks.push(peakM);

@@ -70,7 +70,7 @@ export function exactProfile(x: number, members: readonly RefineMember[], law: S
  * of zero width have no box form; a maximum on the bracket's edge means the guess was not at the top).
  */
 export function refinePeak(guessM: number, stepM: number, members: readonly RefineMember[], law: SpeedLaw, image: SlitImage): number {
-  if (members.every((m) => m.k === 0)) return 0; // the kernel is symmetric about the axis
+  if (members.every((m) => m.k === 0) || mirrorSymmetric(members)) return 0; // the kernel is symmetric about the axis
   if (law.singleSpeed !== undefined || !(image.boxAM > 0 && image.boxBM > 0) || !(stepM > 0)) return guessM;
   // The kernel is symmetric: a peak deflected to −z is the mirror image of one at +z, computed the same way.
   if (members.every((m) => m.k <= 0)) return -refinePeak(-guessM, stepM, members.map((m) => ({ k: -m.k, weight: m.weight })), law, image);
@@ -103,3 +103,19 @@ export function refinePeak(guessM: number, stepM: number, members: readonly Refi
 }
 
 const GOLDEN = (Math.sqrt(5) - 1) / 2;
+
+/**
+ * Members that pair off as ±k with equal weights (a merged σ pair of a J = 1/2 level) make a
+ * profile symmetric about the axis: its top is at 0 exactly, not at the grid's round-off of 0.
+ * k and weights of a pair are computed apart, so they match to a few ε of the largest (64 ε).
+ */
+function mirrorSymmetric(members: readonly RefineMember[]): boolean {
+  const sorted = [...members].sort((a, b) => a.k - b.k);
+  const kScale = Math.max(...sorted.map((m) => Math.abs(m.k)));
+  const wScale = Math.max(...sorted.map((m) => Math.abs(m.weight)));
+  const close = (a: number, b: number, scale: number) => Math.abs(a - b) <= 64 * Number.EPSILON * scale;
+  return sorted.every((m, i) => {
+    const mirror = sorted[sorted.length - 1 - i]!;
+    return close(m.k, -mirror.k, kScale) && close(m.weight, mirror.weight, wScale);
+  });
+}

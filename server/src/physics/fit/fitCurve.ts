@@ -68,8 +68,27 @@ export interface FitOutcome {
 
 /** |χ²/dof − 1| beyond this many standard deviations √(2/dof) is reported (common practice). */
 const CHI2_SIGMAS = 3;
-/** A stop with the residuals this far from orthogonal to every Jacobian column is no minimum. */
+/** A stop with the residuals this far from orthogonal to a Jacobian column is no minimum (unless round-off, below, allows more). */
 const GRADIENT_COSINE_LIMIT = 1e-5;
+
+/**
+ * The largest cosine between the residuals and a Jacobian column that the model's round-off can
+ * hide. Moving the rest of the way along column j lowers χ² by (cos_j‖r‖)²; each prediction carries
+ * at least one unit of round-off δ_i = ε|model_i|/σ_i, so χ² itself is uncertain by about
+ * 2Σ|r_i|δ_i. A gain below that cannot be seen by any optimiser, and the stop is a minimum
+ * (common practice: a stopping test cannot ask for more than the function's own precision).
+ * Example: 7 GHz resonances at ±20 Hz give δ ≈ 5e-8 and a limit near 7e-4.
+ */
+export function roundOffCosine(weightedResiduals: Float64Array, model: Float64Array, sigma: Float64Array | undefined): number {
+  let norm = 0;
+  let noise = 0;
+  for (let i = 0; i < weightedResiduals.length; i++) {
+    const r = weightedResiduals[i]!;
+    norm += r * r;
+    noise += 2 * Math.abs(r) * ((Number.EPSILON * Math.abs(model[i]!)) / (sigma ? sigma[i]! : 1));
+  }
+  return norm > 0 ? Math.sqrt(noise / norm) : 0;
+}
 
 export function fitCurve(problem: CurveProblem, options: LmOptions = {}): FitOutcome {
   const n = problem.y.length;
@@ -146,7 +165,8 @@ export function fitCurve(problem: CurveProblem, options: LmOptions = {}): FitOut
   const errors = params.map((_, j) => (covariance && covariance[j]![j]! >= 0 ? Math.sqrt(covariance[j]![j]!) : null));
   const correlation = covariance ? correlationOf(covariance) : null;
 
-  const notMinimum = !(lm.gradientCosine <= GRADIENT_COSINE_LIMIT) && !lm.atRoundOff;
+  const cosineLimit = Math.max(GRADIENT_COSINE_LIMIT, roundOffCosine(lm.residuals, prediction, sigma));
+  const notMinimum = !(lm.gradientCosine <= cosineLimit) && !lm.atRoundOff;
 
   if (lm.status !== 'converged' || notMinimum) {
     const why = lm.status === 'max-iterations' ? `after ${lm.iterations} iterations` : 'no step lowers χ² any further';
