@@ -22,8 +22,8 @@ describe('sublevel fit', () => {
     const r = cli('fit', FILE);
     expect(r.out).toMatch(/pi_lines line 23 +6834696\.976 kHz +-165\.6 Hz/);
     expect(r.out).toMatch(/sigma_lines line 35 +9651311\.13 kHz/);
-    // Each row says where its point was taken (the file writes `at 0.5 mT` … `at 150 mT`).
-    expect(r.out).toMatch(/pi_lines line 23 .*\(-0\.552 σ\)  at 500 µT$/m);
+    // Each row says where its point was taken, in the unit the file writes (`at 0.5 mT` … `at 150 mT`; was 500 µT).
+    expect(r.out).toMatch(/pi_lines line 23 .*\(-0\.552 σ\)  at 0.5 mT$/m);
     expect(r.out).toMatch(/sigma_lines line 35 .*  at 150 mT$/m);
     expect(r.out).not.toMatch(/line \d+ +[\d.]+ GHz/);
   });

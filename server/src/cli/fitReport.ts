@@ -2,6 +2,7 @@
 import type { FitResult } from '../eval/fitResultTypes';
 import { measuredText, parameterText, residualText, fittedText } from '../eval/fitText';
 import { lengthText, prefixedText, sensitivityText, trimNumber } from '../eval/quantityText';
+import { inWrittenUnit } from '../eval/writtenUnit';
 
 const STATUS: Record<FitResult['status'], string> = {
   converged: '',
@@ -36,10 +37,15 @@ export function fitReportLines(file: string, fits: readonly FitResult[]): string
       const where = p.csv_line !== undefined ? `${p.data} csv line ${p.csv_line}` : `${p.data} line ${p.line + 1}`;
       const z = p.uncertainty && p.residual !== undefined ? `  (${trimNumber(p.residual / p.uncertainty, 3)} σ)` : '';
       // Where the point was taken, so a residual pattern can be read without the CSV beside it.
-      const at = p.position_m !== undefined ? `  at ${lengthText(p.position_m)}` : p.field_T !== undefined ? `  at ${prefixedText(p.field_T, 'T')}` : '';
+      const at = p.position_m !== undefined ? `  at ${atText(p.position_m, 'm', f.at_written_unit, lengthText)}` : p.field_T !== undefined ? `  at ${atText(p.field_T, 'T', f.at_written_unit, (v) => prefixedText(v, 'T'))}` : '';
       out.push(`    ${where.padEnd(24)} ${measuredText(p.measured, f.measured_unit, p.written_unit ?? f.measured_written_unit).padStart(18)}  ${residualText(p.residual, f.measured_unit, scale).padStart(12)}${z}${at}`);
     }
     if (f.points.length > 200) out.push(`    … ${f.points.length - 200} more (--format csv lists every point)`);
   }
   return out;
+}
+
+/** Where a point was taken, in the unit its data wrote (0.5 mT stays 0.5 mT), else the formatter's own choice. */
+function atText(si: number, base: 'T' | 'm', unit: string | undefined, fallback: (v: number) => string): string {
+  return inWrittenUnit(si, base === 'T' ? 'flux-density' : 'length', unit) ?? fallback(si);
 }

@@ -255,6 +255,7 @@ function fromOutcome(
         ...(written(name) ? { written_unit: written(name)! } : {}),
       }))
     : [];
+  const atUnit = kind === 'profile' ? f.data[0]?.units.position : f.data[0]?.units.field;
   const n = o.model.length;
   const points = Array.from({ length: o.ok ? n : 0 }, (_, i) => {
     const p = point(i);
@@ -266,6 +267,7 @@ function fromOutcome(
     status: !o.ok ? 'failed' : o.diagnostics.some((x) => x.code === 'fit-not-converged') ? 'not-converged' : 'converged',
     measured_unit: unit,
     ...(writtenUnit ? { measured_written_unit: writtenUnit } : {}),
+    ...(atUnit ? { at_written_unit: atUnit } : {}),
     parameters,
     ...(o.covariance && allFinite(o.covariance) ? { covariance: o.covariance } : {}),
     ...(o.correlation && allFinite(o.correlation) ? { correlation: o.correlation } : {}),

@@ -47,6 +47,8 @@ export interface FitResult {
   measured_unit: string;
   /** The unit the data were written in, for display. */
   measured_written_unit?: string;
+  /** The unit the points' fields (spectral) or detector positions (profile) were written in, for display. */
+  at_written_unit?: string;
   parameters: FitParameterResult[];
   covariance?: number[][];
   correlation?: number[][];
