@@ -14,6 +14,7 @@ import { couplings, jj1 } from './halfIntegers';
 import { fLabel, jiLabel, jLabel } from './labelText';
 import { landeGF } from './landeFactors';
 import type { LevelBlock, LevelModel, RankedHigh, RankedLow } from './levelModel';
+import type { CoupledFLabel, UncoupledJILabel } from './types';
 import type { CleanHyperfine } from './validateSpec';
 import { hyperfineZeroFieldHz, octupoleActs, quadrupoleActs } from './zeroFieldLevels';
 import { nucleusUncoupled } from './uncoupledNucleus';
@@ -73,6 +74,46 @@ function uncoupledModel(s: CleanHyperfine): LevelModel {
   return { spec: s, blocks, dimension: (s.twoJ + 1) * (s.twoI + 1), largestBlock: 1, zeroFieldSpreadHz: 0 };
 }
 
+/** What a block of the uncoupled basis is for a given (J, I), whatever the constants and g-factors. */
+interface BlockShape {
+  twoM: number;
+  /** 2m_J of the basis states, descending. */
+  mJs: number[];
+  /** I·J in that basis (read only: zeroFieldMatrix scales it into a new matrix). */
+  x: Float64Array;
+  /** Labels of the basis states and of the F states present in the block (shared, never mutated). */
+  basis: UncoupledJILabel[];
+  fLabels: CoupledFLabel[];
+}
+
+/**
+ * Block shapes per (2J, 2I). A large file has thousands of levels of a few (J, I) that
+ * differ only in their constants; building the I·J matrices and the label strings cost
+ * more than the rest of the model. The same numbers as before, only made once.
+ */
+const shapeCache = new Map<number, BlockShape[]>();
+
+function blockShapes(twoJ: number, twoI: number): BlockShape[] {
+  const key = twoJ * 65536 + twoI;
+  const cached = shapeCache.get(key);
+  if (cached) return cached;
+  const fValues = couplings(twoJ, twoI);
+  const shapes: BlockShape[] = [];
+  const twoMax = twoJ + twoI;
+  for (let twoM = -twoMax; twoM <= twoMax; twoM += 2) {
+    const mJs = blockProjections(twoJ, twoI, twoM);
+    shapes.push({
+      twoM,
+      mJs,
+      x: dotProductBlock(twoJ, twoI, mJs, twoM),
+      basis: mJs.map((mJ) => jiLabel(mJ, twoM - mJ, twoI === 0)),
+      fLabels: fValues.filter((twoF) => twoF >= Math.abs(twoM)).map((twoF) => fLabel(twoF, twoM, twoI === 0)),
+    });
+  }
+  shapeCache.set(key, shapes);
+  return shapes;
+}
+
 export function buildHyperfineModel(s: CleanHyperfine): LevelModel {
   if (nucleusUncoupled(s)) return uncoupledModel(s);
   const mu = BOHR_MAGNETON_HZ_PER_T;
@@ -85,26 +126,25 @@ export function buildHyperfineModel(s: CleanHyperfine): LevelModel {
   const slopeScale = mu * (Math.abs(s.gJ) * s.twoJ + Math.abs(s.gI) * s.twoI + 1e-300);
 
   const blocks: LevelBlock[] = [];
-  const twoMax = s.twoJ + s.twoI;
-  for (let twoM = -twoMax; twoM <= twoMax; twoM += 2) {
-    const mJs = blockProjections(s.twoJ, s.twoI, twoM);
+  for (const shape of blockShapes(s.twoJ, s.twoI)) {
+    const { twoM, mJs, x, basis } = shape;
     const n = mJs.length;
-    const x = dotProductBlock(s.twoJ, s.twoI, mJs, twoM);
     const h0 = zeroFieldMatrix(s, x, n);
     const zeeman = new Float64Array(n);
-    const basis = mJs.map((mJ) => jiLabel(mJ, twoM - mJ, s.twoI === 0));
     const highCands: RankedHigh[] = [];
     for (let k = 0; k < n; k++) {
       zeeman[k] = (mu * (s.gJ * mJs[k] + s.gI * (twoM - mJs[k]))) / 2;
       highCands.push({ label: basis[k], diagonalHz: h0[k * n + k], slopeHzPerT: zeeman[k] });
     }
-    const lowCands: RankedLow[] = fValues
-      .filter((twoF) => twoF >= Math.abs(twoM))
-      .map((twoF) => ({
-        label: fLabel(twoF, twoM, s.twoI === 0),
+    const lowCands: RankedLow[] = [];
+    for (const label of shape.fLabels) {
+      const twoF = label.twoF;
+      lowCands.push({
+        label,
         zeroFieldHz: zf.get(twoF) as number,
         slopeHzPerT: (mu * landeGF(twoF, s.twoJ, s.twoI, s.gJ, s.gI) * twoM) / 2,
-      }));
+      });
+    }
     blocks.push({
       twoM,
       size: n,
