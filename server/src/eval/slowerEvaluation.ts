@@ -3,6 +3,7 @@
  * check of a coil design. The Zeeman rate of the driven pair comes from the exact engine at the
  * fields the profile reaches (docs/slower.md).
  */
+import { zeroIfRoundOff } from './machineText';
 import type { Problem, Range } from '../format/ast';
 import { SPEED_OF_LIGHT } from '../physics/constants';
 import { sumField, type FieldFunction } from '../physics/fields';
@@ -191,6 +192,9 @@ export function evaluateSlower(s: SlowerModel, gJOf: GJLookup, settings: Setting
     say('slower-atoms-stop', 'warning', `the simulated atom at the capture speed stops at z = ${lengthText(shown.stoppedAtM)}, before the exit (${lengthText(p.lengthM)}), and would be pushed back`);
   }
   if (shown) attachFlight(samples, shown);
+  // The ideal field ends at zero in theory: its last sample is round-off of the profile's largest field (JSON and CSV alike).
+  const idealScale = samples.reduce((m, x) => Math.max(m, Math.abs(x.B_ideal_T)), 0);
+  for (const x of samples) x.B_ideal_T = zeroIfRoundOff(x.B_ideal_T, idealScale);
   result.samples = samples;
   result.cautions = slowerCautions({ wavelengthM: transition.wavelengthM, peakFieldT: Math.max(Math.abs(p.entryFieldT), Math.abs(p.exitFieldT)) });
   return result;

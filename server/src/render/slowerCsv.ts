@@ -3,18 +3,16 @@
  * z from the entrance; the coils' column only when the slower names coils.
  */
 import type { SlowerResult } from '../eval/slowerResultTypes';
-import { csvNumber as numCell, zeroIfRoundOff } from '../eval/machineText';
+import { csvNumber as numCell } from '../eval/machineText';
 import { csvTable } from './csv';
 
 export function slowerCsv(s: SlowerResult, file: string): string {
   const samples = s.samples ?? [];
   const coils = samples.some((x) => x.B_coils_T !== undefined);
   const header = ['z_m', 'B_ideal_T', ...(coils ? ['B_coils_T'] : []), 'resonant_speed_m_per_s', 'needed_deceleration_m_per_s2', 'flight_speed_m_per_s'];
-  // The ideal field ends at zero in theory: its last sample is round-off of the profile's largest field.
-  const idealScale = samples.reduce((s, x) => Math.max(s, Math.abs(x.B_ideal_T)), 0);
   const body = samples.map((x) => [
     numCell(x.z_m),
-    numCell(zeroIfRoundOff(x.B_ideal_T, idealScale)),
+    numCell(x.B_ideal_T), // round-off already zeroed by the evaluation
     ...(coils ? [numCell(x.B_coils_T)] : []),
     numCell(x.resonant_speed_m_per_s),
     numCell(x.needed_deceleration_m_per_s2),
