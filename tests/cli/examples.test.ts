@@ -1,11 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { cli } from './runCli';
+import { PLANTED } from '../e2e/planted';
 
 describe('sublevel check on the bundled examples', () => {
   it('reports exactly the planted mistakes in examples/mistakes.sublevel', () => {
     const r = cli('check', 'examples/mistakes.sublevel');
     expect(r.code).toBe(1);
     const found = r.out.split('\n').filter((l) => !/ info /.test(l)).map((l) => l.replace(/^examples\/mistakes\.sublevel:/, '').split(' ').slice(0, 3).join(' '));
+    // The editor-host tests check the same list (tests/e2e/planted.ts): kept equal here, where a change shows at once.
+    expect(PLANTED.map((p) => `${p.line}:${p.column} ${p.severity} ${p.code}`)).toEqual(found);
     expect(found).toEqual([
       '5:31 warning quadrupole-cannot-act',
       '6:23 error term-j-out-of-range',

@@ -17,8 +17,9 @@ export const PLANTED: readonly PlantedProblem[] = [
   { line: 12, column: 17, code: 'unit-wrong-dimension', severity: 'error' },
   { line: 15, column: 1, code: 'syntax-unknown-statement', severity: 'error' },
   { line: 17, column: 20, code: 'name-unknown', severity: 'error' },
-  { line: 18, column: 1, code: 'line-parity-unchanged', severity: 'error' },
-  { line: 18, column: 1, code: 'line-l-zero-zero', severity: 'warning' },
+  { line: 18, column: 9, code: 'line-parity-unchanged', severity: 'error' },
+  { line: 18, column: 9, code: 'line-l-zero-zero', severity: 'warning' },
   { line: 22, column: 13, code: 'source-turns-not-whole', severity: 'error' },
   { line: 24, column: 3, code: 'source-sense-without-spacing', severity: 'warning' },
+  { line: 27, column: 19, code: 'term-blank-inside', severity: 'warning' },
 ];
