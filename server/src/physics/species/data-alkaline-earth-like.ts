@@ -17,6 +17,8 @@ import type { BuiltinSpecies } from './types';
 
 // 88Sr 1S0–3P1 frequency (10 kHz); the 87Sr level uses it too (the ~−60 MHz isotope shift is not applied).
 const SR_3P1_KHZ = 434829121311;
+/** Why ⁸⁷Sr 3P1 carries 100 MHz: the ⁸⁸Sr value stands in for it, and the isotope shift (tens of MHz) is not applied. */
+const SR87_3P1_SHIFT_NOT_APPLIED = 'derived: bounds the ⁸⁷Sr − ⁸⁸Sr isotope shift of the line, not applied (tens of MHz)';
 const CIPM_2009 = 'CIPM Recommendation 2 (2009), recommended standard frequencies';
 const SR87_3P1_MEMORY = FROM_MEMORY;
 const TAU_SR_3P1 = sourced(21.28e-6, FROM_MEMORY);
@@ -43,8 +45,9 @@ export const STRONTIUM_87: BuiltinSpecies = {
       designation: '5s 5p 3P°1',
       A: mhz(-260.084, SR87_3P1_MEMORY),
       B: mhz(-35.658, SR87_3P1_MEMORY),
-      // The ⁸⁸Sr frequency without the ~−60 MHz isotope shift: its 10 kHz measurement uncertainty does not apply here, so none is stored.
-      ...energy(SR_3P1_KHZ, 'kHz', `${SR88_INTERCOMBINATION}; the ⁸⁸Sr value, used for ⁸⁷Sr without its isotope shift`),
+      // The ⁸⁸Sr frequency without the isotope shift (tens of MHz, recalled as about −60 MHz): its 10 kHz measurement
+      // uncertainty does not apply here; the stored 100 MHz says how far off the value may be, so no reader takes it for kHz-exact.
+      ...energy(SR_3P1_KHZ, 'kHz', `${SR88_INTERCOMBINATION}; the ⁸⁸Sr value, used for ⁸⁷Sr without its isotope shift`, 1e5, SR87_3P1_SHIFT_NOT_APPLIED),
       lifetimeS: TAU_SR_3P1,
     },
     {
