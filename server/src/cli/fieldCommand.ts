@@ -125,7 +125,7 @@ function textUnits(choice: FieldUnit | undefined, rows: readonly FieldPointRow[]
   const max = largest(rows, (r) => (r.sample ? [magnitude(r.sample.B)] : []));
   const unit = choice ?? (max < 0.1 ? 'G' : 'T');
   // Gradients per cm beside gauss (the lab's G/cm), per metre beside the tesla family.
-  if (unit === 'G') return { field: { name: 'G', factor: 1e-4 }, gradient: { name: 'G/cm', factor: 1e-2 } };
+  if (unit === 'G') return { field: { name: 'G', factor: FIELD_UNIT_TESLA.G }, gradient: { name: 'G/cm', factor: 1e-2 } };
   const factor = FIELD_UNIT_TESLA[unit];
   return { field: { name: unit, factor }, gradient: { name: `${unit}/m`, factor } };
 }

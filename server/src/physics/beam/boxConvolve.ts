@@ -63,9 +63,7 @@ function fillPieces(edges: Float64Array, shift: number, wide: Uint8Array, start:
   let count = 0;
   let k = 0;
   while (k < n && edges[k + 1] <= edges[0] + shift) k++;
-  // start[n] is written by the same store as the others: a store of its own after the loop had no
-  // type feedback when the loop was optimised mid-call, and deoptimised this function about 200
-  // times in a large file's evaluation.
+  // start[n] is written by the loop's own store (see above: a store after the loop deoptimised it).
   for (let j = 0; j <= n; j++) {
     start[j] = count;
     if (j === n) break;
