@@ -5,6 +5,7 @@
  * array it is written as null (the position matters there). A CSV cell for it is empty.
  */
 import { numberRowsBytes, numberRowsText, numberText } from './csvDigits/numberTableText';
+import { equalWithinRoundOff } from '../physics/roundOff';
 
 export function finiteJsonText(value: unknown, space?: number): string {
   return JSON.stringify(value, (_key, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? undefined : v), space);
@@ -21,19 +22,15 @@ export function csvNumber(x: number | null | undefined): string {
   return x === 0 ? '0' : numberText(x);
 }
 
-/**
- * Units of round-off a computed value may carry relative to the largest value of its column: a
- * value within this many ε of that scale is zero in theory written with its arithmetic's noise
- * (common practice: a few dozen ε covers the sums and differences of one evaluation).
- */
-export const ROUND_OFF_ULPS = 64;
+/** The one round-off tolerance (physics/roundOff.ts), relative to the largest value of a column here. */
+export { ROUND_OFF_ULPS } from '../physics/roundOff';
 
 /**
  * `x`, or 0 when it is round-off relative to `scale` (|x| ≤ 64 ε |scale|, e.g. 2e-17 T in a
  * profile whose largest field is 0.07 T). A value above that is kept however small it is.
  */
 export function zeroIfRoundOff(x: number, scale: number): number {
-  return Math.abs(x) <= ROUND_OFF_ULPS * Number.EPSILON * Math.abs(scale) ? 0 : x;
+  return equalWithinRoundOff(x, 0, scale) ? 0 : x;
 }
 
 /** A row of numbers as one CSV line, cell for cell what csvNumber writes. */

@@ -55,8 +55,6 @@ export interface FieldMapViewData {
   /** The axis of that component for the CSV column (`B_<axis>_T`): "z", "s" along a slanted line, "across"; default the line's own. */
   componentAxis?: string;
   fieldUnit: FieldUnit;
-  /** 'auto' picks a log axis when |B| spans more than LOG_SPAN (middle 90 % of the samples). */
-  scale?: 'linear' | 'log' | 'auto';
   /** The |B| axis, `magnitudeAxis(magnitudeT, scale)`, computed once by the view (its unit is read from it); undefined: no values. */
   axis: MagnitudeAxis | undefined;
   sources: FieldMapSource[];
@@ -85,7 +83,10 @@ function percentile(sorted: number[], q: number): number {
 }
 
 /** Whether |B| needs a log axis, and the axis domain. */
-export function magnitudeAxis(values: ArrayLike<number>, scale: FieldMapViewData['scale'] = 'auto'): MagnitudeAxis | undefined {
+/** 'auto' picks a log axis when |B| spans more than LOG_SPAN (middle 90 % of the samples). */
+export type MagnitudeScale = 'linear' | 'log' | 'auto';
+
+export function magnitudeAxis(values: ArrayLike<number>, scale: MagnitudeScale = 'auto'): MagnitudeAxis | undefined {
   const finite = Array.from(values).filter((v) => Number.isFinite(v) && v >= 0).sort((a, b) => a - b);
   if (finite.length === 0) return undefined;
   const max = finite[finite.length - 1]!;

@@ -6,7 +6,7 @@
  * line across the wires B lies across the line; there the component across it in the drawing
  * plane is drawn, which shows the field's sense and where it turns.
  */
-import { magnitudeAxis, type FieldMapShape, type FieldMapSource, type FieldMapViewData } from '../render/fieldMap';
+import { magnitudeAxis, type MagnitudeScale, type FieldMapShape, type FieldMapSource, type FieldMapViewData } from '../render/fieldMap';
 import { unitFor } from './levelsView';
 import type { FieldUnit } from '../render';
 import type { FieldFunction, FieldSourceSpec, Vec3 } from '../physics/fields/types';
@@ -205,7 +205,7 @@ export interface FieldMapOptions {
   fieldUnit?: FieldUnit;
   /** The unit the file wrote its fields in (`field bias = 50 uT`): the |B| axis reads in that family. */
   writtenUnit?: string;
-  scale?: FieldMapViewData['scale'];
+  scale?: MagnitudeScale;
   points?: number;
 }
 
@@ -264,7 +264,6 @@ export function fieldMapView(sources: readonly MapSource[], field: FieldFunction
     componentName: componentAxis === 's' ? 'B along the line' : componentAxis === 'across' ? 'B across the line' : `B_${componentAxis}`,
     componentAxis,
     fieldUnit: options.fieldUnit ?? mapUnit(axis?.domain[1] ?? max, options.writtenUnit),
-    scale: options.scale ?? 'auto',
     axis,
     sources: usable.map((s) => ({ name: s.name, kind: s.kind, shapes: sourceShapes(s.parts, line), ...(unmagnetised(s) ? { note: 'not magnetised' } : {}) })),
   };

@@ -14,6 +14,7 @@ import { cumulativeAt } from './depositDeflections';
 import { gaussLegendre } from './gaussLegendre';
 import type { SlitImage } from './slitImage';
 import type { SpeedLaw } from './speedLaw';
+import { equalWithinRoundOff } from '../roundOff';
 
 export interface RefineMember {
   /** k in z = k/v², m³/s². */
@@ -113,9 +114,8 @@ function mirrorSymmetric(members: readonly RefineMember[]): boolean {
   const sorted = [...members].sort((a, b) => a.k - b.k);
   const kScale = Math.max(...sorted.map((m) => Math.abs(m.k)));
   const wScale = Math.max(...sorted.map((m) => Math.abs(m.weight)));
-  const close = (a: number, b: number, scale: number) => Math.abs(a - b) <= 64 * Number.EPSILON * scale;
   return sorted.every((m, i) => {
     const mirror = sorted[sorted.length - 1 - i]!;
-    return close(m.k, -mirror.k, kScale) && close(m.weight, mirror.weight, wScale);
+    return equalWithinRoundOff(m.k, -mirror.k, kScale) && equalWithinRoundOff(m.weight, mirror.weight, wScale);
   });
 }
