@@ -4,7 +4,7 @@
 // even row stride `ns` (n rounded up), so pairs of doubles start 16-byte aligned; all pointers
 // are byte offsets into the one exported memory.
 
-/** Rows of the eigenvector matrix that share one pass over two reflectors in `applyReflectors`. */
+/** Rows of the eigenvector matrix that share each pass of a reflector in `applyReflectors`. */
 export const ROW_TILE = 4;
 
 const f64 = (addr) => `(f64.load ${addr})`;
@@ -268,107 +268,83 @@ function packReflectors() {
 }
 
 /**
- * applyReflectors(z, ns, rows, n, refl, betas, cross): every row r < rows (a multiple of ROW_TILE)
- * of z becomes row · H_{n−3} … H_0 (as applyReflectors in householderInverseIteration.ts; the
- * reflectors packed by packReflectors). ROW_TILE rows stay in cache while the reflectors pass over
- * them two at a time (k, then k − 1), so every z pair is loaded and stored half as often as with
- * one (1.06–1.27× at orders 160–192, docs/engine.md): with c = v_k · v_{k−1} (computed first into `cross`, n doubles of scratch),
- * s_k = β_k (z · v_k) and s_{k−1} = β_{k−1} (z · v_{k−1} − s_k c), then z ← z − s_k v_k − s_{k−1} v_{k−1}.
- * Addresses are a byte offset added to each row's start (no shift per access).
+ * applyReflectors(z, ns, rows, n, refl, betas): every row r < rows (a multiple of ROW_TILE) of z
+ * becomes row · H_{n−3} … H_0 (as applyReflectors in householderInverseIteration.ts; the
+ * reflectors packed by packReflectors), z ← z − β_k (z · v_k) v_k one reflector after another.
+ * ROW_TILE rows stay in cache, and one pass over them does two jobs: the update by reflector k
+ * and, on each pair just updated (still in registers), the dot products with reflector k − 1.
+ * Every z pair is loaded and stored once per reflector, and the dot products ride along in the
+ * floating-point ports the update leaves idle: the update alone was bound near half their rate
+ * (1.33–1.48× against two reflectors a pass with separate dot and update loops, orders 150–192,
+ * docs/engine.md). Four rows keep the four coefficients, four sums, two reflector pairs and
+ * the z pair in 11 registers; six rows, or two reflectors a pass, ran slower.
  */
 function applyReflectors() {
   const R = ROW_TILE;
   const idx = [...Array(R).keys()];
   const zAt = (q) => `(i32.add (local.get $z${q}) (local.get $o))`;
-  const vA = `(i32.add (local.get $va) (local.get $o))`;
-  const vB = `(i32.add (local.get $vb) (local.get $o))`;
-  /** One pair of columns (at byte offset imm past $o) of the two-reflector dot products and updates; the loops take two pairs a trip. */
-  const dotPair = (imm) => `
-          (local.set $x (v128.load offset=${imm} ${vA}))
-          (local.set $y (v128.load offset=${imm} ${vB}))
-          ${idx.map((q) => `(local.set $s${q} (f64x2.add (local.get $s${q}) (f64x2.mul (local.get $x) (local.tee $x${q} (v128.load offset=${imm} ${zAt(q)})))))
-          (local.set $t${q} (f64x2.add (local.get $t${q}) (f64x2.mul (local.get $y) (local.get $x${q}))))`).join('\n          ')}`;
-  const updPair = (imm) => `
-          (local.set $x (v128.load offset=${imm} ${vA}))
-          (local.set $y (v128.load offset=${imm} ${vB}))
-          ${idx.map((q) => `(v128.store offset=${imm} ${zAt(q)} (f64x2.sub (v128.load offset=${imm} ${zAt(q)}) (f64x2.add (f64x2.mul (local.get $s${q}) (local.get $x)) (f64x2.mul (local.get $t${q}) (local.get $y)))))`).join('\n          ')}`;
-  const single = `
-            (local.set $va ${at('(local.get $refl)', '(i32.mul (local.get $k) (local.get $ns))')})
-            ${idx.map((q) => `(local.set $s${q} (v128.const f64x2 0 0))`).join(' ')}
-            (local.set $o (i32.shl (i32.and (i32.add (local.get $k) (i32.const 1)) (i32.const -2)) (i32.const 3)))
-            (block $dot1_done (loop $dot1
-              (br_if $dot1_done (i32.ge_s (local.get $o) (local.get $end)))
-              (local.set $x (v128.load ${vA}))
-              ${idx.map((q) => `(local.set $s${q} (f64x2.add (local.get $s${q}) (f64x2.mul (local.get $x) (v128.load ${zAt(q)}))))`).join('\n              ')}
-              (local.set $o (i32.add (local.get $o) (i32.const 16)))
-              (br $dot1)))
-            ${idx.map((q) => `(local.set $s${q} (f64x2.splat (f64.mul (local.get $ba) ${sumLanes(`(local.get $s${q})`)})))`).join('\n            ')}
-            (local.set $o (i32.shl (i32.and (i32.add (local.get $k) (i32.const 1)) (i32.const -2)) (i32.const 3)))
-            (block $upd1_done (loop $upd1
-              (br_if $upd1_done (i32.ge_s (local.get $o) (local.get $end)))
-              (local.set $x (v128.load ${vA}))
-              ${idx.map((q) => `(v128.store ${zAt(q)} (f64x2.sub (v128.load ${zAt(q)}) (f64x2.mul (local.get $s${q}) (local.get $x))))`).join('\n              ')}
-              (local.set $o (i32.add (local.get $o) (i32.const 16)))
-              (br $upd1)))`;
+  const row = (k) => at('(local.get $refl)', `(i32.mul ${k} (local.get $ns))`);
+  const start = (first) => `(local.set $o (i32.shl (i32.and ${first} (i32.const -2)) (i32.const 3)))`;
+  /** One pair of columns (imm bytes past $o): update by $va (if upd), dot with $vb (if dot). */
+  const pair = (upd, dot, imm) => `
+          ${upd ? `(local.set $x (v128.load offset=${imm} (i32.add (local.get $va) (local.get $o))))` : ''}
+          ${dot ? `(local.set $y (v128.load offset=${imm} (i32.add (local.get $vb) (local.get $o))))` : ''}
+          ${idx
+            .map((q) =>
+              upd
+                ? `(local.set $w (f64x2.sub (v128.load offset=${imm} ${zAt(q)}) (f64x2.mul (local.get $c${q}) (local.get $x))))
+          (v128.store offset=${imm} ${zAt(q)} (local.get $w))${dot ? `
+          (local.set $s${q} (f64x2.add (local.get $s${q}) (f64x2.mul (local.get $y) (local.get $w))))` : ''}`
+                : `(local.set $s${q} (f64x2.add (local.get $s${q}) (f64x2.mul (local.get $y) (v128.load offset=${imm} ${zAt(q)}))))`,
+            )
+            .join('\n          ')}`;
+  /** Columns from $o to the row's end, two pairs a loop trip. */
+  const pass = (upd, dot, label) => `
+        ${dot ? idx.map((q) => `(local.set $s${q} (v128.const f64x2 0 0))`).join(' ') : ''}
+        (block $${label}_done (loop $${label}
+          (br_if $${label}_done (i32.ge_s (local.get $o) (local.get $end)))
+          ${pair(upd, dot, 0)}
+          (if (i32.lt_s (i32.add (local.get $o) (i32.const 16)) (local.get $end)) (then ${pair(upd, dot, 16)}))
+          (local.set $o (i32.add (local.get $o) (i32.const 32)))
+          (br $${label})))`;
+  /** The coefficients β_k (z · v_k) of reflector k, splatted. */
+  const coefficients = idx
+    .map((q) => `(local.set $c${q} (f64x2.splat (f64.mul (local.get $beta) ${sumLanes(`(local.get $s${q})`)})))`)
+    .join('\n        ');
   return `
-  (func $applyReflectors (export "applyReflectors") (param $z i32) (param $ns i32) (param $rows i32) (param $n i32) (param $refl i32) (param $betas i32) (param $cross i32)
+  (func $applyReflectors (export "applyReflectors") (param $z i32) (param $ns i32) (param $rows i32) (param $n i32) (param $refl i32) (param $betas i32)
     (local $r i32) (local $k i32) (local $o i32) (local $end i32) (local $va i32) (local $vb i32) (local $rowBytes i32)
-    (local $ba f64) (local $bb f64) (local $c f64) (local $sa f64) (local $x v128) (local $y v128)
-    ${idx.map((q) => `(local $z${q} i32) (local $s${q} v128) (local $t${q} v128) (local $x${q} v128)`).join(' ')}
+    (local $beta f64) (local $x v128) (local $y v128) (local $w v128)
+    ${idx.map((q) => `(local $z${q} i32) (local $s${q} v128) (local $c${q} v128)`).join(' ')}
     (local.set $rowBytes (i32.shl (local.get $ns) (i32.const 3)))
     (local.set $end (local.get $rowBytes))
-    ;; cross[k] = v_k · v_{k−1} for k ≥ 1 (both rows zero before k).
-    (local.set $k (i32.sub (local.get $n) (i32.const 3)))
-    (block $c_done (loop $cl
-      (br_if $c_done (i32.lt_s (local.get $k) (i32.const 1)))
-      (local.set $va ${at('(local.get $refl)', '(i32.mul (local.get $k) (local.get $ns))')})
-      (local.set $vb (i32.sub (local.get $va) (local.get $rowBytes)))
-      (local.set $x (v128.const f64x2 0 0))
-      (local.set $o (i32.shl (i32.and (local.get $k) (i32.const -2)) (i32.const 3)))
-      (block $cd_done (loop $cd
-        (br_if $cd_done (i32.ge_s (local.get $o) (local.get $end)))
-        (local.set $x (f64x2.add (local.get $x) (f64x2.mul (v128.load ${vA}) (v128.load ${vB}))))
-        (local.set $o (i32.add (local.get $o) (i32.const 16)))
-        (br $cd)))
-      (f64.store ${at('(local.get $cross)', '(local.get $k)')} ${sumLanes('(local.get $x)')})
-      (local.set $k (i32.sub (local.get $k) (i32.const 1)))
-      (br $cl)))
+    (if (i32.lt_s (local.get $n) (i32.const 3)) (then (return)))
     (local.set $r (i32.const 0))
     (block $r_done (loop $rl
       (br_if $r_done (i32.ge_s (local.get $r) (local.get $rows)))
       ${idx.map((q) => `(local.set $z${q} (i32.add (local.get $z) (i32.mul (i32.add (local.get $r) (i32.const ${q})) (local.get $rowBytes))))`).join('\n      ')}
+      ;; reflector n − 3: dot products alone
       (local.set $k (i32.sub (local.get $n) (i32.const 3)))
+      (local.set $vb ${row('(local.get $k)')})
+      ${start('(i32.add (local.get $k) (i32.const 1))')}
+      ${pass(false, true, 'first')}
+      (local.set $beta ${f64(at('(local.get $betas)', '(local.get $k)'))})
+      ${coefficients}
+      ;; update by reflector k with the dot products of reflector k − 1 (its columns start at k or k − 1)
       (block $k_done (loop $kl
         (br_if $k_done (i32.lt_s (local.get $k) (i32.const 1)))
-        (local.set $ba ${f64(at('(local.get $betas)', '(local.get $k)'))})
-        (local.set $bb ${f64(at('(local.get $betas)', '(i32.sub (local.get $k) (i32.const 1))'))})
-        (local.set $c ${f64(at('(local.get $cross)', '(local.get $k)'))})
-        (local.set $va ${at('(local.get $refl)', '(i32.mul (local.get $k) (local.get $ns))')})
+        (local.set $va (local.get $vb))
         (local.set $vb (i32.sub (local.get $va) (local.get $rowBytes)))
-        ${idx.map((q) => `(local.set $s${q} (v128.const f64x2 0 0)) (local.set $t${q} (v128.const f64x2 0 0))`).join('\n        ')}
-        (local.set $o (i32.shl (i32.and (local.get $k) (i32.const -2)) (i32.const 3)))
-        (block $dot_done (loop $dot
-          (br_if $dot_done (i32.ge_s (local.get $o) (local.get $end)))
-          ${dotPair(0)}
-          (if (i32.lt_s (i32.add (local.get $o) (i32.const 16)) (local.get $end)) (then ${dotPair(16)}))
-          (local.set $o (i32.add (local.get $o) (i32.const 32)))
-          (br $dot)))
-        ${idx.map((q) => `(local.set $sa (f64.mul (local.get $ba) ${sumLanes(`(local.get $s${q})`)}))
-        (local.set $s${q} (f64x2.splat (local.get $sa)))
-        (local.set $t${q} (f64x2.splat (f64.mul (local.get $bb) (f64.sub ${sumLanes(`(local.get $t${q})`)} (f64.mul (local.get $sa) (local.get $c))))))`).join('\n        ')}
-        (local.set $o (i32.shl (i32.and (local.get $k) (i32.const -2)) (i32.const 3)))
-        (block $upd_done (loop $upd
-          (br_if $upd_done (i32.ge_s (local.get $o) (local.get $end)))
-          ${updPair(0)}
-          (if (i32.lt_s (i32.add (local.get $o) (i32.const 16)) (local.get $end)) (then ${updPair(16)}))
-          (local.set $o (i32.add (local.get $o) (i32.const 32)))
-          (br $upd)))
-        (local.set $k (i32.sub (local.get $k) (i32.const 2)))
+        ${start('(local.get $k)')}
+        ${pass(true, true, 'fused')}
+        (local.set $k (i32.sub (local.get $k) (i32.const 1)))
+        (local.set $beta ${f64(at('(local.get $betas)', '(local.get $k)'))})
+        ${coefficients}
         (br $kl)))
-      (if (i32.eq (local.get $k) (i32.const 0))
-        (then
-          (local.set $ba ${f64(at('(local.get $betas)', '(i32.const 0)'))})
-          ${single}))
+      ;; reflector 0: update alone
+      (local.set $va (local.get $vb))
+      ${start('(i32.const 1)')}
+      ${pass(true, false, 'last')}
       (local.set $r (i32.add (local.get $r) (i32.const ${R})))
       (br $rl)))
   )`;

@@ -22,7 +22,7 @@ interface EigenKernels {
   memory: WebAssembly.Memory;
   tridiagonalise(a: number, ns: number, n: number, d: number, e: number, betas: number, v: number, p: number, vn: number, pn: number): void;
   packReflectors(a: number, ns: number, n: number, out: number): void;
-  applyReflectors(z: number, ns: number, rows: number, n: number, refl: number, betas: number, cross: number): void;
+  applyReflectors(z: number, ns: number, rows: number, n: number, refl: number, betas: number): void;
   maxAbs(src: number, count: number): number;
   packScaled(src: number, n: number, ns: number, dst: number, factor: number): void;
   unpackTransposed(z: number, ns: number, n: number, out: number): void;
@@ -138,7 +138,7 @@ export function simdEigenpairs(a: Float64Array, n: number, values: Float64Array,
   // Row k of z (stride ns): the tridiagonal's k-th eigenvector.
   if (!divideConquerTridiagonal(d, e, n, values, heap.subarray(l.z / 8, l.z / 8 + n * ns), ns, wasmMergeKernels(k, heap, l, n))) return false;
   k.packReflectors(l.a, ns, n, l.refl);
-  k.applyReflectors(l.z, ns, l.rows, n, l.refl, l.betas, l.p);
+  k.applyReflectors(l.z, ns, l.rows, n, l.refl, l.betas);
   // Rows of z to columns of `vectors`.
   k.unpackTransposed(l.z, ns, n, l.stage);
   vectors.set(stage);
