@@ -13,10 +13,13 @@ const at4 = (base, index) => `(i32.add ${base} (i32.shl ${index} (i32.const 2)))
 const sumLanes = (x) => `(f64.add (f64x2.extract_lane 0 ${x}) (f64x2.extract_lane 1 ${x}))`;
 
 /**
- * tridiagonalise(a, ns, n, d, e, betas, v, p, vn, pn): Householder reduction of the lower triangle
- * of the order-n matrix at `a` to T (diagonal d, sub-diagonal e), the same steps as
+ * tridiagonalise(a, ns, n, d, e, betas, v, p, vn, pn, refl): Householder reduction of the lower
+ * triangle of the order-n matrix at `a` to T (diagonal d, sub-diagonal e), the same steps as
  * tridiagonaliseLower in householderInverseIteration.ts: reflector k stays in column k below the
- * diagonal, β_k in betas[k]. Per step, the symmetric product p = β A v (row i: a dot product
+ * diagonal, β_k in betas[k], and is written as row k of `refl` too (stride ns, zero outside
+ * columns k + 1 … n − 1, a zero row where β_k = 0), the form applyReflectors reads in aligned
+ * pairs. The rows are written as each reflector is formed, from the copy made anyway, where a
+ * separate pass had read the columns back afterwards, one double per row (22 µs at order 160). Per step, the symmetric product p = β A v (row i: a dot product
  * along the row and an update of p along it) and the rank-2 update A ← A − v wᵀ − w vᵀ, in pairs
  * from the even index at or below k + 1 (v_k = w_k = 0 make the pair's column-k half a no-op).
  *
@@ -61,7 +64,9 @@ function tridiagonalise() {
           (local.set $i ${K(plus + 1)})
           (block $c_done${plus} (loop $c${plus}
             (br_if $c_done${plus} (i32.ge_s (local.get $i) (local.get $n)))
-            (f64.store ${X(vec, '(local.get $i)')} ${f64(A('(local.get $i)', K(plus)))})
+            (local.set $aij ${f64(A('(local.get $i)', K(plus)))})
+            (f64.store ${X(vec, '(local.get $i)')} (local.get $aij))
+            (f64.store ${at(`(i32.add (local.get $refl) (i32.mul ${K(plus)} (local.get $rowBytes)))`, '(local.get $i)')} (local.get $aij))
             (f64.store ${X(prod, '(local.get $i)')} (f64.const 0))
             (local.set $i (i32.add (local.get $i) (i32.const 1)))
             (br $c${plus})))
@@ -153,7 +158,7 @@ function tridiagonalise() {
         (br $${label}_rows)))`;
   return `
   (func $tridiagonalise (export "tridiagonalise")
-    (param $a i32) (param $ns i32) (param $n i32) (param $d i32) (param $e i32) (param $betas i32) (param $v i32) (param $p i32) (param $vn i32) (param $pn i32)
+    (param $a i32) (param $ns i32) (param $n i32) (param $d i32) (param $e i32) (param $betas i32) (param $v i32) (param $p i32) (param $vn i32) (param $pn i32) (param $refl i32)
     (local $k i32) (local $i i32) (local $i0 i32) (local $o i32) (local $o0 i32) (local $oDiag i32) (local $row i32) (local $rowBytes i32) (local $pending i32) (local $swap i32)
     (local $tail f64) (local $x0 f64) (local $alpha f64) (local $beta f64) (local $s f64) (local $vi f64) (local $wi f64) (local $ni f64)
     (local $vp f64) (local $kk f64) (local $aij f64) (local $wk f64) (local $vk f64)
@@ -161,6 +166,14 @@ function tridiagonalise() {
     (local $row1 i32) (local $oDiag1 i32) (local $oSave i32) (local $vi1 f64) (local $wi1 f64) (local $ni1 f64)
     (local $s21 v128) (local $x1 v128) (local $vi21 v128) (local $wi21 v128) (local $ni21 v128) (local $y v128) (local $pp v128) (local $vv v128)
     (local.set $rowBytes (i32.shl (local.get $ns) (i32.const 3)))
+    ;; refl's n rows start at zero (ns is even: whole pairs)
+    (local.set $o (local.get $refl))
+    (local.set $o0 (i32.add (local.get $refl) (i32.mul (local.get $n) (local.get $rowBytes))))
+    (block $z_done (loop $zl
+      (br_if $z_done (i32.ge_u (local.get $o) (local.get $o0)))
+      (v128.store (local.get $o) (v128.const f64x2 0 0))
+      (local.set $o (i32.add (local.get $o) (i32.const 16)))
+      (br $zl)))
     (local.set $k (i32.const 0))
     (block $steps_done
       (loop $steps
@@ -241,36 +254,9 @@ function tridiagonalise() {
 }
 
 /**
- * packReflectors(a, ns, n, out): reflector k (column k of `a` below the diagonal) as row k of
- * `out` (stride ns), zero before index k + 1 and in the padding, so applyReflectors reads it in
- * aligned pairs.
- */
-function packReflectors() {
-  return `
-  (func $packReflectors (export "packReflectors") (param $a i32) (param $ns i32) (param $n i32) (param $out i32)
-    (local $k i32) (local $i i32) (local $row i32)
-    (local.set $k (i32.const 0))
-    (block $k_done (loop $kl
-      (br_if $k_done (i32.ge_s (local.get $k) (local.get $n)))
-      (local.set $row ${at('(local.get $out)', '(i32.mul (local.get $k) (local.get $ns))')})
-      (local.set $i (i32.const 0))
-      (block $i_done (loop $il
-        (br_if $i_done (i32.ge_s (local.get $i) (local.get $ns)))
-        (f64.store ${at('(local.get $row)', '(local.get $i)')}
-          (if (result f64) (i32.and (i32.gt_s (local.get $i) (local.get $k)) (i32.lt_s (local.get $i) (local.get $n)))
-            (then ${f64(at('(local.get $a)', '(i32.add (i32.mul (local.get $i) (local.get $ns)) (local.get $k))'))})
-            (else (f64.const 0))))
-        (local.set $i (i32.add (local.get $i) (i32.const 1)))
-        (br $il)))
-      (local.set $k (i32.add (local.get $k) (i32.const 1)))
-      (br $kl)))
-  )`;
-}
-
-/**
  * applyReflectors(z, ns, rows, n, refl, betas): every row r < rows (a multiple of ROW_TILE) of z
  * becomes row · H_{n−3} … H_0 (as applyReflectors in householderInverseIteration.ts; the
- * reflectors packed by packReflectors), z ← z − β_k (z · v_k) v_k one reflector after another.
+ * reflectors as rows of refl, written by tridiagonalise), z ← z − β_k (z · v_k) v_k one reflector after another.
  * ROW_TILE rows stay in cache, and one pass over them does two jobs: the update by reflector k
  * and, on each pair just updated (still in registers), the dot products with reflector k − 1.
  * Every z pair is loaded and stored once per reflector, and the dot products ride along in the
@@ -658,7 +644,6 @@ export function eigenKernelsWat() {
   return `(module
   (memory (export "memory") 1)
 ${tridiagonalise()}
-${packReflectors()}
 ${applyReflectors()}
 ${moves()}
 ${multiply()}

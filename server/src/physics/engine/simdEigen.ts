@@ -20,8 +20,7 @@ const ROW_TILE = 4;
 
 interface EigenKernels {
   memory: WebAssembly.Memory;
-  tridiagonalise(a: number, ns: number, n: number, d: number, e: number, betas: number, v: number, p: number, vn: number, pn: number): void;
-  packReflectors(a: number, ns: number, n: number, out: number): void;
+  tridiagonalise(a: number, ns: number, n: number, d: number, e: number, betas: number, v: number, p: number, vn: number, pn: number, refl: number): void;
   applyReflectors(z: number, ns: number, rows: number, n: number, refl: number, betas: number): void;
   maxAbs(src: number, count: number): number;
   packScaled(src: number, n: number, ns: number, dst: number, factor: number): void;
@@ -130,14 +129,13 @@ export function simdEigenpairs(a: Float64Array, n: number, values: Float64Array,
   const scale = big > 0 && 1 / big < Number.POSITIVE_INFINITY ? powerOfTwoAtLeast(big) : 1;
   const ns = l.ns;
   k.packScaled(l.stage, n, ns, l.a, 1 / scale);
-  k.tridiagonalise(l.a, ns, n, l.d, l.e, l.betas, l.v, l.p, l.vn, l.pn);
+  k.tridiagonalise(l.a, ns, n, l.d, l.e, l.betas, l.v, l.p, l.vn, l.pn, l.refl);
   const d = heap.subarray(l.d / 8, l.d / 8 + n);
   const e = heap.subarray(l.e / 8, l.e / 8 + n);
   const stage = heap.subarray(l.stage / 8, l.stage / 8 + n * n);
   heap.fill(0, (l.z + 8 * n * ns) / 8, (l.z + 8 * l.rows * ns) / 8);
   // Row k of z (stride ns): the tridiagonal's k-th eigenvector.
   if (!divideConquerTridiagonal(d, e, n, values, heap.subarray(l.z / 8, l.z / 8 + n * ns), ns, wasmMergeKernels(k, heap, l, n))) return false;
-  k.packReflectors(l.a, ns, n, l.refl);
   k.applyReflectors(l.z, ns, l.rows, n, l.refl, l.betas);
   // Rows of z to columns of `vectors`.
   k.unpackTransposed(l.z, ns, n, l.stage);
