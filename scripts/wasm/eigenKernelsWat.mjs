@@ -261,7 +261,7 @@ function tridiagonalise() {
  * and, on each pair just updated (still in registers), the dot products with reflector k − 1.
  * Every z pair is loaded and stored once per reflector, and the dot products ride along in the
  * floating-point ports the update leaves idle: the update alone was bound near half their rate
- * (1.33–1.48× against two reflectors a pass with separate dot and update loops, orders 150–192,
+ * (1.30–1.48× against two reflectors a pass with separate dot and update loops, orders 64–256,
  * docs/engine.md). Four rows keep the four coefficients, four sums, two reflector pairs and
  * the z pair in 11 registers; six rows, or two reflectors a pass, ran slower.
  */
@@ -439,8 +439,8 @@ function unpackTransposed() {
  * (divideConquerTridiagonal.ts). Tiles of 4 rows × 4 columns: eight pairs of sums stay in
  * registers while the inner index runs, each step loading two pairs of b and four entries of a,
  * each entry into both lanes by one load64_splat (a scalar load and a splat were two instructions:
- * 1.2–1.25× on 96–192 products, the same bits; six rows or three column pairs ran out of registers
- * and were 0.55–0.7×).
+ * 1.2–1.26× on 96–192 products, the same bits; tiles of six rows or six columns ran out of
+ * registers and were 0.4–0.7×).
  * rows and cols are rounded up to 4, so up to three more rows and columns are read and written.
  */
 function multiply() {
