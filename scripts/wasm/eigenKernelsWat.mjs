@@ -497,10 +497,13 @@ function multiply() {
 }
 
 /**
- * $sumsAt(gaps, z2, split, k, t, out), internal: the two halves of the secular function's sum at
- * the offset t (secularRoots.ts): out[0] = Σ_{j≤split} z2_j r_j and out[1] = Σ_{j≤split} z2_j r_j²
- * with r_j = 1/(gaps_j − t), out[2], out[3] the same over split < j < k. Pairs of terms per
- * operation, two divisions in one.
+ * $sumsAt(d, row, z2, split, k, pole, t, out), internal: the two halves of the secular function's
+ * sum at λ = pole + t (secularRoots.ts): out[0] = Σ_{j≤split} z2_j r_j and out[1] = Σ_{j≤split}
+ * z2_j r_j² with r_j = 1/((d_j − pole) − t), out[2], out[3] the same over split < j < k. The
+ * differences are formed here from the poles (the same numbers as a row of offsets
+ * (d_j − pole) − 0 minus t) and stored in `row` as they go: the iteration stops right after an
+ * evaluation, so the root's row d_j − λ is then there already. Pairs of terms per operation, two
+ * divisions in one.
  */
 function secularSums() {
   const half = (name, from, to, s, ds) => `
@@ -509,7 +512,9 @@ function secularSums() {
     (local.set ${ds} (v128.const f64x2 0 0))
     (block $${name}_done (loop $${name}
       (br_if $${name}_done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) ${to}))
-      (local.set $r (f64x2.div (v128.const f64x2 1 1) (f64x2.sub (v128.load ${at('(local.get $gaps)', '(local.get $j)')}) (local.get $tt))))
+      (local.set $r (f64x2.sub (f64x2.sub (v128.load ${at('(local.get $d)', '(local.get $j)')}) (local.get $pp)) (local.get $tt)))
+      (v128.store ${at('(local.get $row)', '(local.get $j)')} (local.get $r))
+      (local.set $r (f64x2.div (v128.const f64x2 1 1) (local.get $r)))
       (local.set $w (f64x2.mul (v128.load ${at('(local.get $z2)', '(local.get $j)')}) (local.get $r)))
       (local.set ${s} (f64x2.add (local.get ${s}) (local.get $w)))
       (local.set ${ds} (f64x2.add (local.get ${ds}) (f64x2.mul (local.get $w) (local.get $r))))
@@ -519,12 +524,15 @@ function secularSums() {
     (local.set $dx (f64.const 0))
     (if (i32.lt_s (local.get $j) ${to})
       (then
-        (local.set $y (f64.div (f64.const 1) (f64.sub ${f64(at('(local.get $gaps)', '(local.get $j)'))} (local.get $t))))
+        (local.set $y (f64.sub (f64.sub ${f64(at('(local.get $d)', '(local.get $j)'))} (local.get $pole)) (local.get $t)))
+        (f64.store ${at('(local.get $row)', '(local.get $j)')} (local.get $y))
+        (local.set $y (f64.div (f64.const 1) (local.get $y)))
         (local.set $x (f64.mul ${f64(at('(local.get $z2)', '(local.get $j)'))} (local.get $y)))
         (local.set $dx (f64.mul (local.get $x) (local.get $y)))))`;
   return `
-  (func $sumsAt (param $gaps i32) (param $z2 i32) (param $split i32) (param $k i32) (param $t f64) (param $out i32)
-    (local $j i32) (local $tt v128) (local $r v128) (local $w v128) (local $s v128) (local $ds v128) (local $x f64) (local $dx f64) (local $y f64)
+  (func $sumsAt (param $d i32) (param $row i32) (param $z2 i32) (param $split i32) (param $k i32) (param $pole f64) (param $t f64) (param $out i32)
+    (local $j i32) (local $pp v128) (local $tt v128) (local $r v128) (local $w v128) (local $s v128) (local $ds v128) (local $x f64) (local $dx f64) (local $y f64)
+    (local.set $pp (f64x2.splat (local.get $pole)))
     (local.set $tt (f64x2.splat (local.get $t)))
     ${half('left', '(i32.const 0)', '(i32.add (local.get $split) (i32.const 1))', '$s', '$ds')}
     (f64.store (local.get $out) (f64.add (local.get $x) ${sumLanes('(local.get $s)')}))
@@ -540,7 +548,7 @@ function secularSums() {
  * prod_j ← prod_j · gaps_j / (d_j − pole) for from ≤ j < to, one row's factors of the
  * Gu–Eisenstat weights; $offsetsAt(gaps, d, k, pole, t): gaps_j ← (d_j − pole) − t, a root's row
  * of d_j − λ (secularRoots.ts); $cauchyRow(gaps, w, k, dst, index): x_j = w_j / gaps_j, then
- * dst[index[j]] = x_j / ‖x‖ (i32 indices; gaps is left as it is), one new vector
+ * dst[index[j]] = x_j / ‖x‖ (i32 indices; gaps is left holding x), one new vector
  * (divideConquerTridiagonal.ts).
  */
 function vectorRows() {
@@ -576,15 +584,16 @@ function vectorRows() {
       (then (f64.store ${G('(local.get $j)')} (f64.sub (f64.sub ${f64(at('(local.get $d)', '(local.get $j)'))} (local.get $pole)) (local.get $t))))))
   (func $cauchyRow (param $gaps i32) (param $w i32) (param $k i32) (param $dst i32) (param $index i32)
     (local $j i32) (local $x v128) (local $s v128) (local $y f64) (local $t f64)
-    ;; Pass 1 sums the squares only; pass 2 divides again instead of reading back the quotients
-    ;; pass 1 stored in pairs: those 8-byte reads of 16-byte stores just made cost about 5 ns an
-    ;; entry (0.96 against 0.22 µs a call at k = 160; likely stores not yet forwardable), 8 % of
-    ;; a whole solve at order 160.
+    ;; Pass 1 stores the quotients over gaps in pairs, pass 2 reads them back in the same pairs
+    ;; (16-byte loads of 16-byte stores). Reading them back one double at a time cost about 5 ns
+    ;; an entry (0.96 against 0.22 µs a call at k = 160, likely 8-byte loads of 16-byte stores not
+    ;; forwardable), so an earlier version divided again in pass 2 instead.
     (local.set $s (v128.const f64x2 0 0))
     (local.set $j (i32.const 0))
     (block $done (loop $l
       (br_if $done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $k)))
       (local.set $x (f64x2.div (v128.load ${at('(local.get $w)', '(local.get $j)')}) (v128.load ${G('(local.get $j)')})))
+      (v128.store ${G('(local.get $j)')} (local.get $x))
       (local.set $s (f64x2.add (local.get $s) (f64x2.mul (local.get $x) (local.get $x))))
       (local.set $j (i32.add (local.get $j) (i32.const 2)))
       (br $l)))
@@ -592,12 +601,13 @@ function vectorRows() {
     (if (i32.lt_s (local.get $j) (local.get $k))
       (then
         (local.set $y (f64.div ${f64(at('(local.get $w)', '(local.get $j)'))} ${f64(G('(local.get $j)'))}))
+        (f64.store ${G('(local.get $j)')} (local.get $y))
         (local.set $t (f64.add (local.get $t) (f64.mul (local.get $y) (local.get $y))))))
     (local.set $t (f64.div (f64.const 1) (f64.sqrt (local.get $t))))
     (local.set $j (i32.const 0))
     (block $s_done (loop $sl
       (br_if $s_done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $k)))
-      (local.set $x (f64x2.mul (f64x2.splat (local.get $t)) (f64x2.div (v128.load ${at('(local.get $w)', '(local.get $j)')}) (v128.load ${G('(local.get $j)')}))))
+      (local.set $x (f64x2.mul (f64x2.splat (local.get $t)) (v128.load ${G('(local.get $j)')})))
       (f64.store ${at('(local.get $dst)', `(i32.load ${at4('(local.get $index)', '(local.get $j)')})`)} (f64x2.extract_lane 0 (local.get $x)))
       (f64.store ${at('(local.get $dst)', `(i32.load offset=4 ${at4('(local.get $index)', '(local.get $j)')})`)} (f64x2.extract_lane 1 (local.get $x)))
       (local.set $j (i32.add (local.get $j) (i32.const 2)))
@@ -605,7 +615,7 @@ function vectorRows() {
     (if (i32.lt_s (local.get $j) (local.get $k))
       (then
         (f64.store ${at('(local.get $dst)', `(i32.load ${at4('(local.get $index)', '(local.get $j)')})`)}
-          (f64.mul (local.get $t) (f64.div ${f64(at('(local.get $w)', '(local.get $j)'))} ${f64(G('(local.get $j)'))}))))))`;
+          (f64.mul (local.get $t) ${f64(G('(local.get $j)'))})))))`;
 }
 
 /**
@@ -617,8 +627,7 @@ function vectorRows() {
  */
 function secularIteration() {
   const D = (i) => f64(at('(local.get $d)', i));
-  const G = (i) => f64(at('(local.get $row)', i));
-  const sums = '(call $sumsAt (local.get $row) (local.get $z2) (local.get $i) (local.get $k) (local.get $t) (local.get $out))';
+  const sums = '(call $sumsAt (local.get $d) (local.get $row) (local.get $z2) (local.get $i) (local.get $k) (local.get $pole) (local.get $t) (local.get $out))';
   const abs = (x) => `(f64.abs ${x})`;
   return `
   (func $modelRoot (param $invRho f64) (param $psi f64) (param $dpsi f64) (param $phi f64) (param $dphi f64) (param $a f64) (param $b f64) (param $t f64) (param $two i32) (result f64)
@@ -646,8 +655,8 @@ function secularIteration() {
     (select (local.get $x1) (local.get $x2)
       (i32.and (f64.gt (local.get $x1) (f64.min (local.get $a) (local.get $b))) (f64.lt (local.get $x1) (f64.max (local.get $a) (local.get $b))))))
   (func $secularRoots (export "secularRoots") (param $gaps i32) (param $z2 i32) (param $d i32) (param $k i32) (param $args i32) (param $origin i32) (param $tau i32) (param $out i32) (result i32)
-    (local $rho f64) (local $invRho f64) (local $zz f64) (local $i i32) (local $j i32) (local $row i32) (local $o i32) (local $two i32) (local $step i32) (local $settled i32)
-    (local $lo f64) (local $hi f64) (local $t f64) (local $a f64) (local $b f64) (local $shift f64) (local $next f64)
+    (local $rho f64) (local $invRho f64) (local $zz f64) (local $i i32) (local $j i32) (local $row i32) (local $o i32) (local $stale i32) (local $two i32) (local $step i32) (local $settled i32)
+    (local $lo f64) (local $hi f64) (local $t f64) (local $a f64) (local $b f64) (local $shift f64) (local $next f64) (local $pole f64)
     (local $psi f64) (local $dpsi f64) (local $phi f64) (local $dphi f64) (local $f f64) (local $noise f64)
     (local.set $rho (f64.load (local.get $args)))
     (local.set $invRho (f64.div (f64.const 1) (local.get $rho)))
@@ -662,31 +671,38 @@ function secularIteration() {
     (block $roots_done (loop $roots
       (br_if $roots_done (i32.ge_s (local.get $i) (local.get $k)))
       (local.set $row ${at('(local.get $gaps)', '(i32.mul (local.get $i) (local.get $k))')})
-      ;; The left half of the sum runs over poles 0..i, the right half over i+1..k−1.
+      ;; The left half of the sum runs over poles 0..i, the right half over i+1..k−1; differences
+      ;; from the pole d_o are formed as the sums need them, the row stored once the root is found.
       (local.set $o (local.get $i))
-      (call $offsetsAt (local.get $row) (local.get $d) (local.get $k) ${D('(local.get $i)')} (f64.const 0))
+      (local.set $stale (i32.const 0))
+      (local.set $pole ${D('(local.get $i)')})
       (local.set $lo (f64.const 0))
       (local.set $two (i32.lt_s (local.get $i) (i32.sub (local.get $k) (i32.const 1))))
+      (local.set $a (f64.const 0))
+      (local.set $b (f64.const 0))
       (if (local.get $two)
         (then
           ;; Halfway between the poles; the sign of f there tells which pole is nearer.
-          (local.set $hi (f64.mul (f64.const 0.5) ${G('(i32.add (local.get $i) (i32.const 1))')}))
+          (local.set $shift (f64.sub ${D('(i32.add (local.get $i) (i32.const 1))')} (local.get $pole)))
+          (local.set $hi (f64.mul (f64.const 0.5) (local.get $shift)))
           (local.set $t (local.get $hi))
+          (local.set $b (local.get $shift))
           ${sums}
           (if (f64.lt (f64.add (f64.add (local.get $invRho) (f64.load (local.get $out))) (f64.load offset=16 (local.get $out))) (f64.const 0))
             (then
+              ;; Nearer d_{i+1}: offsets from there; f and its halves at this point are the same.
               (local.set $o (i32.add (local.get $i) (i32.const 1)))
-              (local.set $shift ${G('(local.get $o)')})
-              (call $offsetsAt (local.get $row) (local.get $d) (local.get $k) ${D('(local.get $o)')} (f64.const 0))
+              (local.set $pole ${D('(local.get $o)')})
+              (local.set $a (f64.sub ${D('(local.get $i)')} (local.get $pole)))
+              (local.set $b (f64.const 0))
               (local.set $lo (f64.sub (local.get $hi) (local.get $shift)))
               (local.set $hi (f64.const 0))
-              (local.set $t (local.get $lo)))))
+              (local.set $t (local.get $lo))
+              (local.set $stale (i32.const 1)))))
         (else
           (local.set $hi (f64.mul (local.get $rho) (local.get $zz)))
           (local.set $t (f64.mul (f64.const 0.5) (local.get $hi)))
           ${sums}))
-      (local.set $a ${G('(local.get $i)')})
-      (local.set $b (select ${G('(i32.add (local.get $i) (i32.const 1))')} (f64.const 0) (local.get $two)))
       (local.set $settled (i32.const 0))
       (local.set $step (i32.const 0))
       (block $iter_done (loop $iter
@@ -709,12 +725,14 @@ function secularIteration() {
         (local.set $t (select (local.get $next) (f64.mul (f64.const 0.5) (f64.add (local.get $lo) (local.get $hi)))
           (i32.and (f64.gt (local.get $next) (local.get $lo)) (f64.lt (local.get $next) (local.get $hi)))))
         ${sums}
+        (local.set $stale (i32.const 0))
         (local.set $step (i32.add (local.get $step) (i32.const 1)))
         (br $iter)))
       (if (i32.eqz (local.get $settled)) (then (return (i32.const 0))))
       (i32.store ${at4('(local.get $origin)', '(local.get $i)')} (local.get $o))
       (f64.store ${at('(local.get $tau)', '(local.get $i)')} (local.get $t))
-      (call $offsetsAt (local.get $row) (local.get $d) (local.get $k) ${D('(local.get $o)')} (local.get $t))
+      ;; The row of the last evaluation is d_j − λ_i, unless the first one, from d_i, settled at once after the switch to d_{i+1}.
+      (if (local.get $stale) (then (call $offsetsAt (local.get $row) (local.get $d) (local.get $k) (local.get $pole) (local.get $t))))
       (local.set $i (i32.add (local.get $i) (i32.const 1)))
       (br $roots)))
     (i32.const 1))`;
