@@ -17,8 +17,9 @@
  * - **Products**: the new vectors (stored as rows) are U · G, G holding the pieces' vectors. Rows
  *   of G from the upper piece are zero in the lower columns and vice versa; sorted upper-only,
  *   mixed (joined by a deflating rotation), lower-only, each half of the columns needs only its
- *   share of G's rows (about half the work of the full product). The products run in
- *   `MergeKernels`: JavaScript loops (here) or the WebAssembly kernel (simdEigen.ts).
+ *   share of G's rows (about half the work of the full product). The leaves' QR, the secular
+ *   iteration and the products run in `MergeKernels`: JavaScript loops (here) or the
+ *   WebAssembly kernels (simdEigen.ts), one call per leaf or merge and step.
  */
 import { javascriptSecularSums, secularRoots } from './secularRoots';
 import { tridiagonalValuesVectors } from './tridiagonalValues';
@@ -29,9 +30,9 @@ const EPS = 2.220446049250313e-16;
 export const DIVIDE_LEAF_ORDER = 24;
 
 /**
- * Where the leaves' QR and the merges' O(n²) and O(n³) loops run, and their operands: the
- * secular equation's (secularRoots.ts), the leaves', and the matrix products', with v (new vectors
- * in the pieces' basis), g (the pieces' vectors) and w (the product), each at least
+ * Where the leaves' QR and the merges' O(n²) and O(n³) loops run, and their operands: those of
+ * the secular equation (secularRoots.ts), of the leaves and of the matrix products, with v (new
+ * vectors in the pieces' basis), g (the pieces' vectors) and w (the product), each at least
  * (n + 4) × productStride(n) doubles. `multiply` sets w[cOff + r·cs + c] = Σ_l v[aOff + r·as + l] ·
  * g[bOff + l·bs + c] for r < rows, c < cols; it may also write up to three more rows and columns
  * of w (and read as far in v, g).
