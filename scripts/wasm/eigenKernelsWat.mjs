@@ -671,8 +671,8 @@ function secularIteration() {
     (block $roots_done (loop $roots
       (br_if $roots_done (i32.ge_s (local.get $i) (local.get $k)))
       (local.set $row ${at('(local.get $gaps)', '(i32.mul (local.get $i) (local.get $k))')})
-      ;; The left half of the sum runs over poles 0..i, the right half over i+1..k−1; differences
-      ;; from the pole d_o are formed as the sums need them, the row stored once the root is found.
+      ;; The left half of the sum runs over poles 0..i, the right half over i+1..k−1; each
+      ;; evaluation forms d_j − λ from the pole d_o and stores it in the root's row.
       (local.set $o (local.get $i))
       (local.set $stale (i32.const 0))
       (local.set $pole ${D('(local.get $i)')})
