@@ -7,6 +7,10 @@
 /** Rows of the eigenvector matrix that share each pass of a reflector in `applyReflectors`. */
 export const ROW_TILE = 4;
 
+/** Double precision's ε and the secular iteration's step limit, as in secularRoots.ts (they must match). */
+const EPS = 2.220446049250313e-16;
+const MAX_SECULAR_STEPS = 120;
+
 const f64 = (addr) => `(f64.load ${addr})`;
 const at = (base, index) => `(i32.add ${base} (i32.shl ${index} (i32.const 3)))`;
 const at4 = (base, index) => `(i32.add ${base} (i32.shl ${index} (i32.const 2)))`;
@@ -496,10 +500,13 @@ function multiply() {
 }
 
 /**
- * secularSums(gaps, z2, split, k, args, out): the two halves of the secular function's sum at the
- * offset t = args[0] (secularRoots.ts): out[0] = Σ_{j≤split} z2_j r_j and out[1] = Σ_{j≤split} z2_j r_j²
- * with r_j = 1/(gaps_j − t), out[2], out[3] the same over split < j < k. Pairs of terms per
- * operation, two divisions in one.
+ * $sumsAt(d, row, z2, split, k, pole, t, out), internal: the two halves of the secular function's
+ * sum at λ = pole + t (secularRoots.ts): out[0] = Σ_{j≤split} z2_j r_j and out[1] = Σ_{j≤split}
+ * z2_j r_j² with r_j = 1/((d_j − pole) − t), out[2], out[3] the same over split < j < k. The
+ * differences are formed here from the poles (the same numbers as a row of offsets
+ * (d_j − pole) − 0 minus t) and stored in `row` as they go: the iteration stops right after an
+ * evaluation, so the root's row d_j − λ is then there already. Pairs of terms per operation, two
+ * divisions in one.
  */
 function secularSums() {
   const half = (name, from, to, s, ds) => `
@@ -508,7 +515,9 @@ function secularSums() {
     (local.set ${ds} (v128.const f64x2 0 0))
     (block $${name}_done (loop $${name}
       (br_if $${name}_done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) ${to}))
-      (local.set $r (f64x2.div (v128.const f64x2 1 1) (f64x2.sub (v128.load ${at('(local.get $gaps)', '(local.get $j)')}) (local.get $tt))))
+      (local.set $r (f64x2.sub (f64x2.sub (v128.load ${at('(local.get $d)', '(local.get $j)')}) (local.get $pp)) (local.get $tt)))
+      (v128.store ${at('(local.get $row)', '(local.get $j)')} (local.get $r))
+      (local.set $r (f64x2.div (v128.const f64x2 1 1) (local.get $r)))
       (local.set $w (f64x2.mul (v128.load ${at('(local.get $z2)', '(local.get $j)')}) (local.get $r)))
       (local.set ${s} (f64x2.add (local.get ${s}) (local.get $w)))
       (local.set ${ds} (f64x2.add (local.get ${ds}) (f64x2.mul (local.get $w) (local.get $r))))
@@ -518,13 +527,15 @@ function secularSums() {
     (local.set $dx (f64.const 0))
     (if (i32.lt_s (local.get $j) ${to})
       (then
-        (local.set $y (f64.div (f64.const 1) (f64.sub ${f64(at('(local.get $gaps)', '(local.get $j)'))} (local.get $t))))
+        (local.set $y (f64.sub (f64.sub ${f64(at('(local.get $d)', '(local.get $j)'))} (local.get $pole)) (local.get $t)))
+        (f64.store ${at('(local.get $row)', '(local.get $j)')} (local.get $y))
+        (local.set $y (f64.div (f64.const 1) (local.get $y)))
         (local.set $x (f64.mul ${f64(at('(local.get $z2)', '(local.get $j)'))} (local.get $y)))
         (local.set $dx (f64.mul (local.get $x) (local.get $y)))))`;
   return `
-  (func $secularSums (export "secularSums") (param $gaps i32) (param $z2 i32) (param $split i32) (param $k i32) (param $args i32) (param $out i32)
-    (local $j i32) (local $t f64) (local $tt v128) (local $r v128) (local $w v128) (local $s v128) (local $ds v128) (local $x f64) (local $dx f64) (local $y f64)
-    (local.set $t (f64.load (local.get $args)))
+  (func $sumsAt (param $d i32) (param $row i32) (param $z2 i32) (param $split i32) (param $k i32) (param $pole f64) (param $t f64) (param $out i32)
+    (local $j i32) (local $pp v128) (local $tt v128) (local $r v128) (local $w v128) (local $s v128) (local $ds v128) (local $x f64) (local $dx f64) (local $y f64)
+    (local.set $pp (f64x2.splat (local.get $pole)))
     (local.set $tt (f64x2.splat (local.get $t)))
     ${half('left', '(i32.const 0)', '(i32.add (local.get $split) (i32.const 1))', '$s', '$ds')}
     (f64.store (local.get $out) (f64.add (local.get $x) ${sumLanes('(local.get $s)')}))
@@ -536,21 +547,18 @@ function secularSums() {
 }
 
 /**
- * weightRatios(prod, gaps, d, from, to, args): prod_j ← prod_j · gaps_j / (d_j − pole) for
- * from ≤ j < to, one row's factors of the Gu–Eisenstat weights; poleOffsets(gaps, d, k, args):
- * gaps_j ← (d_j − pole) − t, a root's row of d_j − λ (secularRoots.ts); cauchyRow(gaps, w, k, dst,
- * index): x_j = w_j / gaps_j, then dst[index[j]] = x_j / ‖x‖ (i32 indices; gaps is left as it is), one new vector
- * (divideConquerTridiagonal.ts). The doubles pole (args[0]) and t (args[1]) come through memory and
- * no double is returned: Node 20 calls these kernels through V8's generic JS-to-WebAssembly
- * wrapper, which can box doubles, thousands of calls per solve (no change in the collector's
- * share was measurable either way).
+ * Internal, called by the per-merge kernels below: $ratiosAt(prod, gaps, d, from, to, pole):
+ * prod_j ← prod_j · gaps_j / (d_j − pole) for from ≤ j < to, one row's factors of the
+ * Gu–Eisenstat weights; $offsetsAt(gaps, d, k, pole, t): gaps_j ← (d_j − pole) − t, a root's row
+ * of d_j − λ (secularRoots.ts); $cauchyRow(gaps, w, k, dst, index): x_j = w_j / gaps_j, then
+ * dst[index[j]] = x_j / ‖x‖ (i32 indices; gaps is left holding x), one new vector
+ * (divideConquerTridiagonal.ts).
  */
 function vectorRows() {
   const G = (j) => at('(local.get $gaps)', j);
   return `
-  (func $weightRatios (export "weightRatios") (param $prod i32) (param $gaps i32) (param $d i32) (param $from i32) (param $to i32) (param $args i32)
-    (local $j i32) (local $pp v128) (local $pole f64)
-    (local.set $pole (f64.load (local.get $args)))
+  (func $ratiosAt (param $prod i32) (param $gaps i32) (param $d i32) (param $from i32) (param $to i32) (param $pole f64)
+    (local $j i32) (local $pp v128)
     (local.set $pp (f64x2.splat (local.get $pole)))
     (local.set $j (local.get $from))
     (block $done (loop $l
@@ -565,10 +573,8 @@ function vectorRows() {
         (f64.store ${at('(local.get $prod)', '(local.get $j)')}
           (f64.mul ${f64(at('(local.get $prod)', '(local.get $j)'))}
             (f64.div ${f64(G('(local.get $j)'))} (f64.sub ${f64(at('(local.get $d)', '(local.get $j)'))} (local.get $pole))))))))
-  (func $poleOffsets (export "poleOffsets") (param $gaps i32) (param $d i32) (param $k i32) (param $args i32)
-    (local $j i32) (local $pp v128) (local $tt v128) (local $pole f64) (local $t f64)
-    (local.set $pole (f64.load (local.get $args)))
-    (local.set $t (f64.load offset=8 (local.get $args)))
+  (func $offsetsAt (param $gaps i32) (param $d i32) (param $k i32) (param $pole f64) (param $t f64)
+    (local $j i32) (local $pp v128) (local $tt v128)
     (local.set $pp (f64x2.splat (local.get $pole)))
     (local.set $tt (f64x2.splat (local.get $t)))
     (local.set $j (i32.const 0))
@@ -579,17 +585,18 @@ function vectorRows() {
       (br $l)))
     (if (i32.lt_s (local.get $j) (local.get $k))
       (then (f64.store ${G('(local.get $j)')} (f64.sub (f64.sub ${f64(at('(local.get $d)', '(local.get $j)'))} (local.get $pole)) (local.get $t))))))
-  (func $cauchyRow (export "cauchyRow") (param $gaps i32) (param $w i32) (param $k i32) (param $dst i32) (param $index i32)
+  (func $cauchyRow (param $gaps i32) (param $w i32) (param $k i32) (param $dst i32) (param $index i32)
     (local $j i32) (local $x v128) (local $s v128) (local $y f64) (local $t f64)
-    ;; Pass 1 sums the squares only; pass 2 divides again instead of reading back the quotients
-    ;; pass 1 stored in pairs: those 8-byte reads of 16-byte stores just made cost about 5 ns an
-    ;; entry (0.96 against 0.22 µs a call at k = 160; likely stores not yet forwardable), 8 % of
-    ;; a whole solve at order 160.
+    ;; Pass 1 stores the quotients over gaps in pairs, pass 2 reads them back in the same pairs
+    ;; (16-byte loads of 16-byte stores). Reading them back one double at a time cost about 5 ns
+    ;; an entry (0.96 against 0.22 µs a call at k = 160, likely 8-byte loads of 16-byte stores not
+    ;; forwardable), so an earlier version divided again in pass 2 instead.
     (local.set $s (v128.const f64x2 0 0))
     (local.set $j (i32.const 0))
     (block $done (loop $l
       (br_if $done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $k)))
       (local.set $x (f64x2.div (v128.load ${at('(local.get $w)', '(local.get $j)')}) (v128.load ${G('(local.get $j)')})))
+      (v128.store ${G('(local.get $j)')} (local.get $x))
       (local.set $s (f64x2.add (local.get $s) (f64x2.mul (local.get $x) (local.get $x))))
       (local.set $j (i32.add (local.get $j) (i32.const 2)))
       (br $l)))
@@ -597,12 +604,13 @@ function vectorRows() {
     (if (i32.lt_s (local.get $j) (local.get $k))
       (then
         (local.set $y (f64.div ${f64(at('(local.get $w)', '(local.get $j)'))} ${f64(G('(local.get $j)'))}))
+        (f64.store ${G('(local.get $j)')} (local.get $y))
         (local.set $t (f64.add (local.get $t) (f64.mul (local.get $y) (local.get $y))))))
     (local.set $t (f64.div (f64.const 1) (f64.sqrt (local.get $t))))
     (local.set $j (i32.const 0))
     (block $s_done (loop $sl
       (br_if $s_done (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $k)))
-      (local.set $x (f64x2.mul (f64x2.splat (local.get $t)) (f64x2.div (v128.load ${at('(local.get $w)', '(local.get $j)')}) (v128.load ${G('(local.get $j)')}))))
+      (local.set $x (f64x2.mul (f64x2.splat (local.get $t)) (v128.load ${G('(local.get $j)')})))
       (f64.store ${at('(local.get $dst)', `(i32.load ${at4('(local.get $index)', '(local.get $j)')})`)} (f64x2.extract_lane 0 (local.get $x)))
       (f64.store ${at('(local.get $dst)', `(i32.load offset=4 ${at4('(local.get $index)', '(local.get $j)')})`)} (f64x2.extract_lane 1 (local.get $x)))
       (local.set $j (i32.add (local.get $j) (i32.const 2)))
@@ -610,7 +618,342 @@ function vectorRows() {
     (if (i32.lt_s (local.get $j) (local.get $k))
       (then
         (f64.store ${at('(local.get $dst)', `(i32.load ${at4('(local.get $index)', '(local.get $j)')})`)}
-          (f64.mul (local.get $t) (f64.div ${f64(at('(local.get $w)', '(local.get $j)'))} ${f64(G('(local.get $j)'))}))))))`;
+          (f64.mul (local.get $t) ${f64(G('(local.get $j)'))})))))`;
+}
+
+/**
+ * secularRoots(gaps, z2, d, k, args, origin, tau, out) → 1, or 0 if a root did not settle: every
+ * root of one merge's secular equation, the iteration of secularRoots.ts step for step (the same
+ * start, model root, bracket, stopping rule and step limit, each operation in the same order) in
+ * one call instead of one call per evaluation of the sums, each of which crossed V8's generic
+ * JS-to-WebAssembly wrapper. ρ is args[0]; the sums go through `out` (four doubles).
+ */
+function secularIteration() {
+  const D = (i) => f64(at('(local.get $d)', i));
+  const sums = '(call $sumsAt (local.get $d) (local.get $row) (local.get $z2) (local.get $i) (local.get $k) (local.get $pole) (local.get $t) (local.get $out))';
+  const abs = (x) => `(f64.abs ${x})`;
+  return `
+  (func $modelRoot (param $invRho f64) (param $psi f64) (param $dpsi f64) (param $phi f64) (param $dphi f64) (param $a f64) (param $b f64) (param $t f64) (param $two i32) (result f64)
+    ;; secularRoots.ts's modelRoot: the root of c + c1/(a − x) + c2/(b − x) between a and b, or NaN.
+    (local $c1 f64) (local $c2 f64) (local $c f64) (local $qb f64) (local $q0 f64) (local $disc f64) (local $q f64) (local $x1 f64) (local $x2 f64)
+    (local.set $c1 (f64.mul (f64.mul (local.get $dpsi) (f64.sub (local.get $a) (local.get $t))) (f64.sub (local.get $a) (local.get $t))))
+    (if (i32.eqz (local.get $two))
+      (then
+        (local.set $c (f64.add (f64.sub (f64.add (local.get $invRho) (local.get $psi)) (f64.mul (local.get $dpsi) (f64.sub (local.get $a) (local.get $t)))) (local.get $phi)))
+        (return (select (f64.add (local.get $a) (f64.div (local.get $c1) (local.get $c))) (f64.const nan) (f64.gt (local.get $c) (f64.const 0))))))
+    (local.set $c2 (f64.mul (f64.mul (local.get $dphi) (f64.sub (local.get $b) (local.get $t))) (f64.sub (local.get $b) (local.get $t))))
+    (local.set $c (f64.sub
+      (f64.add (f64.sub (f64.add (local.get $invRho) (local.get $psi)) (f64.mul (local.get $dpsi) (f64.sub (local.get $a) (local.get $t)))) (local.get $phi))
+      (f64.mul (local.get $dphi) (f64.sub (local.get $b) (local.get $t)))))
+    (local.set $qb (f64.neg (f64.add (f64.add (f64.mul (local.get $c) (f64.add (local.get $a) (local.get $b))) (local.get $c1)) (local.get $c2))))
+    (local.set $q0 (f64.add (f64.add (f64.mul (f64.mul (local.get $c) (local.get $a)) (local.get $b)) (f64.mul (local.get $c1) (local.get $b))) (f64.mul (local.get $c2) (local.get $a))))
+    (if (f64.eq (local.get $c) (f64.const 0))
+      (then (return (select (f64.const nan) (f64.div (f64.neg (local.get $q0)) (local.get $qb)) (f64.eq (local.get $qb) (f64.const 0))))))
+    (local.set $disc (f64.sub (f64.mul (local.get $qb) (local.get $qb)) (f64.mul (f64.mul (f64.const 4) (local.get $c)) (local.get $q0))))
+    (if (i32.eqz (f64.ge (local.get $disc) (f64.const 0))) (then (return (f64.const nan))))
+    (local.set $q (f64.mul (f64.const -0.5)
+      (f64.add (local.get $qb) (f64.mul (select (f64.const 1) (f64.const -1) (f64.ge (local.get $qb) (f64.const 0))) (f64.sqrt (local.get $disc))))))
+    (local.set $x1 (f64.div (local.get $q) (local.get $c)))
+    (local.set $x2 (select (f64.const nan) (f64.div (local.get $q0) (local.get $q)) (f64.eq (local.get $q) (f64.const 0))))
+    (select (local.get $x1) (local.get $x2)
+      (i32.and (f64.gt (local.get $x1) (f64.min (local.get $a) (local.get $b))) (f64.lt (local.get $x1) (f64.max (local.get $a) (local.get $b))))))
+  (func $secularRoots (export "secularRoots") (param $gaps i32) (param $z2 i32) (param $d i32) (param $k i32) (param $args i32) (param $origin i32) (param $tau i32) (param $out i32) (result i32)
+    (local $rho f64) (local $invRho f64) (local $zz f64) (local $i i32) (local $j i32) (local $row i32) (local $o i32) (local $stale i32) (local $two i32) (local $step i32) (local $settled i32)
+    (local $lo f64) (local $hi f64) (local $t f64) (local $a f64) (local $b f64) (local $shift f64) (local $next f64) (local $pole f64)
+    (local $psi f64) (local $dpsi f64) (local $phi f64) (local $dphi f64) (local $f f64) (local $noise f64)
+    (local.set $rho (f64.load (local.get $args)))
+    (local.set $invRho (f64.div (f64.const 1) (local.get $rho)))
+    (local.set $zz (f64.const 0))
+    (local.set $j (i32.const 0))
+    (block $zz_done (loop $zzl
+      (br_if $zz_done (i32.ge_s (local.get $j) (local.get $k)))
+      (local.set $zz (f64.add (local.get $zz) ${f64(at('(local.get $z2)', '(local.get $j)'))}))
+      (local.set $j (i32.add (local.get $j) (i32.const 1)))
+      (br $zzl)))
+    (local.set $i (i32.const 0))
+    (block $roots_done (loop $roots
+      (br_if $roots_done (i32.ge_s (local.get $i) (local.get $k)))
+      (local.set $row ${at('(local.get $gaps)', '(i32.mul (local.get $i) (local.get $k))')})
+      ;; The left half of the sum runs over poles 0..i, the right half over i+1..k−1; each
+      ;; evaluation forms d_j − λ from the pole d_o and stores it in the root's row.
+      (local.set $o (local.get $i))
+      (local.set $stale (i32.const 0))
+      (local.set $pole ${D('(local.get $i)')})
+      (local.set $lo (f64.const 0))
+      (local.set $two (i32.lt_s (local.get $i) (i32.sub (local.get $k) (i32.const 1))))
+      (local.set $a (f64.const 0))
+      (local.set $b (f64.const 0))
+      (if (local.get $two)
+        (then
+          ;; Halfway between the poles; the sign of f there tells which pole is nearer.
+          (local.set $shift (f64.sub ${D('(i32.add (local.get $i) (i32.const 1))')} (local.get $pole)))
+          (local.set $hi (f64.mul (f64.const 0.5) (local.get $shift)))
+          (local.set $t (local.get $hi))
+          (local.set $b (local.get $shift))
+          ${sums}
+          (if (f64.lt (f64.add (f64.add (local.get $invRho) (f64.load (local.get $out))) (f64.load offset=16 (local.get $out))) (f64.const 0))
+            (then
+              ;; Nearer d_{i+1}: offsets from there; f and its halves at this point are the same.
+              (local.set $o (i32.add (local.get $i) (i32.const 1)))
+              (local.set $pole ${D('(local.get $o)')})
+              (local.set $a (f64.sub ${D('(local.get $i)')} (local.get $pole)))
+              (local.set $b (f64.const 0))
+              (local.set $lo (f64.sub (local.get $hi) (local.get $shift)))
+              (local.set $hi (f64.const 0))
+              (local.set $t (local.get $lo))
+              (local.set $stale (i32.const 1)))))
+        (else
+          (local.set $hi (f64.mul (local.get $rho) (local.get $zz)))
+          (local.set $t (f64.mul (f64.const 0.5) (local.get $hi)))
+          ${sums}))
+      (local.set $settled (i32.const 0))
+      (local.set $step (i32.const 0))
+      (block $iter_done (loop $iter
+        (br_if $iter_done (i32.ge_s (local.get $step) (i32.const ${MAX_SECULAR_STEPS})))
+        (local.set $psi (f64.load (local.get $out)))
+        (local.set $dpsi (f64.load offset=8 (local.get $out)))
+        (local.set $phi (f64.load offset=16 (local.get $out)))
+        (local.set $dphi (f64.load offset=24 (local.get $out)))
+        (local.set $f (f64.add (f64.add (local.get $invRho) (local.get $psi)) (local.get $phi)))
+        (if (f64.eq (local.get $f) (f64.const 0)) (then (local.set $settled (i32.const 1)) (br $iter_done)))
+        (if (f64.lt (local.get $f) (f64.const 0)) (then (local.set $lo (local.get $t))) (else (local.set $hi (local.get $t))))
+        ;; Rounding error of f: its terms' magnitudes (ψ < 0 < φ) and the ulp of τ times the slope.
+        (local.set $noise (f64.mul (f64.const ${EPS})
+          (f64.add (f64.mul (f64.const 8) (f64.add (f64.sub (local.get $invRho) (local.get $psi)) (local.get $phi)))
+            (f64.mul ${abs('(local.get $t)')} (f64.add (local.get $dpsi) (local.get $dphi))))))
+        (if (i32.or (f64.le ${abs('(local.get $f)')} (local.get $noise))
+              (f64.le (f64.sub (local.get $hi) (local.get $lo)) (f64.mul (f64.const ${4 * EPS}) (f64.max ${abs('(local.get $lo)')} ${abs('(local.get $hi)')}))))
+          (then (local.set $settled (i32.const 1)) (br $iter_done)))
+        (local.set $next (call $modelRoot (local.get $invRho) (local.get $psi) (local.get $dpsi) (local.get $phi) (local.get $dphi) (local.get $a) (local.get $b) (local.get $t) (local.get $two)))
+        (local.set $t (select (local.get $next) (f64.mul (f64.const 0.5) (f64.add (local.get $lo) (local.get $hi)))
+          (i32.and (f64.gt (local.get $next) (local.get $lo)) (f64.lt (local.get $next) (local.get $hi)))))
+        ${sums}
+        (local.set $stale (i32.const 0))
+        (local.set $step (i32.add (local.get $step) (i32.const 1)))
+        (br $iter)))
+      (if (i32.eqz (local.get $settled)) (then (return (i32.const 0))))
+      (i32.store ${at4('(local.get $origin)', '(local.get $i)')} (local.get $o))
+      (f64.store ${at('(local.get $tau)', '(local.get $i)')} (local.get $t))
+      ;; The row of the last evaluation is d_j − λ_i, unless the first one, from d_i, settled at once after the switch to d_{i+1}.
+      (if (local.get $stale) (then (call $offsetsAt (local.get $row) (local.get $d) (local.get $k) (local.get $pole) (local.get $t))))
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $roots)))
+    (i32.const 1))`;
+}
+
+/**
+ * vectorWeights(gaps, d, k, args, zhat): the squared Gu–Eisenstat weights of one merge,
+ * ẑ_j² = −gaps[k−1][j]/ρ (ρ = args[0]) times every root row's ratios (divideConquerTridiagonal.ts
+ * says which pole each row pairs with); cauchyRows(gaps, w, k, dst, ds, index): every new vector
+ * row i < k by $cauchyRow into dst + i·ds (ds in doubles). One call per merge each instead of
+ * one per row.
+ */
+function mergeRows() {
+  const D = (i) => f64(at('(local.get $d)', i));
+  return `
+  (func $vectorWeights (export "vectorWeights") (param $gaps i32) (param $d i32) (param $k i32) (param $args i32) (param $zhat i32)
+    (local $rho f64) (local $i i32) (local $j i32) (local $row i32)
+    (local.set $rho (f64.load (local.get $args)))
+    (local.set $row ${at('(local.get $gaps)', '(i32.mul (i32.sub (local.get $k) (i32.const 1)) (local.get $k))')})
+    (local.set $j (i32.const 0))
+    (block $j_done (loop $jl
+      (br_if $j_done (i32.ge_s (local.get $j) (local.get $k)))
+      (f64.store ${at('(local.get $zhat)', '(local.get $j)')} (f64.div (f64.neg ${f64(at('(local.get $row)', '(local.get $j)'))}) (local.get $rho)))
+      (local.set $j (i32.add (local.get $j) (i32.const 1)))
+      (br $jl)))
+    (local.set $i (i32.const 0))
+    (block $i_done (loop $il
+      (br_if $i_done (i32.ge_s (i32.add (local.get $i) (i32.const 1)) (local.get $k)))
+      (local.set $row ${at('(local.get $gaps)', '(i32.mul (local.get $i) (local.get $k))')})
+      (call $ratiosAt (local.get $zhat) (local.get $row) (local.get $d) (i32.const 0) (i32.add (local.get $i) (i32.const 1)) ${D('(i32.add (local.get $i) (i32.const 1))')})
+      (call $ratiosAt (local.get $zhat) (local.get $row) (local.get $d) (i32.add (local.get $i) (i32.const 1)) (local.get $k) ${D('(local.get $i)')})
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $il))))
+  (func $cauchyRows (export "cauchyRows") (param $gaps i32) (param $w i32) (param $k i32) (param $dst i32) (param $ds i32) (param $index i32)
+    (local $i i32)
+    (local.set $i (i32.const 0))
+    (block $i_done (loop $il
+      (br_if $i_done (i32.ge_s (local.get $i) (local.get $k)))
+      (call $cauchyRow ${at('(local.get $gaps)', '(i32.mul (local.get $i) (local.get $k))')} (local.get $w) (local.get $k)
+        ${at('(local.get $dst)', '(i32.mul (local.get $i) (local.get $ds))')} (local.get $index))
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $il))))`;
+}
+
+/**
+ * leafEigen(d, e, m, q, order) → 1, or 0 on non-finite input or no convergence: the eigenpairs
+ * of one small piece of the divide and conquer (order m, diagonal d, off-diagonal e with
+ * e[m−1] = 0), the implicit QR of tridiagonalValuesVectors (tridiagonalValues.ts) step for step
+ * — the same deflation test, iteration limit, Wilkinson shift and chase, each operation in the
+ * same order — with q (m × m, stride m) set to the identity first and every rotation applied to
+ * its rows k, k + 1 in pairs of doubles. Then, as solveLeaf did: order (i32) gets the insertion
+ * sort of the values (stable), d the values ascending (e is the scratch). √(x² + z²) takes
+ * $hypot where the square could underflow or overflow.
+ */
+function leafQr() {
+  const D = (i) => f64(at('(local.get $d)', i));
+  const E = (i) => f64(at('(local.get $e)', i));
+  const abs = (x) => `(f64.abs ${x})`;
+  const I = (i, plus) => `(i32.add ${i} (i32.const ${plus}))`;
+  const l = (name) => `(local.get $${name})`;
+  const rowOf = (k) => at(l('q'), `(i32.mul ${k} ${l('m')})`);
+  return `
+  (func $hypot (param $x f64) (param $z f64) (result f64)
+    ;; √(x² + z²) scaled by the larger magnitude (as V8's Math.hypot does for two arguments).
+    (local $big f64) (local $u f64) (local $v f64)
+    (local.set $big (f64.max (f64.abs (local.get $x)) (f64.abs (local.get $z))))
+    (if (f64.eq (local.get $big) (f64.const 0)) (then (return (f64.const 0))))
+    (local.set $u (f64.div (f64.abs (local.get $x)) (local.get $big)))
+    (local.set $v (f64.div (f64.abs (local.get $z)) (local.get $big)))
+    (f64.mul (f64.sqrt (f64.add (f64.mul (local.get $u) (local.get $u)) (f64.mul (local.get $v) (local.get $v)))) (local.get $big)))
+  (func $rotationLength (param $x f64) (param $z f64) (result f64)
+    (local $r2 f64)
+    (local.set $r2 (f64.add (f64.mul (local.get $x) (local.get $x)) (f64.mul (local.get $z) (local.get $z))))
+    (if (result f64) (i32.and (f64.gt (local.get $r2) (f64.const 1e-280)) (f64.lt (local.get $r2) (f64.const 1e280)))
+      (then (f64.sqrt (local.get $r2)))
+      (else (call $hypot (local.get $x) (local.get $z)))))
+  (func $leafChase (param $d i32) (param $e i32) (param $lo i32) (param $hi i32) (param $q i32) (param $m i32)
+    ;; One implicit shifted QR sweep on the unreduced window [lo, hi] (chaseValues).
+    (local $delta f64) (local $root f64) (local $denom f64) (local $mu f64) (local $x f64) (local $z f64) (local $r f64) (local $c f64) (local $s f64)
+    (local $a f64) (local $b f64) (local $cc f64) (local $dm f64) (local $bb f64) (local $k i32) (local $o i32) (local $end i32) (local $rk i32) (local $rk1 i32)
+    (local $cv v128) (local $sv v128) (local $p v128) (local $p1 v128) (local $y f64) (local $y1 f64)
+    ;; Wilkinson shift: the eigenvalue of the trailing 2 × 2 nearer d[hi].
+    (local.set $dm ${D(l('hi'))})
+    (local.set $bb ${E(I(l('hi'), -1))})
+    (local.set $delta (f64.mul (f64.const 0.5) (f64.sub ${D(I(l('hi'), -1))} (local.get $dm))))
+    (local.set $root (call $rotationLength (local.get $delta) (local.get $bb)))
+    (local.set $denom (select (f64.add (local.get $delta) (local.get $root)) (f64.sub (local.get $delta) (local.get $root)) (f64.ge (local.get $delta) (f64.const 0))))
+    (local.set $mu (select (local.get $dm) (f64.sub (local.get $dm) (f64.div (f64.mul (local.get $bb) (local.get $bb)) (local.get $denom))) (f64.eq (local.get $denom) (f64.const 0))))
+    (local.set $x (f64.sub ${D(l('lo'))} (local.get $mu)))
+    (local.set $z ${E(l('lo'))})
+    (local.set $end (i32.shl (local.get $m) (i32.const 3)))
+    (local.set $k (local.get $lo))
+    (block $k_done (loop $kl
+      (br_if $k_done (i32.ge_s (local.get $k) (local.get $hi)))
+      (local.set $r (call $rotationLength (local.get $x) (local.get $z)))
+      (local.set $c (select (f64.const 1) (f64.div (local.get $x) (local.get $r)) (f64.eq (local.get $r) (f64.const 0))))
+      (local.set $s (select (f64.const 0) (f64.div (local.get $z) (local.get $r)) (f64.eq (local.get $r) (f64.const 0))))
+      (if (i32.gt_s (local.get $k) (local.get $lo)) (then (f64.store ${at(l('e'), I(l('k'), -1))} (local.get $r))))
+      (local.set $a ${D(l('k'))})
+      (local.set $b ${E(l('k'))})
+      (local.set $cc ${D(I(l('k'), 1))})
+      (f64.store ${at(l('d'), l('k'))}
+        (f64.add (f64.add (f64.mul (f64.mul (local.get $c) (local.get $c)) (local.get $a)) (f64.mul (f64.mul (f64.mul (f64.const 2) (local.get $c)) (local.get $s)) (local.get $b)))
+          (f64.mul (f64.mul (local.get $s) (local.get $s)) (local.get $cc))))
+      (f64.store ${at(l('d'), I(l('k'), 1))}
+        (f64.add (f64.sub (f64.mul (f64.mul (local.get $s) (local.get $s)) (local.get $a)) (f64.mul (f64.mul (f64.mul (f64.const 2) (local.get $c)) (local.get $s)) (local.get $b)))
+          (f64.mul (f64.mul (local.get $c) (local.get $c)) (local.get $cc))))
+      (f64.store ${at(l('e'), l('k'))}
+        (f64.add (f64.mul (f64.mul (local.get $c) (local.get $s)) (f64.sub (local.get $cc) (local.get $a)))
+          (f64.mul (f64.sub (f64.mul (local.get $c) (local.get $c)) (f64.mul (local.get $s) (local.get $s))) (local.get $b))))
+      (if (i32.lt_s (local.get $k) (i32.sub (local.get $hi) (i32.const 1)))
+        (then
+          (local.set $z (f64.mul (local.get $s) ${E(I(l('k'), 1))}))
+          (f64.store ${at(l('e'), I(l('k'), 1))} (f64.mul ${E(I(l('k'), 1))} (local.get $c)))
+          (local.set $x ${E(l('k'))})))
+      ;; Rows k, k + 1 of q: (c q_k + s q_k+1, c q_k+1 − s q_k), two entries at a time.
+      (local.set $rk ${rowOf(l('k'))})
+      (local.set $rk1 (i32.add (local.get $rk) (local.get $end)))
+      (local.set $cv (f64x2.splat (local.get $c)))
+      (local.set $sv (f64x2.splat (local.get $s)))
+      (local.set $o (i32.const 0))
+      (block $o_done (loop $ol
+        (br_if $o_done (i32.gt_s (i32.add (local.get $o) (i32.const 16)) (local.get $end)))
+        (local.set $p (v128.load (i32.add (local.get $rk) (local.get $o))))
+        (local.set $p1 (v128.load (i32.add (local.get $rk1) (local.get $o))))
+        (v128.store (i32.add (local.get $rk) (local.get $o)) (f64x2.add (f64x2.mul (local.get $cv) (local.get $p)) (f64x2.mul (local.get $sv) (local.get $p1))))
+        (v128.store (i32.add (local.get $rk1) (local.get $o)) (f64x2.sub (f64x2.mul (local.get $cv) (local.get $p1)) (f64x2.mul (local.get $sv) (local.get $p))))
+        (local.set $o (i32.add (local.get $o) (i32.const 16)))
+        (br $ol)))
+      (if (i32.lt_s (local.get $o) (local.get $end))
+        (then
+          (local.set $y (f64.load (i32.add (local.get $rk) (local.get $o))))
+          (local.set $y1 (f64.load (i32.add (local.get $rk1) (local.get $o))))
+          (f64.store (i32.add (local.get $rk) (local.get $o)) (f64.add (f64.mul (local.get $c) (local.get $y)) (f64.mul (local.get $s) (local.get $y1))))
+          (f64.store (i32.add (local.get $rk1) (local.get $o)) (f64.sub (f64.mul (local.get $c) (local.get $y1)) (f64.mul (local.get $s) (local.get $y))))))
+      (local.set $k (i32.add (local.get $k) (i32.const 1)))
+      (br $kl))))
+  (func $leafEigen (export "leafEigen") (param $d i32) (param $e i32) (param $m i32) (param $q i32) (param $order i32) (result i32)
+    (local $i i32) (local $j i32) (local $hi i32) (local $lo i32) (local $iter i32) (local $norm f64) (local $floor f64) (local $x f64) (local $oi i32)
+    ;; q = I
+    (local.set $i (i32.const 0))
+    (block $z_done (loop $zl
+      (br_if $z_done (i32.ge_s (local.get $i) (i32.mul (local.get $m) (local.get $m))))
+      (f64.store ${at(l('q'), l('i'))} (f64.const 0))
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $zl)))
+    (local.set $i (i32.const 0))
+    (block $id_done (loop $idl
+      (br_if $id_done (i32.ge_s (local.get $i) (local.get $m)))
+      (f64.store ${at(l('q'), `(i32.mul (local.get $i) ${I(l('m'), 1)})`)} (f64.const 1))
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $idl)))
+    ;; deflatingQr: ‖T‖_∞, its finiteness, the floor of the deflation test.
+    (local.set $norm (f64.const 0))
+    (local.set $i (i32.const 0))
+    (block $n_done (loop $nl
+      (br_if $n_done (i32.ge_s (local.get $i) (local.get $m)))
+      (local.set $x ${abs(D(l('i')))})
+      (if (i32.gt_s (local.get $i) (i32.const 0)) (then (local.set $x (f64.add (local.get $x) ${abs(E(I(l('i'), -1)))}))))
+      (if (i32.lt_s (local.get $i) (i32.sub (local.get $m) (i32.const 1))) (then (local.set $x (f64.add (local.get $x) ${abs(E(l('i')))}))))
+      (local.set $norm (f64.max (local.get $norm) (local.get $x)))
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $nl)))
+    (if (i32.eqz (f64.lt (f64.abs (local.get $norm)) (f64.const inf))) (then (return (i32.const 0))))
+    (local.set $floor (f64.add (f64.const 1e-300) (f64.mul (f64.const ${EPS * 1e-3}) (local.get $norm))))
+    (local.set $hi (i32.sub (local.get $m) (i32.const 1)))
+    (local.set $iter (i32.const 0))
+    (block $qr_done (loop $qr
+      (br_if $qr_done (i32.le_s (local.get $hi) (i32.const 0)))
+      (if (i32.gt_s (local.get $iter) (i32.mul (i32.const 30) (local.get $m))) (then (return (i32.const 0))))
+      (block $top_done (loop $top
+        (br_if $top_done (i32.le_s (local.get $hi) (i32.const 0)))
+        (br_if $top_done (i32.eqz (f64.le ${abs(E(I(l('hi'), -1)))}
+          (f64.add (f64.mul (f64.const ${EPS}) (f64.add ${abs(D(I(l('hi'), -1)))} ${abs(D(l('hi')))})) (local.get $floor)))))
+        (f64.store ${at(l('e'), I(l('hi'), -1))} (f64.const 0))
+        (local.set $hi (i32.sub (local.get $hi) (i32.const 1)))
+        (br $top)))
+      (br_if $qr_done (i32.eqz (local.get $hi)))
+      (local.set $lo (i32.sub (local.get $hi) (i32.const 1)))
+      (block $lo_done (loop $lol
+        (br_if $lo_done (i32.le_s (local.get $lo) (i32.const 0)))
+        (br_if $lo_done (i32.eqz (f64.gt ${abs(E(I(l('lo'), -1)))}
+          (f64.add (f64.mul (f64.const ${EPS}) (f64.add ${abs(D(I(l('lo'), -1)))} ${abs(D(l('lo')))})) (local.get $floor)))))
+        (local.set $lo (i32.sub (local.get $lo) (i32.const 1)))
+        (br $lol)))
+      (if (i32.gt_s (local.get $lo) (i32.const 0)) (then (f64.store ${at(l('e'), I(l('lo'), -1))} (f64.const 0))))
+      (call $leafChase (local.get $d) (local.get $e) (local.get $lo) (local.get $hi) (local.get $q) (local.get $m))
+      (local.set $iter (i32.add (local.get $iter) (i32.const 1)))
+      (br $qr)))
+    ;; Insertion sort of the indices by value (as solveLeaf), then the values in that order.
+    (local.set $i (i32.const 0))
+    (block $s_done (loop $sl
+      (br_if $s_done (i32.ge_s (local.get $i) (local.get $m)))
+      (local.set $x ${D(l('i'))})
+      (local.set $j (local.get $i))
+      (block $m_done (loop $ml
+        (br_if $m_done (i32.le_s (local.get $j) (i32.const 0)))
+        (local.set $oi (i32.load ${at4(l('order'), I(l('j'), -1))}))
+        (br_if $m_done (i32.eqz (f64.gt ${D(l('oi'))} (local.get $x))))
+        (i32.store ${at4(l('order'), l('j'))} (local.get $oi))
+        (local.set $j (i32.sub (local.get $j) (i32.const 1)))
+        (br $ml)))
+      (i32.store ${at4(l('order'), l('j'))} (local.get $i))
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $sl)))
+    (local.set $i (i32.const 0))
+    (block $v_done (loop $vl
+      (br_if $v_done (i32.ge_s (local.get $i) (local.get $m)))
+      (f64.store ${at(l('e'), l('i'))} ${D(`(i32.load ${at4(l('order'), l('i'))})`)})
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $vl)))
+    (local.set $i (i32.const 0))
+    (block $w_done (loop $wl
+      (br_if $w_done (i32.ge_s (local.get $i) (local.get $m)))
+      (f64.store ${at(l('d'), l('i'))} ${E(l('i'))})
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $wl)))
+    (i32.const 1))`;
 }
 
 /**
@@ -649,6 +992,9 @@ ${moves()}
 ${multiply()}
 ${secularSums()}
 ${vectorRows()}
+${secularIteration()}
+${mergeRows()}
+${leafQr()}
 ${copyRows()}
 )
 `;

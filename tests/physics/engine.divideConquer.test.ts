@@ -278,3 +278,96 @@ describe.runIf(simdKernelsAvailable())('large-block route with divide and conque
     );
   });
 });
+
+describe.runIf(simdKernelsAvailable())('the WebAssembly set’s leaf and secular kernels against the JavaScript set', () => {
+  /** A leaf of order m: random, graded couplings, an exactly repeated diagonal with zero couplings, or scaled by `scale`. */
+  function leafInput(kind: 'random' | 'graded' | 'repeated', m: number, seed: number, scale: number): { d: Float64Array; e: Float64Array } {
+    const r = lcg(seed);
+    const d = new Float64Array(m);
+    const e = new Float64Array(m);
+    for (let i = 0; i < m; i++) {
+      d[i] = scale * (kind === 'repeated' ? Math.round(3 * r()) : kind === 'graded' ? i + r() : r());
+      e[i] = scale * (kind === 'repeated' ? (i % 3 === 2 ? 0 : r()) : kind === 'graded' ? 10 ** (-i / 2) * r() : r());
+    }
+    e[m - 1] = 0;
+    return { d, e };
+  }
+
+  function runLeaf(kernels: MergeKernels, input: { d: Float64Array; e: Float64Array }, m: number): { ok: boolean; values: number[]; order: number[]; q: number[] } {
+    kernels.leafD.set(input.d);
+    kernels.leafE.set(input.e);
+    const ok = kernels.leaf(m);
+    return { ok, values: Array.from(kernels.leafD.subarray(0, m)), order: Array.from(kernels.fromRows.subarray(0, m)), q: Array.from(kernels.leafQ.subarray(0, m * m)) };
+  }
+
+  it('leaf QR: the same bits as tridiagonalValuesVectors (the same chase, deflation and sort)', () => {
+    for (const kind of ['random', 'graded', 'repeated'] as const) {
+      for (const m of [1, 2, 3, 7, 13, 20, 24]) {
+        const input = leafInput(kind, m, 31 * m + kind.length, 1);
+        const js = runLeaf(javascriptMergeKernels(40), input, m);
+        const wasm = runLeaf(simdMergeKernels(40) as MergeKernels, input, m);
+        expect(js.ok && wasm.ok, `${kind} ${m}`).toBe(true);
+        expect(wasm.values, `${kind} ${m}`).toEqual(js.values);
+        expect(wasm.order, `${kind} ${m}`).toEqual(js.order);
+        expect(wasm.q, `${kind} ${m}`).toEqual(js.q);
+        for (let r = 1; r < m; r++) expect(wasm.values[r]).toBeGreaterThanOrEqual(wasm.values[r - 1]);
+      }
+    }
+  });
+
+  it('leaf QR at 1e-150 (rotation lengths by the scaled √(x² + z²)): values within m·ε·‖T‖, vectors orthonormal', () => {
+    // x² + z² < 1e-280 here, so both sets take their scaled branch (Math.hypot in JavaScript).
+    const m = 20;
+    const input = leafInput('random', m, 5, 1e-150);
+    const js = runLeaf(javascriptMergeKernels(40), input, m);
+    const wasm = runLeaf(simdMergeKernels(40) as MergeKernels, input, m);
+    expect(js.ok && wasm.ok).toBe(true);
+    for (let r = 0; r < m; r++) expect(Math.abs(wasm.values[r] - js.values[r])).toBeLessThan(m * EPS * 1e-150);
+    const rows = Float64Array.from({ length: m * m }, (_, i) => wasm.q[wasm.order[Math.floor(i / m)] * m + (i % m)]);
+    const scaled = { d: input.d.map((x) => x * 1e150), e: input.e.map((x) => x * 1e150) };
+    const q = tridiagonalQuality(scaled, m, Float64Array.from(wasm.values, (x) => x * 1e150), rows);
+    expect(q.residual).toBeLessThan(m * EPS);
+    expect(q.orthogonality).toBeLessThan(m * EPS);
+  });
+
+  it('leaf QR: non-finite input fails in both sets', () => {
+    const input = leafInput('random', 9, 2, 1);
+    input.d[4] = Number.POSITIVE_INFINITY;
+    expect(runLeaf(javascriptMergeKernels(40), input, 9).ok).toBe(false);
+    expect(runLeaf(simdMergeKernels(40) as MergeKernels, input, 9).ok).toBe(false);
+  });
+
+  it('secular roots in one kernel call: the origins of secularRoots, roots within 16 k ε, rows d_j − λ_i', () => {
+    for (const k of [1, 2, 7, 40, 161]) {
+      const r = lcg(k + 100);
+      const d = Float64Array.from({ length: k }, (_, j) => j + 0.3 * r());
+      const z2 = Float64Array.from({ length: k }, (_, j) => (j % 9 === 1 ? 1e-14 : (0.5 + r()) ** 2));
+      const rho = 0.7;
+      const sets = [javascriptMergeKernels(k), simdMergeKernels(k) as MergeKernels].map((kernels) => {
+        kernels.dk.set(d);
+        kernels.z2.set(z2);
+        expect(kernels.roots(k, rho)).toBe(true);
+        return { origin: Array.from(kernels.origin.subarray(0, k)), tau: Array.from(kernels.tau.subarray(0, k)), gaps: Array.from(kernels.gaps.subarray(0, k * k)) };
+      });
+      const [js, wasm] = sets;
+      expect(wasm.origin, `${k}`).toEqual(js.origin);
+      for (let i = 0; i < k; i++) {
+        expect(Math.abs(wasm.tau[i] - js.tau[i]), `${k} ${i}`).toBeLessThan(16 * k * EPS);
+        // Each row holds (d_j − d_o) − τ for the kernel's own root, to the last bit.
+        for (let j = 0; j < k; j++) expect(wasm.gaps[i * k + j]).toBe(d[j] - d[wasm.origin[i]] - wasm.tau[i]);
+      }
+    }
+  });
+
+  it('a root settled by the very first evaluation after moving its origin to the upper pole keeps the right row', () => {
+    // Poles 0 and 1, weights ½ + 2⁻⁵⁰ and ½, 1/ρ = 1e-300: at λ = ½, f = −2⁻⁴⁹ < 0 (origin moves to
+    // pole 1) and |f| is below its rounding bound 18ε, so λ = ½ is taken at once (by hand).
+    const kernels = simdMergeKernels(2) as MergeKernels;
+    kernels.dk.set([0, 1]);
+    kernels.z2.set([0.5 + 2 ** -50, 0.5]);
+    expect(kernels.roots(2, 1e300)).toBe(true);
+    expect(kernels.origin[0]).toBe(1);
+    expect(kernels.tau[0]).toBe(-0.5);
+    expect(Array.from(kernels.gaps.subarray(0, 2))).toEqual([-0.5, 0.5]);
+  });
+});

@@ -17,10 +17,11 @@
  * - **Products**: the new vectors (stored as rows) are U · G, G holding the pieces' vectors. Rows
  *   of G from the upper piece are zero in the lower columns and vice versa; sorted upper-only,
  *   mixed (joined by a deflating rotation), lower-only, each half of the columns needs only its
- *   share of G's rows (about half the work of the full product). The products run in
- *   `MergeKernels`: JavaScript loops (here) or the WebAssembly kernel (simdEigen.ts).
+ *   share of G's rows (about half the work of the full product). The leaves' QR, the secular
+ *   iteration and the products run in `MergeKernels`: JavaScript loops (here) or the
+ *   WebAssembly kernels (simdEigen.ts), one call per leaf or merge and step.
  */
-import { javascriptSecularSums, type SecularSums, secularRoots } from './secularRoots';
+import { javascriptSecularSums, secularRoots } from './secularRoots';
 import { tridiagonalValuesVectors } from './tridiagonalValues';
 
 const EPS = 2.220446049250313e-16;
@@ -29,25 +30,43 @@ const EPS = 2.220446049250313e-16;
 export const DIVIDE_LEAF_ORDER = 24;
 
 /**
- * Where the merges' O(n²) and O(n³) loops run, and their operands: the secular equation's sums
- * (secularRoots.ts) and the matrix products, with v (new vectors in the pieces' basis), g (the
- * pieces' vectors) and w (the product), each at least (n + 4) × productStride(n) doubles.
- * `multiply` sets w[cOff + r·cs + c] = Σ_l v[aOff + r·as + l] · g[bOff + l·bs + c] for
- * r < rows, c < cols; it may also write up to three more rows and columns of w (and read as far
- * in v, g).
+ * Where the leaves' QR and the merges' O(n²) and O(n³) loops run, and their operands: those of
+ * the secular equation (secularRoots.ts), of the leaves and of the matrix products, with v (new
+ * vectors in the pieces' basis), g (the pieces' vectors) and w (the product), each at least
+ * (n + 4) × productStride(n) doubles. `multiply` sets w[cOff + r·cs + c] = Σ_l v[aOff + r·as + l] ·
+ * g[bOff + l·bs + c] for r < rows, c < cols; it may also write up to three more rows and columns
+ * of w (and read as far in v, g).
  */
-export interface MergeKernels extends SecularSums {
-  /** The kept poles d_j and, after the roots, the Gu–Eisenstat weights ẑ_j (n each). */
+export interface MergeKernels {
+  /** Row i (stride k) of gaps: d_j − λ_i of the merge's roots; z2: the squared weights z_j². */
+  gaps: Float64Array;
+  z2: Float64Array;
+  /** The kept poles d_j and, after `weights`, the Gu–Eisenstat weights (n each). */
   dk: Float64Array;
   zhat: Float64Array;
-  /** zhat_j ← zhat_j · gaps[row + j] / (dk_j − pole) for from ≤ j < to. */
-  weightRatios(row: number, from: number, to: number, pole: number): void;
-  /** x_j = zhat_j / gaps[row + j] (gaps may be left holding x), then v[at + column[j]] = x_j / ‖x‖ for j < k: one new vector. */
-  cauchyRow(row: number, k: number, at: number): void;
+  /** λ_i = dk[origin[i]] + tau[i], from `roots` (n each). */
+  origin: Int32Array;
+  tau: Float64Array;
+  /** The k roots of 1/ρ + Σ z2_j/(dk_j − λ) = 0 into origin, tau and the rows of gaps (secularRoots); false if one does not settle. */
+  roots(k: number, rho: number): boolean;
+  /** zhat_j ← ẑ_j² = Π_i (λ_i − d_j) / (ρ Π_{i≠j} (d_i − d_j)), from the rows of gaps (merge's newVectors says how). */
+  weights(k: number, rho: number): void;
+  /** For i < k: x_j = zhat_j / gaps[i·k + j] (gaps may be left holding x), then v[i·ps + column[j]] = x_j / ‖x‖: the new vectors. */
+  cauchyRows(k: number, ps: number): void;
+  /** A leaf's diagonal and off-diagonal (DIVIDE_LEAF_ORDER each) and its vectors (DIVIDE_LEAF_ORDER² doubles). */
+  leafD: Float64Array;
+  leafE: Float64Array;
+  leafQ: Float64Array;
+  /**
+   * Eigenpairs of the leaf (leafD, leafE; order m ≤ DIVIDE_LEAF_ORDER, leafE[m − 1] = 0) by QR with
+   * the rotations accumulated (tridiagonalValuesVectors): values ascending into leafD, and row
+   * fromRows[r] of leafQ (stride m) the vector of leafD[r]. False on no convergence.
+   */
+  leaf(m: number): boolean;
   v: Float64Array;
   g: Float64Array;
   w: Float64Array;
-  /** Row indices for copyRows, and v's column of each kept component for cauchyRow (n each). */
+  /** Row indices for copyRows, and v's column of each kept component for cauchyRows (n each). */
   fromRows: Int32Array;
   toRows: Int32Array;
   column: Int32Array;
@@ -70,21 +89,14 @@ interface Scratch {
   kept: Int32Array;
   dropped: Int32Array;
   zk: Float64Array;
-  origin: Int32Array;
-  tau: Float64Array;
   target: Int32Array;
   merged: Float64Array;
-  leaf: Float64Array;
-  leafD: Float64Array;
-  leafE: Float64Array;
-  leafOrder: Int32Array;
 }
 
 let cache: Scratch | null = null;
 
 function scratch(n: number): Scratch {
   if (cache !== null && cache.n >= n) return cache;
-  const L = DIVIDE_LEAF_ORDER;
   cache = {
     n,
     ps: 0,
@@ -97,14 +109,8 @@ function scratch(n: number): Scratch {
     kept: new Int32Array(n),
     dropped: new Int32Array(n),
     zk: new Float64Array(n),
-    origin: new Int32Array(n),
-    tau: new Float64Array(n),
     target: new Int32Array(n),
     merged: new Float64Array(n),
-    leaf: new Float64Array(L * L),
-    leafD: new Float64Array(L),
-    leafE: new Float64Array(L),
-    leafOrder: new Int32Array(L),
   };
   return cache;
 }
@@ -143,7 +149,7 @@ export function divideConquerTridiagonal(d: Float64Array, e: Float64Array, n: nu
 
 /** Solves T[at .. at+m) (its diagonal already corrected for the cuts): values into s.d, vectors into z's rows. */
 function solvePiece(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, at: number, m: number): boolean {
-  if (m <= DIVIDE_LEAF_ORDER) return solveLeaf(s, z, zs, at, m);
+  if (m <= DIVIDE_LEAF_ORDER) return solveLeaf(s, z, zs, products, at, m);
   const m1 = m >> 1;
   const beta = s.e[at + m1 - 1];
   // T = diag(T₁ − |β| e_last e_lastᵀ, T₂ − |β| e_first e_firstᵀ) + |β| v vᵀ, v = (e_last, sign(β) e_first).
@@ -154,30 +160,19 @@ function solvePiece(s: Scratch, z: Float64Array, zs: number, products: MergeKern
   return merge(s, z, zs, products, at, m1, m - m1, beta);
 }
 
-/** A small piece by QR with the rotations accumulated, sorted ascending. */
-function solveLeaf(s: Scratch, z: Float64Array, zs: number, at: number, m: number): boolean {
-  const { leaf, leafD, leafE, leafOrder } = s;
+/** A small piece by QR with the rotations accumulated (MergeKernels.leaf), sorted ascending, into rows at.. of z. */
+function solveLeaf(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, at: number, m: number): boolean {
+  const { leafD, leafE, toRows } = products;
   for (let i = 0; i < m; i++) {
     leafD[i] = s.d[at + i];
     leafE[i] = i < m - 1 ? s.e[at + i] : 0;
   }
-  const q = leaf.subarray(0, m * m);
-  q.fill(0);
-  for (let i = 0; i < m; i++) q[i * m + i] = 1;
-  if (!tridiagonalValuesVectors(leafD, leafE, m, q)) return false;
-  for (let i = 0; i < m; i++) {
-    let j = i;
-    while (j > 0 && leafD[leafOrder[j - 1]] > leafD[i]) {
-      leafOrder[j] = leafOrder[j - 1];
-      j--;
-    }
-    leafOrder[j] = i;
-  }
+  if (!products.leaf(m)) return false;
   for (let r = 0; r < m; r++) {
-    const k = leafOrder[r];
-    s.d[at + r] = leafD[k];
-    for (let i = 0, to = (at + r) * zs + at; i < m; i++) z[to + i] = q[k * m + i];
+    s.d[at + r] = leafD[r];
+    toRows[r] = at + r;
   }
+  products.copyRows(products.leafQ, 0, m, z, at, zs, m, m);
   return true;
 }
 
@@ -255,8 +250,8 @@ function merge(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, 
   }
   copySplitRows(products, z, at, zs, g, 0, ps, nDropped, m1, m2, b0);
   // Both lists ascending: merge them into the rows of z (kept rows' targets in toRows, dropped ones' in target).
-  const { merged, origin, tau, target } = s;
-  const { dk } = products;
+  const { merged, target } = s;
+  const { dk, origin, tau } = products;
   for (let r = 0, i = 0, q = 0; r < m; r++) {
     const lambda = i < k ? dk[origin[i]] + tau[i] : Number.POSITIVE_INFINITY;
     if (q >= nDropped || lambda <= d[at + dropped[q]]) {
@@ -284,21 +279,16 @@ function merge(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, 
  * products with the pieces' vectors (rows of w, upper columns at 0, lower ones at b0).
  */
 function newVectors(s: Scratch, z: Float64Array, zs: number, products: MergeKernels, at: number, m1: number, m2: number, k: number, rho: number, ps: number, b0: number): boolean {
-  const { d, z: zv, types, kept, zk, origin, tau } = s;
-  const { gaps, z2, dk, zhat, column, fromRows } = products;
+  const { d, z: zv, types, kept, zk } = s;
+  const { z2, dk, zhat, column, fromRows } = products;
   for (let j = 0; j < k; j++) {
     dk[j] = d[at + kept[j]];
     zk[j] = zv[kept[j]];
     z2[j] = zk[j] * zk[j];
   }
-  if (!secularRoots(dk, k, rho, origin, tau, products)) return false;
-  // ẑ_j² = Π_i (λ_i − d_j) / (ρ Π_{i≠j} (d_i − d_j)), as ratios near one to stay in range: root
-  // i < k − 1 pairs with pole i for j > i and with pole i + 1 for j ≤ i; the last root with ρ.
-  for (let j = 0; j < k; j++) zhat[j] = -gaps[(k - 1) * k + j] / rho;
-  for (let i = 0; i < k - 1; i++) {
-    products.weightRatios(i * k, 0, i + 1, dk[i + 1]);
-    products.weightRatios(i * k, i + 1, k, dk[i]);
-  }
+  if (!products.roots(k, rho)) return false;
+  // ẑ_j² = Π_i (λ_i − d_j) / (ρ Π_{i≠j} (d_i − d_j)), then its root with z_j's sign.
+  products.weights(k, rho);
   for (let j = 0; j < k; j++) zhat[j] = (zk[j] >= 0 ? 1 : -1) * Math.sqrt(zhat[j]);
   let k1 = 0;
   let k2 = 0;
@@ -315,7 +305,7 @@ function newVectors(s: Scratch, z: Float64Array, zs: number, products: MergeKern
     column[j] = type === 1 ? upperNext++ : type === 3 ? mixedNext++ : lowerNext++;
   }
   const { g, w } = products;
-  for (let i = 0; i < k; i++) products.cauchyRow(i * k, k, i * ps);
+  products.cauchyRows(k, ps);
   // The pieces' vectors of the kept components into g, row column[j] for component j.
   for (let j = 0; j < k; j++) {
     fromRows[j] = at + kept[j];
@@ -379,41 +369,83 @@ function sortDropped(d: Float64Array, at: number, dropped: Int32Array, count: nu
   }
 }
 
-/** The merges' loops in plain JavaScript, with operands of order up to n. */
+/** The leaves' QR and the merges' loops in plain JavaScript, with operands of order up to n. */
 export function javascriptMergeKernels(n: number): MergeKernels {
   const size = (n + 4) * productStride(n);
+  const L = DIVIDE_LEAF_ORDER;
   const v = new Float64Array(size);
   const g = new Float64Array(size);
   const w = new Float64Array(size);
   const dk = new Float64Array(n);
   const sums = javascriptSecularSums(n, dk);
-  const { gaps } = sums;
+  const { gaps, z2 } = sums;
   const zhat = new Float64Array(n);
+  const origin = new Int32Array(n);
+  const tau = new Float64Array(n);
+  const leafD = new Float64Array(L);
+  const leafE = new Float64Array(L);
+  const leafQ = new Float64Array(L * L);
   const fromRows = new Int32Array(n);
   const toRows = new Int32Array(n);
   const column = new Int32Array(n);
   return {
-    ...sums,
+    gaps,
+    z2,
     dk,
     zhat,
+    origin,
+    tau,
+    leafD,
+    leafE,
+    leafQ,
     fromRows,
     toRows,
     column,
     copyRows(from, fromAt, fs, to, toAt, ts, count, cols) {
       copyRowsByLoops(fromRows, toRows, from, fromAt, fs, to, toAt, ts, count, cols);
     },
-    weightRatios(row, from, to, pole) {
-      for (let j = from; j < to; j++) zhat[j] *= gaps[row + j] / (dk[j] - pole);
+    roots(k, rho) {
+      return secularRoots(dk, k, rho, origin, tau, sums);
     },
-    cauchyRow(row, k, at) {
-      let sum = 0;
-      for (let j = 0; j < k; j++) {
-        const x = zhat[j] / gaps[row + j];
-        gaps[row + j] = x;
-        sum += x * x;
+    weights(k, rho) {
+      // Ratios near one to stay in range: root i < k − 1 pairs with pole i + 1 for j ≤ i and
+      // with pole i for j > i; the last root with ρ.
+      for (let j = 0; j < k; j++) zhat[j] = -gaps[(k - 1) * k + j] / rho;
+      for (let i = 0; i < k - 1; i++) {
+        const row = i * k;
+        for (let j = 0; j <= i; j++) zhat[j] *= gaps[row + j] / (dk[j] - dk[i + 1]);
+        for (let j = i + 1; j < k; j++) zhat[j] *= gaps[row + j] / (dk[j] - dk[i]);
       }
-      const scale = 1 / Math.sqrt(sum);
-      for (let j = 0; j < k; j++) v[at + column[j]] = scale * gaps[row + j];
+    },
+    cauchyRows(k, ps) {
+      for (let i = 0; i < k; i++) {
+        const row = i * k;
+        let sum = 0;
+        for (let j = 0; j < k; j++) {
+          const x = zhat[j] / gaps[row + j];
+          gaps[row + j] = x;
+          sum += x * x;
+        }
+        const scale = 1 / Math.sqrt(sum);
+        for (let j = 0; j < k; j++) v[i * ps + column[j]] = scale * gaps[row + j];
+      }
+    },
+    leaf(m) {
+      const q = leafQ.subarray(0, m * m);
+      q.fill(0);
+      for (let i = 0; i < m; i++) q[i * m + i] = 1;
+      if (!tridiagonalValuesVectors(leafD, leafE, m, q)) return false;
+      for (let i = 0; i < m; i++) {
+        let j = i;
+        while (j > 0 && leafD[fromRows[j - 1]] > leafD[i]) {
+          fromRows[j] = fromRows[j - 1];
+          j--;
+        }
+        fromRows[j] = i;
+      }
+      for (let r = 0; r < m; r++) leafE[r] = leafD[fromRows[r]];
+      leafD.set(leafE.subarray(0, m));
+      return true;
     },
     v,
     g,

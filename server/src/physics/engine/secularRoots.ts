@@ -17,6 +17,9 @@
  * it, which then bisects. It stops when |f| is within its own rounding error or the bracket is
  * a few ulps wide; a root that has neither after MAX_STEPS steps makes the call return false, so
  * the caller falls back to another route instead of using an unconverged root.
+ *
+ * The WebAssembly route runs this iteration operation for operation as one kernel call per merge
+ * (secularRoots in scripts/wasm/eigenKernelsWat.mjs): a change here must be made there too.
  */
 
 const EPS = 2.220446049250313e-16;

@@ -12,7 +12,7 @@
  * SIMD is missing, `simdKernelsAvailable()` is false and the caller keeps the JavaScript route,
  * which stays the reference the tests compare against.
  */
-import { copyRowsByLoops, divideConquerTridiagonal, type MergeKernels, productStride } from './divideConquerTridiagonal';
+import { copyRowsByLoops, DIVIDE_LEAF_ORDER, divideConquerTridiagonal, type MergeKernels, productStride } from './divideConquerTridiagonal';
 import { EIGEN_KERNELS_BASE64 } from './eigenKernelsBinary';
 
 /** Rows per tile of the back-transformation kernel (ROW_TILE in eigenKernelsWat.mjs). */
@@ -26,10 +26,10 @@ interface EigenKernels {
   packScaled(src: number, n: number, ns: number, dst: number, factor: number): void;
   unpackTransposed(z: number, ns: number, n: number, out: number): void;
   multiply(a: number, as: number, b: number, bs: number, c: number, cs: number, rows: number, inner: number, cols: number): void;
-  secularSums(gaps: number, z2: number, split: number, k: number, args: number, out: number): void;
-  weightRatios(prod: number, gaps: number, d: number, from: number, to: number, args: number): void;
-  cauchyRow(gaps: number, w: number, k: number, dst: number, index: number): void;
-  poleOffsets(gaps: number, d: number, k: number, args: number): void;
+  secularRoots(gaps: number, z2: number, d: number, k: number, args: number, origin: number, tau: number, out: number): number;
+  vectorWeights(gaps: number, d: number, k: number, args: number, zhat: number): void;
+  cauchyRows(gaps: number, w: number, k: number, dst: number, ds: number, index: number): void;
+  leafEigen(d: number, e: number, m: number, q: number, order: number): number;
   copyRows(from: number, fs: number, fromRows: number, to: number, ts: number, toRows: number, count: number, cols: number): void;
 }
 
@@ -85,6 +85,13 @@ interface Layout {
   fromRows: number;
   toRows: number;
   column: number;
+  /** The secular roots: pole index (n int32) and offset (n doubles) of each. */
+  origin: number;
+  tau: number;
+  /** A leaf's diagonal, off-diagonal and vectors (DIVIDE_LEAF_ORDER, and its square, doubles). */
+  leafD: number;
+  leafE: number;
+  leafQ: number;
 }
 
 function layout(n: number, memory: WebAssembly.Memory): Layout {
@@ -104,8 +111,13 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
   const fromRows = zhat + vector;
   const toRows = fromRows + vector;
   const column = toRows + vector;
-  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, vn: v + 5 * vector, pn: v + 6 * vector, stage, pv, pg: pv + operand, pw: pv + 2 * operand, gaps, z2, sums, dk, zhat, fromRows, toRows, column };
-  const bytes = column + vector;
+  const origin = column + vector;
+  const tau = origin + vector;
+  const leafD = tau + vector;
+  const leafE = leafD + 8 * DIVIDE_LEAF_ORDER;
+  const leafQ = leafE + 8 * DIVIDE_LEAF_ORDER;
+  const l = { ns, rows, a: 0, z: square, refl: 2 * square, d: v, e: v + vector, betas: v + 2 * vector, v: v + 3 * vector, p: v + 4 * vector, vn: v + 5 * vector, pn: v + 6 * vector, stage, pv, pg: pv + operand, pw: pv + 2 * operand, gaps, z2, sums, dk, zhat, fromRows, toRows, column, origin, tau, leafD, leafE, leafQ };
+  const bytes = leafQ + 8 * DIVIDE_LEAF_ORDER * DIVIDE_LEAF_ORDER;
   const pages = Math.ceil((bytes - memory.buffer.byteLength) / 65536);
   if (pages > 0) memory.grow(pages);
   return l;
@@ -155,17 +167,19 @@ export function simdMergeKernels(n: number): MergeKernels | null {
   return wasmMergeKernels(k, new Float64Array(k.memory.buffer), l, n);
 }
 
-/** The merges' loops on the module's memory, by the module's kernels (multiply, secularSums, poleOffsets, weightRatios, cauchyRow, copyRows). */
+/** The leaves' QR and the merges' loops on the module's memory, by the module's kernels (leafEigen, secularRoots, vectorWeights, cauchyRows, multiply, copyRows): one call per leaf or per merge and step. */
 function wasmMergeKernels(k: EigenKernels, heap: Float64Array, l: Layout, n: number): MergeKernels {
   const size = (n + 4) * productStride(n);
-  const { pv, pg, pw, gaps, z2, sums, dk, zhat, fromRows, toRows, column } = l;
+  const { pv, pg, pw, gaps, z2, sums, dk, zhat, fromRows, toRows, column, origin, tau, leafD, leafE, leafQ } = l;
   const ints = new Int32Array(k.memory.buffer);
   const rowsFrom = ints.subarray(fromRows / 4, fromRows / 4 + n);
   const rowsTo = ints.subarray(toRows / 4, toRows / 4 + n);
   const memory = heap.buffer;
-  // The kernels' double arguments, passed through memory (eigenKernelsWat.mjs says why).
+  // The kernels' double argument (ρ) goes through memory: Node 20 calls them through V8's generic
+  // JS-to-WebAssembly wrapper, which can box doubles (eigenKernelsWat.mjs).
   const argsAt = sums + 32;
   const args = heap.subarray(argsAt / 8, argsAt / 8 + 2);
+  const L = DIVIDE_LEAF_ORDER;
   return {
     fromRows: rowsFrom,
     toRows: rowsTo,
@@ -175,27 +189,28 @@ function wasmMergeKernels(k: EigenKernels, heap: Float64Array, l: Layout, n: num
       if (from.buffer === memory && to.buffer === memory) k.copyRows(from.byteOffset + 8 * fromAt, fs, fromRows, to.byteOffset + 8 * toAt, ts, toRows, count, cols);
       else copyRowsByLoops(rowsFrom, rowsTo, from, fromAt, fs, to, toAt, ts, count, cols);
     },
-
     dk: heap.subarray(dk / 8, dk / 8 + n),
     zhat: heap.subarray(zhat / 8, zhat / 8 + n),
-    weightRatios(row, from, to, pole) {
-      args[0] = pole;
-      k.weightRatios(zhat, gaps + 8 * row, dk, from, to, argsAt);
-    },
-    cauchyRow(row, count, at) {
-      k.cauchyRow(gaps + 8 * row, zhat, count, pv + 8 * at, column);
-    },
+    origin: ints.subarray(origin / 4, origin / 4 + n),
+    tau: heap.subarray(tau / 8, tau / 8 + n),
     gaps: heap.subarray(gaps / 8, gaps / 8 + n * n),
     z2: heap.subarray(z2 / 8, z2 / 8 + n),
-    out: heap.subarray(sums / 8, sums / 8 + 4),
-    offsets(row, count, pole, t) {
-      args[0] = pole;
-      args[1] = t;
-      k.poleOffsets(gaps + 8 * row, dk, count, argsAt);
+    roots(count, rho) {
+      args[0] = rho;
+      return k.secularRoots(gaps, z2, dk, count, argsAt, origin, tau, sums) === 1;
     },
-    sums(row, split, count, t) {
-      args[0] = t;
-      k.secularSums(gaps + 8 * row, z2, split, count, argsAt, sums);
+    weights(count, rho) {
+      args[0] = rho;
+      k.vectorWeights(gaps, dk, count, argsAt, zhat);
+    },
+    cauchyRows(count, ps) {
+      k.cauchyRows(gaps, zhat, count, pv, ps, column);
+    },
+    leafD: heap.subarray(leafD / 8, leafD / 8 + L),
+    leafE: heap.subarray(leafE / 8, leafE / 8 + L),
+    leafQ: heap.subarray(leafQ / 8, leafQ / 8 + L * L),
+    leaf(m) {
+      return k.leafEigen(leafD, leafE, m, leafQ, fromRows) === 1;
     },
     v: heap.subarray(pv / 8, pv / 8 + size),
     g: heap.subarray(pg / 8, pg / 8 + size),

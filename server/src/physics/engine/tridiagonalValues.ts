@@ -6,9 +6,10 @@
  * 2× faster and the whole tridiagonal eigen-solve lost a fifth of its time to garbage
  * collection before this (bench/eigen.bench.ts, docs/engine.md). Math.hypot remains for the
  * rare x² + z² outside [1e-280, 1e280], where the square could underflow or overflow.
- * Used by the WebAssembly route (simdEigen.ts; with vectors for the small pieces of the divide
- * and conquer, divideConquerTridiagonal.ts); the JavaScript route keeps tridiagonalQr, the
- * reference, bit-for-bit.
+ * With vectors it solves the small pieces of the divide and conquer in its JavaScript kernel set
+ * (divideConquerTridiagonal.ts); the WebAssembly route runs the same chase, operation for
+ * operation, as a kernel (leafEigen in scripts/wasm/eigenKernelsWat.mjs; the tests compare the
+ * bits). The JavaScript route keeps tridiagonalQr, the reference, bit-for-bit.
  */
 const EPS = 2.220446049250313e-16;
 
