@@ -9,7 +9,6 @@ import { polarizationSymbol } from '../../eval/polarizationName';
 import { vacuumWavelengthNmText } from '../../eval/wavelengthText';
 import { fieldInUnit, workingFieldUnit } from '../../eval/writtenUnit';
 import type { LineModel } from '../../model/types';
-import { SPEED_OF_LIGHT } from '../../physics/constants';
 import { md, mdTable, mdTitle } from '../shared/markdown';
 import { sameFieldGroups, sourcesText } from './sameField';
 import { levelResult } from '../shared/results';
@@ -24,20 +23,20 @@ function levelLine(role: string, name: string | undefined, r: LevelResult | unde
 }
 
 /**
- * The line frequency, its standard uncertainty when an uncertain energy reaches it, and the vacuum
- * wavelength: from the evaluation's line centre, else from the two level energies.
+ * The line frequency and its standard uncertainty when an uncertain energy reaches it: from the
+ * evaluation's line centre, else from the two level energies (the wavelength: eval/wavelengthText.ts).
  */
 export function lineFrequency(
   line: LineResult | undefined,
   lower: LevelResult | undefined,
   upper: LevelResult | undefined,
-): { hz: number; unc?: number; vacuumNm: number } | undefined {
+): { hz: number; unc?: number } | undefined {
   const fromLevels = lower?.energy_Hz && upper?.energy_Hz ? Math.abs(upper.energy_Hz.value - lower.energy_Hz.value) : undefined;
   const hz = line?.line_centre_Hz ?? fromLevels;
   if (hz === undefined || !(Math.abs(hz) > 0)) return undefined;
   // Without the evaluation's propagated value, the two energies' uncertainties taken as independent.
   const unc = line?.line_centre_Hz !== undefined ? line.line_centre_Hz_unc : Math.hypot(lower?.energy_Hz?.uncertainty ?? 0, upper?.energy_Hz?.uncertainty ?? 0) || undefined;
-  return { hz, ...(unc !== undefined ? { unc } : {}), vacuumNm: (SPEED_OF_LIGHT / Math.abs(hz)) * 1e9 };
+  return { hz, ...(unc !== undefined ? { unc } : {}) };
 }
 
 /** Which labels the table uses, said only when they are not the low-field ones everywhere. */
