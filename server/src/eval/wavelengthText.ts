@@ -1,7 +1,8 @@
 /**
  * A vacuum wavelength computed from a line frequency, printed with the frequency's uncertainty
- * carried over: λ = c/ν, u(λ) = λ·u(ν)/ν (first order; u(ν)/ν is below 1e-5 for every line
- * that has one). One place for it, so the text report, hovers and inlay hints never print a wavelength to more digits than the energies behind it support.
+ * carried over: λ = c/ν, u(λ) = λ·u(ν)/ν (first order; the next term is u(ν)/ν smaller, far
+ * below the two digits printed). One place for it, so the text report, hovers and inlay hints
+ * never print a wavelength to more digits than the energies behind it support.
  */
 import { SPEED_OF_LIGHT } from '../physics/constants';
 import { MISSING, trimNumber, withUncertainty } from './quantityText';
@@ -14,7 +15,7 @@ export function vacuumWavelengthOf(hz: number, hzUnc?: number): { m: number; unc
 }
 
 /**
- * "689.44889838(16) nm": the wavelength in nm with `digits` significant digits, or rounded to the
+ * "689.4489954(16) nm": the wavelength in nm with `digits` significant digits, or rounded to the
  * uncertainty's two digits in concise notation when there is one. `compact` (inlay hints) keeps
  * the short form while the uncertainty is below half its last digit, and shows the uncertainty
  * only when it reaches the digits printed.
