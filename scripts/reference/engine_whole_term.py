@@ -12,8 +12,9 @@ the radial parameters from the J-level A constants by numpy.linalg.lstsq on proj
 operators onto the stretched states (assumption a_L = a_SD, as the engine states), and the
 energies from numpy.linalg.eigvalsh of the whole matrix.
 
-Level data (alkali D-line data compilations; 7Li 2P1/2 A recalled, marked "from memory" in
-the built-in data): J-level energies from the D-line frequencies, A_J, B_3/2, g_I.
+Level data as in the built-in table: 7Li J-level energies from its 2P fine structure (the
+difference of its D2 and D1 lines), 87Rb from the D-line frequencies (alkali D-line data
+compilation); A_J, B_3/2, g_I.
 g_L = 1, g_S = |g_e| and mu_B/h from scipy.constants (CODATA 2022).
 """
 import json
@@ -33,7 +34,9 @@ FIELDS_T = [0.0, 0.01, 0.03, 0.1, 0.3, 1.0]
 CASES = {
     "Li7_2P": {
         "twoI": 3, "gI": -0.0011822136,
-        "energies": {1: 0.0, 3: (446.810184 - 446.800132) * 1e12},
+        # 2P3/2 - 2P1/2: the built-in 7Li D2 - D1, i.e. the 2P fine structure 10 053.154 MHz
+        # (2009 critical review of the lithium data, abstract; docs/species-data.md, "Lithium D lines").
+        "energies": {1: 0.0, 3: 10053.154e6},
         "A": {1: 91.873e6 / 2, 3: -3.055e6}, "B": {3: -0.221e6},
     },
     "Rb87_5P": {

@@ -8,6 +8,8 @@ describe('sublevel spectrum', () => {
     expect(r.code).toBe(0);
     const lines = r.out.split('\n');
     expect(lines[0]).toMatch(/^# sublevel spectrum: file=examples\/rubidium-spectrum.sublevel; line=D2; field=field coil 0.6 T; view=across the field, all light; widths=natural 6.067 MHz, Doppler 519.7 MHz at 310 K/);
+    // The D2 energy's 6.2 kHz (recalled compilation uncertainty) reaches every absolute cell: said once, with u(λ) = λ u(ν)/ν.
+    expect(lines[0]).toContain('; centre=384230484468500 Hz ± 6200 Hz, vacuum 7.80241209686155e-7 m ± 1.25900877093232e-17 m (standard uncertainty shared by every frequency and wavelength cell)');
     expect(lines[1]).toBe('offset_Hz,frequency_Hz,vacuum_wavelength_m,air_wavelength_m,intensity_per_Hz');
     expect(lines.length).toBe(2 + 2001);
     const row = lines[2]!.split(',').map(Number);

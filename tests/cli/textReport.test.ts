@@ -140,7 +140,8 @@ beam b
     const { text } = report('species Na23\n  level g: 3s 2S1/2\n  level p: 3p 2P°3/2\nline L: p -> g\n');
     expect(text).toContain('line L: g -> p (Na23) (written as emission, upper level first)');
     // The built-in D2 frequency 508.848 716 2(13) THz (sodium D line data compilation; its uncertainty from memory).
-    expect(text).toMatch(/line centre 508\.848\d*\(\d+\) THz \(vacuum wavelength 589\.15\d* nm\)/);
+    // The wavelength carries the line centre's uncertainty, carried over as u(λ) = λ u(ν)/ν (Steck: 589.158 326 4 nm).
+    expect(text).toMatch(/line centre 508\.848\d*\(\d+\) THz \(vacuum wavelength 589\.15832\d*\(\d+\) nm\)/);
   });
 });
 

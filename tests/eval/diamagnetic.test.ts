@@ -9,9 +9,15 @@ import { exactAtField } from '../../server/src/eval/exactAtField';
 import { BOHR_RADIUS } from '../../server/src/physics/constants';
 import { diamagneticHzPerT2, type WholeTermSpec } from '../../server/src/physics/engine';
 import { LI7_2P } from '../physics/engine.wholeTerm.fixtures';
+import { level } from '../fixtures/builtinLookup';
 
+/** A J-level energy as the built-in ⁷Li entry publishes it (value and unit), so the setup follows the table. */
+const published = (key: string): string => {
+  const e = level('Li7', key).energyPublished!;
+  return `${e.value} ${e.unit}`;
+};
 const term = (extra: string, fields: string) => `species Li7
-  level p: 2p 2P°  E_J = 1/2 446.800132 THz, 3/2 446.810184 THz
+  level p: 2p 2P°  E_J = 1/2 ${published('P1/2')}, 3/2 ${published('P3/2')}
     A_J = 1/2 45.9365 MHz, 3/2 -3.055 MHz
     B_J = 3/2 -0.221 MHz${extra}
 ${fields}`;

@@ -6,6 +6,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
+import { slowerReport } from '../../server/src/eval/slowerText';
 import { BOHR_MAGNETON_HZ_PER_T } from '../../server/src/physics/constants';
 
 interface RefCase { name: string; length_m: number; detuning_Hz: number; delta_B_T: number; bias_T: number; a_max_m_per_s2: number; flight: { final_m_per_s: number } }
@@ -51,6 +52,12 @@ describe('the example file', () => {
     expect(Math.abs(s.bias_T! / ref.bias_T - 1)).toBeLessThan(1e-6);
     expect(Math.abs(s.detuning_Hz! / ref.detuning_Hz - 1)).toBeLessThan(1e-6);
     expect(Math.abs(s.flight!.final_m_per_s - ref.flight.final_m_per_s)).toBeLessThan(1e-3);
+  });
+
+  it('the wavelength carries the D2 energy\'s uncertainty: u(λ) = λ u(ν)/ν, in JSON and in the text', () => {
+    // The stored Na D2 energy, 508.848 716 2(13) THz (compilation value, recalled uncertainty): 1.3 MHz / 508.85 THz × 589.158 nm.
+    expect(s.wavelength_m_unc! / s.wavelength_m!).toBeCloseTo(1.3e6 / 508.8487162e12, 15);
+    expect(slowerReport(s).join('\n')).toContain('λ = 589.1583263(15) nm (vacuum)');
   });
 
   it('drives the stretched σ+ pair with the closed-form rate μ_B/h (g_u·3/2 − g_l·1/2) (Steck g-factors)', () => {

@@ -57,6 +57,14 @@ describe('inlay hints', () => {
     expect(hint.tooltip).toBe('F = 1/2 ↔ 3/2: 150 MHz');
   });
 
+  it('a line whose energy is uncertain at the digits shown gives the wavelength with its uncertainty', () => {
+    // Invented scenario: an upper level at 500.000(1) THz. λ = c/ν = 599.5849 nm; u(λ) = λ u(ν)/ν = 1.2 pm = 0.0012 nm,
+    // above half the 7th digit (0.00005 nm), so the hint shows it; the built-in D2 above (6.2 kHz) does not.
+    const text = 'species Demo\n  mass = 40 u\n  level g: 2S1/2  energy = 0 THz\n  level e: 2P°3/2  energy = 500.000(1) THz\nline L: g -> e\n';
+    const hint = inlayHints(analysisOf(text), ALL).find((h) => String(h.label).includes('λ_vac'))!;
+    expect(String(hint.label)).toContain('λ_vac 599.5849(12) nm');
+  });
+
   it('gives no hints for an invalid level', () => {
     expect(inlayHints(analysisOf('species Na23\n  level x: 3p 2P°5/2\n'), ALL)).toEqual([]);
   });

@@ -2,6 +2,7 @@
 import { ELECTRON_GS } from '../../server/src/physics/constants';
 import type { WholeTermSpec } from '../../server/src/physics/engine';
 import reference from '../reference/engine_whole_term.json';
+import { level, num } from '../fixtures/builtinLookup';
 
 export { reference };
 
@@ -26,3 +27,6 @@ export function termFromReference(c: Case): WholeTermSpec {
 /** ⁷Li 2P and ⁸⁷Rb 5P (alkali D-line data compilations; ⁷Li A_1/2 from memory). */
 export const LI7_2P = termFromReference(reference.cases.Li7_2P);
 export const RB87_5P = termFromReference(reference.cases.Rb87_5P);
+
+/** ⁷Li 2P3/2 − 2P1/2 as the built-in table has it (its D2 minus D1 line), Hz. */
+export const LI7_FINE_STRUCTURE_HZ = num(level('Li7', 'P3/2').energyHz, 'Li7 D2') - num(level('Li7', 'P1/2').energyHz, 'Li7 D1');

@@ -12,7 +12,7 @@ import {
   type HyperfineLevelSpec,
   type WholeTermSpec,
 } from '../../server/src/physics/engine';
-import { LI7_2P, RB87_5P, reference } from './engine.wholeTerm.fixtures';
+import { LI7_2P, LI7_FINE_STRUCTURE_HZ, RB87_5P, reference } from './engine.wholeTerm.fixtures';
 
 const MU = BOHR_MAGNETON_HZ_PER_T;
 const energies = (spec: WholeTermSpec | FineTermSpec | HyperfineLevelSpec, b: number): number[] => {
@@ -42,6 +42,12 @@ describe('whole term: J-level coefficients of the dipole parts', () => {
       expect(c.orbital).toBeCloseTo((jj + 2 - 2) / (2 * jj), 13);
       expect(c.contact).toBeCloseTo((jj + 2 - 2) / (2 * jj), 13);
     }
+  });
+
+  it('the reference script\'s ⁷Li J-level energies are the built-in pair: 2P3/2 − 2P1/2 = 10 053.154 MHz', () => {
+    // 2009 critical review of the lithium fine structure, abstract (docs/species-data.md): 10 053.154 ± 0.040 MHz.
+    expect(LI7_FINE_STRUCTURE_HZ).toBe(10053.154e6);
+    expect(reference.cases.Li7_2P.energies['3']).toBe(LI7_FINE_STRUCTURE_HZ);
   });
 
   it('coefficients and radial parameters equal the NumPy/SymPy construction (tests/reference/engine_whole_term.json)', () => {
@@ -120,7 +126,7 @@ describe('whole term: limits', () => {
   });
 
   it('very high field: the analytic uncoupled energies, with a miss that falls as 1/B (strong-field expansion)', () => {
-    const zeta = (2 / 3) * (446.810184 - 446.800132) * 1e12;
+    const zeta = (2 / 3) * LI7_FINE_STRUCTURE_HZ;
     const r = termLevelConstants(LI7_2P).constants!;
     const spec: WholeTermSpec = { ...LI7_2P, levelEnergies: undefined, zeta };
     // E = ζ m_L m_S + a_L m_L m_I + a_C m_S m_I − a_SD (2/5)(3m_L² − 2) m_S m_I
@@ -206,7 +212,7 @@ describe('whole term: ⁷Li 2P fine-structure crossings', () => {
   it('|m_J = −3/2> meets the lower |m_J = +1/2> branch where the ²P closed form says (textbook), split by the hyperfine structure', () => {
     // ²P without hyperfine, b = μ_B B: the stretched |m_L = −1, m_S = −1/2> has E = ζ/2 − (g_L + g_S/2) b; the
     // m_J = +1/2 pair |0, +1/2>, |1, −1/2> is the 2 × 2 matrix [[g_S b/2, ζ/√2], [ζ/√2, −ζ/2 + (g_L − g_S/2) b]].
-    const zeta = (2 / 3) * (446.810184 - 446.800132) * 1e12;
+    const zeta = (2 / 3) * LI7_FINE_STRUCTURE_HZ;
     const gS = ELECTRON_GS;
     const stretched = (b: number): number => zeta / 2 - (1 + gS / 2) * MU * b;
     const lowerHalf = (b: number): number => {

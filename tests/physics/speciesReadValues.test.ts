@@ -211,6 +211,31 @@ describe('chromium and strontium hyperfine constants and clock lines', () => {
   });
 });
 
+describe('⁸⁷Sr 689 nm line: the ⁸⁸Sr line shifted by the clock line\'s isotope shift', () => {
+  // ⁸⁸Sr − ⁸⁷Sr on 1S0–3P0: 62 188 134.004(10) Hz, arXiv:1706.02905 (2017), abstract (tomesphere).
+  const SHIFT_HZ = 62188134.004;
+
+  it('sits 62.188 134 MHz below ⁸⁸Sr 3P1 (to the Hz the value is rounded to) with the 1 MHz bound stored', () => {
+    const e87 = level('Sr87', '3P1').energyHz;
+    expect(Math.abs(num(e87, 'Sr87 3P1') - (434829121311e3 - SHIFT_HZ))).toBeLessThanOrEqual(0.5);
+    expect(e87?.uncertainty).toBe(1e6);
+    expect(e87?.source).toContain('62 188 134.004(10) Hz');
+    expect(e87?.source).toContain('434 829 121 311(10) kHz');
+    expect(e87?.uncertaintySource).toContain('from memory');
+  });
+
+  it('the shift taken is the one the two stored clock frequencies imply, within 1e-13 of the line', () => {
+    // ⁸⁸Sr CIPM 2009 recommended frequency minus the ⁸⁷Sr comb measurement (arXiv:2008.00723): 62 188 138.9 Hz.
+    const implied = num(level('Sr88', '3P0').energyHz, 'Sr88 clock') - num(level('Sr87', '3P0').energyHz, 'Sr87 clock');
+    expect(Math.abs(implied - SHIFT_HZ)).toBeLessThanOrEqual(1e-13 * 429228e9);
+  });
+
+  it('the old stand-in (the ⁸⁸Sr value itself) lies outside 2σ of the new one: the shift matters at the stored precision', () => {
+    const e87 = level('Sr87', '3P1').energyHz;
+    expect(Math.abs(434829121311e3 - num(e87, 'Sr87 3P1'))).toBeGreaterThan(2 * (e87?.uncertainty ?? 0));
+  });
+});
+
 describe('values read in a single measurement cite it', () => {
   it.each([
     // [species, level, field, the printed value the source must carry]

@@ -12,6 +12,7 @@ import { lineAtField } from '../eval/lineAtField';
 import { gJLookup } from '../eval/gJLookup';
 import { emitOutput, nothingToCompute, openSetupFile } from './singleFile';
 import { csvNumber } from '../eval/machineText';
+import { vacuumWavelengthOf } from '../eval/wavelengthText';
 
 export const spectrumSpec: CommandSpec = {
   name: 'spectrum',
@@ -53,6 +54,17 @@ export function runSpectrum(args: ParsedArgs, ctx: CliContext): number {
     ['view', `${s.direction} the field, ${s.light} light`],
     ['widths', spectrumWidthsText(s)],
     ['intensity', 'per Hz, components of unit strength times the angular factor'],
+    ...centreUncertainty(line.line_centre_Hz, line.line_centre_Hz_unc),
   ]);
   return emitOutput(opened, csv, ctx, () => `the spectrum of line ${name} (${s.points} samples)`);
+}
+
+/**
+ * The line centre's standard uncertainty, which every frequency and wavelength cell shares (the
+ * offsets do not): said once in the comment line rather than as a column of equal numbers.
+ */
+function centreUncertainty(hz: number | undefined, unc: number | undefined): [string, string][] {
+  const w = hz !== undefined ? vacuumWavelengthOf(hz, unc) : undefined;
+  if (hz === undefined || !w || w.unc === undefined) return [];
+  return [['centre', `${csvNumber(hz)} Hz ± ${csvNumber(unc)} Hz, vacuum ${csvNumber(w.m)} m ± ${csvNumber(w.unc)} m (standard uncertainty shared by every frequency and wavelength cell)`]];
 }

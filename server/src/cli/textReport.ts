@@ -1,6 +1,6 @@
 /** The human-readable report printed by `sublevel eval`. */
 import { spectrumWidthsText } from '../eval/spectrumEvaluation';
-import { ATOMIC_MASS_UNIT, BOHR_RADIUS, SPEED_OF_LIGHT } from '../physics/constants';
+import { ATOMIC_MASS_UNIT, BOHR_RADIUS } from '../physics/constants';
 import { halfText } from '../eval/halves';
 import { curvatureText, fieldText, frequencyText, gradientText, lengthText, percentText, sensitivityText, speedText, trimNumber, withUncertainty } from '../eval/quantityText';
 import { beamPositionNoise, DIP_NOISE, SENSITIVITY_NOISE } from '../eval/noiseFloors';
@@ -22,6 +22,7 @@ import { table } from './table';
 import { fieldScopeLine } from '../eval/fieldScopeText';
 import { sourceHeadline, sourceLines } from '../eval/fieldSourceText';
 import { slowerReport } from '../eval/slowerText';
+import { vacuumWavelengthNmText } from '../eval/wavelengthText';
 import { trapReport } from './trapReport';
 
 export function textReport(file: string, r: EvaluationResult): string[] {
@@ -146,7 +147,7 @@ function lineReport(l: LineResult, atFieldText: AtFieldText, diagnostics: readon
   if (l.g_eff !== undefined) out.push(`  effective Landé factor g_eff = ${trimNumber(l.g_eff, 7)}`);
   if (l.line_centre_Hz !== undefined) {
     // A wavelength only for a positive frequency: a negative one means the levels are the other way round.
-    const wavelength = l.line_centre_Hz > 0 ? ` (vacuum wavelength ${trimNumber((SPEED_OF_LIGHT / l.line_centre_Hz) * 1e9, 9)} nm)` : '';
+    const wavelength = l.line_centre_Hz > 0 ? ` (vacuum wavelength ${vacuumWavelengthNmText(l.line_centre_Hz, l.line_centre_Hz_unc, 9)})` : '';
     out.push(`  line centre ${withUncertainty(l.line_centre_Hz, l.line_centre_Hz_unc, (v) => frequencyText(v, 13))}${wavelength}`);
   }
   const at = l.at_fields[0];

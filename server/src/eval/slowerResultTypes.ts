@@ -29,6 +29,7 @@ export interface SlowerResult {
   /** False when something the profile needs is missing; the diagnostics say what. */
   computed: boolean;
   wavelength_m?: number;
+  wavelength_m_unc?: number;
   lifetime_s?: number;
   lifetime_source?: string;
   /** Γ/2π = 1/(2πτ), Hz. */

@@ -1,5 +1,5 @@
 /** A slower's result in words and numbers, for the eval report, `sublevel slower` and the hover. */
-import { MISSING, frequencyText, lengthText, speedText, trimNumber } from './quantityText';
+import { MISSING, frequencyText, lengthText, speedText, trimNumber, withUncertainty } from './quantityText';
 import type { SlowerResult } from './slowerResultTypes';
 import { fieldInUnit } from './writtenUnit';
 
@@ -30,7 +30,7 @@ export function slowerReport(s: SlowerResult): string[] {
   }
   const f = fieldOf(s);
   const gammaMHz = s.natural_linewidth_Hz !== undefined ? frequencyText(s.natural_linewidth_Hz, 4) : '—';
-  out.push(`  line: λ = ${lengthText(s.wavelength_m, 9)} (vacuum), Γ/2π = ${gammaMHz} (τ = ${trimNumber((s.lifetime_s ?? NaN) * 1e9, 6)} ns) [${s.lifetime_source ?? '—'}]`);
+  out.push(`  line: λ = ${withUncertainty(s.wavelength_m, s.wavelength_m_unc, (v) => lengthText(v, 9))} (vacuum), Γ/2π = ${gammaMHz} (τ = ${trimNumber((s.lifetime_s ?? NaN) * 1e9, 6)} ns) [${s.lifetime_source ?? '—'}]`);
   if (s.driven_pair) {
     const p = s.driven_pair;
     out.push(`  driven pair: ${p.lower} → ${p.upper} by ${s.polarisation === 'sigma-' ? 'σ−' : 'σ+'} light (relative to the atoms' direction), ${p.cycling ? 'stretched: cycles' : 'NOT cycling'}; Zeeman shift ${frequencyText(p.rate_Hz_per_T * 1e-4, 6)}/G`);

@@ -21,6 +21,7 @@ import { lastStartingAtOrBefore } from './shared/locate';
 import { beamOfBlock, fieldOfBlock, levelOfNode, lineOfBlock, magnetOfBlock } from './shared/modelLookup';
 import { levelResult, termResult } from './shared/results';
 import { sourceSummary } from '../eval/fieldSourceText';
+import { vacuumWavelengthNmText } from '../eval/wavelengthText';
 
 function hint(position: Position, label: string, tooltip?: string): InlayHint {
   return { position, label, kind: InlayHintKind.Parameter, paddingLeft: true, ...(tooltip ? { tooltip } : {}) };
@@ -98,7 +99,7 @@ function blockHints(analysis: Analysis, model: SetupModel, block: BlockNode, out
         levelResult(analysis.result, line.upper.species.name, line.upper.name),
       );
       const parts = [
-        ...(f ? [`${frequencyText(f.hz, 7)}`, `λ_vac ${trimNumber(f.vacuumNm, 7)} nm`] : []),
+        ...(f ? [`${frequencyText(f.hz, 7)}`, `λ_vac ${vacuumWavelengthNmText(Math.abs(f.hz), f.unc, 7, true)}`] : []),
         ...(r?.g_eff !== undefined ? [`g_eff ${trimNumber(r.g_eff, 4)}`] : []),
       ];
       if (parts.length > 0) out.push(hint(block.link.to.range.end, parts.join(', '), 'line centre from the level energies; effective Landé factor of the line'));

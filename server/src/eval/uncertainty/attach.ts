@@ -11,10 +11,11 @@ import { fieldKey, setupInputs } from './inputs';
 import { levelUncertainty, termUncertainty } from './levelPass';
 import { lineUncertainty } from './linePass';
 import { resonanceUncertainty } from './resonancePass';
+import { slowerUncertainty } from './slowerPass';
 import { sourceGapProblems } from './sourceGaps';
 import { setUnc } from './uncField';
 
-type Parts = Pick<EvaluationResult, 'levels' | 'terms' | 'beams' | 'lines' | 'resonances' | 'fields' | 'magnets'>;
+type Parts = Pick<EvaluationResult, 'levels' | 'terms' | 'beams' | 'lines' | 'resonances' | 'fields' | 'magnets' | 'slowers'>;
 
 /** Mutates `parts`; returns the problems found (degenerate states, double roots, peaks without a slope) and the input list for the JSON. */
 export function attachUncertainty(model: SetupModel, parts: Parts, gJOf: GJLookup): { problems: Problem[]; inputs: EvaluationResult['uncertainty_inputs'] } {
@@ -41,6 +42,10 @@ export function attachUncertainty(model: SetupModel, parts: Parts, gJOf: GJLooku
   parts.resonances.forEach((r, i) => {
     const m = model.resonances[i];
     if (m && m.name === r.name) resonanceUncertainty(r, m, model.settings, gJOf, inp, problems);
+  });
+  parts.slowers?.forEach((r, i) => {
+    const s = model.slowers[i];
+    if (s && s.name === r.name) slowerUncertainty(r, s, inp);
   });
   for (const f of parts.fields) setUnc(f, 'field_T', inp.fieldSens.get(fieldKey({ kind: 'field', name: f.name })), inp.table);
   for (const m of parts.magnets) {

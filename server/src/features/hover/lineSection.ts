@@ -6,9 +6,9 @@
 import type { EvaluationResult, LevelResult, LineResult } from '../../eval/resultTypes';
 import { frequencyText, trimNumber, withUncertainty } from '../../eval/quantityText';
 import { polarizationSymbol } from '../../eval/polarizationName';
+import { vacuumWavelengthNmText } from '../../eval/wavelengthText';
 import { fieldInUnit, workingFieldUnit } from '../../eval/writtenUnit';
 import type { LineModel } from '../../model/types';
-import { SPEED_OF_LIGHT } from '../../physics/constants';
 import { md, mdTable, mdTitle } from '../shared/markdown';
 import { sameFieldGroups, sourcesText } from './sameField';
 import { levelResult } from '../shared/results';
@@ -22,16 +22,21 @@ function levelLine(role: string, name: string | undefined, r: LevelResult | unde
   return `${role}: ${md(r.level)} — ${md(shown)} (J = ${r.J_text}${parity}), g_J = ${trimNumber(r.g_J.used, 6)}`;
 }
 
-/** The line frequency and vacuum wavelength: from the evaluation's line centre, else from the two level energies. */
+/**
+ * The line frequency and its standard uncertainty when an uncertain energy reaches it: from the
+ * evaluation's line centre, else from the two level energies (the wavelength: eval/wavelengthText.ts).
+ */
 export function lineFrequency(
   line: LineResult | undefined,
   lower: LevelResult | undefined,
   upper: LevelResult | undefined,
-): { hz: number; vacuumNm: number } | undefined {
+): { hz: number; unc?: number } | undefined {
   const fromLevels = lower?.energy_Hz && upper?.energy_Hz ? Math.abs(upper.energy_Hz.value - lower.energy_Hz.value) : undefined;
   const hz = line?.line_centre_Hz ?? fromLevels;
   if (hz === undefined || !(Math.abs(hz) > 0)) return undefined;
-  return { hz, vacuumNm: (SPEED_OF_LIGHT / Math.abs(hz)) * 1e9 };
+  // Without the evaluation's propagated value, the two energies' uncertainties taken as independent.
+  const unc = line?.line_centre_Hz !== undefined ? line.line_centre_Hz_unc : Math.hypot(lower?.energy_Hz?.uncertainty ?? 0, upper?.energy_Hz?.uncertainty ?? 0) || undefined;
+  return { hz, ...(unc !== undefined ? { unc } : {}) };
 }
 
 /** Which labels the table uses, said only when they are not the low-field ones everywhere. */
@@ -69,7 +74,7 @@ export function lineSection(line: LineModel, result: EvaluationResult | undefine
   // The answer first: where the line is, then how it is made.
   const f = lineFrequency(r, lower, upper);
   const title = `${mdTitle(`line ${md(line.name)}`)}${species ? ` in ${md(species)}` : ''}`;
-  const lines = [f ? `${title} — ν = ${frequencyText(f.hz, 9)}, vacuum wavelength ${trimNumber(f.vacuumNm, 8)} nm` : title];
+  const lines = [f ? `${title} — ν = ${withUncertainty(f.hz, f.unc, (v) => frequencyText(v, 9))}, vacuum wavelength ${vacuumWavelengthNmText(Math.abs(f.hz), f.unc, 8)}` : title];
   lines.push(levelLine('lower', line.lower?.name, lower), levelLine('upper', line.upper?.name, upper));
   if (lower && upper) {
     const dTwoJ = Math.round(2 * upper.J) - Math.round(2 * lower.J);

@@ -3,7 +3,7 @@
  * clock (3P0) and intercombination (3P1) levels; 87Sr also its metastable 3P2.
  */
 import { derivedNuclearG, energy, GROUND_ENERGY, mhz, sourced } from './build-helpers';
-import { SR87_CLOCK, SR88_INTERCOMBINATION } from './measurements';
+import { SR87_CLOCK, SR88_INTERCOMBINATION, SR_CLOCK_ISOTOPE_SHIFT } from './measurements';
 import {
   CHEMLIN_SR87,
   CHEMLIN_YB171_SPIN,
@@ -15,10 +15,19 @@ import {
 } from './sources';
 import type { BuiltinSpecies } from './types';
 
-// 88Sr 1S0–3P1 frequency (10 kHz); the 87Sr level uses it too (the ~−60 MHz isotope shift is not applied).
+// 88Sr 1S0–3P1 frequency (10 kHz).
 const SR_3P1_KHZ = 434829121311;
-/** Why ⁸⁷Sr 3P1 carries 100 MHz: the ⁸⁸Sr value stands in for it, and the isotope shift (tens of MHz) is not applied. */
-const SR87_3P1_SHIFT_NOT_APPLIED = 'derived: bounds the ⁸⁷Sr − ⁸⁸Sr isotope shift of the line, not applied (tens of MHz)';
+/**
+ * ⁸⁷Sr 1S0–3P1 (hyperfine centroid): the ⁸⁸Sr line minus the ⁸⁸Sr − ⁸⁷Sr isotope shift of the clock line, 62 188.134004 kHz.
+ * No readable page prints the 689 nm line's own shift; both lines go from 5s² to the same 5s5p ³P term, so their mass and
+ * field shifts differ only through the J-dependence of the ³P wavefunction. Rounded to the Hz, the sum's last digit.
+ */
+const SR87_3P1_KHZ = Math.round((SR_3P1_KHZ - 62188.134004) * 1e3) / 1e3;
+/** Bounds the difference between the 689 nm and clock-line isotope shifts; the ⁸⁸Sr line's 10 kHz is far below it. */
+const SR87_3P1_SHIFT_BOUND_KHZ = 1000;
+const SR87_3P1_SHIFT_BOUND =
+  'from memory: the 689 nm and 698 nm lines\' ⁸⁸Sr − ⁸⁷Sr isotope shifts agree to far better than 1 MHz (same 5s² → 5s5p ³P term); ' +
+  'the measured shifts themselves carry 10 kHz and 10 mHz';
 const CIPM_2009 = 'CIPM Recommendation 2 (2009), recommended standard frequencies';
 const SR87_3P1_MEMORY = FROM_MEMORY;
 const TAU_SR_3P1 = sourced(21.28e-6, FROM_MEMORY);
@@ -45,9 +54,14 @@ export const STRONTIUM_87: BuiltinSpecies = {
       designation: '5s 5p 3P°1',
       A: mhz(-260.084, SR87_3P1_MEMORY),
       B: mhz(-35.658, SR87_3P1_MEMORY),
-      // The ⁸⁸Sr frequency without the isotope shift (tens of MHz, recalled as about −60 MHz): its 10 kHz measurement
-      // uncertainty does not apply here; the stored 100 MHz says how far off the value may be, so no reader takes it for kHz-exact.
-      ...energy(SR_3P1_KHZ, 'kHz', `${SR88_INTERCOMBINATION}; the ⁸⁸Sr value, used for ⁸⁷Sr without its isotope shift`, 1e5, SR87_3P1_SHIFT_NOT_APPLIED),
+      // The ⁸⁸Sr line shifted by the clock line's isotope shift; the stored 1 MHz bounds how far the 689 nm line's own shift may differ.
+      ...energy(
+        SR87_3P1_KHZ,
+        'kHz',
+        `derived: ⁸⁸Sr 1S0–3P1 minus the clock line's ⁸⁸Sr − ⁸⁷Sr isotope shift; ${SR88_INTERCOMBINATION}; ${SR_CLOCK_ISOTOPE_SHIFT}`,
+        SR87_3P1_SHIFT_BOUND_KHZ,
+        SR87_3P1_SHIFT_BOUND,
+      ),
       lifetimeS: TAU_SR_3P1,
     },
     {
@@ -58,7 +72,7 @@ export const STRONTIUM_87: BuiltinSpecies = {
       ...energy(14898.545, 'cm-1', NIST_ASD_MEMORY),
     },
   ],
-  notes: 'Clock isotope with I = 9/2; the 1S0 ground level has only the nuclear Zeeman effect. The 3P1 energy is the 88Sr value (the ~−60 MHz isotope shift is not applied).',
+  notes: 'Clock isotope with I = 9/2; the 1S0 ground level has only the nuclear Zeeman effect. The 3P1 energy is the 88Sr value minus the clock line\'s 62.188 MHz isotope shift (±1 MHz for the difference between the two lines\' shifts).',
 };
 
 export const STRONTIUM_88: BuiltinSpecies = {

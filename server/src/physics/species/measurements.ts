@@ -38,6 +38,10 @@ export const LI_FINE_STRUCTURE_REVIEW =
 
 export const SR88_INTERCOMBINATION = 'Phys. Rev. Lett. 91, 243002 (2003), abstract: ⁸⁸Sr 1S0–3P1 434 829 121 311(10) kHz';
 
+/** The clock line's isotope shift; the table takes it for the 689 nm line too (docs/species-data.md). */
+export const SR_CLOCK_ISOTOPE_SHIFT =
+  'arXiv:1706.02905 (2017), abstract (tomesphere): ⁸⁸Sr − ⁸⁷Sr isotope shift of the 1S0–3P0 clock line 62 188 134.004(10) Hz';
+
 export const SR87_CLOCK = 'arXiv:2008.00723 (2020), abstract: ⁸⁷Sr 1S0–3P0 429 228 004 229 873.082(76) Hz';
 
 export const CS_D1_1999 = 'Phys. Rev. Lett. 82, 3568 (1999), abstract: D1 hyperfine centroid 335 116 048 807(41) kHz';

@@ -1,0 +1,32 @@
+/**
+ * A vacuum wavelength computed from a line frequency, printed with the frequency's uncertainty
+ * carried over: λ = c/ν, u(λ) = λ·u(ν)/ν (first order; the next term is u(ν)/ν smaller, far
+ * below the two digits printed). One place for it, so the text report, hovers and inlay hints
+ * never print a wavelength to more digits than the energies behind it support.
+ */
+import { SPEED_OF_LIGHT } from '../physics/constants';
+import { MISSING, trimNumber, withUncertainty } from './quantityText';
+
+/** λ in m and its standard uncertainty (undefined when the frequency has none) for a frequency ν > 0. */
+export function vacuumWavelengthOf(hz: number, hzUnc?: number): { m: number; unc?: number } | undefined {
+  if (!(hz > 0) || !Number.isFinite(hz)) return undefined;
+  const m = SPEED_OF_LIGHT / hz;
+  return hzUnc !== undefined && hzUnc > 0 && Number.isFinite(hzUnc) ? { m, unc: (m * hzUnc) / hz } : { m };
+}
+
+/**
+ * "689.4489954(16) nm": the wavelength in nm with `digits` significant digits, or rounded to the
+ * uncertainty's two digits in concise notation when there is one. `compact` (inlay hints) keeps
+ * the short form while the uncertainty is below half its last digit, and shows the uncertainty
+ * only when it reaches the digits printed.
+ */
+export function vacuumWavelengthNmText(hz: number, hzUnc: number | undefined, digits: number, compact = false): string {
+  const w = vacuumWavelengthOf(hz, hzUnc);
+  if (!w) return MISSING;
+  const nm = w.m * 1e9;
+  const plain = (v: number): string => `${trimNumber(v, digits)} nm`;
+  if (w.unc === undefined) return plain(nm);
+  const uNm = w.unc * 1e9;
+  if (compact && uNm < 0.5 * 10 ** (Math.floor(Math.log10(nm)) + 1 - digits)) return plain(nm);
+  return withUncertainty(nm, uNm, plain);
+}
