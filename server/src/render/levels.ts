@@ -13,7 +13,6 @@ import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
 import { BOHR_MAGNETON } from '../physics/constants';
 import { bottomAxis, leftAxis, type PlotBox, type Scale } from './axes';
-import { levelBands } from './levelBands';
 import { bandAxes, bandNote, placeBands, wrapNote, type PlacedBand } from './levelBandAxis';
 import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
 import { laneHeightFor, placeLabels, truncateLabel, type LabelAnchor, type PlacedLabel } from './labelLayout';
@@ -102,8 +101,8 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const markRows = layoutMarkRows(marks, AXIS_X + 180, width0 - 180, narrow);
   const rowCount = Math.max(1, ...markRows.map((r) => r + 1));
   const top = legendTop + legendSvg.height + 6 + rowCount * MARK_ROW;
-  // Manifolds far apart compared with their fans get bands of their own (a broken axis), unless the caller fixed the unit.
-  const bandList = d.energyUnitHz === undefined ? levelBands(d.curves, fields.length) : [];
+  // Manifolds far apart compared with their fans get bands of their own (a broken axis, from the view), unless the caller fixed the unit.
+  const bandList = d.energyUnitHz === undefined ? (d.bands ?? []) : [];
   const bands = bandList.length >= 2 ? placeBands(bandList, top, 480 - 56 - top, LABEL_SPACING).placed : undefined;
   // Tall enough that every state could have its own name in each lane.
   const plotHeight = bands ? bands[bands.length - 1]!.bottom - top : Math.max(480 - 56 - top, laneHeightFor(d.curves.length, LABEL_SPACING) + 8);
@@ -113,7 +112,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const bandOf: (PlacedBand | undefined)[] = d.curves.map((_, i) => bands?.find((b) => b.band.curves.includes(i)));
   const yOf = (i: number): Scale => bandOf[i]?.y ?? y;
 
-  const rightName = (c: LevelCurve): string => (d.endsWeak ? c.lowLabel : c.highLabel);
+  const rightName = (c: LevelCurve): string => (d.rightNames === 'low' ? c.lowLabel : c.highLabel);
   const endAnchors = (side: 'low' | 'high'): LabelAnchor[] =>
     d.curves.map((c, index) => {
       const n = Math.min(fields.length, c.energyHz.length);
@@ -268,16 +267,8 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
     );
   body.push(labelGroup(lowLabels, 'low'), labelGroup(highLabels, 'high'));
 
-  // Crossings: in the band of their states (manifolds that meet share a band); else where their energy lies.
-  const holds = (b: PlacedBand, e: number): boolean => {
-    const [lo, hi] = b.y.domain() as [number, number];
-    return e >= lo && e <= hi;
-  };
-  const crossingY = (c: LevelCrossing): number => {
-    const i = d.curves.findIndex((k) => k.lowLabel === c.a);
-    const scale = i >= 0 ? yOf(i) : (bands?.find((b) => holds(b, c.energyHz))?.y ?? y);
-    return scale(c.energyHz);
-  };
+  // Crossings: on the scale of their states' band (manifolds that meet share a band).
+  const crossingY = (c: LevelCrossing): number => yOf(c.curveA)(c.energyHz);
   if (crossings.length > 0) {
     body.push(
       el(

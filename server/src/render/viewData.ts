@@ -5,6 +5,7 @@
  */
 
 import type { FieldUnit } from './fieldUnits';
+import type { LevelBand } from './levelBands';
 /** Units a field axis reads in (the one list: fieldUnits.ts). */
 export type { FieldUnit };
 
@@ -26,16 +27,15 @@ export interface LevelCurve {
   energyHz: ArrayLike<number>;
   /** Magnetic moment −∂E/∂B in J/T at each entry of `fieldsT`, when known. */
   momentJT?: ArrayLike<number>;
-  /**
-   * The manifold the state belongs to at low field ("F=2", "J=3/2, F=3", "J=3/2"). When every
-   * curve has one, manifolds far apart compared with their spread get bands of their own (levelBands.ts).
-   */
-  manifold?: string;
 }
 
 export interface LevelCrossing {
   fieldT: number;
   energyHz: number;
+  /** Indices into `curves` of the two states that cross (the diamond sits on their energy scale). */
+  curveA: number;
+  curveB: number;
+  /** Their names, for the crossing's title and data attributes. */
   a: string;
   b: string;
 }
@@ -57,10 +57,26 @@ export interface LevelsViewData {
   fieldMarks?: NamedFieldMark[];
   crossings?: LevelCrossing[];
   /**
-   * The sweep ends in the weak-field (linear) regime: the states there are still |F, m_F⟩, so the
-   * right lane names them by their low-field labels rather than by where they go at high field.
+   * The energy bands of a broken axis, low to high (levelBands.ts, worked out once by the view).
+   * Fewer than two, or absent: one energy axis.
    */
-  endsWeak?: boolean;
+  bands?: LevelBand[];
+  /**
+   * Which name the right lane gives each state: 'high' (where it goes in the strong field, m_J, m_I)
+   * or 'low' (the name it has at low field, F, m_F, followed along the curve). Absent: 'high'.
+   */
+  rightNames?: 'low' | 'high';
+  /**
+   * The label lanes' headers, which say the basis each lane names (`|F, m_F⟩ at B → 0`), with a
+   * sentence for their tooltips (why the right lane names what it names). Absent: no headers.
+   */
+  laneHeads?: { low: LaneHead; high: LaneHead };
+}
+
+/** A label lane's header: a short basis name over the lane and a sentence saying why. */
+export interface LaneHead {
+  text: string;
+  why: string;
 }
 
 export interface PatternPart {
