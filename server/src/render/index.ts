@@ -4,7 +4,7 @@ export type {
   NamedFieldMark,
   LevelCrossing,
   LevelCurve,
-  LaneHead,
+  LevelLanes,
   LevelsViewData,
   LineComponent,
   LinesViewData,

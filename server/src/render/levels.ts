@@ -15,6 +15,7 @@ import { BOHR_MAGNETON } from '../physics/constants';
 import { bottomAxis, leftAxis, type PlotBox, type Scale } from './axes';
 import { bandAxes, bandNote, placeBands, wrapNote, type PlacedBand } from './levelBandAxis';
 import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
+import { laneHeadText, laneHeadWhy, rightNamesHigh } from './levelLanes';
 import { laneHeightFor, placeLabels, truncateLabel, type LabelAnchor, type PlacedLabel } from './labelLayout';
 import { fieldMarksIn, layoutMarkRows, MARK_ROW } from './fieldMarks';
 import { axisOffset } from './offsetAxis';
@@ -44,9 +45,11 @@ function stateName(c: LevelCurve): string {
   return c.lowLabel === c.highLabel ? c.lowLabel : `${c.lowLabel} → ${c.highLabel}`;
 }
 
-function laneWidth(labels: PlacedLabel[]): number {
+/** Wide enough for the lane's labels and its header (which may reach 4 px past the lane's outer end). */
+function laneWidth(labels: PlacedLabel[], head: string | undefined): number {
   const widest = Math.max(0, ...labels.map((l) => estimateTextWidth(truncateLabel(l.text, LABEL_MAX_CHARS))));
-  return Math.min(181, Math.max(48, widest + 26));
+  const headWidth = head !== undefined ? estimateTextWidth(head) + 16 : 0;
+  return Math.min(181, Math.max(48, widest + 26, headWidth));
 }
 
 export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
@@ -112,7 +115,8 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const bandOf: (PlacedBand | undefined)[] = d.curves.map((_, i) => bands?.find((b) => b.band.curves.includes(i)));
   const yOf = (i: number): Scale => bandOf[i]?.y ?? y;
 
-  const rightName = (c: LevelCurve): string => (d.rightNames === 'low' ? c.lowLabel : c.highLabel);
+  const rightHigh = rightNamesHigh(d.lanes);
+  const rightName = (c: LevelCurve): string => (rightHigh ? c.highLabel : c.lowLabel);
   const endAnchors = (side: 'low' | 'high'): LabelAnchor[] =>
     d.curves.map((c, index) => {
       const n = Math.min(fields.length, c.energyHz.length);
@@ -132,8 +136,9 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
       : placeLabels(anchors, box.top + 4, box.bottom - 2, LABEL_SPACING, LABEL_MAX_CHARS);
   const lowLabels = lane(endAnchors('low'));
   const highLabels = lane(endAnchors('high'));
-  const leftLane = laneWidth(lowLabels);
-  const rightLane = laneWidth(highLabels);
+  const heads = d.lanes ? { low: laneHeadText(d.lanes, 'low'), high: laneHeadText(d.lanes, 'high') } : undefined;
+  const leftLane = laneWidth(lowLabels, heads?.low);
+  const rightLane = laneWidth(highLabels, heads?.high);
   const width = Math.max(width0, AXIS_X + leftLane + MIN_PLOT_WIDTH + rightLane + 12);
   box.left = AXIS_X + leftLane;
   box.right = width - 12 - rightLane;
@@ -245,7 +250,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
             'data-members': l.members.map((m) => d.curves[m.index].id).join(' '),
           },
           [
-            titleEl(`${side === 'low' ? 'Low-field' : 'High-field'} name: ${names.join(', ')}`),
+            titleEl(`${side === 'low' || !rightHigh ? 'Low-field' : 'High-field'} name: ${names.join(', ')}`),
             el('path', { class: 'sl-leader', d: leader, fill: 'none', stroke: pal.muted, 'stroke-width': 0.8 }),
             el(
               'text',
@@ -266,6 +271,16 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
       }),
     );
   body.push(labelGroup(lowLabels, 'low'), labelGroup(highLabels, 'high'));
+  // Each lane's header says which basis its names belong to (the right one changes with the range).
+  if (d.lanes && heads) {
+    const lanes = d.lanes;
+    const head = (side: 'low' | 'high'): string =>
+      el('g', { class: 'sl-lane-head', 'data-side': side }, [
+        titleEl(laneHeadWhy(lanes, side, fUnit)),
+        el('text', { x: side === 'low' ? box.left - 12 : box.right + 12, y: box.top - 8, 'text-anchor': side === 'low' ? 'end' : 'start', 'font-size': 11, fill: pal.muted }, text(heads[side])),
+      ]);
+    body.push(el('g', { class: 'sl-lane-heads', 'data-ends': lanes.ends }, [head('low'), head('high')]));
+  }
 
   // Crossings: on the scale of their states' band (manifolds that meet share a band).
   const crossingY = (c: LevelCrossing): number => yOf(c.curveA)(c.energyHz);
@@ -369,6 +384,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const outside = (d.fieldMarks ?? []).filter((m) => !inSweep(m.fieldT));
   if (outside.length > 0) descParts.push(`outside the sweep: ${outside.map((m) => `${m.label} ${m.valueText !== undefined ? figureMinus(m.valueText) : formatIn(m.fieldT, fUnit)}`).join(', ')}`);
   if (note !== undefined) descParts.push(note.replace(/\.$/, ''));
+  if (d.lanes) descParts.push(`states named on the left by ${laneHeadText(d.lanes, 'low')}, on the right by ${laneHeadText(d.lanes, 'high')}`);
 
   return svgDocument(
     {

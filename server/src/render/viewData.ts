@@ -62,21 +62,20 @@ export interface LevelsViewData {
    */
   bands?: LevelBand[];
   /**
-   * Which name the right lane gives each state: 'high' (where it goes in the strong field, m_J, m_I)
-   * or 'low' (the name it has at low field, F, m_F, followed along the curve). Absent: 'high'.
+   * What the label lanes name: `low` and `high` are the bases of the low- and high-field names
+   * ("F, m_F" and "m_J, m_I"); `ends` is the regime where the range ends (the engine's regime
+   * limits), `strongLimitT` the field from which it is strong, when known. The right lane gives the
+   * high-field name only when the range reaches the strong field; else the low-field name, followed
+   * along the curve. Each lane's header says which. Absent: high-field names, no headers.
    */
-  rightNames?: 'low' | 'high';
-  /**
-   * The label lanes' headers, which say the basis each lane names (`|F, m_F⟩ at B → 0`), with a
-   * sentence for their tooltips (why the right lane names what it names). Absent: no headers.
-   */
-  laneHeads?: { low: LaneHead; high: LaneHead };
+  lanes?: LevelLanes;
 }
 
-/** A label lane's header: a short basis name over the lane and a sentence saying why. */
-export interface LaneHead {
-  text: string;
-  why: string;
+export interface LevelLanes {
+  low: string;
+  high: string;
+  ends: 'weak' | 'intermediate' | 'strong';
+  strongLimitT?: number;
 }
 
 export interface PatternPart {
