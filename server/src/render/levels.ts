@@ -7,7 +7,9 @@
  * the figure grows taller for distinct ends, and a crowded lane names coinciding ends once
  * (placeLabels). Energies far from zero count from an offset (offsetAxis.ts). Manifolds far apart
  * compared with their fans (a magnetometer's µT) get stacked bands, each on its own offset axis
- * (levelBands.ts, levelBandAxis.ts), so the fans are not flat lines on a GHz axis.
+ * (worked out by the view with levelBands.ts; drawn with levelBandAxis.ts), so the fans are not
+ * flat lines on a GHz axis. The right lane names the strong-field basis only when the range
+ * reaches the strong field, and each lane's header says which basis it names (levelLanes.ts).
  */
 import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
