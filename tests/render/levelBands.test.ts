@@ -5,14 +5,15 @@
  */
 import { describe, expect, it } from 'vitest';
 import { BAND_GAP_RATIO, levelBands, MAX_BANDS } from '../../server/src/render/levelBands';
-import { renderLevels, type LevelsViewData } from '../../server/src/render';
+import { renderLevels, type LevelCurve, type LevelsViewData } from '../../server/src/render';
 import { manifoldOf } from '../../server/src/views/levelsView';
+import { fLabel, jfLabel, jLabel } from '../../server/src/physics/engine/labelText';
 import { all, axisMap, byClass, parseSvg, pathPoints, textOf } from './svgTree';
 
 const FIELDS = [0, 0.5, 1];
 
 /** A manifold of 2F+1 straight lines from `centre`, fanning out to ±spread/2 at the last field. */
-function fan(name: string, twoF: number, centre: number, spread: number): LevelsViewData['curves'] {
+function fan(name: string, twoF: number, centre: number, spread: number): (LevelCurve & { manifold: string })[] {
   return Array.from({ length: twoF + 1 }, (_, k) => {
     const m = k - twoF / 2;
     const slope = twoF > 0 ? (m / twoF) * spread : 0;
@@ -21,7 +22,7 @@ function fan(name: string, twoF: number, centre: number, spread: number): Levels
 }
 
 /** F=1 over [−0.5, 0.5] MHz and F=2 (spread 2 MHz) starting `gapRatio` × 2 MHz above it. */
-const two = (gapRatio: number): LevelsViewData['curves'] => [...fan('F=1', 2, 0, 1e6), ...fan('F=2', 4, 0.5e6 + gapRatio * 2e6 + 1e6, 2e6)];
+const two = (gapRatio: number): (LevelCurve & { manifold: string })[] => [...fan('F=1', 2, 0, 1e6), ...fan('F=2', 4, 0.5e6 + gapRatio * 2e6 + 1e6, 2e6)];
 
 describe('levelBands: when the axis breaks', () => {
   it('keeps one band while the gap is under 4× the larger spread', () => {
@@ -74,7 +75,8 @@ describe('levelBands: when the axis breaks', () => {
 });
 
 describe('renderLevels on both sides of the rule', () => {
-  const data = (gapRatio: number): LevelsViewData => ({ title: 'invented fans', fieldUnit: 'T', fieldsT: FIELDS, curves: two(gapRatio) });
+  // The view works the bands out once and its data carries them (views/levelsView.ts).
+  const data = (gapRatio: number): LevelsViewData => ({ title: 'invented fans', fieldUnit: 'T', fieldsT: FIELDS, curves: two(gapRatio), bands: levelBands(two(gapRatio), FIELDS.length) });
 
   it('draws one axis at 3.9 spreads and two bands, with a note, at 4.1', () => {
     const one = parseSvg(renderLevels(data(3.9), { kind: 'export' }));
@@ -89,11 +91,13 @@ describe('renderLevels on both sides of the rule', () => {
     // F=1 and F=2 overlap (their fans cross); F=3 lies 500 MHz above: two bands.
     const curves = [...fan('F=1', 2, 0, 4e6), ...fan('F=2', 4, 1e6, 4e6), ...fan('F=3', 6, 500e6, 4e6)];
     // F=1, m_F=1 (0 → 2 MHz at 1 T) meets F=2, m_F=-1 (1 → 0 MHz) at B = 1/3 T, E = 2/3 MHz.
-    const crossing = { fieldT: 1 / 3, energyHz: 2e6 / 3, a: 'F=1, m_F=1', b: 'F=2, m_F=-1' };
-    const svg = parseSvg(renderLevels({ title: 'crossing', fieldUnit: 'T', fieldsT: FIELDS, curves, crossings: [crossing] }, { kind: 'export' }));
-    const bands = byClass(svg, 'sl-band');
-    expect(bands.map((b) => b.attrs['data-label'])).toEqual(['F=3', 'F=1 + F=2']);
-    const lower = bands[1]!;
+    const crossing = { fieldT: 1 / 3, energyHz: 2e6 / 3, curveA: 2, curveB: 4, a: 'F=1, m_F=1', b: 'F=2, m_F=-1' };
+    expect([curves[2]!.lowLabel, curves[4]!.lowLabel]).toEqual([crossing.a, crossing.b]);
+    const bands = levelBands(curves, FIELDS.length);
+    const svg = parseSvg(renderLevels({ title: 'crossing', fieldUnit: 'T', fieldsT: FIELDS, curves, crossings: [crossing], bands }, { kind: 'export' }));
+    const drawn = byClass(svg, 'sl-band');
+    expect(drawn.map((b) => b.attrs['data-label'])).toEqual(['F=3', 'F=1 + F=2']);
+    const lower = drawn[1]!;
     const title = textOf(byClass(lower, 'sl-band-title')[0]!);
     expect(title).toBe('F=1 + F=2: E/h (MHz)');
     const diamond = all(svg, (n) => n.attrs['data-kind'] === 'crossing')[0]!;
@@ -102,20 +106,22 @@ describe('renderLevels on both sides of the rule', () => {
     expect(Math.abs(top.x - axisMap(svg, 'sl-axis-x')(1 / 3))).toBeLessThan(0.05);
   });
 
-  it('draws data without manifold names exactly as before (one axis)', () => {
-    const plain = data(100);
-    const unnamed = { ...plain, curves: plain.curves.map(({ manifold: _m, ...c }) => c) };
-    expect(parseSvg(renderLevels(unnamed, { kind: 'export' })).attrs['data-y-bands']).toBeUndefined();
+  it('draws data without bands on one axis, and never works bands out itself', () => {
+    const { bands: _b, ...plain } = data(100);
+    expect(data(100).bands).toHaveLength(2);
+    expect(parseSvg(renderLevels(plain, { kind: 'export' })).attrs['data-y-bands']).toBeUndefined();
   });
 });
 
-describe('manifoldOf', () => {
+describe('manifoldOf: from the state’s quantum numbers, not its label text', () => {
   it.each([
-    ['F=2, m_F=+1', 'F=2'],
-    ['J=3/2, F=3, m_F=-1/2', 'J=3/2, F=3'],
-    ['J=3/2, m_J=+1/2', 'J=3/2'],
-    ['J=3/2, m_J=+1/2, m_I=-3/2', 'J=3/2'],
-  ])('%s → %s', (label, want) => {
-    expect(manifoldOf(label)).toBe(want);
+    [fLabel(4, 2), false, 'F=2'],
+    [jfLabel(3, 6, -1), false, 'J=3/2, F=3'],
+    [jLabel(3, 1, null), false, 'J=3/2'],
+    [jLabel(3, 1, -3), false, 'J=3/2'],
+    // Without a nucleus F is J (the label reads "J=3/2, m_J=+1/2").
+    [fLabel(3, 1, true), true, 'J=3/2'],
+  ] as const)('%o → %s', (label, noNucleus, want) => {
+    expect(manifoldOf(label, noNucleus)).toBe(want);
   });
 });

@@ -156,13 +156,15 @@ describe.each([
 });
 
 describe('a strong-field figure is drawn as before', () => {
-  it('Rb87 to 0.73 T (Paschen–Back at the top): one axis, the same bytes as without manifold names', () => {
+  it('Rb87 to 0.73 T (Paschen–Back at the top): one band, drawn in the same bytes as no bands', () => {
     const analysis = analyze('species Rb87\n  level ground: 5s 2S1/2\nfield magnet = 0.5 T\n');
     const level = analysis.model!.species[0]!.levels[0]!;
     const v = levelsView(level, gJLookup(analysis.result!.levels)(level), analysis.model!.settings, workingFields(analysis.model!)[0])!;
     // The curves cross between F manifolds (F=2, m_F=−1 meets F=1 states): one band, the single axis.
     const named = renderLevels(v.data, { kind: 'export' });
-    const unnamed = renderLevels({ ...v.data, curves: v.data.curves.map(({ manifold: _m, ...c }) => c) }, { kind: 'export' });
+    expect(v.data.bands?.map((b) => b.names)).toEqual([['F=1', 'F=2']]);
+    const { bands: _b, ...unbanded } = v.data;
+    const unnamed = renderLevels(unbanded, { kind: 'export' });
     expect(named).toBe(unnamed);
     const svg = parseSvg(named);
     expect(svg.attrs['data-y-bands']).toBeUndefined();

@@ -4,6 +4,7 @@ export type {
   NamedFieldMark,
   LevelCrossing,
   LevelCurve,
+  LevelLanes,
   LevelsViewData,
   LineComponent,
   LinesViewData,
@@ -15,6 +16,7 @@ export type {
   RenderTheme,
 } from './viewData';
 export { renderLevels } from './levels';
+export { levelBands, type LevelBand } from './levelBands';
 export { renderPattern } from './pattern';
 export { renderLines } from './lines';
 export { renderResonance } from './resonance';

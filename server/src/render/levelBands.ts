@@ -13,7 +13,11 @@
  * break the axis; one band is the plain single axis (strong fields, Paschen–Back, where the
  * fans span the gaps).
  */
-import type { LevelCurve } from './viewData';
+/** What the rule reads of a curve: its manifold at low field ("F=2", "J=3/2, F=3", "J=3/2") and its energies. */
+export interface BandCurve {
+  manifold?: string;
+  energyHz: ArrayLike<number>;
+}
 
 /**
  * A gap of more than 4× the larger spread breaks the axis (our own display rule): on one axis two
@@ -49,7 +53,7 @@ function gapRatio(a: LevelBand, b: LevelBand): number {
 }
 
 /** The manifolds of the curves with their energy intervals over the first `samples` samples; undefined when a curve has no manifold or no finite energy. */
-function manifolds(curves: readonly LevelCurve[], samples: number): LevelBand[] | undefined {
+function manifolds(curves: readonly BandCurve[], samples: number): LevelBand[] | undefined {
   const byName = new Map<string, LevelBand>();
   for (let i = 0; i < curves.length; i++) {
     const c = curves[i]!;
@@ -71,9 +75,10 @@ function manifolds(curves: readonly LevelCurve[], samples: number): LevelBand[] 
 
 /**
  * The bands from low to high energy: two or more when the axis breaks, else one (or none, when the
- * curves carry no manifold names or no spread: nothing to magnify).
+ * curves carry no manifold names or no spread: nothing to magnify). The level view works them out
+ * once and its data carries them; the renderer only draws them.
  */
-export function levelBands(curves: readonly LevelCurve[], samples: number): LevelBand[] {
+export function levelBands(curves: readonly BandCurve[], samples: number): LevelBand[] {
   const found = manifolds(curves, samples);
   if (!found || found.length === 0) return [];
   if (!found.some((b) => spread(b) > 0)) return [];

@@ -7,15 +7,17 @@
  * the figure grows taller for distinct ends, and a crowded lane names coinciding ends once
  * (placeLabels). Energies far from zero count from an offset (offsetAxis.ts). Manifolds far apart
  * compared with their fans (a magnetometer's µT) get stacked bands, each on its own offset axis
- * (levelBands.ts, levelBandAxis.ts), so the fans are not flat lines on a GHz axis.
+ * (worked out by the view with levelBands.ts; drawn with levelBandAxis.ts), so the fans are not
+ * flat lines on a GHz axis. The right lane names the strong-field basis only when the range
+ * reaches the strong field, and each lane's header says which basis it names (levelLanes.ts).
  */
 import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
 import { BOHR_MAGNETON } from '../physics/constants';
 import { bottomAxis, leftAxis, type PlotBox, type Scale } from './axes';
-import { levelBands } from './levelBands';
 import { bandAxes, bandNote, placeBands, wrapNote, type PlacedBand } from './levelBandAxis';
 import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
+import { laneHeadText, laneHeadWhy, rightNamesHigh } from './levelLanes';
 import { laneHeightFor, placeLabels, truncateLabel, type LabelAnchor, type PlacedLabel } from './labelLayout';
 import { fieldMarksIn, layoutMarkRows, MARK_ROW } from './fieldMarks';
 import { axisOffset } from './offsetAxis';
@@ -45,9 +47,11 @@ function stateName(c: LevelCurve): string {
   return c.lowLabel === c.highLabel ? c.lowLabel : `${c.lowLabel} → ${c.highLabel}`;
 }
 
-function laneWidth(labels: PlacedLabel[]): number {
+/** Wide enough for the lane's labels and its header (which may reach 4 px past the lane's outer end). */
+function laneWidth(labels: PlacedLabel[], head: string | undefined): number {
   const widest = Math.max(0, ...labels.map((l) => estimateTextWidth(truncateLabel(l.text, LABEL_MAX_CHARS))));
-  return Math.min(181, Math.max(48, widest + 26));
+  const headWidth = head !== undefined ? estimateTextWidth(head) + 16 : 0;
+  return Math.min(181, Math.max(48, widest + 26, headWidth));
 }
 
 export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
@@ -102,8 +106,8 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const markRows = layoutMarkRows(marks, AXIS_X + 180, width0 - 180, narrow);
   const rowCount = Math.max(1, ...markRows.map((r) => r + 1));
   const top = legendTop + legendSvg.height + 6 + rowCount * MARK_ROW;
-  // Manifolds far apart compared with their fans get bands of their own (a broken axis), unless the caller fixed the unit.
-  const bandList = d.energyUnitHz === undefined ? levelBands(d.curves, fields.length) : [];
+  // Manifolds far apart compared with their fans get bands of their own (a broken axis, from the view), unless the caller fixed the unit.
+  const bandList = d.energyUnitHz === undefined ? (d.bands ?? []) : [];
   const bands = bandList.length >= 2 ? placeBands(bandList, top, 480 - 56 - top, LABEL_SPACING).placed : undefined;
   // Tall enough that every state could have its own name in each lane.
   const plotHeight = bands ? bands[bands.length - 1]!.bottom - top : Math.max(480 - 56 - top, laneHeightFor(d.curves.length, LABEL_SPACING) + 8);
@@ -113,7 +117,8 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const bandOf: (PlacedBand | undefined)[] = d.curves.map((_, i) => bands?.find((b) => b.band.curves.includes(i)));
   const yOf = (i: number): Scale => bandOf[i]?.y ?? y;
 
-  const rightName = (c: LevelCurve): string => (d.endsWeak ? c.lowLabel : c.highLabel);
+  const rightHigh = rightNamesHigh(d.lanes);
+  const rightName = (c: LevelCurve): string => (rightHigh ? c.highLabel : c.lowLabel);
   const endAnchors = (side: 'low' | 'high'): LabelAnchor[] =>
     d.curves.map((c, index) => {
       const n = Math.min(fields.length, c.energyHz.length);
@@ -133,8 +138,9 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
       : placeLabels(anchors, box.top + 4, box.bottom - 2, LABEL_SPACING, LABEL_MAX_CHARS);
   const lowLabels = lane(endAnchors('low'));
   const highLabels = lane(endAnchors('high'));
-  const leftLane = laneWidth(lowLabels);
-  const rightLane = laneWidth(highLabels);
+  const heads = d.lanes ? { low: laneHeadText(d.lanes, 'low'), high: laneHeadText(d.lanes, 'high') } : undefined;
+  const leftLane = laneWidth(lowLabels, heads?.low);
+  const rightLane = laneWidth(highLabels, heads?.high);
   const width = Math.max(width0, AXIS_X + leftLane + MIN_PLOT_WIDTH + rightLane + 12);
   box.left = AXIS_X + leftLane;
   box.right = width - 12 - rightLane;
@@ -246,7 +252,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
             'data-members': l.members.map((m) => d.curves[m.index].id).join(' '),
           },
           [
-            titleEl(`${side === 'low' ? 'Low-field' : 'High-field'} name: ${names.join(', ')}`),
+            titleEl(`${side === 'low' || !rightHigh ? 'Low-field' : 'High-field'} name: ${names.join(', ')}`),
             el('path', { class: 'sl-leader', d: leader, fill: 'none', stroke: pal.muted, 'stroke-width': 0.8 }),
             el(
               'text',
@@ -267,17 +273,19 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
       }),
     );
   body.push(labelGroup(lowLabels, 'low'), labelGroup(highLabels, 'high'));
+  // Each lane's header says which basis its names belong to (the right one changes with the range).
+  if (d.lanes && heads) {
+    const lanes = d.lanes;
+    const head = (side: 'low' | 'high'): string =>
+      el('g', { class: 'sl-lane-head', 'data-side': side }, [
+        titleEl(laneHeadWhy(lanes, side, fUnit)),
+        el('text', { x: side === 'low' ? box.left - 12 : box.right + 12, y: box.top - 8, 'text-anchor': side === 'low' ? 'end' : 'start', 'font-size': 11, fill: pal.muted }, text(heads[side])),
+      ]);
+    body.push(el('g', { class: 'sl-lane-heads', 'data-ends': lanes.ends }, [head('low'), head('high')]));
+  }
 
-  // Crossings: in the band of their states (manifolds that meet share a band); else where their energy lies.
-  const holds = (b: PlacedBand, e: number): boolean => {
-    const [lo, hi] = b.y.domain() as [number, number];
-    return e >= lo && e <= hi;
-  };
-  const crossingY = (c: LevelCrossing): number => {
-    const i = d.curves.findIndex((k) => k.lowLabel === c.a);
-    const scale = i >= 0 ? yOf(i) : (bands?.find((b) => holds(b, c.energyHz))?.y ?? y);
-    return scale(c.energyHz);
-  };
+  // Crossings: on the scale of their states' band (manifolds that meet share a band).
+  const crossingY = (c: LevelCrossing): number => yOf(c.curveA)(c.energyHz);
   if (crossings.length > 0) {
     body.push(
       el(
@@ -378,6 +386,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const outside = (d.fieldMarks ?? []).filter((m) => !inSweep(m.fieldT));
   if (outside.length > 0) descParts.push(`outside the sweep: ${outside.map((m) => `${m.label} ${m.valueText !== undefined ? figureMinus(m.valueText) : formatIn(m.fieldT, fUnit)}`).join(', ')}`);
   if (note !== undefined) descParts.push(note.replace(/\.$/, ''));
+  if (d.lanes) descParts.push(`states named on the left by ${laneHeadText(d.lanes, 'low')}, on the right by ${laneHeadText(d.lanes, 'high')}`);
 
   return svgDocument(
     {

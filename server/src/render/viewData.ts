@@ -5,6 +5,7 @@
  */
 
 import type { FieldUnit } from './fieldUnits';
+import type { LevelBand } from './levelBands';
 /** Units a field axis reads in (the one list: fieldUnits.ts). */
 export type { FieldUnit };
 
@@ -26,16 +27,15 @@ export interface LevelCurve {
   energyHz: ArrayLike<number>;
   /** Magnetic moment −∂E/∂B in J/T at each entry of `fieldsT`, when known. */
   momentJT?: ArrayLike<number>;
-  /**
-   * The manifold the state belongs to at low field ("F=2", "J=3/2, F=3", "J=3/2"). When every
-   * curve has one, manifolds far apart compared with their spread get bands of their own (levelBands.ts).
-   */
-  manifold?: string;
 }
 
 export interface LevelCrossing {
   fieldT: number;
   energyHz: number;
+  /** Indices into `curves` of the two states that cross (the diamond sits on their energy scale). */
+  curveA: number;
+  curveB: number;
+  /** Their names, for the crossing's title and data attributes. */
   a: string;
   b: string;
 }
@@ -57,10 +57,25 @@ export interface LevelsViewData {
   fieldMarks?: NamedFieldMark[];
   crossings?: LevelCrossing[];
   /**
-   * The sweep ends in the weak-field (linear) regime: the states there are still |F, m_F⟩, so the
-   * right lane names them by their low-field labels rather than by where they go at high field.
+   * The energy bands of a broken axis, low to high (levelBands.ts, worked out once by the view).
+   * Fewer than two, or absent: one energy axis.
    */
-  endsWeak?: boolean;
+  bands?: LevelBand[];
+  /**
+   * What the label lanes name: `low` and `high` are the bases of the low- and high-field names
+   * ("F, m_F" and "m_J, m_I"); `ends` is the regime where the range ends (the engine's regime
+   * limits), `strongLimitT` the field from which it is strong, when known. The right lane gives the
+   * high-field name only when the range reaches the strong field; else the low-field name, followed
+   * along the curve. Each lane's header says which. Absent: high-field names, no headers.
+   */
+  lanes?: LevelLanes;
+}
+
+export interface LevelLanes {
+  low: string;
+  high: string;
+  ends: 'weak' | 'intermediate' | 'strong';
+  strongLimitT?: number;
 }
 
 export interface PatternPart {

@@ -6,12 +6,13 @@ import { levelDesignationText } from '../eval/designationText';
 import { inWrittenUnit, isGaussUnit } from '../eval/writtenUnit';
 import { displayUnit } from '../eval/unitSpelling';
 import { fieldDisplayUnit } from '../render/units';
-import { regime, sweepLevel, type LevelSpec, type SweepResult } from '../physics/engine';
+import { regime, sweepLevel, type HighFieldLabel, type LevelSpec, type LowFieldLabel, type RegimeResult, type SweepResult } from '../physics/engine';
+import { halfText } from '../physics/engine/halfIntegers';
 import { BOHR_MAGNETON_HZ_PER_T } from '../physics/constants';
 import type { LevelModel, SettingsModel } from '../model/types';
 import { engineSpec } from '../eval/levelSpec';
 import type { WorkingField } from '../eval/levelEvaluation';
-import type { FieldUnit, LevelsViewData, NamedFieldMark } from '../render';
+import { levelBands, type FieldUnit, type LevelLanes, type LevelsViewData, type NamedFieldMark } from '../render';
 
 export const LEVELS_VIEW_POINTS = 401;
 
@@ -71,6 +72,11 @@ export function levelsView(
   if (!(upper > lower)) return undefined;
   const sweep = sweepLevel(spec, lower, upper, LEVELS_VIEW_POINTS);
   if (sweep.issues.some((i) => i.severity === 'error')) return undefined;
+  const noNucleus = spec.kind === 'hyperfine' && spec.twoI === 0;
+  const bands = levelBands(
+    sweep.states.map((s) => ({ manifold: manifoldOf(s.low, noNucleus), energyHz: s.energyHz })),
+    sweep.fieldsT.length,
+  );
   const data: LevelsViewData = {
     title: `${level.species.name} ${level.name}: ${levelDesignationText(level)} — sublevel energies`,
     fieldUnit: options.fieldUnit ?? unitFor(upper, marker?.unit),
@@ -81,16 +87,18 @@ export function levelsView(
       highLabel: s.high.text,
       energyHz: s.energyHz,
       momentJT: s.momentJT,
-      manifold: manifoldOf(s.low.text),
     })),
-    // A range that ends in the weak regime (a magnetometer's µT) has no high-field names to give yet.
-    ...(regime(spec, upper).verdict === 'weak field (linear)' ? { endsWeak: true } : {}),
+    // A range that ends before the strong field (a magnetometer's µT, a bias of a few gauss) names its states by F, m_F on the right too.
+    ...(sweep.states.length > 0 ? { lanes: lanesAt(regime(spec, upper), sweep.states[0]!, noNucleus) } : {}),
     crossings: sweep.crossings.map((c) => ({
       fieldT: c.fieldT,
       energyHz: c.energyHz,
+      curveA: c.stateA,
+      curveB: c.stateB,
       a: sweep.states[c.stateA]!.low.text,
       b: sweep.states[c.stateB]!.low.text,
     })),
+    ...(bands.length > 0 ? { bands } : {}),
   };
   if (marker) {
     data.markerT = marker.tesla;
@@ -101,9 +109,35 @@ export function levelsView(
   return { data, sweep };
 }
 
-/** The low-field label without its magnetic quantum numbers: "J=3/2, F=2, m_F=+1" → "J=3/2, F=2". */
-export function manifoldOf(lowLabel: string): string {
-  return lowLabel.split(', ').filter((part) => !part.startsWith('m_')).join(', ');
+/**
+ * The manifold a state belongs to at low field, from its quantum numbers: "F=2", "J=3/2, F=2" (a
+ * whole term), "J=3/2" (fine structure, or a level without a nucleus, where F is J).
+ */
+export function manifoldOf(low: LowFieldLabel, noNucleus = false): string {
+  if (low.scheme === 'J') return `J=${halfText(low.twoJ)}`;
+  if (noNucleus) return `J=${halfText(low.twoF)}`;
+  return low.twoJ !== undefined ? `J=${halfText(low.twoJ)}, F=${halfText(low.twoF)}` : `F=${halfText(low.twoF)}`;
+}
+
+/** The bases the lanes name, and where the range ends relative to the change of regime (the engine's limits). */
+export function lanesAt(end: RegimeResult, state: { low: LowFieldLabel; high: HighFieldLabel }, noNucleus: boolean): LevelLanes {
+  const ends = end.verdict === 'weak field (linear)' ? 'weak' : end.verdict === 'intermediate' ? 'intermediate' : 'strong';
+  // The strong limit is already known unless the range ends weak (regime.ts searches it only when asked).
+  const limit = ends === 'weak' ? Number.NaN : end.strongLimitT;
+  return { low: lowBasis(state.low, noNucleus), high: highBasis(state.high, noNucleus), ends, ...(Number.isFinite(limit) && limit > 0 ? { strongLimitT: limit } : {}) };
+}
+
+/** The quantum numbers of a low-field name: "F, m_F", "J, F, m_F" (a whole term), "J, m_J" (no nucleus), "J, m_J, m_I". */
+function lowBasis(low: LowFieldLabel, noNucleus: boolean): string {
+  if (low.scheme === 'J') return low.twoMI === null ? 'J, m_J' : 'J, m_J, m_I';
+  if (noNucleus) return 'J, m_J';
+  return low.twoJ !== undefined ? 'J, F, m_F' : 'F, m_F';
+}
+
+/** The quantum numbers of a high-field name: "m_J, m_I", "m_J" (no nucleus), "m_L, m_S" (and m_I). */
+function highBasis(high: HighFieldLabel, noNucleus: boolean): string {
+  if (high.scheme === 'mJ,mI') return noNucleus ? 'm_J' : 'm_J, m_I';
+  return high.twoMI === null ? 'm_L, m_S' : 'm_L, m_S, m_I';
 }
 
 /** The field as the file wrote it (`1 nT`), or undefined when the file gave no unit to echo. */

@@ -1,0 +1,36 @@
+/**
+ * What the level diagram's label lanes name, and the headers that say so. The left lane names each
+ * state as it is at low field (|F, m_F⟩). The right lane names it by the uncoupled state it goes to
+ * (|m_J, m_I⟩) only when the range reaches the strong field; a range that ends before the change of
+ * regime is complete (weak or intermediate field) keeps the low-field names, followed along each
+ * curve, since that is how a reader names those states there.
+ */
+import { formatIn, formatSI, type DisplayUnit } from './units';
+import type { LevelLanes } from './viewData';
+
+/** True when the right lane gives the high-field names (also when the view said nothing: the older default). */
+export function rightNamesHigh(lanes: LevelLanes | undefined): boolean {
+  return lanes === undefined || lanes.ends === 'strong';
+}
+
+/** The header over a lane: its basis as a ket, and the field it belongs to. */
+export function laneHeadText(lanes: LevelLanes, side: 'low' | 'high'): string {
+  if (side === 'low') return `|${lanes.low}⟩ (low field)`;
+  if (lanes.ends === 'strong') return `|${lanes.high}⟩ (strong field)`;
+  return `|${lanes.low}⟩ (${lanes.ends === 'weak' ? 'low field' : 'from low field'})`;
+}
+
+/** The header's tooltip: why the lane names what it names. */
+export function laneHeadWhy(lanes: LevelLanes, side: 'low' | 'high', unit: DisplayUnit): string {
+  const limit = lanes.strongLimitT !== undefined && Number.isFinite(lanes.strongLimitT) && lanes.strongLimitT > 0 ? ` (from ${fieldText(lanes.strongLimitT, unit)})` : '';
+  if (side === 'low') return `Each state by its name at low field, in the coupled basis |${lanes.low}⟩.`;
+  if (lanes.ends === 'strong') return `The range reaches the strong field${limit}: each state by the uncoupled state |${lanes.high}⟩ it goes to.`;
+  if (lanes.ends === 'weak') return `The range ends in the low (linear) field: the states are still |${lanes.low}⟩.`;
+  return `The range ends in the intermediate field, before the strong field${limit}: each state keeps its low-field name |${lanes.low}⟩, followed along its curve.`;
+}
+
+/** A field in the axis unit when it reads 0.1–1000 there, else in tesla with the prefix that suits it (6.091 T, not 60910 G). */
+function fieldText(fieldT: number, unit: DisplayUnit): string {
+  const inUnit = fieldT / unit.factor;
+  return inUnit >= 0.1 && inUnit < 1000 ? formatIn(fieldT, unit) : formatSI(fieldT, 'T');
+}
