@@ -1,7 +1,8 @@
 /**
  * What the level diagram's right label lane names, on both sides of the change of regime: the
- * uncoupled names m_J, m_I only when the range reaches the engine's strong-field limit, else the
- * low-field names F, m_F followed along each curve; each lane's header says which basis it names.
+ * uncoupled names m_J, m_I when the range ends past the change of regime (x ≥ 1) or in the strong
+ * field, else the low-field names F, m_F followed along each curve; each lane's header says which
+ * basis it names.
  * Setups are invented for the test (built-in Rb87 and Cs133 data; a made-up species, demo numbers).
  */
 import { describe, expect, it } from 'vitest';
@@ -55,17 +56,29 @@ describe('the right lane on both sides of the strong-field limit (Rb87 ground)',
     expect(textOf(headOf(svg, 'high').children[0]!)).toContain('reaches the strong field (from 6.09');
   });
 
-  it('one part in a thousand short of it is intermediate: F, m_F names, followed from low field', () => {
+  it('one part in a thousand short of it is past the change of regime: still m_J, m_I, header says mostly', () => {
     const { v, svg } = viewOf(RB, limit * 0.999);
-    expect(v.data.lanes!.ends).toBe('intermediate');
-    expect(new Set(rightTexts(svg))).toEqual(new Set(v.data.curves.map((c) => c.lowLabel)));
-    expect(rightTexts(svg)).toContain('F=2, m_F=+2');
-    expect(headText(svg, 'high')).toBe('|F, m_F⟩ (from low field)');
-    expect(headText(svg, 'low')).toBe('|F, m_F⟩ (low field)');
-    expect(textOf(all(headOf(svg, 'high'), (n) => n.name === 'title')[0]!)).toContain('keeps its low-field name |F, m_F⟩');
-    // The tooltip of a right-lane name no longer calls it a high-field name.
-    const title = textOf(byClass(byClass(svg, 'sl-end-high')[0]!, 'sl-end-label')[0]!.children[0]!);
+    expect(v.data.lanes!.ends).toBe('uncoupling');
+    expect(rightTexts(svg)).toContain('m_J=+1/2, m_I=+3/2');
+    expect(headText(svg, 'high')).toBe('|m_J, m_I⟩ (mostly)');
+    expect(textOf(all(headOf(svg, 'high'), (n) => n.name === 'title')[0]!)).toMatch(/past the change of regime \(x = 2[45]\), short of the strong field \(from 6\.09/);
+  });
+
+  // x = 1 at ΔE_hfs/((g_J − g_I) μ_B) ≈ 0.2438 T (6.834682611 GHz, g_J 2.00233113, g_I 0.000995; CODATA μ_B; from memory).
+  it('both sides of x = 1: F, m_F just below, m_J, m_I just above', () => {
+    const below = viewOf(RB, 0.2438 * 0.98);
+    expect(below.v.data.lanes!.ends).toBe('intermediate');
+    expect(new Set(rightTexts(below.svg))).toEqual(new Set(below.v.data.curves.map((c) => c.lowLabel)));
+    expect(rightTexts(below.svg)).toContain('F=2, m_F=+2');
+    expect(headText(below.svg, 'high')).toBe('|F, m_F⟩ (from low field)');
+    expect(headText(below.svg, 'low')).toBe('|F, m_F⟩ (low field)');
+    expect(textOf(all(headOf(below.svg, 'high'), (n) => n.name === 'title')[0]!)).toContain('keeps its low-field name |F, m_F⟩');
+    // The tooltip of a right-lane name does not call it a high-field name.
+    const title = textOf(byClass(byClass(below.svg, 'sl-end-high')[0]!, 'sl-end-label')[0]!.children[0]!);
     expect(title).toMatch(/^Low-field name: F=/);
+    const above = viewOf(RB, 0.2438 * 1.02);
+    expect(above.v.data.lanes!.ends).toBe('uncoupling');
+    expect(new Set(rightTexts(above.svg))).toEqual(new Set(above.v.data.curves.map((c) => c.highLabel)));
   });
 
   it('below the linear limit the range ends weak: low-field names on both sides', () => {

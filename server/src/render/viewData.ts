@@ -74,8 +74,11 @@ export interface LevelsViewData {
 export interface LevelLanes {
   low: string;
   high: string;
-  ends: 'weak' | 'intermediate' | 'strong';
+  /** Where the range ends: 'uncoupling' is the intermediate field past the change of regime (x ≥ 1). */
+  ends: 'weak' | 'intermediate' | 'uncoupling' | 'strong';
   strongLimitT?: number;
+  /** The regime number x at the range's end, when the range ends past the change of regime but short of the strong field. */
+  endX?: number;
 }
 
 export interface PatternPart {

@@ -121,10 +121,17 @@ export function manifoldOf(low: LowFieldLabel, noNucleus = false): string {
 
 /** The bases the lanes name, and where the range ends relative to the change of regime (the engine's limits). */
 export function lanesAt(end: RegimeResult, state: { low: LowFieldLabel; high: HighFieldLabel }, noNucleus: boolean): LevelLanes {
-  const ends = end.verdict === 'weak field (linear)' ? 'weak' : end.verdict === 'intermediate' ? 'intermediate' : 'strong';
+  // Past the change of regime (x ≥ 1) each state is mostly its uncoupled state, which names it better than F, m_F.
+  const ends = end.verdict === 'weak field (linear)' ? 'weak' : end.verdict !== 'intermediate' ? 'strong' : end.x >= 1 ? 'uncoupling' : 'intermediate';
   // The strong limit is already known unless the range ends weak (regime.ts searches it only when asked).
   const limit = ends === 'weak' ? Number.NaN : end.strongLimitT;
-  return { low: lowBasis(state.low, noNucleus), high: highBasis(state.high, noNucleus), ends, ...(Number.isFinite(limit) && limit > 0 ? { strongLimitT: limit } : {}) };
+  return {
+    low: lowBasis(state.low, noNucleus),
+    high: highBasis(state.high, noNucleus),
+    ends,
+    ...(Number.isFinite(limit) && limit > 0 ? { strongLimitT: limit } : {}),
+    ...(ends === 'uncoupling' && Number.isFinite(end.x) ? { endX: end.x } : {}),
+  };
 }
 
 /** The quantum numbers of a low-field name: "F, m_F", "J, F, m_F" (a whole term), "J, m_J" (no nucleus), "J, m_J, m_I". */
