@@ -148,6 +148,12 @@ const CASES: Case[] = [
     has: ['gradient — field gradient across the beam'],
   },
   {
+    name: 'a setting key whose description carries an example: the example is marked as one, not read as the file\'s value',
+    text: 'species K39\n  level g: 4s 2S1/2\n  level p: 4p 2P°1/2\nline D1: g -> p\n  spectrum = across\n  dop|pler = 330 K\n',
+    has: ['Doppler width from a gas temperature (e.g. 310 K)'],
+    hasNot: ['temperature (310 K)'],
+  },
+  {
     name: 'block word: what the block is for',
     text: 'mag|net m\n',
     has: ['magnet — a state-selecting magnet'],
