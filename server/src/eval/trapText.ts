@@ -103,6 +103,19 @@ export function trappedSublevelNotes(t: TrapResult): string[] {
   return out;
 }
 
+/** The inlay hint after the trap's header: how many sublevels it holds and the span of their depths. */
+export function trapHint(t: TrapResult): string | undefined {
+  if (!t.computed) return undefined;
+  const held = t.sublevels.filter((s) => s.trapped);
+  if (held.length === 0) return 'holds no sublevel';
+  const depths = held.map((s) => s.depth_K).filter((d): d is number => d !== undefined && Number.isFinite(d));
+  const count = `holds ${held.length} sublevel${held.length === 1 ? '' : 's'}`;
+  if (depths.length === 0) return count;
+  const lo = Math.min(...depths);
+  const hi = Math.max(...depths);
+  return `${count}, depth ${temperatureText(lo)}${hi > lo ? ` … ${temperatureText(hi)}` : ''}`;
+}
+
 /** Said when a trapped sublevel's depth is below 5 × the cloud temperature. */
 export function shallowDepthNote(t: TrapResult): string | undefined {
   if (t.temperature_K === undefined || !t.sublevels.some((s) => s.trapped && s.depth_K !== undefined && s.depth_K < 5 * t.temperature_K!)) return undefined;
