@@ -135,3 +135,22 @@ describe('where a source is probed', () => {
     expect(sourceLines(r)).toEqual(['not computed: the block has problems to fix (see diagnostics)']);
   });
 });
+
+describe('a magnetised block at its centre', () => {
+  // A cuboid's field is even in each coordinate about its centre, so every first derivative
+  // vanishes there (symmetry of the uniformly magnetised block; standard magnetostatics). The
+  // closed form sums corner terms that cancel, leaving ~1e-14 T/m of rounding at some centres.
+  const block = (centre: Vec3): SourceEvalInput => ({
+    name: 'lower', kind: 'slab', nameRange: RANGE,
+    parts: [{ kind: 'slab', centre, sizeM: [0.05, 0.02, 0.006], magnetisationT: [0, 0, 1.25] }],
+  });
+
+  it.each([[[0, 0, -0.009]], [[0, 0, 0.005]], [[0.013, -0.07, 0.031]]] as [Vec3][])('at %j the gradient is exactly 0 and no gradient line is printed', (centre) => {
+    const r = evaluateFieldSource(block(centre), sumField, []);
+    expect(r.gradient_T_per_m!.flat().every((g) => g === 0)).toBe(true);
+    expect(sourceLines(r).some((l) => l.includes('gradient'))).toBe(false);
+    // The field itself is along the magnetisation (z) only: B_x = B_y = 0 exactly.
+    expect(r.field_T![0]).toBe(0);
+    expect(r.field_T![1]).toBe(0);
+  });
+});

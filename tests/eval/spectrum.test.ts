@@ -243,3 +243,26 @@ line bad: ground -> Na23.na_p
     expect(r.problems.some((p) => p.code === 'spectrum-undersampled')).toBe(false);
   });
 });
+
+describe('the highest point of a spectrum', () => {
+  // ³⁹K D1 at 50 G seen across the field in a 330 K cell: 38 components under one 815 MHz Doppler
+  // profile; the samples are 5.22 MHz apart. Checked in a walk-through with NumPy (the two levels
+  // diagonalised in the |m_J, m_I⟩ basis, SymPy Clebsch–Gordan strengths) and SciPy (wofz sum,
+  // minimize_scalar): the maximum is at −44.4759 MHz; the highest sample, at −43.4893 MHz, is not it.
+  const at = run(`species K39
+  level ground: 4s 2S1/2
+  level p12:    4p 2P°1/2
+field bias = 50 G
+line D1: ground -> p12
+  spectrum   = across
+  doppler    = 330 K
+  instrument = 1 MHz
+`).result.lines[0]!.at_fields[0]!;
+
+  it('is refined between the samples, not the highest sample', () => {
+    const s = at.spectrum!;
+    expect(s.peak_offset_Hz / 1e6).toBeCloseTo(-44.4759, 3);
+    const { intensity } = spectrumSamples(s, at.components);
+    expect(s.peak_per_Hz).toBeGreaterThanOrEqual(Math.max(...intensity));
+  });
+});

@@ -82,6 +82,14 @@ describe('trap from an anti-Helmholtz pair', () => {
     expect(codes).toContain('value-out-of-range');
   });
 
+  it('a temperature unit typed in the wrong case gets its did-you-mean and fix: 2 mk as a cut, 200 uk as a temperature', () => {
+    const problems = analyze(`${PAIR('20 A')}trap q\n  sources = quad\n  level = ground\n  cut = 2 mk\n  temperature = 200 uk\n`).problems.filter((p) => p.code === 'unit-unknown');
+    expect(problems.map((p) => [p.message, p.data?.suggestions])).toEqual([
+      ["cut needs an energy written as a temperature (e.g. 1 mK) or a frequency (e.g. 20 MHz); unknown unit 'mk' — did you mean 'mK'?", ['mK']],
+      ["unknown unit 'uk' — did you mean 'uK'?", ['uK']],
+    ]);
+  });
+
   it('writes round-off of the searches as 0: the zero of the field is at the origin with |B| = 0', () => {
     const s = t.sublevels.find((x) => x.label === 'F=2, m_F=+2')!;
     expect(s.minimum_m).toEqual([0, 0, 0]);

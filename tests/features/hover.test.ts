@@ -148,6 +148,12 @@ const CASES: Case[] = [
     has: ['gradient — field gradient across the beam'],
   },
   {
+    name: 'a setting key whose description carries an example: the example is marked as one, not read as the file\'s value',
+    text: 'species K39\n  level g: 4s 2S1/2\n  level p: 4p 2P°1/2\nline D1: g -> p\n  spectrum = across\n  dop|pler = 330 K\n',
+    has: ['Doppler width from a gas temperature (e.g. 310 K)'],
+    hasNot: ['temperature (310 K)'],
+  },
+  {
     name: 'block word: what the block is for',
     text: 'mag|net m\n',
     has: ['magnet — a state-selecting magnet'],
@@ -157,6 +163,14 @@ const CASES: Case[] = [
     // A 1000 A-turn anti-Helmholtz pair (R = 4 cm at ±4 cm): 41.7 G/cm on the axis, holds ⁸⁷Rb |2,+2⟩ (needs 15.3 G/cm).
     text: 'species Rb87\n  level ground: 5s 2S1/2\ncoil quad\n  radius = 4 cm\n  turns = 100\n  current = 10 A\n  spacing = 8 cm\n  sense = opposite\ntrap q|t\n  sources = quad\n  level = ground\n',
     has: ['trap qt — Rb87.ground; sources quad', 'trapped: |F=1, m_F=-1⟩, |F=2, m_F=+1⟩, |F=2, m_F=+2⟩', '|F=2, m_F=-2⟩ | not low-field seeking', 'linear (no harmonic frequency)', '15.27 G/cm'],
+    hasNot: ['NaN', 'undefined'],
+  },
+  {
+    name: 'trap name with a temperature and a cut: the RF cut, the Majorana estimate and the safety cautions (docs/traps.md)',
+    // The same pair at 20 A: 83.3 G/cm on the axis. The RF cut of |2,+2⟩ at 2 mK: the linear rule
+    // ν = cut/(m_F h) = k_B·2 mK/(2h) = 20.84 MHz (CODATA k_B and h; exact SI constants).
+    text: 'species Rb87\n  level ground: 5s 2S1/2\ncoil quad\n  radius = 4 cm\n  turns = 100\n  current = 20 A\n  spacing = 8 cm\n  sense = opposite\ntrap q|t\n  sources = quad\n  level = ground\n  temperature = 200 uK\n  cut = 2 mK\n',
+    has: ['|F=2, m_F=+2⟩: |B| at the minimum 0 T', 'linear rule 20.83662 MHz', 'Majorana loss ≈', '⚠ Trap coils dissipate power and heat up', "follow your lab's safety rules"],
     hasNot: ['NaN', 'undefined'],
   },
 ];

@@ -69,3 +69,29 @@ describe('inlay hints', () => {
     expect(inlayHints(analysisOf('species Na23\n  level x: 3p 2P°5/2\n'), ALL)).toEqual([]);
   });
 });
+
+describe('inlay hints of hardware blocks', () => {
+  it('after a trap header: how many sublevels it holds and their depths (docs/traps.md)', () => {
+    // An anti-Helmholtz pair R = 5 cm at ±5 cm, 120 turns, 30 A: 95.97 G/cm on the axis (closed form
+    // 3 μ0 N I R² d/(R² + d²)^{5/2}). Depths checked with SciPy: elliptic-integral loop fields, Breit–Rabi
+    // energies, rays over the region of 6.364 cm: |1,−1⟩ 4.7835 mK, |2,+1⟩ 5.4083 mK, |2,+2⟩ 10.846 mK.
+    const text = 'species Rb87\n  level ground: 5s 2S1/2\ncoil qp\n  radius = 5 cm\n  turns = 120\n  current = 30 A\n  spacing = 10 cm\n  sense = opposite\ntrap qt\n  sources = qp\n  level = ground\n';
+    const hints = inlayHints(analysisOf(text), ALL).filter((h) => h.position.line === 8).map((h) => String(h.label));
+    expect(hints).toEqual(['holds 3 sublevels, depth 4.784 mK … 10.85 mK']);
+  });
+
+  it('after a trap that holds nothing: says so', () => {
+    const text = 'species Rb87\n  level ground: 5s 2S1/2\ncoil qp\n  radius = 5 cm\n  turns = 20\n  current = 5 A\n  spacing = 10 cm\n  sense = opposite\ntrap qt\n  sources = qp\n  level = ground\n';
+    const hints = inlayHints(analysisOf(text), ALL).filter((h) => h.position.line === 8).map((h) => String(h.label));
+    expect(hints).toEqual(['holds no sublevel']);
+  });
+
+  it('after a slower header: its length, field span and laser detuning (docs/slower.md)', () => {
+    // Li7 D2: a_max = ħkΓ/2m = 1.5638e6 m/s² (λ = 670.9616 nm, τ = 27.102 ns), η = 0.5:
+    // L = (800² − 60²)/(2 η a_max) = 40.70 cm; ΔB = v0/(λ μ'/h) = 850.74 G with μ'/h = 1.40151 MHz/G;
+    // B_bias = −ΔB vf/v0 = −63.81 G, so 786.93 G at the entrance; δ = (μ'/h) B_bias = −89.42 MHz.
+    const text = 'species Li7\n  level ground: 2s 2S1/2\n  level p32: 2p 2P°3/2\nline D2: ground -> p32\nslower li\n  line = D2\n  capture = 800 m/s\n  final = 60 m/s\n  safety = 0.5\n  saturation = 3\n';
+    const hints = inlayHints(analysisOf(text), ALL).filter((h) => h.position.line === 4).map((h) => String(h.label));
+    expect(hints).toEqual(['40.7 cm, 786.93 G → 0 G, laser -89.424 MHz']);
+  });
+});

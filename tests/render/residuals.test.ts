@@ -86,3 +86,29 @@ describe('residuals figure', () => {
     expect(parseSvg(renderResiduals(data([0, 0.01, 1]), theme)).attrs['data-x-scale']).toBe('linear');
   });
 });
+
+describe('the residual panel reads as σ', () => {
+  function yTicks(svg: string): number[] {
+    const root = parseSvg(svg);
+    const axes = all(root, (n) => n.attrs.class?.includes('sl-axis-y') === true);
+    return all(axes[axes.length - 1]!, (n) => n.attrs['data-tick'] !== undefined).map((n) => Number(n.attrs['data-tick']!.replace('−', '-')));
+  }
+  // A profile scan whose normalised residuals reach about ±3.5 (invented numbers).
+  const scan = (worst: number): ResidualsViewData => {
+    const x = Array.from({ length: 41 }, (_, i) => (i - 20) * 1e-4);
+    const model = x.map((p) => 100 + 1000 * Math.exp(-((p / 5e-4) ** 2)));
+    const z = x.map((_, i) => (i === 7 ? worst : i === 30 ? -worst : ((i * 37) % 11) / 5 - 1));
+    return { title: 'scan', xKind: 'position', x, model, sigma: model.map((m) => Math.sqrt(m)), measured: model.map((m, i) => m + z[i]! * Math.sqrt(m)), unit: 'counts', modelLine: true };
+  };
+
+  it.each([3.5, 1.2])('labels the ±2 σ bands it draws (worst residual %s σ)', (worst) => {
+    const ticks = yTicks(renderResiduals(scan(worst), theme));
+    expect(ticks).toEqual(expect.arrayContaining([-2, 0, 2]));
+  });
+
+  it('labels a panel that reaches 20 σ with more than one tick', () => {
+    const ticks = yTicks(renderResiduals(scan(20), theme));
+    expect(ticks.length).toBeGreaterThanOrEqual(3);
+    expect(Math.max(...ticks)).toBeGreaterThanOrEqual(10);
+  });
+});

@@ -22,6 +22,13 @@ export function slowerSummary(s: SlowerResult): string {
   return `${DESIGN_WORDS[s.design]} slower, ${lengthText(s.length_m)} long, B from ${f(s.entry_field_T)} to ${f(s.exit_field_T)}, laser ${frequencyText(s.detuning_Hz, 5)} from the line`;
 }
 
+/** The inlay hint after the slower's header: length, field from entrance to exit, detuning. */
+export function slowerHint(s: SlowerResult): string | undefined {
+  if (!s.computed) return undefined;
+  const f = fieldOf(s);
+  return `${lengthText(s.length_m)}, ${f(s.entry_field_T)} → ${f(s.exit_field_T)}, laser ${frequencyText(s.detuning_Hz, 5)}`;
+}
+
 export function slowerReport(s: SlowerResult): string[] {
   const out = [`slower ${s.name}${s.line ? ` on line ${s.line}` : ''} (${DESIGN_WORDS[s.design]})`];
   if (!s.computed) {

@@ -7,7 +7,7 @@
 import type { Problem, Range } from '../format/ast';
 import { SPECTRUM_POINTS_DEFAULT, SPECTRUM_POINTS_MAX } from '../model/limits';
 import type { BeamModel, LineModel, SpectrumRequest } from '../model/types';
-import { analyserProblem } from '../physics/lineshape';
+import { analyserProblem, spectrumPeak } from '../physics/lineshape';
 import { dopplerPart } from './spectrumDoppler';
 import { EVAL_RULES } from './evalCodes';
 import type { LineResult, SpectrumResult } from './resultTypes';
@@ -86,7 +86,12 @@ export function addSpectra(line: LineModel, result: LineResult, problems: Proble
     const samples = spectrumSamples({ ...partial, peak_offset_Hz: 0, peak_per_Hz: 0 }, f.components);
     let k = 0;
     for (let i = 1; i < samples.intensity.length; i++) if (samples.intensity[i]! > samples.intensity[k]!) k = i;
-    return { ...f, spectrum: { ...partial, peak_offset_Hz: samples.offsetHz[k]!, peak_per_Hz: samples.intensity[k]! } };
+    // The highest sample only brackets the peak (samples are up to half a line width apart): refine it.
+    const last = samples.offsetHz.length - 1;
+    const peak = last > 0 && widths.sigmaHz + widths.gammaHz > 0
+      ? spectrumPeak(f.components.map((c, j) => ({ frequencyHz: c.offset_Hz, weight: weights[j] ?? 0 })), widths.sigmaHz, widths.gammaHz, samples.offsetHz[Math.max(0, k - 1)]!, samples.offsetHz[Math.min(last, k + 1)]!)
+      : { offsetHz: samples.offsetHz[k]!, perHz: samples.intensity[k]! };
+    return { ...f, spectrum: { ...partial, peak_offset_Hz: peak.offsetHz, peak_per_Hz: peak.perHz } };
   });
   return { ...result, at_fields: atFields };
 }

@@ -83,3 +83,47 @@ export function trapSummaryLines(t: TrapResult): string[] {
   out.push(held.length > 0 ? `trapped: ${held.join(', ')}` : 'trapped: none');
   return out;
 }
+
+/**
+ * One line per trapped sublevel with what the table has no column for: |B| at the minimum, the
+ * turning field, Larmor frequency, cloud sizes, the RF cut and the Majorana estimate.
+ */
+export function trappedSublevelNotes(t: TrapResult): string[] {
+  const out: string[] = [];
+  for (const s of t.sublevels.filter((x) => x.trapped)) {
+    const notes: string[] = [];
+    if (s.field_at_minimum_T !== undefined) notes.push(`|B| at the minimum ${fieldText(s.field_at_minimum_T, 5, { scale: t.field_max_T ?? 0, relative: 1e-6 })}`);
+    if (s.turning_field_T !== undefined) notes.push(`turns high-field seeking at ${fieldText(s.turning_field_T, 5)}`);
+    if (s.larmor_Hz !== undefined) notes.push(`Larmor ${frequencyText(s.larmor_Hz, 4)}`);
+    if (s.cloud_sizes_m) notes.push(`cloud 1/e sizes ${s.cloud_sizes_m.map((x) => lengthText(x, 3)).join(', ')}`);
+    if (s.rf_cut) notes.push(`RF cut ${frequencyText(s.rf_cut.frequency_Hz, 7)} to |${s.rf_cut.to}⟩ at ${fieldText(s.rf_cut.field_T, 5)} (linear rule ${frequencyText(s.rf_cut.linear_Hz, 7)})`);
+    if (s.majorana) notes.push(`Majorana loss ≈ ${trimNumber(s.majorana.rate_per_s, 2)} /s (lifetime ${lifetime(s.majorana.rate_per_s)})`);
+    if (notes.length > 0) out.push(`|${s.label}⟩: ${notes.join('; ')}`);
+  }
+  return out;
+}
+
+/** The inlay hint after the trap's header: how many sublevels it holds and the span of their depths. */
+export function trapHint(t: TrapResult): string | undefined {
+  if (!t.computed) return undefined;
+  const held = t.sublevels.filter((s) => s.trapped);
+  if (held.length === 0) return 'holds no sublevel';
+  const depths = held.map((s) => s.depth_K).filter((d): d is number => d !== undefined && Number.isFinite(d));
+  const count = `holds ${held.length} sublevel${held.length === 1 ? '' : 's'}`;
+  if (depths.length === 0) return count;
+  const lo = Math.min(...depths);
+  const hi = Math.max(...depths);
+  return `${count}, depth ${temperatureText(lo)}${hi > lo ? ` … ${temperatureText(hi)}` : ''}`;
+}
+
+/** Said when a trapped sublevel's depth is below 5 × the cloud temperature. */
+export function shallowDepthNote(t: TrapResult): string | undefined {
+  if (t.temperature_K === undefined || !t.sublevels.some((s) => s.trapped && s.depth_K !== undefined && s.depth_K < 5 * t.temperature_K!)) return undefined;
+  return `some depths are below 5 × the cloud temperature ${temperatureText(t.temperature_K)}: the hottest atoms leave (common practice: depth ≳ 5–10 k_B T)`;
+}
+
+function lifetime(rate: number): string {
+  if (!(rate > 0) || !Number.isFinite(rate)) return MISSING;
+  const s = 1 / rate;
+  return s >= 3600 ? `${trimNumber(s / 3600, 2)} h` : s >= 1 ? `${trimNumber(s, 2)} s` : `${trimNumber(s * 1e3, 2)} ms`;
+}

@@ -22,6 +22,8 @@ import { beamOfBlock, fieldOfBlock, levelOfNode, lineOfBlock, magnetOfBlock } fr
 import { levelResult, termResult } from './shared/results';
 import { sourceSummary } from '../eval/fieldSourceText';
 import { vacuumWavelengthNmText } from '../eval/wavelengthText';
+import { slowerHint } from '../eval/slowerText';
+import { trapHint } from '../eval/trapText';
 
 function hint(position: Position, label: string, tooltip?: string): InlayHint {
   return { position, label, kind: InlayHintKind.Parameter, paddingLeft: true, ...(tooltip ? { tooltip } : {}) };
@@ -123,6 +125,18 @@ function blockHints(analysis: Analysis, model: SetupModel, block: BlockNode, out
         const summary = f.points.some((p) => p.data === name) ? fitSummary(f) : undefined;
         if (summary && block.name) out.push(hint(block.headerRange.end, `${f.name}: ${summary}`, `fit '${f.name}' of this data`));
       }
+      break;
+    }
+    case 'trap': {
+      const t = block.name && analysis.result?.traps?.find((x) => x.name === block.name!.text);
+      const label = t && trapHint(t);
+      if (label) out.push(hint(block.headerRange.end, label, 'sublevels the trap holds and their depths (hover for the table)'));
+      break;
+    }
+    case 'slower': {
+      const s = block.name && analysis.result?.slowers?.find((x) => x.name === block.name!.text);
+      const label = s && slowerHint(s);
+      if (label) out.push(hint(block.headerRange.end, label, 'length, ideal field from entrance to exit and laser detuning from the line (hover for more)'));
       break;
     }
     case 'coil':

@@ -204,7 +204,7 @@ const FREQUENCY_BASES: [FrequencyBase, number[]][] = [
 const COMMON_UNITS: readonly string[] = [
   'T', 'mT', 'uT', 'G', 'mG', 'kG', 'T/m', 'G/cm', 'T/cm', 'mT/m',
   'm', 'cm', 'mm', 'um', 'nm', 'km',
-  'K', 'mK', 'degC',
+  'K', 'mK', 'uK', 'nK', 'degC',
   'm/s', 'km/s',
   'Hz', 'kHz', 'MHz', 'GHz', 'THz', 'cm^-1', '1/cm', 'eV', 'meV', 'ueV', 'J',
   'u', 'Da', 'kg', 'g',

@@ -91,7 +91,8 @@ export function renderResiduals(d: ResidualsViewData, theme: RenderTheme): strin
   body.push(bottomAxis(x, xUnit, '', upper, pal));
   body.push(leftAxis(y, yUnit, 'measured, model', upper, LEFT, pal));
   body.push(bottomAxis(x, xUnit, logX ? `${xName}, log scale` : xName, lower, pal));
-  body.push(leftAxis(yz, undefined, normalised ? '(measured − model)/σ' : 'measured − model', lower, LEFT, pal));
+  // Five ticks in the short lower panel, so the ±2 σ bands drawn below carry numbers (two left only 0).
+  body.push(leftAxis(yz, undefined, normalised ? '(measured − model)/σ' : 'measured − model', lower, LEFT, pal, (lower.bottom - lower.top) / 5));
   for (const level of normalised ? [-2, -1, 0, 1, 2] : [0]) {
     body.push(el('path', { class: 'sl-zero', d: `M${px(LEFT)},${px(yz(level))}H${px(RIGHT)}`, stroke: pal.muted, 'stroke-dasharray': level === 0 ? '' : '2 4', fill: 'none' }));
   }

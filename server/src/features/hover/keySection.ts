@@ -55,7 +55,7 @@ const BLOCK_KEYS: Record<string, string> = {
   'beam.detector': 'detector width or resolution',
   'line.spectrum': 'draw the line\u2019s spectrum as seen along or across the field (Voigt line shapes)',
   'line.light': 'analyser: all, pi, sigma (both), sigma+ or sigma-',
-  'line.doppler': 'Doppler width from a gas temperature (310 K) or from a beam seen across (beam <name>)',
+  'line.doppler': 'Doppler width from a gas temperature (e.g. 310 K) or from a beam seen across (beam <name>)',
   'line.instrument': 'Gaussian instrument or laser width, FWHM',
   'line.span': 'width of the spectrum\u2019s frequency window',
   'line.points': 'number of samples of the spectrum (11 to 100,001)',

@@ -1,7 +1,11 @@
-/** Hover of a `trap` block: its summary and the per-sublevel verdicts (docs/traps.md). */
-import { depthText, gaussPerCmText, shapeText, sublevelVerdict, trapSummaryLines } from '../../eval/trapText';
+/**
+ * Hover of a `trap` block: its summary, the per-sublevel verdicts, what each held sublevel's RF cut
+ * and Majorana estimate come to, and the cautions in one line (docs/traps.md).
+ */
+import { depthText, gaussPerCmText, shallowDepthNote, shapeText, sublevelVerdict, trappedSublevelNotes, trapSummaryLines } from '../../eval/trapText';
 import type { TrapResult } from '../../eval/trapResultTypes';
 import { md } from '../shared/markdown';
+import { cautionLine } from './beamSection';
 
 export function trapSection(t: TrapResult): string {
   const [title, ...rest] = trapSummaryLines(t);
@@ -12,6 +16,11 @@ export function trapSection(t: TrapResult): string {
       const lev = s.levitation_T_per_m !== undefined ? gaussPerCmText(s.levitation_T_per_m) : '—';
       lines.push(`| ${md(`|${s.label}⟩`)} | ${md(sublevelVerdict(s))} | ${lev} | ${s.trapped ? md(depthText(s)) : '—'} | ${s.trapped ? md(shapeText(s)) : '—'} |`);
     }
+    const notes = trappedSublevelNotes(t);
+    const shallow = shallowDepthNote(t);
+    if (notes.length > 0 || shallow) lines.push('', ...notes.map((l) => `${md(l)}  `), ...(shallow ? [md(`note: ${shallow}`)] : []));
   }
+  const caution = cautionLine(t.cautions);
+  if (caution) lines.push('', caution);
   return lines.join('\n');
 }

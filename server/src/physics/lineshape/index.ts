@@ -14,4 +14,5 @@ export {
 export { AIR_MIN_WAVELENGTH_M, AIR_STANDARD, airIndex, airWavelengthM } from './airIndex';
 export { analyserProblem, observedWeight, passesAnalyser, viewAngleRad, type Analyser, type ViewDirection } from './observation';
 export { gridFrequencies, synthesizeSpectrum, type UniformGrid, type WeightedComponent } from './spectrum';
+export { spectrumPeak } from './spectrumPeak';
 export { beamTransverseRmsSpeed } from './beamDoppler';
