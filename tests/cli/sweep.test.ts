@@ -104,3 +104,19 @@ describe('sublevel sweep with uncertain constants', () => {
     expect(zero.slice(20, 25).every((u) => Math.abs(u - 0.375) < 1e-9)).toBe(true);
   });
 });
+
+describe('sweep picks its level as every command does', () => {
+  it('a bare name two species share is ambiguous in the words render uses; the qualified name picks one', () => {
+    const dir = mkdtempSync(path.join(os.tmpdir(), 'sublevel-sweep-level-'));
+    const file = path.join(dir, 'two.sublevel');
+    // Invented species: two hand-made atoms with a level of the same name.
+    writeFileSync(file, 'species A\n  mass = 20 u\n  level g: 2S1/2\nspecies B\n  mass = 30 u\n  level g: 3P2\n');
+    const sweep = cli('sweep', file, '--level', 'g', '--to', '10 G', '--points', '3');
+    const render = cli('render', file, '--level', 'g');
+    expect(sweep.code).toBe(2);
+    expect(sweep.err).toContain("level 'g' is ambiguous; write one of A.g, B.g");
+    expect(render.err).toContain("level 'g' is ambiguous; write one of A.g, B.g");
+    expect(cli('sweep', file, '--level', 'B.g', '--to', '10 G', '--points', '3').code).toBe(0);
+    expect(cli('sweep', file, '--level', 'h', '--to', '10 G', '--points', '3').err).toContain("no level named 'h'");
+  });
+});

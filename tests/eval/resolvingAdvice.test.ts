@@ -11,6 +11,7 @@ import { analyze } from '../../server/src/eval/analyze';
 import { beamVerdict } from '../../server/src/features/hover/beamSection';
 import type { BeamResult } from '../../server/src/eval/resultTypes';
 import { magnetAndBeam, speciesX } from '../fixtures/ovenBeam';
+import { generateSetup } from '../../bench/generatedSetup';
 
 const setup = (level: string, gradient: string): string => speciesX('52 u', level) + magnetAndBeam(gradient);
 /** Overlap from the slit image: a stronger magnet separates the peaks. */
@@ -129,7 +130,8 @@ describe('one peak: merged (not resolved) or nothing to resolve', () => {
     const p = a.problems.find((x) => x.code === 'beam-one-peak')!;
     expect(p.severity).toBe('info');
     expect(p.message).toMatch(/their mean deflections span [\d.]+ nm against an image width \(FWHM\) of 100 µm/);
-    expect(p.message).toContain('no gradient, magnet length or drift up to 100 times the present one, no narrower slits or detector and no narrower speed spread splits it with a visible dip');
+    // The reach used, each with where it comes from: 100 times the file's 1 T/m falls short of a laboratory magnet.
+    expect(p.message).toContain('no gradient up to 1000 T/m (what a laboratory magnet gives), no magnet length up to 8 m (100 times the present one), no drift up to 35 m (100 times the present one), no narrower slits or detector and no narrower speed spread splits it with a visible dip.');
     const log = sarifLog([{ path: 'f1.sublevel', problems: [p] }], { toolVersion: '0', root: '/repo', cwd: '/repo' });
     expect(log.runs[0]!.results![0]!.level).toBe('note');
     // The same beam with every sublevel populated splits at a stronger gradient: a warning (the ONE_PEAK case above, too).
@@ -138,6 +140,29 @@ describe('one peak: merged (not resolved) or nothing to resolve', () => {
     expect(all.result!.beams[0]!.resolving_options!.length).toBeGreaterThan(0);
     expect(q.severity).toBe('warning');
     expect(sarifLog([{ path: 'all.sublevel', problems: [q] }], { toolVersion: '0', root: '/repo', cwd: '/repo' }).runs[0]!.results![0]!.level).toBe('warning');
+  });
+
+  it('a magnet far weaker than an ordinary one is not "nothing to do": the search reaches a laboratory magnet and the finding stays a warning', () => {
+    // 1 mT/m: 100 times it (0.1 T/m) still leaves one peak (the ONE_PEAK case); a laboratory magnet splits it.
+    const a = analyze(setup('3S1', '0.001 T/m'));
+    const b = a.result!.beams[0]!;
+    const p = a.problems.find((x) => x.code === 'beam-one-peak')!;
+    expect(p.severity).toBe('warning');
+    // The gradient that splits it does not depend on the present one (pinned from 0.5 T/m: 3.1619 T/m, tolerance 1e-3).
+    expect(Math.abs(b.resolving_gradient_T_per_m! / 3.1619077616529565 - 1)).toBeLessThan(2e-3);
+    expect(p.message).toContain('computed on this setup: a gradient of 3.16 T/m gives peaks with a worst dip of 80 % and resolves every pair');
+  });
+
+  it('peaks that no change within reach deepens: beam-unresolved is information too (the generated benchmark file)', () => {
+    const a = analyze(generateSetup(950));
+    const unresolved = a.problems.filter((x) => x.code === 'beam-unresolved');
+    expect(unresolved).toHaveLength(3);
+    for (const p of unresolved) {
+      expect(p.severity).toBe('info');
+      expect(p.message).toContain('no gradient, magnet length or drift up to 100 times the present one');
+    }
+    // A beam whose dip a change deepens keeps the warning.
+    expect(analyze(SLIT_LIMITED).problems.find((x) => x.code === 'beam-unresolved')!.severity).toBe('warning');
   });
 
   it('sublevels that all deflect alike (J = 0) have nothing to resolve: resolved, no warning, and said so', () => {

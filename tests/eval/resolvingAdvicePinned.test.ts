@@ -13,10 +13,10 @@ import { adviceScenario } from '../fixtures/adviceScenarios';
 import { magnetAndBeam, speciesX } from '../fixtures/ovenBeam';
 
 /** [seed, index, options as found before the change]; the comment names the source kind. */
-const PINNED: [number, number, ResolvingOptions][] = [
+const PINNED: [number, number, Pick<ResolvingOptions, 'presentWorstDipRatio' | 'options'>][] = [
   [1, 0, {"presentWorstDipRatio": 1, "options": [{"parameter": "gradient", "value": 29.575891128320098, "worstDipRatio": 0.7997728908951158, "resolvesAll": true}, {"parameter": "magnetLength", "value": 5.716550362451885, "worstDipRatio": 0.7999170685393282, "resolvesAll": true}]}], // jet
   [1, 3, {"presentWorstDipRatio": 1, "options": [{"parameter": "gradient", "value": -123.22639344521549, "worstDipRatio": 0.7976031097516624, "resolvesAll": true}, {"parameter": "magnetLength", "value": 0.1738567402297006, "worstDipRatio": 0.799943873959914, "resolvesAll": true}, {"parameter": "slits", "value": 0.3, "worstDipRatio": 0, "resolvesAll": true}]}], // single
-  [1, 14, {"presentWorstDipRatio": 1, "options": [{"parameter": "gradient", "value": 14.187557047688289, "worstDipRatio": 0.7997932391806933, "resolvesAll": true}, {"parameter": "magnetLength", "value": 0.5913062656514806, "worstDipRatio": 0.7997815135157915, "resolvesAll": true}, {"parameter": "slits", "value": 0.1, "worstDipRatio": 0.4236000211439665, "resolvesAll": true}]}], // effusive
+  [1, 14, {"presentWorstDipRatio": 1, "options": [{"parameter": "gradient", "value": 14.187557047688289, "worstDipRatio": 0.7997932391806933, "resolvesAll": true}, {"parameter": "magnetLength", "value": 0.5913062656514806, "worstDipRatio": 0.7997815135157915, "resolvesAll": true}, {"parameter": "drift", "value": 3, "worstDipRatio": 0.9700648909712557, "resolvesAll": false}, {"parameter": "slits", "value": 0.1, "worstDipRatio": 0.4236000211439665, "resolvesAll": true}]}], // effusive; the drift: a laboratory beam line's 3 m reach (100 times its 9.4 mm falls short)
   [1, 20, {"presentWorstDipRatio": 1, "options": [{"parameter": "gradient", "value": 221.8899543765756, "worstDipRatio": 0.7994208492536383, "resolvesAll": true}, {"parameter": "magnetLength", "value": 0.47252071123288786, "worstDipRatio": 0.7991873848960953, "resolvesAll": true}, {"parameter": "slits", "value": 0.3, "worstDipRatio": 0.7806171941022463, "resolvesAll": true}]}], // single
   [1, 29, {"presentWorstDipRatio": 0.9999999999999959, "options": [{"parameter": "gradient", "value": 19.524232808736794, "worstDipRatio": 0.7988107683982926, "resolvesAll": true}, {"parameter": "magnetLength", "value": 0.17861205084546977, "worstDipRatio": 0.7986806840580251, "resolvesAll": true}, {"parameter": "drift", "value": 0.44128371953421025, "worstDipRatio": 0.7996403612937643, "resolvesAll": true}, {"parameter": "slits", "value": 0.5, "worstDipRatio": 0, "resolvesAll": true}]}], // single
   [4, 5, {"presentWorstDipRatio": 1, "options": [{"parameter": "gradient", "value": -355.0861821271249, "worstDipRatio": 0.9781587783068532, "resolvesAll": false}, {"parameter": "magnetLength", "value": 0.8291639328002931, "worstDipRatio": 0.9771968115296698, "resolvesAll": false}]}], // effusive
@@ -29,18 +29,21 @@ const PINNED: [number, number, ResolvingOptions][] = [
 const NOTHING_HELPS =
   'The worst dip is 100 %; no gradient, magnet length or drift up to 100 times the present one, no narrower slits or detector and no narrower speed spread deepens it.';
 
+/** The options and present dip, what the pins hold (the search's reach is tested in beamAdvice.test.ts). */
+const pinned = ({ presentWorstDipRatio, options }: ResolvingOptions): Pick<ResolvingOptions, 'presentWorstDipRatio' | 'options'> => ({ presentWorstDipRatio, options });
+
 describe('resolving options, pinned', () => {
   for (const [seed, index, expected] of PINNED) {
     it(`scenario ${seed}/${index}`, () => {
       const input = adviceScenario(seed, index);
-      expect(resolvingOptions(input, detectorPattern(input))).toEqual(expected);
+      expect(pinned(resolvingOptions(input, detectorPattern(input)))).toEqual(expected);
     });
   }
 
   it('a magnet built from sources tries slits, detector and speed spread only', () => {
     const input = adviceScenario(4, 57);
     const found = resolvingOptions(input, detectorPattern(input), ['slits', 'detector', 'speedSpread']);
-    expect(found).toEqual({ ...PINNED.find(([s, i]) => s === 4 && i === 57)![2], options: [{ parameter: 'slits', value: 0.3, worstDipRatio: 0.5365137255331833, resolvesAll: true }] });
+    expect(pinned(found)).toEqual({ ...PINNED.find(([s, i]) => s === 4 && i === 57)![2], options: [{ parameter: 'slits', value: 0.3, worstDipRatio: 0.5365137255331833, resolvesAll: true }] });
   });
 });
 

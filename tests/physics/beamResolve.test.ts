@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import {
   detectorPattern,
   kernelDensity,
+  LAB_REACH,
   leverArmM2,
   resolvingOptions,
   slitImage,
@@ -202,5 +203,35 @@ describe('one peak: merged, or nothing to resolve', () => {
     // Every option offered resolves or visibly splits the peak, and is computed: the pattern with it agrees.
     for (const o of found.options) expect(o.worstDipRatio).toBeLessThanOrEqual(0.98);
     expect(detectorPattern({ ...input, geometry: { ...geometry, gradientTPerM: g.value } }).allResolved).toBe(true);
+  });
+
+  it('a magnet far weaker than one that splits the peak: the search reaches a laboratory magnet, not only 100 times the present one', () => {
+    // At 1 mT/m, 100 times the present gradient (0.1 T/m) falls far short of the analytic splitting
+    // gradient (above); 100 times the 12 cm magnet and 50 cm drift are beyond the laboratory reach.
+    const expected = (separationAtCriterion(0.8) / 2) * ((mass * speed * speed) / (BOHR_MAGNETON * leverArmM2(geometry)));
+    const input = { ...pair, geometry: { ...geometry, gradientTPerM: 0.001 } };
+    const found = resolvingOptions(input, detectorPattern(input));
+    expect(found.reach.gradient).toEqual({ limit: LAB_REACH.gradient, by: 'lab' });
+    expect(found.reach.magnetLength).toEqual({ limit: 12, by: 'present' });
+    expect(found.reach.drift).toEqual({ limit: 50, by: 'present' });
+    expect(found.nothingWithinReach).toBe(false);
+    const g = found.options.find((o) => o.parameter === 'gradient')!;
+    expect(g.resolvesAll).toBe(true);
+    expect(Math.abs(g.value / expected - 1)).toBeLessThan(1e-3);
+  });
+
+  it('nothing within reach: moments 1e-7 apart stay one peak up to a laboratory magnet; 100 times a strong magnet is the reach', () => {
+    const close = { ...pair, sublevels: [{ label: 'a', momentJT: BOHR_MAGNETON, population: 1 }, { label: 'b', momentJT: BOHR_MAGNETON * (1 + 1e-7), population: 1 }] };
+    const weakMagnet = { ...close, geometry: weak };
+    const found = resolvingOptions(weakMagnet, detectorPattern(weakMagnet));
+    expect(found.options).toEqual([]);
+    expect(found.nothingWithinReach).toBe(true);
+    expect(found.reach.gradient).toEqual({ limit: LAB_REACH.gradient, by: 'lab' });
+    // 100 times 150 T/m is beyond the laboratory reach: the search keeps its relative bound.
+    const strong = { ...close, geometry: { ...geometry, gradientTPerM: 150 } };
+    const atStrong = resolvingOptions(strong, detectorPattern(strong));
+    expect(atStrong.reach.gradient).toEqual({ limit: 15000, by: 'present' });
+    // A magnet built from sources is searched without gradient, length and drift: not "nothing within reach".
+    expect(resolvingOptions(weakMagnet, detectorPattern(weakMagnet), ['slits', 'detector', 'speedSpread']).nothingWithinReach).toBe(false);
   });
 });

@@ -6,7 +6,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { BOHR_MAGNETON_HZ_PER_T } from '../../server/src/physics/constants';
-import { checkDesign, idealProfile, type AxisField } from '../../server/src/physics/slower';
+import { checkDesign, idealField, idealProfile, idealSpeed, type AxisField } from '../../server/src/physics/slower';
+import { checkGrid } from '../../server/src/physics/slower/zGrid';
 
 // An invented sodium-like slower (line and lifetime from memory), stopping short of its √ end: vf = 15 m/s of 700 m/s.
 const t = { wavelengthM: 589.158e-9, lifetimeS: 16.25e-9, massKg: 3.8175e-26, rateHzPerT: BOHR_MAGNETON_HZ_PER_T };
@@ -61,3 +62,49 @@ describe('the design check samples densely where a field bends', () => {
     expect(flat.samples.length).toBe(n);
   });
 });
+
+describe('the ideal check computes each point once, from the profile', () => {
+  it('checkGrid without a separate ideal field evaluates the field once per point and takes it as the ideal', () => {
+    const counted = (count: { n: number }): AxisField => (z) => {
+      count.n++;
+      return idealField(p, z);
+    };
+    const once = { n: 0 };
+    const grid = checkGrid(counted(once), undefined, p.lengthM, 100, 1e-3 * p.deltaBT);
+    for (const g of grid) expect(g.idealT).toBe(g.at.BT);
+    // With the ideal given separately every point (kept or tried) solves the profile twice; the same points and fields come out.
+    const field = { n: 0 };
+    const idealCalls = { n: 0 };
+    const twice = checkGrid(counted(field), (z) => counted(idealCalls)(z).BT, p.lengthM, 100, 1e-3 * p.deltaBT);
+    expect(grid).toEqual(twice);
+    expect(once.n).toBe(field.n);
+    expect(idealCalls.n).toBe(field.n);
+    expect(once.n).toBeGreaterThanOrEqual(grid.length);
+  });
+
+  it('the ideal check: resonant speeds v0 √(1 − z/L0) (closed form above), the capture and final speeds exactly at the ends', () => {
+    const check = checkDesign({ ...common, points: 101 });
+    const samples = check.samples;
+    expect(samples[0]!.resonantMPerS).toBe(700);
+    expect(samples[samples.length - 1]!.resonantMPerS).toBe(15);
+    for (const x of samples) {
+      expect(x.idealT).toBeCloseTo(ideal(x.zM), 12);
+      expect(x.resonantMPerS / (700 * Math.sqrt(Math.max(0, 1 - x.zM / p.stopLengthM))) - 1).toBeCloseTo(0, 9);
+      expect(idealSpeed(p, x.zM)).toBe(x.resonantMPerS);
+    }
+    // The design deceleration everywhere (the profile's definition), as the coil check would compute it on the ideal field.
+    const viaField = checkDesign({ ...common, field: (z) => idealField(p, z), points: 101 });
+    expect(viaField.samples.map((x) => x.zM)).toEqual(samples.map((x) => x.zM));
+    for (let i = 0; i < samples.length; i++) expect(samples[i]!.neededMPerS2 / viaField.samples[i]!.neededMPerS2 - 1).toBeCloseTo(0, 9);
+  });
+
+  it('the field at the exit is the profile\u2019s exit field exactly: 0 for the decreasing design at its default bias', () => {
+    const dec = idealProfile(t, { captureMPerS: 500, finalMPerS: 30, safety: 0.5, design: 'decreasing', saturation: 3 }).profile!;
+    expect(idealField(dec, dec.lengthM).BT).toBe(0);
+    expect(idealField(dec, dec.lengthM + 1).BT).toBe(0);
+    const flip = idealProfile(t, { captureMPerS: 950, finalMPerS: 30, safety: 0.55, design: 'spin_flip', saturation: 2.5 }).profile!;
+    expect(idealField(flip, flip.lengthM).BT).toBe(flip.exitFieldT);
+    expect(idealField(flip, 0).BT).toBe(flip.entryFieldT);
+  });
+});
+

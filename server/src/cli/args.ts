@@ -5,7 +5,7 @@
  */
 import { parseArgs as nodeParseArgs } from 'util';
 import { suggestNames } from '../format/didYouMean';
-import { listWords } from '../physics/termSymbol';
+import { listWords } from '../physics/listWords';
 
 export interface OptionSpec {
   /** Placeholder for the value in help (`NAME`, `FILE`); absent for an option that takes none. */

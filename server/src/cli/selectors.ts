@@ -27,6 +27,7 @@ function namesOnFile(kind: string, names: string[]): string {
   return `; the file has ${listed}${names.length > SHOWN ? ` and ${names.length - SHOWN} more` : ''}`;
 }
 
+/** A level by `Species.level` or by its bare name (ambiguous when several species have it). */
 export function selectLevel(model: SetupModel, wanted: string): LevelModel {
   const all = model.species.flatMap((s) => s.levels);
   return pick('level', all, (l) => [`${l.species.name}.${l.name}`, l.name], wanted);

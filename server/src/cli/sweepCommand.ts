@@ -121,10 +121,7 @@ function findLevel(file: string, model: SetupModel, name: string | undefined): L
     if (all.length === 0) throw new FileProblemError(file, [cliProblem('nothing-to-compute', 'the file has no level to sweep; add a species with a level, e.g. `level ground: 2S1/2`')]);
     throw new UsageError(`sweep needs --level, one of: ${all.map(qualified).join(', ')}`);
   }
-  const matches = all.filter((l) => l.name === name || qualified(l) === name);
-  if (matches.length === 1) return matches[0]!;
-  if (matches.length > 1) throw new UsageError(`level '${name}' is in several species; write one of ${matches.map(qualified).join(', ')}`);
-  return selectLevel(model, name); // no such level: the message every command gives (did you mean, or the file's levels)
+  return selectLevel(model, name); // the matching every command uses (qualified or bare name, ambiguity, did you mean)
 }
 
 /** CSV in the project's convention (docs/csv.md): field_T, energies and moments of every state, states in the documented order. */

@@ -35,7 +35,7 @@ export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
   const r = e.result;
   if (!r.computed || r.all_resolved !== false) return out;
   if (lonePeak(r) === 'merged') {
-    out.push(onePeak(beam, r, e.pattern?.image?.kernelFwhmM));
+    out.push(onePeak(beam, r, e.pattern?.image?.kernelFwhmM, e.nothingWithinReach === true));
     return out;
   }
   const merged = r.pairs.filter((p) => !p.resolved);
@@ -45,7 +45,7 @@ export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
   const related = [{ message: `beam '${beam.name}' uses this magnet`, range: beam.nameRange }];
   out.push({
     code: 'beam-unresolved',
-    severity: EVAL_RULES['beam-unresolved'].severity,
+    severity: severity('beam-unresolved', e.nothingWithinReach === true),
     message: `beam '${beam.name}': ${merged.length} neighbouring peak pair${merged.length === 1 ? '' : 's'} will not be resolved on the detector (${names.join('; ')}).${advice}`,
     range: gradient?.range ?? beam.nameRange,
     related,
@@ -55,17 +55,17 @@ export function beamDiagnostics(beam: BeamModel, e: BeamEvaluation): Problem[] {
 }
 
 /**
- * Whether the advice searched the beam's own geometry (gradient, magnet length, drift, slits, detector, speed spread)
- * and no change within its bound splits the merged peak. Then the finding is information, not a warning: nothing
- * the user can turn within reach resolves it (e.g. nuclear-size moment differences). A magnet built from sources is
- * searched without its gradient and length (its currents and geometry might split it), so it stays a warning.
+ * Information, not a warning, when the advice searched every change up to its reach (gradient, magnet length, drift,
+ * slits, detector, speed spread) and none helps: nothing the user can turn within reach resolves the peaks (e.g.
+ * nuclear-size moment differences); the advice sentence names the reach. A magnet built from sources is searched
+ * without its gradient and length (its currents and geometry might help), so it stays a warning.
  */
-function nothingWithinReach(r: BeamResult): boolean {
-  return r.resolving_options !== undefined && r.resolving_options.length === 0 && r.deflection_model !== 'field-map';
+function severity(code: 'beam-unresolved' | 'beam-one-peak', nothingWithinReach: boolean): Problem['severity'] {
+  return nothingWithinReach ? 'info' : EVAL_RULES[code].severity;
 }
 
 /** One merged peak (sublevels that deflect differently, resolved: false): how far apart they are against the image. */
-function onePeak(beam: BeamModel, r: BeamResult, imageFwhmM: number | undefined): Problem {
+function onePeak(beam: BeamModel, r: BeamResult, imageFwhmM: number | undefined, nothingWithinReach: boolean): Problem {
   const members = new Set(r.peaks[0]!.members);
   const means = r.sublevels.filter((s) => members.has(s.label)).map((s) => s.mean_deflection_m);
   // The difference of exact mean deflections: above the engine's round-off (the verdict's own tolerance, physics/beam/deflectAlike.ts).
@@ -77,7 +77,7 @@ function onePeak(beam: BeamModel, r: BeamResult, imageFwhmM: number | undefined)
   const gradient = fix.data ? beam.magnet?.gradientTPerM?.range : undefined;
   return {
     code: 'beam-one-peak',
-    severity: nothingWithinReach(r) ? 'info' : EVAL_RULES['beam-one-peak'].severity,
+    severity: severity('beam-one-peak', nothingWithinReach),
     message: `beam '${beam.name}': all ${members.size} sublevels with atoms land in one peak: their mean deflections span ${lengthText(spread, 2)}${image}, so the detector does not separate them.${advice}`,
     range: beam.nameRange,
     ...(gradient ? { related: [{ message: `magnet '${beam.magnet!.name}' sets the gradient here`, range: gradient }] } : {}),

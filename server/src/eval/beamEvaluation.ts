@@ -35,6 +35,8 @@ export interface BeamEvaluation {
   issues: { severity: 'error' | 'warning' | 'info'; code: string; message: string }[];
   /** `populations` entries that name no sublevel of the level. */
   unmatchedPopulations?: UnmatchedPopulation[];
+  /** The advice searched every change up to its reach and none helps (physics/beam/resolvingOptions.ts): the findings are information. */
+  nothingWithinReach?: boolean;
 }
 
 /**
@@ -117,8 +119,9 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
     }
     result.worst_dip_ratio = found.presentWorstDipRatio;
     result.resolving_options = options;
-    const advice = resolvingAdvice(result, patternInput.geometry);
+    const advice = resolvingAdvice(result, patternInput.geometry, found.reach);
     if (advice) result.resolving_advice = advice;
+    if (found.nothingWithinReach) return { result, pattern, issues, ...unmatched, nothingWithinReach: true };
   }
   return { result, pattern, issues, ...unmatched };
 }

@@ -5,7 +5,6 @@
  * array it is written as null (the position matters there). A CSV cell for it is empty.
  */
 import { numberRowsBytes, numberRowsText, numberText } from './csvDigits/numberTableText';
-import { equalWithinRoundOff } from '../physics/roundOff';
 
 export function finiteJsonText(value: unknown, space?: number): string {
   return JSON.stringify(value, (_key, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? undefined : v), space);
@@ -24,14 +23,6 @@ export function csvNumber(x: number | null | undefined): string {
 
 /** The one round-off tolerance (physics/roundOff.ts), relative to the largest value of a column here. */
 export { ROUND_OFF_ULPS } from '../physics/roundOff';
-
-/**
- * `x`, or 0 when it is round-off relative to `scale` (|x| ≤ 64 ε |scale|, e.g. 2e-17 T in a
- * profile whose largest field is 0.07 T). A value above that is kept however small it is.
- */
-export function zeroIfRoundOff(x: number, scale: number): number {
-  return equalWithinRoundOff(x, 0, scale) ? 0 : x;
-}
 
 /** A row of numbers as one CSV line, cell for cell what csvNumber writes. */
 export function csvNumberRow(row: readonly (number | null | undefined)[]): string {

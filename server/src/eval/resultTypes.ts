@@ -256,11 +256,11 @@ export interface BeamResult {
    * they deflect alike or one sublevel has atoms (nothing to resolve; physics/beam/deflectAlike.ts).
    */
   all_resolved?: boolean;
-  /** Smallest gradient that resolves every pair (null: none up to 100× the file's gradient); only when unresolved. */
+  /** Smallest gradient that resolves every pair (null: none within the search's reach, physics/beam/resolvingOptions.ts); only when unresolved. */
   resolving_gradient_T_per_m?: number | null;
-  /** Smallest magnet length (same gradient) that resolves every pair; null: none up to 100× the file's. */
+  /** Smallest magnet length (same gradient) that resolves every pair; null: none within the search's reach. */
   resolving_magnet_length_m?: number | null;
-  /** Smallest drift that resolves every pair; null: none up to 100× the file's. */
+  /** Smallest drift that resolves every pair; null: none within the search's reach. */
   resolving_drift_m?: number | null;
   /** Worst dip ratio of the setup as it is (only when unresolved; 1 for one merged peak: no dip). */
   worst_dip_ratio?: number;

@@ -3,7 +3,6 @@
  * check of a coil design. The Zeeman rate of the driven pair comes from the exact engine at the
  * fields the profile reaches (docs/slower.md).
  */
-import { zeroIfRoundOff } from './machineText';
 import type { Problem, Range } from '../format/ast';
 import { SPEED_OF_LIGHT } from '../physics/constants';
 import { sumField, type FieldFunction } from '../physics/fields';
@@ -148,7 +147,7 @@ export function evaluateSlower(s: SlowerModel, gJOf: GJLookup, settings: Setting
   };
   const ideal = flyThrough((z) => idealField(p, z));
   if (ideal) result.flight = flightOf(ideal);
-  const idealCheck = checkDesign({ ...common, profile: p, field: (z) => idealField(p, z), points: SLOWER_SAMPLES });
+  const idealCheck = checkDesign({ ...common, profile: p, points: SLOWER_SAMPLES });
   let samples: SlowerSample[] = idealCheck.samples.map((c) => ({ z_m: c.zM, B_ideal_T: c.idealT, resonant_speed_m_per_s: c.resonantMPerS, needed_deceleration_m_per_s2: c.neededMPerS2 }));
   let shown = ideal;
   const coils = coilAxis(s);
@@ -192,9 +191,6 @@ export function evaluateSlower(s: SlowerModel, gJOf: GJLookup, settings: Setting
     say('slower-atoms-stop', 'warning', `the simulated atom at the capture speed stops at z = ${lengthText(shown.stoppedAtM)}, before the exit (${lengthText(p.lengthM)}), and would be pushed back`);
   }
   if (shown) attachFlight(samples, shown);
-  // The ideal field ends at zero in theory: its last sample is round-off of the profile's largest field (JSON and CSV alike).
-  const idealScale = samples.reduce((m, x) => Math.max(m, Math.abs(x.B_ideal_T)), 0);
-  for (const x of samples) x.B_ideal_T = zeroIfRoundOff(x.B_ideal_T, idealScale);
   result.samples = samples;
   result.cautions = slowerCautions({ wavelengthM: transition.wavelengthM, peakFieldT: Math.max(Math.abs(p.entryFieldT), Math.abs(p.exitFieldT)) });
   return result;

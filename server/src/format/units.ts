@@ -13,7 +13,7 @@ import { readNumberPrefix } from './numbers';
 import { canonicalUnitName, isOffsetUnit, parseUnitSyntax } from './unitGrammar';
 import { BASE_DIMENSION_COUNT, convertScale, unitEntry } from './unitLookup';
 import { PLANCK_H, SPEED_OF_LIGHT } from '../physics/constants';
-import { listWords } from '../physics/termSymbol';
+import { listWords } from '../physics/listWords';
 
 export type Dimension =
   | 'flux-density'

@@ -10,6 +10,7 @@
  * offsets into the text that was passed in, so an editor can underline exactly the bad part.
  * The returned term is non-null exactly when no issue of severity 'error' was found.
  */
+import { listWords } from './listWords';
 
 export type Parity = 'even' | 'odd';
 
@@ -466,10 +467,4 @@ export function issue(
   const out: TextIssue = { code, message, start, end, severity };
   if (suggestions && suggestions.length > 0) out.suggestions = suggestions;
   return out;
-}
-
-/** 'a', 'a or b', 'a, b or c' */
-export function listWords(items: readonly string[]): string {
-  if (items.length <= 1) return items.join('');
-  return `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}`;
 }

@@ -12,6 +12,22 @@ export function estimateTextWidth(s: string, fontSize = 11): number {
   return Array.from(s).length * CHAR_WIDTH_11 * (fontSize / 11);
 }
 
+/** The note in lines no wider than `width`, broken at spaces (a comma stays with its word), as estimateTextWidth measures it. */
+export function wrapNote(note: string, width: number): string[] {
+  const words = note.split(' ');
+  const lines: string[] = [];
+  let line = '';
+  for (const w of words) {
+    const tried = line ? `${line} ${w}` : w;
+    if (line && estimateTextWidth(tried) > width) {
+      lines.push(line);
+      line = w;
+    } else line = tried;
+  }
+  if (line) lines.push(line);
+  return lines;
+}
+
 export interface FrameSpec {
   view: 'levels' | 'pattern' | 'lines' | 'resonance' | 'residuals' | 'fieldmap' | 'slower';
   idBase: string;

@@ -6,7 +6,6 @@
  */
 import { scaleLinear } from 'd3-scale';
 import { leftAxis, type PlotBox, type Scale } from './axes';
-import { estimateTextWidth } from './frame';
 import { laneHeightFor } from './labelLayout';
 import { bandName, type LevelBand } from './levelBands';
 import { axisOffset, type AxisOffset } from './offsetAxis';
@@ -121,18 +120,5 @@ export function bandNote(placed: readonly PlacedBand[]): string {
   return `Energy axis broken into ${placed.length} bands, each on its own scale: ${apart.join(', ')} (centre to centre).`;
 }
 
-/** The note in lines no wider than `width`, broken after commas and spaces. */
-export function wrapNote(note: string, width: number): string[] {
-  const words = note.split(' ');
-  const lines: string[] = [];
-  let line = '';
-  for (const w of words) {
-    const tried = line ? `${line} ${w}` : w;
-    if (line && estimateTextWidth(tried) > width) {
-      lines.push(line);
-      line = w;
-    } else line = tried;
-  }
-  if (line) lines.push(line);
-  return lines;
-}
+/** Kept as a re-export while render/levels.ts imports it from here; it lives beside estimateTextWidth. */
+export { wrapNote } from './frame';

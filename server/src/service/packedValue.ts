@@ -7,7 +7,9 @@
  * all of it was those tables, which the editor reads one level at a time (a hover).
  *
  * The unpacked value equals the packed one: same keys in the same order, numbers bit for bit
- * (-0 and NaN included), `undefined` properties kept. Shared objects come back as separate copies.
+ * (-0 and NaN included), `undefined` properties kept. Shared objects come back as separate copies,
+ * except inside recipes: an array or object met again there is the same object as the first time
+ * (two regime limits share their level and field, eval/regimeLimits.ts).
  * Anything but numbers, strings, booleans, null, undefined, arrays and plain objects makes
  * `packValue` throw (the caller then posts the value as it is). A property still unread
  * (eval/lazyFields.ts) is packed as its recipe, which `unpackValue`'s `revive` makes lazy again.
@@ -221,15 +223,17 @@ class Packer {
  * first read, and `revive` puts each unread property back on its object from its recipe.
  */
 export function unpackValue(p: PackedValue, revive: Revive): unknown {
-  return readAt({ ...p, revive, again: new Map() }, 0, 0);
+  return readAt({ ...p, revive, again: new Map(), recipeDepth: 0 }, 0, 0);
 }
 
 export type Revive = (o: Record<string, unknown>, key: string, recipe: unknown) => void;
 
 interface Unpacking extends PackedValue {
   revive: Revive;
-  /** Arrays and objects met again inside recipes, unpacked once, by op position. */
+  /** Arrays and objects inside recipes, by op position: those met again are the same object as the first. */
   again: Map<number, unknown>;
+  /** Recipes being read around the current value (> 0: inside one). */
+  recipeDepth: number;
 }
 
 /** The value whose tags start at `startOp` and whose numbers start at `startNum`. */
@@ -264,12 +268,14 @@ function readAt(p: Unpacking, startOp: number, startNum: number): unknown {
       case ARRAY: {
         const n = ops[op++]!;
         const a: unknown[] = new Array(n);
+        if (p.recipeDepth > 0) p.again.set(op - 2, a);
         for (let i = 0; i < n; i++) a[i] = read();
         return a;
       }
       case OBJECT: {
         const keys = shapes[ops[op++]!]!;
         const o: Record<string, unknown> = {};
+        if (p.recipeDepth > 0) p.again.set(op - 2, o);
         for (const k of keys) {
           if (ops[op] === DEFERRED) {
             defer(p, o, k, op + 3, num);
@@ -277,7 +283,10 @@ function readAt(p: Unpacking, startOp: number, startNum: number): unknown {
             op += 3 + ops[op + 1]!;
           } else if (ops[op] === UNREAD) {
             op++;
-            p.revive(o, k, read());
+            p.recipeDepth++;
+            const recipe = read();
+            p.recipeDepth--;
+            p.revive(o, k, recipe);
           } else if (k === '__proto__') Object.defineProperty(o, k, { value: read(), writable: true, enumerable: true, configurable: true }); // a key, not the prototype
           else o[k] = read();
         }

@@ -24,7 +24,7 @@ export {
   type ResolveSearchResult,
   type ResolvingParameter,
 } from './resolvingSolver';
-export { resolvingOptions, VISIBLE_IMPROVEMENT, type AdviceParameter, type ResolvingOption, type ResolvingOptions } from './resolvingOptions';
+export { LAB_REACH, resolvingOptions, VISIBLE_IMPROVEMENT, type AdviceParameter, type GrownParameter, type ResolvingOption, type ResolvingOptions, type SearchReach } from './resolvingOptions';
 export { validateGeometry, MAX_HALF_ANGLE_RAD } from './validateGeometry';
 export { validateSource } from './validateSource';
 export { validateSublevels } from './validateSublevels';

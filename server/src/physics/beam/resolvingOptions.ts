@@ -36,11 +36,28 @@ export interface ResolvingOption {
   resolvesAll: boolean;
 }
 
+export type GrownParameter = 'gradient' | 'magnetLength' | 'drift';
+
+/** How far a grown change was searched: T/m for the gradient (magnitude), m for magnet length and drift. */
+export interface SearchReach {
+  limit: number;
+  /** 'present': 100 times the file's value; 'lab': what a laboratory magnet or beam line gives (LAB_REACH). */
+  by: 'present' | 'lab';
+}
+
 export interface ResolvingOptions {
   /** Worst dip ratio of the setup as it is. */
   presentWorstDipRatio: number;
   /** Changes that improve the worst dip, in the order gradient, magnet, drift, slits, detector, speed spread. */
   options: ResolvingOption[];
+  /** How far gradient, magnet length and drift were searched (those tried; none when nothing was searched). */
+  reach: Partial<Record<GrownParameter, SearchReach>>;
+  /**
+   * Every change was tried — gradient, magnet length and drift up to their reach, slits, detector,
+   * speed spread — and none improves the worst dip: nothing the user can turn within reach helps.
+   * False when nothing was searched or some changes were left out (a magnet built from sources).
+   */
+  nothingWithinReach: boolean;
 }
 
 /** An option must lower the worst dip ratio by at least this much (2 points of a per-cent display). */
@@ -49,6 +66,13 @@ export const VISIBLE_IMPROVEMENT = 0.02;
 const SATURATION_MARGIN = 0.02;
 
 const GROWTH = [1.5, 2, 3, 5, 10, 20, 50, 100];
+/**
+ * What a laboratory deflection magnet and beam line give, whatever the file's values: gradient,
+ * magnet length and drift are searched up to the larger of 100 times the present value and these,
+ * so a very weak magnet that an ordinary one would split is not read as "nothing to do".
+ * Common practice (docs/beam.md, "Advice reach"): T/m, m, m.
+ */
+export const LAB_REACH: Readonly<Record<GrownParameter, number>> = { gradient: 1000, magnetLength: 1, drift: 3 };
 const NARROWING = [0.7, 0.5, 0.3, 0.2, 0.1];
 const SPREADS = [0.2, 0.1, 0.05, 0.02];
 
@@ -65,8 +89,15 @@ export function resolvingOptions(input: PatternInput, present: DetectorPattern, 
   const merged = present.mergedLonePeak;
   const groups = merged ? undefined : present.peaks.map((p) => p.memberIndices);
   const presentWorst = merged ? 1 : worstDip(present);
-  const out: ResolvingOptions = { presentWorstDipRatio: presentWorst, options: [] };
+  const out: ResolvingOptions = { presentWorstDipRatio: presentWorst, options: [], reach: {}, nothingWithinReach: false };
   if (present.allResolved || (!merged && present.peaks.length < 2)) return out;
+  search(input, present, groups, presentWorst, tried, out);
+  out.nothingWithinReach = out.options.length === 0 && (['gradient', 'magnetLength', 'drift'] as const).every(tried);
+  return out;
+}
+
+/** Tries each change and adds those that help to `out.options` (and the grown changes' reach to `out.reach`). */
+function search(input: PatternInput, present: DetectorPattern, groups: number[][] | undefined, presentWorst: number, tried: (p: AdviceParameter) => boolean, out: ResolvingOptions): void {
   const geo = input.geometry;
   const sign = geo.gradientTPerM < 0 ? -1 : 1;
   const keep = (parameter: AdviceParameter, pick: Trial | undefined, value = pick?.value): void => {
@@ -85,7 +116,7 @@ export function resolvingOptions(input: PatternInput, present: DetectorPattern, 
     if (!tried(parameter)) return;
     const key = parameter === 'gradient' ? 'gradientTPerM' : parameter === 'magnetLength' ? 'magnetLengthM' : 'driftM';
     const scale = parameter === 'gradient' ? sign : 1;
-    const values = GROWTH.map((f) => f * base);
+    const values = grownValues(parameter, base, out);
     if (hopeless(values.map((v) => changed({ [key]: scale * v })))) return;
     const trials = scan(values, (v) => at({ [key]: scale * v }));
     const pick = choose(trials, presentWorst);
@@ -118,10 +149,28 @@ export function resolvingOptions(input: PatternInput, present: DetectorPattern, 
   if (tried('speedSpread') && spread !== undefined && mean !== undefined && mean > 0) {
     const values = SPREADS.filter((s) => s < spread * 0.9);
     const jet = (s: number): SpeedDistribution => ({ kind: 'jet', meanSpeed: mean, relativeSpread: s });
-    if (hopeless(values.map((s) => changed({}, jet(s))))) return out;
+    if (hopeless(values.map((s) => changed({}, jet(s))))) return;
     keep('speedSpread', choose(scan(values, (s) => at({}, jet(s))), presentWorst));
   }
-  return out;
+}
+
+/**
+ * The values a grown change tries: 1.5 … 100 times the present one, then, when a laboratory
+ * magnet or beam line reaches further, one a decade on up to that reach (the solver narrows the
+ * step below a resolving one). Records the reach used.
+ */
+function grownValues(parameter: GrownParameter, base: number, out: ResolvingOptions): number[] {
+  const values = GROWTH.map((f) => f * base);
+  const relative = values[values.length - 1]!;
+  const lab = LAB_REACH[parameter];
+  if (!(base > 0) || relative >= lab) {
+    out.reach[parameter] = { limit: relative, by: 'present' };
+    return values;
+  }
+  for (let v = relative * 10; v < lab; v *= 10) values.push(v);
+  values.push(lab);
+  out.reach[parameter] = { limit: lab, by: 'lab' };
+  return values;
 }
 
 function presentSpread(source: SpeedDistribution): number | undefined {

@@ -5,13 +5,14 @@
  * a_max s0/(1 + s0), the atoms fall behind the resonance and leave it: they are dropped there.
  * The samples are a uniform grid with extra points where a field bends (the √ end, a coil's fall).
  */
-import { idealField } from './idealProfile';
+import { idealField, idealSpeed } from './idealProfile';
 import { checkGrid } from './zGrid';
 import type { AxisField, DesignCheck, IdealProfile } from './types';
 
 export interface CheckInput {
   profile: IdealProfile;
-  field: AxisField;
+  /** The field checked; absent: the ideal profile itself (each point computed once, its speed taken from the profile). */
+  field?: AxisField;
   /** Zeeman shift of the driven pair per tesla, signed as the profile uses it, Hz/T. */
   shiftHzPerT: number;
   wavelengthM: number;
@@ -29,8 +30,9 @@ export function checkDesign(input: CheckInput): DesignCheck {
   let dropAtM: number | undefined;
   let capture = 0;
   // Curves through the samples stray at most about 1e-3 ΔB from either field (0.2 px on the figure).
-  for (const { zM, idealT, at } of checkGrid(field, (z) => idealField(p, z).BT, p.lengthM, n - 1, 1e-3 * p.deltaBT)) {
-    const resonantMPerS = wavelengthM * (shiftHzPerT * at.BT - p.detuningHz);
+  const grid = field ? checkGrid(field, (z) => idealField(p, z).BT, p.lengthM, n - 1, 1e-3 * p.deltaBT) : checkGrid((z) => idealField(p, z), undefined, p.lengthM, n - 1, 1e-3 * p.deltaBT);
+  for (const { zM, idealT, at } of grid) {
+    const resonantMPerS = field ? wavelengthM * (shiftHzPerT * at.BT - p.detuningHz) : idealSpeed(p, zM);
     const slope = wavelengthM * shiftHzPerT * at.dBdzTPerM;
     // Past the last sample the ideal profile's derivative diverges at the stop point only, never inside [0, L).
     const neededMPerS2 = resonantMPerS > 0 ? -resonantMPerS * slope : 0;

@@ -81,13 +81,34 @@ export function idealProfile(t: SlowerTransition, r: SlowerRequest): { profile?:
   return { profile, issues };
 }
 
+type ProfileShape = Pick<IdealProfile, 'lengthM' | 'stopLengthM' | 'biasT' | 'deltaBT' | 'sign' | 'captureMPerS' | 'finalMPerS'>;
+
+/**
+ * v(z)/v0 = √(1 − z/L0) for z clamped to [0, L]. At the exit it is vf/v0 itself, the ratio the
+ * entry and exit fields are made of: 1 − L/L0 = vf²/v0² cancels to round-off there, and the
+ * √ of that noise would put round-off into a field that is zero in theory (the decreasing design).
+ */
+function speedRatio(p: ProfileShape, z: number): number {
+  return z >= p.lengthM ? p.finalMPerS / p.captureMPerS : Math.sqrt(Math.max(1 - z / p.stopLengthM, 0));
+}
+
 /** B(z) and dB/dz of the ideal profile; z is clamped to [0, L] (the profile ends there). */
-export function idealField(p: Pick<IdealProfile, 'lengthM' | 'stopLengthM' | 'biasT' | 'deltaBT' | 'sign'>, zM: number): { BT: number; dBdzTPerM: number } {
+export function idealField(p: ProfileShape, zM: number): { BT: number; dBdzTPerM: number } {
   const z = Math.min(Math.max(zM, 0), p.lengthM);
-  const root = Math.sqrt(Math.max(1 - z / p.stopLengthM, 0));
+  const root = speedRatio(p, z);
   const BT = p.biasT + p.sign * p.deltaBT * root;
   const dBdzTPerM = zM < 0 || zM > p.lengthM || root === 0 ? 0 : (-p.sign * p.deltaBT) / (2 * p.stopLengthM * root);
   return { BT, dBdzTPerM };
+}
+
+/**
+ * The speed the ideal field is resonant with at z: v0 √(1 − z/L0), the capture and final speeds
+ * as given at the ends. The same as λ (shift·B − δ) in theory, without that difference's
+ * cancellation (which wrote 30.0000000000002 m/s for a final speed of 30 m/s).
+ */
+export function idealSpeed(p: ProfileShape, zM: number): number {
+  const z = Math.min(Math.max(zM, 0), p.lengthM);
+  return z >= p.lengthM ? p.finalMPerS : p.captureMPerS * speedRatio(p, z);
 }
 
 /** A bias that makes the profile something other than its design word says (a note, not an error). */

@@ -13,8 +13,12 @@ export interface GridPoint {
   at: { BT: number; dBdzTPerM: number };
 }
 
-export function checkGrid(field: AxisField, ideal: (zM: number) => number, lengthM: number, intervals: number, tol: number, maxDepth = 6): GridPoint[] {
-  const point = (zM: number): GridPoint => ({ zM, idealT: ideal(zM), at: field(zM) });
+/** `ideal` undefined: the field checked is the ideal one, evaluated once per point. */
+export function checkGrid(field: AxisField, ideal: ((zM: number) => number) | undefined, lengthM: number, intervals: number, tol: number, maxDepth = 6): GridPoint[] {
+  const point = (zM: number): GridPoint => {
+    const at = field(zM);
+    return { zM, idealT: ideal ? ideal(zM) : at.BT, at };
+  };
   const off = (a: number, m: number, b: number): number => Math.abs(m - (a + b) / 2);
   const out: GridPoint[] = [point(0)];
   const refine = (p0: GridPoint, p1: GridPoint, depth: number): void => {

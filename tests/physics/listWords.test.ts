@@ -1,0 +1,12 @@
+/** The list helper every message shares (its own module, not the term-symbol parser's). */
+import { describe, expect, it } from 'vitest';
+import { listWords } from '../../server/src/physics/listWords';
+
+describe('listWords', () => {
+  it('says none, one, two and more items as a sentence does', () => {
+    expect(listWords([])).toBe('');
+    expect(listWords(['a'])).toBe('a');
+    expect(listWords(['a', 'b'])).toBe('a or b');
+    expect(listWords(['text', 'json', 'csv'])).toBe('text, json or csv');
+  });
+});
