@@ -119,6 +119,3 @@ export function bandNote(placed: readonly PlacedBand[]): string {
   });
   return `Energy axis broken into ${placed.length} bands, each on its own scale: ${apart.join(', ')} (centre to centre).`;
 }
-
-/** Kept as a re-export while render/levels.ts imports it from here; it lives beside estimateTextWidth. */
-export { wrapNote } from './frame';
