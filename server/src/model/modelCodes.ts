@@ -13,6 +13,7 @@ export const MODEL_RULES = {
   'value-missing': { severity: 'error', summary: 'A setting has no value.' },
   'value-extra': { severity: 'warning', summary: 'A setting has more items than it uses.' },
   'value-decimal-comma': { severity: 'error', summary: 'A number written with a decimal comma (3,2 G) where one value goes.' },
+  'value-list-one-unit': { severity: 'error', summary: 'A list of numbers with one unit at the end (3, 2 G) where one value goes.' },
   'value-not-number': { severity: 'error', summary: 'A setting needs a plain number.' },
   'value-not-allowed': { severity: 'error', summary: 'A setting takes one of a fixed set of words.' },
   'value-out-of-range': { severity: 'error', summary: 'A value is negative or zero where it cannot be.' },
