@@ -2,10 +2,15 @@
  * Half-written and mistyped setups as a user types them (invented numbers): each mistake gets
  * one diagnostic at its own text, in plain words, and only quick fixes that fix it.
  */
-import { describe, expect, it } from 'vitest';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { cli } from '../cli/runCli';
 import { codeActions } from '../../server/src/features/codeActions';
 import { diagnostics } from '../../server/src/features/diagnostics';
 import { analysisOf, applyEdits, editsOf, URI } from './helpers';
+import { NEWER_BLOCKS } from './newerBlockMistakes';
 
 interface Case {
   name: string;
@@ -296,6 +301,7 @@ const CASES: Case[] = [
   },
 ];
 
+
 function describeFindings(text: string, notes = false): { findings: string[]; fixes: string[]; messages: string[] } {
   const lines = text.split(/\r\n|\r|\n/);
   const analysis = analysisOf(text);
@@ -316,7 +322,7 @@ function describeFindings(text: string, notes = false): { findings: string[]; fi
 }
 
 describe('bad inputs', () => {
-  for (const c of CASES) {
+  for (const c of [...CASES, ...NEWER_BLOCKS] as Case[]) {
     it(c.name, () => {
       const got = describeFindings(c.text, c.notes);
       expect(got.findings).toEqual(c.findings);
@@ -324,4 +330,28 @@ describe('bad inputs', () => {
       for (const words of c.says ?? []) expect(got.messages.join('\n')).toContain(words);
     });
   }
+});
+
+describe('the newer blocks\' mistakes on the command line', () => {
+  const dir = mkdtempSync(path.join(tmpdir(), 'sublevel-bad-inputs-'));
+  afterAll(() => rmSync(dir, { recursive: true, force: true }));
+  NEWER_BLOCKS.forEach((c, i) => {
+    it(`check, eval text, JSON and SARIF carry every finding, with no NaN or Infinity: ${c.name}`, () => {
+      const file = path.join(dir, `case${i}.sublevel`);
+      writeFileSync(file, c.text);
+      const check = cli('check', file).out;
+      const outputs = { text: cli('eval', file).out, json: cli('eval', file, '--format', 'json').out, sarif: cli('check', file, '--format', 'sarif').out };
+      for (const finding of c.findings) {
+        const [at, code] = finding.split(' ') as [string, string];
+        const line = at.split(':')[0]!;
+        const column = at.split(':')[1]!.split('-')[0]!;
+        expect(check, finding).toContain(`:${line}:${column} `);
+        expect(check, finding).toContain(code);
+        for (const [kind, out] of Object.entries(outputs)) expect(out, `${kind}: ${finding}`).toContain(code);
+      }
+      const sarif = JSON.parse(outputs.sarif) as { runs: { results: { ruleId: string }[] }[] };
+      expect(sarif.runs[0]!.results.map((r) => r.ruleId)).toEqual(expect.arrayContaining(c.findings.map((f) => f.split(' ')[1])));
+      for (const out of [check, ...Object.values(outputs)]) expect(out).not.toMatch(/\bNaN\b|Infinity/);
+    });
+  });
 });

@@ -6,6 +6,7 @@ import type { ParsedNumber, Range, SettingNode, Spanned, ValuePart } from '../fo
 import { makeProblem } from '../format/codes';
 import { convertSI, dimensionExamples, isUnitText, readQuantity, type Dimension } from '../format/units';
 import { listWords } from '../physics/termSymbol';
+import { withinApparatus } from './lengthRange';
 import type { ProblemList } from './problems';
 import type { Valued } from './types';
 
@@ -113,6 +114,7 @@ export function readPartQuantity(
     return undefined;
   }
   if (result.si === undefined || !Number.isFinite(result.si)) return undefined;
+  if (dimension === 'length' && !withinApparatus(result.si, part.text, part.range, problems)) return undefined;
   const uncertainty = result.siUncertainty;
   const unit = part.kind === 'quantity' ? part.unit.text : undefined;
   return { value: result.si, source: FILE_SOURCE, range: part.range, ...(uncertainty !== undefined ? { uncertainty } : {}), ...(unit !== undefined ? { unit } : {}) };
