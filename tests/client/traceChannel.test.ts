@@ -3,7 +3,9 @@
  * fake host, and then against the real language client (loaded with a stand-in for the editor
  * module) which decides from its trace channel's log level whether to trace at all.
  */
+import { readFileSync } from 'node:fs';
 import Module from 'node:module';
+import Ajv from 'ajv';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type * as vscode from 'vscode';
 import { createTraceChannel, TRACE_CHANNEL_NAME, type TraceChannelHost } from '../../client/src/host/traceChannel';
@@ -172,5 +174,31 @@ describe('with the real language client', () => {
     setting = 'messages';
     host.change('messages');
     expect(values).toEqual([1]);
+  });
+});
+
+describe('the declared setting', () => {
+  // The editor checks a user's settings against this declaration and warns on what it rejects;
+  // both forms the client and the channel read (vscode-languageclient refreshTrace) must pass.
+  const declared = (JSON.parse(readFileSync('package.json', 'utf8')) as {
+    contributes: { configuration: { properties: Record<string, object> } };
+  }).contributes.configuration.properties['sublevel.trace.server']!;
+  const valid = new Ajv({ strict: false }).compile(declared);
+
+  it('accepts the word and the object form, and nothing else', () => {
+    for (const ok of ['off', 'messages', 'compact', 'verbose', { verbosity: 'verbose' }, { verbosity: 'messages', format: 'json' }]) {
+      expect(valid(ok), JSON.stringify(ok)).toBe(true);
+    }
+    for (const bad of ['loud', 3, { verbosity: 'loud' }, { format: 'yaml' }, { verbosity: 'verbose', colour: 'red' }]) {
+      expect(valid(bad), JSON.stringify(bad)).toBe(false);
+    }
+  });
+
+  it('every verbosity it declares other than off turns the trace channel on', () => {
+    for (const word of ['messages', 'compact', 'verbose']) {
+      expect(createTraceChannel(fakeHost(word)).logLevel, word).toBe(LEVELS.Trace);
+      expect(createTraceChannel(fakeHost({ verbosity: word, format: 'json' })).logLevel, word).toBe(LEVELS.Trace);
+    }
+    expect(createTraceChannel(fakeHost({ format: 'json' })).logLevel).toBe(LEVELS.Off);
   });
 });

@@ -2,12 +2,14 @@ import fc from 'fast-check';
 import { readFileSync } from 'fs';
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
+import { NEWER_BLOCKS } from '../features/newerBlockMistakes';
 import { mutatedText } from '../mutatedExamples';
 
 const RUNS = Number(process.env.FUZZ_RUNS ?? 200);
 const seeds = ['lithium-beam', 'rubidium-bias', 'handmade-species', 'mistakes'].map((f) => readFileSync(`examples/${f}.sublevel`, 'utf8'));
 
-const mutated = mutatedText(seeds, 8);
+// The newer blocks' mistakes too, so their neighbourhoods are fuzzed.
+const mutated = mutatedText([...seeds, ...NEWER_BLOCKS.map((c) => c.text)], 8);
 
 describe('the whole pipeline never throws', () => {
   it('on mutated example files', () => {

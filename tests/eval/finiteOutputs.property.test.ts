@@ -7,6 +7,8 @@ import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import { finiteJsonText } from '../../server/src/eval/machineText';
 import { textReport } from '../../server/src/cli/textReport';
+import { NEWER_BLOCKS } from '../features/newerBlockMistakes';
+import { mutatedText } from '../mutatedExamples';
 
 const RUNS = Number(process.env.FUZZ_RUNS ?? 40);
 
@@ -85,6 +87,20 @@ describe('no NaN or Infinity in any output', () => {
         expect(report, text).not.toMatch(/NaN|Infinity/);
         expect(finiteJsonText(r)).not.toMatch(/NaN|Infinity/);
         for (const d of r.diagnostics) expect(d.message, text).not.toMatch(/NaN|Infinity/);
+      }),
+      { numRuns: RUNS },
+    );
+  }, 600_000);
+
+  it('on the newer blocks\' mistakes (sources, traps, slowers, data, fits, line shapes) with random edits', () => {
+    fc.assert(
+      fc.property(mutatedText(NEWER_BLOCKS.map((c) => c.text), 4), (text) => {
+        const a = analyze(text);
+        expect(a.problems.filter((p) => p.code === 'internal-error'), text).toEqual([]);
+        const r = a.result!;
+        expect(nonFinite(r), text).toEqual([]);
+        expect(textReport('x.sublevel', r).join('\n'), text).not.toMatch(/NaN|Infinity/);
+        expect(finiteJsonText(r)).not.toMatch(/NaN|Infinity/);
       }),
       { numRuns: RUNS },
     );

@@ -2,10 +2,15 @@
  * Half-written and mistyped setups as a user types them (invented numbers): each mistake gets
  * one diagnostic at its own text, in plain words, and only quick fixes that fix it.
  */
-import { describe, expect, it } from 'vitest';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { cli } from '../cli/runCli';
 import { codeActions } from '../../server/src/features/codeActions';
 import { diagnostics } from '../../server/src/features/diagnostics';
 import { analysisOf, applyEdits, editsOf, URI } from './helpers';
+import { NEWER_BLOCKS } from './newerBlockMistakes';
 
 interface Case {
   name: string;
@@ -258,7 +263,44 @@ const CASES: Case[] = [
     findings: ["3:6-7 beam-incomplete [b]", '5:21-23 unit-unknown [°K]'],
     fixes: ["unit-unknown: Change to 'K' →   source = oven 400 K"],
   },
+  {
+    // Before: a wrong dimension on `T` and an unused `m`, whose two fixes together wrote `180 T/m m`.
+    name: 'a unit typed with a blank where its slash goes (180 T m) is one error, with the one fix that writes T/m',
+    text: 'magnet m\n  field = 0.45 T\n  gradient = 180 T m\n  length = 8 cm\nmagnet n\n  field = 4.5 kG\n  gradient = 18 kG cm\n  length = 8 cm\n',
+    findings: ['3:18-21 unit-wrong-dimension [T m]', '7:17-22 unit-wrong-dimension [kG cm]'],
+    fixes: ['unit-wrong-dimension: Change the unit to T/m →   gradient = 180 T/m', 'unit-wrong-dimension: Change the unit to kG/cm →   gradient = 18 kG/cm'],
+    says: ["gradient needs T/m or G/cm, got 'T m' (a blank multiplies units): write T/m"],
+  },
+  {
+    // docs/format.md: one unit at the end is shared only by the three numbers of a point or size.
+    name: 'a list of numbers with one unit where one value goes (3, 2 G) is one error that says so, with no fix that drops a number',
+    text: 'field b = 3, 2 G\nmagnet m\n  field = 0.4, 0.5 T\n  gradient = 180 T/m\n  length = 8 cm\n',
+    findings: ['1:11-17 value-list-one-unit [3, 2 G]', '3:11-21 value-list-one-unit [0.4, 0.5 T]'],
+    fixes: [],
+    says: ["'3, 2 G' is a list of 2 numbers, and one unit at the end is shared only by the three numbers of a point or size"],
+  },
+  {
+    name: 'an unused list item goes with its comma',
+    text: 'coil c\n  radius  = 3 cm\n  turns   = 40, 5  # kept\n  current = 2 A\n',
+    findings: ['3:17-18 value-extra [5]'],
+    fixes: ['value-extra: Remove the unused rest of the value →   turns   = 40  # kept'],
+  },
+  {
+    // 2P has J = 1/2, 3/2 only (S = 1/2, L = 1; textbook).
+    name: 'a term with blanks inside its J (2P 5 /2, 2 S 1/2) is joined whole; a J the term cannot have is then said at the J as written',
+    text: 'species Na23\n  level a: 3p 2P 3 /2\n  level b: 3p 2P 5 /2\n  level c: 2 S 1/2\n',
+    findings: ['2:15-22 term-blank-inside [2P 3 /2]', '3:15-22 term-blank-inside [2P 5 /2]', '3:18-22 term-j-out-of-range [5 /2]', '4:12-19 term-blank-inside [2 S 1/2]'],
+    fixes: [
+      "term-blank-inside: Replace with '2P3/2' →   level a: 3p 2P3/2",
+      "term-blank-inside: Replace with '2P5/2' →   level b: 3p 2P5/2",
+      'term-j-out-of-range: Change J to 1/2 →   level b: 3p 2P 1/2',
+      'term-j-out-of-range: Change J to 3/2 →   level b: 3p 2P 3/2',
+      "term-blank-inside: Replace with '2S1/2' →   level c: 2S1/2",
+    ],
+    says: ['read as 2P5/2'],
+  },
 ];
+
 
 function describeFindings(text: string, notes = false): { findings: string[]; fixes: string[]; messages: string[] } {
   const lines = text.split(/\r\n|\r|\n/);
@@ -280,7 +322,7 @@ function describeFindings(text: string, notes = false): { findings: string[]; fi
 }
 
 describe('bad inputs', () => {
-  for (const c of CASES) {
+  for (const c of [...CASES, ...NEWER_BLOCKS] as Case[]) {
     it(c.name, () => {
       const got = describeFindings(c.text, c.notes);
       expect(got.findings).toEqual(c.findings);
@@ -288,4 +330,28 @@ describe('bad inputs', () => {
       for (const words of c.says ?? []) expect(got.messages.join('\n')).toContain(words);
     });
   }
+});
+
+describe('the newer blocks\' mistakes on the command line', () => {
+  const dir = mkdtempSync(path.join(tmpdir(), 'sublevel-bad-inputs-'));
+  afterAll(() => rmSync(dir, { recursive: true, force: true }));
+  NEWER_BLOCKS.forEach((c, i) => {
+    it(`check, eval text, JSON and SARIF carry every finding, with no NaN or Infinity: ${c.name}`, () => {
+      const file = path.join(dir, `case${i}.sublevel`);
+      writeFileSync(file, c.text);
+      const check = cli('check', file).out;
+      const outputs = { text: cli('eval', file).out, json: cli('eval', file, '--format', 'json').out, sarif: cli('check', file, '--format', 'sarif').out };
+      for (const finding of c.findings) {
+        const [at, code] = finding.split(' ') as [string, string];
+        const line = at.split(':')[0]!;
+        const column = at.split(':')[1]!.split('-')[0]!;
+        expect(check, finding).toContain(`:${line}:${column} `);
+        expect(check, finding).toContain(code);
+        for (const [kind, out] of Object.entries(outputs)) expect(out, `${kind}: ${finding}`).toContain(code);
+      }
+      const sarif = JSON.parse(outputs.sarif) as { runs: { results: { ruleId: string }[] }[] };
+      expect(sarif.runs[0]!.results.map((r) => r.ruleId)).toEqual(expect.arrayContaining(c.findings.map((f) => f.split(' ')[1])));
+      for (const out of [check, ...Object.values(outputs)]) expect(out).not.toMatch(/\bNaN\b|Infinity/);
+    });
+  });
 });

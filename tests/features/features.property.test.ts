@@ -25,6 +25,7 @@ import { scanText } from '../../server/src/format/scanner';
 import { analyzeFast } from '../../server/src/service/fastAnalysis';
 import { applyEdits, editsOf, URI } from './helpers';
 import { mutatedText } from '../mutatedExamples';
+import { NEWER_BLOCKS } from './newerBlockMistakes';
 
 const RUNS = Number(process.env.FUZZ_RUNS ?? 60);
 /** A feature call on a small document taking this long means something loops. */
@@ -45,11 +46,15 @@ const PIECES = [
   // Mistakes from the session-7 audit: the U+2212 minus, unusable numbers before a unit, a term split by a blank, populations.
   '\u22123.2', '1e\u22122', '1e400', '1e400T', 'NaN', '-inf', '1/0', '2P 3/2', '2P°3 /2', 'populations', '3 0 1', '2 5 1',
   'trap', 'slower', 'fit', 'data', 'sources', 'free', 'design', 'gravity',
+  // Session 9: the leftovers and the newer blocks' mistakes.
+  '180 T m', 'T m', '3, 2 G', '40, 5', '2P 5 /2', '2 S 1/2', '1e-320', '1e-305 nT', '1e308 m', '5 km', 'coil', 'radius', 'turns',
+  'current', 'point', 'kind', 'profile', '14 -1200 um', '-1200 um', 'at', '1 1 1, 1 1 2', 'g_J, g_J', 'start', 'cut', 'region',
+  'capture', 'final', 'lifetime', 'linewidth', 'doppler', 'instrument', 'lower', 'upper', '1 0',
 ];
 
 const pieced = fc.array(fc.constantFrom(...PIECES), { maxLength: 60 }).map((parts) => parts.join(' '));
 
-const mutated = mutatedText(EXAMPLES, 6);
+const mutated = mutatedText([...EXAMPLES, ...NEWER_BLOCKS.map((c) => c.text)], 6);
 
 const mistakesEdited = mutatedText([readFileSync('examples/mistakes.sublevel', 'utf8')], 2);
 

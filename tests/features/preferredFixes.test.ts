@@ -12,6 +12,7 @@ import { diagnostics } from '../../server/src/features/diagnostics';
 import { analyzeFast } from '../../server/src/service/fastAnalysis';
 import { applyEdits, editsOf, URI } from './helpers';
 import { mutatedText } from '../mutatedExamples';
+import { NEWER_BLOCKS } from './newerBlockMistakes';
 
 const RUNS = Number(process.env.FUZZ_RUNS ?? 60);
 
@@ -150,7 +151,7 @@ describe('preferred quick fixes', () => {
       .filter((f) => f.endsWith('.sublevel'))
       .map((f) => readFileSync(`examples/${f}`, 'utf8'));
     fc.assert(
-      fc.property(mutatedText(examples, 3), (text) => {
+      fc.property(mutatedText([...examples, ...NEWER_BLOCKS.map((c) => c.text)], 3), (text) => {
         expect(checkEveryPreferredFix(text)).toEqual([]);
       }),
       { numRuns: RUNS },

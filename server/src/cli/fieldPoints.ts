@@ -7,12 +7,13 @@
  */
 import { readQuantityArgument } from '../format/quantityArgument';
 import type { Vec3 } from '../physics/fields/types';
+import { MAX_LENGTH_M } from '../model/lengthRange';
 import { UsageError } from './args';
 
 /** Most points one run samples (a 500 × 500 grid). */
 export const MAX_FIELD_POINTS = 250_000;
 /** Largest coordinate accepted, m: far beyond any laboratory, small enough that squares stay finite. */
-export const MAX_COORDINATE_M = 1e3;
+export const MAX_COORDINATE_M = MAX_LENGTH_M;
 
 /** `lengthUnit`: the one length unit the options were written in, when they agree on one (reports echo it). */
 export type FieldPointPlan = { lengthUnit?: string } & (

@@ -74,6 +74,10 @@ function fitSpectral(f: FitRequestModel, gJOf: GJLookup, report: Report, failed:
   const rows: SpectralRow[] = [];
   for (const d of f.data) {
     const point = { lower: { twoF: d.lower!.twoF, twoMF: d.lower!.twoM }, upper: { twoF: d.upper!.twoF, twoMF: d.upper!.twoM } };
+    if (d.lower!.twoF === d.upper!.twoF && d.lower!.twoM === d.upper!.twoM) {
+      report('fit-pair-not-found', `lower and upper name one sublevel, F = ${half(d.lower!.twoF)}, m = ${half(d.lower!.twoM)}: a resonance or interval joins two different sublevels`, d.upper!.range);
+      return out;
+    }
     if (!pairExists(spec, point)) {
       report('fit-pair-not-found', `level ${level.name} has no sublevel pair F = ${half(d.lower!.twoF)}, m = ${half(d.lower!.twoM)} and F = ${half(d.upper!.twoF)}, m = ${half(d.upper!.twoM)}`, d.lower!.range);
       return out;
@@ -88,6 +92,12 @@ function fitSpectral(f: FitRequestModel, gJOf: GJLookup, report: Report, failed:
   const withoutField = rows.filter((r) => r.datum.fieldT === undefined);
   if (withoutField.length > 0 && !free.includes('field')) {
     report('fit-not-possible', 'a point has no field: write `at <field>` on it, or free the field', withoutField[0]!.datum.range);
+    return out;
+  }
+  const freeField = f.free.find((p) => p.name === 'field');
+  if (freeField && rows.length > 0 && withoutField.length === 0) {
+    // Else the fit ran and said only that a combination of parameters has no effect.
+    report('fit-not-possible', 'every point gives its own field (`at <field>`), so the free field acts on none of them: free other parameters, or leave `at` off the points taken at the unknown field', freeField.range);
     return out;
   }
   const withSigma = rows.filter((r) => r.datum.uncertaintyHz !== undefined).length;

@@ -60,7 +60,9 @@ export function evaluateResonance(
       problems.push({
         code: 'resonance-no-such-pair',
         severity: 'error',
-        message: `resonance '${r.name}': level ${level.name} has no magnetic-dipole or two-photon transition between these sublevels`,
+        message: sameSublevel(r)
+          ? `resonance '${r.name}': lower and upper name one sublevel; a transition joins two different sublevels`
+          : `resonance '${r.name}': level ${level.name} has no magnetic-dipole or two-photon transition between these sublevels`,
         range: r.lower!.range,
         related: [{ message: 'the other sublevel', range: r.upper!.range }],
       });
@@ -112,4 +114,8 @@ function toJson(t: MagneticTransition): MagneticTransitionResult {
     strength: t.strength,
     rabi_Hz_per_T: t.rabiHzPerT,
   };
+}
+
+function sameSublevel(r: ResonanceModel): boolean {
+  return !!r.lower && !!r.upper && r.lower.twoF === r.upper.twoF && r.lower.twoM === r.upper.twoM;
 }

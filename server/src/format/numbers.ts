@@ -33,12 +33,22 @@ function decimalsOf(mantissa: string): number {
   return dot < 0 ? 0 : mantissa.length - dot - 1;
 }
 
+/** The smallest number held with all its digits (IEEE 754 double); below it digits are lost, and near 1e-324 the number becomes 0. */
+const SMALLEST_FULL = 2.2250738585072014e-308;
+export const TOO_SMALL = 'is too small to represent (numbers below 2.2e-308 lose their digits or become 0): write 0 or check the exponent';
+
+/** A value that is not zero as written but below the smallest full number (`1e-320`, `1e-400`). */
+export function isTooSmall(value: number, writtenNonZero: boolean): boolean {
+  return writtenNonZero && Math.abs(value) < SMALLEST_FULL;
+}
+
 function fromDecimalMatch(m: RegExpExecArray): NumberReading {
   const [, rawSign = '', mantissa = '', unc, rawExp] = m;
   const sign = asciiMinus(rawSign);
   const exp = rawExp === undefined ? undefined : asciiMinus(rawExp);
   const value = Number(`${sign}${mantissa}${exp !== undefined ? `e${exp}` : ''}`) + 0; // +0 turns -0 into 0
   if (!Number.isFinite(value)) return { ok: false, reason: 'is too large to represent (numbers end near 1.8e308): check the exponent' };
+  if (isTooSmall(value, /[1-9]/.test(mantissa))) return { ok: false, reason: TOO_SMALL };
   const number: ParsedNumber = { value };
   if (unc !== undefined) {
     const power = exp !== undefined ? Number(exp) : 0;

@@ -9,7 +9,7 @@
 import type { Problem, Range, ValuePart } from './ast';
 import { makeProblem } from './codes';
 import { didYouMeanText, suggestNames } from './didYouMean';
-import { readNumberPrefix } from './numbers';
+import { isTooSmall, readNumberPrefix, TOO_SMALL } from './numbers';
 import { canonicalUnitName, isOffsetUnit, parseUnitSyntax } from './unitGrammar';
 import { BASE_DIMENSION_COUNT, convertScale, unitEntry } from './unitLookup';
 import { PLANCK_H, SPEED_OF_LIGHT } from '../physics/constants';
@@ -366,6 +366,9 @@ export function readQuantity(part: ValuePart, expected: Dimension, what?: string
   }
   if (!Number.isFinite(si)) {
     return { problem: makeProblem('syntax-bad-number', `${clip(part.text)} is too large to represent`, part.range) };
+  }
+  if (isTooSmall(si, part.number.value !== 0)) {
+    return { problem: makeProblem('syntax-bad-number', `${clip(part.text)} ${TOO_SMALL}`, part.range) };
   }
   const reading: QuantityReading = { si };
   if (part.number.uncertainty !== undefined) {

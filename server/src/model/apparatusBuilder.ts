@@ -284,9 +284,14 @@ function populationMistake(twoF: number, twoM: number | null | undefined, weight
   return undefined;
 }
 
+function halfText(twice: number): string {
+  return twice % 2 === 0 ? String(twice / 2) : `${twice}/2`;
+}
+
 /** `populations = F m weight, ...` or `F weight` for a whole F manifold. */
 function readPopulations(s: SettingNode, problems: ProblemList): BeamModel['populations'] {
   const out: NonNullable<BeamModel['populations']> = [];
+  const written: string[] = [];
   // Every wrong entry is said; one wrong entry leaves the beam without populations.
   let anyWrong = false;
   for (const g of s.groups) {
@@ -315,7 +320,18 @@ function readPopulations(s: SettingNode, problems: ProblemList): BeamModel['popu
       anyWrong = true;
       continue;
     }
+    const at = out.findIndex((p) => p.twoF === twoF && (p.twoM === undefined || twoM === undefined || p.twoM === twoM));
+    const earlier = out[at];
+    if (earlier) {
+      // The beam takes the first entry that names a sublevel; a later one would be dropped without a word.
+      const named = twoM === undefined ? `F = ${halfText(twoF)}` : `F = ${halfText(twoF)}, m_F = ${halfText(twoM)}`;
+      problems.add('beam-population-twice', `${named} already has its weight from the entry '${written[at]}', which is the one used; this entry is not`, range, {
+        related: [{ message: 'the entry that is used', range: earlier.range }],
+      });
+      continue;
+    }
     out.push({ twoF, ...(twoM !== undefined ? { twoM } : {}), weight, range });
+    written.push(g.map((p) => p.text).join(' '));
   }
   if (anyWrong) return undefined;
   if (out.length > 0 && out.every((p) => p.weight === 0)) {

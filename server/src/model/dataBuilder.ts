@@ -5,6 +5,8 @@
  * where it is written (a line of the CSV file is reported on the `file` setting with its number).
  */
 import type { BlockNode, Range, SettingNode, ValuePart } from '../format/ast';
+import { physicalField, MAX_FIELD_T } from './fieldRange';
+import { MAX_LENGTH_M } from './lengthRange';
 import { MAX_USED_FILE_BYTES } from './limits';
 import { resolveLocation } from './locations';
 import { readCsvPoints } from './csvPoints';
@@ -98,7 +100,7 @@ function readSpectralPoint(s: SettingNode, d: DataModel, problems: ProblemList):
     problems.add('data-point-malformed', `a measured frequency must be positive, got ${head[0]!.text}`, head[0]!.range);
     return;
   }
-  const field = tail[0] ? readPartQuantity(tail[0], 'flux-density', problems, 'point') : undefined;
+  const field = tail[0] ? physicalField(readPartQuantity(tail[0], 'flux-density', problems, 'point'), tail[0].text, tail[0].range, problems) : undefined;
   if (tail[0] && !field) return;
   if (field && field.value < 0) {
     problems.add('data-point-malformed', `a field is not negative here; got ${tail[0]!.text}`, tail[0]!.range);
@@ -119,9 +121,25 @@ function plainNumber(p: ValuePart | undefined): number | undefined {
   return p && p.kind === 'number' ? p.number.value : undefined;
 }
 
+/**
+ * A profile point whose position is not first (`14 -120 um`: the columns swapped) or that has
+ * no counts (`-120 um`): said as such, not as a missing unit on the counts with fixes that add one.
+ */
+function misplacedPosition(parts: readonly ValuePart[]): string | undefined {
+  const at = parts.findIndex((p) => p.kind === 'quantity');
+  if (parts.length === 1 && at === 0) return `this point gives a position but no counts: write point = ${parts[0]!.text} <counts> [<error>]`;
+  if (at <= 0 || parts.length > 3 || parts.some((p, i) => i !== at && p.kind !== 'number')) return undefined;
+  return `the position goes first, then the counts: write point = ${parts[at]!.text} ${parts.filter((_, i) => i !== at).map((p) => p.text).join(' ')}`;
+}
+
 /** `point = -120 um 14` or `point = -120 um 14 4` (position, counts, optional error). */
 function readProfilePoint(s: SettingNode, d: DataModel, problems: ProblemList): void {
   const parts = s.groups.flat();
+  const misplaced = misplacedPosition(parts);
+  if (misplaced && s.groups.length === 1) {
+    problems.add('data-point-malformed', misplaced, s.valueText.range);
+    return;
+  }
   if (parts.length < 2 || parts.length > 3 || s.groups.length > 1) {
     problems.add('data-point-malformed', 'write point = <position> <counts> [<error>], e.g. point = -120 um 14 4', s.valueText.range.start === s.valueText.range.end ? s.range : s.valueText.range);
     return;
@@ -194,10 +212,14 @@ function readFileSetting(s: SettingNode, d: DataModel, sources: SetupSources, pr
         problems.add('data-counts-invalid', `${written} line ${row.line}: counts must be ≥ 0 and errors > 0`, range, { related: [{ message: 'this line', range: lineRange(row.line), uri: location }] });
         continue;
       }
+      if (!(Math.abs(v.position!) <= MAX_LENGTH_M)) {
+        problems.add('data-point-malformed', `${written} line ${row.line}: a position is within 1 km of the beam axis`, range, { related: [{ message: 'this line', range: lineRange(row.line), uri: location }] });
+        continue;
+      }
       d.profile.push({ positionM: v.position!, counts, ...(v.error !== undefined ? { error: v.error } : {}), range, csvLine: row.line });
     } else {
-      if (!(v.frequency! > 0) || (v.field !== undefined && v.field < 0) || (v.uncertainty !== undefined && !(v.uncertainty > 0))) {
-        problems.add('data-point-malformed', `${written} line ${row.line}: frequencies and uncertainties must be positive and fields not negative`, range, {
+      if (!(v.frequency! > 0) || (v.field !== undefined && !(v.field >= 0 && v.field <= MAX_FIELD_T)) || (v.uncertainty !== undefined && !(v.uncertainty > 0))) {
+        problems.add('data-point-malformed', `${written} line ${row.line}: frequencies and uncertainties must be positive and fields from 0 to 1e5 T`, range, {
           related: [{ message: 'this line', range: lineRange(row.line), uri: location }],
         });
         continue;

@@ -52,7 +52,12 @@ export function buildFit(node: BlockNode, data: NameIndex<DataModel>, problems: 
       reportParameter(ref, problems);
       return;
     }
-    if (!f.free.some((x) => x.name === ref.text)) f.free.push({ name: ref.text, range: ref.range });
+    const earlier = f.free.find((x) => x.name === ref.text);
+    if (earlier) {
+      problems.add('fit-parameter-twice', `${ref.text} is already free; a parameter is freed once`, ref.range, { related: [{ message: `${ref.text} is freed here`, range: earlier.range }] });
+      return;
+    }
+    f.free.push({ name: ref.text, range: ref.range });
   };
   if (node.link?.from) addData(node.link.from.name);
   if (node.link?.to) addFree(node.link.to.name);
@@ -115,6 +120,11 @@ function readStarts(s: SettingNode, f: FitRequestModel, problems: ProblemList): 
     }
     if (!isParameter(name.text)) {
       reportParameter(name, problems);
+      continue;
+    }
+    if (START_DIMENSION[name.text] === 'dimensionless' && value.kind === 'quantity') {
+      // Else "fraction needs a plain number or %", which names no setting the user wrote.
+      problems.add('fit-start-malformed', `the start of ${name.text} is a plain number, got ${value.text}`, value.range);
       continue;
     }
     const v = readPartQuantity(value, START_DIMENSION[name.text], problems, name.text);

@@ -3,7 +3,10 @@
  * reporting a plain-words problem at the value's range when the value does not fit.
  */
 import type { ParsedNumber, Range, SettingNode, Spanned, ValuePart } from '../format/ast';
-import { isUnitText, readQuantity, type Dimension } from '../format/units';
+import { makeProblem } from '../format/codes';
+import { convertSI, dimensionExamples, isUnitText, readQuantity, type Dimension } from '../format/units';
+import { listWords } from '../physics/termSymbol';
+import { withinApparatus } from './lengthRange';
 import type { ProblemList } from './problems';
 import type { Valued } from './types';
 
@@ -24,6 +27,14 @@ export function singlePart(setting: SettingNode, problems: ProblemList, what: st
     problems.add('value-decimal-comma', `'${decimal.written}' has a decimal comma; a comma separates list items, so write ${decimal.meant}`, decimal.range, { data: { suggestions: [decimal.meant] } });
     return undefined;
   }
+  if (isListWithOneUnit(setting.groups)) {
+    problems.add(
+      'value-list-one-unit',
+      `${setting.key.text} takes one value (${what}); '${setting.valueText.text}' is a list of ${setting.groups.length} numbers, and one unit at the end is shared only by the three numbers of a point or size: write one value`,
+      setting.valueText.range,
+    );
+    return undefined;
+  }
   if (parts.length > 1 || setting.groups.length > 1) {
     const extra = parts[1] ?? parts[0]!;
     problems.add('value-extra', `${setting.key.text} takes one value (${what}); the rest of the line is not used`, {
@@ -32,6 +43,13 @@ export function singlePart(setting: SettingNode, problems: ProblemList, what: st
     });
   }
   return isUnreadable(parts[0]) ? undefined : parts[0];
+}
+
+/** `3, 2 G`: plain numbers, then one quantity, written where one value goes. */
+function isListWithOneUnit(groups: ValuePart[][]): boolean {
+  if (groups.length < 2 || groups.some((g) => g.length !== 1)) return false;
+  const items = groups.map((g) => g[0]!);
+  return items[items.length - 1]!.kind === 'quantity' && items.slice(0, -1).every((p) => p.kind === 'number');
 }
 
 /**
@@ -58,9 +76,30 @@ export function readSettingQuantity(
   problems: ProblemList,
   what: string,
 ): Valued<number> | undefined {
+  if (unitWithBlank(setting, dimension, problems)) return undefined;
   const part = singlePart(setting, problems, what);
   if (!part) return undefined;
   return readPartQuantity(part, dimension, problems, setting.key.text);
+}
+
+/**
+ * `gradient = 180 T m`: a unit typed with a blank where its `/` goes. Read apart it gave a wrong
+ * dimension and an unused `m`, whose two fixes together wrote `180 T/m m`; one error, one fix.
+ */
+function unitWithBlank(setting: SettingNode, dimension: Dimension, problems: ProblemList): boolean {
+  const [only, ...more] = setting.groups;
+  if (!only || more.length > 0 || only.length !== 2) return false;
+  const [quantity, word] = only as [ValuePart, ValuePart];
+  if (quantity.kind !== 'quantity' || word.kind !== 'word' || !isUnitText(word.text)) return false;
+  const written = quantity.unit.text;
+  const meant = `${written}/${word.text}`;
+  if (convertSI(1, dimension, written) !== undefined || convertSI(1, dimension, meant) === undefined) return false;
+  const range = { start: quantity.unit.range.start, end: word.range.end };
+  const needs = listWords(dimensionExamples(dimension));
+  problems.push(makeProblem('unit-wrong-dimension', `${setting.key.text} needs ${needs}, got '${written} ${word.text}' (a blank multiplies units): write ${meant}`, range, {
+    data: { suggestions: [meant] },
+  }));
+  return true;
 }
 
 export function readPartQuantity(
@@ -75,6 +114,7 @@ export function readPartQuantity(
     return undefined;
   }
   if (result.si === undefined || !Number.isFinite(result.si)) return undefined;
+  if (dimension === 'length' && !withinApparatus(result.si, part.text, part.range, problems)) return undefined;
   const uncertainty = result.siUncertainty;
   const unit = part.kind === 'quantity' ? part.unit.text : undefined;
   return { value: result.si, source: FILE_SOURCE, range: part.range, ...(uncertainty !== undefined ? { uncertainty } : {}), ...(unit !== undefined ? { unit } : {}) };

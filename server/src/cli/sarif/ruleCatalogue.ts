@@ -43,6 +43,7 @@ const FAMILY_HELP: readonly [RegExp, string][] = [
   [/^(?:field|magnet|beam)-/, 'Check the apparatus settings against docs/beam.md; the message names the setting and the value.'],
   [/^(?:line|resonance|pair|scan|no-resonance|no-insensitive)/, 'Check the line or resonance against docs/transitions.md; the message names the levels involved.'],
   [/^(?:r2|diamagnetic)-/, 'Give a whole term the valence electron\u2019s ⟨r²⟩ as `r2 = … a0^2` (docs/format.md); the diamagnetic term it adds is in docs/engine.md.'],
+  [/^(?:fit|data)-/, 'Check the data and fit blocks against docs/fit.md (points, CSV columns, free parameters, starting values); the message names the point or parameter.'],
   [/^slower-/, 'Check the slower block against docs/slower.md: the line, speeds, safety factor, bias and coils; the message names what is missing or where atoms are lost.'],
   [/^zeeman-/, 'Read the exact sublevel energies rather than the linear formula at this field (docs/engine.md).'],
   [/^(?:document|too-many|evaluation-cut|level-too|level-not)/, 'The file or a level is past a size or time cap; the caps are listed in docs/reliability.md.'],

@@ -51,8 +51,11 @@ export function removeExtraValueFix(ctx: FixContext): CodeAction[] {
   if (r.start.line !== r.end.line) return [];
   const doc = ctx.analysis.doc;
   // Only text the problem covers goes; positionToOffset clamps a stale range to the line.
-  const from = positionToOffset(doc, r.start) - doc.lineStarts[r.start.line]!;
+  const written = positionToOffset(doc, r.start) - doc.lineStarts[r.start.line]!;
   const to = positionToOffset(doc, r.end) - doc.lineStarts[r.start.line]!;
-  if (to <= from) return [];
+  if (to <= written) return [];
+  // The comma before an unused list item goes with it (`turns = 40, 5` → `turns = 40`, not `40,`).
+  const before = lineText(doc, r.start.line).slice(0, written).trimEnd();
+  const from = before.endsWith(',') ? before.length - 1 : written;
   return [quickFix(ctx, 'Remove the unused rest of the value', [removeOnLine(doc, r.start.line, from, to)])];
 }
