@@ -5,7 +5,7 @@
 import type { ParsedNumber, Range, SettingNode, Spanned, ValuePart } from '../format/ast';
 import { makeProblem } from '../format/codes';
 import { convertSI, dimensionExamples, isUnitText, readQuantity, type Dimension } from '../format/units';
-import { listWords } from '../physics/termSymbol';
+import { listWords } from '../physics/listWords';
 import { withinApparatus } from './lengthRange';
 import type { ProblemList } from './problems';
 import type { Valued } from './types';
