@@ -82,6 +82,18 @@ describe('textbook closed forms (from memory; standard tables)', () => {
     expect(wigner6j(2, 2, 2, 2, 2, 2)).toBeCloseTo(1 / 6, 15);
   });
 
+  it('(j j 0; m −m 0) = (−1)^(j−m)/√(2j+1) for j up to 70, asked twice (remembered values, both cache keys)', () => {
+    // Standard closed form (from memory). 2j = 0 … 140 covers the packed key (2j < 128) and the text key.
+    for (let pass = 0; pass < 2; pass++) {
+      for (let twoJ = 0; twoJ <= 140; twoJ += 1) {
+        for (let twoM = -twoJ; twoM <= twoJ; twoM += 2) {
+          const sign = ((twoJ - twoM) / 2) % 2 === 0 ? 1 : -1;
+          expect(wigner3j(twoJ, twoJ, 0, twoM, -twoM, 0)).toBeCloseTo(sign / Math.sqrt(twoJ + 1), 13);
+        }
+      }
+    }
+  });
+
   it('returns 0 outside the physical domain and NaN for non-integer twice-values', () => {
     expect(wigner3j(2, 2, 6, 0, 0, 0)).toBe(0);
     expect(wigner3j(2, 2, 2, 2, 2, -4)).toBe(0);

@@ -31,15 +31,15 @@ export function wigner3j(
   twoM2: number,
   twoM3: number,
 ): number {
-  const args = [twoJ1, twoJ2, twoJ3, twoM1, twoM2, twoM3];
-  if (!args.every(Number.isInteger)) return NaN;
+  const whole = Number.isInteger(twoJ1) && Number.isInteger(twoJ2) && Number.isInteger(twoJ3);
+  if (!whole || !Number.isInteger(twoM1) || !Number.isInteger(twoM2) || !Number.isInteger(twoM3)) return NaN;
   if (twoM1 + twoM2 + twoM3 !== 0) return 0;
   if (!isTriangle(twoJ1, twoJ2, twoJ3)) return 0;
   if (!isProjection(twoJ1, twoM1) || !isProjection(twoJ2, twoM2) || !isProjection(twoJ3, twoM3)) return 0;
   // Selection rule: all m = 0 and j1 + j2 + j3 odd gives exactly zero.
   if (twoM1 === 0 && twoM2 === 0 && ((twoJ1 + twoJ2 + twoJ3) / 2) % 2 === 1) return 0;
 
-  const key = args.join(',');
+  const key = key3j(twoJ1, twoJ2, twoJ3, twoM1, twoM2);
   const cached = cache3j.get(key);
   if (cached !== undefined) return cached;
 
@@ -270,9 +270,21 @@ function isProjection(twoJ: number, twoM: number): boolean {
 }
 
 const CACHE_LIMIT = 200_000;
-const cache3j = new Map<string, number>();
+const cache3j = new Map<number | string, number>();
 const cache6j = new Map<string, number>();
-function remember(cache: Map<string, number>, key: string, value: number): void {
+
+/**
+ * The 3j cache key. m3 = −m1 − m2 once the checks have passed, so five arguments name the
+ * symbol; when every 2j is below 128 they pack into one integer below 2^37 (exact in a
+ * double), which is much cheaper than joining the arguments into a string (the line
+ * components ask for the same few symbols hundreds of thousands of times in a large file).
+ */
+function key3j(twoJ1: number, twoJ2: number, twoJ3: number, twoM1: number, twoM2: number): number | string {
+  if (twoJ1 < 128 && twoJ2 < 128 && twoJ3 < 128) return (((twoJ1 * 128 + twoJ2) * 128 + twoJ3) * 256 + twoM1 + 128) * 256 + twoM2 + 128;
+  return `${twoJ1},${twoJ2},${twoJ3},${twoM1},${twoM2}`;
+}
+
+function remember<K>(cache: Map<K, number>, key: K, value: number): void {
   if (cache.size >= CACHE_LIMIT) cache.clear();
   cache.set(key, value);
 }

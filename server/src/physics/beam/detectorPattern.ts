@@ -149,8 +149,13 @@ export function detectorPattern(input: PatternInput): DetectorPattern {
 /**
  * As detectorPattern, optionally with the grouping of sublevels fixed by the caller (used by the
  * solvers, which judge dips and need no off-grid peak positions: `refine` false skips that step).
+ * `verdictOnly` is for callers that read only the verdicts (peaks, pairs, allResolved, the errors
+ * among the issues), such as the advice's coarse screen: the arrays are then work arrays that the
+ * next such call overwrites, and the maxima and the detector's warnings are not computed. The
+ * verdicts are the same numbers as without it.
  */
-export function computePattern(input: PatternInput, fixedGroups?: number[][], refine = true): DetectorPattern {
+export function computePattern(given: PatternInput, fixedGroups?: number[][], refine = true, verdictOnly = false): DetectorPattern {
+  const input = sameShapeInput(given);
   const { options, issues: optionIssues } = resolveOptions(input);
   const issues = [
     ...optionIssues,
@@ -182,7 +187,8 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][], re
   const { edgesM, centresM } = detectorGrid(span.startM, span.endM, n, landing, gridScaleM(image.kernelFwhmM, law));
 
   // One allocation for the total and every sublevel's contribution (views into one block).
-  const block = new Float64Array((sublevels.length + 1) * n);
+  const size = (sublevels.length + 1) * n;
+  const block = verdictOnly ? scratchFloat64('pattern.verdictBlock', size).fill(0) : new Float64Array(size);
   const total = block.subarray(0, n);
   const perSublevel: Float64Array[] = [];
   const inverseWidth = scratchFloat64('pattern.inverseWidth', n);
@@ -290,10 +296,10 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][], re
     pairs,
     mergedLonePeak,
     allResolved: pairs.every((p) => p.resolved) && !mergedLonePeak,
-    maxima: localMaxima(total, centresM, options.minRelativeProminence),
+    maxima: verdictOnly ? [] : localMaxima(total, centresM, options.minRelativeProminence),
     issues,
   };
-  addDetectorChecks(result, geometry);
+  if (!verdictOnly) addDetectorChecks(result, geometry);
   if (offGrid > 0.05) {
     issues.push(
       beamIssue(
@@ -304,6 +310,40 @@ export function computePattern(input: PatternInput, fixedGroups?: number[][], re
     );
   }
   return result;
+}
+
+/**
+ * The input copied into objects of one fixed shape. Callers build inputs in several shapes
+ * (the advice's trials spread a changed geometry or bin count over the beam's input), and each
+ * new shape seen by the optimised computePattern threw its compiled code away (a "wrong map"
+ * deoptimisation) and compiled it again, four times in the generated 20,000-line file's
+ * evaluation (`--trace-deopt`); now once.
+ * Absent options stay undefined, which every reader treats as absent.
+ */
+function sameShapeInput(i: PatternInput): PatternInput {
+  const g = i.geometry;
+  return {
+    massKg: i.massKg,
+    geometry: {
+      slit1M: g.slit1M,
+      slit2M: g.slit2M,
+      slitSeparationM: g.slitSeparationM,
+      magnetLengthM: g.magnetLengthM,
+      driftM: g.driftM,
+      detectorWidthM: g.detectorWidthM,
+      gradientTPerM: g.gradientTPerM,
+      detectorOffsetM: g.detectorOffsetM,
+    },
+    source: i.source,
+    sublevels: i.sublevels,
+    bins: i.bins,
+    speedPanels: i.speedPanels,
+    tailFraction: i.tailFraction,
+    mergeFraction: i.mergeFraction,
+    dipCriterion: i.dipCriterion,
+    spanM: i.spanM,
+    minRelativeProminence: i.minRelativeProminence,
+  };
 }
 
 /** Width of grid bin i: the refinement's first step. */

@@ -33,7 +33,7 @@ export function screenable(input: PatternInput): boolean {
 
 /** True only when the full pattern's worst dip is certainly above `bar` (and the pattern has pairs to judge). */
 export function certainlyAbove(input: PatternInput, groups: number[][], bar: number): boolean {
-  const coarse = computePattern({ ...input, bins: SCREEN_BINS }, groups, false);
+  const coarse = computePattern({ ...input, bins: SCREEN_BINS }, groups, false, true);
   if (hasBeamError(coarse.issues) || coarse.pairs.length === 0) return false;
   const worst = worstDip(coarse);
   return worst - (worst === 1 ? NO_DIP_MARGIN : SCREEN_MARGIN) > bar;
