@@ -92,8 +92,10 @@ function readCut(s: SettingNode, problems: ProblemList): Valued<number> | undefi
   if (!asT.problem && asT.si !== undefined) return checkCut(s, { value: BOLTZMANN_K * asT.si, source: 'this file', range: part.range, ...unit }, problems);
   const asF = readQuantity(part, 'frequency-like');
   if (!asF.problem && asF.si !== undefined) return checkCut(s, { value: PLANCK_H * asF.si, source: 'this file', range: part.range, ...unit }, problems);
-  // Say the reading that has a fix (`2 mk` → `mK`), else the frequency's.
-  const p = [asT.problem, asF.problem].find((q) => (q?.data?.suggestions?.length ?? 0) > 0) ?? asF.problem ?? asT.problem;
+  // A misspelt unit gets the reading that knows its spelling (`2 mk` → `mK`); a unit of the wrong
+  // dimension gets the frequency's fixes (a temperature list would offer degC for a cut).
+  const spelled = [asT.problem, asF.problem].find((q) => q !== undefined && q.code !== 'unit-wrong-dimension' && (q.data?.suggestions?.length ?? 0) > 0);
+  const p = spelled ?? asF.problem ?? asT.problem;
   if (p) problems.push({ ...p, message: `cut needs an energy written as a temperature (e.g. 1 mK) or a frequency (e.g. 20 MHz); ${p.message}` });
   return undefined;
 }
