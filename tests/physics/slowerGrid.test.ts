@@ -98,6 +98,17 @@ describe('the ideal check computes each point once, from the profile', () => {
     for (let i = 0; i < samples.length; i++) expect(samples[i]!.neededMPerS2 / viaField.samples[i]!.neededMPerS2 - 1).toBeCloseTo(0, 9);
   });
 
+  it('over 44 capture speeds the last sample is the exit itself: exit field 0 and the final speed as written (8 % of lengths fell one ulp short)', () => {
+    for (let capture = 300; capture < 740; capture += 10) {
+      const dec = idealProfile(t, { captureMPerS: capture, finalMPerS: 45, safety: 0.5, design: 'decreasing', saturation: 3 }).profile!;
+      const samples = checkDesign({ profile: dec, shiftHzPerT: dec.sign * t.rateHzPerT, wavelengthM: t.wavelengthM, saturation: 3, points: 101 }).samples;
+      const last = samples[samples.length - 1]!;
+      expect(last.zM, `capture ${capture}`).toBe(dec.lengthM);
+      expect(last.idealT, `capture ${capture}`).toBe(0);
+      expect(last.resonantMPerS, `capture ${capture}`).toBe(45);
+    }
+  });
+
   it('the field at the exit is the profile\u2019s exit field exactly: 0 for the decreasing design at its default bias', () => {
     const dec = idealProfile(t, { captureMPerS: 500, finalMPerS: 30, safety: 0.5, design: 'decreasing', saturation: 3 }).profile!;
     expect(idealField(dec, dec.lengthM).BT).toBe(0);

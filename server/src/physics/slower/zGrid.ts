@@ -33,6 +33,7 @@ export function checkGrid(field: AxisField, ideal: ((zM: number) => number) | un
     }
     out.push(p1);
   };
-  for (let i = 1; i <= intervals; i++) refine(out[out.length - 1]!, point((lengthM * i) / intervals), 0);
+  // The last point is the exit itself: (L·n)/n can fall one unit in the last place short of L.
+  for (let i = 1; i <= intervals; i++) refine(out[out.length - 1]!, point(i === intervals ? lengthM : (lengthM * i) / intervals), 0);
   return out;
 }
