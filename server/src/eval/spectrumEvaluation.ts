@@ -89,7 +89,7 @@ export function addSpectra(line: LineModel, result: LineResult, problems: Proble
     // The highest sample only brackets the peak (samples are up to half a line width apart): refine it.
     const last = samples.offsetHz.length - 1;
     const peak = last > 0 && widths.sigmaHz + widths.gammaHz > 0
-      ? spectrumPeak(f.components.map((c, j) => ({ frequencyHz: c.offset_Hz, weight: weights[j] ?? 0 })), widths.sigmaHz, widths.gammaHz, samples.offsetHz[Math.max(0, k - 1)]!, samples.offsetHz[Math.min(last, k + 1)]!)
+      ? spectrumPeak(f.components.map((c, j) => ({ frequencyHz: c.offset_Hz, weight: weights[j] ?? 0 })), widths.sigmaHz, widths.gammaHz, samples.offsetHz[Math.max(0, k - 1)]!, samples.offsetHz[Math.min(last, k + 1)]!, samples.offsetHz[k]!)
       : { offsetHz: samples.offsetHz[k]!, perHz: samples.intensity[k]! };
     return { ...f, spectrum: { ...partial, peak_offset_Hz: peak.offsetHz, peak_per_Hz: peak.perHz } };
   });

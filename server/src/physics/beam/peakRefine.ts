@@ -15,6 +15,7 @@ import { gaussLegendre } from './gaussLegendre';
 import type { SlitImage } from './slitImage';
 import type { SpeedLaw } from './speedLaw';
 import { equalWithinRoundOff } from '../roundOff';
+import { goldenMaximum } from '../goldenMaximum';
 
 export interface RefineMember {
   /** k in z = k/v², m³/s². */
@@ -77,33 +78,11 @@ export function refinePeak(guessM: number, stepM: number, members: readonly Refi
   if (members.every((m) => m.k <= 0)) return -refinePeak(-guessM, stepM, members.map((m) => ({ k: -m.k, weight: m.weight })), law, image);
   const f = (x: number): number => exactProfile(x, members, law, image);
   const half = 1.5 * stepM;
-  let lo = guessM - half;
-  let hi = guessM + half;
-  let x1 = hi - GOLDEN * (hi - lo);
-  let x2 = lo + GOLDEN * (hi - lo);
-  let f1 = f(x1);
-  let f2 = f(x2);
-  while (hi - lo > 1e-6 * half) {
-    if (f1 < f2) {
-      lo = x1;
-      x1 = x2;
-      f1 = f2;
-      x2 = lo + GOLDEN * (hi - lo);
-      f2 = f(x2);
-    } else {
-      hi = x2;
-      x2 = x1;
-      f2 = f1;
-      x1 = hi - GOLDEN * (hi - lo);
-      f1 = f(x1);
-    }
-  }
-  const x = 0.5 * (lo + hi);
+  const x = goldenMaximum(f, guessM - half, guessM + half, 1e-6 * half);
   const onEdge = Math.min(x - (guessM - half), guessM + half - x) < 1e-5 * half;
   return Number.isFinite(x) && !onEdge && f(x) >= f(guessM) ? x : guessM;
 }
 
-const GOLDEN = (Math.sqrt(5) - 1) / 2;
 
 /**
  * Members that pair off as ±k with equal weights (a merged σ pair of a J = 1/2 level) make a

@@ -2,40 +2,30 @@
  * The highest point of a synthesized spectrum between two frequencies: the sampled grid only
  * brackets it (its step is up to half a line width), so the maximum is refined on the exact sum
  * of Voigt profiles by golden-section search. The bracket must hold one maximum (the caller
- * gives the samples either side of the highest one).
+ * gives the samples either side of the highest one). The search settles a flat top only to about
+ * √ε of the width, so the highest sample is kept unless the search truly beats it, and a peak
+ * whose height at offset 0 is the same to rounding (a symmetric pattern) is at 0, not at −0.2 Hz.
  */
+import { goldenMaximum } from '../goldenMaximum';
 import type { WeightedComponent } from './spectrum';
 import { VoigtShape } from './voigt';
 
-const INVERSE_GOLDEN = (Math.sqrt(5) - 1) / 2;
 /** 0.618^80 ≈ 2e-17: the bracket shrinks to round-off of its ends. */
 const ITERATIONS = 80;
+/** A height gain below this fraction (about 45 ε) is rounding of the Voigt sums, not a higher point. */
+const HEIGHT_ROUND_OFF = 1e-14;
 
-export function spectrumPeak(components: readonly WeightedComponent[], sigmaHz: number, gammaHz: number, loHz: number, hiHz: number): { offsetHz: number; perHz: number } {
+export function spectrumPeak(components: readonly WeightedComponent[], sigmaHz: number, gammaHz: number, loHz: number, hiHz: number, sampleHz: number): { offsetHz: number; perHz: number } {
   const shape = new VoigtShape(sigmaHz, gammaHz);
   const live = components.filter((c) => c.weight !== 0);
   const f = (x: number): number => live.reduce((sum, c) => sum + c.weight * shape.at(x - c.frequencyHz), 0);
-  let a = Math.min(loHz, hiHz);
-  let b = Math.max(loHz, hiHz);
-  let c = b - INVERSE_GOLDEN * (b - a);
-  let d = a + INVERSE_GOLDEN * (b - a);
-  let fc = f(c);
-  let fd = f(d);
-  for (let i = 0; i < ITERATIONS && b - a > 0; i++) {
-    if (fc >= fd) {
-      b = d;
-      d = c;
-      fd = fc;
-      c = b - INVERSE_GOLDEN * (b - a);
-      fc = f(c);
-    } else {
-      a = c;
-      c = d;
-      fc = fd;
-      d = a + INVERSE_GOLDEN * (b - a);
-      fd = f(d);
-    }
+  const x = goldenMaximum(f, Math.min(loHz, hiHz), Math.max(loHz, hiHz), 0, ITERATIONS);
+  const fx = f(x);
+  const fSample = f(sampleHz);
+  const found = Number.isFinite(fx) && fx > fSample * (1 + HEIGHT_ROUND_OFF) ? { offsetHz: x, perHz: fx } : { offsetHz: sampleHz, perHz: fSample };
+  if (found.offsetHz !== 0 && Math.min(loHz, hiHz) <= 0 && Math.max(loHz, hiHz) >= 0) {
+    const f0 = f(0);
+    if (f0 >= found.perHz * (1 - HEIGHT_ROUND_OFF)) return { offsetHz: 0, perHz: Math.max(f0, found.perHz) };
   }
-  const x = (a + b) / 2;
-  return { offsetHz: x, perHz: f(x) };
+  return found;
 }
