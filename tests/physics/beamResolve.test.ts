@@ -234,4 +234,14 @@ describe('one peak: merged, or nothing to resolve', () => {
     // A magnet built from sources is searched without gradient, length and drift: not "nothing within reach".
     expect(resolvingOptions(weakMagnet, detectorPattern(weakMagnet), ['slits', 'detector', 'speedSpread']).nothingWithinReach).toBe(false);
   });
+
+  it('a drift of 0 is searched from a tenth of the magnet length: its reach says so, not "100 times the present one"', () => {
+    const close = { ...pair, sublevels: [{ label: 'a', momentJT: BOHR_MAGNETON, population: 1 }, { label: 'b', momentJT: BOHR_MAGNETON * (1 + 1e-7), population: 1 }] };
+    const long = { ...close, geometry: { ...geometry, gradientTPerM: 150, magnetLengthM: 0.5, driftM: 0 } };
+    const found = resolvingOptions(long, detectorPattern(long));
+    // 100 × 0.05 m = 5 m, beyond the laboratory's 3 m: the relative bound holds, from the magnet.
+    expect(found.reach.drift).toEqual({ limit: 5, by: 'magnet' });
+    const short = { ...long, geometry: { ...long.geometry, magnetLengthM: 0.1 } };
+    expect(resolvingOptions(short, detectorPattern(short)).reach.drift).toEqual({ limit: LAB_REACH.drift, by: 'lab' });
+  });
 });

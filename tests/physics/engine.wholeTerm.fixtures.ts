@@ -24,7 +24,7 @@ export function termFromReference(c: Case): WholeTermSpec {
   };
 }
 
-/** ⁷Li 2P and ⁸⁷Rb 5P (alkali D-line data compilations; ⁷Li A_1/2 from memory). */
+/** ⁷Li 2P and ⁸⁷Rb 5P (alkali D-line data compilations; ⁷Li A_1/2 from the cited 91.873(5) MHz interval, as scripts/reference/engine_whole_term.py says). */
 export const LI7_2P = termFromReference(reference.cases.Li7_2P);
 export const RB87_5P = termFromReference(reference.cases.Rb87_5P);
 

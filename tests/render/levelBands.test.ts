@@ -91,7 +91,7 @@ describe('renderLevels on both sides of the rule', () => {
     // F=1 and F=2 overlap (their fans cross); F=3 lies 500 MHz above: two bands.
     const curves = [...fan('F=1', 2, 0, 4e6), ...fan('F=2', 4, 1e6, 4e6), ...fan('F=3', 6, 500e6, 4e6)];
     // F=1, m_F=1 (0 → 2 MHz at 1 T) meets F=2, m_F=-1 (1 → 0 MHz) at B = 1/3 T, E = 2/3 MHz.
-    const crossing = { fieldT: 1 / 3, energyHz: 2e6 / 3, curveA: 2, curveB: 4, a: 'F=1, m_F=1', b: 'F=2, m_F=-1' };
+    const crossing = { fieldT: 1 / 3, energyHz: 2e6 / 3, curveA: 2, a: 'F=1, m_F=1', b: 'F=2, m_F=-1' };
     expect([curves[2]!.lowLabel, curves[4]!.lowLabel]).toEqual([crossing.a, crossing.b]);
     const bands = levelBands(curves, FIELDS.length);
     const svg = parseSvg(renderLevels({ title: 'crossing', fieldUnit: 'T', fieldsT: FIELDS, curves, crossings: [crossing], bands }, { kind: 'export' }));

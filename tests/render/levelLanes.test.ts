@@ -36,7 +36,7 @@ const rightTexts = (svg: Node): string[] => all(svg, (n) => n.attrs['data-kind']
 const headOf = (svg: Node, side: string): Node => byClass(svg, 'sl-lane-head').find((n) => n.attrs['data-side'] === side)!;
 const headText = (svg: Node, side: string): string => textOf(all(headOf(svg, side), (n) => n.name === 'text')[0]!);
 
-describe('the right lane on both sides of the strong-field limit (Rb87 ground)', () => {
+describe('the right lane at the strong-field limit and on both sides of the change of regime (Rb87 ground)', () => {
   const { spec } = viewOf(RB, 0.01);
   // The engine's limit at its 1 % rule; the level's ΔE_hfs/((g_J − g_I) μ_B) ≈ 0.2438 T (built-in data, CODATA μ_B) is 25× below it.
   const limit = regime(spec, 1).strongLimitT;

@@ -216,7 +216,7 @@ describe('renderLevels geometry', () => {
         { id: 'a', lowLabel: 'a', highLabel: 'a', energyHz: [0, 2e6] },
         { id: 'b', lowLabel: 'b', highLabel: 'b', energyHz: [2e6, 0] },
       ],
-      crossings: [{ fieldT: 0.5, energyHz: 1e6, curveA: 0, curveB: 1, a: 'a', b: 'b' }],
+      crossings: [{ fieldT: 0.5, energyHz: 1e6, curveA: 0, a: 'a', b: 'b' }],
     };
     const s = parseSvg(renderLevels(d, exportTheme));
     const cross = all(s, (n) => n.attrs['data-kind'] === 'crossing')[0];

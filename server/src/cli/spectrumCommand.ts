@@ -64,7 +64,8 @@ export function runSpectrum(args: ParsedArgs, ctx: CliContext): number {
  * offsets do not): said once in the comment line rather than as a column of equal numbers.
  */
 function centreUncertainty(hz: number | undefined, unc: number | undefined): [string, string][] {
-  const w = hz !== undefined ? vacuumWavelengthOf(hz, unc) : undefined;
+  // A line written upper → lower has a negative centre; its wavelength is that of |ν|, as the hover says.
+  const w = hz !== undefined ? vacuumWavelengthOf(Math.abs(hz), unc) : undefined;
   if (hz === undefined || !w || w.unc === undefined) return [];
   return [['centre', `${csvNumber(hz)} Hz ± ${csvNumber(unc)} Hz, vacuum ${csvNumber(w.m)} m ± ${csvNumber(w.unc)} m (standard uncertainty shared by every frequency and wavelength cell)`]];
 }

@@ -39,7 +39,7 @@ export function resolvingAdvice(r: BeamResult, geometry: BeamGeometry, reach: Re
 function grownReachText(reach: ResolvingOptions['reach']): string {
   const { gradient, magnetLength, drift } = reach;
   if ([gradient, magnetLength, drift].every((x) => x?.by === 'present')) return 'no gradient, magnet length or drift up to 100 times the present one';
-  const by = (x: SearchReach, lab: string): string => (x.by === 'lab' ? `what a laboratory ${lab} gives` : '100 times the present one');
+  const by = (x: SearchReach, lab: string): string => (x.by === 'lab' ? `what a laboratory ${lab} gives` : x.by === 'magnet' ? '10 times the magnet length, the drift being 0' : '100 times the present one');
   const gradientPart = gradient ? `no gradient up to ${gradientText(gradient.limit, 3)} (${by(gradient, 'magnet')})` : undefined;
   const magnetPart = magnetLength ? `no magnet length up to ${lengthText(magnetLength.limit, 3)} (${by(magnetLength, 'magnet')})` : undefined;
   const driftPart = drift ? `no drift up to ${lengthText(drift.limit, 3)} (${by(drift, 'beam line')})` : undefined;

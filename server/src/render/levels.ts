@@ -8,8 +8,9 @@
  * (placeLabels). Energies far from zero count from an offset (offsetAxis.ts). Manifolds far apart
  * compared with their fans (a magnetometer's µT) get stacked bands, each on its own offset axis
  * (worked out by the view with levelBands.ts; drawn with levelBandAxis.ts), so the fans are not
- * flat lines on a GHz axis. The right lane names the strong-field basis only when the range
- * reaches the strong field, and each lane's header says which basis it names (levelLanes.ts).
+ * flat lines on a GHz axis. The right lane names the strong-field basis only when the range ends
+ * past the change of regime (x ≥ 1) or in the strong field, and each lane's header says which
+ * basis it names (levelLanes.ts).
  */
 import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';

@@ -32,9 +32,8 @@ export interface LevelCurve {
 export interface LevelCrossing {
   fieldT: number;
   energyHz: number;
-  /** Indices into `curves` of the two states that cross (the diamond sits on their energy scale). */
+  /** Index into `curves` of the first state that crosses (the diamond sits on its energy scale, shared with the other). */
   curveA: number;
-  curveB: number;
   /** Their names, for the crossing's title and data attributes. */
   a: string;
   b: string;
@@ -65,8 +64,8 @@ export interface LevelsViewData {
    * What the label lanes name: `low` and `high` are the bases of the low- and high-field names
    * ("F, m_F" and "m_J, m_I"); `ends` is the regime where the range ends (the engine's regime
    * limits), `strongLimitT` the field from which it is strong, when known. The right lane gives the
-   * high-field name only when the range reaches the strong field; else the low-field name, followed
-   * along the curve. Each lane's header says which. Absent: high-field names, no headers.
+   * high-field name only when the range ends past the change of regime (x ≥ 1) or in the strong
+   * field; else the low-field name, followed along the curve. Each lane's header says which. Absent: high-field names, no headers.
    */
   lanes?: LevelLanes;
 }

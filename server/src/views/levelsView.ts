@@ -88,13 +88,12 @@ export function levelsView(
       energyHz: s.energyHz,
       momentJT: s.momentJT,
     })),
-    // A range that ends before the strong field (a magnetometer's µT, a bias of a few gauss) names its states by F, m_F on the right too.
+    // A range that ends before the change of regime (a magnetometer's µT, a bias of a few gauss) names its states by F, m_F on the right too.
     ...(sweep.states.length > 0 ? { lanes: lanesAt(regime(spec, upper), sweep.states[0]!, noNucleus) } : {}),
     crossings: sweep.crossings.map((c) => ({
       fieldT: c.fieldT,
       energyHz: c.energyHz,
       curveA: c.stateA,
-      curveB: c.stateB,
       a: sweep.states[c.stateA]!.low.text,
       b: sweep.states[c.stateB]!.low.text,
     })),

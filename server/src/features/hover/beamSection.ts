@@ -14,6 +14,7 @@ import { md, mdTable, mdTitle } from '../shared/markdown';
 import { levelResult } from '../shared/results';
 import { valueInUnits } from '../shared/units';
 import { labelsAt, stateHeader, stateLabel } from './regimeLabels';
+import { cautionLine } from './cautionLine';
 
 function sourceText(b: BeamModel): string {
   const s = b.source?.value;
@@ -52,16 +53,6 @@ export function beamVerdict(r: BeamResult): string | undefined {
   if (lone === 'merged') return `${peaks}: ${MERGED_PEAK_TEXT}, not resolved${r.resolving_advice ? `. ${r.resolving_advice}` : ''}`;
   if (r.all_resolved) return `${peaks}, all resolved`;
   return `${peaks}, not all resolved${r.resolving_advice ? `. ${r.resolving_advice}` : ''}`;
-}
-
-/**
- * The cautions in one line: the lead words of each (what the hazard is, with the setup's number),
- * the full text staying in the eval report and docs/beam.md.
- */
-export function cautionLine(cautions: readonly string[]): string | undefined {
-  if (cautions.length === 0) return undefined;
-  const heads = cautions.map((c) => c.split(':')[0]!.trim());
-  return `⚠ ${md(heads.join(' · '))}: follow your lab's safety rules (full cautions in the eval report)`;
 }
 
 /** Peak members as the labels that describe the states at the magnet's field, shortened past four. */

@@ -2,7 +2,7 @@
 import type { SlowerResult } from '../../eval/slowerResultTypes';
 import { slowerReport, slowerSummary } from '../../eval/slowerText';
 import { md, mdTitle } from '../shared/markdown';
-import { cautionLine } from './beamSection';
+import { cautionLine } from './cautionLine';
 
 export function slowerSection(s: SlowerResult): string {
   const lines = [mdTitle(`slower ${md(s.name)}`), md(slowerSummary(s))];

@@ -6,7 +6,7 @@
 import type { FieldSourceResult } from '../../eval/fieldSourceResultTypes';
 import { sourceHeadline, sourceLines } from '../../eval/fieldSourceText';
 import { md, mdTitle } from '../shared/markdown';
-import { cautionLine } from './beamSection';
+import { cautionLine } from './cautionLine';
 
 export function sourceSection(r: FieldSourceResult): string {
   const lines = [mdTitle(md(sourceHeadline(r))), ...sourceLines(r).map(md)];

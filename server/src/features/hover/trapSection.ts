@@ -5,7 +5,7 @@
 import { depthText, gaussPerCmText, shallowDepthNote, shapeText, sublevelVerdict, trappedSublevelNotes, trapSummaryLines } from '../../eval/trapText';
 import type { TrapResult } from '../../eval/trapResultTypes';
 import { md } from '../shared/markdown';
-import { cautionLine } from './beamSection';
+import { cautionLine } from './cautionLine';
 
 export function trapSection(t: TrapResult): string {
   const [title, ...rest] = trapSummaryLines(t);

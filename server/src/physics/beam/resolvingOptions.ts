@@ -41,8 +41,11 @@ export type GrownParameter = 'gradient' | 'magnetLength' | 'drift';
 /** How far a grown change was searched: T/m for the gradient (magnitude), m for magnet length and drift. */
 export interface SearchReach {
   limit: number;
-  /** 'present': 100 times the file's value; 'lab': what a laboratory magnet or beam line gives (LAB_REACH). */
-  by: 'present' | 'lab';
+  /**
+   * 'present': 100 times the file's value; 'magnet': a drift of 0 searched up to 10 times the magnet
+   * length (from a tenth of it); 'lab': what a laboratory magnet or beam line gives (LAB_REACH).
+   */
+  by: 'present' | 'magnet' | 'lab';
 }
 
 export interface ResolvingOptions {
@@ -112,11 +115,11 @@ function search(input: PatternInput, present: DetectorPattern, groups: number[][
   /** Every one of these changes certainly leaves the worst dip above the bar: no option among them. */
   const hopeless = (inputs: readonly PatternInput[]): boolean => screen && inputs.length > 0 && inputs.every((i) => certainlyAbove(i, groups!, bar));
 
-  const grown = (parameter: 'gradient' | 'magnetLength' | 'drift', base: number): void => {
+  const grown = (parameter: 'gradient' | 'magnetLength' | 'drift', base: number, fromMagnet = false): void => {
     if (!tried(parameter)) return;
     const key = parameter === 'gradient' ? 'gradientTPerM' : parameter === 'magnetLength' ? 'magnetLengthM' : 'driftM';
     const scale = parameter === 'gradient' ? sign : 1;
-    const values = grownValues(parameter, base, out);
+    const values = grownValues(parameter, base, out, fromMagnet);
     if (hopeless(values.map((v) => changed({ [key]: scale * v })))) return;
     const trials = scan(values, (v) => at({ [key]: scale * v }));
     const pick = choose(trials, presentWorst);
@@ -135,7 +138,7 @@ function search(input: PatternInput, present: DetectorPattern, groups: number[][
   };
   grown('gradient', Math.abs(geo.gradientTPerM));
   grown('magnetLength', geo.magnetLengthM);
-  grown('drift', geo.driftM > 0 ? geo.driftM : geo.magnetLengthM / 10);
+  grown('drift', geo.driftM > 0 ? geo.driftM : geo.magnetLengthM / 10, !(geo.driftM > 0));
 
   const narrowed = (parameter: 'slits' | 'detector', change: (f: number) => Partial<PatternInput['geometry']>): void => {
     if (!tried(parameter) || hopeless(NARROWING.map((f) => changed(change(f))))) return;
@@ -159,12 +162,12 @@ function search(input: PatternInput, present: DetectorPattern, groups: number[][
  * magnet or beam line reaches further, one a decade on up to that reach (the solver narrows the
  * step below a resolving one). Records the reach used.
  */
-function grownValues(parameter: GrownParameter, base: number, out: ResolvingOptions): number[] {
+function grownValues(parameter: GrownParameter, base: number, out: ResolvingOptions, fromMagnet: boolean): number[] {
   const values = GROWTH.map((f) => f * base);
   const relative = values[values.length - 1]!;
   const lab = LAB_REACH[parameter];
   if (!(base > 0) || relative >= lab) {
-    out.reach[parameter] = { limit: relative, by: 'present' };
+    out.reach[parameter] = { limit: relative, by: fromMagnet ? 'magnet' : 'present' };
     return values;
   }
   for (let v = relative * 10; v < lab; v *= 10) values.push(v);

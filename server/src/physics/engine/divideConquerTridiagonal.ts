@@ -49,7 +49,7 @@ export interface MergeKernels {
   tau: Float64Array;
   /** The k roots of 1/ρ + Σ z2_j/(dk_j − λ) = 0 into origin, tau and the rows of gaps (secularRoots); false if one does not settle. */
   roots(k: number, rho: number): boolean;
-  /** zhat_j ← ẑ_j² = Π_i (λ_i − d_j) / (ρ Π_{i≠j} (d_i − d_j)), from the rows of gaps (merge's newVectors says how). */
+  /** zhat_j ← ẑ_j² = Π_i (λ_i − d_j) / (ρ Π_{i≠j} (d_i − d_j)), from the rows of gaps (javascriptMergeKernels.weights says how). */
   weights(k: number, rho: number): void;
   /** For i < k: x_j = zhat_j / gaps[i·k + j] (gaps may be left holding x), then v[i·ps + column[j]] = x_j / ‖x‖: the new vectors. */
   cauchyRows(k: number, ps: number): void;
