@@ -35,6 +35,9 @@ const sumLanes = (x) => `(f64.add (f64x2.extract_lane 0 ${x}) (f64x2.extract_lan
  * (n + 2 doubles of scratch each) swap roles every step; v and w are
  * zeroed at k + 1 after the column's update, so pairs that start there leave the column as it is.
  * Every entry gets the same operations in the same order as with two passes (the same bits).
+ * Going down column k + 1, one trip also forms w = p − (β/2)(vᵀp) v and, from row k + 3 on, sums
+ * the next reflector's squares and copies its entries (three passes down the column, one double a
+ * row, were one; the same bits, the reduction 1.02–1.09× at orders 128–161).
  */
 function tridiagonalise() {
   const rowAt = (i) => `(i32.add (local.get $a) (i32.mul ${i} (local.get $rowBytes)))`;
@@ -160,6 +163,49 @@ function tridiagonalise() {
             ${rowTail(upd, mul, '')}
             (local.set $i (i32.add (local.get $i) (i32.const 1)))))
         (br $${label}_rows)))`;
+  /** Row i of column k + 1: w_i = p_i − kk v_i stored, the entry updated; with next, also the next reflector's tail sum and its copies into vn, refl's row k + 1 ($row) and a zero pn. */
+  const columnEntry = (next) => `
+          (local.set $vi ${f64(X('$v', '(local.get $i)'))})
+          (local.set $wi (f64.sub ${f64(X('$p', '(local.get $i)'))} (f64.mul (local.get $kk) (local.get $vi))))
+          (f64.store ${X('$p', '(local.get $i)')} (local.get $wi))
+          (local.set $aij (f64.sub ${f64(A('(local.get $i)', K(1)))} (f64.add (f64.mul (local.get $vi) (local.get $wk)) (f64.mul (local.get $wi) (local.get $vk)))))
+          (f64.store ${A('(local.get $i)', K(1))} (local.get $aij))
+          ${next
+            ? `(local.set $tail (f64.add (local.get $tail) (f64.mul (local.get $aij) (local.get $aij))))
+          (f64.store ${X('$vn', '(local.get $i)')} (local.get $aij))
+          (f64.store ${at('(local.get $row)', '(local.get $i)')} (local.get $aij))
+          (f64.store ${X('$pn', '(local.get $i)')} (f64.const 0))`
+            : ''}
+          (local.set $i (i32.add (local.get $i) (i32.const 1)))`;
+  /** Reflector k + 1 from its column, whose entries from row k + 3 on columnEntry(true) has summed and copied already. */
+  const formNext = () => `
+      (local.set $x0 ${f64(A(K(2), K(1)))})
+      (local.set $beta (f64.const 0))
+      (if (f64.eq (local.get $tail) (f64.const 0))
+        (then
+          (f64.store ${at('(local.get $betas)', K(1))} (f64.const 0))
+          (f64.store ${at('(local.get $e)', K(1))} (local.get $x0))
+          ;; nothing to reflect: refl's row stays zero (the copies may have written ±0 or entries whose squares underflowed)
+          (local.set $i ${K(3)})
+          (block $rz_done (loop $rz
+            (br_if $rz_done (i32.ge_s (local.get $i) (local.get $n)))
+            (f64.store ${at('(local.get $row)', '(local.get $i)')} (f64.const 0))
+            (local.set $i (i32.add (local.get $i) (i32.const 1)))
+            (br $rz))))
+        (else
+          (local.set $alpha (f64.sqrt (f64.add (local.get $tail) (f64.mul (local.get $x0) (local.get $x0)))))
+          (if (f64.ge (local.get $x0) (f64.const 0)) (then (local.set $alpha (f64.neg (local.get $alpha)))))
+          (local.set $aij (f64.sub (local.get $x0) (local.get $alpha)))
+          (f64.store ${A(K(2), K(1))} (local.get $aij))
+          (f64.store ${X('$vn', K(1))} (f64.const 0))
+          (f64.store ${X('$pn', K(1))} (f64.const 0))
+          (f64.store ${X('$vn', K(0))} (f64.const 0))
+          (f64.store ${X('$vn', K(2))} (local.get $aij))
+          (f64.store ${at('(local.get $row)', K(2))} (local.get $aij))
+          (f64.store ${X('$pn', K(2))} (f64.const 0))
+          (local.set $beta (f64.div (f64.const 2) (f64.add (f64.mul (local.get $aij) (local.get $aij)) (local.get $tail))))
+          (f64.store ${at('(local.get $betas)', K(1))} (local.get $beta))
+          (f64.store ${at('(local.get $e)', K(1))} (local.get $alpha))))`;
   return `
   (func $tridiagonalise (export "tridiagonalise")
     (param $a i32) (param $ns i32) (param $n i32) (param $d i32) (param $e i32) (param $betas i32) (param $v i32) (param $p i32) (param $vn i32) (param $pn i32) (param $refl i32)
@@ -207,25 +253,25 @@ function tridiagonalise() {
           (local.set $i (i32.add (local.get $i) (i32.const 1)))
           (br $b)))
         (local.set $kk (f64.mul (f64.mul (f64.const 0.5) (local.get $beta)) (local.get $vp)))
-        (local.set $i ${K(1)})
-        (block $w_done (loop $w
-          (br_if $w_done (i32.ge_s (local.get $i) (local.get $n)))
-          (f64.store ${X('$p', '(local.get $i)')} (f64.sub ${f64(X('$p', '(local.get $i)'))} (f64.mul (local.get $kk) ${f64(X('$v', '(local.get $i)'))})))
-          (local.set $i (i32.add (local.get $i) (i32.const 1)))
-          (br $w)))
-        (f64.store ${X('$p', K(0))} (f64.const 0))
-        ;; column k + 1 of the trailing triangle first (rows ≥ k + 1), then v, w zero there.
+        ;; w = p − kk v, column k + 1 of the trailing triangle (rows ≥ k + 1) updated by it, and
+        ;; from row k + 3 on the next reflector's sum of squares and copies taken from the updated
+        ;; entries in the same trip (the separate passes down the column, one double a row, are gone).
         (local.set $vk ${f64(X('$v', K(1)))})
-        (local.set $wk ${f64(X('$p', K(1)))})
+        (local.set $wk (f64.sub ${f64(X('$p', K(1)))} (f64.mul (local.get $kk) (local.get $vk))))
+        (local.set $tail (f64.const 0))
         (local.set $i ${K(1)})
+        (local.set $o ${K(3)})
+        (if (i32.gt_s (local.get $o) (local.get $n)) (then (local.set $o (local.get $n))))
         (block $col_done (loop $col
-          (br_if $col_done (i32.ge_s (local.get $i) (local.get $n)))
-          (local.set $vi ${f64(X('$v', '(local.get $i)'))})
-          (local.set $wi ${f64(X('$p', '(local.get $i)'))})
-          (f64.store ${A('(local.get $i)', K(1))}
-            (f64.sub ${f64(A('(local.get $i)', K(1)))} (f64.add (f64.mul (local.get $vi) (local.get $wk)) (f64.mul (local.get $wi) (local.get $vk)))))
-          (local.set $i (i32.add (local.get $i) (i32.const 1)))
+          (br_if $col_done (i32.ge_s (local.get $i) (local.get $o)))
+          ${columnEntry(false)}
           (br $col)))
+        (local.set $row (i32.add (local.get $refl) (i32.mul ${K(1)} (local.get $rowBytes))))
+        (block $colt_done (loop $colt
+          (br_if $colt_done (i32.ge_s (local.get $i) (local.get $n)))
+          ${columnEntry(true)}
+          (br $colt)))
+        (f64.store ${X('$p', K(0))} (f64.const 0))
         (f64.store ${X('$v', K(1))} (f64.const 0))
         (f64.store ${X('$p', K(1))} (f64.const 0))
         (local.set $i0 ${K(2)})
@@ -233,7 +279,7 @@ function tridiagonalise() {
         (local.set $pending (i32.const 0))
         (if (i32.lt_s ${K(3)} (local.get $n))
           (then
-            ${form(1, '$vn', '$pn')}
+            ${formNext()}
             (if (f64.ne (local.get $beta) (f64.const 0))
               (then
                 ${pass(true, true, 'fused')}
@@ -341,9 +387,13 @@ function applyReflectors() {
 }
 
 /**
- * maxAbs(src, count) → max |src[i]| (NaN if any entry is NaN or infinite); packScaled(src, n, ns, dst,
- * factor): dst[i·ns + j] = factor · src[i·n + j], zero in the padding column; unpackTransposed(z,
- * ns, n, out): out[i·n + r] = z[r·ns + i]. The O(n²) moves into and out of the kernels' layout.
+ * maxAbs(src, count) → max |src[i]| (NaN if any entry is NaN or infinite); scalePairs(at, count,
+ * factor): at[i] ← factor · at[i] for i < count (even), in pairs, in place — at even orders the
+ * caller copies its matrix straight into the reduction's rows (no staging copy; 1.27–1.31× for
+ * the copy in at 128–192); packScaled(src, n, ns, dst, factor): dst[i·ns + j] = factor ·
+ * src[i·n + j], zero in the padding column, for odd orders, whose rows need the padding;
+ * unpackTransposed(z, ns, n, out): out[i·n + r] = z[r·ns + i]. The O(n²) moves into and out of
+ * the kernels' layout.
  */
 function moves() {
   return `
@@ -364,6 +414,16 @@ function moves() {
     (if (i32.lt_s (local.get $i) (local.get $count))
       (then (local.set $x (f64.max (local.get $x) (f64.abs ${f64(at('(local.get $src)', '(local.get $i)'))})))))
     (f64.add (local.get $x) ${sumLanes('(local.get $bad)')}))
+  (func $scalePairs (export "scalePairs") (param $at i32) (param $count i32) (param $factor f64)
+    (local $o i32) (local $end i32) (local $f v128)
+    (local.set $f (f64x2.splat (local.get $factor)))
+    (local.set $o (local.get $at))
+    (local.set $end ${at('(local.get $at)', '(local.get $count)')})
+    (block $done (loop $l
+      (br_if $done (i32.ge_u (local.get $o) (local.get $end)))
+      (v128.store (local.get $o) (f64x2.mul (local.get $f) (v128.load (local.get $o))))
+      (local.set $o (i32.add (local.get $o) (i32.const 16)))
+      (br $l))))
   (func $packScaled (export "packScaled") (param $src i32) (param $n i32) (param $ns i32) (param $dst i32) (param $factor f64)
     (local $i i32) (local $j i32) (local $from i32) (local $to i32)
     (local.set $i (i32.const 0))

@@ -23,6 +23,7 @@ interface EigenKernels {
   tridiagonalise(a: number, ns: number, n: number, d: number, e: number, betas: number, v: number, p: number, vn: number, pn: number, refl: number): void;
   applyReflectors(z: number, ns: number, rows: number, n: number, refl: number, betas: number): void;
   maxAbs(src: number, count: number): number;
+  scalePairs(at: number, count: number, factor: number): void;
   packScaled(src: number, n: number, ns: number, dst: number, factor: number): void;
   unpackTransposed(z: number, ns: number, n: number, out: number): void;
   multiply(a: number, as: number, b: number, bs: number, c: number, cs: number, rows: number, inner: number, cols: number): void;
@@ -133,14 +134,18 @@ export function simdEigenpairs(a: Float64Array, n: number, values: Float64Array,
   if (k === null) throw new Error('WebAssembly eigen kernels unavailable');
   const l = layout(n, k.memory);
   const heap = new Float64Array(k.memory.buffer);
-  heap.set(a.subarray(0, n * n), l.stage / 8);
+  const ns = l.ns;
+  // Even orders: the rows straight into the reduction's layout (the same stride), scaled there;
+  // odd ones need a padding column, so they go through the staging area.
+  const into = ns === n ? l.a : l.stage;
+  heap.set(a.subarray(0, n * n), into / 8);
   // Work on A / 2^m ≥ max|a_ij| so sums of squares can neither overflow nor underflow; a power
   // of two makes the scaling and its undoing exact.
-  const big = k.maxAbs(l.stage, n * n);
+  const big = k.maxAbs(into, n * n);
   if (!(big < Number.POSITIVE_INFINITY)) return false;
   const scale = big > 0 && 1 / big < Number.POSITIVE_INFINITY ? powerOfTwoAtLeast(big) : 1;
-  const ns = l.ns;
-  k.packScaled(l.stage, n, ns, l.a, 1 / scale);
+  if (ns !== n) k.packScaled(l.stage, n, ns, l.a, 1 / scale);
+  else if (scale !== 1) k.scalePairs(l.a, n * n, 1 / scale);
   k.tridiagonalise(l.a, ns, n, l.d, l.e, l.betas, l.v, l.p, l.vn, l.pn, l.refl);
   const d = heap.subarray(l.d / 8, l.d / 8 + n);
   const e = heap.subarray(l.e / 8, l.e / 8 + n);
