@@ -20,11 +20,12 @@ export const EVALUATOR_ROLE = 'sublevel-evaluator';
 /** A superseded job that has run this long is stopped with its worker; a fresh worker starts in about this time. */
 const ABANDON_AFTER_MS = 400;
 /**
- * How long a superseded job gets to reach a check point after it was asked to stop. Check points
- * come after the parse, the model and every level, beam and line (≈ 0.1–0.3 s apart at most in a
- * warm worker on the 20,000-line file, more in a cold one); past this the worker is stopped.
+ * How long a superseded job gets to reach a check point after it was asked to stop; past this the
+ * worker is stopped. Check points come after the parse, the model and every level, beam and line;
+ * the longest stretch between two is the parse: 0.2–0.6 s warm on the 20,000-line file at load 9
+ * on 2 cores (0.2 s at load 1), and a cold worker costs ~4 s of CPU more than a warm one.
  */
-const STOP_GRACE_MS = 400;
+const STOP_GRACE_MS = 1000;
 
 interface Job {
   id: number;
