@@ -106,7 +106,7 @@ describe('the worker evaluator', () => {
     const abort = new AbortController();
     const started = Date.now();
     const old = ev.evaluate('5000', abort.signal);
-    await new Promise((r) => setTimeout(r, 600)); // past ABANDON_AFTER_MS: the old code stopped the worker at once here
+    await new Promise((r) => setTimeout(r, 600)); // past 0.4 s, when a superseded job used to be stopped with its worker
     abort.abort();
     const next = ev.evaluate('0');
     await expect(old).rejects.toThrow(SUPERSEDED);

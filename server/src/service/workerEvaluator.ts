@@ -3,9 +3,8 @@
  * limit stops the worker (its job fails); the next job starts a fresh one. A job that is no
  * longer wanted is dropped from the queue, or, when it is running, asked to stop through a
  * shared flag (the evaluation gives up at its next check point and the worker, warm, takes the
- * next job). A running job that has not stopped by ABANDON_AFTER_MS after its start and
- * STOP_GRACE_MS after the ask is stopped with its worker, so nothing can hold up the new
- * version. A worker that cannot start makes the evaluator fall back to this thread.
+ * next job). A running job that has not stopped STOP_GRACE_MS after the ask is stopped with
+ * its worker, so nothing can hold up the new version. A worker that cannot start makes the evaluator fall back to this thread.
  */
 import { Worker } from 'worker_threads';
 import { EVALUATION_TIME_LIMIT_MS } from '../model/limits';
@@ -17,8 +16,6 @@ import { unpackResult } from './resultHandOff';
 /** `workerData.role` that tells a bundle started as a worker to serve evaluations. */
 export const EVALUATOR_ROLE = 'sublevel-evaluator';
 
-/** A superseded job that has run this long is stopped with its worker; a fresh worker starts in about this time. */
-const ABANDON_AFTER_MS = 400;
 /**
  * How long a superseded job gets to reach a check point after it was asked to stop; past this the
  * worker is stopped. Check points come after the parse, the model and every level, beam and line;
@@ -33,7 +30,6 @@ interface Job {
   sources?: SourceSnapshot;
   resolve: (o: EvaluationOutcome) => void;
   reject: (e: Error) => void;
-  startedAt?: number;
 }
 
 export class WorkerEvaluator implements Evaluator {
@@ -76,16 +72,15 @@ export class WorkerEvaluator implements Evaluator {
       job.reject(new Error(SUPERSEDED));
       return;
     }
-    if (this.current !== job || job.startedAt === undefined) return;
+    if (this.current !== job) return;
     // Ask first: the worker gives up at its next check point and answers SUPERSEDED, staying warm.
     Atomics.store(this.stopFlag, 0, job.id);
     // The hard stop stays as the fallback, for a job that does not reach a check point in time
     // (the timer is the bound, not only this moment: otherwise it could run to the time limit).
-    const wait = Math.max(job.startedAt + ABANDON_AFTER_MS - Date.now(), STOP_GRACE_MS);
     clearTimeout(this.abandonTimer);
     this.abandonTimer = setTimeout(() => {
       if (this.current === job) this.stop(this.worker, SUPERSEDED, false);
-    }, wait);
+    }, STOP_GRACE_MS);
   }
 
   dispose(): void {
@@ -124,7 +119,6 @@ export class WorkerEvaluator implements Evaluator {
       return;
     }
     const job = this.queue.shift()!;
-    job.startedAt = Date.now();
     this.current = job;
     const request: EvaluationRequest = { id: job.id, text: job.text, ...(job.sources ? { sources: job.sources } : {}) };
     this.worker.postMessage(request);
