@@ -18,6 +18,18 @@ const slow = script(
   'slow.js',
   "parentPort.on('message', (m) => { Atomics.wait(new Int32Array(new SharedArrayBuffer(4)), 0, 0, Number(m.text)); parentPort.postMessage({ id: m.id, ok: true, outcome: { problems: [] } }); });",
 );
+// Computes until its job's id appears in the shared stop flag (or 5 s pass), then gives up as the real worker does.
+const polite = script(
+  'polite.js',
+  "const { workerData, threadId } = require('worker_threads');\n" +
+    "parentPort.on('message', (m) => { const end = Date.now() + Number(m.text); while (Date.now() < end) if (Atomics.load(workerData.stopFlag, 0) === m.id) return parentPort.postMessage({ id: m.id, ok: false, error: 'superseded by a newer version' }); parentPort.postMessage({ id: m.id, ok: true, outcome: { problems: [{ code: 'thread', severity: 'info', message: String(threadId), range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } } }] } }); });",
+);
+// Loops without ever looking at the stop flag on 'loop'; otherwise answers with its thread id.
+const stubborn = script(
+  'stubborn.js',
+  "const { threadId } = require('worker_threads');\n" +
+    "parentPort.on('message', (m) => { if (m.text === 'loop') for (;;) {} parentPort.postMessage({ id: m.id, ok: true, outcome: { problems: [{ code: 'thread', severity: 'info', message: String(threadId), range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } } }] } }); });",
+);
 const failing = script('failing.js', "parentPort.on('message', (m) => parentPort.postMessage({ id: m.id, ok: false, error: 'no physics today' }));");
 
 const evaluators: WorkerEvaluator[] = [];
@@ -82,8 +94,45 @@ describe('the worker evaluator', () => {
     const newest = ev.evaluate('10');
     await expect(old).rejects.toThrow(SUPERSEDED);
     await expect(newest).resolves.toEqual({ problems: [] });
-    // 0.4 s of grace for the old job plus a fresh worker's start, far from the old job's 5 s.
+    // Up to 1 s of grace after the ask plus a fresh worker's start, far from the old job's 5 s.
     expect(Date.now() - started).toBeLessThan(2500);
+  });
+
+  it('asks a superseded job to stop; it gives up at a check point and the same worker takes the next job', async () => {
+    const { ev, logged } = make(polite);
+    const warmUp = await ev.evaluate('0');
+    const thread = ev.threadId;
+    expect(warmUp.problems[0]!.message).toBe(String(thread));
+    const abort = new AbortController();
+    const started = Date.now();
+    const old = ev.evaluate('5000', abort.signal);
+    await new Promise((r) => setTimeout(r, 600)); // past 0.4 s, when a superseded job used to be stopped with its worker
+    abort.abort();
+    const next = ev.evaluate('0');
+    await expect(old).rejects.toThrow(SUPERSEDED);
+    expect((await next).problems[0]!.message).toBe(String(thread)); // answered by the same, warm thread
+    expect(ev.threadId).toBe(thread);
+    expect(Date.now() - started).toBeLessThan(3000);
+    expect(logged).toEqual([]);
+  });
+
+  it('still stops a superseded job that never reaches a check point, with its worker', async () => {
+    const { ev, logged } = make(stubborn, 60_000);
+    const abort = new AbortController();
+    const started = Date.now();
+    const old = ev.evaluate('loop', abort.signal);
+    const thread = ev.threadId;
+    expect(thread).toBeDefined();
+    await new Promise((r) => setTimeout(r, 600));
+    abort.abort();
+    const next = ev.evaluate('answer');
+    await expect(old).rejects.toThrow(SUPERSEDED);
+    // 1 s of grace after the ask, then the worker is stopped: far from the 60 s time limit.
+    expect(Date.now() - started).toBeLessThan(3000);
+    const answer = await next;
+    expect(answer.problems[0]!.message).not.toBe(String(thread)); // a fresh worker answered
+    expect(ev.threadId).not.toBe(thread);
+    expect(logged).toEqual([]);
   });
 
   it('rejects pending jobs when disposed', async () => {

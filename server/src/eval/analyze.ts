@@ -9,6 +9,7 @@ import { recordSources, type SetupSources, type SourceSnapshot } from '../model/
 import type { SetupModel } from '../model/types';
 import { evaluate, sortProblems } from './evaluate';
 import { overCap, unparsedDocument } from './inputLimits';
+import { EvaluationStopped, stopIfAsked, type StopCheck } from './stopCheck';
 
 export { sortProblems };
 import type { EvaluationResult } from './resultTypes';
@@ -37,7 +38,8 @@ export function refusedAnalysis(text: string): Analysis | undefined {
   return p ? { doc: unparsedDocument(text), problems: [p], refused: true } : undefined;
 }
 
-export function analyze(text: string, options?: AnalyzeOptions): Analysis {
+/** `stop`: see `evaluate`; it is also asked after the parse and the model, and `EvaluationStopped` is passed on, not reported. */
+export function analyze(text: string, options?: AnalyzeOptions, stop?: StopCheck): Analysis {
   const refused = refusedAnalysis(text);
   if (refused) return refused;
   let doc: SetupDocument;
@@ -46,13 +48,16 @@ export function analyze(text: string, options?: AnalyzeOptions): Analysis {
   } catch (e) {
     return { doc: unparsedDocument(text), problems: [internalError(e)] };
   }
+  stopIfAsked(stop);
   const recording = options ? recordSources(options) : undefined;
   const withSources = <T extends object>(a: T): T & { sources?: SourceSnapshot } => (recording ? { ...a, sources: recording.snapshot() } : a);
   try {
     const model = buildModel(doc, recording?.sources);
-    const { result, problems } = evaluate(model, [...doc.problems, ...model.problems]);
+    stopIfAsked(stop);
+    const { result, problems } = evaluate(model, [...doc.problems, ...model.problems], stop);
     return withSources({ doc, model, result, problems });
   } catch (e) {
+    if (e instanceof EvaluationStopped) throw e;
     return withSources({ doc, problems: sortProblems([...doc.problems, internalError(e)]) });
   }
 }

@@ -21,6 +21,7 @@ import { evaluateTrap } from './trapEvaluation';
 import { EVAL_RULES } from './evalCodes';
 import { fieldScope } from './fieldScope';
 import { evaluateLevel, type EvaluationNote } from './levelEvaluation';
+import { stopIfAsked, type StopCheck } from './stopCheck';
 import {
   EVALUATION_FORMAT,
   EVALUATION_VERSION,
@@ -35,8 +36,10 @@ export { workingFields } from './fieldScope';
 /**
  * Evaluates the model. `earlier` are the problems of the parser and model; the returned
  * `problems` add what the evaluation found, and `result.diagnostics` lists them all in order.
+ * `stop`, when given, is asked between levels, beams, lines and the other items; once it says
+ * stop the evaluation throws `EvaluationStopped` (eval/stopCheck.ts) instead of finishing.
  */
-export function evaluate(model: SetupModel, earlier: Problem[]): { result: EvaluationResult; problems: Problem[] } {
+export function evaluate(model: SetupModel, earlier: Problem[], stop?: StopCheck): { result: EvaluationResult; problems: Problem[] } {
   const scope = fieldScope(model);
   const fields = scope.all;
   const levels: LevelResult[] = [];
@@ -44,6 +47,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   const terms: TermResult[] = [];
   for (const s of model.species) {
     for (const l of s.levels) {
+      stopIfAsked(stop);
       const first = notes.length;
       if (l.kind === 'term') {
         const t = evaluateTerm(l, model.settings, scope.of(s), notes);
@@ -59,23 +63,27 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
   const gJOf = gJLookup(levels);
   const beamProblems: Problem[] = [];
   const beams = model.beams.map((b) => {
+    stopIfAsked(stop);
     const e = evaluateBeam(b, gJOf);
     beamProblems.push(...beamDiagnostics(b, e));
     return e.result;
   });
   const lineProblems: Problem[] = [];
-  const lines = model.lines.map((l) => addSpectra(l, evaluateLine(l, l.lower ? scope.of(l.lower.species) : [], gJOf, lineProblems, model.settings), lineProblems, model.beams));
+  const lines = model.lines.map((l) => (stopIfAsked(stop), addSpectra(l, evaluateLine(l, l.lower ? scope.of(l.lower.species) : [], gJOf, lineProblems, model.settings), lineProblems, model.beams)));
+  stopIfAsked(stop);
   const resonances = model.resonances.map((r) => evaluateResonance(r, r.level ? scope.of(r.level.species) : [], model.settings, gJOf, lineProblems));
   const fitProblems: Problem[] = [];
-  const fits = model.fits.map((f) => evaluateFit(f, gJOf, fitProblems));
+  const fits = model.fits.map((f) => (stopIfAsked(stop), evaluateFit(f, gJOf, fitProblems)));
   const sourceProblems: Problem[] = [];
   // Sources print fields in the unit family the file writes fields in (the first field or magnet that gives a unit).
   const fieldUnit = fields.find((f) => f.unit !== undefined)?.unit;
+  stopIfAsked(stop);
   const fieldSources = model.sources.map((s) => evaluateFieldSource(sourceEvalInput(s, fieldUnit), sumField, sourceProblems));
   const slowerProblems: Problem[] = [];
-  const slowers = model.slowers.map((s) => evaluateSlower(s, gJOf, model.settings, slowerProblems));
+  const slowers = model.slowers.map((s) => (stopIfAsked(stop), evaluateSlower(s, gJOf, model.settings, slowerProblems)));
   const trapProblems: Problem[] = [];
   const traps = model.traps.map((t) => {
+    stopIfAsked(stop);
     const e = evaluateTrap(t, gJOf, model.settings);
     trapProblems.push(...e.problems);
     return e.result;
@@ -120,6 +128,7 @@ export function evaluate(model: SetupModel, earlier: Problem[]): { result: Evalu
     ...(traps.length > 0 ? { traps } : {}),
     diagnostics: [],
   };
+  stopIfAsked(stop);
   const uncertainty = attachUncertainty(model, result, gJOf);
   if (uncertainty.inputs) result.uncertainty_inputs = uncertainty.inputs;
   const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...sourceProblems, ...slowerProblems, ...trapProblems, ...uncertainty.problems]);

@@ -1,8 +1,9 @@
 /** The worker-thread side of the worker evaluator: answers `{ id, text, sources }` with the full pipeline's outcome. */
-import { parentPort } from 'worker_threads';
+import { parentPort, workerData } from 'worker_threads';
+import { EvaluationStopped } from '../eval/stopCheck';
 import type { Problem } from '../format/ast';
 import type { SourceSnapshot } from '../model/sources';
-import { evaluateText } from './evaluator';
+import { evaluateText, SUPERSEDED } from './evaluator';
 import { packResult } from './resultHandOff';
 import type { PackedValue } from './packedValue';
 
@@ -22,15 +23,23 @@ export type EvaluationReply =
   | { id: number; ok: true; packed: PackedValue; problems: Problem[] }
   | { id: number; ok: false; error: string };
 
+/**
+ * `workerData.stopFlag` (a one-element Int32Array on a SharedArrayBuffer): the editor thread
+ * writes the id of a job it no longer wants there. Messages cannot reach a worker that is busy
+ * computing, shared memory can; the evaluation reads the flag at its check points, gives up, and
+ * this worker stays warm for the next job.
+ */
 export function serveEvaluations(): void {
+  const flag = (workerData as { stopFlag?: Int32Array } | null)?.stopFlag;
   parentPort?.on('message', (req: EvaluationRequest) => {
     let reply: EvaluationReply;
     try {
-      const outcome = evaluateText(req.text, req.sources);
+      const outcome = evaluateText(req.text, req.sources, flag ? () => Atomics.load(flag, 0) === req.id : undefined);
       const packed = outcome.result ? packResult(outcome.result) : undefined;
       reply = packed ? { id: req.id, ok: true, packed, problems: outcome.problems } : { id: req.id, ok: true, outcome };
     } catch (e) {
-      reply = { id: req.id, ok: false, error: e instanceof Error ? (e.stack ?? e.message) : String(e) };
+      const error = e instanceof EvaluationStopped ? SUPERSEDED : e instanceof Error ? (e.stack ?? e.message) : String(e);
+      reply = { id: req.id, ok: false, error };
     }
     parentPort?.postMessage(reply, 'packed' in reply ? [reply.packed.ops.buffer as ArrayBuffer, reply.packed.numbers.buffer as ArrayBuffer] : []);
   });
