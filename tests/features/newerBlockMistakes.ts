@@ -12,6 +12,8 @@ export interface MistakeCase {
   fixes?: string[];
   /** Words the messages must hold. */
   says?: string[];
+  /** The first beam's normalised population of each sublevel, by low-field label. */
+  beamPopulations?: Record<string, number>;
 }
 
 export const NEWER_BLOCKS: MistakeCase[] = [
@@ -112,6 +114,15 @@ export const NEWER_BLOCKS: MistakeCase[] = [
     findings: ['14:24-29 beam-population-twice [1 1 2]', '14:38-44 beam-population-twice [2 -1 1]'],
     fixes: [],
     says: ["F = 1, m_F = 1 already has its weight from the entry '1 1 1', which is the one used; this entry is not","F = 2, m_F = -1 already has its weight from the entry '2 0.5'"],
+  },
+  {
+    name: 'populations that give one sublevel, then the rest of its F: both are used, without a warning; a whole F after each of its m_F is said',
+    text: 'species K39\n  level ground: 4s 2S1/2\nmagnet m\n  field    = 0.1 T\n  gradient = 100 T/m\n  length   = 5 cm\nbeam c\n  level    = ground\n  source   = oven 400 K\n  slits    = 80 um, 50 um apart 40 cm\n  magnet   = m\n  drift    = 50 cm\n  detector = 10 um\n  populations = 2 1 1, 2 0.5, 1 -1 0, 1 0 0, 1 1 0, 1 3\n',
+    findings: ['14:53-56 beam-population-twice [1 3]'],
+    fixes: [],
+    says: ["every m_F of F = 1 already has its weight from the entries '1 -1 0', '1 0 0', '1 1 0'"],
+    // m_F = +1 of F = 2 weighs 1, the other four 0.5 (the first entry that names a sublevel): 1/3 and 1/6 of 3.
+    beamPopulations: { 'F=2, m_F=-2': 1 / 6, 'F=2, m_F=-1': 1 / 6, 'F=2, m_F=0': 1 / 6, 'F=2, m_F=+1': 1 / 3, 'F=2, m_F=+2': 1 / 6, 'F=1, m_F=-1': 0, 'F=1, m_F=0': 0, 'F=1, m_F=+1': 0 },
   },
   {
     name: 'a length of 1e308 m or 5 km in an apparatus is said where it is written, not computed into a wrong finding',
