@@ -150,7 +150,7 @@ export const NEWER_BLOCKS: MistakeCase[] = [
     text: 'species Rb87\n  level ground: 5s 2S1/2\ndata d1\n  level = ground\n  lower = 1 0\n  upper = 1 0\n  point = 6834 MHz at 1 G\n  point = 6835 MHz at 2 G\nfit f\n  data  = d1\n  free  = g_J, g_J\n  start = g_J 2 MHz\nresonance r\n  level = ground\n  lower = 1 0\n  upper = 1 0\n',
     findings: ['6:11-14 fit-pair-not-found [1 0]', '11:16-19 fit-parameter-twice [g_J]', '12:15-20 fit-start-malformed [2 MHz]', '15:11-14 resonance-no-such-pair [1 0]'],
     fixes: [],
-    says: ['g_J is already free; a parameter is freed once', 'the start of g_J is a plain number, got 2 MHz', 'lower and upper name one sublevel, F = 1, m = 0',"resonance 'r': lower and upper name one sublevel"],
+    says: ['g_J is already free; a parameter is freed once', 'the start of g_J is a plain number or %, got 2 MHz', 'lower and upper name one sublevel, F = 1, m = 0',"resonance 'r': lower and upper name one sublevel"],
   },
   {
     name: 'a size of two values, a zero direction, a negative solenoid length and half a turn',
