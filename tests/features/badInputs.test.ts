@@ -332,6 +332,17 @@ describe('bad inputs', () => {
   }
 });
 
+describe('the beam weights the newer blocks\' populations give', () => {
+  for (const c of NEWER_BLOCKS.filter((c) => c.beamPopulations)) {
+    it(c.name, () => {
+      const subs = analysisOf(c.text).result!.beams[0]!.sublevels;
+      const got = Object.fromEntries(subs.map((s) => [s.label, s.population]));
+      expect(Object.keys(got).sort()).toEqual(Object.keys(c.beamPopulations!).sort());
+      for (const [label, weight] of Object.entries(c.beamPopulations!)) expect(got[label], label).toBeCloseTo(weight, 12);
+    });
+  }
+});
+
 describe('the newer blocks\' mistakes on the command line', () => {
   const dir = mkdtempSync(path.join(tmpdir(), 'sublevel-bad-inputs-'));
   afterAll(() => rmSync(dir, { recursive: true, force: true }));

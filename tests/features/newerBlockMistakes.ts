@@ -12,6 +12,8 @@ export interface MistakeCase {
   fixes?: string[];
   /** Words the messages must hold. */
   says?: string[];
+  /** The first beam's normalised population of each sublevel, by low-field label. */
+  beamPopulations?: Record<string, number>;
 }
 
 export const NEWER_BLOCKS: MistakeCase[] = [
@@ -114,6 +116,15 @@ export const NEWER_BLOCKS: MistakeCase[] = [
     says: ["F = 1, m_F = 1 already has its weight from the entry '1 1 1', which is the one used; this entry is not","F = 2, m_F = -1 already has its weight from the entry '2 0.5'"],
   },
   {
+    name: 'populations that give one sublevel, then the rest of its F: both are used, without a warning; a whole F after each of its m_F is said',
+    text: 'species K39\n  level ground: 4s 2S1/2\nmagnet m\n  field    = 0.1 T\n  gradient = 100 T/m\n  length   = 5 cm\nbeam c\n  level    = ground\n  source   = oven 400 K\n  slits    = 80 um, 50 um apart 40 cm\n  magnet   = m\n  drift    = 50 cm\n  detector = 10 um\n  populations = 2 1 1, 2 0.5, 1 -1 0, 1 0 0, 1 1 0, 1 3\n',
+    findings: ['14:53-56 beam-population-twice [1 3]'],
+    fixes: [],
+    says: ["every m_F of F = 1 already has its weight from the entries '1 -1 0', '1 0 0', '1 1 0'"],
+    // m_F = +1 of F = 2 weighs 1, the other four 0.5 (the first entry that names a sublevel): 1/3 and 1/6 of 3.
+    beamPopulations: { 'F=2, m_F=-2': 1 / 6, 'F=2, m_F=-1': 1 / 6, 'F=2, m_F=0': 1 / 6, 'F=2, m_F=+1': 1 / 3, 'F=2, m_F=+2': 1 / 6, 'F=1, m_F=-1': 0, 'F=1, m_F=0': 0, 'F=1, m_F=+1': 0 },
+  },
+  {
     name: 'a length of 1e308 m or 5 km in an apparatus is said where it is written, not computed into a wrong finding',
     text: 'slab s\n  size          = 10, 20, 1 mm\n  centre        = 0, 0, 1e308 m\n  magnetisation = 1.2 T along y\ncoil c\n  radius  = 1e308 m\n  turns   = 1\n  current = 1 A\nmagnet m\n  sources = s, c\n  length  = 5 km\n',
     findings: ['3:25-32 value-beyond-apparatus [1e308 m]', '6:13-20 value-beyond-apparatus [1e308 m]', '11:13-17 value-beyond-apparatus [5 km]'],
@@ -139,7 +150,7 @@ export const NEWER_BLOCKS: MistakeCase[] = [
     text: 'species Rb87\n  level ground: 5s 2S1/2\ndata d1\n  level = ground\n  lower = 1 0\n  upper = 1 0\n  point = 6834 MHz at 1 G\n  point = 6835 MHz at 2 G\nfit f\n  data  = d1\n  free  = g_J, g_J\n  start = g_J 2 MHz\nresonance r\n  level = ground\n  lower = 1 0\n  upper = 1 0\n',
     findings: ['6:11-14 fit-pair-not-found [1 0]', '11:16-19 fit-parameter-twice [g_J]', '12:15-20 fit-start-malformed [2 MHz]', '15:11-14 resonance-no-such-pair [1 0]'],
     fixes: [],
-    says: ['g_J is already free; a parameter is freed once', 'the start of g_J is a plain number, got 2 MHz', 'lower and upper name one sublevel, F = 1, m = 0',"resonance 'r': lower and upper name one sublevel"],
+    says: ['g_J is already free; a parameter is freed once', 'the start of g_J is a plain number or %, got 2 MHz', 'lower and upper name one sublevel, F = 1, m = 0',"resonance 'r': lower and upper name one sublevel"],
   },
   {
     name: 'a size of two values, a zero direction, a negative solenoid length and half a turn',

@@ -288,6 +288,24 @@ function halfText(twice: number): string {
   return twice % 2 === 0 ? String(twice / 2) : `${twice}/2`;
 }
 
+/**
+ * The earlier entries that leave nothing to a new one (F, and m_F unless it is undefined): an
+ * earlier entry for the whole F, the same F and m_F, or, for a whole F, entries for each of its
+ * m_F. Empty when the new entry gives some sublevel its weight (`2 1 1, 2 0.5`: the rest of F = 2).
+ */
+function coveringEntries(earlier: NonNullable<BeamModel['populations']>, twoF: number, twoM: number | undefined): number[] {
+  const whole = earlier.findIndex((p) => p.twoF === twoF && (p.twoM === undefined || p.twoM === twoM));
+  if (whole >= 0) return [whole];
+  if (twoM !== undefined) return [];
+  const each: number[] = [];
+  for (let m = -twoF; m <= twoF; m += 2) {
+    const at = earlier.findIndex((p) => p.twoF === twoF && p.twoM === m);
+    if (at < 0) return [];
+    each.push(at);
+  }
+  return each;
+}
+
 /** `populations = F m weight, ...` or `F weight` for a whole F manifold. */
 function readPopulations(s: SettingNode, problems: ProblemList): BeamModel['populations'] {
   const out: NonNullable<BeamModel['populations']> = [];
@@ -320,13 +338,17 @@ function readPopulations(s: SettingNode, problems: ProblemList): BeamModel['popu
       anyWrong = true;
       continue;
     }
-    const at = out.findIndex((p) => p.twoF === twoF && (p.twoM === undefined || twoM === undefined || p.twoM === twoM));
-    const earlier = out[at];
-    if (earlier) {
-      // The beam takes the first entry that names a sublevel; a later one would be dropped without a word.
+    const covering = coveringEntries(out, twoF, twoM);
+    if (covering.length > 0) {
+      // The beam takes the first entry that names a sublevel; one wholly covered by earlier entries would be dropped without a word.
       const named = twoM === undefined ? `F = ${halfText(twoF)}` : `F = ${halfText(twoF)}, m_F = ${halfText(twoM)}`;
-      problems.add('beam-population-twice', `${named} already has its weight from the entry '${written[at]}', which is the one used; this entry is not`, range, {
-        related: [{ message: 'the entry that is used', range: earlier.range }],
+      const from = covering.map((i) => `'${written[i]}'`).join(', ');
+      const message =
+        covering.length === 1
+          ? `${named} already has its weight from the entry ${from}, which is the one used; this entry is not`
+          : `every m_F of ${named} already has its weight from the entries ${from}, which are the ones used; this entry is not`;
+      problems.add('beam-population-twice', message, range, {
+        related: covering.map((i) => ({ message: covering.length === 1 ? 'the entry that is used' : 'an entry that is used', range: out[i]!.range })),
       });
       continue;
     }

@@ -5,6 +5,7 @@
  * where it is written (a line of the CSV file is reported on the `file` setting with its number).
  */
 import type { BlockNode, Range, SettingNode, ValuePart } from '../format/ast';
+import { convertSI } from '../format/units';
 import { physicalField, MAX_FIELD_T } from './fieldRange';
 import { MAX_LENGTH_M } from './lengthRange';
 import { MAX_USED_FILE_BYTES } from './limits';
@@ -121,15 +122,23 @@ function plainNumber(p: ValuePart | undefined): number | undefined {
   return p && p.kind === 'number' ? p.number.value : undefined;
 }
 
+const PROFILE_POINT_SHAPE = 'write point = <position> <counts> [<error>], e.g. point = -120 um 14 4';
+
 /**
  * A profile point whose position is not first (`14 -120 um`: the columns swapped) or that has
  * no counts (`-120 um`): said as such, not as a missing unit on the counts with fixes that add one.
+ * A quantity that is not a length (`14 5 MHz`, `3 G`) is no position, so it gets the shape alone.
  */
 function misplacedPosition(parts: readonly ValuePart[]): string | undefined {
   const at = parts.findIndex((p) => p.kind === 'quantity');
-  if (parts.length === 1 && at === 0) return `this point gives a position but no counts: write point = ${parts[0]!.text} <counts> [<error>]`;
-  if (at <= 0 || parts.length > 3 || parts.some((p, i) => i !== at && p.kind !== 'number')) return undefined;
-  return `the position goes first, then the counts: write point = ${parts[at]!.text} ${parts.filter((_, i) => i !== at).map((p) => p.text).join(' ')}`;
+  const quantity = parts[at];
+  if (!quantity || quantity.kind !== 'quantity') return undefined;
+  const alone = parts.length === 1 && at === 0;
+  const swapped = at > 0 && parts.length <= 3 && parts.every((p, i) => i === at || p.kind === 'number');
+  if (!alone && !swapped) return undefined;
+  if (convertSI(1, 'length', quantity.unit.text) === undefined) return PROFILE_POINT_SHAPE;
+  if (alone) return `this point gives a position but no counts: write point = ${quantity.text} <counts> [<error>]`;
+  return `the position goes first, then the counts: write point = ${quantity.text} ${parts.filter((_, i) => i !== at).map((p) => p.text).join(' ')}`;
 }
 
 /** `point = -120 um 14` or `point = -120 um 14 4` (position, counts, optional error). */
@@ -141,7 +150,7 @@ function readProfilePoint(s: SettingNode, d: DataModel, problems: ProblemList): 
     return;
   }
   if (parts.length < 2 || parts.length > 3 || s.groups.length > 1) {
-    problems.add('data-point-malformed', 'write point = <position> <counts> [<error>], e.g. point = -120 um 14 4', s.valueText.range.start === s.valueText.range.end ? s.range : s.valueText.range);
+    problems.add('data-point-malformed', PROFILE_POINT_SHAPE, s.valueText.range.start === s.valueText.range.end ? s.range : s.valueText.range);
     return;
   }
   const x = readPartQuantity(parts[0]!, 'length', problems, 'point');
@@ -213,13 +222,21 @@ function readFileSetting(s: SettingNode, d: DataModel, sources: SetupSources, pr
         continue;
       }
       if (!(Math.abs(v.position!) <= MAX_LENGTH_M)) {
-        problems.add('data-point-malformed', `${written} line ${row.line}: a position is within 1 km of the beam axis`, range, { related: [{ message: 'this line', range: lineRange(row.line), uri: location }] });
+        // The code a written point gets (lengthRange.ts); the row is named and linked.
+        problems.add('value-beyond-apparatus', `${written} line ${row.line}: positions must be within 1 km of the beam axis`, range, { related: [{ message: 'this line', range: lineRange(row.line), uri: location }] });
         continue;
       }
       d.profile.push({ positionM: v.position!, counts, ...(v.error !== undefined ? { error: v.error } : {}), range, csvLine: row.line });
     } else {
-      if (!(v.frequency! > 0) || (v.field !== undefined && !(v.field >= 0 && v.field <= MAX_FIELD_T)) || (v.uncertainty !== undefined && !(v.uncertainty > 0))) {
-        problems.add('data-point-malformed', `${written} line ${row.line}: frequencies and uncertainties must be positive and fields from 0 to 1e5 T`, range, {
+      if (v.field !== undefined && !(Math.abs(v.field) <= MAX_FIELD_T)) {
+        // The code a written point gets (fieldRange.ts); the row is named and linked.
+        problems.add('field-beyond-physical', `${written} line ${row.line}: fields must be at most 1e5 T (near the atomic unit, 2.35e5 T, the atom's own binding is no longer the larger term)`, range, {
+          related: [{ message: 'this line', range: lineRange(row.line), uri: location }],
+        });
+        continue;
+      }
+      if (!(v.frequency! > 0) || (v.field !== undefined && !(v.field >= 0)) || (v.uncertainty !== undefined && !(v.uncertainty > 0))) {
+        problems.add('data-point-malformed', `${written} line ${row.line}: frequencies and uncertainties must be positive and fields not negative`, range, {
           related: [{ message: 'this line', range: lineRange(row.line), uri: location }],
         });
         continue;

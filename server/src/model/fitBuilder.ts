@@ -122,9 +122,9 @@ function readStarts(s: SettingNode, f: FitRequestModel, problems: ProblemList): 
       reportParameter(name, problems);
       continue;
     }
-    if (START_DIMENSION[name.text] === 'dimensionless' && value.kind === 'quantity') {
-      // Else "fraction needs a plain number or %", which names no setting the user wrote.
-      problems.add('fit-start-malformed', `the start of ${name.text} is a plain number, got ${value.text}`, value.range);
+    if (START_DIMENSION[name.text] === 'dimensionless' && value.kind === 'quantity' && value.unit.text !== '%') {
+      // Else "fraction needs a plain number or %", which names no setting the user wrote; `5 %` is 0.05.
+      problems.add('fit-start-malformed', `the start of ${name.text} is a plain number or %, got ${value.text}`, value.range);
       continue;
     }
     const v = readPartQuantity(value, START_DIMENSION[name.text], problems, name.text);
