@@ -113,7 +113,7 @@ export const NEWER_BLOCKS: MistakeCase[] = [
     text: 'species K39\n  level ground: 4s 2S1/2\nmagnet m\n  field    = 0.1 T\n  gradient = 100 T/m\n  length   = 5 cm\nbeam c\n  level    = ground\n  source   = oven 400 K\n  slits    = 80 um, 50 um apart 40 cm\n  magnet   = m\n  drift    = 50 cm\n  detector = 10 um\n  populations = 1 1 1, 1 1 2, 2 0.5, 2 -1 1\n',
     findings: ['14:24-29 beam-population-twice [1 1 2]', '14:38-44 beam-population-twice [2 -1 1]'],
     fixes: [],
-    says: ["F = 1, m_F = 1 already has its weight from the entry '1 1 1', which is the one used; this entry is not","F = 2, m_F = -1 already has its weight from the entry '2 0.5'"],
+    says: ["F = 1, m_F = +1 already has its weight from the entry '1 1 1', which is the one used; this entry is not","F = 2, m_F = -1 already has its weight from the entry '2 0.5'"],
   },
   {
     name: 'populations that give one sublevel, then the rest of its F: both are used, without a warning; a whole F after each of its m_F is said',

@@ -1,6 +1,7 @@
 /** Builds fields, magnets and beams: the experiment's hardware. */
 import type { BlockNode, SettingNode, ValuePart } from '../format/ast';
 import type { Dimension } from '../format/units';
+import { halfText } from '../physics/engine/halfIntegers';
 import { physicalField } from './fieldRange';
 import { NameIndex, resolveLevel } from './nameIndex';
 import { ProblemList } from './problems';
@@ -284,10 +285,6 @@ function populationMistake(twoF: number, twoM: number | null | undefined, weight
   return undefined;
 }
 
-function halfText(twice: number): string {
-  return twice % 2 === 0 ? String(twice / 2) : `${twice}/2`;
-}
-
 /**
  * The earlier entries that leave nothing to a new one (F, and m_F unless it is undefined): an
  * earlier entry for the whole F, the same F and m_F, or, for a whole F, entries for each of its
@@ -341,7 +338,7 @@ function readPopulations(s: SettingNode, problems: ProblemList): BeamModel['popu
     const covering = coveringEntries(out, twoF, twoM);
     if (covering.length > 0) {
       // The beam takes the first entry that names a sublevel; one wholly covered by earlier entries would be dropped without a word.
-      const named = twoM === undefined ? `F = ${halfText(twoF)}` : `F = ${halfText(twoF)}, m_F = ${halfText(twoM)}`;
+      const named = twoM === undefined ? `F = ${halfText(twoF)}` : `F = ${halfText(twoF)}, m_F = ${halfText(twoM, true)}`;
       const from = covering.map((i) => `'${written[i]}'`).join(', ');
       const message =
         covering.length === 1
