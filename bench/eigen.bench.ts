@@ -15,6 +15,7 @@ import { householderQlInPlace } from '../server/src/physics/engine/householderQl
 import { simdEigenpairs, simdKernelsAvailable } from '../server/src/physics/engine/simdEigen';
 import { jacobiInPlace } from '../server/src/physics/engine/jacobiEigen';
 import { libraryEigenInPlace } from './mlMatrixEigen';
+import { steadyAgainstLapack } from './eigenSteady';
 
 type Solver = (a: Float64Array, n: number, v: Float64Array) => boolean;
 
@@ -244,11 +245,32 @@ function sweepRoutes(levels: { name: string; spec: Parameters<typeof buildLevelM
   }
 }
 
-function main(): void {
-  // EIGEN_BENCH=large: only the crossover and the LAPACK comparison.
+/** The alternating protocol at the orders of the goal (eigenSteady.ts), on the matrices of againstLapack. */
+async function steady(): Promise<void> {
+  const count = (name: string, fallback: number) => Math.max(1, Number(process.env[name]) || fallback);
+  const lines = await steadyAgainstLapack({
+    orders: [160, 192],
+    rounds: count('EIGEN_ROUNDS', 11),
+    timings: count('EIGEN_TIMINGS', 7),
+    matrices: (n) => {
+      const rnd = lcg(99 + n);
+      return Array.from({ length: Math.max(4, Math.round(2000 / n)) }, () => randomSymmetric(n, rnd));
+    },
+  });
+  for (const line of lines) console.log(line);
+}
+
+async function main(): Promise<void> {
+  // EIGEN_BENCH=steady: only the alternating protocol at 160 and 192 (the goal's verdict);
+  // EIGEN_BENCH=large: the crossover, the LAPACK comparison and the protocol.
+  if (process.env.EIGEN_BENCH === 'steady') {
+    await steady();
+    return;
+  }
   if (process.env.EIGEN_BENCH === 'large') {
     simdCrossover();
     againstLapack();
+    await steady();
     return;
   }
   const orders = [2, 3, 4, 6, 8, 12, 16, 24, 32, 48, 64, 96, 128];
@@ -286,6 +308,7 @@ function main(): void {
   sweepRoutes(levels);
   simdCrossover();
   againstLapack();
+  await steady();
 }
 
-main();
+void main();

@@ -2,13 +2,20 @@
 """LAPACK reference for bench/eigen.bench.ts: numpy.linalg.eigh (eigenvalues and
 vectors) on random symmetric matrices of the given orders, one BLAS thread.
 Prints one JSON line: numpy version, the OpenBLAS core in use, and per order the
-median and best microseconds per decomposition (wall and CPU time of this process)."""
+median and best microseconds per decomposition (wall and CPU time of this process).
+
+With --serve it stays up for the alternating protocol (bench/eigenSteady.ts): it prints one
+JSON line with the version and core, then answers each request line
+"PATH N COUNT TIMINGS" (COUNT matrices of order N as float64 rows in PATH, the same matrices
+the engine solves) with one JSON line: the CPU microseconds per call of TIMINGS timings, each
+one eigh of every matrix."""
 import argparse
 import ctypes
 import glob
 import json
 import os
 import statistics
+import sys
 import time
 
 import numpy as np
@@ -27,10 +34,34 @@ def openblas_core():
     return None
 
 
+def serve():
+    """Answer timing requests on stdin until it closes (one JSON line each)."""
+    print(json.dumps({"numpy": np.__version__, "core": openblas_core()}), flush=True)
+    loaded = {}
+    for line in sys.stdin:
+        path, n, count, timings = line.split()
+        n, count, timings = int(n), int(count), int(timings)
+        if path not in loaded:
+            loaded[path] = [m.copy() for m in np.fromfile(path, dtype=np.float64).reshape(count, n, n)]
+            np.linalg.eigh(loaded[path][0])  # warm-up
+        mats = loaded[path]
+        cpu = []
+        for _ in range(timings):
+            c0 = time.process_time()
+            for m in mats:
+                np.linalg.eigh(m)
+            cpu.append((time.process_time() - c0) * 1e6 / count)
+        print(json.dumps({"cpu": cpu}), flush=True)
+
+
 def main():
     ap = argparse.ArgumentParser()
     ap.add_argument("--orders", default="16,32,64,128,160,192,256")
+    ap.add_argument("--serve", action="store_true")
     args = ap.parse_args()
+    if args.serve:
+        serve()
+        return
     rng = np.random.default_rng(1234)
     out = {"numpy": np.__version__, "core": openblas_core(), "orders": {}}
     for n in [int(x) for x in args.orders.split(",")]:
