@@ -250,7 +250,7 @@ async function steady(): Promise<void> {
   const count = (name: string, fallback: number) => Math.max(1, Number(process.env[name]) || fallback);
   const lines = await steadyAgainstLapack({
     orders: [160, 192],
-    rounds: count('EIGEN_ROUNDS', 11),
+    rounds: count('EIGEN_ROUNDS', 15),
     timings: count('EIGEN_TIMINGS', 7),
     matrices: (n) => {
       const rnd = lcg(99 + n);

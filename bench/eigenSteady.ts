@@ -44,16 +44,18 @@ function startReference(): { ask: (line: string) => Promise<string>; close: () =
     else ready.push(line);
   });
   let failed: Error | null = null;
-  py.on('error', (e) => (failed = e));
-  py.on('exit', (code) => {
-    if (code !== 0 && code !== null) failed = new Error(`python3 exited with status ${code}`);
+  // A failed start or an early exit answers every pending question with an error.
+  const fail = (e: Error) => {
+    failed = e;
     for (const w of waiting.splice(0)) w('');
-  });
+  };
+  py.on('error', fail);
+  py.on('exit', (code) => fail(new Error(`python3 exited with status ${code}`)));
   return {
     ask(line) {
       if (line) py.stdin.write(`${line}\n`);
       return new Promise((resolve, reject) => {
-        const take = (l: string) => (l === '' && failed ? reject(failed) : resolve(l));
+        const take = (l: string) => (l === '' && failed !== null ? reject(failed) : resolve(l));
         const r = ready.shift();
         if (r !== undefined) take(r);
         else if (failed) reject(failed);
@@ -133,6 +135,8 @@ export async function steadyAgainstLapack(o: SteadyOptions): Promise<string[]> {
       );
       perRound.push(`${String(n).padStart(5)}: ${ratios.map((x) => x.toFixed(2)).join(' ')}`);
     }
+  } catch (e) {
+    return [`steady protocol stopped (the reference process failed): ${String(e)}`];
   } finally {
     ref.close();
     rmSync(dir, { recursive: true, force: true });
