@@ -39,6 +39,20 @@ function randomSymmetric(n: number, rnd: () => number): Float64Array {
   return a;
 }
 
+/** (B + Bᵀ)/2 for B with entries uniform in ±0.5 (the matrices of bench/eigen_numpy.py's own timing). */
+function plainSymmetric(n: number, rnd: () => number): Float64Array {
+  const a = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) a[i * n + i] = rnd();
+  for (let i = 0; i < n; i++) {
+    for (let j = i + 1; j < n; j++) {
+      const v = (rnd() + rnd()) / 2;
+      a[i * n + j] = v;
+      a[j * n + i] = v;
+    }
+  }
+  return a;
+}
+
 function residual(a0: Float64Array, d: Float64Array, v: Float64Array, n: number): number {
   let norm = 0;
   for (const x of a0) norm += x * x;
@@ -245,17 +259,31 @@ function sweepRoutes(levels: { name: string; spec: Parameters<typeof buildLevelM
   }
 }
 
-/** The alternating protocol at the orders of the goal (eigenSteady.ts), on the matrices of againstLapack. */
+/** The alternating protocol at the orders of the goal (eigenSteady.ts), on two families of random matrices. */
 async function steady(): Promise<void> {
   const count = (name: string, fallback: number) => Math.max(1, Number(process.env[name]) || fallback);
   const lines = await steadyAgainstLapack({
     orders: [160, 192],
     rounds: count('EIGEN_ROUNDS', 15),
     timings: count('EIGEN_TIMINGS', 7),
-    matrices: (n) => {
-      const rnd = lcg(99 + n);
-      return Array.from({ length: Math.max(4, Math.round(2000 / n)) }, () => randomSymmetric(n, rnd));
-    },
+    families: [
+      {
+        // As the one-shot comparison's engine side: entries uniform in ±0.5, the diagonal ten times wider.
+        name: 'wide diagonal',
+        matrices: (n) => {
+          const rnd = lcg(99 + n);
+          return Array.from({ length: Math.max(4, Math.round(2000 / n)) }, () => randomSymmetric(n, rnd));
+        },
+      },
+      {
+        // As eigen_numpy.py's own: (B + Bᵀ)/2 for B uniform in ±0.5, the diagonal no wider.
+        name: 'plain',
+        matrices: (n) => {
+          const rnd = lcg(7 + n);
+          return Array.from({ length: Math.max(4, Math.round(2000 / n)) }, () => plainSymmetric(n, rnd));
+        },
+      },
+    ],
   });
   for (const line of lines) console.log(line);
 }

@@ -24,8 +24,8 @@ export interface SteadyOptions {
   rounds: number;
   /** Timings per side and round; each timing solves every matrix once. */
   timings: number;
-  /** count random symmetric matrices of order n (row-major, n × n each). */
-  matrices: (n: number) => Float64Array[];
+  /** Families of random symmetric matrices: each makes its matrices of order n (row-major, n × n each). */
+  families: { name: string; matrices: (n: number) => Float64Array[] }[];
 }
 
 /** A line-by-line conversation with `python3 bench/eigen_numpy.py --serve`. */
@@ -101,10 +101,11 @@ export async function steadyAgainstLapack(o: SteadyOptions): Promise<string[]> {
   const dir = mkdtempSync(path.join(tmpdir(), 'eigen-steady-'));
   const rows: string[] = [];
   const perRound: string[] = [];
+  const wide = Math.max(...o.families.map((x) => x.name.length));
   try {
-    for (const n of o.orders) {
-      const mats = o.matrices(n);
-      const file = path.join(dir, `order-${n}.f64`);
+    for (const n of o.orders) for (const family of o.families) {
+      const mats = family.matrices(n);
+      const file = path.join(dir, `order-${n}-${rows.length}.f64`);
       const all = new Float64Array(mats.length * n * n);
       mats.forEach((m, i) => all.set(m, i * n * n));
       writeFileSync(file, all);
@@ -131,9 +132,9 @@ export async function steadyAgainstLapack(o: SteadyOptions): Promise<string[]> {
       const ratios = ours.map((e, r) => theirs[r]! / e);
       const q = quartiles(ratios);
       rows.push(
-        `${String(n).padStart(5)} | ${f(median(ours)).padStart(6)} | ${f(median(theirs)).padStart(6)} | ${q.median.toFixed(3)} | ${q.low.toFixed(3)}–${q.high.toFixed(3)} | ${Math.min(...ratios).toFixed(3)}–${Math.max(...ratios).toFixed(3)}`,
+        `${String(n).padStart(5)} | ${family.name.padEnd(wide)} | ${f(median(ours)).padStart(6)} | ${f(median(theirs)).padStart(6)} | ${q.median.toFixed(3)} | ${q.low.toFixed(3)}–${q.high.toFixed(3)} | ${Math.min(...ratios).toFixed(3)}–${Math.max(...ratios).toFixed(3)}`,
       );
-      perRound.push(`${String(n).padStart(5)}: ${ratios.map((x) => x.toFixed(2)).join(' ')}`);
+      perRound.push(`${String(n).padStart(5)} ${family.name.padEnd(wide)}: ${ratios.map((x) => x.toFixed(2)).join(' ')}`);
     }
   } catch (e) {
     return [`steady protocol stopped (the reference process failed): ${String(e)}`];
@@ -147,7 +148,7 @@ export async function steadyAgainstLapack(o: SteadyOptions): Promise<string[]> {
     `\nsteady protocol: symmetricEigen vs numpy.linalg.eigh ${head.numpy} (LAPACK dsyevd via OpenBLAS, core ${head.core ?? '?'}, one thread), the same matrices;`,
     `${o.rounds} rounds, each a block of ${o.timings} timings of one side then of the other (the first swapping every round); CPU µs per call`,
     `load average (1 min): ${loadStart.toFixed(2)} at the start, ${loadEnd.toFixed(2)} at the end, ${loadHigh.toFixed(2)} the highest seen between rounds`,
-    'order | engine (median of the rounds) | LAPACK | LAPACK ÷ engine: median of the rounds | quartiles | lowest–highest (≥ 1: engine at least as fast)',
+    'order | matrices | engine (median of the rounds) | LAPACK | LAPACK ÷ engine: median of the rounds | quartiles | lowest–highest (≥ 1: engine at least as fast)',
     ...rows,
     'LAPACK ÷ engine of each round:',
     ...perRound,
