@@ -6,7 +6,7 @@
  * never print a wavelength to more digits than the energies behind it support.
  */
 import { vacuumWavelengthM } from '../physics/species/conversions';
-import { MISSING, trimNumber, withUncertainty } from './quantityText';
+import { MISSING, trimNumber, withUncertainty, withUncertaintyIfVisible } from './quantityText';
 
 /** λ in m and its standard uncertainty (undefined when the frequency has none) for a frequency ν > 0. */
 export function vacuumWavelengthOf(hz: number, hzUnc?: number): { m: number; unc?: number } | undefined {
@@ -28,6 +28,5 @@ export function vacuumWavelengthNmText(hz: number, hzUnc: number | undefined, di
   const plain = (v: number): string => `${trimNumber(v, digits)} nm`;
   if (w.unc === undefined) return plain(nm);
   const uNm = w.unc * 1e9;
-  if (compact && uNm < 0.5 * 10 ** (Math.floor(Math.log10(nm)) + 1 - digits)) return plain(nm);
-  return withUncertainty(nm, uNm, plain);
+  return compact ? withUncertaintyIfVisible(nm, uNm, digits, plain) : withUncertainty(nm, uNm, plain);
 }
