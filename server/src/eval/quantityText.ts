@@ -197,10 +197,9 @@ export function withUncertainty(value: number | null | undefined, unc: number | 
  * wavelength use it together, so either both show their uncertainty or neither does.
  */
 export function withUncertaintyIfVisible(value: number | null | undefined, unc: number | null | undefined, digits: number, format: (v: number) => string): string {
-  if (value !== null && value !== undefined && Number.isFinite(value) && value !== 0 && unc !== null && unc !== undefined && unc < 0.5 * 10 ** (Math.floor(Math.log10(Math.abs(value))) + 1 - digits)) {
-    return format(value);
-  }
-  return withUncertainty(value, unc, format);
+  if (value === null || value === undefined || !Number.isFinite(value) || value === 0 || unc === null || unc === undefined) return withUncertainty(value, unc, format);
+  const halfLastDigit = 0.5 * 10 ** (Math.floor(Math.log10(Math.abs(value))) + 1 - digits);
+  return unc < halfLastDigit ? format(value) : withUncertainty(value, unc, format);
 }
 
 /**
