@@ -1,7 +1,7 @@
 /** The concise `value(unc)` notation of the one quantity formatter. */
 import { describe, expect, it } from 'vitest';
 import { fittedText } from '../../server/src/eval/fitText';
-import { fieldText, frequencyText, lengthText, trimNumber, UNCERTAINTY_DIGITS, withUncertainty } from '../../server/src/eval/quantityText';
+import { fieldText, frequencyText, lengthText, trimNumber, UNCERTAINTY_DIGITS, withUncertainty, withUncertaintyIfVisible } from '../../server/src/eval/quantityText';
 
 describe('withUncertainty', () => {
   it.each([
@@ -59,5 +59,23 @@ describe('one rule for the digits of an uncertainty (GUM JCGM 100:2008 §7.2.6: 
     expect(fittedText(0.35, 0.05, 'T')).toBe(withUncertainty(0.35, 0.05, (v) => fieldText(v)));
     expect(fittedText(3417341382, 68, 'Hz', 'MHz')).toBe('3417.341382(68) MHz');
     expect(fittedText(3417341382, 68, 'Hz')).toBe('3.417341382(68) GHz');
+  });
+});
+
+describe('withUncertaintyIfVisible (short labels)', () => {
+  const f7 = (v: number): string => frequencyText(v, 7);
+  it('hides an uncertainty below half the last digit printed, shows one at or above it', () => {
+    // 384.2305 THz at 7 digits: last digit 100 MHz, half of it 50 MHz.
+    expect(withUncertaintyIfVisible(384230484468500, 6.2e3, 7, f7)).toBe('384.2305 THz');
+    expect(withUncertaintyIfVisible(384230484468500, 4.9e7, 7, f7)).toBe('384.2305 THz');
+    expect(withUncertaintyIfVisible(384230484468500, 5e7, 7, f7)).toBe(withUncertainty(384230484468500, 5e7, f7));
+    expect(withUncertaintyIfVisible(384230484468500, 5e7, 7, f7)).toBe('384.230484(50) THz');
+    // The sign does not matter (a line written upper level first has a negative centre).
+    expect(withUncertaintyIfVisible(-384230484468500, 6.2e3, 7, f7)).toBe('-384.2305 THz');
+  });
+  it('without an uncertainty, or for a missing value, it is withUncertainty', () => {
+    expect(withUncertaintyIfVisible(5e14, undefined, 7, f7)).toBe('500 THz');
+    expect(withUncertaintyIfVisible(NaN, 1, 7, f7)).toBe('—');
+    expect(withUncertaintyIfVisible(0, 1e3, 7, f7)).toBe(withUncertainty(0, 1e3, f7));
   });
 });

@@ -5,6 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { vacuumWavelengthNmText, vacuumWavelengthOf } from '../../server/src/eval/wavelengthText';
+import { vacuumWavelengthM } from '../../server/src/physics/species/conversions';
 
 // c/(500 nm) exactly: 299 792 458 m/s / 500e-9 m.
 const NU_500NM = 299792458 / 500e-9;
@@ -16,6 +17,14 @@ describe('vacuum wavelength with the line frequency\'s uncertainty', () => {
     expect((w?.unc ?? 0) / 500e-9).toBeCloseTo(1e-6, 15);
     expect(vacuumWavelengthOf(NU_500NM)?.unc).toBeUndefined();
     expect(vacuumWavelengthOf(-NU_500NM)).toBeUndefined();
+  });
+
+  it('is the physics conversion, bit for bit (one c/ν), and c/ν exact where SI makes it so', () => {
+    // ν = 299 792 458 MHz is exactly c / 1 m × 1e6: λ = 1 µm exactly (SI definition of the metre).
+    expect(vacuumWavelengthM(299792458e6)).toBe(1e-6);
+    for (const hz of [NU_500NM, 384230484468500, 434829059122866, 6834682610.904]) {
+      expect(vacuumWavelengthOf(hz)?.m).toBe(vacuumWavelengthM(hz));
+    }
   });
 
   it('prints the value rounded to the uncertainty\'s two digits, in concise notation', () => {

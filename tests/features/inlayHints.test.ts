@@ -57,12 +57,21 @@ describe('inlay hints', () => {
     expect(hint.tooltip).toBe('F = 1/2 ↔ 3/2: 150 MHz');
   });
 
-  it('a line whose energy is uncertain at the digits shown gives the wavelength with its uncertainty', () => {
+  it('a line whose energy is uncertain at the digits shown gives its frequency and wavelength with their uncertainty', () => {
     // Invented scenario: an upper level at 500.000(1) THz. λ = c/ν = 599.5849 nm; u(λ) = λ u(ν)/ν = 1.2 pm = 0.0012 nm,
     // above half the 7th digit (0.00005 nm), so the hint shows it; the built-in D2 above (6.2 kHz) does not.
+    // The frequency the same way: u(ν) = 1 GHz is above half its 7th digit (50 MHz): 500.0000(10) THz.
     const text = 'species Demo\n  mass = 40 u\n  level g: 2S1/2  energy = 0 THz\n  level e: 2P°3/2  energy = 500.000(1) THz\nline L: g -> e\n';
     const hint = inlayHints(analysisOf(text), ALL).find((h) => String(h.label).includes('λ_vac'))!;
-    expect(String(hint.label)).toContain('λ_vac 599.5849(12) nm');
+    // g_eff = ½(g_u + g_l) + ¼(g_u − g_l)·3 with Landé g(2P3/2) = 1.3341 and g(2S1/2) = 2.0023: 1.167 (textbook formula).
+    expect(String(hint.label)).toBe('500.0000(10) THz, λ_vac 599.5849(12) nm, g_eff 1.167');
+  });
+
+  it('a line uncertain below the digits shown: neither its frequency nor its wavelength shows it', () => {
+    // Invented scenario: 500 THz ± 20 MHz. Half the 7th digit is 50 MHz for ν and 0.00005 nm for λ (u(λ) = 0.000024 nm).
+    const text = 'species Demo\n  mass = 40 u\n  level g: 2S1/2  energy = 0 THz\n  level e: 2P°3/2  energy = 500.00000(2) THz\nline L: g -> e\n';
+    const hint = inlayHints(analysisOf(text), ALL).find((h) => String(h.label).includes('λ_vac'))!;
+    expect(String(hint.label)).toBe('500 THz, λ_vac 599.5849 nm, g_eff 1.167');
   });
 
   it('gives no hints for an invalid level', () => {

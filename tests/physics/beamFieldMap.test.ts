@@ -123,6 +123,18 @@ describe('clearance of the beam line from the sources (geometry)', () => {
     expect(r.distanceM).toBeCloseTo(3e-4, 12);
     expect(r.atM).toBeCloseTo(0.05, 9);
   });
+  it('an oblique wire off the grid points: the distance between two skew lines, |(p − s)·(x̂ × t)| / |x̂ × t| (textbook)', () => {
+    const t = [0.6, 0.48, 0.64]; // unit: 0.36 + 0.2304 + 0.4096 = 1
+    const p = [0.0123456789, 0.002, 7e-4];
+    const r = closestApproach({ kind: 'wire', point: [p[0], p[1], p[2]], direction: [t[0], t[1], t[2]], currentA: 1 }, start, 0.08);
+    // x̂ × t = (0, −t_z, t_y); the closest points: the line's parameter s solves (d + s x̂ − u t)·x̂ = 0 and ·t = 0.
+    const d = [p[0] - start[0], p[1] - start[1], p[2] - start[2]];
+    const distance = Math.abs(-d[1] * t[2] + d[2] * t[1]) / Math.hypot(t[1], t[2]);
+    const dt = d[0] * t[0] + d[1] * t[1] + d[2] * t[2];
+    const along = (d[0] - t[0] * dt) / (1 - t[0] * t[0]);
+    expect(Math.abs(r.distanceM - distance)).toBeLessThan(1e-17);
+    expect(Math.abs(r.atM - along)).toBeLessThan(1e-10);
+  });
   it('a short wire segment beside the line: distance to its nearer end (Pythagoras)', () => {
     const r = closestApproach({ kind: 'wire', point: [0, 0.003, 0], direction: [0, 1, 0], currentA: 1, lengthM: 0.002 }, start, 0.08);
     expect(r.distanceM).toBeCloseTo(0.002, 12);

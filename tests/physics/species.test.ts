@@ -10,7 +10,7 @@ import {
   nuclearMomentFromG,
   parseDesignation,
   publishedEnergyToHz,
-  vacuumWavelengthNm,
+  vacuumWavelengthM,
 } from '../../server/src/physics/species';
 import type { Sourced } from '../../server/src/physics/species';
 import { level, num, species } from '../fixtures/builtinLookup';
@@ -217,7 +217,7 @@ describe('optical lines', () => {
     const nu = num(l.energyHz, 'energy');
     const lambda = num(l.vacuumWavelengthNm, 'wavelength');
     const tol = Math.max(floor, digitsTolerance(nu / 1e12, thzDecimals) + digitsTolerance(lambda, nmDecimals));
-    expect(Math.abs(vacuumWavelengthNm(nu) - lambda) / lambda).toBeLessThanOrEqual(tol);
+    expect(Math.abs(vacuumWavelengthM(nu) * 1e9 - lambda) / lambda).toBeLessThanOrEqual(tol);
     // The published form is kept beside the converted value.
     expect(l.energyPublished?.unit).toBe('THz');
     expect(publishedEnergyToHz(l.energyPublished?.value ?? 0, 'THz')).toBe(nu);
@@ -240,7 +240,7 @@ describe('optical lines', () => {
   it('places the metastable-helium 1083 nm lines at their known vacuum wavelengths', () => {
     // He 2³S1–2³P vacuum wavelengths 1083.3306 (P2), 1083.3217 (P1), 1083.2057 (P0) nm — from memory.
     const ms = num(level('He4', 'metastable').energyHz, 'He 2³S1');
-    const wl = (key: string) => vacuumWavelengthNm(num(level('He4', key).energyHz, key) - ms);
+    const wl = (key: string) => vacuumWavelengthM(num(level('He4', key).energyHz, key) - ms) * 1e9;
     expect(Math.abs(wl('3P2') - 1083.3306)).toBeLessThan(0.001);
     expect(Math.abs(wl('3P1') - 1083.3217)).toBeLessThan(0.001);
     expect(Math.abs(wl('3P0') - 1083.2057)).toBeLessThan(0.001);
@@ -248,7 +248,7 @@ describe('optical lines', () => {
 
   it('puts the clock and intercombination lines at their familiar wavelengths', () => {
     // Sr 698.4 nm clock, Sr 689.4 nm, Yb 578.4 nm clock, Yb 555.8 nm, Ca 657.5 nm (common practice, ±0.1 nm).
-    const wl = (id: string, key: string) => vacuumWavelengthNm(num(level(id, key).energyHz, `${id} ${key}`));
+    const wl = (id: string, key: string) => vacuumWavelengthM(num(level(id, key).energyHz, `${id} ${key}`)) * 1e9;
     expect(Math.abs(wl('Sr87', '3P0') - 698.45)).toBeLessThan(0.1);
     expect(Math.abs(wl('Sr88', '3P1') - 689.45)).toBeLessThan(0.1);
     expect(Math.abs(wl('Yb171', '3P0') - 578.42)).toBeLessThan(0.1);

@@ -6,7 +6,8 @@
  * - exact cancellations (the centre of an opposed coil pair, the axial derivative at the centre of a
  *   Helmholtz pair) leave rounding of ~1e-16 of the parts' own size, which would print as a value:
  *   below 1e-12 of that size a component is 0. A magnetised block cancels inside its own closed
- *   form (corner terms of size μ0·M), so its scale is its own magnetisation, even when it is alone.
+ *   form (face terms of size μ0·M, and μ0·M over the distance to its nearest edge for the
+ *   gradient), so that is its scale, even when it is alone.
  */
 import type { FieldIssue } from '../physics/fields';
 import type { FieldFunction, FieldSample, FieldSourceSpec, Vec3 } from '../physics/fields/types';
@@ -38,7 +39,7 @@ export function cleanField(parts: readonly FieldSourceSpec[], fieldOf: FieldOf):
     let bScale = 0;
     let gScale = 0;
     for (const p of parts) {
-      const inner = intrinsicScale(p);
+      const inner = intrinsicScale(p, point);
       bScale += inner.field;
       gScale = Math.max(gScale, inner.gradient);
     }
@@ -60,12 +61,32 @@ export function cleanField(parts: readonly FieldSourceSpec[], fieldOf: FieldOf):
 }
 
 /**
- * The size of the terms a part's own closed form sums: for a block, its corner terms, each of the
- * order of μ0·M (field) and μ0·M over its smallest half-edge (gradient); nothing for the others,
- * whose closed forms have no such inner cancellation.
+ * The size of the terms a part's own closed form sums at `point`: for a block, its face terms,
+ * each of the order of μ0·M (field) and of μ0·M over the point's distance to the block's nearest
+ * edge (gradient: the terms are 1/R to a corner and |u|/(u² + w²) ≤ 1/√(u² + w²) to an edge line,
+ * physics/fields/slabField.ts), so their round-off is ε times that. Far from a thin film the
+ * gradient is small because the film is thin, not because it cancels: its own scale shrinks with
+ * the distance, not with the film's thickness. Nothing for the other parts, whose closed forms
+ * have no such inner cancellation.
  */
-function intrinsicScale(p: FieldSourceSpec): { field: number; gradient: number } {
+function intrinsicScale(p: FieldSourceSpec, point: Vec3): { field: number; gradient: number } {
   if (p.kind !== 'slab') return { field: 0, gradient: 0 };
   const m = Math.hypot(...p.magnetisationT);
-  return { field: m, gradient: m / (Math.min(...p.sizeM) / 2) };
+  const d = distanceToNearestEdge(p.centre, p.sizeM, point);
+  return { field: m, gradient: d > 0 ? m / d : 0 };
+}
+
+/** Distance from `point` to the nearest of the 12 edges of the box `centre` ± `size`/2 (corners included). */
+export function distanceToNearestEdge(centre: Vec3, size: Vec3, point: Vec3): number {
+  let best = Number.POSITIVE_INFINITY;
+  for (let k = 0; k < 3; k++) {
+    // Edges along axis k: the offset along k clamped to the edge, the two others to one of its four lines.
+    const along = Math.max(0, Math.abs(point[k] - centre[k]) - size[k] / 2);
+    const a = (k + 1) % 3;
+    const b = (k + 2) % 3;
+    const da = Math.abs(Math.abs(point[a] - centre[a]) - size[a] / 2);
+    const db = Math.abs(Math.abs(point[b] - centre[b]) - size[b] / 2);
+    best = Math.min(best, Math.hypot(along, da, db));
+  }
+  return best;
 }

@@ -191,6 +191,18 @@ export function withUncertainty(value: number | null | undefined, unc: number | 
 }
 
 /**
+ * For short labels (inlay hints): `format(value)` at its `digits` significant digits while the
+ * uncertainty stays below half the last of them (it would not change a printed digit), else
+ * withUncertainty. `format` prints `digits` significant digits. A line's frequency and its
+ * wavelength use it together, so either both show their uncertainty or neither does.
+ */
+export function withUncertaintyIfVisible(value: number | null | undefined, unc: number | null | undefined, digits: number, format: (v: number) => string): string {
+  if (value === null || value === undefined || !Number.isFinite(value) || value === 0 || unc === null || unc === undefined) return withUncertainty(value, unc, format);
+  const halfLastDigit = 0.5 * 10 ** (Math.floor(Math.log10(Math.abs(value))) + 1 - digits);
+  return unc < halfLastDigit ? format(value) : withUncertainty(value, unc, format);
+}
+
+/**
  * The factor between a value and the number printed for it: a power of ten (an SI prefix, G for
  * T) unless the unit is not decimal (inch); `ratio` carries the printed number's rounding.
  */

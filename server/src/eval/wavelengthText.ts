@@ -1,16 +1,17 @@
 /**
- * A vacuum wavelength computed from a line frequency, printed with the frequency's uncertainty
- * carried over: λ = c/ν, u(λ) = λ·u(ν)/ν (first order; the next term is u(ν)/ν smaller, far
- * below the two digits printed). One place for it, so the text report, hovers and inlay hints
+ * A vacuum wavelength computed from a line frequency (λ = c/ν by physics/species/conversions'
+ * vacuumWavelengthM, the one place it is computed), printed with the frequency's uncertainty
+ * carried over: u(λ) = λ·u(ν)/ν (first order; the next term is u(ν)/ν smaller, far below the
+ * two digits printed). One place for it, so the text report, hovers and inlay hints
  * never print a wavelength to more digits than the energies behind it support.
  */
-import { SPEED_OF_LIGHT } from '../physics/constants';
-import { MISSING, trimNumber, withUncertainty } from './quantityText';
+import { vacuumWavelengthM } from '../physics/species/conversions';
+import { MISSING, trimNumber, withUncertainty, withUncertaintyIfVisible } from './quantityText';
 
 /** λ in m and its standard uncertainty (undefined when the frequency has none) for a frequency ν > 0. */
 export function vacuumWavelengthOf(hz: number, hzUnc?: number): { m: number; unc?: number } | undefined {
   if (!(hz > 0) || !Number.isFinite(hz)) return undefined;
-  const m = SPEED_OF_LIGHT / hz;
+  const m = vacuumWavelengthM(hz);
   return hzUnc !== undefined && hzUnc > 0 && Number.isFinite(hzUnc) ? { m, unc: (m * hzUnc) / hz } : { m };
 }
 
@@ -27,6 +28,5 @@ export function vacuumWavelengthNmText(hz: number, hzUnc: number | undefined, di
   const plain = (v: number): string => `${trimNumber(v, digits)} nm`;
   if (w.unc === undefined) return plain(nm);
   const uNm = w.unc * 1e9;
-  if (compact && uNm < 0.5 * 10 ** (Math.floor(Math.log10(nm)) + 1 - digits)) return plain(nm);
-  return withUncertainty(nm, uNm, plain);
+  return compact ? withUncertaintyIfVisible(nm, uNm, digits, plain) : withUncertainty(nm, uNm, plain);
 }

@@ -8,7 +8,7 @@
 import { type InlayHint, InlayHintKind, type Position, type Range } from 'vscode-languageserver-types';
 import type { Analysis } from '../eval/analyze';
 import { halfText } from '../eval/halves';
-import { fieldText, frequencyText, gradientText, prefixedText, trimNumber, withUncertainty } from '../eval/quantityText';
+import { fieldText, frequencyText, gradientText, prefixedText, trimNumber, withUncertainty, withUncertaintyIfVisible } from '../eval/quantityText';
 import type { BlockNode, LevelNode } from '../format/ast';
 import { comparePositions } from '../format/positions';
 import type { SetupModel } from '../model/types';
@@ -101,7 +101,7 @@ function blockHints(analysis: Analysis, model: SetupModel, block: BlockNode, out
         levelResult(analysis.result, line.upper.species.name, line.upper.name),
       );
       const parts = [
-        ...(f ? [`${frequencyText(f.hz, 7)}`, `λ_vac ${vacuumWavelengthNmText(Math.abs(f.hz), f.unc, 7, true)}`] : []),
+        ...(f ? [withUncertaintyIfVisible(f.hz, f.unc, 7, (v) => frequencyText(v, 7)), `λ_vac ${vacuumWavelengthNmText(Math.abs(f.hz), f.unc, 7, true)}`] : []),
         ...(r?.g_eff !== undefined ? [`g_eff ${trimNumber(r.g_eff, 4)}`] : []),
       ];
       if (parts.length > 0) out.push(hint(block.link.to.range.end, parts.join(', '), 'line centre from the level energies; effective Landé factor of the line'));

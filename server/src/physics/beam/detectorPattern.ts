@@ -318,22 +318,25 @@ export function computePattern(given: PatternInput, fixedGroups?: number[][], re
  * new shape seen by the optimised computePattern threw its compiled code away (a "wrong map"
  * deoptimisation) and compiled it again, four times in the generated 20,000-line file's
  * evaluation (`--trace-deopt`); now once.
- * Absent options stay undefined, which every reader treats as absent.
+ * Absent options stay undefined, which every reader treats as absent. The literals are typed
+ * with every key required (EveryKey), so a field added to PatternInput or BeamGeometry and not
+ * copied here fails the type check instead of being dropped.
  */
-function sameShapeInput(i: PatternInput): PatternInput {
+export function sameShapeInput(i: PatternInput): PatternInput {
   const g = i.geometry;
-  return {
+  const geometry: EveryKey<BeamGeometry> = {
+    slit1M: g.slit1M,
+    slit2M: g.slit2M,
+    slitSeparationM: g.slitSeparationM,
+    magnetLengthM: g.magnetLengthM,
+    driftM: g.driftM,
+    detectorWidthM: g.detectorWidthM,
+    gradientTPerM: g.gradientTPerM,
+    detectorOffsetM: g.detectorOffsetM,
+  };
+  const copy: EveryKey<PatternInput> = {
     massKg: i.massKg,
-    geometry: {
-      slit1M: g.slit1M,
-      slit2M: g.slit2M,
-      slitSeparationM: g.slitSeparationM,
-      magnetLengthM: g.magnetLengthM,
-      driftM: g.driftM,
-      detectorWidthM: g.detectorWidthM,
-      gradientTPerM: g.gradientTPerM,
-      detectorOffsetM: g.detectorOffsetM,
-    },
+    geometry,
     source: i.source,
     sublevels: i.sublevels,
     bins: i.bins,
@@ -344,7 +347,11 @@ function sameShapeInput(i: PatternInput): PatternInput {
     spanM: i.spanM,
     minRelativeProminence: i.minRelativeProminence,
   };
+  return copy;
 }
+
+/** T with its optional keys made required (their values may still be undefined). */
+type EveryKey<T> = { [K in keyof Required<T>]: T[K] };
 
 /** Width of grid bin i: the refinement's first step. */
 function binWidth(edgesM: Float64Array, i: number): number {

@@ -14,8 +14,8 @@ import { cumulativeAt } from './depositDeflections';
 import { gaussLegendre } from './gaussLegendre';
 import type { SlitImage } from './slitImage';
 import type { SpeedLaw } from './speedLaw';
-import { equalWithinRoundOff } from '../roundOff';
 import { goldenMaximum } from '../goldenMaximum';
+import { mirrorSymmetric } from '../mirrorSymmetry';
 
 export interface RefineMember {
   /** k in z = k/v², m³/s². */
@@ -72,7 +72,9 @@ export function exactProfile(x: number, members: readonly RefineMember[], law: S
  * of zero width have no box form; a maximum on the bracket's edge means the guess was not at the top).
  */
 export function refinePeak(guessM: number, stepM: number, members: readonly RefineMember[], law: SpeedLaw, image: SlitImage): number {
-  if (members.every((m) => m.k === 0) || mirrorSymmetric(members)) return 0; // the kernel is symmetric about the axis
+  // Members that pair off as ±k with equal weights (a merged σ pair of a J = 1/2 level), or all undeflected,
+  // make a profile symmetric about the axis: its top is at 0 exactly, not at the grid's round-off of 0.
+  if (mirrorSymmetric(members, (m) => m.k, (m) => m.weight)) return 0;
   if (law.singleSpeed !== undefined || !(image.boxAM > 0 && image.boxBM > 0) || !(stepM > 0)) return guessM;
   // The kernel is symmetric: a peak deflected to −z is the mirror image of one at +z, computed the same way.
   if (members.every((m) => m.k <= 0)) return -refinePeak(-guessM, stepM, members.map((m) => ({ k: -m.k, weight: m.weight })), law, image);
@@ -81,20 +83,4 @@ export function refinePeak(guessM: number, stepM: number, members: readonly Refi
   const x = goldenMaximum(f, guessM - half, guessM + half, 1e-6 * half);
   const onEdge = Math.min(x - (guessM - half), guessM + half - x) < 1e-5 * half;
   return Number.isFinite(x) && !onEdge && f(x) >= f(guessM) ? x : guessM;
-}
-
-
-/**
- * Members that pair off as ±k with equal weights (a merged σ pair of a J = 1/2 level) make a
- * profile symmetric about the axis: its top is at 0 exactly, not at the grid's round-off of 0.
- * k and weights of a pair are computed apart, so they match to a few ε of the largest (64 ε).
- */
-function mirrorSymmetric(members: readonly RefineMember[]): boolean {
-  const sorted = [...members].sort((a, b) => a.k - b.k);
-  const kScale = Math.max(...sorted.map((m) => Math.abs(m.k)));
-  const wScale = Math.max(...sorted.map((m) => Math.abs(m.weight)));
-  return sorted.every((m, i) => {
-    const mirror = sorted[sorted.length - 1 - i]!;
-    return equalWithinRoundOff(m.k, -mirror.k, kScale) && equalWithinRoundOff(m.weight, mirror.weight, wScale);
-  });
 }

@@ -183,7 +183,7 @@ function wasmMergeKernels(k: EigenKernels, heap: Float64Array, l: Layout, n: num
   // The kernels' double argument (ρ) goes through memory: Node 20 calls them through V8's generic
   // JS-to-WebAssembly wrapper, which can box doubles (eigenKernelsWat.mjs).
   const argsAt = sums + 32;
-  const args = heap.subarray(argsAt / 8, argsAt / 8 + 2);
+  const args = heap.subarray(argsAt / 8, argsAt / 8 + 1);
   const L = DIVIDE_LEAF_ORDER;
   return {
     fromRows: rowsFrom,

@@ -23,6 +23,9 @@ export function spectrumPeak(components: readonly WeightedComponent[], sigmaHz: 
   const fx = f(x);
   const fSample = f(sampleHz);
   const found = Number.isFinite(fx) && fx > fSample * (1 + HEIGHT_ROUND_OFF) ? { offsetHz: x, perHz: fx } : { offsetHz: sampleHz, perHz: fSample };
+  // Not physics/mirrorSymmetry's test of the components: this wider rule also puts at 0 the top of a
+  // nearly symmetric pattern that 0 matches to rounding, where the search's answer would be its noise
+  // (a line at 0.001 Hz of 16 MHz width: −0.12 Hz).
   if (found.offsetHz !== 0 && Math.min(loHz, hiHz) <= 0 && Math.max(loHz, hiHz) >= 0) {
     const f0 = f(0);
     if (f0 >= found.perHz * (1 - HEIGHT_ROUND_OFF)) return { offsetHz: 0, perHz: Math.max(f0, found.perHz) };

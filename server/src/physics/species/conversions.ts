@@ -20,9 +20,9 @@ export function publishedEnergyToHz(value: number, unit: PublishedEnergyUnit): n
   return value * HZ_PER_UNIT[unit];
 }
 
-/** Vacuum wavelength (nm) of a line of frequency `hz`. */
-export function vacuumWavelengthNm(hz: number): number {
-  return (SPEED_OF_LIGHT / hz) * 1e9;
+/** Vacuum wavelength (m) of a line of frequency `hz`: λ = c/ν (the one place it is computed). */
+export function vacuumWavelengthM(hz: number): number {
+  return SPEED_OF_LIGHT / hz;
 }
 
 /** μ_N/μ_B from the CODATA 2022 magnetons in constants.ts. */

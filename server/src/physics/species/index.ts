@@ -3,6 +3,6 @@ export type { BuiltinLevel, BuiltinSpecies, PublishedEnergy, PublishedEnergyUnit
 export { BUILTIN_SPECIES } from './table';
 export { citationOf } from './build-helpers';
 export { findBuiltinLevel, findSpecies, normalizeSpeciesName, normalizedSpellings, speciesNames, speciesSpellings } from './lookup';
-export { nuclearGFromMoment, nuclearMomentFromG, NUCLEAR_TO_BOHR_MAGNETON, publishedEnergyToHz, vacuumWavelengthNm } from './conversions';
+export { nuclearGFromMoment, nuclearMomentFromG, NUCLEAR_TO_BOHR_MAGNETON, publishedEnergyToHz, vacuumWavelengthM } from './conversions';
 export { DESIGNATION_PATTERN, parseDesignation } from './designation';
 export type { DesignationParts } from './designation';

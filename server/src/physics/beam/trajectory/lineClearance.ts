@@ -5,6 +5,7 @@
  * that comes within the beam's own half height of one runs into it.
  */
 import type { FieldSourceSpec, Vec3 } from '../../fields/types';
+import { goldenMaximum } from '../../goldenMaximum';
 
 /** Distance from a point to the source (0 inside a block), m. */
 export function distanceToSource(spec: FieldSourceSpec, p: Vec3): number {
@@ -58,16 +59,10 @@ export function closestApproach(spec: FieldSourceSpec, start: Vec3, lengthM: num
       best = k;
     }
   }
-  let lo = (lengthM * Math.max(0, best - 1)) / n;
-  let hi = (lengthM * Math.min(n, best + 1)) / n;
-  const g = (Math.sqrt(5) - 1) / 2;
-  for (let i = 0; i < 60 && hi - lo > 1e-15 * Math.max(1, lengthM); i++) {
-    const a = hi - g * (hi - lo);
-    const b = lo + g * (hi - lo);
-    if (at(a) < at(b)) hi = b;
-    else lo = a;
-  }
-  const s = 0.5 * (lo + hi);
+  const lo = (lengthM * Math.max(0, best - 1)) / n;
+  const hi = (lengthM * Math.min(n, best + 1)) / n;
+  // The smallest distance is the largest of its negative.
+  const s = goldenMaximum((x) => -at(x), lo, hi, 1e-15 * Math.max(1, lengthM), 60);
   const d = at(s);
   return d < bestD ? { distanceM: d, atM: s } : { distanceM: bestD, atM: (lengthM * best) / n };
 }
