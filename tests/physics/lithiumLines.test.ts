@@ -6,6 +6,7 @@
  * derivation (a typo, a changed anchor or sign), not the sources; the last one is independent of them.
  */
 import { describe, expect, it } from 'vitest';
+import { vacuumWavelengthNmText } from '../../server/src/eval/wavelengthText';
 import { level, num } from '../fixtures/builtinLookup';
 
 const MHZ = 1e6;
@@ -46,6 +47,28 @@ describe('lithium D lines: the differences implied by the table', () => {
     // the reviewed ⁶Li fine structure, and 446.789634 THz sits 38 MHz above ⁷Li D1 − the measured isotope shift.
     expect(Math.abs(line('Li6', 'P1/2') - 446789634)).toBeGreaterThan(30);
     expect(Math.abs(line('Li6', 'P3/2') - 446799677)).toBeGreaterThan(20);
+  });
+
+  it('the recalled anchor carries a stated, generous 1 MHz; the derived lines add their read differences in quadrature', () => {
+    // No page printing an absolute lithium D-line frequency could be read. arXiv:1212.2220 (2012), abstract, states
+    // absolute frequencies to ≤ 25 kHz and line-centre shifts of up to 1 MHz from the line-shape model: the anchor's
+    // 1 MHz (from memory, generous) is 40 times the former and covers the latter.
+    const u = (id: string, key: string): number => (level(id, key).energyHz?.uncertainty ?? Number.NaN) / MHZ;
+    expect(u('Li7', 'P1/2')).toBe(1);
+    expect(level('Li7', 'P1/2').energyHz?.uncertaintySource).toMatch(/^from memory, chosen generously: .*arXiv:1212\.2220 \(2012\)/);
+    expect(u('Li7', 'P1/2') / 0.025).toBeGreaterThanOrEqual(40);
+    expect(u('Li7', 'P3/2')).toBeCloseTo(Math.hypot(1, 0.04), 12);
+    expect(u('Li6', 'P1/2')).toBeCloseTo(Math.hypot(1, 0.015), 12);
+    expect(u('Li6', 'P3/2')).toBeCloseTo(Math.hypot(1, 0.015, 0.049), 12);
+    for (const [id, key] of [['Li7', 'P3/2'], ['Li6', 'P1/2'], ['Li6', 'P3/2']] as const) {
+      expect(level(id, key).energyHz?.uncertaintySource, `${id} ${key}`).toMatch(/^the ⁷Li D1 anchor's 1 MHz \(from memory, generous\) and .* \(read\), in quadrature$/);
+    }
+  });
+
+  it('a wavelength computed from a lithium line prints the line uncertainty (it printed 670.961561 nm bare before)', () => {
+    const e = level('Li7', 'P3/2').energyHz;
+    // λ = c/ν = 670.96156 nm, u(λ) = λ u(ν)/ν = 1.5e-6 nm.
+    expect(vacuumWavelengthNmText(num(e, 'Li7 D2'), e?.uncertainty, 9)).toBe('670.9615613(15) nm');
   });
 
   it('keeps the ⁷Li D1 line the table is anchored on (recalled) and derives the other three from it', () => {

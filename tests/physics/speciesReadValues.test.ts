@@ -5,7 +5,7 @@
  * docs/species-data.md ("Read to confirm recalled values") lists the same sources.
  */
 import { describe, expect, it } from 'vitest';
-import { ELECTRON_GS, NUCLEAR_MAGNETON_HZ_PER_T, SPEED_OF_LIGHT } from '../../server/src/physics/constants';
+import { ELECTRON_GS, ELECTRON_MASS_U, NUCLEAR_MAGNETON_HZ_PER_T, SPEED_OF_LIGHT } from '../../server/src/physics/constants';
 import { nuclearGFromMoment } from '../../server/src/physics/species';
 import type { Sourced } from '../../server/src/physics/species';
 import { level, num, species } from '../fixtures/builtinLookup';
@@ -38,6 +38,18 @@ describe('hydrogen and deuterium', () => {
     expect(level('D', 'ground').A?.source).toBe('from memory');
     expect(num(level('D', 'ground').A, 'D A') * 1.5).toBeCloseTo(327384352.5222, 4);
     expect((level('D', 'ground').A?.uncertainty ?? 0) * 1.5).toBeCloseTo(0.0017, 10);
+  });
+
+  it('D ground splitting agrees with the optical 2S interval 40 924 454(7) Hz through D21 = 8 f(2S) − f(1S)', () => {
+    // Phys. Rev. A 70, 062503 (2004) (arXiv:physics/0405058), abstract: f(2S) = 40 924 454(7) Hz. D21 is not printed
+    // there; it is taken from hydrogen, whose D21/f(1S) = 48 953(3) Hz / 1 420 405 751.768 Hz (arXiv:0812.3509 (2009),
+    // abstract), scaled to deuterium by f(1S): both are α² E_F at leading order (common practice), allowed 1 %.
+    const fD1s = num(level('D', 'ground').A, 'D A') * 1.5;
+    const d21 = (48953 / 1420405751.768) * fD1s;
+    const predicted = 8 * 40924454 - d21;
+    expect(Math.abs(fD1s - predicted)).toBeLessThanOrEqual(2 * Math.hypot(8 * 7, 0.01 * d21));
+    // Without D21 the 2S interval alone misses by 11 kHz: the check sees the QED difference.
+    expect(Math.abs(fD1s - 8 * 40924454)).toBeGreaterThan(2 * Math.hypot(8 * 7, 0.01 * d21));
   });
 
   it('H 1s g_J is g_e(1 − 17.709(13)e-6) to the 7 stored decimals; D shares it (ratio 1 + 7.22e-9)', () => {
@@ -124,6 +136,27 @@ describe('lithium 2p hyperfine constants', () => {
   it('⁶Li 2p1/2 A (compilation) agrees with the 2018 interval 26.108(9) MHz = (3/2)A', () => {
     // Doctoral dissertation, National Tsing Hua University (2018), abstract.
     within2Sigma(level('Li6', 'P1/2').A, 26.108e6 / 1.5, 0.009e6 / 1.5, '6Li 2p1/2 A');
+  });
+});
+
+describe('lithium 2p lifetime', () => {
+  it('⁷Li takes the ⁶Li measurement, and says why: the isotope moves τ by under 1e-4, under 3 ps of 27.102 ns', () => {
+    // τ ∝ 1/(ω³|d|²): ω³ moves by 3Δν/ν with the read D1 isotope shift (doctoral dissertation, National Tsing Hua
+    // University (2018), abstract: 10 533.800(15) MHz); |d|² scales as 1/μ² (reduced mass, textbook), 2·m_e(1/M₆ − 1/M₇).
+    // The measurement's own uncertainty, 9 ps, is recalled from the ⁶Li compilation.
+    const tau7 = level('Li7', 'P3/2').lifetimeS;
+    expect(num(tau7, 'τ7')).toBe(num(level('Li6', 'P3/2').lifetimeS, 'τ6'));
+    expect(num(level('Li7', 'P1/2').lifetimeS, 'τ7 P1/2')).toBe(num(tau7, 'τ7'));
+    const nu7 = num(level('Li7', 'P1/2').energyHz, 'ν7');
+    const omegaCubed = (3 * (nu7 - num(level('Li6', 'P1/2').energyHz, 'ν6'))) / nu7;
+    const dipole = 2 * ELECTRON_MASS_U * (1 / num(species('Li6').massU, 'M6') - 1 / num(species('Li7').massU, 'M7'));
+    expect(omegaCubed).toBeCloseTo(7.07e-5, 6);
+    expect(dipole).toBeCloseTo(2.6e-5, 6);
+    const shiftS = num(tau7, 'τ7') * Math.abs(omegaCubed - dipole);
+    expect(shiftS).toBeLessThan(3e-12);
+    expect(shiftS).toBeLessThan(9e-12 / 3);
+    expect(tau7?.source).toMatch(/^derived: the ⁶Li 2P lifetime of Gehm/);
+    expect(tau7?.source).toContain('under 1e-4');
   });
 });
 

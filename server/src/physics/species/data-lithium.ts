@@ -1,6 +1,6 @@
 /** Lithium-6 and lithium-7: 2s ground level and the 2p D-line levels. */
 import { energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
-import { LI7_2P12_INTERVAL, LI_D1_ISOTOPE_SHIFT, LI_FINE_STRUCTURE_REVIEW } from './measurements';
+import { LI7_2P12_INTERVAL, LI_D1_ISOTOPE_SHIFT, LI_D_LINES_COMB, LI_FINE_STRUCTURE_REVIEW } from './measurements';
 import { ARIMONDO, FROM_MEMORY, GEHM_LI6, IAEA_MOMENTS, NIST_MASSES, READ_IN_MEASUREMENT } from './sources';
 import type { BuiltinSpecies } from './types';
 
@@ -12,17 +12,51 @@ import type { BuiltinSpecies } from './types';
  * sits 38 MHz above ⁷Li D1 minus the measured isotope shift (docs/species-data.md).
  */
 const LI7_D1_MHZ = 446800129.853;
+/**
+ * Standard uncertainty given to the recalled anchor, MHz: 40 times what the comb measurements claim, so that a
+ * misremembered kHz digit or a line-shape model that left out quantum interference (up to 1 MHz) stays inside it.
+ */
+const LI7_D1_U_MHZ = 1;
+const LI7_D1_U_SOURCE =
+  `from memory, chosen generously: 40 times the comb measurements' stated ≤ 25 kHz, and as large as the line-centre ` +
+  `shifts their line-shape analysis corrects; ${LI_D_LINES_COMB}`;
 const LI_D1_ISOTOPE_SHIFT_MHZ = 10533.8;
 const LI6_FINE_STRUCTURE_MHZ = 10052.954;
 const LI7_FINE_STRUCTURE_MHZ = 10053.154;
+/** Published standard uncertainties of the three read differences, MHz (measurements.ts). */
+const LI_D1_ISOTOPE_SHIFT_U_MHZ = 0.015;
+const LI6_FINE_STRUCTURE_U_MHZ = 0.049;
+const LI7_FINE_STRUCTURE_U_MHZ = 0.04;
 /** Sum rounded to the kHz, the last digit of the recalled anchor, so no binary noise reaches the published value. */
 const kHzSum = (a: number, b: number): number => Math.round((a + b) * 1e3) / 1e3;
+/** Uncertainty of a derived line: the anchor's and the read differences', independent, in quadrature. */
+const combinedU = (...readU: number[]): number => Math.hypot(LI7_D1_U_MHZ, ...readU);
+const combinedSource = (what: string): string =>
+  `the ⁷Li D1 anchor's ${LI7_D1_U_MHZ} MHz (from memory, generous) and ${what} (read), in quadrature`;
 const LI6_D1_MHZ = kHzSum(LI7_D1_MHZ, -LI_D1_ISOTOPE_SHIFT_MHZ);
 const LI_LINES = {
-  li7D1: energy(LI7_D1_MHZ, 'MHz', FROM_MEMORY),
-  li7D2: energy(kHzSum(LI7_D1_MHZ, LI7_FINE_STRUCTURE_MHZ), 'MHz', `derived: ⁷Li D1 (from memory) plus the ⁷Li 2P fine structure; ${LI_FINE_STRUCTURE_REVIEW}`),
-  li6D1: energy(LI6_D1_MHZ, 'MHz', `derived: ⁷Li D1 (from memory) minus the D1 isotope shift; ${LI_D1_ISOTOPE_SHIFT}`),
-  li6D2: energy(kHzSum(LI6_D1_MHZ, LI6_FINE_STRUCTURE_MHZ), 'MHz', `derived: ⁶Li D1 (derived above) plus the ⁶Li 2P fine structure; ${LI_FINE_STRUCTURE_REVIEW}`),
+  li7D1: energy(LI7_D1_MHZ, 'MHz', FROM_MEMORY, LI7_D1_U_MHZ, LI7_D1_U_SOURCE),
+  li7D2: energy(
+    kHzSum(LI7_D1_MHZ, LI7_FINE_STRUCTURE_MHZ),
+    'MHz',
+    `derived: ⁷Li D1 (from memory) plus the ⁷Li 2P fine structure; ${LI_FINE_STRUCTURE_REVIEW}`,
+    combinedU(LI7_FINE_STRUCTURE_U_MHZ),
+    combinedSource(`the ⁷Li fine structure's ${LI7_FINE_STRUCTURE_U_MHZ} MHz`),
+  ),
+  li6D1: energy(
+    LI6_D1_MHZ,
+    'MHz',
+    `derived: ⁷Li D1 (from memory) minus the D1 isotope shift; ${LI_D1_ISOTOPE_SHIFT}`,
+    combinedU(LI_D1_ISOTOPE_SHIFT_U_MHZ),
+    combinedSource(`the isotope shift's ${LI_D1_ISOTOPE_SHIFT_U_MHZ} MHz`),
+  ),
+  li6D2: energy(
+    kHzSum(LI6_D1_MHZ, LI6_FINE_STRUCTURE_MHZ),
+    'MHz',
+    `derived: ⁶Li D1 (derived above) plus the ⁶Li 2P fine structure; ${LI_FINE_STRUCTURE_REVIEW}`,
+    combinedU(LI_D1_ISOTOPE_SHIFT_U_MHZ, LI6_FINE_STRUCTURE_U_MHZ),
+    combinedSource(`the isotope shift's ${LI_D1_ISOTOPE_SHIFT_U_MHZ} MHz and the ⁶Li fine structure's ${LI6_FINE_STRUCTURE_U_MHZ} MHz`),
+  ),
 };
 
 // Uncertainties marked FROM_MEMORY (fourth argument) were recalled from the cited compilation,
@@ -33,8 +67,18 @@ const LI_GJ_P32 = sourced(1.335, FROM_MEMORY);
 const LI7_2P12_SPREAD =
   'half the distance to the saturated-absorption value A = 46.047(3) MHz, arXiv:1008.3228 (2010), abstract, rounded ' +
   'up, so that both read measurements lie within twice the combined uncertainty';
-// Measured on 6Li; the isotope changes the 2P lifetime by far less than its 9 ps uncertainty.
-const LI7_TAU_2P = sourced(27.102e-9, `${GEHM_LI6}, 6Li value (isotope difference negligible)`);
+/**
+ * The ⁷Li 2P lifetime is the ⁶Li measurement's: no ⁷Li (or both-isotope) measurement could be read. τ ∝ 1/(ω³|d|²),
+ * so the isotope moves it by 3·Δν/ν = 7.1e-5 (the read D1 isotope shift over the line), partly undone by the reduced-mass
+ * scaling of |d|², about 2.6e-5: under 1e-4, i.e. under 3 ps against the measurement's 9 ps
+ * (tests/physics/speciesReadValues.test.ts).
+ */
+const LI7_TAU_2P = ns(
+  27.102,
+  `derived: the ⁶Li 2P lifetime of ${GEHM_LI6}, taken for ⁷Li: the isotope changes it by under 1e-4 (3Δν/ν = 7.1e-5 from ` +
+    'ω³ with the read D1 isotope shift, partly undone by the reduced-mass scaling of the dipole matrix element, ≈ 2.6e-5), ' +
+    "under 3 ps against the measurement's 9 ps (from memory)",
+);
 
 export const LITHIUM_6: BuiltinSpecies = {
   id: 'Li6',

@@ -30,6 +30,15 @@ export const LI7_2P12_INTERVAL = `${LI_D1_DISSERTATION}: ⁷Li 2P1/2 interval 91
 export const LI6_2P12_INTERVAL = `${LI_D1_DISSERTATION}: ⁶Li 2P1/2 interval 26.108(9) MHz`;
 export const LI_D1_ISOTOPE_SHIFT = `${LI_D1_DISSERTATION}: ⁷Li − ⁶Li D1 isotope shift 10 533.800(15) MHz`;
 
+/**
+ * What the comb measurements of the lithium D lines claim for their absolute frequencies (the frequencies themselves
+ * are not printed in any stored page): it bounds how well the recalled ⁷Li D1 anchor could be known, not the anchor.
+ */
+export const LI_D_LINES_COMB =
+  'arXiv:1212.2220 (2012), abstract (ar5iv, arcxiv, tomesphere; the NIST publication page of the same work): absolute ⁶,⁷Li ' +
+  'D-line frequencies with an uncertainty of ≤ 25 kHz; line centres move by up to 1 MHz when quantum interference ' +
+  'between the 2P hyperfine levels is left out of the line shape';
+
 /** 2009 critical review of the lithium fine-structure and isotope-shift measurements (abstract). */
 export const LI_FINE_STRUCTURE_REVIEW =
   'critical review of ⁶,⁷Li isotope-shift and fine-structure measurements (2009), abstract in the York University ' +
