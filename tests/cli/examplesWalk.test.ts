@@ -16,7 +16,8 @@ describe('the bundled examples, walked as a new user would', () => {
 
   it.each(EXAMPLES)('%s', (file) => {
     const path = `examples/${file}`;
-    const opening = readFileSync(path, 'utf8').split('\n').filter((l, i, all) => all.slice(0, i + 1).every((m) => m.startsWith('#')));
+    const lines = readFileSync(path, 'utf8').split('\n');
+    const opening = lines.slice(0, lines.findIndex((l) => !l.startsWith('#')));
     expect(opening.length, 'an opening comment of two lines or more').toBeGreaterThanOrEqual(2);
     expect(opening.join(' '), 'says which numbers are invented').toMatch(/invented/i);
     const check = cli('check', path);
