@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import { textReport } from '../../server/src/cli/textReport';
@@ -14,6 +15,15 @@ describe('beam results say the same thing everywhere', () => {
     const diag = a.result!.diagnostics.find((d) => d.code === 'beam-unresolved')!;
     expect(diag.message.endsWith(advice)).toBe(true);
     expect(textReport('x.sublevel', a.result!).join('\n')).toContain(advice);
+  });
+
+  it('the unresolved pair is named in words: its first sublevel and how many others share each peak', () => {
+    // Four sublevels in each of two peaks (an invented lithium beam with too weak a gradient).
+    const text = readFileSync('tests/fixtures/diff/beam-weak-gradient.sublevel', 'utf8');
+    const diag = analyze(text).result!.diagnostics.find((d) => d.code === 'beam-unresolved')!;
+    expect(diag.message).toContain('will not be resolved on the detector (F=2, m_F=-1 with 3 others and F=1, m_F=-1 with 3 others).');
+    // A lone sublevel is named alone.
+    expect(analyze(SETUP).result!.diagnostics.find((d) => d.code === 'beam-unresolved')!.message).toContain('(J=1, m_J=+1 and J=1, m_J=0; J=1, m_J=0 and J=1, m_J=-1)');
   });
 
   it('an unpopulated sublevel has no peak (null), never NaN', () => {

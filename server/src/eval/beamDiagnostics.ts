@@ -91,7 +91,9 @@ function resolvingGradientData(beam: BeamModel, r: BeamResult): Pick<Problem, 'd
   return typeof g === 'number' && beam.magnet ? { data: { resolvingGradientTPerM: Math.abs(g), magnet: beam.magnet.name } } : {};
 }
 
+/** A peak by its first sublevel and how many share it, in words: `(+3)` beside `m_F=-1` read as a quantum number. */
 function peakName(members: string[] | undefined): string {
   if (!members || members.length === 0) return '?';
-  return members.length === 1 ? members[0]! : `${members[0]} (+${members.length - 1})`;
+  const others = members.length - 1;
+  return others === 0 ? members[0]! : `${members[0]} with ${others} other${others === 1 ? '' : 's'}`;
 }

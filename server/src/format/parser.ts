@@ -426,7 +426,7 @@ class SetupParser {
     const hint =
       suggestions.length > 0
         ? didYouMeanText(suggestions)
-        : ' — a line starts with a block word (species, field, magnet, beam, line, settings), `level`, or a setting `key = value`';
+        : ` — a line starts with a block word (${BLOCK_WORDS.join(', ')}), \`level\`, \`use\`, or a setting \`key = value\``;
     this.report('syntax-unknown-statement', `unknown statement '${clip(word.text)}'${hint}`, word.start, word.end, {
       data: { suggestions },
     });

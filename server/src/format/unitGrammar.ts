@@ -115,7 +115,7 @@ export function parseUnitSyntax(text: string): UnitSyntax {
 }
 
 /** Special names: no prefixes. Values are the names used with the unit library. */
-const SPECIAL_NAMES: Readonly<Record<string, string>> = {
+export const SPECIAL_NAMES: Readonly<Record<string, string>> = {
   u: 'u',
   Da: 'Da',
   muN: 'muN',
@@ -135,7 +135,7 @@ const SPECIAL_NAMES: Readonly<Record<string, string>> = {
 };
 
 /** Symbols that take SI prefixes. `G` is the gauss. */
-const SYMBOLS: Readonly<Record<string, string>> = {
+export const SYMBOLS: Readonly<Record<string, string>> = {
   m: 'm',
   g: 'g',
   s: 's',
@@ -159,7 +159,7 @@ const SYMBOLS: Readonly<Record<string, string>> = {
 };
 
 /** Long names that take long prefixes (`millitesla`, `kilogauss`). */
-const LONG_NAMES: Readonly<Record<string, string>> = {
+export const LONG_NAMES: Readonly<Record<string, string>> = {
   meter: 'meter',
   metre: 'meter',
   second: 'second',

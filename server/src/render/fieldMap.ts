@@ -12,7 +12,7 @@ import { line } from 'd3-shape';
 import { csvNumber } from '../eval/machineText';
 import { csvTable } from './csv';
 import { bottomAxis, leftAxis, type PlotBox, type Scale } from './axes';
-import { emptyDiagram, svgDocument } from './frame';
+import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
 import { legendUnderTitle, type LegendEntry } from './legend';
 import { paletteFor } from './palette';
 import { finiteExtent } from './sampled';
@@ -201,6 +201,22 @@ export function renderFieldMap(d: FieldMapViewData, theme: RenderTheme): string 
 }
 
 /**
+ * The heading: every source by kind and name while that fits the figure's width; else each kind
+ * once with its count and its first and last names (a slower's 20 solenoids ran off the edge).
+ */
+export function fieldMapTitle(sources: readonly { kind: string; name: string }[]): string {
+  const full = `field map: ${sources.map((s) => `${s.kind} ${s.name}`).join(', ')}`;
+  if (estimateTextWidth(full, 15) <= WIDTH - 32) return full;
+  const kinds = [...new Set(sources.map((s) => s.kind))];
+  const groups = kinds.map((kind) => {
+    const names = sources.filter((s) => s.kind === kind).map((s) => s.name);
+    if (names.length === 1) return `${kind} ${names[0]}`;
+    return `${names.length} ${kind}s ${names.length === 2 ? names.join(', ') : `${names[0]} … ${names[names.length - 1]}`}`;
+  });
+  return `field map: ${groups.join('; ')}`;
+}
+
+/**
  * Every side where a drawn curve leaves the axis, named with the value there: a spike next to a
  * wire leaves at the top (and, for a signed component, at the bottom); on a log axis |B| may dip
  * under the floor (to zero at the centre of a quadrupole).
@@ -249,12 +265,19 @@ function sideView(d: FieldMapViewData, x: Scale, box: PlotBox, lUnit: { factor: 
     return top ? { x: clipped(top.s), y: Math.max(box.top + 10, ty(top.t) - 9) } : undefined;
   });
   const sameSpot = (i: number, j: number): boolean => at[i] !== undefined && at[j] !== undefined && Math.abs(at[i]!.x - at[j]!.x) < 2 && Math.abs(at[i]!.y - at[j]!.y) < 2;
+  // A name that would run into one already placed at its height is left out (the source's tooltip
+  // still names it): a row of slower sections keeps every other name instead of an unreadable run.
+  const placed: { x0: number; x1: number; y: number }[] = [];
   d.sources.forEach((s, i) => {
     const colour = pal.series[(i + 2) % pal.series.length];
     const shapes = s.shapes.map((sh) => shapeSvg(sh, clipped, ty, colour, pal.halo));
     const first = d.sources.findIndex((_, j) => j === i || sameSpot(i, j));
     const names = d.sources.filter((_, j) => j >= i && sameSpot(i, j)).map((o) => (o.note ? `${o.name} (${o.note})` : o.name));
-    const label = at[i] && first === i
+    const halfWidth = estimateTextWidth(names.join(', '), 10) / 2 + 2;
+    const span = at[i] ? { x0: at[i]!.x - halfWidth, x1: at[i]!.x + halfWidth, y: at[i]!.y } : undefined;
+    const free = span !== undefined && placed.every((o) => Math.abs(o.y - span.y) >= 11 || span.x1 < o.x0 || span.x0 > o.x1);
+    if (first === i && free) placed.push(span!);
+    const label = at[i] && first === i && free
       ? el('text', { class: 'sl-source-name', x: at[i]!.x, y: at[i]!.y, 'text-anchor': 'middle', 'font-size': 10, fill: pal.text, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text(names.join(', ')))
       : '';
     parts.push(el('g', { class: 'sl-source', 'data-kind': 'source', 'data-label': s.name, 'data-source-kind': s.kind }, [titleEl(`${s.kind} ${s.name}${s.note ? `, ${s.note}` : ''}`), ...shapes, label]));

@@ -6,7 +6,7 @@
  * line across the wires B lies across the line; there the component across it in the drawing
  * plane is drawn, which shows the field's sense and where it turns.
  */
-import { magnitudeAxis, type MagnitudeScale, type FieldMapShape, type FieldMapSource, type FieldMapViewData } from '../render/fieldMap';
+import { fieldMapTitle, magnitudeAxis, type MagnitudeScale, type FieldMapShape, type FieldMapSource, type FieldMapViewData } from '../render/fieldMap';
 import { unitFor } from './levelsView';
 import type { FieldUnit } from '../render';
 import type { FieldFunction, FieldSourceSpec, Vec3 } from '../physics/fields/types';
@@ -254,7 +254,7 @@ export function fieldMapView(sources: readonly MapSource[], field: FieldFunction
   const pointText = `(${line.origin.map((c) => Number(c.toPrecision(4))).join(', ')}) m`;
   const axis = magnitudeAxis(magnitudeT, options.scale);
   return {
-    title: `field map: ${usable.map((s) => `${s.kind} ${s.name}`).join(', ')}`,
+    title: fieldMapTitle(usable),
     alongName: along,
     acrossName: Math.abs(offset) < 1e-15 ? acrossName : `${acrossName} from the line`,
     lineText: along === 's' ? `along (${line.u.map((c) => Number(c.toPrecision(4))).join(', ')}) through ${pointText}` : `along ${along} through ${pointText}`,
