@@ -13,7 +13,8 @@ import { legendUnderTitle, type LegendEntry } from './legend';
 import { paletteFor } from './palette';
 import { finiteExtent } from './sampled';
 import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
-import { engineeringUnit, formatIn } from './units';
+import { engineeringUnit, fieldDisplayUnit, formatIn } from './units';
+import { fieldAxisUnit } from './fieldAxisUnit';
 import type { RenderTheme } from './viewData';
 
 export interface SlowerViewData {
@@ -26,6 +27,8 @@ export interface SlowerViewData {
   resonantMPerS: number[];
   /** With coils: the speed the ideal field is resonant with. */
   idealResonantMPerS?: number[];
+  /** The unit the file wrote the slower's field in (its bias), if any: the B axis keeps its family while it reads short. */
+  fieldWrittenUnit?: string;
   /** The simulated atom's speed; NaN past where it stopped. */
   flightMPerS: number[];
   dropAtM?: number;
@@ -35,7 +38,6 @@ export interface SlowerViewData {
 const WIDTH = 760;
 const LEFT = 84;
 const RIGHT = WIDTH - 20;
-const GAUSS = { factor: 1e-4, symbol: 'G' };
 
 /** What the resonance and flight curves are called: in the ideal field without coils, in the coils' field with them. */
 const SERIES_NAMES = {
@@ -82,11 +84,13 @@ export function renderSlower(d: SlowerViewData, theme: RenderTheme): string {
   const yb = scaleLinear().domain(pad(Math.min(bx[0], 0), Math.max(bx[1], 0))).range([upper.bottom, upper.top]).nice();
   const yv = scaleLinear().domain(pad(0, vx[1])).range([lower.bottom, lower.top]).nice();
   const zUnit = engineeringUnit(zx[1], 'm');
+  // Slowers are a gauss habit: G unless the file wrote tesla, and T once the axis passes 0.1 T (render/fieldAxisUnit.ts).
+  const bUnit = fieldDisplayUnit(fieldAxisUnit(Math.max(Math.abs(bx[0]), Math.abs(bx[1])), d.fieldWrittenUnit ?? 'G'));
   const vUnit = { factor: 1, symbol: 'm/s' };
 
   const body: string[] = [legendSvg.svg];
   body.push(bottomAxis(x, zUnit, '', upper, pal));
-  body.push(leftAxis(yb, GAUSS, 'B', upper, LEFT, pal));
+  body.push(leftAxis(yb, bUnit, 'B', upper, LEFT, pal));
   body.push(bottomAxis(x, zUnit, 'z', lower, pal));
   body.push(leftAxis(yv, vUnit, 'v', lower, LEFT, pal));
   body.push(el('path', { class: 'sl-zero', d: `M${px(LEFT)},${px(yb(0))}H${px(RIGHT)}`, stroke: pal.muted, 'stroke-dasharray': '2 4', fill: 'none' }));
@@ -126,7 +130,7 @@ export function renderSlower(d: SlowerViewData, theme: RenderTheme): string {
   };
   if (d.zeroCrossingM !== undefined) body.push(rule('zero-crossing', d.zeroCrossingM, 'B = 0', pal.muted));
   if (d.dropAtM !== undefined) body.push(rule('drop', d.dropAtM, 'atoms dropped', pal.bad));
-  const desc = `Field from ${formatIn(d.idealT[0]!, GAUSS)} to ${formatIn(d.idealT.at(-1)!, GAUSS)} over ${formatIn(zx[1], zUnit)}; ${names.resonantDesc} from ${formatIn(d.resonantMPerS[0]!, vUnit)} to ${formatIn(d.resonantMPerS.at(-1)!, vUnit)}${d.dropAtM !== undefined ? `; atoms dropped at ${formatIn(d.dropAtM, zUnit)}` : ''}.`;
+  const desc = `Field from ${formatIn(d.idealT[0]!, bUnit)} to ${formatIn(d.idealT.at(-1)!, bUnit)} over ${formatIn(zx[1], zUnit)}; ${names.resonantDesc} from ${formatIn(d.resonantMPerS[0]!, vUnit)} to ${formatIn(d.resonantMPerS.at(-1)!, vUnit)}${d.dropAtM !== undefined ? `; atoms dropped at ${formatIn(d.dropAtM, zUnit)}` : ''}.`;
   return svgDocument(
     {
       view: 'slower',
