@@ -41,7 +41,7 @@ export const NEWER_BLOCKS: MistakeCase[] = [
   {
     name: 'a trap cut written in metres and a trap named twice',
     text: 'species Rb87\n  level ground: 5s 2S1/2\ncoil q\n  radius  = 4 cm\n  turns   = 100\n  current = 20 A\n  spacing = 8 cm\n  sense   = opposite\ntrap t\n  sources = q\n  level   = ground\n  cut     = 3 m\ntrap t\n  sources =\n  level   = ground\n',
-    findings: ['9:6-7 trap-zero-field [t]', '9:6-7 trap-zero-field [t]', '9:6-7 trap-zero-field [t]', '12:15-16 unit-wrong-dimension [m]', '13:6-7 name-duplicate [t]', '14:3-12 value-missing [sources =]'],
+    findings: ['9:6-7 trap-zero-field [t]', '12:15-16 unit-wrong-dimension [m]', '13:6-7 name-duplicate [t]', '14:3-12 value-missing [sources =]'],
     fixes: ['unit-wrong-dimension: Change the unit to MHz →   cut     = 3 MHz', 'unit-wrong-dimension: Change the unit to GHz →   cut     = 3 GHz', 'unit-wrong-dimension: Change the unit to cm^-1 →   cut     = 3 cm^-1', 'unit-wrong-dimension: Change the unit to eV →   cut     = 3 eV'],
     says: ['cut needs an energy written as a temperature (e.g. 1 mK) or a frequency',"there is already a trap named 't'"],
   },
