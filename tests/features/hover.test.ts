@@ -170,7 +170,8 @@ const CASES: Case[] = [
     // The same pair at 20 A: 83.3 G/cm on the axis. The RF cut of |2,+2⟩ at 2 mK: the linear rule
     // ν = cut/(m_F h) = k_B·2 mK/(2h) = 20.84 MHz (CODATA k_B and h; exact SI constants).
     text: 'species Rb87\n  level ground: 5s 2S1/2\ncoil quad\n  radius = 4 cm\n  turns = 100\n  current = 20 A\n  spacing = 8 cm\n  sense = opposite\ntrap q|t\n  sources = quad\n  level = ground\n  temperature = 200 uK\n  cut = 2 mK\n',
-    has: ['|F=2, m_F=+2⟩: |B| at the minimum 0 T', 'linear rule 20.83662 MHz', 'Majorana loss ≈', '⚠ Trap coils dissipate power and heat up', "follow your lab's safety rules"],
+    // One unit per trap (eval/trapText.ts trapFieldUnit): its region's |B| stays below 0.1 T, so gauss.
+    has: ['|F=2, m_F=+2⟩: |B| at the minimum 0 G', 'linear rule 20.83662 MHz', 'Majorana loss ≈', '⚠ Trap coils dissipate power and heat up', "follow your lab's safety rules"],
     hasNot: ['NaN', 'undefined'],
   },
 ];

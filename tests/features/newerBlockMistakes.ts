@@ -41,9 +41,18 @@ export const NEWER_BLOCKS: MistakeCase[] = [
   {
     name: 'a trap cut written in metres and a trap named twice',
     text: 'species Rb87\n  level ground: 5s 2S1/2\ncoil q\n  radius  = 4 cm\n  turns   = 100\n  current = 20 A\n  spacing = 8 cm\n  sense   = opposite\ntrap t\n  sources = q\n  level   = ground\n  cut     = 3 m\ntrap t\n  sources =\n  level   = ground\n',
-    findings: ['9:6-7 trap-zero-field [t]', '9:6-7 trap-zero-field [t]', '9:6-7 trap-zero-field [t]', '12:15-16 unit-wrong-dimension [m]', '13:6-7 name-duplicate [t]', '14:3-12 value-missing [sources =]'],
-    fixes: ['unit-wrong-dimension: Change the unit to MHz →   cut     = 3 MHz', 'unit-wrong-dimension: Change the unit to GHz →   cut     = 3 GHz', 'unit-wrong-dimension: Change the unit to cm^-1 →   cut     = 3 cm^-1', 'unit-wrong-dimension: Change the unit to eV →   cut     = 3 eV'],
-    says: ['cut needs an energy written as a temperature (e.g. 1 mK) or a frequency',"there is already a trap named 't'"],
+    findings: ['9:6-7 trap-zero-field [t]', '12:15-16 unit-wrong-dimension [m]', '13:6-7 name-duplicate [t]', '14:3-12 value-missing [sources =]'],
+    // Neither a temperature nor a frequency: both kinds' fixes, each keeping the number and naming its kind.
+    fixes: [
+      'unit-wrong-dimension: Change the unit to mK (a temperature) →   cut     = 3 mK',
+      'unit-wrong-dimension: Change the unit to uK (a temperature) →   cut     = 3 uK',
+      'unit-wrong-dimension: Change the unit to K (a temperature) →   cut     = 3 K',
+      'unit-wrong-dimension: Change the unit to MHz (a frequency) →   cut     = 3 MHz',
+      'unit-wrong-dimension: Change the unit to GHz (a frequency) →   cut     = 3 GHz',
+      'unit-wrong-dimension: Change the unit to cm^-1 (a frequency) →   cut     = 3 cm^-1',
+      'unit-wrong-dimension: Change the unit to eV (a frequency) →   cut     = 3 eV',
+    ],
+    says: ["cut needs an energy above the trap's bottom, written as a temperature (mK, uK, K) or as a frequency (MHz, GHz, cm^-1, eV); got m, which is neither", "there is already a trap named 't'"],
   },
   {
     name: 'a slower with an undefined line, a speed in kelvin, a safety above 1, a negative saturation, a misspelt design and a bias in m/s',

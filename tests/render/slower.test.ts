@@ -45,7 +45,7 @@ describe('slower view', () => {
     const width = Number(doc.attrs.width ?? doc.attrs.viewBox?.split(' ')[2]);
     const clips = new Map(all(doc, (n) => n.name === 'clipPath').map((c) => [c.attrs.id!, c.children[0]!]));
     const curves = byClass(doc, 'sl-curve');
-    expect(curves.map((c) => c.attrs['data-kind'])).toEqual(['ideal', 'coils', 'resonant', 'flight']);
+    expect(curves.map((c) => c.attrs['data-kind'])).toEqual(['ideal', 'coils', 'ideal-resonant', 'resonant', 'flight']);
     // Every curve is clipped, the speeds to the lower plot (below the field's plot).
     const box = (c: Node) => clips.get(/^url\(#(.+)\)$/.exec(c.attrs['clip-path'] ?? '')?.[1] ?? '')!;
     for (const c of curves) expect(box(c), c.attrs['data-kind']).toBeDefined();
@@ -64,6 +64,28 @@ describe('slower view', () => {
     const [a, b] = spans;
     expect(a!.y !== b!.y || a!.to <= b!.from || b!.to <= a!.from).toBe(true);
     expect(labels[1]!.attrs['text-anchor']).toBe('end');
+  });
+
+  it("names each resonance after its field: the designed one (v0 √(1 − z/L0)) and the coils' actual one", () => {
+    const s = analyze(TEXT).result!.slowers![0]!;
+    const doc = parseSvg(renderSlower(slowerView(s)!, { kind: 'export' }));
+    const titleOf = (kind: string) => all(byClass(doc, 'sl-curve').find((c) => c.attrs['data-kind'] === kind)!, (n) => n.name === 'title')[0]!.text;
+    expect(titleOf('ideal-resonant')).toBe('speed resonant with the laser in the ideal (designed) field');
+    expect(titleOf('resonant')).toBe("speed resonant with the laser in the coils' actual field");
+    expect(titleOf('flight')).toBe("simulated atom in the coils' field");
+    const legend = all(doc, (n) => n.name === 'text').map((t) => t.text);
+    expect(legend).toEqual(expect.arrayContaining(['resonant speed, ideal field', "resonant speed, coils' field", "coils' field"]));
+    expect(legend).not.toContain('resonant speed');
+    expect(all(doc, (n) => n.name === 'desc')[0]!.text).toContain("resonant speed in the coils' field from");
+    // The designed resonance starts at the capture speed and ends at the final speed as written (950 and 30 m/s in the example).
+    const ideal = s.samples!.map((x) => x.ideal_resonant_speed_m_per_s!);
+    expect(ideal[0]).toBe(950);
+    expect(ideal.at(-1)).toBe(30);
+    // Without coils there is one resonance, named after the ideal field, and no second curve.
+    const bare = { ...s, coils: undefined, samples: s.samples!.map(({ B_coils_T: _c, ideal_resonant_speed_m_per_s: _i, ...x }) => x) };
+    const bareDoc = parseSvg(renderSlower(slowerView(bare)!, { kind: 'export' }));
+    expect(byClass(bareDoc, 'sl-curve').map((c) => c.attrs['data-kind'])).toEqual(['ideal', 'resonant', 'flight']);
+    expect(all(bareDoc, (n) => n.name === 'text').map((t) => t.text)).toContain('resonant speed, ideal field');
   });
 
   it('says plainly when there is no slower', () => {

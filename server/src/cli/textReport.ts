@@ -15,6 +15,7 @@ import type {
   LevelResult,
   LineResult,
   MagneticTransitionResult,
+  MagnetResult,
   ResonanceResult,
   TermResult,
 } from '../eval/resultTypes';
@@ -24,6 +25,7 @@ import { sourceHeadline, sourceLines } from '../eval/fieldSourceText';
 import { slowerReport } from '../eval/slowerText';
 import { vacuumWavelengthNmText } from '../eval/wavelengthText';
 import { trapReport } from './trapReport';
+import { averagedOverText, magnetGradientNote } from '../eval/magnetGradientText';
 
 export function textReport(file: string, r: EvaluationResult): string[] {
   const out: string[] = [];
@@ -56,9 +58,13 @@ export function textReport(file: string, r: EvaluationResult): string[] {
         ]),
       ).map((l) => '  ' + l),
     );
+    for (const m of r.magnets) {
+      const note = magnetGradientNote(m, r.beams);
+      if (note) out.push(`  ${m.name}: ${note}`);
+    }
   }
   for (const f of r.fieldSources ?? []) out.push(...fieldSourceReport(f));
-  for (const b of r.beams) out.push(...beamReport(b));
+  for (const b of r.beams) out.push(...beamReport(b, r.magnets.find((m) => m.name === b.magnet)));
   for (const l of r.lines) out.push(...lineReport(l, atFieldText, r.diagnostics));
   for (const x of r.resonances) out.push(...resonanceReport(x, atFieldText));
   for (const s of r.slowers ?? []) out.push('', ...slowerReport(s));
@@ -215,7 +221,7 @@ function fieldSourceReport(f: FieldSourceResult): string[] {
   return out;
 }
 
-function beamReport(b: BeamResult): string[] {
+function beamReport(b: BeamResult, magnet: MagnetResult | undefined): string[] {
   const out = ['', `beam ${b.name}: ${b.species ?? '?'} ${b.level ?? '?'} through magnet ${b.magnet ?? '?'}`];
   if (!b.computed) {
     out.push('  not computed: the beam lacks a setting it needs (see diagnostics)');
@@ -224,7 +230,7 @@ function beamReport(b: BeamResult): string[] {
   if (b.speeds) {
     out.push(`  speeds: most probable ${speedText(b.speeds.most_probable_m_per_s)}, mean ${speedText(b.speeds.mean_m_per_s)}, rms spread ${speedText(b.speeds.rms_spread_m_per_s, 3)}`);
   }
-  if (b.field_map) out.push(...fieldMapLines(b.field_map));
+  if (b.field_map) out.push(...fieldMapLines(b.field_map, b.magnet, magnet));
   const noise = beamPositionNoise(b);
   out.push(
     ...table(
@@ -251,12 +257,12 @@ function beamReport(b: BeamResult): string[] {
 }
 
 /** How a field-map beam's deflections were made (docs/beam.md §7). */
-function fieldMapLines(m: NonNullable<BeamResult['field_map']>): string[] {
+function fieldMapLines(m: NonNullable<BeamResult['field_map']>, name: string | undefined, magnet: MagnetResult | undefined): string[] {
   const ratio = m.worst_adiabaticity;
   const adiabatic = ratio === null ? 'the field passes through zero' : `${ratio < 1e-3 ? 'below 0.001' : trimNumber(ratio, 2)} (limit ${trimNumber(m.adiabatic_limit, 2)})`;
   return [
     `  deflections from ${m.flights} flights through the sources' field (field map), peaks at the reference speed ${speedText(m.reference_speed_m_per_s)}`,
-    `  |B| on the beam line ${fieldText(m.field_on_line_min_T, 4)} … ${fieldText(m.field_on_line_max_T, 4)}; mean ∂|B|/∂z ${gradientText(m.mean_gradient_T_per_m, 4)}, changing ${percentText(m.gradient_variation, 2)} across the beam; field turning rate / Larmor frequency ${adiabatic}`,
+    `  |B| on the beam line ${fieldText(m.field_on_line_min_T, 4)} … ${fieldText(m.field_on_line_max_T, 4)}; ∂|B|/∂z averaged along ${averagedOverText(magnet)} through magnet ${name ?? '?'} ${gradientText(m.mean_gradient_T_per_m, 4)}${magnet?.gradient_T_per_m !== undefined ? ` (at its centre ${gradientText(magnet.gradient_T_per_m, 5)})` : ''}, changing ${percentText(m.gradient_variation, 2)} across the beam; field turning rate / Larmor frequency ${adiabatic}`,
   ];
 }
 

@@ -16,7 +16,9 @@ function displayScale(si: number, unit: string, written: string | undefined): { 
   if (!dim) return { unit, perUnit: 1 };
   if (written) {
     const inWritten = convertSI(1, dim, written);
-    if (inWritten !== undefined && inWritten > 0) return { unit: displayUnit(written), perUnit: 1 / inWritten };
+    // Only while the number stays out of exponent form (trimNumber's limits): 6834696976 Hz reads 6.834696976 GHz, not 6.834696976e9 Hz.
+    const shown = Math.abs(si) * (inWritten ?? 0);
+    if (inWritten !== undefined && inWritten > 0 && (si === 0 || (shown >= 1e-5 && shown < 1e9))) return { unit: displayUnit(written), perUnit: 1 / inWritten };
   }
   const sample = unit === 'T' ? fieldText(si) : unit === 'Hz' ? frequencyText(si) : unit === 'm' ? lengthText(si) : unit === 'T/m' ? gradientText(si) : `${trimNumber(si)} ${unit}`;
   const shown = sample.split(' ').slice(1).join(' ');

@@ -290,7 +290,7 @@ export interface BeamResult {
     /** |B| along the beam line through the magnet, T. */
     field_on_line_min_T: number;
     field_on_line_max_T: number;
-    /** ∂|B|/∂z averaged along the magnet on the beam line, T/m. */
+    /** ∂|B|/∂z averaged along the magnet's length of the beam line (centred on its `at`), T/m; the magnet's gradient_T_per_m is the value at that centre only. */
     mean_gradient_T_per_m: number;
     /** Largest relative change of that average at ± the beam's half height. */
     gradient_variation: number;

@@ -13,6 +13,7 @@ import {
   drivenPair,
   idealField,
   idealProfile,
+  idealSpeed,
   rateSpread,
   simulateAtom,
   slowerCautions,
@@ -155,7 +156,7 @@ export function evaluateSlower(s: SlowerModel, gJOf: GJLookup, settings: Setting
     const check = checkDesign({ ...common, profile: p, field: coils.field, points: SLOWER_SAMPLES });
     const run = flyThrough(coils.field);
     result.coils = { sources: coils.sources, worst_over_design: check.worstOverDesign, capture_m_per_s: check.captureMPerS, ...(check.dropAtM !== undefined ? { drop_at_m: check.dropAtM } : {}), ...(run ? { flight: flightOf(run) } : {}) };
-    samples = check.samples.map((c) => ({ z_m: c.zM, B_ideal_T: c.idealT, B_coils_T: c.fieldT, resonant_speed_m_per_s: c.resonantMPerS, needed_deceleration_m_per_s2: c.neededMPerS2 }));
+    samples = check.samples.map((c) => ({ z_m: c.zM, B_ideal_T: c.idealT, B_coils_T: c.fieldT, resonant_speed_m_per_s: c.resonantMPerS, ideal_resonant_speed_m_per_s: idealSpeed(p, c.zM), needed_deceleration_m_per_s2: c.neededMPerS2 }));
     shown = run;
     // Released early (a weak exit field) the atom leaves well above the final speed although nothing asked for too much deceleration.
     const margin = Math.max(0.1 * (p.captureMPerS - p.finalMPerS), p.finalMPerS);

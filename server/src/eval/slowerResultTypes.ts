@@ -8,6 +8,8 @@ export interface SlowerSample {
   B_coils_T?: number;
   /** The speed resonant with the laser there (in the coils' field when there are coils, else the ideal), m/s. */
   resonant_speed_m_per_s: number;
+  /** With coils only: the speed the ideal (designed) field is resonant with there, v0 √(1 − z/L0), m/s. */
+  ideal_resonant_speed_m_per_s?: number;
   /** −v dv/dz along that resonance, m/s². */
   needed_deceleration_m_per_s2: number;
   /** The simulated atom's speed there (ideal field; the coils' field when there are coils), m/s; absent past where it stopped. */

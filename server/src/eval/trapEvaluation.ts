@@ -14,6 +14,7 @@ import type { TrapModel } from '../model/trapTypes';
 import type { GJLookup } from './gJLookup';
 import { engineSpec } from './levelSpec';
 import type { TrapResult, TrapSublevelResult } from './trapResultTypes';
+import { ZERO_FIELD_CODE, zeroFieldProblem } from './trapZeroField';
 
 export interface TrapEvaluation {
   result: TrapResult;
@@ -54,7 +55,13 @@ export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: Settings
     ...(trap.temperatureK ? { temperatureK: trap.temperatureK.value } : {}),
     ...(trap.cutJ ? { cutJ: trap.cutJ.value } : {}),
   });
-  for (const i of summary.issues) problems.push(toProblem(trap, i));
+  for (const i of summary.issues) if (i.code !== ZERO_FIELD_CODE) problems.push(toProblem(trap, i));
+  const zero = summary.issues.filter((i) => i.code === ZERO_FIELD_CODE);
+  if (zero.length > 0) {
+    // A temperature written but not usable (wrong unit, not above 0) has its own error; this finding points at it.
+    const unusable = trap.temperatureK ? undefined : settingRange(trap, 'temperature');
+    problems.push(zeroFieldProblem(trap, zero, summary.sublevels, toProblem(trap, zero[0]!).severity, unusable));
+  }
   if (summary.sublevels.length === 0) return { result, summary, problems };
   result.computed = true;
   // Below the searches' own precision a position or a field is round-off: written as 0.

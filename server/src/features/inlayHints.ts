@@ -80,7 +80,7 @@ function blockHints(analysis: Analysis, model: SetupModel, block: BlockNode, out
       // Built from sources: what they make where the beam line passes.
       const sourcesSetting = block.settings.find((s) => s.key.text === 'sources');
       if (m.sources && sourcesSetting && m.fieldT && m.gradientTPerM) {
-        out.push(hint(sourcesSetting.range.end, `|B| ${fieldText(m.fieldT.value, 4)}, ∂|B|/∂z ${gradientText(m.gradientTPerM.value, 4)}`, 'field and gradient of the sources where the beam line passes (`at`)'));
+        out.push(hint(sourcesSetting.range.end, `|B| ${fieldText(m.fieldT.value, 4)}, ∂|B|/∂z ${gradientText(m.gradientTPerM.value, 4)}`, 'field and gradient of the sources at the centre of the beam line (`at`); a beam through them reports ∂|B|/∂z averaged along the magnet\'s length'));
       }
       break;
     }

@@ -1,5 +1,5 @@
 /** Builds `trap` blocks (docs/traps.md): which sources, which level, gravity, the region, temperature and the RF cut. */
-import type { BlockNode, SettingNode } from '../format/ast';
+import type { BlockNode, Problem, SettingNode } from '../format/ast';
 import { readQuantity } from '../format/units';
 import { BOLTZMANN_K, PLANCK_H } from '../physics/constants';
 import type { NameIndex } from './nameIndex';
@@ -92,12 +92,31 @@ function readCut(s: SettingNode, problems: ProblemList): Valued<number> | undefi
   if (!asT.problem && asT.si !== undefined) return checkCut(s, { value: BOLTZMANN_K * asT.si, source: 'this file', range: part.range, ...unit }, problems);
   const asF = readQuantity(part, 'frequency-like');
   if (!asF.problem && asF.si !== undefined) return checkCut(s, { value: PLANCK_H * asF.si, source: 'this file', range: part.range, ...unit }, problems);
-  // A misspelt unit gets the reading that knows its spelling (`2 mk` → `mK`); a unit of the wrong
-  // dimension gets the frequency's fixes (a temperature list would offer degC for a cut).
+  // A misspelt unit gets the reading that knows its spelling (`2 mk` → `mK`); a unit that is
+  // neither a temperature nor a frequency (`3 m`) gets both kinds' fixes, each keeping the number.
   const spelled = [asT.problem, asF.problem].find((q) => q !== undefined && q.code !== 'unit-wrong-dimension' && (q.data?.suggestions?.length ?? 0) > 0);
+  if (!spelled && asT.problem?.code === 'unit-wrong-dimension' && asF.problem?.code === 'unit-wrong-dimension' && part.kind === 'quantity') {
+    problems.push(neitherKindProblem(asF.problem, part.unit.text, asF.problem.data?.suggestions ?? []));
+    return undefined;
+  }
   const p = spelled ?? asF.problem ?? asT.problem;
   if (p) problems.push({ ...p, message: `cut needs an energy written as a temperature (e.g. 1 mK) or a frequency (e.g. 20 MHz); ${p.message}` });
   return undefined;
+}
+
+/** Temperatures a knife is written in (no degC: a cut is an energy above the bottom, not a reading on a scale). */
+const CUT_TEMPERATURE_UNITS = ['mK', 'uK', 'K'] as const;
+
+/** A cut in a unit of neither allowed kind: one message naming both, the fixes of both kinds, each fix labelled with its kind. */
+function neitherKindProblem(frequencyProblem: Problem, written: string, frequencyUnits: readonly string[]): Problem {
+  const kinds: Record<string, string> = {};
+  for (const u of CUT_TEMPERATURE_UNITS) kinds[u] = 'a temperature';
+  for (const u of frequencyUnits) kinds[u] = kinds[u] ?? 'a frequency';
+  return {
+    ...frequencyProblem,
+    message: `cut needs an energy above the trap's bottom, written as a temperature (${CUT_TEMPERATURE_UNITS.join(', ')}) or as a frequency (${frequencyUnits.join(', ')}); got ${written}, which is neither`,
+    data: { suggestions: Object.keys(kinds), kinds },
+  };
 }
 
 function checkCut(s: SettingNode, v: Valued<number>, problems: ProblemList): Valued<number> | undefined {

@@ -44,7 +44,7 @@ const RIGHT = WIDTH - 20;
  * one unit while the smallest point still reads 0.1 or more in it (0.5 to 150 in mT), else each
  * tick names its own prefix (5 µT … 100 mT).
  */
-export function fieldAxisUnit(minT: number, maxT: number, log: boolean): DisplayUnit {
+export function residualsFieldUnit(minT: number, maxT: number, log: boolean): DisplayUnit {
   const unit = engineeringUnit(Math.max(Math.abs(minT), Math.abs(maxT)), 'T');
   if (!log || minT / unit.factor >= 0.1) return unit;
   return { factor: 1, symbol: 'T', perTick: 'T' };
@@ -64,7 +64,7 @@ export function renderResiduals(d: ResidualsViewData, theme: RenderTheme): strin
 
   // Fields from µT to T would crowd every weak-field point into one spot at B = 0: spread over decades, B is logarithmic.
   const logX = d.xKind === 'field' && fx[0] > 0 && fx[1] / fx[0] > LOG_FIELD_SPAN;
-  const xUnit = d.xKind === 'field' ? fieldAxisUnit(fx[0], fx[1], logX) : d.xKind === 'position' ? engineeringUnit(Math.max(Math.abs(fx[0]), Math.abs(fx[1])), 'm') : { factor: 1, symbol: '' };
+  const xUnit = d.xKind === 'field' ? residualsFieldUnit(fx[0], fx[1], logX) : d.xKind === 'position' ? engineeringUnit(Math.max(Math.abs(fx[0]), Math.abs(fx[1])), 'm') : { factor: 1, symbol: '' };
   const yUnit = d.unit === 'Hz' ? engineeringUnit(Math.max(Math.abs(fy[0]), Math.abs(fy[1])), 'Hz') : { factor: 1, symbol: d.unit };
   const legend = legendUnderTitle(
     [

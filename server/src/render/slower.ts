@@ -1,7 +1,9 @@
 /**
  * A slower along its length: the field B(z) it needs (and the coils' field, when it names coils)
  * above, and the speeds below — the speed resonant with the laser at each z and one atom's
- * simulated speed, which rides just below it. Where the coils drop the atoms, a rule.
+ * simulated speed, which rides just below it. With coils there are two resonances, one in each
+ * field, each drawn in its field's colour and dash and named after it. Where the coils drop the
+ * atoms, a rule.
  */
 import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
@@ -11,7 +13,8 @@ import { legendUnderTitle, type LegendEntry } from './legend';
 import { paletteFor } from './palette';
 import { finiteExtent } from './sampled';
 import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
-import { engineeringUnit, formatIn } from './units';
+import { engineeringUnit, fieldDisplayUnit, formatIn } from './units';
+import { fieldAxisUnit } from './fieldAxisUnit';
 import type { RenderTheme } from './viewData';
 
 export interface SlowerViewData {
@@ -20,7 +23,12 @@ export interface SlowerViewData {
   idealT: number[];
   /** The coils' field along the axis, when there are coils. */
   coilsT?: number[];
+  /** The speed resonant with the laser: in the coils' field when there are coils, else in the ideal field. */
   resonantMPerS: number[];
+  /** With coils: the speed the ideal field is resonant with. */
+  idealResonantMPerS?: number[];
+  /** The unit the file wrote the slower's field in (its bias), if any: the B axis keeps its family while it reads short. */
+  fieldWrittenUnit?: string;
   /** The simulated atom's speed; NaN past where it stopped. */
   flightMPerS: number[];
   dropAtM?: number;
@@ -30,20 +38,42 @@ export interface SlowerViewData {
 const WIDTH = 760;
 const LEFT = 84;
 const RIGHT = WIDTH - 20;
-const GAUSS = { factor: 1e-4, symbol: 'G' };
+
+/** What the resonance and flight curves are called: in the ideal field without coils, in the coils' field with them. */
+const SERIES_NAMES = {
+  ideal: {
+    resonantLegend: 'resonant speed, ideal field',
+    resonantTitle: 'speed resonant with the laser in the ideal field',
+    resonantDesc: 'resonant speed in the ideal field',
+    flight: 'simulated atom',
+    flightTitle: 'simulated atom in the ideal field',
+  },
+  coils: {
+    resonantLegend: "resonant speed, coils' field",
+    resonantTitle: "speed resonant with the laser in the coils' actual field",
+    resonantDesc: "resonant speed in the coils' field",
+    flight: "simulated atom, coils' field",
+    flightTitle: "simulated atom in the coils' field",
+  },
+} as const;
 
 export function renderSlower(d: SlowerViewData, theme: RenderTheme): string {
   const pal = paletteFor(theme);
   const idBase = `sl-s${shortHash(`${d.title}|${d.zM.length}`)}`;
   const zx = finiteExtent(d.zM);
   const bx = finiteExtent([...d.idealT, ...(d.coilsT ?? [])]);
-  const vx = finiteExtent([...d.resonantMPerS, ...d.flightMPerS, 0]);
+  const vx = finiteExtent([...d.resonantMPerS, ...(d.idealResonantMPerS ?? []), ...d.flightMPerS, 0]);
   if (!zx || !bx || !vx || zx[0] === zx[1]) return emptyDiagram('slower', idBase, d.title, 'No profile to draw.', pal);
 
+  // Each resonance is named after the field it is resonant in; with coils, the designed one is drawn thin in the ideal field's colour.
+  const coils = d.coilsT !== undefined;
+  const idealResonance = coils && d.idealResonantMPerS ? d.idealResonantMPerS : undefined;
+  const names = SERIES_NAMES[coils ? 'coils' : 'ideal'];
   const legend: LegendEntry[] = [{ label: 'ideal field', colour: pal.series[0], line: { width: 2 } }];
-  if (d.coilsT) legend.push({ label: 'coils', colour: pal.series[1], line: { width: 2, dash: '6 3' } });
-  legend.push({ label: 'resonant speed', colour: pal.series[2], line: { width: 2 } });
-  legend.push({ label: 'simulated atom', colour: pal.text, line: { width: 1.5, dash: '2 3' } });
+  if (coils) legend.push({ label: "coils' field", colour: pal.series[1], line: { width: 2, dash: '6 3' } });
+  if (idealResonance) legend.push({ label: 'resonant speed, ideal field', colour: pal.series[0], line: { width: 1.5 } });
+  legend.push({ label: names.resonantLegend, colour: pal.series[2], line: { width: 2 } });
+  legend.push({ label: names.flight, colour: pal.text, line: { width: 1.5, dash: '2 3' } });
   const legendSvg = legendUnderTitle(legend, LEFT, RIGHT, 10, pal);
   const top = legendSvg.below;
   const upper: PlotBox = { left: LEFT, right: RIGHT, top, bottom: top + 190 };
@@ -54,11 +84,13 @@ export function renderSlower(d: SlowerViewData, theme: RenderTheme): string {
   const yb = scaleLinear().domain(pad(Math.min(bx[0], 0), Math.max(bx[1], 0))).range([upper.bottom, upper.top]).nice();
   const yv = scaleLinear().domain(pad(0, vx[1])).range([lower.bottom, lower.top]).nice();
   const zUnit = engineeringUnit(zx[1], 'm');
+  // Slowers are a gauss habit: G unless the file wrote tesla, and T once the axis passes 0.1 T (render/fieldAxisUnit.ts).
+  const bUnit = fieldDisplayUnit(fieldAxisUnit(Math.max(Math.abs(bx[0]), Math.abs(bx[1])), d.fieldWrittenUnit ?? 'G'));
   const vUnit = { factor: 1, symbol: 'm/s' };
 
   const body: string[] = [legendSvg.svg];
   body.push(bottomAxis(x, zUnit, '', upper, pal));
-  body.push(leftAxis(yb, GAUSS, 'B', upper, LEFT, pal));
+  body.push(leftAxis(yb, bUnit, 'B', upper, LEFT, pal));
   body.push(bottomAxis(x, zUnit, 'z', lower, pal));
   body.push(leftAxis(yv, vUnit, 'v', lower, LEFT, pal));
   body.push(el('path', { class: 'sl-zero', d: `M${px(LEFT)},${px(yb(0))}H${px(RIGHT)}`, stroke: pal.muted, 'stroke-dasharray': '2 4', fill: 'none' }));
@@ -76,8 +108,9 @@ export function renderSlower(d: SlowerViewData, theme: RenderTheme): string {
     ]);
   body.push(series('ideal', 'ideal field B(z)', d.idealT, yb, clip.upper, pal.series[0]!, 2));
   if (d.coilsT) body.push(series('coils', "the coils' field", d.coilsT, yb, clip.upper, pal.series[1]!, 2, '6 3'));
-  body.push(series('resonant', 'speed resonant with the laser', d.resonantMPerS, yv, clip.lower, pal.series[2]!, 2));
-  body.push(series('flight', 'simulated atom', d.flightMPerS, yv, clip.lower, pal.text, 1.5, '2 3'));
+  if (idealResonance) body.push(series('ideal-resonant', 'speed resonant with the laser in the ideal (designed) field', idealResonance, yv, clip.lower, pal.series[0]!, 1.5));
+  body.push(series('resonant', names.resonantTitle, d.resonantMPerS, yv, clip.lower, pal.series[2]!, 2));
+  body.push(series('flight', names.flightTitle, d.flightMPerS, yv, clip.lower, pal.text, 1.5, '2 3'));
   // Rule labels sit right of their rule, or left of it where they would run past the plot's right
   // edge; a label that would overlap the one before goes one row down.
   const placed: { from: number; to: number; row: number }[] = [];
@@ -97,7 +130,7 @@ export function renderSlower(d: SlowerViewData, theme: RenderTheme): string {
   };
   if (d.zeroCrossingM !== undefined) body.push(rule('zero-crossing', d.zeroCrossingM, 'B = 0', pal.muted));
   if (d.dropAtM !== undefined) body.push(rule('drop', d.dropAtM, 'atoms dropped', pal.bad));
-  const desc = `Field from ${formatIn(d.idealT[0]!, GAUSS)} to ${formatIn(d.idealT.at(-1)!, GAUSS)} over ${formatIn(zx[1], zUnit)}; resonant speed from ${formatIn(d.resonantMPerS[0]!, vUnit)} to ${formatIn(d.resonantMPerS.at(-1)!, vUnit)}${d.dropAtM !== undefined ? `; atoms dropped at ${formatIn(d.dropAtM, zUnit)}` : ''}.`;
+  const desc = `Field from ${formatIn(d.idealT[0]!, bUnit)} to ${formatIn(d.idealT.at(-1)!, bUnit)} over ${formatIn(zx[1], zUnit)}; ${names.resonantDesc} from ${formatIn(d.resonantMPerS[0]!, vUnit)} to ${formatIn(d.resonantMPerS.at(-1)!, vUnit)}${d.dropAtM !== undefined ? `; atoms dropped at ${formatIn(d.dropAtM, zUnit)}` : ''}.`;
   return svgDocument(
     {
       view: 'slower',

@@ -7,7 +7,7 @@
  * plane is drawn, which shows the field's sense and where it turns.
  */
 import { fieldMapTitle, magnitudeAxis, type MagnitudeScale, type FieldMapShape, type FieldMapSource, type FieldMapViewData } from '../render/fieldMap';
-import { unitFor } from './levelsView';
+import { fieldAxisUnit } from '../render/fieldAxisUnit';
 import type { FieldUnit } from '../render';
 import type { FieldFunction, FieldSourceSpec, Vec3 } from '../physics/fields/types';
 
@@ -215,7 +215,7 @@ export interface FieldMapOptions {
  * nT under 1 G (small currents, a magnetometer's shield).
  */
 function mapUnit(topT: number, written: string | undefined): FieldUnit {
-  if (written !== undefined || topT < 1e-4) return unitFor(topT, written);
+  if (written !== undefined || topT < 1e-4) return fieldAxisUnit(topT, written);
   return topT < 0.1 ? 'G' : 'T';
 }
 

@@ -3,9 +3,8 @@
  * change of regime, with the file's working field marked.
  */
 import { levelDesignationText } from '../eval/designationText';
-import { inWrittenUnit, isGaussUnit } from '../eval/writtenUnit';
-import { displayUnit } from '../eval/unitSpelling';
-import { fieldDisplayUnit } from '../render/units';
+import { inWrittenUnit } from '../eval/writtenUnit';
+import { fieldAxisUnit } from '../render/fieldAxisUnit';
 import { regime, sweepLevel, type HighFieldLabel, type LevelSpec, type LowFieldLabel, type RegimeResult, type SweepResult } from '../physics/engine';
 import { halfText } from '../physics/engine/halfIntegers';
 import { BOHR_MAGNETON_HZ_PER_T } from '../physics/constants';
@@ -79,7 +78,7 @@ export function levelsView(
   );
   const data: LevelsViewData = {
     title: `${level.species.name} ${level.name}: ${levelDesignationText(level)} — sublevel energies`,
-    fieldUnit: options.fieldUnit ?? unitFor(upper, marker?.unit),
+    fieldUnit: options.fieldUnit ?? fieldAxisUnit(upper, marker?.unit),
     fieldsT: sweep.fieldsT,
     curves: sweep.states.map((s, i) => ({
       id: `s${i}`,
@@ -155,32 +154,4 @@ export function writtenFieldText(f: WorkingField): string | undefined {
 export function namedFieldMark(f: WorkingField): NamedFieldMark {
   const valueText = writtenFieldText(f);
   return { fieldT: f.tesla, label: `${f.source.kind} ${f.source.name}`, ...(valueText !== undefined ? { valueText } : {}) };
-}
-
-/**
- * The field axis's unit: the family the file wrote its field in (a lab that writes gauss reads
- * gauss; one that writes µT reads the tesla family, with the prefix that suits the range), else
- * by the size of the range — µT and nT below 1 G, where a magnetometer works.
- */
-export function unitFor(upperT: number, writtenUnit?: string): FieldUnit {
-  if (writtenUnit !== undefined && isGaussUnit(writtenUnit)) return 'G';
-  if (writtenUnit !== undefined && /^[mµμun]?T$/.test(writtenUnit)) return writtenPrefixFits(upperT, writtenUnit) ?? teslaPrefixFor(upperT);
-  if (upperT < 1e-4) return teslaPrefixFor(upperT);
-  if (upperT < 0.01) return 'G';
-  return teslaPrefixFor(upperT);
-}
-
-/** The written tesla unit itself when the axis top reads 0.1–1000 in it (0.5 mT stays mT, not 500 µT). */
-function writtenPrefixFits(upperT: number, writtenUnit: string): FieldUnit | undefined {
-  const unit = displayUnit(writtenUnit) as FieldUnit; // uT, μT → µT
-  const top = upperT / fieldDisplayUnit(unit).factor;
-  return top >= 0.1 && top <= 1000 ? unit : undefined;
-}
-
-/** The tesla prefix that puts `upperT` between 1 and 1000. */
-function teslaPrefixFor(upperT: number): FieldUnit {
-  if (upperT < 1e-6) return 'nT';
-  if (upperT < 1e-3) return 'µT';
-  if (upperT < 1) return 'mT';
-  return 'T';
 }

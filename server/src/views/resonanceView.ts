@@ -11,7 +11,8 @@ import type { ResonanceResult } from '../eval/resultTypes';
 import type { WorkingField } from '../eval/levelEvaluation';
 import { engineSpec } from '../eval/levelSpec';
 import type { ResonanceViewData } from '../render';
-import { namedFieldMark, unitFor } from './levelsView';
+import { namedFieldMark } from './levelsView';
+import { fieldAxisUnit } from '../render/fieldAxisUnit';
 
 export const RESONANCE_VIEW_POINTS = 401;
 
@@ -58,7 +59,7 @@ export function resonanceView(
   const sign = Math.sign(frequencyHz[0]!) || 1;
   return {
     title: `resonance ${r.name}: ${level.species.name} ${level.name}, ${lower.low.text} → ${upper.low.text}`,
-    fieldUnit: unitFor(toT, r.rangeT.toUnit ?? r.rangeT.fromUnit),
+    fieldUnit: fieldAxisUnit(toT, r.rangeT.toUnit ?? r.rangeT.fromUnit),
     fieldsT: sweep.fieldsT,
     frequencyHz,
     slopeHzPerT,

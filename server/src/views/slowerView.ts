@@ -15,6 +15,8 @@ export function slowerView(s: SlowerResult): SlowerViewData | undefined {
     idealT: samples.map((x) => x.B_ideal_T),
     ...(coils ? { coilsT: samples.map((x) => x.B_coils_T!) } : {}),
     resonantMPerS: samples.map((x) => x.resonant_speed_m_per_s),
+    ...(coils && samples.every((x) => x.ideal_resonant_speed_m_per_s !== undefined) ? { idealResonantMPerS: samples.map((x) => x.ideal_resonant_speed_m_per_s!) } : {}),
+    ...(s.bias_unit !== undefined ? { fieldWrittenUnit: s.bias_unit } : {}),
     flightMPerS: samples.map((x) => x.flight_speed_m_per_s ?? NaN),
     ...(s.coils?.drop_at_m !== undefined ? { dropAtM: s.coils.drop_at_m } : {}),
     ...(s.zero_crossing_m !== undefined ? { zeroCrossingM: s.zero_crossing_m } : {}),

@@ -50,5 +50,8 @@ export function suggestionFixes(ctx: FixContext): CodeAction[] {
   const named = ctx.problem.data?.preferred;
   const preferred = typeof named === 'string' && suggestions.includes(named) ? named : suggestions.length === 1 ? suggestions[0] : undefined;
   const ordered = preferred === undefined ? suggestions : [preferred, ...suggestions.filter((s) => s !== preferred)];
-  return ordered.map((s) => quickFix(ctx, title(ctx.problem.code, s), [{ range, newText: s }], s === preferred));
+  // Fixes of more than one kind (a trap cut: temperatures and frequencies) say which kind each is.
+  const kinds = ctx.problem.data?.kinds as Record<string, unknown> | undefined;
+  const kindOf = (s: string): string => (kinds && typeof kinds[s] === 'string' ? ` (${kinds[s]})` : '');
+  return ordered.map((s) => quickFix(ctx, `${title(ctx.problem.code, s)}${kindOf(s)}`, [{ range, newText: s }], s === preferred));
 }

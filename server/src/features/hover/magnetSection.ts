@@ -4,7 +4,8 @@
  * here when the evaluation carries them.
  */
 import type { EvaluationResult, MagnetResult } from '../../eval/resultTypes';
-import { lengthText, prefixedText } from '../../eval/quantityText';
+import { gradientText, lengthText, prefixedText } from '../../eval/quantityText';
+import { averagedOverText } from '../../eval/magnetGradientText';
 import { BOHR_MAGNETON } from '../../physics/constants';
 import { md, mdTitle } from '../shared/markdown';
 import { valueInUnits } from '../shared/units';
@@ -26,7 +27,12 @@ export function magnetSection(m: MagnetResult, ctx: { result: EvaluationResult |
   if (m.field_T !== undefined) lines.push(`field ${fieldValueLines(m.field_T, m.field_unit).join('; ')}`);
   else lines.push('field: not given');
   if (m.gradient_T_per_m !== undefined) {
-    lines.push(`gradient = ${valueInUnits(m.gradient_T_per_m, 'gradient', m.gradient_unit).join(' = ')}; force on 1 μ_B: ${prefixedText(bohrForceN(m.gradient_T_per_m), 'N', { digits: 5 })}`);
+    const where = m.sources ? ' ∂|B|/∂z at the centre of the beam line' : '';
+    lines.push(`gradient${where} = ${valueInUnits(m.gradient_T_per_m, 'gradient', m.gradient_unit).join(' = ')}; force on 1 μ_B: ${prefixedText(bohrForceN(m.gradient_T_per_m), 'N', { digits: 5 })}`);
+    // A beam through sources averages the gradient along the magnet's length: said beside the centre value, never instead of it.
+    for (const b of (ctx.result?.beams ?? []).filter((x) => x.magnet === m.name && x.field_map)) {
+      lines.push(`gradient ∂|B|/∂z averaged along ${averagedOverText(m)} (beam ${md(b.name)}) = ${gradientText(b.field_map!.mean_gradient_T_per_m, 4)}`);
+    }
   } else lines.push('gradient: not given');
   if (m.length_m !== undefined) lines.push(`length = ${valueInUnits(m.length_m, 'length', m.length_unit).join(' = ')}`);
   else lines.push('length: not given');

@@ -2,7 +2,7 @@
  * Hover of a `trap` block: its summary, the per-sublevel verdicts, what each held sublevel's RF cut
  * and Majorana estimate come to, and the cautions in one line (docs/traps.md).
  */
-import { depthText, gaussPerCmText, shallowDepthNote, shapeText, sublevelVerdict, trappedSublevelNotes, trapSummaryLines } from '../../eval/trapText';
+import { depthText, shallowDepthNote, shapeText, sublevelVerdict, trappedSublevelNotes, trapFieldUnit, trapGradientText, trapSummaryLines } from '../../eval/trapText';
 import type { TrapResult } from '../../eval/trapResultTypes';
 import { md } from '../shared/markdown';
 import { cautionLine } from './cautionLine';
@@ -11,10 +11,11 @@ export function trapSection(t: TrapResult): string {
   const [title, ...rest] = trapSummaryLines(t);
   const lines = [`*${md(title!)}*`, '', ...rest.map((l) => `${md(l)}  `)];
   if (t.computed) {
+    const unit = trapFieldUnit(t);
     lines.push('', '| sublevel | verdict | levitation | depth | shape |', '|---|---|---|---|---|');
     for (const s of t.sublevels) {
-      const lev = s.levitation_T_per_m !== undefined ? gaussPerCmText(s.levitation_T_per_m) : '—';
-      lines.push(`| ${md(`|${s.label}⟩`)} | ${md(sublevelVerdict(s))} | ${lev} | ${s.trapped ? md(depthText(s)) : '—'} | ${s.trapped ? md(shapeText(s)) : '—'} |`);
+      const lev = s.levitation_T_per_m !== undefined ? trapGradientText(unit, s.levitation_T_per_m) : '—';
+      lines.push(`| ${md(`|${s.label}⟩`)} | ${md(sublevelVerdict(s, unit))} | ${lev} | ${s.trapped ? md(depthText(s)) : '—'} | ${s.trapped ? md(shapeText(s, unit)) : '—'} |`);
     }
     const notes = trappedSublevelNotes(t);
     const shallow = shallowDepthNote(t);

@@ -1,0 +1,43 @@
+/**
+ * The one rule for the unit of a figure's field axis (levels, resonance sweeps, field maps,
+ * slowers). The axis keeps the family the file wrote (a lab that writes gauss reads gauss; one
+ * that writes µT reads the tesla family) while its tick labels stay short; a gauss axis past
+ * 0.1 T (ticks of 1000 G and more, 200000 G at 20 T) reads in T instead, the switch of the shared
+ * field formatter (eval/quantityText.ts fieldText). The echo of the user's own value (a marker's
+ * label) keeps the written unit; only the axis changes.
+ */
+import { isGaussUnit } from '../eval/writtenUnit';
+import { displayUnit } from '../eval/unitSpelling';
+import type { FieldUnit } from './fieldUnits';
+import { fieldDisplayUnit } from './units';
+
+/** Above this axis top (T) a gauss axis reads in tesla. */
+export const GAUSS_AXIS_LIMIT_T = 0.1;
+
+/**
+ * The axis unit for an axis reaching `upperT`: the written family while it reads short, else by
+ * the size of the range — µT and nT below 1 G (where a magnetometer works), G up to 0.01 T, then
+ * the tesla prefix that suits.
+ */
+export function fieldAxisUnit(upperT: number, writtenUnit?: string): FieldUnit {
+  if (writtenUnit !== undefined && isGaussUnit(writtenUnit)) return upperT >= GAUSS_AXIS_LIMIT_T ? 'T' : 'G';
+  if (writtenUnit !== undefined && /^[mµμun]?T$/.test(writtenUnit)) return writtenPrefixFits(upperT, writtenUnit) ?? teslaPrefixFor(upperT);
+  if (upperT < 1e-4) return teslaPrefixFor(upperT);
+  if (upperT < 0.01) return 'G';
+  return teslaPrefixFor(upperT);
+}
+
+/** The written tesla unit itself when the axis top reads 0.1–1000 in it (0.5 mT stays mT, not 500 µT). */
+function writtenPrefixFits(upperT: number, writtenUnit: string): FieldUnit | undefined {
+  const unit = displayUnit(writtenUnit) as FieldUnit; // uT, μT → µT
+  const top = upperT / fieldDisplayUnit(unit).factor;
+  return top >= 0.1 && top <= 1000 ? unit : undefined;
+}
+
+/** The tesla prefix that puts `upperT` between 1 and 1000. */
+function teslaPrefixFor(upperT: number): FieldUnit {
+  if (upperT < 1e-6) return 'nT';
+  if (upperT < 1e-3) return 'µT';
+  if (upperT < 1) return 'mT';
+  return 'T';
+}
