@@ -86,7 +86,10 @@ function startLanguageServer(): void {
       await new Promise<void>((resolve) => setImmediate(resolve));
       const m = loadServiceModule();
       readSettings = m.readSettings;
-      service = new m.LanguageService(log, new m.WorkerEvaluator(__filename, log), m.editorFiles(() => documents.all(), () => workspaceFolders));
+      const evaluator = new m.WorkerEvaluator(__filename, log);
+      // The worker evaluates a built-in set-up until the first real job comes, so that job finds it warm.
+      evaluator.warmUp();
+      service = new m.LanguageService(log, evaluator, m.editorFiles(() => documents.all(), () => workspaceFolders));
       return service;
     })();
     return serviceLoading;

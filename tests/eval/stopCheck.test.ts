@@ -1,12 +1,12 @@
 /**
- * Cooperative stopping (eval/stopCheck.ts): the evaluation asks the stop check between its pieces
+ * Cooperative stopping (format/stopCheck.ts): the evaluation asks the stop check between its pieces
  * of work and gives up with `EvaluationStopped`; a check that never says stop changes nothing.
  */
 import { readFileSync } from 'fs';
 import path from 'path';
 import { describe, expect, it } from 'vitest';
 import { generateSetup } from '../../bench/generatedSetup';
-import { EvaluationStopped } from '../../server/src/eval/stopCheck';
+import { EvaluationStopped } from '../../server/src/format/stopCheck';
 import { analyze } from '../../server/src/eval/analyze';
 import { evaluateText } from '../../server/src/service/evaluator';
 

@@ -1,5 +1,5 @@
 /**
- * A superseded job in the built server's worker stops at a check point (eval/stopCheck.ts) and
+ * A superseded job in the built server's worker stops at a check point (format/stopCheck.ts) and
  * the same worker, warm, serves the next job with the same outcome as the evaluation here.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
