@@ -1,5 +1,7 @@
 // The first evaluation a user waits for: the editor bench's generated file (20,000 lines) opened
-// DELAY ms after the evaluator was made (the server makes it when it starts), through two trees'
+// DELAY ms after the evaluator was made (the server makes it when it starts), or once its warm-up
+// has done N rounds (a delay written rN: what the warm-up buys in CPU, whatever the load; a tree
+// without a warm-up then opens at once), through two trees'
 // worker evaluators. A tree whose evaluator can warm up (`warmUp`) is asked to, as the server does.
 // Prints the job's wall clock and the CPU of the whole process (worker and this thread) from the
 // request to the result in hand, the resident memory with the result held, and what the warm-up did.
@@ -21,11 +23,13 @@ const SCENARIO = `
 import { WorkerEvaluator } from './server/src/service/workerEvaluator';
 import { generateSetup } from './bench/generatedSetup';
 async function main(): Promise<void> {
-  const [delay, lines] = process.argv.slice(2).map(Number);
-  const text = generateSetup(lines);
+  const [delay, lines] = process.argv.slice(2);
+  const text = generateSetup(Number(lines));
   const ev = new WorkerEvaluator(require('path').resolve('dist/server.js'), () => undefined, 10 * 60_000);
   (ev as any).warmUp?.(); // the tree before has none
-  await new Promise((r) => setTimeout(r, delay));
+  if (delay.startsWith('r')) {
+    while ((ev as any).warmUp && (ev as any).warmUpProgress.done < Number(delay.slice(1))) await new Promise((r) => setTimeout(r, 20));
+  } else await new Promise((r) => setTimeout(r, Number(delay)));
   const c0 = process.cpuUsage();
   const t0 = performance.now();
   await ev.evaluate(text);
@@ -49,13 +53,13 @@ const SERVER_NODE_FLAGS = ['--max-semi-space-size=64'];
 
 const trees = [a, b].map((t) => ({ tree: path.resolve(t), script: bundle(path.resolve(t)) }));
 for (let p = 0; p < Number(pairs); p++) {
-  for (const delay of delays.split(',').map(Number)) {
+  for (const delay of delays.split(',')) {
     for (const t of p % 2 === 0 ? trees : [...trees].reverse()) {
       const load = loadavg()[0].toFixed(1);
-      const r = spawnSync(process.execPath, [...SERVER_NODE_FLAGS, t.script, String(delay), lines], { cwd: t.tree, encoding: 'utf8' });
+      const r = spawnSync(process.execPath, [...SERVER_NODE_FLAGS, t.script, delay, lines], { cwd: t.tree, encoding: 'utf8' });
       const fig = JSON.parse(r.stdout.trim().split('\n').pop());
       const warm = fig.warmUp ? `warm-up rounds done ${fig.warmUp.done}, given up ${fig.warmUp.superseded}` : 'no warm-up';
-      console.log(`${path.basename(t.tree)} opened at ${delay} ms: ${(fig.cpu / 1000).toFixed(2)} s CPU, ${(fig.wall / 1000).toFixed(2)} s wall, ${fig.rss.toFixed(0)} MB, ${warm} (load ${load})`);
+      console.log(`${path.basename(t.tree)} opened at ${delay.startsWith('r') ? `warm-up round ${delay.slice(1)}` : `${delay} ms`}: ${(fig.cpu / 1000).toFixed(2)} s CPU, ${(fig.wall / 1000).toFixed(2)} s wall, ${fig.rss.toFixed(0)} MB, ${warm} (load ${load})`);
     }
   }
 }

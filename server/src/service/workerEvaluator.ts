@@ -21,9 +21,9 @@ export const EVALUATOR_ROLE = 'sublevel-evaluator';
 
 /**
  * How long a superseded job gets to reach a check point after it was asked to stop; past this the
- * worker is stopped. Check points come after the parse, the model and every level, beam and line;
- * the longest stretch between two is the parse: 0.2–0.6 s warm on the 20,000-line file at load 9
- * on 2 cores (0.2 s at load 1), and a cold worker costs ~4 s of CPU more than a warm one.
+ * worker is stopped. Check points come every 512 lines of the parse, every 64 blocks of the model,
+ * before every level, beam and line, and before packing (format/stopCheck.ts); the longest stretch
+ * between two is a cold beam (≈ 0.3 s of CPU), and a cold worker costs ~4 s of CPU more than a warm one.
  */
 const STOP_GRACE_MS = 1000;
 
