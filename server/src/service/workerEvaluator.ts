@@ -29,10 +29,10 @@ const STOP_GRACE_MS = 1000;
 
 /**
  * Times the warm-up set-up is evaluated (each a job of its own, so a real job waits for one check
- * point at most): the engine optimises a function after many calls, and the set-up's beams, the
- * slowest code to warm, are few. Measured on the 20,000-line file in one process at load ≈ 20
- * (evaluation, packing and unpacking, CPU): 4.6 s cold; after 1, 2 and 4 rounds 3.7–3.8, 3.5–3.6
- * and 3.3 s, the rounds costing 1.2–1.3, 1.7–2.0 and 2.5 s together.
+ * point at most): the engine optimises a function after many calls, and the beams, the slowest
+ * code to warm, keep gaining for a few dozen evaluations. The 20,000-line file in one process at
+ * load 10–13 (evaluation, packing and unpacking, CPU): 4.3–4.4 s cold; after 1, 2 and 3 rounds
+ * 3.7–3.8, 3.3–3.5 and 3.4–3.5 s, the rounds costing 1.4–1.5, 2.1–2.2 and 2.3–2.4 s together.
  */
 export const WARM_UP_ROUNDS = 4;
 
@@ -207,8 +207,7 @@ export class WorkerEvaluator implements Evaluator {
       // The warm-up set-up is built in: an error there is a defect, said in the server's log.
       if (job.warmUp && reply.error !== SUPERSEDED) this.log(`sublevel: the evaluation worker's warm-up failed: ${reply.error}`);
       job.reject(new Error(reply.error));
-    }
-    else if ('packed' in reply) {
+    } else if ('packed' in reply) {
       try {
         job.resolve({ result: unpackResult(reply.packed), problems: reply.problems });
       } catch (e) {
