@@ -178,6 +178,14 @@ describe('the worker evaluator', () => {
     expect(logged).toEqual([]);
   });
 
+  it('does not warm up once a real job was asked for', async () => {
+    const { ev } = make(polite);
+    await ev.evaluate('0');
+    ev.warmUp(3, '20');
+    await new Promise((r) => setTimeout(r, 300));
+    expect(ev.warmUpProgress).toEqual({ done: 0, superseded: 0 });
+  });
+
   it('logs a warm-up round that fails, and nothing else of it', async () => {
     const { ev, logged } = make(failing);
     ev.warmUp(1, 'x');

@@ -65,6 +65,7 @@ export class WorkerEvaluator implements Evaluator {
   /** Warm-up rounds still to run while the worker has nothing else to do. */
   private warmUpLeft = 0;
   private warmUpText = '';
+  private realJobSeen = false;
   private readonly warmUpCounts: WarmUpCounts = { done: 0, superseded: 0 };
   /** Shared with every worker this evaluator starts: the id of the running job that is no longer wanted. */
   private readonly stopFlag = new Int32Array(new SharedArrayBuffer(4));
@@ -80,6 +81,7 @@ export class WorkerEvaluator implements Evaluator {
     if (this.broken) return new Promise((resolve) => resolve(evaluateText(text, sources)));
     // Real work warms the worker from now on.
     this.warmUpLeft = 0;
+    this.realJobSeen = true;
     return new Promise((resolve, reject) => {
       const job: Job = { id: this.nextId++, text, ...(sources ? { sources } : {}), resolve, reject };
       signal?.addEventListener('abort', () => this.supersede(job), { once: true });
@@ -92,10 +94,12 @@ export class WorkerEvaluator implements Evaluator {
    * Starts the worker now and has it evaluate `text` (the built-in set-up) `rounds` times while no
    * real job is waiting. Nothing of it reaches the caller: its results are dropped, and only a
    * failure of the worker itself is logged. A real job asks the running round to stop at its next
-   * check point (the same shared flag as a superseded job) and ends the warm-up.
+   * check point (the same shared flag as a superseded job) and ends the warm-up. Does nothing once
+   * a real job was asked for.
    */
   warmUp(rounds = WARM_UP_ROUNDS, text = warmUpSetup()): void {
-    if (this.broken) return;
+    // After a real job the worker is warm, or warms on real work: nothing to add.
+    if (this.broken || this.realJobSeen) return;
     this.warmUpLeft = rounds;
     this.warmUpText = text;
     this.pump();
