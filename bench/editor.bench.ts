@@ -158,7 +158,7 @@ async function stop(s: Started): Promise<void> {
   s.connection.dispose();
 }
 
-async function protocolFigures(text: string): Promise<string[]> {
+export async function protocolFigures(text: string): Promise<string[]> {
   const server = path.resolve('dist/server.js');
   if (!existsSync(server)) return ['protocol figures skipped: dist/server.js is missing (run `node esbuild.mjs`)'];
   const cold: number[] = [];

@@ -80,13 +80,33 @@ function startLanguageServer(): void {
   let serviceLoading: Promise<LanguageService> | undefined;
   let readSettings: ((section: unknown) => EditorSettings) | undefined;
 
+  /**
+   * The evaluation worker's warm-up (WorkerEvaluator.warmUp) starts once the editor thread has
+   * nothing to analyse: after the first diagnostics went out, or WARM_UP_AFTER_MS after the service
+   * loaded when no document is open then. Started with the service instead, its thread delayed a
+   * large file's first parse and model (20,000 lines: 2.2 s instead of 1.0–1.3 s on 2 cores).
+   */
+  const WARM_UP_AFTER_MS = 200;
+  let startWarmUp: (() => void) | undefined;
+  function warmUpWhenIdle(): void {
+    const start = startWarmUp;
+    startWarmUp = undefined;
+    start?.();
+  }
+
   function loadService(): Promise<LanguageService> {
     serviceLoading ??= (async () => {
       // After the current turn, so an `initialize` answer already queued goes out first.
       await new Promise<void>((resolve) => setImmediate(resolve));
       const m = loadServiceModule();
       readSettings = m.readSettings;
-      service = new m.LanguageService(log, new m.WorkerEvaluator(__filename, log), m.editorFiles(() => documents.all(), () => workspaceFolders));
+      const evaluator = new m.WorkerEvaluator(__filename, log);
+      // The worker evaluates a built-in set-up until the first real job comes, so that job finds it warm.
+      startWarmUp = () => evaluator.warmUp();
+      setTimeout(() => {
+        if (documents.all().length === 0) warmUpWhenIdle();
+      }, WARM_UP_AFTER_MS);
+      service = new m.LanguageService(log, evaluator, m.editorFiles(() => documents.all(), () => workspaceFolders));
       return service;
     })();
     return serviceLoading;
@@ -237,6 +257,7 @@ function startLanguageServer(): void {
     const { items, complete } = svc.diagnostics(doc, await settingsFor(uri));
     await connection.sendDiagnostics({ uri, version: doc.version, diagnostics: items });
     if (!complete) scheduleEvaluation(doc);
+    warmUpWhenIdle();
   }
 
   /**
@@ -305,6 +326,7 @@ function startLanguageServer(): void {
       const revision = svc.revision(doc);
       const resultId = `${doc.version}${revision > 0 ? `.${revision}` : ''}${complete ? '' : '-partial'}${shown.regimeNotes.enabled ? '' : '-quiet'}`;
       if (!complete) scheduleEvaluation(doc);
+      setImmediate(warmUpWhenIdle); // after this answer has gone out
       return params.previousResultId === resultId ? { kind: 'unchanged', resultId } : { kind: 'full', resultId, items };
     });
   });

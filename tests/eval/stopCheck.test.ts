@@ -1,12 +1,15 @@
 /**
- * Cooperative stopping (eval/stopCheck.ts): the evaluation asks the stop check between its pieces
- * of work and gives up with `EvaluationStopped`; a check that never says stop changes nothing.
+ * Cooperative stopping (format/stopCheck.ts): the parser, the model builder and the evaluation ask
+ * the stop check between their pieces of work and give up with `EvaluationStopped`; a check that
+ * never says stop changes nothing.
  */
 import { readFileSync } from 'fs';
 import path from 'path';
 import { describe, expect, it } from 'vitest';
 import { generateSetup } from '../../bench/generatedSetup';
-import { EvaluationStopped } from '../../server/src/eval/stopCheck';
+import { BLOCKS_PER_STOP_CHECK, EvaluationStopped, LINES_PER_STOP_CHECK } from '../../server/src/format/stopCheck';
+import { parseSetup } from '../../server/src/format/parser';
+import { buildModel } from '../../server/src/model/buildModel';
 import { analyze } from '../../server/src/eval/analyze';
 import { evaluateText } from '../../server/src/service/evaluator';
 
@@ -38,5 +41,47 @@ describe('stopping an evaluation at its check points', () => {
       expect(() => evaluateText(text, undefined, () => ++asked > after)).toThrow(EvaluationStopped);
       expect(asked).toBe(after + 1); // it gave up at once
     }
+  });
+
+  it('asks inside the parse, every few hundred lines while scanning and while reading, and the parse is the same', () => {
+    const big = generateSetup(4000);
+    let asked = 0;
+    const doc = parseSetup(big, () => (asked++, false));
+    // Scanning and reading each ask at lines 0, 512, 1024, …
+    expect(asked).toBe(2 * Math.ceil(4000 / LINES_PER_STOP_CHECK));
+    expect(JSON.stringify(doc)).toBe(JSON.stringify(parseSetup(big)));
+  });
+
+  it('gives up inside the parse, not after it, when the check says stop', () => {
+    const big = generateSetup(4000);
+    for (const after of [0, 3, 9]) {
+      let asked = 0;
+      let thrown: unknown;
+      try {
+        parseSetup(big, () => ++asked > after);
+      } catch (e) {
+        thrown = e;
+      }
+      expect(thrown).toBeInstanceOf(EvaluationStopped); // passed on, not made an internal-error problem
+      expect(asked).toBe(after + 1);
+    }
+    // Through analyze: the parse's own check points, before the one after the parse.
+    let asked = 0;
+    expect(() => analyze(big, undefined, () => ++asked > 2)).toThrow(EvaluationStopped);
+    expect(asked).toBe(3);
+  });
+
+  it('asks inside the model building, every few dozen blocks, and gives up there when told', () => {
+    const big = generateSetup(4000);
+    const doc = parseSetup(big);
+    let asked = 0;
+    const model = buildModel(doc, {}, undefined, undefined, () => (asked++, false));
+    // Declarations and references each walk the blocks; the level checks walk the species.
+    const expected = 2 * Math.ceil(doc.blocks.length / BLOCKS_PER_STOP_CHECK) + Math.ceil(model.species.length / BLOCKS_PER_STOP_CHECK);
+    expect(asked).toBe(expected);
+    expect(model.species.length).toBeGreaterThan(BLOCKS_PER_STOP_CHECK);
+    let told = 0;
+    expect(() => buildModel(doc, {}, undefined, undefined, () => ++told > 4)).toThrow(EvaluationStopped);
+    expect(told).toBe(5);
   });
 });

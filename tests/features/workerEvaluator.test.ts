@@ -30,6 +30,12 @@ const stubborn = script(
   "const { threadId } = require('worker_threads');\n" +
     "parentPort.on('message', (m) => { if (m.text === 'loop') for (;;) {} parentPort.postMessage({ id: m.id, ok: true, outcome: { problems: [{ code: 'thread', severity: 'info', message: String(threadId), range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } } }] } }); });",
 );
+// Computes for the job's text in ms without looking at the stop flag, then looks once: a check point that comes late.
+const late = script(
+  'late.js',
+  "const { workerData, threadId } = require('worker_threads');\n" +
+    "parentPort.on('message', (m) => { const end = Date.now() + Number(m.text); while (Date.now() < end) {} if (Atomics.load(workerData.stopFlag, 0) === m.id) return parentPort.postMessage({ id: m.id, ok: false, error: 'superseded by a newer version' }); parentPort.postMessage({ id: m.id, ok: true, outcome: { problems: [{ code: 'thread', severity: 'info', message: String(threadId), range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } } }] } }); });",
+);
 const failing = script('failing.js', "parentPort.on('message', (m) => parentPort.postMessage({ id: m.id, ok: false, error: 'no physics today' }));");
 
 const evaluators: WorkerEvaluator[] = [];
@@ -133,6 +139,59 @@ describe('the worker evaluator', () => {
     expect(answer.problems[0]!.message).not.toBe(String(thread)); // a fresh worker answered
     expect(ev.threadId).not.toBe(thread);
     expect(logged).toEqual([]);
+  });
+
+  it('runs the warm-up rounds while nothing else is asked, and drops their outcomes', async () => {
+    const { ev, logged } = make(polite);
+    ev.warmUp(3, '20');
+    for (let t = 0; t < 100 && ev.warmUpProgress.done < 3; t++) await new Promise((r) => setTimeout(r, 50));
+    expect(ev.warmUpProgress).toEqual({ done: 3, superseded: 0 });
+    expect(logged).toEqual([]);
+  });
+
+  it('asks a running warm-up round to stop when a real job comes, and ends the warm-up', async () => {
+    const { ev, logged } = make(polite);
+    ev.warmUp(5, '5000'); // each round computes 5 s unless asked to stop
+    await new Promise((r) => setTimeout(r, 300));
+    const thread = ev.threadId;
+    expect(thread).toBeDefined();
+    const started = Date.now();
+    const answer = await ev.evaluate('0');
+    expect(Date.now() - started).toBeLessThan(2000); // far from the round's 5 s
+    expect(answer.problems[0]!.message).toBe(String(thread)); // the same, warmed thread
+    expect(ev.warmUpProgress).toEqual({ done: 0, superseded: 1 });
+    await new Promise((r) => setTimeout(r, 200));
+    expect(ev.warmUpProgress).toEqual({ done: 0, superseded: 1 }); // no round after the real job
+    expect(logged).toEqual([]);
+  });
+
+  it('never hard-stops a warm-up round: the real job waits for its next check point, past the grace, in the same worker', async () => {
+    const { ev, logged } = make(late);
+    ev.warmUp(1, '1800'); // its only check point comes 1.8 s after it starts
+    await new Promise((r) => setTimeout(r, 200));
+    const thread = ev.threadId;
+    expect(thread).toBeDefined();
+    const answer = await ev.evaluate('0');
+    expect(answer.problems[0]!.message).toBe(String(thread)); // a real job would have lost its worker after 1 s
+    expect(ev.threadId).toBe(thread);
+    expect(ev.warmUpProgress).toEqual({ done: 0, superseded: 1 });
+    expect(logged).toEqual([]);
+  });
+
+  it('does not warm up once a real job was asked for', async () => {
+    const { ev } = make(polite);
+    await ev.evaluate('0');
+    ev.warmUp(3, '20');
+    await new Promise((r) => setTimeout(r, 300));
+    expect(ev.warmUpProgress).toEqual({ done: 0, superseded: 0 });
+  });
+
+  it('logs a warm-up round that fails, and nothing else of it', async () => {
+    const { ev, logged } = make(failing);
+    ev.warmUp(1, 'x');
+    for (let t = 0; t < 100 && logged.length === 0; t++) await new Promise((r) => setTimeout(r, 20));
+    expect(logged).toEqual(["sublevel: the evaluation worker's warm-up failed: no physics today"]);
+    expect(ev.warmUpProgress).toEqual({ done: 0, superseded: 0 });
   });
 
   it('rejects pending jobs when disposed', async () => {

@@ -9,7 +9,7 @@ import { recordSources, type SetupSources, type SourceSnapshot } from '../model/
 import type { SetupModel } from '../model/types';
 import { evaluate, sortProblems } from './evaluate';
 import { overCap, unparsedDocument } from './inputLimits';
-import { EvaluationStopped, stopIfAsked, type StopCheck } from './stopCheck';
+import { EvaluationStopped, stopIfAsked, type StopCheck } from '../format/stopCheck';
 
 export { sortProblems };
 import type { EvaluationResult } from './resultTypes';
@@ -38,21 +38,25 @@ export function refusedAnalysis(text: string): Analysis | undefined {
   return p ? { doc: unparsedDocument(text), problems: [p], refused: true } : undefined;
 }
 
-/** `stop`: see `evaluate`; it is also asked after the parse and the model, and `EvaluationStopped` is passed on, not reported. */
+/**
+ * `stop`: see `evaluate`; it is also asked inside the parse and the model building (every few
+ * hundred lines or few dozen blocks) and after each, and `EvaluationStopped` is passed on, not reported.
+ */
 export function analyze(text: string, options?: AnalyzeOptions, stop?: StopCheck): Analysis {
   const refused = refusedAnalysis(text);
   if (refused) return refused;
   let doc: SetupDocument;
   try {
-    doc = parseSetup(text);
+    doc = parseSetup(text, stop);
   } catch (e) {
+    if (e instanceof EvaluationStopped) throw e;
     return { doc: unparsedDocument(text), problems: [internalError(e)] };
   }
   stopIfAsked(stop);
   const recording = options ? recordSources(options) : undefined;
   const withSources = <T extends object>(a: T): T & { sources?: SourceSnapshot } => (recording ? { ...a, sources: recording.snapshot() } : a);
   try {
-    const model = buildModel(doc, recording?.sources);
+    const model = buildModel(doc, recording?.sources, undefined, undefined, stop);
     stopIfAsked(stop);
     const { result, problems } = evaluate(model, [...doc.problems, ...model.problems], stop);
     return withSources({ doc, model, result, problems });

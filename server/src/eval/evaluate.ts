@@ -21,7 +21,7 @@ import { evaluateTrap } from './trapEvaluation';
 import { EVAL_RULES } from './evalCodes';
 import { fieldScope } from './fieldScope';
 import { evaluateLevel, type EvaluationNote } from './levelEvaluation';
-import { stopIfAsked, type StopCheck } from './stopCheck';
+import { stopIfAsked, type StopCheck } from '../format/stopCheck';
 import {
   EVALUATION_FORMAT,
   EVALUATION_VERSION,
@@ -37,7 +37,7 @@ export { workingFields } from './fieldScope';
  * Evaluates the model. `earlier` are the problems of the parser and model; the returned
  * `problems` add what the evaluation found, and `result.diagnostics` lists them all in order.
  * `stop`, when given, is asked between levels, beams, lines and the other items; once it says
- * stop the evaluation throws `EvaluationStopped` (eval/stopCheck.ts) instead of finishing.
+ * stop the evaluation throws `EvaluationStopped` (format/stopCheck.ts) instead of finishing.
  */
 export function evaluate(model: SetupModel, earlier: Problem[], stop?: StopCheck): { result: EvaluationResult; problems: Problem[] } {
   const scope = fieldScope(model);

@@ -10,15 +10,20 @@ import { didYouMeanText, suggestNames } from './didYouMean';
 import { startsLikeNumber } from './numbers';
 import { computeLineStarts } from './positions';
 import { scanText, type ScannedLine, type Token } from './scanner';
+import { EvaluationStopped, LINES_PER_STOP_CHECK, stopEvery, type StopCheck } from './stopCheck';
 import { BLOCK_KEYS, BLOCK_WORDS, blocksWithKey, isBlockWord, LEVEL_KEYS, LEVEL_WORD, REPEATABLE_KEYS, USE_WORD } from './schema';
 import { rangeOn, readValueGroups, spanOf, type LineSpans } from './values';
 
-/** Parses a whole document. Never throws. */
-export function parseSetup(text: string): SetupDocument {
+/**
+ * Parses a whole document. Never throws, but for `EvaluationStopped` when a `stop` check is given
+ * and says stop (asked every LINES_PER_STOP_CHECK lines, while scanning and while reading).
+ */
+export function parseSetup(text: string, stop?: StopCheck): SetupDocument {
   try {
-    const scanned = scanText(text);
-    return assembleDocument(text, scanned.lineStarts, [parseLines(text, scanned.lines)]);
+    const scanned = scanText(text, stop);
+    return assembleDocument(text, scanned.lineStarts, [new SetupParser(text).run(scanned.lines, stop)]);
   } catch (e) {
+    if (e instanceof EvaluationStopped) throw e;
     // Defensive only: the property tests check this path is never taken.
     const at = { line: 0, character: 0 };
     return {
@@ -119,8 +124,11 @@ class SetupParser {
 
   constructor(private readonly text: string) {}
 
-  run(lines: readonly ScannedLine[]): ParsedLines {
-    for (const line of lines) this.readLine(line);
+  run(lines: readonly ScannedLine[], stop?: StopCheck): ParsedLines {
+    for (let i = 0; i < lines.length; i++) {
+      stopEvery(stop, i, LINES_PER_STOP_CHECK);
+      this.readLine(lines[i]!);
+    }
     return { blocks: this.blocks, uses: this.uses, comments: this.comments, problems: this.problems };
   }
 

@@ -6,6 +6,7 @@
  * "atom" (a word, number, quantity, unit or term symbol; later stages decide which).
  */
 import { computeLineStarts } from './positions';
+import { LINES_PER_STOP_CHECK, stopEvery, type StopCheck } from './stopCheck';
 
 export type TokenKind = 'atom' | 'equals' | 'colon' | 'comma' | 'arrow' | 'string';
 
@@ -119,10 +120,14 @@ export function scanLine(text: string, line: number, start: number, end: number)
   return result;
 }
 
-/** Lines [from, to) of a text whose line starts are known, scanned (the incremental parser reads a few). */
-export function scanLines(text: string, lineStarts: readonly number[], from: number, to: number): ScannedLine[] {
+/**
+ * Lines [from, to) of a text whose line starts are known, scanned (the incremental parser reads a
+ * few). `stop` is asked every LINES_PER_STOP_CHECK lines (format/stopCheck.ts).
+ */
+export function scanLines(text: string, lineStarts: readonly number[], from: number, to: number, stop?: StopCheck): ScannedLine[] {
   const lines: ScannedLine[] = [];
   for (let n = from; n < to; n++) {
+    stopEvery(stop, n - from, LINES_PER_STOP_CHECK);
     const start = lineStarts[n]!;
     let end = n + 1 < lineStarts.length ? lineStarts[n + 1]! : text.length;
     if (end > start && text.charCodeAt(end - 1) === 10) end--;
@@ -133,7 +138,7 @@ export function scanLines(text: string, lineStarts: readonly number[], from: num
 }
 
 /** Every line of the text, scanned. */
-export function scanText(text: string): ScannedText {
+export function scanText(text: string, stop?: StopCheck): ScannedText {
   const lineStarts = computeLineStarts(text);
-  return { lineStarts, lines: scanLines(text, lineStarts, 0, lineStarts.length) };
+  return { lineStarts, lines: scanLines(text, lineStarts, 0, lineStarts.length, stop) };
 }

@@ -21,6 +21,7 @@ import { buildTrap } from './trapBuilder';
 import type { TrapModel } from './trapTypes';
 import type { DataModel, FitRequestModel } from './fitTypes';
 import type { SetupSources } from './sources';
+import { BLOCKS_PER_STOP_CHECK, stopEvery, type StopCheck } from '../format/stopCheck';
 import { buildFieldSource, isSourceBlock } from './sourceBuilder';
 import { checkSourceOverlaps } from './sourceOverlaps';
 import { readFieldSpecies } from './fieldSpecies';
@@ -31,9 +32,11 @@ import { resolveUses, rootUseContext, type UseContext } from './useResolver';
  * `sources` says where the text lives and how to read the files its `use` statements name;
  * without it a `use` cannot be followed (and says so). `context` is for used files. `memo`
  * reuses what was built for the blocks of an earlier version that this one shares (the editor
- * passes one per version); the model is the same with or without it.
+ * passes one per version); the model is the same with or without it. `stop` is asked every
+ * BLOCKS_PER_STOP_CHECK blocks (and species for the level checks); when it says stop,
+ * `EvaluationStopped` is thrown (format/stopCheck.ts).
  */
-export function buildModel(doc: SetupDocument, sources: SetupSources = {}, context?: UseContext, memo: BlockMemo = new BlockMemo()): SetupModel {
+export function buildModel(doc: SetupDocument, sources: SetupSources = {}, context?: UseContext, memo: BlockMemo = new BlockMemo(), stop?: StopCheck): SetupModel {
   const problems = new ProblemList();
   const used = doc.uses.length > 0 ? resolveUses(doc, sources, context ?? rootUseContext(sources.uri), buildModel, problems) : [];
   const names: NameUse[] = [];
@@ -54,7 +57,9 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
   const resonances = new NameIndex<ResonanceModel>('resonance', names);
   const scopedFields: FieldModel[] = [];
 
-  for (const block of doc.blocks) {
+  for (let i = 0; i < doc.blocks.length; i++) {
+    stopEvery(stop, i, BLOCKS_PER_STOP_CHECK);
+    const block = doc.blocks[i]!;
     switch (block.kind) {
       case 'species': {
         const s = memo.build(block, names, problems, (u, p) => buildSpecies(block, u, p));
@@ -91,7 +96,9 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
   const traps = new NameIndex<TrapModel>('trap', names);
   let beamOrdinal = 0;
   const beamsWithoutName: BeamModel[] = [];
-  for (const block of doc.blocks) {
+  for (let i = 0; i < doc.blocks.length; i++) {
+    stopEvery(stop, i, BLOCKS_PER_STOP_CHECK);
+    const block = doc.blocks[i]!;
     if (block.kind === 'beam') {
       const b = buildBeam(block, { species, magnets }, names, problems, beamOrdinal++);
       if (block.name) beams.declare(b, problems);
@@ -147,7 +154,9 @@ export function buildModel(doc: SetupDocument, sources: SetupSources = {}, conte
   };
   // A used file's levels are checked in that file.
   const settingsKey = JSON.stringify(model.settings);
-  for (const s of model.species) {
+  for (let i = 0; i < model.species.length; i++) {
+    stopEvery(stop, i, BLOCKS_PER_STOP_CHECK);
+    const s = model.species[i]!;
     if (!s.origin) memo.check(s.node, settingsKey, problems, (p) => s.levels.forEach((l) => checkLevelPhysics(l, model.settings, p)));
   }
   return model;

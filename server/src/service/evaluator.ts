@@ -7,7 +7,7 @@ import type { Problem } from '../format/ast';
 import { analyze } from '../eval/analyze';
 import type { EvaluationResult } from '../eval/resultTypes';
 import { replaySources, type SourceSnapshot } from '../model/sources';
-import type { StopCheck } from '../eval/stopCheck';
+import type { StopCheck } from '../format/stopCheck';
 
 /** What the full pipeline gives for a text: its result and every problem of every stage. */
 export interface EvaluationOutcome {
@@ -28,7 +28,7 @@ export interface Evaluator {
 /** The rejection of an evaluation given up because a newer version superseded it. */
 export const SUPERSEDED = 'superseded by a newer version';
 
-/** `stop`: asked at the evaluation's check points; when it says stop, `EvaluationStopped` is thrown (eval/stopCheck.ts). */
+/** `stop`: asked at the evaluation's check points; when it says stop, `EvaluationStopped` is thrown (format/stopCheck.ts). */
 export function evaluateText(text: string, sources?: SourceSnapshot, stop?: StopCheck): EvaluationOutcome {
   const a = analyze(text, sources ? replaySources(sources) : undefined, stop);
   return { ...(a.result ? { result: a.result } : {}), problems: a.problems };

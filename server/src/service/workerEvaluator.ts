@@ -5,6 +5,8 @@
  * shared flag (the evaluation gives up at its next check point and the worker, warm, takes the
  * next job). A running job that has not stopped STOP_GRACE_MS after the ask is stopped with
  * its worker, so nothing can hold up the new version. A worker that cannot start makes the evaluator fall back to this thread.
+ * `warmUp` gives a fresh worker a built-in set-up to evaluate while it has nothing else to do, so
+ * that the first real job finds the engine's code compiled; any real job supersedes it.
  */
 import { Worker } from 'worker_threads';
 import { EVALUATION_TIME_LIMIT_MS } from '../model/limits';
@@ -12,17 +14,27 @@ import type { SourceSnapshot } from '../model/sources';
 import { type EvaluationOutcome, type Evaluator, evaluateText, SUPERSEDED } from './evaluator';
 import type { EvaluationReply, EvaluationRequest } from './evaluatorThread';
 import { unpackResult } from './resultHandOff';
+import { warmUpSetup } from './warmUpSetup';
 
 /** `workerData.role` that tells a bundle started as a worker to serve evaluations. */
 export const EVALUATOR_ROLE = 'sublevel-evaluator';
 
 /**
  * How long a superseded job gets to reach a check point after it was asked to stop; past this the
- * worker is stopped. Check points come after the parse, the model and every level, beam and line;
- * the longest stretch between two is the parse: 0.2–0.6 s warm on the 20,000-line file at load 9
- * on 2 cores (0.2 s at load 1), and a cold worker costs ~4 s of CPU more than a warm one.
+ * worker is stopped. Check points come every 512 lines of the parse, every 64 blocks of the model,
+ * before every level, beam and line, and before packing (format/stopCheck.ts); the longest stretch
+ * between two is a cold beam (≈ 0.3 s of CPU), and a cold worker costs ~4 s of CPU more than a warm one.
  */
 const STOP_GRACE_MS = 1000;
+
+/**
+ * Times the warm-up set-up is evaluated (each a job of its own, so a real job waits for one check
+ * point at most): the engine optimises a function after many calls, and the beams, the slowest
+ * code to warm, keep gaining for a few dozen evaluations. The 20,000-line file in one process at
+ * load 10–13 (evaluation, packing and unpacking, CPU): 4.3–4.4 s cold; after 1, 2 and 3 rounds
+ * 3.7–3.8, 3.3–3.5 and 3.4–3.5 s, the rounds costing 1.4–1.5, 2.1–2.2 and 2.3–2.4 s together.
+ */
+export const WARM_UP_ROUNDS = 4;
 
 interface Job {
   id: number;
@@ -30,6 +42,16 @@ interface Job {
   sources?: SourceSnapshot;
   resolve: (o: EvaluationOutcome) => void;
   reject: (e: Error) => void;
+  /** A round of the warm-up: its outcome goes nowhere, and a real job supersedes it. */
+  warmUp?: true;
+}
+
+/** What the warm-up did so far (for tests and benches). */
+export interface WarmUpCounts {
+  /** Rounds evaluated to the end. */
+  done: number;
+  /** Rounds given up because a real job came. */
+  superseded: number;
 }
 
 export class WorkerEvaluator implements Evaluator {
@@ -40,6 +62,11 @@ export class WorkerEvaluator implements Evaluator {
   private abandonTimer: NodeJS.Timeout | undefined;
   private nextId = 1;
   private broken = false;
+  /** Warm-up rounds still to run while the worker has nothing else to do. */
+  private warmUpLeft = 0;
+  private warmUpText = '';
+  private realJobSeen = false;
+  private readonly warmUpCounts: WarmUpCounts = { done: 0, superseded: 0 };
   /** Shared with every worker this evaluator starts: the id of the running job that is no longer wanted. */
   private readonly stopFlag = new Int32Array(new SharedArrayBuffer(4));
 
@@ -52,12 +79,35 @@ export class WorkerEvaluator implements Evaluator {
 
   evaluate(text: string, signal?: AbortSignal, sources?: SourceSnapshot): Promise<EvaluationOutcome> {
     if (this.broken) return new Promise((resolve) => resolve(evaluateText(text, sources)));
+    // Real work warms the worker from now on.
+    this.warmUpLeft = 0;
+    this.realJobSeen = true;
     return new Promise((resolve, reject) => {
       const job: Job = { id: this.nextId++, text, ...(sources ? { sources } : {}), resolve, reject };
       signal?.addEventListener('abort', () => this.supersede(job), { once: true });
       this.queue.push(job);
       this.pump();
     });
+  }
+
+  /**
+   * Starts the worker now and has it evaluate `text` (the built-in set-up) `rounds` times while no
+   * real job is waiting. Nothing of it reaches the caller: its results are dropped, and only a
+   * failure of the worker itself is logged. A real job asks the running round to stop at its next
+   * check point (the same shared flag as a superseded job) and ends the warm-up. Does nothing once
+   * a real job was asked for.
+   */
+  warmUp(rounds = WARM_UP_ROUNDS, text = warmUpSetup()): void {
+    // After a real job the worker is warm, or warms on real work: nothing to add.
+    if (this.broken || this.realJobSeen) return;
+    this.warmUpLeft = rounds;
+    this.warmUpText = text;
+    this.pump();
+  }
+
+  /** Rounds of the warm-up done and given up so far. */
+  get warmUpProgress(): WarmUpCounts {
+    return { ...this.warmUpCounts };
   }
 
   /** The running worker's thread id (undefined before the first job and after a stop): tells a warm worker from a fresh one. */
@@ -77,13 +127,30 @@ export class WorkerEvaluator implements Evaluator {
     Atomics.store(this.stopFlag, 0, job.id);
     // The hard stop stays as the fallback, for a job that does not reach a check point in time
     // (the timer is the bound, not only this moment: otherwise it could run to the time limit).
+    // Not for the warm-up: its set-up is small and always reaches a check point soon, and a fresh
+    // worker would cost the real job far more than that wait.
+    if (job.warmUp) return;
     clearTimeout(this.abandonTimer);
     this.abandonTimer = setTimeout(() => {
       if (this.current === job) this.stop(this.worker, SUPERSEDED, false);
     }, STOP_GRACE_MS);
   }
 
+  /** A warm-up round as a job: its outcome is dropped (an evaluation error is logged in `finish`, a stopped worker in `stop`). */
+  private warmUpJob(): Job {
+    return {
+      id: this.nextId++,
+      text: this.warmUpText,
+      warmUp: true,
+      resolve: () => this.warmUpCounts.done++,
+      reject: (e) => {
+        if (e.message === SUPERSEDED) this.warmUpCounts.superseded++;
+      },
+    };
+  }
+
   dispose(): void {
+    this.warmUpLeft = 0;
     clearTimeout(this.timer);
     clearTimeout(this.abandonTimer);
     void this.worker?.terminate();
@@ -112,10 +179,19 @@ export class WorkerEvaluator implements Evaluator {
   }
 
   private pump(): void {
-    if (this.current || this.queue.length === 0) return;
+    if (this.current) {
+      // A real job waits behind a warm-up round: the round gives up at its next check point.
+      if (this.current.warmUp && this.queue.length > 0) this.supersede(this.current);
+      return;
+    }
+    if (this.queue.length === 0 && this.warmUpLeft > 0) {
+      this.warmUpLeft--;
+      this.queue.push(this.warmUpJob());
+    }
+    if (this.queue.length === 0) return;
     this.worker ??= this.start();
     if (!this.worker) {
-      for (const job of this.queue.splice(0)) job.resolve(evaluateText(job.text, job.sources));
+      for (const job of this.queue.splice(0)) if (!job.warmUp) job.resolve(evaluateText(job.text, job.sources));
       return;
     }
     const job = this.queue.shift()!;
@@ -131,8 +207,11 @@ export class WorkerEvaluator implements Evaluator {
     clearTimeout(this.timer);
     clearTimeout(this.abandonTimer);
     this.current = undefined;
-    if (!reply.ok) job.reject(new Error(reply.error));
-    else if ('packed' in reply) {
+    if (!reply.ok) {
+      // The warm-up set-up is built in: an error there is a defect, said in the server's log.
+      if (job.warmUp && reply.error !== SUPERSEDED) this.log(`sublevel: the evaluation worker's warm-up failed: ${reply.error}`);
+      job.reject(new Error(reply.error));
+    } else if ('packed' in reply) {
       try {
         job.resolve({ result: unpackResult(reply.packed), problems: reply.problems });
       } catch (e) {
