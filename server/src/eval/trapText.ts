@@ -7,6 +7,7 @@ import { ZERO_FIELD_FRACTION } from '../physics/traps';
 import { cleanValue, frequencyText, lengthText, MISSING, trimNumber, type NoiseFloor } from './quantityText';
 import type { TrapResult, TrapSublevelResult } from './trapResultTypes';
 import { pointText } from './fieldSourceText';
+import { lengthUnitFor } from './lengthUnit';
 import { displayUnit, inWrittenUnit } from './writtenUnit';
 
 /** A |B| gradient in G/cm. */
@@ -90,13 +91,19 @@ function cutInUnit(t: TrapResult): string {
   return asF ?? `${trimNumber(t.cut_J!, 5)} J (${displayUnit(unit)})`;
 }
 
+/** The region's radius and centre in one length unit (the larger's): `region 5.091 cm about (0, 0, 0) cm`. */
+export function regionText(radiusM: number, centreM: readonly number[]): string {
+  const u = lengthUnitFor(Math.max(Math.abs(radiusM), ...centreM.map(Math.abs)));
+  return `region ${trimNumber(radiusM / u.metres, 4)} ${u.symbol} about ${pointText(centreM, u)}`;
+}
+
 /** The trap's summary in a few lines (hover and report header). */
 export function trapSummaryLines(t: TrapResult): string[] {
   const out: string[] = [];
   const what = [t.species && t.level ? `${t.species}.${t.level}` : undefined, t.sources.length > 0 ? `sources ${t.sources.join(', ')}` : undefined].filter(Boolean).join('; ');
   out.push(`trap ${t.name}${what ? ` — ${what}` : ''}`);
   const gravity = t.gravity === 'off' ? 'gravity off' : `gravity along (${t.gravity.map((x) => trimNumber(x, 3)).join(', ')})`;
-  const region = t.region ? `region ${lengthText(t.region.radius_m)} about ${pointText(t.region.centre_m)}${t.region.from === 'sources' ? ' (90 % of the way to the nearest conductor)' : ''}` : 'no region';
+  const region = t.region ? `${regionText(t.region.radius_m, t.region.centre_m)}${t.region.from === 'sources' ? ' (90 % of the way to the nearest conductor)' : ''}` : 'no region';
   out.push([gravity, region, ...trapInputsText(t)].join('; '));
   if (!t.computed) {
     out.push('not computed: see the diagnostics');
