@@ -26,8 +26,17 @@ export type TrapFieldUnit = 'G' | 'T';
  * field chooses; a turning field past it (⁸⁷Rb |1,−1⟩ at 1220.9 G) follows the region's unit.
  */
 export function trapFieldUnit(t: TrapResult): TrapFieldUnit {
-  const largest = Math.max(Math.abs(t.field_max_T ?? 0), Math.abs(t.field_at_centre_T ?? 0));
-  return Number.isFinite(largest) && largest >= 0.1 ? 'T' : 'G';
+  return trapFieldUnitFor(Math.max(Math.abs(t.field_max_T ?? 0), Math.abs(t.field_at_centre_T ?? 0)));
+}
+
+/** The unit of a trap whose largest |B| is `largestT`: T from 0.1 T up, else G. */
+export function trapFieldUnitFor(largestT: number): TrapFieldUnit {
+  return Number.isFinite(largestT) && Math.abs(largestT) >= 0.1 ? 'T' : 'G';
+}
+
+/** trap-gravity-too-strong in the trap's own gradient unit (the physics core gives the numbers). */
+export function gravityTooStrongText(sublevel: string, g: { needTPerM: number; hasTPerM: number }, unit: TrapFieldUnit): string {
+  return `This trap cannot hold ${sublevel} against gravity: it needs ≥ ${trapGradientText(unit, g.needTPerM, 3)} along gravity (has ${trapGradientText(unit, g.hasTPerM, 3)}).`;
 }
 
 /** A field of a trap in its unit (0 reads "0 G" in a gauss trap). */
