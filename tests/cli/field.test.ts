@@ -6,6 +6,7 @@
 import { readFileSync } from 'fs';
 import { describe, expect, it } from 'vitest';
 import { cli } from './runCli';
+import { onConductorNote } from '../../server/src/cli/fieldCommand';
 
 const FILE = 'examples/coils-and-wires.sublevel';
 const reference = JSON.parse(readFileSync('tests/reference/field_command.json', 'utf8')) as {
@@ -48,7 +49,7 @@ describe('sublevel field: values', () => {
     expect(cli('field', FILE, '--source', 'rail', '--at', '1cm,2mm,0').out).toMatch(/\n {2}no value: the point lies on a wire/);
     const r = cli('field', FILE, '--source', 'rail', '--at', '1cm,2mm,0', '--format', 'csv');
     expect(r.out.split('\n')[2]).toBe('0.01,0.002,0' + ','.repeat(16));
-    expect(r.err).toMatch(/^note: 1 point lies on a conductor and has no field value \(first: The point lies on a wire/);
+    expect(r.err.trim()).toBe('note: 1 point lies on a wire and has no field value.');
   });
 
   it('has no value on the wire of a loop, alone or in a pair (the sum says which part it left out)', () => {
@@ -60,7 +61,14 @@ describe('sublevel field: values', () => {
     const grid = cli('field', FILE, '--source', 'quad', '--grid', 'x=-3.5:3.5cm,z=-3.5:3.5cm', '--points', '3', '--format', 'json');
     const values = JSON.parse(grid.out).points.map((q: { B_T: number[] | null }) => q.B_T !== null);
     expect(values).toEqual([false, true, false, true, true, true, false, true, false]);
-    expect(grid.err).toMatch(/^note: 4 points lie on a conductor/);
+    expect(grid.err.trim()).toBe('note: 4 points lie on the wire of a loop and have no field value.');
+  });
+});
+
+describe('sublevel field: the note on points without a value', () => {
+  it('is one plain sentence, naming the conductor once (or the first of several kinds)', () => {
+    expect(onConductorNote(['a wire', 'a wire'])).toBe('note: 2 points lie on a wire and have no field value.');
+    expect(onConductorNote(['the wire of a loop', 'a wire'])).toBe('note: 2 points lie on conductors and have no field value, the first on the wire of a loop.');
   });
 });
 

@@ -20,7 +20,7 @@ import { csvNumber } from '../eval/machineText';
 import { lengthUnitFor } from '../eval/lengthUnit';
 import { trimNumber } from '../eval/quantityText';
 import type { FieldSourceModel, SetupModel } from '../model/types';
-import { magnitudeGradient, sumField } from '../physics/fields';
+import { conductorOf, magnitudeGradient, sumField } from '../physics/fields';
 import { cleanField } from '../eval/cleanField';
 import type { FieldSample, Vec3 } from '../physics/fields/types';
 
@@ -53,6 +53,8 @@ export interface FieldPointRow {
   sample?: FieldSample;
   magnitudeGradient?: Vec3;
   onSource?: string;
+  /** The conductor such a point lies on, in words ("a wire"). */
+  conductor?: string;
 }
 
 export function runField(args: ParsedArgs, ctx: CliContext): number {
@@ -85,9 +87,19 @@ export function runField(args: ParsedArgs, ctx: CliContext): number {
   // A CSV's empty cells and a JSON's nulls are easy to miss: say on stderr why they are there.
   const onSource = rows.filter((r) => r.onSource !== undefined);
   if (onSource.length > 0 && (format !== 'text' || out)) {
-    ctx.io.err(`note: ${onSource.length} point${onSource.length === 1 ? ' lies' : 's lie'} on a conductor and ${onSource.length === 1 ? 'has' : 'have'} no field value (first: ${onSource[0]!.onSource})`);
+    ctx.io.err(onConductorNote(onSource.map((r) => r.conductor ?? 'a conductor')));
   }
   return reportErrors(file, analysis, ctx) > 0 ? 1 : 0;
+}
+
+/** One sentence for the points without a value: "note: 4 points lie on the wire of a loop and have no field value." */
+export function onConductorNote(conductors: readonly string[]): string {
+  const n = conductors.length;
+  const first = conductors[0]!;
+  const verb = n === 1 ? 'lies' : 'lie';
+  const has = n === 1 ? 'has' : 'have';
+  if (conductors.every((c) => c === first)) return `note: ${n} point${n === 1 ? '' : 's'} ${verb} on ${first} and ${has} no field value.`;
+  return `note: ${n} points lie on conductors and have no field value, the first on ${first}.`;
 }
 
 function chooseSources(file: string, model: SetupModel, wanted: string | undefined): FieldSourceModel[] {
@@ -101,7 +113,7 @@ export function sampleField(sources: readonly FieldSourceModel[], plan: FieldPoi
   const field = cleanField(sources.flatMap((s) => s.parts), sumField);
   return plan.points.map((point) => {
     const c = field(point);
-    if ('onSource' in c) return { point, onSource: c.onSource.message };
+    if ('onSource' in c) return { point, onSource: c.onSource.message, conductor: conductorOf(c.onSource) };
     const g = magnitudeGradient(c.sample);
     return { point, sample: c.sample, ...(g ? { magnitudeGradient: g } : {}) };
   });

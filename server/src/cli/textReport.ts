@@ -23,7 +23,7 @@ import { table } from './table';
 import { fieldScopeLine } from '../eval/fieldScopeText';
 import { sourceHeadline, sourceLines } from '../eval/fieldSourceText';
 import { slowerReport } from '../eval/slowerText';
-import { vacuumWavelengthNmText } from '../eval/wavelengthText';
+import { lineWavelengthText } from '../eval/wavelengthText';
 import { trapReport } from './trapReport';
 import { averagedOverText, magnetGradientNote } from '../eval/magnetGradientText';
 
@@ -152,8 +152,8 @@ function lineReport(l: LineResult, atFieldText: AtFieldText, diagnostics: readon
   const out = ['', `line ${l.name}: ${l.lower ?? '?'} -> ${l.upper ?? '?'}${l.species ? ` (${l.species})` : ''}${written}`];
   if (l.g_eff !== undefined) out.push(`  effective Landé factor g_eff = ${trimNumber(l.g_eff, 7)}`);
   if (l.line_centre_Hz !== undefined) {
-    // A wavelength only for a positive frequency: a negative one means the levels are the other way round.
-    const wavelength = l.line_centre_Hz > 0 ? ` (vacuum wavelength ${vacuumWavelengthNmText(l.line_centre_Hz, l.line_centre_Hz_unc, 9)})` : '';
+    // A negative centre (the levels the other way round) gets the wavelength of |ν|, saying so, as the hover does.
+    const wavelength = l.line_centre_Hz !== 0 && Number.isFinite(l.line_centre_Hz) ? ` (${lineWavelengthText(l.line_centre_Hz, l.line_centre_Hz_unc, 9)})` : '';
     out.push(`  line centre ${withUncertainty(l.line_centre_Hz, l.line_centre_Hz_unc, (v) => frequencyText(v, 13))}${wavelength}`);
   }
   const at = l.at_fields[0];

@@ -4,7 +4,7 @@
  * reads the same in the terminal and in the editor.
  */
 import type { FieldSourceResult } from './fieldSourceResultTypes';
-import { lengthUnitFor } from './lengthUnit';
+import { lengthUnitFor, type LengthUnit } from './lengthUnit';
 import { gradientText, lengthText, MISSING, trimNumber } from './quantityText';
 import { isGaussUnit } from './writtenUnit';
 
@@ -32,9 +32,8 @@ function vectorText(v: readonly number[], each: (x: number) => string, unit: str
   return `(${v.map((x) => each(x)).join(', ')}) ${unit}`;
 }
 
-/** A point with one length unit for all three coordinates (lengthUnit.ts), `(0, 0, 1) cm`. */
-export function pointText(p: readonly number[]): string {
-  const u = lengthUnitFor(Math.max(0, ...p.map(Math.abs)));
+/** A point with one length unit for all three coordinates (lengthUnit.ts), `(0, 0, 1) cm`; a caller's unit when a phrase shares one. */
+export function pointText(p: readonly number[], u: LengthUnit = lengthUnitFor(Math.max(0, ...p.map(Math.abs)))): string {
   return vectorText(p, (x) => trimNumber(x / u.metres, 5), u.symbol);
 }
 

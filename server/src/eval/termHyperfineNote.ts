@@ -10,7 +10,7 @@ export function termHyperfineNote(level: LevelModel, source: string): Evaluation
   const range = level.levelA && level.levelA.length > 0 ? { start: level.levelA[0]!.range.start, end: level.levelA[level.levelA.length - 1]!.range.end } : level.nameRange;
   return {
     code: 'hyperfine-between-levels-assumed',
-    message: `term ${level.species.name}.${level.name}: the hyperfine coupling between its J levels comes from the A_J values with the assumption a_L = a_SD (one radial mean ⟨r⁻³⟩ for the orbital and spin-dipolar parts, as for one electron without relativistic corrections); measured off-diagonal constants would replace it`,
+    message: `term ${level.species.name}.${level.name}: the hyperfine coupling between its J levels comes from the A_J values with the assumption a_L = a_SD (one radial mean ⟨r⁻³⟩ for the orbital and spin-dipolar parts, as for one electron without relativistic corrections); measured off-diagonal constants would replace it.`,
     range,
   };
 }

@@ -15,6 +15,7 @@ import type { GJLookup } from './gJLookup';
 import { engineSpec } from './levelSpec';
 import type { TrapResult, TrapSublevelResult } from './trapResultTypes';
 import { ZERO_FIELD_CODE, zeroFieldProblem } from './trapZeroField';
+import { gravityTooStrongText, trapFieldUnitFor } from './trapText';
 
 export interface TrapEvaluation {
   result: TrapResult;
@@ -55,7 +56,9 @@ export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: Settings
     ...(trap.temperatureK ? { temperatureK: trap.temperatureK.value } : {}),
     ...(trap.cutJ ? { cutJ: trap.cutJ.value } : {}),
   });
-  for (const i of summary.issues) if (i.code !== ZERO_FIELD_CODE) problems.push(toProblem(trap, i));
+  // The gravity finding reads its gradients in the unit the trap's report uses (trapText.trapFieldUnit).
+  const unit = trapFieldUnitFor(Math.max(Math.abs(summary.fieldRangeT[1]), Math.abs(summary.fieldAtCentreT)));
+  for (const i of summary.issues) if (i.code !== ZERO_FIELD_CODE) problems.push(toProblem(trap, i.gravity && i.sublevel !== undefined ? { ...i, message: gravityTooStrongText(i.sublevel, i.gravity, unit) } : i));
   const zero = summary.issues.filter((i) => i.code === ZERO_FIELD_CODE);
   if (zero.length > 0) {
     // A temperature written but not usable (wrong unit, not above 0) has its own error; this finding points at it.

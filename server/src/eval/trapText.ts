@@ -7,6 +7,7 @@ import { ZERO_FIELD_FRACTION } from '../physics/traps';
 import { cleanValue, frequencyText, lengthText, MISSING, trimNumber, type NoiseFloor } from './quantityText';
 import type { TrapResult, TrapSublevelResult } from './trapResultTypes';
 import { pointText } from './fieldSourceText';
+import { lengthUnitFor } from './lengthUnit';
 import { displayUnit, inWrittenUnit } from './writtenUnit';
 
 /** A |B| gradient in G/cm. */
@@ -25,8 +26,17 @@ export type TrapFieldUnit = 'G' | 'T';
  * field chooses; a turning field past it (⁸⁷Rb |1,−1⟩ at 1220.9 G) follows the region's unit.
  */
 export function trapFieldUnit(t: TrapResult): TrapFieldUnit {
-  const largest = Math.max(Math.abs(t.field_max_T ?? 0), Math.abs(t.field_at_centre_T ?? 0));
-  return Number.isFinite(largest) && largest >= 0.1 ? 'T' : 'G';
+  return trapFieldUnitFor(Math.max(Math.abs(t.field_max_T ?? 0), Math.abs(t.field_at_centre_T ?? 0)));
+}
+
+/** The unit of a trap whose largest |B| is `largestT`: T from 0.1 T up, else G. */
+export function trapFieldUnitFor(largestT: number): TrapFieldUnit {
+  return Number.isFinite(largestT) && Math.abs(largestT) >= 0.1 ? 'T' : 'G';
+}
+
+/** trap-gravity-too-strong in the trap's own gradient unit (the physics core gives the numbers). */
+export function gravityTooStrongText(sublevel: string, g: { needTPerM: number; hasTPerM: number }, unit: TrapFieldUnit): string {
+  return `This trap cannot hold ${sublevel} against gravity: it needs ≥ ${trapGradientText(unit, g.needTPerM, 3)} along gravity (has ${trapGradientText(unit, g.hasTPerM, 3)}).`;
 }
 
 /** A field of a trap in its unit (0 reads "0 G" in a gauss trap). */
@@ -90,13 +100,19 @@ function cutInUnit(t: TrapResult): string {
   return asF ?? `${trimNumber(t.cut_J!, 5)} J (${displayUnit(unit)})`;
 }
 
+/** The region's radius and centre in one length unit (the larger's): `region 5.091 cm about (0, 0, 0) cm`. */
+export function regionText(radiusM: number, centreM: readonly number[]): string {
+  const u = lengthUnitFor(Math.max(Math.abs(radiusM), ...centreM.map(Math.abs)));
+  return `region ${trimNumber(radiusM / u.metres, 4)} ${u.symbol} about ${pointText(centreM, u)}`;
+}
+
 /** The trap's summary in a few lines (hover and report header). */
 export function trapSummaryLines(t: TrapResult): string[] {
   const out: string[] = [];
   const what = [t.species && t.level ? `${t.species}.${t.level}` : undefined, t.sources.length > 0 ? `sources ${t.sources.join(', ')}` : undefined].filter(Boolean).join('; ');
   out.push(`trap ${t.name}${what ? ` — ${what}` : ''}`);
   const gravity = t.gravity === 'off' ? 'gravity off' : `gravity along (${t.gravity.map((x) => trimNumber(x, 3)).join(', ')})`;
-  const region = t.region ? `region ${lengthText(t.region.radius_m)} about ${pointText(t.region.centre_m)}${t.region.from === 'sources' ? ' (90 % of the way to the nearest conductor)' : ''}` : 'no region';
+  const region = t.region ? `${regionText(t.region.radius_m, t.region.centre_m)}${t.region.from === 'sources' ? ' (90 % of the way to the nearest conductor)' : ''}` : 'no region';
   out.push([gravity, region, ...trapInputsText(t)].join('; '));
   if (!t.computed) {
     out.push('not computed: see the diagnostics');

@@ -30,3 +30,13 @@ export function vacuumWavelengthNmText(hz: number, hzUnc: number | undefined, di
   const uNm = w.unc * 1e9;
   return compact ? withUncertaintyIfVisible(nm, uNm, digits, plain) : withUncertainty(nm, uNm, plain);
 }
+
+/**
+ * "vacuum wavelength 689.45 nm" for a line centre ν. A negative ν means the level written as upper
+ * lies below the one written as lower: the wavelength is that of |ν|, and the text says why.
+ * The text report and the hover both print a line's wavelength through here.
+ */
+export function lineWavelengthText(hz: number, hzUnc: number | undefined, digits: number): string {
+  const w = `vacuum wavelength ${vacuumWavelengthNmText(Math.abs(hz), hzUnc, digits)}`;
+  return hz < 0 ? `${w} of |ν| (ν < 0: the upper level as written lies below the lower)` : w;
+}

@@ -27,6 +27,7 @@ import { markerPath } from './markers';
 import { FALLING_DASH, paletteFor, type Palette } from './palette';
 import { arrayValues, finiteExtent, slopeAt, valueAt } from './sampled';
 import { slopeRuns, trendOf, type Trend } from './slopeRuns';
+import { endAnchoredDashOffsets } from './dashPhase';
 import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
 import { fieldDisplayUnit, figureMinus, formatIn, formatSI, frequencyUnit } from './units';
 import type { LevelCrossing, LevelCurve, LevelsViewData, RenderTheme } from './viewData';
@@ -170,13 +171,16 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   const interactive = theme.kind === 'panel';
   const curveSvg: string[] = [];
   d.curves.forEach((c, i) => {
-    const segments = runs[i].map((r) => {
+    const drawn = runs[i].map((r) => {
       const idx = Array.from({ length: r.to - r.from + 1 }, (_, k) => r.from + k);
       const path = line<number>().x((k) => x(fields[k])).y((k) => yOf(i)(c.energyHz[k])).digits(2)(idx) ?? '';
       const style = trendStyle(r.trend, pal);
-      return { r, path, style };
+      const points = idx.map((k) => [x(fields[k]), yOf(i)(c.energyHz[k])] as const);
+      return { r, path, style, points };
     }).filter((g) => g.path);
-    if (segments.length === 0) return;
+    if (drawn.length === 0) return;
+    const offsets = endAnchoredDashOffsets(drawn.map((g) => ({ points: g.points, dash: g.style.dash })));
+    const segments = drawn.map((g, k) => ({ ...g, dashOffset: offsets[k] }));
     const eRef = valueAt(fields, c.energyHz, refField);
     const muRef = c.momentJT ? valueAt(fields, c.momentJT, refField) : NaN;
     const name = stateName(c);
@@ -197,6 +201,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
           d: g.path,
           stroke: g.style.colour,
           'stroke-dasharray': g.style.dash,
+          'stroke-dashoffset': g.dashOffset ? dataNum(g.dashOffset) : undefined,
         }),
       );
     });

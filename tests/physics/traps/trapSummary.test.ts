@@ -72,9 +72,13 @@ describe('a quadrupole against gravity (b′ = 21 G/cm along z, gravity −z)', 
   it('cannot hold |2,+1⟩ or |1,−1⟩: needs ≥ 30.5 G/cm (has 21 G/cm)', () => {
     expect(state(s.sublevels, 4, 2).trapped).toBe(false);
     expect(state(s.sublevels, 2, -2).trapped).toBe(false);
-    const msgs = s.issues.filter((i) => i.code === 'trap-gravity-too-strong').map((i) => i.message);
-    expect(msgs).toContain('This trap cannot hold |F=2, m_F=+1⟩ against gravity: it needs ≥ 30.5 G/cm along gravity (has 21 G/cm).');
-    expect(msgs.length).toBe(2);
+    const found = s.issues.filter((i) => i.code === 'trap-gravity-too-strong');
+    // The core gives the numbers (and an SI message); the trap text words them in the trap's unit.
+    const plus1 = found.find((i) => i.sublevel === '|F=2, m_F=+1⟩')!;
+    expect(Number((plus1.gravity!.needTPerM * 100).toPrecision(3))).toBe(30.5);
+    expect(rel(plus1.gravity!.hasTPerM, 0.21)).toBeLessThan(1e-9);
+    expect(plus1.message).toBe('This trap cannot hold |F=2, m_F=+1⟩ against gravity: it needs ≥ 0.305 T/m along gravity (has 0.21 T/m).');
+    expect(found.length).toBe(2);
   });
   it('says the zero field loses atoms (Majorana) and estimates the rate: a note when slower than 1/(60 s)', () => {
     const t = state(s.sublevels, 4, 4);

@@ -6,7 +6,7 @@
 import type { EvaluationResult, LevelResult, LineResult } from '../../eval/resultTypes';
 import { frequencyText, trimNumber, withUncertainty } from '../../eval/quantityText';
 import { polarizationSymbol } from '../../eval/polarizationName';
-import { vacuumWavelengthNmText } from '../../eval/wavelengthText';
+import { lineWavelengthText } from '../../eval/wavelengthText';
 import { fieldInUnit, workingFieldUnit } from '../../eval/writtenUnit';
 import type { LineModel } from '../../model/types';
 import { md, mdTable, mdTitle } from '../shared/markdown';
@@ -74,7 +74,7 @@ export function lineSection(line: LineModel, result: EvaluationResult | undefine
   // The answer first: where the line is, then how it is made.
   const f = lineFrequency(r, lower, upper);
   const title = `${mdTitle(`line ${md(line.name)}`)}${species ? ` in ${md(species)}` : ''}`;
-  const lines = [f ? `${title} — ν = ${withUncertainty(f.hz, f.unc, (v) => frequencyText(v, 9))}, vacuum wavelength ${vacuumWavelengthNmText(Math.abs(f.hz), f.unc, 8)}` : title];
+  const lines = [f ? `${title} — ν = ${withUncertainty(f.hz, f.unc, (v) => frequencyText(v, 9))}, ${lineWavelengthText(f.hz, f.unc, 8)}` : title];
   lines.push(levelLine('lower', line.lower?.name, lower), levelLine('upper', line.upper?.name, upper));
   if (lower && upper) {
     const dTwoJ = Math.round(2 * upper.J) - Math.round(2 * lower.J);

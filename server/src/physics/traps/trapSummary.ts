@@ -40,10 +40,9 @@ const ENERGY_ROUNDOFF = 1e-13;
 /** The swept range reaches this far past the largest |B| sampled (rays can pass a little higher). */
 const CURVE_HEADROOM = 1.5;
 
-const G_PER_CM = 1e-2; // 1 G/cm = 0.01 T/m
-
-function gcm(tPerM: number): string {
-  return `${Number((tPerM / G_PER_CM).toPrecision(3))} G/cm`;
+/** A gradient in SI for this layer's own messages (the trap text rewords them in the trap's unit). */
+function tpm(tPerM: number): string {
+  return `${Number(tPerM.toPrecision(3))} T/m`;
 }
 
 function invalid(input: TrapInput): TrapIssue | undefined {
@@ -137,7 +136,9 @@ function sublevelTrap(
     return { ...base, lowFieldSeeking: false, momentJT: muCentre, trapped: false };
   }
   const gravityIssue = (lev: number): void => {
-    issues.push(issue('warning', 'trap-gravity-too-strong', `This trap cannot hold ${name} against gravity: it needs ≥ ${gcm(lev)} along gravity (has ${gcm(survey.gravityGradientTPerM)}).`, name));
+    const has = survey.gravityGradientTPerM;
+    const found = issue('warning', 'trap-gravity-too-strong', `This trap cannot hold ${name} against gravity: it needs ≥ ${tpm(lev)} along gravity (has ${tpm(has)}).`, name);
+    issues.push({ ...found, gravity: { needTPerM: lev, hasTPerM: has } });
   };
   // Gravity wins everywhere when even the largest dE/dB over the region's fields cannot hold the
   // atom with the steepest |B| rise along gravity: no minimum to search for.

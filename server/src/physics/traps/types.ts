@@ -92,6 +92,8 @@ export interface TrapIssue extends EngineIssue {
   sublevel?: string;
   /** A point on a conductor: what meets it (the centre, or a point of the region) and the part's place in the field's list. */
   conductor?: { meets: 'centre' | 'region'; partIndex?: number };
+  /** trap-gravity-too-strong: the |B| gradient along gravity the sublevel needs and the largest the trap has. */
+  gravity?: { needTPerM: number; hasTPerM: number };
 }
 
 export interface TrapSummary {
