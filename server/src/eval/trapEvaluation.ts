@@ -22,7 +22,8 @@ export interface TrapEvaluation {
   problems: Problem[];
 }
 
-export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: SettingsModel): TrapEvaluation {
+/** `fieldUnit`: the unit the file writes fields in elsewhere; the trap's report reads in its family. */
+export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: SettingsModel, fieldUnit?: string): TrapEvaluation {
   const parts: FieldSourceSpec[] = (trap.sources ?? []).flatMap((s) => s.parts);
   const result: TrapResult = {
     name: trap.name,
@@ -32,6 +33,7 @@ export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: Settings
     gravity: trap.gravity.down ? [...trap.gravity.down] : 'off',
     ...(trap.temperatureK ? { temperature_K: trap.temperatureK.value, ...(trap.temperatureK.unit ? { temperature_unit: trap.temperatureK.unit } : {}) } : {}),
     ...(trap.cutJ ? { cut_J: trap.cutJ.value, ...(trap.cutJ.unit ? { cut_unit: trap.cutJ.unit } : {}) } : {}),
+    ...(fieldUnit ? { field_unit: fieldUnit } : {}),
     sublevels: [],
     cautions: trapCautions(),
   };
