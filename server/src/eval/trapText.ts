@@ -66,11 +66,19 @@ export function trapInputsText(t: TrapResult): string[] {
 }
 
 function cutInUnit(t: TrapResult): string {
-  const unit = t.cut_unit!;
-  const asT = inWrittenUnit(t.cut_J! / BOLTZMANN_K, 'temperature', unit, 5);
+  return cutEnergyText(t.cut_J!, t.cut_unit);
+}
+
+/**
+ * An energy beside a trap's cut, in the unit the cut was written in (a temperature or a frequency-like
+ * unit), else as a temperature with a prefix; 5 significant digits.
+ */
+export function cutEnergyText(joules: number, unit: string | undefined): string {
+  if (unit === undefined) return temperatureText(joules / BOLTZMANN_K, 5);
+  const asT = inWrittenUnit(joules / BOLTZMANN_K, 'temperature', unit, 5);
   if (asT) return asT;
-  const asF = inWrittenUnit(t.cut_J! / PLANCK_H, 'frequency-like', unit, 5);
-  return asF ?? `${trimNumber(t.cut_J!, 5)} J (${displayUnit(unit)})`;
+  const asF = inWrittenUnit(joules / PLANCK_H, 'frequency-like', unit, 5);
+  return asF ?? `${trimNumber(joules, 5)} J (${displayUnit(unit)})`;
 }
 
 /** The trap's summary in a few lines (hover and report header). */

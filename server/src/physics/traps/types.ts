@@ -92,6 +92,9 @@ export interface TrapIssue extends EngineIssue {
   sublevel?: string;
   /** A point on a conductor: what meets it (the centre, or a point of the region) and the part's place in the field's list. */
   conductor?: { meets: 'centre' | 'region'; partIndex?: number };
+  /** The sublevel's figure the issue is about, carried so a report can quote it without matching labels: its Majorana loss rate (1/s), or its depth (J) beside a cut above it. */
+  majoranaRateHz?: number;
+  depthJ?: number;
 }
 
 export interface TrapSummary {
