@@ -82,6 +82,14 @@ describe('frequencies, fields, lengths', () => {
     [lengthText(NaN), MISSING],
     [lengthText(0.08), '8 cm'],
     [gradientText(180), '180 T/m'],
+    // A forced family (a trap's lines): tesla takes a prefix, never exponent form; gauss stays G, gradients G/cm (1 G/cm = 0.01 T/m).
+    [fieldText(1.2345e-6, 5, undefined, 'T'), '1.2345 µT'],
+    [fieldText(0.0044676, 5, undefined, 'T'), '4.4676 mT'],
+    [fieldText(0.12209, 5, undefined, 'G'), '1220.9 G'],
+    [fieldText(0, 5, undefined, 'G'), '0 G'],
+    [gradientText(0.9597, 4, undefined, 'G'), '95.97 G/cm'],
+    [gradientText(0.1527, 4, undefined, 'T'), '152.7 mT/m'],
+    [gradientText(NaN, 4, undefined, 'G'), MISSING],
     [percentText(1.89e-10, 3, { scale: 1, relative: 1e-6 }), '0 %'],
     [percentText(0.8), '80 %'],
   ])('%s', (got, want) => {

@@ -18,7 +18,7 @@ import { csvTable } from '../render/csv';
 import { FIELD_UNIT_CHOICES, FIELD_UNIT_TESLA, fieldUnitOf, type FieldUnit } from '../render/fieldUnits';
 import { csvNumber } from '../eval/machineText';
 import { lengthUnitFor } from '../eval/lengthUnit';
-import { trimNumber } from '../eval/quantityText';
+import { GAUSS_TESLA_SWITCH_T, trimNumber } from '../eval/quantityText';
 import type { FieldSourceModel, SetupModel } from '../model/types';
 import { conductorOf, magnitudeGradient, sumField } from '../physics/fields';
 import { cleanField } from '../eval/cleanField';
@@ -135,7 +135,7 @@ interface TextUnits {
 
 function textUnits(choice: FieldUnit | undefined, rows: readonly FieldPointRow[]): TextUnits {
   const max = largest(rows, (r) => (r.sample ? [magnitude(r.sample.B)] : []));
-  const unit = choice ?? (max < 0.1 ? 'G' : 'T');
+  const unit = choice ?? (max < GAUSS_TESLA_SWITCH_T ? 'G' : 'T');
   // Gradients per cm beside gauss (the lab's G/cm), per metre beside the tesla family.
   if (unit === 'G') return { field: { name: 'G', factor: FIELD_UNIT_TESLA.G }, gradient: { name: 'G/cm', factor: 1e-2 } };
   const factor = FIELD_UNIT_TESLA[unit];

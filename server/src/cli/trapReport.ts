@@ -1,7 +1,7 @@
 /** The readable report of `sublevel trap` (and the traps part of `sublevel eval`). */
-import { lengthText, MISSING } from '../eval/quantityText';
+import { gradientText, lengthText, MISSING } from '../eval/quantityText';
 import type { TrapResult } from '../eval/trapResultTypes';
-import { depthText, shapeText, shallowDepthNote, sublevelVerdict, trappedSublevelNotes, trapFieldUnit, trapGradientText, trapSummaryLines } from '../eval/trapText';
+import { depthText, shapeText, shallowDepthNote, sublevelVerdict, trappedSublevelNotes, trapFieldUnit, trapSummaryLines } from '../eval/trapText';
 import { table } from './table';
 
 export function trapReport(t: TrapResult): string[] {
@@ -15,7 +15,7 @@ export function trapReport(t: TrapResult): string[] {
       t.sublevels.map((s) => [
         `|${s.label}⟩`,
         sublevelVerdict(s, unit),
-        s.levitation_T_per_m !== undefined ? trapGradientText(unit, s.levitation_T_per_m) : MISSING,
+        s.levitation_T_per_m !== undefined ? gradientText(s.levitation_T_per_m, 4, undefined, unit) : MISSING,
         s.trapped ? depthText(s) : MISSING,
         s.sag_m !== undefined ? lengthText(s.sag_m, 3, { scale: radius }) : MISSING,
         s.trapped ? shapeText(s, unit) : MISSING,

@@ -75,7 +75,7 @@ export function evaluate(model: SetupModel, earlier: Problem[], stop?: StopCheck
   const fitProblems: Problem[] = [];
   const fits = model.fits.map((f) => (stopIfAsked(stop), evaluateFit(f, gJOf, fitProblems)));
   const sourceProblems: Problem[] = [];
-  // Sources print fields in the unit family the file writes fields in (the first field or magnet that gives a unit).
+  // Sources and traps print fields in the unit family the file writes fields in (the first field or magnet that gives a unit).
   const fieldUnit = fields.find((f) => f.unit !== undefined)?.unit;
   stopIfAsked(stop);
   const fieldSources = model.sources.map((s) => evaluateFieldSource(sourceEvalInput(s, fieldUnit), sumField, sourceProblems));
@@ -84,7 +84,7 @@ export function evaluate(model: SetupModel, earlier: Problem[], stop?: StopCheck
   const trapProblems: Problem[] = [];
   const traps = model.traps.map((t) => {
     stopIfAsked(stop);
-    const e = evaluateTrap(t, gJOf, model.settings);
+    const e = evaluateTrap(t, gJOf, model.settings, fieldUnit);
     trapProblems.push(...e.problems);
     return e.result;
   });

@@ -5,7 +5,7 @@
  */
 import type { FieldSourceResult } from './fieldSourceResultTypes';
 import { lengthUnitFor, type LengthUnit } from './lengthUnit';
-import { gradientText, lengthText, MISSING, trimNumber } from './quantityText';
+import { GAUSS_TESLA_SWITCH_T, gradientText, lengthText, MISSING, trimNumber } from './quantityText';
 import { isGaussUnit } from './writtenUnit';
 
 const AXES = ['x', 'y', 'z'] as const;
@@ -15,7 +15,7 @@ const AXES = ['x', 'y', 'z'] as const;
  * tesla), else the lab habit (gauss below 0.1 T), with the prefix that suits |B|.
  */
 export function fieldVectorUnit(absT: number, written: string | undefined): { factor: number; symbol: string } {
-  const gauss = written !== undefined ? isGaussUnit(written) : absT < 0.1;
+  const gauss = written !== undefined ? isGaussUnit(written) : absT < GAUSS_TESLA_SWITCH_T;
   if (gauss) return absT !== 0 && absT < 1e-4 ? { factor: 1e-7, symbol: 'mG' } : { factor: 1e-4, symbol: 'G' };
   if (absT === 0 || absT >= 1) return { factor: 1, symbol: 'T' };
   return absT >= 1e-3 ? { factor: 1e-3, symbol: 'mT' } : { factor: 1e-6, symbol: 'µT' };

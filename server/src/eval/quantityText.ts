@@ -105,13 +105,28 @@ export function curvatureText(hzPerT2: number | null | undefined, digits = 7, no
   return prefixedText(hzPerT2 === null || hzPerT2 === undefined ? hzPerT2 : hzPerT2 * 1e-8, 'Hz/G²', { digits, noise: noise && { ...noise, scale: noise.scale * 1e-8 } });
 }
 
-/** A flux density in T, or G / mG below 0.1 T (the lab habit for bias fields). */
-export function fieldText(tesla: number | null | undefined, digits = 6, noise?: NoiseFloor): string {
+/**
+ * The one gauss/tesla switch (the lab habit: bias fields in gauss, magnet fields in tesla): a field
+ * read in the gauss family reads in tesla from here on (fields, reports, figure axes).
+ */
+export const GAUSS_TESLA_SWITCH_T = 0.1;
+
+/** A field's unit family: gauss (G, with G/cm gradients) or tesla (T with a prefix, T/m). */
+export type FieldFamily = 'G' | 'T';
+
+/**
+ * A flux density in T, or G / mG below GAUSS_TESLA_SWITCH_T (the lab habit for bias fields).
+ * `unit` forces a family for values read beside others: 'G' in gauss (0 reads "0 G"), 'T' in
+ * tesla with the prefix that suits (µT, mT, never 1.2e-6 T).
+ */
+export function fieldText(tesla: number | null | undefined, digits = 6, noise?: NoiseFloor, unit?: FieldFamily): string {
   const v = cleanValue(tesla, noise);
   if (v === undefined) return MISSING;
+  if (unit === 'G') return `${trimNumber(v * 1e4, digits)} G`;
+  if (unit === 'T') return prefixedText(v, 'T', { digits, noise });
   const a = Math.abs(v);
   if (a === 0) return '0 T';
-  if (a >= 0.1) return `${trimNumber(v, digits)} T`;
+  if (a >= GAUSS_TESLA_SWITCH_T) return `${trimNumber(v, digits)} T`;
   if (a >= 1e-4) return `${trimNumber(v * 1e4, digits)} G`;
   return `${trimNumber(v * 1e4 * 1e3, digits)} mG`;
 }
@@ -124,8 +139,12 @@ export function lengthText(m: number | null | undefined, digits = 4, noise?: Noi
   return `${trimNumber(v / u.metres, digits)} ${u.symbol}`;
 }
 
-/** A field gradient in T/m (or mT/m when small). */
-export function gradientText(tPerM: number | null | undefined, digits = 5, noise?: NoiseFloor): string {
+/** A field gradient in T/m (or mT/m when small); `unit` 'G' gives the lab's G/cm (beside gauss fields). */
+export function gradientText(tPerM: number | null | undefined, digits = 5, noise?: NoiseFloor, unit?: FieldFamily): string {
+  if (unit === 'G') {
+    const v = cleanValue(tPerM, noise);
+    return v === undefined ? MISSING : `${trimNumber(v * 100, digits)} G/cm`;
+  }
   return prefixedText(tPerM, 'T/m', { digits, noise });
 }
 

@@ -14,7 +14,7 @@ import type { TrapModel } from '../model/trapTypes';
 import type { GJLookup } from './gJLookup';
 import { engineSpec } from './levelSpec';
 import type { TrapResult, TrapSublevelResult } from './trapResultTypes';
-import { ZERO_FIELD_CODE, zeroFieldProblem } from './trapZeroField';
+import { mergedTrapProblem, PER_TRAP_CODES, ZERO_FIELD_CODE } from './trapSublevelFindings';
 import { gravityTooStrongText, trapFieldUnitFor } from './trapText';
 
 export interface TrapEvaluation {
@@ -23,7 +23,8 @@ export interface TrapEvaluation {
   problems: Problem[];
 }
 
-export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: SettingsModel): TrapEvaluation {
+/** `fieldUnit`: the unit the file writes fields in elsewhere; the trap's report reads in its family. */
+export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: SettingsModel, fieldUnit?: string): TrapEvaluation {
   const parts: FieldSourceSpec[] = (trap.sources ?? []).flatMap((s) => s.parts);
   const result: TrapResult = {
     name: trap.name,
@@ -33,6 +34,7 @@ export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: Settings
     gravity: trap.gravity.down ? [...trap.gravity.down] : 'off',
     ...(trap.temperatureK ? { temperature_K: trap.temperatureK.value, ...(trap.temperatureK.unit ? { temperature_unit: trap.temperatureK.unit } : {}) } : {}),
     ...(trap.cutJ ? { cut_J: trap.cutJ.value, ...(trap.cutJ.unit ? { cut_unit: trap.cutJ.unit } : {}) } : {}),
+    ...(fieldUnit ? { field_unit: fieldUnit } : {}),
     sublevels: [],
     cautions: trapCautions(),
   };
@@ -57,14 +59,9 @@ export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: Settings
     ...(trap.cutJ ? { cutJ: trap.cutJ.value } : {}),
   });
   // The gravity finding reads its gradients in the unit the trap's report uses (trapText.trapFieldUnit).
-  const unit = trapFieldUnitFor(Math.max(Math.abs(summary.fieldRangeT[1]), Math.abs(summary.fieldAtCentreT)));
-  for (const i of summary.issues) if (i.code !== ZERO_FIELD_CODE) problems.push(toProblem(trap, i.gravity && i.sublevel !== undefined ? { ...i, message: gravityTooStrongText(i.sublevel, i.gravity, unit) } : i));
-  const zero = summary.issues.filter((i) => i.code === ZERO_FIELD_CODE);
-  if (zero.length > 0) {
-    // A temperature written but not usable (wrong unit, not above 0) has its own error; this finding points at it.
-    const unusable = trap.temperatureK ? undefined : settingRange(trap, 'temperature');
-    problems.push(zeroFieldProblem(trap, zero, summary.sublevels, toProblem(trap, zero[0]!).severity, unusable));
-  }
+  const unit = trapFieldUnitFor(Math.max(Math.abs(summary.fieldRangeT[1]), Math.abs(summary.fieldAtCentreT)), fieldUnit);
+  for (const i of summary.issues) if (!PER_TRAP_CODES.has(i.code)) problems.push(toProblem(trap, i.gravity && i.sublevel !== undefined ? { ...i, message: gravityTooStrongText(i.sublevel, i.gravity, unit) } : i));
+  problems.push(...perTrapProblems(trap, summary.issues));
   if (summary.sublevels.length === 0) return { result, summary, problems };
   result.computed = true;
   // Below the searches' own precision a position or a field is round-off: written as 0.
@@ -129,6 +126,24 @@ function sublevelResult(s: SublevelTrap, noise: { lengthM: number; fieldT: numbe
 function axesOf(a: readonly [Vec3, Vec3, Vec3]): TrapSublevelResult['axes'] {
   const clean = (v: Vec3): [number, number, number] => [v[0], v[1], v[2]].map((x) => (Math.abs(x) < 1e-12 ? 0 : x)) as [number, number, number];
   return [clean(a[0]), clean(a[1]), clean(a[2])];
+}
+
+/** The sublevel-by-sublevel issues of PER_TRAP_CODES, one finding per code, in the order the core first reports each. */
+function perTrapProblems(trap: TrapModel, issues: readonly TrapIssue[]): Problem[] {
+  const codes = [...new Set(issues.map((i) => i.code).filter((c) => PER_TRAP_CODES.has(c)))];
+  return codes.map((code) => {
+    const mine = issues.filter((i) => i.code === code);
+    const first = toProblem(trap, mine[0]!);
+    // A temperature written but not usable (wrong unit, not above 0) has its own error; the zero-field finding points at it.
+    const unusable = code === ZERO_FIELD_CODE && !trap.temperatureK ? settingRange(trap, 'temperature') : undefined;
+    return mergedTrapProblem(code, mine, {
+      trap,
+      severity: first.severity,
+      range: first.range,
+      ...(unusable ? { temperatureRange: unusable } : {}),
+      ...(trap.cutJ?.unit ? { cutUnit: trap.cutJ.unit } : {}),
+    });
+  });
 }
 
 function settingRange(trap: TrapModel, key: string): Range | undefined {

@@ -44,6 +44,8 @@ export interface TrapResult {
   temperature_unit?: string;
   cut_J?: number;
   cut_unit?: string;
+  /** The unit the file writes fields in elsewhere (its first field or magnet with a unit), for reports. */
+  field_unit?: string;
   field_centre_m?: [number, number, number];
   field_at_centre_T?: number;
   field_max_T?: number;

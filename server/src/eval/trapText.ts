@@ -1,56 +1,39 @@
 /**
  * Words and numbers for trap results, shared by the CLI report and the hover: fields and gradients
- * in one unit per trap (trapFieldUnit), temperatures with a prefix, the depth three ways.
+ * in one unit family per trap (trapFieldUnit), temperatures with a prefix, the depth three ways.
  */
 import { BOLTZMANN_K, PLANCK_H } from '../physics/constants';
 import { ZERO_FIELD_FRACTION } from '../physics/traps';
-import { cleanValue, frequencyText, lengthText, MISSING, trimNumber, type NoiseFloor } from './quantityText';
+import { fieldText, frequencyText, GAUSS_TESLA_SWITCH_T, gradientText, lengthText, MISSING, trimNumber, type FieldFamily } from './quantityText';
 import type { TrapResult, TrapSublevelResult } from './trapResultTypes';
 import { pointText } from './fieldSourceText';
 import { lengthUnitFor } from './lengthUnit';
-import { displayUnit, inWrittenUnit } from './writtenUnit';
+import { displayUnit, inWrittenUnit, isGaussUnit } from './writtenUnit';
 
-/** A |B| gradient in G/cm. */
-export function gaussPerCmText(tPerM: number | null | undefined, digits = 4): string {
-  if (tPerM === null || tPerM === undefined || !Number.isFinite(tPerM)) return MISSING;
-  return `${trimNumber(tPerM * 100, digits)} G/cm`;
-}
-
-/** The one field unit of a trap's lines; its gradients go per cm beside gauss, per metre beside tesla. */
-export type TrapFieldUnit = 'G' | 'T';
+/** The one field unit family of a trap's lines: gauss with G/cm, or tesla (with a prefix) with T/m. */
+export type TrapFieldUnit = FieldFamily;
 
 /**
- * A trap's fields (minimum, largest, turning, cut) and gradients read in one unit, so 0.05 T never
- * sits beside 1200 G: tesla when the largest |B| in the trap's region reaches 0.1 T (the shared
- * formatter's switch), gauss otherwise. A trap block writes no field of its own, so the region's
- * field chooses; a turning field past it (⁸⁷Rb |1,−1⟩ at 1220.9 G) follows the region's unit.
+ * A trap's fields (minimum, largest, turning, cut) and gradients read in one unit family, so 0.05 T
+ * never sits beside 1200 G. The family is the one the file writes fields in elsewhere (its first
+ * `field` block or magnet's `field` with a unit, as for field sources: docs/fields.md); in the gauss
+ * family (and when the file writes no field) the shared switch applies: tesla once the largest |B|
+ * in the trap's region reaches GAUSS_TESLA_SWITCH_T. A trap block writes no field of its own, so the
+ * region's field chooses; a turning field past it (⁸⁷Rb |1,−1⟩ at 1220.9 G) follows the region's unit.
  */
 export function trapFieldUnit(t: TrapResult): TrapFieldUnit {
-  return trapFieldUnitFor(Math.max(Math.abs(t.field_max_T ?? 0), Math.abs(t.field_at_centre_T ?? 0)));
+  return trapFieldUnitFor(Math.max(Math.abs(t.field_max_T ?? 0), Math.abs(t.field_at_centre_T ?? 0)), t.field_unit);
 }
 
-/** The unit of a trap whose largest |B| is `largestT`: T from 0.1 T up, else G. */
-export function trapFieldUnitFor(largestT: number): TrapFieldUnit {
-  return Number.isFinite(largestT) && Math.abs(largestT) >= 0.1 ? 'T' : 'G';
+/** The unit family of a trap whose largest |B| is `largestT`, in a file that writes fields in `fieldUnit`. */
+export function trapFieldUnitFor(largestT: number, fieldUnit?: string): TrapFieldUnit {
+  if (fieldUnit !== undefined && !isGaussUnit(fieldUnit)) return 'T';
+  return Number.isFinite(largestT) && Math.abs(largestT) >= GAUSS_TESLA_SWITCH_T ? 'T' : 'G';
 }
 
 /** trap-gravity-too-strong in the trap's own gradient unit (the physics core gives the numbers). */
 export function gravityTooStrongText(sublevel: string, g: { needTPerM: number; hasTPerM: number }, unit: TrapFieldUnit): string {
-  return `This trap cannot hold ${sublevel} against gravity: it needs ≥ ${trapGradientText(unit, g.needTPerM, 3)} along gravity (has ${trapGradientText(unit, g.hasTPerM, 3)}).`;
-}
-
-/** A field of a trap in its unit (0 reads "0 G" in a gauss trap). */
-export function trapFieldText(unit: TrapFieldUnit, tesla: number | null | undefined, digits = 5, noise?: NoiseFloor): string {
-  const v = cleanValue(tesla, noise);
-  if (v === undefined) return MISSING;
-  return unit === 'T' ? `${trimNumber(v, digits)} T` : `${trimNumber(v * 1e4, digits)} G`;
-}
-
-/** A |B| gradient of a trap: G/cm in a gauss trap, T/m in a tesla one. */
-export function trapGradientText(unit: TrapFieldUnit, tPerM: number | null | undefined, digits = 4): string {
-  if (unit === 'G') return gaussPerCmText(tPerM, digits);
-  const v = cleanValue(tPerM);
-  return v === undefined ? MISSING : `${trimNumber(v, digits)} T/m`;
+  return `This trap cannot hold ${sublevel} against gravity: it needs ≥ ${gradientText(g.needTPerM, 3, undefined, unit)} along gravity (has ${gradientText(g.hasTPerM, 3, undefined, unit)}).`;
 }
 
 /** A temperature in K, mK, µK or nK. */
@@ -73,7 +56,7 @@ export function depthText(s: TrapSublevelResult): string {
 /** Frequencies or linear gradients of a trapped sublevel. */
 export function shapeText(s: TrapSublevelResult, unit: TrapFieldUnit = 'G'): string {
   if (s.shape === 'harmonic' && s.frequencies_Hz) return `harmonic ${s.frequencies_Hz.map((f) => frequencyText(f, 4)).join(', ')}`;
-  if (s.shape === 'linear' && s.gradients_T_per_m) return `linear (no harmonic frequency): |B| gradients ${s.gradients_T_per_m.map((g) => trapGradientText(unit, g)).join(', ')}`;
+  if (s.shape === 'linear' && s.gradients_T_per_m) return `linear (no harmonic frequency): |B| gradients ${s.gradients_T_per_m.map((g) => gradientText(g, 4, undefined, unit)).join(', ')}`;
   return MISSING;
 }
 
@@ -81,7 +64,7 @@ export function shapeText(s: TrapSublevelResult, unit: TrapFieldUnit = 'G'): str
 export function sublevelVerdict(s: TrapSublevelResult, unit: TrapFieldUnit = 'G'): string {
   if (s.trapped) return 'trapped';
   if (!s.low_field_seeking) return 'not low-field seeking';
-  return s.levitation_T_per_m !== undefined ? `not held (needs ${trapGradientText(unit, s.levitation_T_per_m)} along gravity)` : 'not held';
+  return s.levitation_T_per_m !== undefined ? `not held (needs ${gradientText(s.levitation_T_per_m, 4, undefined, unit)} along gravity)` : 'not held';
 }
 
 /** The trap's cloud temperature and cut as the file wrote them. */
@@ -93,11 +76,19 @@ export function trapInputsText(t: TrapResult): string[] {
 }
 
 function cutInUnit(t: TrapResult): string {
-  const unit = t.cut_unit!;
-  const asT = inWrittenUnit(t.cut_J! / BOLTZMANN_K, 'temperature', unit, 5);
+  return cutEnergyText(t.cut_J!, t.cut_unit);
+}
+
+/**
+ * An energy beside a trap's cut, in the unit the cut was written in (a temperature or a frequency-like
+ * unit), else as a temperature with a prefix; 5 significant digits.
+ */
+export function cutEnergyText(joules: number, unit: string | undefined): string {
+  if (unit === undefined) return temperatureText(joules / BOLTZMANN_K, 5);
+  const asT = inWrittenUnit(joules / BOLTZMANN_K, 'temperature', unit, 5);
   if (asT) return asT;
-  const asF = inWrittenUnit(t.cut_J! / PLANCK_H, 'frequency-like', unit, 5);
-  return asF ?? `${trimNumber(t.cut_J!, 5)} J (${displayUnit(unit)})`;
+  const asF = inWrittenUnit(joules / PLANCK_H, 'frequency-like', unit, 5);
+  return asF ?? `${trimNumber(joules, 5)} J (${displayUnit(unit)})`;
 }
 
 /** The region's radius and centre in one length unit (the larger's): `region 5.091 cm about (0, 0, 0) cm`. */
@@ -122,7 +113,7 @@ export function trapSummaryLines(t: TrapResult): string[] {
   const floor = { scale: t.field_max_T ?? 0, relative: ZERO_FIELD_FRACTION };
   const unit = trapFieldUnit(t);
   out.push(
-    `field minimum ${trapFieldText(unit, t.field_at_centre_T, 5, floor)} at ${pointText(t.field_centre_m!)}; up to ${trapFieldText(unit, t.field_max_T, 5)} in the region; |B| gradient along gravity up to ${trapGradientText(unit, t.gravity_gradient_T_per_m)}`,
+    `field minimum ${fieldText(t.field_at_centre_T, 5, floor, unit)} at ${pointText(t.field_centre_m!)}; up to ${fieldText(t.field_max_T, 5, undefined, unit)} in the region; |B| gradient along gravity up to ${gradientText(t.gravity_gradient_T_per_m, 4, undefined, unit)}`,
   );
   const held = t.sublevels.filter((s) => s.trapped).map((s) => `|${s.label}⟩`);
   out.push(held.length > 0 ? `trapped: ${held.join(', ')}` : 'trapped: none');
@@ -138,11 +129,11 @@ export function trappedSublevelNotes(t: TrapResult): string[] {
   const unit = trapFieldUnit(t);
   for (const s of t.sublevels.filter((x) => x.trapped)) {
     const notes: string[] = [];
-    if (s.field_at_minimum_T !== undefined) notes.push(`|B| at the minimum ${trapFieldText(unit, s.field_at_minimum_T, 5, { scale: t.field_max_T ?? 0, relative: 1e-6 })}`);
-    if (s.turning_field_T !== undefined) notes.push(`turns high-field seeking at ${trapFieldText(unit, s.turning_field_T, 5)}`);
+    if (s.field_at_minimum_T !== undefined) notes.push(`|B| at the minimum ${fieldText(s.field_at_minimum_T, 5, { scale: t.field_max_T ?? 0, relative: 1e-6 }, unit)}`);
+    if (s.turning_field_T !== undefined) notes.push(`turns high-field seeking at ${fieldText(s.turning_field_T, 5, undefined, unit)}`);
     if (s.larmor_Hz !== undefined) notes.push(`Larmor ${frequencyText(s.larmor_Hz, 4)}`);
     if (s.cloud_sizes_m) notes.push(`cloud 1/e sizes ${s.cloud_sizes_m.map((x) => lengthText(x, 3)).join(', ')}`);
-    if (s.rf_cut) notes.push(`RF cut ${frequencyText(s.rf_cut.frequency_Hz, 7)} to |${s.rf_cut.to}⟩ at ${trapFieldText(unit, s.rf_cut.field_T, 5)} (linear rule ${frequencyText(s.rf_cut.linear_Hz, 7)})`);
+    if (s.rf_cut) notes.push(`RF cut ${frequencyText(s.rf_cut.frequency_Hz, 7)} to |${s.rf_cut.to}⟩ at ${fieldText(s.rf_cut.field_T, 5, undefined, unit)} (linear rule ${frequencyText(s.rf_cut.linear_Hz, 7)})`);
     if (s.majorana) notes.push(`Majorana loss ≈ ${trimNumber(s.majorana.rate_per_s, 2)} /s (lifetime ${lifetime(s.majorana.rate_per_s)})`);
     if (notes.length > 0) out.push(`|${s.label}⟩: ${notes.join('; ')}`);
   }

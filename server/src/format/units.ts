@@ -271,6 +271,17 @@ function toSI(value: number, unit: UnitValue, d: Dimension): number | undefined 
   return si;
 }
 
+/**
+ * What a frequency-like unit writes: a frequency (Hz, MHz), a wavenumber (cm^-1) or an energy (eV, J);
+ * undefined for a unit of another dimension. Lets a message or a fix name each unit's own kind.
+ */
+export function frequencyKindOf(unitText: string): 'frequency' | 'wavenumber' | 'energy' | undefined {
+  const e = evaluateUnit(unitText);
+  if (!e.ok || e.value.offsetUnit) return undefined;
+  const base = FREQUENCY_BASES.find(([, dims]) => sameDims(dims, e.value.dims))?.[0];
+  return base === 'Hz' ? 'frequency' : base === 'per-m' ? 'wavenumber' : base === 'J' ? 'energy' : undefined;
+}
+
 /** Unit names (completion's list) whose dimension is the one expected. */
 function unitNamesOf(expected: Dimension): string[] {
   return COMMON_UNITS.filter((name) => {

@@ -1,6 +1,9 @@
 /** Builds `trap` blocks (docs/traps.md): which sources, which level, gravity, the region, temperature and the RF cut. */
 import type { BlockNode, Problem, SettingNode } from '../format/ast';
-import { readQuantity } from '../format/units';
+import { makeProblem } from '../format/codes';
+import { canonicalUnitName, isOffsetUnit } from '../format/unitGrammar';
+import { frequencyKindOf, readQuantity } from '../format/units';
+import { listWords } from '../physics/listWords';
 import { BOLTZMANN_K, PLANCK_H } from '../physics/constants';
 import type { NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
@@ -83,10 +86,16 @@ function readGravity(s: SettingNode, trap: TrapModel, problems: ProblemList): vo
   if (d) trap.gravity = { down: d.value, range: s.valueText.range };
 }
 
-/** The knife's energy written as a temperature (E = k_B T) or a frequency (E = h ν). */
+/** The knife's energy written as a temperature (E = k_B T) or a frequency, wavenumber or energy (E = h ν). */
 function readCut(s: SettingNode, problems: ProblemList): Valued<number> | undefined {
   const part = singlePart(s, problems, 'RF cut, e.g. 1 mK or 20 MHz');
   if (!part) return undefined;
+  // A temperature reads degC as a point on a scale (3 degC = 276.15 K); a cut is a difference above the bottom.
+  if (part.kind === 'quantity' && isOffsetUnit(canonicalUnitName(part.unit.text) ?? '')) {
+    const message = `cut needs an energy above the trap's bottom, not a reading on a temperature scale: got ${part.unit.text}; write it in ${listWords(CUT_TEMPERATURE_UNITS)} (E = k_B T)`;
+    problems.push(makeProblem('unit-wrong-dimension', message, part.unit.range, { data: { suggestions: [...CUT_TEMPERATURE_UNITS] } }));
+    return undefined;
+  }
   const unit = part.kind === 'quantity' ? { unit: part.unit.text } : {};
   const asT = readQuantity(part, 'temperature');
   if (!asT.problem && asT.si !== undefined) return checkCut(s, { value: BOLTZMANN_K * asT.si, source: 'this file', range: part.range, ...unit }, problems);
@@ -107,14 +116,21 @@ function readCut(s: SettingNode, problems: ProblemList): Valued<number> | undefi
 /** Temperatures a knife is written in (no degC: a cut is an energy above the bottom, not a reading on a scale). */
 const CUT_TEMPERATURE_UNITS = ['mK', 'uK', 'K'] as const;
 
-/** A cut in a unit of neither allowed kind: one message naming both, the fixes of both kinds, each fix labelled with its kind. */
+/** "a frequency", "a wavenumber", "an energy": what a frequency-like unit writes. */
+const KIND_WORDS = { frequency: 'a frequency', wavenumber: 'a wavenumber', energy: 'an energy' } as const;
+
+/** A cut in a unit of no allowed kind: one message naming the kinds, the fixes of each, each fix labelled with its own kind. */
 function neitherKindProblem(frequencyProblem: Problem, written: string, frequencyUnits: readonly string[]): Problem {
   const kinds: Record<string, string> = {};
   for (const u of CUT_TEMPERATURE_UNITS) kinds[u] = 'a temperature';
-  for (const u of frequencyUnits) kinds[u] = kinds[u] ?? 'a frequency';
+  for (const u of frequencyUnits) {
+    const kind = frequencyKindOf(u);
+    kinds[u] = kinds[u] ?? (kind ? KIND_WORDS[kind] : 'a frequency');
+  }
+  const others = [...new Set(frequencyUnits.map((u) => kinds[u]!))];
   return {
     ...frequencyProblem,
-    message: `cut needs an energy above the trap's bottom, written as a temperature (${CUT_TEMPERATURE_UNITS.join(', ')}) or as a frequency (${frequencyUnits.join(', ')}); got ${written}, which is neither`,
+    message: `cut needs an energy above the trap's bottom, written as a temperature (${CUT_TEMPERATURE_UNITS.join(', ')}) or as ${listWords(others)} (${frequencyUnits.join(', ')}); got ${written}, which is none of these`,
     data: { suggestions: Object.keys(kinds), kinds },
   };
 }

@@ -3,16 +3,15 @@
  * slowers). The axis keeps the family the file wrote (a lab that writes gauss reads gauss; one
  * that writes µT reads the tesla family) while its tick labels stay short; a gauss axis past
  * 0.1 T (ticks of 1000 G and more, 200000 G at 20 T) reads in T instead, the switch of the shared
- * field formatter (eval/quantityText.ts fieldText). The echo of the user's own value (a marker's
+ * field formatter (eval/quantityText.ts GAUSS_TESLA_SWITCH_T). The echo of the user's own value (a marker's
  * label) keeps the written unit; only the axis changes.
  */
+import { GAUSS_TESLA_SWITCH_T } from '../eval/quantityText';
 import { isGaussUnit } from '../eval/writtenUnit';
 import { displayUnit } from '../eval/unitSpelling';
 import type { FieldUnit } from './fieldUnits';
 import { fieldDisplayUnit } from './units';
 
-/** Above this axis top (T) a gauss axis reads in tesla. */
-export const GAUSS_AXIS_LIMIT_T = 0.1;
 
 /**
  * The axis unit for an axis reaching `upperT`: the written family while it reads short, else by
@@ -20,7 +19,7 @@ export const GAUSS_AXIS_LIMIT_T = 0.1;
  * the tesla prefix that suits.
  */
 export function fieldAxisUnit(upperT: number, writtenUnit?: string): FieldUnit {
-  if (writtenUnit !== undefined && isGaussUnit(writtenUnit)) return upperT >= GAUSS_AXIS_LIMIT_T ? 'T' : 'G';
+  if (writtenUnit !== undefined && isGaussUnit(writtenUnit)) return upperT >= GAUSS_TESLA_SWITCH_T ? 'T' : 'G';
   if (writtenUnit !== undefined && /^[mµμun]?T$/.test(writtenUnit)) return writtenPrefixFits(upperT, writtenUnit) ?? teslaPrefixFor(upperT);
   if (upperT < 1e-4) return teslaPrefixFor(upperT);
   if (upperT < 0.01) return 'G';

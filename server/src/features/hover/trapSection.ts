@@ -2,7 +2,8 @@
  * Hover of a `trap` block: its summary, the per-sublevel verdicts, what each held sublevel's RF cut
  * and Majorana estimate come to, and the cautions in one line (docs/traps.md).
  */
-import { depthText, shallowDepthNote, shapeText, sublevelVerdict, trappedSublevelNotes, trapFieldUnit, trapGradientText, trapSummaryLines } from '../../eval/trapText';
+import { depthText, shallowDepthNote, shapeText, sublevelVerdict, trappedSublevelNotes, trapFieldUnit, trapSummaryLines } from '../../eval/trapText';
+import { gradientText } from '../../eval/quantityText';
 import type { TrapResult } from '../../eval/trapResultTypes';
 import { md } from '../shared/markdown';
 import { cautionLine } from './cautionLine';
@@ -14,7 +15,7 @@ export function trapSection(t: TrapResult): string {
     const unit = trapFieldUnit(t);
     lines.push('', '| sublevel | verdict | levitation | depth | shape |', '|---|---|---|---|---|');
     for (const s of t.sublevels) {
-      const lev = s.levitation_T_per_m !== undefined ? trapGradientText(unit, s.levitation_T_per_m) : '—';
+      const lev = s.levitation_T_per_m !== undefined ? gradientText(s.levitation_T_per_m, 4, undefined, unit) : '—';
       lines.push(`| ${md(`|${s.label}⟩`)} | ${md(sublevelVerdict(s, unit))} | ${lev} | ${s.trapped ? md(depthText(s)) : '—'} | ${s.trapped ? md(shapeText(s, unit)) : '—'} |`);
     }
     const notes = trappedSublevelNotes(t);

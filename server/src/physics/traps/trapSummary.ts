@@ -213,10 +213,10 @@ function sublevelTrap(
     out.shape = shape;
     const m = out.majorana;
     if (m && m.rateHz < MAJORANA_NOTE_RATE) {
-      issues.push(issue('info', 'trap-majorana-slow', `${name} sits at a zero of the field; Majorana spin flips lose about ${Number(m.rateHz.toPrecision(2))} /s at the cloud temperature (a lifetime of ${Number((1 / m.rateHz).toPrecision(2))} s).`, name));
+      issues.push({ ...issue('info', 'trap-majorana-slow', `${name} sits at a zero of the field; Majorana spin flips lose about ${Number(m.rateHz.toPrecision(2))} /s at the cloud temperature (a lifetime of ${Number((1 / m.rateHz).toPrecision(2))} s).`, name), majoranaRateHz: m.rateHz });
     } else {
       const rate = m ? ` (about ${Number(m.rateHz.toPrecision(2))} /s at the cloud temperature)` : '; give the cloud temperature for a loss estimate';
-      issues.push(issue('warning', 'trap-zero-field', `${name} sits at a zero of the field: bias at the minimum is too small, Majorana spin flips lose atoms there${rate}.`, name));
+      issues.push({ ...issue('warning', 'trap-zero-field', `${name} sits at a zero of the field: bias at the minimum is too small, Majorana spin flips lose atoms there${rate}.`, name), ...(m ? { majoranaRateHz: m.rateHz } : {}) });
     }
   } else {
     const step = 1e-4 * Math.max(smooth(found.position), 1e-9 * input.region.radiusM);
@@ -235,7 +235,7 @@ function sublevelTrap(
     const limit = turningFieldT ?? topT;
     const cut = input.cutJ <= depth.depthJ ? rfCut(c, partner, found.fieldT, input.cutJ, limit) : null;
     if (cut) out.rfCut = cut;
-    else issues.push(issue('info', 'trap-cut-outside', `The RF cut is above the trap's depth for ${name}: for it the knife cuts nothing the edge does not.`, name));
+    else issues.push({ ...issue('info', 'trap-cut-outside', `The RF cut is above the trap's depth for ${name}: for it the knife cuts nothing the edge does not.`, name), depthJ: depth.depthJ });
   }
   return out;
 }

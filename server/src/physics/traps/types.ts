@@ -94,6 +94,9 @@ export interface TrapIssue extends EngineIssue {
   conductor?: { meets: 'centre' | 'region'; partIndex?: number };
   /** trap-gravity-too-strong: the |B| gradient along gravity the sublevel needs and the largest the trap has. */
   gravity?: { needTPerM: number; hasTPerM: number };
+  /** The sublevel's figure the issue is about, carried so a report can quote it without matching labels: its Majorana loss rate (1/s), or its depth (J) beside a cut above it. */
+  majoranaRateHz?: number;
+  depthJ?: number;
 }
 
 export interface TrapSummary {
