@@ -21,14 +21,14 @@ describe('a sources-built magnet labels its centre gradient and the beam-average
 
   it('the text report: the magnets table says where its values are taken, the beam says what it averages over', () => {
     expect(report).toContain('selector: field and gradient at the centre of the beam line, (0, 0, 1.5) mm; averaged along the 8 cm of beam line, ∂|B|/∂z is -147.5 T/m (beam main)');
-    expect(report).toMatch(/∂\|B\|\/∂z averaged along the 8 cm of beam line through magnet selector -147\.5 T\/m \(at its centre -147\.4\d T\/m\)/);
+    expect(report).toMatch(/∂\|B\|\/∂z averaged along the 8 cm of beam line through magnet selector is -147\.5 T\/m \(at its centre -147\.4\d T\/m\)/);
     expect(report).not.toContain('mean ∂|B|/∂z');
   });
 
   it('the hover: both gradients, each named', () => {
     const h = plain(hoverText(hover(analysisOf(TEXT), { line: MAGNET_LINE, character: 8 })));
     expect(h).toMatch(/gradient ∂\|B\|\/∂z at the centre of the beam line = -147\.4\d+ T\/m/);
-    expect(h).toContain('gradient ∂|B|/∂z averaged along the 8 cm of beam line (beam main) = -147.5 T/m');
+    expect(h).toContain('gradient ∂|B|/∂z averaged along the 8 cm of beam line: -147.5 T/m (beam main)');
   });
 
   it('the JSON keys are documented as the centre value and the average', () => {

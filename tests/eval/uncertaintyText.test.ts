@@ -1,7 +1,7 @@
 /** The concise `value(unc)` notation of the one quantity formatter. */
 import { describe, expect, it } from 'vitest';
 import { fittedText } from '../../server/src/eval/fitText';
-import { fieldText, frequencyText, lengthText, trimNumber, UNCERTAINTY_DIGITS, withUncertainty, withUncertaintyIfVisible } from '../../server/src/eval/quantityText';
+import { fieldText, frequencyText, lengthText, trimNumber, UNCERTAINTY_DIGITS, uncertaintyVisible, withUncertainty } from '../../server/src/eval/quantityText';
 
 describe('withUncertainty', () => {
   it.each([
@@ -62,20 +62,22 @@ describe('one rule for the digits of an uncertainty (GUM JCGM 100:2008 §7.2.6: 
   });
 });
 
-describe('withUncertaintyIfVisible (short labels)', () => {
-  const f7 = (v: number): string => frequencyText(v, 7);
-  it('hides an uncertainty below half the last digit printed, shows one at or above it', () => {
+describe('uncertaintyVisible (short labels)', () => {
+  it('is true once the uncertainty reaches half the last digit printed', () => {
     // 384.2305 THz at 7 digits: last digit 100 MHz, half of it 50 MHz.
-    expect(withUncertaintyIfVisible(384230484468500, 6.2e3, 7, f7)).toBe('384.2305 THz');
-    expect(withUncertaintyIfVisible(384230484468500, 4.9e7, 7, f7)).toBe('384.2305 THz');
-    expect(withUncertaintyIfVisible(384230484468500, 5e7, 7, f7)).toBe(withUncertainty(384230484468500, 5e7, f7));
-    expect(withUncertaintyIfVisible(384230484468500, 5e7, 7, f7)).toBe('384.230484(50) THz');
+    expect(uncertaintyVisible(384230484468500, 6.2e3, 7)).toBe(false);
+    expect(uncertaintyVisible(384230484468500, 4.9e7, 7)).toBe(false);
+    expect(uncertaintyVisible(384230484468500, 5e7, 7)).toBe(true);
     // The sign does not matter (a line written upper level first has a negative centre).
-    expect(withUncertaintyIfVisible(-384230484468500, 6.2e3, 7, f7)).toBe('-384.2305 THz');
+    expect(uncertaintyVisible(-384230484468500, 5e7, 7)).toBe(true);
+    // 500 nm at 7 digits: last digit 1e-4 nm. 5e-7 nm hidden, 5e-4 nm shown.
+    expect(uncertaintyVisible(500, 5e-7, 7)).toBe(false);
+    expect(uncertaintyVisible(500, 5e-4, 7)).toBe(true);
   });
-  it('without an uncertainty, or for a missing value, it is withUncertainty', () => {
-    expect(withUncertaintyIfVisible(5e14, undefined, 7, f7)).toBe('500 THz');
-    expect(withUncertaintyIfVisible(NaN, 1, 7, f7)).toBe('—');
-    expect(withUncertaintyIfVisible(0, 1e3, 7, f7)).toBe(withUncertainty(0, 1e3, f7));
+  it('is false without an uncertainty, or for a value that is missing or zero', () => {
+    expect(uncertaintyVisible(5e14, undefined, 7)).toBe(false);
+    expect(uncertaintyVisible(5e14, 0, 7)).toBe(false);
+    expect(uncertaintyVisible(NaN, 1, 7)).toBe(false);
+    expect(uncertaintyVisible(0, 1e3, 7)).toBe(false);
   });
 });

@@ -1,6 +1,7 @@
 /**
  * A frequency the data wrote in Hz reads in Hz while the number stays short, and in GHz/MHz with
- * the measured digits once Hz would need exponent form: report, hover and residual hints.
+ * the measured digits once Hz would need exponent form: report and hover (residuals are differences,
+ * printed at 4 digits with a prefix by frequencyText, and never reach exponent form).
  * Demo data: the ⁸⁷Rb clock-pair numbers of examples/fit-rubidium.sublevel, written in Hz.
  */
 import { describe, expect, it } from 'vitest';
@@ -51,6 +52,11 @@ describe('fit frequencies in Hz as written', () => {
   it('the written unit stays while the number is short (kHz, and Hz below 10⁹)', () => {
     expect(measuredText(6834696.976e3, 'Hz', 'kHz')).toBe('6834696.976 kHz');
     expect(measuredText(123456789, 'Hz', 'Hz')).toBe('123456789 Hz');
+  });
+
+  it('past 10⁹ Hz a prefix, with every digit written (up to a double\'s 15) and a fitted value\'s uncertainty', () => {
+    expect(measuredText(6834696976.123, 'Hz', 'Hz')).toBe('6.834696976123 GHz');
+    expect(measuredText(6834678613.6, 'Hz', 'Hz')).toBe('6.8346786136 GHz');
     expect(fittedText(6834678613.6, 5, 'Hz', 'Hz')).toBe('6.8346786136(50) GHz');
   });
 });

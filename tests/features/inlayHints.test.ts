@@ -74,6 +74,14 @@ describe('inlay hints', () => {
     expect(String(hint.label)).toBe('500 THz, λ_vac 599.5849 nm, g_eff 1.167');
   });
 
+  it('a line whose uncertainty reaches the wavelength\'s last digit but not the frequency\'s: both show it', () => {
+    // Invented scenario: 500 THz ± 45 MHz. Half the 7th digit: 50 MHz for ν (hidden alone), 0.00005 nm for λ,
+    // where u(λ) = 599.5849 nm × 45 MHz / 500 THz = 0.000054 nm (shown alone): the hint shows it on both.
+    const text = 'species Demo\n  mass = 40 u\n  level g: 2S1/2  energy = 0 THz\n  level e: 2P°3/2  energy = 500.000000(45) THz\nline L: g -> e\n';
+    const hint = inlayHints(analysisOf(text), ALL).find((h) => String(h.label).includes('λ_vac'))!;
+    expect(String(hint.label)).toBe('500.000000(45) THz, λ_vac 599.584916(54) nm, g_eff 1.167');
+  });
+
   it('gives no hints for an invalid level', () => {
     expect(inlayHints(analysisOf('species Na23\n  level x: 3p 2P°5/2\n'), ALL)).toEqual([]);
   });

@@ -262,7 +262,7 @@ function fieldMapLines(m: NonNullable<BeamResult['field_map']>, name: string | u
   const adiabatic = ratio === null ? 'the field passes through zero' : `${ratio < 1e-3 ? 'below 0.001' : trimNumber(ratio, 2)} (limit ${trimNumber(m.adiabatic_limit, 2)})`;
   return [
     `  deflections from ${m.flights} flights through the sources' field (field map), peaks at the reference speed ${speedText(m.reference_speed_m_per_s)}`,
-    `  |B| on the beam line ${fieldText(m.field_on_line_min_T, 4)} … ${fieldText(m.field_on_line_max_T, 4)}; ∂|B|/∂z averaged along ${averagedOverText(magnet)} through magnet ${name ?? '?'} ${gradientText(m.mean_gradient_T_per_m, 4)}${magnet?.gradient_T_per_m !== undefined ? ` (at its centre ${gradientText(magnet.gradient_T_per_m, 5)})` : ''}, changing ${percentText(m.gradient_variation, 2)} across the beam; field turning rate / Larmor frequency ${adiabatic}`,
+    `  |B| on the beam line ${fieldText(m.field_on_line_min_T, 4)} … ${fieldText(m.field_on_line_max_T, 4)}; ∂|B|/∂z averaged along ${averagedOverText(magnet)} through magnet ${name ?? '?'} is ${gradientText(m.mean_gradient_T_per_m, 4)}${magnet?.gradient_T_per_m !== undefined ? ` (at its centre ${gradientText(magnet.gradient_T_per_m, 5)})` : ''}, changing ${percentText(m.gradient_variation, 2)} across the beam; field turning rate / Larmor frequency ${adiabatic}`,
   ];
 }
 

@@ -42,8 +42,12 @@ export function parameterText(p: FitParameterResult): string {
   return fittedText(p.value, p.uncertainty, p.unit, p.written_unit);
 }
 
-/** A measured value in the unit the data were written in (`written`, e.g. kHz), else Hz with a prefix; counts as numbers. */
-export function measuredText(value: number | null | undefined, unit: string, written?: string, digits = 10): string {
+/**
+ * A measured value in the unit the data were written in (`written`, e.g. kHz), else Hz with a prefix; counts as numbers.
+ * At a double's 15 significant digits with trailing zeros trimmed, a number written with up to 15 digits reads back as
+ * written (a decimal of ≤ 15 digits survives the round trip through a double), so every measured digit is kept.
+ */
+export function measuredText(value: number | null | undefined, unit: string, written?: string, digits = 15): string {
   return unit === 'Hz' ? fittedText(value, undefined, 'Hz', written, digits) : trimNumber(value, digits);
 }
 

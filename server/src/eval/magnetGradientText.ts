@@ -13,13 +13,16 @@ export function averagedOverText(magnet: MagnetResult | undefined): string {
   return magnet?.length_m !== undefined ? `the ${lengthText(magnet.length_m)} of beam line` : 'the beam line';
 }
 
+/** The gradient each beam through the magnet averages along its length, with the beam's name: "10.1 T/m (beam main)". */
+export function averagedGradients(m: MagnetResult, beams: readonly BeamResult[], name: (beam: string) => string = (b) => b): string[] {
+  return beams.filter((b) => b.magnet === m.name && b.field_map).map((b) => `${gradientText(b.field_map!.mean_gradient_T_per_m, 4)} (beam ${name(b.name)})`);
+}
+
 /** Where a sources-built magnet's field and gradient are taken, and what the beams through it average; undefined for a magnet with written values (uniform, the same everywhere). */
 export function magnetGradientNote(m: MagnetResult, beams: readonly BeamResult[]): string | undefined {
   if (!m.sources) return undefined;
   const at = m.at_m ? pointText(m.at_m) : 'the origin';
-  const averaged = beams
-    .filter((b) => b.magnet === m.name && b.field_map)
-    .map((b) => `${gradientText(b.field_map!.mean_gradient_T_per_m, 4)} (beam ${b.name})`);
+  const averaged = averagedGradients(m, beams);
   const tail = averaged.length > 0 ? `; averaged along ${averagedOverText(m)}, ∂|B|/∂z is ${averaged.join(', ')}` : '';
   return `field and gradient at the centre of the beam line, ${at}${tail}`;
 }

@@ -210,15 +210,13 @@ export function withUncertainty(value: number | null | undefined, unc: number | 
 }
 
 /**
- * For short labels (inlay hints): `format(value)` at its `digits` significant digits while the
- * uncertainty stays below half the last of them (it would not change a printed digit), else
- * withUncertainty. `format` prints `digits` significant digits. A line's frequency and its
- * wavelength use it together, so either both show their uncertainty or neither does.
+ * For short labels (inlay hints): whether `unc` reaches half the last of `digits` significant
+ * digits of `value`, i.e. would change a printed digit. A line's hint asks it of its frequency and
+ * of its wavelength and shows the uncertainty on both when either needs it, so the two agree.
  */
-export function withUncertaintyIfVisible(value: number | null | undefined, unc: number | null | undefined, digits: number, format: (v: number) => string): string {
-  if (value === null || value === undefined || !Number.isFinite(value) || value === 0 || unc === null || unc === undefined) return withUncertainty(value, unc, format);
-  const halfLastDigit = 0.5 * 10 ** (Math.floor(Math.log10(Math.abs(value))) + 1 - digits);
-  return unc < halfLastDigit ? format(value) : withUncertainty(value, unc, format);
+export function uncertaintyVisible(value: number, unc: number | undefined, digits: number): boolean {
+  if (!Number.isFinite(value) || value === 0 || unc === undefined || !(unc > 0)) return false;
+  return unc >= 0.5 * 10 ** (Math.floor(Math.log10(Math.abs(value))) + 1 - digits);
 }
 
 /**

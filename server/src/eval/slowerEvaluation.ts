@@ -4,7 +4,7 @@
  * fields the profile reaches (docs/slower.md).
  */
 import type { Problem, Range } from '../format/ast';
-import { SPEED_OF_LIGHT } from '../physics/constants';
+import { vacuumWavelengthM } from '../physics/species/conversions';
 import { sumField, type FieldFunction } from '../physics/fields';
 import {
   axisField,
@@ -204,7 +204,7 @@ function lineData(lower: LevelModel, upper: LevelModel): { wavelengthM?: number;
   for (const l of [lower, upper]) if (!l.energyHz) missing.push(`an energy: add \`energy = …\` (e.g. in THz or cm^-1) to level '${l.name}'`);
   if (lower.energyHz && upper.energyHz) {
     const nu = upper.energyHz.value - lower.energyHz.value;
-    if (nu > 0) out.wavelengthM = SPEED_OF_LIGHT / nu;
+    if (nu > 0) out.wavelengthM = vacuumWavelengthM(nu);
     else missing.push(`a positive line frequency ('${upper.name}' must lie above '${lower.name}')`);
   }
   if (upper.lifetimeS && upper.lifetimeS.value > 0) out.lifetimeS = upper.lifetimeS.value;

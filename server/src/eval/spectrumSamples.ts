@@ -3,7 +3,7 @@
  * JSON document): offset from the line centre, absolute frequency and wavelengths when the
  * line's frequency is known, and intensity per Hz for unit component strength.
  */
-import { SPEED_OF_LIGHT } from '../physics/constants';
+import { vacuumWavelengthM } from '../physics/species/conversions';
 import { airWavelengthM, synthesizeSpectrum } from '../physics/lineshape';
 import type { LineComponentResult, SpectrumResult } from './resultTypes';
 
@@ -33,7 +33,7 @@ export function spectrumSamples(s: SpectrumResult, components: readonly LineComp
     let airOk = true;
     for (let i = 0; i < n; i++) {
       abs[i] = lineCentreHz + offsetHz[i]!;
-      vac[i] = SPEED_OF_LIGHT / abs[i]!;
+      vac[i] = vacuumWavelengthM(abs[i]!);
       const a = airWavelengthM(vac[i]!);
       if (a === undefined) airOk = false;
       else air[i] = a;

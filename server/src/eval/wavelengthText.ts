@@ -6,7 +6,7 @@
  * never print a wavelength to more digits than the energies behind it support.
  */
 import { vacuumWavelengthM } from '../physics/species/conversions';
-import { MISSING, trimNumber, withUncertainty, withUncertaintyIfVisible } from './quantityText';
+import { MISSING, trimNumber, withUncertainty } from './quantityText';
 
 /** λ in m and its standard uncertainty (undefined when the frequency has none) for a frequency ν > 0. */
 export function vacuumWavelengthOf(hz: number, hzUnc?: number): { m: number; unc?: number } | undefined {
@@ -17,18 +17,14 @@ export function vacuumWavelengthOf(hz: number, hzUnc?: number): { m: number; unc
 
 /**
  * "689.4489954(16) nm": the wavelength in nm with `digits` significant digits, or rounded to the
- * uncertainty's two digits in concise notation when there is one. `compact` (inlay hints) keeps
- * the short form while the uncertainty is below half its last digit, and shows the uncertainty
- * only when it reaches the digits printed.
+ * uncertainty's two digits in concise notation when there is one.
  */
-export function vacuumWavelengthNmText(hz: number, hzUnc: number | undefined, digits: number, compact = false): string {
+export function vacuumWavelengthNmText(hz: number, hzUnc: number | undefined, digits: number): string {
   const w = vacuumWavelengthOf(hz, hzUnc);
   if (!w) return MISSING;
   const nm = w.m * 1e9;
   const plain = (v: number): string => `${trimNumber(v, digits)} nm`;
-  if (w.unc === undefined) return plain(nm);
-  const uNm = w.unc * 1e9;
-  return compact ? withUncertaintyIfVisible(nm, uNm, digits, plain) : withUncertainty(nm, uNm, plain);
+  return w.unc === undefined ? plain(nm) : withUncertainty(nm, w.unc * 1e9, plain);
 }
 
 /**

@@ -8,7 +8,7 @@
 import { type InlayHint, InlayHintKind, type Position, type Range } from 'vscode-languageserver-types';
 import type { Analysis } from '../eval/analyze';
 import { halfText } from '../eval/halves';
-import { fieldText, frequencyText, gradientText, prefixedText, trimNumber, withUncertainty, withUncertaintyIfVisible } from '../eval/quantityText';
+import { fieldText, frequencyText, gradientText, prefixedText, trimNumber, uncertaintyVisible, withUncertainty } from '../eval/quantityText';
 import type { BlockNode, LevelNode } from '../format/ast';
 import { comparePositions } from '../format/positions';
 import type { SetupModel } from '../model/types';
@@ -21,7 +21,7 @@ import { lastStartingAtOrBefore } from './shared/locate';
 import { beamOfBlock, fieldOfBlock, levelOfNode, lineOfBlock, magnetOfBlock } from './shared/modelLookup';
 import { levelResult, termResult } from './shared/results';
 import { sourceSummary } from '../eval/fieldSourceText';
-import { vacuumWavelengthNmText } from '../eval/wavelengthText';
+import { vacuumWavelengthNmText, vacuumWavelengthOf } from '../eval/wavelengthText';
 import { slowerHint } from '../eval/slowerText';
 import { trapHint } from '../eval/trapText';
 
@@ -101,7 +101,7 @@ function blockHints(analysis: Analysis, model: SetupModel, block: BlockNode, out
         levelResult(analysis.result, line.upper.species.name, line.upper.name),
       );
       const parts = [
-        ...(f ? [withUncertaintyIfVisible(f.hz, f.unc, 7, (v) => frequencyText(v, 7)), `λ_vac ${vacuumWavelengthNmText(Math.abs(f.hz), f.unc, 7, true)}`] : []),
+        ...(f ? lineCentreHint(f.hz, f.unc) : []),
         ...(r?.g_eff !== undefined ? [`g_eff ${trimNumber(r.g_eff, 4)}`] : []),
       ];
       if (parts.length > 0) out.push(hint(block.link.to.range.end, parts.join(', '), 'line centre from the level energies; effective Landé factor of the line'));
@@ -166,4 +166,15 @@ export function inlayHints(analysis: Analysis, range: Range): InlayHint[] {
     blockHints(analysis, model, block, out);
   }
   return out.filter((h) => inRange(h.position, range));
+}
+
+/**
+ * A line's frequency and vacuum wavelength at 7 digits, both with the frequency's uncertainty
+ * carried when it would change a printed digit of either (so the two never disagree), else neither.
+ */
+function lineCentreHint(hz: number, unc: number | undefined): string[] {
+  const w = vacuumWavelengthOf(Math.abs(hz), unc);
+  const shown = uncertaintyVisible(hz, unc, 7) || (w?.unc !== undefined && uncertaintyVisible(w.m * 1e9, w.unc * 1e9, 7));
+  const frequency = (v: number): string => frequencyText(v, 7);
+  return [shown ? withUncertainty(hz, unc, frequency) : frequency(hz), `λ_vac ${vacuumWavelengthNmText(Math.abs(hz), shown ? unc : undefined, 7)}`];
 }

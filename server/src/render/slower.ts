@@ -72,7 +72,9 @@ export function renderSlower(d: SlowerViewData, theme: RenderTheme): string {
   const legend: LegendEntry[] = [{ label: 'ideal field', colour: pal.series[0], line: { width: 2 } }];
   if (coils) legend.push({ label: "coils' field", colour: pal.series[1], line: { width: 2, dash: '6 3' } });
   if (idealResonance) legend.push({ label: 'resonant speed, ideal field', colour: pal.series[0], line: { width: 1.5 } });
-  legend.push({ label: names.resonantLegend, colour: pal.series[2], line: { width: 2 } });
+  // The resonance drawn in full is the one in the field the atoms fly through: the coils' when there are coils.
+  const resonantStyle = coils ? { colour: pal.series[1]!, dash: '6 3' } : { colour: pal.series[0]!, dash: undefined };
+  legend.push({ label: names.resonantLegend, colour: resonantStyle.colour, line: { width: 2, ...(resonantStyle.dash ? { dash: resonantStyle.dash } : {}) } });
   legend.push({ label: names.flight, colour: pal.text, line: { width: 1.5, dash: '2 3' } });
   const legendSvg = legendUnderTitle(legend, LEFT, RIGHT, 10, pal);
   const top = legendSvg.below;
@@ -109,7 +111,7 @@ export function renderSlower(d: SlowerViewData, theme: RenderTheme): string {
   body.push(series('ideal', 'ideal field B(z)', d.idealT, yb, clip.upper, pal.series[0]!, 2));
   if (d.coilsT) body.push(series('coils', "the coils' field", d.coilsT, yb, clip.upper, pal.series[1]!, 2, '6 3'));
   if (idealResonance) body.push(series('ideal-resonant', 'speed resonant with the laser in the ideal (designed) field', idealResonance, yv, clip.lower, pal.series[0]!, 1.5));
-  body.push(series('resonant', names.resonantTitle, d.resonantMPerS, yv, clip.lower, pal.series[2]!, 2));
+  body.push(series('resonant', names.resonantTitle, d.resonantMPerS, yv, clip.lower, resonantStyle.colour, 2, resonantStyle.dash));
   body.push(series('flight', names.flightTitle, d.flightMPerS, yv, clip.lower, pal.text, 1.5, '2 3'));
   // Rule labels sit right of their rule, or left of it where they would run past the plot's right
   // edge; a label that would overlap the one before goes one row down.

@@ -4,8 +4,8 @@
  * here when the evaluation carries them.
  */
 import type { EvaluationResult, MagnetResult } from '../../eval/resultTypes';
-import { gradientText, lengthText, prefixedText } from '../../eval/quantityText';
-import { averagedOverText } from '../../eval/magnetGradientText';
+import { lengthText, prefixedText } from '../../eval/quantityText';
+import { averagedGradients, averagedOverText } from '../../eval/magnetGradientText';
 import { BOHR_MAGNETON } from '../../physics/constants';
 import { md, mdTitle } from '../shared/markdown';
 import { valueInUnits } from '../shared/units';
@@ -30,9 +30,7 @@ export function magnetSection(m: MagnetResult, ctx: { result: EvaluationResult |
     const where = m.sources ? ' ∂|B|/∂z at the centre of the beam line' : '';
     lines.push(`gradient${where} = ${valueInUnits(m.gradient_T_per_m, 'gradient', m.gradient_unit).join(' = ')}; force on 1 μ_B: ${prefixedText(bohrForceN(m.gradient_T_per_m), 'N', { digits: 5 })}`);
     // A beam through sources averages the gradient along the magnet's length: said beside the centre value, never instead of it.
-    for (const b of (ctx.result?.beams ?? []).filter((x) => x.magnet === m.name && x.field_map)) {
-      lines.push(`gradient ∂|B|/∂z averaged along ${averagedOverText(m)} (beam ${md(b.name)}) = ${gradientText(b.field_map!.mean_gradient_T_per_m, 4)}`);
-    }
+    for (const averaged of averagedGradients(m, ctx.result?.beams ?? [], md)) lines.push(`gradient ∂|B|/∂z averaged along ${averagedOverText(m)}: ${averaged}`);
   } else lines.push('gradient: not given');
   if (m.length_m !== undefined) lines.push(`length = ${valueInUnits(m.length_m, 'length', m.length_unit).join(' = ')}`);
   else lines.push('length: not given');
