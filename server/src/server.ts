@@ -101,7 +101,7 @@ function startLanguageServer(): void {
       const m = loadServiceModule();
       readSettings = m.readSettings;
       const evaluator = new m.WorkerEvaluator(__filename, log);
-      // With `sublevel.evaluation.warmUp` on (off by default: it costs 40–75 MB of memory), the worker
+      // With `sublevel.evaluation.warmUp` on (off by default: it costs 35–80 MB of memory), the worker
       // evaluates a built-in set-up until the first real job comes, so that job finds it warm.
       startWarmUp = () => {
         void settingsWithoutDocument().then((s) => {

@@ -3,6 +3,7 @@
  * built server: it exercises the real paths (its set-up reads without errors and has every kind
  * of item), a real job supersedes it and gets exactly the outcome of an evaluation here, and
  * nothing of it reaches the user: no diagnostics for anything but the open document, no log line.
+ * It runs only with the setting `sublevel.evaluation.warmUp` on (off by default).
  */
 import { readdirSync, readFileSync } from 'fs';
 import path from 'path';

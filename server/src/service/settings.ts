@@ -12,7 +12,7 @@ export interface EditorSettings {
   regimeNotes: { enabled: boolean };
   /**
    * Whether the evaluation worker evaluates a built-in set-up while idle before the first file
-   * (WorkerEvaluator.warmUp). Off by default: it costs the server 40–75 MB of resident memory with
+   * (WorkerEvaluator.warmUp). Off by default: it costs the server 35–80 MB of resident memory with
    * a 20,000-line file (docs/editor.md). Read once, from the settings without a document.
    */
   evaluation: { warmUp: boolean };
