@@ -101,8 +101,13 @@ function startLanguageServer(): void {
       const m = loadServiceModule();
       readSettings = m.readSettings;
       const evaluator = new m.WorkerEvaluator(__filename, log);
-      // The worker evaluates a built-in set-up until the first real job comes, so that job finds it warm.
-      startWarmUp = () => evaluator.warmUp();
+      // With `sublevel.evaluation.warmUp` on (off by default: it costs 35–80 MB of memory), the worker
+      // evaluates a built-in set-up until the first real job comes, so that job finds it warm.
+      startWarmUp = () => {
+        void settingsWithoutDocument().then((s) => {
+          if (s.evaluation.warmUp) evaluator.warmUp();
+        });
+      };
       setTimeout(() => {
         if (documents.all().length === 0) warmUpWhenIdle();
       }, WARM_UP_AFTER_MS);
@@ -130,6 +135,12 @@ function startLanguageServer(): void {
       settingsByUri.set(uri, s);
     }
     return s;
+  }
+
+  /** The settings that belong to no document (the warm-up's), as the editor has them now. */
+  async function settingsWithoutDocument(): Promise<EditorSettings> {
+    const section = client.configuration ? await connection.workspace.getConfiguration({ section: 'sublevel' }).catch(() => undefined) : globalSettings;
+    return readSettings!(section);
   }
 
   connection.onDidChangeConfiguration((change) => {

@@ -122,8 +122,13 @@ describe('language service', () => {
       inlayHints: { enabled: true },
       hover: { sublevelRows: DEFAULT_SETTINGS.hover.sublevelRows, levelTables: 2 },
       regimeNotes: { enabled: true },
+      evaluation: { warmUp: false },
     });
     expect(readSettings({ regimeNotes: { enabled: false } }).regimeNotes.enabled).toBe(false);
     expect(readSettings({ hover: { sublevelRows: 1e9 } }).hover.sublevelRows).toBe(500);
+    // The worker's warm-up is off unless asked for (it costs the server 35–80 MB, docs/editor.md).
+    expect(DEFAULT_SETTINGS.evaluation.warmUp).toBe(false);
+    expect(readSettings({ evaluation: { warmUp: true } }).evaluation.warmUp).toBe(true);
+    expect(readSettings({ evaluation: { warmUp: 'on' } }).evaluation.warmUp).toBe(false);
   });
 });

@@ -3,8 +3,9 @@
  * built server: it exercises the real paths (its set-up reads without errors and has every kind
  * of item), a real job supersedes it and gets exactly the outcome of an evaluation here, and
  * nothing of it reaches the user: no diagnostics for anything but the open document, no log line.
+ * It runs only with the setting `sublevel.evaluation.warmUp` on (off by default).
  */
-import { readFileSync } from 'fs';
+import { readdirSync, readFileSync } from 'fs';
 import path from 'path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { PublishDiagnosticsParams } from 'vscode-languageserver-protocol';
@@ -42,6 +43,14 @@ describe('the warm-up set-up', () => {
   });
 });
 
+/** The editor's answer with `sublevel.evaluation.warmUp` on (package.json; off by default). */
+const WARM_UP_ON = { 'workspace/configuration': (p: unknown) => (p as { items: unknown[] }).items.map(() => ({ evaluation: { warmUp: true } })) };
+
+/** Threads of a process (Linux: /proc): the evaluation worker is one more. */
+function threadsOf(pid: number): number {
+  return readdirSync(`/proc/${pid}/task`).length;
+}
+
 describe('the warm-up in the built server worker', () => {
   it('is superseded by a real job, which gets the same outcome as here from the warmed thread, and logs nothing', async () => {
     const logged: string[] = [];
@@ -67,7 +76,7 @@ describe('the warm-up in the built server worker', () => {
   }, 120_000);
 
   it('publishes nothing: the server pushes only the open document, and says nothing in its log', async () => {
-    const client = await startClient({ textDocument: { publishDiagnostics: {} } });
+    const client = await startClient({ textDocument: { publishDiagnostics: {} }, workspace: { configuration: true } }, WARM_UP_ON);
     const logs: string[] = [];
     const pushedUris = new Set<string>();
     const pushes: PublishDiagnosticsParams[] = [];
@@ -92,6 +101,20 @@ describe('the warm-up in the built server worker', () => {
       expect(client.requests).not.toContain('window/showMessage');
     } finally {
       await client.stop();
+    }
+  }, 120_000);
+
+  it.skipIf(process.platform !== 'linux')('runs only with sublevel.evaluation.warmUp on: off by default, no worker is started before a document opens', async () => {
+    const off = await startClient({ workspace: { configuration: true } });
+    const on = await startClient({ workspace: { configuration: true } }, WARM_UP_ON);
+    try {
+      // Both servers asked for the settings without a document (the warm-up's), then one started its worker.
+      await until(() => off.requests.includes('workspace/configuration') && on.requests.includes('workspace/configuration'), 60_000);
+      await until(() => threadsOf(on.process.pid!) > threadsOf(off.process.pid!), 60_000);
+      await new Promise((r) => setTimeout(r, 1000));
+      expect(threadsOf(on.process.pid!)).toBeGreaterThan(threadsOf(off.process.pid!));
+    } finally {
+      await Promise.all([off.stop(), on.stop()]);
     }
   }, 120_000);
 });

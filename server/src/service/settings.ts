@@ -10,9 +10,15 @@ export interface EditorSettings {
   hover: HoverOptions;
   /** Notes that a level has left the weak-field regime (the CLI always reports them). */
   regimeNotes: { enabled: boolean };
+  /**
+   * Whether the evaluation worker evaluates a built-in set-up while idle before the first file
+   * (WorkerEvaluator.warmUp). Off by default: it costs the server 35–80 MB of resident memory with
+   * a 20,000-line file (docs/editor.md). Read once, from the settings without a document.
+   */
+  evaluation: { warmUp: boolean };
 }
 
-export const DEFAULT_SETTINGS: EditorSettings = { inlayHints: { enabled: true }, hover: DEFAULT_HOVER_OPTIONS, regimeNotes: { enabled: true } };
+export const DEFAULT_SETTINGS: EditorSettings = { inlayHints: { enabled: true }, hover: DEFAULT_HOVER_OPTIONS, regimeNotes: { enabled: true }, evaluation: { warmUp: false } };
 
 /** The codes `regimeNotes.enabled: false` hides in the editor. */
 export const REGIME_NOTE_CODES: ReadonlySet<string> = new Set(['zeeman-not-linear', 'zeeman-strong-field', 'diamagnetic-not-included']);
@@ -31,6 +37,7 @@ export function readSettings(section: unknown): EditorSettings {
   const inlay = object(s.inlayHints);
   const hover = object(s.hover);
   const regime = object(s.regimeNotes);
+  const evaluation = object(s.evaluation);
   return {
     inlayHints: { enabled: typeof inlay.enabled === 'boolean' ? inlay.enabled : DEFAULT_SETTINGS.inlayHints.enabled },
     hover: {
@@ -38,5 +45,6 @@ export function readSettings(section: unknown): EditorSettings {
       levelTables: count(hover.levelTables, DEFAULT_HOVER_OPTIONS.levelTables, 50),
     },
     regimeNotes: { enabled: typeof regime.enabled === 'boolean' ? regime.enabled : DEFAULT_SETTINGS.regimeNotes.enabled },
+    evaluation: { warmUp: typeof evaluation.warmUp === 'boolean' ? evaluation.warmUp : DEFAULT_SETTINGS.evaluation.warmUp },
   };
 }
