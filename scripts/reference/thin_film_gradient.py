@@ -1,5 +1,5 @@
 #!/usr/bin/env python3
-"""Reference gradients of a thin magnetised film far from it (eval/cleanField.ts's cancellation floor).
+"""Reference field and gradients of a thin magnetised film, near and far (eval/cleanField.ts's cancellation floor).
 
 Run from the repository root:  python3 scripts/reference/thin_film_gradient.py
 Writes tests/reference/thin_film_gradient.json, read by tests/eval/cleanFieldFloor.test.ts.
@@ -13,6 +13,8 @@ Here it is evaluated in mpmath at 50 significant digits, where none of its cance
 (the film's two large faces, 1 um apart, cancel to ~1e-5 of either at 10 cm), and the gradient is
 mpmath.diff of it. Two points are checked against mpmath.quad of the gradient's own surface
 integral, (delta_ij r^2 - 3 r_i r_j) / r^5 over the faces, so the closed form is not taken on trust.
+Far away the closed form is also checked against the point dipole of the same moment, whose
+relative difference falls as (size/distance)^2.
 The film (1 um x 10 mm x 10 mm, 1 T) and the points are a scenario of our own.
 """
 import json
@@ -24,10 +26,14 @@ import mpmath as mp
 mp.mp.dps = 50
 
 SIZE = [mp.mpf("10e-3"), mp.mpf("10e-3"), mp.mpf("1e-6")]  # x, y, z: the film's normal is z
-# Points along one generic direction (no gradient component vanishes by symmetry), at these distances from the film's centre.
+# Points along one generic direction (no component vanishes by symmetry) and along the film's normal
+# through its centre (where symmetry makes some components exactly 0), at these distances from the centre.
 DIRECTION = [mp.mpf("0.36"), mp.mpf("0.48"), mp.mpf("0.8")]
-DISTANCES = ["1e-3", "3e-3", "1e-2", "3e-2", "1e-1"]
-MAGNETISATIONS = {"normal": [0, 0, 1], "in-plane": [1, 0, 0]}
+DIRECTIONS = {"generic": DIRECTION, "axis": [mp.mpf(0), mp.mpf(0), mp.mpf(1)]}
+DISTANCES = ["1e-3", "3e-3", "1e-2", "3e-2", "1e-1", "3e-1", "1", "2", "3", "10"]
+MAGNETISATIONS = {"normal": [0, 0, 1], "in-plane": [1, 0, 0], "oblique": ["0.36", "0.48", "0.8"]}
+# Below this fraction of the largest component a 50-digit value is a symmetry zero, written as 0.
+SYMMETRY_ZERO = mp.mpf("1e-35")
 
 
 def faces(mag):
@@ -36,6 +42,21 @@ def faces(mag):
         if mag[k] != 0:
             yield k, SIZE[k] / 2, mp.mpf(mag[k])
             yield k, -SIZE[k] / 2, -mp.mpf(mag[k])
+
+
+def dipole_field(mag, x):
+    """The point dipole of the film's moment: B = (V / 4 pi) (3 (J.n) n - J) / r^3, J = mu0 M in T."""
+    volume = SIZE[0] * SIZE[1] * SIZE[2]
+    r = mp.sqrt(sum(c * c for c in x))
+    n = [c / r for c in x]
+    jn = sum(mp.mpf(mag[i]) * n[i] for i in range(3))
+    return [volume / (4 * mp.pi) * (3 * jn * n[i] - mp.mpf(mag[i])) / r ** 3 for i in range(3)]
+
+
+def symmetry_zeros(values):
+    """The values as floats, with those that vanish by symmetry (at 50 digits) written as exactly 0."""
+    largest = max(abs(v) for v in values)
+    return [0.0 if abs(v) <= SYMMETRY_ZERO * largest else float(v) for v in values]
 
 
 def face_field(k, plane, charge, x):
@@ -95,23 +116,30 @@ def gradient_by_quadrature(mag, x, i, j):
 
 def main():
     out = {
-        "about": "dB_i/dx_j (T/m) of a block 10 mm x 10 mm x 1 um (x, y, z) centred at 0, magnetised 1 T: mpmath.diff of the closed-form surface-charge field at 50 digits",
+        "about": "B (T) and dB_i/dx_j (T/m) of a block 10 mm x 10 mm x 1 um (x, y, z) centred at 0, magnetised 1 T: the closed-form surface-charge field and its mpmath.diff at 50 digits; components that vanish by symmetry are exactly 0",
         "sizeM": [float(s) for s in SIZE],
         "mpmath": mp.__version__,
         "cases": [],
     }
     for name, mag in MAGNETISATIONS.items():
-        for d in DISTANCES:
-            x = [mp.mpf(d) * c for c in DIRECTION]
-            g = gradient_by_diff(mag, x)
-            out["cases"].append({
-                "magnetisation": name,
-                "magnetisationT": mag,
-                "distanceM": float(mp.mpf(d)),
-                "point": [float(c) for c in x],
-                "gradient": [[float(v) for v in row] for row in g],
-            })
-            print(name, d, "dBz/dz", mp.nstr(g[2][2], 15), "dBx/dz", mp.nstr(g[0][2], 15), flush=True)
+        for where, direction in DIRECTIONS.items():
+            for d in DISTANCES:
+                x = [mp.mpf(d) * c for c in direction]
+                B = film_field(mag, x)
+                g = gradient_by_diff(mag, x)
+                dip = dipole_field(mag, x)
+                flat = symmetry_zeros([v for row in g for v in row])
+                out["cases"].append({
+                    "magnetisation": name,
+                    "magnetisationT": [float(mp.mpf(v)) for v in mag],
+                    "direction": where,
+                    "distanceM": float(mp.mpf(d)),
+                    "point": [float(c) for c in x],
+                    "B": symmetry_zeros(B),
+                    "gradient": [flat[0:3], flat[3:6], flat[6:9]],
+                    "dipoleRelativeDifference": float(max(abs(B[i] - dip[i]) for i in range(3)) / max(abs(v) for v in B)),
+                })
+                print(name, where, d, "B", [mp.nstr(v, 6) for v in B], "dBz/dz", mp.nstr(g[2][2], 6), flush=True)
     # The closed form against the surface integral itself, at one far and one near point.
     checks = []
     for name, d in (("normal", "1e-3"), ("normal", "1e-1"), ("in-plane", "1e-2"), ("in-plane", "1e-1")):

@@ -1,72 +1,97 @@
 /**
- * The cancellation floor of a magnetised block (eval/cleanField.ts) is the round-off of its
- * closed form at the point, which scales with the distance to the block's nearest edge, not with
- * the block's thickness: far from a thin film its small gradients are values, not round-off.
+ * The cancellation floor of a magnetised block (eval/cleanField.ts) is the round-off its closed form
+ * leaves at the point (physics/fields/slabField.ts, slabFieldWithRoundOff), not a rule by distance:
+ * a thin film's far field and gradient, 1e-15 T and 1e-16 T/m at 10 m, are values and print as such,
+ * while components that vanish by symmetry stay exactly 0, and B and the gradient are each kept or
+ * zeroed whole.
  * Reference: tests/reference/thin_film_gradient.json (scripts/reference/thin_film_gradient.py:
- * mpmath at 50 digits, checked against mpmath quadrature of the surface-charge integral).
+ * mpmath at 50 digits, checked against mpmath quadrature of the surface-charge integral and, far
+ * away, against the point dipole of the same moment).
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { cleanField, distanceToNearestEdge } from '../../server/src/eval/cleanField';
-import { sumField } from '../../server/src/physics/fields';
+import { cleanField } from '../../server/src/eval/cleanField';
+import { slabFieldWithRoundOff, sumField } from '../../server/src/physics/fields';
 import type { SlabSpec, Vec3 } from '../../server/src/physics/fields/types';
 
 interface FilmCase {
   magnetisation: string;
   magnetisationT: Vec3;
+  direction: 'generic' | 'axis';
   distanceM: number;
   point: Vec3;
+  B: number[];
   gradient: number[][];
+  dipoleRelativeDifference: number;
 }
 const REF: { sizeM: Vec3; cases: FilmCase[]; quadratureChecks: { relativeDifference: number }[] } = JSON.parse(readFileSync('tests/reference/thin_film_gradient.json', 'utf8'));
 
 const film = (magnetisationT: Vec3): SlabSpec => ({ kind: 'slab', centre: [0, 0, 0], sizeM: REF.sizeM, magnetisationT });
 
-describe('a thin film (10 mm × 10 mm × 1 µm, 1 T) from 1 mm to 10 cm', () => {
-  it('the reference: its closed form at 50 digits agrees with quadrature of the surface integral', () => {
+function cleaned(c: FilmCase): { B: number[]; G: number[] } {
+  const s = cleanField([film(c.magnetisationT)], sumField)(c.point);
+  if (!('sample' in s)) throw new Error('the point is off the film');
+  return { B: [...s.sample.B], G: s.sample.gradient.flat() };
+}
+
+/** Each component as the reference gives it: within the closed form's round-off bound, symmetry zeros exactly 0. */
+function expectMatches(got: number[], want: number[], bound: number): void {
+  for (let i = 0; i < want.length; i++) {
+    if (want[i] === 0) expect(got[i]).toBe(0);
+    else {
+      expect(got[i]).not.toBe(0);
+      expect(Math.abs(got[i]! - want[i]!)).toBeLessThanOrEqual(bound);
+    }
+  }
+}
+
+describe('a thin film (10 mm × 10 mm × 1 µm, 1 T) from 1 mm to 10 m', () => {
+  it('the reference: its closed form at 50 digits agrees with quadrature and, far away, with the point dipole', () => {
     expect(REF.quadratureChecks.length).toBeGreaterThanOrEqual(24);
     for (const c of REF.quadratureChecks) expect(c.relativeDifference).toBeLessThan(1e-15);
+    // The dipole is the far limit: its relative difference falls as (size/distance)², ~1e-6 at 10 m.
+    for (const c of REF.cases.filter((c) => c.distanceM >= 1)) expect(c.dipoleRelativeDifference).toBeLessThan(1e-4 / c.distanceM ** 2);
+    expect(REF.cases.filter((c) => c.distanceM === 10)).toHaveLength(6);
   });
 
-  it.each(REF.cases.map((c) => [c.magnetisation, c.distanceM, c] as const))('magnetised %s, %s m away: every gradient component as mpmath gives it, none zeroed', (_m, _d, c) => {
-    const sample = cleanField([film(c.magnetisationT)], sumField)(c.point);
-    if (!('sample' in sample)) throw new Error('the point is off the film');
-    const largest = Math.max(...c.gradient.flat().map(Math.abs));
-    for (let i = 0; i < 3; i++) {
-      for (let j = 0; j < 3; j++) {
-        const want = c.gradient[i]![j]!;
-        const got = sample.sample.gradient[i]![j]!;
-        // The closed form's round-off grows as the film's two faces cancel (~1e-5 of either at 10 cm): measured
-        // 8e-10 of the largest component at 10 cm, 4e-12 at 1 mm. Before the floor followed the distance, every
-        // component at 10 cm (and one at 3 cm) printed 0.
-        expect(Math.abs(got - want)).toBeLessThanOrEqual(1e-8 * largest);
-        expect(got).not.toBe(0);
-      }
-    }
+  it.each(REF.cases.map((c) => [c.magnetisation, c.direction, c.distanceM, c] as const))('magnetised %s, %s direction, %s m away: B and the gradient as mpmath gives them, nothing zeroed but symmetry zeros', (_m, _w, _d, c) => {
+    const { roundOff } = slabFieldWithRoundOff(film(c.magnetisationT), c.point);
+    const { B, G } = cleaned(c);
+    expectMatches(B, c.B, roundOff.B);
+    expectMatches(G, c.gradient.flat(), roundOff.gradient);
+    // The bound stays below every value it guards, so none is zeroed: at 10 m it is ~5e-16 T against a
+    // field of ~1e-14 T (its smallest component 2.9e-15 T), while the actual error there is ~2e-17 T.
+    const smallest = (v: number[]): number => Math.min(...v.filter((x) => x !== 0).map(Math.abs));
+    expect(roundOff.B).toBeLessThan(0.5 * smallest(c.B));
+    expect(roundOff.gradient).toBeLessThan(0.5 * smallest(c.gradient.flat()));
   });
 
-  it('still zeroes what cancels exactly: on the film\'s axis the off-diagonal gradient is 0 by symmetry', () => {
-    for (const d of [1e-3, 1e-2, 1e-1]) {
-      const sample = cleanField([film([0, 0, 1])], sumField)([0, 0, d]);
-      if (!('sample' in sample)) throw new Error('the point is off the film');
-      const G = sample.sample.gradient;
-      expect([G[0][1], G[0][2], G[1][2], G[1][0], G[2][0], G[2][1]]).toEqual([0, 0, 0, 0, 0, 0]);
-      expect(G[2][2]).toBeLessThan(0);
-    }
+  it('at 2 m along (0.36, 0.48, 0.8), magnetised along its normal: B has the reference\'s direction, not one component of it', () => {
+    // Before, B printed (0, 1.146e-12, 0) T here, and 0 from 3 m on.
+    const c = REF.cases.find((c) => c.magnetisation === 'normal' && c.direction === 'generic' && c.distanceM === 2)!;
+    const { B } = cleaned(c);
+    const norm = (v: number[]): number => Math.hypot(...v);
+    const cos = B.reduce((s, v, i) => s + v * c.B[i]!, 0) / (norm(B) * norm(c.B));
+    expect(1 - cos).toBeLessThan(1e-6);
   });
 });
 
-describe('distance to the nearest edge of a box (Pythagoras)', () => {
-  const c: Vec3 = [0, 0, 0];
-  const s: Vec3 = [2, 4, 6];
-  it('inside, on a face\'s normal, beyond a corner, beside an edge', () => {
-    // Centre: the nearest edges are the ones along z, at (±1, ±2): √5.
-    expect(distanceToNearestEdge(c, s, [0, 0, 0])).toBeCloseTo(Math.sqrt(5), 14);
-    // Beyond the corner (1, 2, 3) by (3, 4, 12): 13.
-    expect(distanceToNearestEdge(c, s, [4, 6, 15])).toBeCloseTo(13, 13);
-    // Beside the edge along z at (1, 2), mid-height, 3 and 4 away: 5.
-    expect(distanceToNearestEdge(c, s, [4, 6, 0])).toBeCloseTo(5, 14);
-    // Above the middle of the top face z = 3, by 1: the nearest edges are along y at x = ±1, z = 3: √2.
-    expect(distanceToNearestEdge(c, s, [0, 0, 4])).toBeCloseTo(Math.sqrt(2), 14);
+describe('exact cancellations still print 0', () => {
+  it('the centre of an off-origin block (50 × 20 × 6 mm at (13, −70, 31) mm): every derivative is 0 by symmetry, B is kept', () => {
+    const block: SlabSpec = { kind: 'slab', centre: [0.013, -0.07, 0.031], sizeM: [0.05, 0.02, 0.006], magnetisationT: [0, 0, 1.2] };
+    const s = cleanField([block], sumField)(block.centre);
+    if (!('sample' in s)) throw new Error('the centre is inside, not on the block');
+    expect(s.sample.gradient.flat()).toEqual([0, 0, 0, 0, 0, 0, 0, 0, 0]);
+    // Inside: B = J − N·J with N the block's demagnetising factor along z (about 0.68 for this shape, textbook order of magnitude).
+    expect(s.sample.B[2]).toBeGreaterThan(0.2);
+    expect(s.sample.B[2]).toBeLessThan(0.6);
+  });
+
+  it('two equal blocks magnetised against each other, midway between them: B is 0 as a whole', () => {
+    const a: SlabSpec = { kind: 'slab', centre: [0.02, 0.3, -0.1], sizeM: [0.01, 0.01, 0.01], magnetisationT: [0.3, 0.4, 1] };
+    const b: SlabSpec = { ...a, centre: [0.04, 0.3, -0.1], magnetisationT: [-0.3, -0.4, -1] };
+    const s = cleanField([a, b], sumField)([0.03, 0.3, -0.1]);
+    if (!('sample' in s)) throw new Error('the midpoint is off both blocks');
+    expect(s.sample.B).toEqual([0, 0, 0]);
   });
 });

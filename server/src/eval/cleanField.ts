@@ -5,10 +5,14 @@
  *   has no value, only the issue;
  * - exact cancellations (the centre of an opposed coil pair, the axial derivative at the centre of a
  *   Helmholtz pair) leave rounding of ~1e-16 of the parts' own size, which would print as a value:
- *   below 1e-12 of that size a component is 0. A magnetised block cancels inside its own closed
- *   form (face terms of size μ0·M, and μ0·M over the distance to its nearest edge for the
- *   gradient), so that is its scale, even when it is alone.
+ *   below 1e-12 of that size B (or the gradient) is 0. A magnetised block also cancels inside its
+ *   own closed form, by an amount that depends on the point (far away its terms cancel to a dipole
+ *   field); the closed form says how much rounding it leaves there (slabFieldWithRoundOff), and that
+ *   is added to the floor, even when the block is alone.
+ * The floor is the rounding at the point, so a component below it is indistinguishable from 0:
+ * zeroing it never turns the printed direction by more than that rounding.
  */
+import { slabFieldWithRoundOff } from '../physics/fields';
 import type { FieldIssue } from '../physics/fields';
 import type { FieldFunction, FieldSample, FieldSourceSpec, Vec3 } from '../physics/fields/types';
 
@@ -38,11 +42,6 @@ export function cleanField(parts: readonly FieldSourceSpec[], fieldOf: FieldOf):
     const G = [0, 0, 0, 0, 0, 0, 0, 0, 0];
     let bScale = 0;
     let gScale = 0;
-    for (const p of parts) {
-      const inner = intrinsicScale(p, point);
-      bScale += inner.field;
-      gScale = Math.max(gScale, inner.gradient);
-    }
     for (const s of own) {
       for (let i = 0; i < 3; i++) {
         B[i] += s.B[i];
@@ -53,40 +52,19 @@ export function cleanField(parts: readonly FieldSourceSpec[], fieldOf: FieldOf):
         }
       }
     }
-    const b = (k: number): number => (Math.abs(B[k]!) <= CANCELLATION_FLOOR * bScale ? 0 : B[k]!);
-    const g = (k: number): number => (Math.abs(G[k]!) <= CANCELLATION_FLOOR * gScale * parts.length ? 0 : G[k]!);
+    let bFloor = CANCELLATION_FLOOR * bScale;
+    let gFloor = CANCELLATION_FLOOR * gScale * parts.length;
+    for (const p of parts) {
+      if (p.kind !== 'slab') continue;
+      const { roundOff } = slabFieldWithRoundOff(p, point);
+      bFloor += roundOff.B;
+      gFloor += roundOff.gradient;
+    }
+    // A component is 0 only when it is itself within the rounding bound at the point, so the printed
+    // direction moves by no more than that rounding (a floor not tied to the point zeroed real parts).
+    const b = (i: number): number => (Math.abs(B[i]!) <= bFloor ? 0 : B[i]!);
+    const g = (k: number): number => (Math.abs(G[k]!) <= gFloor ? 0 : G[k]!);
     const row = (i: number): Vec3 => [g(3 * i), g(3 * i + 1), g(3 * i + 2)];
     return { sample: { B: [b(0), b(1), b(2)], gradient: [row(0), row(1), row(2)] } };
   };
-}
-
-/**
- * The size of the terms a part's own closed form sums at `point`: for a block, its face terms,
- * each of the order of μ0·M (field) and of μ0·M over the point's distance to the block's nearest
- * edge (gradient: the terms are 1/R to a corner and |u|/(u² + w²) ≤ 1/√(u² + w²) to an edge line,
- * physics/fields/slabField.ts), so their round-off is ε times that. Far from a thin film the
- * gradient is small because the film is thin, not because it cancels: its own scale shrinks with
- * the distance, not with the film's thickness. Nothing for the other parts, whose closed forms
- * have no such inner cancellation.
- */
-function intrinsicScale(p: FieldSourceSpec, point: Vec3): { field: number; gradient: number } {
-  if (p.kind !== 'slab') return { field: 0, gradient: 0 };
-  const m = Math.hypot(...p.magnetisationT);
-  const d = distanceToNearestEdge(p.centre, p.sizeM, point);
-  return { field: m, gradient: d > 0 ? m / d : 0 };
-}
-
-/** Distance from `point` to the nearest of the 12 edges of the box `centre` ± `size`/2 (corners included). */
-export function distanceToNearestEdge(centre: Vec3, size: Vec3, point: Vec3): number {
-  let best = Number.POSITIVE_INFINITY;
-  for (let k = 0; k < 3; k++) {
-    // Edges along axis k: the offset along k clamped to the edge, the two others to one of its four lines.
-    const along = Math.max(0, Math.abs(point[k] - centre[k]) - size[k] / 2);
-    const a = (k + 1) % 3;
-    const b = (k + 2) % 3;
-    const da = Math.abs(Math.abs(point[a] - centre[a]) - size[a] / 2);
-    const db = Math.abs(Math.abs(point[b] - centre[b]) - size[b] / 2);
-    best = Math.min(best, Math.hypot(along, da, db));
-  }
-  return best;
 }

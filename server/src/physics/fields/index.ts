@@ -6,7 +6,7 @@ export type { FieldIssue } from './issues';
 export { loopField } from './loopField';
 export { solenoidField } from './solenoidField';
 export { wireField } from './wireField';
-export { slabField } from './slabField';
+export { slabField, slabFieldWithRoundOff, type SlabFieldWithRoundOff } from './slabField';
 export { partField, sumField, fieldIssuesAt } from './sumField';
 export { conductorOf, onSourceIssue, pointOnSource } from './onSource';
 export { validateFieldSource } from './validateSource';
