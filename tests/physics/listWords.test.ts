@@ -9,4 +9,8 @@ describe('listWords', () => {
     expect(listWords(['a', 'b'])).toBe('a or b');
     expect(listWords(['text', 'json', 'csv'])).toBe('text, json or csv');
   });
+  it('joins with "and" when asked (the sublevels a trap finding names)', () => {
+    expect(listWords(['a', 'b'], 'and')).toBe('a and b');
+    expect(listWords(['x', 'y', 'z'], 'and')).toBe('x, y and z');
+  });
 });

@@ -8,6 +8,7 @@ import type { LevelModel } from '../model/types';
 import type { ExactAtField } from './exactAtField';
 import type { EvaluationNote, WorkingField } from './levelEvaluation';
 import { fieldInUnit } from './writtenUnit';
+import { listWords } from '../physics/listWords';
 
 /** A level's exact result at one working field. */
 export interface FieldPoint {
@@ -67,6 +68,5 @@ export function fieldName(f: WorkingField): string {
 }
 
 function fieldList(points: readonly FieldPoint[]): string {
-  const names = points.map((p) => fieldName(p.f));
-  return names.length <= 1 ? names.join('') : `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}`;
+  return listWords(points.map((p) => fieldName(p.f)), 'and');
 }

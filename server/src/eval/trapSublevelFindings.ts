@@ -9,6 +9,7 @@
 import type { Problem, Range } from '../format/ast';
 import type { TrapIssue } from '../physics/traps';
 import type { TrapModel } from '../model/trapTypes';
+import { listWords } from '../physics/listWords';
 import { trimNumber } from './quantityText';
 import { cutEnergyText } from './trapText';
 
@@ -18,11 +19,6 @@ export const CUT_OUTSIDE_CODE = 'trap-cut-outside';
 
 /** The codes merged here, one finding per trap each. */
 export const PER_TRAP_CODES: ReadonlySet<string> = new Set([ZERO_FIELD_CODE, MAJORANA_SLOW_CODE, CUT_OUTSIDE_CODE]);
-
-/** "a", "a and b", "a, b and c". */
-function listText(items: readonly string[]): string {
-  return items.length <= 1 ? (items[0] ?? '') : `${items.slice(0, -1).join(', ')} and ${items.at(-1)}`;
-}
 
 /** What a merged finding needs besides its issues (all of one code): where it goes and how severe it is. */
 export interface MergePlace {
@@ -46,12 +42,12 @@ export function mergedTrapProblem(code: string, issues: readonly TrapIssue[], pl
 function zeroFieldProblem(trap: TrapModel, names: string[], issues: readonly TrapIssue[], base: Pick<Problem, 'code' | 'severity' | 'range'>, temperatureRange: Range | undefined): Problem {
   const rates = issues.map((i) => i.majoranaRateHz);
   const verb = names.length === 1 ? 'sits' : 'sit';
-  const head = `trap '${trap.name}': ${listText(names)} ${verb} at a zero of the field: the bias at the minimum is too small, Majorana spin flips lose atoms there`;
+  const head = `trap '${trap.name}': ${listWords(names, 'and')} ${verb} at a zero of the field: the bias at the minimum is too small, Majorana spin flips lose atoms there`;
   const rated = rates.every((r) => r !== undefined);
   let tail: string;
   if (rated) {
     const each = rates.map((r, k) => `${trimNumber(r!, 2)} /s${names.length > 1 ? ` for ${names[k]}` : ''}`);
-    tail = ` (about ${listText(each)} at the cloud temperature).`;
+    tail = ` (about ${listWords(each, 'and')} at the cloud temperature).`;
   } else if (temperatureRange) {
     tail = `; the cloud temperature written on line ${temperatureRange.start.line + 1} is not usable (see its own problem there), so there is no loss estimate: fix that value.`;
   } else {
@@ -72,12 +68,12 @@ function majoranaSlowText(trap: TrapModel, names: string[], issues: readonly Tra
     const lifetime = `a lifetime of ${trimNumber(1 / r, 2)} s`;
     return names.length === 1 ? `${trimNumber(r, 2)} /s at the cloud temperature (${lifetime})` : `${trimNumber(r, 2)} /s for ${names[k]} (${lifetime})`;
   });
-  return `trap '${trap.name}': ${listText(names)} ${verb} at a zero of the field; Majorana spin flips lose about ${listText(each)}${names.length === 1 ? '' : ' at the cloud temperature'}.`;
+  return `trap '${trap.name}': ${listWords(names, 'and')} ${verb} at a zero of the field; Majorana spin flips lose about ${listWords(each, 'and')}${names.length === 1 ? '' : ' at the cloud temperature'}.`;
 }
 
 /** Each sublevel with its depth, in the unit the cut was written in so the two compare at a glance. */
 function cutOutsideText(trap: TrapModel, names: string[], issues: readonly TrapIssue[], cutUnit: string | undefined): string {
   const each = issues.map((i, k) => (i.depthJ !== undefined ? `${names[k]} (depth ${cutEnergyText(i.depthJ, cutUnit)})` : names[k]!));
   const them = names.length === 1 ? 'it' : 'them';
-  return `trap '${trap.name}': the RF cut is above the trap's depth for ${listText(each)}: for ${them} the knife cuts nothing the edge does not.`;
+  return `trap '${trap.name}': the RF cut is above the trap's depth for ${listWords(each, 'and')}: for ${them} the knife cuts nothing the edge does not.`;
 }
