@@ -264,8 +264,9 @@ async function steady(): Promise<void> {
   const count = (name: string, fallback: number) => Math.max(1, Number(process.env[name]) || fallback);
   const lines = await steadyAgainstLapack({
     orders: [160, 192],
-    rounds: count('EIGEN_ROUNDS', 15),
+    rounds: count('EIGEN_ROUNDS', 20),
     timings: count('EIGEN_TIMINGS', 7),
+    pin: process.env.EIGEN_PIN !== '0',
     families: [
       {
         // As the one-shot comparison's engine side: entries uniform in ±0.5, the diagonal ten times wider.

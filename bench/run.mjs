@@ -28,6 +28,7 @@ const BENCHMARKS = [
   { name: 'slower', entry: 'bench/slower.bench.ts', call: 'runSlowerBench', about: 'a whole slower (profile, check, flight) and a 40-section coil design, against one exact solve' },
   { name: 'trap', entry: 'bench/trap.bench.ts', call: 'runTrapBench', about: 'trap summary of the 87Rb ground level (8 sublevels): quadrupole, Ioffe–Pritchard' },
   { name: 'trajectory', entry: 'bench/trajectory.bench.ts', call: 'runTrajectoryBench', about: 'one sublevel through a 200-step field map against the analytic deflection' },
+  { name: 'incr', entry: 'bench/keptVersion.bench.ts', call: 'runKeptVersionBench', about: 'evaluation worker job after a one-line edit of the 20,000-line file: fresh vs kept version' },
 ];
 
 const TMP = '.bench-tmp';

@@ -23,6 +23,8 @@ import time
 
 import mpmath as mp
 
+import block_charge_form as charge_form
+
 mp.mp.dps = 50
 
 SIZE = [mp.mpf("10e-3"), mp.mpf("10e-3"), mp.mpf("1e-6")]  # x, y, z: the film's normal is z
@@ -36,62 +38,27 @@ MAGNETISATIONS = {"normal": [0, 0, 1], "in-plane": [1, 0, 0], "oblique": ["0.36"
 SYMMETRY_ZERO = mp.mpf("1e-35")
 
 
+ZERO = [mp.mpf(0)] * 3  # the film is centred at the origin
+
+
 def faces(mag):
-    """(k, plane, charge in T) of every charged face of the film centred at 0."""
-    for k in range(3):
-        if mag[k] != 0:
-            yield k, SIZE[k] / 2, mp.mpf(mag[k])
-            yield k, -SIZE[k] / 2, -mp.mpf(mag[k])
+    return charge_form.faces(mag, SIZE, ZERO)
 
 
 def dipole_field(mag, x):
-    """The point dipole of the film's moment: B = (V / 4 pi) (3 (J.n) n - J) / r^3, J = mu0 M in T."""
-    volume = SIZE[0] * SIZE[1] * SIZE[2]
-    r = mp.sqrt(sum(c * c for c in x))
-    n = [c / r for c in x]
-    jn = sum(mp.mpf(mag[i]) * n[i] for i in range(3))
-    return [volume / (4 * mp.pi) * (3 * jn * n[i] - mp.mpf(mag[i])) / r ** 3 for i in range(3)]
+    return charge_form.dipole_field(mag, x, SIZE, ZERO)
 
 
 def symmetry_zeros(values):
-    """The values as floats, with those that vanish by symmetry (at 50 digits) written as exactly 0."""
-    largest = max(abs(v) for v in values)
-    return [0.0 if abs(v) <= SYMMETRY_ZERO * largest else float(v) for v in values]
-
-
-def face_field(k, plane, charge, x):
-    a, b = (k + 1) % 3, (k + 2) % 3
-    w = plane - x[k]
-    B = [mp.mpf(0)] * 3
-    for i, s in enumerate((-SIZE[a] / 2 - x[a], SIZE[a] / 2 - x[a])):
-        for j, t in enumerate((-SIZE[b] / 2 - x[b], SIZE[b] / 2 - x[b])):
-            sign = 1 if i == j else -1
-            R = mp.sqrt(s * s + t * t + w * w)
-            B[a] += sign * mp.log(t + R)
-            B[b] += sign * mp.log(s + R)
-            B[k] -= sign * mp.atan(s * t / (w * R))
-    c = charge / (4 * mp.pi)
-    return [c * v for v in B]
+    return charge_form.symmetry_zeros(values, SYMMETRY_ZERO)
 
 
 def film_field(mag, x):
-    B = [mp.mpf(0)] * 3
-    for k, plane, charge in faces(mag):
-        for i, v in enumerate(face_field(k, plane, charge, x)):
-            B[i] += v
-    return B
+    return charge_form.block_field(mag, x, SIZE, ZERO)
 
 
 def gradient_by_diff(mag, x):
-    g = [[None] * 3 for _ in range(3)]
-    for j in range(3):
-        def along(h, j=j):
-            y = list(x)
-            y[j] += h
-            return film_field(mag, y)
-        for i in range(3):
-            g[i][j] = mp.diff(lambda h, i=i: along(h)[i], 0)
-    return g
+    return charge_form.gradient_by_diff(mag, x, SIZE, ZERO)
 
 
 def gradient_by_quadrature(mag, x, i, j):

@@ -890,7 +890,12 @@ function leafQr() {
     (local.set $k (local.get $lo))
     (block $k_done (loop $kl
       (br_if $k_done (i32.ge_s (local.get $k) (local.get $hi)))
-      (local.set $r (call $rotationLength (local.get $x) (local.get $z)))
+      ;; $rotationLength written out: around a call V8 saves the chase's live doubles (it keeps no
+      ;; floating-point register across WebAssembly calls), on every rotation (1.01–1.09× the leaves).
+      (local.set $r (f64.add (f64.mul (local.get $x) (local.get $x)) (f64.mul (local.get $z) (local.get $z))))
+      (local.set $r (if (result f64) (i32.and (f64.gt (local.get $r) (f64.const 1e-280)) (f64.lt (local.get $r) (f64.const 1e280)))
+        (then (f64.sqrt (local.get $r)))
+        (else (call $hypot (local.get $x) (local.get $z)))))
       (local.set $c (select (f64.const 1) (f64.div (local.get $x) (local.get $r)) (f64.eq (local.get $r) (f64.const 0))))
       (local.set $s (select (f64.const 0) (f64.div (local.get $z) (local.get $r)) (f64.eq (local.get $r) (f64.const 0))))
       (if (i32.gt_s (local.get $k) (local.get $lo)) (then (f64.store ${at(l('e'), I(l('k'), -1))} (local.get $r))))

@@ -134,7 +134,7 @@ describe('sublevel diff: version pairs', () => {
       `beam main: peak [${HIGH_PEAK}]: present → gone`,
       `beam main: peak [${LOW_PEAK}]: present → gone`,
     ]);
-    expect(diff.things[0]!.new_diagnostics[0]).toMatchObject({ line: 10, column: 17, message: 'gradient needs T/m or G/cm, got T' });
+    expect(diff.things[0]!.new_diagnostics[0]).toMatchObject({ line: 10, column: 17, message: 'gradient needs T/m or G/cm, got T.' });
     // The other way round the error is gone.
     expect(reported(diffJson(`${F}/beam-invalid.sublevel`, `${F}/beam-old.sublevel`).diff)).toContain('magnet selector: gone error unit-wrong-dimension');
   });

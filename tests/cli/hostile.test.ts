@@ -98,7 +98,7 @@ describe('size caps on the command line', () => {
     expect(r.code).toBe(1);
     const report = JSON.parse(r.out) as { files: { diagnostics: { code: string; message: string; line: number }[] }[] };
     expect(report.files[0]!.diagnostics).toEqual([
-      expect.objectContaining({ code: 'document-too-large', line: 1, message: expect.stringMatching(/^this file is not checked: it has 11000\d\d characters, more than the 1000000 a setup file may have$/) }),
+      expect.objectContaining({ code: 'document-too-large', line: 1, message: expect.stringMatching(/^this file is not checked: it has 11000\d\d characters, more than the 1000000 a setup file may have\.$/) }),
     ]);
   });
 
@@ -106,12 +106,12 @@ describe('size caps on the command line', () => {
     const file = setup('many.sublevel', 'field f = 1 G\n'.repeat(20_001));
     const r = cli('check', file);
     expect(r.code).toBe(1);
-    expect(r.out).toBe(`${file}:1:1 error too-many-statements this file is not checked: it has more than 20000 statements, the most a setup file may have`);
+    expect(r.out).toBe(`${file}:1:1 error too-many-statements this file is not checked: it has more than 20000 statements, the most a setup file may have.`);
   });
 
   it('refuses a used file over the used-file cap without reading it', () => {
     setup('bigatoms.sublevel', `${ATOMS}${'# filler line\n'.repeat(80_000)}`);
     const r = cli('check', setup('usesbig.sublevel', 'use "bigatoms.sublevel"\n'));
-    expect(r.out).toMatch(/error use-file-too-large bigatoms\.sublevel is not read: it has 1120\d{3} bytes, more than the 500000 a used file may have$/);
+    expect(r.out).toMatch(/error use-file-too-large bigatoms\.sublevel is not read: it has 1120\d{3} bytes, more than the 500000 a used file may have\.$/);
   });
 });

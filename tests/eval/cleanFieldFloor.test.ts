@@ -11,7 +11,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { cleanField } from '../../server/src/eval/cleanField';
-import { slabFieldWithRoundOff, sumField } from '../../server/src/physics/fields';
+import { slabFieldWithRoundOff } from '../../server/src/physics/fields';
 import type { SlabSpec, Vec3 } from '../../server/src/physics/fields/types';
 
 interface FilmCase {
@@ -29,7 +29,7 @@ const REF: { sizeM: Vec3; cases: FilmCase[]; quadratureChecks: { relativeDiffere
 const film = (magnetisationT: Vec3): SlabSpec => ({ kind: 'slab', centre: [0, 0, 0], sizeM: REF.sizeM, magnetisationT });
 
 function cleaned(c: FilmCase): { B: number[]; G: number[] } {
-  const s = cleanField([film(c.magnetisationT)], sumField)(c.point);
+  const s = cleanField([film(c.magnetisationT)])(c.point);
   if (!('sample' in s)) throw new Error('the point is off the film');
   return { B: [...s.sample.B], G: s.sample.gradient.flat() };
 }
@@ -79,7 +79,7 @@ describe('a thin film (10 mm × 10 mm × 1 µm, 1 T) from 1 mm to 10 m', () => {
 describe('exact cancellations still print 0', () => {
   it('the centre of an off-origin block (50 × 20 × 6 mm at (13, −70, 31) mm): every derivative is 0 by symmetry, B is kept', () => {
     const block: SlabSpec = { kind: 'slab', centre: [0.013, -0.07, 0.031], sizeM: [0.05, 0.02, 0.006], magnetisationT: [0, 0, 1.2] };
-    const s = cleanField([block], sumField)(block.centre);
+    const s = cleanField([block])(block.centre);
     if (!('sample' in s)) throw new Error('the centre is inside, not on the block');
     expect(s.sample.gradient.flat()).toEqual([0, 0, 0, 0, 0, 0, 0, 0, 0]);
     // Inside: B = J − N·J with N the block's demagnetising factor along z (about 0.68 for this shape, textbook order of magnitude).
@@ -90,7 +90,7 @@ describe('exact cancellations still print 0', () => {
   it('two equal blocks magnetised against each other, midway between them: B is 0 as a whole', () => {
     const a: SlabSpec = { kind: 'slab', centre: [0.02, 0.3, -0.1], sizeM: [0.01, 0.01, 0.01], magnetisationT: [0.3, 0.4, 1] };
     const b: SlabSpec = { ...a, centre: [0.04, 0.3, -0.1], magnetisationT: [-0.3, -0.4, -1] };
-    const s = cleanField([a, b], sumField)([0.03, 0.3, -0.1]);
+    const s = cleanField([a, b])([0.03, 0.3, -0.1]);
     if (!('sample' in s)) throw new Error('the midpoint is off both blocks');
     expect(s.sample.B).toEqual([0, 0, 0]);
   });

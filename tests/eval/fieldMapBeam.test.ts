@@ -106,7 +106,7 @@ describe('a magnet built from sources', () => {
     const text = setup().replace('  at      = 0, 0, 1.5 mm', '  at      = 0, -2, 0 mm');
     const r = analyze(text).result!;
     const found = r.diagnostics.filter((d) => d.code === 'magnet-at-on-source');
-    expect(found.map((d) => d.message)).toEqual(["the beam line of magnet 'selector' passes through a wire of source 'rails' at its centre, where the field is not defined; move `at`"]);
+    expect(found.map((d) => d.message)).toEqual(["the beam line of magnet 'selector' passes through a wire of source 'rails' at its centre, where the field is not defined; move `at`."]);
     expect(found[0]!.line).toBe(text.split('\n').findIndex((l) => l.startsWith('  at ')) + 1);
     expect(r.magnets[0]!.field_T).toBeUndefined();
     expect(JSON.stringify(r)).not.toMatch(/NaN|Infinity/);

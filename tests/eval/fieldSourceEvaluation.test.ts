@@ -1,14 +1,14 @@
 /**
- * The evaluation entry of a field source, with the loops' exact on-axis field (the probe point of
- * a coil lies on its axis): centre field and gradient of Helmholtz and anti-Helmholtz pairs against
- * the textbook closed forms, the winding's numbers, cautions and problems.
+ * The evaluation entry of a field source (the physics core's field, cleaned): centre field and
+ * gradient of Helmholtz and anti-Helmholtz pairs against the textbook closed forms (the probe point
+ * of a coil lies on its axis, where the loops' on-axis field is exact), the winding's numbers,
+ * cautions and problems.
  */
 import { describe, expect, it } from 'vitest';
 import type { Problem } from '../../server/src/format/ast';
 import { evaluateFieldSource, probePoint, type SourceEvalInput } from '../../server/src/eval/fieldSourceEvaluation';
 import { sourceHeadline, sourceLines } from '../../server/src/eval/fieldSourceText';
 import type { FieldFunction, FieldSourceSpec, Mat3, Vec3 } from '../../server/src/physics/fields/types';
-import { sumField } from '../../server/src/physics/fields';
 
 const MU0 = 1.25663706127e-6; // CODATA 2022 μ0 (N/A²)
 const RANGE = { start: { line: 0, character: 5 }, end: { line: 0, character: 9 } };
@@ -46,7 +46,7 @@ describe('a coil pair at its centre', () => {
   it('Helmholtz spacing: B = (4/5)^{3/2} μ0 N I / R (textbook electromagnetism, e.g. Griffiths, Introduction to Electrodynamics; from memory)', () => {
     const R = 0.05;
     const NI = 100 * 2;
-    const r = evaluateFieldSource(coil({ parts: pair(R, R, NI, 'same'), radiusM: R, spacingM: R, sense: 'same', turns: 100, currentA: 2 }), onAxisLoops, []);
+    const r = evaluateFieldSource(coil({ parts: pair(R, R, NI, 'same'), radiusM: R, spacingM: R, sense: 'same', turns: 100, currentA: 2 }), []);
     expect(r.centre_m).toEqual([0, 0, 0]);
     expect(r.field_abs_T! / ((4 / 5) ** 1.5 * MU0 * NI / R)).toBeCloseTo(1, 12);
     // The axial derivative cancels exactly at the centre of a same-sense pair: printed as 0, not 1e-19.
@@ -59,29 +59,22 @@ describe('a coil pair at its centre', () => {
     const R = 0.035;
     const NI = 120 * 15;
     const d = Math.sqrt(3) * R;
-    const r = evaluateFieldSource(coil({ parts: pair(R, d, NI, 'opposite'), radiusM: R, spacingM: d, sense: 'opposite' }), onAxisLoops, []);
+    const r = evaluateFieldSource(coil({ parts: pair(R, d, NI, 'opposite'), radiusM: R, spacingM: d, sense: 'opposite' }), []);
     expect(r.field_T).toEqual([0, 0, 0]);
     expect(r.field_abs_T).toBe(0);
     const expected = ((48 * Math.sqrt(3)) / (49 * Math.sqrt(7))) * MU0 * NI / R ** 2;
     expect(Math.abs(r.axial_gradient_T_per_m!) / expected).toBeCloseTo(1, 12);
     expect(r.gradient_T_per_m![0]![0]).toBeCloseTo(-r.axial_gradient_T_per_m! / 2, 15);
+    // The whole tensor is the on-axis closed form's (off-diagonal entries 0 by symmetry).
+    const exact = onAxisLoops(pair(R, d, NI, 'opposite'))([0, 0, 0]).gradient;
+    for (let i = 0; i < 3; i++) {
+      for (let j = 0; j < 3; j++) expect(Math.abs(r.gradient_T_per_m![i]![j]! - exact[i]![j]!)).toBeLessThanOrEqual(1e-12 * expected);
+    }
     expect(sourceHeadline(r)).toContain('(√3 R: the most uniform gradient)');
     const lines = sourceLines(r);
     expect(lines[0]).toBe('at the centre (0, 0, 0) m: |B| = 0 G, B = (0, 0, 0) G');
     // Positive: just above the centre the upper (positive) loop is nearer.
     expect(lines[1]).toMatch(/^axial gradient ∂B_z\/∂z = 1\.18\d+ T\/m = 118\.\d+ G\/cm$/);
-  });
-});
-
-describe('with the physics core\'s exact loops (sumField)', () => {
-  it('Helmholtz pair: the textbook centre field; opposed pair: B = 0 exactly, no gradient of |B| noise', () => {
-    const R = 0.05;
-    const same = evaluateFieldSource(coil({ parts: pair(R, R, 200, 'same'), radiusM: R, spacingM: R, sense: 'same' }), sumField, []);
-    expect(same.field_abs_T! / ((4 / 5) ** 1.5 * MU0 * 200 / R)).toBeCloseTo(1, 12);
-    expect(same.axial_gradient_T_per_m).toBe(0);
-    const opposed = evaluateFieldSource(coil({ parts: pair(R, Math.sqrt(3) * R, 200, 'opposite'), radiusM: R, spacingM: Math.sqrt(3) * R, sense: 'opposite' }), sumField, []);
-    expect(opposed.field_T).toEqual([0, 0, 0]);
-    expect(opposed.axial_gradient_T_per_m! / (((48 * Math.sqrt(3)) / (49 * Math.sqrt(7))) * MU0 * 200 / R ** 2)).toBeCloseTo(1, 12);
   });
 });
 
@@ -91,7 +84,7 @@ describe('the winding of a coil', () => {
 
   it('gives wire length, resistance, current density, power and voltage', () => {
     const problems: Problem[] = [];
-    const r = evaluateFieldSource(input, onAxisLoops, problems);
+    const r = evaluateFieldSource(input, problems);
     expect(r.winding!.wire_length_m).toBeCloseTo(52.778757, 5);
     expect(r.winding!.resistance_ohm).toBeCloseTo(0.8045977, 6);
     expect(r.winding!.power_W).toBeCloseTo(181.03448, 4);
@@ -106,16 +99,16 @@ describe('the winding of a coil', () => {
 
   it('warns when even water cooling would not do', () => {
     const problems: Problem[] = [];
-    evaluateFieldSource({ ...input, conductorM: 0.5e-3 }, onAxisLoops, problems);
+    evaluateFieldSource({ ...input, conductorM: 0.5e-3 }, problems);
     expect(problems.map((p) => [p.code, p.severity])).toEqual([['coil-overheats', 'warning']]);
   });
 
   it('raises nothing for an air-cooled winding and has no winding without a conductor', () => {
     const problems: Problem[] = [];
-    const r = evaluateFieldSource({ ...input, conductorM: 3e-3 }, onAxisLoops, problems);
+    const r = evaluateFieldSource({ ...input, conductorM: 3e-3 }, problems);
     expect(r.winding!.cooling).toBe('air');
     expect(problems).toEqual([]);
-    expect(evaluateFieldSource({ ...input, conductorM: undefined }, onAxisLoops, problems).winding).toBeUndefined();
+    expect(evaluateFieldSource({ ...input, conductorM: undefined }, problems).winding).toBeUndefined();
   });
 });
 
@@ -130,7 +123,7 @@ describe('where a source is probed', () => {
   });
 
   it('a source with problems has parts [] and no values, and says so', () => {
-    const r = evaluateFieldSource(coil({ parts: [] }), onAxisLoops, []);
+    const r = evaluateFieldSource(coil({ parts: [] }), []);
     expect(r).toEqual({ name: 'quad', kind: 'coil', parts: [], cautions: [] });
     expect(sourceLines(r)).toEqual(['not computed: the block has problems to fix (see diagnostics)']);
   });
@@ -146,7 +139,7 @@ describe('a magnetised block at its centre', () => {
   });
 
   it.each([[[0, 0, -0.009]], [[0, 0, 0.005]], [[0.013, -0.07, 0.031]]] as [Vec3][])('at %j the gradient is exactly 0 and no gradient line is printed', (centre) => {
-    const r = evaluateFieldSource(block(centre), sumField, []);
+    const r = evaluateFieldSource(block(centre), []);
     expect(r.gradient_T_per_m!.flat().every((g) => g === 0)).toBe(true);
     expect(sourceLines(r).some((l) => l.includes('gradient'))).toBe(false);
     // The field itself is along the magnetisation (z) only: B_x = B_y = 0 exactly.

@@ -5,6 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import { regionText, trapSummaryLines } from '../../server/src/eval/trapText';
+import { quadrupoleTrapSetup } from './quadrupoleTrapSetup';
 
 describe('regionText', () => {
   it('puts a centre at the origin in the radius unit', () => {
@@ -23,18 +24,7 @@ describe('regionText', () => {
 
 describe('the trap summary line', () => {
   it('names the default region in one unit (an invented quadrupole pair, 4 cm radius, 8 cm apart)', () => {
-    const t = analyze(`species Rb87
-  level ground: 5s 2S1/2
-coil quad
-  radius  = 4 cm
-  turns   = 100
-  current = 20 A
-  spacing = 8 cm
-  sense   = opposite
-trap q
-  sources = quad
-  level   = ground
-`).result!.traps![0]!;
+    const t = analyze(quadrupoleTrapSetup()).result!.traps![0]!;
     const line = trapSummaryLines(t)[1]!;
     // 0.9 × √(4² + 4²) cm = 5.091 cm (the region stops 90 % of the way to the windings).
     expect(line).toContain('region 5.091 cm about (0, 0, 0) cm');

@@ -6,19 +6,10 @@
  */
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
+import { quadrupoleTrapSetup } from './quadrupoleTrapSetup';
 
-const TRAP = (temperature: string | undefined, cut?: string) => `species Rb87
-  level ground: 5s 2S1/2
-coil quad
-  radius  = 4 cm
-  turns   = 100
-  current = 20 A
-  spacing = 8 cm
-  sense   = opposite
-trap q
-  sources = quad
-  level   = ground
-${temperature === undefined ? '' : `  temperature = ${temperature}\n`}${cut === undefined ? '' : `  cut = ${cut}\n`}`;
+const TRAP = (temperature: string | undefined, cut?: string) =>
+  quadrupoleTrapSetup(`${temperature === undefined ? '' : `  temperature = ${temperature}\n`}${cut === undefined ? '' : `  cut = ${cut}\n`}`);
 
 function zeroField(temperature: string | undefined) {
   return analyze(TRAP(temperature)).result!.diagnostics.filter((d) => d.code === 'trap-zero-field');

@@ -85,8 +85,8 @@ describe('control and bidirectional characters', () => {
   it('one problem per line and kind, with the count in the message', () => {
     const doc = parseSetup(CLEAN + '\u0007\u0007 \u0000\u0001\n');
     expect(doc.problems.filter((p) => p.code.startsWith('text-')).map((p) => [p.code, p.range.start.character, p.message])).toEqual([
-      ['text-control-character', 0, 'an invisible control character U+0007 (3 such characters on this line), e.g. part of a terminal escape code; delete it'],
-      ['text-nul-character', 3, 'a NUL character: the file looks binary or damaged; delete it'],
+      ['text-control-character', 0, 'an invisible control character U+0007 (3 such characters on this line), e.g. part of a terminal escape code; delete it.'],
+      ['text-nul-character', 3, 'a NUL character: the file looks binary or damaged; delete it.'],
     ]);
   });
 
@@ -95,7 +95,7 @@ describe('control and bidirectional characters', () => {
     const problems = parseSetup(text).problems.filter((p) => p.code.startsWith('text-'));
     expect(problems).toHaveLength(2 * MAX_REPORTED_LINES);
     expect(new Set(problems.map((p) => p.range.start.line)).size).toBe(MAX_REPORTED_LINES);
-    expect(problems.at(-1)!.message).toMatch(/; 150 more lines have invisible characters and are not listed$/);
+    expect(problems.at(-1)!.message).toMatch(/; 150 more lines have invisible characters and are not listed\.$/);
   });
 
   it('the new codes are registered', () => {

@@ -67,7 +67,7 @@ describe('docs/format.md, sentence by sentence', () => {
   it('the messages say the fix the page describes: the run of subshells read one way, the arrow to write', () => {
     const messages = analyze(`species He4\n  level m: 1s22s 3S1\n${NA}line D2: ground => upper\n`).problems.map((p) => p.message);
     expect(messages).toContain("'1s22s' runs two subshells together; put a space between them: 1s2 2s.");
-    expect(messages).toContain("'=>' is not the arrow: write '->' between the levels");
+    expect(messages).toContain("'=>' is not the arrow: write '->' between the levels.");
   });
 });
 

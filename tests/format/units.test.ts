@@ -134,17 +134,17 @@ describe('readQuantity: problems in plain words', () => {
   }
 
   it('a bare number where a unit is needed', () => {
-    expect(problem('180', 'gradient')).toEqual(['unit-missing', 'gradient needs a unit such as T/m or G/cm', '1:11-1:14']);
+    expect(problem('180', 'gradient')).toEqual(['unit-missing', 'gradient needs a unit such as T/m or G/cm.', '1:11-1:14']);
     expect(readQuantity(part('180'), 'gradient').problem?.data?.suggestions).toEqual(['180 T/m', '180 G/cm']);
   });
 
   it('the wrong dimension names what was expected and what was got', () => {
-    expect(problem('180 T', 'gradient')).toEqual(['unit-wrong-dimension', 'gradient needs T/m or G/cm, got T', '1:15-1:16']);
-    expect(problem('3 m', 'flux-density')[1]).toBe('flux density needs T, mT or G, got m');
+    expect(problem('180 T', 'gradient')).toEqual(['unit-wrong-dimension', 'gradient needs T/m or G/cm, got T.', '1:15-1:16']);
+    expect(problem('3 m', 'flux-density')[1]).toBe('flux density needs T, mT or G, got m.');
     expect(problem('8 m', 'dimensionless')[0]).toBe('unit-wrong-dimension');
     expect(problem('3 degC', 'length')[0]).toBe('unit-wrong-dimension');
     const named = readQuantity(part('2 T'), 'length', 'drift');
-    expect(named.problem?.message).toBe('drift needs m, cm, mm or um, got T');
+    expect(named.problem?.message).toBe('drift needs m, cm, mm or um, got T.');
   });
 
   it('unknown unit names get "did you mean", with the range of the name', () => {
@@ -165,7 +165,7 @@ describe('readQuantity: problems in plain words', () => {
   it('a word where a quantity is needed', () => {
     expect(problem('oven', 'temperature')).toEqual([
       'unit-not-a-quantity',
-      "temperature needs a number with a unit such as K or degC, got 'oven'",
+      "temperature needs a number with a unit such as K or degC, got 'oven'.",
       '1:11-1:15',
     ]);
   });

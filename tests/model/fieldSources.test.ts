@@ -164,7 +164,7 @@ describe('source diagnostics (code at line:column)', () => {
   it('the overlap names the other source as related information', () => {
     const a = analyze('coil a\n  radius = 2 cm\n  turns = 1\n  current = 1 A\ncoil b\n  radius = 2 cm\n  turns = 1\n  current = 1 A\n');
     const p = a.problems.find((x) => x.code === 'source-overlap')!;
-    expect(p.message).toBe("coil 'b' has a loop on top of one of coil 'a' (same centre, radius and axis); the field on it is infinite, so one of them is probably misplaced");
+    expect(p.message).toBe("coil 'b' has a loop on top of one of coil 'a' (same centre, radius and axis); the field on it is infinite, so one of them is probably misplaced.");
     expect(p.related?.[0]?.range.start.line).toBe(0);
   });
 });

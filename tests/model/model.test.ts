@@ -150,7 +150,7 @@ describe('apparatus', () => {
     const text = 'species Na23\n  level g: 3s 2S1/2\nspecies Li7\n  level g: 2s 2S1/2\nbeam b\n  species = Na23\n  level = Li7.g\n';
     const found = analyze(text).problems.filter((p) => p.code === 'beam-level-of-other-species');
     expect(found.map((p) => [p.range.start.line, p.range.start.character, p.range.end.character])).toEqual([[6, 10, 15]]);
-    expect(found[0]!.message).toBe("beam 'b' carries Na23, but its level 'g' belongs to Li7; name a level of Na23, or change the species");
+    expect(found[0]!.message).toBe("beam 'b' carries Na23, but its level 'g' belongs to Li7; name a level of Na23, or change the species.");
     // No beam result mixes Na23's mass with Li7's moments: the beam has no level, so it is not flown.
     expect(model(text).beams[0]!.level).toBeUndefined();
     // The same level named through the beam's own species, or with no species written, is fine.

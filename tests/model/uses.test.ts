@@ -105,7 +105,7 @@ describe('what goes wrong with use', () => {
 
   it('a text that is not read from a file cannot use another', () => {
     const a = analyze('use "x.sublevel"\n');
-    expect(a.problems.map((p) => [p.code, p.message])).toEqual([['use-file-missing', 'cannot read x.sublevel: this text is not read from a file, so it cannot use other files']]);
+    expect(a.problems.map((p) => [p.code, p.message])).toEqual([['use-file-missing', 'cannot read x.sublevel: this text is not read from a file, so it cannot use other files.']]);
   });
 
   it('a used file with errors: one warning at the use line, pointing into that file', () => {
@@ -140,8 +140,8 @@ describe('what goes wrong with use', () => {
   it('names the circle', () => {
     const a = run('use "b.sublevel"', { 'b.sublevel': 'use "main.sublevel"' });
     const p = a.problems.find((x) => x.code === 'use-cycle')!;
-    expect(p.message).toBe('b.sublevel uses this file in turn: files cannot use each other in a circle');
-    expect(p.related![0]).toMatchObject({ uri: 'file:///ws/b.sublevel', message: 'main.sublevel leads back to this file (main.sublevel → b.sublevel → main.sublevel): files cannot use each other in a circle' });
+    expect(p.message).toBe('b.sublevel uses this file in turn: files cannot use each other in a circle.');
+    expect(p.related![0]).toMatchObject({ uri: 'file:///ws/b.sublevel', message: 'main.sublevel leads back to this file (main.sublevel → b.sublevel → main.sublevel): files cannot use each other in a circle.' });
   });
 
   it('names a circle even when the analysed text has no location of its own', () => {
@@ -168,7 +168,7 @@ describe('what goes wrong with use', () => {
     const a = run(lines('use "atoms/alkalis.sublevel"', 'species K39', '  level g: 4s 2S1/2'), { 'atoms/alkalis.sublevel': ALKALIS });
     const p = a.problems.find((x) => x.code === 'name-duplicate')!;
     expect(formatRange(p.range)).toBe('1:8-1:11');
-    expect(p.message).toBe("species 'K39' is also declared in atoms/alkalis.sublevel (used on line 1); the one here is used");
+    expect(p.message).toBe("species 'K39' is also declared in atoms/alkalis.sublevel (used on line 1); the one here is used.");
     expect(p.related).toEqual([{ message: "'K39' is declared in atoms/alkalis.sublevel", range: expect.objectContaining({ start: { line: 1, character: 8 } }), uri: 'file:///ws/atoms/alkalis.sublevel' }]);
     expect(a.model!.species.map((s) => [s.name, s.origin === undefined])).toEqual([['K39', true]]);
   });
@@ -240,7 +240,7 @@ describe('what use may read', () => {
     const realLocation = (l: string): string | undefined => (l === 'file:///ws/link.sublevel' ? 'file:///etc/x.sublevel' : l);
     const a = analyze('use "link.sublevel"', { ...reader, realLocation });
     expect(a.problems.map((p) => `${p.code} ${p.message}`)).toEqual([
-      'use-outside-root link.sublevel is not read: it is a link that leads outside file:///ws/; `use` reads only files inside it',
+      'use-outside-root link.sublevel is not read: it is a link that leads outside file:///ws/; `use` reads only files inside it.',
     ]);
     // A link inside the root that stays inside is fine.
     const inside = analyze('use "link.sublevel"', { ...memorySources(ROOT, { 'file:///ws/link.sublevel': ALKALIS }), realLocation: (l) => l.replace('link', 'real') });
@@ -251,13 +251,13 @@ describe('what use may read', () => {
     const big = `species K39\n${'# filler\n'.repeat(120_000)}`;
     const a = run('use "big.sublevel"', { 'big.sublevel': big });
     expect(a.problems.map((p) => `${p.code} ${p.message}`)).toEqual([
-      `use-file-too-large big.sublevel is not read: it has ${big.length} characters, more than the 500000 a used file may have`,
+      `use-file-too-large big.sublevel is not read: it has ${big.length} characters, more than the 500000 a used file may have.`,
     ]);
     const many = run('use "many.sublevel"', { 'many.sublevel': `species K39\n${'  level x: 4s 2S1/2\n'.repeat(20_000)}` });
     expect(many.problems.map((p) => `${p.code} ${p.message}`)).toEqual([
-      'use-file-too-large many.sublevel is not used: it has more than 20000 statements, the most a setup file may have',
+      'use-file-too-large many.sublevel is not used: it has more than 20000 statements, the most a setup file may have.',
     ]);
     const onDisk = analyze('use "huge.sublevel"', { ...memorySources(ROOT, {}), readFile: () => ({ tooLarge: true, bytes: 15_000_000 }) });
-    expect(onDisk.problems[0]!.message).toBe('huge.sublevel is not read: it has 15000000 bytes, more than the 500000 a used file may have');
+    expect(onDisk.problems[0]!.message).toBe('huge.sublevel is not read: it has 15000000 bytes, more than the 500000 a used file may have.');
   });
 });

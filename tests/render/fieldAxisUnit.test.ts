@@ -1,7 +1,8 @@
 /**
  * The one rule for a figure's field axis (render/fieldAxisUnit.ts): the family the file wrote while
  * the tick labels stay short; a gauss axis past 0.1 T reads in T (1 T = 10⁴ G, SI definition of the
- * gauss). The marker's echo of the user's value keeps the written unit.
+ * gauss). With no unit written the axis follows the reports' field text (eval/quantityText.ts fieldText):
+ * G from 1 G up to 0.1 T, T from there; µT/nT below 1 G. The marker's echo of the user's value keeps the written unit.
  */
 import { describe, expect, it } from 'vitest';
 import { fieldAxisUnit } from '../../server/src/render/fieldAxisUnit';
@@ -22,7 +23,14 @@ describe('field axis unit', () => {
     [20, 'mT', 'T'],
     [2e-6, 'uT', 'µT'],
     [0.005, undefined, 'G'],
+    [0.0558, undefined, 'G'],
+    [0.3, undefined, 'T'],
     [3, undefined, 'T'],
+    [5e-5, undefined, 'µT'],
+    [0, undefined, 'T'],
+    [0, 'G', 'T'],
+    [Number.NaN, undefined, 'T'],
+    [Number.POSITIVE_INFINITY, 'mT', 'T'],
   ] as const)('axis to %s T, written %s → %s', (top, written, unit) => {
     expect(fieldAxisUnit(top, written)).toBe(unit);
   });
@@ -38,10 +46,13 @@ describe('field axis unit', () => {
     expect(d.svg).toContain('2000 G');
   });
 
-  it('a slower whose field passes 0.1 T reads its B axis in T; the example (558 G) stays in G', () => {
+  it('a slower whose field passes 0.1 T reads its B axis in T; the example (558 G, no unit written) reads G as its reports do', () => {
     const s = analyze(readFileSync(new URL('../../examples/sodium-slower.sublevel', import.meta.url), 'utf8')).result!.slowers![0]!;
     expect(renderSlower(slowerView(s)!, { kind: 'export' })).toContain('>B (G)<');
+    // A bias written in gauss keeps the slower's axis in gauss.
+    expect(renderSlower({ ...slowerView(s)!, fieldWrittenUnit: 'G' }, { kind: 'export' })).toContain('>B (G)<');
     const strong = { ...s, samples: s.samples!.map((x) => ({ ...x, B_ideal_T: 4 * x.B_ideal_T, B_coils_T: 4 * x.B_coils_T! })) };
+    expect(renderSlower({ ...slowerView(strong)!, fieldWrittenUnit: 'G' }, { kind: 'export' })).toContain('>B (T)<');
     expect(renderSlower(slowerView(strong)!, { kind: 'export' })).toContain('>B (T)<');
   });
 });

@@ -75,6 +75,7 @@ describe('the field map line and the sources drawn', () => {
 describe('the field map figure', () => {
   it('draws |B| of a quadrupole as the V it is (linear axis), with the values at the right places', () => {
     const v = fieldMapView([{ name: 'quad', kind: 'coil', parts: pair }], quadrupole(0.3), { points: 201 })!;
+    // No unit written and the axis tops out below 0.1 T: G, as the reports read it (the one rule of every field axis, render/fieldAxisUnit.ts).
     expect(v.fieldUnit).toBe('G');
     const mid = 100;
     expect(v.positionsM[mid]).toBeCloseTo(0, 12);

@@ -86,7 +86,11 @@ describe('mergedName', () => {
   it.each([
     [['F=2, m_F=+1', 'F=2, m_F=-2', 'F=2, m_F=0'], 'F=2, m_F=-2…+1'],
     [['J=3/2, F=3, m_F=+3/2', 'J=3/2, F=3, m_F=-1/2'], 'J=3/2, F=3, m_F=-1/2…+3/2'],
-    [['J=3/2, F=3, m_F=+1', 'J=3/2, F=2, m_F=0'], 'J=3/2: 2 states'],
+    [['J=3/2, F=3, m_F=+1', 'J=3/2, F=2, m_F=0'], 'J=3/2, F=2,3: 2 states'],
+    // States of several F whose zero-field ends coincide name the F values they merge.
+    [['F=4, m_F=+1', 'F=3, m_F=0', 'F=4, m_F=-4', 'F=3, m_F=+3'], 'F=3,4: 4 states'],
+    [['F=1, m_F=0', 'F=3, m_F=0', 'F=2, m_F=0', 'F=4, m_F=0'], 'F=1…4: 4 states'],
+    [['F=1/2, m_F=+1/2', 'F=5/2, m_F=-1/2'], 'F=1/2,5/2: 2 states'],
     [['m_J=+1/2', 'F=1, m_F=0'], '2 states'],
   ])('%j → %s', (labels, want) => {
     expect(mergedName(labels)).toBe(want);

@@ -6,6 +6,9 @@
 import { describe, expect, it } from 'vitest';
 import { renderResiduals, type ResidualsViewData } from '../../server/src/render';
 import { all, parseSvg, textOf } from './svgTree';
+import { analyze } from '../../server/src/eval/analyze';
+import { residualsView } from '../../server/src/views/residualsView';
+import { readFileSync } from 'node:fs';
 
 const theme = { kind: 'export' } as const;
 
@@ -41,6 +44,26 @@ function xTicks(svg: string): string[] {
 }
 
 describe('residuals figure', () => {
+  it('reads its field axis in the unit the example wrote its points in (mT), not the no-unit rule (T past 0.1 T)', () => {
+    const fit = analyze(readFileSync(new URL('../../examples/fit-rubidium.sublevel', import.meta.url), 'utf8')).result!.fits!.find((f) => f.name === 'constants')!;
+    expect(fit.at_written_unit).toBe('mT');
+    const view = residualsView(fit)!;
+    expect(view.xWrittenUnit).toBe('mT');
+    const root = parseSvg(renderResiduals(view, theme));
+    expect(root.attrs['data-x-unit']).toBe('mT');
+    // The same points with no unit written read the reports' unit for a 150 mT top: T, each log tick with its own prefix.
+    expect(parseSvg(renderResiduals({ ...view, xWrittenUnit: undefined }, theme)).attrs['data-x-unit']).toBe('T');
+  });
+
+  it('draws points that all lie at zero field on a T axis with short ticks, not nT ticks of ±100,000,000', () => {
+    const svg = renderResiduals(data([0, 0, 0]), theme);
+    expect(parseSvg(svg).attrs['data-x-unit']).toBe('T');
+    const ticks = xTicks(svg).map((t) => Math.abs(Number(t.replace('−', '-'))));
+    expect(ticks.length).toBeGreaterThan(0);
+    for (const t of ticks) expect(t).toBeLessThan(1);
+    expect(svg).not.toContain('100,000,000');
+  });
+
   it('draws fields from 2 µT to 1 T on a log axis, every point apart', () => {
     const svg = renderResiduals(data([2e-6, 0.01, 0.02, 0.15, 1]), theme);
     const root = parseSvg(svg);
@@ -55,8 +78,8 @@ describe('residuals figure', () => {
   });
 
   it('labels every decade the points span: the 0.5 mT points of the example read on the axis', () => {
-    // The fields of examples/fit-rubidium.sublevel (0.5, 20, 60, 150 mT).
-    const svg = renderResiduals(data([5e-4, 0.02, 0.06, 0.15]), theme);
+    // The fields of examples/fit-rubidium.sublevel (0.5, 20, 60, 150 mT), written in mT.
+    const svg = renderResiduals({ ...data([5e-4, 0.02, 0.06, 0.15]), xWrittenUnit: 'mT' }, theme);
     const root = parseSvg(svg);
     expect(root.attrs['data-x-scale']).toBe('log');
     expect(root.attrs['data-x-unit']).toBe('mT');

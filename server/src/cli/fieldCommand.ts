@@ -20,7 +20,7 @@ import { csvNumber } from '../eval/machineText';
 import { lengthUnitFor } from '../eval/lengthUnit';
 import { GAUSS_TESLA_SWITCH_T, trimNumber } from '../eval/quantityText';
 import type { FieldSourceModel, SetupModel } from '../model/types';
-import { conductorOf, magnitudeGradient, sumField } from '../physics/fields';
+import { conductorOf, magnitudeGradient } from '../physics/fields';
 import { cleanField } from '../eval/cleanField';
 import type { FieldSample, Vec3 } from '../physics/fields/types';
 
@@ -110,7 +110,7 @@ function chooseSources(file: string, model: SetupModel, wanted: string | undefin
 }
 
 export function sampleField(sources: readonly FieldSourceModel[], plan: FieldPointPlan): FieldPointRow[] {
-  const field = cleanField(sources.flatMap((s) => s.parts), sumField);
+  const field = cleanField(sources.flatMap((s) => s.parts));
   return plan.points.map((point) => {
     const c = field(point);
     if ('onSource' in c) return { point, onSource: c.onSource.message, conductor: conductorOf(c.onSource) };

@@ -4,6 +4,7 @@
  */
 import type { Problem, SetupDocument } from '../format/ast';
 import { parseSetup } from '../format/parser';
+import type { BlockMemo } from '../model/blockMemo';
 import { buildModel } from '../model/buildModel';
 import { recordSources, type SetupSources, type SourceSnapshot } from '../model/sources';
 import type { SetupModel } from '../model/types';
@@ -53,10 +54,19 @@ export function analyze(text: string, options?: AnalyzeOptions, stop?: StopCheck
     return { doc: unparsedDocument(text), problems: [internalError(e)] };
   }
   stopIfAsked(stop);
+  return analyzeParsed(doc, options, stop);
+}
+
+/**
+ * `analyze` for a text already parsed (`doc`, as `parseSetup` gives it; the caller has checked
+ * the caps with `refusedAnalysis`): the model and the evaluation, with the same outcome. `memo`:
+ * the model builders' memo, when the caller keeps one from an earlier version (model/blockMemo.ts).
+ */
+export function analyzeParsed(doc: SetupDocument, options?: AnalyzeOptions, stop?: StopCheck, memo?: BlockMemo): Analysis {
   const recording = options ? recordSources(options) : undefined;
   const withSources = <T extends object>(a: T): T & { sources?: SourceSnapshot } => (recording ? { ...a, sources: recording.snapshot() } : a);
   try {
-    const model = buildModel(doc, recording?.sources, undefined, undefined, stop);
+    const model = buildModel(doc, recording?.sources, undefined, memo, stop);
     stopIfAsked(stop);
     const { result, problems } = evaluate(model, [...doc.problems, ...model.problems], stop);
     return withSources({ doc, model, result, problems });
@@ -66,12 +76,13 @@ export function analyze(text: string, options?: AnalyzeOptions, stop?: StopCheck
   }
 }
 
-function internalError(e: unknown): Problem {
+/** The one wording of a failure inside Sublevel (also the fast analysis's, service/fastAnalysis.ts). */
+export function internalError(e: unknown): Problem {
   const detail = e instanceof Error ? e.message : String(e);
   return {
     code: 'internal-error',
     severity: 'error',
-    message: `Sublevel failed on this file (${detail}); please report it with the file attached`,
+    message: `Sublevel failed on this file (${detail}); please report it with the file attached.`,
     range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } },
   };
 }

@@ -15,13 +15,13 @@ import { evaluateResonance } from './resonanceEvaluation';
 import { attachUncertainty } from './uncertainty/attach';
 import { evaluateFit } from './fitEvaluation';
 import { evaluateFieldSource, sourceEvalInput } from './fieldSourceEvaluation';
-import { sumField } from '../physics/fields';
 import { evaluateSlower } from './slowerEvaluation';
 import { evaluateTrap } from './trapEvaluation';
 import { EVAL_RULES } from './evalCodes';
 import { fieldScope } from './fieldScope';
 import { evaluateLevel, type EvaluationNote } from './levelEvaluation';
 import { stopIfAsked, type StopCheck } from '../format/stopCheck';
+import { endSentence } from '../format/sentenceEnd';
 import {
   EVALUATION_FORMAT,
   EVALUATION_VERSION,
@@ -78,7 +78,7 @@ export function evaluate(model: SetupModel, earlier: Problem[], stop?: StopCheck
   // Sources and traps print fields in the unit family the file writes fields in (the first field or magnet that gives a unit).
   const fieldUnit = fields.find((f) => f.unit !== undefined)?.unit;
   stopIfAsked(stop);
-  const fieldSources = model.sources.map((s) => evaluateFieldSource(sourceEvalInput(s, fieldUnit), sumField, sourceProblems));
+  const fieldSources = model.sources.map((s) => evaluateFieldSource(sourceEvalInput(s, fieldUnit), sourceProblems));
   const slowerProblems: Problem[] = [];
   const slowers = model.slowers.map((s) => (stopIfAsked(stop), evaluateSlower(s, gJOf, model.settings, slowerProblems)));
   const trapProblems: Problem[] = [];
@@ -131,7 +131,9 @@ export function evaluate(model: SetupModel, earlier: Problem[], stop?: StopCheck
   stopIfAsked(stop);
   const uncertainty = attachUncertainty(model, result, gJOf);
   if (uncertainty.inputs) result.uncertainty_inputs = uncertainty.inputs;
-  const problems = sortProblems([...earlier, ...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...sourceProblems, ...slowerProblems, ...trapProblems, ...uncertainty.problems]);
+  // The evaluation's findings get their closing stop here, the one place they are gathered (the parser's and model's have it already).
+  const found = [...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...sourceProblems, ...slowerProblems, ...trapProblems, ...uncertainty.problems];
+  const problems = sortProblems([...earlier, ...found.map((p) => ({ ...p, message: endSentence(p.message) }))]);
   result.diagnostics = problems.map(toDiagnosticResult);
   return { result, problems };
 }

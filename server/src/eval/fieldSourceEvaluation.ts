@@ -2,14 +2,13 @@
  * Field source → its evaluation entry: the exact parts, B and the gradient tensor at its centre
  * (exact cancellations such as the centre of an opposed pair cleaned to 0), the copper winding's
  * numbers when a `conductor` is given, the cautions, and the problems the winding raises.
- * The field of a list of parts comes from `fieldOf` (the physics core's sumField in use; tests may
- * pass analytic fields).
+ * The field is the physics core's (cleanField over sumField).
  */
 import type { Problem, Range } from '../format/ast';
 import { loopWireLength, windingPower, type WindingPower } from '../physics/fields/coilPower';
 import { sourceCautions } from './fieldSourceCautions';
 import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
-import { CANCELLATION_FLOOR, cleanField, type FieldOf } from './cleanField';
+import { axialDerivative, cleanField } from './cleanField';
 import type { FieldSourcePartResult, FieldSourceResult, WindingResult } from './fieldSourceResultTypes';
 import { EVAL_RULES } from './evalCodes';
 import type { FieldSourceModel } from '../model/types';
@@ -50,7 +49,7 @@ export interface SourceEvalInput {
   fieldUnit?: string;
 }
 
-export function evaluateFieldSource(s: SourceEvalInput, fieldOf: FieldOf, problems: Problem[]): FieldSourceResult {
+export function evaluateFieldSource(s: SourceEvalInput, problems: Problem[]): FieldSourceResult {
   const parts = s.parts.map(partResult);
   const out: FieldSourceResult = { name: s.name, kind: s.kind, parts, cautions: [] };
   if (s.fieldUnit) out.field_unit = s.fieldUnit;
@@ -59,22 +58,17 @@ export function evaluateFieldSource(s: SourceEvalInput, fieldOf: FieldOf, proble
     out.pair = { sense: s.sense ?? 'same', spacing_m: s.spacingM, spacing_over_radius: s.spacingM / s.radiusM };
   }
   const centre = probePoint(s.parts);
-  const probed = centre && cleanField(s.parts, fieldOf)(centre);
-  const sample = probed && 'sample' in probed ? probed.sample : undefined;
-  if (centre && sample) {
+  const probed = centre && cleanField(s.parts)(centre);
+  if (centre && probed && 'sample' in probed) {
+    const { sample, floor } = probed;
     const G = sample.gradient;
     out.centre_m = [...centre];
     out.field_T = [...sample.B];
     out.field_abs_T = Math.hypot(...sample.B);
     out.gradient_T_per_m = G.map((r) => [...r]);
     const axial = s.parts[0];
-    if (axial && (axial.kind === 'loop' || axial.kind === 'solenoid')) {
-      const a = axial.axis;
-      let d = 0;
-      for (let i = 0; i < 3; i++) for (let j = 0; j < 3; j++) d += a[i]! * G[i]![j]! * a[j]!;
-      // The axis is a unit vector with rounding: a zero tensor must stay exactly zero.
-      out.axial_gradient_T_per_m = Math.abs(d) <= CANCELLATION_FLOOR * Math.max(...G.flat().map(Math.abs)) ? 0 : d;
-    }
+    // Zeroed within the rounding the cleaned tensor carries at the centre, as its entries are.
+    if (axial && (axial.kind === 'loop' || axial.kind === 'solenoid')) out.axial_gradient_T_per_m = axialDerivative(G, axial.axis, floor.gradient);
   }
   const w = winding(s);
   if (w) {

@@ -5,11 +5,12 @@
  */
 import type { Problem, SetupDocument } from '../format/ast';
 import { countStatements, MAX_DOCUMENT_CHARS, MAX_STATEMENTS } from '../model/limits';
+import { endSentence } from '../format/sentenceEnd';
 import { EVAL_RULES } from './evalCodes';
 
 function problem(code: 'document-too-large' | 'too-many-statements', message: string): Problem {
   const at = { line: 0, character: 0 };
-  return { code, severity: EVAL_RULES[code].severity, message, range: { start: at, end: at } };
+  return { code, severity: EVAL_RULES[code].severity, message: endSentence(message), range: { start: at, end: at } };
 }
 
 /** The problem of a text over a document cap, or undefined when it is within them. */

@@ -64,8 +64,16 @@ export function regimeNote(level: LevelModel, points: readonly FieldPoint[]): Ev
 }
 
 export function fieldName(f: WorkingField): string {
-  return `${f.source.kind} ${f.source.name} (${fieldInUnit(f.tesla, { unit: f.unit })})`;
+  // Every level at a field names it in its notes (thousands of times in a large file): made once per field.
+  const known = fieldNames.get(f);
+  if (known && known.tesla === f.tesla && known.unit === f.unit && known.kind === f.source.kind && known.name === f.source.name) return known.text;
+  const text = `${f.source.kind} ${f.source.name} (${fieldInUnit(f.tesla, { unit: f.unit })})`;
+  fieldNames.set(f, { tesla: f.tesla, unit: f.unit, kind: f.source.kind, name: f.source.name, text });
+  return text;
 }
+
+/** `fieldName` by field, with what it was made from (a field changed since is named again). */
+const fieldNames = new WeakMap<WorkingField, { tesla: number; unit: string | undefined; kind: string; name: string; text: string }>();
 
 function fieldList(points: readonly FieldPoint[]): string {
   return listWords(points.map((p) => fieldName(p.f)), 'and');

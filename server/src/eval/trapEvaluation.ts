@@ -8,13 +8,13 @@ import { BOLTZMANN_K, PLANCK_H } from '../physics/constants';
 import { sumField } from '../physics/fields';
 import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
 import { PHYSICS_RULES } from '../physics/issueCodes';
-import { defaultRegionRadius, gravityAlong, regionIssues, ZERO_FIELD_FRACTION, summariseTrap, trapCautions, type SublevelTrap, type TrapIssue, type TrapSummary } from '../physics/traps';
+import { defaultRegionRadius, gravityAlong, regionIssues, ZERO_FIELD_FRACTION, summariseTrap, trapCautions, type SublevelFinding, type SublevelTrap, type TrapIssue, type TrapSummary } from '../physics/traps';
 import type { FieldSourceModel, SettingsModel } from '../model/types';
 import type { TrapModel } from '../model/trapTypes';
 import type { GJLookup } from './gJLookup';
 import { engineSpec } from './levelSpec';
 import type { TrapResult, TrapSublevelResult } from './trapResultTypes';
-import { mergedTrapProblem, PER_TRAP_CODES, ZERO_FIELD_CODE } from './trapSublevelFindings';
+import { mergedTrapProblem, ZERO_FIELD_CODE } from './trapSublevelFindings';
 import { gravityTooStrongText, trapFieldUnitFor } from './trapText';
 
 export interface TrapEvaluation {
@@ -60,8 +60,8 @@ export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: Settings
   });
   // The gravity finding reads its gradients in the unit the trap's report uses (trapText.trapFieldUnit).
   const unit = trapFieldUnitFor(Math.max(Math.abs(summary.fieldRangeT[1]), Math.abs(summary.fieldAtCentreT)), fieldUnit);
-  for (const i of summary.issues) if (!PER_TRAP_CODES.has(i.code)) problems.push(toProblem(trap, i.gravity && i.sublevel !== undefined ? { ...i, message: gravityTooStrongText(i.sublevel, i.gravity, unit) } : i));
-  problems.push(...perTrapProblems(trap, summary.issues));
+  for (const i of summary.issues) problems.push(toProblem(trap, i.gravity && i.sublevel !== undefined ? { ...i, message: gravityTooStrongText(i.sublevel, i.gravity, unit) } : i));
+  problems.push(...perTrapProblems(trap, summary.sublevelFindings));
   if (summary.sublevels.length === 0) return { result, summary, problems };
   result.computed = true;
   // Below the searches' own precision a position or a field is round-off: written as 0.
@@ -128,18 +128,17 @@ function axesOf(a: readonly [Vec3, Vec3, Vec3]): TrapSublevelResult['axes'] {
   return [clean(a[0]), clean(a[1]), clean(a[2])];
 }
 
-/** The sublevel-by-sublevel issues of PER_TRAP_CODES, one finding per code, in the order the core first reports each. */
-function perTrapProblems(trap: TrapModel, issues: readonly TrapIssue[]): Problem[] {
-  const codes = [...new Set(issues.map((i) => i.code).filter((c) => PER_TRAP_CODES.has(c)))];
+/** The core's sublevel-by-sublevel findings, one problem per code, in the order the core first meets each. */
+function perTrapProblems(trap: TrapModel, findings: readonly SublevelFinding[]): Problem[] {
+  const codes = [...new Set(findings.map((f) => f.code))];
   return codes.map((code) => {
-    const mine = issues.filter((i) => i.code === code);
-    const first = toProblem(trap, mine[0]!);
+    const mine = findings.filter((f) => f.code === code);
     // A temperature written but not usable (wrong unit, not above 0) has its own error; the zero-field finding points at it.
     const unusable = code === ZERO_FIELD_CODE && !trap.temperatureK ? settingRange(trap, 'temperature') : undefined;
     return mergedTrapProblem(code, mine, {
       trap,
-      severity: first.severity,
-      range: first.range,
+      severity: severityOf(code, mine[0]!.severity),
+      range: rangeFor(trap, code),
       ...(unusable ? { temperatureRange: unusable } : {}),
       ...(trap.cutJ?.unit ? { cutUnit: trap.cutJ.unit } : {}),
     });
@@ -189,7 +188,11 @@ function conductorSetting(s: FieldSourceModel, j: number): Range {
 }
 
 function toProblem(trap: TrapModel, i: TrapIssue): Problem {
-  const rule = (PHYSICS_RULES as Record<string, { severity: Problem['severity'] }>)[i.code];
   const place = i.conductor ? onConductorPlace(trap, i.conductor) : { range: rangeFor(trap, i.code) };
-  return { code: i.code, severity: rule?.severity ?? i.severity, message: `trap '${trap.name}': ${i.message}`, ...place };
+  return { code: i.code, severity: severityOf(i.code, i.severity), message: `trap '${trap.name}': ${i.message}`, ...place };
+}
+
+/** The catalogue's severity for a code (physics/issueCodes.ts), else the core's own. */
+function severityOf(code: string, core: Problem['severity']): Problem['severity'] {
+  return (PHYSICS_RULES as Record<string, { severity: Problem['severity'] }>)[code]?.severity ?? core;
 }

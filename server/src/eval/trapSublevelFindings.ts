@@ -1,13 +1,13 @@
 /**
- * One finding per trap for the issues the physics core reports sublevel by sublevel
- * (`trap-zero-field`, `trap-majorana-slow`, `trap-cut-outside`): a reader wants one line naming
- * the sublevels, each with its own figure, not three lines saying the same thing. The figures
- * ride on the issues themselves, so no label has to match. When the file wrote a cloud
+ * One finding per trap for what the physics core finds sublevel by sublevel (`trap-zero-field`,
+ * `trap-majorana-slow`, `trap-cut-outside`): a reader wants one line naming the sublevels, each
+ * with its own figure, not three lines saying the same thing. The core gives only the code, the
+ * sublevel and its figure; this is the one place that words them. When the file wrote a cloud
  * temperature the model could not use, the zero-field finding points at that value instead of
  * asking for a temperature.
  */
 import type { Problem, Range } from '../format/ast';
-import type { TrapIssue } from '../physics/traps';
+import type { SublevelFinding } from '../physics/traps';
 import type { TrapModel } from '../model/trapTypes';
 import { listWords } from '../physics/listWords';
 import { trimNumber } from './quantityText';
@@ -17,10 +17,7 @@ export const ZERO_FIELD_CODE = 'trap-zero-field';
 export const MAJORANA_SLOW_CODE = 'trap-majorana-slow';
 export const CUT_OUTSIDE_CODE = 'trap-cut-outside';
 
-/** The codes merged here, one finding per trap each. */
-export const PER_TRAP_CODES: ReadonlySet<string> = new Set([ZERO_FIELD_CODE, MAJORANA_SLOW_CODE, CUT_OUTSIDE_CODE]);
-
-/** What a merged finding needs besides its issues (all of one code): where it goes and how severe it is. */
+/** What a merged finding needs besides its findings (all of one code): where it goes and how severe it is. */
 export interface MergePlace {
   trap: TrapModel;
   severity: Problem['severity'];
@@ -31,15 +28,15 @@ export interface MergePlace {
   cutUnit?: string;
 }
 
-export function mergedTrapProblem(code: string, issues: readonly TrapIssue[], place: MergePlace): Problem {
-  const names = issues.map((i) => i.sublevel ?? '?');
+export function mergedTrapProblem(code: SublevelFinding['code'], issues: readonly SublevelFinding[], place: MergePlace): Problem {
+  const names = issues.map((i) => i.sublevel);
   const base = { code, severity: place.severity, range: place.range };
   if (code === MAJORANA_SLOW_CODE) return { ...base, message: majoranaSlowText(place.trap, names, issues) };
   if (code === CUT_OUTSIDE_CODE) return { ...base, message: cutOutsideText(place.trap, names, issues, place.cutUnit) };
   return zeroFieldProblem(place.trap, names, issues, base, place.temperatureRange);
 }
 
-function zeroFieldProblem(trap: TrapModel, names: string[], issues: readonly TrapIssue[], base: Pick<Problem, 'code' | 'severity' | 'range'>, temperatureRange: Range | undefined): Problem {
+function zeroFieldProblem(trap: TrapModel, names: string[], issues: readonly SublevelFinding[], base: Pick<Problem, 'code' | 'severity' | 'range'>, temperatureRange: Range | undefined): Problem {
   const rates = issues.map((i) => i.majoranaRateHz);
   const verb = names.length === 1 ? 'sits' : 'sit';
   const head = `trap '${trap.name}': ${listWords(names, 'and')} ${verb} at a zero of the field: the bias at the minimum is too small, Majorana spin flips lose atoms there`;
@@ -60,8 +57,8 @@ function zeroFieldProblem(trap: TrapModel, names: string[], issues: readonly Tra
   };
 }
 
-/** Each sublevel's rate and lifetime; a slow rate always comes with its issue (physics/traps/trapSummary.ts). */
-function majoranaSlowText(trap: TrapModel, names: string[], issues: readonly TrapIssue[]): string {
+/** Each sublevel's rate and lifetime; a slow rate always comes with its finding (physics/traps/trapSummary.ts). */
+function majoranaSlowText(trap: TrapModel, names: string[], issues: readonly SublevelFinding[]): string {
   const verb = names.length === 1 ? 'sits' : 'sit';
   const each = issues.map((i, k) => {
     const r = i.majoranaRateHz!;
@@ -72,7 +69,7 @@ function majoranaSlowText(trap: TrapModel, names: string[], issues: readonly Tra
 }
 
 /** Each sublevel with its depth, in the unit the cut was written in so the two compare at a glance. */
-function cutOutsideText(trap: TrapModel, names: string[], issues: readonly TrapIssue[], cutUnit: string | undefined): string {
+function cutOutsideText(trap: TrapModel, names: string[], issues: readonly SublevelFinding[], cutUnit: string | undefined): string {
   const each = issues.map((i, k) => (i.depthJ !== undefined ? `${names[k]} (depth ${cutEnergyText(i.depthJ, cutUnit)})` : names[k]!));
   const them = names.length === 1 ? 'it' : 'them';
   return `trap '${trap.name}': the RF cut is above the trap's depth for ${listWords(each, 'and')}: for ${them} the knife cuts nothing the edge does not.`;

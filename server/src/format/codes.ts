@@ -8,6 +8,7 @@
  * level without a term, a line without both ends) are reported by the model, which knows what
  * is needed.
  */
+import { endSentence } from './sentenceEnd';
 import type { Problem, ProblemSeverity, Range } from './ast';
 
 export interface RuleInfo {
@@ -86,7 +87,7 @@ export const RULES: Record<string, RuleInfo> = {
   'unit-not-a-quantity': { severity: 'error', summary: 'A word where a number with a unit is needed.', stage: 'unit' },
 };
 
-/** A problem with the rule's default severity. Unknown codes are reported as errors. */
+/** A problem with the rule's default severity, its message ending as a sentence. Unknown codes are reported as errors. */
 export function makeProblem(code: string, message: string, range: Range, extra?: Partial<Problem>): Problem {
-  return { code, severity: RULES[code]?.severity ?? 'error', message, range, ...extra };
+  return { code, severity: RULES[code]?.severity ?? 'error', message: endSentence(message), range, ...extra };
 }

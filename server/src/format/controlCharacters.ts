@@ -79,9 +79,8 @@ export function controlCharacterProblems(text: string, lineStarts: readonly numb
       }
     }
   }
-  const problems = all.map((f) =>
-    makeProblem(f.code, describe(f.code, f.ch, f.count), { start: { line: f.line, character: f.character }, end: { line: f.line, character: f.character + 1 } }),
+  const unlisted = moreLines > 0 ? `; ${moreLines} more lines have invisible characters and are not listed` : '';
+  return all.map((f, i) =>
+    makeProblem(f.code, describe(f.code, f.ch, f.count) + (i === all.length - 1 ? unlisted : ''), { start: { line: f.line, character: f.character }, end: { line: f.line, character: f.character + 1 } }),
   );
-  if (moreLines > 0) problems[problems.length - 1]!.message += `; ${moreLines} more lines have invisible characters and are not listed`;
-  return problems;
 }

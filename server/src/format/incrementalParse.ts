@@ -14,6 +14,7 @@ import { collectPositions, moveLines } from './linePositions';
 import { assembleDocument, parseLines, parseSetup, startsFreshState, type ParsedLines } from './parser';
 import { computeLineStarts, lineStartsAfterEdit, offsetToPosition } from './positions';
 import { scanLines } from './scanner';
+import { EvaluationStopped, LINES_PER_STOP_CHECK, stopIfAsked, type StopCheck } from './stopCheck';
 
 interface Segment {
   /** The segment's first line, in the document it was read for. */
@@ -30,13 +31,18 @@ export interface IncrementalParse {
   readonly segments: readonly Segment[];
 }
 
-/** Reads lines [from, to) of the text as segments. */
-function readSegments(text: string, lineStarts: readonly number[], from: number, to: number): Segment[] {
-  const lines = scanLines(text, lineStarts, from, to);
+/** Reads lines [from, to) of the text as segments; `stop` is asked every LINES_PER_STOP_CHECK lines or so. */
+function readSegments(text: string, lineStarts: readonly number[], from: number, to: number, stop?: StopCheck): Segment[] {
+  const lines = scanLines(text, lineStarts, from, to, stop);
   const out: Segment[] = [];
   let start = 0;
+  let asked = 0;
   for (let i = 1; i <= lines.length; i++) {
     if (i < lines.length && !startsFreshState(lines[i]!)) continue;
+    if (stop && i - asked >= LINES_PER_STOP_CHECK) {
+      stopIfAsked(stop);
+      asked = i;
+    }
     out.push({ firstLine: from + start, lineCount: i - start, part: parseLines(text, lines.slice(start, i)) });
     start = i;
   }
@@ -70,9 +76,9 @@ function segmentAt(segments: readonly Segment[], line: number): number {
   return lo;
 }
 
-function fromScratch(text: string): IncrementalParse {
+function fromScratch(text: string, stop?: StopCheck): IncrementalParse {
   const lineStarts = computeLineStarts(text);
-  const segments = readSegments(text, lineStarts, 0, lineStarts.length);
+  const segments = readSegments(text, lineStarts, 0, lineStarts.length, stop);
   return { doc: assembleDocument(text, lineStarts, segments.map((s) => s.part)), segments };
 }
 
@@ -83,19 +89,22 @@ const spent = new WeakSet<IncrementalParse>();
  * Parses `text`, reusing what `previous` (the parse of an earlier version of the same document)
  * read for the lines the edit did not touch. When the line count changes, the nodes below the
  * change move in place, so `previous.doc` then shows the new line numbers there: read the newest
- * parse only (a parse reused once this way is read whole if it is passed again). Never throws: on
+ * parse only (a parse reused once this way is read whole if it is passed again). Never throws (but `EvaluationStopped`, below): on
  * an unexpected failure the text is parsed whole by `parseSetup`, which reports it.
+ * `stop` (the evaluation worker's): asked while lines are read, before anything of `previous`
+ * moves, so a parse given up throws `EvaluationStopped` and leaves `previous` as it was.
  */
-export function parseIncrementally(text: string, previous?: IncrementalParse): IncrementalParse {
+export function parseIncrementally(text: string, previous?: IncrementalParse, stop?: StopCheck): IncrementalParse {
   try {
-    if (!previous || previous.segments.length === 0 || spent.has(previous)) return fromScratch(text);
-    return reuse(text, previous);
-  } catch {
+    if (!previous || previous.segments.length === 0 || spent.has(previous)) return fromScratch(text, stop);
+    return reuse(text, previous, stop);
+  } catch (e) {
+    if (e instanceof EvaluationStopped) throw e;
     return { doc: parseSetup(text), segments: [] };
   }
 }
 
-function reuse(text: string, previous: IncrementalParse): IncrementalParse {
+function reuse(text: string, previous: IncrementalParse, stop?: StopCheck): IncrementalParse {
   const before = previous.doc;
   const old = before.text;
   if (old === text) return previous;
@@ -120,11 +129,11 @@ function reuse(text: string, previous: IncrementalParse): IncrementalParse {
   const from = segments[first]!.firstLine;
   const endOld = segments[last]!.firstLine + segments[last]!.lineCount;
   const to = endOld + delta;
-  if (to < from) return fromScratch(text);
+  if (to < from) return fromScratch(text, stop);
 
-  if (delta !== 0) spent.add(previous);
   const out: Segment[] = segments.slice(0, first);
-  for (const s of readSegments(text, lineStarts, from, to)) out.push(s);
+  for (const s of readSegments(text, lineStarts, from, to, stop)) out.push(s);
+  if (delta !== 0) spent.add(previous);
   for (let i = last + 1; i < segments.length; i++) for (const s of moved(segments[i]!, delta, text, lineStarts)) out.push(s);
   return { doc: assembleDocument(text, lineStarts, out.map((s) => s.part)), segments: out };
 }

@@ -161,7 +161,10 @@ function dimsOf(text: string): number[] {
 }
 
 function sameDims(a: number[], b: number[]): boolean {
-  return a.length === b.length && a.every((x, i) => x === b[i]);
+  // A plain loop: every conversion and every number written back in its unit asks this.
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
 }
 
 /** How a frequency-like unit converts to Hz. */

@@ -8,6 +8,7 @@ import { ProblemList } from './problems';
 import { isUnreadable, readPartQuantity, readSettingQuantity, singlePart, strayUnit } from './settingReaders';
 import { readMagnetSources } from './magnetSources';
 import type { BeamModel, BeamSource, FieldModel, FieldSourceModel, MagnetModel, NameUse, SpeciesModel, Valued } from './types';
+import { allParts } from '../format/values';
 
 export function buildField(node: BlockNode, problems: ProblemList): FieldModel | undefined {
   if (!node.name) {
@@ -182,7 +183,7 @@ export function positive(s: SettingNode, v: Valued<number> | undefined, problems
 const SOURCE_FORMS = 'oven <temperature>, jet <speed> spread <percent>, or speed <speed>';
 
 function readSource(s: SettingNode, problems: ProblemList): { source: Valued<BeamSource>; temperature?: Valued<number> } | undefined {
-  const parts = s.groups.flat();
+  const parts = allParts(s.groups);
   const bad = (msg: string): undefined => {
     problems.add('beam-source-malformed', msg, s.valueText.range, { data: { suggestions: ['oven 450 K', 'jet 1500 m/s spread 10 %', 'speed 800 m/s'] } });
     return undefined;
@@ -259,7 +260,7 @@ function readSlits(s: SettingNode, problems: ProblemList): { slits: NonNullable<
 
 /** `detector = <width>` or `detector = <width> at <offset from the axis>`. */
 function readDetector(s: SettingNode, beam: BeamModel, problems: ProblemList): void {
-  const parts = s.groups.flat();
+  const parts = allParts(s.groups);
   if (s.groups.length !== 1 || (parts.length !== 1 && (parts.length !== 3 || parts[1]!.text !== 'at'))) {
     problems.add('beam-detector-malformed', 'write detector = <width>, or detector = <width> at <offset>, e.g. detector = 25 um at 1.2 mm', s.valueText.range);
     return;

@@ -19,6 +19,7 @@ import { readLevelSetting, readSublevelName } from './resonanceBuilder';
 import { readPartQuantity, readSettingWord, singlePart } from './settingReaders';
 import type { SetupSources } from './sources';
 import type { BeamModel, NameUse, SpeciesModel } from './types';
+import { allParts } from '../format/values';
 
 export const DATA_KINDS = ['resonance', 'interval', 'profile'] as const;
 
@@ -86,7 +87,7 @@ function checkComplete(d: DataModel, problems: ProblemList): void {
 
 /** `point = 6834.678(5) MHz` or `point = 6834.712 MHz at 0.5 mT`. */
 function readSpectralPoint(s: SettingNode, d: DataModel, problems: ProblemList): void {
-  const parts = s.groups.flat();
+  const parts = allParts(s.groups);
   const how = 'write point = <frequency>[(uncertainty)] [at <field>], e.g. point = 6834.6786(5) MHz at 0.3 mT';
   const atIndex = parts.findIndex((p) => p.kind === 'word' && p.text === 'at');
   const head = atIndex >= 0 ? parts.slice(0, atIndex) : parts;
@@ -143,7 +144,7 @@ function misplacedPosition(parts: readonly ValuePart[]): string | undefined {
 
 /** `point = -120 um 14` or `point = -120 um 14 4` (position, counts, optional error). */
 function readProfilePoint(s: SettingNode, d: DataModel, problems: ProblemList): void {
-  const parts = s.groups.flat();
+  const parts = allParts(s.groups);
   const misplaced = misplacedPosition(parts);
   if (misplaced && s.groups.length === 1) {
     problems.add('data-point-malformed', misplaced, s.valueText.range);

@@ -7,6 +7,7 @@ import type { Range, SettingNode } from '../format/ast';
 import type { ModelCode } from './modelCodes';
 import type { NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
+import { allParts } from '../format/values';
 
 export interface NameListWording {
   /** What the names name, for the messages: 'coil, solenoid, wire or slab blocks'. */
@@ -22,7 +23,7 @@ export interface NameListWording {
 /** The resolved names in the order written, each once; undefined when the list is empty. */
 export function readNameList<T extends { name: string; nameRange: Range }>(setting: SettingNode, index: NameIndex<T>, problems: ProblemList, wording: NameListWording): T[] | undefined {
   const key = setting.key.text;
-  if (setting.groups.flat().length === 0) {
+  if (allParts(setting.groups).length === 0) {
     problems.add('value-missing', `${key} needs the names of ${wording.blocks}, e.g. ${key} = ${wording.example}`, setting.range);
     return undefined;
   }

@@ -1,5 +1,6 @@
-/** A small collector so that model builders can report problems in one line each. */
+/** A small collector so that model builders can report problems in one line each; every message leaves it ending as a sentence. */
 import type { Problem, ProblemSeverity, Range } from '../format/ast';
+import { endSentence } from '../format/sentenceEnd';
 import { MODEL_RULES } from './modelCodes';
 
 export class ProblemList {
@@ -11,10 +12,10 @@ export class ProblemList {
   }
 
   addWith(code: string, severity: ProblemSeverity, message: string, range: Range, extra?: Partial<Problem>): void {
-    this.items.push({ code, severity, message, range, ...extra });
+    this.items.push({ code, severity, message: endSentence(message), range, ...extra });
   }
 
   push(p: Problem): void {
-    this.items.push(p);
+    this.items.push({ ...p, message: endSentence(p.message) });
   }
 }

@@ -4,6 +4,7 @@ import { resolveLevel, type NameIndex } from './nameIndex';
 import type { ProblemList } from './problems';
 import { readPartQuantity, readSettingQuantity, readSettingWord, singlePart, strayUnit } from './settingReaders';
 import type { LevelModel, NameUse, ResonanceModel, SpeciesModel, SublevelName } from './types';
+import { allParts } from '../format/values';
 
 /** Default search range when the file gives none: wide enough for electron-spin resonance at X band. */
 export const DEFAULT_RESONANCE_RANGE_T = { fromT: 0, toT: 1 };
@@ -59,7 +60,7 @@ export function buildResonance(node: BlockNode, species: NameIndex<SpeciesModel>
 
 /** `range = <from>, <to>`: two different fields, in increasing order, with the units written. */
 export function readFieldRange(s: SettingNode, problems: ProblemList): ResonanceModel['rangeT'] | undefined {
-  const parts = s.groups.flat();
+  const parts = allParts(s.groups);
   if (parts.length !== 2) {
     problems.add('resonance-range-malformed', 'write range = <from field>, <to field>, e.g. range = 0 G, 10 G', s.valueText.range);
     return undefined;
@@ -87,7 +88,7 @@ export function readLevelSetting(s: SettingNode, species: NameIndex<SpeciesModel
 
 /** `lower = 1 -1` (F and m_F; J and m_J for a term), also written `1, -1`. */
 export function readSublevelName(s: SettingNode, problems: ProblemList): SublevelName | undefined {
-  const parts = s.groups.flat();
+  const parts = allParts(s.groups);
   const stray = parts.length === 1 ? strayUnit(parts[0]!) : undefined;
   if (stray) {
     problems.add('resonance-sublevel-malformed', `'${stray.text}' is not a number: write ${s.key.text} = <F> <m_F>, e.g. ${s.key.text} = 2 +1 (F and m_F of the low-field label)`, stray.range);

@@ -9,6 +9,7 @@ import { listWords } from '../physics/listWords';
 import { withinApparatus } from './lengthRange';
 import type { ProblemList } from './problems';
 import type { Valued } from './types';
+import { allParts } from '../format/values';
 
 const FILE_SOURCE = 'this file';
 
@@ -17,7 +18,7 @@ const FILE_SOURCE = 'this file';
  * without another problem for a number that cannot be used (reported where it was read).
  */
 export function singlePart(setting: SettingNode, problems: ProblemList, what: string): ValuePart | undefined {
-  const parts = setting.groups.flat();
+  const parts = allParts(setting.groups);
   if (parts.length === 0) {
     problems.add('value-missing', `${setting.key.text} needs a value (${what})`, setting.range);
     return undefined;
@@ -57,7 +58,8 @@ function isListWithOneUnit(groups: ValuePart[][]): boolean {
  * Read as a list it gave a missing unit with a fix writing `3 T,2 G`, and an unused rest.
  */
 function decimalComma(setting: SettingNode): { written: string; meant: string; range: Range } | undefined {
-  const [first, second] = setting.groups;
+  const first = setting.groups[0];
+  const second = setting.groups[1];
   if (setting.groups.length !== 2 || first?.length !== 1 || !second?.[0]) return undefined;
   const whole = first[0]!;
   const rest = second[0];
@@ -87,9 +89,11 @@ export function readSettingQuantity(
  * dimension and an unused `m`, whose two fixes together wrote `180 T/m m`; one error, one fix.
  */
 function unitWithBlank(setting: SettingNode, dimension: Dimension, problems: ProblemList): boolean {
-  const [only, ...more] = setting.groups;
-  if (!only || more.length > 0 || only.length !== 2) return false;
-  const [quantity, word] = only as [ValuePart, ValuePart];
+  // Read by index: array destructuring goes through the iterator protocol, slow in a fresh worker, for every setting.
+  const only = setting.groups[0];
+  if (!only || setting.groups.length > 1 || only.length !== 2) return false;
+  const quantity = only[0]!;
+  const word = only[1]!;
   if (quantity.kind !== 'quantity' || word.kind !== 'word' || !isUnitText(word.text)) return false;
   const written = quantity.unit.text;
   const meant = `${written}/${word.text}`;
@@ -117,7 +121,11 @@ export function readPartQuantity(
   if (dimension === 'length' && !withinApparatus(result.si, part.text, part.range, problems)) return undefined;
   const uncertainty = result.siUncertainty;
   const unit = part.kind === 'quantity' ? part.unit.text : undefined;
-  return { value: result.si, source: FILE_SOURCE, range: part.range, ...(uncertainty !== undefined ? { uncertainty } : {}), ...(unit !== undefined ? { unit } : {}) };
+  // Keys added in the order the spreads gave them, without the spreads' temporary objects.
+  const read: Valued<number> = { value: result.si, source: FILE_SOURCE, range: part.range };
+  if (uncertainty !== undefined) read.uncertainty = uncertainty;
+  if (unit !== undefined) read.unit = unit;
+  return read;
 }
 
 /** A number that cannot be used (`1e400`), already reported where the value was read: say nothing more. */
@@ -194,5 +202,7 @@ export function readSettingWord<T extends string>(
 }
 
 function withUncertainty(n: ParsedNumber, range: SettingNode['range']): Valued<number> {
-  return { value: n.value, source: FILE_SOURCE, range, ...(n.uncertainty !== undefined ? { uncertainty: n.uncertainty } : {}) };
+  const read: Valued<number> = { value: n.value, source: FILE_SOURCE, range };
+  if (n.uncertainty !== undefined) read.uncertainty = n.uncertainty;
+  return read;
 }

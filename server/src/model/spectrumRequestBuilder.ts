@@ -13,6 +13,7 @@ import { SPECTRUM_POINTS_MAX, SPECTRUM_POINTS_MIN } from './limits';
 import type { ProblemList } from './problems';
 import { readSettingNumber, readSettingQuantity, readSettingWord } from './settingReaders';
 import type { LineModel, SpectrumRequest, Valued } from './types';
+import { allParts } from '../format/values';
 
 export const SPECTRUM_DIRECTIONS = ['along', 'across'] as const;
 export const SPECTRUM_LIGHTS = ['all', 'pi', 'sigma', 'sigma+', 'sigma-'] as const;
@@ -39,7 +40,7 @@ export function readSpectrumRequest(line: LineModel, settings: readonly SettingN
         break;
       }
       case 'doppler': {
-        const parts = s.groups.flat();
+        const parts = allParts(s.groups);
         if (parts[0]?.kind === 'word' && parts[0].text === 'beam') {
           const name = parts[1];
           if (parts.length !== 2 || name?.kind !== 'word') {

@@ -96,6 +96,12 @@ function readCut(s: SettingNode, problems: ProblemList): Valued<number> | undefi
     problems.push(makeProblem('unit-wrong-dimension', message, part.unit.range, { data: { suggestions: [...CUT_TEMPERATURE_UNITS] } }));
     return undefined;
   }
+  // A bare number is not read (a cut is no plain number of joules): say which units a cut takes; degC is not one of them.
+  if (part.kind === 'number') {
+    const message = `cut needs a unit: write the knife's energy as a temperature (${CUT_TEMPERATURE_UNITS.join(', ')}), a frequency (e.g. 20 MHz), a wavenumber (cm^-1) or an energy (J, eV); a bare number is not read`;
+    problems.push(makeProblem('unit-missing', message, part.range, { data: { suggestions: [...CUT_TEMPERATURE_UNITS, 'MHz', 'J'].map((u) => `${part.text} ${u}`) } }));
+    return undefined;
+  }
   const unit = part.kind === 'quantity' ? { unit: part.unit.text } : {};
   const asT = readQuantity(part, 'temperature');
   if (!asT.problem && asT.si !== undefined) return checkCut(s, { value: BOLTZMANN_K * asT.si, source: 'this file', range: part.range, ...unit }, problems);

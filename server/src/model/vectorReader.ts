@@ -9,6 +9,7 @@ import type { Vec3 } from '../physics/fields/types';
 import type { ProblemList } from './problems';
 import { isUnreadable, readPartQuantity } from './settingReaders';
 import type { Valued } from './types';
+import { allParts } from '../format/values';
 
 const FILE_SOURCE = 'this file';
 
@@ -72,7 +73,7 @@ export function readVector(setting: SettingNode, kind: Dimension, problems: Prob
 
 /** A direction from value parts: one word (x, -z, …) or three plain numbers in `groups`, normalised. */
 export function readDirectionParts(key: string, groups: readonly (readonly ValuePart[])[], range: Range, problems: ProblemList): Valued<Vec3> | undefined {
-  const flat = groups.flat();
+  const flat = allParts(groups);
   const allowed = DIRECTION_NAMES;
   if (flat.length === 1 && flat[0]!.kind === 'word') {
     const w = flat[0]!;
@@ -105,7 +106,7 @@ export function readDirectionParts(key: string, groups: readonly (readonly Value
 }
 
 export function readDirection(setting: SettingNode, problems: ProblemList): Valued<Vec3> | undefined {
-  if (setting.groups.flat().length === 0) {
+  if (allParts(setting.groups).length === 0) {
     problems.add('value-missing', `${setting.key.text} needs a direction (x, y, z, -x, -y, -z or three numbers)`, setting.range);
     return undefined;
   }

@@ -22,7 +22,7 @@ function isLog(scale: Scale): boolean {
   return typeof (scale as { base?: unknown }).base === 'function';
 }
 
-/** The ticks a log axis labels: d3's choice, plus one per decade the domain spans that d3 left bare (0.5 in 0.33…1). */
+/** The ticks a log axis labels: d3's choice, plus one per decade the domain spans that d3 left bare (0.5 in 0.33…1), and 5 where d3 labelled 2. */
 function logTickLabels(shown: Scale, count: number, label: (t: number) => string): { t: number; label: string }[] {
   const all = shown.ticks(count);
   const fmt = shown.tickFormat(count, '~g');
@@ -35,6 +35,12 @@ function logTickLabels(shown: Scale, count: number, label: (t: number) => string
     // A round mantissa (5, then 2) reads best; else the tick nearest the next labelled decade.
     const pick = inDecade.find((t) => Math.abs(t / 10 ** k - 5) < 1e-6) ?? inDecade.find((t) => Math.abs(t / 10 ** k - 2) < 1e-6) ?? inDecade[inDecade.length - 1];
     if (pick !== undefined) kept.push(pick);
+  }
+  // A decade d3 labels at 2 has room for 5 too: without it the top of a decade reads bare (points at 60 past a last label of 20).
+  const mantissa = (t: number, m: number): boolean => Math.abs(t / 10 ** decade(t) - m) < 1e-6;
+  for (const two of kept.filter((t) => mantissa(t, 2))) {
+    const five = all.find((t) => decade(t) === decade(two) && mantissa(t, 5));
+    if (five !== undefined && !kept.includes(five)) kept.push(five);
   }
   return kept.sort((p, q) => p - q).map((t) => ({ t, label: label(t) }));
 }

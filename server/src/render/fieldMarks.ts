@@ -3,7 +3,7 @@
  * above the plot so that no two labels overlap.
  */
 import { estimateTextWidth } from './frame';
-import { fieldDisplayUnit, figureMinus, formatIn } from './units';
+import { fieldDisplayUnit, fieldOnAxisText, figureMinus } from './units';
 import type { FieldUnit, NamedFieldMark } from './viewData';
 
 export const MARK_ROW = 14;
@@ -28,8 +28,8 @@ export function fieldMarksIn(
   const out: FieldMark[] = [];
   const add = (fieldT: number, label: string, chosen: boolean, written: string | undefined): void => {
     if (!inSweep(fieldT) || out.some((m) => m.fieldT === fieldT && m.label === label)) return;
-    // A field the file wrote reads in its own unit (1 nT, not 1e-6 mT); a found one in the axis unit.
-    const value = written !== undefined ? figureMinus(written) : formatIn(fieldT, unit);
+    // A field the file wrote reads in its own unit (1 nT, not 1e-6 mT); a found one in the axis unit while it reads short there.
+    const value = written !== undefined ? figureMinus(written) : fieldOnAxisText(fieldT, unit);
     out.push({ fieldT, label, chosen, text: label ? `${label} · ${value}` : `B = ${value}` });
   };
   if (chosenT !== undefined) add(chosenT, chosenLabel ?? '', true, chosenText);

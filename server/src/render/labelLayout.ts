@@ -65,7 +65,8 @@ const MERGE_PX = 1;
 /**
  * One name for states whose ends coincide: the parts they share, and the one part that varies as
  * a range ("F=2, m_F=-2…+2"); when more varies, or the range would be longer than `maxChars`,
- * how many states ("J=3/2: 16 states").
+ * which values of the first varying part merge and how many states ("F=3,4: 16 states", "F=1…4:
+ * 24 states"), else only how many ("J=3/2: 16 states").
  */
 export function mergedName(labels: readonly string[], maxChars = Number.POSITIVE_INFINITY): string {
   if (labels.length === 1) return labels[0]!;
@@ -79,7 +80,19 @@ export function mergedName(labels: readonly string[], maxChars = Number.POSITIVE
     const ranged = [...shared, `${key}=${values[0]}…${values[values.length - 1]}`].join(', ');
     if (values.every((v) => Number.isFinite(fractionValue(v))) && Array.from(ranged).length <= maxChars) return ranged;
   }
-  return shared.length > 0 ? `${shared.join(', ')}: ${labels.length} states` : `${labels.length} states`;
+  const count = `${labels.length} states`;
+  // The first part that varies, when every state has it (F of an F, m_F name): which of its values merge.
+  const named = key !== undefined && rest.every((r) => r[0]!.split('=')[0] === key) ? [...shared, `${key}=${valueList(rest.map((r) => r[0]!.slice(key.length + 1)))}: ${count}`].join(', ') : undefined;
+  if (named !== undefined && Array.from(named).length <= maxChars) return named;
+  return shared.length > 0 ? `${shared.join(', ')}: ${count}` : count;
+}
+
+/** The distinct values, ascending: a run of more than two in steps of 1 as "1…4", else listed "2,3" (the comma without a space keeps it apart from the parts' ", "). */
+function valueList(values: readonly string[]): string {
+  const distinct = [...new Set(values)].sort((a, b) => fractionValue(a) - fractionValue(b));
+  const nums = distinct.map(fractionValue);
+  const run = nums.every((v, i) => Number.isFinite(v) && (i === 0 || Math.abs(v - nums[i - 1]! - 1) < 1e-9));
+  return run && distinct.length > 2 ? `${distinct[0]}…${distinct[distinct.length - 1]}` : distinct.join(',');
 }
 
 function fractionValue(v: string): number {

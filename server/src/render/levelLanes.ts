@@ -6,7 +6,7 @@
  * or early intermediate field) keeps the low-field names, followed along each curve, since that is
  * how a reader names those states there.
  */
-import { formatIn, formatSI, type DisplayUnit } from './units';
+import { fieldOnAxisText, type DisplayUnit } from './units';
 import type { LevelLanes } from './viewData';
 import { trimNumber } from '../eval/quantityText';
 
@@ -25,7 +25,7 @@ export function laneHeadText(lanes: LevelLanes, side: 'low' | 'high'): string {
 
 /** The header's tooltip: why the lane names what it names. */
 export function laneHeadWhy(lanes: LevelLanes, side: 'low' | 'high', unit: DisplayUnit): string {
-  const limit = lanes.strongLimitT !== undefined && Number.isFinite(lanes.strongLimitT) && lanes.strongLimitT > 0 ? ` (from ${fieldText(lanes.strongLimitT, unit)})` : '';
+  const limit = lanes.strongLimitT !== undefined && Number.isFinite(lanes.strongLimitT) && lanes.strongLimitT > 0 ? ` (from ${fieldOnAxisText(lanes.strongLimitT, unit)})` : '';
   if (side === 'low') return `Each state by its name at low field, in the coupled basis |${lanes.low}⟩.`;
   if (lanes.ends === 'strong') return `The range reaches the strong field${limit}: each state by the uncoupled state |${lanes.high}⟩ it goes to.`;
   if (lanes.ends === 'uncoupling') {
@@ -34,10 +34,4 @@ export function laneHeadWhy(lanes: LevelLanes, side: 'low' | 'high', unit: Displ
   }
   if (lanes.ends === 'weak') return `The range ends in the low (linear) field: the states are still |${lanes.low}⟩.`;
   return `The range ends in the intermediate field, before the strong field${limit}: each state keeps its low-field name |${lanes.low}⟩, followed along its curve.`;
-}
-
-/** A field in the axis unit when it reads 0.1–1000 there, else in tesla with the prefix that suits it (6.091 T, not 60910 G). */
-function fieldText(fieldT: number, unit: DisplayUnit): string {
-  const inUnit = fieldT / unit.factor;
-  return inUnit >= 0.1 && inUnit < 1000 ? formatIn(fieldT, unit) : formatSI(fieldT, 'T');
 }

@@ -13,7 +13,8 @@ import { markerPath } from './markers';
 import { paletteFor } from './palette';
 import { finiteExtent } from './sampled';
 import { dataNum, el, px, shortHash, titleEl } from './svgText';
-import { engineeringUnit, formatIn, type DisplayUnit } from './units';
+import { engineeringUnit, fieldDisplayUnit, formatIn, type DisplayUnit } from './units';
+import { fieldAxisUnit } from './fieldAxisUnit';
 import type { RenderTheme } from './viewData';
 
 export interface ResidualsViewData {
@@ -29,6 +30,8 @@ export interface ResidualsViewData {
   unit: string;
   /** Draw the model as a line through the points (profiles), else as rings. */
   modelLine: boolean;
+  /** The unit the file wrote the points' fields in (`mT`, `G`), if any: the field axis keeps its family. */
+  xWrittenUnit?: string;
 }
 
 const WIDTH = 760;
@@ -40,12 +43,13 @@ const RING_WIDTH = 1.5;
 const RIGHT = WIDTH - 20;
 
 /**
- * The field axis's unit. On a log axis the smallest field must read as well as the largest:
- * one unit while the smallest point still reads 0.1 or more in it (0.5 to 150 in mT), else each
- * tick names its own prefix (5 µT … 100 mT).
+ * The field axis's unit: the one rule of every field axis (render/fieldAxisUnit.ts), keeping the
+ * family the points' fields were written in (`writtenUnit`). On a log axis the smallest field must
+ * read as well as the largest: one unit while the smallest point still reads 0.1 or more in it (0.5 to 150 in mT),
+ * else each tick names its own prefix (5 µT … 100 mT).
  */
-export function residualsFieldUnit(minT: number, maxT: number, log: boolean): DisplayUnit {
-  const unit = engineeringUnit(Math.max(Math.abs(minT), Math.abs(maxT)), 'T');
+export function residualsFieldUnit(minT: number, maxT: number, log: boolean, writtenUnit?: string): DisplayUnit {
+  const unit = fieldDisplayUnit(fieldAxisUnit(Math.max(Math.abs(minT), Math.abs(maxT)), writtenUnit));
   if (!log || minT / unit.factor >= 0.1) return unit;
   return { factor: 1, symbol: 'T', perTick: 'T' };
 }
@@ -64,7 +68,7 @@ export function renderResiduals(d: ResidualsViewData, theme: RenderTheme): strin
 
   // Fields from µT to T would crowd every weak-field point into one spot at B = 0: spread over decades, B is logarithmic.
   const logX = d.xKind === 'field' && fx[0] > 0 && fx[1] / fx[0] > LOG_FIELD_SPAN;
-  const xUnit = d.xKind === 'field' ? residualsFieldUnit(fx[0], fx[1], logX) : d.xKind === 'position' ? engineeringUnit(Math.max(Math.abs(fx[0]), Math.abs(fx[1])), 'm') : { factor: 1, symbol: '' };
+  const xUnit = d.xKind === 'field' ? residualsFieldUnit(fx[0], fx[1], logX, d.xWrittenUnit) : d.xKind === 'position' ? engineeringUnit(Math.max(Math.abs(fx[0]), Math.abs(fx[1])), 'm') : { factor: 1, symbol: '' };
   const yUnit = d.unit === 'Hz' ? engineeringUnit(Math.max(Math.abs(fy[0]), Math.abs(fy[1])), 'Hz') : { factor: 1, symbol: d.unit };
   const legend = legendUnderTitle(
     [

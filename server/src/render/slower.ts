@@ -86,8 +86,8 @@ export function renderSlower(d: SlowerViewData, theme: RenderTheme): string {
   const yb = scaleLinear().domain(pad(Math.min(bx[0], 0), Math.max(bx[1], 0))).range([upper.bottom, upper.top]).nice();
   const yv = scaleLinear().domain(pad(0, vx[1])).range([lower.bottom, lower.top]).nice();
   const zUnit = engineeringUnit(zx[1], 'm');
-  // Slowers are a gauss habit: G unless the file wrote tesla, and T once the axis passes 0.1 T (render/fieldAxisUnit.ts).
-  const bUnit = fieldDisplayUnit(fieldAxisUnit(Math.max(Math.abs(bx[0]), Math.abs(bx[1])), d.fieldWrittenUnit ?? 'G'));
+  // The one rule of every field axis (render/fieldAxisUnit.ts): the bias's written family, else by the size of the field.
+  const bUnit = fieldDisplayUnit(fieldAxisUnit(Math.max(Math.abs(bx[0]), Math.abs(bx[1])), d.fieldWrittenUnit));
   const vUnit = { factor: 1, symbol: 'm/s' };
 
   const body: string[] = [legendSvg.svg];

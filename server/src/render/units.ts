@@ -3,7 +3,7 @@
  * labels stay short ("6.8" on a GHz axis instead of "6 834 682 610").
  */
 import { format } from 'd3-format';
-import { prefixedText, trimNumber } from '../eval/quantityText';
+import { fieldText, prefixedText, trimNumber } from '../eval/quantityText';
 import { FIELD_UNIT_TESLA, type FieldUnit } from './fieldUnits';
 
 export interface DisplayUnit {
@@ -51,6 +51,18 @@ export function figureMinus(text: string): string {
 export function formatSI(value: number, unit: string, digits = 4): string {
   if (!Number.isFinite(value)) return `— ${unit}`;
   return figureMinus(prefixedText(value, unit, { digits }));
+}
+
+/**
+ * A field in the axis unit when it reads 0.1–1000 there, else in tesla with the prefix that suits it
+ * (6.091 T, not 60910 G; 322.9 µT, not 0.0003229 T). A small field on a gauss axis stays in the gauss
+ * family, in mG as the reports write it (50 mG, not 5 µT beside G ticks).
+ */
+export function fieldOnAxisText(fieldT: number, unit: DisplayUnit): string {
+  const inUnit = Math.abs(fieldT) / unit.factor;
+  if ((inUnit >= 0.1 && inUnit < 1000) || fieldT === 0) return formatIn(fieldT, unit);
+  if (unit.symbol === 'G' && inUnit < 0.1) return figureMinus(fieldText(fieldT, 4));
+  return formatSI(fieldT, 'T');
 }
 
 /** A value in a fixed display unit with 4 significant figures: 0.45 T, 4500 G. */

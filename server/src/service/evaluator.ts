@@ -4,7 +4,7 @@
  * evaluation never holds up a keystroke and a runaway one can be stopped).
  */
 import type { Problem } from '../format/ast';
-import { analyze } from '../eval/analyze';
+import { analyze, type Analysis } from '../eval/analyze';
 import type { EvaluationResult } from '../eval/resultTypes';
 import { replaySources, type SourceSnapshot } from '../model/sources';
 import type { StopCheck } from '../format/stopCheck';
@@ -30,7 +30,11 @@ export const SUPERSEDED = 'superseded by a newer version';
 
 /** `stop`: asked at the evaluation's check points; when it says stop, `EvaluationStopped` is thrown (format/stopCheck.ts). */
 export function evaluateText(text: string, sources?: SourceSnapshot, stop?: StopCheck): EvaluationOutcome {
-  const a = analyze(text, sources ? replaySources(sources) : undefined, stop);
+  return outcomeOf(analyze(text, sources ? replaySources(sources) : undefined, stop));
+}
+
+/** What an evaluator hands on of an analysis: its result and problems. */
+export function outcomeOf(a: Analysis): EvaluationOutcome {
   return { ...(a.result ? { result: a.result } : {}), problems: a.problems };
 }
 

@@ -4,6 +4,7 @@ import { EvaluationStopped, stopIfAsked } from '../format/stopCheck';
 import type { Problem } from '../format/ast';
 import type { SourceSnapshot } from '../model/sources';
 import { evaluateText, SUPERSEDED } from './evaluator';
+import { KeptVersionEvaluator } from './evaluatorKeptVersion';
 import { packResult } from './resultHandOff';
 import type { PackedValue } from './packedValue';
 
@@ -12,6 +13,8 @@ export interface EvaluationRequest {
   text: string;
   /** The document's location and the texts of the files it uses, as the fast analysis read them. */
   sources?: SourceSnapshot;
+  /** A warm-up round (workerEvaluator.ts): evaluated whole, so the worker keeps no version of the built-in set-up. */
+  warmUp?: true;
 }
 
 /**
@@ -27,15 +30,17 @@ export type EvaluationReply =
  * `workerData.stopFlag` (a one-element Int32Array on a SharedArrayBuffer): the editor thread
  * writes the id of a job it no longer wants there. Messages cannot reach a worker that is busy
  * computing, shared memory can; the evaluation reads the flag at its check points, gives up, and
- * this worker stays warm for the next job.
+ * this worker stays warm for the next job. The worker keeps the last version it read, so a job
+ * after a small edit parses and models only what changed (service/evaluatorKeptVersion.ts).
  */
 export function serveEvaluations(): void {
   const flag = (workerData as { stopFlag?: Int32Array } | null)?.stopFlag;
+  const kept = new KeptVersionEvaluator();
   parentPort?.on('message', (req: EvaluationRequest) => {
     let reply: EvaluationReply;
     try {
       const stop = flag ? (): boolean => Atomics.load(flag, 0) === req.id : undefined;
-      const outcome = evaluateText(req.text, req.sources, stop);
+      const outcome = req.warmUp ? evaluateText(req.text, req.sources, stop) : kept.evaluate(req.text, req.sources, stop);
       // Packing the 20,000-line file's result takes 0.4 s: not for a job no longer wanted.
       stopIfAsked(stop);
       const packed = outcome.result ? packResult(outcome.result) : undefined;

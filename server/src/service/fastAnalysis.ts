@@ -4,24 +4,13 @@
  * languageService.ts). Never throws: a failure becomes an `internal-error` problem, as in
  * `eval/analyze.ts`.
  */
-import type { Problem, SetupDocument } from '../format/ast';
-import { refusedAnalysis, sortProblems, type Analysis, type AnalyzeOptions } from '../eval/analyze';
+import type { SetupDocument } from '../format/ast';
+import { internalError, refusedAnalysis, sortProblems, type Analysis, type AnalyzeOptions } from '../eval/analyze';
 import { parseIncrementally, type IncrementalParse } from '../format/incrementalParse';
 import { computeLineStarts } from '../format/positions';
 import { BlockMemo } from '../model/blockMemo';
 import { buildModel } from '../model/buildModel';
 import { recordSources } from '../model/sources';
-
-function internalError(e: unknown): Problem {
-  const detail = e instanceof Error ? e.message : String(e);
-  const at = { line: 0, character: 0 };
-  return {
-    code: 'internal-error',
-    severity: 'error',
-    message: `Sublevel failed on this file (${detail}); please report it with the file attached`,
-    range: { start: at, end: at },
-  };
-}
 
 /** `options` as for `analyze`: the document's location and a reader for the files it uses. */
 export function analyzeFast(text: string, options?: AnalyzeOptions): Analysis {

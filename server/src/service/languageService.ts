@@ -24,6 +24,7 @@ import { codeActions, type CodeActionRequest } from '../features/codeActions';
 import { completion } from '../features/completion';
 import { definition } from '../features/definition';
 import { toDiagnostic } from '../features/diagnostics';
+import { withoutStop } from '../format/sentenceEnd';
 import { documentSymbols } from '../features/documentSymbols';
 import { foldingRanges } from '../features/foldingRanges';
 import { formatting } from '../features/formatting';
@@ -202,7 +203,7 @@ export class LanguageService {
   async diagram(doc: DocumentSnapshot, req: Pick<DiagramRequest, 'view' | 'line' | 'theme' | 'fieldName' | 'fromT' | 'toT' | 'fieldUnit'>): Promise<DiagramAnswer> {
     const failed: DiagramAnswer = { ok: false, message: 'Sublevel could not draw this file; the server log says why.' };
     const fast = this.store.analysis(doc); // never throws (analyzeFast catches)
-    if (fast.refused) return { ok: false, message: `Sublevel did not draw this file: ${fast.problems[0]?.message ?? 'it is over a size cap'}.` };
+    if (fast.refused) return { ok: false, message: `Sublevel did not draw this file: ${withoutStop(fast.problems[0]?.message ?? 'it is over a size cap')}.` };
     return this.guardEvaluated('diagram', doc, failed, (a) => diagramFor(a, req));
   }
 

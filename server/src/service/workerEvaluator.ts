@@ -196,7 +196,7 @@ export class WorkerEvaluator implements Evaluator {
     }
     const job = this.queue.shift()!;
     this.current = job;
-    const request: EvaluationRequest = { id: job.id, text: job.text, ...(job.sources ? { sources: job.sources } : {}) };
+    const request: EvaluationRequest = { id: job.id, text: job.text, ...(job.sources ? { sources: job.sources } : {}), ...(job.warmUp ? { warmUp: true as const } : {}) };
     this.worker.postMessage(request);
     this.timer = setTimeout(() => this.fail(this.worker, `an evaluation took longer than ${this.timeLimitMs / 1000} s and was stopped`), this.timeLimitMs);
   }

@@ -1,6 +1,5 @@
 /** The field-map diagram of a file's sources, for the panel and `sublevel render --view fieldmap`. */
 import type { SetupModel } from '../model/types';
-import { sumField } from '../physics/fields';
 import { fieldMapCsv, renderFieldMap, type RenderTheme } from '../render';
 import type { DiagramAnswer, DiagramRequest } from './diagram';
 import { fieldMapView } from './fieldMapView';
@@ -18,7 +17,7 @@ export function fieldMapFor(model: SetupModel, req: DiagramRequest, theme: Rende
   if (usable.length === 0) return { ok: false, message: `${broken.map((s) => `${s.kind} '${s.name}'`).join(', ')} ${broken.length === 1 ? 'has' : 'have'} problems to fix before the field can be drawn; see the Problems view.` };
   // The file's first field written with a unit sets the family of the |B| axis.
   const written = model.fields.find((f) => f.tesla?.unit !== undefined)?.tesla?.unit ?? model.magnets.find((m) => m.fieldT?.unit !== undefined)?.fieldT?.unit;
-  const clean = cleanField(usable.flatMap((s) => s.parts), sumField);
+  const clean = cleanField(usable.flatMap((s) => s.parts));
   const v = fieldMapView(
     usable.map((s) => ({ name: s.name, kind: s.kind, parts: s.parts })),
     (p) => {

@@ -209,16 +209,6 @@ export interface FieldMapOptions {
   points?: number;
 }
 
-/**
- * The |B| axis unit, from the top of the axis (a spike next to a wire is cut, so not its peak):
- * the family the file wrote, else G up to 0.1 T (coils and wires on a bench), T above, and µT or
- * nT under 1 G (small currents, a magnetometer's shield).
- */
-function mapUnit(topT: number, written: string | undefined): FieldUnit {
-  if (written !== undefined || topT < 1e-4) return fieldAxisUnit(topT, written);
-  return topT < 0.1 ? 'G' : 'T';
-}
-
 /** A block whose every part is magnetised 0: it adds no field and has no direction to draw. */
 function unmagnetised(s: MapSource): boolean {
   return s.parts.length > 0 && s.parts.every((p) => p.kind === 'slab' && !(norm(p.magnetisationT) > 0));
@@ -263,7 +253,8 @@ export function fieldMapView(sources: readonly MapSource[], field: FieldFunction
     componentT: showAcross ? acrossT : alongT,
     componentName: componentAxis === 's' ? 'B along the line' : componentAxis === 'across' ? 'B across the line' : `B_${componentAxis}`,
     componentAxis,
-    fieldUnit: options.fieldUnit ?? mapUnit(axis?.domain[1] ?? max, options.writtenUnit),
+    // The one rule of every field axis (render/fieldAxisUnit.ts), from the top of the axis: a spike next to a wire is cut, so not its peak.
+    fieldUnit: options.fieldUnit ?? fieldAxisUnit(axis?.domain[1] ?? max, options.writtenUnit),
     axis,
     sources: usable.map((s) => ({ name: s.name, kind: s.kind, shapes: sourceShapes(s.parts, line), ...(unmagnetised(s) ? { note: 'not magnetised' } : {}) })),
   };

@@ -17,5 +17,6 @@ export function residualsView(f: FitResult): ResidualsViewData | undefined {
     model: pts.map((p) => p.model!),
     unit: f.measured_unit,
     modelLine: profile,
+    ...(!profile && allFields && f.at_written_unit !== undefined ? { xWrittenUnit: f.at_written_unit } : {}),
   };
 }

@@ -84,11 +84,17 @@ describe('a quadrupole against gravity (b′ = 21 G/cm along z, gravity −z)', 
     const t = state(s.sublevels, 4, 4);
     // 21 G/cm at 100 µK: Γ ≈ 1.85 ħ/m (μ_B b′/k_B T)² ≈ 0.0027 /s.
     expect(t.majorana!.rateHz).toBeCloseTo(0.0027, 4);
-    expect(s.issues.some((i) => i.code === 'trap-majorana-slow' && i.sublevel === '|F=2, m_F=+2⟩')).toBe(true);
+    // The findings carry the sublevel and its figure, no text: the evaluation words them (eval/trapSublevelFindings.ts).
+    expect(s.sublevelFindings.find((f) => f.code === 'trap-majorana-slow' && f.sublevel === '|F=2, m_F=+2⟩')).toEqual({ severity: 'info', code: 'trap-majorana-slow', sublevel: '|F=2, m_F=+2⟩', majoranaRateHz: t.majorana!.rateHz });
     const cold = summariseTrap(input({ field: quadrupole(1), temperatureK: 20e-6 }));
-    expect(cold.issues.some((i) => i.code === 'trap-zero-field' && i.sublevel === '|F=2, m_F=+2⟩' && /about 1\.5 \/s/.test(i.message))).toBe(true);
+    // The same formula at 1 T/m and 20 µK: (100/21)² × (100/20)² × 0.0027 /s ≈ 1.5 /s, above the note's 1/(60 s).
+    const coldFinding = cold.sublevelFindings.find((f) => f.code === 'trap-zero-field' && f.sublevel === '|F=2, m_F=+2⟩');
+    expect(coldFinding?.majoranaRateHz).toBeCloseTo(1.5, 1);
     const unknown = summariseTrap(input({ field: quadrupole(1) }));
-    expect(unknown.issues.some((i) => i.code === 'trap-zero-field' && /give the cloud temperature/.test(i.message))).toBe(true);
+    const unrated = unknown.sublevelFindings.filter((f) => f.code === 'trap-zero-field');
+    expect(unrated.length).toBeGreaterThan(0);
+    expect(unrated.every((f) => f.majoranaRateHz === undefined)).toBe(true);
+    expect(unknown.issues.filter((i) => i.code === 'trap-zero-field')).toEqual([]);
   });
   it('holds nothing of the high-field seekers', () => {
     expect(state(s.sublevels, 4, -4).trapped).toBe(false);
@@ -189,11 +195,13 @@ describe('the RF knife', () => {
   });
   it('a cut above the depth is flagged: a note per sublevel, a warning when it cuts no sublevel', () => {
     const q = summariseTrap(input({ field: quadrupole(1), gravity: [0, 0, 0], cutJ: 1e-20 }));
-    expect(q.issues.filter((i) => i.code === 'trap-cut-outside')).toHaveLength(3);
+    const outside = q.sublevelFindings.filter((f) => f.code === 'trap-cut-outside');
+    expect(outside).toHaveLength(3);
+    expect(outside.every((f) => f.depthJ !== undefined && f.depthJ < 1e-20)).toBe(true);
     expect(q.issues.filter((i) => i.code === 'trap-cut-above-depth')).toHaveLength(1);
     // 1 T/m, 2 cm: |2,+2⟩ is about 6.7 mK deep (μ_B b′R/2 / k_B), |2,+1⟩ about half: a 5 mK cut reaches only |2,+2⟩.
     const one = summariseTrap(input({ field: quadrupole(1), gravity: [0, 0, 0], cutJ: 1.380649e-23 * 5e-3 }));
-    expect(one.issues.filter((i) => i.code === 'trap-cut-outside').map((i) => i.sublevel).sort()).toEqual(['|F=1, m_F=-1⟩', '|F=2, m_F=+1⟩']);
+    expect(one.sublevelFindings.filter((f) => f.code === 'trap-cut-outside').map((f) => f.sublevel).sort()).toEqual(['|F=1, m_F=-1⟩', '|F=2, m_F=+1⟩']);
     expect(one.issues.filter((i) => i.code === 'trap-cut-above-depth')).toEqual([]);
   });
 });

@@ -8,6 +8,7 @@ import type { LevelResult } from '../../eval/resultTypes';
 import { halfText } from '../../eval/halves';
 import { trimNumber, withUncertainty } from '../../eval/quantityText';
 import type { LevelModel } from '../../model/types';
+import { withoutStop } from '../../format/sentenceEnd';
 import { parseLevelDesignation } from '../../physics/configuration';
 import { allowedJ, formatTermLabel, formatTermSymbol } from '../../physics/termSymbol';
 import { md, mdTitle } from '../shared/markdown';
@@ -87,7 +88,7 @@ function wrongPart(text: string): string {
       : first.code === 'level-missing-term' || first.code === 'level-empty'
         ? 'the term is missing'
         : 'the term is not valid';
-  return `${part}: ${md(first.message.replace(/\.$/, ''))}`;
+  return `${part}: ${md(withoutStop(first.message))}`;
 }
 
 function invalidTermSection(level: LevelModel): string {

@@ -132,8 +132,7 @@ function layout(n: number, memory: WebAssembly.Memory): Layout {
 export function simdEigenpairs(a: Float64Array, n: number, values: Float64Array, vectors: Float64Array): boolean {
   const k = loadKernels();
   if (k === null) throw new Error('WebAssembly eigen kernels unavailable');
-  const l = layout(n, k.memory);
-  const heap = new Float64Array(k.memory.buffer);
+  const { l, heap, d, e, z, stage, merge } = workspace(k, n);
   const ns = l.ns;
   // Even orders: the rows straight into the reduction's layout (the same stride), scaled there;
   // odd ones need a padding column, so they go through the staging area.
@@ -147,12 +146,9 @@ export function simdEigenpairs(a: Float64Array, n: number, values: Float64Array,
   if (ns !== n) k.packScaled(l.stage, n, ns, l.a, 1 / scale);
   else if (scale !== 1) k.scalePairs(l.a, n * n, 1 / scale);
   k.tridiagonalise(l.a, ns, n, l.d, l.e, l.betas, l.v, l.p, l.vn, l.pn, l.refl);
-  const d = heap.subarray(l.d / 8, l.d / 8 + n);
-  const e = heap.subarray(l.e / 8, l.e / 8 + n);
-  const stage = heap.subarray(l.stage / 8, l.stage / 8 + n * n);
   heap.fill(0, (l.z + 8 * n * ns) / 8, (l.z + 8 * l.rows * ns) / 8);
   // Row k of z (stride ns): the tridiagonal's k-th eigenvector.
-  if (!divideConquerTridiagonal(d, e, n, values, heap.subarray(l.z / 8, l.z / 8 + n * ns), ns, wasmMergeKernels(k, heap, l, n))) return false;
+  if (!divideConquerTridiagonal(d, e, n, values, z, ns, merge)) return false;
   k.applyReflectors(l.z, ns, l.rows, n, l.refl, l.betas);
   // Rows of z to columns of `vectors`.
   k.unpackTransposed(l.z, ns, n, l.stage);
@@ -168,8 +164,44 @@ export function simdEigenpairs(a: Float64Array, n: number, values: Float64Array,
 export function simdMergeKernels(n: number): MergeKernels | null {
   const k = loadKernels();
   if (k === null) return null;
+  return workspace(k, n).merge;
+}
+
+/** One order's layout and views of the module's memory, with its merge kernels. */
+interface Workspace {
+  buffer: ArrayBuffer;
+  l: Layout;
+  heap: Float64Array;
+  d: Float64Array;
+  e: Float64Array;
+  z: Float64Array;
+  stage: Float64Array;
+  merge: MergeKernels;
+}
+
+/** Workspaces by order, kept while the memory is not grown (a block is solved at many fields). */
+const workspaces = new Map<number, Workspace>();
+
+function workspace(k: EigenKernels, n: number): Workspace {
+  const kept = workspaces.get(n);
+  if (kept !== undefined && kept.buffer === k.memory.buffer) return kept;
+  // Laid out first: it may grow the memory, which replaces the buffer and every view of it.
   const l = layout(n, k.memory);
-  return wasmMergeKernels(k, new Float64Array(k.memory.buffer), l, n);
+  const buffer = k.memory.buffer;
+  if (workspaces.size > 0 && [...workspaces.values()][0].buffer !== buffer) workspaces.clear();
+  const heap = new Float64Array(buffer);
+  const w = {
+    buffer,
+    l,
+    heap,
+    d: heap.subarray(l.d / 8, l.d / 8 + n),
+    e: heap.subarray(l.e / 8, l.e / 8 + n),
+    z: heap.subarray(l.z / 8, l.z / 8 + n * l.ns),
+    stage: heap.subarray(l.stage / 8, l.stage / 8 + n * n),
+    merge: wasmMergeKernels(k, heap, l, n),
+  };
+  workspaces.set(n, w);
+  return w;
 }
 
 /** The leaves' QR and the merges' loops on the module's memory, by the module's kernels (leafEigen, secularRoots, vectorWeights, cauchyRows, multiply, copyRows): one call per leaf or per merge and step. */

@@ -7,7 +7,7 @@ export { loopField } from './loopField';
 export { solenoidField } from './solenoidField';
 export { wireField } from './wireField';
 export { slabField, slabFieldWithRoundOff, type SlabFieldWithRoundOff } from './slabField';
-export { partField, sumField, fieldIssuesAt } from './sumField';
+export { partField, sumField, fieldIssuesAt, slabPartWithRoundOff } from './sumField';
 export { conductorOf, onSourceIssue, pointOnSource } from './onSource';
 export { validateFieldSource } from './validateSource';
 export { magnitudeGradient, magnitudeHessian, DEFAULT_CURVATURE_STEP_M, type MagnitudeCurvature } from './curvature';

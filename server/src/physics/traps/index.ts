@@ -1,5 +1,5 @@
 /** Magnetic traps built from field sources: which sublevels are held, how deep, how stiff (docs/traps.md). */
-export type { HarmonicShape, LinearShape, MajoranaEstimate, RfCut, SublevelTrap, TrapInput, TrapIssue, TrapRegion, TrapSummary } from './types';
+export type { HarmonicShape, LinearShape, MajoranaEstimate, RfCut, SublevelFinding, SublevelTrap, TrapInput, TrapIssue, TrapRegion, TrapSummary } from './types';
 export { summariseTrap, labelText, ZERO_FIELD_FRACTION } from './trapSummary';
 export { STANDARD_GRAVITY, gravityAlong } from './gravity';
 export { energyCurves, rfPartner, type EnergyCurve } from './energyCurves';

@@ -16,8 +16,8 @@ import { rfCut } from './rfCut';
 import { trapDepth, type RayCache } from './trapDepth';
 import { findMinimum } from './trapMinimum';
 import { harmonicShape, linearShape } from './trapShape';
-import { issue } from './issues';
-import type { SublevelTrap, TrapInput, TrapIssue, TrapSummary } from './types';
+import { finding, issue } from './issues';
+import type { SublevelFinding, SublevelTrap, TrapInput, TrapIssue, TrapSummary } from './types';
 import { norm, sub } from './vec3';
 
 /** Below this fraction of the largest |B| in the region a minimum counts as a zero of the field. */
@@ -69,6 +69,7 @@ function emptySummary(issues: TrapIssue[], survey?: FieldSurvey): TrapSummary {
     gravityGradientTPerM: survey?.gravityGradientTPerM ?? 0,
     sublevels: [],
     issues,
+    sublevelFindings: [],
   };
 }
 
@@ -92,9 +93,10 @@ export function summariseTrap(input: TrapInput): TrapSummary {
   if (curves.curves.length === 0) return emptySummary(issues, survey);
   const gravityG = norm(input.gravity);
   const rays: RayCache = new Map();
+  const findings: SublevelFinding[] = [];
   // Listed as a physicist reads them: by F (or J), then by m.
   const ordered = [...curves.curves].sort((a, b) => lowFieldRank(a.low) - lowFieldRank(b.low) || a.twoM - b.twoM);
-  const sublevels = ordered.map((c) => sublevelTrap(input, survey, curves.curves, c, curves.topT, gravityG, issues, rays));
+  const sublevels = ordered.map((c) => sublevelTrap(input, survey, curves.curves, c, curves.topT, gravityG, issues, findings, rays));
   if (!sublevels.some((s) => s.trapped)) {
     issues.push(issue('warning', 'trap-holds-nothing', 'The trap holds no sublevel of this level.'));
   } else if (input.cutJ !== undefined && !sublevels.some((s) => s.rfCut)) {
@@ -107,6 +109,7 @@ export function summariseTrap(input: TrapInput): TrapSummary {
     gravityGradientTPerM: survey.gravityGradientTPerM,
     sublevels,
     issues,
+    sublevelFindings: findings,
   };
 }
 
@@ -118,6 +121,7 @@ function sublevelTrap(
   topT: number,
   gravityG: number,
   issues: TrapIssue[],
+  findings: SublevelFinding[],
   rays: RayCache,
 ): SublevelTrap {
   const name = labelText(c.low);
@@ -213,10 +217,9 @@ function sublevelTrap(
     out.shape = shape;
     const m = out.majorana;
     if (m && m.rateHz < MAJORANA_NOTE_RATE) {
-      issues.push({ ...issue('info', 'trap-majorana-slow', `${name} sits at a zero of the field; Majorana spin flips lose about ${Number(m.rateHz.toPrecision(2))} /s at the cloud temperature (a lifetime of ${Number((1 / m.rateHz).toPrecision(2))} s).`, name), majoranaRateHz: m.rateHz });
+      findings.push(finding('info', 'trap-majorana-slow', name, { majoranaRateHz: m.rateHz }));
     } else {
-      const rate = m ? ` (about ${Number(m.rateHz.toPrecision(2))} /s at the cloud temperature)` : '; give the cloud temperature for a loss estimate';
-      issues.push({ ...issue('warning', 'trap-zero-field', `${name} sits at a zero of the field: bias at the minimum is too small, Majorana spin flips lose atoms there${rate}.`, name), ...(m ? { majoranaRateHz: m.rateHz } : {}) });
+      findings.push(finding('warning', 'trap-zero-field', name, m ? { majoranaRateHz: m.rateHz } : {}));
     }
   } else {
     const step = 1e-4 * Math.max(smooth(found.position), 1e-9 * input.region.radiusM);
@@ -235,7 +238,7 @@ function sublevelTrap(
     const limit = turningFieldT ?? topT;
     const cut = input.cutJ <= depth.depthJ ? rfCut(c, partner, found.fieldT, input.cutJ, limit) : null;
     if (cut) out.rfCut = cut;
-    else issues.push({ ...issue('info', 'trap-cut-outside', `The RF cut is above the trap's depth for ${name}: for it the knife cuts nothing the edge does not.`, name), depthJ: depth.depthJ });
+    else findings.push(finding('info', 'trap-cut-outside', name, { depthJ: depth.depthJ }));
   }
   return out;
 }

@@ -94,8 +94,20 @@ export interface TrapIssue extends EngineIssue {
   conductor?: { meets: 'centre' | 'region'; partIndex?: number };
   /** trap-gravity-too-strong: the |B| gradient along gravity the sublevel needs and the largest the trap has. */
   gravity?: { needTPerM: number; hasTPerM: number };
-  /** The sublevel's figure the issue is about, carried so a report can quote it without matching labels: its Majorana loss rate (1/s), or its depth (J) beside a cut above it. */
+}
+
+/**
+ * A finding about one sublevel that the evaluation words once per trap, naming every sublevel it
+ * meets (eval/trapSublevelFindings.ts): the core carries no text for it, only the code, the
+ * sublevel and its figure, so no label has to match.
+ */
+export interface SublevelFinding {
+  severity: EngineIssue['severity'];
+  code: 'trap-zero-field' | 'trap-majorana-slow' | 'trap-cut-outside';
+  sublevel: string;
+  /** trap-zero-field, trap-majorana-slow: the Majorana loss rate (1/s) at the cloud temperature, when one was given. */
   majoranaRateHz?: number;
+  /** trap-cut-outside: the sublevel's depth (J) beside the cut above it. */
   depthJ?: number;
 }
 
@@ -109,4 +121,6 @@ export interface TrapSummary {
   gravityGradientTPerM: number;
   sublevels: SublevelTrap[];
   issues: TrapIssue[];
+  /** Per-sublevel findings in the order they were met (zero field, slow Majorana loss, a cut outside). */
+  sublevelFindings: SublevelFinding[];
 }

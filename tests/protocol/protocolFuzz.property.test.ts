@@ -1,0 +1,212 @@
+/**
+ * The built server over JSON-RPC against random and mutated documents: each case opens a document,
+ * types a random edit sequence into it (incremental and whole-text changes, sent without waiting),
+ * and between the edits fires every request the editor makes at random positions, stale ones and
+ * ones past the end included. Every request must answer (an error only for a refused rename), none
+ * may take longer than a hang bound, and the server must log no failure and stay up; with
+ * diagnostics pushed and pulled. Each case waits, before it closes its document, for the evaluation
+ * of the last version (and, pushed, for its diagnostics), so late failures count for their case;
+ * after the property an idle server must have logged none at all.
+ * The bounds are hang detectors, not speed goals. FUZZ_RUNS raises the case count.
+ */
+import fc from 'fast-check';
+import { TextDocument } from 'vscode-languageserver-textdocument';
+import type { Position, Range } from 'vscode-languageserver-protocol';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { EDIT_SEEDS, editSequence, type TextEdit } from '../editSequences';
+import { mutatedText } from '../mutatedExamples';
+import { NEWER_BLOCKS } from '../features/newerBlockMistakes';
+import { ensureBuilt, startClient, type TestClient } from './lspClient';
+
+const RUNS = Number(process.env.FUZZ_RUNS ?? '') || 6;
+/** The whole property's limit, growing with the case count (a loaded machine takes ~2 s a case). */
+const TIME_LIMIT = Math.min(2 ** 31 - 1, Math.max(600_000, RUNS * 5000)); // a timer longer than 2^31 ms fires at once
+/** A request that has not answered within this is taken for a hang (the machine may be loaded). */
+const HANG_MS = 10_000;
+/** The diagram waits for the evaluation in the worker, which for the big generated setup is real work. */
+const DIAGRAM_HANG_MS = 30_000;
+
+const documents = fc.oneof(
+  editSequence,
+  fc.tuple(mutatedText([...EDIT_SEEDS.slice(0, -1), ...NEWER_BLOCKS.map((c) => c.text)], 8), fc.constant([] as TextEdit[])),
+  fc.tuple(fc.string({ unit: 'binary', maxLength: 300 }), fc.constant([] as TextEdit[])),
+);
+
+/** Per edit: whether it goes as one whole-text change, and seeds for the positions probed after it. */
+const probes = fc.array(fc.tuple(fc.boolean(), fc.array(fc.nat(), { minLength: 1, maxLength: 3 })), { minLength: 13, maxLength: 13 });
+
+const VIEWS = ['levels', 'pattern', 'lines', 'resonance', 'residuals', 'fieldmap', 'slower'];
+
+function positionFor(doc: TextDocument, seed: number): Position {
+  const line = seed % (doc.lineCount + 1); // one line past the end too
+  const text = doc.getText({ start: { line, character: 0 }, end: { line: line + 1, character: 0 } });
+  const position = { line, character: (seed >> 4) % (text.length + 3) };
+  // Now and then what no careful client sends: far past the end, or not a whole number.
+  if (seed % 17 === 5) return { line: 2 ** 31 - 1, character: 2 ** 31 - 1 };
+  if (seed % 17 === 7) return { line: line + 0.5, character: position.character + 0.25 };
+  return position;
+}
+
+interface Pending {
+  what: string;
+  /** Undefined once answered, else what went wrong. */
+  outcome: Promise<string | undefined>;
+  bound: number;
+}
+
+/** A request whose answer is judged as soon as it comes (a refused rename, with its reason, is an answer). */
+function pending(what: string, answer: Promise<unknown>, bound: number): Pending {
+  const outcome = answer.then(
+    () => undefined,
+    (e: { code?: number; message?: string }) => (/rename/.test(what) && e.code === -32602 ? undefined : `${what}: error ${e.code} ${e.message}`),
+  );
+  return { what, outcome, bound };
+}
+
+/** Every request the editor makes about one position of one document version. */
+function requestsAt(client: TestClient, uri: string, doc: TextDocument, seed: number): Pending[] {
+  const c = client.connection;
+  const textDocument = { uri };
+  const position = positionFor(doc, seed);
+  const around: Range = { start: { line: Math.max(0, position.line - 2), character: 0 }, end: { line: position.line + 3, character: 0 } };
+  const diagnostics = (client.pushed.get(uri)?.diagnostics ?? []).filter((d) => Math.abs(d.range.start.line - position.line) <= 1);
+  const ask = (what: string, method: string, params: unknown, bound = HANG_MS): Pending => pending(what, c.sendRequest(method, params), bound);
+  const all = [
+    ask('hover', 'textDocument/hover', { textDocument, position }),
+    ask('completion', 'textDocument/completion', { textDocument, position }),
+    ask('definition', 'textDocument/definition', { textDocument, position }),
+    ask('references', 'textDocument/references', { textDocument, position, context: { includeDeclaration: true } }),
+    ask('code actions', 'textDocument/codeAction', { textDocument, range: { start: position, end: position }, context: { diagnostics } }),
+    ask('range formatting', 'textDocument/rangeFormatting', { textDocument, range: around, options: { tabSize: 2, insertSpaces: true } }),
+    ask('inlay hints', 'textDocument/inlayHint', { textDocument, range: around }),
+    ask('semantic tokens (range)', 'textDocument/semanticTokens/range', { textDocument, range: around }),
+    ask('prepare rename', 'textDocument/prepareRename', { textDocument, position }),
+  ];
+  if (client.initialize.capabilities.diagnosticProvider) all.push(ask('diagnostics', 'textDocument/diagnostic', { textDocument }));
+  if (seed % 3 === 0) {
+    all.push(
+      ask('formatting', 'textDocument/formatting', { textDocument, options: { tabSize: 2, insertSpaces: true } }),
+      ask('semantic tokens', 'textDocument/semanticTokens/full', { textDocument }),
+      ask('document symbols', 'textDocument/documentSymbol', { textDocument }),
+      ask('folding ranges', 'textDocument/foldingRange', { textDocument }),
+      ask('rename', 'textDocument/rename', { textDocument, position, newName: 'renamed' }),
+      ask('diagram', 'sublevel/diagram', { uri, view: VIEWS[seed % VIEWS.length], line: position.line, theme: 'panel' }, DIAGRAM_HANG_MS),
+    );
+  }
+  return all;
+}
+
+const pause = (ms: number): Promise<void> => new Promise((resolve) => setTimeout(resolve, ms));
+
+/**
+ * Waits until the evaluation of the open document's current version is in: a pull answer whose
+ * result id is not marked partial (pulled again until then; a repeated pull of one version does not
+ * put its evaluation off). Pushed diagnostics then go out for this version once more: waits for the
+ * push that matches the complete pull. Undefined once settled, else what did not settle in time.
+ */
+async function settled(client: TestClient, uri: string, version: number, pushed: boolean): Promise<string | undefined> {
+  const until = Date.now() + DIAGRAM_HANG_MS;
+  let last: unknown;
+  for (;;) {
+    const report = (await client.connection.sendRequest('textDocument/diagnostic', { textDocument: { uri } })) as { resultId?: string; items?: unknown[] };
+    last = report;
+    if (report.resultId !== undefined && !report.resultId.includes('-partial')) {
+      if (!pushed) return undefined;
+      for (;;) {
+        const p = client.pushed.get(uri);
+        if (p?.version === version && JSON.stringify(p.diagnostics) === JSON.stringify(report.items)) return undefined;
+        if (Date.now() > until) return `no push of version ${version} matching its complete pull within ${DIAGRAM_HANG_MS} ms`;
+        await pause(20);
+      }
+    }
+    if (Date.now() > until) return `the evaluation of version ${version} did not settle within ${DIAGRAM_HANG_MS} ms: last pull ${JSON.stringify(last).slice(0, 200)}`;
+    await pause(50);
+  }
+}
+
+/** Waits for an answer, at most the request's hang bound. */
+async function answered(p: Pending): Promise<string | undefined> {
+  let timer: NodeJS.Timeout | undefined;
+  const hang = new Promise<string>((resolve) => (timer = setTimeout(() => resolve(`${p.what}: no answer within ${p.bound} ms`), p.bound)));
+  const r = await Promise.race([p.outcome, hang]);
+  clearTimeout(timer);
+  return r;
+}
+
+beforeAll(() => ensureBuilt(), 120_000);
+
+const CLIENTS = [
+  { name: 'diagnostics pushed', capabilities: {} },
+  { name: 'diagnostics pulled', capabilities: { diagnostic: { dynamicRegistration: false } } },
+];
+
+for (const kind of CLIENTS) {
+  describe(`the server over JSON-RPC, fuzzed (${kind.name})`, () => {
+    let client: TestClient;
+    /** Error-level log lines of the current case: every failure the server's guards catch is logged there. */
+    const failures: string[] = [];
+    /** Every error-level log line of the whole run, never cleared: none may come late either. */
+    const everFailed: string[] = [];
+    let opened = 0;
+    beforeAll(async () => {
+      client = await startClient({ textDocument: { hover: { contentFormat: ['markdown'] }, rename: { prepareSupport: true }, ...kind.capabilities } });
+      client.connection.onNotification('window/logMessage', (m: { type: number; message: string }) => {
+        if (m.type === 1) {
+          failures.push(m.message);
+          everFailed.push(m.message);
+        }
+      });
+    }, 60_000);
+    afterAll(async () => {
+      if (client && client.process.exitCode === null) client.process.kill();
+    });
+
+    it('answers every request on random and edited documents, and logs no failure', async () => {
+      await fc.assert(
+        fc.asyncProperty(documents, probes, async ([text, edits], shapes) => {
+          failures.length = 0; // a case's own failures only, so that shrinking finds the smallest
+          const uri = `file:///protocol/fuzz${opened++}.sublevel`;
+          let doc = TextDocument.create(uri, 'sublevel', 1, text);
+          await client.connection.sendNotification('textDocument/didOpen', { textDocument: { uri, languageId: 'sublevel', version: 1, text } });
+          const pending: Pending[] = requestsAt(client, uri, doc, shapes[0]![1][0]! * 3);
+          for (const [i, e] of edits.entries()) {
+            const [whole, seeds] = shapes[i + 1]!;
+            const at = e.at % (doc.getText().length + 1);
+            const range = { start: doc.positionAt(at), end: doc.positionAt(at + e.remove) };
+            const next = TextDocument.update(doc, [{ range, text: e.insert }], doc.version + 1);
+            const change = whole ? { text: next.getText() } : { range, text: e.insert };
+            doc = next;
+            // Not awaited against the answers: requests about the older version are still in flight.
+            await client.connection.sendNotification('textDocument/didChange', { textDocument: { uri, version: doc.version }, contentChanges: [change] });
+            for (const s of seeds) pending.push(...requestsAt(client, uri, doc, s));
+          }
+          const problems = (await Promise.all(pending.map(answered))).filter((x) => x !== undefined);
+          // The last version's evaluation (and its push) before the close, which would cancel it.
+          const late = await settled(client, uri, doc.version, !kind.capabilities.diagnostic);
+          if (late) problems.push(late);
+          await client.connection.sendNotification('textDocument/didClose', { textDocument: { uri } });
+          expect(problems, doc.getText()).toEqual([]);
+          expect(failures, doc.getText()).toEqual([]);
+          expect(client.process.exitCode).toBeNull();
+        }),
+        { numRuns: RUNS },
+      );
+    }, TIME_LIMIT);
+
+    it('logs no failure late: none once a fresh document is evaluated after the last case', async () => {
+      // The worker evaluates one job at a time, in order: once this one is in, every earlier one is done or dropped.
+      const uri = 'file:///protocol/idle.sublevel';
+      const text = EDIT_SEEDS[0]!;
+      await client.connection.sendNotification('textDocument/didOpen', { textDocument: { uri, languageId: 'sublevel', version: 1, text } });
+      expect(await settled(client, uri, 1, !kind.capabilities.diagnostic)).toBeUndefined();
+      await client.connection.sendNotification('textDocument/didClose', { textDocument: { uri } });
+      await client.connection.sendRequest('textDocument/diagnostic', { textDocument: { uri } }); // a round trip after the close
+      expect(everFailed).toEqual([]);
+      expect(client.process.exitCode).toBeNull();
+    }, DIAGRAM_HANG_MS * 2);
+
+    it('shuts down and exits cleanly', async () => {
+      expect(await client.stop()).toBe(0);
+    });
+  });
+}
