@@ -8,10 +8,7 @@
 // Trees alternate, one process per run, so that each starts alike.
 //   node scripts/firstEvaluationFigures.mjs TREE_A TREE_B [PAIRS=3] [DELAYS=0,1000,3000] [LINES=20000]
 // Each tree needs its own dist/server.js (node esbuild.mjs) and node_modules.
-import { spawnSync } from 'node:child_process';
-import { loadavg } from 'node:os';
-import path from 'node:path';
-import * as esbuild from 'esbuild';
+import { SERVER_NODE_FLAGS, inTurn, loadNow, runScenario, treesWithScenario } from './lib/twoTrees.mjs';
 
 const [a, b, pairs = '3', delays = '0,1000,3000', lines = '20000'] = process.argv.slice(2);
 if (!a || !b) {
@@ -42,24 +39,14 @@ async function main(): Promise<void> {
 void main();
 `;
 
-function bundle(tree) {
-  const out = path.join(tree, 'dist', 'firstEvaluationScenario.js');
-  esbuild.buildSync({ stdin: { contents: SCENARIO, resolveDir: tree, loader: 'ts' }, bundle: true, platform: 'node', format: 'cjs', outfile: out, logLevel: 'warning' });
-  return out;
-}
-
-/** The server's Node flags (client/src/extension.ts), as bench/editor.bench.ts uses them. */
-const SERVER_NODE_FLAGS = ['--max-semi-space-size=64'];
-
-const trees = [a, b].map((t) => ({ tree: path.resolve(t), script: bundle(path.resolve(t)) }));
+const trees = treesWithScenario([a, b], 'firstEvaluationScenario', SCENARIO);
 for (let p = 0; p < Number(pairs); p++) {
   for (const delay of delays.split(',')) {
-    for (const t of p % 2 === 0 ? trees : [...trees].reverse()) {
-      const load = loadavg()[0].toFixed(1);
-      const r = spawnSync(process.execPath, [...SERVER_NODE_FLAGS, t.script, delay, lines], { cwd: t.tree, encoding: 'utf8' });
-      const fig = JSON.parse(r.stdout.trim().split('\n').pop());
+    for (const t of inTurn(trees, p)) {
+      const load = loadNow();
+      const fig = runScenario(t, [delay, lines], SERVER_NODE_FLAGS);
       const warm = fig.warmUp ? `warm-up rounds done ${fig.warmUp.done}, given up ${fig.warmUp.superseded}` : 'no warm-up';
-      console.log(`${path.basename(t.tree)} opened at ${delay.startsWith('r') ? `warm-up round ${delay.slice(1)}` : `${delay} ms`}: ${(fig.cpu / 1000).toFixed(2)} s CPU, ${(fig.wall / 1000).toFixed(2)} s wall, ${fig.rss.toFixed(0)} MB, ${warm} (load ${load})`);
+      console.log(`${t.name} opened at ${delay.startsWith('r') ? `warm-up round ${delay.slice(1)}` : `${delay} ms`}: ${(fig.cpu / 1000).toFixed(2)} s CPU, ${(fig.wall / 1000).toFixed(2)} s wall, ${fig.rss.toFixed(0)} MB, ${warm} (load ${load})`);
     }
   }
 }

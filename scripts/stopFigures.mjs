@@ -6,10 +6,7 @@
 // grace and a fresh one will serve the next job). Trees alternate, one process per run.
 //   node scripts/stopFigures.mjs TREE_A TREE_B [PAIRS=3] [ASKS=50,200,400,700] [LINES=20000]
 // Each tree needs its own dist/server.js (node esbuild.mjs) and node_modules.
-import { spawnSync } from 'node:child_process';
-import { loadavg } from 'node:os';
-import path from 'node:path';
-import * as esbuild from 'esbuild';
+import { SERVER_NODE_FLAGS, alternate, runScenario, treesWithScenario } from './lib/twoTrees.mjs';
 
 const [a, b, pairs = '3', asks = '50,200,400,700', lines = '20000'] = process.argv.slice(2);
 if (!a || !b) {
@@ -44,22 +41,9 @@ async function main(): Promise<void> {
 void main();
 `;
 
-function bundle(tree) {
-  const out = path.join(tree, 'dist', 'stopScenario.js');
-  esbuild.buildSync({ stdin: { contents: SCENARIO, resolveDir: tree, loader: 'ts' }, bundle: true, platform: 'node', format: 'cjs', outfile: out, logLevel: 'warning' });
-  return out;
-}
-
-/** The server's Node flags (client/src/extension.ts), as bench/editor.bench.ts uses them. */
-const SERVER_NODE_FLAGS = ['--max-semi-space-size=64'];
-
-const trees = [a, b].map((t) => ({ tree: path.resolve(t), script: bundle(path.resolve(t)) }));
-for (let p = 0; p < Number(pairs); p++) {
-  for (const t of p % 2 === 0 ? trees : [...trees].reverse()) {
-    const load = loadavg()[0].toFixed(1);
-    const r = spawnSync(process.execPath, [...SERVER_NODE_FLAGS, t.script, lines, ...asks.split(',')], { cwd: t.tree, encoding: 'utf8' });
-    const figs = JSON.parse(r.stdout.trim().split('\n').pop());
-    const said = figs.map((f) => `ask at ${f.ask} ms: ${f.how === 'stopped' ? `free ${f.freed.toFixed(0)} ms later, ${f.kept ? 'same worker' : 'worker replaced'}` : 'had finished'}`);
-    console.log(`${path.basename(t.tree)} (load ${load}): ${said.join('; ')}`);
-  }
-}
+const trees = treesWithScenario([a, b], 'stopScenario', SCENARIO);
+alternate(trees, pairs, (t, _p, load) => {
+  const figs = runScenario(t, [lines, ...asks.split(',')], SERVER_NODE_FLAGS);
+  const said = figs.map((f) => `ask at ${f.ask} ms: ${f.how === 'stopped' ? `free ${f.freed.toFixed(0)} ms later, ${f.kept ? 'same worker' : 'worker replaced'}` : 'had finished'}`);
+  console.log(`${t.name} (load ${load}): ${said.join('; ')}`);
+});

@@ -5,10 +5,7 @@
 // Trees alternate, one process per run, so that each starts alike.
 //   node scripts/typingFigures.mjs TREE_A TREE_B [PAIRS=3] [KEYS=6] [INTERVAL=300] [LINES=20000]
 // Each tree needs its own dist/server.js (node esbuild.mjs) and node_modules.
-import { spawnSync } from 'node:child_process';
-import { loadavg } from 'node:os';
-import path from 'node:path';
-import * as esbuild from 'esbuild';
+import { alternate, runScenario, treesWithScenario } from './lib/twoTrees.mjs';
 
 const [a, b, pairs = '3', keys = '6', interval = '300', lines = '20000'] = process.argv.slice(2);
 if (!a || !b) {
@@ -44,19 +41,8 @@ async function main(): Promise<void> {
 void main();
 `;
 
-function bundle(tree) {
-  const out = path.join(tree, 'dist', 'typingScenario.js');
-  esbuild.buildSync({ stdin: { contents: SCENARIO, resolveDir: tree, loader: 'ts' }, bundle: true, platform: 'node', format: 'cjs', outfile: out, logLevel: 'warning' });
-  return out;
-}
-
-const trees = [a, b].map((t) => ({ tree: path.resolve(t), script: bundle(path.resolve(t)), runs: [] }));
-for (let p = 0; p < Number(pairs); p++) {
-  for (const t of p % 2 === 0 ? trees : [...trees].reverse()) {
-    const load = loadavg()[0].toFixed(1);
-    const r = spawnSync(process.execPath, [t.script, keys, interval, lines], { cwd: t.tree, encoding: 'utf8' });
-    const fig = JSON.parse(r.stdout.trim().split('\n').pop());
-    t.runs.push(fig);
-    console.log(`${path.basename(t.tree)}: final job ${(fig.wall / 1000).toFixed(2)} s wall, ${(fig.cpu / 1000).toFixed(2)} s CPU, worker ${fig.warm ? 'kept warm' : 'replaced'} (load ${load})`);
-  }
-}
+const trees = treesWithScenario([a, b], 'typingScenario', SCENARIO);
+alternate(trees, pairs, (t, _p, load) => {
+  const fig = runScenario(t, [keys, interval, lines]);
+  console.log(`${t.name}: final job ${(fig.wall / 1000).toFixed(2)} s wall, ${(fig.cpu / 1000).toFixed(2)} s CPU, worker ${fig.warm ? 'kept warm' : 'replaced'} (load ${load})`);
+});

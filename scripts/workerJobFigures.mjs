@@ -6,10 +6,7 @@
 // Trees alternate, one process per run, so that each starts alike.
 //   node scripts/workerJobFigures.mjs TREE_A TREE_B [PAIRS=3] [JOBS=8] [LINES=20000]
 // Each tree needs its own dist/server.js (node esbuild.mjs) and node_modules.
-import { spawnSync } from 'node:child_process';
-import { loadavg } from 'node:os';
-import path from 'node:path';
-import * as esbuild from 'esbuild';
+import { alternate, runScenario, treesWithScenario } from './lib/twoTrees.mjs';
 
 const [a, b, pairs = '3', jobs = '8', lines = '20000'] = process.argv.slice(2);
 if (!a || !b) {
@@ -47,22 +44,12 @@ async function main(): Promise<void> {
 void main();
 `;
 
-function bundle(tree) {
-  const out = path.join(tree, 'dist', 'workerJobScenario.js');
-  esbuild.buildSync({ stdin: { contents: SCENARIO, resolveDir: tree, loader: 'ts' }, bundle: true, platform: 'node', format: 'cjs', outfile: out, logLevel: 'warning' });
-  return out;
-}
-
 const s = (ms) => (ms / 1000).toFixed(2);
-const trees = [a, b].map((t) => ({ tree: path.resolve(t), script: bundle(path.resolve(t)) }));
-for (let p = 0; p < Number(pairs); p++) {
-  for (const t of p % 2 === 0 ? trees : [...trees].reverse()) {
-    const load = loadavg()[0].toFixed(1);
-    const r = spawnSync(process.execPath, [t.script, jobs, lines], { cwd: t.tree, encoding: 'utf8' });
-    const fig = JSON.parse(r.stdout.trim().split('\n').pop());
-    console.log(
-      `${path.basename(t.tree)}: number edited ${s(fig.number.cpu)} s CPU (${s(fig.number.wall)} s wall), line inserted ${s(fig.line.cpu)} s CPU (${s(fig.line.wall)} s wall), ` +
-        `medians of ${Math.ceil(Number(jobs) / 2)} jobs; ${fig.rss.toFixed(0)} MB resident (load ${load})`,
-    );
-  }
-}
+const trees = treesWithScenario([a, b], 'workerJobScenario', SCENARIO);
+alternate(trees, pairs, (t, _p, load) => {
+  const fig = runScenario(t, [jobs, lines]);
+  console.log(
+    `${t.name}: number edited ${s(fig.number.cpu)} s CPU (${s(fig.number.wall)} s wall), line inserted ${s(fig.line.cpu)} s CPU (${s(fig.line.wall)} s wall), ` +
+      `medians of ${Math.ceil(Number(jobs) / 2)} jobs; ${fig.rss.toFixed(0)} MB resident (load ${load})`,
+  );
+});
