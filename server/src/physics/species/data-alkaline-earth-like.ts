@@ -3,7 +3,7 @@
  * clock (3P0) and intercombination (3P1) levels; 87Sr also its metastable 3P2.
  */
 import { derivedNuclearG, energy, energyFromParts, GROUND_ENERGY, mhz, sourced } from './build-helpers';
-import { SR87_CLOCK, SR88_INTERCOMBINATION, SR_CLOCK_ISOTOPE_SHIFT } from './measurements';
+import { SR87_3P2_BEAM, SR87_CLOCK, SR88_INTERCOMBINATION, SR_CLOCK_ISOTOPE_SHIFT } from './measurements';
 import {
   CHEMLIN_SR87,
   CHEMLIN_YB171_SPIN,
@@ -11,7 +11,6 @@ import {
   IAEA_MOMENTS_MEMORY,
   NIST_ASD_MEMORY,
   NIST_MASSES,
-  READ_IN_MEASUREMENT,
 } from './sources';
 import type { BuiltinSpecies } from './types';
 
@@ -81,8 +80,9 @@ export const STRONTIUM_87: BuiltinSpecies = {
     {
       key: '3P2',
       designation: '5s 5p 3P°2',
-      A: mhz(212.765, FROM_MEMORY, 0.001, READ_IN_MEASUREMENT),
-      B: mhz(67.215, FROM_MEMORY, 0.015, READ_IN_MEASUREMENT),
+      // Negative: the page drops the sign, the intervals it prints need it (measurements.ts).
+      A: mhz(-212.765, SR87_3P2_BEAM, 0.001),
+      B: mhz(67.215, SR87_3P2_BEAM, 0.015),
       ...energy(14898.545, 'cm-1', NIST_ASD_MEMORY),
     },
   ],
