@@ -53,6 +53,10 @@ export const SR_CLOCK_ISOTOPE_SHIFT =
 
 export const SR87_CLOCK = 'arXiv:2008.00723 (2020), abstract: ⁸⁷Sr 1S0–3P0 429 228 004 229 873.082(76) Hz';
 
+/** Supersedes the same laboratory's earlier D1 values, which the abstract says it is at variance with. */
+export const RB_D1_HYPERFINE_2016 =
+  'arXiv:1611.02406 (2016), abstract (arcxiv): 5P1/2 A = 120.510(26) MHz (⁸⁵Rb) and 408.340(19) MHz (⁸⁷Rb)';
+
 export const CS_D1_1999 = 'Phys. Rev. Lett. 82, 3568 (1999), abstract: D1 hyperfine centroid 335 116 048 807(41) kHz';
 
 export const CS_6P32_GJ = 'arXiv:2208.00077 (2022), abstract: g_J(6²P3/2) = 1.334 087 49(52)';
