@@ -74,8 +74,9 @@ describe('sublevel eval --format json with uncertain inputs (version 2)', () => 
     expect(doc.uncertainty_inputs.map((i: { id: string }) => i.id)).toEqual([
       'field:bias', 'magnet:selector.field', 'magnet:selector.gradient', 'magnet:selector.length',
       'level:Li7.ground.A', 'level:Li7.ground.g_J', 'level:Li7.p_term.zeta', 'level:Li7.upper.A', 'level:Li7.upper.B',
-      // The built-in ⁷Li D2 line carries an uncertainty since the lithium anchor got one (docs/species-data.md).
-      'level:Li7.upper.energy', 'beam:main.drift', 'resonance:rf.frequency',
+      // The built-in ⁷Li D2 line enters as its two pieces: the lithium anchor, shared by all four built-in lithium
+      // lines, and the read fine structure (docs/species-data.md, tests/eval/sharedBuiltinInputs.test.ts).
+      'builtin:Li7.D1', 'builtin:Li7.2P-fine-structure', 'beam:main.drift', 'resonance:rf.frequency',
     ]);
   });
   it('gives the beam sublevels a deflection uncertainty that follows ⟨z⟩ ∝ μ G (L1²/2 + L1 L2) (GUM, product rule)', () => {

@@ -61,7 +61,7 @@ describe('lithium D lines: the differences implied by the table', () => {
     expect(u('Li6', 'P1/2')).toBeCloseTo(Math.hypot(1, 0.015), 12);
     expect(u('Li6', 'P3/2')).toBeCloseTo(Math.hypot(1, 0.015, 0.049), 12);
     for (const [id, key] of [['Li7', 'P3/2'], ['Li6', 'P1/2'], ['Li6', 'P3/2']] as const) {
-      expect(level(id, key).energyHz?.uncertaintySource, `${id} ${key}`).toMatch(/^the ⁷Li D1 anchor's 1 MHz \(from memory, generous\) and .* \(read\), in quadrature$/);
+      expect(level(id, key).energyHz?.uncertaintySource, `${id} ${key}`).toMatch(/^the ⁷Li D1 anchor's 1 MHz \(from memory, generous; common to all four built-in lithium lines: .*\) and .* \(read\), in quadrature$/);
     }
   });
 

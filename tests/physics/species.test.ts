@@ -335,6 +335,20 @@ describe('rubidium 5p hyperfine constants against independent measurements (read
     agreesWithin2Sigma(level(id, 'P1/2').A, measured, sigma, `${id} 5p1/2 A`);
   });
 
+  it('⁸⁷Rb 5p1/2 A is the 2016 value itself, cited (it replaces a recalled 408.328(15) MHz)', () => {
+    const a = level('Rb87', 'P1/2').A;
+    expect(a?.value).toBe(408.34e6);
+    expect(a?.uncertainty).toBeCloseTo(0.019e6, 6);
+    expect(a?.source).toMatch(/^arXiv:1611\.02406 \(2016\).*408\.340\(19\) MHz/);
+  });
+
+  it('⁸⁷Rb D1 vacuum wavelength is c/ν of the stored D1 frequency to its 12 digits (derived, no longer recalled)', () => {
+    const p = level('Rb87', 'P1/2');
+    const lambdaNm = (SPEED_OF_LIGHT / num(p.energyHz, 'D1')) * 1e9;
+    expect(Math.abs(num(p.vacuumWavelengthNm, 'λ') - lambdaNm)).toBeLessThan(1e-9);
+    expect(p.vacuumWavelengthNm?.source).toMatch(/^derived: λ = c\/ν/);
+  });
+
   it('⁸⁷Rb 5p3/2 A and B agree with the octupole-aware reanalysis of the 1996 intervals', () => {
     // arXiv:0810.5745 (Phys. Rev. A 79, 2009), abstract: A = 84.7189(22) MHz, B = 12.4942(43) MHz,
     // C = −0.12(9) kHz, from the intervals measured in Opt. Lett. 21, 1280 (1996).

@@ -9,6 +9,12 @@ import { ELECTRON_GS, ELECTRON_MASS_U, NUCLEAR_MAGNETON_HZ_PER_T, SPEED_OF_LIGHT
 import { nuclearGFromMoment } from '../../server/src/physics/species';
 import type { Sourced } from '../../server/src/physics/species';
 import { level, num, species } from '../fixtures/builtinLookup';
+import { analyze } from '../../server/src/eval/analyze';
+
+/** The evaluated levels of a setup, by name (for checks on what the program derives from the stored constants). */
+function levelsOf(text: string) {
+  return { byName: Object.fromEntries(analyze(text).result!.levels.map((l) => [l.level, l])) };
+}
 
 
 
@@ -211,12 +217,37 @@ describe('chromium and strontium hyperfine constants and clock lines', () => {
     const l = level('Cr53', 'ground');
     within2Sigma(l.A, -82.5994e6, 0.0016e6, 'Cr53 A');
     within2Sigma(l.B, 0.008e6, 0.012e6, 'Cr53 B');
+    // Cited by title and address (scilit.net/publications/88a8e553…): the page prints no journal, volume or year.
+    for (const v of [l.A, l.B]) {
+      expect(v?.source).toContain('scilit.net/publications/88a8e553f5e179f58e5797b5791d4c8b');
+      expect(v?.uncertaintySource).toBeUndefined();
+    }
+    expect(l.A?.uncertainty).toBeCloseTo(1.6e3, 6);
+    expect(l.B?.uncertainty).toBeCloseTo(12e3, 6);
   });
 
-  it('⁸⁷Sr 3P2 A, B are the atomic-beam values 212.765(1) and 67.215(15) MHz', () => {
+  it('⁸⁷Sr 3P2 A, B are the atomic-beam values −212.765(1) and +67.215(15) MHz', () => {
+    // "Hyperfine structure of ⁸⁷Sr in the ³P2 metastable state", abstract, scilit.net/publications/f1f0fe34… (no journal
+    // printed there): A = 212.765(1) MHz as printed, B = 67.215(15) MHz; the sign of A follows from the next check.
     const l = level('Sr87', '3P2');
-    within2Sigma(l.A, 212.765e6, 0.001e6, 'Sr87 3P2 A');
+    within2Sigma(l.A, -212.765e6, 0.001e6, 'Sr87 3P2 A');
     within2Sigma(l.B, 67.215e6, 0.015e6, 'Sr87 3P2 B');
+    for (const v of [l.A, l.B]) {
+      expect(v?.source).toContain('scilit.net/publications/f1f0fe343b2ff8b5e777010232542f8a');
+      expect(v?.uncertaintySource).toBeUndefined();
+    }
+  });
+
+  it('⁸⁷Sr 3P2: the stored A, B give the two intervals the same abstract prints, 1346.497(6) and 1170.208(6) MHz', () => {
+    // Casimir's formula, I = 9/2, J = 2: W(F) = A K/2 + B [(3/4) K (K + 1) − I(I+1) J(J+1)] / [2I(2I−1) J(2J−1)],
+    // K = F(F+1) − I(I+1) − J(J+1). The printed A, B are corrected for the neighbouring fine-structure levels, the
+    // intervals are not: allowed 1e-4 for that correction (it is 5e-5 here). With A > 0 the first interval would be
+    // 1419.38 MHz, 5 % off: that is why A is stored negative although the page prints no sign.
+    const { byName } = levelsOf('species Sr87\n  level m: 5s 5p 3P°2\n');
+    const intervals = byName.m!.hyperfine!.intervals.map((iv) => Math.abs(iv.interval_Hz)).sort((x, y) => x - y);
+    expect(intervals).toHaveLength(4); // F = 5/2 … 13/2
+    expect(intervals.some((x) => Math.abs(x / 1346.497e6 - 1) < 1e-4)).toBe(true);
+    expect(intervals.some((x) => Math.abs(x / 1170.208e6 - 1) < 1e-4)).toBe(true);
   });
 
   it.each([
@@ -251,7 +282,8 @@ describe('⁸⁷Sr 689 nm line: the ⁸⁸Sr line shifted by the clock line\'s i
   it('sits 62.188 134 MHz below ⁸⁸Sr 3P1 (to the Hz the value is rounded to) with the 1 MHz bound stored', () => {
     const e87 = level('Sr87', '3P1').energyHz;
     expect(Math.abs(num(e87, 'Sr87 3P1') - (434829121311e3 - SHIFT_HZ))).toBeLessThanOrEqual(0.5);
-    expect(e87?.uncertainty).toBe(1e6);
+    // The bound and the ⁸⁸Sr line's 10 kHz, in quadrature (the 10 kHz is one input with the ⁸⁸Sr level: tests/eval/sharedBuiltinInputs.test.ts).
+    expect(e87?.uncertainty).toBeCloseTo(Math.hypot(1e6, 10e3), 3);
     expect(e87?.source).toContain('62 188 134.004(10) Hz');
     expect(e87?.source).toContain('434 829 121 311(10) kHz');
     expect(e87?.uncertaintySource).toContain('from memory');

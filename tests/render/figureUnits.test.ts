@@ -130,7 +130,9 @@ describe('levels view: the right lane names what the states are at the end of th
     const labels = rightLabels(1e-6);
     expect(labels).toHaveLength(50);
     expect(labels.every((l) => /^F=\d+\/2, m_F=[+-]\d+\/2$/.test(l))).toBe(true);
-    expect(labels.slice(0, 2)).toEqual(['F=13/2, m_F=+13/2', 'F=13/2, m_F=+11/2']);
+    // ⁸⁷Sr 3P2 has A < 0 (docs/species-data.md): F = 5/2 lies highest, and its g_F = g_J (F(F+1) + J(J+1) − I(I+1)) /
+    // (2F(F+1)) = 1.5 × (8.75 + 6 − 24.75)/17.5 = −0.857 < 0 puts m_F = −5/2 on top.
+    expect(labels.slice(0, 2)).toEqual(['F=5/2, m_F=-5/2', 'F=5/2, m_F=-3/2']);
   });
   it('a range ending at 30 T (decoupled) names m_J and m_I', () => {
     const labels = rightLabels(30);

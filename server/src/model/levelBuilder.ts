@@ -205,7 +205,8 @@ function mergeBuiltin(level: LevelModel): void {
 }
 
 function fromBuiltin(v: Sourced<number> | undefined): Valued<number> | undefined {
-  return v ? { value: v.value, source: citationOf(v), ...(v.uncertainty !== undefined ? { uncertainty: v.uncertainty } : {}) } : undefined;
+  if (!v) return undefined;
+  return { value: v.value, source: citationOf(v), ...(v.uncertainty !== undefined ? { uncertainty: v.uncertainty } : {}), ...(v.parts ? { parts: v.parts } : {}) };
 }
 
 function findBuiltinLevel(levels: readonly BuiltinLevel[], level: LevelModel): BuiltinLevel | undefined {

@@ -6,7 +6,7 @@
 import type { BlockNode, LevelNode, Problem, Range, SettingNode, SetupDocument, UseNode } from '../format/ast';
 import type { Configuration } from '../physics/configuration';
 import type { TermSymbol } from '../physics/termSymbol';
-import type { BuiltinSpecies } from '../physics/species';
+import type { BuiltinSpecies, UncertainPart } from '../physics/species';
 import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
 import type { DataModel, FitRequestModel } from './fitTypes';
 import type { TrapModel } from './trapTypes';
@@ -23,6 +23,8 @@ export interface Valued<T> {
   componentUncertainty?: readonly [number | undefined, number | undefined, number | undefined];
   /** The unit the file wrote (`mT` in `25 mT`), so reports can show the value back in it. */
   unit?: string;
+  /** A built-in value summed from pieces shared with other built-in values: each piece is its own uncertain input. */
+  parts?: readonly UncertainPart[];
 }
 
 /**

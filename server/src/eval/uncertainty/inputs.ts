@@ -1,9 +1,12 @@
 /**
  * The uncertain inputs of one setup: every value written with an uncertainty (`0.35(2) T`) and
- * every built-in value whose source publishes one. Each is an independent input with a stable id.
+ * every built-in value whose source publishes one. Each is an independent input with a stable id; a built-in
+ * value summed from pieces shared with other built-in values (the lithium D lines' common anchor) enters as its
+ * pieces, `builtin:<key>`, so the shared piece is one input however many values carry it.
  */
 import type { SetupModel, LevelModel, Valued } from '../../model/types';
 import { hasSensitivity, NO_SENSITIVITY, type ParamSensitivities, type Sensitivities, type UncertainInput } from '../../physics/uncertainty';
+import type { UncertainPart } from '../../physics/species';
 import { centreFieldSensitivities, magnetSourceInputs, type SourceGap, type SourceInput } from './sourceInputs';
 
 export interface SetupInputs {
@@ -42,8 +45,19 @@ export function setupInputs(model: SetupModel): SetupInputs {
   const add = (id: string, label: string, v: Valued<number> | undefined): Sensitivities => {
     const u = v?.uncertainty;
     if (!v || u === undefined || !(u > 0) || !Number.isFinite(u) || !Number.isFinite(v.value)) return NO_SENSITIVITY;
+    if (v.parts) return addParts(v.parts);
     table.set(id, { id, label, value: v.value, u, ...(v.range !== undefined ? { written: true } : {}) });
     return { [id]: 1 };
+  };
+  // A built-in value summed from shared pieces: one input per piece, the same one in every value it enters.
+  const addParts = (parts: readonly UncertainPart[]): Sensitivities => {
+    const sens: Record<string, number> = {};
+    for (const p of parts) {
+      const id = `builtin:${p.key}`;
+      table.set(id, { id, label: p.label, value: p.value, u: p.u });
+      sens[id] = p.sign;
+    }
+    return sens;
   };
   const fieldSens = new Map<string, Sensitivities>();
   for (const f of model.fields) fieldSens.set(fieldKey({ kind: 'field', name: f.name }), add(`field:${f.name}`, `field ${f.name}`, f.tesla));

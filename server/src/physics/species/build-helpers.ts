@@ -4,7 +4,7 @@
  */
 import { nuclearGFromMoment, publishedEnergyToHz } from './conversions';
 import { FROM_MEMORY } from './sources';
-import type { PublishedEnergy, PublishedEnergyUnit, Sourced } from './types';
+import type { PublishedEnergy, PublishedEnergyUnit, Sourced, UncertainPart } from './types';
 
 /**
  * Wraps a value with its citation (and the uncertainty the citation publishes, if any; with
@@ -51,6 +51,23 @@ export function energy(
     ),
     energyPublished: { value, unit, source },
   };
+}
+
+/**
+ * Energy fields of a level whose value is a sum of separately measured pieces (`parts`, in the published unit),
+ * some shared with other levels: its uncertainty is theirs in quadrature, and each piece stays one input
+ * wherever it recurs (types.ts, `Sourced.parts`).
+ */
+export function energyFromParts(
+  value: number,
+  unit: PublishedEnergyUnit,
+  source: string,
+  uncertaintySource: string | undefined,
+  parts: readonly UncertainPart[],
+): { energyHz: Sourced<number>; energyPublished: PublishedEnergy } {
+  const fields = energy(value, unit, source, Math.hypot(...parts.map((p) => p.u)), uncertaintySource);
+  const inHz = parts.map((p) => ({ ...p, value: publishedEnergyToHz(p.value, unit), u: publishedEnergyToHz(p.u, unit) }));
+  return { ...fields, energyHz: { ...fields.energyHz, parts: inHz } };
 }
 
 /** The ground level's energy, zero by definition of the scale. */

@@ -2,8 +2,8 @@
  * Two-electron clock species: 87Sr and 88Sr, 171Yb and 174Yb, 40Ca. Ground 1S0 plus the
  * clock (3P0) and intercombination (3P1) levels; 87Sr also its metastable 3P2.
  */
-import { derivedNuclearG, energy, GROUND_ENERGY, mhz, sourced } from './build-helpers';
-import { SR87_CLOCK, SR88_INTERCOMBINATION, SR_CLOCK_ISOTOPE_SHIFT } from './measurements';
+import { derivedNuclearG, energy, energyFromParts, GROUND_ENERGY, mhz, sourced } from './build-helpers';
+import { SR87_3P2_BEAM, SR87_CLOCK, SR88_INTERCOMBINATION, SR_CLOCK_ISOTOPE_SHIFT } from './measurements';
 import {
   CHEMLIN_SR87,
   CHEMLIN_YB171_SPIN,
@@ -11,7 +11,6 @@ import {
   IAEA_MOMENTS_MEMORY,
   NIST_ASD_MEMORY,
   NIST_MASSES,
-  READ_IN_MEASUREMENT,
 } from './sources';
 import type { BuiltinSpecies } from './types';
 
@@ -23,11 +22,25 @@ const SR_3P1_KHZ = 434829121311;
  * field shifts differ only through the J-dependence of the ³P wavefunction. Rounded to the Hz, the sum's last digit.
  */
 const SR87_3P1_KHZ = Math.round((SR_3P1_KHZ - 62188.134004) * 1e3) / 1e3;
-/** Bounds the difference between the 689 nm and clock-line isotope shifts; the ⁸⁸Sr line's 10 kHz is far below it. */
+/** Bounds the difference between the 689 nm and clock-line isotope shifts. */
 const SR87_3P1_SHIFT_BOUND_KHZ = 1000;
 const SR87_3P1_SHIFT_BOUND =
   'from memory: the 689 nm and 698 nm lines\' ⁸⁸Sr − ⁸⁷Sr isotope shifts agree to far better than 1 MHz (same 5s² → 5s5p ³P term); ' +
-  'the measured shifts themselves carry 10 kHz and 10 mHz';
+  'in quadrature with the ⁸⁸Sr line\'s 10 kHz (read), which the ⁸⁸Sr 3P1 level shares as one input; the clock shift\'s own 10 mHz is left out';
+/**
+ * The pieces of the two 3P1 energies, kHz: the ⁸⁸Sr line enters both, so a ⁸⁸Sr − ⁸⁷Sr difference of the built-in lines
+ * carries only the 1 MHz bound. The clock shift's 10 mHz (1e-8 of the bound) is not a piece.
+ */
+const SR_3P1_PART = {
+  sr88Line: { key: 'Sr88.3P1', label: '⁸⁸Sr 1S0–3P1 frequency (built-in)', value: SR_3P1_KHZ, u: 10, sign: 1 },
+  shift: {
+    key: 'Sr87.3P1-isotope-shift',
+    label: '⁸⁸Sr − ⁸⁷Sr isotope shift of the 689 nm line, taken from the clock line (built-in)',
+    value: 62188.134004,
+    u: SR87_3P1_SHIFT_BOUND_KHZ,
+    sign: -1,
+  },
+} as const;
 const CIPM_2009 = 'CIPM Recommendation 2 (2009), recommended standard frequencies';
 const SR87_3P1_MEMORY = FROM_MEMORY;
 const TAU_SR_3P1 = sourced(21.28e-6, FROM_MEMORY);
@@ -55,20 +68,21 @@ export const STRONTIUM_87: BuiltinSpecies = {
       A: mhz(-260.084, SR87_3P1_MEMORY),
       B: mhz(-35.658, SR87_3P1_MEMORY),
       // The ⁸⁸Sr line shifted by the clock line's isotope shift; the stored 1 MHz bounds how far the 689 nm line's own shift may differ.
-      ...energy(
+      ...energyFromParts(
         SR87_3P1_KHZ,
         'kHz',
         `derived: ⁸⁸Sr 1S0–3P1 minus the clock line's ⁸⁸Sr − ⁸⁷Sr isotope shift; ${SR88_INTERCOMBINATION}; ${SR_CLOCK_ISOTOPE_SHIFT}`,
-        SR87_3P1_SHIFT_BOUND_KHZ,
         SR87_3P1_SHIFT_BOUND,
+        [SR_3P1_PART.sr88Line, SR_3P1_PART.shift],
       ),
       lifetimeS: TAU_SR_3P1,
     },
     {
       key: '3P2',
       designation: '5s 5p 3P°2',
-      A: mhz(212.765, FROM_MEMORY, 0.001, READ_IN_MEASUREMENT),
-      B: mhz(67.215, FROM_MEMORY, 0.015, READ_IN_MEASUREMENT),
+      // Negative: the page drops the sign, the intervals it prints need it (measurements.ts).
+      A: mhz(-212.765, SR87_3P2_BEAM, 0.001),
+      B: mhz(67.215, SR87_3P2_BEAM, 0.015),
       ...energy(14898.545, 'cm-1', NIST_ASD_MEMORY),
     },
   ],
@@ -86,7 +100,7 @@ export const STRONTIUM_88: BuiltinSpecies = {
   levels: [
     { key: 'ground', designation: '5s2 1S0', energyHz: GROUND_ENERGY },
     { key: '3P0', designation: '5s 5p 3P°0', ...energy(429228066418012, 'Hz', `${CIPM_2009}: 88Sr 1S0–3P0`) },
-    { key: '3P1', designation: '5s 5p 3P°1', ...energy(SR_3P1_KHZ, 'kHz', SR88_INTERCOMBINATION, 10), lifetimeS: TAU_SR_3P1 },
+    { key: '3P1', designation: '5s 5p 3P°1', ...energyFromParts(SR_3P1_KHZ, 'kHz', SR88_INTERCOMBINATION, undefined, [SR_3P1_PART.sr88Line]), lifetimeS: TAU_SR_3P1 },
   ],
 };
 

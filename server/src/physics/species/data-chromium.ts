@@ -1,6 +1,7 @@
 /** Chromium-52 (bosonic, I = 0) and chromium-53 (I = 3/2): 7S3 ground level and the 425 nm 7P°4 level. */
 import { derivedNuclearG, energy, GROUND_ENERGY, mhz, sourced } from './build-helpers';
-import { FROM_MEMORY, NIST_ASD_MEMORY, NIST_MASSES, READ_IN_MEASUREMENT, WEBELEMENTS_CR53 } from './sources';
+import { CR53_GROUND_BEAM } from './measurements';
+import { FROM_MEMORY, NIST_ASD_MEMORY, NIST_MASSES, WEBELEMENTS_CR53 } from './sources';
 import type { BuiltinSpecies } from './types';
 
 const CR53_MU = sourced(-0.47454, WEBELEMENTS_CR53);
@@ -35,8 +36,8 @@ export const CHROMIUM_53: BuiltinSpecies = {
     {
       key: 'ground',
       designation: '3d5 4s 7S3',
-      A: mhz(-82.5994, FROM_MEMORY, 0.0016, READ_IN_MEASUREMENT),
-      B: mhz(0.008, FROM_MEMORY, 0.012, READ_IN_MEASUREMENT),
+      A: mhz(-82.5994, CR53_GROUND_BEAM, 0.0016),
+      B: mhz(0.008, CR53_GROUND_BEAM, 0.012),
       energyHz: GROUND_ENERGY,
     },
   ],

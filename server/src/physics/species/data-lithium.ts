@@ -1,5 +1,5 @@
 /** Lithium-6 and lithium-7: 2s ground level and the 2p D-line levels. */
-import { energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
+import { energyFromParts, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
 import { LI7_2P12_INTERVAL, LI_D1_ISOTOPE_SHIFT, LI_D_LINES_COMB, LI_FINE_STRUCTURE_REVIEW } from './measurements';
 import { ARIMONDO, FROM_MEMORY, GEHM_LI6, IAEA_MOMENTS, NIST_MASSES, READ_IN_MEASUREMENT } from './sources';
 import type { BuiltinSpecies } from './types';
@@ -29,33 +29,44 @@ const LI6_FINE_STRUCTURE_U_MHZ = 0.049;
 const LI7_FINE_STRUCTURE_U_MHZ = 0.04;
 /** Sum rounded to the kHz, the last digit of the recalled anchor, so no binary noise reaches the published value. */
 const kHzSum = (a: number, b: number): number => Math.round((a + b) * 1e3) / 1e3;
-/** Uncertainty of a derived line: the anchor's and the read differences', independent, in quadrature. */
-const combinedU = (...readU: number[]): number => Math.hypot(LI7_D1_U_MHZ, ...readU);
+/**
+ * The independently uncertain pieces the four lines are built from, MHz. Each is one uncertain input wherever it
+ * enters: the anchor's 1 MHz is common to all four lines and cancels in any difference of two of them (an isotope
+ * shift, a fine structure), which is then known to the read 15–50 kHz, not to √2 MHz.
+ */
+const PART = {
+  anchor: { key: 'Li7.D1', label: '⁷Li D1 frequency, the anchor of the built-in lithium D lines', value: LI7_D1_MHZ, u: LI7_D1_U_MHZ, sign: 1 },
+  isotopeShift: { key: 'Li.D1-isotope-shift', label: '⁷Li − ⁶Li D1 isotope shift (built-in)', value: LI_D1_ISOTOPE_SHIFT_MHZ, u: LI_D1_ISOTOPE_SHIFT_U_MHZ, sign: -1 },
+  li7Fine: { key: 'Li7.2P-fine-structure', label: '⁷Li 2P fine structure (built-in)', value: LI7_FINE_STRUCTURE_MHZ, u: LI7_FINE_STRUCTURE_U_MHZ, sign: 1 },
+  li6Fine: { key: 'Li6.2P-fine-structure', label: '⁶Li 2P fine structure (built-in)', value: LI6_FINE_STRUCTURE_MHZ, u: LI6_FINE_STRUCTURE_U_MHZ, sign: 1 },
+} as const;
+const SHARED_ANCHOR =
+  'common to all four built-in lithium lines: one input wherever it enters, so it cancels in a difference of two of them';
 const combinedSource = (what: string): string =>
-  `the ⁷Li D1 anchor's ${LI7_D1_U_MHZ} MHz (from memory, generous) and ${what} (read), in quadrature`;
+  `the ⁷Li D1 anchor's ${LI7_D1_U_MHZ} MHz (from memory, generous; ${SHARED_ANCHOR}) and ${what} (read), in quadrature`;
 const LI6_D1_MHZ = kHzSum(LI7_D1_MHZ, -LI_D1_ISOTOPE_SHIFT_MHZ);
 const LI_LINES = {
-  li7D1: energy(LI7_D1_MHZ, 'MHz', FROM_MEMORY, LI7_D1_U_MHZ, LI7_D1_U_SOURCE),
-  li7D2: energy(
+  li7D1: energyFromParts(LI7_D1_MHZ, 'MHz', FROM_MEMORY, `${LI7_D1_U_SOURCE}; ${SHARED_ANCHOR}`, [PART.anchor]),
+  li7D2: energyFromParts(
     kHzSum(LI7_D1_MHZ, LI7_FINE_STRUCTURE_MHZ),
     'MHz',
     `derived: ⁷Li D1 (from memory) plus the ⁷Li 2P fine structure; ${LI_FINE_STRUCTURE_REVIEW}`,
-    combinedU(LI7_FINE_STRUCTURE_U_MHZ),
     combinedSource(`the ⁷Li fine structure's ${LI7_FINE_STRUCTURE_U_MHZ} MHz`),
+    [PART.anchor, PART.li7Fine],
   ),
-  li6D1: energy(
+  li6D1: energyFromParts(
     LI6_D1_MHZ,
     'MHz',
     `derived: ⁷Li D1 (from memory) minus the D1 isotope shift; ${LI_D1_ISOTOPE_SHIFT}`,
-    combinedU(LI_D1_ISOTOPE_SHIFT_U_MHZ),
     combinedSource(`the isotope shift's ${LI_D1_ISOTOPE_SHIFT_U_MHZ} MHz`),
+    [PART.anchor, PART.isotopeShift],
   ),
-  li6D2: energy(
+  li6D2: energyFromParts(
     kHzSum(LI6_D1_MHZ, LI6_FINE_STRUCTURE_MHZ),
     'MHz',
     `derived: ⁶Li D1 (derived above) plus the ⁶Li 2P fine structure; ${LI_FINE_STRUCTURE_REVIEW}`,
-    combinedU(LI_D1_ISOTOPE_SHIFT_U_MHZ, LI6_FINE_STRUCTURE_U_MHZ),
     combinedSource(`the isotope shift's ${LI_D1_ISOTOPE_SHIFT_U_MHZ} MHz and the ⁶Li fine structure's ${LI6_FINE_STRUCTURE_U_MHZ} MHz`),
+    [PART.anchor, PART.isotopeShift, PART.li6Fine],
   ),
 };
 

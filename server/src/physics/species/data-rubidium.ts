@@ -2,6 +2,7 @@
 import { energy, GROUND_ENERGY, mhz, ns, sourced } from './build-helpers';
 import { IAEA_MOMENTS, NIST_MASSES, STECK_RB85, STECK_RB87 } from './sources';
 import { FROM_MEMORY } from './sources';
+import { RB_D1_HYPERFINE_2016 } from './measurements';
 import type { BuiltinSpecies } from './types';
 
 export const RUBIDIUM_85: BuiltinSpecies = {
@@ -72,12 +73,11 @@ export const RUBIDIUM_87: BuiltinSpecies = {
     {
       key: 'P1/2',
       designation: '5p 2P°1/2',
-      // Value and uncertainty both recalled (an older revision of the compilation). A measurement
-      // read since, 408.340(19) MHz (arXiv:1611.02406), agrees within 0.5σ (tests/physics/species.test.ts).
-      A: mhz(408.328, FROM_MEMORY, 0.015),
+      // The read measurement replaces the recalled 408.328(15) MHz (0.5σ away), an older value of the same laboratory.
+      A: mhz(408.34, RB_D1_HYPERFINE_2016, 0.019),
       gJ: sourced(0.666, STECK_RB87),
       ...energy(377.10746338, 'THz', STECK_RB87, 0.000000011, FROM_MEMORY),
-      vacuumWavelengthNm: sourced(794.978851156, FROM_MEMORY),
+      vacuumWavelengthNm: sourced(794.978851156, 'derived: λ = c/ν from the D1 frequency above and the exact SI c, to its 12 digits'),
       lifetimeS: ns(27.679, STECK_RB87),
     },
     {

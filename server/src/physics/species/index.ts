@@ -1,5 +1,5 @@
 /** Built-in species data with published sources. */
-export type { BuiltinLevel, BuiltinSpecies, PublishedEnergy, PublishedEnergyUnit, Sourced } from './types';
+export type { BuiltinLevel, BuiltinSpecies, PublishedEnergy, PublishedEnergyUnit, Sourced, UncertainPart } from './types';
 export { BUILTIN_SPECIES } from './table';
 export { citationOf } from './build-helpers';
 export { findBuiltinLevel, findSpecies, normalizeSpeciesName, normalizedSpellings, speciesNames, speciesSpellings } from './lookup';

@@ -53,6 +53,30 @@ export const SR_CLOCK_ISOTOPE_SHIFT =
 
 export const SR87_CLOCK = 'arXiv:2008.00723 (2020), abstract: ⁸⁷Sr 1S0–3P0 429 228 004 229 873.082(76) Hz';
 
+/** Supersedes the same laboratory's earlier D1 values, which the abstract says it is at variance with. */
+export const RB_D1_HYPERFINE_2016 =
+  'arXiv:1611.02406 (2016), abstract (arcxiv): 5P1/2 A = 120.510(26) MHz (⁸⁵Rb) and 408.340(19) MHz (⁸⁷Rb)';
+
 export const CS_D1_1999 = 'Phys. Rev. Lett. 82, 3568 (1999), abstract: D1 hyperfine centroid 335 116 048 807(41) kHz';
 
 export const CS_6P32_GJ = 'arXiv:2208.00077 (2022), abstract: g_J(6²P3/2) = 1.334 087 49(52)';
+
+/**
+ * Abstracts read whose pages print title, method and numbers but no journal, volume or year: cited by title and the
+ * page's address, so a reader can find them again (they used to stay "from memory" for want of a journal).
+ */
+export const CR53_GROUND_BEAM =
+  'atomic-beam magnetic resonance, "Hyperfine structure measurements in ⁷⁵As, ³¹P and ⁵³Cr", abstract ' +
+  '(scilit.net/publications/88a8e553f5e179f58e5797b5791d4c8b; no journal, volume or year printed there): ⁵³Cr ground ' +
+  'A = −82.5994(16) MHz, B = +0.008(12) MHz (printed in Mc/s)';
+
+/**
+ * The page prints A = 212.765(1) MHz without a sign, but the intervals it prints need A and B of opposite sign: with
+ * Casimir's formula 6.5 A + 0.5417 B = ±1346.56 MHz for opposite signs, 1419.38 MHz for equal ones; and μ_I < 0 with
+ * Q > 0 (the same abstract) makes A negative and B positive. The site drops minus signs elsewhere too (docs/species-data.md).
+ */
+export const SR87_3P2_BEAM =
+  'atomic-beam magnetic resonance, "Hyperfine structure of ⁸⁷Sr in the ³P2 metastable state", abstract ' +
+  '(scilit.net/publications/f1f0fe343b2ff8b5e777010232542f8a; no journal, volume or year printed there): ' +
+  'A = 212.765(1) MHz as printed, negative by the printed F = 13/2–11/2 and 11/2–9/2 intervals 1346.497(6) and ' +
+  '1170.208(6) MHz (they need A and B of opposite sign), B = 67.215(15) MHz, Q = 0.335(20) b';

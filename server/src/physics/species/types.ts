@@ -15,6 +15,26 @@ export interface Sourced<T> {
    * (from the same compilation) but not read while the table was written.
    */
   readonly uncertaintySource?: string;
+  /**
+   * For a value built as a sum of separately measured pieces, some shared with other built-in values (one
+   * absolute frequency under several lines): the pieces, whose uncertainties make up `uncertainty` in
+   * quadrature. Each piece is one uncertain input wherever it recurs, so a difference of two such values
+   * loses the shared part instead of counting it twice.
+   */
+  readonly parts?: readonly UncertainPart[];
+}
+
+/** One independently uncertain piece of a built-in value (see `Sourced.parts`). */
+export interface UncertainPart {
+  /** Stable key, the same in every value the piece enters ('Li7.D1' for the lithium anchor). */
+  readonly key: string;
+  /** What a reader calls it. */
+  readonly label: string;
+  /** The piece's own value and standard uncertainty, in the unit of the value it enters. */
+  readonly value: number;
+  readonly u: number;
+  /** ∂value/∂piece: the piece is added (+1) or subtracted (−1). */
+  readonly sign: 1 | -1;
 }
 
 /** Units in which level energies are published before conversion to Hz. */
