@@ -102,8 +102,20 @@ describe('language service', () => {
     expect(await svc.hover(broken, { line: 0, character: 0 })).toBeNull();
     expect(svc.completion(broken, { line: 0, character: 0 })).toEqual([]);
     expect(svc.semanticTokens(broken)).toEqual({ data: [] });
-    expect(svc.diagnostics(broken)).toEqual({ items: [], complete: true });
-    expect(logged).toHaveLength(4);
+    // Said in the file too, complete so that it is not asked again (it said nothing before: items []).
+    const shown = svc.diagnostics(broken);
+    expect(shown.complete).toBe(true);
+    expect(shown.items.map((d) => [d.code, d.severity, d.message])).toEqual([
+      ['internal-error', 1, 'Sublevel failed on this file (disk on fire); please report it with the file attached.'],
+    ]);
+    // The evaluation neither throws nor rejects: it resolves with the failure as the one problem.
+    const evaluated = await svc.evaluate(broken);
+    expect(evaluated.problems.map((p) => p.code)).toEqual(['internal-error']);
+    expect(logged).toHaveLength(5);
+    expect(logged[4]).toContain('evaluation failed on file:///b.sublevel (version 1)');
+    // And it goes on serving: a sound document evaluates as before.
+    const good = await svc.evaluate(doc(LI));
+    expect(good.problems.map((p) => p.code)).toEqual(['zeeman-not-linear']);
     expect(logged[0]).toContain('hover failed on file:///b.sublevel');
     expect(logged[0]).toContain('disk on fire');
   });
