@@ -4,7 +4,7 @@
  * in the log when something throws or rejects (in the timer, the evaluation or what follows it),
  * so a failure never goes unhandled and the server keeps serving; the document keeps the
  * diagnostics it last got (the language service adds an `internal-error` to them when the
- * failure is its own).
+ * failure is its own), and a version that failed is not tried again (its next edit is).
  */
 
 export interface ScheduledDocument {
@@ -39,8 +39,11 @@ export function evaluationSchedule<D extends ScheduledDocument>(hooks: Evaluatio
   const timers = new Map<string, NodeJS.Timeout>();
   /** Versions waiting for the pause, by document. */
   const pending = new Map<string, number>();
+  /** The version whose evaluation failed, by document: asking again (a pull of its diagnostics) would only fail again. */
+  const failedVersion = new Map<string, number>();
 
   const failed = (uri: string, version: number) => (e: unknown): void => {
+    failedVersion.set(uri, version);
     try {
       hooks.log(`sublevel: evaluating ${uri} (version ${version}) failed: ${describe(e)}`);
     } catch {
@@ -65,7 +68,8 @@ export function evaluationSchedule<D extends ScheduledDocument>(hooks: Evaluatio
 
   return {
     schedule(doc) {
-      if (pending.get(doc.uri) === doc.version) return;
+      if (pending.get(doc.uri) === doc.version || failedVersion.get(doc.uri) === doc.version) return;
+      failedVersion.delete(doc.uri);
       clearTimeout(timers.get(doc.uri));
       pending.set(doc.uri, doc.version);
       const { uri, version } = doc;
@@ -81,6 +85,7 @@ export function evaluationSchedule<D extends ScheduledDocument>(hooks: Evaluatio
       );
     },
     cancel(uri) {
+      failedVersion.delete(uri);
       clearTimeout(timers.get(uri));
       timers.delete(uri);
       pending.delete(uri);

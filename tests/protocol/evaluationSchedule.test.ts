@@ -78,6 +78,20 @@ describe('the evaluation schedule', () => {
     });
   }
 
+  it('does not try a failed version again, but does its next version', async () => {
+    let tries = 0;
+    const h = harness({ evaluate: () => (tries++, Promise.reject(new Error('always'))) });
+    const v1 = h.put('a', 1);
+    h.schedule.schedule(v1);
+    await sleep(30);
+    h.schedule.schedule(v1); // a pull of the same version's diagnostics
+    await sleep(30);
+    expect([tries, h.logged.length]).toEqual([1, 1]);
+    h.schedule.schedule(h.put('a', 2));
+    await sleep(30);
+    expect([tries, h.logged.length]).toEqual([2, 2]);
+  });
+
   it('logs a failure in sending the diagnostics after the evaluation, and goes on', async () => {
     const h = harness({
       evaluated: (d) => {

@@ -1,10 +1,14 @@
 /**
  * The built server over JSON-RPC against random and mutated documents: each case opens a document,
  * types a random edit sequence into it (incremental and whole-text changes, sent without waiting),
- * and between the edits fires every request the editor makes at random positions, stale ones and
- * ones past the end included. Every request must answer (an error only for a refused rename), none
- * may take longer than a hang bound, and the server must log no failure and stay up; with
- * diagnostics pushed and pulled. Each case waits, before it closes its document, for the evaluation
+ * and between the edits fires every request the editor makes at random positions and ranges, stale
+ * ones and what no careful client sends included (past the end of the text or of a line, negative,
+ * fractional, 1e12, NaN (null in JSON), a range whose end is before its start). Every request must
+ * answer (an error only for a refused rename), none may take longer than a hang bound, and the
+ * server must log no failure, stay up, and answer a plain hover after the case; with diagnostics
+ * pushed and pulled. A second property sends hostile edits (ranges past the end, overlapping,
+ * reversed or broken; versions going backwards) and checks the text the server holds against a
+ * reference model of the edits (referenceEdits.ts). Each case waits, before it closes its document, for the evaluation
  * of the last version (and, pushed, for its diagnostics), so late failures count for their case;
  * after the property an idle server must have logged none at all.
  * The bounds are hang detectors, not speed goals. FUZZ_RUNS raises the case count.
@@ -17,6 +21,7 @@ import { EDIT_SEEDS, editSequence, type TextEdit } from '../editSequences';
 import { mutatedText } from '../mutatedExamples';
 import { NEWER_BLOCKS } from '../features/newerBlockMistakes';
 import { ensureBuilt, startClient, type TestClient } from './lspClient';
+import { hostileChange, referenceText } from './referenceEdits';
 
 const RUNS = Number(process.env.FUZZ_RUNS ?? '') || 6;
 /** The whole property's limit, growing with the case count (a loaded machine takes ~2 s a case). */
@@ -41,10 +46,32 @@ function positionFor(doc: TextDocument, seed: number): Position {
   const line = seed % (doc.lineCount + 1); // one line past the end too
   const text = doc.getText({ start: { line, character: 0 }, end: { line: line + 1, character: 0 } });
   const position = { line, character: (seed >> 4) % (text.length + 3) };
-  // Now and then what no careful client sends: far past the end, or not a whole number.
-  if (seed % 17 === 5) return { line: 2 ** 31 - 1, character: 2 ** 31 - 1 };
-  if (seed % 17 === 7) return { line: line + 0.5, character: position.character + 0.25 };
-  return position;
+  // Now and then what no careful client sends: far past the end, negative, NaN (sent as null), or not a whole number.
+  switch (seed % 17) {
+    case 5:
+      return { line: 2 ** 31 - 1, character: 2 ** 31 - 1 };
+    case 7:
+      return { line: line + 0.5, character: position.character + 0.25 };
+    case 9:
+      return { line: -3, character: -1 };
+    case 11:
+      return { line: NaN, character: position.character };
+    case 13:
+      return { line: 1e12, character: 1e12 };
+    case 15:
+      return { line, character: text.length + 1000 }; // far past the line's end
+    default:
+      return position;
+  }
+}
+
+/** A range around the position, now and then reversed (end before start) or from a hostile position to a sound one. */
+function rangeFor(position: Position, seed: number): Range {
+  const line = Number.isFinite(position.line) ? Math.min(position.line, 2 ** 20) : 0;
+  const around: Range = { start: { line: Math.max(0, line - 2), character: 0 }, end: { line: line + 3, character: 0 } };
+  if (seed % 5 === 3) return { start: around.end, end: around.start };
+  if (seed % 5 === 4) return { start: position, end: around.end };
+  return around;
 }
 
 interface Pending {
@@ -54,11 +81,15 @@ interface Pending {
   bound: number;
 }
 
-/** A request whose answer is judged as soon as it comes (a refused rename, with its reason, is an answer). */
-function pending(what: string, answer: Promise<unknown>, bound: number): Pending {
+/**
+ * A request whose answer is judged as soon as it comes (a refused rename, with its reason, is an
+ * answer; so is "method not found" for a request the server does not offer, and only that).
+ */
+function pending(what: string, answer: Promise<unknown>, bound: number, unserved = false): Pending {
   const outcome = answer.then(
-    () => undefined,
-    (e: { code?: number; message?: string }) => (/rename/.test(what) && e.code === -32602 ? undefined : `${what}: error ${e.code} ${e.message}`),
+    () => (unserved ? `${what}: answered, though the server does not offer it` : undefined),
+    (e: { code?: number; message?: string }) =>
+      (/rename/.test(what) && e.code === -32602) || (unserved && e.code === -32601) ? undefined : `${what}: error ${e.code} ${e.message}`,
   );
   return { what, outcome, bound };
 }
@@ -68,19 +99,24 @@ function requestsAt(client: TestClient, uri: string, doc: TextDocument, seed: nu
   const c = client.connection;
   const textDocument = { uri };
   const position = positionFor(doc, seed);
-  const around: Range = { start: { line: Math.max(0, position.line - 2), character: 0 }, end: { line: position.line + 3, character: 0 } };
+  const around = rangeFor(position, seed >> 2);
   const diagnostics = (client.pushed.get(uri)?.diagnostics ?? []).filter((d) => Math.abs(d.range.start.line - position.line) <= 1);
-  const ask = (what: string, method: string, params: unknown, bound = HANG_MS): Pending => pending(what, c.sendRequest(method, params), bound);
+  /** `unserved`: a request the server does not offer, which must be refused as such (-32601), not fail. */
+  const ask = (what: string, method: string, params: unknown, bound = HANG_MS, unserved = false): Pending =>
+    pending(what, c.sendRequest(method, params), bound, unserved);
   const all = [
     ask('hover', 'textDocument/hover', { textDocument, position }),
     ask('completion', 'textDocument/completion', { textDocument, position }),
     ask('definition', 'textDocument/definition', { textDocument, position }),
     ask('references', 'textDocument/references', { textDocument, position, context: { includeDeclaration: true } }),
-    ask('code actions', 'textDocument/codeAction', { textDocument, range: { start: position, end: position }, context: { diagnostics } }),
+    ask('code actions', 'textDocument/codeAction', { textDocument, range: seed % 2 ? { start: position, end: position } : around, context: { diagnostics } }),
     ask('range formatting', 'textDocument/rangeFormatting', { textDocument, range: around, options: { tabSize: 2, insertSpaces: true } }),
     ask('inlay hints', 'textDocument/inlayHint', { textDocument, range: around }),
     ask('semantic tokens (range)', 'textDocument/semanticTokens/range', { textDocument, range: around }),
     ask('prepare rename', 'textDocument/prepareRename', { textDocument, position }),
+    ask('document highlight', 'textDocument/documentHighlight', { textDocument, position }, HANG_MS, true),
+    ask('selection ranges', 'textDocument/selectionRange', { textDocument, positions: [position] }, HANG_MS, true),
+    ask('code lens', 'textDocument/codeLens', { textDocument }, HANG_MS, true),
   ];
   if (client.initialize.capabilities.diagnosticProvider) all.push(ask('diagnostics', 'textDocument/diagnostic', { textDocument }));
   if (seed % 3 === 0) {
@@ -94,6 +130,11 @@ function requestsAt(client: TestClient, uri: string, doc: TextDocument, seed: nu
     );
   }
   return all;
+}
+
+/** A hover at the start of the document, as any client sends it. */
+function plainHover(client: TestClient, uri: string): Pending {
+  return pending('plain hover', client.connection.sendRequest('textDocument/hover', { textDocument: { uri }, position: { line: 0, character: 0 } }), HANG_MS);
 }
 
 const pause = (ms: number): Promise<void> => new Promise((resolve) => setTimeout(resolve, ms));
@@ -181,6 +222,9 @@ for (const kind of CLIENTS) {
             for (const s of seeds) pending.push(...requestsAt(client, uri, doc, s));
           }
           const problems = (await Promise.all(pending.map(answered))).filter((x) => x !== undefined);
+          // After all that, a plain request still answers.
+          const plain = await answered(plainHover(client, uri));
+          if (plain) problems.push(plain);
           // The last version's evaluation (and its push) before the close, which would cancel it.
           const late = await settled(client, uri, doc.version, !kind.capabilities.diagnostic);
           if (late) problems.push(late);
@@ -189,6 +233,41 @@ for (const kind of CLIENTS) {
           expect(failures, doc.getText()).toEqual([]);
           expect(client.process.exitCode).toBeNull();
         }),
+        { numRuns: RUNS },
+      );
+    }, TIME_LIMIT);
+
+    it('holds the text a reference model of hostile edits gives, versions going backwards included, and keeps answering', async () => {
+      await fc.assert(
+        fc.asyncProperty(
+          fc.constantFrom(...EDIT_SEEDS.slice(0, -1)),
+          fc.array(fc.tuple(fc.array(hostileChange(60, 40), { minLength: 1, maxLength: 3 }), fc.integer({ min: -2, max: 3 }), fc.nat()), { minLength: 1, maxLength: 8 }),
+          async (text, batches) => {
+            failures.length = 0;
+            const uri = `file:///protocol/hostile${opened++}.sublevel`;
+            await client.connection.sendNotification('textDocument/didOpen', { textDocument: { uri, languageId: 'sublevel', version: 10, text } });
+            let expected = text;
+            let version = 10;
+            const pendingRequests: Pending[] = [];
+            for (const [changes, step, seed] of batches) {
+              version += step; // backwards, the same again, or on
+              expected = referenceText(expected, changes);
+              await client.connection.sendNotification('textDocument/didChange', { textDocument: { uri, version }, contentChanges: changes });
+              pendingRequests.push(...requestsAt(client, uri, TextDocument.create(uri, 'sublevel', version, expected), seed));
+            }
+            const problems = (await Promise.all(pendingRequests.map(answered))).filter((x) => x !== undefined);
+            const held = (await client.connection.sendRequest('sublevel/heldText', { uri })) as { version: number; text: string } | null;
+            const plain = await answered(plainHover(client, uri));
+            if (plain) problems.push(plain);
+            const late = await settled(client, uri, version, !kind.capabilities.diagnostic);
+            if (late) problems.push(late);
+            await client.connection.sendNotification('textDocument/didClose', { textDocument: { uri } });
+            expect(held).toEqual({ version, text: expected });
+            expect(problems, expected).toEqual([]);
+            expect(failures, expected).toEqual([]);
+            expect(client.process.exitCode).toBeNull();
+          },
+        ),
         { numRuns: RUNS },
       );
     }, TIME_LIMIT);

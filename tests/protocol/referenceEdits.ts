@@ -54,16 +54,23 @@ export const hostileCoordinate = (upTo: number): fc.Arbitrary<number | null> =>
   );
 
 /** Changes as a hostile client may send them: incremental with any such range (reversed and overlapping ones come by chance), or the whole text. */
-export const hostileChange = fc.oneof(
-  {
-    weight: 8,
-    arbitrary: fc.record({
-      range: fc.record({
-        start: fc.record({ line: hostileCoordinate(6), character: hostileCoordinate(30) }),
-        end: fc.record({ line: hostileCoordinate(6), character: hostileCoordinate(30) }),
+type HostilePosition = { line: number | null; character: number | null };
+export interface HostileChange {
+  range?: { start: HostilePosition; end: HostilePosition };
+  text: string;
+}
+
+export const hostileChange = (lines: number, characters: number): fc.Arbitrary<HostileChange> =>
+  fc.oneof(
+    {
+      weight: 8,
+      arbitrary: fc.record({
+        range: fc.record({
+          start: fc.record({ line: hostileCoordinate(lines), character: hostileCoordinate(characters) }),
+          end: fc.record({ line: hostileCoordinate(lines), character: hostileCoordinate(characters) }),
+        }),
+        text: fc.oneof(fc.constantFrom('', '\n', '\r\n', '\r', 'x', ' G\n', 'level a: 2s 2S1/2\n  '), fc.string({ maxLength: 12 })),
       }),
-      text: fc.oneof(fc.constantFrom('', '\n', '\r\n', '\r', 'x', ' G\n', 'level a: 2s 2S1/2\n  '), fc.string({ maxLength: 12 })),
-    }),
-  },
-  { weight: 1, arbitrary: fc.record({ text: fc.constantFrom('', 'field f = 1 G\r\n', 'a\rb\r\nc\n') }) },
-);
+    },
+    { weight: 1, arbitrary: fc.record({ text: fc.constantFrom('', 'field f = 1 G\r\n', 'a\rb\r\nc\n') }) },
+  );
