@@ -129,7 +129,55 @@ function requestsAt(client: TestClient, uri: string, doc: TextDocument, seed: nu
       ask('diagram', 'sublevel/diagram', { uri, view: VIEWS[seed % VIEWS.length], line: position.line, theme: 'panel' }, DIAGRAM_HANG_MS),
     );
   }
+  all.push(...sameAsSound(client, textDocument, doc, position, around));
   return all;
+}
+
+/**
+ * The position a hostile one means, made by the text library (floored, negatives 0, then clamped
+ * by its offset rules), or undefined for nonsense (NaN). Written apart from the server's rule.
+ */
+function meant(doc: TextDocument, p: Position): Position | undefined {
+  if (Number.isNaN(p.line) || Number.isNaN(p.character)) return undefined;
+  const whole = { line: Math.max(0, Math.floor(p.line)), character: Math.max(0, Math.floor(p.character)) };
+  return doc.positionAt(doc.offsetAt(whole));
+}
+
+/**
+ * At a position or range no careful client sends, the answers must be those at the position or
+ * range it means (the empty answer for nonsense): asked both ways in the same turn, so both see
+ * one version. Only requests that do not wait for the evaluation, so that both answers are of the
+ * same analysis.
+ */
+function sameAsSound(client: TestClient, textDocument: { uri: string }, doc: TextDocument, position: Position, range: Range): Pending[] {
+  const c = client.connection;
+  const out: Pending[] = [];
+  const compare = (what: string, method: string, hostile: unknown, sound: unknown, empty: unknown): void => {
+    const answers = Promise.all([c.sendRequest(method, hostile), sound === undefined ? Promise.resolve(empty) : c.sendRequest(method, sound)]);
+    const outcome = answers.then(
+      ([h, s]) => (JSON.stringify(h) === JSON.stringify(s) ? undefined : `${what}: ${JSON.stringify(h).slice(0, 200)} where the meant one gives ${JSON.stringify(s).slice(0, 200)}`),
+      (e: { code?: number; message?: string }) => (/rename/.test(what) && e.code === -32602 ? undefined : `${what}: error ${e.code} ${e.message}`),
+    );
+    out.push({ what, outcome, bound: HANG_MS });
+  };
+  const sound = meant(doc, position);
+  const hostile = !Number.isInteger(position.line) || !Number.isInteger(position.character) || position.line < 0 || position.character < 0 || !sound || sound.line !== position.line || sound.character !== position.character;
+  if (hostile) {
+    const at = (p: Position | undefined) => (p ? { textDocument, position: p } : undefined);
+    compare(`definition at ${JSON.stringify(position)}`, 'textDocument/definition', { textDocument, position }, at(sound), null);
+    compare(`references at ${JSON.stringify(position)}`, 'textDocument/references', { textDocument, position, context: { includeDeclaration: true } }, sound && { textDocument, position: sound, context: { includeDeclaration: true } }, []);
+    compare(`prepare rename at ${JSON.stringify(position)}`, 'textDocument/prepareRename', { textDocument, position }, at(sound), null);
+  }
+  const reversed = range.end.line < range.start.line || (range.end.line === range.start.line && range.end.character < range.start.character);
+  const start = meant(doc, range.start);
+  const end = meant(doc, range.end);
+  const soundRange = reversed || !start || !end ? undefined : { start, end };
+  if (JSON.stringify(soundRange) !== JSON.stringify(range)) {
+    const options = { tabSize: 2, insertSpaces: true };
+    compare(`range formatting of ${JSON.stringify(range)}`, 'textDocument/rangeFormatting', { textDocument, range, options }, soundRange && { textDocument, range: soundRange, options }, []);
+    compare(`semantic tokens of ${JSON.stringify(range)}`, 'textDocument/semanticTokens/range', { textDocument, range }, soundRange && { textDocument, range: soundRange }, { data: [] });
+  }
+  return out;
 }
 
 /** A hover at the start of the document, as any client sends it. */
