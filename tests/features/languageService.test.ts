@@ -24,6 +24,14 @@ describe('language service', () => {
     expect(svc.isAnalysed(doc('', 2))).toBe(false);
   });
 
+  it('analyses a version number sent again with another text again (a client that reuses or rewinds versions)', () => {
+    const svc = new LanguageService();
+    expect(svc.diagnostics(doc('field f = 1 G\n', 3)).items.map((i) => i.code)).toEqual([]);
+    // Before, the analysis of the first text at version 3 answered for the second (no finding).
+    expect(svc.diagnostics(doc('spices X\n', 3)).items.map((i) => i.code)).toEqual(['syntax-unknown-statement']);
+    expect(svc.revision(doc('spices X\n', 3))).toBe(1);
+  });
+
   it('gives parse and model diagnostics at once and the evaluation’s after it ran', async () => {
     const svc = new LanguageService();
     const d = doc(LI);
