@@ -160,6 +160,12 @@ function startLanguageServer(): void {
 
   // ---- request plumbing -----------------------------------------------------------------------
 
+  /** The document a request names; '' (no open document, so the empty answer) when it names none. */
+  const uriOf = (p: { textDocument?: { uri?: unknown } } | null | undefined): string => {
+    const uri = p?.textDocument?.uri;
+    return typeof uri === 'string' ? uri : '';
+  };
+
   /**
    * Runs one request for an open document: gives `empty` when the document is unknown or the
    * request was cancelled, and logs and gives `empty` when anything fails.
@@ -318,7 +324,7 @@ function startLanguageServer(): void {
   });
 
   connection.languages.diagnostics.on(async (params, token): Promise<DocumentDiagnosticReport> => {
-    const uri = params.textDocument.uri;
+    const uri = uriOf(params);
     const empty: DocumentDiagnosticReport = { kind: 'full', items: [] };
     return run('diagnostics', uri, token, empty, async (svc, doc, settings): Promise<DocumentDiagnosticReport> => {
       const shown = await settings();
@@ -334,45 +340,46 @@ function startLanguageServer(): void {
 
   // ---- features -------------------------------------------------------------------------------
 
-  connection.onHover((p, token) => run('hover', p.textDocument.uri, token, null, async (svc, doc, settings) => svc.hover(doc, p.position, await settings())));
+  connection.onHover((p, token) => run('hover', uriOf(p), token, null, async (svc, doc, settings) => svc.hover(doc, p.position, await settings())));
 
   connection.languages.inlayHint.on((p, token) =>
-    run('inlay hints', p.textDocument.uri, token, [], async (svc, doc, settings) => svc.inlayHints(doc, p.range, await settings())),
+    run('inlay hints', uriOf(p), token, [], async (svc, doc, settings) => svc.inlayHints(doc, p.range, await settings())),
   );
 
   connection.onCodeAction((p, token) =>
-    run('code actions', p.textDocument.uri, token, [], (svc, doc) =>
+    run('code actions', uriOf(p), token, [], (svc, doc) =>
       svc.codeActions(doc, { range: p.range, diagnostics: p.context?.diagnostics ?? [], ...(p.context?.only ? { only: p.context.only } : {}) }),
     ),
   );
 
-  connection.onCompletion((p, token) => run('completion', p.textDocument.uri, token, [], (svc, doc) => svc.completion(doc, p.position)));
+  connection.onCompletion((p, token) => run('completion', uriOf(p), token, [], (svc, doc) => svc.completion(doc, p.position)));
 
-  connection.onDocumentSymbol((p, token) => run('document symbols', p.textDocument.uri, token, [], (svc, doc) => svc.documentSymbols(doc)));
+  connection.onDocumentSymbol((p, token) => run('document symbols', uriOf(p), token, [], (svc, doc) => svc.documentSymbols(doc)));
 
-  connection.onDefinition((p, token) => run('definition', p.textDocument.uri, token, null, (svc, doc) => svc.definition(doc, p.position)));
+  connection.onDefinition((p, token) => run('definition', uriOf(p), token, null, (svc, doc) => svc.definition(doc, p.position)));
 
   connection.onReferences((p, token) =>
-    run('references', p.textDocument.uri, token, [], (svc, doc) => svc.references(doc, p.position, p.context?.includeDeclaration === true)),
+    run('references', uriOf(p), token, [], (svc, doc) => svc.references(doc, p.position, p.context?.includeDeclaration === true)),
   );
 
   connection.onPrepareRename(async (p, token) => {
-    const r = await run('prepare rename', p.textDocument.uri, token, null, (svc, doc) => svc.prepareRename(doc, p.position));
+    const r = await run('prepare rename', uriOf(p), token, null, (svc, doc) => svc.prepareRename(doc, p.position));
     if (r && 'error' in r) throw new ResponseError(-32602, r.error);
     return r;
   });
 
   connection.onRenameRequest(async (p, token) => {
-    const r = await run('rename', p.textDocument.uri, token, null, (svc, doc) => svc.rename(doc, p.position, p.newName));
+    const r = await run('rename', uriOf(p), token, null, (svc, doc) => svc.rename(doc, p.position, p.newName));
     if (r && 'error' in r) throw new ResponseError(-32602, r.error);
     return r;
   });
 
-  connection.onFoldingRanges((p, token) => run('folding ranges', p.textDocument.uri, token, [], (svc, doc) => svc.foldingRanges(doc)));
+  connection.onFoldingRanges((p, token) => run('folding ranges', uriOf(p), token, [], (svc, doc) => svc.foldingRanges(doc)));
 
-  connection.languages.semanticTokens.on((p, token) => run('semantic tokens', p.textDocument.uri, token, { data: [] }, (svc, doc) => svc.semanticTokens(doc)));
+  connection.languages.semanticTokens.on((p, token) => run('semantic tokens', uriOf(p), token, { data: [] }, (svc, doc) => svc.semanticTokens(doc)));
   connection.languages.semanticTokens.onRange((p, token) =>
-    run('semantic tokens', p.textDocument.uri, token, { data: [] }, (svc, doc) => svc.semanticTokens(doc, p.range)),
+    // A range request without a range is nonsense (null), not a request for the whole document.
+    run('semantic tokens', uriOf(p), token, { data: [] }, (svc, doc) => svc.semanticTokens(doc, p.range ?? null)),
   );
 
   // The diagram panel (client/src/host/diagramPanel.ts) asks for the SVG and CSV of one view.
@@ -388,7 +395,8 @@ function startLanguageServer(): void {
       ...(isFieldUnit(p?.unit) ? { fieldUnit: p.unit } : {}),
     };
     const theme = p?.theme === 'export' ? 'export' : 'panel';
-    const line = typeof p?.line === 'number' && Number.isInteger(p.line) && p.line >= 0 ? p.line : undefined;
+    // Made sound with every other position, in the service (a nonsense line means no line).
+    const line = typeof p?.line === 'number' ? p.line : undefined;
     const closed = { ok: false as const, message: 'Open the .sublevel file in an editor to see its diagrams.' };
     return run('diagram', uri, token, closed, (svc, doc) => svc.diagram(doc, { view, theme, ...choices, ...(line !== undefined ? { line } : {}) }));
   });
@@ -400,8 +408,8 @@ function startLanguageServer(): void {
     return doc ? { version: doc.version, text: doc.getText() } : null;
   });
 
-  connection.onDocumentFormatting((p, token) => run('formatting', p.textDocument.uri, token, [], (svc, doc) => svc.formatting(doc)));
-  connection.onDocumentRangeFormatting((p, token) => run('formatting', p.textDocument.uri, token, [], (svc, doc) => svc.formatting(doc, p.range)));
+  connection.onDocumentFormatting((p, token) => run('formatting', uriOf(p), token, [], (svc, doc) => svc.formatting(doc)));
+  connection.onDocumentRangeFormatting((p, token) => run('formatting', uriOf(p), token, [], (svc, doc) => svc.formatting(doc, p.range ?? null)));
 
   documents.listen(connection);
   connection.listen();

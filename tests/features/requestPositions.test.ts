@@ -107,5 +107,16 @@ describe('the language service on hostile positions', () => {
     expect(svc.codeActions(typo, { range: d!.range, diagnostics: null as never })).toEqual(svc.codeActions(typo, { range: d!.range, diagnostics: [] }));
   });
 
+  it('takes the diagram’s cursor line by the same rule: 2.5 as 2 (the upper level’s), NaN as no line', async () => {
+    const two = { uri: 'file:///two.sublevel', version: 1, getText: () => 'species Li7\n  level ground: 2s 2S1/2\n  level upper: 2p 2P°3/2\nfield bias = 5 G\n' };
+    const at = (line: number | undefined) => svc.diagram(two, { view: 'levels', theme: 'panel', ...(line === undefined ? {} : { line }) });
+    const upper = await at(2);
+    expect(JSON.stringify(upper)).toContain('Li7 upper: 2p ²P°₃/₂ — sublevel energies');
+    expect(await at(2.5)).toEqual(upper);
+    const none = await at(undefined);
+    expect(JSON.stringify(none)).toContain('Li7 ground: 2s ²S₁/₂ — sublevel energies');
+    expect(await at(NaN)).toEqual(none);
+  });
+
   it('logged no failure on any of it', () => expect(logged).toEqual([]));
 });

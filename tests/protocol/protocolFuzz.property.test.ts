@@ -303,6 +303,24 @@ for (const kind of CLIENTS) {
               await client.connection.sendNotification('textDocument/didChange', { textDocument: { uri, version }, contentChanges: changes });
               pendingRequests.push(...requestsAt(client, uri, TextDocument.create(uri, 'sublevel', version, expected), seed));
             }
+            // Requests that name no document, or no position or range: the empty answer, no failure.
+            const c = client.connection;
+            const empty: [string, string, unknown, unknown][] = [
+              ['hover without a document', 'textDocument/hover', { position: { line: 0, character: 0 } }, null],
+              ['definition without a position', 'textDocument/definition', { textDocument: { uri } }, null],
+              ['references without a context or position', 'textDocument/references', { textDocument: { uri } }, []],
+              ['code actions without a context or range', 'textDocument/codeAction', { textDocument: { uri } }, []],
+              ['range formatting without a range', 'textDocument/rangeFormatting', { textDocument: { uri }, options: { tabSize: 2, insertSpaces: true } }, []],
+              ['semantic tokens of no range', 'textDocument/semanticTokens/range', { textDocument: { uri } }, { data: [] }],
+              ['inlay hints of no range', 'textDocument/inlayHint', { textDocument: { uri } }, []],
+            ];
+            for (const [what, method, params, expected] of empty) {
+              const outcome = c.sendRequest(method, params).then(
+                (a) => (JSON.stringify(a) === JSON.stringify(expected) ? undefined : `${what}: ${JSON.stringify(a).slice(0, 200)}`),
+                (e: { code?: number; message?: string }) => `${what}: error ${e.code} ${e.message}`,
+              );
+              pendingRequests.push({ what, outcome, bound: HANG_MS });
+            }
             const problems = (await Promise.all(pendingRequests.map(answered))).filter((x) => x !== undefined);
             const held = (await client.connection.sendRequest('sublevel/heldText', { uri })) as { version: number; text: string } | null;
             const plain = await answered(plainHover(client, uri));

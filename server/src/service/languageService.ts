@@ -238,8 +238,8 @@ export class LanguageService {
     return this.guard('folding ranges', doc, [], (a) => foldingRanges(a));
   }
 
-  /** Without `range`, the whole document's tokens. */
-  semanticTokens(doc: DocumentSnapshot, range?: Range): SemanticTokens {
+  /** Without `range`, the whole document's tokens; `null` is a range request that sent none (nonsense). */
+  semanticTokens(doc: DocumentSnapshot, range?: Range | null): SemanticTokens {
     const empty: SemanticTokens = { data: [] };
     if (range === undefined) return this.guard('semantic tokens', doc, empty, (a) => semanticTokens(a));
     return this.guard('semantic tokens', doc, empty, (a) => within(a, range, empty, (r) => semanticTokens(a, r)));
@@ -250,11 +250,15 @@ export class LanguageService {
     const failed: DiagramAnswer = { ok: false, message: 'Sublevel could not draw this file; the server log says why.' };
     const fast = this.store.analysis(doc); // never throws (analyzeFast catches)
     if (fast.refused) return { ok: false, message: `Sublevel did not draw this file: ${withoutStop(fast.problems[0]?.message ?? 'it is over a size cap')}.` };
-    return this.guardEvaluated('diagram', doc, failed, (a) => diagramFor(a, req));
+    return this.guardEvaluated('diagram', doc, failed, (a) => {
+      const { line, ...rest } = req;
+      const at = line === undefined ? undefined : requestPosition(a.doc, { line, character: 0 });
+      return diagramFor(a, at ? { ...rest, line: at.line } : rest);
+    });
   }
 
-  /** Without `range`, the whole document. */
-  formatting(doc: DocumentSnapshot, range?: Range): TextEdit[] {
+  /** Without `range`, the whole document; `null` is a range request that sent none (nonsense). */
+  formatting(doc: DocumentSnapshot, range?: Range | null): TextEdit[] {
     if (range === undefined) return this.guard('formatting', doc, [], (a) => formatting(a));
     return this.guard('formatting', doc, [], (a) => within(a, range, [], (r) => formatting(a, r)));
   }
