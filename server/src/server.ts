@@ -20,10 +20,13 @@ import {
   TextDocuments,
   TextDocumentSyncKind,
 } from 'vscode-languageserver/node';
-import { TextDocument } from 'vscode-languageserver-textdocument';
+import type { TextDocument } from 'vscode-languageserver-textdocument';
 import * as path from 'path';
 import { isMainThread, workerData } from 'worker_threads';
 import { coalescedRequest } from './coalescedRequest';
+import { documentSync } from './documentSync';
+import { lastResort } from './lastResort';
+import { evaluationSchedule } from './evaluationSchedule';
 import { SEMANTIC_TOKENS_LEGEND } from './features/semanticTokensLegend';
 import type { LanguageService } from './service/languageService';
 import type { EditorSettings } from './service/settings';
@@ -57,8 +60,9 @@ function startLanguageServer(): void {
   connection.onShutdown(() => {
     shutdownReceived = true;
   });
-  const documents = new TextDocuments(TextDocument);
   const log = (message: string): void => connection.console.error(message);
+  const documents = new TextDocuments(documentSync((message) => connection.console.warn(message)));
+  lastResort(log);
 
   /** Refresh requests to the client within this pause of the first are one (see coalescedRequest). */
   const REFRESH_PAUSE_MS = 60;
@@ -104,9 +108,11 @@ function startLanguageServer(): void {
       // With `sublevel.evaluation.warmUp` on (off by default: it costs 35–80 MB of memory), the worker
       // evaluates a built-in set-up until the first real job comes, so that job finds it warm.
       startWarmUp = () => {
-        void settingsWithoutDocument().then((s) => {
-          if (s.evaluation.warmUp) evaluator.warmUp();
-        });
+        settingsWithoutDocument()
+          .then((s) => {
+            if (s.evaluation.warmUp) evaluator.warmUp();
+          })
+          .catch((e: unknown) => log(`sublevel: the warm-up failed to start: ${String(e)}`));
       };
       setTimeout(() => {
         if (documents.all().length === 0) warmUpWhenIdle();
@@ -153,6 +159,12 @@ function startLanguageServer(): void {
   });
 
   // ---- request plumbing -----------------------------------------------------------------------
+
+  /** The document a request names; '' (no open document, so the empty answer) when it names none. */
+  const uriOf = (p: { textDocument?: { uri?: unknown } } | null | undefined): string => {
+    const uri = p?.textDocument?.uri;
+    return typeof uri === 'string' ? uri : '';
+  };
 
   /**
    * Runs one request for an open document: gives `empty` when the document is unknown or the
@@ -232,34 +244,20 @@ function startLanguageServer(): void {
   // is asked to pull again).
 
   const pushTimers = new Map<string, NodeJS.Immediate>();
-  const evaluationTimers = new Map<string, NodeJS.Timeout>();
 
-  /** Versions whose evaluation is waiting for a pause in typing, by document. */
-  const evaluationPending = new Map<string, number>();
-
-  function scheduleEvaluation(doc: TextDocument): void {
-    // A repeated pull of the same version must not push its evaluation further away.
-    if (evaluationPending.get(doc.uri) === doc.version) return;
-    clearTimeout(evaluationTimers.get(doc.uri));
-    evaluationPending.set(doc.uri, doc.version);
-    evaluationTimers.set(
-      doc.uri,
-      setTimeout(() => {
-        evaluationTimers.delete(doc.uri);
-        evaluationPending.delete(doc.uri);
-        const current = documents.get(doc.uri);
-        if (!service || !current || current.version !== doc.version) return;
-        void service.evaluate(current).then(() => {
-          const now = documents.get(doc.uri);
-          if (!now || now.version !== doc.version) return;
-          if (client.inlayHintRefresh) refreshInlayHints();
-          if (client.pullDiagnostics) {
-            if (client.diagnosticRefresh) refreshDiagnostics();
-          } else schedulePush(doc.uri);
-        });
-      }, EVALUATION_DELAY_MS),
-    );
-  }
+  const evaluations = evaluationSchedule<TextDocument>({
+    delayMs: EVALUATION_DELAY_MS,
+    current: (uri) => documents.get(uri),
+    evaluate: (doc) => service?.evaluate(doc),
+    evaluated: (doc) => {
+      if (client.inlayHintRefresh) refreshInlayHints();
+      if (client.pullDiagnostics) {
+        if (client.diagnosticRefresh) refreshDiagnostics();
+      } else schedulePush(doc.uri);
+    },
+    log,
+  });
+  const scheduleEvaluation = (doc: TextDocument): void => evaluations.schedule(doc);
 
   async function push(uri: string): Promise<void> {
     const svc = await loadService();
@@ -316,19 +314,17 @@ function startLanguageServer(): void {
   documents.onDidClose((e) => {
     const uri = e.document.uri;
     clearImmediate(pushTimers.get(uri));
-    clearTimeout(evaluationTimers.get(uri));
     pushTimers.delete(uri);
-    evaluationTimers.delete(uri);
-    evaluationPending.delete(uri);
+    evaluations.cancel(uri);
     settingsByUri.delete(uri);
     service?.forget(uri);
-    if (!client.pullDiagnostics) void connection.sendDiagnostics({ uri, diagnostics: [] });
+    if (!client.pullDiagnostics) connection.sendDiagnostics({ uri, diagnostics: [] }).catch(() => undefined); // the client went away
     // Documents that use it read it from the disk now.
     filesChanged([uri]);
   });
 
   connection.languages.diagnostics.on(async (params, token): Promise<DocumentDiagnosticReport> => {
-    const uri = params.textDocument.uri;
+    const uri = uriOf(params);
     const empty: DocumentDiagnosticReport = { kind: 'full', items: [] };
     return run('diagnostics', uri, token, empty, async (svc, doc, settings): Promise<DocumentDiagnosticReport> => {
       const shown = await settings();
@@ -344,45 +340,46 @@ function startLanguageServer(): void {
 
   // ---- features -------------------------------------------------------------------------------
 
-  connection.onHover((p, token) => run('hover', p.textDocument.uri, token, null, async (svc, doc, settings) => svc.hover(doc, p.position, await settings())));
+  connection.onHover((p, token) => run('hover', uriOf(p), token, null, async (svc, doc, settings) => svc.hover(doc, p.position, await settings())));
 
   connection.languages.inlayHint.on((p, token) =>
-    run('inlay hints', p.textDocument.uri, token, [], async (svc, doc, settings) => svc.inlayHints(doc, p.range, await settings())),
+    run('inlay hints', uriOf(p), token, [], async (svc, doc, settings) => svc.inlayHints(doc, p.range, await settings())),
   );
 
   connection.onCodeAction((p, token) =>
-    run('code actions', p.textDocument.uri, token, [], (svc, doc) =>
-      svc.codeActions(doc, { range: p.range, diagnostics: p.context.diagnostics, ...(p.context.only ? { only: p.context.only } : {}) }),
+    run('code actions', uriOf(p), token, [], (svc, doc) =>
+      svc.codeActions(doc, { range: p.range, diagnostics: p.context?.diagnostics ?? [], ...(p.context?.only ? { only: p.context.only } : {}) }),
     ),
   );
 
-  connection.onCompletion((p, token) => run('completion', p.textDocument.uri, token, [], (svc, doc) => svc.completion(doc, p.position)));
+  connection.onCompletion((p, token) => run('completion', uriOf(p), token, [], (svc, doc) => svc.completion(doc, p.position)));
 
-  connection.onDocumentSymbol((p, token) => run('document symbols', p.textDocument.uri, token, [], (svc, doc) => svc.documentSymbols(doc)));
+  connection.onDocumentSymbol((p, token) => run('document symbols', uriOf(p), token, [], (svc, doc) => svc.documentSymbols(doc)));
 
-  connection.onDefinition((p, token) => run('definition', p.textDocument.uri, token, null, (svc, doc) => svc.definition(doc, p.position)));
+  connection.onDefinition((p, token) => run('definition', uriOf(p), token, null, (svc, doc) => svc.definition(doc, p.position)));
 
   connection.onReferences((p, token) =>
-    run('references', p.textDocument.uri, token, [], (svc, doc) => svc.references(doc, p.position, p.context.includeDeclaration)),
+    run('references', uriOf(p), token, [], (svc, doc) => svc.references(doc, p.position, p.context?.includeDeclaration === true)),
   );
 
   connection.onPrepareRename(async (p, token) => {
-    const r = await run('prepare rename', p.textDocument.uri, token, null, (svc, doc) => svc.prepareRename(doc, p.position));
+    const r = await run('prepare rename', uriOf(p), token, null, (svc, doc) => svc.prepareRename(doc, p.position));
     if (r && 'error' in r) throw new ResponseError(-32602, r.error);
     return r;
   });
 
   connection.onRenameRequest(async (p, token) => {
-    const r = await run('rename', p.textDocument.uri, token, null, (svc, doc) => svc.rename(doc, p.position, p.newName));
+    const r = await run('rename', uriOf(p), token, null, (svc, doc) => svc.rename(doc, p.position, p.newName));
     if (r && 'error' in r) throw new ResponseError(-32602, r.error);
     return r;
   });
 
-  connection.onFoldingRanges((p, token) => run('folding ranges', p.textDocument.uri, token, [], (svc, doc) => svc.foldingRanges(doc)));
+  connection.onFoldingRanges((p, token) => run('folding ranges', uriOf(p), token, [], (svc, doc) => svc.foldingRanges(doc)));
 
-  connection.languages.semanticTokens.on((p, token) => run('semantic tokens', p.textDocument.uri, token, { data: [] }, (svc, doc) => svc.semanticTokens(doc)));
+  connection.languages.semanticTokens.on((p, token) => run('semantic tokens', uriOf(p), token, { data: [] }, (svc, doc) => svc.semanticTokens(doc)));
   connection.languages.semanticTokens.onRange((p, token) =>
-    run('semantic tokens', p.textDocument.uri, token, { data: [] }, (svc, doc) => svc.semanticTokens(doc, p.range)),
+    // A range request without a range is nonsense (null), not a request for the whole document.
+    run('semantic tokens', uriOf(p), token, { data: [] }, (svc, doc) => svc.semanticTokens(doc, p.range ?? null)),
   );
 
   // The diagram panel (client/src/host/diagramPanel.ts) asks for the SVG and CSV of one view.
@@ -398,13 +395,21 @@ function startLanguageServer(): void {
       ...(isFieldUnit(p?.unit) ? { fieldUnit: p.unit } : {}),
     };
     const theme = p?.theme === 'export' ? 'export' : 'panel';
-    const line = typeof p?.line === 'number' && Number.isInteger(p.line) && p.line >= 0 ? p.line : undefined;
+    // Made sound with every other position, in the service (a nonsense line means no line).
+    const line = typeof p?.line === 'number' ? p.line : undefined;
     const closed = { ok: false as const, message: 'Open the .sublevel file in an editor to see its diagrams.' };
     return run('diagram', uri, token, closed, (svc, doc) => svc.diagram(doc, { view, theme, ...choices, ...(line !== undefined ? { line } : {}) }));
   });
 
-  connection.onDocumentFormatting((p, token) => run('formatting', p.textDocument.uri, token, [], (svc, doc) => svc.formatting(doc)));
-  connection.onDocumentRangeFormatting((p, token) => run('formatting', p.textDocument.uri, token, [], (svc, doc) => svc.formatting(doc, p.range)));
+  // The text this server holds for an open document, as its edits made it: lets a client (and the
+  // protocol tests) check that both sides agree. Null for a document that is not open.
+  connection.onRequest('sublevel/heldText', (p: { uri?: unknown } | null) => {
+    const doc = typeof p?.uri === 'string' ? documents.get(p.uri) : undefined;
+    return doc ? { version: doc.version, text: doc.getText() } : null;
+  });
+
+  connection.onDocumentFormatting((p, token) => run('formatting', uriOf(p), token, [], (svc, doc) => svc.formatting(doc)));
+  connection.onDocumentRangeFormatting((p, token) => run('formatting', uriOf(p), token, [], (svc, doc) => svc.formatting(doc, p.range ?? null)));
 
   documents.listen(connection);
   connection.listen();

@@ -86,13 +86,6 @@ describe('formatting', () => {
     expect(applyEdits(text, edits)).toBe('magnet m\n field=1 T\n  length = 8 cm\n');
   });
 
-  it('takes a range with fractional lines (the protocol fuzz sent one) as the whole lines it touches', () => {
-    // Line 1.5 indexed past the scanned lines and threw; the server logged it and answered nothing.
-    const text = 'magnet m\n field=1 T\n length=8 cm\n';
-    const edits = formatting(analysisOf(text), { start: { line: 1.5, character: 0.5 }, end: { line: 2.5, character: 3 } });
-    expect(applyEdits(text, edits)).toBe('magnet m\n  field = 1 T\n  length = 8 cm\n');
-  });
-
   it('leaves an already tidy level line with an aligned comment alone', () => {
     const text = 'species Na23\n  level ground: 3s 2S1/2  B = 2 MHz          # a quadrupole cannot act on J = 1/2\n';
     expect(format(text)).toBe(text);

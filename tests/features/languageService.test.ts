@@ -24,6 +24,14 @@ describe('language service', () => {
     expect(svc.isAnalysed(doc('', 2))).toBe(false);
   });
 
+  it('analyses a version number sent again with another text again (a client that reuses or rewinds versions)', () => {
+    const svc = new LanguageService();
+    expect(svc.diagnostics(doc('field f = 1 G\n', 3)).items.map((i) => i.code)).toEqual([]);
+    // Before, the analysis of the first text at version 3 answered for the second (no finding).
+    expect(svc.diagnostics(doc('spices X\n', 3)).items.map((i) => i.code)).toEqual(['syntax-unknown-statement']);
+    expect(svc.revision(doc('spices X\n', 3))).toBe(1);
+  });
+
   it('gives parse and model diagnostics at once and the evaluation’s after it ran', async () => {
     const svc = new LanguageService();
     const d = doc(LI);
@@ -102,8 +110,20 @@ describe('language service', () => {
     expect(await svc.hover(broken, { line: 0, character: 0 })).toBeNull();
     expect(svc.completion(broken, { line: 0, character: 0 })).toEqual([]);
     expect(svc.semanticTokens(broken)).toEqual({ data: [] });
-    expect(svc.diagnostics(broken)).toEqual({ items: [], complete: true });
-    expect(logged).toHaveLength(4);
+    // Said in the file too, complete so that it is not asked again (it said nothing before: items []).
+    const shown = svc.diagnostics(broken);
+    expect(shown.complete).toBe(true);
+    expect(shown.items.map((d) => [d.code, d.severity, d.message])).toEqual([
+      ['internal-error', 1, 'Sublevel failed on this file (disk on fire); please report it with the file attached.'],
+    ]);
+    // The evaluation neither throws nor rejects: it resolves with the failure as the one problem.
+    const evaluated = await svc.evaluate(broken);
+    expect(evaluated.problems.map((p) => p.code)).toEqual(['internal-error']);
+    expect(logged).toHaveLength(5);
+    expect(logged[4]).toContain('evaluation failed on file:///b.sublevel (version 1)');
+    // And it goes on serving: a sound document evaluates as before.
+    const good = await svc.evaluate(doc(LI));
+    expect(good.problems.map((p) => p.code)).toEqual(['zeeman-not-linear']);
     expect(logged[0]).toContain('hover failed on file:///b.sublevel');
     expect(logged[0]).toContain('disk on fire');
   });

@@ -39,8 +39,9 @@ export interface TestClient {
   stop(): Promise<number | null>;
 }
 
-export async function startClient(capabilities: ClientCapabilities, answers: Record<string, (params: unknown) => unknown> = {}): Promise<TestClient> {
-  const child = spawn(process.execPath, [SERVER, '--stdio'], { stdio: ['pipe', 'pipe', 'pipe'] });
+/** `server`: the bundle to start (a test may start a copy beside a service with failures planted). */
+export async function startClient(capabilities: ClientCapabilities, answers: Record<string, (params: unknown) => unknown> = {}, server = SERVER): Promise<TestClient> {
+  const child = spawn(process.execPath, [server, '--stdio'], { stdio: ['pipe', 'pipe', 'pipe'] });
   const stderr: string[] = [];
   child.stderr!.on('data', (b: Buffer) => stderr.push(b.toString()));
   const connection = createMessageConnection(new StreamMessageReader(child.stdout!), new StreamMessageWriter(child.stdin!));

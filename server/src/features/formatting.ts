@@ -120,9 +120,10 @@ export function formatting(analysis: Analysis, range?: Range): TextEdit[] {
   const lineCount = doc.lineStarts.length;
   const scanned = Array.from({ length: lineCount }, (_, n) => scan(doc, n));
   const indents = indentation(analysis, scanned);
-  // Whole lines: a client may send any number (a fractional line once indexed past the scanned lines).
-  const from = range ? Math.max(0, Math.floor(range.start.line)) : 0;
-  const to = range ? Math.min(lineCount - 1, Math.floor(range.end.line)) : lineCount - 1;
+  // The language service makes a client's range sound (service/requestPositions.ts); the bound
+  // only keeps a direct caller's range past the end from reading past the scanned lines.
+  const from = range ? range.start.line : 0;
+  const to = range ? Math.min(lineCount - 1, range.end.line) : lineCount - 1;
   const out: TextEdit[] = [];
   for (let n = from; n <= to; n++) lineEdits(n, scanned[n]!, Math.max(0, indents[n]!), emptyingMergesBreaks(doc, n), out);
   return out;

@@ -6,7 +6,7 @@
  * analysed again, at the same version, when one of them changes (`filesChanged`).
  */
 import type { Analysis, AnalyzeOptions } from '../eval/analyze';
-import { sortProblems } from '../eval/analyze';
+import { internalError, sortProblems } from '../eval/analyze';
 import { EVAL_RULES } from '../eval/evalCodes';
 import type { Problem } from '../format/ast';
 import { folderOf, locationKey } from '../model/locations';
@@ -96,9 +96,18 @@ export class DocumentStore {
     };
   }
 
+  /**
+   * True when `s` is the analysis of this snapshot. The text is compared too: a client may send a
+   * version number again (or go back) with another text. An unchanged document hands over the
+   * same string, which compares at once.
+   */
+  private current(s: VersionState | undefined, doc: DocumentSnapshot): boolean {
+    return s !== undefined && s.version === doc.version && !s.stale && s.text === doc.getText();
+  }
+
   private state(doc: DocumentSnapshot): VersionState {
     const entry = this.docs.get(doc.uri);
-    if (entry && entry.current.version === doc.version && !entry.current.stale) return entry.current;
+    if (this.current(entry?.current, doc)) return entry!.current;
     const text = doc.getText();
     const { analysis, state: fast } = analyzeFastAfter(text, this.options(doc.uri), entry?.current.fast);
     // A text over a cap is not split into lines or evaluated: its one problem is all there is.
@@ -126,13 +135,12 @@ export class DocumentStore {
   }
 
   has(doc: DocumentSnapshot): boolean {
-    const current = this.docs.get(doc.uri)?.current;
-    return current?.version === doc.version && !current.stale;
+    return this.current(this.docs.get(doc.uri)?.current, doc);
   }
 
   isEvaluated(doc: DocumentSnapshot): boolean {
     const current = this.docs.get(doc.uri)?.current;
-    return current?.version === doc.version && !current.stale && current.evaluated;
+    return this.current(current, doc) && current!.evaluated;
   }
 
   /** Which analysis of this version the current one is: 0 first, then one more each time a used file changed. */
@@ -221,6 +229,21 @@ export class DocumentStore {
     s.analysis.problems = problems;
     s.evaluated = true;
     entry.lastEvaluated = { lines: linesOf(s), problems: evaluationOnly };
+  }
+
+  /**
+   * The evaluation of this version failed outside the evaluator (which reports its own failures as
+   * `evaluation-cut-short`): it is not tried again, and the version's problems say so with an
+   * `internal-error` after the parse and model problems.
+   */
+  evaluationFailed(doc: DocumentSnapshot, e: unknown): Analysis {
+    const s = this.state(doc);
+    if (!s.evaluated) {
+      s.analysis.problems = sortProblems([...s.analysis.problems, internalError(e)]);
+      s.evaluated = true;
+    }
+    s.evaluation ??= Promise.resolve(s.analysis);
+    return s.analysis;
   }
 
   /** The evaluated analysis, or the fast one if the evaluation does not arrive within `waitMs`. */

@@ -2,7 +2,9 @@
  * The language service: per document version, a fast analysis (parse and model) that every
  * keystroke pays for, and an evaluation that runs apart (see documentStore.ts). Every editor
  * feature is a call that never throws: a failure is logged and gives the feature's empty answer.
- * Knows nothing of the protocol connection; server.ts wires it up.
+ * Positions and ranges are taken as the client sent them and made sound here, in one way
+ * (requestPositions.ts): a feature never sees a position outside the text, and nonsense gets the
+ * empty answer. Knows nothing of the protocol connection; server.ts wires it up.
  */
 import type {
   CodeAction,
@@ -19,7 +21,8 @@ import type {
   TextEdit,
   WorkspaceEdit,
 } from 'vscode-languageserver-types';
-import type { Analysis } from '../eval/analyze';
+import { internalError, type Analysis } from '../eval/analyze';
+import { unparsedDocument } from '../eval/inputLimits';
 import { codeActions, type CodeActionRequest } from '../features/codeActions';
 import { completion } from '../features/completion';
 import { definition } from '../features/definition';
@@ -38,6 +41,7 @@ import { DocumentStore, type DocumentSnapshot } from './documentStore';
 import { type Evaluator, inProcessEvaluator } from './evaluator';
 import { DEFAULT_SETTINGS, REGIME_NOTE_CODES, type EditorSettings } from './settings';
 import type { WorkspaceFiles } from './workspaceFiles';
+import { requestPosition, requestRange } from './requestPositions';
 
 export type { DocumentSnapshot } from './documentStore';
 
@@ -51,6 +55,18 @@ export const EVALUATION_WAIT_MS = 750;
 
 function describe(e: unknown): string {
   return e instanceof Error ? (e.stack ?? e.message) : String(e);
+}
+
+/** Runs `run` at the position the client meant, or gives `empty` for a nonsense one (requestPositions.ts). */
+function at<T>(a: Analysis, pos: unknown, empty: T, run: (p: Position) => T): T {
+  const p = requestPosition(a.doc, pos);
+  return p ? run(p) : empty;
+}
+
+/** Runs `run` over the range the client meant, or gives `empty` for a nonsense one. */
+function within<T>(a: Analysis, range: unknown, empty: T, run: (r: Range) => T): T {
+  const r = requestRange(a.doc, range);
+  return r ? run(r) : empty;
 }
 
 export class LanguageService {
@@ -96,9 +112,26 @@ export class LanguageService {
     return this.store.has(doc);
   }
 
-  /** Starts (or joins) the evaluation of this version; resolves when it is in. Never rejects. */
+  /**
+   * Starts (or joins) the evaluation of this version; resolves when it is in. Never throws or
+   * rejects: a failure is logged and the version's diagnostics get an `internal-error`.
+   */
   evaluate(doc: DocumentSnapshot): Promise<Analysis> {
-    return this.store.evaluate(doc);
+    try {
+      return this.store.evaluate(doc).catch((e: unknown) => this.evaluationFailed(doc, e));
+    } catch (e) {
+      return Promise.resolve(this.evaluationFailed(doc, e));
+    }
+  }
+
+  private evaluationFailed(doc: DocumentSnapshot, e: unknown): Analysis {
+    this.log(`sublevel: evaluation failed on ${doc.uri} (version ${doc.version}): ${describe(e)}`);
+    try {
+      return this.store.evaluationFailed(doc, e);
+    } catch {
+      // The store (or the snapshot's text) is broken for this version: the failure alone is all there is to show.
+      return { doc: unparsedDocument(''), problems: [internalError(e)] };
+    }
   }
 
   forget(uri: string): void {
@@ -148,27 +181,36 @@ export class LanguageService {
       return { items: shown.map((p) => toDiagnostic(p, doc.uri)), complete };
     } catch (e) {
       this.log(`sublevel: diagnostics failed on ${doc.uri} (version ${doc.version}): ${describe(e)}`);
-      return { items: [], complete: true };
+      // Said in the file, not only in the log; complete, so that it is not asked again for this version.
+      return { items: [toDiagnostic(internalError(e), doc.uri)], complete: true };
     }
   }
 
   hover(doc: DocumentSnapshot, pos: Position, settings: EditorSettings = DEFAULT_SETTINGS): Promise<Hover | null> {
-    return this.guardEvaluated('hover', doc, null, (a) => hover(a, pos, settings.hover));
+    return this.guardEvaluated('hover', doc, null, (a) => at(a, pos, null, (p) => hover(a, p, settings.hover)));
   }
 
   inlayHints(doc: DocumentSnapshot, range: Range, settings: EditorSettings = DEFAULT_SETTINGS): Promise<InlayHint[]> {
     if (!settings.inlayHints.enabled) return Promise.resolve([]);
-    return this.guardEvaluated('inlay hints', doc, [], (a) => inlayHints(a, range));
+    return this.guardEvaluated('inlay hints', doc, [], (a) => within(a, range, [], (r) => inlayHints(a, r)));
   }
 
   codeActions(doc: DocumentSnapshot, request: CodeActionRequest): CodeAction[] {
-    return this.guard('code actions', doc, [], (a) => codeActions(a, doc.uri, request));
+    return this.guard('code actions', doc, [], (a) =>
+      within(a, request.range, [], (range) => {
+        // The client's copies of our diagnostics name the problems to fix; one with a nonsense range names none.
+        const given: unknown = request.diagnostics;
+        const diagnostics = Array.isArray(given) ? given.filter((d: Diagnostic | null) => requestRange(a.doc, d?.range) !== undefined) : [];
+        const only = Array.isArray(request.only) ? request.only.filter((k) => typeof k === 'string') : undefined;
+        return codeActions(a, doc.uri, { range, diagnostics, ...(only ? { only } : {}) });
+      }),
+    );
   }
 
   completion(doc: DocumentSnapshot, pos: Position): CompletionItem[] {
     const files = this.files;
     const folder = files ? { uri: doc.uri, listFolder: (l: string) => files.listFolder(l) } : undefined;
-    return this.guard('completion', doc, [], (a) => completion(a, pos, folder));
+    return this.guard('completion', doc, [], (a) => at(a, pos, [], (p) => completion(a, p, folder)));
   }
 
   documentSymbols(doc: DocumentSnapshot): DocumentSymbol[] {
@@ -176,27 +218,31 @@ export class LanguageService {
   }
 
   definition(doc: DocumentSnapshot, pos: Position): Location | null {
-    return this.guard('definition', doc, null, (a) => definition(a, doc.uri, pos));
+    return this.guard('definition', doc, null, (a) => at(a, pos, null, (p) => definition(a, doc.uri, p)));
   }
 
   references(doc: DocumentSnapshot, pos: Position, includeDeclaration: boolean): Location[] {
-    return this.guard('references', doc, [], (a) => references(a, doc.uri, pos, includeDeclaration));
+    return this.guard('references', doc, [], (a) => at(a, pos, [], (p) => references(a, doc.uri, p, includeDeclaration === true)));
   }
 
   prepareRename(doc: DocumentSnapshot, pos: Position): { range: Range; placeholder: string } | RenameRefusal | null {
-    return this.guard('prepare rename', doc, null, (a) => prepareRename(a, pos));
+    return this.guard('prepare rename', doc, null, (a) => at(a, pos, null, (p) => prepareRename(a, p)));
   }
 
   rename(doc: DocumentSnapshot, pos: Position, newName: string): WorkspaceEdit | RenameRefusal | null {
-    return this.guard('rename', doc, null, (a) => rename(a, doc.uri, pos, newName));
+    if (typeof newName !== 'string') return null;
+    return this.guard('rename', doc, null, (a) => at(a, pos, null, (p) => rename(a, doc.uri, p, newName)));
   }
 
   foldingRanges(doc: DocumentSnapshot): FoldingRange[] {
     return this.guard('folding ranges', doc, [], (a) => foldingRanges(a));
   }
 
-  semanticTokens(doc: DocumentSnapshot, range?: Range): SemanticTokens {
-    return this.guard('semantic tokens', doc, { data: [] }, (a) => semanticTokens(a, range));
+  /** Without `range`, the whole document's tokens; `null` is a range request that sent none (nonsense). */
+  semanticTokens(doc: DocumentSnapshot, range?: Range | null): SemanticTokens {
+    const empty: SemanticTokens = { data: [] };
+    if (range === undefined) return this.guard('semantic tokens', doc, empty, (a) => semanticTokens(a));
+    return this.guard('semantic tokens', doc, empty, (a) => within(a, range, empty, (r) => semanticTokens(a, r)));
   }
 
   /** The diagram panel's picture of this version (evaluated first, as hovers are). */
@@ -204,10 +250,16 @@ export class LanguageService {
     const failed: DiagramAnswer = { ok: false, message: 'Sublevel could not draw this file; the server log says why.' };
     const fast = this.store.analysis(doc); // never throws (analyzeFast catches)
     if (fast.refused) return { ok: false, message: `Sublevel did not draw this file: ${withoutStop(fast.problems[0]?.message ?? 'it is over a size cap')}.` };
-    return this.guardEvaluated('diagram', doc, failed, (a) => diagramFor(a, req));
+    return this.guardEvaluated('diagram', doc, failed, (a) => {
+      const { line, ...rest } = req;
+      const at = line === undefined ? undefined : requestPosition(a.doc, { line, character: 0 });
+      return diagramFor(a, at ? { ...rest, line: at.line } : rest);
+    });
   }
 
-  formatting(doc: DocumentSnapshot, range?: Range): TextEdit[] {
-    return this.guard('formatting', doc, [], (a) => formatting(a, range));
+  /** Without `range`, the whole document; `null` is a range request that sent none (nonsense). */
+  formatting(doc: DocumentSnapshot, range?: Range | null): TextEdit[] {
+    if (range === undefined) return this.guard('formatting', doc, [], (a) => formatting(a));
+    return this.guard('formatting', doc, [], (a) => within(a, range, [], (r) => formatting(a, r)));
   }
 }

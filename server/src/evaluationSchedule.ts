@@ -1,0 +1,94 @@
+/**
+ * When the server evaluates a document: after a pause in typing, only the version still open
+ * then, and once per version however often its diagnostics are pulled meanwhile. Every path ends
+ * in the log when something throws or rejects (in the timer, the evaluation or what follows it),
+ * so a failure never goes unhandled and the server keeps serving; the document keeps the
+ * diagnostics it last got (the language service adds an `internal-error` to them when the
+ * failure is its own), and a version that failed is not tried again (its next edit is).
+ */
+
+export interface ScheduledDocument {
+  readonly uri: string;
+  readonly version: number;
+}
+
+export interface EvaluationScheduleHooks<D extends ScheduledDocument> {
+  /** Pause after the last schedule before the evaluation starts. */
+  delayMs: number;
+  /** The open document with this URI now, if any. */
+  current(uri: string): D | undefined;
+  /** Evaluates it; undefined when there is nothing to evaluate with yet (the service is loading). */
+  evaluate(doc: D): Promise<unknown> | undefined;
+  /** The evaluation of `doc` is in and it is still the open version: send its diagnostics. */
+  evaluated(doc: D): void;
+  log(message: string): void;
+}
+
+export interface EvaluationSchedule<D extends ScheduledDocument> {
+  /** Evaluates this version after the pause (a repeated call for the same version does not put it off). */
+  schedule(doc: D): void;
+  /** The document closed: nothing more for it. */
+  cancel(uri: string): void;
+}
+
+function describe(e: unknown): string {
+  return e instanceof Error ? (e.stack ?? e.message) : String(e);
+}
+
+export function evaluationSchedule<D extends ScheduledDocument>(hooks: EvaluationScheduleHooks<D>): EvaluationSchedule<D> {
+  const timers = new Map<string, NodeJS.Timeout>();
+  /** Versions waiting for the pause, by document. */
+  const pending = new Map<string, number>();
+  /** The version whose evaluation failed, by document: asking again (a pull of its diagnostics) would only fail again. */
+  const failedVersion = new Map<string, number>();
+
+  const failed = (uri: string, version: number) => (e: unknown): void => {
+    failedVersion.set(uri, version);
+    try {
+      hooks.log(`sublevel: evaluating ${uri} (version ${version}) failed: ${describe(e)}`);
+    } catch {
+      // Nowhere left to say it; the server goes on.
+    }
+  };
+
+  function start(uri: string, version: number): void {
+    timers.delete(uri);
+    pending.delete(uri);
+    const doc = hooks.current(uri);
+    if (!doc || doc.version !== version) return;
+    const running = hooks.evaluate(doc);
+    if (!running) return;
+    running
+      .then(() => {
+        const now = hooks.current(uri);
+        if (now && now.version === version) hooks.evaluated(now);
+      })
+      .catch(failed(uri, version));
+  }
+
+  return {
+    schedule(doc) {
+      if (pending.get(doc.uri) === doc.version || failedVersion.get(doc.uri) === doc.version) return;
+      failedVersion.delete(doc.uri);
+      clearTimeout(timers.get(doc.uri));
+      pending.set(doc.uri, doc.version);
+      const { uri, version } = doc;
+      timers.set(
+        uri,
+        setTimeout(() => {
+          try {
+            start(uri, version);
+          } catch (e) {
+            failed(uri, version)(e);
+          }
+        }, hooks.delayMs),
+      );
+    },
+    cancel(uri) {
+      failedVersion.delete(uri);
+      clearTimeout(timers.get(uri));
+      timers.delete(uri);
+      pending.delete(uri);
+    },
+  };
+}
