@@ -86,3 +86,28 @@ describe('an SI value echoed in the written unit reads back as written', () => {
     expect(Number.isNaN(convertSI(Number.NaN, 'temperature', 'degC'))).toBe(true);
   });
 });
+
+describe('the quick path never leaves the correctly rounded value', () => {
+  it('a prefix is a shift of the written digits: n digits × 10^k read as the text `…e(k)` reads (ECMAScript Number is correctly rounded)', async () => {
+    const { convertExactly, decimalOf, exactFactor } = await import('../../server/src/format/exactDecimal');
+    // A fixed linear congruential sequence (Numerical Recipes' constants), so a failure replays.
+    let seed = 12345;
+    const next = (): number => (seed = (seed * 1664525 + 1013904223) % 4294967296) / 4294967296;
+    const shifted = (v: number, k: number): number => {
+      const [m, e = '0'] = String(v).split('e');
+      return Number(`${m}e${Number(e) + k}`);
+    };
+    let checked = 0;
+    for (const k of [-6, -4, -3, -2, 2, 3, 9]) {
+      const f = exactFactor(decimalOf(Number(`1e${k}`)));
+      for (let i = 0; i < 4000; i++) {
+        // 1 to 17 significant digits over 40 decades, either sign: 16- and 17-digit values take the exact path.
+        const v = (next() < 0.5 ? -1 : 1) * Number((next() * 10 ** Math.floor(next() * 40 - 20)).toPrecision(1 + Math.floor(next() * 17)));
+        if (v === 0) continue;
+        expect(convertExactly(v, f)).toBe(shifted(v, k));
+        checked++;
+      }
+    }
+    expect(checked).toBeGreaterThan(27000);
+  });
+});

@@ -17,12 +17,14 @@ export interface ExactFactor {
   readonly num: Decimal;
   readonly den: Decimal;
   readonly approx: number;
+  /** Significant digits of num, for the quick path of convertExactly. */
+  readonly numDigits: number;
 }
 
 export const ONE: Decimal = { m: 1n, e: 0 };
 
 export function exactFactor(num: Decimal, den: Decimal = ONE): ExactFactor {
-  return { num, den, approx: toNumber(num, den) };
+  return { num, den, approx: toNumber(num, den), numDigits: digitCount(num.m) };
 }
 
 export const UNIT_FACTOR: ExactFactor = exactFactor(ONE);
@@ -81,22 +83,39 @@ export function toNumber(num: Decimal, den: Decimal = ONE): number {
 }
 
 /**
- * At most 15 significant digits: the decimals every double keeps (IEEE 754 binary64 holds any
- * 15-digit decimal exactly on a round trip). Two such decimals lie more than 4 ulps apart.
+ * Significant digits of a double's shortest text (from the first to the last non-zero digit,
+ * before any exponent). Counted by hand: regular expressions here cost more than a whole reading.
  */
-function isShortDecimal(x: number): boolean {
+function significantDigits(x: number): number {
   const text = String(x);
-  const mantissa = text.replace(/^-/, '').replace(/e.*$/, '').replace('.', '').replace(/^0+/, '').replace(/0+$/, '');
-  return mantissa.length <= 15;
+  let first = -1;
+  let last = -1;
+  let dot = -1;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c === 101 /* e */) break;
+    if (c === 46 /* . */) dot = i;
+    else if (c > 48 && c <= 57) {
+      if (first < 0) first = i;
+      last = i;
+    }
+  }
+  if (first < 0) return 0;
+  return last - first + 1 - (dot > first && dot < last ? 1 : 0);
 }
+
+/** Digits every double keeps: any decimal of 15 significant digits survives a round trip (IEEE 754 binary64). */
+const DOUBLE_DIGITS = 15;
 
 /** value × factor, converted as decimals and rounded once. */
 export function convertExactly(value: number, f: ExactFactor): number {
   if (f.approx === 1 && f.num.m === f.den.m && f.num.e === f.den.e) return value;
   const quick = value * f.approx;
   if (value === 0 || !Number.isFinite(quick)) return quick + 0;
-  // The product of two doubles is within an ulp of the exact one; when it prints as a short
-  // decimal, that decimal is the exact product (no other short decimal lies that near).
-  if (isShortDecimal(quick)) return quick;
+  // The quick path: with a power of ten below, the exact product has at most the digits of the
+  // value and of the factor; when those are 15 or fewer and the double product (within an ulp or
+  // two of it) prints with 15 or fewer, it is that exact product, as no other decimal that short
+  // lies within a few ulps.
+  if (f.den.m === 1n && f.numDigits + significantDigits(value) <= DOUBLE_DIGITS && significantDigits(quick) <= DOUBLE_DIGITS) return quick;
   return toNumber(times(decimalOf(value), f.num), f.den) + 0;
 }
