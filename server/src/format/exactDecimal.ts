@@ -1,8 +1,8 @@
 /**
  * Unit conversion without binary noise: a written number and a unit's exact SI factor (a short
  * decimal such as 1e-4 for G or 6.62607015e-34 for h) are multiplied as decimals, and the result
- * becomes a double once, the nearest one. `0.1 mT` is then 1e-4 T, not 1.0000000000000002e-4, and
- * `3e-30 J` read as an energy through Hz stays 3e-30. Values that are not exact decimals (a
+ * becomes a double once, the nearest one. `3 G` is then 3e-4 T, not 3.0000000000000003e-4, and
+ * `3e-30 J` read as an energy stays 3e-30, not 3.0000000000000003e-30. Values that are not exact decimals (a
  * division by h) are carried to 30 digits before the one rounding, past what a double holds.
  */
 

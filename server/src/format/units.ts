@@ -366,7 +366,9 @@ function fittingSuggestions(e: Extract<UnitEvaluation, { ok: false }>, unitText:
 
 /**
  * Reads one value part as a quantity of the expected dimension, in SI.
- * `what` names the setting in messages (default: the dimension, e.g. "gradient").
+ * `what` names the setting in messages (default: the dimension, e.g. "gradient"). `scale` is an
+ * exact constant the SI value is multiplied by in the same exact conversion (k_B or h to read a
+ * trap's cut straight into joules), so no second rounding adds noise.
  */
 export function readQuantity(part: ValuePart, expected: Dimension, what?: string, scale = 1): QuantityReading {
   const info = DIMENSIONS[expected];

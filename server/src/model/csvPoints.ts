@@ -10,7 +10,7 @@ import type { DataKind } from './fitTypes';
 export interface CsvColumns {
   /** Column index of each known name. */
   index: Record<string, number>;
-  /** A written cell to SI, per column name (one exact conversion: `0.1` mT is 1e-4 T, no noise). */
+  /** A written cell to SI, per column name (one exact conversion: `3` in a G column is 3e-4 T, not 3.0000000000000003e-4). */
   toSI: Record<string, (value: number) => number>;
   units: Record<string, string>;
 }
