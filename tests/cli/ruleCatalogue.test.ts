@@ -12,8 +12,11 @@ function sources(dir: string): string[] {
   return fs.readdirSync(dir, { withFileTypes: true }).flatMap((e) => (e.isDirectory() ? sources(path.join(dir, e.name)) : e.name.endsWith('.ts') ? [path.join(dir, e.name)] : []));
 }
 
-/** `issue('warning', 'code'`, `beamIssue('error', 'code'`, `finding('info', 'code'`, `issue('code'`, `fail('code'`, over line breaks. */
-const RAISED = /\b(?:issue|beamIssue|finding|fail)\(\s*(?:'(error|warning|info)',\s*)?'([a-z][a-z0-9]*(?:-[a-z0-9]+)+)'/g;
+/**
+ * `issue('warning', 'code'`, `beamIssue('error', 'code'`, `finding('info', 'code'`, `issue('code'`, `fail('code'`,
+ * and a trap finding carried as figures, `figureIssue('info', { code: 'code'`, over line breaks.
+ */
+const RAISED = /\b(?:issue|beamIssue|finding|fail|figureIssue)\(\s*(?:'(error|warning|info)',\s*)?(?:\{\s*code:\s*)?'([a-z][a-z0-9]*(?:-[a-z0-9]+)+)'/g;
 
 function raisedCodes(): Map<string, string | undefined> {
   const out = new Map<string, string | undefined>();

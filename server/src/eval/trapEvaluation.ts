@@ -8,14 +8,15 @@ import { BOLTZMANN_K, PLANCK_H } from '../physics/constants';
 import { sumField } from '../physics/fields';
 import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
 import { PHYSICS_RULES } from '../physics/issueCodes';
-import { defaultRegionRadius, gravityAlong, regionIssues, ZERO_FIELD_FRACTION, summariseTrap, trapCautions, type SublevelFinding, type SublevelTrap, type TrapIssue, type TrapSummary } from '../physics/traps';
+import { defaultRegionRadius, gravityAlong, hasFigures, regionIssues, ZERO_FIELD_FRACTION, summariseTrap, trapCautions, type SublevelFinding, type SublevelTrap, type TrapIssue, type TrapSummary, type WordedTrapIssue } from '../physics/traps';
 import type { FieldSourceModel, SettingsModel } from '../model/types';
 import type { TrapModel } from '../model/trapTypes';
 import type { GJLookup } from './gJLookup';
 import { engineSpec } from './levelSpec';
 import type { TrapResult, TrapSublevelResult } from './trapResultTypes';
 import { mergedTrapProblem, ZERO_FIELD_CODE } from './trapSublevelFindings';
-import { gravityTooStrongText, trapFieldUnitFor } from './trapText';
+import { trapIssueText, type TrapIssueUnits } from './trapIssueText';
+import { trapFieldUnitFor } from './trapText';
 
 export interface TrapEvaluation {
   result: TrapResult;
@@ -48,7 +49,9 @@ export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: Settings
   const radius = trap.regionRadiusM?.value ?? defaultRegionRadius(centre, parts);
   if (radius === undefined) return { result, problems };
   result.region = { centre_m: [...centre], radius_m: radius, from: trap.regionRadiusM ? 'file' : 'sources' };
-  for (const i of regionIssues(centre, radius, parts)) problems.push(toProblem(trap, i));
+  const regionUnit = trap.regionRadiusM?.unit;
+  // Before the summary: a region reaching a conductor reads only lengths; the field family is not known yet.
+  for (const i of regionIssues(centre, radius, parts)) problems.push(toProblem(trap, i, { field: 'G', ...(regionUnit ? { region: regionUnit } : {}) }));
   const summary = summariseTrap({
     field: sumField(parts),
     level: spec,
@@ -58,9 +61,9 @@ export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: Settings
     ...(trap.temperatureK ? { temperatureK: trap.temperatureK.value } : {}),
     ...(trap.cutJ ? { cutJ: trap.cutJ.value } : {}),
   });
-  // The gravity finding reads its gradients in the unit the trap's report uses (trapText.trapFieldUnit).
-  const unit = trapFieldUnitFor(Math.max(Math.abs(summary.fieldRangeT[1]), Math.abs(summary.fieldAtCentreT)), fieldUnit);
-  for (const i of summary.issues) problems.push(toProblem(trap, i.gravity && i.sublevel !== undefined ? { ...i, message: gravityTooStrongText(i.sublevel, i.gravity, unit) } : i));
+  // Findings with fields and gradients read them in the unit the trap's report uses (trapText.trapFieldUnit).
+  const units: TrapIssueUnits = { field: trapFieldUnitFor(Math.max(Math.abs(summary.fieldRangeT[1]), Math.abs(summary.fieldAtCentreT)), fieldUnit), ...(regionUnit ? { region: regionUnit } : {}) };
+  for (const i of summary.issues) problems.push(toProblem(trap, i, units));
   problems.push(...perTrapProblems(trap, summary.sublevelFindings));
   if (summary.sublevels.length === 0) return { result, summary, problems };
   result.computed = true;
@@ -171,7 +174,7 @@ function rangeFor(trap: TrapModel, code: string): Range {
  * centre on the conductor) or `region` (the region reaching it) when written, else the line that
  * places the conductor in its source; the other place is given as related.
  */
-function onConductorPlace(trap: TrapModel, c: NonNullable<TrapIssue['conductor']>): Pick<Problem, 'range' | 'related'> {
+function onConductorPlace(trap: TrapModel, c: NonNullable<WordedTrapIssue['conductor']>): Pick<Problem, 'range' | 'related'> {
   const owners = (trap.sources ?? []).flatMap((s) => s.parts.map((_, j) => ({ s, j })));
   const owner = c.partIndex !== undefined ? owners[c.partIndex] : undefined;
   const placed = owner ? conductorSetting(owner.s, owner.j) : undefined;
@@ -187,7 +190,8 @@ function conductorSetting(s: FieldSourceModel, j: number): Range {
   return s.centre?.range ?? s.nameRange;
 }
 
-function toProblem(trap: TrapModel, i: TrapIssue): Problem {
+function toProblem(trap: TrapModel, i: TrapIssue, units: TrapIssueUnits): Problem {
+  if (hasFigures(i)) return { code: i.code, severity: severityOf(i.code, i.severity), message: `trap '${trap.name}': ${trapIssueText(i, units)}`, range: rangeFor(trap, i.code) };
   const place = i.conductor ? onConductorPlace(trap, i.conductor) : { range: rangeFor(trap, i.code) };
   return { code: i.code, severity: severityOf(i.code, i.severity), message: `trap '${trap.name}': ${i.message}`, ...place };
 }

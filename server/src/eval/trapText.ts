@@ -31,11 +31,6 @@ export function trapFieldUnitFor(largestT: number, fieldUnit?: string): TrapFiel
   return Number.isFinite(largestT) && Math.abs(largestT) >= GAUSS_TESLA_SWITCH_T ? 'T' : 'G';
 }
 
-/** trap-gravity-too-strong in the trap's own gradient unit (the physics core gives the numbers). */
-export function gravityTooStrongText(sublevel: string, g: { needTPerM: number; hasTPerM: number }, unit: TrapFieldUnit): string {
-  return `This trap cannot hold ${sublevel} against gravity: it needs ≥ ${gradientText(g.needTPerM, 3, undefined, unit)} along gravity (has ${gradientText(g.hasTPerM, 3, undefined, unit)}).`;
-}
-
 /** A temperature in K, mK, µK or nK. */
 export function temperatureText(k: number | null | undefined, digits = 4): string {
   if (k === null || k === undefined || !Number.isFinite(k)) return MISSING;

@@ -11,7 +11,9 @@ import { makeProblem } from './codes';
 import { didYouMeanText, suggestNames } from './didYouMean';
 import { isTooSmall, readNumberPrefix, TOO_SMALL } from './numbers';
 import { canonicalUnitName, isOffsetUnit, parseUnitSyntax } from './unitGrammar';
-import { BASE_DIMENSION_COUNT, convertScale, unitEntry } from './unitLookup';
+import { BASE_DIMENSION_COUNT, unitEntry } from './unitLookup';
+import { OFFSET_SCALES } from './unitTable';
+import { convertExactly, decimalOf, exactFactor, ONE, factorTimes, inverse, plus, power, times, toNumber, UNIT_FACTOR, type Decimal, type ExactFactor } from './exactDecimal';
 import { PLANCK_H, SPEED_OF_LIGHT } from '../physics/constants';
 import { listWords } from '../physics/listWords';
 
@@ -42,7 +44,8 @@ export interface QuantityReading {
 
 /** A unit reduced to an SI factor and a dimension vector (mathjs' base dimensions). */
 interface UnitValue {
-  factor: number;
+  /** The SI size of one of the unit as exact decimals (exactDecimal.ts), so conversion adds no noise. */
+  exact: ExactFactor;
   dims: number[];
   /** Set for an offset unit standing alone (degC). */
   offsetUnit?: string;
@@ -70,7 +73,7 @@ function evaluateUncached(text: string): UnitEvaluation {
   const syntax = parseUnitSyntax(text);
   if (!syntax.ok) return { ok: false, code: 'unit-malformed', message: syntax.message, start: syntax.start, end: syntax.end };
   const dims = new Array<number>(BASE_DIMENSION_COUNT).fill(0);
-  let factor = 1;
+  let exact = UNIT_FACTOR;
   for (const term of syntax.terms) {
     const canonical = knownCanonical(term.name);
     if (canonical === undefined) {
@@ -91,13 +94,32 @@ function evaluateUncached(text: string): UnitEvaluation {
       if (syntax.terms.length !== 1 || term.power !== 1) {
         return { ok: false, code: 'unit-malformed', message: `${term.name} cannot be combined with other units or powers; use K`, start: term.start, end: term.end };
       }
-      return { ok: true, value: { factor: 1, dims: [...unitEntry(canonical)!.dims], offsetUnit: canonical } };
+      return { ok: true, value: { exact: UNIT_FACTOR, dims: [...unitEntry(canonical)!.dims], offsetUnit: canonical } };
     }
     const one = unitEntry(canonical)!;
-    factor *= Math.pow(one.size, term.power);
+    const size = power(exactSize(canonical), Math.abs(term.power));
+    exact = term.power > 0 ? factorTimes(exact, size) : factorTimes(exact, ONE, size);
     one.dims.forEach((d, i) => (dims[i] = (dims[i] ?? 0) + d * term.power));
   }
-  return { ok: true, value: { factor, dims } };
+  return { ok: true, value: { exact, dims } };
+}
+
+/** Powers of ten of the SI prefixes, short and long (SI brochure). */
+const PREFIX_EXPONENTS: Readonly<Record<string, number>> = {
+  Q: 30, R: 27, Y: 24, Z: 21, E: 18, P: 15, T: 12, G: 9, M: 6, k: 3, h: 2, da: 1, d: -1, c: -2, m: -3, u: -6, n: -9, p: -12, f: -15, a: -18, z: -21, y: -24, r: -27, q: -30,
+  exa: 18, peta: 15, tera: 12, giga: 9, mega: 6, kilo: 3, hecto: 2, deca: 1, deci: -1, centi: -2, milli: -3, micro: -6, nano: -9, pico: -12, femto: -15, atto: -18,
+};
+
+/**
+ * One of a named unit in SI as an exact decimal: its base unit's size shifted by the prefix's
+ * power of ten. The table's own size is a double product (mG = 1.0000000000000001e-7).
+ */
+function exactSize(canonical: string): Decimal {
+  const entry = unitEntry(canonical)!;
+  const exponent = PREFIX_EXPONENTS[entry.prefixName];
+  const base = unitEntry(entry.unitName);
+  if (entry.prefixName === '' || exponent === undefined || base === undefined) return decimalOf(entry.size);
+  return times(decimalOf(base.size), { m: 1n, e: exponent });
 }
 
 function evaluateUnit(text: string): UnitEvaluation {
@@ -262,16 +284,43 @@ function subRange(range: Range, start: number, end: number): Range {
   };
 }
 
-/** SI value of `value` written in a unit, or a problem with the right dimension named. */
-function toSI(value: number, unit: UnitValue, d: Dimension): number | undefined {
-  if (unit.offsetUnit) return d === 'temperature' ? convertScale(value, unit.offsetUnit, 'K') : undefined;
-  if (!ACCEPTED_DIMS[d].some((ref) => sameDims(ref, unit.dims))) return undefined;
-  const si = value * unit.factor;
-  if (d !== 'frequency-like') return si;
+const SPEED_OF_LIGHT_EXACT = decimalOf(SPEED_OF_LIGHT);
+const PLANCK_H_EXACT = decimalOf(PLANCK_H);
+
+/**
+ * The exact factor from a unit to SI for the expected dimension (Hz for frequency-like: f = c·σ,
+ * f = E/h), undefined for a unit of another dimension or an offset unit.
+ */
+function siFactor(unit: UnitValue, d: Dimension): ExactFactor | undefined {
+  if (unit.offsetUnit || !ACCEPTED_DIMS[d].some((ref) => sameDims(ref, unit.dims))) return undefined;
+  if (d !== 'frequency-like') return unit.exact;
   const base = FREQUENCY_BASES.find(([, dims]) => sameDims(dims, unit.dims))?.[0];
-  if (base === 'per-m') return si * SPEED_OF_LIGHT;
-  if (base === 'J') return si / PLANCK_H;
-  return si;
+  if (base === 'per-m') return factorTimes(unit.exact, SPEED_OF_LIGHT_EXACT);
+  if (base === 'J') return factorTimes(unit.exact, ONE, PLANCK_H_EXACT);
+  return unit.exact;
+}
+
+/** A temperature scale's size and the kelvins of its zero (degC: 1 and 273.15), as exact decimals. */
+function offsetScale(name: string): { size: Decimal; zero: Decimal } {
+  const scale = OFFSET_SCALES[name];
+  if (!scale) throw new Error(`internal unit table error: no offset scale ${name}`);
+  const [unitSize, prefix, offset] = scale;
+  return { size: times(decimalOf(unitSize), decimalOf(prefix)), zero: decimalOf(offset) };
+}
+
+/**
+ * SI value of `value` written in a unit, times an exact constant `scale` (k_B to read a temperature
+ * as an energy), converted once without noise; undefined for a unit of another dimension.
+ */
+function toSI(value: number, unit: UnitValue, d: Dimension, scale = 1): number | undefined {
+  if (unit.offsetUnit) {
+    if (d !== 'temperature') return undefined;
+    const { size, zero } = offsetScale(unit.offsetUnit);
+    return toNumber(times(times(plus(decimalOf(value), zero), size), decimalOf(scale)));
+  }
+  const f = siFactor(unit, d);
+  if (f === undefined) return undefined;
+  return convertExactly(value, scale === 1 ? f : factorTimes(f, decimalOf(scale)));
 }
 
 /**
@@ -317,9 +366,11 @@ function fittingSuggestions(e: Extract<UnitEvaluation, { ok: false }>, unitText:
 
 /**
  * Reads one value part as a quantity of the expected dimension, in SI.
- * `what` names the setting in messages (default: the dimension, e.g. "gradient").
+ * `what` names the setting in messages (default: the dimension, e.g. "gradient"). `scale` is an
+ * exact constant the SI value is multiplied by in the same exact conversion (k_B or h to read a
+ * trap's cut straight into joules), so no second rounding adds noise.
  */
-export function readQuantity(part: ValuePart, expected: Dimension, what?: string): QuantityReading {
+export function readQuantity(part: ValuePart, expected: Dimension, what?: string, scale = 1): QuantityReading {
   const info = DIMENSIONS[expected];
   const label = what ?? info.label;
   const examples = listWords(info.examples);
@@ -368,7 +419,7 @@ export function readQuantity(part: ValuePart, expected: Dimension, what?: string
       problem: makeProblem('unit-wrong-dimension', `${label} needs a plain number or %, got ${clip(part.unit.text)}`, part.unit.range),
     };
   }
-  const si = toSI(part.number.value, e.value, expected);
+  const si = toSI(part.number.value, e.value, expected, scale);
   if (si === undefined) {
     const readAs = prefixedReading(part.unit.text, e.value);
     const fixes = unitsNearest(part.unit.text, expected, e.value);
@@ -386,11 +437,24 @@ export function readQuantity(part: ValuePart, expected: Dimension, what?: string
   }
   const reading: QuantityReading = { si };
   if (part.number.uncertainty !== undefined) {
-    // Offset units (degC) only shift, so the uncertainty scales by 1; others scale linearly.
-    const scale = e.value.offsetUnit ? 1 : Math.abs(toSI(1, e.value, expected) ?? Number.NaN);
-    reading.siUncertainty = part.number.uncertainty * scale;
+    // Offset units (degC) only shift, so the uncertainty scales by their size; others scale linearly.
+    const f = e.value.offsetUnit ? exactFactor(offsetScale(e.value.offsetUnit).size) : siFactor(e.value, expected)!;
+    reading.siUncertainty = Math.abs(convertExactly(part.number.uncertainty, factorTimes(f, decimalOf(scale))));
   }
   return reading;
+}
+
+/**
+ * The conversion of numbers written in `unitText` (a data file's column) to SI, made once and
+ * applied to every cell without noise; undefined when the unit is unknown or of another dimension.
+ */
+export function converterToSI(d: Dimension, unitText: string): ((value: number) => number) | undefined {
+  const e = evaluateUnit(unitText);
+  if (!e.ok) return undefined;
+  const unit = e.value;
+  if (unit.offsetUnit) return d === 'temperature' ? (v) => toSI(v, unit, d)! : undefined;
+  const f = siFactor(unit, d);
+  return f === undefined ? undefined : (v) => convertExactly(v, f);
 }
 
 /**
@@ -402,8 +466,13 @@ export function convertSI(valueSI: number, d: Dimension, unitText: string): numb
   if (d === 'dimensionless' && unitText === '') return valueSI;
   const e = evaluateUnit(unitText);
   if (!e.ok) return undefined;
-  if (e.value.offsetUnit) return d === 'temperature' ? convertScale(valueSI, 'K', e.value.offsetUnit) : undefined;
-  const perUnit = toSI(1, e.value, d);
-  if (perUnit === undefined || perUnit === 0) return undefined;
-  return valueSI / perUnit;
+  if (e.value.offsetUnit) {
+    if (d !== 'temperature') return undefined;
+    const { size, zero } = offsetScale(e.value.offsetUnit);
+    if (!Number.isFinite(valueSI)) return valueSI;
+    return toNumber(plus(decimalOf(valueSI), { m: -zero.m, e: zero.e }), size);
+  }
+  const f = siFactor(e.value, d);
+  if (f === undefined || f.num.m === 0n) return undefined;
+  return convertExactly(valueSI, inverse(f));
 }

@@ -4,14 +4,14 @@
  * `position [um], counts, error`); every later line is one point. A line that cannot be read is
  * reported with its line number and skipped; nothing throws.
  */
-import { convertSI, type Dimension } from '../format/units';
+import { converterToSI, type Dimension } from '../format/units';
 import type { DataKind } from './fitTypes';
 
 export interface CsvColumns {
   /** Column index of each known name. */
   index: Record<string, number>;
-  /** SI value of one written unit, per column name. */
-  toSI: Record<string, number>;
+  /** A written cell to SI, per column name (one exact conversion: `3` in a G column is 3e-4 T, not 3.0000000000000003e-4). */
+  toSI: Record<string, (value: number) => number>;
   units: Record<string, string>;
 }
 
@@ -50,13 +50,13 @@ function readHeader(cells: string[], kind: DataKind): { columns?: CsvColumns; pr
     const unit = m[2] ?? '';
     if (dim) {
       if (!unit) return { problem: `the header column '${name}' needs its unit in brackets, e.g. ${name} [${dim === 'length' ? 'um' : dim === 'flux-density' ? 'mT' : 'MHz'}]` };
-      const perUnit = convertSI(1, dim, unit);
-      if (perUnit === undefined || !(perUnit > 0)) return { problem: `the unit '${unit}' of column '${name}' is not a unit of ${dim === 'frequency-like' ? 'frequency' : dim}` };
-      columns.toSI[name] = 1 / perUnit;
+      const toSI = converterToSI(dim, unit);
+      if (toSI === undefined || !(toSI(1) > 0)) return { problem: `the unit '${unit}' of column '${name}' is not a unit of ${dim === 'frequency-like' ? 'frequency' : dim}` };
+      columns.toSI[name] = toSI;
       columns.units[name] = unit;
     } else {
       if (unit) return { problem: `the column '${name}' is a plain number; remove '[${unit}]'` };
-      columns.toSI[name] = 1;
+      columns.toSI[name] = (v) => v;
     }
     columns.index[name] = i;
   }
@@ -97,7 +97,7 @@ export function readCsvPoints(text: string, kind: DataKind): CsvReading {
         bad = cell === '' ? `the ${name} is missing` : `'${cell.length > 20 ? `${cell.slice(0, 17)}…` : cell}' in the ${name} column is not a number`;
         break;
       }
-      values[name] = v * columns.toSI[name]!;
+      values[name] = columns.toSI[name]!(v);
     }
     if (bad) out.problems.push({ line: k + 1, message: bad });
     else out.rows.push({ line: k + 1, values });

@@ -103,10 +103,11 @@ function readCut(s: SettingNode, problems: ProblemList): Valued<number> | undefi
     return undefined;
   }
   const unit = part.kind === 'quantity' ? { unit: part.unit.text } : {};
-  const asT = readQuantity(part, 'temperature');
-  if (!asT.problem && asT.si !== undefined) return checkCut(s, { value: BOLTZMANN_K * asT.si, source: 'this file', range: part.range, ...unit }, problems);
-  const asF = readQuantity(part, 'frequency-like');
-  if (!asF.problem && asF.si !== undefined) return checkCut(s, { value: PLANCK_H * asF.si, source: 'this file', range: part.range, ...unit }, problems);
+  // Read straight into joules (E = k_B T, E = h ν) in one conversion: `3e-30 J` stays 3e-30, not 3.0000000000000003e-30.
+  const asT = readQuantity(part, 'temperature', undefined, BOLTZMANN_K);
+  if (!asT.problem && asT.si !== undefined) return checkCut(s, { value: asT.si, source: 'this file', range: part.range, ...unit }, problems);
+  const asF = readQuantity(part, 'frequency-like', undefined, PLANCK_H);
+  if (!asF.problem && asF.si !== undefined) return checkCut(s, { value: asF.si, source: 'this file', range: part.range, ...unit }, problems);
   // A misspelt unit gets the reading that knows its spelling (`2 mk` → `mK`); a unit that is
   // neither a temperature nor a frequency (`3 m`) gets both kinds' fixes, each keeping the number.
   const spelled = [asT.problem, asF.problem].find((q) => q !== undefined && q.code !== 'unit-wrong-dimension' && (q.data?.suggestions?.length ?? 0) > 0);

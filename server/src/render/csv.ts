@@ -10,7 +10,7 @@ import type { LevelsViewData, LinesViewData, PatternViewData, ResonanceViewData 
 
 /** What a table is about; written as `# sublevel <kind>: key=value; …` on the first line. */
 export interface CsvContext {
-  kind: 'levels' | 'sweep' | 'pattern' | 'profile' | 'lines' | 'resonance' | 'fit' | 'spectrum' | 'field' | 'fieldmap' | 'slower' | 'trap';
+  kind: 'levels' | 'sweep' | 'pattern' | 'profile' | 'lines' | 'resonance' | 'fit' | 'residuals' | 'spectrum' | 'field' | 'fieldmap' | 'slower' | 'trap';
   /** key/value pairs in order, e.g. ['file', 'a.sublevel'], ['level', 'Rb87.ground'], ['field', 'trap 3.23e-4 T']. */
   about: [string, string | undefined][];
 }

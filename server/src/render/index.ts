@@ -22,6 +22,7 @@ export { renderLines } from './lines';
 export { renderResonance } from './resonance';
 export { renderResiduals, type ResidualsViewData } from './residuals';
 export { fitCsv } from './fitCsv';
+export { residualsCsv } from './residualsCsv';
 export { slowerCsv } from './slowerCsv';
 export { renderSlower, type SlowerViewData } from './slower';
 export { csvNumberTableText, levelsCsv, linesCsv, patternCsv, patternTable, resonanceCsv, spectrumCsv, type CsvNumberTable, type SpectrumColumns } from './csv';

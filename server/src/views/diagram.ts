@@ -10,7 +10,7 @@ import { workingFields } from '../eval/evaluate';
 import { lineAtField } from '../eval/lineAtField';
 import type { BeamModel, LevelModel, SetupModel } from '../model/types';
 import type { WorkingField } from '../eval/levelEvaluation';
-import { fitCsv, levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, renderResiduals, renderResonance, resonanceCsv, renderSlower, slowerCsv, type FieldUnit, type RenderTheme } from '../render';
+import { residualsCsv, levelsCsv, linesCsv, patternCsv, renderLevels, renderLines, renderPattern, renderResiduals, renderResonance, resonanceCsv, renderSlower, slowerCsv, type FieldUnit, type RenderTheme } from '../render';
 import { residualsView } from './residualsView';
 import { slowerView } from './slowerView';
 import { resonanceView } from './resonanceView';
@@ -108,7 +108,7 @@ function drawn(analysis: Analysis, model: SetupModel, req: DiagramRequest): Diag
     if (!f) return { ok: false, message: 'No fit to draw: add a `data` block and a `fit` block (see docs/fit.md).' };
     const v = residualsView(f);
     if (!v) return { ok: false, message: f.kind === 'calibration' ? `Fit '${f.name}' is a one-resonance calibration: its fields are in the hover, there are no residuals.` : `Fit '${f.name}' has no fitted points; see the Problems view.` };
-    return { ok: true, title: v.title, svg: renderResiduals(v, theme), csv: fitCsv([f], req.source ?? '') };
+    return { ok: true, title: v.title, svg: renderResiduals(v, theme), csv: residualsCsv(f, req.source ?? '') };
   }
   const lines = analysis.result?.lines ?? [];
   const evaluated = lines.find((l) => l.name === req.lineName) ?? lines.find((l) => contains(model.lines.find((m) => m.name === l.name)?.node.range ?? NOWHERE, req.line)) ?? lines[0];

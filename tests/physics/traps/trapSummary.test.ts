@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { PLANCK_H, BOHR_MAGNETON } from '../../../server/src/physics/constants';
-import { STANDARD_GRAVITY, summariseTrap, type SublevelTrap, type TrapInput } from '../../../server/src/physics/traps';
+import { hasFigures, STANDARD_GRAVITY, summariseTrap, type SublevelTrap, type TrapInput, type WordedTrapIssue } from '../../../server/src/physics/traps';
 import { ioffe, quadrupole, RB87_GROUND, RB87_MASS } from './analyticFields';
 
 // tests/reference/traps.json is written by scripts/reference/traps_reference.py (Breit–Rabi + SciPy).
@@ -73,11 +73,12 @@ describe('a quadrupole against gravity (b′ = 21 G/cm along z, gravity −z)', 
     expect(state(s.sublevels, 4, 2).trapped).toBe(false);
     expect(state(s.sublevels, 2, -2).trapped).toBe(false);
     const found = s.issues.filter((i) => i.code === 'trap-gravity-too-strong');
-    // The core gives the numbers (and an SI message); the trap text words them in the trap's unit.
+    // The core gives only the figures; the evaluation words them in the trap's unit (eval/trapIssueText.ts).
     const plus1 = found.find((i) => i.sublevel === '|F=2, m_F=+1⟩')!;
-    expect(Number((plus1.gravity!.needTPerM * 100).toPrecision(3))).toBe(30.5);
-    expect(rel(plus1.gravity!.hasTPerM, 0.21)).toBeLessThan(1e-9);
-    expect(plus1.message).toBe('This trap cannot hold |F=2, m_F=+1⟩ against gravity: it needs ≥ 0.305 T/m along gravity (has 0.21 T/m).');
+    if (!hasFigures(plus1) || plus1.code !== 'trap-gravity-too-strong') throw new Error('gravity');
+    expect(Number((plus1.needTPerM * 100).toPrecision(3))).toBe(30.5);
+    expect(rel(plus1.hasTPerM, 0.21)).toBeLessThan(1e-9);
+    expect('message' in plus1).toBe(false);
     expect(found.length).toBe(2);
   });
   it('says the zero field loses atoms (Majorana) and estimates the rate: a note when slower than 1/(60 s)', () => {
@@ -127,7 +128,9 @@ describe('the turning point of E(B)', () => {
     expect(top.depthLimit).toBe('edge');
     expect(rel(top.depthJ!, dq.depth_J_2_2)).toBeLessThan(1e-6);
     expect(rel(state(s.sublevels, 4, 2).depthJ!, dq.depth_J_2_1)).toBeLessThan(1e-6);
-    expect(s.issues.some((i) => i.code === 'trap-turning-point')).toBe(true);
+    // The turning field as a figure, no text: the evaluation words it in the trap's field unit.
+    const turning = s.issues.find((i) => i.code === 'trap-turning-point' && i.sublevel === '|F=1, m_F=-1⟩');
+    expect(turning).toEqual({ severity: 'info', code: 'trap-turning-point', sublevel: '|F=1, m_F=-1⟩', turningFieldT: low.turningFieldT });
   });
 });
 
@@ -161,7 +164,12 @@ describe('an Ioffe–Pritchard trap', () => {
   });
   it('a bias of 0.1 mG is too small (Larmor frequency below 100 × the trap frequency)', () => {
     const w = summariseTrap(input({ field: ioffe(1e-8, 1, 1), gravity: [0, 0, 0], region: { centre: [0, 0, 0], radiusM: 0.005 } }));
-    expect(w.issues.some((i) => i.code === 'trap-bias-too-small' && i.sublevel === '|F=2, m_F=+2⟩')).toBe(true);
+    const bias = w.issues.find((i) => i.code === 'trap-bias-too-small' && i.sublevel === '|F=2, m_F=+2⟩');
+    // The two frequencies as figures: the Larmor one below 100 × the highest trap frequency.
+    if (!bias || !hasFigures(bias) || bias.code !== 'trap-bias-too-small') throw new Error('bias');
+    expect(bias.larmorHz).toBe(state(w.sublevels, 4, 4).larmorHz);
+    expect(bias.larmorHz).toBeLessThan(bias.margin * bias.topHz);
+    expect(bias.margin).toBe(100);
   });
 });
 
@@ -223,7 +231,7 @@ describe('bad input', () => {
     const loop = (z: number, at: number) => ({ kind: 'loop', centre: [0, 0, z], axis: [0, 0, 1], radiusM: 0.04, ampereTurns: at }) as const;
     const s = summariseTrap(input({ field: sumField([loop(0.04, 2000), loop(-0.04, -2000), wire]) }));
     expect(s.issues.map((i) => i.code)).toEqual(['trap-on-conductor']);
-    expect(s.issues[0]!.message).toMatch(/^The trap's centre lies on a wire of its sources, where the field has no value/);
+    expect((s.issues[0] as WordedTrapIssue).message).toMatch(/^The trap's centre lies on a wire of its sources, where the field has no value/);
     expect(s.sublevels).toEqual([]);
     expect(JSON.stringify(s)).not.toMatch(/NaN|Infinity|null/);
     // A default region about a centre on the wire has radius 0: the wire is still what is reported.
@@ -240,7 +248,7 @@ describe('bad input', () => {
     const loop = { kind: 'loop', centre: [0, 0, p[2]!], axis: [0, 0, 1], radiusM: Math.hypot(p[0]!, p[1]!), ampereTurns: 100 } as const;
     const s = summariseTrap(input({ field: sumField([loop]) }));
     expect(s.issues.map((i) => i.code)).toEqual(['trap-on-conductor']);
-    expect(s.issues[0]!.message).toMatch(/^The trap region meets the wire of a loop of its sources/);
+    expect((s.issues[0] as WordedTrapIssue).message).toMatch(/^The trap region meets the wire of a loop of its sources/);
     expect(JSON.stringify(s)).not.toMatch(/NaN|Infinity|null/);
   });
 });
@@ -265,7 +273,8 @@ describe('the default region (90 % of the way to the nearest conductor)', () => 
     expect(defaultRegionRadius([0, 0, 0], [])).toBeUndefined();
     const { regionIssues } = await import('../../../server/src/physics/traps/defaultRegion');
     expect(regionIssues([0, 0, 0], 0.0019, [wire])).toEqual([]);
-    expect(regionIssues([0, 0, 0], 0.002, [wire]).map((i) => i.code)).toEqual(['trap-region-reaches-source']);
+    // The radius and the distance as figures (the evaluation words them in the region's written unit).
+    expect(regionIssues([0, 0, 0], 0.002, [wire])).toEqual([{ severity: 'warning', code: 'trap-region-reaches-source', radiusM: 0.002, nearestM: 0.002 }]);
   });
 });
 

@@ -4,7 +4,7 @@
  * current sheet, a wire, a magnetised block). Atoms that get that far would meet the hardware.
  */
 import type { FieldSourceSpec, Vec3 } from '../fields/types';
-import { issue } from './issues';
+import { figureIssue } from './issues';
 import type { TrapIssue } from './types';
 import { addScaled, dot, norm, sub } from './vec3';
 
@@ -57,6 +57,5 @@ export function regionIssues(centre: Vec3, radiusM: number, parts: readonly Fiel
   let nearest = Number.POSITIVE_INFINITY;
   for (const s of parts) nearest = Math.min(nearest, distanceToSource(centre, s));
   if (!(radiusM >= nearest)) return [];
-  const cm = (m: number): string => `${Number((m * 100).toPrecision(3))} cm`;
-  return [issue('warning', 'trap-region-reaches-source', `The trap region (radius ${cm(radiusM)}) reaches a conductor ${cm(nearest)} from its centre: atoms would meet the hardware before the edge, and the field near a thin conductor grows without bound. Make the region smaller.`)];
+  return [figureIssue('warning', { code: 'trap-region-reaches-source', radiusM, nearestM: nearest })];
 }

@@ -1,5 +1,6 @@
 /** Magnetic traps built from field sources: which sublevels are held, how deep, how stiff (docs/traps.md). */
-export type { HarmonicShape, LinearShape, MajoranaEstimate, RfCut, SublevelFinding, SublevelTrap, TrapInput, TrapIssue, TrapRegion, TrapSummary } from './types';
+export type { FigureTrapIssue, HarmonicShape, LinearShape, MajoranaEstimate, RfCut, SublevelFinding, SublevelTrap, TrapFigures, TrapInput, TrapIssue, TrapRegion, TrapSummary, WordedTrapIssue } from './types';
+export { hasFigures } from './issues';
 export { summariseTrap, labelText, ZERO_FIELD_FRACTION } from './trapSummary';
 export { STANDARD_GRAVITY, gravityAlong } from './gravity';
 export { energyCurves, rfPartner, type EnergyCurve } from './energyCurves';

@@ -16,7 +16,7 @@ import { rfCut } from './rfCut';
 import { trapDepth, type RayCache } from './trapDepth';
 import { findMinimum } from './trapMinimum';
 import { harmonicShape, linearShape } from './trapShape';
-import { finding, issue } from './issues';
+import { figureIssue, finding, issue } from './issues';
 import type { SublevelFinding, SublevelTrap, TrapInput, TrapIssue, TrapSummary } from './types';
 import { norm, sub } from './vec3';
 
@@ -39,11 +39,6 @@ const UNRESOLVED_POINT_FRACTION = 1e-6;
 const ENERGY_ROUNDOFF = 1e-13;
 /** The swept range reaches this far past the largest |B| sampled (rays can pass a little higher). */
 const CURVE_HEADROOM = 1.5;
-
-/** A gradient in SI for this layer's own messages (the trap text rewords them in the trap's unit). */
-function tpm(tPerM: number): string {
-  return `${Number(tPerM.toPrecision(3))} T/m`;
-}
 
 function invalid(input: TrapInput): TrapIssue | undefined {
   const r = input.region;
@@ -140,9 +135,7 @@ function sublevelTrap(
     return { ...base, lowFieldSeeking: false, momentJT: muCentre, trapped: false };
   }
   const gravityIssue = (lev: number): void => {
-    const has = survey.gravityGradientTPerM;
-    const found = issue('warning', 'trap-gravity-too-strong', `This trap cannot hold ${name} against gravity: it needs ≥ ${tpm(lev)} along gravity (has ${tpm(has)}).`, name);
-    issues.push({ ...found, gravity: { needTPerM: lev, hasTPerM: has } });
+    issues.push(figureIssue('warning', { code: 'trap-gravity-too-strong', needTPerM: lev, hasTPerM: survey.gravityGradientTPerM }, name));
   };
   // Gravity wins everywhere when even the largest dE/dB over the region's fields cannot hold the
   // atom with the steepest |B| rise along gravity: no minimum to search for.
@@ -199,7 +192,7 @@ function sublevelTrap(
     return out;
   }
   if (depth.limit === 'turning' && turningFieldT !== null) {
-    issues.push(issue('info', 'trap-turning-point', `The depth for ${name} is set by the turning point of its energy at ${Number((turningFieldT * 1e4).toPrecision(4))} G, where it becomes high-field seeking.`, name));
+    issues.push(figureIssue('info', { code: 'trap-turning-point', turningFieldT }, name));
   }
   const partner = rfPartner(all, c);
   const at = input.field(found.position);
@@ -228,7 +221,7 @@ function sublevelTrap(
       out.shape = shape;
       const top = shape.frequenciesHz[2];
       if (out.larmorHz !== undefined && out.larmorHz < ADIABATIC_MARGIN * top) {
-        issues.push(issue('warning', 'trap-bias-too-small', `The bias at the minimum is too small for ${name}: its Larmor frequency ${Number(out.larmorHz.toPrecision(3))} Hz is less than ${ADIABATIC_MARGIN} × the highest trap frequency ${Number(top.toPrecision(3))} Hz: Majorana losses.`, name));
+        issues.push(figureIssue('warning', { code: 'trap-bias-too-small', larmorHz: out.larmorHz, topHz: top, margin: ADIABATIC_MARGIN }, name));
       }
     } else {
       issues.push(issue('info', 'trap-not-harmonic', `The minimum for ${name} is flat in some direction: no harmonic frequencies.`, name));

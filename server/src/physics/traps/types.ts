@@ -87,14 +87,32 @@ export interface SublevelTrap {
   majorana?: MajoranaEstimate;
 }
 
-export interface TrapIssue extends EngineIssue {
+/** A trap problem worded here: it has no number with a unit in it. */
+export interface WordedTrapIssue extends EngineIssue {
   /** The sublevel the issue is about, when it is about one. */
   sublevel?: string;
   /** A point on a conductor: what meets it (the centre, or a point of the region) and the part's place in the field's list. */
   conductor?: { meets: 'centre' | 'region'; partIndex?: number };
-  /** trap-gravity-too-strong: the |B| gradient along gravity the sublevel needs and the largest the trap has. */
-  gravity?: { needTPerM: number; hasTPerM: number };
 }
+
+/**
+ * The figures of a trap problem whose text has quantities in it: the evaluation words it in the
+ * trap's own units (eval/trapIssueText.ts), the one place that does, so a field reads in the unit
+ * family the trap's report uses and a written length in the unit it was written in.
+ */
+export type TrapFigures =
+  /** The |B| gradient along gravity the sublevel needs and the largest the trap has, T/m. */
+  | { code: 'trap-gravity-too-strong'; needTPerM: number; hasTPerM: number }
+  /** The field where the sublevel's energy turns over and sets its depth, T. */
+  | { code: 'trap-turning-point'; turningFieldT: number }
+  /** The Larmor frequency at the minimum and the highest trap frequency, Hz, and the margin wanted between them. */
+  | { code: 'trap-bias-too-small'; larmorHz: number; topHz: number; margin: number }
+  /** The region's radius and the distance from its centre to the nearest conductor, m. */
+  | { code: 'trap-region-reaches-source'; radiusM: number; nearestM: number };
+
+export type FigureTrapIssue = TrapFigures & { severity: EngineIssue['severity']; sublevel?: string };
+
+export type TrapIssue = WordedTrapIssue | FigureTrapIssue;
 
 /**
  * A finding about one sublevel that the evaluation words once per trap, naming every sublevel it
