@@ -147,7 +147,7 @@ export function renderSpectrumLines(d: LinesViewData, curve: LineSpectrumCurve, 
       return stick(c, k++, x(c.offsetHz), ctx);
     })));
     const part = sliceSamples(samples, seg);
-    const path = spectrumPath({ offsetHz: part.offsetHz, intensity: part.intensity, unitPeak: 1, caption: '' }, x, y, strongest);
+    const path = curveTop > 0 && spectrumPath({ offsetHz: part.offsetHz, intensity: part.intensity, unitPeak: 1, caption: '' }, x, y, strongest);
     if (path) parts.push(el('path', { class: 'sl-spectrum', 'data-kind': 'spectrum', d: path, fill: 'none', stroke: pal.total, 'stroke-width': 1.8, 'stroke-linejoin': 'round' }));
     body.push(el('g', { class: 'sl-segment', 'data-x-domain': `${dataNum(seg[0])},${dataNum(seg[1])}`, 'data-x-range': `${px(sbox.left)},${px(sbox.right)}`, 'data-x-offset': dataNum(off.offset) }, parts));
     if (i > 0) body.push(breakMark(left - BREAK_PX / 2, box, segments[i - 1]![1], seg[0], pal));
@@ -164,12 +164,12 @@ export function renderSpectrumLines(d: LinesViewData, curve: LineSpectrumCurve, 
   const overlap = overlapNote(drawnX.length, places);
   if (overlap) notes.push({ cls: 'sl-overlap-note', text: overlap, data: { 'data-places': places } });
   const floorText = trimNumber(floorFraction, 2);
-  const windowText = `the report’s ${curve.points ?? samples.offsetHz.length} samples run from ${figureMinus(frequencyText(window[0], 5))} to ${figureMinus(frequencyText(window[1], 5))}`;
+  const windowText = `(the report’s ${curve.points ?? samples.offsetHz.length} samples: ${figureMinus(frequencyText(window[0], 5))} to ${figureMinus(frequencyText(window[1], 5))})`;
   if (segments.length > 1) {
-    notes.push({ cls: 'sl-frame-note', text: `axis broken where the curve stays under ${floorText} × its peak: ${frame.gaps.length} ${frame.gaps.length === 1 ? 'gap' : 'gaps'} of ${gapWidths(frame.gaps)} left out, one scale throughout` });
-    notes.push({ cls: 'sl-window-note', text: `frames: where the curve exceeds ${floorText} × its peak; ${windowText}` });
+    notes.push({ cls: 'sl-frame-note', text: `axis broken where the curve is under ${floorText} × its peak: ${frame.gaps.length} ${frame.gaps.length === 1 ? 'gap' : 'gaps'} of ${gapWidths(frame.gaps)} left out, one scale` });
+    notes.push({ cls: 'sl-window-note', text: `frames: where the curve exceeds ${floorText} × its peak ${windowText}` });
   } else if (segments[0]![0] > window[0] || segments[0]![1] < window[1]) {
-    notes.push({ cls: 'sl-window-note', text: `frame: where the curve exceeds ${floorText} × its peak; ${windowText}` });
+    notes.push({ cls: 'sl-window-note', text: `frame: where the curve exceeds ${floorText} × its peak ${windowText}` });
   }
   if (outside > 0) notes.push({ cls: 'sl-outside-note', text: `outside the frame: ${outside} ${outside === 1 ? 'component' : 'components'} where the curve is under ${floorText} × its peak, listed in the report`, data: { 'data-left-out': outside } });
   if (curve.fine && curve.reportStepHz !== undefined) {
