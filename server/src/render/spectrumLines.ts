@@ -149,7 +149,18 @@ export function renderSpectrumLines(d: LinesViewData, curve: LineSpectrumCurve, 
     const part = sliceSamples(samples, seg);
     const path = curveTop > 0 && spectrumPath({ offsetHz: part.offsetHz, intensity: part.intensity, unitPeak: 1, caption: '' }, x, y, strongest);
     if (path) parts.push(el('path', { class: 'sl-spectrum', 'data-kind': 'spectrum', d: path, fill: 'none', stroke: pal.total, 'stroke-width': 1.8, 'stroke-linejoin': 'round' }));
-    body.push(el('g', { class: 'sl-segment', 'data-x-domain': `${dataNum(seg[0])},${dataNum(seg[1])}`, 'data-x-range': `${px(sbox.left)},${px(sbox.right)}`, 'data-x-offset': dataNum(off.offset) }, parts));
+    // Each segment describes its own scale for the panel's pointer readout: as its ticks read (from its round value, in its unit).
+    body.push(
+      el('g', {
+        class: 'sl-segment',
+        'data-x-name': off.name,
+        'data-x-unit': off.unit.symbol,
+        'data-x-factor': dataNum(off.unit.factor),
+        'data-x-domain': `${dataNum(seg[0] - off.offset)},${dataNum(seg[1] - off.offset)}`,
+        'data-x-range': `${px(sbox.left)},${px(sbox.right)}`,
+        'data-x-offset': dataNum(off.offset),
+      }, parts),
+    );
     if (i > 0) body.push(breakMark(left - BREAK_PX / 2, box, segments[i - 1]![1], seg[0], pal));
     left += w + BREAK_PX;
   });
@@ -179,7 +190,9 @@ export function renderSpectrumLines(d: LinesViewData, curve: LineSpectrumCurve, 
   notes.forEach((n, i) => body.push(el('text', { class: `sl-note ${n.cls}`, ...(n.data ?? {}), x: box.left, y: HEIGHT + NOTE_ROW * (i + 1) - 8, 'font-size': 10, fill: pal.muted }, text(n.text))));
   if (faintNote) body.push(faintNoteSvg(faintNote, box.left, HEIGHT + NOTE_ROW * rows - 8, pal));
 
-  const unitAll = anyOffset ? offsets[0]!.unit : shared;
+  // One segment: the root describes its scale as its ticks read. Broken: only the segments do (one linear map would misread the gaps).
+  const only = segments.length === 1 ? (anyOffset ? offsets[0]! : { offset: 0, unit: shared, name: 'Δf' }) : undefined;
+  const unitAll = only ? only.unit : shared;
   const desc = `Spectrum over ${comps.length} line components (${counts.join(', ')}) from Δf = ${formatIn(segments[0]![0], shared)} to ${formatIn(segments[segments.length - 1]![1], shared)}${notes.map((n) => `; ${n.text}`).join('')}${faintNote ? `; ${faintNote.text}` : ''}.`;
   return svgDocument(
     {
@@ -191,11 +204,11 @@ export function renderSpectrumLines(d: LinesViewData, curve: LineSpectrumCurve, 
       desc,
       pal,
       rootData: {
-        'data-x-name': 'Δf',
+        'data-x-name': only ? only.name : 'Δf',
         'data-x-unit': unitAll.symbol,
         'data-x-factor': dataNum(unitAll.factor),
-        'data-x-domain': `${dataNum(segments[0]![0])},${dataNum(segments[segments.length - 1]![1])}`,
-        'data-x-range': `${px(box.left)},${px(box.right)}`,
+        'data-x-domain': `${dataNum(segments[0]![0] - (only?.offset ?? 0))},${dataNum(segments[segments.length - 1]![1] - (only?.offset ?? 0))}`,
+        ...(only ? { 'data-x-range': `${px(box.left)},${px(box.right)}` } : {}),
         'data-y-domain': `${dataNum(y.domain()[0]!)},${dataNum(y.domain()[1]!)}`,
         'data-y-range': `${px(box.bottom)},${px(box.top)}`,
         'data-stick-scale': ownScale ? 'own' : 'shared',
