@@ -235,8 +235,15 @@ line bad: ground -> Na23.na_p
     // The figure draws the peaks from finer samples of its own and says why, not only the diagnostic.
     const sparseView = linesView(sparse.result.lines[0]!)!;
     expect(sparseView.spectrum!.fine!.offsetHz.length).toBeGreaterThan(11);
-    expect(renderLines(sparseView, { kind: 'export' })).toMatch(/curve drawn with \d+ extra samples: the report’s are [\d.]+ [GM]Hz apart, too far for the peaks/);
-    expect(linesView(cut.result.lines[0]!)!.spectrum!.fine).toBeUndefined();
+    expect(renderLines(sparseView, { kind: 'export' })).toMatch(/curve drawn with \d+ extra samples: the report’s are [\d.]+ [GM]Hz apart, the line [\d.]+ MHz wide/);
+    // The figure counts the components the span cuts apart from those too faint for its frame.
+    const cutSvg = renderLines(linesView(cut.result.lines[0]!)!, { kind: 'export' });
+    const cutOut = cut.result.lines[0]!.at_fields[0]!.components.filter((c, k) => {
+      const [a, b] = cut.result.lines[0]!.at_fields[0]!.spectrum!.window_Hz;
+      return (c.offset_Hz < a || c.offset_Hz > b) && cut.result.lines[0]!.at_fields[0]!.spectrum!.weights[k]! >= 1e-4 * Math.max(...cut.result.lines[0]!.at_fields[0]!.spectrum!.weights);
+    }).length;
+    expect(cutOut).toBeGreaterThan(0);
+    expect(cutSvg).toContain(`outside the report’s window: ${cutOut} components (its span cuts them), listed in the report`);
   });
 
   it('with no `points` the samples follow the width: five per FWHM, at least 2001', () => {

@@ -116,6 +116,14 @@ describe('a line whose components sit in clusters 47 GHz apart at 5 T (1.5 GHz D
     }
   });
 
+  it('draws in the editor’s panel theme too, with a hit target per stick', () => {
+    const d = diagramFor(analyze(fixture('figs-spectra-apart')), { view: 'lines', theme: 'panel', lineName: 'apart', fieldName: 'strong' });
+    expect(d.ok).toBe(true);
+    const panel = parseSvg(d.ok ? d.svg : '');
+    expect(byClass(panel, 'sl-hit').length).toBe(sticks(panel).length);
+    expect(byClass(panel, 'sl-segment')).toHaveLength(6);
+  });
+
   it('the segments run from the σ− cluster near −117 GHz to the σ+ one near +117 GHz', () => {
     const [f0] = pair(segments[0]!.attrs['data-x-domain']!);
     const [, f1] = pair(segments[5]!.attrs['data-x-domain']!);
@@ -137,7 +145,7 @@ describe('a 1 kHz line with no Doppler width: three spikes 1.05 GHz apart, and o
     }
     const step = (at.spectrum!.window_Hz[1] - at.spectrum!.window_Hz[0]) / (at.spectrum!.points - 1);
     expect(step).toBeGreaterThan(10 * at.spectrum!.voigt_fwhm_Hz);
-    expect(notes(svg).find((t) => t.startsWith('curve drawn with'))).toMatch(/^curve drawn with \d+ extra samples: the report’s are 21 kHz apart, too far for the peaks$/);
+    expect(notes(svg).find((t) => t.startsWith('curve drawn with'))).toMatch(/^curve drawn with \d+ extra samples: the report’s are 21 kHz apart, the line 1 kHz wide$/);
   });
 
   it('labels a spike 1.05 GHz out in kHz from a round value, not with seven-digit ticks', () => {
@@ -148,6 +156,12 @@ describe('a 1 kHz line with no Doppler width: three spikes 1.05 GHz apart, and o
     const ticks = all(axis, (n) => n.attrs['data-tick'] !== undefined).map((n) => n.attrs['data-tick']!);
     expect(ticks.length).toBeGreaterThan(3);
     for (const t of ticks) expect(t.replace(/[−\-.]/g, '').length).toBeLessThanOrEqual(2);
+    // The root describes the scale as the ticks read it, for the panel's pointer readout.
+    expect(svg.attrs['data-x-name']).toBe('Δf − 1.05053 GHz');
+    expect(svg.attrs['data-x-unit']).toBe('kHz');
+    const [d0, d1] = pair(svg.attrs['data-x-domain']!);
+    expect(d0).toBeGreaterThan(-7e3);
+    expect(d1).toBeLessThan(7e3);
     // The window is only ±6 line widths: the frame is the whole window, and no note is needed.
     expect(notes(svg).some((t) => t.startsWith('frame'))).toBe(false);
   });

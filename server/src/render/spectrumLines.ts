@@ -2,7 +2,7 @@
  * A line's synthesized spectrum over its sticks. The frame is where the curve is (above
  * CURVE_FLOOR of its peak), not the report's whole sample window; stretches far apart compared
  * with their widths get a broken axis on one frequency scale; sticks too short to read against a
- * blend (the strongest under a third of the curve's peak) get their own scale on the right, with
+ * blend (the strongest under a quarter of the curve's peak) get their own scale on the right, with
  * the strongest drawn at the curve's peak. The figure states each of these choices.
  */
 import { scaleLinear } from 'd3-scale';
@@ -25,8 +25,10 @@ const NOTE_ROW = 14;
 /** Pixels between the segments of a broken axis, and the narrowest segment drawn. */
 const BREAK_PX = 16;
 const MIN_SEGMENT_PX = 70;
-/** Sticks whose strongest is under this fraction of the curve's peak get their own scale (too short to read otherwise). */
-const OWN_SCALE_BELOW = 1 / 3;
+/** Report samples further apart than this many pixels draw a visibly cornered curve: the finer ones are drawn instead. */
+const FINE_PX = 2;
+/** Sticks whose strongest is under this fraction of the curve's peak get their own scale (too short to read otherwise: under ~70 px here). */
+const OWN_SCALE_BELOW = 1 / 4;
 
 export interface SpectrumFigureInput {
   pal: Palette;
@@ -47,14 +49,14 @@ interface Samples {
 }
 
 /** The report's samples and any finer ones, in stick units, ascending. */
-function allSamples(c: LineSpectrumCurve, perStick: number): Samples {
+function allSamples(c: LineSpectrumCurve, perStick: number, withFine: boolean): Samples {
   const pts: [number, number][] = [];
   const add = (f: ArrayLike<number>, v: ArrayLike<number>): void => {
     const n = Math.min(f.length, v.length);
     for (let i = 0; i < n; i++) if (Number.isFinite(f[i]!) && Number.isFinite(v[i]!)) pts.push([f[i]!, v[i]! * perStick]);
   };
   add(c.offsetHz, c.intensity);
-  if (c.fine) add(c.fine.offsetHz, c.fine.intensity);
+  if (c.fine && withFine) add(c.fine.offsetHz, c.fine.intensity);
   pts.sort((a, b) => a[0] - b[0]);
   return { offsetHz: pts.map((p) => p[0]), value: pts.map((p) => p[1]) };
 }
@@ -93,7 +95,7 @@ export function renderSpectrumLines(d: LinesViewData, curve: LineSpectrumCurve, 
   const { pal, idBase, interactive, comps, faintNote, counts } = input;
   const strongest = Math.max(0, ...comps.map(shownStrength));
   const perStick = perStickOf(curve, strongest);
-  const samples = allSamples(curve, perStick);
+  const samples = allSamples(curve, perStick, true);
   const curveTop = Math.max(0, ...samples.value);
   const floorFraction = curve.floor ?? CURVE_FLOOR;
   const window: Stretch = curve.windowHz ?? [samples.offsetHz[0] ?? 0, samples.offsetHz[samples.offsetHz.length - 1] ?? 0];
@@ -109,6 +111,11 @@ export function renderSpectrumLines(d: LinesViewData, curve: LineSpectrumCurve, 
   const box: PlotBox = { left: 64, right: WIDTH - (ownScale ? 60 : 20), top: 48 + legendSvg.height + 16, bottom: HEIGHT - 56 };
   const layout = segmentLayout(frame.segments, box.right - box.left, BREAK_PX, MIN_SEGMENT_PX);
   const segments = layout.segments;
+  // The finer samples are drawn when the report's step over the peaks or show as corners on this scale.
+  const pxPerHz = layout.widths[0]! / (segments[0]![1] - segments[0]![0] || 1);
+  const step = curve.reportStepHz;
+  const useFine = curve.fine !== undefined && step !== undefined && (curve.widthHz === undefined || step > curve.widthHz / 4 || step * pxPerHz > FINE_PX);
+  const drawnSamples = useFine ? samples : allSamples(curve, perStick, false);
   const top = Math.max(ownScale ? 0 : strongest, curveTop, 0);
   const y = scaleLinear().domain([0, top * 1.12 || 1]).range([box.bottom, box.top]).nice();
   // Own scale: the same pixels, the strongest stick where the curve's peak is.
@@ -146,7 +153,7 @@ export function renderSpectrumLines(d: LinesViewData, curve: LineSpectrumCurve, 
       drawnX.push(x(c.offsetHz));
       return stick(c, k++, x(c.offsetHz), ctx);
     })));
-    const part = sliceSamples(samples, seg);
+    const part = sliceSamples(drawnSamples, seg);
     const path = curveTop > 0 && spectrumPath({ offsetHz: part.offsetHz, intensity: part.intensity, unitPeak: 1, caption: '' }, x, y, strongest);
     if (path) parts.push(el('path', { class: 'sl-spectrum', 'data-kind': 'spectrum', d: path, fill: 'none', stroke: pal.total, 'stroke-width': 1.8, 'stroke-linejoin': 'round' }));
     // Each segment describes its own scale for the panel's pointer readout: as its ticks read (from its round value, in its unit).
@@ -182,9 +189,13 @@ export function renderSpectrumLines(d: LinesViewData, curve: LineSpectrumCurve, 
   } else if (segments[0]![0] > window[0] || segments[0]![1] < window[1]) {
     notes.push({ cls: 'sl-window-note', text: `frame: where the curve exceeds ${floorText} × its peak ${windowText}` });
   }
-  if (outside > 0) notes.push({ cls: 'sl-outside-note', text: `outside the frame: ${outside} ${outside === 1 ? 'component' : 'components'} where the curve is under ${floorText} × its peak, listed in the report`, data: { 'data-left-out': outside } });
-  if (curve.fine && curve.reportStepHz !== undefined) {
-    notes.push({ cls: 'sl-fine-note', text: `curve drawn with ${curve.fine.offsetHz.length} extra samples: the report’s are ${frequencyText(curve.reportStepHz, 3)} apart, too far for the peaks` });
+  // Beyond the report's window (a `span` that cuts them) the curve is not known: those are counted apart.
+  const beyond = comps.filter((c) => c.offsetHz < window[0] || c.offsetHz > window[1]).length;
+  const faintOut = outside - beyond;
+  if (beyond > 0) notes.push({ cls: 'sl-beyond-note', text: `outside the report’s window: ${beyond} ${beyond === 1 ? 'component' : 'components'} (its span cuts them), listed in the report`, data: { 'data-left-out': beyond } });
+  if (faintOut > 0) notes.push({ cls: 'sl-outside-note', text: `outside the frame: ${faintOut} ${faintOut === 1 ? 'component' : 'components'} where the curve is under ${floorText} × its peak, listed in the report`, data: { 'data-left-out': faintOut } });
+  if (useFine && curve.widthHz !== undefined) {
+    notes.push({ cls: 'sl-fine-note', text: `curve drawn with ${curve.fine!.offsetHz.length} extra samples: the report’s are ${frequencyText(step!, 3)} apart, the line ${frequencyText(curve.widthHz ?? 0, 4)} wide` });
   }
   const rows = notes.length + (faintNote ? 1 : 0);
   notes.forEach((n, i) => body.push(el('text', { class: `sl-note ${n.cls}`, ...(n.data ?? {}), x: box.left, y: HEIGHT + NOTE_ROW * (i + 1) - 8, 'font-size': 10, fill: pal.muted }, text(n.text))));

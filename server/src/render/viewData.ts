@@ -163,8 +163,9 @@ export interface LineSpectrumCurve {
   points?: number;
   /** Extra exact samples over the stretches when the report's step over the peaks; drawn with the others. */
   fine?: { offsetHz: ArrayLike<number>; intensity: ArrayLike<number> };
-  /** The report's sample step, when `fine` is given. */
+  /** The report's sample step, when `fine` is given, and the line's width (Voigt FWHM). */
   reportStepHz?: number;
+  widthHz?: number;
 }
 
 /** `panel`: colours follow the editor theme through CSS variables; `export`: fixed light palette for files. */

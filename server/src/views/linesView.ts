@@ -57,7 +57,8 @@ function spectrumCurve(s: NonNullable<AtField['spectrum']>, components: AtField[
       return [[Math.max(s.window_Hz[0], c.offset_Hz - r), Math.min(s.window_Hz[1], c.offset_Hz + r)]];
     }),
   ]);
-  const sparse = step > s.voigt_fwhm_Hz / 4;
+  // Samples a twentieth of the width apart draw a smooth top even on a segment of a broken axis.
+  const sparse = step > s.voigt_fwhm_Hz / FINE_PER_WIDTH;
   return {
     offsetHz: samples.offsetHz,
     intensity: samples.intensity,
@@ -67,7 +68,7 @@ function spectrumCurve(s: NonNullable<AtField['spectrum']>, components: AtField[
     floor: CURVE_FLOOR,
     windowHz: [s.window_Hz[0], s.window_Hz[1]],
     points: s.points,
-    ...(sparse ? { fine: fineSamples(s, components, stretches), reportStepHz: step } : {}),
+    ...(sparse ? { fine: fineSamples(s, components, stretches), reportStepHz: step, widthHz: s.voigt_fwhm_Hz } : {}),
   };
 }
 
@@ -88,12 +89,14 @@ function reach(shape: VoigtShape, unitPeak: number, fraction: number, fwhmHz: nu
 
 /** At most this many extra samples in all, and per stretch. */
 const FINE_TOTAL = 20_001;
+/** Samples per line width the figure wants. */
+const FINE_PER_WIDTH = 20;
 const FINE_PER_STRETCH = 2_001;
 
 /**
- * Exact samples at an eighth of the line width across each stretch, for a figure whose report
- * samples step over its peaks (`spectrum-undersampled`): the figure draws what the line is, the
- * report's samples stay as they are.
+ * Exact samples at a twentieth of the line width across each stretch, for a figure whose report
+ * samples are coarser than that (at worst they step over its peaks, `spectrum-undersampled`): the
+ * figure draws what the line is, the report's samples stay as they are.
  */
 function fineSamples(s: NonNullable<AtField['spectrum']>, components: AtField['components'], stretches: readonly Stretch[]): { offsetHz: Float64Array; intensity: Float64Array } {
   const comps = components.map((c, k) => ({ frequencyHz: c.offset_Hz, weight: s.weights[k] ?? 0 }));
@@ -101,7 +104,7 @@ function fineSamples(s: NonNullable<AtField['spectrum']>, components: AtField['c
   const offsets: number[] = [];
   const values: number[] = [];
   for (const [a, b] of stretches) {
-    const points = Math.max(11, Math.min(budget, Math.ceil((b - a) / (s.voigt_fwhm_Hz / 8)) + 1));
+    const points = Math.max(11, Math.min(budget, Math.ceil((b - a) / (s.voigt_fwhm_Hz / FINE_PER_WIDTH)) + 1));
     const stepHz = (b - a) / (points - 1);
     const v = synthesizeSpectrum(comps, s.sigma_Hz, s.gamma_Hz, { fromHz: a, stepHz, points });
     for (let i = 0; i < points; i++) {
