@@ -5,7 +5,8 @@
  * the cap's size follows the strength, so weak components do not look like strong ones. When
  * the field is low enough that hyperfine groups lie far apart compared with their Zeeman
  * structure, each group gets a panel of its own, on one common scale, with offsets from the
- * group's centre in Hz and in units of μ_B·B/h.
+ * group's centre in Hz and in units of μ_B·B/h. A line with a synthesized spectrum is drawn by
+ * spectrumLines.ts (its frame follows the curve, not the groups).
  */
 import { scaleLinear } from 'd3-scale';
 import { renderSpectrumLines } from './spectrumLines';
