@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { parseHostMessage, parsePageMessage } from '../../client/src/panel/messages';
 import { makeNonce } from '../../client/src/panel/nonce';
 import { contentSecurityPolicy, panelHtml } from '../../client/src/panel/panelHtml';
-import { formatEngineering, formatScientific, pointerValue, readoutFor } from '../../client/src/panel/readout';
+import { formatEngineering, formatScientific, pointerValue, readoutFor, scaleAt } from '../../client/src/panel/readout';
 
 describe('message validation', () => {
   const ok = { type: 'show', view: 'levels', svg: '<svg/>', title: 't' };
@@ -84,6 +84,19 @@ describe('read-out text', () => {
     const log = { xDomain: '1e-6,1', xRange: '0,600', xFactor: '1', xName: 'B', xUnit: 'T', xScale: 'log' };
     expect(pointerValue(log, 300)).toBe('B = 0.001 T');
     expect(pointerValue(log, 400)).toBe('B = 0.01 T');
+  });
+
+  it('reads a broken axis segment by segment, each as its own ticks read', () => {
+    // A spectrum's broken axis: the root has no single x range; each segment describes itself.
+    const root = { xName: 'Δf', xUnit: 'GHz', xFactor: '1000000000', xDomain: '-1.2e9,1.2e9' };
+    const segs = [
+      { xName: 'Δf + 1.05 GHz', xUnit: 'kHz', xFactor: '1000', xDomain: '-20000,20000', xRange: '64,264' },
+      { xName: 'Δf', xUnit: 'kHz', xFactor: '1000', xDomain: '-20000,20000', xRange: '280,480' },
+    ];
+    expect(pointerValue(scaleAt(root, segs, 164), 164)).toBe('Δf + 1.05 GHz = 0 kHz');
+    expect(pointerValue(scaleAt(root, segs, 480), 480)).toBe('Δf = 20 kHz');
+    // In the gap between segments there is no reading.
+    expect(pointerValue(scaleAt(root, segs, 272), 272)).toBeUndefined();
   });
 });
 

@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import { spectrumSamples } from '../../server/src/eval/spectrumSamples';
 import { linesView } from '../../server/src/views/linesView';
+import { renderLines } from '../../server/src/render';
 
 const RB = `species Rb87
   level ground: 5s 2S1/2
@@ -231,9 +232,18 @@ line bad: ground -> Na23.na_p
     expect(problem(cut, 'spectrum-span-cuts').covered).toBe('2 GHz');
     const sparse = run(`${RB}\nline D2: ground -> p32\n  spectrum = across\n  points = 11\n`);
     expect(problem(sparse, 'spectrum-undersampled').message).toMatch(/11 samples over .* more than half the line width/);
-    // The figure says it too, not only the diagnostic.
-    expect(linesView(sparse.result.lines[0]!)!.spectrum!.caption).toMatch(/too few samples: .* apart, peaks not resolved/);
-    expect(linesView(cut.result.lines[0]!)!.spectrum!.caption).not.toMatch(/too few/);
+    // The figure draws the peaks from finer samples of its own and says why, not only the diagnostic.
+    const sparseView = linesView(sparse.result.lines[0]!)!;
+    expect(sparseView.spectrum!.fine!.offsetHz.length).toBeGreaterThan(11);
+    expect(renderLines(sparseView, { kind: 'export' })).toMatch(/curve drawn with \d+ extra samples: the report’s are [\d.]+ [GM]Hz apart, the line [\d.]+ MHz wide/);
+    // The figure counts the components the span cuts apart from those too faint for its frame.
+    const cutSvg = renderLines(linesView(cut.result.lines[0]!)!, { kind: 'export' });
+    const cutOut = cut.result.lines[0]!.at_fields[0]!.components.filter((c, k) => {
+      const [a, b] = cut.result.lines[0]!.at_fields[0]!.spectrum!.window_Hz;
+      return (c.offset_Hz < a || c.offset_Hz > b) && cut.result.lines[0]!.at_fields[0]!.spectrum!.weights[k]! >= 1e-4 * Math.max(...cut.result.lines[0]!.at_fields[0]!.spectrum!.weights);
+    }).length;
+    expect(cutOut).toBeGreaterThan(0);
+    expect(cutSvg).toContain(`outside the report’s window: ${cutOut} components (its span cuts them), listed in the report`);
   });
 
   it('with no `points` the samples follow the width: five per FWHM, at least 2001', () => {

@@ -1,8 +1,9 @@
 /**
  * Every figure at its worst cases, from the invented setups in tests/fixtures/figs-*.sublevel:
  * fields of 1 nT and 30 T, a level of 80 sublevels, broad low detector peaks next to a narrow tall
- * one, a line of 1483 components and one of a single component, a fit from three points. Each
- * figure must say what the report counts, keep its labels inside the frame, and print no NaN.
+ * one, a line of 1483 components and one of a single component, clusters 47 GHz apart, 1 kHz
+ * spikes 1 GHz apart, a fit from three points. Each figure must say what the report counts, keep
+ * its labels inside the frame, and print no NaN.
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
@@ -108,13 +109,38 @@ describe('spectra of 1483 components and of one', () => {
   const analysis = analyze(fixture('figs-spectra'));
   const counted = (name: string): number => analysis.result!.lines.find((l) => l.name === name)!.at_fields[0]!.components.length;
 
-  it('the figure accounts for every component the report lists: drawn, or counted as too faint', () => {
+  it('the figure accounts for every component the report lists: drawn, outside the frame, or counted as too faint', () => {
     const svg = parseSvg(draw('figs-spectra', { view: 'lines', lineName: 'many' }));
     const drawn = all(svg, (n) => n.attrs['data-kind'] === 'component').length;
-    const note = all(svg, (n) => n.name === 'text' || n.name === 'tspan').map(textOf).find((t) => t.startsWith('not drawn: '))!;
-    const faint = Number(/^not drawn: (\d+) components/.exec(note)![1]);
+    const texts = all(svg, (n) => n.name === 'text' || n.name === 'tspan').map(textOf);
+    const faint = Number(/^not drawn: (\d+) components/.exec(texts.find((t) => t.startsWith('not drawn: '))!)![1]);
+    // The frame is where the curve is; the few components beyond it are counted, not dropped.
+    const outside = Number(/^outside the frame: (\d+) components/.exec(texts.find((t) => t.startsWith('outside the frame: '))!)![1]);
     expect(counted('many')).toBeGreaterThan(100);
-    expect(drawn + faint).toBe(counted('many'));
+    expect(outside).toBeGreaterThan(0);
+    expect(drawn + outside + faint).toBe(counted('many'));
+    expectTextsInside(svg);
+  });
+
+  it('the line of 1483: the frame is the curve’s, not the numeric tail’s, and the sticks read on their own scale', () => {
+    const svg = parseSvg(draw('figs-spectra', { view: 'lines', lineName: 'many' }));
+    const window = analysis.result!.lines.find((l) => l.name === 'many')!.at_fields[0]!.spectrum!.window_Hz;
+    const [f0, f1] = svg.attrs['data-x-domain']!.split(',').map(Number);
+    // Before: the whole window, −11.25 to 9.62 GHz; the curve lies within about ±3.5 GHz.
+    expect(f0).toBeGreaterThan(-4e9);
+    expect(f1).toBeLessThan(4e9);
+    expect(f1! - f0!).toBeLessThan(0.35 * (window[1] - window[0]));
+    expect(svg.attrs['data-stick-scale']).toBe('own');
+  });
+
+  it.each([
+    ['apart', 'strong', 6],
+    ['spikes', 'weak', 3],
+    ['needle', 'weak', 1],
+  ])('line %s at field %s: %i segment(s), labels inside, no NaN', (lineName, fieldName, segments) => {
+    const svg = parseSvg(draw('figs-spectra-apart', { view: 'lines', lineName, fieldName }));
+    expect(svg.attrs['data-segments']).toBe(String(segments));
+    expect(all(svg, (n) => n.attrs.class === 'sl-segment')).toHaveLength(segments);
     expectTextsInside(svg);
   });
 
@@ -122,7 +148,10 @@ describe('spectra of 1483 components and of one', () => {
     const svg = parseSvg(draw('figs-spectra', { view: 'lines', lineName: 'lone' }));
     expect(all(svg, (n) => n.attrs['data-kind'] === 'component')).toHaveLength(1);
     expect(all(svg, (n) => n.attrs['data-kind'] === 'spectrum')).toHaveLength(1);
-    expect(all(svg, (n) => n.name === 'text').map(textOf).some((t) => /not drawn|drawn at/.test(t))).toBe(false);
+    expect(all(svg, (n) => n.name === 'text').map(textOf).some((t) => /not drawn|drawn at|outside the frame|axis broken/.test(t))).toBe(false);
+    // One component: the stick shares the curve's scale, and the legend says the curve peaks at it.
+    expect(svg.attrs['data-stick-scale']).toBe('shared');
+    expect(all(svg, (n) => n.name === 'text').map(textOf).some((t) => t.endsWith('(a lone component peaks at its stick)'))).toBe(true);
     expectTextsInside(svg);
   });
 });

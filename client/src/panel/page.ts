@@ -6,7 +6,7 @@
  * ever reaches innerHTML.
  */
 import { FIELD_UNITS, isView, parseHostMessage, type FieldUnitName, type PageMessage, type ShowMessage, type View, type ViewOptions } from './messages';
-import { pointerValue, readoutFor, type DataRecord } from './readout';
+import { pointerValue, readoutFor, scaleAt, type DataRecord } from './readout';
 import { importSvg } from './svgImport';
 
 interface VsCodeApi {
@@ -190,7 +190,9 @@ function userX(svg: SVGSVGElement, clientX: number, clientY: number): number {
 host.addEventListener('pointermove', (e) => {
   const svg = host.querySelector('svg');
   const target = e.target instanceof Element ? e.target.closest('[data-kind]') : null;
-  const pointerText = svg ? pointerValue(svg.dataset as DataRecord, userX(svg, e.clientX, e.clientY)) : undefined;
+  const ux = svg ? userX(svg, e.clientX, e.clientY) : NaN;
+  const segments = svg ? Array.from(svg.querySelectorAll<SVGGElement>('.sl-segment'), (g) => g.dataset as DataRecord) : [];
+  const pointerText = svg ? pointerValue(scaleAt(svg.dataset as DataRecord, segments, ux), ux) : undefined;
   if (!target && !pointerText) return hideReadout();
   if (fillReadout(target, pointerText)) placeReadout(e.clientX, e.clientY);
 });

@@ -98,3 +98,15 @@ export function pointerValue(root: DataRecord, userX: number): string | undefine
   const shown = Number((v / factor).toPrecision(4)).toString().replace('-', '−');
   return `${root.xName ?? 'x'} = ${shown} ${root.xUnit ?? ''}`.trim();
 }
+
+/**
+ * The description of the horizontal scale under the pointer: a broken axis (the spectrum's
+ * segments, each `data-x-*` of its own) describes each segment; else the root's.
+ */
+export function scaleAt(root: DataRecord, segments: readonly DataRecord[], userX: number): DataRecord {
+  for (const seg of segments) {
+    const [r0, r1] = (seg.xRange ?? '').split(',').map(Number);
+    if (Number.isFinite(r0) && Number.isFinite(r1) && userX >= Math.min(r0!, r1!) && userX <= Math.max(r0!, r1!)) return { ...root, ...seg };
+  }
+  return root;
+}

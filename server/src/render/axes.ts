@@ -7,6 +7,7 @@ import type { Palette } from './palette';
 import { el, px, text } from './svgText';
 import { format } from 'd3-format';
 import { formatSI, type DisplayUnit } from './units';
+import { estimateTextWidth } from './frame';
 
 export interface PlotBox {
   left: number;
@@ -63,11 +64,21 @@ function displayScale(scale: Scale, unit: DisplayUnit): Scale {
   return scale.copy().domain(scale.domain().map((d) => d / unit.factor));
 }
 
+/** Every other tick, until neighbouring labels stand a gap apart (a narrow segment of a broken axis). */
+function apart(ticks: { t: number; label: string }[], shown: Scale): { t: number; label: string }[] {
+  let kept = ticks;
+  const clash = (k: typeof ticks): boolean => k.some((a, i) => i > 0 && shown(a.t) - shown(k[i - 1]!.t) < (estimateTextWidth(a.label) + estimateTextWidth(k[i - 1]!.label)) / 2 + 8);
+  while (kept.length > 1 && clash(kept)) kept = kept.filter((_, i) => i % 2 === 0);
+  return kept;
+}
+
 /** Horizontal axis along the bottom of `box`, with vertical grid lines. */
-export function bottomAxis(scale: Scale, unit: DisplayUnit, name: string, box: PlotBox, pal: Palette, pxPerTick = 90): string {
+export function bottomAxis(scale: Scale, unit: DisplayUnit, name: string, box: PlotBox, pal: Palette, pxPerTick = 90, clearEdges = 0): string {
   const shown = displayScale(scale, unit);
   const count = Math.max(2, Math.round((box.right - box.left) / pxPerTick));
-  const labelled = tickLabels(shown, count, unit);
+  // `clearEdges`: no tick this close to either end (segments of a broken axis would otherwise print two labels side by side).
+  let labelled = tickLabels(shown, count, unit).filter((k) => shown(k.t) >= box.left + clearEdges && shown(k.t) <= box.right - clearEdges);
+  if (clearEdges > 0) labelled = apart(labelled, shown);
   const ticks = labelled.map((k) => k.t);
   const fmt = (t: number): string => labelled.find((k) => k.t === t)!.label;
   const parts: string[] = [];
@@ -135,4 +146,20 @@ export function leftAxis(scale: Scale, unit: DisplayUnit | undefined, name: stri
     );
   }
   return el('g', { class: 'sl-axis sl-axis-y', 'font-size': 11 }, parts);
+}
+
+/** A second vertical scale along the right edge of `box` (no grid: the left axis draws it), its title reading downwards. */
+export function rightAxis(scale: Scale, name: string, box: PlotBox, pal: Palette, pxPerTick = 55): string {
+  const count = Math.max(2, Math.round((box.bottom - box.top) / pxPerTick));
+  const labelled = tickLabels(scale, count);
+  const parts: string[] = [el('path', { class: 'sl-axis-line', d: `M${px(box.right)},${px(box.top)}V${px(box.bottom)}`, stroke: pal.axis, fill: 'none' })];
+  const marks = labelled.map((k) => `M${px(box.right)},${px(scale(k.t))}h5`).join('');
+  if (marks) parts.push(el('path', { d: marks, stroke: pal.axis, fill: 'none' }));
+  for (const { t, label } of labelled) {
+    parts.push(el('text', { x: box.right + 8, y: scale(t) + 4, 'text-anchor': 'start', fill: pal.muted, 'data-tick': label }, text(label)));
+  }
+  const cy = (box.top + box.bottom) / 2;
+  const cx = box.right + 46;
+  parts.push(el('text', { class: 'sl-axis-title', x: cx, y: cy, transform: `rotate(90 ${px(cx)} ${px(cy)})`, 'text-anchor': 'middle', fill: pal.text }, text(name)));
+  return el('g', { class: 'sl-axis sl-axis-y2', 'font-size': 11 }, parts);
 }

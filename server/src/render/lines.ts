@@ -5,16 +5,17 @@
  * the cap's size follows the strength, so weak components do not look like strong ones. When
  * the field is low enough that hyperfine groups lie far apart compared with their Zeeman
  * structure, each group gets a panel of its own, on one common scale, with offsets from the
- * group's centre in Hz and in units of μ_B·B/h.
+ * group's centre in Hz and in units of μ_B·B/h. A line with a synthesized spectrum is drawn by
+ * spectrumLines.ts (its frame follows the curve, not the groups).
  */
 import { scaleLinear } from 'd3-scale';
-import { spectrumPath, spectrumTop } from './spectrumCurve';
-import { bottomAxis, leftAxis, topAxis, type PlotBox, type Scale } from './axes';
+import { renderSpectrumLines } from './spectrumLines';
+import { bottomAxis, leftAxis, topAxis, type PlotBox } from './axes';
 import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
 import { lineGroups, zeemanUnitHz, type LineGroup } from './lineGroups';
 import { legendRows, type LegendEntry } from './legend';
-import { markerPath, type MarkerShape } from './markers';
-import { paletteFor, POLARIZATION_DASH, POLARIZATION_NAME, type Palette } from './palette';
+import { faintNoteSvg, overlapNote, overlapPlaces, shownStrength, signed, stick, POLARIZATION_MARKER, type FaintNote, type StickContext } from './stick';
+import { paletteFor, POLARIZATION_DASH, POLARIZATION_NAME } from './palette';
 import { finiteExtent } from './sampled';
 import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
 import { trimNumber } from '../eval/quantityText';
@@ -28,66 +29,6 @@ const POLARIZATIONS: Polarization[] = ['pi', 'sigma+', 'sigma-'];
 export const VISIBLE_FLOOR = 1e-4;
 /** Height of the row that holds the note of components left out. */
 const NOTE_ROW = 14;
-/** A stick's stroke width: sticks closer than this stand on each other. */
-const STICK_WIDTH = 2.4;
-export const POLARIZATION_MARKER: Record<Polarization, MarkerShape> = { pi: 'circle', 'sigma+': 'up', 'sigma-': 'down' };
-
-function signed(v: number, text: string): string {
-  return v > 0 ? `+${text}` : text;
-}
-
-/** Cap radius from 2 (vanishing strength) to 6 (the strongest component), by the square root so area follows strength. */
-function capRadius(strength: number, strongest: number): number {
-  return 2 + 4 * Math.sqrt(Math.max(0, strength) / (strongest || 1));
-}
-
-interface StickContext {
-  idBase: string;
-  pal: Palette;
-  interactive: boolean;
-  y: Scale;
-  strongest: number;
-  unit: DisplayUnit;
-}
-
-/** The height a component is drawn at: what the spectrum counts when one is drawn, else its strength. */
-function shownStrength(c: LineComponent): number {
-  return c.observed ?? c.strength;
-}
-
-function stick(c: LineComponent, i: number, cx: number, ctx: StickContext): string {
-  const { pal, y } = ctx;
-  const base = y(0);
-  const h = shownStrength(c);
-  const top = y(h);
-  const colour = pal.polarization[c.polarization];
-  const name = POLARIZATION_NAME[c.polarization];
-  const where = signed(c.offsetHz, formatIn(c.offsetHz, ctx.unit));
-  const pathId = `${ctx.idBase}-k${i}`;
-  const children = [
-    titleEl(`${name} ${c.label}: Δf = ${where}, strength ${dataNum(c.strength)}${c.observed !== undefined ? `, seen ${dataNum(c.observed)} with the viewing factor` : ''}`),
-    el('path', { id: pathId, d: `M${px(cx)},${px(base)}V${px(top)}`, fill: 'none', 'stroke-linecap': 'butt' }),
-    el('path', { class: 'sl-cap', d: markerPath(POLARIZATION_MARKER[c.polarization], cx, top, capRadius(h, ctx.strongest)), fill: colour, stroke: pal.halo, 'stroke-width': 0.8, 'stroke-dasharray': 'none' }),
-  ];
-  if (ctx.interactive) children.push(el('use', { href: `#${pathId}`, class: 'sl-hit', 'stroke-width': 9, 'stroke-opacity': 0, 'stroke-dasharray': 'none' }));
-  return el(
-    'g',
-    {
-      class: `sl-component sl-pol-${c.polarization === 'pi' ? 'pi' : c.polarization === 'sigma+' ? 'plus' : 'minus'}`,
-      'data-kind': 'component',
-      'data-label': c.label,
-      'data-polarization': name,
-      'data-offset-hz': dataNum(c.offsetHz),
-      'data-strength': dataNum(c.strength),
-      'data-observed': c.observed !== undefined ? dataNum(c.observed) : undefined,
-      stroke: colour,
-      'stroke-width': STICK_WIDTH,
-      'stroke-dasharray': POLARIZATION_DASH[c.polarization],
-      tabindex: '0',
-    },
-    children,
-  );
-}
 
 export function renderLines(d: LinesViewData, theme: RenderTheme): string {
   const pal = paletteFor(theme);
@@ -115,14 +56,11 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
     marker: POLARIZATION_MARKER[p],
   }));
   legend.push({ label: 'marker size: strength', colour: pal.muted, marker: 'circle' });
-  if (d.spectrum) legend.push({ label: d.spectrum.caption, colour: pal.total, line: { width: 1.8 } });
-  const legendSvg = legendRows(legend, 64, 48, WIDTH - 80, pal);
-  // A spectrum is one curve on one axis, so the hyperfine groups are not split into panels.
-  const groups = d.unitHz === undefined && !d.spectrum ? lineGroups(comps, d.fieldT) : [];
   const counts = POLARIZATIONS.filter((p) => present.has(p)).map((p) => `${comps.filter((c) => c.polarization === p).length} ${POLARIZATION_NAME[p]}`);
-  // A blend of components can stand above every stick: the axis holds the curve too.
-  const top = Math.max(sExtent[1], d.spectrum ? spectrumTop(d.spectrum, sExtent[1]) : 0, 0);
-  const yDomain = [Math.min(0, sExtent[0]), top * 1.12 || 1];
+  if (d.spectrum) return renderSpectrumLines(d, d.spectrum, { pal, idBase, interactive: theme.kind === 'panel', comps, faintNote, legend, counts });
+  const legendSvg = legendRows(legend, 64, 48, WIDTH - 80, pal);
+  const groups = d.unitHz === undefined ? lineGroups(comps, d.fieldT) : [];
+  const yDomain = [Math.min(0, sExtent[0]), Math.max(sExtent[1], 0) * 1.12 || 1];
   const interactive = theme.kind === 'panel';
   const strongest = sExtent[1];
 
@@ -131,10 +69,8 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
   const unit = frequencyUnit(Math.max(Math.abs(fExtent[0]), Math.abs(fExtent[1])), d.unitHz);
   const span = fExtent[1] - fExtent[0];
   const pad = span > 0 ? span * 0.08 : Math.max(Math.abs(fExtent[0]) * 0.1, unit.factor);
-  // With a spectrum its window is the axis (sticks outside a chosen span are not drawn).
-  const window = d.spectrum ? finiteExtent(Array.from(d.spectrum.offsetHz)) : undefined;
-  const f0 = window ? window[0] : fExtent[0] - pad;
-  const f1 = window ? window[1] : fExtent[1] + pad;
+  const f0 = fExtent[0] - pad;
+  const f1 = fExtent[1] + pad;
 
   const box: PlotBox = { left: 64, right: WIDTH - 20, top: 48 + legendSvg.height + 16, bottom: HEIGHT - 56 };
   const x = scaleLinear().domain([f0, f1]).range([box.left, box.right]);
@@ -142,19 +78,15 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
 
   const body: string[] = [legendSvg.svg];
   body.push(bottomAxis(x, unit, 'Δf', box, pal));
-  body.push(leftAxis(y, undefined, comps.some((c) => c.observed !== undefined) ? 'strength × viewing factor' : 'relative strength', box, box.left, pal));
+  body.push(leftAxis(y, undefined, 'relative strength', box, box.left, pal));
   if (f0 < 0 && f1 > 0) {
     body.push(
       el('path', { class: 'sl-zero', d: `M${px(x(0))},${px(box.top)}V${px(box.bottom)}`, stroke: pal.muted, 'stroke-width': 1, 'stroke-dasharray': '2 4', fill: 'none' }),
     );
   }
   const ctx: StickContext = { idBase, pal, interactive, y, strongest, unit };
-  const drawn = window ? comps.filter((c) => c.offsetHz >= f0 && c.offsetHz <= f1) : comps;
+  const drawn = comps;
   body.push(el('g', { class: 'sl-components' }, drawn.map((c, i) => stick(c, i, x(c.offsetHz), ctx))));
-  if (d.spectrum) {
-    const path = spectrumPath(d.spectrum, x, y, strongest);
-    if (path) body.push(el('path', { class: 'sl-spectrum', 'data-kind': 'spectrum', d: path, fill: 'none', stroke: pal.total, 'stroke-width': 1.8, 'stroke-linejoin': 'round' }));
-  }
 
   // Sticks closer than their width draw as one: the figure says so, or the report's count would not match what is seen.
   const stickXs = drawn.map((c) => x(c.offsetHz));
@@ -189,35 +121,6 @@ export function renderLines(d: LinesViewData, theme: RenderTheme): string {
 }
 
 const PANEL_GAP = 24;
-
-/** How many separate places the sticks at these x stand in: a place holds the sticks less than a stick's width right of its first. */
-function overlapPlaces(xs: number[]): number {
-  const sorted = [...xs].sort((a, b) => a - b);
-  let places = 0;
-  let start = -Infinity;
-  for (const v of sorted) {
-    if (v - start >= STICK_WIDTH) {
-      places++;
-      start = v;
-    }
-  }
-  return places;
-}
-
-/** The sentence for sticks drawn on top of each other, when some are. */
-function overlapNote(count: number, places: number): string | undefined {
-  return places < count ? `${count} components drawn at ${places} ${places === 1 ? 'place' : 'places'}: sticks closer than their width overlap (each is listed in the report)` : undefined;
-}
-
-/** Components left out of the figure: how many, and the sentence that says so. */
-interface FaintNote {
-  count: number;
-  text: string;
-}
-
-function faintNoteSvg(note: FaintNote, x: number, y: number, pal: Palette): string {
-  return el('text', { class: 'sl-note sl-faint-note', 'data-left-out': note.count, x, y, 'font-size': 10, fill: pal.muted }, text(note.text));
-}
 
 /** One panel per group, all on the same scale, offsets from each group's centre. */
 function groupedPanels(

@@ -21,11 +21,6 @@ function stickUnits(c: LineSpectrumCurve, height: number): number {
   return peak > 0 ? height / peak : 0;
 }
 
-/** The curve's highest point in stick units (for the y axis). */
-export function spectrumTop(c: LineSpectrumCurve, height: number): number {
-  return highestSample(c) * stickUnits(c, height);
-}
-
 /** Path data for the curve in stick units (see LineSpectrumCurve.unitPeak); `height` is the strongest stick's. */
 export function spectrumPath(c: LineSpectrumCurve, x: Scale, y: Scale, height: number): string {
   const n = Math.min(c.offsetHz.length, c.intensity.length);

@@ -149,8 +149,23 @@ export interface LineSpectrumCurve {
    * components stands above them, as the spectrum counts it.
    */
   unitPeak?: number;
-  /** What the curve is, for the legend: "spectrum across the field, all light, Voigt FWHM 523 MHz". */
+  /** What the curve is, for the legend: "spectrum across the field, all light, Voigt FWHM ≈ 523.4 MHz". */
   caption: string;
+  /**
+   * Where the curve stands above `floor` × its peak (offsets, Hz, ascending and apart): the figure
+   * frames these, not the whole sample window. Found from the samples when absent.
+   */
+  stretches?: [number, number][];
+  /** That fraction of the peak (render/spectrumFrame.ts CURVE_FLOOR when absent). */
+  floor?: number;
+  /** The report's sample window and sample count, for the figure's note. */
+  windowHz?: [number, number];
+  points?: number;
+  /** Extra exact samples over the stretches when the report's step over the peaks; drawn with the others. */
+  fine?: { offsetHz: ArrayLike<number>; intensity: ArrayLike<number> };
+  /** The report's sample step, when `fine` is given, and the line's width (Voigt FWHM). */
+  reportStepHz?: number;
+  widthHz?: number;
 }
 
 /** `panel`: colours follow the editor theme through CSS variables; `export`: fixed light palette for files. */
