@@ -29,7 +29,7 @@ import { arrayValues, finiteExtent, slopeAt, valueAt } from './sampled';
 import { slopeRuns, trendOf, type Trend } from './slopeRuns';
 import { endAnchoredDashOffsets } from './dashPhase';
 import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
-import { fieldDisplayUnit, figureMinus, formatIn, formatSI, frequencyUnit } from './units';
+import { fieldDisplayUnit, fieldOnAxisText, figureMinus, formatIn, formatSI, frequencyUnit } from './units';
 import type { LevelCrossing, LevelCurve, LevelsViewData, RenderTheme } from './viewData';
 
 const LABEL_SPACING = 13;
@@ -148,7 +148,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   box.right = width - 12 - rightLane;
   const x = scaleLinear().domain([f0, f1]).range([box.left, box.right]);
   // A broken axis says so, and how far apart its bands are, in a note under the field axis.
-  const note = bands ? bandNote(bands) : undefined;
+  const note = bands ? bandNote(bands, d.curves.map((c) => c.energyHz), fieldOnAxisText(fields[0] ?? f0, fUnit)) : undefined;
   const noteLines = note !== undefined ? wrapNote(note, width - 32) : [];
   const height = top + plotHeight + 56 + noteLines.length * NOTE_LINE;
   const rows = layoutMarkRows(marks, box.left, box.right, x).map((r) => Math.min(r, rowCount - 1));
