@@ -20,7 +20,7 @@ import { bandAxes, bandNote, placeBands, type PlacedBand } from './levelBandAxis
 import { emptyDiagram, estimateTextWidth, svgDocument, wrapNote } from './frame';
 import { laneHeadText, laneHeadWhy, rightNamesHigh } from './levelLanes';
 import { laneHeightFor, placeLabels, truncateLabel, type LabelAnchor, type PlacedLabel } from './labelLayout';
-import { fieldMarksIn, layoutMarkRows, MARK_ROW } from './fieldMarks';
+import { fieldMarksIn, layoutMarkRows, markLabelAt, markRulePath, MARK_ROW } from './fieldMarks';
 import { axisOffset } from './offsetAxis';
 import { legendRows, type LegendEntry } from './legend';
 import { markerPath } from './markers';
@@ -325,10 +325,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
       'g',
       { class: 'sl-field-marks' },
       marks.map((m, i) => {
-        const mx = x(m.fieldT);
-        const half = estimateTextWidth(m.text) / 2;
-        const tx = Math.min(box.right - half, Math.max(box.left + half, mx));
-        const ty = box.top - 8 - rows[i] * MARK_ROW;
+        const { tx, ty } = markLabelAt(m, rows[i]!, box.left, box.right, x, box.top);
         const colour = m.chosen ? pal.marker : pal.muted;
         return el(
           'g',
@@ -337,7 +334,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
             titleEl(`${m.chosen ? 'Chosen field' : 'Named field'} ${formatIn(m.fieldT, fUnit)}${m.label ? ` (${m.label})` : ''}`),
             el('path', {
               class: 'sl-marker-rule',
-              d: `M${px(mx)},${px(ty + 3)}V${px(box.bottom)}`,
+              d: markRulePath(i, marks, rows, box.left, box.right, x, box.top, box.bottom),
               stroke: colour,
               'stroke-width': m.chosen ? 1.5 : 1,
               'stroke-dasharray': m.chosen ? undefined : '4 3',
