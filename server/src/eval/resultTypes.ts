@@ -17,6 +17,8 @@ export interface SourcedNumber {
   value: number;
   source: string;
   uncertainty?: number;
+  /** The unit the file wrote the value in (`MHz` in `B = -0.221 MHz`); reports show it back in that unit. */
+  written_unit?: string;
 }
 
 export interface GFactorResult {
