@@ -28,7 +28,7 @@ describe('the cautions appear where the README says', () => {
 
   it('field sources: coil heating, a field above the implant limit, a permanent magnet (coils-and-wires)', () => {
     const report = cli('eval', 'examples/coils-and-wires.sublevel').out;
-    expect(report).toMatch(/- Coil heating \(181 W at 13\.3 A\/mm², 12\.1 V\)/);
+    expect(report).toMatch(/- Coil heating \(181 W at 13\.26 A\/mm², 12\.07 V\)/);
     expect(report).toMatch(/- Field above the 5 G implant limit/);
     expect(report).toMatch(/- Permanent magnet \(μ0·M = 1\.2 T\)/);
     const json = JSON.parse(cli('eval', 'examples/coils-and-wires.sublevel', '--format', 'json').out) as { fieldSources: { cautions: string[] }[] };

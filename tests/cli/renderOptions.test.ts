@@ -21,6 +21,14 @@ describe('sublevel render options', () => {
     expect(r.out).toContain('outside the sweep: field trap');
   });
 
+  it('the residuals view takes the first fit with residuals by default, as its help says', () => {
+    // fit-rubidium: `bias` (a one-resonance calibration, no residuals) comes before `constants`.
+    expect(cli('render', '--help').out).toContain('--fit NAME');
+    expect(cli('render', '--help').out).toContain('default: the first fit with residuals (a one-resonance calibration has none)');
+    const svg = cli('render', 'examples/fit-rubidium.sublevel', '--view', 'residuals').out;
+    expect(svg).toContain('Fit constants: data, model and residuals');
+  });
+
   it('the lines figure states its field in the unit the file wrote', () => {
     const svg = cli('render', RB, '--view', 'lines').out;
     expect(svg).toContain('at field trap, 3.23 G');

@@ -26,6 +26,19 @@ describe('beam results say the same thing everywhere', () => {
     expect(analyze(SETUP).result!.diagnostics.find((d) => d.code === 'beam-unresolved')!.message).toContain('(J=1, m_J=+1 and J=1, m_J=0; J=1, m_J=0 and J=1, m_J=-1)');
   });
 
+  it('the strong-magnet caution quotes the magnet field as the magnets table does, in the unit the file wrote', () => {
+    const lithium = readFileSync('examples/lithium-beam.sublevel', 'utf8');
+    for (const [written, shown] of [['0.45 T', '0.45 T'], ['4500 G', '4500 G'], ['450 mT', '450 mT']] as const) {
+      const a = analyze(lithium.replace('field    = 0.45 T', `field    = ${written}`));
+      expect(a.result!.beams[0]!.cautions[0]).toMatch(new RegExp(`^Strong magnet \\(${shown} at the beam\\)`));
+      expect(textReport('x.sublevel', a.result!).join('\n')).toContain(`selector  ${shown}`);
+    }
+    // A magnet built from sources: its computed field, as the table prints it (0.306934 T, not a second rounding 0.3069 T).
+    const wires = analyze(readFileSync('examples/two-wire-magnet.sublevel', 'utf8')).result!;
+    expect(wires.beams[0]!.cautions[0]).toMatch(/^Strong magnet \(0\.306934 T at the beam\)/);
+    expect(textReport('x.sublevel', wires).join('\n')).toContain('selector  0.306934 T');
+  });
+
   it('an unpopulated sublevel has no peak (null), never NaN', () => {
     const a = analyze(SETUP.replace('gradient = 0.5 T/m', 'gradient = 100 T/m') + '  populations = 1 +1 1\n');
     const subs = a.result!.beams[0]!.sublevels;

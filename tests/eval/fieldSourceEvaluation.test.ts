@@ -90,9 +90,10 @@ describe('the winding of a coil', () => {
     expect(r.winding!.power_W).toBeCloseTo(181.03448, 4);
     expect(r.winding!.voltage_V).toBeCloseTo(12.068966, 5);
     expect(r.winding!.cooling).toBe('water');
-    expect(r.cautions[0]).toMatch(/^Coil heating \(181 W at 13.3 A\/mm², 12.1 V\): .*water cooling/);
+    // The caution and the finding quote the winding line's own numbers, digit for digit.
+    expect(r.cautions[0]).toMatch(/^Coil heating \(181 W at 13\.26 A\/mm², 12\.07 V\): .*water cooling/);
     expect(problems.map((p) => [p.code, p.severity])).toEqual([['coil-needs-cooling', 'info']]);
-    expect(problems[0]!.message).toBe("coil 'quad' carries 13.3 A/mm² in 1.2 mm copper, 181 W: more than air-cooled windings carry continuously (about 3 A/mm², common practice); plan water cooling or a thicker conductor.");
+    expect(problems[0]!.message).toBe("coil 'quad' carries 13.26 A/mm² in 1.2 mm copper, 181 W: more than air-cooled windings carry continuously (about 3 A/mm², common practice); plan water cooling or a thicker conductor.");
     expect(problems[0]!.range).toBe(RANGE);
     expect(sourceLines(r)[2]).toBe('winding: 52.78 m of 1.2 mm copper, 0.8046 Ω at 20 °C; 13.26 A/mm², 181 W, 12.07 V (needs water cooling)');
   });
@@ -109,6 +110,28 @@ describe('the winding of a coil', () => {
     expect(r.winding!.cooling).toBe('air');
     expect(problems).toEqual([]);
     expect(evaluateFieldSource({ ...input, conductorM: undefined }, problems).winding).toBeUndefined();
+  });
+});
+
+describe('the implant caution quotes the centre field as the report line prints it', () => {
+  // Two 40 A wires 4 mm apart, 20 cm long: |B| midway = 2 μ0 I / 2π d · L/√(L² + d²) = 79.984 G (Biot–Savart, finite segment).
+  const wires = (unit: string | undefined): SourceEvalInput => ({
+    name: 'rail',
+    kind: 'wire',
+    nameRange: RANGE,
+    parts: [
+      { kind: 'wire', point: [0, 0.002, 0], direction: [1, 0, 0], currentA: 40, lengthM: 0.2 },
+      { kind: 'wire', point: [0, -0.002, 0], direction: [1, 0, 0], currentA: -40, lengthM: 0.2 },
+    ],
+    ...(unit ? { fieldUnit: unit } : {}),
+  });
+  it.each([
+    [undefined, '79.984 G'],
+    ['mT', '7.9984 mT'],
+  ])('fields written in %s: %s in both', (unit, text) => {
+    const r = evaluateFieldSource(wires(unit), []);
+    expect(sourceLines(r)[0]).toContain(`|B| = ${text},`);
+    expect(r.cautions[0]).toContain(`(${text} at the centre)`);
   });
 });
 

@@ -23,7 +23,7 @@ describe('hover on a field source', () => {
     expect(h).toContain('at the centre (0, 0, 0) m: |B| = 0 G, B = (0, 0, 0) G');
     expect(h).toMatch(/axial gradient ∂B_z\/∂z = -979\.2\d* mT\/m = -97\.92\d* G\/cm/);
     expect(h).toContain('winding: 52.78 m of 1.2 mm copper, 0.8046 Ω at 20 °C; 13.26 A/mm², 181 W, 12.07 V (needs water cooling)');
-    expect(h).toContain("⚠ Coil heating (181 W at 13.3 A/mm², 12.1 V): follow your lab's safety rules");
+    expect(h).toContain("⚠ Coil heating (181 W at 13.26 A/mm², 12.07 V): follow your lab's safety rules");
   });
 
   it('the block word shows the same section after the word\'s own description', () => {

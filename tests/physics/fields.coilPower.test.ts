@@ -48,10 +48,10 @@ describe('cautions of field sources', () => {
   ])('a winding at %s A/m² is %s-cooled and says so', (j, cooling, words) => {
     const w = winding(j);
     expect(w.cooling).toBe(cooling);
-    const c = sourceCautions({ kind: 'coil', winding: w });
+    const c = sourceCautions({ kind: 'coil', winding: { ...w, conductorM: 1e-3 } });
     expect(c).toHaveLength(1);
     expect(c[0]).toMatch(/^Coil heating \(/);
-    expect(c[0]).toContain(`${Number((j / 1e6).toPrecision(3))} A/mm²`);
+    expect(c[0]).toContain(`${Number((j / 1e6).toPrecision(4))} A/mm²`);
     expect(c[0]).toMatch(words);
     expect(c[0]).toContain('safety officer');
   });
@@ -59,7 +59,7 @@ describe('cautions of field sources', () => {
     expect(sourceCautions({ kind: 'slab', magnetisationT: 1.2 })[0]).toMatch(/^Permanent magnet \(μ0·M = 1.2 T\): .*pinch/);
     expect(sourceCautions({ kind: 'coil', fieldT: 1e-4 })).toEqual([]);
     expect(sourceCautions({ kind: 'solenoid', fieldT: 8.4e-4 })[0]).toBe("Field above the 5 G implant limit (8.4 G at the centre): keep pacemakers and other implants away while it is on; follow your lab's rules and ask its safety officer.");
-    expect(sourceCautions({ kind: 'solenoid', fieldT: 0.2 })[0]).toContain('(0.2 T at the centre): keep pacemakers and other implants, steel tools, watches and cards away');
+    expect(sourceCautions({ kind: 'solenoid', fieldT: 0.2 })[0]).toContain('(200 mT at the centre): keep pacemakers and other implants, steel tools, watches and cards away');
   });
 });
 

@@ -55,11 +55,20 @@ describe('Rb87 ground level to 50 µT with a 20 µT field: two bands', () => {
     expect(titleOf(bands[0]!)).toBe('F=2: E/h − 2.563 GHz (kHz)');
     expect(titleOf(bands[1]!)).toMatch(/^F=1: E\/h \+ 4\.27\d+ GHz \(kHz\)$/);
     const note = textOf(byClass(svg, 'sl-band-note')[0]!);
-    expect(note).toBe('Energy axis broken into 2 bands, each on its own scale: F=2 lies 6.835 GHz above F=1 (centre to centre).');
+    expect(note).toBe('Energy axis broken into 2 bands, each on its own scale: F=2 lies 6.835 GHz above F=1 (centres of gravity at 0 µT).');
     expect(textOf(svg.children.find((c) => c.name === 'desc')!)).toContain('Energy axis broken into 2 bands');
     // Slanted marks where the axis is broken: on the lower end of the top band and the upper end of the other.
     expect(byClass(bands[0]!, 'sl-axis-break')).toHaveLength(1);
     expect(byClass(bands[1]!, 'sl-axis-break')).toHaveLength(1);
+  });
+
+  it('gives the distance of the bands as the report’s zero-field interval, whatever the field range', () => {
+    // Drawn to 240 G the middles of the two fans are 6.847 GHz apart; the levels' centres of gravity at 0 G are
+    // the report's interval F=1 → F=2, 6.83468 GHz.
+    const wide = drawn('species Rb87\n  level ground: 5s 2S1/2\nfield probe = 120 G\n', 0.024);
+    const interval = wide.analysis.result!.levels[0]!.hyperfine!.intervals[0]!.interval_Hz;
+    expect(interval / 1e9).toBeCloseTo(6.834683, 6);
+    expect(textOf(byClass(wide.svg, 'sl-band-note')[0]!)).toBe('Energy axis broken into 2 bands, each on its own scale: F=2 lies 6.835 GHz above F=1 (centres of gravity at 0 G).');
   });
 
   it('puts every dot at 20 µT where its band’s tick labels place the report’s energy', () => {

@@ -7,6 +7,10 @@
 import { describe, expect, it } from 'vitest';
 import { renderPattern, type PatternViewData } from '../../server/src/render';
 import { all, byClass, parseSvg, textOf } from './svgTree';
+import { readFileSync } from 'node:fs';
+import { estimateTextWidth } from '../../server/src/render/frame';
+import { analyze } from '../../server/src/eval/analyze';
+import { diagramFor } from '../../server/src/views/diagram';
 
 const gaussian = (x: number, mu: number, fwhm: number, h: number): number => h * Math.exp(-4 * Math.LN2 * ((x - mu) / fwhm) ** 2);
 
@@ -46,5 +50,22 @@ describe('pattern labels at a tall narrow peak beside broad low ones', () => {
     const height = Number(all(svg, (n) => n.name === 'svg')[0]!.attrs.viewBox!.split(' ')[3]);
     const rows = byClass(svg, 'sl-peak-table')[0]!.children;
     expect(Number(rows.at(-1)!.attrs.y)).toBeLessThanOrEqual(height - 4);
+  });
+});
+
+describe('pattern labels of two equal peaks side by side (examples/lithium-beam.sublevel)', () => {
+  it('both keep their positions (the first reaches left from its number), and the two labels do not overlap', () => {
+    const d = diagramFor(analyze(readFileSync('examples/lithium-beam.sublevel', 'utf8')), { view: 'pattern', theme: 'export' });
+    if (!d.ok) throw new Error(d.message);
+    const labels = byClass(parseSvg(d.svg), 'sl-peak-label');
+    expect(labels.map(textOf)).toEqual(['1: −0.8767 mm', '2: 0.8767 mm']);
+    const extent = (n: (typeof labels)[number]): [number, number] => {
+      const w = estimateTextWidth(textOf(n), 10);
+      const x0 = Number(n.attrs.x);
+      const anchor = n.attrs['text-anchor'];
+      return anchor === 'end' ? [x0 - w, x0] : anchor === 'start' ? [x0, x0 + w] : [x0 - w / 2, x0 + w / 2];
+    };
+    const [a, b] = labels.map(extent) as [[number, number], [number, number]];
+    expect(a[1]).toBeLessThan(b[0]);
   });
 });

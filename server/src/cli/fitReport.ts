@@ -18,7 +18,8 @@ export function fitReportLines(file: string, fits: readonly FitResult[]): string
       const p = f.points[0];
       if (p) out.push(`  measured ${fittedText(p.measured, p.uncertainty, 'Hz', p.written_unit ?? f.measured_written_unit)}`);
       if (!f.roots?.length) out.push('  no field in the range is resonant at this frequency');
-      for (const r of f.roots ?? []) out.push(`  field = ${fittedText(r.field_T, r.uncertainty_T, 'T', f.parameters[0]?.written_unit)}   (df/dB = ${sensitivityText(r.df_dB_Hz_per_T, 5)})`);
+      // The first (lowest) root is the fit's value; any others are resonant too and said so.
+      (f.roots ?? []).forEach((r, k) => out.push(`  ${k === 0 ? 'field =' : 'also resonant at'} ${fittedText(r.field_T, r.uncertainty_T, 'T', f.parameters[0]?.written_unit)}   (df/dB = ${sensitivityText(r.df_dB_Hz_per_T, 5)})`));
       continue;
     }
     if (f.status === 'failed') continue;

@@ -31,7 +31,7 @@ export const renderSpec: CommandSpec = {
     beam: { value: 'NAME', help: 'the beam (pattern view), when the file has more than one' },
     line: { value: 'NAME', help: 'the line (lines view); default: the first one' },
     resonance: { value: 'NAME', help: 'the resonance (resonance view); default: the first one' },
-    fit: { value: 'NAME', help: 'the fit (residuals view); default: the first one' },
+    fit: { value: 'NAME', help: 'the fit (residuals view); default: the first fit with residuals (a one-resonance calibration has none)' },
     source: { value: 'NAMES', help: 'the field sources to draw (fieldmap view), comma-separated; default: all' },
     scale: { value: 'SCALE', choices: ['auto', 'linear', 'log'], help: 'the |B| axis of the fieldmap view: log when the field spans orders of magnitude (auto, the default), or as asked' },
     slower: { value: 'NAME', help: 'the slower (slower view); default: the first one' },

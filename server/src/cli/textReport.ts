@@ -6,7 +6,7 @@ import { curvatureText, fieldText, frequencyText, gradientText, lengthText, perc
 import { beamPositionNoise, DIP_NOISE, SENSITIVITY_NOISE } from '../eval/noiseFloors';
 import { polarizationSymbol } from '../eval/polarizationName';
 import { lonePeak, MERGED_PEAK_TEXT, nothingToResolveText } from '../eval/lonePeak';
-import { fieldInUnit, inWrittenUnit, workingFieldUnit } from '../eval/writtenUnit';
+import { fieldInUnit, inWrittenUnit, sourcedFrequencyText, workingFieldUnit } from '../eval/writtenUnit';
 import type {
   BeamResult,
   DiagnosticResult,
@@ -88,9 +88,9 @@ function levelReport(l: LevelResult, atFieldText: AtFieldText): string[] {
   out.push(`    g_J used = ${withUncertainty(g.used, g.used_unc, (v) => trimNumber(v, 9))}  [${g.used_source}]`);
   if (l.hyperfine) {
     const h = l.hyperfine;
-    const consts = [`A = ${withUncertainty(h.A_Hz.value, h.A_Hz.uncertainty, (v) => frequencyText(v, 10))} [${h.A_Hz.source}]`];
-    if (h.B_Hz) consts.push(`B = ${withUncertainty(h.B_Hz.value, h.B_Hz.uncertainty, (v) => frequencyText(v, 8))} [${h.B_Hz.source}]`);
-    if (h.C_Hz) consts.push(`C = ${withUncertainty(h.C_Hz.value, h.C_Hz.uncertainty, (v) => frequencyText(v, 6))} [${h.C_Hz.source}]`);
+    const consts = [`A = ${sourcedFrequencyText(h.A_Hz, 10)} [${h.A_Hz.source}]`];
+    if (h.B_Hz) consts.push(`B = ${sourcedFrequencyText(h.B_Hz, 8)} [${h.B_Hz.source}]`);
+    if (h.C_Hz) consts.push(`C = ${sourcedFrequencyText(h.C_Hz, 6)} [${h.C_Hz.source}]`);
     for (const c of consts) out.push(`    ${c}`);
     out.push(
       ...table(
@@ -130,7 +130,7 @@ function termHyperfineLines(h: NonNullable<TermResult['hyperfine']>): string[] {
 }
 
 function termReport(t: TermResult, atFieldText: AtFieldText): string[] {
-  const out = ['', `  term ${t.level}: ${t.designation.configuration ? t.designation.configuration + ' ' : ''}${t.designation.unicode}   S = ${fraction(t.S)}, L = ${t.L}, ${t.zeta_Hz ? `fine structure ζ = ${frequencyText(t.zeta_Hz.value, 8)} [${t.zeta_Hz.source}]` : 'fine structure from the J-level energies'}`];
+  const out = ['', `  term ${t.level}: ${t.designation.configuration ? t.designation.configuration + ' ' : ''}${t.designation.unicode}   S = ${fraction(t.S)}, L = ${t.L}, ${t.zeta_Hz ? `fine structure ζ = ${sourcedFrequencyText(t.zeta_Hz, 8)} [${t.zeta_Hz.source}]` : 'fine structure from the J-level energies'}`];
   out.push(...table(['J', 'zero-field shift', 'g_J'], t.fine_levels.map((f) => [f.J_text, withUncertainty(f.shift_Hz, f.shift_Hz_unc, (v) => frequencyText(v, 10)), trimNumber(f.g_J, 8)])).map((x) => '      ' + x));
   if (t.hyperfine) out.push(...termHyperfineLines(t.hyperfine));
   if (t.diamagnetic) out.push(`    diamagnetic term: ⟨r²⟩ = ${trimNumber(t.diamagnetic.r2_m2 / BOHR_RADIUS ** 2, 6)} a0², e²⟨r²⟩/8mₑh = ${frequencyText(t.diamagnetic.Hz_per_T2, 6)}/T² × ⟨sin²θ⟩ of m_L`);

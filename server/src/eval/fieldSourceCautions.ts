@@ -5,19 +5,23 @@
  */
 import { MAGNET_CAUTION_T } from '../physics/beam/cautions';
 import { AIR_COOLED_LIMIT_A_PER_M2, WATER_COOLED_LIMIT_A_PER_M2, type WindingPower } from '../physics/fields/coilPower';
-import { fieldText } from './quantityText';
+import { centreFieldText } from './fieldSourceText';
+import { trimNumber } from './quantityText';
+import { windingNumbersText } from './windingText';
 
 /** From here up steel tools and loose iron are pulled in (common practice, rough). */
 const TOOLS_CAUTION_T = 0.05;
 
 export interface SourceCautionInput {
   kind: 'coil' | 'solenoid' | 'wire' | 'slab';
-  /** The winding's numbers, when the file gives a `conductor`. */
-  winding?: WindingPower;
+  /** The winding's numbers and the conductor's diameter (m), when the file gives a `conductor`. */
+  winding?: WindingPower & { conductorM: number };
   /** Largest |B| the source makes at its centre (or, for a wire, near it), T. */
   fieldT?: number;
   /** |μ0·M| of a magnetised block, T. */
   magnetisationT?: number;
+  /** The unit the file writes fields in (the report line's unit, which the caution repeats). */
+  fieldUnit?: string;
 }
 
 const LAB_RULES = "follow your lab's rules and ask its safety officer";
@@ -30,8 +34,8 @@ export function sourceCautions(s: SourceCautionInput): string[] {
   const out: string[] = [];
   const w = s.winding;
   if (w) {
-    const jText = `${trim(w.currentDensityAPerM2 / 1e6)} A/mm²`;
-    const heat = `Coil heating (${trim(w.powerW)} W at ${jText}, ${trim(w.voltageV)} V)`;
+    const n = windingNumbersText(w);
+    const heat = `Coil heating (${n.power} at ${n.currentDensity}, ${n.voltage})`;
     if (w.cooling === 'air') {
       out.push(`${heat}: windings dissipate I²R and warm up, and warm copper has more resistance (+0.39 %/K); check the temperature under load; ${LAB_RULES}.`);
     } else if (w.cooling === 'water') {
@@ -41,11 +45,11 @@ export function sourceCautions(s: SourceCautionInput): string[] {
     }
   }
   if (s.kind === 'slab' && s.magnetisationT !== undefined && s.magnetisationT > 0) {
-    out.push(`Permanent magnet (μ0·M = ${trim(s.magnetisationT)} T): magnets pull together and onto steel hard enough to pinch fingers and shatter; keep them away from implants, cards and instruments; ${LAB_RULES}.`);
+    out.push(`Permanent magnet (μ0·M = ${trimNumber(s.magnetisationT, 4)} T): magnets pull together and onto steel hard enough to pinch fingers and shatter; keep them away from implants, cards and instruments; ${LAB_RULES}.`);
   } else if (s.fieldT !== undefined && Math.abs(s.fieldT) >= MAGNET_CAUTION_T) {
     const b = Math.abs(s.fieldT);
     const away = b >= TOOLS_CAUTION_T ? 'pacemakers and other implants, steel tools, watches and cards' : 'pacemakers and other implants';
-    out.push(`Field above the 5 G implant limit (${fieldText(b, 3)} at the centre): keep ${away} away while it is on; ${LAB_RULES}.`);
+    out.push(`Field above the 5 G implant limit (${centreFieldText(b, s.fieldUnit)} at the centre): keep ${away} away while it is on; ${LAB_RULES}.`);
   }
   return out;
 }

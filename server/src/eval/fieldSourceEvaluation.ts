@@ -11,6 +11,7 @@ import type { FieldSourceSpec, Vec3 } from '../physics/fields/types';
 import { axialDerivative, cleanField } from './cleanField';
 import type { FieldSourcePartResult, FieldSourceResult, WindingResult } from './fieldSourceResultTypes';
 import { EVAL_RULES } from './evalCodes';
+import { windingNumbersText } from './windingText';
 import type { FieldSourceModel } from '../model/types';
 
 /** The model's source block as the evaluation reads it. */
@@ -78,9 +79,10 @@ export function evaluateFieldSource(s: SourceEvalInput, problems: Problem[]): Fi
   const slab = s.parts.find((p) => p.kind === 'slab');
   out.cautions = sourceCautions({
     kind: s.kind,
-    ...(w ? { winding: w } : {}),
+    ...(w ? { winding: { ...w, conductorM: s.conductorM! } } : {}),
     ...(out.field_abs_T !== undefined ? { fieldT: out.field_abs_T } : {}),
     ...(slab?.kind === 'slab' ? { magnetisationT: Math.hypot(...slab.magnetisationT) } : {}),
+    ...(s.fieldUnit ? { fieldUnit: s.fieldUnit } : {}),
   });
   return out;
 }
@@ -124,14 +126,11 @@ function windingResult(w: WindingPower, conductorM: number): WindingResult {
   };
 }
 
-function trim(v: number, digits = 3): string {
-  return String(Number(v.toPrecision(digits)));
-}
-
 function windingProblems(s: SourceEvalInput, w: WindingPower, problems: Problem[]): void {
   if (w.cooling === 'air') return;
   const range = s.conductorRange ?? s.nameRange;
-  const numbers = `${trim(w.currentDensityAPerM2 / 1e6)} A/mm² in ${trim(s.conductorM! * 1e3)} mm copper, ${trim(w.powerW)} W`;
+  const n = windingNumbersText({ ...w, conductorM: s.conductorM! });
+  const numbers = `${n.currentDensity} in ${n.conductor} copper, ${n.power}`;
   if (w.cooling === 'water') {
     const code = 'coil-needs-cooling';
     problems.push({ code, severity: EVAL_RULES[code].severity, range, message: `${s.kind} '${s.name}' carries ${numbers}: more than air-cooled windings carry continuously (about 3 A/mm², common practice); plan water cooling or a thicker conductor.` });

@@ -7,6 +7,7 @@ import type { FieldSourceResult } from './fieldSourceResultTypes';
 import { lengthUnitFor, type LengthUnit } from './lengthUnit';
 import { GAUSS_TESLA_SWITCH_T, gradientText, lengthText, MISSING, trimNumber } from './quantityText';
 import { isGaussUnit } from './writtenUnit';
+import { windingNumbersText } from './windingText';
 
 const AXES = ['x', 'y', 'z'] as const;
 
@@ -19,6 +20,17 @@ export function fieldVectorUnit(absT: number, written: string | undefined): { fa
   if (gauss) return absT !== 0 && absT < 1e-4 ? { factor: 1e-7, symbol: 'mG' } : { factor: 1e-4, symbol: 'G' };
   if (absT === 0 || absT >= 1) return { factor: 1, symbol: 'T' };
   return absT >= 1e-3 ? { factor: 1e-3, symbol: 'mT' } : { factor: 1e-6, symbol: 'µT' };
+}
+
+/** One component or |B| at a source's centre, in the unit fieldVectorUnit chose. */
+function centreFieldNumber(t: number, u: { factor: number }): string {
+  return trimNumber(t / u.factor, 5);
+}
+
+/** |B| at a source's centre as its report line prints it (the caution quotes the same text). */
+export function centreFieldText(absT: number, written: string | undefined): string {
+  const u = fieldVectorUnit(absT, written);
+  return `${centreFieldNumber(absT, u)} ${u.symbol}`;
 }
 
 /** A gradient in T/m and in the lab's G/cm. */
@@ -71,7 +83,7 @@ export function sourceLines(r: FieldSourceResult): string[] {
   if (r.centre_m && r.field_T && r.field_abs_T !== undefined) {
     const where = r.kind === 'wire' ? 'midway between the wires' : r.kind === 'slab' ? 'inside the block, at its centre' : 'at the centre';
     const u = fieldVectorUnit(r.field_abs_T, r.field_unit);
-    const num = (t: number): string => trimNumber(t / u.factor, 5);
+    const num = (t: number): string => centreFieldNumber(t, u);
     out.push(`${where} ${pointText(r.centre_m)}: |B| = ${num(r.field_abs_T)} ${u.symbol}, B = ${vectorText(r.field_T, num, u.symbol)}`);
   } else if (r.kind === 'wire') {
     out.push('a lone wire has no centre: B = μ0 I / 2π r at distance r (sublevel field gives it at any point)');
@@ -86,9 +98,10 @@ export function sourceLines(r: FieldSourceResult): string[] {
   const w = r.winding;
   if (w) {
     const cooling = w.cooling === 'air' ? 'air cooling can do' : w.cooling === 'water' ? 'needs water cooling' : 'beyond continuous operation';
+    const n = windingNumbersText({ currentDensityAPerM2: w.current_density_A_per_m2, powerW: w.power_W, voltageV: w.voltage_V, conductorM: w.conductor_m });
     out.push(
-      `winding: ${lengthText(w.wire_length_m)} of ${lengthText(w.conductor_m)} copper, ${trimNumber(w.resistance_ohm, 4)} Ω at ${trimNumber(w.temperature_C, 3)} °C; ` +
-        `${trimNumber(w.current_density_A_per_m2 / 1e6, 4)} A/mm², ${trimNumber(w.power_W, 4)} W, ${trimNumber(w.voltage_V, 4)} V (${cooling})`,
+      `winding: ${lengthText(w.wire_length_m)} of ${n.conductor} copper, ${trimNumber(w.resistance_ohm, 4)} Ω at ${trimNumber(w.temperature_C, 3)} °C; ` +
+        `${n.currentDensity}, ${n.power}, ${n.voltage} (${cooling})`,
     );
   }
   return out;

@@ -22,6 +22,8 @@ import {
 } from '../physics/fit';
 import { beamInputs } from './beamInput';
 import { EVAL_RULES } from './evalCodes';
+import { fittedText } from './fitText';
+import { listWords } from '../physics/listWords';
 import type { FitParameterResult, FitPointResult, FitResult } from './fitResultTypes';
 import type { GJLookup } from './gJLookup';
 import { hyperfineSpec } from './levelSpec';
@@ -166,7 +168,9 @@ function calibrate(f: FitRequestModel, spec: HyperfineLevelSpec, row: SpectralRo
     report('fit-no-root', 'the pair is not resonant at this frequency anywhere in the field range (widen it with range = <from>, <to>)', row.datum.range);
   }
   if (cal.roots.length > 1) {
-    report('fit-several-roots', `${cal.roots.length} fields in the range are resonant at this frequency; all are listed, the lowest is shown as the field`, f.nameRange);
+    // The fields themselves, as `sublevel fit` prints them: the report and the editor show this finding where no root list is.
+    const fields = cal.roots.map((r) => fittedText(r.fieldT, r.uncertaintyT, 'T', f.rangeT.toUnit));
+    report('fit-several-roots', `${cal.roots.length} fields in the range are resonant at this frequency, ${listWords(fields, 'and')}; the fit's value is the lowest, ${fields[0]}`, f.nameRange);
   }
   return result;
 }

@@ -122,7 +122,7 @@ function hyperfineOf(level: LevelModel, gJ: number, twoJ: number, twoI: number):
 }
 
 function sourced(v: Valued<number>): SourcedNumber {
-  return { value: v.value, source: v.source, ...(v.uncertainty !== undefined ? { uncertainty: v.uncertainty } : {}) };
+  return { value: v.value, source: v.source, ...(v.uncertainty !== undefined ? { uncertainty: v.uncertainty } : {}), ...(v.unit !== undefined ? { written_unit: v.unit } : {}) };
 }
 
 /**

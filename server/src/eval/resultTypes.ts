@@ -17,6 +17,8 @@ export interface SourcedNumber {
   value: number;
   source: string;
   uncertainty?: number;
+  /** The unit the file wrote the value in (`MHz` in `B = -0.221 MHz`); reports show it back in that unit. */
+  written_unit?: string;
 }
 
 export interface GFactorResult {
@@ -377,7 +379,7 @@ export interface LineResult {
    */
   strengths_reduced_in?: 'L';
   /** Components at each working field (at zero field when the file has none); `g_eff_centroid` from the σ± centroids (lines with a whole term). */
-  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; g_eff_centroid?: number; components: LineComponentResult[]; spectrum?: SpectrumResult }[];
+  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; field_T_unc?: number; g_eff_centroid?: number; components: LineComponentResult[]; spectrum?: SpectrumResult }[];
 }
 
 export interface MagneticTransitionResult {
@@ -404,7 +406,7 @@ export interface ResonanceResult {
   range_T: [number, number];
   /** The units the file wrote the range in. */
   range_units?: [string, string];
-  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; transitions: MagneticTransitionResult[] }[];
+  at_fields: { source: { kind: 'field' | 'magnet'; name: string }; field_T: number; field_T_unc?: number; transitions: MagneticTransitionResult[] }[];
   /** Fields where df/dB = 0 for the chosen pair. */
   field_insensitive?: { field_T: number; field_T_unc?: number; frequency_Hz: number; frequency_Hz_unc?: number; d2f_dB2_Hz_per_T2: number }[];
   /** Fields where a transition (of the chosen pair, if any) is at the given frequency. */

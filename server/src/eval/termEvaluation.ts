@@ -76,7 +76,7 @@ export function evaluateTerm(level: LevelModel, settings: SettingsModel, fields:
     designation: { text: level.designationText, unicode: formatTermSymbol(term, 'unicode'), configuration: configurationText(level.configuration) },
     S: term.twoS / 2,
     L: term.L,
-    ...(zetaUsed && level.zeta ? { zeta_Hz: { value: level.zeta.value, source: level.zeta.source } } : {}),
+    ...(zetaUsed && level.zeta ? { zeta_Hz: { value: level.zeta.value, source: level.zeta.source, ...(level.zeta.unit !== undefined ? { written_unit: level.zeta.unit } : {}) } } : {}),
     g_s: spec.gS,
     g_L: spec.gL,
     // A J level missing from E_J (already an error) is left out rather than given no number.

@@ -4,7 +4,7 @@
  * stays in the same unit family with a fitting prefix.
  */
 import { convertSI, type Dimension } from '../format/units';
-import { fieldText, MISSING, prefixedText, trimNumber } from './quantityText';
+import { fieldText, frequencyText, MISSING, prefixedText, trimNumber, withUncertainty } from './quantityText';
 import { displayUnit } from './unitSpelling';
 
 export { displayUnit } from './unitSpelling';
@@ -15,6 +15,14 @@ export function inWrittenUnit(si: number | null | undefined, dimension: Dimensio
   const value = convertSI(si, dimension, unit);
   if (value === undefined || !Number.isFinite(value)) return undefined;
   return `${trimNumber(value, digits)} ${displayUnit(unit)}`;
+}
+
+/**
+ * A constant with its uncertainty, in the unit the file wrote it in when it did (`B = -0.221 MHz`,
+ * not `-221 kHz`), else with the prefix that suits it; `digits` significant digits without an uncertainty.
+ */
+export function sourcedFrequencyText(c: { value: number; uncertainty?: number; written_unit?: string }, digits: number): string {
+  return withUncertainty(c.value, c.uncertainty, (v) => inWrittenUnit(v, 'frequency-like', c.written_unit, digits) ?? frequencyText(v, digits));
 }
 
 /** True for the gauss family (G, mG, kG, gauss); the tesla family otherwise. */

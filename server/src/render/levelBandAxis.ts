@@ -110,12 +110,21 @@ export function bandTitle(p: PlacedBand): string {
   return `${p.name}: ${p.axis.name} (${p.axis.unit.symbol})`;
 }
 
-/** How far apart neighbouring bands are, centre to centre, from the top: "F=2 lies 6.835 GHz above F=1". */
-export function bandNote(placed: readonly PlacedBand[]): string {
-  const centre = (p: PlacedBand): number => (p.band.lo + p.band.hi) / 2;
+/**
+ * How far apart neighbouring bands are, from the top: the distance between the centres of gravity of
+ * their sublevels at the first field drawn ("F=2 lies 6.835 GHz above F=1 at 0 G"). At zero field that
+ * is the interval the report prints; the middles of the bands' drawn spans are not (they move with the
+ * field range: 6.847 GHz for the ⁸⁷Rb ground level drawn to 240 G).
+ */
+export function bandNote(placed: readonly PlacedBand[], energies: readonly ArrayLike<number>[], atText: string): string {
+  const centre = (p: PlacedBand): number => {
+    const first = p.band.curves.map((i) => energies[i]?.[0]);
+    if (first.every((e): e is number => e !== undefined && Number.isFinite(e))) return first.reduce((a, e) => a + e, 0) / first.length;
+    return (p.band.lo + p.band.hi) / 2;
+  };
   const apart = placed.slice(0, -1).map((p, k) => {
     const below = placed[k + 1]!;
     return `${p.name}${k === 0 ? ' lies' : ''} ${formatSI(centre(p) - centre(below), 'Hz')} above ${below.name}`;
   });
-  return `Energy axis broken into ${placed.length} bands, each on its own scale: ${apart.join(', ')} (centre to centre).`;
+  return `Energy axis broken into ${placed.length} bands, each on its own scale: ${apart.join(', ')} (centres of gravity at ${atText}).`;
 }

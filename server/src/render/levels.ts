@@ -20,7 +20,7 @@ import { bandAxes, bandNote, placeBands, type PlacedBand } from './levelBandAxis
 import { emptyDiagram, estimateTextWidth, svgDocument, wrapNote } from './frame';
 import { laneHeadText, laneHeadWhy, rightNamesHigh } from './levelLanes';
 import { laneHeightFor, placeLabels, truncateLabel, type LabelAnchor, type PlacedLabel } from './labelLayout';
-import { fieldMarksIn, layoutMarkRows, MARK_ROW } from './fieldMarks';
+import { fieldMarksIn, layoutMarkRows, markLabelAt, markRulePath, MARK_ROW } from './fieldMarks';
 import { axisOffset } from './offsetAxis';
 import { legendRows, type LegendEntry } from './legend';
 import { markerPath } from './markers';
@@ -29,7 +29,7 @@ import { arrayValues, finiteExtent, slopeAt, valueAt } from './sampled';
 import { slopeRuns, trendOf, type Trend } from './slopeRuns';
 import { endAnchoredDashOffsets } from './dashPhase';
 import { dataNum, el, px, shortHash, text, titleEl } from './svgText';
-import { fieldDisplayUnit, figureMinus, formatIn, formatSI, frequencyUnit } from './units';
+import { fieldDisplayUnit, fieldOnAxisText, figureMinus, formatIn, formatSI, frequencyUnit } from './units';
 import type { LevelCrossing, LevelCurve, LevelsViewData, RenderTheme } from './viewData';
 
 const LABEL_SPACING = 13;
@@ -148,7 +148,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
   box.right = width - 12 - rightLane;
   const x = scaleLinear().domain([f0, f1]).range([box.left, box.right]);
   // A broken axis says so, and how far apart its bands are, in a note under the field axis.
-  const note = bands ? bandNote(bands) : undefined;
+  const note = bands ? bandNote(bands, d.curves.map((c) => c.energyHz), fieldOnAxisText(fields[0] ?? f0, fUnit)) : undefined;
   const noteLines = note !== undefined ? wrapNote(note, width - 32) : [];
   const height = top + plotHeight + 56 + noteLines.length * NOTE_LINE;
   const rows = layoutMarkRows(marks, box.left, box.right, x).map((r) => Math.min(r, rowCount - 1));
@@ -325,10 +325,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
       'g',
       { class: 'sl-field-marks' },
       marks.map((m, i) => {
-        const mx = x(m.fieldT);
-        const half = estimateTextWidth(m.text) / 2;
-        const tx = Math.min(box.right - half, Math.max(box.left + half, mx));
-        const ty = box.top - 8 - rows[i] * MARK_ROW;
+        const { tx, ty } = markLabelAt(m, rows[i]!, box.left, box.right, x, box.top);
         const colour = m.chosen ? pal.marker : pal.muted;
         return el(
           'g',
@@ -337,7 +334,7 @@ export function renderLevels(d: LevelsViewData, theme: RenderTheme): string {
             titleEl(`${m.chosen ? 'Chosen field' : 'Named field'} ${formatIn(m.fieldT, fUnit)}${m.label ? ` (${m.label})` : ''}`),
             el('path', {
               class: 'sl-marker-rule',
-              d: `M${px(mx)},${px(ty + 3)}V${px(box.bottom)}`,
+              d: markRulePath(i, marks, rows, box.left, box.right, x, box.top, box.bottom),
               stroke: colour,
               'stroke-width': m.chosen ? 1.5 : 1,
               'stroke-dasharray': m.chosen ? undefined : '4 3',

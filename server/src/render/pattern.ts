@@ -230,13 +230,22 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
     return [x(p.positionM) - half, x(p.positionM) + half];
   });
   const labelY = peaks.map((p) => Math.max(box.top + 14, yv(p.height) - 3)); // the marker's foot; its label sits above
-  const withPosition = new Set<number>();
+  // Centred over the peak first; else reaching away from its neighbours (ending or starting at its
+  // number, which stays over the marker), so two equal peaks side by side both keep their positions.
+  const withPosition = new Map<number, { x: number; anchor: 'middle' | 'end' | 'start' }>();
   for (const i of order) {
     const cx = x(peaks[i].positionM);
     const half = estimateTextWidth(`${i + 1}: ${positionLabel(peaks[i].positionM, unit)}`, 10) / 2 + 3;
-    if (spans.every(([a, b], j) => j === i || cx + half < a || cx - half > b || Math.abs(labelY[j]! - labelY[i]!) >= 14)) {
-      spans[i] = [cx - half, cx + half];
-      withPosition.add(i);
+    const own = spans[i]!;
+    const places = [
+      { a: cx - half, b: cx + half, x: cx, anchor: 'middle' as const },
+      { a: own[1] - 2 * half, b: own[1], x: own[1] - 3, anchor: 'end' as const },
+      { a: own[0], b: own[0] + 2 * half, x: own[0] + 3, anchor: 'start' as const },
+    ];
+    const free = places.find((q, k) => (k === 0 || (q.a >= box.left && q.b <= box.right)) && spans.every(([a, b], j) => j === i || q.b < a || q.a > b || Math.abs(labelY[j]! - labelY[i]!) >= 14));
+    if (free) {
+      spans[i] = [free.a, free.b];
+      withPosition.set(i, { x: free.x, anchor: free.anchor });
     }
   }
   // Numbers of close peaks climb in steps so that they never overlap.
@@ -263,7 +272,7 @@ export function renderPattern(d: PatternViewData, theme: RenderTheme): string {
         const children = [
           titleEl(`Peak ${i + 1} at ${where}${fwhm}, ${formatIn(p.height, PATTERN_Y_UNIT)}${members ? `; states: ${members}` : ''}`),
           el('path', { class: 'sl-peak-mark', d: markerPath('down', cx, cy - 5, 5), fill: pal.text, stroke: pal.halo, 'stroke-width': 1 }),
-          el('text', { class: 'sl-peak-label', x: cx, y: cy - 14 - numberRise[i], 'text-anchor': 'middle', 'font-size': 10, fill: pal.text, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text(label)),
+          el('text', { class: 'sl-peak-label', x: withPosition.get(i)?.x ?? cx, y: cy - 14 - numberRise[i], 'text-anchor': withPosition.get(i)?.anchor ?? 'middle', 'font-size': 10, fill: pal.text, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text(label)),
         ];
         return el(
           'g',

@@ -7,8 +7,8 @@
 import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
 import { bottomAxis, leftAxis, type PlotBox } from './axes';
-import { fieldMarksIn, layoutMarkRows, MARK_ROW } from './fieldMarks';
-import { emptyDiagram, estimateTextWidth, svgDocument } from './frame';
+import { fieldMarksIn, layoutMarkRows, markLabelAt, markRulePath, MARK_ROW } from './fieldMarks';
+import { emptyDiagram, svgDocument } from './frame';
 import { legendUnderTitle, type LegendEntry } from './legend';
 import { markerPath } from './markers';
 import { paletteFor } from './palette';
@@ -94,13 +94,10 @@ export function renderResonance(d: ResonanceViewData, theme: RenderTheme): strin
       'g',
       { class: 'sl-field-marks' },
       marks.map((m, i) => {
-        const mx = x(m.fieldT);
-        const ty = upper.top - 8 - rows[i] * MARK_ROW;
-        const half = estimateTextWidth(m.text) / 2;
-        const tx = Math.min(RIGHT - half, Math.max(LEFT + half, mx));
+        const { tx, ty } = markLabelAt(m, rows[i]!, LEFT, RIGHT, x, upper.top);
         return el('g', { class: 'sl-field-mark', 'data-kind': 'marker', 'data-label': m.text, 'data-field-t': dataNum(m.fieldT) }, [
           titleEl(`${m.label} at B = ${formatIn(m.fieldT, fUnit)}`),
-          el('path', { class: 'sl-marker-rule', d: `M${px(mx)},${px(ty + 3)}V${px(lower.bottom)}`, stroke: pal.muted, 'stroke-dasharray': '4 3', fill: 'none' }),
+          el('path', { class: 'sl-marker-rule', d: markRulePath(i, marks, rows, LEFT, RIGHT, x, upper.top, lower.bottom), stroke: pal.muted, 'stroke-dasharray': '4 3', fill: 'none' }),
           el('text', { x: tx, y: ty, 'text-anchor': 'middle', 'font-size': 11, fill: pal.text, stroke: pal.halo, 'stroke-width': 3, 'paint-order': 'stroke' }, text(m.text)),
         ]);
       }),

@@ -27,6 +27,8 @@ export function lineUncertainty(r: LineResult, line: LineModel, gJOf: GJLookup, 
   if (!ls || !us) return;
   for (const fp of r.at_fields) {
     const field = inp.fieldSens.get(fieldKey(fp.source));
+    // The working field's own uncertainty, as the levels carry it: the report then writes the field alike in every section.
+    setUnc(fp, 'field_T', field, inp.table);
     const pl = { ...inp.levelParams(lo), ...(field ? { field } : {}) };
     const pu = { ...inp.levelParams(up), ...(field ? { field } : {}) };
     const offsetsUncertain = [...Object.values(pl), ...Object.values(pu)].some((s) => s && hasSensitivity(s));

@@ -51,6 +51,7 @@ export function resonanceUncertainty(
   let undefinedAt: string | undefined;
   for (const fp of r.at_fields) {
     const field = inp.fieldSens.get(fieldKey(fp.source));
+    setUnc(fp, 'field_T', field, inp.table);
     if (!anyParam && !(field && hasSensitivity(field))) continue;
     const { byText } = statesAt(spec, fp.field_T, { ...params, ...(field ? { field } : {}) });
     for (const t of fp.transitions) transitionUnc(t, byText, inp.table);

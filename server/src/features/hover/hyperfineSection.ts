@@ -2,11 +2,12 @@
 import type { LevelResult, SourcedNumber } from '../../eval/resultTypes';
 import { halfText } from '../../eval/halves';
 import { frequencyText, trimNumber, withUncertainty } from '../../eval/quantityText';
+import { sourcedFrequencyText } from '../../eval/writtenUnit';
 import { md, mdTable, mdTitle } from '../shared/markdown';
 
 function constantText(name: string, c: SourcedNumber | undefined): string | undefined {
   if (!c) return undefined;
-  return `${name} = ${withUncertainty(c.value, c.uncertainty, (v) => frequencyText(v))} (${md(c.source)})`;
+  return `${name} = ${sourcedFrequencyText(c, 7)} (${md(c.source)})`;
 }
 
 export function hyperfineSection(r: LevelResult): string | undefined {

@@ -7,6 +7,8 @@
 export interface CautionSetup {
   /** Field at the beam in the magnet, T. */
   magnetFieldT?: number;
+  /** The same field as the report's magnets table writes it (the unit the file wrote it in); else `0.45 T`. */
+  magnetFieldText?: string;
   /** Oven (effusive source) temperature, K. */
   ovenTemperatureK?: number;
   /** Chemical symbol of the species, when known. */
@@ -27,7 +29,7 @@ export function beamCautions(setup: CautionSetup): string[] {
   const out: string[] = [];
   const field = Math.abs(setup.magnetFieldT ?? 0);
   if (field >= MAGNET_CAUTION_T) {
-    out.push(`Strong magnet (${trim(field)} T at the beam): keep pacemakers and other implants, steel tools, watches and cards away from it; ${LAB_RULES}.`);
+    out.push(`Strong magnet (${setup.magnetFieldText ?? `${trim(field)} T`} at the beam): keep pacemakers and other implants, steel tools, watches and cards away from it; ${LAB_RULES}.`);
   }
   const t = setup.ovenTemperatureK;
   if (t !== undefined && t >= HOT_CAUTION_K) {
