@@ -17,6 +17,10 @@ describe('regionText', () => {
   it('keeps cm for 2 cm about 0.5 m (the largest unit in which 0.5 m is at least 1)', () => {
     expect(regionText(0.02, [0, 0, 0.5])).toBe('region 2 cm about (0, 0, 50) cm');
   });
+  it('reads in the unit the file wrote, radius and centre alike (a quantity echoes as written)', () => {
+    expect(regionText(0.06, [0, 0, 0], 'mm')).toBe('region 60 mm about (0, 0, 0) mm');
+    expect(regionText(0.02, [0, 0, 1.5], 'cm')).toBe('region 2 cm about (0, 0, 150) cm');
+  });
   it('reads a millimetre region in mm', () => {
     expect(regionText(0.003, [0.001, 0, -0.002])).toBe('region 3 mm about (1, 0, -2) mm');
   });

@@ -62,22 +62,26 @@ describe('trap findings with quantities read in the trap’s units, the same in 
   const turning = (text: string): string[] => analyze(text).problems.filter((p) => p.code === 'trap-turning-point').map((p) => p.message);
 
   it('gauss family (fields written in G): the turning field reads in G', () => {
-    expect(turning(base)).toEqual(["trap 't1': The depth for |F=1, m_F=-1⟩ is set by the turning point of its energy at 143.6 G, where it becomes high-field seeking."]);
+    expect(turning(base)).toEqual(["trap 't1': The depth for |F=1, m_F=-1⟩ is set by the turning point of its energy at 143.56 G, where it becomes high-field seeking."]);
   });
 
-  it('tesla family (fields written in mT): the turning field reads in mT, as the trap report does (the core always wrote G)', () => {
+  it('tesla family (fields written in mT): the turning field reads in mT to the trap report’s 5 digits (the core always wrote G)', () => {
     const text = base.replace('field bias = 3 G', 'field bias = 0.3 mT');
-    expect(turning(text)).toEqual(["trap 't1': The depth for |F=1, m_F=-1⟩ is set by the turning point of its energy at 14.36 mT, where it becomes high-field seeking."]);
+    expect(turning(text)).toEqual(["trap 't1': The depth for |F=1, m_F=-1⟩ is set by the turning point of its energy at 14.356 mT, where it becomes high-field seeking."]);
+    const report = textReport('x.sublevel', analyze(text).result!).join('\n');
+    expect(report).toContain('turns high-field seeking at 14.356 mT');
   });
 
-  it('a region that reaches a coil reads its lengths in the unit the region was written in (the core wrote cm)', () => {
+  it('a region that reaches a coil reads its lengths in the unit the region was written in, as the report line does (the core wrote cm)', () => {
     const a = analyze(`${base}  region      = 60 mm\n`);
     const found = a.problems.filter((p) => p.code === 'trap-region-reaches-source');
-    // The nearest winding of loops of radius 4 cm at ±4 cm: √(4² + 4²) cm = 56.6 mm from the centre.
+    // The nearest winding of loops of radius 4 cm at ±4 cm: √(4² + 4²) cm = 56.57 mm from the centre.
     expect(found.map((p) => p.message)).toEqual([
-      "trap 't1': The trap region (radius 60 mm) reaches a conductor 56.6 mm from its centre: atoms would meet the hardware before the edge, and the field near a thin conductor grows without bound. Make the region smaller.",
+      "trap 't1': The trap region (radius 60 mm) reaches a conductor 56.57 mm from its centre: atoms would meet the hardware before the edge, and the field near a thin conductor grows without bound. Make the region smaller.",
     ]);
     // The JSON diagnostics carry the same sentence as the problem the editor and `check` show.
     expect(a.result!.diagnostics.filter((d) => d.code === 'trap-region-reaches-source').map((d) => d.message)).toEqual(found.map((p) => p.message));
+    // The report's region line reads in the same unit (it read `region 6 cm about (0, 0, 0) cm`).
+    expect(textReport('x.sublevel', a.result!).join('\n')).toContain('region 60 mm about (0, 0, 0) mm');
   });
 });

@@ -16,7 +16,7 @@ import { engineSpec } from './levelSpec';
 import type { TrapResult, TrapSublevelResult } from './trapResultTypes';
 import { mergedTrapProblem, ZERO_FIELD_CODE } from './trapSublevelFindings';
 import { trapIssueText, type TrapIssueUnits } from './trapIssueText';
-import { trapFieldUnitFor } from './trapText';
+import { regionLengthUnit, trapFieldUnitFor } from './trapText';
 
 export interface TrapEvaluation {
   result: TrapResult;
@@ -48,10 +48,11 @@ export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: Settings
   const centre: Vec3 = trap.regionCentre?.value ?? [0, 0, 0];
   const radius = trap.regionRadiusM?.value ?? defaultRegionRadius(centre, parts);
   if (radius === undefined) return { result, problems };
-  result.region = { centre_m: [...centre], radius_m: radius, from: trap.regionRadiusM ? 'file' : 'sources' };
-  const regionUnit = trap.regionRadiusM?.unit;
+  const writtenRegionUnit = trap.regionRadiusM?.unit ?? trap.regionCentre?.unit;
+  result.region = { centre_m: [...centre], radius_m: radius, from: trap.regionRadiusM ? 'file' : 'sources', ...(writtenRegionUnit ? { unit: writtenRegionUnit } : {}) };
+  const regionUnit = regionLengthUnit(radius, centre, writtenRegionUnit);
   // Before the summary: a region reaching a conductor reads only lengths; the field family is not known yet.
-  for (const i of regionIssues(centre, radius, parts)) problems.push(toProblem(trap, i, { field: 'G', ...(regionUnit ? { region: regionUnit } : {}) }));
+  for (const i of regionIssues(centre, radius, parts)) problems.push(toProblem(trap, i, { field: 'G', region: regionUnit }));
   const summary = summariseTrap({
     field: sumField(parts),
     level: spec,
@@ -62,7 +63,7 @@ export function evaluateTrap(trap: TrapModel, gJOf: GJLookup, settings: Settings
     ...(trap.cutJ ? { cutJ: trap.cutJ.value } : {}),
   });
   // Findings with fields and gradients read them in the unit the trap's report uses (trapText.trapFieldUnit).
-  const units: TrapIssueUnits = { field: trapFieldUnitFor(Math.max(Math.abs(summary.fieldRangeT[1]), Math.abs(summary.fieldAtCentreT)), fieldUnit), ...(regionUnit ? { region: regionUnit } : {}) };
+  const units: TrapIssueUnits = { field: trapFieldUnitFor(Math.max(Math.abs(summary.fieldRangeT[1]), Math.abs(summary.fieldAtCentreT)), fieldUnit), region: regionUnit };
   for (const i of summary.issues) problems.push(toProblem(trap, i, units));
   problems.push(...perTrapProblems(trap, summary.sublevelFindings));
   if (summary.sublevels.length === 0) return { result, summary, problems };

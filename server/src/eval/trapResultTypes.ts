@@ -39,7 +39,8 @@ export interface TrapResult {
   computed: boolean;
   /** Unit vector along gravity, or "off". */
   gravity: [number, number, number] | 'off';
-  region?: { centre_m: [number, number, number]; radius_m: number; from: 'file' | 'sources' };
+  /** `unit`: the length unit the file wrote the region (else its centre) in; the report reads both in it. */
+  region?: { centre_m: [number, number, number]; radius_m: number; from: 'file' | 'sources'; unit?: string };
   temperature_K?: number;
   temperature_unit?: string;
   cut_J?: number;

@@ -7,7 +7,7 @@ import { ZERO_FIELD_FRACTION } from '../physics/traps';
 import { fieldText, frequencyText, GAUSS_TESLA_SWITCH_T, gradientText, lengthText, MISSING, trimNumber, type FieldFamily } from './quantityText';
 import type { TrapResult, TrapSublevelResult } from './trapResultTypes';
 import { pointText } from './fieldSourceText';
-import { lengthUnitFor } from './lengthUnit';
+import { lengthUnitFor, type LengthUnit } from './lengthUnit';
 import { displayUnit, inWrittenUnit, isGaussUnit } from './writtenUnit';
 
 /** The one field unit family of a trap's lines: gauss with G/cm, or tesla (with a prefix) with T/m. */
@@ -86,10 +86,30 @@ export function cutEnergyText(joules: number, unit: string | undefined): string 
   return asF ?? `${trimNumber(joules, 5)} J (${displayUnit(unit)})`;
 }
 
-/** The region's radius and centre in one length unit (the larger's): `region 5.091 cm about (0, 0, 0) cm`. */
-export function regionText(radiusM: number, centreM: readonly number[]): string {
-  const u = lengthUnitFor(Math.max(Math.abs(radiusM), ...centreM.map(Math.abs)));
-  return `region ${trimNumber(radiusM / u.metres, 4)} ${u.symbol} about ${pointText(centreM, u)}`;
+/** Significant digits of a turning field, in the report's line and in trap-turning-point alike. */
+export const TURNING_FIELD_DIGITS = 5;
+
+/** Significant digits of the region's radius, and of a conductor's distance from its centre (trap-region-reaches-source). */
+export const REGION_DIGITS = 4;
+
+/**
+ * The one length unit of a trap's region, shared by the report line and the region's finding: the
+ * unit the file wrote (`region`'s, else `centre`'s: a quantity echoes in the unit the user wrote),
+ * else the length rule on the larger of the radius and the centre's coordinates.
+ */
+export function regionLengthUnit(radiusM: number, centreM: readonly number[], written?: string): LengthUnit {
+  return lengthUnitFor(Math.max(Math.abs(radiusM), ...centreM.map(Math.abs)), written);
+}
+
+/** A length of the region (its radius, a conductor's distance) in the region's unit, REGION_DIGITS digits. */
+export function regionLengthText(m: number, u: LengthUnit): string {
+  return `${trimNumber(m / u.metres, REGION_DIGITS)} ${u.symbol}`;
+}
+
+/** The region's radius and centre in one length unit (regionLengthUnit): `region 60 mm about (0, 0, 0) mm`. */
+export function regionText(radiusM: number, centreM: readonly number[], written?: string): string {
+  const u = regionLengthUnit(radiusM, centreM, written);
+  return `region ${regionLengthText(radiusM, u)} about ${pointText(centreM, u)}`;
 }
 
 /** The trap's summary in a few lines (hover and report header). */
@@ -98,7 +118,7 @@ export function trapSummaryLines(t: TrapResult): string[] {
   const what = [t.species && t.level ? `${t.species}.${t.level}` : undefined, t.sources.length > 0 ? `sources ${t.sources.join(', ')}` : undefined].filter(Boolean).join('; ');
   out.push(`trap ${t.name}${what ? ` — ${what}` : ''}`);
   const gravity = t.gravity === 'off' ? 'gravity off' : `gravity along (${t.gravity.map((x) => trimNumber(x, 3)).join(', ')})`;
-  const region = t.region ? `${regionText(t.region.radius_m, t.region.centre_m)}${t.region.from === 'sources' ? ' (90 % of the way to the nearest conductor)' : ''}` : 'no region';
+  const region = t.region ? `${regionText(t.region.radius_m, t.region.centre_m, t.region.unit)}${t.region.from === 'sources' ? ' (90 % of the way to the nearest conductor)' : ''}` : 'no region';
   out.push([gravity, region, ...trapInputsText(t)].join('; '));
   if (!t.computed) {
     out.push('not computed: see the diagnostics');
@@ -125,7 +145,7 @@ export function trappedSublevelNotes(t: TrapResult): string[] {
   for (const s of t.sublevels.filter((x) => x.trapped)) {
     const notes: string[] = [];
     if (s.field_at_minimum_T !== undefined) notes.push(`|B| at the minimum ${fieldText(s.field_at_minimum_T, 5, { scale: t.field_max_T ?? 0, relative: 1e-6 }, unit)}`);
-    if (s.turning_field_T !== undefined) notes.push(`turns high-field seeking at ${fieldText(s.turning_field_T, 5, undefined, unit)}`);
+    if (s.turning_field_T !== undefined) notes.push(`turns high-field seeking at ${fieldText(s.turning_field_T, TURNING_FIELD_DIGITS, undefined, unit)}`);
     if (s.larmor_Hz !== undefined) notes.push(`Larmor ${frequencyText(s.larmor_Hz, 4)}`);
     if (s.cloud_sizes_m) notes.push(`cloud 1/e sizes ${s.cloud_sizes_m.map((x) => lengthText(x, 3)).join(', ')}`);
     if (s.rf_cut) notes.push(`RF cut ${frequencyText(s.rf_cut.frequency_Hz, 7)} to |${s.rf_cut.to}⟩ at ${fieldText(s.rf_cut.field_T, 5, undefined, unit)} (linear rule ${frequencyText(s.rf_cut.linear_Hz, 7)})`);
