@@ -7,6 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
 import { textReport } from '../../server/src/cli/textReport';
 import { hyperfineSection } from '../../server/src/features/hover/hyperfineSection';
+import { fineStructureSection } from '../../server/src/features/hover/fineStructureSection';
 
 const SETUP = 'species Li7\n  level upper:  2p 2P°3/2  A = -3.055(5) MHz  B = -0.221 MHz\n  level p_term: 2p 2P°  zeta = 6700000 kHz\nfield bias = 5 G\n';
 
@@ -29,6 +30,8 @@ describe('constants echo the unit the file wrote', () => {
 
   it('the hover says the same', () => {
     expect(hyperfineSection(r.levels[0]!)).toContain('B = -0.221 MHz');
+    // ζ as the report reads it (the hover read `ζ = 6.7 GHz`).
+    expect(fineStructureSection(r.terms[0]!)).toContain('ζ = 6700000 kHz (this file)');
   });
 
   it('built-in constants keep their prefixed form', () => {

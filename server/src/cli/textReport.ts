@@ -6,7 +6,7 @@ import { curvatureText, fieldText, frequencyText, gradientText, lengthText, perc
 import { beamPositionNoise, DIP_NOISE, SENSITIVITY_NOISE } from '../eval/noiseFloors';
 import { polarizationSymbol } from '../eval/polarizationName';
 import { lonePeak, MERGED_PEAK_TEXT, nothingToResolveText } from '../eval/lonePeak';
-import { fieldInUnit, inWrittenUnit, sourcedFrequencyText, workingFieldUnit } from '../eval/writtenUnit';
+import { fieldInUnit, inWrittenUnit, sourcedFrequencyText, workingFieldUnit, ZETA_DIGITS } from '../eval/writtenUnit';
 import type {
   BeamResult,
   DiagnosticResult,
@@ -130,7 +130,7 @@ function termHyperfineLines(h: NonNullable<TermResult['hyperfine']>): string[] {
 }
 
 function termReport(t: TermResult, atFieldText: AtFieldText): string[] {
-  const out = ['', `  term ${t.level}: ${t.designation.configuration ? t.designation.configuration + ' ' : ''}${t.designation.unicode}   S = ${fraction(t.S)}, L = ${t.L}, ${t.zeta_Hz ? `fine structure ζ = ${sourcedFrequencyText(t.zeta_Hz, 8)} [${t.zeta_Hz.source}]` : 'fine structure from the J-level energies'}`];
+  const out = ['', `  term ${t.level}: ${t.designation.configuration ? t.designation.configuration + ' ' : ''}${t.designation.unicode}   S = ${fraction(t.S)}, L = ${t.L}, ${t.zeta_Hz ? `fine structure ζ = ${sourcedFrequencyText(t.zeta_Hz, ZETA_DIGITS)} [${t.zeta_Hz.source}]` : 'fine structure from the J-level energies'}`];
   out.push(...table(['J', 'zero-field shift', 'g_J'], t.fine_levels.map((f) => [f.J_text, withUncertainty(f.shift_Hz, f.shift_Hz_unc, (v) => frequencyText(v, 10)), trimNumber(f.g_J, 8)])).map((x) => '      ' + x));
   if (t.hyperfine) out.push(...termHyperfineLines(t.hyperfine));
   if (t.diamagnetic) out.push(`    diamagnetic term: ⟨r²⟩ = ${trimNumber(t.diamagnetic.r2_m2 / BOHR_RADIUS ** 2, 6)} a0², e²⟨r²⟩/8mₑh = ${frequencyText(t.diamagnetic.Hz_per_T2, 6)}/T² × ⟨sin²θ⟩ of m_L`);

@@ -25,6 +25,9 @@ export function sourcedFrequencyText(c: { value: number; uncertainty?: number; w
   return withUncertainty(c.value, c.uncertainty, (v) => inWrittenUnit(v, 'frequency-like', c.written_unit, digits) ?? frequencyText(v, digits));
 }
 
+/** Significant digits of the spin–orbit constant ζ, in the report and the hover alike. */
+export const ZETA_DIGITS = 8;
+
 /** True for the gauss family (G, mG, kG, gauss); the tesla family otherwise. */
 export function isGaussUnit(unit: string): boolean {
   return /^(?:[mkuµμ]?G|(?:milli|kilo|micro)?gauss)$/.test(unit);
