@@ -37,6 +37,10 @@ describe('beam results say the same thing everywhere', () => {
     const wires = analyze(readFileSync('examples/two-wire-magnet.sublevel', 'utf8')).result!;
     expect(wires.beams[0]!.cautions[0]).toMatch(/^Strong magnet \(0\.306934 T at the beam\)/);
     expect(textReport('x.sublevel', wires).join('\n')).toContain('selector  0.306934 T');
+    // A field written with an uncertainty: value and uncertainty, as the table (the caution read `0.45 T`).
+    const uncertain = analyze(readFileSync('tests/fixtures/uncertain.sublevel', 'utf8')).result!;
+    expect(uncertain.beams[0]!.cautions[0]).toMatch(/^Strong magnet \(0\.4500\(50\) T at the beam\)/);
+    expect(textReport('x.sublevel', uncertain).join('\n')).toMatch(/\b\w+ +0\.4500\(50\) T/);
   });
 
   it('an unpopulated sublevel has no peak (null), never NaN', () => {

@@ -6,7 +6,7 @@ import { curvatureText, fieldText, frequencyText, gradientText, lengthText, perc
 import { beamPositionNoise, DIP_NOISE, SENSITIVITY_NOISE } from '../eval/noiseFloors';
 import { polarizationSymbol } from '../eval/polarizationName';
 import { lonePeak, MERGED_PEAK_TEXT, nothingToResolveText } from '../eval/lonePeak';
-import { fieldInUnit, inWrittenUnit, sourcedFrequencyText, workingFieldUnit, ZETA_DIGITS } from '../eval/writtenUnit';
+import { fieldInUnit, inWrittenUnit, magnetFieldText, sourcedFrequencyText, workingFieldUnit, ZETA_DIGITS } from '../eval/writtenUnit';
 import type {
   BeamResult,
   DiagnosticResult,
@@ -52,7 +52,7 @@ export function textReport(file: string, r: EvaluationResult): string[] {
         ['name', 'field', 'gradient', 'length'],
         r.magnets.map((m) => [
           m.name,
-          m.field_T !== undefined ? withUncertainty(m.field_T, m.field_T_unc, (v) => fieldInUnit(v, { unit: m.field_unit })) : '—',
+          m.field_T !== undefined ? magnetFieldText(m.field_T, m.field_T_unc, m.field_unit) : '—',
           m.gradient_T_per_m !== undefined ? withUncertainty(m.gradient_T_per_m, m.gradient_T_per_m_unc, (v) => inWrittenUnit(v, 'gradient', m.gradient_unit) ?? gradientText(v)) : gradientText(undefined),
           m.length_m !== undefined ? withUncertainty(m.length_m, m.length_m_unc, (v) => inWrittenUnit(v, 'length', m.length_unit) ?? lengthText(v)) : lengthText(undefined),
         ]),

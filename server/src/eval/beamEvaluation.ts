@@ -18,7 +18,7 @@ import { beamInputs, type UnmatchedPopulation } from './beamInput';
 import { magnetFieldMap } from './magnetFieldMap';
 import { resolvingAdvice } from './resolvingAdvice';
 import type { BeamResult, BeamSublevelResult, ResolvingChange } from './resultTypes';
-import { fieldInUnit } from './writtenUnit';
+import { magnetFieldText } from './writtenUnit';
 
 const CHANGE_NAME: Record<AdviceParameter, ResolvingChange> = {
   gradient: 'gradient',
@@ -56,7 +56,7 @@ export function evaluateBeam(beam: BeamModel, gJOf: GJLookup, searchResolving = 
     peaks: [],
     pairs: [],
     cautions: beamCautions({
-      ...(beam.magnet?.fieldT ? { magnetFieldT: beam.magnet.fieldT.value, magnetFieldText: fieldInUnit(beam.magnet.fieldT.value, beam.magnet.fieldT.unit !== undefined ? { unit: beam.magnet.fieldT.unit } : {}) } : {}),
+      ...(beam.magnet?.fieldT ? { magnetFieldT: beam.magnet.fieldT.value, magnetFieldText: magnetFieldText(beam.magnet.fieldT.value, beam.magnet.fieldT.uncertainty, beam.magnet.fieldT.unit) } : {}),
       ...(beam.source?.value.kind === 'oven' ? { ovenTemperatureK: beam.source.value.temperatureK } : {}),
       ...(beam.species?.builtin ? { element: beam.species.builtin.element } : {}),
     }),

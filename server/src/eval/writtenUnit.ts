@@ -46,6 +46,14 @@ export function fieldInUnit(tesla: number | null | undefined, opts: { unit?: str
   return fieldText(tesla, digits);
 }
 
+/**
+ * A magnet's field as the report's magnets table writes it, and the beam's strong-magnet caution
+ * quotes it: in the unit the file wrote, with its uncertainty when it has one (`0.4500(50) T`).
+ */
+export function magnetFieldText(tesla: number, uncertainty: number | undefined, unit: string | undefined): string {
+  return withUncertainty(tesla, uncertainty, (v) => fieldInUnit(v, unit !== undefined ? { unit } : {}));
+}
+
 /** The unit the file wrote for a working field (a `field` block or a magnet's `field`), if any. */
 export function workingFieldUnit(
   r: { fields: { name: string; field_unit?: string }[]; magnets: { name: string; field_unit?: string }[] },
