@@ -30,6 +30,10 @@ describe('the residuals CSV', () => {
     expect(Number(first[4])).toBeCloseTo(p.model! / 1e3, 6);
     expect(Number(first[5])).toBeCloseTo(p.residual! / 1e3, 9);
     expect(Number(first[6])).toBeCloseTo(p.residual! / p.uncertainty!, 9);
+    // Only the digits measured − model holds: ulp(6.83e9 Hz) = 2^-20 Hz ≈ 9.5e-10 kHz, so the residual
+    // keeps digits down to 1e-10 kHz (it printed -0.165640265464783, 15 digits) and its ratio to
+    // σ = 300 Hz down to 1e-9 (it printed -0.552134218215942).
+    expect(first.slice(5, 7)).toEqual(['-0.1656402655', '-0.552134218']);
   });
 
   it('a profile: positions in the written length unit, counts as counts; without a written unit, SI', () => {

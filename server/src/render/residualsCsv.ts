@@ -2,13 +2,15 @@
  * The numbers behind the residuals figure (docs/csv.md): one row per fitted point, in the units the
  * file wrote them in, as the figure reads them: the points' fields (or detector positions) in their
  * written unit, the measured values, uncertainties, model and residuals in the data's written unit.
- * Each column's header names its unit (`field_mT`, `measured_kHz`). `sublevel fit --format csv`
+ * Each column's header names its unit (`field_mT`, `measured_kHz`). A residual and its ratio to σ
+ * keep only the digits the subtraction holds (csvDigits/heldDigits.ts). `sublevel fit --format csv`
  * stays the long SI table (fitCsv.ts).
  */
 import type { FitPointResult, FitResult } from '../eval/fitResultTypes';
 import { convertSI, type Dimension } from '../format/units';
 import { csvTable, textCell } from './csv';
 import { csvNumber as numCell } from '../eval/machineText';
+import { heldDigits, ulpOf } from '../eval/csvDigits/heldDigits';
 
 /** A column's unit and how an SI value reads in it. */
 interface ColumnUnit {
@@ -41,14 +43,23 @@ export function residualsCsv(f: FitResult, file: string): string {
     const sigma = p.uncertainty !== undefined && p.uncertainty > 0 ? p.uncertainty : undefined;
     const residual = p.residual ?? p.measured - p.model!;
     const inY = (v: number | undefined): string => cell(v === undefined ? undefined : y.read(v));
+    // measured − model holds digits down to about one ulp of the larger of the two, in the column's unit.
+    const quantumSI = ulpOf(Math.max(Math.abs(p.measured), Math.abs(p.model!)));
+    const residualCell = (): string => {
+      const r = y.read(residual);
+      const q = y.read(quantumSI);
+      return cell(r === undefined || q === undefined ? undefined : heldDigits(r, Math.abs(q)));
+    };
+    // The ratio holds the residual's relative precision: the quantum over σ.
+    const perSigma = sigma !== undefined ? heldDigits(residual / sigma, quantumSI / sigma) : undefined;
     return [
       textCell(p.data),
       cell(x.of(p, k)),
       inY(p.measured),
       inY(p.uncertainty),
       inY(p.model),
-      inY(residual),
-      cell(sigma !== undefined ? residual / sigma : undefined),
+      residualCell(),
+      cell(perSigma),
       textCell(p.csv_line !== undefined ? `csv ${p.csv_line}` : String(p.line + 1)),
     ];
   });
