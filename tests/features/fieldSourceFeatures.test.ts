@@ -34,6 +34,17 @@ describe('hover on a field source', () => {
     expect(h).toContain('⚠ Permanent magnet (μ0·M = 1.2 T)');
   });
 
+  it('a magnetisation reads as written, in the report line and the caution alike (both read `μ0·M = 1.234 T`)', () => {
+    const mT = EXAMPLE.replace('slab pole', 'sl|ab pole').replace(/magnetisation = [^\n]*/, 'magnetisation = 1234.5 mT along z');
+    const h = hoverAt(mT);
+    expect(h).toContain('slab pole: 10 × 20 × 5 mm, μ0·M = 1234.5 mT');
+    expect(h).toContain('⚠ Permanent magnet (μ0·M = 1234.5 mT)');
+    // M in A/m stays M in A/m: 9.5e5 A/m is μ0·M ≈ 1.194 T (μ0 = 1.25663706127e-6 N/A², CODATA 2022).
+    const am = hoverAt(EXAMPLE.replace('slab pole', 'sl|ab pole').replace(/magnetisation = [^\n]*/, 'magnetisation = 9.5e5 A/m along z'));
+    expect(am).toContain('slab pole: 10 × 20 × 5 mm, M = 950000 A/m');
+    expect(am).toContain('⚠ Permanent magnet (M = 950000 A/m)');
+  });
+
   it('a source with problems says it was not computed', () => {
     const h = hoverAt('coil br|oken\n  radius = 0 cm\n  turns = 10\n  current = 1 A\n');
     expect(h).toContain('coil broken');

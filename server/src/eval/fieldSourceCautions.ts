@@ -5,8 +5,7 @@
  */
 import { MAGNET_CAUTION_T } from '../physics/beam/cautions';
 import { AIR_COOLED_LIMIT_A_PER_M2, WATER_COOLED_LIMIT_A_PER_M2, type WindingPower } from '../physics/fields/coilPower';
-import { centreFieldText } from './fieldSourceText';
-import { trimNumber } from './quantityText';
+import { centreFieldText, magnetisationText } from './fieldSourceText';
 import { windingNumbersText } from './windingText';
 
 /** From here up steel tools and loose iron are pulled in (common practice, rough). */
@@ -20,6 +19,8 @@ export interface SourceCautionInput {
   fieldT?: number;
   /** |μ0·M| of a magnetised block, T. */
   magnetisationT?: number;
+  /** The unit the magnetisation was written in: the caution echoes it as the report line does (fieldSourceText.magnetisationText). */
+  magnetisationUnit?: string;
   /** The unit the file writes fields in (the report line's unit, which the caution repeats). */
   fieldUnit?: string;
 }
@@ -45,7 +46,7 @@ export function sourceCautions(s: SourceCautionInput): string[] {
     }
   }
   if (s.kind === 'slab' && s.magnetisationT !== undefined && s.magnetisationT > 0) {
-    out.push(`Permanent magnet (μ0·M = ${trimNumber(s.magnetisationT, 4)} T): magnets pull together and onto steel hard enough to pinch fingers and shatter; keep them away from implants, cards and instruments; ${LAB_RULES}.`);
+    out.push(`Permanent magnet (${magnetisationText(s.magnetisationT, s.magnetisationUnit)}): magnets pull together and onto steel hard enough to pinch fingers and shatter; keep them away from implants, cards and instruments; ${LAB_RULES}.`);
   } else if (s.fieldT !== undefined && Math.abs(s.fieldT) >= MAGNET_CAUTION_T) {
     const b = Math.abs(s.fieldT);
     const away = b >= TOOLS_CAUTION_T ? 'pacemakers and other implants, steel tools, watches and cards' : 'pacemakers and other implants';

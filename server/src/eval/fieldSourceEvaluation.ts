@@ -28,6 +28,7 @@ export function sourceEvalInput(m: FieldSourceModel, fieldUnit: string | undefin
     ...(m.spacingM ? { spacingM: m.spacingM.value } : {}),
     ...(m.sense ? { sense: m.sense.value } : {}),
     ...(fieldUnit ? { fieldUnit } : {}),
+    ...(m.magnetisationT?.unit ? { magnetisationUnit: m.magnetisationT.unit } : {}),
   };
 }
 
@@ -48,12 +49,15 @@ export interface SourceEvalInput {
   sense?: 'same' | 'opposite';
   /** The unit the file writes fields in elsewhere (a `field` block or a magnet), for reports. */
   fieldUnit?: string;
+  /** A slab: the unit its magnetisation was written in. */
+  magnetisationUnit?: string;
 }
 
 export function evaluateFieldSource(s: SourceEvalInput, problems: Problem[]): FieldSourceResult {
   const parts = s.parts.map(partResult);
   const out: FieldSourceResult = { name: s.name, kind: s.kind, parts, cautions: [] };
   if (s.fieldUnit) out.field_unit = s.fieldUnit;
+  if (s.magnetisationUnit) out.magnetisation_unit = s.magnetisationUnit;
   if (s.parts.length === 0) return out;
   if (s.kind === 'coil' && s.spacingM !== undefined && s.radiusM) {
     out.pair = { sense: s.sense ?? 'same', spacing_m: s.spacingM, spacing_over_radius: s.spacingM / s.radiusM };
@@ -81,7 +85,7 @@ export function evaluateFieldSource(s: SourceEvalInput, problems: Problem[]): Fi
     kind: s.kind,
     ...(w ? { winding: { ...w, conductorM: s.conductorM! } } : {}),
     ...(out.field_abs_T !== undefined ? { fieldT: out.field_abs_T } : {}),
-    ...(slab?.kind === 'slab' ? { magnetisationT: Math.hypot(...slab.magnetisationT) } : {}),
+    ...(slab?.kind === 'slab' ? { magnetisationT: Math.hypot(...slab.magnetisationT), ...(s.magnetisationUnit ? { magnetisationUnit: s.magnetisationUnit } : {}) } : {}),
     ...(s.fieldUnit ? { fieldUnit: s.fieldUnit } : {}),
   });
   return out;

@@ -44,6 +44,8 @@ export interface FieldSourceResult {
   pair?: { sense: 'same' | 'opposite'; spacing_m: number; spacing_over_radius: number };
   /** The unit the file writes fields in (a `field` block or a magnet), for reports; absent: by size. */
   field_unit?: string;
+  /** A slab: the unit the file wrote its magnetisation in (`mT`, `A/m`), which its report line and caution echo. */
+  magnetisation_unit?: string;
   /** The copper winding, when the block gives a `conductor`. */
   winding?: WindingResult;
   cautions: string[];

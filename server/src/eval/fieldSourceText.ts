@@ -6,7 +6,8 @@
 import type { FieldSourceResult } from './fieldSourceResultTypes';
 import { lengthUnitFor, type LengthUnit } from './lengthUnit';
 import { GAUSS_TESLA_SWITCH_T, gradientText, lengthText, MISSING, trimNumber } from './quantityText';
-import { isGaussUnit } from './writtenUnit';
+import { inWrittenUnit, isGaussUnit } from './writtenUnit';
+import { VACUUM_PERMEABILITY } from '../physics/constants';
 import { windingNumbersText } from './windingText';
 
 const AXES = ['x', 'y', 'z'] as const;
@@ -71,9 +72,21 @@ export function sourceHeadline(r: FieldSourceResult): string {
       const s = r.parts[0];
       if (s?.kind !== 'slab') return `slab ${r.name}`;
       const m = Math.hypot(...s.magnetisation_T);
-      return `slab ${r.name}: ${s.size_m.map((x) => trimNumber(x * 1e3, 4)).join(' × ')} mm, μ0·M = ${trimNumber(m, 4)} T`;
+      return `slab ${r.name}: ${s.size_m.map((x) => trimNumber(x * 1e3, 4)).join(' × ')} mm, ${magnetisationText(m, r.magnetisation_unit)}`;
     }
   }
+}
+
+/**
+ * A block's magnetisation as the file wrote it, in the report line and the permanent-magnet caution
+ * alike: `1234.5 mT` reads `μ0·M = 1234.5 mT`, `9.5e5 A/m` reads `M = 950000 A/m`; without a
+ * written unit, μ0·M in T to 4 digits.
+ */
+export function magnetisationText(magnitudeT: number, unit?: string): string {
+  const asField = inWrittenUnit(magnitudeT, 'flux-density', unit);
+  if (asField) return `μ0·M = ${asField}`;
+  const asM = inWrittenUnit(magnitudeT / VACUUM_PERMEABILITY, 'magnetisation', unit);
+  return asM ? `M = ${asM}` : `μ0·M = ${trimNumber(magnitudeT, 4)} T`;
 }
 
 /** The lines after the headline (no cautions: callers show those their own way). */
