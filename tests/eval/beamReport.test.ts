@@ -41,6 +41,10 @@ describe('beam results say the same thing everywhere', () => {
     const uncertain = analyze(readFileSync('tests/fixtures/uncertain.sublevel', 'utf8')).result!;
     expect(uncertain.beams[0]!.cautions[0]).toMatch(/^Strong magnet \(0\.4500\(50\) T at the beam\)/);
     expect(textReport('x.sublevel', uncertain).join('\n')).toMatch(/\b\w+ +0\.4500\(50\) T/);
+    // A magnet built from sources whose current is uncertain (2400(20) A): the table's propagated uncertainty too (it read 0.306934 T).
+    const uncertainWires = analyze(readFileSync('examples/two-wire-magnet.sublevel', 'utf8').replace('current   = 2400 A ', 'current   = 2400(20) A')).result!;
+    expect(textReport('x.sublevel', uncertainWires).join('\n')).toContain('selector  0.3069(26) T');
+    expect(uncertainWires.beams[0]!.cautions[0]).toMatch(/^Strong magnet \(0\.3069\(26\) T at the beam\)/);
   });
 
   it('an unpopulated sublevel has no peak (null), never NaN', () => {

@@ -13,6 +13,7 @@ import { evaluateLine } from './lineEvaluation';
 import { addSpectra } from './spectrumEvaluation';
 import { evaluateResonance } from './resonanceEvaluation';
 import { attachUncertainty } from './uncertainty/attach';
+import { quoteMagnetTable } from './magnetCautionQuote';
 import { evaluateFit } from './fitEvaluation';
 import { evaluateFieldSource, sourceEvalInput } from './fieldSourceEvaluation';
 import { evaluateSlower } from './slowerEvaluation';
@@ -131,6 +132,7 @@ export function evaluate(model: SetupModel, earlier: Problem[], stop?: StopCheck
   stopIfAsked(stop);
   const uncertainty = attachUncertainty(model, result, gJOf);
   if (uncertainty.inputs) result.uncertainty_inputs = uncertainty.inputs;
+  quoteMagnetTable(result);
   // The evaluation's findings get their closing stop here, the one place they are gathered (the parser's and model's have it already).
   const found = [...onceEach(notes).map(noteToProblem), ...beamProblems, ...lineProblems, ...fitProblems, ...sourceProblems, ...slowerProblems, ...trapProblems, ...uncertainty.problems];
   const problems = sortProblems([...earlier, ...found.map((p) => ({ ...p, message: endSentence(p.message) }))]);

@@ -25,11 +25,19 @@ export const CRYOGENIC_CAUTION_K = 120;
 const ALKALI_METALS = new Set(['Li', 'Na', 'K', 'Rb', 'Cs', 'Fr']);
 const LAB_RULES = "follow your lab's rules and ask its safety officer";
 
+/** How the strong-magnet caution starts, so a later pass can find it. */
+export const STRONG_MAGNET_START = 'Strong magnet (';
+
+/** The strong-magnet caution quoting the field as `fieldText`. */
+export function strongMagnetCaution(fieldText: string): string {
+  return `${STRONG_MAGNET_START}${fieldText} at the beam): keep pacemakers and other implants, steel tools, watches and cards away from it; ${LAB_RULES}.`;
+}
+
 export function beamCautions(setup: CautionSetup): string[] {
   const out: string[] = [];
   const field = Math.abs(setup.magnetFieldT ?? 0);
   if (field >= MAGNET_CAUTION_T) {
-    out.push(`Strong magnet (${setup.magnetFieldText ?? `${trim(field)} T`} at the beam): keep pacemakers and other implants, steel tools, watches and cards away from it; ${LAB_RULES}.`);
+    out.push(strongMagnetCaution(setup.magnetFieldText ?? `${trim(field)} T`));
   }
   const t = setup.ovenTemperatureK;
   if (t !== undefined && t >= HOT_CAUTION_K) {
