@@ -5,6 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../server/src/eval/analyze';
+import { trapSummaryLines } from '../../server/src/eval/trapText';
 
 const MU0 = 1.25663706127e-6; // CODATA 2022 vacuum permeability
 
@@ -71,7 +72,9 @@ describe('trap from an anti-Helmholtz pair', () => {
     const x = analyze(`${PAIR('20 A')}trap q\n  sources = quad\n  level = ground\n  gravity = off\n  cut = 20 MHz\n  region = 2 cm\n  centre = 0, 0, 1 mm\n`);
     const tr = x.result!.traps![0]!;
     expect(tr.gravity).toBe('off');
-    expect(tr.region).toEqual({ centre_m: [0, 0, 0.001], radius_m: 0.02, from: 'file' });
+    expect(tr.region).toEqual({ centre_m: [0, 0, 0.001], radius_m: 0.02, from: 'file', unit: 'cm' });
+    // The radius's written unit wins over the centre's: one unit for both.
+    expect(trapSummaryLines(tr)[1]).toContain('region 2 cm about (0, 0, 0.1) cm');
     expect(tr.cut_J).toBeCloseTo(6.62607015e-34 * 20e6, 40);
     expect(tr.sublevels.find((s) => s.label === 'F=2, m_F=+2')!.rf_cut).toBeDefined();
   });
