@@ -217,8 +217,12 @@ export class DocumentStore {
       }
       return s.analysis;
     });
-    // Later evaluations wait for this one; hold no result here, so that old versions can be freed.
-    entry.running = run.then(() => undefined);
+    // Later evaluations wait for this one, whether it resolves or rejects (a rejection is the
+    // caller's to handle, through `s.evaluation`); hold no result here, so that old versions can be freed.
+    entry.running = run.then(
+      () => undefined,
+      () => undefined,
+    );
     s.evaluation = run;
     return run;
   }
@@ -234,7 +238,8 @@ export class DocumentStore {
   /**
    * The evaluation of this version failed outside the evaluator (which reports its own failures as
    * `evaluation-cut-short`): it is not tried again, and the version's problems say so with an
-   * `internal-error` after the parse and model problems.
+   * `internal-error` after the parse and model problems. The failed evaluation is replaced by
+   * this analysis, so that a later request for the version neither waits on nor reports it again.
    */
   evaluationFailed(doc: DocumentSnapshot, e: unknown): Analysis {
     const s = this.state(doc);
@@ -242,7 +247,7 @@ export class DocumentStore {
       s.analysis.problems = sortProblems([...s.analysis.problems, internalError(e)]);
       s.evaluated = true;
     }
-    s.evaluation ??= Promise.resolve(s.analysis);
+    s.evaluation = Promise.resolve(s.analysis);
     return s.analysis;
   }
 
