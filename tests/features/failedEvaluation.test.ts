@@ -46,6 +46,36 @@ describe('a failed evaluation', () => {
     expect(svc.diagnostics(doc('field f = 2 G\n', 2))).toEqual({ items: [], complete: true });
   });
 
+  it('keeps a failure on the version that failed when the snapshot moved on meanwhile', async () => {
+    // The server's documents are live: by the time an evaluation fails, the same object may hold a newer version.
+    const live = { uri: 'file:///a.sublevel', version: 1, text: 'field f = 1 G\n', getText: () => live.text };
+    let rejectFirst: (e: Error) => void = () => undefined;
+    const evaluated: string[] = [];
+    const inner = inProcessEvaluator();
+    const evaluator: Evaluator = {
+      evaluate: (text, signal, sources) => {
+        evaluated.push(text);
+        return evaluated.length === 1 ? new Promise((_, reject) => (rejectFirst = reject)) : inner.evaluate(text, signal, sources);
+      },
+      dispose: () => undefined,
+    };
+    let logBroken = true;
+    const svc = new LanguageService((): void => {
+      if (logBroken) {
+        logBroken = false;
+        throw new Error('log closed');
+      }
+    }, evaluator);
+    const first = svc.evaluate(live);
+    while (evaluated.length === 0) await Promise.resolve(); // the evaluation of version 1 has started
+    Object.assign(live, { version: 2, text: 'field f = 2 G\n' });
+    rejectFirst(new Error('worker gone'));
+    expect((await first).problems.map((p) => p.code)).toEqual(['internal-error']);
+    // Before, the failure of version 1 was written onto version 2, which then was never evaluated.
+    expect((await svc.evaluate(live)).problems).toEqual([]);
+    expect(evaluated).toEqual(['field f = 1 G\n', 'field f = 2 G\n']);
+  });
+
   it('shows a failure the store could not record in the diagnostics of that version only', async () => {
     // A snapshot whose text cannot be read twice (the store's evaluate and its record of the failure), then can.
     let reads = 0;
