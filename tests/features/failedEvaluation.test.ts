@@ -100,4 +100,14 @@ describe('a failed evaluation', () => {
     expect(svc.diagnostics(doc('field f = 1 G\n', 5))).toEqual({ items: [], complete: false });
     expect(svc.diagnostics(flaky).complete).toBe(false);
   });
+
+  it('resolves with the failure when the log is gone too', async () => {
+    const svc = new LanguageService(() => {
+      throw new Error('log closed');
+    });
+    const broken = { uri: 'file:///b.sublevel', version: 1, getText: (): string => { throw new Error('disk on fire'); } };
+    // Before, the throwing log line made the evaluation reject and the diagnostics throw (each logs the failure first).
+    expect((await svc.evaluate(broken)).problems.map((p) => p.message)).toEqual([report('disk on fire')]);
+    expect(svc.diagnostics(broken).items.map((d) => d.message)).toEqual([report('disk on fire')]);
+  });
 });

@@ -90,13 +90,23 @@ export class LanguageService {
   private readonly store: DocumentStore;
   /** By URI: the failure of an evaluation that the store itself failed to record, so that `diagnostics` still shows it. */
   private readonly unrecorded = new Map<string, UnrecordedFailure>();
+  /** The log, made safe: a log that throws (a closed connection) must not turn a failure's answer into a throw. */
+  private readonly log: Log;
 
   constructor(
-    private readonly log: Log = () => undefined,
+    log: Log = () => undefined,
     private readonly evaluator: Evaluator = inProcessEvaluator(),
     /** Reads the files that `use` statements name (open documents first, then the disk, in the server). */
     private readonly files?: WorkspaceFiles,
   ) {
+    this.log = (message) => {
+      try {
+        log(message);
+      } catch {
+        // Nowhere left to say it; the answer (or diagnostic) still says what it can.
+      }
+    };
+    // The store gets the log as given: its failure path copes with a log that throws (documentStore.ts).
     this.store = new DocumentStore(evaluator, log, files);
   }
 
@@ -144,11 +154,7 @@ export class LanguageService {
   }
 
   private evaluationFailed(doc: DocumentSnapshot, e: unknown): Analysis {
-    try {
-      this.log(`sublevel: evaluation failed on ${doc.uri} (version ${doc.version}): ${describe(e)}`);
-    } catch {
-      // The log is gone too; the diagnostic below still says it in the file.
-    }
+    this.log(`sublevel: evaluation failed on ${doc.uri} (version ${doc.version}): ${describe(e)}`);
     try {
       return this.store.evaluationFailed(doc, e);
     } catch {
