@@ -4,12 +4,24 @@
  * in the log when something throws or rejects (in the timer, the evaluation or what follows it),
  * so a failure never goes unhandled and the server keeps serving; the document keeps the
  * diagnostics it last got (the language service adds an `internal-error` to them when the
- * failure is its own), and a version that failed is not tried again (its next edit is).
+ * failure is its own), and a version that failed is not tried again (its next edit is). A version
+ * is its number and its text: a client may send a number again with another text.
  */
 
 export interface ScheduledDocument {
   readonly uri: string;
   readonly version: number;
+  getText(): string;
+}
+
+/** One version of a document as the schedule keeps it (the text is the open document's own string, so comparing it is quick). */
+interface Version {
+  version: number;
+  text: string;
+}
+
+function same(kept: Version | undefined, doc: ScheduledDocument): boolean {
+  return kept !== undefined && kept.version === doc.version && kept.text === doc.getText();
 }
 
 export interface EvaluationScheduleHooks<D extends ScheduledDocument> {
@@ -38,48 +50,49 @@ function describe(e: unknown): string {
 export function evaluationSchedule<D extends ScheduledDocument>(hooks: EvaluationScheduleHooks<D>): EvaluationSchedule<D> {
   const timers = new Map<string, NodeJS.Timeout>();
   /** Versions waiting for the pause, by document. */
-  const pending = new Map<string, number>();
+  const pending = new Map<string, Version>();
   /** The version whose evaluation failed, by document: asking again (a pull of its diagnostics) would only fail again. */
-  const failedVersion = new Map<string, number>();
+  const failedVersion = new Map<string, Version>();
 
-  const failed = (uri: string, version: number) => (e: unknown): void => {
-    failedVersion.set(uri, version);
+  const failed = (uri: string, kept: Version) => (e: unknown): void => {
+    failedVersion.set(uri, kept);
     try {
-      hooks.log(`sublevel: evaluating ${uri} (version ${version}) failed: ${describe(e)}`);
+      hooks.log(`sublevel: evaluating ${uri} (version ${kept.version}) failed: ${describe(e)}`);
     } catch {
       // Nowhere left to say it; the server goes on.
     }
   };
 
-  function start(uri: string, version: number): void {
+  function start(uri: string, kept: Version): void {
     timers.delete(uri);
     pending.delete(uri);
     const doc = hooks.current(uri);
-    if (!doc || doc.version !== version) return;
+    if (!doc || !same(kept, doc)) return;
     const running = hooks.evaluate(doc);
     if (!running) return;
     running
       .then(() => {
         const now = hooks.current(uri);
-        if (now && now.version === version) hooks.evaluated(now);
+        if (now && same(kept, now)) hooks.evaluated(now);
       })
-      .catch(failed(uri, version));
+      .catch(failed(uri, kept));
   }
 
   return {
     schedule(doc) {
-      if (pending.get(doc.uri) === doc.version || failedVersion.get(doc.uri) === doc.version) return;
-      failedVersion.delete(doc.uri);
-      clearTimeout(timers.get(doc.uri));
-      pending.set(doc.uri, doc.version);
-      const { uri, version } = doc;
+      const { uri } = doc;
+      if (same(pending.get(uri), doc) || same(failedVersion.get(uri), doc)) return;
+      failedVersion.delete(uri);
+      clearTimeout(timers.get(uri));
+      const kept: Version = { version: doc.version, text: doc.getText() };
+      pending.set(uri, kept);
       timers.set(
         uri,
         setTimeout(() => {
           try {
-            start(uri, version);
+            start(uri, kept);
           } catch (e) {
-            failed(uri, version)(e);
+            failed(uri, kept)(e);
           }
         }, hooks.delayMs),
       );

@@ -3,7 +3,7 @@
  * (a throw in the timer, a rejected evaluation, a throw in what follows it) ends in the log while
  * the next document is evaluated as usual.
  */
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { evaluationSchedule, type EvaluationScheduleHooks } from '../../server/src/evaluationSchedule';
 
 const sleep = (ms: number): Promise<void> => new Promise((r) => setTimeout(r, ms));
@@ -11,7 +11,10 @@ const sleep = (ms: number): Promise<void> => new Promise((r) => setTimeout(r, ms
 interface Doc {
   uri: string;
   version: number;
+  getText(): string;
 }
+
+const docOf = (uri: string, version: number, text = ''): Doc => ({ uri, version, getText: () => text });
 
 /** A schedule over one map of open documents, recording what it evaluated, sent and logged. */
 function harness(overrides: Partial<EvaluationScheduleHooks<Doc>> = {}) {
@@ -27,8 +30,8 @@ function harness(overrides: Partial<EvaluationScheduleHooks<Doc>> = {}) {
     log: (m) => logged.push(m),
     ...overrides,
   });
-  const put = (uri: string, version: number): Doc => {
-    const d = { uri, version };
+  const put = (uri: string, version: number, text = ''): Doc => {
+    const d = docOf(uri, version, text);
     open.set(uri, d);
     return d;
   };
@@ -63,7 +66,7 @@ describe('the evaluation schedule', () => {
   const failures: [string, Partial<EvaluationScheduleHooks<Doc>>, string][] = [
     ['an evaluation that throws', { evaluate: (d) => (d.uri === 'bad' ? fail('thrown at once') : Promise.resolve()) }, 'thrown at once'],
     ['an evaluation that rejects', { evaluate: (d) => (d.uri === 'bad' ? Promise.reject(new Error('rejected later')) : Promise.resolve()) }, 'rejected later'],
-    ['a document lookup that throws', { current: (uri) => (uri === 'bad' ? fail('lookup broke') : { uri, version: 1 }) }, 'lookup broke'],
+    ['a document lookup that throws', { current: (uri) => (uri === 'bad' ? fail('lookup broke') : docOf(uri, 1)) }, 'lookup broke'],
   ];
   for (const [name, hooks, message] of failures) {
     it(`logs ${name} and evaluates the next document as usual`, async () => {
@@ -90,6 +93,37 @@ describe('the evaluation schedule', () => {
     h.schedule.schedule(h.put('a', 2));
     await sleep(30);
     expect([tries, h.logged.length]).toEqual([2, 2]);
+  });
+
+  it('takes a version number sent again with another text as a new version after a failure', async () => {
+    const tried: string[] = [];
+    const h = harness({
+      evaluate: (d) => (tried.push(`${d.version}:${d.getText()}`), d.getText() === 'old' ? Promise.reject(new Error('bad text')) : Promise.resolve()),
+    });
+    h.schedule.schedule(h.put('a', 1, 'old'));
+    await sleep(30);
+    // Before, the failure at version 1 shut out every text sent as version 1.
+    h.schedule.schedule(h.put('a', 1, 'new'));
+    await sleep(30);
+    expect(tried).toEqual(['1:old', '1:new']);
+    expect(h.sent).toEqual(['a@1']);
+  });
+
+  it('puts the evaluation off again for a version number sent again with another text while it waits', () => {
+    vi.useFakeTimers();
+    try {
+      const h = harness({ delayMs: 100 });
+      h.schedule.schedule(h.put('a', 2, 'first'));
+      vi.advanceTimersByTime(60);
+      h.schedule.schedule(h.put('a', 2, 'second'));
+      // Before, the second text was taken for the waiting version: the evaluation ran 100 ms after the first.
+      vi.advanceTimersByTime(90);
+      expect(h.evaluated).toEqual([]);
+      vi.advanceTimersByTime(10);
+      expect(h.evaluated).toEqual(['a@2']);
+    } finally {
+      vi.useRealTimers();
+    }
   });
 
   it('logs a failure in sending the diagnostics after the evaluation, and goes on', async () => {

@@ -189,7 +189,10 @@ export class DocumentStore {
     return { problems: s.carried.length > 0 ? sortProblems([...s.analysis.problems, ...s.carried]) : s.analysis.problems, complete: false };
   }
 
-  /** The analysis with its evaluation, starting the evaluation if needed. Never rejects. */
+  /**
+   * The analysis with its evaluation, starting the evaluation if needed. A failure is written
+   * into this version's problems; it rejects only if even that fails (throws if the snapshot does).
+   */
   evaluate(doc: DocumentSnapshot): Promise<Analysis> {
     const s = this.state(doc);
     if (s.evaluation) return s.evaluation;
@@ -217,10 +220,16 @@ export class DocumentStore {
       }
       return s.analysis;
     });
-    // Later evaluations wait for this one; hold no result here, so that old versions can be freed.
-    entry.running = run.then(() => undefined);
-    s.evaluation = run;
-    return run;
+    // A failure outside the evaluator (a throw in the catch above, or in attach) belongs to this
+    // version, whatever the snapshot holds by then (the server's documents change in place).
+    const settled = run.catch((e: unknown) => this.failedOn(doc.uri, s, e));
+    // Later evaluations wait for this one, even should that reject; hold no result here, so that old versions can be freed.
+    entry.running = settled.then(
+      () => undefined,
+      () => undefined,
+    );
+    s.evaluation = settled;
+    return settled;
   }
 
   private attach(entry: DocumentEntry, s: VersionState, result: Analysis['result'], problems: Problem[], fast: ReadonlySet<string>): void {
@@ -234,16 +243,31 @@ export class DocumentStore {
   /**
    * The evaluation of this version failed outside the evaluator (which reports its own failures as
    * `evaluation-cut-short`): it is not tried again, and the version's problems say so with an
-   * `internal-error` after the parse and model problems.
+   * `internal-error` after the parse and model problems. The failed evaluation is replaced by
+   * this analysis, so that a later request for the version neither waits on nor reports it again.
    */
   evaluationFailed(doc: DocumentSnapshot, e: unknown): Analysis {
     const s = this.state(doc);
-    if (!s.evaluated) {
-      s.analysis.problems = sortProblems([...s.analysis.problems, internalError(e)]);
-      s.evaluated = true;
-    }
-    s.evaluation ??= Promise.resolve(s.analysis);
+    this.recordFailure(s, e);
+    s.evaluation = Promise.resolve(s.analysis);
     return s.analysis;
+  }
+
+  /** `evaluationFailed` for the version whose evaluation is this one, told in the log too. */
+  private failedOn(uri: string, s: VersionState, e: unknown): Analysis {
+    try {
+      this.log(`sublevel: evaluation failed for ${uri} (version ${s.version}): ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
+    } catch {
+      // The log is gone too; the problem below still says it in the file.
+    }
+    this.recordFailure(s, e);
+    return s.analysis;
+  }
+
+  private recordFailure(s: VersionState, e: unknown): void {
+    if (s.evaluated) return;
+    s.analysis.problems = sortProblems([...s.analysis.problems, internalError(e)]);
+    s.evaluated = true;
   }
 
   /** The evaluated analysis, or the fast one if the evaluation does not arrive within `waitMs`. */

@@ -21,7 +21,8 @@ import type {
   TextEdit,
   WorkspaceEdit,
 } from 'vscode-languageserver-types';
-import { internalError, type Analysis } from '../eval/analyze';
+import { internalError, sortProblems, type Analysis } from '../eval/analyze';
+import type { Problem } from '../format/ast';
 import { unparsedDocument } from '../eval/inputLimits';
 import { codeActions, type CodeActionRequest } from '../features/codeActions';
 import { completion } from '../features/completion';
@@ -57,6 +58,22 @@ function describe(e: unknown): string {
   return e instanceof Error ? (e.stack ?? e.message) : String(e);
 }
 
+/** The text of a snapshot, or undefined when reading it throws (a broken snapshot is still told apart by its version). */
+function textOf(doc: DocumentSnapshot): string | undefined {
+  try {
+    return doc.getText();
+  } catch {
+    return undefined;
+  }
+}
+
+/** An evaluation failure the store could not record, kept for the version (and text) it belongs to. */
+interface UnrecordedFailure {
+  version: number;
+  text: string | undefined;
+  problem: Problem;
+}
+
 /** Runs `run` at the position the client meant, or gives `empty` for a nonsense one (requestPositions.ts). */
 function at<T>(a: Analysis, pos: unknown, empty: T, run: (p: Position) => T): T {
   const p = requestPosition(a.doc, pos);
@@ -71,13 +88,25 @@ function within<T>(a: Analysis, range: unknown, empty: T, run: (r: Range) => T):
 
 export class LanguageService {
   private readonly store: DocumentStore;
+  /** By URI: the failure of an evaluation that the store itself failed to record, so that `diagnostics` still shows it. */
+  private readonly unrecorded = new Map<string, UnrecordedFailure>();
+  /** The log, made safe: a log that throws (a closed connection) must not turn a failure's answer into a throw. */
+  private readonly log: Log;
 
   constructor(
-    private readonly log: Log = () => undefined,
+    log: Log = () => undefined,
     private readonly evaluator: Evaluator = inProcessEvaluator(),
     /** Reads the files that `use` statements name (open documents first, then the disk, in the server). */
     private readonly files?: WorkspaceFiles,
   ) {
+    this.log = (message) => {
+      try {
+        log(message);
+      } catch {
+        // Nowhere left to say it; the answer (or diagnostic) still says what it can.
+      }
+    };
+    // The store gets the log as given: its failure path copes with a log that throws (documentStore.ts).
     this.store = new DocumentStore(evaluator, log, files);
   }
 
@@ -129,12 +158,25 @@ export class LanguageService {
     try {
       return this.store.evaluationFailed(doc, e);
     } catch {
-      // The store (or the snapshot's text) is broken for this version: the failure alone is all there is to show.
-      return { doc: unparsedDocument(''), problems: [internalError(e)] };
+      // The store (or the snapshot's text) is broken for this version: keep the failure here, so that
+      // `diagnostics` shows it for this version (with whatever else the store can still give).
+      const problem = internalError(e);
+      this.unrecorded.set(doc.uri, { version: doc.version, text: textOf(doc), problem });
+      return { doc: unparsedDocument(''), problems: [problem] };
     }
   }
 
+  /** The failure kept for this version by `evaluationFailed`, if any (a newer version or text drops it). */
+  private unrecordedFailure(doc: DocumentSnapshot): Problem | undefined {
+    const kept = this.unrecorded.get(doc.uri);
+    if (!kept) return undefined;
+    if (kept.version === doc.version && kept.text === textOf(doc)) return kept.problem;
+    this.unrecorded.delete(doc.uri);
+    return undefined;
+  }
+
   forget(uri: string): void {
+    this.unrecorded.delete(uri);
     this.store.forget(uri);
   }
 
@@ -176,7 +218,10 @@ export class LanguageService {
    */
   diagnostics(doc: DocumentSnapshot, settings: EditorSettings = DEFAULT_SETTINGS): { items: Diagnostic[]; complete: boolean } {
     try {
-      const { problems, complete } = this.store.problems(doc);
+      const failure = this.unrecordedFailure(doc);
+      const stored = this.store.problems(doc);
+      // Complete with a kept failure: the version is not evaluated again (it would only fail again).
+      const { problems, complete } = failure ? { problems: sortProblems([...stored.problems, failure]), complete: true } : stored;
       const shown = settings.regimeNotes.enabled ? problems : problems.filter((p) => !REGIME_NOTE_CODES.has(p.code));
       return { items: shown.map((p) => toDiagnostic(p, doc.uri)), complete };
     } catch (e) {
