@@ -13,6 +13,7 @@ import { spectrumSamples } from '../../server/src/eval/spectrumSamples';
 import { textReport } from '../../server/src/cli/textReport';
 import { CURVE_FLOOR, segmentLayout, spectrumFrame } from '../../server/src/render/spectrumFrame';
 import { diagramFor } from '../../server/src/views/diagram';
+import { renderLines, type LinesViewData } from '../../server/src/render';
 import { all, byClass, parseSvg, pathPoints, textOf, type Node } from './svgTree';
 
 const fixture = (name: string): string => readFileSync(new URL(`../fixtures/${name}.sublevel`, import.meta.url), 'utf8');
@@ -183,10 +184,131 @@ describe('spectrumFrame and segmentLayout', () => {
   });
 
   it('widens a narrow segment about its centre on the common scale', () => {
-    const { segments, widths } = segmentLayout([[0, 100], [1000, 1001]], 500, 10, 70);
-    expect(widths).toEqual([420, 70]);
+    const { segments, widths } = segmentLayout([[0, 100], [1000, 1001]], 500, 10, 70, [-1000, 2000]);
+    expect(widths).toEqual([420, 70].map((w) => expect.closeTo(w, 9)));
     // 420 px for 100 Hz: the second segment's 70 px hold 70/4.2 Hz about its centre.
     expect(segments[1]![1] - segments[1]![0]).toBeCloseTo(70 / 4.2, 9);
     expect((segments[1]![0] + segments[1]![1]) / 2).toBeCloseTo(1000.5, 9);
+  });
+
+  it('shifts a widened segment back inside the sample window', () => {
+    const { segments, widths } = segmentLayout([[0, 100], [1000, 1001]], 500, 10, 70, [0, 1001]);
+    expect(widths).toEqual([420, 70].map((w) => expect.closeTo(w, 9)));
+    expect(segments[1]![1]).toBe(1001);
+    expect(segments[1]![0]).toBeCloseTo(1001 - 70 / 4.2, 9);
+  });
+
+  // Five narrow clusters 12.2 apart after a wide one (invented): widened about their centres to 70 px,
+  // two neighbours overlapped ([44.94, 57.36] and [57.14, 69.56]) and drew the frequencies between twice.
+  const crowded: [number, number][] = [[0, 39], [51.1, 51.2], [63.3, 63.4], [75.5, 75.6], [87.7, 87.8], [99.9, 100]];
+
+  it('merges widened segments that would meet instead of overlapping them, all inside the window and on one scale', () => {
+    const frame = spectrumFrame(crowded, [-50, 200]);
+    expect(frame.segments).toHaveLength(6);
+    const { segments, widths, gaps } = segmentLayout(frame.segments, 676, 16, 70, [-50, 200]);
+    const r = (v: number): number => Math.round(v * 1000) / 1000;
+    // The middle four pair up (their gaps would have taken under 32 px), each pair spanning both frames
+    // (51.094–63.406) plus 6 % of that a side; the last is widened to 70 px.
+    expect(segments.slice(0, 3).map((s) => s.map(r))).toEqual([[-2.34, 41.34], [50.355, 64.145], [74.755, 88.545]]);
+    expect(widths[3]).toBeCloseTo(70, 9);
+    for (let i = 0; i < segments.length; i++) {
+      expect(segments[i]![0]).toBeLessThan(segments[i]![1]);
+      expect(segments[i]![0]).toBeGreaterThanOrEqual(-50);
+      expect(segments[i]![1]).toBeLessThanOrEqual(200);
+      if (i > 0) expect(segments[i]![0]).toBeGreaterThan(segments[i - 1]![1]);
+    }
+    const scale = widths[0]! / (segments[0]![1] - segments[0]![0]);
+    segments.forEach(([a, b], i) => expect(widths[i]! / (b - a)).toBeCloseTo(scale, 9));
+    expect(widths.reduce((s, w) => s + w, 0) + 16 * (segments.length - 1)).toBeCloseTo(676, 9);
+    expect(gaps).toEqual(segments.slice(1).map(([a], i) => [segments[i]![1], a]));
+    // Every gap left out takes at least twice the break's 16 px on the scale.
+    for (const [a, b] of gaps) expect((b - a) * scale).toBeGreaterThanOrEqual(32);
+  });
+
+  it('keeps a segment narrower than 70 px inside the window when the window ends at its edge', () => {
+    const frame = spectrumFrame(crowded, [-50, 100.006]);
+    const { segments } = segmentLayout(frame.segments, 676, 16, 70, [-50, 100.006]);
+    expect(segments[segments.length - 1]![1]).toBeLessThanOrEqual(100.006);
+    for (let i = 1; i < segments.length; i++) expect(segments[i]![0]).toBeGreaterThan(segments[i - 1]![1]);
+  });
+});
+
+describe('the figure over those crowded segments (invented curve and components, MHz)', () => {
+  const MHz = 1e6;
+  const crowded: [number, number][] = [[0, 39], [51.1, 51.2], [63.3, 63.4], [75.5, 75.6], [87.7, 87.8], [99.9, 100]];
+
+  /** A broad bump over 0–39 MHz and a narrow peak at the centre of each other stretch, sampled every 0.01 MHz. */
+  function crowdedFigure(windowMHz: [number, number], extra: number[]): { svg: Node; total: number } {
+    const peaks = crowded.slice(1).map(([a, b]) => (a + b) / 2);
+    const offsetHz: number[] = [];
+    const intensity: number[] = [];
+    for (let f = windowMHz[0]; f <= windowMHz[1] + 1e-9; f += 0.01) {
+      offsetHz.push(f * MHz);
+      const bump = Math.exp(-(((f - 19.5) / 5.3) ** 2) / 2);
+      intensity.push(bump + peaks.reduce((t, p) => t + Math.exp(-(((f - p) / 0.015) ** 2) / 2), 0));
+    }
+    // Sticks: three under the bump, one on each narrow peak, one between two of them (57.25 MHz: drawn in
+    // both overlapping segments before), one inside the window where the curve is absent (150 MHz),
+    // one a million times weaker than the rest (not drawn), and any `extra` ones.
+    const at = [10, 19.5, 30, ...peaks, 57.25, 150, ...extra];
+    const components: LinesViewData['components'] = at.map((f, i) => ({ offsetHz: f * MHz, strength: 1, polarization: 'pi', label: `c${i}` }));
+    components.push({ offsetHz: 20 * MHz, strength: 1e-6, polarization: 'pi', label: 'faint' });
+    const d: LinesViewData = {
+      title: 'crowded',
+      components,
+      spectrum: { offsetHz, intensity, caption: 'invented curve', stretches: crowded.map(([a, b]) => [a * MHz, b * MHz]), windowHz: [windowMHz[0] * MHz, windowMHz[1] * MHz], points: offsetHz.length },
+    };
+    const src = renderLines(d, { kind: 'export' });
+    expect(src).not.toMatch(/NaN|Infinity/);
+    return { svg: parseSvg(src), total: components.length };
+  }
+
+  const domainHz = (g: Node): [number, number] => {
+    const [a, b] = pair(g.attrs['data-x-domain']!);
+    const off = Number(g.attrs['data-x-offset']);
+    return [a + off, b + off];
+  };
+  const leftOut = (svg: Node, cls: string): number => Number(byClass(svg, cls)[0]?.attrs['data-left-out'] ?? 0);
+
+  it('draws each component once: drawn, outside the frame and too faint add up to the count', () => {
+    const { svg, total } = crowdedFigure([-50, 200], []);
+    const segments = byClass(svg, 'sl-segment');
+    const drawn = segments.flatMap(sticks);
+    expect(new Set(drawn.map((n) => n.attrs['data-label'] ?? textOf(n))).size).toBe(drawn.length);
+    // 8 sticks in the frame; 150 MHz outside it (was counted 0: 57.25 MHz was drawn twice); the faint one.
+    expect(drawn).toHaveLength(9);
+    expect(leftOut(svg, 'sl-outside-note')).toBe(1);
+    expect(byClass(svg, 'sl-beyond-note')).toHaveLength(0);
+    expect(drawn.length + leftOut(svg, 'sl-outside-note') + leftOut(svg, 'sl-faint-note')).toBe(total);
+  });
+
+  it('names in its note and break marks the gaps between the segments as drawn', () => {
+    const { svg } = crowdedFigure([-50, 200], []);
+    const segments = byClass(svg, 'sl-segment').map(domainHz);
+    expect(segments).toHaveLength(4);
+    const gaps = segments.slice(1).map(([a], i) => [segments[i]![1], a] as [number, number]);
+    const marks = byClass(svg, 'sl-axis-break').map((m) => pair(m.attrs['data-left-out-hz']!));
+    marks.forEach((m, i) => {
+      expect(m[0]).toBeLessThan(m[1]);
+      expect(m[0]).toBeCloseTo(gaps[i]![0], -1);
+      expect(m[1]).toBeCloseTo(gaps[i]![1], -1);
+    });
+    expect(marks).toHaveLength(3);
+    const widths = gaps.map(([a, b]) => (b - a) / MHz);
+    const note = notes(svg).find((t) => t.startsWith('axis broken'))!;
+    const [, n, lo, hi] = /: (\d+) gaps of ([\d.]+)–([\d.]+) MHz left out/.exec(note)!;
+    expect(Number(n)).toBe(3);
+    expect(Number(lo)).toBeCloseTo(Math.min(...widths), 2);
+    expect(Number(hi)).toBeCloseTo(Math.max(...widths), 1);
+  });
+
+  it('never draws past the window a component that the window note counts', () => {
+    // The window ends just past the last stretch; a component at 102 MHz lies beyond it.
+    const { svg, total } = crowdedFigure([-50, 100.05], [102]);
+    const segments = byClass(svg, 'sl-segment');
+    for (const g of segments) expect(domainHz(g)[1]).toBeLessThanOrEqual(100.05 * MHz + 1);
+    const drawn = segments.flatMap(sticks).length;
+    expect(leftOut(svg, 'sl-beyond-note')).toBe(2);
+    expect(drawn + leftOut(svg, 'sl-outside-note') + leftOut(svg, 'sl-beyond-note') + leftOut(svg, 'sl-faint-note')).toBe(total);
   });
 });

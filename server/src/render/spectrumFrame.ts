@@ -48,9 +48,9 @@ export function mergeStretches(stretches: readonly Stretch[]): Stretch[] {
 }
 
 export interface SpectrumFrame {
-  /** The frames drawn side by side, ascending; one unless the axis is broken. */
+  /** The frames to draw side by side, ascending; one unless the axis is broken. segmentLayout may widen or merge them. */
   segments: Stretch[];
-  /** The stretches of frequency left out between segments. */
+  /** The stretches of frequency between them (before segmentLayout: the figure's notes use its gaps). */
   gaps: Stretch[];
 }
 
@@ -83,31 +83,102 @@ export function spectrumFrame(stretches: readonly Stretch[], window: Stretch): S
   return { segments, gaps };
 }
 
+export interface SegmentLayout {
+  /** The segments as drawn: ascending, apart, inside the window; fewer than asked when some met. */
+  segments: Stretch[];
+  /** Their widths in px, on one scale (Hz per px). */
+  widths: number[];
+  /** The stretches of frequency left out between them, from the segments as drawn. */
+  gaps: Stretch[];
+}
+
 /**
- * Pixel widths for segments drawn on one scale across `width` px, with `gap` px between them:
- * a segment narrower than `minWidth` px is widened about its centre (same scale, more margin).
- * Returns the widened segments and their widths.
+ * Pixel widths for segments drawn on one scale across `width` px, with `gap` px between them.
+ * A segment narrower than `minWidth` px is widened on that scale (about its centre, shifted to
+ * stay inside its room: the sample `window` and halfway to each neighbour), or as far as its room
+ * allows. Two segments whose gap would take fewer than twice the break's own `gap` px on that
+ * scale are merged (with a margin of their own) and the layout is done again: such a break saves
+ * too little to be worth reading across (from memory, a judgement of legibility), and widened
+ * segments that meet would draw the same frequencies twice.
  */
-export function segmentLayout(segments: readonly Stretch[], width: number, gap: number, minWidth: number): { segments: Stretch[]; widths: number[] } {
-  const usable = width - gap * (segments.length - 1);
-  const spans = segments.map(([a, b]) => b - a);
-  if (segments.length === 1) return { segments: [[...segments[0]!] as Stretch], widths: [usable] };
-  // Fix the narrow ones at minWidth and share the rest by span, until none is narrow.
-  const fixed = new Set<number>();
-  let scale = 0;
-  for (let round = 0; round <= segments.length; round++) {
-    const free = spans.reduce((s, v, i) => (fixed.has(i) ? s : s + v), 0);
-    scale = free > 0 ? (usable - fixed.size * minWidth) / free : 0;
-    const narrow = spans.findIndex((v, i) => !fixed.has(i) && v * scale < minWidth);
-    if (narrow < 0) break;
-    fixed.add(narrow);
+export function segmentLayout(segments: readonly Stretch[], width: number, gap: number, minWidth: number, window: Stretch): SegmentLayout {
+  const given = segments.map(([a, b]): Stretch => [Math.max(window[0], a), Math.min(window[1], b)]);
+  // Runs of given segments drawn as one, first and last index.
+  let runs = given.map((_, i): [number, number] => [i, i]);
+  for (;;) {
+    const frames = runs.map((run) => mergedFrame(given, run, window));
+    if (frames.length <= 1) return { segments: frames, widths: frames.map(() => width), gaps: [] };
+    const usable = width - gap * (frames.length - 1);
+    const rooms = frames.map(([a, b], i): Stretch => [
+      i > 0 ? Math.max(window[0], (frames[i - 1]![1] + a) / 2) : window[0],
+      i < frames.length - 1 ? Math.min(window[1], (b + frames[i + 1]![0]) / 2) : window[1],
+    ]);
+    const scale = commonScale(frames, rooms, usable, minWidth);
+    const placed = frames.map((f, i) => widened(f, rooms[i]!, minWidth / scale));
+    // The narrowest gap too small to leave out on this scale: merge across it, then lay out again.
+    let meet = -1;
+    for (let i = 1; i < placed.length; i++) {
+      const g = placed[i]![0] - placed[i - 1]![1];
+      if (g * scale < 2 * gap && (meet < 0 || g < placed[meet]![0] - placed[meet - 1]![1])) meet = i;
+    }
+    if (meet < 0) {
+      const gaps = placed.slice(1).map(([a], i): Stretch => [placed[i]![1], a]);
+      return { segments: placed, widths: placed.map(([a, b]) => (b - a) * scale), gaps };
+    }
+    runs = [...runs.slice(0, meet - 1), [runs[meet - 1]![0], runs[meet]![1]], ...runs.slice(meet + 1)];
   }
-  const widths = spans.map((v, i) => (fixed.has(i) || !(scale > 0) ? minWidth : v * scale));
-  const out = segments.map(([a, b], i): Stretch => {
-    if (!fixed.has(i) || !(scale > 0)) return [a, b];
-    const half = minWidth / scale / 2;
-    const mid = (a + b) / 2;
-    return [mid - half, mid + half];
+}
+
+/**
+ * The given segments `first`..`last` drawn as one: a single one as given; several merged span
+ * them all plus MARGIN of that span a side (their inner margins are gone), never past the window
+ * or halfway to the next given segment.
+ */
+function mergedFrame(given: readonly Stretch[], [first, last]: [number, number], window: Stretch): Stretch {
+  const a = given[first]![0];
+  const b = given[last]![1];
+  if (first === last) return [a, b];
+  const m = MARGIN * (b - a);
+  const lo = first > 0 ? Math.max(window[0], (given[first - 1]![1] + a) / 2) : window[0];
+  const hi = last < given.length - 1 ? Math.min(window[1], (b + given[last + 1]![0]) / 2) : window[1];
+  return [Math.max(lo, a - m), Math.min(hi, b + m)];
+}
+
+/**
+ * The px per Hz at which the segments fill `usable` px: each is drawn over its own span, or over
+ * `minWidth` px when that is wider, but never over more than its room. The total grows with the
+ * scale, so bisection brackets it; the exact value then follows from which of the three holds for each.
+ */
+function commonScale(frames: readonly Stretch[], rooms: readonly Stretch[], usable: number, minWidth: number): number {
+  const spans = frames.map(([a, b]) => b - a);
+  const roomSpans = rooms.map(([a, b]) => b - a);
+  const total = (s: number): number => spans.reduce((t, v, i) => t + Math.min(Math.max(s * v, minWidth), s * roomSpans[i]!), 0);
+  const widest = Math.max(...spans);
+  if (!(widest > 0) || !(usable > 0)) return widest > 0 ? usable / widest : 1;
+  // At usable/widest the widest alone fills the width: the root lies below.
+  let lo = 0;
+  let hi = usable / widest;
+  for (let k = 0; k < 200 && hi - lo > 1e-15 * hi; k++) {
+    const mid = (lo + hi) / 2;
+    if (total(mid) < usable) lo = mid;
+    else hi = mid;
+  }
+  const s = (lo + hi) / 2;
+  let fixedPx = 0;
+  let perScale = 0;
+  spans.forEach((v, i) => {
+    if (s * v >= minWidth) perScale += v;
+    else if (s * roomSpans[i]! <= minWidth) perScale += roomSpans[i]!;
+    else fixedPx += minWidth;
   });
-  return { segments: out, widths };
+  const exact = (usable - fixedPx) / perScale;
+  return perScale > 0 && exact > 0 ? exact : s;
+}
+
+/** `frame` widened to `span` (if narrower) about its centre, shifted into `room`, and never wider than the room. */
+function widened([a, b]: Stretch, [lo, hi]: Stretch, span: number): Stretch {
+  if (!(span > b - a)) return [a, b];
+  const d = Math.min(span, hi - lo);
+  const start = Math.max(lo, Math.min((a + b) / 2 - d / 2, hi - d));
+  return [start, start + d];
 }

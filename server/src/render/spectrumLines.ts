@@ -109,8 +109,9 @@ export function renderSpectrumLines(d: LinesViewData, curve: LineSpectrumCurve, 
   const legendSvg = legendRows(legend, 64, 48, WIDTH - 80, pal);
 
   const box: PlotBox = { left: 64, right: WIDTH - (ownScale ? 60 : 20), top: 48 + legendSvg.height + 16, bottom: HEIGHT - 56 };
-  const layout = segmentLayout(frame.segments, box.right - box.left, BREAK_PX, MIN_SEGMENT_PX);
-  const segments = layout.segments;
+  // The segments as drawn (widened, or merged where widening made them meet): the notes and break marks follow these, not the frame.
+  const layout = segmentLayout(frame.segments, box.right - box.left, BREAK_PX, MIN_SEGMENT_PX, window);
+  const { segments, gaps } = layout;
   // The finer samples are drawn when the report's step over the peaks or show as corners on this scale.
   const pxPerHz = layout.widths[0]! / (segments[0]![1] - segments[0]![0] || 1);
   const step = curve.reportStepHz;
@@ -168,7 +169,7 @@ export function renderSpectrumLines(d: LinesViewData, curve: LineSpectrumCurve, 
         'data-x-offset': dataNum(off.offset),
       }, parts),
     );
-    if (i > 0) body.push(breakMark(left - BREAK_PX / 2, box, segments[i - 1]![1], seg[0], pal));
+    if (i > 0) body.push(breakMark(left - BREAK_PX / 2, box, gaps[i - 1]!, pal));
     left += w + BREAK_PX;
   });
   if (segments.length > 1 && !anyOffset) {
@@ -184,7 +185,7 @@ export function renderSpectrumLines(d: LinesViewData, curve: LineSpectrumCurve, 
   const floorText = trimNumber(floorFraction, 2);
   const windowText = `(the report’s ${curve.points ?? samples.offsetHz.length} samples: ${figureMinus(frequencyText(window[0], 5))} to ${figureMinus(frequencyText(window[1], 5))})`;
   if (segments.length > 1) {
-    notes.push({ cls: 'sl-frame-note', text: `axis broken where the curve is under ${floorText} × its peak: ${frame.gaps.length} ${frame.gaps.length === 1 ? 'gap' : 'gaps'} of ${gapWidths(frame.gaps)} left out, one scale` });
+    notes.push({ cls: 'sl-frame-note', text: `axis broken where the curve is under ${floorText} × its peak: ${gaps.length} ${gaps.length === 1 ? 'gap' : 'gaps'} of ${gapWidths(gaps)} left out, one scale` });
     notes.push({ cls: 'sl-window-note', text: `frames: where the curve exceeds ${floorText} × its peak ${windowText}` });
   } else if (segments[0]![0] > window[0] || segments[0]![1] < window[1]) {
     notes.push({ cls: 'sl-window-note', text: `frame: where the curve exceeds ${floorText} × its peak ${windowText}` });
@@ -234,7 +235,7 @@ export function renderSpectrumLines(d: LinesViewData, curve: LineSpectrumCurve, 
 }
 
 /** Two short slanted strokes across the axis line where a stretch of frequency is left out. */
-function breakMark(cx: number, box: PlotBox, from: number, to: number, pal: Palette): string {
+function breakMark(cx: number, box: PlotBox, [from, to]: Stretch, pal: Palette): string {
   const d = [-3, 3].map((dx) => `M${px(cx + dx - 3)},${px(box.bottom + 6)}L${px(cx + dx + 3)},${px(box.bottom - 6)}`).join('');
   return el('path', { class: 'sl-axis-break', 'data-left-out-hz': `${dataNum(from)},${dataNum(to)}`, d, stroke: pal.axis, 'stroke-width': 1.2, fill: 'none' }, [
     titleEl(`axis broken: ${figureMinus(frequencyText(from, 5))} to ${figureMinus(frequencyText(to, 5))} left out`),
