@@ -1,8 +1,7 @@
 // Exact slopes of a peak position (physics/beam/peakSlopes.ts) against central finite differences
 // of the maximum of the exact profile (peakRefine.ts exactProfile). The maximum for the differences
 // is found independently of the code under test: bisection on a central difference of the profile,
-// which places it to ~1e-12 m (the pattern's golden-section refinement stops at ~1e-5 relative,
-// too coarse to difference).
+// which places it to ~1e-12 m (kept apart from the pattern's own refinement, the code under test's neighbour).
 import { describe, expect, it } from 'vitest';
 import { deflectionCoefficient, detectorPattern, peakSlopes, slitImage, type BeamGeometry, type PatternInput, type SlitImage } from '../../server/src/physics/beam';
 import { exactProfile, type RefineMember } from '../../server/src/physics/beam/peakRefine';
