@@ -80,3 +80,15 @@ describe('the closed-form slope', () => {
 
 /** Measured worst 4.0e-10 (the 40 u beam; 2.5e-11 for 6 u). */
 const SLOPE_TOLERANCE = 1e-9;
+
+describe('guards of the refinement', () => {
+  const image = slitImage(geometry);
+  const one = [{ k: deflectionCoefficient(1.5 * MU, massKg, geometry), weight: 1 }];
+  it('keeps a guess on the flank, where no cell near it turns down', () => {
+    expect(refinePeak(1.2e-3, 2e-6, one, law, image)).toBe(1.2e-3);
+  });
+  it('puts ±k members of equal weight at 0 exactly, and keeps the guess for a single-speed beam', () => {
+    expect(refinePeak(3e-9, 2e-6, [...one, { k: -one[0]!.k, weight: 1 }], law, image)).toBe(0);
+    expect(refinePeak(1.7e-3, 2e-6, one, speedLawFor({ kind: 'single', speed: 500 }, massKg), image)).toBe(1.7e-3);
+  });
+});

@@ -132,17 +132,19 @@ export function refinePeak(guessM: number, stepM: number, members: readonly Refi
   const h = 2 ** Math.ceil(Math.log2(1.5 * stepM));
   const j = Math.floor(guessM / h);
   const slope = (x: number): number => exactProfileSlope(x, members, law, image);
-  // A maximum needs the slope rising into it and falling after it: the first lattice cell where it turns
-  // down, among the three around the guess; none means the guess was not at a top, and it is kept.
-  let prev = slope((j - 1) * h);
-  for (let i = j - 1; i <= j + 1; i++) {
-    const next = slope((i + 1) * h);
-    if (prev === 0 && next < 0) return i * h;
-    if (prev > 0 && next <= 0) {
-      const x = next === 0 ? (i + 1) * h : bracketedRoot(slope, i * h, (i + 1) * h);
+  // A maximum needs the slope rising into it and falling after it. The cells tried: the guess's own,
+  // then its nearer neighbour, then the other (two tops of a merged peak within a bin keep the grid's);
+  // none turning down means the guess was not at a top, and it is kept.
+  const slopes = [slope((j - 1) * h), slope(j * h), slope((j + 1) * h), slope((j + 2) * h)];
+  const nearerLeft = guessM - j * h < h / 2;
+  for (const i of nearerLeft ? [j, j - 1, j + 1] : [j, j + 1, j - 1]) {
+    const before = slopes[i - j + 1]!;
+    const after = slopes[i - j + 2]!;
+    if (before === 0 && after < 0) return i * h;
+    if (before > 0 && after <= 0) {
+      const x = after === 0 ? (i + 1) * h : bracketedRoot(slope, i * h, (i + 1) * h);
       return Number.isFinite(x) ? x : guessM;
     }
-    prev = next;
   }
   return guessM;
 }
