@@ -12,7 +12,11 @@ import { generateSetup } from '../../bench/generatedSetup';
 import { adviceScenario } from '../fixtures/adviceScenarios';
 import { magnetAndBeam, speciesX } from '../fixtures/ovenBeam';
 
-/** [seed, index, options as found before the change]; the comment names the source kind. */
+/**
+ * [seed, index, options as found before the change]; the comment names the source kind. 4/57's present
+ * dip was re-pinned when peak modes became the zero of the profile's slope: the dip divides by the
+ * pattern at the two refined positions, which moved, and it moved in its 12th digit (was 0.9829559272284413).
+ */
 const PINNED: [number, number, Pick<ResolvingOptions, 'presentWorstDipRatio' | 'options'>][] = [
   [1, 0, {"presentWorstDipRatio": 1, "options": [{"parameter": "gradient", "value": 29.575891128320098, "worstDipRatio": 0.7997728908951158, "resolvesAll": true}, {"parameter": "magnetLength", "value": 5.716550362451885, "worstDipRatio": 0.7999170685393282, "resolvesAll": true}]}], // jet
   [1, 3, {"presentWorstDipRatio": 1, "options": [{"parameter": "gradient", "value": -123.22639344521549, "worstDipRatio": 0.7976031097516624, "resolvesAll": true}, {"parameter": "magnetLength", "value": 0.1738567402297006, "worstDipRatio": 0.799943873959914, "resolvesAll": true}, {"parameter": "slits", "value": 0.3, "worstDipRatio": 0, "resolvesAll": true}]}], // single
@@ -22,7 +26,7 @@ const PINNED: [number, number, Pick<ResolvingOptions, 'presentWorstDipRatio' | '
   [4, 5, {"presentWorstDipRatio": 1, "options": [{"parameter": "gradient", "value": -355.0861821271249, "worstDipRatio": 0.9781587783068532, "resolvesAll": false}, {"parameter": "magnetLength", "value": 0.8291639328002931, "worstDipRatio": 0.9771968115296698, "resolvesAll": false}]}], // effusive
   [4, 7, {"presentWorstDipRatio": 1, "options": [{"parameter": "gradient", "value": 2.0454839680165366, "worstDipRatio": 0.7997148270089341, "resolvesAll": true}, {"parameter": "magnetLength", "value": 0.7347765376905828, "worstDipRatio": 0.7999587316650537, "resolvesAll": true}, {"parameter": "slits", "value": 0.1, "worstDipRatio": 0.6274190306934007, "resolvesAll": true}]}], // effusive
   [4, 14, {"presentWorstDipRatio": 1, "options": [{"parameter": "speedSpread", "value": 0.2, "worstDipRatio": 0.5833908598100342, "resolvesAll": true}]}], // jet
-  [4, 57, {"presentWorstDipRatio": 0.9829559272284413, "options": [{"parameter": "gradient", "value": -22.209879180958005, "worstDipRatio": 0.7997499269959809, "resolvesAll": true}, {"parameter": "magnetLength", "value": 0.4519134398337896, "worstDipRatio": 0.799777288627811, "resolvesAll": true}, {"parameter": "drift", "value": 3.599724769592285, "worstDipRatio": 0.9099222680545888, "resolvesAll": false}, {"parameter": "slits", "value": 0.3, "worstDipRatio": 0.5365137255331833, "resolvesAll": true}]}], // effusive
+  [4, 57, {"presentWorstDipRatio": 0.982955927222361, "options": [{"parameter": "gradient", "value": -22.209879180958005, "worstDipRatio": 0.7997499269959809, "resolvesAll": true}, {"parameter": "magnetLength", "value": 0.4519134398337896, "worstDipRatio": 0.799777288627811, "resolvesAll": true}, {"parameter": "drift", "value": 3.599724769592285, "worstDipRatio": 0.9099222680545888, "resolvesAll": false}, {"parameter": "slits", "value": 0.3, "worstDipRatio": 0.5365137255331833, "resolvesAll": true}]}], // effusive
   [2, 1, {"presentWorstDipRatio": 1, "options": []}], // effusive
 ];
 

@@ -1,6 +1,6 @@
 // Peak positions of narrow-slit multi-peak beams against the analytic mode of each sublevel's
 // profile: tests/reference/beam_peak_modes.json, written by scripts/reference/beam_peak_modes.py
-// (SciPy quad + minimize_scalar; versions in the file).
+// (the zero of the slope by mpmath quadrature at 30 digits and Illinois; versions in the file).
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -14,9 +14,11 @@ interface Scenario {
   source: SpeedDistribution;
   sublevels: { label: string; moment_JT: number; mode_m: number; fwhm_m: number | null }[];
 }
+/** Measured worst 6.5e-13 (docs/beam.md §4); the reference holds ~30 digits, the slope's round-off sets this. */
+const MODE_TOLERANCE = 2e-12;
 const ref = JSON.parse(readFileSync(join(__dirname, '..', 'reference', 'beam_peak_modes.json'), 'utf8')) as { scenarios: Scenario[] };
 
-describe('peak positions agree with the analytic mode to 1e-5 relative', () => {
+describe('peak positions agree with the analytic mode to MODE_TOLERANCE relative', () => {
   for (const s of ref.scenarios) {
     it(s.name, () => {
       const p = detectorPattern({
@@ -34,8 +36,8 @@ describe('peak positions agree with the analytic mode to 1e-5 relative', () => {
           expect(own.peakM).toBe(0);
           continue;
         }
-        expect(Math.abs(peak.positionM / r.mode_m - 1), r.label).toBeLessThan(1e-5);
-        expect(Math.abs(own.peakM / r.mode_m - 1), r.label).toBeLessThan(1e-5);
+        expect(Math.abs(peak.positionM / r.mode_m - 1), r.label).toBeLessThan(MODE_TOLERANCE);
+        expect(Math.abs(own.peakM / r.mode_m - 1), r.label).toBeLessThan(MODE_TOLERANCE);
       }
     });
   }

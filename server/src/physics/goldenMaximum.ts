@@ -1,9 +1,10 @@
 /**
  * The maximum of a function with one maximum inside [lo, hi], by golden-section search: the
  * bracket shrinks by 0.618 a step, each step one new evaluation, until it is narrower than
- * `stopWidth` or `maxSteps` steps are done. Returns the bracket's middle. Shared by the beam's
- * peak refinement and the spectrum's highest point (the same steps in the same order as each had),
- * and by the beam line's closest approach to a source (the maximum of the negative distance).
+ * `stopWidth` or `maxSteps` steps are done. Returns the bracket's middle. Values settle a flat top
+ * only to ~√ε of its width: where the slope is at hand, its zero is the better mode (the beam's
+ * peak refinement, beam/peakRefine.ts). Used by the spectrum's highest point and by the beam line's
+ * closest approach to a source (the maximum of the negative distance).
  */
 const INVERSE_GOLDEN = (Math.sqrt(5) - 1) / 2;
 

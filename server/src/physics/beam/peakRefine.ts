@@ -7,14 +7,19 @@
  * (both from the speed law's cumulative integrals, exact for the oven)
  *   P_i(x) = (1/(a b w)) Σ_{s,t = ±1} s t ∫_{x + sa/2 + tb/2 − w/2}^{x + sa/2 + tb/2 + w/2} H(z) dz,
  * and (1/(a b)) Σ s t H(x + sa/2 + tb/2) for a point detector (w = 0). The integrals are
- * Gauss–Legendre over spans of the detector width, where H is smooth. A golden-section search
- * around the grid's estimate then finds the mode (docs/beam.md §4 gives the measured accuracy).
+ * Gauss–Legendre over spans of the detector width, where H is smooth. The slope needs no
+ * antiderivative: with c = x + sa/2 + tb/2,
+ *   P_i'(x) = (1/(a b w)) Σ s t [H(c + w/2) − H(c − w/2)],  and (1/(a b)) Σ s t P(z ≤ c) for w = 0,
+ * (the bracket computed as ∫ P(z ≤ u) du over the detector width, Gauss–Legendre), and the mode is
+ * its zero, found by bisection around the grid's estimate. A search on the values
+ * settled a flat top only to ~√ε of the width (mirror-image peaks then differed by 2e-6 of their
+ * position); the slope's sign settles it to its round-off (docs/beam.md §4 gives the measured accuracy).
  */
 import { cumulativeAt } from './depositDeflections';
 import { gaussLegendre } from './gaussLegendre';
 import type { SlitImage } from './slitImage';
 import type { SpeedLaw } from './speedLaw';
-import { goldenMaximum } from '../goldenMaximum';
+import { bracketedRoot } from '../bracketedRoot';
 import { mirrorSymmetric } from '../mirrorSymmetry';
 
 export interface RefineMember {
@@ -46,6 +51,48 @@ function integral(lo: number, hi: number, k: number, law: SpeedLaw): number {
   return s * half;
 }
 
+/** P(z ≤ e) for one sublevel: the slope of its antiderivative H. */
+function cumulative(e: number, k: number, law: SpeedLaw): number {
+  if (k === 0) return e >= 0 ? 1 : 0;
+  cumulativeAt(e, k, law, at);
+  return at[0];
+}
+
+/**
+ * ∫_lo^hi P(z ≤ u) du = H(hi) − H(lo), by Gauss–Legendre like `integral`: the difference of H itself
+ * cancels to the detector width's share of values of the size of the deflection, and left the slope
+ * zero's position 1e-9 of itself in round-off; the integral keeps the full digits of P.
+ */
+function cumulativeIntegral(lo: number, hi: number, k: number, law: SpeedLaw): number {
+  if (k === 0) return Math.max(hi, 0) - Math.max(lo, 0);
+  if (lo < 0 && hi > 0) return cumulativeIntegral(lo, 0, k, law) + cumulativeIntegral(0, hi, k, law);
+  const { nodes, weights } = gaussLegendre(NODES);
+  const mid = 0.5 * (lo + hi);
+  const half = 0.5 * (hi - lo);
+  let s = 0;
+  for (let j = 0; j < NODES; j++) s += weights[j] * cumulative(mid + half * nodes[j], k, law);
+  return s * half;
+}
+
+/** The exact profile's slope dP/dx at x, per square metre: no quadrature beyond the detector width's. */
+export function exactProfileSlope(x: number, members: readonly RefineMember[], law: SpeedLaw, image: SlitImage): number {
+  const a = image.boxAM;
+  const b = image.boxBM;
+  const w = image.detectorM;
+  let total = 0;
+  for (const m of members) {
+    let sum = 0;
+    for (const s of [-1, 1]) {
+      for (const t of [-1, 1]) {
+        const c = x + (s * a) / 2 + (t * b) / 2;
+        sum += s * t * (w > 0 ? cumulativeIntegral(c - w / 2, c + w / 2, m.k, law) / w : cumulative(c, m.k, law));
+      }
+    }
+    total += (m.weight * sum) / (a * b);
+  }
+  return total;
+}
+
 /** The exact (unbinned) profile of the members at x, per metre, weights as given. */
 export function exactProfile(x: number, members: readonly RefineMember[], law: SpeedLaw, image: SlitImage): number {
   const a = image.boxAM;
@@ -66,10 +113,11 @@ export function exactProfile(x: number, members: readonly RefineMember[], law: S
 }
 
 /**
- * The mode of the members' exact profile within `guessM` ± 1.5 `stepM` (the grid's estimate and
- * about one bin), by golden-section search down to 1e-6 of that bracket. The guess itself when
- * the refinement cannot improve on it (a single-speed beam's flat top has no unique mode; slits
- * of zero width have no box form; a maximum on the bracket's edge means the guess was not at the top).
+ * The mode of the members' exact profile within about `guessM` ± 1.5 `stepM` (the grid's estimate and
+ * about one bin): the zero of its slope, bisected down to neighbouring doubles. The guess itself
+ * when the refinement cannot improve on it (a single-speed beam's flat top has no unique mode;
+ * slits of zero width have no box form; a slope of one sign across the bracket means the guess
+ * was not at the top).
  */
 export function refinePeak(guessM: number, stepM: number, members: readonly RefineMember[], law: SpeedLaw, image: SlitImage): number {
   // Members that pair off as ±k with equal weights (a merged σ pair of a J = 1/2 level), or all undeflected,
@@ -78,9 +126,25 @@ export function refinePeak(guessM: number, stepM: number, members: readonly Refi
   if (law.singleSpeed !== undefined || !(image.boxAM > 0 && image.boxBM > 0) || !(stepM > 0)) return guessM;
   // The kernel is symmetric: a peak deflected to −z is the mirror image of one at +z, computed the same way.
   if (members.every((m) => m.k <= 0)) return -refinePeak(-guessM, stepM, members.map((m) => ({ k: -m.k, weight: m.weight })), law, image);
-  const f = (x: number): number => exactProfile(x, members, law, image);
-  const half = 1.5 * stepM;
-  const x = goldenMaximum(f, guessM - half, guessM + half, 1e-6 * half);
-  const onEdge = Math.min(x - (guessM - half), guessM + half - x) < 1e-5 * half;
-  return Number.isFinite(x) && !onEdge && f(x) >= f(guessM) ? x : guessM;
+  // The bracket is cut from a lattice of multiples of a power of two (h ≥ 1.5 bins): the bisection then
+  // visits the same points whatever the guess, so the answer inside the slope's round-off band does not
+  // depend on it (mirror-image peaks of a grid that is not symmetric come out exact negatives).
+  const h = 2 ** Math.ceil(Math.log2(1.5 * stepM));
+  const j = Math.floor(guessM / h);
+  const slope = (x: number): number => exactProfileSlope(x, members, law, image);
+  // A maximum needs the slope rising into it and falling after it. The cells tried: the guess's own,
+  // then its nearer neighbour, then the other (two tops of a merged peak within a bin keep the grid's);
+  // none turning down means the guess was not at a top, and it is kept.
+  const slopes = [slope((j - 1) * h), slope(j * h), slope((j + 1) * h), slope((j + 2) * h)];
+  const nearerLeft = guessM - j * h < h / 2;
+  for (const i of nearerLeft ? [j, j - 1, j + 1] : [j, j + 1, j - 1]) {
+    const before = slopes[i - j + 1]!;
+    const after = slopes[i - j + 2]!;
+    if (before === 0 && after < 0) return i * h;
+    if (before > 0 && after <= 0) {
+      const x = after === 0 ? (i + 1) * h : bracketedRoot(slope, i * h, (i + 1) * h);
+      return Number.isFinite(x) ? x : guessM;
+    }
+  }
+  return guessM;
 }
