@@ -40,15 +40,20 @@ function antiderivative(e: number, k: number, law: SpeedLaw): number {
   return e * at[0] - at[1];
 }
 
-/** ∫_lo^hi H(z) dz by Gauss–Legendre, split at 0 where H of an undeflected part has its kink. */
-function integral(lo: number, hi: number, k: number, law: SpeedLaw): number {
-  if (lo < 0 && hi > 0) return integral(lo, 0, k, law) + integral(0, hi, k, law);
+/** ∫_lo^hi f(z) dz by Gauss–Legendre, split at 0 where an undeflected part has its kink. */
+function gaussIntegral(f: (e: number, k: number, law: SpeedLaw) => number, lo: number, hi: number, k: number, law: SpeedLaw): number {
+  if (lo < 0 && hi > 0) return gaussIntegral(f, lo, 0, k, law) + gaussIntegral(f, 0, hi, k, law);
   const { nodes, weights } = gaussLegendre(NODES);
   const mid = 0.5 * (lo + hi);
   const half = 0.5 * (hi - lo);
   let s = 0;
-  for (let j = 0; j < NODES; j++) s += weights[j] * antiderivative(mid + half * nodes[j], k, law);
+  for (let j = 0; j < NODES; j++) s += weights[j] * f(mid + half * nodes[j], k, law);
   return s * half;
+}
+
+/** ∫_lo^hi H(z) dz. */
+function integral(lo: number, hi: number, k: number, law: SpeedLaw): number {
+  return gaussIntegral(antiderivative, lo, hi, k, law);
 }
 
 /** P(z ≤ e) for one sublevel: the slope of its antiderivative H. */
@@ -65,51 +70,47 @@ function cumulative(e: number, k: number, law: SpeedLaw): number {
  */
 function cumulativeIntegral(lo: number, hi: number, k: number, law: SpeedLaw): number {
   if (k === 0) return Math.max(hi, 0) - Math.max(lo, 0);
-  if (lo < 0 && hi > 0) return cumulativeIntegral(lo, 0, k, law) + cumulativeIntegral(0, hi, k, law);
-  const { nodes, weights } = gaussLegendre(NODES);
-  const mid = 0.5 * (lo + hi);
-  const half = 0.5 * (hi - lo);
-  let s = 0;
-  for (let j = 0; j < NODES; j++) s += weights[j] * cumulative(mid + half * nodes[j], k, law);
-  return s * half;
+  return gaussIntegral(cumulative, lo, hi, k, law);
+}
+
+/**
+ * Σ_members w/(a b) Σ_{s,t = ±1} s t g(c), c = x + s a/2 + t b/2, with g the detector's average of
+ * `span` over its width, or `point` at c for a point detector: the box form both the profile and
+ * its slope take.
+ */
+function boxSum(
+  x: number,
+  members: readonly RefineMember[],
+  law: SpeedLaw,
+  image: SlitImage,
+  point: (e: number, k: number, law: SpeedLaw) => number,
+  span: (lo: number, hi: number, k: number, law: SpeedLaw) => number,
+): number {
+  const a = image.boxAM;
+  const b = image.boxBM;
+  const w = image.detectorM;
+  let total = 0;
+  for (const m of members) {
+    let sum = 0;
+    for (const s of [-1, 1]) {
+      for (const t of [-1, 1]) {
+        const c = x + (s * a) / 2 + (t * b) / 2;
+        sum += s * t * (w > 0 ? span(c - w / 2, c + w / 2, m.k, law) / w : point(c, m.k, law));
+      }
+    }
+    total += (m.weight * sum) / (a * b);
+  }
+  return total;
 }
 
 /** The exact profile's slope dP/dx at x, per square metre: no quadrature beyond the detector width's. */
 export function exactProfileSlope(x: number, members: readonly RefineMember[], law: SpeedLaw, image: SlitImage): number {
-  const a = image.boxAM;
-  const b = image.boxBM;
-  const w = image.detectorM;
-  let total = 0;
-  for (const m of members) {
-    let sum = 0;
-    for (const s of [-1, 1]) {
-      for (const t of [-1, 1]) {
-        const c = x + (s * a) / 2 + (t * b) / 2;
-        sum += s * t * (w > 0 ? cumulativeIntegral(c - w / 2, c + w / 2, m.k, law) / w : cumulative(c, m.k, law));
-      }
-    }
-    total += (m.weight * sum) / (a * b);
-  }
-  return total;
+  return boxSum(x, members, law, image, cumulative, cumulativeIntegral);
 }
 
 /** The exact (unbinned) profile of the members at x, per metre, weights as given. */
 export function exactProfile(x: number, members: readonly RefineMember[], law: SpeedLaw, image: SlitImage): number {
-  const a = image.boxAM;
-  const b = image.boxBM;
-  const w = image.detectorM;
-  let total = 0;
-  for (const m of members) {
-    let sum = 0;
-    for (const s of [-1, 1]) {
-      for (const t of [-1, 1]) {
-        const c = x + (s * a) / 2 + (t * b) / 2;
-        sum += s * t * (w > 0 ? integral(c - w / 2, c + w / 2, m.k, law) / w : antiderivative(c, m.k, law));
-      }
-    }
-    total += (m.weight * sum) / (a * b);
-  }
-  return total;
+  return boxSum(x, members, law, image, antiderivative, integral);
 }
 
 /**
