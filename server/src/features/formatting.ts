@@ -120,9 +120,9 @@ export function formatting(analysis: Analysis, range?: Range): TextEdit[] {
   const lineCount = doc.lineStarts.length;
   const scanned = Array.from({ length: lineCount }, (_, n) => scan(doc, n));
   const indents = indentation(analysis, scanned);
-  // The language service makes a client's range sound (service/requestPositions.ts); the bound
-  // only keeps a direct caller's range past the end from reading past the scanned lines.
-  const from = range ? range.start.line : 0;
+  // The language service makes a client's range sound (service/requestPositions.ts); the bounds
+  // only keep a direct caller's range outside the text from reading outside the scanned lines.
+  const from = range ? Math.max(0, range.start.line) : 0;
   const to = range ? Math.min(lineCount - 1, range.end.line) : lineCount - 1;
   const out: TextEdit[] = [];
   for (let n = from; n <= to; n++) lineEdits(n, scanned[n]!, Math.max(0, indents[n]!), emptyingMergesBreaks(doc, n), out);
